@@ -1,0 +1,18 @@
+import type { Kysely } from 'kysely';
+import type pg from 'pg';
+import type { Config } from './config';
+import type { Database } from './db/schema';
+import type { RouteTable } from './lib/api-route';
+import type { Mailer } from './mail/mailer';
+import type { SmtpFake } from './fakes/smtp-fake';
+
+/** What feature routes are given; built once in createApp. */
+export interface AppDeps {
+  table: RouteTable;
+  db: Kysely<Database>;
+  pool: pg.Pool;
+  config: Config;
+  mailer: Mailer;
+  /** Present when hosted services are replaced by local fakes (demo, dev, test). */
+  smtpFake: SmtpFake | null;
+}

@@ -1,0 +1,71 @@
+import path from 'node:path';
+import { existsSync } from 'node:fs';
+import { fileURLToPath } from 'node:url';
+import express, { Router } from 'express';
+import helmet from 'helmet';
+import cookieParser from 'cookie-parser';
+import { OpenAPIRegistry, OpenApiGeneratorV3 } from '@asteasolutions/zod-to-openapi';
+import type { AppDeps } from './app-deps';
+import type { RouteTable } from './lib/api-route';
+import { apiNotFound, errorHandler } from './lib/error-handler';
+import { installSessions } from './auth/sessions';
+import { installCsrf } from './auth/csrf';
+import { registerHealthRoutes } from './features/health/health.routes';
+import { registerSessionRoutes } from './features/session/session.routes';
+import { registerPasswordResetRoutes } from './features/password-reset/password-reset.routes';
+import { registerSalonRoutes } from './features/salon/salon.routes';
+import { registerBookingRoutes } from './features/bookings/bookings.routes';
+import { registerClientRoutes } from './features/clients/clients.routes';
+import { registerMailboxRoutes } from './features/mailbox/mailbox.routes';
+import { registerOwnerRoutes } from './features/owner/owner.routes';
+
+const clientDist = path.join(path.dirname(fileURLToPath(import.meta.url)), '..', 'dist', 'client');
+
+/** Builds the Express app without listening, so tests mount it in-process. */
+export function createApp(deps: Omit<AppDeps, 'table'>) {
+  const app = express();
+  app.disable('x-powered-by');
+  app.set('trust proxy', 'loopback');
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: { 'script-src': ["'self'"], 'style-src': ["'self'", "'unsafe-inline'"], 'img-src': ["'self'", 'data:', 'blob:'] },
+      },
+      strictTransportSecurity: deps.config.secureCookies,
+    }),
+  );
+  app.use('/api', express.json({ limit: '100kb', strict: true }));
+  app.use(cookieParser());
+  installSessions(app, deps);
+
+  const table: RouteTable = { router: Router(), registry: new OpenAPIRegistry(), records: [] };
+  installCsrf(app, deps.config, table);
+  const full: AppDeps = { ...deps, table };
+  for (const register of [
+    registerHealthRoutes,
+    registerSessionRoutes,
+    registerPasswordResetRoutes,
+    registerSalonRoutes,
+    registerBookingRoutes,
+    registerClientRoutes,
+    registerOwnerRoutes,
+    registerMailboxRoutes,
+  ]) {
+    register(full);
+  }
+  const openapi = new OpenApiGeneratorV3(table.registry.definitions).generateDocument({
+    openapi: '3.0.3',
+    info: { title: 'Dwell API', version: '1' },
+  });
+  table.router.get('/api/openapi.json', (_req, res) => void res.json(openapi));
+  app.use(table.router);
+  app.use('/api', apiNotFound);
+
+  if (existsSync(clientDist)) {
+    app.use(express.static(clientDist, { index: false, maxAge: '1h' }));
+    // Client-side routes: every other GET answers the app shell.
+    app.get('/{*splat}', (_req, res) => res.sendFile(path.join(clientDist, 'index.html')));
+  }
+  app.use(errorHandler);
+  return Object.assign(app, { routes: table.records });
+}

@@ -1,0 +1,50 @@
+import { randomBytes } from 'node:crypto';
+import { z } from 'zod';
+
+const ConfigSchema = z.object({
+  DATABASE_URL: z.string().min(1),
+  PORT: z.coerce.number().int().min(0).max(65535).default(3000),
+  HOST: z.string().default('127.0.0.1'),
+  /** demo: the demo salon and fakes; dev: fakes; test: fakes, no request logging; production: real services. */
+  DWELL_MODE: z.enum(['demo', 'dev', 'test', 'production']).default('dev'),
+  SESSION_SECRET: z.string().min(32).optional(),
+  PUBLIC_URL: z.string().url().optional(),
+  SMTP_URL: z.string().optional(),
+  MAIL_FROM: z.string().default('Dwell <no-reply@dwell.test>'),
+});
+
+export interface Config {
+  databaseUrl: string;
+  port: number;
+  host: string;
+  mode: 'demo' | 'dev' | 'test' | 'production';
+  sessionSecret: string;
+  /** Cookies carry Secure everywhere but local development over plain http. */
+  secureCookies: boolean;
+  publicUrl: string | null;
+  smtpUrl: string | null;
+  mailFrom: string;
+  /** Hosted services are replaced by in-process fakes. */
+  useFakes: boolean;
+}
+
+/** Parsed once at boot, so a bad environment fails at start-up, not at the first request. */
+export function loadConfig(env: Record<string, string | undefined> = process.env): Config {
+  const parsed = ConfigSchema.parse(env);
+  if (parsed.DWELL_MODE === 'production' && !parsed.SESSION_SECRET) {
+    throw new Error('SESSION_SECRET (32+ characters) is required in production');
+  }
+  return {
+    databaseUrl: parsed.DATABASE_URL,
+    port: parsed.PORT,
+    host: parsed.HOST,
+    mode: parsed.DWELL_MODE,
+    // Outside production a fresh secret per process is fine: sessions of a restarted dev server just end.
+    sessionSecret: parsed.SESSION_SECRET ?? randomBytes(32).toString('hex'),
+    secureCookies: parsed.DWELL_MODE === 'production',
+    publicUrl: parsed.PUBLIC_URL ?? null,
+    smtpUrl: parsed.SMTP_URL ?? null,
+    mailFrom: parsed.MAIL_FROM,
+    useFakes: parsed.DWELL_MODE !== 'production',
+  };
+}

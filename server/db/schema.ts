@@ -1,0 +1,192 @@
+// The typed shape of the database, kept in step with migrations/. Row types stay inside repositories.
+import type { ColumnType, Generated } from 'kysely';
+
+type Timestamp = ColumnType<Date, Date | string, Date | string>;
+/** A timestamp the database fills in when the insert leaves it out. */
+type DefaultTimestamp = ColumnType<Date, Date | string | undefined, Date | string>;
+/** tstzrange as PostgreSQL prints it, e.g. `["2027-03-02 17:00:00+00","2027-03-02 17:45:00+00")`. */
+type Range = string;
+type Json<T = unknown> = ColumnType<T, string, string>;
+
+export interface SalonsTable {
+  id: Generated<string>;
+  slug: string;
+  name: string;
+  time_zone: string;
+  currency: string;
+  address: Generated<string>;
+  phone: Generated<string>;
+  skin_test_lead_hours: Generated<number>;
+  skin_test_validity_days: Generated<number>;
+  hold_minutes: Generated<number>;
+  granularity_minutes: Generated<number>;
+  created_at: DefaultTimestamp;
+}
+
+export interface RecurringHoursTable {
+  id: Generated<string>;
+  rrule: string;
+  start_time: string;
+  end_time: string;
+}
+export interface SalonHoursTable extends RecurringHoursTable {
+  salon_id: string;
+}
+export interface StaffHoursTable extends RecurringHoursTable {
+  staff_id: string;
+}
+
+export interface UsersTable {
+  id: Generated<string>;
+  salon_id: string;
+  email: string;
+  name: string;
+  phone: string | null;
+  role: 'client' | 'front_desk' | 'stylist' | 'owner';
+  password_hash: string;
+  active: Generated<boolean>;
+  password_changed_at: DefaultTimestamp;
+  created_at: DefaultTimestamp;
+}
+
+export interface PasswordResetsTable {
+  id: Generated<string>;
+  user_id: string;
+  token_hash: string;
+  expires_at: Timestamp;
+  used_at: Timestamp | null;
+}
+
+export interface SignInAttemptsTable {
+  id: Generated<string>;
+  email: string;
+  ip: string;
+  succeeded: boolean;
+  at: DefaultTimestamp;
+}
+
+export interface StaffTable {
+  id: Generated<string>;
+  salon_id: string;
+  user_id: string | null;
+  display_name: string;
+  skills: string[];
+  max_clients_at_once: Generated<number>;
+  active: Generated<boolean>;
+}
+
+export interface TimeOffTable {
+  id: Generated<string>;
+  staff_id: string;
+  during: Range;
+  reason: Generated<string>;
+}
+
+export interface ChairsTable {
+  id: Generated<string>;
+  salon_id: string;
+  name: string;
+  active: Generated<boolean>;
+}
+export type BasinsTable = ChairsTable;
+
+export interface ServicesTable {
+  id: Generated<string>;
+  salon_id: string;
+  name: string;
+  description: Generated<string>;
+  category: 'consultation' | 'skin_test' | 'colour' | 'cut' | 'treatment';
+  skill: string;
+  price_cents: number;
+  price_is_from: Generated<boolean>;
+  online_bookable: Generated<boolean>;
+  needs_skin_test: Generated<boolean>;
+  step_plan: Json;
+  active: Generated<boolean>;
+}
+
+export interface ClientsTable {
+  id: Generated<string>;
+  salon_id: string;
+  user_id: string | null;
+  name: string;
+  email: string | null;
+  phone: string | null;
+  notes: Generated<string>;
+  created_at: DefaultTimestamp;
+}
+
+export interface BookingsTable {
+  id: Generated<string>;
+  salon_id: string;
+  client_id: string;
+  service_id: string;
+  stylist_id: string;
+  status: 'held' | 'booked' | 'checked_in' | 'finished' | 'cancelled' | 'no_show';
+  step_plan: Json;
+  price_cents: Generated<number>;
+  deposit_cents: Generated<number>;
+  held_until: Timestamp | null;
+  cancel_reason: string | null;
+  created_by: string | null;
+  created_at: DefaultTimestamp;
+}
+
+export interface SittingsTable {
+  id: Generated<string>;
+  booking_id: string;
+  seq: number;
+  chair_id: string;
+  during: Range;
+  live: Generated<boolean>;
+}
+
+export interface BookingStepsTable {
+  id: Generated<string>;
+  sitting_id: string;
+  seq: number;
+  kind: 'hands_on' | 'developing' | 'basin';
+  label: Generated<string>;
+  stylist_id: string;
+  basin_id: string | null;
+  during: Range;
+  live: Generated<boolean>;
+}
+
+export interface AuditLogTable {
+  id: Generated<string>;
+  salon_id: string;
+  actor_user_id: string | null;
+  entity: string;
+  entity_id: string;
+  action: string;
+  before: Json | null;
+  after: Json | null;
+  at: DefaultTimestamp;
+}
+
+export interface SessionTable {
+  sid: string;
+  sess: unknown;
+  expire: Date;
+}
+
+export interface Database {
+  session: SessionTable;
+  salons: SalonsTable;
+  salon_hours: SalonHoursTable;
+  users: UsersTable;
+  password_resets: PasswordResetsTable;
+  sign_in_attempts: SignInAttemptsTable;
+  staff: StaffTable;
+  staff_hours: StaffHoursTable;
+  time_off: TimeOffTable;
+  chairs: ChairsTable;
+  basins: BasinsTable;
+  services: ServicesTable;
+  clients: ClientsTable;
+  bookings: BookingsTable;
+  sittings: SittingsTable;
+  booking_steps: BookingStepsTable;
+  audit_log: AuditLogTable;
+}

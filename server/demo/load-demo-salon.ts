@@ -1,0 +1,154 @@
+import { sql } from 'kysely';
+import { DateTime } from 'luxon';
+import type { Db } from '../db/database';
+import type { Kysely } from 'kysely';
+import type { Database } from '../db/schema';
+import type { BookingStatus } from '../../shared/schemas/common.schemas';
+import { hashPassword } from '../auth/password';
+import { insertBooking, tstzRange, type NewStep } from '../features/bookings/bookings.repository';
+import { DEMO_PASSWORD, demoClientNames, demoSalon, demoServices, demoStaff, type ServiceKey, type StylistKey } from './demo-catalogue';
+import { correctionDayOne, correctionDayTwo, ordinaryDay, type Placement } from './demo-day-patterns';
+
+export async function isDatabaseEmpty(db: Db): Promise<boolean> {
+  const row = await db.selectFrom('salons').select(sql<number>`count(*)::int`.as('n')).executeTakeFirstOrThrow();
+  return row.n === 0;
+}
+
+interface Ids {
+  salonId: string;
+  deskUserId: string;
+  stylists: Record<StylistKey, string>;
+  chairs: string[];
+  basins: string[];
+  services: Record<ServiceKey, string>;
+  clients: string[];
+}
+
+/** Loads the demo salon with two weeks of bookings around `now` (one transaction: all or nothing). */
+export async function loadDemoSalon(db: Kysely<Database>, now: Date): Promise<{ bookings: number }> {
+  const passwordHash = await hashPassword(DEMO_PASSWORD);
+  return db.transaction().execute(async (trx) => {
+    const ids = await insertSalonAndPeople(trx, passwordHash);
+    const bookings = await insertDemoBook(trx, ids, now);
+    return { bookings };
+  });
+}
+
+async function insertSalonAndPeople(db: Db, passwordHash: string): Promise<Ids> {
+  const { hours, chairs, basins, ...salon } = demoSalon;
+  const { id: salonId } = await db
+    .insertInto('salons')
+    .values({ slug: salon.slug, name: salon.name, time_zone: salon.timeZone, currency: salon.currency, address: salon.address, phone: salon.phone })
+    .returning('id')
+    .executeTakeFirstOrThrow();
+  await db.insertInto('salon_hours').values(hours.map((h) => ({ salon_id: salonId, rrule: h.rrule, start_time: h.start, end_time: h.end }))).execute();
+  const user = (p: { email: string; name: string; role: 'owner' | 'front_desk' | 'stylist' | 'client' }) =>
+    db.insertInto('users').values({ salon_id: salonId, email: p.email, name: p.name, role: p.role, phone: null, password_hash: passwordHash }).returning('id').executeTakeFirstOrThrow();
+  await user(demoStaff.owner);
+  const desk = await user(demoStaff.desk);
+  const stylists = {} as Record<StylistKey, string>;
+  for (const [key, s] of Object.entries(demoStaff.stylists) as [StylistKey, (typeof demoStaff.stylists)[StylistKey]][]) {
+    const u = await user({ ...s, role: 'stylist' });
+    const row = await db
+      .insertInto('staff')
+      .values({ salon_id: salonId, user_id: u.id, display_name: s.name, skills: s.skills, max_clients_at_once: s.maxClientsAtOnce })
+      .returning('id')
+      .executeTakeFirstOrThrow();
+    await db.insertInto('staff_hours').values({ staff_id: row.id, rrule: s.hours.rrule, start_time: s.hours.start, end_time: s.hours.end }).execute();
+    stylists[key] = row.id;
+  }
+  const chairIds = await insertNamed(db, 'chairs', salonId, chairs);
+  const basinIds = await insertNamed(db, 'basins', salonId, basins);
+  const services = {} as Record<ServiceKey, string>;
+  for (const [key, s] of Object.entries(demoServices) as [ServiceKey, (typeof demoServices)[ServiceKey]][]) {
+    const row = await db
+      .insertInto('services')
+      .values({
+        salon_id: salonId, name: s.name, description: s.description, category: s.category, skill: s.skill, price_cents: s.priceCents,
+        price_is_from: s.priceIsFrom ?? false, online_bookable: s.onlineBookable ?? false, needs_skin_test: s.needsSkinTest ?? false,
+        step_plan: JSON.stringify(s.plan),
+      })
+      .returning('id')
+      .executeTakeFirstOrThrow();
+    services[key] = row.id;
+  }
+  const clients: string[] = [];
+  for (const [i, name] of demoClientNames.entries()) {
+    const handle = name.toLowerCase().replace(/[^a-z]+/g, '.');
+    const clientUser = i === 0 ? await user({ email: 'client@demo.test', name, role: 'client' }) : null;
+    const row = await db
+      .insertInto('clients')
+      .values({ salon_id: salonId, user_id: clientUser?.id ?? null, name, email: i === 0 ? 'client@demo.test' : `${handle}@example.com`, phone: `+1970555${String(1000 + i * 37).slice(-4)}` })
+      .returning('id')
+      .executeTakeFirstOrThrow();
+    clients.push(row.id);
+  }
+  return { salonId, deskUserId: desk.id, stylists, chairs: chairIds, basins: basinIds, services, clients };
+}
+
+async function insertNamed(db: Db, table: 'chairs' | 'basins', salonId: string, names: string[]): Promise<string[]> {
+  const rows = await db.insertInto(table).values(names.map((name) => ({ salon_id: salonId, name }))).returning(['id', 'name']).execute();
+  return names.map((n) => rows.find((r) => r.name === n)!.id);
+}
+
+/** Bookings on every open day from 7 days before to 7 days after today, the correction around today. */
+async function insertDemoBook(db: Db, ids: Ids, now: Date): Promise<number> {
+  const zone = demoSalon.timeZone;
+  const today = DateTime.fromJSDate(now, { zone }).startOf('day');
+  const openDays = [...Array(15).keys()].map((i) => today.plus({ days: i - 7 })).filter((d) => d.weekday >= 2 && d.weekday <= 6);
+  const firstFuture = openDays.findIndex((d) => d >= today);
+  const correctionDays = [openDays[Math.max(0, firstFuture - 1)], openDays[Math.max(0, firstFuture - 1) + 2]];
+  const marcusOff = openDays[openDays.length - 2];
+  await db.insertInto('time_off').values({ staff_id: ids.stylists.marcus, during: tstzRange(marcusOff.toJSDate(), marcusOff.plus({ days: 1 }).toJSDate()), reason: 'Training day' }).execute();
+
+  let count = 0;
+  let clientTurn = 1; // client 0 (the demo client account) has the correction
+  for (const [dayIndex, day] of openDays.entries()) {
+    const pattern = day.equals(correctionDays[0]) ? correctionDayOne : day.equals(correctionDays[1]) ? correctionDayTwo : ordinaryDay;
+    for (const [i, p] of pattern.entries()) {
+      if (p.service === 'correction' && p.sitting === 1) continue; // stored with sitting 1
+      if (p.stylist === 'lee' && day.weekday === 2) continue; // Lee does not work Tuesdays
+      if (p.stylist === 'marcus' && day.equals(marcusOff)) continue;
+      if (!p.core && (dayIndex * 7 + i * 3) % 5 === 0) continue; // leave some gaps so days differ
+      const clientId = p.service === 'correction' ? ids.clients[0] : ids.clients[1 + (clientTurn++ % (ids.clients.length - 1))];
+      const sittings = [{ day, placement: p }];
+      if (p.service === 'correction') sittings.push({ day: correctionDays[1], placement: correctionDayTwo[0] });
+      const end = localTime(sittings[sittings.length - 1].day, p.start);
+      const status = statusFor(end, now, count);
+      const service = demoServices[p.service];
+      await insertBooking(db, {
+        salonId: ids.salonId, clientId, serviceId: ids.services[p.service], stylistId: ids.stylists[p.stylist], status,
+        stepPlan: service.plan, priceCents: service.priceCents, depositCents: p.service === 'correction' ? 17000 : 0,
+        createdBy: ids.deskUserId, cancelReason: status === 'cancelled' ? 'Client asked to cancel (moving house)' : undefined,
+        sittings: sittings.map((s) => ({ chairId: ids.chairs[s.placement.chair], steps: placeSteps(s.day, s.placement, ids) })),
+      });
+      count++;
+    }
+  }
+  return count;
+}
+
+function localTime(day: DateTime, hhmm: string): DateTime {
+  const [hour, minute] = hhmm.split(':').map(Number);
+  return day.set({ hour, minute });
+}
+
+/** Walks the service's steps from the start time; developing steps take the placement's minutes. */
+function placeSteps(day: DateTime, p: Placement, ids: Ids): NewStep[] {
+  const steps = demoServices[p.service].plan.sittings[p.sitting ?? 0].steps;
+  let at = localTime(day, p.start);
+  let dev = 0;
+  return steps.map((s) => {
+    const minutes = s.kind === 'developing' ? p.developing[dev++] : s.minutes;
+    const start = at;
+    at = at.plus({ minutes });
+    return { kind: s.kind, label: s.label, start: start.toJSDate(), end: at.toJSDate(), basinId: s.kind === 'basin' ? ids.basins[p.basin] : null };
+  });
+}
+
+/** Past work is finished (an occasional no-show), today's started work is checked in, the rest booked. */
+function statusFor(start: DateTime, now: Date, n: number): BookingStatus {
+  const inPast = start.toJSDate() < now;
+  if (inPast) return n % 23 === 5 ? 'no_show' : start.hasSame(DateTime.fromJSDate(now, { zone: start.zone }), 'day') ? 'checked_in' : 'finished';
+  return n % 29 === 11 ? 'cancelled' : 'booked';
+}

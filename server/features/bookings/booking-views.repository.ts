@@ -1,0 +1,90 @@
+import { sql } from 'kysely';
+import { DateTime } from 'luxon';
+import type { Db } from '../../db/database';
+import type { BookingView } from '../../../shared/schemas/booking-view.schemas';
+import type { BookingStatus } from '../../../shared/schemas/common.schemas';
+
+export interface BookingFilter {
+  salonId: string;
+  /** Bookings with a sitting overlapping [from, to). */
+  from?: Date;
+  to?: Date;
+  stylistId?: string;
+  clientId?: string;
+  bookingId?: string;
+  statuses?: BookingStatus[];
+}
+
+const LIVE: BookingStatus[] = ['held', 'booked', 'checked_in', 'finished', 'no_show'];
+
+/** Bookings with all their sittings and steps, times as ISO 8601 in the salon's zone. */
+export async function loadBookingViews(db: Db, filter: BookingFilter, timeZone: string): Promise<BookingView[]> {
+  let query = db
+    .selectFrom('bookings as b')
+    .innerJoin('clients as c', 'c.id', 'b.client_id')
+    .innerJoin('services as s', 's.id', 'b.service_id')
+    .innerJoin('staff as st', 'st.id', 'b.stylist_id')
+    .select(['b.id', 'b.status', 'b.price_cents', 'b.deposit_cents', 'c.id as clientId', 'c.name as clientName', 's.id as serviceId', 's.name as serviceName', 'st.id as stylistId', 'st.display_name as stylistName'])
+    .where('b.salon_id', '=', filter.salonId)
+    .where('b.status', 'in', filter.statuses ?? LIVE);
+  if (filter.stylistId) query = query.where('b.stylist_id', '=', filter.stylistId);
+  if (filter.clientId) query = query.where('b.client_id', '=', filter.clientId);
+  if (filter.bookingId) query = query.where('b.id', '=', filter.bookingId);
+  if (filter.from && filter.to) {
+    const range = sql`tstzrange(${filter.from}, ${filter.to}, '[)')`;
+    query = query.where(({ exists, selectFrom }) =>
+      exists(selectFrom('sittings as x').select('x.id').whereRef('x.booking_id', '=', 'b.id').where(sql<boolean>`x.during && ${range}`)),
+    );
+  }
+  const bookings = await query.execute();
+  if (!bookings.length) return [];
+  const ids = bookings.map((b) => b.id);
+  const [sittings, steps] = await Promise.all([loadSittings(db, ids), loadSteps(db, ids)]);
+  const iso = (d: Date) => DateTime.fromJSDate(d, { zone: timeZone }).toISO({ suppressMilliseconds: true })!;
+  const views = bookings.map((b): BookingView => {
+    const own = sittings.filter((s) => s.booking_id === b.id);
+    return {
+      id: b.id,
+      status: b.status,
+      client: { id: b.clientId, name: b.clientName },
+      service: { id: b.serviceId, name: b.serviceName },
+      stylist: { id: b.stylistId, name: b.stylistName },
+      priceCents: b.price_cents,
+      depositCents: b.deposit_cents,
+      sittings: own.map((s) => ({
+        seq: s.seq,
+        of: own.length,
+        chairId: s.chair_id,
+        chairName: s.chairName,
+        start: iso(s.start),
+        end: iso(s.end),
+        steps: steps
+          .filter((st) => st.sitting_id === s.id)
+          .map((st) => ({ kind: st.kind, label: st.label, start: iso(st.start), end: iso(st.end), basinName: st.basinName })),
+      })),
+    };
+  });
+  return views.sort((a, b) => a.sittings[0].start.localeCompare(b.sittings[0].start));
+}
+
+function loadSittings(db: Db, bookingIds: string[]) {
+  return db
+    .selectFrom('sittings as s')
+    .innerJoin('chairs as ch', 'ch.id', 's.chair_id')
+    .select(['s.id', 's.booking_id', 's.seq', 's.chair_id', 'ch.name as chairName', sql<Date>`lower(s.during)`.as('start'), sql<Date>`upper(s.during)`.as('end')])
+    .where('s.booking_id', 'in', bookingIds)
+    .orderBy('s.seq')
+    .execute();
+}
+
+function loadSteps(db: Db, bookingIds: string[]) {
+  return db
+    .selectFrom('booking_steps as st')
+    .innerJoin('sittings as s', 's.id', 'st.sitting_id')
+    .leftJoin('basins as bs', 'bs.id', 'st.basin_id')
+    .select(['st.sitting_id', 'st.kind', 'st.label', 'bs.name as basinName', sql<Date>`lower(st.during)`.as('start'), sql<Date>`upper(st.during)`.as('end')])
+    .where('s.booking_id', 'in', bookingIds)
+    .orderBy('st.sitting_id')
+    .orderBy('st.seq')
+    .execute();
+}

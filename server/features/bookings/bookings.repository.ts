@@ -1,0 +1,78 @@
+import type { Db } from '../../db/database';
+import type { BookingStatus, StepKind } from '../../../shared/schemas/common.schemas';
+import type { StepPlan } from '../../../shared/schemas/step-plan.schemas';
+
+export interface NewStep {
+  kind: StepKind;
+  label: string;
+  start: Date;
+  end: Date;
+  basinId: string | null;
+}
+
+export interface NewBooking {
+  salonId: string;
+  clientId: string;
+  serviceId: string;
+  stylistId: string;
+  status: BookingStatus;
+  stepPlan: StepPlan;
+  priceCents: number;
+  depositCents: number;
+  createdBy: string | null;
+  cancelReason?: string;
+  sittings: { chairId: string; steps: NewStep[] }[];
+}
+
+/** `[start,end)` as a PostgreSQL tstzrange literal. */
+export const tstzRange = (start: Date, end: Date) => `[${start.toISOString()},${end.toISOString()})`;
+
+/**
+ * Inserts a booking with its sittings and steps. Overlapping use of a chair, basin or stylist's hands
+ * fails here with SQLSTATE 23P01 (the exclusion constraints); callers run it inside a transaction.
+ */
+export async function insertBooking(db: Db, booking: NewBooking): Promise<string> {
+  const live = booking.status !== 'cancelled';
+  const { id } = await db
+    .insertInto('bookings')
+    .values({
+      salon_id: booking.salonId,
+      client_id: booking.clientId,
+      service_id: booking.serviceId,
+      stylist_id: booking.stylistId,
+      status: booking.status,
+      step_plan: JSON.stringify(booking.stepPlan),
+      price_cents: booking.priceCents,
+      deposit_cents: booking.depositCents,
+      held_until: null,
+      cancel_reason: booking.cancelReason ?? null,
+      created_by: booking.createdBy,
+    })
+    .returning('id')
+    .executeTakeFirstOrThrow();
+  for (const [i, sitting] of booking.sittings.entries()) {
+    const first = sitting.steps[0].start;
+    const last = sitting.steps[sitting.steps.length - 1].end;
+    const row = await db
+      .insertInto('sittings')
+      .values({ booking_id: id, seq: i + 1, chair_id: sitting.chairId, during: tstzRange(first, last), live })
+      .returning('id')
+      .executeTakeFirstOrThrow();
+    await db
+      .insertInto('booking_steps')
+      .values(
+        sitting.steps.map((s, j) => ({
+          sitting_id: row.id,
+          seq: j + 1,
+          kind: s.kind,
+          label: s.label,
+          stylist_id: booking.stylistId,
+          basin_id: s.basinId,
+          during: tstzRange(s.start, s.end),
+          live,
+        })),
+      )
+      .execute();
+  }
+  return id;
+}

@@ -1,0 +1,59 @@
+import { apiPaths } from '../../../shared/api/api-paths';
+import { BookingViewSchema, DayQuerySchema, DayViewSchema, MyBookingsSchema } from '../../../shared/schemas/booking-view.schemas';
+import { BookingStatusSchema, IdParamsSchema } from '../../../shared/schemas/common.schemas';
+import type { AppDeps } from '../../app-deps';
+import { DESK } from '../../auth/require-access';
+import { apiRoute } from '../../lib/api-route';
+import { notFound } from '../../lib/app-error';
+import { findSalon } from '../salon/salon.repository';
+import { findClientIdForUser } from '../clients/clients.repository';
+import { findStaffIdForUser } from './salon-resources.repository';
+import { loadBookingViews } from './booking-views.repository';
+import { deskDay, stylistDay } from './day-view.service';
+
+export function registerBookingRoutes({ table, db }: AppDeps): void {
+  apiRoute(
+    table,
+    { method: 'get', path: apiPaths.deskDay, access: DESK, summary: "The salon's book for one day", query: DayQuerySchema, response: DayViewSchema },
+    async ({ user, query }) => deskDay(db, await findSalon(db, user.salonId), query.date),
+  );
+  apiRoute(
+    table,
+    { method: 'get', path: apiPaths.stylistDay, access: ['stylist'], summary: "The signed-in stylist's day", query: DayQuerySchema, response: DayViewSchema },
+    async ({ user, query }) => stylistDay(db, await findSalon(db, user.salonId), user.id, query.date),
+  );
+  apiRoute(
+    table,
+    { method: 'get', path: apiPaths.myBookings, access: ['client'], summary: "The signed-in client's bookings", response: MyBookingsSchema },
+    async ({ user }) => {
+      const salon = await findSalon(db, user.salonId);
+      const clientId = await findClientIdForUser(db, user.id);
+      const bookings = clientId
+        ? await loadBookingViews(db, { salonId: salon.id, clientId, statuses: BookingStatusSchema.options }, salon.timeZone)
+        : [];
+      return { timeZone: salon.timeZone, bookings };
+    },
+  );
+  apiRoute(
+    table,
+    { method: 'get', path: '/api/bookings/:id', access: 'signed_in', summary: 'One booking (staff of its salon, or its own client)', params: IdParamsSchema, response: BookingViewSchema },
+    async ({ user, params }) => {
+      const salon = await findSalon(db, user.salonId);
+      // A client may only see their own bookings; a stylist only the ones they work on. Anything else is
+      // answered exactly like a booking that does not exist, so ids cannot be probed.
+      const scope =
+        user.role === 'client'
+          ? { clientId: (await findClientIdForUser(db, user.id)) ?? '00000000-0000-0000-0000-000000000000' }
+          : user.role === 'stylist'
+            ? { stylistId: (await findStaffIdForUser(db, user.id)) ?? '00000000-0000-0000-0000-000000000000' }
+            : {};
+      const [booking] = await loadBookingViews(
+        db,
+        { salonId: salon.id, bookingId: params.id, statuses: BookingStatusSchema.options, ...scope },
+        salon.timeZone,
+      );
+      if (!booking) throw notFound('That booking');
+      return booking;
+    },
+  );
+}

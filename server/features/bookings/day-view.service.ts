@@ -1,0 +1,42 @@
+import { DateTime } from 'luxon';
+import type { Db } from '../../db/database';
+import type { DayView } from '../../../shared/schemas/booking-view.schemas';
+import type { Salon } from '../../../shared/schemas/salon.schemas';
+import { AppError } from '../../lib/app-error';
+import { loadBookingViews } from './booking-views.repository';
+import { listChairs, listStylists, findStaffIdForUser } from './salon-resources.repository';
+
+/** [start, end) of a local date in the salon's zone: 23, 24 or 25 real hours. */
+export function localDayBounds(date: string, timeZone: string): { from: Date; to: Date } {
+  const start = DateTime.fromISO(date, { zone: timeZone }).startOf('day');
+  if (!start.isValid) throw new AppError('VALIDATION_FAILED', 400, 'Some fields need attention.', { date: 'Not a calendar date.' });
+  return { from: start.toJSDate(), to: start.plus({ days: 1 }).toJSDate() };
+}
+
+export function todayIn(timeZone: string, now = new Date()): string {
+  return DateTime.fromJSDate(now, { zone: timeZone }).toISODate()!;
+}
+
+/** The whole salon's book for one day (front desk and owner). */
+export async function deskDay(db: Db, salon: Salon, date = todayIn(salon.timeZone)): Promise<DayView> {
+  const bounds = localDayBounds(date, salon.timeZone);
+  const [stylists, chairs, bookings] = await Promise.all([
+    listStylists(db, salon.id),
+    listChairs(db, salon.id),
+    loadBookingViews(db, { salonId: salon.id, ...bounds }, salon.timeZone),
+  ]);
+  return { date, timeZone: salon.timeZone, stylists, chairs, bookings };
+}
+
+/** One stylist's own day: only the bookings they work on. */
+export async function stylistDay(db: Db, salon: Salon, userId: string, date = todayIn(salon.timeZone)): Promise<DayView> {
+  const staffId = await findStaffIdForUser(db, userId);
+  if (!staffId) throw new AppError('NOT_FOUND', 404, 'No stylist profile is linked to this account.');
+  const bounds = localDayBounds(date, salon.timeZone);
+  const [stylists, chairs, bookings] = await Promise.all([
+    listStylists(db, salon.id),
+    listChairs(db, salon.id),
+    loadBookingViews(db, { salonId: salon.id, stylistId: staffId, ...bounds }, salon.timeZone),
+  ]);
+  return { date, timeZone: salon.timeZone, stylists: stylists.filter((s) => s.id === staffId), chairs, bookings };
+}

@@ -1,0 +1,33 @@
+import { apiPaths } from '../../../shared/api/api-paths';
+import { ClientDetailSchema, ClientListQuerySchema, ClientListSchema } from '../../../shared/schemas/client.schemas';
+import { BookingStatusSchema, IdParamsSchema } from '../../../shared/schemas/common.schemas';
+import type { AppDeps } from '../../app-deps';
+import { STAFF } from '../../auth/require-access';
+import { apiRoute } from '../../lib/api-route';
+import { notFound } from '../../lib/app-error';
+import { findSalon } from '../salon/salon.repository';
+import { loadBookingViews } from '../bookings/booking-views.repository';
+import { findClient, searchClients } from './clients.repository';
+
+export function registerClientRoutes({ table, db }: AppDeps): void {
+  apiRoute(
+    table,
+    { method: 'get', path: apiPaths.clients, access: STAFF, summary: 'Find clients by name, e-mail or phone', query: ClientListQuerySchema, response: ClientListSchema },
+    async ({ user, query }) => ({ clients: await searchClients(db, user.salonId, query.q) }),
+  );
+  apiRoute(
+    table,
+    { method: 'get', path: '/api/clients/:id', access: STAFF, summary: 'A client card with their bookings', params: IdParamsSchema, response: ClientDetailSchema },
+    async ({ user, params }) => {
+      const client = await findClient(db, user.salonId, params.id);
+      if (!client) throw notFound('That client');
+      const salon = await findSalon(db, user.salonId);
+      const bookings = await loadBookingViews(
+        db,
+        { salonId: salon.id, clientId: client.id, statuses: BookingStatusSchema.options },
+        salon.timeZone,
+      );
+      return { ...client, bookings };
+    },
+  );
+}

@@ -1,0 +1,27 @@
+import type { Db } from '../../db/database';
+import type { Salon } from '../../../shared/schemas/salon.schemas';
+import { AppError } from '../../lib/app-error';
+
+export async function findSalon(db: Db, id: string): Promise<Salon> {
+  const row = await db.selectFrom('salons').selectAll().where('id', '=', id).executeTakeFirstOrThrow();
+  return {
+    id: row.id,
+    name: row.name,
+    slug: row.slug,
+    timeZone: row.time_zone,
+    currency: row.currency,
+    address: row.address,
+    phone: row.phone,
+    skinTestLeadHours: row.skin_test_lead_hours,
+    skinTestValidityDays: row.skin_test_validity_days,
+  };
+}
+
+/** The salon a new client signs up with: the named one, or the only/oldest one on this installation. */
+export async function findSalonIdForSignUp(db: Db, slug: string | undefined): Promise<string> {
+  let query = db.selectFrom('salons').select('id').orderBy('created_at').limit(1);
+  if (slug) query = query.where('slug', '=', slug);
+  const row = await query.executeTakeFirst();
+  if (!row) throw new AppError('NOT_FOUND', 404, 'That salon was not found.');
+  return row.id;
+}

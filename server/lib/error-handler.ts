@@ -1,0 +1,40 @@
+import type { ErrorRequestHandler, RequestHandler } from 'express';
+import { NoResultError } from 'kysely';
+import { ZodError } from 'zod';
+import type { ApiErrorBody } from '../../shared/api/error.schemas';
+import { AppError } from './app-error';
+import { fieldMessages } from './field-messages';
+
+function send(res: Parameters<RequestHandler>[1], status: number, error: ApiErrorBody['error']) {
+  res.status(status).json({ error });
+}
+
+/** Unknown /api routes answer JSON 404, never the client app. */
+export const apiNotFound: RequestHandler = (req, res) =>
+  send(res, 404, { code: 'NOT_FOUND', message: `No API route ${req.method} ${req.originalUrl.split("?")[0]}.` });
+
+// Connection failures (PostgreSQL down or restarting) are reported as 503 so clients retry later.
+const DB_DOWN = new Set(['ECONNREFUSED', 'ECONNRESET', '57P01', '57P03', 'ETIMEDOUT']);
+
+/** Maps every thrown error to the API's one error shape; stacks go to the log only. */
+export const errorHandler: ErrorRequestHandler = (err, _req, res, _next) => {
+  if (res.headersSent) return;
+  if (err instanceof AppError) return send(res, err.status, { code: err.code, message: err.message, fields: err.fields });
+  if (err instanceof ZodError) {
+    return send(res, 400, { code: 'VALIDATION_FAILED', message: 'Some fields need attention.', fields: fieldMessages(err) });
+  }
+  if (err instanceof NoResultError) return send(res, 404, { code: 'NOT_FOUND', message: 'That record was not found.' });
+  if (err?.type === 'entity.parse.failed') return send(res, 400, { code: 'BAD_JSON', message: 'The request body is not valid JSON.' });
+  if (err?.type === 'entity.too.large') return send(res, 413, { code: 'PAYLOAD_TOO_LARGE', message: 'The request body is too large.' });
+  if (err?.type === 'charset.unsupported' || err?.type === 'encoding.unsupported') {
+    return send(res, 415, { code: 'VALIDATION_FAILED', message: 'Send JSON in UTF-8.' });
+  }
+  if (DB_DOWN.has(err?.code) || /Connection terminated|timeout exceeded when trying to connect/i.test(err?.message ?? '')) {
+    return send(res, 503, { code: 'DB_UNAVAILABLE', message: 'The database is not reachable; try again shortly.' });
+  }
+  if (err?.code === 'EBADCSRFTOKEN' || err?.code === 'ERR_BAD_CSRF_TOKEN') {
+    return send(res, 403, { code: 'CSRF', message: 'The form expired; reload and try again.' });
+  }
+  console.error(err);
+  send(res, 500, { code: 'INTERNAL', message: 'Something went wrong on our side.' });
+};

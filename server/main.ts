@@ -1,0 +1,49 @@
+import type { Server } from 'node:http';
+import type { AddressInfo } from 'node:net';
+import { loadConfig, type Config } from './config';
+import { createDb, createPool } from './db/database';
+import { createApp } from './app';
+import { createMailer } from './mail/mailer';
+import { startSmtpFake } from './fakes/smtp-fake';
+
+export interface RunningServer {
+  url: string;
+  app: ReturnType<typeof createApp>;
+  close(): Promise<void>;
+}
+
+/** Starts fakes (outside production), the database pool and the HTTP server; close() undoes all of it. */
+export async function startServer(config: Config = loadConfig()): Promise<RunningServer> {
+  const smtpFake = config.useFakes ? await startSmtpFake() : null;
+  const smtpUrl = smtpFake?.url ?? config.smtpUrl;
+  if (!smtpUrl) throw new Error('SMTP_URL is required in production');
+  const mailer = createMailer(smtpUrl, config.mailFrom);
+  const pool = createPool(config.databaseUrl);
+  const db = createDb(pool);
+  const app = createApp({ db, pool, config, mailer, smtpFake });
+  const server = await listen(app, config);
+  const { port } = server.address() as AddressInfo;
+  return {
+    url: `http://${config.host}:${port}`,
+    app,
+    async close() {
+      const closed = new Promise<void>((resolve) => server.close(() => resolve()));
+      server.closeAllConnections();
+      await closed;
+      mailer.close();
+      await smtpFake?.close();
+      await db.destroy();
+    },
+  };
+}
+
+function listen(app: ReturnType<typeof createApp>, config: Config): Promise<Server> {
+  return new Promise((resolve, reject) => {
+    const server = app.listen(config.port, config.host);
+    server.once('listening', () => resolve(server));
+    server.once('error', (err: NodeJS.ErrnoException) => {
+      if (err.code === 'EADDRINUSE') reject(new Error(`Port ${config.port} on ${config.host} is already in use; set PORT to another port.`));
+      else reject(err);
+    });
+  });
+}

@@ -1,0 +1,74 @@
+// `npm test`: a throwaway PostgreSQL cluster, Chromium, the client build, the type-check and every suite,
+// then one summary line. Exit status is non-zero on any failure; nothing is left running.
+import { spawn } from 'node:child_process';
+import { chmodSync, existsSync, mkdtempSync, readFileSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { prepareLocalDatabase } from './local-database';
+import { databaseUrl, stopCluster, type Cluster } from './postgres-cluster';
+import { findChromium } from './chromium';
+import { buildClientIfStale } from './client-build';
+
+const root = process.cwd();
+const bin = (name: string) => join(root, 'node_modules', '.bin', name);
+
+function run(cmd: string, args: string[], env: NodeJS.ProcessEnv = {}): Promise<number> {
+  return new Promise((resolve) => {
+    const child = spawn(cmd, args, { cwd: root, stdio: 'inherit', env: { ...process.env, ...env } });
+    child.on('exit', (code) => resolve(code ?? 1));
+  });
+}
+
+interface VitestReport {
+  numPassedTests: number;
+  numFailedTests: number;
+  numPendingTests: number;
+  numFailedTestSuites: number;
+}
+
+async function main(): Promise<number> {
+  const started = Date.now();
+  const scratch = mkdtempSync(join(tmpdir(), 'dwell-test-'));
+  chmodSync(scratch, 0o755); // the postgres user must be able to enter it
+  let cluster: Cluster | null = null;
+  const stop = () => {
+    if (cluster) stopCluster(cluster);
+    rmSync(scratch, { recursive: true, force: true });
+  };
+  process.once('SIGINT', () => (stop(), process.exit(130)));
+  process.once('SIGTERM', () => (stop(), process.exit(143)));
+  try {
+    const port = 55000 + Math.floor(Math.random() * 4000);
+    const prepared = await prepareLocalDatabase({ dataRoot: scratch, port, database: 'dwell_template', throwaway: true });
+    cluster = prepared.cluster;
+    const chromium = findChromium();
+    buildClientIfStale(root);
+    const typecheck = process.env.DWELL_SKIP_TYPECHECK ? 0 : await run(bin('tsc'), ['--noEmit', '-p', '.']);
+    const reportFile = join(scratch, 'vitest-report.json');
+    // Extra arguments pass through to Vitest, e.g. `npm test -- --project integration`.
+    const tests = await run(bin('vitest'), ['run', '--reporter=default', '--reporter=json', `--outputFile.json=${reportFile}`, ...process.argv.slice(2)], {
+      DWELL_TEST_TEMPLATE_URL: prepared.url,
+      DWELL_TEST_ADMIN_URL: databaseUrl(cluster, 'postgres'),
+      DWELL_CHROMIUM: chromium,
+      DWELL_MODE: 'test',
+    });
+    const report: VitestReport | null = existsSync(reportFile) ? JSON.parse(readFileSync(reportFile, 'utf8')) : null;
+    const ok = typecheck === 0 && tests === 0;
+    const seconds = Math.round((Date.now() - started) / 1000);
+    console.log(
+      `\ndwell test: ${ok ? 'PASS' : 'FAIL'} — typecheck ${typecheck === 0 ? 'ok' : 'FAILED'}, ` +
+        (report
+          ? `${report.numPassedTests} tests passed, ${report.numFailedTests} failed, ${report.numPendingTests} skipped`
+          : 'tests did not report') +
+        ` in ${seconds}s`,
+    );
+    return ok ? 0 : 1;
+  } catch (err) {
+    console.error(`\ndwell test: FAIL — set-up failed: ${(err as Error).message}`);
+    return 1;
+  } finally {
+    stop();
+  }
+}
+
+process.exit(await main());

@@ -1,0 +1,19 @@
+/** Every error code the API can answer with; clients branch on these, never on message text. */
+export const ERROR_CODES = [
+  'VALIDATION_FAILED',
+  'BAD_JSON',
+  'PAYLOAD_TOO_LARGE',
+  'UNAUTHENTICATED',
+  'INVALID_CREDENTIALS',
+  'FORBIDDEN',
+  'CSRF',
+  'NOT_FOUND',
+  'CONFLICT',
+  'EMAIL_TAKEN',
+  'RESET_TOKEN_INVALID',
+  'RATE_LIMITED',
+  'DB_UNAVAILABLE',
+  'INTERNAL',
+] as const;
+
+export type ErrorCode = (typeof ERROR_CODES)[number];

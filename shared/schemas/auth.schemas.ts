@@ -1,0 +1,44 @@
+import { z } from 'zod';
+import { IdSchema, RoleSchema } from './common.schemas';
+
+export const PASSWORD_MIN_LENGTH = 10;
+
+const EmailSchema = z.string().trim().toLowerCase().pipe(z.email('Enter a valid e-mail address').max(254));
+const PasswordSchema = z
+  .string()
+  .min(PASSWORD_MIN_LENGTH, `Use at least ${PASSWORD_MIN_LENGTH} characters`)
+  .max(200, 'Use at most 200 characters');
+
+export const SignInBodySchema = z.object({ email: EmailSchema, password: z.string().min(1).max(200) }).strict();
+export type SignInBody = z.infer<typeof SignInBodySchema>;
+
+export const SignUpBodySchema = z
+  .object({
+    name: z.string().trim().min(1, 'Enter your name').max(120),
+    email: EmailSchema,
+    // E.164-ish: what SMS reminders need later; spaces and dashes are stripped first.
+    phone: z
+      .string()
+      .transform((s) => s.replace(/[\s\-().]/g, ''))
+      .pipe(z.string().regex(/^\+?[0-9]{7,15}$/, 'Enter a mobile number, e.g. +1 970 555 0142')),
+    password: PasswordSchema,
+    salonSlug: z.string().max(80).optional(),
+  })
+  .strict();
+export type SignUpBody = z.infer<typeof SignUpBodySchema>;
+
+export const PasswordResetRequestSchema = z.object({ email: EmailSchema }).strict();
+export const PasswordResetConfirmSchema = z
+  .object({ token: z.string().min(20).max(200), password: PasswordSchema })
+  .strict();
+
+export const SessionUserSchema = z.object({
+  id: IdSchema,
+  email: z.string(),
+  name: z.string(),
+  role: RoleSchema,
+  salonId: IdSchema,
+});
+export type SessionUser = z.infer<typeof SessionUserSchema>;
+export const SessionResponseSchema = z.object({ user: SessionUserSchema });
+export const CsrfResponseSchema = z.object({ token: z.string() });

@@ -1,0 +1,51 @@
+import { z } from 'zod';
+import { BookingStatusSchema, IdSchema, InstantSchema, LocalDateSchema, StepKindSchema } from './common.schemas';
+
+/** Read models of the book, as the desk, the stylist and the client see them. */
+export const StepViewSchema = z.object({
+  kind: StepKindSchema,
+  label: z.string(),
+  start: InstantSchema,
+  end: InstantSchema,
+  basinName: z.string().nullable(),
+});
+
+export const SittingViewSchema = z.object({
+  seq: z.number().int(),
+  of: z.number().int(),
+  chairId: IdSchema,
+  chairName: z.string(),
+  start: InstantSchema,
+  end: InstantSchema,
+  steps: z.array(StepViewSchema),
+});
+export type SittingView = z.infer<typeof SittingViewSchema>;
+
+export const BookingViewSchema = z.object({
+  id: IdSchema,
+  status: BookingStatusSchema,
+  client: z.object({ id: IdSchema, name: z.string() }),
+  service: z.object({ id: IdSchema, name: z.string() }),
+  stylist: z.object({ id: IdSchema, name: z.string() }),
+  priceCents: z.number().int(),
+  depositCents: z.number().int(),
+  sittings: z.array(SittingViewSchema),
+});
+export type BookingView = z.infer<typeof BookingViewSchema>;
+
+export const StaffSummarySchema = z.object({ id: IdSchema, name: z.string(), skills: z.array(z.string()) });
+export const ChairSummarySchema = z.object({ id: IdSchema, name: z.string() });
+
+/** One day of the salon's book: who works, which chairs exist, and every booking with a sitting that day. */
+export const DayViewSchema = z.object({
+  date: LocalDateSchema,
+  timeZone: z.string(),
+  stylists: z.array(StaffSummarySchema),
+  chairs: z.array(ChairSummarySchema),
+  bookings: z.array(BookingViewSchema),
+});
+export type DayView = z.infer<typeof DayViewSchema>;
+export const DayQuerySchema = z.object({ date: LocalDateSchema.optional() }).strict();
+
+export const MyBookingsSchema = z.object({ timeZone: z.string(), bookings: z.array(BookingViewSchema) });
+export type MyBookings = z.infer<typeof MyBookingsSchema>;

@@ -1,0 +1,19 @@
+import { z } from 'zod';
+import { IdSchema } from './common.schemas';
+import { BookingViewSchema } from './booking-view.schemas';
+
+export const ClientSummarySchema = z.object({
+  id: IdSchema,
+  name: z.string(),
+  email: z.string().nullable(),
+  phone: z.string().nullable(),
+});
+export type ClientSummary = z.infer<typeof ClientSummarySchema>;
+export const ClientListQuerySchema = z.object({ q: z.string().trim().max(100).optional() }).strict();
+export const ClientListSchema = z.object({ clients: z.array(ClientSummarySchema) });
+
+export const ClientDetailSchema = ClientSummarySchema.extend({
+  notes: z.string(),
+  bookings: z.array(BookingViewSchema),
+});
+export type ClientDetail = z.infer<typeof ClientDetailSchema>;

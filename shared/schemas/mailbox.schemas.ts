@@ -1,0 +1,12 @@
+import { z } from 'zod';
+
+/** What the local e-mail fake received (demo and dev mode only). */
+export const CapturedMailSchema = z.object({
+  id: z.number().int(),
+  to: z.string(),
+  subject: z.string(),
+  text: z.string(),
+  receivedAt: z.string(),
+});
+export type CapturedMail = z.infer<typeof CapturedMailSchema>;
+export const MailboxSchema = z.object({ messages: z.array(CapturedMailSchema) });

@@ -1,0 +1,28 @@
+import { useQuery } from '@tanstack/react-query';
+import { Outlet, ScrollRestoration, useNavigation } from 'react-router-dom';
+import { sessionQueries } from '../features/auth/api/session-queries';
+import { SiteHeader } from './site-header';
+import { StaffFooter } from './staff-footer';
+
+/** The frame of every page: skip link, header, main, and the cautions footer for staff. */
+export function RootLayout() {
+  const { data: user } = useQuery(sessionQueries.current());
+  const navigating = useNavigation().state === 'loading';
+  return (
+    <div className="flex min-h-dvh flex-col">
+      <a
+        href="#main"
+        className="sr-only rounded-lg bg-white px-4 py-2 font-bold focus:not-sr-only focus:absolute focus:left-4 focus:top-4 focus:z-50"
+      >
+        Skip to content
+      </a>
+      <div aria-hidden="true" className={`h-1 bg-oxide transition-opacity ${navigating ? 'animate-pulse opacity-100' : 'opacity-0'}`} />
+      <SiteHeader user={user ?? null} />
+      <main id="main" tabIndex={-1} aria-busy={navigating} className="mx-auto w-full max-w-7xl flex-1 px-4 py-6 sm:px-6">
+        <Outlet />
+      </main>
+      {user && user.role !== 'client' && <StaffFooter />}
+      <ScrollRestoration />
+    </div>
+  );
+}

@@ -1,0 +1,75 @@
+import { createBrowserRouter, redirect, type LoaderFunctionArgs, type RouteObject } from 'react-router-dom';
+import type { Role } from '../../shared/schemas/common.schemas';
+import { homeFor, paths } from '../config/paths';
+import { LoadingState } from '../components/ui/loading-state';
+import { currentUser, requireRole } from './require-role';
+import { RootLayout } from './root-layout';
+import { RouteError } from './route-error';
+
+/** What each lazily loaded page module exports. */
+type PageModule = {
+  Component: React.ComponentType;
+  loader?: (args: LoaderFunctionArgs) => Promise<unknown>;
+};
+
+/** A page anyone may open; its code loads only when it is visited. */
+function page(path: string, load: () => Promise<PageModule>): RouteObject {
+  return {
+    path,
+    errorElement: <RouteError />,
+    lazy: async () => {
+      const { Component, loader } = await load();
+      return { Component, loader: loader ?? (() => null) };
+    },
+  };
+}
+
+/** A page for some roles only: the same rule the server applies to the page's API calls. */
+function rolePage(path: string, roles: readonly Role[], load: () => Promise<PageModule>): RouteObject {
+  return {
+    path,
+    errorElement: <RouteError />,
+    lazy: async () => {
+      const { Component, loader } = await load();
+      return {
+        Component,
+        loader: async (args: LoaderFunctionArgs) => {
+          await requireRole(args.request, roles);
+          return loader ? loader(args) : null;
+        },
+      };
+    },
+  };
+}
+
+const routes: RouteObject[] = [
+  {
+    id: 'root',
+    element: <RootLayout />,
+    loader: () => currentUser(),
+    HydrateFallback: () => <LoadingState />,
+    errorElement: <RouteError />,
+    children: [
+      {
+        index: true,
+        loader: async () => {
+          const user = await currentUser();
+          return redirect(user ? homeFor(user.role) : paths.signIn());
+        },
+      },
+      page('sign-in', () => import('./routes/sign-in')),
+      page('sign-up', () => import('./routes/sign-up')),
+      page('forgot-password', () => import('./routes/forgot-password')),
+      page('reset-password', () => import('./routes/reset-password')),
+      rolePage('owner', ['owner'], () => import('./routes/owner-home')),
+      rolePage('desk', ['front_desk', 'owner'], () => import('./routes/desk-home')),
+      rolePage('desk/clients/:id', ['front_desk', 'owner'], () => import('./routes/desk-client')),
+      rolePage('desk/outbox', ['front_desk', 'owner'], () => import('./routes/outbox')),
+      rolePage('stylist', ['stylist'], () => import('./routes/stylist-home')),
+      rolePage('me', ['client'], () => import('./routes/client-home')),
+      page('*', () => import('./routes/not-found')),
+    ],
+  },
+];
+
+export const router = createBrowserRouter(routes);

@@ -1,0 +1,36 @@
+import { useSuspenseQuery } from '@tanstack/react-query';
+import { PageHeader } from '../../components/ui/page-header';
+import { TimeZoneNote } from '../../components/ui/time-zone-note';
+import { bookingQueries } from '../../features/bookings/api/booking-queries';
+import { BookingList } from '../../features/bookings/components/booking-list';
+import { salonQueries } from '../../features/salon/api/salon-queries';
+import { SalonCard } from '../../features/salon/components/salon-card';
+import { queryClient } from '../../lib/query-client';
+
+export async function loader() {
+  await Promise.all([
+    queryClient.ensureQueryData(bookingQueries.mine()),
+    queryClient.ensureQueryData(salonQueries.current()),
+  ]);
+  return null;
+}
+
+export function Component() {
+  const { data: mine } = useSuspenseQuery(bookingQueries.mine());
+  const { data: salon } = useSuspenseQuery(salonQueries.current());
+  return (
+    <div className="grid gap-8 lg:grid-cols-[1fr_20rem]">
+      <div>
+        <PageHeader title="My bookings" subtitle={<TimeZoneNote timeZone={mine.timeZone} />} />
+        <BookingList bookings={mine.bookings} timeZone={mine.timeZone} currency={salon.currency} />
+      </div>
+      <aside aria-label="Your salon" className="flex flex-col gap-4">
+        <SalonCard salon={salon} />
+        <p className="text-sm text-ink/80">
+          Colour services need a skin test at least {salon.skinTestLeadHours} hours before the appointment. Tell the
+          salon about any reaction, allergy or recent colour at home.
+        </p>
+      </aside>
+    </div>
+  );
+}

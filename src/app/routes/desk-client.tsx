@@ -1,0 +1,37 @@
+import { useSuspenseQuery } from '@tanstack/react-query';
+import { Link, useParams, type LoaderFunctionArgs } from 'react-router-dom';
+import { IdSchema } from '../../../shared/schemas/common.schemas';
+import { PageHeader } from '../../components/ui/page-header';
+import { TimeZoneNote } from '../../components/ui/time-zone-note';
+import { paths } from '../../config/paths';
+import { BookingList } from '../../features/bookings/components/booking-list';
+import { clientQueries } from '../../features/clients/api/client-queries';
+import { ClientProfile } from '../../features/clients/components/client-profile';
+import { salonQueries } from '../../features/salon/api/salon-queries';
+import { queryClient } from '../../lib/query-client';
+
+export async function loader({ params }: LoaderFunctionArgs) {
+  // A malformed id can't name a client: show "not found" without asking the server.
+  if (!IdSchema.safeParse(params.id).success) throw new Response(null, { status: 404 });
+  await Promise.all([
+    queryClient.ensureQueryData(clientQueries.detail(params.id!)),
+    queryClient.ensureQueryData(salonQueries.current()),
+  ]);
+  return null;
+}
+
+export function Component() {
+  const { id } = useParams();
+  const { data: client } = useSuspenseQuery(clientQueries.detail(id!));
+  const { data: salon } = useSuspenseQuery(salonQueries.current());
+  return (
+    <div className="flex flex-col gap-6">
+      <Link to={paths.desk()} className="text-link">
+        ← Back to the book
+      </Link>
+      <PageHeader title={client.name} subtitle={<TimeZoneNote timeZone={salon.timeZone} />} />
+      <ClientProfile client={client} />
+      <BookingList bookings={client.bookings} timeZone={salon.timeZone} currency={salon.currency} />
+    </div>
+  );
+}

@@ -1,0 +1,5 @@
+import { NotFoundMessage } from '../not-found-message';
+
+export function Component() {
+  return <NotFoundMessage />;
+}

@@ -1,0 +1,31 @@
+import { useSuspenseQuery } from '@tanstack/react-query';
+import { useMemo } from 'react';
+import { useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
+import { SectionCard } from '../../components/ui/section-card';
+import { paths } from '../../config/paths';
+import { sessionQueries } from '../../features/auth/api/session-queries';
+import { dayQueries } from '../../features/day-book/api/day-queries';
+import { DayBookView } from '../../features/day-book/components/day-book-view';
+import { DayStepsList } from '../../features/day-book/components/day-steps-list';
+import { ownDay } from '../../features/day-book/own-day';
+import { queryClient } from '../../lib/query-client';
+import { dateParam, dateParamOf } from '../date-param';
+
+export async function loader({ request }: LoaderFunctionArgs) {
+  await queryClient.ensureQueryData(dayQueries.stylist(dateParamOf(request)));
+  return null;
+}
+
+export function Component() {
+  const [search] = useSearchParams();
+  const { data: user } = useSuspenseQuery(sessionQueries.current());
+  const { data } = useSuspenseQuery(dayQueries.stylist(dateParam(search)));
+  const day = useMemo(() => ownDay(data, user?.name ?? 'Me'), [data, user]);
+  return (
+    <DayBookView day={day} title={() => 'My day'} hrefFor={paths.stylist}>
+      <SectionCard title="My clients' steps">
+        <DayStepsList day={day} />
+      </SectionCard>
+    </DayBookView>
+  );
+}

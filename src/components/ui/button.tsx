@@ -1,0 +1,31 @@
+import type { ButtonHTMLAttributes } from 'react';
+
+type Variant = 'primary' | 'secondary' | 'quiet';
+
+const variants: Record<Variant, string> = {
+  // White on oxide passes AA (4.9:1); keep one primary button per screen.
+  primary: 'bg-oxide text-white hover:bg-[#9c4622] disabled:opacity-60',
+  secondary: 'border border-ink/30 bg-white text-ink hover:border-ink/60 disabled:opacity-60',
+  quiet: 'text-ink underline-offset-4 hover:underline',
+};
+
+/** Classes for anything that should look like a button (also links). */
+export function buttonClasses(variant: Variant = 'primary'): string {
+  return `inline-flex min-h-11 items-center justify-center gap-2 rounded-lg px-4 py-2 font-bold transition-colors ${variants[variant]}`;
+}
+
+type Props = ButtonHTMLAttributes<HTMLButtonElement> & { variant?: Variant; busy?: boolean };
+
+export function Button({ variant = 'primary', busy = false, className = '', children, disabled, ...rest }: Props) {
+  return (
+    <button
+      type="button"
+      {...rest}
+      disabled={disabled || busy}
+      aria-busy={busy || undefined}
+      className={`${buttonClasses(variant)} ${className}`}
+    >
+      {children}
+    </button>
+  );
+}

@@ -1,0 +1,34 @@
+import type { Role } from '../../shared/schemas/common.schemas';
+
+/** Route paths of the client, built in one place so links and the router agree. */
+export const paths = {
+  home: '/',
+  signIn: (next?: string) => (next ? `/sign-in?next=${encodeURIComponent(next)}` : '/sign-in'),
+  signUp: '/sign-up',
+  forgotPassword: '/forgot-password',
+  resetPassword: '/reset-password',
+  owner: '/owner',
+  desk: (date?: string) => (date ? `/desk?date=${date}` : '/desk'),
+  deskClient: (id: string) => `/desk/clients/${id}`,
+  outbox: '/desk/outbox',
+  stylist: (date?: string) => (date ? `/stylist?date=${date}` : '/stylist'),
+  me: '/me',
+} as const;
+
+export function homeFor(role: Role): string {
+  switch (role) {
+    case 'owner':
+      return paths.owner;
+    case 'front_desk':
+      return paths.desk();
+    case 'stylist':
+      return paths.stylist();
+    case 'client':
+      return paths.me;
+  }
+}
+
+/** Only same-site paths may be a `next` target, so a crafted link cannot send people elsewhere. */
+export function safeNext(next: string | null): string | null {
+  return next && next.startsWith('/') && !next.startsWith('//') ? next : null;
+}

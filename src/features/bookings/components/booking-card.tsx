@@ -1,0 +1,39 @@
+import type { BookingView } from '../../../../shared/schemas/booking-view.schemas';
+import { BookingStatusBadge } from '../../../components/ui/booking-status-badge';
+import { formatMoney, sittingLabel } from '../../../lib/booking-labels';
+import { formatDay, formatTimeRange } from '../../../lib/time';
+
+type Props = { booking: BookingView; timeZone: string; currency: string; headingLevel?: 'h3' | 'h4' };
+
+/** One booking with each of its sittings' day, times and chair. */
+export function BookingCard({ booking, timeZone, currency, headingLevel: Heading = 'h3' }: Props) {
+  return (
+    <article className="rounded-xl bg-white p-4 ring-1 ring-ink/15">
+      <div className="flex flex-wrap items-start justify-between gap-2">
+        <div>
+          <Heading className="text-lg font-bold">{booking.service.name}</Heading>
+          <p className="text-ink/80">
+            with {booking.stylist.name} · for {booking.client.name}
+          </p>
+        </div>
+        <BookingStatusBadge status={booking.status} />
+      </div>
+      <ul className="mt-3 flex flex-col gap-2">
+        {booking.sittings.map((sitting) => (
+          <li key={sitting.seq} className="rounded-lg bg-linen px-3 py-2">
+            {sitting.of > 1 && <span className="mr-2 font-bold">{sittingLabel(sitting.seq, sitting.of)}:</span>}
+            <span>{formatDay(sitting.start, timeZone)}</span>
+            <span className="mx-1" aria-hidden="true">·</span>
+            <span className="tabular">{formatTimeRange(sitting.start, sitting.end, timeZone)}</span>
+            <span className="mx-1" aria-hidden="true">·</span>
+            <span>{sitting.chairName}</span>
+          </li>
+        ))}
+      </ul>
+      <p className="mt-3 text-sm tabular">
+        Price {formatMoney(booking.priceCents, currency)}
+        {booking.depositCents > 0 && ` · deposit ${formatMoney(booking.depositCents, currency)}`}
+      </p>
+    </article>
+  );
+}

@@ -1,0 +1,37 @@
+import { useMemo } from 'react';
+import type { BookingView } from '../../../../shared/schemas/booking-view.schemas';
+import { isPast } from '../../../lib/time';
+import { BookingCard } from './booking-card';
+
+type Props = { bookings: BookingView[]; timeZone: string; currency: string };
+
+/** Upcoming bookings first (soonest first), then past ones (latest first). */
+export function BookingList({ bookings, timeZone, currency }: Props) {
+  const { upcoming, past } = useMemo(() => {
+    const lastEnd = (b: BookingView) => b.sittings.at(-1)?.end ?? '';
+    const firstStart = (b: BookingView) => b.sittings[0]?.start ?? '';
+    const sorted = [...bookings].sort((a, b) => firstStart(a).localeCompare(firstStart(b)));
+    return {
+      upcoming: sorted.filter((b) => !isPast(lastEnd(b))),
+      past: sorted.filter((b) => isPast(lastEnd(b))).reverse(),
+    };
+  }, [bookings]);
+
+  const group = (title: string, list: BookingView[], empty: string) => (
+    <section aria-label={title} className="flex flex-col gap-3">
+      <h2 className="text-xl font-bold">{title}</h2>
+      {list.length === 0 ? (
+        <p className="text-ink/80">{empty}</p>
+      ) : (
+        list.map((booking) => <BookingCard key={booking.id} booking={booking} timeZone={timeZone} currency={currency} />)
+      )}
+    </section>
+  );
+
+  return (
+    <div className="flex flex-col gap-8">
+      {group('Upcoming', upcoming, 'No upcoming bookings.')}
+      {group('Past', past, 'No past bookings yet.')}
+    </div>
+  );
+}

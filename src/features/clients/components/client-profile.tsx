@@ -1,0 +1,20 @@
+import type { ClientDetail } from '../../../../shared/schemas/client.schemas';
+import { SectionCard } from '../../../components/ui/section-card';
+
+type Props = { client: ClientDetail };
+
+/** How to reach the client, and the salon's notes about them. */
+export function ClientProfile({ client }: Props) {
+  return (
+    <SectionCard title="Contact and notes">
+      <dl className="grid gap-x-6 gap-y-2 sm:grid-cols-[max-content_1fr]">
+        <dt className="font-bold">E-mail</dt>
+        <dd>{client.email ? <a className="text-link" href={`mailto:${client.email}`}>{client.email}</a> : '—'}</dd>
+        <dt className="font-bold">Phone</dt>
+        <dd>{client.phone ? <a className="text-link" href={`tel:${client.phone}`}>{client.phone}</a> : '—'}</dd>
+        <dt className="font-bold">Notes</dt>
+        <dd className="whitespace-pre-line">{client.notes || 'No notes yet.'}</dd>
+      </dl>
+    </SectionCard>
+  );
+}

@@ -1,0 +1,44 @@
+import { lazy, Suspense, type ReactNode } from 'react';
+import { useNavigate } from 'react-router-dom';
+import type { DayView } from '../../../../shared/schemas/booking-view.schemas';
+import { DateStepper } from '../../../components/ui/date-stepper';
+import { LoadingState } from '../../../components/ui/loading-state';
+import { PageHeader } from '../../../components/ui/page-header';
+import { StepKindLegend } from '../../../components/ui/step-kind-legend';
+import { TimeZoneNote } from '../../../components/ui/time-zone-note';
+import { formatLocalDate, todayIn } from '../../../lib/time';
+
+// The timeline is the heaviest part of the page; load it after the page frame.
+const DayTimeline = lazy(() => import('./day-timeline'));
+
+type Props = {
+  day: DayView;
+  title: (isToday: boolean) => string;
+  hrefFor: (date: string) => string;
+  children?: ReactNode;
+};
+
+/** One day of the book: choose the day, read the key, see the timeline. */
+export function DayBookView({ day, title, hrefFor, children }: Props) {
+  const navigate = useNavigate();
+  const today = todayIn(day.timeZone);
+  return (
+    <div className="flex flex-col gap-5">
+      <PageHeader
+        title={title(day.date === today)}
+        subtitle={
+          <>
+            <p className="text-lg font-bold text-ink">{formatLocalDate(day.date)}</p>
+            <TimeZoneNote timeZone={day.timeZone} date={day.date} />
+          </>
+        }
+      />
+      <DateStepper date={day.date} today={today} hrefFor={hrefFor} onPick={(date) => navigate(hrefFor(date))} />
+      <StepKindLegend />
+      <Suspense fallback={<LoadingState label="Loading the timeline…" />}>
+        <DayTimeline day={day} />
+      </Suspense>
+      {children}
+    </div>
+  );
+}

@@ -1,0 +1,46 @@
+import { BookingStatusBadge } from '../../../components/ui/booking-status-badge';
+import { sittingLabel } from '../../../lib/booking-labels';
+import { formatTimeRange } from '../../../lib/time';
+import type { PlacedSitting } from '../lay-out-day';
+import { StepSegment } from './step-segment';
+import { PX_PER_MIN } from './timeline-scale';
+
+type Props = { placed: PlacedSitting; firstHour: number; timeZone: string; roomy: boolean };
+
+/**
+ * A sitting on the timeline: a strip of its steps (patterns) beside the words
+ * (client, service, sitting, times), so no text sits on a pattern.
+ */
+export function SittingBlock({ placed, firstHour, timeZone, roomy }: Props) {
+  const { booking, sitting, startMin, endMin, lane, lanes } = placed;
+  const times = formatTimeRange(sitting.start, sitting.end, timeZone);
+  const ofLabel = sittingLabel(sitting.seq, sitting.of);
+  const dimmed = booking.status === 'no_show' || booking.status === 'held';
+  return (
+    <article
+      aria-label={`${booking.client.name}, ${booking.service.name}, ${times}`}
+      title={`${booking.client.name} · ${booking.service.name} · ${times}`}
+      className={`absolute flex overflow-hidden rounded-lg bg-white shadow-sm ring-1 ring-ink/25 ${dimmed ? 'opacity-80' : ''}`}
+      style={{
+        top: (startMin - firstHour * 60) * PX_PER_MIN,
+        height: (endMin - startMin) * PX_PER_MIN,
+        left: `calc(${(lane / lanes) * 100}% + 2px)`,
+        width: `calc(${100 / lanes}% - 4px)`,
+      }}
+    >
+      <ul aria-label="Steps" className={`relative shrink-0 ${roomy ? 'w-1/2' : 'w-9'}`}>
+        {sitting.steps.map((step) => (
+          <StepSegment key={step.start} step={step} sittingStart={sitting.start} timeZone={timeZone} showLabel={roomy} />
+        ))}
+      </ul>
+      <div className="min-w-0 flex-1 px-2 py-1 text-xs leading-snug">
+        <p className="truncate text-sm font-bold">{booking.client.name}</p>
+        <p className="truncate">{booking.service.name}</p>
+        {ofLabel && <p className="font-bold">{ofLabel}</p>}
+        <p className="tabular">{times}</p>
+        <p className="truncate">{sitting.chairName}</p>
+        {booking.status !== 'booked' && <BookingStatusBadge status={booking.status} />}
+      </div>
+    </article>
+  );
+}

@@ -1,0 +1,23 @@
+import type { OwnerOverview } from '../../../../shared/schemas/owner.schemas';
+import { SectionCard } from '../../../components/ui/section-card';
+import { formatPercent } from '../../../lib/booking-labels';
+import { formatLocalDate } from '../../../lib/time';
+import { StatTile } from './stat-tile';
+
+type Props = { week: OwnerOverview['week'] };
+
+/** How this week's chairs and hands-free windows are used. */
+export function WeekUsage({ week }: Props) {
+  return (
+    <SectionCard title="This week">
+      <p className="mb-3 text-ink/80">
+        {formatLocalDate(week.from)} to {formatLocalDate(week.to)}
+      </p>
+      <dl className="grid gap-3 sm:grid-cols-3">
+        <StatTile label="Bookings" value={String(week.bookings)} />
+        <StatTile label="Chair occupancy" value={formatPercent(week.chairOccupancy)} note="chair minutes with a client ÷ open minutes" />
+        <StatTile label="Window use" value={formatPercent(week.windowUse)} note="hands-free minutes given to other clients" />
+      </dl>
+    </SectionCard>
+  );
+}

@@ -1,0 +1,85 @@
+import type { z } from 'zod';
+import { apiPaths } from '../../shared/api/api-paths';
+import { ApiErrorBodySchema } from '../../shared/api/error.schemas';
+import { CsrfResponseSchema } from '../../shared/schemas/auth.schemas';
+import { ApiError } from './api-error';
+
+/*
+ * The one way the client talks to the API. It parses responses with the shared
+ * schemas and throws ApiError; it never redirects or shows messages (the query
+ * cache and the pages decide that).
+ */
+
+type WriteMethod = 'POST' | 'PUT' | 'PATCH' | 'DELETE';
+
+let csrfToken: string | null = null;
+
+async function send(method: 'GET' | WriteMethod, path: string, body?: unknown): Promise<Response> {
+  const headers: Record<string, string> = { Accept: 'application/json' };
+  if (body !== undefined) headers['Content-Type'] = 'application/json';
+  if (method !== 'GET') headers['X-CSRF-Token'] = await getCsrfToken();
+  try {
+    return await fetch(path, {
+      method,
+      headers,
+      credentials: 'same-origin',
+      body: body === undefined ? undefined : JSON.stringify(body),
+    });
+  } catch {
+    throw new ApiError(0, 'NETWORK', 'Dwell could not reach the server. Check your connection and try again.');
+  }
+}
+
+async function getCsrfToken(): Promise<string> {
+  if (csrfToken) return csrfToken;
+  const response = await send('GET', apiPaths.csrf);
+  if (!response.ok) throw await toApiError(response);
+  csrfToken = CsrfResponseSchema.parse(await response.json()).token;
+  return csrfToken;
+}
+
+async function toApiError(response: Response): Promise<ApiError> {
+  const parsed = ApiErrorBodySchema.safeParse(await response.json().catch(() => null));
+  if (parsed.success) {
+    const { code, message, fields } = parsed.data.error;
+    return new ApiError(response.status, code, message, fields);
+  }
+  return new ApiError(response.status, 'INTERNAL', 'Something went wrong on our side. Please try again.');
+}
+
+async function readBody<S extends z.ZodType>(response: Response, schema: S): Promise<z.output<S>> {
+  if (!response.ok) throw await toApiError(response);
+  return schema.parse(await response.json());
+}
+
+export function apiGet<S extends z.ZodType>(path: string, schema: S): Promise<z.output<S>> {
+  return send('GET', path).then((response) => readBody(response, schema));
+}
+
+/** A write. Returns the parsed body, or undefined when no schema is given (204/202 answers). */
+export async function apiWrite<S extends z.ZodType>(
+  method: WriteMethod,
+  path: string,
+  body?: unknown,
+  schema?: S,
+): Promise<z.output<S>> {
+  let response = await send(method, path, body);
+  if (response.status === 403) {
+    const error = await toApiError(response.clone());
+    // The token belongs to the session, so it goes stale on sign-in and sign-out: fetch a fresh one once.
+    if (error.code === 'CSRF') {
+      csrfToken = null;
+      response = await send(method, path, body);
+    }
+  }
+  if (!response.ok) throw await toApiError(response);
+  return schema ? schema.parse(await response.json()) : (undefined as z.output<S>);
+}
+
+/** Builds `path?key=value` leaving out empty values. */
+export function withQuery(path: string, query: Record<string, string | undefined>): string {
+  const params = new URLSearchParams();
+  for (const [key, value] of Object.entries(query)) if (value) params.set(key, value);
+  const text = params.toString();
+  return text ? `${path}?${text}` : path;
+}

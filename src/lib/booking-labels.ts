@@ -1,0 +1,37 @@
+import type { BookingStatus, Role, StepKind } from '../../shared/schemas/common.schemas';
+
+/** The words the UI uses for the API's enum values (docs/glossary.md). */
+export const stepKindLabels: Record<StepKind, string> = {
+  hands_on: 'Hands-on',
+  developing: 'Developing',
+  basin: 'Basin',
+};
+
+export const bookingStatusLabels: Record<BookingStatus, string> = {
+  held: 'Held',
+  booked: 'Booked',
+  checked_in: 'Checked in',
+  finished: 'Finished',
+  cancelled: 'Cancelled',
+  no_show: 'No-show',
+};
+
+export const roleLabels: Record<Role, string> = {
+  client: 'client',
+  front_desk: 'front desk',
+  stylist: 'stylist',
+  owner: 'owner',
+};
+
+/** "Sitting 1 of 2", or nothing for a one-sitting booking. */
+export function sittingLabel(seq: number, of: number): string | null {
+  return of > 1 ? `Sitting ${seq} of ${of}` : null;
+}
+
+export function formatMoney(cents: number, currency: string): string {
+  return new Intl.NumberFormat(undefined, { style: 'currency', currency }).format(cents / 100);
+}
+
+export function formatPercent(share: number | null): string {
+  return share === null ? '—' : new Intl.NumberFormat(undefined, { style: 'percent', maximumFractionDigits: 0 }).format(share);
+}

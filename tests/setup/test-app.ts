@@ -1,0 +1,58 @@
+import request from 'supertest';
+import { createApp } from '../../server/app';
+import { loadConfig } from '../../server/config';
+import { createMailer } from '../../server/mail/mailer';
+import { startSmtpFake, type SmtpFake } from '../../server/fakes/smtp-fake';
+import { createTestDb, type TestDb } from './test-db';
+
+export interface TestApp {
+  app: ReturnType<typeof createApp>;
+  testDb: TestDb;
+  smtp: SmtpFake;
+  close(): Promise<void>;
+}
+
+/** The real app on a fresh database with the local e-mail fake, mounted in-process for supertest. */
+export async function startTestApp(): Promise<TestApp> {
+  const testDb = await createTestDb();
+  const smtp = await startSmtpFake();
+  const config = loadConfig({ DATABASE_URL: testDb.url, DWELL_MODE: 'test' });
+  const mailer = createMailer(smtp.url, config.mailFrom);
+  const app = createApp({ db: testDb.db, pool: testDb.pool, config, mailer, smtpFake: smtp });
+  return {
+    app,
+    testDb,
+    smtp,
+    async close() {
+      mailer.close();
+      await smtp.close();
+      await testDb.drop();
+    },
+  };
+}
+
+export type Agent = ReturnType<typeof request.agent>;
+
+/** A cookie-keeping client with a fresh CSRF token; `write` sends it on every write. */
+export async function anonymousAgent(app: TestApp['app']) {
+  const agent = request.agent(app);
+  let token = (await agent.get('/api/csrf')).body.token as string;
+  return {
+    agent,
+    get: (path: string) => agent.get(path),
+    write: (method: 'post' | 'put' | 'patch' | 'delete', path: string, body?: object) =>
+      agent[method](path).set('X-CSRF-Token', token).send(body),
+    async refreshCsrf() {
+      token = (await agent.get('/api/csrf')).body.token;
+    },
+  };
+}
+
+/** Signs in through the API (as the browser does) and returns an agent ready for writes. */
+export async function signedInAgent(app: TestApp['app'], email: string, password: string) {
+  const client = await anonymousAgent(app);
+  const res = await client.write('post', '/api/session', { email, password });
+  if (res.status !== 200) throw new Error(`sign-in failed: ${res.status} ${JSON.stringify(res.body)}`);
+  await client.refreshCsrf(); // the session was renewed on sign-in, and the token is bound to it
+  return client;
+}

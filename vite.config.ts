@@ -1,0 +1,50 @@
+import { defineConfig } from 'vitest/config';
+import react from '@vitejs/plugin-react';
+import tailwindcss from '@tailwindcss/vite';
+
+// One config for the client build, the dev server and the three test projects.
+export default defineConfig({
+  plugins: [react(), tailwindcss()],
+  build: { outDir: 'dist/client', emptyOutDir: true },
+  server: {
+    port: 5173,
+    host: '127.0.0.1',
+    // The dev server forwards API calls to Express (started by `npm run dev`).
+    proxy: { '/api': `http://127.0.0.1:${process.env.PORT ?? 3000}` },
+  },
+  test: {
+    projects: [
+      {
+        extends: true,
+        test: {
+          name: 'unit',
+          environment: 'node',
+          include: ['shared/**/*.test.ts', 'src/**/*.test.{ts,tsx}', 'server/**/*.test.ts', 'tests/unit/**/*.test.ts', 'tests/engine/**/*.test.ts'],
+        },
+      },
+      {
+        extends: true,
+        test: {
+          name: 'integration',
+          environment: 'node',
+          include: ['tests/integration/**/*.test.ts'],
+          globalSetup: ['tests/setup/integration-global-setup.ts'],
+          testTimeout: 20_000,
+          hookTimeout: 30_000,
+        },
+      },
+      {
+        extends: true,
+        test: {
+          name: 'e2e',
+          environment: 'node',
+          include: ['tests/e2e/**/*.test.ts'],
+          globalSetup: ['tests/setup/e2e-global-setup.ts'],
+          fileParallelism: false,
+          testTimeout: 60_000,
+          hookTimeout: 90_000,
+        },
+      },
+    ],
+  },
+});
