@@ -113,14 +113,14 @@ async function insertDemoBook(db: Db, ids: Ids, now: Date): Promise<number> {
       const clientId = p.service === 'correction' ? ids.clients[0] : ids.clients[1 + (clientTurn++ % (ids.clients.length - 1))];
       const sittings = [{ day, placement: p }];
       if (p.service === 'correction') sittings.push({ day: correctionDays[1], placement: correctionDayTwo[0] });
-      const end = localTime(sittings[sittings.length - 1].day, p.start);
-      const status = statusFor(end, now, count);
+      const steps = sittings.map((s) => placeSteps(s.day, s.placement, ids));
+      const status = statusFor(steps.map((st) => ({ start: st[0].start, end: st.at(-1)!.end })), now, count);
       const service = demoServices[p.service];
       await insertBooking(db, {
         salonId: ids.salonId, clientId, serviceId: ids.services[p.service], stylistId: ids.stylists[p.stylist], status,
         stepPlan: service.plan, priceCents: service.priceCents, depositCents: p.service === 'correction' ? 17000 : 0,
         createdBy: ids.deskUserId, cancelReason: status === 'cancelled' ? 'Client asked to cancel (moving house)' : undefined,
-        sittings: sittings.map((s) => ({ chairId: ids.chairs[s.placement.chair], steps: placeSteps(s.day, s.placement, ids) })),
+        sittings: sittings.map((s, i) => ({ chairId: ids.chairs[s.placement.chair], steps: steps[i] })),
       });
       count++;
     }
@@ -146,9 +146,9 @@ function placeSteps(day: DateTime, p: Placement, ids: Ids): NewStep[] {
   });
 }
 
-/** Past work is finished (an occasional no-show), today's started work is checked in, the rest booked. */
-function statusFor(start: DateTime, now: Date, n: number): BookingStatus {
-  const inPast = start.toJSDate() < now;
-  if (inPast) return n % 23 === 5 ? 'no_show' : start.hasSame(DateTime.fromJSDate(now, { zone: start.zone }), 'day') ? 'checked_in' : 'finished';
+/** All sittings over: finished (an occasional no-show); a sitting under way: checked in; else booked. */
+function statusFor(sittings: { start: Date; end: Date }[], now: Date, n: number): BookingStatus {
+  if (sittings.at(-1)!.end <= now) return n % 23 === 5 ? 'no_show' : 'finished';
+  if (sittings.some((s) => s.start <= now && now < s.end)) return 'checked_in';
   return n % 29 === 11 ? 'cancelled' : 'booked';
 }

@@ -32,8 +32,8 @@ if (packagesAreStale()) {
   if (res.status !== 0) process.exit(res.status ?? 1);
 }
 
-const tsx = join(root, 'node_modules', '.bin', 'tsx');
-const child = spawn(tsx, [join(root, 'server', 'ops', commands[command]), ...process.argv.slice(3)], {
+// tsx as a loader in this same child (not its CLI wrapper), so signals reach our handler exactly as sent.
+const child = spawn(process.execPath, ['--import', 'tsx', join(root, 'server', 'ops', commands[command]), ...process.argv.slice(3)], {
   cwd: root,
   stdio: 'inherit',
 });

@@ -2,6 +2,7 @@
 import { join } from 'node:path';
 import { createDb, createPool } from '../db/database';
 import { migrateToLatest } from '../db/migrate';
+import { isDatabaseEmpty, loadDemoSalon } from '../demo/load-demo-salon';
 import {
   clusterPaths,
   databaseUrl,
@@ -38,4 +39,17 @@ export async function prepareLocalDatabase(opts: LocalDatabaseOptions): Promise<
     await db.destroy();
   }
   return { cluster, url };
+}
+
+/** The demo salon goes into an empty database only: a restart keeps whatever the user changed. */
+export async function loadDemoIfEmpty(url: string): Promise<void> {
+  const db = createDb(createPool(url));
+  try {
+    if (await isDatabaseEmpty(db)) {
+      const { bookings } = await loadDemoSalon(db, new Date());
+      console.log(`dwell: loaded the demo salon (${bookings} bookings)`);
+    }
+  } finally {
+    await db.destroy();
+  }
 }

@@ -2,14 +2,13 @@
 import { mkdirSync } from 'node:fs';
 import { join } from 'node:path';
 import { loadConfig } from '../config';
-import { createDb, createPool } from '../db/database';
 import { startServer } from '../main';
-import { DEMO_PASSWORD } from '../demo/demo-catalogue';
-import { isDatabaseEmpty, loadDemoSalon } from '../demo/load-demo-salon';
-import { prepareLocalDatabase } from './local-database';
+import { printWelcome } from './welcome';
+import { prepareLocalDatabase, loadDemoIfEmpty } from './local-database';
 import { stopCluster, SetupError } from './postgres-cluster';
 import { buildClientIfStale } from './client-build';
 import { takeRunLock } from './run-lock';
+import { onShutdownSignal } from './shutdown';
 import { assertPortFree } from './port-check';
 import { localSessionSecret } from './session-secret';
 
@@ -35,46 +34,19 @@ async function main() {
     const config = loadConfig({ ...process.env, DATABASE_URL: url, PORT: String(port), DWELL_MODE: 'demo', SESSION_SECRET: localSessionSecret(join(dataRoot, 'session-secret')) });
     const server = await startServer(config);
     printWelcome(server.url);
-    const shutdown = async () => {
+    onShutdownSignal(async () => {
       console.log('\ndwell: stopping…');
       await server.close();
       stopDatabase();
       lock.release();
-      process.exit(0);
-    };
-    process.once('SIGINT', shutdown);
-    process.once('SIGTERM', shutdown);
+      console.log('dwell: stopped.');
+    });
   } catch (err) {
     console.error(`dwell: ${err instanceof SetupError || err instanceof Error ? err.message : String(err)}`);
     stopDatabase();
     lock.release();
     process.exit(1);
   }
-}
-
-async function loadDemoIfEmpty(url: string) {
-  const db = createDb(createPool(url));
-  try {
-    if (await isDatabaseEmpty(db)) {
-      const { bookings } = await loadDemoSalon(db, new Date());
-      console.log(`dwell: loaded the demo salon (${bookings} bookings)`);
-    }
-  } finally {
-    await db.destroy();
-  }
-}
-
-function printWelcome(url: string) {
-  console.log(`
-Dwell is running at ${url}
-
-Demo sign-ins (password ${DEMO_PASSWORD}):
-  owner        owner@demo.test
-  front desk   desk@demo.test
-  stylist      ana@demo.test   (also marcus@demo.test, lee@demo.test)
-  client       client@demo.test
-
-Press Ctrl-C to stop.`);
 }
 
 await main();

@@ -8,6 +8,7 @@ import { prepareLocalDatabase } from './local-database';
 import { databaseUrl, stopCluster, type Cluster } from './postgres-cluster';
 import { findChromium } from './chromium';
 import { buildClientIfStale } from './client-build';
+import { onShutdownSignal } from './shutdown';
 
 const root = process.cwd();
 const bin = (name: string) => join(root, 'node_modules', '.bin', name);
@@ -35,8 +36,7 @@ async function main(): Promise<number> {
     if (cluster) stopCluster(cluster);
     rmSync(scratch, { recursive: true, force: true });
   };
-  process.once('SIGINT', () => (stop(), process.exit(130)));
-  process.once('SIGTERM', () => (stop(), process.exit(143)));
+  onShutdownSignal(stop);
   try {
     const port = 55000 + Math.floor(Math.random() * 4000);
     const prepared = await prepareLocalDatabase({ dataRoot: scratch, port, database: 'dwell_template', throwaway: true });
