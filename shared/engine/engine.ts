@@ -1,0 +1,83 @@
+/**
+ * Public entry of the booking engine. Pure: every calendar and "now" (request.earliest) is input.
+ *
+ *   const scenario = parseScenario(json);        // throws ScenarioError naming the field
+ *   planOptions(scenario); findWindows(scenario); measureOccupancy(scenario);
+ *
+ * The query functions re-check the parts they use, so a Scenario built in code (e.g. by the
+ * server from the database) gets the same ScenarioError rather than a partial answer.
+ */
+import type { Option, OptionsAnswer, WindowsAnswer, OccupancyAnswer } from './answers';
+import { checkFits, compileRequest } from './compile-request';
+import { measure } from './occupancy';
+import { findOptions } from './options';
+import { buildIndex } from './resource-index';
+import { ScenarioError, fromZodError } from './scenario-error';
+import { ScenarioSchema, type Scenario } from './scenario.schemas';
+import { listWindows } from './windows';
+
+export type * from './answers';
+export type { Scenario, ScenarioInput, Booking, BookedStep, ServiceRequest, RequestStep, HoursRule } from './scenario.schemas';
+export { ScenarioSchema } from './scenario.schemas';
+export { ScenarioError } from './scenario-error';
+export { MAX_HORIZON_DAYS } from './compile-context';
+
+/** Parses and fully validates a scenario (an object, or JSON text). */
+export function parseScenario(json: unknown): Scenario {
+  let value = json;
+  if (typeof json === 'string') {
+    try {
+      value = JSON.parse(json);
+    } catch (e) {
+      throw new ScenarioError('scenario', `is not valid JSON (${(e as Error).message})`);
+    }
+  }
+  const parsed = ScenarioSchema.safeParse(value);
+  if (!parsed.success) throw fromZodError(parsed.error);
+  const idx = buildIndex(parsed.data);
+  if (parsed.data.request) compileRequest(idx.ctx, parsed.data, idx.stylistById);
+  checkFits(idx.ctx, parsed.data);
+  return parsed.data;
+}
+
+/** The K earliest feasible (stylist, start) pairs for the request, each with one plan. */
+export function planOptions(scenario: Scenario): OptionsAnswer {
+  const idx = buildIndex(scenario);
+  const req = compileRequest(idx.ctx, scenario, idx.stylistById);
+  const fmt = idx.ctx.clock.format;
+  const options = findOptions(idx, req).map(
+    (o): Option => ({
+      stylist: o.stylist,
+      sittings: o.sittings.map((s) => ({
+        chair: s.chair,
+        steps: s.steps.map((step) => ({
+          kind: step.kind,
+          start: fmt(step.start),
+          end: fmt(step.end),
+          ...(step.basin ? { basin: step.basin } : {}),
+        })),
+      })),
+    }),
+  );
+  return { options };
+}
+
+/** Every maximal hands-free window in the horizon, with the fits that can go in it. */
+export function findWindows(scenario: Scenario): WindowsAnswer {
+  const idx = buildIndex(scenario);
+  checkFits(idx.ctx, scenario);
+  const fmt = idx.ctx.clock.format;
+  return {
+    windows: listWindows(idx, scenario.fits).map((w) => ({
+      stylist: idx.stylists[w.stylist].id,
+      start: fmt(w.start),
+      end: fmt(w.end),
+      fits: w.fits,
+    })),
+  };
+}
+
+/** Chair occupancy, hands-on share per stylist and window use over the horizon. */
+export function measureOccupancy(scenario: Scenario): OccupancyAnswer {
+  return measure(buildIndex(scenario));
+}

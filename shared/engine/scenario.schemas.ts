@@ -1,0 +1,94 @@
+/**
+ * The scenario (input) as zod schemas: shape and types only. Rules that need the time zone or
+ * cross-references (grid, gaps, ids, horizon length) are checked in compile-scenario.ts.
+ */
+import { z } from 'zod';
+
+const id = z.string().min(1);
+const localDate = z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'expected a local date YYYY-MM-DD');
+const localDateTime = z
+  .string()
+  .regex(/^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}$/, 'expected a local date-time YYYY-MM-DDTHH:mm');
+const clockTime = z.string().regex(/^\d{2}:\d{2}$/, 'expected a local time HH:mm');
+const positiveMinutes = z.number().int().positive();
+
+export const HoursRuleSchema = z.strictObject({ rrule: z.string().min(1), start: clockTime, end: clockTime });
+export const PeriodSchema = z.strictObject({ start: localDateTime, end: localDateTime });
+
+export const StylistSchema = z.strictObject({
+  id,
+  skills: z.array(z.string()).default([]),
+  maxClientsAtOnce: z.number().int().min(1).default(1),
+  hours: z.array(HoursRuleSchema).default([]),
+  timeOff: z.array(PeriodSchema).default([]),
+});
+
+const stepKindMessage = { message: 'unknown step kind (expected hands_on, developing or basin)' };
+
+export const BookedStepSchema = z.discriminatedUnion(
+  'kind',
+  [
+    z.strictObject({ kind: z.literal('hands_on'), start: localDateTime, end: localDateTime }),
+    z.strictObject({ kind: z.literal('developing'), start: localDateTime, end: localDateTime }),
+    z.strictObject({ kind: z.literal('basin'), start: localDateTime, end: localDateTime, basin: id }),
+  ],
+  stepKindMessage,
+);
+
+export const BookingSchema = z.strictObject({
+  id,
+  stylist: id,
+  chair: id,
+  steps: z.array(BookedStepSchema).min(1),
+});
+
+export const RequestStepSchema = z.discriminatedUnion(
+  'kind',
+  [
+    z.strictObject({ kind: z.literal('hands_on'), minutes: positiveMinutes }),
+    z.strictObject({ kind: z.literal('developing'), minMinutes: positiveMinutes, maxMinutes: positiveMinutes }),
+    z.strictObject({ kind: z.literal('basin'), minutes: positiveMinutes }),
+  ],
+  stepKindMessage,
+);
+
+export const SittingSchema = z.strictObject({
+  daysAfterPrevious: z
+    .strictObject({ min: z.number().int().min(1), max: z.number().int().min(1) })
+    .optional(),
+  steps: z.array(RequestStepSchema).min(1),
+});
+
+export const RequestSchema = z.strictObject({
+  skill: z.string().min(1),
+  stylist: id.nullable().default(null),
+  earliest: localDateTime,
+  sittings: z.array(SittingSchema).min(1),
+  limit: z.number().int().min(1).max(1000).default(10),
+  spread: z.enum(['day', 'none']).default('day'),
+});
+
+export const FitSchema = z.strictObject({ service: z.string().min(1), skill: z.string().min(1), minutes: positiveMinutes });
+
+export const ScenarioSchema = z.strictObject({
+  timeZone: z.string().min(1),
+  granularityMinutes: z.number().int().min(1).max(60),
+  horizon: z.strictObject({ from: localDate, to: localDate }),
+  salonHours: z.array(HoursRuleSchema),
+  stylists: z.array(StylistSchema),
+  chairs: z.array(z.strictObject({ id })),
+  basins: z.array(z.strictObject({ id })).default([]),
+  bookings: z.array(BookingSchema).default([]),
+  request: RequestSchema.optional(),
+  fits: z.array(FitSchema).default([]),
+});
+
+/** A scenario as the engine takes it (defaults filled in). */
+export type Scenario = z.output<typeof ScenarioSchema>;
+/** A scenario as written in JSON (optional fields may be left out). */
+export type ScenarioInput = z.input<typeof ScenarioSchema>;
+export type Booking = z.output<typeof BookingSchema>;
+export type BookedStep = z.output<typeof BookedStepSchema>;
+export type ServiceRequest = z.output<typeof RequestSchema>;
+export type RequestStep = z.output<typeof RequestStepSchema>;
+export type HoursRule = z.output<typeof HoursRuleSchema>;
