@@ -5,6 +5,8 @@ import type { Database } from './db/schema';
 import type { RouteTable } from './lib/api-route';
 import type { Mailer } from './mail/mailer';
 import type { SmtpFake } from './fakes/smtp-fake';
+import type { SmsFake } from './fakes/sms-fake';
+import type { SmsSender } from './sms/sms-sender';
 
 /** What feature routes are given; built once in createApp. */
 export interface AppDeps {
@@ -13,6 +15,8 @@ export interface AppDeps {
   pool: pg.Pool;
   config: Config;
   mailer: Mailer;
+  sms: SmsSender;
   /** Present when hosted services are replaced by local fakes (demo, dev, test). */
   smtpFake: SmtpFake | null;
+  smsFake: SmsFake | null;
 }

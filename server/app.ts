@@ -18,6 +18,11 @@ import { registerBookingRoutes } from './features/bookings/bookings.routes';
 import { registerClientRoutes } from './features/clients/clients.routes';
 import { registerMailboxRoutes } from './features/mailbox/mailbox.routes';
 import { registerOwnerRoutes } from './features/owner/owner.routes';
+import { registerBookingChangeRoutes } from './features/bookings/booking-changes.routes';
+import { registerServiceRoutes } from './features/services/services.routes';
+import { registerSkinTestRoutes } from './features/skin-tests/skin-tests.routes';
+import { registerStandbyRoutes } from './features/standby/standby.routes';
+import { registerWindowRoutes } from './features/windows/windows.routes';
 
 const clientDist = path.join(path.dirname(fileURLToPath(import.meta.url)), '..', 'dist', 'client');
 
@@ -47,6 +52,11 @@ export function createApp(deps: Omit<AppDeps, 'table'>) {
     registerPasswordResetRoutes,
     registerSalonRoutes,
     registerBookingRoutes,
+    registerBookingChangeRoutes,
+    registerServiceRoutes,
+    registerSkinTestRoutes,
+    registerStandbyRoutes,
+    registerWindowRoutes,
     registerClientRoutes,
     registerOwnerRoutes,
     registerMailboxRoutes,

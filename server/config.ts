@@ -11,6 +11,9 @@ const ConfigSchema = z.object({
   PUBLIC_URL: z.string().url().optional(),
   SMTP_URL: z.string().optional(),
   MAIL_FROM: z.string().default('Dwell <no-reply@dwell.test>'),
+  TWILIO_ACCOUNT_SID: z.string().startsWith('AC').optional(),
+  TWILIO_AUTH_TOKEN: z.string().optional(),
+  SMS_FROM: z.string().default('+19705550100'),
 });
 
 export interface Config {
@@ -24,6 +27,7 @@ export interface Config {
   publicUrl: string | null;
   smtpUrl: string | null;
   mailFrom: string;
+  twilio: { accountSid: string; authToken: string; from: string } | null;
   /** Hosted services are replaced by in-process fakes. */
   useFakes: boolean;
 }
@@ -45,6 +49,10 @@ export function loadConfig(env: Record<string, string | undefined> = process.env
     publicUrl: parsed.PUBLIC_URL ?? null,
     smtpUrl: parsed.SMTP_URL ?? null,
     mailFrom: parsed.MAIL_FROM,
+    twilio:
+      parsed.TWILIO_ACCOUNT_SID && parsed.TWILIO_AUTH_TOKEN
+        ? { accountSid: parsed.TWILIO_ACCOUNT_SID, authToken: parsed.TWILIO_AUTH_TOKEN, from: parsed.SMS_FROM }
+        : null,
     useFakes: parsed.DWELL_MODE !== 'production',
   };
 }

@@ -3,10 +3,10 @@ import type { AddressInfo } from 'node:net';
 import { loadConfig, type Config } from './config';
 import { createDb, createPool } from './db/database';
 import { createApp } from './app';
-import { createMailer } from './mail/mailer';
-import { startSmtpFake } from './fakes/smtp-fake';
+import { startOutsideServices } from './services';
 
 export interface RunningServer {
+  outside: Awaited<ReturnType<typeof startOutsideServices>>;
   url: string;
   app: ReturnType<typeof createApp>;
   close(): Promise<void>;
@@ -14,24 +14,21 @@ export interface RunningServer {
 
 /** Starts fakes (outside production), the database pool and the HTTP server; close() undoes all of it. */
 export async function startServer(config: Config = loadConfig()): Promise<RunningServer> {
-  const smtpFake = config.useFakes ? await startSmtpFake() : null;
-  const smtpUrl = smtpFake?.url ?? config.smtpUrl;
-  if (!smtpUrl) throw new Error('SMTP_URL is required in production');
-  const mailer = createMailer(smtpUrl, config.mailFrom);
+  const outside = await startOutsideServices(config);
   const pool = createPool(config.databaseUrl);
   const db = createDb(pool);
-  const app = createApp({ db, pool, config, mailer, smtpFake });
+  const app = createApp({ db, pool, config, ...outside });
   const server = await listen(app, config);
   const { port } = server.address() as AddressInfo;
   return {
     url: `http://${config.host}:${port}`,
     app,
+    outside,
     async close() {
       const closed = new Promise<void>((resolve) => server.close(() => resolve()));
       server.closeAllConnections();
       await closed;
-      mailer.close();
-      await smtpFake?.close();
+      await outside.close();
       await db.destroy();
     },
   };

@@ -18,6 +18,7 @@ export interface SalonsTable {
   phone: Generated<string>;
   skin_test_lead_hours: Generated<number>;
   skin_test_validity_days: Generated<number>;
+  cancellation_window_hours: Generated<number>;
   hold_minutes: Generated<number>;
   granularity_minutes: Generated<number>;
   created_at: DefaultTimestamp;
@@ -103,6 +104,7 @@ export interface ServicesTable {
   needs_skin_test: Generated<boolean>;
   step_plan: Json;
   active: Generated<boolean>;
+  deposit_cents: Generated<number>;
 }
 
 export interface ClientsTable {
@@ -119,7 +121,9 @@ export interface ClientsTable {
 export interface BookingsTable {
   id: Generated<string>;
   salon_id: string;
-  client_id: string;
+  /** Null only while a booking is an unclaimed hold. */
+  client_id: string | null;
+  hold_secret_hash: ColumnType<string | null, string | null | undefined, string | null>;
   service_id: string;
   stylist_id: string;
   status: 'held' | 'booked' | 'checked_in' | 'finished' | 'cancelled' | 'no_show';
@@ -128,6 +132,7 @@ export interface BookingsTable {
   deposit_cents: Generated<number>;
   held_until: Timestamp | null;
   cancel_reason: string | null;
+  deposit_outcome: 'kept' | 'refunded' | null;
   created_by: string | null;
   created_at: DefaultTimestamp;
 }
@@ -165,6 +170,99 @@ export interface AuditLogTable {
   at: DefaultTimestamp;
 }
 
+export interface SkinTestsTable {
+  id: Generated<string>;
+  salon_id: string;
+  client_id: string;
+  applied_at: Timestamp;
+  read_at: Timestamp | null;
+  product: Generated<string>;
+  result: 'pending' | 'negative' | 'positive' | 'unclear';
+  recorded_by: string | null;
+  notes: Generated<string>;
+  created_at: DefaultTimestamp;
+}
+
+export interface StandbyEntriesTable {
+  id: Generated<string>;
+  salon_id: string;
+  client_id: string;
+  service_ids: string[];
+  stylist_id: string | null;
+  availability: Json;
+  notes: Generated<string>;
+  active: Generated<boolean>;
+  created_by: string | null;
+  created_at: DefaultTimestamp;
+}
+
+export interface IdempotencyKeysTable {
+  user_id: string;
+  key: string;
+  route: string;
+  status: number;
+  response: Json;
+  created_at: DefaultTimestamp;
+}
+
+export interface WindowOffersTable {
+  id: Generated<string>;
+  salon_id: string;
+  standby_entry_id: string;
+  client_id: string;
+  service_id: string;
+  stylist_id: string;
+  starts_at: Timestamp;
+  token_hash: string;
+  status: 'offered' | 'taken' | 'gone' | 'expired';
+  booking_id: string | null;
+  created_by: string | null;
+  created_at: DefaultTimestamp;
+  expires_at: Timestamp;
+}
+
+export interface PaymentsTable {
+  id: Generated<string>;
+  salon_id: string;
+  booking_id: string;
+  client_id: string | null;
+  provider_ref: string | null;
+  amount_cents: number;
+  currency: string;
+  status: 'succeeded' | 'declined' | 'refunded';
+  message: Generated<string>;
+  created_at: DefaultTimestamp;
+}
+
+export interface CautionAcceptancesTable {
+  id: Generated<string>;
+  booking_id: string;
+  user_id: string | null;
+  version: string;
+  texts: Json;
+  accepted_at: DefaultTimestamp;
+}
+
+export interface HairHistoriesTable {
+  client_id: string;
+  answers: Json;
+  updated_at: DefaultTimestamp;
+}
+
+export interface ClientPhotosTable {
+  id: Generated<string>;
+  salon_id: string;
+  client_id: string;
+  booking_id: string | null;
+  kind: 'hair_now' | 'wanted';
+  storage_key: string;
+  mime: string;
+  bytes: number;
+  width: number;
+  height: number;
+  created_at: DefaultTimestamp;
+}
+
 export interface SessionTable {
   sid: string;
   sess: unknown;
@@ -189,4 +287,12 @@ export interface Database {
   sittings: SittingsTable;
   booking_steps: BookingStepsTable;
   audit_log: AuditLogTable;
+  skin_tests: SkinTestsTable;
+  standby_entries: StandbyEntriesTable;
+  idempotency_keys: IdempotencyKeysTable;
+  window_offers: WindowOffersTable;
+  payments: PaymentsTable;
+  caution_acceptances: CautionAcceptancesTable;
+  hair_histories: HairHistoriesTable;
+  client_photos: ClientPhotosTable;
 }

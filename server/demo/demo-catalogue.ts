@@ -36,6 +36,7 @@ interface DemoService {
   skill: string;
   priceCents: number;
   priceIsFrom?: boolean;
+  depositCents?: number;
   onlineBookable?: boolean;
   needsSkinTest?: boolean;
   plan: StepPlan;
@@ -51,13 +52,13 @@ export const demoServices: Record<ServiceKey, DemoService> = {
   consultation: { name: 'Colour consultation', description: 'Hair history, photos, strand check and a written quote for colour or correction work.', category: 'consultation', skill: 'colour', priceCents: 0, onlineBookable: true, plan: { sittings: [{ steps: [h('Consultation', 30)] }] } },
   skinTest: { name: 'Skin test', description: 'Allergy alert test for oxidative colour: a small patch of the mixed colour behind the ear or on the inner arm, read before your colour appointment.', category: 'skin_test', skill: 'colour', priceCents: 0, onlineBookable: true, plan: { sittings: [{ steps: [h('Apply skin test', 15)] }] } },
   rootTouchUp: { name: 'Root touch-up', description: 'Permanent colour on regrowth, processed, rinsed and blow-dried.', category: 'colour', skill: 'colour', priceCents: 9500, needsSkinTest: true, plan: { sittings: [{ steps: [h('Apply colour to regrowth', 30), d('Colour develops', 30, 45), b('Rinse and condition', 15), h('Blow-dry', 30)] }] } },
-  fullLightening: { name: 'Full lightening', description: 'Lightener through the whole head, toned and finished.', category: 'colour', skill: 'colour', priceCents: 26000, priceIsFrom: true, needsSkinTest: true, plan: { sittings: [{ steps: [h('Apply lightener', 60), d('Lightener lifts', 30, 50), b('Rinse lightener', 15), h('Apply toner', 15), d('Toner develops', 10, 20), b('Rinse toner', 10), h('Blow-dry', 45)] }] } },
+  fullLightening: { name: 'Full lightening', description: 'Lightener through the whole head, toned and finished.', category: 'colour', skill: 'colour', priceCents: 26000, priceIsFrom: true, depositCents: 6500, needsSkinTest: true, plan: { sittings: [{ steps: [h('Apply lightener', 60), d('Lightener lifts', 30, 50), b('Rinse lightener', 15), h('Apply toner', 15), d('Toner develops', 10, 20), b('Rinse toner', 10), h('Blow-dry', 45)] }] } },
   tonerRefresh: { name: 'Toner refresh', description: 'A gloss or toner between colour visits.', category: 'colour', skill: 'colour', priceCents: 4500, needsSkinTest: true, plan: { sittings: [{ steps: [h('Apply toner', 10), d('Toner develops', 10, 20), b('Rinse', 10)] }] } },
-  vividColour: { name: 'Vivid colour', description: 'Pre-lightening and a direct vivid shade, finished.', category: 'colour', skill: 'colour', priceCents: 22000, priceIsFrom: true, needsSkinTest: true, plan: { sittings: [{ steps: [h('Apply pre-lightener', 45), d('Pre-lightener lifts', 30, 45), b('Rinse', 15), h('Apply vivid colour', 40), d('Vivid colour develops', 25, 35), b('Cool rinse', 15), h('Finish', 30)] }] } },
+  vividColour: { name: 'Vivid colour', description: 'Pre-lightening and a direct vivid shade, finished.', category: 'colour', skill: 'colour', priceCents: 22000, priceIsFrom: true, depositCents: 5500, needsSkinTest: true, plan: { sittings: [{ steps: [h('Apply pre-lightener', 45), d('Pre-lightener lifts', 30, 45), b('Rinse', 15), h('Apply vivid colour', 40), d('Vivid colour develops', 25, 35), b('Cool rinse', 15), h('Finish', 30)] }] } },
   correction: {
     name: 'Colour correction (two sittings)',
     description: 'Removal of old colour, lightening and toning in a first sitting; refining, colour and cut in a second sitting a few days later.',
-    category: 'colour', skill: 'colour', priceCents: 68000, priceIsFrom: true, needsSkinTest: true,
+    category: 'colour', skill: 'colour', priceCents: 68000, priceIsFrom: true, depositCents: 17000, needsSkinTest: true,
     plan: {
       sittings: [
         { steps: [h('Check-in and strand check', 30), h('Apply colour remover', 30), d('Remover processes', 20, 40), b('Rinse remover', 20), h('Apply lightener', 45), d('Lightener lifts', 30, 50), b('Rinse and bond treatment', 15), h('Apply toner', 30), d('Toner develops', 15, 20), b('Rinse toner', 10), h('Blow-dry', 45)] },

@@ -28,13 +28,14 @@ interface Ids {
 export async function loadDemoSalon(db: Kysely<Database>, now: Date): Promise<{ bookings: number }> {
   const passwordHash = await hashPassword(DEMO_PASSWORD);
   return db.transaction().execute(async (trx) => {
-    const ids = await insertSalonAndPeople(trx, passwordHash);
+    const ids = await insertSalonAndPeople(trx, passwordHash, now);
     const bookings = await insertDemoBook(trx, ids, now);
+    await insertDemoStandby(trx, ids);
     return { bookings };
   });
 }
 
-async function insertSalonAndPeople(db: Db, passwordHash: string): Promise<Ids> {
+async function insertSalonAndPeople(db: Db, passwordHash: string, now: Date): Promise<Ids> {
   const { hours, chairs, basins, ...salon } = demoSalon;
   const { id: salonId } = await db
     .insertInto('salons')
@@ -65,7 +66,7 @@ async function insertSalonAndPeople(db: Db, passwordHash: string): Promise<Ids> 
       .insertInto('services')
       .values({
         salon_id: salonId, name: s.name, description: s.description, category: s.category, skill: s.skill, price_cents: s.priceCents,
-        price_is_from: s.priceIsFrom ?? false, online_bookable: s.onlineBookable ?? false, needs_skin_test: s.needsSkinTest ?? false,
+        price_is_from: s.priceIsFrom ?? false, deposit_cents: s.depositCents ?? 0, online_bookable: s.onlineBookable ?? false, needs_skin_test: s.needsSkinTest ?? false,
         step_plan: JSON.stringify(s.plan),
       })
       .returning('id')
@@ -83,7 +84,36 @@ async function insertSalonAndPeople(db: Db, passwordHash: string): Promise<Ids> 
       .executeTakeFirstOrThrow();
     clients.push(row.id);
   }
+  await insertDemoSkinTests(db, salonId, clients, now);
   return { salonId, deskUserId: desk.id, stylists, chairs: chairIds, basins: basinIds, services, clients };
+}
+
+/** Most clients have a recent negative skin test; a few have none, one had a reaction. */
+async function insertDemoSkinTests(db: Db, salonId: string, clients: string[], now: Date): Promise<void> {
+  const rows = clients.flatMap((clientId, i) => {
+    if (i % 6 === 4) return []; // no test on record: the desk must book one first
+    const appliedAt = DateTime.fromJSDate(now).minus({ days: 20 + ((i * 7) % 40) }).set({ hour: 10, minute: 0 }).toJSDate();
+    const readAt = DateTime.fromJSDate(appliedAt).plus({ hours: 48 }).toJSDate();
+    return [{ salon_id: salonId, client_id: clientId, applied_at: appliedAt, read_at: readAt, result: i === 9 ? ('positive' as const) : ('negative' as const), product: 'Permanent colour 6.0 with 6% developer' }];
+  });
+  await db.insertInto('skin_tests').values(rows).execute();
+}
+
+/** Three clients who asked to be called when a short service opens up. */
+async function insertDemoStandby(db: Db, ids: Ids): Promise<void> {
+  const weekdays = { weekdays: [2, 3, 4, 5, 6], from: '09:00', to: '18:00' };
+  const entries = [
+    { client: 11, services: ['tonerRefresh', 'blowDry'] as ServiceKey[], stylist: null, notes: 'Works nearby; can come in 20 minutes.' },
+    { client: 17, services: ['tonerRefresh'] as ServiceKey[], stylist: ids.stylists.ana, notes: 'Wants Ana for toner.' },
+    { client: 23, services: ['fringeTrim', 'blowDry'] as ServiceKey[], stylist: null, notes: '' },
+  ];
+  await db
+    .insertInto('standby_entries')
+    .values(entries.map((e) => ({
+      salon_id: ids.salonId, client_id: ids.clients[e.client], service_ids: e.services.map((k) => ids.services[k]), stylist_id: e.stylist,
+      availability: JSON.stringify([weekdays]), notes: e.notes, created_by: ids.deskUserId,
+    })))
+    .execute();
 }
 
 async function insertNamed(db: Db, table: 'chairs' | 'basins', salonId: string, names: string[]): Promise<string[]> {
@@ -118,7 +148,7 @@ async function insertDemoBook(db: Db, ids: Ids, now: Date): Promise<number> {
       const service = demoServices[p.service];
       await insertBooking(db, {
         salonId: ids.salonId, clientId, serviceId: ids.services[p.service], stylistId: ids.stylists[p.stylist], status,
-        stepPlan: service.plan, priceCents: service.priceCents, depositCents: p.service === 'correction' ? 17000 : 0,
+        stepPlan: service.plan, priceCents: service.priceCents, depositCents: service.depositCents ?? 0,
         createdBy: ids.deskUserId, cancelReason: status === 'cancelled' ? 'Client asked to cancel (moving house)' : undefined,
         sittings: sittings.map((s, i) => ({ chairId: ids.chairs[s.placement.chair], steps: steps[i] })),
       });

@@ -4,6 +4,7 @@ import { ZodError } from 'zod';
 import type { ApiErrorBody } from '../../shared/api/error.schemas';
 import { AppError } from './app-error';
 import { fieldMessages } from './field-messages';
+import { ScenarioError } from '../../shared/engine/engine';
 
 function send(res: Parameters<RequestHandler>[1], status: number, error: ApiErrorBody['error']) {
   res.status(status).json({ error });
@@ -22,6 +23,10 @@ export const errorHandler: ErrorRequestHandler = (err, _req, res, _next) => {
   if (err instanceof AppError) return send(res, err.status, { code: err.code, message: err.message, fields: err.fields });
   if (err instanceof ZodError) {
     return send(res, 400, { code: 'VALIDATION_FAILED', message: 'Some fields need attention.', fields: fieldMessages(err) });
+  }
+  // The engine refusing its input means the request asked for something impossible (e.g. a horizon too long).
+  if (err instanceof ScenarioError) {
+    return send(res, 400, { code: 'VALIDATION_FAILED', message: err.message, fields: { [err.field]: err.message } });
   }
   if (err instanceof NoResultError) return send(res, 404, { code: 'NOT_FOUND', message: 'That record was not found.' });
   if (err?.type === 'entity.parse.failed') return send(res, 400, { code: 'BAD_JSON', message: 'The request body is not valid JSON.' });

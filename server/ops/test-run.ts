@@ -42,7 +42,9 @@ async function main(): Promise<number> {
     const prepared = await prepareLocalDatabase({ dataRoot: scratch, port, database: 'dwell_template', throwaway: true });
     cluster = prepared.cluster;
     const chromium = findChromium();
-    buildClientIfStale(root);
+    // Only the browser suites need the built client; `npm test -- --project integration` skips the build.
+    const projects = process.argv.slice(2).filter((_arg, i, all) => all[i - 1] === '--project');
+    if (!projects.length || projects.includes('e2e')) buildClientIfStale(root);
     const typecheck = process.env.DWELL_SKIP_TYPECHECK ? 0 : await run(bin('tsc'), ['--noEmit', '-p', '.']);
     const reportFile = join(scratch, 'vitest-report.json');
     // Extra arguments pass through to Vitest, e.g. `npm test -- --project integration`.

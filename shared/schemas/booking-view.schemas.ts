@@ -8,6 +8,9 @@ export const StepViewSchema = z.object({
   start: InstantSchema,
   end: InstantSchema,
   basinName: z.string().nullable(),
+  /** For developing steps: the least and most minutes the product may stay on (from the booked step plan). */
+  minMinutes: z.number().int().nullable(),
+  maxMinutes: z.number().int().nullable(),
 });
 
 export const SittingViewSchema = z.object({
@@ -29,6 +32,9 @@ export const BookingViewSchema = z.object({
   stylist: z.object({ id: IdSchema, name: z.string() }),
   priceCents: z.number().int(),
   depositCents: z.number().int(),
+  /** Kept or refunded when the booking was cancelled; null otherwise. */
+  depositOutcome: z.enum(['kept', 'refunded']).nullable(),
+  cancelReason: z.string().nullable(),
   sittings: z.array(SittingViewSchema),
 });
 export type BookingView = z.infer<typeof BookingViewSchema>;
@@ -46,6 +52,17 @@ export const DayViewSchema = z.object({
 });
 export type DayView = z.infer<typeof DayViewSchema>;
 export const DayQuerySchema = z.object({ date: LocalDateSchema.optional() }).strict();
+
+export const WeekQuerySchema = z.object({ date: LocalDateSchema.optional(), stylistId: IdSchema.optional() }).strict();
+/** Seven days from `from` (the Monday of the asked date's week) to `to` (the next Monday, exclusive), one stylist or all. */
+export const WeekViewSchema = z.object({
+  from: LocalDateSchema,
+  to: LocalDateSchema,
+  timeZone: z.string(),
+  stylists: z.array(StaffSummarySchema),
+  bookings: z.array(BookingViewSchema),
+});
+export type WeekView = z.infer<typeof WeekViewSchema>;
 
 export const MyBookingsSchema = z.object({ timeZone: z.string(), bookings: z.array(BookingViewSchema) });
 export type MyBookings = z.infer<typeof MyBookingsSchema>;

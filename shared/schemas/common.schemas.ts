@@ -4,6 +4,11 @@ import { z } from 'zod';
 export const LocalDateSchema = z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'Use a date like 2027-03-14');
 /** An instant as ISO 8601 with its UTC offset (what the API sends for every time). */
 export const InstantSchema = z.string();
+/** An instant sent to the API: ISO 8601 with a UTC offset or Z, to the minute or finer (as the API answers them). */
+export const InstantInputSchema = z
+  .string()
+  .regex(/^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}(:\d{2}(\.\d{1,3})?)?(Z|[+-]\d{2}:\d{2})$/, 'Use a time like 2027-03-14T09:30-06:00')
+  .refine((s) => !Number.isNaN(Date.parse(s)), 'Not a real date and time');
 export const IdSchema = z.uuid();
 export const IdParamsSchema = z.object({ id: IdSchema }).strict();
 export const RoleSchema = z.enum(['client', 'front_desk', 'stylist', 'owner']);

@@ -11,5 +11,7 @@ export const SalonSchema = z.object({
   phone: z.string(),
   skinTestLeadHours: z.number().int(),
   skinTestValidityDays: z.number().int(),
+  granularityMinutes: z.number().int(),
+  cancellationWindowHours: z.number().int(),
 });
 export type Salon = z.infer<typeof SalonSchema>;

@@ -1,17 +1,22 @@
 import type { Role } from '../../shared/schemas/common.schemas';
 import { paths } from '../config/paths';
 
+// The desk's pages, shared by the front desk and the owner.
+const deskLinks = [
+  { to: paths.desk(), label: 'Book' },
+  { to: paths.deskWeek(), label: 'Week' },
+  { to: paths.deskBook, label: 'Book a service' },
+  { to: paths.deskStandby, label: 'Standby' },
+  { to: paths.outbox, label: 'Outbox (demo)' },
+];
+
 /** The header's links for each role: its home first, then the pages it uses often. */
 export const navLinks: Record<Role, { to: string; label: string }[]> = {
   owner: [
     { to: paths.owner, label: 'Overview' },
-    { to: paths.desk(), label: 'Book' },
-    { to: paths.outbox, label: 'Outbox (demo)' },
+    ...deskLinks,
   ],
-  front_desk: [
-    { to: paths.desk(), label: 'Book' },
-    { to: paths.outbox, label: 'Outbox (demo)' },
-  ],
+  front_desk: deskLinks,
   stylist: [{ to: paths.stylist(), label: 'My day' }],
   client: [{ to: paths.me, label: 'My bookings' }],
 };

@@ -11,6 +11,17 @@ export const paths = {
   desk: (date?: string) => (date ? `/desk?date=${date}` : '/desk'),
   deskClient: (id: string) => `/desk/clients/${id}`,
   outbox: '/desk/outbox',
+  deskBook: '/desk/book',
+  deskBooking: (id: string) => `/desk/bookings/${id}`,
+  deskStandby: '/desk/standby',
+  deskWeek: (date?: string, stylistId?: string) => {
+    const query = new URLSearchParams();
+    if (date) query.set('date', date);
+    if (stylistId) query.set('stylist', stylistId);
+    const text = query.toString();
+    return text ? `/desk/week?${text}` : '/desk/week';
+  },
+  offer: (token: string) => `/offer/${token}`,
   stylist: (date?: string) => (date ? `/stylist?date=${date}` : '/stylist'),
   me: '/me',
 } as const;

@@ -1,4 +1,4 @@
-import type { FieldValues, Path, UseFormSetError } from 'react-hook-form';
+import { get, type FieldErrors, type FieldValues, type Path, type UseFormSetError } from 'react-hook-form';
 import { isApiError } from './api-error';
 
 /**
@@ -23,4 +23,10 @@ export function showServerErrors<T extends FieldValues>(
     }
   }
   if (!placed) setError('root.server', { message: error.message });
+}
+
+/** The message of a nested field's error by its dotted path (field arrays), if any. */
+export function fieldError(errors: FieldErrors, path: string): string | undefined {
+  const found = get(errors, path) as { message?: unknown } | undefined;
+  return typeof found?.message === 'string' ? found.message : undefined;
 }

@@ -56,3 +56,17 @@ export function zoneLabel(zone: string, date?: string): string {
 export function isPast(iso: string): boolean {
   return DateTime.fromISO(iso) < DateTime.now();
 }
+
+/** A local date and clock time in the zone as an ISO instant with its offset, or null when it is not a real date. */
+export function localToInstant(date: string, time: string, zone: string): string | null {
+  const moment = DateTime.fromISO(`${date}T${time}`, { zone });
+  return moment.isValid ? moment.toISO({ suppressMilliseconds: true }) : null;
+}
+
+/** "7 h 30 min", "45 min". */
+export function formatMinutes(total: number): string {
+  const hours = Math.floor(total / 60);
+  const minutes = total % 60;
+  if (hours === 0) return `${minutes} min`;
+  return minutes === 0 ? `${hours} h` : `${hours} h ${minutes} min`;
+}

@@ -4,7 +4,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createApp } from '../../server/app';
 import { loadConfig } from '../../server/config';
 import { createDb, createPool } from '../../server/db/database';
-import { createMailer } from '../../server/mail/mailer';
+import { startOutsideServices } from '../../server/services';
 import { createTestDb, type TestDb } from '../setup/test-db';
 
 let t: TestDb;
@@ -41,7 +41,8 @@ describe('GET /api/health', () => {
     const pool = createPool(url);
     const db = createDb(pool);
     const config = loadConfig({ DATABASE_URL: url, DWELL_MODE: 'test' });
-    const app = createApp({ db, pool, config, mailer: createMailer('smtp://127.0.0.1:9', config.mailFrom), smtpFake: null });
+    const outside = await startOutsideServices(config);
+    const app = createApp({ db, pool, config, ...outside });
 
     const down = await request(app).get('/api/health');
     expect(down.status).toBe(503);
@@ -52,6 +53,7 @@ describe('GET /api/health', () => {
     expect(up.status).toBe(200);
     expect(up.body).toEqual({ ok: true, db: 'up' });
     await db.destroy();
+    await outside.close();
     await relay.down();
   });
 });

@@ -1,31 +1,34 @@
 import request from 'supertest';
 import { createApp } from '../../server/app';
 import { loadConfig } from '../../server/config';
-import { createMailer } from '../../server/mail/mailer';
-import { startSmtpFake, type SmtpFake } from '../../server/fakes/smtp-fake';
+import { startOutsideServices, type OutsideServices } from '../../server/services';
+import type { SmtpFake } from '../../server/fakes/smtp-fake';
+import type { SmsFake } from '../../server/fakes/sms-fake';
 import { createTestDb, type TestDb } from './test-db';
 
 export interface TestApp {
   app: ReturnType<typeof createApp>;
   testDb: TestDb;
   smtp: SmtpFake;
+  sms: SmsFake;
+  outside: OutsideServices;
   close(): Promise<void>;
 }
 
 /** The real app on a fresh database with the local e-mail fake, mounted in-process for supertest. */
 export async function startTestApp(): Promise<TestApp> {
   const testDb = await createTestDb();
-  const smtp = await startSmtpFake();
   const config = loadConfig({ DATABASE_URL: testDb.url, DWELL_MODE: 'test' });
-  const mailer = createMailer(smtp.url, config.mailFrom);
-  const app = createApp({ db: testDb.db, pool: testDb.pool, config, mailer, smtpFake: smtp });
+  const outside = await startOutsideServices(config);
+  const app = createApp({ db: testDb.db, pool: testDb.pool, config, ...outside });
   return {
     app,
     testDb,
-    smtp,
+    smtp: outside.smtpFake!,
+    sms: outside.smsFake!,
+    outside,
     async close() {
-      mailer.close();
-      await smtp.close();
+      await outside.close();
       await testDb.drop();
     },
   };

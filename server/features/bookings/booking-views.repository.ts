@@ -3,6 +3,7 @@ import { DateTime } from 'luxon';
 import type { Db } from '../../db/database';
 import type { BookingView } from '../../../shared/schemas/booking-view.schemas';
 import type { BookingStatus } from '../../../shared/schemas/common.schemas';
+import type { StepPlan } from '../../../shared/schemas/step-plan.schemas';
 
 export interface BookingFilter {
   salonId: string;
@@ -24,7 +25,7 @@ export async function loadBookingViews(db: Db, filter: BookingFilter, timeZone: 
     .innerJoin('clients as c', 'c.id', 'b.client_id')
     .innerJoin('services as s', 's.id', 'b.service_id')
     .innerJoin('staff as st', 'st.id', 'b.stylist_id')
-    .select(['b.id', 'b.status', 'b.price_cents', 'b.deposit_cents', 'c.id as clientId', 'c.name as clientName', 's.id as serviceId', 's.name as serviceName', 'st.id as stylistId', 'st.display_name as stylistName'])
+    .select(['b.id', 'b.status', 'b.price_cents', 'b.deposit_cents', 'b.deposit_outcome', 'b.cancel_reason', 'b.step_plan', 'c.id as clientId', 'c.name as clientName', 's.id as serviceId', 's.name as serviceName', 'st.id as stylistId', 'st.display_name as stylistName'])
     .where('b.salon_id', '=', filter.salonId)
     .where('b.status', 'in', filter.statuses ?? LIVE);
   if (filter.stylistId) query = query.where('b.stylist_id', '=', filter.stylistId);
@@ -43,6 +44,7 @@ export async function loadBookingViews(db: Db, filter: BookingFilter, timeZone: 
   const iso = (d: Date) => DateTime.fromJSDate(d, { zone: timeZone }).toISO({ suppressMilliseconds: true })!;
   const views = bookings.map((b): BookingView => {
     const own = sittings.filter((s) => s.booking_id === b.id);
+    const plan = b.step_plan as StepPlan;
     return {
       id: b.id,
       status: b.status,
@@ -51,6 +53,8 @@ export async function loadBookingViews(db: Db, filter: BookingFilter, timeZone: 
       stylist: { id: b.stylistId, name: b.stylistName },
       priceCents: b.price_cents,
       depositCents: b.deposit_cents,
+      depositOutcome: b.deposit_outcome,
+      cancelReason: b.cancel_reason,
       sittings: own.map((s) => ({
         seq: s.seq,
         of: own.length,
@@ -60,7 +64,14 @@ export async function loadBookingViews(db: Db, filter: BookingFilter, timeZone: 
         end: iso(s.end),
         steps: steps
           .filter((st) => st.sitting_id === s.id)
-          .map((st) => ({ kind: st.kind, label: st.label, start: iso(st.start), end: iso(st.end), basinName: st.basinName })),
+          .map((st) => {
+            const planned = plan.sittings[s.seq - 1]?.steps[st.seq - 1];
+            const range = planned?.kind === 'developing' ? planned : null;
+            return {
+              kind: st.kind, label: st.label, start: iso(st.start), end: iso(st.end), basinName: st.basinName,
+              minMinutes: range?.minMinutes ?? null, maxMinutes: range?.maxMinutes ?? null,
+            };
+          }),
       })),
     };
   });
@@ -82,7 +93,7 @@ function loadSteps(db: Db, bookingIds: string[]) {
     .selectFrom('booking_steps as st')
     .innerJoin('sittings as s', 's.id', 'st.sitting_id')
     .leftJoin('basins as bs', 'bs.id', 'st.basin_id')
-    .select(['st.sitting_id', 'st.kind', 'st.label', 'bs.name as basinName', sql<Date>`lower(st.during)`.as('start'), sql<Date>`upper(st.during)`.as('end')])
+    .select(['st.sitting_id', 'st.seq', 'st.kind', 'st.label', 'bs.name as basinName', sql<Date>`lower(st.during)`.as('start'), sql<Date>`upper(st.during)`.as('end')])
     .where('s.booking_id', 'in', bookingIds)
     .orderBy('st.sitting_id')
     .orderBy('st.seq')

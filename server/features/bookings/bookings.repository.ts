@@ -46,6 +46,7 @@ export async function insertBooking(db: Db, booking: NewBooking): Promise<string
       deposit_cents: booking.depositCents,
       held_until: null,
       cancel_reason: booking.cancelReason ?? null,
+      deposit_outcome: null,
       created_by: booking.createdBy,
     })
     .returning('id')

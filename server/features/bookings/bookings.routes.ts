@@ -1,5 +1,5 @@
 import { apiPaths } from '../../../shared/api/api-paths';
-import { BookingViewSchema, DayQuerySchema, DayViewSchema, MyBookingsSchema } from '../../../shared/schemas/booking-view.schemas';
+import { BookingViewSchema, DayQuerySchema, DayViewSchema, MyBookingsSchema, WeekQuerySchema, WeekViewSchema } from '../../../shared/schemas/booking-view.schemas';
 import { BookingStatusSchema, IdParamsSchema } from '../../../shared/schemas/common.schemas';
 import type { AppDeps } from '../../app-deps';
 import { DESK } from '../../auth/require-access';
@@ -9,13 +9,18 @@ import { findSalon } from '../salon/salon.repository';
 import { findClientIdForUser } from '../clients/clients.repository';
 import { findStaffIdForUser } from './salon-resources.repository';
 import { loadBookingViews } from './booking-views.repository';
-import { deskDay, stylistDay } from './day-view.service';
+import { deskDay, deskWeek, stylistDay } from './day-view.service';
 
 export function registerBookingRoutes({ table, db }: AppDeps): void {
   apiRoute(
     table,
     { method: 'get', path: apiPaths.deskDay, access: DESK, summary: "The salon's book for one day", query: DayQuerySchema, response: DayViewSchema },
     async ({ user, query }) => deskDay(db, await findSalon(db, user.salonId), query.date),
+  );
+  apiRoute(
+    table,
+    { method: 'get', path: apiPaths.deskWeek, access: DESK, summary: 'A week of the book, for one stylist or all', query: WeekQuerySchema, response: WeekViewSchema },
+    async ({ user, query }) => deskWeek(db, await findSalon(db, user.salonId), query.date, query.stylistId),
   );
   apiRoute(
     table,

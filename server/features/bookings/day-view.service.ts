@@ -1,6 +1,6 @@
 import { DateTime } from 'luxon';
 import type { Db } from '../../db/database';
-import type { DayView } from '../../../shared/schemas/booking-view.schemas';
+import type { DayView, WeekView } from '../../../shared/schemas/booking-view.schemas';
 import type { Salon } from '../../../shared/schemas/salon.schemas';
 import { AppError } from '../../lib/app-error';
 import { loadBookingViews } from './booking-views.repository';
@@ -39,4 +39,14 @@ export async function stylistDay(db: Db, salon: Salon, userId: string, date = to
     loadBookingViews(db, { salonId: salon.id, stylistId: staffId, ...bounds }, salon.timeZone),
   ]);
   return { date, timeZone: salon.timeZone, stylists: stylists.filter((s) => s.id === staffId), chairs, bookings };
+}
+
+/** Monday to Sunday of the week holding `date`, for one stylist or all. */
+export async function deskWeek(db: Db, salon: Salon, date = todayIn(salon.timeZone), stylistId?: string): Promise<WeekView> {
+  const monday = DateTime.fromISO(date, { zone: salon.timeZone }).startOf('week');
+  if (!monday.isValid) throw new AppError('VALIDATION_FAILED', 400, 'Some fields need attention.', { date: 'Not a calendar date.' });
+  const to = monday.plus({ days: 7 });
+  const stylists = (await listStylists(db, salon.id)).filter((s) => !stylistId || s.id === stylistId);
+  const bookings = await loadBookingViews(db, { salonId: salon.id, stylistId, from: monday.toJSDate(), to: to.toJSDate() }, salon.timeZone);
+  return { from: monday.toISODate()!, to: to.toISODate()!, timeZone: salon.timeZone, stylists, bookings };
 }

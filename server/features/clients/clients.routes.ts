@@ -1,19 +1,29 @@
 import { apiPaths } from '../../../shared/api/api-paths';
-import { ClientDetailSchema, ClientListQuerySchema, ClientListSchema } from '../../../shared/schemas/client.schemas';
+import { ClientDetailSchema, ClientListQuerySchema, ClientListSchema, ClientSummarySchema } from '../../../shared/schemas/client.schemas';
+import { CreateClientSchema } from '../../../shared/schemas/booking.schemas';
 import { BookingStatusSchema, IdParamsSchema } from '../../../shared/schemas/common.schemas';
 import type { AppDeps } from '../../app-deps';
-import { STAFF } from '../../auth/require-access';
+import { DESK, STAFF } from '../../auth/require-access';
 import { apiRoute } from '../../lib/api-route';
 import { notFound } from '../../lib/app-error';
 import { findSalon } from '../salon/salon.repository';
 import { loadBookingViews } from '../bookings/booking-views.repository';
-import { findClient, searchClients } from './clients.repository';
+import { findClient, insertClient, searchClients } from './clients.repository';
 
 export function registerClientRoutes({ table, db }: AppDeps): void {
   apiRoute(
     table,
     { method: 'get', path: apiPaths.clients, access: STAFF, summary: 'Find clients by name, e-mail or phone', query: ClientListQuerySchema, response: ClientListSchema },
     async ({ user, query }) => ({ clients: await searchClients(db, user.salonId, query.q) }),
+  );
+  apiRoute(
+    table,
+    { method: 'post', path: apiPaths.clients, access: DESK, summary: 'Add a client (e.g. at the desk while booking)', body: CreateClientSchema, response: ClientSummarySchema, status: 201 },
+    async ({ user, body }) => {
+      const client = { name: body.name, email: body.email || null, phone: body.phone || null };
+      const id = await insertClient(db, { salonId: user.salonId, userId: null, ...client, notes: body.notes });
+      return { id, ...client };
+    },
   );
   apiRoute(
     table,

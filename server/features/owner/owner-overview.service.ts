@@ -3,6 +3,9 @@ import { DateTime } from 'luxon';
 import type { Db } from '../../db/database';
 import type { OwnerOverview } from '../../../shared/schemas/owner.schemas';
 import type { Salon } from '../../../shared/schemas/salon.schemas';
+import { measureOccupancy } from '../../../shared/engine/engine';
+import { loadSalonCalendars } from '../planning/salon-calendars.repository';
+import { listStylists } from '../bookings/salon-resources.repository';
 
 /** Counts of what the salon has, and the current week (Monday to Sunday, salon time). */
 export async function ownerOverview(db: Db, salon: Salon, now: Date): Promise<OwnerOverview> {
@@ -11,7 +14,7 @@ export async function ownerOverview(db: Db, salon: Salon, now: Date): Promise<Ow
   const to = weekStart.plus({ days: 7 }).toISODate()!;
   const count = (table: 'staff' | 'chairs' | 'basins' | 'services' | 'clients') =>
     db.selectFrom(table).select(sql<number>`count(*)::int`.as('n')).where('salon_id', '=', salon.id).executeTakeFirstOrThrow();
-  const [stylists, chairs, basins, services, clients, bookings] = await Promise.all([
+  const [stylists, chairs, basins, services, clients, bookings, calendars, staff] = await Promise.all([
     count('staff'),
     count('chairs'),
     count('basins'),
@@ -25,10 +28,21 @@ export async function ownerOverview(db: Db, salon: Salon, now: Date): Promise<Ow
       .where('s.live', '=', true)
       .where(sql<boolean>`s.during && tstzrange(${weekStart.toJSDate()}, ${weekStart.plus({ days: 7 }).toJSDate()})`)
       .executeTakeFirstOrThrow(),
+    loadSalonCalendars(db, salon.id, { from, to }),
+    listStylists(db, salon.id),
   ]);
+  // The same occupancy computation as `npm run plan -- occupancy` on this week's calendars.
+  const usage = measureOccupancy(calendars);
   return {
     salon,
     counts: { stylists: stylists.n, chairs: chairs.n, basins: basins.n, services: services.n, clients: clients.n },
-    week: { from, to, bookings: bookings.n, chairOccupancy: null, windowUse: null, handsOnShare: [] },
+    week: {
+      from,
+      to,
+      bookings: bookings.n,
+      chairOccupancy: usage.chairOccupancy,
+      windowUse: usage.windowUse,
+      handsOnShare: staff.map((s) => ({ stylist: s.name, share: usage.handsOnShare[s.id] ?? null })),
+    },
   };
 }

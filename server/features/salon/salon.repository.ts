@@ -14,6 +14,8 @@ export async function findSalon(db: Db, id: string): Promise<Salon> {
     phone: row.phone,
     skinTestLeadHours: row.skin_test_lead_hours,
     skinTestValidityDays: row.skin_test_validity_days,
+    granularityMinutes: row.granularity_minutes,
+    cancellationWindowHours: row.cancellation_window_hours,
   };
 }
 

@@ -1,10 +1,11 @@
-import { useSuspenseQuery } from '@tanstack/react-query';
+import { useQuery, useSuspenseQuery } from '@tanstack/react-query';
 import { useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { SectionCard } from '../../components/ui/section-card';
 import { paths } from '../../config/paths';
 import { ClientSearch } from '../../features/clients/components/client-search';
 import { dayQueries } from '../../features/day-book/api/day-queries';
 import { DayBookView } from '../../features/day-book/components/day-book-view';
+import { windowQueries } from '../../features/windows/api/window-queries';
 import { formatLocalDate } from '../../lib/time';
 import { queryClient } from '../../lib/query-client';
 import { dateParam, dateParamOf } from '../date-param';
@@ -15,13 +16,27 @@ export async function loader({ request }: LoaderFunctionArgs) {
 }
 
 export function Component() {
-  const [search] = useSearchParams();
+  const [search, setSearch] = useSearchParams();
   const { data: day } = useSuspenseQuery(dayQueries.desk(dateParam(search)));
+  // The bands are extra: the day shows without them while they load (or if they fail).
+  const windows = useQuery(windowQueries.list(day.date));
+  const columns = search.get('view') === 'chairs' ? 'chair' : 'stylist';
   return (
     <DayBookView
       day={day}
       title={(isToday) => (isToday ? "Today's book" : `Book for ${formatLocalDate(day.date)}`)}
-      hrefFor={paths.desk}
+      hrefFor={(date) => (columns === 'chair' ? `${paths.desk(date)}&view=chairs` : paths.desk(date))}
+      windows={windows.data?.windows}
+      bookingHref={paths.deskBooking}
+      columns={columns}
+      onColumnsChange={(by) =>
+        setSearch((now) => {
+          const next = new URLSearchParams(now);
+          if (by === 'chair') next.set('view', 'chairs');
+          else next.delete('view');
+          return next;
+        })
+      }
     >
       <SectionCard title="Clients">
         <ClientSearch />

@@ -1,8 +1,12 @@
-import { useSuspenseQuery } from '@tanstack/react-query';
+import { useQuery, useSuspenseQuery } from '@tanstack/react-query';
 import { Button } from '../../components/ui/button';
+import { LoadingState } from '../../components/ui/loading-state';
 import { PageHeader } from '../../components/ui/page-header';
+import { SectionCard } from '../../components/ui/section-card';
 import { mailboxQueries } from '../../features/outbox/api/mailbox-queries';
+import { smsQueries } from '../../features/outbox/api/sms-queries';
 import { MailList } from '../../features/outbox/components/mail-list';
+import { SmsList } from '../../features/outbox/components/sms-list';
 import { salonQueries } from '../../features/salon/api/salon-queries';
 import { queryClient } from '../../lib/query-client';
 
@@ -16,19 +20,29 @@ export async function loader() {
 
 export function Component() {
   const mail = useSuspenseQuery(mailboxQueries.messages());
+  const sms = useQuery(smsQueries.messages());
   const { data: salon } = useSuspenseQuery(salonQueries.current());
   return (
-    <div className="flex max-w-3xl flex-col gap-4">
+    <div className="flex flex-col gap-4">
       <PageHeader
         title="Outbox (demo)"
-        subtitle="E-mails Dwell sent while running in demo mode. They were caught here and not delivered to anyone."
+        subtitle="E-mails and text messages Dwell sent while running in demo mode. They were caught here and not delivered to anyone."
         action={
-          <Button busy={mail.isFetching} onClick={() => void mail.refetch()}>
-            Check for new e-mails
+          <Button busy={mail.isFetching || sms.isFetching} onClick={() => void Promise.all([mail.refetch(), sms.refetch()])}>
+            Check for new messages
           </Button>
         }
       />
-      <MailList messages={mail.data.messages} timeZone={salon.timeZone} />
+      <div className="grid grid-cols-1 gap-6 lg:grid-cols-2">
+        <SectionCard title="E-mails">
+          <MailList messages={mail.data.messages} timeZone={salon.timeZone} />
+        </SectionCard>
+        <SectionCard title="SMS">
+          {sms.isPending && <LoadingState label="Loading text messages…" />}
+          {sms.isError && <p role="alert">The text messages could not be loaded: {sms.error.message}</p>}
+          {sms.data && <SmsList messages={sms.data.messages} timeZone={salon.timeZone} />}
+        </SectionCard>
+      </div>
     </div>
   );
 }

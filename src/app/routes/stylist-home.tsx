@@ -1,4 +1,4 @@
-import { useSuspenseQuery } from '@tanstack/react-query';
+import { useQuery, useSuspenseQuery } from '@tanstack/react-query';
 import { useMemo } from 'react';
 import { useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { SectionCard } from '../../components/ui/section-card';
@@ -8,6 +8,9 @@ import { dayQueries } from '../../features/day-book/api/day-queries';
 import { DayBookView } from '../../features/day-book/components/day-book-view';
 import { DayStepsList } from '../../features/day-book/components/day-steps-list';
 import { ownDay } from '../../features/day-book/own-day';
+import { MyClients } from '../../features/my-day/components/my-clients';
+import { windowQueries } from '../../features/windows/api/window-queries';
+import { WindowList } from '../../features/windows/components/window-list';
 import { queryClient } from '../../lib/query-client';
 import { dateParam, dateParamOf } from '../date-param';
 
@@ -21,8 +24,24 @@ export function Component() {
   const { data: user } = useSuspenseQuery(sessionQueries.current());
   const { data } = useSuspenseQuery(dayQueries.stylist(dateParam(search)));
   const day = useMemo(() => ownDay(data, user?.name ?? 'Me'), [data, user]);
+  const windows = useQuery(windowQueries.list(day.date));
   return (
-    <DayBookView day={day} title={() => 'My day'} hrefFor={paths.stylist}>
+    <DayBookView
+      day={day}
+      title={() => 'My day'}
+      hrefFor={paths.stylist}
+      windows={windows.data?.windows}
+      lead={
+        <>
+          <SectionCard title="My clients">
+            <MyClients day={day} />
+          </SectionCard>
+          <SectionCard title="Hands-free windows">
+            <WindowList date={day.date} />
+          </SectionCard>
+        </>
+      }
+    >
       <SectionCard title="My clients' steps">
         <DayStepsList day={day} />
       </SectionCard>

@@ -14,7 +14,7 @@ export type PlacedSitting = {
 export type DayLayout = {
   firstHour: number;
   lastHour: number;
-  columns: { stylist: { id: string; name: string }; sittings: PlacedSitting[] }[];
+  columns: { id: string; name: string; sittings: PlacedSitting[] }[];
   hiddenCancelled: number;
 };
 
@@ -44,8 +44,11 @@ function assignLanes(sittings: PlacedSitting[]): PlacedSitting[] {
   return sorted;
 }
 
-/** Turns the API's day into columns per stylist, keeping only sittings that start on that date. */
-export function layOutDay(day: DayView): DayLayout {
+/** What the columns are: the stylists' hands, or the chairs (which client holds which chair when). */
+export type ColumnsBy = 'stylist' | 'chair';
+
+/** Turns the API's day into columns per stylist (or chair), keeping only sittings that start on that date. */
+export function layOutDay(day: DayView, by: ColumnsBy = 'stylist'): DayLayout {
   const active = day.bookings.filter((b) => b.status !== 'cancelled');
   const placed: PlacedSitting[] = active.flatMap((booking) =>
     booking.sittings
@@ -64,9 +67,10 @@ export function layOutDay(day: DayView): DayLayout {
   return {
     firstHour: Math.min(firstHour, DEFAULT_HOURS.first),
     lastHour: Math.max(lastHour, DEFAULT_HOURS.last, firstHour + 1),
-    columns: day.stylists.map((stylist) => ({
-      stylist,
-      sittings: assignLanes(placed.filter((p) => p.booking.stylist.id === stylist.id)),
+    columns: (by === 'stylist' ? day.stylists : day.chairs).map(({ id, name }) => ({
+      id,
+      name,
+      sittings: assignLanes(placed.filter((p) => (by === 'stylist' ? p.booking.stylist.id : p.sitting.chairId) === id)),
     })),
     hiddenCancelled: day.bookings.length - active.length,
   };

@@ -1,3 +1,4 @@
+import { Link } from 'react-router-dom';
 import { BookingStatusBadge } from '../../../components/ui/booking-status-badge';
 import { sittingLabel } from '../../../lib/booking-labels';
 import { formatTimeRange } from '../../../lib/time';
@@ -5,13 +6,13 @@ import type { PlacedSitting } from '../lay-out-day';
 import { StepSegment } from './step-segment';
 import { PX_PER_MIN } from './timeline-scale';
 
-type Props = { placed: PlacedSitting; firstHour: number; timeZone: string; roomy: boolean };
+type Props = { placed: PlacedSitting; firstHour: number; timeZone: string; roomy: boolean; href?: string };
 
 /**
  * A sitting on the timeline: a strip of its steps (patterns) beside the words
  * (client, service, sitting, times), so no text sits on a pattern.
  */
-export function SittingBlock({ placed, firstHour, timeZone, roomy }: Props) {
+export function SittingBlock({ placed, firstHour, timeZone, roomy, href }: Props) {
   const { booking, sitting, startMin, endMin, lane, lanes } = placed;
   const times = formatTimeRange(sitting.start, sitting.end, timeZone);
   const ofLabel = sittingLabel(sitting.seq, sitting.of);
@@ -34,7 +35,15 @@ export function SittingBlock({ placed, firstHour, timeZone, roomy }: Props) {
         ))}
       </ul>
       <div className="min-w-0 flex-1 px-2 py-1 text-xs leading-snug">
-        <p className="truncate text-sm font-bold">{booking.client.name}</p>
+        <p className="truncate text-sm font-bold">
+          {href ? (
+            <Link to={href} className="text-link">
+              {booking.client.name}
+            </Link>
+          ) : (
+            booking.client.name
+          )}
+        </p>
         <p className="truncate">{booking.service.name}</p>
         {ofLabel && <p className="font-bold">{ofLabel}</p>}
         <p className="tabular">{times}</p>

@@ -1,6 +1,8 @@
 import { useId } from 'react';
+import type { HandsFreeWindowView } from '../../../../shared/schemas/window.schemas';
 import type { PlacedSitting } from '../lay-out-day';
 import { SittingBlock } from './sitting-block';
+import { WindowBand } from './window-band';
 import { COLUMN_HEADER_CLASS, PX_PER_MIN } from './timeline-scale';
 
 type Props = {
@@ -8,14 +10,18 @@ type Props = {
   sittings: PlacedSitting[];
   firstHour: number;
   lastHour: number;
+  date: string;
   timeZone: string;
   roomy: boolean;
+  /** Hands-free windows of this column's stylist (none in the chair view). */
+  windows: HandsFreeWindowView[];
+  bookingHref?: (bookingId: string) => string;
 };
 
 const HOUR_PX = 60 * PX_PER_MIN;
 
-/** One stylist's day; faint hour lines behind the sittings. */
-export function StylistColumn({ name, sittings, firstHour, lastHour, timeZone, roomy }: Props) {
+/** One stylist's (or chair's) day; faint hour lines behind the sittings, hands-free windows in a gutter. */
+export function StylistColumn({ name, sittings, firstHour, lastHour, date, timeZone, roomy, windows, bookingHref }: Props) {
   const headingId = useId();
   return (
     <section aria-labelledby={headingId} className={`${roomy ? 'flex-1' : 'w-60 shrink-0 sm:flex-1'} min-w-60 border-r border-ink/10 last:border-r-0`}>
@@ -29,15 +35,25 @@ export function StylistColumn({ name, sittings, firstHour, lastHour, timeZone, r
           backgroundImage: `repeating-linear-gradient(to bottom, rgb(30 42 54 / 0.1) 0 1px, transparent 1px ${HOUR_PX}px)`,
         }}
       >
-        {sittings.map((placed) => (
-          <SittingBlock
-            key={`${placed.booking.id}-${placed.sitting.seq}`}
-            placed={placed}
-            firstHour={firstHour}
-            timeZone={timeZone}
-            roomy={roomy}
-          />
-        ))}
+        <div className="absolute inset-y-0 left-0" style={{ right: windows.length ? '4.5rem' : 0 }}>
+          {sittings.map((placed) => (
+            <SittingBlock
+              key={`${placed.booking.id}-${placed.sitting.seq}`}
+              placed={placed}
+              firstHour={firstHour}
+              timeZone={timeZone}
+              roomy={roomy}
+              href={bookingHref?.(placed.booking.id)}
+            />
+          ))}
+        </div>
+        {windows.length > 0 && (
+          <ul aria-label={`Hands-free windows of ${name}`} className="absolute inset-y-0 right-0 w-[4.5rem]">
+            {windows.map((win) => (
+              <WindowBand key={win.start} window={win} date={date} firstHour={firstHour} timeZone={timeZone} />
+            ))}
+          </ul>
+        )}
         {sittings.length === 0 && <p className="p-3 text-sm text-ink/80">No bookings.</p>}
       </div>
     </section>

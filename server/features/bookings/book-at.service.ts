@@ -1,0 +1,99 @@
+import { DateTime } from 'luxon';
+import type { Db } from '../../db/database';
+import type { StepPlan } from '../../../shared/schemas/step-plan.schemas';
+import type { ServiceSummary } from '../../../shared/schemas/service.schemas';
+import type { BookingStatus } from '../../../shared/schemas/common.schemas';
+import type { Option } from '../../../shared/engine/engine';
+import { checkSkinTest } from '../../../shared/rules/skin-test-rule';
+import { AppError } from '../../lib/app-error';
+import { loadSalonCalendars } from '../planning/salon-calendars.repository';
+import { horizonFor } from '../planning/engine-request';
+import { planExactlyAt } from '../planning/plan-at';
+import { skinTestRecords } from '../skin-tests/skin-tests.repository';
+import { writeAudit } from '../audit/audit.repository';
+import { insertBooking } from './bookings.repository';
+import { bookingSnapshot } from './booking-snapshot.repository';
+
+export interface BookAtInput {
+  salon: { id: string; timeZone: string; skinTestLeadHours: number; skinTestValidityDays: number; granularityMinutes: number };
+  clientId: string;
+  service: ServiceSummary;
+  plan: StepPlan;
+  stylistId: string;
+  start: Date;
+  actorUserId: string | null;
+  now: Date;
+  status?: BookingStatus;
+}
+
+const taken = () => new AppError('CONFLICT', 409, 'Someone booked that time a moment ago. Look for times again.');
+
+/** Throws 409 SKIN_TEST when the skin-test rule forbids colour at these sitting starts. */
+export async function assertSkinTestAllows(db: Db, input: Pick<BookAtInput, 'salon' | 'clientId' | 'service' | 'now'>, starts: Date[]) {
+  const verdict = checkSkinTest(
+    input.service.needsSkinTest,
+    await skinTestRecords(db, input.clientId),
+    { leadHours: input.salon.skinTestLeadHours, validityDays: input.salon.skinTestValidityDays },
+    input.now,
+  );
+  if (!verdict.ok) throw new AppError('SKIN_TEST', 409, verdict.message);
+  if (verdict.earliestAllowed && starts[0] < verdict.earliestAllowed) {
+    const when = DateTime.fromJSDate(verdict.earliestAllowed, { zone: input.salon.timeZone }).toFormat('ccc d LLL, HH:mm');
+    throw new AppError('SKIN_TEST', 409, `The skin-test rule allows this colour from ${when} (${input.salon.skinTestLeadHours} hours after the test). ${verdict.message}`);
+  }
+  if (verdict.latestAllowed && starts.some((s) => s > verdict.latestAllowed!)) {
+    throw new AppError('SKIN_TEST', 409, `A sitting falls after the skin test stops being valid. ${verdict.message}`);
+  }
+}
+
+/**
+ * Books the engine's plan for this stylist starting exactly at `start`, inside the caller's transaction,
+ * after the caller has locked the stylist. The engine re-checks every rule against the current book; the
+ * exclusion constraints are the last word on chairs, basins and hands.
+ */
+export async function bookAt(db: Db, input: BookAtInput): Promise<string> {
+  if (input.start < input.now) {
+    throw new AppError('VALIDATION_FAILED', 400, 'Some fields need attention.', { start: 'That time has already passed.' });
+  }
+  const local = DateTime.fromJSDate(input.start, { zone: input.salon.timeZone });
+  if (local.minute % input.salon.granularityMinutes !== 0 || local.second !== 0) {
+    throw new AppError('VALIDATION_FAILED', 400, 'Some fields need attention.', { start: `Start times fall on the salon's ${input.salon.granularityMinutes}-minute grid.` });
+  }
+  const found = await planOrExplain(db, input);
+  await assertSkinTestAllows(db, input, found.sittings.map((s) => new Date(s.steps[0].start)));
+  try {
+    const id = await insertBooking(db, {
+      salonId: input.salon.id,
+      clientId: input.clientId,
+      serviceId: input.service.id,
+      stylistId: input.stylistId,
+      status: input.status ?? 'booked',
+      stepPlan: input.plan,
+      priceCents: input.service.priceCents,
+      depositCents: input.service.depositCents,
+      createdBy: input.actorUserId,
+      sittings: found.sittings.map((s, i) => ({
+        chairId: s.chair,
+        steps: s.steps.map((st, j) => ({ kind: st.kind, label: input.plan.sittings[i].steps[j].label, start: new Date(st.start), end: new Date(st.end), basinId: st.basin ?? null })),
+      })),
+    });
+    await writeAudit(db, { salonId: input.salon.id, actorUserId: input.actorUserId, entity: 'booking', entityId: id, action: 'booked', after: (await bookingSnapshot(db, id))?.audit });
+    return id;
+  } catch (err) {
+    if ((err as { code?: string }).code === '23P01') throw taken();
+    throw err;
+  }
+}
+
+async function planOrExplain(db: Db, input: BookAtInput): Promise<Option> {
+  const startDate = DateTime.fromJSDate(input.start, { zone: input.salon.timeZone }).toISODate()!;
+  const calendars = await loadSalonCalendars(db, input.salon.id, horizonFor(startDate, input.plan, 1));
+  const stylist = calendars.stylists.find((s) => s.id === input.stylistId);
+  if (!stylist) throw new AppError('VALIDATION_FAILED', 400, 'Some fields need attention.', { stylistId: 'No such stylist in this salon.' });
+  if (!stylist.skills.includes(input.service.skill)) {
+    throw new AppError('VALIDATION_FAILED', 400, 'Some fields need attention.', { stylistId: `This stylist does not have the "${input.service.skill}" skill this service needs.` });
+  }
+  const result = planExactlyAt(calendars, { skill: input.service.skill, stylistId: input.stylistId, plan: input.plan, start: input.start });
+  if ('reason' in result) throw new AppError('CONFLICT', 409, result.reason);
+  return result.plan;
+}

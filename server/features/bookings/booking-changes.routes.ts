@@ -1,0 +1,74 @@
+import { apiPaths } from '../../../shared/api/api-paths';
+import {
+  BookingHistorySchema,
+  BookingOptionsRequestSchema,
+  BookingOptionsResponseSchema,
+  CancelBookingSchema,
+  CreateBookingSchema,
+  MoveSittingSchema,
+} from '../../../shared/schemas/booking.schemas';
+import { BookingViewSchema } from '../../../shared/schemas/booking-view.schemas';
+import { BookingStatusSchema, IdParamsSchema } from '../../../shared/schemas/common.schemas';
+import type { AppDeps } from '../../app-deps';
+import type { Db } from '../../db/database';
+import { DESK } from '../../auth/require-access';
+import { apiRoute } from '../../lib/api-route';
+import { notFound } from '../../lib/app-error';
+import { findSalon } from '../salon/salon.repository';
+import { listAudit } from '../audit/audit.repository';
+import { loadBookingViews } from './booking-views.repository';
+import { findBookingOptions } from './booking-options.service';
+import { createBooking } from './create-booking.service';
+import { moveSitting } from './move-booking.service';
+import { cancelBooking } from './cancel-booking.service';
+
+/** One booking as the desk sees it (any status). */
+export async function deskBookingView(db: Db, salonId: string, timeZone: string, bookingId: string) {
+  const [view] = await loadBookingViews(db, { salonId, bookingId, statuses: BookingStatusSchema.options }, timeZone);
+  if (!view) throw notFound('That booking');
+  return view;
+}
+
+export function registerBookingChangeRoutes({ table, db }: AppDeps): void {
+  apiRoute(
+    table,
+    { method: 'post', path: apiPaths.bookingOptions, access: DESK, summary: 'Options for a service: earliest plans per stylist and day', body: BookingOptionsRequestSchema, response: BookingOptionsResponseSchema },
+    async ({ user, body }) => findBookingOptions(db, await findSalon(db, user.salonId), body, new Date()),
+  );
+  apiRoute(
+    table,
+    { method: 'post', path: apiPaths.bookings, access: DESK, summary: 'Book one option (all its sittings) — idempotent per key', body: CreateBookingSchema, response: BookingViewSchema, status: 201 },
+    async ({ user, body }) => {
+      const salon = await findSalon(db, user.salonId);
+      const id = await createBooking(db, salon, user, body, new Date());
+      return deskBookingView(db, salon.id, salon.timeZone, id);
+    },
+  );
+  apiRoute(
+    table,
+    { method: 'post', path: '/api/bookings/:id/move', access: DESK, summary: 'Move one sitting to a new time (and stylist)', params: IdParamsSchema, body: MoveSittingSchema, response: BookingViewSchema },
+    async ({ user, params, body }) => {
+      const salon = await findSalon(db, user.salonId);
+      await moveSitting(db, salon, user.id, { bookingId: params.id, sitting: body.sitting, start: new Date(body.start), stylistId: body.stylistId }, new Date());
+      return deskBookingView(db, salon.id, salon.timeZone, params.id);
+    },
+  );
+  apiRoute(
+    table,
+    { method: 'post', path: '/api/bookings/:id/cancel', access: DESK, summary: 'Cancel with a reason; the deposit policy decides kept or refunded', params: IdParamsSchema, body: CancelBookingSchema, response: BookingViewSchema },
+    async ({ user, params, body }) => {
+      const salon = await findSalon(db, user.salonId);
+      await cancelBooking(db, salon, user.id, params.id, body.reason, new Date());
+      return deskBookingView(db, salon.id, salon.timeZone, params.id);
+    },
+  );
+  apiRoute(
+    table,
+    { method: 'get', path: '/api/bookings/:id/history', access: DESK, summary: "A booking's changes: who, when, what, before and after", params: IdParamsSchema, response: BookingHistorySchema },
+    async ({ user, params }) => {
+      const entries = await listAudit(db, user.salonId, 'booking', params.id);
+      if (!entries.length) await deskBookingView(db, user.salonId, 'UTC', params.id); // 404 for unknown ids
+      return { entries: entries.map((e) => ({ at: e.at.toISOString(), actor: e.actor, action: e.action, before: e.before ?? null, after: e.after ?? null })) };
+    },
+  );
+}

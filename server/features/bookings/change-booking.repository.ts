@@ -1,0 +1,41 @@
+import { sql } from 'kysely';
+import type { Db } from '../../db/database';
+import type { NewStep } from './bookings.repository';
+import { tstzRange } from './bookings.repository';
+
+/** Puts one sitting in a new chair at new times (its steps replaced). */
+export async function replaceSitting(db: Db, bookingId: string, seq: number, chairId: string, stylistId: string, steps: NewStep[]): Promise<void> {
+  const sitting = await db
+    .updateTable('sittings')
+    .set({ chair_id: chairId, during: tstzRange(steps[0].start, steps[steps.length - 1].end) })
+    .where('booking_id', '=', bookingId)
+    .where('seq', '=', seq)
+    .returning('id')
+    .executeTakeFirstOrThrow();
+  await db.deleteFrom('booking_steps').where('sitting_id', '=', sitting.id).execute();
+  await db
+    .insertInto('booking_steps')
+    .values(steps.map((s, j) => ({ sitting_id: sitting.id, seq: j + 1, kind: s.kind, label: s.label, stylist_id: stylistId, basin_id: s.basinId, during: tstzRange(s.start, s.end) })))
+    .execute();
+}
+
+export async function setStylist(db: Db, bookingId: string, stylistId: string): Promise<void> {
+  await db.updateTable('bookings').set({ stylist_id: stylistId }).where('id', '=', bookingId).execute();
+}
+
+/** Cancels: the status and reason change, and every sitting and step stops holding its chair, basin and hands. */
+export async function markCancelled(db: Db, bookingId: string, reason: string, depositOutcome: 'kept' | 'refunded' | null): Promise<void> {
+  await db.updateTable('bookings').set({ status: 'cancelled', cancel_reason: reason, deposit_outcome: depositOutcome }).where('id', '=', bookingId).execute();
+  await db.updateTable('sittings').set({ live: false }).where('booking_id', '=', bookingId).execute();
+  await db
+    .updateTable('booking_steps')
+    .set({ live: false })
+    .where('sitting_id', 'in', db.selectFrom('sittings').select('id').where('booking_id', '=', bookingId))
+    .execute();
+}
+
+/** Start of each sitting of a booking, in order. */
+export async function sittingStarts(db: Db, bookingId: string): Promise<Date[]> {
+  const rows = await db.selectFrom('sittings').select(sql<Date>`lower(during)`.as('start')).where('booking_id', '=', bookingId).orderBy('seq').execute();
+  return rows.map((r) => r.start);
+}

@@ -1,0 +1,31 @@
+import type { Kysely } from 'kysely';
+import type { Database } from '../../db/schema';
+import type { CreateBooking } from '../../../shared/schemas/booking.schemas';
+import type { Salon } from '../../../shared/schemas/salon.schemas';
+import type { SessionUser } from '../../../shared/schemas/auth.schemas';
+import { notFound } from '../../lib/app-error';
+import { findClient } from '../clients/clients.repository';
+import { findService } from '../services/services.repository';
+import { lockStylists } from '../planning/stylist-lock';
+import { bookAt } from './book-at.service';
+import { findIdempotent, saveIdempotent } from './idempotency.repository';
+
+/**
+ * One booking with all its sittings, or the answer already given to this idempotency key. The key is looked
+ * up after the stylist lock, so a retry racing its original waits and then gets the original's booking.
+ */
+export async function createBooking(db: Kysely<Database>, salon: Salon, user: SessionUser, body: CreateBooking, now: Date): Promise<string> {
+  const [client, service] = await Promise.all([findClient(db, salon.id, body.clientId), findService(db, salon.id, body.serviceId)]);
+  if (!client) throw notFound('That client');
+  if (!service) throw notFound('That service');
+  return db.transaction().execute(async (trx) => {
+    await lockStylists(trx, [body.stylistId]);
+    const earlier = await findIdempotent(trx, user.id, body.idempotencyKey);
+    if (earlier) return (earlier.response as { bookingId: string }).bookingId;
+    const bookingId = await bookAt(trx, {
+      salon, clientId: client.id, service, plan: body.stepPlan, stylistId: body.stylistId, start: new Date(body.start), actorUserId: user.id, now,
+    });
+    await saveIdempotent(trx, user.id, body.idempotencyKey, 'POST /api/bookings', 201, { bookingId });
+    return bookingId;
+  });
+}

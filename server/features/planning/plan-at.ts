@@ -1,0 +1,38 @@
+import { DateTime } from 'luxon';
+import { planOptions, type Option, type Scenario } from '../../../shared/engine/engine';
+import type { StepPlan } from '../../../shared/schemas/step-plan.schemas';
+import { toEngineSittings } from './engine-request';
+
+export interface ExactRequest {
+  skill: string;
+  stylistId: string;
+  plan: StepPlan;
+  start: Date;
+}
+
+function ask(calendars: Scenario, req: ExactRequest): Option | undefined {
+  const earliest = DateTime.fromJSDate(req.start, { zone: calendars.timeZone }).toFormat("yyyy-MM-dd'T'HH:mm");
+  const { options } = planOptions({
+    ...calendars,
+    request: { skill: req.skill, stylist: req.stylistId, earliest, sittings: toEngineSittings(req.plan), limit: 1, spread: 'none' },
+  });
+  const first = options[0];
+  return first && Date.parse(first.sittings[0].steps[0].start) === req.start.getTime() ? first : undefined;
+}
+
+/**
+ * The engine's plan for this stylist starting exactly at `start`, or why there is none. The reason comes from
+ * asking again with less in the book: without any bookings (then it is hours or time off), with only the
+ * stylist's own bookings (then their hands or client limit), else a chair or basin is taken.
+ */
+export function planExactlyAt(calendars: Scenario, req: ExactRequest): { plan: Option } | { reason: string } {
+  const plan = ask(calendars, req);
+  if (plan) return { plan };
+  if (!ask({ ...calendars, bookings: [] }, req)) {
+    return { reason: "That time is outside the salon's opening hours, the stylist's working hours, or falls in their time off (or the later sittings cannot fit their day range)." };
+  }
+  if (!ask({ ...calendars, bookings: calendars.bookings.filter((b) => b.stylist === req.stylistId) }, req)) {
+    return { reason: 'The stylist is busy then: their hands are taken by another client, or they already have as many clients in chairs as they take at once.' };
+  }
+  return { reason: 'No chair (or basin, for the rinse) is free for the whole sitting at that time.' };
+}

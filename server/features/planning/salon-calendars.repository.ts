@@ -1,0 +1,80 @@
+import { sql } from 'kysely';
+import { DateTime } from 'luxon';
+import type { Db } from '../../db/database';
+import type { Scenario } from '../../../shared/engine/engine';
+
+export interface Horizon {
+  /** Local dates in the salon's zone; `to` is exclusive. */
+  from: string;
+  to: string;
+}
+
+/** A scenario without a request; window fits are added by the caller that needs them. */
+export type SalonCalendars = Scenario;
+
+/** A wall-clock `YYYY-MM-DDTHH:mm` in the salon's zone, the engine's input format. */
+export const toLocal = (d: Date, zone: string) => DateTime.fromJSDate(d, { zone }).toFormat("yyyy-MM-dd'T'HH:mm");
+const hhmm = (t: string) => t.slice(0, 5);
+
+/**
+ * Everything the engine needs to know about a salon over a horizon: opening hours, stylists with their
+ * hours and time off, chairs, basins, and every live booking step. `except` leaves one booking out
+ * (a booking being moved must not collide with itself).
+ */
+export async function loadSalonCalendars(db: Db, salonId: string, horizon: Horizon, except?: string): Promise<SalonCalendars> {
+  const salon = await db.selectFrom('salons').select(['time_zone', 'granularity_minutes']).where('id', '=', salonId).executeTakeFirstOrThrow();
+  const zone = salon.time_zone;
+  const from = DateTime.fromISO(horizon.from, { zone }).toJSDate();
+  const to = DateTime.fromISO(horizon.to, { zone }).toJSDate();
+  const range = sql`tstzrange(${from}, ${to}, '[)')`;
+  const [hours, staff, staffHours, timeOff, chairs, basins, steps] = await Promise.all([
+    db.selectFrom('salon_hours').select(['rrule', 'start_time', 'end_time']).where('salon_id', '=', salonId).execute(),
+    db.selectFrom('staff').select(['id', 'skills', 'max_clients_at_once']).where('salon_id', '=', salonId).where('active', '=', true).orderBy('id').execute(),
+    db.selectFrom('staff_hours as h').innerJoin('staff as s', 's.id', 'h.staff_id').select(['h.staff_id', 'h.rrule', 'h.start_time', 'h.end_time']).where('s.salon_id', '=', salonId).execute(),
+    db
+      .selectFrom('time_off as t')
+      .innerJoin('staff as s', 's.id', 't.staff_id')
+      .select(['t.staff_id', sql<Date>`greatest(lower(t.during), ${from}::timestamptz)`.as('start'), sql<Date>`least(upper(t.during), ${to}::timestamptz)`.as('end')])
+      .where('s.salon_id', '=', salonId)
+      .where(sql<boolean>`t.during && ${range}`)
+      .execute(),
+    db.selectFrom('chairs').select('id').where('salon_id', '=', salonId).where('active', '=', true).orderBy('name').execute(),
+    db.selectFrom('basins').select('id').where('salon_id', '=', salonId).where('active', '=', true).orderBy('name').execute(),
+    db
+      .selectFrom('booking_steps as st')
+      .innerJoin('sittings as si', 'si.id', 'st.sitting_id')
+      .innerJoin('bookings as b', 'b.id', 'si.booking_id')
+      .select(['si.id as sittingId', 'b.stylist_id', 'si.chair_id', 'st.kind', 'st.basin_id', sql<Date>`lower(st.during)`.as('start'), sql<Date>`upper(st.during)`.as('end')])
+      .where('b.salon_id', '=', salonId)
+      .where('st.live', '=', true)
+      .where('b.id', '!=', except ?? '00000000-0000-0000-0000-000000000000')
+      .where(sql<boolean>`si.during && ${range}`)
+      .orderBy('si.id')
+      .orderBy('st.seq')
+      .execute(),
+  ]);
+  const bookings = new Map<string, SalonCalendars['bookings'][number]>();
+  for (const s of steps) {
+    const booking = bookings.get(s.sittingId) ?? { id: s.sittingId, stylist: s.stylist_id, chair: s.chair_id, steps: [] };
+    const times = { start: toLocal(s.start, zone), end: toLocal(s.end, zone) };
+    booking.steps.push(s.kind === 'basin' ? { kind: 'basin', ...times, basin: s.basin_id! } : { kind: s.kind, ...times });
+    bookings.set(s.sittingId, booking);
+  }
+  return {
+    timeZone: zone,
+    granularityMinutes: salon.granularity_minutes,
+    horizon,
+    salonHours: hours.map((h) => ({ rrule: h.rrule, start: hhmm(h.start_time), end: hhmm(h.end_time) })),
+    stylists: staff.map((s) => ({
+      id: s.id,
+      skills: s.skills,
+      maxClientsAtOnce: s.max_clients_at_once,
+      hours: staffHours.filter((h) => h.staff_id === s.id).map((h) => ({ rrule: h.rrule, start: hhmm(h.start_time), end: hhmm(h.end_time) })),
+      timeOff: timeOff.filter((t) => t.staff_id === s.id).map((t) => ({ start: toLocal(t.start, zone), end: toLocal(t.end, zone) })),
+    })),
+    chairs: chairs.map((c) => ({ id: c.id })),
+    basins: basins.map((b) => ({ id: b.id })),
+    bookings: [...bookings.values()],
+    fits: [],
+  };
+}

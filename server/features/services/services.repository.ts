@@ -1,0 +1,45 @@
+import type { Db } from '../../db/database';
+import type { ServiceSummary } from '../../../shared/schemas/service.schemas';
+import { StepPlanSchema } from '../../../shared/schemas/step-plan.schemas';
+
+type Row = Awaited<ReturnType<typeof baseQuery>>[number];
+const baseQuery = (db: Db, salonId: string) =>
+  db
+    .selectFrom('services')
+    .select(['id', 'name', 'description', 'category', 'skill', 'price_cents', 'price_is_from', 'deposit_cents', 'online_bookable', 'needs_skin_test', 'step_plan'])
+    .where('salon_id', '=', salonId)
+    .where('active', '=', true)
+    .orderBy('name')
+    .execute();
+
+const toSummary = (r: Row): ServiceSummary => ({
+  id: r.id,
+  name: r.name,
+  description: r.description,
+  category: r.category,
+  skill: r.skill,
+  priceCents: r.price_cents,
+  priceIsFrom: r.price_is_from,
+  depositCents: r.deposit_cents,
+  onlineBookable: r.online_bookable,
+  needsSkinTest: r.needs_skin_test,
+  stepPlan: StepPlanSchema.parse(r.step_plan),
+});
+
+export async function listServices(db: Db, salonId: string): Promise<ServiceSummary[]> {
+  return (await baseQuery(db, salonId)).map(toSummary);
+}
+
+export async function findService(db: Db, salonId: string, id: string): Promise<ServiceSummary | undefined> {
+  return (await listServices(db, salonId)).find((s) => s.id === id);
+}
+
+export function listStylistDetails(db: Db, salonId: string) {
+  return db
+    .selectFrom('staff')
+    .select(['id', 'display_name as name', 'skills', 'max_clients_at_once as maxClientsAtOnce'])
+    .where('salon_id', '=', salonId)
+    .where('active', '=', true)
+    .orderBy('display_name')
+    .execute();
+}

@@ -1,0 +1,39 @@
+import type { Kysely } from 'kysely';
+import type { Database } from '../../db/schema';
+import type { Salon } from '../../../shared/schemas/salon.schemas';
+import type { SessionUser } from '../../../shared/schemas/auth.schemas';
+import type { z } from 'zod';
+import type { FillWindowSchema } from '../../../shared/schemas/window.schemas';
+import { AppError, forbidden, notFound } from '../../lib/app-error';
+import { findClient, insertClient } from '../clients/clients.repository';
+import { findService } from '../services/services.repository';
+import { findStaffIdForUser } from '../bookings/salon-resources.repository';
+import { lockStylists } from '../planning/stylist-lock';
+import { bookAt } from '../bookings/book-at.service';
+import { findIdempotent, saveIdempotent } from '../bookings/idempotency.repository';
+import { closeStandby } from '../standby/standby.repository';
+
+type FillWindow = z.infer<typeof FillWindowSchema>;
+
+/** Books a walk-in or a standby client into a window with one action; the engine re-checks it fits. */
+export async function fillWindow(db: Kysely<Database>, salon: Salon, user: SessionUser, body: FillWindow, now: Date): Promise<string> {
+  if (user.role === 'stylist' && (await findStaffIdForUser(db, user.id)) !== body.stylistId) throw forbidden();
+  const service = await findService(db, salon.id, body.serviceId);
+  if (!service) throw notFound('That service');
+  if (service.stepPlan.sittings.length !== 1) {
+    throw new AppError('VALIDATION_FAILED', 400, 'Some fields need attention.', { serviceId: 'Only one-sitting services go into a window.' });
+  }
+  if (body.clientId && !(await findClient(db, salon.id, body.clientId))) throw notFound('That client');
+  return db.transaction().execute(async (trx) => {
+    await lockStylists(trx, [body.stylistId]);
+    const earlier = await findIdempotent(trx, user.id, body.idempotencyKey);
+    if (earlier) return (earlier.response as { bookingId: string }).bookingId;
+    const clientId =
+      body.clientId ??
+      (await insertClient(trx, { salonId: salon.id, userId: null, name: body.walkIn!.name, email: null, phone: body.walkIn!.phone || null, notes: 'Walk-in' }));
+    const bookingId = await bookAt(trx, { salon, clientId, service, plan: service.stepPlan, stylistId: body.stylistId, start: new Date(body.start), actorUserId: user.id, now });
+    if (body.standbyEntryId) await closeStandby(trx, salon.id, body.standbyEntryId);
+    await saveIdempotent(trx, user.id, body.idempotencyKey, 'POST /api/windows/fill', 201, { bookingId });
+    return bookingId;
+  });
+}

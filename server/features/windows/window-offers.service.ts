@@ -1,0 +1,78 @@
+import { createHash, randomBytes } from 'node:crypto';
+import type { Kysely } from 'kysely';
+import type { z } from 'zod';
+import type { Database } from '../../db/schema';
+import type { Salon } from '../../../shared/schemas/salon.schemas';
+import type { SessionUser } from '../../../shared/schemas/auth.schemas';
+import type { OfferViewSchema, OfferWindowSchema } from '../../../shared/schemas/window.schemas';
+import type { Mailer } from '../../mail/mailer';
+import type { SmsSender } from '../../sms/sms-sender';
+import { AppError, forbidden, notFound } from '../../lib/app-error';
+import { findService } from '../services/services.repository';
+import { findSalon } from '../salon/salon.repository';
+import { findStaffIdForUser, listStylists } from '../bookings/salon-resources.repository';
+import { lockStylists } from '../planning/stylist-lock';
+import { bookAt } from '../bookings/book-at.service';
+import { closeStandby, listStandby } from '../standby/standby.repository';
+import { findOffer, insertOffer, lockSlotOffers, setOfferStatus } from './window-offers.repository';
+import { sendOffer, sendOfferTaken } from './offer-messages';
+
+type Senders = { mailer: Mailer; sms: SmsSender };
+type OfferView = z.infer<typeof OfferViewSchema>;
+const sha256 = (s: string) => createHash('sha256').update(s).digest('hex');
+
+/** Sends each chosen standby client a link to the window; returns how many were offered. */
+export async function offerWindow(db: Kysely<Database>, senders: Senders, salon: Salon, user: SessionUser, body: z.infer<typeof OfferWindowSchema>, baseUrl: string) {
+  if (user.role === 'stylist' && (await findStaffIdForUser(db, user.id)) !== body.stylistId) throw forbidden();
+  const [service, stylists, entries] = await Promise.all([findService(db, salon.id, body.serviceId), listStylists(db, salon.id), listStandby(db, salon.id)]);
+  const stylist = stylists.find((s) => s.id === body.stylistId);
+  if (!service || !stylist) throw notFound('That service or stylist');
+  const chosen = entries.filter((e) => body.standbyEntryIds.includes(e.id));
+  if (chosen.length !== body.standbyEntryIds.length) {
+    throw new AppError('VALIDATION_FAILED', 400, 'Some fields need attention.', { standbyEntryIds: 'Pick open standby entries of this salon.' });
+  }
+  const start = new Date(body.start);
+  if (start <= new Date()) throw new AppError('VALIDATION_FAILED', 400, 'Some fields need attention.', { start: 'That time has already passed.' });
+  for (const entry of chosen) {
+    const token = randomBytes(24).toString('base64url');
+    await insertOffer(db, { salonId: salon.id, standbyEntryId: entry.id, clientId: entry.client.id, serviceId: service.id, stylistId: stylist.id, startsAt: start, tokenHash: sha256(token), createdBy: user.id });
+    await sendOffer(senders, { to: entry.client, salonName: salon.name, serviceName: service.name, stylistName: stylist.name, start, timeZone: salon.timeZone }, `${baseUrl}/offer/${token}`);
+  }
+  return { offers: chosen.length };
+}
+
+export async function viewOffer(db: Kysely<Database>, token: string, now = new Date()): Promise<OfferView> {
+  const offer = await findOffer(db, sha256(token));
+  if (!offer) throw notFound('That offer');
+  const status = offer.status === 'offered' && offer.expires_at <= now ? 'expired' : offer.status;
+  return { status, salonName: offer.salonName, serviceName: offer.serviceName, stylistName: offer.stylistName, start: offer.starts_at.toISOString(), timeZone: offer.timeZone, clientName: offer.clientName };
+}
+
+/** First to accept wins: the slot's offers are locked, the engine re-checks, the others are told it has gone. */
+export async function acceptOffer(db: Kysely<Database>, senders: Senders, token: string, now: Date): Promise<OfferView> {
+  const losers = await db.transaction().execute(async (trx) => {
+    // Lock order: the stylist first, then the slot's offers; taking a row lock before the stylist lock could
+    // deadlock with another accept of the same slot.
+    const found = await findOffer(trx, sha256(token));
+    if (!found) throw notFound('That offer');
+    await lockStylists(trx, [found.stylist_id]);
+    const slot = await lockSlotOffers(trx, found.stylist_id, found.starts_at);
+    const offer = (await findOffer(trx, sha256(token)))!;
+    if (offer.status !== 'offered' || slot.some((o) => o.status === 'taken')) throw new AppError('CONFLICT', 409, 'Sorry — someone else took this time first.');
+    if (offer.expires_at <= now) throw new AppError('CONFLICT', 409, 'Sorry — this offer has run out.');
+    const salon = await findSalon(trx, offer.salon_id);
+    const service = await findService(trx, salon.id, offer.service_id);
+    if (!service) throw notFound('That service');
+    const bookingId = await bookAt(trx, { salon, clientId: offer.client_id, service, plan: service.stepPlan, stylistId: offer.stylist_id, start: offer.starts_at, actorUserId: null, now });
+    await setOfferStatus(trx, [offer.id], 'taken', bookingId);
+    const others = slot.filter((o) => o.id !== offer.id && o.status === 'offered');
+    await setOfferStatus(trx, others.map((o) => o.id), 'gone');
+    await closeStandby(trx, salon.id, offer.standby_entry_id);
+    return { others, offer, salon, service };
+  });
+  const { offer, salon, service } = losers;
+  for (const o of losers.others) {
+    await sendOfferTaken(senders, { to: o, salonName: salon.name, serviceName: service.name, stylistName: offer.stylistName, start: offer.starts_at, timeZone: salon.timeZone });
+  }
+  return viewOffer(db, token, now);
+}

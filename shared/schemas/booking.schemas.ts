@@ -1,0 +1,106 @@
+import { z } from 'zod';
+import { IdSchema, InstantInputSchema, InstantSchema, LocalDateSchema, StepKindSchema } from './common.schemas';
+import { StepPlanSchema } from './step-plan.schemas';
+
+/** A wall-clock time in the salon's zone, `YYYY-MM-DDTHH:mm`. */
+export const LocalDateTimeSchema = z.string().regex(/^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}$/, 'Use a time like 2027-03-14T09:30');
+
+/** The desk asks for options: a client, a service, its (possibly edited) step plan, a stylist or any. */
+export const BookingOptionsRequestSchema = z
+  .object({
+    clientId: IdSchema,
+    serviceId: IdSchema,
+    stepPlan: StepPlanSchema,
+    stylistId: IdSchema.nullable(),
+    earliestDate: LocalDateSchema,
+    limit: z.number().int().min(1).max(20).default(6),
+  })
+  .strict();
+export type BookingOptionsRequest = z.input<typeof BookingOptionsRequestSchema>;
+
+export const PlannedStepViewSchema = z.object({
+  kind: StepKindSchema,
+  label: z.string(),
+  start: InstantSchema,
+  end: InstantSchema,
+  basinId: IdSchema.nullable(),
+  basinName: z.string().nullable(),
+});
+
+export const BookingOptionSchema = z.object({
+  stylistId: IdSchema,
+  stylistName: z.string(),
+  sittings: z.array(
+    z.object({ chairId: IdSchema, chairName: z.string(), start: InstantSchema, end: InstantSchema, steps: z.array(PlannedStepViewSchema) }),
+  ),
+  /** Minutes the client holds a chair, all sittings together. */
+  chairMinutes: z.number().int(),
+  /** Minutes of developing time in which the stylist's hands are free for someone else. */
+  handsFreeMinutes: z.number().int(),
+});
+export type BookingOption = z.infer<typeof BookingOptionSchema>;
+
+export const SkinTestCheckSchema = z.object({
+  required: z.boolean(),
+  /** False when the service cannot be booked at all for now (no test, or a positive or unclear one). */
+  ok: z.boolean(),
+  message: z.string(),
+  /** The earliest start the skin-test rule allows, when it allows one. */
+  earliestAllowed: InstantSchema.nullable(),
+});
+export type SkinTestCheck = z.infer<typeof SkinTestCheckSchema>;
+
+export const BookingOptionsResponseSchema = z.object({
+  timeZone: z.string(),
+  skinTest: SkinTestCheckSchema,
+  options: z.array(BookingOptionSchema),
+});
+export type BookingOptionsResponse = z.infer<typeof BookingOptionsResponseSchema>;
+
+/** Book one option: the same request plus the chosen stylist and first-sitting start. */
+export const CreateBookingSchema = z
+  .object({
+    clientId: IdSchema,
+    serviceId: IdSchema,
+    stepPlan: StepPlanSchema,
+    stylistId: IdSchema,
+    /** The first sitting's start as shown in the option (ISO 8601 with offset). */
+    start: InstantInputSchema,
+    /** A retried request with the same key answers the first result instead of booking twice. */
+    idempotencyKey: z.string().min(8).max(100),
+  })
+  .strict();
+export type CreateBooking = z.infer<typeof CreateBookingSchema>;
+
+export const MoveSittingSchema = z
+  .object({
+    sitting: z.number().int().min(1),
+    start: InstantInputSchema,
+    /** Another stylist with the skill; the booking's own stylist when left out. */
+    stylistId: IdSchema.optional(),
+  })
+  .strict();
+
+export const CancelBookingSchema = z.object({ reason: z.string().trim().min(3, 'Say why, in a few words').max(500) }).strict();
+
+export const AuditEntrySchema = z.object({
+  at: InstantSchema,
+  actor: z.string().nullable(),
+  action: z.string(),
+  before: z.unknown().nullable(),
+  after: z.unknown().nullable(),
+});
+export const BookingHistorySchema = z.object({ entries: z.array(AuditEntrySchema) });
+
+export const CreateClientSchema = z
+  .object({
+    name: z.string().trim().min(1, 'Enter a name').max(120),
+    email: z.union([z.literal(''), z.email('Enter a valid e-mail address')]).optional(),
+    phone: z
+      .string()
+      .transform((s) => s.replace(/[\s\-().]/g, ''))
+      .pipe(z.union([z.literal(''), z.string().regex(/^\+?[0-9]{7,15}$/, 'Enter a phone number')]))
+      .optional(),
+    notes: z.string().max(2000).optional(),
+  })
+  .strict();

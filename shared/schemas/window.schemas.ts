@@ -1,0 +1,54 @@
+import { z } from 'zod';
+import { IdSchema, InstantInputSchema, InstantSchema, LocalDateSchema } from './common.schemas';
+
+export const WindowFitSchema = z.object({ serviceId: IdSchema, name: z.string(), minutes: z.number().int() });
+
+/** A stylist's hands-free window with what fits and who on the standby list wants one of those fits. */
+export const HandsFreeWindowSchema = z.object({
+  stylistId: IdSchema,
+  start: InstantSchema,
+  end: InstantSchema,
+  minutes: z.number().int(),
+  fits: z.array(WindowFitSchema),
+  standby: z.array(z.object({ entryId: IdSchema, clientId: IdSchema, clientName: z.string(), serviceIds: z.array(IdSchema) })),
+});
+export type HandsFreeWindowView = z.infer<typeof HandsFreeWindowSchema>;
+export const WindowsQuerySchema = z.object({ date: LocalDateSchema.optional(), stylistId: IdSchema.optional() }).strict();
+export const WindowListSchema = z.object({ timeZone: z.string(), windows: z.array(HandsFreeWindowSchema) });
+
+/** Book a walk-in or a standby client straight into a window. */
+export const FillWindowSchema = z
+  .object({
+    stylistId: IdSchema,
+    serviceId: IdSchema,
+    start: InstantInputSchema,
+    clientId: IdSchema.optional(),
+    /** A walk-in with no client record yet. */
+    walkIn: z.object({ name: z.string().trim().min(1).max(120), phone: z.string().max(30).optional() }).strict().optional(),
+    standbyEntryId: IdSchema.optional(),
+    idempotencyKey: z.string().min(8).max(100),
+  })
+  .strict()
+  .refine((b) => Boolean(b.clientId) !== Boolean(b.walkIn), { message: 'Pick a client or enter a walk-in', path: ['clientId'] });
+
+/** Offer a window to standby clients by SMS and e-mail; the first to accept gets it. */
+export const OfferWindowSchema = z
+  .object({
+    stylistId: IdSchema,
+    serviceId: IdSchema,
+    start: InstantInputSchema,
+    standbyEntryIds: z.array(IdSchema).min(1).max(20),
+  })
+  .strict();
+
+export const OfferViewSchema = z.object({
+  status: z.enum(['offered', 'taken', 'gone', 'expired']),
+  salonName: z.string(),
+  serviceName: z.string(),
+  stylistName: z.string(),
+  start: InstantSchema,
+  timeZone: z.string(),
+  clientName: z.string(),
+});
+export const OfferTokenParamsSchema = z.object({ token: z.string().min(20).max(100) }).strict();
+

@@ -1,0 +1,48 @@
+import { useSuspenseQuery } from '@tanstack/react-query';
+import { Link, useParams, type LoaderFunctionArgs } from 'react-router-dom';
+import { IdSchema } from '../../../shared/schemas/common.schemas';
+import { PageHeader } from '../../components/ui/page-header';
+import { TimeZoneNote } from '../../components/ui/time-zone-note';
+import { paths } from '../../config/paths';
+import { BookingHistory } from '../../features/booking-detail/components/booking-history';
+import { BookingSummary } from '../../features/booking-detail/components/booking-summary';
+import { CancelBookingForm } from '../../features/booking-detail/components/cancel-booking-form';
+import { MoveSittingForm } from '../../features/booking-detail/components/move-sitting-form';
+import { bookingQueries } from '../../features/bookings/api/booking-queries';
+import { catalogueQueries } from '../../features/catalogue/api/catalogue-queries';
+import { salonQueries } from '../../features/salon/api/salon-queries';
+import { localDateOf } from '../../lib/time';
+import { queryClient } from '../../lib/query-client';
+
+export async function loader({ params }: LoaderFunctionArgs) {
+  if (!IdSchema.safeParse(params.id).success) throw new Response(null, { status: 404 });
+  await Promise.all([
+    queryClient.ensureQueryData(bookingQueries.detail(params.id!)),
+    queryClient.ensureQueryData(salonQueries.current()),
+    queryClient.ensureQueryData(catalogueQueries.stylists()),
+  ]);
+  return null;
+}
+
+export function Component() {
+  const { id } = useParams();
+  const { data: booking } = useSuspenseQuery(bookingQueries.detail(id!));
+  const { data: salon } = useSuspenseQuery(salonQueries.current());
+  const { data: stylists } = useSuspenseQuery(catalogueQueries.stylists());
+  const first = booking.sittings[0];
+  const open = booking.status === 'booked' || booking.status === 'held' || booking.status === 'checked_in';
+  return (
+    <div className="flex flex-col gap-6">
+      <Link to={paths.desk(first ? localDateOf(first.start, salon.timeZone) : undefined)} className="text-link">
+        ← Back to the book
+      </Link>
+      <PageHeader title={`${booking.client.name} · ${booking.service.name}`} subtitle={<TimeZoneNote timeZone={salon.timeZone} />} />
+      <BookingSummary booking={booking} timeZone={salon.timeZone} currency={salon.currency} />
+      <div className="grid gap-6 lg:grid-cols-2">
+        {open && <MoveSittingForm booking={booking} timeZone={salon.timeZone} stylists={stylists.stylists} />}
+        <CancelBookingForm booking={booking} />
+      </div>
+      <BookingHistory bookingId={booking.id} timeZone={salon.timeZone} />
+    </div>
+  );
+}

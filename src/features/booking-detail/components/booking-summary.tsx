@@ -1,0 +1,67 @@
+import { Link } from 'react-router-dom';
+import type { BookingView } from '../../../../shared/schemas/booking-view.schemas';
+import { BookingStatusBadge } from '../../../components/ui/booking-status-badge';
+import { SectionCard } from '../../../components/ui/section-card';
+import { StepStrip } from '../../../components/ui/step-strip';
+import { paths } from '../../../config/paths';
+import { formatMoney, sittingLabel, stepKindLabels } from '../../../lib/booking-labels';
+import { formatDay, formatTimeRange } from '../../../lib/time';
+
+type Props = { booking: BookingView; timeZone: string; currency: string };
+
+/** Who, what, with whom, the status, money, and every sitting with its steps. */
+export function BookingSummary({ booking, timeZone, currency }: Props) {
+  return (
+    <SectionCard title="Booking">
+      <dl className="grid gap-x-6 gap-y-2 sm:grid-cols-[max-content_1fr]">
+        <dt className="font-bold">Client</dt>
+        <dd>
+          <Link to={paths.deskClient(booking.client.id)} className="text-link">
+            {booking.client.name}
+          </Link>
+        </dd>
+        <dt className="font-bold">Service</dt>
+        <dd>{booking.service.name}</dd>
+        <dt className="font-bold">Stylist</dt>
+        <dd>{booking.stylist.name}</dd>
+        <dt className="font-bold">Status</dt>
+        <dd>
+          <BookingStatusBadge status={booking.status} />
+        </dd>
+        <dt className="font-bold">Price</dt>
+        <dd className="tabular">{formatMoney(booking.priceCents, currency)}</dd>
+        <dt className="font-bold">Deposit</dt>
+        <dd className="tabular">
+          {booking.depositCents > 0 ? formatMoney(booking.depositCents, currency) : 'None'}
+          {booking.depositOutcome && ` · ${booking.depositOutcome === 'kept' ? 'kept by the salon' : 'refunded to the client'}`}
+        </dd>
+        {booking.cancelReason && (
+          <>
+            <dt className="font-bold">Cancelled because</dt>
+            <dd>{booking.cancelReason}</dd>
+          </>
+        )}
+      </dl>
+      <ol className="mt-4 flex flex-col gap-4">
+        {booking.sittings.map((sitting) => (
+          <li key={sitting.seq} className="flex flex-col gap-2 rounded-lg bg-linen p-3">
+            <h3 className="font-bold">
+              {sittingLabel(sitting.seq, sitting.of) ?? 'Sitting'}: {formatDay(sitting.start, timeZone)},{' '}
+              <span className="tabular">{formatTimeRange(sitting.start, sitting.end, timeZone)}</span> · {sitting.chairName}
+            </h3>
+            <StepStrip steps={sitting.steps} timeZone={timeZone} />
+            <ol aria-hidden="true" className="text-sm">
+              {sitting.steps.map((step) => (
+                <li key={step.start} className="tabular">
+                  {formatTimeRange(step.start, step.end, timeZone)} — {stepKindLabels[step.kind]}: {step.label}
+                  {step.basinName && ` · ${step.basinName}`}
+                  {step.minMinutes !== null && step.maxMinutes !== null && ` (${step.minMinutes}–${step.maxMinutes} min)`}
+                </li>
+              ))}
+            </ol>
+          </li>
+        ))}
+      </ol>
+    </SectionCard>
+  );
+}

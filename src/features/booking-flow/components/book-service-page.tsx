@@ -1,0 +1,105 @@
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useState } from 'react';
+import { FormProvider, useForm } from 'react-hook-form';
+import { useNavigate } from 'react-router-dom';
+import type { BookingOption, BookingOptionsRequest, CreateBooking } from '../../../../shared/schemas/booking.schemas';
+import type { ClientSummary } from '../../../../shared/schemas/client.schemas';
+import type { ServiceSummary } from '../../../../shared/schemas/service.schemas';
+import { FormAlert } from '../../../components/ui/form-alert';
+import { PageHeader } from '../../../components/ui/page-header';
+import { paths } from '../../../config/paths';
+import { isApiError } from '../../../lib/api-error';
+import { useIdempotencyKeys } from '../../../lib/use-idempotency-keys';
+import { useCreateBooking, useFindTimes } from '../../bookings/api/booking-mutations';
+import { BookFormSchema, toOptionsRequest, type BookFormInput, type BookFormValues } from '../book-form-schema';
+import { BookServiceForm } from './book-service-form';
+import { OptionList, optionKey } from './option-list';
+import { SkinTestNotice } from './skin-test-notice';
+
+type Props = { services: ServiceSummary[]; stylists: { id: string; name: string; skills: string[] }[]; today: string };
+
+/** The desk's booking flow: fill in the request, find times, book one option. */
+export function BookServicePage({ services, stylists, today }: Props) {
+  const navigate = useNavigate();
+  const form = useForm<BookFormInput, unknown, BookFormValues>({
+    resolver: zodResolver(BookFormSchema),
+    defaultValues: { clientId: '', serviceId: '', stylistId: '', earliestDate: today, stepPlan: { sittings: [] } },
+  });
+  const [client, setClient] = useState<ClientSummary | null>(null);
+  const [request, setRequest] = useState<BookingOptionsRequest | null>(null);
+  const [booking, setBooking] = useState<string | null>(null);
+  const findTimes = useFindTimes();
+  const create = useCreateBooking();
+  const keys = useIdempotencyKeys();
+  const skinTestService = services.find((s) => s.category === 'skin_test') ?? null;
+
+  const ask = (next: BookingOptionsRequest) => {
+    setRequest(next);
+    findTimes.mutate(next);
+  };
+  const chooseClient = (next: ClientSummary | null) => {
+    setClient(next);
+    form.setValue('clientId', next?.id ?? '', { shouldValidate: form.formState.isSubmitted });
+    findTimes.reset();
+  };
+  const chooseService = (service: ServiceSummary | null) => {
+    form.setValue('serviceId', service?.id ?? '');
+    form.setValue('stepPlan', structuredClone(service?.stepPlan ?? { sittings: [] }));
+    findTimes.reset();
+    create.reset();
+  };
+  const book = (option: BookingOption) => {
+    if (!request || !option.sittings[0]) return;
+    const action = optionKey(option);
+    setBooking(action);
+    const body: CreateBooking = {
+      clientId: request.clientId,
+      serviceId: request.serviceId,
+      stepPlan: request.stepPlan,
+      stylistId: option.stylistId,
+      start: option.sittings[0].start,
+      idempotencyKey: keys.keyFor(action),
+    };
+    create.mutate(body, {
+      onSuccess: (created) => {
+        keys.settle(action);
+        navigate(paths.deskBooking(created.id));
+      },
+      onError: (error) => {
+        keys.settle(action, error);
+        // Someone took the time meanwhile: show why and look again.
+        if (isApiError(error, 'CONFLICT')) ask(request);
+      },
+      onSettled: () => setBooking(null),
+    });
+  };
+
+  return (
+    <div className="flex flex-col gap-6">
+      <PageHeader title="Book a service" subtitle="Pick the client and the service, find times, and book one option." />
+      <FormProvider {...form}>
+        <BookServiceForm
+          services={services}
+          stylists={stylists}
+          client={client}
+          onClient={chooseClient}
+          onService={chooseService}
+          onFind={form.handleSubmit((values) => ask(toOptionsRequest(values)))}
+          finding={findTimes.isPending}
+          primary={!findTimes.data}
+        />
+      </FormProvider>
+      {findTimes.isError && <FormAlert>{findTimes.error.message}</FormAlert>}
+      {create.isError && <FormAlert>{create.error.message}</FormAlert>}
+      {findTimes.data && (
+        <SkinTestNotice
+          check={findTimes.data.skinTest}
+          timeZone={findTimes.data.timeZone}
+          earliestDate={request?.earliestDate ?? today}
+          onBookSkinTest={skinTestService ? () => chooseService(skinTestService) : null}
+        />
+      )}
+      {findTimes.data && <OptionList answer={findTimes.data} bookingKey={booking} onBook={book} />}
+    </div>
+  );
+}

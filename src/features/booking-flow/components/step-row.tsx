@@ -1,0 +1,64 @@
+import { useFormContext } from 'react-hook-form';
+import { fieldError } from '../../../lib/form-errors';
+import type { PlannedStep } from '../../../../shared/schemas/step-plan.schemas';
+import { Button } from '../../../components/ui/button';
+import { SelectField } from '../../../components/ui/select-field';
+import { StepKindIcon } from '../../../components/ui/step-kind-icon';
+import { TextField } from '../../../components/ui/text-field';
+import { stepKindLabels } from '../../../lib/booking-labels';
+import type { BookFormInput } from '../book-form-schema';
+import { stepOfKind } from '../book-form-schema';
+
+type Props = {
+  path: `stepPlan.sittings.${number}.steps.${number}`;
+  number: number;
+  count: number;
+  onMove: (by: -1 | 1) => void;
+  onRemove: () => void;
+  onReplace: (step: PlannedStep) => void;
+};
+
+const kindOptions = (['hands_on', 'developing', 'basin'] as const).map((kind) => ({ value: kind, label: stepKindLabels[kind] }));
+
+/** One editable step: kind, label, minutes (or least–most minutes while developing), order. */
+export function StepRow({ path, number, count, onMove, onRemove, onReplace }: Props) {
+  const { register, watch, getValues, formState } = useFormContext<BookFormInput>();
+  const step = watch(path);
+  const error = (field: string) => fieldError(formState.errors, `${path}.${field}`);
+  const name = `step ${number}`;
+  return (
+    <li className="grid grid-cols-2 items-end gap-3 rounded-lg bg-linen p-3 sm:grid-cols-[auto_10rem_1fr_auto_auto_auto]">
+      <span className="flex items-center gap-1 self-center font-bold tabular">
+        <StepKindIcon kind={step.kind} />
+        {number}.
+      </span>
+      <SelectField
+        label="Kind"
+        aria-label={`Kind of ${name}`}
+        options={kindOptions}
+        value={step.kind}
+        onChange={(event) => onReplace(stepOfKind(event.target.value as PlannedStep['kind'], getValues(path)))}
+      />
+      <TextField label="Step" aria-label={`Name of ${name}`} error={error('label')} {...register(`${path}.label`)} />
+      {step.kind === 'developing' ? (
+        <>
+          <TextField label="Least min" aria-label={`Least minutes of ${name}`} type="number" inputMode="numeric" className="w-24" error={error('minMinutes')} {...register(`${path}.minMinutes`, { valueAsNumber: true })} />
+          <TextField label="Most min" aria-label={`Most minutes of ${name}`} type="number" inputMode="numeric" className="w-24" error={error('maxMinutes')} {...register(`${path}.maxMinutes`, { valueAsNumber: true })} />
+        </>
+      ) : (
+        <TextField label="Minutes" aria-label={`Minutes of ${name}`} type="number" inputMode="numeric" className="w-24 sm:col-span-2" error={error('minutes')} {...register(`${path}.minutes`, { valueAsNumber: true })} />
+      )}
+      <div className="col-span-2 flex gap-1 sm:col-span-1">
+        <Button variant="quiet" aria-label={`Move ${name} up`} disabled={number === 1} onClick={() => onMove(-1)}>
+          ↑
+        </Button>
+        <Button variant="quiet" aria-label={`Move ${name} down`} disabled={number === count} onClick={() => onMove(1)}>
+          ↓
+        </Button>
+        <Button variant="quiet" aria-label={`Remove ${name}`} disabled={count === 1} onClick={onRemove}>
+          Remove
+        </Button>
+      </div>
+    </li>
+  );
+}

@@ -1,0 +1,22 @@
+import type { QueryClient } from '@tanstack/react-query';
+import type { BookingView } from '../../../../shared/schemas/booking-view.schemas';
+import { dayQueries } from '../../day-book/api/day-queries';
+import { weekQueries } from '../../week/api/week-queries';
+import { windowQueries } from '../../windows/api/window-queries';
+import { bookingQueries } from './booking-queries';
+
+/**
+ * After a booking is written: cache the server's answer for its own page, and
+ * refresh the views whose times it touches (days, weeks, hands-free windows) and
+ * its history. The day and week keys are by date, and a move can change dates, so
+ * those are refreshed by prefix.
+ */
+export function bookChanged(queryClient: QueryClient, booking: BookingView): Promise<unknown> {
+  queryClient.setQueryData(bookingQueries.detail(booking.id).queryKey, booking);
+  return Promise.all([
+    queryClient.invalidateQueries({ queryKey: bookingQueries.history(booking.id).queryKey }),
+    queryClient.invalidateQueries({ queryKey: dayQueries.all() }),
+    queryClient.invalidateQueries({ queryKey: weekQueries.all() }),
+    queryClient.invalidateQueries({ queryKey: windowQueries.all() }),
+  ]);
+}

@@ -1,0 +1,18 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { z } from 'zod';
+import { apiPaths } from '../../../../shared/api/api-paths';
+import type { CreateClientSchema } from '../../../../shared/schemas/booking.schemas';
+import { ClientSummarySchema } from '../../../../shared/schemas/client.schemas';
+import { apiWrite } from '../../../lib/api-client';
+import { clientQueries } from './client-queries';
+
+export type CreateClientInput = z.input<typeof CreateClientSchema>;
+
+export function useCreateClient() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (body: CreateClientInput) => apiWrite('POST', apiPaths.clients, body, ClientSummarySchema),
+    // A new client can match any earlier search.
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: clientQueries.lists() }),
+  });
+}

@@ -1,0 +1,57 @@
+import type { DateTime } from 'luxon';
+import type { BookingView, SittingView } from '../../../../shared/schemas/booking-view.schemas';
+import { BookingStatusBadge } from '../../../components/ui/booking-status-badge';
+import { StepKindIcon } from '../../../components/ui/step-kind-icon';
+import { StepStrip } from '../../../components/ui/step-strip';
+import { sittingLabel, stepKindLabels } from '../../../lib/booking-labels';
+import { formatTime, formatTimeRange } from '../../../lib/time';
+import { sittingProgress } from '../timer-state';
+import { DevelopingTimer } from './developing-timer';
+
+type Props = { booking: BookingView; sitting: SittingView; timeZone: string; now: DateTime };
+
+/** One client of the stylist's day: who, what, and the step under way now (with its timer while developing). */
+export function ClientDayCard({ booking, sitting, timeZone, now }: Props) {
+  const progress = sittingProgress(sitting, now);
+  const ofLabel = sittingLabel(sitting.seq, sitting.of);
+  return (
+    <article aria-label={`${booking.client.name}, ${booking.service.name}`} className="flex flex-col gap-3 rounded-2xl bg-white p-4 shadow-sm ring-1 ring-ink/15">
+      <div className="flex flex-wrap items-start justify-between gap-2">
+        <div>
+          <h3 className="text-lg font-bold">{booking.client.name}</h3>
+          <p>
+            {booking.service.name}
+            {ofLabel && <span className="font-bold"> · {ofLabel}</span>}
+          </p>
+          <p className="text-sm text-ink/80 tabular">
+            {formatTimeRange(sitting.start, sitting.end, timeZone)} · {sitting.chairName}
+          </p>
+        </div>
+        <BookingStatusBadge status={booking.status} />
+      </div>
+      <StepStrip steps={sitting.steps} timeZone={timeZone} />
+      {progress.state === 'upcoming' && (
+        <p>
+          First step at <span className="tabular">{formatTime(progress.next.start, timeZone)}</span>: {progress.next.label}
+        </p>
+      )}
+      {progress.state === 'finished' && <p className="text-ink/80">All steps done.</p>}
+      {progress.state === 'in_progress' && (
+        <div className="flex flex-col gap-2">
+          <p className="flex flex-wrap items-center gap-2">
+            <span className="font-bold">Now:</span>
+            <StepKindIcon kind={progress.step.kind} />
+            <span className="font-bold">{stepKindLabels[progress.step.kind]}</span> — {progress.step.label}
+            <span className="tabular text-ink/80">until {formatTime(progress.step.end, timeZone)}</span>
+          </p>
+          {progress.step.kind === 'developing' && <DevelopingTimer step={progress.step} now={now} />}
+          {progress.next && (
+            <p className="text-sm text-ink/80">
+              Next: {progress.next.label} at <span className="tabular">{formatTime(progress.next.start, timeZone)}</span>
+            </p>
+          )}
+        </div>
+      )}
+    </article>
+  );
+}

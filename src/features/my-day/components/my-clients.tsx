@@ -1,0 +1,30 @@
+import { useMemo } from 'react';
+import type { DayView } from '../../../../shared/schemas/booking-view.schemas';
+import { localDateOf } from '../../../lib/time';
+import { useNow } from '../use-now';
+import { ClientDayCard } from './client-day-card';
+
+type Props = { day: DayView };
+
+/** The stylist's clients of the day in the order they sit down. */
+export function MyClients({ day }: Props) {
+  const now = useNow();
+  const visits = useMemo(
+    () =>
+      day.bookings
+        .filter((b) => b.status !== 'cancelled' && b.status !== 'no_show')
+        .flatMap((booking) => booking.sittings.filter((s) => localDateOf(s.start, day.timeZone) === day.date).map((sitting) => ({ booking, sitting })))
+        .sort((a, b) => a.sitting.start.localeCompare(b.sitting.start)),
+    [day],
+  );
+  if (visits.length === 0) return <p>No clients on this day.</p>;
+  return (
+    <ol className="grid gap-4 lg:grid-cols-2">
+      {visits.map(({ booking, sitting }) => (
+        <li key={`${booking.id}-${sitting.seq}`}>
+          <ClientDayCard booking={booking} sitting={sitting} timeZone={day.timeZone} now={now} />
+        </li>
+      ))}
+    </ol>
+  );
+}

@@ -1,0 +1,23 @@
+import type { CapturedSms } from '../../../../shared/schemas/sms.schemas';
+import { formatDay, formatTime } from '../../../lib/time';
+import { LinkedText } from './linked-text';
+
+type Props = { messages: CapturedSms[]; timeZone: string };
+
+/** Captured text messages, newest first, shown in full (they are short). */
+export function SmsList({ messages, timeZone }: Props) {
+  if (messages.length === 0) return <p>No text messages sent yet.</p>;
+  const newestFirst = [...messages].sort((a, b) => b.receivedAt.localeCompare(a.receivedAt));
+  return (
+    <ul className="flex flex-col gap-3">
+      {newestFirst.map((sms) => (
+        <li key={sms.id} className="rounded-xl bg-white px-4 py-3 ring-1 ring-ink/15">
+          <p className="text-sm text-ink/80">
+            to {sms.to} · <span className="tabular">{formatDay(sms.receivedAt, timeZone)}, {formatTime(sms.receivedAt, timeZone)}</span>
+          </p>
+          <LinkedText text={sms.body} />
+        </li>
+      ))}
+    </ul>
+  );
+}

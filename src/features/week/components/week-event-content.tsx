@@ -1,0 +1,34 @@
+import { Link } from 'react-router-dom';
+import { stepKindPattern } from '../../../components/ui/step-kind-swatch';
+import { paths } from '../../../config/paths';
+import { sittingLabel } from '../../../lib/booking-labels';
+import { minutesBetween } from '../../../lib/time';
+import type { WeekEventData } from '../week-events';
+
+type Props = { data: WeekEventData; timeText: string };
+
+/** A sitting in the week calendar: its steps as a patterned strip, and who, what, which sitting. */
+export function WeekEventContent({ data, timeText }: Props) {
+  const total = Math.max(1, data.steps.reduce((t, s) => t + minutesBetween(s.start, s.end), 0));
+  const ofLabel = sittingLabel(data.seq, data.of);
+  return (
+    <div className="flex h-full overflow-hidden text-ink">
+      <div aria-hidden="true" className="flex w-3 shrink-0 flex-col">
+        {data.steps.map((step) => (
+          <span key={step.start} className={stepKindPattern[step.kind]} style={{ height: `${(minutesBetween(step.start, step.end) / total) * 100}%` }} />
+        ))}
+      </div>
+      <div className="min-w-0 flex-1 px-1 text-xs leading-snug">
+        <p className="truncate font-bold">
+          <Link to={paths.deskBooking(data.bookingId)} className="text-link">
+            {data.clientName}
+          </Link>
+        </p>
+        <p className="truncate">{data.serviceName}</p>
+        {ofLabel && <p className="font-bold">{ofLabel}</p>}
+        <p className="tabular">{timeText}</p>
+        <p className="truncate">{data.chairName}</p>
+      </div>
+    </div>
+  );
+}

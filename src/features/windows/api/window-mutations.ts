@@ -1,0 +1,30 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { z } from 'zod';
+import { apiPaths } from '../../../../shared/api/api-paths';
+import { BookingViewSchema } from '../../../../shared/schemas/booking-view.schemas';
+import type { FillWindowSchema, OfferWindowSchema } from '../../../../shared/schemas/window.schemas';
+import { apiWrite } from '../../../lib/api-client';
+import { bookChanged } from '../../bookings/api/book-changed';
+import { standbyQueries } from '../../standby/api/standby-queries';
+
+const OfferResultSchema = z.object({ offers: z.number().int() });
+
+export function useFillWindow() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (body: z.input<typeof FillWindowSchema>) => apiWrite('POST', apiPaths.fillWindow, body, BookingViewSchema),
+    onSuccess: (booking, body) =>
+      Promise.all([
+        bookChanged(queryClient, booking),
+        // Booking a standby client closes their entry.
+        body.standbyEntryId && queryClient.invalidateQueries({ queryKey: standbyQueries.list().queryKey }),
+      ]),
+  });
+}
+
+/** Sends offers; nothing is booked until someone accepts, so no cached view changes yet. */
+export function useOfferWindow() {
+  return useMutation({
+    mutationFn: (body: z.input<typeof OfferWindowSchema>) => apiWrite('POST', apiPaths.offerWindow, body, OfferResultSchema),
+  });
+}

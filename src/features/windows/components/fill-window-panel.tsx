@@ -1,0 +1,68 @@
+import { useState } from 'react';
+import type { HandsFreeWindowView } from '../../../../shared/schemas/window.schemas';
+import { Button } from '../../../components/ui/button';
+import { FormAlert } from '../../../components/ui/form-alert';
+import { formatTime } from '../../../lib/time';
+import { useIdempotencyKeys } from '../../../lib/use-idempotency-keys';
+import { useFillWindow, useOfferWindow } from '../api/window-mutations';
+import { StandbyOffer } from './standby-offer';
+import { WalkInFill } from './walk-in-fill';
+import { WindowFitPicker } from './window-fit-picker';
+
+type Props = { window: HandsFreeWindowView; timeZone: string; onDone: (message: string) => void };
+type Who = { clientId: string; standbyEntryId: string; name: string } | { walkIn: { name: string; phone?: string } };
+
+/** Put a window fit into the window: book a standby client or a walk-in, or offer it to standby clients. */
+export function FillWindowPanel({ window: win, timeZone, onDone }: Props) {
+  const [fitId, setFitId] = useState(win.fits[0]?.serviceId ?? '');
+  const fill = useFillWindow();
+  const offer = useOfferWindow();
+  const keys = useIdempotencyKeys();
+  const fit = win.fits.find((f) => f.serviceId === fitId);
+  const wanting = win.standby.filter((s) => s.serviceIds.includes(fitId));
+  const at = formatTime(win.start, timeZone);
+  const base = { stylistId: win.stylistId, serviceId: fitId, start: win.start };
+
+  const book = (who: Who) => {
+    const name = 'walkIn' in who ? who.walkIn.name : who.name;
+    const action = `${win.start}/${fitId}/${'walkIn' in who ? 'walk-in' : who.clientId}`;
+    const body = 'walkIn' in who ? { ...base, walkIn: who.walkIn } : { ...base, clientId: who.clientId, standbyEntryId: who.standbyEntryId };
+    fill.mutate(
+      { ...body, idempotencyKey: keys.keyFor(action) },
+      {
+        onSuccess: () => {
+          keys.settle(action);
+          onDone(`Booked ${name} for ${fit?.name ?? 'the window fit'} at ${at}.`);
+        },
+        onError: (error) => keys.settle(action, error),
+      },
+    );
+  };
+  const sendOffers = (standbyEntryIds: string[]) =>
+    offer.mutate({ ...base, standbyEntryIds }, { onSuccess: ({ offers }) => onDone(`Offer sent to ${offers} ${offers === 1 ? 'client' : 'clients'}.`) });
+
+  if (win.fits.length === 0) return <p>No window fit is short enough for this window.</p>;
+  const error = fill.error ?? offer.error;
+  return (
+    <div className="flex flex-col gap-4">
+      {error && <FormAlert>{error.message}</FormAlert>}
+      <WindowFitPicker fits={win.fits} value={fitId} onChange={setFitId} />
+      {wanting.length > 0 && (
+        <div className="flex flex-col gap-2">
+          <h4 className="font-bold">Standby clients who want this</h4>
+          <ul className="flex flex-wrap gap-2">
+            {wanting.map((s) => (
+              <li key={s.entryId}>
+                <Button busy={fill.isPending} onClick={() => book({ clientId: s.clientId, standbyEntryId: s.entryId, name: s.clientName })}>
+                  Book {s.clientName}
+                </Button>
+              </li>
+            ))}
+          </ul>
+          <StandbyOffer key={fitId} wanting={wanting} busy={offer.isPending} onOffer={sendOffers} />
+        </div>
+      )}
+      <WalkInFill busy={fill.isPending} onBook={(walkIn) => book({ walkIn })} />
+    </div>
+  );
+}

@@ -1,0 +1,51 @@
+import { useId, useState } from 'react';
+import type { HandsFreeWindowView } from '../../../../shared/schemas/window.schemas';
+import { Button } from '../../../components/ui/button';
+import { formatTimeRange } from '../../../lib/time';
+import { FillWindowPanel } from './fill-window-panel';
+
+type Props = { window: HandsFreeWindowView; timeZone: string; stylistName?: string; onDone: (message: string) => void };
+
+/** One hands-free window: when, how long, what fits, who on the standby list wants it; opens to fill it. */
+export function WindowCard({ window: win, timeZone, stylistName, onDone }: Props) {
+  const [open, setOpen] = useState(false);
+  const panelId = useId();
+  const times = formatTimeRange(win.start, win.end, timeZone);
+  return (
+    <article aria-label={`Hands free ${win.minutes} min, ${times}`} className="flex flex-col gap-3 rounded-2xl border-2 border-dashed border-sage bg-white p-4">
+      <div className="flex flex-wrap items-start justify-between gap-2">
+        <div>
+          <h3 className="text-lg font-bold tabular">{times}</h3>
+          <p>
+            Hands free {win.minutes} min{stylistName && ` · ${stylistName}`}
+          </p>
+        </div>
+        {win.fits.length > 0 && (
+          <Button variant={open ? 'quiet' : 'secondary'} aria-expanded={open} aria-controls={panelId} onClick={() => setOpen(!open)}>
+            {open ? 'Close' : 'Fill window'}
+          </Button>
+        )}
+      </div>
+      <p className="text-sm">
+        <span className="font-bold">Fits: </span>
+        {win.fits.length ? win.fits.map((f) => `${f.name} (${f.minutes} min)`).join(', ') : 'none this short'}
+      </p>
+      <p className="text-sm">
+        <span className="font-bold">Standby: </span>
+        {win.standby.length ? win.standby.map((s) => s.clientName).join(', ') : 'nobody waiting for these'}
+      </p>
+      <div id={panelId} hidden={!open}>
+        {open && (
+          <FillWindowPanel
+            window={win}
+            timeZone={timeZone}
+            onDone={(message) => {
+              setOpen(false);
+              onDone(message);
+            }}
+          />
+        )}
+      </div>
+    </article>
+  );
+}

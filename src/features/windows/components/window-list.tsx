@@ -1,0 +1,31 @@
+import { useQuery } from '@tanstack/react-query';
+import { useState } from 'react';
+import { FormAlert } from '../../../components/ui/form-alert';
+import { LoadingState } from '../../../components/ui/loading-state';
+import { windowQueries } from '../api/window-queries';
+import { WindowCard } from './window-card';
+
+type Props = { date: string; stylistNames?: Record<string, string> };
+
+/** The day's hands-free windows, each ready to fill or offer. */
+export function WindowList({ date, stylistNames }: Props) {
+  const windows = useQuery(windowQueries.list(date));
+  // Kept here: a filled window leaves the list, and its message must stay.
+  const [notice, setNotice] = useState<string | null>(null);
+  if (windows.isPending) return <LoadingState label="Looking for hands-free windows…" />;
+  if (windows.isError) return <p role="alert">The hands-free windows could not be loaded: {windows.error.message}</p>;
+  const list = windows.data.windows;
+  return (
+    <div className="flex flex-col gap-4">
+      {notice && <FormAlert tone="success">{notice}</FormAlert>}
+      {list.length === 0 && <p>No hands-free windows on this day.</p>}
+      <ul className="grid gap-4 lg:grid-cols-2">
+        {list.map((win) => (
+          <li key={`${win.stylistId}-${win.start}`}>
+            <WindowCard window={win} timeZone={windows.data.timeZone} stylistName={stylistNames?.[win.stylistId]} onDone={setNotice} />
+          </li>
+        ))}
+      </ul>
+    </div>
+  );
+}

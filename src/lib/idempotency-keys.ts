@@ -1,0 +1,27 @@
+import { isApiError } from './api-error';
+
+/**
+ * One key per click on a booking action, kept while its answer is unknown: a retry of
+ * the same click (after a network or server failure) sends the same key, so the server
+ * answers the first result instead of booking twice. A definite answer frees the key.
+ */
+export class IdempotencyKeys {
+  private readonly keys = new Map<string, string>();
+  constructor(private readonly makeKey: () => string = () => crypto.randomUUID()) {}
+
+  /** The key for this action: the pending one if its last try had no definite answer, else a fresh one. */
+  keyFor(action: string): string {
+    let key = this.keys.get(action);
+    if (!key) {
+      key = this.makeKey();
+      this.keys.set(action, key);
+    }
+    return key;
+  }
+
+  /** After an answer: success or a 4xx is final; a network error or 5xx keeps the key for the retry. */
+  settle(action: string, error?: unknown): void {
+    const final = error === undefined || (isApiError(error) && error.status >= 400 && error.status < 500);
+    if (final) this.keys.delete(action);
+  }
+}

@@ -1,0 +1,106 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { anonymousAgent, signedInAgent, startTestApp, type TestApp } from '../setup/test-app';
+import { insertSalon, type SalonFixture } from '../factories/salon';
+import { insertUser, type UserFixture } from '../factories/user';
+import { insertPlannedService, tonerPlan } from '../factories/service';
+import { futureWeekday, localIso } from '../setup/dates';
+import type { StepPlan } from '../../shared/schemas/step-plan.schemas';
+
+let t: TestApp;
+let salon: SalonFixture;
+let ana: UserFixture;
+let toner: string;
+let desk$: Awaited<ReturnType<typeof signedInAgent>>;
+let ana$: Awaited<ReturnType<typeof signedInAgent>>;
+const friday = futureWeekday(5, 2);
+const clients: { id: string; name: string }[] = [];
+
+// A lightening visit: 10:00–10:45 hands-on, 10:45–11:35 developing (Ana's hands are free), then rinse.
+const lightening: StepPlan = {
+  sittings: [{ steps: [{ kind: 'hands_on', label: 'Apply lightener', minutes: 45 }, { kind: 'developing', label: 'Lifts', minMinutes: 50, maxMinutes: 50 }, { kind: 'basin', label: 'Rinse', minutes: 15 }] }],
+};
+
+beforeAll(async () => {
+  t = await startTestApp();
+  const db = t.testDb.db;
+  salon = await insertSalon(db, { chairs: 3, basins: 2 });
+  const desk = await insertUser(db, salon.salonId, 'front_desk');
+  ana = await insertUser(db, salon.salonId, 'stylist', { maxClientsAtOnce: 2 });
+  toner = await insertPlannedService(db, salon.salonId, { plan: tonerPlan, name: 'Toner refresh' });
+  const lighteningId = await insertPlannedService(db, salon.salonId, { plan: lightening, name: 'Lightening' });
+  desk$ = await signedInAgent(t.app, desk.email, desk.password);
+  ana$ = await signedInAgent(t.app, ana.email, ana.password);
+  for (const name of ['Ines Vale', 'Otto Brandt', 'Pia Sol']) {
+    const res = await desk$.write('post', '/api/clients', { name, phone: '+1 970 555 01' + String(clients.length + 10), email: `${name.split(' ')[0].toLowerCase()}@example.test` });
+    expect(res.status).toBe(201);
+    clients.push(res.body);
+  }
+  const booked = await desk$.write('post', '/api/bookings', {
+    clientId: clients[2].id, serviceId: lighteningId, stepPlan: lightening, stylistId: ana.staffId, start: localIso(friday, '10:00'), idempotencyKey: 'window-base-0001',
+  });
+  expect(booked.status).toBe(201);
+});
+afterAll(() => t.close());
+
+const availability = [{ weekdays: [2, 3, 4, 5, 6], from: '09:00', to: '17:00' }];
+
+describe('standby list', () => {
+  it('adds, lists and removes entries; refuses ids of another salon and bad time ranges', async () => {
+    const added = await desk$.write('post', '/api/standby', { clientId: clients[0].id, serviceIds: [toner], stylistId: null, availability, notes: 'Can come at short notice' });
+    expect(added.status).toBe(201);
+    expect(added.body).toMatchObject({ client: { name: 'Ines Vale' }, services: [{ name: 'Toner refresh' }] });
+    const other = await desk$.write('post', '/api/standby', { clientId: '7d0f3a52-5b36-4c1b-9a55-2f0e3e1d9c11', serviceIds: [toner], stylistId: null, availability });
+    expect(other.status).toBe(400);
+    expect(other.body.error.fields.clientId).toBeDefined();
+    const backwards = await desk$.write('post', '/api/standby', { clientId: clients[1].id, serviceIds: [toner], stylistId: null, availability: [{ weekdays: [2], from: '15:00', to: '09:00' }] });
+    expect(backwards.body.error.fields['availability.0.to']).toBeDefined();
+    const second = await desk$.write('post', '/api/standby', { clientId: clients[1].id, serviceIds: [toner], stylistId: ana.staffId, availability });
+    expect((await desk$.get('/api/standby')).body.entries).toHaveLength(2);
+    expect(second.status).toBe(201);
+  });
+});
+
+describe('hands-free windows', () => {
+  it("lists the stylist's window during the developing step with the fit and the standby clients who want it", async () => {
+    const res = await ana$.get(`/api/windows?date=${friday}`);
+    expect(res.status).toBe(200);
+    const window = res.body.windows.find((w: { start: string }) => w.start === localIso(friday, '10:45'));
+    expect(window).toMatchObject({ end: localIso(friday, '11:35'), minutes: 50 });
+    expect(window.fits.map((f: { name: string }) => f.name)).toEqual(['Toner refresh']);
+    expect(window.standby.map((s: { clientName: string }) => s.clientName).sort()).toEqual(['Ines Vale', 'Otto Brandt']);
+  });
+
+  it('offers the window to two standby clients: both get an SMS; the first to accept wins, the second is told it has gone', async () => {
+    const entries = (await desk$.get('/api/standby')).body.entries as { id: string; client: { name: string; phone: string } }[];
+    const offered = await ana$.write('post', '/api/windows/offer', { stylistId: ana.staffId, serviceId: toner, start: localIso(friday, '10:50'), standbyEntryIds: entries.map((e) => e.id) });
+    expect(offered.status).toBe(201);
+    expect(offered.body.offers).toBe(2);
+    const links = entries.map((e) => {
+      const sms = t.sms.messages.find((m) => m.to === e.client.phone && m.body.includes('/offer/'));
+      expect(sms, `SMS to ${e.client.name}`).toBeDefined();
+      return /\/offer\/([A-Za-z0-9_-]+)/.exec(sms!.body)![1];
+    });
+    const visitor = await anonymousAgent(t.app);
+    expect((await visitor.get(`/api/offers/${links[0]}`)).body).toMatchObject({ status: 'offered', serviceName: 'Toner refresh' });
+    const [a, b] = await Promise.all(links.map((token) => visitor.write('post', `/api/offers/${token}/accept`)));
+    const statuses = [a.status, b.status].sort();
+    expect(statuses).toEqual([200, 409]);
+    const loser = a.status === 409 ? entries[0] : entries[1];
+    expect(t.sms.messages.some((m) => m.to === loser.client.phone && m.body.includes('has been taken'))).toBe(true);
+    const after = (await ana$.get(`/api/windows?date=${friday}`)).body.windows;
+    // The toner now sits in the window: only the 5 minutes before it are still hands-free from 10:45.
+    expect(after.find((w: { start: string }) => w.start === localIso(friday, '10:45')).end).toBe(localIso(friday, '10:50'));
+  });
+
+  it("a stylist fills a window with a walk-in; a stylist cannot fill another stylist's window", async () => {
+    // Applying at 11:30 would run into the lightening rinse at 11:35 (Ana's hands); 11:55 is clear.
+    const clash = await ana$.write('post', '/api/windows/fill', { stylistId: ana.staffId, serviceId: toner, start: localIso(friday, '11:30'), walkIn: { name: 'Walk-in Wes' }, idempotencyKey: 'fill-key-0001' });
+    expect(clash.status).toBe(409);
+    const res = await ana$.write('post', '/api/windows/fill', { stylistId: ana.staffId, serviceId: toner, start: localIso(friday, '11:55'), walkIn: { name: 'Walk-in Wes' }, idempotencyKey: 'fill-key-0003' });
+    expect(res.status).toBe(201);
+    expect(res.body.client.name).toBe('Walk-in Wes');
+    const marcus = await insertUser(t.testDb.db, salon.salonId, 'stylist');
+    const other = await ana$.write('post', '/api/windows/fill', { stylistId: marcus.staffId, serviceId: toner, start: localIso(friday, '14:00'), walkIn: { name: 'Walk-in Wes' }, idempotencyKey: 'fill-key-0002' });
+    expect(other.status).toBe(403);
+  });
+});
