@@ -2,6 +2,7 @@ import type { OwnerOverview } from '../../../../shared/schemas/owner.schemas';
 import { SectionCard } from '../../../components/ui/section-card';
 import { formatPercent } from '../../../lib/booking-labels';
 import { formatLocalDate } from '../../../lib/time';
+import { DateTime } from 'luxon';
 import { StatTile } from './stat-tile';
 
 type Props = { week: OwnerOverview['week'] };
@@ -11,7 +12,8 @@ export function WeekUsage({ week }: Props) {
   return (
     <SectionCard title="This week">
       <p className="mb-3 text-ink/80">
-        {formatLocalDate(week.from)} to {formatLocalDate(week.to)}
+        {/* `to` is the exclusive end: the week ends the day before it. */}
+        {formatLocalDate(week.from)} to {formatLocalDate(DateTime.fromISO(week.to).minus({ days: 1 }).toISODate()!)}
       </p>
       <dl className="grid gap-3 sm:grid-cols-3">
         <StatTile label="Bookings" value={String(week.bookings)} />
