@@ -7,6 +7,10 @@ import type { Mailer } from './mail/mailer';
 import type { SmtpFake } from './fakes/smtp-fake';
 import type { SmsFake } from './fakes/sms-fake';
 import type { SmsSender } from './sms/sms-sender';
+import type { Payments } from './payments/payments';
+import type { PaymentsFake } from './fakes/payments-fake';
+import type { JobQueue } from './jobs/job-queue';
+import type { Storage } from './storage/storage';
 
 /** What feature routes are given; built once in createApp. */
 export interface AppDeps {
@@ -16,7 +20,12 @@ export interface AppDeps {
   config: Config;
   mailer: Mailer;
   sms: SmsSender;
+  payments: Payments;
+  jobs: JobQueue;
   /** Present when hosted services are replaced by local fakes (demo, dev, test). */
   smtpFake: SmtpFake | null;
   smsFake: SmsFake | null;
+  paymentsFake: PaymentsFake | null;
+  /** Uploaded photos; on disk under config.uploadsDir unless a caller passes another. */
+  storage: Storage;
 }

@@ -23,11 +23,16 @@ import { registerServiceRoutes } from './features/services/services.routes';
 import { registerSkinTestRoutes } from './features/skin-tests/skin-tests.routes';
 import { registerStandbyRoutes } from './features/standby/standby.routes';
 import { registerWindowRoutes } from './features/windows/windows.routes';
+import { registerOnlineBookingRoutes } from './features/online-booking/online-booking.routes';
+import { registerMyBookingRoutes } from './features/online-booking/my-bookings.routes';
+import { registerHairHistoryRoutes } from './features/hair-history/hair-history.routes';
+import { registerPhotoRoutes } from './features/photos/photos.routes';
+import { createDiskStorage } from './storage/disk-storage';
 
 const clientDist = path.join(path.dirname(fileURLToPath(import.meta.url)), '..', 'dist', 'client');
 
 /** Builds the Express app without listening, so tests mount it in-process. */
-export function createApp(deps: Omit<AppDeps, 'table'>) {
+export function createApp(deps: Omit<AppDeps, 'table' | 'storage'> & { storage?: AppDeps['storage'] }) {
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', 'loopback');
@@ -45,7 +50,7 @@ export function createApp(deps: Omit<AppDeps, 'table'>) {
 
   const table: RouteTable = { router: Router(), registry: new OpenAPIRegistry(), records: [] };
   installCsrf(app, deps.config, table);
-  const full: AppDeps = { ...deps, table };
+  const full: AppDeps = { ...deps, storage: deps.storage ?? createDiskStorage(deps.config.uploadsDir), table };
   for (const register of [
     registerHealthRoutes,
     registerSessionRoutes,
@@ -57,9 +62,13 @@ export function createApp(deps: Omit<AppDeps, 'table'>) {
     registerSkinTestRoutes,
     registerStandbyRoutes,
     registerWindowRoutes,
+    registerOnlineBookingRoutes,
+    registerMyBookingRoutes,
     registerClientRoutes,
     registerOwnerRoutes,
     registerMailboxRoutes,
+    registerHairHistoryRoutes,
+    registerPhotoRoutes,
   ]) {
     register(full);
   }

@@ -1,4 +1,6 @@
 import { randomBytes } from 'node:crypto';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
 import { z } from 'zod';
 
 const ConfigSchema = z.object({
@@ -14,6 +16,8 @@ const ConfigSchema = z.object({
   TWILIO_ACCOUNT_SID: z.string().startsWith('AC').optional(),
   TWILIO_AUTH_TOKEN: z.string().optional(),
   SMS_FROM: z.string().default('+19705550100'),
+  STRIPE_SECRET_KEY: z.string().startsWith('sk_').optional(),
+  UPLOADS_DIR: z.string().min(1).optional(),
 });
 
 export interface Config {
@@ -28,8 +32,11 @@ export interface Config {
   smtpUrl: string | null;
   mailFrom: string;
   twilio: { accountSid: string; authToken: string; from: string } | null;
+  stripeSecretKey: string | null;
   /** Hosted services are replaced by in-process fakes. */
   useFakes: boolean;
+  /** Where uploaded photos are kept: outside the web root, served only through the API. */
+  uploadsDir: string;
 }
 
 /** Parsed once at boot, so a bad environment fails at start-up, not at the first request. */
@@ -49,10 +56,13 @@ export function loadConfig(env: Record<string, string | undefined> = process.env
     publicUrl: parsed.PUBLIC_URL ?? null,
     smtpUrl: parsed.SMTP_URL ?? null,
     mailFrom: parsed.MAIL_FROM,
+    stripeSecretKey: parsed.STRIPE_SECRET_KEY ?? null,
     twilio:
       parsed.TWILIO_ACCOUNT_SID && parsed.TWILIO_AUTH_TOKEN
         ? { accountSid: parsed.TWILIO_ACCOUNT_SID, authToken: parsed.TWILIO_AUTH_TOKEN, from: parsed.SMS_FROM }
         : null,
     useFakes: parsed.DWELL_MODE !== 'production',
+    // Test runs never write into the checkout's .data/, even when a suite forgets to pass a folder.
+    uploadsDir: path.resolve(parsed.UPLOADS_DIR ?? (parsed.DWELL_MODE === 'test' ? path.join(tmpdir(), 'dwell-test-uploads') : '.data/uploads')),
   };
 }

@@ -4,6 +4,8 @@ import { loadConfig, type Config } from './config';
 import { createDb, createPool } from './db/database';
 import { createApp } from './app';
 import { startOutsideServices } from './services';
+import { startJobQueue } from './jobs/job-queue';
+import { appJobs } from './jobs/app-jobs';
 
 export interface RunningServer {
   outside: Awaited<ReturnType<typeof startOutsideServices>>;
@@ -17,7 +19,8 @@ export async function startServer(config: Config = loadConfig()): Promise<Runnin
   const outside = await startOutsideServices(config);
   const pool = createPool(config.databaseUrl);
   const db = createDb(pool);
-  const app = createApp({ db, pool, config, ...outside });
+  const jobs = await startJobQueue(config.databaseUrl, appJobs(db));
+  const app = createApp({ db, pool, config, jobs, ...outside });
   const server = await listen(app, config);
   const { port } = server.address() as AddressInfo;
   return {
@@ -28,6 +31,7 @@ export async function startServer(config: Config = loadConfig()): Promise<Runnin
       const closed = new Promise<void>((resolve) => server.close(() => resolve()));
       server.closeAllConnections();
       await closed;
+      await jobs.stop();
       await outside.close();
       await db.destroy();
     },

@@ -3,22 +3,31 @@ import { startSmtpFake, type SmtpFake } from './fakes/smtp-fake';
 import { startSmsFake, type SmsFake } from './fakes/sms-fake';
 import { createMailer, type Mailer } from './mail/mailer';
 import { createSmsSender, type SmsSender } from './sms/sms-sender';
+import { startPaymentsFake, type PaymentsFake } from './fakes/payments-fake';
+import { createPayments, type Payments } from './payments/payments';
 
 export interface OutsideServices {
   mailer: Mailer;
   sms: SmsSender;
   smtpFake: SmtpFake | null;
   smsFake: SmsFake | null;
+  payments: Payments;
+  paymentsFake: PaymentsFake | null;
   close(): Promise<void>;
 }
 
 // A made-up account for the fake: the SDK only insists that the account id starts with "AC".
 const FAKE_TWILIO = { accountSid: `AC${'0'.repeat(32)}`, authToken: 'local-fake', from: '+19705550100' };
 
-/** E-mail and SMS senders: real services in production, in-process fakes everywhere else. */
+/** E-mail, SMS and payments: real services in production, in-process fakes everywhere else. */
 export async function startOutsideServices(config: Config): Promise<OutsideServices> {
   const smtpFake = config.useFakes ? await startSmtpFake() : null;
   const smsFake = config.useFakes ? await startSmsFake() : null;
+  const paymentsFake = config.useFakes ? await startPaymentsFake() : null;
+  if (!paymentsFake && !config.stripeSecretKey) throw new Error('STRIPE_SECRET_KEY is required in production');
+  const payments = paymentsFake
+    ? createPayments({ secretKey: 'sk_test_local_fake', host: paymentsFake.url.host, port: paymentsFake.url.port })
+    : createPayments({ secretKey: config.stripeSecretKey! });
   const smtpUrl = smtpFake?.url ?? config.smtpUrl;
   if (!smtpUrl) throw new Error('SMTP_URL is required in production');
   const twilioConfig = smsFake ? { ...FAKE_TWILIO, baseUrl: smsFake.url } : config.twilio;
@@ -29,10 +38,13 @@ export async function startOutsideServices(config: Config): Promise<OutsideServi
     sms: createSmsSender(twilioConfig),
     smtpFake,
     smsFake,
+    payments,
+    paymentsFake,
     async close() {
       mailer.close();
       await smtpFake?.close();
       await smsFake?.close();
+      await paymentsFake?.close();
     },
   };
 }

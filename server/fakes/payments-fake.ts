@@ -23,6 +23,8 @@ export interface PaymentsFake {
   intents: Map<string, Intent>;
   refunds: { id: string; payment_intent: string; amount: number }[];
   failNext(n: number): void;
+  /** Runs once, after the next successful charge and before it is answered (to play a slow confirmation). */
+  onNextSuccess(hook: () => Promise<void>): void;
   close(): Promise<void>;
 }
 
@@ -42,6 +44,7 @@ export async function startPaymentsFake(port = 0): Promise<PaymentsFake> {
   const refunds: PaymentsFake['refunds'] = [];
   const replies = new Map<string, { status: number; body: unknown }>();
   let failures = 0;
+  let successHook: (() => Promise<void>) | null = null;
   const app = express();
   app.use(express.urlencoded({ extended: true }));
   app.use((req, res, next) => {
@@ -70,7 +73,10 @@ export async function startPaymentsFake(port = 0): Promise<PaymentsFake> {
       return cardError(res, intent);
     }
     intent.status = 'succeeded';
-    res.json(intent);
+    const hook = successHook;
+    successHook = null;
+    if (!hook) return void res.json(intent);
+    hook().then(() => res.json(intent), () => res.json(intent));
   };
   app.post('/v1/payment_methods', (req, res) => {
     const number = String(req.body?.card?.number ?? '').replace(/\s/g, '');
@@ -117,6 +123,9 @@ export async function startPaymentsFake(port = 0): Promise<PaymentsFake> {
     refunds,
     failNext: (n) => {
       failures = n;
+    },
+    onNextSuccess: (hook) => {
+      successHook = hook;
     },
     close: () => new Promise((resolve) => server.close(() => resolve())),
   };

@@ -21,7 +21,8 @@ export async function startSmtpFake(port = 0): Promise<SmtpFake> {
       simpleParser(stream)
         .then((mail) => {
           const to = session.envelope.rcptTo.map((r) => r.address).join(', ');
-          messages.push({ id: messages.length + 1, to, subject: mail.subject ?? '', text: mail.text ?? '', receivedAt: new Date().toISOString() });
+          const attachments = mail.attachments.map((a) => ({ filename: a.filename ?? '', contentType: a.contentType, content: a.content.toString('utf8') }));
+          messages.push({ id: messages.length + 1, to, subject: mail.subject ?? '', text: mail.text ?? '', receivedAt: new Date().toISOString(), attachments });
           callback();
         })
         .catch(callback);

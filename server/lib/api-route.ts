@@ -69,6 +69,8 @@ export function apiRoute<B extends ZodType, Q extends ZodType, P extends ZodType
       res,
     } as RouteContext<Infer<B>, Infer<Q>, Infer<P>>;
     const result = await handler(ctx);
+    // A handler that answered by itself (image bytes) is left alone.
+    if (res.headersSent) return;
     // A handler may pick another status itself (health answers 503 with a body); otherwise the declared one.
     const chosen = res.statusCode !== 200 ? res.statusCode : status;
     if (chosen === 204 || result === undefined) res.status(chosen === 200 ? 204 : chosen).end();
@@ -101,13 +103,13 @@ function register(registry: OpenAPIRegistry, spec: RouteSpec<ZodType, ZodType, Z
   });
 }
 
-function errorStatuses(access: Access, hasInput: boolean): number[] {
+export function errorStatuses(access: Access, hasInput: boolean): number[] {
   const list = hasInput ? [400] : [];
   if (access !== 'public') list.push(401, 403);
   return list;
 }
 
-function describeAccess(access: Access): string {
+export function describeAccess(access: Access): string {
   if (access === 'public') return 'anyone';
   if (access === 'signed_in') return 'any signed-in user';
   return (access as readonly Role[]).join(', ');

@@ -7,6 +7,7 @@ export const CapturedMailSchema = z.object({
   subject: z.string(),
   text: z.string(),
   receivedAt: z.string(),
+  attachments: z.array(z.object({ filename: z.string(), contentType: z.string(), content: z.string() })).default([]),
 });
 export type CapturedMail = z.infer<typeof CapturedMailSchema>;
 export const MailboxSchema = z.object({ messages: z.array(CapturedMailSchema) });

@@ -22,6 +22,8 @@ export const FillWindowSchema = z
     stylistId: IdSchema,
     serviceId: IdSchema,
     start: InstantInputSchema,
+    /** When given, the fit goes at the earliest free start from `start` up to this one (e.g. the window's end less the fit). */
+    latestStart: InstantInputSchema.optional(),
     clientId: IdSchema.optional(),
     /** A walk-in with no client record yet. */
     walkIn: z.object({ name: z.string().trim().min(1).max(120), phone: z.string().max(30).optional() }).strict().optional(),

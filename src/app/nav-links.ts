@@ -18,5 +18,5 @@ export const navLinks: Record<Role, { to: string; label: string }[]> = {
   ],
   front_desk: deskLinks,
   stylist: [{ to: paths.stylist(), label: 'My day' }],
-  client: [{ to: paths.me, label: 'My bookings' }],
+  client: [{ to: paths.me, label: 'My bookings' }, { to: '/me/hair', label: 'Hair history and photos' }],
 };

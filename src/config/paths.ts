@@ -4,7 +4,7 @@ import type { Role } from '../../shared/schemas/common.schemas';
 export const paths = {
   home: '/',
   signIn: (next?: string) => (next ? `/sign-in?next=${encodeURIComponent(next)}` : '/sign-in'),
-  signUp: '/sign-up',
+  signUp: (next?: string) => (next ? `/sign-up?next=${encodeURIComponent(next)}` : '/sign-up'),
   forgotPassword: '/forgot-password',
   resetPassword: '/reset-password',
   owner: '/owner',
@@ -24,7 +24,19 @@ export const paths = {
   offer: (token: string) => `/offer/${token}`,
   stylist: (date?: string) => (date ? `/stylist?date=${date}` : '/stylist'),
   me: '/me',
+  salon: (slug: string) => `/salon/${slug}`,
+  salonBook: (slug: string, serviceId?: string) =>
+    serviceId ? `/salon/${slug}/book?service=${encodeURIComponent(serviceId)}` : `/salon/${slug}/book`,
+  bookingConfirmed: (id: string) => `/me/bookings/${id}/booked`,
 } as const;
+
+/** The demo salon loaded by `npm start`; signed-out visitors get a link to its public page. */
+export const demoSalonSlug = 'kestrel-and-pine';
+
+/** The salon a same-site path belongs to, e.g. `/salon/kestrel-and-pine/book?…` → `kestrel-and-pine`. */
+export function salonSlugOf(path: string | null): string | undefined {
+  return path?.match(/^\/salon\/([a-z0-9-]{1,80})(?:[/?]|$)/)?.[1];
+}
 
 export function homeFor(role: Role): string {
   switch (role) {

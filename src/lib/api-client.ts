@@ -30,7 +30,8 @@ async function send(method: 'GET' | WriteMethod, path: string, body?: unknown): 
   }
 }
 
-async function getCsrfToken(): Promise<string> {
+/** The session's CSRF token, fetched once; also used by upload-file.ts for multipart writes. */
+export async function getCsrfToken(): Promise<string> {
   if (csrfToken) return csrfToken;
   const response = await send('GET', apiPaths.csrf);
   if (!response.ok) throw await toApiError(response);
@@ -38,7 +39,12 @@ async function getCsrfToken(): Promise<string> {
   return csrfToken;
 }
 
-async function toApiError(response: Response): Promise<ApiError> {
+/** Drops the token so the next write fetches a fresh one (it is bound to the session). */
+export function forgetCsrfToken(): void {
+  csrfToken = null;
+}
+
+export async function toApiError(response: Response): Promise<ApiError> {
   const parsed = ApiErrorBodySchema.safeParse(await response.json().catch(() => null));
   if (parsed.success) {
     const { code, message, fields } = parsed.data.error;

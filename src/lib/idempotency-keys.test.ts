@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { ApiError } from './api-error';
-import { IdempotencyKeys } from './idempotency-keys';
+import { IdempotencyKeys, randomKey } from './idempotency-keys';
 
 const counter = () => {
   let n = 0;
@@ -30,5 +30,20 @@ describe('IdempotencyKeys', () => {
   it('keeps actions apart', () => {
     const keys = new IdempotencyKeys(counter());
     expect(keys.keyFor('a')).not.toBe(keys.keyFor('b'));
+  });
+});
+
+describe('randomKey', () => {
+  it('makes distinct keys long enough for the API, with or without crypto.randomUUID', () => {
+    const original = crypto.randomUUID;
+    try {
+      expect(randomKey()).not.toBe(randomKey());
+      Object.defineProperty(crypto, 'randomUUID', { value: undefined, configurable: true });
+      const key = randomKey();
+      expect(key).toMatch(/^[0-9a-f]{32}$/);
+      expect(key).not.toBe(randomKey());
+    } finally {
+      Object.defineProperty(crypto, 'randomUUID', { value: original, configurable: true });
+    }
   });
 });

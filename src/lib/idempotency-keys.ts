@@ -7,7 +7,7 @@ import { isApiError } from './api-error';
  */
 export class IdempotencyKeys {
   private readonly keys = new Map<string, string>();
-  constructor(private readonly makeKey: () => string = () => crypto.randomUUID()) {}
+  constructor(private readonly makeKey: () => string = randomKey) {}
 
   /** The key for this action: the pending one if its last try had no definite answer, else a fresh one. */
   keyFor(action: string): string {
@@ -24,4 +24,13 @@ export class IdempotencyKeys {
     const final = error === undefined || (isApiError(error) && error.status >= 400 && error.status < 500);
     if (final) this.keys.delete(action);
   }
+}
+
+/**
+ * A random key. `crypto.randomUUID` exists only on secure pages (https or localhost);
+ * a phone trying the demo over plain http on the local network still needs keys.
+ */
+export function randomKey(): string {
+  if (typeof crypto.randomUUID === 'function') return crypto.randomUUID();
+  return Array.from(crypto.getRandomValues(new Uint8Array(16)), (b) => b.toString(16).padStart(2, '0')).join('');
 }

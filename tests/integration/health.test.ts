@@ -42,7 +42,9 @@ describe('GET /api/health', () => {
     const db = createDb(pool);
     const config = loadConfig({ DATABASE_URL: url, DWELL_MODE: 'test' });
     const outside = await startOutsideServices(config);
-    const app = createApp({ db, pool, config, ...outside });
+    // No job queue here: it would need the database this test takes away.
+    const jobs = { schedule: async () => {}, stop: async () => {} };
+    const app = createApp({ db, pool, config, jobs, ...outside });
 
     const down = await request(app).get('/api/health');
     expect(down.status).toBe(503);

@@ -99,6 +99,12 @@ describe('hands-free windows', () => {
     const res = await ana$.write('post', '/api/windows/fill', { stylistId: ana.staffId, serviceId: toner, start: localIso(friday, '11:55'), walkIn: { name: 'Walk-in Wes' }, idempotencyKey: 'fill-key-0003' });
     expect(res.status).toBe(201);
     expect(res.body.client.name).toBe('Walk-in Wes');
+    // With a latest start, the same 11:30 request goes in at the earliest free start up to 13:00 instead.
+    const flexible = await ana$.write('post', '/api/windows/fill', { stylistId: ana.staffId, serviceId: toner, start: localIso(friday, '11:30'), latestStart: localIso(friday, '13:00'), walkIn: { name: 'Walk-in Vi' }, idempotencyKey: 'fill-key-0004' });
+    expect(flexible.status).toBe(201);
+    const at = Date.parse(flexible.body.sittings[0].start);
+    expect(at).toBeGreaterThan(Date.parse(localIso(friday, '11:30')));
+    expect(at).toBeLessThanOrEqual(Date.parse(localIso(friday, '13:00')));
     const marcus = await insertUser(t.testDb.db, salon.salonId, 'stylist');
     const other = await ana$.write('post', '/api/windows/fill', { stylistId: marcus.staffId, serviceId: toner, start: localIso(friday, '14:00'), walkIn: { name: 'Walk-in Wes' }, idempotencyKey: 'fill-key-0002' });
     expect(other.status).toBe(403);

@@ -1,7 +1,13 @@
+import { mkdtemp, rm } from 'node:fs/promises';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
 import request from 'supertest';
 import { createApp } from '../../server/app';
 import { loadConfig } from '../../server/config';
 import { startOutsideServices, type OutsideServices } from '../../server/services';
+import { startJobQueue, type JobQueue } from '../../server/jobs/job-queue';
+import { appJobs } from '../../server/jobs/app-jobs';
+import type { PaymentsFake } from '../../server/fakes/payments-fake';
 import type { SmtpFake } from '../../server/fakes/smtp-fake';
 import type { SmsFake } from '../../server/fakes/sms-fake';
 import { createTestDb, type TestDb } from './test-db';
@@ -11,25 +17,36 @@ export interface TestApp {
   testDb: TestDb;
   smtp: SmtpFake;
   sms: SmsFake;
+  payments: PaymentsFake;
+  jobs: JobQueue;
   outside: OutsideServices;
+  /** This app's own folder for uploaded photos, removed on close. */
+  uploadsDir: string;
   close(): Promise<void>;
 }
 
 /** The real app on a fresh database with the local e-mail fake, mounted in-process for supertest. */
 export async function startTestApp(): Promise<TestApp> {
   const testDb = await createTestDb();
-  const config = loadConfig({ DATABASE_URL: testDb.url, DWELL_MODE: 'test' });
+  const uploadsDir = await mkdtemp(path.join(tmpdir(), 'dwell-uploads-'));
+  const config = loadConfig({ DATABASE_URL: testDb.url, DWELL_MODE: 'test', UPLOADS_DIR: uploadsDir });
   const outside = await startOutsideServices(config);
-  const app = createApp({ db: testDb.db, pool: testDb.pool, config, ...outside });
+  const jobs = await startJobQueue(testDb.url, appJobs(testDb.db));
+  const app = createApp({ db: testDb.db, pool: testDb.pool, config, jobs, ...outside });
   return {
     app,
     testDb,
     smtp: outside.smtpFake!,
     sms: outside.smsFake!,
+    payments: outside.paymentsFake!,
+    jobs,
     outside,
+    uploadsDir,
     async close() {
+      await jobs.stop();
       await outside.close();
       await testDb.drop();
+      await rm(uploadsDir, { recursive: true, force: true });
     },
   };
 }

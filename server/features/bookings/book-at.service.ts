@@ -8,7 +8,7 @@ import { checkSkinTest } from '../../../shared/rules/skin-test-rule';
 import { AppError } from '../../lib/app-error';
 import { loadSalonCalendars } from '../planning/salon-calendars.repository';
 import { horizonFor } from '../planning/engine-request';
-import { planExactlyAt } from '../planning/plan-at';
+import { planBetween, planExactlyAt } from '../planning/plan-at';
 import { skinTestRecords } from '../skin-tests/skin-tests.repository';
 import { writeAudit } from '../audit/audit.repository';
 import { insertBooking } from './bookings.repository';
@@ -16,11 +16,14 @@ import { bookingSnapshot } from './booking-snapshot.repository';
 
 export interface BookAtInput {
   salon: { id: string; timeZone: string; skinTestLeadHours: number; skinTestValidityDays: number; granularityMinutes: number };
-  clientId: string;
+  /** Null for an online hold that nobody has claimed yet (the skin-test rule is checked when it is claimed). */
+  clientId: string | null;
   service: ServiceSummary;
   plan: StepPlan;
   stylistId: string;
   start: Date;
+  /** Book the earliest start from `start` up to this one (a window fill); without it, exactly `start`. */
+  latestStart?: Date;
   actorUserId: string | null;
   now: Date;
   status?: BookingStatus;
@@ -29,7 +32,7 @@ export interface BookAtInput {
 const taken = () => new AppError('CONFLICT', 409, 'Someone booked that time a moment ago. Look for times again.');
 
 /** Throws 409 SKIN_TEST when the skin-test rule forbids colour at these sitting starts. */
-export async function assertSkinTestAllows(db: Db, input: Pick<BookAtInput, 'salon' | 'clientId' | 'service' | 'now'>, starts: Date[]) {
+export async function assertSkinTestAllows(db: Db, input: Pick<BookAtInput, 'salon' | 'service' | 'now'> & { clientId: string }, starts: Date[]) {
   const verdict = checkSkinTest(
     input.service.needsSkinTest,
     await skinTestRecords(db, input.clientId),
@@ -60,7 +63,7 @@ export async function bookAt(db: Db, input: BookAtInput): Promise<string> {
     throw new AppError('VALIDATION_FAILED', 400, 'Some fields need attention.', { start: `Start times fall on the salon's ${input.salon.granularityMinutes}-minute grid.` });
   }
   const found = await planOrExplain(db, input);
-  await assertSkinTestAllows(db, input, found.sittings.map((s) => new Date(s.steps[0].start)));
+  if (input.clientId) await assertSkinTestAllows(db, { ...input, clientId: input.clientId }, found.sittings.map((s) => new Date(s.steps[0].start)));
   try {
     const id = await insertBooking(db, {
       salonId: input.salon.id,
@@ -93,7 +96,8 @@ async function planOrExplain(db: Db, input: BookAtInput): Promise<Option> {
   if (!stylist.skills.includes(input.service.skill)) {
     throw new AppError('VALIDATION_FAILED', 400, 'Some fields need attention.', { stylistId: `This stylist does not have the "${input.service.skill}" skill this service needs.` });
   }
-  const result = planExactlyAt(calendars, { skill: input.service.skill, stylistId: input.stylistId, plan: input.plan, start: input.start });
+  const req = { skill: input.service.skill, stylistId: input.stylistId, plan: input.plan, start: input.start };
+  const result = input.latestStart ? planBetween(calendars, req, input.latestStart) : planExactlyAt(calendars, req);
   if ('reason' in result) throw new AppError('CONFLICT', 409, result.reason);
   return result.plan;
 }

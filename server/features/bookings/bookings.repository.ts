@@ -12,7 +12,7 @@ export interface NewStep {
 
 export interface NewBooking {
   salonId: string;
-  clientId: string;
+  clientId: string | null;
   serviceId: string;
   stylistId: string;
   status: BookingStatus;

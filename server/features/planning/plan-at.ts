@@ -10,14 +10,26 @@ export interface ExactRequest {
   start: Date;
 }
 
-function ask(calendars: Scenario, req: ExactRequest): Option | undefined {
+/** The engine's first plan for this stylist starting at or after `start` (any time later the same day). */
+function firstFrom(calendars: Scenario, req: ExactRequest): Option | undefined {
   const earliest = DateTime.fromJSDate(req.start, { zone: calendars.timeZone }).toFormat("yyyy-MM-dd'T'HH:mm");
   const { options } = planOptions({
     ...calendars,
     request: { skill: req.skill, stylist: req.stylistId, earliest, sittings: toEngineSittings(req.plan), limit: 1, spread: 'none' },
   });
-  const first = options[0];
+  return options[0];
+}
+
+function ask(calendars: Scenario, req: ExactRequest): Option | undefined {
+  const first = firstFrom(calendars, req);
   return first && Date.parse(first.sittings[0].steps[0].start) === req.start.getTime() ? first : undefined;
+}
+
+/** The earliest plan starting between `req.start` and `latest` (e.g. anywhere inside a hands-free window). */
+export function planBetween(calendars: Scenario, req: ExactRequest, latest: Date): { plan: Option } | { reason: string } {
+  const first = firstFrom(calendars, req);
+  if (first && Date.parse(first.sittings[0].steps[0].start) <= latest.getTime()) return { plan: first };
+  return planExactlyAt(calendars, req);
 }
 
 /**

@@ -1,8 +1,11 @@
 import { useSuspenseQuery } from '@tanstack/react-query';
+import { Link } from 'react-router-dom';
+import { paths } from '../../config/paths';
 import { PageHeader } from '../../components/ui/page-header';
 import { TimeZoneNote } from '../../components/ui/time-zone-note';
 import { bookingQueries } from '../../features/bookings/api/booking-queries';
 import { BookingList } from '../../features/bookings/components/booking-list';
+import { MyBookingActions } from '../../features/bookings/components/my-booking-actions';
 import { salonQueries } from '../../features/salon/api/salon-queries';
 import { SalonCard } from '../../features/salon/components/salon-card';
 import { queryClient } from '../../lib/query-client';
@@ -22,10 +25,18 @@ export function Component() {
     <div className="grid gap-8 lg:grid-cols-[1fr_20rem]">
       <div>
         <PageHeader title="My bookings" subtitle={<TimeZoneNote timeZone={mine.timeZone} />} />
-        <BookingList bookings={mine.bookings} timeZone={mine.timeZone} currency={salon.currency} />
+        <BookingList
+          bookings={mine.bookings}
+          timeZone={mine.timeZone}
+          currency={salon.currency}
+          actions={(booking) => <MyBookingActions booking={booking} />}
+        />
       </div>
       <aside aria-label="Your salon" className="flex flex-col gap-4">
         <SalonCard salon={salon} />
+        <Link to={paths.salon(salon.slug)} className="text-link">
+          Book online at {salon.name}
+        </Link>
         <p className="text-sm text-ink/80">
           Colour services need a skin test at least {salon.skinTestLeadHours} hours before the appointment. Tell the
           salon about any reaction, allergy or recent colour at home.

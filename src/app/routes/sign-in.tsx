@@ -1,7 +1,8 @@
 import { Link, redirect, useNavigate, useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
-import { homeFor, paths, safeNext } from '../../config/paths';
+import { demoSalonSlug, homeFor, paths, safeNext } from '../../config/paths';
 import { AuthPanel } from '../../features/auth/components/auth-panel';
 import { SignInForm } from '../../features/auth/components/sign-in-form';
+import { DemoSalonLink } from '../../features/public-salon/components/demo-salon-link';
 import { currentUser } from '../require-role';
 
 /** Someone already signed in goes straight on. */
@@ -26,10 +27,11 @@ export function Component() {
           </Link>
           <p>
             New client?{' '}
-            <Link to={paths.signUp} className="text-link">
+            <Link to={paths.signUp(next ?? undefined)} className="text-link">
               Create an account
             </Link>
           </p>
+          {!next && <DemoSalonLink slug={demoSalonSlug} />}
         </>
       }
     >

@@ -8,9 +8,10 @@ import { isApiError } from '../../../lib/api-error';
 import { showServerErrors } from '../../../lib/form-errors';
 import { useSignUp } from '../api/session-mutations';
 
-type Props = { onSignedUp: (user: SessionUser) => void };
+/** `salonSlug`: the salon whose client the account becomes (when signing up from its booking flow). */
+type Props = { onSignedUp: (user: SessionUser) => void; salonSlug?: string };
 
-export function SignUpForm({ onSignedUp }: Props) {
+export function SignUpForm({ onSignedUp, salonSlug }: Props) {
   const signUp = useSignUp();
   const { register, handleSubmit, setError, formState } = useForm({
     resolver: zodResolver(SignUpBodySchema),
@@ -19,7 +20,7 @@ export function SignUpForm({ onSignedUp }: Props) {
   const { errors } = formState;
 
   const onSubmit = handleSubmit((body) =>
-    signUp.mutateAsync(body).then(
+    signUp.mutateAsync({ ...body, salonSlug }).then(
       ({ user }) => onSignedUp(user),
       (error) => {
         // A taken address is about the e-mail field, so say it there.

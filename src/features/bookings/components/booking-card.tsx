@@ -1,12 +1,14 @@
+import type { ReactNode } from 'react';
 import type { BookingView } from '../../../../shared/schemas/booking-view.schemas';
 import { BookingStatusBadge } from '../../../components/ui/booking-status-badge';
 import { formatMoney, sittingLabel } from '../../../lib/booking-labels';
 import { formatDay, formatTimeRange } from '../../../lib/time';
 
-type Props = { booking: BookingView; timeZone: string; currency: string; headingLevel?: 'h3' | 'h4' };
+/** `children`: what may be done with the booking (e.g. the client's move and cancel), under its details. */
+type Props = { booking: BookingView; timeZone: string; currency: string; headingLevel?: 'h3' | 'h4'; children?: ReactNode };
 
 /** One booking with each of its sittings' day, times and chair. */
-export function BookingCard({ booking, timeZone, currency, headingLevel: Heading = 'h3' }: Props) {
+export function BookingCard({ booking, timeZone, currency, headingLevel: Heading = 'h3', children }: Props) {
   return (
     <article className="rounded-xl bg-white p-4 ring-1 ring-ink/15">
       <div className="flex flex-wrap items-start justify-between gap-2">
@@ -34,6 +36,7 @@ export function BookingCard({ booking, timeZone, currency, headingLevel: Heading
         Price {formatMoney(booking.priceCents, currency)}
         {booking.depositCents > 0 && ` · deposit ${formatMoney(booking.depositCents, currency)}`}
       </p>
+      {children}
     </article>
   );
 }

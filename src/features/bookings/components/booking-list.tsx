@@ -1,12 +1,13 @@
-import { useMemo } from 'react';
+import { useMemo, type ReactNode } from 'react';
 import type { BookingView } from '../../../../shared/schemas/booking-view.schemas';
 import { isPast } from '../../../lib/time';
 import { BookingCard } from './booking-card';
 
-type Props = { bookings: BookingView[]; timeZone: string; currency: string };
+/** `actions`: drawn inside each booking's card (the client's own list adds move and cancel). */
+type Props = { bookings: BookingView[]; timeZone: string; currency: string; actions?: (booking: BookingView) => ReactNode };
 
 /** Upcoming bookings first (soonest first), then past ones (latest first). */
-export function BookingList({ bookings, timeZone, currency }: Props) {
+export function BookingList({ bookings, timeZone, currency, actions }: Props) {
   const { upcoming, past } = useMemo(() => {
     const lastEnd = (b: BookingView) => b.sittings.at(-1)?.end ?? '';
     const firstStart = (b: BookingView) => b.sittings[0]?.start ?? '';
@@ -23,7 +24,11 @@ export function BookingList({ bookings, timeZone, currency }: Props) {
       {list.length === 0 ? (
         <p className="text-ink/80">{empty}</p>
       ) : (
-        list.map((booking) => <BookingCard key={booking.id} booking={booking} timeZone={timeZone} currency={currency} />)
+        list.map((booking) => (
+          <BookingCard key={booking.id} booking={booking} timeZone={timeZone} currency={currency}>
+            {actions?.(booking)}
+          </BookingCard>
+        ))
       )}
     </section>
   );

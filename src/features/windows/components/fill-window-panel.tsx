@@ -21,12 +21,14 @@ export function FillWindowPanel({ window: win, timeZone, onDone }: Props) {
   const fit = win.fits.find((f) => f.serviceId === fitId);
   const wanting = win.standby.filter((s) => s.serviceIds.includes(fitId));
   const at = formatTime(win.start, timeZone);
+  // The server books the earliest free start inside the window, so a fit need not start at its first minute.
+  const latestStart = fit ? new Date(Date.parse(win.end) - fit.minutes * 60_000).toISOString() : win.start;
   const base = { stylistId: win.stylistId, serviceId: fitId, start: win.start };
 
   const book = (who: Who) => {
     const name = 'walkIn' in who ? who.walkIn.name : who.name;
     const action = `${win.start}/${fitId}/${'walkIn' in who ? 'walk-in' : who.clientId}`;
-    const body = 'walkIn' in who ? { ...base, walkIn: who.walkIn } : { ...base, clientId: who.clientId, standbyEntryId: who.standbyEntryId };
+    const body = { ...base, latestStart, ...('walkIn' in who ? { walkIn: who.walkIn } : { clientId: who.clientId, standbyEntryId: who.standbyEntryId }) };
     fill.mutate(
       { ...body, idempotencyKey: keys.keyFor(action) },
       {

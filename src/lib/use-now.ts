@@ -1,7 +1,7 @@
 import { DateTime } from 'luxon';
 import { useEffect, useState } from 'react';
 
-/** The current time, updated every `everyMs` (timers on the stylist's day). */
+/** The current time, updated every `everyMs` (developing timers, the online hold countdown). */
 export function useNow(everyMs = 15_000): DateTime {
   const [now, setNow] = useState(() => DateTime.now());
   useEffect(() => {

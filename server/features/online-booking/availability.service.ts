@@ -1,0 +1,51 @@
+import { DateTime } from 'luxon';
+import type { Db } from '../../db/database';
+import type { Availability } from '../../../shared/schemas/online-booking.schemas';
+import type { ServiceSummary } from '../../../shared/schemas/service.schemas';
+import { planOptions } from '../../../shared/engine/engine';
+import { AppError, notFound } from '../../lib/app-error';
+import { findService } from '../services/services.repository';
+import { loadSalonCalendars } from '../planning/salon-calendars.repository';
+import { localEarliest, toEngineSittings } from '../planning/engine-request';
+import { loadNames } from '../planning/names.repository';
+
+/** How far ahead online clients see free times. */
+export const ONLINE_DAYS = 21;
+const MAX_TIMES = 400;
+
+interface SalonRow {
+  id: string;
+  time_zone: string;
+  granularity_minutes: number;
+}
+
+/** Every free start (on the grid) for one service, one stylist or any, over the next three weeks. */
+export async function freeTimes(db: Db, salon: SalonRow, service: ServiceSummary, stylistId: string | undefined, from: string | undefined, now: Date, except?: string): Promise<Availability> {
+  const zone = salon.time_zone;
+  const fromDay = DateTime.max(DateTime.fromISO(from ?? '1970-01-01', { zone }), DateTime.fromJSDate(now, { zone }).startOf('day'));
+  const horizon = { from: fromDay.toISODate()!, to: fromDay.plus({ days: ONLINE_DAYS }).toISODate()! };
+  const calendars = await loadSalonCalendars(db, salon.id, horizon, except);
+  if (stylistId && !calendars.stylists.some((s) => s.id === stylistId)) {
+    throw new AppError('VALIDATION_FAILED', 400, 'Some fields need attention.', { stylistId: 'No such stylist in this salon.' });
+  }
+  const earliest = new Date(Math.max(now.getTime(), fromDay.toMillis()));
+  const { options } = planOptions({
+    ...calendars,
+    request: { skill: service.skill, stylist: stylistId ?? null, earliest: localEarliest(earliest, zone, salon.granularity_minutes), sittings: toEngineSittings(service.stepPlan), limit: MAX_TIMES, spread: 'none' },
+  });
+  const names = await loadNames(db, salon.id);
+  return {
+    timeZone: zone,
+    times: options.map((o) => {
+      const steps = o.sittings[0].steps;
+      return { start: steps[0].start, end: steps[steps.length - 1].end, stylistId: o.stylist, stylistName: names.stylists.get(o.stylist) ?? '' };
+    }),
+  };
+}
+
+export async function onlineService(db: Db, salonId: string, serviceId: string): Promise<ServiceSummary> {
+  const service = await findService(db, salonId, serviceId);
+  if (!service || !service.onlineBookable) throw notFound('That service');
+  if (service.stepPlan.sittings.length !== 1) throw new AppError('NOT_BOOKABLE', 409, 'This service is booked with the salon after a consultation.');
+  return service;
+}

@@ -1,0 +1,67 @@
+import { sql } from 'kysely';
+import type { Db } from '../../db/database';
+
+/** A hold (or the booking it became) with what the client's screens show. */
+export async function findHold(db: Db, id: string) {
+  return db
+    .selectFrom('bookings as b')
+    .innerJoin('salons as sa', 'sa.id', 'b.salon_id')
+    .innerJoin('services as sv', 'sv.id', 'b.service_id')
+    .innerJoin('staff as st', 'st.id', 'b.stylist_id')
+    .innerJoin('sittings as si', (j) => j.onRef('si.booking_id', '=', 'b.id').on('si.seq', '=', 1))
+    .select([
+      'b.id', 'b.status', 'b.stylist_id', 'b.held_until', 'b.hold_secret_hash', 'b.client_id', 'b.deposit_cents', 'b.salon_id', 'b.service_id',
+      'sa.name as salonName', 'sa.time_zone as timeZone', 'sa.currency', 'sa.address', 'sv.name as serviceName', 'sv.needs_skin_test', 'sv.category',
+      'st.display_name as stylistName', sql<Date>`lower(si.during)`.as('start'), sql<Date>`upper(si.during)`.as('end'),
+    ])
+    .where('b.id', '=', id)
+    .executeTakeFirst();
+}
+export type HoldRow = NonNullable<Awaited<ReturnType<typeof findHold>>>;
+
+export async function markHold(db: Db, id: string, heldUntil: Date, secretHash: string): Promise<void> {
+  await db.updateTable('bookings').set({ held_until: heldUntil, hold_secret_hash: secretHash }).where('id', '=', id).execute();
+}
+
+/** Removes holds past their time: the time is free again. Returns how many lapsed. */
+export async function lapseHolds(db: Db, now: Date, id?: string): Promise<number> {
+  let query = db.deleteFrom('bookings').where('status', '=', 'held').where('held_until', '<=', now);
+  if (id) query = query.where('id', '=', id);
+  const res = await query.executeTakeFirst();
+  return Number(res.numDeletedRows);
+}
+
+export async function claimHoldRow(db: Db, id: string, clientId: string): Promise<void> {
+  await db.updateTable('bookings').set({ client_id: clientId }).where('id', '=', id).where('status', '=', 'held').execute();
+}
+
+/** Held → booked, only while the hold is still within its time (one statement: no race with the lapse job). */
+export async function confirmHoldRow(db: Db, id: string, now: Date): Promise<boolean> {
+  const res = await db
+    .updateTable('bookings')
+    .set({ status: 'booked', held_until: null, hold_secret_hash: null })
+    .where('id', '=', id)
+    .where('status', '=', 'held')
+    .where('held_until', '>', now)
+    .executeTakeFirst();
+  return Number(res.numUpdatedRows) === 1;
+}
+
+export async function recordPayment(
+  db: Db,
+  p: { salonId: string; bookingId: string; clientId: string | null; providerRef: string | null; amountCents: number; currency: string; status: 'succeeded' | 'declined' | 'refunded'; message?: string },
+): Promise<void> {
+  await db
+    .insertInto('payments')
+    .values({ salon_id: p.salonId, booking_id: p.bookingId, client_id: p.clientId, provider_ref: p.providerRef, amount_cents: p.amountCents, currency: p.currency, status: p.status, message: p.message ?? '' })
+    .execute();
+}
+
+export async function insertCautionAcceptance(db: Db, bookingId: string, userId: string, version: string, texts: unknown): Promise<void> {
+  await db.insertInto('caution_acceptances').values({ booking_id: bookingId, user_id: userId, version, texts: JSON.stringify(texts) }).execute();
+}
+
+export async function hasAcceptedCautions(db: Db, bookingId: string, version: string): Promise<boolean> {
+  const row = await db.selectFrom('caution_acceptances').select('id').where('booking_id', '=', bookingId).where('version', '=', version).executeTakeFirst();
+  return Boolean(row);
+}

@@ -1,0 +1,53 @@
+import { BookingViewSchema } from '../../../shared/schemas/booking-view.schemas';
+import { IdParamsSchema } from '../../../shared/schemas/common.schemas';
+import { AvailabilitySchema, CancelTermsSchema, ClientCancelSchema, ClientMoveSchema, MoveTimesQuerySchema } from '../../../shared/schemas/online-booking.schemas';
+import type { AppDeps } from '../../app-deps';
+import { requireAccess } from '../../auth/require-access';
+import { apiRoute } from '../../lib/api-route';
+import { deskBookingView } from '../bookings/booking-changes.routes';
+import { cancelBooking } from '../bookings/cancel-booking.service';
+import { moveSitting } from '../bookings/move-booking.service';
+import { findSalonBySlug } from './public-salon.service';
+import { freeTimes } from './availability.service';
+import { bookingIcs } from './booking-ics';
+import { assertClientMovable, cancelTerms, ownBooking } from './my-bookings.service';
+
+export function registerMyBookingRoutes({ table, db }: AppDeps): void {
+  table.records.push({ method: 'get', path: '/api/me/bookings/:id/calendar.ics', access: ['client'] });
+  table.router.get('/api/me/bookings/:id/calendar.ics', requireAccess(['client']), async (req, res) => {
+    const { id } = IdParamsSchema.parse(req.params);
+    const { hold, salon } = await ownBooking(db, req.user as never, id);
+    const ics = bookingIcs({ uid: `${hold.id}@dwell`, title: `${hold.serviceName} at ${salon.name}`, description: `${hold.serviceName} with ${hold.stylistName}`, location: salon.address, start: hold.start, end: hold.end });
+    res.type('text/calendar').attachment('booking.ics').send(ics);
+  });
+  apiRoute(table, { method: 'get', path: '/api/me/bookings/:id/cancel-terms', access: ['client'], summary: 'What cancelling now means for the deposit', params: IdParamsSchema, response: CancelTermsSchema }, async ({ user, params }) =>
+    cancelTerms(db, user, params.id, new Date()),
+  );
+  apiRoute(
+    table,
+    { method: 'post', path: '/api/me/bookings/:id/cancel', access: ['client'], summary: 'Cancel one of my bookings', params: IdParamsSchema, body: ClientCancelSchema, response: BookingViewSchema },
+    async ({ user, params, body }) => {
+      const { salon } = await ownBooking(db, user, params.id);
+      await cancelBooking(db, salon, user.id, params.id, body.reason, new Date());
+      return deskBookingView(db, salon.id, salon.timeZone, params.id);
+    },
+  );
+  apiRoute(
+    table,
+    { method: 'get', path: '/api/me/bookings/:id/move-times', access: ['client'], summary: 'Free times to move one of my bookings to', params: IdParamsSchema, query: MoveTimesQuerySchema, response: AvailabilitySchema },
+    async ({ user, params, query }) => {
+      const { salon, service, hold } = await assertClientMovable(db, user, params.id, new Date());
+      const row = await findSalonBySlug(db, salon.slug);
+      return freeTimes(db, row, service, hold.stylist_id, query.from, new Date(), params.id);
+    },
+  );
+  apiRoute(
+    table,
+    { method: 'post', path: '/api/me/bookings/:id/move', access: ['client'], summary: 'Move one of my bookings', params: IdParamsSchema, body: ClientMoveSchema, response: BookingViewSchema },
+    async ({ user, params, body }) => {
+      const { salon } = await assertClientMovable(db, user, params.id, new Date());
+      await moveSitting(db, salon, user.id, { bookingId: params.id, sitting: 1, start: new Date(body.start) }, new Date());
+      return deskBookingView(db, salon.id, salon.timeZone, params.id);
+    },
+  );
+}

@@ -1,0 +1,43 @@
+import type { Kysely } from 'kysely';
+import type { Database } from '../../db/schema';
+import type { SessionUser } from '../../../shared/schemas/auth.schemas';
+import { DateTime } from 'luxon';
+import { AppError, notFound } from '../../lib/app-error';
+import { findSalon } from '../salon/salon.repository';
+import { findClientIdForUser } from '../clients/clients.repository';
+import { findService } from '../services/services.repository';
+import { depositOutcome } from '../bookings/cancel-booking.service';
+import { findHold } from './holds.repository';
+
+/** One of the signed-in client's own bookings; anyone else's is answered as not found. */
+export async function ownBooking(db: Kysely<Database>, user: SessionUser, id: string) {
+  const [hold, clientId] = await Promise.all([findHold(db, id), findClientIdForUser(db, user.id)]);
+  if (!hold || !clientId || hold.client_id !== clientId) throw notFound('That booking');
+  const salon = await findSalon(db, hold.salon_id);
+  return { hold, salon };
+}
+
+/** What cancelling now means for the deposit, in words the client reads before confirming. */
+export async function cancelTerms(db: Kysely<Database>, user: SessionUser, id: string, now: Date) {
+  const { hold, salon } = await ownBooking(db, user, id);
+  if (hold.status !== 'booked') throw new AppError('NOT_BOOKABLE', 409, 'Only booked appointments can be cancelled here.');
+  const outcome = depositOutcome(hold.deposit_cents, hold.start, now, salon.cancellationWindowHours);
+  const amount = new Intl.NumberFormat('en-US', { style: 'currency', currency: salon.currency }).format(hold.deposit_cents / 100);
+  const message =
+    outcome === 'kept'
+      ? `Your appointment is less than ${salon.cancellationWindowHours} hours away, so the ${amount} deposit is kept if you cancel now.`
+      : outcome === 'refunded'
+        ? `You are cancelling more than ${salon.cancellationWindowHours} hours ahead, so the ${amount} deposit is refunded.`
+        : 'There is no deposit on this appointment.';
+  return { depositOutcome: outcome, message };
+}
+
+/** A client may move only one-sitting appointments themselves; longer work is moved with the salon. */
+export async function assertClientMovable(db: Kysely<Database>, user: SessionUser, id: string, now: Date) {
+  const { hold, salon } = await ownBooking(db, user, id);
+  const service = await findService(db, salon.id, hold.service_id);
+  if (!service || service.stepPlan.sittings.length !== 1) throw new AppError('NOT_BOOKABLE', 409, 'Please call the salon to move an appointment with several sittings.');
+  if (hold.status !== 'booked') throw new AppError('NOT_BOOKABLE', 409, 'Only booked appointments can be moved.');
+  if (hold.start <= now) throw new AppError('NOT_BOOKABLE', 409, 'This appointment has already started.');
+  return { hold, salon, service, startsIn: DateTime.fromJSDate(hold.start).diff(DateTime.fromJSDate(now), 'hours').hours };
+}

@@ -1,0 +1,70 @@
+import { rateLimit } from 'express-rate-limit';
+import { apiPaths } from '../../../shared/api/api-paths';
+import {
+  AcceptCautionsSchema, AvailabilityQuerySchema, AvailabilitySchema, ClaimedHoldSchema, CreatedHoldSchema, CreateHoldSchema,
+  HoldParamsSchema, HoldSchema, HoldSecretSchema, PayHoldSchema, PublicSalonSchema, SlugParamsSchema,
+} from '../../../shared/schemas/online-booking.schemas';
+import { BookingViewSchema } from '../../../shared/schemas/booking-view.schemas';
+import type { AppDeps } from '../../app-deps';
+import { apiRoute } from '../../lib/api-route';
+import { AppError, notFound } from '../../lib/app-error';
+import { deskBookingView } from '../bookings/booking-changes.routes';
+import { findSalonBySlug, publicSalon } from './public-salon.service';
+import { freeTimes, onlineService } from './availability.service';
+import { acceptCautions, claimHold, createHold, holdView } from './holds.service';
+import { findHold } from './holds.repository';
+import { payHold } from './pay-hold.service';
+
+const limited = (limit: number) =>
+  rateLimit({
+    windowMs: 60_000,
+    limit,
+    standardHeaders: 'draft-8',
+    legacyHeaders: false,
+    handler: (_req, _res, next) => next(new AppError('RATE_LIMITED', 429, 'Too many requests; wait a minute and try again.')),
+  });
+
+export function registerOnlineBookingRoutes({ table, db, jobs, payments, mailer, sms }: AppDeps): void {
+  apiRoute(table, { method: 'get', path: '/api/public/salons/:slug', access: 'public', summary: "The salon's public page", params: SlugParamsSchema, response: PublicSalonSchema }, async ({ params }) =>
+    publicSalon(db, params.slug),
+  );
+  table.router.get('/api/public/salons/:slug/availability', limited(60));
+  apiRoute(
+    table,
+    { method: 'get', path: '/api/public/salons/:slug/availability', access: 'public', summary: 'Free times for an online-bookable service', params: SlugParamsSchema, query: AvailabilityQuerySchema, response: AvailabilitySchema },
+    async ({ params, query }) => {
+      const salon = await findSalonBySlug(db, params.slug);
+      const service = await onlineService(db, salon.id, query.serviceId);
+      return freeTimes(db, salon, service, query.stylistId, query.from, new Date());
+    },
+  );
+  table.router.post(apiPaths.holds, limited(20));
+  apiRoute(table, { method: 'post', path: apiPaths.holds, access: 'public', summary: 'Hold a time for a few minutes', body: CreateHoldSchema, response: CreatedHoldSchema, status: 201 }, async ({ body }) =>
+    createHold(db, jobs, body, new Date()),
+  );
+  apiRoute(table, { method: 'get', path: '/api/public/holds/:id', access: 'public', summary: 'Where a hold stands', params: HoldParamsSchema, response: HoldSchema }, async ({ params }) => {
+    const hold = await findHold(db, params.id);
+    if (!hold) throw new AppError('HOLD_LAPSED', 409, 'The time was released because the hold ran out.');
+    return holdView(hold);
+  });
+  apiRoute(
+    table,
+    { method: 'post', path: '/api/me/holds/:id/claim', access: ['client'], summary: 'Take a hold as the signed-in client', params: HoldParamsSchema, body: HoldSecretSchema, response: ClaimedHoldSchema },
+    async ({ user, params, body }) => claimHold(db, user, params.id, body.secret, new Date()),
+  );
+  apiRoute(
+    table,
+    { method: 'post', path: '/api/me/holds/:id/cautions', access: ['client'], summary: 'Accept the cautions for a hold', params: HoldParamsSchema, body: AcceptCautionsSchema, status: 204 },
+    async ({ user, params, body }) => acceptCautions(db, user, params.id, body.secret, body.version, new Date()),
+  );
+  apiRoute(
+    table,
+    { method: 'post', path: '/api/me/holds/:id/pay', access: ['client'], summary: 'Pay the deposit; the hold becomes a booking', params: HoldParamsSchema, body: PayHoldSchema, response: BookingViewSchema },
+    async ({ user, params, body }) => {
+      const id = await payHold(db, { payments, mailer, sms }, user, params.id, body, new Date());
+      const hold = await findHold(db, id);
+      if (!hold) throw notFound('That booking');
+      return deskBookingView(db, hold.salon_id, hold.timeZone, id);
+    },
+  );
+}

@@ -1,0 +1,55 @@
+import type { Kysely } from 'kysely';
+import type { z } from 'zod';
+import type { Database } from '../../db/schema';
+import type { SessionUser } from '../../../shared/schemas/auth.schemas';
+import type { PayHoldSchema } from '../../../shared/schemas/online-booking.schemas';
+import type { Payments } from '../../payments/payments';
+import type { Mailer } from '../../mail/mailer';
+import type { SmsSender } from '../../sms/sms-sender';
+import { AppError } from '../../lib/app-error';
+import { findSalon } from '../salon/salon.repository';
+import { writeAudit } from '../audit/audit.repository';
+import { cautionsFor } from './cautions';
+import { confirmHoldRow, findHold, hasAcceptedCautions, recordPayment } from './holds.repository';
+import { ownHold } from './holds.service';
+import { sendConfirmation } from './confirmation';
+
+type Deps = { payments: Payments; mailer: Mailer; sms: SmsSender };
+
+/**
+ * Pays the deposit and turns the hold into a booking. The charge happens first (it may take a while); then,
+ * in one statement, the hold becomes booked only if it is still held. A payment that arrives after the hold
+ * lapsed is refunded at once, so money and bookings always agree.
+ */
+export async function payHold(db: Kysely<Database>, deps: Deps, user: SessionUser, id: string, body: z.infer<typeof PayHoldSchema>, now: Date): Promise<string> {
+  const hold = await ownHold(db, user, id, body.secret, now);
+  if (hold.status !== 'held') return hold.id; // paid already (a retried request)
+  const salon = await findSalon(db, hold.salon_id);
+  if (!(await hasAcceptedCautions(db, id, cautionsFor(hold, salon.skinTestLeadHours).version))) {
+    throw new AppError('CONFLICT', 409, 'Please read and accept the cautions first.');
+  }
+  const record = { salonId: salon.id, bookingId: id, clientId: hold.client_id, amountCents: hold.deposit_cents, currency: salon.currency };
+  let paymentRef: string | null = null;
+  if (hold.deposit_cents > 0) {
+    if (!body.card) throw new AppError('VALIDATION_FAILED', 400, 'Some fields need attention.', { card: 'Enter a card for the deposit.' });
+    const charge = await deps.payments.charge({ amountCents: hold.deposit_cents, currency: salon.currency, card: body.card, idempotencyKey: `deposit:${id}:${body.idempotencyKey}`, metadata: { booking: id } });
+    if (!charge.ok) {
+      await recordPayment(db, { ...record, providerRef: charge.paymentIntentId, status: 'declined', message: charge.message });
+      throw new AppError('PAYMENT_DECLINED', 402, `${charge.message} Your time stays held until ${hold.held_until?.toISOString().slice(11, 16)} UTC; try another card.`);
+    }
+    paymentRef = charge.paymentIntentId;
+  }
+  const booked = await confirmHoldRow(db, id, new Date());
+  if (!booked) {
+    if (paymentRef) {
+      await deps.payments.refund(paymentRef, `refund:${paymentRef}`);
+      await recordPayment(db, { ...record, providerRef: paymentRef, status: 'refunded', message: 'Paid after the hold lapsed' });
+    }
+    throw new AppError('HOLD_LAPSED', 409, 'The time was released before the payment arrived; your payment has been refunded. Please pick a time again.');
+  }
+  if (paymentRef) await recordPayment(db, { ...record, providerRef: paymentRef, status: 'succeeded' });
+  await writeAudit(db, { salonId: salon.id, actorUserId: user.id, entity: 'booking', entityId: id, action: 'booked online', after: { status: 'booked', deposit: hold.deposit_cents } });
+  const client = await db.selectFrom('clients').select(['name', 'email', 'phone']).where('id', '=', hold.client_id!).executeTakeFirstOrThrow();
+  await sendConfirmation(deps, (await findHold(db, id))!, client);
+  return id;
+}

@@ -1,0 +1,55 @@
+import { RRule } from 'rrule';
+import type { Db } from '../../db/database';
+import type { PublicSalon } from '../../../shared/schemas/online-booking.schemas';
+import { notFound } from '../../lib/app-error';
+import { listServices, listStylistDetails } from '../services/services.repository';
+
+const money = (cents: number, currency: string) => new Intl.NumberFormat('en-US', { style: 'currency', currency }).format(cents / 100);
+
+export async function findSalonBySlug(db: Db, slug: string) {
+  const salon = await db.selectFrom('salons').selectAll().where('slug', '=', slug).executeTakeFirst();
+  if (!salon) throw notFound('That salon');
+  return salon;
+}
+
+/** The salon's public page: services, hours and policies. Nothing about any client. */
+export async function publicSalon(db: Db, slug: string): Promise<PublicSalon> {
+  const salon = await findSalonBySlug(db, slug);
+  const [hours, services, stylists] = await Promise.all([
+    db.selectFrom('salon_hours').select(['rrule', 'start_time', 'end_time']).where('salon_id', '=', salon.id).execute(),
+    listServices(db, salon.id),
+    listStylistDetails(db, salon.id),
+  ]);
+  const deposits = services.filter((s) => s.depositCents > 0).map((s) => `${s.name}: ${money(s.depositCents, salon.currency)}`);
+  return {
+    slug: salon.slug,
+    name: salon.name,
+    address: salon.address,
+    phone: salon.phone,
+    timeZone: salon.time_zone,
+    currency: salon.currency,
+    // rrule's own English rendering of each rule ("every week on Tuesday, …"), with the day's opening times.
+    openingHours: hours.map((h) => `${RRule.fromString(h.rrule).toText()}, ${h.start_time.slice(0, 5)}–${h.end_time.slice(0, 5)}`),
+    policies: {
+      deposit: deposits.length
+        ? `A deposit secures long colour work and consultations: ${deposits.join('; ')}. It counts towards the price.`
+        : 'No deposit is needed.',
+      cancellation: `Cancel or move at least ${salon.cancellation_window_hours} hours before your appointment and your deposit is refunded; later, or if you do not come, the deposit is kept.`,
+      lateness: 'If you are more than 15 minutes late for a long colour service we may need to shorten or move it, because colour cannot be rushed.',
+      skinTest: `Oxidative colour needs a skin test at least ${salon.skin_test_lead_hours} hours before the colour appointment, repeated if your last one is more than ${Math.round(salon.skin_test_validity_days / 30)} months old.`,
+    },
+    services: services.map((s) => ({
+      id: s.id,
+      name: s.name,
+      description: s.description,
+      category: s.category,
+      typicalMinutes: s.stepPlan.sittings.reduce((t, sit) => t + sit.steps.reduce((m, st) => m + (st.kind === 'developing' ? Math.round((st.minMinutes + st.maxMinutes) / 2) : st.minutes), 0), 0),
+      priceCents: s.priceCents,
+      priceIsFrom: s.priceIsFrom,
+      depositCents: s.depositCents,
+      onlineBookable: s.onlineBookable,
+      needsSkinTest: s.needsSkinTest,
+    })),
+    stylists: stylists.map((s) => ({ id: s.id, name: s.name, skills: s.skills })),
+  };
+}

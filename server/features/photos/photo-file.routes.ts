@@ -1,0 +1,47 @@
+import type { SessionUser } from '../../../shared/schemas/auth.schemas';
+import { IdParamsSchema } from '../../../shared/schemas/common.schemas';
+import type { AppDeps } from '../../app-deps';
+import { CLIENT_OR_STAFF } from '../../auth/client-access';
+import { apiRoute } from '../../lib/api-route';
+import { notFound } from '../../lib/app-error';
+import type { Db } from '../../db/database';
+import { deletePhoto, findPhoto } from './photos.repository';
+
+
+/** The photo, if this user may see it: their own as a client, or their salon's as staff; else 404. */
+async function visiblePhoto(db: Db, user: SessionUser, id: string) {
+  const photo = await findPhoto(db, id);
+  if (!photo || photo.salon_id !== user.salonId) throw notFound('That photo');
+  if (user.role === 'client') {
+    const own = await db.selectFrom('clients').select('id').where('id', '=', photo.client_id).where('user_id', '=', user.id).executeTakeFirst();
+    if (!own) throw notFound('That photo');
+  }
+  return photo;
+}
+
+export function registerPhotoFileRoutes({ table, db, storage }: AppDeps): void {
+  apiRoute(
+    table,
+    { method: 'get', path: '/api/photos/:id', access: CLIENT_OR_STAFF, summary: 'The image bytes of one photo (the client or their salon’s team)', params: IdParamsSchema },
+    async ({ user, params, res }) => {
+      const photo = await visiblePhoto(db, user, params.id);
+      const bytes = await storage.get(photo.storage_key);
+      if (!bytes) throw notFound('That photo');
+      // Private: personal photos must not sit in shared caches; nosniff so the bytes are only ever an image.
+      res
+        .status(200)
+        .set({ 'Content-Type': photo.mime, 'Cache-Control': 'private, max-age=3600', 'X-Content-Type-Options': 'nosniff', 'Content-Disposition': 'inline' })
+        .end(bytes);
+    },
+  );
+  apiRoute(
+    table,
+    { method: 'delete', path: '/api/photos/:id', access: CLIENT_OR_STAFF, summary: 'Remove a photo (the client or their salon’s team)', params: IdParamsSchema, status: 204 },
+    async ({ user, params }) => {
+      const photo = await visiblePhoto(db, user, params.id);
+      // Row first: if removing the file then fails, an orphan file is harmless; a row without a file is not.
+      await deletePhoto(db, photo.id);
+      await storage.delete(photo.storage_key);
+    },
+  );
+}

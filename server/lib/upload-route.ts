@@ -1,0 +1,111 @@
+import type { Request, RequestHandler, Response } from 'express';
+import multer from 'multer';
+import { z, type ZodObject, type ZodType } from 'zod';
+import type { SessionUser } from '../../shared/schemas/auth.schemas';
+import { ApiErrorBodySchema } from '../../shared/api/error.schemas';
+import { requireAccess, type Access } from '../auth/require-access';
+import { describeAccess, errorStatuses, type RouteTable } from './api-route';
+import { AppError } from './app-error';
+import { safeFileName } from './safe-file-name';
+
+/**
+ * The multipart sibling of apiRoute: the same access check, zod parsing of the text fields and path
+ * params, and an OpenAPI entry, plus multer in memory for the files. Only these routes read multipart;
+ * express.json keeps its 100 kB limit everywhere else.
+ */
+export interface UploadSpec<F extends ZodObject, P extends ZodType> {
+  path: string;
+  access: Access;
+  summary: string;
+  /** The multipart field that carries the files. */
+  fileField: string;
+  maxFiles: number;
+  maxBytesPerFile: number;
+  fields: F;
+  params?: P;
+  response: ZodType;
+  /** Runs after the access check and before any byte is read (a rate limit). */
+  before?: RequestHandler[];
+}
+
+export interface UploadContext<F, P> {
+  fields: F;
+  params: P;
+  files: Express.Multer.File[];
+  user: SessionUser;
+  req: Request;
+  res: Response;
+}
+
+export function uploadRoute<F extends ZodObject, P extends ZodType>(
+  table: RouteTable,
+  spec: UploadSpec<F, P>,
+  handler: (ctx: UploadContext<z.infer<F>, P extends ZodType ? z.infer<P> : undefined>) => Promise<unknown>,
+): void {
+  table.records.push({ method: 'post', path: spec.path, access: spec.access });
+  register(table, spec);
+  table.router.post(spec.path, requireAccess(spec.access), ...(spec.before ?? []), readFiles(spec), async (req, res) => {
+    const files = (req.files as Express.Multer.File[] | undefined) ?? [];
+    if (!req.is('multipart/form-data')) throw new AppError('VALIDATION_FAILED', 400, 'Send the photos as multipart/form-data.');
+    if (files.length === 0) throw new AppError('VALIDATION_FAILED', 400, 'Choose at least one photo.', { [spec.fileField]: 'Choose at least one photo' });
+    const ctx = {
+      fields: spec.fields.parse({ ...req.body }),
+      params: spec.params ? spec.params.parse(req.params) : undefined,
+      files,
+      user: req.user as SessionUser,
+      req,
+      res,
+    } as UploadContext<z.infer<F>, P extends ZodType ? z.infer<P> : undefined>;
+    res.status(201).json(await handler(ctx));
+  });
+}
+
+/** multer in memory with hard limits; its errors become the API's error shape and name the file. */
+function readFiles(spec: UploadSpec<ZodObject, ZodType>): RequestHandler {
+  const upload = multer({
+    storage: multer.memoryStorage(),
+    limits: { fileSize: spec.maxBytesPerFile, files: spec.maxFiles, fields: 10, fieldSize: 200, parts: spec.maxFiles + 10, headerPairs: 100 },
+  }).array(spec.fileField, spec.maxFiles);
+  const megabytes = Math.round(spec.maxBytesPerFile / 1024 / 1024);
+  return (req, res, next) =>
+    upload(req, res, (err?: unknown) => {
+      if (!(err instanceof multer.MulterError)) return next(err);
+      // multer 2 names the file on its errors; its type definitions do not say so yet.
+      const filename = (err as { filename?: string }).filename;
+      const name = filename ? `“${safeFileName(filename)}”` : 'A file';
+      if (err.code === 'LIMIT_FILE_SIZE') {
+        return next(new AppError('PAYLOAD_TOO_LARGE', 413, `${name} is larger than ${megabytes} MB.`, { [spec.fileField]: `${name} is larger than ${megabytes} MB` }));
+      }
+      if (err.code === 'LIMIT_FILE_COUNT' || (err.code === 'LIMIT_UNEXPECTED_FILE' && err.field === spec.fileField)) {
+        return next(new AppError('VALIDATION_FAILED', 400, `Send at most ${spec.maxFiles} photos at a time.`, { [spec.fileField]: `At most ${spec.maxFiles} photos at a time` }));
+      }
+      if (err.code === 'LIMIT_UNEXPECTED_FILE') return next(new AppError('VALIDATION_FAILED', 400, `Send files only in the field “${spec.fileField}”.`));
+      next(new AppError('VALIDATION_FAILED', 400, 'The upload form is not one Dwell expects.'));
+    });
+}
+
+function register(table: RouteTable, spec: UploadSpec<ZodObject, ZodType>) {
+  const { $schema: _ignored, ...fields } = z.toJSONSchema(spec.fields, { io: 'input' }) as Record<string, unknown> & { properties?: object };
+  const multipart = {
+    ...fields,
+    properties: {
+      ...fields.properties,
+      [spec.fileField]: { type: 'array', maxItems: spec.maxFiles, items: { type: 'string', format: 'binary' } },
+    },
+  };
+  const json = (schema: ZodType) => ({ content: { 'application/json': { schema } } });
+  table.registry.registerPath({
+    method: 'post',
+    path: spec.path.replace(/:(\w+)/g, '{$1}'),
+    summary: spec.summary,
+    description: `Access: ${describeAccess(spec.access)}. Files of at most ${spec.maxBytesPerFile} bytes each.`,
+    request: {
+      body: { content: { 'multipart/form-data': { schema: multipart as never } } },
+      ...(spec.params && { params: spec.params as never }),
+    },
+    responses: {
+      201: { description: 'Stored', ...json(spec.response) },
+      ...Object.fromEntries([...errorStatuses(spec.access, true), 413, 429].map((s) => [s, { description: 'Error', ...json(ApiErrorBodySchema) }])),
+    },
+  });
+}

@@ -1,0 +1,100 @@
+import { z } from 'zod';
+import { IdSchema, InstantInputSchema, InstantSchema, LocalDateSchema } from './common.schemas';
+import { ServiceCategorySchema } from './service.schemas';
+
+/** The salon's public page: what it offers and on what terms (no client data). */
+export const PublicSalonSchema = z.object({
+  slug: z.string(),
+  name: z.string(),
+  address: z.string(),
+  phone: z.string(),
+  timeZone: z.string(),
+  currency: z.string(),
+  openingHours: z.array(z.string()),
+  policies: z.object({
+    deposit: z.string(),
+    cancellation: z.string(),
+    lateness: z.string(),
+    skinTest: z.string(),
+  }),
+  services: z.array(
+    z.object({
+      id: IdSchema,
+      name: z.string(),
+      description: z.string(),
+      category: ServiceCategorySchema,
+      typicalMinutes: z.number().int(),
+      priceCents: z.number().int(),
+      priceIsFrom: z.boolean(),
+      depositCents: z.number().int(),
+      onlineBookable: z.boolean(),
+      /** Oxidative colour: a skin test is needed first (and usually a consultation). */
+      needsSkinTest: z.boolean(),
+    }),
+  ),
+  stylists: z.array(z.object({ id: IdSchema, name: z.string(), skills: z.array(z.string()) })),
+});
+export type PublicSalon = z.infer<typeof PublicSalonSchema>;
+
+export const SlugParamsSchema = z.object({ slug: z.string().regex(/^[a-z0-9-]{1,80}$/) }).strict();
+
+export const AvailabilityQuerySchema = z
+  .object({ serviceId: IdSchema, stylistId: IdSchema.optional(), from: LocalDateSchema.optional() })
+  .strict();
+
+/** Free start times for an online-bookable service over the next weeks (salon time, grouped by the client). */
+export const AvailabilitySchema = z.object({
+  timeZone: z.string(),
+  times: z.array(z.object({ start: InstantSchema, end: InstantSchema, stylistId: IdSchema, stylistName: z.string() })),
+});
+export type Availability = z.infer<typeof AvailabilitySchema>;
+
+export const CreateHoldSchema = z
+  .object({ salonSlug: z.string().max(80), serviceId: IdSchema, stylistId: IdSchema, start: InstantInputSchema })
+  .strict();
+
+/** A hold: the time kept for a few minutes while the client signs in and pays. Keep `holdSecret` to claim it. */
+export const HoldSchema = z.object({
+  holdId: IdSchema,
+  status: z.enum(['held', 'booked', 'lapsed']),
+  heldUntil: InstantSchema.nullable(),
+  salonName: z.string(),
+  serviceName: z.string(),
+  stylistName: z.string(),
+  start: InstantSchema,
+  end: InstantSchema,
+  timeZone: z.string(),
+  depositCents: z.number().int(),
+  currency: z.string(),
+});
+export type Hold = z.infer<typeof HoldSchema>;
+export const CreatedHoldSchema = HoldSchema.extend({ holdSecret: z.string() });
+export const HoldSecretSchema = z.object({ secret: z.string().min(20).max(100) }).strict();
+export const HoldParamsSchema = z.object({ id: IdSchema }).strict();
+
+/** The cautions a client reads and accepts before paying; `version` is stored with the acceptance. */
+export const CautionsSchema = z.object({
+  version: z.string(),
+  items: z.array(z.object({ id: z.string(), title: z.string(), text: z.string() })),
+});
+export type Cautions = z.infer<typeof CautionsSchema>;
+export const ClaimedHoldSchema = HoldSchema.extend({ cautions: CautionsSchema });
+export const AcceptCautionsSchema = z.object({ version: z.string().min(1).max(40), secret: z.string().min(20).max(100) }).strict();
+
+export const CardSchema = z
+  .object({
+    number: z.string().transform((s) => s.replace(/[\s-]/g, '')).pipe(z.string().regex(/^\d{12,19}$/, 'Enter the card number')),
+    expMonth: z.number().int().min(1).max(12),
+    expYear: z.number().int().min(2024).max(2100),
+    cvc: z.string().regex(/^\d{3,4}$/, 'Enter the 3 or 4 digits on the back'),
+  })
+  .strict();
+export const PayHoldSchema = z
+  .object({ secret: z.string().min(20).max(100), card: CardSchema.optional(), idempotencyKey: z.string().min(8).max(100) })
+  .strict();
+
+/** What cancelling now would mean for the deposit, shown before the client confirms. */
+export const CancelTermsSchema = z.object({ depositOutcome: z.enum(['kept', 'refunded']).nullable(), message: z.string() });
+export const ClientCancelSchema = z.object({ reason: z.string().trim().max(500).default('Cancelled by the client') }).strict();
+export const ClientMoveSchema = z.object({ start: InstantInputSchema }).strict();
+export const MoveTimesQuerySchema = z.object({ from: LocalDateSchema.optional() }).strict();

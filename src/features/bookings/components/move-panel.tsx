@@ -1,0 +1,46 @@
+import { useQuery } from '@tanstack/react-query';
+import { useState } from 'react';
+import { Button } from '../../../components/ui/button';
+import { FormAlert } from '../../../components/ui/form-alert';
+import { FreeTimePicker } from '../../../components/ui/free-time-picker';
+import { LoadingState } from '../../../components/ui/loading-state';
+import { TimeZoneNote } from '../../../components/ui/time-zone-note';
+import { dayAfterLast, freeTimeKey, type FreeTime } from '../../../lib/free-times';
+import { myBookingQueries, useMoveMyBooking } from '../api/my-booking-queries';
+
+type Props = { bookingId: string; onClose: () => void; onMoved: () => void };
+
+/** Moving: the engine's free times for the same service and stylist, one picked, then confirmed. */
+export function MovePanel({ bookingId, onClose, onMoved }: Props) {
+  const [from, setFrom] = useState<string | undefined>(undefined);
+  const [picked, setPicked] = useState<FreeTime | null>(null);
+  const times = useQuery(myBookingQueries.moveTimes(bookingId, from));
+  const move = useMoveMyBooking(bookingId);
+  if (times.isPending) return <LoadingState label="Finding free times…" />;
+  if (times.isError) return <FormAlert>{times.error.message}</FormAlert>;
+  const { timeZone } = times.data;
+  const laterFrom = dayAfterLast(times.data.times, timeZone);
+  return (
+    <div className="flex flex-col gap-3">
+      <TimeZoneNote timeZone={timeZone} />
+      <FreeTimePicker
+        key={from ?? ''}
+        times={times.data.times}
+        timeZone={timeZone}
+        selectedKey={picked ? freeTimeKey(picked) : null}
+        onSelect={setPicked}
+        onLater={laterFrom ? () => setFrom(laterFrom) : undefined}
+        showStylist={false}
+      />
+      {move.isError && <FormAlert>{move.error.message}</FormAlert>}
+      <div className="flex flex-col gap-2 sm:flex-row">
+        <Button busy={move.isPending} disabled={!picked} onClick={() => picked && move.mutateAsync(picked.start).then(onMoved, () => undefined)}>
+          {move.isPending ? 'Moving…' : 'Move to this time'}
+        </Button>
+        <Button variant="secondary" onClick={onClose}>
+          Keep the current time
+        </Button>
+      </div>
+    </div>
+  );
+}

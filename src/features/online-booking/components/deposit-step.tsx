@@ -1,0 +1,56 @@
+import type { BookingView } from '../../../../shared/schemas/booking-view.schemas';
+import type { Hold } from '../../../../shared/schemas/online-booking.schemas';
+import { Button } from '../../../components/ui/button';
+import { FormAlert } from '../../../components/ui/form-alert';
+import { formatMoney } from '../../../lib/booking-labels';
+import { useIdempotencyKeys } from '../../../lib/use-idempotency-keys';
+import { usePayHold } from '../api/hold-mutations';
+import type { Card } from '../card-fields';
+import { CardForm } from './card-form';
+import { StepHeading } from './step-heading';
+
+type Props = { hold: Hold; secret: string; depositPolicy: string; focusOnMount: boolean; onBooked: (booking: BookingView) => void };
+
+/**
+ * Step 5: pay the deposit (or confirm when the service needs none). One key per
+ * attempt, so a retried request after a lost answer never charges twice; a declined
+ * card frees the key and the client can try another while the hold lasts.
+ */
+export function DepositStep({ hold, secret, depositPolicy, focusOnMount, onBooked }: Props) {
+  const pay = usePayHold(hold.holdId);
+  const keys = useIdempotencyKeys();
+  const send = (card?: Card) =>
+    pay.mutate(
+      { secret, card, idempotencyKey: keys.keyFor('pay') },
+      {
+        onSuccess: (booking) => {
+          keys.settle('pay');
+          onBooked(booking);
+        },
+        onError: (error) => keys.settle('pay', error),
+      },
+    );
+  const problem = !pay.isError
+    ? null
+    : pay.error.code === 'PAYMENT_DECLINED'
+      ? `${pay.error.message} You can try another card while your time is held.`
+      : pay.error.message;
+
+  return (
+    <section className="flex flex-col gap-4">
+      <StepHeading focusOnMount={focusOnMount}>Deposit</StepHeading>
+      <p>{depositPolicy}</p>
+      {hold.depositCents > 0 ? (
+        <CardForm amount={formatMoney(hold.depositCents, hold.currency)} paying={pay.isPending} problem={problem} onPay={send} />
+      ) : (
+        <>
+          <p className="font-bold">No deposit needed for this booking.</p>
+          {problem && <FormAlert>{problem}</FormAlert>}
+          <Button busy={pay.isPending} onClick={() => send()} className="w-full sm:w-auto sm:self-start">
+            {pay.isPending ? 'Confirming…' : 'Confirm booking'}
+          </Button>
+        </>
+      )}
+    </section>
+  );
+}

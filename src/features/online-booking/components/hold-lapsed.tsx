@@ -1,0 +1,21 @@
+import { Button } from '../../../components/ui/button';
+import { Notice } from '../../../components/ui/notice';
+
+type Props = { onPickAgain: () => void };
+
+/** The hold ran out before the booking was paid: the time is free for others again. */
+export function HoldLapsed({ onPickAgain }: Props) {
+  return (
+    <Notice
+      tone="caution"
+      title="Your held time was released"
+      action={
+        <div>
+          <Button onClick={onPickAgain}>Pick a time again</Button>
+        </div>
+      }
+    >
+      <p>The time was held for a few minutes and has run out, so others can book it now. If any payment went through for it, it has been refunded.</p>
+    </Notice>
+  );
+}

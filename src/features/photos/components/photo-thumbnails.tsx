@@ -1,0 +1,35 @@
+import type { Photo } from '../../../../shared/schemas/photo.schemas';
+import { Button } from '../../../components/ui/button';
+import { FormAlert } from '../../../components/ui/form-alert';
+import { formatDay } from '../../../lib/time';
+import { useRemovePhoto } from '../api/photo-mutations';
+
+type Props = { photos: Photo[]; label: string };
+
+const zone = () => Intl.DateTimeFormat().resolvedOptions().timeZone;
+
+/** Thumbnails loaded through the authorised photo route, each with a remove button. */
+export function PhotoThumbnails({ photos, label }: Props) {
+  const remove = useRemovePhoto();
+  if (photos.length === 0) return <p className="text-ink/80">No photos yet.</p>;
+  return (
+    <div className="flex flex-col gap-2">
+      {remove.isError && <FormAlert>{remove.error.message}</FormAlert>}
+      <ul className="grid grid-cols-2 gap-3 sm:grid-cols-4" aria-label={label}>
+        {photos.map((photo, i) => {
+          const name = `${label}, photo ${i + 1} of ${photos.length}, added ${formatDay(photo.createdAt, zone())}`;
+          return (
+            <li key={photo.id} className="flex flex-col gap-1">
+              <a href={photo.url} target="_blank" rel="noreferrer" className="block overflow-hidden rounded-lg ring-1 ring-ink/10">
+                <img src={photo.url} alt={name} width={photo.width} height={photo.height} loading="lazy" className="aspect-square w-full object-cover" />
+              </a>
+              <Button variant="quiet" busy={remove.isPending && remove.variables === photo.id} onClick={() => remove.mutate(photo.id)} aria-label={`Remove ${name}`}>
+                Remove
+              </Button>
+            </li>
+          );
+        })}
+      </ul>
+    </div>
+  );
+}

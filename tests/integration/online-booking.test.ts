@@ -1,0 +1,164 @@
+import ICAL from 'ical.js';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { anonymousAgent, signedInAgent, startTestApp, type TestApp } from '../setup/test-app';
+import { insertSalon, type SalonFixture } from '../factories/salon';
+import { insertUser, type UserFixture } from '../factories/user';
+import { insertPlannedService } from '../factories/service';
+import { futureWeekday, localIso } from '../setup/dates';
+import { FAKE_CARDS } from '../../server/fakes/payments-fake';
+import { LAPSE_HOLD_JOB } from '../../server/features/online-booking/holds.service';
+
+let t: TestApp;
+let salon: SalonFixture;
+let slug: string;
+let ana: UserFixture;
+let consultation: string;
+const tuesday = futureWeekday(2, 2);
+const card = (number: string) => ({ number, expMonth: 12, expYear: 2031, cvc: '123' });
+const secrets: Record<string, string> = {};
+
+beforeAll(async () => {
+  t = await startTestApp();
+  const db = t.testDb.db;
+  salon = await insertSalon(db, { chairs: 2, basins: 1 });
+  slug = (await db.selectFrom('salons').select('slug').where('id', '=', salon.salonId).executeTakeFirstOrThrow()).slug;
+  ana = await insertUser(db, salon.salonId, 'stylist');
+  consultation = await insertPlannedService(db, salon.salonId, {
+    name: 'Consultation', category: 'colour', depositCents: 2500,
+    plan: { sittings: [{ steps: [{ kind: 'hands_on', label: 'Consultation', minutes: 30 }] }] },
+  });
+  await db.updateTable('services').set({ online_bookable: true, category: 'consultation' }).where('id', '=', consultation).execute();
+});
+afterAll(() => t.close());
+
+async function hold(start: string) {
+  const visitor = await anonymousAgent(t.app);
+  return visitor.write('post', '/api/public/holds', { salonSlug: slug, serviceId: consultation, stylistId: ana.staffId, start });
+}
+
+/** A new client who signs up, claims a hold and accepts its cautions. */
+async function claimedBy(start: string) {
+  const held = await hold(start);
+  expect(held.status).toBe(201);
+  const client = await insertUser(t.testDb.db, salon.salonId, 'client');
+  await t.testDb.db.updateTable('clients').set({ phone: '+19705550177' }).where('id', '=', client.clientId!).execute();
+  const c = await signedInAgent(t.app, client.email, client.password);
+  const claim = await c.write('post', `/api/me/holds/${held.body.holdId}/claim`, { secret: held.body.holdSecret });
+  expect(claim.status).toBe(200);
+  expect((await c.write('post', `/api/me/holds/${held.body.holdId}/cautions`, { version: claim.body.cautions.version, secret: held.body.holdSecret })).status).toBe(204);
+  secrets[held.body.holdId] = held.body.holdSecret;
+  return { c, client, id: held.body.holdId as string, secret: held.body.holdSecret as string, claim: claim.body };
+}
+
+describe('public pages', () => {
+  it('show services, hours and policies, and free times — nothing about any client', async () => {
+    const visitor = await anonymousAgent(t.app);
+    const page = await visitor.get(`/api/public/salons/${slug}`);
+    expect(page.status).toBe(200);
+    expect(page.body.services.find((s: { id: string }) => s.id === consultation)).toMatchObject({ onlineBookable: true, depositCents: 2500 });
+    expect(page.body.openingHours[0]).toMatch(/every week on Tuesday/);
+    const times = await visitor.get(`/api/public/salons/${slug}/availability?serviceId=${consultation}&from=${tuesday}`);
+    expect(times.body.times[0]).toMatchObject({ start: localIso(tuesday, '09:00'), stylistId: ana.staffId });
+    expect(JSON.stringify(times.body)).not.toMatch(/client|email|phone/i);
+  });
+});
+
+describe('holds', () => {
+  it('of ten visitors racing for one time, one holds it and the time is no longer offered', async () => {
+    const start = localIso(tuesday, '10:00');
+    const results = await Promise.all(Array.from({ length: 10 }, () => hold(start)));
+    expect(results.filter((r) => r.status === 201)).toHaveLength(1);
+    expect(results.filter((r) => r.status === 409)).toHaveLength(9);
+    const times = await (await anonymousAgent(t.app)).get(`/api/public/salons/${slug}/availability?serviceId=${consultation}&from=${tuesday}`);
+    expect(times.body.times.map((x: { start: string }) => x.start)).not.toContain(start);
+  });
+
+  it('an unpaid hold lapses through the job queue and frees the time', async () => {
+    const held = await hold(localIso(tuesday, '11:00'));
+    await t.testDb.db.updateTable('bookings').set({ held_until: new Date(Date.now() - 1000) }).where('id', '=', held.body.holdId).execute();
+    await t.jobs.schedule(LAPSE_HOLD_JOB, { bookingId: held.body.holdId }, new Date());
+    for (let i = 0; i < 40; i++) {
+      if (!(await t.testDb.db.selectFrom('bookings').select('id').where('id', '=', held.body.holdId).executeTakeFirst())) break;
+      await new Promise((r) => setTimeout(r, 250));
+    }
+    expect(await t.testDb.db.selectFrom('bookings').select('id').where('id', '=', held.body.holdId).executeTakeFirst()).toBeUndefined();
+    expect((await hold(localIso(tuesday, '11:00'))).status).toBe(201);
+  });
+
+  it('cannot be claimed signed out or with the wrong secret', async () => {
+    const held = await hold(localIso(tuesday, '12:00'));
+    const visitor = await anonymousAgent(t.app);
+    expect((await visitor.write('post', `/api/me/holds/${held.body.holdId}/claim`, { secret: held.body.holdSecret })).status).toBe(401);
+    const client = await insertUser(t.testDb.db, salon.salonId, 'client');
+    const c = await signedInAgent(t.app, client.email, client.password);
+    expect((await c.write('post', `/api/me/holds/${held.body.holdId}/claim`, { secret: 'x'.repeat(32) })).status).toBe(404);
+  });
+});
+
+describe('deposit and confirmation', () => {
+  it('a paid hold becomes booked; the e-mail carries an .ics that parses to the same start, end and zone; an SMS goes out', async () => {
+    const { c, client, id } = await claimedBy(localIso(tuesday, '13:00'));
+    const withoutSecret = await c.write('post', `/api/me/holds/${id}/pay`, { card: card(FAKE_CARDS.succeeds), idempotencyKey: 'pay-key-0001' });
+    expect(withoutSecret.body.error.fields.secret).toBeDefined();
+    const paid = await payWithSecret(c, id, 'pay-key-0002', FAKE_CARDS.succeeds);
+    expect(paid.status).toBe(200);
+    expect(paid.body.status).toBe('booked');
+    const payment = await t.testDb.db.selectFrom('payments').selectAll().where('booking_id', '=', id).executeTakeFirstOrThrow();
+    expect(payment).toMatchObject({ status: 'succeeded', amount_cents: 2500 });
+    const mail = await waitFor(() => t.smtp.messages.find((m) => m.to === client.email));
+    const ics = mail.attachments.find((a) => a.filename === 'booking.ics')!;
+    // RFC 5545 check with an independent parser (ical.js): DTSTART/DTEND are the booked instants.
+    const event = new ICAL.Component(ICAL.parse(ics.content)).getFirstSubcomponent('vevent')!;
+    expect((event.getFirstPropertyValue('dtstart') as ICAL.Time).toJSDate().toISOString()).toBe(new Date(localIso(tuesday, '13:00')).toISOString());
+    expect((event.getFirstPropertyValue('dtend') as ICAL.Time).toJSDate().toISOString()).toBe(new Date(localIso(tuesday, '13:30')).toISOString());
+    expect((event.getFirstPropertyValue('dtstart') as ICAL.Time).zone?.tzid).toBe('UTC');
+    expect(t.sms.messages.some((m) => m.to === '+19705550177' && m.body.includes('booked'))).toBe(true);
+  });
+
+  it('a declined card answers 402 and leaves the hold held', async () => {
+    const { c, id } = await claimedBy(localIso(tuesday, '14:00'));
+    const res = await payWithSecret(c, id, 'pay-key-0003', FAKE_CARDS.declined);
+    expect(res.status).toBe(402);
+    expect(res.body.error.code).toBe('PAYMENT_DECLINED');
+    expect((await t.testDb.db.selectFrom('bookings').select('status').where('id', '=', id).executeTakeFirstOrThrow()).status).toBe('held');
+  });
+
+  it('a payment confirmed after the hold lapsed is refunded automatically', async () => {
+    const { c, id } = await claimedBy(localIso(tuesday, '15:00'));
+    t.payments.onNextSuccess(async () => {
+      await t.testDb.db.updateTable('bookings').set({ held_until: new Date(Date.now() - 1000) }).where('id', '=', id).execute();
+    });
+    const res = await payWithSecret(c, id, 'pay-key-0004', FAKE_CARDS.succeeds);
+    expect(res.status).toBe(409);
+    expect(res.body.error.code).toBe('HOLD_LAPSED');
+    const rows = await t.testDb.db.selectFrom('payments').select('status').where('booking_id', '=', id).execute();
+    expect(rows.map((r) => r.status)).toEqual(['refunded']);
+    expect(t.payments.refunds.some((r) => r.amount === 2500)).toBe(true);
+  });
+
+  it('the client sees the deposit rule, then cancels; another client cannot', async () => {
+    const { c, id } = await claimedBy(localIso(tuesday, '16:00'));
+    await payWithSecret(c, id, 'pay-key-0005', FAKE_CARDS.succeeds);
+    const terms = await c.get(`/api/me/bookings/${id}/cancel-terms`);
+    expect(terms.body).toMatchObject({ depositOutcome: 'refunded' });
+    const stranger = await insertUser(t.testDb.db, salon.salonId, 'client');
+    const s = await signedInAgent(t.app, stranger.email, stranger.password);
+    expect((await s.write('post', `/api/me/bookings/${id}/cancel`, {})).status).toBe(404);
+    expect((await s.get(`/api/me/bookings/${id}/calendar.ics`)).status).toBe(404);
+    const cancelled = await c.write('post', `/api/me/bookings/${id}/cancel`, {});
+    expect(cancelled.body).toMatchObject({ status: 'cancelled', depositOutcome: 'refunded' });
+  });
+});
+
+async function payWithSecret(c: Awaited<ReturnType<typeof signedInAgent>>, id: string, key: string, number: string) {
+  return c.write('post', `/api/me/holds/${id}/pay`, { secret: secrets[id], card: card(number), idempotencyKey: key });
+}
+
+async function waitFor<T>(find: () => T | undefined): Promise<T> {
+  for (let i = 0; i < 40; i++) {
+    const found = find();
+    if (found) return found;
+    await new Promise((r) => setTimeout(r, 100));
+  }
+  throw new Error('not found in time');
+}
