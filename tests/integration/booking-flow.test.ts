@@ -99,6 +99,7 @@ describe('POST /api/bookings', () => {
     const before = await t.testDb.db.selectFrom('bookings').select('id').execute();
     expect((await book(localIso(tuesday, '13:02'), 'flow-key-0003')).body.error.fields.start).toMatch(/grid/);
     expect((await book('2020-01-07T10:00-07:00', 'flow-key-0004')).body.error.fields.start).toMatch(/passed/);
+    expect((await book(localIso(futureWeekday(2, 60), '10:00'), 'flow-key-0008')).body.error.fields.start).toMatch(/365 days ahead/);
     const late = await book(localIso(tuesday, '17:30'), 'flow-key-0005');
     expect(late.status).toBe(409);
     expect(late.body.error.message).toMatch(/hours/);

@@ -29,6 +29,9 @@ export interface BookAtInput {
   status?: BookingStatus;
 }
 
+/** How far ahead anything may be booked (a year: common practice for salons' books). */
+export const MAX_DAYS_AHEAD = 365;
+
 const taken = () => new AppError('CONFLICT', 409, 'Someone booked that time a moment ago. Look for times again.');
 
 /** Throws 409 SKIN_TEST when the skin-test rule forbids colour at these sitting starts. */
@@ -57,6 +60,9 @@ export async function assertSkinTestAllows(db: Db, input: Pick<BookAtInput, 'sal
 export async function bookAt(db: Db, input: BookAtInput): Promise<string> {
   if (input.start < input.now) {
     throw new AppError('VALIDATION_FAILED', 400, 'Some fields need attention.', { start: 'That time has already passed.' });
+  }
+  if (input.start.getTime() - input.now.getTime() > MAX_DAYS_AHEAD * 86_400_000) {
+    throw new AppError('VALIDATION_FAILED', 400, 'Some fields need attention.', { start: `The book opens at most ${MAX_DAYS_AHEAD} days ahead.` });
   }
   const local = DateTime.fromJSDate(input.start, { zone: input.salon.timeZone });
   if (local.minute % input.salon.granularityMinutes !== 0 || local.second !== 0) {
