@@ -41,7 +41,8 @@ export default defineConfig({
           include: ['tests/e2e/**/*.test.ts'],
           globalSetup: ['tests/setup/e2e-global-setup.ts'],
           fileParallelism: false,
-          testTimeout: 60_000,
+          // Journeys click through many screens and run axe several times; CI machines may be busy.
+          testTimeout: 180_000,
           hookTimeout: 90_000,
         },
       },
