@@ -27,6 +27,7 @@ import { registerOnlineBookingRoutes } from './features/online-booking/online-bo
 import { registerMyBookingRoutes } from './features/online-booking/my-bookings.routes';
 import { registerHairHistoryRoutes } from './features/hair-history/hair-history.routes';
 import { registerPhotoRoutes } from './features/photos/photos.routes';
+import { registerMixLogRoutes } from './features/mix-logs/mix-logs.routes';
 import { createDiskStorage } from './storage/disk-storage';
 
 const clientDist = path.join(path.dirname(fileURLToPath(import.meta.url)), '..', 'dist', 'client');
@@ -69,6 +70,7 @@ export function createApp(deps: Omit<AppDeps, 'table' | 'storage'> & { storage?:
     registerMailboxRoutes,
     registerHairHistoryRoutes,
     registerPhotoRoutes,
+    registerMixLogRoutes,
   ]) {
     register(full);
   }

@@ -21,6 +21,13 @@ export interface SalonsTable {
   cancellation_window_hours: Generated<number>;
   hold_minutes: Generated<number>;
   granularity_minutes: Generated<number>;
+  /** Hours before each sitting that reminders go out, e.g. {48,24}. */
+  reminder_offsets_hours: Generated<number[]>;
+  /** No SMS from quiet_from to quiet_to in the salon's zone ('HH:MM:SS'). */
+  quiet_from: Generated<string>;
+  quiet_to: Generated<string>;
+  /** numeric: pg returns it as a string. */
+  max_developer_percent: ColumnType<string, string | number | undefined, string | number>;
   created_at: DefaultTimestamp;
 }
 
@@ -135,6 +142,8 @@ export interface BookingsTable {
   deposit_outcome: 'kept' | 'refunded' | null;
   created_by: string | null;
   created_at: DefaultTimestamp;
+  /** Bumped on every move, so messages planned for older times can be told apart. */
+  version: Generated<number>;
 }
 
 export interface SittingsTable {
@@ -263,6 +272,27 @@ export interface ClientPhotosTable {
   created_at: DefaultTimestamp;
 }
 
+export interface MixLogsTable {
+  id: Generated<string>;
+  salon_id: string;
+  booking_id: string;
+  sitting_seq: number;
+  bowl_no: number;
+  product_type: 'lightener' | 'remover' | 'permanent' | 'demi_permanent' | 'direct_dye' | 'toner' | 'bond_builder';
+  shade_notes: Generated<string>;
+  /** numeric: pg returns it as a string. */
+  developer_percent: ColumnType<string | null, string | number | null, string | number | null>;
+  ratio: Generated<string>;
+  grams: Json<{ part: string; grams: number }[]>;
+  applied_to: Generated<string>;
+  planned_minutes: number | null;
+  actual_minutes: number | null;
+  heat: Generated<boolean>;
+  result_notes: Generated<string>;
+  created_by: string | null;
+  created_at: DefaultTimestamp;
+}
+
 export interface SessionTable {
   sid: string;
   sess: unknown;
@@ -295,4 +325,33 @@ export interface Database {
   caution_acceptances: CautionAcceptancesTable;
   hair_histories: HairHistoriesTable;
   client_photos: ClientPhotosTable;
+  mix_logs: MixLogsTable;
+  messages: MessagesTable;
+}
+
+export type MessageStatus = 'queued' | 'sending' | 'sent' | 'failed' | 'dropped';
+export type MessageAttachment = { filename: string; content: string; contentType: string };
+
+/** The send log: one row per message Dwell means to send (see migrations/20261202T0410). */
+export interface MessagesTable {
+  id: Generated<string>;
+  salon_id: string;
+  booking_id: string | null;
+  booking_version: number | null;
+  client_id: string | null;
+  kind: string;
+  channel: 'sms' | 'email';
+  to_address: string;
+  subject: Generated<string>;
+  body: string;
+  attachments: ColumnType<MessageAttachment[], string | undefined, string>;
+  send_at: Timestamp;
+  dedupe_key: string;
+  status: ColumnType<MessageStatus, MessageStatus | undefined, MessageStatus>;
+  attempts: Generated<number>;
+  last_error: string | null;
+  provider_ref: string | null;
+  claimed_at: Timestamp | null;
+  sent_at: Timestamp | null;
+  created_at: DefaultTimestamp;
 }

@@ -122,3 +122,8 @@ function expandRule(text: string, fromDay: number, toDay: number, clock: ZoneClo
   const days = dates.map((d) => Math.floor(d.getTime() / 86_400_000));
   return [...new Set(days)].filter((d) => !exDays.has(d)).sort((a, b) => a - b);
 }
+
+/** The rule in plain English as the rrule package renders it ("every week on Tuesday, …"). */
+export function describeRecurrence(rule: string): string {
+  return rr.RRule.fromString(rule).toText();
+}

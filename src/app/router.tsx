@@ -70,6 +70,7 @@ const routes: RouteObject[] = [
       rolePage('desk/standby', ['front_desk', 'owner'], () => import('./routes/desk-standby')),
       rolePage('desk/week', ['front_desk', 'owner'], () => import('./routes/desk-week')),
       rolePage('stylist', ['stylist'], () => import('./routes/stylist-home')),
+      rolePage('stylist/bookings/:id/mix-log', ['stylist'], () => import('./routes/stylist-mix-log')),
       rolePage('me', ['client'], () => import('./routes/client-home')),
       rolePage('me/hair', ['client'], () => import('./routes/client-hair')),
       rolePage('me/bookings/:id/booked', ['client'], () => import('./routes/booking-booked')),

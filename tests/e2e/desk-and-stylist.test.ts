@@ -69,6 +69,9 @@ describe('stylist', () => {
     await card.getByRole('button', { name: 'Fill window' }).click();
     const bookButton = card.getByRole('button', { name: /^Book (?!walk-in)/ }).first();
     const name = ((await bookButton.textContent()) ?? '').replace(/^Book /, '').trim();
+    // If this journey fails, the log says whether the page broke or the API refused.
+    page.on('pageerror', (e) => console.log('page error:', e.message));
+    page.on('response', (r) => r.url().includes('/api/') && r.status() >= 400 && console.log('API answered', r.status(), r.url()));
     await bookButton.click();
     // Either the confirmation or an error alert appears; the assertion then says which.
     const outcome = page.getByText(new RegExp(`Booked ${name}`)).or(page.getByRole('alert')).first();

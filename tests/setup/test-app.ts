@@ -31,7 +31,7 @@ export async function startTestApp(): Promise<TestApp> {
   const uploadsDir = await mkdtemp(path.join(tmpdir(), 'dwell-uploads-'));
   const config = loadConfig({ DATABASE_URL: testDb.url, DWELL_MODE: 'test', UPLOADS_DIR: uploadsDir });
   const outside = await startOutsideServices(config);
-  const jobs = await startJobQueue(testDb.url, appJobs(testDb.db));
+  const jobs = await startJobQueue(testDb.url, appJobs(testDb.db, outside));
   const app = createApp({ db: testDb.db, pool: testDb.pool, config, jobs, ...outside });
   return {
     app,

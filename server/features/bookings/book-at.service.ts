@@ -13,6 +13,7 @@ import { skinTestRecords } from '../skin-tests/skin-tests.repository';
 import { writeAudit } from '../audit/audit.repository';
 import { insertBooking } from './bookings.repository';
 import { bookingSnapshot } from './booking-snapshot.repository';
+import { replanBookingMessages } from '../messages/plan-messages.service';
 
 export interface BookAtInput {
   salon: { id: string; timeZone: string; skinTestLeadHours: number; skinTestValidityDays: number; granularityMinutes: number };
@@ -87,6 +88,7 @@ export async function bookAt(db: Db, input: BookAtInput): Promise<string> {
       })),
     });
     await writeAudit(db, { salonId: input.salon.id, actorUserId: input.actorUserId, entity: 'booking', entityId: id, action: 'booked', after: (await bookingSnapshot(db, id))?.audit });
+    await replanBookingMessages(db, id, input.now); // confirmation and reminders, in the same transaction
     return id;
   } catch (err) {
     if ((err as { code?: string }).code === '23P01') throw taken();

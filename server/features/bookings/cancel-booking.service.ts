@@ -5,6 +5,7 @@ import { AppError, notFound } from '../../lib/app-error';
 import { writeAudit } from '../audit/audit.repository';
 import { bookingSnapshot } from './booking-snapshot.repository';
 import { markCancelled, sittingStarts } from './change-booking.repository';
+import { replanBookingMessages } from '../messages/plan-messages.service';
 
 /**
  * The deposit policy on cancelling: inside the salon's cancellation window before the first sitting the
@@ -27,5 +28,6 @@ export async function cancelBooking(db: Kysely<Database>, salon: Salon, actorUse
     await markCancelled(trx, bookingId, reason, outcome);
     const after = await bookingSnapshot(trx, bookingId);
     await writeAudit(trx, { salonId: salon.id, actorUserId, entity: 'booking', entityId: bookingId, action: `cancelled: ${reason}`, before: before.audit, after: after?.audit });
+    await replanBookingMessages(trx, bookingId, now, 'cancelled'); // queued reminders dropped, cancellation planned
   });
 }

@@ -13,6 +13,7 @@ import { writeAudit } from '../audit/audit.repository';
 import { assertSkinTestAllows } from './book-at.service';
 import { bookingSnapshot } from './booking-snapshot.repository';
 import { replaceSitting, setStylist, sittingStarts } from './change-booking.repository';
+import { replanBookingMessages } from '../messages/plan-messages.service';
 
 export interface MoveRequest {
   bookingId: string;
@@ -64,6 +65,7 @@ export async function moveSitting(db: Kysely<Database>, salon: Salon, actorUserI
     }
     const after = await bookingSnapshot(trx, req.bookingId);
     await writeAudit(trx, { salonId: salon.id, actorUserId, entity: 'booking', entityId: req.bookingId, action: `moved sitting ${req.sitting}`, before: before.audit, after: after?.audit });
+    await replanBookingMessages(trx, req.bookingId, now, 'moved'); // old reminders dropped, new ones planned
   });
 }
 

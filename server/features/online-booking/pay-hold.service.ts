@@ -10,7 +10,7 @@ import { AppError } from '../../lib/app-error';
 import { findSalon } from '../salon/salon.repository';
 import { writeAudit } from '../audit/audit.repository';
 import { cautionsFor } from './cautions';
-import { confirmHoldRow, findHold, hasAcceptedCautions, recordPayment } from './holds.repository';
+import { confirmHoldRow, hasAcceptedCautions, recordPayment } from './holds.repository';
 import { ownHold } from './holds.service';
 import { sendConfirmation } from './confirmation';
 
@@ -49,7 +49,6 @@ export async function payHold(db: Kysely<Database>, deps: Deps, user: SessionUse
   }
   if (paymentRef) await recordPayment(db, { ...record, providerRef: paymentRef, status: 'succeeded' });
   await writeAudit(db, { salonId: salon.id, actorUserId: user.id, entity: 'booking', entityId: id, action: 'booked online', after: { status: 'booked', deposit: hold.deposit_cents } });
-  const client = await db.selectFrom('clients').select(['name', 'email', 'phone']).where('id', '=', hold.client_id!).executeTakeFirstOrThrow();
-  await sendConfirmation(deps, (await findHold(db, id))!, client);
+  await sendConfirmation(db, deps, id, new Date());
   return id;
 }

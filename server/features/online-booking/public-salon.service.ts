@@ -1,4 +1,4 @@
-import { RRule } from 'rrule';
+import { describeRecurrence } from '../../../shared/engine/recurrence';
 import type { Db } from '../../db/database';
 import type { PublicSalon } from '../../../shared/schemas/online-booking.schemas';
 import { notFound } from '../../lib/app-error';
@@ -29,7 +29,7 @@ export async function publicSalon(db: Db, slug: string): Promise<PublicSalon> {
     timeZone: salon.time_zone,
     currency: salon.currency,
     // rrule's own English rendering of each rule ("every week on Tuesday, …"), with the day's opening times.
-    openingHours: hours.map((h) => `${RRule.fromString(h.rrule).toText()}, ${h.start_time.slice(0, 5)}–${h.end_time.slice(0, 5)}`),
+    openingHours: hours.map((h) => `${describeRecurrence(h.rrule)}, ${h.start_time.slice(0, 5)}–${h.end_time.slice(0, 5)}`),
     policies: {
       deposit: deposits.length
         ? `A deposit secures long colour work and consultations: ${deposits.join('; ')}. It counts towards the price.`

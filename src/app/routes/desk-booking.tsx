@@ -10,6 +10,7 @@ import { CancelBookingForm } from '../../features/booking-detail/components/canc
 import { MoveSittingForm } from '../../features/booking-detail/components/move-sitting-form';
 import { bookingQueries } from '../../features/bookings/api/booking-queries';
 import { catalogueQueries } from '../../features/catalogue/api/catalogue-queries';
+import { MixLogSection } from '../../features/mix-log/components/mix-log-section';
 import { salonQueries } from '../../features/salon/api/salon-queries';
 import { localDateOf } from '../../lib/time';
 import { queryClient } from '../../lib/query-client';
@@ -42,6 +43,7 @@ export function Component() {
         {open && <MoveSittingForm booking={booking} timeZone={salon.timeZone} stylists={stylists.stylists} />}
         <CancelBookingForm booking={booking} />
       </div>
+      <MixLogSection bookingId={booking.id} timeZone={salon.timeZone} clientId={booking.client.id} />
       <BookingHistory bookingId={booking.id} timeZone={salon.timeZone} />
     </div>
   );

@@ -7,6 +7,8 @@ import { mailboxQueries } from '../../features/outbox/api/mailbox-queries';
 import { smsQueries } from '../../features/outbox/api/sms-queries';
 import { MailList } from '../../features/outbox/components/mail-list';
 import { SmsList } from '../../features/outbox/components/sms-list';
+import { sentMessagesQueries } from '../../features/outbox/api/sent-messages-queries';
+import { SentMessagesTable } from '../../features/outbox/components/sent-messages-table';
 import { salonQueries } from '../../features/salon/api/salon-queries';
 import { queryClient } from '../../lib/query-client';
 
@@ -21,6 +23,7 @@ export async function loader() {
 export function Component() {
   const mail = useSuspenseQuery(mailboxQueries.messages());
   const sms = useQuery(smsQueries.messages());
+  const sent = useQuery(sentMessagesQueries.list());
   const { data: salon } = useSuspenseQuery(salonQueries.current());
   return (
     <div className="flex flex-col gap-4">
@@ -28,7 +31,7 @@ export function Component() {
         title="Outbox (demo)"
         subtitle="E-mails and text messages Dwell sent while running in demo mode. They were caught here and not delivered to anyone."
         action={
-          <Button busy={mail.isFetching || sms.isFetching} onClick={() => void Promise.all([mail.refetch(), sms.refetch()])}>
+          <Button busy={mail.isFetching || sms.isFetching || sent.isFetching} onClick={() => void Promise.all([mail.refetch(), sms.refetch(), sent.refetch()])}>
             Check for new messages
           </Button>
         }
@@ -43,6 +46,11 @@ export function Component() {
           {sms.data && <SmsList messages={sms.data.messages} timeZone={salon.timeZone} />}
         </SectionCard>
       </div>
+      <SectionCard title="Sent messages">
+        {sent.isPending && <LoadingState label="Loading the send log…" />}
+        {sent.isError && <p role="alert">The send log could not be loaded: {sent.error.message}</p>}
+        {sent.data && <SentMessagesTable messages={sent.data.messages} timeZone={salon.timeZone} />}
+      </SectionCard>
     </div>
   );
 }

@@ -1,10 +1,12 @@
 import type { DateTime } from 'luxon';
+import { Link } from 'react-router-dom';
 import type { BookingView, SittingView } from '../../../../shared/schemas/booking-view.schemas';
 import { BookingStatusBadge } from '../../../components/ui/booking-status-badge';
 import { StepKindIcon } from '../../../components/ui/step-kind-icon';
 import { StepStrip } from '../../../components/ui/step-strip';
 import { sittingLabel, stepKindLabels } from '../../../lib/booking-labels';
 import { formatTime, formatTimeRange } from '../../../lib/time';
+import { stylistMixLogPath } from '../../mix-log/api/mix-log-queries';
 import { sittingProgress } from '../timer-state';
 import { DevelopingTimer } from './developing-timer';
 
@@ -52,6 +54,9 @@ export function ClientDayCard({ booking, sitting, timeZone, now }: Props) {
           )}
         </div>
       )}
+      <Link to={stylistMixLogPath(booking.id)} className="text-link self-start">
+        Mix log<span className="sr-only"> for {booking.client.name}</span>
+      </Link>
     </article>
   );
 }

@@ -1,0 +1,85 @@
+import { sql } from 'kysely';
+import type { Db } from '../../db/database';
+import type { MessageStatus } from '../../db/schema';
+import type { BookingContext } from './templates';
+
+export interface BookingForMessages {
+  context: BookingContext;
+  salonId: string;
+  clientId: string | null;
+  status: string;
+  version: number;
+  email: string | null;
+  phone: string | null;
+  offsets: number[];
+  quietFrom: string;
+  quietTo: string;
+}
+
+/** Everything a booking's messages need, in one read (inside the caller's transaction). */
+export async function bookingForMessages(db: Db, bookingId: string): Promise<BookingForMessages | null> {
+  const row = await db
+    .selectFrom('bookings as b')
+    .innerJoin('salons as s', 's.id', 'b.salon_id')
+    .innerJoin('services as sv', 'sv.id', 'b.service_id')
+    .innerJoin('staff as st', 'st.id', 'b.stylist_id')
+    .leftJoin('clients as c', 'c.id', 'b.client_id')
+    .select(['b.id', 'b.salon_id', 'b.client_id', 'b.status', 'b.version', 's.name as salonName', 's.address', 's.time_zone', 's.reminder_offsets_hours', 's.quiet_from', 's.quiet_to',
+      'sv.name as serviceName', 'sv.category', 'st.display_name', 'c.name as clientName', 'c.email', 'c.phone'])
+    .where('b.id', '=', bookingId)
+    .executeTakeFirst();
+  if (!row) return null;
+  const sittings = await db
+    .selectFrom('sittings')
+    .select(['seq', sql<Date>`lower(during)`.as('start'), sql<Date>`upper(during)`.as('end')])
+    .where('booking_id', '=', bookingId)
+    .orderBy('seq')
+    .execute();
+  return {
+    salonId: row.salon_id,
+    clientId: row.client_id,
+    status: row.status,
+    version: row.version,
+    email: row.email,
+    phone: row.phone,
+    offsets: row.reminder_offsets_hours,
+    quietFrom: row.quiet_from,
+    quietTo: row.quiet_to,
+    context: {
+      bookingId, salonName: row.salonName, address: row.address, timeZone: row.time_zone, clientName: row.clientName ?? '',
+      serviceName: row.serviceName, category: row.category, stylistName: row.display_name, sittings,
+    },
+  };
+}
+
+/** Queued messages planned for an older version of the booking (or all, when `all`) will never go out. */
+export async function dropQueued(db: Db, bookingId: string, currentVersion: number, all: boolean): Promise<void> {
+  let q = db.updateTable('messages').set({ status: 'dropped' }).where('booking_id', '=', bookingId).where('status', '=', 'queued');
+  if (!all) q = q.where('booking_version', '<', currentVersion);
+  await q.execute();
+}
+
+export interface MessageListItem {
+  id: string;
+  kind: string;
+  channel: 'sms' | 'email';
+  toAddress: string;
+  subject: string;
+  body: string;
+  sendAt: Date;
+  status: MessageStatus;
+  attempts: number;
+  lastError: string | null;
+  sentAt: Date | null;
+  bookingId: string | null;
+}
+
+/** The salon's send log for the Outbox, newest planned first. */
+export async function listMessages(db: Db, salonId: string, status: MessageStatus | undefined, limit = 200): Promise<MessageListItem[]> {
+  let q = db
+    .selectFrom('messages')
+    .select(['id', 'kind', 'channel', 'to_address as toAddress', 'subject', 'body', 'send_at as sendAt', 'status', 'attempts', 'last_error as lastError', 'sent_at as sentAt', 'booking_id as bookingId'])
+    .where('salon_id', '=', salonId);
+  if (status) q = q.where('status', '=', status);
+  return q.orderBy('send_at', 'desc').orderBy('created_at', 'desc').limit(limit).execute();
+}

@@ -1,0 +1,31 @@
+import { useSuspenseQuery } from '@tanstack/react-query';
+import { Link, useParams, type LoaderFunctionArgs } from 'react-router-dom';
+import { IdSchema } from '../../../shared/schemas/common.schemas';
+import { PageHeader } from '../../components/ui/page-header';
+import { TimeZoneNote } from '../../components/ui/time-zone-note';
+import { paths } from '../../config/paths';
+import { mixLogQueries } from '../../features/mix-log/api/mix-log-queries';
+import { MixLogSection } from '../../features/mix-log/components/mix-log-section';
+import { salonQueries } from '../../features/salon/api/salon-queries';
+import { queryClient } from '../../lib/query-client';
+
+export async function loader({ params }: LoaderFunctionArgs) {
+  if (!IdSchema.safeParse(params.id).success) throw new Response(null, { status: 404 });
+  await Promise.all([queryClient.ensureQueryData(mixLogQueries.list(params.id!)), queryClient.ensureQueryData(salonQueries.current())]);
+  return null;
+}
+
+/** The stylist's mix log of one booking, opened from a client card on My day. */
+export function Component() {
+  const { id } = useParams();
+  const { data: salon } = useSuspenseQuery(salonQueries.current());
+  return (
+    <div className="flex flex-col gap-6">
+      <Link to={paths.stylist()} className="text-link">
+        ← Back to My day
+      </Link>
+      <PageHeader title="Mix log" subtitle={<TimeZoneNote timeZone={salon.timeZone} />} />
+      <MixLogSection bookingId={id!} timeZone={salon.timeZone} />
+    </div>
+  );
+}
