@@ -88,13 +88,16 @@ async function insertSalonAndPeople(db: Db, passwordHash: string, now: Date): Pr
   return { salonId, deskUserId: desk.id, stylists, chairs: chairIds, basins: basinIds, services, clients };
 }
 
+const hasDemoTest = (i: number) => i % 6 !== 4;
+const hasNegativeDemoTest = (i: number) => hasDemoTest(i) && i !== 9;
+
 /** Most clients have a recent negative skin test; a few have none, one had a reaction. */
 async function insertDemoSkinTests(db: Db, salonId: string, clients: string[], now: Date): Promise<void> {
   const rows = clients.flatMap((clientId, i) => {
-    if (i % 6 === 4) return []; // no test on record: the desk must book one first
+    if (!hasDemoTest(i)) return []; // no test on record: the desk must book one first
     const appliedAt = DateTime.fromJSDate(now).minus({ days: 20 + ((i * 7) % 40) }).set({ hour: 10, minute: 0 }).toJSDate();
     const readAt = DateTime.fromJSDate(appliedAt).plus({ hours: 48 }).toJSDate();
-    return [{ salon_id: salonId, client_id: clientId, applied_at: appliedAt, read_at: readAt, result: i === 9 ? ('positive' as const) : ('negative' as const), product: 'Permanent colour 6.0 with 6% developer' }];
+    return [{ salon_id: salonId, client_id: clientId, applied_at: appliedAt, read_at: readAt, result: hasNegativeDemoTest(i) ? ('negative' as const) : ('positive' as const), product: 'Permanent colour 6.0 with 6% developer' }];
   });
   await db.insertInto('skin_tests').values(rows).execute();
 }
@@ -133,6 +136,13 @@ async function insertDemoBook(db: Db, ids: Ids, now: Date): Promise<number> {
 
   let count = 0;
   let clientTurn = 1; // client 0 (the demo client account) has the correction
+  // Oxidative colour only for clients whose skin test allows it (see insertDemoSkinTests).
+  const nextClient = (needsSkinTest: boolean): number => {
+    for (;;) {
+      const i = 1 + (clientTurn++ % (ids.clients.length - 1));
+      if (!needsSkinTest || hasNegativeDemoTest(i)) return i;
+    }
+  };
   for (const [dayIndex, day] of openDays.entries()) {
     const pattern = day.equals(correctionDays[0]) ? correctionDayOne : day.equals(correctionDays[1]) ? correctionDayTwo : ordinaryDay;
     for (const [i, p] of pattern.entries()) {
@@ -140,7 +150,7 @@ async function insertDemoBook(db: Db, ids: Ids, now: Date): Promise<number> {
       if (p.stylist === 'lee' && day.weekday === 2) continue; // Lee does not work Tuesdays
       if (p.stylist === 'marcus' && day.equals(marcusOff)) continue;
       if (!p.core && (dayIndex * 7 + i * 3) % 5 === 0) continue; // leave some gaps so days differ
-      const clientId = p.service === 'correction' ? ids.clients[0] : ids.clients[1 + (clientTurn++ % (ids.clients.length - 1))];
+      const clientId = p.service === 'correction' ? ids.clients[0] : ids.clients[nextClient(demoServices[p.service].needsSkinTest === true)];
       const sittings = [{ day, placement: p }];
       if (p.service === 'correction') sittings.push({ day: correctionDays[1], placement: correctionDayTwo[0] });
       const steps = sittings.map((s) => placeSteps(s.day, s.placement, ids));

@@ -66,6 +66,8 @@ export const CreateBookingSchema = z
     stylistId: IdSchema,
     /** The first sitting's start as shown in the option (ISO 8601 with offset). */
     start: InstantInputSchema,
+    /** The chair shown for each sitting in the option; kept when still free, else the engine picks another. */
+    chairIds: z.array(IdSchema).max(6).optional(),
     /** A retried request with the same key answers the first result instead of booking twice. */
     idempotencyKey: z.string().min(8).max(100),
   })

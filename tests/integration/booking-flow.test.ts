@@ -75,8 +75,12 @@ describe('POST /api/bookings', () => {
 
   it('books the chosen option as one booking with both sittings; a retry with the same key answers the same booking', async () => {
     const option = (await ask()).body.options[0];
-    const res = await book(option.sittings[0].start, 'flow-key-0001');
+    // Ask for the other chair than the engine chose: a free chair the desk picked is kept.
+    const other = (id: string) => (id === salon.chairs[0] ? salon.chairs[1] : salon.chairs[0]);
+    const chairIds = option.sittings.map((s: { chairId: string }) => other(s.chairId));
+    const res = await book(option.sittings[0].start, 'flow-key-0001', { chairIds });
     expect(res.status).toBe(201);
+    expect(res.body.sittings.map((s: { chairId: string }) => s.chairId)).toEqual(chairIds);
     expect(res.body.sittings).toHaveLength(2);
     expect(res.body.sittings[1].start).toBe(option.sittings[1].start.replace(/(T\d\d:\d\d)/, '$1:00'));
     const again = await book(option.sittings[0].start, 'flow-key-0001');

@@ -11,7 +11,7 @@ import { horizonFor } from '../planning/engine-request';
 import { planBetween, planExactlyAt } from '../planning/plan-at';
 import { skinTestRecords } from '../skin-tests/skin-tests.repository';
 import { writeAudit } from '../audit/audit.repository';
-import { insertBooking } from './bookings.repository';
+import { chairFreeBetween, insertBooking } from './bookings.repository';
 import { bookingSnapshot } from './booking-snapshot.repository';
 import { replanBookingMessages } from '../messages/plan-messages.service';
 
@@ -23,6 +23,8 @@ export interface BookAtInput {
   plan: StepPlan;
   stylistId: string;
   start: Date;
+  /** Chairs the person saw per sitting: used when still free for the sitting, so the booking matches the option. */
+  chairIds?: string[];
   /** Book the earliest start from `start` up to this one (a window fill); without it, exactly `start`. */
   latestStart?: Date;
   actorUserId: string | null;
@@ -70,6 +72,7 @@ export async function bookAt(db: Db, input: BookAtInput): Promise<string> {
     throw new AppError('VALIDATION_FAILED', 400, 'Some fields need attention.', { start: `Start times fall on the salon's ${input.salon.granularityMinutes}-minute grid.` });
   }
   const found = await planOrExplain(db, input);
+  const chosen = await preferredChairs(db, input.salon.id, found, input.chairIds);
   if (input.clientId) await assertSkinTestAllows(db, { ...input, clientId: input.clientId }, found.sittings.map((s) => new Date(s.steps[0].start)));
   try {
     const id = await insertBooking(db, {
@@ -83,7 +86,7 @@ export async function bookAt(db: Db, input: BookAtInput): Promise<string> {
       depositCents: input.service.depositCents,
       createdBy: input.actorUserId,
       sittings: found.sittings.map((s, i) => ({
-        chairId: s.chair,
+        chairId: chosen[i],
         steps: s.steps.map((st, j) => ({ kind: st.kind, label: input.plan.sittings[i].steps[j].label, start: new Date(st.start), end: new Date(st.end), basinId: st.basin ?? null })),
       })),
     });
@@ -94,6 +97,18 @@ export async function bookAt(db: Db, input: BookAtInput): Promise<string> {
     if ((err as { code?: string }).code === '23P01') throw taken();
     throw err;
   }
+}
+
+/** The engine's chair per sitting, or the one the person saw when it is a live chair of the salon and free then. */
+async function preferredChairs(db: Db, salonId: string, plan: Option, wanted: string[] | undefined): Promise<string[]> {
+  return Promise.all(
+    plan.sittings.map(async (s, i) => {
+      const chair = wanted?.[i];
+      if (!chair || chair === s.chair) return s.chair;
+      const free = await chairFreeBetween(db, salonId, chair, new Date(s.steps[0].start), new Date(s.steps[s.steps.length - 1].end));
+      return free ? chair : s.chair;
+    }),
+  );
 }
 
 async function planOrExplain(db: Db, input: BookAtInput): Promise<Option> {

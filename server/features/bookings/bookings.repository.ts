@@ -1,3 +1,4 @@
+import { sql } from 'kysely';
 import type { Db } from '../../db/database';
 import type { BookingStatus, StepKind } from '../../../shared/schemas/common.schemas';
 import type { StepPlan } from '../../../shared/schemas/step-plan.schemas';
@@ -76,4 +77,18 @@ export async function insertBooking(db: Db, booking: NewBooking): Promise<string
       .execute();
   }
   return id;
+}
+
+/** True when the chair belongs to the salon, is in service, and no live sitting holds it in [start, end). */
+export async function chairFreeBetween(db: Db, salonId: string, chairId: string, start: Date, end: Date): Promise<boolean> {
+  const chair = await db.selectFrom('chairs').select('id').where('id', '=', chairId).where('salon_id', '=', salonId).where('active', '=', true).executeTakeFirst();
+  if (!chair) return false;
+  const taken = await db
+    .selectFrom('sittings')
+    .select('id')
+    .where('chair_id', '=', chairId)
+    .where('live', '=', true)
+    .where(sql<boolean>`during && tstzrange(${start}, ${end}, '[)')`)
+    .executeTakeFirst();
+  return !taken;
 }

@@ -6,6 +6,7 @@ import { writeAudit } from '../audit/audit.repository';
 import { bookingSnapshot } from './booking-snapshot.repository';
 import { markCancelled, sittingStarts } from './change-booking.repository';
 import { replanBookingMessages } from '../messages/plan-messages.service';
+import { assertColourBookingsStillAllowed } from './skin-test-dependants';
 
 /**
  * The deposit policy on cancelling: inside the salon's cancellation window before the first sitting the
@@ -26,6 +27,7 @@ export async function cancelBooking(db: Kysely<Database>, salon: Salon, actorUse
     const [first] = await sittingStarts(trx, bookingId);
     const outcome = depositOutcome(before.row.deposit_cents, first, now, salon.cancellationWindowHours);
     await markCancelled(trx, bookingId, reason, outcome);
+    if (before.row.client_id) await assertColourBookingsStillAllowed(trx, salon, before.row.client_id, now);
     const after = await bookingSnapshot(trx, bookingId);
     await writeAudit(trx, { salonId: salon.id, actorUserId, entity: 'booking', entityId: bookingId, action: `cancelled: ${reason}`, before: before.audit, after: after?.audit });
     await replanBookingMessages(trx, bookingId, now, 'cancelled'); // queued reminders dropped, cancellation planned

@@ -1,4 +1,5 @@
 import type { Kysely } from 'kysely';
+import { DateTime } from 'luxon';
 import type { z } from 'zod';
 import type { Database } from '../../db/schema';
 import type { SessionUser } from '../../../shared/schemas/auth.schemas';
@@ -35,7 +36,8 @@ export async function payHold(db: Kysely<Database>, deps: Deps, user: SessionUse
     const charge = await deps.payments.charge({ amountCents: hold.deposit_cents, currency: salon.currency, card: body.card, idempotencyKey: `deposit:${id}:${body.idempotencyKey}`, metadata: { booking: id } });
     if (!charge.ok) {
       await recordPayment(db, { ...record, providerRef: charge.paymentIntentId, status: 'declined', message: charge.message });
-      throw new AppError('PAYMENT_DECLINED', 402, `${charge.message} Your time stays held until ${hold.held_until?.toISOString().slice(11, 16)} UTC; try another card.`);
+      const until = hold.held_until ? DateTime.fromJSDate(hold.held_until, { zone: hold.timeZone }).toFormat('h:mm a ZZZZ') : 'the hold runs out';
+      throw new AppError('PAYMENT_DECLINED', 402, `${charge.message} Your time stays held until ${until}; you can try another card.`);
     }
     paymentRef = charge.paymentIntentId;
   }

@@ -58,6 +58,7 @@ export function BookServicePage({ services, stylists, today }: Props) {
       stepPlan: request.stepPlan,
       stylistId: option.stylistId,
       start: option.sittings[0].start,
+      chairIds: option.sittings.map((sitting) => sitting.chairId),
       idempotencyKey: keys.keyFor(action),
     };
     create.mutate(body, {

@@ -6,15 +6,17 @@ import { BookingCard } from './booking-card';
 /** `actions`: drawn inside each booking's card (the client's own list adds move and cancel). */
 type Props = { bookings: BookingView[]; timeZone: string; currency: string; actions?: (booking: BookingView) => ReactNode };
 
-/** Upcoming bookings first (soonest first), then past ones (latest first). */
+/** Upcoming bookings first (soonest first), then past and cancelled ones (latest first). */
 export function BookingList({ bookings, timeZone, currency, actions }: Props) {
   const { upcoming, past } = useMemo(() => {
     const lastEnd = (b: BookingView) => b.sittings.at(-1)?.end ?? '';
     const firstStart = (b: BookingView) => b.sittings[0]?.start ?? '';
     const sorted = [...bookings].sort((a, b) => firstStart(a).localeCompare(firstStart(b)));
+    // A cancelled or no-show booking is history even when its date is still ahead.
+    const over = (b: BookingView) => isPast(lastEnd(b)) || b.status === 'cancelled' || b.status === 'no_show';
     return {
-      upcoming: sorted.filter((b) => !isPast(lastEnd(b))),
-      past: sorted.filter((b) => isPast(lastEnd(b))).reverse(),
+      upcoming: sorted.filter((b) => !over(b)),
+      past: sorted.filter(over).reverse(),
     };
   }, [bookings]);
 
