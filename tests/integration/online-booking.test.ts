@@ -139,6 +139,14 @@ describe('deposit and confirmation', () => {
   it('the client sees the deposit rule, then cancels; another client cannot', async () => {
     const { c, id } = await claimedBy(localIso(tuesday, '16:00'));
     await payWithSecret(c, id, 'pay-key-0005', FAKE_CARDS.succeeds);
+    // The client's own moves stay outside the 48-hour window, where the deposit would stop being refundable.
+    const times = await c.get(`/api/me/bookings/${id}/move-times`);
+    expect(times.status).toBe(200);
+    expect(times.body.times.every((x: { start: string }) => Date.parse(x.start) - Date.now() >= 48 * 3_600_000)).toBe(true);
+    const soon = new Date(Math.ceil((Date.now() + 24 * 3_600_000) / 300_000) * 300_000).toISOString();
+    const tooClose = await c.write('post', `/api/me/bookings/${id}/move`, { start: soon });
+    expect(tooClose.status).toBe(409);
+    expect(tooClose.body.error.message).toMatch(/non-refundable/);
     const terms = await c.get(`/api/me/bookings/${id}/cancel-terms`);
     expect(terms.body).toMatchObject({ depositOutcome: 'refunded' });
     const stranger = await insertUser(t.testDb.db, salon.salonId, 'client');

@@ -10,7 +10,8 @@ import { moveSitting } from '../bookings/move-booking.service';
 import { findSalonBySlug } from './public-salon.service';
 import { freeTimes } from './availability.service';
 import { bookingIcs } from './booking-ics';
-import { assertClientMovable, cancelTerms, ownBooking } from './my-bookings.service';
+import { assertClientMovable, cancelTerms, insideDepositWindow, ownBooking } from './my-bookings.service';
+import { AppError } from '../../lib/app-error';
 
 export function registerMyBookingRoutes({ table, db }: AppDeps): void {
   table.records.push({ method: 'get', path: '/api/me/bookings/:id/calendar.ics', access: ['client'] });
@@ -38,14 +39,20 @@ export function registerMyBookingRoutes({ table, db }: AppDeps): void {
     async ({ user, params, query }) => {
       const { salon, service, hold } = await assertClientMovable(db, user, params.id, new Date());
       const row = await findSalonBySlug(db, salon.slug);
-      return freeTimes(db, row, service, hold.stylist_id, query.from, new Date(), params.id);
+      const now = new Date();
+      const times = await freeTimes(db, row, service, hold.stylist_id, query.from, now, params.id);
+      // A deposit stays refundable only outside the cancellation window, so a client's own move never lands inside it.
+      return { ...times, times: times.times.filter((t) => !insideDepositWindow(hold.deposit_cents, new Date(t.start), now, salon.cancellationWindowHours)) };
     },
   );
   apiRoute(
     table,
     { method: 'post', path: '/api/me/bookings/:id/move', access: ['client'], summary: 'Move one of my bookings', params: IdParamsSchema, body: ClientMoveSchema, response: BookingViewSchema },
     async ({ user, params, body }) => {
-      const { salon } = await assertClientMovable(db, user, params.id, new Date());
+      const { salon, hold } = await assertClientMovable(db, user, params.id, new Date());
+      if (insideDepositWindow(hold.deposit_cents, new Date(body.start), new Date(), salon.cancellationWindowHours)) {
+        throw new AppError('NOT_BOOKABLE', 409, `Times less than ${salon.cancellationWindowHours} hours away would make your deposit non-refundable; please call the salon to move this close.`);
+      }
       await moveSitting(db, salon, user.id, { bookingId: params.id, sitting: 1, start: new Date(body.start) }, new Date());
       return deskBookingView(db, salon.id, salon.timeZone, params.id);
     },

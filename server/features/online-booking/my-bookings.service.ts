@@ -41,3 +41,8 @@ export async function assertClientMovable(db: Kysely<Database>, user: SessionUse
   if (hold.start <= now) throw new AppError('NOT_BOOKABLE', 409, 'This appointment has already started.');
   return { hold, salon, service, startsIn: DateTime.fromJSDate(hold.start).diff(DateTime.fromJSDate(now), 'hours').hours };
 }
+
+/** A time inside the cancellation window of a booking with a deposit (where the deposit would be kept). */
+export function insideDepositWindow(depositCents: number, start: Date, now: Date, windowHours: number): boolean {
+  return depositOutcome(depositCents, start, now, windowHours) === 'kept';
+}
