@@ -6,7 +6,15 @@ import type { Database } from './schema';
 export type Db = Kysely<Database> | Transaction<Database>;
 
 export function createPool(connectionString: string): pg.Pool {
-  const pool = new pg.Pool({ connectionString, max: 10, connectionTimeoutMillis: 5_000 });
+  // Time limits turn a stuck lock or a forgotten transaction into an error instead of a request that never ends.
+  const pool = new pg.Pool({
+    connectionString,
+    max: 10,
+    connectionTimeoutMillis: 5_000,
+    statement_timeout: 30_000,
+    lock_timeout: 10_000,
+    idle_in_transaction_session_timeout: 60_000,
+  });
   // An idle client that loses its server (PostgreSQL restarted) must not crash the app.
   pool.on('error', () => {});
   return pool;

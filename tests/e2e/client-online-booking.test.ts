@@ -82,8 +82,13 @@ describe('a new client on a phone', () => {
     await page.getByRole('heading', { level: 1, name: 'My bookings' }).waitFor();
     await page.getByRole('button', { name: 'Cancel booking' }).first().click();
     await page.getByText(/deposit is (refunded|kept)/).first().waitFor(); // the rule is shown before confirming
-    await page.getByRole('button', { name: 'Confirm cancellation' }).click();
-    await page.getByText(/was cancelled/i).first().waitFor();
+    const [cancelled] = await Promise.all([
+      page.waitForResponse((r) => r.url().includes('/cancel') && r.request().method() === 'POST'),
+      page.getByRole('button', { name: 'Confirm cancellation' }).click(),
+    ]);
+    expect(cancelled.status()).toBe(200);
+    // The cancelled booking moves to the history list.
+    await page.getByRole('region', { name: 'Past' }).getByText('Cancelled').first().waitFor();
     await expectAccessible(page);
     await screenshot(page, 'client-cancelled', false);
     await page.goto(`${baseUrl()}/me/hair`);
