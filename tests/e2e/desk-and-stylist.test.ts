@@ -74,6 +74,7 @@ describe('stylist', () => {
     const [response] = await Promise.all([page.waitForResponse((r) => r.url().includes('/api/windows/fill')), bookButton.click()]);
     expect(response.status()).toBe(201);
     expect((await response.json()).client.name).toBe(name);
+    await page.getByText(new RegExp(`Booked ${name}`)).waitFor(); // the notice stays after the window leaves the list
     await page.context().close();
   });
 });

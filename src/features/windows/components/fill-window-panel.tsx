@@ -29,19 +29,21 @@ export function FillWindowPanel({ window: win, timeZone, onDone }: Props) {
     const name = 'walkIn' in who ? who.walkIn.name : who.name;
     const action = `${win.start}/${fitId}/${'walkIn' in who ? 'walk-in' : who.clientId}`;
     const body = { ...base, latestStart, ...('walkIn' in who ? { walkIn: who.walkIn } : { clientId: who.clientId, standbyEntryId: who.standbyEntryId }) };
-    fill.mutate(
-      { ...body, idempotencyKey: keys.keyFor(action) },
-      {
-        onSuccess: () => {
-          keys.settle(action);
-          onDone(`Booked ${name} for ${fit?.name ?? 'the window fit'} at ${at}.`);
-        },
-        onError: (error) => keys.settle(action, error),
-      },
-    );
+    // Awaited, not mutate() callbacks: the refreshed list may drop this window (and this panel) before
+    // per-call callbacks would run, and the notice lives in the list so it must still be set.
+    fill
+      .mutateAsync({ ...body, idempotencyKey: keys.keyFor(action) })
+      .then(() => {
+        keys.settle(action);
+        onDone(`Booked ${name} for ${fit?.name ?? 'the window fit'} at ${at}.`);
+      })
+      .catch((error: Error) => keys.settle(action, error));
   };
   const sendOffers = (standbyEntryIds: string[]) =>
-    offer.mutate({ ...base, standbyEntryIds }, { onSuccess: ({ offers }) => onDone(`Offer sent to ${offers} ${offers === 1 ? 'client' : 'clients'}.`) });
+    offer
+      .mutateAsync({ ...base, standbyEntryIds })
+      .then(({ offers }) => onDone(`Offer sent to ${offers} ${offers === 1 ? 'client' : 'clients'}.`))
+      .catch(() => {}); // the error is shown from offer.error
 
   if (win.fits.length === 0) return <p>No window fit is short enough for this window.</p>;
   const error = fill.error ?? offer.error;
