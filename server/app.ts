@@ -88,5 +88,6 @@ export function createApp(deps: Omit<AppDeps, 'table' | 'storage'> & { storage?:
     app.get('/{*splat}', (_req, res) => res.sendFile(path.join(clientDist, 'index.html')));
   }
   app.use(errorHandler);
-  return Object.assign(app, { routes: table.records });
+  // Named apiRoutes: Express's own typings already declare a loosely typed `routes`.
+  return Object.assign(app, { apiRoutes: table.records });
 }
