@@ -1,10 +1,11 @@
-import { createHash, randomBytes } from 'node:crypto';
+import { randomBytes } from 'node:crypto';
 import type { Kysely } from 'kysely';
 import type { z } from 'zod';
 import type { Database } from '../../db/schema';
 import type { SessionUser } from '../../../shared/schemas/auth.schemas';
 import type { CreateHoldSchema, Hold } from '../../../shared/schemas/online-booking.schemas';
 import type { JobQueue } from '../../jobs/job-queue';
+import { sha256 } from '../../lib/hash';
 import { AppError, notFound } from '../../lib/app-error';
 import { findSalon } from '../salon/salon.repository';
 import { findClientIdForUser } from '../clients/clients.repository';
@@ -17,7 +18,6 @@ import { cautionsFor } from './cautions';
 import { claimHoldRow, findHold, hasAcceptedCautions, insertCautionAcceptance, markHold, type HoldRow } from './holds.repository';
 
 export const LAPSE_HOLD_JOB = 'lapse-hold';
-export const sha256 = (s: string) => createHash('sha256').update(s).digest('hex');
 
 export function holdView(h: HoldRow, now = new Date()): Hold {
   const lapsed = h.status === 'held' && h.held_until !== null && h.held_until <= now;

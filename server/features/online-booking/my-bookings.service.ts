@@ -3,6 +3,7 @@ import type { Database } from '../../db/schema';
 import type { SessionUser } from '../../../shared/schemas/auth.schemas';
 import { DateTime } from 'luxon';
 import { AppError, notFound } from '../../lib/app-error';
+import { formatMoney } from '../../lib/money';
 import { findSalon } from '../salon/salon.repository';
 import { findClientIdForUser } from '../clients/clients.repository';
 import { findService } from '../services/services.repository';
@@ -22,7 +23,7 @@ export async function cancelTerms(db: Kysely<Database>, user: SessionUser, id: s
   const { hold, salon } = await ownBooking(db, user, id);
   if (hold.status !== 'booked') throw new AppError('NOT_BOOKABLE', 409, 'Only booked appointments can be cancelled here.');
   const outcome = depositOutcome(hold.deposit_cents, hold.start, now, salon.cancellationWindowHours);
-  const amount = new Intl.NumberFormat('en-US', { style: 'currency', currency: salon.currency }).format(hold.deposit_cents / 100);
+  const amount = formatMoney(hold.deposit_cents, salon.currency);
   const message =
     outcome === 'kept'
       ? `Your appointment is less than ${salon.cancellationWindowHours} hours away, so the ${amount} deposit is kept if you cancel now.`

@@ -1,4 +1,3 @@
-import { rateLimit } from 'express-rate-limit';
 import { apiPaths } from '../../../shared/api/api-paths';
 import {
   AcceptCautionsSchema, AvailabilityQuerySchema, AvailabilitySchema, ClaimedHoldSchema, CreatedHoldSchema, CreateHoldSchema,
@@ -7,6 +6,7 @@ import {
 import { BookingViewSchema } from '../../../shared/schemas/booking-view.schemas';
 import type { AppDeps } from '../../app-deps';
 import { apiRoute } from '../../lib/api-route';
+import { rateLimited } from '../../lib/rate-limit';
 import { AppError, notFound } from '../../lib/app-error';
 import { deskBookingView } from '../bookings/booking-changes.routes';
 import { findSalonBySlug, publicSalon } from './public-salon.service';
@@ -15,14 +15,7 @@ import { acceptCautions, claimHold, createHold, holdView } from './holds.service
 import { findHold } from './holds.repository';
 import { payHold } from './pay-hold.service';
 
-const limited = (limit: number) =>
-  rateLimit({
-    windowMs: 60_000,
-    limit,
-    standardHeaders: 'draft-8',
-    legacyHeaders: false,
-    handler: (_req, _res, next) => next(new AppError('RATE_LIMITED', 429, 'Too many requests; wait a minute and try again.')),
-  });
+const limited = (limit: number) => rateLimited({ windowMs: 60_000, limit, message: 'Too many requests; wait a minute and try again.' });
 
 export function registerOnlineBookingRoutes({ table, db, jobs, payments, mailer, sms }: AppDeps): void {
   apiRoute(table, { method: 'get', path: '/api/public/salons/:slug', access: 'public', summary: "The salon's public page", params: SlugParamsSchema, response: PublicSalonSchema }, async ({ params }) =>

@@ -2,9 +2,9 @@ import { describeRecurrence } from '../../../shared/engine/recurrence';
 import type { Db } from '../../db/database';
 import type { PublicSalon } from '../../../shared/schemas/online-booking.schemas';
 import { notFound } from '../../lib/app-error';
+import { formatMoney } from '../../lib/money';
 import { listServices, listStylistDetails } from '../services/services.repository';
 
-const money = (cents: number, currency: string) => new Intl.NumberFormat('en-US', { style: 'currency', currency }).format(cents / 100);
 
 export async function findSalonBySlug(db: Db, slug: string) {
   const salon = await db.selectFrom('salons').selectAll().where('slug', '=', slug).executeTakeFirst();
@@ -20,7 +20,7 @@ export async function publicSalon(db: Db, slug: string): Promise<PublicSalon> {
     listServices(db, salon.id),
     listStylistDetails(db, salon.id),
   ]);
-  const deposits = services.filter((s) => s.depositCents > 0).map((s) => `${s.name}: ${money(s.depositCents, salon.currency)}`);
+  const deposits = services.filter((s) => s.depositCents > 0).map((s) => `${s.name}: ${formatMoney(s.depositCents, salon.currency)}`);
   return {
     slug: salon.slug,
     name: salon.name,

@@ -1,21 +1,14 @@
-import { rateLimit } from 'express-rate-limit';
 import { apiPaths } from '../../../shared/api/api-paths';
 import { PasswordResetConfirmSchema, PasswordResetRequestSchema } from '../../../shared/schemas/auth.schemas';
 import type { AppDeps } from '../../app-deps';
 import { apiRoute } from '../../lib/api-route';
-import { AppError } from '../../lib/app-error';
+import { rateLimited } from '../../lib/rate-limit';
 import { confirmReset, requestReset } from './password-reset.service';
 
 export function registerPasswordResetRoutes({ table, db, mailer, config }: AppDeps): void {
   table.router.post(
     apiPaths.passwordReset,
-    rateLimit({
-      windowMs: 15 * 60_000,
-      limit: 10,
-      standardHeaders: 'draft-8',
-      legacyHeaders: false,
-      handler: (_req, _res, next) => next(new AppError('RATE_LIMITED', 429, 'Too many reset requests; try again later.')),
-    }),
+    rateLimited({ windowMs: 15 * 60_000, limit: 10, message: 'Too many reset requests; try again later.' }),
   );
   apiRoute(
     table,

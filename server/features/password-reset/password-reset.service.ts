@@ -1,14 +1,14 @@
-import { createHash, randomBytes } from 'node:crypto';
+import { randomBytes } from 'node:crypto';
 import type { Kysely } from 'kysely';
 import type { Database } from '../../db/schema';
 import type { Mailer } from '../../mail/mailer';
+import { sha256 } from '../../lib/hash';
 import { AppError } from '../../lib/app-error';
 import { hashPassword, isCommonPassword } from '../../auth/password';
 import { findUserByEmail, setPassword } from '../session/users.repository';
 import { consumeReset, deleteSessionsOfUser, insertReset } from './password-resets.repository';
 
 export const RESET_VALID_MINUTES = 30;
-const sha256 = (s: string) => createHash('sha256').update(s).digest('hex');
 
 /** Sends a one-time link when the account exists; the answer is the same either way. */
 export async function requestReset(db: Kysely<Database>, mailer: Mailer, email: string, baseUrl: string): Promise<void> {

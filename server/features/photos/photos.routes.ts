@@ -1,4 +1,3 @@
-import { rateLimit } from 'express-rate-limit';
 import { photoPaths } from '../../../shared/api/hair-paths';
 import type { SessionUser } from '../../../shared/schemas/auth.schemas';
 import { IdParamsSchema } from '../../../shared/schemas/common.schemas';
@@ -7,7 +6,7 @@ import type { AppDeps } from '../../app-deps';
 import { CLIENT_OR_STAFF, clientIdFor, myClientId } from '../../auth/client-access';
 import { STAFF } from '../../auth/require-access';
 import { apiRoute } from '../../lib/api-route';
-import { AppError } from '../../lib/app-error';
+import { rateLimited } from '../../lib/rate-limit';
 import { uploadRoute } from '../../lib/upload-route';
 import { listPhotos, type PhotoRow } from './photos.repository';
 import { storePhotos } from './store-photos.service';
@@ -26,13 +25,11 @@ const toView = (p: Omit<PhotoRow, 'storage_key' | 'mime' | 'salon_id' | 'client_
 
 // Decoding and re-encoding is the expensive part: a person gets a generous budget per quarter hour,
 // counted per signed-in user so a busy salon behind one address is not throttled as one.
-const uploadLimiter = rateLimit({
+const uploadLimiter = rateLimited({
   windowMs: 15 * 60_000,
   limit: 60,
-  standardHeaders: 'draft-8',
-  legacyHeaders: false,
-  keyGenerator: (req) => (req.user as SessionUser).id,
-  handler: (_req, _res, next) => next(new AppError('RATE_LIMITED', 429, 'Too many uploads; try again in a few minutes.')),
+  key: (req) => (req.user as SessionUser).id,
+  message: 'Too many uploads; try again in a few minutes.',
 });
 
 const uploadSpec = {

@@ -1,5 +1,4 @@
 import type { Request } from 'express';
-import { rateLimit } from 'express-rate-limit';
 import {
   SessionResponseSchema,
   SignInBodySchema,
@@ -8,7 +7,7 @@ import {
 } from '../../../shared/schemas/auth.schemas';
 import { apiPaths } from '../../../shared/api/api-paths';
 import { apiRoute } from '../../lib/api-route';
-import { AppError } from '../../lib/app-error';
+import { rateLimited } from '../../lib/rate-limit';
 import type { AppDeps } from '../../app-deps';
 import { signIn, signUp } from './session.service';
 
@@ -51,13 +50,7 @@ export function registerSessionRoutes({ table, db }: AppDeps): void {
   );
   table.router.post(
     apiPaths.signUp,
-    rateLimit({
-      windowMs: 15 * 60_000,
-      limit: 20,
-      standardHeaders: 'draft-8',
-      legacyHeaders: false,
-      handler: (_req, _res, next) => next(new AppError('RATE_LIMITED', 429, 'Too many sign-ups from here; try again later.')),
-    }),
+    rateLimited({ windowMs: 15 * 60_000, limit: 20, message: 'Too many sign-ups from here; try again later.' }),
   );
   apiRoute(
     table,

@@ -1,4 +1,4 @@
-import { createHash, randomBytes } from 'node:crypto';
+import { randomBytes } from 'node:crypto';
 import type { Kysely } from 'kysely';
 import type { z } from 'zod';
 import type { Database } from '../../db/schema';
@@ -7,6 +7,7 @@ import type { SessionUser } from '../../../shared/schemas/auth.schemas';
 import type { OfferViewSchema, OfferWindowSchema } from '../../../shared/schemas/window.schemas';
 import type { Mailer } from '../../mail/mailer';
 import type { SmsSender } from '../../sms/sms-sender';
+import { sha256 } from '../../lib/hash';
 import { AppError, forbidden, notFound } from '../../lib/app-error';
 import { findService } from '../services/services.repository';
 import { findSalon } from '../salon/salon.repository';
@@ -19,7 +20,6 @@ import { sendOffer, sendOfferTaken } from './offer-messages';
 
 type Senders = { mailer: Mailer; sms: SmsSender };
 type OfferView = z.infer<typeof OfferViewSchema>;
-const sha256 = (s: string) => createHash('sha256').update(s).digest('hex');
 
 /** Sends each chosen standby client a link to the window; returns how many were offered. */
 export async function offerWindow(db: Kysely<Database>, senders: Senders, salon: Salon, user: SessionUser, body: z.infer<typeof OfferWindowSchema>, baseUrl: string) {
