@@ -18,6 +18,10 @@ const ConfigSchema = z.object({
   SMS_FROM: z.string().default('+19705550100'),
   STRIPE_SECRET_KEY: z.string().startsWith('sk_').optional(),
   UPLOADS_DIR: z.string().min(1).optional(),
+  /** A session ends after this many minutes without a request… */
+  SESSION_IDLE_MINUTES: z.coerce.number().int().min(1).max(7 * 24 * 60).default(8 * 60),
+  /** …and this many hours after sign-in, however active. */
+  SESSION_ABSOLUTE_HOURS: z.coerce.number().int().min(1).max(90 * 24).default(7 * 24),
 });
 
 export interface Config {
@@ -28,6 +32,8 @@ export interface Config {
   sessionSecret: string;
   /** Cookies carry Secure everywhere but local development over plain http. */
   secureCookies: boolean;
+  /** Idle and absolute session timeouts (defaults 8 hours idle, 7 days absolute). */
+  session: { idleMinutes: number; absoluteHours: number };
   publicUrl: string | null;
   smtpUrl: string | null;
   mailFrom: string;
@@ -53,6 +59,7 @@ export function loadConfig(env: Record<string, string | undefined> = process.env
     // Outside production a fresh secret per process is fine: sessions of a restarted dev server just end.
     sessionSecret: parsed.SESSION_SECRET ?? randomBytes(32).toString('hex'),
     secureCookies: parsed.DWELL_MODE === 'production',
+    session: { idleMinutes: parsed.SESSION_IDLE_MINUTES, absoluteHours: parsed.SESSION_ABSOLUTE_HOURS },
     publicUrl: parsed.PUBLIC_URL ?? null,
     smtpUrl: parsed.SMTP_URL ?? null,
     mailFrom: parsed.MAIL_FROM,

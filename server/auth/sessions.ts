@@ -8,9 +8,6 @@ import type { Db } from '../db/database';
 import { findSessionUser } from '../features/session/users.repository';
 import { AppError } from '../lib/app-error';
 
-const IDLE_MINUTES = 8 * 60;
-const ABSOLUTE_DAYS = 7;
-
 declare module 'express-session' {
   interface SessionData {
     startedAt?: number;
@@ -20,7 +17,8 @@ declare module 'express-session' {
 
 /**
  * Sessions live in PostgreSQL so app servers stay stateless. The cookie is HttpOnly and SameSite=Lax
- * (Secure outside local development); a session ends after 8 idle hours or 7 days whatever happens.
+ * (Secure outside local development); a session ends after `config.session.idleMinutes` without a request
+ * (8 hours by default) or `absoluteHours` after sign-in (7 days by default), whatever happens.
  */
 export function installSessions(app: Express, deps: { pool: pg.Pool; db: Db; config: Config }): void {
   const PgStore = connectPgSimple(session);
@@ -36,11 +34,11 @@ export function installSessions(app: Express, deps: { pool: pg.Pool; db: Db; con
         httpOnly: true,
         sameSite: 'lax',
         secure: deps.config.secureCookies,
-        maxAge: IDLE_MINUTES * 60_000,
+        maxAge: deps.config.session.idleMinutes * 60_000,
       },
     }),
   );
-  app.use(absoluteTimeout);
+  app.use(absoluteTimeout(deps.config.session.absoluteHours));
   passport.serializeUser((user, done) => done(null, (user as { id: string }).id));
   passport.deserializeUser((id: string, done) => {
     findSessionUser(deps.db, id)
@@ -50,10 +48,12 @@ export function installSessions(app: Express, deps: { pool: pg.Pool; db: Db; con
   app.use(passport.session());
 }
 
-const absoluteTimeout: RequestHandler = (req, _res, next) => {
-  const started = req.session?.startedAt;
-  if (started && Date.now() - started > ABSOLUTE_DAYS * 86_400_000) {
-    return req.session.destroy(() => next(new AppError('UNAUTHENTICATED', 401, 'Your session ended; sign in again.')));
-  }
-  next();
-};
+const absoluteTimeout =
+  (hours: number): RequestHandler =>
+  (req, _res, next) => {
+    const started = req.session?.startedAt;
+    if (started && Date.now() - started > hours * 3_600_000) {
+      return req.session.destroy(() => next(new AppError('UNAUTHENTICATED', 401, 'Your session ended; sign in again.')));
+    }
+    next();
+  };

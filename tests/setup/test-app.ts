@@ -25,11 +25,14 @@ export interface TestApp {
   close(): Promise<void>;
 }
 
-/** The real app on a fresh database with the local e-mail fake, mounted in-process for supertest. */
-export async function startTestApp(): Promise<TestApp> {
+/**
+ * The real app on a fresh database with the local e-mail fake, mounted in-process for supertest.
+ * `env` adds settings (e.g. short session timeouts) on top of the test defaults.
+ */
+export async function startTestApp(env: Record<string, string> = {}): Promise<TestApp> {
   const testDb = await createTestDb();
   const uploadsDir = await mkdtemp(path.join(tmpdir(), 'dwell-uploads-'));
-  const config = loadConfig({ DATABASE_URL: testDb.url, DWELL_MODE: 'test', UPLOADS_DIR: uploadsDir });
+  const config = loadConfig({ DATABASE_URL: testDb.url, DWELL_MODE: 'test', UPLOADS_DIR: uploadsDir, ...env });
   const outside = await startOutsideServices(config);
   const jobs = await startJobQueue(testDb.url, appJobs(testDb.db, outside));
   const app = createApp({ db: testDb.db, pool: testDb.pool, config, jobs, ...outside });
