@@ -29,6 +29,8 @@ export const errorHandler: ErrorRequestHandler = (err, _req, res, _next) => {
     return send(res, 400, { code: 'VALIDATION_FAILED', message: err.message, fields: { [err.field]: err.message } });
   }
   if (err instanceof NoResultError) return send(res, 404, { code: 'NOT_FOUND', message: 'That record was not found.' });
+  // A path like /api/bookings/%ED%A0%80 cannot be decoded (Express's router throws URIError with status 400).
+  if (err instanceof URIError) return send(res, 400, { code: 'VALIDATION_FAILED', message: 'The address has a malformed %-escape.' });
   if (err?.type === 'entity.parse.failed') return send(res, 400, { code: 'BAD_JSON', message: 'The request body is not valid JSON.' });
   if (err?.type === 'entity.too.large') return send(res, 413, { code: 'PAYLOAD_TOO_LARGE', message: 'The request body is too large.' });
   if (err?.type === 'charset.unsupported' || err?.type === 'encoding.unsupported') {

@@ -1,9 +1,12 @@
 import { z } from 'zod';
-import { IdSchema, InstantInputSchema, InstantSchema, LocalDateSchema, StepKindSchema } from './common.schemas';
+import { IdSchema, InstantInputSchema, InstantSchema, isRealDateTime, LocalDateSchema, StepKindSchema } from './common.schemas';
 import { StepPlanSchema } from './step-plan.schemas';
 
 /** A wall-clock time in the salon's zone, `YYYY-MM-DDTHH:mm`. */
-export const LocalDateTimeSchema = z.string().regex(/^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}$/, 'Use a time like 2027-03-14T09:30');
+export const LocalDateTimeSchema = z
+  .string()
+  .regex(/^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}$/, 'Use a time like 2027-03-14T09:30')
+  .refine(isRealDateTime, 'Not a real date and time');
 
 /** The desk asks for options: a client, a service, its (possibly edited) step plan, a stylist or any. */
 export const BookingOptionsRequestSchema = z

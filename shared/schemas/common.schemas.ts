@@ -1,14 +1,31 @@
 import { z } from 'zod';
 
+/**
+ * True when a string that starts `YYYY-MM-DD` (optionally `THH:mm`) names a day that exists and a time
+ * on the 24-hour clock. The patterns alone let 2027-02-30 or 25:61 through, and Date.parse rolls
+ * 2027-02-30 over into March instead of refusing it.
+ */
+export function isRealDateTime(s: string): boolean {
+  const match = /^(\d{4})-(\d{2})-(\d{2})(?:T(\d{2}):(\d{2}))?/.exec(s);
+  if (!match) return false;
+  const [y, m, d, hh, mm] = match.slice(1).map((v) => Number(v ?? 0));
+  const date = new Date(0);
+  date.setUTCFullYear(y, m - 1, d); // not Date.UTC, which reads years 0–99 as 1900–1999
+  return date.getUTCFullYear() === y && date.getUTCMonth() === m - 1 && date.getUTCDate() === d && hh <= 23 && mm <= 59;
+}
+
 /** A local calendar date, `YYYY-MM-DD`. */
-export const LocalDateSchema = z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'Use a date like 2027-03-14');
+export const LocalDateSchema = z
+  .string()
+  .regex(/^\d{4}-\d{2}-\d{2}$/, 'Use a date like 2027-03-14')
+  .refine(isRealDateTime, 'Not a real date');
 /** An instant as ISO 8601 with its UTC offset (what the API sends for every time). */
 export const InstantSchema = z.string();
 /** An instant sent to the API: ISO 8601 with a UTC offset or Z, to the minute or finer (as the API answers them). */
 export const InstantInputSchema = z
   .string()
   .regex(/^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}(:\d{2}(\.\d{1,3})?)?(Z|[+-]\d{2}:\d{2})$/, 'Use a time like 2027-03-14T09:30-06:00')
-  .refine((s) => !Number.isNaN(Date.parse(s)), 'Not a real date and time');
+  .refine((s) => isRealDateTime(s) && !Number.isNaN(Date.parse(s)), 'Not a real date and time');
 export const IdSchema = z.uuid();
 export const IdParamsSchema = z.object({ id: IdSchema }).strict();
 export const RoleSchema = z.enum(['client', 'front_desk', 'stylist', 'owner']);

@@ -1,0 +1,91 @@
+import fc from 'fast-check';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { anonymousAgent, signedInAgent, startTestApp, type TestApp } from '../setup/test-app';
+import { loadDemoSalon } from '../../server/demo/load-demo-salon';
+import { DEMO_PASSWORD, demoSalon } from '../../server/demo/demo-catalogue';
+import { documentedRoutes, type DocumentedRoute } from './access-matrix/openapi-routes';
+import { requestArbitrary, type FuzzRequest } from './fuzz/request-arbitrary';
+
+// Property-based fuzzing of every route in the OpenAPI document, as the demo salon's owner and signed out:
+// requests drawn from each route's own schemas plus hostile mutations (see fuzz/request-arbitrary.ts).
+// The properties: never a 5xx, and every refusal in the one error shape { error: { code, message } }.
+// Runs per route and caller are bounded so `npm test` stays quick; DWELL_FUZZ_RUNS=200 digs deeper.
+const RUNS = Number(process.env.DWELL_FUZZ_RUNS ?? 5);
+
+// Routes that change who the owner's session belongs to (signing in, up or out) are fuzzed signed out only.
+const SESSION_CHANGING = new Set(['POST /api/session', 'DELETE /api/session', 'POST /api/sign-up']);
+
+let t: TestApp;
+let routes: DocumentedRoute[];
+let owner: Awaited<ReturnType<typeof signedInAgent>>;
+let ids: string[];
+
+beforeAll(async () => {
+  t = await startTestApp();
+  const db = t.testDb.db;
+  await loadDemoSalon(db, new Date());
+  const pick = async (table: 'bookings' | 'clients' | 'services' | 'staff' | 'chairs' | 'basins' | 'standby_entries') =>
+    (await db.selectFrom(table).select('id').limit(4).execute()).map((r) => r.id);
+  ids = (await Promise.all((['bookings', 'clients', 'services', 'staff', 'chairs', 'basins', 'standby_entries'] as const).map(pick))).flat();
+  owner = await signedInAgent(t.app, 'owner@demo.test', DEMO_PASSWORD);
+  routes = (await documentedRoutes(t.app)).routes;
+});
+afterAll(() => t.close());
+
+type Caller = Awaited<ReturnType<typeof anonymousAgent>>;
+
+function send(caller: Caller, route: DocumentedRoute, req: FuzzRequest) {
+  if (route.method === 'get') return caller.agent.get(req.path).query(req.query);
+  return caller
+    .write(route.method, req.path)
+    .query(req.query)
+    .set('Content-Type', 'application/json')
+    .send(req.body === undefined ? '' : JSON.stringify(req.body));
+}
+
+/** Describes what is wrong with an answer, or null when it keeps the properties. */
+function problem(res: { status: number; body: unknown }): string | null {
+  if (res.status >= 500) return `answered ${res.status} ${JSON.stringify(res.body)}`;
+  if (res.status < 400) return null;
+  const error = (res.body as { error?: { code?: unknown; message?: unknown } })?.error;
+  if (typeof error?.code !== 'string' || typeof error.message !== 'string' || !error.message) return `error not in the standard shape: ${JSON.stringify(res.body)}`;
+  return null;
+}
+
+describe('fuzzing every documented route', () => {
+  it('never answers 5xx, and refuses in the standard error shape', async () => {
+    const failures: string[] = [];
+    let requests = 0;
+    const statuses = new Map<number, number>();
+    for (const route of routes) {
+      const anonymous = await anonymousAgent(t.app);
+      const callers: [string, Caller][] = [['signed out', anonymous]];
+      if (!SESSION_CHANGING.has(route.key)) callers.push(['owner', owner]);
+      for (const [name, caller] of callers) {
+        const arbitrary = requestArbitrary(route, { ids, slug: demoSalon.slug });
+        try {
+          await fc.assert(
+            fc.asyncProperty(arbitrary, async (req) => {
+              requests++;
+              const res = await send(caller, route, req);
+              statuses.set(res.status, (statuses.get(res.status) ?? 0) + 1);
+              const found = problem(res);
+              if (found) throw new Error(found);
+            }),
+            { numRuns: RUNS, endOnFailure: true },
+          );
+        } catch (err) {
+          failures.push(`${route.key} as ${name}: ${(err as Error).message.split('\n').slice(0, 6).join(' | ')}`);
+        }
+        // GET /api/csrf replaces the token a caller holds.
+        await caller.refreshCsrf();
+      }
+    }
+    console.log(`fuzz: ${requests} requests; answers by status ${JSON.stringify(Object.fromEntries(statuses))}`);
+    expect(failures).toEqual([]);
+    expect(requests).toBeGreaterThanOrEqual(routes.length * RUNS);
+    // Not only refusals: some drawn requests must get through validation and be served.
+    const served = [...statuses].filter(([s]) => s < 300).reduce((n, [, c]) => n + c, 0);
+    expect(served).toBeGreaterThan(routes.length / 2);
+  }, 240_000);
+});
