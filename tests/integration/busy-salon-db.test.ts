@@ -1,0 +1,56 @@
+import { sql } from 'kysely';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { loadBusySalon, type BusySalon } from '../bench/busy-salon-db';
+import { createTestDb, type TestDb } from '../setup/test-db';
+
+let testDb: TestDb;
+let busy: BusySalon;
+
+beforeAll(async () => {
+  testDb = await createTestDb();
+  busy = await loadBusySalon(testDb.db, { from: '2027-03-01', months: 1, now: new Date('2027-03-15T12:00:00Z') });
+}, 120_000);
+afterAll(() => testDb.drop());
+
+describe('busy salon loader', () => {
+  it('writes the bench generator’s salon as rows that pass the database’s own no-double-booking constraints', async () => {
+    expect(busy.to).toBe('2027-04-01');
+    // 2,500 bookings in 42 days is the engine bench's density; March has 31 days → about 1,845 asked for.
+    expect(busy.counts.bookings).toBeGreaterThan(1500);
+    const count = async (table: 'staff' | 'chairs' | 'basins' | 'services' | 'clients' | 'bookings') =>
+      (await testDb.db.selectFrom(table).select(sql<number>`count(*)::int`.as('n')).where('salon_id', '=', busy.salonId).executeTakeFirstOrThrow()).n;
+    expect(await count('staff')).toBe(12);
+    expect(await count('chairs')).toBe(14);
+    expect(await count('basins')).toBe(4);
+    expect(await count('services')).toBe(busy.counts.services);
+    expect(await count('clients')).toBe(busy.counts.clients);
+    expect(await count('bookings')).toBe(busy.counts.bookings);
+    const statuses = await testDb.db
+      .selectFrom('bookings')
+      .select(['status', sql<number>`count(*)::int`.as('n')])
+      .where('salon_id', '=', busy.salonId)
+      .groupBy('status')
+      .execute();
+    const by = Object.fromEntries(statuses.map((s) => [s.status, s.n]));
+    expect(by.cancelled).toBe(busy.counts.cancelled);
+    expect(by.no_show).toBe(busy.counts.noShows);
+    expect(by.finished).toBeGreaterThan(0);
+    expect(by.booked).toBeGreaterThan(0);
+    // Cancelled bookings hold nothing: none of their sittings is live.
+    const liveCancelled = await testDb.db
+      .selectFrom('sittings as s')
+      .innerJoin('bookings as b', 'b.id', 's.booking_id')
+      .select(sql<number>`count(*)::int`.as('n'))
+      .where('b.salon_id', '=', busy.salonId)
+      .where('b.status', '=', 'cancelled')
+      .where('s.live', '=', true)
+      .executeTakeFirstOrThrow();
+    expect(liveCancelled.n).toBe(0);
+  });
+
+  it('gives the same book for the same seed', async () => {
+    const again = await loadBusySalon(testDb.db, { from: '2027-03-01', months: 1, now: new Date('2027-03-15T12:00:00Z') });
+    expect(again.counts).toEqual(busy.counts);
+    expect(again.salonId).not.toBe(busy.salonId);
+  }, 120_000);
+});
