@@ -1,0 +1,32 @@
+/** A signed-in session for scripts: cookie header and CSRF token, through the API as the browser does. */
+export interface HttpSession {
+  cookie: string;
+  csrf: string;
+}
+
+function mergeCookies(jar: Map<string, string>, res: Response) {
+  for (const c of res.headers.getSetCookie()) {
+    const [pair] = c.split(';');
+    const [name, ...value] = pair.split('=');
+    jar.set(name, value.join('='));
+  }
+}
+
+export async function signIn(baseUrl: string, email: string, password: string): Promise<HttpSession> {
+  const jar = new Map<string, string>();
+  const cookie = () => [...jar].map(([k, v]) => `${k}=${v}`).join('; ');
+  const csrf = async () => {
+    const res = await fetch(`${baseUrl}/api/csrf`, { headers: { cookie: cookie() } });
+    mergeCookies(jar, res);
+    return ((await res.json()) as { token: string }).token;
+  };
+  const res = await fetch(`${baseUrl}/api/session`, {
+    method: 'POST',
+    headers: { 'content-type': 'application/json', 'x-csrf-token': await csrf(), cookie: cookie() },
+    body: JSON.stringify({ email, password }),
+  });
+  if (res.status !== 200) throw new Error(`sign-in as ${email} failed: ${res.status} ${await res.text()}`);
+  mergeCookies(jar, res);
+  const token = await csrf(); // bound to the new session
+  return { cookie: cookie(), csrf: token };
+}
