@@ -76,6 +76,15 @@ async function main(): Promise<number> {
       return result;
     };
 
+    // One request at a time first: the latency without queueing, to tell the machine's speed from concurrency.
+    await run(measure({
+      name: 'one at a time: desk/day', urls: urls.slice(0, 1), connections: 1, amount: 10, headers: deskHeaders,
+      next: (i) => ({ path: `/api/desk/day?date=${days[i % days.length]}` }),
+    }));
+    await run(measure({
+      name: 'one at a time: availability', urls: urls.slice(0, 1), connections: 1, amount: 5,
+      next: (i) => ({ path: `/api/public/salons/${busy.slug}/availability?serviceId=${service.id}&from=${days[i % days.length]}`, headers: { 'x-forwarded-for': someAddress(100_000 + i) } }),
+    }));
     await run(measure({
       name: 'desk calendar (GET desk/day)', urls, connections: CONNECTIONS, duration: seconds, headers: deskHeaders,
       next: (i) => ({ path: `/api/desk/day?date=${days[i % days.length]}` }),
@@ -113,7 +122,7 @@ async function main(): Promise<number> {
     const overlaps = await doubleBookings(db);
     const broken = await halfWritten(db);
     const duplicates = await duplicateMessages(db);
-    const reads = figures.filter((f) => f.name.startsWith('public') || f.name.startsWith('desk'));
+    const reads = figures.filter((f) => f.name.startsWith('public') || f.name.startsWith('desk calendar'));
     const serverErrors = figures.reduce((n, f) => n + f.serverErrors, 0);
     console.log(`\nbooking race: ${race.statuses['201'] ?? 0} answered 201, ${made} bookings written for ${slots.length} slots (at most one each)`);
     console.log(`double bookings: chairs ${overlaps.chairs}, hands ${overlaps.hands}, basins ${overlaps.basins}; half-written bookings ${broken}; duplicate messages ${duplicates}`);
