@@ -1,0 +1,74 @@
+import { sql } from 'kysely';
+import type { Db } from '../../db/database';
+import type { BookingStatus } from '../../../shared/schemas/common.schemas';
+import type { StepPlan } from '../../../shared/schemas/step-plan.schemas';
+
+/** One sitting of a booking that has a sitting starting in the period (cancelled ones included, holds not). */
+export interface PeriodSitting {
+  bookingId: string;
+  status: BookingStatus;
+  serviceId: string;
+  serviceName: string;
+  category: string;
+  stylistId: string;
+  priceCents: number;
+  depositCents: number;
+  depositOutcome: 'kept' | 'refunded' | null;
+  stepPlan: StepPlan;
+  seq: number;
+  start: Date;
+  end: Date;
+}
+
+/**
+ * Every sitting of the bookings with any sitting starting in [from, to): one query. The sittings of a
+ * booking come together, in order, so callers can tell a booking's first sitting and its whole length.
+ */
+export async function listPeriodSittings(db: Db, salonId: string, from: Date, to: Date): Promise<PeriodSitting[]> {
+  const rows = await db
+    .selectFrom('sittings as si')
+    .innerJoin('bookings as b', 'b.id', 'si.booking_id')
+    .innerJoin('services as sv', 'sv.id', 'b.service_id')
+    .select([
+      'b.id as bookingId', 'b.status', 'b.service_id as serviceId', 'sv.name as serviceName', 'sv.category', 'b.stylist_id as stylistId',
+      'b.price_cents as priceCents', 'b.deposit_cents as depositCents', 'b.deposit_outcome as depositOutcome', 'b.step_plan as stepPlan', 'si.seq',
+      sql<Date>`lower(si.during)`.as('start'), sql<Date>`upper(si.during)`.as('end'),
+    ])
+    .where('b.salon_id', '=', salonId)
+    .where('b.status', '!=', 'held')
+    .where(
+      'si.booking_id',
+      'in',
+      db
+        .selectFrom('sittings as f')
+        .innerJoin('bookings as fb', 'fb.id', 'f.booking_id')
+        .select('f.booking_id')
+        .where('fb.salon_id', '=', salonId)
+        .where(sql<boolean>`f.during && tstzrange(${from}, ${to}, '[)')`)
+        .where(sql<boolean>`lower(f.during) >= ${from}`),
+    )
+    .orderBy('b.id')
+    .orderBy('si.seq')
+    .execute();
+  return rows.map((r) => ({ ...r, stepPlan: r.stepPlan as StepPlan }));
+}
+
+/** When each of these cancelled bookings was cancelled, from the audit log (the first cancel entry). */
+export async function cancelledAt(db: Db, salonId: string, bookingIds: string[]): Promise<Map<string, Date>> {
+  if (bookingIds.length === 0) return new Map();
+  const rows = await db
+    .selectFrom('audit_log')
+    .select(['entity_id', sql<Date>`min(at)`.as('at')])
+    .where('salon_id', '=', salonId)
+    .where('entity', '=', 'booking')
+    .where('entity_id', 'in', bookingIds)
+    .where('action', 'like', 'cancelled%')
+    .groupBy('entity_id')
+    .execute();
+  return new Map(rows.map((r) => [r.entity_id, r.at]));
+}
+
+export async function salonStaffNames(db: Db, salonId: string): Promise<Map<string, string>> {
+  const rows = await db.selectFrom('staff').select(['id', 'display_name']).where('salon_id', '=', salonId).execute();
+  return new Map(rows.map((r) => [r.id, r.display_name]));
+}
