@@ -26,6 +26,8 @@ export { MAX_HORIZON_DAYS } from './compile-context';
 export type { HourCell, OccupancyMinutes } from './occupancy-breakdown';
 
 export interface OccupancyBreakdown {
+  /** The occupancy answer itself (`measureOccupancy`), from the same index. */
+  answer: OccupancyAnswer;
   total: OccupancyMinutes;
   parts: OccupancyMinutes[];
   cells: HourCell[];
@@ -102,5 +104,5 @@ export function breakDownOccupancy(scenario: Scenario, cuts: string[]): Occupanc
     if (day === null || day < idx.ctx.fromDay || day > idx.ctx.toDay) throw new ScenarioError(`cuts[${i}]`, `${date} is not a date inside the horizon`);
     return idx.ctx.dayStarts[day - idx.ctx.fromDay];
   });
-  return breakDown(idx, at);
+  return { answer: measure(idx), ...breakDown(idx, at) };
 }

@@ -25,6 +25,7 @@ describe('occupancy breakdown', () => {
       const cuts = ['2027-03-01', '2027-03-08', '2027-03-15', '2027-03-22', '2027-03-29'];
       const b = breakDownOccupancy(s, cuts);
       expect(ratios(b.total)).toEqual(measureOccupancy(s));
+      expect(b.answer).toEqual(measureOccupancy(s));
       const sum = (f: (m: OccupancyMinutes) => number) => b.parts.reduce((t, p) => t + f(p), 0);
       expect(sum((p) => p.chairHeld)).toBe(b.total.chairHeld);
       expect(sum((p) => p.chairOpen)).toBe(b.total.chairOpen);

@@ -10,7 +10,7 @@ const KEPT = new Set(['booked', 'checked_in', 'finished']);
 /** A colour booking planned for this long or longer (or over several sittings) counts as a correction. */
 export const CORRECTION_MIN_MINUTES = 240;
 
-const minutes = (s: { start: Date; end: Date }) => (s.end.getTime() - s.start.getTime()) / 60_000;
+const minutes = (s: { start: number; end: number }) => (s.end - s.start) / 60_000;
 const ratio = (num: number, den: number): number | null => (den === 0 ? null : num / den);
 const mean = (xs: number[]): number | null => (xs.length ? xs.reduce((a, b) => a + b, 0) / xs.length : null);
 
@@ -27,10 +27,11 @@ export function quotedMinutes(plan: StepPlan): { min: number; max: number } {
 
 export interface FigureInput {
   sittings: PeriodSitting[];
-  from: Date;
-  to: Date;
+  /** Instants as milliseconds since 1970. */
+  from: number;
+  to: number;
   /** Start instants of the period's weeks, then the period's end. */
-  weekStarts: Date[];
+  weekStarts: number[];
   cancelledAt: Map<string, Date>;
   cancellationWindowHours: number;
 }
@@ -45,14 +46,18 @@ const emptyTally = (): Tally => ({ bookings: 0, noShows: 0, revenueCents: 0 });
 
 export function bookingFigures(input: FigureInput) {
   const { from, to, weekStarts } = input;
-  const weekOf = (t: Date) => {
+  const weekOf = (t: number) => {
     let w = 0;
     while (w + 2 < weekStarts.length && weekStarts[w + 1] <= t) w++;
     return w;
   };
-  const inPeriod = (t: Date) => t >= from && t < to;
+  const inPeriod = (t: number) => t >= from && t < to;
   const byBooking = new Map<string, PeriodSitting[]>();
-  for (const s of input.sittings) byBooking.set(s.bookingId, [...(byBooking.get(s.bookingId) ?? []), s]);
+  for (const s of input.sittings) {
+    const list = byBooking.get(s.bookingId);
+    if (list) list.push(s);
+    else byBooking.set(s.bookingId, [s]);
+  }
 
   const weeks = Array.from({ length: weekStarts.length - 1 }, emptyTally);
   const stylists = new Map<string, Tally>();
@@ -102,7 +107,7 @@ export function bookingFigures(input: FigureInput) {
     if (b.status === 'cancelled') {
       attendance.cancelled++;
       const at = input.cancelledAt.get(b.bookingId);
-      const late = b.depositOutcome === 'kept' || (at !== undefined && first.start.getTime() - at.getTime() < input.cancellationWindowHours * 3_600_000);
+      const late = b.depositOutcome === 'kept' || (at !== undefined && first.start - at.getTime() < input.cancellationWindowHours * 3_600_000);
       if (late) attendance.lateCancels++;
       if (b.depositOutcome === 'kept') {
         deposits.kept++;
@@ -113,8 +118,8 @@ export function bookingFigures(input: FigureInput) {
         deposits.refundedCents += b.depositCents;
       }
     }
-    const quoted = quotedMinutes(b.stepPlan);
-    if (kept && b.category === 'colour' && (b.stepPlan.sittings.length > 1 || quoted.max >= CORRECTION_MIN_MINUTES)) {
+    const quoted = b.stepPlan && quotedMinutes(b.stepPlan);
+    if (kept && quoted && b.category === 'colour' && (b.stepPlan!.sittings.length > 1 || quoted.max >= CORRECTION_MIN_MINUTES)) {
       corrections.push({ booked: bookedMinutes, ...quoted });
     }
   }

@@ -1,5 +1,5 @@
 import type { Db } from '../../db/database';
-import { breakDownOccupancy, measureOccupancy, MAX_HORIZON_DAYS, type HourCell, type OccupancyMinutes, type Scenario } from '../../../shared/engine/engine';
+import { breakDownOccupancy, MAX_HORIZON_DAYS, type HourCell, type OccupancyMinutes, type Scenario } from '../../../shared/engine/engine';
 import { AppError } from '../../lib/app-error';
 import { loadSalonCalendars } from '../planning/salon-calendars.repository';
 import { chunksOf, type Period } from './utilisation-period';
@@ -29,7 +29,7 @@ function add(a: OccupancyMinutes, b: OccupancyMinutes): OccupancyMinutes {
 
 /**
  * The engine's occupancy over the period. A period of up to MAX_HORIZON_DAYS days is one scenario and
- * its figures are `measureOccupancy`'s answer itself; a longer one is measured in whole-week scenarios
+ * its figures are the engine's occupancy answer itself (`measureOccupancy`, on the same index); a longer one is measured in whole-week scenarios
  * whose minutes are summed before dividing once (the same definitions, so the figures agree).
  */
 export async function measurePeriod(db: Db, salonId: string, period: Period): Promise<PeriodOccupancy> {
@@ -37,7 +37,7 @@ export async function measurePeriod(db: Db, salonId: string, period: Period): Pr
   const measured = await Promise.all(
     chunks.map(async (chunk) => {
       const scenario = await loadSalonCalendars(db, salonId, { from: chunk.from, to: chunk.to });
-      return { scenario, breakdown: breakDownOccupancy(scenario, chunk.weekCuts) };
+      return { breakdown: breakDownOccupancy(scenario, chunk.weekCuts) };
     }),
   );
   const total = measured.map((m) => m.breakdown.total).reduce(add);
@@ -49,7 +49,7 @@ export async function measurePeriod(db: Db, salonId: string, period: Period): Pr
   }
   const answer =
     measured.length === 1
-      ? measureOccupancy(measured[0].scenario)
+      ? measured[0].breakdown.answer
       : {
           chairOccupancy: ratio(total.chairHeld, total.chairOpen),
           windowUse: ratio(total.windowUsed, total.windowUsed + total.windowFree),

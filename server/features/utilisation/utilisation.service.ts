@@ -17,13 +17,13 @@ export function periodFor(salon: Salon, query: UtilisationQuery, now: Date): Per
 
 /** Every figure of the period, for the owner. One query per table; the engine measures the occupancy. */
 export async function ownerUtilisation(db: Db, salon: Salon, period: Period): Promise<OwnerUtilisation> {
-  const instant = (date: string) => DateTime.fromISO(date, { zone: salon.timeZone }).toJSDate();
+  const instant = (date: string) => DateTime.fromISO(date, { zone: salon.timeZone }).toMillis();
   const weekCuts = chunksOf(period).flatMap((c, i) => (i === 0 ? c.weekCuts : c.weekCuts.slice(1)));
   const from = instant(period.from);
   const to = instant(period.to);
   const [occupancy, sittings, names] = await Promise.all([
     measurePeriod(db, salon.id, period),
-    listPeriodSittings(db, salon.id, from, to),
+    listPeriodSittings(db, salon.id, new Date(from), new Date(to)),
     salonStaffNames(db, salon.id),
   ]);
   const cancelled = [...new Set(sittings.filter((s) => s.status === 'cancelled').map((s) => s.bookingId))];
