@@ -10,6 +10,8 @@
 import type { Option, OptionsAnswer, WindowsAnswer, OccupancyAnswer } from './answers';
 import { checkFits, compileRequest } from './compile-request';
 import { measure } from './occupancy';
+import { breakDown, type HourCell, type OccupancyMinutes } from './occupancy-breakdown';
+import { parseLocalDate } from './local-time';
 import { findOptions } from './options';
 import { buildIndex } from './resource-index';
 import { ScenarioError, fromZodError } from './scenario-error';
@@ -21,6 +23,15 @@ export type { Scenario, ScenarioInput, Booking, BookedStep, ServiceRequest, Requ
 export { ScenarioSchema } from './scenario.schemas';
 export { ScenarioError } from './scenario-error';
 export { MAX_HORIZON_DAYS } from './compile-context';
+export type { HourCell, OccupancyMinutes } from './occupancy-breakdown';
+
+export interface OccupancyBreakdown {
+  /** The occupancy answer itself (`measureOccupancy`), from the same index. */
+  answer: OccupancyAnswer;
+  total: OccupancyMinutes;
+  parts: OccupancyMinutes[];
+  cells: HourCell[];
+}
 
 /** Parses and fully validates a scenario (an object, or JSON text). */
 export function parseScenario(json: unknown): Scenario {
@@ -80,4 +91,18 @@ export function findWindows(scenario: Scenario): WindowsAnswer {
 /** Chair occupancy, hands-on share per stylist and window use over the horizon. */
 export function measureOccupancy(scenario: Scenario): OccupancyAnswer {
   return measure(buildIndex(scenario));
+}
+
+/**
+ * The minutes behind `measureOccupancy` for the same scenario: the whole horizon, each part between
+ * consecutive local dates in `cuts` (inside the horizon), and local weekday × hour cells.
+ */
+export function breakDownOccupancy(scenario: Scenario, cuts: string[]): OccupancyBreakdown {
+  const idx = buildIndex(scenario);
+  const at = cuts.map((date, i) => {
+    const day = parseLocalDate(date);
+    if (day === null || day < idx.ctx.fromDay || day > idx.ctx.toDay) throw new ScenarioError(`cuts[${i}]`, `${date} is not a date inside the horizon`);
+    return idx.ctx.dayStarts[day - idx.ctx.fromDay];
+  });
+  return { answer: measure(idx), ...breakDown(idx, at) };
 }

@@ -14,9 +14,10 @@ const deskLinks = [
 export const navLinks: Record<Role, { to: string; label: string }[]> = {
   owner: [
     { to: paths.owner, label: 'Overview' },
+    { to: paths.ownerUtilisation, label: 'Utilisation' },
     ...deskLinks,
   ],
-  front_desk: deskLinks,
+  front_desk: [...deskLinks, { to: paths.deskUtilisation, label: 'Chair use' }],
   stylist: [{ to: paths.stylist(), label: 'My day' }],
   client: [{ to: paths.me, label: 'My bookings' }, { to: '/me/hair', label: 'Hair history and photos' }],
 };

@@ -8,6 +8,8 @@ export const paths = {
   forgotPassword: '/forgot-password',
   resetPassword: '/reset-password',
   owner: '/owner',
+  ownerUtilisation: '/owner/utilisation',
+  deskUtilisation: '/desk/utilisation',
   desk: (date?: string) => (date ? `/desk?date=${date}` : '/desk'),
   deskClient: (id: string) => `/desk/clients/${id}`,
   outbox: '/desk/outbox',

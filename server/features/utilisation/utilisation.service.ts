@@ -1,0 +1,103 @@
+import { DateTime } from 'luxon';
+import type { Db } from '../../db/database';
+import type { Salon } from '../../../shared/schemas/salon.schemas';
+import type { DeskUtilisation, OwnerUtilisation, UtilisationQuery } from '../../../shared/schemas/utilisation.schemas';
+import { todayIn } from '../bookings/day-view.service';
+import { cancelledAt, listPeriodSittings, salonStaffNames } from './utilisation-bookings.repository';
+import { bookingFigures } from './utilisation-figures';
+import { measurePeriod } from './utilisation-occupancy';
+import { chunksOf, resolvePeriod, type Period } from './utilisation-period';
+
+const ratio = (num: number, den: number): number | null => (den === 0 ? null : num / den);
+
+/** The period a query names, in the salon's time zone. */
+export function periodFor(salon: Salon, query: UtilisationQuery, now: Date): Period {
+  return resolvePeriod({ period: query.period ?? 'week', date: query.date, from: query.from, to: query.to }, todayIn(salon.timeZone, now));
+}
+
+/** Every figure of the period, for the owner. One query per table; the engine measures the occupancy. */
+export async function ownerUtilisation(db: Db, salon: Salon, period: Period): Promise<OwnerUtilisation> {
+  const instant = (date: string) => DateTime.fromISO(date, { zone: salon.timeZone }).toMillis();
+  const weekCuts = chunksOf(period).flatMap((c, i) => (i === 0 ? c.weekCuts : c.weekCuts.slice(1)));
+  const from = instant(period.from);
+  const to = instant(period.to);
+  const [occupancy, sittings, names] = await Promise.all([
+    measurePeriod(db, salon.id, period),
+    listPeriodSittings(db, salon.id, new Date(from), new Date(to)),
+    salonStaffNames(db, salon.id),
+  ]);
+  const cancelled = [...new Set(sittings.filter((s) => s.status === 'cancelled').map((s) => s.bookingId))];
+  const figures = bookingFigures({
+    sittings,
+    from,
+    to,
+    weekStarts: weekCuts.map(instant),
+    cancelledAt: await cancelledAt(db, salon.id, cancelled),
+    cancellationWindowHours: salon.cancellationWindowHours,
+  });
+  const { total } = occupancy;
+  const chairHours = total.chairOpen / 60;
+  const stylistHours = Object.values(total.stylists).reduce((t, s) => t + s.onClock, 0) / 60;
+  const stylistIds = [...new Set([...Object.keys(occupancy.handsOnShare), ...figures.stylists.keys()])];
+  return {
+    salon: { name: salon.name, timeZone: salon.timeZone, currency: salon.currency },
+    period: { ...period, scenarios: occupancy.scenarios },
+    chairOccupancy: occupancy.chairOccupancy,
+    windowUse: occupancy.windowUse,
+    handsOnShare: occupancy.handsOnShare,
+    attendance: figures.attendance,
+    heatMap: occupancy.cells.map((c) => ({ weekday: c.weekday, hour: c.hour, chairOccupancy: ratio(c.chairHeld, c.chairOpen), chairHeldMinutes: c.chairHeld, chairOpenMinutes: c.chairOpen })),
+    weeks: occupancy.weeks.map((w, i) => {
+      const clock = Object.values(w.stylists).reduce((t, s) => t + s.onClock, 0);
+      const hands = Object.values(w.stylists).reduce((t, s) => t + s.handsOn, 0);
+      return {
+        from: weekCuts[i],
+        to: weekCuts[i + 1],
+        bookings: figures.weeks[i].bookings,
+        chairOccupancy: ratio(w.chairHeld, w.chairOpen),
+        windowUse: ratio(w.windowUsed, w.windowUsed + w.windowFree),
+        handsOnShare: ratio(hands, clock),
+        revenueCents: figures.weeks[i].revenueCents,
+      };
+    }),
+    topServices: figures.services,
+    money: {
+      revenueCents: figures.revenueCents,
+      chairHours,
+      stylistHours,
+      revenuePerChairHourCents: ratio(figures.revenueCents, chairHours),
+      revenuePerStylistHourCents: ratio(figures.revenueCents, stylistHours),
+    },
+    deposits: figures.deposits,
+    corrections: figures.corrections,
+    stylists: stylistIds
+      .map((id) => {
+        const minutes = total.stylists[id] ?? { handsOn: 0, onClock: 0 };
+        const tally = figures.stylists.get(id) ?? { bookings: 0, noShows: 0, revenueCents: 0 };
+        return {
+          stylistId: id,
+          name: names.get(id) ?? 'Former stylist',
+          handsOnShare: occupancy.handsOnShare[id] ?? null,
+          handsOnMinutes: minutes.handsOn,
+          onClockMinutes: minutes.onClock,
+          ...tally,
+          revenuePerHourCents: ratio(tally.revenueCents, minutes.onClock / 60),
+        };
+      })
+      .sort((a, b) => a.name.localeCompare(b.name)),
+  };
+}
+
+/** The desk's subset: chair occupancy and window use, when chairs are full, attendance; no money, no per-person figures. */
+export function deskSubset(all: OwnerUtilisation): DeskUtilisation {
+  return {
+    salon: { name: all.salon.name, timeZone: all.salon.timeZone },
+    period: all.period,
+    chairOccupancy: all.chairOccupancy,
+    windowUse: all.windowUse,
+    attendance: all.attendance,
+    heatMap: all.heatMap,
+    weeks: all.weeks.map(({ from, to, bookings, chairOccupancy, windowUse }) => ({ from, to, bookings, chairOccupancy, windowUse })),
+    topServices: all.topServices.map(({ serviceId, name, chairMinutes, sittings }) => ({ serviceId, name, chairMinutes, sittings })),
+  };
+}

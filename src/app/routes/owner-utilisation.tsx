@@ -1,0 +1,11 @@
+import type { LoaderFunctionArgs } from 'react-router-dom';
+import { queryFromSearch, utilisationQueries } from '../../features/utilisation/api/utilisation-queries';
+import { OwnerUtilisationView } from '../../features/utilisation/components/utilisation-page';
+import { queryClient } from '../../lib/query-client';
+
+export async function loader({ request }: LoaderFunctionArgs) {
+  await queryClient.ensureQueryData(utilisationQueries.owner(queryFromSearch(new URL(request.url).searchParams)));
+  return null;
+}
+
+export const Component = OwnerUtilisationView;

@@ -1,0 +1,7 @@
+import { formatPercent } from '../../../lib/booking-labels';
+
+export const WEEKDAYS = ['', 'Monday', 'Tuesday', 'Wednesday', 'Thursday', 'Friday', 'Saturday', 'Sunday'];
+export const hourLabel = (hour: number) => `${String(hour).padStart(2, '0')}:00`;
+export const percentText = (share: number | null | undefined) => formatPercent(share ?? null);
+/** A share as a rounded percentage number for charts (null stays a gap). */
+export const percentValue = (share: number | null) => (share === null ? null : Math.round(share * 1000) / 10);

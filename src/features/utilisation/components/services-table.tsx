@@ -1,0 +1,28 @@
+import { SectionCard } from '../../../components/ui/section-card';
+import { formatMinutes } from '../../../lib/time';
+import { FigureTable, type FigureColumn } from './figure-table';
+
+interface ServiceRow {
+  serviceId: string;
+  name: string;
+  chairMinutes: number;
+  sittings: number;
+  revenueCents?: number;
+}
+
+type Props = { services: ServiceRow[]; filename: string; money?: (cents: number) => string };
+
+/** The services that held chairs longest in the period. */
+export function ServicesTable({ services, filename, money }: Props) {
+  const columns: FigureColumn<ServiceRow>[] = [
+    { id: 'name', header: 'Service', value: (s) => s.name },
+    { id: 'chairMinutes', header: 'Chair time', value: (s) => s.chairMinutes, format: (s) => formatMinutes(s.chairMinutes), numeric: true },
+    { id: 'sittings', header: 'Sittings', value: (s) => s.sittings, numeric: true },
+    ...(money ? [{ id: 'revenue', header: 'Revenue', value: (s: ServiceRow) => Math.round(s.revenueCents ?? 0) / 100, format: (s: ServiceRow) => money(s.revenueCents ?? 0), numeric: true }] : []),
+  ];
+  return (
+    <SectionCard title="Top services by chair time">
+      <FigureTable caption="Services by chair time" columns={columns} rows={services} filename={filename} />
+    </SectionCard>
+  );
+}

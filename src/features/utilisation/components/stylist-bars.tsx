@@ -1,0 +1,41 @@
+import { Bar, BarChart, CartesianGrid, LabelList, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
+import type { StylistFigures } from '../../../../shared/schemas/utilisation.schemas';
+import { SectionCard } from '../../../components/ui/section-card';
+import { formatMinutes } from '../../../lib/time';
+import { FigureTable, type FigureColumn } from './figure-table';
+import { percentText, percentValue } from './chart-labels';
+
+type Props = { stylists: StylistFigures[]; money: (cents: number) => string; filename: string };
+
+/** Hands-on share per stylist as bars, and every per-stylist figure in the table. */
+export function StylistBars({ stylists, money, filename }: Props) {
+  const columns: FigureColumn<StylistFigures>[] = [
+    { id: 'name', header: 'Stylist', value: (s) => s.name },
+    { id: 'share', header: 'Hands-on share', value: (s) => s.handsOnShare, format: (s) => percentText(s.handsOnShare), numeric: true },
+    { id: 'handsOn', header: 'Hands-on minutes', value: (s) => s.handsOnMinutes, format: (s) => formatMinutes(s.handsOnMinutes), numeric: true },
+    { id: 'clock', header: 'Minutes on the clock', value: (s) => s.onClockMinutes, format: (s) => formatMinutes(s.onClockMinutes), numeric: true },
+    { id: 'bookings', header: 'Bookings', value: (s) => s.bookings, numeric: true },
+    { id: 'noShows', header: 'No-shows', value: (s) => s.noShows, numeric: true },
+    { id: 'revenue', header: 'Revenue', value: (s) => Math.round(s.revenueCents) / 100, format: (s) => money(s.revenueCents), numeric: true },
+    { id: 'perHour', header: 'Revenue per hour on the clock', value: (s) => (s.revenuePerHourCents === null ? null : Math.round(s.revenuePerHourCents) / 100), format: (s) => (s.revenuePerHourCents === null ? '—' : money(s.revenuePerHourCents)), numeric: true },
+  ];
+  const data = stylists.map((s) => ({ name: s.name, share: percentValue(s.handsOnShare) }));
+  return (
+    <SectionCard title="Stylists">
+      <figure className="mb-4" style={{ height: 60 + stylists.length * 44 }} role="img" aria-label="Bar chart of hands-on share per stylist; the numbers are in the table below">
+        <ResponsiveContainer width="100%" height="100%">
+          <BarChart data={data} layout="vertical" margin={{ top: 10, right: 50, bottom: 10, left: 20 }}>
+            <CartesianGrid strokeDasharray="3 3" stroke="#1E2A3622" horizontal={false} />
+            <XAxis type="number" unit=" %" domain={[0, 100]} />
+            <YAxis type="category" dataKey="name" width={120} />
+            <Tooltip formatter={(v) => `${v} %`} />
+            <Bar dataKey="share" name="Hands-on share" fill="#B5532A" isAnimationActive={false}>
+              <LabelList dataKey="share" position="right" formatter={(v: unknown) => (v === null || v === undefined ? '—' : `${v} %`)} />
+            </Bar>
+          </BarChart>
+        </ResponsiveContainer>
+      </figure>
+      <FigureTable caption="Figures per stylist" columns={columns} rows={stylists} filename={filename} />
+    </SectionCard>
+  );
+}

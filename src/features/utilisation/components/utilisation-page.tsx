@@ -1,0 +1,85 @@
+import { useSuspenseQuery } from '@tanstack/react-query';
+import { DateTime } from 'luxon';
+import type { ReactNode } from 'react';
+import { useSearchParams } from 'react-router-dom';
+import type { DeskUtilisation, UtilisationQuery } from '../../../../shared/schemas/utilisation.schemas';
+import { PageHeader } from '../../../components/ui/page-header';
+import { formatMoney } from '../../../lib/booking-labels';
+import { formatLocalDate } from '../../../lib/time';
+import { queryFromSearch, scenarioExportUrl, utilisationQueries } from '../api/utilisation-queries';
+import { OccupancyHeatMap } from './occupancy-heat-map';
+import { PeriodPicker } from './period-picker';
+import { ServicesTable } from './services-table';
+import { StylistBars } from './stylist-bars';
+import { UtilisationSummary } from './utilisation-summary';
+import { WeeklyTrend } from './weekly-trend';
+
+/** The period in the page's URL (`?period=&date=&from=&to=`), and a way to change it. */
+function usePeriodQuery(): [UtilisationQuery, (next: UtilisationQuery) => void] {
+  const [search, setSearch] = useSearchParams();
+  const set = (next: UtilisationQuery) => {
+    const params = new URLSearchParams();
+    for (const [key, value] of Object.entries(next)) if (value) params.set(key, value);
+    setSearch(params);
+  };
+  return [queryFromSearch(search), set];
+}
+
+type FrameProps = { report: DeskUtilisation; query: UtilisationQuery; onQuery: (q: UtilisationQuery) => void; actions?: ReactNode; children: ReactNode };
+
+/** Heading, period picker and the period in words; the figures go below. */
+function Frame({ report, query, onQuery, actions, children }: FrameProps) {
+  const last = DateTime.fromISO(report.period.to).minus({ days: 1 }).toISODate()!;
+  const span = report.period.days === 1 ? formatLocalDate(report.period.from) : `${formatLocalDate(report.period.from)} to ${formatLocalDate(last)}`;
+  return (
+    <div className="flex flex-col gap-6">
+      <PageHeader title="Utilisation" subtitle={<p>{report.salon.name} · {span} · salon time ({report.salon.timeZone})</p>} />
+      {/* The key resets the form when the URL's period changes (back button, a shared link). */}
+      <PeriodPicker key={JSON.stringify(query)} value={query} onChange={onQuery} />
+      {actions}
+      {children}
+    </div>
+  );
+}
+
+const slug = (r: DeskUtilisation) => `${r.period.from}-to-${r.period.to}`;
+
+export function OwnerUtilisationView() {
+  const [query, setQuery] = usePeriodQuery();
+  const { data: report } = useSuspenseQuery(utilisationQueries.owner(query));
+  const money = (cents: number) => formatMoney(cents, report.salon.currency);
+  const actions = (
+    <p className="print:hidden">
+      {report.period.scenarios === 1 ? (
+        <a className="text-link" href={scenarioExportUrl(query)} download>
+          Download the engine scenario (JSON)
+        </a>
+      ) : (
+        <span className="text-ink/80">The engine measured this period in {report.period.scenarios} scenarios of at most 120 days; pick a shorter period to download one.</span>
+      )}
+      <span className="ml-2 text-sm text-ink/80">Check the occupancy figures with `npm run plan -- occupancy file.json`.</span>
+    </p>
+  );
+  return (
+    <Frame report={report} query={query} onQuery={setQuery} actions={actions}>
+      <UtilisationSummary report={report} money={money} />
+      <OccupancyHeatMap cells={report.heatMap} filename={`chair-occupancy-by-hour-${slug(report)}.csv`} />
+      <StylistBars stylists={report.stylists} money={money} filename={`stylists-${slug(report)}.csv`} />
+      <WeeklyTrend weeks={report.weeks} money={money} filename={`weeks-${slug(report)}.csv`} />
+      <ServicesTable services={report.topServices} money={money} filename={`services-${slug(report)}.csv`} />
+    </Frame>
+  );
+}
+
+export function DeskUtilisationView() {
+  const [query, setQuery] = usePeriodQuery();
+  const { data: report } = useSuspenseQuery(utilisationQueries.desk(query));
+  return (
+    <Frame report={report} query={query} onQuery={setQuery}>
+      <UtilisationSummary report={report} />
+      <OccupancyHeatMap cells={report.heatMap} filename={`chair-occupancy-by-hour-${slug(report)}.csv`} />
+      <WeeklyTrend weeks={report.weeks} filename={`weeks-${slug(report)}.csv`} />
+      <ServicesTable services={report.topServices} filename={`services-${slug(report)}.csv`} />
+    </Frame>
+  );
+}
