@@ -28,6 +28,10 @@ import { registerMyBookingRoutes } from './features/online-booking/my-bookings.r
 import { registerHairHistoryRoutes } from './features/hair-history/hair-history.routes';
 import { registerPhotoRoutes } from './features/photos/photos.routes';
 import { registerMixLogRoutes } from './features/mix-logs/mix-logs.routes';
+import { registerSalonSettingsRoutes } from './features/setup/salon-settings.routes';
+import { registerStaffSetupRoutes } from './features/setup/staff-setup.routes';
+import { registerUnitSetupRoutes } from './features/setup/units-setup.routes';
+import { registerServiceSetupRoutes } from './features/setup/services-setup.routes';
 import { createDiskStorage } from './storage/disk-storage';
 
 const clientDist = path.join(path.dirname(fileURLToPath(import.meta.url)), '..', 'dist', 'client');
@@ -71,6 +75,10 @@ export function createApp(deps: Omit<AppDeps, 'table' | 'storage'> & { storage?:
     registerHairHistoryRoutes,
     registerPhotoRoutes,
     registerMixLogRoutes,
+    registerSalonSettingsRoutes,
+    registerStaffSetupRoutes,
+    registerUnitSetupRoutes,
+    registerServiceSetupRoutes,
   ]) {
     register(full);
   }

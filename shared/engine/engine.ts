@@ -13,7 +13,8 @@ import { measure } from './occupancy';
 import { findOptions } from './options';
 import { buildIndex } from './resource-index';
 import { ScenarioError, fromZodError } from './scenario-error';
-import { ScenarioSchema, type Scenario } from './scenario.schemas';
+import { ScenarioSchema, type Booking, type Scenario } from './scenario.schemas';
+import { freeStylists } from './free-stylists';
 import { listWindows } from './windows';
 
 export type * from './answers';
@@ -80,4 +81,9 @@ export function findWindows(scenario: Scenario): WindowsAnswer {
 /** Chair occupancy, hands-on share per stylist and window use over the horizon. */
 export function measureOccupancy(scenario: Scenario): OccupancyAnswer {
   return measure(buildIndex(scenario));
+}
+
+/** Stylists who could take over the given sittings as they stand (see free-stylists.ts). */
+export function findFreeStylists(scenario: Scenario, skill: string, sittings: Booking[]): string[] {
+  return freeStylists(buildIndex(scenario), skill, sittings);
 }

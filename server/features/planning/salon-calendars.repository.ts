@@ -27,7 +27,7 @@ export async function loadSalonCalendars(db: Db, salonId: string, horizon: Horiz
   const from = DateTime.fromISO(horizon.from, { zone }).toJSDate();
   const to = DateTime.fromISO(horizon.to, { zone }).toJSDate();
   const range = sql`tstzrange(${from}, ${to}, '[)')`;
-  const [hours, staff, staffHours, timeOff, chairs, basins, steps] = await Promise.all([
+  const [hours, staff, staffHours, timeOff, chairs, basins, steps, closures] = await Promise.all([
     db.selectFrom('salon_hours').select(['rrule', 'start_time', 'end_time']).where('salon_id', '=', salonId).execute(),
     db.selectFrom('staff').select(['id', 'skills', 'max_clients_at_once']).where('salon_id', '=', salonId).where('active', '=', true).orderBy('id').execute(),
     db.selectFrom('staff_hours as h').innerJoin('staff as s', 's.id', 'h.staff_id').select(['h.staff_id', 'h.rrule', 'h.start_time', 'h.end_time']).where('s.salon_id', '=', salonId).execute(),
@@ -52,7 +52,15 @@ export async function loadSalonCalendars(db: Db, salonId: string, horizon: Horiz
       .orderBy('si.id')
       .orderBy('st.seq')
       .execute(),
+    db
+      .selectFrom('out_of_service')
+      .select(['chair_id', 'basin_id', sql<Date>`greatest(lower(during), ${from}::timestamptz)`.as('start'), sql<Date>`least(upper(during), ${to}::timestamptz)`.as('end')])
+      .where('salon_id', '=', salonId)
+      .where(sql<boolean>`during && ${range}`)
+      .execute(),
   ]);
+  const outOfService = (id: string) =>
+    closures.filter((c) => c.chair_id === id || c.basin_id === id).map((c) => ({ start: toLocal(c.start, zone), end: toLocal(c.end, zone) }));
   const bookings = new Map<string, SalonCalendars['bookings'][number]>();
   for (const s of steps) {
     const booking = bookings.get(s.sittingId) ?? { id: s.sittingId, stylist: s.stylist_id, chair: s.chair_id, steps: [] };
@@ -72,8 +80,8 @@ export async function loadSalonCalendars(db: Db, salonId: string, horizon: Horiz
       hours: staffHours.filter((h) => h.staff_id === s.id).map((h) => ({ rrule: h.rrule, start: hhmm(h.start_time), end: hhmm(h.end_time) })),
       timeOff: timeOff.filter((t) => t.staff_id === s.id).map((t) => ({ start: toLocal(t.start, zone), end: toLocal(t.end, zone) })),
     })),
-    chairs: chairs.map((c) => ({ id: c.id })),
-    basins: basins.map((b) => ({ id: b.id })),
+    chairs: chairs.map((c) => ({ id: c.id, outOfService: outOfService(c.id) })),
+    basins: basins.map((b) => ({ id: b.id, outOfService: outOfService(b.id) })),
     bookings: [...bookings.values()],
     fits: [],
   };
