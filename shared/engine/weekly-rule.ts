@@ -45,7 +45,7 @@ export function readWeeklyRule(text: string): WeeklyRule | null {
     if (!line.includes(':') && lines.length === 1) rrule = upper;
     else if (upper.startsWith('RRULE:')) rrule = upper.slice(6);
     else if (/^DTSTART;VALUE=DATE:\d{8}$/.test(upper)) startsOn = dashed(upper.slice(-8));
-    else if (/^EXDATE;VALUE=DATE:\d{8}(,\d{8})*$/.test(upper)) closedDates.push(...upper.slice(17).split(',').map(dashed));
+    else if (/^EXDATE;VALUE=DATE:\d{8}(,\d{8})*$/.test(upper)) closedDates.push(...upper.slice(upper.indexOf(':') + 1).split(',').map(dashed));
     else return null;
   }
   if (!rrule) return null;
