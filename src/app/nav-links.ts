@@ -14,6 +14,7 @@ const deskLinks = [
 export const navLinks: Record<Role, { to: string; label: string }[]> = {
   owner: [
     { to: paths.owner, label: 'Overview' },
+    { to: paths.ownerSetup, label: 'Set-up' },
     ...deskLinks,
   ],
   front_desk: deskLinks,
