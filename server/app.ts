@@ -29,6 +29,10 @@ import { registerHairHistoryRoutes } from './features/hair-history/hair-history.
 import { registerPhotoRoutes } from './features/photos/photos.routes';
 import { registerMixLogRoutes } from './features/mix-logs/mix-logs.routes';
 import { registerUtilisationRoutes } from './features/utilisation/utilisation.routes';
+import { registerSalonSettingsRoutes } from './features/setup/salon-settings.routes';
+import { registerStaffSetupRoutes } from './features/setup/staff-setup.routes';
+import { registerUnitSetupRoutes } from './features/setup/units-setup.routes';
+import { registerServiceSetupRoutes } from './features/setup/services-setup.routes';
 import { createDiskStorage } from './storage/disk-storage';
 
 const clientDist = path.join(path.dirname(fileURLToPath(import.meta.url)), '..', 'dist', 'client');
@@ -73,6 +77,10 @@ export function createApp(deps: Omit<AppDeps, 'table' | 'storage'> & { storage?:
     registerPhotoRoutes,
     registerMixLogRoutes,
     registerUtilisationRoutes,
+    registerSalonSettingsRoutes,
+    registerStaffSetupRoutes,
+    registerUnitSetupRoutes,
+    registerServiceSetupRoutes,
   ]) {
     register(full);
   }

@@ -29,6 +29,8 @@ export interface SalonsTable {
   /** numeric: pg returns it as a string. */
   max_developer_percent: ColumnType<string, string | number | undefined, string | number>;
   created_at: DefaultTimestamp;
+  /** What a cancellation inside the window keeps: the deposit, or nothing (always refunded). */
+  cancellation_keeps: ColumnType<'deposit' | 'nothing', 'deposit' | 'nothing' | undefined, 'deposit' | 'nothing'>;
 }
 
 export interface RecurringHoursTable {
@@ -112,6 +114,18 @@ export interface ServicesTable {
   step_plan: Json;
   active: Generated<boolean>;
   deposit_cents: Generated<number>;
+  /** numeric, null for a fixed deposit: when set, the deposit is this share of the price. */
+  deposit_percent: ColumnType<string | null, string | number | null | undefined, string | number | null>;
+}
+
+/** A chair or a basin out of service for a period (exactly one of the two ids is set). */
+export interface OutOfServiceTable {
+  id: Generated<string>;
+  salon_id: string;
+  chair_id: string | null;
+  basin_id: string | null;
+  during: Range;
+  reason: Generated<string>;
 }
 
 export interface ClientsTable {
@@ -327,6 +341,7 @@ export interface Database {
   client_photos: ClientPhotosTable;
   mix_logs: MixLogsTable;
   messages: MessagesTable;
+  out_of_service: OutOfServiceTable;
 }
 
 export type MessageStatus = 'queued' | 'sending' | 'sent' | 'failed' | 'dropped';

@@ -15,7 +15,8 @@ import { parseLocalDate } from './local-time';
 import { findOptions } from './options';
 import { buildIndex } from './resource-index';
 import { ScenarioError, fromZodError } from './scenario-error';
-import { ScenarioSchema, type Scenario } from './scenario.schemas';
+import { ScenarioSchema, type Booking, type Scenario } from './scenario.schemas';
+import { freeStylists } from './free-stylists';
 import { listWindows } from './windows';
 
 export type * from './answers';
@@ -105,4 +106,9 @@ export function breakDownOccupancy(scenario: Scenario, cuts: string[]): Occupanc
     return idx.ctx.dayStarts[day - idx.ctx.fromDay];
   });
   return { answer: measure(idx), ...breakDown(idx, at) };
+}
+
+/** Stylists who could take over the given sittings as they stand (see free-stylists.ts). */
+export function findFreeStylists(scenario: Scenario, skill: string, sittings: Booking[]): string[] {
+  return freeStylists(buildIndex(scenario), skill, sittings);
 }

@@ -137,24 +137,27 @@ export function buildIndex(s: Scenario): EngineIndex {
       },
     };
   });
-  const unit = (id: string, busy: Span): UnitIndex => {
+  // Out-of-service periods only shrink what is free: occupancy still counts clients, not closures.
+  const unit = (id: string, busy: Span, closed: Span): UnitIndex => {
     const merged = normalize(busy);
     let free: Span | null = null;
     return {
       id,
       busy: merged,
       get free() {
-        return (free ??= subtract(horizon, merged));
+        return (free ??= subtract(subtract(horizon, merged), closed));
       },
     };
   };
+  const closedOf = (periods: Scenario['chairs'][number]['outOfService'], field: string) =>
+    periods.length === 0 ? [] : expandPeriods(ctx, periods, field);
   return {
     ctx,
     salon,
     stylists,
     stylistById,
-    chairs: s.chairs.map((c, i) => unit(c.id, chairBusy[i])),
-    basins: s.basins.map((b, i) => unit(b.id, basinBusy[i])),
+    chairs: s.chairs.map((c, i) => unit(c.id, chairBusy[i], closedOf(c.outOfService, `chairs[${i}].outOfService`))),
+    basins: s.basins.map((b, i) => unit(b.id, basinBusy[i], closedOf(b.outOfService, `basins[${i}].outOfService`))),
     dayUnits: new Map(),
   };
 }

@@ -15,6 +15,9 @@ const positiveMinutes = z.number().int().positive();
 export const HoursRuleSchema = z.strictObject({ rrule: z.string().min(1), start: clockTime, end: clockTime });
 export const PeriodSchema = z.strictObject({ start: localDateTime, end: localDateTime });
 
+/** A chair or basin; out-of-service periods count as taken for planning (not for occupancy). */
+export const UnitSchema = z.strictObject({ id, outOfService: z.array(PeriodSchema).default([]) });
+
 export const StylistSchema = z.strictObject({
   id,
   skills: z.array(z.string()).default([]),
@@ -76,8 +79,8 @@ export const ScenarioSchema = z.strictObject({
   horizon: z.strictObject({ from: localDate, to: localDate }),
   salonHours: z.array(HoursRuleSchema),
   stylists: z.array(StylistSchema),
-  chairs: z.array(z.strictObject({ id })),
-  basins: z.array(z.strictObject({ id })).default([]),
+  chairs: z.array(UnitSchema),
+  basins: z.array(UnitSchema).default([]),
   bookings: z.array(BookingSchema).default([]),
   request: RequestSchema.optional(),
   fits: z.array(FitSchema).default([]),

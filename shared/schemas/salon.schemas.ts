@@ -13,5 +13,7 @@ export const SalonSchema = z.object({
   skinTestValidityDays: z.number().int(),
   granularityMinutes: z.number().int(),
   cancellationWindowHours: z.number().int(),
+  /** What a cancellation inside the window keeps: the deposit, or nothing. */
+  cancellationKeeps: z.enum(['deposit', 'nothing']),
 });
 export type Salon = z.infer<typeof SalonSchema>;

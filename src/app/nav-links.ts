@@ -15,6 +15,7 @@ export const navLinks: Record<Role, { to: string; label: string }[]> = {
   owner: [
     { to: paths.owner, label: 'Overview' },
     { to: paths.ownerUtilisation, label: 'Utilisation' },
+    { to: paths.ownerSetup, label: 'Set-up' },
     ...deskLinks,
   ],
   front_desk: [...deskLinks, { to: paths.deskUtilisation, label: 'Chair use' }],

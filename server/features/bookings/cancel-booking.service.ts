@@ -10,11 +10,11 @@ import { assertColourBookingsStillAllowed } from './skin-test-dependants';
 
 /**
  * The deposit policy on cancelling: inside the salon's cancellation window before the first sitting the
- * deposit is kept, earlier it is refunded (a 48-hour window is common practice).
+ * deposit is kept (unless the salon keeps nothing), earlier it is refunded (a 48-hour window is common practice).
  */
-export function depositOutcome(depositCents: number, firstStart: Date, now: Date, windowHours: number): 'kept' | 'refunded' | null {
+export function depositOutcome(depositCents: number, firstStart: Date, now: Date, windowHours: number, keeps: Salon['cancellationKeeps'] = 'deposit'): 'kept' | 'refunded' | null {
   if (depositCents <= 0) return null;
-  return firstStart.getTime() - now.getTime() < windowHours * 3_600_000 ? 'kept' : 'refunded';
+  return keeps === 'deposit' && firstStart.getTime() - now.getTime() < windowHours * 3_600_000 ? 'kept' : 'refunded';
 }
 
 export async function cancelBooking(db: Kysely<Database>, salon: Salon, actorUserId: string, bookingId: string, reason: string, now: Date): Promise<void> {
@@ -25,7 +25,7 @@ export async function cancelBooking(db: Kysely<Database>, salon: Salon, actorUse
       throw new AppError('NOT_BOOKABLE', 409, `A ${before.row.status.replace('_', ' ')} booking cannot be cancelled.`);
     }
     const [first] = await sittingStarts(trx, bookingId);
-    const outcome = depositOutcome(before.row.deposit_cents, first, now, salon.cancellationWindowHours);
+    const outcome = depositOutcome(before.row.deposit_cents, first, now, salon.cancellationWindowHours, salon.cancellationKeeps);
     await markCancelled(trx, bookingId, reason, outcome);
     if (before.row.client_id) await assertColourBookingsStillAllowed(trx, salon, before.row.client_id, now);
     const after = await bookingSnapshot(trx, bookingId);

@@ -22,12 +22,14 @@ export async function ownBooking(db: Kysely<Database>, user: SessionUser, id: st
 export async function cancelTerms(db: Kysely<Database>, user: SessionUser, id: string, now: Date) {
   const { hold, salon } = await ownBooking(db, user, id);
   if (hold.status !== 'booked') throw new AppError('NOT_BOOKABLE', 409, 'Only booked appointments can be cancelled here.');
-  const outcome = depositOutcome(hold.deposit_cents, hold.start, now, salon.cancellationWindowHours);
+  const outcome = depositOutcome(hold.deposit_cents, hold.start, now, salon.cancellationWindowHours, salon.cancellationKeeps);
   const amount = formatMoney(hold.deposit_cents, salon.currency);
   const message =
     outcome === 'kept'
       ? `Your appointment is less than ${salon.cancellationWindowHours} hours away, so the ${amount} deposit is kept if you cancel now.`
-      : outcome === 'refunded'
+      : outcome === 'refunded' && salon.cancellationKeeps === 'nothing'
+        ? `The salon refunds the ${amount} deposit whenever you cancel.`
+        : outcome === 'refunded'
         ? `You are cancelling more than ${salon.cancellationWindowHours} hours ahead, so the ${amount} deposit is refunded.`
         : 'There is no deposit on this appointment.';
   return { depositOutcome: outcome, message };

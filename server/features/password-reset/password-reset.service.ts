@@ -14,9 +14,7 @@ export const RESET_VALID_MINUTES = 30;
 export async function requestReset(db: Kysely<Database>, mailer: Mailer, email: string, baseUrl: string): Promise<void> {
   const user = await findUserByEmail(db, email);
   if (!user || !user.active) return;
-  // Only the hash is stored: a leaked table cannot be used to reset anyone's password.
-  const token = randomBytes(32).toString('base64url');
-  await insertReset(db, user.id, sha256(token), new Date(Date.now() + RESET_VALID_MINUTES * 60_000));
+  const token = await issuePasswordToken(db, user.id, RESET_VALID_MINUTES);
   await mailer.send({
     to: user.email,
     subject: 'Reset your Dwell password',
@@ -24,6 +22,14 @@ export async function requestReset(db: Kysely<Database>, mailer: Mailer, email: 
       `Hello ${user.name},\n\nUse this link within ${RESET_VALID_MINUTES} minutes to choose a new password:\n` +
       `${baseUrl}/reset-password?token=${token}\n\nIf you did not ask for this, ignore this e-mail; your password stays as it is.`,
   });
+}
+
+/** A one-time token that lets a user choose a password (reset, or a new member of staff's invitation). */
+export async function issuePasswordToken(db: Kysely<Database>, userId: string, validMinutes: number): Promise<string> {
+  // Only the hash is stored: a leaked table cannot be used to reset anyone's password.
+  const token = randomBytes(32).toString('base64url');
+  await insertReset(db, userId, sha256(token), new Date(Date.now() + validMinutes * 60_000));
+  return token;
 }
 
 export async function confirmReset(db: Kysely<Database>, token: string, password: string): Promise<void> {

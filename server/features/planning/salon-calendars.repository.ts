@@ -29,7 +29,7 @@ export async function loadSalonCalendars(db: Db, salonId: string, horizon: Horiz
   const from = DateTime.fromISO(horizon.from, { zone }).toJSDate();
   const to = DateTime.fromISO(horizon.to, { zone }).toJSDate();
   const range = sql`tstzrange(${from}, ${to}, '[)')`;
-  const [hours, staff, staffHours, timeOff, chairs, basins, steps] = await Promise.all([
+  const [hours, staff, staffHours, timeOff, chairs, basins, steps, closures] = await Promise.all([
     db.selectFrom('salon_hours').select(['rrule', 'start_time', 'end_time']).where('salon_id', '=', salonId).execute(),
     db.selectFrom('staff').select(['id', 'skills', 'max_clients_at_once']).where('salon_id', '=', salonId).where('active', '=', true).orderBy('id').execute(),
     db.selectFrom('staff_hours as h').innerJoin('staff as s', 's.id', 'h.staff_id').select(['h.staff_id', 'h.rrule', 'h.start_time', 'h.end_time']).where('s.salon_id', '=', salonId).execute(),
@@ -55,7 +55,15 @@ export async function loadSalonCalendars(db: Db, salonId: string, horizon: Horiz
         where b.salon_id = ${salonId} and st.live and b.id <> ${except ?? '00000000-0000-0000-0000-000000000000'} and si.during && ${range}
         group by si.id, b.stylist_id, si.chair_id
       ) q`.execute(db),
+    db
+      .selectFrom('out_of_service')
+      .select(['chair_id', 'basin_id', sql<Date>`greatest(lower(during), ${from}::timestamptz)`.as('start'), sql<Date>`least(upper(during), ${to}::timestamptz)`.as('end')])
+      .where('salon_id', '=', salonId)
+      .where(sql<boolean>`during && ${range}`)
+      .execute(),
   ]);
+  const outOfService = (id: string) =>
+    closures.filter((c) => c.chair_id === id || c.basin_id === id).map((c) => ({ start: toLocal(c.start, zone), end: toLocal(c.end, zone) }));
   return {
     timeZone: zone,
     granularityMinutes: salon.granularity_minutes,
@@ -68,8 +76,8 @@ export async function loadSalonCalendars(db: Db, salonId: string, horizon: Horiz
       hours: staffHours.filter((h) => h.staff_id === s.id).map((h) => ({ rrule: h.rrule, start: hhmm(h.start_time), end: hhmm(h.end_time) })),
       timeOff: timeOff.filter((t) => t.staff_id === s.id).map((t) => ({ start: toLocal(t.start, zone), end: toLocal(t.end, zone) })),
     })),
-    chairs: chairs.map((c) => ({ id: c.id })),
-    basins: basins.map((b) => ({ id: b.id })),
+    chairs: chairs.map((c) => ({ id: c.id, outOfService: outOfService(c.id) })),
+    basins: basins.map((b) => ({ id: b.id, outOfService: outOfService(b.id) })),
     bookings: steps.rows[0].bookings,
     fits: [],
   };

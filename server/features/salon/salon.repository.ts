@@ -16,6 +16,7 @@ export async function findSalon(db: Db, id: string): Promise<Salon> {
     skinTestValidityDays: row.skin_test_validity_days,
     granularityMinutes: row.granularity_minutes,
     cancellationWindowHours: row.cancellation_window_hours,
+    cancellationKeeps: row.cancellation_keeps,
   };
 }
 

@@ -6,11 +6,15 @@ type Row = Awaited<ReturnType<typeof baseQuery>>[number];
 const baseQuery = (db: Db, salonId: string) =>
   db
     .selectFrom('services')
-    .select(['id', 'name', 'description', 'category', 'skill', 'price_cents', 'price_is_from', 'deposit_cents', 'online_bookable', 'needs_skin_test', 'step_plan'])
+    .select(['id', 'name', 'description', 'category', 'skill', 'price_cents', 'price_is_from', 'deposit_cents', 'deposit_percent', 'online_bookable', 'needs_skin_test', 'step_plan'])
     .where('salon_id', '=', salonId)
     .where('active', '=', true)
     .orderBy('name')
     .execute();
+
+/** A percentage deposit is a share of the (list) price, rounded to the cent; otherwise the fixed amount. */
+export const effectiveDeposit = (priceCents: number, fixedCents: number, percent: string | null): number =>
+  percent === null ? fixedCents : Math.round((priceCents * Number(percent)) / 100);
 
 const toSummary = (r: Row): ServiceSummary => ({
   id: r.id,
@@ -20,7 +24,7 @@ const toSummary = (r: Row): ServiceSummary => ({
   skill: r.skill,
   priceCents: r.price_cents,
   priceIsFrom: r.price_is_from,
-  depositCents: r.deposit_cents,
+  depositCents: effectiveDeposit(r.price_cents, r.deposit_cents, r.deposit_percent),
   onlineBookable: r.online_bookable,
   needsSkinTest: r.needs_skin_test,
   stepPlan: StepPlanSchema.parse(r.step_plan),

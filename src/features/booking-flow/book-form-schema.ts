@@ -12,6 +12,8 @@ export const BookFormSchema = z.object({
   stepPlan: StepPlanSchema,
 });
 export type BookFormInput = z.input<typeof BookFormSchema>;
+/** Any form holding a step plan under `stepPlan` (a booking's, or a service's on the set-up screens). */
+export type StepPlanFormInput = { stepPlan: z.input<typeof StepPlanSchema> };
 export type BookFormValues = z.output<typeof BookFormSchema>;
 
 export function toOptionsRequest(values: BookFormValues): BookingOptionsRequest {

@@ -2,7 +2,7 @@ import { useFieldArray, useFormContext } from 'react-hook-form';
 import { fieldError } from '../../../lib/form-errors';
 import { Button } from '../../../components/ui/button';
 import { TextField } from '../../../components/ui/text-field';
-import type { BookFormInput } from '../book-form-schema';
+import type { StepPlanFormInput } from '../book-form-schema';
 import { stepOfKind } from '../book-form-schema';
 import { StepRow } from './step-row';
 
@@ -10,7 +10,7 @@ type Props = { index: number; of: number };
 
 /** The steps of one sitting and, from the second sitting on, how many days after the previous one. */
 export function SittingEditor({ index, of }: Props) {
-  const { control, register, formState } = useFormContext<BookFormInput>();
+  const { control, register, formState } = useFormContext<StepPlanFormInput>();
   const base = `stepPlan.sittings.${index}` as const;
   const steps = useFieldArray({ control, name: `${base}.steps` });
   const error = (field: string) => fieldError(formState.errors, `${base}.${field}`);

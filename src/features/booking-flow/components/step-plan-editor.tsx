@@ -1,27 +1,58 @@
 import { useFieldArray, useFormContext } from 'react-hook-form';
 import { sittingMaxMinutes } from '../../../../shared/schemas/step-plan.schemas';
 import { formatMinutes } from '../../../lib/time';
-import type { BookFormInput } from '../book-form-schema';
+import { Button } from '../../../components/ui/button';
+import { stepOfKind, type StepPlanFormInput } from '../book-form-schema';
 import { SittingEditor } from './sitting-editor';
 
-/** The chosen service's step plan, editable for this booking only (the menu keeps its own). */
-export function StepPlanEditor() {
-  const { control, watch } = useFormContext<BookFormInput>();
+type Props = {
+  title?: string;
+  /** The set-up screens may add and remove sittings; a booking keeps its service's sittings. */
+  editSittings?: boolean;
+  defaultOpen?: boolean;
+};
+
+/** A step plan editor: by default the chosen service's plan, for this booking only (the menu keeps its own). */
+export function StepPlanEditor({ title = 'Step plan for this booking', editSittings = false, defaultOpen = false }: Props) {
+  const { control, watch, setValue } = useFormContext<StepPlanFormInput>();
   const sittings = useFieldArray({ control, name: 'stepPlan.sittings' });
   const plan = watch('stepPlan');
   const longest = sittingMaxMinutes({ sittings: plan.sittings.map((s) => ({ ...s, steps: s.steps.map(numberOrZero) })) });
   return (
-    <details className="rounded-xl bg-white ring-1 ring-ink/15" open={false}>
+    <details className="rounded-xl bg-white ring-1 ring-ink/15" open={defaultOpen}>
       <summary className="cursor-pointer px-4 py-3">
-        <span className="font-bold">Step plan for this booking</span>{' '}
+        <span className="font-bold">{title}</span>{' '}
         <span className="text-ink/80">
           — {sittings.fields.length} {sittings.fields.length === 1 ? 'sitting' : 'sittings'}, up to {longest.map(formatMinutes).join(' + ')}. Open to change steps, minutes or days between sittings.
         </span>
       </summary>
       <div className="flex flex-col gap-4 border-t border-ink/10 p-4">
         {sittings.fields.map((field, i) => (
-          <SittingEditor key={field.id} index={i} of={sittings.fields.length} />
+          <div key={field.id} className="flex flex-col gap-2">
+            <SittingEditor index={i} of={sittings.fields.length} />
+            {editSittings && sittings.fields.length > 1 && (
+              <div>
+                <Button
+                  variant="quiet"
+                  onClick={() => {
+                    sittings.remove(i);
+                    // The new first sitting has no "previous" to count days from.
+                    if (i === 0) setValue('stepPlan.sittings.0.daysAfterPrevious', undefined);
+                  }}
+                >
+                  Remove sitting {i + 1}
+                </Button>
+              </div>
+            )}
+          </div>
         ))}
+        {editSittings && sittings.fields.length < 6 && (
+          <div>
+            <Button variant="secondary" onClick={() => sittings.append({ daysAfterPrevious: { min: 7, max: 14 }, steps: [stepOfKind('hands_on')] })}>
+              Add a sitting on another day
+            </Button>
+          </div>
+        )}
       </div>
     </details>
   );

@@ -6,7 +6,7 @@ import { SelectField } from '../../../components/ui/select-field';
 import { StepKindIcon } from '../../../components/ui/step-kind-icon';
 import { TextField } from '../../../components/ui/text-field';
 import { stepKindLabels } from '../../../lib/booking-labels';
-import type { BookFormInput } from '../book-form-schema';
+import type { StepPlanFormInput } from '../book-form-schema';
 import { stepOfKind } from '../book-form-schema';
 
 type Props = {
@@ -22,7 +22,7 @@ const kindOptions = (['hands_on', 'developing', 'basin'] as const).map((kind) =>
 
 /** One editable step: kind, label, minutes (or least–most minutes while developing), order. */
 export function StepRow({ path, number, count, onMove, onRemove, onReplace }: Props) {
-  const { register, watch, getValues, formState } = useFormContext<BookFormInput>();
+  const { register, watch, getValues, formState } = useFormContext<StepPlanFormInput>();
   const step = watch(path);
   const error = (field: string) => fieldError(formState.errors, `${path}.${field}`);
   const name = `step ${number}`;

@@ -1,0 +1,18 @@
+// Paths of the owner's set-up routes; kept beside api-paths.ts so parallel work does not collide there.
+export const setupPaths = {
+  salon: '/api/owner/setup/salon',
+  staff: '/api/owner/setup/staff',
+  staffMember: (id: string) => `/api/owner/setup/staff/${id}`,
+  staffTimeOff: (id: string) => `/api/owner/setup/staff/${id}/time-off`,
+  staffTimeOffEntry: (id: string, entryId: string) => `/api/owner/setup/staff/${id}/time-off/${entryId}`,
+  staffBookings: (id: string) => `/api/owner/setup/staff/${id}/future-bookings`,
+  staffReassign: (id: string) => `/api/owner/setup/staff/${id}/reassign`,
+  staffDeactivate: (id: string) => `/api/owner/setup/staff/${id}/deactivate`,
+  units: '/api/owner/setup/units',
+  unitsOf: (kind: 'chairs' | 'basins') => `/api/owner/setup/units/${kind}`,
+  unit: (kind: 'chairs' | 'basins', id: string) => `/api/owner/setup/units/${kind}/${id}`,
+  unitAffected: (kind: 'chairs' | 'basins', id: string, from: string, to: string) => `/api/owner/setup/units/${kind}/${id}/affected?from=${from}&to=${to}`,
+  unitOutOfService: (kind: 'chairs' | 'basins', id: string) => `/api/owner/setup/units/${kind}/${id}/out-of-service`,
+  services: '/api/owner/setup/services',
+  service: (id: string) => `/api/owner/setup/services/${id}`,
+} as const;

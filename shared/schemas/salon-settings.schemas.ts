@@ -1,0 +1,38 @@
+import { z } from 'zod';
+import { isKnownZone } from '../engine/local-time';
+import { ClockTimeSchema, HoursListSchema } from './hours-rule.schemas';
+
+const whole = (min: number, max: number, what: string) =>
+  z.number({ error: `Enter ${what}` }).int(`Enter whole ${what}`).min(min, `At least ${min}`).max(max, `At most ${max}`);
+
+/**
+ * Everything about how the salon works that the owner sets: the same schema checks the set-up form
+ * and the server.
+ */
+export const SalonSettingsSchema = z
+  .object({
+    name: z.string().trim().min(1, 'Enter the salon name').max(120),
+    address: z.string().trim().max(300),
+    phone: z.string().trim().max(40),
+    // IANA time-zone database names, e.g. America/Denver (checked against the zone data luxon reads).
+    timeZone: z.string().trim().refine(isKnownZone, 'Use a time-zone name like America/Denver or Europe/Berlin'),
+    currency: z.string().trim().regex(/^[A-Z]{3}$/, 'Use a three-letter ISO 4217 code like USD or EUR'),
+    hours: HoursListSchema,
+    skinTestLeadHours: whole(0, 720, 'hours'),
+    skinTestValidityDays: whole(1, 3650, 'days'),
+    holdMinutes: whole(1, 120, 'minutes'),
+    cancellationWindowHours: whole(0, 720, 'hours'),
+    cancellationKeeps: z.enum(['deposit', 'nothing']),
+    quietFrom: ClockTimeSchema,
+    quietTo: ClockTimeSchema,
+    reminderOffsetsHours: z
+      .array(whole(1, 336, 'hours'))
+      .max(4, 'At most four reminders')
+      .refine((list) => new Set(list).size === list.length, 'Each reminder needs its own time'),
+    // EU Regulation 1223/2009 Annex III entry 12: hydrogen peroxide in hair products at most 12 %.
+    maxDeveloperPercent: z.number({ error: 'Enter a percentage' }).gt(0, 'More than 0').max(12, 'At most 12 % (EU Regulation 1223/2009, Annex III)'),
+  })
+  .strict()
+  .refine((s) => s.quietFrom !== s.quietTo, { message: 'Quiet hours must start and end at different times', path: ['quietTo'] });
+export type SalonSettings = z.infer<typeof SalonSettingsSchema>;
+export type SalonSettingsInput = z.input<typeof SalonSettingsSchema>;

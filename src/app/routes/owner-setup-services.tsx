@@ -1,0 +1,35 @@
+import { useSuspenseQuery } from '@tanstack/react-query';
+import { Link } from 'react-router-dom';
+import { buttonClasses } from '../../components/ui/button';
+import { PageHeader } from '../../components/ui/page-header';
+import { paths } from '../../config/paths';
+import { salonQueries } from '../../features/salon/api/salon-queries';
+import { setupQueries } from '../../features/setup/api/setup-queries';
+import { ServicesTable } from '../../features/setup/components/services-table';
+import { SetupNav } from '../../features/setup/components/setup-nav';
+import { queryClient } from '../../lib/query-client';
+
+export async function loader() {
+  await Promise.all([queryClient.ensureQueryData(setupQueries.services()), queryClient.ensureQueryData(salonQueries.current())]);
+  return null;
+}
+
+export function Component() {
+  const { data } = useSuspenseQuery(setupQueries.services());
+  const { data: salon } = useSuspenseQuery(salonQueries.current());
+  return (
+    <div>
+      <PageHeader
+        title="Set-up"
+        subtitle="Services and their step plans. Changing a service never changes bookings already made."
+        action={
+          <Link to={paths.ownerSetupService('new')} className={buttonClasses('primary')}>
+            Add a service
+          </Link>
+        }
+      />
+      <SetupNav />
+      <ServicesTable services={data.services} currency={salon.currency} />
+    </div>
+  );
+}

@@ -1,0 +1,114 @@
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useState } from 'react';
+import { Controller, FormProvider, useForm } from 'react-hook-form';
+import { SalonSettingsSchema, type SalonSettings, type SalonSettingsInput } from '../../../../shared/schemas/salon-settings.schemas';
+import { Button } from '../../../components/ui/button';
+import { FormAlert } from '../../../components/ui/form-alert';
+import { SectionCard } from '../../../components/ui/section-card';
+import { SelectField } from '../../../components/ui/select-field';
+import { TextField } from '../../../components/ui/text-field';
+import { fieldError, showServerErrors } from '../../../lib/form-errors';
+import { useSaveSalonSettings } from '../api/setup-mutations';
+import { HoursLines } from './hours-lines';
+
+const zones = typeof Intl.supportedValuesOf === 'function' ? Intl.supportedValuesOf('timeZone') : [];
+const fieldNames = ['name', 'address', 'phone', 'timeZone', 'currency', 'hours', 'skinTestLeadHours', 'skinTestValidityDays', 'holdMinutes', 'cancellationWindowHours', 'quietFrom', 'quietTo', 'reminderOffsetsHours', 'maxDeveloperPercent'] as const;
+
+/** Everything about how the salon works, in one form checked by the same schema as the server. */
+export function SalonSettingsForm({ settings }: { settings: SalonSettings }) {
+  const save = useSaveSalonSettings();
+  const [saved, setSaved] = useState(false);
+  const form = useForm<SalonSettingsInput, unknown, SalonSettings>({ resolver: zodResolver(SalonSettingsSchema), defaultValues: settings });
+  const { errors } = form.formState;
+  const err = (name: string) => fieldError(errors, name);
+  const num = { valueAsNumber: true } as const;
+  const submit = form.handleSubmit((body) => {
+    setSaved(false);
+    return save.mutateAsync(body).then(
+      (next) => {
+        form.reset(next);
+        setSaved(true);
+      },
+      (error) => showServerErrors(error, form.setError, fieldNames),
+    );
+  });
+  const zone = form.watch('timeZone');
+  return (
+    <FormProvider {...form}>
+      <form aria-label="Salon settings" noValidate onSubmit={submit} className="flex flex-col gap-6">
+        {saved && <FormAlert tone="success">The salon settings are saved. New bookings follow them from now on.</FormAlert>}
+        {errors.root?.server && <FormAlert>{errors.root.server.message}</FormAlert>}
+        <SectionCard title="The salon">
+          <div className="grid gap-4 md:grid-cols-2">
+            <TextField label="Name" error={err('name')} {...form.register('name')} />
+            <TextField label="Phone" error={err('phone')} {...form.register('phone')} />
+            <TextField label="Address" className="md:col-span-2" error={err('address')} {...form.register('address')} />
+            <TextField label="Time zone" hint="An IANA name, e.g. America/Denver" list="setup-time-zones" error={err('timeZone')} {...form.register('timeZone')} />
+            <datalist id="setup-time-zones">
+              {zones.map((z) => (
+                <option key={z} value={z} />
+              ))}
+            </datalist>
+            <TextField label="Currency" hint="ISO 4217 code, e.g. USD" className="w-40" error={err('currency')} {...form.register('currency', { setValueAs: (v: string) => v.toUpperCase() })} />
+          </div>
+        </SectionCard>
+        <SectionCard title="Opening hours">
+          <HoursLines name="hours" timeZone={zone || settings.timeZone} />
+        </SectionCard>
+        <SectionCard title="Bookings, deposits and cancelling">
+          <div className="grid gap-4 md:grid-cols-2">
+            <TextField label="Skin test at least this many hours before colour" type="number" error={err('skinTestLeadHours')} {...form.register('skinTestLeadHours', num)} />
+            <TextField label="A negative skin test stays valid for (days)" type="number" error={err('skinTestValidityDays')} {...form.register('skinTestValidityDays', num)} />
+            <TextField label="Online hold lasts (minutes)" type="number" error={err('holdMinutes')} {...form.register('holdMinutes', num)} />
+            <TextField label="Cancellation window (hours before the first sitting)" type="number" error={err('cancellationWindowHours')} {...form.register('cancellationWindowHours', num)} />
+            <SelectField
+              label="A cancellation inside the window keeps"
+              options={[
+                { value: 'deposit', label: 'The deposit' },
+                { value: 'nothing', label: 'Nothing: the deposit is always refunded' },
+              ]}
+              {...form.register('cancellationKeeps')}
+            />
+            <p className="self-end text-sm text-ink/80">Each service sets its own deposit (fixed or a share of the price) on the Services page.</p>
+          </div>
+        </SectionCard>
+        <SectionCard title="Messages">
+          <div className="grid gap-4 md:grid-cols-3">
+            <TextField label="No text messages from" type="time" error={err('quietFrom')} {...form.register('quietFrom')} />
+            <TextField label="Until" type="time" error={err('quietTo')} {...form.register('quietTo')} />
+            <Controller
+              control={form.control}
+              name="reminderOffsetsHours"
+              render={({ field }) => (
+                <TextField
+                  label="Reminders, hours before"
+                  hint="Up to four, separated by commas, e.g. 48, 24"
+                  error={err('reminderOffsetsHours') ?? err('reminderOffsetsHours.0')}
+                  defaultValue={field.value.join(', ')}
+                  onBlur={field.onBlur}
+                  onChange={(e) => field.onChange(e.target.value.split(',').map((p) => p.trim()).filter(Boolean).map(Number))}
+                />
+              )}
+            />
+          </div>
+        </SectionCard>
+        <SectionCard title="Colour safety">
+          <TextField
+            label="Highest developer strength allowed (% hydrogen peroxide)"
+            hint="EU Regulation 1223/2009, Annex III allows at most 12 % in hair products; follow your local regulations and licensed practice."
+            type="number"
+            step="0.1"
+            className="max-w-md"
+            error={err('maxDeveloperPercent')}
+            {...form.register('maxDeveloperPercent', num)}
+          />
+        </SectionCard>
+        <div>
+          <Button type="submit" busy={save.isPending}>
+            Save salon settings
+          </Button>
+        </div>
+      </form>
+    </FormProvider>
+  );
+}

@@ -1,0 +1,112 @@
+import { zodResolver } from '@hookform/resolvers/zod';
+import { FormProvider, useForm } from 'react-hook-form';
+import { useNavigate } from 'react-router-dom';
+import { ServiceInputSchema, type ServiceFormInput, type ServiceInput } from '../../../../shared/schemas/setup.schemas';
+import { Button } from '../../../components/ui/button';
+import { FormAlert } from '../../../components/ui/form-alert';
+import { SectionCard } from '../../../components/ui/section-card';
+import { SelectField } from '../../../components/ui/select-field';
+import { TextField } from '../../../components/ui/text-field';
+import { TextAreaField } from '../../../components/ui/text-area-field';
+import { paths } from '../../../config/paths';
+import { fieldError, showServerErrors } from '../../../lib/form-errors';
+import { StepPlanEditor } from '../../booking-flow/components/step-plan-editor';
+import { useRetireService, useSaveService } from '../api/setup-mutations';
+import { MoneyField } from './money-field';
+
+type Props = { id: string | null; initial: ServiceFormInput; skills: string[]; currency: string; active: boolean };
+
+const categories = [
+  { value: 'colour', label: 'Colour' },
+  { value: 'cut', label: 'Cut' },
+  { value: 'treatment', label: 'Treatment' },
+  { value: 'consultation', label: 'Consultation' },
+  { value: 'skin_test', label: 'Skin test' },
+];
+const fieldNames = ['name', 'description', 'category', 'skill', 'priceCents', 'depositCents', 'depositPercent', 'stepPlan'] as const;
+
+/** A service on the menu: what it is, what it costs and takes as deposit, and its step plan. */
+export function ServiceForm({ id, initial, skills, currency, active }: Props) {
+  const save = useSaveService();
+  const retire = useRetireService();
+  const navigate = useNavigate();
+  const form = useForm<ServiceFormInput, unknown, ServiceInput>({ resolver: zodResolver(ServiceInputSchema), defaultValues: initial });
+  const { errors } = form.formState;
+  const err = (name: string) => fieldError(errors, name);
+  const depositKind = form.watch('depositKind');
+  const submit = form.handleSubmit((body) =>
+    save.mutateAsync({ id, body }).then(
+      () => navigate(paths.ownerSetupServices),
+      (error) => showServerErrors(error, form.setError, fieldNames),
+    ),
+  );
+  return (
+    <FormProvider {...form}>
+      <form aria-label="Service" noValidate onSubmit={submit} className="flex flex-col gap-6">
+        {errors.root?.server && <FormAlert>{errors.root.server.message}</FormAlert>}
+        {retire.isError && <FormAlert>{retire.error.message}</FormAlert>}
+        <SectionCard title="The service">
+          <div className="grid gap-4 md:grid-cols-2">
+            <TextField label="Name" error={err('name')} {...form.register('name')} />
+            <SelectField label="Kind of service" options={categories} error={err('category')} {...form.register('category')} />
+            <TextAreaField label="Description" className="md:col-span-2" error={err('description')} {...form.register('description')} />
+            <TextField label="Skill needed" hint="Stylists with this skill can take it" list="setup-skills" error={err('skill')} {...form.register('skill')} />
+            <datalist id="setup-skills">
+              {skills.map((s) => (
+                <option key={s} value={s} />
+              ))}
+            </datalist>
+            <div className="flex flex-col gap-2 self-end">
+              <label className="flex min-h-11 items-center gap-2">
+                <input type="checkbox" className="size-5" {...form.register('onlineBookable')} /> Clients may book it online
+              </label>
+              <label className="flex min-h-11 items-center gap-2">
+                <input type="checkbox" className="size-5" {...form.register('needsSkinTest')} /> Needs a negative skin test first (oxidative colour)
+              </label>
+            </div>
+          </div>
+        </SectionCard>
+        <SectionCard title="Price and deposit">
+          <div className="grid gap-4 md:grid-cols-3">
+            <MoneyField name="priceCents" label="Price" currency={currency} />
+            <label className="flex min-h-11 items-center gap-2 self-end">
+              <input type="checkbox" className="size-5" {...form.register('priceIsFrom')} /> Price is a starting price (“from”)
+            </label>
+            <span />
+            <SelectField
+              label="Deposit"
+              options={[
+                { value: 'fixed', label: 'A fixed amount' },
+                { value: 'percent', label: 'A share of the price' },
+              ]}
+              {...form.register('depositKind')}
+            />
+            {depositKind === 'percent' ? (
+              <TextField
+                label="Deposit (% of the price)"
+                type="number"
+                step="1"
+                error={err('depositPercent')}
+                {...form.register('depositPercent', { setValueAs: (v: string | number | null) => (v === '' || v === null ? null : Number(v)) })}
+              />
+            ) : (
+              <MoneyField name="depositCents" label="Deposit amount" currency={currency} hint="0 for no deposit" />
+            )}
+          </div>
+        </SectionCard>
+        <StepPlanEditor title="Step plan" editSittings defaultOpen />
+        {err('stepPlan.sittings') && <p className="font-bold text-brick">{err('stepPlan.sittings')}</p>}
+        <div className="flex flex-wrap gap-3">
+          <Button type="submit" busy={save.isPending}>
+            {id ? 'Save the service' : 'Add the service'}
+          </Button>
+          {id && active && (
+            <Button variant="secondary" busy={retire.isPending} onClick={() => retire.mutate(id, { onSuccess: () => navigate(paths.ownerSetupServices) })}>
+              Take off the menu
+            </Button>
+          )}
+        </div>
+      </form>
+    </FormProvider>
+  );
+}

@@ -1,0 +1,40 @@
+import { createColumnHelper } from '@tanstack/react-table';
+import { Link } from 'react-router-dom';
+import { sittingMaxMinutes } from '../../../../shared/schemas/step-plan.schemas';
+import type { SetupService } from '../../../../shared/schemas/setup.schemas';
+import { DataTable } from '../../../components/ui/data-table';
+import { paths } from '../../../config/paths';
+import { formatMoney } from '../../../lib/booking-labels';
+import { formatMinutes } from '../../../lib/time';
+
+const col = createColumnHelper<SetupService>();
+
+const columns = (currency: string) => [
+  col.accessor('name', {
+    header: 'Service',
+    cell: (c) => (
+      <Link to={paths.ownerSetupService(c.row.original.id)} className="font-bold text-link">
+        {c.getValue()}
+      </Link>
+    ),
+  }),
+  col.accessor('category', { header: 'Kind' }),
+  col.accessor('skill', { header: 'Skill needed' }),
+  col.accessor((s) => sittingMaxMinutes(s.stepPlan).reduce((a, b) => a + b, 0), {
+    id: 'chairTime',
+    header: 'Chair time (most)',
+    cell: (c) => `${c.row.original.stepPlan.sittings.length > 1 ? `${c.row.original.stepPlan.sittings.length} sittings, ` : ''}${formatMinutes(c.getValue())}`,
+  }),
+  col.accessor('priceCents', { header: 'Price', cell: (c) => `${c.row.original.priceIsFrom ? 'from ' : ''}${formatMoney(c.getValue(), currency)}` }),
+  col.accessor('depositCents', {
+    header: 'Deposit',
+    cell: (c) => (c.row.original.depositPercent !== null ? `${c.row.original.depositPercent} % (${formatMoney(c.getValue(), currency)})` : c.getValue() ? formatMoney(c.getValue(), currency) : 'none'),
+  }),
+  col.accessor((s) => [s.onlineBookable ? 'online' : '', s.needsSkinTest ? 'skin test' : ''].filter(Boolean).join(', '), { id: 'flags', header: 'Online · skin test' }),
+  col.accessor('futureBookings', { header: 'Future bookings' }),
+  col.accessor((s) => (s.active ? 'on the menu' : 'retired'), { id: 'status', header: 'Status' }),
+];
+
+export function ServicesTable({ services, currency }: { services: SetupService[]; currency: string }) {
+  return <DataTable label="Services" rows={services} columns={columns(currency)} filterHint="Name, kind, skill…" initialSort={[{ id: 'name', desc: false }]} empty="No services yet." />;
+}

@@ -1,0 +1,52 @@
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useForm } from 'react-hook-form';
+import { TimeOffInputSchema, type StaffMember, type TimeOffInput } from '../../../../shared/schemas/setup.schemas';
+import { Button } from '../../../components/ui/button';
+import { FormAlert } from '../../../components/ui/form-alert';
+import { TextField } from '../../../components/ui/text-field';
+import { showServerErrors } from '../../../lib/form-errors';
+import { formatDay } from '../../../lib/time';
+import { useAddTimeOff, useRemoveTimeOff } from '../api/setup-mutations';
+
+/** Whole days off for a stylist, in salon time; planning leaves those days out. */
+export function TimeOffPanel({ member, timeZone }: { member: StaffMember; timeZone: string }) {
+  const add = useAddTimeOff();
+  const remove = useRemoveTimeOff();
+  const form = useForm<TimeOffInput>({ resolver: zodResolver(TimeOffInputSchema), defaultValues: { from: '', to: '', reason: '' } });
+  const { errors } = form.formState;
+  const submit = form.handleSubmit((body) =>
+    add.mutateAsync({ id: member.id, body }).then(
+      () => form.reset(),
+      (error) => showServerErrors(error, form.setError, ['from', 'to', 'reason']),
+    ),
+  );
+  // The end is exclusive (midnight after the last day), so the last day is the one before it.
+  const lastDay = (iso: string) => formatDay(new Date(new Date(iso).getTime() - 60_000).toISOString(), timeZone);
+  return (
+    <div className="flex flex-col gap-3">
+      {member.timeOff.length === 0 ? (
+        <p>No time off ahead.</p>
+      ) : (
+        <ul aria-label={`Time off of ${member.details.name}`} className="flex flex-col gap-2">
+          {member.timeOff.map((t) => (
+            <li key={t.id} className="flex flex-wrap items-center gap-3">
+              {formatDay(t.start, timeZone)} – {lastDay(t.end)} {t.reason && `· ${t.reason}`}
+              <Button variant="quiet" onClick={() => remove.mutate({ id: member.id, entryId: t.id })}>
+                Remove
+              </Button>
+            </li>
+          ))}
+        </ul>
+      )}
+      <form aria-label={`Add time off for ${member.details.name}`} noValidate onSubmit={submit} className="flex flex-wrap items-end gap-3">
+        {errors.root?.server && <FormAlert>{errors.root.server.message}</FormAlert>}
+        <TextField label="First day off" type="date" error={errors.from?.message} {...form.register('from')} />
+        <TextField label="Last day off" type="date" error={errors.to?.message} {...form.register('to')} />
+        <TextField label="Reason (optional)" error={errors.reason?.message} {...form.register('reason')} />
+        <Button type="submit" variant="secondary" busy={add.isPending}>
+          Add time off
+        </Button>
+      </form>
+    </div>
+  );
+}

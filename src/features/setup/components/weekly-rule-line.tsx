@@ -1,0 +1,129 @@
+import { DateTime } from 'luxon';
+import { useId, useState } from 'react';
+import { useFormContext } from 'react-hook-form';
+import { composeWeeklyRule, nextDates, readWeeklyRule, WEEKDAY_CODES, type WeeklyRule } from '../../../../shared/engine/weekly-rule';
+import { Button } from '../../../components/ui/button';
+import { TextField } from '../../../components/ui/text-field';
+import { fieldError } from '../../../lib/form-errors';
+import { todayIn } from '../../../lib/time';
+
+const dayNames: Record<(typeof WEEKDAY_CODES)[number], string> = { MO: 'Mon', TU: 'Tue', WE: 'Wed', TH: 'Thu', FR: 'Fri', SA: 'Sat', SU: 'Sun' };
+const shortDate = (date: string) => DateTime.fromISO(date).toFormat('ccc d LLL yyyy');
+
+type Props = { path: string; number: number; timeZone: string; onRemove?: () => void };
+
+/**
+ * One line of hours: which days (weekdays, every other week, closed dates) and from when to when.
+ * The day picker writes the RFC 5545 text below it, which can also be edited by hand; the preview lists
+ * the next dates the text falls on.
+ */
+export function WeeklyRuleLine({ path, number, timeZone, onRemove }: Props) {
+  const { register, watch, setValue, formState } = useFormContext();
+  const text: string = watch(`${path}.rrule`) ?? '';
+  const rule = readWeeklyRule(text);
+  const [closedDraft, setClosedDraft] = useState('');
+  const closedId = useId();
+  const error = (field: string) => fieldError(formState.errors, `${path}.${field}`);
+  const write = (next: WeeklyRule) =>
+    setValue(`${path}.rrule`, next.weekdays.length ? composeWeeklyRule(next) : '', { shouldDirty: true, shouldValidate: formState.isSubmitted });
+  let preview: string[] = [];
+  try {
+    preview = text ? nextDates(text, timeZone, todayIn(timeZone), 6) : [];
+  } catch {
+    preview = []; // the rule's own error says why
+  }
+  const blank: WeeklyRule = { weekdays: [], everyOtherWeek: false, startsOn: null, closedDates: [] };
+  const shown = rule ?? (text ? null : blank);
+  return (
+    <fieldset className="flex flex-col gap-3 rounded-xl p-4 ring-1 ring-ink/15">
+      <legend className="px-1 font-bold">Hours line {number}</legend>
+      {shown ? (
+        <>
+          <div role="group" aria-label={`Days of hours line ${number}`} className="flex flex-wrap gap-2">
+            {WEEKDAY_CODES.map((code) => {
+              const on = shown.weekdays.includes(code);
+              return (
+                <button
+                  key={code}
+                  type="button"
+                  aria-pressed={on}
+                  onClick={() => write({ ...shown, weekdays: on ? shown.weekdays.filter((d) => d !== code) : [...shown.weekdays, code] })}
+                  className="min-h-11 min-w-14 rounded-lg border border-ink/30 bg-white px-3 hover:border-ink/60 aria-pressed:border-2 aria-pressed:border-oxide aria-pressed:bg-linen aria-pressed:font-bold"
+                >
+                  {dayNames[code]}
+                </button>
+              );
+            })}
+          </div>
+          <div className="flex flex-wrap items-end gap-4">
+            <label className="flex min-h-11 items-center gap-2">
+              <input
+                type="checkbox"
+                className="size-5"
+                checked={shown.everyOtherWeek}
+                onChange={(e) => write({ ...shown, everyOtherWeek: e.target.checked, startsOn: shown.startsOn ?? todayIn(timeZone) })}
+              />
+              Every other week
+            </label>
+            {shown.everyOtherWeek && (
+              <TextField
+                label="Counting from the week of"
+                type="date"
+                value={shown.startsOn ?? ''}
+                onChange={(e) => write({ ...shown, startsOn: e.target.value || null })}
+              />
+            )}
+          </div>
+          <div className="flex flex-wrap items-end gap-3">
+            <TextField id={closedId} label="Closed on (holiday or exception)" type="date" value={closedDraft} onChange={(e) => setClosedDraft(e.target.value)} />
+            <Button
+              variant="secondary"
+              disabled={!closedDraft}
+              onClick={() => {
+                write({ ...shown, closedDates: [...shown.closedDates, closedDraft] });
+                setClosedDraft('');
+              }}
+            >
+              Add closed date
+            </Button>
+          </div>
+          {shown.closedDates.length > 0 && (
+            <ul aria-label={`Closed dates of hours line ${number}`} className="flex flex-wrap gap-2">
+              {shown.closedDates.map((date) => (
+                <li key={date} className="flex items-center gap-1 rounded-lg bg-linen px-3 py-1">
+                  {shortDate(date)}
+                  <Button variant="quiet" aria-label={`Open again on ${shortDate(date)}`} onClick={() => write({ ...shown, closedDates: shown.closedDates.filter((d) => d !== date) })}>
+                    ✕
+                  </Button>
+                </li>
+              ))}
+            </ul>
+          )}
+        </>
+      ) : (
+        <p className="text-sm">This rule uses more than weekdays; edit its text below.</p>
+      )}
+      <div className="flex flex-wrap gap-3">
+        <TextField label="Opens" aria-label={`Opening time of hours line ${number}`} type="time" className="w-36" error={error('start')} {...register(`${path}.start`)} />
+        <TextField label="Closes" aria-label={`Closing time of hours line ${number}`} type="time" className="w-36" error={error('end')} {...register(`${path}.end`)} />
+      </div>
+      <TextField
+        label="Rule (RFC 5545 text)"
+        aria-label={`Rule of hours line ${number}`}
+        hint="Written by the day picker; edit by hand for anything else, e.g. FREQ=MONTHLY;BYDAY=1SA"
+        error={error('rrule')}
+        {...register(`${path}.rrule`)}
+      />
+      <div aria-live="polite" className="text-sm">
+        <span className="font-bold">Next dates:</span> {preview.length ? preview.map(shortDate).join(' · ') : 'none in the coming year'}
+      </div>
+      {onRemove && (
+        <div>
+          <Button variant="quiet" onClick={onRemove}>
+            Remove hours line {number}
+          </Button>
+        </div>
+      )}
+    </fieldset>
+  );
+}
