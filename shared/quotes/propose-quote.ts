@@ -65,34 +65,24 @@ export const BASE_GRAMS: Record<ProductType, number> = {
 /** Which steps a sitting gets, before minutes are scaled. */
 type Stage = 'removal' | 'lightening' | 'toning' | 'fill' | 'colour' | 'finish' | 'cut_finish';
 
+/** Apply, develop and (usually) rinse: the shape of every chemical stage. */
+function chemical(apply: [string, number], develop: [string, number, number], rinse?: [string, number]): PlannedStep[] {
+  const steps: PlannedStep[] = [
+    { kind: 'hands_on', label: apply[0], minutes: apply[1] },
+    { kind: 'developing', label: develop[0], minMinutes: develop[1], maxMinutes: develop[2] },
+  ];
+  return rinse ? [...steps, { kind: 'basin', label: rinse[0], minutes: rinse[1] }] : steps;
+}
+
 // Base minutes (medium length and density). CP, from trade practice (processing times: permanent 30–45 min,
 // lightener off within about 45–50 min, toner 10–20 min, remover 20–60 min per application then a long rinse;
 // cut 30–60 min, blow-dry 30–45 min). The product's own instructions override these.
 const STAGE_STEPS: Record<Stage, PlannedStep[]> = {
-  removal: [
-    { kind: 'hands_on', label: 'Apply colour remover', minutes: 30 },
-    { kind: 'developing', label: 'Remover processes', minMinutes: 20, maxMinutes: 40 },
-    { kind: 'basin', label: 'Rinse remover', minutes: 20 },
-  ],
-  lightening: [
-    { kind: 'hands_on', label: 'Apply lightener', minutes: 50 },
-    { kind: 'developing', label: 'Lightener lifts', minMinutes: 30, maxMinutes: 50 },
-    { kind: 'basin', label: 'Rinse lightener', minutes: 15 },
-  ],
-  toning: [
-    { kind: 'hands_on', label: 'Apply toner', minutes: 15 },
-    { kind: 'developing', label: 'Toner develops', minMinutes: 10, maxMinutes: 20 },
-    { kind: 'basin', label: 'Rinse toner', minutes: 10 },
-  ],
-  fill: [
-    { kind: 'hands_on', label: 'Apply filler (pre-pigment)', minutes: 20 },
-    { kind: 'developing', label: 'Filler develops', minMinutes: 10, maxMinutes: 20 },
-  ],
-  colour: [
-    { kind: 'hands_on', label: 'Apply colour', minutes: 30 },
-    { kind: 'developing', label: 'Colour develops', minMinutes: 30, maxMinutes: 45 },
-    { kind: 'basin', label: 'Rinse and condition', minutes: 15 },
-  ],
+  removal: chemical(['Apply colour remover', 30], ['Remover processes', 20, 40], ['Rinse remover', 20]),
+  lightening: chemical(['Apply lightener', 50], ['Lightener lifts', 30, 50], ['Rinse lightener', 15]),
+  toning: chemical(['Apply toner', 15], ['Toner develops', 10, 20], ['Rinse toner', 10]),
+  fill: chemical(['Apply filler (pre-pigment)', 20], ['Filler develops', 10, 20]),
+  colour: chemical(['Apply colour', 30], ['Colour develops', 30, 45], ['Rinse and condition', 15]),
   finish: [{ kind: 'hands_on', label: 'Blow-dry', minutes: 35 }],
   cut_finish: [{ kind: 'hands_on', label: 'Cut and finish', minutes: 60 }],
 };
