@@ -29,6 +29,7 @@ export interface SalonsTable {
   /** numeric: pg returns it as a string. */
   max_developer_percent: ColumnType<string, string | number | undefined, string | number>;
   created_at: DefaultTimestamp;
+  correction_cents_per_hour: Generated<number>;
 }
 
 export interface RecurringHoursTable {
@@ -144,6 +145,7 @@ export interface BookingsTable {
   created_at: DefaultTimestamp;
   /** Bumped on every move, so messages planned for older times can be told apart. */
   version: Generated<number>;
+  quote_id: ColumnType<string | null, string | null | undefined, string | null>;
 }
 
 export interface SittingsTable {
@@ -327,6 +329,46 @@ export interface Database {
   client_photos: ClientPhotosTable;
   mix_logs: MixLogsTable;
   messages: MessagesTable;
+  product_costs: ProductCostsTable;
+  consultations: ConsultationsTable;
+  consultation_photos: ConsultationPhotosTable;
+  quotes: QuotesTable;
+}
+
+/** Consultations and their quotes (migrations/20261203T0700). */
+export interface ProductCostsTable {
+  salon_id: string;
+  product_type: 'lightener' | 'remover' | 'permanent' | 'demi_permanent' | 'direct_dye' | 'toner' | 'bond_builder';
+  /** numeric: pg returns it as a string. */
+  cents_per_gram: ColumnType<string, string | number, string | number>;
+}
+export interface ConsultationsTable {
+  id: Generated<string>;
+  salon_id: string;
+  client_id: string;
+  details: Json;
+  created_by: string | null;
+  created_at: DefaultTimestamp;
+}
+export interface ConsultationPhotosTable {
+  consultation_id: string;
+  photo_id: string;
+}
+export interface QuotesTable {
+  id: Generated<string>;
+  salon_id: string;
+  consultation_id: string;
+  client_id: string;
+  service_id: string;
+  step_plan: Json;
+  price_cents: number;
+  deposit_cents: number;
+  notes: Generated<string>;
+  warnings: ColumnType<unknown, string | undefined, string>;
+  status: ColumnType<'draft' | 'sent' | 'accepted', 'draft' | 'sent' | 'accepted' | undefined, 'draft' | 'sent' | 'accepted'>;
+  sent_at: ColumnType<Date | null, Date | null | undefined, Date | null>;
+  accepted_at: ColumnType<Date | null, Date | null | undefined, Date | null>;
+  updated_at: DefaultTimestamp;
 }
 
 export type MessageStatus = 'queued' | 'sending' | 'sent' | 'failed' | 'dropped';
