@@ -4,6 +4,8 @@ import { IdSchema } from '../../../shared/schemas/common.schemas';
 import { PageHeader } from '../../components/ui/page-header';
 import { TimeZoneNote } from '../../components/ui/time-zone-note';
 import { paths } from '../../config/paths';
+import { SectionCard } from '../../components/ui/section-card';
+import { ClientConsultations } from '../../features/consultations/components/client-consultations';
 import { BookingList } from '../../features/bookings/components/booking-list';
 import { clientQueries } from '../../features/clients/api/client-queries';
 import { ClientProfile } from '../../features/clients/components/client-profile';
@@ -31,6 +33,9 @@ export function Component() {
       </Link>
       <PageHeader title={client.name} subtitle={<TimeZoneNote timeZone={salon.timeZone} />} />
       <ClientProfile client={client} />
+      <SectionCard title="Consultations and quotes">
+        <ClientConsultations clientId={client.id} timeZone={salon.timeZone} currency={salon.currency} />
+      </SectionCard>
       <BookingList bookings={client.bookings} timeZone={salon.timeZone} currency={salon.currency} />
     </div>
   );
