@@ -1,4 +1,4 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import { signedInAgent, startTestApp, type TestApp } from '../setup/test-app';
 import { insertSalon, type SalonFixture } from '../factories/salon';
 import { insertUser, type UserFixture } from '../factories/user';
@@ -13,6 +13,7 @@ let other: UserFixture;
 let serviceId: string;
 let stylist$: Awaited<ReturnType<typeof signedInAgent>>;
 let desk$: Awaited<ReturnType<typeof signedInAgent>>;
+let client$: Awaited<ReturnType<typeof signedInAgent>>;
 const tuesday = futureWeekday(2, 3);
 
 const virgin = { natural: true, permanent: false, directDye: false, boxDye: false, henna: false, previousLightening: false };
@@ -35,6 +36,7 @@ beforeAll(async () => {
   await db.insertInto('product_costs').values({ salon_id: salon.salonId, product_type: 'permanent', cents_per_gram: 5 }).execute();
   stylist$ = await signedInAgent(t.app, stylist.email, stylist.password);
   desk$ = await signedInAgent(t.app, desk.email, desk.password);
+  client$ = await signedInAgent(t.app, client.email, client.password);
 });
 afterAll(() => t.close());
 
@@ -117,5 +119,37 @@ describe('recording a consultation and its quote', () => {
     expect(booking).toEqual({ quote_id: created.body.quote.id, price_cents: 26000, deposit_cents: 6000 });
     const view = await desk$.get(consultationPaths.one(created.body.id));
     expect(view.body.quote.bookingIds).toEqual([booked.body.id]);
+  });
+});
+
+describe('sending and accepting a quote', () => {
+  it('e-mails the summary (draft → sent), and only the signed-in client accepts it (sent → accepted)', async () => {
+    const [consultation] = (await list()) as { id: string; quote: { id: string } }[];
+    // A draft is not the client's to see or accept yet.
+    expect((await client$.get(consultationPaths.myQuotes)).body.consultations).toEqual([]);
+    expect((await client$.write('post', consultationPaths.acceptMyQuote(consultation.quote.id), {})).status).toBe(404);
+
+    const sent = await stylist$.write('post', consultationPaths.sendQuote(consultation.id), {});
+    expect(sent.status).toBe(200);
+    expect(sent.body.quote.status).toBe('sent');
+    const mail = await vi.waitFor(() => {
+      const found = t.smtp.messages.find((m) => m.to === client.email && /quote/i.test(m.subject));
+      if (!found) throw new Error('no quote e-mail yet');
+      return found;
+    });
+    expect(mail.text).toMatch(/Price: \$260\.00\. Deposit to book: \$60\.00\./);
+    expect(mail.text).toMatch(/Sitting 1 of 1, up to 1 h 35 min: Apply colour, Colour develops, Rinse\./);
+    expect(mail.text).toMatch(/skin test/);
+
+    // Another client cannot accept it; the staff cannot use the client's route.
+    const other$ = await signedInAgent(t.app, other.email, other.password);
+    expect((await other$.write('post', consultationPaths.acceptMyQuote(consultation.quote.id), {})).status).toBe(404);
+    expect((await desk$.write('post', consultationPaths.acceptMyQuote(consultation.quote.id), {})).status).toBe(403);
+
+    const accepted = await client$.write('post', consultationPaths.acceptMyQuote(consultation.quote.id), {});
+    expect(accepted.status).toBe(200);
+    expect(accepted.body.quote.status).toBe('accepted');
+    expect(accepted.body.quote.acceptedAt).not.toBeNull();
+    expect((await client$.get(consultationPaths.myQuotes)).body.consultations[0].quote.status).toBe('accepted');
   });
 });

@@ -5,10 +5,11 @@ import {
 import type { AppDeps } from '../../app-deps';
 import { STAFF } from '../../auth/require-access';
 import { apiRoute } from '../../lib/api-route';
-import { clientConsultations, consultationView, createConsultation, editQuote, proposeFor } from './consultations.service';
+import { myClientId } from '../../auth/client-access';
+import { acceptMyQuote, clientConsultations, consultationView, createConsultation, editQuote, myQuotes, proposeFor, sendQuote } from './consultations.service';
 
 // Stylists, desk and owner record consultations and edit quotes; the desk books them (bookings.quoteId).
-export function registerConsultationRoutes({ table, db }: AppDeps): void {
+export function registerConsultationRoutes({ table, db, mailer, config }: AppDeps): void {
   apiRoute(
     table,
     { method: 'post', path: '/api/consultations/propose', access: STAFF, summary: 'The quote Dwell proposes for a consultation; nothing is stored', body: ProposeQuoteRequestSchema, response: ProposedQuoteSchema },
@@ -28,6 +29,21 @@ export function registerConsultationRoutes({ table, db }: AppDeps): void {
     table,
     { method: 'put', path: '/api/consultations/:id/quote', access: STAFF, summary: 'Save an edited quote (back to draft if it was sent)', params: IdParamsSchema, body: QuoteEditSchema, response: ConsultationViewSchema },
     ({ user, params, body }) => editQuote(db, user, params.id, body),
+  );
+  apiRoute(
+    table,
+    { method: 'post', path: '/api/consultations/:id/quote/send', access: STAFF, summary: 'E-mail the quote to the client (status sent)', params: IdParamsSchema, response: ConsultationViewSchema },
+    ({ user, params, req }) => sendQuote(db, mailer, user, params.id, `${config.publicUrl ?? `${req.protocol}://${req.get('host')}`}/me`, new Date()),
+  );
+  apiRoute(
+    table,
+    { method: 'get', path: '/api/me/quotes', access: ['client'], summary: "The signed-in client's quotes sent to them", response: ConsultationListSchema },
+    async ({ user }) => ({ consultations: await myQuotes(db, user.salonId, await myClientId(db, user)) }),
+  );
+  apiRoute(
+    table,
+    { method: 'post', path: '/api/me/quotes/:id/accept', access: ['client'], summary: 'The signed-in client accepts a quote sent to them', params: IdParamsSchema, response: ConsultationViewSchema },
+    async ({ user, params }) => acceptMyQuote(db, user.salonId, await myClientId(db, user), params.id, new Date()),
   );
   apiRoute(
     table,

@@ -5,10 +5,12 @@ import type { ServiceSummary } from '../../../shared/schemas/service.schemas';
 import { StepPlanSchema } from '../../../shared/schemas/step-plan.schemas';
 import { proposeQuote } from '../../../shared/quotes/propose-quote';
 import { AppError, notFound } from '../../lib/app-error';
+import type { Mailer } from '../../mail/mailer';
+import { quoteMail } from './quote-mail';
 import { findClient } from '../clients/clients.repository';
 import { listServices } from '../services/services.repository';
 import {
-  clientPhotoIds, findConsultation, insertConsultation, listClientConsultations, quotePriceInputs, updateQuote, type ConsultationRow,
+  clientPhotoIds, findConsultation, insertConsultation, listClientConsultations, quotePriceInputs, setQuoteStatus, updateQuote, type ConsultationRow,
 } from './consultations.repository';
 
 const invalid = (field: string, message: string) => new AppError('VALIDATION_FAILED', 400, message, { [field]: message });
@@ -57,6 +59,30 @@ export async function editQuote(db: Db, user: SessionUser, id: string, edit: Quo
   await bookableService(db, user.salonId, edit.serviceId, 'serviceId');
   await updateQuote(db, id, edit);
   return consultationView(db, user.salonId, id);
+}
+
+/** E-mails the saved quote to the client and marks it sent; the client accepts it on their page. */
+export async function sendQuote(db: Db, mailer: Mailer, user: SessionUser, id: string, acceptUrl: string, now: Date): Promise<ConsultationView> {
+  const row = await findConsultation(db, user.salonId, id);
+  if (!row) throw notFound('That consultation');
+  if (!row.client_email) throw invalid('email', 'This client has no e-mail address; add one on the client card first.');
+  const salon = await db.selectFrom('salons').select(['name', 'currency']).where('id', '=', user.salonId).executeTakeFirstOrThrow();
+  await mailer.send(quoteMail(toView(row), row.client_email, salon, acceptUrl));
+  await setQuoteStatus(db, row.quote_id, 'sent', now);
+  return consultationView(db, user.salonId, id);
+}
+
+/** The signed-in client's sent and accepted quotes, newest first. */
+export async function myQuotes(db: Db, salonId: string, clientId: string): Promise<ConsultationView[]> {
+  return (await listClientConsultations(db, salonId, clientId)).filter((r) => r.status !== 'draft').map(toView);
+}
+
+/** The client accepts a quote that was sent to them (accepting twice answers the same). */
+export async function acceptMyQuote(db: Db, salonId: string, clientId: string, quoteId: string, now: Date): Promise<ConsultationView> {
+  const row = (await listClientConsultations(db, salonId, clientId)).find((r) => r.quote_id === quoteId && r.status !== 'draft');
+  if (!row) throw notFound('That quote');
+  if (row.status === 'sent') await setQuoteStatus(db, quoteId, 'accepted', now);
+  return consultationView(db, salonId, row.id);
 }
 
 export async function consultationView(db: Db, salonId: string, id: string): Promise<ConsultationView> {

@@ -11,6 +11,7 @@ import { catalogueQueries } from '../../features/catalogue/api/catalogue-queries
 import { consultationPagePaths, consultationQueries, useEditQuote } from '../../features/consultations/api/consultation-queries';
 import { quoteStatusLabels } from '../../features/consultations/components/consultation-labels';
 import { ConsultationSummary } from '../../features/consultations/components/consultation-summary';
+import { SendQuote } from '../../features/consultations/components/send-quote';
 import { QuoteWarnings } from '../../features/consultations/components/quote-advice';
 import { QuoteEditor } from '../../features/consultations/components/quote-editor';
 import { salonQueries } from '../../features/salon/api/salon-queries';
@@ -69,6 +70,9 @@ export function Component() {
           )}
         </p>
       )}
+      <SectionCard title="Send to the client">
+        <SendQuote view={view} timeZone={salon.timeZone} />
+      </SectionCard>
       <SectionCard title="Consultation">
         <ConsultationSummary view={view} />
       </SectionCard>

@@ -48,3 +48,23 @@ export function useEditQuote(consultationId: string) {
     },
   });
 }
+
+export function useSendQuote(consultationId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: () => apiWrite('POST', consultationPaths.sendQuote(consultationId), {}, ConsultationViewSchema),
+    onSuccess: (saved) => queryClient.setQueryData(consultationQueries.detail(consultationId).queryKey, saved),
+  });
+}
+
+export const myQuoteQueries = {
+  list: () => queryOptions({ queryKey: [...consultationQueries.all(), 'mine'] as const, queryFn: () => apiGet(consultationPaths.myQuotes, ConsultationListSchema) }),
+};
+
+export function useAcceptQuote() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (quoteId: string) => apiWrite('POST', consultationPaths.acceptMyQuote(quoteId), {}, ConsultationViewSchema),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: myQuoteQueries.list().queryKey }),
+  });
+}
