@@ -29,6 +29,7 @@ import { registerHairHistoryRoutes } from './features/hair-history/hair-history.
 import { registerPhotoRoutes } from './features/photos/photos.routes';
 import { registerMixLogRoutes } from './features/mix-logs/mix-logs.routes';
 import { registerConsultationRoutes } from './features/consultations/consultations.routes';
+import { registerStrandTestRoutes } from './features/strand-tests/strand-tests.routes';
 import { createDiskStorage } from './storage/disk-storage';
 
 const clientDist = path.join(path.dirname(fileURLToPath(import.meta.url)), '..', 'dist', 'client');
@@ -73,6 +74,7 @@ export function createApp(deps: Omit<AppDeps, 'table' | 'storage'> & { storage?:
     registerPhotoRoutes,
     registerMixLogRoutes,
     registerConsultationRoutes,
+    registerStrandTestRoutes,
   ]) {
     register(full);
   }

@@ -333,6 +333,25 @@ export interface Database {
   consultations: ConsultationsTable;
   consultation_photos: ConsultationPhotosTable;
   quotes: QuotesTable;
+  strand_tests: StrandTestsTable;
+}
+
+/** migrations/20261203T0705. */
+export interface StrandTestsTable {
+  id: Generated<string>;
+  salon_id: string;
+  client_id: string;
+  tested_at: Timestamp;
+  tested: string;
+  product_type: ProductCostsTable['product_type'];
+  /** numeric: pg returns it as a string. */
+  developer_percent: ColumnType<string | null, string | number | null, string | number | null>;
+  minutes: number;
+  result: 'passed' | 'fragile' | 'failed';
+  notes: Generated<string>;
+  photo_id: string | null;
+  recorded_by: string | null;
+  created_at: DefaultTimestamp;
 }
 
 /** Consultations and their quotes (migrations/20261203T0700). */

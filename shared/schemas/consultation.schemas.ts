@@ -81,7 +81,14 @@ export const CreateConsultationSchema = z
 export type CreateConsultation = z.infer<typeof CreateConsultationSchema>;
 
 /** Ask for a proposal without storing anything. */
-export const ProposeQuoteRequestSchema = z.object({ consultation: ConsultationInputSchema, serviceId: IdSchema.nullable() }).strict();
+export const ProposeQuoteRequestSchema = z
+  .object({
+    consultation: ConsultationInputSchema,
+    serviceId: IdSchema.nullable(),
+    /** With a client, a strand test on their record counts when the consultation says "none". */
+    clientId: IdSchema.nullable().optional(),
+  })
+  .strict();
 
 export const ProposedQuoteSchema = z.object({
   serviceId: IdSchema.nullable(),

@@ -13,7 +13,7 @@ export function registerConsultationRoutes({ table, db, mailer, config }: AppDep
   apiRoute(
     table,
     { method: 'post', path: '/api/consultations/propose', access: STAFF, summary: 'The quote Dwell proposes for a consultation; nothing is stored', body: ProposeQuoteRequestSchema, response: ProposedQuoteSchema },
-    ({ user, body }) => proposeFor(db, user.salonId, body.consultation, body.serviceId),
+    ({ user, body }) => proposeFor(db, user.salonId, body.consultation, body.serviceId, body.clientId),
   );
   apiRoute(
     table,

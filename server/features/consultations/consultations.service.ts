@@ -7,6 +7,7 @@ import { proposeQuote } from '../../../shared/quotes/propose-quote';
 import { AppError, notFound } from '../../lib/app-error';
 import type { Mailer } from '../../mail/mailer';
 import { quoteMail } from './quote-mail';
+import { listStrandTests } from '../strand-tests/strand-tests.repository';
 import { findClient } from '../clients/clients.repository';
 import { listServices } from '../services/services.repository';
 import {
@@ -28,8 +29,16 @@ async function bookableService(db: Db, salonId: string, serviceId: string, field
   return service;
 }
 
+/** The consultation's strand test, or else the latest one on the client's record (a quote must not warn about a test that was done). */
+async function withRecordedStrandTest(db: Db, salonId: string, clientId: string | null | undefined, c: ConsultationInput): Promise<ConsultationInput> {
+  if (c.strandTest !== 'none' || !clientId) return c;
+  const [latest] = await listStrandTests(db, salonId, clientId);
+  return latest ? { ...c, strandTest: latest.result } : c;
+}
+
 /** The proposal for a consultation at this salon's prices; the deposit follows the service's deposit. */
-export async function proposeFor(db: Db, salonId: string, consultation: ConsultationInput, serviceId: string | null): Promise<ProposedQuoteView> {
+export async function proposeFor(db: Db, salonId: string, asked: ConsultationInput, serviceId: string | null, clientId?: string | null): Promise<ProposedQuoteView> {
+  const consultation = await withRecordedStrandTest(db, salonId, clientId, asked);
   const prices = await quotePriceInputs(db, salonId);
   const draft = proposeQuote(consultation, { ...prices, deposit: { kind: 'fixed', cents: 0 } });
   const service = serviceId ? await bookableService(db, salonId, serviceId, 'serviceId') : defaultService(await listServices(db, salonId), draft.sittings);
@@ -47,7 +56,7 @@ export async function createConsultation(db: Db, user: SessionUser, body: Create
   await bookableService(db, user.salonId, body.quote.serviceId, 'quote.serviceId');
   const photos = await clientPhotoIds(db, client.id, body.photoIds);
   if (photos.length !== new Set(body.photoIds).size) throw invalid('photoIds', 'Link only this client’s own photos.');
-  const warnings = warningsOf(body.consultation, await quotePriceInputs(db, user.salonId));
+  const warnings = warningsOf(await withRecordedStrandTest(db, user.salonId, client.id, body.consultation), await quotePriceInputs(db, user.salonId));
   const id = await db.transaction().execute((trx) =>
     insertConsultation(trx, { salonId: user.salonId, clientId: client.id, details: body.consultation, photoIds: photos, createdBy: user.id, quote: body.quote, warnings }),
   );

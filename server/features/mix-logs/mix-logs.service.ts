@@ -33,7 +33,8 @@ async function requireStarted(db: Db, bookingId: string, seq: number, field: str
   if (sitting.start > now) throw invalid(field, `Sitting ${seq} has not started yet; write the mix log once it has.`);
 }
 
-function checkStrength(percent: number | null, maxPercent: number, field: string) {
+/** Refuses a developer above the salon's maximum, naming the field (also used by strand tests). */
+export function checkStrength(percent: number | null, maxPercent: number, field: string) {
   if (percent === null) return;
   try {
     checkDeveloperStrength(percent, maxPercent, field);

@@ -45,7 +45,7 @@ export function Component() {
   // The consultation the shown proposal was made for: that is what gets saved with the quote.
   const [proposed, setProposed] = useState<{ values: ConsultationFormValues; quote: ProposedQuoteView; at: number } | null>(null);
   const ask = form.handleSubmit((values) =>
-    propose.mutateAsync({ consultation: values.consultation, serviceId: null }).then((quote) => setProposed({ values, quote, at: Date.now() })),
+    propose.mutateAsync({ consultation: values.consultation, serviceId: null, clientId }).then((quote) => setProposed({ values, quote, at: Date.now() })),
   );
   const colourServices = services.services.filter((s) => s.category === 'colour');
 

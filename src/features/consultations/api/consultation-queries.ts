@@ -26,7 +26,7 @@ export const consultationQueries = {
 /** Ask for a proposal: a POST that stores nothing. */
 export function useProposeQuote() {
   return useMutation({
-    mutationFn: (body: { consultation: ConsultationInput; serviceId: string | null }) => apiWrite('POST', consultationPaths.propose, body, ProposedQuoteSchema),
+    mutationFn: (body: { consultation: ConsultationInput; serviceId: string | null; clientId: string }) => apiWrite('POST', consultationPaths.propose, body, ProposedQuoteSchema),
   });
 }
 
