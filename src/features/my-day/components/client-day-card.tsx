@@ -56,7 +56,7 @@ export function ClientDayCard({ booking, sitting, timeZone, now }: Props) {
         </div>
       )}
       <div className="flex flex-wrap gap-4">
-        <Link to={stylistMixLogPath(booking.id)} className="text-link">
+        <Link to={stylistMixLogPath(booking.id, booking.client.id)} className="text-link">
           Mix log<span className="sr-only"> for {booking.client.name}</span>
         </Link>
         <Link to={consultationPagePaths.create(booking.client.id)} className="text-link">
