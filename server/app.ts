@@ -30,6 +30,7 @@ import { registerPhotoRoutes } from './features/photos/photos.routes';
 import { registerMixLogRoutes } from './features/mix-logs/mix-logs.routes';
 import { registerConsultationRoutes } from './features/consultations/consultations.routes';
 import { registerStrandTestRoutes } from './features/strand-tests/strand-tests.routes';
+import { registerQuotePriceRoutes } from './features/quote-prices/quote-prices.routes';
 import { createDiskStorage } from './storage/disk-storage';
 
 const clientDist = path.join(path.dirname(fileURLToPath(import.meta.url)), '..', 'dist', 'client');
@@ -75,6 +76,7 @@ export function createApp(deps: Omit<AppDeps, 'table' | 'storage'> & { storage?:
     registerMixLogRoutes,
     registerConsultationRoutes,
     registerStrandTestRoutes,
+    registerQuotePriceRoutes,
   ]) {
     register(full);
   }

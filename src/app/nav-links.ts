@@ -14,6 +14,7 @@ const deskLinks = [
 export const navLinks: Record<Role, { to: string; label: string }[]> = {
   owner: [
     { to: paths.owner, label: 'Overview' },
+    { to: '/owner/quote-prices', label: 'Quote prices' },
     ...deskLinks,
   ],
   front_desk: deskLinks,

@@ -1,21 +1,17 @@
 import { sql } from 'kysely';
 import type { Db } from '../../db/database';
 import type { ConsultationInput, QuoteEdit, QuoteWarning } from '../../../shared/schemas/consultation.schemas';
-import type { ProductType } from '../../../shared/schemas/mix-log.schemas';
+import { correctionRate, productCentsPerGram } from '../quote-prices/quote-prices.repository';
 
 /** What a quote is priced from: the salon's hourly rate, its cut price and its cost per gram per product type. */
 export async function quotePriceInputs(db: Db, salonId: string) {
-  const [salon, cut, costs] = await Promise.all([
-    db.selectFrom('salons').select('correction_cents_per_hour').where('id', '=', salonId).executeTakeFirstOrThrow(),
+  const [correctionCentsPerHour, cut, costs] = await Promise.all([
+    correctionRate(db, salonId),
     // The salon's main cut service: the dearest active one of category cut.
     db.selectFrom('services').select('price_cents').where('salon_id', '=', salonId).where('category', '=', 'cut').where('active', '=', true).orderBy('price_cents', 'desc').executeTakeFirst(),
-    db.selectFrom('product_costs').select(['product_type', 'cents_per_gram']).where('salon_id', '=', salonId).execute(),
+    productCentsPerGram(db, salonId),
   ]);
-  return {
-    correctionCentsPerHour: salon.correction_cents_per_hour,
-    cutFinishCents: cut?.price_cents ?? 0,
-    productCentsPerGram: Object.fromEntries(costs.map((c) => [c.product_type, Number(c.cents_per_gram)])) as Partial<Record<ProductType, number>>,
-  };
+  return { correctionCentsPerHour, cutFinishCents: cut?.price_cents ?? 0, productCentsPerGram: costs };
 }
 
 /** The client's photos among these ids (the others are not theirs, or do not exist). */

@@ -27,7 +27,7 @@ export function Component() {
         ← Back to My day
       </Link>
       <PageHeader title="Mix log" subtitle={<TimeZoneNote timeZone={salon.timeZone} />} />
-      <MixLogSection bookingId={id!} timeZone={salon.timeZone} clientId={IdSchema.safeParse(client).success ? client! : undefined} />
+      <MixLogSection bookingId={id!} timeZone={salon.timeZone} clientId={IdSchema.safeParse(client).success ? client! : undefined} currency={salon.currency} />
     </div>
   );
 }
