@@ -33,6 +33,9 @@ import { registerSalonSettingsRoutes } from './features/setup/salon-settings.rou
 import { registerStaffSetupRoutes } from './features/setup/staff-setup.routes';
 import { registerUnitSetupRoutes } from './features/setup/units-setup.routes';
 import { registerServiceSetupRoutes } from './features/setup/services-setup.routes';
+import { registerConsultationRoutes } from './features/consultations/consultations.routes';
+import { registerStrandTestRoutes } from './features/strand-tests/strand-tests.routes';
+import { registerQuotePriceRoutes } from './features/quote-prices/quote-prices.routes';
 import { createDiskStorage } from './storage/disk-storage';
 
 const clientDist = path.join(path.dirname(fileURLToPath(import.meta.url)), '..', 'dist', 'client');
@@ -81,6 +84,9 @@ export function createApp(deps: Omit<AppDeps, 'table' | 'storage'> & { storage?:
     registerStaffSetupRoutes,
     registerUnitSetupRoutes,
     registerServiceSetupRoutes,
+    registerConsultationRoutes,
+    registerStrandTestRoutes,
+    registerQuotePriceRoutes,
   ]) {
     register(full);
   }

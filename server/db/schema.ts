@@ -31,6 +31,7 @@ export interface SalonsTable {
   created_at: DefaultTimestamp;
   /** What a cancellation inside the window keeps: the deposit, or nothing (always refunded). */
   cancellation_keeps: ColumnType<'deposit' | 'nothing', 'deposit' | 'nothing' | undefined, 'deposit' | 'nothing'>;
+  correction_cents_per_hour: Generated<number>;
 }
 
 export interface RecurringHoursTable {
@@ -158,6 +159,7 @@ export interface BookingsTable {
   created_at: DefaultTimestamp;
   /** Bumped on every move, so messages planned for older times can be told apart. */
   version: Generated<number>;
+  quote_id: ColumnType<string | null, string | null | undefined, string | null>;
 }
 
 export interface SittingsTable {
@@ -342,6 +344,65 @@ export interface Database {
   mix_logs: MixLogsTable;
   messages: MessagesTable;
   out_of_service: OutOfServiceTable;
+  product_costs: ProductCostsTable;
+  consultations: ConsultationsTable;
+  consultation_photos: ConsultationPhotosTable;
+  quotes: QuotesTable;
+  strand_tests: StrandTestsTable;
+}
+
+/** migrations/20261203T0705. */
+export interface StrandTestsTable {
+  id: Generated<string>;
+  salon_id: string;
+  client_id: string;
+  tested_at: Timestamp;
+  tested: string;
+  product_type: ProductCostsTable['product_type'];
+  /** numeric: pg returns it as a string. */
+  developer_percent: ColumnType<string | null, string | number | null, string | number | null>;
+  minutes: number;
+  result: 'passed' | 'fragile' | 'failed';
+  notes: Generated<string>;
+  photo_id: string | null;
+  recorded_by: string | null;
+  created_at: DefaultTimestamp;
+}
+
+/** Consultations and their quotes (migrations/20261203T0700). */
+export interface ProductCostsTable {
+  salon_id: string;
+  product_type: 'lightener' | 'remover' | 'permanent' | 'demi_permanent' | 'direct_dye' | 'toner' | 'bond_builder';
+  /** numeric: pg returns it as a string. */
+  cents_per_gram: ColumnType<string, string | number, string | number>;
+}
+export interface ConsultationsTable {
+  id: Generated<string>;
+  salon_id: string;
+  client_id: string;
+  details: Json;
+  created_by: string | null;
+  created_at: DefaultTimestamp;
+}
+export interface ConsultationPhotosTable {
+  consultation_id: string;
+  photo_id: string;
+}
+export interface QuotesTable {
+  id: Generated<string>;
+  salon_id: string;
+  consultation_id: string;
+  client_id: string;
+  service_id: string;
+  step_plan: Json;
+  price_cents: number;
+  deposit_cents: number;
+  notes: Generated<string>;
+  warnings: ColumnType<unknown, string | undefined, string>;
+  status: ColumnType<'draft' | 'sent' | 'accepted', 'draft' | 'sent' | 'accepted' | undefined, 'draft' | 'sent' | 'accepted'>;
+  sent_at: ColumnType<Date | null, Date | null | undefined, Date | null>;
+  accepted_at: ColumnType<Date | null, Date | null | undefined, Date | null>;
+  updated_at: DefaultTimestamp;
 }
 
 export type MessageStatus = 'queued' | 'sending' | 'sent' | 'failed' | 'dropped';

@@ -73,6 +73,8 @@ export const CreateBookingSchema = z
     chairIds: z.array(IdSchema).max(6).optional(),
     /** A retried request with the same key answers the first result instead of booking twice. */
     idempotencyKey: z.string().min(8).max(100),
+    /** The client's consultation quote this booking carries out (its price and deposit apply). */
+    quoteId: IdSchema.optional(),
   })
   .strict();
 export type CreateBooking = z.infer<typeof CreateBookingSchema>;

@@ -76,6 +76,8 @@ export const SittingUsageSchema = z.object({
   /** Grams used per product type at this sitting (all parts of its bowls). */
   totals: z.array(z.object({ productType: ProductTypeSchema, grams: z.number() })),
   totalGrams: z.number(),
+  /** Grams × the owner's cost per gram per product type; null while no cost is set for a type used. */
+  estimatedCostCents: z.number().int().nullable(),
 });
 
 export const MixLogListSchema = z.object({

@@ -21,5 +21,7 @@ export const SkinTestSchema = z.object({
   result: SkinTestResultSchema,
   product: z.string(),
   notes: z.string(),
+  /** Who recorded it (null when recorded by the demo loader or a removed account). */
+  recordedByName: z.string().nullable(),
 });
 export const SkinTestListSchema = z.object({ tests: z.array(SkinTestSchema) });

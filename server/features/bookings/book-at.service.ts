@@ -30,6 +30,8 @@ export interface BookAtInput {
   actorUserId: string | null;
   now: Date;
   status?: BookingStatus;
+  /** A consultation quote being booked: its price and deposit replace the service's. */
+  quote?: { id: string; priceCents: number; depositCents: number };
 }
 
 /** How far ahead anything may be booked (a year: common practice for salons' books). */
@@ -82,8 +84,9 @@ export async function bookAt(db: Db, input: BookAtInput): Promise<string> {
       stylistId: input.stylistId,
       status: input.status ?? 'booked',
       stepPlan: input.plan,
-      priceCents: input.service.priceCents,
-      depositCents: input.service.depositCents,
+      priceCents: input.quote?.priceCents ?? input.service.priceCents,
+      depositCents: input.quote?.depositCents ?? input.service.depositCents,
+      quoteId: input.quote?.id ?? null,
       createdBy: input.actorUserId,
       sittings: found.sittings.map((s, i) => ({
         chairId: chosen[i],

@@ -22,6 +22,8 @@ export interface NewBooking {
   depositCents: number;
   createdBy: string | null;
   cancelReason?: string;
+  /** The consultation quote this booking carries out, if any. */
+  quoteId?: string | null;
   sittings: { chairId: string; steps: NewStep[] }[];
 }
 
@@ -49,6 +51,7 @@ export async function insertBooking(db: Db, booking: NewBooking): Promise<string
       cancel_reason: booking.cancelReason ?? null,
       deposit_outcome: null,
       created_by: booking.createdBy,
+      quote_id: booking.quoteId ?? null,
     })
     .returning('id')
     .executeTakeFirstOrThrow();

@@ -3,7 +3,8 @@ import type { Database } from '../../db/schema';
 import type { CreateBooking } from '../../../shared/schemas/booking.schemas';
 import type { Salon } from '../../../shared/schemas/salon.schemas';
 import type { SessionUser } from '../../../shared/schemas/auth.schemas';
-import { notFound } from '../../lib/app-error';
+import { AppError, notFound } from '../../lib/app-error';
+import { findClientQuote } from '../consultations/consultations.repository';
 import { findClient } from '../clients/clients.repository';
 import { findService } from '../services/services.repository';
 import { lockStylists } from '../planning/stylist-lock';
@@ -18,12 +19,15 @@ export async function createBooking(db: Kysely<Database>, salon: Salon, user: Se
   const [client, service] = await Promise.all([findClient(db, salon.id, body.clientId), findService(db, salon.id, body.serviceId)]);
   if (!client) throw notFound('That client');
   if (!service) throw notFound('That service');
+  const quote = body.quoteId ? await findClientQuote(db, salon.id, client.id, body.quoteId) : undefined;
+  if (body.quoteId && !quote) throw new AppError('VALIDATION_FAILED', 400, 'That quote is not this client’s.', { quoteId: 'That quote is not this client’s.' });
   return db.transaction().execute(async (trx) => {
     await lockStylists(trx, [body.stylistId]);
     const earlier = await findIdempotent(trx, user.id, body.idempotencyKey);
     if (earlier) return (earlier.response as { bookingId: string }).bookingId;
     const bookingId = await bookAt(trx, {
       salon, clientId: client.id, service, plan: body.stepPlan, stylistId: body.stylistId, start: new Date(body.start), chairIds: body.chairIds, actorUserId: user.id, now,
+      quote: quote && { id: quote.id, priceCents: quote.price_cents, depositCents: quote.deposit_cents },
     });
     await saveIdempotent(trx, user.id, body.idempotencyKey, 'POST /api/bookings', 201, { bookingId });
     return bookingId;

@@ -3,6 +3,7 @@ import type { SessionUser } from '../../../shared/schemas/auth.schemas';
 import type { MixLog, MixLogList, ProductType, WriteMixLog } from '../../../shared/schemas/mix-log.schemas';
 import { CalculatorError, checkDeveloperStrength, percentToVolume } from '../../../shared/calculators/developer';
 import { AppError, forbidden, notFound } from '../../lib/app-error';
+import { productCentsPerGram } from '../quote-prices/quote-prices.repository';
 import { findBookingForMixLog, insertMixLogs, listMixLogs, listSittingStarts, nextBowlNo, type MixLogRow } from './mix-logs.repository';
 
 const round = (n: number, places = 1) => Math.round(n * 10 ** places) / 10 ** places;
@@ -33,7 +34,8 @@ async function requireStarted(db: Db, bookingId: string, seq: number, field: str
   if (sitting.start > now) throw invalid(field, `Sitting ${seq} has not started yet; write the mix log once it has.`);
 }
 
-function checkStrength(percent: number | null, maxPercent: number, field: string) {
+/** Refuses a developer above the salon's maximum, naming the field (also used by strand tests). */
+export function checkStrength(percent: number | null, maxPercent: number, field: string) {
   if (percent === null) return;
   try {
     checkDeveloperStrength(percent, maxPercent, field);
@@ -45,7 +47,7 @@ function checkStrength(percent: number | null, maxPercent: number, field: string
 
 export async function mixLogList(db: Db, user: SessionUser, bookingId: string, now: Date): Promise<MixLogList> {
   const booking = await bookingFor(db, user, bookingId, false);
-  const [sittings, rows] = await Promise.all([listSittingStarts(db, bookingId), listMixLogs(db, bookingId)]);
+  const [sittings, rows, costs] = await Promise.all([listSittingStarts(db, bookingId), listMixLogs(db, bookingId), productCentsPerGram(db, user.salonId)]);
   const logs = rows.map(toView);
   return {
     maxDeveloperPercent: booking.maxPercent,
@@ -56,7 +58,10 @@ export async function mixLogList(db: Db, user: SessionUser, bookingId: string, n
         byType.set(log.productType, (byType.get(log.productType) ?? 0) + log.grams.reduce((a, p) => a + p.grams, 0));
       }
       const totals = [...byType].map(([productType, grams]) => ({ productType, grams: round(grams) }));
-      return { seq: s.seq, start: s.start.toISOString(), started: s.start <= now, totals, totalGrams: round(totals.reduce((a, t) => a + t.grams, 0)) };
+      // A type used without a cost set makes the estimate unknown rather than too low.
+      const priced = totals.every((t) => costs[t.productType] !== undefined);
+      const estimatedCostCents = priced ? Math.round(totals.reduce((a, t) => a + t.grams * costs[t.productType]!, 0)) : null;
+      return { seq: s.seq, start: s.start.toISOString(), started: s.start <= now, totals, totalGrams: round(totals.reduce((a, t) => a + t.grams, 0)), estimatedCostCents };
     }),
   };
 }

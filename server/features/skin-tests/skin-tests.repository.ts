@@ -4,11 +4,12 @@ import type { SkinTestRecord } from '../../../shared/rules/skin-test-rule';
 
 export function listSkinTests(db: Db, salonId: string, clientId: string) {
   return db
-    .selectFrom('skin_tests')
-    .select(['id', 'applied_at', 'read_at', 'result', 'product', 'notes'])
-    .where('salon_id', '=', salonId)
-    .where('client_id', '=', clientId)
-    .orderBy('applied_at', 'desc')
+    .selectFrom('skin_tests as t')
+    .leftJoin('users as u', 'u.id', 't.recorded_by')
+    .select(['t.id', 't.applied_at', 't.read_at', 't.result', 't.product', 't.notes', 'u.name as recorded_by_name'])
+    .where('t.salon_id', '=', salonId)
+    .where('t.client_id', '=', clientId)
+    .orderBy('t.applied_at', 'desc')
     .execute();
 }
 
@@ -19,7 +20,7 @@ export async function insertSkinTest(
   return db
     .insertInto('skin_tests')
     .values({ salon_id: t.salonId, client_id: t.clientId, applied_at: t.appliedAt, read_at: t.readAt, result: t.result, product: t.product, notes: t.notes, recorded_by: t.recordedBy })
-    .returning(['id', 'applied_at', 'read_at', 'result', 'product', 'notes'])
+    .returning('id')
     .executeTakeFirstOrThrow();
 }
 

@@ -14,6 +14,7 @@ const toView = (t: Awaited<ReturnType<typeof listSkinTests>>[number]) => ({
   result: t.result,
   product: t.product,
   notes: t.notes,
+  recordedByName: t.recorded_by_name,
 });
 
 export function registerSkinTestRoutes({ table, db }: AppDeps): void {
@@ -30,11 +31,11 @@ export function registerSkinTestRoutes({ table, db }: AppDeps): void {
     { method: 'post', path: '/api/clients/:id/skin-tests', access: STAFF, summary: 'Record a skin test and its reading', params: IdParamsSchema, body: RecordSkinTestSchema, response: SkinTestSchema, status: 201 },
     async ({ user, params, body }) => {
       if (!(await findClient(db, user.salonId, params.id))) throw notFound('That client');
-      const row = await insertSkinTest(db, {
+      const { id } = await insertSkinTest(db, {
         salonId: user.salonId, clientId: params.id, appliedAt: new Date(body.appliedAt), readAt: body.readAt ? new Date(body.readAt) : null,
         result: body.result, product: body.product, notes: body.notes, recordedBy: user.id,
       });
-      return toView(row);
+      return toView((await listSkinTests(db, user.salonId, params.id)).find((t) => t.id === id)!);
     },
   );
 }

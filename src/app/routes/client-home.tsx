@@ -7,6 +7,7 @@ import { bookingQueries } from '../../features/bookings/api/booking-queries';
 import { BookingList } from '../../features/bookings/components/booking-list';
 import { MyBookingActions } from '../../features/bookings/components/my-booking-actions';
 import { salonQueries } from '../../features/salon/api/salon-queries';
+import { MyQuotes } from '../../features/consultations/components/my-quotes';
 import { SalonCard } from '../../features/salon/components/salon-card';
 import { queryClient } from '../../lib/query-client';
 
@@ -25,6 +26,7 @@ export function Component() {
     <div className="grid gap-8 lg:grid-cols-[1fr_20rem]">
       <div>
         <PageHeader title="My bookings" subtitle={<TimeZoneNote timeZone={mine.timeZone} />} />
+        <MyQuotes currency={salon.currency} />
         <BookingList
           bookings={mine.bookings}
           timeZone={mine.timeZone}

@@ -1,22 +1,44 @@
-import { useSuspenseQuery } from '@tanstack/react-query';
+import { useQuery, useSuspenseQuery } from '@tanstack/react-query';
+import { useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
+import { IdSchema } from '../../../shared/schemas/common.schemas';
 import { BookServicePage } from '../../features/booking-flow/components/book-service-page';
 import { catalogueQueries } from '../../features/catalogue/api/catalogue-queries';
+import { consultationQueries } from '../../features/consultations/api/consultation-queries';
 import { salonQueries } from '../../features/salon/api/salon-queries';
+import { formatMoney } from '../../lib/booking-labels';
 import { queryClient } from '../../lib/query-client';
 import { todayIn } from '../../lib/time';
 
-export async function loader() {
+/** `?consultation=<id>` books that consultation's saved quote. */
+const consultationParam = (search: URLSearchParams) => {
+  const id = search.get('consultation');
+  return IdSchema.safeParse(id).success ? id : null;
+};
+
+export async function loader({ request }: LoaderFunctionArgs) {
+  const consultation = consultationParam(new URL(request.url).searchParams);
   await Promise.all([
     queryClient.ensureQueryData(catalogueQueries.services()),
     queryClient.ensureQueryData(catalogueQueries.stylists()),
     queryClient.ensureQueryData(salonQueries.current()),
+    consultation ? queryClient.ensureQueryData(consultationQueries.detail(consultation)) : null,
   ]);
   return null;
 }
 
 export function Component() {
+  const [search] = useSearchParams();
+  const consultationId = consultationParam(search);
   const { data: services } = useSuspenseQuery(catalogueQueries.services());
   const { data: stylists } = useSuspenseQuery(catalogueQueries.stylists());
   const { data: salon } = useSuspenseQuery(salonQueries.current());
-  return <BookServicePage services={services.services} stylists={stylists.stylists} today={todayIn(salon.timeZone)} />;
+  const { data: view } = useQuery({ ...consultationQueries.detail(consultationId ?? ''), enabled: consultationId !== null });
+  const quote = view && {
+    quoteId: view.quote.id,
+    client: { id: view.clientId, name: view.clientName, email: null, phone: null },
+    serviceId: view.quote.serviceId,
+    stepPlan: view.quote.stepPlan,
+    summary: `${view.quote.serviceName}, ${view.quote.stepPlan.sittings.length} sitting(s), ${formatMoney(view.quote.priceCents, salon.currency)} with a ${formatMoney(view.quote.depositCents, salon.currency)} deposit.`,
+  };
+  return <BookServicePage key={consultationId ?? 'new'} services={services.services} stylists={stylists.stylists} today={todayIn(salon.timeZone)} quote={quote} />;
 }

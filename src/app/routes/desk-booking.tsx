@@ -43,7 +43,7 @@ export function Component() {
         {open && <MoveSittingForm booking={booking} timeZone={salon.timeZone} stylists={stylists.stylists} />}
         <CancelBookingForm booking={booking} />
       </div>
-      <MixLogSection bookingId={booking.id} timeZone={salon.timeZone} clientId={booking.client.id} />
+      <MixLogSection bookingId={booking.id} timeZone={salon.timeZone} clientId={booking.client.id} currency={salon.currency} />
       <BookingHistory bookingId={booking.id} timeZone={salon.timeZone} />
     </div>
   );

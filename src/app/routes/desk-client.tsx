@@ -4,6 +4,10 @@ import { IdSchema } from '../../../shared/schemas/common.schemas';
 import { PageHeader } from '../../components/ui/page-header';
 import { TimeZoneNote } from '../../components/ui/time-zone-note';
 import { paths } from '../../config/paths';
+import { SectionCard } from '../../components/ui/section-card';
+import { ClientConsultations } from '../../features/consultations/components/client-consultations';
+import { SkinTestsPanel } from '../../features/test-records/components/skin-tests-panel';
+import { StrandTestsPanel } from '../../features/test-records/components/strand-tests-panel';
 import { BookingList } from '../../features/bookings/components/booking-list';
 import { clientQueries } from '../../features/clients/api/client-queries';
 import { ClientProfile } from '../../features/clients/components/client-profile';
@@ -31,6 +35,15 @@ export function Component() {
       </Link>
       <PageHeader title={client.name} subtitle={<TimeZoneNote timeZone={salon.timeZone} />} />
       <ClientProfile client={client} />
+      <SectionCard title="Skin tests">
+        <SkinTestsPanel clientId={client.id} zone={salon.timeZone} />
+      </SectionCard>
+      <SectionCard title="Strand tests">
+        <StrandTestsPanel clientId={client.id} zone={salon.timeZone} />
+      </SectionCard>
+      <SectionCard title="Consultations and quotes">
+        <ClientConsultations clientId={client.id} timeZone={salon.timeZone} currency={salon.currency} />
+      </SectionCard>
       <BookingList bookings={client.bookings} timeZone={salon.timeZone} currency={salon.currency} />
     </div>
   );

@@ -1,5 +1,5 @@
 import { useSuspenseQuery } from '@tanstack/react-query';
-import { Link, useParams, type LoaderFunctionArgs } from 'react-router-dom';
+import { Link, useParams, useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { IdSchema } from '../../../shared/schemas/common.schemas';
 import { PageHeader } from '../../components/ui/page-header';
 import { TimeZoneNote } from '../../components/ui/time-zone-note';
@@ -18,6 +18,8 @@ export async function loader({ params }: LoaderFunctionArgs) {
 /** The stylist's mix log of one booking, opened from a client card on My day. */
 export function Component() {
   const { id } = useParams();
+  // The client's id (from My day) offers their other bookings as sources for "Repeat last time".
+  const client = useSearchParams()[0].get('client');
   const { data: salon } = useSuspenseQuery(salonQueries.current());
   return (
     <div className="flex flex-col gap-6">
@@ -25,7 +27,7 @@ export function Component() {
         ← Back to My day
       </Link>
       <PageHeader title="Mix log" subtitle={<TimeZoneNote timeZone={salon.timeZone} />} />
-      <MixLogSection bookingId={id!} timeZone={salon.timeZone} />
+      <MixLogSection bookingId={id!} timeZone={salon.timeZone} clientId={IdSchema.safeParse(client).success ? client! : undefined} currency={salon.currency} />
     </div>
   );
 }

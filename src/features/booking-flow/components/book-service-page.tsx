@@ -5,7 +5,9 @@ import { useNavigate } from 'react-router-dom';
 import type { BookingOption, BookingOptionsRequest, CreateBooking } from '../../../../shared/schemas/booking.schemas';
 import type { ClientSummary } from '../../../../shared/schemas/client.schemas';
 import type { ServiceSummary } from '../../../../shared/schemas/service.schemas';
+import type { StepPlan } from '../../../../shared/schemas/step-plan.schemas';
 import { FormAlert } from '../../../components/ui/form-alert';
+import { Notice } from '../../../components/ui/notice';
 import { PageHeader } from '../../../components/ui/page-header';
 import { paths } from '../../../config/paths';
 import { isApiError } from '../../../lib/api-error';
@@ -16,16 +18,21 @@ import { BookServiceForm } from './book-service-form';
 import { OptionList, optionKey } from './option-list';
 import { SkinTestNotice } from './skin-test-notice';
 
-type Props = { services: ServiceSummary[]; stylists: { id: string; name: string; skills: string[] }[]; today: string };
+/** A saved consultation quote being booked: its client, service and edited step plan fill the form. */
+export type QuoteToBook = { quoteId: string; client: ClientSummary; serviceId: string; stepPlan: StepPlan; summary: string };
+
+type Props = { services: ServiceSummary[]; stylists: { id: string; name: string; skills: string[] }[]; today: string; quote?: QuoteToBook };
 
 /** The desk's booking flow: fill in the request, find times, book one option. */
-export function BookServicePage({ services, stylists, today }: Props) {
+export function BookServicePage({ services, stylists, today, quote }: Props) {
   const navigate = useNavigate();
   const form = useForm<BookFormInput, unknown, BookFormValues>({
     resolver: zodResolver(BookFormSchema),
-    defaultValues: { clientId: '', serviceId: '', stylistId: '', earliestDate: today, stepPlan: { sittings: [] } },
+    defaultValues: quote
+      ? { clientId: quote.client.id, serviceId: quote.serviceId, stylistId: '', earliestDate: today, stepPlan: structuredClone(quote.stepPlan) }
+      : { clientId: '', serviceId: '', stylistId: '', earliestDate: today, stepPlan: { sittings: [] } },
   });
-  const [client, setClient] = useState<ClientSummary | null>(null);
+  const [client, setClient] = useState<ClientSummary | null>(quote?.client ?? null);
   const [request, setRequest] = useState<BookingOptionsRequest | null>(null);
   const [booking, setBooking] = useState<string | null>(null);
   const findTimes = useFindTimes();
@@ -60,6 +67,8 @@ export function BookServicePage({ services, stylists, today }: Props) {
       start: option.sittings[0].start,
       chairIds: option.sittings.map((sitting) => sitting.chairId),
       idempotencyKey: keys.keyFor(action),
+      // The quote holds only while its client is the one being booked.
+      ...(quote && request.clientId === quote.client.id ? { quoteId: quote.quoteId } : {}),
     };
     create.mutate(body, {
       onSuccess: (created) => {
@@ -78,6 +87,11 @@ export function BookServicePage({ services, stylists, today }: Props) {
   return (
     <div className="flex flex-col gap-6">
       <PageHeader title="Book a service" subtitle="Pick the client and the service, find times, and book one option." />
+      {quote && (
+        <Notice tone="info" title={`Booking ${quote.client.name}'s quote`}>
+          {quote.summary} The quote's step plan is filled in below; its price and deposit apply to the booking.
+        </Notice>
+      )}
       <FormProvider {...form}>
         <BookServiceForm
           services={services}

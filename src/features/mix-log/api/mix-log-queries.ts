@@ -6,7 +6,8 @@ import { apiGet, apiWrite } from '../../../lib/api-client';
 
 export const mixLogPath = (bookingId: string) => `/api/bookings/${bookingId}/mix-logs`;
 /** The stylist's page for one booking's mix log (kept beside its API path so links and the router agree). */
-export const stylistMixLogPath = (bookingId: string) => `/stylist/bookings/${bookingId}/mix-log`;
+export const stylistMixLogPath = (bookingId: string, clientId?: string) =>
+  `/stylist/bookings/${bookingId}/mix-log${clientId ? `?client=${encodeURIComponent(clientId)}` : ''}`;
 
 export const mixLogQueries = {
   all: () => ['mix-logs'] as const,

@@ -10,8 +10,10 @@ import { productTypeLabels } from '../product-type-labels';
 import { BowlForm } from './bowl-form';
 import { MixLogCaution } from './mix-log-caution';
 import { RepeatForm } from './repeat-form';
+import { formatMoney } from '../../../lib/booking-labels';
+import { PhotoUploader } from '../../photos/components/photo-uploader';
 
-type Props = { bookingId: string; timeZone: string; clientId?: string };
+type Props = { bookingId: string; timeZone: string; clientId?: string; currency: string };
 
 function BowlLine({ log }: { log: MixLog }) {
   return (
@@ -34,7 +36,7 @@ function BowlLine({ log }: { log: MixLog }) {
 }
 
 /** The mix log of one booking: bowls and grams used per sitting, repeat last time, and a form for the next bowl. */
-export function MixLogSection({ bookingId, timeZone, clientId }: Props) {
+export function MixLogSection({ bookingId, timeZone, clientId, currency }: Props) {
   const { data, isPending, isError } = useQuery(mixLogQueries.list(bookingId));
   const [chosen, setChosen] = useState<number | null>(null);
   if (isPending) return <LoadingState />;
@@ -60,12 +62,15 @@ export function MixLogSection({ bookingId, timeZone, clientId }: Props) {
               </ul>
               {s.totals.length > 0 && (
                 <p className="tabular text-sm">
-                  <span className="font-bold">Product used:</span> {s.totals.map((t) => `${productTypeLabels[t.productType]} ${t.grams} g`).join(', ')} — {s.totalGrams} g in all
+                  <span className="font-bold">Product used:</span> {s.totals.map((t) => `${productTypeLabels[t.productType]} ${t.grams} g`).join(', ')} — {s.totalGrams} g in all ·{' '}
+                  <span className="font-bold">Estimated product cost:</span>{' '}
+                  {s.estimatedCostCents === null ? 'not known (the owner has not set a cost per gram for every type used)' : formatMoney(s.estimatedCostCents, currency)}
                 </p>
               )}
             </section>
           );
         })}
+        {clientId && <PhotoUploader kind="hair_now" owner={{ clientId }} bookingId={bookingId} label="Photos of this visit (bowls, result)" />}
         <RepeatForm
           bookingId={bookingId} clientId={clientId} timeZone={timeZone} startedSittings={started}
           loggedSittings={[...new Set(data.logs.map((l) => l.sittingSeq))]}

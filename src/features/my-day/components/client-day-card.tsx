@@ -6,6 +6,7 @@ import { StepKindIcon } from '../../../components/ui/step-kind-icon';
 import { StepStrip } from '../../../components/ui/step-strip';
 import { sittingLabel, stepKindLabels } from '../../../lib/booking-labels';
 import { formatTime, formatTimeRange } from '../../../lib/time';
+import { consultationPagePaths } from '../../consultations/api/consultation-queries';
 import { stylistMixLogPath } from '../../mix-log/api/mix-log-queries';
 import { sittingProgress } from '../timer-state';
 import { DevelopingTimer } from './developing-timer';
@@ -54,9 +55,14 @@ export function ClientDayCard({ booking, sitting, timeZone, now }: Props) {
           )}
         </div>
       )}
-      <Link to={stylistMixLogPath(booking.id)} className="text-link self-start">
-        Mix log<span className="sr-only"> for {booking.client.name}</span>
-      </Link>
+      <div className="flex flex-wrap gap-4">
+        <Link to={stylistMixLogPath(booking.id, booking.client.id)} className="text-link">
+          Mix log<span className="sr-only"> for {booking.client.name}</span>
+        </Link>
+        <Link to={consultationPagePaths.create(booking.client.id)} className="text-link">
+          New consultation<span className="sr-only"> for {booking.client.name}</span>
+        </Link>
+      </div>
     </article>
   );
 }

@@ -1,0 +1,101 @@
+import { sql } from 'kysely';
+import type { Db } from '../../db/database';
+import type { ConsultationInput, QuoteEdit, QuoteWarning } from '../../../shared/schemas/consultation.schemas';
+import { correctionRate, productCentsPerGram } from '../quote-prices/quote-prices.repository';
+
+/** What a quote is priced from: the salon's hourly rate, its cut price and its cost per gram per product type. */
+export async function quotePriceInputs(db: Db, salonId: string) {
+  const [correctionCentsPerHour, cut, costs] = await Promise.all([
+    correctionRate(db, salonId),
+    // The salon's main cut service: the dearest active one of category cut.
+    db.selectFrom('services').select('price_cents').where('salon_id', '=', salonId).where('category', '=', 'cut').where('active', '=', true).orderBy('price_cents', 'desc').executeTakeFirst(),
+    productCentsPerGram(db, salonId),
+  ]);
+  return { correctionCentsPerHour, cutFinishCents: cut?.price_cents ?? 0, productCentsPerGram: costs };
+}
+
+/** The client's photos among these ids (the others are not theirs, or do not exist). */
+export async function clientPhotoIds(db: Db, clientId: string, ids: string[]): Promise<string[]> {
+  if (ids.length === 0) return [];
+  const rows = await db.selectFrom('client_photos').select('id').where('client_id', '=', clientId).where('id', 'in', ids).execute();
+  return rows.map((r) => r.id);
+}
+
+export async function insertConsultation(
+  db: Db,
+  c: { salonId: string; clientId: string; details: ConsultationInput; photoIds: string[]; createdBy: string; quote: QuoteEdit; warnings: QuoteWarning[] },
+): Promise<string> {
+  const { id } = await db
+    .insertInto('consultations')
+    .values({ salon_id: c.salonId, client_id: c.clientId, details: JSON.stringify(c.details), created_by: c.createdBy })
+    .returning('id')
+    .executeTakeFirstOrThrow();
+  if (c.photoIds.length) await db.insertInto('consultation_photos').values(c.photoIds.map((photo_id) => ({ consultation_id: id, photo_id }))).execute();
+  await db
+    .insertInto('quotes')
+    .values({
+      salon_id: c.salonId, consultation_id: id, client_id: c.clientId, service_id: c.quote.serviceId, step_plan: JSON.stringify(c.quote.stepPlan),
+      price_cents: c.quote.priceCents, deposit_cents: c.quote.depositCents, notes: c.quote.notes, warnings: JSON.stringify(c.warnings),
+    })
+    .execute();
+  return id;
+}
+
+/** Saves the stylist's edit; a quote already sent or accepted goes back to draft, since the client saw another one. */
+export function updateQuote(db: Db, consultationId: string, q: QuoteEdit) {
+  return db
+    .updateTable('quotes')
+    .set({
+      service_id: q.serviceId, step_plan: JSON.stringify(q.stepPlan), price_cents: q.priceCents, deposit_cents: q.depositCents, notes: q.notes,
+      status: 'draft', sent_at: null, accepted_at: null, updated_at: new Date(),
+    })
+    .where('consultation_id', '=', consultationId)
+    .execute();
+}
+
+export function setQuoteStatus(db: Db, quoteId: string, status: 'sent' | 'accepted', at: Date) {
+  return db
+    .updateTable('quotes')
+    .set(status === 'sent' ? { status, sent_at: at } : { status, accepted_at: at })
+    .where('id', '=', quoteId)
+    .execute();
+}
+
+const consultationQuery = (db: Db, salonId: string) =>
+  db
+    .selectFrom('consultations as c')
+    .innerJoin('quotes as q', 'q.consultation_id', 'c.id')
+    .innerJoin('clients as cl', 'cl.id', 'c.client_id')
+    .innerJoin('services as s', 's.id', 'q.service_id')
+    .leftJoin('users as u', 'u.id', 'c.created_by')
+    .select([
+      'c.id', 'c.client_id', 'cl.name as client_name', 'cl.email as client_email', 'c.details', 'c.created_at', 'u.name as created_by_name',
+      'q.id as quote_id', 'q.status', 'q.service_id', 's.name as service_name', 'q.step_plan', 'q.price_cents', 'q.deposit_cents', 'q.notes',
+      'q.warnings', 'q.sent_at', 'q.accepted_at',
+    ])
+    .select((eb) => [
+      eb.fn.coalesce(
+        eb.selectFrom('consultation_photos as cp').innerJoin('client_photos as p', 'p.id', 'cp.photo_id').select(sql<string[]>`array_agg(cp.photo_id order by p.created_at)`.as('ids')).whereRef('cp.consultation_id', '=', 'c.id'),
+        sql<string[]>`'{}'::uuid[]`,
+      ).as('photo_ids'),
+      eb.fn.coalesce(
+        eb.selectFrom('bookings as b').select(sql<string[]>`array_agg(b.id order by b.created_at)`.as('ids')).whereRef('b.quote_id', '=', 'q.id').where('b.status', '!=', 'cancelled'),
+        sql<string[]>`'{}'::uuid[]`,
+      ).as('booking_ids'),
+    ])
+    .where('c.salon_id', '=', salonId);
+
+export type ConsultationRow = Awaited<ReturnType<ReturnType<typeof consultationQuery>['executeTakeFirstOrThrow']>>;
+
+export function findConsultation(db: Db, salonId: string, id: string) {
+  return consultationQuery(db, salonId).where('c.id', '=', id).executeTakeFirst();
+}
+
+export function listClientConsultations(db: Db, salonId: string, clientId: string) {
+  return consultationQuery(db, salonId).where('c.client_id', '=', clientId).orderBy('c.created_at', 'desc').execute();
+}
+
+/** A quote of this salon and client, for booking it. */
+export function findClientQuote(db: Db, salonId: string, clientId: string, quoteId: string) {
+  return db.selectFrom('quotes').select(['id', 'price_cents', 'deposit_cents', 'service_id']).where('id', '=', quoteId).where('salon_id', '=', salonId).where('client_id', '=', clientId).executeTakeFirst();
+}

@@ -1,0 +1,92 @@
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useSuspenseQuery } from '@tanstack/react-query';
+import { useState } from 'react';
+import { useForm } from 'react-hook-form';
+import { useNavigate, useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
+import type { ProposedQuoteView } from '../../../shared/schemas/consultation.schemas';
+import { IdSchema } from '../../../shared/schemas/common.schemas';
+import { Button } from '../../components/ui/button';
+import { FormAlert } from '../../components/ui/form-alert';
+import { PageHeader } from '../../components/ui/page-header';
+import { SectionCard } from '../../components/ui/section-card';
+import { catalogueQueries } from '../../features/catalogue/api/catalogue-queries';
+import { clientQueries } from '../../features/clients/api/client-queries';
+import { consultationPagePaths, useCreateConsultation, useProposeQuote } from '../../features/consultations/api/consultation-queries';
+import { ConsultationFields } from '../../features/consultations/components/consultation-fields';
+import { PhotoPicker } from '../../features/consultations/components/photo-picker';
+import { ProposalLines, QuoteWarnings } from '../../features/consultations/components/quote-advice';
+import { QuoteEditor } from '../../features/consultations/components/quote-editor';
+import { ConsultationFormSchema, emptyConsultation, type ConsultationFormValues } from '../../features/consultations/consultation-form-schema';
+import { salonQueries } from '../../features/salon/api/salon-queries';
+import { queryClient } from '../../lib/query-client';
+
+export async function loader({ request }: LoaderFunctionArgs) {
+  const clientId = new URL(request.url).searchParams.get('client');
+  if (!IdSchema.safeParse(clientId).success) throw new Response(null, { status: 404 });
+  await Promise.all([
+    queryClient.ensureQueryData(clientQueries.detail(clientId!)),
+    queryClient.ensureQueryData(catalogueQueries.services()),
+    queryClient.ensureQueryData(salonQueries.current()),
+  ]);
+  return null;
+}
+
+/** Record a consultation, see the quote Dwell proposes, edit it, save both. */
+export function Component() {
+  const [params] = useSearchParams();
+  const clientId = params.get('client')!;
+  const navigate = useNavigate();
+  const { data: client } = useSuspenseQuery(clientQueries.detail(clientId));
+  const { data: services } = useSuspenseQuery(catalogueQueries.services());
+  const { data: salon } = useSuspenseQuery(salonQueries.current());
+  const form = useForm<ConsultationFormValues>({ resolver: zodResolver(ConsultationFormSchema), defaultValues: emptyConsultation() });
+  const propose = useProposeQuote();
+  const create = useCreateConsultation();
+  // The consultation the shown proposal was made for: that is what gets saved with the quote.
+  const [proposed, setProposed] = useState<{ values: ConsultationFormValues; quote: ProposedQuoteView; at: number } | null>(null);
+  const ask = form.handleSubmit((values) =>
+    propose.mutateAsync({ consultation: values.consultation, serviceId: null, clientId }).then((quote) => setProposed({ values, quote, at: Date.now() })),
+  );
+  const colourServices = services.services.filter((s) => s.category === 'colour');
+
+  return (
+    <div className="flex flex-col gap-6">
+      <button type="button" className="text-link self-start" onClick={() => navigate(-1)}>
+        ← Back
+      </button>
+      <PageHeader title={`Consultation for ${client.name}`} subtitle="Record the hair as you find it; Dwell proposes a quote you can change." />
+      <SectionCard title="The hair now">
+        <form onSubmit={(e) => void ask(e)} noValidate className="flex flex-col gap-6" aria-label="Consultation">
+          <ConsultationFields form={form} />
+          <PhotoPicker clientId={clientId} control={form.control} />
+          {propose.isError && <FormAlert>{propose.error.message}</FormAlert>}
+          <div>
+            <Button type="submit" variant={proposed ? 'secondary' : 'primary'} busy={propose.isPending}>
+              {proposed ? 'Propose again' : 'Propose a quote'}
+            </Button>
+          </div>
+        </form>
+      </SectionCard>
+      {proposed && (
+        <SectionCard title="Proposed quote">
+          <div className="flex flex-col gap-4">
+            <ProposalLines proposal={proposed.quote} currency={salon.currency} />
+            <QuoteWarnings warnings={proposed.quote.warnings} />
+            {create.isError && <FormAlert>{create.error.message}</FormAlert>}
+            <QuoteEditor
+              key={proposed.at}
+              services={colourServices}
+              submitLabel="Save consultation and quote"
+              initial={{ serviceId: proposed.quote.serviceId ?? colourServices[0]?.id ?? '', stepPlan: proposed.quote.stepPlan, priceCents: proposed.quote.priceCents, depositCents: proposed.quote.depositCents, notes: '' }}
+              onSave={(quote) =>
+                create
+                  .mutateAsync({ clientId, consultation: proposed.values.consultation, photoIds: proposed.values.photoIds, quote })
+                  .then((saved) => navigate(consultationPagePaths.one(saved.id)))
+              }
+            />
+          </div>
+        </SectionCard>
+      )}
+    </div>
+  );
+}

@@ -1,0 +1,23 @@
+import { useSuspenseQuery } from '@tanstack/react-query';
+import { PageHeader } from '../../components/ui/page-header';
+import { SectionCard } from '../../components/ui/section-card';
+import { quotePriceQueries } from '../../features/quote-prices/api/quote-price-queries';
+import { QuotePricesForm } from '../../features/quote-prices/components/quote-prices-form';
+import { queryClient } from '../../lib/query-client';
+
+export async function loader() {
+  await queryClient.ensureQueryData(quotePriceQueries.current());
+  return null;
+}
+
+export function Component() {
+  const { data } = useSuspenseQuery(quotePriceQueries.current());
+  return (
+    <div className="flex flex-col gap-6">
+      <PageHeader title="Quote prices" subtitle="What Dwell prices proposed quotes and mix-log product estimates from." />
+      <SectionCard title="Rates and product costs">
+        <QuotePricesForm initial={data} />
+      </SectionCard>
+    </div>
+  );
+}

@@ -1,0 +1,14 @@
+import { CreateConsultationSchema, type ConsultationInput } from '../../../shared/schemas/consultation.schemas';
+
+/** The consultation form: the same schema the server checks, without the client (from the page) and the quote (its own form). */
+export const ConsultationFormSchema = CreateConsultationSchema.pick({ consultation: true, photoIds: true });
+export type ConsultationFormValues = { consultation: ConsultationInput; photoIds: string[] };
+
+export const emptyConsultation = (): ConsultationFormValues => ({
+  consultation: {
+    currentLevel: 5, targetLevel: 5,
+    history: { natural: true, permanent: false, directDye: false, boxDye: false, henna: false, previousLightening: false },
+    length: 'medium', density: 'medium', elasticity: 'good', porosity: 'normal', conditionNotes: '', strandTest: 'none', wantsCut: false, notes: '',
+  },
+  photoIds: [],
+});

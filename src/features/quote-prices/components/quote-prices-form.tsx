@@ -1,0 +1,47 @@
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useForm } from 'react-hook-form';
+import { QuotePricesSchema, type QuotePrices } from '../../../../shared/schemas/quote-prices.schemas';
+import { Button } from '../../../components/ui/button';
+import { FormAlert } from '../../../components/ui/form-alert';
+import { TextField } from '../../../components/ui/text-field';
+import { fieldError, showServerErrors } from '../../../lib/form-errors';
+import { MoneyField } from '../../consultations/components/money-field';
+import { productTypeLabels, productTypeOptions } from '../../mix-log/product-type-labels';
+import { useSaveQuotePrices } from '../api/quote-price-queries';
+
+/** The hourly rate for correction work and the cost per gram of mixed product for each generic product type. */
+export function QuotePricesForm({ initial }: { initial: QuotePrices }) {
+  const save = useSaveQuotePrices();
+  const { register, control, handleSubmit, setError, formState } = useForm<QuotePrices>({ resolver: zodResolver(QuotePricesSchema), defaultValues: initial });
+  const err = (path: string) => fieldError(formState.errors, path);
+  const submit = handleSubmit((body) => save.mutateAsync(body).catch((e) => showServerErrors(e, setError, ['correctionCentsPerHour'])));
+  return (
+    <form onSubmit={(e) => void submit(e)} noValidate aria-label="Quote prices" className="flex flex-col gap-4">
+      {formState.errors.root?.server && <FormAlert>{formState.errors.root.server.message}</FormAlert>}
+      {save.isSuccess && <FormAlert tone="success">Prices saved. New quotes and mix-log estimates use them.</FormAlert>}
+      <MoneyField control={control} name="correctionCentsPerHour" label="Hourly rate for colour and correction work" error={err('correctionCentsPerHour')} />
+      <fieldset className="flex flex-col gap-2">
+        <legend className="mb-1 font-bold">Cost per gram of mixed product, in cents (leave empty if unknown)</legend>
+        <div className="grid gap-3 sm:grid-cols-2 lg:grid-cols-4">
+          {productTypeOptions.map(({ value }) => (
+            <TextField
+              key={value}
+              label={productTypeLabels[value]}
+              type="number"
+              step="0.1"
+              inputMode="decimal"
+              error={err(`productCentsPerGram.${value}`)}
+              {...register(`productCentsPerGram.${value}`, { setValueAs: (v: unknown) => (v === '' || v === undefined || v === null ? undefined : Number(v)) })}
+            />
+          ))}
+        </div>
+      </fieldset>
+      <p className="text-sm text-ink/80">Estimates only: the licensed professional decides what each head needs.</p>
+      <div>
+        <Button type="submit" busy={formState.isSubmitting}>
+          Save prices
+        </Button>
+      </div>
+    </form>
+  );
+}

@@ -1,0 +1,32 @@
+import { queryOptions, useMutation, useQueryClient } from '@tanstack/react-query';
+import type { z } from 'zod';
+import { apiPaths } from '../../../../shared/api/api-paths';
+import { RecordSkinTestSchema, SkinTestListSchema, SkinTestSchema } from '../../../../shared/schemas/skin-test.schemas';
+import { StrandTestListSchema, StrandTestSchema, type RecordStrandTest } from '../../../../shared/schemas/strand-test.schemas';
+import { apiGet, apiWrite } from '../../../lib/api-client';
+
+export const strandTestsPath = (clientId: string) => `/api/clients/${clientId}/strand-tests`;
+
+export const testRecordQueries = {
+  all: () => ['test-records'] as const,
+  skin: (clientId: string) =>
+    queryOptions({ queryKey: [...testRecordQueries.all(), 'skin', clientId] as const, queryFn: () => apiGet(apiPaths.skinTests(clientId), SkinTestListSchema) }),
+  strand: (clientId: string) =>
+    queryOptions({ queryKey: [...testRecordQueries.all(), 'strand', clientId] as const, queryFn: () => apiGet(strandTestsPath(clientId), StrandTestListSchema) }),
+};
+
+export function useRecordSkinTest(clientId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (body: z.input<typeof RecordSkinTestSchema>) => apiWrite('POST', apiPaths.skinTests(clientId), body, SkinTestSchema),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: testRecordQueries.skin(clientId).queryKey }),
+  });
+}
+
+export function useRecordStrandTest(clientId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (body: RecordStrandTest) => apiWrite('POST', strandTestsPath(clientId), body, StrandTestSchema),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: testRecordQueries.strand(clientId).queryKey }),
+  });
+}

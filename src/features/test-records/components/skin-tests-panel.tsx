@@ -1,0 +1,68 @@
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useQuery } from '@tanstack/react-query';
+import { DateTime } from 'luxon';
+import { useForm } from 'react-hook-form';
+import type { z } from 'zod';
+import { RecordSkinTestSchema } from '../../../../shared/schemas/skin-test.schemas';
+import { Button } from '../../../components/ui/button';
+import { FormAlert } from '../../../components/ui/form-alert';
+import { Notice } from '../../../components/ui/notice';
+import { SelectField } from '../../../components/ui/select-field';
+import { TextField } from '../../../components/ui/text-field';
+import { fieldError, showServerErrors } from '../../../lib/form-errors';
+import { formatDay, formatTime } from '../../../lib/time';
+import { testRecordQueries, useRecordSkinTest } from '../api/test-record-queries';
+import { InstantField } from './instant-field';
+
+type Input = z.input<typeof RecordSkinTestSchema>;
+const resultLabels = { pending: 'Applied, not read yet', negative: 'Negative (no reaction)', positive: 'Positive (reaction)', unclear: 'Unclear' } as const;
+const resultOptions = Object.entries(resultLabels).map(([value, label]) => ({ value, label }));
+
+/** The client's skin tests with who recorded them, and the form to record one. */
+export function SkinTestsPanel({ clientId, zone }: { clientId: string; zone: string }) {
+  const list = useQuery(testRecordQueries.skin(clientId));
+  const record = useRecordSkinTest(clientId);
+  const now = DateTime.now().setZone(zone).startOf('minute').toISO({ suppressMilliseconds: true })!;
+  const form = useForm<Input>({ resolver: zodResolver(RecordSkinTestSchema), defaultValues: { appliedAt: now, readAt: null, result: 'pending', product: '', notes: '' } });
+  const { register, control, handleSubmit, setError, formState, reset } = form;
+  const err = (path: string) => fieldError(formState.errors, path);
+  const submit = handleSubmit((body) => record.mutateAsync(body).then(() => reset(), (e) => showServerErrors(e, setError, ['appliedAt', 'readAt', 'result', 'product', 'notes'])));
+  const latest = list.data?.tests[0];
+  return (
+    <div className="flex flex-col gap-4">
+      {latest && (latest.result === 'positive' || latest.result === 'unclear') && (
+        <Notice tone="danger" title={`The latest skin test was ${latest.result}: oxidative colour cannot be booked.`}>
+          {latest.result === 'unclear' ? 'Repeat the test before any oxidative colour.' : 'Do not colour with oxidative products; follow local regulations and licensed practice.'}
+        </Notice>
+      )}
+      {list.isError && <FormAlert>{list.error.message}</FormAlert>}
+      {list.data && list.data.tests.length === 0 && <p className="text-ink/80">No skin test on record.</p>}
+      <ul className="flex flex-col gap-2" aria-label="Skin tests">
+        {list.data?.tests.map((t) => (
+          <li key={t.id} className="rounded-lg bg-linen px-3 py-2">
+            <span className="font-bold">{resultLabels[t.result]}</span> · applied {formatDay(t.appliedAt, zone)} {formatTime(t.appliedAt, zone)}
+            {t.readAt && ` · read ${formatDay(t.readAt, zone)} ${formatTime(t.readAt, zone)}`}
+            {t.product && ` · ${t.product}`} · by {t.recordedByName ?? 'the salon'}
+            {t.notes && <span className="block text-sm">{t.notes}</span>}
+          </li>
+        ))}
+      </ul>
+      <form onSubmit={(e) => void submit(e)} noValidate aria-label="Record a skin test" className="flex flex-col gap-3 rounded-lg p-3 ring-1 ring-ink/15">
+        <p className="font-bold">Record a skin test</p>
+        {formState.errors.root?.server && <FormAlert>{formState.errors.root.server.message}</FormAlert>}
+        <div className="flex flex-wrap gap-3">
+          <InstantField control={control} name="appliedAt" label="Applied at" zone={zone} error={err('appliedAt')} />
+          <InstantField control={control} name="readAt" label="Read at" zone={zone} optional error={err('readAt')} />
+          <SelectField label="Result" options={resultOptions} error={err('result')} {...register('result')} />
+        </div>
+        <TextField label="Product type tested" hint="e.g. permanent colour with 6 % developer" error={err('product')} {...register('product')} />
+        <TextField label="Notes" error={err('notes')} {...register('notes')} />
+        <div>
+          <Button type="submit" variant="secondary" busy={formState.isSubmitting}>
+            Record skin test
+          </Button>
+        </div>
+      </form>
+    </div>
+  );
+}

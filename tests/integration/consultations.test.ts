@@ -1,0 +1,155 @@
+import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
+import { signedInAgent, startTestApp, type TestApp } from '../setup/test-app';
+import { insertSalon, type SalonFixture } from '../factories/salon';
+import { insertUser, type UserFixture } from '../factories/user';
+import { insertNegativeSkinTest, insertPlannedService } from '../factories/service';
+import { futureWeekday } from '../setup/dates';
+import { consultationPaths } from '../../shared/api/consultation-paths';
+
+let t: TestApp;
+let salon: SalonFixture;
+let client: UserFixture;
+let other: UserFixture;
+let serviceId: string;
+let stylist$: Awaited<ReturnType<typeof signedInAgent>>;
+let desk$: Awaited<ReturnType<typeof signedInAgent>>;
+let client$: Awaited<ReturnType<typeof signedInAgent>>;
+const tuesday = futureWeekday(2, 3);
+
+const virgin = { natural: true, permanent: false, directDye: false, boxDye: false, henna: false, previousLightening: false };
+const consultation = (over: object = {}) => ({
+  currentLevel: 5, targetLevel: 6, history: virgin, length: 'medium', density: 'medium', elasticity: 'good', porosity: 'normal',
+  conditionNotes: 'Healthy, normal stretch', strandTest: 'none', wantsCut: false, notes: '', ...over,
+});
+
+beforeAll(async () => {
+  t = await startTestApp();
+  const db = t.testDb.db;
+  salon = await insertSalon(db, { chairs: 2, basins: 1 });
+  const stylist = await insertUser(db, salon.salonId, 'stylist', { skills: ['colour'] });
+  const desk = await insertUser(db, salon.salonId, 'front_desk');
+  client = await insertUser(db, salon.salonId, 'client');
+  other = await insertUser(db, salon.salonId, 'client');
+  serviceId = await insertPlannedService(db, salon.salonId, { needsSkinTest: true, depositCents: 4000, name: 'Colour correction' });
+  await insertNegativeSkinTest(db, salon.salonId, client.clientId!);
+  await db.updateTable('salons').set({ correction_cents_per_hour: 12000 }).where('id', '=', salon.salonId).execute();
+  await db.insertInto('product_costs').values({ salon_id: salon.salonId, product_type: 'permanent', cents_per_gram: 5 }).execute();
+  stylist$ = await signedInAgent(t.app, stylist.email, stylist.password);
+  desk$ = await signedInAgent(t.app, desk.email, desk.password);
+  client$ = await signedInAgent(t.app, client.email, client.password);
+});
+afterAll(() => t.close());
+
+const list = async (clientId = client.clientId!) => (await stylist$.get(consultationPaths.ofClient(clientId))).body.consultations as { id: string }[];
+
+describe('proposing a quote', () => {
+  it("prices chair time at the salon's hourly rate plus product at cost, with the service's deposit", async () => {
+    const res = await stylist$.write('post', consultationPaths.propose, { consultation: consultation(), serviceId: null });
+    expect(res.status).toBe(200);
+    expect(res.body.serviceId).toBe(serviceId);
+    expect(res.body.stepPlan.sittings).toHaveLength(1);
+    // Apply colour 30 + develops up to 45 + rinse 15 + blow-dry 35 = 125 min at $120.00/h = $250.00;
+    // 60 g of permanent colour at 5 ¢/g = $3.00 (hand arithmetic). Deposit: the service's $40.00.
+    expect(res.body.lines).toEqual([
+      { label: 'Colour work, 125 min at the hourly rate', cents: 25000 },
+      { label: 'Product (estimate)', cents: 300 },
+    ]);
+    expect(res.body.priceCents).toBe(25300);
+    expect(res.body.depositCents).toBe(4000);
+  });
+
+  it('refuses levels outside 1–10, naming each field', async () => {
+    const res = await stylist$.write('post', consultationPaths.propose, { consultation: consultation({ currentLevel: 0, targetLevel: 12 }), serviceId: null });
+    expect(res.status).toBe(400);
+    expect(Object.keys(res.body.error.fields)).toEqual(['consultation.currentLevel', 'consultation.targetLevel']);
+  });
+});
+
+describe('recording a consultation and its quote', () => {
+  const quote = { serviceId: '', stepPlan: { sittings: [{ steps: [{ kind: 'hands_on', label: 'Apply colour', minutes: 40 }, { kind: 'developing', label: 'Colour develops', minMinutes: 30, maxMinutes: 40 }, { kind: 'basin', label: 'Rinse', minutes: 15 }] }] }, priceCents: 26000, depositCents: 6000, notes: 'Edited: longer application' };
+
+  it('stores nothing when the input is bad: level, deposit above price, another client’s photo', async () => {
+    const bad = [
+      { clientId: client.clientId, consultation: consultation({ targetLevel: 11 }), photoIds: [], quote: { ...quote, serviceId } },
+      { clientId: client.clientId, consultation: consultation(), photoIds: [], quote: { ...quote, serviceId, depositCents: 30000 } },
+    ];
+    const levels = await stylist$.write('post', consultationPaths.create, bad[0]);
+    expect(levels.status).toBe(400);
+    expect(levels.body.error.fields['consultation.targetLevel']).toMatch(/1–10/);
+    const deposit = await stylist$.write('post', consultationPaths.create, bad[1]);
+    expect(deposit.body.error.fields['quote.depositCents']).toMatch(/more than the price/);
+    const [photo] = await t.testDb.db
+      .insertInto('client_photos')
+      .values({ salon_id: salon.salonId, client_id: other.clientId!, booking_id: null, kind: 'hair_now', storage_key: 'x/y.jpg', mime: 'image/jpeg', bytes: 10, width: 1, height: 1 })
+      .returning('id')
+      .execute();
+    const photos = await stylist$.write('post', consultationPaths.create, { ...bad[1], quote: { ...quote, serviceId }, photoIds: [photo.id] });
+    expect(photos.status).toBe(400);
+    expect(photos.body.error.fields.photoIds).toMatch(/own photos/);
+    expect(await list()).toEqual([]);
+  });
+
+  it('saves the edited quote with the rules’ warnings; the desk books it with the quote’s plan, price and deposit', async () => {
+    const coloured = consultation({ currentLevel: 4, targetLevel: 6, history: { ...virgin, natural: false, permanent: true } });
+    const created = await stylist$.write('post', consultationPaths.create, { clientId: client.clientId, consultation: coloured, photoIds: [], quote: { ...quote, serviceId } });
+    expect(created.status).toBe(201);
+    expect(created.body.quote).toMatchObject({ status: 'draft', priceCents: 26000, depositCents: 6000, notes: 'Edited: longer application' });
+    // Lightening previously coloured hair with no strand test on record (common practice: strand test first).
+    expect(created.body.quote.warnings.map((w: { code: string }) => w.code)).toContain('strand_test_missing');
+    expect(await list()).toHaveLength(1);
+
+    const edited = await stylist$.write('put', consultationPaths.quote(created.body.id), { ...quote, serviceId, depositCents: 99999 });
+    expect(edited.status).toBe(400);
+    expect(edited.body.error.fields.depositCents).toBeDefined();
+
+    const options = await desk$.write('post', '/api/booking-options', { clientId: client.clientId, serviceId, stepPlan: created.body.quote.stepPlan, stylistId: null, earliestDate: tuesday });
+    expect(options.status).toBe(200);
+    const option = options.body.options[0];
+    const book = (over: object) =>
+      desk$.write('post', '/api/bookings', {
+        clientId: client.clientId, serviceId, stepPlan: created.body.quote.stepPlan, stylistId: option.stylistId, start: option.sittings[0].start,
+        idempotencyKey: `quote-${Math.random()}`, ...over,
+      });
+    // Another client's booking cannot claim this quote.
+    const wrong = await book({ clientId: other.clientId, quoteId: created.body.quote.id });
+    expect(wrong.status).toBe(400);
+    const booked = await book({ quoteId: created.body.quote.id });
+    expect(booked.status).toBe(201);
+    const booking = await t.testDb.db.selectFrom('bookings').select(['quote_id', 'price_cents', 'deposit_cents']).where('id', '=', booked.body.id).executeTakeFirstOrThrow();
+    expect(booking).toEqual({ quote_id: created.body.quote.id, price_cents: 26000, deposit_cents: 6000 });
+    const view = await desk$.get(consultationPaths.one(created.body.id));
+    expect(view.body.quote.bookingIds).toEqual([booked.body.id]);
+  });
+});
+
+describe('sending and accepting a quote', () => {
+  it('e-mails the summary (draft → sent), and only the signed-in client accepts it (sent → accepted)', async () => {
+    const [consultation] = (await list()) as { id: string; quote: { id: string } }[];
+    // A draft is not the client's to see or accept yet.
+    expect((await client$.get(consultationPaths.myQuotes)).body.consultations).toEqual([]);
+    expect((await client$.write('post', consultationPaths.acceptMyQuote(consultation.quote.id), {})).status).toBe(404);
+
+    const sent = await stylist$.write('post', consultationPaths.sendQuote(consultation.id), {});
+    expect(sent.status).toBe(200);
+    expect(sent.body.quote.status).toBe('sent');
+    const mail = await vi.waitFor(() => {
+      const found = t.smtp.messages.find((m) => m.to === client.email && /quote/i.test(m.subject));
+      if (!found) throw new Error('no quote e-mail yet');
+      return found;
+    });
+    expect(mail.text).toMatch(/Price: \$260\.00\. Deposit to book: \$60\.00\./);
+    expect(mail.text).toMatch(/Sitting 1 of 1, up to 1 h 35 min: Apply colour, Colour develops, Rinse\./);
+    expect(mail.text).toMatch(/skin test/);
+
+    // Another client cannot accept it; the staff cannot use the client's route.
+    const other$ = await signedInAgent(t.app, other.email, other.password);
+    expect((await other$.write('post', consultationPaths.acceptMyQuote(consultation.quote.id), {})).status).toBe(404);
+    expect((await desk$.write('post', consultationPaths.acceptMyQuote(consultation.quote.id), {})).status).toBe(403);
+
+    const accepted = await client$.write('post', consultationPaths.acceptMyQuote(consultation.quote.id), {});
+    expect(accepted.status).toBe(200);
+    expect(accepted.body.quote.status).toBe('accepted');
+    expect(accepted.body.quote.acceptedAt).not.toBeNull();
+    expect((await client$.get(consultationPaths.myQuotes)).body.consultations[0].quote.status).toBe('accepted');
+  });
+});

@@ -1,0 +1,62 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { signedInAgent, startTestApp, type TestApp } from '../setup/test-app';
+import { insertSalon, type SalonFixture } from '../factories/salon';
+import { insertUser, type UserFixture } from '../factories/user';
+import { insertService } from '../factories/booking';
+import { insertBooking } from '../../server/features/bookings/bookings.repository';
+
+let t: TestApp;
+let salon: SalonFixture;
+let stylist: UserFixture;
+let bookingId: string;
+let owner$: Awaited<ReturnType<typeof signedInAgent>>;
+let stylist$: Awaited<ReturnType<typeof signedInAgent>>;
+let desk$: Awaited<ReturnType<typeof signedInAgent>>;
+const HOUR = 3_600_000;
+
+beforeAll(async () => {
+  t = await startTestApp();
+  const db = t.testDb.db;
+  salon = await insertSalon(db);
+  stylist = await insertUser(db, salon.salonId, 'stylist');
+  const client = await insertUser(db, salon.salonId, 'client');
+  const owner = await insertUser(db, salon.salonId, 'owner');
+  const desk = await insertUser(db, salon.salonId, 'front_desk');
+  const start = Math.floor(Date.now() / HOUR) * HOUR - 2 * HOUR;
+  bookingId = await insertBooking(db, {
+    salonId: salon.salonId, clientId: client.clientId!, serviceId: await insertService(db, salon.salonId), stylistId: stylist.staffId!, status: 'finished',
+    stepPlan: { sittings: [{ steps: [{ kind: 'hands_on', label: 'Apply', minutes: 60 }] }] }, priceCents: 0, depositCents: 0, createdBy: null,
+    sittings: [{ chairId: salon.chairs[0], steps: [{ kind: 'hands_on', label: 'Apply', start: new Date(start), end: new Date(start + HOUR), basinId: null }] }],
+  });
+  owner$ = await signedInAgent(t.app, owner.email, owner.password);
+  stylist$ = await signedInAgent(t.app, stylist.email, stylist.password);
+  desk$ = await signedInAgent(t.app, desk.email, desk.password);
+});
+afterAll(() => t.close());
+
+const bowl = (bowlNo: number, productType: string, grams: number[]) => ({
+  sittingSeq: 1, bowlNo, productType, shadeNotes: '', developerPercent: 6, ratio: '1:2',
+  grams: grams.map((g, i) => ({ part: i === 0 ? productType : 'developer', grams: g })), appliedTo: '', plannedMinutes: null, actualMinutes: null, heat: false, resultNotes: '',
+});
+const sitting = async () => (await stylist$.get(`/api/bookings/${bookingId}/mix-logs`)).body.sittings[0];
+
+describe('product cost per sitting', () => {
+  it('is unknown until the owner sets a cost per gram for every type used, then grams × cost', async () => {
+    expect((await stylist$.write('post', `/api/bookings/${bookingId}/mix-logs`, bowl(1, 'lightener', [30, 60]))).status).toBe(201);
+    expect((await stylist$.write('post', `/api/bookings/${bookingId}/mix-logs`, bowl(2, 'toner', [20, 30]))).status).toBe(201);
+    expect((await sitting()).estimatedCostCents).toBeNull();
+
+    const saved = await owner$.write('put', '/api/owner/quote-prices', { correctionCentsPerHour: 11000, productCentsPerGram: { lightener: 4, toner: 7.5 } });
+    expect(saved.status).toBe(200);
+    // Lightener bowl 30 + 60 = 90 g × 4 ¢ = 360 ¢; toner bowl 20 + 30 = 50 g × 7.5 ¢ = 375 ¢; 735 ¢ in all (hand arithmetic).
+    expect(await sitting()).toMatchObject({ totalGrams: 140, estimatedCostCents: 735 });
+  });
+
+  it('only the owner sets prices; bad values name the field and change nothing', async () => {
+    expect((await desk$.write('put', '/api/owner/quote-prices', { correctionCentsPerHour: 1, productCentsPerGram: {} })).status).toBe(403);
+    const bad = await owner$.write('put', '/api/owner/quote-prices', { correctionCentsPerHour: -5, productCentsPerGram: { lightener: -1, glitter: 3 } });
+    expect(bad.status).toBe(400);
+    expect(Object.keys(bad.body.error.fields)).toEqual(expect.arrayContaining(['correctionCentsPerHour', 'productCentsPerGram.lightener']));
+    expect((await owner$.get('/api/owner/quote-prices')).body).toEqual({ correctionCentsPerHour: 11000, productCentsPerGram: { lightener: 4, toner: 7.5 } });
+  });
+});
