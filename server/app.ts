@@ -28,6 +28,7 @@ import { registerMyBookingRoutes } from './features/online-booking/my-bookings.r
 import { registerHairHistoryRoutes } from './features/hair-history/hair-history.routes';
 import { registerPhotoRoutes } from './features/photos/photos.routes';
 import { registerMixLogRoutes } from './features/mix-logs/mix-logs.routes';
+import { registerMessageRoutes } from './features/messages/messages.routes';
 import { createDiskStorage } from './storage/disk-storage';
 
 const clientDist = path.join(path.dirname(fileURLToPath(import.meta.url)), '..', 'dist', 'client');
@@ -71,6 +72,7 @@ export function createApp(deps: Omit<AppDeps, 'table' | 'storage'> & { storage?:
     registerHairHistoryRoutes,
     registerPhotoRoutes,
     registerMixLogRoutes,
+    registerMessageRoutes,
   ]) {
     register(full);
   }

@@ -7,11 +7,13 @@ import { apiWrite } from '../../../lib/api-client';
 import { clientQueries } from './client-queries';
 
 export type CreateClientInput = z.input<typeof CreateClientSchema>;
+/** What the form hands over after parsing: the phone already in E.164, blanks as null. */
+export type CreateClientValues = z.output<typeof CreateClientSchema>;
 
 export function useCreateClient() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (body: CreateClientInput) => apiWrite('POST', apiPaths.clients, body, ClientSummarySchema),
+    mutationFn: (body: CreateClientValues) => apiWrite('POST', apiPaths.clients, body, ClientSummarySchema),
     // A new client can match any earlier search.
     onSuccess: () => queryClient.invalidateQueries({ queryKey: clientQueries.lists() }),
   });
