@@ -8,6 +8,7 @@ import { hashPassword } from '../auth/password';
 import { insertBooking, tstzRange, type NewStep } from '../features/bookings/bookings.repository';
 import { DEMO_PASSWORD, demoClientNames, demoSalon, demoServices, demoStaff, type ServiceKey, type StylistKey } from './demo-catalogue';
 import { correctionDayOne, correctionDayTwo, ordinaryDay, type Placement } from './demo-day-patterns';
+import { planDemoMessages } from './demo-messages';
 
 export async function isDatabaseEmpty(db: Db): Promise<boolean> {
   const row = await db.selectFrom('salons').select(sql<number>`count(*)::int`.as('n')).executeTakeFirstOrThrow();
@@ -31,6 +32,7 @@ export async function loadDemoSalon(db: Kysely<Database>, now: Date): Promise<{ 
     const ids = await insertSalonAndPeople(trx, passwordHash, now);
     const bookings = await insertDemoBook(trx, ids, now);
     await insertDemoStandby(trx, ids);
+    await planDemoMessages(trx, ids.salonId, ids.services, now);
     return { bookings };
   });
 }

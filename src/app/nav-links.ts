@@ -14,6 +14,7 @@ const deskLinks = [
 export const navLinks: Record<Role, { to: string; label: string }[]> = {
   owner: [
     { to: paths.owner, label: 'Overview' },
+    { to: '/owner/follow-up-rules', label: 'Follow-up rules' },
     ...deskLinks,
   ],
   front_desk: deskLinks,

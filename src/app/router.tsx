@@ -62,6 +62,7 @@ const routes: RouteObject[] = [
       page('forgot-password', () => import('./routes/forgot-password')),
       page('reset-password', () => import('./routes/reset-password')),
       rolePage('owner', ['owner'], () => import('./routes/owner-home')),
+      rolePage('owner/follow-up-rules', ['owner'], () => import('./routes/owner-follow-ups')),
       rolePage('desk', ['front_desk', 'owner'], () => import('./routes/desk-home')),
       rolePage('desk/clients/:id', ['front_desk', 'owner'], () => import('./routes/desk-client')),
       rolePage('desk/outbox', ['front_desk', 'owner'], () => import('./routes/outbox')),
