@@ -103,12 +103,12 @@ export interface MessageListItem {
   bookingId: string | null;
 }
 
-/** The salon's send log for the Outbox, newest planned first. */
+/** The salon's send log for the Outbox: the most recently planned first (what just happened is on top). */
 export async function listMessages(db: Db, salonId: string, status: MessageStatus | undefined, limit = 200): Promise<MessageListItem[]> {
   let q = db
     .selectFrom('messages')
     .select(['id', 'kind', 'channel', 'to_address as toAddress', 'subject', 'body', 'send_at as sendAt', 'status', 'attempts', 'last_error as lastError', 'sent_at as sentAt', 'booking_id as bookingId'])
     .where('salon_id', '=', salonId);
   if (status) q = q.where('status', '=', status);
-  return q.orderBy('send_at', 'desc').orderBy('created_at', 'desc').limit(limit).execute();
+  return q.orderBy('created_at', 'desc').orderBy('send_at', 'desc').limit(limit).execute();
 }
