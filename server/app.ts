@@ -36,6 +36,7 @@ import { registerServiceSetupRoutes } from './features/setup/services-setup.rout
 import { registerConsultationRoutes } from './features/consultations/consultations.routes';
 import { registerStrandTestRoutes } from './features/strand-tests/strand-tests.routes';
 import { registerQuotePriceRoutes } from './features/quote-prices/quote-prices.routes';
+import { registerMessageRoutes } from './features/messages/messages.routes';
 import { createDiskStorage } from './storage/disk-storage';
 
 const clientDist = path.join(path.dirname(fileURLToPath(import.meta.url)), '..', 'dist', 'client');
@@ -87,6 +88,7 @@ export function createApp(deps: Omit<AppDeps, 'table' | 'storage'> & { storage?:
     registerConsultationRoutes,
     registerStrandTestRoutes,
     registerQuotePriceRoutes,
+    registerMessageRoutes,
   ]) {
     register(full);
   }

@@ -16,6 +16,10 @@ const ConfigSchema = z.object({
   TWILIO_ACCOUNT_SID: z.string().startsWith('AC').optional(),
   TWILIO_AUTH_TOKEN: z.string().optional(),
   SMS_FROM: z.string().default('+19705550100'),
+  /** Outside production: a Twilio-compatible API to send through instead of starting the in-process fake. */
+  SMS_API_URL: z.string().url().optional(),
+  /** A claim this old with no provider reference is taken for a dead worker's and queued again. */
+  MESSAGE_CLAIM_TIMEOUT_SECONDS: z.coerce.number().int().min(1).max(3600).default(300),
   STRIPE_SECRET_KEY: z.string().startsWith('sk_').optional(),
   UPLOADS_DIR: z.string().min(1).optional(),
   /** A session ends after this many minutes without a request… */
@@ -39,6 +43,8 @@ export interface Config {
   mailFrom: string;
   twilio: { accountSid: string; authToken: string; from: string } | null;
   stripeSecretKey: string | null;
+  smsApiUrl: string | null;
+  messageClaimTimeoutSeconds: number;
   /** Hosted services are replaced by in-process fakes. */
   useFakes: boolean;
   /** Where uploaded photos are kept: outside the web root, served only through the API. */
@@ -64,6 +70,8 @@ export function loadConfig(env: Record<string, string | undefined> = process.env
     smtpUrl: parsed.SMTP_URL ?? null,
     mailFrom: parsed.MAIL_FROM,
     stripeSecretKey: parsed.STRIPE_SECRET_KEY ?? null,
+    smsApiUrl: parsed.DWELL_MODE === 'production' ? null : (parsed.SMS_API_URL ?? null),
+    messageClaimTimeoutSeconds: parsed.MESSAGE_CLAIM_TIMEOUT_SECONDS,
     twilio:
       parsed.TWILIO_ACCOUNT_SID && parsed.TWILIO_AUTH_TOKEN
         ? { accountSid: parsed.TWILIO_ACCOUNT_SID, authToken: parsed.TWILIO_AUTH_TOKEN, from: parsed.SMS_FROM }

@@ -3,9 +3,10 @@ import type { AddressInfo } from 'node:net';
 import { loadConfig, type Config } from './config';
 import { createDb, createPool } from './db/database';
 import { createApp } from './app';
-import { startOutsideServices } from './services';
+import { FAKE_TWILIO, startOutsideServices } from './services';
 import { startJobQueue } from './jobs/job-queue';
 import { appJobs } from './jobs/app-jobs';
+import { inboundSmsWebhookPath } from '../shared/schemas/inbound-sms.schemas';
 
 export interface RunningServer {
   outside: Awaited<ReturnType<typeof startOutsideServices>>;
@@ -19,12 +20,15 @@ export async function startServer(config: Config = loadConfig()): Promise<Runnin
   const outside = await startOutsideServices(config);
   const pool = createPool(config.databaseUrl);
   const db = createDb(pool);
-  const jobs = await startJobQueue(config.databaseUrl, appJobs(db, outside));
+  const jobs = await startJobQueue(config.databaseUrl, appJobs(db, outside, { claimTimeoutSeconds: config.messageClaimTimeoutSeconds }));
   const app = createApp({ db, pool, config, jobs, ...outside });
   const server = await listen(app, config);
   const { port } = server.address() as AddressInfo;
+  const url = `http://${config.host}:${port}`;
+  // The SMS fake delivers simulated inbound texts (STOP/START) to this server's webhook, signed as the provider would.
+  outside.smsFake?.setInboundWebhook(`${url}${inboundSmsWebhookPath}`, FAKE_TWILIO.authToken);
   return {
-    url: `http://${config.host}:${port}`,
+    url,
     app,
     outside,
     async close() {

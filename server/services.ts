@@ -17,12 +17,13 @@ export interface OutsideServices {
 }
 
 // A made-up account for the fake: the SDK only insists that the account id starts with "AC".
-const FAKE_TWILIO = { accountSid: `AC${'0'.repeat(32)}`, authToken: 'local-fake', from: '+19705550100' };
+export const FAKE_TWILIO = { accountSid: `AC${'0'.repeat(32)}`, authToken: 'local-fake', from: '+19705550100' };
 
 /** E-mail, SMS and payments: real services in production, in-process fakes everywhere else. */
 export async function startOutsideServices(config: Config): Promise<OutsideServices> {
-  const smtpFake = config.useFakes ? await startSmtpFake() : null;
-  const smsFake = config.useFakes ? await startSmsFake() : null;
+  // A given SMTP_URL / SMS_API_URL (e.g. fakes shared by several app processes) replaces the in-process fake.
+  const smtpFake = config.useFakes && !config.smtpUrl ? await startSmtpFake() : null;
+  const smsFake = config.useFakes && !config.smsApiUrl ? await startSmsFake() : null;
   const paymentsFake = config.useFakes ? await startPaymentsFake() : null;
   if (!paymentsFake && !config.stripeSecretKey) throw new Error('STRIPE_SECRET_KEY is required in production');
   const payments = paymentsFake
@@ -30,7 +31,8 @@ export async function startOutsideServices(config: Config): Promise<OutsideServi
     : createPayments({ secretKey: config.stripeSecretKey! });
   const smtpUrl = smtpFake?.url ?? config.smtpUrl;
   if (!smtpUrl) throw new Error('SMTP_URL is required in production');
-  const twilioConfig = smsFake ? { ...FAKE_TWILIO, baseUrl: smsFake.url } : config.twilio;
+  const fakeSmsUrl = smsFake?.url ?? config.smsApiUrl;
+  const twilioConfig = fakeSmsUrl ? { ...FAKE_TWILIO, baseUrl: fakeSmsUrl } : config.twilio;
   if (!twilioConfig) throw new Error('TWILIO_ACCOUNT_SID and TWILIO_AUTH_TOKEN are required in production');
   const mailer = createMailer(smtpUrl, config.mailFrom);
   return {

@@ -137,8 +137,14 @@ export interface ClientsTable {
   email: string | null;
   phone: string | null;
   notes: Generated<string>;
+  /** Where service messages go; marketing follow-ups also need marketing_opt_in. */
+  message_channel: ColumnType<MessageChannelChoice, MessageChannelChoice | undefined, MessageChannelChoice>;
+  marketing_opt_in: Generated<boolean>;
+  /** Set by an inbound STOP reply: no SMS until START. */
+  sms_stopped_at: ColumnType<Date | null, Date | string | null | undefined, Date | string | null>;
   created_at: DefaultTimestamp;
 }
+export type MessageChannelChoice = 'sms' | 'email' | 'both';
 
 export interface BookingsTable {
   id: Generated<string>;
@@ -403,6 +409,19 @@ export interface QuotesTable {
   sent_at: ColumnType<Date | null, Date | null | undefined, Date | null>;
   accepted_at: ColumnType<Date | null, Date | null | undefined, Date | null>;
   updated_at: DefaultTimestamp;
+  follow_up_rules: FollowUpRulesTable;
+}
+
+/** Owner-edited marketing follow-ups per service (see migrations/20261203T0605). */
+export interface FollowUpRulesTable {
+  id: Generated<string>;
+  salon_id: string;
+  service_id: string;
+  title: string;
+  body: string;
+  rrule: string;
+  version: Generated<number>;
+  created_at: DefaultTimestamp;
 }
 
 export type MessageStatus = 'queued' | 'sending' | 'sent' | 'failed' | 'dropped';
@@ -428,6 +447,10 @@ export interface MessagesTable {
   last_error: string | null;
   provider_ref: string | null;
   claimed_at: Timestamp | null;
+  /** The instant a pg-boss job was queued for; differs from send_at when the row needs a new one. */
+  job_at: ColumnType<Date | null, Date | string | null | undefined, Date | string | null>;
+  /** When the message was first due; set on its first retry (send_at then moves with the backoff). */
+  due_at: ColumnType<Date | null, Date | string | null | undefined, Date | string | null>;
   sent_at: Timestamp | null;
   created_at: DefaultTimestamp;
 }

@@ -1,4 +1,5 @@
 import express from 'express';
+import twilio from 'twilio';
 import type { Server } from 'node:http';
 import type { AddressInfo } from 'node:net';
 import type { CapturedSms } from '../../shared/schemas/sms.schemas';
@@ -8,6 +9,17 @@ export interface SmsFake {
   messages: CapturedSms[];
   /** The next `n` requests answer 503, to exercise retries. */
   failNext(n: number): void;
+  /**
+   * The next `n` requests are held open and never answered or kept: a provider that has not accepted the
+   * message yet, so a worker killed meanwhile has claimed a message that nobody received.
+   */
+  stallNext(n: number): void;
+  /** How many requests are being held by stallNext. */
+  stalled(): number;
+  /** Where inbound texts are posted (the app's webhook), signed as the provider signs them. */
+  setInboundWebhook(url: string, authToken: string): void;
+  /** A text from a phone to the salon's number, delivered to the webhook; resolves with the webhook's status. */
+  simulateInbound(from: string, body: string): Promise<number>;
   close(): Promise<void>;
 }
 
@@ -18,9 +30,18 @@ export interface SmsFake {
 export async function startSmsFake(port = 0): Promise<SmsFake> {
   const messages: CapturedSms[] = [];
   let failures = 0;
+  let stalls = 0;
+  let held = 0;
+  let webhook: { url: string; authToken: string } | null = null;
   const app = express();
   app.use(express.urlencoded({ extended: true }));
   app.post('/2010-04-01/Accounts/:sid/Messages.json', (req, res) => {
+    if (stalls > 0) {
+      stalls--;
+      held++;
+      req.socket.once('close', () => held--);
+      return; // never answered, never kept
+    }
     if (failures > 0) {
       failures--;
       return void res.status(503).json({ code: 20503, message: 'Service unavailable (fake)', status: 503 });
@@ -34,12 +55,31 @@ export async function startSmsFake(port = 0): Promise<SmsFake> {
   const server: Server = await new Promise((resolve) => {
     const s = app.listen(port, '127.0.0.1', () => resolve(s));
   });
+  let inbound = 0;
   return {
     url: `http://127.0.0.1:${(server.address() as AddressInfo).port}`,
     messages,
     failNext: (n) => {
       failures = n;
     },
-    close: () => new Promise((resolve) => server.close(() => resolve())),
+    stallNext: (n) => {
+      stalls = n;
+    },
+    stalled: () => held,
+    setInboundWebhook: (url, authToken) => {
+      webhook = { url, authToken };
+    },
+    async simulateInbound(from, body) {
+      if (!webhook) throw new Error('The SMS fake has no inbound webhook yet');
+      const params = { MessageSid: `SMIN${String(++inbound).padStart(30, '0')}`, AccountSid: `AC${'0'.repeat(32)}`, From: from, To: '+19705550100', Body: body, NumMedia: '0' };
+      // The provider signs each webhook request with the account's auth token (HMAC-SHA1 of URL + sorted params).
+      const signature = twilio.getExpectedTwilioSignature(webhook.authToken, webhook.url, params);
+      const res = await fetch(webhook.url, { method: 'POST', headers: { 'content-type': 'application/x-www-form-urlencoded', 'x-twilio-signature': signature }, body: new URLSearchParams(params) });
+      return res.status;
+    },
+    close: () => new Promise((resolve) => {
+      server.closeAllConnections();
+      server.close(() => resolve());
+    }),
   };
 }

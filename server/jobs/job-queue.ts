@@ -1,6 +1,7 @@
 import PgBoss from 'pg-boss';
 
-export type JobHandler = (data: Record<string, unknown>) => Promise<void>;
+/** A job's work; `queue` lets it queue further jobs (e.g. one per message at its exact instant). */
+export type JobHandler = (data: Record<string, unknown>, queue: JobQueue) => Promise<void>;
 
 export interface JobQueue {
   /** Runs `name` with `data` once, not before `at`. */
@@ -13,6 +14,8 @@ export interface JobDefinition {
   handler: JobHandler;
   /** Also run every minute (cron), to catch anything a scheduled run missed. */
   everyMinute?: boolean;
+  /** Also run once when the queue starts (a restarted worker catches up at once, not at the next minute). */
+  atStart?: boolean;
 }
 
 /**
@@ -23,17 +26,19 @@ export async function startJobQueue(databaseUrl: string, jobs: JobDefinition[]):
   const boss = new PgBoss({ connectionString: databaseUrl, schema: 'pgboss', migrate: false, max: 4 });
   boss.on('error', (err) => console.error('job queue:', err.message));
   await boss.start();
-  for (const job of jobs) {
-    await boss.createQueue(job.name);
-    await boss.work<Record<string, unknown>>(job.name, { pollingIntervalSeconds: 1 }, async (batch) => {
-      for (const item of batch) await job.handler(item.data ?? {});
-    });
-    if (job.everyMinute) await boss.schedule(job.name, '* * * * *', {});
-  }
-  return {
+  const queue: JobQueue = {
     async schedule(name, data, at) {
       await boss.send(name, data, { startAfter: at });
     },
     stop: () => boss.stop({ graceful: true, timeout: 5_000 }),
   };
+  for (const job of jobs) {
+    await boss.createQueue(job.name);
+    await boss.work<Record<string, unknown>>(job.name, { pollingIntervalSeconds: 1 }, async (batch) => {
+      for (const item of batch) await job.handler(item.data ?? {}, queue);
+    });
+    if (job.everyMinute) await boss.schedule(job.name, '* * * * *', {});
+    if (job.atStart) await boss.send(job.name, {});
+  }
+  return queue;
 }

@@ -4,6 +4,8 @@ export interface OutgoingMail {
   to: string;
   subject: string;
   text: string;
+  /** A simple HTML part beside the text (already escaped by its builder). */
+  html?: string;
   attachments?: { filename: string; content: string; contentType: string }[];
 }
 

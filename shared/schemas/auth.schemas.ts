@@ -1,9 +1,9 @@
 import { z } from 'zod';
 import { IdSchema, RoleSchema } from './common.schemas';
+import { EmailSchema, PhoneSchema } from './contact.schemas';
 
 export const PASSWORD_MIN_LENGTH = 10;
 
-const EmailSchema = z.string().trim().toLowerCase().pipe(z.email('Enter a valid e-mail address').max(254));
 const PasswordSchema = z
   .string()
   .min(PASSWORD_MIN_LENGTH, `Use at least ${PASSWORD_MIN_LENGTH} characters`)
@@ -16,11 +16,8 @@ export const SignUpBodySchema = z
   .object({
     name: z.string().trim().min(1, 'Enter your name').max(120),
     email: EmailSchema,
-    // E.164-ish: what SMS reminders need later; spaces and dashes are stripped first.
-    phone: z
-      .string()
-      .transform((s) => s.replace(/[\s\-().]/g, ''))
-      .pipe(z.string().regex(/^\+?[0-9]{7,15}$/, 'Enter a mobile number, e.g. +1 970 555 0142')),
+    // Stored in E.164: what SMS reminders and an inbound STOP are matched on.
+    phone: PhoneSchema,
     password: PasswordSchema,
     salonSlug: z.string().max(80).optional(),
   })

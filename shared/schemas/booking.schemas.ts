@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { IdSchema, InstantInputSchema, InstantSchema, isRealDateTime, LocalDateSchema, StepKindSchema } from './common.schemas';
 import { StepPlanSchema } from './step-plan.schemas';
+import { OptionalEmailSchema, OptionalPhoneSchema } from './contact.schemas';
 
 /** A wall-clock time in the salon's zone, `YYYY-MM-DDTHH:mm`. */
 export const LocalDateTimeSchema = z
@@ -102,12 +103,8 @@ export const BookingHistorySchema = z.object({ entries: z.array(AuditEntrySchema
 export const CreateClientSchema = z
   .object({
     name: z.string().trim().min(1, 'Enter a name').max(120),
-    email: z.union([z.literal(''), z.email('Enter a valid e-mail address')]).optional(),
-    phone: z
-      .string()
-      .transform((s) => s.replace(/[\s\-().]/g, ''))
-      .pipe(z.union([z.literal(''), z.string().regex(/^\+?[0-9]{7,15}$/, 'Enter a phone number')]))
-      .optional(),
+    email: OptionalEmailSchema.optional(),
+    phone: OptionalPhoneSchema.optional(),
     notes: z.string().max(2000).optional(),
   })
   .strict();

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { IdSchema } from './common.schemas';
+import { MessagePreferencesSchema } from './contact.schemas';
 import { BookingViewSchema } from './booking-view.schemas';
 
 export const ClientSummarySchema = z.object({
@@ -14,6 +15,9 @@ export const ClientListSchema = z.object({ clients: z.array(ClientSummarySchema)
 
 export const ClientDetailSchema = ClientSummarySchema.extend({
   notes: z.string(),
+  ...MessagePreferencesSchema.shape,
+  /** When the client replied STOP to a text; no SMS until they reply START. */
+  smsStoppedAt: z.string().nullable(),
   bookings: z.array(BookingViewSchema),
 });
 export type ClientDetail = z.infer<typeof ClientDetailSchema>;

@@ -6,6 +6,8 @@ export const CapturedMailSchema = z.object({
   to: z.string(),
   subject: z.string(),
   text: z.string(),
+  /** The HTML part, when the message had one. */
+  html: z.string().nullable().default(null),
   receivedAt: z.string(),
   attachments: z.array(z.object({ filename: z.string(), contentType: z.string(), content: z.string() })).default([]),
 });

@@ -70,6 +70,7 @@ const routes: RouteObject[] = [
       rolePage('owner/setup/services', ['owner'], () => import('./routes/owner-setup-services')),
       rolePage('owner/setup/services/:id', ['owner'], () => import('./routes/owner-setup-service')),
       rolePage('owner/quote-prices', ['owner'], () => import('./routes/owner-quote-prices')),
+      rolePage('owner/follow-up-rules', ['owner'], () => import('./routes/owner-follow-ups')),
       rolePage('desk', ['front_desk', 'owner'], () => import('./routes/desk-home')),
       rolePage('desk/clients/:id', ['front_desk', 'owner'], () => import('./routes/desk-client')),
       rolePage('desk/outbox', ['front_desk', 'owner'], () => import('./routes/outbox')),

@@ -69,6 +69,8 @@ describe('planning a booking’s messages', () => {
       'confirmation email', 'confirmation sms',
       'reminder_48h email 2027-03-13T17:00:00.000Z', 'reminder_48h sms 2027-03-13T17:00:00.000Z',
       'reminder_24h email 2027-03-14T16:00:00.000Z', 'reminder_24h sms 2027-03-14T16:00:00.000Z',
+      // A colour service: aftercare the next day at 10:00 salon time (Tue 03-16 10:00 MDT = 16:00Z).
+      'aftercare email 2027-03-16T16:00:00.000Z', 'aftercare sms 2027-03-16T16:00:00.000Z',
     ]);
     const confirmation = (await messagesOf(id)).find((m) => m.kind === 'confirmation')!;
     expect(confirmation.send_at.getTime()).toBeGreaterThanOrEqual(before - 1000);

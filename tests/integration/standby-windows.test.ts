@@ -71,7 +71,7 @@ describe('hands-free windows', () => {
   });
 
   it('offers the window to two standby clients: both get an SMS; the first to accept wins, the second is told it has gone', async () => {
-    const entries = (await desk$.get('/api/standby')).body.entries as { id: string; client: { name: string; phone: string } }[];
+    const entries = (await desk$.get('/api/standby')).body.entries as { id: string; client: { id: string; name: string; phone: string } }[];
     const offered = await ana$.write('post', '/api/windows/offer', { stylistId: ana.staffId, serviceId: toner, start: localIso(friday, '10:50'), standbyEntryIds: entries.map((e) => e.id) });
     expect(offered.status).toBe(201);
     expect(offered.body.offers).toBe(2);
@@ -87,6 +87,11 @@ describe('hands-free windows', () => {
     expect(statuses).toEqual([200, 409]);
     const loser = a.status === 409 ? entries[0] : entries[1];
     expect(t.sms.messages.some((m) => m.to === loser.client.phone && m.body.includes('has been taken'))).toBe(true);
+    // Offer, taken and gone are all in the send log, once each per channel.
+    const winner = loser === entries[0] ? entries[1] : entries[0];
+    const logged = await t.testDb.db.selectFrom('messages').select(['kind', 'client_id', 'status']).where('kind', 'like', 'window_offer%').where('channel', '=', 'sms').execute();
+    expect(logged.filter((r) => r.client_id === winner.client.id).map((r) => `${r.kind} ${r.status}`).sort()).toEqual(['window_offer sent', 'window_offer_taken sent']);
+    expect(logged.filter((r) => r.client_id === loser.client.id).map((r) => `${r.kind} ${r.status}`).sort()).toEqual(['window_offer sent', 'window_offer_gone sent']);
     const after = (await ana$.get(`/api/windows?date=${friday}`)).body.windows;
     // The toner now sits in the window: only the 5 minutes before it are still hands-free from 10:45.
     expect(after.find((w: { start: string }) => w.start === localIso(friday, '10:45')).end).toBe(localIso(friday, '10:50'));

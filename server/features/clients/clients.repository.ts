@@ -1,6 +1,7 @@
 import { sql } from 'kysely';
 import type { Db } from '../../db/database';
 import type { ClientSummary } from '../../../shared/schemas/client.schemas';
+import type { MessageChannelChoice } from '../../../shared/schemas/contact.schemas';
 
 export async function insertClient(
   db: Db,
@@ -30,7 +31,7 @@ export async function searchClients(db: Db, salonId: string, q: string | undefin
 export async function findClient(db: Db, salonId: string, id: string) {
   return db
     .selectFrom('clients')
-    .select(['id', 'name', 'email', 'phone', 'notes'])
+    .select(['id', 'name', 'email', 'phone', 'notes', 'message_channel as messageChannel', 'marketing_opt_in as marketingOptIn', 'sms_stopped_at as smsStoppedAt'])
     .where('salon_id', '=', salonId)
     .where('id', '=', id)
     .executeTakeFirst();
@@ -39,4 +40,40 @@ export async function findClient(db: Db, salonId: string, id: string) {
 export async function findClientIdForUser(db: Db, userId: string): Promise<string | undefined> {
   const row = await db.selectFrom('clients').select('id').where('user_id', '=', userId).executeTakeFirst();
   return row?.id;
+}
+
+export interface ClientContactChange {
+  name?: string;
+  email?: string | null;
+  phone: string | null;
+  messageChannel: MessageChannelChoice;
+  marketingOptIn: boolean;
+}
+
+/** Contact details and message preferences; a changed phone number starts with SMS on again. */
+export async function updateClientContact(db: Db, salonId: string, id: string, change: ClientContactChange): Promise<boolean> {
+  const result = await db
+    .updateTable('clients')
+    .set((eb) => ({
+      ...(change.name !== undefined && { name: change.name }),
+      ...(change.email !== undefined && { email: change.email }),
+      phone: change.phone,
+      message_channel: change.messageChannel,
+      marketing_opt_in: change.marketingOptIn,
+      sms_stopped_at: eb.case().when('phone', 'is distinct from', change.phone).then(null).else(eb.ref('sms_stopped_at')).end(),
+    }))
+    .where('salon_id', '=', salonId)
+    .where('id', '=', id)
+    .executeTakeFirst();
+  return result.numUpdatedRows > 0n;
+}
+
+/** An inbound STOP (stop = true) or START from this number, for every client with it; their ids. */
+export async function setSmsStopped(db: Db, phone: string, stop: boolean, now: Date): Promise<{ id: string; salonId: string }[]> {
+  return db
+    .updateTable('clients')
+    .set({ sms_stopped_at: stop ? now : null })
+    .where('phone', '=', phone)
+    .returning(['id', 'salon_id as salonId'])
+    .execute();
 }

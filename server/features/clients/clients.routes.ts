@@ -8,7 +8,9 @@ import { apiRoute } from '../../lib/api-route';
 import { notFound } from '../../lib/app-error';
 import { findSalon } from '../salon/salon.repository';
 import { loadBookingViews } from '../bookings/booking-views.repository';
-import { findClient, insertClient, searchClients } from './clients.repository';
+import { findClient, insertClient, searchClients, updateClientContact } from './clients.repository';
+import { UpdateClientSchema } from '../../../shared/schemas/contact.schemas';
+import { replanClientMessages } from '../messages/plan-messages.service';
 
 export function registerClientRoutes({ table, db }: AppDeps): void {
   apiRoute(
@@ -37,7 +39,21 @@ export function registerClientRoutes({ table, db }: AppDeps): void {
         { salonId: salon.id, clientId: client.id, statuses: BookingStatusSchema.options },
         salon.timeZone,
       );
-      return { ...client, bookings };
+      return { ...client, smsStoppedAt: client.smsStoppedAt?.toISOString() ?? null, bookings };
+    },
+  );
+  apiRoute(
+    table,
+    { method: 'patch', path: '/api/clients/:id', access: DESK, summary: "Edit a client card: contact details and message preferences", params: IdParamsSchema, body: UpdateClientSchema, response: ClientSummarySchema },
+    async ({ user, params, body }) => {
+      // Queued messages follow the new details in the same transaction: nothing goes to an old number.
+      const found = await db.transaction().execute(async (trx) => {
+        if (!(await updateClientContact(trx, user.salonId, params.id, body))) return false;
+        await replanClientMessages(trx, params.id, new Date());
+        return true;
+      });
+      if (!found) throw notFound('That client');
+      return { id: params.id, name: body.name, email: body.email, phone: body.phone };
     },
   );
 }

@@ -1,6 +1,6 @@
 import { sql } from 'kysely';
 import type { Db } from '../../db/database';
-import type { MessageStatus } from '../../db/schema';
+import type { MessageChannelChoice, MessageStatus } from '../../db/schema';
 import type { BookingContext } from './templates';
 
 export interface BookingForMessages {
@@ -11,6 +11,11 @@ export interface BookingForMessages {
   version: number;
   email: string | null;
   phone: string | null;
+  /** The client's choice; SMS is also off after an inbound STOP. */
+  channel: MessageChannelChoice;
+  smsStopped: boolean;
+  marketingOptIn: boolean;
+  serviceId: string;
   offsets: number[];
   quietFrom: string;
   quietTo: string;
@@ -25,7 +30,8 @@ export async function bookingForMessages(db: Db, bookingId: string): Promise<Boo
     .innerJoin('staff as st', 'st.id', 'b.stylist_id')
     .leftJoin('clients as c', 'c.id', 'b.client_id')
     .select(['b.id', 'b.salon_id', 'b.client_id', 'b.status', 'b.version', 's.name as salonName', 's.address', 's.time_zone', 's.reminder_offsets_hours', 's.quiet_from', 's.quiet_to',
-      'sv.name as serviceName', 'sv.category', 'st.display_name', 'c.name as clientName', 'c.email', 'c.phone'])
+      'sv.id as serviceId', 'sv.name as serviceName', 'sv.category', 'st.display_name', 'c.name as clientName', 'c.email', 'c.phone',
+      'c.message_channel', 'c.sms_stopped_at', 'c.marketing_opt_in', 's.skin_test_lead_hours'])
     .where('b.id', '=', bookingId)
     .executeTakeFirst();
   if (!row) return null;
@@ -42,14 +48,37 @@ export async function bookingForMessages(db: Db, bookingId: string): Promise<Boo
     version: row.version,
     email: row.email,
     phone: row.phone,
+    channel: row.message_channel ?? 'both',
+    smsStopped: row.sms_stopped_at !== null,
+    marketingOptIn: row.marketing_opt_in ?? false,
+    serviceId: row.serviceId,
     offsets: row.reminder_offsets_hours,
     quietFrom: row.quiet_from,
     quietTo: row.quiet_to,
     context: {
       bookingId, salonName: row.salonName, address: row.address, timeZone: row.time_zone, clientName: row.clientName ?? '',
       serviceName: row.serviceName, category: row.category, stylistName: row.display_name, sittings,
+      skinTestLeadHours: row.skin_test_lead_hours,
     },
   };
+}
+
+/** Queued messages to a client on channels they no longer want (preferences changed, or STOP). */
+export async function dropQueuedForClient(db: Db, clientId: string, channels: ('sms' | 'email')[]): Promise<void> {
+  if (channels.length === 0) return;
+  await db.updateTable('messages').set({ status: 'dropped' }).where('client_id', '=', clientId).where('status', '=', 'queued').where('channel', 'in', channels).execute();
+}
+
+/** The client's bookings that still have sittings ahead (for re-planning after a preference change). */
+export async function upcomingBookingIds(db: Db, clientId: string, now: Date): Promise<string[]> {
+  const rows = await db
+    .selectFrom('bookings as b')
+    .select('b.id')
+    .where('b.client_id', '=', clientId)
+    .where('b.status', 'in', ['booked', 'checked_in'])
+    .where((eb) => eb.exists(eb.selectFrom('sittings as s').select('s.seq').whereRef('s.booking_id', '=', 'b.id').where(sql<boolean>`upper(s.during) > ${now}`)))
+    .execute();
+  return rows.map((r) => r.id);
 }
 
 /** Queued messages planned for an older version of the booking (or all, when `all`) will never go out. */
@@ -74,12 +103,12 @@ export interface MessageListItem {
   bookingId: string | null;
 }
 
-/** The salon's send log for the Outbox, newest planned first. */
+/** The salon's send log for the Outbox: the most recently planned first (what just happened is on top). */
 export async function listMessages(db: Db, salonId: string, status: MessageStatus | undefined, limit = 200): Promise<MessageListItem[]> {
   let q = db
     .selectFrom('messages')
     .select(['id', 'kind', 'channel', 'to_address as toAddress', 'subject', 'body', 'send_at as sendAt', 'status', 'attempts', 'last_error as lastError', 'sent_at as sentAt', 'booking_id as bookingId'])
     .where('salon_id', '=', salonId);
   if (status) q = q.where('status', '=', status);
-  return q.orderBy('send_at', 'desc').orderBy('created_at', 'desc').limit(limit).execute();
+  return q.orderBy('created_at', 'desc').orderBy('send_at', 'desc').limit(limit).execute();
 }

@@ -1,56 +1,166 @@
+import { DateTime } from 'luxon';
 import type { Insertable } from 'kysely';
 import type { Db } from '../../db/database';
 import type { MessagesTable } from '../../db/schema';
-import { bookingForMessages, dropQueued, type BookingForMessages } from './messages.repository';
+import { followUpTimes } from '../../../shared/messages/follow-up-times';
+import { bookingForMessages, dropQueued, dropQueuedForClient, upcomingBookingIds, type BookingForMessages } from './messages.repository';
+import { followUpRulesForService } from './follow-up-rules.repository';
 import { outOfQuietHours, reminderAt } from './quiet-hours';
-import { bookingMessage, reminderMessage, type BookingMessageKind, type MessageText } from './templates';
+import { aftercareKind, aftercareNotes } from './aftercare-notes';
+import {
+  aftercareMessage, bookingMessage, dayBeforeSittingMessage, followUpMessage, reminderMessage, skinTestBookedMessage,
+  type BookingMessageKind, type MessageText,
+} from './templates';
 
-/** Why the booking's messages are being planned again. */
-export type BookingChange = 'booked' | 'moved' | 'cancelled';
+/** Why the booking's messages are being planned again; 'preferences' adds missing reminders only. */
+export type BookingChange = 'booked' | 'moved' | 'cancelled' | 'preferences';
 
 const PLANNED_FOR = ['booked', 'checked_in', 'cancelled'];
+/** The notice sent when a booking is made, moved or cancelled (sequence 0 in the dedupe key). */
+const FIRST_KINDS = ['confirmation', 'skin_test_booked', 'change', 'cancellation'];
+/** Salon wall-clock times (common practice: early evening for "see you tomorrow", mid-morning for aftercare). */
+export const DAY_BEFORE_AT = { hour: 18, minute: 0 };
+export const AFTERCARE_AT = { hour: 10, minute: 0 };
 
 /**
  * Brings a booking's send log in line with the booking, inside the caller's transaction: a move bumps the
  * booking's version and drops what was queued for the old times; a cancellation drops everything queued.
  * New rows carry the version in their dedupe key, so planning twice inserts nothing twice. The rows are the
- * schedule: the send job picks each one up once its send_at has come (see send-message.job.ts).
+ * schedule: each is picked up once its send_at has come (see send-message.job.ts). Returns the new rows' ids
+ * and times, so the caller can also queue a job at each exact instant.
  */
-export async function replanBookingMessages(db: Db, bookingId: string, now: Date, change: BookingChange = 'booked'): Promise<void> {
+export async function replanBookingMessages(db: Db, bookingId: string, now: Date, change: BookingChange = 'booked'): Promise<PlannedMessage[]> {
   if (change === 'moved') await db.updateTable('bookings').set((eb) => ({ version: eb('version', '+', 1) })).where('id', '=', bookingId).execute();
   const b = await bookingForMessages(db, bookingId);
-  if (!b) return;
+  if (!b) return [];
   const cancelled = b.status === 'cancelled';
-  await dropQueued(db, bookingId, b.version, cancelled);
+  if (change !== 'preferences') await dropQueued(db, bookingId, b.version, cancelled);
   // A hold has no client yet and no-shows or finished bookings need nothing new.
-  if (!b.clientId || !PLANNED_FOR.includes(b.status) || b.context.sittings.length === 0) return;
+  if (!b.clientId || !PLANNED_FOR.includes(b.status) || b.context.sittings.length === 0) return [];
 
-  const kind: BookingMessageKind = cancelled ? 'cancellation' : change === 'moved' ? 'change' : 'confirmation';
-  const rows = toRows(b, 0, kind, bookingMessage(kind, b.context), now, null);
-  if (!cancelled) {
-    for (const sitting of b.context.sittings) {
-      if (sitting.start <= now) continue;
-      for (const hours of b.offsets) {
-        const at = reminderAt(sitting.start, hours, b.context.timeZone);
-        if (at <= now) continue; // booked too late for this reminder: the confirmation covers it
-        rows.push(...toRows(b, sitting.seq, `reminder_${hours}h`, reminderMessage(b.context, sitting.seq, hours), at, sitting.start));
-      }
-    }
-  }
-  if (rows.length > 0) await db.insertInto('messages').values(rows).onConflict((oc) => oc.column('dedupe_key').doNothing()).execute();
+  const rows: Insertable<MessagesTable>[] = [];
+  if (change !== 'preferences') rows.push(...toRows(b, 0, firstKind(b, change), firstMessage(b, change), now, null));
+  if (!cancelled) rows.push(...await sittingMessages(db, b, now));
+  return insertPlanned(db, rows);
 }
 
-/** One row per channel the client can be reached on; SMS leaves quiet hours, and never after the sitting. */
-function toRows(b: BookingForMessages, seq: number, kind: string, text: MessageText, at: Date, notAfter: Date | null): Insertable<MessagesTable>[] {
+export interface PlannedMessage {
+  id: string;
+  sendAt: Date;
+}
+
+/**
+ * Inserts what is not planned yet (the dedupe key decides) and returns what is newly queued. A row with the
+ * same key that was dropped for the client's preferences (same booking version) is queued again with the
+ * current text and address; sent, failed and queued rows are left alone, so nothing goes out twice.
+ */
+export async function insertPlanned(db: Db, rows: Insertable<MessagesTable>[]): Promise<PlannedMessage[]> {
+  if (rows.length === 0) return [];
+  return db
+    .insertInto('messages')
+    .values(rows)
+    .onConflict((oc) =>
+      oc.column('dedupe_key').doUpdateSet((eb) => ({
+        status: 'queued', to_address: eb.ref('excluded.to_address'), body: eb.ref('excluded.body'), subject: eb.ref('excluded.subject'),
+        send_at: eb.ref('excluded.send_at'), attempts: 0, last_error: null,
+      })).where('messages.status', '=', 'dropped'),
+    )
+    .returning(['id', 'send_at as sendAt'])
+    .execute();
+}
+
+function firstKind(b: BookingForMessages, change: BookingChange): string {
+  if (b.status === 'cancelled') return 'cancellation';
+  if (change === 'moved') return 'change';
+  return b.context.category === 'skin_test' ? 'skin_test_booked' : 'confirmation';
+}
+
+function firstMessage(b: BookingForMessages, change: BookingChange): MessageText {
+  const kind = firstKind(b, change);
+  return kind === 'skin_test_booked' ? skinTestBookedMessage(b.context) : bookingMessage(kind as BookingMessageKind, b.context);
+}
+
+/** Reminders, "day n of m", aftercare and marketing follow-ups for every sitting still ahead. */
+async function sittingMessages(db: Db, b: BookingForMessages, now: Date): Promise<Insertable<MessagesTable>[]> {
+  const zone = b.context.timeZone;
+  const rows: Insertable<MessagesTable>[] = [];
+  for (const sitting of b.context.sittings) {
+    if (sitting.start <= now) continue;
+    for (const hours of b.offsets) {
+      const at = reminderAt(sitting.start, hours, zone);
+      if (at <= now) continue; // booked too late for this reminder: the confirmation covers it
+      rows.push(...toRows(b, sitting.seq, `reminder_${hours}h`, reminderMessage(b.context, sitting.seq, hours), at, sitting.start));
+    }
+    if (sitting.seq > 1) {
+      const at = DateTime.fromJSDate(sitting.start, { zone }).minus({ days: 1 }).set({ ...DAY_BEFORE_AT, second: 0, millisecond: 0 }).toJSDate();
+      if (at > now && at < sitting.start) rows.push(...toRows(b, sitting.seq, 'day_before_sitting', dayBeforeSittingMessage(b.context, sitting.seq), at, sitting.start));
+    }
+  }
+  const last = b.context.sittings.at(-1)!;
+  const kind = aftercareKind(b.context.category, b.context.serviceName);
+  if (kind && last.end > now) {
+    const at = DateTime.fromJSDate(last.end, { zone }).plus({ days: 1 }).set({ ...AFTERCARE_AT, second: 0, millisecond: 0 }).toJSDate();
+    rows.push(...toRows(b, last.seq, 'aftercare', aftercareMessage(b.context, aftercareNotes(kind)), at, null));
+  }
+  if (b.marketingOptIn && last.end > now) rows.push(...await followUpRows(db, b, now));
+  return rows;
+}
+
+/** Follow-ups from the owner's rules for this service, anchored on the end of the last sitting. */
+export async function followUpRows(db: Db, b: BookingForMessages, now: Date, ruleId?: string): Promise<Insertable<MessagesTable>[]> {
+  const rules = (await followUpRulesForService(db, b.serviceId)).filter((r) => !ruleId || r.id === ruleId);
+  const anchor = b.context.sittings.at(-1)!.end;
+  return rules.flatMap((rule) =>
+    followUpTimes(rule.rrule, anchor, b.context.timeZone)
+      .filter((at) => at > now)
+      .flatMap((at, n) => toRows(b, `${rule.id}.${rule.version}.${n + 1}`, 'follow_up', followUpMessage(b.context, rule), at, null)),
+  );
+}
+
+/** The channels a client's service messages go on: their choice, minus SMS after a STOP. */
+function channelsFor(b: BookingForMessages): { email: string | null; sms: string | null } {
+  return {
+    email: b.channel !== 'sms' ? b.email : null,
+    sms: b.channel !== 'email' && !b.smsStopped ? b.phone : null,
+  };
+}
+
+/** One row per channel the client wants; SMS leaves quiet hours, and never after the sitting. */
+function toRows(b: BookingForMessages, seq: number | string, kind: string, text: MessageText, at: Date, notAfter: Date | null): Insertable<MessagesTable>[] {
   const base = { salon_id: b.salonId, booking_id: b.context.bookingId, booking_version: b.version, client_id: b.clientId, kind };
   const key = (channel: string) => `${b.context.bookingId}:${seq}:${kind}:${channel}:v${b.version}`;
+  const to = channelsFor(b);
   const rows: Insertable<MessagesTable>[] = [];
-  if (b.email) {
-    rows.push({ ...base, channel: 'email', to_address: b.email, subject: text.subject, body: text.email, attachments: JSON.stringify(text.attachments), send_at: at, dedupe_key: key('email') });
+  if (to.email) {
+    rows.push({ ...base, channel: 'email', to_address: to.email, subject: text.subject, body: text.email, attachments: JSON.stringify(text.attachments), send_at: at, dedupe_key: key('email') });
   }
-  if (b.phone) {
+  if (to.sms) {
     const smsAt = outOfQuietHours(at, b.context.timeZone, b.quietFrom, b.quietTo);
-    if (!notAfter || smsAt < notAfter) rows.push({ ...base, channel: 'sms', to_address: b.phone, body: text.sms, send_at: smsAt, dedupe_key: key('sms') });
+    if (!notAfter || smsAt < notAfter) rows.push({ ...base, channel: 'sms', to_address: to.sms, body: text.sms, send_at: smsAt, dedupe_key: key('sms') });
   }
   return rows;
+}
+
+/**
+ * After a client's preferences change (desk, their own page, or an inbound STOP/START): queued messages on
+ * channels they no longer want are dropped, and reminders on newly wanted channels are planned for every
+ * booking still ahead (confirmations already sent are not repeated).
+ */
+export async function replanClientMessages(db: Db, clientId: string, now: Date): Promise<PlannedMessage[]> {
+  const client = await db.selectFrom('clients').select(['message_channel', 'sms_stopped_at', 'phone', 'email']).where('id', '=', clientId).executeTakeFirst();
+  if (!client) return [];
+  // Booking-change notices still queued keep going, on the channels still wanted and to the current address.
+  const unwanted: ('sms' | 'email')[] = [];
+  if (client.message_channel === 'email' || client.sms_stopped_at || !client.phone) unwanted.push('sms');
+  if (client.message_channel === 'sms' || !client.email) unwanted.push('email');
+  await dropQueuedForClient(db, clientId, unwanted);
+  for (const [channel, address] of [['sms', client.phone], ['email', client.email]] as const) {
+    if (address) await db.updateTable('messages').set({ to_address: address }).where('client_id', '=', clientId).where('status', '=', 'queued').where('channel', '=', channel).execute();
+  }
+  // Everything else is planned afresh: dropped here, then re-planned (reviving rows whose key is unchanged).
+  await db.updateTable('messages').set({ status: 'dropped' }).where('client_id', '=', clientId).where('status', '=', 'queued')
+    .where('booking_id', 'is not', null).where('kind', 'not in', FIRST_KINDS).execute();
+  const planned: PlannedMessage[] = [];
+  for (const id of await upcomingBookingIds(db, clientId, now)) planned.push(...await replanBookingMessages(db, id, now, 'preferences'));
+  return planned;
 }

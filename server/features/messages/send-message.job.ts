@@ -3,10 +3,14 @@ import type { Kysely } from 'kysely';
 import type { Database } from '../../db/schema';
 import type { Mailer } from '../../mail/mailer';
 import type { SmsSender } from '../../sms/sms-sender';
+import { emailHtml } from './html-email';
 
 export const SEND_MESSAGE_JOB = 'send-message';
 export const SEND_DUE_MESSAGES_JOB = 'send-due-messages';
 export const REQUEUE_STUCK_MESSAGES_JOB = 'requeue-stuck-messages';
+export const SCHEDULE_MESSAGE_JOBS_JOB = 'schedule-message-jobs';
+/** How far ahead the per-minute pass queues a job per message at its exact instant. */
+export const SCHEDULE_AHEAD_SECONDS = 120;
 
 export interface Senders {
   mailer: Mailer;
@@ -40,7 +44,7 @@ export async function sendMessage(db: Kysely<Database>, senders: Senders, id: st
   try {
     const ref = row.channel === 'sms'
       ? (await senders.sms.send(row.to_address, row.body)).sid
-      : (await senders.mailer.send({ to: row.to_address, subject: row.subject, text: row.body, attachments: row.attachments }), `smtp:${row.id}`);
+      : (await senders.mailer.send({ to: row.to_address, subject: row.subject, text: row.body, html: emailHtml(row.subject, row.body), attachments: row.attachments }), `smtp:${row.id}`);
     await db.updateTable('messages').set({ status: 'sent', provider_ref: ref, sent_at: new Date(), last_error: null }).where('id', '=', id).execute();
     return 'sent';
   } catch (err) {
@@ -50,7 +54,7 @@ export async function sendMessage(db: Kysely<Database>, senders: Senders, id: st
     const retryAt = new Date(now.getTime() + backoffMinutes(row.attempts) * 60_000);
     await db
       .updateTable('messages')
-      .set({ status: failed ? 'failed' : 'queued', send_at: failed ? row.send_at : retryAt, last_error: String((err as Error).message ?? err).slice(0, 500) })
+      .set({ status: failed ? 'failed' : 'queued', send_at: failed ? row.send_at : retryAt, due_at: row.due_at ?? row.send_at, last_error: String((err as Error).message ?? err).slice(0, 500) })
       .where('id', '=', id)
       .where('status', '=', 'sending')
       .execute();
@@ -58,14 +62,58 @@ export async function sendMessage(db: Kysely<Database>, senders: Senders, id: st
   }
 }
 
-/** Sends every due message in send_at order (so a provider back after an outage gets them in order). */
+/** The order messages go out in: when each was first due (retries keep their place). */
+const dueOrder = sql<Date>`coalesce(due_at, send_at)`;
+
+/**
+ * Per channel, the first-due time of the earliest message waiting out a retry backoff. Messages due after it
+ * on that channel wait too: when the provider is back they go out behind it, in their planned order, instead
+ * of overtaking it.
+ */
+async function channelBlockers(db: Kysely<Database>, now: Date): Promise<Map<string, Date>> {
+  const rows = await db
+    .selectFrom('messages')
+    .select(['channel', sql<Date>`min(coalesce(due_at, send_at))`.as('from')])
+    .where('status', '=', 'queued')
+    .where('attempts', '>', 0)
+    .where('send_at', '>', now)
+    .groupBy('channel')
+    .execute();
+  return new Map(rows.map((r) => [r.channel, r.from]));
+}
+
+/**
+ * Sends every due message in planned order. A message that fails and will be retried stops its channel for
+ * the rest of the run (the provider is likely down: no point hammering it, and later ones must not overtake).
+ */
 export async function sendDueMessages(db: Kysely<Database>, senders: Senders, now: Date, bookingId?: string): Promise<number> {
-  let q = db.selectFrom('messages').select('id').where('status', '=', 'queued').where('send_at', '<=', now);
+  let q = db.selectFrom('messages').select(['id', 'channel', dueOrder.as('due')]).where('status', '=', 'queued').where('send_at', '<=', now);
   if (bookingId) q = q.where('booking_id', '=', bookingId);
-  const due = await q.orderBy('send_at').orderBy('created_at').limit(100).execute();
+  const due = await q.orderBy(dueOrder).orderBy('created_at').limit(100).execute();
+  const blocked = await channelBlockers(db, now);
   let sent = 0;
-  for (const { id } of due) if ((await sendMessage(db, senders, id, now)) === 'sent') sent++;
+  for (const { id, channel, due: at } of due) {
+    const from = blocked.get(channel);
+    if (from && at > from) continue;
+    const outcome = await sendMessage(db, senders, id, now);
+    if (outcome === 'sent') sent++;
+    if (outcome === 'retry') blocked.set(channel, new Date(0));
+  }
   return sent;
+}
+
+/**
+ * What a message's own job (queued for its exact instant) runs: send it unless an earlier message on its
+ * channel is still waiting to be retried, then let anything that queued up behind it follow in order.
+ */
+export async function sendOnTime(db: Kysely<Database>, senders: Senders, id: string, now: Date): Promise<Outcome> {
+  const row = await db.selectFrom('messages').select(['channel', dueOrder.as('due')]).where('id', '=', id).executeTakeFirst();
+  if (!row) return 'not-claimed';
+  const from = (await channelBlockers(db, now)).get(row.channel);
+  if (from && row.due > from) return 'not-claimed';
+  const outcome = await sendMessage(db, senders, id, now);
+  if (outcome === 'sent') await sendDueMessages(db, senders, now);
+  return outcome;
 }
 
 /**
@@ -75,14 +123,33 @@ export async function sendDueMessages(db: Kysely<Database>, senders: Senders, no
  * sitting, a duplicate costs one extra text, so Dwell re-queues — but only rows with no provider reference,
  * since a recorded reference proves the provider has it.
  */
-export async function requeueStuckMessages(db: Kysely<Database>, now: Date): Promise<number> {
+export async function requeueStuckMessages(db: Kysely<Database>, now: Date, afterSeconds = STUCK_AFTER_MINUTES * 60): Promise<number> {
   const rows = await db
     .updateTable('messages')
     .set({ status: 'queued', last_error: 'Worker stopped while sending; queued again' })
     .where('status', '=', 'sending')
     .where('provider_ref', 'is', null)
-    .where('claimed_at', '<', sql<Date>`${now}::timestamptz - make_interval(mins => ${STUCK_AFTER_MINUTES})`)
+    .where('claimed_at', '<', sql<Date>`${now}::timestamptz - make_interval(secs => ${afterSeconds})`)
     .returning('id')
     .execute();
+  return rows.length;
+}
+
+/**
+ * Sends on time rather than on the next minute: every message due within the next two minutes gets its own
+ * pg-boss job with startAfter = its send_at (job_at records which instant was queued, so a retry's new time
+ * gets a new job). The job only calls sendMessage, whose claim keeps a message from going twice however
+ * many jobs or sweeps reach it.
+ */
+export async function scheduleMessageJobs(db: Kysely<Database>, schedule: (id: string, at: Date) => Promise<void>, now: Date): Promise<number> {
+  const rows = await db
+    .updateTable('messages')
+    .set((eb) => ({ job_at: eb.ref('send_at') }))
+    .where('status', '=', 'queued')
+    .where('send_at', '<=', sql<Date>`${now}::timestamptz + make_interval(secs => ${SCHEDULE_AHEAD_SECONDS})`)
+    .where((eb) => eb.or([eb('job_at', 'is', null), eb('job_at', '!=', eb.ref('send_at'))]))
+    .returning(['id', 'send_at'])
+    .execute();
+  for (const row of rows) await schedule(row.id, row.send_at);
   return rows.length;
 }

@@ -1,9 +1,13 @@
 import { DateTime } from 'luxon';
-import type { Mailer } from '../../mail/mailer';
-import type { SmsSender } from '../../sms/sms-sender';
+import type { Kysely } from 'kysely';
+import type { Database } from '../../db/schema';
+import type { Senders } from '../messages/send-message.job';
+import { sendClientMessage } from '../messages/client-message.service';
 
 export interface OfferMessage {
-  to: { name: string; phone: string | null; email: string | null };
+  offerId: string;
+  salonId: string;
+  to: { id: string; name: string };
   salonName: string;
   serviceName: string;
   stylistName: string;
@@ -13,21 +17,22 @@ export interface OfferMessage {
 
 const when = (m: OfferMessage) => DateTime.fromJSDate(m.start, { zone: m.timeZone }).toFormat("cccc d LLLL 'at' h:mm a ZZZZ");
 
-/** Sends on every channel the client has; a channel that fails does not stop the others. */
-async function sendBoth(deps: { mailer: Mailer; sms: SmsSender }, m: OfferMessage, subject: string, text: string) {
-  const jobs: Promise<unknown>[] = [];
-  if (m.to.phone) jobs.push(deps.sms.send(m.to.phone, text));
-  if (m.to.email) jobs.push(deps.mailer.send({ to: m.to.email, subject, text }));
-  const results = await Promise.allSettled(jobs);
-  for (const r of results) if (r.status === 'rejected') console.error('offer message not sent:', r.reason);
+/** Offer, taken and gone all go through the send log, keyed on the offer, so each is sent once. */
+function send(db: Kysely<Database>, senders: Senders, m: OfferMessage, kind: string, subject: string, text: string) {
+  return sendClientMessage(db, senders, { salonId: m.salonId, clientId: m.to.id, kind, key: `offer:${m.offerId}:${kind}`, subject, email: `Hello ${m.to.name},\n\n${text}\n`, sms: text }, new Date());
 }
 
-export function sendOffer(deps: { mailer: Mailer; sms: SmsSender }, m: OfferMessage, link: string) {
+export function sendOffer(db: Kysely<Database>, senders: Senders, m: OfferMessage, link: string) {
   const text = `${m.salonName}: a time opened up — ${m.serviceName} with ${m.stylistName}, ${when(m)}. First to take it gets it: ${link}`;
-  return sendBoth(deps, m, `A time opened up: ${m.serviceName}, ${when(m)}`, `Hello ${m.to.name},\n\n${text}\n`);
+  return send(db, senders, m, 'window_offer', `A time opened up: ${m.serviceName}, ${when(m)}`, text);
 }
 
-export function sendOfferTaken(deps: { mailer: Mailer; sms: SmsSender }, m: OfferMessage) {
+export function sendOfferTaken(db: Kysely<Database>, senders: Senders, m: OfferMessage) {
+  const text = `${m.salonName}: the ${m.serviceName} time on ${when(m)} is yours. Your booking confirmation follows.`;
+  return send(db, senders, m, 'window_offer_taken', `It's yours: ${m.serviceName}, ${when(m)}`, text);
+}
+
+export function sendOfferGone(db: Kysely<Database>, senders: Senders, m: OfferMessage) {
   const text = `${m.salonName}: the ${m.serviceName} time on ${when(m)} has been taken. You stay on our standby list.`;
-  return sendBoth(deps, m, `That time has gone: ${m.serviceName}`, `Hello ${m.to.name},\n\n${text}\n`);
+  return send(db, senders, m, 'window_offer_gone', `That time has gone: ${m.serviceName}`, text);
 }

@@ -4,14 +4,16 @@ import type { Db } from '../../db/database';
 export async function insertOffer(
   db: Db,
   o: { salonId: string; standbyEntryId: string; clientId: string; serviceId: string; stylistId: string; startsAt: Date; tokenHash: string; createdBy: string },
-): Promise<void> {
-  await db
+): Promise<string> {
+  const row = await db
     .insertInto('window_offers')
     .values({
       salon_id: o.salonId, standby_entry_id: o.standbyEntryId, client_id: o.clientId, service_id: o.serviceId, stylist_id: o.stylistId,
       starts_at: o.startsAt, token_hash: o.tokenHash, status: 'offered', created_by: o.createdBy, expires_at: o.startsAt,
     })
-    .execute();
+    .returning('id')
+    .executeTakeFirstOrThrow();
+  return row.id;
 }
 
 /** An offer with what its page and messages show. */
@@ -35,7 +37,7 @@ export function lockSlotOffers(db: Db, stylistId: string, startsAt: Date) {
   return db
     .selectFrom('window_offers as o')
     .innerJoin('clients as c', 'c.id', 'o.client_id')
-    .select(['o.id', 'o.status', 'c.name', 'c.phone', 'c.email'])
+    .select(['o.id', 'o.status', 'o.client_id', 'c.name', 'c.phone', 'c.email'])
     .where('o.stylist_id', '=', stylistId)
     .where(sql<boolean>`o.starts_at = ${startsAt}`)
     .forUpdate('o')

@@ -5,8 +5,7 @@ import type { Database } from '../../db/schema';
 import type { Salon } from '../../../shared/schemas/salon.schemas';
 import type { SessionUser } from '../../../shared/schemas/auth.schemas';
 import type { OfferViewSchema, OfferWindowSchema } from '../../../shared/schemas/window.schemas';
-import type { Mailer } from '../../mail/mailer';
-import type { SmsSender } from '../../sms/sms-sender';
+import type { Senders } from '../messages/send-message.job';
 import { sha256 } from '../../lib/hash';
 import { AppError, forbidden, notFound } from '../../lib/app-error';
 import { findService } from '../services/services.repository';
@@ -16,9 +15,7 @@ import { lockStylists } from '../planning/stylist-lock';
 import { bookAt } from '../bookings/book-at.service';
 import { closeStandby, listStandby } from '../standby/standby.repository';
 import { findOffer, insertOffer, lockSlotOffers, setOfferStatus } from './window-offers.repository';
-import { sendOffer, sendOfferTaken } from './offer-messages';
-
-type Senders = { mailer: Mailer; sms: SmsSender };
+import { sendOffer, sendOfferGone, sendOfferTaken } from './offer-messages';
 type OfferView = z.infer<typeof OfferViewSchema>;
 
 /** Sends each chosen standby client a link to the window; returns how many were offered. */
@@ -35,8 +32,8 @@ export async function offerWindow(db: Kysely<Database>, senders: Senders, salon:
   if (start <= new Date()) throw new AppError('VALIDATION_FAILED', 400, 'Some fields need attention.', { start: 'That time has already passed.' });
   for (const entry of chosen) {
     const token = randomBytes(24).toString('base64url');
-    await insertOffer(db, { salonId: salon.id, standbyEntryId: entry.id, clientId: entry.client.id, serviceId: service.id, stylistId: stylist.id, startsAt: start, tokenHash: sha256(token), createdBy: user.id });
-    await sendOffer(senders, { to: entry.client, salonName: salon.name, serviceName: service.name, stylistName: stylist.name, start, timeZone: salon.timeZone }, `${baseUrl}/offer/${token}`);
+    const offerId = await insertOffer(db, { salonId: salon.id, standbyEntryId: entry.id, clientId: entry.client.id, serviceId: service.id, stylistId: stylist.id, startsAt: start, tokenHash: sha256(token), createdBy: user.id });
+    await sendOffer(db, senders, { offerId, salonId: salon.id, to: entry.client, salonName: salon.name, serviceName: service.name, stylistName: stylist.name, start, timeZone: salon.timeZone }, `${baseUrl}/offer/${token}`);
   }
   return { offers: chosen.length };
 }
@@ -71,8 +68,8 @@ export async function acceptOffer(db: Kysely<Database>, senders: Senders, token:
     return { others, offer, salon, service };
   });
   const { offer, salon, service } = losers;
-  for (const o of losers.others) {
-    await sendOfferTaken(senders, { to: o, salonName: salon.name, serviceName: service.name, stylistName: offer.stylistName, start: offer.starts_at, timeZone: salon.timeZone });
-  }
+  const about = { salonId: salon.id, salonName: salon.name, serviceName: service.name, stylistName: offer.stylistName, start: offer.starts_at, timeZone: salon.timeZone };
+  await sendOfferTaken(db, senders, { ...about, offerId: offer.id, to: { id: offer.client_id, name: offer.clientName } });
+  for (const o of losers.others) await sendOfferGone(db, senders, { ...about, offerId: o.id, to: { id: o.client_id, name: o.name } });
   return viewOffer(db, token, now);
 }

@@ -10,11 +10,15 @@ import { salonQueries } from '../../features/salon/api/salon-queries';
 import { MyQuotes } from '../../features/consultations/components/my-quotes';
 import { SalonCard } from '../../features/salon/components/salon-card';
 import { queryClient } from '../../lib/query-client';
+import { SectionCard } from '../../components/ui/section-card';
+import { preferenceQueries } from '../../features/clients/api/preference-queries';
+import { MyPreferencesForm } from '../../features/clients/components/my-preferences-form';
 
 export async function loader() {
   await Promise.all([
     queryClient.ensureQueryData(bookingQueries.mine()),
     queryClient.ensureQueryData(salonQueries.current()),
+    queryClient.ensureQueryData(preferenceQueries.mine()),
   ]);
   return null;
 }
@@ -22,6 +26,7 @@ export async function loader() {
 export function Component() {
   const { data: mine } = useSuspenseQuery(bookingQueries.mine());
   const { data: salon } = useSuspenseQuery(salonQueries.current());
+  const { data: preferences } = useSuspenseQuery(preferenceQueries.mine());
   return (
     <div className="grid gap-8 lg:grid-cols-[1fr_20rem]">
       <div>
@@ -36,6 +41,9 @@ export function Component() {
       </div>
       <aside aria-label="Your salon" className="flex flex-col gap-4">
         <SalonCard salon={salon} />
+        <SectionCard title="Messages">
+          <MyPreferencesForm current={preferences} />
+        </SectionCard>
         <Link to={paths.salon(salon.slug)} className="text-link">
           Book online at {salon.name}
         </Link>

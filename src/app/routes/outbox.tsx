@@ -9,6 +9,7 @@ import { MailList } from '../../features/outbox/components/mail-list';
 import { SmsList } from '../../features/outbox/components/sms-list';
 import { sentMessagesQueries } from '../../features/outbox/api/sent-messages-queries';
 import { SentMessagesTable } from '../../features/outbox/components/sent-messages-table';
+import { InboundSmsForm } from '../../features/outbox/components/inbound-sms-form';
 import { salonQueries } from '../../features/salon/api/salon-queries';
 import { queryClient } from '../../lib/query-client';
 
@@ -46,6 +47,9 @@ export function Component() {
           {sms.data && <SmsList messages={sms.data.messages} timeZone={salon.timeZone} />}
         </SectionCard>
       </div>
+      <SectionCard title="A text from a client (demo)">
+        <InboundSmsForm />
+      </SectionCard>
       <SectionCard title="Sent messages">
         {sent.isPending && <LoadingState label="Loading the send log…" />}
         {sent.isError && <p role="alert">The send log could not be loaded: {sent.error.message}</p>}

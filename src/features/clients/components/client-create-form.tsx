@@ -6,7 +6,7 @@ import { Button } from '../../../components/ui/button';
 import { FormAlert } from '../../../components/ui/form-alert';
 import { TextField } from '../../../components/ui/text-field';
 import { showServerErrors } from '../../../lib/form-errors';
-import { useCreateClient, type CreateClientInput } from '../api/client-mutations';
+import { useCreateClient, type CreateClientInput, type CreateClientValues } from '../api/client-mutations';
 
 type Props = { initialName: string; onCreated: (client: ClientSummary) => void };
 
@@ -16,7 +16,7 @@ type Props = { initialName: string; onCreated: (client: ClientSummary) => void }
  */
 export function ClientCreateForm({ initialName, onCreated }: Props) {
   const create = useCreateClient();
-  const { register, handleSubmit, setError, formState } = useForm<CreateClientInput>({
+  const { register, handleSubmit, setError, formState } = useForm<CreateClientInput, unknown, CreateClientValues>({
     resolver: zodResolver(CreateClientSchema),
     defaultValues: { name: initialName, phone: '', email: '' },
   });

@@ -1,5 +1,6 @@
 import type { ClientDetail } from '../../../../shared/schemas/client.schemas';
 import { SectionCard } from '../../../components/ui/section-card';
+import { ClientContactForm } from './client-contact-form';
 import { HairHistorySummary } from '../../hair-history/components/hair-history-summary';
 import { PhotoGallery } from '../../photos/components/photo-gallery';
 
@@ -9,12 +10,11 @@ type Props = { client: ClientDetail };
 export function ClientProfile({ client }: Props) {
   return (
     <>
-      <SectionCard title="Contact and notes">
+      <SectionCard title="Contact and messages">
+        <ClientContactForm client={client} />
+      </SectionCard>
+      <SectionCard title="Notes">
         <dl className="grid gap-x-6 gap-y-2 sm:grid-cols-[max-content_1fr]">
-          <dt className="font-bold">E-mail</dt>
-          <dd>{client.email ? <a className="text-link" href={`mailto:${client.email}`}>{client.email}</a> : '—'}</dd>
-          <dt className="font-bold">Phone</dt>
-          <dd>{client.phone ? <a className="text-link" href={`tel:${client.phone}`}>{client.phone}</a> : '—'}</dd>
           <dt className="font-bold">Notes</dt>
           <dd className="whitespace-pre-line">{client.notes || 'No notes yet.'}</dd>
         </dl>

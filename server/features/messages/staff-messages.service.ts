@@ -1,0 +1,59 @@
+import { DateTime } from 'luxon';
+import type { Insertable } from 'kysely';
+import type { Db } from '../../db/database';
+import type { MessagesTable } from '../../db/schema';
+import { formatMoney } from '../../lib/money';
+import { deskEmails, salonsForStaffMessages, sittingsBetween, type DaySitting } from './staff-messages.repository';
+import { insertPlanned, type PlannedMessage } from './plan-messages.service';
+
+/** Salon wall-clock time the next day's lists go out (common practice: after the last client leaves). */
+export const STAFF_LISTS_AT = { hour: 18, minute: 0 };
+
+const time = (d: Date, zone: string) => DateTime.fromJSDate(d, { zone }).toFormat('h:mm a');
+
+/**
+ * Each evening, in each salon's own zone: every stylist gets tomorrow's list, the desk gets tomorrow's
+ * bookings whose deposit is not paid. Run every few minutes; the dedupe key (salon day + person) makes each
+ * list go once, and a server that was down at 18:00 sends it when it is back (until midnight).
+ */
+export async function planStaffMessages(db: Db, now: Date): Promise<PlannedMessage[]> {
+  const planned: PlannedMessage[] = [];
+  for (const salon of await salonsForStaffMessages(db)) {
+    const local = DateTime.fromJSDate(now, { zone: salon.timeZone });
+    if (local.hour * 60 + local.minute < STAFF_LISTS_AT.hour * 60 + STAFF_LISTS_AT.minute) continue;
+    const day = local.plus({ days: 1 }).startOf('day');
+    const date = day.toISODate()!;
+    const sittings = await sittingsBetween(db, salon.id, day.toJSDate(), day.plus({ days: 1 }).toJSDate());
+    const rows: Insertable<MessagesTable>[] = [];
+    const dayName = day.toFormat('cccc d LLLL');
+    const byStylist = new Map<string, DaySitting[]>();
+    for (const s of sittings) byStylist.set(s.staffId, [...(byStylist.get(s.staffId) ?? []), s]);
+    for (const [staffId, list] of byStylist) {
+      const email = list[0].stylistEmail;
+      if (!email) continue;
+      rows.push({
+        salon_id: salon.id, kind: 'stylist_day_list', channel: 'email', to_address: email, send_at: now, dedupe_key: `staff:${staffId}:${date}:day_list`,
+        subject: `Your day, ${dayName}: ${list.length} sitting${list.length === 1 ? '' : 's'}`,
+        body: `Hello ${list[0].stylistName.split(' ')[0]},\n\nTomorrow at ${salon.name} (${salon.timeZone} time):\n\n${list.map((s) => line(s, salon.timeZone)).join('\n')}\n`,
+      });
+    }
+    const unpaid = sittings.filter((s) => s.depositDue > 0 && !s.depositPaid && s.seq === 1);
+    const body = unpaid.length === 0
+      ? 'Every booking tomorrow that needs a deposit has paid it.'
+      : unpaid.map((s) => `${line(s, salon.timeZone)} — deposit ${formatMoney(s.depositDue, salon.currency)} not paid`).join('\n');
+    for (const email of await deskEmails(db, salon.id)) {
+      rows.push({
+        salon_id: salon.id, kind: 'desk_no_deposit_list', channel: 'email', to_address: email, send_at: now, dedupe_key: `desk:${salon.id}:${email}:${date}:no_deposit`,
+        subject: `No deposit yet, ${dayName}: ${unpaid.length}`,
+        body: `Bookings at ${salon.name} tomorrow (${salon.timeZone} time) with a deposit still to pay:\n\n${body}\n`,
+      });
+    }
+    planned.push(...await insertPlanned(db, rows));
+  }
+  return planned;
+}
+
+function line(s: DaySitting, zone: string): string {
+  const part = s.sittingCount > 1 ? ` (sitting ${s.seq} of ${s.sittingCount})` : '';
+  return `${time(s.start, zone)}–${time(s.end, zone)}  ${s.clientName}: ${s.serviceName}${part}`;
+}

@@ -1,0 +1,76 @@
+import { useState } from 'react';
+import { useSuspenseQuery } from '@tanstack/react-query';
+import { Button } from '../../components/ui/button';
+import { PageHeader } from '../../components/ui/page-header';
+import { SectionCard } from '../../components/ui/section-card';
+import { catalogueQueries } from '../../features/catalogue/api/catalogue-queries';
+import { followUpQueries, useRemoveFollowUpRule } from '../../features/follow-ups/api/follow-up-queries';
+import { FollowUpRuleForm } from '../../features/follow-ups/components/follow-up-rule-form';
+import { salonQueries } from '../../features/salon/api/salon-queries';
+import { queryClient } from '../../lib/query-client';
+
+export async function loader() {
+  await Promise.all([
+    queryClient.ensureQueryData(followUpQueries.list()),
+    queryClient.ensureQueryData(catalogueQueries.services()),
+    queryClient.ensureQueryData(salonQueries.current()),
+  ]);
+  return null;
+}
+
+export function Component() {
+  const { data } = useSuspenseQuery(followUpQueries.list());
+  const { data: catalogue } = useSuspenseQuery(catalogueQueries.services());
+  const { data: salon } = useSuspenseQuery(salonQueries.current());
+  const remove = useRemoveFollowUpRule();
+  const [editing, setEditing] = useState<string | null>(null);
+  const [formKey, setFormKey] = useState(0);
+  const editingRule = data.rules.find((r) => r.id === editing) ?? null;
+  return (
+    <div className="flex flex-col gap-6">
+      <PageHeader
+        title="Follow-up rules"
+        subtitle="Suggestions sent some time after a service, e.g. a toner refresh six weeks after lightening. Only clients who said yes to suggestions get them."
+      />
+      <div className="grid gap-6 lg:grid-cols-2">
+        <SectionCard title="Rules">
+          {data.rules.length === 0 ? (
+            <p>No follow-up rules yet.</p>
+          ) : (
+            <ul className="flex flex-col gap-4">
+              {data.rules.map((r) => (
+                <li key={r.id} className="flex flex-col gap-1 border-b border-ink/10 pb-3">
+                  <p className="font-bold">
+                    {r.title} <span className="font-normal">after {r.serviceName}</span>
+                  </p>
+                  <p className="whitespace-pre-line">{r.text}</p>
+                  <code className="text-sm">{r.rrule}</code>
+                  <div className="flex gap-3">
+                    <Button variant="secondary" onClick={() => setEditing(r.id)} aria-label={`Edit ${r.title}`}>
+                      Edit
+                    </Button>
+                    <Button variant="secondary" busy={remove.isPending && remove.variables === r.id} onClick={() => remove.mutate(r.id)} aria-label={`Remove ${r.title}`}>
+                      Remove
+                    </Button>
+                  </div>
+                </li>
+              ))}
+            </ul>
+          )}
+        </SectionCard>
+        <SectionCard title={editingRule ? `Edit “${editingRule.title}”` : 'New rule'}>
+          <FollowUpRuleForm
+            key={editingRule ? `${editingRule.id}-${editingRule.version}` : `new-${formKey}`}
+            rule={editingRule}
+            services={catalogue.services}
+            timeZone={salon.timeZone}
+            onDone={() => {
+              setEditing(null);
+              setFormKey((k) => k + 1);
+            }}
+          />
+        </SectionCard>
+      </div>
+    </div>
+  );
+}

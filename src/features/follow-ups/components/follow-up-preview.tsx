@@ -1,0 +1,25 @@
+import { DateTime } from 'luxon';
+import { followUpRuleProblem, followUpTimes } from '../../../../shared/messages/follow-up-times';
+
+type Props = { rrule: string; timeZone: string; now: Date };
+
+/** When the rule would send for a sitting ending today at 17:00 salon time (same computation as the server). */
+export function FollowUpPreview({ rrule, timeZone, now }: Props) {
+  const rule = rrule.trim().replace(/^RRULE:/i, '').toUpperCase();
+  const problem = rule ? followUpRuleProblem(rule) : 'Enter a rule to see when it sends.';
+  const anchor = DateTime.fromJSDate(now, { zone: timeZone }).set({ hour: 17, minute: 0, second: 0, millisecond: 0 });
+  return (
+    <div aria-live="polite" className="rounded-lg bg-linen p-3 text-sm">
+      <p className="font-bold">Preview: for a sitting ending {anchor.toFormat("cccc d LLLL yyyy 'at' h:mm a")}</p>
+      {problem ? (
+        <p>{problem}</p>
+      ) : (
+        <ol className="list-decimal pl-5">
+          {followUpTimes(rule, anchor.toJSDate(), timeZone).map((d) => (
+            <li key={d.toISOString()}>{DateTime.fromJSDate(d, { zone: timeZone }).toFormat("cccc d LLLL yyyy 'at' h:mm a ZZZZ")}</li>
+          ))}
+        </ol>
+      )}
+    </div>
+  );
+}

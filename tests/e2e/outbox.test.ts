@@ -1,0 +1,41 @@
+import { DateTime } from 'luxon';
+import type { Browser } from 'playwright-core';
+import { afterAll, beforeAll, expect, it } from 'vitest';
+import { DEMO_PASSWORD } from '../../server/demo/demo-catalogue';
+import { baseUrl, connectBrowser, screenshot, signInThroughPage } from '../setup/browser';
+
+let browser: Browser;
+beforeAll(async () => {
+  browser = await connectBrowser();
+});
+afterAll(() => browser.close());
+
+it('a booking made at the desk shows its confirmation in the Outbox', async () => {
+  const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
+  const page = await context.newPage();
+  await signInThroughPage(page, 'desk@demo.test', DEMO_PASSWORD);
+  await page.waitForURL(`${baseUrl()}/desk**`);
+  await page.getByRole('link', { name: 'Book a service' }).first().click();
+  await page.getByRole('heading', { level: 1, name: 'Book a service' }).waitFor();
+  await page.getByLabel('Client').fill('Hollis');
+  await page.getByRole('list', { name: 'Matching clients' }).getByRole('button', { name: /Hollis Grant/ }).click();
+  await page.getByLabel('Service').selectOption({ label: 'Cut & finish' });
+  const later = DateTime.now().setZone('America/Denver').plus({ days: 9 }).toISODate()!;
+  await page.getByLabel('Earliest date').fill(later);
+  await page.getByRole('button', { name: 'Find times' }).click();
+  const options = page.getByRole('article');
+  await options.first().waitFor();
+  const booked = page.waitForResponse((r) => r.url().endsWith('/api/bookings') && r.request().method() === 'POST');
+  await options.first().getByRole('button', { name: 'Book this' }).click();
+  expect((await booked).status()).toBe(201);
+  await page.getByRole('heading', { level: 1, name: /Hollis Grant · Cut & finish/ }).waitFor();
+
+  await page.getByRole('link', { name: 'Outbox (demo)' }).first().click();
+  await page.getByRole('heading', { level: 1, name: 'Outbox (demo)' }).waitFor();
+  // The send log lists the confirmation at once (queued, then sent by the worker), on each channel Hollis has.
+  const row = page.getByRole('row').filter({ hasText: 'confirmation (e-mail)' }).filter({ hasText: 'Booked: Cut & finish' }).first();
+  await row.waitFor();
+  expect(await row.textContent()).toMatch(/Queued|Sending|Sent/);
+  await screenshot(page, 'outbox', true);
+  await context.close();
+});
