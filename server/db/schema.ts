@@ -355,6 +355,7 @@ export interface Database {
   consultation_photos: ConsultationPhotosTable;
   quotes: QuotesTable;
   strand_tests: StrandTestsTable;
+  follow_up_rules: FollowUpRulesTable;
 }
 
 /** migrations/20261203T0705. */
@@ -409,7 +410,6 @@ export interface QuotesTable {
   sent_at: ColumnType<Date | null, Date | null | undefined, Date | null>;
   accepted_at: ColumnType<Date | null, Date | null | undefined, Date | null>;
   updated_at: DefaultTimestamp;
-  follow_up_rules: FollowUpRulesTable;
 }
 
 /** Owner-edited marketing follow-ups per service (see migrations/20261203T0605). */
