@@ -21,6 +21,9 @@ beforeAll(async () => {
   t = await startTestApp();
   const db = t.testDb.db;
   salon = await insertSalon(db, { chairs: 2, basins: 1 });
+  // No quiet hours here: the confirmation SMS must go out whatever the time of day the suite runs
+  // (quiet hours have their own tests in messages.test.ts).
+  await db.updateTable('salons').set({ quiet_from: '00:00', quiet_to: '00:00' }).where('id', '=', salon.salonId).execute();
   slug = (await db.selectFrom('salons').select('slug').where('id', '=', salon.salonId).executeTakeFirstOrThrow()).slug;
   ana = await insertUser(db, salon.salonId, 'stylist');
   consultation = await insertPlannedService(db, salon.salonId, {
