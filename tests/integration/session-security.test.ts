@@ -120,7 +120,7 @@ describe('CSRF', () => {
       }
     }
     expect(failures).toEqual([]);
-  });
+  }, 120_000);
 
   it("refuses another session's token", async () => {
     const mine = await signedInAgent(t.app, owner.email, owner.password);
