@@ -21,7 +21,7 @@ import { loadBusySalon } from './busy-salon-db';
 
 const TARGET_MS = 300;
 const WARM_UP = 5;
-const RUNS = 40;
+const RUNS = Number(process.env.BENCH_RUNS ?? 40);
 const FROM = '2027-03-01';
 
 async function main(): Promise<void> {

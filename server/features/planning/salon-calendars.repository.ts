@@ -1,7 +1,8 @@
-import { sql, type RawBuilder } from 'kysely';
+import { sql } from 'kysely';
 import { DateTime } from 'luxon';
 import type { Db } from '../../db/database';
 import type { Scenario } from '../../../shared/engine/engine';
+import { formatIso, parseLocalDate, zoneClock } from '../../../shared/engine/local-time';
 
 export interface Horizon {
   /** Local dates in the salon's zone; `to` is exclusive. */
@@ -15,8 +16,6 @@ export type SalonCalendars = Scenario;
 /** A wall-clock `YYYY-MM-DDTHH:mm` in the salon's zone, the engine's input format. */
 export const toLocal = (d: Date, zone: string) => DateTime.fromJSDate(d, { zone }).toFormat("yyyy-MM-dd'T'HH:mm");
 const hhmm = (t: string) => t.slice(0, 5);
-/** The same `YYYY-MM-DDTHH:mm` as toLocal, computed by PostgreSQL for a timestamptz expression. */
-const localText = (instant: RawBuilder<unknown>, zone: string) => sql<string>`to_char(${instant} at time zone ${zone}, 'YYYY-MM-DD"T"HH24:MI')`;
 
 /**
  * Everything the engine needs to know about a salon over a horizon: opening hours, stylists with their
@@ -42,19 +41,19 @@ export async function loadSalonCalendars(db: Db, salonId: string, horizon: Horiz
       .execute(),
     db.selectFrom('chairs').select('id').where('salon_id', '=', salonId).where('active', '=', true).orderBy('name').execute(),
     db.selectFrom('basins').select('id').where('salon_id', '=', salonId).where('active', '=', true).orderBy('name').execute(),
-    // Each live sitting as the engine's booking object, built by PostgreSQL as one JSON value: thousands of
-    // steps then cost one JSON.parse instead of a row each (and a luxon conversion per instant).
-    sql<{ bookings: SalonCalendars['bookings'] }>`
-      select coalesce(json_agg(json_build_object('id', q.id, 'stylist', q.stylist, 'chair', q.chair, 'steps', q.steps) order by q.id), '[]'::json) as bookings
-      from (
-        select si.id, b.stylist_id as stylist, si.chair_id as chair,
-          json_agg(json_strip_nulls(json_build_object('kind', st.kind, 'start', ${localText(sql`lower(st.during)`, zone)}, 'end', ${localText(sql`upper(st.during)`, zone)}, 'basin', st.basin_id)) order by st.seq) as steps
-        from booking_steps st
-        join sittings si on si.id = st.sitting_id
-        join bookings b on b.id = si.booking_id
-        where b.salon_id = ${salonId} and st.live and b.id <> ${except ?? '00000000-0000-0000-0000-000000000000'} and si.during && ${range}
-        group by si.id, b.stylist_id, si.chair_id
-      ) q`.execute(db),
+    db
+      .selectFrom('booking_steps as st')
+      .innerJoin('sittings as si', 'si.id', 'st.sitting_id')
+      .innerJoin('bookings as b', 'b.id', 'si.booking_id')
+      // UTC minutes (cut to the minute, as the wall-clock text is) as plain integers: cheap to send and parse.
+      .select(['si.id as sittingId', 'b.stylist_id', 'si.chair_id', 'st.kind', 'st.basin_id', sql<number>`floor(extract(epoch from lower(st.during)) / 60)::int`.as('start'), sql<number>`floor(extract(epoch from upper(st.during)) / 60)::int`.as('end')])
+      .where('b.salon_id', '=', salonId)
+      .where('st.live', '=', true)
+      .where('b.id', '!=', except ?? '00000000-0000-0000-0000-000000000000')
+      .where(sql<boolean>`si.during && ${range}`)
+      .orderBy('si.id')
+      .orderBy('st.seq')
+      .execute(),
     db
       .selectFrom('out_of_service')
       .select(['chair_id', 'basin_id', sql<Date>`greatest(lower(during), ${from}::timestamptz)`.as('start'), sql<Date>`least(upper(during), ${to}::timestamptz)`.as('end')])
@@ -64,6 +63,16 @@ export async function loadSalonCalendars(db: Db, salonId: string, horizon: Horiz
   ]);
   const outOfService = (id: string) =>
     closures.filter((c) => c.chair_id === id || c.basin_id === id).map((c) => ({ start: toLocal(c.start, zone), end: toLocal(c.end, zone) }));
+  // The engine's own offset table for the zone turns minutes into wall-clock text; luxon per instant is slow.
+  const clock = zoneClock(zone, parseLocalDate(horizon.from)!, parseLocalDate(horizon.to)!);
+  const local = (utc: number) => formatIso(utc, clock.offsetAt(utc)).slice(0, 16);
+  const bookings = new Map<string, SalonCalendars['bookings'][number]>();
+  for (const s of steps) {
+    const booking = bookings.get(s.sittingId) ?? { id: s.sittingId, stylist: s.stylist_id, chair: s.chair_id, steps: [] };
+    const times = { start: local(s.start), end: local(s.end) };
+    booking.steps.push(s.kind === 'basin' ? { kind: 'basin', ...times, basin: s.basin_id! } : { kind: s.kind, ...times });
+    bookings.set(s.sittingId, booking);
+  }
   return {
     timeZone: zone,
     granularityMinutes: salon.granularity_minutes,
@@ -78,7 +87,7 @@ export async function loadSalonCalendars(db: Db, salonId: string, horizon: Horiz
     })),
     chairs: chairs.map((c) => ({ id: c.id, outOfService: outOfService(c.id) })),
     basins: basins.map((b) => ({ id: b.id, outOfService: outOfService(b.id) })),
-    bookings: steps.rows[0].bookings,
+    bookings: [...bookings.values()],
     fits: [],
   };
 }

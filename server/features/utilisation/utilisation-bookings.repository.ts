@@ -27,22 +27,35 @@ export interface PeriodSitting {
  * booking come together, in order, so callers can tell a booking's first sitting and its whole length.
  */
 export async function listPeriodSittings(db: Db, salonId: string, from: Date, to: Date): Promise<PeriodSitting[]> {
-  // One JSON value built by PostgreSQL: one JSON.parse instead of thousands of rows of parsed columns.
-  const { rows } = await sql<{ sittings: PeriodSitting[] }>`
-    select coalesce(json_agg(json_build_object(
-      'bookingId', b.id, 'status', b.status, 'serviceId', b.service_id, 'serviceName', sv.name, 'category', sv.category,
-      'stylistId', b.stylist_id, 'priceCents', b.price_cents, 'depositCents', b.deposit_cents, 'depositOutcome', b.deposit_outcome,
-      'stepPlan', case when sv.category = 'colour' then b.step_plan end, 'seq', si.seq,
-      'start', extract(epoch from lower(si.during)) * 1000, 'end', extract(epoch from upper(si.during)) * 1000
-    ) order by b.id, si.seq), '[]'::json) as sittings
-    from sittings si
-    join bookings b on b.id = si.booking_id
-    join services sv on sv.id = b.service_id
-    where b.salon_id = ${salonId} and b.status <> 'held' and si.booking_id in (
-      select f.booking_id from sittings f join bookings fb on fb.id = f.booking_id
-      where fb.salon_id = ${salonId} and f.during && tstzrange(${from}, ${to}, '[)') and lower(f.during) >= ${from}
-    )`.execute(db);
-  return rows[0].sittings;
+  const rows = await db
+    .selectFrom('sittings as si')
+    .innerJoin('bookings as b', 'b.id', 'si.booking_id')
+    .innerJoin('services as sv', 'sv.id', 'b.service_id')
+    .select([
+      'b.id as bookingId', 'b.status', 'b.service_id as serviceId', 'sv.name as serviceName', 'sv.category', 'b.stylist_id as stylistId',
+      'b.price_cents as priceCents', 'b.deposit_cents as depositCents', 'b.deposit_outcome as depositOutcome', 'si.seq',
+      // Plain numbers and a step plan only where it can matter: thousands of rows parse quickly.
+      sql<StepPlan | null>`case when sv.category = 'colour' then b.step_plan end`.as('stepPlan'),
+      sql<number>`extract(epoch from lower(si.during))::float8 * 1000`.as('start'),
+      sql<number>`extract(epoch from upper(si.during))::float8 * 1000`.as('end'),
+    ])
+    .where('b.salon_id', '=', salonId)
+    .where('b.status', '!=', 'held')
+    .where(
+      'si.booking_id',
+      'in',
+      db
+        .selectFrom('sittings as f')
+        .innerJoin('bookings as fb', 'fb.id', 'f.booking_id')
+        .select('f.booking_id')
+        .where('fb.salon_id', '=', salonId)
+        .where(sql<boolean>`f.during && tstzrange(${from}, ${to}, '[)')`)
+        .where(sql<boolean>`lower(f.during) >= ${from}`),
+    )
+    .orderBy('b.id')
+    .orderBy('si.seq')
+    .execute();
+  return rows;
 }
 
 /** When each of these cancelled bookings was cancelled, from the audit log (the first cancel entry). */

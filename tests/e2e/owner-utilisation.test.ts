@@ -1,0 +1,77 @@
+import { AxeBuilder } from '@axe-core/playwright';
+import type { Browser } from 'playwright-core';
+import { afterAll, beforeAll, expect, it } from 'vitest';
+import { DEMO_PASSWORD } from '../../server/demo/demo-catalogue';
+import { baseUrl, connectBrowser, screenshot, signInThroughPage } from '../setup/browser';
+
+let browser: Browser;
+beforeAll(async () => {
+  browser = await connectBrowser();
+});
+afterAll(() => browser.close());
+
+it('the owner opens Utilisation on the demo salon: charts, their tables, a CSV download, another period', async () => {
+  const context = await browser.newContext({ viewport: { width: 1280, height: 900 }, acceptDownloads: true });
+  const page = await context.newPage();
+  await signInThroughPage(page, 'owner@demo.test', DEMO_PASSWORD);
+  await page.waitForURL(`${baseUrl()}/owner**`);
+  const answer = page.waitForResponse((r) => r.url().includes('/api/owner/utilisation?') && r.status() === 200);
+  await page.getByRole('link', { name: 'Utilisation' }).click();
+  const api = await (await answer).json();
+  await page.getByRole('heading', { level: 1, name: 'Utilisation' }).waitFor();
+  // The page shows the API's (engine's) chair occupancy, rounded to a whole percent.
+  const shown = `${Math.round(api.chairOccupancy * 100)}%`;
+  await page.getByText('Chair occupancy', { exact: true }).first().waitFor();
+  expect(await page.locator('dl').first().innerText()).toContain(shown);
+  // The heat map chart is drawn, and its table holds one row per open weekday-hour.
+  await page.getByRole('img', { name: /Heat map of chair occupancy/ }).getByText(/^\d+%$/).first().waitFor();
+  const heatTable = page.getByRole('region', { name: 'Chair occupancy by weekday and hour' });
+  expect(await heatTable.locator('tbody tr').count()).toBe(api.heatMap.length);
+  // The stylist bars and their table: the demo salon's three stylists.
+  const stylists = page.getByRole('region', { name: 'Figures per stylist' });
+  for (const name of ['Ana Moreno', 'Marcus Bell', 'Lee Tanaka']) await stylists.getByText(name).waitFor();
+  await screenshot(page, 'owner-utilisation', true);
+  // WCAG 2.x A/AA rules through axe-core (Deque).
+  const axe = await new AxeBuilder({ page }).withTags(['wcag2a', 'wcag2aa', 'wcag22aa']).analyze();
+  expect(axe.violations.map((v) => `${v.id}: ${v.nodes.length}`)).toEqual([]);
+
+  const download = page.waitForEvent('download');
+  await page.getByRole('button', { name: 'Download CSV: Figures per stylist' }).click();
+  const file = await download;
+  expect(file.suggestedFilename()).toMatch(/^stylists-\d{4}-\d{2}-\d{2}-to-\d{4}-\d{2}-\d{2}\.csv$/);
+  const chunks: Buffer[] = [];
+  for await (const chunk of await file.createReadStream()) chunks.push(chunk as Buffer);
+  const csv = Buffer.concat(chunks).toString('utf8');
+  const lines = csv.split('\r\n');
+  expect(lines[0]).toBe('Stylist,Hands-on share,Hands-on minutes,Minutes on the clock,Bookings,No-shows,Revenue,Revenue per hour on the clock');
+  expect(lines).toHaveLength(1 + api.stylists.length);
+  expect(csv).toContain('Ana Moreno');
+
+  // Another period through the picker: a month.
+  const monthly = page.waitForResponse((r) => r.url().includes('period=month') && r.status() === 200);
+  await page.getByLabel('Period', { exact: true }).selectOption('month');
+  await page.getByRole('button', { name: 'Show figures' }).click();
+  const month = await (await monthly).json();
+  expect(month.period.kind).toBe('month');
+  await page.waitForURL(/period=month/);
+  await expect.poll(() => page.getByRole('region', { name: 'Weekly figures' }).locator('tbody tr').count(), { timeout: 15_000 }).toBe(month.weeks.length);
+  await context.close();
+});
+
+it('the desk sees occupancy and window use without money or stylists; a bad custom period is refused on the page', async () => {
+  const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
+  const page = await context.newPage();
+  await signInThroughPage(page, 'desk@demo.test', DEMO_PASSWORD);
+  await page.waitForURL(`${baseUrl()}/desk**`);
+  await page.getByRole('link', { name: 'Chair use' }).click();
+  await page.getByRole('heading', { level: 1, name: 'Utilisation' }).waitFor();
+  await page.getByRole('img', { name: /Heat map of chair occupancy/ }).waitFor();
+  expect(await page.getByText('Revenue per chair-hour').count()).toBe(0);
+  expect(await page.getByRole('region', { name: 'Figures per stylist' }).count()).toBe(0);
+  await page.getByLabel('Period', { exact: true }).selectOption('custom');
+  await page.getByLabel('First day').fill('2027-01-01');
+  await page.getByLabel('Last day').fill('2029-06-01');
+  await page.getByRole('button', { name: 'Show figures' }).click();
+  await page.getByText(/at most 2 years long/).waitFor();
+  await context.close();
+});
