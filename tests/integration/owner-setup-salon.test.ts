@@ -111,6 +111,12 @@ describe('salon settings', () => {
     await owner$.write('put', setupPaths.salon, valid());
   });
 
+  it('every set-up route is declared for the owner only', () => {
+    const setup = t.app.apiRoutes.filter((r) => r.path.startsWith('/api/owner/setup'));
+    expect(setup.length).toBeGreaterThanOrEqual(18);
+    for (const r of setup) expect(r.access, `${r.method} ${r.path}`).toEqual(['owner']);
+  });
+
   it('is for the owner only', async () => {
     const desk = await insertUser(t.testDb.db, salon.salonId, 'front_desk');
     const desk$ = await signedInAgent(t.app, desk.email, desk.password);

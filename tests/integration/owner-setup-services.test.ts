@@ -111,5 +111,13 @@ describe('services and step plans', () => {
     const desk$ = await signedInAgent(t.app, desk.email, desk.password);
     expect((await desk$.get(setupPaths.services)).status).toBe(403);
     expect((await desk$.write('post', setupPaths.services, service({ name: 'Desk try' }))).status).toBe(403);
+    // Another salon's owner cannot reach this salon's services.
+    const mine = (await owner$.get(setupPaths.services)).body.services[0];
+    const elsewhere = await insertSalon(t.testDb.db);
+    const stranger = await insertUser(t.testDb.db, elsewhere.salonId, 'owner');
+    const stranger$ = await signedInAgent(t.app, stranger.email, stranger.password);
+    expect((await stranger$.write('put', setupPaths.service(mine.id), service({ name: 'Taken over' }))).status).toBe(404);
+    expect((await stranger$.write('delete', setupPaths.service(mine.id))).status).toBe(404);
+    expect((await stranger$.get(setupPaths.services)).body.services).toEqual([]);
   });
 });

@@ -1,5 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { anonymousAgent, signedInAgent, startTestApp, type TestApp } from '../setup/test-app';
+import { waitForMail } from '../setup/mail';
 import { insertSalon, type SalonFixture } from '../factories/salon';
 import { insertUser, type UserFixture } from '../factories/user';
 import { insertPlannedService, tonerPlan } from '../factories/service';
@@ -26,14 +27,6 @@ beforeAll(async () => {
 });
 afterAll(() => t.close());
 
-async function waitForMail(to: string) {
-  for (let i = 0; i < 50; i++) {
-    const mail = t.smtp.messages.find((m) => m.to === to);
-    if (mail) return mail;
-    await new Promise((r) => setTimeout(r, 50));
-  }
-  throw new Error(`no e-mail to ${to}`);
-}
 
 const details = (overrides: object = {}) => ({ name: 'Rowan Vale', role: 'stylist', skills: ['colour'], maxClientsAtOnce: 2, hours: [weekdays], ...overrides });
 
@@ -44,7 +37,7 @@ describe('staff', () => {
     expect(res.status).toBe(201);
     expect(res.body).toMatchObject({ email, invited: true, active: true, details: { name: 'Rowan Vale', role: 'stylist', skills: ['colour'], maxClientsAtOnce: 2, hours: [weekdays] } });
     expect(res.body.staffId).toBeTruthy();
-    const mail = await waitForMail(email);
+    const mail = await waitForMail(t.smtp, email);
     const token = /reset-password\?token=([A-Za-z0-9_-]+)/.exec(mail.text)?.[1];
     expect(token).toBeDefined();
     const anon = await anonymousAgent(t.app);

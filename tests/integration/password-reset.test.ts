@@ -1,6 +1,7 @@
 import { createHash } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { anonymousAgent, signedInAgent, startTestApp, type TestApp } from '../setup/test-app';
+import { waitForMail } from '../setup/mail';
 import { insertSalon } from '../factories/salon';
 import { insertUser, type UserFixture } from '../factories/user';
 
@@ -14,14 +15,6 @@ beforeAll(async () => {
 });
 afterAll(() => t.close());
 
-async function waitForMail(to: string) {
-  for (let i = 0; i < 50; i++) {
-    const mail = t.smtp.messages.find((m) => m.to === to);
-    if (mail) return mail;
-    await new Promise((r) => setTimeout(r, 50));
-  }
-  throw new Error(`no e-mail to ${to}`);
-}
 
 describe('password reset', () => {
   it('answers 202 for an unknown address and sends nothing', async () => {
@@ -36,7 +29,7 @@ describe('password reset', () => {
     const oldSession = await signedInAgent(t.app, owner.email, owner.password);
     const c = await anonymousAgent(t.app);
     expect((await c.write('post', '/api/password-reset', { email: owner.email })).status).toBe(202);
-    const mail = await waitForMail(owner.email);
+    const mail = await waitForMail(t.smtp, owner.email);
     const token = /token=([A-Za-z0-9_-]+)/.exec(mail.text)?.[1];
     expect(token).toBeDefined();
     const stored = await t.testDb.db.selectFrom('password_resets').select('token_hash').execute();

@@ -16,7 +16,8 @@ const baseQuery = (db: Db, salonId: string) =>
 export const effectiveDeposit = (priceCents: number, fixedCents: number, percent: string | null): number =>
   percent === null ? fixedCents : Math.round((priceCents * Number(percent)) / 100);
 
-const toSummary = (r: Row): ServiceSummary => ({
+/** A services row as the menu shows it (the deposit worked out from a percentage where set). */
+export const toSummary = (r: Row): ServiceSummary => ({
   id: r.id,
   name: r.name,
   description: r.description,

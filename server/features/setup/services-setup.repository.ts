@@ -1,8 +1,7 @@
 import { sql } from 'kysely';
 import type { Db } from '../../db/database';
 import type { ServiceInput, SetupService } from '../../../shared/schemas/setup.schemas';
-import { StepPlanSchema } from '../../../shared/schemas/step-plan.schemas';
-import { effectiveDeposit } from '../services/services.repository';
+import { toSummary } from '../services/services.repository';
 
 /** Every service of the salon, retired ones too, with how many live bookings are still to come. */
 export async function listSetupServices(db: Db, salonId: string, now: Date): Promise<SetupService[]> {
@@ -25,18 +24,8 @@ export async function listSetupServices(db: Db, salonId: string, now: Date): Pro
     .orderBy('s.name')
     .execute();
   return rows.map((r) => ({
-    id: r.id,
-    name: r.name,
-    description: r.description,
-    category: r.category,
-    skill: r.skill,
-    priceCents: r.price_cents,
-    priceIsFrom: r.price_is_from,
-    depositCents: effectiveDeposit(r.price_cents, r.deposit_cents, r.deposit_percent),
+    ...toSummary(r),
     depositPercent: r.deposit_percent === null ? null : Number(r.deposit_percent),
-    onlineBookable: r.online_bookable,
-    needsSkinTest: r.needs_skin_test,
-    stepPlan: StepPlanSchema.parse(r.step_plan),
     active: r.active,
     futureBookings: r.futureBookings ?? 0,
   }));

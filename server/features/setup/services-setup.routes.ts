@@ -7,11 +7,10 @@ import { AppError, notFound } from '../../lib/app-error';
 import { writeAudit } from '../audit/audit.repository';
 import { findSalon } from '../salon/salon.repository';
 import { affectedMessage } from './affected-message';
+import { uniqueName } from './name-taken';
 import { listFutureBookings } from './future-bookings.repository';
 import { insertService, listSetupServices, listSkills, retireService, updateService } from './services-setup.repository';
 
-const isUniqueViolation = (e: unknown) => (e as { code?: string }).code === '23505';
-const nameTaken = () => new AppError('CONFLICT', 409, 'Another service already has this name.', { name: 'Another service already has this name.' });
 
 export function registerServiceSetupRoutes({ table, db }: AppDeps): void {
   const one = async (salonId: string, id: string) => {
@@ -31,9 +30,7 @@ export function registerServiceSetupRoutes({ table, db }: AppDeps): void {
     table,
     { method: 'post', path: setupPaths.services, access: ['owner'], summary: 'Add a service with its step plan', body: ServiceInputSchema, response: SetupServiceSchema, status: 201 },
     async ({ user, body }) => {
-      const id = await insertService(db, user.salonId, body).catch((e) => {
-        throw isUniqueViolation(e) ? nameTaken() : e;
-      });
+      const id = await uniqueName(insertService(db, user.salonId, body), 'service');
       await writeAudit(db, { salonId: user.salonId, actorUserId: user.id, entity: 'service', entityId: id, action: 'added', after: body });
       return one(user.salonId, id);
     },
@@ -43,9 +40,7 @@ export function registerServiceSetupRoutes({ table, db }: AppDeps): void {
     { method: 'put', path: '/api/owner/setup/services/:id', access: ['owner'], summary: 'Change a service (bookings already made keep their own copy)', params: IdParamsSchema, body: ServiceInputSchema, response: SetupServiceSchema },
     async ({ user, params, body }) => {
       const before = await one(user.salonId, params.id);
-      await updateService(db, user.salonId, params.id, body).catch((e) => {
-        throw isUniqueViolation(e) ? nameTaken() : e;
-      });
+      await uniqueName(updateService(db, user.salonId, params.id, body), 'service');
       await writeAudit(db, { salonId: user.salonId, actorUserId: user.id, entity: 'service', entityId: params.id, action: 'changed', before, after: body });
       return one(user.salonId, params.id);
     },

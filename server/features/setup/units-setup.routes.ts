@@ -13,19 +13,18 @@ import {
 } from '../../../shared/schemas/setup.schemas';
 import type { AppDeps } from '../../app-deps';
 import { apiRoute } from '../../lib/api-route';
-import { AppError, notFound } from '../../lib/app-error';
+import { notFound } from '../../lib/app-error';
 import { writeAudit } from '../audit/audit.repository';
 import { findSalon } from '../salon/salon.repository';
 import { withFreeStylists } from './free-stylists.service';
 import { listFutureBookings } from './future-bookings.repository';
+import { uniqueName } from './name-taken';
 import { deleteOutOfService, insertOutOfService, insertUnit, listUnits, renameUnit, unitExists } from './units-setup.repository';
 
 const ClosureParamsSchema = UnitParamsSchema.extend({ entryId: IdSchema });
-const isUniqueViolation = (e: unknown) => (e as { code?: string }).code === '23505';
 const singular = (kind: UnitKind) => (kind === 'chairs' ? 'chair' : 'basin');
 
 export function registerUnitSetupRoutes({ table, db }: AppDeps): void {
-  const nameTaken = (kind: UnitKind) => new AppError('CONFLICT', 409, `Another ${singular(kind)} already has this name.`, { name: `Another ${singular(kind)} already has this name.` });
   const assertUnit = async (salonId: string, kind: UnitKind, id: string) => {
     if (!(await unitExists(db, salonId, kind, id))) throw notFound(`That ${singular(kind)}`);
   };
@@ -50,9 +49,7 @@ export function registerUnitSetupRoutes({ table, db }: AppDeps): void {
     table,
     { method: 'post', path: '/api/owner/setup/units/:kind', access: ['owner'], summary: 'Add a chair or basin', params: UnitKindParamsSchema, body: UnitNameSchema, response: UnitListSchema, status: 201 },
     async ({ user, params, body }) => {
-      const id = await insertUnit(db, user.salonId, params.kind, body.name).catch((e) => {
-        throw isUniqueViolation(e) ? nameTaken(params.kind) : e;
-      });
+      const id = await uniqueName(insertUnit(db, user.salonId, params.kind, body.name), singular(params.kind));
       await writeAudit(db, { salonId: user.salonId, actorUserId: user.id, entity: singular(params.kind), entityId: id, action: 'added', after: body });
       return listUnits(db, user.salonId, new Date());
     },
@@ -62,9 +59,7 @@ export function registerUnitSetupRoutes({ table, db }: AppDeps): void {
     { method: 'put', path: '/api/owner/setup/units/:kind/:id', access: ['owner'], summary: 'Rename a chair or basin', params: UnitParamsSchema, body: UnitNameSchema, response: UnitListSchema },
     async ({ user, params, body }) => {
       await assertUnit(user.salonId, params.kind, params.id);
-      await renameUnit(db, user.salonId, params.kind, params.id, body.name).catch((e) => {
-        throw isUniqueViolation(e) ? nameTaken(params.kind) : e;
-      });
+      await uniqueName(renameUnit(db, user.salonId, params.kind, params.id, body.name), singular(params.kind));
       await writeAudit(db, { salonId: user.salonId, actorUserId: user.id, entity: singular(params.kind), entityId: params.id, action: 'renamed', after: body });
       return listUnits(db, user.salonId, new Date());
     },
