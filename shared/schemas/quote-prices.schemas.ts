@@ -7,7 +7,8 @@ const centsPerGram = z.number({ error: 'Give a cost or leave it empty' }).min(0,
 export const QuotePricesSchema = z
   .object({
     correctionCentsPerHour: z.number({ error: 'Give the hourly rate' }).int('Whole cents').min(0, 'The rate cannot be negative').max(1_000_000),
-    productCentsPerGram: z.partialRecord(ProductTypeSchema, centsPerGram),
+    // An empty box in the form arrives as undefined: no cost set for that type.
+    productCentsPerGram: z.partialRecord(ProductTypeSchema, centsPerGram.optional()),
   })
   .strict();
 export type QuotePrices = z.infer<typeof QuotePricesSchema>;

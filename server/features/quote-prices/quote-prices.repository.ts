@@ -16,6 +16,8 @@ export async function correctionRate(db: Db, salonId: string): Promise<number> {
 export async function saveQuotePrices(db: Db, salonId: string, prices: { correctionCentsPerHour: number; productCentsPerGram: Partial<Record<ProductType, number>> }) {
   await db.updateTable('salons').set({ correction_cents_per_hour: prices.correctionCentsPerHour }).where('id', '=', salonId).execute();
   await db.deleteFrom('product_costs').where('salon_id', '=', salonId).execute();
-  const rows = Object.entries(prices.productCentsPerGram).map(([type, cents]) => ({ salon_id: salonId, product_type: type as ProductType, cents_per_gram: cents! }));
+  const rows = Object.entries(prices.productCentsPerGram)
+    .filter(([, cents]) => cents !== undefined)
+    .map(([type, cents]) => ({ salon_id: salonId, product_type: type as ProductType, cents_per_gram: cents! }));
   if (rows.length) await db.insertInto('product_costs').values(rows).execute();
 }
