@@ -14,23 +14,34 @@ export function toE164(input: string, country: CountryCode = DEFAULT_PHONE_COUNT
   return parsed?.isValid() ? parsed.number : null;
 }
 
-/** A phone number, stored in E.164 whatever spacing or punctuation it was typed with. */
-export const PhoneSchema = z
-  .string()
-  .trim()
-  .max(40, PHONE_HINT)
-  .transform((s, ctx) => {
-    const e164 = toE164(s);
-    if (!e164) ctx.addIssue({ code: 'custom', message: PHONE_HINT });
-    return e164 ?? z.NEVER;
-  });
+/** Reads a typed number into E.164, or reports the hint on the field; '' is passed on for optional use. */
+function readPhone(optional: boolean) {
+  return z
+    .string()
+    .trim()
+    .max(40, PHONE_HINT)
+    .transform((s, ctx): string | null => {
+      if (optional && s === '') return null;
+      const e164 = toE164(s);
+      if (!e164) ctx.addIssue({ code: 'custom', message: PHONE_HINT });
+      return e164 ?? z.NEVER;
+    });
+}
 
-/** An optional phone number: '' (or nothing) means none. */
-export const OptionalPhoneSchema = z.union([z.literal('').transform(() => null), PhoneSchema]);
+/** A phone number, stored in E.164 whatever spacing or punctuation it was typed with. */
+export const PhoneSchema = readPhone(false).transform((s) => s!);
+/** An optional phone number: '' means none (null). */
+export const OptionalPhoneSchema = readPhone(true);
 
 export const EmailSchema = z.string().trim().toLowerCase().pipe(z.email('Enter a valid e-mail address').max(254));
-/** An optional e-mail address: '' (or nothing) means none. */
-export const OptionalEmailSchema = z.union([z.literal('').transform(() => null), EmailSchema]);
+/** An optional e-mail address: '' means none (null); one message for anything else that is not an address. */
+export const OptionalEmailSchema = z
+  .string()
+  .trim()
+  .toLowerCase()
+  .max(254)
+  .refine((s) => s === '' || z.email().safeParse(s).success, 'Enter a valid e-mail address')
+  .transform((s) => s || null);
 
 export const MessageChannelSchema = z.enum(['sms', 'email', 'both']);
 export type MessageChannelChoice = z.infer<typeof MessageChannelSchema>;

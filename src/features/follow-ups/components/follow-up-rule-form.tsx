@@ -39,7 +39,6 @@ export function FollowUpRuleForm({ rule, services, timeZone, onDone }: Props) {
       <TextField
         label="When (RRULE)"
         hint="Counted from the end of the last sitting, e.g. FREQ=WEEKLY;INTERVAL=6;COUNT=1 is once, six weeks later."
-        className="font-mono"
         error={errors.rrule?.message}
         {...register('rrule')}
       />
