@@ -16,8 +16,6 @@ export const navLinks: Record<Role, { to: string; label: string }[]> = {
     { to: paths.owner, label: 'Overview' },
     { to: paths.ownerUtilisation, label: 'Utilisation' },
     { to: paths.ownerSetup, label: 'Set-up' },
-    { to: '/owner/quote-prices', label: 'Quote prices' },
-    { to: '/owner/follow-up-rules', label: 'Follow-up rules' },
     ...deskLinks,
   ],
   front_desk: [...deskLinks, { to: paths.deskUtilisation, label: 'Chair use' }],

@@ -15,6 +15,8 @@ export const paths = {
   ownerSetupUnits: '/owner/setup/chairs-and-basins',
   ownerSetupServices: '/owner/setup/services',
   ownerSetupService: (id: string) => `/owner/setup/services/${id}`,
+  ownerQuotePrices: '/owner/setup/quote-prices',
+  ownerFollowUps: '/owner/setup/follow-up-rules',
   desk: (date?: string) => (date ? `/desk?date=${date}` : '/desk'),
   deskClient: (id: string) => `/desk/clients/${id}`,
   outbox: '/desk/outbox',

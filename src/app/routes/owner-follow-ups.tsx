@@ -2,6 +2,7 @@ import { useState } from 'react';
 import { useSuspenseQuery } from '@tanstack/react-query';
 import { Button } from '../../components/ui/button';
 import { PageHeader } from '../../components/ui/page-header';
+import { SetupNav } from '../../features/setup/components/setup-nav';
 import { SectionCard } from '../../components/ui/section-card';
 import { catalogueQueries } from '../../features/catalogue/api/catalogue-queries';
 import { followUpQueries, useRemoveFollowUpRule } from '../../features/follow-ups/api/follow-up-queries';
@@ -29,9 +30,10 @@ export function Component() {
   return (
     <div className="flex flex-col gap-6">
       <PageHeader
-        title="Follow-up rules"
-        subtitle="Suggestions sent some time after a service, e.g. a toner refresh six weeks after lightening. Only clients who said yes to suggestions get them."
+        title="Set-up"
+        subtitle="Follow-up rules: suggestions sent some time after a service, e.g. a toner refresh six weeks after lightening. Only clients who said yes to suggestions get them."
       />
+      <SetupNav />
       <div className="grid gap-6 lg:grid-cols-2">
         <SectionCard title="Rules">
           {data.rules.length === 0 ? (

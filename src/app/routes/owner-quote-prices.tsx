@@ -1,6 +1,7 @@
 import { useSuspenseQuery } from '@tanstack/react-query';
 import { PageHeader } from '../../components/ui/page-header';
 import { SectionCard } from '../../components/ui/section-card';
+import { SetupNav } from '../../features/setup/components/setup-nav';
 import { quotePriceQueries } from '../../features/quote-prices/api/quote-price-queries';
 import { QuotePricesForm } from '../../features/quote-prices/components/quote-prices-form';
 import { queryClient } from '../../lib/query-client';
@@ -14,7 +15,8 @@ export function Component() {
   const { data } = useSuspenseQuery(quotePriceQueries.current());
   return (
     <div className="flex flex-col gap-6">
-      <PageHeader title="Quote prices" subtitle="What Dwell prices proposed quotes and mix-log product estimates from." />
+      <PageHeader title="Set-up" subtitle="Quote prices: what Dwell prices proposed quotes and mix-log product estimates from." />
+      <SetupNav />
       <SectionCard title="Rates and product costs">
         <QuotePricesForm initial={data} />
       </SectionCard>

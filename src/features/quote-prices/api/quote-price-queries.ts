@@ -3,8 +3,6 @@ import { QuotePricesSchema, type QuotePrices } from '../../../../shared/schemas/
 import { apiGet, apiWrite } from '../../../lib/api-client';
 
 export const quotePricesPath = '/api/owner/quote-prices';
-/** The owner's page for them (beside the API path so links and the router agree). */
-export const quotePricesPagePath = '/owner/quote-prices';
 
 export const quotePriceQueries = {
   current: () => queryOptions({ queryKey: ['quote-prices'] as const, queryFn: () => apiGet(quotePricesPath, QuotePricesSchema) }),

@@ -6,6 +6,8 @@ const links = [
   { to: paths.ownerSetupStaff, label: 'Staff', end: true },
   { to: paths.ownerSetupUnits, label: 'Chairs and basins', end: true },
   { to: paths.ownerSetupServices, label: 'Services and step plans', end: false },
+  { to: paths.ownerQuotePrices, label: 'Quote prices', end: true },
+  { to: paths.ownerFollowUps, label: 'Follow-up rules', end: true },
 ];
 
 /** The set-up pages' own small navigation, under the page title. */
