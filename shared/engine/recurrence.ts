@@ -6,14 +6,9 @@
  * back from the UTC fields; the time of day of an occurrence is ignored (hours carry their own
  * start/end). A bare rule counts from horizon.from, which matters for INTERVAL and COUNT.
  */
-import * as rrulePackage from 'rrule';
+import { rrule as rr } from './rrule-package';
 import { DateTime } from 'luxon';
 import type { ZoneClock } from './local-time';
-
-// Under plain Node the package resolves to its CommonJS build, whose exports sit on `default`.
-const rr = ((rrulePackage as { RRule?: unknown }).RRule
-  ? rrulePackage
-  : (rrulePackage as unknown as { default: typeof rrulePackage }).default) as typeof rrulePackage;
 
 export class RecurrenceError extends Error {}
 

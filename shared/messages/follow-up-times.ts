@@ -5,13 +5,8 @@
  * over as salon wall time and each occurrence is read back in the salon's zone: "6 weeks later" keeps the
  * same local time of day across a daylight-saving change.
  */
-import * as rrulePackage from 'rrule';
+import { rrule as rr } from '../engine/rrule-package';
 import { DateTime } from 'luxon';
-
-// Under plain Node the package resolves to its CommonJS build, whose exports sit on `default`.
-const rr = ((rrulePackage as { RRule?: unknown }).RRule
-  ? rrulePackage
-  : (rrulePackage as unknown as { default: typeof rrulePackage }).default) as typeof rrulePackage;
 
 /** No rule sends more than this many follow-ups for one booking, and none later than two years on. */
 export const MAX_FOLLOW_UPS = 6;

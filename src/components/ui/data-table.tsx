@@ -1,5 +1,4 @@
 import {
-  flexRender,
   getCoreRowModel,
   getFilteredRowModel,
   getPaginationRowModel,
@@ -10,6 +9,7 @@ import {
 } from '@tanstack/react-table';
 import { useId, useState } from 'react';
 import { Button } from './button';
+import { TableGrid } from './table-grid';
 
 type Props<T> = {
   /** Names the table region and the filter box, e.g. "Services". */
@@ -22,8 +22,6 @@ type Props<T> = {
   pageSize?: number;
   empty: string;
 };
-
-const sortWords = { asc: 'ascending', desc: 'descending' } as const;
 
 /** A table with a text filter, sortable column headers and pages (TanStack Table). */
 export function DataTable<T>({ label, rows, columns, filterHint, initialSort = [], pageSize = 10, empty }: Props<T>) {
@@ -58,42 +56,7 @@ export function DataTable<T>({ label, rows, columns, filterHint, initialSort = [
       <p aria-live="polite" className="text-sm text-ink/80">
         {shown} of {rows.length} shown
       </p>
-      <div role="region" aria-label={label} tabIndex={0} className="relative overflow-x-auto rounded-xl ring-1 ring-ink/10">
-        <table className="w-full min-w-[40rem] border-collapse bg-white text-left">
-          <thead className="bg-linen">
-            {table.getHeaderGroups().map((group) => (
-              <tr key={group.id}>
-                {group.headers.map((header) => {
-                  const sorted = header.column.getIsSorted();
-                  return (
-                    <th key={header.id} scope="col" aria-sort={sorted ? sortWords[sorted] : undefined} className="px-3 py-2 align-bottom">
-                      {header.column.getCanSort() ? (
-                        <button type="button" onClick={header.column.getToggleSortingHandler()} className="inline-flex min-h-11 items-center gap-1 font-bold">
-                          {flexRender(header.column.columnDef.header, header.getContext())}
-                          <span aria-hidden="true">{sorted === 'asc' ? '▲' : sorted === 'desc' ? '▼' : '↕'}</span>
-                        </button>
-                      ) : (
-                        flexRender(header.column.columnDef.header, header.getContext())
-                      )}
-                    </th>
-                  );
-                })}
-              </tr>
-            ))}
-          </thead>
-          <tbody>
-            {table.getRowModel().rows.map((row) => (
-              <tr key={row.id} className="border-t border-ink/10 align-top">
-                {row.getVisibleCells().map((cell) => (
-                  <td key={cell.id} className="px-3 py-2">
-                    {flexRender(cell.column.columnDef.cell, cell.getContext())}
-                  </td>
-                ))}
-              </tr>
-            ))}
-          </tbody>
-        </table>
-      </div>
+      <TableGrid table={table} label={label} minWidth />
       {rows.length === 0 && <p>{empty}</p>}
       {table.getPageCount() > 1 && (
         <nav aria-label={`Pages of ${label.toLowerCase()}`} className="flex items-center gap-3">
