@@ -22,11 +22,26 @@ declare module 'express-session' {
  */
 export function installSessions(app: Express, deps: { pool: pg.Pool; db: Db; config: Config }): void {
   const PgStore = connectPgSimple(session);
+  // `rolling` touches the stored session on every request: an UPDATE per calendar read. Touching a session
+  // at most once a minute per app server keeps the idle timeout (hours) true to within that minute.
+  class ThrottledPgStore extends PgStore {
+    #touched = new Map<string, number>();
+    override touch(sid: string, sess: session.SessionData, done?: (err?: unknown) => void): void {
+      const now = Date.now();
+      if (now - (this.#touched.get(sid) ?? 0) < TOUCH_EVERY_MS) {
+        done?.();
+        return;
+      }
+      if (this.#touched.size > 10_000) this.#touched.clear();
+      this.#touched.set(sid, now);
+      super.touch(sid, sess, done);
+    }
+  }
   app.use(
     session({
       name: 'dwell.sid',
       secret: deps.config.sessionSecret,
-      store: new PgStore({ pool: deps.pool, tableName: 'session', pruneSessionInterval: 15 * 60 }),
+      store: new ThrottledPgStore({ pool: deps.pool, tableName: 'session', pruneSessionInterval: 15 * 60 }),
       resave: false,
       saveUninitialized: false,
       rolling: true,
@@ -47,6 +62,8 @@ export function installSessions(app: Express, deps: { pool: pg.Pool; db: Db; con
   });
   app.use(passport.session());
 }
+
+const TOUCH_EVERY_MS = 60_000;
 
 const absoluteTimeout =
   (hours: number): RequestHandler =>

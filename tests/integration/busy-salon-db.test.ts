@@ -2,6 +2,11 @@ import { sql } from 'kysely';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { loadBusySalon, type BusySalon } from '../bench/busy-salon-db';
 import { createTestDb, type TestDb } from '../setup/test-db';
+import { planOptions } from '../../shared/engine/engine';
+import { freeTimes } from '../../server/features/online-booking/availability.service';
+import { loadSalonCalendars } from '../../server/features/planning/salon-calendars.repository';
+import { localEarliest, toEngineSittings } from '../../server/features/planning/engine-request';
+import { listServices } from '../../server/features/services/services.repository';
 
 let testDb: TestDb;
 let busy: BusySalon;
@@ -53,4 +58,19 @@ describe('busy salon loader', () => {
     expect(again.counts).toEqual(busy.counts);
     expect(again.salonId).not.toBe(busy.salonId);
   }, 120_000);
+
+  it('gives public free times from a first-week search equal to the engine over the whole three weeks', async () => {
+    const now = new Date('2027-03-02T15:00:00Z');
+    const service = (await listServices(testDb.db, busy.salonId)).find((s) => s.stepPlan.sittings.length === 1 && !s.needsSkinTest)!;
+    const salon = { id: busy.salonId, time_zone: busy.timeZone, granularity_minutes: 5 };
+    const answer = await freeTimes(testDb.db, salon, service, undefined, '2027-03-02', now);
+    const full = planOptions({
+      ...(await loadSalonCalendars(testDb.db, busy.salonId, { from: '2027-03-02', to: '2027-03-23' })),
+      request: { skill: service.skill, stylist: null, earliest: localEarliest(now, busy.timeZone, 5), sittings: toEngineSittings(service.stepPlan), limit: 400, spread: 'none' },
+    }).options;
+    expect(answer.times).toHaveLength(400);
+    expect(answer.times.map((t) => [t.stylistId, t.start, t.end])).toEqual(
+      full.map((o) => [o.stylist, o.sittings[0].steps[0].start, o.sittings[0].steps[o.sittings[0].steps.length - 1].end]),
+    );
+  });
 });

@@ -1,5 +1,6 @@
 import { sql } from 'kysely';
 import { DateTime } from 'luxon';
+import { formatIso, zoneClock } from '../../../shared/engine/local-time';
 import type { Db } from '../../db/database';
 import type { BookingView } from '../../../shared/schemas/booking-view.schemas';
 import type { BookingStatus } from '../../../shared/schemas/common.schemas';
@@ -41,9 +42,11 @@ export async function loadBookingViews(db: Db, filter: BookingFilter, timeZone: 
   if (!bookings.length) return [];
   const ids = bookings.map((b) => b.id);
   const [sittings, steps] = await Promise.all([loadSittings(db, ids), loadSteps(db, ids)]);
-  const iso = (d: Date) => DateTime.fromJSDate(d, { zone: timeZone }).toISO({ suppressMilliseconds: true })!;
+  const iso = isoInZone(timeZone, filter);
+  const sittingsOf = groupBy(sittings, (s) => s.booking_id);
+  const stepsOf = groupBy(steps, (st) => st.sitting_id);
   const views = bookings.map((b): BookingView => {
-    const own = sittings.filter((s) => s.booking_id === b.id);
+    const own = sittingsOf.get(b.id) ?? [];
     const plan = b.step_plan as StepPlan;
     return {
       id: b.id,
@@ -62,9 +65,7 @@ export async function loadBookingViews(db: Db, filter: BookingFilter, timeZone: 
         chairName: s.chairName,
         start: iso(s.start),
         end: iso(s.end),
-        steps: steps
-          .filter((st) => st.sitting_id === s.id)
-          .map((st) => {
+        steps: (stepsOf.get(s.id) ?? []).map((st) => {
             const planned = plan.sittings[s.seq - 1]?.steps[st.seq - 1];
             const range = planned?.kind === 'developing' ? planned : null;
             return {
@@ -76,6 +77,38 @@ export async function loadBookingViews(db: Db, filter: BookingFilter, timeZone: 
     };
   });
   return views.sort((a, b) => a.sittings[0].start.localeCompare(b.sittings[0].start));
+}
+
+function groupBy<T>(rows: T[], key: (row: T) => string): Map<string, T[]> {
+  const groups = new Map<string, T[]>();
+  for (const row of rows) {
+    const group = groups.get(key(row));
+    if (group) group.push(row);
+    else groups.set(key(row), [row]);
+  }
+  return groups;
+}
+
+/**
+ * ISO 8601 in the salon's zone, as luxon's toISO({ suppressMilliseconds: true }) writes it. A week of the
+ * book prints thousands of instants and luxon's per-instant zone lookup was most of the request's CPU,
+ * so whole-second instants go through the engine's offset table instead.
+ */
+export function isoInZone(timeZone: string, filter: Pick<BookingFilter, 'from' | 'to'>): (d: Date) => string {
+  const luxon = (d: Date) => DateTime.fromJSDate(d, { zone: timeZone }).toISO({ suppressMilliseconds: true })!;
+  // A fixed zone such as UTC prints as "Z" in luxon; keep luxon's text there.
+  if (DateTime.now().setZone(timeZone).zone.isUniversal) return luxon;
+  const day = (d: Date | undefined, fallback: number) => (d ? Math.floor(d.getTime() / 86_400_000) : fallback);
+  const today = Math.floor(Date.now() / 86_400_000);
+  const clock = zoneClock(timeZone, day(filter.from, today), day(filter.to, today) + 1);
+  return (d) => {
+    const ms = d.getTime();
+    if (ms % 1000 !== 0) return luxon(d);
+    const minute = Math.floor(ms / 60_000);
+    const text = formatIso(minute, clock.offsetAt(minute));
+    const seconds = (ms / 1000) % 60;
+    return `${text.slice(0, 16)}:${seconds < 10 ? '0' : ''}${seconds}${text.slice(16)}`;
+  };
 }
 
 function loadSittings(db: Db, bookingIds: string[]) {

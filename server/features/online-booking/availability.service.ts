@@ -12,6 +12,7 @@ import { loadNames } from '../planning/names.repository';
 /** How far ahead online clients see free times. */
 export const ONLINE_DAYS = 21;
 const MAX_TIMES = 400;
+const FIRST_DAYS = 7;
 
 interface SalonRow {
   id: string;
@@ -23,16 +24,24 @@ interface SalonRow {
 export async function freeTimes(db: Db, salon: SalonRow, service: ServiceSummary, stylistId: string | undefined, from: string | undefined, now: Date, except?: string): Promise<Availability> {
   const zone = salon.time_zone;
   const fromDay = DateTime.max(DateTime.fromISO(from ?? '1970-01-01', { zone }), DateTime.fromJSDate(now, { zone }).startOf('day'));
-  const horizon = { from: fromDay.toISODate()!, to: fromDay.plus({ days: ONLINE_DAYS }).toISODate()! };
-  const calendars = await loadSalonCalendars(db, salon.id, horizon, except);
-  if (stylistId && !calendars.stylists.some((s) => s.id === stylistId)) {
-    throw new AppError('VALIDATION_FAILED', 400, 'Some fields need attention.', { stylistId: 'No such stylist in this salon.' });
-  }
   const earliest = new Date(Math.max(now.getTime(), fromDay.toMillis()));
-  const { options } = planOptions({
-    ...calendars,
-    request: { skill: service.skill, stylist: stylistId ?? null, earliest: localEarliest(earliest, zone, salon.granularity_minutes), sittings: toEngineSittings(service.stepPlan), limit: MAX_TIMES, spread: 'none' },
-  });
+  // The engine walks day by day and stops at MAX_TIMES, and with one sitting each
+  // day's times depend on that day's book alone: a busy salon fills the list within the first week, and
+  // loading (and indexing) three weeks of its book for that was most of the request's cost.
+  const search = async (days: number) => {
+    const horizon = { from: fromDay.toISODate()!, to: fromDay.plus({ days }).toISODate()! };
+    const calendars = await loadSalonCalendars(db, salon.id, horizon, except);
+    if (stylistId && !calendars.stylists.some((s) => s.id === stylistId)) {
+      throw new AppError('VALIDATION_FAILED', 400, 'Some fields need attention.', { stylistId: 'No such stylist in this salon.' });
+    }
+    return planOptions({
+      ...calendars,
+      request: { skill: service.skill, stylist: stylistId ?? null, earliest: localEarliest(earliest, zone, salon.granularity_minutes), sittings: toEngineSittings(service.stepPlan), limit: MAX_TIMES, spread: 'none' },
+    }).options;
+  };
+  const oneSitting = service.stepPlan.sittings.length === 1;
+  let options = oneSitting ? await search(FIRST_DAYS) : [];
+  if (options.length < MAX_TIMES) options = await search(ONLINE_DAYS);
   const names = await loadNames(db, salon.id);
   return {
     timeZone: zone,
