@@ -64,7 +64,7 @@ it('the desk sees occupancy and window use without money or stylists; a bad cust
   await signInThroughPage(page, 'desk@demo.test', DEMO_PASSWORD);
   await page.waitForURL(`${baseUrl()}/desk**`);
   await page.getByRole('link', { name: 'Chair use' }).click();
-  await page.getByRole('heading', { level: 1, name: 'Utilisation' }).waitFor();
+  await page.getByRole('heading', { level: 1, name: 'Chair use' }).waitFor();
   await page.getByRole('img', { name: /Heat map of chair occupancy/ }).waitFor();
   expect(await page.getByText('Revenue per chair-hour').count()).toBe(0);
   expect(await page.getByRole('region', { name: 'Figures per stylist' }).count()).toBe(0);

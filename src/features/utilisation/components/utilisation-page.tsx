@@ -25,15 +25,15 @@ function usePeriodQuery(): [UtilisationQuery, (next: UtilisationQuery) => void] 
   return [queryFromSearch(search), set];
 }
 
-type FrameProps = { report: DeskUtilisation; query: UtilisationQuery; onQuery: (q: UtilisationQuery) => void; actions?: ReactNode; children: ReactNode };
+type FrameProps = { title: string; report: DeskUtilisation; query: UtilisationQuery; onQuery: (q: UtilisationQuery) => void; actions?: ReactNode; children: ReactNode };
 
 /** Heading, period picker and the period in words; the figures go below. */
-function Frame({ report, query, onQuery, actions, children }: FrameProps) {
+function Frame({ title, report, query, onQuery, actions, children }: FrameProps) {
   const last = DateTime.fromISO(report.period.to).minus({ days: 1 }).toISODate()!;
   const span = report.period.days === 1 ? formatLocalDate(report.period.from) : `${formatLocalDate(report.period.from)} to ${formatLocalDate(last)}`;
   return (
     <div className="flex flex-col gap-6">
-      <PageHeader title="Utilisation" subtitle={<p>{report.salon.name} · {span} · salon time ({report.salon.timeZone})</p>} />
+      <PageHeader title={title} subtitle={<p>{report.salon.name} · {span} · salon time ({report.salon.timeZone})</p>} />
       {/* The key resets the form when the URL's period changes (back button, a shared link). */}
       <PeriodPicker key={JSON.stringify(query)} value={query} onChange={onQuery} />
       {actions}
@@ -61,7 +61,7 @@ export function OwnerUtilisationView() {
     </p>
   );
   return (
-    <Frame report={report} query={query} onQuery={setQuery} actions={actions}>
+    <Frame title="Utilisation" report={report} query={query} onQuery={setQuery} actions={actions}>
       <UtilisationSummary report={report} money={money} />
       <OccupancyHeatMap cells={report.heatMap} filename={`chair-occupancy-by-hour-${slug(report)}.csv`} />
       <StylistBars stylists={report.stylists} money={money} filename={`stylists-${slug(report)}.csv`} />
@@ -75,7 +75,7 @@ export function DeskUtilisationView() {
   const [query, setQuery] = usePeriodQuery();
   const { data: report } = useSuspenseQuery(utilisationQueries.desk(query));
   return (
-    <Frame report={report} query={query} onQuery={setQuery}>
+    <Frame title="Chair use" report={report} query={query} onQuery={setQuery}>
       <UtilisationSummary report={report} />
       <OccupancyHeatMap cells={report.heatMap} filename={`chair-occupancy-by-hour-${slug(report)}.csv`} />
       <WeeklyTrend weeks={report.weeks} filename={`weeks-${slug(report)}.csv`} />
