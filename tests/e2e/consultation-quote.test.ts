@@ -1,8 +1,7 @@
 import { DateTime } from 'luxon';
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { DEMO_PASSWORD } from '../../server/demo/demo-catalogue';
-import { baseUrl, connectBrowser, screenshot, signInThroughPage } from '../setup/browser';
+import { baseUrl, connectBrowser, screenshot, signedInPage } from '../setup/browser';
 
 let browser: Browser;
 beforeAll(async () => {
@@ -10,13 +9,7 @@ beforeAll(async () => {
 });
 afterAll(() => browser.close());
 
-async function signedIn(email: string, path: string): Promise<Page> {
-  const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
-  const page = await context.newPage();
-  await signInThroughPage(page, email, DEMO_PASSWORD);
-  await page.waitForURL(`${baseUrl()}${path}**`);
-  return page;
-}
+const signedIn = (email: string, path: string) => signedInPage(browser, email, path);
 
 const shot = (page: Page, name: string) => screenshot(page, name, true);
 const apiAnswer = (page: Page, method: string, path: RegExp) =>

@@ -1,6 +1,7 @@
 import { copyFileSync, mkdirSync } from 'node:fs';
 import { join } from 'node:path';
 import { chromium, type Browser, type Page } from 'playwright-core';
+import { DEMO_PASSWORD } from '../../server/demo/demo-catalogue';
 import { inject } from 'vitest';
 
 export const screenshotDir = join(process.cwd(), 'tests', 'output', 'screenshots');
@@ -23,9 +24,21 @@ export async function signInThroughPage(page: Page, email: string, password: str
   await page.getByRole('button', { name: 'Sign in' }).click();
 }
 
-/** A full-page screenshot in the test output; `forDocs` also copies it into docs/screenshots. */
-export async function screenshot(page: Page, name: string, forDocs = false): Promise<void> {
+/** A demo user's page at desktop size, signed in through the sign-in page and arrived at their home `path`. */
+export async function signedInPage(browser: Browser, email: string, path: string): Promise<Page> {
+  const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
+  const page = await context.newPage();
+  await signInThroughPage(page, email, DEMO_PASSWORD);
+  await page.waitForURL(`${baseUrl()}${path}**`);
+  return page;
+}
+
+/**
+ * A screenshot in the test output (the whole page unless `fullPage` is false, e.g. for a page whose lists
+ * grow long); `forDocs` also copies it into docs/screenshots.
+ */
+export async function screenshot(page: Page, name: string, forDocs = false, fullPage = true): Promise<void> {
   const file = join(screenshotDir, `${name}.png`);
-  await page.screenshot({ path: file, fullPage: true });
+  await page.screenshot({ path: file, fullPage });
   if (forDocs) copyFileSync(file, join(docsScreenshots, `${name}.png`));
 }
