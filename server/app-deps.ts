@@ -11,6 +11,7 @@ import type { Payments } from './payments/payments';
 import type { PaymentsFake } from './fakes/payments-fake';
 import type { JobQueue } from './jobs/job-queue';
 import type { Storage } from './storage/storage';
+import type { ReadCache } from './lib/read-cache';
 
 /** What feature routes are given; built once in createApp. */
 export interface AppDeps {
@@ -28,4 +29,6 @@ export interface AppDeps {
   paymentsFake: PaymentsFake | null;
   /** Uploaded photos; on disk under config.uploadsDir unless a caller passes another. */
   storage: Storage;
+  /** Calendar reads and free times, serialised, per salon book version (one per app server). */
+  readCache: ReadCache;
 }

@@ -38,11 +38,12 @@ import { registerStrandTestRoutes } from './features/strand-tests/strand-tests.r
 import { registerQuotePriceRoutes } from './features/quote-prices/quote-prices.routes';
 import { registerMessageRoutes } from './features/messages/messages.routes';
 import { createDiskStorage } from './storage/disk-storage';
+import { createReadCache } from './lib/read-cache';
 
 const clientDist = path.join(path.dirname(fileURLToPath(import.meta.url)), '..', 'dist', 'client');
 
 /** Builds the Express app without listening, so tests mount it in-process. */
-export function createApp(deps: Omit<AppDeps, 'table' | 'storage'> & { storage?: AppDeps['storage'] }) {
+export function createApp(deps: Omit<AppDeps, 'table' | 'storage' | 'readCache'> & { storage?: AppDeps['storage'] }) {
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', 'loopback');
@@ -60,7 +61,7 @@ export function createApp(deps: Omit<AppDeps, 'table' | 'storage'> & { storage?:
 
   const table: RouteTable = { router: Router(), registry: new OpenAPIRegistry(), records: [] };
   installCsrf(app, deps.config, table);
-  const full: AppDeps = { ...deps, storage: deps.storage ?? createDiskStorage(deps.config.uploadsDir), table };
+  const full: AppDeps = { ...deps, storage: deps.storage ?? createDiskStorage(deps.config.uploadsDir), readCache: createReadCache(), table };
   for (const register of [
     registerHealthRoutes,
     registerSessionRoutes,

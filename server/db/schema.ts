@@ -356,6 +356,15 @@ export interface Database {
   quotes: QuotesTable;
   strand_tests: StrandTestsTable;
   follow_up_rules: FollowUpRulesTable;
+  book_versions: BookVersionsTable;
+}
+
+/** Per-salon version of everything calendar reads depend on; moved by triggers (migrations/20261204T0900). */
+export interface BookVersionsTable {
+  salon_id: string;
+  /** bigint: pg returns it as a string. */
+  version: ColumnType<string, never, never>;
+  bumped_by: ColumnType<string, never, never>;
 }
 
 /** migrations/20261203T0705. */

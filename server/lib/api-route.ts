@@ -5,6 +5,7 @@ import type { Role } from '../../shared/schemas/common.schemas';
 import type { SessionUser } from '../../shared/schemas/auth.schemas';
 import { ApiErrorBodySchema } from '../../shared/api/error.schemas';
 import { requireAccess, type Access } from '../auth/require-access';
+import { JsonText } from './json-text';
 
 type Method = 'get' | 'post' | 'put' | 'patch' | 'delete';
 
@@ -74,8 +75,16 @@ export function apiRoute<B extends ZodType, Q extends ZodType, P extends ZodType
     // A handler may pick another status itself (health answers 503 with a body); otherwise the declared one.
     const chosen = res.statusCode !== 200 ? res.statusCode : status;
     if (chosen === 204 || result === undefined) res.status(chosen === 200 ? 204 : chosen).end();
+    else if (result instanceof JsonText) sendJsonText(req, res.status(chosen), result);
     else res.status(chosen).json(result);
   });
+}
+
+/** A cached answer as its stored bytes; a browser revalidating with the entity tag gets 304 from send(). */
+function sendJsonText(req: Request, res: Response, json: JsonText) {
+  res.type('json').set({ ETag: json.etag, 'Cache-Control': 'private, no-cache', Vary: 'Accept-Encoding' });
+  if (json.gzipped && req.acceptsEncodings('gzip')) res.set('Content-Encoding', 'gzip').send(json.gzipped);
+  else res.send(json.body);
 }
 
 function register(registry: OpenAPIRegistry, spec: RouteSpec<ZodType, ZodType, ZodType>, status: number) {

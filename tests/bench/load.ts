@@ -17,7 +17,8 @@ import { onShutdownSignal } from '../../server/ops/shutdown';
 import { loadBusySalon } from './busy-salon-db';
 import { startAppProcess, type AppProcess } from './load/app-process';
 import { signIn } from './load/http-session';
-import { drained, measure, printFigures, someAddress, type Figures } from './load/measure';
+import { drained, measure, printFigures, someAddress, type Figures, type LoadSpec } from './load/measure';
+import { startSteadyWriter } from './load/steady-writer';
 import { doubleBookings, duplicateMessages, halfWritten } from './load/integrity';
 
 const servers = Number(process.argv[process.argv.indexOf('--servers') + 1]) || 1;
@@ -25,6 +26,9 @@ const seconds = Number(process.env.DWELL_LOAD_SECONDS ?? 10);
 const bookingAttempts = Number(process.env.DWELL_LOAD_BOOKINGS ?? 500);
 const CONNECTIONS = 50;
 const READ_TARGET_P95_MS = 150;
+const WARM_UP_SECONDS = 3;
+/** The pace of changes in the mixed scenario: far busier than a real salon's desk (a change every few minutes). */
+const WRITE_EVERY_MS = 2_000;
 
 async function main(): Promise<number> {
   const scratch = mkdtempSync(join(tmpdir(), 'dwell-load-'));
@@ -64,9 +68,15 @@ async function main(): Promise<number> {
     const urls = apps.map((a) => a.url);
     console.log(`dwell load: ${servers} app server(s) at ${urls.join(', ')}; ${CONNECTIONS} connections\n`);
     const desk = await signIn(urls[0], busy.deskEmail, busy.password);
-    const deskHeaders = { cookie: desk.cookie };
+    // Every browser asks for compressed answers; the app sends cached calendar reads gzip-compressed then.
+    const browser = { 'accept-encoding': 'gzip, deflate, br' };
+    const deskHeaders = { cookie: desk.cookie, ...browser };
+    const stylists = (await db.selectFrom('staff').select('id').where('salon_id', '=', busy.salonId).where('active', '=', true).orderBy('display_name').execute()).map((s) => s.id);
     const days = Array.from({ length: 20 }, (_, i) => DateTime.fromISO(today).plus({ days: i + 1 }).toISODate()!);
     const figures: Figures[] = [];
+    // A server that has just started compiles its hot paths and fills its cache on the first requests; the
+    // concurrent read scenarios get a few unreported seconds first, as a server in service is warm.
+    const warm = (spec: LoadSpec) => measure({ ...spec, duration: WARM_UP_SECONDS, amount: undefined }).then(() => drained(urls));
     const run = async (f: Promise<Figures>) => {
       const result = await f;
       printFigures(result);
@@ -83,21 +93,51 @@ async function main(): Promise<number> {
     }));
     await run(measure({
       name: 'one at a time: availability', urls: urls.slice(0, 1), connections: 1, amount: 5,
-      next: (i) => ({ path: `/api/public/salons/${busy.slug}/availability?serviceId=${service.id}&from=${days[i % days.length]}`, headers: { 'x-forwarded-for': someAddress(100_000 + i) } }),
+      next: (i) => ({ path: `/api/public/salons/${busy.slug}/availability?serviceId=${service.id}&from=${days[i % days.length]}`, headers: { 'x-forwarded-for': someAddress(100_000 + i), ...browser } }),
     }));
-    await run(measure({
+    const deskDay: LoadSpec = {
       name: 'desk calendar (GET desk/day)', urls, connections: CONNECTIONS, duration: seconds, headers: deskHeaders,
       next: (i) => ({ path: `/api/desk/day?date=${days[i % days.length]}` }),
-    }));
-    await run(measure({
+    };
+    // The week page shows one stylist's week (the stylist picked, or the first on the list).
+    const deskWeek: LoadSpec = {
       name: 'desk calendar (GET desk/week)', urls, connections: CONNECTIONS, duration: seconds, headers: deskHeaders,
+      next: (i) => ({ path: `/api/desk/week?date=${days[i % days.length]}&stylistId=${stylists[i % stylists.length]}` }),
+    };
+    // Every stylist's week in one answer (about 380 KB of JSON for the busy salon): no screen asks for it, so it
+    // is reported but not held to the read target.
+    const allStylists: LoadSpec = {
+      name: 'all stylists (GET desk/week, no screen)', urls, connections: CONNECTIONS, duration: seconds, headers: deskHeaders,
       next: (i) => ({ path: `/api/desk/week?date=${days[i % days.length]}` }),
-    }));
-
-    await run(measure({
+    };
+    const freeTimes: LoadSpec = {
       name: 'public free times (GET availability)', urls, connections: CONNECTIONS, duration: seconds,
-      next: (i) => ({ path: `/api/public/salons/${busy.slug}/availability?serviceId=${service.id}&from=${days[i % days.length]}`, headers: { 'x-forwarded-for': someAddress(i) } }),
-    }));
+      next: (i) => ({ path: `/api/public/salons/${busy.slug}/availability?serviceId=${service.id}&from=${days[i % days.length]}`, headers: { 'x-forwarded-for': someAddress(i), ...browser } }),
+    };
+    for (const spec of [deskDay, deskWeek, allStylists, freeTimes]) {
+      await warm(spec);
+      await run(measure(spec));
+    }
+
+    // The same reads while the desk books something every WRITE_EVERY_MS: each booking moves the salon's book
+    // version, so the cached answers are recomputed as they are next asked for.
+    const later = DateTime.fromISO(busy.to).plus({ days: 14 }).toISODate()!;
+    const laterTimes = await (await fetch(`${urls[0]}/api/public/salons/${busy.slug}/availability?serviceId=${service.id}&from=${later}`, { headers: { 'x-forwarded-for': '10.255.0.2' } })).json() as { times: { start: string; stylistId: string }[] };
+    const writes: Record<string, number>[] = [];
+    for (const spec of [deskDay, freeTimes]) {
+      const offset = writes.length * 200;
+      const writer = startSteadyWriter({
+        url: urls[0], session: desk, everyMs: WRITE_EVERY_MS, path: '/api/bookings',
+        body: (i) => {
+          const slot = laterTimes.times[(offset + i * 7) % laterTimes.times.length];
+          return { clientId: clients[i % clients.length], serviceId: service.id, stepPlan: service.step_plan, stylistId: slot.stylistId, start: slot.start, idempotencyKey: randomUUID() };
+        },
+      });
+      await run(measure({ ...spec, name: `${spec.name.replace(/ \(.*/, '')} + a booking every ${WRITE_EVERY_MS / 1000} s` }));
+      writes.push(await writer.stop());
+    }
+    console.log(`${''.padEnd(34)} (bookings made during those two: ${writes.map((w) => JSON.stringify(w)).join(', ')})`);
+
     // The race: free times after the book ends, a handful of them, each wanted by dozens of desks at once.
     const after = DateTime.fromISO(busy.to).plus({ days: 7 }).toISODate()!;
     const free = await fetch(`${urls[0]}/api/public/salons/${busy.slug}/availability?serviceId=${service.id}&from=${after}`, { headers: { 'x-forwarded-for': '10.255.0.1' } });

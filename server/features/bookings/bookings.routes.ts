@@ -5,27 +5,46 @@ import type { AppDeps } from '../../app-deps';
 import { DESK } from '../../auth/require-access';
 import { apiRoute } from '../../lib/api-route';
 import { notFound } from '../../lib/app-error';
-import { findSalon } from '../salon/salon.repository';
+import { findSalon, toSalon } from '../salon/salon.repository';
+import { salonAtBookVersion } from '../book-version/book-version.repository';
+import { cachedBookRead } from '../book-version/cached-book-read';
 import { findClientIdForUser } from '../clients/clients.repository';
 import { findStaffIdForUser } from './salon-resources.repository';
 import { loadBookingViews } from './booking-views.repository';
-import { deskDay, deskWeek, stylistDay } from './day-view.service';
+import { deskDay, deskWeek, stylistDay, todayIn } from './day-view.service';
 
-export function registerBookingRoutes({ table, db }: AppDeps): void {
+export function registerBookingRoutes({ table, db, readCache }: AppDeps): void {
+  // Calendar reads are answered from the read cache while the salon's book version stands still.
+  const atVersion = (salonId: string) => salonAtBookVersion(db, { id: salonId });
   apiRoute(
     table,
     { method: 'get', path: apiPaths.deskDay, access: DESK, summary: "The salon's book for one day", query: DayQuerySchema, response: DayViewSchema },
-    async ({ user, query }) => deskDay(db, await findSalon(db, user.salonId), query.date),
+    async ({ user, query }) => {
+      const at = await atVersion(user.salonId);
+      const salon = toSalon(at.salon);
+      const date = query.date ?? todayIn(salon.timeZone);
+      return cachedBookRead(readCache, at, `desk-day|${date}`, () => deskDay(db, salon, date));
+    },
   );
   apiRoute(
     table,
     { method: 'get', path: apiPaths.deskWeek, access: DESK, summary: 'A week of the book, for one stylist or all', query: WeekQuerySchema, response: WeekViewSchema },
-    async ({ user, query }) => deskWeek(db, await findSalon(db, user.salonId), query.date, query.stylistId),
+    async ({ user, query }) => {
+      const at = await atVersion(user.salonId);
+      const salon = toSalon(at.salon);
+      const date = query.date ?? todayIn(salon.timeZone);
+      return cachedBookRead(readCache, at, `desk-week|${date}|${query.stylistId ?? 'all'}`, () => deskWeek(db, salon, date, query.stylistId));
+    },
   );
   apiRoute(
     table,
     { method: 'get', path: apiPaths.stylistDay, access: ['stylist'], summary: "The signed-in stylist's day", query: DayQuerySchema, response: DayViewSchema },
-    async ({ user, query }) => stylistDay(db, await findSalon(db, user.salonId), user.id, query.date),
+    async ({ user, query }) => {
+      const at = await atVersion(user.salonId);
+      const salon = toSalon(at.salon);
+      const date = query.date ?? todayIn(salon.timeZone);
+      return cachedBookRead(readCache, at, `stylist-day|${user.id}|${date}`, () => stylistDay(db, salon, user.id, date));
+    },
   );
   apiRoute(
     table,

@@ -20,11 +20,24 @@ interface SalonRow {
   granularity_minutes: number;
 }
 
-/** Every free start (on the grid) for one service, one stylist or any, over the next three weeks. */
-export async function freeTimes(db: Db, salon: SalonRow, service: ServiceSummary, stylistId: string | undefined, from: string | undefined, now: Date, except?: string): Promise<Availability> {
+/** Where a search starts: the first local day searched and the earliest start on the salon's grid. */
+function searchStart(salon: SalonRow, from: string | undefined, now: Date) {
   const zone = salon.time_zone;
   const fromDay = DateTime.max(DateTime.fromISO(from ?? '1970-01-01', { zone }), DateTime.fromJSDate(now, { zone }).startOf('day'));
   const earliest = new Date(Math.max(now.getTime(), fromDay.toMillis()));
+  return { fromDay, earliest: localEarliest(earliest, zone, salon.granularity_minutes) };
+}
+
+/** Everything a free-times answer depends on besides the salon's book: its cache key. */
+export function freeTimesKey(salon: SalonRow, serviceId: string, stylistId: string | undefined, from: string | undefined, now: Date): string {
+  const { fromDay, earliest } = searchStart(salon, from, now);
+  return `free-times|${serviceId}|${stylistId ?? 'any'}|${fromDay.toISODate()}|${earliest}`;
+}
+
+/** Every free start (on the grid) for one service, one stylist or any, over the next three weeks. */
+export async function freeTimes(db: Db, salon: SalonRow, service: ServiceSummary, stylistId: string | undefined, from: string | undefined, now: Date, except?: string): Promise<Availability> {
+  const zone = salon.time_zone;
+  const { fromDay, earliest } = searchStart(salon, from, now);
   // The engine walks day by day and stops at MAX_TIMES, and with one sitting each
   // day's times depend on that day's book alone: a busy salon fills the list within the first week, and
   // loading (and indexing) three weeks of its book for that was most of the request's cost.
@@ -36,7 +49,7 @@ export async function freeTimes(db: Db, salon: SalonRow, service: ServiceSummary
     }
     return planOptions({
       ...calendars,
-      request: { skill: service.skill, stylist: stylistId ?? null, earliest: localEarliest(earliest, zone, salon.granularity_minutes), sittings: toEngineSittings(service.stepPlan), limit: MAX_TIMES, spread: 'none' },
+      request: { skill: service.skill, stylist: stylistId ?? null, earliest, sittings: toEngineSittings(service.stepPlan), limit: MAX_TIMES, spread: 'none' },
     }).options;
   };
   const oneSitting = service.stepPlan.sittings.length === 1;

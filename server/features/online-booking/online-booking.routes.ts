@@ -9,15 +9,17 @@ import { apiRoute } from '../../lib/api-route';
 import { rateLimited } from '../../lib/rate-limit';
 import { AppError, notFound } from '../../lib/app-error';
 import { deskBookingView } from '../bookings/booking-changes.routes';
-import { findSalonBySlug, publicSalon } from './public-salon.service';
-import { freeTimes, onlineService } from './availability.service';
+import { publicSalon } from './public-salon.service';
+import { freeTimes, freeTimesKey, onlineService } from './availability.service';
+import { salonAtBookVersion } from '../book-version/book-version.repository';
+import { cachedBookRead } from '../book-version/cached-book-read';
 import { acceptCautions, claimHold, createHold, holdView } from './holds.service';
 import { findHold } from './holds.repository';
 import { payHold } from './pay-hold.service';
 
 const limited = (limit: number) => rateLimited({ windowMs: 60_000, limit, message: 'Too many requests; wait a minute and try again.' });
 
-export function registerOnlineBookingRoutes({ table, db, jobs, payments, mailer, sms }: AppDeps): void {
+export function registerOnlineBookingRoutes({ table, db, jobs, payments, mailer, sms, readCache }: AppDeps): void {
   apiRoute(table, { method: 'get', path: '/api/public/salons/:slug', access: 'public', summary: "The salon's public page", params: SlugParamsSchema, response: PublicSalonSchema }, async ({ params }) =>
     publicSalon(db, params.slug),
   );
@@ -26,9 +28,12 @@ export function registerOnlineBookingRoutes({ table, db, jobs, payments, mailer,
     table,
     { method: 'get', path: '/api/public/salons/:slug/availability', access: 'public', summary: 'Free times for an online-bookable service', params: SlugParamsSchema, query: AvailabilityQuerySchema, response: AvailabilitySchema },
     async ({ params, query }) => {
-      const salon = await findSalonBySlug(db, params.slug);
-      const service = await onlineService(db, salon.id, query.serviceId);
-      return freeTimes(db, salon, service, query.stylistId, query.from, new Date());
+      const at = await salonAtBookVersion(db, { slug: params.slug });
+      const now = new Date();
+      // The service is checked inside: a refusal (not online, not found) is not cached, and services are part of the version.
+      return cachedBookRead(readCache, at, freeTimesKey(at.salon, query.serviceId, query.stylistId, query.from, now), async () =>
+        freeTimes(db, at.salon, await onlineService(db, at.salon.id, query.serviceId), query.stylistId, query.from, now),
+      );
     },
   );
   table.router.post(apiPaths.holds, limited(20));

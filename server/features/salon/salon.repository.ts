@@ -1,9 +1,14 @@
+import type { Selectable } from 'kysely';
 import type { Db } from '../../db/database';
+import type { SalonsTable } from '../../db/schema';
 import type { Salon } from '../../../shared/schemas/salon.schemas';
 import { AppError } from '../../lib/app-error';
 
 export async function findSalon(db: Db, id: string): Promise<Salon> {
-  const row = await db.selectFrom('salons').selectAll().where('id', '=', id).executeTakeFirstOrThrow();
+  return toSalon(await db.selectFrom('salons').selectAll().where('id', '=', id).executeTakeFirstOrThrow());
+}
+
+export function toSalon(row: Selectable<SalonsTable>): Salon {
   return {
     id: row.id,
     name: row.name,

@@ -10,7 +10,9 @@ export interface AppProcess {
 
 /** Starts tests/bench/load/app-server-main.ts in a child process and waits until it listens. */
 export function startAppProcess(env: Record<string, string>): Promise<AppProcess> {
-  const child = spawn(process.execPath, ['--import', 'tsx', join(import.meta.dirname, 'app-server-main.ts')], {
+  // DWELL_LOAD_PROFILE=<folder>: each app server writes a V8 CPU profile there when it stops (open in Chrome's DevTools).
+  const profile = process.env.DWELL_LOAD_PROFILE ? ['--cpu-prof', `--cpu-prof-dir=${process.env.DWELL_LOAD_PROFILE}`] : [];
+  const child = spawn(process.execPath, [...profile, '--import', 'tsx', join(import.meta.dirname, 'app-server-main.ts')], {
     env: { ...process.env, ...env },
     stdio: ['ignore', 'pipe', 'pipe'],
   });
