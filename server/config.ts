@@ -18,6 +18,8 @@ const ConfigSchema = z.object({
   SMS_FROM: z.string().default('+19705550100'),
   /** Outside production: a Twilio-compatible API to send through instead of starting the in-process fake. */
   SMS_API_URL: z.string().url().optional(),
+  /** Outside production: a payments API (the local fake) to charge through instead of starting the in-process one. */
+  PAYMENTS_API_URL: z.string().url().optional(),
   /** A claim this old with no provider reference is taken for a dead worker's and queued again. */
   MESSAGE_CLAIM_TIMEOUT_SECONDS: z.coerce.number().int().min(1).max(3600).default(300),
   STRIPE_SECRET_KEY: z.string().startsWith('sk_').optional(),
@@ -44,6 +46,7 @@ export interface Config {
   twilio: { accountSid: string; authToken: string; from: string } | null;
   stripeSecretKey: string | null;
   smsApiUrl: string | null;
+  paymentsApiUrl: string | null;
   messageClaimTimeoutSeconds: number;
   /** Hosted services are replaced by in-process fakes. */
   useFakes: boolean;
@@ -71,6 +74,7 @@ export function loadConfig(env: Record<string, string | undefined> = process.env
     mailFrom: parsed.MAIL_FROM,
     stripeSecretKey: parsed.STRIPE_SECRET_KEY ?? null,
     smsApiUrl: parsed.DWELL_MODE === 'production' ? null : (parsed.SMS_API_URL ?? null),
+    paymentsApiUrl: parsed.DWELL_MODE === 'production' ? null : (parsed.PAYMENTS_API_URL ?? null),
     messageClaimTimeoutSeconds: parsed.MESSAGE_CLAIM_TIMEOUT_SECONDS,
     twilio:
       parsed.TWILIO_ACCOUNT_SID && parsed.TWILIO_AUTH_TOKEN

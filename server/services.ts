@@ -21,13 +21,15 @@ export const FAKE_TWILIO = { accountSid: `AC${'0'.repeat(32)}`, authToken: 'loca
 
 /** E-mail, SMS and payments: real services in production, in-process fakes everywhere else. */
 export async function startOutsideServices(config: Config): Promise<OutsideServices> {
-  // A given SMTP_URL / SMS_API_URL (e.g. fakes shared by several app processes) replaces the in-process fake.
+  // A given SMTP_URL / SMS_API_URL / PAYMENTS_API_URL (fakes shared by several app processes, as `npm run faults`
+  // runs them) replaces the in-process fake.
   const smtpFake = config.useFakes && !config.smtpUrl ? await startSmtpFake() : null;
   const smsFake = config.useFakes && !config.smsApiUrl ? await startSmsFake() : null;
-  const paymentsFake = config.useFakes ? await startPaymentsFake() : null;
-  if (!paymentsFake && !config.stripeSecretKey) throw new Error('STRIPE_SECRET_KEY is required in production');
-  const payments = paymentsFake
-    ? createPayments({ secretKey: 'sk_test_local_fake', host: paymentsFake.url.host, port: paymentsFake.url.port })
+  const paymentsFake = config.useFakes && !config.paymentsApiUrl ? await startPaymentsFake() : null;
+  const fakePayments = paymentsFake?.url ?? (config.paymentsApiUrl ? { host: new URL(config.paymentsApiUrl).hostname, port: Number(new URL(config.paymentsApiUrl).port) } : null);
+  if (!fakePayments && !config.stripeSecretKey) throw new Error('STRIPE_SECRET_KEY is required in production');
+  const payments = fakePayments
+    ? createPayments({ secretKey: 'sk_test_local_fake', ...fakePayments })
     : createPayments({ secretKey: config.stripeSecretKey! });
   const smtpUrl = smtpFake?.url ?? config.smtpUrl;
   if (!smtpUrl) throw new Error('SMTP_URL is required in production');

@@ -2,6 +2,7 @@ import express, { type Response } from 'express';
 import type { Server } from 'node:http';
 import type { AddressInfo } from 'node:net';
 import { randomBytes } from 'node:crypto';
+import { FaultPlan, pause, type FaultControls } from './fault-plan';
 
 /** Card numbers the fake knows, after the payment provider's published test cards. */
 export const FAKE_CARDS = { succeeds: '4242424242424242', declined: '4000000000000002' };
@@ -18,11 +19,10 @@ interface Intent {
   last_payment_error: { code: string; message: string } | null;
 }
 
-export interface PaymentsFake {
+export interface PaymentsFake extends FaultControls {
   url: { host: string; port: number };
   intents: Map<string, Intent>;
   refunds: { id: string; payment_intent: string; amount: number }[];
-  failNext(n: number): void;
   /** Runs once, after the next successful charge and before it is answered (to play a slow confirmation). */
   onNextSuccess(hook: () => Promise<void>): void;
   close(): Promise<void>;
@@ -43,24 +43,37 @@ export async function startPaymentsFake(port = 0): Promise<PaymentsFake> {
   const intents = new Map<string, Intent>();
   const refunds: PaymentsFake['refunds'] = [];
   const replies = new Map<string, { status: number; body: unknown }>();
-  let failures = 0;
+  const faults = new FaultPlan();
+  const inFlight = new Set<string>();
   let successHook: (() => Promise<void>) | null = null;
   const app = express();
   app.use(express.urlencoded({ extended: true }));
-  app.use((req, res, next) => {
-    if (failures > 0) {
-      failures--;
-      return void res.status(500).json({ error: { type: 'api_error', message: 'Fake outage' } });
-    }
-    // Replay the first answer to a repeated Idempotency-Key, as the real service does.
+  app.use(async (req, res, next) => {
+    const fault = faults.take();
+    if (fault?.kind === 'fail') return void res.status(500).json({ error: { type: 'api_error', message: 'Fake outage' } });
+    // Replay the first answer to a repeated Idempotency-Key, as the real service does; while the first
+    // request with a key is still being handled, a repeat is refused with 409 (the SDK retries on 409).
     const key = req.get('Idempotency-Key');
     const earlier = key && replies.get(key);
     if (earlier) return void res.status(earlier.status).json(earlier.body);
+    if (key && inFlight.has(key)) {
+      return void res.status(409).json({ error: { type: 'idempotency_error', message: 'There is currently another in-progress request using this Idempotent Key.' } });
+    }
     if (key) {
+      inFlight.add(key);
       const json = res.json.bind(res);
       res.json = (body) => {
         replies.set(key, { status: res.statusCode, body });
+        inFlight.delete(key);
         return json(body);
+      };
+    }
+    // Slow: the charge is made at once, its answer comes late (what makes a client time out and retry).
+    if (fault?.kind === 'slow') {
+      const json = res.json.bind(res);
+      res.json = (body) => {
+        void pause(fault.ms).then(() => json(body));
+        return res;
       };
     }
     next();
@@ -121,9 +134,8 @@ export async function startPaymentsFake(port = 0): Promise<PaymentsFake> {
     url: { host: '127.0.0.1', port: (server.address() as AddressInfo).port },
     intents,
     refunds,
-    failNext: (n) => {
-      failures = n;
-    },
+    failNext: (n) => faults.failNext(n),
+    slowNext: (n, ms) => faults.slowNext(n, ms),
     onNextSuccess: (hook) => {
       successHook = hook;
     },

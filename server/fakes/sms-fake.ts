@@ -3,12 +3,11 @@ import twilio from 'twilio';
 import type { Server } from 'node:http';
 import type { AddressInfo } from 'node:net';
 import type { CapturedSms } from '../../shared/schemas/sms.schemas';
+import { FaultPlan, pause, type FaultControls } from './fault-plan';
 
-export interface SmsFake {
+export interface SmsFake extends FaultControls {
   url: string;
   messages: CapturedSms[];
-  /** The next `n` requests answer 503, to exercise retries. */
-  failNext(n: number): void;
   /**
    * The next `n` requests are held open and never answered or kept: a provider that has not accepted the
    * message yet, so a worker killed meanwhile has claimed a message that nobody received.
@@ -29,23 +28,20 @@ export interface SmsFake {
  */
 export async function startSmsFake(port = 0): Promise<SmsFake> {
   const messages: CapturedSms[] = [];
-  let failures = 0;
-  let stalls = 0;
+  const faults = new FaultPlan();
   let held = 0;
   let webhook: { url: string; authToken: string } | null = null;
   const app = express();
   app.use(express.urlencoded({ extended: true }));
-  app.post('/2010-04-01/Accounts/:sid/Messages.json', (req, res) => {
-    if (stalls > 0) {
-      stalls--;
+  app.post('/2010-04-01/Accounts/:sid/Messages.json', async (req, res) => {
+    const fault = faults.take();
+    if (fault?.kind === 'stall') {
       held++;
       req.socket.once('close', () => held--);
       return; // never answered, never kept
     }
-    if (failures > 0) {
-      failures--;
-      return void res.status(503).json({ code: 20503, message: 'Service unavailable (fake)', status: 503 });
-    }
+    if (fault?.kind === 'fail') return void res.status(503).json({ code: 20503, message: 'Service unavailable (fake)', status: 503 });
+    if (fault?.kind === 'slow') await pause(fault.ms);
     const { To, From, Body } = req.body as Record<string, string>;
     if (!To || !Body) return void res.status(400).json({ code: 21604, message: "A 'To' and a 'Body' are required", status: 400 });
     const sid = `SM${String(messages.length + 1).padStart(32, '0')}`;
@@ -59,12 +55,9 @@ export async function startSmsFake(port = 0): Promise<SmsFake> {
   return {
     url: `http://127.0.0.1:${(server.address() as AddressInfo).port}`,
     messages,
-    failNext: (n) => {
-      failures = n;
-    },
-    stallNext: (n) => {
-      stalls = n;
-    },
+    failNext: (n) => faults.failNext(n),
+    slowNext: (n, ms) => faults.slowNext(n, ms),
+    stallNext: (n) => faults.stallNext(n),
     stalled: () => held,
     setInboundWebhook: (url, authToken) => {
       webhook = { url, authToken };

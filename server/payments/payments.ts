@@ -19,7 +19,9 @@ export interface Payments {
 export function createPayments(config: { secretKey: string; host?: string; port?: number }): Payments {
   const stripe = new Stripe(config.secretKey, {
     ...(config.host ? { host: config.host, port: config.port, protocol: 'http' as const } : {}),
+    // Retries reuse the request's idempotency key, so a retried charge is never a second charge.
     maxNetworkRetries: 2,
+    timeout: 20_000,
     telemetry: false,
   });
   return {

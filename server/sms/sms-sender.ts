@@ -17,7 +17,8 @@ export interface SmsConfig {
  * reached with the SDK's supported hook: a custom HTTP client that rewrites each request's origin.
  */
 export function createSmsSender(config: SmsConfig): SmsSender {
-  const inner = new twilio.RequestClient();
+  // Explicit: a send job waits at most this long for the provider, then the message is retried later.
+  const inner = new twilio.RequestClient({ timeout: 15_000 });
   const httpClient = config.baseUrl
     ? ({
         request: (opts: Parameters<typeof inner.request>[0]) => {
@@ -26,7 +27,7 @@ export function createSmsSender(config: SmsConfig): SmsSender {
         },
       } as unknown as InstanceType<typeof twilio.RequestClient>)
     : undefined;
-  const client = twilio(config.accountSid, config.authToken, { httpClient, autoRetry: false });
+  const client = twilio(config.accountSid, config.authToken, { httpClient: httpClient ?? inner, autoRetry: false });
   return {
     async send(to, body) {
       const message = await client.messages.create({ to, from: config.from, body });

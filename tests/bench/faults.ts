@@ -3,6 +3,8 @@
 //  1. PostgreSQL stopped for 30 s under load: answers are 503 DB_UNAVAILABLE (never another 5xx), nothing
 //     is half-written, and the app serves again by itself once PostgreSQL is back.
 //  2. The app server killed (SIGKILL) in the middle of a burst of bookings: each booking is whole or absent.
+//  3. E-mail, SMS and payments refusing and answering late, with two app servers sharing them: bookings do
+//     not wait for the providers, every message reaches its provider exactly once, every deposit is one charge.
 import { randomUUID } from 'node:crypto';
 import { chmodSync, mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
@@ -17,6 +19,7 @@ import { startAppProcess, type AppProcess } from './load/app-process';
 import { signIn, type HttpSession } from './load/http-session';
 import { measure, printFigures } from './load/measure';
 import { doubleBookings, halfWritten } from './load/integrity';
+import { outsideServicesFault } from './faults/outside-services';
 
 const OUTAGE_SECONDS = Number(process.env.DWELL_FAULT_OUTAGE_SECONDS ?? 30);
 const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms));
@@ -26,8 +29,12 @@ async function main(): Promise<number> {
   chmodSync(scratch, 0o755);
   let cluster: Cluster | null = null;
   let app: AppProcess | null = null;
+  let pair: AppProcess[] = [];
+  let closeFakes = async () => {};
   const cleanUp = async () => {
     await app?.stop();
+    await Promise.all(pair.map((a) => a.stop()));
+    await closeFakes();
     if (cluster) stopCluster(cluster);
     rmSync(scratch, { recursive: true, force: true });
   };
@@ -100,6 +107,15 @@ async function main(): Promise<number> {
     if (overlaps.chairs + overlaps.hands + overlaps.basins) failures.push('double bookings after the kill');
     const health = await fetch(`${app.url}/api/health`);
     console.log(`   restarted server answers /api/health ${health.status}`);
+
+    // 3. The outside services failing and slow, two app servers.
+    console.log('\n3. E-mail, SMS and payments refusing, then slow; two app servers sharing one fake of each');
+    await app.stop();
+    app = null;
+    const outside = await outsideServicesFault(prepared.url, env);
+    pair = outside.apps;
+    closeFakes = outside.closeFakes;
+    failures.push(...outside.failures);
 
     console.log(`\ndwell faults: ${failures.length ? `FAIL — ${failures.join('; ')}` : 'PASS'}`);
     return failures.length ? 1 : 0;

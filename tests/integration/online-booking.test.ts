@@ -7,6 +7,7 @@ import { insertPlannedService } from '../factories/service';
 import { futureWeekday, localIso } from '../setup/dates';
 import { FAKE_CARDS } from '../../server/fakes/payments-fake';
 import { LAPSE_HOLD_JOB } from '../../server/features/online-booking/holds.service';
+import { sendDueMessages } from '../../server/features/messages/send-message.job';
 
 let t: TestApp;
 let salon: SalonFixture;
@@ -34,9 +35,11 @@ beforeAll(async () => {
 });
 afterAll(() => t.close());
 
+let visitors = 0;
+/** A hold from a new visitor; each has an address of their own (behind the loopback proxy), as visitors do. */
 async function hold(start: string) {
   const visitor = await anonymousAgent(t.app);
-  return visitor.write('post', '/api/public/holds', { salonSlug: slug, serviceId: consultation, stylistId: ana.staffId, start });
+  return visitor.write('post', '/api/public/holds', { salonSlug: slug, serviceId: consultation, stylistId: ana.staffId, start }, { 'X-Forwarded-For': `10.1.0.${++visitors}` });
 }
 
 /** A new client who signs up, claims a hold and accepts its cautions. */
@@ -160,6 +163,59 @@ describe('deposit and confirmation', () => {
     expect((await s.get(`/api/me/bookings/${id}/calendar.ics`)).status).toBe(404);
     const cancelled = await c.write('post', `/api/me/bookings/${id}/cancel`, {});
     expect(cancelled.body).toMatchObject({ status: 'cancelled', depositOutcome: 'refunded' });
+  });
+});
+
+describe('outside services failing or slow', () => {
+  const charges = (bookingId: string) => [...t.payments.intents.values()].filter((i) => i.metadata.booking === bookingId && i.status === 'succeeded');
+
+  it('a payments outage on the first try is retried by the SDK with the same idempotency key: booked, charged once', async () => {
+    const { c, id } = await claimedBy(localIso(tuesday, '17:00'));
+    t.payments.failNext(1);
+    const paid = await payWithSecret(c, id, 'pay-key-0101', FAKE_CARDS.succeeds);
+    expect(paid.status).toBe(200);
+    expect(paid.body.status).toBe('booked');
+    expect(charges(id)).toHaveLength(1);
+  });
+
+  it('a payment answered late is waited for and charged once, and a repeated pay request gets the same booking', async () => {
+    const { c, id } = await claimedBy(localIso(tuesday, '17:30'));
+    t.payments.slowNext(2, 1_500);
+    const paid = await payWithSecret(c, id, 'pay-key-0102', FAKE_CARDS.succeeds);
+    expect(paid.status).toBe(200);
+    const again = await payWithSecret(c, id, 'pay-key-0102', FAKE_CARDS.succeeds);
+    expect(again.status).toBeLessThan(500);
+    expect(charges(id)).toHaveLength(1);
+    expect(await t.testDb.db.selectFrom('payments').select('status').where('booking_id', '=', id).execute()).toEqual([{ status: 'succeeded' }]);
+  });
+
+  it('a slow SMS provider does not hold the payment answer; the text arrives later, once', async () => {
+    const { c, client, id } = await claimedBy(localIso(tuesday, '09:00'));
+    const phone = '+19705550178';
+    await t.testDb.db.updateTable('clients').set({ phone }).where('id', '=', client.clientId!).execute();
+    t.sms.slowNext(1, 5_000);
+    const started = Date.now();
+    const paid = await payWithSecret(c, id, 'pay-key-0103', FAKE_CARDS.succeeds);
+    const waited = Date.now() - started;
+    expect(paid.status).toBe(200);
+    expect(waited).toBeLessThan(4_500); // the answer waits for the confirmation at most 2 s (CONFIRMATION_WAIT_MS), not 5
+    for (let i = 0; i < 80 && !t.sms.messages.some((m) => m.to === phone); i++) await new Promise((r) => setTimeout(r, 100));
+    expect(t.sms.messages.filter((m) => m.to === phone && m.body.includes('booked'))).toHaveLength(1);
+  });
+
+  it('an e-mail the SMTP server refuses for now (451) is retried after its backoff and delivered once', async () => {
+    const { c, client, id } = await claimedBy(localIso(tuesday, '09:30'));
+    t.smtp.failNext(1);
+    expect((await payWithSecret(c, id, 'pay-key-0104', FAKE_CARDS.succeeds)).status).toBe(200);
+    const row = await t.testDb.db.selectFrom('messages').selectAll().where('booking_id', '=', id).where('channel', '=', 'email').where('kind', '=', 'confirmation').executeTakeFirstOrThrow();
+    expect(row).toMatchObject({ status: 'queued', attempts: 1 });
+    expect(row.last_error).toMatch(/451|Try again later/);
+    expect(t.smtp.messages.filter((m) => m.to === client.email)).toHaveLength(0);
+    // One minute later (the first backoff) the send pass delivers it.
+    await sendDueMessages(t.testDb.db, t.outside, new Date(Date.now() + 61_000), id);
+    expect(t.smtp.messages.filter((m) => m.to === client.email)).toHaveLength(1);
+    await sendDueMessages(t.testDb.db, t.outside, new Date(Date.now() + 600_000), id);
+    expect(t.smtp.messages.filter((m) => m.to === client.email && m.subject.match(/booked|confirm/i))).toHaveLength(1);
   });
 });
 

@@ -12,11 +12,13 @@ import { GPS_POINTER_LE, jpegWithGps, makeImage, pngBomb } from '../factories/im
 let t: TestApp;
 let client: UserFixture, otherClient: UserFixture, stylist: UserFixture, otherSalonStylist: UserFixture;
 let bookingId: string;
+let salonId: string;
 
 beforeAll(async () => {
   t = await startTestApp();
   const db = t.testDb.db;
   const salon = await insertSalon(db);
+  salonId = salon.salonId;
   [client, otherClient, stylist] = await Promise.all([insertUser(db, salon.salonId, 'client'), insertUser(db, salon.salonId, 'client'), insertUser(db, salon.salonId, 'stylist')]);
   otherSalonStylist = await insertUser(db, (await insertSalon(db)).salonId, 'stylist');
   bookingId = await insertTestBooking(db, {
@@ -83,6 +85,34 @@ describe('POST /api/me/photos: what is refused', () => {
   });
   it('when the header declares huge dimensions (a decompression bomb), responds 400', async () =>
     refused({ name: 'bomb.png', bytes: await pngBomb() }, 400, /“bomb\.png” is too large in pixels/));
+
+  it('when a JPEG carries an HTML page with a script after its image data (a polyglot), stores only the re-encoded image', async () => {
+    const payload = '<html><body><script>alert(document.cookie)</script></body></html>';
+    const polyglot = Buffer.concat([await makeImage('jpeg'), Buffer.from(payload)]);
+    const before = await storedFiles();
+    const someone = await insertUser(t.testDb.db, salonId, 'client');
+    const res = await upload(await as(someone), '/api/me/photos', [{ name: 'look.jpg', bytes: polyglot }], { kind: 'wanted' });
+    expect(res.status).toBe(201);
+    const added = (await storedFiles()).filter((f) => !before.includes(f));
+    expect(added).toHaveLength(1);
+    const stored = await readFile(path.join(t.uploadsDir, added[0]));
+    expect(stored.includes(Buffer.from('<script'))).toBe(false);
+    expect((await sharp(stored).metadata()).format).toBe('jpeg');
+    const served = await (await as(someone)).get(`/api/photos/${res.body.photos[0].id}`).buffer(true);
+    expect(served.headers['content-type']).toBe('image/jpeg');
+    expect(served.headers['x-content-type-options']).toBe('nosniff');
+    expect((served.body as Buffer).includes(Buffer.from('<script'))).toBe(false);
+  });
+
+  it('when a hundred photos come in one request, refuses them all with the limit named and keeps none', async () => {
+    const before = await storedFiles();
+    const one = await makeImage('jpeg');
+    const hundred = Array.from({ length: 100 }, (_, i) => ({ name: `p${i}.jpg`, bytes: one }));
+    const res = await upload(await as(await insertUser(t.testDb.db, salonId, 'client')), '/api/me/photos', hundred, { kind: 'wanted' });
+    expect(res.status).toBe(400);
+    expect(res.body.error.message).toMatch(/at most 10/);
+    expect(await storedFiles()).toEqual(before);
+  });
 
   it('when one file of a batch is bad, keeps none of the batch and names each refused file', async () => {
     const before = await storedFiles();

@@ -63,8 +63,8 @@ export async function anonymousAgent(app: TestApp['app']) {
   return {
     agent,
     get: (path: string) => agent.get(path),
-    write: (method: 'post' | 'put' | 'patch' | 'delete', path: string, body?: object) =>
-      agent[method](path).set('X-CSRF-Token', token).send(body),
+    write: (method: 'post' | 'put' | 'patch' | 'delete', path: string, body?: object, headers: Record<string, string> = {}) =>
+      agent[method](path).set('X-CSRF-Token', token).set(headers).send(body),
     async refreshCsrf() {
       token = (await agent.get('/api/csrf')).body.token;
     },

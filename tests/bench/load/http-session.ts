@@ -30,3 +30,14 @@ export async function signIn(baseUrl: string, email: string, password: string): 
   const token = await csrf(); // bound to the new session
   return { cookie: cookie(), csrf: token };
 }
+
+/** A JSON request as the signed-in browser sends it (cookie and CSRF token); the answer's status and body. */
+export async function sendJson(baseUrl: string, session: HttpSession, method: 'GET' | 'POST', path: string, body?: object): Promise<{ status: number; body: any }> {
+  const res = await fetch(`${baseUrl}${path}`, {
+    method,
+    headers: { cookie: session.cookie, 'x-csrf-token': session.csrf, ...(body ? { 'content-type': 'application/json' } : {}) },
+    body: body ? JSON.stringify(body) : undefined,
+  });
+  const text = await res.text();
+  return { status: res.status, body: text ? JSON.parse(text) : null };
+}
