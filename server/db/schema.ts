@@ -357,12 +357,22 @@ export interface Database {
   strand_tests: StrandTestsTable;
   follow_up_rules: FollowUpRulesTable;
   book_versions: BookVersionsTable;
+  book_day_versions: BookDayVersionsTable;
 }
 
-/** Per-salon version of everything calendar reads depend on; moved by triggers (migrations/20261204T0900). */
+/** Per-salon version of what every calendar day depends on; moved by triggers (migrations/20261204T0900). */
 export interface BookVersionsTable {
   salon_id: string;
   /** bigint: pg returns it as a string. */
+  version: ColumnType<string, never, never>;
+  bumped_by: ColumnType<string, never, never>;
+}
+
+/** Per-salon, per-local-date version of the bookings, time off and closures on that date (same migration). */
+export interface BookDayVersionsTable {
+  salon_id: string;
+  /** A local date in the salon's zone; compared with YYYY-MM-DD strings. */
+  day: ColumnType<Date, never, never>;
   version: ColumnType<string, never, never>;
   bumped_by: ColumnType<string, never, never>;
 }

@@ -119,10 +119,9 @@ async function main(): Promise<number> {
       await run(measure(spec));
     }
 
-    // The same reads while the desk books something every WRITE_EVERY_MS: each booking moves the salon's book
-    // version, so the cached answers are recomputed as they are next asked for.
-    const later = DateTime.fromISO(busy.to).plus({ days: 14 }).toISODate()!;
-    const laterTimes = await (await fetch(`${urls[0]}/api/public/salons/${busy.slug}/availability?serviceId=${service.id}&from=${later}`, { headers: { 'x-forwarded-for': '10.255.0.2' } })).json() as { times: { start: string; stylistId: string }[] };
+    // The same reads while the desk books something every WRITE_EVERY_MS, on the days being read: each booking
+    // moves the version of its dates, so the answers over those dates are recomputed as they are next asked for.
+    const laterTimes = await (await fetch(`${urls[0]}/api/public/salons/${busy.slug}/availability?serviceId=${service.id}&from=${days[0]}`, { headers: { 'x-forwarded-for': '10.255.0.2' } })).json() as { times: { start: string; stylistId: string }[] };
     const writes: Record<string, number>[] = [];
     for (const spec of [deskDay, freeTimes]) {
       const offset = writes.length * 200;

@@ -11,39 +11,35 @@ import { cachedBookRead } from '../book-version/cached-book-read';
 import { findClientIdForUser } from '../clients/clients.repository';
 import { findStaffIdForUser } from './salon-resources.repository';
 import { loadBookingViews } from './booking-views.repository';
-import { deskDay, deskWeek, stylistDay, todayIn } from './day-view.service';
+import { daysFrom, deskDay, deskWeek, mondayOf, stylistDay, todayIn } from './day-view.service';
 
 export function registerBookingRoutes({ table, db, readCache }: AppDeps): void {
-  // Calendar reads are answered from the read cache while the salon's book version stands still.
-  const atVersion = (salonId: string) => salonAtBookVersion(db, { id: salonId });
+  // Calendar reads are answered from the read cache while the book over their dates stands still.
   apiRoute(
     table,
     { method: 'get', path: apiPaths.deskDay, access: DESK, summary: "The salon's book for one day", query: DayQuerySchema, response: DayViewSchema },
     async ({ user, query }) => {
-      const at = await atVersion(user.salonId);
-      const salon = toSalon(at.salon);
-      const date = query.date ?? todayIn(salon.timeZone);
-      return cachedBookRead(readCache, at, `desk-day|${date}`, () => deskDay(db, salon, date));
+      let date = query.date;
+      const at = await salonAtBookVersion(db, { id: user.salonId }, date ? daysFrom(date, 1) : (zone) => daysFrom((date = todayIn(zone)), 1));
+      return cachedBookRead(readCache, at, `desk-day|${date}`, () => deskDay(db, toSalon(at.salon), date));
     },
   );
   apiRoute(
     table,
     { method: 'get', path: apiPaths.deskWeek, access: DESK, summary: 'A week of the book, for one stylist or all', query: WeekQuerySchema, response: WeekViewSchema },
     async ({ user, query }) => {
-      const at = await atVersion(user.salonId);
-      const salon = toSalon(at.salon);
-      const date = query.date ?? todayIn(salon.timeZone);
-      return cachedBookRead(readCache, at, `desk-week|${date}|${query.stylistId ?? 'all'}`, () => deskWeek(db, salon, date, query.stylistId));
+      let monday = query.date && mondayOf(query.date);
+      const at = await salonAtBookVersion(db, { id: user.salonId }, monday ? daysFrom(monday, 7) : (zone) => daysFrom((monday = mondayOf(todayIn(zone))), 7));
+      return cachedBookRead(readCache, at, `desk-week|${monday}|${query.stylistId ?? 'all'}`, () => deskWeek(db, toSalon(at.salon), monday || undefined, query.stylistId));
     },
   );
   apiRoute(
     table,
     { method: 'get', path: apiPaths.stylistDay, access: ['stylist'], summary: "The signed-in stylist's day", query: DayQuerySchema, response: DayViewSchema },
     async ({ user, query }) => {
-      const at = await atVersion(user.salonId);
-      const salon = toSalon(at.salon);
-      const date = query.date ?? todayIn(salon.timeZone);
-      return cachedBookRead(readCache, at, `stylist-day|${user.id}|${date}`, () => stylistDay(db, salon, user.id, date));
+      let date = query.date;
+      const at = await salonAtBookVersion(db, { id: user.salonId }, date ? daysFrom(date, 1) : (zone) => daysFrom((date = todayIn(zone)), 1));
+      return cachedBookRead(readCache, at, `stylist-day|${user.id}|${date}`, () => stylistDay(db, toSalon(at.salon), user.id, date));
     },
   );
   apiRoute(

@@ -41,10 +41,21 @@ export async function stylistDay(db: Db, salon: Salon, userId: string, date = to
   return { date, timeZone: salon.timeZone, stylists: stylists.filter((s) => s.id === staffId), chairs, bookings };
 }
 
+/** The Monday (ISO week start) of the week holding a local date. */
+export function mondayOf(date: string): string {
+  const day = DateTime.fromISO(date, { zone: 'UTC' });
+  if (!day.isValid) throw new AppError('VALIDATION_FAILED', 400, 'Some fields need attention.', { date: 'Not a calendar date.' });
+  return day.startOf('week').toISODate()!;
+}
+
+/** `count` local dates from `date`, as the [from, to) range the book's day versions are kept for. */
+export function daysFrom(date: string, count: number): { from: string; to: string } {
+  return { from: date, to: DateTime.fromISO(date, { zone: 'UTC' }).plus({ days: count }).toISODate()! };
+}
+
 /** Monday to Sunday of the week holding `date`, for one stylist or all. */
 export async function deskWeek(db: Db, salon: Salon, date = todayIn(salon.timeZone), stylistId?: string): Promise<WeekView> {
-  const monday = DateTime.fromISO(date, { zone: salon.timeZone }).startOf('week');
-  if (!monday.isValid) throw new AppError('VALIDATION_FAILED', 400, 'Some fields need attention.', { date: 'Not a calendar date.' });
+  const monday = DateTime.fromISO(mondayOf(date), { zone: salon.timeZone });
   const to = monday.plus({ days: 7 });
   const stylists = (await listStylists(db, salon.id)).filter((s) => !stylistId || s.id === stylistId);
   const bookings = await loadBookingViews(db, { salonId: salon.id, stylistId, from: monday.toJSDate(), to: to.toJSDate() }, salon.timeZone);

@@ -20,12 +20,20 @@ interface SalonRow {
   granularity_minutes: number;
 }
 
+const firstDay = (zone: string, from: string | undefined, now: Date) =>
+  DateTime.max(DateTime.fromISO(from ?? '1970-01-01', { zone }), DateTime.fromJSDate(now, { zone }).startOf('day'));
+
 /** Where a search starts: the first local day searched and the earliest start on the salon's grid. */
 function searchStart(salon: SalonRow, from: string | undefined, now: Date) {
-  const zone = salon.time_zone;
-  const fromDay = DateTime.max(DateTime.fromISO(from ?? '1970-01-01', { zone }), DateTime.fromJSDate(now, { zone }).startOf('day'));
+  const fromDay = firstDay(salon.time_zone, from, now);
   const earliest = new Date(Math.max(now.getTime(), fromDay.toMillis()));
-  return { fromDay, earliest: localEarliest(earliest, zone, salon.granularity_minutes) };
+  return { fromDay, earliest: localEarliest(earliest, salon.time_zone, salon.granularity_minutes) };
+}
+
+/** The local dates a free-times search may look at: the book over them is what its answer depends on. */
+export function freeTimesDays(zone: string, from: string | undefined, now: Date): { from: string; to: string } {
+  const fromDay = firstDay(zone, from, now);
+  return { from: fromDay.toISODate()!, to: fromDay.plus({ days: ONLINE_DAYS }).toISODate()! };
 }
 
 /** Everything a free-times answer depends on besides the salon's book: its cache key. */

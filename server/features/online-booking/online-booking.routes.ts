@@ -10,7 +10,7 @@ import { rateLimited } from '../../lib/rate-limit';
 import { AppError, notFound } from '../../lib/app-error';
 import { deskBookingView } from '../bookings/booking-changes.routes';
 import { publicSalon } from './public-salon.service';
-import { freeTimes, freeTimesKey, onlineService } from './availability.service';
+import { freeTimes, freeTimesDays, freeTimesKey, onlineService } from './availability.service';
 import { salonAtBookVersion } from '../book-version/book-version.repository';
 import { cachedBookRead } from '../book-version/cached-book-read';
 import { acceptCautions, claimHold, createHold, holdView } from './holds.service';
@@ -28,8 +28,8 @@ export function registerOnlineBookingRoutes({ table, db, jobs, payments, mailer,
     table,
     { method: 'get', path: '/api/public/salons/:slug/availability', access: 'public', summary: 'Free times for an online-bookable service', params: SlugParamsSchema, query: AvailabilityQuerySchema, response: AvailabilitySchema },
     async ({ params, query }) => {
-      const at = await salonAtBookVersion(db, { slug: params.slug });
       const now = new Date();
+      const at = await salonAtBookVersion(db, { slug: params.slug }, (zone) => freeTimesDays(zone, query.from, now));
       // The service is checked inside: a refusal (not online, not found) is not cached, and services are part of the version.
       return cachedBookRead(readCache, at, freeTimesKey(at.salon, query.serviceId, query.stylistId, query.from, now), async () =>
         freeTimes(db, at.salon, await onlineService(db, at.salon.id, query.serviceId), query.stylistId, query.from, now),
