@@ -2,6 +2,7 @@ import { apiPaths } from '../../../shared/api/api-paths';
 import { BookingViewSchema, DayQuerySchema, DayViewSchema, MyBookingsSchema, WeekQuerySchema, WeekViewSchema } from '../../../shared/schemas/booking-view.schemas';
 import { BookingStatusSchema, IdParamsSchema } from '../../../shared/schemas/common.schemas';
 import type { AppDeps } from '../../app-deps';
+import type { Db } from '../../db/database';
 import { DESK } from '../../auth/require-access';
 import { apiRoute } from '../../lib/api-route';
 import { notFound } from '../../lib/app-error';
@@ -13,14 +14,23 @@ import { findStaffIdForUser } from './salon-resources.repository';
 import { loadBookingViews } from './booking-views.repository';
 import { daysFrom, deskDay, deskWeek, mondayOf, stylistDay, todayIn } from './day-view.service';
 
+/**
+ * The salon at its book version over `count` dates from `date` (moved to the start of its period by
+ * `start`, e.g. the week's Monday); without a date, from today in the salon's zone, which is asked first.
+ */
+async function bookOver(db: Db, salonId: string, date: string | undefined, count: number, start = (d: string) => d) {
+  let first = date && start(date);
+  const at = await salonAtBookVersion(db, { id: salonId }, first ? daysFrom(first, count) : (zone) => daysFrom((first = start(todayIn(zone))), count));
+  return { at, first: first! };
+}
+
 export function registerBookingRoutes({ table, db, readCache }: AppDeps): void {
   // Calendar reads are answered from the read cache while the book over their dates stands still.
   apiRoute(
     table,
     { method: 'get', path: apiPaths.deskDay, access: DESK, summary: "The salon's book for one day", query: DayQuerySchema, response: DayViewSchema },
     async ({ user, query }) => {
-      let date = query.date;
-      const at = await salonAtBookVersion(db, { id: user.salonId }, date ? daysFrom(date, 1) : (zone) => daysFrom((date = todayIn(zone)), 1));
+      const { at, first: date } = await bookOver(db, user.salonId, query.date, 1);
       return cachedBookRead(readCache, at, `desk-day|${date}`, () => deskDay(db, toSalon(at.salon), date));
     },
   );
@@ -28,17 +38,15 @@ export function registerBookingRoutes({ table, db, readCache }: AppDeps): void {
     table,
     { method: 'get', path: apiPaths.deskWeek, access: DESK, summary: 'A week of the book, for one stylist or all', query: WeekQuerySchema, response: WeekViewSchema },
     async ({ user, query }) => {
-      let monday = query.date && mondayOf(query.date);
-      const at = await salonAtBookVersion(db, { id: user.salonId }, monday ? daysFrom(monday, 7) : (zone) => daysFrom((monday = mondayOf(todayIn(zone))), 7));
-      return cachedBookRead(readCache, at, `desk-week|${monday}|${query.stylistId ?? 'all'}`, () => deskWeek(db, toSalon(at.salon), monday || undefined, query.stylistId));
+      const { at, first: monday } = await bookOver(db, user.salonId, query.date, 7, mondayOf);
+      return cachedBookRead(readCache, at, `desk-week|${monday}|${query.stylistId ?? 'all'}`, () => deskWeek(db, toSalon(at.salon), monday, query.stylistId));
     },
   );
   apiRoute(
     table,
     { method: 'get', path: apiPaths.stylistDay, access: ['stylist'], summary: "The signed-in stylist's day", query: DayQuerySchema, response: DayViewSchema },
     async ({ user, query }) => {
-      let date = query.date;
-      const at = await salonAtBookVersion(db, { id: user.salonId }, date ? daysFrom(date, 1) : (zone) => daysFrom((date = todayIn(zone)), 1));
+      const { at, first: date } = await bookOver(db, user.salonId, query.date, 1);
       return cachedBookRead(readCache, at, `stylist-day|${user.id}|${date}`, () => stylistDay(db, toSalon(at.salon), user.id, date));
     },
   );
