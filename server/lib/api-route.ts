@@ -16,6 +16,8 @@ export interface RouteSpec<B extends ZodType, Q extends ZodType, P extends ZodTy
   access: Access;
   summary: string;
   body?: B;
+  /** How the body arrives; `form` for providers' webhooks (application/x-www-form-urlencoded). JSON by default. */
+  bodyType?: 'json' | 'form';
   query?: Q;
   params?: P;
   response?: ZodType;
@@ -101,7 +103,7 @@ function register(registry: OpenAPIRegistry, spec: RouteSpec<ZodType, ZodType, Z
     summary: spec.summary,
     description: `Access: ${describeAccess(spec.access)}`,
     request: {
-      ...(spec.body && { body: json(spec.body) }),
+      ...(spec.body && { body: spec.bodyType === 'form' ? { content: { 'application/x-www-form-urlencoded': { schema: spec.body } } } : json(spec.body) }),
       ...(spec.query && { query: spec.query as never }),
       ...(spec.params && { params: spec.params as never }),
     },

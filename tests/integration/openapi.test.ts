@@ -22,4 +22,10 @@ describe('GET /api/openapi.json', () => {
     expect(missing).toEqual([]);
     expect(t.app.apiRoutes.length).toBeGreaterThan(40);
   });
+
+  it('documents the SMS provider webhook with the form body the provider posts, and JSON elsewhere', async () => {
+    const doc = (await (await anonymousAgent(t.app)).get('/api/openapi.json')).body;
+    expect(Object.keys(doc.paths['/webhooks/sms'].post.requestBody.content)).toEqual(['application/x-www-form-urlencoded']);
+    expect(Object.keys(doc.paths['/api/bookings'].post.requestBody.content)).toEqual(['application/json']);
+  });
 });

@@ -14,7 +14,7 @@ export function registerInboundSmsRoutes({ table, db, config, smsFake }: AppDeps
   table.router.use(inboundSmsWebhookPath, express.urlencoded({ extended: false, limit: '20kb' }));
   apiRoute(
     table,
-    { method: 'post', path: inboundSmsWebhookPath, access: 'public', summary: 'SMS provider webhook: a text to the salon (STOP turns SMS off, START on)', body: InboundSmsSchema },
+    { method: 'post', path: inboundSmsWebhookPath, access: 'public', summary: 'SMS provider webhook: a text to the salon (STOP turns SMS off, START on)', body: InboundSmsSchema, bodyType: 'form' },
     async ({ req, res, body }) => {
       // Only the provider knows the auth token: a request it did not sign is refused before anything changes.
       const url = config.publicUrl ? `${config.publicUrl}${inboundSmsWebhookPath}` : `${req.protocol}://${req.get('host')}${req.originalUrl}`;
