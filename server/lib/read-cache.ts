@@ -9,7 +9,7 @@ export interface ReadCache {
    * the cache needs the room. Keys must name the salon and every parameter the answer depends on.
    */
   json(key: string, version: string, compute: () => Promise<unknown>): Promise<JsonText>;
-  /** Entries and bytes held, for the benchmark's report. */
+  /** Entries, bytes held, hits and misses: for tests and diagnostics. */
   stats(): { entries: number; bytes: number; hits: number; misses: number };
 }
 
