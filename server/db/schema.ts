@@ -14,6 +14,8 @@ export interface SalonsTable {
   name: string;
   time_zone: string;
   currency: string;
+  /** ISO 3166-1 alpha-2; phone numbers without a country code are read as its (migrations/20261204T0910). */
+  country: Generated<string>;
   address: Generated<string>;
   phone: Generated<string>;
   skin_test_lead_hours: Generated<number>;

@@ -1,37 +1,46 @@
 import { z } from 'zod';
-import { parsePhoneNumberFromString, type CountryCode } from 'libphonenumber-js';
+import { isSupportedCountry, parsePhoneNumberFromString, type CountryCode } from 'libphonenumber-js';
 
 /**
- * Numbers typed without a country code are read as this country's: the demo salon is in the US. A salon in
- * another country would pass its own (the salon record has no country column yet).
+ * Numbers typed without a country code are read as the salon's country's (a salon setting, ISO 3166-1
+ * alpha-2; the demo salon is in the US). The schemas here only check that something like a number was
+ * typed; the server, which knows the salon, reads it into E.164 with `toE164` (server/lib/stored-phone.ts).
  */
 export const DEFAULT_PHONE_COUNTRY: CountryCode = 'US';
 export const PHONE_HINT = 'Enter a mobile number, e.g. +1 970 555 0142';
 
+/** What to tell someone whose number could not be read, in the salon's country. */
+export function phoneHint(country: string): string {
+  if (country === DEFAULT_PHONE_COUNTRY) return PHONE_HINT;
+  const name = new Intl.DisplayNames(['en'], { type: 'region' }).of(country) ?? country;
+  return `Enter a mobile number with its country code, or as dialled in ${name}`;
+}
+
+/** A country phone numbers can be read for: ISO 3166-1 alpha-2, as libphonenumber-js knows them. */
+export const PhoneCountrySchema = z
+  .string()
+  .trim()
+  .toUpperCase()
+  .refine((c) => /^[A-Z]{2}$/.test(c) && isSupportedCountry(c), 'Choose a country');
+
 /** The number in E.164 (+19705550142), or null when libphonenumber-js does not find a valid number. */
-export function toE164(input: string, country: CountryCode = DEFAULT_PHONE_COUNTRY): string | null {
-  const parsed = parsePhoneNumberFromString(input.trim(), country);
+export function toE164(input: string, country: string = DEFAULT_PHONE_COUNTRY): string | null {
+  const parsed = parsePhoneNumberFromString(input.trim(), isSupportedCountry(country) ? country : DEFAULT_PHONE_COUNTRY);
   return parsed?.isValid() ? parsed.number : null;
 }
 
-/** Reads a typed number into E.164, or reports the hint on the field; '' is passed on for optional use. */
-function readPhone(optional: boolean) {
-  return z
-    .string()
-    .trim()
-    .max(40, PHONE_HINT)
-    .transform((s, ctx): string | null => {
-      if (optional && s === '') return null;
-      const e164 = toE164(s);
-      if (!e164) ctx.addIssue({ code: 'custom', message: PHONE_HINT });
-      return e164 ?? z.NEVER;
-    });
-}
+// Digits with the usual punctuation, at least five digits: anything else is not an attempt at a number.
+const looksLikePhone = (s: string) => /^\+?[\d\s().\-/]+$/.test(s) && (s.match(/\d/g)?.length ?? 0) >= 5;
 
-/** A phone number, stored in E.164 whatever spacing or punctuation it was typed with. */
-export const PhoneSchema = readPhone(false).transform((s) => s!);
+/** A typed phone number (read into E.164 by the server, in the salon's country). */
+export const PhoneSchema = z.string().trim().max(40, PHONE_HINT).refine(looksLikePhone, PHONE_HINT);
 /** An optional phone number: '' means none (null). */
-export const OptionalPhoneSchema = readPhone(true);
+export const OptionalPhoneSchema = z
+  .string()
+  .trim()
+  .max(40, PHONE_HINT)
+  .refine((s) => s === '' || looksLikePhone(s), PHONE_HINT)
+  .transform((s) => s || null);
 
 export const EmailSchema = z.string().trim().toLowerCase().pipe(z.email('Enter a valid e-mail address').max(254));
 /** An optional e-mail address: '' means none (null); one message for anything else that is not an address. */

@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { isKnownZone } from '../engine/local-time';
 import { ClockTimeSchema, HoursListSchema } from './hours-rule.schemas';
+import { PhoneCountrySchema } from './contact.schemas';
 
 const whole = (min: number, max: number, what: string) =>
   z.number({ error: `Enter ${what}` }).int(`Enter whole ${what}`).min(min, `At least ${min}`).max(max, `At most ${max}`);
@@ -17,6 +18,8 @@ export const SalonSettingsSchema = z
     // IANA time-zone database names, e.g. America/Denver (checked against the zone data luxon reads).
     timeZone: z.string().trim().refine(isKnownZone, 'Use a time-zone name like America/Denver or Europe/Berlin'),
     currency: z.string().trim().regex(/^[A-Z]{3}$/, 'Use a three-letter ISO 4217 code like USD or EUR'),
+    // Left out: unchanged (older callers of this API do not send it).
+    country: PhoneCountrySchema.optional(),
     hours: HoursListSchema,
     skinTestLeadHours: whole(0, 720, 'hours'),
     skinTestValidityDays: whole(1, 3650, 'days'),

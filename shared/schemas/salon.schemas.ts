@@ -7,6 +7,8 @@ export const SalonSchema = z.object({
   slug: z.string(),
   timeZone: z.string(),
   currency: z.string(),
+  /** ISO 3166-1 alpha-2: phone numbers typed without a country code are read as this country's. */
+  country: z.string(),
   address: z.string(),
   phone: z.string(),
   skinTestLeadHours: z.number().int(),

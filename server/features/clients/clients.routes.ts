@@ -6,7 +6,8 @@ import type { AppDeps } from '../../app-deps';
 import { DESK, STAFF } from '../../auth/require-access';
 import { apiRoute } from '../../lib/api-route';
 import { notFound } from '../../lib/app-error';
-import { findSalon } from '../salon/salon.repository';
+import { findSalon, salonCountry } from '../salon/salon.repository';
+import { storedPhone } from '../../lib/stored-phone';
 import { loadBookingViews } from '../bookings/booking-views.repository';
 import { findClient, insertClient, searchClients, updateClientContact } from './clients.repository';
 import { UpdateClientSchema } from '../../../shared/schemas/contact.schemas';
@@ -22,7 +23,7 @@ export function registerClientRoutes({ table, db }: AppDeps): void {
     table,
     { method: 'post', path: apiPaths.clients, access: DESK, summary: 'Add a client (e.g. at the desk while booking)', body: CreateClientSchema, response: ClientSummarySchema, status: 201 },
     async ({ user, body }) => {
-      const client = { name: body.name, email: body.email || null, phone: body.phone || null };
+      const client = { name: body.name, email: body.email || null, phone: storedPhone(body.phone ?? null, await salonCountry(db, user.salonId)) };
       const id = await insertClient(db, { salonId: user.salonId, userId: null, ...client, notes: body.notes });
       return { id, ...client };
     },
@@ -45,7 +46,8 @@ export function registerClientRoutes({ table, db }: AppDeps): void {
   apiRoute(
     table,
     { method: 'patch', path: '/api/clients/:id', access: DESK, summary: "Edit a client card: contact details and message preferences", params: IdParamsSchema, body: UpdateClientSchema, response: ClientSummarySchema },
-    async ({ user, params, body }) => {
+    async ({ user, params, body: typed }) => {
+      const body = { ...typed, phone: storedPhone(typed.phone, await salonCountry(db, user.salonId)) };
       // Queued messages follow the new details in the same transaction: nothing goes to an old number.
       const found = await db.transaction().execute(async (trx) => {
         if (!(await updateClientContact(trx, user.salonId, params.id, body))) return false;

@@ -4,6 +4,8 @@ import { InboundSmsSchema, SimulateInboundSmsResultSchema, SimulateInboundSmsSch
 import type { AppDeps } from '../../app-deps';
 import { DESK } from '../../auth/require-access';
 import { apiRoute } from '../../lib/api-route';
+import { storedPhone } from '../../lib/stored-phone';
+import { salonCountry } from '../salon/salon.repository';
 import { AppError, notFound } from '../../lib/app-error';
 import { FAKE_TWILIO } from '../../services';
 import { handleInboundSms } from './inbound-sms.service';
@@ -29,9 +31,10 @@ export function registerInboundSmsRoutes({ table, db, config, smsFake }: AppDeps
   apiRoute(
     table,
     { method: 'post', path: simulateInboundSmsPath, access: DESK, summary: 'Demo/dev: the SMS fake delivers a text from a phone to the webhook', body: SimulateInboundSmsSchema, response: SimulateInboundSmsResultSchema },
-    async ({ body }) => {
+    async ({ user, body }) => {
       if (!smsFake) throw notFound('The demo SMS service');
-      return { webhookStatus: await smsFake.simulateInbound(body.from, body.body) };
+      const from = storedPhone(body.from, await salonCountry(db, user.salonId), 'from');
+      return { webhookStatus: await smsFake.simulateInbound(from, body.body) };
     },
   );
 }

@@ -2,6 +2,8 @@ import { MyPreferencesBodySchema, MyPreferencesSchema, UpdateClientSchema } from
 import { myPreferencesPath } from '../../../shared/schemas/contact.schemas';
 import type { AppDeps } from '../../app-deps';
 import { apiRoute } from '../../lib/api-route';
+import { storedPhone } from '../../lib/stored-phone';
+import { salonCountry } from '../salon/salon.repository';
 import { notFound } from '../../lib/app-error';
 import { findClient, findClientIdForUser, updateClientContact } from '../clients/clients.repository';
 import { replanClientMessages } from './plan-messages.service';
@@ -29,8 +31,9 @@ export function registerPreferenceRoutes({ table, db }: AppDeps): void {
       const client = await mine(user);
       // The same reachability rule as the desk's card (e-mail stays the sign-in address here).
       UpdateClientSchema.parse({ name: client.name, email: client.email ?? '', phone: body.phone ?? '', messageChannel: body.messageChannel, marketingOptIn: body.marketingOptIn });
+      const phone = storedPhone(body.phone, await salonCountry(db, user.salonId));
       await db.transaction().execute(async (trx) => {
-        await updateClientContact(trx, user.salonId, client.id, body);
+        await updateClientContact(trx, user.salonId, client.id, { ...body, phone });
         await replanClientMessages(trx, client.id, new Date());
       });
       return view((await findClient(db, user.salonId, client.id))!);

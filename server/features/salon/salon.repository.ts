@@ -15,6 +15,7 @@ export function toSalon(row: Selectable<SalonsTable>): Salon {
     slug: row.slug,
     timeZone: row.time_zone,
     currency: row.currency,
+    country: row.country,
     address: row.address,
     phone: row.phone,
     skinTestLeadHours: row.skin_test_lead_hours,
@@ -23,6 +24,11 @@ export function toSalon(row: Selectable<SalonsTable>): Salon {
     cancellationWindowHours: row.cancellation_window_hours,
     cancellationKeeps: row.cancellation_keeps,
   };
+}
+
+/** The country phone numbers typed without a country code are read in. */
+export async function salonCountry(db: Db, salonId: string): Promise<string> {
+  return (await db.selectFrom('salons').select('country').where('id', '=', salonId).executeTakeFirstOrThrow()).country;
 }
 
 /** The salon a new client signs up with: the named one, or the only/oldest one on this installation. */

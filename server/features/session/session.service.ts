@@ -4,7 +4,8 @@ import { AppError } from '../../lib/app-error';
 import { hashPassword, isCommonPassword, verifyPassword } from '../../auth/password';
 import { findUserByEmail, insertUser } from './users.repository';
 import { recordAttempt, recentFailures } from './sign-in-attempts.repository';
-import { findSalonIdForSignUp } from '../salon/salon.repository';
+import { findSalonIdForSignUp, salonCountry } from '../salon/salon.repository';
+import { storedPhone } from '../../lib/stored-phone';
 import { insertClient } from '../clients/clients.repository';
 
 /** Common practice for sign-in throttling: a handful of failures per account, more per network address. */
@@ -40,10 +41,11 @@ export async function signUp(db: Db, body: SignUpBody): Promise<SessionUser> {
     throw new AppError('EMAIL_TAKEN', 409, 'An account with this e-mail exists; sign in or reset the password.');
   }
   const salonId = await findSalonIdForSignUp(db, body.salonSlug);
+  const phone = storedPhone(body.phone, await salonCountry(db, salonId));
   const passwordHash = await hashPassword(body.password);
   return db.transaction().execute(async (trx) => {
-    const user = await insertUser(trx, { salonId, email: body.email, name: body.name, phone: body.phone, role: 'client', passwordHash });
-    await insertClient(trx, { salonId, userId: user.id, name: body.name, email: body.email, phone: body.phone });
+    const user = await insertUser(trx, { salonId, email: body.email, name: body.name, phone, role: 'client', passwordHash });
+    await insertClient(trx, { salonId, userId: user.id, name: body.name, email: body.email, phone });
     return user;
   });
 }

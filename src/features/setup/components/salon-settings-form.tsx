@@ -1,4 +1,5 @@
 import { zodResolver } from '@hookform/resolvers/zod';
+import { getCountries } from 'libphonenumber-js';
 import { useState } from 'react';
 import { Controller, FormProvider, useForm } from 'react-hook-form';
 import { SalonSettingsSchema, type SalonSettings, type SalonSettingsInput } from '../../../../shared/schemas/salon-settings.schemas';
@@ -12,7 +13,12 @@ import { useSaveSalonSettings } from '../api/setup-mutations';
 import { HoursLines } from './hours-lines';
 
 const zones = typeof Intl.supportedValuesOf === 'function' ? Intl.supportedValuesOf('timeZone') : [];
-const fieldNames = ['name', 'address', 'phone', 'timeZone', 'currency', 'hours', 'skinTestLeadHours', 'skinTestValidityDays', 'holdMinutes', 'cancellationWindowHours', 'quietFrom', 'quietTo', 'reminderOffsetsHours', 'maxDeveloperPercent'] as const;
+const regionNames = new Intl.DisplayNames(['en'], { type: 'region' });
+// Every country libphonenumber-js can read numbers for, by name.
+const countries = getCountries()
+  .map((code) => ({ value: code, label: `${regionNames.of(code) ?? code} (${code})` }))
+  .sort((a, b) => a.label.localeCompare(b.label));
+const fieldNames = ['name', 'address', 'phone', 'timeZone', 'currency', 'country', 'hours', 'skinTestLeadHours', 'skinTestValidityDays', 'holdMinutes', 'cancellationWindowHours', 'quietFrom', 'quietTo', 'reminderOffsetsHours', 'maxDeveloperPercent'] as const;
 
 /** Everything about how the salon works, in one form checked by the same schema as the server. */
 export function SalonSettingsForm({ settings }: { settings: SalonSettings }) {
@@ -50,6 +56,7 @@ export function SalonSettingsForm({ settings }: { settings: SalonSettings }) {
               ))}
             </datalist>
             <TextField label="Currency" hint="ISO 4217 code, e.g. USD" className="w-40" error={err('currency')} {...form.register('currency', { setValueAs: (v: string) => v.toUpperCase() })} />
+            <SelectField label="Country" hint="Phone numbers typed without a country code are read as this country's" options={countries} error={err('country')} {...form.register('country')} />
           </div>
         </SectionCard>
         <SectionCard title="Opening hours">
