@@ -9,11 +9,15 @@ import { isSupportedCountry, parsePhoneNumberFromString, type CountryCode } from
 export const DEFAULT_PHONE_COUNTRY: CountryCode = 'US';
 export const PHONE_HINT = 'Enter a mobile number, e.g. +1 970 555 0142';
 
+/** A country's English name from its ISO 3166-1 alpha-2 code (the code itself if the runtime has no name). */
+export function countryName(code: string): string {
+  return new Intl.DisplayNames(['en'], { type: 'region' }).of(code) ?? code;
+}
+
 /** What to tell someone whose number could not be read, in the salon's country. */
 export function phoneHint(country: string): string {
   if (country === DEFAULT_PHONE_COUNTRY) return PHONE_HINT;
-  const name = new Intl.DisplayNames(['en'], { type: 'region' }).of(country) ?? country;
-  return `Enter a mobile number with its country code, or as dialled in ${name}`;
+  return `Enter a mobile number with its country code, or as dialled in ${countryName(country)}`;
 }
 
 /** A country phone numbers can be read for: ISO 3166-1 alpha-2, as libphonenumber-js knows them. */

@@ -1,4 +1,5 @@
 import { sql, type Selectable } from 'kysely';
+import { DateTime } from 'luxon';
 import type { Db } from '../../db/database';
 import type { SalonsTable } from '../../db/schema';
 import { notFound } from '../../lib/app-error';
@@ -7,6 +8,11 @@ import { notFound } from '../../lib/app-error';
 export interface DayRange {
   from: string;
   to: string;
+}
+
+/** `count` local dates from `date` (YYYY-MM-DD), as the range the book's date versions are read for. */
+export function daysFrom(date: string, count: number): DayRange {
+  return { from: date, to: DateTime.fromISO(date, { zone: 'UTC' }).plus({ days: count }).toISODate()! };
 }
 
 type SalonKey = { id: string } | { slug: string };

@@ -7,12 +7,12 @@ import { DESK } from '../../auth/require-access';
 import { apiRoute } from '../../lib/api-route';
 import { notFound } from '../../lib/app-error';
 import { findSalon, toSalon } from '../salon/salon.repository';
-import { salonAtBookVersion } from '../book-version/book-version.repository';
+import { daysFrom, salonAtBookVersion } from '../book-version/book-version.repository';
 import { cachedBookRead } from '../book-version/cached-book-read';
 import { findClientIdForUser } from '../clients/clients.repository';
 import { findStaffIdForUser } from './salon-resources.repository';
 import { loadBookingViews } from './booking-views.repository';
-import { daysFrom, deskDay, deskWeek, mondayOf, stylistDay, todayIn } from './day-view.service';
+import { deskDay, deskWeek, mondayOf, stylistDay, todayIn } from './day-view.service';
 
 /**
  * The salon at its book version over `count` dates from `date` (moved to the start of its period by

@@ -48,11 +48,6 @@ export function mondayOf(date: string): string {
   return day.startOf('week').toISODate()!;
 }
 
-/** `count` local dates from `date`, as the [from, to) range the book's day versions are kept for. */
-export function daysFrom(date: string, count: number): { from: string; to: string } {
-  return { from: date, to: DateTime.fromISO(date, { zone: 'UTC' }).plus({ days: count }).toISODate()! };
-}
-
 /** Monday to Sunday of the week holding `date`, for one stylist or all. */
 export async function deskWeek(db: Db, salon: Salon, date = todayIn(salon.timeZone), stylistId?: string): Promise<WeekView> {
   const monday = DateTime.fromISO(mondayOf(date), { zone: salon.timeZone });

@@ -8,6 +8,7 @@ import { findService } from '../services/services.repository';
 import { loadSalonCalendars } from '../planning/salon-calendars.repository';
 import { localEarliest, toEngineSittings } from '../planning/engine-request';
 import { loadNames } from '../planning/names.repository';
+import { daysFrom, type DayRange } from '../book-version/book-version.repository';
 
 /** How far ahead online clients see free times. */
 export const ONLINE_DAYS = 21;
@@ -31,9 +32,8 @@ function searchStart(salon: SalonRow, from: string | undefined, now: Date) {
 }
 
 /** The local dates a free-times search may look at: the book over them is what its answer depends on. */
-export function freeTimesDays(zone: string, from: string | undefined, now: Date): { from: string; to: string } {
-  const fromDay = firstDay(zone, from, now);
-  return { from: fromDay.toISODate()!, to: fromDay.plus({ days: ONLINE_DAYS }).toISODate()! };
+export function freeTimesDays(zone: string, from: string | undefined, now: Date): DayRange {
+  return daysFrom(firstDay(zone, from, now).toISODate()!, ONLINE_DAYS);
 }
 
 /** Everything a free-times answer depends on besides the salon's book: its cache key. */

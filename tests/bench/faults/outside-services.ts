@@ -5,15 +5,14 @@
 import { randomUUID } from 'node:crypto';
 import { createDb, createPool } from '../../../server/db/database';
 import { DEMO_PASSWORD, demoSalon } from '../../../server/demo/demo-catalogue';
-import { startPaymentsFake } from '../../../server/fakes/payments-fake';
-import { FAKE_CARDS } from '../../../server/fakes/payments-fake';
+import { FAKE_CARDS, startPaymentsFake } from '../../../server/fakes/payments-fake';
 import { startSmsFake } from '../../../server/fakes/sms-fake';
 import { startSmtpFake } from '../../../server/fakes/smtp-fake';
 import { startAppProcess, type AppProcess } from '../load/app-process';
 import { sendJson, signIn } from '../load/http-session';
+import { percentile } from '../load/measure';
 
 const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms));
-const percentile = (sorted: number[], p: number) => sorted[Math.min(sorted.length - 1, Math.ceil((p / 100) * sorted.length) - 1)] ?? 0;
 const SLOW_MS = 2_500;
 const SETTLE_MINUTES = Number(process.env.DWELL_FAULT_SETTLE_MINUTES ?? 8);
 

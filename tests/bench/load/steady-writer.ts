@@ -1,4 +1,4 @@
-import type { HttpSession } from './http-session';
+import { sendJson, type HttpSession } from './http-session';
 
 /**
  * Writes at a steady pace while a read scenario runs, so the reads are measured with their cache being
@@ -9,13 +9,8 @@ export function startSteadyWriter(opts: { url: string; session: HttpSession; eve
   let stopped = false;
   const loop = (async () => {
     for (let i = 0; !stopped; i++) {
-      const res = await fetch(`${opts.url}${opts.path}`, {
-        method: 'POST',
-        headers: { 'content-type': 'application/json', cookie: opts.session.cookie, 'x-csrf-token': opts.session.csrf },
-        body: JSON.stringify(opts.body(i)),
-      });
-      await res.arrayBuffer();
-      statuses[res.status] = (statuses[res.status] ?? 0) + 1;
+      const { status } = await sendJson(opts.url, opts.session, 'POST', opts.path, opts.body(i));
+      statuses[status] = (statuses[status] ?? 0) + 1;
       await new Promise((resolve) => setTimeout(resolve, opts.everyMs));
     }
   })();

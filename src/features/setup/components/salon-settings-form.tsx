@@ -3,6 +3,7 @@ import { getCountries } from 'libphonenumber-js';
 import { useState } from 'react';
 import { Controller, FormProvider, useForm } from 'react-hook-form';
 import { SalonSettingsSchema, type SalonSettings, type SalonSettingsInput } from '../../../../shared/schemas/salon-settings.schemas';
+import { countryName } from '../../../../shared/schemas/contact.schemas';
 import { Button } from '../../../components/ui/button';
 import { FormAlert } from '../../../components/ui/form-alert';
 import { SectionCard } from '../../../components/ui/section-card';
@@ -13,10 +14,9 @@ import { useSaveSalonSettings } from '../api/setup-mutations';
 import { HoursLines } from './hours-lines';
 
 const zones = typeof Intl.supportedValuesOf === 'function' ? Intl.supportedValuesOf('timeZone') : [];
-const regionNames = new Intl.DisplayNames(['en'], { type: 'region' });
 // Every country libphonenumber-js can read numbers for, by name.
 const countries = getCountries()
-  .map((code) => ({ value: code, label: `${regionNames.of(code) ?? code} (${code})` }))
+  .map((code) => ({ value: code, label: `${countryName(code)} (${code})` }))
   .sort((a, b) => a.label.localeCompare(b.label));
 const fieldNames = ['name', 'address', 'phone', 'timeZone', 'currency', 'country', 'hours', 'skinTestLeadHours', 'skinTestValidityDays', 'holdMinutes', 'cancellationWindowHours', 'quietFrom', 'quietTo', 'reminderOffsetsHours', 'maxDeveloperPercent'] as const;
 
