@@ -111,14 +111,10 @@ export function ruleDays(text: string, fromDay: number, toDay: number, clock: Zo
   return days;
 }
 
-function expandRule(text: string, fromDay: number, toDay: number, clock: ZoneClock): number[] {
+/** Local day numbers in [fromDay, toDay) on which the rule falls, without the memo. */
+export function expandRule(text: string, fromDay: number, toDay: number, clock: ZoneClock): number[] {
   const { set, exDays } = buildRuleSet(text, fromDay, clock);
   const dates = set.between(floating(fromDay * 1440), floating(toDay * 1440 - 1), true);
   const days = dates.map((d) => Math.floor(d.getTime() / 86_400_000));
   return [...new Set(days)].filter((d) => !exDays.has(d)).sort((a, b) => a - b);
-}
-
-/** The rule in plain English as the rrule package renders it ("every week on Tuesday, …"). */
-export function describeRecurrence(rule: string): string {
-  return rr.RRule.fromString(rule).toText();
 }

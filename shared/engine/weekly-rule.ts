@@ -3,7 +3,7 @@
  * from a start date, and closed dates, written as RFC 5545 text (DTSTART / RRULE / EXDATE lines)
  * that recurrence.ts expands. Rules written by hand that do not fit this shape stay as text.
  */
-import { buildRuleSet, RecurrenceError, ruleDays } from './recurrence';
+import { buildRuleSet, expandRule, RecurrenceError, ruleDays } from './recurrence';
 import { parseLocalDate, zoneClock } from './local-time';
 
 export const WEEKDAY_CODES = ['MO', 'TU', 'WE', 'TH', 'FR', 'SA', 'SU'] as const;
@@ -59,11 +59,15 @@ export function readWeeklyRule(text: string): WeeklyRule | null {
   return { weekdays: weekdays as WeekdayCode[], everyOtherWeek: interval === '2', startsOn, closedDates };
 }
 
-/** Why a rule cannot be used, or null when it expands. */
+/**
+ * Why a rule cannot be used, or null when it works. The text is read back the way every reader reads it
+ * (parsed, then expanded over a year) before it may be stored, so a saved rule cannot fail later.
+ */
 export function ruleProblem(text: string): string | null {
   try {
     const day = parseLocalDate('2027-01-01')!;
     buildRuleSet(text, day, zoneClock('UTC', day, day + 1));
+    expandRule(text, day, day + 366, zoneClock('UTC', day, day + 366));
     return null;
   } catch (e) {
     if (e instanceof RecurrenceError) return e.message;

@@ -3,6 +3,16 @@ import { IdSchema, InstantInputSchema, InstantSchema, LocalDateSchema } from './
 
 export const WindowFitSchema = z.object({ serviceId: IdSchema, name: z.string(), minutes: z.number().int() });
 
+/** An offer sent for a window time, and what became of it (offered, taken, gone, expired). */
+export const SentOfferSchema = z.object({
+  stylistId: IdSchema,
+  start: InstantSchema,
+  clientName: z.string(),
+  serviceName: z.string(),
+  status: z.enum(['offered', 'taken', 'gone', 'expired']),
+});
+export type SentOffer = z.infer<typeof SentOfferSchema>;
+
 /** A stylist's hands-free window with what fits and who on the standby list wants one of those fits. */
 export const HandsFreeWindowSchema = z.object({
   stylistId: IdSchema,
@@ -11,10 +21,13 @@ export const HandsFreeWindowSchema = z.object({
   minutes: z.number().int(),
   fits: z.array(WindowFitSchema),
   standby: z.array(z.object({ entryId: IdSchema, clientId: IdSchema, clientName: z.string(), serviceIds: z.array(IdSchema) })),
+  /** Offers sent for a time inside this window. */
+  offers: z.array(SentOfferSchema),
 });
 export type HandsFreeWindowView = z.infer<typeof HandsFreeWindowSchema>;
 export const WindowsQuerySchema = z.object({ date: LocalDateSchema.optional(), stylistId: IdSchema.optional() }).strict();
-export const WindowListSchema = z.object({ timeZone: z.string(), windows: z.array(HandsFreeWindowSchema) });
+/** The day's windows, and the day's offers whose window has since closed (filled, booked or moved into). */
+export const WindowListSchema = z.object({ timeZone: z.string(), windows: z.array(HandsFreeWindowSchema), closedOffers: z.array(SentOfferSchema) });
 
 /** Book a walk-in or a standby client straight into a window. */
 export const FillWindowSchema = z

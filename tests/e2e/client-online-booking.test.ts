@@ -45,8 +45,12 @@ describe('a new client on a phone', () => {
     await page.getByRole('form', { name: 'Create your account' }).getByRole('button').last().click();
 
     await page.getByRole('heading', { name: 'Your details' }).waitFor();
-    await page.getByRole('button', { name: 'Continue' }).click();
+    // Answers typed here are saved by the step's one action (they were once lost when "Continue" skipped the save).
+    await page.getByLabel('Your hair colour now').fill('Faded copper over dark roots');
+    await page.getByRole('button', { name: 'Save and continue' }).click();
     await page.getByRole('heading', { name: 'Before you pay' }).waitFor();
+    const history = await (await page.request.get(`${baseUrl()}/api/me/hair-history`)).json();
+    expect(history.answers.currentColour).toBe('Faded copper over dark roots');
     for (const box of await page.getByRole('checkbox').all()) await box.check();
     await expectAccessible(page);
     await page.getByRole('button', { name: 'Accept and continue' }).click();
@@ -93,8 +97,16 @@ describe('a new client on a phone', () => {
     await screenshot(page, 'client-cancelled', false);
     await page.goto(`${baseUrl()}/me/hair`);
     await page.getByRole('heading', { level: 1, name: 'Hair history and photos' }).waitFor();
+    expect(await page.getByLabel('Your hair colour now').inputValue()).toBe('Faded copper over dark roots');
     await expectAccessible(page);
     await screenshot(page, 'client-hair-history', true);
+    // Leaving with unsaved answers asks first; staying keeps them.
+    await page.getByLabel('Your hair colour now').fill('Copper, now fading to orange');
+    const asked = new Promise<string>((resolve) => page.once('dialog', (d) => { resolve(d.message()); void d.dismiss(); }));
+    await page.getByRole('link', { name: 'My bookings' }).first().click();
+    expect(await asked).toMatch(/not saved yet/);
+    expect(page.url()).toMatch(/\/me\/hair$/);
+    expect(await page.getByLabel('Your hair colour now').inputValue()).toBe('Copper, now fading to orange');
     await context.close();
   });
 });

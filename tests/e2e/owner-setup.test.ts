@@ -60,8 +60,18 @@ describe('owner set-up', () => {
       await tue.click();
       await expect.poll(() => page.getByLabel('Rule of hours line 1').inputValue()).toBe('FREQ=WEEKLY;BYDAY=WE,TH,FR,SA');
       await page.getByText(/^Next dates:/).filter({ hasNotText: /Tue / }).waitFor();
+      // A closed date (a holiday) on a Wednesday: it once took the public page down with a 500.
+      const closedWednesday = DateTime.fromISO(tuesday).plus({ days: 1 });
+      await page.getByLabel('Closed on (holiday or exception)').fill(closedWednesday.toISODate()!);
+      await page.getByRole('button', { name: 'Add closed date' }).click();
+      await page.getByText(/^Reads as: Wednesday to Saturday; closed on /).waitFor();
       await page.getByRole('button', { name: 'Save salon settings' }).click();
       await page.getByText('The salon settings are saved').waitFor();
+      await page.goto(`${baseUrl()}/salon/kestrel-and-pine`);
+      await page.getByRole('heading', { level: 1, name: 'Kestrel & Pine Hair Studio' }).waitFor();
+      await page.getByText(`closed on ${closedWednesday.setLocale('en-US').toLocaleString(DateTime.DATE_MED_WITH_WEEKDAY)}`, { exact: false }).waitFor();
+      await page.goto(`${baseUrl()}/owner/setup`);
+      await page.getByRole('heading', { name: 'Opening hours' }).waitFor();
 
       // Step plan: Blow-dry gains a second step.
       await page.getByRole('navigation', { name: 'Set-up' }).getByRole('link', { name: 'Services and step plans' }).click();

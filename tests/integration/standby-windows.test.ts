@@ -114,4 +114,36 @@ describe('hands-free windows', () => {
     const other = await ana$.write('post', '/api/windows/fill', { stylistId: marcus.staffId, serviceId: toner, start: localIso(friday, '14:00'), walkIn: { name: 'Walk-in Wes' }, idempotencyKey: 'fill-key-0002' });
     expect(other.status).toBe(403);
   });
+
+  it('filling a window withdraws its open offers at once: the link says the time has gone, and the window card shows it', async () => {
+    const thursday = futureWeekday(4, 2);
+    const lighteningId = (await t.testDb.db.selectFrom('services').select('id').where('name', '=', 'Lightening').where('salon_id', '=', salon.salonId).executeTakeFirstOrThrow()).id;
+    const base = await desk$.write('post', '/api/bookings', {
+      clientId: clients[2].id, serviceId: lighteningId, stepPlan: lightening, stylistId: ana.staffId, start: localIso(thursday, '10:00'), idempotencyKey: 'window-base-0002',
+    });
+    expect(base.status).toBe(201);
+    const open = (await desk$.get('/api/standby')).body.entries as { id: string; client: { id: string; name: string; phone: string } }[];
+    expect(open.length).toBeGreaterThan(0);
+    const offered = await desk$.write('post', '/api/windows/offer', { stylistId: ana.staffId, serviceId: toner, start: localIso(thursday, '10:50'), standbyEntryIds: [open[0].id] });
+    expect(offered.status).toBe(201);
+    const sms = t.sms.messages.filter((m) => m.to === open[0].client.phone && m.body.includes('/offer/')).at(-1)!;
+    const token = /\/offer\/([A-Za-z0-9_-]+)/.exec(sms.body)![1];
+    const card = (await desk$.get(`/api/windows?date=${thursday}`)).body;
+    expect(card.windows.find((w: { start: string }) => w.start === localIso(thursday, '10:45')).offers).toMatchObject([{ clientName: open[0].client.name, status: 'offered' }]);
+
+    // A walk-in goes into the same window first: the offered 10:50 toner no longer fits Ana's hands.
+    const filled = await desk$.write('post', '/api/windows/fill', { stylistId: ana.staffId, serviceId: toner, start: localIso(thursday, '10:45'), walkIn: { name: 'Walk-in Uma' }, idempotencyKey: 'fill-key-0005' });
+    expect(filled.status).toBe(201);
+    const visitor = await anonymousAgent(t.app);
+    expect((await visitor.get(`/api/offers/${token}`)).body.status).toBe('gone');
+    const late = await visitor.write('post', `/api/offers/${token}/accept`);
+    expect(late.status).toBe(409);
+    const after = (await desk$.get(`/api/windows?date=${thursday}`)).body;
+    const shown = [...after.closedOffers, ...after.windows.flatMap((w: { offers: unknown[] }) => w.offers)];
+    expect(shown).toMatchObject([{ clientName: open[0].client.name, serviceName: 'Toner refresh', status: 'gone' }]);
+    // The client is told through the send log (once per channel), not left to find out at the door.
+    const offerRow = await t.testDb.db.selectFrom('window_offers').select('id').where('client_id', '=', open[0].client.id).where('starts_at', '=', new Date(localIso(thursday, '10:50'))).executeTakeFirstOrThrow();
+    const gone = await t.testDb.db.selectFrom('messages').select(['channel']).where('dedupe_key', 'like', `offer:${offerRow.id}:window_offer_gone:%`).execute();
+    expect(gone.map((g) => g.channel).sort()).toEqual(['email', 'sms']);
+  });
 });

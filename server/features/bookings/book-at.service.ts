@@ -14,9 +14,10 @@ import { writeAudit } from '../audit/audit.repository';
 import { chairFreeBetween, insertBooking } from './bookings.repository';
 import { bookingSnapshot } from './booking-snapshot.repository';
 import { replanBookingMessages } from '../messages/plan-messages.service';
+import { withdrawStaleOffers } from '../windows/offer-withdrawal.service';
 
 export interface BookAtInput {
-  salon: { id: string; timeZone: string; skinTestLeadHours: number; skinTestValidityDays: number; granularityMinutes: number };
+  salon: { id: string; name: string; timeZone: string; skinTestLeadHours: number; skinTestValidityDays: number; granularityMinutes: number };
   /** Null for an online hold that nobody has claimed yet (the skin-test rule is checked when it is claimed). */
   clientId: string | null;
   service: ServiceSummary;
@@ -95,11 +96,18 @@ export async function bookAt(db: Db, input: BookAtInput): Promise<string> {
     });
     await writeAudit(db, { salonId: input.salon.id, actorUserId: input.actorUserId, entity: 'booking', entityId: id, action: 'booked', after: (await bookingSnapshot(db, id))?.audit });
     await replanBookingMessages(db, id, input.now); // confirmation and reminders, in the same transaction
+    await withdrawStaleOffers(db, input.salon, input.stylistId, bookedSpan(found), input.now);
     return id;
   } catch (err) {
     if ((err as { code?: string }).code === '23P01') throw taken();
     throw err;
   }
+}
+
+/** From the first step's start to the last step's end, over every sitting. */
+export function bookedSpan(plan: Option): { from: Date; to: Date } {
+  const steps = plan.sittings.flatMap((s) => s.steps);
+  return { from: new Date(steps[0].start), to: new Date(steps[steps.length - 1].end) };
 }
 
 /** The engine's chair per sitting, or the one the person saw when it is a live chair of the salon and free then. */

@@ -14,6 +14,7 @@ import { assertSkinTestAllows } from './book-at.service';
 import { bookingSnapshot } from './booking-snapshot.repository';
 import { replaceSitting, setStylist, sittingStarts } from './change-booking.repository';
 import { replanBookingMessages } from '../messages/plan-messages.service';
+import { withdrawStaleOffers } from '../windows/offer-withdrawal.service';
 
 export interface MoveRequest {
   bookingId: string;
@@ -66,6 +67,7 @@ export async function moveSitting(db: Kysely<Database>, salon: Salon, actorUserI
     const after = await bookingSnapshot(trx, req.bookingId);
     await writeAudit(trx, { salonId: salon.id, actorUserId, entity: 'booking', entityId: req.bookingId, action: `moved sitting ${req.sitting}`, before: before.audit, after: after?.audit });
     await replanBookingMessages(trx, req.bookingId, now, 'moved'); // old reminders dropped, new ones planned
+    await withdrawStaleOffers(trx, salon, stylistId, { from: new Date(placed.steps[0].start), to: new Date(placed.steps[placed.steps.length - 1].end) }, now);
   });
 }
 

@@ -1,4 +1,5 @@
-import { describeRecurrence } from '../../../shared/engine/recurrence';
+import { describeHoursRule } from '../../../shared/engine/describe-hours';
+import { DateTime } from 'luxon';
 import type { Db } from '../../db/database';
 import type { PublicSalon } from '../../../shared/schemas/online-booking.schemas';
 import { notFound } from '../../lib/app-error';
@@ -20,6 +21,7 @@ export async function publicSalon(db: Db, slug: string): Promise<PublicSalon> {
     listServices(db, salon.id),
     listStylistDetails(db, salon.id),
   ]);
+  const today = DateTime.now().setZone(salon.time_zone).toISODate() ?? undefined;
   const deposits = services.filter((s) => s.depositCents > 0).map((s) => `${s.name}: ${formatMoney(s.depositCents, salon.currency)}`);
   return {
     slug: salon.slug,
@@ -28,8 +30,8 @@ export async function publicSalon(db: Db, slug: string): Promise<PublicSalon> {
     phone: salon.phone,
     timeZone: salon.time_zone,
     currency: salon.currency,
-    // rrule's own English rendering of each rule ("every week on Tuesday, …"), with the day's opening times.
-    openingHours: hours.map((h) => `${describeRecurrence(h.rrule)}, ${h.start_time.slice(0, 5)}–${h.end_time.slice(0, 5)}`),
+    // Each rule in plain words with the day's opening times; closed dates already past are left out.
+    openingHours: hours.map((h) => `${describeHoursRule(h.rrule, today)}, ${h.start_time.slice(0, 5)}–${h.end_time.slice(0, 5)}`),
     policies: {
       deposit: deposits.length
         ? `A deposit secures long colour work and consultations: ${deposits.join('; ')}. It counts towards the price.`

@@ -1,8 +1,9 @@
 import { DateTime } from 'luxon';
 import type { Kysely } from 'kysely';
 import type { Database } from '../../db/schema';
+import type { Db } from '../../db/database';
 import type { Senders } from '../messages/send-message.job';
-import { sendClientMessage } from '../messages/client-message.service';
+import { planClientMessage, sendClientMessage, type ClientMessage } from '../messages/client-message.service';
 
 export interface OfferMessage {
   offerId: string;
@@ -18,8 +19,17 @@ export interface OfferMessage {
 const when = (m: OfferMessage) => DateTime.fromJSDate(m.start, { zone: m.timeZone }).toFormat("cccc d LLLL 'at' h:mm a ZZZZ");
 
 /** Offer, taken and gone all go through the send log, keyed on the offer, so each is sent once. */
+function offerMessage(m: OfferMessage, kind: string, subject: string, text: string): ClientMessage {
+  return { salonId: m.salonId, clientId: m.to.id, kind, key: `offer:${m.offerId}:${kind}`, subject, email: `Hello ${m.to.name},\n\n${text}\n`, sms: text };
+}
+
 function send(db: Kysely<Database>, senders: Senders, m: OfferMessage, kind: string, subject: string, text: string) {
-  return sendClientMessage(db, senders, { salonId: m.salonId, clientId: m.to.id, kind, key: `offer:${m.offerId}:${kind}`, subject, email: `Hello ${m.to.name},\n\n${text}\n`, sms: text }, new Date());
+  return sendClientMessage(db, senders, offerMessage(m, kind, subject, text), new Date());
+}
+
+function goneMessage(m: OfferMessage): ClientMessage {
+  const text = `${m.salonName}: the ${m.serviceName} time on ${when(m)} has been taken. You stay on our standby list.`;
+  return offerMessage(m, 'window_offer_gone', `That time has gone: ${m.serviceName}`, text);
 }
 
 export function sendOffer(db: Kysely<Database>, senders: Senders, m: OfferMessage, link: string) {
@@ -33,6 +43,10 @@ export function sendOfferTaken(db: Kysely<Database>, senders: Senders, m: OfferM
 }
 
 export function sendOfferGone(db: Kysely<Database>, senders: Senders, m: OfferMessage) {
-  const text = `${m.salonName}: the ${m.serviceName} time on ${when(m)} has been taken. You stay on our standby list.`;
-  return send(db, senders, m, 'window_offer_gone', `That time has gone: ${m.serviceName}`, text);
+  return sendClientMessage(db, senders, goneMessage(m), new Date());
+}
+
+/** The same "gone" message, planned inside the caller's transaction; the send sweep delivers it within a minute. */
+export function planOfferGone(db: Db, m: OfferMessage, now: Date) {
+  return planClientMessage(db, goneMessage(m), now);
 }

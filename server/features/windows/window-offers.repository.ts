@@ -48,3 +48,34 @@ export async function setOfferStatus(db: Db, ids: string[], status: 'taken' | 'g
   if (!ids.length) return;
   await db.updateTable('window_offers').set({ status, booking_id: bookingId }).where('id', 'in', ids).execute();
 }
+
+/** Open offers of a stylist starting in [from, to), with what a withdrawal needs to re-check and tell. */
+export function listOpenOffers(db: Db, stylistId: string, from: Date, to: Date) {
+  return db
+    .selectFrom('window_offers as o')
+    .innerJoin('clients as c', 'c.id', 'o.client_id')
+    .innerJoin('services as sv', 'sv.id', 'o.service_id')
+    .innerJoin('staff as st', 'st.id', 'o.stylist_id')
+    .select(['o.id', 'o.client_id', 'o.service_id', 'o.starts_at', 'c.name as clientName', 'sv.name as serviceName', 'st.display_name as stylistName'])
+    .where('o.stylist_id', '=', stylistId)
+    .where('o.status', '=', 'offered')
+    .where('o.starts_at', '>=', from)
+    .where('o.starts_at', '<', to)
+    .orderBy('o.starts_at')
+    .execute();
+}
+
+/** The salon's offers starting in [from, to), for the window cards. */
+export function listDayOffers(db: Db, salonId: string, from: Date, to: Date) {
+  return db
+    .selectFrom('window_offers as o')
+    .innerJoin('clients as c', 'c.id', 'o.client_id')
+    .innerJoin('services as sv', 'sv.id', 'o.service_id')
+    .select(['o.id', 'o.stylist_id', 'o.starts_at', 'o.status', 'o.expires_at', 'c.name as clientName', 'sv.name as serviceName'])
+    .where('o.salon_id', '=', salonId)
+    .where('o.starts_at', '>=', from)
+    .where('o.starts_at', '<', to)
+    .orderBy('o.starts_at')
+    .orderBy('c.name')
+    .execute();
+}

@@ -60,10 +60,13 @@ export async function acceptOffer(db: Kysely<Database>, senders: Senders, token:
     const salon = await findSalon(trx, offer.salon_id);
     const service = await findService(trx, salon.id, offer.service_id);
     if (!service) throw notFound('That service');
+    // The slot's offers are settled before booking, so the booking's own withdrawal of clashing offers leaves
+    // them alone: the winner is not told "gone", and the others hear it at once below.
+    const others = slot.filter((o) => o.id !== offer.id && o.status === 'offered');
+    await setOfferStatus(trx, [offer.id], 'taken');
+    await setOfferStatus(trx, others.map((o) => o.id), 'gone');
     const bookingId = await bookAt(trx, { salon, clientId: offer.client_id, service, plan: service.stepPlan, stylistId: offer.stylist_id, start: offer.starts_at, actorUserId: null, now });
     await setOfferStatus(trx, [offer.id], 'taken', bookingId);
-    const others = slot.filter((o) => o.id !== offer.id && o.status === 'offered');
-    await setOfferStatus(trx, others.map((o) => o.id), 'gone');
     await closeStandby(trx, salon.id, offer.standby_entry_id);
     return { others, offer, salon, service };
   });

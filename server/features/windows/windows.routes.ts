@@ -21,7 +21,7 @@ export function registerWindowRoutes({ table, db, mailer, sms, config }: AppDeps
       const salon = await findSalon(db, user.salonId);
       // A stylist sees their own windows; the desk and owner any stylist's.
       const stylistId = user.role === 'stylist' ? ((await findStaffIdForUser(db, user.id)) ?? 'none') : query.stylistId;
-      return { timeZone: salon.timeZone, windows: await listWindowViews(db, salon, query.date ?? todayIn(salon.timeZone), stylistId) };
+      return { timeZone: salon.timeZone, ...(await listWindowViews(db, salon, query.date ?? todayIn(salon.timeZone), stylistId, new Date())) };
     },
   );
   apiRoute(

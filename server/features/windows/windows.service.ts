@@ -1,26 +1,43 @@
 import { DateTime } from 'luxon';
 import type { Db } from '../../db/database';
 import type { Salon } from '../../../shared/schemas/salon.schemas';
-import type { HandsFreeWindowView } from '../../../shared/schemas/window.schemas';
+import type { HandsFreeWindowView, SentOffer } from '../../../shared/schemas/window.schemas';
 import { findWindows } from '../../../shared/engine/engine';
 import { loadSalonCalendars } from '../planning/salon-calendars.repository';
 import { listServices } from '../services/services.repository';
 import { listStandby } from '../standby/standby.repository';
 import { standbyForWindow, windowFitServices } from './window-fits';
+import { listDayOffers } from './window-offers.repository';
 
-/** The day's hands-free windows (one stylist or all) with what fits and who on standby wants it. */
-export async function listWindowViews(db: Db, salon: Salon, date: string, stylistId?: string): Promise<HandsFreeWindowView[]> {
+/**
+ * The day's hands-free windows (one stylist or all) with what fits, who on standby wants it and the offers sent
+ * for it; offers whose window has closed since are listed apart, with what became of them.
+ */
+export async function listWindowViews(db: Db, salon: Salon, date: string, stylistId: string | undefined, now: Date): Promise<{ windows: HandsFreeWindowView[]; closedOffers: SentOffer[] }> {
   const next = DateTime.fromISO(date).plus({ days: 1 }).toISODate()!;
-  const [calendars, services, standby] = await Promise.all([
+  const dayStart = DateTime.fromISO(date, { zone: salon.timeZone }).toJSDate();
+  const dayEnd = DateTime.fromISO(next, { zone: salon.timeZone }).toJSDate();
+  const [calendars, services, standby, offerRows] = await Promise.all([
     loadSalonCalendars(db, salon.id, { from: date, to: next }),
     listServices(db, salon.id),
     listStandby(db, salon.id),
+    listDayOffers(db, salon.id, dayStart, dayEnd),
   ]);
+  const offers = offerRows.filter((o) => !stylistId || o.stylist_id === stylistId).map((o) => ({
+    stylistId: o.stylist_id,
+    start: DateTime.fromJSDate(o.starts_at, { zone: salon.timeZone }).toISO({ suppressMilliseconds: true })!,
+    at: o.starts_at.getTime(),
+    clientName: o.clientName,
+    serviceName: o.serviceName,
+    status: o.status === 'offered' && o.expires_at <= now ? ('expired' as const) : o.status,
+  }));
+  const inWindow = (o: (typeof offers)[number], w: { stylist: string; start: string; end: string }) =>
+    o.stylistId === w.stylist && o.at >= Date.parse(w.start) && o.at < Date.parse(w.end);
+  const sent = ({ at: _at, ...o }: (typeof offers)[number]): SentOffer => o;
   const fits = windowFitServices(services);
   const { windows } = findWindows({ ...calendars, fits: fits.map((f) => ({ service: f.service.id, skill: f.service.skill, minutes: f.minutes })) });
-  return windows
-    .filter((w) => !stylistId || w.stylist === stylistId)
-    .map((w) => {
+  const shown = windows.filter((w) => !stylistId || w.stylist === stylistId);
+  const views = shown.map((w) => {
       const fitting = fits.filter((f) => w.fits.includes(f.service.id));
       const wanted = standbyForWindow(standby, { stylistId: w.stylist, start: w.start, end: w.end, fitIds: w.fits }, salon.timeZone);
       return {
@@ -30,6 +47,9 @@ export async function listWindowViews(db: Db, salon: Salon, date: string, stylis
         minutes: Math.round((Date.parse(w.end) - Date.parse(w.start)) / 60_000),
         fits: fitting.map((f) => ({ serviceId: f.service.id, name: f.service.name, minutes: f.minutes })),
         standby: wanted.map((e) => ({ entryId: e.id, clientId: e.client.id, clientName: e.client.name, serviceIds: e.services.map((s) => s.id).filter((id) => w.fits.includes(id)) })),
+        offers: offers.filter((o) => inWindow(o, w)).map(sent),
       };
     });
+  const closedOffers = offers.filter((o) => !shown.some((w) => inWindow(o, w))).map(sent);
+  return { windows: views, closedOffers };
 }

@@ -9,6 +9,7 @@ import { SelectField } from '../../../components/ui/select-field';
 import { TextAreaField } from '../../../components/ui/text-area-field';
 import { TextField } from '../../../components/ui/text-field';
 import { fieldError, showServerErrors } from '../../../lib/form-errors';
+import { useUnsavedChangesGuard } from '../../../lib/use-unsaved-changes-guard';
 import { useSaveHairHistory } from '../api/hair-history-mutations';
 import { hairHistoryQueries, type HistoryOwner } from '../api/hair-history-queries';
 import { AnswerFieldset } from './answer-fieldset';
@@ -16,25 +17,35 @@ import { answerQuestions, methodLabels, structuralLabels } from './hair-history-
 import { PastServicesFields } from './past-services-fields';
 import { ReactionCaution } from './reaction-caution';
 
-type Props = { onSaved?: () => void; owner?: HistoryOwner };
+type Props = {
+  onSaved?: () => void;
+  owner?: HistoryOwner;
+  /** The one action's words; in the booking flow it saves and moves on ("Save and continue"). */
+  submitLabel?: string;
+};
 
-/** The hair-history form; by default the signed-in client's own. Loads saved answers first. */
-export function HairHistoryForm({ onSaved, owner = 'me' }: Props) {
+/**
+ * The hair-history form; by default the signed-in client's own. Loads saved answers first. Leaving with
+ * unsaved answers asks first: these are safety answers, and typing them twice is how they get skipped.
+ */
+export function HairHistoryForm({ onSaved, owner = 'me', submitLabel = 'Save hair history' }: Props) {
   const history = useQuery(hairHistoryQueries.detail(owner));
   if (history.isPending) return <LoadingState label="Loading your hair history…" />;
   if (history.isError) return <FormAlert>{history.error.message}</FormAlert>;
-  return <Fields initial={history.data.answers ?? emptyHairHistory()} owner={owner} onSaved={onSaved} />;
+  return <Fields initial={history.data.answers ?? emptyHairHistory()} owner={owner} onSaved={onSaved} submitLabel={submitLabel} />;
 }
 
 const methodOptions = Object.entries(methodLabels).map(([value, label]) => ({ value, label }));
 
-function Fields({ initial, owner, onSaved }: { initial: HairHistory; owner: HistoryOwner; onSaved?: () => void }) {
+function Fields({ initial, owner, onSaved, submitLabel }: { initial: HairHistory; owner: HistoryOwner; onSaved?: () => void; submitLabel: string }) {
   const save = useSaveHairHistory(owner);
   const { register, control, handleSubmit, setError, reset, formState } = useForm<HairHistory>({ resolver: zodResolver(HairHistorySchema), defaultValues: initial });
   const { errors } = formState;
   const reaction = useWatch({ control, name: 'previousReaction.answer' });
+  useUnsavedChangesGuard(formState.isDirty && !formState.isSubmitting);
   const submit = handleSubmit((answers) =>
-    save.mutateAsync(answers).then(
+    // Nothing changed since the last save (or nothing typed): there is nothing to store, only to move on.
+    !formState.isDirty ? onSaved?.() : save.mutateAsync(answers).then(
       (saved) => {
         reset(saved.answers ?? answers); // the saved answers become the new baseline, so the form is clean again
         onSaved?.();
@@ -85,7 +96,7 @@ function Fields({ initial, owner, onSaved }: { initial: HairHistory; owner: Hist
       {save.isSuccess && !formState.isDirty && <FormAlert tone="success">Hair history saved.</FormAlert>}
       <div>
         <Button type="submit" busy={save.isPending}>
-          Save hair history
+          {submitLabel}
         </Button>
       </div>
     </form>

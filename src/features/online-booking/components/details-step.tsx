@@ -1,6 +1,3 @@
-import { useState } from 'react';
-import { Button } from '../../../components/ui/button';
-import { FormAlert } from '../../../components/ui/form-alert';
 import { SectionCard } from '../../../components/ui/section-card';
 import { HairHistoryForm } from '../../hair-history/components/hair-history-form';
 import { PhotoUploader } from '../../photos/components/photo-uploader';
@@ -9,31 +6,27 @@ import { StepHeading } from './step-heading';
 type Props = { holdId: string; focusOnMount: boolean; onDone: () => void };
 
 /**
- * Step 3: hair history and photos. Optional (the hold is ticking, and the salon can
- * ask at the consultation), but shown to everyone because the stylist plans from it.
+ * Step 3: photos and hair history. Shown to everyone because the stylist plans from them. Photos are kept
+ * as they upload; the hair history is saved by the step's one action, so answers typed here are never lost
+ * by moving on.
  */
 export function DetailsStep({ holdId, focusOnMount, onDone }: Props) {
-  const [saved, setSaved] = useState(false);
   return (
     <section className="flex flex-col gap-4">
       <StepHeading focusOnMount={focusOnMount}>Your details</StepHeading>
       <p>
-        Your hair history and photos help your stylist plan safely. Only you and this salon&apos;s team can see them. You can
-        skip them now and bring the details to your appointment.
+        Your photos and hair history help your stylist plan safely. Only you and this salon&apos;s team can see them. Anything
+        you leave out now can be brought to your appointment.
       </p>
-      <SectionCard title="Hair history">
-        {saved && <FormAlert tone="success">Hair history saved.</FormAlert>}
-        <HairHistoryForm onSaved={() => setSaved(true)} />
-      </SectionCard>
       <SectionCard title="Photos">
         <div className="flex flex-col gap-6">
           <PhotoUploader kind="hair_now" bookingId={holdId} />
           <PhotoUploader kind="wanted" bookingId={holdId} />
         </div>
       </SectionCard>
-      <Button onClick={onDone} className="w-full sm:w-auto sm:self-start">
-        Continue
-      </Button>
+      <SectionCard title="Hair history">
+        <HairHistoryForm onSaved={onDone} submitLabel="Save and continue" />
+      </SectionCard>
     </section>
   );
 }

@@ -3,7 +3,9 @@ import { useId, useState } from 'react';
 import { useFormContext } from 'react-hook-form';
 import { composeWeeklyRule, nextDates, readWeeklyRule, WEEKDAY_CODES, type WeeklyRule } from '../../../../shared/engine/weekly-rule';
 import { Button } from '../../../components/ui/button';
+import { TextAreaField } from '../../../components/ui/text-area-field';
 import { TextField } from '../../../components/ui/text-field';
+import { describeHoursRule } from '../../../../shared/engine/describe-hours';
 import { fieldError } from '../../../lib/form-errors';
 import { todayIn } from '../../../lib/time';
 
@@ -107,15 +109,21 @@ export function WeeklyRuleLine({ path, number, timeZone, onRemove }: Props) {
         <TextField label="Opens" aria-label={`Opening time of hours line ${number}`} type="time" className="w-36" error={error('start')} {...register(`${path}.start`)} />
         <TextField label="Closes" aria-label={`Closing time of hours line ${number}`} type="time" className="w-36" error={error('end')} {...register(`${path}.end`)} />
       </div>
-      <TextField
-        label="Rule (RFC 5545 text)"
+      <TextAreaField
+        label="Days as a calendar rule"
         aria-label={`Rule of hours line ${number}`}
-        hint="Written by the day picker; edit by hand for anything else, e.g. FREQ=MONTHLY;BYDAY=1SA"
+        hint="Written by the day picker, one line each. Only for patterns the picker cannot make, edit it as iCalendar recurrence text (RFC 5545), e.g. FREQ=MONTHLY;BYDAY=1SA"
+        rows={Math.max(1, text.split('\n').length)}
         error={error('rrule')}
         {...register(`${path}.rrule`)}
       />
-      <div aria-live="polite" className="text-sm">
-        <span className="font-bold">Next dates:</span> {preview.length ? preview.map(shortDate).join(' · ') : 'none in the coming year'}
+      <div aria-live="polite" className="flex flex-col gap-1 text-sm">
+        <p>
+          <span className="font-bold">Reads as:</span> {text ? describeHoursRule(text, todayIn(timeZone)) : 'no days yet'}
+        </p>
+        <p>
+          <span className="font-bold">Next dates:</span> {preview.length ? preview.map(shortDate).join(' · ') : 'none in the coming year'}
+        </p>
       </div>
       {onRemove && (
         <div>

@@ -6,6 +6,7 @@ import type { FillWindowSchema, OfferWindowSchema } from '../../../../shared/sch
 import { apiWrite } from '../../../lib/api-client';
 import { bookChanged } from '../../bookings/api/book-changed';
 import { standbyQueries } from '../../standby/api/standby-queries';
+import { windowQueries } from './window-queries';
 
 const OfferResultSchema = z.object({ offers: z.number().int() });
 
@@ -22,9 +23,11 @@ export function useFillWindow() {
   });
 }
 
-/** Sends offers; nothing is booked until someone accepts, so no cached view changes yet. */
+/** Sends offers; nothing is booked until someone accepts, but the window cards show the offers that are out. */
 export function useOfferWindow() {
+  const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (body: z.input<typeof OfferWindowSchema>) => apiWrite('POST', apiPaths.offerWindow, body, OfferResultSchema),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: windowQueries.all() }),
   });
 }

@@ -3,6 +3,7 @@ import type { HandsFreeWindowView } from '../../../../shared/schemas/window.sche
 import { Button } from '../../../components/ui/button';
 import { formatTimeRange } from '../../../lib/time';
 import { FillWindowPanel } from './fill-window-panel';
+import { SentOffers } from './sent-offers';
 
 type Props = { window: HandsFreeWindowView; timeZone: string; stylistName?: string; onDone: (message: string) => void };
 
@@ -34,6 +35,12 @@ export function WindowCard({ window: win, timeZone, stylistName, onDone }: Props
         <span className="font-bold">Standby: </span>
         {win.standby.length ? win.standby.map((s) => s.clientName).join(', ') : 'nobody waiting for these'}
       </p>
+      {win.offers.length > 0 && (
+        <div className="text-sm">
+          <p className="font-bold">Offers sent</p>
+          <SentOffers offers={win.offers} timeZone={timeZone} label={`Offers sent for ${times}`} />
+        </div>
+      )}
       <div id={panelId} hidden={!open}>
         {open && (
           <FillWindowPanel

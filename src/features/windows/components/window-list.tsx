@@ -3,6 +3,7 @@ import { useState } from 'react';
 import { FormAlert } from '../../../components/ui/form-alert';
 import { LoadingState } from '../../../components/ui/loading-state';
 import { windowQueries } from '../api/window-queries';
+import { SentOffers } from './sent-offers';
 import { WindowCard } from './window-card';
 
 type Props = { date: string; stylistNames?: Record<string, string> };
@@ -14,7 +15,7 @@ export function WindowList({ date, stylistNames }: Props) {
   const [notice, setNotice] = useState<string | null>(null);
   if (windows.isPending) return <LoadingState label="Looking for hands-free windows…" />;
   if (windows.isError) return <p role="alert">The hands-free windows could not be loaded: {windows.error.message}</p>;
-  const list = windows.data.windows;
+  const { windows: list, closedOffers, timeZone } = windows.data;
   return (
     <div className="flex flex-col gap-4">
       {notice && <FormAlert tone="success">{notice}</FormAlert>}
@@ -22,10 +23,18 @@ export function WindowList({ date, stylistNames }: Props) {
       <ul className="grid gap-4 lg:grid-cols-2">
         {list.map((win) => (
           <li key={`${win.stylistId}-${win.start}`}>
-            <WindowCard window={win} timeZone={windows.data.timeZone} stylistName={stylistNames?.[win.stylistId]} onDone={setNotice} />
+            <WindowCard window={win} timeZone={timeZone} stylistName={stylistNames?.[win.stylistId]} onDone={setNotice} />
           </li>
         ))}
       </ul>
+      {closedOffers.length > 0 && (
+        <section aria-labelledby="closed-offers-heading" className="flex flex-col gap-2">
+          <h3 id="closed-offers-heading" className="font-bold">
+            Offers for windows that have closed
+          </h3>
+          <SentOffers offers={closedOffers} timeZone={timeZone} label="Offers for windows that have closed" />
+        </section>
+      )}
     </div>
   );
 }

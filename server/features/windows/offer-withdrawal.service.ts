@@ -1,0 +1,40 @@
+import { DateTime } from 'luxon';
+import type { Db } from '../../db/database';
+import { findService } from '../services/services.repository';
+import { loadSalonCalendars } from '../planning/salon-calendars.repository';
+import { planExactlyAt } from '../planning/plan-at';
+import { listOpenOffers, setOfferStatus } from './window-offers.repository';
+import { planOfferGone } from './offer-messages';
+
+const DAY = 86_400_000;
+
+/**
+ * After the book changed for a stylist between `from` and `to`, withdraws their open window offers that the
+ * engine no longer places (the window was filled, booked or moved into): each becomes "gone" at once, so its
+ * link stops offering a time the stylist cannot give, and its client is told. Runs in the changing transaction,
+ * after the change, so it sees the book as it will be committed.
+ */
+export async function withdrawStaleOffers(
+  db: Db,
+  salon: { id: string; name: string; timeZone: string },
+  stylistId: string,
+  span: { from: Date; to: Date },
+  now: Date,
+): Promise<void> {
+  // An offer's fit may start up to a day before the change and still reach into it (fits are short).
+  const open = await listOpenOffers(db, stylistId, new Date(span.from.getTime() - DAY), span.to);
+  const live = open.filter((o) => o.starts_at > now);
+  if (live.length === 0) return;
+  const day = (d: Date) => DateTime.fromJSDate(d, { zone: salon.timeZone }).toISODate()!;
+  const calendars = await loadSalonCalendars(db, salon.id, { from: day(live[0].starts_at), to: DateTime.fromISO(day(live[live.length - 1].starts_at)).plus({ days: 1 }).toISODate()! });
+  for (const offer of live) {
+    const service = await findService(db, salon.id, offer.service_id);
+    const fits = service && !('reason' in planExactlyAt(calendars, { skill: service.skill, stylistId, plan: service.stepPlan, start: offer.starts_at }));
+    if (fits) continue;
+    await setOfferStatus(db, [offer.id], 'gone');
+    await planOfferGone(db, {
+      offerId: offer.id, salonId: salon.id, to: { id: offer.client_id, name: offer.clientName }, salonName: salon.name,
+      serviceName: offer.serviceName, stylistName: offer.stylistName, start: offer.starts_at, timeZone: salon.timeZone,
+    }, now);
+  }
+}
