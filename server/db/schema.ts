@@ -34,6 +34,19 @@ export interface SalonsTable {
   /** What a cancellation inside the window keeps: the deposit, or nothing (always refunded). */
   cancellation_keeps: ColumnType<'deposit' | 'nothing', 'deposit' | 'nothing' | undefined, 'deposit' | 'nothing'>;
   correction_cents_per_hour: Generated<number>;
+  /** Product families beyond oxidative colour and toner that need a skin test here (migrations/20261205T0010). */
+  skin_test_families: ColumnType<string[], string[] | undefined, string[]>;
+}
+
+/** An owner's clearance that lets oxidative colour follow a positive skin test (migrations/20261205T0010). */
+export interface SkinTestClearancesTable {
+  id: Generated<string>;
+  salon_id: string;
+  client_id: string;
+  recorded_by: string | null;
+  recorded_by_name: string;
+  recorded_at: DefaultTimestamp;
+  reason: string;
 }
 
 export interface RecurringHoursTable {
@@ -324,6 +337,7 @@ export interface SessionTable {
 }
 
 export interface Database {
+  skin_test_clearances: SkinTestClearancesTable;
   session: SessionTable;
   salons: SalonsTable;
   salon_hours: SalonHoursTable;

@@ -8,7 +8,7 @@
  */
 import type { ColourHistory, ConsultationInput, DepositPolicy, HairDensity, HairLength, QuoteWarning } from '../schemas/consultation.schemas';
 import type { ProductType } from '../schemas/mix-log.schemas';
-import type { PlannedStep, StepPlan } from '../schemas/step-plan.schemas';
+import type { PlannedStep, ProductFamily, StepPlan } from '../schemas/step-plan.schemas';
 
 export type QuotePricing = {
   /** The salon's hourly rate for correction and colour chair time, in cents. */
@@ -65,26 +65,27 @@ export const BASE_GRAMS: Record<ProductType, number> = {
 /** Which steps a sitting gets, before minutes are scaled. */
 type Stage = 'removal' | 'lightening' | 'toning' | 'fill' | 'colour' | 'finish' | 'cut_finish';
 
-/** Apply, develop and (usually) rinse: the shape of every chemical stage. */
-function chemical(apply: [string, number], develop: [string, number, number], rinse?: [string, number]): PlannedStep[] {
+/** Apply, develop and (usually) rinse: the shape of every chemical stage; the product goes on and develops. */
+function chemical(product: ProductFamily, apply: [string, number], develop: [string, number, number], rinse?: [string, number]): PlannedStep[] {
   const steps: PlannedStep[] = [
-    { kind: 'hands_on', label: apply[0], minutes: apply[1] },
-    { kind: 'developing', label: develop[0], minMinutes: develop[1], maxMinutes: develop[2] },
+    { kind: 'hands_on', label: apply[0], product, minutes: apply[1] },
+    { kind: 'developing', label: develop[0], product, minMinutes: develop[1], maxMinutes: develop[2] },
   ];
-  return rinse ? [...steps, { kind: 'basin', label: rinse[0], minutes: rinse[1] }] : steps;
+  return rinse ? [...steps, { kind: 'basin', label: rinse[0], product: 'none', minutes: rinse[1] }] : steps;
 }
 
 // Base minutes (medium length and density). CP, from trade practice (processing times: permanent 30–45 min,
 // lightener off within about 45–50 min, toner 10–20 min, remover 20–60 min per application then a long rinse;
 // cut 30–60 min, blow-dry 30–45 min). The product's own instructions override these.
 const STAGE_STEPS: Record<Stage, PlannedStep[]> = {
-  removal: chemical(['Apply colour remover', 30], ['Remover processes', 20, 40], ['Rinse remover', 20]),
-  lightening: chemical(['Apply lightener', 50], ['Lightener lifts', 30, 50], ['Rinse lightener', 15]),
-  toning: chemical(['Apply toner', 15], ['Toner develops', 10, 20], ['Rinse toner', 10]),
-  fill: chemical(['Apply filler (pre-pigment)', 20], ['Filler develops', 10, 20]),
-  colour: chemical(['Apply colour', 30], ['Colour develops', 30, 45], ['Rinse and condition', 15]),
-  finish: [{ kind: 'hands_on', label: 'Blow-dry', minutes: 35 }],
-  cut_finish: [{ kind: 'hands_on', label: 'Cut and finish', minutes: 60 }],
+  // Toners and fillers in a correction are usually demi-permanent, mixed with developer: oxidative (CP).
+  removal: chemical('colour_remover', ['Apply colour remover', 30], ['Remover processes', 20, 40], ['Rinse remover', 20]),
+  lightening: chemical('lightener', ['Apply lightener', 50], ['Lightener lifts', 30, 50], ['Rinse lightener', 15]),
+  toning: chemical('toner_oxidative', ['Apply toner', 15], ['Toner develops', 10, 20], ['Rinse toner', 10]),
+  fill: chemical('oxidative_colour', ['Apply filler (pre-pigment)', 20], ['Filler develops', 10, 20]),
+  colour: chemical('oxidative_colour', ['Apply colour', 30], ['Colour develops', 30, 45], ['Rinse and condition', 15]),
+  finish: [{ kind: 'hands_on', label: 'Blow-dry', product: 'none', minutes: 35 }],
+  cut_finish: [{ kind: 'hands_on', label: 'Cut and finish', product: 'none', minutes: 60 }],
 };
 
 // Which product each stage uses (the grams behind the product cost estimate).

@@ -1,11 +1,35 @@
 /**
- * The skin-test rule for oxidative colour, as a pure function. Common practice (Cosmetics Europe
- * Recommendation No 27, 2023): an allergy alert test is read 48 hours after it is applied, and colour may
- * follow only when it showed no reaction. Salons set the lead time and how long a negative test stays valid.
+ * The skin-test rule for oxidative colour over a client's whole record, as one pure function used at every door
+ * (desk booking, quotes, moves, window fills and offers, online holds and payment, follow-up suggestions).
+ *
+ * - A positive result at any time blocks oxidative colour until an owner records a clearance after it (e.g. on
+ *   written medical advice); even then colour needs a newer test read negative.
+ * - A test counts as passed only when read negative, and only for colour starting at least the lead time after
+ *   it was applied and within its validity. The allergy alert test is read about 48 hours after it is applied
+ *   (Cosmetics Europe Recommendation No 27, 2023): the lead time is never less than 48 hours.
+ * - An unclear result needs a new test.
+ * - A test applied but not yet read (or a skin-test appointment in the book) lets the desk book colour as
+ *   "waiting on a skin test" when it is applied at least the lead time before the colour; the colour cannot start
+ *   until a negative reading is recorded. An unread test applied more than 7 days ago counts as nothing.
+ * - Records are ordered by applied time, then by when they were recorded, so no tie is left to chance.
  */
+
+export type SkinTestResult = 'pending' | 'negative' | 'positive' | 'unclear';
+
 export interface SkinTestRecord {
+  /** When the test was (or, for an appointment in the book, will be) applied. */
   appliedAt: Date;
-  result: 'pending' | 'negative' | 'positive' | 'unclear';
+  /** When the record was written: breaks ties between tests applied at the same moment. */
+  recordedAt: Date;
+  /** `pending`: applied (or booked) and not read yet. */
+  result: SkinTestResult;
+  /** A skin-test appointment in the book that has no recorded test yet. */
+  booked?: boolean;
+}
+
+export interface SkinTestClearance {
+  /** When the owner recorded the clearance. */
+  at: Date;
 }
 
 export interface SkinTestPolicy {
@@ -13,49 +37,116 @@ export interface SkinTestPolicy {
   validityDays: number;
 }
 
+/** The least lead time any salon may set, in hours (the test is read about 48 hours after it is applied). */
+export const MIN_LEAD_HOURS = 48;
+/** An unread test older than this counts as nothing (a test nobody read in a week was not read in time). */
+export const UNREAD_COUNTS_DAYS = 7;
+
+export type SkinTestStatus = 'not_needed' | 'passed' | 'waiting' | 'blocked';
+
+/** A stretch of colour start times the record allows, and on what footing. */
+export interface SkinTestWindow {
+  status: 'passed' | 'waiting';
+  from: Date;
+  to: Date;
+  /** The test the window rests on. */
+  appliedAt: Date;
+}
+
 export interface SkinTestVerdict {
   required: boolean;
-  ok: boolean;
+  /** `blocked` when nothing can allow colour now; otherwise what the best window rests on. */
+  status: SkinTestStatus;
   message: string;
-  /** Colour may not start before this. */
-  earliestAllowed: Date | null;
-  /** Colour may not start after this (the test's validity ends). */
-  latestAllowed: Date | null;
+  /** Passed window first, then waiting window (either may be absent). */
+  windows: SkinTestWindow[];
 }
 
 const HOUR = 3_600_000;
 const DAY = 24 * HOUR;
 const day = (d: Date) => d.toISOString().slice(0, 10);
+const byTime = (a: SkinTestRecord, b: SkinTestRecord) =>
+  a.appliedAt.getTime() - b.appliedAt.getTime() || a.recordedAt.getTime() - b.recordedAt.getTime();
+
+/** The record as the rule reads it at `now`, with the salon's policy. */
+export function skinTestVerdict(
+  needsTest: boolean,
+  records: readonly SkinTestRecord[],
+  clearances: readonly SkinTestClearance[],
+  policy: SkinTestPolicy,
+  now: Date,
+): SkinTestVerdict {
+  if (!needsTest) return { required: false, status: 'not_needed', message: 'These steps need no skin test.', windows: [] };
+  const lead = Math.max(policy.leadHours, MIN_LEAD_HOURS) * HOUR;
+  const validity = policy.validityDays * DAY;
+  const blocked = (message: string): SkinTestVerdict => ({ required: true, status: 'blocked', message, windows: [] });
+  const sorted = [...records].sort(byTime);
+  const read = sorted.filter((r) => r.result !== 'pending');
+
+  const positive = read.filter((r) => r.result === 'positive').at(-1);
+  if (positive && !clearances.some((c) => c.at.getTime() >= positive.recordedAt.getTime())) {
+    return blocked(`The skin test of ${day(positive.appliedAt)} showed a reaction. No oxidative colour until an owner records a clearance (for example on written medical advice).`);
+  }
+  const latestRead = read.at(-1);
+  const windows: SkinTestWindow[] = [];
+  if (latestRead?.result === 'negative') {
+    const from = new Date(latestRead.appliedAt.getTime() + lead);
+    const to = new Date(latestRead.appliedAt.getTime() + validity);
+    if (to > now) windows.push({ status: 'passed', from, to, appliedAt: latestRead.appliedAt });
+  }
+  // Only a test newer than the latest reading can be waited on; one nobody read within a week counts as nothing.
+  const unread = sorted
+    .filter((r) => r.result === 'pending' && (!latestRead || byTime(r, latestRead) > 0))
+    .filter((r) => r.appliedAt.getTime() > now.getTime() - UNREAD_COUNTS_DAYS * DAY)
+    .at(-1);
+  if (unread) {
+    const from = new Date(unread.appliedAt.getTime() + lead);
+    const to = new Date(unread.appliedAt.getTime() + validity);
+    windows.push({ status: 'waiting', from, to, appliedAt: unread.appliedAt });
+  }
+  if (windows.length === 0) return blocked(noWindowReason(latestRead, sorted.filter((r) => r.result === 'pending').at(-1), policy));
+  const best = windows[0];
+  const message =
+    best.status === 'passed'
+      ? `Negative skin test of ${day(best.appliedAt)}: colour from ${day(best.from)} until ${day(best.to)}.`
+      : `A skin test ${best.appliedAt > now ? 'is booked for' : 'was applied on'} ${day(best.appliedAt)} and is not read yet: colour may be booked from ${day(best.from)} as waiting on a skin test, and cannot start until the test reads negative.`;
+  return { required: true, status: best.status, message, windows };
+}
+
+function noWindowReason(latestRead: SkinTestRecord | undefined, staleUnread: SkinTestRecord | undefined, policy: SkinTestPolicy): string {
+  if (staleUnread && (!latestRead || byTime(staleUnread, latestRead) > 0)) {
+    return `The skin test of ${day(staleUnread.appliedAt)} was never read, and an unread test counts for ${UNREAD_COUNTS_DAYS} days only. Book a new skin test first.`;
+  }
+  if (!latestRead) return 'No skin test is on record. Book a skin test first: colour can follow once it has been read negative.';
+  if (latestRead.result === 'unclear') return `The skin test of ${day(latestRead.appliedAt)} was unclear. A new test is needed before oxidative colour.`;
+  if (latestRead.result === 'positive') return `The reaction of ${day(latestRead.appliedAt)} was cleared, but a new skin test must read negative before oxidative colour.`;
+  return `The last skin test (${day(latestRead.appliedAt)}) is older than ${policy.validityDays} days. Book a new skin test first.`;
+}
+
+export type StartCheck = { status: 'passed' | 'waiting' | 'not_needed' } | { status: 'refused'; message: string };
 
 /**
- * @param tests the client's skin tests (any order); a booked, not yet done skin-test appointment counts as a pending test
+ * Whether colour may start at each of `starts` (the sittings that put tested product on the hair). Every start
+ * must fall in one window; a booking rests on the weakest footing any of its sittings has.
  */
-export function checkSkinTest(needsTest: boolean, tests: SkinTestRecord[], policy: SkinTestPolicy, now: Date): SkinTestVerdict {
-  if (!needsTest) return { required: false, ok: true, message: 'This service needs no skin test.', earliestAllowed: null, latestAllowed: null };
-  const latest = [...tests].sort((a, b) => b.appliedAt.getTime() - a.appliedAt.getTime())[0];
-  const blocked = (message: string): SkinTestVerdict => ({ required: true, ok: false, message, earliestAllowed: null, latestAllowed: null });
-  if (!latest) {
-    return blocked(`No skin test is on record. Book a skin test first: colour can follow ${policy.leadHours} hours after it, once it reads negative.`);
+export function checkStarts(verdict: SkinTestVerdict, starts: readonly Date[], zoneDay: (d: Date) => string = day): StartCheck {
+  if (verdict.status === 'not_needed' || starts.length === 0) return { status: 'not_needed' };
+  if (verdict.status === 'blocked') return { status: 'refused', message: verdict.message };
+  let footing: 'passed' | 'waiting' = 'passed';
+  for (const start of starts) {
+    const window = verdict.windows.find((w) => start >= w.from && start <= w.to);
+    if (!window) {
+      const first = verdict.windows.reduce((a, w) => (w.from < a ? w.from : a), verdict.windows[0].from);
+      const last = verdict.windows.reduce((a, w) => (w.to > a ? w.to : a), verdict.windows[0].to);
+      const message =
+        start < first
+          ? `Colour can start from ${zoneDay(first)}, at least the lead time after the skin test is applied. ${verdict.message}`
+          : start > last
+            ? `A colour sitting on ${zoneDay(start)} falls after the skin test stops being valid (${zoneDay(last)}). Book a new skin test for it.`
+            : `A colour sitting on ${zoneDay(start)} falls between what the skin tests allow. ${verdict.message}`;
+      return { status: 'refused', message };
+    }
+    if (window.status === 'waiting') footing = 'waiting';
   }
-  if (latest.result === 'positive') {
-    return blocked(`The skin test of ${day(latest.appliedAt)} showed a reaction. Oxidative colour must not be booked for this client.`);
-  }
-  if (latest.result === 'unclear') {
-    return blocked(`The skin test of ${day(latest.appliedAt)} was unclear. Repeat the test before booking oxidative colour.`);
-  }
-  const validUntil = new Date(latest.appliedAt.getTime() + policy.validityDays * DAY);
-  if (validUntil <= now) {
-    return blocked(`The last skin test (${day(latest.appliedAt)}) is older than ${policy.validityDays} days. Book a new skin test first.`);
-  }
-  const earliest = new Date(latest.appliedAt.getTime() + policy.leadHours * HOUR);
-  const pending = latest.result === 'pending';
-  return {
-    required: true,
-    ok: true,
-    message: pending
-      ? `A skin test is applied or booked for ${day(latest.appliedAt)}; colour can start ${policy.leadHours} hours after it, only if it reads negative.`
-      : `Negative skin test of ${day(latest.appliedAt)}; valid until ${day(validUntil)}.`,
-    earliestAllowed: earliest,
-    latestAllowed: validUntil,
-  };
+  return { status: footing };
 }

@@ -41,6 +41,8 @@ export const BookingOptionSchema = z.object({
   chairMinutes: z.number().int(),
   /** Minutes of developing time in which the stylist's hands are free for someone else. */
   handsFreeMinutes: z.number().int(),
+  /** The skin-test footing this option would be booked on ("waiting": the colour cannot start until a negative reading). */
+  skinTest: z.enum(['not_needed', 'passed', 'waiting']),
 });
 export type BookingOption = z.infer<typeof BookingOptionSchema>;
 
@@ -48,6 +50,8 @@ export const SkinTestCheckSchema = z.object({
   required: z.boolean(),
   /** False when the service cannot be booked at all for now (no test, or a positive or unclear one). */
   ok: z.boolean(),
+  /** What the client's record allows: passed (read negative), waiting (applied, not read yet), blocked, or not needed. */
+  status: z.enum(['not_needed', 'passed', 'waiting', 'blocked']),
   message: z.string(),
   /** The earliest start the skin-test rule allows, when it allows one. */
   earliestAllowed: InstantSchema.nullable(),

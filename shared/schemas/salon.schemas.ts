@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { IdSchema } from './common.schemas';
+import { ProductFamilySchema } from './step-plan.schemas';
 
 export const SalonSchema = z.object({
   id: IdSchema,
@@ -13,6 +14,8 @@ export const SalonSchema = z.object({
   phone: z.string(),
   skinTestLeadHours: z.number().int(),
   skinTestValidityDays: z.number().int(),
+  /** Product families beyond oxidative colour and oxidative toner that need a skin test in this salon. */
+  skinTestFamilies: z.array(ProductFamilySchema),
   granularityMinutes: z.number().int(),
   cancellationWindowHours: z.number().int(),
   /** What a cancellation inside the window keeps: the deposit, or nothing. */

@@ -1,13 +1,22 @@
 import { z } from 'zod';
 
+/**
+ * What a step puts on the hair. Whether a booking needs a skin test follows from these, whatever service it is
+ * booked under: oxidative colour (permanent or demi-permanent mixed with developer) and oxidative toner always do.
+ */
+export const PRODUCT_FAMILIES = ['oxidative_colour', 'toner_oxidative', 'lightener', 'colour_remover', 'direct_dye', 'toner_direct', 'bond_care', 'none'] as const;
+export const ProductFamilySchema = z.enum(PRODUCT_FAMILIES, { error: 'Say what this step puts on the hair (or nothing)' });
+export type ProductFamily = z.infer<typeof ProductFamilySchema>;
+
 /** One timed step of a service. `developing` stretches between its min and max; the others are fixed. */
 export const PlannedStepSchema = z.discriminatedUnion('kind', [
-  z.object({ kind: z.literal('hands_on'), label: z.string().min(1).max(80), minutes: z.number().int().min(5).max(600) }).strict(),
-  z.object({ kind: z.literal('basin'), label: z.string().min(1).max(80), minutes: z.number().int().min(5).max(120) }).strict(),
+  z.object({ kind: z.literal('hands_on'), label: z.string().min(1).max(80), product: ProductFamilySchema, minutes: z.number().int().min(5).max(600) }).strict(),
+  z.object({ kind: z.literal('basin'), label: z.string().min(1).max(80), product: ProductFamilySchema, minutes: z.number().int().min(5).max(120) }).strict(),
   z
     .object({
       kind: z.literal('developing'),
       label: z.string().min(1).max(80),
+      product: ProductFamilySchema,
       minMinutes: z.number().int().min(5).max(240),
       maxMinutes: z.number().int().min(5).max(240),
     })

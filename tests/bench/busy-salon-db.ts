@@ -75,8 +75,8 @@ function planOf(steps: GeneratedBooking['steps']): StepPlan {
           const m = minutes(s.start, s.end);
           const label = `Step ${i + 1}`;
           return s.kind === 'developing'
-            ? { kind: 'developing' as const, label, minMinutes: Math.max(5, m - 10), maxMinutes: Math.min(240, m + 10) }
-            : { kind: s.kind, label, minutes: Math.max(5, m) };
+            ? { kind: 'developing' as const, label, product: 'none' as const, minMinutes: Math.max(5, m - 10), maxMinutes: Math.min(240, m + 10) }
+            : { kind: s.kind, label, product: 'none' as const, minutes: Math.max(5, m) };
         }),
       },
     ],
@@ -149,7 +149,7 @@ export async function loadBusySalon(db: Kysely<Database>, options: BusySalonOpti
     const services = new Map<string, { id: string; priceCents: number; depositCents: number }>();
     for (const m of MENU) {
       const kinds = m.pattern.split(',') as Kind[];
-      const plan: StepPlan = { sittings: [{ steps: kinds.map((kind, i) => (kind === 'developing' ? { kind, label: `Step ${i + 1}`, minMinutes: 10, maxMinutes: 45 } : { kind, label: `Step ${i + 1}`, minutes: 20 })) }] };
+      const plan: StepPlan = { sittings: [{ steps: kinds.map((kind, i) => (kind === 'developing' ? { kind, label: `Step ${i + 1}`, product: 'none' as const, minMinutes: 10, maxMinutes: 45 } : { kind, label: `Step ${i + 1}`, product: 'none' as const, minutes: 20 })) }] };
       const row = await trx
         .insertInto('services')
         .values({ salon_id: salonId, name: m.name, category: m.category, skill: m.skill, price_cents: m.priceCents, deposit_cents: m.depositCents, step_plan: JSON.stringify(plan) })

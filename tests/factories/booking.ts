@@ -8,7 +8,7 @@ const at = (iso: string) => new Date(iso);
 /** A service row good enough to book against. */
 export async function insertService(db: Db, salonId: string): Promise<string> {
   seq++;
-  const plan = { sittings: [{ steps: [{ kind: 'hands_on', label: 'Apply', minutes: 30 }] }] };
+  const plan = { sittings: [{ steps: [{ kind: 'hands_on', label: 'Apply', product: 'none', minutes: 30 }] }] };
   const row = await db
     .insertInto('services')
     .values({ salon_id: salonId, name: `Service ${seq}`, category: 'colour', skill: 'colour', price_cents: 5000, step_plan: JSON.stringify(plan) })
@@ -35,7 +35,7 @@ export function insertTestBooking(db: Db, input: BookingInput): Promise<string> 
     serviceId: input.serviceId,
     stylistId: input.stylistId,
     status: 'booked',
-    stepPlan: { sittings: [{ steps: [{ kind: 'hands_on', label: 'Apply', minutes: 30 }] }] },
+    stepPlan: { sittings: [{ steps: [{ kind: 'hands_on', label: 'Apply', product: 'none', minutes: 30 }] }] },
     priceCents: 5000,
     depositCents: 0,
     createdBy: null,

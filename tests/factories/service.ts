@@ -6,14 +6,14 @@ let seq = 0;
 /** A two-sitting correction: 2 h 20 min then 1 h 30 min, 1–7 days apart (needs a skin test). */
 export const correctionPlan: StepPlan = {
   sittings: [
-    { steps: [{ kind: 'hands_on', label: 'Apply lightener', minutes: 45 }, { kind: 'developing', label: 'Lightener lifts', minMinutes: 30, maxMinutes: 50 }, { kind: 'basin', label: 'Rinse', minutes: 15 }, { kind: 'hands_on', label: 'Tone and dry', minutes: 50 }] },
-    { daysAfterPrevious: { min: 1, max: 7 }, steps: [{ kind: 'hands_on', label: 'Apply colour', minutes: 30 }, { kind: 'developing', label: 'Colour develops', minMinutes: 30, maxMinutes: 40 }, { kind: 'basin', label: 'Rinse', minutes: 15 }, { kind: 'hands_on', label: 'Cut and finish', minutes: 15 }] },
+    { steps: [{ kind: 'hands_on', label: 'Apply lightener', product: 'lightener', minutes: 45 }, { kind: 'developing', label: 'Lightener lifts', product: 'lightener', minMinutes: 30, maxMinutes: 50 }, { kind: 'basin', label: 'Rinse', product: 'none', minutes: 15 }, { kind: 'hands_on', label: 'Tone and dry', product: 'toner_direct', minutes: 50 }] },
+    { daysAfterPrevious: { min: 1, max: 7 }, steps: [{ kind: 'hands_on', label: 'Apply colour', product: 'direct_dye', minutes: 30 }, { kind: 'developing', label: 'Colour develops', product: 'direct_dye', minMinutes: 30, maxMinutes: 40 }, { kind: 'basin', label: 'Rinse', product: 'none', minutes: 15 }, { kind: 'hands_on', label: 'Cut and finish', product: 'none', minutes: 15 }] },
   ],
 };
 
 /** A short window fit: apply, develop 10–20 min, rinse. */
 export const tonerPlan: StepPlan = {
-  sittings: [{ steps: [{ kind: 'hands_on', label: 'Apply toner', minutes: 10 }, { kind: 'developing', label: 'Toner develops', minMinutes: 10, maxMinutes: 20 }, { kind: 'basin', label: 'Rinse', minutes: 10 }] }],
+  sittings: [{ steps: [{ kind: 'hands_on', label: 'Apply toner', product: 'toner_direct', minutes: 10 }, { kind: 'developing', label: 'Toner develops', product: 'toner_direct', minMinutes: 10, maxMinutes: 20 }, { kind: 'basin', label: 'Rinse', product: 'none', minutes: 10 }] }],
 };
 
 export async function insertPlannedService(

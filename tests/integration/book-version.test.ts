@@ -46,12 +46,12 @@ beforeAll(async () => {
   ana = await insertUser(db, salon.salonId, 'stylist', { skills: ['colour'] });
   client = await insertUser(db, salon.salonId, 'client');
   correction = await insertPlannedService(db, salon.salonId);
-  toner = await insertPlannedService(db, salon.salonId, { name: 'Toner refresh', plan: { sittings: [{ steps: [{ kind: 'hands_on', label: 'Apply toner', minutes: 30 }] }] } });
+  toner = await insertPlannedService(db, salon.salonId, { name: 'Toner refresh', plan: { sittings: [{ steps: [{ kind: 'hands_on', label: 'Apply toner', product: 'toner_direct', minutes: 30 }] }] } });
   await db.updateTable('services').set({ online_bookable: true }).where('id', '=', toner).execute();
 });
 afterAll(() => t.close());
 
-const book = (agent: Awaited<ReturnType<typeof signedInAgent>>, start: string, serviceId = toner, plan: object = { sittings: [{ steps: [{ kind: 'hands_on', label: 'Apply toner', minutes: 30 }] }] }) =>
+const book = (agent: Awaited<ReturnType<typeof signedInAgent>>, start: string, serviceId = toner, plan: object = { sittings: [{ steps: [{ kind: 'hands_on', label: 'Apply toner', product: 'toner_direct', minutes: 30 }] }] }) =>
   agent.write('post', '/api/bookings', { clientId: client.clientId, serviceId, stepPlan: plan, stylistId: ana.staffId, start, idempotencyKey: crypto.randomUUID() });
 
 describe('the book version', () => {

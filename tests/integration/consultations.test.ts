@@ -66,7 +66,7 @@ describe('proposing a quote', () => {
 });
 
 describe('recording a consultation and its quote', () => {
-  const quote = { serviceId: '', stepPlan: { sittings: [{ steps: [{ kind: 'hands_on', label: 'Apply colour', minutes: 40 }, { kind: 'developing', label: 'Colour develops', minMinutes: 30, maxMinutes: 40 }, { kind: 'basin', label: 'Rinse', minutes: 15 }] }] }, priceCents: 26000, depositCents: 6000, notes: 'Edited: longer application' };
+  const quote = { serviceId: '', stepPlan: { sittings: [{ steps: [{ kind: 'hands_on', label: 'Apply colour', product: 'direct_dye', minutes: 40 }, { kind: 'developing', label: 'Colour develops', product: 'direct_dye', minMinutes: 30, maxMinutes: 40 }, { kind: 'basin', label: 'Rinse', product: 'none', minutes: 15 }] }] }, priceCents: 26000, depositCents: 6000, notes: 'Edited: longer application' };
 
   it('stores nothing when the input is bad: level, deposit above price, another client’s photo', async () => {
     const bad = [

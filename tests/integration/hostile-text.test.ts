@@ -21,7 +21,7 @@ let salon: SalonFixture;
 let stylist: UserFixture;
 let desk: Awaited<ReturnType<typeof signedInAgent>>;
 let serviceId: string;
-const plan = { sittings: [{ steps: [{ kind: 'hands_on' as const, label: 'Gloss', minutes: 30 }] }] };
+const plan = { sittings: [{ steps: [{ kind: 'hands_on' as const, label: 'Gloss', product: 'toner_direct' as const, minutes: 30 }] }] };
 
 beforeAll(async () => {
   t = await startTestApp();

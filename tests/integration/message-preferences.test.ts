@@ -17,7 +17,7 @@ let m: Awaited<ReturnType<typeof messageDesk>>;
 let server: Server;
 let serviceId: string;
 const db = () => t.testDb.db;
-const plan: StepPlan = { sittings: [{ steps: [{ kind: 'hands_on', label: 'Gloss', minutes: 30 }] }] };
+const plan: StepPlan = { sittings: [{ steps: [{ kind: 'hands_on', label: 'Gloss', product: 'toner_direct', minutes: 30 }] }] };
 
 beforeAll(async () => {
   t = await startTestApp();

@@ -15,7 +15,7 @@ let serviceId: string;
 let desk$: Awaited<ReturnType<typeof signedInAgent>>;
 let phones = 0;
 const Z = 'America/Denver';
-const plan = { sittings: [{ steps: [{ kind: 'hands_on' as const, label: 'Gloss', minutes: 30 }] }] };
+const plan = { sittings: [{ steps: [{ kind: 'hands_on' as const, label: 'Gloss', product: 'toner_direct' as const, minutes: 30 }] }] };
 const db = () => t.testDb.db;
 const iso = (d: Date) => d.toISOString();
 

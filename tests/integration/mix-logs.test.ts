@@ -21,13 +21,13 @@ const DAY = 24 * HOUR;
 const base = Math.floor(Date.now() / HOUR) * HOUR;
 const sitting = (chairId: string, startMs: number) => ({
   chairId,
-  steps: [{ kind: 'hands_on' as const, label: 'Apply', start: new Date(startMs), end: new Date(startMs + HOUR), basinId: null }],
+  steps: [{ kind: 'hands_on' as const, label: 'Apply', product: 'none', start: new Date(startMs), end: new Date(startMs + HOUR), basinId: null }],
 });
 
 async function book(db: Db, serviceId: string, sittings: ReturnType<typeof sitting>[]) {
   return insertBooking(db, {
     salonId: salon.salonId, clientId: client.clientId!, serviceId, stylistId: stylist.staffId!, status: 'booked',
-    stepPlan: { sittings: [{ steps: [{ kind: 'hands_on', label: 'Apply', minutes: 60 }] }] } as never, priceCents: 0, depositCents: 0, createdBy: null, sittings,
+    stepPlan: { sittings: [{ steps: [{ kind: 'hands_on', label: 'Apply', product: 'none', minutes: 60 }] }] } as never, priceCents: 0, depositCents: 0, createdBy: null, sittings,
   });
 }
 

@@ -29,7 +29,7 @@ beforeAll(async () => {
   ana = await insertUser(db, salon.salonId, 'stylist');
   consultation = await insertPlannedService(db, salon.salonId, {
     name: 'Consultation', category: 'colour', depositCents: 2500,
-    plan: { sittings: [{ steps: [{ kind: 'hands_on', label: 'Consultation', minutes: 30 }] }] },
+    plan: { sittings: [{ steps: [{ kind: 'hands_on', label: 'Consultation', product: 'none', minutes: 30 }] }] },
   });
   await db.updateTable('services').set({ online_bookable: true, category: 'consultation' }).where('id', '=', consultation).execute();
 });

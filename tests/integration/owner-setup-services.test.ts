@@ -59,7 +59,7 @@ describe('services and step plans', () => {
     const date = futureWeekday(3, 3);
     const booked = await owner$.write('post', '/api/bookings', { clientId: client.clientId, serviceId: id, stepPlan: tonerPlan, stylistId: stylist.staffId, start: localIso(date, '10:00'), idempotencyKey: 'setup-snapshot-0001' });
     expect(booked.status).toBe(201);
-    const longer = { sittings: [{ steps: [{ kind: 'hands_on', label: 'Apply toner', minutes: 30 }, { kind: 'developing', label: 'Toner develops', minMinutes: 20, maxMinutes: 40 }, { kind: 'basin', label: 'Rinse', minutes: 15 }] }] };
+    const longer = { sittings: [{ steps: [{ kind: 'hands_on', label: 'Apply toner', product: 'toner_direct', minutes: 30 }, { kind: 'developing', label: 'Toner develops', product: 'toner_direct', minMinutes: 20, maxMinutes: 40 }, { kind: 'basin', label: 'Rinse', product: 'none', minutes: 15 }] }] };
     const changed = await owner$.write('put', setupPaths.service(id), service({ name: 'Snapshot check', priceCents: 12000, depositKind: 'fixed', depositCents: 4000, depositPercent: null, stepPlan: longer }));
     expect(changed.status).toBe(200);
     expect(changed.body).toMatchObject({ priceCents: 12000, depositCents: 4000, stepPlan: longer, futureBookings: 1 });
@@ -91,8 +91,8 @@ describe('services and step plans', () => {
     const cases: [object, string][] = [
       [{ stepPlan: { sittings: [{ steps: [] }] } }, 'stepPlan.sittings.0.steps'],
       [{ stepPlan: { sittings: [] } }, 'stepPlan.sittings'],
-      [{ stepPlan: { sittings: [{ steps: [{ kind: 'developing', label: 'Develops', minMinutes: 40, maxMinutes: 20 }] }] } }, 'stepPlan.sittings.0.steps.0.maxMinutes'],
-      [{ stepPlan: { sittings: [{ steps: [{ kind: 'hands_on', label: 'A', minutes: 30 }] }, { steps: [{ kind: 'hands_on', label: 'B', minutes: 30 }] }] } }, 'stepPlan.sittings.1.daysAfterPrevious'],
+      [{ stepPlan: { sittings: [{ steps: [{ kind: 'developing', label: 'Develops', product: 'none', minMinutes: 40, maxMinutes: 20 }] }] } }, 'stepPlan.sittings.0.steps.0.maxMinutes'],
+      [{ stepPlan: { sittings: [{ steps: [{ kind: 'hands_on', label: 'A', product: 'none', minutes: 30 }] }, { steps: [{ kind: 'hands_on', label: 'B', product: 'none', minutes: 30 }] }] } }, 'stepPlan.sittings.1.daysAfterPrevious'],
       [{ depositKind: 'percent', depositPercent: null }, 'depositPercent'],
       [{ depositKind: 'fixed', depositCents: 9000, depositPercent: null }, 'depositCents'],
       [{ name: '' }, 'name'],

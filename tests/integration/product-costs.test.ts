@@ -25,7 +25,7 @@ beforeAll(async () => {
   const start = Math.floor(Date.now() / HOUR) * HOUR - 2 * HOUR;
   bookingId = await insertBooking(db, {
     salonId: salon.salonId, clientId: client.clientId!, serviceId: await insertService(db, salon.salonId), stylistId: stylist.staffId!, status: 'finished',
-    stepPlan: { sittings: [{ steps: [{ kind: 'hands_on', label: 'Apply', minutes: 60 }] }] }, priceCents: 0, depositCents: 0, createdBy: null,
+    stepPlan: { sittings: [{ steps: [{ kind: 'hands_on', label: 'Apply', product: 'none', minutes: 60 }] }] }, priceCents: 0, depositCents: 0, createdBy: null,
     sittings: [{ chairId: salon.chairs[0], steps: [{ kind: 'hands_on', label: 'Apply', start: new Date(start), end: new Date(start + HOUR), basinId: null }] }],
   });
   owner$ = await signedInAgent(t.app, owner.email, owner.password);

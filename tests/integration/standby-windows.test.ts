@@ -17,7 +17,7 @@ const clients: { id: string; name: string }[] = [];
 
 // A lightening visit: 10:00–10:45 hands-on, 10:45–11:35 developing (Ana's hands are free), then rinse.
 const lightening: StepPlan = {
-  sittings: [{ steps: [{ kind: 'hands_on', label: 'Apply lightener', minutes: 45 }, { kind: 'developing', label: 'Lifts', minMinutes: 50, maxMinutes: 50 }, { kind: 'basin', label: 'Rinse', minutes: 15 }] }],
+  sittings: [{ steps: [{ kind: 'hands_on', label: 'Apply lightener', product: 'lightener', minutes: 45 }, { kind: 'developing', label: 'Lifts', product: 'lightener', minMinutes: 50, maxMinutes: 50 }, { kind: 'basin', label: 'Rinse', product: 'none', minutes: 15 }] }],
 };
 
 beforeAll(async () => {

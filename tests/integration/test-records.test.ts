@@ -41,8 +41,8 @@ async function tryToBook(clientId: string) {
 
 describe('skin tests gate oxidative colour', () => {
   it.each([
-    ['positive', /showed a reaction\. Oxidative colour must not be booked/],
-    ['unclear', /was unclear\. Repeat the test/],
+    ['positive', /showed a reaction\. No oxidative colour until an owner records a clearance/],
+    ['unclear', /was unclear\. A new test is needed/],
   ] as const)('a %s result recorded on the client card blocks colour bookings with a clear message', async (result, message) => {
     const client = await insertUser(t.testDb.db, salon.salonId, 'client');
     await insertNegativeSkinTest(t.testDb.db, salon.salonId, client.clientId!, 60);

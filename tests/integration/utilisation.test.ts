@@ -28,13 +28,13 @@ const at = (date: string, hhmm: string) => DateTime.fromISO(`${date}T${hhmm}`, {
 const DAY = '2027-03-02';
 type Step = [NewStep['kind'], string, string, number?];
 
-const colourPlan: StepPlan = { sittings: [{ steps: [{ kind: 'hands_on', label: 'Apply', minutes: 30 }, { kind: 'developing', label: 'Develops', minMinutes: 45, maxMinutes: 60 }, { kind: 'basin', label: 'Rinse', minutes: 15 }] }] };
-const cutPlan: StepPlan = { sittings: [{ steps: [{ kind: 'hands_on', label: 'Cut', minutes: 30 }] }] };
+const colourPlan: StepPlan = { sittings: [{ steps: [{ kind: 'hands_on', label: 'Apply', product: 'none', minutes: 30 }, { kind: 'developing', label: 'Develops', product: 'none', minMinutes: 45, maxMinutes: 60 }, { kind: 'basin', label: 'Rinse', product: 'none', minutes: 15 }] }] };
+const cutPlan: StepPlan = { sittings: [{ steps: [{ kind: 'hands_on', label: 'Cut', product: 'none', minutes: 30 }] }] };
 // Quoted: sitting 1 is 30 + 45..60 + 15 + 15 = 105..120 minutes, sitting 2 is 120: 225..240 in all.
 const correctionPlan: StepPlan = {
   sittings: [
-    { steps: [{ kind: 'hands_on', label: 'Apply', minutes: 30 }, { kind: 'developing', label: 'Lifts', minMinutes: 45, maxMinutes: 60 }, { kind: 'basin', label: 'Rinse', minutes: 15 }, { kind: 'hands_on', label: 'Dry', minutes: 15 }] },
-    { daysAfterPrevious: { min: 1, max: 14 }, steps: [{ kind: 'hands_on', label: 'Colour and cut', minutes: 120 }] },
+    { steps: [{ kind: 'hands_on', label: 'Apply', product: 'none', minutes: 30 }, { kind: 'developing', label: 'Lifts', product: 'lightener', minMinutes: 45, maxMinutes: 60 }, { kind: 'basin', label: 'Rinse', product: 'none', minutes: 15 }, { kind: 'hands_on', label: 'Dry', product: 'none', minutes: 15 }] },
+    { daysAfterPrevious: { min: 1, max: 14 }, steps: [{ kind: 'hands_on', label: 'Colour and cut', product: 'none', minutes: 120 }] },
   ],
 };
 

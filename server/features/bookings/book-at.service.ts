@@ -3,13 +3,13 @@ import type { Db } from '../../db/database';
 import type { StepPlan } from '../../../shared/schemas/step-plan.schemas';
 import type { ServiceSummary } from '../../../shared/schemas/service.schemas';
 import type { BookingStatus } from '../../../shared/schemas/common.schemas';
+import type { Salon } from '../../../shared/schemas/salon.schemas';
 import type { Option } from '../../../shared/engine/engine';
-import { checkSkinTest } from '../../../shared/rules/skin-test-rule';
 import { AppError } from '../../lib/app-error';
 import { loadSalonCalendars } from '../planning/salon-calendars.repository';
 import { horizonFor } from '../planning/engine-request';
 import { planBetween, planExactlyAt } from '../planning/plan-at';
-import { skinTestRecords } from '../skin-tests/skin-tests.repository';
+import { assertSkinTestAllows } from '../skin-tests/skin-test-check.service';
 import { writeAudit } from '../audit/audit.repository';
 import { chairFreeBetween, insertBooking } from './bookings.repository';
 import { bookingSnapshot } from './booking-snapshot.repository';
@@ -17,7 +17,7 @@ import { replanBookingMessages } from '../messages/plan-messages.service';
 import { withdrawStaleOffers } from '../windows/offer-withdrawal.service';
 
 export interface BookAtInput {
-  salon: { id: string; name: string; timeZone: string; skinTestLeadHours: number; skinTestValidityDays: number; granularityMinutes: number };
+  salon: Pick<Salon, 'id' | 'name' | 'timeZone' | 'skinTestLeadHours' | 'skinTestValidityDays' | 'skinTestFamilies' | 'granularityMinutes'>;
   /** Null for an online hold that nobody has claimed yet (the skin-test rule is checked when it is claimed). */
   clientId: string | null;
   service: ServiceSummary;
@@ -31,6 +31,11 @@ export interface BookAtInput {
   actorUserId: string | null;
   now: Date;
   status?: BookingStatus;
+  /**
+   * Whether the booking may rest on a skin test applied and not read yet ("waiting on a skin test"): the desk may,
+   * an online or link door may not. Off unless a desk door says so.
+   */
+  allowWaitingOnTest?: boolean;
   /** A consultation quote being booked: its price and deposit replace the service's. */
   quote?: { id: string; priceCents: number; depositCents: number };
 }
@@ -39,24 +44,6 @@ export interface BookAtInput {
 export const MAX_DAYS_AHEAD = 365;
 
 const taken = () => new AppError('CONFLICT', 409, 'Someone booked that time a moment ago. Look for times again.');
-
-/** Throws 409 SKIN_TEST when the skin-test rule forbids colour at these sitting starts. */
-export async function assertSkinTestAllows(db: Db, input: Pick<BookAtInput, 'salon' | 'service' | 'now'> & { clientId: string }, starts: Date[]) {
-  const verdict = checkSkinTest(
-    input.service.needsSkinTest,
-    await skinTestRecords(db, input.clientId),
-    { leadHours: input.salon.skinTestLeadHours, validityDays: input.salon.skinTestValidityDays },
-    input.now,
-  );
-  if (!verdict.ok) throw new AppError('SKIN_TEST', 409, verdict.message);
-  if (verdict.earliestAllowed && starts[0] < verdict.earliestAllowed) {
-    const when = DateTime.fromJSDate(verdict.earliestAllowed, { zone: input.salon.timeZone }).toFormat('ccc d LLL, HH:mm');
-    throw new AppError('SKIN_TEST', 409, `The skin-test rule allows this colour from ${when} (${input.salon.skinTestLeadHours} hours after the test). ${verdict.message}`);
-  }
-  if (verdict.latestAllowed && starts.some((s) => s > verdict.latestAllowed!)) {
-    throw new AppError('SKIN_TEST', 409, `A sitting falls after the skin test stops being valid. ${verdict.message}`);
-  }
-}
 
 /**
  * Books the engine's plan for this stylist starting exactly at `start`, inside the caller's transaction,
@@ -76,7 +63,10 @@ export async function bookAt(db: Db, input: BookAtInput): Promise<string> {
   }
   const found = await planOrExplain(db, input);
   const chosen = await preferredChairs(db, input.salon.id, found, input.chairIds);
-  if (input.clientId) await assertSkinTestAllows(db, { ...input, clientId: input.clientId }, found.sittings.map((s) => new Date(s.steps[0].start)));
+  if (input.clientId) {
+    const starts = found.sittings.map((s) => new Date(s.steps[0].start));
+    await assertSkinTestAllows(db, input.salon, { clientId: input.clientId, plan: input.plan, serviceAsks: input.service.needsSkinTest, starts, allowWaiting: input.allowWaitingOnTest ?? false }, input.now);
+  }
   try {
     const id = await insertBooking(db, {
       salonId: input.salon.id,

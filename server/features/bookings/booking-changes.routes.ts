@@ -49,7 +49,7 @@ export function registerBookingChangeRoutes({ table, db }: AppDeps): void {
     { method: 'post', path: '/api/bookings/:id/move', access: DESK, summary: 'Move one sitting to a new time (and stylist)', params: IdParamsSchema, body: MoveSittingSchema, response: BookingViewSchema },
     async ({ user, params, body }) => {
       const salon = await findSalon(db, user.salonId);
-      await moveSitting(db, salon, user.id, { bookingId: params.id, sitting: body.sitting, start: new Date(body.start), stylistId: body.stylistId }, new Date());
+      await moveSitting(db, salon, user.id, { bookingId: params.id, sitting: body.sitting, start: new Date(body.start), stylistId: body.stylistId, allowWaitingOnTest: true }, new Date());
       return deskBookingView(db, salon.id, salon.timeZone, params.id);
     },
   );

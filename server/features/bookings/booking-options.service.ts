@@ -4,11 +4,11 @@ import type { BookingOptionsRequest, BookingOptionsResponse } from '../../../sha
 import type { Salon } from '../../../shared/schemas/salon.schemas';
 import type { StepPlan } from '../../../shared/schemas/step-plan.schemas';
 import { planOptions } from '../../../shared/engine/engine';
-import { checkSkinTest } from '../../../shared/rules/skin-test-rule';
+import { checkStarts } from '../../../shared/rules/skin-test-rule';
 import { AppError, notFound } from '../../lib/app-error';
 import { findClient } from '../clients/clients.repository';
 import { findService } from '../services/services.repository';
-import { skinTestRecords } from '../skin-tests/skin-tests.repository';
+import { skinTestVerdictFor, testedSittingStarts } from '../skin-tests/skin-test-check.service';
 import { loadSalonCalendars } from '../planning/salon-calendars.repository';
 import { horizonFor, localEarliest, toBookingOption, toEngineSittings } from '../planning/engine-request';
 import { loadNames } from '../planning/names.repository';
@@ -21,11 +21,14 @@ export async function findBookingOptions(db: Db, salon: Salon, body: Required<Bo
   const [client, service] = await Promise.all([findClient(db, salon.id, body.clientId), findService(db, salon.id, body.serviceId)]);
   if (!client) throw notFound('That client');
   if (!service) throw notFound('That service');
-  const verdict = checkSkinTest(service.needsSkinTest, await skinTestRecords(db, client.id), { leadHours: salon.skinTestLeadHours, validityDays: salon.skinTestValidityDays }, now);
-  const skinTest = { required: verdict.required, ok: verdict.ok, message: verdict.message, earliestAllowed: verdict.earliestAllowed?.toISOString() ?? null };
-  if (!verdict.ok) return { timeZone: salon.timeZone, skinTest, options: [] };
+  const plan = body.stepPlan as StepPlan;
+  // The rule follows the steps as edited here, whatever service they are booked under.
+  const verdict = await skinTestVerdictFor(db, salon, client.id, plan, service.needsSkinTest, now);
+  const firstAllowed = verdict.windows.reduce<Date | null>((a, w) => (!a || w.from < a ? w.from : a), null);
+  const skinTest = { required: verdict.required, ok: verdict.status !== 'blocked', status: verdict.status, message: verdict.message, earliestAllowed: firstAllowed?.toISOString() ?? null };
+  if (verdict.status === 'blocked') return { timeZone: salon.timeZone, skinTest, options: [] };
 
-  const earliest = new Date(Math.max(now.getTime(), DateTime.fromISO(body.earliestDate, { zone: salon.timeZone }).toMillis(), verdict.earliestAllowed?.getTime() ?? 0));
+  const earliest = new Date(Math.max(now.getTime(), DateTime.fromISO(body.earliestDate, { zone: salon.timeZone }).toMillis(), firstAllowed?.getTime() ?? 0));
   const fromDate = DateTime.fromJSDate(earliest, { zone: salon.timeZone }).toISODate()!;
   const calendars = await loadSalonCalendars(db, salon.id, horizonFor(fromDate, body.stepPlan, SEARCH_DAYS));
   if (body.stylistId && !calendars.stylists.some((s) => s.id === body.stylistId)) {
@@ -38,12 +41,16 @@ export async function findBookingOptions(db: Db, salon: Salon, body: Required<Bo
       stylist: body.stylistId,
       earliest: localEarliest(earliest, salon.timeZone, salon.granularityMinutes),
       sittings: toEngineSittings(body.stepPlan),
-      limit: body.limit,
+      // Some options may fall outside what the skin test allows (a later sitting after its validity): ask for more.
+      limit: verdict.required ? Math.min(60, body.limit * 3) : body.limit,
       spread: 'day',
     },
   });
   const names = await loadNames(db, salon.id);
-  const inValidity = (o: (typeof answer.options)[number]) =>
-    !verdict.latestAllowed || o.sittings.every((s) => Date.parse(s.steps[0].start) <= verdict.latestAllowed!.getTime());
-  return { timeZone: salon.timeZone, skinTest, options: answer.options.filter(inValidity).map((o) => toBookingOption(o, body.stepPlan as StepPlan, names)) };
+  const options = answer.options
+    .map((o) => ({ o, check: checkStarts(verdict, testedSittingStarts(plan, o.sittings.map((s) => new Date(s.steps[0].start)), salon, service.needsSkinTest)) }))
+    .filter((x) => x.check.status !== 'refused')
+    .slice(0, body.limit)
+    .map(({ o, check }) => toBookingOption(o, plan, names, check.status as 'not_needed' | 'passed' | 'waiting'));
+  return { timeZone: salon.timeZone, skinTest, options };
 }

@@ -10,7 +10,7 @@ import { loadSalonCalendars } from '../planning/salon-calendars.repository';
 import { horizonFor } from '../planning/engine-request';
 import { planExactlyAt } from '../planning/plan-at';
 import { writeAudit } from '../audit/audit.repository';
-import { assertSkinTestAllows } from './book-at.service';
+import { assertSkinTestAllows } from '../skin-tests/skin-test-check.service';
 import { bookingSnapshot } from './booking-snapshot.repository';
 import { replaceSitting, setStylist, sittingStarts } from './change-booking.repository';
 import { replanBookingMessages } from '../messages/plan-messages.service';
@@ -21,6 +21,8 @@ export interface MoveRequest {
   sitting: number;
   start: Date;
   stylistId?: string;
+  /** The desk may move a booking that rests on an unread skin test; a client moving their own may not. */
+  allowWaitingOnTest?: boolean;
 }
 
 const MOVABLE = ['held', 'booked'];
@@ -46,7 +48,11 @@ export async function moveSitting(db: Kysely<Database>, salon: Salon, actorUserI
     const starts = await sittingStarts(trx, req.bookingId);
     assertDayGaps(plan, starts, req.sitting - 1, req.start, salon.timeZone);
     const service = await findService(trx, salon.id, row.service_id);
-    if (service && row.client_id) await assertSkinTestAllows(trx, { salon, clientId: row.client_id, service, now }, [req.start]);
+    // A later date may fall outside the skin test's validity: the whole booking is checked with the moved sitting.
+    if (row.client_id) {
+      const moved = starts.map((s, i) => (i === req.sitting - 1 ? req.start : s));
+      await assertSkinTestAllows(trx, salon, { clientId: row.client_id, plan, serviceAsks: service?.needsSkinTest ?? false, starts: moved, allowWaiting: req.allowWaitingOnTest ?? false }, now);
+    }
 
     const one: StepPlan = { sittings: [{ steps: plan.sittings[req.sitting - 1].steps }] };
     const date = DateTime.fromJSDate(req.start, { zone: salon.timeZone }).toISODate()!;

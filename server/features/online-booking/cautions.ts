@@ -6,7 +6,7 @@ import type { Cautions } from '../../../shared/schemas/online-booking.schemas';
  * dyes (Regulation (EC) No 1223/2009, Annex III) and the 48-hour allergy alert test (Cosmetics Europe
  * Recommendation No 27), with the salon's own lead time.
  */
-export function cautionsFor(service: { category: string; needs_skin_test: boolean }, leadHours: number): Cautions {
+export function cautionsFor(service: { category: string; needsSkinTest: boolean }, leadHours: number): Cautions {
   const items: Cautions['items'] = [
     {
       id: 'chemical-risks',
@@ -14,11 +14,11 @@ export function cautionsFor(service: { category: string; needs_skin_test: boolea
       text: 'Hair colourants can cause severe allergic reactions, and lightener can irritate or burn the skin and scalp and damage hair. Tell us about any rash, sensitive, irritated or damaged scalp, and any reaction you have had to hair colour or a temporary "black henna" tattoo: then colour must not go ahead without advice.',
     },
   ];
-  if (service.needs_skin_test || service.category === 'consultation' || service.category === 'skin_test') {
+  if (service.needsSkinTest || service.category === 'consultation' || service.category === 'skin_test') {
     items.push({
       id: 'skin-test',
       title: 'Skin test before oxidative colour',
-      text: `Oxidative colour needs a skin test read at least ${leadHours} hours before the colour appointment, with no reaction. A reaction means no colour that day; follow your doctor's advice.`,
+      text: `Oxidative colour needs a skin test: applied at least ${leadHours} hours before your colour appointment and read before it, as the colour maker's instructions say. Any reaction means no oxidative colour until it has been cleared (for example on your doctor's written advice).`,
     });
   }
   if (service.category === 'consultation') {
@@ -33,5 +33,5 @@ export function cautionsFor(service: { category: string; needs_skin_test: boolea
     title: 'Licensed judgement and local rules',
     text: 'Your stylist may stop or change a service to protect your skin and hair. Dwell does not replace a licensed professional\'s judgement or local regulations.',
   });
-  return { version: `v1:${items.map((i) => i.id.slice(0, 3)).join('-')}`, items };
+  return { version: `v2:${items.map((i) => i.id.slice(0, 3)).join('-')}`, items };
 }

@@ -10,7 +10,7 @@ export async function findHold(db: Db, id: string) {
     .innerJoin('staff as st', 'st.id', 'b.stylist_id')
     .innerJoin('sittings as si', (j) => j.onRef('si.booking_id', '=', 'b.id').on('si.seq', '=', 1))
     .select([
-      'b.id', 'b.status', 'b.stylist_id', 'b.held_until', 'b.hold_secret_hash', 'b.client_id', 'b.deposit_cents', 'b.salon_id', 'b.service_id',
+      'b.id', 'b.status', 'b.stylist_id', 'b.held_until', 'b.hold_secret_hash', 'b.client_id', 'b.deposit_cents', 'b.salon_id', 'b.service_id', 'b.step_plan',
       'sa.name as salonName', 'sa.time_zone as timeZone', 'sa.currency', 'sa.address', 'sv.name as serviceName', 'sv.needs_skin_test', 'sv.category',
       'st.display_name as stylistName', sql<Date>`lower(si.during)`.as('start'), sql<Date>`upper(si.during)`.as('end'),
     ])

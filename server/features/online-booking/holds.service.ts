@@ -10,11 +10,11 @@ import { AppError, notFound } from '../../lib/app-error';
 import { findSalon } from '../salon/salon.repository';
 import { findClientIdForUser } from '../clients/clients.repository';
 import { lockStylists } from '../planning/stylist-lock';
-import { bookAt, assertSkinTestAllows } from '../bookings/book-at.service';
-import { findService } from '../services/services.repository';
+import { bookAt } from '../bookings/book-at.service';
+import { assertHoldSkinTest } from './hold-skin-test';
 import { findSalonBySlug } from './public-salon.service';
 import { onlineService } from './availability.service';
-import { cautionsFor } from './cautions';
+import { holdCautions } from './hold-cautions';
 import { claimHoldRow, findHold, hasAcceptedCautions, insertCautionAcceptance, markHold, type HoldRow } from './holds.repository';
 
 export const LAPSE_HOLD_JOB = 'lapse-hold';
@@ -64,16 +64,15 @@ export async function claimHold(db: Kysely<Database>, user: SessionUser, id: str
   if (hold.status !== 'held') throw new AppError('CONFLICT', 409, 'This time is already booked.');
   if (hold.client_id && hold.client_id !== clientId) throw notFound('That hold');
   const salon = await findSalon(db, hold.salon_id);
-  const service = await findService(db, salon.id, hold.service_id);
-  if (service) await assertSkinTestAllows(db, { salon, clientId, service, now }, [hold.start]);
+  await assertHoldSkinTest(db, salon, hold, clientId, now);
   await claimHoldRow(db, id, clientId);
-  return { ...holdView(hold, now), cautions: cautionsFor(hold, salon.skinTestLeadHours) };
+  return { ...holdView(hold, now), cautions: holdCautions(hold, salon) };
 }
 
 export async function acceptCautions(db: Kysely<Database>, user: SessionUser, id: string, secret: string, version: string, now: Date): Promise<void> {
   const hold = await ownHold(db, user, id, secret, now);
   const salon = await findSalon(db, hold.salon_id);
-  const cautions = cautionsFor(hold, salon.skinTestLeadHours);
+  const cautions = holdCautions(hold, salon);
   if (version !== cautions.version) throw new AppError('CONFLICT', 409, 'The cautions have changed; please read them again.');
   if (!(await hasAcceptedCautions(db, id, version))) await insertCautionAcceptance(db, id, user.id, version, cautions.items);
 }

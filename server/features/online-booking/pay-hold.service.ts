@@ -10,10 +10,11 @@ import type { SmsSender } from '../../sms/sms-sender';
 import { AppError } from '../../lib/app-error';
 import { findSalon } from '../salon/salon.repository';
 import { writeAudit } from '../audit/audit.repository';
-import { cautionsFor } from './cautions';
+import { holdCautions } from './hold-cautions';
 import { confirmHoldRow, hasAcceptedCautions, recordPayment } from './holds.repository';
 import { ownHold } from './holds.service';
 import { sendConfirmation } from './confirmation';
+import { assertHoldSkinTest } from './hold-skin-test';
 
 type Deps = { payments: Payments; mailer: Mailer; sms: SmsSender };
 
@@ -26,9 +27,10 @@ export async function payHold(db: Kysely<Database>, deps: Deps, user: SessionUse
   const hold = await ownHold(db, user, id, body.secret, now);
   if (hold.status !== 'held') return hold.id; // paid already (a retried request)
   const salon = await findSalon(db, hold.salon_id);
-  if (!(await hasAcceptedCautions(db, id, cautionsFor(hold, salon.skinTestLeadHours).version))) {
+  if (!(await hasAcceptedCautions(db, id, holdCautions(hold, salon).version))) {
     throw new AppError('CONFLICT', 409, 'Please read and accept the cautions first.');
   }
+  if (hold.client_id) await assertHoldSkinTest(db, salon, hold, hold.client_id, now); // a reading may have come in since the claim
   const record = { salonId: salon.id, bookingId: id, clientId: hold.client_id, amountCents: hold.deposit_cents, currency: salon.currency };
   let paymentRef: string | null = null;
   if (hold.deposit_cents > 0) {

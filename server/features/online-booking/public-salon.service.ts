@@ -1,4 +1,6 @@
 import { describeHoursRule } from '../../../shared/engine/describe-hours';
+import { planNeedsSkinTest } from '../../../shared/rules/skin-test-need';
+import { toSalon } from '../salon/salon.repository';
 import { DateTime } from 'luxon';
 import type { Db } from '../../db/database';
 import type { PublicSalon } from '../../../shared/schemas/online-booking.schemas';
@@ -21,6 +23,7 @@ export async function publicSalon(db: Db, slug: string): Promise<PublicSalon> {
     listServices(db, salon.id),
     listStylistDetails(db, salon.id),
   ]);
+  const families = toSalon(salon).skinTestFamilies;
   const today = DateTime.now().setZone(salon.time_zone).toISODate() ?? undefined;
   const deposits = services.filter((s) => s.depositCents > 0).map((s) => `${s.name}: ${formatMoney(s.depositCents, salon.currency)}`);
   return {
@@ -50,7 +53,8 @@ export async function publicSalon(db: Db, slug: string): Promise<PublicSalon> {
       priceIsFrom: s.priceIsFrom,
       depositCents: s.depositCents,
       onlineBookable: s.onlineBookable,
-      needsSkinTest: s.needsSkinTest,
+      // From the steps (and the service's own box, which only adds), as at every booking door.
+      needsSkinTest: planNeedsSkinTest(s.stepPlan, families, s.needsSkinTest),
     })),
     stylists: stylists.map((s) => ({ id: s.id, name: s.name, skills: s.skills })),
   };

@@ -40,7 +40,7 @@ export interface Names {
 const minutesBetween = (a: string, b: string) => Math.round((Date.parse(b) - Date.parse(a)) / 60_000);
 
 /** An engine option as the desk sees it: names, labels from the step plan, chair time and hands-free time. */
-export function toBookingOption(option: Option, plan: StepPlan, names: Names): BookingOption {
+export function toBookingOption(option: Option, plan: StepPlan, names: Names, skinTest: BookingOption['skinTest']): BookingOption {
   let chairMinutes = 0;
   let handsFreeMinutes = 0;
   const sittings = option.sittings.map((s, i) => {
@@ -60,5 +60,5 @@ export function toBookingOption(option: Option, plan: StepPlan, names: Names): B
     chairMinutes += minutesBetween(start, end);
     return { chairId: s.chair, chairName: names.chairs.get(s.chair) ?? '', start, end, steps };
   });
-  return { stylistId: option.stylist, stylistName: names.stylists.get(option.stylist) ?? '', sittings, chairMinutes, handsFreeMinutes };
+  return { stylistId: option.stylist, stylistName: names.stylists.get(option.stylist) ?? '', sittings, chairMinutes, handsFreeMinutes, skinTest };
 }

@@ -3,6 +3,7 @@ import type { Db } from '../../db/database';
 import type { SalonsTable } from '../../db/schema';
 import type { Salon } from '../../../shared/schemas/salon.schemas';
 import { AppError } from '../../lib/app-error';
+import { WIDENING_FAMILIES, type WideningFamily } from '../../../shared/rules/skin-test-need';
 
 export async function findSalon(db: Db, id: string): Promise<Salon> {
   return toSalon(await db.selectFrom('salons').selectAll().where('id', '=', id).executeTakeFirstOrThrow());
@@ -20,6 +21,7 @@ export function toSalon(row: Selectable<SalonsTable>): Salon {
     phone: row.phone,
     skinTestLeadHours: row.skin_test_lead_hours,
     skinTestValidityDays: row.skin_test_validity_days,
+    skinTestFamilies: row.skin_test_families.filter((f): f is WideningFamily => (WIDENING_FAMILIES as readonly string[]).includes(f)),
     granularityMinutes: row.granularity_minutes,
     cancellationWindowHours: row.cancellation_window_hours,
     cancellationKeeps: row.cancellation_keeps,

@@ -24,22 +24,35 @@ export async function insertSkinTest(
     .executeTakeFirstOrThrow();
 }
 
-/** What the skin-test rule looks at: recorded tests plus skin-test appointments booked and not yet recorded. */
+/**
+ * What the skin-test rule looks at: every recorded test, and skin-test appointments in the book that no recorded
+ * test stands for yet (a test recorded on the appointment's day stands for it). The rule itself decides how much
+ * an unread or booked test counts (shared/rules/skin-test-rule.ts).
+ */
 export async function skinTestRecords(db: Db, clientId: string): Promise<SkinTestRecord[]> {
   const [tests, appointments] = await Promise.all([
-    db.selectFrom('skin_tests').select(['applied_at', 'result']).where('client_id', '=', clientId).execute(),
+    db.selectFrom('skin_tests').select(['applied_at', 'result', 'created_at']).where('client_id', '=', clientId).execute(),
     db
       .selectFrom('bookings as b')
       .innerJoin('services as s', 's.id', 'b.service_id')
       .innerJoin('sittings as si', 'si.booking_id', 'b.id')
-      .select(sql<Date>`lower(si.during)`.as('start'))
+      .select([sql<Date>`lower(si.during)`.as('start'), 'b.created_at'])
       .where('b.client_id', '=', clientId)
       .where('s.category', '=', 'skin_test')
       .where('b.status', 'in', ['held', 'booked', 'checked_in'])
       .execute(),
   ]);
+  const recordedDays = new Set(tests.map((t) => t.applied_at.toISOString().slice(0, 10)));
   return [
-    ...tests.map((t) => ({ appliedAt: t.applied_at, result: t.result })),
-    ...appointments.map((a) => ({ appliedAt: a.start, result: 'pending' as const })),
+    ...tests.map((t) => ({ appliedAt: t.applied_at, recordedAt: t.created_at, result: t.result })),
+    ...appointments
+      .filter((a) => !recordedDays.has(a.start.toISOString().slice(0, 10)))
+      .map((a) => ({ appliedAt: a.start, recordedAt: a.created_at, result: 'pending' as const, booked: true })),
   ];
+}
+
+/** The owner's clearances of positive skin tests for this client (when each was recorded). */
+export async function skinTestClearances(db: Db, clientId: string): Promise<{ at: Date }[]> {
+  const rows = await db.selectFrom('skin_test_clearances').select('recorded_at').where('client_id', '=', clientId).execute();
+  return rows.map((r) => ({ at: r.recorded_at }));
 }

@@ -31,7 +31,7 @@ export async function fillWindow(db: Kysely<Database>, salon: Salon, user: Sessi
     const clientId =
       body.clientId ??
       (await insertClient(trx, { salonId: salon.id, userId: null, name: body.walkIn!.name, email: null, phone: body.walkIn!.phone || null, notes: 'Walk-in' }));
-    const bookingId = await bookAt(trx, { salon, clientId, service, plan: service.stepPlan, stylistId: body.stylistId, start: new Date(body.start), latestStart: body.latestStart ? new Date(body.latestStart) : undefined, actorUserId: user.id, now });
+    const bookingId = await bookAt(trx, { salon, clientId, service, plan: service.stepPlan, stylistId: body.stylistId, start: new Date(body.start), latestStart: body.latestStart ? new Date(body.latestStart) : undefined, actorUserId: user.id, now, allowWaitingOnTest: true });
     if (body.standbyEntryId) await closeStandby(trx, salon.id, body.standbyEntryId);
     await saveIdempotent(trx, user.id, body.idempotencyKey, 'POST /api/windows/fill', 201, { bookingId });
     return bookingId;

@@ -7,6 +7,7 @@ import { setupQueries } from '../../features/setup/api/setup-queries';
 import { ServiceForm } from '../../features/setup/components/service-form';
 import { SetupNav } from '../../features/setup/components/setup-nav';
 import { queryClient } from '../../lib/query-client';
+import { stepOfKind } from '../../features/booking-flow/book-form-schema';
 
 export async function loader() {
   await Promise.all([queryClient.ensureQueryData(setupQueries.services()), queryClient.ensureQueryData(salonQueries.current())]);
@@ -40,7 +41,7 @@ const blank = (skill: string): ServiceFormInput => ({
   depositKind: 'fixed',
   depositCents: 0,
   depositPercent: null,
-  stepPlan: { sittings: [{ steps: [{ kind: 'hands_on', label: 'Apply', minutes: 30 }] }] },
+  stepPlan: { sittings: [{ steps: [stepOfKind('hands_on')] }] },
 });
 
 export function Component() {

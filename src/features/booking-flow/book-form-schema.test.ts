@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { BookFormSchema, stepOfKind, toOptionsRequest } from './book-form-schema';
 
-const plan = { sittings: [{ steps: [{ kind: 'hands_on' as const, label: 'Apply', minutes: 30 }] }] };
+const plan = { sittings: [{ steps: [{ kind: 'hands_on' as const, label: 'Apply', product: 'none', minutes: 30 }] }] };
 const valid = {
   clientId: '0b6e2a55-6f1d-4f4e-9a43-2d3f4b5c6d7e',
   serviceId: '1b6e2a55-6f1d-4f4e-9a43-2d3f4b5c6d7e',
@@ -17,7 +17,7 @@ describe('BookFormSchema', () => {
     expect(result.error?.issues[0].message).toBe('Pick a client or add a new one');
   });
   it('refuses a developing step whose least time exceeds its most', () => {
-    const bad = { sittings: [{ steps: [{ kind: 'developing' as const, label: 'Lift', minMinutes: 50, maxMinutes: 30 }] }] };
+    const bad = { sittings: [{ steps: [{ kind: 'developing' as const, label: 'Lift', product: 'lightener', minMinutes: 50, maxMinutes: 30 }] }] };
     expect(BookFormSchema.safeParse({ ...valid, stepPlan: bad }).success).toBe(false);
   });
   it('turns "any stylist" into null for the request', () => {
@@ -27,14 +27,14 @@ describe('BookFormSchema', () => {
 
 describe('stepOfKind', () => {
   it('carries the label and length over to a developing step', () => {
-    expect(stepOfKind('developing', { kind: 'hands_on', label: 'Toner', minutes: 20 })).toEqual({
+    expect(stepOfKind('developing', { kind: 'hands_on', label: 'Toner', product: 'toner_direct', minutes: 20 })).toEqual({
       kind: 'developing',
-      label: 'Toner',
+      label: 'Toner', product: 'toner_direct',
       minMinutes: 20,
       maxMinutes: 20,
     });
   });
   it('keeps a basin step within its limit', () => {
-    expect(stepOfKind('basin', { kind: 'developing', label: 'Rinse', minMinutes: 30, maxMinutes: 200 })).toEqual({ kind: 'basin', label: 'Rinse', minutes: 120 });
+    expect(stepOfKind('basin', { kind: 'developing', label: 'Rinse', product: 'none', minMinutes: 30, maxMinutes: 200 })).toEqual({ kind: 'basin', label: 'Rinse', product: 'none', minutes: 120 });
   });
 });

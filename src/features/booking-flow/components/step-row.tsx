@@ -1,6 +1,7 @@
 import { useFormContext } from 'react-hook-form';
 import { fieldError } from '../../../lib/form-errors';
-import type { PlannedStep } from '../../../../shared/schemas/step-plan.schemas';
+import { PRODUCT_FAMILIES, type PlannedStep } from '../../../../shared/schemas/step-plan.schemas';
+import { productFamilyLabels } from '../../../../shared/rules/skin-test-need';
 import { Button } from '../../../components/ui/button';
 import { SelectField } from '../../../components/ui/select-field';
 import { StepKindIcon } from '../../../components/ui/step-kind-icon';
@@ -19,15 +20,17 @@ type Props = {
 };
 
 const kindOptions = (['hands_on', 'developing', 'basin'] as const).map((kind) => ({ value: kind, label: stepKindLabels[kind] }));
+// A new step starts on "Choose…": a colour step must never fall back to "nothing" by oversight.
+const productOptions = [{ value: '', label: 'Choose…' }, ...PRODUCT_FAMILIES.map((f) => ({ value: f, label: productFamilyLabels[f] }))];
 
-/** One editable step: kind, label, minutes (or least–most minutes while developing), order. */
+/** One editable step: kind, label, what it puts on the hair, minutes (or least–most minutes while developing), order. */
 export function StepRow({ path, number, count, onMove, onRemove, onReplace }: Props) {
   const { register, watch, getValues, formState } = useFormContext<StepPlanFormInput>();
   const step = watch(path);
   const error = (field: string) => fieldError(formState.errors, `${path}.${field}`);
   const name = `step ${number}`;
   return (
-    <li className="grid grid-cols-2 items-end gap-3 rounded-lg bg-linen p-3 sm:grid-cols-[auto_10rem_1fr_auto_auto_auto]">
+    <li className="grid grid-cols-2 items-end gap-3 rounded-lg bg-linen p-3 sm:grid-cols-[auto_10rem_1fr_12rem_auto_auto_auto]">
       <span className="flex items-center gap-1 self-center font-bold tabular">
         <StepKindIcon kind={step.kind} />
         {number}.
@@ -40,6 +43,13 @@ export function StepRow({ path, number, count, onMove, onRemove, onReplace }: Pr
         onChange={(event) => onReplace(stepOfKind(event.target.value as PlannedStep['kind'], getValues(path)))}
       />
       <TextField label="Step" aria-label={`Name of ${name}`} error={error('label')} {...register(`${path}.label`)} />
+      <SelectField
+        label="On the hair"
+        aria-label={`What ${name} puts on the hair`}
+        options={productOptions}
+        error={error('product')}
+        {...register(`${path}.product`, { setValueAs: (v: string) => (v === '' ? undefined : v) })}
+      />
       {step.kind === 'developing' ? (
         <>
           <TextField label="Least min" aria-label={`Least minutes of ${name}`} type="number" inputMode="numeric" className="w-24" error={error('minMinutes')} {...register(`${path}.minMinutes`, { valueAsNumber: true })} />

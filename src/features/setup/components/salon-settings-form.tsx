@@ -12,13 +12,14 @@ import { TextField } from '../../../components/ui/text-field';
 import { fieldError, showServerErrors } from '../../../lib/form-errors';
 import { useSaveSalonSettings } from '../api/setup-mutations';
 import { HoursLines } from './hours-lines';
+import { SkinTestFamiliesField } from './skin-test-families-field';
 
 const zones = typeof Intl.supportedValuesOf === 'function' ? Intl.supportedValuesOf('timeZone') : [];
 // Every country libphonenumber-js can read numbers for, by name.
 const countries = getCountries()
   .map((code) => ({ value: code, label: `${countryName(code)} (${code})` }))
   .sort((a, b) => a.label.localeCompare(b.label));
-const fieldNames = ['name', 'address', 'phone', 'timeZone', 'currency', 'country', 'hours', 'skinTestLeadHours', 'skinTestValidityDays', 'holdMinutes', 'cancellationWindowHours', 'quietFrom', 'quietTo', 'reminderOffsetsHours', 'maxDeveloperPercent'] as const;
+const fieldNames = ['name', 'address', 'phone', 'timeZone', 'currency', 'country', 'hours', 'skinTestLeadHours', 'skinTestValidityDays', 'skinTestFamilies', 'holdMinutes', 'cancellationWindowHours', 'quietFrom', 'quietTo', 'reminderOffsetsHours', 'maxDeveloperPercent'] as const;
 
 /** Everything about how the salon works, in one form checked by the same schema as the server. */
 export function SalonSettingsForm({ settings }: { settings: SalonSettings }) {
@@ -64,8 +65,21 @@ export function SalonSettingsForm({ settings }: { settings: SalonSettings }) {
         </SectionCard>
         <SectionCard title="Bookings, deposits and cancelling">
           <div className="grid gap-4 md:grid-cols-2">
-            <TextField label="Skin test at least this many hours before colour" type="number" error={err('skinTestLeadHours')} {...form.register('skinTestLeadHours', num)} />
-            <TextField label="A negative skin test stays valid for (days)" type="number" error={err('skinTestValidityDays')} {...form.register('skinTestValidityDays', num)} />
+            <TextField
+              label="Skin test at least this many hours before colour"
+              hint="At least 48: the test is applied, then read 48 hours later, before the appointment."
+              type="number"
+              error={err('skinTestLeadHours')}
+              {...form.register('skinTestLeadHours', num)}
+            />
+            <TextField
+              label="A negative skin test stays valid for (days)"
+              hint="182 days (about six months) is common practice. Product makers ask for a test before every colouring; your local rules may ask for more."
+              type="number"
+              error={err('skinTestValidityDays')}
+              {...form.register('skinTestValidityDays', num)}
+            />
+            <SkinTestFamiliesField control={form.control} />
             <TextField label="Online hold lasts (minutes)" type="number" error={err('holdMinutes')} {...form.register('holdMinutes', num)} />
             <TextField label="Cancellation window (hours before the first sitting)" type="number" error={err('cancellationWindowHours')} {...form.register('cancellationWindowHours', num)} />
             <SelectField

@@ -1,0 +1,51 @@
+import { DateTime } from 'luxon';
+import type { Db } from '../../db/database';
+import type { Salon } from '../../../shared/schemas/salon.schemas';
+import type { StepPlan } from '../../../shared/schemas/step-plan.schemas';
+import { checkStarts, skinTestVerdict, type SkinTestVerdict } from '../../../shared/rules/skin-test-rule';
+import { planNeedsSkinTest, testedFamilies } from '../../../shared/rules/skin-test-need';
+import { AppError } from '../../lib/app-error';
+import { skinTestClearances, skinTestRecords } from './skin-tests.repository';
+
+type SalonRule = Pick<Salon, 'timeZone' | 'skinTestLeadHours' | 'skinTestValidityDays' | 'skinTestFamilies'>;
+
+/** What the client's whole skin-test record allows for this plan (and the service's own box, which only adds). */
+export async function skinTestVerdictFor(db: Db, salon: SalonRule, clientId: string, plan: StepPlan, serviceAsks: boolean, now: Date): Promise<SkinTestVerdict> {
+  const needs = planNeedsSkinTest(plan, salon.skinTestFamilies, serviceAsks);
+  if (!needs) return skinTestVerdict(false, [], [], salonPolicy(salon), now);
+  const [records, clearances] = await Promise.all([skinTestRecords(db, clientId), skinTestClearances(db, clientId)]);
+  return skinTestVerdict(true, records, clearances, salonPolicy(salon), now);
+}
+
+export const salonPolicy = (salon: SalonRule) => ({ leadHours: salon.skinTestLeadHours, validityDays: salon.skinTestValidityDays });
+
+/** The starts of the sittings that put tested product on the hair (every sitting when the service itself asks). */
+export function testedSittingStarts(plan: StepPlan, starts: readonly Date[], salon: SalonRule, serviceAsks: boolean): Date[] {
+  const tested = testedFamilies(salon.skinTestFamilies);
+  return starts.filter((_, i) => serviceAsks || plan.sittings[i]?.steps.some((s) => tested.has(s.product)));
+}
+
+export interface SkinTestDoor {
+  clientId: string;
+  plan: StepPlan;
+  serviceAsks: boolean;
+  /** Each sitting's start, in order. */
+  starts: readonly Date[];
+  /** Whether the desk may book on an applied, unread test ("waiting on a skin test"); online doors may not. */
+  allowWaiting: boolean;
+}
+
+/**
+ * The one check every door that books, moves, fills or accepts colour work goes through. Answers the footing the
+ * booking rests on, or throws 409 SKIN_TEST with the reason.
+ */
+export async function assertSkinTestAllows(db: Db, salon: SalonRule, door: SkinTestDoor, now: Date): Promise<'passed' | 'waiting' | 'not_needed'> {
+  const verdict = await skinTestVerdictFor(db, salon, door.clientId, door.plan, door.serviceAsks, now);
+  const zoneDay = (d: Date) => DateTime.fromJSDate(d, { zone: salon.timeZone }).toFormat('ccc d LLL, h:mm a');
+  const check = checkStarts(verdict, testedSittingStarts(door.plan, door.starts, salon, door.serviceAsks), zoneDay);
+  if (check.status === 'refused') throw new AppError('SKIN_TEST', 409, check.message);
+  if (check.status === 'waiting' && !door.allowWaiting) {
+    throw new AppError('SKIN_TEST', 409, `This colour needs a skin test read negative first. ${verdict.message} Please book a consultation or call the salon.`);
+  }
+  return check.status;
+}

@@ -1,0 +1,168 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { anonymousAgent, signedInAgent, startTestApp, type TestApp } from '../setup/test-app';
+import { insertSalon, type SalonFixture } from '../factories/salon';
+import { insertUser, type UserFixture } from '../factories/user';
+import { insertPlannedService } from '../factories/service';
+import { futureWeekday, localIso } from '../setup/dates';
+import { apiPaths } from '../../shared/api/api-paths';
+import { setupPaths } from '../../shared/api/setup-paths';
+import type { StepPlan } from '../../shared/schemas/step-plan.schemas';
+
+// Every way oxidative colour could once be booked without a valid skin test, tried at the API. The rule: a test
+// counts as passed only when read negative, at least 48 hours before the colour (Cosmetics Europe Recommendation
+// No 27, 2023: the allergy alert test is read 48 hours after it is applied), and a positive reaction at any time
+// blocks oxidative colour until an owner records a clearance.
+
+let t: TestApp;
+let salon: SalonFixture;
+let slug: string;
+let ana: UserFixture;
+let desk$: Awaited<ReturnType<typeof signedInAgent>>;
+let owner$: Awaited<ReturnType<typeof signedInAgent>>;
+let rootColour: string; // an oxidative colour service whose "needs skin test" box is off (the box once decided)
+let blowDry: string;
+const tuesday = futureWeekday(2, 2);
+const HOUR = 3_600_000;
+const DAY = 24 * HOUR;
+
+const oxidative: StepPlan = {
+  sittings: [{ steps: [
+    { kind: 'hands_on', label: 'Apply colour to regrowth', product: 'oxidative_colour', minutes: 30 },
+    { kind: 'developing', label: 'Colour develops', product: 'oxidative_colour', minMinutes: 30, maxMinutes: 40 },
+    { kind: 'basin', label: 'Rinse', product: 'none', minutes: 15 },
+  ] }],
+};
+const dryOnly: StepPlan = { sittings: [{ steps: [{ kind: 'hands_on', label: 'Blow-dry', product: 'none', minutes: 30 }] }] };
+
+beforeAll(async () => {
+  t = await startTestApp();
+  const db = t.testDb.db;
+  salon = await insertSalon(db, { chairs: 3, basins: 1 });
+  slug = (await db.selectFrom('salons').select('slug').where('id', '=', salon.salonId).executeTakeFirstOrThrow()).slug;
+  ana = await insertUser(db, salon.salonId, 'stylist', { skills: ['colour', 'finish'], hours: { rrule: 'FREQ=WEEKLY;BYDAY=TU,WE,TH,FR,SA', start: '09:00', end: '21:00' } });
+  const desk = await insertUser(db, salon.salonId, 'front_desk');
+  const owner = await insertUser(db, salon.salonId, 'owner');
+  rootColour = await insertPlannedService(db, salon.salonId, { name: 'Root colour', plan: oxidative, needsSkinTest: false, depositCents: 0 });
+  blowDry = await insertPlannedService(db, salon.salonId, { name: 'Blow-dry', plan: dryOnly, skill: 'finish', category: 'treatment', needsSkinTest: false, depositCents: 0 });
+  await db.updateTable('services').set({ online_bookable: true }).where('id', '=', rootColour).execute();
+  desk$ = await signedInAgent(t.app, desk.email, desk.password);
+  owner$ = await signedInAgent(t.app, owner.email, owner.password);
+});
+afterAll(() => t.close());
+
+type Test = { appliedDaysAgo: number; result: 'pending' | 'negative' | 'positive' | 'unclear'; recordedDaysAgo?: number };
+
+/** A new client with these skin tests on record (inserted as the desk would have recorded them). */
+async function clientWith(tests: Test[]) {
+  const client = await insertUser(t.testDb.db, salon.salonId, 'client');
+  for (const test of tests) {
+    const appliedAt = new Date(Date.now() - test.appliedDaysAgo * DAY);
+    const readAt = test.result === 'pending' ? null : new Date(appliedAt.getTime() + 48 * HOUR);
+    const createdAt = new Date(Date.now() - (test.recordedDaysAgo ?? Math.max(0, test.appliedDaysAgo - 2)) * DAY);
+    await t.testDb.db.insertInto('skin_tests').values({ salon_id: salon.salonId, client_id: client.clientId!, applied_at: appliedAt, read_at: readAt, result: test.result, recorded_by: null, created_at: createdAt }).execute();
+  }
+  return client;
+}
+
+let keys = 0;
+const book = (clientId: string, serviceId: string, stepPlan: StepPlan, start = localIso(tuesday, '10:00'), extra: object = {}) =>
+  desk$.write('post', apiPaths.bookings, { clientId, serviceId, stepPlan, stylistId: ana.staffId, start, idempotencyKey: `doors-${++keys}-${Date.now()}`, ...extra });
+
+function expectRefused(res: { status: number; body: { error: { code: string; message: string } } }, why: RegExp) {
+  expect(res.status).toBe(409);
+  expect(res.body.error.code).toBe('SKIN_TEST');
+  expect(res.body.error.message).toMatch(why);
+}
+
+describe('the ways round, each refused with the reason', () => {
+  it('a positive test followed by a newer test that is merely applied, or booked', async () => {
+    const client = await clientWith([{ appliedDaysAgo: 60, result: 'positive' }, { appliedDaysAgo: 2, result: 'pending', recordedDaysAgo: 2 }]);
+    expectRefused(await book(client.clientId!, rootColour, oxidative), /showed a reaction/);
+    const options = await desk$.write('post', apiPaths.bookingOptions, { clientId: client.clientId, serviceId: rootColour, stepPlan: oxidative, stylistId: null, earliestDate: tuesday });
+    expect(options.body.skinTest).toMatchObject({ ok: false, status: 'blocked' });
+    expect(options.body.options).toEqual([]);
+  });
+
+  it('a test applied five months ago and never read', async () => {
+    const client = await clientWith([{ appliedDaysAgo: 150, result: 'pending', recordedDaysAgo: 150 }]);
+    expectRefused(await book(client.clientId!, rootColour, oxidative), /never read/);
+  });
+
+  it('no test at all, with the colour booked under a service whose box is off, as another service, or in a desk-edited plan', async () => {
+    const client = await clientWith([]);
+    expectRefused(await book(client.clientId!, rootColour, oxidative), /No skin test is on record/);
+    // The colour steps booked under a blow-dry (as a quote booked as another service would be).
+    expectRefused(await book(client.clientId!, blowDry, oxidative), /No skin test is on record/);
+    // The desk edits a blow-dry's plan and adds an oxidative toner step.
+    const edited: StepPlan = { sittings: [{ steps: [{ kind: 'hands_on', label: 'Gloss', product: 'toner_oxidative', minutes: 20 }, ...dryOnly.sittings[0].steps] }] };
+    expectRefused(await book(client.clientId!, blowDry, edited), /No skin test is on record/);
+    // The same blow-dry without colour books as before.
+    expect((await book(client.clientId!, blowDry, dryOnly, localIso(tuesday, '16:00'))).status).toBe(201);
+  });
+
+  it('a positive and an unread test applied at the same moment, in either recorded order', async () => {
+    for (const order of [[0, 1], [1, 0]]) {
+      const tests: Test[] = [{ appliedDaysAgo: 3, result: 'positive', recordedDaysAgo: 1 }, { appliedDaysAgo: 3, result: 'pending', recordedDaysAgo: 3 }];
+      const client = await clientWith(order.map((i) => tests[i]));
+      expectRefused(await book(client.clientId!, rootColour, oxidative), /showed a reaction/);
+    }
+  });
+
+  it('the salon cannot set a lead time under 48 hours', async () => {
+    const settings = (await owner$.get(setupPaths.salon)).body;
+    for (const hours of [0, 24, 47]) {
+      const res = await owner$.write('put', setupPaths.salon, { ...settings, skinTestLeadHours: hours });
+      expect(res.status).toBe(400);
+      expect(res.body.error.fields.skinTestLeadHours).toMatch(/At least 48 hours/);
+    }
+    expect((await t.testDb.db.selectFrom('salons').select('skin_test_lead_hours').where('id', '=', salon.salonId).executeTakeFirstOrThrow()).skin_test_lead_hours).toBe(48);
+  });
+
+  it('a test applied 40 hours before the colour is refused; 48 hours lets the desk book it as waiting on the test', async () => {
+    const client = await clientWith([{ appliedDaysAgo: 1, result: 'pending', recordedDaysAgo: 1 }]);
+    const applied = (await t.testDb.db.selectFrom('skin_tests').select('applied_at').where('client_id', '=', client.clientId!).executeTakeFirstOrThrow()).applied_at;
+    const tooSoon = new Date(applied.getTime() + 40 * HOUR);
+    // A start on the salon's grid the day after tomorrow at the earliest; 40 h after the test is before that.
+    const later = localIso(futureWeekday(3, 2), '10:00');
+    expect(tooSoon.getTime()).toBeLessThan(Date.parse(later));
+    const res = await book(client.clientId!, rootColour, oxidative, later);
+    expect(res.status).toBe(201);
+  });
+});
+
+describe('other doors use the same rule', () => {
+  it('a client with a negative test read 10 days ago still books colour', async () => {
+    const client = await clientWith([{ appliedDaysAgo: 10, result: 'negative' }]);
+    expect((await book(client.clientId!, rootColour, oxidative, localIso(tuesday, '13:00'))).status).toBe(201);
+  });
+
+  it('a move to a date after the test stops being valid is refused', async () => {
+    const client = await clientWith([{ appliedDaysAgo: 170, result: 'negative' }]);
+    // Valid until 182 days after it was applied: 12 days from now. Booked within, then moved 4 weeks on.
+    const inside = localIso(futureWeekday(4, 1), '10:00');
+    const booked = await book(client.clientId!, rootColour, oxidative, inside);
+    expect(booked.status).toBe(201);
+    const moved = await desk$.write('post', apiPaths.moveSitting(booked.body.id), { sitting: 1, start: localIso(futureWeekday(4, 5), '10:00') });
+    expectRefused(moved, /after the skin test stops being valid/);
+  });
+
+  it('a window fill with an oxidative toner for a walk-in is refused; the same fill without colour is not', async () => {
+    const toner = await insertPlannedService(t.testDb.db, salon.salonId, {
+      name: 'Gloss with developer', needsSkinTest: false,
+      plan: { sittings: [{ steps: [{ kind: 'hands_on', label: 'Apply gloss', product: 'toner_oxidative', minutes: 10 }, { kind: 'developing', label: 'Gloss develops', product: 'toner_oxidative', minMinutes: 10, maxMinutes: 20 }, { kind: 'basin', label: 'Rinse', product: 'none', minutes: 10 }] }] },
+    });
+    const fill = (serviceId: string, key: string) => desk$.write('post', '/api/windows/fill', { stylistId: ana.staffId, serviceId, start: localIso(tuesday, '18:00'), walkIn: { name: 'Walk-in Wren' }, idempotencyKey: key });
+    expectRefused(await fill(toner, 'doors-fill-1'), /No skin test is on record/);
+    expect((await fill(blowDry, 'doors-fill-2')).status).toBe(201);
+  });
+
+  it('online: a hold for colour cannot be claimed on an unread test (waiting is for the desk only)', async () => {
+    const client = await clientWith([{ appliedDaysAgo: 2, result: 'pending', recordedDaysAgo: 2 }]);
+    const visitor = await anonymousAgent(t.app);
+    const held = await visitor.write('post', apiPaths.holds, { salonSlug: slug, serviceId: rootColour, stylistId: ana.staffId, start: localIso(futureWeekday(5, 3), '10:00') }, { 'X-Forwarded-For': '10.9.0.1' });
+    expect(held.status).toBe(201);
+    const c = await signedInAgent(t.app, client.email, client.password);
+    const claim = await c.write('post', apiPaths.claimHold(held.body.holdId), { secret: held.body.holdSecret });
+    expectRefused(claim, /read negative first/);
+  });
+});
