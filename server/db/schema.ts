@@ -212,6 +212,11 @@ export interface SkinTestsTable {
   product: Generated<string>;
   result: 'pending' | 'negative' | 'positive' | 'unclear';
   recorded_by: string | null;
+  /** Copied from users by trigger on insert; kept when the account is removed (migrations/20261205T0210). */
+  recorded_by_name: string | null;
+  /** Who recorded the reading; the name is copied by trigger like recorded_by_name. */
+  read_by: string | null;
+  read_by_name: string | null;
   notes: Generated<string>;
   created_at: DefaultTimestamp;
 }
@@ -394,6 +399,8 @@ export interface StrandTestsTable {
   notes: Generated<string>;
   photo_id: string | null;
   recorded_by: string | null;
+  /** Copied from users by trigger on insert; kept when the account is removed (migrations/20261205T0210). */
+  recorded_by_name: string | null;
   created_at: DefaultTimestamp;
 }
 
