@@ -225,8 +225,15 @@ export interface SkinTestsTable {
   product: Generated<string>;
   result: 'pending' | 'negative' | 'positive' | 'unclear';
   recorded_by: string | null;
+  /** Copied from users by trigger on insert; kept when the account is removed (migrations/20261205T0210). */
+  recorded_by_name: string | null;
+  /** Who recorded the reading; the name is copied by trigger like recorded_by_name. */
+  read_by: string | null;
+  read_by_name: string | null;
   notes: Generated<string>;
   created_at: DefaultTimestamp;
+  /** When the reading was written down; set by trigger (migrations/20261205T0300). */
+  read_recorded_at: ColumnType<Date | null, Date | null | undefined, Date | null>;
 }
 
 export interface StandbyEntriesTable {
@@ -408,6 +415,8 @@ export interface StrandTestsTable {
   notes: Generated<string>;
   photo_id: string | null;
   recorded_by: string | null;
+  /** Copied from users by trigger on insert; kept when the account is removed (migrations/20261205T0210). */
+  recorded_by_name: string | null;
   created_at: DefaultTimestamp;
 }
 

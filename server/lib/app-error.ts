@@ -14,3 +14,5 @@ export class AppError extends Error {
 
 export const notFound = (what = 'That record') => new AppError('NOT_FOUND', 404, `${what} was not found.`);
 export const forbidden = () => new AppError('FORBIDDEN', 403, 'Your role may not do this.');
+/** A 400 whose message names one field, shown beside that field in the form. */
+export const invalidField = (field: string, message: string) => new AppError('VALIDATION_FAILED', 400, message, { [field]: message });

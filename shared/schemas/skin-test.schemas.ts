@@ -2,6 +2,11 @@ import { z } from 'zod';
 import { IdSchema, InstantInputSchema, InstantSchema } from './common.schemas';
 
 export const SkinTestResultSchema = z.enum(['pending', 'negative', 'positive', 'unclear']);
+/** What a reading can find; `pending` is the state before it. */
+export const SkinTestReadingResultSchema = SkinTestResultSchema.exclude(['pending']);
+
+/** Shared by the form's check and the server's check of a reading against the stored applied time. */
+export const READ_BEFORE_APPLIED = 'A test cannot be read before it was applied';
 
 export const RecordSkinTestSchema = z
   .object({
@@ -12,7 +17,19 @@ export const RecordSkinTestSchema = z
     notes: z.string().max(1000).default(''),
   })
   .strict()
-  .refine((t) => (t.result === 'pending') === (t.readAt === null), { message: 'A read result needs the time it was read', path: ['readAt'] });
+  .refine((t) => (t.result === 'pending') === (t.readAt === null), { message: 'A read result needs the time it was read', path: ['readAt'] })
+  .refine((t) => t.readAt === null || Date.parse(t.readAt) >= Date.parse(t.appliedAt), { message: READ_BEFORE_APPLIED, path: ['readAt'] });
+
+/** The reading of a test recorded as applied and not yet read; the server checks it against the applied time and the clock. */
+export const RecordSkinTestReadingSchema = z
+  .object({
+    readAt: InstantInputSchema,
+    result: SkinTestReadingResultSchema,
+  })
+  .strict();
+export type RecordSkinTestReading = z.infer<typeof RecordSkinTestReadingSchema>;
+
+export const SkinTestReadingParamsSchema = z.object({ id: IdSchema, testId: IdSchema }).strict();
 
 export const SkinTestSchema = z.object({
   id: IdSchema,
@@ -21,7 +38,10 @@ export const SkinTestSchema = z.object({
   result: SkinTestResultSchema,
   product: z.string(),
   notes: z.string(),
-  /** Who recorded it (null when recorded by the demo loader or a removed account). */
+  /** Who recorded it, as named when they did (null when recorded by the demo loader). */
   recordedByName: z.string().nullable(),
+  /** Who recorded the reading, as named then (null while pending or for loaded records). */
+  readByName: z.string().nullable(),
 });
+export type SkinTest = z.infer<typeof SkinTestSchema>;
 export const SkinTestListSchema = z.object({ tests: z.array(SkinTestSchema) });

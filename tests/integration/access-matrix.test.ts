@@ -31,7 +31,7 @@ let t: TestApp;
 let routes: DocumentedRoute[];
 const agents = {} as Record<Who, Awaited<ReturnType<typeof anonymousAgent>>>;
 /** Client A's records: the ids routes are called with, and what must never reach another caller. */
-const mine = {} as { clientId: string; bookingId: string; photoId: string; standbyId: string; slug: string; email: string };
+const mine = {} as { clientId: string; bookingId: string; photoId: string; standbyId: string; skinTestId: string; slug: string; email: string };
 
 beforeAll(async () => {
   t = await startTestApp();
@@ -63,6 +63,13 @@ beforeAll(async () => {
     .returning('id')
     .executeTakeFirstOrThrow();
   mine.standbyId = standby.id;
+  // A skin test of client A applied and not read yet: the {testId} of the reading route.
+  const skinTest = await db
+    .insertInto('skin_tests')
+    .values({ salon_id: salon.salonId, client_id: mine.clientId, applied_at: new Date(Date.now() - 49 * 3_600_000), read_at: null, result: 'pending', recorded_by: users.stylist.id })
+    .returning('id')
+    .executeTakeFirstOrThrow();
+  mine.skinTestId = skinTest.id;
   mine.slug = (await db.selectFrom('salons').select('slug').where('id', '=', salon.salonId).executeTakeFirstOrThrow()).slug;
 
   agents.anonymous = await anonymousAgent(t.app);
@@ -83,7 +90,7 @@ afterAll(() => t.close());
 function pathFor(route: DocumentedRoute): string {
   const id = /\/(bookings|clients|photos|standby)\/\{id\}/.exec(route.path)?.[1];
   const byKind: Record<string, string> = { bookings: mine.bookingId, clients: mine.clientId, photos: mine.photoId, standby: mine.standbyId };
-  return fillPath(route.path, { ...(id ? { id: byKind[id] } : {}), slug: mine.slug });
+  return fillPath(route.path, { ...(id ? { id: byKind[id] } : {}), slug: mine.slug, testId: mine.skinTestId });
 }
 
 async function send(who: Who, route: DocumentedRoute, query = '') {

@@ -24,9 +24,9 @@ beforeAll(async () => {
   t = await startTestApp();
   const db = t.testDb.db;
   await loadDemoSalon(db, new Date());
-  const pick = async (table: 'bookings' | 'clients' | 'services' | 'staff' | 'chairs' | 'basins' | 'standby_entries') =>
+  const pick = async (table: 'bookings' | 'clients' | 'services' | 'staff' | 'chairs' | 'basins' | 'standby_entries' | 'skin_tests') =>
     (await db.selectFrom(table).select('id').limit(4).execute()).map((r) => r.id);
-  ids = (await Promise.all((['bookings', 'clients', 'services', 'staff', 'chairs', 'basins', 'standby_entries'] as const).map(pick))).flat();
+  ids = (await Promise.all((['bookings', 'clients', 'services', 'staff', 'chairs', 'basins', 'standby_entries', 'skin_tests'] as const).map(pick))).flat();
   owner = await signedInAgent(t.app, 'owner@demo.test', DEMO_PASSWORD);
   routes = (await documentedRoutes(t.app)).routes;
 });

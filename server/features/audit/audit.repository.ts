@@ -4,14 +4,14 @@ import type { Db } from '../../db/database';
 export interface AuditInput {
   salonId: string;
   actorUserId: string | null;
-  entity: 'booking' | 'standby_entry' | 'window_offer' | 'salon' | 'service' | 'staff' | 'chair' | 'basin';
+  entity: 'booking' | 'standby_entry' | 'window_offer' | 'salon' | 'service' | 'staff' | 'chair' | 'basin' | 'skin_test' | 'strand_test';
   entityId: string;
   action: string;
   before?: unknown;
   after?: unknown;
 }
 
-/** Every change to a booking writes one entry: who, when, what, and the record before and after. */
+/** Every change to a booking, a test record or the salon's set-up writes one entry: who, when, what, and the record before and after. */
 export async function writeAudit(db: Db, entry: AuditInput): Promise<void> {
   await db
     .insertInto('audit_log')

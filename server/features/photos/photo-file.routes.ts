@@ -6,7 +6,8 @@ import { apiRoute } from '../../lib/api-route';
 import { notFound } from '../../lib/app-error';
 import type { Db } from '../../db/database';
 import { deletePhoto, findPhoto } from './photos.repository';
-
+import { writeAudit } from '../audit/audit.repository';
+import { strandTestsShowingPhoto } from '../strand-tests/strand-tests.repository';
 
 /** The photo, if this user may see it: their own as a client, or their salon's as staff; else 404. */
 async function visiblePhoto(db: Db, user: SessionUser, id: string) {
@@ -40,7 +41,13 @@ export function registerPhotoFileRoutes({ table, db, storage }: AppDeps): void {
     async ({ user, params }) => {
       const photo = await visiblePhoto(db, user, params.id);
       // Row first: if removing the file then fails, an orphan file is harmless; a row without a file is not.
-      await deletePhoto(db, photo.id);
+      // A strand test that showed the photo stays on record without it, and its audit log says so.
+      await db.transaction().execute(async (trx) => {
+        for (const test of await strandTestsShowingPhoto(trx, photo.id)) {
+          await writeAudit(trx, { salonId: test.salonId, actorUserId: user.id, entity: 'strand_test', entityId: test.id, action: 'photo removed', before: { photoId: photo.id }, after: { photoId: null } });
+        }
+        await deletePhoto(trx, photo.id);
+      });
       await storage.delete(photo.storage_key);
     },
   );

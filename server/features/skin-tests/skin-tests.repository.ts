@@ -2,15 +2,24 @@ import { sql } from 'kysely';
 import type { Db } from '../../db/database';
 import type { SkinTestRecord } from '../../../shared/rules/skin-test-rule';
 
-export function listSkinTests(db: Db, salonId: string, clientId: string) {
-  return db
+// The names are the ones stored with the record (copied by trigger when it was written), so a removed
+// account's tests still say who recorded and read them.
+const skinTests = (db: Db, salonId: string, clientId: string) =>
+  db
     .selectFrom('skin_tests as t')
-    .leftJoin('users as u', 'u.id', 't.recorded_by')
-    .select(['t.id', 't.applied_at', 't.read_at', 't.result', 't.product', 't.notes', 'u.name as recorded_by_name'])
+    .select(['t.id', 't.applied_at', 't.read_at', 't.result', 't.product', 't.notes', 't.recorded_by_name', 't.read_by_name'])
     .where('t.salon_id', '=', salonId)
-    .where('t.client_id', '=', clientId)
-    .orderBy('t.applied_at', 'desc')
-    .execute();
+    .where('t.client_id', '=', clientId);
+
+export function listSkinTests(db: Db, salonId: string, clientId: string) {
+  return skinTests(db, salonId, clientId).orderBy('t.applied_at', 'desc').execute();
+}
+export type SkinTestRow = Awaited<ReturnType<typeof listSkinTests>>[number];
+
+/** One of the client's tests in this salon, or undefined; `lock` holds it for the rest of the transaction. */
+export function findSkinTest(db: Db, salonId: string, clientId: string, id: string, lock = false): Promise<SkinTestRow | undefined> {
+  const query = skinTests(db, salonId, clientId).where('t.id', '=', id);
+  return (lock ? query.forUpdate() : query).executeTakeFirst();
 }
 
 export async function insertSkinTest(
@@ -19,10 +28,25 @@ export async function insertSkinTest(
 ) {
   return db
     .insertInto('skin_tests')
-    .values({ salon_id: t.salonId, client_id: t.clientId, applied_at: t.appliedAt, read_at: t.readAt, result: t.result, product: t.product, notes: t.notes, recorded_by: t.recordedBy })
+    .values({
+      salon_id: t.salonId, client_id: t.clientId, applied_at: t.appliedAt, read_at: t.readAt, result: t.result, product: t.product, notes: t.notes,
+      recorded_by: t.recordedBy, read_by: t.readAt ? t.recordedBy : null,
+    })
     .returning('id')
     .executeTakeFirstOrThrow();
 }
+
+/** Stores the reading of a pending test; false when the test is no longer pending (read meanwhile). */
+export async function setSkinTestReading(db: Db, id: string, r: { readAt: Date; result: Exclude<SkinTestRecord['result'], 'pending'>; readBy: string }): Promise<boolean> {
+  const updated = await db
+    .updateTable('skin_tests')
+    .set({ read_at: r.readAt, result: r.result, read_by: r.readBy })
+    .where('id', '=', id)
+    .where('result', '=', 'pending')
+    .executeTakeFirst();
+  return Number(updated.numUpdatedRows) === 1;
+}
+
 
 /**
  * What the skin-test rule looks at: every recorded test, and skin-test appointments in the book that no recorded
@@ -31,7 +55,7 @@ export async function insertSkinTest(
  */
 export async function skinTestRecords(db: Db, clientId: string): Promise<SkinTestRecord[]> {
   const [tests, appointments] = await Promise.all([
-    db.selectFrom('skin_tests').select(['applied_at', 'result', 'created_at']).where('client_id', '=', clientId).execute(),
+    db.selectFrom('skin_tests').select(['applied_at', 'result', 'created_at', 'read_recorded_at']).where('client_id', '=', clientId).execute(),
     db
       .selectFrom('bookings as b')
       .innerJoin('services as s', 's.id', 'b.service_id')
@@ -44,7 +68,8 @@ export async function skinTestRecords(db: Db, clientId: string): Promise<SkinTes
   ]);
   const recordedDays = new Set(tests.map((t) => t.applied_at.toISOString().slice(0, 10)));
   return [
-    ...tests.map((t) => ({ appliedAt: t.applied_at, recordedAt: t.created_at, result: t.result })),
+    // A reading counts from when it was written down: a clearance must come after the reaction was known.
+    ...tests.map((t) => ({ appliedAt: t.applied_at, recordedAt: t.read_recorded_at ?? t.created_at, result: t.result })),
     ...appointments
       .filter((a) => !recordedDays.has(a.start.toISOString().slice(0, 10)))
       .map((a) => ({ appliedAt: a.start, recordedAt: a.created_at, result: 'pending' as const, booked: true })),

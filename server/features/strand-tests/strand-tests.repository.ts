@@ -1,11 +1,11 @@
 import type { Db } from '../../db/database';
 import type { RecordStrandTest } from '../../../shared/schemas/strand-test.schemas';
 
+/** The recorder's name is the one stored with the record, so it outlives their account. */
 export function listStrandTests(db: Db, salonId: string, clientId: string) {
   return db
     .selectFrom('strand_tests as t')
-    .leftJoin('users as u', 'u.id', 't.recorded_by')
-    .select(['t.id', 't.tested_at', 't.tested', 't.product_type', 't.developer_percent', 't.minutes', 't.result', 't.notes', 't.photo_id', 'u.name as recorded_by_name'])
+    .select(['t.id', 't.tested_at', 't.tested', 't.product_type', 't.developer_percent', 't.minutes', 't.result', 't.notes', 't.photo_id', 't.recorded_by_name'])
     .where('t.salon_id', '=', salonId)
     .where('t.client_id', '=', clientId)
     .orderBy('t.tested_at', 'desc')
@@ -23,4 +23,10 @@ export async function insertStrandTest(db: Db, t: RecordStrandTest & { salonId: 
     .returning('id')
     .executeTakeFirstOrThrow();
   return id;
+}
+
+/** Strand tests that show this photo: removing the photo unlinks it from them (the test itself stays). */
+export async function strandTestsShowingPhoto(db: Db, photoId: string): Promise<{ id: string; salonId: string }[]> {
+  const rows = await db.selectFrom('strand_tests').select(['id', 'salon_id']).where('photo_id', '=', photoId).forUpdate().execute();
+  return rows.map((r) => ({ id: r.id, salonId: r.salon_id }));
 }

@@ -3,13 +3,12 @@ import { RecordStrandTestSchema, StrandTestListSchema, StrandTestSchema, type St
 import type { AppDeps } from '../../app-deps';
 import { STAFF } from '../../auth/require-access';
 import { apiRoute } from '../../lib/api-route';
-import { AppError, notFound } from '../../lib/app-error';
+import { invalidField, notFound } from '../../lib/app-error';
+import { writeAudit } from '../audit/audit.repository';
 import { findClient } from '../clients/clients.repository';
 import { checkStrength } from '../mix-logs/mix-logs.service';
 import { clientPhotoIds } from '../consultations/consultations.repository';
 import { insertStrandTest, listStrandTests, type StrandTestRow } from './strand-tests.repository';
-
-const invalid = (field: string, message: string) => new AppError('VALIDATION_FAILED', 400, message, { [field]: message });
 
 const toView = (r: StrandTestRow): StrandTest => ({
   id: r.id, testedAt: r.tested_at.toISOString(), tested: r.tested, productType: r.product_type,
@@ -35,9 +34,13 @@ export function registerStrandTestRoutes({ table, db }: AppDeps): void {
         const salon = await db.selectFrom('salons').select('max_developer_percent').where('id', '=', user.salonId).executeTakeFirstOrThrow();
         checkStrength(body.developerPercent, Number(salon.max_developer_percent), 'developerPercent');
       }
-      if (body.photoId && (await clientPhotoIds(db, params.id, [body.photoId])).length === 0) throw invalid('photoId', 'Pick one of this client’s photos.');
-      const id = await insertStrandTest(db, { ...body, salonId: user.salonId, clientId: params.id, recordedBy: user.id });
-      return toView((await listStrandTests(db, user.salonId, params.id)).find((t) => t.id === id)!);
+      if (body.photoId && (await clientPhotoIds(db, params.id, [body.photoId])).length === 0) throw invalidField('photoId', 'Pick one of this client’s photos.');
+      return db.transaction().execute(async (trx) => {
+        const id = await insertStrandTest(trx, { ...body, salonId: user.salonId, clientId: params.id, recordedBy: user.id });
+        const test = toView((await listStrandTests(trx, user.salonId, params.id)).find((t) => t.id === id)!);
+        await writeAudit(trx, { salonId: user.salonId, actorUserId: user.id, entity: 'strand_test', entityId: id, action: 'recorded', after: test });
+        return test;
+      });
     },
   );
 }

@@ -1,7 +1,7 @@
 import { queryOptions, useMutation, useQueryClient } from '@tanstack/react-query';
 import type { z } from 'zod';
 import { apiPaths } from '../../../../shared/api/api-paths';
-import { RecordSkinTestSchema, SkinTestListSchema, SkinTestSchema } from '../../../../shared/schemas/skin-test.schemas';
+import { RecordSkinTestSchema, SkinTestListSchema, SkinTestSchema, type RecordSkinTestReading } from '../../../../shared/schemas/skin-test.schemas';
 import { StrandTestListSchema, StrandTestSchema, type RecordStrandTest } from '../../../../shared/schemas/strand-test.schemas';
 import { apiGet, apiWrite } from '../../../lib/api-client';
 
@@ -19,6 +19,15 @@ export function useRecordSkinTest(clientId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (body: z.input<typeof RecordSkinTestSchema>) => apiWrite('POST', apiPaths.skinTests(clientId), body, SkinTestSchema),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: testRecordQueries.skin(clientId).queryKey }),
+  });
+}
+
+/** Records the reading of one pending skin test. */
+export function useRecordSkinTestReading(clientId: string, testId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (body: RecordSkinTestReading) => apiWrite('POST', apiPaths.skinTestReading(clientId, testId), body, SkinTestSchema),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: testRecordQueries.skin(clientId).queryKey }),
   });
 }

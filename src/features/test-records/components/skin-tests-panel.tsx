@@ -13,12 +13,13 @@ import { fieldError, showServerErrors } from '../../../lib/form-errors';
 import { formatDay, formatTime } from '../../../lib/time';
 import { testRecordQueries, useRecordSkinTest } from '../api/test-record-queries';
 import { InstantField } from './instant-field';
+import { SkinTestReadingForm } from './skin-test-reading-form';
+import { skinTestResultLabels } from './skin-test-result-labels';
 
 type Input = z.input<typeof RecordSkinTestSchema>;
-const resultLabels = { pending: 'Applied, not read yet', negative: 'Negative (no reaction)', positive: 'Positive (reaction)', unclear: 'Unclear' } as const;
-const resultOptions = Object.entries(resultLabels).map(([value, label]) => ({ value, label }));
+const resultOptions = Object.entries(skinTestResultLabels).map(([value, label]) => ({ value, label }));
 
-/** The client's skin tests with who recorded them, and the form to record one. */
+/** The client's skin tests with who recorded and read them, the reading of a pending one, and the form to record one. */
 export function SkinTestsPanel({ clientId, zone }: { clientId: string; zone: string }) {
   const list = useQuery(testRecordQueries.skin(clientId));
   const record = useRecordSkinTest(clientId);
@@ -32,7 +33,7 @@ export function SkinTestsPanel({ clientId, zone }: { clientId: string; zone: str
     <div className="flex flex-col gap-4">
       {latest && (latest.result === 'positive' || latest.result === 'unclear') && (
         <Notice tone="danger" title={`The latest skin test was ${latest.result}: oxidative colour cannot be booked.`}>
-          {latest.result === 'unclear' ? 'Repeat the test before any oxidative colour.' : 'Do not colour with oxidative products; follow local regulations and licensed practice.'}
+          {latest.result === 'unclear' ? 'Repeat the test before any oxidative colour.' : 'Do not colour with oxidative products; follow local regulations and licensed practice.'} Colour bookings made before this result still stand: check the bookings below.
         </Notice>
       )}
       {list.isError && <FormAlert>{list.error.message}</FormAlert>}
@@ -40,10 +41,11 @@ export function SkinTestsPanel({ clientId, zone }: { clientId: string; zone: str
       <ul className="flex flex-col gap-2" aria-label="Skin tests">
         {list.data?.tests.map((t) => (
           <li key={t.id} className="rounded-lg bg-linen px-3 py-2">
-            <span className="font-bold">{resultLabels[t.result]}</span> · applied {formatDay(t.appliedAt, zone)} {formatTime(t.appliedAt, zone)}
-            {t.readAt && ` · read ${formatDay(t.readAt, zone)} ${formatTime(t.readAt, zone)}`}
-            {t.product && ` · ${t.product}`} · by {t.recordedByName ?? 'the salon'}
+            <span className="font-bold">{skinTestResultLabels[t.result]}</span> · applied {formatDay(t.appliedAt, zone)} {formatTime(t.appliedAt, zone)}
+            {t.product && ` · ${t.product}`} · recorded by {t.recordedByName ?? 'the salon'}
+            {t.readAt && ` · read ${formatDay(t.readAt, zone)} ${formatTime(t.readAt, zone)} by ${t.readByName ?? 'the salon'}`}
             {t.notes && <span className="block text-sm">{t.notes}</span>}
+            {t.result === 'pending' && <SkinTestReadingForm clientId={clientId} test={t} zone={zone} />}
           </li>
         ))}
       </ul>
