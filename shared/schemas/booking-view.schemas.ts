@@ -36,6 +36,11 @@ export const BookingViewSchema = z.object({
   depositOutcome: z.enum(['kept', 'refunded']).nullable(),
   cancelReason: z.string().nullable(),
   sittings: z.array(SittingViewSchema),
+  /**
+   * The skin-test footing: `waiting` on an unread test (the colour cannot start until it reads negative), or
+   * `blocked` when the client's record no longer allows the colour (cancel or change the plan).
+   */
+  skinTest: z.object({ status: z.enum(['not_needed', 'passed', 'waiting', 'blocked']), message: z.string() }),
 });
 export type BookingView = z.infer<typeof BookingViewSchema>;
 

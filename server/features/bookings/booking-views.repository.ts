@@ -5,6 +5,8 @@ import type { Db } from '../../db/database';
 import type { BookingView } from '../../../shared/schemas/booking-view.schemas';
 import type { BookingStatus } from '../../../shared/schemas/common.schemas';
 import type { StepPlan } from '../../../shared/schemas/step-plan.schemas';
+import type { Salon } from '../../../shared/schemas/salon.schemas';
+import { bookingSkinTestStates } from '../skin-tests/skin-test-check.service';
 
 export interface BookingFilter {
   salonId: string;
@@ -26,7 +28,9 @@ export async function loadBookingViews(db: Db, filter: BookingFilter, timeZone: 
     .innerJoin('clients as c', 'c.id', 'b.client_id')
     .innerJoin('services as s', 's.id', 'b.service_id')
     .innerJoin('staff as st', 'st.id', 'b.stylist_id')
-    .select(['b.id', 'b.status', 'b.price_cents', 'b.deposit_cents', 'b.deposit_outcome', 'b.cancel_reason', 'b.step_plan', 'c.id as clientId', 'c.name as clientName', 's.id as serviceId', 's.name as serviceName', 'st.id as stylistId', 'st.display_name as stylistName'])
+    .innerJoin('salons as sa', 'sa.id', 'b.salon_id')
+    .select(['b.id', 'b.status', 'b.price_cents', 'b.deposit_cents', 'b.deposit_outcome', 'b.cancel_reason', 'b.step_plan', 'c.id as clientId', 'c.name as clientName', 's.id as serviceId', 's.name as serviceName', 's.needs_skin_test', 'st.id as stylistId', 'st.display_name as stylistName'])
+    .select(['sa.skin_test_lead_hours', 'sa.skin_test_validity_days', 'sa.skin_test_families'])
     .where('b.salon_id', '=', filter.salonId)
     .where('b.status', 'in', filter.statuses ?? LIVE);
   if (filter.stylistId) query = query.where('b.stylist_id', '=', filter.stylistId);
@@ -45,7 +49,12 @@ export async function loadBookingViews(db: Db, filter: BookingFilter, timeZone: 
   const iso = isoInZone(timeZone, filter);
   const sittingsOf = groupBy(sittings, (s) => s.booking_id);
   const stepsOf = groupBy(steps, (st) => st.sitting_id);
-  const views = bookings.map((b): BookingView => {
+  const first = bookings[0];
+  const rule = { timeZone, skinTestLeadHours: first.skin_test_lead_hours, skinTestValidityDays: first.skin_test_validity_days, skinTestFamilies: first.skin_test_families as Salon['skinTestFamilies'] };
+  const states = await bookingSkinTestStates(db, rule, bookings.map((b) => ({
+    clientId: b.clientId, status: b.status, plan: b.step_plan as StepPlan, serviceAsks: b.needs_skin_test, starts: (sittingsOf.get(b.id) ?? []).map((s) => s.start),
+  })), new Date());
+  const views = bookings.map((b, index): BookingView => {
     const own = sittingsOf.get(b.id) ?? [];
     const plan = b.step_plan as StepPlan;
     return {
@@ -58,6 +67,7 @@ export async function loadBookingViews(db: Db, filter: BookingFilter, timeZone: 
       depositCents: b.deposit_cents,
       depositOutcome: b.deposit_outcome,
       cancelReason: b.cancel_reason,
+      skinTest: states[index],
       sittings: own.map((s) => ({
         seq: s.seq,
         of: own.length,

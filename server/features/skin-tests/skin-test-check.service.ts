@@ -5,7 +5,7 @@ import type { StepPlan } from '../../../shared/schemas/step-plan.schemas';
 import { checkStarts, skinTestVerdict, type SkinTestVerdict } from '../../../shared/rules/skin-test-rule';
 import { planNeedsSkinTest, testedFamilies } from '../../../shared/rules/skin-test-need';
 import { AppError } from '../../lib/app-error';
-import { skinTestClearances, skinTestRecords } from './skin-tests.repository';
+import { skinTestClearances, skinTestClearancesOf, skinTestRecords, skinTestRecordsOf } from './skin-tests.repository';
 
 type SalonRule = Pick<Salon, 'timeZone' | 'skinTestLeadHours' | 'skinTestValidityDays' | 'skinTestFamilies'>;
 
@@ -48,4 +48,39 @@ export async function assertSkinTestAllows(db: Db, salon: SalonRule, door: SkinT
     throw new AppError('SKIN_TEST', 409, `This colour needs a skin test read negative first. ${verdict.message} Please book a consultation or call the salon.`);
   }
   return check.status;
+}
+
+export interface BookingForSkinTest {
+  clientId: string | null;
+  status: string;
+  plan: StepPlan;
+  serviceAsks: boolean;
+  starts: readonly Date[];
+}
+
+export interface BookingSkinTestState {
+  status: 'not_needed' | 'passed' | 'waiting' | 'blocked';
+  message: string;
+}
+
+const LIVE_FOR_TESTS = ['held', 'booked', 'checked_in'];
+
+/**
+ * The skin-test state of several bookings at once (a day's book), read from their clients' whole records in two
+ * queries: `waiting` rests on an unread test, `blocked` means the record no longer allows the colour (a reaction
+ * recorded since, a test that lapsed): the desk must cancel or change the plan.
+ */
+export async function bookingSkinTestStates(db: Db, salon: SalonRule, bookings: readonly BookingForSkinTest[], now: Date): Promise<BookingSkinTestState[]> {
+  const live = (b: BookingForSkinTest) => b.clientId && LIVE_FOR_TESTS.includes(b.status) && planNeedsSkinTest(b.plan, salon.skinTestFamilies, b.serviceAsks);
+  const clientIds = [...new Set(bookings.filter(live).map((b) => b.clientId!))];
+  const [records, clearances] = await Promise.all([skinTestRecordsOf(db, clientIds), skinTestClearancesOf(db, clientIds)]);
+  const zoneDay = (d: Date) => DateTime.fromJSDate(d, { zone: salon.timeZone }).toFormat('ccc d LLL');
+  return bookings.map((b) => {
+    if (!live(b)) return { status: 'not_needed', message: '' };
+    const verdict = skinTestVerdict(true, records.get(b.clientId!) ?? [], clearances.get(b.clientId!) ?? [], salonPolicy(salon), now);
+    const check = checkStarts(verdict, testedSittingStarts(b.plan, b.starts, salon, b.serviceAsks), zoneDay);
+    if (check.status === 'refused') return { status: 'blocked', message: check.message };
+    if (check.status === 'waiting') return { status: 'waiting', message: 'Waiting on a skin test: the colour cannot start until the test reads negative.' };
+    return { status: check.status, message: '' };
+  });
 }

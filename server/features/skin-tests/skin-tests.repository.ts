@@ -54,30 +54,44 @@ export async function setSkinTestReading(db: Db, id: string, r: { readAt: Date; 
  * an unread or booked test counts (shared/rules/skin-test-rule.ts).
  */
 export async function skinTestRecords(db: Db, clientId: string): Promise<SkinTestRecord[]> {
+  return (await skinTestRecordsOf(db, [clientId])).get(clientId) ?? [];
+}
+
+/** The same records for several clients at once (a day's bookings), by client id. */
+export async function skinTestRecordsOf(db: Db, clientIds: readonly string[]): Promise<Map<string, SkinTestRecord[]>> {
+  const byClient = new Map<string, SkinTestRecord[]>(clientIds.map((id) => [id, []]));
+  if (clientIds.length === 0) return byClient;
   const [tests, appointments] = await Promise.all([
-    db.selectFrom('skin_tests').select(['applied_at', 'result', 'created_at', 'read_recorded_at']).where('client_id', '=', clientId).execute(),
+    db.selectFrom('skin_tests').select(['client_id', 'applied_at', 'result', 'created_at', 'read_recorded_at']).where('client_id', 'in', clientIds).execute(),
     db
       .selectFrom('bookings as b')
       .innerJoin('services as s', 's.id', 'b.service_id')
       .innerJoin('sittings as si', 'si.booking_id', 'b.id')
-      .select([sql<Date>`lower(si.during)`.as('start'), 'b.created_at'])
-      .where('b.client_id', '=', clientId)
+      .select(['b.client_id', sql<Date>`lower(si.during)`.as('start'), 'b.created_at'])
+      .where('b.client_id', 'in', clientIds)
       .where('s.category', '=', 'skin_test')
       .where('b.status', 'in', ['held', 'booked', 'checked_in'])
       .execute(),
   ]);
-  const recordedDays = new Set(tests.map((t) => t.applied_at.toISOString().slice(0, 10)));
-  return [
-    // A reading counts from when it was written down: a clearance must come after the reaction was known.
-    ...tests.map((t) => ({ appliedAt: t.applied_at, recordedAt: t.read_recorded_at ?? t.created_at, result: t.result })),
-    ...appointments
-      .filter((a) => !recordedDays.has(a.start.toISOString().slice(0, 10)))
-      .map((a) => ({ appliedAt: a.start, recordedAt: a.created_at, result: 'pending' as const, booked: true })),
-  ];
+  const recordedDays = new Set(tests.map((t) => `${t.client_id}|${t.applied_at.toISOString().slice(0, 10)}`));
+  // A reading counts from when it was written down: a clearance must come after the reaction was known.
+  for (const t of tests) byClient.get(t.client_id)!.push({ appliedAt: t.applied_at, recordedAt: t.read_recorded_at ?? t.created_at, result: t.result });
+  for (const a of appointments) {
+    if (!a.client_id || recordedDays.has(`${a.client_id}|${a.start.toISOString().slice(0, 10)}`)) continue;
+    byClient.get(a.client_id)?.push({ appliedAt: a.start, recordedAt: a.created_at, result: 'pending', booked: true });
+  }
+  return byClient;
 }
 
 /** The owner's clearances of positive skin tests for this client (when each was recorded). */
 export async function skinTestClearances(db: Db, clientId: string): Promise<{ at: Date }[]> {
-  const rows = await db.selectFrom('skin_test_clearances').select('recorded_at').where('client_id', '=', clientId).execute();
-  return rows.map((r) => ({ at: r.recorded_at }));
+  return (await skinTestClearancesOf(db, [clientId])).get(clientId) ?? [];
+}
+
+export async function skinTestClearancesOf(db: Db, clientIds: readonly string[]): Promise<Map<string, { at: Date }[]>> {
+  const byClient = new Map<string, { at: Date }[]>(clientIds.map((id) => [id, []]));
+  if (clientIds.length === 0) return byClient;
+  const rows = await db.selectFrom('skin_test_clearances').select(['client_id', 'recorded_at']).where('client_id', 'in', clientIds).execute();
+  for (const r of rows) byClient.get(r.client_id)!.push({ at: r.recorded_at });
+  return byClient;
 }

@@ -10,6 +10,7 @@ const booking = (n: number, stylist: number, chair: number, from: string, to: st
   service: { id: id(1), name: 'Toner' },
   stylist: { id: id(stylist), name: `Stylist ${stylist}` },
   priceCents: 0,
+  skinTest: { status: 'not_needed', message: '' },
   depositCents: 0,
   depositOutcome: null,
   cancelReason: null,

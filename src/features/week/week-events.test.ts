@@ -10,6 +10,7 @@ const booking = (n: number, stylist: number, status: BookingView['status']): Boo
   service: { id: id(1), name: 'Colour correction' },
   stylist: { id: id(stylist), name: 'Ana' },
   priceCents: 0,
+  skinTest: { status: 'not_needed', message: '' },
   depositCents: 0,
   depositOutcome: null,
   cancelReason: null,
