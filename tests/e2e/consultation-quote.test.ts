@@ -78,18 +78,25 @@ describe('consultation to quote to booking', () => {
   });
 });
 
+type DayBooking = { id: string; status: string; client: { id: string }; stylist: { name: string }; sittings: { start: string }[] };
+
+/** The bookings of the demo salon's days `offsets` from today (salon time), asked the way the day pages ask. */
+async function bookingsOn(page: Page, path: '/api/stylist/day' | '/api/desk/day', offsets: number[]): Promise<DayBooking[]> {
+  const found: DayBooking[] = [];
+  for (const d of offsets) {
+    const day = DateTime.now().setZone('America/Denver').plus({ days: d }).toISODate()!;
+    found.push(...((await (await page.request.get(`${baseUrl()}${path}?date=${day}`)).json()).bookings as DayBooking[]));
+  }
+  return found;
+}
+
 describe('mix log', () => {
   it('a stylist writes a bowl and repeats it at the same client’s next started visit', async () => {
     const page = await signedIn('ana@demo.test', '/stylist');
     // Two past bookings of one client with Ana, asked the way My day asks (the demo book spans a week back).
-    const visits: { id: string; clientId: string; start: string }[] = [];
-    for (let d = 1; d <= 8; d++) {
-      const day = DateTime.now().setZone('America/Denver').minus({ days: d }).toISODate()!;
-      const res = await (await page.request.get(`${baseUrl()}/api/stylist/day?date=${day}`)).json();
-      for (const b of res.bookings as { id: string; status: string; client: { id: string }; sittings: { seq: number; start: string }[] }[]) {
-        if (b.status !== 'cancelled' && b.sittings.every((s) => Date.parse(s.start) < Date.now())) visits.push({ id: b.id, clientId: b.client.id, start: b.sittings[0].start });
-      }
-    }
+    const visits = (await bookingsOn(page, '/api/stylist/day', [-1, -2, -3, -4, -5, -6, -7, -8]))
+      .filter((b) => b.status !== 'cancelled' && b.sittings.every((s) => Date.parse(s.start) < Date.now()))
+      .map((b) => ({ id: b.id, clientId: b.client.id, start: b.sittings[0].start }));
     const byClient = new Map<string, typeof visits>();
     for (const v of visits) byClient.set(v.clientId, [...(byClient.get(v.clientId) ?? []), v]);
     const pair = [...byClient.values()].find((v) => v.length >= 2)!.sort((a, b) => a.start.localeCompare(b.start));
@@ -148,14 +155,9 @@ describe('mix log', () => {
   it('bowls are written ahead for a booked sitting, from the booking page and from the stylist’s mix log', async () => {
     // The formula is usually mixed before the client reaches the basin: a sitting that has not started takes bowls.
     const desk = await signedIn('desk@demo.test', '/desk');
-    const upcoming: { id: string; clientId: string; stylist: string }[] = [];
-    for (let d = 1; d <= 6; d++) {
-      const day = DateTime.now().setZone('America/Denver').plus({ days: d }).toISODate()!;
-      const res = await (await desk.request.get(`${baseUrl()}/api/desk/day?date=${day}`)).json();
-      for (const b of res.bookings as { id: string; status: string; client: { id: string }; stylist: { name: string }; sittings: { start: string }[] }[]) {
-        if (b.status === 'booked' && b.sittings.every((s) => Date.parse(s.start) > Date.now())) upcoming.push({ id: b.id, clientId: b.client.id, stylist: b.stylist.name });
-      }
-    }
+    const upcoming = (await bookingsOn(desk, '/api/desk/day', [1, 2, 3, 4, 5, 6]))
+      .filter((b) => b.status === 'booked' && b.sittings.every((s) => Date.parse(s.start) > Date.now()))
+      .map((b) => ({ id: b.id, clientId: b.client.id, stylist: b.stylist.name }));
     const [forDesk] = upcoming;
     await desk.goto(`${baseUrl()}/desk/bookings/${forDesk.id}`);
     await desk.getByText('Not started yet; bowls can be written ahead.').first().waitFor();
