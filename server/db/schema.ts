@@ -327,7 +327,8 @@ export interface MixLogsTable {
   /** numeric: pg returns it as a string. */
   developer_percent: ColumnType<string | null, string | number | null, string | number | null>;
   ratio: Generated<string>;
-  grams: Json<{ part: string; grams: number }[]>;
+  /** Each weighed part and what it is (migrations/20261205T0100). */
+  grams: Json<{ kind: ProductCostsTable['product_type'] | 'other'; part: string; grams: number }[]>;
   applied_to: Generated<string>;
   planned_minutes: number | null;
   actual_minutes: number | null;
@@ -407,7 +408,7 @@ export interface StrandTestsTable {
   client_id: string;
   tested_at: Timestamp;
   tested: string;
-  product_type: ProductCostsTable['product_type'];
+  product_type: MixLogsTable['product_type'];
   /** numeric: pg returns it as a string. */
   developer_percent: ColumnType<string | null, string | number | null, string | number | null>;
   minutes: number;
@@ -423,7 +424,8 @@ export interface StrandTestsTable {
 /** Consultations and their quotes (migrations/20261203T0700). */
 export interface ProductCostsTable {
   salon_id: string;
-  product_type: 'lightener' | 'remover' | 'permanent' | 'demi_permanent' | 'direct_dye' | 'toner' | 'bond_builder';
+  /** The product types and, since migrations/20261205T0100, developer. */
+  product_type: 'lightener' | 'remover' | 'permanent' | 'demi_permanent' | 'direct_dye' | 'toner' | 'bond_builder' | 'developer';
   /** numeric: pg returns it as a string. */
   cents_per_gram: ColumnType<string, string | number, string | number>;
 }

@@ -7,8 +7,8 @@ import { proposeQuote } from '../../shared/quotes/propose-quote';
 import { quotePriceInputs } from '../features/consultations/consultations.repository';
 import { demoServices } from './demo-catalogue';
 
-// Cents per gram of mixed product (demo values, not market prices).
-const demoProductCosts = { lightener: 4, remover: 6, permanent: 8, demi_permanent: 7, direct_dye: 5, toner: 7, bond_builder: 30 } as const;
+// Cents per gram of each product as weighed into the bowl, developer apart (demo values, not market prices).
+const demoProductCosts = { lightener: 4, remover: 6, permanent: 8, demi_permanent: 7, direct_dye: 5, toner: 7, bond_builder: 30, developer: 1.5 } as const;
 
 const jordan: ConsultationInput = {
   currentLevel: 4, targetLevel: 8,

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import {
   CalculatorError, EU_HAIR_MAX_PERCENT, GRAMS_PER_LITRE_PER_VOLUME, PERCENT_PER_VOLUME, bowlPercent, checkDeveloperStrength, dilute,
-  mixTwoDevelopers, parseRatio, percentToVolume, ratioBowlPercent, splitBowl, volumeToPercent,
+  mixTwoDevelopers, parseRatio, percentToVolume, ratioBowlPercent, splitBowl, strengthWords, volumeToPercent,
 } from './developer';
 
 const fieldOf = (fn: () => unknown) => {
@@ -45,6 +45,26 @@ describe('volume ↔ percent', () => {
   });
 });
 
+describe("strengths in the trade's words, percent with volumes", () => {
+  it.each([
+    [3, '3 % (10 vol)'],
+    [6, '6 % (20 vol)'],
+    [9, '9 % (30 vol)'],
+    [12, '12 % (40 vol)'],
+  ])('%i %% reads "%s"', (pct, words) => {
+    // Source: EU Reg. (EC) 1223/2009 Annex III entry 12 writes the limit "12 % of H2O2 (40 volumes)"; developer
+    // bottles are labelled 3/6/9/12 % = 10/20/30/40 vol (common practice: 1 vol ≈ 0.3 %).
+    expect(strengthWords(pct)).toBe(words);
+  });
+
+  it('gives any other strength to a tenth: 15 % = 50 vol, 4 % = 13.3 vol, 2.7 % = 9 vol', () => {
+    // By hand at 0.3 % per volume: 15 / 0.3 = 50; 4 / 0.3 = 13.33… → 13.3; 2.7 / 0.3 = 9.
+    expect(strengthWords(15)).toBe('15 % (50 vol)');
+    expect(strengthWords(4)).toBe('4 % (13.3 vol)');
+    expect(strengthWords(2.7)).toBe('2.7 % (9 vol)');
+  });
+});
+
 describe('the salon maximum', () => {
   it('defaults to the EU limit of 12 % and refuses more, naming the field', () => {
     // Source: EU Reg. (EC) 1223/2009 Annex III entry 12(a) as substituted by Reg. (EU) 2019/831: hair products 12 %.
@@ -52,6 +72,14 @@ describe('the salon maximum', () => {
     expect(() => checkDeveloperStrength(12, EU_HAIR_MAX_PERCENT)).not.toThrow();
     expect(fieldOf(() => checkDeveloperStrength(12.5, EU_HAIR_MAX_PERCENT))).toBe('developerPercent');
     expect(fieldOf(() => checkDeveloperStrength(-1, 12))).toBe('developerPercent');
+  });
+
+  it('says the refused and the allowed strength in volumes too, and the EU limit as the regulation writes it', () => {
+    // 15 / 0.3 = 50 vol; 12 / 0.3 = 40 vol (common practice factor). The limit's words: Annex III entry 12.
+    expect(() => checkDeveloperStrength(15, 12)).toThrow(/15 % \(50 vol\) is above this salon's maximum of 12 % \(40 vol\)/);
+    expect(() => checkDeveloperStrength(15, 12)).toThrow(/12 % of H2O2, 40 volumes/);
+    // A salon in a stricter jurisdiction sets 9 %: 9 / 0.3 = 30 vol.
+    expect(() => checkDeveloperStrength(10, 9)).toThrow(/maximum of 9 % \(30 vol\)/);
   });
 });
 

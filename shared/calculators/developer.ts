@@ -22,6 +22,13 @@ export const PERCENT_PER_VOLUME = GRAMS_PER_LITRE_PER_VOLUME / 10;
 export const TRADE_PERCENT_PER_VOLUME = 0.3;
 /** EU Reg. (EC) 1223/2009 Annex III entry 12(a): hair products at most 12 % H2O2 (40 volumes). The salon default. */
 export const EU_HAIR_MAX_PERCENT = 12;
+/**
+ * The EU limit in the regulation's own words, offered as the default for the salon's jurisdiction: the owner
+ * sets the salon's maximum, and local rules and licensed practice decide.
+ */
+export const EU_HAIR_LIMIT_WORDS =
+  'The EU Cosmetics Regulation (EC) No 1223/2009, Annex III entry 12, limits hair products to "12 % of H2O2 (40 volumes)". ' +
+  "Dwell uses it as the default maximum; the salon's own jurisdiction, local rules and licensed practice decide.";
 
 /** A refused input, naming the field so forms and the API can put the message beside it. */
 export class CalculatorError extends Error {
@@ -48,11 +55,23 @@ export function percentToVolume(percent: number, o: Rounding = {}): number {
   return percent / factor(o);
 }
 
+/**
+ * A strength as the trade says it, percent with volumes: 6 → "6 % (20 vol)". Bottles are labelled with the
+ * rounded factor (3/6/9/12 % = 10/20/30/40 vol), so the trade factor is used; one decimal at most.
+ */
+export function strengthWords(percent: number): string {
+  const tenth = (n: number) => String(round(n, 1));
+  return `${tenth(percent)} % (${tenth(percentToVolume(percent, { trade: true }))} vol)`;
+}
+
 /** Refuses a developer stronger than the salon allows, with the reason. */
 export function checkDeveloperStrength(percent: number, maxPercent: number, field = 'developerPercent'): void {
   nonNegative(percent, field);
   if (percent > maxPercent) {
-    throw new CalculatorError(field, `${percent} % is above this salon's maximum of ${maxPercent} % hydrogen peroxide (EU limit for hair products: 12 %).`);
+    throw new CalculatorError(
+      field,
+      `${strengthWords(percent)} is above this salon's maximum of ${strengthWords(maxPercent)} hydrogen peroxide (EU limit for hair products: 12 % of H2O2, 40 volumes).`,
+    );
   }
 }
 

@@ -14,6 +14,14 @@ export function isRealDateTime(s: string): boolean {
   return date.getUTCFullYear() === y && date.getUTCMonth() === m - 1 && date.getUTCDate() === d && hh <= 23 && mm <= 59;
 }
 
+// A NUL byte (PostgreSQL text cannot hold one) or half of a surrogate pair (not Unicode; it would be stored
+// as a replacement character, not as typed).
+const UNSTORABLE = /\u0000|[\ud800-\udbff](?![\udc00-\udfff])|(?<![\ud800-\udbff])[\udc00-\udfff]/;
+
+/** Free text a person types, at most `max` characters, refused (naming the field) when it cannot be stored as typed. */
+export const typedText = (max: number) =>
+  z.string().max(max, `At most ${max} characters`).refine((s) => !UNSTORABLE.test(s), 'Contains a character that cannot be stored (a NUL byte or half of an emoji)');
+
 /** A local calendar date, `YYYY-MM-DD`. */
 export const LocalDateSchema = z
   .string()

@@ -1,35 +1,50 @@
 import { z } from 'zod';
 import { CalculatorError, parseRatio } from '../calculators/developer';
-import { IdSchema, InstantSchema } from './common.schemas';
+import { BookingStatusSchema, IdSchema, InstantSchema, typedText, type BookingStatus } from './common.schemas';
 
 /** Generic product types (trade words, never brands). */
 export const ProductTypeSchema = z.enum(['lightener', 'remover', 'permanent', 'demi_permanent', 'direct_dye', 'toner', 'bond_builder']);
 export type ProductType = z.infer<typeof ProductTypeSchema>;
 
+/** What the owner can set a cost per gram for (Set-up → Quote prices): the product types and developer. */
+export const CostedProductSchema = z.enum([...ProductTypeSchema.options, 'developer']);
+export type CostedProduct = z.infer<typeof CostedProductSchema>;
+
+/**
+ * What one weighed part of a bowl is. A bowl of lightener is lightener grams plus developer grams, and each
+ * is counted and costed as itself; `other` is water, non-peroxide cream or an additive, weighed but not costed.
+ */
+export const MixPartKindSchema = z.enum([...CostedProductSchema.options, 'other']);
+export type MixPartKind = z.infer<typeof MixPartKindSchema>;
+
 export const MixPartSchema = z
   .object({
-    part: z.string().trim().min(1, 'Name the part (e.g. lightener, developer)').max(80),
+    kind: MixPartKindSchema,
+    /** The stylist's own words for the part (e.g. "blue powder", "cream developer"); may be empty. */
+    part: typedText(80).trim(),
     grams: z.number().min(0, 'Grams cannot be negative').max(5000, 'At most 5000 g'),
   })
   .strict();
+export type MixPart = z.infer<typeof MixPartSchema>;
 
+const sittingNo = z.number().int().min(1, 'Sittings start at 1').max(30, 'No booking has that many sittings');
 const minutes = z.number().int('Whole minutes').min(0, 'Minutes cannot be negative').max(600, 'At most 600 minutes').nullable();
 
 /** One bowl of a sitting, as the stylist writes it; the salon maximum is checked on the server (it is a salon setting). */
 export const WriteMixLogSchema = z
   .object({
-    sittingSeq: z.number().int().min(1, 'Sittings start at 1'),
+    sittingSeq: sittingNo,
     bowlNo: z.number().int().min(1, 'Bowls start at 1').max(30),
     productType: ProductTypeSchema,
-    shadeNotes: z.string().max(500),
+    shadeNotes: typedText(500),
     developerPercent: z.number().min(0, 'Developer strength cannot be negative').max(100).nullable(),
-    ratio: z.string().trim().max(40),
+    ratio: typedText(40).trim(),
     grams: z.array(MixPartSchema).min(1, 'Weigh at least one part').max(8),
-    appliedTo: z.string().max(200),
+    appliedTo: typedText(200),
     plannedMinutes: minutes,
     actualMinutes: minutes,
     heat: z.boolean(),
-    resultNotes: z.string().max(1000),
+    resultNotes: typedText(1000),
   })
   .strict()
   .superRefine((log, ctx) => {
@@ -46,8 +61,14 @@ export type WriteMixLog = z.infer<typeof WriteMixLogSchema>;
 
 /** "Repeat last time": the bowls of sitting `sitting` of booking `fromBookingId` go into `intoSitting` of this booking. */
 export const RepeatMixLogSchema = z
-  .object({ fromBookingId: IdSchema, sitting: z.number().int().min(1), intoSitting: z.number().int().min(1) })
+  .object({ fromBookingId: IdSchema, sitting: sittingNo, intoSitting: sittingNo })
   .strict();
+
+/**
+ * Bowls may be written for any sitting of a booking that is not cancelled, before it starts too: the formula is
+ * usually mixed before the client reaches the basin. The server refuses the rest; the page hides the form.
+ */
+export const mixLogWritable = (status: BookingStatus) => status !== 'cancelled';
 
 export const MixLogSchema = z.object({
   id: IdSchema,
@@ -56,10 +77,10 @@ export const MixLogSchema = z.object({
   productType: ProductTypeSchema,
   shadeNotes: z.string(),
   developerPercent: z.number().nullable(),
-  /** The same strength as volume (definition factor), for bottles labelled in volumes. */
+  /** The same strength in trade volumes (3 % = 10 vol), as developer bottles are labelled. */
   developerVolume: z.number().nullable(),
   ratio: z.string(),
-  grams: z.array(z.object({ part: z.string(), grams: z.number() })),
+  grams: z.array(z.object({ kind: MixPartKindSchema, part: z.string(), grams: z.number() })),
   appliedTo: z.string(),
   plannedMinutes: z.number().nullable(),
   actualMinutes: z.number().nullable(),
@@ -69,21 +90,43 @@ export const MixLogSchema = z.object({
 });
 export type MixLog = z.infer<typeof MixLogSchema>;
 
+/** Grams of one kind of part used at a sitting, with its cost per gram and cost when the owner has set one. */
+export const ProductUseLineSchema = z.object({
+  kind: MixPartKindSchema,
+  grams: z.number(),
+  /** null: no cost set in Quote prices (or `other`, which is never costed). */
+  centsPerGram: z.number().nullable(),
+  costCents: z.number().int().nullable(),
+});
+export type ProductUseLine = z.infer<typeof ProductUseLineSchema>;
+
 export const SittingUsageSchema = z.object({
   seq: z.number(),
   start: InstantSchema,
   started: z.boolean(),
-  /** Grams used per product type at this sitting (all parts of its bowls). */
-  totals: z.array(z.object({ productType: ProductTypeSchema, grams: z.number() })),
+  /** Grams used per kind of part at this sitting (every weighed part of its bowls, counted as what it is). */
+  totals: z.array(ProductUseLineSchema),
   totalGrams: z.number(),
-  /** Grams × the owner's cost per gram per product type; null while no cost is set for a type used. */
+  /** The lines' costs added up; null while a product or developer used has no cost set. */
   estimatedCostCents: z.number().int().nullable(),
 });
 
+/** A sitting of the same client with bowls written, that "Repeat last time" can copy (only ones the caller may read). */
+export const RepeatSourceSchema = z.object({
+  bookingId: IdSchema,
+  sittingSeq: z.number(),
+  serviceName: z.string(),
+  start: InstantSchema,
+  bowls: z.number(),
+});
+export type RepeatSource = z.infer<typeof RepeatSourceSchema>;
+
 export const MixLogListSchema = z.object({
+  bookingStatus: BookingStatusSchema,
   maxDeveloperPercent: z.number(),
   sittings: z.array(SittingUsageSchema),
   logs: z.array(MixLogSchema),
+  repeatSources: z.array(RepeatSourceSchema),
 });
 export type MixLogList = z.infer<typeof MixLogListSchema>;
 

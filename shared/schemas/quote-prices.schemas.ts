@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { ProductTypeSchema } from './mix-log.schemas';
+import { CostedProductSchema } from './mix-log.schemas';
 
 const centsPerGram = z.number({ error: 'Give a cost or leave it empty' }).min(0, 'A cost cannot be negative').max(10_000, 'At most 10000 cents a gram');
 
@@ -7,8 +7,9 @@ const centsPerGram = z.number({ error: 'Give a cost or leave it empty' }).min(0,
 export const QuotePricesSchema = z
   .object({
     correctionCentsPerHour: z.number({ error: 'Give the hourly rate' }).int('Whole cents').min(0, 'The rate cannot be negative').max(1_000_000),
-    // An empty box in the form arrives as undefined: no cost set for that type.
-    productCentsPerGram: z.partialRecord(ProductTypeSchema, centsPerGram.optional()),
+    // Per gram of each product as weighed into the bowl, developer apart. An empty box in the form arrives as
+    // undefined: no cost set for that product.
+    productCentsPerGram: z.partialRecord(CostedProductSchema, centsPerGram.optional()),
   })
   .strict();
 export type QuotePrices = z.infer<typeof QuotePricesSchema>;

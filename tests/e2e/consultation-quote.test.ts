@@ -78,18 +78,25 @@ describe('consultation to quote to booking', () => {
   });
 });
 
+type DayBooking = { id: string; status: string; client: { id: string }; stylist: { name: string }; sittings: { start: string }[] };
+
+/** The bookings of the demo salon's days `offsets` from today (salon time), asked the way the day pages ask. */
+async function bookingsOn(page: Page, path: '/api/stylist/day' | '/api/desk/day', offsets: number[]): Promise<DayBooking[]> {
+  const found: DayBooking[] = [];
+  for (const d of offsets) {
+    const day = DateTime.now().setZone('America/Denver').plus({ days: d }).toISODate()!;
+    found.push(...((await (await page.request.get(`${baseUrl()}${path}?date=${day}`)).json()).bookings as DayBooking[]));
+  }
+  return found;
+}
+
 describe('mix log', () => {
   it('a stylist writes a bowl and repeats it at the same client’s next started visit', async () => {
     const page = await signedIn('ana@demo.test', '/stylist');
     // Two past bookings of one client with Ana, asked the way My day asks (the demo book spans a week back).
-    const visits: { id: string; clientId: string; start: string }[] = [];
-    for (let d = 1; d <= 8; d++) {
-      const day = DateTime.now().setZone('America/Denver').minus({ days: d }).toISODate()!;
-      const res = await (await page.request.get(`${baseUrl()}/api/stylist/day?date=${day}`)).json();
-      for (const b of res.bookings as { id: string; status: string; client: { id: string }; sittings: { seq: number; start: string }[] }[]) {
-        if (b.status !== 'cancelled' && b.sittings.every((s) => Date.parse(s.start) < Date.now())) visits.push({ id: b.id, clientId: b.client.id, start: b.sittings[0].start });
-      }
-    }
+    const visits = (await bookingsOn(page, '/api/stylist/day', [-1, -2, -3, -4, -5, -6, -7, -8]))
+      .filter((b) => b.status !== 'cancelled' && b.sittings.every((s) => Date.parse(s.start) < Date.now()))
+      .map((b) => ({ id: b.id, clientId: b.client.id, start: b.sittings[0].start }));
     const byClient = new Map<string, typeof visits>();
     for (const v of visits) byClient.set(v.clientId, [...(byClient.get(v.clientId) ?? []), v]);
     const pair = [...byClient.values()].find((v) => v.length >= 2)!.sort((a, b) => a.start.localeCompare(b.start));
@@ -101,10 +108,35 @@ describe('mix log', () => {
     await bowl.getByLabel('Shade or level notes').fill('Blue powder lightener');
     await bowl.getByLabel('Where applied').fill('Mid-lengths and ends');
     await bowl.getByLabel('Actual minutes').fill('35');
+
+    // The volume follows the percent key by key, before anything is saved: 15 % ÷ 0.3 = 50 vol (common practice:
+    // bottles are labelled 3/6/9/12 % = 10/20/30/40 vol); 15 % is above the demo salon's 12 % (40 vol) maximum.
+    const percent = bowl.getByLabel('Developer strength (%)');
+    const volume = bowl.getByLabel('Developer strength (vol)');
+    expect(await volume.inputValue()).toBe('20'); // 6 % ÷ 0.3
+    await percent.fill('');
+    await percent.pressSequentially('1');
+    expect(await volume.inputValue()).toBe('3.33'); // 1 ÷ 0.3 = 3.33…
+    await percent.pressSequentially('5');
+    expect(await volume.inputValue()).toBe('50');
+    await bowl.getByText("Above this salon's maximum of 12 % (40 vol); it will be refused.").waitFor();
+    // Typed as volumes: 30 vol × 0.3 = 9 %.
+    await volume.fill('30');
+    expect(await percent.inputValue()).toBe('9');
+    await percent.fill('6');
+    expect(await volume.inputValue()).toBe('20');
+
     const written = apiAnswer(page, 'POST', /\/mix-logs$/);
     await bowl.getByRole('button', { name: 'Save bowl' }).click();
-    expect((await written).status()).toBe(201);
-    await page.getByText(/Product used:/).waitFor();
+    const saved = await written;
+    expect(saved.status()).toBe(201);
+    // The form's default bowl, 30 g lightener and 60 g developer, is saved as exactly those parts.
+    expect((await saved.json()).grams).toEqual([{ kind: 'lightener', part: '', grams: 30 }, { kind: 'developer', part: '', grams: 60 }]);
+    const used = page.getByRole('region', { name: 'Sitting 1' });
+    await used.getByText(/Product used:/).waitFor();
+    await used.getByText(/^Lightener 30 g/).waitFor();
+    await used.getByText(/^Developer 60 g/).waitFor();
+    expect(await used.getByText(/Lightener 90 g/).count()).toBe(0);
     await shot(page, 'mix-log');
 
     await page.goto(`${baseUrl()}/stylist/bookings/${later.id}/mix-log?client=${later.clientId}`);
@@ -118,5 +150,38 @@ describe('mix log', () => {
     await page.getByText(/Copied 1 bowls/).waitFor();
     await page.getByText(/Blue powder lightener/).first().waitFor();
     await page.context().close();
+  });
+
+  it('bowls are written ahead for a booked sitting, from the booking page and from the stylist’s mix log', async () => {
+    // The formula is usually mixed before the client reaches the basin: a sitting that has not started takes bowls.
+    const desk = await signedIn('desk@demo.test', '/desk');
+    const upcoming = (await bookingsOn(desk, '/api/desk/day', [1, 2, 3, 4, 5, 6]))
+      .filter((b) => b.status === 'booked' && b.sittings.every((s) => Date.parse(s.start) > Date.now()))
+      .map((b) => ({ id: b.id, clientId: b.client.id, stylist: b.stylist.name }));
+    const [forDesk] = upcoming;
+    await desk.goto(`${baseUrl()}/desk/bookings/${forDesk.id}`);
+    await desk.getByText('Not started yet; bowls can be written ahead.').first().waitFor();
+    const deskBowl = desk.getByRole('form', { name: /Bowl for sitting 1/ });
+    await deskBowl.getByLabel('Shade or level notes').fill('Toner, pearl');
+    await deskBowl.getByLabel('Product type').selectOption('toner');
+    // Changing the bowl's product carries its product part along; the developer part stays developer.
+    expect(await deskBowl.getByLabel('Part 1').inputValue()).toBe('toner');
+    expect(await deskBowl.getByLabel('Part 2').inputValue()).toBe('developer');
+    const deskWritten = apiAnswer(desk, 'POST', /\/mix-logs$/);
+    await deskBowl.getByRole('button', { name: 'Save bowl' }).click();
+    expect((await deskWritten).status()).toBe(201);
+    await desk.getByText(/^Toner 30 g/).waitFor();
+    await desk.context().close();
+
+    const ana = await signedIn('ana@demo.test', '/stylist');
+    const hers = upcoming.find((b) => b.stylist.startsWith('Ana'))!;
+    await ana.goto(`${baseUrl()}/stylist/bookings/${hers.id}/mix-log?client=${hers.clientId}`);
+    const anaBowl = ana.getByRole('form', { name: /Bowl for sitting 1/ });
+    await anaBowl.getByLabel('Shade or level notes').fill('Lightener for the lengths');
+    const anaWritten = apiAnswer(ana, 'POST', /\/mix-logs$/);
+    await anaBowl.getByRole('button', { name: 'Save bowl' }).click();
+    expect((await anaWritten).status()).toBe(201);
+    await ana.getByText(/Lightener for the lengths/).waitFor();
+    await ana.context().close();
   });
 });

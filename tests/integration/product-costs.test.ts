@@ -36,20 +36,25 @@ afterAll(() => t.close());
 
 const bowl = (bowlNo: number, productType: string, grams: number[]) => ({
   sittingSeq: 1, bowlNo, productType, shadeNotes: '', developerPercent: 6, ratio: '1:2',
-  grams: grams.map((g, i) => ({ part: i === 0 ? productType : 'developer', grams: g })), appliedTo: '', plannedMinutes: null, actualMinutes: null, heat: false, resultNotes: '',
+  grams: grams.map((g, i) => ({ kind: i === 0 ? productType : 'developer', part: '', grams: g })), appliedTo: '', plannedMinutes: null, actualMinutes: null, heat: false, resultNotes: '',
 });
 const sitting = async () => (await stylist$.get(`/api/bookings/${bookingId}/mix-logs`)).body.sittings[0];
 
 describe('product cost per sitting', () => {
-  it('is unknown until the owner sets a cost per gram for every type used, then grams × cost', async () => {
+  it('is unknown until the owner sets a cost per gram for every product and developer used, then grams × cost', async () => {
     expect((await stylist$.write('post', `/api/bookings/${bookingId}/mix-logs`, bowl(1, 'lightener', [30, 60]))).status).toBe(201);
     expect((await stylist$.write('post', `/api/bookings/${bookingId}/mix-logs`, bowl(2, 'toner', [20, 30]))).status).toBe(201);
     expect((await sitting()).estimatedCostCents).toBeNull();
 
     const saved = await owner$.write('put', '/api/owner/quote-prices', { correctionCentsPerHour: 11000, productCentsPerGram: { lightener: 4, toner: 7.5 } });
     expect(saved.status).toBe(200);
-    // Lightener bowl 30 + 60 = 90 g × 4 ¢ = 360 ¢; toner bowl 20 + 30 = 50 g × 7.5 ¢ = 375 ¢; 735 ¢ in all (hand arithmetic).
-    expect(await sitting()).toMatchObject({ totalGrams: 140, estimatedCostCents: 735 });
+    // Developer (60 + 30 = 90 g) has no cost yet, so the estimate stays unknown rather than too low.
+    expect(await sitting()).toMatchObject({ totalGrams: 140, estimatedCostCents: null });
+
+    expect((await owner$.write('put', '/api/owner/quote-prices', { correctionCentsPerHour: 11000, productCentsPerGram: { lightener: 4, toner: 7.5, developer: 1 } })).status).toBe(200);
+    // Hand arithmetic: lightener 30 g × 4 ¢ = 120 ¢; toner 20 g × 7.5 ¢ = 150 ¢; developer 90 g × 1 ¢ = 90 ¢;
+    // 30 + 20 + 90 = 140 g; 120 + 150 + 90 = 360 ¢.
+    expect(await sitting()).toMatchObject({ totalGrams: 140, estimatedCostCents: 360 });
   });
 
   it('only the owner sets prices; bad values name the field and change nothing', async () => {
@@ -57,6 +62,6 @@ describe('product cost per sitting', () => {
     const bad = await owner$.write('put', '/api/owner/quote-prices', { correctionCentsPerHour: -5, productCentsPerGram: { lightener: -1, glitter: 3 } });
     expect(bad.status).toBe(400);
     expect(Object.keys(bad.body.error.fields)).toEqual(expect.arrayContaining(['correctionCentsPerHour', 'productCentsPerGram.lightener']));
-    expect((await owner$.get('/api/owner/quote-prices')).body).toEqual({ correctionCentsPerHour: 11000, productCentsPerGram: { lightener: 4, toner: 7.5 } });
+    expect((await owner$.get('/api/owner/quote-prices')).body).toEqual({ correctionCentsPerHour: 11000, productCentsPerGram: { lightener: 4, toner: 7.5, developer: 1 } });
   });
 });

@@ -13,7 +13,7 @@ export function findBookingForMixLog(db: Db, salonId: string, bookingId: string)
     .selectFrom('bookings as b')
     .innerJoin('staff as st', 'st.id', 'b.stylist_id')
     .innerJoin('salons as s', 's.id', 'b.salon_id')
-    .select(['b.id', 'b.client_id', 'st.user_id as stylist_user_id', 's.max_developer_percent'])
+    .select(['b.id', 'b.client_id', 'b.status', 'st.user_id as stylist_user_id', 's.max_developer_percent'])
     .where('b.salon_id', '=', salonId)
     .where('b.id', '=', bookingId)
     .executeTakeFirst();
@@ -58,4 +58,22 @@ export function insertMixLogs(db: Db, rows: (WriteMixLog & { salonId: string; bo
     )
     .returning(COLUMNS)
     .execute();
+}
+
+/**
+ * Sittings of this client's bookings that have bowls written, newest first: what "Repeat last time" can copy.
+ * With `stylistUserId`, only that stylist's bookings (a stylist reads no one else's mix logs).
+ */
+export function listRepeatSources(db: Db, salonId: string, clientId: string, stylistUserId: string | null) {
+  let q = db
+    .selectFrom('mix_logs as m')
+    .innerJoin('bookings as b', 'b.id', 'm.booking_id')
+    .innerJoin('services as sv', 'sv.id', 'b.service_id')
+    .innerJoin('staff as st', 'st.id', 'b.stylist_id')
+    .innerJoin('sittings as si', (j) => j.onRef('si.booking_id', '=', 'm.booking_id').onRef('si.seq', '=', 'm.sitting_seq'))
+    .select(['m.booking_id', 'm.sitting_seq', 'sv.name as service_name', sql<Date>`lower(si.during)`.as('start'), sql<number>`count(*)::int`.as('bowls')])
+    .where('b.salon_id', '=', salonId)
+    .where('b.client_id', '=', clientId);
+  if (stylistUserId) q = q.where('st.user_id', '=', stylistUserId);
+  return q.groupBy(['m.booking_id', 'm.sitting_seq', 'sv.name', 'si.during']).orderBy('start', 'desc').limit(40).execute();
 }

@@ -18,7 +18,7 @@ export async function loader({ params }: LoaderFunctionArgs) {
 /** The stylist's mix log of one booking, opened from a client card on My day. */
 export function Component() {
   const { id } = useParams();
-  // The client's id (from My day) offers their other bookings as sources for "Repeat last time".
+  // The client's id (from My day) files the visit's photos under the client.
   const client = useSearchParams()[0].get('client');
   const { data: salon } = useSuspenseQuery(salonQueries.current());
   return (

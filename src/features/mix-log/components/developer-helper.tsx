@@ -1,37 +1,40 @@
-import { useState } from 'react';
-import { percentToVolume, ratioBowlPercent, volumeToPercent } from '../../../../shared/calculators/developer';
+import { bowlPercent, percentToVolume, ratioBowlPercent, strengthWords, volumeToPercent } from '../../../../shared/calculators/developer';
+import type { MixPart } from '../../../../shared/schemas/mix-log.schemas';
 
-const show = (n: number) => (Number.isFinite(n) ? String(Math.round(n * 100) / 100) : '—');
+type Props = { developerPercent: number | null; ratio: string; parts: Pick<MixPart, 'kind' | 'grams'>[] };
 
-/** Small aid beside the bowl form: vol ↔ % and the peroxide % that ends up on the hair. */
-export function DeveloperHelper({ developerPercent, ratio }: { developerPercent: number | null; ratio: string }) {
-  const [volume, setVolume] = useState('20');
-  const vol = Number(volume);
-  let onHair: string | null = null;
-  if (developerPercent !== null && ratio) {
-    try {
-      onHair = show(ratioBowlPercent(ratio, developerPercent));
-    } catch {
-      onHair = null; // the form shows the ratio's own message
-    }
+const hundredths = (n: number) => String(Math.round(n * 100) / 100);
+
+/**
+ * The peroxide that ends up on the hair: from the weighed parts when developer grams are written (developer
+ * at its strength, every other part at 0 %), otherwise from the ratio with developer as its last part.
+ */
+function onTheHair(developerPercent: number, ratio: string, parts: Props['parts']): { percent: number; from: string } | null {
+  const weighed = parts.filter((p) => Number.isFinite(p.grams) && p.grams >= 0);
+  if (weighed.some((p) => p.kind === 'developer' && p.grams > 0)) {
+    return { percent: bowlPercent(weighed.map((p) => ({ grams: p.grams, peroxidePercent: p.kind === 'developer' ? developerPercent : 0 }))), from: 'the weighed parts' };
   }
+  try {
+    return ratio ? { percent: ratioBowlPercent(ratio, developerPercent), from: `${ratio} (developer last)` } : null;
+  } catch {
+    return null; // the form shows the ratio's own message
+  }
+}
+
+/** Small aid beside the bowl form: the strength by the definition of volume, and what the bowl puts on the hair. */
+export function DeveloperHelper({ developerPercent, ratio, parts }: Props) {
+  if (developerPercent === null || !Number.isFinite(developerPercent) || developerPercent < 0) return null;
+  const volume = percentToVolume(developerPercent, { trade: true });
+  const hair = onTheHair(developerPercent, ratio, parts);
   return (
-    <div className="flex flex-col gap-2 rounded-lg bg-linen p-3 text-sm" aria-label="Developer helper" role="group">
-      <label className="flex flex-wrap items-center gap-2">
-        <span className="font-bold">Volume</span>
-        <input type="number" min={0} step={1} value={volume} onChange={(e) => setVolume(e.target.value)} className="w-20 rounded border border-ink/40 px-2 py-1" />
-        <span className="tabular">
-          = {vol >= 0 ? show(volumeToPercent(vol, { trade: true })) : '—'} % on the bottle ({vol >= 0 ? show(volumeToPercent(vol)) : '—'} % by the definition)
-        </span>
-      </label>
-      {developerPercent !== null && developerPercent >= 0 && (
+    <div className="flex flex-col gap-2 rounded-lg bg-linen p-3 text-sm" aria-label="Developer helper" role="group" aria-live="polite">
+      <p className="tabular">
+        <span className="font-bold">{strengthWords(developerPercent)}</span>: by the definition of volume (1 L releases {hundredths(volume)} L of
+        oxygen) that is {hundredths(volumeToPercent(volume))} % hydrogen peroxide; bottles round 1 vol to 0.3 %.
+      </p>
+      {hair && (
         <p className="tabular">
-          {show(developerPercent)} % ≈ {show(percentToVolume(developerPercent, { trade: true }))} vol
-        </p>
-      )}
-      {onHair && (
-        <p className="tabular">
-          At {ratio} (developer last), the bowl is about <span className="font-bold">{onHair} %</span> peroxide.
+          From {hair.from}, the bowl is about <span className="font-bold">{strengthWords(hair.percent)}</span> peroxide on the hair.
         </p>
       )}
     </div>

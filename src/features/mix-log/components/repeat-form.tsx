@@ -1,48 +1,47 @@
-import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
+import type { RepeatSource } from '../../../../shared/schemas/mix-log.schemas';
 import { Button } from '../../../components/ui/button';
 import { FormAlert } from '../../../components/ui/form-alert';
 import { SelectField } from '../../../components/ui/select-field';
 import { isApiError } from '../../../lib/api-error';
 import { formatDay } from '../../../lib/time';
-import { clientQueries } from '../../clients/api/client-queries';
 import { useRepeatMixLog } from '../api/mix-log-queries';
 
 type Props = {
   bookingId: string;
-  /** Sittings of this booking with bowls written (copy sources inside the booking). */
-  loggedSittings: number[];
-  /** Sittings of this booking that have started (copy targets). */
-  startedSittings: number[];
-  /** When known, the client's other bookings are offered as sources too. */
-  clientId?: string;
+  /** Sittings of this client with bowls written, as the server lists them for the caller. */
+  sources: RepeatSource[];
+  /** Sittings of this booking that bowls can be written into. */
+  targets: number[];
+  /** The sitting picked for the bowl form, offered first. */
+  target: number;
   timeZone: string;
 };
 
 /** "Repeat last time": start a sitting's bowls from an earlier sitting of the same client. */
-export function RepeatForm({ bookingId, loggedSittings, startedSittings, clientId, timeZone }: Props) {
+export function RepeatForm({ bookingId, sources, targets, target, timeZone }: Props) {
   const repeat = useRepeatMixLog(bookingId);
-  const client = useQuery({ ...clientQueries.detail(clientId ?? ''), enabled: Boolean(clientId) });
-  const sources = [
-    ...loggedSittings.map((seq) => ({ value: `${bookingId}|${seq}`, label: `This booking, sitting ${seq}` })),
-    ...(client.data?.bookings ?? [])
-      .filter((b) => b.id !== bookingId)
-      .flatMap((b) => b.sittings.map((s) => ({ value: `${b.id}|${s.seq}`, label: `${b.service.name}, ${formatDay(s.start, timeZone)} (sitting ${s.seq})` }))),
-  ];
+  const options = sources.map((s) => ({
+    value: `${s.bookingId}|${s.sittingSeq}`,
+    label: `${s.bookingId === bookingId ? 'This booking' : `${s.serviceName}, ${formatDay(s.start, timeZone)}`} (sitting ${s.sittingSeq}, ${s.bowls} ${s.bowls === 1 ? 'bowl' : 'bowls'})`,
+  }));
   const [source, setSource] = useState('');
-  const [into, setInto] = useState(String(startedSittings[startedSittings.length - 1] ?? ''));
-  const chosen = source || sources[0]?.value || '';
-  if (sources.length === 0 || startedSittings.length === 0) return null;
+  const [into, setInto] = useState<number | null>(null);
+  const chosen = source || options[0]?.value || '';
+  if (options.length === 0 || targets.length === 0) return null;
 
   const onRepeat = () => {
     const [fromBookingId, seq] = chosen.split('|');
-    repeat.mutate({ fromBookingId, sitting: Number(seq), intoSitting: Number(into) });
+    repeat.mutate({ fromBookingId, sitting: Number(seq), intoSitting: into ?? target });
   };
   return (
     <div className="flex flex-col gap-3">
       <div className="flex flex-wrap items-end gap-3">
-        <SelectField label="Repeat from" options={sources} value={chosen} onChange={(e) => setSource(e.target.value)} />
-        <SelectField label="Into sitting" options={startedSittings.map((s) => ({ value: String(s), label: `Sitting ${s}` }))} value={into} onChange={(e) => setInto(e.target.value)} />
+        <SelectField label="Repeat from" options={options} value={chosen} onChange={(e) => setSource(e.target.value)} />
+        <SelectField
+          label="Into sitting" options={targets.map((s) => ({ value: String(s), label: `Sitting ${s}` }))}
+          value={String(into ?? target)} onChange={(e) => setInto(Number(e.target.value))}
+        />
         <Button variant="secondary" busy={repeat.isPending} onClick={onRepeat}>
           Repeat last time
         </Button>

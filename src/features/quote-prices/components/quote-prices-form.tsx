@@ -6,10 +6,11 @@ import { FormAlert } from '../../../components/ui/form-alert';
 import { TextField } from '../../../components/ui/text-field';
 import { fieldError, showServerErrors } from '../../../lib/form-errors';
 import { MoneyField } from '../../consultations/components/money-field';
-import { productTypeLabels, productTypeOptions } from '../../mix-log/product-type-labels';
+import { CostedProductSchema } from '../../../../shared/schemas/mix-log.schemas';
+import { costedProductLabels } from '../../mix-log/product-type-labels';
 import { useSaveQuotePrices } from '../api/quote-price-queries';
 
-/** The hourly rate for correction work and the cost per gram of mixed product for each generic product type. */
+/** The hourly rate for correction work and the cost per gram of each generic product type and of developer. */
 export function QuotePricesForm({ initial }: { initial: QuotePrices }) {
   const save = useSaveQuotePrices();
   const { register, control, handleSubmit, setError, formState } = useForm<QuotePrices>({ resolver: zodResolver(QuotePricesSchema), defaultValues: initial });
@@ -21,12 +22,13 @@ export function QuotePricesForm({ initial }: { initial: QuotePrices }) {
       {save.isSuccess && <FormAlert tone="success">Prices saved. New quotes and mix-log estimates use them.</FormAlert>}
       <MoneyField control={control} name="correctionCentsPerHour" label="Hourly rate for colour and correction work" error={err('correctionCentsPerHour')} />
       <fieldset className="flex flex-col gap-2">
-        <legend className="mb-1 font-bold">Cost per gram of mixed product, in cents (leave empty if unknown)</legend>
+        <legend className="mb-1 font-bold">Cost per gram as weighed into the bowl, in cents (leave empty if unknown)</legend>
+        <p className="text-sm text-ink/80">A mix log counts each part as itself: the lightener grams of a bowl at the lightener cost, its developer grams at the developer cost.</p>
         <div className="grid gap-3 sm:grid-cols-2 lg:grid-cols-4">
-          {productTypeOptions.map(({ value }) => (
+          {CostedProductSchema.options.map((value) => (
             <TextField
               key={value}
-              label={productTypeLabels[value]}
+              label={costedProductLabels[value]}
               type="number"
               step="0.1"
               inputMode="decimal"
