@@ -24,6 +24,7 @@ export const apiPaths = {
   services: '/api/services',
   stylists: '/api/stylists',
   skinTests: (clientId: string) => `/api/clients/${clientId}/skin-tests`,
+  skinTestClearances: (clientId: string) => `/api/clients/${clientId}/skin-test-clearances`,
   skinTestReading: (clientId: string, testId: string) => `/api/clients/${clientId}/skin-tests/${testId}/reading`,
   bookingOptions: '/api/booking-options',
   bookings: '/api/bookings',

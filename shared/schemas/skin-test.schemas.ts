@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { IdSchema, InstantInputSchema, InstantSchema } from './common.schemas';
+import { IdSchema, InstantInputSchema, InstantSchema, typedText } from './common.schemas';
 
 export const SkinTestResultSchema = z.enum(['pending', 'negative', 'positive', 'unclear']);
 /** What a reading can find; `pending` is the state before it. */
@@ -44,4 +44,13 @@ export const SkinTestSchema = z.object({
   readByName: z.string().nullable(),
 });
 export type SkinTest = z.infer<typeof SkinTestSchema>;
-export const SkinTestListSchema = z.object({ tests: z.array(SkinTestSchema) });
+/** An owner's recorded decision that lets oxidative colour follow a positive skin test (who, when, why). */
+export const SkinTestClearanceSchema = z.object({ id: IdSchema, recordedAt: InstantSchema, recordedByName: z.string(), reason: z.string() });
+export type SkinTestClearance = z.infer<typeof SkinTestClearanceSchema>;
+export const RecordClearanceSchema = z
+  .object({
+    reason: typedText(2000).pipe(z.string().trim().min(10, 'Say why colour may follow the reaction (at least 10 characters), e.g. the written medical advice')),
+  })
+  .strict();
+
+export const SkinTestListSchema = z.object({ tests: z.array(SkinTestSchema), clearances: z.array(SkinTestClearanceSchema) });

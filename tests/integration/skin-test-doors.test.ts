@@ -166,3 +166,56 @@ describe('other doors use the same rule', () => {
     expectRefused(claim, /read negative first/);
   });
 });
+
+describe('a reaction recorded later flags the bookings it affects', () => {
+  it('flags the booking at once, holds its reminders, refunds its deposit in full on cancelling; only the owner clears, and colour then needs a new negative test', async () => {
+    const client = await clientWith([{ appliedDaysAgo: 20, result: 'negative' }]);
+    await t.testDb.db.updateTable('clients').set({ email: `flag.${Date.now()}@example.test` }).where('id', '=', client.clientId!).execute();
+    const booked = await book(client.clientId!, rootColour, oxidative, localIso(futureWeekday(3, 3), '10:00'));
+    expect(booked.status).toBe(201);
+    const id = booked.body.id as string;
+    await t.testDb.db.updateTable('bookings').set({ deposit_cents: 4000 }).where('id', '=', id).execute();
+    expect((await desk$.get(apiPaths.booking(id))).body.skinTest.status).toBe('passed');
+    const queued = () => t.testDb.db.selectFrom('messages').select(['kind', 'status']).where('booking_id', '=', id).where('kind', 'like', 'reminder%').execute();
+    expect((await queued()).every((m) => m.status === 'queued')).toBe(true);
+    expect((await queued()).length).toBeGreaterThan(0);
+
+    // A new test (e.g. before another service) reads positive.
+    const recorded = await desk$.write('post', apiPaths.skinTests(client.clientId!), {
+      appliedAt: new Date(Date.now() - 3 * DAY).toISOString(), readAt: new Date(Date.now() - DAY).toISOString(), result: 'positive', product: 'Permanent colour with 6 % developer', notes: 'Redness behind the ear',
+    });
+    expect(recorded.status).toBe(201);
+    const view = (await desk$.get(apiPaths.booking(id))).body;
+    expect(view.skinTest).toMatchObject({ status: 'blocked', message: expect.stringMatching(/showed a reaction/) });
+    expect((await queued()).every((m) => m.status === 'dropped')).toBe(true);
+
+    // Only the owner may clear, with a reason; the desk is turned away.
+    expect((await desk$.write('post', apiPaths.skinTestClearances(client.clientId!), { reason: 'Written advice from the client’s dermatologist, 2 Dec' })).status).toBe(403);
+    expect((await owner$.write('post', apiPaths.skinTestClearances(client.clientId!), { reason: 'short' })).status).toBe(400);
+    const cleared = await owner$.write('post', apiPaths.skinTestClearances(client.clientId!), { reason: 'Written advice from the client’s dermatologist, 2 Dec' });
+    expect(cleared.status).toBe(201);
+    const list = (await desk$.get(apiPaths.skinTests(client.clientId!))).body;
+    expect(list.clearances).toMatchObject([{ reason: 'Written advice from the client’s dermatologist, 2 Dec' }]);
+    // Cleared, but the newest reading is still the reaction: colour needs a new negative test.
+    expect((await desk$.get(apiPaths.booking(id))).body.skinTest.status).toBe('blocked');
+
+    const cancelled = await desk$.write('post', apiPaths.cancelBooking(id), { reason: 'Skin test showed a reaction' });
+    expect(cancelled.status).toBe(200);
+    expect(cancelled.body.depositOutcome).toBe('refunded');
+  });
+
+  it('a booking on an unread test is kept as waiting: the client is not told it is confirmed, and a negative reading makes it passed', async () => {
+    const client = await clientWith([{ appliedDaysAgo: 1, result: 'pending', recordedDaysAgo: 1 }]);
+    await t.testDb.db.updateTable('clients').set({ email: `wait.${Date.now()}@example.test` }).where('id', '=', client.clientId!).execute();
+    const booked = await book(client.clientId!, rootColour, oxidative, localIso(futureWeekday(4, 3), '10:00'));
+    expect(booked.status).toBe(201);
+    expect(booked.body.skinTest.status).toBe('waiting');
+    const notice = await t.testDb.db.selectFrom('messages').select(['subject', 'body']).where('booking_id', '=', booked.body.id).where('kind', '=', 'confirmation').where('channel', '=', 'email').executeTakeFirstOrThrow();
+    expect(notice.subject).toMatch(/^Kept for you, waiting on your skin test/);
+    expect(notice.body).not.toMatch(/You're booked/);
+    const test = (await desk$.get(apiPaths.skinTests(client.clientId!))).body.tests[0];
+    const read = await desk$.write('post', apiPaths.skinTestReading(client.clientId!, test.id), { readAt: new Date().toISOString(), result: 'negative' });
+    expect(read.status).toBe(200);
+    expect((await desk$.get(apiPaths.booking(booked.body.id))).body.skinTest.status).toBe('passed');
+  });
+});

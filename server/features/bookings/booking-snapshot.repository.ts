@@ -6,7 +6,8 @@ export async function bookingSnapshot(db: Db, bookingId: string) {
   const booking = await db
     .selectFrom('bookings as b')
     .innerJoin('staff as s', 's.id', 'b.stylist_id')
-    .select(['b.status', 'b.salon_id', 'b.client_id', 'b.service_id', 'b.stylist_id', 'b.step_plan', 'b.deposit_cents', 'b.deposit_outcome', 's.display_name as stylist'])
+    .innerJoin('services as sv', 'sv.id', 'b.service_id')
+    .select(['b.status', 'b.salon_id', 'b.client_id', 'b.service_id', 'b.stylist_id', 'b.step_plan', 'b.deposit_cents', 'b.deposit_outcome', 's.display_name as stylist', 'sv.needs_skin_test'])
     .where('b.id', '=', bookingId)
     .executeTakeFirst();
   if (!booking) return undefined;
@@ -19,6 +20,7 @@ export async function bookingSnapshot(db: Db, bookingId: string) {
     .execute();
   return {
     row: booking,
+    serviceAsks: booking.needs_skin_test,
     audit: {
       status: booking.status,
       stylist: booking.stylist,

@@ -6,7 +6,9 @@ import { writeAudit } from '../audit/audit.repository';
 import { bookingSnapshot } from './booking-snapshot.repository';
 import { markCancelled, sittingStarts } from './change-booking.repository';
 import { replanBookingMessages } from '../messages/plan-messages.service';
-import { assertColourBookingsStillAllowed } from './skin-test-dependants';
+import { withColourBookingsKept } from './skin-test-dependants';
+import { bookingSkinTestStates } from '../skin-tests/skin-test-check.service';
+import type { StepPlan } from '../../../shared/schemas/step-plan.schemas';
 
 /**
  * The deposit policy on cancelling: inside the salon's cancellation window before the first sitting the
@@ -24,10 +26,15 @@ export async function cancelBooking(db: Kysely<Database>, salon: Salon, actorUse
     if (!['held', 'booked'].includes(before.row.status)) {
       throw new AppError('NOT_BOOKABLE', 409, `A ${before.row.status.replace('_', ' ')} booking cannot be cancelled.`);
     }
-    const [first] = await sittingStarts(trx, bookingId);
-    const outcome = depositOutcome(before.row.deposit_cents, first, now, salon.cancellationWindowHours, salon.cancellationKeeps);
-    await markCancelled(trx, bookingId, reason, outcome);
-    if (before.row.client_id) await assertColourBookingsStillAllowed(trx, salon, before.row.client_id, now);
+    const starts = await sittingStarts(trx, bookingId);
+    // A booking the client's skin-test record now blocks (a reaction since) is refunded in full: they cannot help it.
+    const [skinTest] = await bookingSkinTestStates(trx, salon, [{ clientId: before.row.client_id, status: before.row.status, plan: before.row.step_plan as StepPlan, serviceAsks: before.serviceAsks, starts }], now);
+    const outcome = skinTest.status === 'blocked' && before.row.deposit_cents > 0
+      ? 'refunded'
+      : depositOutcome(before.row.deposit_cents, starts[0], now, salon.cancellationWindowHours, salon.cancellationKeeps);
+    const cancel = () => markCancelled(trx, bookingId, reason, outcome);
+    if (before.row.client_id) await withColourBookingsKept(trx, salon, before.row.client_id, now, cancel);
+    else await cancel();
     const after = await bookingSnapshot(trx, bookingId);
     await writeAudit(trx, { salonId: salon.id, actorUserId, entity: 'booking', entityId: bookingId, action: `cancelled: ${reason}`, before: before.audit, after: after?.audit });
     await replanBookingMessages(trx, bookingId, now, 'cancelled'); // queued reminders dropped, cancellation planned

@@ -4,32 +4,34 @@ import type { Db } from '../../db/database';
 import type { Salon } from '../../../shared/schemas/salon.schemas';
 import type { StepPlan } from '../../../shared/schemas/step-plan.schemas';
 import { AppError } from '../../lib/app-error';
-import { assertSkinTestAllows } from '../skin-tests/skin-test-check.service';
+import { bookingSkinTestStates } from '../skin-tests/skin-test-check.service';
 
 /**
- * After a change to a client's skin tests (a skin-test appointment cancelled), every live booking of theirs whose
- * steps need a test must still satisfy the skin-test rule; otherwise the change is refused with the bookings named.
+ * A change to a client's skin tests (a skin-test appointment cancelled) must not take away the footing of a live
+ * colour booking that had one: `change` runs, and if any booking the rule allowed before is no longer allowed after,
+ * the whole change is refused with those bookings named. Bookings already blocked (a reaction recorded) stay
+ * cancellable: they are the desk's to clear.
  */
-export async function assertColourBookingsStillAllowed(db: Db, salon: Salon, clientId: string, now: Date): Promise<void> {
+export async function withColourBookingsKept(db: Db, salon: Salon, clientId: string, now: Date, change: () => Promise<void>): Promise<void> {
+  const before = await liveStates(db, salon, clientId, now);
+  await change();
+  const after = await liveStates(db, salon, clientId, now);
+  const lost = after.filter((b) => b.state === 'blocked' && before.find((x) => x.id === b.id)?.state !== 'blocked');
+  if (lost.length) {
+    const list = lost.map((b) => `${b.name} on ${DateTime.fromJSDate(b.start, { zone: salon.timeZone }).toFormat('ccc d LLL, h:mm a')}`).join('; ');
+    throw new AppError('SKIN_TEST', 409, `These colour bookings rely on this skin test: ${list}. Move or cancel them first.`);
+  }
+}
+
+async function liveStates(db: Db, salon: Salon, clientId: string, now: Date) {
   const live = await db
     .selectFrom('bookings as b')
     .innerJoin('services as s', 's.id', 'b.service_id')
-    .select(['b.id', 's.name', 's.needs_skin_test', 'b.step_plan', sql<Date[]>`array(select lower(si.during) from sittings si where si.booking_id = b.id order by si.seq)`.as('starts')])
+    .select(['b.id', 'b.status', 's.name', 's.needs_skin_test', 'b.step_plan', sql<Date[]>`array(select lower(si.during) from sittings si where si.booking_id = b.id order by si.seq)`.as('starts')])
     .where('b.client_id', '=', clientId)
     .where('b.status', 'in', ['held', 'booked'])
     .where(sql<boolean>`exists (select 1 from sittings si where si.booking_id = b.id and lower(si.during) > ${now})`)
     .execute();
-  const blocked: { name: string; start: Date }[] = [];
-  for (const b of live) {
-    try {
-      await assertSkinTestAllows(db, salon, { clientId, plan: b.step_plan as StepPlan, serviceAsks: b.needs_skin_test, starts: b.starts, allowWaiting: true }, now);
-    } catch (e) {
-      if (!(e instanceof AppError)) throw e;
-      blocked.push({ name: b.name, start: b.starts[0] });
-    }
-  }
-  if (blocked.length) {
-    const list = blocked.map((b) => `${b.name} on ${DateTime.fromJSDate(b.start, { zone: salon.timeZone }).toFormat('ccc d LLL, h:mm a')}`).join('; ');
-    throw new AppError('SKIN_TEST', 409, `These colour bookings rely on this skin test: ${list}. Move or cancel them first.`);
-  }
+  const states = await bookingSkinTestStates(db, salon, live.map((b) => ({ clientId, status: b.status, plan: b.step_plan as StepPlan, serviceAsks: b.needs_skin_test, starts: b.starts })), now);
+  return live.map((b, i) => ({ id: b.id, name: b.name, start: b.starts[0], state: states[i].status }));
 }

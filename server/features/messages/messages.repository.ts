@@ -1,5 +1,6 @@
 import { sql } from 'kysely';
 import type { Db } from '../../db/database';
+import type { StepPlan } from '../../../shared/schemas/step-plan.schemas';
 import type { MessageChannelChoice, MessageStatus } from '../../db/schema';
 import type { BookingContext } from './templates';
 
@@ -19,6 +20,8 @@ export interface BookingForMessages {
   offsets: number[];
   quietFrom: string;
   quietTo: string;
+  /** What the skin-test rule reads: the booking's own plan and the service's box, with the salon's rule. */
+  skinTestRule: { plan: StepPlan; serviceAsks: boolean; validityDays: number; families: string[] };
 }
 
 /** Everything a booking's messages need, in one read (inside the caller's transaction). */
@@ -31,7 +34,7 @@ export async function bookingForMessages(db: Db, bookingId: string): Promise<Boo
     .leftJoin('clients as c', 'c.id', 'b.client_id')
     .select(['b.id', 'b.salon_id', 'b.client_id', 'b.status', 'b.version', 's.name as salonName', 's.address', 's.time_zone', 's.reminder_offsets_hours', 's.quiet_from', 's.quiet_to',
       'sv.id as serviceId', 'sv.name as serviceName', 'sv.category', 'st.display_name', 'c.name as clientName', 'c.email', 'c.phone',
-      'c.message_channel', 'c.sms_stopped_at', 'c.marketing_opt_in', 's.skin_test_lead_hours'])
+      'c.message_channel', 'c.sms_stopped_at', 'c.marketing_opt_in', 's.skin_test_lead_hours', 's.skin_test_validity_days', 's.skin_test_families', 'b.step_plan', 'sv.needs_skin_test'])
     .where('b.id', '=', bookingId)
     .executeTakeFirst();
   if (!row) return null;
@@ -55,6 +58,7 @@ export async function bookingForMessages(db: Db, bookingId: string): Promise<Boo
     offsets: row.reminder_offsets_hours,
     quietFrom: row.quiet_from,
     quietTo: row.quiet_to,
+    skinTestRule: { plan: row.step_plan as StepPlan, serviceAsks: row.needs_skin_test, validityDays: row.skin_test_validity_days, families: row.skin_test_families },
     context: {
       bookingId, salonName: row.salonName, address: row.address, timeZone: row.time_zone, clientName: row.clientName ?? '',
       serviceName: row.serviceName, category: row.category, stylistName: row.display_name, sittings,

@@ -3,6 +3,8 @@ import type { Insertable } from 'kysely';
 import type { Db } from '../../db/database';
 import type { MessagesTable } from '../../db/schema';
 import { followUpTimes } from '../../../shared/messages/follow-up-times';
+import type { Salon } from '../../../shared/schemas/salon.schemas';
+import { bookingSkinTestStates } from '../skin-tests/skin-test-check.service';
 import { bookingForMessages, dropQueued, dropQueuedForClient, upcomingBookingIds, type BookingForMessages } from './messages.repository';
 import { followUpRulesForService } from './follow-up-rules.repository';
 import { outOfQuietHours, reminderAt } from './quiet-hours';
@@ -12,8 +14,11 @@ import {
   type BookingMessageKind, type MessageText,
 } from './templates';
 
-/** Why the booking's messages are being planned again; 'preferences' adds missing reminders only. */
-export type BookingChange = 'booked' | 'moved' | 'cancelled' | 'preferences';
+/**
+ * Why the booking's messages are being planned again; 'preferences' adds missing reminders only; 'skin_test'
+ * follows a change of the client's skin-test record (reminders held while the record blocks the colour).
+ */
+export type BookingChange = 'booked' | 'moved' | 'cancelled' | 'preferences' | 'skin_test';
 
 const PLANNED_FOR = ['booked', 'checked_in', 'cancelled'];
 /** The notice sent when a booking is made, moved or cancelled (sequence 0 in the dedupe key). */
@@ -34,12 +39,19 @@ export async function replanBookingMessages(db: Db, bookingId: string, now: Date
   const b = await bookingForMessages(db, bookingId);
   if (!b) return [];
   const cancelled = b.status === 'cancelled';
-  if (change !== 'preferences') await dropQueued(db, bookingId, b.version, cancelled);
+  const skinTest = await skinTestOf(db, b, now);
+  // While the client's record blocks the colour, nothing more goes out until the desk cancels or changes the plan.
+  if (skinTest === 'blocked' && !cancelled) {
+    await dropQueued(db, bookingId, b.version, true);
+    return [];
+  }
+  const addOnly = change === 'preferences' || change === 'skin_test';
+  if (!addOnly) await dropQueued(db, bookingId, b.version, cancelled);
   // A hold has no client yet and no-shows or finished bookings need nothing new.
   if (!b.clientId || !PLANNED_FOR.includes(b.status) || b.context.sittings.length === 0) return [];
 
   const rows: Insertable<MessagesTable>[] = [];
-  if (change !== 'preferences') rows.push(...toRows(b, 0, firstKind(b, change), firstMessage(b, change), now, null));
+  if (!addOnly) rows.push(...toRows(b, 0, firstKind(b, change), firstMessage(b, change, skinTest === 'waiting'), now, null));
   if (!cancelled) rows.push(...await sittingMessages(db, b, now));
   return insertPlanned(db, rows);
 }
@@ -75,9 +87,18 @@ function firstKind(b: BookingForMessages, change: BookingChange): string {
   return b.context.category === 'skin_test' ? 'skin_test_booked' : 'confirmation';
 }
 
-function firstMessage(b: BookingForMessages, change: BookingChange): MessageText {
+function firstMessage(b: BookingForMessages, change: BookingChange, waitingOnTest: boolean): MessageText {
   const kind = firstKind(b, change);
-  return kind === 'skin_test_booked' ? skinTestBookedMessage(b.context) : bookingMessage(kind as BookingMessageKind, b.context);
+  if (kind === 'skin_test_booked') return skinTestBookedMessage(b.context);
+  return bookingMessage(kind as BookingMessageKind, b.context, waitingOnTest);
+}
+
+/** The booking's skin-test footing, by the one rule (the salon's lead time, validity and tested families). */
+async function skinTestOf(db: Db, b: BookingForMessages, now: Date) {
+  const rule = b.skinTestRule;
+  const salon = { timeZone: b.context.timeZone, skinTestLeadHours: b.context.skinTestLeadHours, skinTestValidityDays: rule.validityDays, skinTestFamilies: rule.families as Salon['skinTestFamilies'] };
+  const [state] = await bookingSkinTestStates(db, salon, [{ clientId: b.clientId, status: b.status, plan: rule.plan, serviceAsks: rule.serviceAsks, starts: b.context.sittings.map((s) => s.start) }], now);
+  return state.status;
 }
 
 /** Reminders, "day n of m", aftercare and marketing follow-ups for every sitting still ahead. */
@@ -163,4 +184,12 @@ export async function replanClientMessages(db: Db, clientId: string, now: Date):
   const planned: PlannedMessage[] = [];
   for (const id of await upcomingBookingIds(db, clientId, now)) planned.push(...await replanBookingMessages(db, id, now, 'preferences'));
   return planned;
+}
+
+/**
+ * After a client's skin-test record changed (a test recorded or read, a clearance): each upcoming booking's
+ * reminders are held while the record blocks its colour, and planned again once it allows it.
+ */
+export async function replanAfterSkinTestChange(db: Db, clientId: string, now: Date): Promise<void> {
+  for (const id of await upcomingBookingIds(db, clientId, now)) await replanBookingMessages(db, id, now, 'skin_test');
 }

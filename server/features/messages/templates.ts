@@ -53,7 +53,11 @@ function calendarFiles(c: BookingContext): MessageAttachment[] {
 }
 
 /** Confirmation, change or cancellation of a whole booking. */
-export function bookingMessage(kind: BookingMessageKind, c: BookingContext): MessageText {
+/**
+ * The notice of a booking made, moved or cancelled. A booking that waits on an unread skin test is not called
+ * confirmed: the colour goes ahead only once the test reads negative.
+ */
+export function bookingMessage(kind: BookingMessageKind, c: BookingContext, waitingOnTest = false): MessageText {
   const hello = `Hello ${firstName(c.clientName)},`;
   const first = when(c.sittings[0].start, c.timeZone);
   if (kind === 'cancellation') {
@@ -66,6 +70,15 @@ export function bookingMessage(kind: BookingMessageKind, c: BookingContext): Mes
   }
   const verb = kind === 'change' ? 'Moved' : 'Booked';
   const summary = `${c.serviceName} with ${c.stylistName} at ${c.salonName}, ${c.address}`;
+  if (waitingOnTest) {
+    const note = 'This time is kept for you while your skin test is read. The colour goes ahead only if the test shows no reaction; we will tell you if it cannot.';
+    return {
+      sms: `${c.salonName}: ${c.serviceName} with ${c.stylistName}, ${first} is kept for you, waiting on your skin test result. ${HOW_TO_CHANGE}`,
+      subject: `Kept for you, waiting on your skin test: ${c.serviceName}, ${first}`,
+      email: `${hello}\n\n${summary}.\n${sittingLines(c)}\n\n${note}\n\n${preparation(c.category)}\n\n${HOW_TO_CHANGE}\n`,
+      attachments: calendarFiles(c),
+    };
+  }
   return {
     sms: `${c.salonName}: ${kind === 'change' ? 'moved' : 'booked'} — ${c.serviceName} with ${c.stylistName}, ${first}${c.sittings.length > 1 ? ` (sitting 1 of ${c.sittings.length})` : ''}. ${HOW_TO_CHANGE}`,
     subject: `${verb}: ${c.serviceName}, ${first}`,

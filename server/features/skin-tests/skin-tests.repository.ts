@@ -95,3 +95,24 @@ export async function skinTestClearancesOf(db: Db, clientIds: readonly string[])
   for (const r of rows) byClient.get(r.client_id)!.push({ at: r.recorded_at });
   return byClient;
 }
+
+/** The owner's clearances for a client, oldest first, with who recorded each (the name kept beside the id). */
+export function listClearances(db: Db, salonId: string, clientId: string) {
+  return db
+    .selectFrom('skin_test_clearances')
+    .select(['id', 'recorded_at', 'recorded_by_name', 'reason'])
+    .where('salon_id', '=', salonId)
+    .where('client_id', '=', clientId)
+    .orderBy('recorded_at')
+    .orderBy('id')
+    .execute();
+}
+
+export async function insertClearance(db: Db, c: { salonId: string; clientId: string; recordedBy: string; recordedByName: string; reason: string }): Promise<string> {
+  const row = await db
+    .insertInto('skin_test_clearances')
+    .values({ salon_id: c.salonId, client_id: c.clientId, recorded_by: c.recordedBy, recorded_by_name: c.recordedByName, reason: c.reason })
+    .returning('id')
+    .executeTakeFirstOrThrow();
+  return row.id;
+}

@@ -1,13 +1,15 @@
 import { DateTime } from 'luxon';
 import type { SessionUser } from '../../../shared/schemas/auth.schemas';
 import type { z } from 'zod';
-import { READ_BEFORE_APPLIED, type RecordSkinTestReading, type RecordSkinTestSchema, type SkinTest } from '../../../shared/schemas/skin-test.schemas';
+import { READ_BEFORE_APPLIED, type RecordSkinTestReading, type RecordSkinTestSchema, type SkinTest, type SkinTestClearance } from '../../../shared/schemas/skin-test.schemas';
 import type { Db } from '../../db/database';
 import { AppError, invalidField, notFound } from '../../lib/app-error';
 import { writeAudit } from '../audit/audit.repository';
 import { findClient } from '../clients/clients.repository';
 import { findSalon } from '../salon/salon.repository';
-import { findSkinTest, insertSkinTest, listSkinTests, setSkinTestReading, type SkinTestRow } from './skin-tests.repository';
+import { findSkinTest, insertSkinTest, listClearances, listSkinTests, setSkinTestReading, type SkinTestRow } from './skin-tests.repository';
+import { toClearanceView } from './skin-test-clearances.service';
+import { replanAfterSkinTestChange } from '../messages/plan-messages.service';
 
 // The desk's clock may run a little ahead of the server's, and the form sends whole minutes.
 const CLOCK_SLACK_MS = 2 * 60_000;
@@ -31,9 +33,10 @@ async function clientOfSalon(db: Db, salonId: string, clientId: string) {
 
 const inFuture = (at: Date, now: Date) => at.getTime() > now.getTime() + CLOCK_SLACK_MS;
 
-export async function skinTestsOf(db: Db, salonId: string, clientId: string): Promise<SkinTest[]> {
+export async function skinTestsOf(db: Db, salonId: string, clientId: string): Promise<{ tests: SkinTest[]; clearances: SkinTestClearance[] }> {
   await clientOfSalon(db, salonId, clientId);
-  return (await listSkinTests(db, salonId, clientId)).map(toView);
+  const [tests, clearances] = await Promise.all([listSkinTests(db, salonId, clientId), listClearances(db, salonId, clientId)]);
+  return { tests: tests.map(toView), clearances: clearances.map(toClearanceView) };
 }
 
 /** A new test, applied (pending) or already read; written to the audit log with who recorded it. */
@@ -48,6 +51,7 @@ export async function recordSkinTest(db: Db, user: SessionUser, clientId: string
     const { id } = await insertSkinTest(trx, { ...body, salonId: user.salonId, clientId, appliedAt, readAt, recordedBy: user.id });
     const test = toView((await findSkinTest(trx, user.salonId, clientId, id))!);
     await writeAudit(trx, { salonId: user.salonId, actorUserId: user.id, entity: 'skin_test', entityId: id, action: 'recorded', after: test });
+    await replanAfterSkinTestChange(trx, clientId, now);
     return test;
   });
 }
@@ -82,6 +86,7 @@ export async function recordSkinTestReading(
     }
     const after = toView((await findSkinTest(trx, user.salonId, ids.clientId, ids.testId))!);
     await writeAudit(trx, { salonId: user.salonId, actorUserId: user.id, entity: 'skin_test', entityId: ids.testId, action: 'reading recorded', before: reading(before), after: reading(after) });
+    await replanAfterSkinTestChange(trx, ids.clientId, now);
     return after;
   });
 }

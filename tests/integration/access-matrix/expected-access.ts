@@ -43,6 +43,7 @@ export const expectedAccess: Record<string, Expectation> = {
   'GET /api/clients/{id}/skin-tests': { allow: STAFF, own: true },
   'POST /api/clients/{id}/skin-tests': { allow: STAFF, own: true },
   'POST /api/clients/{id}/skin-tests/{testId}/reading': { allow: STAFF, own: true },
+  'POST /api/clients/{id}/skin-test-clearances': { allow: ['owner'], own: true },
   'GET /api/standby': { allow: STAFF },
   'POST /api/standby': { allow: DESK },
   'DELETE /api/standby/{id}': { allow: DESK, own: true },

@@ -1,6 +1,7 @@
 import { Link } from 'react-router-dom';
 import type { BookingView } from '../../../../shared/schemas/booking-view.schemas';
 import { BookingStatusBadge } from '../../../components/ui/booking-status-badge';
+import { SkinTestFlag } from '../../../components/ui/skin-test-flag';
 import { SectionCard } from '../../../components/ui/section-card';
 import { StepStrip } from '../../../components/ui/step-strip';
 import { paths } from '../../../config/paths';
@@ -27,6 +28,7 @@ export function BookingSummary({ booking, timeZone, currency }: Props) {
         <dt className="font-bold">Status</dt>
         <dd>
           <BookingStatusBadge status={booking.status} />
+          <SkinTestFlag skinTest={booking.skinTest} detailed />
         </dd>
         <dt className="font-bold">Price</dt>
         <dd className="tabular">{formatMoney(booking.priceCents, currency)}</dd>

@@ -1,6 +1,7 @@
 import type { ReactNode } from 'react';
 import type { BookingView } from '../../../../shared/schemas/booking-view.schemas';
 import { BookingStatusBadge } from '../../../components/ui/booking-status-badge';
+import { SkinTestFlag } from '../../../components/ui/skin-test-flag';
 import { formatMoney, sittingLabel } from '../../../lib/booking-labels';
 import { formatDay, formatTimeRange } from '../../../lib/time';
 
@@ -19,6 +20,7 @@ export function BookingCard({ booking, timeZone, currency, headingLevel: Heading
           </p>
         </div>
         <BookingStatusBadge status={booking.status} />
+        <SkinTestFlag skinTest={booking.skinTest} detailed />
       </div>
       <ul className="mt-3 flex flex-col gap-2">
         {booking.sittings.map((sitting) => (

@@ -1,5 +1,6 @@
 import { Link } from 'react-router-dom';
 import { BookingStatusBadge } from '../../../components/ui/booking-status-badge';
+import { SkinTestFlag } from '../../../components/ui/skin-test-flag';
 import { sittingLabel } from '../../../lib/booking-labels';
 import { formatTimeRange } from '../../../lib/time';
 import type { PlacedSitting } from '../lay-out-day';
@@ -49,6 +50,7 @@ export function SittingBlock({ placed, firstHour, timeZone, roomy, href }: Props
         <p className="tabular">{times}</p>
         <p className="truncate">{sitting.chairName}</p>
         {booking.status !== 'booked' && <BookingStatusBadge status={booking.status} />}
+        <SkinTestFlag skinTest={booking.skinTest} />
       </div>
     </article>
   );

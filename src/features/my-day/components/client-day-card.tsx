@@ -2,6 +2,7 @@ import type { DateTime } from 'luxon';
 import { Link } from 'react-router-dom';
 import type { BookingView, SittingView } from '../../../../shared/schemas/booking-view.schemas';
 import { BookingStatusBadge } from '../../../components/ui/booking-status-badge';
+import { SkinTestFlag } from '../../../components/ui/skin-test-flag';
 import { StepKindIcon } from '../../../components/ui/step-kind-icon';
 import { StepStrip } from '../../../components/ui/step-strip';
 import { sittingLabel, stepKindLabels } from '../../../lib/booking-labels';
@@ -31,6 +32,7 @@ export function ClientDayCard({ booking, sitting, timeZone, now }: Props) {
           </p>
         </div>
         <BookingStatusBadge status={booking.status} />
+        <SkinTestFlag skinTest={booking.skinTest} detailed />
       </div>
       <StepStrip steps={sitting.steps} timeZone={timeZone} />
       {progress.state === 'upcoming' && (

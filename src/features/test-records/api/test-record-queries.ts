@@ -1,7 +1,7 @@
 import { queryOptions, useMutation, useQueryClient } from '@tanstack/react-query';
 import type { z } from 'zod';
 import { apiPaths } from '../../../../shared/api/api-paths';
-import { RecordSkinTestSchema, SkinTestListSchema, SkinTestSchema, type RecordSkinTestReading } from '../../../../shared/schemas/skin-test.schemas';
+import { RecordClearanceSchema, RecordSkinTestSchema, SkinTestClearanceSchema, SkinTestListSchema, SkinTestSchema, type RecordSkinTestReading } from '../../../../shared/schemas/skin-test.schemas';
 import { StrandTestListSchema, StrandTestSchema, type RecordStrandTest } from '../../../../shared/schemas/strand-test.schemas';
 import { apiGet, apiWrite } from '../../../lib/api-client';
 
@@ -15,11 +15,22 @@ export const testRecordQueries = {
     queryOptions({ queryKey: [...testRecordQueries.all(), 'strand', clientId] as const, queryFn: () => apiGet(strandTestsPath(clientId), StrandTestListSchema) }),
 };
 
+// A skin-test change can flag or clear any of the client's bookings (on every day and list they appear in), so
+// everything cached is refreshed, not only the test list.
 export function useRecordSkinTest(clientId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (body: z.input<typeof RecordSkinTestSchema>) => apiWrite('POST', apiPaths.skinTests(clientId), body, SkinTestSchema),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: testRecordQueries.skin(clientId).queryKey }),
+    onSuccess: () => queryClient.invalidateQueries(),
+  });
+}
+
+/** The owner's clearance of a positive skin test. */
+export function useRecordClearance(clientId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (body: z.input<typeof RecordClearanceSchema>) => apiWrite('POST', apiPaths.skinTestClearances(clientId), body, SkinTestClearanceSchema),
+    onSuccess: () => queryClient.invalidateQueries(),
   });
 }
 
@@ -28,7 +39,7 @@ export function useRecordSkinTestReading(clientId: string, testId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (body: RecordSkinTestReading) => apiWrite('POST', apiPaths.skinTestReading(clientId, testId), body, SkinTestSchema),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: testRecordQueries.skin(clientId).queryKey }),
+    onSuccess: () => queryClient.invalidateQueries(),
   });
 }
 

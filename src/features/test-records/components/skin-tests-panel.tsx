@@ -14,6 +14,8 @@ import { formatDay, formatTime } from '../../../lib/time';
 import { testRecordQueries, useRecordSkinTest } from '../api/test-record-queries';
 import { InstantField } from './instant-field';
 import { SkinTestReadingForm } from './skin-test-reading-form';
+import { ClearancePanel } from './clearance-panel';
+import { sessionQueries } from '../../auth/api/session-queries';
 import { skinTestResultLabels } from './skin-test-result-labels';
 
 type Input = z.input<typeof RecordSkinTestSchema>;
@@ -28,14 +30,27 @@ export function SkinTestsPanel({ clientId, zone }: { clientId: string; zone: str
   const { register, control, handleSubmit, setError, formState, reset } = form;
   const err = (path: string) => fieldError(formState.errors, path);
   const submit = handleSubmit((body) => record.mutateAsync(body).then(() => reset(), (e) => showServerErrors(e, setError, ['appliedAt', 'readAt', 'result', 'product', 'notes'])));
-  const latest = list.data?.tests[0];
+  const session = useQuery(sessionQueries.current());
+  const tests = list.data?.tests ?? [];
+  const clearances = list.data?.clearances ?? [];
+  // A reaction at any time blocks oxidative colour until an owner's clearance recorded after it (the one rule).
+  const reaction = tests.find((t) => t.result === 'positive');
+  const cleared = reaction && clearances.some((c) => c.recordedAt >= (reaction.readAt ?? reaction.appliedAt));
+  const latestRead = tests.find((t) => t.result !== 'pending');
   return (
     <div className="flex flex-col gap-4">
-      {latest && (latest.result === 'positive' || latest.result === 'unclear') && (
-        <Notice tone="danger" title={`The latest skin test was ${latest.result}: oxidative colour cannot be booked.`}>
-          {latest.result === 'unclear' ? 'Repeat the test before any oxidative colour.' : 'Do not colour with oxidative products; follow local regulations and licensed practice.'} Colour bookings made before this result still stand: check the bookings below.
+      {reaction && !cleared && (
+        <Notice tone="danger" title="A skin test showed a reaction: no oxidative colour until an owner records a clearance.">
+          Do not colour with oxidative products; follow local regulations and licensed practice. Upcoming colour bookings of this client are
+          flagged below: cancel them (the deposit is refunded in full) or change the plan to steps that need no skin test.
         </Notice>
       )}
+      {!reaction && latestRead?.result === 'unclear' && (
+        <Notice tone="danger" title="The latest skin test was unclear: a new test is needed before oxidative colour.">
+          Upcoming colour bookings of this client are flagged below until a new test reads negative.
+        </Notice>
+      )}
+      {reaction && <ClearancePanel clientId={clientId} zone={zone} clearances={clearances} canClear={session.data?.role === 'owner'} />}
       {list.isError && <FormAlert>{list.error.message}</FormAlert>}
       {list.data && list.data.tests.length === 0 && <p className="text-ink/80">No skin test on record.</p>}
       <ul className="flex flex-col gap-2" aria-label="Skin tests">
