@@ -18,6 +18,8 @@ export const ClientDetailSchema = ClientSummarySchema.extend({
   ...MessagePreferencesSchema.shape,
   /** When the client replied STOP to a text; no SMS until they reply START. */
   smsStoppedAt: z.string().nullable(),
+  /** The client's hair history says they have reacted to hair colour before (what they wrote, or null). */
+  reportedReaction: z.string().nullable(),
   bookings: z.array(BookingViewSchema),
 });
 export type ClientDetail = z.infer<typeof ClientDetailSchema>;

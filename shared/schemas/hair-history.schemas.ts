@@ -4,7 +4,7 @@ import { InstantSchema } from './common.schemas';
 const text = (max: number) => z.string().trim().max(max, `Use at most ${max} characters`);
 
 /** "Not sure" is a real answer: a client who does not know about henna or box dye needs a strand test. */
-export const HairAnswerSchema = z.enum(['no', 'yes', 'not_sure']);
+export const HairAnswerSchema = z.enum(['no', 'yes', 'not_sure'], { error: 'Choose an answer' });
 export type HairAnswer = z.infer<typeof HairAnswerSchema>;
 
 export const ColourMethodSchema = z.enum(['natural', 'salon', 'at_home', 'mixed']);
@@ -46,9 +46,13 @@ export const HairHistorySchema = z
   });
 export type HairHistory = z.infer<typeof HairHistorySchema>;
 
-/** What a blank form starts from. */
+/**
+ * What a blank form starts from. The reaction question starts unanswered, so nobody says "no" by leaving it be:
+ * the form requires an answer before it saves.
+ */
 export function emptyHairHistory(): HairHistory {
   const none = { answer: 'no' as const, details: '' };
+  const unanswered = { answer: undefined as unknown as HairAnswer, details: '' };
   return {
     currentColour: '',
     currentColourMethod: 'natural',
@@ -57,7 +61,7 @@ export function emptyHairHistory(): HairHistory {
     plantDyes: { ...none },
     structural: { relaxer: false, perm: false, keratin: false, details: '' },
     vividDyes: { ...none },
-    previousReaction: { ...none },
+    previousReaction: unanswered,
     scalpConditions: '',
     medicalNotes: '',
   };

@@ -47,6 +47,10 @@ describe('a new client on a phone', () => {
     await page.getByRole('heading', { name: 'Your details' }).waitFor();
     // Answers typed here are saved by the step's one action (they were once lost when "Continue" skipped the save).
     await page.getByLabel('Your hair colour now').fill('Faded copper over dark roots');
+    // The reaction question starts unanswered and must be answered before moving on.
+    await page.getByRole('button', { name: 'Save and continue' }).click();
+    await page.getByText('Choose an answer').first().waitFor();
+    await page.getByRole('group', { name: /ever reacted to hair colour/ }).getByLabel('No', { exact: true }).check();
     await page.getByRole('button', { name: 'Save and continue' }).click();
     await page.getByRole('heading', { name: 'Before you pay' }).waitFor();
     const history = await (await page.request.get(`${baseUrl()}/api/me/hair-history`)).json();

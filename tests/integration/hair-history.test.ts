@@ -13,6 +13,7 @@ const answers: HairHistory = {
   currentColourMethod: 'mixed',
   pastServices: [{ service: 'Full head bleach', when: 'March 2026' }],
   plantDyes: { answer: 'yes', details: 'Henna, summer 2025' },
+  previousReaction: { answer: 'no', details: '' },
   medicalNotes: 'Private note',
 };
 

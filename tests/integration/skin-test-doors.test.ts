@@ -7,6 +7,7 @@ import { futureWeekday, localIso } from '../setup/dates';
 import { apiPaths } from '../../shared/api/api-paths';
 import { setupPaths } from '../../shared/api/setup-paths';
 import type { StepPlan } from '../../shared/schemas/step-plan.schemas';
+import { emptyHairHistory } from '../../shared/schemas/hair-history.schemas';
 
 // Every way oxidative colour could once be booked without a valid skin test, tried at the API. The rule: a test
 // counts as passed only when read negative, at least 48 hours before the colour (Cosmetics Europe Recommendation
@@ -217,5 +218,30 @@ describe('a reaction recorded later flags the bookings it affects', () => {
     const read = await desk$.write('post', apiPaths.skinTestReading(client.clientId!, test.id), { readAt: new Date().toISOString(), result: 'negative' });
     expect(read.status).toBe(200);
     expect((await desk$.get(apiPaths.booking(booked.body.id))).body.skinTest.status).toBe('passed');
+  });
+});
+
+describe('hair history reaches booking', () => {
+  it('"I have reacted to hair colour" blocks online colour even with a negative test, and flags the client for the desk', async () => {
+    const client = await clientWith([{ appliedDaysAgo: 10, result: 'negative' }]);
+    const c = await signedInAgent(t.app, client.email, client.password);
+    const saved = await c.write('put', '/api/me/hair-history', {
+      ...emptyHairHistory(), previousReaction: { answer: 'yes', details: 'Itchy scalp and swelling after a box dye, 2024' },
+    });
+    expect(saved.status).toBe(200);
+    const visitor = await anonymousAgent(t.app);
+    const held = await visitor.write('post', apiPaths.holds, { salonSlug: slug, serviceId: rootColour, stylistId: ana.staffId, start: localIso(futureWeekday(5, 4), '10:00') }, { 'X-Forwarded-For': '10.9.0.2' });
+    expect(held.status).toBe(201);
+    expectRefused(await c.write('post', apiPaths.claimHold(held.body.holdId), { secret: held.body.holdSecret }), /reacted to hair colour before.*book a consultation/);
+    const card = (await desk$.get(apiPaths.client(client.clientId!))).body;
+    expect(card.reportedReaction).toBe('Itchy scalp and swelling after a box dye, 2024');
+  });
+
+  it('the hair-history form cannot be saved with the reaction question left unanswered', async () => {
+    const client = await insertUser(t.testDb.db, salon.salonId, 'client');
+    const c = await signedInAgent(t.app, client.email, client.password);
+    const res = await c.write('put', '/api/me/hair-history', { ...emptyHairHistory() });
+    expect(res.status).toBe(400);
+    expect(res.body.error.fields['previousReaction.answer']).toBe('Choose an answer');
   });
 });

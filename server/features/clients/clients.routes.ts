@@ -5,6 +5,7 @@ import { BookingStatusSchema, IdParamsSchema } from '../../../shared/schemas/com
 import type { AppDeps } from '../../app-deps';
 import { DESK, STAFF } from '../../auth/require-access';
 import { apiRoute } from '../../lib/api-route';
+import { findHairHistory } from '../hair-history/hair-history.repository';
 import { notFound } from '../../lib/app-error';
 import { findSalon, salonCountry } from '../salon/salon.repository';
 import { storedPhone } from '../../lib/stored-phone';
@@ -40,7 +41,9 @@ export function registerClientRoutes({ table, db }: AppDeps): void {
         { salonId: salon.id, clientId: client.id, statuses: BookingStatusSchema.options },
         salon.timeZone,
       );
-      return { ...client, smsStoppedAt: client.smsStoppedAt?.toISOString() ?? null, bookings };
+      const reaction = (await findHairHistory(db, client.id)).answers?.previousReaction;
+      const reportedReaction = reaction?.answer === 'yes' ? reaction.details : null;
+      return { ...client, smsStoppedAt: client.smsStoppedAt?.toISOString() ?? null, reportedReaction, bookings };
     },
   );
   apiRoute(

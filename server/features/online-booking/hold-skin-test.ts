@@ -4,6 +4,9 @@ import type { StepPlan } from '../../../shared/schemas/step-plan.schemas';
 import { assertSkinTestAllows } from '../skin-tests/skin-test-check.service';
 import { sittingStarts } from '../bookings/change-booking.repository';
 import type { HoldRow } from './holds.repository';
+import { planNeedsSkinTest } from '../../../shared/rules/skin-test-need';
+import { AppError } from '../../lib/app-error';
+import { findHairHistory } from '../hair-history/hair-history.repository';
 
 /**
  * An online hold may become a booking only on a skin test already read negative: online there is no "waiting on a
@@ -11,6 +14,15 @@ import type { HoldRow } from './holds.repository';
  * a reading may have changed in between.
  */
 export async function assertHoldSkinTest(db: Db, salon: Salon, hold: HoldRow, clientId: string, now: Date): Promise<void> {
+  const plan = hold.step_plan as StepPlan;
+  // A client who told us they have reacted to hair colour is not booked for tested colour online: the salon
+  // advises first, at a consultation (the EU label warns: do not colour if you have ever reacted after colouring).
+  if (planNeedsSkinTest(plan, salon.skinTestFamilies, hold.needs_skin_test)) {
+    const reaction = (await findHairHistory(db, clientId)).answers?.previousReaction;
+    if (reaction?.answer === 'yes') {
+      throw new AppError('SKIN_TEST', 409, 'You told us you have reacted to hair colour before, so this colour cannot be booked online. Please book a consultation: the salon will advise on what is safe for you.');
+    }
+  }
   const starts = await sittingStarts(db, hold.id);
-  await assertSkinTestAllows(db, salon, { clientId, plan: hold.step_plan as StepPlan, serviceAsks: hold.needs_skin_test, starts, allowWaiting: false }, now);
+  await assertSkinTestAllows(db, salon, { clientId, plan, serviceAsks: hold.needs_skin_test, starts, allowWaiting: false }, now);
 }

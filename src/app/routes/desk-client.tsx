@@ -2,6 +2,8 @@ import { useSuspenseQuery } from '@tanstack/react-query';
 import { Link, useParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { IdSchema } from '../../../shared/schemas/common.schemas';
 import { PageHeader } from '../../components/ui/page-header';
+import { Notice } from '../../components/ui/notice';
+import { REACTION_CAUTION } from '../../../shared/schemas/hair-history.schemas';
 import { TimeZoneNote } from '../../components/ui/time-zone-note';
 import { paths } from '../../config/paths';
 import { SectionCard } from '../../components/ui/section-card';
@@ -34,6 +36,12 @@ export function Component() {
         ← Back to the book
       </Link>
       <PageHeader title={client.name} subtitle={<TimeZoneNote timeZone={salon.timeZone} />} />
+      {client.reportedReaction !== null && (
+        <Notice tone="danger" title="This client reported a reaction to hair colour">
+          {client.reportedReaction ? `In their hair history: “${client.reportedReaction}”. ` : ''}
+          They cannot book colour that needs a skin test online. {REACTION_CAUTION}
+        </Notice>
+      )}
       <ClientProfile client={client} />
       <SectionCard title="Skin tests">
         <SkinTestsPanel clientId={client.id} zone={salon.timeZone} />

@@ -32,20 +32,21 @@ export function HairHistoryForm({ onSaved, owner = 'me', submitLabel = 'Save hai
   const history = useQuery(hairHistoryQueries.detail(owner));
   if (history.isPending) return <LoadingState label="Loading your hair history…" />;
   if (history.isError) return <FormAlert>{history.error.message}</FormAlert>;
-  return <Fields initial={history.data.answers ?? emptyHairHistory()} owner={owner} onSaved={onSaved} submitLabel={submitLabel} />;
+  return <Fields initial={history.data.answers ?? emptyHairHistory()} saved={history.data.answers !== null} owner={owner} onSaved={onSaved} submitLabel={submitLabel} />;
 }
 
 const methodOptions = Object.entries(methodLabels).map(([value, label]) => ({ value, label }));
 
-function Fields({ initial, owner, onSaved, submitLabel }: { initial: HairHistory; owner: HistoryOwner; onSaved?: () => void; submitLabel: string }) {
+function Fields({ initial, saved, owner, onSaved, submitLabel }: { initial: HairHistory; saved: boolean; owner: HistoryOwner; onSaved?: () => void; submitLabel: string }) {
   const save = useSaveHairHistory(owner);
   const { register, control, handleSubmit, setError, reset, formState } = useForm<HairHistory>({ resolver: zodResolver(HairHistorySchema), defaultValues: initial });
   const { errors } = formState;
   const reaction = useWatch({ control, name: 'previousReaction.answer' });
   useUnsavedChangesGuard(formState.isDirty && !formState.isSubmitting);
   const submit = handleSubmit((answers) =>
-    // Nothing changed since the last save (or nothing typed): there is nothing to store, only to move on.
-    !formState.isDirty ? onSaved?.() : save.mutateAsync(answers).then(
+    // Nothing changed since the last save: there is nothing to store, only to move on. A form never saved is saved,
+    // so its required answers (the reaction question) are always given once.
+    saved && !formState.isDirty ? onSaved?.() : save.mutateAsync(answers).then(
       (saved) => {
         reset(saved.answers ?? answers); // the saved answers become the new baseline, so the form is clean again
         onSaved?.();
@@ -62,7 +63,7 @@ function Fields({ initial, owner, onSaved, submitLabel }: { initial: HairHistory
       </div>
       <PastServicesFields control={control} register={register} errors={errors} />
       {answerQuestions.map((q) => (
-        <AnswerFieldset key={q.name} name={q.name} question={q.question} detailsLabel={q.details} register={register} detailsError={err(`${q.name}.details`)} />
+        <AnswerFieldset key={q.name} name={q.name} question={q.question} detailsLabel={q.details} register={register} detailsError={err(`${q.name}.details`)} answerError={err(`${q.name}.answer`)} />
       ))}
       <fieldset className="flex flex-col gap-2">
         <legend className="mb-1 font-bold">Relaxers, perms or keratin treatments you have had</legend>
@@ -83,6 +84,7 @@ function Fields({ initial, owner, onSaved, submitLabel }: { initial: HairHistory
           detailsLabel="What happened, and when"
           register={register}
           detailsError={err('previousReaction.details')}
+          answerError={err('previousReaction.answer')}
         />
         <ReactionCaution emphasised={reaction === 'yes'} />
       </div>
