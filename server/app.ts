@@ -16,6 +16,7 @@ import { registerPasswordResetRoutes } from './features/password-reset/password-
 import { registerSalonRoutes } from './features/salon/salon.routes';
 import { registerBookingRoutes } from './features/bookings/bookings.routes';
 import { registerClientRoutes } from './features/clients/clients.routes';
+import { registerClientAgeRoutes } from './features/clients/client-age.routes';
 import { registerMailboxRoutes } from './features/mailbox/mailbox.routes';
 import { registerOwnerRoutes } from './features/owner/owner.routes';
 import { registerBookingChangeRoutes } from './features/bookings/booking-changes.routes';
@@ -70,6 +71,7 @@ export function createApp(deps: Omit<AppDeps, 'table' | 'storage' | 'readCache'>
     registerBookingRoutes,
     registerBookingChangeRoutes,
     registerServiceRoutes,
+    registerClientAgeRoutes,
     registerSkinTestRoutes,
     registerStandbyRoutes,
     registerWindowRoutes,

@@ -38,6 +38,19 @@ export interface SalonsTable {
   skin_test_families: ColumnType<string[], string[] | undefined, string[]>;
 }
 
+/** A guardian's consent to oxidative colour for a client under 16, recorded by the desk (migrations/20261205T0320). */
+export interface GuardianConsentsTable {
+  id: Generated<string>;
+  salon_id: string;
+  client_id: string;
+  guardian_name: string;
+  relationship: string;
+  note: Generated<string>;
+  recorded_by: string | null;
+  recorded_by_name: string;
+  recorded_at: DefaultTimestamp;
+}
+
 /** An owner's clearance that lets oxidative colour follow a positive skin test (migrations/20261205T0010). */
 export interface SkinTestClearancesTable {
   id: Generated<string>;
@@ -158,6 +171,8 @@ export interface ClientsTable {
   /** Set by an inbound STOP reply: no SMS until START. */
   sms_stopped_at: ColumnType<Date | null, Date | string | null | undefined, Date | string | null>;
   created_at: DefaultTimestamp;
+  /** Optional (migrations/20261205T0320); read as text (to_char) so no time zone touches it. */
+  date_of_birth: ColumnType<Date | null, string | null | undefined, string | null>;
 }
 export type MessageChannelChoice = 'sms' | 'email' | 'both';
 
@@ -346,6 +361,7 @@ export interface SessionTable {
 
 export interface Database {
   skin_test_clearances: SkinTestClearancesTable;
+  guardian_consents: GuardianConsentsTable;
   session: SessionTable;
   salons: SalonsTable;
   salon_hours: SalonHoursTable;

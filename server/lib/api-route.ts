@@ -6,6 +6,7 @@ import type { SessionUser } from '../../shared/schemas/auth.schemas';
 import { ApiErrorBodySchema } from '../../shared/api/error.schemas';
 import { requireAccess, type Access } from '../auth/require-access';
 import { JsonText } from './json-text';
+import { assertStorable } from './unstorable-text';
 
 type Method = 'get' | 'post' | 'put' | 'patch' | 'delete';
 
@@ -63,6 +64,7 @@ export function apiRoute<B extends ZodType, Q extends ZodType, P extends ZodType
   table.records.push({ method: spec.method, path: spec.path, access: spec.access });
   register(table.registry, spec, status);
   table.router[spec.method](spec.path, requireAccess(spec.access), async (req: Request, res: Response) => {
+    assertStorable({ params: req.params, query: req.query, body: req.body });
     const ctx = {
       body: spec.body ? spec.body.parse(req.body ?? {}) : undefined,
       query: spec.query ? spec.query.parse(req.query) : undefined,

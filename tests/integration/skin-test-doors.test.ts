@@ -245,3 +245,34 @@ describe('hair history reaches booking', () => {
     expect(res.body.error.fields['previousReaction.answer']).toBe('Choose an answer');
   });
 });
+
+describe('age', () => {
+  it('oxidative colour for a client under 16 on the day is refused online and at the desk until a guardian consent is recorded', async () => {
+    const client = await clientWith([{ appliedDaysAgo: 10, result: 'negative' }]);
+    const start = localIso(futureWeekday(2, 5), '10:00');
+    // Fifteen on the day: born one day less than 16 years before the sitting's date (worked from the date itself).
+    const sittingDay = start.slice(0, 10);
+    const [y, m, d] = sittingDay.split('-').map(Number);
+    const dob = new Date(Date.UTC(y - 16, m - 1, d + 1)).toISOString().slice(0, 10);
+    const c = await signedInAgent(t.app, client.email, client.password);
+    expect((await c.write('put', '/api/me/date-of-birth', { dateOfBirth: '2999-01-01' })).status).toBe(400);
+    expect((await c.write('put', '/api/me/date-of-birth', { dateOfBirth: dob })).status).toBe(200);
+
+    const refused = await book(client.clientId!, rootColour, oxidative, start);
+    expect(refused.status).toBe(409);
+    expect(refused.body.error).toMatchObject({ code: 'AGE_CONSENT', message: expect.stringMatching(/under 16.*guardian/) });
+    const visitor = await anonymousAgent(t.app);
+    const held = await visitor.write('post', apiPaths.holds, { salonSlug: slug, serviceId: rootColour, stylistId: ana.staffId, start: localIso(futureWeekday(2, 5), '13:00') }, { 'X-Forwarded-For': '10.9.0.3' });
+    const claim = await c.write('post', apiPaths.claimHold(held.body.holdId), { secret: held.body.holdSecret });
+    expect(claim.status).toBe(409);
+    expect(claim.body.error.message).toMatch(/not booked online for anyone under 16/);
+
+    expect((await desk$.write('post', apiPaths.guardianConsents(client.clientId!), { guardianName: '', relationship: 'mother', note: '' })).status).toBe(400);
+    const consent = await desk$.write('post', apiPaths.guardianConsents(client.clientId!), { guardianName: 'Ida Lund', relationship: 'mother', note: 'Signed form on file' });
+    expect(consent.status).toBe(201);
+    expect(consent.body.guardianConsents).toMatchObject([{ guardianName: 'Ida Lund', relationship: 'mother' }]);
+    expect((await book(client.clientId!, rootColour, oxidative, start)).status).toBe(201);
+    // A blow-dry needs no consent at any age.
+    expect((await book(client.clientId!, blowDry, dryOnly, localIso(futureWeekday(2, 5), '16:00'))).status).toBe(201);
+  });
+});

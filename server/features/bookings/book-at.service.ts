@@ -65,7 +65,7 @@ export async function bookAt(db: Db, input: BookAtInput): Promise<string> {
   const chosen = await preferredChairs(db, input.salon.id, found, input.chairIds);
   if (input.clientId) {
     const starts = found.sittings.map((s) => new Date(s.steps[0].start));
-    await assertSkinTestAllows(db, input.salon, { clientId: input.clientId, plan: input.plan, serviceAsks: input.service.needsSkinTest, starts, allowWaiting: input.allowWaitingOnTest ?? false }, input.now);
+    await assertSkinTestAllows(db, input.salon, { clientId: input.clientId, plan: input.plan, serviceAsks: input.service.needsSkinTest, starts, atDesk: input.allowWaitingOnTest ?? false }, input.now);
   }
   try {
     const id = await insertBooking(db, {

@@ -51,7 +51,7 @@ export async function moveSitting(db: Kysely<Database>, salon: Salon, actorUserI
     // A later date may fall outside the skin test's validity: the whole booking is checked with the moved sitting.
     if (row.client_id) {
       const moved = starts.map((s, i) => (i === req.sitting - 1 ? req.start : s));
-      await assertSkinTestAllows(trx, salon, { clientId: row.client_id, plan, serviceAsks: service?.needsSkinTest ?? false, starts: moved, allowWaiting: req.allowWaitingOnTest ?? false }, now);
+      await assertSkinTestAllows(trx, salon, { clientId: row.client_id, plan, serviceAsks: service?.needsSkinTest ?? false, starts: moved, atDesk: req.allowWaitingOnTest ?? false }, now);
     }
 
     const one: StepPlan = { sittings: [{ steps: plan.sittings[req.sitting - 1].steps }] };

@@ -24,5 +24,5 @@ export async function assertHoldSkinTest(db: Db, salon: Salon, hold: HoldRow, cl
     }
   }
   const starts = await sittingStarts(db, hold.id);
-  await assertSkinTestAllows(db, salon, { clientId, plan, serviceAsks: hold.needs_skin_test, starts, allowWaiting: false }, now);
+  await assertSkinTestAllows(db, salon, { clientId, plan, serviceAsks: hold.needs_skin_test, starts, atDesk: false }, now);
 }

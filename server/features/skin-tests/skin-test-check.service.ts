@@ -3,9 +3,10 @@ import type { Db } from '../../db/database';
 import type { Salon } from '../../../shared/schemas/salon.schemas';
 import type { StepPlan } from '../../../shared/schemas/step-plan.schemas';
 import { checkStarts, skinTestVerdict, type SkinTestVerdict } from '../../../shared/rules/skin-test-rule';
-import { planNeedsSkinTest, testedFamilies } from '../../../shared/rules/skin-test-need';
+import { ALWAYS_TESTED, planNeedsSkinTest, testedFamilies } from '../../../shared/rules/skin-test-need';
+import { underAgeOnAny } from '../../../shared/rules/age-rule';
 import { AppError } from '../../lib/app-error';
-import { skinTestClearances, skinTestClearancesOf, skinTestRecords, skinTestRecordsOf } from './skin-tests.repository';
+import { clientAgeRecord, skinTestClearances, skinTestClearancesOf, skinTestRecords, skinTestRecordsOf } from './skin-tests.repository';
 
 type SalonRule = Pick<Salon, 'timeZone' | 'skinTestLeadHours' | 'skinTestValidityDays' | 'skinTestFamilies'>;
 
@@ -31,8 +32,11 @@ export interface SkinTestDoor {
   serviceAsks: boolean;
   /** Each sitting's start, in order. */
   starts: readonly Date[];
-  /** Whether the desk may book on an applied, unread test ("waiting on a skin test"); online doors may not. */
-  allowWaiting: boolean;
+  /**
+   * A desk door (staff booking, moving, filling): may book on an applied, unread test ("waiting on a skin test") and
+   * for a client under 16 with a guardian's consent on record. Online and link doors may do neither.
+   */
+  atDesk: boolean;
 }
 
 /**
@@ -44,9 +48,10 @@ export async function assertSkinTestAllows(db: Db, salon: SalonRule, door: SkinT
   const zoneDay = (d: Date) => DateTime.fromJSDate(d, { zone: salon.timeZone }).toFormat('ccc d LLL, h:mm a');
   const check = checkStarts(verdict, testedSittingStarts(door.plan, door.starts, salon, door.serviceAsks), zoneDay);
   if (check.status === 'refused') throw new AppError('SKIN_TEST', 409, check.message);
-  if (check.status === 'waiting' && !door.allowWaiting) {
+  if (check.status === 'waiting' && !door.atDesk) {
     throw new AppError('SKIN_TEST', 409, `This colour needs a skin test read negative first. ${verdict.message} Please book a consultation or call the salon.`);
   }
+  await assertAgeAllows(db, salon, door);
   return check.status;
 }
 
@@ -83,4 +88,22 @@ export async function bookingSkinTestStates(db: Db, salon: SalonRule, bookings: 
     if (check.status === 'waiting') return { status: 'waiting', message: 'Waiting on a skin test: the colour cannot start until the test reads negative.' };
     return { status: check.status, message: '' };
   });
+}
+
+/**
+ * Oxidative colour for a client under 16 on the day of a sitting (EU label: "not intended for use on persons under
+ * the age of 16"): refused online; at the desk only with a guardian's consent on record.
+ */
+async function assertAgeAllows(db: Db, salon: SalonRule, door: SkinTestDoor): Promise<void> {
+  const oxidative = door.starts.filter((_, i) => door.plan.sittings[i]?.steps.some((s) => (ALWAYS_TESTED as readonly string[]).includes(s.product)));
+  if (oxidative.length === 0) return;
+  const age = await clientAgeRecord(db, door.clientId);
+  const dates = oxidative.map((d) => DateTime.fromJSDate(d, { zone: salon.timeZone }).toISODate()!);
+  if (!underAgeOnAny(age.dateOfBirth, dates)) return;
+  if (!door.atDesk) {
+    throw new AppError('AGE_CONSENT', 409, 'Oxidative colour is not booked online for anyone under 16. Please call the salon or book a consultation.');
+  }
+  if (!age.hasGuardianConsent) {
+    throw new AppError('AGE_CONSENT', 409, 'This client is under 16 on the day: oxidative colour needs a guardian’s consent on record first (client card → Age and consent).');
+  }
 }

@@ -116,3 +116,16 @@ export async function insertClearance(db: Db, c: { salonId: string; clientId: st
     .executeTakeFirstOrThrow();
   return row.id;
 }
+
+/** A client's date of birth (YYYY-MM-DD, or null) and whether a guardian's consent is on record. */
+export async function clientAgeRecord(db: Db, clientId: string): Promise<{ dateOfBirth: string | null; hasGuardianConsent: boolean }> {
+  const row = await db
+    .selectFrom('clients as c')
+    .select([
+      sql<string | null>`to_char(c.date_of_birth, 'YYYY-MM-DD')`.as('dateOfBirth'),
+      sql<boolean>`exists (select 1 from guardian_consents g where g.client_id = c.id)`.as('hasGuardianConsent'),
+    ])
+    .where('c.id', '=', clientId)
+    .executeTakeFirst();
+  return row ?? { dateOfBirth: null, hasGuardianConsent: false };
+}

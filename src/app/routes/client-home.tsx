@@ -13,6 +13,7 @@ import { queryClient } from '../../lib/query-client';
 import { SectionCard } from '../../components/ui/section-card';
 import { preferenceQueries } from '../../features/clients/api/preference-queries';
 import { MyPreferencesForm } from '../../features/clients/components/my-preferences-form';
+import { DateOfBirthForm } from '../../features/clients/components/date-of-birth-form';
 
 export async function loader() {
   await Promise.all([
@@ -43,6 +44,10 @@ export function Component() {
         <SalonCard salon={salon} />
         <SectionCard title="Messages">
           <MyPreferencesForm current={preferences} />
+        </SectionCard>
+        <SectionCard title="Date of birth">
+          <p className="mb-3 text-sm text-ink/80">Optional. Colour mixed with developer is not for anyone under 16, so the salon needs to know.</p>
+          <DateOfBirthForm owner="me" />
         </SectionCard>
         <Link to={paths.salon(salon.slug)} className="text-link">
           Book online at {salon.name}

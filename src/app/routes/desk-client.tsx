@@ -13,6 +13,7 @@ import { StrandTestsPanel } from '../../features/test-records/components/strand-
 import { BookingList } from '../../features/bookings/components/booking-list';
 import { clientQueries } from '../../features/clients/api/client-queries';
 import { ClientProfile } from '../../features/clients/components/client-profile';
+import { GuardianConsentPanel } from '../../features/clients/components/guardian-consent-panel';
 import { salonQueries } from '../../features/salon/api/salon-queries';
 import { queryClient } from '../../lib/query-client';
 
@@ -43,6 +44,9 @@ export function Component() {
         </Notice>
       )}
       <ClientProfile client={client} />
+      <SectionCard title="Age and consent">
+        <GuardianConsentPanel clientId={client.id} zone={salon.timeZone} />
+      </SectionCard>
       <SectionCard title="Skin tests">
         <SkinTestsPanel clientId={client.id} zone={salon.timeZone} />
       </SectionCard>
