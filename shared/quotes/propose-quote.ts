@@ -181,7 +181,7 @@ function warningsFor(c: ConsultationInput, stages: Stage[][]): QuoteWarning[] {
 
 /** The cautions shown with every quote that puts oxidative products on the hair. */
 export const QUOTE_CAUTIONS = [
-  'A skin test, read at least the salon’s lead time before, is needed before oxidative colour (permanent, demi-permanent, toner).',
+  'A skin test, applied at least the salon’s lead time before and read before the colour, is needed before oxidative colour (permanent, demi-permanent, toner); any reaction means no oxidative colour until it is cleared.',
   'Wear suitable gloves for mixing, applying and rinsing; mix powder lightener where the air moves (good ventilation).',
   'Lightening compromised or previously coloured hair risks breakage: a strand test is advised.',
   'These numbers are aids. The licensed professional’s judgement and local regulations decide.',

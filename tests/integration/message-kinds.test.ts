@@ -49,7 +49,8 @@ describe('message kinds, each at its instant in the salon’s zone', () => {
     expect(rows.filter((r) => r.kind === 'confirmation')).toEqual([]);
     const email = rows.find((r) => r.kind === 'skin_test_booked' && r.channel === 'email')!;
     // The salon's lead time (48 h by default; common practice and the colour makers' instruction for oxidative dyes).
-    expect(email.body).toMatch(/read at least 48 hours before your colour appointment/);
+    expect(email.body).toMatch(/applied at least 48 hours before your colour appointment and read before it/);
+    expect(email.body).toMatch(/Any reaction means no oxidative colour until it has been cleared/);
     expect(email.body).toMatch(/itching, burning, redness or swelling/);
     expect(email.body).toMatch(/licensed practice and local regulations/);
     expect(rows.find((r) => r.kind === 'skin_test_booked' && r.channel === 'sms')!.body).toMatch(/at least 48 h before your colour/);

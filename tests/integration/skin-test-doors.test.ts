@@ -155,6 +155,13 @@ describe('other doors use the same rule', () => {
     const fill = (serviceId: string, key: string) => desk$.write('post', '/api/windows/fill', { stylistId: ana.staffId, serviceId, start: localIso(tuesday, '18:00'), walkIn: { name: 'Walk-in Wren' }, idempotencyKey: key });
     expectRefused(await fill(toner, 'doors-fill-1'), /No skin test is on record/);
     expect((await fill(blowDry, 'doors-fill-2')).status).toBe(201);
+
+    // Offering the oxidative gloss to a standby client without a test is refused before any link goes out.
+    const waiting = await clientWith([]);
+    const entry = await desk$.write('post', '/api/standby', { clientId: waiting.clientId, serviceIds: [toner], stylistId: null, availability: [{ weekdays: [2, 3, 4, 5, 6], from: '09:00', to: '20:00' }] });
+    expect(entry.status).toBe(201);
+    const offered = await desk$.write('post', '/api/windows/offer', { stylistId: ana.staffId, serviceId: toner, start: localIso(tuesday, '19:00'), standbyEntryIds: [entry.body.id] });
+    expectRefused(offered, /cannot be offered to .*No skin test is on record/);
   });
 
   it('online: a hold for colour cannot be claimed on an unread test (waiting is for the desk only)', async () => {

@@ -116,3 +116,13 @@ export async function listMessages(db: Db, salonId: string, status: MessageStatu
   if (status) q = q.where('status', '=', status);
   return q.orderBy('created_at', 'desc').orderBy('send_at', 'desc').limit(limit).execute();
 }
+
+/** The client's follow-up suggestions still queued, with their bookings. */
+export async function queuedFollowUps(db: Db, clientId: string): Promise<{ bookingId: string }[]> {
+  const rows = await db.selectFrom('messages').select('booking_id').where('client_id', '=', clientId).where('kind', '=', 'follow_up').where('status', '=', 'queued').execute();
+  return rows.filter((r) => r.booking_id !== null).map((r) => ({ bookingId: r.booking_id! }));
+}
+
+export async function dropFollowUps(db: Db, bookingId: string): Promise<void> {
+  await db.updateTable('messages').set({ status: 'dropped' }).where('booking_id', '=', bookingId).where('kind', '=', 'follow_up').where('status', '=', 'queued').execute();
+}

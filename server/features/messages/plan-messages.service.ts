@@ -5,7 +5,7 @@ import type { MessagesTable } from '../../db/schema';
 import { followUpTimes } from '../../../shared/messages/follow-up-times';
 import type { Salon } from '../../../shared/schemas/salon.schemas';
 import { bookingSkinTestStates } from '../skin-tests/skin-test-check.service';
-import { bookingForMessages, dropQueued, dropQueuedForClient, upcomingBookingIds, type BookingForMessages } from './messages.repository';
+import { bookingForMessages, dropFollowUps, dropQueued, dropQueuedForClient, queuedFollowUps, upcomingBookingIds, type BookingForMessages } from './messages.repository';
 import { followUpRulesForService } from './follow-up-rules.repository';
 import { outOfQuietHours, reminderAt } from './quiet-hours';
 import { aftercareKind, aftercareNotes } from './aftercare-notes';
@@ -94,10 +94,13 @@ function firstMessage(b: BookingForMessages, change: BookingChange, waitingOnTes
 }
 
 /** The booking's skin-test footing, by the one rule (the salon's lead time, validity and tested families). */
+const skinTestSalon = (b: BookingForMessages) => ({
+  timeZone: b.context.timeZone, skinTestLeadHours: b.context.skinTestLeadHours, skinTestValidityDays: b.skinTestRule.validityDays, skinTestFamilies: b.skinTestRule.families as Salon['skinTestFamilies'],
+});
+
 async function skinTestOf(db: Db, b: BookingForMessages, now: Date) {
   const rule = b.skinTestRule;
-  const salon = { timeZone: b.context.timeZone, skinTestLeadHours: b.context.skinTestLeadHours, skinTestValidityDays: rule.validityDays, skinTestFamilies: rule.families as Salon['skinTestFamilies'] };
-  const [state] = await bookingSkinTestStates(db, salon, [{ clientId: b.clientId, status: b.status, plan: rule.plan, serviceAsks: rule.serviceAsks, starts: b.context.sittings.map((s) => s.start) }], now);
+  const [state] = await bookingSkinTestStates(db, skinTestSalon(b), [{ clientId: b.clientId, status: b.status, plan: rule.plan, serviceAsks: rule.serviceAsks, starts: b.context.sittings.map((s) => s.start) }], now);
   return state.status;
 }
 
@@ -192,4 +195,19 @@ export async function replanClientMessages(db: Db, clientId: string, now: Date):
  */
 export async function replanAfterSkinTestChange(db: Db, clientId: string, now: Date): Promise<void> {
   for (const id of await upcomingBookingIds(db, clientId, now)) await replanBookingMessages(db, id, now, 'skin_test');
+  await dropBlockedFollowUps(db, clientId, now);
+}
+
+/**
+ * Follow-up suggestions ("time for your next colour") of past bookings whose steps need a skin test are dropped
+ * while the client's record blocks such colour: nobody is invited to book what the rule refuses.
+ */
+async function dropBlockedFollowUps(db: Db, clientId: string, now: Date): Promise<void> {
+  const queued = await queuedFollowUps(db, clientId);
+  for (const bookingId of new Set(queued.map((q) => q.bookingId))) {
+    const b = await bookingForMessages(db, bookingId);
+    if (!b) continue;
+    const [state] = await bookingSkinTestStates(db, skinTestSalon(b), [{ clientId, status: 'booked', plan: b.skinTestRule.plan, serviceAsks: b.skinTestRule.serviceAsks, starts: [now] }], now);
+    if (state.status === 'blocked') await dropFollowUps(db, bookingId);
+  }
 }

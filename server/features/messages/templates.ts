@@ -1,4 +1,5 @@
 import { DateTime } from 'luxon';
+import { skinTestWords } from '../../../shared/rules/skin-test-words';
 import type { MessageAttachment } from '../../db/schema';
 import { bookingIcs } from '../online-booking/booking-ics';
 
@@ -113,7 +114,7 @@ export const CHEMICAL_CAUTION =
 export function skinTestBookedMessage(c: BookingContext): MessageText {
   const at = when(c.sittings[0].start, c.timeZone);
   const lead = c.skinTestLeadHours;
-  const what = `A skin test (allergy alert test) puts a small dab of the colour we will use behind your ear or on your inner arm. It must be read at least ${lead} hours before your colour appointment, so book the colour no sooner than ${lead} hours after this test.`;
+  const what = `A skin test (allergy alert test) puts a small dab of the colour we will use behind your ear or on your inner arm. ${skinTestWords(lead)} So book the colour no sooner than ${lead} hours after this test.`;
   const reaction = 'If you feel itching, burning, redness or swelling at the patch (or anywhere) before your colour, wash the patch with water, do not have the colour done, and call the salon. If it is severe (swelling of the face, difficulty breathing) get medical help at once.';
   return {
     sms: `${c.salonName}: skin test booked, ${at}. It must be read at least ${lead} h before your colour. Any itching, redness or swelling: wash it off and call us; severe reactions: get medical help. ${HOW_TO_CHANGE}`,

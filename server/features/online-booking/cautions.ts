@@ -1,4 +1,5 @@
 import type { Cautions } from '../../../shared/schemas/online-booking.schemas';
+import { skinTestWords } from '../../../shared/rules/skin-test-words';
 
 /**
  * The cautions a client accepts before paying. The version is stored with each acceptance, so a later change
@@ -18,7 +19,7 @@ export function cautionsFor(service: { category: string; needsSkinTest: boolean 
     items.push({
       id: 'skin-test',
       title: 'Skin test before oxidative colour',
-      text: `Oxidative colour needs a skin test: applied at least ${leadHours} hours before your colour appointment and read before it, as the colour maker's instructions say. Any reaction means no oxidative colour until it has been cleared (for example on your doctor's written advice).`,
+      text: skinTestWords(leadHours),
     });
   }
   if (service.category === 'consultation') {

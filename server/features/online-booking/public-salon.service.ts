@@ -1,5 +1,6 @@
 import { describeHoursRule } from '../../../shared/engine/describe-hours';
 import { planNeedsSkinTest } from '../../../shared/rules/skin-test-need';
+import { skinTestValidityWords, skinTestWords } from '../../../shared/rules/skin-test-words';
 import { toSalon } from '../salon/salon.repository';
 import { DateTime } from 'luxon';
 import type { Db } from '../../db/database';
@@ -41,7 +42,7 @@ export async function publicSalon(db: Db, slug: string): Promise<PublicSalon> {
         : 'No deposit is needed.',
       cancellation: `Cancel or move at least ${salon.cancellation_window_hours} hours before your appointment and your deposit is refunded; later, or if you do not come, the deposit is kept.`,
       lateness: 'If you are more than 15 minutes late for a long colour service we may need to shorten or move it, because colour cannot be rushed.',
-      skinTest: `Oxidative colour needs a skin test at least ${salon.skin_test_lead_hours} hours before the colour appointment, repeated if your last one is more than ${Math.round(salon.skin_test_validity_days / 30)} months old.`,
+      skinTest: `${skinTestWords(salon.skin_test_lead_hours)} ${skinTestValidityWords(salon.skin_test_validity_days)}`,
     },
     services: services.map((s) => ({
       id: s.id,

@@ -15,6 +15,7 @@ import { lockStylists } from '../planning/stylist-lock';
 import { bookAt } from '../bookings/book-at.service';
 import { closeStandby, listStandby } from '../standby/standby.repository';
 import { findOffer, insertOffer, lockSlotOffers, setOfferStatus } from './window-offers.repository';
+import { assertSkinTestAllows } from '../skin-tests/skin-test-check.service';
 import { sendOffer, sendOfferGone, sendOfferTaken } from './offer-messages';
 type OfferView = z.infer<typeof OfferViewSchema>;
 
@@ -30,6 +31,18 @@ export async function offerWindow(db: Kysely<Database>, senders: Senders, salon:
   }
   const start = new Date(body.start);
   if (start <= new Date()) throw new AppError('VALIDATION_FAILED', 400, 'Some fields need attention.', { start: 'That time has already passed.' });
+  // The client takes the time from a link, with no desk in between: the same skin-test and age rule as any online
+  // door, checked now so nobody is offered colour they could not take.
+  const refused: string[] = [];
+  for (const entry of chosen) {
+    try {
+      await assertSkinTestAllows(db, salon, { clientId: entry.client.id, plan: service.stepPlan, serviceAsks: service.needsSkinTest, starts: [start], atDesk: false }, new Date());
+    } catch (e) {
+      if (!(e instanceof AppError)) throw e;
+      refused.push(`${entry.client.name}: ${e.message}`);
+    }
+  }
+  if (refused.length) throw new AppError('SKIN_TEST', 409, `This time cannot be offered to ${refused.join(' ')}`);
   for (const entry of chosen) {
     const token = randomBytes(24).toString('base64url');
     const offerId = await insertOffer(db, { salonId: salon.id, standbyEntryId: entry.id, clientId: entry.client.id, serviceId: service.id, stylistId: stylist.id, startsAt: start, tokenHash: sha256(token), createdBy: user.id });

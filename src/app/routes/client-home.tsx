@@ -14,6 +14,7 @@ import { SectionCard } from '../../components/ui/section-card';
 import { preferenceQueries } from '../../features/clients/api/preference-queries';
 import { MyPreferencesForm } from '../../features/clients/components/my-preferences-form';
 import { DateOfBirthForm } from '../../features/clients/components/date-of-birth-form';
+import { skinTestWords } from '../../../shared/rules/skin-test-words';
 
 export async function loader() {
   await Promise.all([
@@ -53,7 +54,7 @@ export function Component() {
           Book online at {salon.name}
         </Link>
         <p className="text-sm text-ink/80">
-          Colour services need a skin test at least {salon.skinTestLeadHours} hours before the appointment. Tell the
+          {skinTestWords(salon.skinTestLeadHours)} Tell the
           salon about any reaction, allergy or recent colour at home.
         </p>
       </aside>

@@ -29,7 +29,7 @@ export function Component() {
         }
       />
       <SetupNav />
-      <ServicesTable services={data.services} currency={salon.currency} />
+      <ServicesTable services={data.services} currency={salon.currency} families={salon.skinTestFamilies} />
     </div>
   );
 }

@@ -1,4 +1,5 @@
 import { Link } from 'react-router-dom';
+import { skinTestWords } from '../../../../shared/rules/skin-test-words';
 import { apiPaths } from '../../../../shared/api/api-paths';
 import type { BookingView } from '../../../../shared/schemas/booking-view.schemas';
 import type { Salon } from '../../../../shared/schemas/salon.schemas';
@@ -58,7 +59,7 @@ export function BookedPage({ booking, salon }: Props) {
         <ul className="flex list-disc flex-col gap-2 pl-5">
           <li>Come with your hair as you usually wear it, dry and without styling product, so its colour and condition show.</li>
           <li>Bring photos of looks you like and of past colour, and the names of any colour used at home (box dye, henna, lightener).</li>
-          <li>Tell us about allergies, skin reactions and medicines. Oxidative colour needs a skin test at least {salon.skinTestLeadHours} hours before.</li>
+          <li>Tell us about allergies, skin reactions and medicines. {skinTestWords(salon.skinTestLeadHours)}</li>
           <li>Arrive a few minutes early. To move or cancel, use My bookings; the salon&apos;s cancellation policy applies.</li>
         </ul>
       </section>

@@ -13,8 +13,10 @@ import { fieldError, showServerErrors } from '../../../lib/form-errors';
 import { StepPlanEditor } from '../../booking-flow/components/step-plan-editor';
 import { useRetireService, useSaveService } from '../api/setup-mutations';
 import { MoneyField } from './money-field';
+import type { ProductFamily, StepPlan } from '../../../../shared/schemas/step-plan.schemas';
+import { productFamilyLabels, stepNeedingSkinTest } from '../../../../shared/rules/skin-test-need';
 
-type Props = { id: string | null; initial: ServiceFormInput; skills: string[]; currency: string; active: boolean };
+type Props = { id: string | null; initial: ServiceFormInput; skills: string[]; currency: string; active: boolean; families: readonly ProductFamily[] };
 
 const categories = [
   { value: 'colour', label: 'Colour' },
@@ -26,7 +28,7 @@ const categories = [
 const fieldNames = ['name', 'description', 'category', 'skill', 'priceCents', 'depositCents', 'depositPercent', 'stepPlan'] as const;
 
 /** A service on the menu: what it is, what it costs and takes as deposit, and its step plan. */
-export function ServiceForm({ id, initial, skills, currency, active }: Props) {
+export function ServiceForm({ id, initial, skills, currency, active, families }: Props) {
   const save = useSaveService();
   const retire = useRetireService();
   const navigate = useNavigate();
@@ -34,6 +36,8 @@ export function ServiceForm({ id, initial, skills, currency, active }: Props) {
   const { errors } = form.formState;
   const err = (name: string) => fieldError(errors, name);
   const depositKind = form.watch('depositKind');
+  const plan = form.watch('stepPlan');
+  const stepNeeding = stepNeedingSkinTest({ sittings: plan.sittings.map((s) => ({ ...s, steps: s.steps.filter((st) => Boolean(st.product)) })) } as StepPlan, families);
   const submit = form.handleSubmit((body) =>
     save.mutateAsync({ id, body }).then(
       () => navigate(paths.ownerSetupServices),
@@ -61,8 +65,13 @@ export function ServiceForm({ id, initial, skills, currency, active }: Props) {
                 <input type="checkbox" className="size-5" {...form.register('onlineBookable')} /> Clients may book it online
               </label>
               <label className="flex min-h-11 items-center gap-2">
-                <input type="checkbox" className="size-5" {...form.register('needsSkinTest')} /> Needs a negative skin test first (oxidative colour)
+                <input type="checkbox" className="size-5" aria-describedby="service-skin-test-note" {...form.register('needsSkinTest')} /> Also ask for a skin test for this service
               </label>
+              <p id="service-skin-test-note" className="text-sm text-ink/80">
+                {stepNeeding
+                  ? `The steps already need one: step ${stepNeeding.step}${stepNeeding.sitting > 1 ? ` of sitting ${stepNeeding.sitting}` : ''} (${stepNeeding.label}) puts ${productFamilyLabels[stepNeeding.product].toLowerCase()} on the hair.`
+                  : 'No step needs one now; a step with oxidative colour or toner will, whatever this box says.'}
+              </p>
             </div>
           </div>
         </SectionCard>

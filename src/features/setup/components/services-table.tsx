@@ -1,6 +1,7 @@
 import { createColumnHelper } from '@tanstack/react-table';
 import { Link } from 'react-router-dom';
-import { sittingMaxMinutes } from '../../../../shared/schemas/step-plan.schemas';
+import { sittingMaxMinutes, type ProductFamily } from '../../../../shared/schemas/step-plan.schemas';
+import { planNeedsSkinTest } from '../../../../shared/rules/skin-test-need';
 import type { SetupService } from '../../../../shared/schemas/setup.schemas';
 import { DataTable } from '../../../components/ui/data-table';
 import { paths } from '../../../config/paths';
@@ -9,7 +10,7 @@ import { formatMinutes } from '../../../lib/time';
 
 const col = createColumnHelper<SetupService>();
 
-const columns = (currency: string) => [
+const columns = (currency: string, families: readonly ProductFamily[]) => [
   col.accessor('name', {
     header: 'Service',
     cell: (c) => (
@@ -30,11 +31,12 @@ const columns = (currency: string) => [
     header: 'Deposit',
     cell: (c) => (c.row.original.depositPercent !== null ? `${c.row.original.depositPercent} % (${formatMoney(c.getValue(), currency)})` : c.getValue() ? formatMoney(c.getValue(), currency) : 'none'),
   }),
-  col.accessor((s) => [s.onlineBookable ? 'online' : '', s.needsSkinTest ? 'skin test' : ''].filter(Boolean).join(', '), { id: 'flags', header: 'Online · skin test' }),
+  // The skin-test need follows the steps (and the service's own box, which only adds), as at every booking door.
+  col.accessor((s) => [s.onlineBookable ? 'online' : '', planNeedsSkinTest(s.stepPlan, families, s.needsSkinTest) ? 'skin test' : ''].filter(Boolean).join(', '), { id: 'flags', header: 'Online · skin test' }),
   col.accessor('futureBookings', { header: 'Future bookings' }),
   col.accessor((s) => (s.active ? 'on the menu' : 'retired'), { id: 'status', header: 'Status' }),
 ];
 
-export function ServicesTable({ services, currency }: { services: SetupService[]; currency: string }) {
-  return <DataTable label="Services" rows={services} columns={columns(currency)} filterHint="Name, kind, skill…" initialSort={[{ id: 'name', desc: false }]} empty="No services yet." />;
+export function ServicesTable({ services, currency, families }: { services: SetupService[]; currency: string; families: readonly ProductFamily[] }) {
+  return <DataTable label="Services" rows={services} columns={columns(currency, families)} filterHint="Name, kind, skill…" initialSort={[{ id: 'name', desc: false }]} empty="No services yet." />;
 }
