@@ -27,6 +27,18 @@ export const productFamilyLabels: Record<ProductFamily, string> = {
   none: 'Nothing (cut, blow-dry, rinse, talk)',
 };
 
+/** The same in a word or two, for narrow pickers (the step editor). */
+export const productFamilyShortLabels: Record<ProductFamily, string> = {
+  oxidative_colour: 'Oxidative colour',
+  toner_oxidative: 'Toner, with developer',
+  lightener: 'Lightener',
+  colour_remover: 'Colour remover',
+  direct_dye: 'Direct dye',
+  toner_direct: 'Toner, no developer',
+  bond_care: 'Bond or care',
+  none: 'Nothing',
+};
+
 /** The families that need a skin test in this salon. */
 export function testedFamilies(widening: readonly ProductFamily[]): Set<ProductFamily> {
   return new Set([...ALWAYS_TESTED, ...widening]);

@@ -1,7 +1,7 @@
 import { useFormContext } from 'react-hook-form';
 import { fieldError } from '../../../lib/form-errors';
 import { PRODUCT_FAMILIES, type PlannedStep } from '../../../../shared/schemas/step-plan.schemas';
-import { productFamilyLabels } from '../../../../shared/rules/skin-test-need';
+import { productFamilyShortLabels } from '../../../../shared/rules/skin-test-need';
 import { Button } from '../../../components/ui/button';
 import { SelectField } from '../../../components/ui/select-field';
 import { StepKindIcon } from '../../../components/ui/step-kind-icon';
@@ -21,7 +21,7 @@ type Props = {
 
 const kindOptions = (['hands_on', 'developing', 'basin'] as const).map((kind) => ({ value: kind, label: stepKindLabels[kind] }));
 // A new step starts on "Choose…": a colour step must never fall back to "nothing" by oversight.
-const productOptions = [{ value: '', label: 'Choose…' }, ...PRODUCT_FAMILIES.map((f) => ({ value: f, label: productFamilyLabels[f] }))];
+const productOptions = [{ value: '', label: 'Choose…' }, ...PRODUCT_FAMILIES.map((f) => ({ value: f, label: productFamilyShortLabels[f] }))];
 
 /** One editable step: kind, label, what it puts on the hair, minutes (or least–most minutes while developing), order. */
 export function StepRow({ path, number, count, onMove, onRemove, onReplace }: Props) {
