@@ -14,6 +14,19 @@ export function isRealDateTime(s: string): boolean {
   return date.getUTCFullYear() === y && date.getUTCMonth() === m - 1 && date.getUTCDate() === d && hh <= 23 && mm <= 59;
 }
 
+// Control characters other than tab and newline, and halves of a surrogate pair without the other half.
+const UNSTORABLE = /[\u0000-\u0008\u000b\u000c\u000e-\u001f\u007f]|[\ud800-\udbff](?![\udc00-\udfff])|(?<![\ud800-\udbff])[\udc00-\udfff]/;
+
+/**
+ * Free text a person types (notes, reasons): refuses a NUL byte, other control characters and lone surrogates,
+ * which PostgreSQL cannot store in text or jsonb (they would otherwise fail as a 500), naming the field.
+ */
+export const typedText = (max: number) =>
+  z
+    .string()
+    .max(max, `At most ${max} characters`)
+    .refine((s) => !UNSTORABLE.test(s), 'Remove the control characters or broken symbols from this text');
+
 /** A local calendar date, `YYYY-MM-DD`. */
 export const LocalDateSchema = z
   .string()

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { IdSchema, InstantSchema } from './common.schemas';
+import { IdSchema, InstantSchema, typedText } from './common.schemas';
 import { StepPlanSchema } from './step-plan.schemas';
 
 const level = (what: string) =>
@@ -42,12 +42,12 @@ export const ConsultationInputSchema = z
     density: HairDensitySchema,
     elasticity: ElasticitySchema,
     porosity: PorositySchema,
-    conditionNotes: z.string().max(1000, 'At most 1000 characters'),
+    conditionNotes: typedText(1000),
     strandTest: StrandOutcomeSchema,
     wantsCut: z.boolean(),
     /** A vivid (direct-dye) shade on top of the target level, applied in sections at the last sitting. Older records lack it. */
     vivid: z.boolean().default(false),
-    notes: z.string().max(2000, 'At most 2000 characters'),
+    notes: typedText(2000),
   })
   .strict();
 export type ConsultationInput = z.infer<typeof ConsultationInputSchema>;
@@ -70,12 +70,12 @@ export const QuoteEditSchema = z
     stepPlan: StepPlanSchema,
     priceCents: z.number({ error: 'Give the price' }).int('Whole cents').min(0, 'The price cannot be negative').max(10_000_000),
     depositCents: z.number({ error: 'Give the deposit' }).int('Whole cents').min(0, 'The deposit cannot be negative').max(10_000_000),
-    notes: z.string().max(2000, 'At most 2000 characters'),
+    notes: typedText(2000),
     /**
      * Why lightener or colour remover is planned although the strand test failed: needed then
      * (shared/quotes/strand-gate.ts, checked with the strand test on the server), stored with the quote.
      */
-    overrideReason: z.string().trim().max(1000, 'At most 1000 characters').default(''),
+    overrideReason: typedText(1000).trim().default(''),
   })
   .strict()
   .refine((q) => q.depositCents <= q.priceCents, { message: 'The deposit cannot be more than the price', path: ['depositCents'] });

@@ -82,6 +82,8 @@ describe('owner set-up', () => {
       await page.getByRole('button', { name: 'Add a step' }).click();
       await page.getByLabel('Name of step 2').fill('Finishing spray');
       await page.getByLabel('Minutes of step 2').fill('15');
+      // A new step names what it puts on the hair (the editor starts on "Choose…").
+      await page.getByLabel('What step 2 puts on the hair').selectOption('none');
       const [saved] = await Promise.all([page.waitForResponse((r) => r.url().includes(setupPaths.service(blowDry.id))), page.getByRole('button', { name: 'Save the service' }).click()]);
       expect(saved.status()).toBe(200);
       await page.getByRole('region', { name: 'Services', exact: true }).waitFor();

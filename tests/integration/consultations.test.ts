@@ -90,6 +90,16 @@ describe('recording a consultation and its quote', () => {
     expect(await list()).toEqual([]);
   });
 
+  it('refuses a NUL byte or a lone surrogate in typed text, naming the field, never a 500', async () => {
+    const res = await stylist$.write('post', consultationPaths.create, {
+      clientId: client.clientId, consultation: consultation({ conditionNotes: 'dry\u0000ends' }), photoIds: [],
+      quote: { ...quote, serviceId, notes: 'half \ud800 pair', overrideReason: 'reason\u0000' },
+    });
+    expect(res.status).toBe(400);
+    expect(Object.keys(res.body.error.fields).sort()).toEqual(['consultation.conditionNotes', 'quote.notes', 'quote.overrideReason']);
+    expect(await list()).toEqual([]);
+  });
+
   it('saves the edited quote with the rules’ warnings; the desk books it with the quote’s plan, price and deposit', async () => {
     const coloured = consultation({ currentLevel: 4, targetLevel: 6, history: { ...virgin, natural: false, permanent: true } });
     const created = await stylist$.write('post', consultationPaths.create, { clientId: client.clientId, consultation: coloured, photoIds: [], quote: { ...quote, serviceId } });
