@@ -36,6 +36,14 @@ export interface SalonsTable {
   correction_cents_per_hour: Generated<number>;
   /** Product families beyond oxidative colour and toner that need a skin test here (migrations/20261205T0010). */
   skin_test_families: ColumnType<string[], string[] | undefined, string[]>;
+  /** Minutes each limited family may be on the hair, without heat; lift per sitting by hair state (migrations/20261205T0400). */
+  lightener_max_minutes: Generated<number>;
+  oxidative_colour_max_minutes: Generated<number>;
+  toner_oxidative_max_minutes: Generated<number>;
+  colour_remover_max_minutes: Generated<number>;
+  lift_virgin_levels: Generated<number>;
+  lift_coloured_levels: Generated<number>;
+  lift_compromised_levels: Generated<number>;
 }
 
 /** A guardian's consent to oxidative colour for a client under 16, recorded by the desk (migrations/20261205T0320). */
@@ -472,6 +480,8 @@ export interface QuotesTable {
   sent_at: ColumnType<Date | null, Date | null | undefined, Date | null>;
   accepted_at: ColumnType<Date | null, Date | null | undefined, Date | null>;
   updated_at: DefaultTimestamp;
+  /** Why lightener or remover is planned after a failed strand test; '' when not needed (migrations/20261205T0410). */
+  override_reason: Generated<string>;
 }
 
 /** Owner-edited marketing follow-ups per service (see migrations/20261203T0605). */

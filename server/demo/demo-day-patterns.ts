@@ -16,18 +16,18 @@ export interface Placement {
 }
 
 const ana: Placement[] = [
-  { stylist: 'ana', chair: 0, basin: 0, service: 'fullLightening', start: '09:00', developing: [40, 15], core: true },
-  { stylist: 'ana', chair: 1, basin: 1, service: 'tonerRefresh', start: '10:05', developing: [15], core: true },
+  { stylist: 'ana', chair: 0, basin: 0, service: 'fullLightening', start: '09:00', developing: [30, 30, 15], core: true },
+  { stylist: 'ana', chair: 1, basin: 1, service: 'tonerRefresh', start: '10:20', developing: [10], core: true },
   { stylist: 'ana', chair: 0, basin: 0, service: 'rootTouchUp', start: '13:00', developing: [35] },
-  { stylist: 'ana', chair: 1, basin: 0, service: 'blowDry', start: '13:30', developing: [] },
-  { stylist: 'ana', chair: 0, basin: 0, service: 'vividColour', start: '14:50', developing: [35, 30] },
+  { stylist: 'ana', chair: 1, basin: 0, service: 'blowDry', start: '13:10', developing: [] },
+  { stylist: 'ana', chair: 0, basin: 0, service: 'vividColour', start: '14:50', developing: [25, 35] },
 ];
 
 const marcus: Placement[] = [
   { stylist: 'marcus', chair: 2, basin: 1, service: 'rootTouchUp', start: '11:00', developing: [35], core: true },
-  { stylist: 'marcus', chair: 3, basin: 1, service: 'fringeTrim', start: '11:35', developing: [] },
-  { stylist: 'marcus', chair: 2, basin: 1, service: 'fullLightening', start: '13:30', developing: [40, 15], core: true },
-  { stylist: 'marcus', chair: 3, basin: 0, service: 'tonerRefresh', start: '14:35', developing: [15], core: true },
+  { stylist: 'marcus', chair: 3, basin: 1, service: 'fringeTrim', start: '11:15', developing: [] },
+  { stylist: 'marcus', chair: 2, basin: 1, service: 'fullLightening', start: '13:30', developing: [30, 30, 15], core: true },
+  { stylist: 'marcus', chair: 3, basin: 0, service: 'tonerRefresh', start: '14:50', developing: [10], core: true },
   { stylist: 'marcus', chair: 2, basin: 1, service: 'cutFinish', start: '17:00', developing: [] },
   { stylist: 'marcus', chair: 3, basin: 1, service: 'cutFinish', start: '18:00', developing: [] },
 ];
@@ -41,21 +41,23 @@ const lee: Placement[] = [
 
 export const ordinaryDay: Placement[] = [...ana, ...marcus, ...lee];
 
-/** Sitting 1 of the correction, with two window fits in its developing time. */
+/**
+ * Sitting 1 of the correction (09:00 to about 15:05): its hands-free minutes are short (remover under heat,
+ * lightener sections within the limit), so the window fit is a blow-dry inside the later root touch-up.
+ */
 export const correctionDayOne: Placement[] = [
-  { stylist: 'ana', chair: 0, basin: 0, service: 'correction', sitting: 0, start: '09:00', developing: [30, 40, 15], core: true },
-  { stylist: 'ana', chair: 1, basin: 1, service: 'tonerRefresh', start: '10:00', developing: [10], core: true },
-  { stylist: 'ana', chair: 1, basin: 0, service: 'blowDry', start: '11:40', developing: [], core: true },
-  { stylist: 'ana', chair: 0, basin: 0, service: 'rootTouchUp', start: '14:30', developing: [35], core: true },
+  { stylist: 'ana', chair: 0, basin: 0, service: 'correction', sitting: 0, start: '09:00', developing: [10, 10, 25, 25, 10], core: true },
+  { stylist: 'ana', chair: 0, basin: 0, service: 'rootTouchUp', start: '15:30', developing: [35], core: true },
+  { stylist: 'ana', chair: 1, basin: 0, service: 'blowDry', start: '15:40', developing: [], core: true },
   ...marcus,
-  ...lee.filter((p) => p.start !== '11:00'),
+  ...lee,
 ];
 
-/** Sitting 2 of the correction two days later. */
+/** Sitting 2 of the correction three open days later (3 to 5 calendar days), a blow-dry in its developing time. */
 export const correctionDayTwo: Placement[] = [
-  { stylist: 'ana', chair: 0, basin: 0, service: 'correction', sitting: 1, start: '09:00', developing: [35, 35], core: true },
-  { stylist: 'ana', chair: 1, basin: 0, service: 'blowDry', start: '11:20', developing: [], core: true },
-  { stylist: 'ana', chair: 0, basin: 0, service: 'vividColour', start: '14:50', developing: [35, 30], core: true },
+  { stylist: 'ana', chair: 0, basin: 0, service: 'correction', sitting: 1, start: '09:00', developing: [35], core: true },
+  { stylist: 'ana', chair: 1, basin: 0, service: 'blowDry', start: '10:30', developing: [], core: true },
+  { stylist: 'ana', chair: 0, basin: 0, service: 'vividColour', start: '14:50', developing: [25, 35], core: true },
   ...marcus,
-  ...lee.filter((p) => p.start !== '11:00'),
+  ...lee,
 ];

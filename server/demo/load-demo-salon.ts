@@ -134,7 +134,8 @@ async function insertDemoBook(db: Db, ids: Ids, now: Date): Promise<number> {
   const today = DateTime.fromJSDate(now, { zone }).startOf('day');
   const openDays = [...Array(15).keys()].map((i) => today.plus({ days: i - 7 })).filter((d) => d.weekday >= 2 && d.weekday <= 6);
   const firstFuture = openDays.findIndex((d) => d >= today);
-  const correctionDays = [openDays[Math.max(0, firstFuture - 1)], openDays[Math.max(0, firstFuture - 1) + 2]];
+  // Sitting 2 three open days after sitting 1: 3 to 5 calendar days, inside the quote rules' days between sittings.
+  const correctionDays = [openDays[Math.max(0, firstFuture - 1)], openDays[Math.max(0, firstFuture - 1) + 3]];
   const marcusOff = openDays[openDays.length - 2];
   await db.insertInto('time_off').values({ staff_id: ids.stylists.marcus, during: tstzRange(marcusOff.toJSDate(), marcusOff.plus({ days: 1 }).toJSDate()), reason: 'Training day' }).execute();
 

@@ -3,6 +3,7 @@ import { isKnownZone } from '../engine/local-time';
 import { ClockTimeSchema, HoursListSchema } from './hours-rule.schemas';
 import { PhoneCountrySchema } from './contact.schemas';
 import { WIDENING_FAMILIES } from '../rules/skin-test-need';
+import { LiftPerSittingSchema, ProcessingLimitsSchema } from './planning-rules.schemas';
 
 const whole = (min: number, max: number, what: string) =>
   z.number({ error: `Enter ${what}` }).int(`Enter whole ${what}`).min(min, `At least ${min}`).max(max, `At most ${max}`);
@@ -39,6 +40,9 @@ export const SalonSettingsSchema = z
       .refine((list) => new Set(list).size === list.length, 'Each reminder needs its own time'),
     // EU Regulation 1223/2009 Annex III entry 12: hydrogen peroxide in hair products at most 12 %.
     maxDeveloperPercent: z.number({ error: 'Enter a percentage' }).gt(0, 'More than 0').max(12, 'At most 12 % (EU Regulation 1223/2009, Annex III)'),
+    // Planning rules (common practice defaults, within hard maxima). Left out: unchanged.
+    processingLimits: ProcessingLimitsSchema.optional(),
+    liftPerSitting: LiftPerSittingSchema.optional(),
   })
   .strict()
   .refine((s) => s.quietFrom !== s.quietTo, { message: 'Quiet hours must start and end at different times', path: ['quietTo'] });

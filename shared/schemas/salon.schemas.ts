@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { IdSchema } from './common.schemas';
 import { ProductFamilySchema } from './step-plan.schemas';
+import { LiftPerSittingSchema, ProcessingLimitsSchema } from './planning-rules.schemas';
 
 export const SalonSchema = z.object({
   id: IdSchema,
@@ -20,5 +21,9 @@ export const SalonSchema = z.object({
   cancellationWindowHours: z.number().int(),
   /** What a cancellation inside the window keeps: the deposit, or nothing. */
   cancellationKeeps: z.enum(['deposit', 'nothing']),
+  /** Minutes each limited product family may be on the hair here, without heat (plan editors check against them). */
+  processingLimits: ProcessingLimitsSchema,
+  /** Levels one sitting may lift, by the state of the hair (the quote rules use them). */
+  liftPerSitting: LiftPerSittingSchema,
 });
 export type Salon = z.infer<typeof SalonSchema>;

@@ -8,7 +8,11 @@ export const PRODUCT_FAMILIES = ['oxidative_colour', 'toner_oxidative', 'lighten
 export const ProductFamilySchema = z.enum(PRODUCT_FAMILIES, { error: 'Say what this step puts on the hair (or nothing)' });
 export type ProductFamily = z.infer<typeof ProductFamilySchema>;
 
-/** One timed step of a service. `developing` stretches between its min and max; the others are fixed. */
+/**
+ * One timed step of a service. `developing` stretches between its min and max; the others are fixed. How long a
+ * product may stay on the hair depends on the salon's processing limits, checked apart from this schema
+ * (shared/rules/processing-limits.ts), since they are a salon setting.
+ */
 export const PlannedStepSchema = z.discriminatedUnion('kind', [
   z.object({ kind: z.literal('hands_on'), label: z.string().min(1).max(80), product: ProductFamilySchema, minutes: z.number().int().min(5).max(600) }).strict(),
   z.object({ kind: z.literal('basin'), label: z.string().min(1).max(80), product: ProductFamilySchema, minutes: z.number().int().min(5).max(120) }).strict(),
@@ -19,6 +23,8 @@ export const PlannedStepSchema = z.discriminatedUnion('kind', [
       product: ProductFamilySchema,
       minMinutes: z.number().int().min(5).max(240),
       maxMinutes: z.number().int().min(5).max(240),
+      /** Processed with heat (a dryer hood or processor): the family's processing limit is halved (shared/rules/processing-limits.ts). */
+      heat: z.boolean().optional(),
     })
     .strict()
     .refine((s) => s.minMinutes <= s.maxMinutes, { message: 'The least time must not exceed the most time', path: ['maxMinutes'] }),

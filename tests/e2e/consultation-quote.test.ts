@@ -39,16 +39,27 @@ describe('consultation to quote to booking', () => {
     await stylist.getByText(/no strand test on record/).waitFor();
     await shot(stylist, 'stylist-consultation');
 
-    // Edit: a longer lightener application in sitting 1, a rounder price and deposit.
+    // A longer lightener application is refused in the editor: lightener may be on the hair 50 min at most,
+    // counted from the first section (common practice), and the section's lifting time comes on top.
     const sittingOne = stylist.getByRole('group', { name: 'Sitting 1 of 2' });
-    await sittingOne.getByRole('listitem').nth(3).getByLabel('Minutes').fill('95');
+    const steps = proposal.stepPlan.sittings[0].steps as { label: string; minutes?: number }[];
+    const lightener = steps.findIndex((s) => s.label.startsWith('Apply lightener'));
+    const dry = steps.length - 1;
+    expect(steps[dry].label).toBe('Blow-dry');
+    await sittingOne.getByRole('listitem').nth(lightener).getByLabel('Minutes').fill('95');
+    await stylist.getByRole('button', { name: 'Save consultation and quote' }).click();
+    await sittingOne.getByText(/lightener may be on the hair at most 50 min/).first().waitFor();
+    await shot(stylist, 'stylist-quote-limit');
+    // Put it back; edit the blow-dry instead, and a rounder price and deposit.
+    await sittingOne.getByRole('listitem').nth(lightener).getByLabel('Minutes').fill(String(steps[lightener].minutes));
+    await sittingOne.getByRole('listitem').nth(dry).getByLabel('Minutes').fill('75');
     await stylist.getByLabel('Price').fill('1050');
     await stylist.getByLabel('Deposit').fill('250');
     const saved = apiAnswer(stylist, 'POST', /^\/api\/consultations$/);
     await stylist.getByRole('button', { name: 'Save consultation and quote' }).click();
     const savedBody = await (await saved).json();
     expect(savedBody.quote).toMatchObject({ priceCents: 105000, depositCents: 25000, status: 'draft' });
-    expect(savedBody.quote.stepPlan.sittings[0].steps[3]).toMatchObject({ label: 'Apply lightener', minutes: 95 });
+    expect(savedBody.quote.stepPlan.sittings[0].steps[dry]).toMatchObject({ label: 'Blow-dry', minutes: 75 });
     await stylist.getByRole('heading', { level: 1, name: 'Quote for Priya Raman' }).waitFor();
     await shot(stylist, 'stylist-quote');
     await stylist.context().close();
@@ -64,7 +75,7 @@ describe('consultation to quote to booking', () => {
     await desk.getByRole('button', { name: 'Find times' }).click();
     const asked = (await found).request().postDataJSON();
     // The engine is asked about the edited plan, not the service's own.
-    expect(asked.stepPlan.sittings[0].steps[3].minutes).toBe(95);
+    expect(asked.stepPlan.sittings[0].steps.at(-1).minutes).toBe(75);
     const options = desk.getByRole('article');
     await options.first().waitFor();
     const booked = apiAnswer(desk, 'POST', /^\/api\/bookings$/);

@@ -3,10 +3,13 @@ import type { StepPlan } from '../../shared/schemas/step-plan.schemas';
 
 let seq = 0;
 
-/** A two-sitting correction: 2 h 20 min then 1 h 30 min, 1–7 days apart (needs a skin test). */
+/**
+ * A two-sitting correction: 2 h 20 min then 1 h 30 min, 1–7 days apart (needs a skin test). The lightener is on
+ * the hair 20 + 30 = 50 min, within the default processing limit (50 min, counted from the first application).
+ */
 export const correctionPlan: StepPlan = {
   sittings: [
-    { steps: [{ kind: 'hands_on', label: 'Apply lightener', product: 'lightener', minutes: 45 }, { kind: 'developing', label: 'Lightener lifts', product: 'lightener', minMinutes: 30, maxMinutes: 50 }, { kind: 'basin', label: 'Rinse', product: 'none', minutes: 15 }, { kind: 'hands_on', label: 'Tone and dry', product: 'toner_direct', minutes: 50 }] },
+    { steps: [{ kind: 'hands_on', label: 'Apply lightener', product: 'lightener', minutes: 20 }, { kind: 'developing', label: 'Lightener lifts', product: 'lightener', minMinutes: 30, maxMinutes: 30 }, { kind: 'basin', label: 'Rinse', product: 'none', minutes: 15 }, { kind: 'hands_on', label: 'Tone and dry', product: 'toner_direct', minutes: 75 }] },
     { daysAfterPrevious: { min: 1, max: 7 }, steps: [{ kind: 'hands_on', label: 'Apply colour', product: 'direct_dye', minutes: 30 }, { kind: 'developing', label: 'Colour develops', product: 'direct_dye', minMinutes: 30, maxMinutes: 40 }, { kind: 'basin', label: 'Rinse', product: 'none', minutes: 15 }, { kind: 'hands_on', label: 'Cut and finish', product: 'none', minutes: 15 }] },
   ],
 };

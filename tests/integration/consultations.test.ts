@@ -48,13 +48,14 @@ describe('proposing a quote', () => {
     expect(res.status).toBe(200);
     expect(res.body.serviceId).toBe(serviceId);
     expect(res.body.stepPlan.sittings).toHaveLength(1);
-    // Apply colour 30 + develops up to 45 + rinse 15 + blow-dry 35 = 125 min at $120.00/h = $250.00;
-    // 60 g of permanent colour at 5 ¢/g = $3.00 (hand arithmetic). Deposit: the service's $40.00.
+    // Apply colour 15 + develops up to 30 (45 min permanent colour limit − 15 applying) + rinse 15 + blow-dry 35
+    // = 95 min at $120.00/h = $190.00; 60 g of permanent colour at 5 ¢/g = $3.00 (hand arithmetic).
+    // Deposit: the service's $40.00.
     expect(res.body.lines).toEqual([
-      { label: 'Colour work, 125 min at the hourly rate', cents: 25000 },
+      { label: 'Colour work, 95 min at the hourly rate', cents: 19000 },
       { label: 'Product (estimate)', cents: 300 },
     ]);
-    expect(res.body.priceCents).toBe(25300);
+    expect(res.body.priceCents).toBe(19300);
     expect(res.body.depositCents).toBe(4000);
   });
 
@@ -86,6 +87,16 @@ describe('recording a consultation and its quote', () => {
     const photos = await stylist$.write('post', consultationPaths.create, { ...bad[1], quote: { ...quote, serviceId }, photoIds: [photo.id] });
     expect(photos.status).toBe(400);
     expect(photos.body.error.fields.photoIds).toMatch(/own photos/);
+    expect(await list()).toEqual([]);
+  });
+
+  it('refuses a NUL byte or a lone surrogate in typed text, naming the field, never a 500', async () => {
+    const res = await stylist$.write('post', consultationPaths.create, {
+      clientId: client.clientId, consultation: consultation({ conditionNotes: 'dry\u0000ends' }), photoIds: [],
+      quote: { ...quote, serviceId, notes: 'half \ud800 pair', overrideReason: 'reason\u0000' },
+    });
+    expect(res.status).toBe(400);
+    expect(Object.keys(res.body.error.fields).sort()).toEqual(['consultation.conditionNotes', 'quote.notes', 'quote.overrideReason']);
     expect(await list()).toEqual([]);
   });
 
@@ -151,5 +162,82 @@ describe('sending and accepting a quote', () => {
     expect(accepted.body.quote.status).toBe('accepted');
     expect(accepted.body.quote.acceptedAt).not.toBeNull();
     expect((await client$.get(consultationPaths.myQuotes)).body.consultations[0].quote.status).toBe('accepted');
+  });
+});
+
+describe('the strand test gates lightening', () => {
+  let failed: UserFixture;
+  const coloured = () => consultation({ currentLevel: 4, targetLevel: 8, history: { ...virgin, natural: false, permanent: true }, strandTest: 'passed' });
+  // Lightener in two sections of 20 + 30 = 50 min on the hair each: within the salon's 50 min limit.
+  const lightening = {
+    sittings: [{ steps: [
+      { kind: 'hands_on', label: 'Apply lightener, section 1 of 2', product: 'lightener', minutes: 20 }, { kind: 'developing', label: 'Lightener lifts, section 1 of 2', product: 'lightener', minMinutes: 20, maxMinutes: 30 }, { kind: 'basin', label: 'Rinse section 1', product: 'none', minutes: 10 },
+      { kind: 'hands_on', label: 'Apply lightener, section 2 of 2', product: 'lightener', minutes: 20 }, { kind: 'developing', label: 'Lightener lifts, section 2 of 2', product: 'lightener', minMinutes: 20, maxMinutes: 30 }, { kind: 'basin', label: 'Rinse section 2', product: 'none', minutes: 10 },
+    ] }],
+  };
+  const quote = (over: object = {}) => ({ serviceId, stepPlan: lightening, priceCents: 30000, depositCents: 5000, notes: '', ...over });
+
+  beforeAll(async () => {
+    failed = await insertUser(t.testDb.db, salon.salonId, 'client');
+    const res = await stylist$.write('post', `/api/clients/${failed.clientId}/strand-tests`, {
+      testedAt: new Date(Date.now() - 86_400_000).toISOString(), tested: 'Lightener 1:2 with 6 % on a nape strand', productType: 'lightener', developerPercent: 6,
+      minutes: 30, result: 'failed', notes: 'Strand stretched and snapped', photoId: null,
+    });
+    expect(res.status).toBe(201);
+  });
+
+  it('the proposal plans no lightener and no remover, and says why, even when the consultation says passed', async () => {
+    const res = await stylist$.write('post', consultationPaths.propose, { consultation: coloured(), serviceId: null, clientId: failed.clientId });
+    expect(res.status).toBe(200);
+    expect(res.body.strandTest).toBe('failed');
+    const products = res.body.stepPlan.sittings.flatMap((s: { steps: { product: string }[] }) => s.steps.map((st) => st.product));
+    expect(products).not.toContain('lightener');
+    expect(products).not.toContain('colour_remover');
+    expect(res.body.warnings.find((w: { code: string }) => w.code === 'strand_test_failed').message).toMatch(/4 levels of lift asked for are left undone/);
+  });
+
+  it('refuses a quote with lightener after the failed test unless a reason is written, and keeps the reason', async () => {
+    const body = (over: object) => ({ clientId: failed.clientId, consultation: coloured(), photoIds: [], quote: quote(over) });
+    const refused = await stylist$.write('post', consultationPaths.create, body({}));
+    expect(refused.status).toBe(409);
+    expect(refused.body.error.code).toBe('STRAND_TEST');
+    expect(refused.body.error.fields['quote.overrideReason']).toMatch(/strand test failed.*sitting 1, step 1 “Apply lightener, section 1 of 2”/);
+    expect(await list(failed.clientId!)).toEqual([]);
+
+    const reason = 'Re-tested after two bond treatments: the nape strand held at level 7.';
+    const saved = await stylist$.write('post', consultationPaths.create, body({ overrideReason: reason }));
+    expect(saved.status).toBe(201);
+    expect(saved.body.quote.overrideReason).toBe(reason);
+    expect(saved.body.strandTest).toBe('failed');
+    const audit = await t.testDb.db.selectFrom('audit_log').select(['action', 'after']).where('entity', '=', 'quote').where('entity_id', '=', saved.body.quote.id).execute();
+    expect(audit).toEqual([{ action: 'lightening planned after a failed strand test', after: expect.objectContaining({ reason }) }]);
+
+    // Editing it without the reason is refused too, naming the field; taking the lightener out needs none.
+    const edit = await stylist$.write('put', consultationPaths.quote(saved.body.id), quote({ overrideReason: '' }));
+    expect(edit.status).toBe(409);
+    expect(edit.body.error.fields.overrideReason).toMatch(/write why/);
+    const care = { sittings: [{ steps: [{ kind: 'basin', label: 'Bond treatment', product: 'bond_care', minutes: 15 }, { kind: 'hands_on', label: 'Blow-dry', product: 'none', minutes: 35 }] }] };
+    expect((await stylist$.write('put', consultationPaths.quote(saved.body.id), quote({ stepPlan: care, priceCents: 9000, depositCents: 0 }))).status).toBe(200);
+  });
+
+  it('refuses a quote whose developing step is over its family’s limit, naming the step', async () => {
+    // 45 min applying + up to 50 lifting = 95 min of lightener on the hair, over the 50 min limit.
+    const tooLong = { sittings: [{ steps: [{ kind: 'hands_on', label: 'Apply lightener', product: 'lightener', minutes: 45 }, { kind: 'developing', label: 'Lightener lifts', product: 'lightener', minMinutes: 30, maxMinutes: 50 }, { kind: 'basin', label: 'Rinse', product: 'none', minutes: 15 }] }] };
+    const res = await stylist$.write('post', consultationPaths.create, { clientId: client.clientId, consultation: consultation(), photoIds: [], quote: quote({ stepPlan: tooLong }) });
+    expect(res.status).toBe(400);
+    expect(res.body.error.fields['quote.stepPlan.sittings.0.steps.1']).toMatch(/“Lightener lifts”: lightener may be on the hair at most 50 min; this plan keeps it on up to 95 min/);
+  });
+
+  it('refuses to propose, with the reason, when the salon’s limit leaves no room even in four sections', async () => {
+    const db = t.testDb.db;
+    await db.updateTable('salons').set({ lightener_max_minutes: 25 }).where('id', '=', salon.salonId).execute();
+    try {
+      // 40 min of lightener applying in 4 sections = 10 min, + 20 min least lifting = 30 min > 25.
+      const res = await stylist$.write('post', consultationPaths.propose, { consultation: coloured(), serviceId: null, clientId: client.clientId });
+      expect(res.status).toBe(409);
+      expect(res.body.error.message).toMatch(/limit of 25 min on the hair/);
+    } finally {
+      await db.updateTable('salons').set({ lightener_max_minutes: 50 }).where('id', '=', salon.salonId).execute();
+    }
   });
 });

@@ -18,7 +18,14 @@ let m: Awaited<ReturnType<typeof messageDesk>>;
 let owner$: Awaited<ReturnType<typeof signedInAgent>>;
 const Z = 'America/Denver';
 const db = () => t.testDb.db;
-const hour: StepPlan = { sittings: [{ steps: [{ kind: 'hands_on', label: 'Lightener and tone', product: 'lightener', minutes: 60 }] }] };
+// An hour in the chair: lightener on for 20 min (within the 50 min processing limit), rinsed, then toned and finished.
+const hour: StepPlan = {
+  sittings: [{ steps: [
+    { kind: 'hands_on', label: 'Apply lightener', product: 'lightener', minutes: 20 },
+    { kind: 'basin', label: 'Rinse', product: 'none', minutes: 10 },
+    { kind: 'hands_on', label: 'Tone and finish', product: 'toner_direct', minutes: 30 },
+  ] }],
+};
 const patch: StepPlan = { sittings: [{ steps: [{ kind: 'hands_on', label: 'Apply skin test', product: 'none', minutes: 15 }] }] };
 let lightening: string;
 let correction: string;

@@ -15,9 +15,10 @@ let ana$: Awaited<ReturnType<typeof signedInAgent>>;
 const friday = futureWeekday(5, 2);
 const clients: { id: string; name: string }[] = [];
 
-// A lightening visit: 10:00–10:45 hands-on, 10:45–11:35 developing (Ana's hands are free), then rinse.
+// A vivid colour visit: 10:00–10:45 hands-on, 10:45–11:35 developing (Ana's hands are free), then rinse. Direct dye,
+// so no processing limit applies (45 min of lightener and 50 of lifting would be over the salon's 50 min limit).
 const lightening: StepPlan = {
-  sittings: [{ steps: [{ kind: 'hands_on', label: 'Apply lightener', product: 'lightener', minutes: 45 }, { kind: 'developing', label: 'Lifts', product: 'lightener', minMinutes: 50, maxMinutes: 50 }, { kind: 'basin', label: 'Rinse', product: 'none', minutes: 15 }] }],
+  sittings: [{ steps: [{ kind: 'hands_on', label: 'Apply vivid colour', product: 'direct_dye', minutes: 45 }, { kind: 'developing', label: 'Vivid colour develops', product: 'direct_dye', minMinutes: 50, maxMinutes: 50 }, { kind: 'basin', label: 'Rinse', product: 'none', minutes: 15 }] }],
 };
 
 beforeAll(async () => {
@@ -27,7 +28,7 @@ beforeAll(async () => {
   const desk = await insertUser(db, salon.salonId, 'front_desk');
   ana = await insertUser(db, salon.salonId, 'stylist', { maxClientsAtOnce: 2 });
   toner = await insertPlannedService(db, salon.salonId, { plan: tonerPlan, name: 'Toner refresh' });
-  const lighteningId = await insertPlannedService(db, salon.salonId, { plan: lightening, name: 'Lightening' });
+  const lighteningId = await insertPlannedService(db, salon.salonId, { plan: lightening, name: 'Vivid colour' });
   desk$ = await signedInAgent(t.app, desk.email, desk.password);
   ana$ = await signedInAgent(t.app, ana.email, ana.password);
   for (const name of ['Ines Vale', 'Otto Brandt', 'Pia Sol']) {
@@ -117,7 +118,7 @@ describe('hands-free windows', () => {
 
   it('filling a window withdraws its open offers at once: the link says the time has gone, and the window card shows it', async () => {
     const thursday = futureWeekday(4, 2);
-    const lighteningId = (await t.testDb.db.selectFrom('services').select('id').where('name', '=', 'Lightening').where('salon_id', '=', salon.salonId).executeTakeFirstOrThrow()).id;
+    const lighteningId = (await t.testDb.db.selectFrom('services').select('id').where('name', '=', 'Vivid colour').where('salon_id', '=', salon.salonId).executeTakeFirstOrThrow()).id;
     const base = await desk$.write('post', '/api/bookings', {
       clientId: clients[2].id, serviceId: lighteningId, stepPlan: lightening, stylistId: ana.staffId, start: localIso(thursday, '10:00'), idempotencyKey: 'window-base-0002',
     });

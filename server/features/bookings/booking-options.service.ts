@@ -12,6 +12,7 @@ import { skinTestVerdictFor, testedSittingStarts } from '../skin-tests/skin-test
 import { loadSalonCalendars } from '../planning/salon-calendars.repository';
 import { horizonFor, localEarliest, toBookingOption, toEngineSittings } from '../planning/engine-request';
 import { loadNames } from '../planning/names.repository';
+import { assertWithinProcessingLimits } from '../planning/processing-limits-check';
 
 /** How many days of first sittings the desk's search looks through. */
 const SEARCH_DAYS = 42;
@@ -22,6 +23,7 @@ export async function findBookingOptions(db: Db, salon: Salon, body: Required<Bo
   if (!client) throw notFound('That client');
   if (!service) throw notFound('That service');
   const plan = body.stepPlan as StepPlan;
+  assertWithinProcessingLimits(plan, salon.processingLimits);
   // The rule follows the steps as edited here, whatever service they are booked under.
   const verdict = await skinTestVerdictFor(db, salon, client.id, plan, service.needsSkinTest, now);
   const firstAllowed = verdict.windows.reduce<Date | null>((a, w) => (!a || w.from < a ? w.from : a), null);

@@ -8,6 +8,7 @@ import { findClientQuote } from '../consultations/consultations.repository';
 import { findClient } from '../clients/clients.repository';
 import { findService } from '../services/services.repository';
 import { lockStylists } from '../planning/stylist-lock';
+import { assertWithinProcessingLimits } from '../planning/processing-limits-check';
 import { bookAt } from './book-at.service';
 import { findIdempotent, saveIdempotent } from './idempotency.repository';
 
@@ -19,6 +20,8 @@ export async function createBooking(db: Kysely<Database>, salon: Salon, user: Se
   const [client, service] = await Promise.all([findClient(db, salon.id, body.clientId), findService(db, salon.id, body.serviceId)]);
   if (!client) throw notFound('That client');
   if (!service) throw notFound('That service');
+  // The desk's per-booking plan is held to the salon's processing limits like the menu's.
+  assertWithinProcessingLimits(body.stepPlan, salon.processingLimits);
   const quote = body.quoteId ? await findClientQuote(db, salon.id, client.id, body.quoteId) : undefined;
   if (body.quoteId && !quote) throw new AppError('VALIDATION_FAILED', 400, 'That quote is not this client’s.', { quoteId: 'That quote is not this client’s.' });
   return db.transaction().execute(async (trx) => {

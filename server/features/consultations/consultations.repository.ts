@@ -36,6 +36,7 @@ export async function insertConsultation(
     .values({
       salon_id: c.salonId, consultation_id: id, client_id: c.clientId, service_id: c.quote.serviceId, step_plan: JSON.stringify(c.quote.stepPlan),
       price_cents: c.quote.priceCents, deposit_cents: c.quote.depositCents, notes: c.quote.notes, warnings: JSON.stringify(c.warnings),
+      override_reason: c.quote.overrideReason,
     })
     .execute();
   return id;
@@ -47,7 +48,7 @@ export function updateQuote(db: Db, consultationId: string, q: QuoteEdit) {
     .updateTable('quotes')
     .set({
       service_id: q.serviceId, step_plan: JSON.stringify(q.stepPlan), price_cents: q.priceCents, deposit_cents: q.depositCents, notes: q.notes,
-      status: 'draft', sent_at: null, accepted_at: null, updated_at: new Date(),
+      override_reason: q.overrideReason, status: 'draft', sent_at: null, accepted_at: null, updated_at: new Date(),
     })
     .where('consultation_id', '=', consultationId)
     .execute();
@@ -71,7 +72,7 @@ const consultationQuery = (db: Db, salonId: string) =>
     .select([
       'c.id', 'c.client_id', 'cl.name as client_name', 'cl.email as client_email', 'c.details', 'c.created_at', 'u.name as created_by_name',
       'q.id as quote_id', 'q.status', 'q.service_id', 's.name as service_name', 'q.step_plan', 'q.price_cents', 'q.deposit_cents', 'q.notes',
-      'q.warnings', 'q.sent_at', 'q.accepted_at',
+      'q.warnings', 'q.override_reason', 'q.sent_at', 'q.accepted_at',
     ])
     .select((eb) => [
       eb.fn.coalesce(

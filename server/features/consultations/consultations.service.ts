@@ -1,15 +1,20 @@
 import type { Db } from '../../db/database';
 import type { SessionUser } from '../../../shared/schemas/auth.schemas';
-import type { ConsultationInput, ConsultationView, CreateConsultation, ProposedQuoteView, QuoteEdit, QuoteWarning } from '../../../shared/schemas/consultation.schemas';
+import type { ConsultationInput, ConsultationView, CreateConsultation, ProposedQuoteView, QuoteEdit, QuoteWarning, StrandOutcome } from '../../../shared/schemas/consultation.schemas';
 import type { ServiceSummary } from '../../../shared/schemas/service.schemas';
-import { StepPlanSchema } from '../../../shared/schemas/step-plan.schemas';
-import { proposeQuote } from '../../../shared/quotes/propose-quote';
+import { StepPlanSchema, type StepPlan } from '../../../shared/schemas/step-plan.schemas';
+import { proposeQuote, type PlanningRules, type ProposedQuote, type QuotePricing } from '../../../shared/quotes/propose-quote';
+import { ProposalRefused } from '../../../shared/quotes/stage-steps';
+import { gatedSteps, strandOutcome, strandOverrideProblem } from '../../../shared/quotes/strand-gate';
 import { AppError, notFound } from '../../lib/app-error';
 import type { Mailer } from '../../mail/mailer';
 import { quoteMail } from './quote-mail';
 import { listStrandTests } from '../strand-tests/strand-tests.repository';
 import { findClient } from '../clients/clients.repository';
 import { listServices } from '../services/services.repository';
+import { findSalon } from '../salon/salon.repository';
+import { writeAudit } from '../audit/audit.repository';
+import { assertWithinProcessingLimits } from '../planning/processing-limits-check';
 import {
   clientPhotoIds, findConsultation, insertConsultation, listClientConsultations, quotePriceInputs, setQuoteStatus, updateQuote, type ConsultationRow,
 } from './consultations.repository';
@@ -29,26 +34,75 @@ async function bookableService(db: Db, salonId: string, serviceId: string, field
   return service;
 }
 
-/** The consultation's strand test, or else the latest one on the client's record (a quote must not warn about a test that was done). */
-async function withRecordedStrandTest(db: Db, salonId: string, clientId: string | null | undefined, c: ConsultationInput): Promise<ConsultationInput> {
-  if (c.strandTest !== 'none' || !clientId) return c;
+/** The client's latest recorded strand test result, if any. */
+async function latestStrandResult(db: Db, salonId: string, clientId: string | null | undefined) {
+  if (!clientId) return null;
   const [latest] = await listStrandTests(db, salonId, clientId);
-  return latest ? { ...c, strandTest: latest.result } : c;
+  return latest?.result ?? null;
+}
+
+/**
+ * The consultation as the rules read it: its strand-test answer, or the client's latest recorded test when that
+ * asks for more care (a quote must not warn about a test that was done, nor overlook one that failed).
+ */
+async function withRecordedStrandTest(db: Db, salonId: string, clientId: string | null | undefined, c: ConsultationInput): Promise<ConsultationInput> {
+  return { ...c, strandTest: strandOutcome(c.strandTest, await latestStrandResult(db, salonId, clientId)) };
+}
+
+/** The salon's prices and planning rules, as the quote rules take them. */
+async function quoteInputs(db: Db, salonId: string): Promise<{ prices: Omit<QuotePricing, 'deposit'>; rules: PlanningRules }> {
+  const [prices, salon] = await Promise.all([quotePriceInputs(db, salonId), findSalon(db, salonId)]);
+  return { prices, rules: { processingLimits: salon.processingLimits, liftPerSitting: salon.liftPerSitting } };
+}
+
+/** The rules' proposal, or 409 with the reason when a stage cannot be planned within the salon's processing limits. */
+function proposeOrRefuse(c: ConsultationInput, pricing: QuotePricing, rules: PlanningRules): ProposedQuote {
+  try {
+    return proposeQuote(c, pricing, rules);
+  } catch (e) {
+    if (e instanceof ProposalRefused) throw new AppError('CONFLICT', 409, e.message);
+    throw e;
+  }
 }
 
 /** The proposal for a consultation at this salon's prices; the deposit follows the service's deposit. */
 export async function proposeFor(db: Db, salonId: string, asked: ConsultationInput, serviceId: string | null, clientId?: string | null): Promise<ProposedQuoteView> {
   const consultation = await withRecordedStrandTest(db, salonId, clientId, asked);
-  const prices = await quotePriceInputs(db, salonId);
-  const draft = proposeQuote(consultation, { ...prices, deposit: { kind: 'fixed', cents: 0 } });
+  const { prices, rules } = await quoteInputs(db, salonId);
+  const draft = proposeOrRefuse(consultation, { ...prices, deposit: { kind: 'fixed', cents: 0 } }, rules);
   const service = serviceId ? await bookableService(db, salonId, serviceId, 'serviceId') : defaultService(await listServices(db, salonId), draft.sittings);
-  const quote = proposeQuote(consultation, { ...prices, deposit: { kind: 'fixed', cents: service?.depositCents ?? 0 } });
-  return { ...quote, serviceId: service?.id ?? null, productGrams: quote.productGrams as Record<string, number> };
+  const quote = proposeOrRefuse(consultation, { ...prices, deposit: { kind: 'fixed', cents: service?.depositCents ?? 0 } }, rules);
+  return { ...quote, serviceId: service?.id ?? null, strandTest: consultation.strandTest, productGrams: quote.productGrams as Record<string, number> };
 }
 
 /** Warnings are the rules' judgement of the consultation, kept with the quote whatever the stylist edits. */
-const warningsOf = (consultation: ConsultationInput, prices: Awaited<ReturnType<typeof quotePriceInputs>>): QuoteWarning[] =>
-  proposeQuote(consultation, { ...prices, deposit: { kind: 'fixed', cents: 0 } }).warnings;
+async function warningsOf(db: Db, salonId: string, consultation: ConsultationInput): Promise<QuoteWarning[]> {
+  const { prices, rules } = await quoteInputs(db, salonId);
+  try {
+    return proposeQuote(consultation, { ...prices, deposit: { kind: 'fixed', cents: 0 } }, rules).warnings;
+  } catch (e) {
+    // The stylist planned by hand what the rules could not fit: keep why with the quote.
+    if (e instanceof ProposalRefused) return [{ code: 'processing_limit', message: e.message }];
+    throw e;
+  }
+}
+
+/**
+ * A quote's plan is held to the salon's processing limits, and after a failed strand test it may plan lightener
+ * or colour remover only with a written reason (409 STRAND_TEST naming the reason field).
+ */
+function assertQuoteAllowed(plan: StepPlan, limits: PlanningRules['processingLimits'], outcome: StrandOutcome, reason: string, prefix: string): void {
+  assertWithinProcessingLimits(plan, limits, prefix || undefined);
+  const problem = strandOverrideProblem(plan, outcome, reason);
+  if (problem) throw new AppError('STRAND_TEST', 409, problem, { [`${prefix ? `${prefix}.` : ''}overrideReason`]: problem });
+}
+
+/** An override of a failed strand test is a safety decision: it goes to the audit log with its reason. */
+async function auditOverride(db: Db, user: SessionUser, quoteId: string, plan: StepPlan, outcome: StrandOutcome, reason: string): Promise<void> {
+  const steps = gatedSteps(plan);
+  if (outcome !== 'failed' || steps.length === 0) return;
+  await writeAudit(db, { salonId: user.salonId, actorUserId: user.id, entity: 'quote', entityId: quoteId, action: 'lightening planned after a failed strand test', after: { reason, steps } });
+}
 
 export async function createConsultation(db: Db, user: SessionUser, body: CreateConsultation): Promise<ConsultationView> {
   const client = await findClient(db, user.salonId, body.clientId);
@@ -56,17 +110,29 @@ export async function createConsultation(db: Db, user: SessionUser, body: Create
   await bookableService(db, user.salonId, body.quote.serviceId, 'quote.serviceId');
   const photos = await clientPhotoIds(db, client.id, body.photoIds);
   if (photos.length !== new Set(body.photoIds).size) throw invalid('photoIds', 'Link only this client’s own photos.');
-  const warnings = warningsOf(await withRecordedStrandTest(db, user.salonId, client.id, body.consultation), await quotePriceInputs(db, user.salonId));
-  const id = await db.transaction().execute((trx) =>
-    insertConsultation(trx, { salonId: user.salonId, clientId: client.id, details: body.consultation, photoIds: photos, createdBy: user.id, quote: body.quote, warnings }),
-  );
+  const consultation = await withRecordedStrandTest(db, user.salonId, client.id, body.consultation);
+  const salon = await findSalon(db, user.salonId);
+  assertQuoteAllowed(body.quote.stepPlan, salon.processingLimits, consultation.strandTest, body.quote.overrideReason, 'quote');
+  const warnings = await warningsOf(db, user.salonId, consultation);
+  const id = await db.transaction().execute(async (trx) => {
+    const created = await insertConsultation(trx, { salonId: user.salonId, clientId: client.id, details: body.consultation, photoIds: photos, createdBy: user.id, quote: body.quote, warnings });
+    const view = await consultationView(trx, user.salonId, created);
+    await auditOverride(trx, user, view.quote.id, body.quote.stepPlan, consultation.strandTest, body.quote.overrideReason);
+    return created;
+  });
   return consultationView(db, user.salonId, id);
 }
 
 export async function editQuote(db: Db, user: SessionUser, id: string, edit: QuoteEdit): Promise<ConsultationView> {
-  if (!(await findConsultation(db, user.salonId, id))) throw notFound('That consultation');
+  const row = await findConsultation(db, user.salonId, id);
+  if (!row) throw notFound('That consultation');
   await bookableService(db, user.salonId, edit.serviceId, 'serviceId');
-  await updateQuote(db, id, edit);
+  const outcome = strandOutcome((row.details as ConsultationInput).strandTest, await latestStrandResult(db, user.salonId, row.client_id));
+  assertQuoteAllowed(edit.stepPlan, (await findSalon(db, user.salonId)).processingLimits, outcome, edit.overrideReason, '');
+  await db.transaction().execute(async (trx) => {
+    await updateQuote(trx, id, edit);
+    await auditOverride(trx, user, row.quote_id, edit.stepPlan, outcome, edit.overrideReason);
+  });
   return consultationView(db, user.salonId, id);
 }
 
@@ -76,14 +142,15 @@ export async function sendQuote(db: Db, mailer: Mailer, user: SessionUser, id: s
   if (!row) throw notFound('That consultation');
   if (!row.client_email) throw invalid('email', 'This client has no e-mail address; add one on the client card first.');
   const salon = await db.selectFrom('salons').select(['name', 'currency']).where('id', '=', user.salonId).executeTakeFirstOrThrow();
-  await mailer.send(quoteMail(toView(row), row.client_email, salon, acceptUrl));
+  await mailer.send(quoteMail(toView(row, null), row.client_email, salon, acceptUrl));
   await setQuoteStatus(db, row.quote_id, 'sent', now);
   return consultationView(db, user.salonId, id);
 }
 
 /** The signed-in client's sent and accepted quotes, newest first. */
 export async function myQuotes(db: Db, salonId: string, clientId: string): Promise<ConsultationView[]> {
-  return (await listClientConsultations(db, salonId, clientId)).filter((r) => r.status !== 'draft').map(toView);
+  const latest = await latestStrandResult(db, salonId, clientId);
+  return (await listClientConsultations(db, salonId, clientId)).filter((r) => r.status !== 'draft').map((r) => toView(r, latest));
 }
 
 /** The client accepts a quote that was sent to them (accepting twice answers the same). */
@@ -97,26 +164,31 @@ export async function acceptMyQuote(db: Db, salonId: string, clientId: string, q
 export async function consultationView(db: Db, salonId: string, id: string): Promise<ConsultationView> {
   const row = await findConsultation(db, salonId, id);
   if (!row) throw notFound('That consultation');
-  return toView(row);
+  return toView(row, await latestStrandResult(db, salonId, row.client_id));
 }
 
 export async function clientConsultations(db: Db, salonId: string, clientId: string): Promise<ConsultationView[]> {
   if (!(await findClient(db, salonId, clientId))) throw notFound('That client');
-  return (await listClientConsultations(db, salonId, clientId)).map(toView);
+  const latest = await latestStrandResult(db, salonId, clientId);
+  return (await listClientConsultations(db, salonId, clientId)).map((r) => toView(r, latest));
 }
 
-export function toView(r: ConsultationRow): ConsultationView {
+/** A stored consultation and quote; `latestRecorded` is the client's latest strand test, which the quote is held to. */
+export function toView(r: ConsultationRow, latestRecorded: Awaited<ReturnType<typeof latestStrandResult>>): ConsultationView {
+  const details = r.details as ConsultationInput;
   return {
     id: r.id,
     clientId: r.client_id,
     clientName: r.client_name,
     createdAt: r.created_at.toISOString(),
     createdByName: r.created_by_name,
-    consultation: r.details as ConsultationInput,
+    // Records kept before the vivid question was asked did not want one.
+    consultation: { ...details, vivid: details.vivid ?? false },
+    strandTest: strandOutcome(details.strandTest, latestRecorded),
     photoIds: r.photo_ids,
     quote: {
       id: r.quote_id, status: r.status, serviceId: r.service_id, serviceName: r.service_name, stepPlan: StepPlanSchema.parse(r.step_plan),
-      priceCents: r.price_cents, depositCents: r.deposit_cents, notes: r.notes, warnings: r.warnings as QuoteWarning[],
+      priceCents: r.price_cents, depositCents: r.deposit_cents, notes: r.notes, overrideReason: r.override_reason, warnings: r.warnings as QuoteWarning[],
       sentAt: r.sent_at?.toISOString() ?? null, acceptedAt: r.accepted_at?.toISOString() ?? null, bookingIds: r.booking_ids,
     },
   };

@@ -4,6 +4,8 @@ import type { SalonsTable } from '../../db/schema';
 import type { Salon } from '../../../shared/schemas/salon.schemas';
 import { AppError } from '../../lib/app-error';
 import { WIDENING_FAMILIES, type WideningFamily } from '../../../shared/rules/skin-test-need';
+import type { ProcessingLimits } from '../../../shared/rules/processing-limits';
+import type { LiftPerSitting } from '../../../shared/quotes/lift-per-sitting';
 
 export async function findSalon(db: Db, id: string): Promise<Salon> {
   return toSalon(await db.selectFrom('salons').selectAll().where('id', '=', id).executeTakeFirstOrThrow());
@@ -25,6 +27,35 @@ export function toSalon(row: Selectable<SalonsTable>): Salon {
     granularityMinutes: row.granularity_minutes,
     cancellationWindowHours: row.cancellation_window_hours,
     cancellationKeeps: row.cancellation_keeps,
+    ...planningRulesOf(row),
+  };
+}
+
+/** The salon's processing limits and lift per sitting, from its row. */
+export function planningRulesOf(row: Selectable<SalonsTable>): { processingLimits: ProcessingLimits; liftPerSitting: LiftPerSitting } {
+  return {
+    processingLimits: {
+      lightener: row.lightener_max_minutes,
+      oxidative_colour: row.oxidative_colour_max_minutes,
+      toner_oxidative: row.toner_oxidative_max_minutes,
+      colour_remover: row.colour_remover_max_minutes,
+    },
+    liftPerSitting: { virgin: row.lift_virgin_levels, coloured: row.lift_coloured_levels, compromised: row.lift_compromised_levels },
+  };
+}
+
+/** The columns that store processing limits and lift per sitting (either may be left out: unchanged). */
+export function planningRulesColumns(rules: { processingLimits?: ProcessingLimits; liftPerSitting?: LiftPerSitting }) {
+  const l = rules.processingLimits;
+  const lift = rules.liftPerSitting;
+  return {
+    ...(l && {
+      lightener_max_minutes: l.lightener,
+      oxidative_colour_max_minutes: l.oxidative_colour,
+      toner_oxidative_max_minutes: l.toner_oxidative,
+      colour_remover_max_minutes: l.colour_remover,
+    }),
+    ...(lift && { lift_virgin_levels: lift.virgin, lift_coloured_levels: lift.coloured, lift_compromised_levels: lift.compromised }),
   };
 }
 

@@ -1,9 +1,11 @@
 import type { Db } from '../../db/database';
 import type { SalonSettings } from '../../../shared/schemas/salon-settings.schemas';
+import { planningRulesColumns, planningRulesOf } from '../salon/salon.repository';
 
 const hhmm = (t: string) => t.slice(0, 5);
 
-export async function readSalonSettings(db: Db, salonId: string): Promise<SalonSettings> {
+/** The settings as stored: the planning rules always present (a write may leave them out). */
+export async function readSalonSettings(db: Db, salonId: string): Promise<SalonSettings & Required<Pick<SalonSettings, 'processingLimits' | 'liftPerSitting'>>> {
   const [row, hours] = await Promise.all([
     db.selectFrom('salons').selectAll().where('id', '=', salonId).executeTakeFirstOrThrow(),
     db.selectFrom('salon_hours').select(['rrule', 'start_time', 'end_time']).where('salon_id', '=', salonId).orderBy('start_time').orderBy('id').execute(),
@@ -26,6 +28,7 @@ export async function readSalonSettings(db: Db, salonId: string): Promise<SalonS
     quietTo: hhmm(row.quiet_to),
     reminderOffsetsHours: row.reminder_offsets_hours,
     maxDeveloperPercent: Number(row.max_developer_percent),
+    ...planningRulesOf(row),
   };
 }
 
@@ -50,6 +53,7 @@ export async function writeSalonSettings(db: Db, salonId: string, s: SalonSettin
       quiet_to: s.quietTo,
       reminder_offsets_hours: [...s.reminderOffsetsHours].sort((a, b) => b - a),
       max_developer_percent: s.maxDeveloperPercent,
+      ...planningRulesColumns(s),
     })
     .where('id', '=', salonId)
     .execute();

@@ -4,6 +4,7 @@ import type { AppDeps } from '../../app-deps';
 import { apiRoute } from '../../lib/api-route';
 import { writeAudit } from '../audit/audit.repository';
 import { readSalonSettings, writeSalonSettings } from './salon-settings.repository';
+import { assertServicesWithinNewLimits } from './processing-limits-change';
 
 export function registerSalonSettingsRoutes({ table, db }: AppDeps): void {
   apiRoute(
@@ -17,6 +18,7 @@ export function registerSalonSettingsRoutes({ table, db }: AppDeps): void {
     async ({ user, body }) =>
       db.transaction().execute(async (trx) => {
         const before = await readSalonSettings(trx, user.salonId);
+        await assertServicesWithinNewLimits(trx, user.salonId, before.processingLimits, body.processingLimits);
         await writeSalonSettings(trx, user.salonId, body);
         const after = await readSalonSettings(trx, user.salonId);
         await writeAudit(trx, { salonId: user.salonId, actorUserId: user.id, entity: 'salon', entityId: user.salonId, action: 'settings changed', before, after });

@@ -6,11 +6,11 @@ import { apiRoute } from '../../lib/api-route';
 import { AppError, notFound } from '../../lib/app-error';
 import { writeAudit } from '../audit/audit.repository';
 import { findSalon } from '../salon/salon.repository';
+import { assertWithinProcessingLimits } from '../planning/processing-limits-check';
 import { affectedMessage } from './affected-message';
 import { uniqueName } from './name-taken';
 import { listFutureBookings } from './future-bookings.repository';
 import { insertService, listSetupServices, listSkills, retireService, updateService } from './services-setup.repository';
-
 
 export function registerServiceSetupRoutes({ table, db }: AppDeps): void {
   const one = async (salonId: string, id: string) => {
@@ -30,6 +30,7 @@ export function registerServiceSetupRoutes({ table, db }: AppDeps): void {
     table,
     { method: 'post', path: setupPaths.services, access: ['owner'], summary: 'Add a service with its step plan', body: ServiceInputSchema, response: SetupServiceSchema, status: 201 },
     async ({ user, body }) => {
+      assertWithinProcessingLimits(body.stepPlan, (await findSalon(db, user.salonId)).processingLimits);
       const id = await uniqueName(insertService(db, user.salonId, body), 'service');
       await writeAudit(db, { salonId: user.salonId, actorUserId: user.id, entity: 'service', entityId: id, action: 'added', after: body });
       return one(user.salonId, id);
@@ -40,6 +41,7 @@ export function registerServiceSetupRoutes({ table, db }: AppDeps): void {
     { method: 'put', path: '/api/owner/setup/services/:id', access: ['owner'], summary: 'Change a service (bookings already made keep their own copy)', params: IdParamsSchema, body: ServiceInputSchema, response: SetupServiceSchema },
     async ({ user, params, body }) => {
       const before = await one(user.salonId, params.id);
+      assertWithinProcessingLimits(body.stepPlan, (await findSalon(db, user.salonId)).processingLimits);
       await uniqueName(updateService(db, user.salonId, params.id, body), 'service');
       await writeAudit(db, { salonId: user.salonId, actorUserId: user.id, entity: 'service', entityId: params.id, action: 'changed', before, after: body });
       return one(user.salonId, params.id);

@@ -16,7 +16,7 @@ import { ConsultationFields } from '../../features/consultations/components/cons
 import { PhotoPicker } from '../../features/consultations/components/photo-picker';
 import { ProposalLines, QuoteWarnings } from '../../features/consultations/components/quote-advice';
 import { QuoteEditor } from '../../features/consultations/components/quote-editor';
-import { ConsultationFormSchema, emptyConsultation, type ConsultationFormValues } from '../../features/consultations/consultation-form-schema';
+import { ConsultationFormSchema, emptyConsultation, type ConsultationFormInput, type ConsultationFormValues } from '../../features/consultations/consultation-form-schema';
 import { salonQueries } from '../../features/salon/api/salon-queries';
 import { queryClient } from '../../lib/query-client';
 
@@ -39,7 +39,7 @@ export function Component() {
   const { data: client } = useSuspenseQuery(clientQueries.detail(clientId));
   const { data: services } = useSuspenseQuery(catalogueQueries.services());
   const { data: salon } = useSuspenseQuery(salonQueries.current());
-  const form = useForm<ConsultationFormValues>({ resolver: zodResolver(ConsultationFormSchema), defaultValues: emptyConsultation() });
+  const form = useForm<ConsultationFormInput, unknown, ConsultationFormValues>({ resolver: zodResolver(ConsultationFormSchema), defaultValues: emptyConsultation() });
   const propose = useProposeQuote();
   const create = useCreateConsultation();
   // The consultation the shown proposal was made for: that is what gets saved with the quote.
@@ -76,8 +76,9 @@ export function Component() {
             <QuoteEditor
               key={proposed.at}
               services={colourServices}
+              strandTest={proposed.quote.strandTest}
               submitLabel="Save consultation and quote"
-              initial={{ serviceId: proposed.quote.serviceId ?? colourServices[0]?.id ?? '', stepPlan: proposed.quote.stepPlan, priceCents: proposed.quote.priceCents, depositCents: proposed.quote.depositCents, notes: '' }}
+              initial={{ serviceId: proposed.quote.serviceId ?? colourServices[0]?.id ?? '', stepPlan: proposed.quote.stepPlan, priceCents: proposed.quote.priceCents, depositCents: proposed.quote.depositCents, notes: '', overrideReason: '' }}
               onSave={(quote) =>
                 create
                   .mutateAsync({ clientId, consultation: proposed.values.consultation, photoIds: proposed.values.photoIds, quote })

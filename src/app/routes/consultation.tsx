@@ -83,8 +83,9 @@ export function Component() {
           <QuoteEditor
             key={`${q.id}-${edit.submittedAt}`}
             services={services.services}
+            strandTest={view.strandTest}
             submitLabel="Save quote"
-            initial={{ serviceId: q.serviceId, stepPlan: q.stepPlan, priceCents: q.priceCents, depositCents: q.depositCents, notes: q.notes }}
+            initial={{ serviceId: q.serviceId, stepPlan: q.stepPlan, priceCents: q.priceCents, depositCents: q.depositCents, notes: q.notes, overrideReason: q.overrideReason }}
             onSave={(quote) => edit.mutateAsync(quote)}
           />
         </div>

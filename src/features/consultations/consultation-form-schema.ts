@@ -1,14 +1,16 @@
-import { CreateConsultationSchema, type ConsultationInput } from '../../../shared/schemas/consultation.schemas';
+import type { z } from 'zod';
+import { CreateConsultationSchema } from '../../../shared/schemas/consultation.schemas';
 
 /** The consultation form: the same schema the server checks, without the client (from the page) and the quote (its own form). */
 export const ConsultationFormSchema = CreateConsultationSchema.pick({ consultation: true, photoIds: true });
-export type ConsultationFormValues = { consultation: ConsultationInput; photoIds: string[] };
+export type ConsultationFormInput = z.input<typeof ConsultationFormSchema>;
+export type ConsultationFormValues = z.output<typeof ConsultationFormSchema>;
 
 export const emptyConsultation = (): ConsultationFormValues => ({
   consultation: {
     currentLevel: 5, targetLevel: 5,
     history: { natural: true, permanent: false, directDye: false, boxDye: false, henna: false, previousLightening: false },
-    length: 'medium', density: 'medium', elasticity: 'good', porosity: 'normal', conditionNotes: '', strandTest: 'none', wantsCut: false, notes: '',
+    length: 'medium', density: 'medium', elasticity: 'good', porosity: 'normal', conditionNotes: '', strandTest: 'none', wantsCut: false, vivid: false, notes: '',
   },
   photoIds: [],
 });

@@ -1,4 +1,5 @@
 import { zodResolver } from '@hookform/resolvers/zod';
+import { useSuspenseQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import { FormProvider, useForm } from 'react-hook-form';
 import { useNavigate } from 'react-router-dom';
@@ -6,6 +7,7 @@ import type { BookingOption, BookingOptionsRequest, CreateBooking } from '../../
 import type { ClientSummary } from '../../../../shared/schemas/client.schemas';
 import type { ServiceSummary } from '../../../../shared/schemas/service.schemas';
 import type { StepPlan } from '../../../../shared/schemas/step-plan.schemas';
+import { withinProcessingLimits } from '../../../../shared/rules/processing-limits';
 import { FormAlert } from '../../../components/ui/form-alert';
 import { Notice } from '../../../components/ui/notice';
 import { PageHeader } from '../../../components/ui/page-header';
@@ -13,6 +15,7 @@ import { paths } from '../../../config/paths';
 import { isApiError } from '../../../lib/api-error';
 import { useIdempotencyKeys } from '../../../lib/use-idempotency-keys';
 import { useCreateBooking, useFindTimes } from '../../bookings/api/booking-mutations';
+import { salonQueries } from '../../salon/api/salon-queries';
 import { BookFormSchema, toOptionsRequest, type BookFormInput, type BookFormValues } from '../book-form-schema';
 import { BookServiceForm } from './book-service-form';
 import { OptionList, optionKey } from './option-list';
@@ -26,8 +29,10 @@ type Props = { services: ServiceSummary[]; stylists: { id: string; name: string;
 /** The desk's booking flow: fill in the request, find times, book one option. */
 export function BookServicePage({ services, stylists, today, quote }: Props) {
   const navigate = useNavigate();
+  const { data: salon } = useSuspenseQuery(salonQueries.current());
   const form = useForm<BookFormInput, unknown, BookFormValues>({
-    resolver: zodResolver(BookFormSchema),
+    // This booking's plan is held to the salon's processing limits, as the server holds it.
+    resolver: zodResolver(BookFormSchema.superRefine(withinProcessingLimits(salon.processingLimits))),
     defaultValues: quote
       ? { clientId: quote.client.id, serviceId: quote.serviceId, stylistId: '', earliestDate: today, stepPlan: structuredClone(quote.stepPlan) }
       : { clientId: '', serviceId: '', stylistId: '', earliestDate: today, stepPlan: { sittings: [] } },

@@ -1,5 +1,6 @@
 import { useFieldArray, useFormContext } from 'react-hook-form';
 import { sittingMaxMinutes } from '../../../../shared/schemas/step-plan.schemas';
+import { DAYS_BETWEEN_SITTINGS } from '../../../../shared/quotes/propose-quote';
 import { formatMinutes } from '../../../lib/time';
 import { Button } from '../../../components/ui/button';
 import { stepOfKind, type StepPlanFormInput } from '../book-form-schema';
@@ -48,7 +49,7 @@ export function StepPlanEditor({ title = 'Step plan for this booking', editSitti
         ))}
         {editSittings && sittings.fields.length < 6 && (
           <div>
-            <Button variant="secondary" onClick={() => sittings.append({ daysAfterPrevious: { min: 7, max: 14 }, steps: [stepOfKind('hands_on')] })}>
+            <Button variant="secondary" onClick={() => sittings.append({ daysAfterPrevious: { ...DAYS_BETWEEN_SITTINGS }, steps: [stepOfKind('hands_on')] })}>
               Add a sitting on another day
             </Button>
           </div>

@@ -28,6 +28,8 @@ export function StepRow({ path, number, count, onMove, onRemove, onReplace }: Pr
   const { register, watch, getValues, formState } = useFormContext<StepPlanFormInput>();
   const step = watch(path);
   const error = (field: string) => fieldError(formState.errors, `${path}.${field}`);
+  // A processing-limit problem belongs to the step as a whole (it names the step and the limit).
+  const stepError = fieldError(formState.errors, path);
   const name = `step ${number}`;
   return (
     <li className="grid grid-cols-2 items-end gap-3 rounded-lg bg-linen p-3 sm:grid-cols-[auto_10rem_1fr_12rem_auto_auto_auto]">
@@ -69,6 +71,17 @@ export function StepRow({ path, number, count, onMove, onRemove, onReplace }: Pr
           Remove
         </Button>
       </div>
+      {step.kind === 'developing' && (
+        <label className="col-span-full inline-flex min-h-11 items-center gap-2">
+          <input type="checkbox" className="size-5" aria-label={`${name} processes with heat`} {...register(`${path}.heat`)} />
+          With heat (a hood or processor): the time allowed on the hair is halved
+        </label>
+      )}
+      {stepError && (
+        <p className="col-span-full text-sm font-bold text-brick" role="alert">
+          {stepError}
+        </p>
+      )}
     </li>
   );
 }

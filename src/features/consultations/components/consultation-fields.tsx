@@ -4,10 +4,10 @@ import { SelectField } from '../../../components/ui/select-field';
 import { TextAreaField } from '../../../components/ui/text-area-field';
 import { TextField } from '../../../components/ui/text-field';
 import { fieldError } from '../../../lib/form-errors';
-import type { ConsultationFormValues } from '../consultation-form-schema';
+import type { ConsultationFormInput, ConsultationFormValues } from '../consultation-form-schema';
 import { densityOptions, elasticityOptions, historyLabels, lengthOptions, porosityOptions, strandOptions } from './consultation-labels';
 
-type Props = { form: UseFormReturn<ConsultationFormValues> };
+type Props = { form: UseFormReturn<ConsultationFormInput, unknown, ConsultationFormValues> };
 
 /** What the stylist finds at the consultation: levels, colour history, length, density, condition, strand test. */
 export function ConsultationFields({ form }: Props) {
@@ -43,6 +43,10 @@ export function ConsultationFields({ form }: Props) {
         <label className="inline-flex min-h-11 items-center gap-2">
           <input type="checkbox" className="size-5" {...register('consultation.wantsCut')} />
           Cut and finish at the end
+        </label>
+        <label className="inline-flex min-h-11 items-center gap-2">
+          <input type="checkbox" className="size-5" {...register('consultation.vivid')} />
+          A vivid shade (direct dye) on top, placed in sections
         </label>
       </div>
       <TextAreaField label="Other notes" hint="What the client wants, expectations, upkeep" error={err('notes')} {...register('consultation.notes')} />

@@ -14,7 +14,8 @@ export function ConsultationSummary({ view }: { view: ConsultationView }) {
     ['Length and density', `${labelOf(lengthOptions, c.length)}, ${labelOf(densityOptions, c.density).toLowerCase()}`],
     ['Elasticity and porosity', `${labelOf(elasticityOptions, c.elasticity)}; ${labelOf(porosityOptions, c.porosity).toLowerCase()}`],
     ['Condition notes', c.conditionNotes || '—'],
-    ['Strand test', labelOf(strandOptions, c.strandTest)],
+    ['Strand test', labelOf(strandOptions, c.strandTest) + (view.strandTest !== c.strandTest ? `; the client card now says: ${labelOf(strandOptions, view.strandTest).toLowerCase()} (the quote follows this)` : '')],
+    ['Vivid shade', c.vivid ? 'A vivid shade (direct dye) on top, placed in sections' : 'None'],
     ['Cut', c.wantsCut ? 'Cut and finish at the end' : 'No cut'],
     ['Notes', c.notes || '—'],
   ];

@@ -5,9 +5,9 @@ import { LoadingState } from '../../../components/ui/loading-state';
 import { photoQueries } from '../../photos/api/photo-queries';
 import { kindLabelsForStaff } from '../../photos/components/photo-labels';
 import { PhotoUploader } from '../../photos/components/photo-uploader';
-import type { ConsultationFormValues } from '../consultation-form-schema';
+import type { ConsultationFormInput, ConsultationFormValues } from '../consultation-form-schema';
 
-type Props = { clientId: string; control: Control<ConsultationFormValues> };
+type Props = { clientId: string; control: Control<ConsultationFormInput, unknown, ConsultationFormValues> };
 
 /** Tick the client's photos that belong to this consultation; new ones added below join the list. */
 export function PhotoPicker({ clientId, control }: Props) {

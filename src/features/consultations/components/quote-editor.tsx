@@ -1,29 +1,39 @@
 import { zodResolver } from '@hookform/resolvers/zod';
+import { useSuspenseQuery } from '@tanstack/react-query';
 import { FormProvider, useForm } from 'react-hook-form';
-import { QuoteEditSchema, type QuoteEdit } from '../../../../shared/schemas/consultation.schemas';
+import { QuoteEditSchema, type QuoteEdit, type QuoteEditInput, type StrandOutcome } from '../../../../shared/schemas/consultation.schemas';
 import type { ServiceSummary } from '../../../../shared/schemas/service.schemas';
+import { withinProcessingLimits } from '../../../../shared/rules/processing-limits';
+import { STRAND_OVERRIDE_MIN, withStrandGate } from '../../../../shared/quotes/strand-gate';
 import { Button } from '../../../components/ui/button';
 import { FormAlert } from '../../../components/ui/form-alert';
+import { Notice } from '../../../components/ui/notice';
 import { SelectField } from '../../../components/ui/select-field';
 import { TextAreaField } from '../../../components/ui/text-area-field';
 import { fieldError, showServerErrors } from '../../../lib/form-errors';
 import { StepPlanEditor } from '../../booking-flow/components/step-plan-editor';
+import { salonQueries } from '../../salon/api/salon-queries';
 import { MoneyField } from './money-field';
 
 type Props = {
-  initial: QuoteEdit;
+  initial: QuoteEditInput;
   services: ServiceSummary[];
+  /** The strand test the quote is held to: after a failed one, lightener or remover needs a written reason. */
+  strandTest: StrandOutcome;
   submitLabel: string;
   onSave: (quote: QuoteEdit) => Promise<unknown>;
 };
 
 /** Every part of a quote the stylist may change: the service it books as, steps, sittings, days apart, price, deposit. */
-export function QuoteEditor({ initial, services, submitLabel, onSave }: Props) {
-  const form = useForm<QuoteEdit>({ resolver: zodResolver(QuoteEditSchema), defaultValues: initial });
+export function QuoteEditor({ initial, services, strandTest, submitLabel, onSave }: Props) {
+  const { data: salon } = useSuspenseQuery(salonQueries.current());
+  // The same checks as the server: the salon's processing limits, and the strand-test gate.
+  const schema = QuoteEditSchema.superRefine(withinProcessingLimits(salon.processingLimits)).superRefine(withStrandGate(strandTest));
+  const form = useForm<QuoteEditInput, unknown, QuoteEdit>({ resolver: zodResolver(schema), defaultValues: initial });
   const { register, control, handleSubmit, setError, formState } = form;
   const err = (path: string) => fieldError(formState.errors, path);
   const submit = handleSubmit((quote) =>
-    onSave(quote).catch((error) => showServerErrors(error, setError, ['serviceId', 'priceCents', 'depositCents', 'notes'])),
+    onSave(quote).catch((error) => showServerErrors(error, setError, ['serviceId', 'priceCents', 'depositCents', 'notes', 'overrideReason'])),
   );
   const options = services.filter((s) => s.category === 'colour').map((s) => ({ value: s.id, label: s.name }));
   return (
@@ -32,6 +42,20 @@ export function QuoteEditor({ initial, services, submitLabel, onSave }: Props) {
         {formState.errors.root?.server && <FormAlert>{formState.errors.root.server.message}</FormAlert>}
         <SelectField label="Books as service" options={options} className="max-w-md" error={err('serviceId')} {...register('serviceId')} />
         <StepPlanEditor title="Steps and sittings of this quote" defaultOpen editSittings />
+        {strandTest === 'failed' && (
+          <div className="flex flex-col gap-2">
+            <Notice tone="danger" title="The strand test failed">
+              Dwell plans no lightener and no colour remover for this hair. If you add them, write why it is safe to go ahead; the reason is kept with the
+              quote and in the audit log.
+            </Notice>
+            <TextAreaField
+              label="Reason to lighten or remove colour despite the failed strand test"
+              hint={`Needed when the steps include lightener or colour remover (at least ${STRAND_OVERRIDE_MIN} characters).`}
+              error={err('overrideReason')}
+              {...register('overrideReason')}
+            />
+          </div>
+        )}
         <div className="flex flex-wrap gap-3">
           <MoneyField control={control} name="priceCents" label="Price" error={err('priceCents')} />
           <MoneyField control={control} name="depositCents" label="Deposit" error={err('depositCents')} />

@@ -13,13 +13,16 @@ import { fieldError, showServerErrors } from '../../../lib/form-errors';
 import { useSaveSalonSettings } from '../api/setup-mutations';
 import { HoursLines } from './hours-lines';
 import { SkinTestFamiliesField } from './skin-test-families-field';
+import { PlanningRulesFields } from './planning-rules-fields';
 
 const zones = typeof Intl.supportedValuesOf === 'function' ? Intl.supportedValuesOf('timeZone') : [];
 // Every country libphonenumber-js can read numbers for, by name.
 const countries = getCountries()
   .map((code) => ({ value: code, label: `${countryName(code)} (${code})` }))
   .sort((a, b) => a.label.localeCompare(b.label));
-const fieldNames = ['name', 'address', 'phone', 'timeZone', 'currency', 'country', 'hours', 'skinTestLeadHours', 'skinTestValidityDays', 'skinTestFamilies', 'holdMinutes', 'cancellationWindowHours', 'quietFrom', 'quietTo', 'reminderOffsetsHours', 'maxDeveloperPercent'] as const;
+const fieldNames = ['name', 'address', 'phone', 'timeZone', 'currency', 'country', 'hours', 'skinTestLeadHours', 'skinTestValidityDays', 'skinTestFamilies', 'holdMinutes', 'cancellationWindowHours', 'quietFrom', 'quietTo', 'reminderOffsetsHours', 'maxDeveloperPercent',
+  'processingLimits.lightener', 'processingLimits.oxidative_colour', 'processingLimits.toner_oxidative', 'processingLimits.colour_remover',
+  'liftPerSitting.virgin', 'liftPerSitting.coloured', 'liftPerSitting.compromised'] as const;
 
 /** Everything about how the salon works, in one form checked by the same schema as the server. */
 export function SalonSettingsForm({ settings }: { settings: SalonSettings }) {
@@ -124,6 +127,7 @@ export function SalonSettingsForm({ settings }: { settings: SalonSettings }) {
             {...form.register('maxDeveloperPercent', num)}
           />
         </SectionCard>
+        <PlanningRulesFields />
         <div>
           <Button type="submit" busy={save.isPending}>
             Save salon settings

@@ -1,7 +1,9 @@
 import { zodResolver } from '@hookform/resolvers/zod';
+import { useSuspenseQuery } from '@tanstack/react-query';
 import { FormProvider, useForm } from 'react-hook-form';
 import { useNavigate } from 'react-router-dom';
 import { ServiceInputSchema, type ServiceFormInput, type ServiceInput } from '../../../../shared/schemas/setup.schemas';
+import { withinProcessingLimits } from '../../../../shared/rules/processing-limits';
 import { Button } from '../../../components/ui/button';
 import { FormAlert } from '../../../components/ui/form-alert';
 import { SectionCard } from '../../../components/ui/section-card';
@@ -12,6 +14,7 @@ import { paths } from '../../../config/paths';
 import { fieldError, showServerErrors } from '../../../lib/form-errors';
 import { StepPlanEditor } from '../../booking-flow/components/step-plan-editor';
 import { useRetireService, useSaveService } from '../api/setup-mutations';
+import { salonQueries } from '../../salon/api/salon-queries';
 import { MoneyField } from './money-field';
 import type { ProductFamily, StepPlan } from '../../../../shared/schemas/step-plan.schemas';
 import { productFamilyLabels, stepNeedingSkinTest } from '../../../../shared/rules/skin-test-need';
@@ -32,7 +35,10 @@ export function ServiceForm({ id, initial, skills, currency, active, families }:
   const save = useSaveService();
   const retire = useRetireService();
   const navigate = useNavigate();
-  const form = useForm<ServiceFormInput, unknown, ServiceInput>({ resolver: zodResolver(ServiceInputSchema), defaultValues: initial });
+  const { data: salon } = useSuspenseQuery(salonQueries.current());
+  // The service's plan is held to the salon's processing limits, as the server holds it.
+  const schema = ServiceInputSchema.superRefine(withinProcessingLimits(salon.processingLimits));
+  const form = useForm<ServiceFormInput, unknown, ServiceInput>({ resolver: zodResolver(schema), defaultValues: initial });
   const { errors } = form.formState;
   const err = (name: string) => fieldError(errors, name);
   const depositKind = form.watch('depositKind');
