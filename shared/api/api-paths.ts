@@ -35,6 +35,7 @@ export const apiPaths = {
   bookings: '/api/bookings',
   moveSitting: (id: string) => `/api/bookings/${id}/move`,
   cancelBooking: (id: string) => `/api/bookings/${id}/cancel`,
+  changePlan: (id: string) => `/api/bookings/${id}/plan`,
   bookingHistory: (id: string) => `/api/bookings/${id}/history`,
   standby: '/api/standby',
   standbyEntry: (id: string) => `/api/standby/${id}`,

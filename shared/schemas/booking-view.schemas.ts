@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { StepPlanSchema } from './step-plan.schemas';
 import { BookingStatusSchema, IdSchema, InstantSchema, LocalDateSchema, StepKindSchema } from './common.schemas';
 
 /** Read models of the book, as the desk, the stylist and the client see them. */
@@ -41,6 +42,8 @@ export const BookingViewSchema = z.object({
    * `blocked` when the client's record no longer allows the colour (cancel or change the plan).
    */
   skinTest: z.object({ status: z.enum(['not_needed', 'passed', 'waiting', 'blocked']), message: z.string() }),
+  /** The booking's own step plan (what each step puts on the hair included), as booked or last changed. */
+  stepPlan: StepPlanSchema,
 });
 export type BookingView = z.infer<typeof BookingViewSchema>;
 

@@ -112,3 +112,6 @@ export const CreateClientSchema = z
     notes: z.string().max(2000).optional(),
   })
   .strict();
+
+/** The desk replaces a booking's step plan, each sitting kept at its start (e.g. colour that needs no skin test). */
+export const ChangePlanSchema = z.object({ stepPlan: StepPlanSchema }).strict();

@@ -284,3 +284,30 @@ describe('age', () => {
     expect((await book(client.clientId!, blowDry, dryOnly, localIso(futureWeekday(2, 5), '16:00'))).status).toBe(201);
   });
 });
+
+describe('the other way out: change the steps', () => {
+  it('a blocked booking changed to a direct dye keeps its start, needs no skin test, and gets its reminders back', async () => {
+    const client = await clientWith([{ appliedDaysAgo: 20, result: 'negative' }]);
+    await t.testDb.db.updateTable('clients').set({ email: `change.${Date.now()}@example.test` }).where('id', '=', client.clientId!).execute();
+    const start = localIso(futureWeekday(6, 3), '10:00');
+    const booked = await book(client.clientId!, rootColour, oxidative, start);
+    expect(booked.status).toBe(201);
+    const id = booked.body.id as string;
+    await desk$.write('post', apiPaths.skinTests(client.clientId!), { appliedAt: new Date(Date.now() - 3 * DAY).toISOString(), readAt: new Date(Date.now() - DAY).toISOString(), result: 'positive', product: '', notes: '' });
+    expect((await desk$.get(apiPaths.booking(id))).body.skinTest.status).toBe('blocked');
+    // Still oxidative: refused with the reason.
+    expectRefused(await desk$.write('post', apiPaths.changePlan(id), { stepPlan: oxidative }), /showed a reaction/);
+    const direct: StepPlan = { sittings: [{ steps: oxidative.sittings[0].steps.map((s) => (s.product === 'oxidative_colour' ? { ...s, product: 'direct_dye' as const, label: s.label.replace('colour', 'direct dye') } : s)) }] };
+    const changed = await desk$.write('post', apiPaths.changePlan(id), { stepPlan: direct });
+    expect(changed.status).toBe(200);
+    expect(changed.body.skinTest.status).toBe('not_needed');
+    expect(Date.parse(changed.body.sittings[0].start)).toBe(Date.parse(start));
+    expect(changed.body.sittings[0].steps[0].label).toBe('Apply direct dye to regrowth');
+    const reminders = await t.testDb.db.selectFrom('messages').select('status').where('booking_id', '=', id).where('kind', 'like', 'reminder%').execute();
+    expect(reminders.some((m) => m.status === 'queued')).toBe(true);
+    // A plan with another number of sittings is refused naming the field.
+    const two = await desk$.write('post', apiPaths.changePlan(id), { stepPlan: { sittings: [direct.sittings[0], { ...direct.sittings[0], daysAfterPrevious: { min: 3, max: 14 } }] } });
+    expect(two.status).toBe(400);
+    expect(two.body.error.fields.stepPlan).toMatch(/Keep 1 sitting/);
+  });
+});

@@ -6,6 +6,7 @@ import {
   CancelBookingSchema,
   CreateBookingSchema,
   MoveSittingSchema,
+  ChangePlanSchema,
 } from '../../../shared/schemas/booking.schemas';
 import { BookingViewSchema } from '../../../shared/schemas/booking-view.schemas';
 import { BookingStatusSchema, IdParamsSchema } from '../../../shared/schemas/common.schemas';
@@ -21,6 +22,7 @@ import { findBookingOptions } from './booking-options.service';
 import { createBooking } from './create-booking.service';
 import { moveSitting } from './move-booking.service';
 import { cancelBooking } from './cancel-booking.service';
+import { changePlan } from './change-plan.service';
 
 /** One booking as the desk sees it (any status). */
 export async function deskBookingView(db: Db, salonId: string, timeZone: string, bookingId: string) {
@@ -50,6 +52,18 @@ export function registerBookingChangeRoutes({ table, db }: AppDeps): void {
     async ({ user, params, body }) => {
       const salon = await findSalon(db, user.salonId);
       await moveSitting(db, salon, user.id, { bookingId: params.id, sitting: body.sitting, start: new Date(body.start), stylistId: body.stylistId, allowWaitingOnTest: true }, new Date());
+      return deskBookingView(db, salon.id, salon.timeZone, params.id);
+    },
+  );
+  apiRoute(
+    table,
+    {
+      method: 'post', path: '/api/bookings/:id/plan', access: DESK, params: IdParamsSchema, body: ChangePlanSchema, response: BookingViewSchema,
+      summary: "Replace a booking's step plan, each sitting kept at its start (the engine, skin-test and processing rules decide)",
+    },
+    async ({ user, params, body }) => {
+      const salon = await findSalon(db, user.salonId);
+      await changePlan(db, salon, user.id, params.id, body.stepPlan, new Date());
       return deskBookingView(db, salon.id, salon.timeZone, params.id);
     },
   );

@@ -68,6 +68,7 @@ export async function loadBookingViews(db: Db, filter: BookingFilter, timeZone: 
       depositOutcome: b.deposit_outcome,
       cancelReason: b.cancel_reason,
       skinTest: states[index],
+      stepPlan: plan,
       sittings: own.map((s) => ({
         seq: s.seq,
         of: own.length,

@@ -1,4 +1,5 @@
 import { sql } from 'kysely';
+import type { StepPlan } from '../../../shared/schemas/step-plan.schemas';
 import type { Db } from '../../db/database';
 import type { NewStep } from './bookings.repository';
 import { tstzRange } from './bookings.repository';
@@ -17,6 +18,11 @@ export async function replaceSitting(db: Db, bookingId: string, seq: number, cha
     .insertInto('booking_steps')
     .values(steps.map((s, j) => ({ sitting_id: sitting.id, seq: j + 1, kind: s.kind, label: s.label, stylist_id: stylistId, basin_id: s.basinId, during: tstzRange(s.start, s.end) })))
     .execute();
+}
+
+/** The booking's own step plan (its sittings and steps are replaced beside it). */
+export async function setStepPlan(db: Db, bookingId: string, plan: StepPlan): Promise<void> {
+  await db.updateTable('bookings').set({ step_plan: JSON.stringify(plan) }).where('id', '=', bookingId).execute();
 }
 
 export async function setStylist(db: Db, bookingId: string, stylistId: string): Promise<void> {

@@ -8,6 +8,7 @@ import { BookingHistory } from '../../features/booking-detail/components/booking
 import { BookingSummary } from '../../features/booking-detail/components/booking-summary';
 import { CancelBookingForm } from '../../features/booking-detail/components/cancel-booking-form';
 import { MoveSittingForm } from '../../features/booking-detail/components/move-sitting-form';
+import { ChangePlanForm } from '../../features/booking-detail/components/change-plan-form';
 import { bookingQueries } from '../../features/bookings/api/booking-queries';
 import { catalogueQueries } from '../../features/catalogue/api/catalogue-queries';
 import { MixLogSection } from '../../features/mix-log/components/mix-log-section';
@@ -43,6 +44,7 @@ export function Component() {
         {open && <MoveSittingForm booking={booking} timeZone={salon.timeZone} stylists={stylists.stylists} />}
         <CancelBookingForm booking={booking} />
       </div>
+      {booking.status === 'booked' && <ChangePlanForm key={JSON.stringify(booking.stepPlan)} booking={booking} />}
       <MixLogSection bookingId={booking.id} timeZone={salon.timeZone} clientId={booking.client.id} currency={salon.currency} />
       <BookingHistory bookingId={booking.id} timeZone={salon.timeZone} />
     </div>

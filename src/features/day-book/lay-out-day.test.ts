@@ -11,6 +11,7 @@ const booking = (n: number, stylist: number, chair: number, from: string, to: st
   stylist: { id: id(stylist), name: `Stylist ${stylist}` },
   priceCents: 0,
   skinTest: { status: 'not_needed', message: '' },
+  stepPlan: { sittings: [] },
   depositCents: 0,
   depositOutcome: null,
   cancelReason: null,

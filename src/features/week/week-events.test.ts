@@ -11,6 +11,7 @@ const booking = (n: number, stylist: number, status: BookingView['status']): Boo
   stylist: { id: id(stylist), name: 'Ana' },
   priceCents: 0,
   skinTest: { status: 'not_needed', message: '' },
+  stepPlan: { sittings: [] },
   depositCents: 0,
   depositOutcome: null,
   cancelReason: null,

@@ -49,6 +49,7 @@ export const expectedAccess: Record<string, Expectation> = {
   'GET /api/me/age': { allow: ['client'] },
   'POST /api/clients/{id}/guardian-consents': { allow: DESK, own: true },
   'POST /api/clients/{id}/skin-test-clearances': { allow: ['owner'], own: true },
+  'POST /api/bookings/{id}/plan': { allow: DESK, own: true },
   'GET /api/standby': { allow: STAFF },
   'POST /api/standby': { allow: DESK },
   'DELETE /api/standby/{id}': { allow: DESK, own: true },

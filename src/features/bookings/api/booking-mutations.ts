@@ -5,6 +5,7 @@ import {
   BookingOptionsResponseSchema,
   type BookingOptionsRequest,
   type CancelBookingSchema,
+  type ChangePlanSchema,
   type CreateBooking,
   type MoveSittingSchema,
 } from '../../../../shared/schemas/booking.schemas';
@@ -46,6 +47,15 @@ export function useCancelBooking(bookingId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (body: z.input<typeof CancelBookingSchema>) => apiWrite('POST', apiPaths.cancelBooking(bookingId), body, BookingViewSchema),
+    onSuccess: (booking) => bookChanged(queryClient, booking),
+  });
+}
+
+/** Replaces the booking's step plan, sittings kept at their starts. */
+export function useChangePlan(bookingId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (body: z.input<typeof ChangePlanSchema>) => apiWrite('POST', apiPaths.changePlan(bookingId), body, BookingViewSchema),
     onSuccess: (booking) => bookChanged(queryClient, booking),
   });
 }

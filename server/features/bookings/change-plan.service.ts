@@ -1,0 +1,64 @@
+import { DateTime } from 'luxon';
+import type { Kysely } from 'kysely';
+import type { Database } from '../../db/schema';
+import type { Salon } from '../../../shared/schemas/salon.schemas';
+import type { StepPlan } from '../../../shared/schemas/step-plan.schemas';
+import { AppError, notFound } from '../../lib/app-error';
+import { findService } from '../services/services.repository';
+import { lockStylists } from '../planning/stylist-lock';
+import { loadSalonCalendars } from '../planning/salon-calendars.repository';
+import { horizonFor } from '../planning/engine-request';
+import { planExactlyAt } from '../planning/plan-at';
+import { assertWithinProcessingLimits } from '../planning/processing-limits-check';
+import { writeAudit } from '../audit/audit.repository';
+import { assertSkinTestAllows } from '../skin-tests/skin-test-check.service';
+import { replanBookingMessages } from '../messages/plan-messages.service';
+import { bookingSnapshot } from './booking-snapshot.repository';
+import { replaceSitting, setStepPlan, sittingStarts } from './change-booking.repository';
+
+/**
+ * Replaces a booking's step plan, each sitting kept at its start (e.g. oxidative colour changed to a direct dye
+ * when a skin test reacted): the engine places every sitting again against the current book, the skin-test,
+ * age and processing rules are checked as at any desk door, and the change is audited and its messages replanned.
+ */
+export async function changePlan(db: Kysely<Database>, salon: Salon, actorUserId: string, bookingId: string, plan: StepPlan, now: Date): Promise<void> {
+  assertWithinProcessingLimits(plan, salon.processingLimits);
+  await db.transaction().execute(async (trx) => {
+    const before = await bookingSnapshot(trx, bookingId);
+    if (!before || before.row.salon_id !== salon.id) throw notFound('That booking');
+    const { row } = before;
+    if (row.status !== 'booked') throw new AppError('NOT_BOOKABLE', 409, `A ${row.status.replace('_', ' ')} booking's plan cannot be changed.`);
+    const starts = await sittingStarts(trx, bookingId);
+    if (plan.sittings.length !== starts.length) {
+      throw new AppError('VALIDATION_FAILED', 400, 'Some fields need attention.', { stepPlan: `Keep ${starts.length} sitting(s); to change the sittings, cancel and book again.` });
+    }
+    if (starts.some((s) => s < now)) throw new AppError('CONFLICT', 409, 'A sitting has already started; change what is left at the chair.');
+    await lockStylists(trx, [row.stylist_id]);
+    const service = await findService(trx, salon.id, row.service_id);
+    if (row.client_id) {
+      await assertSkinTestAllows(trx, salon, { clientId: row.client_id, plan, serviceAsks: service?.needsSkinTest ?? false, starts, atDesk: true }, now);
+    }
+    for (const [i, start] of starts.entries()) {
+      const one: StepPlan = { sittings: [{ steps: plan.sittings[i].steps }] };
+      const date = DateTime.fromJSDate(start, { zone: salon.timeZone }).toISODate()!;
+      const calendars = await loadSalonCalendars(trx, salon.id, horizonFor(date, one, 1), bookingId);
+      const result = planExactlyAt(calendars, { skill: service?.skill ?? 'colour', stylistId: row.stylist_id, plan: one, start });
+      if ('reason' in result) throw new AppError('CONFLICT', 409, `Sitting ${i + 1}: ${result.reason}`);
+      const placed = result.plan.sittings[0];
+      try {
+        await replaceSitting(trx, bookingId, i + 1, placed.chair, row.stylist_id, placed.steps.map((st, j) => ({
+          kind: st.kind, label: one.sittings[0].steps[j].label, start: new Date(st.start), end: new Date(st.end), basinId: st.basin ?? null,
+        })));
+      } catch (err) {
+        if ((err as { code?: string }).code === '23P01') throw new AppError('CONFLICT', 409, 'Someone took that time a moment ago.');
+        throw err;
+      }
+    }
+    await setStepPlan(trx, bookingId, plan);
+    const after = await bookingSnapshot(trx, bookingId);
+    await writeAudit(trx, { salonId: salon.id, actorUserId, entity: 'booking', entityId: bookingId, action: 'changed the step plan', before: { ...before.audit, steps: stepNames(row.step_plan as StepPlan) }, after: { ...after?.audit, steps: stepNames(plan) } });
+    await replanBookingMessages(trx, bookingId, now, 'skin_test'); // reminders come back when the new plan is allowed
+  });
+}
+
+const stepNames = (plan: StepPlan) => plan.sittings.map((s) => s.steps.map((st) => `${st.label} (${st.product})`).join(', '));
