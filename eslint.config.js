@@ -9,6 +9,8 @@ import { defineConfig } from 'eslint/config';
 
 export default defineConfig(
   { ignores: ['node_modules/', 'dist/', '.data/', 'coverage/', 'test-results/', 'tests/output/', 'uploads/', 'backups/'] },
+  // A disable comment that no longer silences anything fails, so none outlive their reason.
+  { linterOptions: { reportUnusedDisableDirectives: 'error' } },
   js.configs.recommended,
   tseslint.configs.recommended,
   {
