@@ -16,6 +16,7 @@ export function isRealDateTime(s: string): boolean {
 
 // A NUL byte (PostgreSQL text cannot hold one) or half of a surrogate pair (not Unicode; it would be stored
 // as a replacement character, not as typed).
+// eslint-disable-next-line no-control-regex -- NUL is the character this looks for
 const UNSTORABLE = /\u0000|[\ud800-\udbff](?![\udc00-\udfff])|(?<![\ud800-\udbff])[\udc00-\udfff]/;
 
 /** Free text a person types, at most `max` characters, refused (naming the field) when it cannot be stored as typed. */

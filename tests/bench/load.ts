@@ -48,7 +48,7 @@ async function main(): Promise<number> {
     cluster = prepared.cluster;
     const db = createDb(createPool(prepared.url));
     const today = DateTime.now().setZone('America/Denver').toISODate()!;
-    let t = Date.now();
+    const t = Date.now();
     const busy = await loadBusySalon(db, { from: today, months: 2 });
     console.log(`dwell load: busy salon loaded in ${((Date.now() - t) / 1000).toFixed(1)} s — ${JSON.stringify(busy.counts)}`);
 

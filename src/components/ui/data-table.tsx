@@ -16,7 +16,7 @@ type Props<T> = {
   label: string;
   rows: T[];
   // TanStack's column type is invariant in the value type; columns of mixed value types need `any` here.
-  columns: ColumnDef<T, any>[]; // eslint-disable-line @typescript-eslint/no-explicit-any
+  columns: ColumnDef<T, any>[]; // eslint-disable-line @typescript-eslint/no-explicit-any -- columns hold values of different types, as TanStack types them
   filterHint: string;
   initialSort?: SortingState;
   pageSize?: number;

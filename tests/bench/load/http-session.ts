@@ -32,6 +32,7 @@ export async function signIn(baseUrl: string, email: string, password: string): 
 }
 
 /** A JSON request as the signed-in browser sends it (cookie and CSRF token); the answer's status and body. */
+// eslint-disable-next-line @typescript-eslint/no-explicit-any -- bench scripts read whichever fields of an answer they need
 export async function sendJson(baseUrl: string, session: HttpSession, method: 'GET' | 'POST', path: string, body?: object): Promise<{ status: number; body: any }> {
   const res = await fetch(`${baseUrl}${path}`, {
     method,

@@ -34,7 +34,7 @@ export function ConsultationSummary({ view }: { view: ConsultationView }) {
           {view.photoIds.map((id, i) => (
             <li key={id}>
               <a href={photoPaths.one(id)} target="_blank" rel="noreferrer" className="block overflow-hidden rounded-lg ring-1 ring-ink/10">
-                <img src={photoPaths.one(id)} alt={`Consultation photo ${i + 1} of ${view.photoIds.length}`} loading="lazy" className="aspect-square w-full object-cover" />
+                <img src={photoPaths.one(id)} alt={`Hair at the consultation, ${i + 1} of ${view.photoIds.length}`} loading="lazy" className="aspect-square w-full object-cover" />
               </a>
             </li>
           ))}
