@@ -1,5 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { unstorablePath } from './unstorable-text';
+import { unstorablePaths } from './unstorable-text';
+
+const unstorablePath = (v: unknown) => unstorablePaths(v)[0] ?? null;
 
 // PostgreSQL: "text" cannot contain the NUL character (documentation, Character Types); a lone UTF-16 surrogate has
 // no UTF-8 encoding (Unicode Standard, §3.9: surrogate code points are not scalar values).
@@ -9,6 +11,7 @@ describe('unstorablePath', () => {
     expect(unstorablePath({ hours: [{ rrule: 'x' }, { rrule: 'a\ud800b' }] })).toBe('hours.1.rrule');
     expect(unstorablePath({ note: 'tail \udc00' })).toBe('note');
     expect(unstorablePath('\u0000')).toBe('body');
+    expect(unstorablePaths({ a: '\u0000', b: 'ok', c: ['\ud800'] })).toEqual(['a', 'c.0']);
   });
 
   it('lets whole emoji (surrogate pairs) and ordinary text through', () => {

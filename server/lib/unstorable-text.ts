@@ -6,22 +6,23 @@ import { AppError } from './app-error';
 const UNSTORABLE = /\u0000|[\ud800-\udbff](?![\udc00-\udfff])|(?<![\ud800-\udbff])[\udc00-\udfff]/;
 const MESSAGE = 'Contains a character that cannot be stored (a NUL byte or half of an emoji)';
 
-/** The path of the first string (or object key) that cannot be stored, or null. */
-export function unstorablePath(value: unknown, path: string[] = [], depth = 0): string | null {
-  if (typeof value === 'string') return UNSTORABLE.test(value) ? path.join('.') || 'body' : null;
-  if (depth > 32 || value === null || typeof value !== 'object') return null;
-  for (const [key, inner] of Object.entries(value)) {
-    if (UNSTORABLE.test(key)) return [...path, '(a key)'].join('.');
-    const found = unstorablePath(inner, [...path, key], depth + 1);
-    if (found) return found;
+/** The paths of the strings (or object keys) that cannot be stored (at most `limit` of them). */
+export function unstorablePaths(value: unknown, path: string[] = [], depth = 0, found: string[] = [], limit = 20): string[] {
+  if (found.length >= limit) return found;
+  if (typeof value === 'string') {
+    if (UNSTORABLE.test(value)) found.push(path.join('.') || 'body');
+    return found;
   }
-  return null;
+  if (depth > 32 || value === null || typeof value !== 'object') return found;
+  for (const [key, inner] of Object.entries(value)) {
+    if (UNSTORABLE.test(key)) found.push([...path, '(a key)'].join('.'));
+    else unstorablePaths(inner, [...path, key], depth + 1, found, limit);
+  }
+  return found;
 }
 
-/** Throws 400 naming the field when a request's params, query or body hold text PostgreSQL cannot store. */
+/** Throws 400 naming every such field when a request's params, query or body hold text PostgreSQL cannot store. */
 export function assertStorable(parts: { params?: unknown; query?: unknown; body?: unknown }): void {
-  for (const part of [parts.params, parts.query, parts.body]) {
-    const path = unstorablePath(part);
-    if (path) throw new AppError('VALIDATION_FAILED', 400, 'Some fields need attention.', { [path]: MESSAGE });
-  }
+  const paths = [parts.params, parts.query, parts.body].flatMap((part) => unstorablePaths(part));
+  if (paths.length) throw new AppError('VALIDATION_FAILED', 400, 'Some fields need attention.', Object.fromEntries(paths.map((p) => [p, MESSAGE])));
 }
