@@ -116,3 +116,21 @@ export async function listMessages(db: Db, salonId: string, status: MessageStatu
   if (status) q = q.where('status', '=', status);
   return q.orderBy('created_at', 'desc').orderBy('send_at', 'desc').limit(limit).execute();
 }
+
+/** The first message of a booking (confirmation or skin-test notice) on each channel it was planned for, newest plan first. */
+export async function firstMessageSends(db: Db, bookingId: string) {
+  return db
+    .selectFrom('messages')
+    .select(['channel', 'status', 'send_at as sendAt', 'sent_at as sentAt'])
+    .where('booking_id', '=', bookingId)
+    .where('kind', 'in', ['confirmation', 'skin_test_booked'])
+    .where('status', '!=', 'dropped')
+    .orderBy('created_at', 'desc')
+    .execute();
+}
+
+/** The salon's quiet hours for texts, `HH:MM`; equal ends mean none. */
+export async function salonQuietHours(db: Db, salonId: string): Promise<{ from: string; to: string }> {
+  const row = await db.selectFrom('salons').select(['quiet_from', 'quiet_to']).where('id', '=', salonId).executeTakeFirstOrThrow();
+  return { from: row.quiet_from.slice(0, 5), to: row.quiet_to.slice(0, 5) };
+}
