@@ -149,6 +149,14 @@ describe('a new client on a phone', () => {
     await desk.close();
     await page.goto(`${baseUrl()}/me`);
     await page.getByRole('heading', { level: 1, name: 'My bookings' }).waitFor();
+    // Moving uses the same picker: short lists by part of the day, and its action in reach on the phone.
+    await page.getByRole('button', { name: 'Move booking' }).first().click();
+    const moveDay = await openBusiestDay(page);
+    expect(await moveDay.getByRole('button', { name: / with / }).count()).toBeLessThanOrEqual(3 * 8);
+    await moveDay.getByRole('button', { name: / with / }).first().click();
+    const moveBox = (await page.getByRole('button', { name: 'Move to this time' }).boundingBox())!;
+    expect(moveBox.y + moveBox.height).toBeLessThanOrEqual(812);
+    await page.getByRole('button', { name: 'Keep the current time' }).click();
     await page.getByRole('button', { name: 'Cancel booking' }).first().click();
     await page.getByText(/deposit is (refunded|kept)/).first().waitFor(); // the rule is shown before confirming
     const [cancelled] = await Promise.all([
