@@ -28,6 +28,8 @@ export const PublicSalonSchema = z.object({
       priceIsFrom: z.boolean(),
       depositCents: z.number().int(),
       onlineBookable: z.boolean(),
+      /** The skill a stylist needs for it: only stylists who have it are offered. */
+      skill: z.string(),
       /** Oxidative colour: a skin test is needed first (and usually a consultation). */
       needsSkinTest: z.boolean(),
     }),
@@ -79,6 +81,19 @@ export const CautionsSchema = z.object({
 });
 export type Cautions = z.infer<typeof CautionsSchema>;
 export const ClaimedHoldSchema = HoldSchema.extend({ cautions: CautionsSchema });
+
+/** Where a signed-in client's unpaid hold stands in the flow: the step they go back to when they resume. */
+export const HoldStepSchema = z.enum(['details', 'cautions', 'deposit']);
+export type HoldStep = z.infer<typeof HoldStepSchema>;
+/** A client's own hold, not paid yet (at most one at a time): enough to show it and to go back into its flow. */
+export const OpenHoldSchema = HoldSchema.extend({ salonSlug: z.string(), serviceId: IdSchema, step: HoldStepSchema });
+export type OpenHold = z.infer<typeof OpenHoldSchema>;
+export const MyHoldsSchema = z.object({ holds: z.array(OpenHoldSchema) });
+/** Resuming hands out a new secret (the old tab's one stops working) and the cautions to read. */
+export const ResumedHoldSchema = OpenHoldSchema.extend({ holdSecret: z.string(), cautions: CautionsSchema });
+export const ResumeHoldSchema = z.object({}).strict();
+/** Releasing: the client's own (claimed) hold needs no secret; a hold not claimed yet needs the one it was made with. */
+export const ReleaseHoldSchema = z.object({ secret: z.string().min(20).max(100).optional() }).strict();
 export const AcceptCautionsSchema = z.object({ version: z.string().min(1).max(40), secret: z.string().min(20).max(100) }).strict();
 
 export const CardSchema = z
@@ -97,4 +112,16 @@ export const PayHoldSchema = z
 export const CancelTermsSchema = z.object({ depositOutcome: z.enum(['kept', 'refunded']).nullable(), message: z.string() });
 export const ClientCancelSchema = z.object({ reason: z.string().trim().max(500).default('Cancelled by the client') }).strict();
 export const ClientMoveSchema = z.object({ start: InstantInputSchema }).strict();
+/**
+ * How the first message of a booking (its confirmation) stands on each channel, from the send log: `waiting` is a
+ * text held back by the salon's quiet hours until `sendAt`.
+ */
+export const ConfirmationSendsSchema = z.object({
+  timeZone: z.string(),
+  quietHours: z.object({ from: z.string(), to: z.string() }).nullable(),
+  sends: z.array(
+    z.object({ channel: z.enum(['email', 'sms']), status: z.enum(['sent', 'sending', 'waiting', 'failed']), sendAt: InstantSchema, sentAt: InstantSchema.nullable() }),
+  ),
+});
+export type ConfirmationSends = z.infer<typeof ConfirmationSendsSchema>;
 export const MoveTimesQuerySchema = z.object({ from: LocalDateSchema.optional() }).strict();

@@ -1,6 +1,6 @@
 import { Settings } from 'luxon';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { dayAfterLast, dayLabel, freeTimeLabel, groupTimesByDay, type FreeTime } from './free-times';
+import { dayAfterLast, dayLabel, freeTimeLabel, groupTimesByDay, oneTimePerStart, type FreeTime } from './free-times';
 
 const zone = 'America/Denver';
 const free = (start: string, stylistName = 'Ana Moreno'): FreeTime => ({
@@ -63,5 +63,19 @@ describe('dayAfterLast', () => {
   it('is the salon-local day after the last time (not the UTC one)', () => {
     expect(dayAfterLast([free('2027-07-12T16:00:00Z'), free('2027-07-13T05:30:00Z')], zone)).toBe('2027-07-13');
     expect(dayAfterLast([], zone)).toBeUndefined();
+  });
+});
+
+describe('oneTimePerStart', () => {
+  it('keeps one choice per start (the stylist first by name), earliest first', () => {
+    const times = oneTimePerStart([free('2027-07-12T17:00:00Z'), free('2027-07-12T16:00:00Z', 'Bo Lind'), free('2027-07-12T16:00:00Z')]);
+    expect(times.map((t) => [t.start, t.stylistName])).toEqual([
+      ['2027-07-12T16:00:00Z', 'Ana Moreno'],
+      ['2027-07-12T17:00:00Z', 'Ana Moreno'],
+    ]);
+  });
+
+  it('treats one instant written with two offsets as one start', () => {
+    expect(oneTimePerStart([free('2027-07-12T16:00:00Z'), free('2027-07-12T10:00:00-06:00', 'Bo Lind')])).toHaveLength(1);
   });
 });

@@ -49,3 +49,19 @@ export function dayAfterLast(times: readonly FreeTime[], zone: string): string |
   const last = groupTimesByDay(times, zone).at(-1);
   return last ? shiftLocalDate(last.date, 1) : undefined;
 }
+
+/**
+ * One time per start, earliest first: for a client who asked for any stylist, the same start free with two stylists
+ * is one choice, not two buttons (the first stylist listed for it, by name, is the one held).
+ */
+export function oneTimePerStart(times: readonly FreeTime[]): FreeTime[] {
+  const seen = new Set<number>();
+  return [...times]
+    .sort((a, b) => Date.parse(a.start) - Date.parse(b.start) || a.stylistName.localeCompare(b.stylistName))
+    .filter((time) => {
+      const at = Date.parse(time.start);
+      if (seen.has(at)) return false;
+      seen.add(at);
+      return true;
+    });
+}

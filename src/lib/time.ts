@@ -15,6 +15,11 @@ export function formatTimeRange(startIso: string, endIso: string, zone: string):
   return `${formatTime(startIso, zone)} – ${formatTime(endIso, zone)}`;
 }
 
+/** "9:00 PM" for a clock time `HH:mm` (a salon setting, not an instant). */
+export function formatClock(hhmm: string): string {
+  return DateTime.fromISO(`2000-01-01T${hhmm}`).toLocaleString(DateTime.TIME_SIMPLE);
+}
+
 /** "Tue, Mar 2, 2027" for an instant, in the salon's zone. */
 export function formatDay(iso: string, zone: string): string {
   return at(iso, zone).toLocaleString(DateTime.DATE_MED_WITH_WEEKDAY);

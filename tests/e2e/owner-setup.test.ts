@@ -3,7 +3,7 @@ import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO_PASSWORD } from '../../server/demo/demo-catalogue';
 import { setupPaths } from '../../shared/api/setup-paths';
-import { baseUrl, connectBrowser, screenshot, signInThroughPage } from '../setup/browser';
+import { apiWrite, baseUrl, connectBrowser, screenshot, signInThroughPage } from '../setup/browser';
 
 let browser: Browser;
 beforeAll(async () => {
@@ -28,9 +28,7 @@ async function deskOptions(page: Page, earliest: string): Promise<Option[]> {
 
 /** A write through the API with this page's session (to put the shared demo salon back as it was). */
 async function apiPut(page: Page, path: string, body: unknown) {
-  const { token } = await (await page.request.get(`${baseUrl()}/api/csrf`)).json();
-  const res = await page.request.put(`${baseUrl()}${path}`, { data: body, headers: { 'X-CSRF-Token': token } });
-  expect(res.status()).toBe(200);
+  expect(await apiWrite(page, 'PUT', path, body)).toBe(200);
 }
 
 describe('owner set-up', () => {

@@ -31,7 +31,7 @@ let t: TestApp;
 let routes: DocumentedRoute[];
 const agents = {} as Record<Who, Awaited<ReturnType<typeof anonymousAgent>>>;
 /** Client A's records: the ids routes are called with, and what must never reach another caller. */
-const mine = {} as { clientId: string; bookingId: string; photoId: string; standbyId: string; skinTestId: string; slug: string; email: string };
+const mine = {} as { clientId: string; bookingId: string; holdId: string; photoId: string; standbyId: string; skinTestId: string; slug: string; email: string };
 
 beforeAll(async () => {
   t = await startTestApp();
@@ -57,6 +57,12 @@ beforeAll(async () => {
     salonId: salon.salonId, clientId: mine.clientId, stylistId: users.stylist.staffId!, chairId: salon.chairs[0], serviceId,
     steps: [['hands_on', '2027-03-02T17:00:00Z', '2027-03-02T17:30:00Z']],
   });
+  // Client A's unpaid online hold (claimed, kept for a day here so it stays open through the walk): the {id} of /api/me/holds/….
+  mine.holdId = await insertTestBooking(db, {
+    salonId: salon.salonId, clientId: mine.clientId, stylistId: users.stylist.staffId!, chairId: salon.chairs[0], serviceId,
+    steps: [['hands_on', '2027-03-03T17:00:00Z', '2027-03-03T17:30:00Z']],
+  });
+  await db.updateTable('bookings').set({ status: 'held', held_until: new Date(Date.now() + 86_400_000), hold_secret_hash: 'not-a-real-hash' }).where('id', '=', mine.holdId).execute();
   const standby = await db
     .insertInto('standby_entries')
     .values({ salon_id: salon.salonId, client_id: mine.clientId, service_ids: [serviceId], stylist_id: null, availability: JSON.stringify([{ weekdays: [2], from: '09:00', to: '12:00' }]), created_by: users.owner.id })
@@ -88,8 +94,8 @@ afterAll(() => t.close());
 
 /** Path ids: the record the segment before `{id}` names, always client A's (or salon A's slug). */
 function pathFor(route: DocumentedRoute): string {
-  const id = /\/(bookings|clients|photos|standby)\/\{id\}/.exec(route.path)?.[1];
-  const byKind: Record<string, string> = { bookings: mine.bookingId, clients: mine.clientId, photos: mine.photoId, standby: mine.standbyId };
+  const id = /\/(bookings|clients|holds|photos|standby)\/\{id\}/.exec(route.path)?.[1];
+  const byKind: Record<string, string> = { bookings: mine.bookingId, clients: mine.clientId, holds: mine.holdId, photos: mine.photoId, standby: mine.standbyId };
   return fillPath(route.path, { ...(id ? { id: byKind[id] } : {}), slug: mine.slug, testId: mine.skinTestId });
 }
 

@@ -8,6 +8,9 @@ import { futureWeekday, localIso } from '../setup/dates';
 import { FAKE_CARDS } from '../../server/fakes/payments-fake';
 import { LAPSE_HOLD_JOB } from '../../server/features/online-booking/holds.service';
 import { sendDueMessages } from '../../server/features/messages/send-message.job';
+import { emptyHairHistory } from '../../shared/schemas/hair-history.schemas';
+import { insertTestBooking } from '../factories/booking';
+import { DateTime } from 'luxon';
 
 let t: TestApp;
 let salon: SalonFixture;
@@ -42,8 +45,8 @@ async function hold(start: string) {
   return visitor.write('post', '/api/public/holds', { salonSlug: slug, serviceId: consultation, stylistId: ana.staffId, start }, { 'X-Forwarded-For': `10.1.0.${++visitors}` });
 }
 
-/** A new client who signs up, claims a hold and accepts its cautions. */
-async function claimedBy(start: string) {
+/** A new client who signs up, claims a hold and (unless told not to) accepts its cautions. */
+async function claimedBy(start: string, acceptCautions = true) {
   const held = await hold(start);
   expect(held.status).toBe(201);
   const client = await insertUser(t.testDb.db, salon.salonId, 'client');
@@ -51,7 +54,9 @@ async function claimedBy(start: string) {
   const c = await signedInAgent(t.app, client.email, client.password);
   const claim = await c.write('post', `/api/me/holds/${held.body.holdId}/claim`, { secret: held.body.holdSecret });
   expect(claim.status).toBe(200);
-  expect((await c.write('post', `/api/me/holds/${held.body.holdId}/cautions`, { version: claim.body.cautions.version, secret: held.body.holdSecret })).status).toBe(204);
+  if (acceptCautions) {
+    expect((await c.write('post', `/api/me/holds/${held.body.holdId}/cautions`, { version: claim.body.cautions.version, secret: held.body.holdSecret })).status).toBe(204);
+  }
   secrets[held.body.holdId] = held.body.holdSecret;
   return { c, client, id: held.body.holdId as string, secret: held.body.holdSecret as string, claim: claim.body };
 }
@@ -61,7 +66,8 @@ describe('public pages', () => {
     const visitor = await anonymousAgent(t.app);
     const page = await visitor.get(`/api/public/salons/${slug}`);
     expect(page.status).toBe(200);
-    expect(page.body.services.find((s: { id: string }) => s.id === consultation)).toMatchObject({ onlineBookable: true, depositCents: 2500 });
+    // The skill is what a stylist needs to be offered for it (the factory's consultation is colour work).
+    expect(page.body.services.find((s: { id: string }) => s.id === consultation)).toMatchObject({ onlineBookable: true, depositCents: 2500, skill: 'colour' });
     expect(page.body.openingHours[0]).toBe('Tuesday to Saturday, 09:00–21:00');
     const times = await visitor.get(`/api/public/salons/${slug}/availability?serviceId=${consultation}&from=${tuesday}`);
     expect(times.body.times[0]).toMatchObject({ start: localIso(tuesday, '09:00'), stylistId: ana.staffId });
@@ -218,6 +224,126 @@ describe('outside services failing or slow', () => {
     expect(t.smtp.messages.filter((m) => m.to === client.email && m.subject.match(/booked|confirm/i))).toHaveLength(1);
   });
 });
+
+describe('one unpaid hold per client', () => {
+  const wednesday = futureWeekday(3, 2);
+  const stepOf = async (c: Agent) => (await c.get('/api/me/holds')).body.holds.map((h: { holdId: string; step: string }) => [h.holdId, h.step]);
+
+  it('a client who holds a time is sent back to it: a second hold, made signed in or claimed after signing in, is refused naming the first', async () => {
+    const { c, id } = await claimedBy(localIso(wednesday, '09:00'));
+    const second = await c.write('post', '/api/public/holds', { salonSlug: slug, serviceId: consultation, stylistId: ana.staffId, start: localIso(wednesday, '10:00') });
+    expect(second.status).toBe(409);
+    expect(second.body.error.code).toBe('HOLD_OPEN');
+    expect(second.body.error.message).toMatch(/already have a time held: Consultation on Wednesday .* at 9:00 AM/);
+    // A hold made before signing in (another tab) cannot be claimed next to it either.
+    const elsewhere = await hold(localIso(wednesday, '10:30'));
+    const claim = await c.write('post', `/api/me/holds/${elsewhere.body.holdId}/claim`, { secret: elsewhere.body.holdSecret });
+    expect(claim.body.error.code).toBe('HOLD_OPEN');
+    // Its cautions were accepted, so it resumes at the deposit.
+    expect(await stepOf(c)).toEqual([[id, 'deposit']]);
+  });
+
+  it('two tabs claiming two holds at once: the database keeps one for the client', async () => {
+    const [one, two] = [await hold(localIso(wednesday, '11:00')), await hold(localIso(wednesday, '11:30'))];
+    const client = await insertUser(t.testDb.db, salon.salonId, 'client');
+    const c = await signedInAgent(t.app, client.email, client.password);
+    const claims = await Promise.all([one, two].map((h) => c.write('post', `/api/me/holds/${h.body.holdId}/claim`, { secret: h.body.holdSecret })));
+    expect(claims.map((r) => r.status).sort()).toEqual([200, 409]);
+    expect((await c.get('/api/me/holds')).body.holds).toHaveLength(1);
+  });
+
+  it('resume goes back to the step reached, with a new secret (the old one stops working), and pays', async () => {
+    const { c, id, secret } = await claimedBy(localIso(wednesday, '12:00'), false);
+    expect(await stepOf(c)).toEqual([[id, 'details']]);
+    // The details step's one action saves the hair history: after it, the cautions.
+    const answers = { ...emptyHairHistory(), previousReaction: { answer: 'no', details: '' } };
+    expect((await c.write('put', '/api/me/hair-history', answers)).status).toBe(200);
+    expect(await stepOf(c)).toEqual([[id, 'cautions']]);
+    const resumed = await c.write('post', `/api/me/holds/${id}/resume`, {});
+    expect(resumed.status).toBe(200);
+    expect(resumed.body).toMatchObject({ holdId: id, salonSlug: slug, serviceId: consultation, step: 'cautions', status: 'held' });
+    expect(resumed.body.holdSecret).not.toBe(secret);
+    expect((await c.write('post', `/api/me/holds/${id}/cautions`, { version: resumed.body.cautions.version, secret })).status).toBe(404);
+    expect((await c.write('post', `/api/me/holds/${id}/cautions`, { version: resumed.body.cautions.version, secret: resumed.body.holdSecret })).status).toBe(204);
+    expect(await stepOf(c)).toEqual([[id, 'deposit']]);
+    secrets[id] = resumed.body.holdSecret;
+    expect((await payWithSecret(c, id, 'pay-key-0201', FAKE_CARDS.succeeds)).body.status).toBe('booked');
+    expect((await c.get('/api/me/holds')).body.holds).toEqual([]);
+    expect((await c.write('post', `/api/me/holds/${id}/resume`, {})).status).toBe(409); // booked, nothing to resume
+  });
+
+  it('release frees the time at once; only the client (or, before a claim, the holder of the secret) may release it', async () => {
+    const start = localIso(wednesday, '13:00');
+    const { c, id } = await claimedBy(start, false);
+    const free = async () => (await (await anonymousAgent(t.app)).get(`/api/public/salons/${slug}/availability?serviceId=${consultation}&stylistId=${ana.staffId}&from=${wednesday}`)).body.times.map((x: { start: string }) => x.start);
+    expect(await free()).not.toContain(start);
+    const stranger = await insertUser(t.testDb.db, salon.salonId, 'client');
+    const s = await signedInAgent(t.app, stranger.email, stranger.password);
+    expect((await s.write('post', `/api/me/holds/${id}/release`, {})).status).toBe(404);
+    expect((await s.get('/api/me/holds')).body.holds).toEqual([]); // nobody else's hold is listed
+    expect((await (await anonymousAgent(t.app)).write('post', `/api/me/holds/${id}/release`, {})).status).toBe(401);
+    expect((await c.write('post', `/api/me/holds/${id}/release`, {})).status).toBe(204);
+    expect(await free()).toContain(start);
+    expect((await hold(start)).status).toBe(201);
+    expect((await c.write('post', `/api/me/holds/${id}/release`, {})).body.error.code).toBe('HOLD_LAPSED');
+    // A hold nobody has claimed yet: its secret is the proof.
+    const unclaimed = await hold(localIso(wednesday, '14:00'));
+    expect((await s.write('post', `/api/me/holds/${unclaimed.body.holdId}/release`, {})).status).toBe(404);
+    expect((await s.write('post', `/api/me/holds/${unclaimed.body.holdId}/release`, { secret: unclaimed.body.holdSecret })).status).toBe(204);
+  });
+});
+
+describe('the confirmation page reads the send log', () => {
+  it('says a text held back by quiet hours goes when they end, and that the e-mail went', async () => {
+    // Quiet hours from an hour ago to two hours from now, salon time (Denver): the confirmation text must wait for their end.
+    const now = DateTime.now().setZone('America/Denver');
+    const quiet = { quiet_from: now.minus({ hours: 1 }).toFormat('HH:mm'), quiet_to: now.plus({ hours: 2 }).toFormat('HH:mm') };
+    await t.testDb.db.updateTable('salons').set(quiet).where('id', '=', salon.salonId).execute();
+    try {
+      const { c, id } = await claimedBy(localIso(futureWeekday(4, 2), '09:00'));
+      expect((await payWithSecret(c, id, 'pay-key-0301', FAKE_CARDS.succeeds)).status).toBe(200);
+      const res = await c.get(`/api/me/bookings/${id}/confirmation`);
+      expect(res.status).toBe(200);
+      expect(res.body.quietHours).toEqual({ from: quiet.quiet_from, to: quiet.quiet_to });
+      const sms = res.body.sends.find((x: { channel: string }) => x.channel === 'sms');
+      // By hand: the wall clock next reads quiet_to two hours from now, to the minute.
+      expect(sms).toMatchObject({ status: 'waiting', sentAt: null });
+      expect(Date.parse(sms.sendAt)).toBe(now.plus({ hours: 2 }).startOf('minute').toMillis());
+      expect(res.body.sends.find((x: { channel: string }) => x.channel === 'email').status).toMatch(/^(sent|sending)$/);
+      const stranger = await insertUser(t.testDb.db, salon.salonId, 'client');
+      expect((await (await signedInAgent(t.app, stranger.email, stranger.password)).get(`/api/me/bookings/${id}/confirmation`)).status).toBe(404);
+    } finally {
+      await t.testDb.db.updateTable('salons').set({ quiet_from: '00:00', quiet_to: '00:00' }).where('id', '=', salon.salonId).execute();
+    }
+  });
+});
+
+describe("the owner's figures", () => {
+  it('leave unpaid holds out of the week: no booking counted, no chair time', async () => {
+    const owner = await insertUser(t.testDb.db, salon.salonId, 'owner');
+    const o = await signedInAgent(t.app, owner.email, owner.password);
+    const week = async () => (await o.get('/api/owner/overview')).body.week;
+    const before = await week();
+    // This week's Wednesday 10:00–10:30, salon time (past or not: figures count the whole week).
+    const day = DateTime.now().setZone('America/Denver').startOf('week').plus({ days: 2 }).toISODate()!;
+    const client = await insertUser(t.testDb.db, salon.salonId, 'client');
+    const id = await insertTestBooking(t.testDb.db, {
+      salonId: salon.salonId, clientId: client.clientId!, stylistId: ana.staffId!, chairId: salon.chairs[1], serviceId: consultation,
+      steps: [['hands_on', localIso(day, '10:00'), localIso(day, '10:30')]],
+    });
+    await t.testDb.db.updateTable('bookings').set({ status: 'held', held_until: new Date(Date.now() + 600_000) }).where('id', '=', id).execute();
+    const held = await week();
+    expect(held.bookings).toBe(before.bookings);
+    expect(held.chairOccupancy).toBe(before.chairOccupancy);
+    // Once booked it counts: 30 more chair minutes of 2 chairs × 720 open minutes × 5 days (Tue–Sat 09:00–21:00) = 7200.
+    await t.testDb.db.updateTable('bookings').set({ status: 'booked', held_until: null }).where('id', '=', id).execute();
+    const booked = await week();
+    expect(booked.bookings).toBe(before.bookings + 1);
+    expect(booked.chairOccupancy).toBeCloseTo((before.chairOccupancy ?? 0) + 30 / 7200, 10);
+  });
+});
+
+type Agent = Awaited<ReturnType<typeof signedInAgent>>;
 
 async function payWithSecret(c: Awaited<ReturnType<typeof signedInAgent>>, id: string, key: string, number: string) {
   return c.write('post', `/api/me/holds/${id}/pay`, { secret: secrets[id], card: card(number), idempotencyKey: key });

@@ -42,3 +42,10 @@ export async function screenshot(page: Page, name: string, forDocs = false, full
   await page.screenshot({ path: file, fullPage });
   if (forDocs) copyFileSync(file, join(docsScreenshots, `${name}.png`));
 }
+
+/** A write through the API with this page's session (e.g. to change the shared demo salon and put it back after). */
+export async function apiWrite(page: Page, method: 'PUT' | 'POST', path: string, body: unknown): Promise<number> {
+  const { token } = await (await page.request.get(`${baseUrl()}/api/csrf`)).json();
+  const res = await page.request.fetch(`${baseUrl()}${path}`, { method, data: body, headers: { 'X-CSRF-Token': token } });
+  return res.status();
+}

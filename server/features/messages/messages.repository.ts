@@ -126,3 +126,21 @@ export async function queuedFollowUps(db: Db, clientId: string): Promise<{ booki
 export async function dropFollowUps(db: Db, bookingId: string): Promise<void> {
   await db.updateTable('messages').set({ status: 'dropped' }).where('booking_id', '=', bookingId).where('kind', '=', 'follow_up').where('status', '=', 'queued').execute();
 }
+
+/** The first message of a booking (confirmation or skin-test notice) on each channel it was planned for, newest plan first. */
+export async function firstMessageSends(db: Db, bookingId: string) {
+  return db
+    .selectFrom('messages')
+    .select(['channel', 'status', 'send_at as sendAt', 'sent_at as sentAt'])
+    .where('booking_id', '=', bookingId)
+    .where('kind', 'in', ['confirmation', 'skin_test_booked'])
+    .where('status', '!=', 'dropped')
+    .orderBy('created_at', 'desc')
+    .execute();
+}
+
+/** The salon's quiet hours for texts, `HH:MM`; equal ends mean none. */
+export async function salonQuietHours(db: Db, salonId: string): Promise<{ from: string; to: string }> {
+  const row = await db.selectFrom('salons').select(['quiet_from', 'quiet_to']).where('id', '=', salonId).executeTakeFirstOrThrow();
+  return { from: row.quiet_from.slice(0, 5), to: row.quiet_to.slice(0, 5) };
+}

@@ -11,7 +11,7 @@ export async function findHold(db: Db, id: string) {
     .innerJoin('sittings as si', (j) => j.onRef('si.booking_id', '=', 'b.id').on('si.seq', '=', 1))
     .select([
       'b.id', 'b.status', 'b.stylist_id', 'b.held_until', 'b.hold_secret_hash', 'b.client_id', 'b.deposit_cents', 'b.salon_id', 'b.service_id', 'b.step_plan',
-      'sa.name as salonName', 'sa.time_zone as timeZone', 'sa.currency', 'sa.address', 'sv.name as serviceName', 'sv.needs_skin_test', 'sv.category',
+      'b.created_at', 'sa.slug as salonSlug', 'sa.name as salonName', 'sa.time_zone as timeZone', 'sa.currency', 'sa.address', 'sv.name as serviceName', 'sv.needs_skin_test', 'sv.category',
       'st.display_name as stylistName', sql<Date>`lower(si.during)`.as('start'), sql<Date>`upper(si.during)`.as('end'),
     ])
     .where('b.id', '=', id)
@@ -29,6 +29,29 @@ export async function lapseHolds(db: Db, now: Date, id?: string): Promise<number
   if (id) query = query.where('id', '=', id);
   const res = await query.executeTakeFirst();
   return Number(res.numDeletedRows);
+}
+
+/** The client's holds still within their time (one at most, kept so by a unique index), newest first. */
+export async function openHoldIdsOf(db: Db, clientId: string, now: Date): Promise<string[]> {
+  const rows = await db
+    .selectFrom('bookings')
+    .select('id')
+    .where('client_id', '=', clientId)
+    .where('status', '=', 'held')
+    .where('held_until', '>', now)
+    .orderBy('created_at', 'desc')
+    .execute();
+  return rows.map((r) => r.id);
+}
+
+export async function setHoldSecret(db: Db, id: string, secretHash: string): Promise<void> {
+  await db.updateTable('bookings').set({ hold_secret_hash: secretHash }).where('id', '=', id).where('status', '=', 'held').execute();
+}
+
+/** Removes a hold at once (as its lapse would): the time is free again. False when it was no longer held. */
+export async function releaseHoldRow(db: Db, id: string): Promise<boolean> {
+  const res = await db.deleteFrom('bookings').where('id', '=', id).where('status', '=', 'held').executeTakeFirst();
+  return Number(res.numDeletedRows) === 1;
 }
 
 export async function claimHoldRow(db: Db, id: string, clientId: string): Promise<void> {

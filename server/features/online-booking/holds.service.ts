@@ -3,7 +3,7 @@ import type { Kysely } from 'kysely';
 import type { z } from 'zod';
 import type { Database } from '../../db/schema';
 import type { SessionUser } from '../../../shared/schemas/auth.schemas';
-import type { CreateHoldSchema, Hold } from '../../../shared/schemas/online-booking.schemas';
+import type { CreateHoldSchema } from '../../../shared/schemas/online-booking.schemas';
 import type { JobQueue } from '../../jobs/job-queue';
 import { sha256 } from '../../lib/hash';
 import { AppError, notFound } from '../../lib/app-error';
@@ -15,24 +15,22 @@ import { assertHoldSkinTest } from './hold-skin-test';
 import { findSalonBySlug } from './public-salon.service';
 import { onlineService } from './availability.service';
 import { holdCautions } from './hold-cautions';
+import { holdLapsed, holdView } from './hold-view';
+import { assertNoOpenHold, holdOpenError } from './open-holds.service';
 import { claimHoldRow, findHold, hasAcceptedCautions, insertCautionAcceptance, markHold, type HoldRow } from './holds.repository';
 
 export const LAPSE_HOLD_JOB = 'lapse-hold';
 
-export function holdView(h: HoldRow, now = new Date()): Hold {
-  const lapsed = h.status === 'held' && h.held_until !== null && h.held_until <= now;
-  return {
-    holdId: h.id, status: h.status === 'held' ? (lapsed ? 'lapsed' : 'held') : 'booked', heldUntil: h.held_until?.toISOString() ?? null,
-    salonName: h.salonName, serviceName: h.serviceName, stylistName: h.stylistName, start: h.start.toISOString(), end: h.end.toISOString(),
-    timeZone: h.timeZone, depositCents: h.deposit_cents, currency: h.currency,
-  };
-}
-
-/** Keeps a time for the salon's hold minutes; the engine checks it is free, a job lets it lapse. */
-export async function createHold(db: Kysely<Database>, jobs: JobQueue, body: z.infer<typeof CreateHoldSchema>, now: Date) {
+/**
+ * Keeps a time for the salon's hold minutes; the engine checks it is free, a job lets it lapse. A signed-in client
+ * of the salon who already holds a time is sent back to it instead (one open hold per client).
+ */
+export async function createHold(db: Kysely<Database>, jobs: JobQueue, user: SessionUser | undefined, body: z.infer<typeof CreateHoldSchema>, now: Date) {
   const row = await findSalonBySlug(db, body.salonSlug);
   const salon = await findSalon(db, row.id);
   const service = await onlineService(db, salon.id, body.serviceId);
+  const clientId = user?.role === 'client' && user.salonId === salon.id ? await findClientIdForUser(db, user.id) : null;
+  if (clientId) await assertNoOpenHold(db, clientId, now);
   const secret = randomBytes(24).toString('base64url');
   const heldUntil = new Date(now.getTime() + row.hold_minutes * 60_000);
   const id = await db.transaction().execute(async (trx) => {
@@ -48,10 +46,10 @@ export async function createHold(db: Kysely<Database>, jobs: JobQueue, body: z.i
 /** The hold, if the secret matches; a lapsed (removed) hold is answered as lapsed. */
 export async function heldByHolder(db: Kysely<Database>, id: string, secret: string, now: Date): Promise<HoldRow> {
   const hold = await findHold(db, id);
-  if (!hold) throw new AppError('HOLD_LAPSED', 409, 'The time was released because the hold ran out. Please pick a time again.');
+  if (!hold) throw holdLapsed();
   if (hold.hold_secret_hash !== sha256(secret) && hold.status === 'held') throw notFound('That hold');
   if (hold.status === 'held' && hold.held_until && hold.held_until <= now) {
-    throw new AppError('HOLD_LAPSED', 409, 'The time was released because the hold ran out. Please pick a time again.');
+    throw holdLapsed();
   }
   return hold;
 }
@@ -63,9 +61,17 @@ export async function claimHold(db: Kysely<Database>, user: SessionUser, id: str
   if (!clientId || hold.salon_id !== user.salonId) throw notFound('That hold');
   if (hold.status !== 'held') throw new AppError('CONFLICT', 409, 'This time is already booked.');
   if (hold.client_id && hold.client_id !== clientId) throw notFound('That hold');
+  await assertNoOpenHold(db, clientId, now, id);
   const salon = await findSalon(db, hold.salon_id);
   await assertHoldSkinTest(db, salon, hold, clientId, now);
-  await claimHoldRow(db, id, clientId);
+  try {
+    await claimHoldRow(db, id, clientId);
+  } catch (e) {
+    // 23505 (PostgreSQL's unique_violation): another tab claimed a hold for this client a moment ago.
+    if ((e as { code?: string }).code !== '23505') throw e;
+    await assertNoOpenHold(db, clientId, now, id);
+    throw holdOpenError();
+  }
   return { ...holdView(hold, now), cautions: holdCautions(hold, salon) };
 }
 

@@ -1,6 +1,6 @@
 import { BookingViewSchema } from '../../../shared/schemas/booking-view.schemas';
 import { IdParamsSchema } from '../../../shared/schemas/common.schemas';
-import { AvailabilitySchema, CancelTermsSchema, ClientCancelSchema, ClientMoveSchema, MoveTimesQuerySchema } from '../../../shared/schemas/online-booking.schemas';
+import { AvailabilitySchema, CancelTermsSchema, ConfirmationSendsSchema, ClientCancelSchema, ClientMoveSchema, MoveTimesQuerySchema } from '../../../shared/schemas/online-booking.schemas';
 import type { AppDeps } from '../../app-deps';
 import { requireAccess } from '../../auth/require-access';
 import { apiRoute } from '../../lib/api-route';
@@ -12,6 +12,7 @@ import { freeTimes } from './availability.service';
 import { bookingIcs } from './booking-ics';
 import { assertClientMovable, cancelTerms, insideDepositWindow, ownBooking } from './my-bookings.service';
 import { AppError } from '../../lib/app-error';
+import { confirmationSends } from './confirmation';
 
 export function registerMyBookingRoutes({ table, db }: AppDeps): void {
   table.records.push({ method: 'get', path: '/api/me/bookings/:id/calendar.ics', access: ['client'] });
@@ -21,6 +22,11 @@ export function registerMyBookingRoutes({ table, db }: AppDeps): void {
     const ics = bookingIcs({ uid: `${hold.id}@dwell`, title: `${hold.serviceName} at ${salon.name}`, description: `${hold.serviceName} with ${hold.stylistName}`, location: salon.address, start: hold.start, end: hold.end });
     res.type('text/calendar').attachment('booking.ics').send(ics);
   });
+  apiRoute(
+    table,
+    { method: 'get', path: '/api/me/bookings/:id/confirmation', access: ['client'], summary: "How my booking's confirmation stands on each channel", params: IdParamsSchema, response: ConfirmationSendsSchema },
+    async ({ user, params }) => confirmationSends(db, user, params.id, new Date()),
+  );
   apiRoute(table, { method: 'get', path: '/api/me/bookings/:id/cancel-terms', access: ['client'], summary: 'What cancelling now means for the deposit', params: IdParamsSchema, response: CancelTermsSchema }, async ({ user, params }) =>
     cancelTerms(db, user, params.id, new Date()),
   );

@@ -1,19 +1,22 @@
 import { apiPaths } from '../../../shared/api/api-paths';
 import {
   AcceptCautionsSchema, AvailabilityQuerySchema, AvailabilitySchema, ClaimedHoldSchema, CreatedHoldSchema, CreateHoldSchema,
-  HoldParamsSchema, HoldSchema, HoldSecretSchema, PayHoldSchema, PublicSalonSchema, SlugParamsSchema,
+  HoldParamsSchema, HoldSchema, HoldSecretSchema, MyHoldsSchema, PayHoldSchema, PublicSalonSchema, ReleaseHoldSchema, ResumedHoldSchema,
+  ResumeHoldSchema, SlugParamsSchema,
 } from '../../../shared/schemas/online-booking.schemas';
 import { BookingViewSchema } from '../../../shared/schemas/booking-view.schemas';
 import type { AppDeps } from '../../app-deps';
 import { apiRoute } from '../../lib/api-route';
 import { rateLimited } from '../../lib/rate-limit';
-import { AppError, notFound } from '../../lib/app-error';
+import { notFound } from '../../lib/app-error';
 import { deskBookingView } from '../bookings/booking-changes.routes';
 import { publicSalon } from './public-salon.service';
 import { freeTimes, freeTimesDays, freeTimesKey, onlineService } from './availability.service';
 import { salonAtBookVersion } from '../book-version/book-version.repository';
 import { cachedBookRead } from '../book-version/cached-book-read';
-import { acceptCautions, claimHold, createHold, holdView } from './holds.service';
+import { acceptCautions, claimHold, createHold } from './holds.service';
+import { holdLapsed, holdView } from './hold-view';
+import { myOpenHolds, releaseHold, resumeHold } from './open-holds.service';
 import { findHold } from './holds.repository';
 import { payHold } from './pay-hold.service';
 
@@ -37,14 +40,28 @@ export function registerOnlineBookingRoutes({ table, db, jobs, payments, mailer,
     },
   );
   table.router.post(apiPaths.holds, limited(20));
-  apiRoute(table, { method: 'post', path: apiPaths.holds, access: 'public', summary: 'Hold a time for a few minutes', body: CreateHoldSchema, response: CreatedHoldSchema, status: 201 }, async ({ body }) =>
-    createHold(db, jobs, body, new Date()),
+  apiRoute(table, { method: 'post', path: apiPaths.holds, access: 'public', summary: 'Hold a time for a few minutes', body: CreateHoldSchema, response: CreatedHoldSchema, status: 201 }, async ({ user, body }) =>
+    // Public, but a signed-in client who already holds a time is sent back to it (one open hold per client).
+    createHold(db, jobs, user, body, new Date()),
   );
   apiRoute(table, { method: 'get', path: '/api/public/holds/:id', access: 'public', summary: 'Where a hold stands', params: HoldParamsSchema, response: HoldSchema }, async ({ params }) => {
     const hold = await findHold(db, params.id);
-    if (!hold) throw new AppError('HOLD_LAPSED', 409, 'The time was released because the hold ran out.');
+    if (!hold) throw holdLapsed();
     return holdView(hold);
   });
+  apiRoute(table, { method: 'get', path: apiPaths.myHolds, access: ['client'], summary: 'My unpaid held time, if any', response: MyHoldsSchema }, async ({ user }) => ({
+    holds: await myOpenHolds(db, user, new Date()),
+  }));
+  apiRoute(
+    table,
+    { method: 'post', path: '/api/me/holds/:id/resume', access: ['client'], summary: 'Go back to booking my held time', params: HoldParamsSchema, body: ResumeHoldSchema, response: ResumedHoldSchema },
+    async ({ user, params }) => resumeHold(db, user, params.id, new Date()),
+  );
+  apiRoute(
+    table,
+    { method: 'post', path: '/api/me/holds/:id/release', access: ['client'], summary: 'Release my held time at once', params: HoldParamsSchema, body: ReleaseHoldSchema, status: 204 },
+    async ({ user, params, body }) => releaseHold(db, user, params.id, body.secret, new Date()),
+  );
   apiRoute(
     table,
     { method: 'post', path: '/api/me/holds/:id/claim', access: ['client'], summary: 'Take a hold as the signed-in client', params: HoldParamsSchema, body: HoldSecretSchema, response: ClaimedHoldSchema },

@@ -54,6 +54,7 @@ export async function publicSalon(db: Db, slug: string): Promise<PublicSalon> {
       priceIsFrom: s.priceIsFrom,
       depositCents: s.depositCents,
       onlineBookable: s.onlineBookable,
+      skill: s.skill,
       // From the steps (and the service's own box, which only adds), as at every booking door.
       needsSkinTest: planNeedsSkinTest(s.stepPlan, families, s.needsSkinTest),
     })),

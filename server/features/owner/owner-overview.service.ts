@@ -26,9 +26,10 @@ export async function ownerOverview(db: Db, salon: Salon, now: Date): Promise<Ow
       .innerJoin('sittings as s', 's.booking_id', 'b.id')
       .where('b.salon_id', '=', salon.id)
       .where('s.live', '=', true)
+      .where('b.status', '!=', 'held') // a hold is a few minutes' keep while someone pays, not work
       .where(sql<boolean>`s.during && tstzrange(${weekStart.toJSDate()}, ${weekStart.plus({ days: 7 }).toJSDate()})`)
       .executeTakeFirstOrThrow(),
-    loadSalonCalendars(db, salon.id, { from, to }),
+    loadSalonCalendars(db, salon.id, { from, to }, undefined, { holds: false }),
     listStylists(db, salon.id),
   ]);
   // The same occupancy computation as `npm run plan -- occupancy` on this week's calendars.

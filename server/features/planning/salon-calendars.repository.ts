@@ -20,9 +20,10 @@ const hhmm = (t: string) => t.slice(0, 5);
 /**
  * Everything the engine needs to know about a salon over a horizon: opening hours, stylists with their
  * hours and time off, chairs, basins, and every live booking step. `except` leaves one booking out
- * (a booking being moved must not collide with itself).
+ * (a booking being moved must not collide with itself). `holds: false` leaves unpaid online holds out, for
+ * figures: a hold keeps a time for a few minutes while someone pays, it is not work (planning keeps them in).
  */
-export async function loadSalonCalendars(db: Db, salonId: string, horizon: Horizon, except?: string): Promise<SalonCalendars> {
+export async function loadSalonCalendars(db: Db, salonId: string, horizon: Horizon, except?: string, { holds = true }: { holds?: boolean } = {}): Promise<SalonCalendars> {
   const salon = await db.selectFrom('salons').select(['time_zone', 'granularity_minutes']).where('id', '=', salonId).executeTakeFirstOrThrow();
   const zone = salon.time_zone;
   const from = DateTime.fromISO(horizon.from, { zone }).toJSDate();
@@ -50,6 +51,7 @@ export async function loadSalonCalendars(db: Db, salonId: string, horizon: Horiz
       .where('b.salon_id', '=', salonId)
       .where('st.live', '=', true)
       .where('b.id', '!=', except ?? '00000000-0000-0000-0000-000000000000')
+      .$if(!holds, (q) => q.where('b.status', '!=', 'held'))
       .where(sql<boolean>`si.during && ${range}`)
       .orderBy('si.id')
       .orderBy('st.seq')

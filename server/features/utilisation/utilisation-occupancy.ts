@@ -36,7 +36,7 @@ export async function measurePeriod(db: Db, salonId: string, period: Period): Pr
   const chunks = chunksOf(period);
   const measured = await Promise.all(
     chunks.map(async (chunk) => {
-      const scenario = await loadSalonCalendars(db, salonId, { from: chunk.from, to: chunk.to });
+      const scenario = await loadSalonCalendars(db, salonId, { from: chunk.from, to: chunk.to }, undefined, { holds: false });
       return { breakdown: breakDownOccupancy(scenario, chunk.weekCuts) };
     }),
   );
@@ -71,5 +71,5 @@ export async function periodScenario(db: Db, salonId: string, period: Period): P
     const message = `One scenario covers at most ${MAX_HORIZON_DAYS} days; export a shorter period`;
     throw new AppError('VALIDATION_FAILED', 400, message, { to: message });
   }
-  return loadSalonCalendars(db, salonId, { from: period.from, to: period.to });
+  return loadSalonCalendars(db, salonId, { from: period.from, to: period.to }, undefined, { holds: false });
 }

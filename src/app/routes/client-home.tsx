@@ -15,12 +15,15 @@ import { preferenceQueries } from '../../features/clients/api/preference-queries
 import { MyPreferencesForm } from '../../features/clients/components/my-preferences-form';
 import { DateOfBirthForm } from '../../features/clients/components/date-of-birth-form';
 import { skinTestWords } from '../../../shared/rules/skin-test-words';
+import { onlineBookingQueries } from '../../features/online-booking/api/online-booking-queries';
+import { WaitingForPayment } from '../../features/online-booking/components/waiting-for-payment';
 
 export async function loader() {
   await Promise.all([
     queryClient.ensureQueryData(bookingQueries.mine()),
     queryClient.ensureQueryData(salonQueries.current()),
     queryClient.ensureQueryData(preferenceQueries.mine()),
+    queryClient.ensureQueryData(onlineBookingQueries.myHolds()),
   ]);
   return null;
 }
@@ -33,9 +36,11 @@ export function Component() {
     <div className="grid gap-8 lg:grid-cols-[1fr_20rem]">
       <div>
         <PageHeader title="My bookings" subtitle={<TimeZoneNote timeZone={mine.timeZone} />} />
+        <WaitingForPayment />
         <MyQuotes currency={salon.currency} />
         <BookingList
-          bookings={mine.bookings}
+          // An unpaid hold is not a booking yet: it is listed above, waiting for payment.
+          bookings={mine.bookings.filter((b) => b.status !== 'held')}
           timeZone={mine.timeZone}
           currency={salon.currency}
           actions={(booking) => <MyBookingActions booking={booking} />}

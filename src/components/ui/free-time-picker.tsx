@@ -1,8 +1,9 @@
 import { useState } from 'react';
-import { dayLabel, freeTimeKey, freeTimeLabel, groupTimesByDay, type FreeTime } from '../../lib/free-times';
-import { formatTime } from '../../lib/time';
+import { groupTimesByPart } from '../../lib/day-parts';
+import { dayLabel, groupTimesByDay, oneTimePerStart, type FreeTime } from '../../lib/free-times';
 import { Button } from './button';
 import { DayChips } from './day-chips';
+import { DayPartTimes } from './day-part-times';
 
 const DAYS_AT_A_TIME = 7;
 
@@ -13,16 +14,19 @@ type Props = {
   onSelect: (time: FreeTime) => void;
   /** Asks for the weeks after the last day listed; shown once every listed day is visible. */
   onLater?: () => void;
-  /** Whether to name the stylist on each time (when the client asked for any stylist). */
+  /**
+   * The client asked for any stylist: each start is one choice (whoever is free then, named on the button), not one
+   * button per stylist.
+   */
   showStylist: boolean;
 };
 
 /**
- * Free times as day chips (a week at a time, "Show later days" for more) and the
- * chosen day's times as toggle buttons. Days are the salon's, whatever the device's zone.
+ * Free times as day chips (a week at a time, "Show later days" for more) and the chosen day's times by part of the
+ * day, each a short spread list with "more". Days and parts are the salon's, whatever the device's zone.
  */
 export function FreeTimePicker({ times, timeZone, selectedKey, onSelect, onLater, showStylist }: Props) {
-  const days = groupTimesByDay(times, timeZone);
+  const days = groupTimesByDay(showStylist ? oneTimePerStart(times) : times, timeZone);
   const [shown, setShown] = useState(DAYS_AT_A_TIME);
   const [chosenDay, setChosenDay] = useState<string | null>(null);
   const day = days.find((d) => d.date === chosenDay) ?? days[0];
@@ -37,27 +41,19 @@ export function FreeTimePicker({ times, timeZone, selectedKey, onSelect, onLater
           {allShown ? 'Look further ahead' : 'Show later days'}
         </Button>
       )}
-      <section aria-label={`Free times on ${dayLabel(day.date)}`}>
-        <h3 className="mb-2 text-lg font-bold">{dayLabel(day.date)}</h3>
-        <ul className="grid grid-cols-2 gap-2 sm:grid-cols-4">
-          {day.times.map((time) => {
-            const key = freeTimeKey(time);
-            return (
-              <li key={key}>
-                <button
-                  type="button"
-                  aria-pressed={key === selectedKey}
-                  aria-label={freeTimeLabel(time, timeZone)}
-                  onClick={() => onSelect(time)}
-                  className="flex min-h-11 w-full flex-col items-center rounded-lg border border-ink/30 bg-white px-2 py-1 hover:border-ink/60 aria-pressed:border-2 aria-pressed:border-oxide aria-pressed:bg-linen aria-pressed:font-bold"
-                >
-                  <span className="tabular">{formatTime(time.start, timeZone)}</span>
-                  {showStylist && <span className="text-xs">{time.stylistName}</span>}
-                </button>
-              </li>
-            );
-          })}
-        </ul>
+      <section aria-label={`Free times on ${dayLabel(day.date)}`} className="flex flex-col gap-4">
+        <h3 className="text-lg font-bold">{dayLabel(day.date)}</h3>
+        {groupTimesByPart(day.times, timeZone).map(({ part, times: partTimes }) => (
+          <DayPartTimes
+            key={`${day.date}|${part}`}
+            part={part}
+            times={partTimes}
+            timeZone={timeZone}
+            selectedKey={selectedKey}
+            onSelect={onSelect}
+            showStylist={showStylist}
+          />
+        ))}
       </section>
     </div>
   );

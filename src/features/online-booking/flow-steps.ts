@@ -9,3 +9,8 @@ export const flowStepNames: Record<FlowStep, string> = {
   cautions: 'Before you pay',
   deposit: 'Deposit',
 };
+
+/** The steps this person goes through: someone already signed in has no "Sign in" step. */
+export function flowStepsFor(signedIn: boolean): FlowStep[] {
+  return FLOW_STEPS.filter((step) => !signedIn || step !== 'account');
+}

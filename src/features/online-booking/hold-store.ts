@@ -1,6 +1,6 @@
 import { useCallback, useState } from 'react';
 import { z } from 'zod';
-import { CautionsSchema } from '../../../shared/schemas/online-booking.schemas';
+import { CautionsSchema, type ResumedHoldSchema } from '../../../shared/schemas/online-booking.schemas';
 
 /*
  * The hold in progress, kept in sessionStorage: it survives the trip to sign in or
@@ -30,13 +30,31 @@ export function readStoredHold(): StoredHold | null {
   }
 }
 
-function writeStoredHold(hold: StoredHold | null): void {
+export function writeStoredHold(hold: StoredHold | null): void {
   try {
     if (hold) sessionStorage.setItem(STORAGE_KEY, JSON.stringify(hold));
     else sessionStorage.removeItem(STORAGE_KEY);
   } catch {
     // Private modes may refuse storage: the flow still works within this page.
   }
+}
+
+/** A resumed hold as the flow keeps it: the steps before the one it goes back to count as done. */
+export function storedFromResumed(resumed: z.output<typeof ResumedHoldSchema>): StoredHold {
+  return {
+    holdId: resumed.holdId,
+    secret: resumed.holdSecret,
+    slug: resumed.salonSlug,
+    serviceId: resumed.serviceId,
+    cautions: resumed.cautions,
+    detailsDone: resumed.step !== 'details',
+    cautionsAccepted: resumed.step === 'deposit',
+  };
+}
+
+/** Forgets the stored hold when it is this one (released or paid elsewhere). */
+export function forgetStoredHold(holdId: string): void {
+  if (readStoredHold()?.holdId === holdId) writeStoredHold(null);
 }
 
 /** The stored hold for this salon and service (another one is ignored), and a setter that writes through. */

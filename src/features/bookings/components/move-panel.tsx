@@ -1,11 +1,12 @@
 import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
+import { ActionBar } from '../../../components/ui/action-bar';
 import { Button } from '../../../components/ui/button';
 import { FormAlert } from '../../../components/ui/form-alert';
 import { FreeTimePicker } from '../../../components/ui/free-time-picker';
 import { LoadingState } from '../../../components/ui/loading-state';
 import { TimeZoneNote } from '../../../components/ui/time-zone-note';
-import { dayAfterLast, freeTimeKey, type FreeTime } from '../../../lib/free-times';
+import { dayAfterLast, freeTimeKey, freeTimeLabel, type FreeTime } from '../../../lib/free-times';
 import { myBookingQueries, useMoveMyBooking } from '../api/my-booking-queries';
 
 type Props = { bookingId: string; onClose: () => void; onMoved: () => void };
@@ -33,14 +34,25 @@ export function MovePanel({ bookingId, onClose, onMoved }: Props) {
         showStylist={false}
       />
       {move.isError && <FormAlert>{move.error.message}</FormAlert>}
-      <div className="flex flex-col gap-2 sm:flex-row">
-        <Button busy={move.isPending} disabled={!picked} onClick={() => picked && move.mutateAsync(picked.start).then(onMoved, () => undefined)}>
-          {move.isPending ? 'Moving…' : 'Move to this time'}
-        </Button>
-        <Button variant="secondary" onClick={onClose}>
-          Keep the current time
-        </Button>
-      </div>
+      <ActionBar>
+        <p aria-live="polite" className="text-sm">
+          {picked ? (
+            <>
+              Move to: <strong>{freeTimeLabel(picked, timeZone)}</strong>
+            </>
+          ) : (
+            'Pick a new time above.'
+          )}
+        </p>
+        <div className="flex flex-wrap gap-2">
+          <Button busy={move.isPending} disabled={!picked} onClick={() => picked && move.mutateAsync(picked.start).then(onMoved, () => undefined)}>
+            {move.isPending ? 'Moving…' : 'Move to this time'}
+          </Button>
+          <Button variant="secondary" onClick={onClose}>
+            Keep the current time
+          </Button>
+        </div>
+      </ActionBar>
     </div>
   );
 }

@@ -4,12 +4,14 @@ import { apiPaths } from '../../../../shared/api/api-paths';
 import {
   ClaimedHoldSchema,
   CreatedHoldSchema,
+  ResumedHoldSchema,
   type CreateHoldSchema,
   type PayHoldSchema,
 } from '../../../../shared/schemas/online-booking.schemas';
 import { BookingViewSchema } from '../../../../shared/schemas/booking-view.schemas';
 import { apiWrite } from '../../../lib/api-client';
 import { isApiError } from '../../../lib/api-error';
+import { bookingQueries } from '../../bookings/api/booking-queries';
 import { onlineBookingQueries } from './online-booking-queries';
 
 /** Hold a free time. Taken meanwhile (409): the free times are stale, so they are fetched again. */
@@ -20,7 +22,30 @@ export function useCreateHold() {
     onSuccess: (hold) => queryClient.setQueryData(onlineBookingQueries.hold(hold.holdId).queryKey, hold),
     onError: (error) => {
       if (isApiError(error, 'CONFLICT')) return queryClient.invalidateQueries({ queryKey: onlineBookingQueries.availabilities() });
+      // Another tab held a time meanwhile: the step shows that hold instead.
+      if (isApiError(error, 'HOLD_OPEN')) return queryClient.invalidateQueries({ queryKey: onlineBookingQueries.myHolds().queryKey });
     },
+  });
+}
+
+/** Back into the flow with the client's own hold: a new secret, its cautions and the step to return to. */
+export function useResumeHold() {
+  return useMutation({
+    mutationFn: (holdId: string) => apiWrite('POST', apiPaths.resumeHold(holdId), {}, ResumedHoldSchema),
+  });
+}
+
+/** Frees a held time at once; every list that showed it, and the free times, are read again. */
+export function useReleaseHold() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: ({ holdId, secret }: { holdId: string; secret?: string }) => apiWrite('POST', apiPaths.releaseHold(holdId), { secret }),
+    onSettled: () =>
+      Promise.all([
+        queryClient.invalidateQueries({ queryKey: onlineBookingQueries.myHolds().queryKey }),
+        queryClient.invalidateQueries({ queryKey: onlineBookingQueries.availabilities() }),
+        queryClient.invalidateQueries({ queryKey: bookingQueries.mine().queryKey }),
+      ]),
   });
 }
 

@@ -1,6 +1,6 @@
 import { queryOptions } from '@tanstack/react-query';
 import { apiPaths } from '../../../../shared/api/api-paths';
-import { AvailabilitySchema, HoldSchema } from '../../../../shared/schemas/online-booking.schemas';
+import { AvailabilitySchema, ConfirmationSendsSchema, HoldSchema, MyHoldsSchema } from '../../../../shared/schemas/online-booking.schemas';
 import { apiGet, withQuery } from '../../../lib/api-client';
 
 export type AvailabilityAsk = { serviceId: string; stylistId?: string; from?: string };
@@ -14,6 +14,20 @@ export const onlineBookingQueries = {
       queryFn: () => apiGet(withQuery(apiPaths.publicAvailability(slug), ask), AvailabilitySchema),
       // Other clients book all the time: a short staleness keeps the list honest without refetching on every focus.
       staleTime: 15_000,
+    }),
+  /** The signed-in client's unpaid hold (at most one): offered to resume or release instead of holding another. */
+  myHolds: () =>
+    queryOptions({
+      queryKey: [...onlineBookingQueries.all(), 'my-holds'] as const,
+      queryFn: () => apiGet(apiPaths.myHolds, MyHoldsSchema),
+      staleTime: 0,
+    }),
+  /** How the booking's confirmation stands per channel (a text may wait for quiet hours). */
+  confirmation: (bookingId: string) =>
+    queryOptions({
+      queryKey: [...onlineBookingQueries.all(), 'confirmation', bookingId] as const,
+      queryFn: () => apiGet(apiPaths.myConfirmation(bookingId), ConfirmationSendsSchema),
+      staleTime: 0,
     }),
   hold: (holdId: string) =>
     queryOptions({

@@ -1,3 +1,4 @@
+import { useQuery } from '@tanstack/react-query';
 import { Link } from 'react-router-dom';
 import { skinTestWords } from '../../../../shared/rules/skin-test-words';
 import { apiPaths } from '../../../../shared/api/api-paths';
@@ -7,21 +8,32 @@ import { buttonClasses } from '../../../components/ui/button';
 import { paths } from '../../../config/paths';
 import { formatMoney } from '../../../lib/booking-labels';
 import { formatDay, formatTimeRange, zoneLabel } from '../../../lib/time';
+import { onlineBookingQueries } from '../api/online-booking-queries';
+import { confirmationWords } from '../confirmation-words';
 
 type Props = { booking: BookingView; salon: Pick<Salon, 'name' | 'address' | 'phone' | 'timeZone' | 'currency' | 'skinTestLeadHours'> };
 
 /** The end of the online flow: what is booked, when (salon time), where, what to bring, and the calendar file. */
 export function BookedPage({ booking, salon }: Props) {
   const first = booking.sittings[0];
+  // Read from the send log, and again while a message is still on its way.
+  const confirmation = useQuery({
+    ...onlineBookingQueries.confirmation(booking.id),
+    refetchInterval: (query) => (query.state.data?.sends.some((s) => s.status === 'sending') ? 2_000 : false),
+  });
   return (
     <div className="mx-auto flex w-full max-w-2xl flex-col gap-5">
       <div>
         <p className="text-sm font-bold text-ink/80">{salon.name}</p>
         <h1 className="text-3xl font-extrabold tracking-tight">You&apos;re booked</h1>
       </div>
-      <p role="status" className="rounded-lg border-l-4 border-sage bg-white px-4 py-3 font-bold">
-        We sent a confirmation by e-mail and SMS.
-      </p>
+      {confirmation.data && (
+        <div role="status" className="flex flex-col gap-1 rounded-lg border-l-4 border-sage bg-white px-4 py-3 font-bold">
+          {confirmationWords(confirmation.data).map((line) => (
+            <p key={line}>{line}</p>
+          ))}
+        </div>
+      )}
       <dl className="grid grid-cols-[max-content_1fr] gap-x-4 gap-y-2 rounded-2xl bg-white p-5 ring-1 ring-ink/10">
         <dt className="font-bold">Service</dt>
         <dd>{booking.service.name}</dd>

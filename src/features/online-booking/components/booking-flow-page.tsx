@@ -9,8 +9,8 @@ import { LoadingState } from '../../../components/ui/loading-state';
 import { Notice } from '../../../components/ui/notice';
 import { paths } from '../../../config/paths';
 import { onlineBookingQueries } from '../api/online-booking-queries';
-import type { FlowStep } from '../flow-steps';
-import { useStoredHold } from '../hold-store';
+import { flowStepsFor, type FlowStep } from '../flow-steps';
+import { useStoredHold, writeStoredHold, type StoredHold } from '../hold-store';
 import { AccountStep } from './account-step';
 import { CautionsStep } from './cautions-step';
 import { ChooseTimeStep } from './choose-time-step';
@@ -20,6 +20,7 @@ import { DetailsStep } from './details-step';
 import { FlowProgress } from './flow-progress';
 import { HoldLapsed } from './hold-lapsed';
 import { HoldSummary } from './hold-summary';
+import { ReleaseHeldTime } from './release-held-time';
 
 type Props = { salon: PublicSalon; serviceId: string; user: SessionUser | null; returnTo: string };
 
@@ -55,6 +56,13 @@ export function BookingFlowPage({ salon, serviceId, user, returnTo }: Props) {
     save(null);
     navigate(paths.bookingConfirmed(booking.id));
   };
+  // Back into the flow of a held time: here when it is this service, otherwise on its own page (which reads it back).
+  const onResumed = (resumed: StoredHold) => {
+    setExpired(false);
+    if (resumed.slug === salon.slug && resumed.serviceId === serviceId) return save(resumed);
+    writeStoredHold(resumed);
+    navigate(paths.salonBook(resumed.slug, resumed.serviceId));
+  };
 
   const step: FlowStep = !stored
     ? 'time'
@@ -74,13 +82,26 @@ export function BookingFlowPage({ salon, serviceId, user, returnTo }: Props) {
     if (!stored) {
       const onHeld = (h: { holdId: string; holdSecret: string }) =>
         save({ holdId: h.holdId, secret: h.holdSecret, slug: salon.slug, serviceId, cautions: null, detailsDone: false, cautionsAccepted: false });
-      return <ChooseTimeStep salon={salon} serviceId={serviceId} focusOnMount={focusOnMount} onHeld={onHeld} />;
+      return (
+        <ChooseTimeStep
+          salon={salon}
+          serviceId={serviceId}
+          signedInClient={user?.role === 'client'}
+          focusOnMount={focusOnMount}
+          onHeld={onHeld}
+          onResumed={onResumed}
+        />
+      );
     }
     if (hold.isPending) return <LoadingState label="Checking your held time…" />;
-    if (hold.isError) return hold.error.status === 404 ? <HoldLapsed onPickAgain={pickAgain} /> : <FormAlert>{hold.error.message}</FormAlert>;
+    if (hold.isError) {
+      const gone = hold.error.status === 404 || hold.error.code === 'HOLD_LAPSED';
+      return gone ? <HoldLapsed onPickAgain={pickAgain} /> : <FormAlert>{hold.error.message}</FormAlert>;
+    }
     if (hold.data.status === 'booked') return user ? <Navigate to={paths.bookingConfirmed(hold.data.holdId)} replace /> : null;
     if (hold.data.status === 'lapsed' || expired) return <HoldLapsed onPickAgain={pickAgain} />;
-    const summary = <HoldSummary hold={hold.data} onExpire={onExpire} />;
+    const release = user?.role === 'client' && <ReleaseHeldTime holdId={stored.holdId} secret={stored.secret} onReleased={pickAgain} />;
+    const summary = <HoldSummary hold={hold.data} onExpire={onExpire} action={release} />;
     if (!user) {
       return (
         <>
@@ -100,7 +121,7 @@ export function BookingFlowPage({ salon, serviceId, user, returnTo }: Props) {
       return (
         <>
           {summary}
-          <ClaimStep holdId={stored.holdId} secret={stored.secret} onClaimed={onClaimed} />
+          <ClaimStep holdId={stored.holdId} secret={stored.secret} onClaimed={onClaimed} onResumedOther={onResumed} />
         </>
       );
     }
@@ -117,7 +138,7 @@ export function BookingFlowPage({ salon, serviceId, user, returnTo }: Props) {
           onAccepted={() => save({ ...stored, cautionsAccepted: true })}
         />
       ) : (
-        <DepositStep hold={hold.data} secret={secret} depositPolicy={salon.policies.deposit} focusOnMount={focusOnMount} onBooked={onBooked} />
+        <DepositStep hold={hold.data} secret={secret} cancellationPolicy={salon.policies.cancellation} focusOnMount={focusOnMount} onBooked={onBooked} />
       );
     return (
       <>
@@ -134,7 +155,7 @@ export function BookingFlowPage({ salon, serviceId, user, returnTo }: Props) {
         <p className="text-sm font-bold text-ink/80">{salon.name}</p>
         <h1 className="text-3xl font-extrabold tracking-tight">Book {service?.name ?? 'a service'}</h1>
       </div>
-      <FlowProgress current={step} />
+      <FlowProgress steps={flowStepsFor(user !== null)} current={step} />
       {body()}
     </div>
   );

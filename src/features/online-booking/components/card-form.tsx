@@ -26,7 +26,6 @@ export function CardForm({ amount, paying, problem, onPay }: Props) {
         This demo uses a local test payment service, not a real bank: card <span className="tabular">4242 4242 4242 4242</span>{' '}
         succeeds and <span className="tabular">4000 0000 0000 0002</span> is declined. Any future date and any 3 digits work.
       </p>
-      <p className="font-bold tabular">Deposit to pay now: {amount}</p>
       {problem && <FormAlert>{problem}</FormAlert>}
       <TextField label="Card number" inputMode="numeric" autoComplete="cc-number" error={errors.number?.message} {...register('number')} />
       <div className="grid grid-cols-3 gap-3">
@@ -35,7 +34,7 @@ export function CardForm({ amount, paying, problem, onPay }: Props) {
         <TextField label="CVC" inputMode="numeric" autoComplete="cc-csc" maxLength={4} error={errors.cvc?.message} {...register('cvc')} />
       </div>
       <Button type="submit" busy={paying} className="w-full sm:w-auto sm:self-start">
-        {paying ? 'Paying…' : 'Pay deposit'}
+        {paying ? 'Paying…' : `Pay deposit of ${amount}`}
       </Button>
     </form>
   );

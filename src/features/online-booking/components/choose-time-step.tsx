@@ -1,29 +1,43 @@
 import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import type { PublicSalon } from '../../../../shared/schemas/online-booking.schemas';
+import { ActionBar } from '../../../components/ui/action-bar';
 import { Button } from '../../../components/ui/button';
 import { FormAlert } from '../../../components/ui/form-alert';
 import { FreeTimePicker } from '../../../components/ui/free-time-picker';
 import { LoadingState } from '../../../components/ui/loading-state';
 import { SelectField } from '../../../components/ui/select-field';
 import { TimeZoneNote } from '../../../components/ui/time-zone-note';
-import { dayAfterLast, freeTimeKey, type FreeTime } from '../../../lib/free-times';
+import { dayAfterLast, freeTimeKey, freeTimeLabel, type FreeTime } from '../../../lib/free-times';
 import { useCreateHold } from '../api/hold-mutations';
 import { onlineBookingQueries } from '../api/online-booking-queries';
+import type { StoredHold } from '../hold-store';
+import { OpenHoldCard } from './open-hold-card';
 import { StepHeading } from './step-heading';
 
 type Held = { holdId: string; holdSecret: string };
-type Props = { salon: PublicSalon; serviceId: string; focusOnMount: boolean; onHeld: (hold: Held) => void };
+type Props = {
+  salon: PublicSalon;
+  serviceId: string;
+  /** A signed-in client: their own open hold, if any, is offered instead of holding another time. */
+  signedInClient: boolean;
+  focusOnMount: boolean;
+  onHeld: (hold: Held) => void;
+  onResumed: (stored: StoredHold) => void;
+};
 
-/** Step 1: a stylist or any, the free times by day, and one button to hold the chosen time. */
-export function ChooseTimeStep({ salon, serviceId, focusOnMount, onHeld }: Props) {
+/** Step 1: a stylist with the service's skill or any, the free times by day, and one button to hold the chosen time. */
+export function ChooseTimeStep({ salon, serviceId, signedInClient, focusOnMount, onHeld, onResumed }: Props) {
   const [stylistId, setStylistId] = useState('');
   const [from, setFrom] = useState<string | undefined>(undefined);
   const [picked, setPicked] = useState<FreeTime | null>(null);
   const [nothingPicked, setNothingPicked] = useState(false);
   const ask = { serviceId, stylistId: stylistId || undefined, from };
+  const myHolds = useQuery({ ...onlineBookingQueries.myHolds(), enabled: signedInClient });
   const free = useQuery(onlineBookingQueries.availability(salon.slug, ask));
   const createHold = useCreateHold();
+  const skill = salon.services.find((s) => s.id === serviceId)?.skill;
+  const stylists = salon.stylists.filter((s) => skill !== undefined && s.skills.includes(skill));
 
   const hold = () => {
     if (!picked) return setNothingPicked(true);
@@ -33,6 +47,20 @@ export function ChooseTimeStep({ salon, serviceId, focusOnMount, onHeld }: Props
     );
   };
   const laterFrom = free.data && dayAfterLast(free.data.times, free.data.timeZone);
+
+  const open = myHolds.data?.holds[0];
+  if (open) {
+    return (
+      <section className="flex flex-col gap-4">
+        <StepHeading focusOnMount={focusOnMount}>You already have a time held</StepHeading>
+        <p>
+          One time can be held at a time. Go back to booking the time you hold, or release it to pick another.
+        </p>
+        <OpenHoldCard hold={open} onResumed={onResumed} />
+      </section>
+    );
+  }
+  if (myHolds.isLoading) return <LoadingState label="Checking your held times…" />;
 
   return (
     <section className="flex flex-col gap-4">
@@ -44,7 +72,7 @@ export function ChooseTimeStep({ salon, serviceId, focusOnMount, onHeld }: Props
           setStylistId(event.target.value);
           setPicked(null);
         }}
-        options={[{ value: '', label: 'Any stylist' }, ...salon.stylists.map((s) => ({ value: s.id, label: s.name }))]}
+        options={[{ value: '', label: 'Any stylist' }, ...stylists.map((s) => ({ value: s.id, label: s.name }))]}
       />
       <TimeZoneNote timeZone={salon.timeZone} />
       {createHold.isError && (
@@ -73,10 +101,21 @@ export function ChooseTimeStep({ salon, serviceId, focusOnMount, onHeld }: Props
           Back to the earliest times
         </Button>
       )}
-      {nothingPicked && <FormAlert>Pick a time first.</FormAlert>}
-      <Button onClick={hold} busy={createHold.isPending} className="w-full sm:w-auto sm:self-start">
-        {createHold.isPending ? 'Holding…' : 'Hold this time'}
-      </Button>
+      <ActionBar>
+        <p aria-live="polite" className="text-sm">
+          {picked ? (
+            <>
+              Your pick: <strong>{freeTimeLabel(picked, salon.timeZone)}</strong>
+            </>
+          ) : (
+            'Pick a time to hold it.'
+          )}
+        </p>
+        {nothingPicked && <FormAlert>Pick a time first.</FormAlert>}
+        <Button onClick={hold} busy={createHold.isPending} className="w-full sm:w-auto sm:self-start">
+          {createHold.isPending ? 'Holding…' : 'Hold this time'}
+        </Button>
+      </ActionBar>
     </section>
   );
 }

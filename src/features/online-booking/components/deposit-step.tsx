@@ -9,14 +9,14 @@ import type { Card } from '../card-fields';
 import { CardForm } from './card-form';
 import { StepHeading } from './step-heading';
 
-type Props = { hold: Hold; secret: string; depositPolicy: string; focusOnMount: boolean; onBooked: (booking: BookingView) => void };
+type Props = { hold: Hold; secret: string; cancellationPolicy: string; focusOnMount: boolean; onBooked: (booking: BookingView) => void };
 
 /**
  * Step 5: pay the deposit (or confirm when the service needs none). One key per
  * attempt, so a retried request after a lost answer never charges twice; a declined
  * card frees the key and the client can try another while the hold lasts.
  */
-export function DepositStep({ hold, secret, depositPolicy, focusOnMount, onBooked }: Props) {
+export function DepositStep({ hold, secret, cancellationPolicy, focusOnMount, onBooked }: Props) {
   const pay = usePayHold(hold.holdId);
   const keys = useIdempotencyKeys();
   const send = (card?: Card) =>
@@ -30,16 +30,19 @@ export function DepositStep({ hold, secret, depositPolicy, focusOnMount, onBooke
         onError: (error) => keys.settle('pay', error),
       },
     );
-  const problem = !pay.isError
-    ? null
-    : pay.error.code === 'PAYMENT_DECLINED'
-      ? `${pay.error.message} You can try another card while your time is held.`
-      : pay.error.message;
+  // The server's answer already says what happened and what to do (a declined card: the time stays held, try another).
+  const problem = pay.isError ? pay.error.message : null;
 
   return (
     <section className="flex flex-col gap-4">
       <StepHeading focusOnMount={focusOnMount}>Deposit</StepHeading>
-      <p>{depositPolicy}</p>
+      {hold.depositCents > 0 && (
+        <p>
+          The deposit for {hold.serviceName} is <span className="tabular">{formatMoney(hold.depositCents, hold.currency)}</span>: it secures
+          your time and counts towards the price.
+        </p>
+      )}
+      <p>{cancellationPolicy}</p>
       {hold.depositCents > 0 ? (
         <CardForm amount={formatMoney(hold.depositCents, hold.currency)} paying={pay.isPending} problem={problem} onPay={send} />
       ) : (

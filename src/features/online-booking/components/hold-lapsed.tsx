@@ -3,7 +3,7 @@ import { Notice } from '../../../components/ui/notice';
 
 type Props = { onPickAgain: () => void };
 
-/** The hold ran out before the booking was paid: the time is free for others again. */
+/** The hold ran out (or was released) before the booking was paid: the time is free for others again. */
 export function HoldLapsed({ onPickAgain }: Props) {
   return (
     <Notice
@@ -15,7 +15,10 @@ export function HoldLapsed({ onPickAgain }: Props) {
         </div>
       }
     >
-      <p>The time was held for a few minutes and has run out, so others can book it now. If any payment went through for it, it has been refunded.</p>
+      <p>
+        The time was kept for a few minutes and is free for others again: its minutes ran out, or it was released. If any payment went
+        through for it, it has been refunded.
+      </p>
     </Notice>
   );
 }

@@ -8,7 +8,11 @@ import { photoQueries, type PhotoOwner } from '../api/photo-queries';
 import { kindLabels } from './photo-labels';
 import { PhotoThumbnails } from './photo-thumbnails';
 
-type Props = { kind: PhotoKind; bookingId?: string; owner?: PhotoOwner; label?: string };
+/**
+ * `bookingId` links new photos to a booking. `listed`: which photos show — only that booking's (a visit's photos in
+ * the mix log), or all of this kind (the online flow, where the client's earlier photos count too).
+ */
+type Props = { kind: PhotoKind; bookingId?: string; owner?: PhotoOwner; label?: string; listed?: 'booking' | 'all' };
 
 // HEIC is left out on purpose: iPhones then convert HEIC photos to JPEG as they are picked, and the
 // prebuilt image library on the server cannot decode HEIC (see docs/operations.md, Uploads).
@@ -16,12 +20,12 @@ const ACCEPT = 'image/jpeg,image/png,image/webp';
 const MB = PHOTO_LIMITS.bytesPerFile / 1024 / 1024;
 
 /** Picks several photos of one kind and uploads them at once with a progress bar; shows what is kept. */
-export function PhotoUploader({ kind, bookingId, owner = 'me', label = kindLabels[kind] }: Props) {
+export function PhotoUploader({ kind, bookingId, owner = 'me', label = kindLabels[kind], listed = 'booking' }: Props) {
   const inputId = useId();
   const [progress, setProgress] = useState(0);
   const upload = useUploadPhotos(owner, setProgress);
   const list = useQuery(photoQueries.list(owner));
-  const photos = (list.data?.photos ?? []).filter((p) => p.kind === kind && (!bookingId || p.bookingId === bookingId));
+  const photos = (list.data?.photos ?? []).filter((p) => p.kind === kind && (!bookingId || listed === 'all' || p.bookingId === bookingId));
 
   const onPick = (event: ChangeEvent<HTMLInputElement>) => {
     const files = [...(event.target.files ?? [])];
