@@ -35,6 +35,8 @@ export const apiPaths = {
   bookings: '/api/bookings',
   moveSitting: (id: string) => `/api/bookings/${id}/move`,
   cancelBooking: (id: string) => `/api/bookings/${id}/cancel`,
+  moveTimes: (id: string) => `/api/bookings/${id}/move-times`,
+  cancelTerms: (id: string) => `/api/bookings/${id}/cancel-terms`,
   bookingHistory: (id: string) => `/api/bookings/${id}/history`,
   standby: '/api/standby',
   standbyEntry: (id: string) => `/api/standby/${id}`,

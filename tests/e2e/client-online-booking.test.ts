@@ -95,8 +95,8 @@ describe('a new client on a phone', () => {
       page.getByRole('button', { name: 'Confirm cancellation' }).click(),
     ]);
     expect(cancelled.status()).toBe(200);
-    // The cancelled booking moves to the history list.
-    await page.getByRole('region', { name: 'Past' }).getByText('Cancelled').first().waitFor();
+    // The cancelled booking moves to its own list, with what became of the deposit.
+    await page.getByRole('region', { name: 'Cancelled' }).getByText(/deposit .+, (refunded|kept by the salon)/).first().waitFor();
     await expectAccessible(page);
     await screenshot(page, 'client-cancelled', false);
     await page.goto(`${baseUrl()}/me/hair`);

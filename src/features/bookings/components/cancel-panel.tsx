@@ -3,9 +3,9 @@ import { useState } from 'react';
 import { Button } from '../../../components/ui/button';
 import { FormAlert } from '../../../components/ui/form-alert';
 import { LoadingState } from '../../../components/ui/loading-state';
-import { Notice } from '../../../components/ui/notice';
 import { TextField } from '../../../components/ui/text-field';
 import { myBookingQueries, useCancelMyBooking } from '../api/my-booking-queries';
+import { CancelTermsNotice } from './cancel-terms-notice';
 
 type Props = { bookingId: string; onClose: () => void; onCancelled: () => void };
 
@@ -21,9 +21,7 @@ export function CancelPanel({ bookingId, onClose, onCancelled }: Props) {
   if (terms.isError) return <FormAlert>{terms.error.message}</FormAlert>;
   return (
     <div className="flex flex-col gap-3">
-      <Notice tone={terms.data.depositOutcome === 'kept' ? 'caution' : 'info'} title="If you cancel now">
-        <p>{terms.data.message}</p>
-      </Notice>
+      <CancelTermsNotice terms={terms.data} />
       <TextField label="Reason (optional)" value={reason} maxLength={500} onChange={(event) => setReason(event.target.value)} />
       {cancel.isError && <FormAlert>{cancel.error.message}</FormAlert>}
       <div className="flex flex-col gap-2 sm:flex-row">

@@ -18,6 +18,7 @@ export default function DayTimeline({ day, by = 'stylist', windows = [], booking
   const roomy = layout.columns.length === 1;
   return (
     <div>
+      {layout.closed && <p className="mb-3 font-bold">The salon is closed on this date.</p>}
       <div role="region" aria-label={by === 'chair' ? 'Chair timeline' : 'Day timeline'} tabIndex={0} className="overflow-x-auto rounded-2xl bg-white ring-1 ring-ink/10">
         <div className="flex min-w-fit pb-4">
           <HourAxis firstHour={layout.firstHour} lastHour={layout.lastHour} date={day.date} timeZone={day.timeZone} />
@@ -32,6 +33,7 @@ export default function DayTimeline({ day, by = 'stylist', windows = [], booking
               timeZone={day.timeZone}
               roomy={roomy}
               windows={by === 'stylist' ? windows.filter((w) => w.stylistId === column.id) : []}
+              closedSpans={layout.closedSpans}
               bookingHref={bookingHref}
             />
           ))}

@@ -5,10 +5,11 @@ import { sittingLabel } from '../../../lib/booking-labels';
 import { minutesBetween } from '../../../lib/time';
 import type { WeekEventData } from '../week-events';
 
-type Props = { data: WeekEventData; timeText: string };
+/** `showStylist`: in the week of all stylists, each sitting says whose it is. */
+type Props = { data: WeekEventData; timeText: string; showStylist: boolean };
 
 /** A sitting in the week calendar: its steps as a patterned strip, and who, what, which sitting. */
-export function WeekEventContent({ data, timeText }: Props) {
+export function WeekEventContent({ data, timeText, showStylist }: Props) {
   const total = Math.max(1, data.steps.reduce((t, s) => t + minutesBetween(s.start, s.end), 0));
   const ofLabel = sittingLabel(data.seq, data.of);
   return (
@@ -24,6 +25,7 @@ export function WeekEventContent({ data, timeText }: Props) {
             {data.clientName}
           </Link>
         </p>
+        {showStylist && <p className="truncate font-bold">{data.stylistName}</p>}
         <p className="truncate">{data.serviceName}</p>
         {ofLabel && <p className="font-bold">{ofLabel}</p>}
         <p className="tabular">{timeText}</p>
