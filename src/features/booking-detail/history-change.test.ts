@@ -74,4 +74,10 @@ describe('entryTitle', () => {
     expect(entryTitle('booked', { status: 'booked' })).toBe('Booked');
     expect(entryTitle('moved sitting 2', null)).toBe('Moved sitting 2');
   });
+
+  it('numbers a moved sitting as the booking page does: "of 2", or not at all for one sitting', () => {
+    const sitting = { chair: 'Chair 1', start: '2026-12-01T16:00:00.000Z', end: '2026-12-01T17:00:00.000Z' };
+    expect(entryTitle('moved sitting 2', { sittings: [sitting, sitting] })).toBe('Moved sitting 2 of 2');
+    expect(entryTitle('moved sitting 1', { sittings: [sitting] })).toBe('Moved');
+  });
 });

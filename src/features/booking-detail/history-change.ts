@@ -124,9 +124,14 @@ export function describeBookingChange(before: unknown, after: unknown, words: Hi
 
 /**
  * What happened, in words: "Held online" for a time held while a client pays (no person did it, and older
- * entries recorded it as "booked" with the status Held), else the action as recorded ("Moved sitting 2").
+ * entries recorded it as "booked" with the status Held); a moved sitting as "Moved sitting 2 of 2", or just
+ * "Moved" for a one-sitting booking; else the action as recorded ("Cancelled: client moved away").
  */
 export function entryTitle(action: string, after: unknown): string {
-  if (action === 'booked' && asRecord(after).status === 'held') return 'Held online';
+  const record = asRecord(after);
+  if (action === 'booked' && record.status === 'held') return 'Held online';
+  const moved = /^moved sitting (\d+)$/.exec(action);
+  const of = record.sittings?.length ?? 0;
+  if (moved && of > 0) return of > 1 ? `Moved ${sittingLabel(Number(moved[1]), of)!.toLowerCase()}` : 'Moved';
   return actionLabel(action);
 }

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { BookingView, WeekView } from '../../../shared/schemas/booking-view.schemas';
-import { closedDates, closedStretches, toWeekEvents, visibleHours } from './week-events';
+import { closedDates, closedStretches, hiddenClosedDates, toWeekEvents, visibleHours } from './week-events';
 
 const id = (n: number) => `00000000-0000-4000-8000-00000000000${n}`;
 const booking = (n: number, stylist: number, status: BookingView['status']): BookingView => ({
@@ -83,5 +83,17 @@ describe('closed dates and stretches', () => {
     expect(closedStretches(week, { from: '09:00:00', to: '21:00:00' })).toEqual([
       { id: 'closed:2027-03-13:1020', start: '2027-03-13T17:00:00Z', end: '2027-03-13T21:00:00Z', display: 'background', classNames: ['salon-closed'] },
     ]);
+  });
+});
+
+describe('hiddenClosedDates', () => {
+  it('leaves out the closed dates with nothing on them, and keeps one that holds a sitting', () => {
+    expect(hiddenClosedDates(week, [])).toEqual(['2027-03-08', '2027-03-14']);
+    // Client 3's first sitting is on Monday 8 March (a closed day): that day stays, greyed.
+    expect(hiddenClosedDates(week, toWeekEvents(week, id(1)))).toEqual(['2027-03-14']);
+  });
+
+  it('never hides every date of a week the salon is closed all of', () => {
+    expect(hiddenClosedDates({ days: week.days.map((d) => ({ ...d, hours: [] })) }, [])).toEqual([]);
   });
 });

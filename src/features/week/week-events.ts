@@ -79,6 +79,16 @@ export function closedDates(week: Pick<WeekView, 'days'>): Set<string> {
 }
 
 /**
+ * The closed dates with nothing on them: left out of the grid to give the open days the room (a closed date that
+ * still holds a sitting stays, greyed). Never every date: an empty week still shows its grid.
+ */
+export function hiddenClosedDates(week: Pick<WeekView, 'days'>, events: WeekEvent[]): string[] {
+  const used = new Set(events.map((e) => e.start.slice(0, 10)));
+  const hidden = [...closedDates(week)].filter((d) => !used.has(d));
+  return hidden.length < week.days.length ? hidden : [];
+}
+
+/**
  * Grey stretches for the times of each open date outside its opening hours (a late opening, an early close, a
  * break), within the hours shown. Whole closed dates are greyed as columns instead.
  */

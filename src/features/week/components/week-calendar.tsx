@@ -6,7 +6,7 @@ import { DateTime } from 'luxon';
 import { useMemo } from 'react';
 import type { WeekView } from '../../../../shared/schemas/booking-view.schemas';
 import { fromCalendarTime, toCalendarTime } from '../calendar-time';
-import { closedDates, closedStretches, toWeekEvents, visibleHours, type WeekEventData } from '../week-events';
+import { closedDates, closedStretches, hiddenClosedDates, toWeekEvents, visibleHours, type WeekEventData } from '../week-events';
 import { WeekEventContent } from './week-event-content';
 import './week-calendar.css';
 
@@ -32,14 +32,22 @@ export default function WeekCalendar({ week, stylistId, onMove }: Props) {
   const hours = useMemo(() => visibleHours(week, events), [week, events]);
   const closed = useMemo(() => closedDates(week), [week]);
   const background = useMemo(() => closedStretches(week, hours), [week, hours]);
+  const hidden = useMemo(() => hiddenClosedDates(week, events), [week, events]);
+  // The week holds each weekday once, so hiding a weekday hides exactly that date (FullCalendar: 0 = Sunday).
+  const hiddenDays = hidden.map((date) => new Date(`${date}T00:00:00Z`).getUTCDay());
   const drop = (info: EventDropArg) => {
     const data = info.event.extendedProps as WeekEventData;
     if (!info.event.start) return info.revert();
     onMove({ bookingId: data.bookingId, sitting: data.seq, start: fromCalendarTime(info.event.start, week.timeZone), was: data }).catch(() => info.revert());
   };
   return (
-    <div className="dwell-week overflow-x-auto rounded-2xl bg-white p-2 ring-1 ring-ink/10">
-      <div className={stylistId ? 'min-w-[48rem]' : 'min-w-[60rem]'}>
+    <div className={`dwell-week ${stylistId ? '' : 'dwell-week-all'} overflow-x-auto rounded-2xl bg-white p-2 ring-1 ring-ink/10`}>
+      {hidden.length > 0 && (
+        <p className="px-2 pb-2 text-sm">
+          Closed, not shown: {hidden.map((d) => DateTime.fromISO(d).toFormat('ccc d LLL')).join('; ')}.
+        </p>
+      )}
+      <div className={stylistId ? 'min-w-[48rem]' : 'min-w-[56rem]'}>
         <FullCalendar
           key={`${week.from}-${stylistId ?? 'all'}`}
           plugins={[timeGridPlugin, interactionPlugin]}
@@ -50,6 +58,8 @@ export default function WeekCalendar({ week, stylistId, onMove }: Props) {
           firstDay={1}
           headerToolbar={false}
           allDaySlot={false}
+          hiddenDays={hiddenDays}
+          slotEventOverlap={false}
           height="auto"
           slotMinTime={hours.from}
           slotMaxTime={hours.to}

@@ -1,3 +1,4 @@
+import { ClosedKey } from '../../../components/ui/closed-key';
 import { lazy, Suspense, useState } from 'react';
 import { Link, useNavigate } from 'react-router-dom';
 import type { WeekView } from '../../../../shared/schemas/booking-view.schemas';
@@ -77,9 +78,7 @@ export function WeekPage({ week, stylistId, stylists }: Props) {
       </div>
       <div className="flex flex-wrap items-center gap-x-6 gap-y-2">
         <StepKindLegend />
-        <p className="flex items-center gap-2 text-sm">
-          <span aria-hidden="true" className="salon-closed inline-block h-4 w-6 rounded ring-1 ring-ink/20" /> Grey: the salon is closed
-        </p>
+        <ClosedKey />
       </div>
       <p className="text-sm text-ink/80">
         Drag a sitting to a new time to move it; Dwell checks the move before keeping it, keeps its chair when that chair is free, and offers Undo. Or open the
