@@ -1,20 +1,13 @@
-import { AxeBuilder } from '@axe-core/playwright';
-import type { Browser, Page } from 'playwright-core';
+import type { Browser } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO_PASSWORD } from '../../server/demo/demo-catalogue';
-import { baseUrl, connectBrowser, screenshot, signInThroughPage } from '../setup/browser';
+import { baseUrl, connectBrowser, expectAccessible, screenshot, signInThroughPage } from '../setup/browser';
 
 let browser: Browser;
 beforeAll(async () => {
   browser = await connectBrowser();
 });
 afterAll(() => browser.close());
-
-/** No serious or critical WCAG 2.x A/AA violations (axe-core, Deque's rules for automated checks). */
-async function expectAccessible(page: Page) {
-  const result = await new AxeBuilder({ page }).withTags(['wcag2a', 'wcag2aa', 'wcag22aa']).analyze();
-  expect(result.violations.filter((v) => v.impact === 'serious' || v.impact === 'critical').map((v) => v.id)).toEqual([]);
-}
 
 describe('a new client on a phone', () => {
   it('books and pays a consultation, gets the e-mail, then cancels', async () => {

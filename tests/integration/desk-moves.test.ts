@@ -61,6 +61,8 @@ describe('free times to move a sitting to (desk)', () => {
     expect(res.status).toBe(200);
     const times = res.body.times as FreeTime[];
     expect(times.length).toBeGreaterThan(10);
+    // Its own time is not offered: moving there would change nothing.
+    expect(times.map((x) => Date.parse(x.start))).not.toContain(Date.parse(localIso(wednesday, '09:00')));
     // The toner takes at least 10 + 10 + 10 = 30 minutes (factories/service.ts), and the stylist works 09:00–18:00.
     for (const time of times) {
       expect(time.stylistId).toBe(s.ana.staffId);

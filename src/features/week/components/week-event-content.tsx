@@ -21,7 +21,8 @@ export function WeekEventContent({ data, timeText, showStylist }: Props) {
       </div>
       <div className="min-w-0 flex-1 px-1 text-xs leading-snug">
         <p className="truncate font-bold">
-          <Link to={paths.deskBooking(data.bookingId)} className="text-link">
+          {/* At least 24 px tall: events sit close together, and a smaller link is hard to hit (WCAG 2.2 target size). */}
+          <Link to={paths.deskBooking(data.bookingId)} className="text-link inline-block min-h-6 max-w-full truncate align-top leading-6">
             {data.clientName}
           </Link>
         </p>
