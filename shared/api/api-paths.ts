@@ -36,6 +36,8 @@ export const apiPaths = {
   moveSitting: (id: string) => `/api/bookings/${id}/move`,
   cancelBooking: (id: string) => `/api/bookings/${id}/cancel`,
   changePlan: (id: string) => `/api/bookings/${id}/plan`,
+  moveTimes: (id: string) => `/api/bookings/${id}/move-times`,
+  cancelTerms: (id: string) => `/api/bookings/${id}/cancel-terms`,
   bookingHistory: (id: string) => `/api/bookings/${id}/history`,
   standby: '/api/standby',
   standbyEntry: (id: string) => `/api/standby/${id}`,

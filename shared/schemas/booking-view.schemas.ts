@@ -50,10 +50,17 @@ export type BookingView = z.infer<typeof BookingViewSchema>;
 export const StaffSummarySchema = z.object({ id: IdSchema, name: z.string(), skills: z.array(z.string()) });
 export const ChairSummarySchema = z.object({ id: IdSchema, name: z.string() });
 
+/** One stretch of a date the salon is open, wall-clock `HH:mm` in its zone. */
+export const OpenSpanSchema = z.object({ start: z.string(), end: z.string() });
+/** A date with the salon's opening hours (from its hours lines and closed dates); no hours: closed that date. */
+export const OpeningDaySchema = z.object({ date: LocalDateSchema, hours: z.array(OpenSpanSchema) });
+
 /** One day of the salon's book: who works, which chairs exist, and every booking with a sitting that day. */
 export const DayViewSchema = z.object({
   date: LocalDateSchema,
   timeZone: z.string(),
+  /** The salon's opening hours that date; empty when it is closed. */
+  hours: z.array(OpenSpanSchema),
   stylists: z.array(StaffSummarySchema),
   chairs: z.array(ChairSummarySchema),
   bookings: z.array(BookingViewSchema),
@@ -67,6 +74,8 @@ export const WeekViewSchema = z.object({
   from: LocalDateSchema,
   to: LocalDateSchema,
   timeZone: z.string(),
+  /** Each of the seven dates with the salon's opening hours (none: closed). */
+  days: z.array(OpeningDaySchema),
   stylists: z.array(StaffSummarySchema),
   bookings: z.array(BookingViewSchema),
 });

@@ -90,6 +90,17 @@ export const MoveSittingSchema = z
     start: InstantInputSchema,
     /** Another stylist with the skill; the booking's own stylist when left out. */
     stylistId: IdSchema.optional(),
+    /** The chair to keep when it is free at the new time (an undo names the old one); the sitting's own when left out. */
+    chairId: IdSchema.optional(),
+  })
+  .strict();
+
+/** Which sitting to find free times for (1 by default), with which stylist, from which local date. */
+export const DeskMoveTimesQuerySchema = z
+  .object({
+    sitting: z.string().regex(/^[1-9]$/, 'A sitting number from 1 to 9').default('1'),
+    stylistId: IdSchema.optional(),
+    from: LocalDateSchema.optional(),
   })
   .strict();
 

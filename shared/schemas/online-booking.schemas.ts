@@ -109,7 +109,17 @@ export const PayHoldSchema = z
   .strict();
 
 /** What cancelling now would mean for the deposit, shown before the client confirms. */
-export const CancelTermsSchema = z.object({ depositOutcome: z.enum(['kept', 'refunded']).nullable(), message: z.string() });
+/**
+ * What cancelling now does to the deposit (desk and client alike), the rule that decided it, and the words to read:
+ * no deposit; a hold not paid yet; refunded in full as the skin-test record now blocks the colour; the salon keeps
+ * nothing; inside or outside the cancellation window.
+ */
+export const CancelTermsSchema = z.object({
+  depositOutcome: z.enum(['kept', 'refunded']).nullable(),
+  why: z.enum(['no_deposit', 'not_paid', 'skin_test_blocked', 'salon_keeps_nothing', 'inside_window', 'outside_window']),
+  message: z.string(),
+});
+export type CancelTerms = z.infer<typeof CancelTermsSchema>;
 export const ClientCancelSchema = z.object({ reason: z.string().trim().max(500).default('Cancelled by the client') }).strict();
 export const ClientMoveSchema = z.object({ start: InstantInputSchema }).strict();
 /**

@@ -18,3 +18,13 @@ export class ApiError extends Error {
 export function isApiError(error: unknown, code?: ApiError['code']): error is ApiError {
   return error instanceof ApiError && (code === undefined || error.code === code);
 }
+
+/**
+ * A refusal in words a person can act on: the server's message, or for a 400 on fields the fields' own messages
+ * ("That time has already passed.") instead of the general "Some fields need attention.".
+ */
+export function problemText(error: unknown): string {
+  if (!(error instanceof ApiError)) return error instanceof Error ? error.message : 'Something went wrong. Please try again.';
+  const fields = Object.values(error.fields);
+  return fields.length ? fields.join(' ') : error.message;
+}

@@ -1,3 +1,4 @@
+import type { BookingView } from '../../shared/schemas/booking-view.schemas';
 import type { BookingStatus, Role, StepKind } from '../../shared/schemas/common.schemas';
 
 /** The words the UI uses for the API's enum values (docs/glossary.md). */
@@ -28,10 +29,22 @@ export function sittingLabel(seq: number, of: number): string | null {
   return of > 1 ? `Sitting ${seq} of ${of}` : null;
 }
 
+/** "Jordan Avery's sitting 1 of 2", or "Jordan Avery's sitting" for a one-sitting booking: what a move names. */
+export function whoseSitting(clientName: string, seq: number, of: number): string {
+  return `${clientName}'s ${sittingLabel(seq, of)?.toLowerCase() ?? 'sitting'}`;
+}
+
 export function formatMoney(cents: number, currency: string): string {
   return new Intl.NumberFormat(undefined, { style: 'currency', currency }).format(cents / 100);
 }
 
 export function formatPercent(share: number | null): string {
   return share === null ? '—' : new Intl.NumberFormat(undefined, { style: 'percent', maximumFractionDigits: 0 }).format(share);
+}
+
+/** A cancelled booking's deposit outcome in words: "The $25.00 deposit was refunded to the client.", or nothing. */
+export function depositOutcomeText(booking: Pick<BookingView, 'depositCents' | 'depositOutcome'>, currency: string): string {
+  if (booking.depositOutcome === null || booking.depositCents <= 0) return '';
+  const amount = formatMoney(booking.depositCents, currency);
+  return booking.depositOutcome === 'kept' ? `The ${amount} deposit was kept by the salon.` : `The ${amount} deposit was refunded to the client.`;
 }

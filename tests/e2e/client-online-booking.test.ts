@@ -1,4 +1,3 @@
-import { AxeBuilder } from '@axe-core/playwright';
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO_PASSWORD } from '../../server/demo/demo-catalogue';
@@ -6,19 +5,13 @@ import { DateTime } from 'luxon';
 import { setupPaths } from '../../shared/api/setup-paths';
 import { myPreferencesPath } from '../../shared/schemas/contact.schemas';
 import { makeImage } from '../factories/image';
-import { apiWrite, baseUrl, connectBrowser, screenshot, signedInPage, signInThroughPage } from '../setup/browser';
+import { apiWrite, baseUrl, connectBrowser, expectAccessible, screenshot, signedInPage, signInThroughPage } from '../setup/browser';
 
 let browser: Browser;
 beforeAll(async () => {
   browser = await connectBrowser();
 });
 afterAll(() => browser.close());
-
-/** No serious or critical WCAG 2.x A/AA violations (axe-core, Deque's rules for automated checks). */
-async function expectAccessible(page: Page) {
-  const result = await new AxeBuilder({ page }).withTags(['wcag2a', 'wcag2aa', 'wcag22aa']).analyze();
-  expect(result.violations.filter((v) => v.impact === 'serious' || v.impact === 'critical').map((v) => v.id)).toEqual([]);
-}
 
 /** Opens the day chip with the most free times (among those listed) and answers that day's times. */
 async function openBusiestDay(page: Page) {
@@ -164,8 +157,8 @@ describe('a new client on a phone', () => {
       page.getByRole('button', { name: 'Confirm cancellation' }).click(),
     ]);
     expect(cancelled.status()).toBe(200);
-    // The cancelled booking moves to the history list.
-    await page.getByRole('region', { name: 'Past' }).getByText('Cancelled').first().waitFor();
+    // The cancelled booking moves to its own list, with what became of the deposit.
+    await page.getByRole('region', { name: 'Cancelled' }).getByText(/deposit .+, (refunded|kept by the salon)/).first().waitFor();
     await expectAccessible(page);
     await screenshot(page, 'client-cancelled', false);
     await page.goto(`${baseUrl()}/me/hair`);

@@ -157,6 +157,8 @@ describe('deposit and confirmation', () => {
     const times = await c.get(`/api/me/bookings/${id}/move-times`);
     expect(times.status).toBe(200);
     expect(times.body.times.every((x: { start: string }) => Date.parse(x.start) - Date.now() >= 48 * 3_600_000)).toBe(true);
+    // Its own time is not offered: moving there would change nothing.
+    expect(times.body.times.map((x: { start: string }) => Date.parse(x.start))).not.toContain(Date.parse(localIso(tuesday, '16:00')));
     const soon = new Date(Math.ceil((Date.now() + 24 * 3_600_000) / 300_000) * 300_000).toISOString();
     const tooClose = await c.write('post', `/api/me/bookings/${id}/move`, { start: soon });
     expect(tooClose.status).toBe(409);

@@ -1,8 +1,9 @@
+import { AxeBuilder } from '@axe-core/playwright';
 import { copyFileSync, mkdirSync } from 'node:fs';
 import { join } from 'node:path';
 import { chromium, type Browser, type Page } from 'playwright-core';
 import { DEMO_PASSWORD } from '../../server/demo/demo-catalogue';
-import { inject } from 'vitest';
+import { expect, inject } from 'vitest';
 
 export const screenshotDir = join(process.cwd(), 'tests', 'output', 'screenshots');
 const docsScreenshots = join(process.cwd(), 'docs', 'screenshots');
@@ -48,4 +49,10 @@ export async function apiWrite(page: Page, method: 'PUT' | 'POST', path: string,
   const { token } = await (await page.request.get(`${baseUrl()}/api/csrf`)).json();
   const res = await page.request.fetch(`${baseUrl()}${path}`, { method, data: body, headers: { 'X-CSRF-Token': token } });
   return res.status();
+}
+
+/** No serious or critical WCAG 2.x A/AA violations (axe-core, Deque's rules for automated checks). */
+export async function expectAccessible(page: Page): Promise<void> {
+  const result = await new AxeBuilder({ page }).withTags(['wcag2a', 'wcag2aa', 'wcag22aa']).analyze();
+  expect(result.violations.filter((v) => v.impact === 'serious' || v.impact === 'critical').map((v) => v.id)).toEqual([]);
 }

@@ -11,7 +11,8 @@ import { horizonFor } from '../planning/engine-request';
 import { planBetween, planExactlyAt } from '../planning/plan-at';
 import { assertSkinTestAllows } from '../skin-tests/skin-test-check.service';
 import { writeAudit } from '../audit/audit.repository';
-import { chairFreeBetween, insertBooking } from './bookings.repository';
+import { insertBooking } from './bookings.repository';
+import { preferredChair } from './preferred-chair';
 import { bookingSnapshot } from './booking-snapshot.repository';
 import { replanBookingMessages } from '../messages/plan-messages.service';
 import { withdrawStaleOffers } from '../windows/offer-withdrawal.service';
@@ -84,7 +85,7 @@ export async function bookAt(db: Db, input: BookAtInput): Promise<string> {
         steps: s.steps.map((st, j) => ({ kind: st.kind, label: input.plan.sittings[i].steps[j].label, start: new Date(st.start), end: new Date(st.end), basinId: st.basin ?? null })),
       })),
     });
-    await writeAudit(db, { salonId: input.salon.id, actorUserId: input.actorUserId, entity: 'booking', entityId: id, action: 'booked', after: (await bookingSnapshot(db, id))?.audit });
+    await writeAudit(db, { salonId: input.salon.id, actorUserId: input.actorUserId, entity: 'booking', entityId: id, action: input.status === 'held' ? 'held online' : 'booked', after: (await bookingSnapshot(db, id))?.audit });
     await replanBookingMessages(db, id, input.now); // confirmation and reminders, in the same transaction
     await withdrawStaleOffers(db, input.salon, input.stylistId, bookedSpan(found), input.now);
     return id;
@@ -100,16 +101,9 @@ export function bookedSpan(plan: Option): { from: Date; to: Date } {
   return { from: new Date(steps[0].start), to: new Date(steps[steps.length - 1].end) };
 }
 
-/** The engine's chair per sitting, or the one the person saw when it is a live chair of the salon and free then. */
-async function preferredChairs(db: Db, salonId: string, plan: Option, wanted: string[] | undefined): Promise<string[]> {
-  return Promise.all(
-    plan.sittings.map(async (s, i) => {
-      const chair = wanted?.[i];
-      if (!chair || chair === s.chair) return s.chair;
-      const free = await chairFreeBetween(db, salonId, chair, new Date(s.steps[0].start), new Date(s.steps[s.steps.length - 1].end));
-      return free ? chair : s.chair;
-    }),
-  );
+/** The engine's chair per sitting, or the one the person saw when it is still free (see preferredChair). */
+function preferredChairs(db: Db, salonId: string, plan: Option, wanted: string[] | undefined): Promise<string[]> {
+  return Promise.all(plan.sittings.map((s, i) => preferredChair(db, salonId, s, wanted?.[i])));
 }
 
 async function planOrExplain(db: Db, input: BookAtInput): Promise<Option> {

@@ -5,9 +5,11 @@ import {
   BookingOptionsResponseSchema,
   CancelBookingSchema,
   CreateBookingSchema,
+  DeskMoveTimesQuerySchema,
   MoveSittingSchema,
   ChangePlanSchema,
 } from '../../../shared/schemas/booking.schemas';
+import { AvailabilitySchema, CancelTermsSchema } from '../../../shared/schemas/online-booking.schemas';
 import { BookingViewSchema } from '../../../shared/schemas/booking-view.schemas';
 import { BookingStatusSchema, IdParamsSchema } from '../../../shared/schemas/common.schemas';
 import type { AppDeps } from '../../app-deps';
@@ -21,8 +23,9 @@ import { loadBookingViews } from './booking-views.repository';
 import { findBookingOptions } from './booking-options.service';
 import { createBooking } from './create-booking.service';
 import { moveSitting } from './move-booking.service';
-import { cancelBooking } from './cancel-booking.service';
+import { cancelBooking, deskCancelTerms } from './cancel-booking.service';
 import { changePlan } from './change-plan.service';
+import { deskMoveTimes } from './move-times.service';
 
 /** One booking as the desk sees it (any status). */
 export async function deskBookingView(db: Db, salonId: string, timeZone: string, bookingId: string) {
@@ -51,7 +54,7 @@ export function registerBookingChangeRoutes({ table, db }: AppDeps): void {
     { method: 'post', path: '/api/bookings/:id/move', access: DESK, summary: 'Move one sitting to a new time (and stylist)', params: IdParamsSchema, body: MoveSittingSchema, response: BookingViewSchema },
     async ({ user, params, body }) => {
       const salon = await findSalon(db, user.salonId);
-      await moveSitting(db, salon, user.id, { bookingId: params.id, sitting: body.sitting, start: new Date(body.start), stylistId: body.stylistId, allowWaitingOnTest: true }, new Date());
+      await moveSitting(db, salon, user.id, { bookingId: params.id, sitting: body.sitting, start: new Date(body.start), stylistId: body.stylistId, chairId: body.chairId, allowWaitingOnTest: true }, new Date());
       return deskBookingView(db, salon.id, salon.timeZone, params.id);
     },
   );
@@ -66,6 +69,19 @@ export function registerBookingChangeRoutes({ table, db }: AppDeps): void {
       await changePlan(db, salon, user.id, params.id, body.stepPlan, new Date());
       return deskBookingView(db, salon.id, salon.timeZone, params.id);
     },
+  );
+  apiRoute(
+    table,
+    { method: 'get', path: '/api/bookings/:id/move-times', access: DESK, summary: 'Free times to move one sitting to (the engine, as the move itself checks)', params: IdParamsSchema, query: DeskMoveTimesQuerySchema, response: AvailabilitySchema },
+    async ({ user, params, query }) => {
+      const salon = await findSalon(db, user.salonId);
+      return deskMoveTimes(db, salon, params.id, { sitting: Number(query.sitting), stylistId: query.stylistId, from: query.from }, new Date());
+    },
+  );
+  apiRoute(
+    table,
+    { method: 'get', path: '/api/bookings/:id/cancel-terms', access: DESK, summary: 'What cancelling now does to the deposit, and why', params: IdParamsSchema, response: CancelTermsSchema },
+    async ({ user, params }) => deskCancelTerms(db, await findSalon(db, user.salonId), params.id, new Date()),
   );
   apiRoute(
     table,

@@ -82,16 +82,24 @@ export async function insertBooking(db: Db, booking: NewBooking): Promise<string
   return id;
 }
 
-/** True when the chair belongs to the salon, is in service, and no live sitting holds it in [start, end). */
-export async function chairFreeBetween(db: Db, salonId: string, chairId: string, start: Date, end: Date): Promise<boolean> {
+/**
+ * True when the chair belongs to the salon, is in service (active, not out of service then), and no live sitting
+ * holds it in [start, end). `exceptBookingId`: a booking being moved does not stand in its own way.
+ */
+export async function chairFreeBetween(db: Db, salonId: string, chairId: string, start: Date, end: Date, exceptBookingId?: string): Promise<boolean> {
   const chair = await db.selectFrom('chairs').select('id').where('id', '=', chairId).where('salon_id', '=', salonId).where('active', '=', true).executeTakeFirst();
   if (!chair) return false;
-  const taken = await db
-    .selectFrom('sittings')
-    .select('id')
-    .where('chair_id', '=', chairId)
-    .where('live', '=', true)
-    .where(sql<boolean>`during && tstzrange(${start}, ${end}, '[)')`)
-    .executeTakeFirst();
-  return !taken;
+  const span = sql<boolean>`during && tstzrange(${start}, ${end}, '[)')`;
+  const [taken, closed] = await Promise.all([
+    db
+      .selectFrom('sittings')
+      .select('id')
+      .where('chair_id', '=', chairId)
+      .where('live', '=', true)
+      .where('booking_id', '!=', exceptBookingId ?? '00000000-0000-0000-0000-000000000000')
+      .where(span)
+      .executeTakeFirst(),
+    db.selectFrom('out_of_service').select('id').where('chair_id', '=', chairId).where(span).executeTakeFirst(),
+  ]);
+  return !taken && !closed;
 }

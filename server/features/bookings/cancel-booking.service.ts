@@ -1,7 +1,10 @@
 import type { Kysely } from 'kysely';
 import type { Database } from '../../db/schema';
+import type { Db } from '../../db/database';
 import type { Salon } from '../../../shared/schemas/salon.schemas';
+import type { CancelTerms } from '../../../shared/schemas/online-booking.schemas';
 import { AppError, notFound } from '../../lib/app-error';
+import { formatMoney } from '../../lib/money';
 import { writeAudit } from '../audit/audit.repository';
 import { bookingSnapshot } from './booking-snapshot.repository';
 import { markCancelled, sittingStarts } from './change-booking.repository';
@@ -19,19 +22,68 @@ export function depositOutcome(depositCents: number, firstStart: Date, now: Date
   return keeps === 'deposit' && firstStart.getTime() - now.getTime() < windowHours * 3_600_000 ? 'kept' : 'refunded';
 }
 
+type Snapshot = NonNullable<Awaited<ReturnType<typeof bookingSnapshot>>>;
+export type CancelWhy = CancelTerms['why'];
+
+/**
+ * What cancelling now does to the deposit, and why: the one rule behind the cancel itself and the terms the desk
+ * and the client read before confirming. A hold has no deposit paid yet; a booking the client's skin-test record
+ * now blocks (a reaction since) is refunded in full, as they cannot help it; else the cancellation window decides.
+ */
+async function outcomeOf(db: Db, salon: Salon, before: Snapshot, bookingId: string, now: Date) {
+  const { row } = before;
+  if (!['held', 'booked'].includes(row.status)) {
+    throw new AppError('NOT_BOOKABLE', 409, `A ${row.status.replace('_', ' ')} booking cannot be cancelled.`);
+  }
+  const starts = await sittingStarts(db, bookingId);
+  const terms = (outcome: 'kept' | 'refunded' | null, why: CancelWhy, skinTest = '') => ({ outcome, why, starts, skinTest });
+  if (row.deposit_cents <= 0) return terms(null, 'no_deposit');
+  if (row.status === 'held') return terms(null, 'not_paid');
+  const [skinTest] = await bookingSkinTestStates(db, salon, [{ clientId: row.client_id, status: row.status, plan: row.step_plan as StepPlan, serviceAsks: before.serviceAsks, starts }], now);
+  if (skinTest.status === 'blocked') return terms('refunded', 'skin_test_blocked', skinTest.message);
+  if (salon.cancellationKeeps === 'nothing') return terms('refunded', 'salon_keeps_nothing');
+  const outcome = depositOutcome(row.deposit_cents, starts[0], now, salon.cancellationWindowHours, salon.cancellationKeeps);
+  return terms(outcome, outcome === 'kept' ? 'inside_window' : 'outside_window');
+}
+
+/** The outcome in the desk's words: the amount, kept or refunded, and the rule that decided it. */
+function deskWords(salon: Salon, depositCents: number, why: CancelWhy, skinTest: string): string {
+  const amount = formatMoney(depositCents, salon.currency);
+  const hours = salon.cancellationWindowHours;
+  switch (why) {
+    case 'no_deposit':
+      return 'There is no deposit on this booking.';
+    case 'not_paid':
+      return `This time is held online and its ${amount} deposit is not paid yet: there is nothing to keep or refund.`;
+    case 'skin_test_blocked':
+      return `The ${amount} deposit is refunded in full: the client's skin-test record no longer allows this colour, which they cannot help. ${skinTest}`.trim();
+    case 'salon_keeps_nothing':
+      return `The ${amount} deposit is refunded: the salon refunds deposits whenever a booking is cancelled.`;
+    case 'inside_window':
+      return `The ${amount} deposit is kept: the first sitting is less than ${hours} hours away, inside the salon's ${hours}-hour cancellation window.`;
+    case 'outside_window':
+      return `The ${amount} deposit is refunded: the first sitting is more than ${hours} hours away, outside the salon's ${hours}-hour cancellation window.`;
+  }
+}
+
+/** What cancelling this booking now would do to its deposit and why (the caller words it for its reader). */
+export async function cancelOutcome(db: Db, salon: Salon, bookingId: string, now: Date) {
+  const before = await bookingSnapshot(db, bookingId);
+  if (!before || before.row.salon_id !== salon.id) throw notFound('That booking');
+  return { ...(await outcomeOf(db, salon, before, bookingId, now)), depositCents: before.row.deposit_cents };
+}
+
+/** The terms the desk reads before confirming a cancellation. */
+export async function deskCancelTerms(db: Db, salon: Salon, bookingId: string, now: Date): Promise<CancelTerms> {
+  const { outcome, why, skinTest, depositCents } = await cancelOutcome(db, salon, bookingId, now);
+  return { depositOutcome: outcome, why, message: deskWords(salon, depositCents, why, skinTest) };
+}
+
 export async function cancelBooking(db: Kysely<Database>, salon: Salon, actorUserId: string, bookingId: string, reason: string, now: Date): Promise<void> {
   await db.transaction().execute(async (trx) => {
     const before = await bookingSnapshot(trx, bookingId);
     if (!before || before.row.salon_id !== salon.id) throw notFound('That booking');
-    if (!['held', 'booked'].includes(before.row.status)) {
-      throw new AppError('NOT_BOOKABLE', 409, `A ${before.row.status.replace('_', ' ')} booking cannot be cancelled.`);
-    }
-    const starts = await sittingStarts(trx, bookingId);
-    // A booking the client's skin-test record now blocks (a reaction since) is refunded in full: they cannot help it.
-    const [skinTest] = await bookingSkinTestStates(trx, salon, [{ clientId: before.row.client_id, status: before.row.status, plan: before.row.step_plan as StepPlan, serviceAsks: before.serviceAsks, starts }], now);
-    const outcome = skinTest.status === 'blocked' && before.row.deposit_cents > 0
-      ? 'refunded'
-      : depositOutcome(before.row.deposit_cents, starts[0], now, salon.cancellationWindowHours, salon.cancellationKeeps);
+    const { outcome } = await outcomeOf(trx, salon, before, bookingId, now);
     const cancel = () => markCancelled(trx, bookingId, reason, outcome);
     if (before.row.client_id) await withColourBookingsKept(trx, salon, before.row.client_id, now, cancel);
     else await cancel();

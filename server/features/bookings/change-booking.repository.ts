@@ -45,3 +45,9 @@ export async function sittingStarts(db: Db, bookingId: string): Promise<Date[]> 
   const rows = await db.selectFrom('sittings').select(sql<Date>`lower(during)`.as('start')).where('booking_id', '=', bookingId).orderBy('seq').execute();
   return rows.map((r) => r.start);
 }
+
+/** The chair one sitting of a booking is in now. */
+export async function sittingChair(db: Db, bookingId: string, seq: number): Promise<string | undefined> {
+  const row = await db.selectFrom('sittings').select('chair_id').where('booking_id', '=', bookingId).where('seq', '=', seq).executeTakeFirst();
+  return row?.chair_id;
+}

@@ -3,6 +3,8 @@ import type { Db } from '../../db/database';
 import type { DayView, WeekView } from '../../../shared/schemas/booking-view.schemas';
 import type { Salon } from '../../../shared/schemas/salon.schemas';
 import { AppError } from '../../lib/app-error';
+import { openingDays } from '../../../shared/engine/opening-days';
+import { listSalonHours } from '../salon/salon.repository';
 import { loadBookingViews } from './booking-views.repository';
 import { listChairs, listStylists, findStaffIdForUser } from './salon-resources.repository';
 
@@ -17,15 +19,21 @@ export function todayIn(timeZone: string, now = new Date()): string {
   return DateTime.fromJSDate(now, { zone: timeZone }).toISODate()!;
 }
 
+/** The salon's opening hours over `count` dates from `date`: what the day book and the week cover. */
+async function openingOver(db: Db, salon: Salon, date: string, count: number) {
+  return openingDays(await listSalonHours(db, salon.id), salon.timeZone, date, count);
+}
+
 /** The whole salon's book for one day (front desk and owner). */
 export async function deskDay(db: Db, salon: Salon, date = todayIn(salon.timeZone)): Promise<DayView> {
   const bounds = localDayBounds(date, salon.timeZone);
-  const [stylists, chairs, bookings] = await Promise.all([
+  const [stylists, chairs, bookings, [opening]] = await Promise.all([
     listStylists(db, salon.id),
     listChairs(db, salon.id),
     loadBookingViews(db, { salonId: salon.id, ...bounds }, salon.timeZone),
+    openingOver(db, salon, date, 1),
   ]);
-  return { date, timeZone: salon.timeZone, stylists, chairs, bookings };
+  return { date, timeZone: salon.timeZone, hours: opening.hours, stylists, chairs, bookings };
 }
 
 /** One stylist's own day: only the bookings they work on. */
@@ -33,12 +41,13 @@ export async function stylistDay(db: Db, salon: Salon, userId: string, date = to
   const staffId = await findStaffIdForUser(db, userId);
   if (!staffId) throw new AppError('NOT_FOUND', 404, 'No stylist profile is linked to this account.');
   const bounds = localDayBounds(date, salon.timeZone);
-  const [stylists, chairs, bookings] = await Promise.all([
+  const [stylists, chairs, bookings, [opening]] = await Promise.all([
     listStylists(db, salon.id),
     listChairs(db, salon.id),
     loadBookingViews(db, { salonId: salon.id, stylistId: staffId, ...bounds }, salon.timeZone),
+    openingOver(db, salon, date, 1),
   ]);
-  return { date, timeZone: salon.timeZone, stylists: stylists.filter((s) => s.id === staffId), chairs, bookings };
+  return { date, timeZone: salon.timeZone, hours: opening.hours, stylists: stylists.filter((s) => s.id === staffId), chairs, bookings };
 }
 
 /** The Monday (ISO week start) of the week holding a local date. */
@@ -52,7 +61,11 @@ export function mondayOf(date: string): string {
 export async function deskWeek(db: Db, salon: Salon, date = todayIn(salon.timeZone), stylistId?: string): Promise<WeekView> {
   const monday = DateTime.fromISO(mondayOf(date), { zone: salon.timeZone });
   const to = monday.plus({ days: 7 });
-  const stylists = (await listStylists(db, salon.id)).filter((s) => !stylistId || s.id === stylistId);
-  const bookings = await loadBookingViews(db, { salonId: salon.id, stylistId, from: monday.toJSDate(), to: to.toJSDate() }, salon.timeZone);
-  return { from: monday.toISODate()!, to: to.toISODate()!, timeZone: salon.timeZone, stylists, bookings };
+  const [all, bookings, days] = await Promise.all([
+    listStylists(db, salon.id),
+    loadBookingViews(db, { salonId: salon.id, stylistId, from: monday.toJSDate(), to: to.toJSDate() }, salon.timeZone),
+    openingOver(db, salon, monday.toISODate()!, 7),
+  ]);
+  const stylists = all.filter((s) => !stylistId || s.id === stylistId);
+  return { from: monday.toISODate()!, to: to.toISODate()!, timeZone: salon.timeZone, days, stylists, bookings };
 }

@@ -1,5 +1,6 @@
 import { DateTime } from 'luxon';
 import type { Kysely } from 'kysely';
+import type { Db } from '../../db/database';
 import type { Database } from '../../db/schema';
 import type { Salon } from '../../../shared/schemas/salon.schemas';
 import type { StepPlan } from '../../../shared/schemas/step-plan.schemas';
@@ -12,7 +13,9 @@ import { planExactlyAt } from '../planning/plan-at';
 import { writeAudit } from '../audit/audit.repository';
 import { assertSkinTestAllows } from '../skin-tests/skin-test-check.service';
 import { bookingSnapshot } from './booking-snapshot.repository';
-import { replaceSitting, setStylist, sittingStarts } from './change-booking.repository';
+import { replaceSitting, setStylist, sittingChair, sittingStarts } from './change-booking.repository';
+import { preferredChair } from './preferred-chair';
+import { listStylists } from './salon-resources.repository';
 import { replanBookingMessages } from '../messages/plan-messages.service';
 import { withdrawStaleOffers } from '../windows/offer-withdrawal.service';
 
@@ -21,49 +24,70 @@ export interface MoveRequest {
   sitting: number;
   start: Date;
   stylistId?: string;
+  /** The chair to keep when it is free then (an undo puts a sitting back in its old chair); by default the sitting's own. */
+  chairId?: string;
   /** The desk may move a booking that rests on an unread skin test; a client moving their own may not. */
   allowWaitingOnTest?: boolean;
 }
 
 const MOVABLE = ['held', 'booked'];
 
+/**
+ * A booking's sitting as it may be moved: refused (with the reason) for a booking that is not held or booked, a
+ * sitting it does not have, or another stylist for a booking of several sittings. The free times for a move and
+ * the move itself check the same way.
+ */
+export async function movableSitting(db: Db, salon: Pick<Salon, 'id'>, bookingId: string, sitting: number, wantedStylistId: string | undefined) {
+  const before = await bookingSnapshot(db, bookingId);
+  if (!before || before.row.salon_id !== salon.id) throw notFound('That booking');
+  const { row } = before;
+  if (!MOVABLE.includes(row.status)) throw new AppError('NOT_BOOKABLE', 409, `A ${row.status.replace('_', ' ')} booking cannot be moved.`);
+  const plan = row.step_plan as StepPlan;
+  if (sitting > plan.sittings.length) {
+    throw new AppError('VALIDATION_FAILED', 400, 'Some fields need attention.', { sitting: `This booking has ${plan.sittings.length} sitting(s).` });
+  }
+  const stylistId = wantedStylistId ?? row.stylist_id;
+  if (stylistId !== row.stylist_id && plan.sittings.length > 1) {
+    throw new AppError('VALIDATION_FAILED', 400, 'Some fields need attention.', { stylistId: 'All sittings stay with one stylist; move each sitting without changing the stylist.' });
+  }
+  const [service, stylists] = await Promise.all([findService(db, salon.id, row.service_id), listStylists(db, salon.id)]);
+  const stylist = stylists.find((s) => s.id === stylistId);
+  // Asked plainly here, or the engine's answer would blame the hours for a stylist who cannot do the work.
+  if (stylistId !== row.stylist_id && !stylist) throw new AppError('VALIDATION_FAILED', 400, 'Some fields need attention.', { stylistId: 'No such stylist in this salon.' });
+  if (stylistId !== row.stylist_id && service && !stylist?.skills.includes(service.skill)) {
+    throw new AppError('VALIDATION_FAILED', 400, 'Some fields need attention.', { stylistId: `${stylist?.name} does not have the "${service.skill}" skill this service needs.` });
+  }
+  // The sitting alone is planned: the other sittings stay where they are.
+  const one: StepPlan = { sittings: [{ steps: plan.sittings[sitting - 1].steps }] };
+  const skill = service?.skill ?? stylist?.skills[0] ?? '';
+  return { before, row, plan, one, stylistId, service, skill };
+}
+
 /** Moves one sitting (re-planned by the engine against the current book) and records the change. */
 export async function moveSitting(db: Kysely<Database>, salon: Salon, actorUserId: string, req: MoveRequest, now: Date): Promise<void> {
   await db.transaction().execute(async (trx) => {
-    const before = await bookingSnapshot(trx, req.bookingId);
-    if (!before || before.row.salon_id !== salon.id) throw notFound('That booking');
-    const { row } = before;
-    if (!MOVABLE.includes(row.status)) throw new AppError('NOT_BOOKABLE', 409, `A ${row.status.replace('_', ' ')} booking cannot be moved.`);
-    const plan = row.step_plan as StepPlan;
-    if (req.sitting > plan.sittings.length) {
-      throw new AppError('VALIDATION_FAILED', 400, 'Some fields need attention.', { sitting: `This booking has ${plan.sittings.length} sitting(s).` });
-    }
-    const stylistId = req.stylistId ?? row.stylist_id;
-    if (stylistId !== row.stylist_id && plan.sittings.length > 1) {
-      throw new AppError('VALIDATION_FAILED', 400, 'Some fields need attention.', { stylistId: 'All sittings stay with one stylist; move each sitting without changing the stylist.' });
-    }
+    const { before, row, plan, one, stylistId, service, skill } = await movableSitting(trx, salon, req.bookingId, req.sitting, req.stylistId);
     if (req.start < now) throw new AppError('VALIDATION_FAILED', 400, 'Some fields need attention.', { start: 'That time has already passed.' });
     await lockStylists(trx, [row.stylist_id, stylistId]);
 
     const starts = await sittingStarts(trx, req.bookingId);
-    assertDayGaps(plan, starts, req.sitting - 1, req.start, salon.timeZone);
-    const service = await findService(trx, salon.id, row.service_id);
+    const gapProblem = dayGapProblem(plan, starts, req.sitting - 1, req.start, salon.timeZone);
+    if (gapProblem) throw new AppError('CONFLICT', 409, gapProblem);
     // A later date may fall outside the skin test's validity: the whole booking is checked with the moved sitting.
     if (row.client_id) {
       const moved = starts.map((s, i) => (i === req.sitting - 1 ? req.start : s));
       await assertSkinTestAllows(trx, salon, { clientId: row.client_id, plan, serviceAsks: service?.needsSkinTest ?? false, starts: moved, atDesk: req.allowWaitingOnTest ?? false }, now);
     }
 
-    const one: StepPlan = { sittings: [{ steps: plan.sittings[req.sitting - 1].steps }] };
     const date = DateTime.fromJSDate(req.start, { zone: salon.timeZone }).toISODate()!;
     const calendars = await loadSalonCalendars(trx, salon.id, horizonFor(date, one, 1), req.bookingId);
-    const skill = service?.skill ?? calendars.stylists.find((s) => s.id === stylistId)?.skills[0] ?? '';
     const result = planExactlyAt(calendars, { skill, stylistId, plan: one, start: req.start });
     if ('reason' in result) throw new AppError('CONFLICT', 409, result.reason);
     const placed = result.plan.sittings[0];
+    const chair = await preferredChair(trx, salon.id, placed, req.chairId ?? (await sittingChair(trx, req.bookingId, req.sitting)), req.bookingId);
     try {
       if (stylistId !== row.stylist_id) await setStylist(trx, req.bookingId, stylistId);
-      await replaceSitting(trx, req.bookingId, req.sitting, placed.chair, stylistId, placed.steps.map((st, j) => ({
+      await replaceSitting(trx, req.bookingId, req.sitting, chair, stylistId, placed.steps.map((st, j) => ({
         kind: st.kind, label: one.sittings[0].steps[j].label, start: new Date(st.start), end: new Date(st.end), basinId: st.basin ?? null,
       })));
     } catch (err) {
@@ -77,15 +101,14 @@ export async function moveSitting(db: Kysely<Database>, salon: Salon, actorUserI
   });
 }
 
-/** The moved sitting must keep each sitting's days-after-previous range with its neighbours. */
-function assertDayGaps(plan: StepPlan, starts: Date[], index: number, newStart: Date, zone: string) {
+/** Why moving sitting `index` to `newStart` breaks a sitting's days-after-previous range with its neighbours, or null. */
+export function dayGapProblem(plan: StepPlan, starts: Date[], index: number, newStart: Date, zone: string): string | null {
   const day = (d: Date) => DateTime.fromJSDate(d, { zone }).startOf('day');
   const moved = starts.map((s, i) => (i === index ? newStart : s));
   for (let k = 1; k < moved.length; k++) {
     const gap = plan.sittings[k].daysAfterPrevious!;
     const days = Math.round(day(moved[k]).diff(day(moved[k - 1]), 'days').days);
-    if (days < gap.min || days > gap.max) {
-      throw new AppError('CONFLICT', 409, `Sitting ${k + 1} must be ${gap.min}–${gap.max} days after sitting ${k}; this move makes it ${days}.`);
-    }
+    if (days < gap.min || days > gap.max) return `Sitting ${k + 1} must be ${gap.min}–${gap.max} days after sitting ${k}; this move makes it ${days}.`;
   }
+  return null;
 }

@@ -42,8 +42,8 @@ export function freeTimesKey(salon: SalonRow, serviceId: string, stylistId: stri
   return `free-times|${serviceId}|${stylistId ?? 'any'}|${fromDay.toISODate()}|${earliest}`;
 }
 
-/** Every free start (on the grid) for one service, one stylist or any, over the next three weeks. */
-export async function freeTimes(db: Db, salon: SalonRow, service: ServiceSummary, stylistId: string | undefined, from: string | undefined, now: Date, except?: string): Promise<Availability> {
+/** Every free start (on the grid) for one service (or one sitting's steps), one stylist or any, over the next three weeks. */
+export async function freeTimes(db: Db, salon: SalonRow, service: Pick<ServiceSummary, 'skill' | 'stepPlan'>, stylistId: string | undefined, from: string | undefined, now: Date, except?: string): Promise<Availability> {
   const zone = salon.time_zone;
   const { fromDay, earliest } = searchStart(salon, from, now);
   // The engine walks day by day and stops at MAX_TIMES, and with one sitting each

@@ -47,8 +47,10 @@ export function registerMyBookingRoutes({ table, db }: AppDeps): void {
       const row = await findSalonBySlug(db, salon.slug);
       const now = new Date();
       const times = await freeTimes(db, row, service, hold.stylist_id, query.from, now, params.id);
-      // A deposit stays refundable only outside the cancellation window, so a client's own move never lands inside it.
-      return { ...times, times: times.times.filter((t) => !insideDepositWindow(hold.deposit_cents, new Date(t.start), now, salon.cancellationWindowHours)) };
+      // A deposit stays refundable only outside the cancellation window, so a client's own move never lands inside it;
+      // and the appointment's own time is no move at all (the search leaves the booking out, so finds it free).
+      const elsewhere = (start: Date) => start.getTime() !== hold.start.getTime();
+      return { ...times, times: times.times.filter((t) => elsewhere(new Date(t.start)) && !insideDepositWindow(hold.deposit_cents, new Date(t.start), now, salon.cancellationWindowHours)) };
     },
   );
   apiRoute(

@@ -7,7 +7,8 @@ import { formatMoney } from '../../lib/money';
 import { findSalon } from '../salon/salon.repository';
 import { findClientIdForUser } from '../clients/clients.repository';
 import { findService } from '../services/services.repository';
-import { depositOutcome } from '../bookings/cancel-booking.service';
+import { cancelOutcome, depositOutcome } from '../bookings/cancel-booking.service';
+import type { CancelTerms } from '../../../shared/schemas/online-booking.schemas';
 import { findHold } from './holds.repository';
 
 /** One of the signed-in client's own bookings; anyone else's is answered as not found. */
@@ -18,21 +19,24 @@ export async function ownBooking(db: Kysely<Database>, user: SessionUser, id: st
   return { hold, salon };
 }
 
-/** What cancelling now means for the deposit, in words the client reads before confirming. */
-export async function cancelTerms(db: Kysely<Database>, user: SessionUser, id: string, now: Date) {
+/**
+ * What cancelling now means for the deposit, in words the client reads before confirming: the same rule the cancel
+ * applies (cancel-booking.service), so a booking their skin-test record blocks reads as refunded in full.
+ */
+export async function cancelTerms(db: Kysely<Database>, user: SessionUser, id: string, now: Date): Promise<CancelTerms> {
   const { hold, salon } = await ownBooking(db, user, id);
   if (hold.status !== 'booked') throw new AppError('NOT_BOOKABLE', 409, 'Only booked appointments can be cancelled here.');
-  const outcome = depositOutcome(hold.deposit_cents, hold.start, now, salon.cancellationWindowHours, salon.cancellationKeeps);
-  const amount = formatMoney(hold.deposit_cents, salon.currency);
-  const message =
-    outcome === 'kept'
-      ? `Your appointment is less than ${salon.cancellationWindowHours} hours away, so the ${amount} deposit is kept if you cancel now.`
-      : outcome === 'refunded' && salon.cancellationKeeps === 'nothing'
-        ? `The salon refunds the ${amount} deposit whenever you cancel.`
-        : outcome === 'refunded'
-        ? `You are cancelling more than ${salon.cancellationWindowHours} hours ahead, so the ${amount} deposit is refunded.`
-        : 'There is no deposit on this appointment.';
-  return { depositOutcome: outcome, message };
+  const { outcome, why, depositCents } = await cancelOutcome(db, salon, id, now);
+  const amount = formatMoney(depositCents, salon.currency);
+  const words: Record<CancelTerms['why'], string> = {
+    no_deposit: 'There is no deposit on this appointment.',
+    not_paid: 'Your deposit has not been paid yet, so there is nothing to refund.',
+    skin_test_blocked: `Your skin-test record no longer allows this colour, so the ${amount} deposit is refunded in full.`,
+    salon_keeps_nothing: `The salon refunds the ${amount} deposit whenever you cancel.`,
+    inside_window: `Your appointment is less than ${salon.cancellationWindowHours} hours away, so the ${amount} deposit is kept if you cancel now.`,
+    outside_window: `You are cancelling more than ${salon.cancellationWindowHours} hours ahead, so the ${amount} deposit is refunded.`,
+  };
+  return { depositOutcome: outcome, why, message: words[why] };
 }
 
 /** A client may move only one-sitting appointments themselves; longer work is moved with the salon. */

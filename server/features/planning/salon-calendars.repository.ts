@@ -2,6 +2,7 @@ import { sql } from 'kysely';
 import { DateTime } from 'luxon';
 import type { Db } from '../../db/database';
 import type { Scenario } from '../../../shared/engine/engine';
+import { listSalonHours } from '../salon/salon.repository';
 import { formatIso, parseLocalDate, zoneClock } from '../../../shared/engine/local-time';
 
 export interface Horizon {
@@ -30,7 +31,7 @@ export async function loadSalonCalendars(db: Db, salonId: string, horizon: Horiz
   const to = DateTime.fromISO(horizon.to, { zone }).toJSDate();
   const range = sql`tstzrange(${from}, ${to}, '[)')`;
   const [hours, staff, staffHours, timeOff, chairs, basins, steps, closures] = await Promise.all([
-    db.selectFrom('salon_hours').select(['rrule', 'start_time', 'end_time']).where('salon_id', '=', salonId).execute(),
+    listSalonHours(db, salonId),
     db.selectFrom('staff').select(['id', 'skills', 'max_clients_at_once']).where('salon_id', '=', salonId).where('active', '=', true).orderBy('id').execute(),
     db.selectFrom('staff_hours as h').innerJoin('staff as s', 's.id', 'h.staff_id').select(['h.staff_id', 'h.rrule', 'h.start_time', 'h.end_time']).where('s.salon_id', '=', salonId).execute(),
     db
@@ -79,7 +80,7 @@ export async function loadSalonCalendars(db: Db, salonId: string, horizon: Horiz
     timeZone: zone,
     granularityMinutes: salon.granularity_minutes,
     horizon,
-    salonHours: hours.map((h) => ({ rrule: h.rrule, start: hhmm(h.start_time), end: hhmm(h.end_time) })),
+    salonHours: hours,
     stylists: staff.map((s) => ({
       id: s.id,
       skills: s.skills,

@@ -2,6 +2,7 @@ import type { Selectable } from 'kysely';
 import type { Db } from '../../db/database';
 import type { SalonsTable } from '../../db/schema';
 import type { Salon } from '../../../shared/schemas/salon.schemas';
+import type { HoursRule } from '../../../shared/engine/scenario.schemas';
 import { AppError } from '../../lib/app-error';
 import { WIDENING_FAMILIES, type WideningFamily } from '../../../shared/rules/skin-test-need';
 import type { ProcessingLimits } from '../../../shared/rules/processing-limits';
@@ -57,6 +58,12 @@ export function planningRulesColumns(rules: { processingLimits?: ProcessingLimit
     }),
     ...(lift && { lift_virgin_levels: lift.virgin, lift_coloured_levels: lift.coloured, lift_compromised_levels: lift.compromised }),
   };
+}
+
+/** The salon's lines of opening hours, as the engine reads them (RFC 5545 text, `HH:mm` times). */
+export async function listSalonHours(db: Db, salonId: string): Promise<HoursRule[]> {
+  const rows = await db.selectFrom('salon_hours').select(['rrule', 'start_time', 'end_time']).where('salon_id', '=', salonId).orderBy('start_time').orderBy('id').execute();
+  return rows.map((h) => ({ rrule: h.rrule, start: h.start_time.slice(0, 5), end: h.end_time.slice(0, 5) }));
 }
 
 /** The country phone numbers typed without a country code are read in. */

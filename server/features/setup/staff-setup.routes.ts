@@ -7,6 +7,7 @@ import type { AppDeps } from '../../app-deps';
 import { apiRoute } from '../../lib/api-route';
 import { AppError, notFound } from '../../lib/app-error';
 import { writeAudit } from '../audit/audit.repository';
+import { bookingSnapshot } from '../bookings/booking-snapshot.repository';
 import { issuePasswordToken } from '../password-reset/password-reset.service';
 import { findSalon } from '../salon/salon.repository';
 import { affectedMessage } from './affected-message';
@@ -123,8 +124,11 @@ export function registerStaffSetupRoutes({ table, db, mailer, config }: AppDeps)
         throw new AppError('CONFLICT', 409, 'That stylist is not free for every step of this booking (hours, time off, skill or other clients).', { toStaffId: 'Pick a stylist who is free for it.' });
       }
       await db.transaction().execute(async (trx) => {
+        // The booking as every booking entry records it (stylist by name), so its history reads the same way.
+        const before = await bookingSnapshot(trx, body.bookingId);
         await reassignBooking(trx, user.salonId, body.bookingId, body.toStaffId);
-        await writeAudit(trx, { salonId: user.salonId, actorUserId: user.id, entity: 'booking', entityId: body.bookingId, action: 're-assigned', before: { stylist: stylist.staffId }, after: { stylist: body.toStaffId } });
+        const after = await bookingSnapshot(trx, body.bookingId);
+        await writeAudit(trx, { salonId: user.salonId, actorUserId: user.id, entity: 'booking', entityId: body.bookingId, action: 're-assigned', before: before?.audit, after: after?.audit });
       });
       const left = await listFutureBookings(db, user.salonId, { stylistId: stylist.staffId }, now);
       return { bookings: await withFreeStylists(db, user.salonId, salon.timeZone, left, now) };

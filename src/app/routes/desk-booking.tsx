@@ -32,7 +32,8 @@ export function Component() {
   const { data: salon } = useSuspenseQuery(salonQueries.current());
   const { data: stylists } = useSuspenseQuery(catalogueQueries.stylists());
   const first = booking.sittings[0];
-  const open = booking.status === 'booked' || booking.status === 'held' || booking.status === 'checked_in';
+  // Only a held or booked booking can still be moved or cancelled (the server refuses the rest).
+  const open = booking.status === 'booked' || booking.status === 'held';
   return (
     <div className="flex flex-col gap-6">
       <Link to={paths.desk(first ? localDateOf(first.start, salon.timeZone) : undefined)} className="text-link">
@@ -42,11 +43,11 @@ export function Component() {
       <BookingSummary booking={booking} timeZone={salon.timeZone} currency={salon.currency} />
       <div className="grid gap-6 lg:grid-cols-2">
         {open && <MoveSittingForm booking={booking} timeZone={salon.timeZone} stylists={stylists.stylists} />}
-        <CancelBookingForm booking={booking} />
+        {(open || booking.status === 'cancelled') && <CancelBookingForm booking={booking} currency={salon.currency} />}
       </div>
       {booking.status === 'booked' && <ChangePlanForm key={JSON.stringify(booking.stepPlan)} booking={booking} />}
       <MixLogSection bookingId={booking.id} timeZone={salon.timeZone} clientId={booking.client.id} currency={salon.currency} />
-      <BookingHistory bookingId={booking.id} timeZone={salon.timeZone} />
+      <BookingHistory bookingId={booking.id} timeZone={salon.timeZone} currency={salon.currency} stylists={stylists.stylists} />
     </div>
   );
 }

@@ -7,24 +7,22 @@ import { WeekPage } from '../../features/week/components/week-page';
 import { queryClient } from '../../lib/query-client';
 import { dateParam } from '../date-param';
 
-/** The `?stylist=` of the week page, or the first stylist on the list. */
-function stylistParam(search: URLSearchParams, stylists: { id: string }[]): string | undefined {
+/** The `?stylist=` of the week page, or undefined for all stylists together. */
+function stylistParam(search: URLSearchParams): string | undefined {
   const asked = IdSchema.safeParse(search.get('stylist'));
-  return asked.success ? asked.data : stylists[0]?.id;
+  return asked.success ? asked.data : undefined;
 }
 
 export async function loader({ request }: LoaderFunctionArgs) {
   const search = new URL(request.url).searchParams;
-  const { stylists } = await queryClient.ensureQueryData(catalogueQueries.stylists());
-  await queryClient.ensureQueryData(weekQueries.desk(dateParam(search), stylistParam(search, stylists)));
+  await Promise.all([queryClient.ensureQueryData(catalogueQueries.stylists()), queryClient.ensureQueryData(weekQueries.desk(dateParam(search), stylistParam(search)))]);
   return null;
 }
 
 export function Component() {
   const [search] = useSearchParams();
   const { data: stylists } = useSuspenseQuery(catalogueQueries.stylists());
-  const stylistId = stylistParam(search, stylists.stylists);
+  const stylistId = stylistParam(search);
   const { data: week } = useSuspenseQuery(weekQueries.desk(dateParam(search), stylistId));
-  if (!stylistId) return <p>No stylists are set up yet.</p>;
-  return <WeekPage week={week} stylistId={stylistId} stylists={stylists.stylists} />;
+  return <WeekPage week={week} stylistId={stylistId ?? null} stylists={stylists.stylists} />;
 }

@@ -20,6 +20,7 @@ const booking = (n: number, stylist: number, chair: number, from: string, to: st
 const day: DayView = {
   date: '2027-03-02',
   timeZone: 'UTC',
+  hours: [{ start: '09:00', end: '21:00' }],
   stylists: [{ id: id(1), name: 'Stylist 1', skills: [] }, { id: id(2), name: 'Stylist 2', skills: [] }],
   chairs: [{ id: id(7), name: 'Chair 7' }, { id: id(8), name: 'Chair 8' }],
   bookings: [booking(3, 1, 7, '09:00', '11:00'), booking(4, 2, 7, '12:00', '13:00'), booking(5, 1, 8, '10:00', '10:30')],
@@ -38,5 +39,22 @@ describe('layOutDay', () => {
       ['Chair 7', ['Client 3', 'Client 4']],
       ['Chair 8', ['Client 5']],
     ]);
+  });
+
+  it('covers the opening hours even when the bookings end early, and greys what lies outside them', () => {
+    // Open 09:00–21:00, bookings 09:00–13:00: the timeline still runs to 9 PM (the closing time), not to the last booking.
+    expect(layOutDay(day)).toMatchObject({ firstHour: 9, lastHour: 21, closed: false, closedSpans: [] });
+    const late = { ...day, hours: [{ start: '10:00', end: '14:00' }, { start: '15:00', end: '19:30' }] };
+    // A 09:00 sitting before a 10:00 opening widens the timeline; the gaps and the half hour to 20:00 are closed.
+    expect(layOutDay(late)).toMatchObject({
+      firstHour: 9,
+      lastHour: 20,
+      closedSpans: [{ fromMin: 540, toMin: 600 }, { fromMin: 840, toMin: 900 }, { fromMin: 1170, toMin: 1200 }],
+    });
+  });
+
+  it('says a closed date is closed, and still shows a booking left on it', () => {
+    expect(layOutDay({ ...day, hours: [], bookings: [] })).toMatchObject({ closed: true, firstHour: 9, lastHour: 17 });
+    expect(layOutDay({ ...day, hours: [] })).toMatchObject({ closed: true, firstHour: 9, lastHour: 13, closedSpans: [{ fromMin: 540, toMin: 780 }] });
   });
 });

@@ -1,5 +1,5 @@
 import type { BookingView, DayView, SittingView } from '../../../shared/schemas/booking-view.schemas';
-import { localDateOf, minutesIntoDay } from '../../lib/time';
+import { localDateOf, localToInstant, minutesIntoDay } from '../../lib/time';
 
 /** One sitting placed on the day's timeline: minutes from midnight, and its lane when sittings overlap. */
 export type PlacedSitting = {
@@ -16,9 +16,35 @@ export type DayLayout = {
   lastHour: number;
   columns: { id: string; name: string; sittings: PlacedSitting[] }[];
   hiddenCancelled: number;
+  /** The salon does not open this date (a closed weekday or closed date). */
+  closed: boolean;
+  /** Stretches between firstHour and lastHour when the salon is closed, in minutes from midnight: drawn grey. */
+  closedSpans: { fromMin: number; toMin: number }[];
 };
 
-const DEFAULT_HOURS = { first: 9, last: 17 };
+/** What a day shows when the salon is closed and nothing is booked (an empty sheet of a working day). */
+const CLOSED_DAY_HOURS = { first: 9, last: 17 };
+
+/** The salon's opening hours of the date as minutes from local midnight (the sittings' own measure). */
+function openMinutes(day: DayView): { fromMin: number; toMin: number }[] {
+  const at = (hhmm: string) => {
+    const iso = localToInstant(day.date, hhmm, day.timeZone);
+    return iso ? minutesIntoDay(iso, day.date, day.timeZone) : 0;
+  };
+  return day.hours.map((h) => ({ fromMin: at(h.start), toMin: h.end === '24:00' ? 24 * 60 : at(h.end) }));
+}
+
+/** The parts of [first, last) hours outside the open stretches. */
+function closedBetween(open: { fromMin: number; toMin: number }[], firstHour: number, lastHour: number) {
+  const spans: { fromMin: number; toMin: number }[] = [];
+  let cursor = firstHour * 60;
+  for (const o of [...open].sort((a, b) => a.fromMin - b.fromMin)) {
+    if (o.fromMin > cursor) spans.push({ fromMin: cursor, toMin: o.fromMin });
+    cursor = Math.max(cursor, o.toMin);
+  }
+  if (cursor < lastHour * 60) spans.push({ fromMin: cursor, toMin: lastHour * 60 });
+  return spans;
+}
 
 /** Side-by-side lanes for overlapping sittings (a window fit during someone's developing time). */
 function assignLanes(sittings: PlacedSitting[]): PlacedSitting[] {
@@ -62,11 +88,17 @@ export function layOutDay(day: DayView, by: ColumnsBy = 'stylist'): DayLayout {
         lanes: 1,
       })),
   );
-  const firstHour = placed.length ? Math.floor(Math.min(...placed.map((p) => p.startMin)) / 60) : DEFAULT_HOURS.first;
-  const lastHour = placed.length ? Math.ceil(Math.max(...placed.map((p) => p.endMin)) / 60) : DEFAULT_HOURS.last;
+  // The timeline covers the salon's opening hours and every sitting of the date, whichever reaches further.
+  const open = openMinutes(day);
+  const starts = [...open.map((o) => o.fromMin), ...placed.map((p) => p.startMin)];
+  const ends = [...open.map((o) => o.toMin), ...placed.map((p) => p.endMin)];
+  const firstHour = starts.length ? Math.max(0, Math.floor(Math.min(...starts) / 60)) : CLOSED_DAY_HOURS.first;
+  const lastHour = ends.length ? Math.min(24, Math.max(Math.ceil(Math.max(...ends) / 60), firstHour + 1)) : CLOSED_DAY_HOURS.last;
   return {
-    firstHour: Math.min(firstHour, DEFAULT_HOURS.first),
-    lastHour: Math.max(lastHour, DEFAULT_HOURS.last, firstHour + 1),
+    firstHour,
+    lastHour,
+    closed: open.length === 0,
+    closedSpans: closedBetween(open, firstHour, lastHour),
     columns: (by === 'stylist' ? day.stylists : day.chairs).map(({ id, name }) => ({
       id,
       name,

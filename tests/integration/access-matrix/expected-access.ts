@@ -38,6 +38,8 @@ export const expectedAccess: Record<string, Expectation> = {
   'POST /api/bookings/{id}/move': { allow: DESK, own: true },
   'POST /api/bookings/{id}/cancel': { allow: DESK, own: true },
   'GET /api/bookings/{id}/history': { allow: DESK, own: true },
+  'GET /api/bookings/{id}/move-times': { allow: DESK, own: true },
+  'GET /api/bookings/{id}/cancel-terms': { allow: DESK, own: true },
   'GET /api/services': { allow: STAFF },
   'GET /api/stylists': { allow: STAFF },
   'GET /api/clients/{id}/skin-tests': { allow: STAFF, own: true },

@@ -3,14 +3,15 @@ import { LoadingState } from '../../../components/ui/loading-state';
 import { SectionCard } from '../../../components/ui/section-card';
 import { formatDay, formatTime } from '../../../lib/time';
 import { bookingQueries } from '../../bookings/api/booking-queries';
-import { actionLabel, describeChange, fieldLabel, valueText } from '../history-change';
+import { describeBookingChange, entryTitle } from '../history-change';
 
-type Props = { bookingId: string; timeZone: string };
+type Props = { bookingId: string; timeZone: string; currency: string; stylists: { id: string; name: string }[] };
 
-/** Every change to the booking: who, when, what, and each changed value before → after. */
-export function BookingHistory({ bookingId, timeZone }: Props) {
+/** Every change to the booking: who, when, what, and each changed value before → after, in the app's words. */
+export function BookingHistory({ bookingId, timeZone, currency, stylists }: Props) {
   const history = useQuery(bookingQueries.history(bookingId));
   const when = (iso: string) => `${formatDay(iso, timeZone)}, ${formatTime(iso, timeZone)}`;
+  const words = { timeZone, currency, stylistName: (id: string) => stylists.find((s) => s.id === id)?.name };
   return (
     <SectionCard title="History">
       {history.isPending && <LoadingState label="Loading the history…" />}
@@ -19,21 +20,28 @@ export function BookingHistory({ bookingId, timeZone }: Props) {
       {history.data && history.data.entries.length > 0 && (
         <ol className="flex flex-col gap-3">
           {[...history.data.entries].reverse().map((entry, i) => {
-            const changes = describeChange(entry.before, entry.after);
+            const lines = describeBookingChange(entry.before, entry.after, words);
             return (
               <li key={`${entry.at}-${i}`} className="rounded-lg bg-linen px-4 py-3">
                 <p>
-                  <span className="font-bold">{actionLabel(entry.action)}</span> by {entry.actor ?? 'Dwell'}
+                  <span className="font-bold">{entryTitle(entry.action, entry.after)}</span>
+                  {entry.actor && ` by ${entry.actor}`}
                   <span className="block text-sm text-ink/80 tabular">{when(entry.at)}</span>
                 </p>
-                {changes.length > 0 && (
+                {lines.length > 0 && (
                   <dl className="mt-2 grid gap-x-4 gap-y-1 text-sm sm:grid-cols-[max-content_1fr]">
-                    {changes.map((c) => (
-                      <div key={c.field} className="contents">
-                        <dt className="font-bold">{fieldLabel(c.field)}</dt>
+                    {lines.map((line) => (
+                      <div key={line.label} className="contents">
+                        <dt className="font-bold">{line.label}</dt>
                         <dd className="tabular">
-                          {valueText(c.before, when)} <span aria-hidden="true">→</span>
-                          <span className="sr-only">changed to</span> {valueText(c.after, when)}
+                          {line.before !== null && line.after !== null ? (
+                            <>
+                              {line.before} <span aria-hidden="true">→</span>
+                              <span className="sr-only">changed to</span> {line.after}
+                            </>
+                          ) : (
+                            (line.after ?? <>{line.before} <span className="text-ink/80">(removed)</span></>)
+                          )}
                         </dd>
                       </div>
                     ))}

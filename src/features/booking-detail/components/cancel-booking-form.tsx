@@ -1,52 +1,85 @@
 import { zodResolver } from '@hookform/resolvers/zod';
+import { useQuery } from '@tanstack/react-query';
+import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import type { z } from 'zod';
 import { CancelBookingSchema } from '../../../../shared/schemas/booking.schemas';
 import type { BookingView } from '../../../../shared/schemas/booking-view.schemas';
 import { Button } from '../../../components/ui/button';
-import { FieldFrame } from '../../../components/ui/field-frame';
 import { FormAlert } from '../../../components/ui/form-alert';
+import { LoadingState } from '../../../components/ui/loading-state';
 import { SectionCard } from '../../../components/ui/section-card';
+import { TextAreaField } from '../../../components/ui/text-area-field';
+import { problemText } from '../../../lib/api-error';
+import { depositOutcomeText } from '../../../lib/booking-labels';
 import { showServerErrors } from '../../../lib/form-errors';
+import { bookingQueries } from '../../bookings/api/booking-queries';
 import { useCancelBooking } from '../../bookings/api/booking-mutations';
+import { CancelTermsNotice } from '../../bookings/components/cancel-terms-notice';
 
-type Props = { booking: BookingView };
+type Props = { booking: BookingView; currency: string };
+type Reason = z.input<typeof CancelBookingSchema>;
 
-/** Cancel with a reason; the salon's policy decides whether the deposit is kept or refunded. */
-export function CancelBookingForm({ booking }: Props) {
+/**
+ * Cancel in two steps: a reason, then the deposit outcome (kept or refunded, and the rule that decides it) read
+ * before "Confirm cancellation". Nothing changes until then.
+ */
+export function CancelBookingForm({ booking, currency }: Props) {
   const cancel = useCancelBooking(booking.id);
-  const { register, handleSubmit, setError, formState } = useForm<z.input<typeof CancelBookingSchema>>({
+  const [confirming, setConfirming] = useState<Reason | null>(null);
+  const terms = useQuery({ ...bookingQueries.cancelTerms(booking.id), enabled: confirming !== null && booking.status !== 'cancelled' });
+  const { register, handleSubmit, setError, formState } = useForm<Reason>({
     resolver: zodResolver(CancelBookingSchema),
     defaultValues: { reason: '' },
   });
   const { errors } = formState;
   if (booking.status === 'cancelled') {
-    const outcome = booking.depositOutcome === 'kept' ? 'The deposit is kept.' : booking.depositOutcome === 'refunded' ? 'The deposit is refunded.' : '';
     return (
       <SectionCard title="Cancel">
-        <FormAlert tone="success">This booking is cancelled. {outcome}</FormAlert>
+        <FormAlert tone="success">
+          This booking is cancelled. {terms.data?.message ?? depositOutcomeText(booking, currency)}
+        </FormAlert>
       </SectionCard>
     );
   }
-  const submit = handleSubmit((body) => cancel.mutateAsync(body).catch((error) => showServerErrors(error, setError, ['reason'])));
+  const confirm = () =>
+    confirming &&
+    cancel.mutateAsync(confirming).catch((error) => {
+      setConfirming(null);
+      showServerErrors(error, setError, ['reason']);
+    });
   return (
     <SectionCard title="Cancel">
-      <form aria-label="Cancel booking" noValidate onSubmit={submit} className="flex flex-col gap-3">
+      <form aria-label="Cancel booking" noValidate onSubmit={handleSubmit(setConfirming)} className="flex flex-col gap-3">
         {errors.root?.server && <FormAlert>{errors.root.server.message}</FormAlert>}
-        <FieldFrame
+        <TextAreaField
           label="Reason"
-          hint="Cancelling frees every sitting. The salon's cancellation policy decides whether the deposit is kept or refunded."
+          hint="Cancelling frees every sitting. You will see what happens to the deposit before anything changes."
           error={errors.reason?.message}
-        >
-          {(control) => (
-            <textarea {...control} rows={3} className="rounded-lg border border-ink/40 bg-white px-3 py-2 aria-invalid:border-brick" {...register('reason')} />
-          )}
-        </FieldFrame>
-        <div>
-          <Button type="submit" variant="secondary" busy={cancel.isPending}>
-            Cancel booking
-          </Button>
-        </div>
+          readOnly={confirming !== null}
+          {...register('reason')}
+        />
+        {confirming === null ? (
+          <div>
+            <Button type="submit" variant="secondary">
+              Cancel booking…
+            </Button>
+          </div>
+        ) : (
+          <div className="flex flex-col gap-3">
+            {terms.isPending && <LoadingState label="Checking the cancellation terms…" />}
+            {terms.isError && <FormAlert>{problemText(terms.error)}</FormAlert>}
+            {terms.data && <CancelTermsNotice terms={terms.data} />}
+            <div className="flex flex-col gap-2 sm:flex-row">
+              <Button busy={cancel.isPending} disabled={!terms.data} onClick={confirm}>
+                {cancel.isPending ? 'Cancelling…' : 'Confirm cancellation'}
+              </Button>
+              <Button variant="secondary" onClick={() => setConfirming(null)}>
+                Keep this booking
+              </Button>
+            </div>
+          </div>
+        )}
       </form>
     </SectionCard>
   );

@@ -1,83 +1,131 @@
-import { zodResolver } from '@hookform/resolvers/zod';
-import { DateTime } from 'luxon';
-import { useForm } from 'react-hook-form';
-import { z } from 'zod';
+import { useQuery } from '@tanstack/react-query';
+import { useState } from 'react';
 import type { BookingView } from '../../../../shared/schemas/booking-view.schemas';
-import { LocalDateSchema } from '../../../../shared/schemas/common.schemas';
 import { Button } from '../../../components/ui/button';
+import { FreeTimePicker } from '../../../components/ui/free-time-picker';
+import { LoadingState } from '../../../components/ui/loading-state';
 import { Notice } from '../../../components/ui/notice';
 import { SectionCard } from '../../../components/ui/section-card';
 import { SelectField } from '../../../components/ui/select-field';
 import { TextField } from '../../../components/ui/text-field';
-import { localDateOf, localToInstant } from '../../../lib/time';
+import { problemText } from '../../../lib/api-error';
+import { sittingLabel } from '../../../lib/booking-labels';
+import { dayAfterLast, freeTimeKey, type FreeTime } from '../../../lib/free-times';
+import { formatDay, formatTime, formatTimeRange } from '../../../lib/time';
+import { bookingQueries } from '../../bookings/api/booking-queries';
 import { useMoveSitting } from '../../bookings/api/booking-mutations';
-
-const MoveFormSchema = z.object({
-  sitting: z.string(),
-  date: LocalDateSchema,
-  time: z.string().regex(/^\d{2}:\d{2}$/, 'Enter a time'),
-  stylistId: z.string(),
-});
-type MoveForm = z.infer<typeof MoveFormSchema>;
 
 type Props = { booking: BookingView; timeZone: string; stylists: { id: string; name: string }[] };
 
-/** Move one sitting to a new day and time (and, if wanted, another stylist); the server re-checks everything. */
+const when = (iso: string, zone: string) => `${formatDay(iso, zone)}, ${formatTime(iso, zone)}`;
+
+/**
+ * Move one sitting: the engine's free times for it (with the same stylist, or another for a one-sitting booking),
+ * picked and confirmed. The server checks again on the move and its reason for a refusal shows by the button.
+ */
 export function MoveSittingForm({ booking, timeZone, stylists }: Props) {
   const move = useMoveSitting();
-  // The date and time boxes start at the chosen sitting's current start.
-  const startOf = (seq: string) => {
-    const sitting = booking.sittings.find((s) => String(s.seq) === seq);
-    return sitting
-      ? { date: localDateOf(sitting.start, timeZone), time: DateTime.fromISO(sitting.start, { zone: timeZone }).toFormat('HH:mm') }
-      : { date: '', time: '' };
-  };
-  const { register, handleSubmit, setError, setValue, formState } = useForm<MoveForm>({
-    resolver: zodResolver(MoveFormSchema),
-    defaultValues: { sitting: '1', ...startOf('1'), stylistId: '' },
-  });
-  const { errors } = formState;
-  const submit = handleSubmit((values) => {
-    const start = localToInstant(values.date, values.time, timeZone);
-    if (!start) return setError('date', { message: 'That date and time do not exist' });
-    move.mutate({ bookingId: booking.id, sitting: Number(values.sitting), start, stylistId: values.stylistId || undefined });
-  });
+  const [seq, setSeq] = useState(1);
+  const [stylistId, setStylistId] = useState('');
+  const [from, setFrom] = useState('');
+  const [picked, setPicked] = useState<FreeTime | null>(null);
+  const [moved, setMoved] = useState<{ was: BookingView['sittings'][number]; now: BookingView['sittings'][number] } | null>(null);
+  const ask = { sitting: seq, stylistId: stylistId || undefined, from: from || undefined };
+  const times = useQuery(bookingQueries.moveTimes(booking.id, ask));
+  const sitting = booking.sittings.find((s) => s.seq === seq) ?? booking.sittings[0];
+  const oneSitting = booking.sittings.length === 1;
   const others = stylists.filter((s) => s.id !== booking.stylist.id);
+  // A new question starts a new pick: an old pick may not be free for the new sitting or stylist.
+  const change = (apply: () => void) => {
+    apply();
+    setPicked(null);
+    setMoved(null);
+    move.reset();
+  };
+  const confirm = () => {
+    if (!picked) return;
+    const was = sitting;
+    move.mutateAsync({ bookingId: booking.id, sitting: seq, start: picked.start, stylistId: stylistId || undefined }).then(
+      (after) => {
+        const now = after.sittings.find((s) => s.seq === seq);
+        if (now) setMoved({ was, now });
+        setPicked(null);
+      },
+      () => undefined,
+    );
+  };
+  const laterFrom = times.data ? dayAfterLast(times.data.times, timeZone) : undefined;
+
   return (
     <SectionCard title="Move a sitting">
-      <form aria-label="Move a sitting" noValidate onSubmit={submit} className="flex flex-col gap-4">
-        {move.isError && (
-          <Notice tone="danger" title="This move is not possible">
-            {move.error.message}
-          </Notice>
-        )}
-        {move.isSuccess && <Notice tone="info" title="Moved. The calendar and the history show the new time." />}
+      <div className="flex flex-col gap-4">
         <div className="grid gap-4 sm:grid-cols-2">
-          <SelectField
-            label="Sitting"
-            options={booking.sittings.map((s) => ({ value: String(s.seq), label: s.of > 1 ? `Sitting ${s.seq} of ${s.of}` : 'The sitting' }))}
-            {...register('sitting', {
-              onChange: (event) => {
-                const { date, time } = startOf(event.target.value);
-                setValue('date', date);
-                setValue('time', time);
-              },
-            })}
+          {!oneSitting && (
+            <SelectField
+              label="Sitting"
+              value={String(seq)}
+              options={booking.sittings.map((s) => ({ value: String(s.seq), label: sittingLabel(s.seq, s.of) ?? 'The sitting' }))}
+              onChange={(event) => change(() => setSeq(Number(event.target.value)))}
+            />
+          )}
+          {oneSitting && (
+            <SelectField
+              label="Stylist"
+              value={stylistId}
+              options={[{ value: '', label: `Same stylist (${booking.stylist.name})` }, ...others.map((s) => ({ value: s.id, label: s.name }))]}
+              onChange={(event) => change(() => setStylistId(event.target.value))}
+            />
+          )}
+          <TextField
+            label="Show times from"
+            type="date"
+            value={from}
+            hint="Leave empty for the first days the sitting may move to"
+            onChange={(event) => change(() => setFrom(event.target.value))}
           />
-          <SelectField
-            label="Stylist"
-            options={[{ value: '', label: `Same stylist (${booking.stylist.name})` }, ...others.map((s) => ({ value: s.id, label: s.name }))]}
-            {...register('stylistId')}
-          />
-          <TextField label="New date" type="date" error={errors.date?.message} {...register('date')} />
-          <TextField label="New start time" type="time" step={300} hint="Salon time" error={errors.time?.message} {...register('time')} />
         </div>
-        <div>
-          <Button type="submit" busy={move.isPending}>
-            Move
+        <p className="text-sm">
+          Now: {formatDay(sitting.start, timeZone)}, <span className="tabular">{formatTimeRange(sitting.start, sitting.end, timeZone)}</span> · {sitting.chairName}
+          {!oneSitting && ' · all sittings stay with one stylist'}
+        </p>
+        {times.isPending && <LoadingState label="Finding free times…" />}
+        {times.isError && <Notice tone="danger" title="Free times could not be found">{problemText(times.error)}</Notice>}
+        {times.data && times.data.times.length === 0 && (
+          <p>No free times in these three weeks for this sitting{from ? ' from that date' : ''}. Try a later date or another stylist.</p>
+        )}
+        {times.data && times.data.times.length > 0 && (
+          <FreeTimePicker
+            key={`${seq}|${stylistId}|${from}`}
+            times={times.data.times}
+            timeZone={timeZone}
+            selectedKey={picked ? freeTimeKey(picked) : null}
+            onSelect={(time) => {
+              setPicked(time);
+              setMoved(null);
+              move.reset();
+            }}
+            onLater={laterFrom ? () => change(() => setFrom(laterFrom)) : undefined}
+            showStylist={false}
+          />
+        )}
+        <div className="flex flex-col gap-3" aria-live="polite">
+          <Button className="self-start" busy={move.isPending} disabled={!picked} onClick={confirm}>
+            {picked ? `Move to ${when(picked.start, timeZone)}` : 'Pick a free time to move to'}
           </Button>
+          {move.isError && (
+            <Notice tone="danger" title="This move is not possible">
+              {problemText(move.error)}
+            </Notice>
+          )}
+          {moved && (
+            <Notice tone="info" title={`Moved to ${when(moved.now.start, timeZone)}.`}>
+              {moved.now.chairId === moved.was.chairId
+                ? `Still in ${moved.now.chairName}. The calendar and the history show the new time.`
+                : `${moved.was.chairName} is taken then, so the sitting is now in ${moved.now.chairName}.`}
+            </Notice>
+          )}
         </div>
-      </form>
+      </div>
     </SectionCard>
   );
 }

@@ -12,7 +12,7 @@ import { FormAlert } from '../../../components/ui/form-alert';
 import { Notice } from '../../../components/ui/notice';
 import { PageHeader } from '../../../components/ui/page-header';
 import { paths } from '../../../config/paths';
-import { isApiError } from '../../../lib/api-error';
+import { isApiError, problemText } from '../../../lib/api-error';
 import { useIdempotencyKeys } from '../../../lib/use-idempotency-keys';
 import { useCreateBooking, useFindTimes } from '../../bookings/api/booking-mutations';
 import { salonQueries } from '../../salon/api/salon-queries';
@@ -109,8 +109,8 @@ export function BookServicePage({ services, stylists, today, quote }: Props) {
           primary={!findTimes.data}
         />
       </FormProvider>
-      {findTimes.isError && <FormAlert>{findTimes.error.message}</FormAlert>}
-      {create.isError && <FormAlert>{create.error.message}</FormAlert>}
+      {findTimes.isError && <FormAlert>{problemText(findTimes.error)}</FormAlert>}
+      {create.isError && <FormAlert>{problemText(create.error)}</FormAlert>}
       {findTimes.data && (
         <SkinTestNotice
           check={findTimes.data.skinTest}

@@ -2,7 +2,8 @@ import { queryOptions } from '@tanstack/react-query';
 import { apiPaths } from '../../../../shared/api/api-paths';
 import { BookingHistorySchema } from '../../../../shared/schemas/booking.schemas';
 import { BookingViewSchema, MyBookingsSchema } from '../../../../shared/schemas/booking-view.schemas';
-import { apiGet } from '../../../lib/api-client';
+import { AvailabilitySchema, CancelTermsSchema } from '../../../../shared/schemas/online-booking.schemas';
+import { apiGet, withQuery } from '../../../lib/api-client';
 
 export const bookingQueries = {
   all: () => ['bookings'] as const,
@@ -22,5 +23,19 @@ export const bookingQueries = {
     queryOptions({
       queryKey: [...bookingQueries.details(), id, 'history'] as const,
       queryFn: () => apiGet(apiPaths.bookingHistory(id), BookingHistorySchema),
+    }),
+  /** Free times to move one sitting to (under the booking's key: a move refreshes them). */
+  moveTimes: (id: string, ask: { sitting: number; stylistId?: string; from?: string }) =>
+    queryOptions({
+      queryKey: [...bookingQueries.details(), id, 'move-times', ask.sitting, ask.stylistId ?? 'same', ask.from ?? 'first'] as const,
+      queryFn: () => apiGet(withQuery(apiPaths.moveTimes(id), { sitting: String(ask.sitting), stylistId: ask.stylistId, from: ask.from }), AvailabilitySchema),
+      staleTime: 15_000,
+    }),
+  // Terms depend on the clock (the cancellation window), so they are read fresh each time they are shown.
+  cancelTerms: (id: string) =>
+    queryOptions({
+      queryKey: [...bookingQueries.details(), id, 'cancel-terms'] as const,
+      queryFn: () => apiGet(apiPaths.cancelTerms(id), CancelTermsSchema),
+      staleTime: 0,
     }),
 };

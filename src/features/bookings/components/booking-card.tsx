@@ -37,6 +37,7 @@ export function BookingCard({ booking, timeZone, currency, headingLevel: Heading
       <p className="mt-3 text-sm tabular">
         Price {formatMoney(booking.priceCents, currency)}
         {booking.depositCents > 0 && ` · deposit ${formatMoney(booking.depositCents, currency)}`}
+        {booking.depositCents > 0 && booking.depositOutcome && (booking.depositOutcome === 'kept' ? ', kept by the salon' : ', refunded')}
       </p>
       {children}
     </article>

@@ -3,9 +3,10 @@ import { useState } from 'react';
 import { Button } from '../../../components/ui/button';
 import { FormAlert } from '../../../components/ui/form-alert';
 import { LoadingState } from '../../../components/ui/loading-state';
-import { Notice } from '../../../components/ui/notice';
 import { TextField } from '../../../components/ui/text-field';
+import { problemText } from '../../../lib/api-error';
 import { myBookingQueries, useCancelMyBooking } from '../api/my-booking-queries';
+import { CancelTermsNotice } from './cancel-terms-notice';
 
 type Props = { bookingId: string; onClose: () => void; onCancelled: () => void };
 
@@ -18,14 +19,12 @@ export function CancelPanel({ bookingId, onClose, onCancelled }: Props) {
   // onSuccess would run, so the outcome is taken from the promise, which always settles.
   const confirm = () => cancel.mutateAsync(reason.trim() ? { reason: reason.trim() } : {}).then(onCancelled, () => undefined);
   if (terms.isPending) return <LoadingState label="Checking the cancellation terms…" />;
-  if (terms.isError) return <FormAlert>{terms.error.message}</FormAlert>;
+  if (terms.isError) return <FormAlert>{problemText(terms.error)}</FormAlert>;
   return (
     <div className="flex flex-col gap-3">
-      <Notice tone={terms.data.depositOutcome === 'kept' ? 'caution' : 'info'} title="If you cancel now">
-        <p>{terms.data.message}</p>
-      </Notice>
+      <CancelTermsNotice terms={terms.data} />
       <TextField label="Reason (optional)" value={reason} maxLength={500} onChange={(event) => setReason(event.target.value)} />
-      {cancel.isError && <FormAlert>{cancel.error.message}</FormAlert>}
+      {cancel.isError && <FormAlert>{problemText(cancel.error)}</FormAlert>}
       <div className="flex flex-col gap-2 sm:flex-row">
         <Button busy={cancel.isPending} onClick={confirm}>
           {cancel.isPending ? 'Cancelling…' : 'Confirm cancellation'}

@@ -6,6 +6,7 @@ import { FormAlert } from '../../../components/ui/form-alert';
 import { FreeTimePicker } from '../../../components/ui/free-time-picker';
 import { LoadingState } from '../../../components/ui/loading-state';
 import { TimeZoneNote } from '../../../components/ui/time-zone-note';
+import { problemText } from '../../../lib/api-error';
 import { dayAfterLast, freeTimeKey, freeTimeLabel, type FreeTime } from '../../../lib/free-times';
 import { myBookingQueries, useMoveMyBooking } from '../api/my-booking-queries';
 
@@ -18,7 +19,7 @@ export function MovePanel({ bookingId, onClose, onMoved }: Props) {
   const times = useQuery(myBookingQueries.moveTimes(bookingId, from));
   const move = useMoveMyBooking(bookingId);
   if (times.isPending) return <LoadingState label="Finding free times…" />;
-  if (times.isError) return <FormAlert>{times.error.message}</FormAlert>;
+  if (times.isError) return <FormAlert>{problemText(times.error)}</FormAlert>;
   const { timeZone } = times.data;
   const laterFrom = dayAfterLast(times.data.times, timeZone);
   return (
@@ -33,7 +34,7 @@ export function MovePanel({ bookingId, onClose, onMoved }: Props) {
         onLater={laterFrom ? () => setFrom(laterFrom) : undefined}
         showStylist={false}
       />
-      {move.isError && <FormAlert>{move.error.message}</FormAlert>}
+      {move.isError && <FormAlert>{problemText(move.error)}</FormAlert>}
       <ActionBar>
         <p aria-live="polite" className="text-sm">
           {picked ? (

@@ -15,13 +15,15 @@ type Props = {
   roomy: boolean;
   /** Hands-free windows of this column's stylist (none in the chair view). */
   windows: HandsFreeWindowView[];
+  /** When the salon is closed between firstHour and lastHour (minutes from midnight): drawn grey behind the sittings. */
+  closedSpans: { fromMin: number; toMin: number }[];
   bookingHref?: (bookingId: string) => string;
 };
 
 const HOUR_PX = 60 * PX_PER_MIN;
 
 /** One stylist's (or chair's) day; faint hour lines behind the sittings, hands-free windows in a gutter. */
-export function StylistColumn({ name, sittings, firstHour, lastHour, date, timeZone, roomy, windows, bookingHref }: Props) {
+export function StylistColumn({ name, sittings, firstHour, lastHour, date, timeZone, roomy, windows, closedSpans, bookingHref }: Props) {
   const headingId = useId();
   return (
     <section aria-labelledby={headingId} className={`${roomy ? 'flex-1' : 'w-60 shrink-0 sm:flex-1'} min-w-60 border-r border-ink/10 last:border-r-0`}>
@@ -35,6 +37,14 @@ export function StylistColumn({ name, sittings, firstHour, lastHour, date, timeZ
           backgroundImage: `repeating-linear-gradient(to bottom, rgb(30 42 54 / 0.1) 0 1px, transparent 1px ${HOUR_PX}px)`,
         }}
       >
+        {closedSpans.map((span) => (
+          <div
+            key={span.fromMin}
+            aria-hidden="true"
+            className="salon-closed absolute inset-x-0"
+            style={{ top: (span.fromMin - firstHour * 60) * PX_PER_MIN, height: (span.toMin - span.fromMin) * PX_PER_MIN }}
+          />
+        ))}
         <div className="absolute inset-y-0 left-0" style={{ right: windows.length ? '4.5rem' : 0 }}>
           {sittings.map((placed) => (
             <SittingBlock

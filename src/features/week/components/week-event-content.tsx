@@ -5,10 +5,11 @@ import { sittingLabel } from '../../../lib/booking-labels';
 import { minutesBetween } from '../../../lib/time';
 import type { WeekEventData } from '../week-events';
 
-type Props = { data: WeekEventData; timeText: string };
+/** `showStylist`: in the week of all stylists, each sitting says whose it is. */
+type Props = { data: WeekEventData; timeText: string; showStylist: boolean };
 
 /** A sitting in the week calendar: its steps as a patterned strip, and who, what, which sitting. */
-export function WeekEventContent({ data, timeText }: Props) {
+export function WeekEventContent({ data, timeText, showStylist }: Props) {
   const total = Math.max(1, data.steps.reduce((t, s) => t + minutesBetween(s.start, s.end), 0));
   const ofLabel = sittingLabel(data.seq, data.of);
   return (
@@ -20,10 +21,12 @@ export function WeekEventContent({ data, timeText }: Props) {
       </div>
       <div className="min-w-0 flex-1 px-1 text-xs leading-snug">
         <p className="truncate font-bold">
-          <Link to={paths.deskBooking(data.bookingId)} className="text-link">
+          {/* At least 24 px tall: events sit close together, and a smaller link is hard to hit (WCAG 2.2 target size). */}
+          <Link to={paths.deskBooking(data.bookingId)} className="text-link inline-block min-h-6 max-w-full truncate align-top leading-6">
             {data.clientName}
           </Link>
         </p>
+        {showStylist && <p className="truncate font-bold">{data.stylistName}</p>}
         <p className="truncate">{data.serviceName}</p>
         {ofLabel && <p className="font-bold">{ofLabel}</p>}
         <p className="tabular">{timeText}</p>

@@ -1,3 +1,4 @@
+import { ClosedKey } from '../../../components/ui/closed-key';
 import { lazy, Suspense, useState } from 'react';
 import { Link, useNavigate } from 'react-router-dom';
 import type { WeekView } from '../../../../shared/schemas/booking-view.schemas';
@@ -9,24 +10,47 @@ import { SelectField } from '../../../components/ui/select-field';
 import { StepKindLegend } from '../../../components/ui/step-kind-legend';
 import { TimeZoneNote } from '../../../components/ui/time-zone-note';
 import { paths } from '../../../config/paths';
+import { problemText } from '../../../lib/api-error';
 import { formatLocalDate, shiftLocalDate } from '../../../lib/time';
 import { useMoveSitting } from '../../bookings/api/booking-mutations';
+import type { WeekDrop } from './week-calendar';
+import { MovedToast, type LastMove } from './moved-toast';
 
 // The calendar library is large: load it only on this page, after the frame.
 const WeekCalendar = lazy(() => import('./week-calendar'));
 
-type Props = { week: WeekView; stylistId: string; stylists: { id: string; name: string }[] };
+/** `stylistId`: one stylist's week, or null for all stylists together. */
+type Props = { week: WeekView; stylistId: string | null; stylists: { id: string; name: string }[] };
 
-/** One stylist's week: pick the stylist and week, drag a sitting to move it. */
+/** The week of one stylist or all: pick them and the week, drag a sitting to move it, undo a move. */
 export function WeekPage({ week, stylistId, stylists }: Props) {
   const navigate = useNavigate();
   const move = useMoveSitting();
-  const [moved, setMoved] = useState<string | null>(null);
-  const stylistName = stylists.find((s) => s.id === stylistId)?.name ?? '';
+  const undo = useMoveSitting();
+  const [last, setLast] = useState<LastMove | null>(null);
+  const [undone, setUndone] = useState<{ ok: true } | { ok: false; reason: string } | null>(null);
+  const stylistName = stylists.find((s) => s.id === stylistId)?.name;
+
+  const onMove = async ({ bookingId, sitting, start, was }: WeekDrop) => {
+    setLast(null);
+    setUndone(null);
+    const booking = await move.mutateAsync({ bookingId, sitting, start });
+    setLast({ was, booking });
+  };
+  // Back to the old start, the old chair named so it is taken again when still free.
+  const onUndo = () => {
+    if (!last) return;
+    const { was } = last;
+    undo.mutateAsync({ bookingId: was.bookingId, sitting: was.seq, start: was.start, chairId: was.chairId }).then(
+      () => setUndone({ ok: true }),
+      (error) => setUndone({ ok: false, reason: problemText(error) }),
+    );
+  };
+
   return (
     <div className="flex flex-col gap-5">
       <PageHeader
-        title={`Week of ${stylistName}`}
+        title={stylistName ? `Week of ${stylistName}` : 'Week of all stylists'}
         subtitle={
           <>
             <p className="text-lg font-bold text-ink">
@@ -39,37 +63,48 @@ export function WeekPage({ week, stylistId, stylists }: Props) {
       <div className="flex flex-wrap items-end gap-3">
         <SelectField
           label="Stylist"
-          value={stylistId}
-          options={stylists.map((s) => ({ value: s.id, label: s.name }))}
-          onChange={(event) => navigate(paths.deskWeek(week.from, event.target.value))}
+          value={stylistId ?? ''}
+          options={[{ value: '', label: 'All stylists' }, ...stylists.map((s) => ({ value: s.id, label: s.name }))]}
+          onChange={(event) => navigate(paths.deskWeek(week.from, event.target.value || undefined))}
         />
         <nav aria-label="Choose a week" className="flex flex-wrap gap-2">
-          <Link to={paths.deskWeek(shiftLocalDate(week.from, -7), stylistId)} className={buttonClasses('secondary')}>
+          <Link to={paths.deskWeek(shiftLocalDate(week.from, -7), stylistId ?? undefined)} className={buttonClasses('secondary')}>
             <span aria-hidden="true">←</span> Previous week
           </Link>
-          <Link to={paths.deskWeek(shiftLocalDate(week.from, 7), stylistId)} className={buttonClasses('secondary')}>
+          <Link to={paths.deskWeek(shiftLocalDate(week.from, 7), stylistId ?? undefined)} className={buttonClasses('secondary')}>
             Next week <span aria-hidden="true">→</span>
           </Link>
         </nav>
       </div>
-      <StepKindLegend />
-      <p className="text-sm text-ink/80">Drag a sitting to a new time to move it; Dwell checks the move before keeping it. Or open the booking and use Move.</p>
+      <div className="flex flex-wrap items-center gap-x-6 gap-y-2">
+        <StepKindLegend />
+        <ClosedKey />
+      </div>
+      <p className="text-sm text-ink/80">
+        Drag a sitting to a new time to move it; Dwell checks the move before keeping it, keeps its chair when that chair is free, and offers Undo. Or open the
+        booking and use Move a sitting to choose from the free times.
+      </p>
       {move.isError && (
         <Notice tone="danger" title="The sitting was not moved">
-          {move.error.message}
+          {problemText(move.error)}
         </Notice>
       )}
-      {moved && !move.isError && <Notice tone="info" title={moved} />}
       <Suspense fallback={<LoadingState label="Loading the week…" />}>
-        <WeekCalendar
-          week={week}
-          stylistId={stylistId}
-          onMove={(body) => {
-            setMoved(null);
-            return move.mutateAsync(body).then((b) => setMoved(`Moved ${b.client.name}'s sitting ${body.sitting}.`));
+        <WeekCalendar week={week} stylistId={stylistId} onMove={onMove} />
+      </Suspense>
+      {last && (
+        <MovedToast
+          move={last}
+          timeZone={week.timeZone}
+          undone={undone}
+          undoing={undo.isPending}
+          onUndo={onUndo}
+          onClose={() => {
+            setLast(null);
+            setUndone(null);
           }}
         />
-      </Suspense>
+      )}
     </div>
   );
 }
