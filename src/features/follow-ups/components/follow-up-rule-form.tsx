@@ -37,8 +37,8 @@ export function FollowUpRuleForm({ rule, services, timeZone, onDone }: Props) {
       <TextField label="Title" placeholder="Toner refresh" error={errors.title?.message} {...register('title')} />
       <TextAreaField label="Message" hint="Sent as written, with the salon's name; only to clients who said yes to suggestions." error={errors.text?.message} {...register('text')} />
       <TextField
-        label="When (RRULE)"
-        hint="Counted from the end of the last sitting, e.g. FREQ=WEEKLY;INTERVAL=6;COUNT=1 is once, six weeks later."
+        label="When it is sent"
+        hint="Counted from the end of the last sitting, written as a calendar rule (iCalendar RRULE, RFC 5545): FREQ=WEEKLY;INTERVAL=6;COUNT=1 is once, six weeks later."
         error={errors.rrule?.message}
         {...register('rrule')}
       />

@@ -53,13 +53,13 @@ export function SalonSettingsForm({ settings }: { settings: SalonSettings }) {
             <TextField label="Name" error={err('name')} {...form.register('name')} />
             <TextField label="Phone" error={err('phone')} {...form.register('phone')} />
             <TextField label="Address" className="md:col-span-2" error={err('address')} {...form.register('address')} />
-            <TextField label="Time zone" hint="An IANA name, e.g. America/Denver" list="setup-time-zones" error={err('timeZone')} {...form.register('timeZone')} />
+            <TextField label="Time zone" hint="Pick the salon's city, e.g. America/Denver (names from the IANA time-zone database)" list="setup-time-zones" error={err('timeZone')} {...form.register('timeZone')} />
             <datalist id="setup-time-zones">
               {zones.map((z) => (
                 <option key={z} value={z} />
               ))}
             </datalist>
-            <TextField label="Currency" hint="ISO 4217 code, e.g. USD" className="w-40" error={err('currency')} {...form.register('currency', { setValueAs: (v: string) => v.toUpperCase() })} />
+            <TextField label="Currency" hint="Three letters, e.g. USD or EUR (ISO 4217)" className="w-40" error={err('currency')} {...form.register('currency', { setValueAs: (v: string) => v.toUpperCase() })} />
             <SelectField label="Country" hint="Phone numbers typed without a country code are read as this country's" options={countries} error={err('country')} {...form.register('country')} />
           </div>
         </SectionCard>

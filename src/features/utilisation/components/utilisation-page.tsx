@@ -57,7 +57,7 @@ export function OwnerUtilisationView() {
       ) : (
         <span className="text-ink/80">The engine measured this period in {report.period.scenarios} scenarios of at most 120 days; pick a shorter period to download one.</span>
       )}
-      <span className="ml-2 text-sm text-ink/80">Check the occupancy figures with `npm run plan -- occupancy file.json`.</span>
+      <span className="ml-2 text-sm text-ink/80">The file lets a developer re-check these occupancy figures with Dwell's planning engine on its own.</span>
     </p>
   );
   return (
