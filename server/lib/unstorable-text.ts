@@ -1,10 +1,9 @@
+import { UNSTORABLE, UNSTORABLE_MESSAGE as MESSAGE } from '../../shared/schemas/common.schemas';
 import { AppError } from './app-error';
 
 // PostgreSQL text cannot hold a NUL character, and a lone UTF-16 surrogate (half of an emoji) is not valid UTF-8:
-// either makes the database answer an error. Every route's input is checked here once, before any schema or query.
-// eslint-disable-next-line no-control-regex -- NUL is the character this looks for
-const UNSTORABLE = /\u0000|[\ud800-\udbff](?![\udc00-\udfff])|(?<![\ud800-\udbff])[\udc00-\udfff]/;
-const MESSAGE = 'Contains a character that cannot be stored (a NUL byte or half of an emoji)';
+// either makes the database answer an error. Every route's input is checked here once, before any schema or query,
+// with the same pattern the shared text schema uses.
 
 /** The paths of the strings (or object keys) that cannot be stored (at most `limit` of them). */
 export function unstorablePaths(value: unknown, path: string[] = [], depth = 0, found: string[] = [], limit = 20): string[] {

@@ -17,11 +17,12 @@ export function isRealDateTime(s: string): boolean {
 // A NUL byte (PostgreSQL text cannot hold one) or half of a surrogate pair (not Unicode; it would be stored
 // as a replacement character, not as typed).
 // eslint-disable-next-line no-control-regex -- NUL is the character this looks for
-const UNSTORABLE = /\u0000|[\ud800-\udbff](?![\udc00-\udfff])|(?<![\ud800-\udbff])[\udc00-\udfff]/;
+export const UNSTORABLE = /\u0000|[\ud800-\udbff](?![\udc00-\udfff])|(?<![\ud800-\udbff])[\udc00-\udfff]/;
+export const UNSTORABLE_MESSAGE = 'Contains a character that cannot be stored (a NUL byte or half of an emoji)';
 
 /** Free text a person types, at most `max` characters, refused (naming the field) when it cannot be stored as typed. */
 export const typedText = (max: number) =>
-  z.string().max(max, `At most ${max} characters`).refine((s) => !UNSTORABLE.test(s), 'Contains a character that cannot be stored (a NUL byte or half of an emoji)');
+  z.string().max(max, `At most ${max} characters`).refine((s) => !UNSTORABLE.test(s), UNSTORABLE_MESSAGE);
 
 /** A local calendar date, `YYYY-MM-DD`. */
 export const LocalDateSchema = z

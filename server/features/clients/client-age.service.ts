@@ -4,6 +4,7 @@ import type { ClientAge, RecordGuardianConsentSchema } from '../../../shared/sch
 import type { Db } from '../../db/database';
 import { invalidField, notFound } from '../../lib/app-error';
 import { writeAudit } from '../audit/audit.repository';
+import { userName } from '../session/users.repository';
 import { findClientIdForUser } from './clients.repository';
 import { insertGuardianConsent, readClientAge, setDateOfBirth } from './client-age.repository';
 
@@ -34,8 +35,7 @@ export async function ownClientId(db: Db, user: SessionUser): Promise<string> {
 export async function recordGuardianConsent(db: Db, user: SessionUser, clientId: string, body: z.infer<typeof RecordGuardianConsentSchema>): Promise<ClientAge> {
   return db.transaction().execute(async (trx) => {
     await clientAge(trx, user.salonId, clientId);
-    const recorder = await trx.selectFrom('users').select('name').where('id', '=', user.id).executeTakeFirstOrThrow();
-    const id = await insertGuardianConsent(trx, { salonId: user.salonId, clientId, ...body, recordedBy: user.id, recordedByName: recorder.name });
+    const id = await insertGuardianConsent(trx, { salonId: user.salonId, clientId, ...body, recordedBy: user.id, recordedByName: await userName(trx, user.id) });
     await writeAudit(trx, { salonId: user.salonId, actorUserId: user.id, entity: 'client', entityId: clientId, action: 'guardian consent recorded', after: { id, ...body } });
     return clientAge(trx, user.salonId, clientId);
   });

@@ -58,3 +58,8 @@ export async function setPassword(db: Db, userId: string, passwordHash: string):
     .where('id', '=', userId)
     .execute();
 }
+
+/** A user's name as it is now, for records that keep who wrote them after the account goes. */
+export async function userName(db: Db, id: string): Promise<string> {
+  return (await db.selectFrom('users').select('name').where('id', '=', id).executeTakeFirstOrThrow()).name;
+}

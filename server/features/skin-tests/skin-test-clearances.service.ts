@@ -3,6 +3,7 @@ import type { SkinTestClearance } from '../../../shared/schemas/skin-test.schema
 import type { Db } from '../../db/database';
 import { AppError, notFound } from '../../lib/app-error';
 import { writeAudit } from '../audit/audit.repository';
+import { userName } from '../session/users.repository';
 import { findClient } from '../clients/clients.repository';
 import { replanAfterSkinTestChange } from '../messages/plan-messages.service';
 import { insertClearance, listClearances, skinTestRecords } from './skin-tests.repository';
@@ -21,8 +22,7 @@ export async function recordClearance(db: Db, user: SessionUser & { name?: strin
     throw new AppError('CONFLICT', 409, 'This client has no positive skin test to clear.');
   }
   return db.transaction().execute(async (trx) => {
-    const recorder = await trx.selectFrom('users').select('name').where('id', '=', user.id).executeTakeFirstOrThrow();
-    const id = await insertClearance(trx, { salonId: user.salonId, clientId, recordedBy: user.id, recordedByName: recorder.name, reason });
+    const id = await insertClearance(trx, { salonId: user.salonId, clientId, recordedBy: user.id, recordedByName: await userName(trx, user.id), reason });
     const view = toClearanceView((await listClearances(trx, user.salonId, clientId)).find((c) => c.id === id)!);
     await writeAudit(trx, { salonId: user.salonId, actorUserId: user.id, entity: 'skin_test_clearance', entityId: id, action: 'recorded', after: { ...view, clientId } });
     await replanAfterSkinTestChange(trx, clientId, now);
