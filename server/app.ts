@@ -60,7 +60,8 @@ export function createApp(deps: Omit<AppDeps, 'table' | 'storage' | 'readCache'>
   app.use(cookieParser());
   installSessions(app, deps);
 
-  const table: RouteTable = { router: Router(), registry: new OpenAPIRegistry(), records: [] };
+  // Answers are checked against their contracts everywhere but production, where a slip costs a parse per answer.
+  const table: RouteTable = { router: Router(), registry: new OpenAPIRegistry(), records: [], checkResponses: deps.config.mode !== 'production' };
   installCsrf(app, deps.config, table);
   const full: AppDeps = { ...deps, storage: deps.storage ?? createDiskStorage(deps.config.uploadsDir), readCache: createReadCache(), table };
   for (const register of [

@@ -1,10 +1,8 @@
 import type { SessionUser } from '../../shared/schemas/auth.schemas';
 import type { Db } from '../db/database';
 import { notFound } from '../lib/app-error';
-import { STAFF } from './require-access';
 
-/** Routes about one client's own records: the client themselves and the salon's whole team. */
-export const CLIENT_OR_STAFF = ['client', ...STAFF] as const;
+export { CLIENT_OR_STAFF } from '../../shared/api/endpoint';
 
 /**
  * The client record a user may see: their own (role client) or any of their salon's (staff). Anything

@@ -1,10 +1,7 @@
 import type { RequestHandler } from 'express';
-import type { Role } from '../../shared/schemas/common.schemas';
+import type { Access } from '../../shared/api/endpoint';
 import type { SessionUser } from '../../shared/schemas/auth.schemas';
 import { AppError } from '../lib/app-error';
-
-/** Who may call a route: anyone, any signed-in user, or the listed roles. */
-export type Access = 'public' | 'signed_in' | readonly Role[];
 
 /** The one role check every route goes through (declared on the route, never an if inside a handler). */
 export function requireAccess(access: Access): RequestHandler {
@@ -19,5 +16,4 @@ export function requireAccess(access: Access): RequestHandler {
   };
 }
 
-export const STAFF: readonly Role[] = ['front_desk', 'stylist', 'owner'];
-export const DESK: readonly Role[] = ['front_desk', 'owner'];
+export { DESK, STAFF, type Access } from '../../shared/api/endpoint';

@@ -1,67 +1,47 @@
+import type { ZodType } from 'zod';
 import type { Request, Response, Router } from 'express';
 import type { OpenAPIRegistry } from '@asteasolutions/zod-to-openapi';
-import type { z, ZodType } from 'zod';
-import type { Role } from '../../shared/schemas/common.schemas';
+import { describeAccess, type Access, type Endpoint, type Method, type Parsed, openApiPath } from '../../shared/api/endpoint';
 import type { SessionUser } from '../../shared/schemas/auth.schemas';
 import { ApiErrorBodySchema } from '../../shared/api/error.schemas';
-import { requireAccess, type Access } from '../auth/require-access';
+import { requireAccess } from '../auth/require-access';
 import { JsonText } from './json-text';
 import { assertStorable } from './unstorable-text';
 
-type Method = 'get' | 'post' | 'put' | 'patch' | 'delete';
-
-export interface RouteSpec<B extends ZodType, Q extends ZodType, P extends ZodType> {
-  method: Method;
-  /** Express path, e.g. `/api/clients/:id`. */
-  path: string;
-  access: Access;
-  summary: string;
-  body?: B;
-  /** How the body arrives; `form` for providers' webhooks (application/x-www-form-urlencoded). JSON by default. */
-  bodyType?: 'json' | 'form';
-  query?: Q;
-  params?: P;
-  response?: ZodType;
-  /** Status on success; 204 answers no body. */
-  status?: 200 | 201 | 202 | 204;
-}
-
-export interface RouteContext<B, Q, P> {
-  body: B;
-  query: Q;
-  params: P;
+export interface RouteContext<E extends Endpoint> {
+  body: Parsed<E['body']>;
+  query: Parsed<E['query']>;
+  params: Parsed<E['params']>;
   /** The signed-in user; never null on routes whose access is not `public`. */
   user: SessionUser;
   req: Request;
   res: Response;
 }
 
-/** Every route the API serves, for the OpenAPI document and the access-matrix tests. */
+/** Every route the API serves, for the OpenAPI document, the access-matrix tests and the contract check. */
 export interface RouteRecord {
   method: Method;
   path: string;
   access: Access;
+  endpoint: Endpoint;
 }
 
 export interface RouteTable {
   router: Router;
   registry: OpenAPIRegistry;
   records: RouteRecord[];
+  /** Development and tests check every JSON answer against its endpoint's response schema. */
+  checkResponses: boolean;
 }
 
-type Infer<T> = T extends ZodType ? z.infer<T> : undefined;
-
 /**
- * Declares one API route: access check, zod parsing of body/query/params, and its OpenAPI entry, from
- * the same schemas. The handler returns the response body; thrown errors reach the error middleware.
+ * Serves one endpoint of `shared/api/`: access check, zod parsing of body/query/params, its OpenAPI
+ * entry, and (in development and tests) a check of the answer against the endpoint's response schema.
+ * The handler returns the response body; thrown errors reach the error middleware.
  */
-export function apiRoute<B extends ZodType, Q extends ZodType, P extends ZodType>(
-  table: RouteTable,
-  spec: RouteSpec<B, Q, P>,
-  handler: (ctx: RouteContext<Infer<B>, Infer<Q>, Infer<P>>) => Promise<unknown>,
-): void {
+export function apiRoute<const E extends Endpoint>(table: RouteTable, spec: E, handler: (ctx: RouteContext<E>) => Promise<unknown>): void {
   const status = spec.status ?? 200;
-  table.records.push({ method: spec.method, path: spec.path, access: spec.access });
+  table.records.push({ method: spec.method, path: spec.path, access: spec.access, endpoint: spec });
   register(table.registry, spec, status);
   table.router[spec.method](spec.path, requireAccess(spec.access), async (req: Request, res: Response) => {
     assertStorable({ params: req.params, query: req.query, body: req.body });
@@ -72,16 +52,28 @@ export function apiRoute<B extends ZodType, Q extends ZodType, P extends ZodType
       user: req.user as SessionUser,
       req,
       res,
-    } as RouteContext<Infer<B>, Infer<Q>, Infer<P>>;
+    } as RouteContext<E>;
     const result = await handler(ctx);
     // A handler that answered by itself (image bytes) is left alone.
     if (res.headersSent) return;
     // A handler may pick another status itself (health answers 503 with a body); otherwise the declared one.
     const chosen = res.statusCode !== 200 ? res.statusCode : status;
+    if (table.checkResponses) checkAnswer(spec, result);
     if (chosen === 204 || result === undefined) res.status(chosen === 200 ? 204 : chosen).end();
     else if (result instanceof JsonText) sendJsonText(req, res.status(chosen), result);
     else res.status(chosen).json(result);
   });
+}
+
+/** An answer its contract does not describe is the server's fault: a 500 in development and tests, never silence. */
+function checkAnswer(spec: Endpoint, result: unknown) {
+  if (!spec.response || result === undefined) return;
+  const value = result instanceof JsonText ? JSON.parse(result.body.toString()) : JSON.parse(JSON.stringify(result));
+  const checked = spec.response.safeParse(value);
+  if (!checked.success) {
+    const where = checked.error.issues.slice(0, 3).map((i) => `${i.path.join('.') || '(root)'}: ${i.message}`);
+    throw new Error(`${spec.method.toUpperCase()} ${spec.path} answered outside its contract: ${where.join('; ')}`);
+  }
 }
 
 /** A cached answer as its stored bytes; a browser revalidating with the entity tag gets 304 from send(). */
@@ -91,7 +83,7 @@ function sendJsonText(req: Request, res: Response, json: JsonText) {
   else res.send(json.body);
 }
 
-function register(registry: OpenAPIRegistry, spec: RouteSpec<ZodType, ZodType, ZodType>, status: number) {
+function register(registry: OpenAPIRegistry, spec: Endpoint, status: number) {
   const json = (schema: ZodType) => ({ content: { 'application/json': { schema } } });
   const errors = Object.fromEntries(
     errorStatuses(spec.access, Boolean(spec.body || spec.query || spec.params)).map((s) => [
@@ -101,7 +93,7 @@ function register(registry: OpenAPIRegistry, spec: RouteSpec<ZodType, ZodType, Z
   );
   registry.registerPath({
     method: spec.method,
-    path: spec.path.replace(/:(\w+)/g, '{$1}'),
+    path: openApiPath(spec.path),
     summary: spec.summary,
     description: `Access: ${describeAccess(spec.access)}`,
     request: {
@@ -120,10 +112,4 @@ export function errorStatuses(access: Access, hasInput: boolean): number[] {
   const list = hasInput ? [400] : [];
   if (access !== 'public') list.push(401, 403);
   return list;
-}
-
-export function describeAccess(access: Access): string {
-  if (access === 'public') return 'anyone';
-  if (access === 'signed_in') return 'any signed-in user';
-  return (access as readonly Role[]).join(', ');
 }

@@ -3,30 +3,16 @@ import multer from 'multer';
 import { z, type ZodObject, type ZodType } from 'zod';
 import type { SessionUser } from '../../shared/schemas/auth.schemas';
 import { ApiErrorBodySchema } from '../../shared/api/error.schemas';
-import { requireAccess, type Access } from '../auth/require-access';
-import { describeAccess, errorStatuses, type RouteTable } from './api-route';
+import { describeAccess, openApiPath, type Endpoint, type Parsed, type UploadLimits } from '../../shared/api/endpoint';
+import { requireAccess } from '../auth/require-access';
+import { errorStatuses, type RouteTable } from './api-route';
 import { AppError } from './app-error';
 import { safeFileName } from './safe-file-name';
 
-/**
- * The multipart sibling of apiRoute: the same access check, zod parsing of the text fields and path
- * params, and an OpenAPI entry, plus multer in memory for the files. Only these routes read multipart;
- * express.json keeps its 100 kB limit everywhere else.
- */
-export interface UploadSpec<F extends ZodObject, P extends ZodType> {
-  path: string;
-  access: Access;
-  summary: string;
-  /** The multipart field that carries the files. */
-  fileField: string;
-  maxFiles: number;
-  maxBytesPerFile: number;
-  fields: F;
-  params?: P;
-  response: ZodType;
-  /** Runs after the access check and before any byte is read (a rate limit). */
-  before?: RequestHandler[];
-}
+// Only these routes read multipart; express.json keeps its 100 kB limit everywhere else.
+
+/** An upload endpoint: multipart body whose text fields are `body`, with its file limits. */
+export type UploadEndpoint = Endpoint & { body: ZodObject; upload: UploadLimits; response: ZodType };
 
 export interface UploadContext<F, P> {
   fields: F;
@@ -37,31 +23,37 @@ export interface UploadContext<F, P> {
   res: Response;
 }
 
-export function uploadRoute<F extends ZodObject, P extends ZodType>(
+/**
+ * The multipart sibling of apiRoute: the same access check, zod parsing of the text fields and path
+ * params, and an OpenAPI entry, plus multer in memory for the files. `before` runs after the access
+ * check and before any byte is read (a rate limit).
+ */
+export function uploadRoute<const E extends UploadEndpoint>(
   table: RouteTable,
-  spec: UploadSpec<F, P>,
-  handler: (ctx: UploadContext<z.infer<F>, P extends ZodType ? z.infer<P> : undefined>) => Promise<unknown>,
+  spec: E,
+  handler: (ctx: UploadContext<z.infer<E['body']>, Parsed<E['params']>>) => Promise<unknown>,
+  before: RequestHandler[] = [],
 ): void {
-  table.records.push({ method: 'post', path: spec.path, access: spec.access });
+  table.records.push({ method: 'post', path: spec.path, access: spec.access, endpoint: spec });
   register(table, spec);
-  table.router.post(spec.path, requireAccess(spec.access), ...(spec.before ?? []), readFiles(spec), async (req, res) => {
+  table.router.post(spec.path, requireAccess(spec.access), ...before, readFiles(spec.upload), async (req, res) => {
     const files = (req.files as Express.Multer.File[] | undefined) ?? [];
     if (!req.is('multipart/form-data')) throw new AppError('VALIDATION_FAILED', 400, 'Send the photos as multipart/form-data.');
-    if (files.length === 0) throw new AppError('VALIDATION_FAILED', 400, 'Choose at least one photo.', { [spec.fileField]: 'Choose at least one photo' });
+    if (files.length === 0) throw new AppError('VALIDATION_FAILED', 400, 'Choose at least one photo.', { [spec.upload.fileField]: 'Choose at least one photo' });
     const ctx = {
-      fields: spec.fields.parse({ ...req.body }),
+      fields: spec.body.parse({ ...req.body }),
       params: spec.params ? spec.params.parse(req.params) : undefined,
       files,
       user: req.user as SessionUser,
       req,
       res,
-    } as UploadContext<z.infer<F>, P extends ZodType ? z.infer<P> : undefined>;
+    } as UploadContext<z.infer<E['body']>, Parsed<E['params']>>;
     res.status(201).json(await handler(ctx));
   });
 }
 
 /** multer in memory with hard limits; its errors become the API's error shape and name the file. */
-function readFiles(spec: UploadSpec<ZodObject, ZodType>): RequestHandler {
+function readFiles(spec: UploadLimits): RequestHandler {
   const upload = multer({
     storage: multer.memoryStorage(),
     limits: { fileSize: spec.maxBytesPerFile, files: spec.maxFiles, fields: 10, fieldSize: 200, parts: spec.maxFiles + 10, headerPairs: 100 },
@@ -84,21 +76,22 @@ function readFiles(spec: UploadSpec<ZodObject, ZodType>): RequestHandler {
     });
 }
 
-function register(table: RouteTable, spec: UploadSpec<ZodObject, ZodType>) {
-  const { $schema: _ignored, ...fields } = z.toJSONSchema(spec.fields, { io: 'input' }) as Record<string, unknown> & { properties?: object };
+function register(table: RouteTable, spec: UploadEndpoint) {
+  const { fileField, maxFiles, maxBytesPerFile } = spec.upload;
+  const { $schema: _ignored, ...fields } = z.toJSONSchema(spec.body, { io: 'input' }) as Record<string, unknown> & { properties?: object };
   const multipart = {
     ...fields,
     properties: {
       ...fields.properties,
-      [spec.fileField]: { type: 'array', maxItems: spec.maxFiles, items: { type: 'string', format: 'binary' } },
+      [fileField]: { type: 'array', maxItems: maxFiles, items: { type: 'string', format: 'binary' } },
     },
   };
   const json = (schema: ZodType) => ({ content: { 'application/json': { schema } } });
   table.registry.registerPath({
     method: 'post',
-    path: spec.path.replace(/:(\w+)/g, '{$1}'),
+    path: openApiPath(spec.path),
     summary: spec.summary,
-    description: `Access: ${describeAccess(spec.access)}. Files of at most ${spec.maxBytesPerFile} bytes each.`,
+    description: `Access: ${describeAccess(spec.access)}. Files of at most ${maxBytesPerFile} bytes each.`,
     request: {
       body: { content: { 'multipart/form-data': { schema: multipart as never } } },
       ...(spec.params && { params: spec.params as never }),

@@ -1,5 +1,7 @@
+import { queryOptions } from '@tanstack/react-query';
 import type { z } from 'zod';
 import { apiPaths } from '../../shared/api/api-paths';
+import { urlOf, type Answer, type CallInput, type Endpoint } from '../../shared/api/endpoint';
 import { ApiErrorBodySchema } from '../../shared/api/error.schemas';
 import { CsrfResponseSchema } from '../../shared/schemas/auth.schemas';
 import { ApiError } from './api-error';
@@ -88,4 +90,39 @@ export function withQuery(path: string, query: Record<string, string | undefined
   for (const [key, value] of Object.entries(query)) if (value) params.set(key, value);
   const text = params.toString();
   return text ? `${path}?${text}` : path;
+}
+
+/** The input argument of an endpoint: optional when the endpoint takes no params and no body. */
+export type InputArgs<E extends Endpoint> = object extends CallInput<E> ? [input?: CallInput<E>] : [input: CallInput<E>];
+
+/**
+ * Calls one endpoint of `shared/api/`: its path filled from `params`, `query` appended, `body` sent as
+ * JSON, and the answer parsed with the endpoint's response schema (undefined for empty answers).
+ */
+export function callApi<const E extends Endpoint>(e: E, ...[input]: InputArgs<E>): Promise<Answer<E>> {
+  const url = urlOf(e, input ?? {});
+  const schema = e.response as z.ZodType | undefined;
+  if (e.method === 'get') return send('GET', url).then((response) => (schema ? readBody(response, schema) : checkOk(response))) as Promise<Answer<E>>;
+  return apiWrite(e.method.toUpperCase() as WriteMethod, url, input?.body, schema) as Promise<Answer<E>>;
+}
+
+async function checkOk(response: Response): Promise<undefined> {
+  if (!response.ok) throw await toApiError(response);
+  return undefined;
+}
+
+/**
+ * The query key of an endpoint's answer: `['api', path template, params, query]`. A prefix of it names
+ * a set to invalidate: every answer of the endpoint, or of one record (see cache-rules.ts).
+ */
+export function apiKey<E extends Endpoint>(e: E, input: { params?: unknown; query?: unknown } = {}) {
+  return ['api', e.path, input.params ?? {}, input.query ?? {}] as const;
+}
+
+/** TanStack Query options for a GET endpoint; spread them to add options (`{ ...apiQuery(e, input), staleTime }`). */
+export function apiQuery<const E extends Endpoint>(e: E, ...[input]: InputArgs<E>) {
+  return queryOptions({
+    queryKey: apiKey(e, input ?? {}),
+    queryFn: () => callApi(e, ...([input] as InputArgs<E>)),
+  });
 }

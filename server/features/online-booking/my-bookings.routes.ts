@@ -2,7 +2,6 @@ import { BookingViewSchema } from '../../../shared/schemas/booking-view.schemas'
 import { IdParamsSchema } from '../../../shared/schemas/common.schemas';
 import { AvailabilitySchema, CancelTermsSchema, ConfirmationSendsSchema, ClientCancelSchema, ClientMoveSchema, MoveTimesQuerySchema } from '../../../shared/schemas/online-booking.schemas';
 import type { AppDeps } from '../../app-deps';
-import { requireAccess } from '../../auth/require-access';
 import { apiRoute } from '../../lib/api-route';
 import { deskBookingView } from '../bookings/booking-changes.routes';
 import { cancelBooking } from '../bookings/cancel-booking.service';
@@ -15,10 +14,8 @@ import { AppError } from '../../lib/app-error';
 import { confirmationSends } from './confirmation';
 
 export function registerMyBookingRoutes({ table, db }: AppDeps): void {
-  table.records.push({ method: 'get', path: '/api/me/bookings/:id/calendar.ics', access: ['client'] });
-  table.router.get('/api/me/bookings/:id/calendar.ics', requireAccess(['client']), async (req, res) => {
-    const { id } = IdParamsSchema.parse(req.params);
-    const { hold, salon } = await ownBooking(db, req.user as never, id);
+  apiRoute(table, { method: 'get', path: '/api/me/bookings/:id/calendar.ics', access: ['client'], summary: 'One of my bookings as a calendar file (RFC 5545)', params: IdParamsSchema, answers: 'file' }, async ({ user, params, res }) => {
+    const { hold, salon } = await ownBooking(db, user, params.id);
     const ics = bookingIcs({ uid: `${hold.id}@dwell`, title: `${hold.serviceName} at ${salon.name}`, description: `${hold.serviceName} with ${hold.stylistName}`, location: salon.address, start: hold.start, end: hold.end });
     res.type('text/calendar').attachment('booking.ics').send(ics);
   });

@@ -1,7 +1,6 @@
 import type { SessionUser } from '../../../shared/schemas/auth.schemas';
-import { IdParamsSchema } from '../../../shared/schemas/common.schemas';
+import { photosApi } from '../../../shared/api/photos.api';
 import type { AppDeps } from '../../app-deps';
-import { CLIENT_OR_STAFF } from '../../auth/client-access';
 import { apiRoute } from '../../lib/api-route';
 import { notFound } from '../../lib/app-error';
 import type { Db } from '../../db/database';
@@ -23,7 +22,7 @@ async function visiblePhoto(db: Db, user: SessionUser, id: string) {
 export function registerPhotoFileRoutes({ table, db, storage }: AppDeps): void {
   apiRoute(
     table,
-    { method: 'get', path: '/api/photos/:id', access: CLIENT_OR_STAFF, summary: 'The image bytes of one photo (the client or their salon’s team)', params: IdParamsSchema },
+    photosApi.file,
     async ({ user, params, res }) => {
       const photo = await visiblePhoto(db, user, params.id);
       const bytes = await storage.get(photo.storage_key);
@@ -37,7 +36,7 @@ export function registerPhotoFileRoutes({ table, db, storage }: AppDeps): void {
   );
   apiRoute(
     table,
-    { method: 'delete', path: '/api/photos/:id', access: CLIENT_OR_STAFF, summary: 'Remove a photo (the client or their salon’s team)', params: IdParamsSchema, status: 204 },
+    photosApi.remove,
     async ({ user, params }) => {
       const photo = await visiblePhoto(db, user, params.id);
       // Row first: if removing the file then fails, an orphan file is harmless; a row without a file is not.

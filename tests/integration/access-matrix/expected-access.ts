@@ -70,6 +70,7 @@ export const expectedAccess: Record<string, Expectation> = {
   'GET /api/me/holds': { allow: ['client'] },
   'POST /api/me/holds/{id}/resume': { allow: ['client'], own: true },
   'POST /api/me/holds/{id}/release': { allow: ['client'], own: true },
+  'GET /api/me/bookings/{id}/calendar.ics': { allow: ['client'], own: true },
   'GET /api/me/bookings/{id}/confirmation': { allow: ['client'], own: true },
   'GET /api/me/bookings/{id}/cancel-terms': { allow: ['client'], own: true },
   'POST /api/me/bookings/{id}/cancel': { allow: ['client'], own: true },

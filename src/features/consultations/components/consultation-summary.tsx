@@ -1,4 +1,5 @@
-import { photoPaths } from '../../../../shared/api/hair-paths';
+import { urlOf } from '../../../../shared/api/endpoint';
+import { photosApi } from '../../../../shared/api/photos.api';
 import type { ColourHistory, ConsultationView } from '../../../../shared/schemas/consultation.schemas';
 import { densityOptions, elasticityOptions, historyLabels, lengthOptions, porosityOptions, strandOptions } from './consultation-labels';
 
@@ -33,8 +34,8 @@ export function ConsultationSummary({ view }: { view: ConsultationView }) {
         <ul className="grid grid-cols-3 gap-3 sm:grid-cols-6" aria-label="Consultation photos">
           {view.photoIds.map((id, i) => (
             <li key={id}>
-              <a href={photoPaths.one(id)} target="_blank" rel="noreferrer" className="block overflow-hidden rounded-lg ring-1 ring-ink/10">
-                <img src={photoPaths.one(id)} alt={`Hair at the consultation, ${i + 1} of ${view.photoIds.length}`} loading="lazy" className="aspect-square w-full object-cover" />
+              <a href={urlOf(photosApi.file, { params: { id: id } })} target="_blank" rel="noreferrer" className="block overflow-hidden rounded-lg ring-1 ring-ink/10">
+                <img src={urlOf(photosApi.file, { params: { id: id } })} alt={`Hair at the consultation, ${i + 1} of ${view.photoIds.length}`} loading="lazy" className="aspect-square w-full object-cover" />
               </a>
             </li>
           ))}

@@ -1,14 +1,9 @@
-import { queryOptions } from '@tanstack/react-query';
-import { photoPaths } from '../../../../shared/api/hair-paths';
-import { PhotoListSchema } from '../../../../shared/schemas/photo.schemas';
-import { apiGet } from '../../../lib/api-client';
-import { ownerKey, ownerPath, type RecordOwner } from '../../../lib/record-owner';
+import { photosApi } from '../../../../shared/api/photos.api';
+import { apiQuery } from '../../../lib/api-client';
+import type { RecordOwner } from '../../../lib/record-owner';
 
 export type PhotoOwner = RecordOwner;
-export const photoListPath = (owner: RecordOwner) => ownerPath(owner, photoPaths);
 
 export const photoQueries = {
-  all: () => ['photos'] as const,
-  list: (owner: RecordOwner) =>
-    queryOptions({ queryKey: [...photoQueries.all(), ownerKey(owner)] as const, queryFn: () => apiGet(photoListPath(owner), PhotoListSchema) }),
+  list: (owner: RecordOwner) => (owner === 'me' ? apiQuery(photosApi.mine) : apiQuery(photosApi.ofClient, { params: { id: owner.clientId } })),
 };

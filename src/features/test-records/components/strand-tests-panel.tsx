@@ -2,7 +2,8 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useQuery } from '@tanstack/react-query';
 import { DateTime } from 'luxon';
 import { useForm } from 'react-hook-form';
-import { photoPaths } from '../../../../shared/api/hair-paths';
+import { urlOf } from '../../../../shared/api/endpoint';
+import { photosApi } from '../../../../shared/api/photos.api';
 import { RecordStrandTestSchema, type RecordStrandTest } from '../../../../shared/schemas/strand-test.schemas';
 import { Button } from '../../../components/ui/button';
 import { FormAlert } from '../../../components/ui/form-alert';
@@ -41,7 +42,7 @@ export function StrandTestsPanel({ clientId, zone }: { clientId: string; zone: s
       <ul className="flex flex-col gap-2" aria-label="Strand tests">
         {list.data?.tests.map((t) => (
           <li key={t.id} className="flex gap-3 rounded-lg bg-linen px-3 py-2">
-            {t.photoId && <img src={photoPaths.one(t.photoId)} alt="The tested strand" className="size-16 rounded object-cover" />}
+            {t.photoId && <img src={urlOf(photosApi.file, { params: { id: t.photoId } })} alt="The tested strand" className="size-16 rounded object-cover" />}
             <span>
               <span className="font-bold">{resultLabels[t.result]}</span> · {formatDay(t.testedAt, zone)} · {t.tested} · {productTypeLabels[t.productType]}
               {t.developerPercent !== null && ` with ${t.developerPercent} % developer`} · {t.minutes} min · by {t.recordedByName ?? 'the salon'}

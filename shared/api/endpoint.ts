@@ -1,0 +1,95 @@
+import type { z, ZodType } from 'zod';
+import type { Role } from '../schemas/common.schemas';
+
+/** Who may call an endpoint: anyone, any signed-in user, or the listed roles. */
+export type Access = 'public' | 'signed_in' | readonly Role[];
+
+export const STAFF: readonly Role[] = ['front_desk', 'stylist', 'owner'];
+export const DESK: readonly Role[] = ['front_desk', 'owner'];
+export const CLIENT_OR_STAFF: readonly Role[] = ['client', ...STAFF];
+
+export type Method = 'get' | 'post' | 'put' | 'patch' | 'delete';
+
+/**
+ * One API endpoint, the single place its method, path, inputs, answer and access are written. The
+ * server registers its handler from this object (server/lib/api-route.ts), the client builds its
+ * fetcher and query options from it (src/lib/api-client.ts), and the OpenAPI document is generated
+ * from it; nothing else spells an `/api/` path.
+ */
+export interface Endpoint {
+  method: Method;
+  /** Express-style path, `:name` for a parameter, e.g. `/api/clients/:id`. */
+  path: string;
+  access: Access;
+  summary: string;
+  params?: ZodType;
+  query?: ZodType;
+  body?: ZodType;
+  /** How the body arrives: JSON by default; `form` for providers' webhooks; `multipart` for uploads. */
+  bodyType?: 'json' | 'form' | 'multipart';
+  /** The JSON answer; absent when the answer is empty (204/202) or a file (`answers: 'file'`). */
+  response?: ZodType;
+  /** `file` when the answer is bytes (an image, a CSV, an .ics) rather than JSON. */
+  answers?: 'json' | 'file';
+  /** Status on success; 204 answers no body. */
+  status?: 200 | 201 | 202 | 204;
+  /** For `multipart` bodies: the field that carries the files and the limits on them. */
+  upload?: UploadLimits;
+}
+
+export interface UploadLimits {
+  fileField: string;
+  maxFiles: number;
+  maxBytesPerFile: number;
+}
+
+/** Declares an endpoint; `const` keeps the literal path and the schema types for both sides. */
+export function endpoint<const E extends Endpoint>(spec: E): E {
+  return spec;
+}
+
+type Input<S> = S extends ZodType ? z.input<S> : never;
+type Output<S> = S extends ZodType ? z.output<S> : undefined;
+
+/** What a caller sends: the parameters, query and body the endpoint declares, and no others. */
+export type CallInput<E extends Endpoint> = ([E['params']] extends [ZodType] ? { params: Input<E['params']> } : { params?: never }) &
+  ([E['query']] extends [ZodType] ? { query?: Input<E['query']> } : { query?: never }) &
+  ([E['body']] extends [ZodType] ? { body: Input<E['body']> } : { body?: never });
+
+/** What the endpoint answers, as parsed by its response schema. */
+export type Answer<E extends Endpoint> = Output<E['response']>;
+
+/** Parsed inputs as the server's handler sees them. */
+export type Parsed<S> = S extends ZodType ? z.output<S> : undefined;
+
+/**
+ * The URL of an endpoint with its parameters filled in (each one URL-encoded) and its query appended,
+ * leaving out empty values: `urlOf(clientsApi.one, { params: { id } })` → `/api/clients/…`.
+ */
+export function urlOf(e: Pick<Endpoint, 'path'>, input: { params?: unknown; query?: unknown } = {}): string {
+  const values = (input.params ?? {}) as Record<string, unknown>;
+  const path = e.path.replace(/:(\w+)/g, (_match, name: string) => {
+    const value = values[name];
+    if (value === undefined || value === null || value === '') throw new Error(`urlOf: no value for :${name} in ${e.path}`);
+    return encodeURIComponent(String(value));
+  });
+  const query = new URLSearchParams();
+  for (const [key, value] of Object.entries((input.query ?? {}) as Record<string, unknown>)) {
+    if (value === undefined || value === null || value === '') continue;
+    for (const one of Array.isArray(value) ? value : [value]) query.append(key, String(one));
+  }
+  const text = query.toString();
+  return text ? `${path}?${text}` : path;
+}
+
+/** The OpenAPI form of a path: `/api/clients/:id` → `/api/clients/{id}`. */
+export function openApiPath(path: string): string {
+  return path.replace(/:(\w+)/g, '{$1}');
+}
+
+/** Access in words, for the OpenAPI document. */
+export function describeAccess(access: Access): string {
+  if (access === 'public') return 'anyone';
+  if (access === 'signed_in') return 'any signed-in user';
+  return (access as readonly Role[]).join(', ');
+}
