@@ -49,7 +49,7 @@ async function main(): Promise<number> {
     const skipChecks = Boolean(process.env.DWELL_SKIP_TYPECHECK);
     const [typecheck, lint] = skipChecks
       ? [0, 0]
-      : await Promise.all([run(bin('tsc'), ['--noEmit', '-p', '.']), run('npm', ['run', '--silent', 'lint'])]);
+      : await Promise.all([run('npm', ['run', '--silent', 'typecheck']), run('npm', ['run', '--silent', 'lint'])]);
     const reportFile = join(scratch, 'vitest-report.json');
     // Extra arguments pass through to Vitest, e.g. `npm test -- --project integration`.
     const tests = await run(bin('vitest'), ['run', '--reporter=default', '--reporter=json', `--outputFile.json=${reportFile}`, ...process.argv.slice(2)], {

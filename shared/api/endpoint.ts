@@ -73,13 +73,13 @@ export function urlOf(e: Pick<Endpoint, 'path'>, input: { params?: unknown; quer
     if (value === undefined || value === null || value === '') throw new Error(`urlOf: no value for :${name} in ${e.path}`);
     return encodeURIComponent(String(value));
   });
-  const query = new URLSearchParams();
+  // Built by hand: shared/ runs on both sides and declares neither the DOM's nor node's URLSearchParams.
+  const pairs: string[] = [];
   for (const [key, value] of Object.entries((input.query ?? {}) as Record<string, unknown>)) {
     if (value === undefined || value === null || value === '') continue;
-    for (const one of Array.isArray(value) ? value : [value]) query.append(key, String(one));
+    for (const one of Array.isArray(value) ? value : [value]) pairs.push(`${encodeURIComponent(key)}=${encodeURIComponent(String(one))}`);
   }
-  const text = query.toString();
-  return text ? `${path}?${text}` : path;
+  return pairs.length ? `${path}?${pairs.join('&')}` : path;
 }
 
 /** The OpenAPI form of a path: `/api/clients/:id` → `/api/clients/{id}`. */

@@ -39,8 +39,8 @@ it.each([
   expect(exported.body.bookings.length).toBeGreaterThan(100);
   const file = join(dir, 'exported.json');
   await writeFile(file, exported.text);
-  // The same command a person runs: `npm run plan -- occupancy exported.json` is `tsx shared/engine/cli/plan-cli.ts`.
-  const { stdout } = await promisify(execFile)(join(process.cwd(), 'node_modules', '.bin', 'tsx'), ['shared/engine/cli/plan-cli.ts', 'occupancy', file], { cwd: process.cwd() });
+  // The same command a person runs: `npm run plan -- occupancy exported.json` is `tsx server/ops/plan-cli.ts`.
+  const { stdout } = await promisify(execFile)(join(process.cwd(), 'node_modules', '.bin', 'tsx'), ['server/ops/plan-cli.ts', 'occupancy', file], { cwd: process.cwd() });
   const cli = JSON.parse(stdout);
   expect(cli.chairOccupancy).toBeGreaterThan(0);
   expect(api.body.chairOccupancy).toBe(cli.chairOccupancy);

@@ -1,10 +1,10 @@
 /**
  * `npm run plan -- options|windows|occupancy <scenario.json>`: one JSON answer on stdout.
  * Bad input exits 2 with the field named on stderr and nothing on stdout. The only engine file
- * that touches the file system or the process.
+ * (kept on the server side) that touches the file system or the process.
  */
 import { readFileSync } from 'node:fs';
-import { findWindows, measureOccupancy, parseScenario, planOptions, ScenarioError } from '../engine';
+import { findWindows, measureOccupancy, parseScenario, planOptions, ScenarioError } from '../../shared/engine/engine';
 
 const queries = { options: planOptions, windows: findWindows, occupancy: measureOccupancy } as const;
 const usage = 'usage: npm run plan -- options|windows|occupancy <scenario.json>';
