@@ -48,4 +48,5 @@ export default defineConfig(
     rules: { '@typescript-eslint/no-explicit-any': 'off' },
   },
   { files: ['**/*.{js,mjs}'], languageOptions: { globals: globals.node } },
+  { files: ['**/*.cjs'], languageOptions: { globals: globals.node, sourceType: 'commonjs' } },
 );

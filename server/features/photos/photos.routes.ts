@@ -1,25 +1,10 @@
-import { urlOf } from '../../../shared/api/endpoint';
 import { photosApi } from '../../../shared/api/photos.api';
 import type { SessionUser } from '../../../shared/schemas/auth.schemas';
 import type { AppDeps } from '../../app-deps';
-import { clientIdFor, myClientId } from '../../auth/client-access';
 import { apiRoute } from '../../lib/api-route';
 import { rateLimited } from '../../lib/rate-limit';
 import { uploadRoute } from '../../lib/upload-route';
-import { listPhotos, type PhotoRow } from './photos.repository';
-import { storePhotos } from './store-photos.service';
-import { registerPhotoFileRoutes } from './photo-file.routes';
-
-
-const toView = (p: Omit<PhotoRow, 'storage_key' | 'mime' | 'salon_id' | 'client_id'>) => ({
-  id: p.id,
-  kind: p.kind,
-  bookingId: p.booking_id,
-  width: p.width,
-  height: p.height,
-  createdAt: p.created_at.toISOString(),
-  url: urlOf(photosApi.file, { params: { id: p.id } }),
-});
+import { addPhotos, photoFile, photoList, removePhoto } from './photos.service';
 
 // Decoding and re-encoding is the expensive part: a person gets a generous budget per quarter hour,
 // counted per signed-in user so a busy salon behind one address is not throttled as one.
@@ -30,14 +15,15 @@ const uploadLimiter = rateLimited({
   message: 'Too many uploads; try again in a few minutes.',
 });
 
-export function registerPhotoRoutes(deps: AppDeps): void {
-  const { table, db, storage } = deps;
-  const upload = (user: SessionUser, clientId: string, fields: { kind: 'hair_now' | 'wanted'; bookingId?: string }, files: Express.Multer.File[]) =>
-    storePhotos(db, storage, { salonId: user.salonId, clientId, bookingId: fields.bookingId ?? null, kind: fields.kind, files }).then((rows) => ({ photos: rows.map(toView) }));
-
-  uploadRoute(table, photosApi.addMine, async ({ user, fields, files }) => upload(user, await myClientId(db, user), fields, files), [uploadLimiter]);
-  uploadRoute(table, photosApi.addToClient, async ({ user, params, fields, files }) => upload(user, await clientIdFor(db, user, params.id), fields, files), [uploadLimiter]);
-  apiRoute(table, photosApi.mine, async ({ user }) => ({ photos: (await listPhotos(db, await myClientId(db, user))).map(toView) }));
-  apiRoute(table, photosApi.ofClient, async ({ user, params }) => ({ photos: (await listPhotos(db, await clientIdFor(db, user, params.id))).map(toView) }));
-  registerPhotoFileRoutes(deps);
+export function registerPhotoRoutes({ table, db, storage }: AppDeps): void {
+  uploadRoute(table, photosApi.addMine, ({ user, fields, files }) => addPhotos(db, storage, user, 'me', fields, files), [uploadLimiter]);
+  uploadRoute(table, photosApi.addToClient, ({ user, params, fields, files }) => addPhotos(db, storage, user, { clientId: params.id }, fields, files), [uploadLimiter]);
+  apiRoute(table, photosApi.mine, ({ user }) => photoList(db, user, 'me'));
+  apiRoute(table, photosApi.ofClient, ({ user, params }) => photoList(db, user, { clientId: params.id }));
+  apiRoute(table, photosApi.file, async ({ user, params, res }) => {
+    const { mime, bytes } = await photoFile(db, storage, user, params.id);
+    // Private: personal photos must not sit in shared caches; nosniff so the bytes are only ever an image.
+    res.status(200).set({ 'Content-Type': mime, 'Cache-Control': 'private, max-age=3600', 'X-Content-Type-Options': 'nosniff', 'Content-Disposition': 'inline' }).end(bytes);
+  });
+  apiRoute(table, photosApi.remove, ({ user, params }) => removePhoto(db, storage, user, params.id));
 }

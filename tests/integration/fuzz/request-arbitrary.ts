@@ -25,7 +25,7 @@ export function requestArbitrary(route: DocumentedRoute, opts: ArbitraryOptions 
     ),
   );
   const query = fc.record(
-    Object.fromEntries(queryParams.map((p) => [p.name, arbitraryFor(p.schema as JsonSchema, opts).map((v) => (Array.isArray(v) ? v.map(String) : String(v)))])),
+    Object.fromEntries(queryParams.map((p) => [p.name, arbitraryFor(p.schema as JsonSchema, opts).map((v) => (Array.isArray(v) ? v.map(asQueryText) : asQueryText(v)))])),
     { requiredKeys: queryParams.filter((p) => p.required).map((p) => p.name) },
   );
   const body = bodySchema ? arbitraryFor(bodySchema, opts) : fc.constant(undefined);
@@ -63,6 +63,9 @@ function encodeSegment(value: string): string {
   }
 }
 
+// A query value is text; an object drawn for a loosely typed parameter (fast-check may make it without a
+// prototype, which String() cannot convert) is sent as its JSON.
+const asQueryText = (v: unknown): string => (typeof v === 'object' && v !== null ? JSON.stringify(v) : String(v));
 const isObject = (v: unknown): v is Record<string, unknown> => typeof v === 'object' && v !== null && !Array.isArray(v);
 
 function setKey(body: unknown, key: string, value: unknown) {
