@@ -5,7 +5,7 @@ import { paths } from '../config/paths';
 const deskLinks = [
   { to: paths.desk(), label: 'Book' },
   { to: paths.deskWeek(), label: 'Week' },
-  { to: paths.deskBook, label: 'Book a service' },
+  { to: paths.deskBook(), label: 'Book a service' },
   { to: paths.deskStandby, label: 'Standby' },
   { to: paths.outbox, label: 'Outbox (demo)' },
 ];
@@ -20,5 +20,5 @@ export const navLinks: Record<Role, { to: string; label: string }[]> = {
   ],
   front_desk: [...deskLinks, { to: paths.deskUtilisation, label: 'Chair use' }],
   stylist: [{ to: paths.stylist(), label: 'My day' }],
-  client: [{ to: paths.me, label: 'My bookings' }, { to: '/me/hair', label: 'Hair history and photos' }],
+  client: [{ to: paths.me, label: 'My bookings' }, { to: paths.myHair, label: 'Hair history and photos' }],
 };

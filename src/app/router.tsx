@@ -1,6 +1,7 @@
 import { createBrowserRouter, redirect, type LoaderFunctionArgs, type RouteObject } from 'react-router-dom';
 import type { Role } from '../../shared/schemas/common.schemas';
-import { homeFor, paths } from '../config/paths';
+import { DESK, STAFF } from '../../shared/api/endpoint';
+import { homeFor, pages, paths } from '../config/paths';
 import { LoadingState } from '../components/ui/loading-state';
 import { currentUser, requireRole } from './require-role';
 import { RootLayout } from './root-layout';
@@ -12,10 +13,10 @@ type PageModule = {
   loader?: (args: LoaderFunctionArgs) => Promise<unknown>;
 };
 
-/** A page anyone may open; its code loads only when it is visited. */
-function page(path: string, load: () => Promise<PageModule>): RouteObject {
+/** A page anyone may open; its code loads only when it is visited. Patterns are written from the root. */
+function page(pattern: string, load: () => Promise<PageModule>): RouteObject {
   return {
-    path,
+    path: pattern.replace(/^\//, ''),
     errorElement: <RouteError />,
     lazy: async () => {
       const { Component, loader } = await load();
@@ -25,9 +26,9 @@ function page(path: string, load: () => Promise<PageModule>): RouteObject {
 }
 
 /** A page for some roles only: the same rule the server applies to the page's API calls. */
-function rolePage(path: string, roles: readonly Role[], load: () => Promise<PageModule>): RouteObject {
+function rolePage(pattern: string, roles: readonly Role[], load: () => Promise<PageModule>): RouteObject {
   return {
-    path,
+    path: pattern.replace(/^\//, ''),
     errorElement: <RouteError />,
     lazy: async () => {
       const { Component, loader } = await load();
@@ -51,43 +52,45 @@ const routes: RouteObject[] = [
     errorElement: <RouteError />,
     children: [
       {
+        // Only sends the visitor on to their home; the element shows while it decides.
         index: true,
+        element: <LoadingState />,
         loader: async () => {
           const user = await currentUser();
           return redirect(user ? homeFor(user.role) : paths.signIn());
         },
       },
-      page('sign-in', () => import('./routes/sign-in')),
-      page('sign-up', () => import('./routes/sign-up')),
-      page('forgot-password', () => import('./routes/forgot-password')),
-      page('reset-password', () => import('./routes/reset-password')),
-      rolePage('owner', ['owner'], () => import('./routes/owner-home')),
-      rolePage('owner/utilisation', ['owner'], () => import('./routes/owner-utilisation')),
-      rolePage('desk/utilisation', ['front_desk', 'owner'], () => import('./routes/desk-utilisation')),
-      rolePage('owner/setup', ['owner'], () => import('./routes/owner-setup-salon')),
-      rolePage('owner/setup/staff', ['owner'], () => import('./routes/owner-setup-staff')),
-      rolePage('owner/setup/chairs-and-basins', ['owner'], () => import('./routes/owner-setup-units')),
-      rolePage('owner/setup/services', ['owner'], () => import('./routes/owner-setup-services')),
-      rolePage('owner/setup/services/:id', ['owner'], () => import('./routes/owner-setup-service')),
-      rolePage('owner/setup/quote-prices', ['owner'], () => import('./routes/owner-quote-prices')),
-      rolePage('owner/setup/follow-up-rules', ['owner'], () => import('./routes/owner-follow-ups')),
-      rolePage('desk', ['front_desk', 'owner'], () => import('./routes/desk-home')),
-      rolePage('desk/clients/:id', ['front_desk', 'owner'], () => import('./routes/desk-client')),
-      rolePage('desk/outbox', ['front_desk', 'owner'], () => import('./routes/outbox')),
-      rolePage('desk/book', ['front_desk', 'owner'], () => import('./routes/desk-book')),
-      rolePage('desk/bookings/:id', ['front_desk', 'owner'], () => import('./routes/desk-booking')),
-      rolePage('desk/standby', ['front_desk', 'owner'], () => import('./routes/desk-standby')),
-      rolePage('desk/week', ['front_desk', 'owner'], () => import('./routes/desk-week')),
-      rolePage('stylist', ['stylist'], () => import('./routes/stylist-home')),
-      rolePage('stylist/bookings/:id/mix-log', ['stylist'], () => import('./routes/stylist-mix-log')),
-      rolePage('consultations/new', ['stylist', 'front_desk', 'owner'], () => import('./routes/consultation-new')),
-      rolePage('consultations/:id', ['stylist', 'front_desk', 'owner'], () => import('./routes/consultation')),
-      rolePage('me', ['client'], () => import('./routes/client-home')),
-      rolePage('me/hair', ['client'], () => import('./routes/client-hair')),
-      rolePage('me/bookings/:id/booked', ['client'], () => import('./routes/booking-booked')),
-      page('salon/:slug', () => import('./routes/public-salon')),
-      page('salon/:slug/book', () => import('./routes/online-booking')),
-      page('offer/:token', () => import('./routes/offer')),
+      page(pages.signIn, () => import('./routes/sign-in')),
+      page(pages.signUp, () => import('./routes/sign-up')),
+      page(pages.forgotPassword, () => import('./routes/forgot-password')),
+      page(pages.resetPassword, () => import('./routes/reset-password')),
+      rolePage(pages.owner, ['owner'], () => import('./routes/owner-home')),
+      rolePage(pages.ownerUtilisation, ['owner'], () => import('./routes/owner-utilisation')),
+      rolePage(pages.deskUtilisation, DESK, () => import('./routes/desk-utilisation')),
+      rolePage(pages.ownerSetup, ['owner'], () => import('./routes/owner-setup-salon')),
+      rolePage(pages.ownerSetupStaff, ['owner'], () => import('./routes/owner-setup-staff')),
+      rolePage(pages.ownerSetupUnits, ['owner'], () => import('./routes/owner-setup-units')),
+      rolePage(pages.ownerSetupServices, ['owner'], () => import('./routes/owner-setup-services')),
+      rolePage(pages.ownerSetupService, ['owner'], () => import('./routes/owner-setup-service')),
+      rolePage(pages.ownerQuotePrices, ['owner'], () => import('./routes/owner-quote-prices')),
+      rolePage(pages.ownerFollowUps, ['owner'], () => import('./routes/owner-follow-ups')),
+      rolePage(pages.desk, DESK, () => import('./routes/desk-home')),
+      rolePage(pages.deskClient, DESK, () => import('./routes/desk-client')),
+      rolePage(pages.outbox, DESK, () => import('./routes/outbox')),
+      rolePage(pages.deskBook, DESK, () => import('./routes/desk-book')),
+      rolePage(pages.deskBooking, DESK, () => import('./routes/desk-booking')),
+      rolePage(pages.deskStandby, DESK, () => import('./routes/desk-standby')),
+      rolePage(pages.deskWeek, DESK, () => import('./routes/desk-week')),
+      rolePage(pages.stylist, ['stylist'], () => import('./routes/stylist-home')),
+      rolePage(pages.mixLog, ['stylist'], () => import('./routes/stylist-mix-log')),
+      rolePage(pages.newConsultation, STAFF, () => import('./routes/consultation-new')),
+      rolePage(pages.consultation, STAFF, () => import('./routes/consultation')),
+      rolePage(pages.me, ['client'], () => import('./routes/client-home')),
+      rolePage(pages.myHair, ['client'], () => import('./routes/client-hair')),
+      rolePage(pages.bookingConfirmed, ['client'], () => import('./routes/booking-booked')),
+      page(pages.salon, () => import('./routes/public-salon')),
+      page(pages.salonBook, () => import('./routes/online-booking')),
+      page(pages.offer, () => import('./routes/offer')),
       page('*', () => import('./routes/not-found')),
     ],
   },

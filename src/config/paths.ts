@@ -1,10 +1,13 @@
 import type { Role } from '../../shared/schemas/common.schemas';
 
-/** Route paths of the client, built in one place so links and the router agree. */
-export const paths = {
+/**
+ * Every page of the client, in one place: `pages` holds the router's patterns and `paths` builds the
+ * links to them from the same patterns, so a link cannot point where no route is.
+ */
+export const pages = {
   home: '/',
-  signIn: (next?: string) => (next ? `/sign-in?next=${encodeURIComponent(next)}` : '/sign-in'),
-  signUp: (next?: string) => (next ? `/sign-up?next=${encodeURIComponent(next)}` : '/sign-up'),
+  signIn: '/sign-in',
+  signUp: '/sign-up',
   forgotPassword: '/forgot-password',
   resetPassword: '/reset-password',
   owner: '/owner',
@@ -14,29 +17,69 @@ export const paths = {
   ownerSetupStaff: '/owner/setup/staff',
   ownerSetupUnits: '/owner/setup/chairs-and-basins',
   ownerSetupServices: '/owner/setup/services',
-  ownerSetupService: (id: string) => `/owner/setup/services/${id}`,
+  ownerSetupService: '/owner/setup/services/:id',
   ownerQuotePrices: '/owner/setup/quote-prices',
   ownerFollowUps: '/owner/setup/follow-up-rules',
-  desk: (date?: string) => (date ? `/desk?date=${date}` : '/desk'),
-  deskClient: (id: string) => `/desk/clients/${id}`,
+  desk: '/desk',
+  deskClient: '/desk/clients/:id',
   outbox: '/desk/outbox',
   deskBook: '/desk/book',
-  deskBooking: (id: string) => `/desk/bookings/${id}`,
+  deskBooking: '/desk/bookings/:id',
   deskStandby: '/desk/standby',
-  deskWeek: (date?: string, stylistId?: string) => {
-    const query = new URLSearchParams();
-    if (date) query.set('date', date);
-    if (stylistId) query.set('stylist', stylistId);
-    const text = query.toString();
-    return text ? `/desk/week?${text}` : '/desk/week';
-  },
-  offer: (token: string) => `/offer/${token}`,
-  stylist: (date?: string) => (date ? `/stylist?date=${date}` : '/stylist'),
+  deskWeek: '/desk/week',
+  stylist: '/stylist',
+  mixLog: '/stylist/bookings/:id/mix-log',
+  newConsultation: '/consultations/new',
+  consultation: '/consultations/:id',
   me: '/me',
-  salon: (slug: string) => `/salon/${slug}`,
-  salonBook: (slug: string, serviceId?: string) =>
-    serviceId ? `/salon/${slug}/book?service=${encodeURIComponent(serviceId)}` : `/salon/${slug}/book`,
-  bookingConfirmed: (id: string) => `/me/bookings/${id}/booked`,
+  myHair: '/me/hair',
+  bookingConfirmed: '/me/bookings/:id/booked',
+  salon: '/salon/:slug',
+  salonBook: '/salon/:slug/book',
+  offer: '/offer/:token',
+} as const;
+
+/** A page's path with its `:params` filled (URL-encoded) and the non-empty query values appended. */
+function to(pattern: string, params: Record<string, string> = {}, query: Record<string, string | undefined> = {}): string {
+  const path = pattern.replace(/:(\w+)/g, (_m, name: string) => encodeURIComponent(params[name] ?? ''));
+  const search = new URLSearchParams(Object.entries(query).filter((e): e is [string, string] => Boolean(e[1]))).toString();
+  return search ? `${path}?${search}` : path;
+}
+
+/** Links to the pages above; the router and every link use these. */
+export const paths = {
+  home: pages.home,
+  signIn: (next?: string) => to(pages.signIn, {}, { next }),
+  signUp: (next?: string) => to(pages.signUp, {}, { next }),
+  forgotPassword: pages.forgotPassword,
+  resetPassword: pages.resetPassword,
+  owner: pages.owner,
+  ownerUtilisation: pages.ownerUtilisation,
+  deskUtilisation: pages.deskUtilisation,
+  ownerSetup: pages.ownerSetup,
+  ownerSetupStaff: pages.ownerSetupStaff,
+  ownerSetupUnits: pages.ownerSetupUnits,
+  ownerSetupServices: pages.ownerSetupServices,
+  ownerSetupService: (id: string) => to(pages.ownerSetupService, { id }),
+  ownerQuotePrices: pages.ownerQuotePrices,
+  ownerFollowUps: pages.ownerFollowUps,
+  desk: (date?: string) => to(pages.desk, {}, { date }),
+  deskClient: (id: string) => to(pages.deskClient, { id }),
+  outbox: pages.outbox,
+  deskBook: (consultationId?: string) => to(pages.deskBook, {}, { consultation: consultationId }),
+  deskBooking: (id: string) => to(pages.deskBooking, { id }),
+  deskStandby: pages.deskStandby,
+  deskWeek: (date?: string, stylistId?: string) => to(pages.deskWeek, {}, { date, stylist: stylistId }),
+  offer: (token: string) => to(pages.offer, { token }),
+  stylist: (date?: string) => to(pages.stylist, {}, { date }),
+  mixLog: (bookingId: string, clientId?: string) => to(pages.mixLog, { id: bookingId }, { client: clientId }),
+  newConsultation: (clientId: string) => to(pages.newConsultation, {}, { client: clientId }),
+  consultation: (id: string) => to(pages.consultation, { id }),
+  me: pages.me,
+  myHair: pages.myHair,
+  salon: (slug: string) => to(pages.salon, { slug }),
+  salonBook: (slug: string, serviceId?: string) => to(pages.salonBook, { slug }, { service: serviceId }),
+  bookingConfirmed: (id: string) => to(pages.bookingConfirmed, { id }),
 } as const;
 
 /** The demo salon loaded by `npm start`; signed-out visitors get a link to its public page. */
