@@ -55,6 +55,8 @@ export const OfferWindowSchema = z
     standbyEntryIds: z.array(IdSchema).min(1).max(20),
   })
   .strict();
+/** How many standby clients were sent the offer. */
+export const OfferWindowResultSchema = z.object({ offers: z.number() });
 
 export const OfferViewSchema = z.object({
   status: z.enum(['offered', 'taken', 'gone', 'expired']),

@@ -23,18 +23,18 @@ export async function withdrawStaleOffers(
 ): Promise<void> {
   // An offer's fit may start up to a day before the change and still reach into it (fits are short).
   const open = await listOpenOffers(db, stylistId, new Date(span.from.getTime() - DAY), span.to);
-  const live = open.filter((o) => o.starts_at > now);
+  const live = open.filter((o) => o.startsAt > now);
   if (live.length === 0) return;
   const day = (d: Date) => DateTime.fromJSDate(d, { zone: salon.timeZone }).toISODate()!;
-  const calendars = await loadSalonCalendars(db, salon.id, { from: day(live[0].starts_at), to: DateTime.fromISO(day(live[live.length - 1].starts_at)).plus({ days: 1 }).toISODate()! });
+  const calendars = await loadSalonCalendars(db, salon.id, { from: day(live[0].startsAt), to: DateTime.fromISO(day(live[live.length - 1].startsAt)).plus({ days: 1 }).toISODate()! });
   for (const offer of live) {
-    const service = await findService(db, salon.id, offer.service_id);
-    const fits = service && !('reason' in planExactlyAt(calendars, { skill: service.skill, stylistId, plan: service.stepPlan, start: offer.starts_at }));
+    const service = await findService(db, salon.id, offer.serviceId);
+    const fits = service && !('reason' in planExactlyAt(calendars, { skill: service.skill, stylistId, plan: service.stepPlan, start: offer.startsAt }));
     if (fits) continue;
     await setOfferStatus(db, [offer.id], 'gone');
     await planOfferGone(db, {
-      offerId: offer.id, salonId: salon.id, to: { id: offer.client_id, name: offer.clientName }, salonName: salon.name,
-      serviceName: offer.serviceName, stylistName: offer.stylistName, start: offer.starts_at, timeZone: salon.timeZone,
+      offerId: offer.id, salonId: salon.id, to: { id: offer.clientId, name: offer.clientName }, salonName: salon.name,
+      serviceName: offer.serviceName, stylistName: offer.stylistName, start: offer.startsAt, timeZone: salon.timeZone,
     }, now);
   }
 }

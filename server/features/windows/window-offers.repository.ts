@@ -1,6 +1,56 @@
 import { sql } from 'kysely';
 import type { Db } from '../../db/database';
 
+export type OfferStatus = 'offered' | 'taken' | 'gone' | 'expired';
+
+/** An offer with what its page and messages show. */
+export interface WindowOffer {
+  id: string;
+  salonId: string;
+  standbyEntryId: string;
+  clientId: string;
+  serviceId: string;
+  stylistId: string;
+  startsAt: Date;
+  status: OfferStatus;
+  expiresAt: Date;
+  salonName: string;
+  timeZone: string;
+  serviceName: string;
+  stylistName: string;
+  clientName: string;
+}
+
+/** An offer of a window slot, as an accept sees the slot's others. */
+export interface SlotOffer {
+  id: string;
+  status: OfferStatus;
+  clientId: string;
+  clientName: string;
+}
+
+/** An open offer, with what a withdrawal needs to re-check and tell. */
+export interface OpenOffer {
+  id: string;
+  clientId: string;
+  serviceId: string;
+  startsAt: Date;
+  clientName: string;
+  serviceName: string;
+  stylistName: string;
+}
+
+/** An offer as the window cards list it. */
+export interface DayOffer {
+  id: string;
+  stylistId: string;
+  startsAt: Date;
+  status: OfferStatus;
+  expiresAt: Date;
+  clientName: string;
+  serviceName: string;
+}
+
 export async function insertOffer(
   db: Db,
   o: { salonId: string; standbyEntryId: string; clientId: string; serviceId: string; stylistId: string; startsAt: Date; tokenHash: string; createdBy: string },
@@ -16,9 +66,9 @@ export async function insertOffer(
   return row.id;
 }
 
-/** An offer with what its page and messages show. */
-export async function findOffer(db: Db, tokenHash: string) {
-  return db
+/** The offer its link's token names, if any. */
+export async function findOffer(db: Db, tokenHash: string): Promise<WindowOffer | undefined> {
+  const row = await db
     .selectFrom('window_offers as o')
     .innerJoin('salons as sa', 'sa.id', 'o.salon_id')
     .innerJoin('services as sv', 'sv.id', 'o.service_id')
@@ -30,18 +80,26 @@ export async function findOffer(db: Db, tokenHash: string) {
     ])
     .where('o.token_hash', '=', tokenHash)
     .executeTakeFirst();
+  return (
+    row && {
+      id: row.id, salonId: row.salon_id, standbyEntryId: row.standby_entry_id, clientId: row.client_id, serviceId: row.service_id, stylistId: row.stylist_id,
+      startsAt: row.starts_at, status: row.status, expiresAt: row.expires_at,
+      salonName: row.salonName, timeZone: row.timeZone, serviceName: row.serviceName, stylistName: row.stylistName, clientName: row.clientName,
+    }
+  );
 }
 
 /** Every offer of the same window slot, locked: one accept at a time decides who gets it. */
-export function lockSlotOffers(db: Db, stylistId: string, startsAt: Date) {
-  return db
+export async function lockSlotOffers(db: Db, stylistId: string, startsAt: Date): Promise<SlotOffer[]> {
+  const rows = await db
     .selectFrom('window_offers as o')
     .innerJoin('clients as c', 'c.id', 'o.client_id')
-    .select(['o.id', 'o.status', 'o.client_id', 'c.name', 'c.phone', 'c.email'])
+    .select(['o.id', 'o.status', 'o.client_id', 'c.name'])
     .where('o.stylist_id', '=', stylistId)
     .where(sql<boolean>`o.starts_at = ${startsAt}`)
     .forUpdate('o')
     .execute();
+  return rows.map((r) => ({ id: r.id, status: r.status, clientId: r.client_id, clientName: r.name }));
 }
 
 export async function setOfferStatus(db: Db, ids: string[], status: 'taken' | 'gone' | 'expired', bookingId: string | null = null): Promise<void> {
@@ -49,9 +107,9 @@ export async function setOfferStatus(db: Db, ids: string[], status: 'taken' | 'g
   await db.updateTable('window_offers').set({ status, booking_id: bookingId }).where('id', 'in', ids).execute();
 }
 
-/** Open offers of a stylist starting in [from, to), with what a withdrawal needs to re-check and tell. */
-export function listOpenOffers(db: Db, stylistId: string, from: Date, to: Date) {
-  return db
+/** Open offers of a stylist starting in [from, to), earliest first. */
+export async function listOpenOffers(db: Db, stylistId: string, from: Date, to: Date): Promise<OpenOffer[]> {
+  const rows = await db
     .selectFrom('window_offers as o')
     .innerJoin('clients as c', 'c.id', 'o.client_id')
     .innerJoin('services as sv', 'sv.id', 'o.service_id')
@@ -63,11 +121,14 @@ export function listOpenOffers(db: Db, stylistId: string, from: Date, to: Date) 
     .where('o.starts_at', '<', to)
     .orderBy('o.starts_at')
     .execute();
+  return rows.map((r) => ({
+    id: r.id, clientId: r.client_id, serviceId: r.service_id, startsAt: r.starts_at, clientName: r.clientName, serviceName: r.serviceName, stylistName: r.stylistName,
+  }));
 }
 
 /** The salon's offers starting in [from, to), for the window cards. */
-export function listDayOffers(db: Db, salonId: string, from: Date, to: Date) {
-  return db
+export async function listDayOffers(db: Db, salonId: string, from: Date, to: Date): Promise<DayOffer[]> {
+  const rows = await db
     .selectFrom('window_offers as o')
     .innerJoin('clients as c', 'c.id', 'o.client_id')
     .innerJoin('services as sv', 'sv.id', 'o.service_id')
@@ -78,4 +139,7 @@ export function listDayOffers(db: Db, salonId: string, from: Date, to: Date) {
     .orderBy('o.starts_at')
     .orderBy('c.name')
     .execute();
+  return rows.map((r) => ({
+    id: r.id, stylistId: r.stylist_id, startsAt: r.starts_at, status: r.status, expiresAt: r.expires_at, clientName: r.clientName, serviceName: r.serviceName,
+  }));
 }

@@ -2,7 +2,6 @@ import { randomBytes } from 'node:crypto';
 import type { Kysely } from 'kysely';
 import type { z } from 'zod';
 import type { Database } from '../../db/schema';
-import type { Salon } from '../../../shared/schemas/salon.schemas';
 import type { SessionUser } from '../../../shared/schemas/auth.schemas';
 import type { OfferViewSchema, OfferWindowSchema } from '../../../shared/schemas/window.schemas';
 import type { Senders } from '../messages/send-message.job';
@@ -20,7 +19,8 @@ import { sendOffer, sendOfferGone, sendOfferTaken } from './offer-messages';
 type OfferView = z.infer<typeof OfferViewSchema>;
 
 /** Sends each chosen standby client a link to the window; returns how many were offered. */
-export async function offerWindow(db: Kysely<Database>, senders: Senders, salon: Salon, user: SessionUser, body: z.infer<typeof OfferWindowSchema>, baseUrl: string) {
+export async function offerWindow(db: Kysely<Database>, senders: Senders, user: SessionUser, body: z.infer<typeof OfferWindowSchema>, baseUrl: string) {
+  const salon = await findSalon(db, user.salonId);
   if (user.role === 'stylist' && (await findStaffIdForUser(db, user.id)) !== body.stylistId) throw forbidden();
   const [service, stylists, entries] = await Promise.all([findService(db, salon.id, body.serviceId), listStylists(db, salon.id), listStandby(db, salon.id)]);
   const stylist = stylists.find((s) => s.id === body.stylistId);
@@ -54,8 +54,8 @@ export async function offerWindow(db: Kysely<Database>, senders: Senders, salon:
 export async function viewOffer(db: Kysely<Database>, token: string, now = new Date()): Promise<OfferView> {
   const offer = await findOffer(db, sha256(token));
   if (!offer) throw notFound('That offer');
-  const status = offer.status === 'offered' && offer.expires_at <= now ? 'expired' : offer.status;
-  return { status, salonName: offer.salonName, serviceName: offer.serviceName, stylistName: offer.stylistName, start: offer.starts_at.toISOString(), timeZone: offer.timeZone, clientName: offer.clientName };
+  const status = offer.status === 'offered' && offer.expiresAt <= now ? 'expired' : offer.status;
+  return { status, salonName: offer.salonName, serviceName: offer.serviceName, stylistName: offer.stylistName, start: offer.startsAt.toISOString(), timeZone: offer.timeZone, clientName: offer.clientName };
 }
 
 /** First to accept wins: the slot's offers are locked, the engine re-checks, the others are told it has gone. */
@@ -65,27 +65,27 @@ export async function acceptOffer(db: Kysely<Database>, senders: Senders, token:
     // deadlock with another accept of the same slot.
     const found = await findOffer(trx, sha256(token));
     if (!found) throw notFound('That offer');
-    await lockStylists(trx, [found.stylist_id]);
-    const slot = await lockSlotOffers(trx, found.stylist_id, found.starts_at);
+    await lockStylists(trx, [found.stylistId]);
+    const slot = await lockSlotOffers(trx, found.stylistId, found.startsAt);
     const offer = (await findOffer(trx, sha256(token)))!;
     if (offer.status !== 'offered' || slot.some((o) => o.status === 'taken')) throw new AppError('CONFLICT', 409, 'Sorry — someone else took this time first.');
-    if (offer.expires_at <= now) throw new AppError('CONFLICT', 409, 'Sorry — this offer has run out.');
-    const salon = await findSalon(trx, offer.salon_id);
-    const service = await findService(trx, salon.id, offer.service_id);
+    if (offer.expiresAt <= now) throw new AppError('CONFLICT', 409, 'Sorry — this offer has run out.');
+    const salon = await findSalon(trx, offer.salonId);
+    const service = await findService(trx, salon.id, offer.serviceId);
     if (!service) throw notFound('That service');
     // The slot's offers are settled before booking, so the booking's own withdrawal of clashing offers leaves
     // them alone: the winner is not told "gone", and the others hear it at once below.
     const others = slot.filter((o) => o.id !== offer.id && o.status === 'offered');
     await setOfferStatus(trx, [offer.id], 'taken');
     await setOfferStatus(trx, others.map((o) => o.id), 'gone');
-    const bookingId = await bookAt(trx, { salon, clientId: offer.client_id, service, plan: service.stepPlan, stylistId: offer.stylist_id, start: offer.starts_at, actorUserId: null, now });
+    const bookingId = await bookAt(trx, { salon, clientId: offer.clientId, service, plan: service.stepPlan, stylistId: offer.stylistId, start: offer.startsAt, actorUserId: null, now });
     await setOfferStatus(trx, [offer.id], 'taken', bookingId);
-    await closeStandby(trx, salon.id, offer.standby_entry_id);
+    await closeStandby(trx, salon.id, offer.standbyEntryId);
     return { others, offer, salon, service };
   });
   const { offer, salon, service } = losers;
-  const about = { salonId: salon.id, salonName: salon.name, serviceName: service.name, stylistName: offer.stylistName, start: offer.starts_at, timeZone: salon.timeZone };
-  await sendOfferTaken(db, senders, { ...about, offerId: offer.id, to: { id: offer.client_id, name: offer.clientName } });
-  for (const o of losers.others) await sendOfferGone(db, senders, { ...about, offerId: o.id, to: { id: o.client_id, name: o.name } });
+  const about = { salonId: salon.id, salonName: salon.name, serviceName: service.name, stylistName: offer.stylistName, start: offer.startsAt, timeZone: salon.timeZone };
+  await sendOfferTaken(db, senders, { ...about, offerId: offer.id, to: { id: offer.clientId, name: offer.clientName } });
+  for (const o of losers.others) await sendOfferGone(db, senders, { ...about, offerId: o.id, to: { id: o.clientId, name: o.clientName } });
   return viewOffer(db, token, now);
 }

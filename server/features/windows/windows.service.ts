@@ -23,13 +23,13 @@ export async function listWindowViews(db: Db, salon: Salon, date: string, stylis
     listStandby(db, salon.id),
     listDayOffers(db, salon.id, dayStart, dayEnd),
   ]);
-  const offers = offerRows.filter((o) => !stylistId || o.stylist_id === stylistId).map((o) => ({
-    stylistId: o.stylist_id,
-    start: DateTime.fromJSDate(o.starts_at, { zone: salon.timeZone }).toISO({ suppressMilliseconds: true })!,
-    at: o.starts_at.getTime(),
+  const offers = offerRows.filter((o) => !stylistId || o.stylistId === stylistId).map((o) => ({
+    stylistId: o.stylistId,
+    start: DateTime.fromJSDate(o.startsAt, { zone: salon.timeZone }).toISO({ suppressMilliseconds: true })!,
+    at: o.startsAt.getTime(),
     clientName: o.clientName,
     serviceName: o.serviceName,
-    status: o.status === 'offered' && o.expires_at <= now ? ('expired' as const) : o.status,
+    status: o.status === 'offered' && o.expiresAt <= now ? ('expired' as const) : o.status,
   }));
   const inWindow = (o: (typeof offers)[number], w: { stylist: string; start: string; end: string }) =>
     o.stylistId === w.stylist && o.at >= Date.parse(w.start) && o.at < Date.parse(w.end);

@@ -2,7 +2,7 @@ import type { QueryClient } from '@tanstack/react-query';
 import type { BookingView } from '../../../../shared/schemas/booking-view.schemas';
 import { dayQueries } from '../../day-book/api/day-queries';
 import { weekQueries } from '../../week/api/week-queries';
-import { windowQueries } from '../../windows/api/window-queries';
+import { windowsChanged } from '../../../lib/cache-rules';
 import { bookingQueries } from './booking-queries';
 
 /**
@@ -18,6 +18,6 @@ export function bookChanged(queryClient: QueryClient, booking: BookingView): Pro
     queryClient.invalidateQueries({ queryKey: [...bookingQueries.details(), booking.id, 'move-times'] }),
     queryClient.invalidateQueries({ queryKey: dayQueries.all() }),
     queryClient.invalidateQueries({ queryKey: weekQueries.all() }),
-    queryClient.invalidateQueries({ queryKey: windowQueries.all() }),
+    windowsChanged(queryClient),
   ]);
 }

@@ -3,7 +3,7 @@ import type { OfferViewSchema } from '../../../../shared/schemas/window.schemas'
 import { Button } from '../../../components/ui/button';
 import { FormAlert } from '../../../components/ui/form-alert';
 import { formatDay, formatTime, zoneLabel } from '../../../lib/time';
-import { useAcceptOffer } from '../api/offer-queries';
+import { useAcceptOffer } from '../api/offer-mutations';
 
 type Offer = z.output<typeof OfferViewSchema>;
 type Props = { token: string; offer: Offer };

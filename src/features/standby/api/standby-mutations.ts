@@ -1,32 +1,21 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { apiPaths } from '../../../../shared/api/api-paths';
-import { StandbyEntrySchema, type CreateStandby } from '../../../../shared/schemas/standby.schemas';
-import { apiWrite } from '../../../lib/api-client';
-import { windowQueries } from '../../windows/api/window-queries';
-import { standbyQueries } from './standby-queries';
-
-// Windows list the standby clients who want them, so they change with the list.
-function useStandbyChanged() {
-  const queryClient = useQueryClient();
-  return () =>
-    Promise.all([
-      queryClient.invalidateQueries({ queryKey: standbyQueries.list().queryKey }),
-      queryClient.invalidateQueries({ queryKey: windowQueries.all() }),
-    ]);
-}
+import { standbyApi } from '../../../../shared/api/standby.api';
+import type { CreateStandby } from '../../../../shared/schemas/standby.schemas';
+import { callApi } from '../../../lib/api-client';
+import { standbyChanged } from '../../../lib/cache-rules';
 
 export function useAddStandby() {
-  const changed = useStandbyChanged();
+  const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (body: CreateStandby) => apiWrite('POST', apiPaths.standby, body, StandbyEntrySchema),
-    onSuccess: changed,
+    mutationFn: (body: CreateStandby) => callApi(standbyApi.add, { body }),
+    onSuccess: () => standbyChanged(queryClient),
   });
 }
 
 export function useRemoveStandby() {
-  const changed = useStandbyChanged();
+  const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (id: string) => apiWrite('DELETE', apiPaths.standbyEntry(id)),
-    onSuccess: changed,
+    mutationFn: (id: string) => callApi(standbyApi.remove, { params: { id } }),
+    onSuccess: () => standbyChanged(queryClient),
   });
 }

@@ -1,13 +1,6 @@
-import { queryOptions } from '@tanstack/react-query';
-import { apiPaths } from '../../../../shared/api/api-paths';
-import { StandbyListSchema } from '../../../../shared/schemas/standby.schemas';
-import { apiGet } from '../../../lib/api-client';
+import { standbyApi } from '../../../../shared/api/standby.api';
+import { apiQuery } from '../../../lib/api-client';
 
 export const standbyQueries = {
-  all: () => ['standby'] as const,
-  list: () =>
-    queryOptions({
-      queryKey: [...standbyQueries.all(), 'list'] as const,
-      queryFn: () => apiGet(apiPaths.standby, StandbyListSchema),
-    }),
+  list: () => apiQuery(standbyApi.list),
 };

@@ -1,25 +1,16 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { z } from 'zod';
-import { apiPaths } from '../../../../shared/api/api-paths';
-import { BookingViewSchema } from '../../../../shared/schemas/booking-view.schemas';
+import type { z } from 'zod';
+import { windowsApi } from '../../../../shared/api/windows.api';
 import type { FillWindowSchema, OfferWindowSchema } from '../../../../shared/schemas/window.schemas';
-import { apiWrite } from '../../../lib/api-client';
-import { bookChanged } from '../../bookings/api/book-changed';
-import { standbyQueries } from '../../standby/api/standby-queries';
-import { windowQueries } from './window-queries';
-
-const OfferResultSchema = z.object({ offers: z.number().int() });
+import { callApi } from '../../../lib/api-client';
+import { windowFilled, windowsChanged } from '../../../lib/cache-rules';
 
 export function useFillWindow() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (body: z.input<typeof FillWindowSchema>) => apiWrite('POST', apiPaths.fillWindow, body, BookingViewSchema),
-    onSuccess: (booking, body) =>
-      Promise.all([
-        bookChanged(queryClient, booking),
-        // Booking a standby client closes their entry.
-        body.standbyEntryId && queryClient.invalidateQueries({ queryKey: standbyQueries.list().queryKey }),
-      ]),
+    mutationFn: (body: z.input<typeof FillWindowSchema>) => callApi(windowsApi.fill, { body }),
+    // Booking a standby client closes their entry.
+    onSuccess: (_booking, body) => windowFilled(queryClient, { standbyClosed: Boolean(body.standbyEntryId) }),
   });
 }
 
@@ -27,7 +18,7 @@ export function useFillWindow() {
 export function useOfferWindow() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (body: z.input<typeof OfferWindowSchema>) => apiWrite('POST', apiPaths.offerWindow, body, OfferResultSchema),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: windowQueries.all() }),
+    mutationFn: (body: z.input<typeof OfferWindowSchema>) => callApi(windowsApi.offer, { body }),
+    onSuccess: () => windowsChanged(queryClient),
   });
 }
