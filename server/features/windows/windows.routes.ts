@@ -8,7 +8,7 @@ import { apiRoute } from '../../lib/api-route';
 import { findSalon } from '../salon/salon.repository';
 import { findStaffIdForUser } from '../bookings/salon-resources.repository';
 import { todayIn } from '../bookings/day-view.service';
-import { deskBookingView } from '../bookings/booking-changes.routes';
+import { deskBookingView } from '../bookings/booking-view.service';
 import { listWindowViews } from './windows.service';
 import { fillWindow } from './fill-window.service';
 import { acceptOffer, offerWindow, viewOffer } from './window-offers.service';
