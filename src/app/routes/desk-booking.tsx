@@ -19,7 +19,7 @@ import { queryClient } from '../../lib/query-client';
 export async function loader({ params }: LoaderFunctionArgs) {
   if (!IdSchema.safeParse(params.id).success) throw new Response(null, { status: 404 });
   await Promise.all([
-    queryClient.ensureQueryData(bookingQueries.detail(params.id!)),
+    queryClient.ensureQueryData(bookingQueries.one(params.id!)),
     queryClient.ensureQueryData(salonQueries.current()),
     queryClient.ensureQueryData(catalogueQueries.stylists()),
   ]);
@@ -28,7 +28,7 @@ export async function loader({ params }: LoaderFunctionArgs) {
 
 export function Component() {
   const { id } = useParams();
-  const { data: booking } = useSuspenseQuery(bookingQueries.detail(id!));
+  const { data: booking } = useSuspenseQuery(bookingQueries.one(id!));
   const { data: salon } = useSuspenseQuery(salonQueries.current());
   const { data: stylists } = useSuspenseQuery(catalogueQueries.stylists());
   const first = booking.sittings[0];

@@ -5,7 +5,8 @@ import { FormAlert } from '../../../components/ui/form-alert';
 import { LoadingState } from '../../../components/ui/loading-state';
 import { TextField } from '../../../components/ui/text-field';
 import { problemText } from '../../../lib/api-error';
-import { myBookingQueries, useCancelMyBooking } from '../api/my-booking-queries';
+import { myBookingQueries } from '../api/my-booking-queries';
+import { useCancelMyBooking } from '../api/my-booking-mutations';
 import { CancelTermsNotice } from './cancel-terms-notice';
 
 type Props = { bookingId: string; onClose: () => void; onCancelled: () => void };

@@ -8,7 +8,8 @@ import { LoadingState } from '../../../components/ui/loading-state';
 import { TimeZoneNote } from '../../../components/ui/time-zone-note';
 import { problemText } from '../../../lib/api-error';
 import { dayAfterLast, freeTimeKey, freeTimeLabel, type FreeTime } from '../../../lib/free-times';
-import { myBookingQueries, useMoveMyBooking } from '../api/my-booking-queries';
+import { myBookingQueries } from '../api/my-booking-queries';
+import { useMoveMyBooking } from '../api/my-booking-mutations';
 
 type Props = { bookingId: string; onClose: () => void; onMoved: () => void };
 

@@ -4,7 +4,7 @@ import { apiPaths } from '../../../../shared/api/api-paths';
 import { BookingViewSchema } from '../../../../shared/schemas/booking-view.schemas';
 import type { FillWindowSchema, OfferWindowSchema } from '../../../../shared/schemas/window.schemas';
 import { apiWrite } from '../../../lib/api-client';
-import { bookChanged } from '../../bookings/api/book-changed';
+import { bookingChanged } from '../../../lib/cache-rules';
 import { standbyQueries } from '../../standby/api/standby-queries';
 import { windowQueries } from './window-queries';
 
@@ -16,7 +16,7 @@ export function useFillWindow() {
     mutationFn: (body: z.input<typeof FillWindowSchema>) => apiWrite('POST', apiPaths.fillWindow, body, BookingViewSchema),
     onSuccess: (booking, body) =>
       Promise.all([
-        bookChanged(queryClient, booking),
+        bookingChanged(queryClient, booking),
         // Booking a standby client closes their entry.
         body.standbyEntryId && queryClient.invalidateQueries({ queryKey: standbyQueries.list().queryKey }),
       ]),
