@@ -3,9 +3,10 @@ import type { SessionUser } from '../../../shared/schemas/auth.schemas';
 import type { BookingOptionsRequest, BookingOptionsResponse, ChangePlanSchema, CreateBooking, DeskMoveTimesQuerySchema, MoveSittingSchema } from '../../../shared/schemas/booking.schemas';
 import type { BookingView } from '../../../shared/schemas/booking-view.schemas';
 import type { Availability, CancelTerms } from '../../../shared/schemas/online-booking.schemas';
+import type { Salon } from '../../../shared/schemas/salon.schemas';
+import type { Kysely } from 'kysely';
 import type { Db } from '../../db/database';
 import type { Database } from '../../db/schema';
-import type { Kysely } from 'kysely';
 import { findSalon } from '../salon/salon.repository';
 import { findBookingOptions } from './booking-options.service';
 import { deskBookingView } from './booking-view.service';
@@ -22,30 +23,31 @@ import { deskMoveTimes } from './move-times.service';
 
 type Writer = Kysely<Database>;
 
+/** Finds the caller's salon, makes the change (which names the booking it wrote) and answers that booking. */
+async function changeAtDesk(db: Writer, user: SessionUser, change: (salon: Salon) => Promise<string>): Promise<BookingView> {
+  const salon = await findSalon(db, user.salonId);
+  return deskBookingView(db, salon.id, salon.timeZone, await change(salon));
+}
+
 /** Options for a (possibly edited) service for a client, earliest first, one per stylist and day. */
 export async function deskBookingOptions(db: Db, user: SessionUser, body: Required<BookingOptionsRequest>, now: Date): Promise<BookingOptionsResponse> {
   return findBookingOptions(db, await findSalon(db, user.salonId), body, now);
 }
 
 /** Books one option (all its sittings), or answers the booking already made with this idempotency key. */
-export async function bookAtDesk(db: Writer, user: SessionUser, body: CreateBooking, now: Date): Promise<BookingView> {
-  const salon = await findSalon(db, user.salonId);
-  const id = await createBooking(db, salon, user, body, now);
-  return deskBookingView(db, salon.id, salon.timeZone, id);
+export function bookAtDesk(db: Writer, user: SessionUser, body: CreateBooking, now: Date): Promise<BookingView> {
+  return changeAtDesk(db, user, (salon) => createBooking(db, salon, user, body, now));
 }
 
 /** Moves one sitting (and, for a booking of one sitting, maybe its stylist); the desk may move one waiting on a skin test. */
-export async function moveAtDesk(db: Writer, user: SessionUser, bookingId: string, body: z.output<typeof MoveSittingSchema>, now: Date): Promise<BookingView> {
-  const salon = await findSalon(db, user.salonId);
-  await moveSitting(db, salon, user.id, { bookingId, sitting: body.sitting, start: new Date(body.start), stylistId: body.stylistId, chairId: body.chairId, allowWaitingOnTest: true }, now);
-  return deskBookingView(db, salon.id, salon.timeZone, bookingId);
+export function moveAtDesk(db: Writer, user: SessionUser, bookingId: string, body: z.output<typeof MoveSittingSchema>, now: Date): Promise<BookingView> {
+  const move = { bookingId, sitting: body.sitting, start: new Date(body.start), stylistId: body.stylistId, chairId: body.chairId, allowWaitingOnTest: true };
+  return changeAtDesk(db, user, (salon) => moveSitting(db, salon, user.id, move, now).then(() => bookingId));
 }
 
 /** Replaces the booking's step plan, each sitting kept at its start. */
-export async function changePlanAtDesk(db: Writer, user: SessionUser, bookingId: string, body: z.output<typeof ChangePlanSchema>, now: Date): Promise<BookingView> {
-  const salon = await findSalon(db, user.salonId);
-  await changePlan(db, salon, user.id, bookingId, body.stepPlan, now);
-  return deskBookingView(db, salon.id, salon.timeZone, bookingId);
+export function changePlanAtDesk(db: Writer, user: SessionUser, bookingId: string, body: z.output<typeof ChangePlanSchema>, now: Date): Promise<BookingView> {
+  return changeAtDesk(db, user, (salon) => changePlan(db, salon, user.id, bookingId, body.stepPlan, now).then(() => bookingId));
 }
 
 /** Free starts for one sitting, as the move itself would accept them. */
@@ -60,8 +62,6 @@ export async function cancelTermsAtDesk(db: Db, user: SessionUser, bookingId: st
 }
 
 /** Cancels with a reason; the deposit policy decides kept or refunded. */
-export async function cancelAtDesk(db: Writer, user: SessionUser, bookingId: string, reason: string, now: Date): Promise<BookingView> {
-  const salon = await findSalon(db, user.salonId);
-  await cancelBooking(db, salon, user.id, bookingId, reason, now);
-  return deskBookingView(db, salon.id, salon.timeZone, bookingId);
+export function cancelAtDesk(db: Writer, user: SessionUser, bookingId: string, reason: string, now: Date): Promise<BookingView> {
+  return changeAtDesk(db, user, (salon) => cancelBooking(db, salon, user.id, bookingId, reason, now).then(() => bookingId));
 }
