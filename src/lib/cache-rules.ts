@@ -1,8 +1,12 @@
 import type { QueryClient } from '@tanstack/react-query';
 import type { Answer, Endpoint } from '../../shared/api/endpoint';
+import { bookingsApi } from '../../shared/api/bookings.api';
+import { onlineBookingApi } from '../../shared/api/online-booking.api';
 import { photosApi } from '../../shared/api/photos.api';
 import { standbyApi } from '../../shared/api/standby.api';
 import { offersApi, windowsApi } from '../../shared/api/windows.api';
+import type { BookingView } from '../../shared/schemas/booking-view.schemas';
+import type { Hold } from '../../shared/schemas/online-booking.schemas';
 import { apiKey } from './api-client';
 
 /*
@@ -24,6 +28,52 @@ export function refreshRecord(queryClient: QueryClient, endpoints: readonly Endp
 /** A photo was added or removed: every photo list (the client's own, and the team's view of them). */
 export const photosChanged = (queryClient: QueryClient) => refreshEndpoints(queryClient, [photosApi.mine, photosApi.ofClient]);
 
+/** The days and weeks of the book, as the desk and the stylists read them. */
+const BOOK_VIEWS = [bookingsApi.deskDay, bookingsApi.stylistDay, bookingsApi.deskWeek];
+
+// ——— Bookings: the desk's changes to bookings, a client's own bookings, and held times online ———
+
+/* The client card is still keyed by its feature's name until the client records read through their contracts. */
+const clientCardKey = (clientId: string) => ['clients', 'detail', clientId] as const;
+
+/**
+ * A booking was written at the desk (booked, moved, re-planned, cancelled, or booked into a window): its own page
+ * gets the server's answer, and every view whose times it may touch is read again — its history and free times to
+ * move to, the days and weeks of the book (a move can change dates, so all of them), and the hands-free windows.
+ */
+export function bookingChanged(queryClient: QueryClient, booking: BookingView): Promise<unknown> {
+  queryClient.setQueryData(apiKey(bookingsApi.one, { params: { id: booking.id } }), booking);
+  return Promise.all([
+    refreshRecord(queryClient, [bookingsApi.history, bookingsApi.moveTimes], booking.id),
+    refreshEndpoints(queryClient, [...BOOK_VIEWS, windowsApi.list]),
+  ]);
+}
+
+/** A new booking at the desk: as any change, and the client's card lists it. */
+export const bookingMade = (queryClient: QueryClient, booking: BookingView): Promise<unknown> =>
+  Promise.all([bookingChanged(queryClient, booking), queryClient.invalidateQueries({ queryKey: clientCardKey(booking.client.id) })]);
+
+/** A client cancelled or moved one of their own bookings: their list is read again. */
+export const myBookingChanged = (queryClient: QueryClient): Promise<unknown> => refreshEndpoints(queryClient, [bookingsApi.mine]);
+
+/** A time was just held: the hold's own read starts from the answer. */
+export function timeHeld(queryClient: QueryClient, hold: Hold): void {
+  queryClient.setQueryData(apiKey(onlineBookingApi.hold, { params: { id: hold.holdId } }), hold);
+}
+
+/** Someone took a free time meanwhile (409): every list of free times is stale. */
+export const freeTimesTaken = (queryClient: QueryClient): Promise<unknown> => refreshEndpoints(queryClient, [onlineBookingApi.availability]);
+
+/** The client holds a time already (made in another tab): their open holds are read again to show it. */
+export const openHoldsChanged = (queryClient: QueryClient): Promise<unknown> => refreshEndpoints(queryClient, [onlineBookingApi.myHolds]);
+
+/** A held time was released: the lists that showed it, and the free times it returns to. */
+export const holdReleased = (queryClient: QueryClient): Promise<unknown> =>
+  refreshEndpoints(queryClient, [onlineBookingApi.myHolds, onlineBookingApi.availability, bookingsApi.mine]);
+
+/** A write found the hold lapsed: its cached state is read again so every step sees it. */
+export const holdLapsed = (queryClient: QueryClient, holdId: string): Promise<unknown> => refreshRecord(queryClient, [onlineBookingApi.hold], holdId);
+
 /* Hands-free time: windows, the standby list and window offers. */
 
 /** The hands-free windows of any day may have opened or closed (a booking was written, an offer went out). */
@@ -33,26 +83,11 @@ export const windowsChanged = (queryClient: QueryClient) => refreshEndpoints(que
 export const standbyChanged = (queryClient: QueryClient) => refreshEndpoints(queryClient, [standbyApi.list, windowsApi.list]);
 
 /**
- * A window was filled: the new booking sits in the day and week views (desk and stylist), the windows
- * change, and a standby client who got the time leaves the list.
+ * A window was filled: the new booking is written like any other (its page, the days and weeks, the
+ * windows), and a standby client who got the time leaves the list.
  */
-export function windowFilled(queryClient: QueryClient, { standbyClosed }: { standbyClosed: boolean }): Promise<unknown> {
-  return Promise.all([refreshEndpoints(queryClient, standbyClosed ? [windowsApi.list, standbyApi.list] : [windowsApi.list]), refreshBookViews(queryClient)]);
-}
-
-// The day and week views belong to the bookings area, whose contracts are not written yet, so they are
-// matched by path: every cached answer under the desk's and the stylist's paths (day, week, utilisation).
-// merge: once bookingChanged(queryClient, booking) exists here, windowFilled calls it instead (it also
-// seeds the new booking's own page), and the hand-written ['day'] and ['week'] roots go with their factories.
-const BOOK_VIEW_PREFIXES = ['/api/desk/', '/api/stylist/'];
-const LEGACY_BOOK_VIEW_ROOTS = ['day', 'week'];
-
-function refreshBookViews(queryClient: QueryClient): Promise<unknown> {
-  return queryClient.invalidateQueries({
-    predicate: ({ queryKey: [root, path] }) =>
-      (root === 'api' && typeof path === 'string' && BOOK_VIEW_PREFIXES.some((prefix) => path.startsWith(prefix))) ||
-      LEGACY_BOOK_VIEW_ROOTS.includes(String(root)),
-  });
+export function windowFilled(queryClient: QueryClient, booking: BookingView, { standbyClosed }: { standbyClosed: boolean }): Promise<unknown> {
+  return Promise.all([bookingChanged(queryClient, booking), standbyClosed && refreshEndpoints(queryClient, [standbyApi.list])]);
 }
 
 /** An offer was taken through its link: its page shows the answer (taken) without asking again. */

@@ -68,7 +68,7 @@ async function clientWith(tests: Test[]) {
 
 let keys = 0;
 const book = (clientId: string, serviceId: string, stepPlan: StepPlan, start = localIso(tuesday, '10:00'), extra: object = {}) =>
-  desk$.write('post', apiPaths.bookings, { clientId, serviceId, stepPlan, stylistId: ana.staffId, start, idempotencyKey: `doors-${++keys}-${Date.now()}`, ...extra });
+  desk$.write('post', '/api/bookings', { clientId, serviceId, stepPlan, stylistId: ana.staffId, start, idempotencyKey: `doors-${++keys}-${Date.now()}`, ...extra });
 
 function expectRefused(res: { status: number; body: { error: { code: string; message: string } } }, why: RegExp) {
   expect(res.status).toBe(409);
@@ -80,7 +80,7 @@ describe('the ways round, each refused with the reason', () => {
   it('a positive test followed by a newer test that is merely applied, or booked', async () => {
     const client = await clientWith([{ appliedDaysAgo: 60, result: 'positive' }, { appliedDaysAgo: 2, result: 'pending', recordedDaysAgo: 2 }]);
     expectRefused(await book(client.clientId!, rootColour, oxidative), /showed a reaction/);
-    const options = await desk$.write('post', apiPaths.bookingOptions, { clientId: client.clientId, serviceId: rootColour, stepPlan: oxidative, stylistId: null, earliestDate: tuesday });
+    const options = await desk$.write('post', '/api/booking-options', { clientId: client.clientId, serviceId: rootColour, stepPlan: oxidative, stylistId: null, earliestDate: tuesday });
     expect(options.body.skinTest).toMatchObject({ ok: false, status: 'blocked' });
     expect(options.body.options).toEqual([]);
   });
@@ -144,7 +144,7 @@ describe('other doors use the same rule', () => {
     const inside = localIso(futureWeekday(4, 1), '10:00');
     const booked = await book(client.clientId!, rootColour, oxidative, inside);
     expect(booked.status).toBe(201);
-    const moved = await desk$.write('post', apiPaths.moveSitting(booked.body.id), { sitting: 1, start: localIso(futureWeekday(4, 5), '10:00') });
+    const moved = await desk$.write('post', `/api/bookings/${booked.body.id}/move`, { sitting: 1, start: localIso(futureWeekday(4, 5), '10:00') });
     expectRefused(moved, /after the skin test stops being valid/);
   });
 
@@ -168,10 +168,10 @@ describe('other doors use the same rule', () => {
   it('online: a hold for colour cannot be claimed on an unread test (waiting is for the desk only)', async () => {
     const client = await clientWith([{ appliedDaysAgo: 2, result: 'pending', recordedDaysAgo: 2 }]);
     const visitor = await anonymousAgent(t.app);
-    const held = await visitor.write('post', apiPaths.holds, { salonSlug: slug, serviceId: rootColour, stylistId: ana.staffId, start: localIso(futureWeekday(5, 3), '10:00') }, { 'X-Forwarded-For': '10.9.0.1' });
+    const held = await visitor.write('post', '/api/public/holds', { salonSlug: slug, serviceId: rootColour, stylistId: ana.staffId, start: localIso(futureWeekday(5, 3), '10:00') }, { 'X-Forwarded-For': '10.9.0.1' });
     expect(held.status).toBe(201);
     const c = await signedInAgent(t.app, client.email, client.password);
-    const claim = await c.write('post', apiPaths.claimHold(held.body.holdId), { secret: held.body.holdSecret });
+    const claim = await c.write('post', `/api/me/holds/${held.body.holdId}/claim`, { secret: held.body.holdSecret });
     expectRefused(claim, /read negative first/);
   });
 });
@@ -184,7 +184,7 @@ describe('a reaction recorded later flags the bookings it affects', () => {
     expect(booked.status).toBe(201);
     const id = booked.body.id as string;
     await t.testDb.db.updateTable('bookings').set({ deposit_cents: 4000 }).where('id', '=', id).execute();
-    expect((await desk$.get(apiPaths.booking(id))).body.skinTest.status).toBe('passed');
+    expect((await desk$.get(`/api/bookings/${id}`)).body.skinTest.status).toBe('passed');
     const queued = () => t.testDb.db.selectFrom('messages').select(['kind', 'status']).where('booking_id', '=', id).where('kind', 'like', 'reminder%').execute();
     expect((await queued()).every((m) => m.status === 'queued')).toBe(true);
     expect((await queued()).length).toBeGreaterThan(0);
@@ -194,7 +194,7 @@ describe('a reaction recorded later flags the bookings it affects', () => {
       appliedAt: new Date(Date.now() - 3 * DAY).toISOString(), readAt: new Date(Date.now() - DAY).toISOString(), result: 'positive', product: 'Permanent colour with 6 % developer', notes: 'Redness behind the ear',
     });
     expect(recorded.status).toBe(201);
-    const view = (await desk$.get(apiPaths.booking(id))).body;
+    const view = (await desk$.get(`/api/bookings/${id}`)).body;
     expect(view.skinTest).toMatchObject({ status: 'blocked', message: expect.stringMatching(/showed a reaction/) });
     expect((await queued()).every((m) => m.status === 'dropped')).toBe(true);
 
@@ -206,9 +206,9 @@ describe('a reaction recorded later flags the bookings it affects', () => {
     const list = (await desk$.get(apiPaths.skinTests(client.clientId!))).body;
     expect(list.clearances).toMatchObject([{ reason: 'Written advice from the client’s dermatologist, 2 Dec' }]);
     // Cleared, but the newest reading is still the reaction: colour needs a new negative test.
-    expect((await desk$.get(apiPaths.booking(id))).body.skinTest.status).toBe('blocked');
+    expect((await desk$.get(`/api/bookings/${id}`)).body.skinTest.status).toBe('blocked');
 
-    const cancelled = await desk$.write('post', apiPaths.cancelBooking(id), { reason: 'Skin test showed a reaction' });
+    const cancelled = await desk$.write('post', `/api/bookings/${id}/cancel`, { reason: 'Skin test showed a reaction' });
     expect(cancelled.status).toBe(200);
     expect(cancelled.body.depositOutcome).toBe('refunded');
   });
@@ -225,7 +225,7 @@ describe('a reaction recorded later flags the bookings it affects', () => {
     const test = (await desk$.get(apiPaths.skinTests(client.clientId!))).body.tests[0];
     const read = await desk$.write('post', apiPaths.skinTestReading(client.clientId!, test.id), { readAt: new Date().toISOString(), result: 'negative' });
     expect(read.status).toBe(200);
-    expect((await desk$.get(apiPaths.booking(booked.body.id))).body.skinTest.status).toBe('passed');
+    expect((await desk$.get(`/api/bookings/${booked.body.id}`)).body.skinTest.status).toBe('passed');
   });
 });
 
@@ -238,9 +238,9 @@ describe('hair history reaches booking', () => {
     });
     expect(saved.status).toBe(200);
     const visitor = await anonymousAgent(t.app);
-    const held = await visitor.write('post', apiPaths.holds, { salonSlug: slug, serviceId: rootColour, stylistId: ana.staffId, start: localIso(futureWeekday(5, 4), '10:00') }, { 'X-Forwarded-For': '10.9.0.2' });
+    const held = await visitor.write('post', '/api/public/holds', { salonSlug: slug, serviceId: rootColour, stylistId: ana.staffId, start: localIso(futureWeekday(5, 4), '10:00') }, { 'X-Forwarded-For': '10.9.0.2' });
     expect(held.status).toBe(201);
-    expectRefused(await c.write('post', apiPaths.claimHold(held.body.holdId), { secret: held.body.holdSecret }), /reacted to hair colour before.*book a consultation/);
+    expectRefused(await c.write('post', `/api/me/holds/${held.body.holdId}/claim`, { secret: held.body.holdSecret }), /reacted to hair colour before.*book a consultation/);
     const card = (await desk$.get(apiPaths.client(client.clientId!))).body;
     expect(card.reportedReaction).toBe('Itchy scalp and swelling after a box dye, 2024');
   });
@@ -270,8 +270,8 @@ describe('age', () => {
     expect(refused.status).toBe(409);
     expect(refused.body.error).toMatchObject({ code: 'AGE_CONSENT', message: expect.stringMatching(/under 16.*guardian/) });
     const visitor = await anonymousAgent(t.app);
-    const held = await visitor.write('post', apiPaths.holds, { salonSlug: slug, serviceId: rootColour, stylistId: ana.staffId, start: localIso(futureWeekday(2, 5), '13:00') }, { 'X-Forwarded-For': '10.9.0.3' });
-    const claim = await c.write('post', apiPaths.claimHold(held.body.holdId), { secret: held.body.holdSecret });
+    const held = await visitor.write('post', '/api/public/holds', { salonSlug: slug, serviceId: rootColour, stylistId: ana.staffId, start: localIso(futureWeekday(2, 5), '13:00') }, { 'X-Forwarded-For': '10.9.0.3' });
+    const claim = await c.write('post', `/api/me/holds/${held.body.holdId}/claim`, { secret: held.body.holdSecret });
     expect(claim.status).toBe(409);
     expect(claim.body.error.message).toMatch(/not booked online for anyone under 16/);
 
@@ -294,11 +294,11 @@ describe('the other way out: change the steps', () => {
     expect(booked.status).toBe(201);
     const id = booked.body.id as string;
     await desk$.write('post', apiPaths.skinTests(client.clientId!), { appliedAt: new Date(Date.now() - 3 * DAY).toISOString(), readAt: new Date(Date.now() - DAY).toISOString(), result: 'positive', product: '', notes: '' });
-    expect((await desk$.get(apiPaths.booking(id))).body.skinTest.status).toBe('blocked');
+    expect((await desk$.get(`/api/bookings/${id}`)).body.skinTest.status).toBe('blocked');
     // Still oxidative: refused with the reason.
-    expectRefused(await desk$.write('post', apiPaths.changePlan(id), { stepPlan: oxidative }), /showed a reaction/);
+    expectRefused(await desk$.write('post', `/api/bookings/${id}/plan`, { stepPlan: oxidative }), /showed a reaction/);
     const direct: StepPlan = { sittings: [{ steps: oxidative.sittings[0].steps.map((s) => (s.product === 'oxidative_colour' ? { ...s, product: 'direct_dye' as const, label: s.label.replace('colour', 'direct dye') } : s)) }] };
-    const changed = await desk$.write('post', apiPaths.changePlan(id), { stepPlan: direct });
+    const changed = await desk$.write('post', `/api/bookings/${id}/plan`, { stepPlan: direct });
     expect(changed.status).toBe(200);
     expect(changed.body.skinTest.status).toBe('not_needed');
     expect(Date.parse(changed.body.sittings[0].start)).toBe(Date.parse(start));
@@ -306,7 +306,7 @@ describe('the other way out: change the steps', () => {
     const reminders = await t.testDb.db.selectFrom('messages').select('status').where('booking_id', '=', id).where('kind', 'like', 'reminder%').execute();
     expect(reminders.some((m) => m.status === 'queued')).toBe(true);
     // A plan with another number of sittings is refused naming the field.
-    const two = await desk$.write('post', apiPaths.changePlan(id), { stepPlan: { sittings: [direct.sittings[0], { ...direct.sittings[0], daysAfterPrevious: { min: 3, max: 14 } }] } });
+    const two = await desk$.write('post', `/api/bookings/${id}/plan`, { stepPlan: { sittings: [direct.sittings[0], { ...direct.sittings[0], daysAfterPrevious: { min: 3, max: 14 } }] } });
     expect(two.status).toBe(400);
     expect(two.body.error.fields.stepPlan).toMatch(/Keep 1 sitting/);
   });

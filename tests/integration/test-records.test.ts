@@ -32,8 +32,8 @@ const iso = (ms: number) => new Date(ms).toISOString();
 
 /** Options for the client, then an attempt to book the first one anyway (as a stale screen would). */
 async function tryToBook(clientId: string) {
-  const options = await desk$.write('post', apiPaths.bookingOptions, { clientId, serviceId, stepPlan: correctionPlan, stylistId: null, earliestDate: tuesday });
-  const booked = await desk$.write('post', apiPaths.bookings, {
+  const options = await desk$.write('post', '/api/booking-options', { clientId, serviceId, stepPlan: correctionPlan, stylistId: null, earliestDate: tuesday });
+  const booked = await desk$.write('post', '/api/bookings', {
     clientId, serviceId, stepPlan: correctionPlan, stylistId: stylist.staffId, start: `${tuesday}T09:00:00-07:00`, idempotencyKey: `k-${Math.random()}`,
   });
   return { skinTest: options.body.skinTest, options: options.body.options, booked };

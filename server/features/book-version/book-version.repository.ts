@@ -1,8 +1,9 @@
-import { sql, type Selectable } from 'kysely';
+import { sql } from 'kysely';
 import { DateTime } from 'luxon';
 import type { Db } from '../../db/database';
-import type { SalonsTable } from '../../db/schema';
+import type { Salon } from '../../../shared/schemas/salon.schemas';
 import { notFound } from '../../lib/app-error';
+import { toSalon } from '../salon/salon.repository';
 
 /** Local dates [from, to) in the salon's zone, YYYY-MM-DD. */
 export interface DayRange {
@@ -25,7 +26,7 @@ type SalonKey = { id: string } | { slug: string };
  * server made the change. `days` may depend on the salon's zone (today, or a search from now): it is then
  * asked with the zone first.
  */
-export async function salonAtBookVersion(db: Db, by: SalonKey, days: DayRange | ((timeZone: string) => DayRange)): Promise<{ salon: Selectable<SalonsTable>; version: string }> {
+export async function salonAtBookVersion(db: Db, by: SalonKey, days: DayRange | ((timeZone: string) => DayRange)): Promise<{ salon: Salon; version: string }> {
   const range = typeof days === 'function' ? days(await zoneOf(db, by)) : days;
   const row = await db
     .selectFrom('salons as s')
@@ -45,7 +46,7 @@ export async function salonAtBookVersion(db: Db, by: SalonKey, days: DayRange | 
     .executeTakeFirst();
   if (!row) throw notFound('That salon');
   const { salonVersion, dayVersions, ...salon } = row;
-  return { salon, version: String(BigInt(salonVersion ?? 0) + BigInt(dayVersions ?? 0)) };
+  return { salon: toSalon(salon), version: String(BigInt(salonVersion ?? 0) + BigInt(dayVersions ?? 0)) };
 }
 
 const column = (by: SalonKey) => ('id' in by ? 's.id' : 's.slug') as 's.id';

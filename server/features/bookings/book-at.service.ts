@@ -10,10 +10,9 @@ import { loadSalonCalendars } from '../planning/salon-calendars.repository';
 import { horizonFor } from '../planning/engine-request';
 import { planBetween, planExactlyAt } from '../planning/plan-at';
 import { assertSkinTestAllows } from '../skin-tests/skin-test-check.service';
-import { writeAudit } from '../audit/audit.repository';
 import { insertBooking } from './bookings.repository';
 import { preferredChair } from './preferred-chair';
-import { bookingSnapshot } from './booking-snapshot.repository';
+import { auditBookingChange } from './booking-audit.service';
 import { replanBookingMessages } from '../messages/plan-messages.service';
 import { withdrawStaleOffers } from '../windows/offer-withdrawal.service';
 
@@ -85,7 +84,7 @@ export async function bookAt(db: Db, input: BookAtInput): Promise<string> {
         steps: s.steps.map((st, j) => ({ kind: st.kind, label: input.plan.sittings[i].steps[j].label, start: new Date(st.start), end: new Date(st.end), basinId: st.basin ?? null })),
       })),
     });
-    await writeAudit(db, { salonId: input.salon.id, actorUserId: input.actorUserId, entity: 'booking', entityId: id, action: input.status === 'held' ? 'held online' : 'booked', after: (await bookingSnapshot(db, id))?.audit });
+    await auditBookingChange(db, { salonId: input.salon.id, actorUserId: input.actorUserId, bookingId: id, action: input.status === 'held' ? 'held online' : 'booked' });
     await replanBookingMessages(db, id, input.now); // confirmation and reminders, in the same transaction
     await withdrawStaleOffers(db, input.salon, input.stylistId, bookedSpan(found), input.now);
     return id;

@@ -1,8 +1,28 @@
 import { sql } from 'kysely';
 import type { Db } from '../../db/database';
+import type { BookingStatus } from '../../../shared/schemas/common.schemas';
+import type { StepPlan } from '../../../shared/schemas/step-plan.schemas';
+
+/** A booking as its changes read it, and as the audit log records it. */
+export interface BookingSnapshot {
+  booking: {
+    status: BookingStatus;
+    salonId: string;
+    clientId: string | null;
+    serviceId: string;
+    stylistId: string;
+    stepPlan: StepPlan;
+    depositCents: number;
+    depositOutcome: 'kept' | 'refunded' | null;
+  };
+  /** The service's own box "needs a skin test" (the steps' product families decide beside it). */
+  serviceAsks: boolean;
+  /** Status, stylist and where and when each sitting is: what an audit entry keeps before and after. */
+  audit: { status: BookingStatus; stylist: string; sittings: { sitting: number; chair: string; start: string; end: string }[]; deposit?: 'kept' | 'refunded' };
+}
 
 /** A booking as the audit log records it: status, stylist and where and when each sitting is. */
-export async function bookingSnapshot(db: Db, bookingId: string) {
+export async function bookingSnapshot(db: Db, bookingId: string): Promise<BookingSnapshot | undefined> {
   const booking = await db
     .selectFrom('bookings as b')
     .innerJoin('staff as s', 's.id', 'b.stylist_id')
@@ -19,7 +39,16 @@ export async function bookingSnapshot(db: Db, bookingId: string) {
     .orderBy('si.seq')
     .execute();
   return {
-    row: booking,
+    booking: {
+      status: booking.status,
+      salonId: booking.salon_id,
+      clientId: booking.client_id,
+      serviceId: booking.service_id,
+      stylistId: booking.stylist_id,
+      stepPlan: booking.step_plan as StepPlan,
+      depositCents: booking.deposit_cents,
+      depositOutcome: booking.deposit_outcome,
+    },
     serviceAsks: booking.needs_skin_test,
     audit: {
       status: booking.status,

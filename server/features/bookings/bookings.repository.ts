@@ -103,3 +103,16 @@ export async function chairFreeBetween(db: Db, salonId: string, chairId: string,
   ]);
   return !taken && !closed;
 }
+
+/** A client's held and booked bookings with a sitting still to come: their service, step plan and each sitting's start. */
+export async function upcomingBookingsOfClient(db: Db, clientId: string, now: Date) {
+  const rows = await db
+    .selectFrom('bookings as b')
+    .innerJoin('services as s', 's.id', 'b.service_id')
+    .select(['b.id', 'b.status', 's.name', 's.needs_skin_test', 'b.step_plan', sql<Date[]>`array(select lower(si.during) from sittings si where si.booking_id = b.id order by si.seq)`.as('starts')])
+    .where('b.client_id', '=', clientId)
+    .where('b.status', 'in', ['held', 'booked'])
+    .where(sql<boolean>`exists (select 1 from sittings si where si.booking_id = b.id and lower(si.during) > ${now})`)
+    .execute();
+  return rows.map((b) => ({ id: b.id, status: b.status, serviceName: b.name, needsSkinTest: b.needs_skin_test, stepPlan: b.step_plan as StepPlan, starts: b.starts }));
+}

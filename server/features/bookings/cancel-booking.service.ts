@@ -5,13 +5,12 @@ import type { Salon } from '../../../shared/schemas/salon.schemas';
 import type { CancelTerms } from '../../../shared/schemas/online-booking.schemas';
 import { AppError, notFound } from '../../lib/app-error';
 import { formatMoney } from '../../lib/money';
-import { writeAudit } from '../audit/audit.repository';
-import { bookingSnapshot } from './booking-snapshot.repository';
+import { bookingSnapshot, type BookingSnapshot } from './booking-snapshot.repository';
+import { auditBookingChange } from './booking-audit.service';
 import { markCancelled, sittingStarts } from './change-booking.repository';
 import { replanBookingMessages } from '../messages/plan-messages.service';
 import { withColourBookingsKept } from './skin-test-dependants';
 import { bookingSkinTestStates } from '../skin-tests/skin-test-check.service';
-import type { StepPlan } from '../../../shared/schemas/step-plan.schemas';
 
 /**
  * The deposit policy on cancelling: inside the salon's cancellation window before the first sitting the
@@ -22,7 +21,6 @@ export function depositOutcome(depositCents: number, firstStart: Date, now: Date
   return keeps === 'deposit' && firstStart.getTime() - now.getTime() < windowHours * 3_600_000 ? 'kept' : 'refunded';
 }
 
-type Snapshot = NonNullable<Awaited<ReturnType<typeof bookingSnapshot>>>;
 export type CancelWhy = CancelTerms['why'];
 
 /**
@@ -30,19 +28,19 @@ export type CancelWhy = CancelTerms['why'];
  * and the client read before confirming. A hold has no deposit paid yet; a booking the client's skin-test record
  * now blocks (a reaction since) is refunded in full, as they cannot help it; else the cancellation window decides.
  */
-async function outcomeOf(db: Db, salon: Salon, before: Snapshot, bookingId: string, now: Date) {
-  const { row } = before;
-  if (!['held', 'booked'].includes(row.status)) {
-    throw new AppError('NOT_BOOKABLE', 409, `A ${row.status.replace('_', ' ')} booking cannot be cancelled.`);
+async function outcomeOf(db: Db, salon: Salon, before: BookingSnapshot, bookingId: string, now: Date) {
+  const { booking } = before;
+  if (!['held', 'booked'].includes(booking.status)) {
+    throw new AppError('NOT_BOOKABLE', 409, `A ${booking.status.replace('_', ' ')} booking cannot be cancelled.`);
   }
   const starts = await sittingStarts(db, bookingId);
   const terms = (outcome: 'kept' | 'refunded' | null, why: CancelWhy, skinTest = '') => ({ outcome, why, starts, skinTest });
-  if (row.deposit_cents <= 0) return terms(null, 'no_deposit');
-  if (row.status === 'held') return terms(null, 'not_paid');
-  const [skinTest] = await bookingSkinTestStates(db, salon, [{ clientId: row.client_id, status: row.status, plan: row.step_plan as StepPlan, serviceAsks: before.serviceAsks, starts }], now);
+  if (booking.depositCents <= 0) return terms(null, 'no_deposit');
+  if (booking.status === 'held') return terms(null, 'not_paid');
+  const [skinTest] = await bookingSkinTestStates(db, salon, [{ clientId: booking.clientId, status: booking.status, plan: booking.stepPlan, serviceAsks: before.serviceAsks, starts }], now);
   if (skinTest.status === 'blocked') return terms('refunded', 'skin_test_blocked', skinTest.message);
   if (salon.cancellationKeeps === 'nothing') return terms('refunded', 'salon_keeps_nothing');
-  const outcome = depositOutcome(row.deposit_cents, starts[0], now, salon.cancellationWindowHours, salon.cancellationKeeps);
+  const outcome = depositOutcome(booking.depositCents, starts[0], now, salon.cancellationWindowHours, salon.cancellationKeeps);
   return terms(outcome, outcome === 'kept' ? 'inside_window' : 'outside_window');
 }
 
@@ -69,8 +67,8 @@ function deskWords(salon: Salon, depositCents: number, why: CancelWhy, skinTest:
 /** What cancelling this booking now would do to its deposit and why (the caller words it for its reader). */
 export async function cancelOutcome(db: Db, salon: Salon, bookingId: string, now: Date) {
   const before = await bookingSnapshot(db, bookingId);
-  if (!before || before.row.salon_id !== salon.id) throw notFound('That booking');
-  return { ...(await outcomeOf(db, salon, before, bookingId, now)), depositCents: before.row.deposit_cents };
+  if (!before || before.booking.salonId !== salon.id) throw notFound('That booking');
+  return { ...(await outcomeOf(db, salon, before, bookingId, now)), depositCents: before.booking.depositCents };
 }
 
 /** The terms the desk reads before confirming a cancellation. */
@@ -82,13 +80,12 @@ export async function deskCancelTerms(db: Db, salon: Salon, bookingId: string, n
 export async function cancelBooking(db: Kysely<Database>, salon: Salon, actorUserId: string, bookingId: string, reason: string, now: Date): Promise<void> {
   await db.transaction().execute(async (trx) => {
     const before = await bookingSnapshot(trx, bookingId);
-    if (!before || before.row.salon_id !== salon.id) throw notFound('That booking');
+    if (!before || before.booking.salonId !== salon.id) throw notFound('That booking');
     const { outcome } = await outcomeOf(trx, salon, before, bookingId, now);
     const cancel = () => markCancelled(trx, bookingId, reason, outcome);
-    if (before.row.client_id) await withColourBookingsKept(trx, salon, before.row.client_id, now, cancel);
+    if (before.booking.clientId) await withColourBookingsKept(trx, salon, before.booking.clientId, now, cancel);
     else await cancel();
-    const after = await bookingSnapshot(trx, bookingId);
-    await writeAudit(trx, { salonId: salon.id, actorUserId, entity: 'booking', entityId: bookingId, action: `cancelled: ${reason}`, before: before.audit, after: after?.audit });
+    await auditBookingChange(trx, { salonId: salon.id, actorUserId, bookingId, action: `cancelled: ${reason}`, before: before.audit });
     await replanBookingMessages(trx, bookingId, now, 'cancelled'); // queued reminders dropped, cancellation planned
   });
 }

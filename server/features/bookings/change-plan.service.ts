@@ -10,10 +10,10 @@ import { loadSalonCalendars } from '../planning/salon-calendars.repository';
 import { horizonFor } from '../planning/engine-request';
 import { planExactlyAt } from '../planning/plan-at';
 import { assertWithinProcessingLimits } from '../planning/processing-limits-check';
-import { writeAudit } from '../audit/audit.repository';
 import { assertSkinTestAllows } from '../skin-tests/skin-test-check.service';
 import { replanBookingMessages } from '../messages/plan-messages.service';
 import { bookingSnapshot } from './booking-snapshot.repository';
+import { auditBookingChange } from './booking-audit.service';
 import { replaceSitting, setStepPlan, sittingStarts } from './change-booking.repository';
 
 /**
@@ -25,28 +25,28 @@ export async function changePlan(db: Kysely<Database>, salon: Salon, actorUserId
   assertWithinProcessingLimits(plan, salon.processingLimits);
   await db.transaction().execute(async (trx) => {
     const before = await bookingSnapshot(trx, bookingId);
-    if (!before || before.row.salon_id !== salon.id) throw notFound('That booking');
-    const { row } = before;
-    if (row.status !== 'booked') throw new AppError('NOT_BOOKABLE', 409, `A ${row.status.replace('_', ' ')} booking's plan cannot be changed.`);
+    if (!before || before.booking.salonId !== salon.id) throw notFound('That booking');
+    const { booking } = before;
+    if (booking.status !== 'booked') throw new AppError('NOT_BOOKABLE', 409, `A ${booking.status.replace('_', ' ')} booking's plan cannot be changed.`);
     const starts = await sittingStarts(trx, bookingId);
     if (plan.sittings.length !== starts.length) {
       throw new AppError('VALIDATION_FAILED', 400, 'Some fields need attention.', { stepPlan: `Keep ${starts.length} sitting(s); to change the sittings, cancel and book again.` });
     }
     if (starts.some((s) => s < now)) throw new AppError('CONFLICT', 409, 'A sitting has already started; change what is left at the chair.');
-    await lockStylists(trx, [row.stylist_id]);
-    const service = await findService(trx, salon.id, row.service_id);
-    if (row.client_id) {
-      await assertSkinTestAllows(trx, salon, { clientId: row.client_id, plan, serviceAsks: service?.needsSkinTest ?? false, starts, atDesk: true }, now);
+    await lockStylists(trx, [booking.stylistId]);
+    const service = await findService(trx, salon.id, booking.serviceId);
+    if (booking.clientId) {
+      await assertSkinTestAllows(trx, salon, { clientId: booking.clientId, plan, serviceAsks: service?.needsSkinTest ?? false, starts, atDesk: true }, now);
     }
     for (const [i, start] of starts.entries()) {
       const one: StepPlan = { sittings: [{ steps: plan.sittings[i].steps }] };
       const date = DateTime.fromJSDate(start, { zone: salon.timeZone }).toISODate()!;
       const calendars = await loadSalonCalendars(trx, salon.id, horizonFor(date, one, 1), bookingId);
-      const result = planExactlyAt(calendars, { skill: service?.skill ?? 'colour', stylistId: row.stylist_id, plan: one, start });
+      const result = planExactlyAt(calendars, { skill: service?.skill ?? 'colour', stylistId: booking.stylistId, plan: one, start });
       if ('reason' in result) throw new AppError('CONFLICT', 409, `Sitting ${i + 1}: ${result.reason}`);
       const placed = result.plan.sittings[0];
       try {
-        await replaceSitting(trx, bookingId, i + 1, placed.chair, row.stylist_id, placed.steps.map((st, j) => ({
+        await replaceSitting(trx, bookingId, i + 1, placed.chair, booking.stylistId, placed.steps.map((st, j) => ({
           kind: st.kind, label: one.sittings[0].steps[j].label, start: new Date(st.start), end: new Date(st.end), basinId: st.basin ?? null,
         })));
       } catch (err) {
@@ -55,8 +55,7 @@ export async function changePlan(db: Kysely<Database>, salon: Salon, actorUserId
       }
     }
     await setStepPlan(trx, bookingId, plan);
-    const after = await bookingSnapshot(trx, bookingId);
-    await writeAudit(trx, { salonId: salon.id, actorUserId, entity: 'booking', entityId: bookingId, action: 'changed the step plan', before: { ...before.audit, steps: stepNames(row.step_plan as StepPlan) }, after: { ...after?.audit, steps: stepNames(plan) } });
+    await auditBookingChange(trx, { salonId: salon.id, actorUserId, bookingId, action: 'changed the step plan', before: { ...before.audit, steps: stepNames(booking.stepPlan) }, alsoAfter: { steps: stepNames(plan) } });
     await replanBookingMessages(trx, bookingId, now, 'skin_test'); // reminders come back when the new plan is allowed
   });
 }

@@ -1,4 +1,5 @@
 import type { Kysely } from 'kysely';
+import { bookingsApi } from '../../../shared/api/bookings.api';
 import type { Database } from '../../db/schema';
 import type { CreateBooking } from '../../../shared/schemas/booking.schemas';
 import type { Salon } from '../../../shared/schemas/salon.schemas';
@@ -11,6 +12,9 @@ import { lockStylists } from '../planning/stylist-lock';
 import { assertWithinProcessingLimits } from '../planning/processing-limits-check';
 import { bookAt } from './book-at.service';
 import { findIdempotent, saveIdempotent } from './idempotency.repository';
+
+/** The route a stored answer is filed under: this endpoint's method and path. */
+const idempotencyRoute = `${bookingsApi.create.method.toUpperCase()} ${bookingsApi.create.path}`;
 
 /**
  * One booking with all its sittings, or the answer already given to this idempotency key. The key is looked
@@ -32,7 +36,7 @@ export async function createBooking(db: Kysely<Database>, salon: Salon, user: Se
       salon, clientId: client.id, service, plan: body.stepPlan, stylistId: body.stylistId, start: new Date(body.start), chairIds: body.chairIds, actorUserId: user.id, now, allowWaitingOnTest: true,
       quote: quote && { id: quote.id, priceCents: quote.price_cents, depositCents: quote.deposit_cents },
     });
-    await saveIdempotent(trx, user.id, body.idempotencyKey, 'POST /api/bookings', 201, { bookingId });
+    await saveIdempotent(trx, user.id, body.idempotencyKey, idempotencyRoute, 201, { bookingId });
     return bookingId;
   });
 }

@@ -10,9 +10,9 @@ import { lockStylists } from '../planning/stylist-lock';
 import { loadSalonCalendars } from '../planning/salon-calendars.repository';
 import { horizonFor } from '../planning/engine-request';
 import { planExactlyAt } from '../planning/plan-at';
-import { writeAudit } from '../audit/audit.repository';
 import { assertSkinTestAllows } from '../skin-tests/skin-test-check.service';
 import { bookingSnapshot } from './booking-snapshot.repository';
+import { auditBookingChange } from './booking-audit.service';
 import { replaceSitting, setStylist, sittingChair, sittingStarts } from './change-booking.repository';
 import { preferredChair } from './preferred-chair';
 import { listStylists } from './salon-resources.repository';
@@ -39,44 +39,44 @@ const MOVABLE = ['held', 'booked'];
  */
 export async function movableSitting(db: Db, salon: Pick<Salon, 'id'>, bookingId: string, sitting: number, wantedStylistId: string | undefined) {
   const before = await bookingSnapshot(db, bookingId);
-  if (!before || before.row.salon_id !== salon.id) throw notFound('That booking');
-  const { row } = before;
-  if (!MOVABLE.includes(row.status)) throw new AppError('NOT_BOOKABLE', 409, `A ${row.status.replace('_', ' ')} booking cannot be moved.`);
-  const plan = row.step_plan as StepPlan;
+  if (!before || before.booking.salonId !== salon.id) throw notFound('That booking');
+  const { booking } = before;
+  if (!MOVABLE.includes(booking.status)) throw new AppError('NOT_BOOKABLE', 409, `A ${booking.status.replace('_', ' ')} booking cannot be moved.`);
+  const plan = booking.stepPlan;
   if (sitting > plan.sittings.length) {
     throw new AppError('VALIDATION_FAILED', 400, 'Some fields need attention.', { sitting: `This booking has ${plan.sittings.length} sitting(s).` });
   }
-  const stylistId = wantedStylistId ?? row.stylist_id;
-  if (stylistId !== row.stylist_id && plan.sittings.length > 1) {
+  const stylistId = wantedStylistId ?? booking.stylistId;
+  if (stylistId !== booking.stylistId && plan.sittings.length > 1) {
     throw new AppError('VALIDATION_FAILED', 400, 'Some fields need attention.', { stylistId: 'All sittings stay with one stylist; move each sitting without changing the stylist.' });
   }
-  const [service, stylists] = await Promise.all([findService(db, salon.id, row.service_id), listStylists(db, salon.id)]);
+  const [service, stylists] = await Promise.all([findService(db, salon.id, booking.serviceId), listStylists(db, salon.id)]);
   const stylist = stylists.find((s) => s.id === stylistId);
   // Asked plainly here, or the engine's answer would blame the hours for a stylist who cannot do the work.
-  if (stylistId !== row.stylist_id && !stylist) throw new AppError('VALIDATION_FAILED', 400, 'Some fields need attention.', { stylistId: 'No such stylist in this salon.' });
-  if (stylistId !== row.stylist_id && service && !stylist?.skills.includes(service.skill)) {
+  if (stylistId !== booking.stylistId && !stylist) throw new AppError('VALIDATION_FAILED', 400, 'Some fields need attention.', { stylistId: 'No such stylist in this salon.' });
+  if (stylistId !== booking.stylistId && service && !stylist?.skills.includes(service.skill)) {
     throw new AppError('VALIDATION_FAILED', 400, 'Some fields need attention.', { stylistId: `${stylist?.name} does not have the "${service.skill}" skill this service needs.` });
   }
   // The sitting alone is planned: the other sittings stay where they are.
   const one: StepPlan = { sittings: [{ steps: plan.sittings[sitting - 1].steps }] };
   const skill = service?.skill ?? stylist?.skills[0] ?? '';
-  return { before, row, plan, one, stylistId, service, skill };
+  return { before, booking, plan, one, stylistId, service, skill };
 }
 
 /** Moves one sitting (re-planned by the engine against the current book) and records the change. */
 export async function moveSitting(db: Kysely<Database>, salon: Salon, actorUserId: string, req: MoveRequest, now: Date): Promise<void> {
   await db.transaction().execute(async (trx) => {
-    const { before, row, plan, one, stylistId, service, skill } = await movableSitting(trx, salon, req.bookingId, req.sitting, req.stylistId);
+    const { before, booking, plan, one, stylistId, service, skill } = await movableSitting(trx, salon, req.bookingId, req.sitting, req.stylistId);
     if (req.start < now) throw new AppError('VALIDATION_FAILED', 400, 'Some fields need attention.', { start: 'That time has already passed.' });
-    await lockStylists(trx, [row.stylist_id, stylistId]);
+    await lockStylists(trx, [booking.stylistId, stylistId]);
 
     const starts = await sittingStarts(trx, req.bookingId);
     const gapProblem = dayGapProblem(plan, starts, req.sitting - 1, req.start, salon.timeZone);
     if (gapProblem) throw new AppError('CONFLICT', 409, gapProblem);
     // A later date may fall outside the skin test's validity: the whole booking is checked with the moved sitting.
-    if (row.client_id) {
+    if (booking.clientId) {
       const moved = starts.map((s, i) => (i === req.sitting - 1 ? req.start : s));
-      await assertSkinTestAllows(trx, salon, { clientId: row.client_id, plan, serviceAsks: service?.needsSkinTest ?? false, starts: moved, atDesk: req.allowWaitingOnTest ?? false }, now);
+      await assertSkinTestAllows(trx, salon, { clientId: booking.clientId, plan, serviceAsks: service?.needsSkinTest ?? false, starts: moved, atDesk: req.allowWaitingOnTest ?? false }, now);
     }
 
     const date = DateTime.fromJSDate(req.start, { zone: salon.timeZone }).toISODate()!;
@@ -86,7 +86,7 @@ export async function moveSitting(db: Kysely<Database>, salon: Salon, actorUserI
     const placed = result.plan.sittings[0];
     const chair = await preferredChair(trx, salon.id, placed, req.chairId ?? (await sittingChair(trx, req.bookingId, req.sitting)), req.bookingId);
     try {
-      if (stylistId !== row.stylist_id) await setStylist(trx, req.bookingId, stylistId);
+      if (stylistId !== booking.stylistId) await setStylist(trx, req.bookingId, stylistId);
       await replaceSitting(trx, req.bookingId, req.sitting, chair, stylistId, placed.steps.map((st, j) => ({
         kind: st.kind, label: one.sittings[0].steps[j].label, start: new Date(st.start), end: new Date(st.end), basinId: st.basin ?? null,
       })));
@@ -94,8 +94,7 @@ export async function moveSitting(db: Kysely<Database>, salon: Salon, actorUserI
       if ((err as { code?: string }).code === '23P01') throw new AppError('CONFLICT', 409, 'Someone took that time a moment ago.');
       throw err;
     }
-    const after = await bookingSnapshot(trx, req.bookingId);
-    await writeAudit(trx, { salonId: salon.id, actorUserId, entity: 'booking', entityId: req.bookingId, action: `moved sitting ${req.sitting}`, before: before.audit, after: after?.audit });
+    await auditBookingChange(trx, { salonId: salon.id, actorUserId, bookingId: req.bookingId, action: `moved sitting ${req.sitting}`, before: before.audit });
     await replanBookingMessages(trx, req.bookingId, now, 'moved'); // old reminders dropped, new ones planned
     await withdrawStaleOffers(trx, salon, stylistId, { from: new Date(placed.steps[0].start), to: new Date(placed.steps[placed.steps.length - 1].end) }, now);
   });

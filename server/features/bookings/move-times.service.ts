@@ -32,13 +32,13 @@ function firstAllowedDate(plan: StepPlan, starts: Date[], index: number, zone: s
  * the times that would break the days between sittings. Each time is one the move itself accepts.
  */
 export async function deskMoveTimes(db: Db, salon: Salon, bookingId: string, req: DeskMoveTimesRequest, now: Date): Promise<Availability> {
-  const { row, plan, one, stylistId, skill } = await movableSitting(db, salon, bookingId, req.sitting, req.stylistId);
+  const { booking, plan, one, stylistId, skill } = await movableSitting(db, salon, bookingId, req.sitting, req.stylistId);
   const starts = await sittingStarts(db, bookingId);
   const index = req.sitting - 1;
   const from = req.from ?? firstAllowedDate(plan, starts, index, salon.timeZone);
   const salonRow = { id: salon.id, time_zone: salon.timeZone, granularity_minutes: salon.granularityMinutes };
   const times = await freeTimes(db, salonRow, { skill, stepPlan: one }, stylistId, from, now, bookingId);
   // Where it is now, with the same stylist, is no move at all (the search leaves the booking out, so finds it free).
-  const current = (t: { start: string }) => stylistId === row.stylist_id && Date.parse(t.start) === starts[index].getTime();
+  const current = (t: { start: string }) => stylistId === booking.stylistId && Date.parse(t.start) === starts[index].getTime();
   return { ...times, times: times.times.filter((t) => !current(t) && dayGapProblem(plan, starts, index, new Date(t.start), salon.timeZone) === null) };
 }

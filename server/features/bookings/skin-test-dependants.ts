@@ -1,10 +1,9 @@
-import { sql } from 'kysely';
 import { DateTime } from 'luxon';
 import type { Db } from '../../db/database';
 import type { Salon } from '../../../shared/schemas/salon.schemas';
-import type { StepPlan } from '../../../shared/schemas/step-plan.schemas';
 import { AppError } from '../../lib/app-error';
 import { bookingSkinTestStates } from '../skin-tests/skin-test-check.service';
+import { upcomingBookingsOfClient } from './bookings.repository';
 
 /**
  * A change to a client's skin tests (a skin-test appointment cancelled) must not take away the footing of a live
@@ -24,14 +23,7 @@ export async function withColourBookingsKept(db: Db, salon: Salon, clientId: str
 }
 
 async function liveStates(db: Db, salon: Salon, clientId: string, now: Date) {
-  const live = await db
-    .selectFrom('bookings as b')
-    .innerJoin('services as s', 's.id', 'b.service_id')
-    .select(['b.id', 'b.status', 's.name', 's.needs_skin_test', 'b.step_plan', sql<Date[]>`array(select lower(si.during) from sittings si where si.booking_id = b.id order by si.seq)`.as('starts')])
-    .where('b.client_id', '=', clientId)
-    .where('b.status', 'in', ['held', 'booked'])
-    .where(sql<boolean>`exists (select 1 from sittings si where si.booking_id = b.id and lower(si.during) > ${now})`)
-    .execute();
-  const states = await bookingSkinTestStates(db, salon, live.map((b) => ({ clientId, status: b.status, plan: b.step_plan as StepPlan, serviceAsks: b.needs_skin_test, starts: b.starts })), now);
-  return live.map((b, i) => ({ id: b.id, name: b.name, start: b.starts[0], state: states[i].status }));
+  const live = await upcomingBookingsOfClient(db, clientId, now);
+  const states = await bookingSkinTestStates(db, salon, live.map((b) => ({ clientId, status: b.status, plan: b.stepPlan, serviceAsks: b.needsSkinTest, starts: b.starts })), now);
+  return live.map((b, i) => ({ id: b.id, name: b.serviceName, start: b.starts[0], state: states[i].status }));
 }

@@ -31,7 +31,7 @@ export async function sendConfirmation(db: Kysely<Database>, senders: Senders, b
  */
 export async function confirmationSends(db: Kysely<Database>, user: SessionUser, bookingId: string, now: Date): Promise<ConfirmationSends> {
   const { hold } = await ownBooking(db, user, bookingId);
-  const [rows, quiet] = await Promise.all([firstMessageSends(db, bookingId), salonQuietHours(db, hold.salon_id)]);
+  const [rows, quiet] = await Promise.all([firstMessageSends(db, bookingId), salonQuietHours(db, hold.salonId)]);
   const latest = new Map<string, (typeof rows)[number]>();
   for (const row of rows) if (!latest.has(row.channel)) latest.set(row.channel, row);
   const sends = [...latest.values()].map((row) => ({

@@ -1,14 +1,14 @@
 import type { Hold } from '../../../shared/schemas/online-booking.schemas';
-import type { HoldRow } from './holds.repository';
+import type { HoldRecord } from './holds.repository';
 import { AppError } from '../../lib/app-error';
 
 /** What a client's screens show of a hold (or the booking it became); one past its time reads as lapsed. */
-export function holdView(h: HoldRow, now = new Date()): Hold {
-  const lapsed = h.status === 'held' && h.held_until !== null && h.held_until <= now;
+export function holdView(h: HoldRecord, now = new Date()): Hold {
+  const lapsed = h.status === 'held' && h.heldUntil !== null && h.heldUntil <= now;
   return {
-    holdId: h.id, status: h.status === 'held' ? (lapsed ? 'lapsed' : 'held') : 'booked', heldUntil: h.held_until?.toISOString() ?? null,
+    holdId: h.id, status: h.status === 'held' ? (lapsed ? 'lapsed' : 'held') : 'booked', heldUntil: h.heldUntil?.toISOString() ?? null,
     salonName: h.salonName, serviceName: h.serviceName, stylistName: h.stylistName, start: h.start.toISOString(), end: h.end.toISOString(),
-    timeZone: h.timeZone, depositCents: h.deposit_cents, currency: h.currency,
+    timeZone: h.timeZone, depositCents: h.depositCents, currency: h.currency,
   };
 }
 

@@ -1,9 +1,38 @@
 import { sql } from 'kysely';
 import type { Db } from '../../db/database';
+import type { BookingStatus } from '../../../shared/schemas/common.schemas';
+import type { StepPlan } from '../../../shared/schemas/step-plan.schemas';
 
 /** A hold (or the booking it became) with what the client's screens show. */
-export async function findHold(db: Db, id: string) {
-  return db
+export interface HoldRecord {
+  id: string;
+  status: BookingStatus;
+  salonId: string;
+  serviceId: string;
+  stylistId: string;
+  clientId: string | null;
+  heldUntil: Date | null;
+  holdSecretHash: string | null;
+  depositCents: number;
+  stepPlan: StepPlan;
+  createdAt: Date;
+  salonSlug: string;
+  salonName: string;
+  timeZone: string;
+  currency: string;
+  address: string;
+  serviceName: string;
+  /** The service's own box "needs a skin test" (the steps' product families decide beside it). */
+  needsSkinTest: boolean;
+  category: string;
+  stylistName: string;
+  /** The first sitting's start and end. */
+  start: Date;
+  end: Date;
+}
+
+export async function findHold(db: Db, id: string): Promise<HoldRecord | undefined> {
+  const row = await db
     .selectFrom('bookings as b')
     .innerJoin('salons as sa', 'sa.id', 'b.salon_id')
     .innerJoin('services as sv', 'sv.id', 'b.service_id')
@@ -16,8 +45,32 @@ export async function findHold(db: Db, id: string) {
     ])
     .where('b.id', '=', id)
     .executeTakeFirst();
+  if (!row) return undefined;
+  return {
+    id: row.id,
+    status: row.status,
+    salonId: row.salon_id,
+    serviceId: row.service_id,
+    stylistId: row.stylist_id,
+    clientId: row.client_id,
+    heldUntil: row.held_until,
+    holdSecretHash: row.hold_secret_hash,
+    depositCents: row.deposit_cents,
+    stepPlan: row.step_plan as StepPlan,
+    createdAt: row.created_at,
+    salonSlug: row.salonSlug,
+    salonName: row.salonName,
+    timeZone: row.timeZone,
+    currency: row.currency,
+    address: row.address,
+    serviceName: row.serviceName,
+    needsSkinTest: row.needs_skin_test,
+    category: row.category,
+    stylistName: row.stylistName,
+    start: row.start,
+    end: row.end,
+  };
 }
-export type HoldRow = NonNullable<Awaited<ReturnType<typeof findHold>>>;
 
 export async function markHold(db: Db, id: string, heldUntil: Date, secretHash: string): Promise<void> {
   await db.updateTable('bookings').set({ held_until: heldUntil, hold_secret_hash: secretHash }).where('id', '=', id).execute();

@@ -12,12 +12,12 @@ import { findClientIdForUser } from '../clients/clients.repository';
 import { lockStylists } from '../planning/stylist-lock';
 import { bookAt } from '../bookings/book-at.service';
 import { assertHoldSkinTest } from './hold-skin-test';
-import { findSalonBySlug } from './public-salon.service';
+import { findSalonBySlug } from './public-salon.repository';
 import { onlineService } from './availability.service';
 import { holdCautions } from './hold-cautions';
 import { holdLapsed, holdView } from './hold-view';
 import { assertNoOpenHold, holdOpenError } from './open-holds.service';
-import { claimHoldRow, findHold, hasAcceptedCautions, insertCautionAcceptance, markHold, type HoldRow } from './holds.repository';
+import { claimHoldRow, findHold, hasAcceptedCautions, insertCautionAcceptance, markHold, type HoldRecord } from './holds.repository';
 
 export const LAPSE_HOLD_JOB = 'lapse-hold';
 
@@ -26,13 +26,12 @@ export const LAPSE_HOLD_JOB = 'lapse-hold';
  * of the salon who already holds a time is sent back to it instead (one open hold per client).
  */
 export async function createHold(db: Kysely<Database>, jobs: JobQueue, user: SessionUser | undefined, body: z.infer<typeof CreateHoldSchema>, now: Date) {
-  const row = await findSalonBySlug(db, body.salonSlug);
-  const salon = await findSalon(db, row.id);
+  const salon = await findSalonBySlug(db, body.salonSlug);
   const service = await onlineService(db, salon.id, body.serviceId);
   const clientId = user?.role === 'client' && user.salonId === salon.id ? await findClientIdForUser(db, user.id) : null;
   if (clientId) await assertNoOpenHold(db, clientId, now);
   const secret = randomBytes(24).toString('base64url');
-  const heldUntil = new Date(now.getTime() + row.hold_minutes * 60_000);
+  const heldUntil = new Date(now.getTime() + salon.holdMinutes * 60_000);
   const id = await db.transaction().execute(async (trx) => {
     await lockStylists(trx, [body.stylistId]);
     const bookingId = await bookAt(trx, { salon, clientId: null, service, plan: service.stepPlan, stylistId: body.stylistId, start: new Date(body.start), actorUserId: null, now, status: 'held' });
@@ -43,12 +42,19 @@ export async function createHold(db: Kysely<Database>, jobs: JobQueue, user: Ses
   return { ...holdView((await findHold(db, id))!, now), holdSecret: secret };
 }
 
-/** The hold, if the secret matches; a lapsed (removed) hold is answered as lapsed. */
-export async function heldByHolder(db: Kysely<Database>, id: string, secret: string, now: Date): Promise<HoldRow> {
+/** Where a hold stands; public, so the answer names no client. */
+export async function holdStatus(db: Kysely<Database>, id: string, now: Date) {
   const hold = await findHold(db, id);
   if (!hold) throw holdLapsed();
-  if (hold.hold_secret_hash !== sha256(secret) && hold.status === 'held') throw notFound('That hold');
-  if (hold.status === 'held' && hold.held_until && hold.held_until <= now) {
+  return holdView(hold, now);
+}
+
+/** The hold, if the secret matches; a lapsed (removed) hold is answered as lapsed. */
+export async function heldByHolder(db: Kysely<Database>, id: string, secret: string, now: Date): Promise<HoldRecord> {
+  const hold = await findHold(db, id);
+  if (!hold) throw holdLapsed();
+  if (hold.holdSecretHash !== sha256(secret) && hold.status === 'held') throw notFound('That hold');
+  if (hold.status === 'held' && hold.heldUntil && hold.heldUntil <= now) {
     throw holdLapsed();
   }
   return hold;
@@ -58,11 +64,11 @@ export async function heldByHolder(db: Kysely<Database>, id: string, secret: str
 export async function claimHold(db: Kysely<Database>, user: SessionUser, id: string, secret: string, now: Date) {
   const hold = await heldByHolder(db, id, secret, now);
   const clientId = await findClientIdForUser(db, user.id);
-  if (!clientId || hold.salon_id !== user.salonId) throw notFound('That hold');
+  if (!clientId || hold.salonId !== user.salonId) throw notFound('That hold');
   if (hold.status !== 'held') throw new AppError('CONFLICT', 409, 'This time is already booked.');
-  if (hold.client_id && hold.client_id !== clientId) throw notFound('That hold');
+  if (hold.clientId && hold.clientId !== clientId) throw notFound('That hold');
   await assertNoOpenHold(db, clientId, now, id);
-  const salon = await findSalon(db, hold.salon_id);
+  const salon = await findSalon(db, hold.salonId);
   await assertHoldSkinTest(db, salon, hold, clientId, now);
   try {
     await claimHoldRow(db, id, clientId);
@@ -77,16 +83,16 @@ export async function claimHold(db: Kysely<Database>, user: SessionUser, id: str
 
 export async function acceptCautions(db: Kysely<Database>, user: SessionUser, id: string, secret: string, version: string, now: Date): Promise<void> {
   const hold = await ownHold(db, user, id, secret, now);
-  const salon = await findSalon(db, hold.salon_id);
+  const salon = await findSalon(db, hold.salonId);
   const cautions = holdCautions(hold, salon);
   if (version !== cautions.version) throw new AppError('CONFLICT', 409, 'The cautions have changed; please read them again.');
   if (!(await hasAcceptedCautions(db, id, version))) await insertCautionAcceptance(db, id, user.id, version, cautions.items);
 }
 
 /** A hold claimed by this signed-in client. */
-export async function ownHold(db: Kysely<Database>, user: SessionUser, id: string, secret: string, now: Date): Promise<HoldRow> {
+export async function ownHold(db: Kysely<Database>, user: SessionUser, id: string, secret: string, now: Date): Promise<HoldRecord> {
   const hold = await heldByHolder(db, id, secret, now);
   const clientId = await findClientIdForUser(db, user.id);
-  if (!clientId || hold.client_id !== clientId) throw notFound('That hold');
+  if (!clientId || hold.clientId !== clientId) throw notFound('That hold');
   return hold;
 }

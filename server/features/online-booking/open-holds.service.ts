@@ -10,7 +10,7 @@ import { findSalon } from '../salon/salon.repository';
 import { findClientIdForUser } from '../clients/clients.repository';
 import { findHairHistory } from '../hair-history/hair-history.repository';
 import { holdCautions } from './hold-cautions';
-import { findHold, hasAcceptedCautions, openHoldIdsOf, releaseHoldRow, setHoldSecret, type HoldRow } from './holds.repository';
+import { findHold, hasAcceptedCautions, openHoldIdsOf, releaseHoldRow, setHoldSecret, type HoldRecord } from './holds.repository';
 import { holdLapsed, holdView } from './hold-view';
 
 /*
@@ -19,7 +19,7 @@ import { holdLapsed, holdView } from './hold-view';
  */
 
 /** The refusal of a second hold, naming the one the client already has (when known) so they can go back to it. */
-export function holdOpenError(hold?: Pick<HoldRow, 'serviceName' | 'start' | 'timeZone'>): AppError {
+export function holdOpenError(hold?: Pick<HoldRecord, 'serviceName' | 'start' | 'timeZone'>): AppError {
   const which = hold ? `: ${hold.serviceName} on ${DateTime.fromJSDate(hold.start, { zone: hold.timeZone }).toFormat("cccc d LLLL 'at' h:mm a")}` : '';
   return new AppError('HOLD_OPEN', 409, `You already have a time held${which}. One time can be held at a time: finish booking it, or release it to pick another.`);
 }
@@ -28,15 +28,15 @@ export function holdOpenError(hold?: Pick<HoldRow, 'serviceName' | 'start' | 'ti
  * The step a resumed hold goes back to: the deposit once its current cautions are accepted; the cautions once the
  * hair history was saved during this hold (the details step's one action saves it); otherwise the details.
  */
-async function stepOf(db: Kysely<Database>, hold: HoldRow, clientId: string): Promise<HoldStep> {
-  const salon = await findSalon(db, hold.salon_id);
+async function stepOf(db: Kysely<Database>, hold: HoldRecord, clientId: string): Promise<HoldStep> {
+  const salon = await findSalon(db, hold.salonId);
   if (await hasAcceptedCautions(db, hold.id, holdCautions(hold, salon).version)) return 'deposit';
   const history = await findHairHistory(db, clientId);
-  return history.updatedAt && Date.parse(history.updatedAt) >= hold.created_at.getTime() ? 'cautions' : 'details';
+  return history.updatedAt && Date.parse(history.updatedAt) >= hold.createdAt.getTime() ? 'cautions' : 'details';
 }
 
-async function openHoldView(db: Kysely<Database>, hold: HoldRow, clientId: string, now: Date): Promise<OpenHold> {
-  return { ...holdView(hold, now), salonSlug: hold.salonSlug, serviceId: hold.service_id, step: await stepOf(db, hold, clientId) };
+async function openHoldView(db: Kysely<Database>, hold: HoldRecord, clientId: string, now: Date): Promise<OpenHold> {
+  return { ...holdView(hold, now), salonSlug: hold.salonSlug, serviceId: hold.serviceId, step: await stepOf(db, hold, clientId) };
 }
 
 /** The signed-in client's unpaid holds still within their time (at most one). */
@@ -44,7 +44,7 @@ export async function myOpenHolds(db: Kysely<Database>, user: SessionUser, now: 
   const clientId = await findClientIdForUser(db, user.id);
   if (!clientId) return [];
   const holds = await Promise.all((await openHoldIdsOf(db, clientId, now)).map((id) => findHold(db, id)));
-  return Promise.all(holds.filter((h): h is HoldRow => Boolean(h)).map((h) => openHoldView(db, h, clientId, now)));
+  return Promise.all(holds.filter((h): h is HoldRecord => Boolean(h)).map((h) => openHoldView(db, h, clientId, now)));
 }
 
 /** Refuses a new hold while the client has one open. */
@@ -57,8 +57,8 @@ export async function assertNoOpenHold(db: Kysely<Database>, clientId: string, n
 /** The client's own claimed hold, still within its time. */
 async function ownOpenHold(db: Kysely<Database>, user: SessionUser, id: string, now: Date) {
   const [hold, clientId] = await Promise.all([findHold(db, id), findClientIdForUser(db, user.id)]);
-  if (hold && clientId && hold.client_id !== null && hold.client_id !== clientId) throw notFound('That hold');
-  if (!hold || (hold.status === 'held' && hold.held_until !== null && hold.held_until <= now)) throw holdLapsed();
+  if (hold && clientId && hold.clientId !== null && hold.clientId !== clientId) throw notFound('That hold');
+  if (!hold || (hold.status === 'held' && hold.heldUntil !== null && hold.heldUntil <= now)) throw holdLapsed();
   return { hold, clientId };
 }
 
@@ -68,11 +68,11 @@ async function ownOpenHold(db: Kysely<Database>, user: SessionUser, id: string, 
  */
 export async function resumeHold(db: Kysely<Database>, user: SessionUser, id: string, now: Date) {
   const { hold, clientId } = await ownOpenHold(db, user, id, now);
-  if (!clientId || hold.client_id !== clientId) throw notFound('That hold');
+  if (!clientId || hold.clientId !== clientId) throw notFound('That hold');
   if (hold.status !== 'held') throw new AppError('CONFLICT', 409, 'This time is already booked.');
   const secret = randomBytes(24).toString('base64url');
   await setHoldSecret(db, id, sha256(secret));
-  const salon = await findSalon(db, hold.salon_id);
+  const salon = await findSalon(db, hold.salonId);
   return { ...(await openHoldView(db, hold, clientId, now)), holdSecret: secret, cautions: holdCautions(hold, salon) };
 }
 
@@ -82,8 +82,8 @@ export async function resumeHold(db: Kysely<Database>, user: SessionUser, id: st
  */
 export async function releaseHold(db: Kysely<Database>, user: SessionUser, id: string, secret: string | undefined, now: Date): Promise<void> {
   const { hold, clientId } = await ownOpenHold(db, user, id, now);
-  const mine = clientId !== null && hold.client_id === clientId;
-  const holder = hold.client_id === null && secret !== undefined && hold.hold_secret_hash === sha256(secret);
+  const mine = clientId !== null && hold.clientId === clientId;
+  const holder = hold.clientId === null && secret !== undefined && hold.holdSecretHash === sha256(secret);
   if (!mine && !holder) throw notFound('That hold');
   if (hold.status !== 'held') throw new AppError('CONFLICT', 409, 'This time is already booked; cancel it from My bookings instead.');
   if (!(await releaseHoldRow(db, id))) throw holdLapsed();

@@ -4,12 +4,14 @@ import type { z } from 'zod';
 import type { Database } from '../../db/schema';
 import type { SessionUser } from '../../../shared/schemas/auth.schemas';
 import type { PayHoldSchema } from '../../../shared/schemas/online-booking.schemas';
+import type { BookingView } from '../../../shared/schemas/booking-view.schemas';
 import type { Payments } from '../../payments/payments';
 import type { Mailer } from '../../mail/mailer';
 import type { SmsSender } from '../../sms/sms-sender';
 import { AppError } from '../../lib/app-error';
 import { findSalon } from '../salon/salon.repository';
 import { writeAudit } from '../audit/audit.repository';
+import { deskBookingView } from '../bookings/booking-view.service';
 import { holdCautions } from './hold-cautions';
 import { confirmHoldRow, hasAcceptedCautions, recordPayment } from './holds.repository';
 import { ownHold } from './holds.service';
@@ -21,24 +23,25 @@ type Deps = { payments: Payments; mailer: Mailer; sms: SmsSender };
 /**
  * Pays the deposit and turns the hold into a booking. The charge happens first (it may take a while); then,
  * in one statement, the hold becomes booked only if it is still held. A payment that arrives after the hold
- * lapsed is refunded at once, so money and bookings always agree.
+ * lapsed is refunded at once, so money and bookings always agree. Answers the booking as it stands then.
  */
-export async function payHold(db: Kysely<Database>, deps: Deps, user: SessionUser, id: string, body: z.infer<typeof PayHoldSchema>, now: Date): Promise<string> {
+export async function payHold(db: Kysely<Database>, deps: Deps, user: SessionUser, id: string, body: z.infer<typeof PayHoldSchema>, now: Date): Promise<BookingView> {
   const hold = await ownHold(db, user, id, body.secret, now);
-  if (hold.status !== 'held') return hold.id; // paid already (a retried request)
-  const salon = await findSalon(db, hold.salon_id);
+  const booking = () => deskBookingView(db, hold.salonId, hold.timeZone, hold.id);
+  if (hold.status !== 'held') return booking(); // paid already (a retried request)
+  const salon = await findSalon(db, hold.salonId);
   if (!(await hasAcceptedCautions(db, id, holdCautions(hold, salon).version))) {
     throw new AppError('CONFLICT', 409, 'Please read and accept the cautions first.');
   }
-  if (hold.client_id) await assertHoldSkinTest(db, salon, hold, hold.client_id, now); // a reading may have come in since the claim
-  const record = { salonId: salon.id, bookingId: id, clientId: hold.client_id, amountCents: hold.deposit_cents, currency: salon.currency };
+  if (hold.clientId) await assertHoldSkinTest(db, salon, hold, hold.clientId, now); // a reading may have come in since the claim
+  const record = { salonId: salon.id, bookingId: id, clientId: hold.clientId, amountCents: hold.depositCents, currency: salon.currency };
   let paymentRef: string | null = null;
-  if (hold.deposit_cents > 0) {
+  if (hold.depositCents > 0) {
     if (!body.card) throw new AppError('VALIDATION_FAILED', 400, 'Some fields need attention.', { card: 'Enter a card for the deposit.' });
-    const charge = await deps.payments.charge({ amountCents: hold.deposit_cents, currency: salon.currency, card: body.card, idempotencyKey: `deposit:${id}:${body.idempotencyKey}`, metadata: { booking: id } });
+    const charge = await deps.payments.charge({ amountCents: hold.depositCents, currency: salon.currency, card: body.card, idempotencyKey: `deposit:${id}:${body.idempotencyKey}`, metadata: { booking: id } });
     if (!charge.ok) {
       await recordPayment(db, { ...record, providerRef: charge.paymentIntentId, status: 'declined', message: charge.message });
-      const until = hold.held_until ? DateTime.fromJSDate(hold.held_until, { zone: hold.timeZone }).toFormat('h:mm a ZZZZ') : 'the hold runs out';
+      const until = hold.heldUntil ? DateTime.fromJSDate(hold.heldUntil, { zone: hold.timeZone }).toFormat('h:mm a ZZZZ') : 'the hold runs out';
       throw new AppError('PAYMENT_DECLINED', 402, `${charge.message} Your time stays held until ${until}; you can try another card.`);
     }
     paymentRef = charge.paymentIntentId;
@@ -52,7 +55,7 @@ export async function payHold(db: Kysely<Database>, deps: Deps, user: SessionUse
     throw new AppError('HOLD_LAPSED', 409, 'The time was released before the payment arrived; your payment has been refunded. Please pick a time again.');
   }
   if (paymentRef) await recordPayment(db, { ...record, providerRef: paymentRef, status: 'succeeded' });
-  await writeAudit(db, { salonId: salon.id, actorUserId: user.id, entity: 'booking', entityId: id, action: 'booked online', after: { status: 'booked', deposit: hold.deposit_cents } });
+  await writeAudit(db, { salonId: salon.id, actorUserId: user.id, entity: 'booking', entityId: id, action: 'booked online', after: { status: 'booked', deposit: hold.depositCents } });
   await sendConfirmation(db, deps, id, new Date());
-  return id;
+  return booking();
 }

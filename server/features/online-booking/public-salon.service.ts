@@ -1,48 +1,41 @@
+import { DateTime } from 'luxon';
 import { describeHoursRule } from '../../../shared/engine/describe-hours';
 import { planNeedsSkinTest } from '../../../shared/rules/skin-test-need';
 import { skinTestValidityWords, skinTestWords } from '../../../shared/rules/skin-test-words';
-import { toSalon } from '../salon/salon.repository';
-import { DateTime } from 'luxon';
 import type { Db } from '../../db/database';
 import type { PublicSalon } from '../../../shared/schemas/online-booking.schemas';
-import { notFound } from '../../lib/app-error';
 import { formatMoney } from '../../lib/money';
+import { listSalonHours } from '../salon/salon.repository';
 import { listServices, listStylistDetails } from '../services/services.repository';
-
-
-export async function findSalonBySlug(db: Db, slug: string) {
-  const salon = await db.selectFrom('salons').selectAll().where('slug', '=', slug).executeTakeFirst();
-  if (!salon) throw notFound('That salon');
-  return salon;
-}
+import { findSalonBySlug } from './public-salon.repository';
 
 /** The salon's public page: services, hours and policies. Nothing about any client. */
 export async function publicSalon(db: Db, slug: string): Promise<PublicSalon> {
   const salon = await findSalonBySlug(db, slug);
   const [hours, services, stylists] = await Promise.all([
-    db.selectFrom('salon_hours').select(['rrule', 'start_time', 'end_time']).where('salon_id', '=', salon.id).execute(),
+    listSalonHours(db, salon.id),
     listServices(db, salon.id),
     listStylistDetails(db, salon.id),
   ]);
-  const families = toSalon(salon).skinTestFamilies;
-  const today = DateTime.now().setZone(salon.time_zone).toISODate() ?? undefined;
+  const families = salon.skinTestFamilies;
+  const today = DateTime.now().setZone(salon.timeZone).toISODate() ?? undefined;
   const deposits = services.filter((s) => s.depositCents > 0).map((s) => `${s.name}: ${formatMoney(s.depositCents, salon.currency)}`);
   return {
     slug: salon.slug,
     name: salon.name,
     address: salon.address,
     phone: salon.phone,
-    timeZone: salon.time_zone,
+    timeZone: salon.timeZone,
     currency: salon.currency,
     // Each rule in plain words with the day's opening times; closed dates already past are left out.
-    openingHours: hours.map((h) => `${describeHoursRule(h.rrule, today)}, ${h.start_time.slice(0, 5)}–${h.end_time.slice(0, 5)}`),
+    openingHours: hours.map((h) => `${describeHoursRule(h.rrule, today)}, ${h.start}–${h.end}`),
     policies: {
       deposit: deposits.length
         ? `A deposit secures long colour work and consultations: ${deposits.join('; ')}. It counts towards the price.`
         : 'No deposit is needed.',
-      cancellation: `Cancel or move at least ${salon.cancellation_window_hours} hours before your appointment and your deposit is refunded; later, or if you do not come, the deposit is kept.`,
+      cancellation: `Cancel or move at least ${salon.cancellationWindowHours} hours before your appointment and your deposit is refunded; later, or if you do not come, the deposit is kept.`,
       lateness: 'If you are more than 15 minutes late for a long colour service we may need to shorten or move it, because colour cannot be rushed.',
-      skinTest: `${skinTestWords(salon.skin_test_lead_hours)} ${skinTestValidityWords(salon.skin_test_validity_days)}`,
+      skinTest: `${skinTestWords(salon.skinTestLeadHours)} ${skinTestValidityWords(salon.skinTestValidityDays)}`,
     },
     services: services.map((s) => ({
       id: s.id,

@@ -5,7 +5,7 @@ import { PageHeader } from '../../components/ui/page-header';
 import { TimeZoneNote } from '../../components/ui/time-zone-note';
 import { bookingQueries } from '../../features/bookings/api/booking-queries';
 import { BookingList } from '../../features/bookings/components/booking-list';
-import { MyBookingActions } from '../../features/bookings/components/my-booking-actions';
+import { MyBookingActions } from '../../features/bookings/components/my-bookings/my-booking-actions';
 import { salonQueries } from '../../features/salon/api/salon-queries';
 import { MyQuotes } from '../../features/consultations/components/my-quotes';
 import { SalonCard } from '../../features/salon/components/salon-card';

@@ -1,7 +1,7 @@
 import { useQuery, useSuspenseQuery } from '@tanstack/react-query';
 import { useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { IdSchema } from '../../../shared/schemas/common.schemas';
-import { BookServicePage } from '../../features/booking-flow/components/book-service-page';
+import { BookServicePage } from '../../features/bookings/components/book-service/book-service-page';
 import { catalogueQueries } from '../../features/catalogue/api/catalogue-queries';
 import { consultationQueries } from '../../features/consultations/api/consultation-queries';
 import { salonQueries } from '../../features/salon/api/salon-queries';

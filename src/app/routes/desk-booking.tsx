@@ -4,11 +4,11 @@ import { IdSchema } from '../../../shared/schemas/common.schemas';
 import { PageHeader } from '../../components/ui/page-header';
 import { TimeZoneNote } from '../../components/ui/time-zone-note';
 import { paths } from '../../config/paths';
-import { BookingHistory } from '../../features/booking-detail/components/booking-history';
-import { BookingSummary } from '../../features/booking-detail/components/booking-summary';
-import { CancelBookingForm } from '../../features/booking-detail/components/cancel-booking-form';
-import { MoveSittingForm } from '../../features/booking-detail/components/move-sitting-form';
-import { ChangePlanForm } from '../../features/booking-detail/components/change-plan-form';
+import { BookingHistory } from '../../features/bookings/components/desk-booking/booking-history';
+import { BookingSummary } from '../../features/bookings/components/desk-booking/booking-summary';
+import { CancelBookingForm } from '../../features/bookings/components/desk-booking/cancel-booking-form';
+import { MoveSittingForm } from '../../features/bookings/components/desk-booking/move-sitting-form';
+import { ChangePlanForm } from '../../features/bookings/components/desk-booking/change-plan-form';
 import { bookingQueries } from '../../features/bookings/api/booking-queries';
 import { catalogueQueries } from '../../features/catalogue/api/catalogue-queries';
 import { MixLogSection } from '../../features/mix-log/components/mix-log-section';
@@ -19,7 +19,7 @@ import { queryClient } from '../../lib/query-client';
 export async function loader({ params }: LoaderFunctionArgs) {
   if (!IdSchema.safeParse(params.id).success) throw new Response(null, { status: 404 });
   await Promise.all([
-    queryClient.ensureQueryData(bookingQueries.detail(params.id!)),
+    queryClient.ensureQueryData(bookingQueries.one(params.id!)),
     queryClient.ensureQueryData(salonQueries.current()),
     queryClient.ensureQueryData(catalogueQueries.stylists()),
   ]);
@@ -28,7 +28,7 @@ export async function loader({ params }: LoaderFunctionArgs) {
 
 export function Component() {
   const { id } = useParams();
-  const { data: booking } = useSuspenseQuery(bookingQueries.detail(id!));
+  const { data: booking } = useSuspenseQuery(bookingQueries.one(id!));
   const { data: salon } = useSuspenseQuery(salonQueries.current());
   const { data: stylists } = useSuspenseQuery(catalogueQueries.stylists());
   const first = booking.sittings[0];

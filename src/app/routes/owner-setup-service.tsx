@@ -7,7 +7,7 @@ import { setupQueries } from '../../features/setup/api/setup-queries';
 import { ServiceForm } from '../../features/setup/components/service-form';
 import { SetupNav } from '../../features/setup/components/setup-nav';
 import { queryClient } from '../../lib/query-client';
-import { stepOfKind } from '../../features/booking-flow/book-form-schema';
+import { stepOfKind } from '../../features/bookings/step-plan-form';
 
 export async function loader() {
   await Promise.all([queryClient.ensureQueryData(setupQueries.services()), queryClient.ensureQueryData(salonQueries.current())]);

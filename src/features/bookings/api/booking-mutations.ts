@@ -1,35 +1,22 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { z } from 'zod';
-import { apiPaths } from '../../../../shared/api/api-paths';
-import {
-  BookingOptionsResponseSchema,
-  type BookingOptionsRequest,
-  type CancelBookingSchema,
-  type ChangePlanSchema,
-  type CreateBooking,
-  type MoveSittingSchema,
-} from '../../../../shared/schemas/booking.schemas';
-import { BookingViewSchema } from '../../../../shared/schemas/booking-view.schemas';
-import { apiWrite } from '../../../lib/api-client';
-import { clientQueries } from '../../clients/api/client-queries';
-import { bookChanged } from './book-changed';
+import { bookingsApi } from '../../../../shared/api/bookings.api';
+import type { BookingOptionsRequest, CancelBookingSchema, ChangePlanSchema, CreateBooking, MoveSittingSchema } from '../../../../shared/schemas/booking.schemas';
+import { callApi } from '../../../lib/api-client';
+import { bookingChanged, bookingMade } from '../../../lib/cache-rules';
 
 /** Ask the engine for options. A POST that changes nothing, so nothing to invalidate. */
 export function useFindTimes() {
   return useMutation({
-    mutationFn: (body: BookingOptionsRequest) => apiWrite('POST', apiPaths.bookingOptions, body, BookingOptionsResponseSchema),
+    mutationFn: (body: BookingOptionsRequest) => callApi(bookingsApi.options, { body }),
   });
 }
 
 export function useCreateBooking() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (body: CreateBooking) => apiWrite('POST', apiPaths.bookings, body, BookingViewSchema),
-    onSuccess: (booking) =>
-      Promise.all([
-        bookChanged(queryClient, booking),
-        queryClient.invalidateQueries({ queryKey: clientQueries.detail(booking.client.id).queryKey }),
-      ]),
+    mutationFn: (body: CreateBooking) => callApi(bookingsApi.create, { body }),
+    onSuccess: (booking) => bookingMade(queryClient, booking),
   });
 }
 
@@ -37,17 +24,16 @@ export function useCreateBooking() {
 export function useMoveSitting() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: ({ bookingId, ...body }: z.input<typeof MoveSittingSchema> & { bookingId: string }) =>
-      apiWrite('POST', apiPaths.moveSitting(bookingId), body, BookingViewSchema),
-    onSuccess: (booking) => bookChanged(queryClient, booking),
+    mutationFn: ({ bookingId, ...body }: z.input<typeof MoveSittingSchema> & { bookingId: string }) => callApi(bookingsApi.move, { params: { id: bookingId }, body }),
+    onSuccess: (booking) => bookingChanged(queryClient, booking),
   });
 }
 
 export function useCancelBooking(bookingId: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (body: z.input<typeof CancelBookingSchema>) => apiWrite('POST', apiPaths.cancelBooking(bookingId), body, BookingViewSchema),
-    onSuccess: (booking) => bookChanged(queryClient, booking),
+    mutationFn: (body: z.input<typeof CancelBookingSchema>) => callApi(bookingsApi.cancel, { params: { id: bookingId }, body }),
+    onSuccess: (booking) => bookingChanged(queryClient, booking),
   });
 }
 
@@ -55,7 +41,7 @@ export function useCancelBooking(bookingId: string) {
 export function useChangePlan(bookingId: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (body: z.input<typeof ChangePlanSchema>) => apiWrite('POST', apiPaths.changePlan(bookingId), body, BookingViewSchema),
-    onSuccess: (booking) => bookChanged(queryClient, booking),
+    mutationFn: (body: z.input<typeof ChangePlanSchema>) => callApi(bookingsApi.changePlan, { params: { id: bookingId }, body }),
+    onSuccess: (booking) => bookingChanged(queryClient, booking),
   });
 }

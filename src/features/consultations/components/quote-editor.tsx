@@ -11,7 +11,7 @@ import { Notice } from '../../../components/ui/notice';
 import { SelectField } from '../../../components/ui/select-field';
 import { TextAreaField } from '../../../components/ui/text-area-field';
 import { fieldError, showServerErrors } from '../../../lib/form-errors';
-import { StepPlanEditor } from '../../booking-flow/components/step-plan-editor';
+import { StepPlanEditor } from '../../bookings/components/step-plan/step-plan-editor';
 import { salonQueries } from '../../salon/api/salon-queries';
 import { MoneyField } from './money-field';
 

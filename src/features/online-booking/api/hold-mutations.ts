@@ -1,29 +1,21 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { z } from 'zod';
-import { apiPaths } from '../../../../shared/api/api-paths';
-import {
-  ClaimedHoldSchema,
-  CreatedHoldSchema,
-  ResumedHoldSchema,
-  type CreateHoldSchema,
-  type PayHoldSchema,
-} from '../../../../shared/schemas/online-booking.schemas';
-import { BookingViewSchema } from '../../../../shared/schemas/booking-view.schemas';
-import { apiWrite } from '../../../lib/api-client';
+import { onlineBookingApi } from '../../../../shared/api/online-booking.api';
+import type { CreateHoldSchema, PayHoldSchema } from '../../../../shared/schemas/online-booking.schemas';
+import { callApi } from '../../../lib/api-client';
 import { isApiError } from '../../../lib/api-error';
-import { bookingQueries } from '../../bookings/api/booking-queries';
-import { onlineBookingQueries } from './online-booking-queries';
+import { freeTimesTaken, holdLapsed, holdReleased, openHoldsChanged, timeHeld } from '../../../lib/cache-rules';
 
 /** Hold a free time. Taken meanwhile (409): the free times are stale, so they are fetched again. */
 export function useCreateHold() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (body: z.input<typeof CreateHoldSchema>) => apiWrite('POST', apiPaths.holds, body, CreatedHoldSchema),
-    onSuccess: (hold) => queryClient.setQueryData(onlineBookingQueries.hold(hold.holdId).queryKey, hold),
+    mutationFn: (body: z.input<typeof CreateHoldSchema>) => callApi(onlineBookingApi.createHold, { body }),
+    onSuccess: (hold) => timeHeld(queryClient, hold),
     onError: (error) => {
-      if (isApiError(error, 'CONFLICT')) return queryClient.invalidateQueries({ queryKey: onlineBookingQueries.availabilities() });
+      if (isApiError(error, 'CONFLICT')) return freeTimesTaken(queryClient);
       // Another tab held a time meanwhile: the step shows that hold instead.
-      if (isApiError(error, 'HOLD_OPEN')) return queryClient.invalidateQueries({ queryKey: onlineBookingQueries.myHolds().queryKey });
+      if (isApiError(error, 'HOLD_OPEN')) return openHoldsChanged(queryClient);
     },
   });
 }
@@ -31,7 +23,7 @@ export function useCreateHold() {
 /** Back into the flow with the client's own hold: a new secret, its cautions and the step to return to. */
 export function useResumeHold() {
   return useMutation({
-    mutationFn: (holdId: string) => apiWrite('POST', apiPaths.resumeHold(holdId), {}, ResumedHoldSchema),
+    mutationFn: (holdId: string) => callApi(onlineBookingApi.resumeHold, { params: { id: holdId }, body: {} }),
   });
 }
 
@@ -39,13 +31,8 @@ export function useResumeHold() {
 export function useReleaseHold() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: ({ holdId, secret }: { holdId: string; secret?: string }) => apiWrite('POST', apiPaths.releaseHold(holdId), { secret }),
-    onSettled: () =>
-      Promise.all([
-        queryClient.invalidateQueries({ queryKey: onlineBookingQueries.myHolds().queryKey }),
-        queryClient.invalidateQueries({ queryKey: onlineBookingQueries.availabilities() }),
-        queryClient.invalidateQueries({ queryKey: bookingQueries.mine().queryKey }),
-      ]),
+    mutationFn: ({ holdId, secret }: { holdId: string; secret?: string }) => callApi(onlineBookingApi.releaseHold, { params: { id: holdId }, body: { secret } }),
+    onSettled: () => holdReleased(queryClient),
   });
 }
 
@@ -55,19 +42,19 @@ function useHoldWrite<Body, Answer>(holdId: string, write: (body: Body) => Promi
   return useMutation({
     mutationFn: write,
     onError: (error) => {
-      if (isApiError(error, 'HOLD_LAPSED')) return queryClient.invalidateQueries({ queryKey: onlineBookingQueries.hold(holdId).queryKey });
+      if (isApiError(error, 'HOLD_LAPSED')) return holdLapsed(queryClient, holdId);
     },
   });
 }
 
 export function useClaimHold(holdId: string) {
-  return useHoldWrite(holdId, (secret: string) => apiWrite('POST', apiPaths.claimHold(holdId), { secret }, ClaimedHoldSchema));
+  return useHoldWrite(holdId, (secret: string) => callApi(onlineBookingApi.claimHold, { params: { id: holdId }, body: { secret } }));
 }
 
 export function useAcceptCautions(holdId: string) {
-  return useHoldWrite(holdId, (body: { version: string; secret: string }) => apiWrite('POST', apiPaths.acceptCautions(holdId), body));
+  return useHoldWrite(holdId, (body: { version: string; secret: string }) => callApi(onlineBookingApi.acceptCautions, { params: { id: holdId }, body }));
 }
 
 export function usePayHold(holdId: string) {
-  return useHoldWrite(holdId, (body: z.input<typeof PayHoldSchema>) => apiWrite('POST', apiPaths.payHold(holdId), body, BookingViewSchema));
+  return useHoldWrite(holdId, (body: z.input<typeof PayHoldSchema>) => callApi(onlineBookingApi.payHold, { params: { id: holdId }, body }));
 }

@@ -1,7 +1,8 @@
 import { useQuery } from '@tanstack/react-query';
 import { Link } from 'react-router-dom';
 import { skinTestWords } from '../../../../shared/rules/skin-test-words';
-import { apiPaths } from '../../../../shared/api/api-paths';
+import { urlOf } from '../../../../shared/api/endpoint';
+import { onlineBookingApi } from '../../../../shared/api/online-booking.api';
 import type { BookingView } from '../../../../shared/schemas/booking-view.schemas';
 import type { Salon } from '../../../../shared/schemas/salon.schemas';
 import { buttonClasses } from '../../../components/ui/button';
@@ -76,7 +77,7 @@ export function BookedPage({ booking, salon }: Props) {
         </ul>
       </section>
       <div className="flex flex-col gap-3 sm:flex-row sm:items-center">
-        <a href={apiPaths.myBookingIcs(booking.id)} download className={buttonClasses('primary')}>
+        <a href={urlOf(onlineBookingApi.calendarFile, { params: { id: booking.id } })} download className={buttonClasses('primary')}>
           Add to calendar
         </a>
         <Link to={paths.me} className={buttonClasses('secondary')}>

@@ -8,6 +8,7 @@ import { FormAlert } from '../../../components/ui/form-alert';
 import { LoadingState } from '../../../components/ui/loading-state';
 import { Notice } from '../../../components/ui/notice';
 import { paths } from '../../../config/paths';
+import { holdLapsed } from '../../../lib/cache-rules';
 import { onlineBookingQueries } from '../api/online-booking-queries';
 import { flowStepsFor, type FlowStep } from '../flow-steps';
 import { useStoredHold, writeStoredHold, type StoredHold } from '../hold-store';
@@ -40,7 +41,7 @@ export function BookingFlowPage({ salon, serviceId, user, returnTo }: Props) {
 
   const onExpire = useCallback(() => {
     setExpired(true);
-    if (stored) void queryClient.invalidateQueries({ queryKey: onlineBookingQueries.hold(stored.holdId).queryKey });
+    if (stored) void holdLapsed(queryClient, stored.holdId);
   }, [queryClient, stored]);
   const onClaimed = useCallback(
     (claimed: { cautions: Cautions }) => {

@@ -4,7 +4,7 @@ import type { OpenHold } from '../../../../shared/schemas/online-booking.schemas
 import { Button } from '../../../components/ui/button';
 import { FormAlert } from '../../../components/ui/form-alert';
 import { useReleaseHold, useResumeHold } from '../api/hold-mutations';
-import { onlineBookingQueries } from '../api/online-booking-queries';
+import { openHoldsChanged } from '../../../lib/cache-rules';
 import { forgetStoredHold, storedFromResumed, type StoredHold } from '../hold-store';
 import { HoldSummary } from './hold-summary';
 
@@ -23,7 +23,7 @@ export function OpenHoldCard({ hold, onResumed, onReleased }: Props) {
   const queryClient = useQueryClient();
   const resume = useResumeHold();
   const release = useReleaseHold();
-  const onExpire = useCallback(() => void queryClient.invalidateQueries({ queryKey: onlineBookingQueries.myHolds().queryKey }), [queryClient]);
+  const onExpire = useCallback(() => void openHoldsChanged(queryClient), [queryClient]);
   const problem = resume.error ?? release.error;
   return (
     <HoldSummary

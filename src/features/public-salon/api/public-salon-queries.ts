@@ -1,15 +1,7 @@
-import { queryOptions } from '@tanstack/react-query';
-import { apiPaths } from '../../../../shared/api/api-paths';
-import { PublicSalonSchema } from '../../../../shared/schemas/online-booking.schemas';
-import { apiGet } from '../../../lib/api-client';
+import { onlineBookingApi } from '../../../../shared/api/online-booking.api';
+import { apiQuery } from '../../../lib/api-client';
 
 export const publicSalonQueries = {
-  all: () => ['public-salon'] as const,
-  bySlug: (slug: string) =>
-    queryOptions({
-      queryKey: [...publicSalonQueries.all(), slug] as const,
-      queryFn: () => apiGet(apiPaths.publicSalon(slug), PublicSalonSchema),
-      // The menu and policies change rarely; free times are fetched separately and fresh.
-      staleTime: 10 * 60_000,
-    }),
+  // The menu and policies change rarely; free times are fetched separately and fresh.
+  bySlug: (slug: string) => ({ ...apiQuery(onlineBookingApi.publicSalon, { params: { slug } }), staleTime: 10 * 60_000 }),
 };

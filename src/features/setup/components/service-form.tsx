@@ -12,7 +12,7 @@ import { TextField } from '../../../components/ui/text-field';
 import { TextAreaField } from '../../../components/ui/text-area-field';
 import { paths } from '../../../config/paths';
 import { fieldError, showServerErrors } from '../../../lib/form-errors';
-import { StepPlanEditor } from '../../booking-flow/components/step-plan-editor';
+import { StepPlanEditor } from '../../bookings/components/step-plan/step-plan-editor';
 import { useRetireService, useSaveService } from '../api/setup-mutations';
 import { salonQueries } from '../../salon/api/salon-queries';
 import { MoneyField } from './money-field';

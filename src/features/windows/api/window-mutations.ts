@@ -10,7 +10,7 @@ export function useFillWindow() {
   return useMutation({
     mutationFn: (body: z.input<typeof FillWindowSchema>) => callApi(windowsApi.fill, { body }),
     // Booking a standby client closes their entry.
-    onSuccess: (_booking, body) => windowFilled(queryClient, { standbyClosed: Boolean(body.standbyEntryId) }),
+    onSuccess: (booking, body) => windowFilled(queryClient, booking, { standbyClosed: Boolean(body.standbyEntryId) }),
   });
 }
 

@@ -1,9 +1,9 @@
 import { useQuery } from '@tanstack/react-query';
-import { LoadingState } from '../../../components/ui/loading-state';
-import { SectionCard } from '../../../components/ui/section-card';
-import { formatDay, formatTime } from '../../../lib/time';
-import { bookingQueries } from '../../bookings/api/booking-queries';
-import { describeBookingChange, entryTitle } from '../history-change';
+import { LoadingState } from '../../../../components/ui/loading-state';
+import { SectionCard } from '../../../../components/ui/section-card';
+import { formatDay, formatTime } from '../../../../lib/time';
+import { bookingQueries } from '../../api/booking-queries';
+import { describeBookingChange, entryTitle } from '../../history-change';
 
 type Props = { bookingId: string; timeZone: string; currency: string; stylists: { id: string; name: string }[] };
 

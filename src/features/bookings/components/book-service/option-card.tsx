@@ -1,8 +1,8 @@
-import type { BookingOption } from '../../../../shared/schemas/booking.schemas';
-import { Button } from '../../../components/ui/button';
-import { StepStrip } from '../../../components/ui/step-strip';
-import { sittingLabel } from '../../../lib/booking-labels';
-import { formatDay, formatMinutes, formatTimeRange } from '../../../lib/time';
+import type { BookingOption } from '../../../../../shared/schemas/booking.schemas';
+import { Button } from '../../../../components/ui/button';
+import { StepStrip } from '../../../../components/ui/step-strip';
+import { sittingLabel } from '../../../../lib/booking-labels';
+import { formatDay, formatMinutes, formatTimeRange } from '../../../../lib/time';
 
 type Props = { option: BookingOption; timeZone: string; busy: boolean; disabled: boolean; onBook: () => void };
 

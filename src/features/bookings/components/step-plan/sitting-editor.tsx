@@ -1,9 +1,9 @@
 import { useFieldArray, useFormContext } from 'react-hook-form';
-import { fieldError } from '../../../lib/form-errors';
-import { Button } from '../../../components/ui/button';
-import { TextField } from '../../../components/ui/text-field';
-import type { StepPlanFormInput } from '../book-form-schema';
-import { stepOfKind } from '../book-form-schema';
+import { fieldError } from '../../../../lib/form-errors';
+import { Button } from '../../../../components/ui/button';
+import { TextField } from '../../../../components/ui/text-field';
+import type { StepPlanFormInput } from '../../step-plan-form';
+import { stepOfKind } from '../../step-plan-form';
 import { StepRow } from './step-row';
 
 type Props = { index: number; of: number };

@@ -1,14 +1,15 @@
 import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
-import { ActionBar } from '../../../components/ui/action-bar';
-import { Button } from '../../../components/ui/button';
-import { FormAlert } from '../../../components/ui/form-alert';
-import { FreeTimePicker } from '../../../components/ui/free-time-picker';
-import { LoadingState } from '../../../components/ui/loading-state';
-import { TimeZoneNote } from '../../../components/ui/time-zone-note';
-import { problemText } from '../../../lib/api-error';
-import { dayAfterLast, freeTimeKey, freeTimeLabel, type FreeTime } from '../../../lib/free-times';
-import { myBookingQueries, useMoveMyBooking } from '../api/my-booking-queries';
+import { ActionBar } from '../../../../components/ui/action-bar';
+import { Button } from '../../../../components/ui/button';
+import { FormAlert } from '../../../../components/ui/form-alert';
+import { FreeTimePicker } from '../../../../components/ui/free-time-picker';
+import { LoadingState } from '../../../../components/ui/loading-state';
+import { TimeZoneNote } from '../../../../components/ui/time-zone-note';
+import { problemText } from '../../../../lib/api-error';
+import { dayAfterLast, freeTimeKey, freeTimeLabel, type FreeTime } from '../../../../lib/free-times';
+import { myBookingQueries } from '../../api/my-booking-queries';
+import { useMoveMyBooking } from '../../api/my-booking-mutations';
 
 type Props = { bookingId: string; onClose: () => void; onMoved: () => void };
 

@@ -1,12 +1,12 @@
 import { useFormContext } from 'react-hook-form';
-import type { ClientSummary } from '../../../../shared/schemas/client.schemas';
-import type { ServiceSummary } from '../../../../shared/schemas/service.schemas';
-import { Button } from '../../../components/ui/button';
-import { SelectField } from '../../../components/ui/select-field';
-import { TextField } from '../../../components/ui/text-field';
-import { ClientPicker } from '../../clients/components/client-picker';
-import type { BookFormInput } from '../book-form-schema';
-import { StepPlanEditor } from './step-plan-editor';
+import type { ClientSummary } from '../../../../../shared/schemas/client.schemas';
+import type { ServiceSummary } from '../../../../../shared/schemas/service.schemas';
+import { Button } from '../../../../components/ui/button';
+import { SelectField } from '../../../../components/ui/select-field';
+import { TextField } from '../../../../components/ui/text-field';
+import { ClientPicker } from '../../../clients/components/client-picker';
+import type { BookFormInput } from '../../book-form-schema';
+import { StepPlanEditor } from '../step-plan/step-plan-editor';
 
 type Props = {
   services: ServiceSummary[];

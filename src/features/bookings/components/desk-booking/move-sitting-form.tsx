@@ -1,19 +1,19 @@
 import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
-import type { BookingView } from '../../../../shared/schemas/booking-view.schemas';
-import { Button } from '../../../components/ui/button';
-import { FreeTimePicker } from '../../../components/ui/free-time-picker';
-import { LoadingState } from '../../../components/ui/loading-state';
-import { Notice } from '../../../components/ui/notice';
-import { SectionCard } from '../../../components/ui/section-card';
-import { SelectField } from '../../../components/ui/select-field';
-import { TextField } from '../../../components/ui/text-field';
-import { problemText } from '../../../lib/api-error';
-import { sittingLabel } from '../../../lib/booking-labels';
-import { dayAfterLast, freeTimeKey, type FreeTime } from '../../../lib/free-times';
-import { formatDay, formatTime, formatTimeRange } from '../../../lib/time';
-import { bookingQueries } from '../../bookings/api/booking-queries';
-import { useMoveSitting } from '../../bookings/api/booking-mutations';
+import type { BookingView } from '../../../../../shared/schemas/booking-view.schemas';
+import { Button } from '../../../../components/ui/button';
+import { FreeTimePicker } from '../../../../components/ui/free-time-picker';
+import { LoadingState } from '../../../../components/ui/loading-state';
+import { Notice } from '../../../../components/ui/notice';
+import { SectionCard } from '../../../../components/ui/section-card';
+import { SelectField } from '../../../../components/ui/select-field';
+import { TextField } from '../../../../components/ui/text-field';
+import { problemText } from '../../../../lib/api-error';
+import { sittingLabel } from '../../../../lib/booking-labels';
+import { dayAfterLast, freeTimeKey, type FreeTime } from '../../../../lib/free-times';
+import { formatDay, formatTime, formatTimeRange } from '../../../../lib/time';
+import { bookingQueries } from '../../api/booking-queries';
+import { useMoveSitting } from '../../api/booking-mutations';
 
 type Props = { booking: BookingView; timeZone: string; stylists: { id: string; name: string }[] };
 

@@ -1,7 +1,7 @@
-import type { SkinTestCheck } from '../../../../shared/schemas/booking.schemas';
-import { Button } from '../../../components/ui/button';
-import { Notice } from '../../../components/ui/notice';
-import { formatDay, formatTime, localDateOf } from '../../../lib/time';
+import type { SkinTestCheck } from '../../../../../shared/schemas/booking.schemas';
+import { Button } from '../../../../components/ui/button';
+import { Notice } from '../../../../components/ui/notice';
+import { formatDay, formatTime, localDateOf } from '../../../../lib/time';
 
 type Props = { check: SkinTestCheck; timeZone: string; earliestDate: string; onBookSkinTest: (() => void) | null };
 

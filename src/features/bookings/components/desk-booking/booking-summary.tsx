@@ -1,12 +1,12 @@
 import { Link } from 'react-router-dom';
-import type { BookingView } from '../../../../shared/schemas/booking-view.schemas';
-import { BookingStatusBadge } from '../../../components/ui/booking-status-badge';
-import { SkinTestFlag } from '../../../components/ui/skin-test-flag';
-import { SectionCard } from '../../../components/ui/section-card';
-import { StepStrip } from '../../../components/ui/step-strip';
-import { paths } from '../../../config/paths';
-import { formatMoney, sittingLabel, stepKindLabels } from '../../../lib/booking-labels';
-import { formatDay, formatTimeRange } from '../../../lib/time';
+import type { BookingView } from '../../../../../shared/schemas/booking-view.schemas';
+import { BookingStatusBadge } from '../../../../components/ui/booking-status-badge';
+import { SkinTestFlag } from '../../../../components/ui/skin-test-flag';
+import { SectionCard } from '../../../../components/ui/section-card';
+import { StepStrip } from '../../../../components/ui/step-strip';
+import { paths } from '../../../../config/paths';
+import { formatMoney, sittingLabel, stepKindLabels } from '../../../../lib/booking-labels';
+import { formatDay, formatTimeRange } from '../../../../lib/time';
 
 type Props = { booking: BookingView; timeZone: string; currency: string };
 

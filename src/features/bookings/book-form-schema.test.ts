@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { BookFormSchema, stepOfKind, toOptionsRequest } from './book-form-schema';
+import { BookFormSchema, toOptionsRequest } from './book-form-schema';
 
 const plan = { sittings: [{ steps: [{ kind: 'hands_on' as const, label: 'Apply', product: 'none', minutes: 30 }] }] };
 const valid = {
@@ -22,19 +22,5 @@ describe('BookFormSchema', () => {
   });
   it('turns "any stylist" into null for the request', () => {
     expect(toOptionsRequest(BookFormSchema.parse(valid)).stylistId).toBeNull();
-  });
-});
-
-describe('stepOfKind', () => {
-  it('carries the label and length over to a developing step', () => {
-    expect(stepOfKind('developing', { kind: 'hands_on', label: 'Toner', product: 'toner_direct', minutes: 20 })).toEqual({
-      kind: 'developing',
-      label: 'Toner', product: 'toner_direct',
-      minMinutes: 20,
-      maxMinutes: 20,
-    });
-  });
-  it('keeps a basin step within its limit', () => {
-    expect(stepOfKind('basin', { kind: 'developing', label: 'Rinse', product: 'none', minMinutes: 30, maxMinutes: 200 })).toEqual({ kind: 'basin', label: 'Rinse', product: 'none', minutes: 120 });
   });
 });

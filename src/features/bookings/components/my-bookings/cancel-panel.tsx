@@ -1,12 +1,13 @@
 import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
-import { Button } from '../../../components/ui/button';
-import { FormAlert } from '../../../components/ui/form-alert';
-import { LoadingState } from '../../../components/ui/loading-state';
-import { TextField } from '../../../components/ui/text-field';
-import { problemText } from '../../../lib/api-error';
-import { myBookingQueries, useCancelMyBooking } from '../api/my-booking-queries';
-import { CancelTermsNotice } from './cancel-terms-notice';
+import { Button } from '../../../../components/ui/button';
+import { FormAlert } from '../../../../components/ui/form-alert';
+import { LoadingState } from '../../../../components/ui/loading-state';
+import { TextField } from '../../../../components/ui/text-field';
+import { problemText } from '../../../../lib/api-error';
+import { myBookingQueries } from '../../api/my-booking-queries';
+import { useCancelMyBooking } from '../../api/my-booking-mutations';
+import { CancelTermsNotice } from '../cancel-terms-notice';
 
 type Props = { bookingId: string; onClose: () => void; onCancelled: () => void };
 
