@@ -10,3 +10,6 @@ export type FormatContext = { locale: string; timeZone: string };
 
 /** The format context of a salon (or anything that knows its time zone). */
 export const formatFor = (timeZone: string): FormatContext => ({ locale: SALON_LOCALE, timeZone });
+
+/** For calendar dates (`YYYY-MM-DD`) and wall-clock settings (`HH:mm`) where no salon is at hand: they have no zone. Never for instants. */
+export const zonelessFormat: FormatContext = { locale: SALON_LOCALE, timeZone: 'UTC' };

@@ -4,7 +4,6 @@ import type { Db } from '../../db/database';
 import type { Salon } from '../../../shared/schemas/salon.schemas';
 import type { CancelTerms } from '../../../shared/schemas/online-booking.schemas';
 import { AppError, notFound } from '../../lib/app-error';
-import { formatMoney } from '../../lib/money';
 import { writeAudit } from '../audit/audit.repository';
 import { bookingSnapshot } from './booking-snapshot.repository';
 import { markCancelled, sittingStarts } from './change-booking.repository';
@@ -12,6 +11,7 @@ import { replanBookingMessages } from '../messages/plan-messages.service';
 import { withColourBookingsKept } from './skin-test-dependants';
 import { bookingSkinTestStates } from '../skin-tests/skin-test-check.service';
 import type { StepPlan } from '../../../shared/schemas/step-plan.schemas';
+import { formatMoney } from '../../../shared/money/money';
 
 /**
  * The deposit policy on cancelling: inside the salon's cancellation window before the first sitting the

@@ -3,13 +3,13 @@ import type { Database } from '../../db/schema';
 import type { SessionUser } from '../../../shared/schemas/auth.schemas';
 import { DateTime } from 'luxon';
 import { AppError, notFound } from '../../lib/app-error';
-import { formatMoney } from '../../lib/money';
 import { findSalon } from '../salon/salon.repository';
 import { findClientIdForUser } from '../clients/clients.repository';
 import { findService } from '../services/services.repository';
 import { cancelOutcome, depositOutcome } from '../bookings/cancel-booking.service';
 import type { CancelTerms } from '../../../shared/schemas/online-booking.schemas';
 import { findHold } from './holds.repository';
+import { formatMoney } from '../../../shared/money/money';
 
 /** One of the signed-in client's own bookings; anyone else's is answered as not found. */
 export async function ownBooking(db: Kysely<Database>, user: SessionUser, id: string) {

@@ -1,5 +1,4 @@
 import type { Kysely } from 'kysely';
-import { DateTime } from 'luxon';
 import type { z } from 'zod';
 import type { Database } from '../../db/schema';
 import type { SessionUser } from '../../../shared/schemas/auth.schemas';
@@ -15,6 +14,8 @@ import { confirmHoldRow, hasAcceptedCautions, recordPayment } from './holds.repo
 import { ownHold } from './holds.service';
 import { sendConfirmation } from './confirmation';
 import { assertHoldSkinTest } from './hold-skin-test';
+import { formatTime } from '../../../shared/format/date-time';
+import { formatFor } from '../../../shared/format/locale';
 
 type Deps = { payments: Payments; mailer: Mailer; sms: SmsSender };
 
@@ -38,7 +39,7 @@ export async function payHold(db: Kysely<Database>, deps: Deps, user: SessionUse
     const charge = await deps.payments.charge({ amountCents: hold.deposit_cents, currency: salon.currency, card: body.card, idempotencyKey: `deposit:${id}:${body.idempotencyKey}`, metadata: { booking: id } });
     if (!charge.ok) {
       await recordPayment(db, { ...record, providerRef: charge.paymentIntentId, status: 'declined', message: charge.message });
-      const until = hold.held_until ? DateTime.fromJSDate(hold.held_until, { zone: hold.timeZone }).toFormat('h:mm a ZZZZ') : 'the hold runs out';
+      const until = hold.held_until ? formatTime(hold.held_until, formatFor(hold.timeZone), { zoneName: true }) : 'the hold runs out';
       throw new AppError('PAYMENT_DECLINED', 402, `${charge.message} Your time stays held until ${until}; you can try another card.`);
     }
     paymentRef = charge.paymentIntentId;

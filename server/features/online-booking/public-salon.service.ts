@@ -2,12 +2,12 @@ import { describeHoursRule } from '../../../shared/engine/describe-hours';
 import { planNeedsSkinTest } from '../../../shared/rules/skin-test-need';
 import { skinTestValidityWords, skinTestWords } from '../../../shared/rules/skin-test-words';
 import { toSalon } from '../salon/salon.repository';
-import { DateTime } from 'luxon';
 import type { Db } from '../../db/database';
 import type { PublicSalon } from '../../../shared/schemas/online-booking.schemas';
 import { notFound } from '../../lib/app-error';
-import { formatMoney } from '../../lib/money';
 import { listServices, listStylistDetails } from '../services/services.repository';
+import { formatMoney } from '../../../shared/money/money';
+import { todayIn } from '../../../shared/time/salon-time';
 
 
 export async function findSalonBySlug(db: Db, slug: string) {
@@ -25,7 +25,7 @@ export async function publicSalon(db: Db, slug: string): Promise<PublicSalon> {
     listStylistDetails(db, salon.id),
   ]);
   const families = toSalon(salon).skinTestFamilies;
-  const today = DateTime.now().setZone(salon.time_zone).toISODate() ?? undefined;
+  const today = todayIn(salon.time_zone, new Date());
   const deposits = services.filter((s) => s.depositCents > 0).map((s) => `${s.name}: ${formatMoney(s.depositCents, salon.currency)}`);
   return {
     slug: salon.slug,
