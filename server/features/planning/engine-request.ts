@@ -3,6 +3,7 @@ import type { Option, ServiceRequest } from '../../../shared/engine/engine';
 import type { StepPlan } from '../../../shared/schemas/step-plan.schemas';
 import type { BookingOption } from '../../../shared/schemas/booking.schemas';
 import { MAX_HORIZON_DAYS } from '../../../shared/engine/engine';
+import { localDateTimeOf } from '../../../shared/time/salon-time';
 
 /** The engine's view of a step plan: the same chain without labels. */
 export function toEngineSittings(plan: StepPlan): ServiceRequest['sittings'] {
@@ -28,7 +29,7 @@ export function localEarliest(at: Date, zone: string, granularity: number): stri
   let t = DateTime.fromJSDate(at, { zone }).startOf('minute');
   const over = t.minute % granularity;
   if (over || t.second) t = t.plus({ minutes: over ? granularity - over : 0 });
-  return t.toFormat("yyyy-MM-dd'T'HH:mm");
+  return localDateTimeOf(t.toJSDate(), zone);
 }
 
 export interface Names {
