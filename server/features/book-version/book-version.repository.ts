@@ -1,8 +1,8 @@
 import { sql, type Selectable } from 'kysely';
-import { DateTime } from 'luxon';
 import type { Db } from '../../db/database';
 import type { SalonsTable } from '../../db/schema';
 import { notFound } from '../../lib/app-error';
+import { shiftLocalDate } from '../../../shared/time/salon-time';
 
 /** Local dates [from, to) in the salon's zone, YYYY-MM-DD. */
 export interface DayRange {
@@ -12,7 +12,7 @@ export interface DayRange {
 
 /** `count` local dates from `date` (YYYY-MM-DD), as the range the book's date versions are read for. */
 export function daysFrom(date: string, count: number): DayRange {
-  return { from: date, to: DateTime.fromISO(date, { zone: 'UTC' }).plus({ days: count }).toISODate()! };
+  return { from: date, to: shiftLocalDate(date, count) };
 }
 
 type SalonKey = { id: string } | { slug: string };
