@@ -1,4 +1,5 @@
-import { phoneHint, toE164 } from '../../shared/schemas/contact.schemas';
+import { phoneHint } from '../../shared/schemas/contact.schemas';
+import { toE164 } from '../../shared/format/phone';
 import { AppError } from './app-error';
 
 /**

@@ -12,12 +12,12 @@ describe('describeHoursRule', () => {
   it('names closed dates from the given day on, and leaves out those already past', () => {
     const text = composeWeeklyRule({ weekdays: ['TU', 'WE'], everyOtherWeek: false, startsOn: null, closedDates: ['2026-12-29', '2026-11-03'] });
     // 2026-12-29 is a Tuesday (checked against any calendar).
-    expect(describeHoursRule(text, '2026-12-01')).toBe('Tuesday and Wednesday; closed on Tue, Dec 29, 2026');
+    expect(describeHoursRule(text, '2026-12-01')).toBe('Tuesday and Wednesday; closed on Tue 29 Dec 2026');
   });
 
   it('says every other week and from which week it counts', () => {
     const text = composeWeeklyRule({ weekdays: ['SA'], everyOtherWeek: true, startsOn: '2027-01-02', closedDates: [] });
-    expect(describeHoursRule(text)).toBe('Every other week (counting from the week of Sat, Jan 2, 2027): Saturday');
+    expect(describeHoursRule(text)).toBe('Every other week (counting from the week of Sat 2 Jan 2027): Saturday');
   });
 
   it('falls back to the recurrence text’s own words, and never throws on anything stored', () => {

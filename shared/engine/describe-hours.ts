@@ -1,17 +1,18 @@
 /**
  * Opening or working hours in plain words for clients and staff ("Tuesday to Saturday, closed on
- * Thu, Dec 24, 2026"). Never throws: a rule it cannot put into words reads as the salon's set days,
+ * Thu 24 Dec 2026"). Never throws: a rule it cannot put into words reads as the salon's set days,
  * so no stored rule can take a page down.
  */
-import { DateTime } from 'luxon';
 import { rrule as rr } from './rrule-package';
 import { readWeeklyRule, WEEKDAY_CODES, type WeekdayCode } from './weekly-rule';
+import { formatDate } from '../format/date-time';
+import { zonelessFormat } from '../format/locale';
 
 const dayWords: Record<WeekdayCode, string> = {
   MO: 'Monday', TU: 'Tuesday', WE: 'Wednesday', TH: 'Thursday', FR: 'Friday', SA: 'Saturday', SU: 'Sunday',
 };
 
-const dateWords = (date: string) => DateTime.fromISO(date, { locale: 'en-US' }).toLocaleString(DateTime.DATE_MED_WITH_WEEKDAY);
+const dateWords = (date: string) => formatDate(date, zonelessFormat, { width: 'short' });
 
 /** "Monday, Wednesday and Friday"; three or more days in a row read as "Tuesday to Saturday". */
 export function describeWeekdays(days: readonly WeekdayCode[]): string {

@@ -11,7 +11,7 @@ const base: ConsultationInput = {
   currentLevel: 5, targetLevel: 5, history: virgin, length: 'medium', density: 'medium', elasticity: 'good', porosity: 'normal',
   conditionNotes: '', strandTest: 'none', wantsCut: false, vivid: false, notes: '',
 };
-const pricing: QuotePricing = { correctionCentsPerHour: 9000, cutFinishCents: 7500, productCentsPerGram: {}, deposit: { kind: 'percent', percent: 25 } };
+const pricing: QuotePricing = { correctionCentsPerHour: 9000, cutFinishCents: 7500, productCentsPerGram: {}, deposit: { kind: 'percent', percent: 25 }, currency: 'USD' };
 // The salon's rules, typed here by hand from the trade's rules of thumb (common practice, from memory): lightener
 // on the head about 45–50 min at most, permanent colour 30–45, demi-permanent and toner up to 30, remover up to
 // 60 per application; lift per sitting about 3 levels on virgin hair, 2 on coloured, 1 on compromised hair.
@@ -196,6 +196,14 @@ describe('minutes for length and density', () => {
 });
 
 describe('price and deposit', () => {
+  it('rounds the price up to the whole unit of the salon’s currency', () => {
+    const at = (currency: string) => proposeQuote({ ...base, currentLevel: 5, targetLevel: 6 }, { ...pricing, productCentsPerGram: { permanent: 5.3 }, currency }, rules);
+    const sum = at('USD').lines.reduce((t, l) => t + l.cents, 0);
+    // ISO 4217: USD has 2 decimals (100 cents to the dollar), JPY none (the yen is its own minor unit), KWD 3.
+    expect(at('USD').priceCents).toBe(Math.ceil(sum / 100) * 100);
+    expect(at('JPY').priceCents).toBe(Math.ceil(sum));
+    expect(at('KWD').priceCents).toBe(Math.ceil(sum / 1000) * 1000);
+  });
   it('bills chair time at the hourly rate, the cut at its price, and product at cost per gram', () => {
     const q = proposeQuote({ ...base, currentLevel: 5, targetLevel: 6, wantsCut: true }, { ...pricing, productCentsPerGram: { permanent: 5 } }, rules);
     // Chair time without the cut: 15 + 30 (most) + 15 = 60 min; 60/60 × $90.00 = $90.00.

@@ -13,6 +13,7 @@ import type { StepPlan } from '../schemas/step-plan.schemas';
 import { limitedFamilyNames, type ProcessingLimits } from '../rules/processing-limits';
 import { compromised, hairState, hairStateNames, levelsPerSitting, previouslyColoured, type LiftPerSitting } from './lift-per-sitting';
 import { hairFactor, stageGrams, stageSteps, type BuiltStage, type Stage } from './stage-steps';
+import { minorPerUnit } from '../money/currency-exponent';
 
 export type QuotePricing = {
   /** The salon's hourly rate for correction and colour chair time, in cents. */
@@ -22,6 +23,8 @@ export type QuotePricing = {
   /** Estimated product cost per gram of mixed product, in cents (may be fractional); absent types cost 0. */
   productCentsPerGram: Partial<Record<ProductType, number>>;
   deposit: DepositPolicy;
+  /** ISO 4217 code: the price is rounded up to its whole unit. */
+  currency: string;
 };
 
 /** The salon's planning rules the proposal follows (Set-up → Salon). */
@@ -160,8 +163,8 @@ export const QUOTE_CAUTIONS = [
   'These numbers are aids. The licensed professional’s judgement and local regulations decide.',
 ];
 
-/** Rounds a price up to the whole currency unit, as a quote is given to the client. */
-const roundUpToUnit = (cents: number) => Math.ceil(cents / 100) * 100;
+/** Rounds a price up to the whole currency unit (ISO 4217 minor units per unit), as a quote is given to the client. */
+const roundUpToUnit = (minor: number, currency: string) => Math.ceil(minor / minorPerUnit(currency)) * minorPerUnit(currency);
 
 export function depositFor(policy: DepositPolicy, priceCents: number): number {
   const cents = policy.kind === 'fixed' ? policy.cents : Math.round((priceCents * policy.percent) / 100);
@@ -205,7 +208,7 @@ export function proposeQuote(c: ConsultationInput, pricing: QuotePricing, rules:
   const lines = [{ label: `Colour work, ${billedMinutes} min at the hourly rate`, cents: timeCents }];
   if (c.wantsCut) lines.push({ label: 'Cut and finish', cents: pricing.cutFinishCents });
   if (productCostCents > 0) lines.push({ label: 'Product (estimate)', cents: productCostCents });
-  const priceCents = roundUpToUnit(lines.reduce((t, l) => t + l.cents, 0));
+  const priceCents = roundUpToUnit(lines.reduce((t, l) => t + l.cents, 0), pricing.currency);
 
   return {
     stepPlan: { sittings },

@@ -1,12 +1,13 @@
 import { z } from 'zod';
-import { isSupportedCountry, parsePhoneNumberFromString, type CountryCode } from 'libphonenumber-js';
+import { isSupportedCountry } from 'libphonenumber-js';
+import { DEFAULT_PHONE_COUNTRY } from '../format/phone';
 
 /**
  * Numbers typed without a country code are read as the salon's country's (a salon setting, ISO 3166-1
  * alpha-2; the demo salon is in the US). The schemas here only check that something like a number was
- * typed; the server, which knows the salon, reads it into E.164 with `toE164` (server/lib/stored-phone.ts).
+ * typed; the server, which knows the salon, reads it into E.164 with `toE164` (shared/format/phone.ts, through
+ * server/lib/stored-phone.ts).
  */
-export const DEFAULT_PHONE_COUNTRY: CountryCode = 'US';
 export const PHONE_HINT = 'Enter a mobile number, e.g. +1 970 555 0142';
 
 /** A country's English name from its ISO 3166-1 alpha-2 code (the code itself if the runtime has no name). */
@@ -26,12 +27,6 @@ export const PhoneCountrySchema = z
   .trim()
   .toUpperCase()
   .refine((c) => /^[A-Z]{2}$/.test(c) && isSupportedCountry(c), 'Choose a country');
-
-/** The number in E.164 (+19705550142), or null when libphonenumber-js does not find a valid number. */
-export function toE164(input: string, country: string = DEFAULT_PHONE_COUNTRY): string | null {
-  const parsed = parsePhoneNumberFromString(input.trim(), isSupportedCountry(country) ? country : DEFAULT_PHONE_COUNTRY);
-  return parsed?.isValid() ? parsed.number : null;
-}
 
 // Digits with the usual punctuation, at least five digits: anything else is not an attempt at a number.
 const looksLikePhone = (s: string) => /^\+?[\d\s().\-/]+$/.test(s) && (s.match(/\d/g)?.length ?? 0) >= 5;

@@ -1,5 +1,7 @@
 import type { BookingView } from '../../shared/schemas/booking-view.schemas';
 import type { BookingStatus, Role, StepKind } from '../../shared/schemas/common.schemas';
+import { formatMoney } from '../../shared/money/money';
+import { SALON_LOCALE } from '../../shared/format/locale';
 
 /** The words the UI uses for the API's enum values (docs/glossary.md). */
 export const stepKindLabels: Record<StepKind, string> = {
@@ -34,12 +36,8 @@ export function whoseSitting(clientName: string, seq: number, of: number): strin
   return `${clientName}'s ${sittingLabel(seq, of)?.toLowerCase() ?? 'sitting'}`;
 }
 
-export function formatMoney(cents: number, currency: string): string {
-  return new Intl.NumberFormat(undefined, { style: 'currency', currency }).format(cents / 100);
-}
-
 export function formatPercent(share: number | null): string {
-  return share === null ? '—' : new Intl.NumberFormat(undefined, { style: 'percent', maximumFractionDigits: 0 }).format(share);
+  return share === null ? '—' : new Intl.NumberFormat(SALON_LOCALE, { style: 'percent', maximumFractionDigits: 0 }).format(share);
 }
 
 /** A cancelled booking's deposit outcome in words: "The $25.00 deposit was refunded to the client.", or nothing. */

@@ -1,6 +1,7 @@
-import { DateTime } from 'luxon';
 import type { Availability } from '../../shared/schemas/online-booking.schemas';
-import { formatTime, localDateOf, shiftLocalDate } from './time';
+import { formatDate, formatTime } from '../../shared/format/date-time';
+import { formatFor, zonelessFormat } from '../../shared/format/locale';
+import { localDateOf, shiftLocalDate } from '../../shared/time/salon-time';
 
 export type FreeTime = Availability['times'][number];
 export type FreeDay = { date: string; times: FreeTime[] };
@@ -26,17 +27,17 @@ export function groupTimesByDay(times: readonly FreeTime[], zone: string): FreeD
 
 /** "Tuesday 8 December" for a local date `YYYY-MM-DD`. */
 export function dayLabel(date: string): string {
-  return DateTime.fromISO(date).toFormat('cccc d LLLL');
+  return formatDate(date, zonelessFormat, { year: false });
 }
 
 /** "Tue 8 Dec": the short form for date chips on a phone. */
 export function shortDayLabel(date: string): string {
-  return DateTime.fromISO(date).toFormat('ccc d LLL');
+  return formatDate(date, zonelessFormat, { width: 'short', year: false });
 }
 
 /** "Tuesday 8 December, 10:00 AM with Ana Moreno": what a time button is announced as. */
 export function freeTimeLabel(time: FreeTime, zone: string): string {
-  return `${dayLabel(localDateOf(time.start, zone))}, ${formatTime(time.start, zone)} with ${time.stylistName}`;
+  return `${dayLabel(localDateOf(time.start, zone))}, ${formatTime(time.start, formatFor(zone))} with ${time.stylistName}`;
 }
 
 /** A stable key for one free time (the same start can be free with two stylists). */

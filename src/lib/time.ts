@@ -1,51 +1,25 @@
 import { DateTime } from 'luxon';
+import { instantIso, localDateOf } from '../../shared/time/salon-time';
+import { formatFor, type FormatContext } from '../../shared/format/locale';
 
 /*
- * Every time on screen is shown in the salon's time zone (not the device's),
- * because that is where the chair is.
+ * The client's own readings of the clock. Conversions between instants and the salon's wall clock are in
+ * shared/time/salon-time.ts and the way dates and times are written in shared/format/date-time.ts.
  */
 
-const at = (iso: string, zone: string) => DateTime.fromISO(iso, { zone });
-
-export function formatTime(iso: string, zone: string): string {
-  return at(iso, zone).toLocaleString(DateTime.TIME_SIMPLE);
-}
-
-export function formatTimeRange(startIso: string, endIso: string, zone: string): string {
-  return `${formatTime(startIso, zone)} – ${formatTime(endIso, zone)}`;
-}
-
-/** "9:00 PM" for a clock time `HH:mm` (a salon setting, not an instant). */
-export function formatClock(hhmm: string): string {
-  return DateTime.fromISO(`2000-01-01T${hhmm}`).toLocaleString(DateTime.TIME_SIMPLE);
-}
-
-/** "Tue, Mar 2, 2027" for an instant, in the salon's zone. */
-export function formatDay(iso: string, zone: string): string {
-  return at(iso, zone).toLocaleString(DateTime.DATE_MED_WITH_WEEKDAY);
-}
-
-/** "Tuesday, March 2, 2027" for a local date `YYYY-MM-DD`. */
-export function formatLocalDate(date: string): string {
-  return DateTime.fromISO(date).toLocaleString(DateTime.DATE_HUGE);
-}
-
-export function localDateOf(iso: string, zone: string): string {
-  return at(iso, zone).toISODate() ?? '';
-}
-
+/** Today's date on the salon's calendar (the device's clock, the salon's zone). */
 export function todayIn(zone: string): string {
-  return DateTime.now().setZone(zone).toISODate() ?? '';
+  return localDateOf(new Date(), zone);
 }
 
-export function shiftLocalDate(date: string, days: number): string {
-  return DateTime.fromISO(date).plus({ days }).toISODate() ?? date;
+/** The current minute as ISO 8601 with the salon's offset: the default for "when was this done". */
+export function nowInZone(zone: string): string {
+  return instantIso(new Date(Math.floor(Date.now() / 60_000) * 60_000), zone);
 }
 
-/** Minutes from local midnight of `date` in the zone (handles days when clocks change). */
-export function minutesIntoDay(iso: string, date: string, zone: string): number {
-  const midnight = DateTime.fromISO(date, { zone }).startOf('day');
-  return Math.round(at(iso, zone).diff(midnight, 'minutes').minutes);
+/** The format context of the device's own zone, for the few lists shown where no salon is loaded. */
+export function deviceFormat(): FormatContext {
+  return formatFor(Intl.DateTimeFormat().resolvedOptions().timeZone);
 }
 
 export function minutesBetween(startIso: string, endIso: string): number {
@@ -60,12 +34,6 @@ export function zoneLabel(zone: string, date?: string): string {
 
 export function isPast(iso: string): boolean {
   return DateTime.fromISO(iso) < DateTime.now();
-}
-
-/** A local date and clock time in the zone as an ISO instant with its offset, or null when it is not a real date. */
-export function localToInstant(date: string, time: string, zone: string): string | null {
-  const moment = DateTime.fromISO(`${date}T${time}`, { zone });
-  return moment.isValid ? moment.toISO({ suppressMilliseconds: true }) : null;
 }
 
 /** "7 h 30 min", "45 min". */

@@ -67,7 +67,8 @@ describe('owner set-up', () => {
       await page.getByText('The salon settings are saved').waitFor();
       await page.goto(`${baseUrl()}/salon/kestrel-and-pine`);
       await page.getByRole('heading', { level: 1, name: 'Kestrel & Pine Hair Studio' }).waitFor();
-      await page.getByText(`closed on ${closedWednesday.setLocale('en-US').toLocaleString(DateTime.DATE_MED_WITH_WEEKDAY)}`, { exact: false }).waitFor();
+      // Dates in words follow the format policy (docs/architecture.md, Formats): weekday, day, month, year.
+      await page.getByText(`closed on ${closedWednesday.setLocale('en-US').toFormat('ccc d LLL yyyy')}`, { exact: false }).waitFor();
       await page.goto(`${baseUrl()}/owner/setup`);
       await page.getByRole('heading', { name: 'Opening hours' }).waitFor();
 

@@ -6,7 +6,7 @@ import { insertPlannedService, tonerPlan } from '../factories/service';
 import { futureWeekday, localIso } from '../setup/dates';
 import { setupPaths } from '../../shared/api/setup-paths';
 import { composeWeeklyRule } from '../../shared/engine/weekly-rule';
-import { localDateOf } from '../../src/lib/time';
+import { localDateOf } from '../../shared/time/salon-time';
 
 // A closed date written by the Set-up form (an EXDATE line, RFC 5545 §3.8.5.1) once answered 500 on the public
 // page for every visitor. The same text must work for every reader: public page, free times, desk options, booking.

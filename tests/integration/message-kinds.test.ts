@@ -162,7 +162,7 @@ describe('staff messages, at 18:00 in the salon’s zone', () => {
     const rows = await db().selectFrom('messages').selectAll().where('id', 'in', planned.map((p) => p.id)).execute();
     const stylistList = rows.find((r) => r.kind === 'stylist_day_list')!;
     expect(stylistList.to_address).toBe(ana.email);
-    expect(stylistList.body).toMatch(/2:00 PM–3:00 PM {2}Client \d+: Full lightening/);
+    expect(stylistList.body).toMatch(/2:00 PM – 3:00 PM {2}Client \d+: Full lightening/);
     const desk = rows.filter((r) => r.kind === 'desk_no_deposit_list');
     expect(desk.length).toBeGreaterThanOrEqual(1);
     expect(desk[0].body).toMatch(/Full lightening — deposit \$50\.00 not paid/);

@@ -1,9 +1,9 @@
 import { sql } from 'kysely';
-import { DateTime } from 'luxon';
 import type { Db } from '../../db/database';
 import type { Salon } from '../../../shared/schemas/salon.schemas';
 import { notFound } from '../../lib/app-error';
 import { toSalon } from '../salon/salon.repository';
+import { shiftLocalDate } from '../../../shared/time/salon-time';
 
 /** Local dates [from, to) in the salon's zone, YYYY-MM-DD. */
 export interface DayRange {
@@ -13,7 +13,7 @@ export interface DayRange {
 
 /** `count` local dates from `date` (YYYY-MM-DD), as the range the book's date versions are read for. */
 export function daysFrom(date: string, count: number): DayRange {
-  return { from: date, to: DateTime.fromISO(date, { zone: 'UTC' }).plus({ days: count }).toISODate()! };
+  return { from: date, to: shiftLocalDate(date, count) };
 }
 
 type SalonKey = { id: string } | { slug: string };

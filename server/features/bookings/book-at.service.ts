@@ -15,6 +15,7 @@ import { preferredChair } from './preferred-chair';
 import { auditBookingChange } from './booking-audit.service';
 import { replanBookingMessages } from '../messages/plan-messages.service';
 import { withdrawStaleOffers } from '../windows/offer-withdrawal.service';
+import { localDateOf } from '../../../shared/time/salon-time';
 
 export interface BookAtInput {
   salon: Pick<Salon, 'id' | 'name' | 'timeZone' | 'skinTestLeadHours' | 'skinTestValidityDays' | 'skinTestFamilies' | 'granularityMinutes'>;
@@ -106,7 +107,7 @@ function preferredChairs(db: Db, salonId: string, plan: Option, wanted: string[]
 }
 
 async function planOrExplain(db: Db, input: BookAtInput): Promise<Option> {
-  const startDate = DateTime.fromJSDate(input.start, { zone: input.salon.timeZone }).toISODate()!;
+  const startDate = localDateOf(input.start, input.salon.timeZone);
   const calendars = await loadSalonCalendars(db, input.salon.id, horizonFor(startDate, input.plan, 1));
   const stylist = calendars.stylists.find((s) => s.id === input.stylistId);
   if (!stylist) throw new AppError('VALIDATION_FAILED', 400, 'Some fields need attention.', { stylistId: 'No such stylist in this salon.' });

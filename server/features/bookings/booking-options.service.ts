@@ -13,6 +13,7 @@ import { loadSalonCalendars } from '../planning/salon-calendars.repository';
 import { horizonFor, localEarliest, toBookingOption, toEngineSittings } from '../planning/engine-request';
 import { loadNames } from '../planning/names.repository';
 import { assertWithinProcessingLimits } from '../planning/processing-limits-check';
+import { localDateOf } from '../../../shared/time/salon-time';
 
 /** How many days of first sittings the desk's search looks through. */
 const SEARCH_DAYS = 42;
@@ -31,7 +32,7 @@ export async function findBookingOptions(db: Db, salon: Salon, body: Required<Bo
   if (verdict.status === 'blocked') return { timeZone: salon.timeZone, skinTest, options: [] };
 
   const earliest = new Date(Math.max(now.getTime(), DateTime.fromISO(body.earliestDate, { zone: salon.timeZone }).toMillis(), firstAllowed?.getTime() ?? 0));
-  const fromDate = DateTime.fromJSDate(earliest, { zone: salon.timeZone }).toISODate()!;
+  const fromDate = localDateOf(earliest, salon.timeZone);
   const calendars = await loadSalonCalendars(db, salon.id, horizonFor(fromDate, body.stepPlan, SEARCH_DAYS));
   if (body.stylistId && !calendars.stylists.some((s) => s.id === body.stylistId)) {
     throw new AppError('VALIDATION_FAILED', 400, 'Some fields need attention.', { stylistId: 'No such stylist in this salon.' });

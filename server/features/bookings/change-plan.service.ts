@@ -1,4 +1,3 @@
-import { DateTime } from 'luxon';
 import type { Kysely } from 'kysely';
 import type { Database } from '../../db/schema';
 import type { Salon } from '../../../shared/schemas/salon.schemas';
@@ -15,6 +14,7 @@ import { replanBookingMessages } from '../messages/plan-messages.service';
 import { bookingSnapshot } from './booking-snapshot.repository';
 import { auditBookingChange } from './booking-audit.service';
 import { replaceSitting, setStepPlan, sittingStarts } from './change-booking.repository';
+import { localDateOf } from '../../../shared/time/salon-time';
 
 /**
  * Replaces a booking's step plan, each sitting kept at its start (e.g. oxidative colour changed to a direct dye
@@ -40,7 +40,7 @@ export async function changePlan(db: Kysely<Database>, salon: Salon, actorUserId
     }
     for (const [i, start] of starts.entries()) {
       const one: StepPlan = { sittings: [{ steps: plan.sittings[i].steps }] };
-      const date = DateTime.fromJSDate(start, { zone: salon.timeZone }).toISODate()!;
+      const date = localDateOf(start, salon.timeZone);
       const calendars = await loadSalonCalendars(trx, salon.id, horizonFor(date, one, 1), bookingId);
       const result = planExactlyAt(calendars, { skill: service?.skill ?? 'colour', stylistId: booking.stylistId, plan: one, start });
       if ('reason' in result) throw new AppError('CONFLICT', 409, `Sitting ${i + 1}: ${result.reason}`);

@@ -7,16 +7,18 @@ import { openingDays } from '../../../shared/engine/opening-days';
 import { listSalonHours } from '../salon/salon.repository';
 import { loadBookingViews } from './booking-views.repository';
 import { listChairs, listStylists, findStaffIdForUser } from './salon-resources.repository';
+import { instantAt, localDateOf, shiftLocalDate } from '../../../shared/time/salon-time';
 
 /** [start, end) of a local date in the salon's zone: 23, 24 or 25 real hours. */
 export function localDayBounds(date: string, timeZone: string): { from: Date; to: Date } {
-  const start = DateTime.fromISO(date, { zone: timeZone }).startOf('day');
-  if (!start.isValid) throw new AppError('VALIDATION_FAILED', 400, 'Some fields need attention.', { date: 'Not a calendar date.' });
-  return { from: start.toJSDate(), to: start.plus({ days: 1 }).toJSDate() };
+  const from = instantAt(date, timeZone);
+  if (!from) throw new AppError('VALIDATION_FAILED', 400, 'Some fields need attention.', { date: 'Not a calendar date.' });
+  return { from, to: instantAt(shiftLocalDate(date, 1), timeZone)! };
 }
 
+/** Today in the salon by the server's clock (the routes' default date). */
 export function todayIn(timeZone: string, now = new Date()): string {
-  return DateTime.fromJSDate(now, { zone: timeZone }).toISODate()!;
+  return localDateOf(now, timeZone);
 }
 
 /** The salon's opening hours over `count` dates from `date`: what the day book and the week cover. */

@@ -18,6 +18,7 @@ import { preferredChair } from './preferred-chair';
 import { listStylists } from './salon-resources.repository';
 import { replanBookingMessages } from '../messages/plan-messages.service';
 import { withdrawStaleOffers } from '../windows/offer-withdrawal.service';
+import { localDateOf } from '../../../shared/time/salon-time';
 
 export interface MoveRequest {
   bookingId: string;
@@ -79,7 +80,7 @@ export async function moveSitting(db: Kysely<Database>, salon: Salon, actorUserI
       await assertSkinTestAllows(trx, salon, { clientId: booking.clientId, plan, serviceAsks: service?.needsSkinTest ?? false, starts: moved, atDesk: req.allowWaitingOnTest ?? false }, now);
     }
 
-    const date = DateTime.fromJSDate(req.start, { zone: salon.timeZone }).toISODate()!;
+    const date = localDateOf(req.start, salon.timeZone);
     const calendars = await loadSalonCalendars(trx, salon.id, horizonFor(date, one, 1), req.bookingId);
     const result = planExactlyAt(calendars, { skill, stylistId, plan: one, start: req.start });
     if ('reason' in result) throw new AppError('CONFLICT', 409, result.reason);

@@ -1,9 +1,10 @@
-import { DateTime } from 'luxon';
 import type { Db } from '../../db/database';
 import type { Salon } from '../../../shared/schemas/salon.schemas';
 import { AppError } from '../../lib/app-error';
 import { bookingSkinTestStates } from '../skin-tests/skin-test-check.service';
 import { upcomingBookingsOfClient } from './bookings.repository';
+import { formatDateTime } from '../../../shared/format/date-time';
+import { formatFor } from '../../../shared/format/locale';
 
 /**
  * A change to a client's skin tests (a skin-test appointment cancelled) must not take away the footing of a live
@@ -17,7 +18,7 @@ export async function withColourBookingsKept(db: Db, salon: Salon, clientId: str
   const after = await liveStates(db, salon, clientId, now);
   const lost = after.filter((b) => b.state === 'blocked' && before.find((x) => x.id === b.id)?.state !== 'blocked');
   if (lost.length) {
-    const list = lost.map((b) => `${b.name} on ${DateTime.fromJSDate(b.start, { zone: salon.timeZone }).toFormat('ccc d LLL, h:mm a')}`).join('; ');
+    const list = lost.map((b) => `${b.name} on ${formatDateTime(b.start, formatFor(salon.timeZone), { width: 'short', year: false })}`).join('; ');
     throw new AppError('SKIN_TEST', 409, `These colour bookings rely on this skin test: ${list}. Move or cancel them first.`);
   }
 }

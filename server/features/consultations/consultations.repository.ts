@@ -3,15 +3,16 @@ import type { Db } from '../../db/database';
 import type { ConsultationInput, QuoteEdit, QuoteWarning } from '../../../shared/schemas/consultation.schemas';
 import { correctionRate, productCentsPerGram } from '../quote-prices/quote-prices.repository';
 
-/** What a quote is priced from: the salon's hourly rate, its cut price and its cost per gram per product type. */
+/** What a quote is priced from: the salon's hourly rate, its cut price, its cost per gram per product type and its currency. */
 export async function quotePriceInputs(db: Db, salonId: string) {
-  const [correctionCentsPerHour, cut, costs] = await Promise.all([
+  const [correctionCentsPerHour, cut, costs, salon] = await Promise.all([
     correctionRate(db, salonId),
     // The salon's main cut service: the dearest active one of category cut.
     db.selectFrom('services').select('price_cents').where('salon_id', '=', salonId).where('category', '=', 'cut').where('active', '=', true).orderBy('price_cents', 'desc').executeTakeFirst(),
     productCentsPerGram(db, salonId),
+    db.selectFrom('salons').select('currency').where('id', '=', salonId).executeTakeFirstOrThrow(),
   ]);
-  return { correctionCentsPerHour, cutFinishCents: cut?.price_cents ?? 0, productCentsPerGram: costs };
+  return { correctionCentsPerHour, cutFinishCents: cut?.price_cents ?? 0, productCentsPerGram: costs, currency: salon.currency };
 }
 
 /** The client's photos among these ids (the others are not theirs, or do not exist). */

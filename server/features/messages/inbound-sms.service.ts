@@ -1,7 +1,7 @@
 import type { z } from 'zod';
 import type { Db } from '../../db/database';
 import { START_WORDS, STOP_WORDS, type InboundSmsSchema } from '../../../shared/schemas/inbound-sms.schemas';
-import { toE164 } from '../../../shared/schemas/contact.schemas';
+import { toE164 } from '../../../shared/format/phone';
 import { setSmsStopped } from '../clients/clients.repository';
 import { insertPlanned, replanClientMessages } from './plan-messages.service';
 import { stopReply } from './templates';

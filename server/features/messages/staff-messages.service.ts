@@ -1,15 +1,16 @@
-import { DateTime } from 'luxon';
 import type { Insertable } from 'kysely';
 import type { Db } from '../../db/database';
 import type { MessagesTable } from '../../db/schema';
-import { formatMoney } from '../../lib/money';
 import { deskEmails, salonsForStaffMessages, sittingsBetween, type DaySitting } from './staff-messages.repository';
 import { insertPlanned, type PlannedMessage } from './plan-messages.service';
+import { formatMoney } from '../../../shared/money/money';
+import { localClockOf, localDateOf, shiftLocalDate } from '../../../shared/time/salon-time';
+import { formatDate, formatRange } from '../../../shared/format/date-time';
+import { formatFor } from '../../../shared/format/locale';
+import { localDayBounds } from '../bookings/day-view.service';
 
 /** Salon wall-clock time the next day's lists go out (common practice: after the last client leaves). */
-export const STAFF_LISTS_AT = { hour: 18, minute: 0 };
-
-const time = (d: Date, zone: string) => DateTime.fromJSDate(d, { zone }).toFormat('h:mm a');
+export const STAFF_LISTS_AT = '18:00';
 
 /**
  * Each evening, in each salon's own zone: every stylist gets tomorrow's list, the desk gets tomorrow's
@@ -19,13 +20,12 @@ const time = (d: Date, zone: string) => DateTime.fromJSDate(d, { zone }).toForma
 export async function planStaffMessages(db: Db, now: Date): Promise<PlannedMessage[]> {
   const planned: PlannedMessage[] = [];
   for (const salon of await salonsForStaffMessages(db)) {
-    const local = DateTime.fromJSDate(now, { zone: salon.timeZone });
-    if (local.hour * 60 + local.minute < STAFF_LISTS_AT.hour * 60 + STAFF_LISTS_AT.minute) continue;
-    const day = local.plus({ days: 1 }).startOf('day');
-    const date = day.toISODate()!;
-    const sittings = await sittingsBetween(db, salon.id, day.toJSDate(), day.plus({ days: 1 }).toJSDate());
+    if (localClockOf(now, salon.timeZone) < STAFF_LISTS_AT) continue;
+    const date = shiftLocalDate(localDateOf(now, salon.timeZone), 1);
+    const { from, to } = localDayBounds(date, salon.timeZone);
+    const sittings = await sittingsBetween(db, salon.id, from, to);
     const rows: Insertable<MessagesTable>[] = [];
-    const dayName = day.toFormat('cccc d LLLL');
+    const dayName = formatDate(date, formatFor(salon.timeZone), { year: false });
     const byStylist = new Map<string, DaySitting[]>();
     for (const s of sittings) byStylist.set(s.staffId, [...(byStylist.get(s.staffId) ?? []), s]);
     for (const [staffId, list] of byStylist) {
@@ -55,5 +55,5 @@ export async function planStaffMessages(db: Db, now: Date): Promise<PlannedMessa
 
 function line(s: DaySitting, zone: string): string {
   const part = s.sittingCount > 1 ? ` (sitting ${s.seq} of ${s.sittingCount})` : '';
-  return `${time(s.start, zone)}–${time(s.end, zone)}  ${s.clientName}: ${s.serviceName}${part}`;
+  return `${formatRange(s.start, s.end, formatFor(zone))}  ${s.clientName}: ${s.serviceName}${part}`;
 }

@@ -1,7 +1,8 @@
-import { DateTime } from 'luxon';
 import { skinTestWords } from '../../../shared/rules/skin-test-words';
 import type { MessageAttachment } from '../../db/schema';
 import { bookingIcs } from '../online-booking/booking-ics';
+import { formatDateTime } from '../../../shared/format/date-time';
+import { formatFor } from '../../../shared/format/locale';
 
 /** What every booking message may mention, loaded once per re-plan. */
 export interface BookingContext {
@@ -37,7 +38,8 @@ export function preparation(category: string): string {
 }
 
 export const firstName = (name: string) => name.trim().split(/\s+/)[0] || 'there';
-export const when = (d: Date, zone: string) => DateTime.fromJSDate(d, { zone }).toFormat("cccc d LLLL yyyy 'at' h:mm a ZZZZ");
+/** "Tuesday 8 June 2027 at 3:00 PM MDT": a sitting in every client message. */
+export const when = (d: Date, zone: string) => formatDateTime(d, formatFor(zone), { zoneName: true });
 
 function sittingLines(c: BookingContext): string {
   const many = c.sittings.length > 1;

@@ -3,7 +3,6 @@ import type { Database } from '../../db/schema';
 import type { SessionUser } from '../../../shared/schemas/auth.schemas';
 import { DateTime } from 'luxon';
 import { AppError, notFound } from '../../lib/app-error';
-import { formatMoney } from '../../lib/money';
 import { findSalon } from '../salon/salon.repository';
 import { findClientIdForUser } from '../clients/clients.repository';
 import { findService } from '../services/services.repository';
@@ -16,6 +15,7 @@ import { findHold } from './holds.repository';
 import { bookingIcs } from './booking-ics';
 import { freeTimes } from './availability.service';
 import { searchedSalon } from './free-times.service';
+import { formatMoney } from '../../../shared/money/money';
 
 /** One of the signed-in client's own bookings; anyone else's is answered as not found. */
 export async function ownBooking(db: Kysely<Database>, user: SessionUser, id: string) {

@@ -1,5 +1,4 @@
 import { randomBytes } from 'node:crypto';
-import { DateTime } from 'luxon';
 import type { Kysely } from 'kysely';
 import type { Database } from '../../db/schema';
 import type { SessionUser } from '../../../shared/schemas/auth.schemas';
@@ -12,6 +11,8 @@ import { findHairHistory } from '../hair-history/hair-history.repository';
 import { holdCautions } from './hold-cautions';
 import { findHold, hasAcceptedCautions, openHoldIdsOf, releaseHoldRow, setHoldSecret, type HoldRecord } from './holds.repository';
 import { holdLapsed, holdView } from './hold-view';
+import { formatDateTime } from '../../../shared/format/date-time';
+import { formatFor } from '../../../shared/format/locale';
 
 /*
  * A client keeps one unpaid hold at a time. Starting again offers the one they have (resume) or lets them free it
@@ -20,7 +21,7 @@ import { holdLapsed, holdView } from './hold-view';
 
 /** The refusal of a second hold, naming the one the client already has (when known) so they can go back to it. */
 export function holdOpenError(hold?: Pick<HoldRecord, 'serviceName' | 'start' | 'timeZone'>): AppError {
-  const which = hold ? `: ${hold.serviceName} on ${DateTime.fromJSDate(hold.start, { zone: hold.timeZone }).toFormat("cccc d LLLL 'at' h:mm a")}` : '';
+  const which = hold ? `: ${hold.serviceName} on ${formatDateTime(hold.start, formatFor(hold.timeZone), { year: false })}` : '';
   return new AppError('HOLD_OPEN', 409, `You already have a time held${which}. One time can be held at a time: finish booking it, or release it to pick another.`);
 }
 

@@ -1,5 +1,4 @@
 import type { Kysely } from 'kysely';
-import { DateTime } from 'luxon';
 import type { z } from 'zod';
 import type { Database } from '../../db/schema';
 import type { SessionUser } from '../../../shared/schemas/auth.schemas';
@@ -17,6 +16,8 @@ import { confirmHoldRow, hasAcceptedCautions, recordPayment } from './holds.repo
 import { ownHold } from './holds.service';
 import { sendConfirmation } from './confirmation';
 import { assertHoldSkinTest } from './hold-skin-test';
+import { formatTime } from '../../../shared/format/date-time';
+import { formatFor } from '../../../shared/format/locale';
 
 type Deps = { payments: Payments; mailer: Mailer; sms: SmsSender };
 
@@ -41,7 +42,7 @@ export async function payHold(db: Kysely<Database>, deps: Deps, user: SessionUse
     const charge = await deps.payments.charge({ amountCents: hold.depositCents, currency: salon.currency, card: body.card, idempotencyKey: `deposit:${id}:${body.idempotencyKey}`, metadata: { booking: id } });
     if (!charge.ok) {
       await recordPayment(db, { ...record, providerRef: charge.paymentIntentId, status: 'declined', message: charge.message });
-      const until = hold.heldUntil ? DateTime.fromJSDate(hold.heldUntil, { zone: hold.timeZone }).toFormat('h:mm a ZZZZ') : 'the hold runs out';
+      const until = hold.heldUntil ? formatTime(hold.heldUntil, formatFor(hold.timeZone), { zoneName: true }) : 'the hold runs out';
       throw new AppError('PAYMENT_DECLINED', 402, `${charge.message} Your time stays held until ${until}; you can try another card.`);
     }
     paymentRef = charge.paymentIntentId;

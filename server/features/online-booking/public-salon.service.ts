@@ -1,10 +1,10 @@
-import { DateTime } from 'luxon';
 import { describeHoursRule } from '../../../shared/engine/describe-hours';
 import { planNeedsSkinTest } from '../../../shared/rules/skin-test-need';
 import { skinTestValidityWords, skinTestWords } from '../../../shared/rules/skin-test-words';
 import type { Db } from '../../db/database';
 import type { PublicSalon } from '../../../shared/schemas/online-booking.schemas';
-import { formatMoney } from '../../lib/money';
+import { formatMoney } from '../../../shared/money/money';
+import { todayIn } from '../../../shared/time/salon-time';
 import { listSalonHours } from '../salon/salon.repository';
 import { listServices, listStylistDetails } from '../services/services.repository';
 import { findSalonBySlug } from './public-salon.repository';
@@ -18,7 +18,7 @@ export async function publicSalon(db: Db, slug: string): Promise<PublicSalon> {
     listStylistDetails(db, salon.id),
   ]);
   const families = salon.skinTestFamilies;
-  const today = DateTime.now().setZone(salon.timeZone).toISODate() ?? undefined;
+  const today = todayIn(salon.timeZone, new Date());
   const deposits = services.filter((s) => s.depositCents > 0).map((s) => `${s.name}: ${formatMoney(s.depositCents, salon.currency)}`);
   return {
     slug: salon.slug,

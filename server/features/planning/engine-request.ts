@@ -3,6 +3,7 @@ import type { Option, ServiceRequest } from '../../../shared/engine/engine';
 import type { StepPlan } from '../../../shared/schemas/step-plan.schemas';
 import type { BookingOption } from '../../../shared/schemas/booking.schemas';
 import { MAX_HORIZON_DAYS } from '../../../shared/engine/engine';
+import { localDateTimeOf, shiftLocalDate } from '../../../shared/time/salon-time';
 
 /** The engine's view of a step plan: the same chain without labels. */
 export function toEngineSittings(plan: StepPlan): ServiceRequest['sittings'] {
@@ -20,7 +21,7 @@ const tailDays = (plan: StepPlan) => plan.sittings.reduce((t, s) => t + (s.daysA
 /** A horizon from `from` long enough for `searchDays` of first sittings plus the later sittings, within the engine's cap. */
 export function horizonFor(from: string, plan: StepPlan, searchDays: number): { from: string; to: string } {
   const days = Math.min(MAX_HORIZON_DAYS, searchDays + tailDays(plan));
-  return { from, to: DateTime.fromISO(from).plus({ days }).toISODate()! };
+  return { from, to: shiftLocalDate(from, days) };
 }
 
 /** `now` (or a later time) as the engine's local wall-clock text, rounded up onto the salon's grid. */
@@ -28,7 +29,7 @@ export function localEarliest(at: Date, zone: string, granularity: number): stri
   let t = DateTime.fromJSDate(at, { zone }).startOf('minute');
   const over = t.minute % granularity;
   if (over || t.second) t = t.plus({ minutes: over ? granularity - over : 0 });
-  return t.toFormat("yyyy-MM-dd'T'HH:mm");
+  return localDateTimeOf(t.toJSDate(), zone);
 }
 
 export interface Names {

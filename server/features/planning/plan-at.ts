@@ -1,7 +1,7 @@
-import { DateTime } from 'luxon';
 import { planOptions, type Option, type Scenario } from '../../../shared/engine/engine';
 import type { StepPlan } from '../../../shared/schemas/step-plan.schemas';
 import { toEngineSittings } from './engine-request';
+import { localDateTimeOf } from '../../../shared/time/salon-time';
 
 export interface ExactRequest {
   skill: string;
@@ -12,7 +12,7 @@ export interface ExactRequest {
 
 /** The engine's first plan for this stylist starting at or after `start` (any time later the same day). */
 function firstFrom(calendars: Scenario, req: ExactRequest): Option | undefined {
-  const earliest = DateTime.fromJSDate(req.start, { zone: calendars.timeZone }).toFormat("yyyy-MM-dd'T'HH:mm");
+  const earliest = localDateTimeOf(req.start, calendars.timeZone);
   const { options } = planOptions({
     ...calendars,
     request: { skill: req.skill, stylist: req.stylistId, earliest, sittings: toEngineSittings(req.plan), limit: 1, spread: 'none' },

@@ -4,6 +4,7 @@ import type { Db } from '../../db/database';
 import type { Scenario } from '../../../shared/engine/engine';
 import { listSalonHours } from '../salon/salon.repository';
 import { formatIso, parseLocalDate, zoneClock } from '../../../shared/engine/local-time';
+import { localDateTimeOf } from '../../../shared/time/salon-time';
 
 export interface Horizon {
   /** Local dates in the salon's zone; `to` is exclusive. */
@@ -15,7 +16,6 @@ export interface Horizon {
 export type SalonCalendars = Scenario;
 
 /** A wall-clock `YYYY-MM-DDTHH:mm` in the salon's zone, the engine's input format. */
-export const toLocal = (d: Date, zone: string) => DateTime.fromJSDate(d, { zone }).toFormat("yyyy-MM-dd'T'HH:mm");
 const hhmm = (t: string) => t.slice(0, 5);
 
 /**
@@ -65,7 +65,7 @@ export async function loadSalonCalendars(db: Db, salonId: string, horizon: Horiz
       .execute(),
   ]);
   const outOfService = (id: string) =>
-    closures.filter((c) => c.chair_id === id || c.basin_id === id).map((c) => ({ start: toLocal(c.start, zone), end: toLocal(c.end, zone) }));
+    closures.filter((c) => c.chair_id === id || c.basin_id === id).map((c) => ({ start: localDateTimeOf(c.start, zone), end: localDateTimeOf(c.end, zone) }));
   // The engine's own offset table for the zone turns minutes into wall-clock text; luxon per instant is slow.
   const clock = zoneClock(zone, parseLocalDate(horizon.from)!, parseLocalDate(horizon.to)!);
   const local = (utc: number) => formatIso(utc, clock.offsetAt(utc)).slice(0, 16);
@@ -86,7 +86,7 @@ export async function loadSalonCalendars(db: Db, salonId: string, horizon: Horiz
       skills: s.skills,
       maxClientsAtOnce: s.max_clients_at_once,
       hours: staffHours.filter((h) => h.staff_id === s.id).map((h) => ({ rrule: h.rrule, start: hhmm(h.start_time), end: hhmm(h.end_time) })),
-      timeOff: timeOff.filter((t) => t.staff_id === s.id).map((t) => ({ start: toLocal(t.start, zone), end: toLocal(t.end, zone) })),
+      timeOff: timeOff.filter((t) => t.staff_id === s.id).map((t) => ({ start: localDateTimeOf(t.start, zone), end: localDateTimeOf(t.end, zone) })),
     })),
     chairs: chairs.map((c) => ({ id: c.id, outOfService: outOfService(c.id) })),
     basins: basins.map((b) => ({ id: b.id, outOfService: outOfService(b.id) })),

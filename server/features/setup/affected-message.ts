@@ -1,11 +1,12 @@
-import { DateTime } from 'luxon';
 import type { FutureBooking } from './future-bookings.repository';
+import { formatDateTime } from '../../../shared/format/date-time';
+import { formatFor } from '../../../shared/format/locale';
 
-/** "2 future bookings: Thu 10 Dec 09:00 Ana Ruiz (Full lightening, Jess), …" for refusals. */
+/** "2 future bookings: Thu 10 Dec, 9:00 AM Ana Ruiz (Full lightening, Jess), …" for refusals. */
 export function affectedMessage(lead: string, bookings: FutureBooking[], zone: string): string {
   const list = bookings
     .slice(0, 10)
-    .map((b) => `${DateTime.fromJSDate(b.start, { zone }).toFormat('ccc d LLL HH:mm')} ${b.clientName} (${b.serviceName}, ${b.stylistName})`)
+    .map((b) => `${formatDateTime(b.start, formatFor(zone), { width: 'short', year: false })} ${b.clientName} (${b.serviceName}, ${b.stylistName})`)
     .join('; ');
   const more = bookings.length > 10 ? `; and ${bookings.length - 10} more` : '';
   return `${lead} ${bookings.length} future ${bookings.length === 1 ? 'booking' : 'bookings'}: ${list}${more}.`;

@@ -1,9 +1,9 @@
-import { DateTime } from 'luxon';
 import type { Db } from '../../db/database';
 import type { AffectedBooking } from '../../../shared/schemas/setup.schemas';
 import { findFreeStylists } from '../../../shared/engine/engine';
 import { loadSalonCalendars } from '../planning/salon-calendars.repository';
 import { futureSittingIds, type FutureBooking } from './future-bookings.repository';
+import { localDateOf, shiftLocalDate } from '../../../shared/time/salon-time';
 
 /**
  * Stylists other than the booked one who could take a booking's future sittings exactly as they stand,
@@ -12,8 +12,8 @@ import { futureSittingIds, type FutureBooking } from './future-bookings.reposito
 export async function freeStylistIds(db: Db, salonId: string, zone: string, booking: FutureBooking, now: Date): Promise<string[]> {
   const sittings = await futureSittingIds(db, booking.id, now);
   if (sittings.length === 0) return [];
-  const from = DateTime.fromJSDate(sittings[0].start, { zone }).toISODate()!;
-  const to = DateTime.fromJSDate(sittings[sittings.length - 1].end, { zone }).plus({ days: 1 }).toISODate()!;
+  const from = localDateOf(sittings[0].start, zone);
+  const to = shiftLocalDate(localDateOf(sittings[sittings.length - 1].end, zone), 1);
   const calendars = await loadSalonCalendars(db, salonId, { from, to });
   const mine = new Set(sittings.map((s) => s.id));
   const others = { ...calendars, bookings: calendars.bookings.filter((b) => !mine.has(b.id)) };

@@ -1,4 +1,3 @@
-import { DateTime } from 'luxon';
 import type { Db } from '../../db/database';
 import type { Salon } from '../../../shared/schemas/salon.schemas';
 import type { StepPlan } from '../../../shared/schemas/step-plan.schemas';
@@ -7,6 +6,9 @@ import { ALWAYS_TESTED, planNeedsSkinTest, testedFamilies } from '../../../share
 import { underAgeOnAny } from '../../../shared/rules/age-rule';
 import { AppError } from '../../lib/app-error';
 import { clientAgeRecord, skinTestClearances, skinTestClearancesOf, skinTestRecords, skinTestRecordsOf } from './skin-tests.repository';
+import { formatDate, formatDateTime } from '../../../shared/format/date-time';
+import { formatFor } from '../../../shared/format/locale';
+import { localDateOf } from '../../../shared/time/salon-time';
 
 type SalonRule = Pick<Salon, 'timeZone' | 'skinTestLeadHours' | 'skinTestValidityDays' | 'skinTestFamilies'>;
 
@@ -45,7 +47,7 @@ export interface SkinTestDoor {
  */
 export async function assertSkinTestAllows(db: Db, salon: SalonRule, door: SkinTestDoor, now: Date): Promise<'passed' | 'waiting' | 'not_needed'> {
   const verdict = await skinTestVerdictFor(db, salon, door.clientId, door.plan, door.serviceAsks, now);
-  const zoneDay = (d: Date) => DateTime.fromJSDate(d, { zone: salon.timeZone }).toFormat('ccc d LLL, h:mm a');
+  const zoneDay = (d: Date) => formatDateTime(d, formatFor(salon.timeZone), { width: 'short', year: false });
   const check = checkStarts(verdict, testedSittingStarts(door.plan, door.starts, salon, door.serviceAsks), zoneDay);
   if (check.status === 'refused') throw new AppError('SKIN_TEST', 409, check.message);
   if (check.status === 'waiting' && !door.atDesk) {
@@ -79,7 +81,7 @@ export async function bookingSkinTestStates(db: Db, salon: SalonRule, bookings: 
   const live = (b: BookingForSkinTest) => b.clientId && LIVE_FOR_TESTS.includes(b.status) && planNeedsSkinTest(b.plan, salon.skinTestFamilies, b.serviceAsks);
   const clientIds = [...new Set(bookings.filter(live).map((b) => b.clientId!))];
   const [records, clearances] = await Promise.all([skinTestRecordsOf(db, clientIds), skinTestClearancesOf(db, clientIds)]);
-  const zoneDay = (d: Date) => DateTime.fromJSDate(d, { zone: salon.timeZone }).toFormat('ccc d LLL');
+  const zoneDay = (d: Date) => formatDate(d, formatFor(salon.timeZone), { width: 'short', year: false });
   return bookings.map((b) => {
     if (!live(b)) return { status: 'not_needed', message: '' };
     const verdict = skinTestVerdict(true, records.get(b.clientId!) ?? [], clearances.get(b.clientId!) ?? [], salonPolicy(salon), now);
@@ -98,7 +100,7 @@ async function assertAgeAllows(db: Db, salon: SalonRule, door: SkinTestDoor): Pr
   const oxidative = door.starts.filter((_, i) => door.plan.sittings[i]?.steps.some((s) => (ALWAYS_TESTED as readonly string[]).includes(s.product)));
   if (oxidative.length === 0) return;
   const age = await clientAgeRecord(db, door.clientId);
-  const dates = oxidative.map((d) => DateTime.fromJSDate(d, { zone: salon.timeZone }).toISODate()!);
+  const dates = oxidative.map((d) => localDateOf(d, salon.timeZone));
   if (!underAgeOnAny(age.dateOfBirth, dates)) return;
   if (!door.atDesk) {
     throw new AppError('AGE_CONSENT', 409, 'Oxidative colour is not booked online for anyone under 16. Please call the salon or book a consultation.');

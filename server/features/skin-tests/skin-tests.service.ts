@@ -1,4 +1,3 @@
-import { DateTime } from 'luxon';
 import type { SessionUser } from '../../../shared/schemas/auth.schemas';
 import type { z } from 'zod';
 import { READ_BEFORE_APPLIED, type RecordSkinTestReading, type RecordSkinTestSchema, type SkinTest, type SkinTestClearance } from '../../../shared/schemas/skin-test.schemas';
@@ -10,6 +9,8 @@ import { findSalon } from '../salon/salon.repository';
 import { findSkinTest, insertSkinTest, listClearances, listSkinTests, setSkinTestReading, type SkinTestRow } from './skin-tests.repository';
 import { toClearanceView } from './skin-test-clearances.service';
 import { replanAfterSkinTestChange } from '../messages/plan-messages.service';
+import { formatDateTime } from '../../../shared/format/date-time';
+import { formatFor } from '../../../shared/format/locale';
 
 // The desk's clock may run a little ahead of the server's, and the form sends whole minutes.
 const CLOCK_SLACK_MS = 2 * 60_000;
@@ -74,7 +75,7 @@ export async function recordSkinTestReading(
     if (!row) throw notFound('That skin test');
     const before = toView(row);
     const zone = (await findSalon(trx, user.salonId)).timeZone;
-    const at = (d: Date) => DateTime.fromJSDate(d, { zone }).toFormat('ccc d LLL yyyy, h:mm a');
+    const at = (d: Date) => formatDateTime(d, formatFor(zone), { width: 'short' });
     if (row.result !== 'pending') {
       throw new AppError('CONFLICT', 409, `This skin test was already read (${row.result}, ${at(row.read_at!)}). A reading is recorded once; apply and record a new test to test again.`);
     }

@@ -1,4 +1,3 @@
-import { DateTime } from 'luxon';
 import type { Db } from '../../db/database';
 import type { Salon } from '../../../shared/schemas/salon.schemas';
 import type { DeskUtilisation, OwnerUtilisation, UtilisationQuery } from '../../../shared/schemas/utilisation.schemas';
@@ -7,6 +6,7 @@ import { cancelledAt, listPeriodSittings, salonStaffNames } from './utilisation-
 import { bookingFigures } from './utilisation-figures';
 import { measurePeriod } from './utilisation-occupancy';
 import { chunksOf, resolvePeriod, type Period } from './utilisation-period';
+import { instantAt } from '../../../shared/time/salon-time';
 
 const ratio = (num: number, den: number): number | null => (den === 0 ? null : num / den);
 
@@ -17,7 +17,7 @@ export function periodFor(salon: Salon, query: UtilisationQuery, now: Date): Per
 
 /** Every figure of the period, for the owner. One query per table; the engine measures the occupancy. */
 export async function ownerUtilisation(db: Db, salon: Salon, period: Period): Promise<OwnerUtilisation> {
-  const instant = (date: string) => DateTime.fromISO(date, { zone: salon.timeZone }).toMillis();
+  const instant = (date: string) => instantAt(date, salon.timeZone)!.getTime();
   const weekCuts = chunksOf(period).flatMap((c, i) => (i === 0 ? c.weekCuts : c.weekCuts.slice(1)));
   const from = instant(period.from);
   const to = instant(period.to);

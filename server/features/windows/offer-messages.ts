@@ -1,9 +1,10 @@
-import { DateTime } from 'luxon';
 import type { Kysely } from 'kysely';
 import type { Database } from '../../db/schema';
 import type { Db } from '../../db/database';
 import type { Senders } from '../messages/send-message.job';
 import { planClientMessage, sendClientMessage, type ClientMessage } from '../messages/client-message.service';
+import { formatDateTime } from '../../../shared/format/date-time';
+import { formatFor } from '../../../shared/format/locale';
 
 export interface OfferMessage {
   offerId: string;
@@ -16,7 +17,7 @@ export interface OfferMessage {
   timeZone: string;
 }
 
-const when = (m: OfferMessage) => DateTime.fromJSDate(m.start, { zone: m.timeZone }).toFormat("cccc d LLLL 'at' h:mm a ZZZZ");
+const when = (m: OfferMessage) => formatDateTime(m.start, formatFor(m.timeZone), { year: false, zoneName: true });
 
 /** Offer, taken and gone all go through the send log, keyed on the offer, so each is sent once. */
 function offerMessage(m: OfferMessage, kind: string, subject: string, text: string): ClientMessage {

@@ -1,10 +1,10 @@
-import { DateTime } from 'luxon';
 import type { Db } from '../../db/database';
 import { findService } from '../services/services.repository';
 import { loadSalonCalendars } from '../planning/salon-calendars.repository';
 import { planExactlyAt } from '../planning/plan-at';
 import { listOpenOffers, setOfferStatus } from './window-offers.repository';
 import { planOfferGone } from './offer-messages';
+import { localDateOf, shiftLocalDate } from '../../../shared/time/salon-time';
 
 const DAY = 86_400_000;
 
@@ -25,8 +25,8 @@ export async function withdrawStaleOffers(
   const open = await listOpenOffers(db, stylistId, new Date(span.from.getTime() - DAY), span.to);
   const live = open.filter((o) => o.startsAt > now);
   if (live.length === 0) return;
-  const day = (d: Date) => DateTime.fromJSDate(d, { zone: salon.timeZone }).toISODate()!;
-  const calendars = await loadSalonCalendars(db, salon.id, { from: day(live[0].startsAt), to: DateTime.fromISO(day(live[live.length - 1].startsAt)).plus({ days: 1 }).toISODate()! });
+  const day = (d: Date) => localDateOf(d, salon.timeZone);
+  const calendars = await loadSalonCalendars(db, salon.id, { from: day(live[0].startsAt), to: shiftLocalDate(day(live[live.length - 1].startsAt), 1) });
   for (const offer of live) {
     const service = await findService(db, salon.id, offer.serviceId);
     const fits = service && !('reason' in planExactlyAt(calendars, { skill: service.skill, stylistId, plan: service.stepPlan, start: offer.startsAt }));

@@ -1,6 +1,7 @@
 import { DateTime } from 'luxon';
 import type { ServiceSummary } from '../../../shared/schemas/service.schemas';
 import type { StandbyEntry } from '../../../shared/schemas/standby.schemas';
+import { localClockOf } from '../../../shared/time/salon-time';
 
 /** Longest service offered as a window fit: a short one-sitting service (common practice: under about 90 minutes). */
 export const MAX_FIT_MINUTES = 90;
@@ -16,9 +17,8 @@ export function windowFitServices(services: ServiceSummary[]) {
 /** Standby entries that want one of the fits, with this stylist or any, and can come during the window. */
 export function standbyForWindow(entries: StandbyEntry[], window: { stylistId: string; start: string; end: string; fitIds: string[] }, zone: string) {
   const start = DateTime.fromISO(window.start, { zone });
-  const end = DateTime.fromISO(window.end, { zone });
-  const from = start.toFormat('HH:mm');
-  const to = end.toFormat('HH:mm');
+  const from = localClockOf(window.start, zone);
+  const to = localClockOf(window.end, zone);
   return entries.filter(
     (e) =>
       (!e.stylist || e.stylist.id === window.stylistId) &&

@@ -1,4 +1,3 @@
-import { DateTime } from 'luxon';
 import type { Db } from '../../db/database';
 import type { Salon } from '../../../shared/schemas/salon.schemas';
 import type { HandsFreeWindowView, SentOffer } from '../../../shared/schemas/window.schemas';
@@ -8,15 +7,16 @@ import { listServices } from '../services/services.repository';
 import { listStandby } from '../standby/standby.repository';
 import { standbyForWindow, windowFitServices } from './window-fits';
 import { listDayOffers } from './window-offers.repository';
+import { instantIso, shiftLocalDate } from '../../../shared/time/salon-time';
+import { localDayBounds } from '../bookings/day-view.service';
 
 /**
  * The day's hands-free windows (one stylist or all) with what fits, who on standby wants it and the offers sent
  * for it; offers whose window has closed since are listed apart, with what became of them.
  */
 export async function listWindowViews(db: Db, salon: Salon, date: string, stylistId: string | undefined, now: Date): Promise<{ windows: HandsFreeWindowView[]; closedOffers: SentOffer[] }> {
-  const next = DateTime.fromISO(date).plus({ days: 1 }).toISODate()!;
-  const dayStart = DateTime.fromISO(date, { zone: salon.timeZone }).toJSDate();
-  const dayEnd = DateTime.fromISO(next, { zone: salon.timeZone }).toJSDate();
+  const next = shiftLocalDate(date, 1);
+  const { from: dayStart, to: dayEnd } = localDayBounds(date, salon.timeZone);
   const [calendars, services, standby, offerRows] = await Promise.all([
     loadSalonCalendars(db, salon.id, { from: date, to: next }),
     listServices(db, salon.id),
@@ -25,7 +25,7 @@ export async function listWindowViews(db: Db, salon: Salon, date: string, stylis
   ]);
   const offers = offerRows.filter((o) => !stylistId || o.stylistId === stylistId).map((o) => ({
     stylistId: o.stylistId,
-    start: DateTime.fromJSDate(o.startsAt, { zone: salon.timeZone }).toISO({ suppressMilliseconds: true })!,
+    start: instantIso(o.startsAt, salon.timeZone),
     at: o.startsAt.getTime(),
     clientName: o.clientName,
     serviceName: o.serviceName,

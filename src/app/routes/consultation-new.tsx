@@ -77,6 +77,7 @@ export function Component() {
               key={proposed.at}
               services={colourServices}
               strandTest={proposed.quote.strandTest}
+              currency={salon.currency}
               submitLabel="Save consultation and quote"
               initial={{ serviceId: proposed.quote.serviceId ?? colourServices[0]?.id ?? '', stepPlan: proposed.quote.stepPlan, priceCents: proposed.quote.priceCents, depositCents: proposed.quote.depositCents, notes: '', overrideReason: '' }}
               onSave={(quote) =>

@@ -15,9 +15,10 @@ import { SendQuote } from '../../features/consultations/components/send-quote';
 import { QuoteWarnings } from '../../features/consultations/components/quote-advice';
 import { QuoteEditor } from '../../features/consultations/components/quote-editor';
 import { salonQueries } from '../../features/salon/api/salon-queries';
-import { formatMoney } from '../../lib/booking-labels';
 import { queryClient } from '../../lib/query-client';
-import { formatDay } from '../../lib/time';
+import { formatDate } from '../../../shared/format/date-time';
+import { formatFor } from '../../../shared/format/locale';
+import { formatMoney } from '../../../shared/money/money';
 
 export async function loader({ params }: LoaderFunctionArgs) {
   if (!IdSchema.safeParse(params.id).success) throw new Response(null, { status: 404 });
@@ -47,7 +48,7 @@ export function Component() {
       </button>
       <PageHeader
         title={`Quote for ${view.clientName}`}
-        subtitle={`Consultation of ${formatDay(view.createdAt, salon.timeZone)}${view.createdByName ? ` by ${view.createdByName}` : ''} · ${quoteStatusLabels[q.status]} · ${formatMoney(q.priceCents, salon.currency)}, deposit ${formatMoney(q.depositCents, salon.currency)}`}
+        subtitle={`Consultation of ${formatDate(view.createdAt, formatFor(salon.timeZone), { width: 'short' })}${view.createdByName ? ` by ${view.createdByName}` : ''} · ${quoteStatusLabels[q.status]} · ${formatMoney(q.priceCents, salon.currency)}, deposit ${formatMoney(q.depositCents, salon.currency)}`}
         action={
           desk && (
             <Link to={consultationPagePaths.bookQuote(view.id)} className={buttonClasses('primary')}>
@@ -84,6 +85,7 @@ export function Component() {
             key={`${q.id}-${edit.submittedAt}`}
             services={services.services}
             strandTest={view.strandTest}
+            currency={salon.currency}
             submitLabel="Save quote"
             initial={{ serviceId: q.serviceId, stepPlan: q.stepPlan, priceCents: q.priceCents, depositCents: q.depositCents, notes: q.notes, overrideReason: q.overrideReason }}
             onSave={(quote) => edit.mutateAsync(quote)}

@@ -5,9 +5,9 @@ import { BookServicePage } from '../../features/bookings/components/book-service
 import { catalogueQueries } from '../../features/catalogue/api/catalogue-queries';
 import { consultationQueries } from '../../features/consultations/api/consultation-queries';
 import { salonQueries } from '../../features/salon/api/salon-queries';
-import { formatMoney } from '../../lib/booking-labels';
 import { queryClient } from '../../lib/query-client';
 import { todayIn } from '../../lib/time';
+import { formatMoney } from '../../../shared/money/money';
 
 /** `?consultation=<id>` books that consultation's saved quote. */
 const consultationParam = (search: URLSearchParams) => {

@@ -13,7 +13,7 @@ import { bookingQueries } from '../../features/bookings/api/booking-queries';
 import { catalogueQueries } from '../../features/catalogue/api/catalogue-queries';
 import { MixLogSection } from '../../features/mix-log/components/mix-log-section';
 import { salonQueries } from '../../features/salon/api/salon-queries';
-import { localDateOf } from '../../lib/time';
+import { localDateOf } from '../../../shared/time/salon-time';
 import { queryClient } from '../../lib/query-client';
 
 export async function loader({ params }: LoaderFunctionArgs) {

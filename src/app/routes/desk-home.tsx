@@ -6,7 +6,8 @@ import { ClientSearch } from '../../features/clients/components/client-search';
 import { dayQueries } from '../../features/day-book/api/day-queries';
 import { DayBookView } from '../../features/day-book/components/day-book-view';
 import { windowQueries } from '../../features/windows/api/window-queries';
-import { formatLocalDate } from '../../lib/time';
+import { formatDate } from '../../../shared/format/date-time';
+import { zonelessFormat } from '../../../shared/format/locale';
 import { queryClient } from '../../lib/query-client';
 import { dateParam, dateParamOf } from '../date-param';
 
@@ -24,7 +25,7 @@ export function Component() {
   return (
     <DayBookView
       day={day}
-      title={(isToday) => (isToday ? "Today's book" : `Book for ${formatLocalDate(day.date)}`)}
+      title={(isToday) => (isToday ? "Today's book" : `Book for ${formatDate(day.date, zonelessFormat)}`)}
       hrefFor={(date) => (columns === 'chair' ? `${paths.desk(date)}&view=chairs` : paths.desk(date))}
       windows={windows.data?.windows}
       bookingHref={paths.deskBooking}

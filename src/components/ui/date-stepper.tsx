@@ -1,5 +1,7 @@
 import { Link } from 'react-router-dom';
-import { formatLocalDate, shiftLocalDate } from '../../lib/time';
+import { formatDate } from '../../../shared/format/date-time';
+import { zonelessFormat } from '../../../shared/format/locale';
+import { shiftLocalDate } from '../../../shared/time/salon-time';
 import { buttonClasses } from './button';
 
 type Props = {
@@ -28,7 +30,7 @@ export function DateStepper({ date, today, hrefFor, onPick }: Props) {
         />
       </label>
       <span id="date-stepper-long" className="sr-only">
-        {formatLocalDate(date)}
+        {formatDate(date, zonelessFormat)}
       </span>
       <Link to={hrefFor(shiftLocalDate(date, 1))} className={buttonClasses('secondary')}>
         Next day <span aria-hidden="true">→</span>

@@ -1,5 +1,6 @@
 import { freeTimeKey, freeTimeLabel, type FreeTime } from '../../lib/free-times';
-import { formatTime } from '../../lib/time';
+import { formatTime } from '../../../shared/format/date-time';
+import { formatFor } from '../../../shared/format/locale';
 
 type Props = { time: FreeTime; timeZone: string; selectedKey: string | null; onSelect: (time: FreeTime) => void; showStylist: boolean };
 
@@ -13,7 +14,7 @@ export function FreeTimeButton({ time, timeZone, selectedKey, onSelect, showStyl
       onClick={() => onSelect(time)}
       className="flex min-h-11 w-full flex-col items-center justify-center rounded-lg border border-ink/30 bg-white px-2 py-1 hover:border-ink/60 aria-pressed:border-2 aria-pressed:border-oxide aria-pressed:bg-linen aria-pressed:font-bold"
     >
-      <span className="tabular">{formatTime(time.start, timeZone)}</span>
+      <span className="tabular">{formatTime(time.start, formatFor(timeZone))}</span>
       {showStylist && <span className="text-xs">{time.stylistName}</span>}
     </button>
   );

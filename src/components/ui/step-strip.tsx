@@ -1,6 +1,8 @@
 import type { StepKind } from '../../../shared/schemas/common.schemas';
 import { stepKindLabels } from '../../lib/booking-labels';
-import { formatTimeRange, minutesBetween } from '../../lib/time';
+import { minutesBetween } from '../../lib/time';
+import { formatRange } from '../../../shared/format/date-time';
+import { formatFor } from '../../../shared/format/locale';
 import { StepKindIcon } from './step-kind-icon';
 import { stepKindPattern } from './step-kind-swatch';
 
@@ -29,7 +31,7 @@ export function StepStrip({ steps, timeZone }: Props) {
       <ol className="sr-only">
         {steps.map((step) => (
           <li key={step.start}>
-            {stepKindLabels[step.kind]}: {step.label}, {formatTimeRange(step.start, step.end, timeZone)}
+            {stepKindLabels[step.kind]}: {step.label}, {formatRange(step.start, step.end, formatFor(timeZone))}
           </li>
         ))}
       </ol>

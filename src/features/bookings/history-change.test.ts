@@ -37,7 +37,7 @@ describe('describeBookingChange (a booking’s history in the app’s words)', (
     const before = { status: 'booked', stylist: 'Ana Moreno', sittings: [sitting1, sitting2] };
     const after = { ...before, sittings: [sitting1, { ...sitting2, chair: 'Chair 3', start: '2026-12-04T17:00:00.000Z', end: '2026-12-04T21:10:00.000Z' }] };
     expect(describeBookingChange(before, after, words)).toEqual([
-      { label: 'Sitting 2 of 2', before: 'Thu, Dec 3, 2026, 9:00 AM – 1:10 PM · Chair 1', after: 'Fri, Dec 4, 2026, 10:00 AM – 2:10 PM · Chair 3' },
+      { label: 'Sitting 2 of 2', before: 'Thu 3 Dec 2026, 9:00 AM – 1:10 PM · Chair 1', after: 'Fri 4 Dec 2026, 10:00 AM – 2:10 PM · Chair 3' },
     ]);
   });
 
@@ -45,7 +45,7 @@ describe('describeBookingChange (a booking’s history in the app’s words)', (
     expect(describeBookingChange(null, { status: 'held', stylist: 'Ana Moreno', sittings: [sitting1] }, words)).toEqual([
       { label: 'Status', before: null, after: 'Held' },
       { label: 'Stylist', before: null, after: 'Ana Moreno' },
-      { label: 'Sitting', before: null, after: 'Tue, Dec 1, 2026, 9:00 AM – 2:10 PM · Chair 1' },
+      { label: 'Sitting', before: null, after: 'Tue 1 Dec 2026, 9:00 AM – 2:10 PM · Chair 1' },
     ]);
   });
 

@@ -1,5 +1,7 @@
-import { bookingStatusLabels, formatMoney, sittingLabel } from '../../lib/booking-labels';
-import { formatDay, formatTime, formatTimeRange } from '../../lib/time';
+import { bookingStatusLabels, sittingLabel } from '../../lib/booking-labels';
+import { formatDateTime, formatRange } from '../../../shared/format/date-time';
+import { formatFor } from '../../../shared/format/locale';
+import { formatMoney } from '../../../shared/money/money';
 
 /** One changed value of an audit entry, as dotted path and its before/after values. */
 export type Change = { field: string; before: unknown; after: unknown };
@@ -73,11 +75,12 @@ const ID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
 const asRecord = (value: unknown): BookingRecord => (value !== null && typeof value === 'object' && !Array.isArray(value) ? (value as BookingRecord) : {});
 
-/** A sitting as the booking page writes it: "Tue, Dec 1, 2026, 9:00 AM – 2:10 PM · Chair 1". */
+/** A sitting as the booking page writes it: "Tue 1 Dec 2026, 9:00 AM – 2:10 PM · Chair 1". */
 function sittingText(s: SittingRecord | undefined, zone: string): string | null {
   if (!s?.start) return null;
-  const times = s.end ? formatTimeRange(s.start, s.end, zone) : formatTime(s.start, zone);
-  return `${formatDay(s.start, zone)}, ${times}${s.chair ? ` · ${s.chair}` : ''}`;
+  const salon = formatFor(zone);
+  const when = s.end ? formatRange(s.start, s.end, salon, { date: { width: 'short' } }) : formatDateTime(s.start, salon, { width: 'short' });
+  return `${when}${s.chair ? ` · ${s.chair}` : ''}`;
 }
 
 /**
@@ -113,7 +116,7 @@ export function describeBookingChange(before: unknown, after: unknown, words: Hi
   push('Deposit paid', paid(was.deposit), paid(now.deposit));
 
   const known = new Set(['status', 'stylist', 'sittings', 'deposit']);
-  const instant = (iso: string) => `${formatDay(iso, words.timeZone)}, ${formatTime(iso, words.timeZone)}`;
+  const instant = (iso: string) => formatDateTime(iso, formatFor(words.timeZone), { width: 'short' });
   const rest = describeChange(
     Object.fromEntries(Object.entries(was).filter(([k]) => !known.has(k))),
     Object.fromEntries(Object.entries(now).filter(([k]) => !known.has(k))),

@@ -23,7 +23,7 @@ describe('confirmationWords', () => {
     });
     expect(words).toEqual([
       'We sent a confirmation by e-mail.',
-      'The confirmation text goes at 8:00 AM on Wed, Mar 3, 2027 (salon time): the salon sends no texts between 9:00 PM and 8:00 AM.',
+      'The confirmation text goes at 8:00 AM on Wed 3 Mar 2027 (salon time): the salon sends no texts between 9:00 PM and 8:00 AM.',
     ]);
   });
 

@@ -1,5 +1,6 @@
 import type { ConfirmationSends } from '../../../shared/schemas/online-booking.schemas';
-import { formatClock, formatDay, formatTime } from '../../lib/time';
+import { formatClock, formatDate, formatTime } from '../../../shared/format/date-time';
+import { formatFor } from '../../../shared/format/locale';
 
 type Send = ConfirmationSends['sends'][number];
 const channelName = { email: 'e-mail', sms: 'text' } as const;
@@ -22,7 +23,8 @@ export function confirmationWords({ sends, timeZone, quietHours }: ConfirmationS
 }
 
 function waitingWords(send: Send, timeZone: string, quietHours: ConfirmationSends['quietHours']): string {
-  const when = `${formatTime(send.sendAt, timeZone)} on ${formatDay(send.sendAt, timeZone)} (salon time)`;
-  const why = send.channel === 'sms' && quietHours ? `: the salon sends no texts between ${formatClock(quietHours.from)} and ${formatClock(quietHours.to)}` : '';
+  const salon = formatFor(timeZone);
+  const when = `${formatTime(send.sendAt, salon)} on ${formatDate(send.sendAt, salon, { width: 'short' })} (salon time)`;
+  const why = send.channel === 'sms' && quietHours ? `: the salon sends no texts between ${formatClock(quietHours.from, salon)} and ${formatClock(quietHours.to, salon)}` : '';
   return `The confirmation ${channelName[send.channel]} goes at ${when}${why}.`;
 }

@@ -2,8 +2,10 @@ import type { ReactNode } from 'react';
 import type { BookingView } from '../../../../shared/schemas/booking-view.schemas';
 import { BookingStatusBadge } from '../../../components/ui/booking-status-badge';
 import { SkinTestFlag } from '../../../components/ui/skin-test-flag';
-import { formatMoney, sittingLabel } from '../../../lib/booking-labels';
-import { formatDay, formatTimeRange } from '../../../lib/time';
+import { sittingLabel } from '../../../lib/booking-labels';
+import { formatDate, formatRange } from '../../../../shared/format/date-time';
+import { formatFor } from '../../../../shared/format/locale';
+import { formatMoney } from '../../../../shared/money/money';
 
 /** `children`: what may be done with the booking (e.g. the client's move and cancel), under its details. */
 type Props = { booking: BookingView; timeZone: string; currency: string; headingLevel?: 'h3' | 'h4'; children?: ReactNode };
@@ -26,9 +28,9 @@ export function BookingCard({ booking, timeZone, currency, headingLevel: Heading
         {booking.sittings.map((sitting) => (
           <li key={sitting.seq} className="rounded-lg bg-linen px-3 py-2">
             {sitting.of > 1 && <span className="mr-2 font-bold">{sittingLabel(sitting.seq, sitting.of)}:</span>}
-            <span>{formatDay(sitting.start, timeZone)}</span>
+            <span>{formatDate(sitting.start, formatFor(timeZone), { width: 'short' })}</span>
             <span className="mx-1" aria-hidden="true">·</span>
-            <span className="tabular">{formatTimeRange(sitting.start, sitting.end, timeZone)}</span>
+            <span className="tabular">{formatRange(sitting.start, sitting.end, formatFor(timeZone))}</span>
             <span className="mx-1" aria-hidden="true">·</span>
             <span>{sitting.chairName}</span>
           </li>

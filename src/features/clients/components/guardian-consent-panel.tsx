@@ -9,7 +9,9 @@ import { FormAlert } from '../../../components/ui/form-alert';
 import { Notice } from '../../../components/ui/notice';
 import { TextField } from '../../../components/ui/text-field';
 import { fieldError, showServerErrors } from '../../../lib/form-errors';
-import { formatDay, todayIn } from '../../../lib/time';
+import { todayIn } from '../../../lib/time';
+import { formatDate } from '../../../../shared/format/date-time';
+import { formatFor } from '../../../../shared/format/locale';
 import { ageQueries, useRecordGuardianConsent } from '../api/age-queries';
 import { DateOfBirthForm } from './date-of-birth-form';
 
@@ -37,7 +39,7 @@ export function GuardianConsentPanel({ clientId, zone }: Props) {
         <ul aria-label="Guardian consents" className="flex flex-col gap-1 text-sm">
           {age.data.guardianConsents.map((c) => (
             <li key={c.id}>
-              <span className="font-bold">{c.guardianName}</span> ({c.relationship}) consented · recorded {formatDay(c.recordedAt, zone)} by {c.recordedByName}
+              <span className="font-bold">{c.guardianName}</span> ({c.relationship}) consented · recorded {formatDate(c.recordedAt, formatFor(zone), { width: 'short' })} by {c.recordedByName}
               {c.note && ` · ${c.note}`}
             </li>
           ))}

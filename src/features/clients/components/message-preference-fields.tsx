@@ -1,5 +1,7 @@
 import type { UseFormRegister } from 'react-hook-form';
 import type { MessageChannelChoice } from '../../../../shared/schemas/contact.schemas';
+import { formatDate } from '../../../../shared/format/date-time';
+import { deviceFormat } from '../../../lib/time';
 
 type PreferenceValues = { messageChannel: MessageChannelChoice; marketingOptIn: boolean };
 type Props<T extends PreferenceValues> = {
@@ -34,7 +36,7 @@ export function MessagePreferenceFields<T extends PreferenceValues>({ register: 
         </div>
         {smsStoppedAt && (
           <p className="text-sm">
-            Texts are off: {you ? 'you' : 'the client'} replied STOP on {new Date(smsStoppedAt).toLocaleDateString()}. A reply of START
+            Texts are off: {you ? 'you' : 'the client'} replied STOP on {formatDate(smsStoppedAt, deviceFormat(), { width: 'short' })}. A reply of START
             turns them back on{you ? '' : ', as does saving a new mobile number'}.
           </p>
         )}

@@ -3,10 +3,11 @@ import { Link } from 'react-router-dom';
 import { buttonClasses } from '../../../components/ui/button';
 import { FormAlert } from '../../../components/ui/form-alert';
 import { LoadingState } from '../../../components/ui/loading-state';
-import { formatMoney } from '../../../lib/booking-labels';
-import { formatDay } from '../../../lib/time';
+import { formatDate } from '../../../../shared/format/date-time';
+import { formatFor } from '../../../../shared/format/locale';
 import { consultationPagePaths, consultationQueries } from '../api/consultation-queries';
 import { quoteStatusLabels } from './consultation-labels';
+import { formatMoney } from '../../../../shared/money/money';
 
 type Props = { clientId: string; timeZone: string; currency: string };
 
@@ -22,7 +23,7 @@ export function ClientConsultations({ clientId, timeZone, currency }: Props) {
         {list.data?.consultations.map((c) => (
           <li key={c.id} className="flex flex-wrap items-center justify-between gap-2 rounded-lg bg-linen px-3 py-2">
             <span>
-              <span className="font-bold">{formatDay(c.createdAt, timeZone)}</span> · levels {c.consultation.currentLevel} → {c.consultation.targetLevel} ·{' '}
+              <span className="font-bold">{formatDate(c.createdAt, formatFor(timeZone), { width: 'short' })}</span> · levels {c.consultation.currentLevel} → {c.consultation.targetLevel} ·{' '}
               {c.quote.stepPlan.sittings.length} {c.quote.stepPlan.sittings.length === 1 ? 'sitting' : 'sittings'} · <span className="tabular">{formatMoney(c.quote.priceCents, currency)}</span> ·{' '}
               {quoteStatusLabels[c.quote.status]}
               {c.quote.bookingIds.length > 0 && ' · booked'}

@@ -2,9 +2,9 @@ import { useQuery } from '@tanstack/react-query';
 import { Button } from '../../../components/ui/button';
 import { FormAlert } from '../../../components/ui/form-alert';
 import { sittingMaxMinutes } from '../../../../shared/schemas/step-plan.schemas';
-import { formatMoney } from '../../../lib/booking-labels';
 import { formatMinutes } from '../../../lib/time';
 import { myQuoteQueries, useAcceptQuote } from '../api/consultation-queries';
+import { formatMoney } from '../../../../shared/money/money';
 
 /** The quotes the salon sent the signed-in client, each with its sittings, price and deposit; accept online. */
 export function MyQuotes({ currency }: { currency: string }) {

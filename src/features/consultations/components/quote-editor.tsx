@@ -13,7 +13,7 @@ import { TextAreaField } from '../../../components/ui/text-area-field';
 import { fieldError, showServerErrors } from '../../../lib/form-errors';
 import { StepPlanEditor } from '../../bookings/components/step-plan/step-plan-editor';
 import { salonQueries } from '../../salon/api/salon-queries';
-import { MoneyField } from './money-field';
+import { MoneyField } from '../../../components/ui/money-field';
 
 type Props = {
   initial: QuoteEditInput;
@@ -21,11 +21,13 @@ type Props = {
   /** The strand test the quote is held to: after a failed one, lightener or remover needs a written reason. */
   strandTest: StrandOutcome;
   submitLabel: string;
+  /** The salon's ISO 4217 currency: the price and deposit are typed in its units. */
+  currency: string;
   onSave: (quote: QuoteEdit) => Promise<unknown>;
 };
 
 /** Every part of a quote the stylist may change: the service it books as, steps, sittings, days apart, price, deposit. */
-export function QuoteEditor({ initial, services, strandTest, submitLabel, onSave }: Props) {
+export function QuoteEditor({ initial, services, strandTest, submitLabel, currency, onSave }: Props) {
   const { data: salon } = useSuspenseQuery(salonQueries.current());
   // The same checks as the server: the salon's processing limits, and the strand-test gate.
   const schema = QuoteEditSchema.superRefine(withinProcessingLimits(salon.processingLimits)).superRefine(withStrandGate(strandTest));
@@ -57,8 +59,8 @@ export function QuoteEditor({ initial, services, strandTest, submitLabel, onSave
           </div>
         )}
         <div className="flex flex-wrap gap-3">
-          <MoneyField control={control} name="priceCents" label="Price" error={err('priceCents')} />
-          <MoneyField control={control} name="depositCents" label="Deposit" error={err('depositCents')} />
+          <MoneyField control={control} name="priceCents" label="Price" currency={currency} className="w-40" error={err('priceCents')} />
+          <MoneyField control={control} name="depositCents" label="Deposit" currency={currency} className="w-40" error={err('depositCents')} />
         </div>
         <TextAreaField label="Notes for the client" error={err('notes')} {...register('notes')} />
         <div>

@@ -1,7 +1,8 @@
 import { Button } from '../../../components/ui/button';
 import { FormAlert } from '../../../components/ui/form-alert';
 import type { ConsultationView } from '../../../../shared/schemas/consultation.schemas';
-import { formatDay } from '../../../lib/time';
+import { formatDate } from '../../../../shared/format/date-time';
+import { formatFor } from '../../../../shared/format/locale';
 import { useSendQuote } from '../api/consultation-queries';
 
 /** E-mail the saved quote to the client; they accept it on their own page. */
@@ -13,8 +14,8 @@ export function SendQuote({ view, timeZone }: { view: ConsultationView; timeZone
       {send.isError && <FormAlert>{send.error.message}</FormAlert>}
       <p>
         {q.status === 'draft' && 'Not sent to the client yet.'}
-        {q.status === 'sent' && q.sentAt && `Sent to the client on ${formatDay(q.sentAt, timeZone)}; waiting for them to accept it.`}
-        {q.status === 'accepted' && q.acceptedAt && `Accepted by the client on ${formatDay(q.acceptedAt, timeZone)}.`}
+        {q.status === 'sent' && q.sentAt && `Sent to the client on ${formatDate(q.sentAt, formatFor(timeZone), { width: 'short' })}; waiting for them to accept it.`}
+        {q.status === 'accepted' && q.acceptedAt && `Accepted by the client on ${formatDate(q.acceptedAt, formatFor(timeZone), { width: 'short' })}.`}
       </p>
       <div>
         <Button variant="secondary" busy={send.isPending} onClick={() => send.mutate()}>

@@ -7,7 +7,9 @@ import { LoadingState } from '../../../components/ui/loading-state';
 import { PageHeader } from '../../../components/ui/page-header';
 import { StepKindLegend } from '../../../components/ui/step-kind-legend';
 import { TimeZoneNote } from '../../../components/ui/time-zone-note';
-import { formatLocalDate, todayIn } from '../../../lib/time';
+import { todayIn } from '../../../lib/time';
+import { formatDate } from '../../../../shared/format/date-time';
+import { zonelessFormat } from '../../../../shared/format/locale';
 import type { ColumnsBy } from '../lay-out-day';
 import { ColumnsToggle } from './columns-toggle';
 
@@ -38,7 +40,7 @@ export function DayBookView({ day, title, hrefFor, lead, children, windows, book
         title={title(day.date === today)}
         subtitle={
           <>
-            <p className="text-lg font-bold text-ink">{formatLocalDate(day.date)}</p>
+            <p className="text-lg font-bold text-ink">{formatDate(day.date, zonelessFormat)}</p>
             <TimeZoneNote timeZone={day.timeZone} date={day.date} />
           </>
         }

@@ -3,7 +3,9 @@ import type { DayView } from '../../../../shared/schemas/booking-view.schemas';
 import { StepKindIcon } from '../../../components/ui/step-kind-icon';
 import { StepKindSwatch } from '../../../components/ui/step-kind-swatch';
 import { stepKindLabels } from '../../../lib/booking-labels';
-import { formatTimeRange, localDateOf } from '../../../lib/time';
+import { formatRange } from '../../../../shared/format/date-time';
+import { formatFor } from '../../../../shared/format/locale';
+import { localDateOf } from '../../../../shared/time/salon-time';
 
 type Props = { day: DayView };
 
@@ -26,7 +28,7 @@ export function DayStepsList({ day }: Props) {
     <ol className="divide-y divide-ink/10">
       {steps.map(({ booking, step }) => (
         <li key={`${booking.id}-${step.start}`} className="flex flex-wrap items-center gap-x-4 gap-y-1 py-2">
-          <span className="w-44 tabular">{formatTimeRange(step.start, step.end, day.timeZone)}</span>
+          <span className="w-44 tabular">{formatRange(step.start, step.end, formatFor(day.timeZone))}</span>
           <span className="flex w-36 items-center gap-2 font-bold">
             <StepKindSwatch kind={step.kind} />
             <StepKindIcon kind={step.kind} />

@@ -26,7 +26,7 @@ export default function DayTimeline({ day, by = 'stylist', windows = [], booking
       {layout.closedSpans.length > 0 && <ClosedKey />}
       <div role="region" aria-label={by === 'chair' ? 'Chair timeline' : 'Day timeline'} tabIndex={0} className="overflow-x-auto rounded-2xl bg-white ring-1 ring-ink/10">
         <div className="flex min-w-fit pb-4">
-          <HourAxis firstHour={layout.firstHour} lastHour={layout.lastHour} date={day.date} timeZone={day.timeZone} />
+          <HourAxis firstHour={layout.firstHour} lastHour={layout.lastHour} timeZone={day.timeZone} />
           {layout.columns.map((column) => (
             <StylistColumn
               key={column.id}

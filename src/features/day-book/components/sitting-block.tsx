@@ -2,7 +2,8 @@ import { Link } from 'react-router-dom';
 import { BookingStatusBadge } from '../../../components/ui/booking-status-badge';
 import { SkinTestFlag } from '../../../components/ui/skin-test-flag';
 import { sittingLabel } from '../../../lib/booking-labels';
-import { formatTimeRange } from '../../../lib/time';
+import { formatRange } from '../../../../shared/format/date-time';
+import { formatFor } from '../../../../shared/format/locale';
 import type { PlacedSitting } from '../lay-out-day';
 import { StepSegment } from './step-segment';
 import { PX_PER_MIN } from './timeline-scale';
@@ -15,7 +16,7 @@ type Props = { placed: PlacedSitting; firstHour: number; timeZone: string; roomy
  */
 export function SittingBlock({ placed, firstHour, timeZone, roomy, href }: Props) {
   const { booking, sitting, startMin, endMin, lane, lanes } = placed;
-  const times = formatTimeRange(sitting.start, sitting.end, timeZone);
+  const times = formatRange(sitting.start, sitting.end, formatFor(timeZone));
   const ofLabel = sittingLabel(sitting.seq, sitting.of);
   const dimmed = booking.status === 'no_show' || booking.status === 'held';
   return (

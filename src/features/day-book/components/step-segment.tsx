@@ -3,7 +3,9 @@ import type { StepViewSchema } from '../../../../shared/schemas/booking-view.sch
 import { StepKindIcon } from '../../../components/ui/step-kind-icon';
 import { stepKindPattern } from '../../../components/ui/step-kind-swatch';
 import { stepKindLabels } from '../../../lib/booking-labels';
-import { formatTimeRange, minutesBetween } from '../../../lib/time';
+import { minutesBetween } from '../../../lib/time';
+import { formatRange } from '../../../../shared/format/date-time';
+import { formatFor } from '../../../../shared/format/locale';
 import { PX_PER_MIN } from './timeline-scale';
 
 type Props = {
@@ -17,7 +19,7 @@ type Props = {
 export function StepSegment({ step, sittingStart, timeZone, showLabel }: Props) {
   const top = minutesBetween(sittingStart, step.start) * PX_PER_MIN;
   const height = Math.max(minutesBetween(step.start, step.end) * PX_PER_MIN, 2);
-  const times = formatTimeRange(step.start, step.end, timeZone);
+  const times = formatRange(step.start, step.end, formatFor(timeZone));
   const where = step.basinName ? ` at ${step.basinName}` : '';
   return (
     <li

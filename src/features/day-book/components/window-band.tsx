@@ -1,5 +1,8 @@
 import type { HandsFreeWindowView } from '../../../../shared/schemas/window.schemas';
-import { formatTimeRange, minutesBetween, minutesIntoDay } from '../../../lib/time';
+import { minutesBetween } from '../../../lib/time';
+import { formatRange } from '../../../../shared/format/date-time';
+import { formatFor } from '../../../../shared/format/locale';
+import { minutesIntoDay } from '../../../../shared/time/salon-time';
 import { PX_PER_MIN } from './timeline-scale';
 
 type Props = { window: HandsFreeWindowView; date: string; firstHour: number; timeZone: string };
@@ -16,7 +19,7 @@ export function WindowBand({ window: win, date, firstHour, timeZone }: Props) {
       {/* Minutes first: a short band has room for one line only. */}
       <span className="sr-only">Hands free </span>
       <span className="font-bold tabular">{win.minutes} min</span> <span aria-hidden="true">hands free</span>
-      <span className="sr-only">, {formatTimeRange(win.start, win.end, timeZone)}</span>
+      <span className="sr-only">, {formatRange(win.start, win.end, formatFor(timeZone))}</span>
     </li>
   );
 }

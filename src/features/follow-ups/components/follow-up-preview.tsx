@@ -1,4 +1,6 @@
 import { DateTime } from 'luxon';
+import { formatDateTime } from '../../../../shared/format/date-time';
+import { formatFor } from '../../../../shared/format/locale';
 import { followUpRuleProblem, followUpTimes } from '../../../../shared/messages/follow-up-times';
 
 type Props = { rrule: string; timeZone: string; now: Date };
@@ -10,13 +12,13 @@ export function FollowUpPreview({ rrule, timeZone, now }: Props) {
   const anchor = DateTime.fromJSDate(now, { zone: timeZone }).set({ hour: 17, minute: 0, second: 0, millisecond: 0 });
   return (
     <div aria-live="polite" className="rounded-lg bg-linen p-3 text-sm">
-      <p className="font-bold">Preview: for a sitting ending {anchor.toFormat("cccc d LLLL yyyy 'at' h:mm a")}</p>
+      <p className="font-bold">Preview: for a sitting ending {formatDateTime(anchor.toJSDate(), formatFor(timeZone))}</p>
       {problem ? (
         <p>{problem}</p>
       ) : (
         <ol className="list-decimal pl-5">
           {followUpTimes(rule, anchor.toJSDate(), timeZone).map((d) => (
-            <li key={d.toISOString()}>{DateTime.fromJSDate(d, { zone: timeZone }).toFormat("cccc d LLLL yyyy 'at' h:mm a ZZZZ")}</li>
+            <li key={d.toISOString()}>{formatDateTime(d, formatFor(timeZone), { zoneName: true })}</li>
           ))}
         </ol>
       )}

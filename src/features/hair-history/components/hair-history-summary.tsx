@@ -2,7 +2,8 @@ import { useQuery } from '@tanstack/react-query';
 import type { HairHistory } from '../../../../shared/schemas/hair-history.schemas';
 import { FormAlert } from '../../../components/ui/form-alert';
 import { LoadingState } from '../../../components/ui/loading-state';
-import { formatDay } from '../../../lib/time';
+import { formatDate } from '../../../../shared/format/date-time';
+import { deviceFormat } from '../../../lib/time';
 import { hairHistoryQueries } from '../api/hair-history-queries';
 import { answerLabels, answerQuestions, methodLabels, structuralLabels } from './hair-history-labels';
 import { ReactionCaution } from './reaction-caution';
@@ -25,7 +26,7 @@ export function HairHistorySummary({ clientId }: { clientId: string }) {
           </div>
         ))}
       </dl>
-      {updatedAt && <p className="text-sm text-ink/80">Last updated {formatDay(updatedAt, Intl.DateTimeFormat().resolvedOptions().timeZone)}.</p>}
+      {updatedAt && <p className="text-sm text-ink/80">Last updated {formatDate(updatedAt, deviceFormat(), { width: 'short' })}.</p>}
     </div>
   );
 }

@@ -6,7 +6,8 @@ import { LoadingState } from '../../../components/ui/loading-state';
 import { Notice } from '../../../components/ui/notice';
 import { SectionCard } from '../../../components/ui/section-card';
 import { SelectField } from '../../../components/ui/select-field';
-import { formatDay, formatTime } from '../../../lib/time';
+import { formatDate, formatTime } from '../../../../shared/format/date-time';
+import { formatFor } from '../../../../shared/format/locale';
 import { mixLogQueries } from '../api/mix-log-queries';
 import { partKindLabels, productTypeLabels } from '../product-type-labels';
 import { BowlForm } from './bowl-form';
@@ -64,7 +65,7 @@ export function MixLogSection({ bookingId, timeZone, clientId, currency }: Props
           return (
             <section key={s.seq} aria-label={`Sitting ${s.seq}`} className="flex flex-col gap-2">
               <h3 className="text-lg font-bold">
-                Sitting {s.seq} · <span className="tabular">{formatDay(s.start, timeZone)} {formatTime(s.start, timeZone)}</span>
+                Sitting {s.seq} · <span className="tabular">{formatDate(s.start, formatFor(timeZone), { width: 'short' })} {formatTime(s.start, formatFor(timeZone))}</span>
               </h3>
               {bowls.length === 0 && (
                 <p className="text-ink/80">{!s.started && writable ? 'Not started yet; bowls can be written ahead.' : 'No bowls written.'}</p>

@@ -4,7 +4,8 @@ import { Button } from '../../../components/ui/button';
 import { FormAlert } from '../../../components/ui/form-alert';
 import { SelectField } from '../../../components/ui/select-field';
 import { isApiError } from '../../../lib/api-error';
-import { formatDay } from '../../../lib/time';
+import { formatDate } from '../../../../shared/format/date-time';
+import { formatFor } from '../../../../shared/format/locale';
 import { useRepeatMixLog } from '../api/mix-log-queries';
 
 type Props = {
@@ -23,7 +24,7 @@ export function RepeatForm({ bookingId, sources, targets, target, timeZone }: Pr
   const repeat = useRepeatMixLog(bookingId);
   const options = sources.map((s) => ({
     value: `${s.bookingId}|${s.sittingSeq}`,
-    label: `${s.bookingId === bookingId ? 'This booking' : `${s.serviceName}, ${formatDay(s.start, timeZone)}`} (sitting ${s.sittingSeq}, ${s.bowls} ${s.bowls === 1 ? 'bowl' : 'bowls'})`,
+    label: `${s.bookingId === bookingId ? 'This booking' : `${s.serviceName}, ${formatDate(s.start, formatFor(timeZone), { width: 'short' })}`} (sitting ${s.sittingSeq}, ${s.bowls} ${s.bowls === 1 ? 'bowl' : 'bowls'})`,
   }));
   const [source, setSource] = useState('');
   const [into, setInto] = useState<number | null>(null);

@@ -6,7 +6,8 @@ import { SkinTestFlag } from '../../../components/ui/skin-test-flag';
 import { StepKindIcon } from '../../../components/ui/step-kind-icon';
 import { StepStrip } from '../../../components/ui/step-strip';
 import { sittingLabel, stepKindLabels } from '../../../lib/booking-labels';
-import { formatTime, formatTimeRange } from '../../../lib/time';
+import { formatRange, formatTime } from '../../../../shared/format/date-time';
+import { formatFor } from '../../../../shared/format/locale';
 import { consultationPagePaths } from '../../consultations/api/consultation-queries';
 import { stylistMixLogPath } from '../../mix-log/api/mix-log-queries';
 import { sittingProgress } from '../timer-state';
@@ -28,7 +29,7 @@ export function ClientDayCard({ booking, sitting, timeZone, now }: Props) {
             {ofLabel && <span className="font-bold"> · {ofLabel}</span>}
           </p>
           <p className="text-sm text-ink/80 tabular">
-            {formatTimeRange(sitting.start, sitting.end, timeZone)} · {sitting.chairName}
+            {formatRange(sitting.start, sitting.end, formatFor(timeZone))} · {sitting.chairName}
           </p>
         </div>
         <BookingStatusBadge status={booking.status} />
@@ -37,7 +38,7 @@ export function ClientDayCard({ booking, sitting, timeZone, now }: Props) {
       <StepStrip steps={sitting.steps} timeZone={timeZone} />
       {progress.state === 'upcoming' && (
         <p>
-          First step at <span className="tabular">{formatTime(progress.next.start, timeZone)}</span>: {progress.next.label}
+          First step at <span className="tabular">{formatTime(progress.next.start, formatFor(timeZone))}</span>: {progress.next.label}
         </p>
       )}
       {progress.state === 'finished' && <p className="text-ink/80">All steps done.</p>}
@@ -47,12 +48,12 @@ export function ClientDayCard({ booking, sitting, timeZone, now }: Props) {
             <span className="font-bold">Now:</span>
             <StepKindIcon kind={progress.step.kind} />
             <span className="font-bold">{stepKindLabels[progress.step.kind]}</span> — {progress.step.label}
-            <span className="tabular text-ink/80">until {formatTime(progress.step.end, timeZone)}</span>
+            <span className="tabular text-ink/80">until {formatTime(progress.step.end, formatFor(timeZone))}</span>
           </p>
           {progress.step.kind === 'developing' && <DevelopingTimer step={progress.step} now={now} />}
           {progress.next && (
             <p className="text-sm text-ink/80">
-              Next: {progress.next.label} at <span className="tabular">{formatTime(progress.next.start, timeZone)}</span>
+              Next: {progress.next.label} at <span className="tabular">{formatTime(progress.next.start, formatFor(timeZone))}</span>
             </p>
           )}
         </div>

@@ -1,6 +1,6 @@
 import { useMemo } from 'react';
 import type { DayView } from '../../../../shared/schemas/booking-view.schemas';
-import { localDateOf } from '../../../lib/time';
+import { localDateOf } from '../../../../shared/time/salon-time';
 import { useNow } from '../../../lib/use-now';
 import { ClientDayCard } from './client-day-card';
 

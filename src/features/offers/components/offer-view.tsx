@@ -2,7 +2,9 @@ import type { z } from 'zod';
 import type { OfferViewSchema } from '../../../../shared/schemas/window.schemas';
 import { Button } from '../../../components/ui/button';
 import { FormAlert } from '../../../components/ui/form-alert';
-import { formatDay, formatTime, zoneLabel } from '../../../lib/time';
+import { zoneLabel } from '../../../lib/time';
+import { formatDate, formatTime } from '../../../../shared/format/date-time';
+import { formatFor } from '../../../../shared/format/locale';
 import { useAcceptOffer } from '../api/offer-mutations';
 
 type Offer = z.output<typeof OfferViewSchema>;
@@ -18,7 +20,7 @@ const statusWords: Record<Offer['status'], string> = {
 /** A time offered to a standby client by SMS or e-mail: what, when, with whom, and one button to take it. */
 export function OfferView({ token, offer }: Props) {
   const accept = useAcceptOffer(token);
-  const when = formatDay(offer.start, offer.timeZone);
+  const when = formatDate(offer.start, formatFor(offer.timeZone), { width: 'short' });
   return (
     <article aria-labelledby="offer-heading" className="mx-auto flex w-full max-w-md flex-col gap-4 rounded-2xl bg-white p-5 shadow-sm ring-1 ring-ink/10">
       <p className="text-sm font-bold text-ink/80">{offer.salonName}</p>
@@ -32,7 +34,7 @@ export function OfferView({ token, offer }: Props) {
         <dd>{offer.stylistName}</dd>
         <dt className="font-bold">When</dt>
         <dd>
-          {when}, <span className="tabular">{formatTime(offer.start, offer.timeZone)}</span>
+          {when}, <span className="tabular">{formatTime(offer.start, formatFor(offer.timeZone))}</span>
           <span className="block text-sm text-ink/80">Salon time: {zoneLabel(offer.timeZone, offer.start.slice(0, 10))}</span>
         </dd>
         <dt className="font-bold">Status</dt>

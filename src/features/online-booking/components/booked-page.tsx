@@ -7,10 +7,12 @@ import type { BookingView } from '../../../../shared/schemas/booking-view.schema
 import type { Salon } from '../../../../shared/schemas/salon.schemas';
 import { buttonClasses } from '../../../components/ui/button';
 import { paths } from '../../../config/paths';
-import { formatMoney } from '../../../lib/booking-labels';
-import { formatDay, formatTimeRange, zoneLabel } from '../../../lib/time';
+import { zoneLabel } from '../../../lib/time';
+import { formatDate, formatRange } from '../../../../shared/format/date-time';
+import { formatFor } from '../../../../shared/format/locale';
 import { onlineBookingQueries } from '../api/online-booking-queries';
 import { confirmationWords } from '../confirmation-words';
+import { formatMoney } from '../../../../shared/money/money';
 
 type Props = { booking: BookingView; salon: Pick<Salon, 'name' | 'address' | 'phone' | 'timeZone' | 'currency' | 'skinTestLeadHours'> };
 
@@ -44,7 +46,7 @@ export function BookedPage({ booking, salon }: Props) {
           <>
             <dt className="font-bold">When</dt>
             <dd>
-              {formatDay(first.start, salon.timeZone)}, <span className="tabular">{formatTimeRange(first.start, first.end, salon.timeZone)}</span>
+              {formatDate(first.start, formatFor(salon.timeZone), { width: 'short' })}, <span className="tabular">{formatRange(first.start, first.end, formatFor(salon.timeZone))}</span>
               <span className="block text-sm text-ink/80">Salon time: {zoneLabel(salon.timeZone, first.start.slice(0, 10))}</span>
             </dd>
           </>

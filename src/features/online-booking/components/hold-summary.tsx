@@ -1,8 +1,10 @@
 import type { ReactNode } from 'react';
 import type { Hold } from '../../../../shared/schemas/online-booking.schemas';
-import { formatMoney } from '../../../lib/booking-labels';
-import { formatDay, formatTimeRange, zoneLabel } from '../../../lib/time';
+import { zoneLabel } from '../../../lib/time';
+import { formatDate, formatRange } from '../../../../shared/format/date-time';
+import { formatFor } from '../../../../shared/format/locale';
 import { HoldCountdown } from './hold-countdown';
+import { formatMoney } from '../../../../shared/money/money';
 
 /** `action`: what may be done with the held time from here (a signed-in client may release it). */
 type Props = { hold: Hold; onExpire: () => void; action?: ReactNode };
@@ -15,7 +17,7 @@ export function HoldSummary({ hold, onExpire, action }: Props) {
         {hold.serviceName} with {hold.stylistName}
       </p>
       <p>
-        {formatDay(hold.start, hold.timeZone)}, <span className="tabular">{formatTimeRange(hold.start, hold.end, hold.timeZone)}</span>
+        {formatDate(hold.start, formatFor(hold.timeZone), { width: 'short' })}, <span className="tabular">{formatRange(hold.start, hold.end, formatFor(hold.timeZone))}</span>
       </p>
       <p className="text-sm text-ink/80">Salon time: {zoneLabel(hold.timeZone, hold.start.slice(0, 10))}</p>
       {hold.depositCents > 0 && <p className="text-sm tabular">Deposit {formatMoney(hold.depositCents, hold.currency)}</p>}

@@ -1,5 +1,6 @@
 import type { CapturedMail } from '../../../../shared/schemas/mailbox.schemas';
-import { formatDay, formatTime } from '../../../lib/time';
+import { formatDate, formatTime } from '../../../../shared/format/date-time';
+import { formatFor } from '../../../../shared/format/locale';
 import { LinkedText } from './linked-text';
 
 type Props = { messages: CapturedMail[]; timeZone: string };
@@ -16,7 +17,7 @@ export function MailList({ messages, timeZone }: Props) {
             <summary className="cursor-pointer px-4 py-3">
               <span className="font-bold">{mail.subject}</span>
               <span className="block text-sm text-ink/80">
-                to {mail.to} · <span className="tabular">{formatDay(mail.receivedAt, timeZone)}, {formatTime(mail.receivedAt, timeZone)}</span>
+                to {mail.to} · <span className="tabular">{formatDate(mail.receivedAt, formatFor(timeZone), { width: 'short' })}, {formatTime(mail.receivedAt, formatFor(timeZone))}</span>
               </span>
             </summary>
             <div className="border-t border-ink/10 px-4 py-3">

@@ -1,5 +1,6 @@
 import type { SentMessage } from '../../../../shared/schemas/messages.schemas';
-import { formatDay, formatTime } from '../../../lib/time';
+import { formatDate, formatTime } from '../../../../shared/format/date-time';
+import { formatFor } from '../../../../shared/format/locale';
 
 type Props = { messages: SentMessage[]; timeZone: string };
 
@@ -14,7 +15,7 @@ const STATUS_LABEL: Record<SentMessage['status'], string> = {
 /** The send log: what Dwell planned and what became of it; failed rows carry the reason for the desk. */
 export function SentMessagesTable({ messages, timeZone }: Props) {
   if (messages.length === 0) return <p>No messages planned yet.</p>;
-  const at = (iso: string) => `${formatDay(iso, timeZone)}, ${formatTime(iso, timeZone)}`;
+  const at = (iso: string) => `${formatDate(iso, formatFor(timeZone), { width: 'short' })}, ${formatTime(iso, formatFor(timeZone))}`;
   return (
     <div className="overflow-x-auto">
       <table className="w-full text-left text-sm">
@@ -37,7 +38,7 @@ export function SentMessagesTable({ messages, timeZone }: Props) {
                 {m.subject && <span className="block text-ink/70">{m.subject}</span>}
               </td>
               <td className="py-1 pr-3">{m.toAddress}</td>
-              <td className="py-1 pr-3" role={m.status === 'failed' ? 'alert' : undefined}>{STATUS_LABEL[m.status]}{m.sentAt ? ` ${formatTime(m.sentAt, timeZone)}` : ''}</td>
+              <td className="py-1 pr-3" role={m.status === 'failed' ? 'alert' : undefined}>{STATUS_LABEL[m.status]}{m.sentAt ? ` ${formatTime(m.sentAt, formatFor(timeZone))}` : ''}</td>
               <td className="tabular py-1 pr-3">{m.attempts}</td>
               <td className="py-1 text-ink/80">{m.lastError ?? ''}</td>
             </tr>

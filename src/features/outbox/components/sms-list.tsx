@@ -1,5 +1,6 @@
 import type { CapturedSms } from '../../../../shared/schemas/sms.schemas';
-import { formatDay, formatTime } from '../../../lib/time';
+import { formatDate, formatTime } from '../../../../shared/format/date-time';
+import { formatFor } from '../../../../shared/format/locale';
 import { LinkedText } from './linked-text';
 
 type Props = { messages: CapturedSms[]; timeZone: string };
@@ -13,7 +14,7 @@ export function SmsList({ messages, timeZone }: Props) {
       {newestFirst.map((sms) => (
         <li key={sms.id} className="rounded-xl bg-white px-4 py-3 ring-1 ring-ink/15">
           <p className="text-sm text-ink/80">
-            to {sms.to} · <span className="tabular">{formatDay(sms.receivedAt, timeZone)}, {formatTime(sms.receivedAt, timeZone)}</span>
+            to {sms.to} · <span className="tabular">{formatDate(sms.receivedAt, formatFor(timeZone), { width: 'short' })}, {formatTime(sms.receivedAt, formatFor(timeZone))}</span>
           </p>
           <LinkedText text={sms.body} />
         </li>

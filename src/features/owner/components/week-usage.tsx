@@ -1,8 +1,9 @@
 import type { OwnerOverview } from '../../../../shared/schemas/owner.schemas';
 import { SectionCard } from '../../../components/ui/section-card';
 import { formatPercent } from '../../../lib/booking-labels';
-import { formatLocalDate } from '../../../lib/time';
-import { DateTime } from 'luxon';
+import { formatDate } from '../../../../shared/format/date-time';
+import { zonelessFormat } from '../../../../shared/format/locale';
+import { shiftLocalDate } from '../../../../shared/time/salon-time';
 import { StatTile } from './stat-tile';
 
 type Props = { week: OwnerOverview['week'] };
@@ -13,7 +14,7 @@ export function WeekUsage({ week }: Props) {
     <SectionCard title="This week">
       <p className="mb-3 text-ink/80">
         {/* `to` is the exclusive end: the week ends the day before it. */}
-        {formatLocalDate(week.from)} to {formatLocalDate(DateTime.fromISO(week.to).minus({ days: 1 }).toISODate()!)}
+        {formatDate(week.from, zonelessFormat)} to {formatDate(shiftLocalDate(week.to, -1), zonelessFormat)}
       </p>
       <dl className="grid gap-3 sm:grid-cols-3">
         <StatTile label="Bookings" value={String(week.bookings)} />

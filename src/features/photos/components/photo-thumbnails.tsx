@@ -1,12 +1,12 @@
 import type { Photo } from '../../../../shared/schemas/photo.schemas';
 import { Button } from '../../../components/ui/button';
 import { FormAlert } from '../../../components/ui/form-alert';
-import { formatDay } from '../../../lib/time';
+import { formatDate } from '../../../../shared/format/date-time';
+import { deviceFormat } from '../../../lib/time';
 import { useRemovePhoto } from '../api/photo-mutations';
 
 type Props = { photos: Photo[]; label: string };
 
-const zone = () => Intl.DateTimeFormat().resolvedOptions().timeZone;
 
 /** Thumbnails loaded through the authorised photo route, each with a remove button. */
 export function PhotoThumbnails({ photos, label }: Props) {
@@ -17,7 +17,7 @@ export function PhotoThumbnails({ photos, label }: Props) {
       {remove.isError && <FormAlert>{remove.error.message}</FormAlert>}
       <ul className="grid grid-cols-2 gap-3 sm:grid-cols-4" aria-label={label}>
         {photos.map((photo, i) => {
-          const name = `${label}, photo ${i + 1} of ${photos.length}, added ${formatDay(photo.createdAt, zone())}`;
+          const name = `${label}, photo ${i + 1} of ${photos.length}, added ${formatDate(photo.createdAt, deviceFormat(), { width: 'short' })}`;
           return (
             <li key={photo.id} className="flex flex-col gap-1">
               <a href={photo.url} target="_blank" rel="noreferrer" className="block overflow-hidden rounded-lg ring-1 ring-ink/10">

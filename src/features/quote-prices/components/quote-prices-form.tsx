@@ -5,13 +5,13 @@ import { Button } from '../../../components/ui/button';
 import { FormAlert } from '../../../components/ui/form-alert';
 import { TextField } from '../../../components/ui/text-field';
 import { fieldError, showServerErrors } from '../../../lib/form-errors';
-import { MoneyField } from '../../consultations/components/money-field';
+import { MoneyField } from '../../../components/ui/money-field';
 import { CostedProductSchema } from '../../../../shared/schemas/mix-log.schemas';
 import { costedProductLabels } from '../../mix-log/product-type-labels';
 import { useSaveQuotePrices } from '../api/quote-price-queries';
 
 /** The hourly rate for correction work and the cost per gram of each generic product type and of developer. */
-export function QuotePricesForm({ initial }: { initial: QuotePrices }) {
+export function QuotePricesForm({ initial, currency }: { initial: QuotePrices; currency: string }) {
   const save = useSaveQuotePrices();
   const { register, control, handleSubmit, setError, formState } = useForm<QuotePrices>({ resolver: zodResolver(QuotePricesSchema), defaultValues: initial });
   const err = (path: string) => fieldError(formState.errors, path);
@@ -20,7 +20,7 @@ export function QuotePricesForm({ initial }: { initial: QuotePrices }) {
     <form onSubmit={(e) => void submit(e)} noValidate aria-label="Quote prices" className="flex flex-col gap-4">
       {formState.errors.root?.server && <FormAlert>{formState.errors.root.server.message}</FormAlert>}
       {save.isSuccess && <FormAlert tone="success">Prices saved. New quotes and mix-log estimates use them.</FormAlert>}
-      <MoneyField control={control} name="correctionCentsPerHour" label="Hourly rate for colour and correction work" error={err('correctionCentsPerHour')} />
+      <MoneyField control={control} name="correctionCentsPerHour" label="Hourly rate for colour and correction work" currency={currency} className="w-40" error={err('correctionCentsPerHour')} />
       <fieldset className="flex flex-col gap-2">
         <legend className="mb-1 font-bold">Cost per gram as weighed into the bowl, in cents (leave empty if unknown)</legend>
         <p className="text-sm text-ink/80">A mix log counts each part as itself: the lightener grams of a bowl at the lightener cost, its developer grams at the developer cost.</p>

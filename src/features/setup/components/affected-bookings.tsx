@@ -1,5 +1,6 @@
 import type { AffectedBooking } from '../../../../shared/schemas/setup.schemas';
-import { formatDay, formatTime } from '../../../lib/time';
+import { formatDate, formatTime } from '../../../../shared/format/date-time';
+import { formatFor } from '../../../../shared/format/locale';
 
 type Props = { bookings: AffectedBooking[]; timeZone: string; label: string; action?: (b: AffectedBooking) => React.ReactNode };
 
@@ -12,7 +13,7 @@ export function AffectedBookings({ bookings, timeZone, label, action }: Props) {
         <li key={b.id} className="flex flex-wrap items-end justify-between gap-3 rounded-lg bg-linen p-3">
           <span>
             <span className="font-bold">
-              {formatDay(b.start, timeZone)} {formatTime(b.start, timeZone)}
+              {formatDate(b.start, formatFor(timeZone), { width: 'short' })} {formatTime(b.start, formatFor(timeZone))}
             </span>{' '}
             · {b.clientName} · {b.serviceName} · with {b.stylistName}
           </span>

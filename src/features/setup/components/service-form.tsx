@@ -15,7 +15,7 @@ import { fieldError, showServerErrors } from '../../../lib/form-errors';
 import { StepPlanEditor } from '../../bookings/components/step-plan/step-plan-editor';
 import { useRetireService, useSaveService } from '../api/setup-mutations';
 import { salonQueries } from '../../salon/api/salon-queries';
-import { MoneyField } from './money-field';
+import { MoneyField } from '../../../components/ui/money-field';
 import type { ProductFamily, StepPlan } from '../../../../shared/schemas/step-plan.schemas';
 import { productFamilyLabels, stepNeedingSkinTest } from '../../../../shared/rules/skin-test-need';
 
@@ -83,7 +83,7 @@ export function ServiceForm({ id, initial, skills, currency, active, families }:
         </SectionCard>
         <SectionCard title="Price and deposit">
           <div className="grid gap-4 md:grid-cols-3">
-            <MoneyField name="priceCents" label="Price" currency={currency} />
+            <MoneyField control={form.control} name="priceCents" label="Price" currency={currency} error={err('priceCents')} />
             <label className="flex min-h-11 items-center gap-2 self-end">
               <input type="checkbox" className="size-5" {...form.register('priceIsFrom')} /> Price is a starting price (“from”)
             </label>
@@ -105,7 +105,7 @@ export function ServiceForm({ id, initial, skills, currency, active, families }:
                 {...form.register('depositPercent', { setValueAs: (v: string | number | null) => (v === '' || v === null ? null : Number(v)) })}
               />
             ) : (
-              <MoneyField name="depositCents" label="Deposit amount" currency={currency} hint="0 for no deposit" />
+              <MoneyField control={form.control} name="depositCents" label="Deposit amount" currency={currency} hint="0 for no deposit" error={err('depositCents')} />
             )}
           </div>
         </SectionCard>

@@ -5,8 +5,8 @@ import { planNeedsSkinTest } from '../../../../shared/rules/skin-test-need';
 import type { SetupService } from '../../../../shared/schemas/setup.schemas';
 import { DataTable } from '../../../components/ui/data-table';
 import { paths } from '../../../config/paths';
-import { formatMoney } from '../../../lib/booking-labels';
 import { formatMinutes } from '../../../lib/time';
+import { formatMoney } from '../../../../shared/money/money';
 
 const col = createColumnHelper<SetupService>();
 

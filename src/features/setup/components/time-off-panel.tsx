@@ -5,7 +5,8 @@ import { Button } from '../../../components/ui/button';
 import { FormAlert } from '../../../components/ui/form-alert';
 import { TextField } from '../../../components/ui/text-field';
 import { showServerErrors } from '../../../lib/form-errors';
-import { formatDay } from '../../../lib/time';
+import { formatDate } from '../../../../shared/format/date-time';
+import { formatFor } from '../../../../shared/format/locale';
 import { useAddTimeOff, useRemoveTimeOff } from '../api/setup-mutations';
 
 /** Whole days off for a stylist, in salon time; planning leaves those days out. */
@@ -21,7 +22,7 @@ export function TimeOffPanel({ member, timeZone }: { member: StaffMember; timeZo
     ),
   );
   // The end is exclusive (midnight after the last day), so the last day is the one before it.
-  const lastDay = (iso: string) => formatDay(new Date(new Date(iso).getTime() - 60_000).toISOString(), timeZone);
+  const lastDay = (iso: string) => formatDate(new Date(new Date(iso).getTime() - 60_000).toISOString(), formatFor(timeZone), { width: 'short' });
   return (
     <div className="flex flex-col gap-3">
       {member.timeOff.length === 0 ? (
@@ -30,7 +31,7 @@ export function TimeOffPanel({ member, timeZone }: { member: StaffMember; timeZo
         <ul aria-label={`Time off of ${member.details.name}`} className="flex flex-col gap-2">
           {member.timeOff.map((t) => (
             <li key={t.id} className="flex flex-wrap items-center gap-3">
-              {formatDay(t.start, timeZone)} – {lastDay(t.end)} {t.reason && `· ${t.reason}`}
+              {formatDate(t.start, formatFor(timeZone), { width: 'short' })} – {lastDay(t.end)} {t.reason && `· ${t.reason}`}
               <Button variant="quiet" onClick={() => remove.mutate({ id: member.id, entryId: t.id })}>
                 Remove
               </Button>

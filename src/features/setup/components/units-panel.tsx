@@ -4,7 +4,8 @@ import type { Unit, UnitKind } from '../../../../shared/schemas/setup.schemas';
 import { Button } from '../../../components/ui/button';
 import { DataTable } from '../../../components/ui/data-table';
 import { FormAlert } from '../../../components/ui/form-alert';
-import { formatDay } from '../../../lib/time';
+import { formatDate } from '../../../../shared/format/date-time';
+import { formatFor } from '../../../../shared/format/locale';
 import { useAddUnit, useBackInService, useRenameUnit } from '../api/setup-mutations';
 import { OutOfServiceForm } from './out-of-service-form';
 import { UnitNameForm } from './unit-name-form';
@@ -21,10 +22,10 @@ export function UnitsPanel({ kind, units, timeZone }: Props) {
   const [picked, setPicked] = useState<{ id: string; action: 'rename' | 'close' } | null>(null);
   const [notice, setNotice] = useState<string | null>(null);
   const unit = units.find((u) => u.id === picked?.id);
-  const lastDay = (iso: string) => formatDay(new Date(new Date(iso).getTime() - 60_000).toISOString(), timeZone);
+  const lastDay = (iso: string) => formatDate(new Date(new Date(iso).getTime() - 60_000).toISOString(), formatFor(timeZone), { width: 'short' });
   const columns = [
     col.accessor('name', { header: 'Name' }),
-    col.accessor((u) => u.outOfService.map((p) => `${formatDay(p.start, timeZone)} – ${lastDay(p.end)}`).join('; '), {
+    col.accessor((u) => u.outOfService.map((p) => `${formatDate(p.start, formatFor(timeZone), { width: 'short' })} – ${lastDay(p.end)}`).join('; '), {
       id: 'outOfService',
       header: 'Out of service',
       cell: (c) =>
@@ -34,7 +35,7 @@ export function UnitsPanel({ kind, units, timeZone }: Props) {
           <ul>
             {c.row.original.outOfService.map((p) => (
               <li key={p.id}>
-                {formatDay(p.start, timeZone)} – {lastDay(p.end)} {p.reason && `· ${p.reason}`}{' '}
+                {formatDate(p.start, formatFor(timeZone), { width: 'short' })} – {lastDay(p.end)} {p.reason && `· ${p.reason}`}{' '}
                 <Button variant="quiet" onClick={() => back.mutate({ kind, id: c.row.original.id, entryId: p.id })}>
                   Back in service
                 </Button>

@@ -1,4 +1,3 @@
-import { DateTime } from 'luxon';
 import { useId, useState } from 'react';
 import { useFormContext } from 'react-hook-form';
 import { composeWeeklyRule, nextDates, readWeeklyRule, WEEKDAY_CODES, type WeeklyRule } from '../../../../shared/engine/weekly-rule';
@@ -8,9 +7,11 @@ import { TextField } from '../../../components/ui/text-field';
 import { describeHoursRule } from '../../../../shared/engine/describe-hours';
 import { fieldError } from '../../../lib/form-errors';
 import { todayIn } from '../../../lib/time';
+import { formatDate } from '../../../../shared/format/date-time';
+import { zonelessFormat } from '../../../../shared/format/locale';
 
 const dayNames: Record<(typeof WEEKDAY_CODES)[number], string> = { MO: 'Mon', TU: 'Tue', WE: 'Wed', TH: 'Thu', FR: 'Fri', SA: 'Sat', SU: 'Sun' };
-const shortDate = (date: string) => DateTime.fromISO(date).toFormat('ccc d LLL yyyy');
+const shortDate = (date: string) => formatDate(date, zonelessFormat, { width: 'short' });
 
 type Props = { path: string; number: number; timeZone: string; onRemove?: () => void };
 

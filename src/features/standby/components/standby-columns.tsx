@@ -1,7 +1,8 @@
 import { createColumnHelper } from '@tanstack/react-table';
 import type { StandbyEntry } from '../../../../shared/schemas/standby.schemas';
 import { Button } from '../../../components/ui/button';
-import { formatDay } from '../../../lib/time';
+import { formatDate } from '../../../../shared/format/date-time';
+import { formatFor } from '../../../../shared/format/locale';
 import { availabilityText } from '../weekdays';
 
 const column = createColumnHelper<StandbyEntry>();
@@ -23,7 +24,7 @@ export function standbyColumns(timeZone: string, onRemove: (entry: StandbyEntry)
     column.accessor((e) => e.stylist?.name ?? 'Any', { id: 'stylist', header: 'Stylist' }),
     column.accessor((e) => e.availability.map(availabilityText).join('; '), { id: 'availability', header: 'Can come', cell: (c) => <span className="tabular">{c.getValue()}</span> }),
     column.accessor('notes', { header: 'Notes', enableSorting: false }),
-    column.accessor('createdAt', { header: 'Added', cell: (c) => <span className="tabular">{formatDay(c.getValue(), timeZone)}</span>, enableGlobalFilter: false }),
+    column.accessor('createdAt', { header: 'Added', cell: (c) => <span className="tabular">{formatDate(c.getValue(), formatFor(timeZone), { width: 'short' })}</span>, enableGlobalFilter: false }),
     column.display({
       id: 'remove',
       header: () => <span className="sr-only">Actions</span>,

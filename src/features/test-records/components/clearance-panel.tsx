@@ -6,7 +6,8 @@ import { Button } from '../../../components/ui/button';
 import { FormAlert } from '../../../components/ui/form-alert';
 import { TextAreaField } from '../../../components/ui/text-area-field';
 import { fieldError, showServerErrors } from '../../../lib/form-errors';
-import { formatDay } from '../../../lib/time';
+import { formatDate } from '../../../../shared/format/date-time';
+import { formatFor } from '../../../../shared/format/locale';
 import { useRecordClearance } from '../api/test-record-queries';
 
 type Props = { clientId: string; zone: string; clearances: SkinTestClearance[]; canClear: boolean };
@@ -25,7 +26,7 @@ export function ClearancePanel({ clientId, zone, clearances, canClear }: Props) 
         <ul aria-label="Clearances" className="flex flex-col gap-1 text-sm">
           {clearances.map((c) => (
             <li key={c.id}>
-              <span className="font-bold">Cleared</span> {formatDay(c.recordedAt, zone)} by {c.recordedByName}: {c.reason}
+              <span className="font-bold">Cleared</span> {formatDate(c.recordedAt, formatFor(zone), { width: 'short' })} by {c.recordedByName}: {c.reason}
             </li>
           ))}
         </ul>

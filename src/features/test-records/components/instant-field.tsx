@@ -1,4 +1,4 @@
-import { DateTime } from 'luxon';
+import { localDateTimeOf, localToInstant } from '../../../../shared/time/salon-time';
 import type { Control, FieldValues, Path } from 'react-hook-form';
 import { ConvertedField } from '../../../components/ui/converted-field';
 
@@ -11,11 +11,11 @@ export function InstantField<T extends FieldValues>({ zone, optional = false, ..
       {...props}
       type="datetime-local"
       className="w-60"
-      format={(value) => (typeof value === 'string' && value ? DateTime.fromISO(value, { zone }).toFormat("yyyy-LL-dd'T'HH:mm") : '')}
+      format={(value) => (typeof value === 'string' && value ? localDateTimeOf(value, zone) : '')}
       parse={(text) => {
         if (text === '' && optional) return null;
-        const moment = DateTime.fromISO(text, { zone });
-        return moment.isValid ? moment.toISO({ suppressMilliseconds: true }) : text;
+        const [date, time = ''] = text.split('T');
+        return localToInstant(date, time, zone) ?? text;
       }}
     />
   );

@@ -1,5 +1,4 @@
 import { zodResolver } from '@hookform/resolvers/zod';
-import { DateTime } from 'luxon';
 import { useForm } from 'react-hook-form';
 import { RecordSkinTestReadingSchema, type RecordSkinTestReading, type SkinTest } from '../../../../shared/schemas/skin-test.schemas';
 import { Button } from '../../../components/ui/button';
@@ -9,13 +8,14 @@ import { fieldError, showServerErrors } from '../../../lib/form-errors';
 import { useRecordSkinTestReading } from '../api/test-record-queries';
 import { InstantField } from './instant-field';
 import { skinTestResultLabels } from './skin-test-result-labels';
+import { nowInZone } from '../../../lib/time';
 
 const readingOptions = RecordSkinTestReadingSchema.shape.result.options.map((value) => ({ value, label: skinTestResultLabels[value] }));
 
 /** The reading of a test that was applied and not read yet: when it was read and what it showed (stored once). */
 export function SkinTestReadingForm({ clientId, test, zone }: { clientId: string; test: SkinTest; zone: string }) {
   const record = useRecordSkinTestReading(clientId, test.id);
-  const now = DateTime.now().setZone(zone).startOf('minute').toISO({ suppressMilliseconds: true })!;
+  const now = nowInZone(zone);
   const { control, register, handleSubmit, setError, formState } = useForm<RecordSkinTestReading>({
     resolver: zodResolver(RecordSkinTestReadingSchema),
     defaultValues: { readAt: now, result: 'negative' },

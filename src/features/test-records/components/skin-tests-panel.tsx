@@ -1,6 +1,5 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useQuery } from '@tanstack/react-query';
-import { DateTime } from 'luxon';
 import { useForm } from 'react-hook-form';
 import type { z } from 'zod';
 import { RecordSkinTestSchema } from '../../../../shared/schemas/skin-test.schemas';
@@ -10,13 +9,15 @@ import { Notice } from '../../../components/ui/notice';
 import { SelectField } from '../../../components/ui/select-field';
 import { TextField } from '../../../components/ui/text-field';
 import { fieldError, showServerErrors } from '../../../lib/form-errors';
-import { formatDay, formatTime } from '../../../lib/time';
+import { formatDate, formatTime } from '../../../../shared/format/date-time';
+import { formatFor } from '../../../../shared/format/locale';
 import { testRecordQueries, useRecordSkinTest } from '../api/test-record-queries';
 import { InstantField } from './instant-field';
 import { SkinTestReadingForm } from './skin-test-reading-form';
 import { ClearancePanel } from './clearance-panel';
 import { sessionQueries } from '../../auth/api/session-queries';
 import { skinTestResultLabels } from './skin-test-result-labels';
+import { nowInZone } from '../../../lib/time';
 
 type Input = z.input<typeof RecordSkinTestSchema>;
 const resultOptions = Object.entries(skinTestResultLabels).map(([value, label]) => ({ value, label }));
@@ -25,7 +26,7 @@ const resultOptions = Object.entries(skinTestResultLabels).map(([value, label]) 
 export function SkinTestsPanel({ clientId, zone }: { clientId: string; zone: string }) {
   const list = useQuery(testRecordQueries.skin(clientId));
   const record = useRecordSkinTest(clientId);
-  const now = DateTime.now().setZone(zone).startOf('minute').toISO({ suppressMilliseconds: true })!;
+  const now = nowInZone(zone);
   const form = useForm<Input>({ resolver: zodResolver(RecordSkinTestSchema), defaultValues: { appliedAt: now, readAt: null, result: 'pending', product: '', notes: '' } });
   const { register, control, handleSubmit, setError, formState, reset } = form;
   const err = (path: string) => fieldError(formState.errors, path);
@@ -56,9 +57,9 @@ export function SkinTestsPanel({ clientId, zone }: { clientId: string; zone: str
       <ul className="flex flex-col gap-2" aria-label="Skin tests">
         {list.data?.tests.map((t) => (
           <li key={t.id} className="rounded-lg bg-linen px-3 py-2">
-            <span className="font-bold">{skinTestResultLabels[t.result]}</span> · applied {formatDay(t.appliedAt, zone)} {formatTime(t.appliedAt, zone)}
+            <span className="font-bold">{skinTestResultLabels[t.result]}</span> · applied {formatDate(t.appliedAt, formatFor(zone), { width: 'short' })} {formatTime(t.appliedAt, formatFor(zone))}
             {t.product && ` · ${t.product}`} · recorded by {t.recordedByName ?? 'the salon'}
-            {t.readAt && ` · read ${formatDay(t.readAt, zone)} ${formatTime(t.readAt, zone)} by ${t.readByName ?? 'the salon'}`}
+            {t.readAt && ` · read ${formatDate(t.readAt, formatFor(zone), { width: 'short' })} ${formatTime(t.readAt, formatFor(zone))} by ${t.readByName ?? 'the salon'}`}
             {t.notes && <span className="block text-sm">{t.notes}</span>}
             {t.result === 'pending' && <SkinTestReadingForm clientId={clientId} test={t} zone={zone} />}
           </li>

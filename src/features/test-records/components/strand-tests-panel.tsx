@@ -1,6 +1,5 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useQuery } from '@tanstack/react-query';
-import { DateTime } from 'luxon';
 import { useForm } from 'react-hook-form';
 import { urlOf } from '../../../../shared/api/endpoint';
 import { photosApi } from '../../../../shared/api/photos.api';
@@ -10,11 +9,13 @@ import { FormAlert } from '../../../components/ui/form-alert';
 import { SelectField } from '../../../components/ui/select-field';
 import { TextField } from '../../../components/ui/text-field';
 import { fieldError, showServerErrors } from '../../../lib/form-errors';
-import { formatDay } from '../../../lib/time';
+import { formatDate } from '../../../../shared/format/date-time';
+import { formatFor } from '../../../../shared/format/locale';
 import { productTypeLabels, productTypeOptions } from '../../mix-log/product-type-labels';
 import { photoQueries } from '../../photos/api/photo-queries';
 import { testRecordQueries, useRecordStrandTest } from '../api/test-record-queries';
 import { InstantField } from './instant-field';
+import { nowInZone } from '../../../lib/time';
 
 const resultLabels = { passed: 'Passed', fragile: 'Lifted, but fragile', failed: 'Failed (broke or gummy)' } as const;
 const resultOptions = Object.entries(resultLabels).map(([value, label]) => ({ value, label }));
@@ -24,7 +25,7 @@ export function StrandTestsPanel({ clientId, zone }: { clientId: string; zone: s
   const list = useQuery(testRecordQueries.strand(clientId));
   const photos = useQuery(photoQueries.list({ clientId }));
   const record = useRecordStrandTest(clientId);
-  const now = DateTime.now().setZone(zone).startOf('minute').toISO({ suppressMilliseconds: true })!;
+  const now = nowInZone(zone);
   const form = useForm<RecordStrandTest>({
     resolver: zodResolver(RecordStrandTestSchema),
     defaultValues: { testedAt: now, tested: '', productType: 'lightener', developerPercent: 6, minutes: 30, result: 'passed', notes: '', photoId: null },
@@ -33,7 +34,7 @@ export function StrandTestsPanel({ clientId, zone }: { clientId: string; zone: s
   const err = (path: string) => fieldError(formState.errors, path);
   const fields = ['testedAt', 'tested', 'productType', 'developerPercent', 'minutes', 'result', 'notes', 'photoId'] as const;
   const submit = handleSubmit((body) => record.mutateAsync(body).then(() => reset(), (e) => showServerErrors(e, setError, fields)));
-  const photoOptions = [{ value: '', label: 'No photo' }, ...(photos.data?.photos ?? []).map((p, i) => ({ value: p.id, label: `Photo ${i + 1} (${formatDay(p.createdAt, zone)})` }))];
+  const photoOptions = [{ value: '', label: 'No photo' }, ...(photos.data?.photos ?? []).map((p, i) => ({ value: p.id, label: `Photo ${i + 1} (${formatDate(p.createdAt, formatFor(zone), { width: 'short' })})` }))];
   return (
     <div className="flex flex-col gap-4">
       <p className="text-sm">Lightening previously coloured or compromised hair risks breakage: a strand test is advised before the appointment.</p>
@@ -44,7 +45,7 @@ export function StrandTestsPanel({ clientId, zone }: { clientId: string; zone: s
           <li key={t.id} className="flex gap-3 rounded-lg bg-linen px-3 py-2">
             {t.photoId && <img src={urlOf(photosApi.file, { params: { id: t.photoId } })} alt="The tested strand" className="size-16 rounded object-cover" />}
             <span>
-              <span className="font-bold">{resultLabels[t.result]}</span> · {formatDay(t.testedAt, zone)} · {t.tested} · {productTypeLabels[t.productType]}
+              <span className="font-bold">{resultLabels[t.result]}</span> · {formatDate(t.testedAt, formatFor(zone), { width: 'short' })} · {t.tested} · {productTypeLabels[t.productType]}
               {t.developerPercent !== null && ` with ${t.developerPercent} % developer`} · {t.minutes} min · by {t.recordedByName ?? 'the salon'}
               {t.notes && <span className="block text-sm">{t.notes}</span>}
             </span>

@@ -1,6 +1,7 @@
 import { SectionCard } from '../../../components/ui/section-card';
 import { formatMinutes } from '../../../lib/time';
 import { FigureTable, type FigureColumn } from './figure-table';
+import { formatMoney, minorToUnits } from '../../../../shared/money/money';
 
 interface ServiceRow {
   serviceId: string;
@@ -10,15 +11,15 @@ interface ServiceRow {
   revenueCents?: number;
 }
 
-type Props = { services: ServiceRow[]; filename: string; money?: (cents: number) => string };
+type Props = { services: ServiceRow[]; filename: string; currency?: string };
 
 /** The services that held chairs longest in the period. */
-export function ServicesTable({ services, filename, money }: Props) {
+export function ServicesTable({ services, filename, currency }: Props) {
   const columns: FigureColumn<ServiceRow>[] = [
     { id: 'name', header: 'Service', value: (s) => s.name },
     { id: 'chairMinutes', header: 'Chair time', value: (s) => s.chairMinutes, format: (s) => formatMinutes(s.chairMinutes), numeric: true },
     { id: 'sittings', header: 'Sittings', value: (s) => s.sittings, numeric: true },
-    ...(money ? [{ id: 'revenue', header: 'Revenue', value: (s: ServiceRow) => Math.round(s.revenueCents ?? 0) / 100, format: (s: ServiceRow) => money(s.revenueCents ?? 0), numeric: true }] : []),
+    ...(currency ? [{ id: 'revenue', header: 'Revenue', value: (s: ServiceRow) => minorToUnits(s.revenueCents ?? 0, currency), format: (s: ServiceRow) => formatMoney(s.revenueCents ?? 0, currency), numeric: true }] : []),
   ];
   return (
     <SectionCard title="Top services by chair time">

@@ -4,11 +4,12 @@ import { SectionCard } from '../../../components/ui/section-card';
 import { formatMinutes } from '../../../lib/time';
 import { FigureTable, type FigureColumn } from './figure-table';
 import { percentText, percentValue } from './chart-labels';
+import { formatMoney, minorToUnits } from '../../../../shared/money/money';
 
-type Props = { stylists: StylistFigures[]; money: (cents: number) => string; filename: string };
+type Props = { stylists: StylistFigures[]; currency: string; filename: string };
 
 /** Hands-on share per stylist as bars, and every per-stylist figure in the table. */
-export function StylistBars({ stylists, money, filename }: Props) {
+export function StylistBars({ stylists, currency, filename }: Props) {
   const columns: FigureColumn<StylistFigures>[] = [
     { id: 'name', header: 'Stylist', value: (s) => s.name },
     { id: 'share', header: 'Hands-on share', value: (s) => s.handsOnShare, format: (s) => percentText(s.handsOnShare), numeric: true },
@@ -16,8 +17,8 @@ export function StylistBars({ stylists, money, filename }: Props) {
     { id: 'clock', header: 'Minutes on the clock', value: (s) => s.onClockMinutes, format: (s) => formatMinutes(s.onClockMinutes), numeric: true },
     { id: 'bookings', header: 'Bookings', value: (s) => s.bookings, numeric: true },
     { id: 'noShows', header: 'No-shows', value: (s) => s.noShows, numeric: true },
-    { id: 'revenue', header: 'Revenue', value: (s) => Math.round(s.revenueCents) / 100, format: (s) => money(s.revenueCents), numeric: true },
-    { id: 'perHour', header: 'Revenue per hour on the clock', value: (s) => (s.revenuePerHourCents === null ? null : Math.round(s.revenuePerHourCents) / 100), format: (s) => (s.revenuePerHourCents === null ? '—' : money(s.revenuePerHourCents)), numeric: true },
+    { id: 'revenue', header: 'Revenue', value: (s) => minorToUnits(s.revenueCents, currency), format: (s) => formatMoney(s.revenueCents, currency), numeric: true },
+    { id: 'perHour', header: 'Revenue per hour on the clock', value: (s) => (s.revenuePerHourCents === null ? null : minorToUnits(s.revenuePerHourCents, currency)), format: (s) => (s.revenuePerHourCents === null ? '—' : formatMoney(s.revenuePerHourCents, currency)), numeric: true },
   ];
   const data = stylists.map((s) => ({ name: s.name, share: percentValue(s.handsOnShare) }));
   return (

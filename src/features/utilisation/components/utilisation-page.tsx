@@ -1,11 +1,11 @@
 import { useSuspenseQuery } from '@tanstack/react-query';
-import { DateTime } from 'luxon';
 import type { ReactNode } from 'react';
 import { useSearchParams } from 'react-router-dom';
 import type { DeskUtilisation, UtilisationQuery } from '../../../../shared/schemas/utilisation.schemas';
 import { PageHeader } from '../../../components/ui/page-header';
-import { formatMoney } from '../../../lib/booking-labels';
-import { formatLocalDate } from '../../../lib/time';
+import { formatDate } from '../../../../shared/format/date-time';
+import { shiftLocalDate } from '../../../../shared/time/salon-time';
+import { zonelessFormat } from '../../../../shared/format/locale';
 import { queryFromSearch, scenarioExportUrl, utilisationQueries } from '../api/utilisation-queries';
 import { OccupancyHeatMap } from './occupancy-heat-map';
 import { PeriodPicker } from './period-picker';
@@ -29,8 +29,8 @@ type FrameProps = { title: string; report: DeskUtilisation; query: UtilisationQu
 
 /** Heading, period picker and the period in words; the figures go below. */
 function Frame({ title, report, query, onQuery, actions, children }: FrameProps) {
-  const last = DateTime.fromISO(report.period.to).minus({ days: 1 }).toISODate()!;
-  const span = report.period.days === 1 ? formatLocalDate(report.period.from) : `${formatLocalDate(report.period.from)} to ${formatLocalDate(last)}`;
+  const last = shiftLocalDate(report.period.to, -1);
+  const span = report.period.days === 1 ? formatDate(report.period.from, zonelessFormat) : `${formatDate(report.period.from, zonelessFormat)} to ${formatDate(last, zonelessFormat)}`;
   return (
     <div className="flex flex-col gap-6">
       <PageHeader title={title} subtitle={<p>{report.salon.name} · {span} · salon time ({report.salon.timeZone})</p>} />
@@ -47,7 +47,7 @@ const slug = (r: DeskUtilisation) => `${r.period.from}-to-${r.period.to}`;
 export function OwnerUtilisationView() {
   const [query, setQuery] = usePeriodQuery();
   const { data: report } = useSuspenseQuery(utilisationQueries.owner(query));
-  const money = (cents: number) => formatMoney(cents, report.salon.currency);
+  const currency = report.salon.currency;
   const actions = (
     <p className="print:hidden">
       {report.period.scenarios === 1 ? (
@@ -62,11 +62,11 @@ export function OwnerUtilisationView() {
   );
   return (
     <Frame title="Utilisation" report={report} query={query} onQuery={setQuery} actions={actions}>
-      <UtilisationSummary report={report} money={money} />
+      <UtilisationSummary report={report} currency={currency} />
       <OccupancyHeatMap cells={report.heatMap} filename={`chair-occupancy-by-hour-${slug(report)}.csv`} />
-      <StylistBars stylists={report.stylists} money={money} filename={`stylists-${slug(report)}.csv`} />
-      <WeeklyTrend weeks={report.weeks} money={money} filename={`weeks-${slug(report)}.csv`} />
-      <ServicesTable services={report.topServices} money={money} filename={`services-${slug(report)}.csv`} />
+      <StylistBars stylists={report.stylists} currency={currency} filename={`stylists-${slug(report)}.csv`} />
+      <WeeklyTrend weeks={report.weeks} currency={currency} filename={`weeks-${slug(report)}.csv`} />
+      <ServicesTable services={report.topServices} currency={currency} filename={`services-${slug(report)}.csv`} />
     </Frame>
   );
 }

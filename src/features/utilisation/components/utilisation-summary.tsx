@@ -3,14 +3,15 @@ import { SectionCard } from '../../../components/ui/section-card';
 import { formatMinutes } from '../../../lib/time';
 import { StatTile } from '../../owner/components/stat-tile';
 import { percentText } from './chart-labels';
+import { formatMoney } from '../../../../shared/money/money';
 
-type Props = { report: DeskUtilisation | OwnerUtilisation; money?: (cents: number) => string };
+type Props = { report: DeskUtilisation | OwnerUtilisation; currency?: string };
 
 const isOwner = (r: DeskUtilisation | OwnerUtilisation): r is OwnerUtilisation => 'money' in r;
 const minutesOrDash = (m: number | null) => (m === null ? '—' : formatMinutes(Math.round(m)));
 
 /** The period's headline figures: the engine's occupancy and window use, attendance, and for the owner money and corrections. */
-export function UtilisationSummary({ report, money }: Props) {
+export function UtilisationSummary({ report, currency }: Props) {
   const a = report.attendance;
   return (
     <div className="flex flex-col gap-6">
@@ -22,15 +23,15 @@ export function UtilisationSummary({ report, money }: Props) {
           <StatTile label="Late cancellations" value={percentText(a.lateCancelRate)} note={`${a.lateCancels} of ${a.bookings} bookings`} />
         </dl>
       </SectionCard>
-      {isOwner(report) && money && (
+      {isOwner(report) && currency && (
         <SectionCard title="Money">
           <dl className="grid gap-3 sm:grid-cols-2 lg:grid-cols-4">
-            <StatTile label="Revenue" value={money(report.money.revenueCents)} note="prices of kept bookings, shared over their sittings" />
-            <StatTile label="Revenue per chair-hour" value={report.money.revenuePerChairHourCents === null ? '—' : money(report.money.revenuePerChairHourCents)} note={`${Math.round(report.money.chairHours)} open chair-hours`} />
-            <StatTile label="Revenue per stylist hour" value={report.money.revenuePerStylistHourCents === null ? '—' : money(report.money.revenuePerStylistHourCents)} note={`${Math.round(report.money.stylistHours)} hours on the clock`} />
-            <StatTile label="Deposits taken" value={money(report.deposits.takenCents)} note={`${report.deposits.taken} bookings`} />
-            <StatTile label="Deposits kept" value={money(report.deposits.keptCents)} note={`${report.deposits.kept} no-shows and late cancellations`} />
-            <StatTile label="Deposits refunded" value={money(report.deposits.refundedCents)} note={`${report.deposits.refunded} cancelled in good time`} />
+            <StatTile label="Revenue" value={formatMoney(report.money.revenueCents, currency)} note="prices of kept bookings, shared over their sittings" />
+            <StatTile label="Revenue per chair-hour" value={report.money.revenuePerChairHourCents === null ? '—' : formatMoney(report.money.revenuePerChairHourCents, currency)} note={`${Math.round(report.money.chairHours)} open chair-hours`} />
+            <StatTile label="Revenue per stylist hour" value={report.money.revenuePerStylistHourCents === null ? '—' : formatMoney(report.money.revenuePerStylistHourCents, currency)} note={`${Math.round(report.money.stylistHours)} hours on the clock`} />
+            <StatTile label="Deposits taken" value={formatMoney(report.deposits.takenCents, currency)} note={`${report.deposits.taken} bookings`} />
+            <StatTile label="Deposits kept" value={formatMoney(report.deposits.keptCents, currency)} note={`${report.deposits.kept} no-shows and late cancellations`} />
+            <StatTile label="Deposits refunded" value={formatMoney(report.deposits.refundedCents, currency)} note={`${report.deposits.refunded} cancelled in good time`} />
             <StatTile label="Corrections" value={String(report.corrections.count)} note="colour bookings of 4 h or more, or several sittings" />
             <StatTile
               label="Correction length, booked vs quoted"

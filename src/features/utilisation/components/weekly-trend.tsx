@@ -1,8 +1,10 @@
 import { CartesianGrid, Legend, Line, LineChart, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
 import { SectionCard } from '../../../components/ui/section-card';
-import { formatLocalDate } from '../../../lib/time';
+import { formatDate } from '../../../../shared/format/date-time';
+import { zonelessFormat } from '../../../../shared/format/locale';
 import { FigureTable, type FigureColumn } from './figure-table';
 import { percentText, percentValue } from './chart-labels';
+import { formatMoney, minorToUnits } from '../../../../shared/money/money';
 
 export interface TrendWeek {
   from: string;
@@ -14,7 +16,7 @@ export interface TrendWeek {
   revenueCents?: number;
 }
 
-type Props = { weeks: TrendWeek[]; filename: string; money?: (cents: number) => string };
+type Props = { weeks: TrendWeek[]; filename: string; currency?: string };
 
 // Lines differ by dash pattern as well as colour, so the chart reads in print and without colour.
 const LINES = [
@@ -24,15 +26,15 @@ const LINES = [
 ] as const;
 
 /** Week by week: chair occupancy, window use (and, for the owner, hands-on share and revenue). */
-export function WeeklyTrend({ weeks, filename, money }: Props) {
+export function WeeklyTrend({ weeks, filename, currency }: Props) {
   const owner = weeks.some((w) => w.handsOnShare !== undefined);
   const lines = LINES.filter((l) => owner || l.key !== 'handsOnShare');
-  const data = weeks.map((w) => ({ week: formatLocalDate(w.from), ...Object.fromEntries(lines.map((l) => [l.key, percentValue(w[l.key] ?? null)])) }));
+  const data = weeks.map((w) => ({ week: formatDate(w.from, zonelessFormat), ...Object.fromEntries(lines.map((l) => [l.key, percentValue(w[l.key] ?? null)])) }));
   const columns: FigureColumn<TrendWeek>[] = [
-    { id: 'from', header: 'Week from', value: (w) => w.from, format: (w) => formatLocalDate(w.from) },
+    { id: 'from', header: 'Week from', value: (w) => w.from, format: (w) => formatDate(w.from, zonelessFormat) },
     { id: 'bookings', header: 'Bookings', value: (w) => w.bookings, numeric: true },
     ...lines.map((l) => ({ id: l.key, header: l.name, value: (w: TrendWeek) => w[l.key] ?? null, format: (w: TrendWeek) => percentText(w[l.key]), numeric: true })),
-    ...(money ? [{ id: 'revenue', header: 'Revenue', value: (w: TrendWeek) => Math.round(w.revenueCents ?? 0) / 100, format: (w: TrendWeek) => money(w.revenueCents ?? 0), numeric: true }] : []),
+    ...(currency ? [{ id: 'revenue', header: 'Revenue', value: (w: TrendWeek) => minorToUnits(w.revenueCents ?? 0, currency), format: (w: TrendWeek) => formatMoney(w.revenueCents ?? 0, currency), numeric: true }] : []),
   ];
   return (
     <SectionCard title="Week by week">

@@ -1,7 +1,8 @@
 import type { BookingView } from '../../../../shared/schemas/booking-view.schemas';
 import { Button } from '../../../components/ui/button';
 import { whoseSitting } from '../../../lib/booking-labels';
-import { formatDay, formatTime } from '../../../lib/time';
+import { formatDate, formatTime } from '../../../../shared/format/date-time';
+import { formatFor } from '../../../../shared/format/locale';
 import type { WeekEventData } from '../week-events';
 
 /** The last drag the server accepted: the sitting as it was, and the booking as it is now. */
@@ -17,7 +18,7 @@ type Props = {
   onClose: () => void;
 };
 
-const when = (iso: string, zone: string) => `${formatDay(iso, zone)}, ${formatTime(iso, zone)}`;
+const when = (iso: string, zone: string) => `${formatDate(iso, formatFor(zone), { width: 'short' })}, ${formatTime(iso, formatFor(zone))}`;
 
 /**
  * Says what a drag did (and, when the sitting could not keep its chair, which chair it is in now), with Undo to

@@ -8,6 +8,8 @@ import type { WeekView } from '../../../../shared/schemas/booking-view.schemas';
 import { fromCalendarTime, toCalendarTime } from '../calendar-time';
 import { closedDates, closedStretches, hiddenClosedDates, toWeekEvents, visibleHours, type WeekEventData } from '../week-events';
 import { WeekEventContent } from './week-event-content';
+import { formatDate } from '../../../../shared/format/date-time';
+import { zonelessFormat } from '../../../../shared/format/locale';
 import './week-calendar.css';
 
 /** A drag the server should check: the sitting, its new start, and the sitting as it was (for the answer and an undo). */
@@ -44,7 +46,7 @@ export default function WeekCalendar({ week, stylistId, onMove }: Props) {
     <div className={`dwell-week ${stylistId ? '' : 'dwell-week-all'} overflow-x-auto rounded-2xl bg-white p-2 ring-1 ring-ink/10`}>
       {hidden.length > 0 && (
         <p className="px-2 pb-2 text-sm">
-          Closed, not shown: {hidden.map((d) => DateTime.fromISO(d).toFormat('ccc d LLL')).join('; ')}.
+          Closed, not shown: {hidden.map((d) => formatDate(d, zonelessFormat, { width: 'short', year: false })).join('; ')}.
         </p>
       )}
       <div className={stylistId ? 'min-w-[48rem]' : 'min-w-[56rem]'}>

@@ -11,7 +11,9 @@ import { StepKindLegend } from '../../../components/ui/step-kind-legend';
 import { TimeZoneNote } from '../../../components/ui/time-zone-note';
 import { paths } from '../../../config/paths';
 import { problemText } from '../../../lib/api-error';
-import { formatLocalDate, shiftLocalDate } from '../../../lib/time';
+import { formatDate } from '../../../../shared/format/date-time';
+import { zonelessFormat } from '../../../../shared/format/locale';
+import { shiftLocalDate } from '../../../../shared/time/salon-time';
 import { useMoveSitting } from '../../bookings/api/booking-mutations';
 import type { WeekDrop } from './week-calendar';
 import { MovedToast, type LastMove } from './moved-toast';
@@ -54,7 +56,7 @@ export function WeekPage({ week, stylistId, stylists }: Props) {
         subtitle={
           <>
             <p className="text-lg font-bold text-ink">
-              {formatLocalDate(week.from)} – {formatLocalDate(shiftLocalDate(week.from, 6))}
+              {formatDate(week.from, zonelessFormat)} – {formatDate(shiftLocalDate(week.from, 6), zonelessFormat)}
             </p>
             <TimeZoneNote timeZone={week.timeZone} date={week.from} />
           </>

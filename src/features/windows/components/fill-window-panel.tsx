@@ -2,7 +2,8 @@ import { useState } from 'react';
 import type { HandsFreeWindowView } from '../../../../shared/schemas/window.schemas';
 import { Button } from '../../../components/ui/button';
 import { FormAlert } from '../../../components/ui/form-alert';
-import { formatTime } from '../../../lib/time';
+import { formatTime } from '../../../../shared/format/date-time';
+import { formatFor } from '../../../../shared/format/locale';
 import { useIdempotencyKeys } from '../../../lib/use-idempotency-keys';
 import { useFillWindow, useOfferWindow } from '../api/window-mutations';
 import { StandbyOffer } from './standby-offer';
@@ -20,7 +21,7 @@ export function FillWindowPanel({ window: win, timeZone, onDone }: Props) {
   const keys = useIdempotencyKeys();
   const fit = win.fits.find((f) => f.serviceId === fitId);
   const wanting = win.standby.filter((s) => s.serviceIds.includes(fitId));
-  const at = formatTime(win.start, timeZone);
+  const at = formatTime(win.start, formatFor(timeZone));
   // The server books the earliest free start inside the window, so a fit need not start at its first minute.
   const latestStart = fit ? new Date(Date.parse(win.end) - fit.minutes * 60_000).toISOString() : win.start;
   const base = { stylistId: win.stylistId, serviceId: fitId, start: win.start };

@@ -1,5 +1,6 @@
 import type { SentOffer } from '../../../../shared/schemas/window.schemas';
-import { formatTime } from '../../../lib/time';
+import { formatTime } from '../../../../shared/format/date-time';
+import { formatFor } from '../../../../shared/format/locale';
 
 /** What became of an offer, in the staff's words (the client's offer page has its own). */
 export const offerOutcome: Record<SentOffer['status'], string> = {
@@ -18,7 +19,7 @@ export function SentOffers({ offers, timeZone, label }: Props) {
     <ul aria-label={label} className="flex flex-col gap-1 text-sm">
       {offers.map((o) => (
         <li key={`${o.stylistId}-${o.start}-${o.clientName}`}>
-          <span className="font-bold">{o.clientName}</span> · {o.serviceName} at <span className="tabular">{formatTime(o.start, timeZone)}</span>:{' '}
+          <span className="font-bold">{o.clientName}</span> · {o.serviceName} at <span className="tabular">{formatTime(o.start, formatFor(timeZone))}</span>:{' '}
           <span className={o.status === 'offered' ? 'font-bold' : undefined}>{offerOutcome[o.status]}</span>
         </li>
       ))}

@@ -1,7 +1,8 @@
 import { useId, useState } from 'react';
 import type { HandsFreeWindowView } from '../../../../shared/schemas/window.schemas';
 import { Button } from '../../../components/ui/button';
-import { formatTimeRange } from '../../../lib/time';
+import { formatRange } from '../../../../shared/format/date-time';
+import { formatFor } from '../../../../shared/format/locale';
 import { FillWindowPanel } from './fill-window-panel';
 import { SentOffers } from './sent-offers';
 
@@ -11,7 +12,7 @@ type Props = { window: HandsFreeWindowView; timeZone: string; stylistName?: stri
 export function WindowCard({ window: win, timeZone, stylistName, onDone }: Props) {
   const [open, setOpen] = useState(false);
   const panelId = useId();
-  const times = formatTimeRange(win.start, win.end, timeZone);
+  const times = formatRange(win.start, win.end, formatFor(timeZone));
   return (
     <article aria-label={`Hands free ${win.minutes} min, ${times}`} className="flex flex-col gap-3 rounded-2xl border-2 border-dashed border-sage bg-white p-4">
       <div className="flex flex-wrap items-start justify-between gap-2">

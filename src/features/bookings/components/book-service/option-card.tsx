@@ -2,14 +2,16 @@ import type { BookingOption } from '../../../../../shared/schemas/booking.schema
 import { Button } from '../../../../components/ui/button';
 import { StepStrip } from '../../../../components/ui/step-strip';
 import { sittingLabel } from '../../../../lib/booking-labels';
-import { formatDay, formatMinutes, formatTimeRange } from '../../../../lib/time';
+import { formatMinutes } from '../../../../lib/time';
+import { formatDate, formatRange } from '../../../../../shared/format/date-time';
+import { formatFor } from '../../../../../shared/format/locale';
 
 type Props = { option: BookingOption; timeZone: string; busy: boolean; disabled: boolean; onBook: () => void };
 
 /** One way to book the service: who, each sitting's day and times, and what it costs in chair and hands-free time. */
 export function OptionCard({ option, timeZone, busy, disabled, onBook }: Props) {
   const first = option.sittings[0];
-  const summary = first ? `${formatDay(first.start, timeZone)}, ${formatTimeRange(first.start, first.end, timeZone)}` : '';
+  const summary = first ? `${formatDate(first.start, formatFor(timeZone), { width: 'short' })}, ${formatRange(first.start, first.end, formatFor(timeZone))}` : '';
   return (
     <article aria-label={`${option.stylistName}, from ${summary}`} className="flex flex-col gap-3 rounded-2xl bg-white p-4 shadow-sm ring-1 ring-ink/15">
       <h3 className="text-lg font-bold">{option.stylistName}</h3>
@@ -17,9 +19,9 @@ export function OptionCard({ option, timeZone, busy, disabled, onBook }: Props) 
         {option.sittings.map((sitting, i) => (
           <li key={sitting.start} className="flex flex-col gap-1">
             {option.sittings.length > 1 && <span className="text-sm font-bold">{sittingLabel(i + 1, option.sittings.length)}</span>}
-            <span>{formatDay(sitting.start, timeZone)}</span>
+            <span>{formatDate(sitting.start, formatFor(timeZone), { width: 'short' })}</span>
             <span className="tabular">
-              {formatTimeRange(sitting.start, sitting.end, timeZone)} · {sitting.chairName}
+              {formatRange(sitting.start, sitting.end, formatFor(timeZone))} · {sitting.chairName}
             </span>
             <StepStrip steps={sitting.steps} timeZone={timeZone} />
           </li>

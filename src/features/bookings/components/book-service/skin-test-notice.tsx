@@ -1,7 +1,9 @@
 import type { SkinTestCheck } from '../../../../../shared/schemas/booking.schemas';
 import { Button } from '../../../../components/ui/button';
 import { Notice } from '../../../../components/ui/notice';
-import { formatDay, formatTime, localDateOf } from '../../../../lib/time';
+import { formatDate, formatTime } from '../../../../../shared/format/date-time';
+import { formatFor } from '../../../../../shared/format/locale';
+import { localDateOf } from '../../../../../shared/time/salon-time';
 
 type Props = { check: SkinTestCheck; timeZone: string; earliestDate: string; onBookSkinTest: (() => void) | null };
 
@@ -10,7 +12,7 @@ export function SkinTestNotice({ check, timeZone, earliestDate, onBookSkinTest }
   if (!check.required) return null;
   // It limits the options only when it allows a first start later than the asked date.
   const limits = check.ok && check.earliestAllowed !== null && localDateOf(check.earliestAllowed, timeZone) > earliestDate;
-  const from = check.earliestAllowed ? `${formatDay(check.earliestAllowed, timeZone)}, ${formatTime(check.earliestAllowed, timeZone)}` : null;
+  const from = check.earliestAllowed ? `${formatDate(check.earliestAllowed, formatFor(timeZone), { width: 'short' })}, ${formatTime(check.earliestAllowed, formatFor(timeZone))}` : null;
   return (
     <Notice
       tone={check.ok && !limits ? 'info' : 'caution'}

@@ -1,7 +1,8 @@
 import { useQuery } from '@tanstack/react-query';
 import { LoadingState } from '../../../../components/ui/loading-state';
 import { SectionCard } from '../../../../components/ui/section-card';
-import { formatDay, formatTime } from '../../../../lib/time';
+import { formatDate, formatTime } from '../../../../../shared/format/date-time';
+import { formatFor } from '../../../../../shared/format/locale';
 import { bookingQueries } from '../../api/booking-queries';
 import { describeBookingChange, entryTitle } from '../../history-change';
 
@@ -10,7 +11,7 @@ type Props = { bookingId: string; timeZone: string; currency: string; stylists: 
 /** Every change to the booking: who, when, what, and each changed value before → after, in the app's words. */
 export function BookingHistory({ bookingId, timeZone, currency, stylists }: Props) {
   const history = useQuery(bookingQueries.history(bookingId));
-  const when = (iso: string) => `${formatDay(iso, timeZone)}, ${formatTime(iso, timeZone)}`;
+  const when = (iso: string) => `${formatDate(iso, formatFor(timeZone), { width: 'short' })}, ${formatTime(iso, formatFor(timeZone))}`;
   const words = { timeZone, currency, stylistName: (id: string) => stylists.find((s) => s.id === id)?.name };
   return (
     <SectionCard title="History">

@@ -5,8 +5,10 @@ import { SkinTestFlag } from '../../../../components/ui/skin-test-flag';
 import { SectionCard } from '../../../../components/ui/section-card';
 import { StepStrip } from '../../../../components/ui/step-strip';
 import { paths } from '../../../../config/paths';
-import { formatMoney, sittingLabel, stepKindLabels } from '../../../../lib/booking-labels';
-import { formatDay, formatTimeRange } from '../../../../lib/time';
+import { sittingLabel, stepKindLabels } from '../../../../lib/booking-labels';
+import { formatDate, formatRange } from '../../../../../shared/format/date-time';
+import { formatFor } from '../../../../../shared/format/locale';
+import { formatMoney } from '../../../../../shared/money/money';
 
 type Props = { booking: BookingView; timeZone: string; currency: string };
 
@@ -48,14 +50,14 @@ export function BookingSummary({ booking, timeZone, currency }: Props) {
         {booking.sittings.map((sitting) => (
           <li key={sitting.seq} className="flex flex-col gap-2 rounded-lg bg-linen p-3">
             <h3 className="font-bold">
-              {sittingLabel(sitting.seq, sitting.of) ?? 'Sitting'}: {formatDay(sitting.start, timeZone)},{' '}
-              <span className="tabular">{formatTimeRange(sitting.start, sitting.end, timeZone)}</span> · {sitting.chairName}
+              {sittingLabel(sitting.seq, sitting.of) ?? 'Sitting'}: {formatDate(sitting.start, formatFor(timeZone), { width: 'short' })},{' '}
+              <span className="tabular">{formatRange(sitting.start, sitting.end, formatFor(timeZone))}</span> · {sitting.chairName}
             </h3>
             <StepStrip steps={sitting.steps} timeZone={timeZone} />
             <ol aria-hidden="true" className="text-sm">
               {sitting.steps.map((step) => (
                 <li key={step.start} className="tabular">
-                  {formatTimeRange(step.start, step.end, timeZone)} — {stepKindLabels[step.kind]}: {step.label}
+                  {formatRange(step.start, step.end, formatFor(timeZone))} — {stepKindLabels[step.kind]}: {step.label}
                   {step.basinName && ` · ${step.basinName}`}
                   {step.minMinutes !== null && step.maxMinutes !== null && ` (${step.minMinutes}–${step.maxMinutes} min)`}
                 </li>

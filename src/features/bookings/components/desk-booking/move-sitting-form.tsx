@@ -11,13 +11,14 @@ import { TextField } from '../../../../components/ui/text-field';
 import { problemText } from '../../../../lib/api-error';
 import { sittingLabel } from '../../../../lib/booking-labels';
 import { dayAfterLast, freeTimeKey, type FreeTime } from '../../../../lib/free-times';
-import { formatDay, formatTime, formatTimeRange } from '../../../../lib/time';
+import { formatDate, formatRange, formatTime } from '../../../../../shared/format/date-time';
+import { formatFor } from '../../../../../shared/format/locale';
 import { bookingQueries } from '../../api/booking-queries';
 import { useMoveSitting } from '../../api/booking-mutations';
 
 type Props = { booking: BookingView; timeZone: string; stylists: { id: string; name: string }[] };
 
-const when = (iso: string, zone: string) => `${formatDay(iso, zone)}, ${formatTime(iso, zone)}`;
+const when = (iso: string, zone: string) => `${formatDate(iso, formatFor(zone), { width: 'short' })}, ${formatTime(iso, formatFor(zone))}`;
 
 /**
  * Move one sitting: the engine's free times for it (with the same stylist, or another for a one-sitting booking),
@@ -85,7 +86,7 @@ export function MoveSittingForm({ booking, timeZone, stylists }: Props) {
           />
         </div>
         <p className="text-sm">
-          Now: {formatDay(sitting.start, timeZone)}, <span className="tabular">{formatTimeRange(sitting.start, sitting.end, timeZone)}</span> · {sitting.chairName}
+          Now: {formatDate(sitting.start, formatFor(timeZone), { width: 'short' })}, <span className="tabular">{formatRange(sitting.start, sitting.end, formatFor(timeZone))}</span> · {sitting.chairName}
           {!oneSitting && ' · all sittings stay with one stylist'}
         </p>
         {times.isPending && <LoadingState label="Finding free times…" />}
