@@ -1,18 +1,11 @@
 /** API paths shared by the server routes and the client's api-client, so neither side spells them twice. */
 export const apiPaths = {
-  salon: '/api/salon',
   deskDay: '/api/desk/day',
   stylistDay: '/api/stylist/day',
   myBookings: '/api/me/bookings',
-  ownerOverview: '/api/owner/overview',
-  ownerUtilisation: '/api/owner/utilisation',
-  ownerUtilisationScenario: '/api/owner/utilisation/scenario',
-  deskUtilisation: '/api/desk/utilisation',
   clients: '/api/clients',
   client: (id: string) => `/api/clients/${id}`,
   booking: (id: string) => `/api/bookings/${id}`,
-  devMailbox: '/api/dev/mailbox',
-  devSms: '/api/dev/sms',
   deskWeek: '/api/desk/week',
   services: '/api/services',
   stylists: '/api/stylists',
