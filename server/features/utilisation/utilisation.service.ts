@@ -5,7 +5,8 @@ import type { DeskUtilisation, OwnerUtilisation, UtilisationQuery } from '../../
 import type { Scenario } from '../../../shared/engine/engine';
 import { todayIn } from '../bookings/day-view.service';
 import { findSalon } from '../salon/salon.repository';
-import { cancelledAt, listPeriodSittings, salonStaffNames } from './utilisation-bookings.repository';
+import { salonStaffNames } from '../setup/staff-setup.repository';
+import { cancelledAt, listPeriodSittings } from './utilisation-bookings.repository';
 import { bookingFigures } from './utilisation-figures';
 import { measurePeriod, periodScenario } from './utilisation-occupancy';
 import { chunksOf, resolvePeriod, type Period } from './utilisation-period';
