@@ -6,7 +6,8 @@ import helmet from 'helmet';
 import cookieParser from 'cookie-parser';
 import { OpenAPIRegistry, OpenApiGeneratorV3 } from '@asteasolutions/zod-to-openapi';
 import type { AppDeps } from './app-deps';
-import type { RouteTable } from './lib/api-route';
+import { apiRoute, type RouteTable } from './lib/api-route';
+import { appApi } from '../shared/api/app.api';
 import { apiNotFound, errorHandler } from './lib/error-handler';
 import { installSessions } from './auth/sessions';
 import { installCsrf } from './auth/csrf';
@@ -96,11 +97,11 @@ export function createApp(deps: Omit<AppDeps, 'table' | 'storage' | 'readCache'>
   ]) {
     register(full);
   }
-  const openapi = new OpenApiGeneratorV3(table.registry.definitions).generateDocument({
-    openapi: '3.0.3',
-    info: { title: 'Dwell API', version: '1' },
-  });
-  table.router.get('/api/openapi.json', (_req, res) => void res.json(openapi));
+  // Generated at the first request, when every route (this one too) is registered.
+  let openapi: unknown;
+  apiRoute(table, appApi.openapi, async () =>
+    (openapi ??= new OpenApiGeneratorV3(table.registry.definitions).generateDocument({ openapi: '3.0.3', info: { title: 'Dwell API', version: '1' } })),
+  );
   app.use(table.router);
   app.use('/api', apiNotFound);
 

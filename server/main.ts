@@ -6,7 +6,7 @@ import { createApp } from './app';
 import { FAKE_TWILIO, startOutsideServices } from './services';
 import { startJobQueue } from './jobs/job-queue';
 import { appJobs } from './jobs/app-jobs';
-import { inboundSmsWebhookPath } from '../shared/schemas/inbound-sms.schemas';
+import { messagesApi } from '../shared/api/messages.api';
 
 export interface RunningServer {
   outside: Awaited<ReturnType<typeof startOutsideServices>>;
@@ -26,7 +26,7 @@ export async function startServer(config: Config = loadConfig()): Promise<Runnin
   const { port } = server.address() as AddressInfo;
   const url = `http://${config.host}:${port}`;
   // The SMS fake delivers simulated inbound texts (STOP/START) to this server's webhook, signed as the provider would.
-  outside.smsFake?.setInboundWebhook(`${url}${inboundSmsWebhookPath}`, FAKE_TWILIO.authToken);
+  outside.smsFake?.setInboundWebhook(`${url}${messagesApi.inboundSms.path}`, FAKE_TWILIO.authToken);
   return {
     url,
     app,

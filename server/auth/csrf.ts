@@ -1,7 +1,7 @@
 import type { Express } from 'express';
 import { doubleCsrf } from 'csrf-csrf';
 import type { Config } from '../config';
-import { CsrfResponseSchema } from '../../shared/schemas/auth.schemas';
+import { sessionApi } from '../../shared/api/session.api';
 import { apiRoute, type RouteTable } from '../lib/api-route';
 
 /**
@@ -19,13 +19,9 @@ export function installCsrf(app: Express, config: Config, table: RouteTable) {
     errorConfig: { statusCode: 403, code: 'EBADCSRFTOKEN', message: 'Invalid CSRF token' },
   });
   app.use('/api', doubleCsrfProtection);
-  apiRoute(
-    table,
-    { method: 'get', path: '/api/csrf', access: 'public', summary: 'A CSRF token for writes', response: CsrfResponseSchema },
-    async ({ req, res }) => {
-      // An anonymous session must be saved for its id (what the token is bound to) to stay the same.
-      req.session.csrfReady = true;
-      return { token: generateCsrfToken(req, res, { overwrite: true }) };
-    },
-  );
+  apiRoute(table, sessionApi.csrf, async ({ req, res }) => {
+    // An anonymous session must be saved for its id (what the token is bound to) to stay the same.
+    req.session.csrfReady = true;
+    return { token: generateCsrfToken(req, res, { overwrite: true }) };
+  });
 }

@@ -1,10 +1,10 @@
-import type { Express, RequestHandler } from 'express';
+import type { Express, Request, RequestHandler } from 'express';
 import session from 'express-session';
 import connectPgSimple from 'connect-pg-simple';
-import passport from 'passport';
 import type pg from 'pg';
 import type { Config } from '../config';
 import type { Db } from '../db/database';
+import type { SessionUser } from '../../shared/schemas/auth.schemas';
 import { findSessionUser } from '../features/session/users.repository';
 import { AppError } from '../lib/app-error';
 
@@ -12,6 +12,18 @@ declare module 'express-session' {
   interface SessionData {
     startedAt?: number;
     csrfReady?: boolean;
+    /** The signed-in user's id. Stored sessions keep it under this name, so a release does not sign anyone out. */
+    passport?: { user?: string };
+  }
+}
+
+declare global {
+  // eslint-disable-next-line @typescript-eslint/no-namespace -- Express's own way to add to its Request
+  namespace Express {
+    interface Request {
+      /** The signed-in user, read from the session on every request; absent when nobody is signed in. */
+      user?: SessionUser;
+    }
   }
 }
 
@@ -54,13 +66,40 @@ export function installSessions(app: Express, deps: { pool: pg.Pool; db: Db; con
     }),
   );
   app.use(absoluteTimeout(deps.config.session.absoluteHours));
-  passport.serializeUser((user, done) => done(null, (user as { id: string }).id));
-  passport.deserializeUser((id: string, done) => {
-    findSessionUser(deps.db, id)
-      .then((user) => done(null, user ?? false))
-      .catch(done);
-  });
-  app.use(passport.session());
+  app.use(loadSessionUser(deps.db));
+}
+
+/** Puts the session's user on `req.user`; a session whose account was deactivated or removed is signed out. */
+const loadSessionUser =
+  (db: Db): RequestHandler =>
+  (req, _res, next) => {
+    const id = req.session.passport?.user;
+    if (!id) return next();
+    findSessionUser(db, id).then((user) => {
+      if (user) req.user = user;
+      else delete req.session.passport!.user;
+      next();
+    }, next);
+  };
+
+const settled = (resolve: () => void, reject: (err: unknown) => void) => (err: unknown) => (err ? reject(err) : resolve());
+const regenerate = (req: Request) => new Promise<void>((resolve, reject) => req.session.regenerate(settled(resolve, reject)));
+const save = (req: Request) => new Promise<void>((resolve, reject) => req.session.save(settled(resolve, reject)));
+
+/** Signs `user` in on a new session id, so an id known before sign-in is worth nothing after it (no fixation). */
+export async function startSession(req: Request, user: SessionUser): Promise<void> {
+  await regenerate(req);
+  req.session.passport = { user: user.id };
+  req.session.startedAt = Date.now();
+  // Stored before the answer goes out: a sign-in the store did not keep must fail, not look signed in.
+  await save(req);
+  req.user = user;
+}
+
+/** Signs out: the stored session is destroyed and the request goes on with a new, empty one. */
+export async function endSession(req: Request): Promise<void> {
+  await regenerate(req);
+  delete req.user;
 }
 
 const TOUCH_EVERY_MS = 60_000;

@@ -1,5 +1,5 @@
 import type { ZodType } from 'zod';
-import type { Request, Response, Router } from 'express';
+import type { Request, RequestHandler, Response, Router } from 'express';
 import type { OpenAPIRegistry } from '@asteasolutions/zod-to-openapi';
 import { describeAccess, type Access, type Endpoint, type Method, type Parsed, openApiPath } from '../../shared/api/endpoint';
 import type { SessionUser } from '../../shared/schemas/auth.schemas';
@@ -37,13 +37,19 @@ export interface RouteTable {
 /**
  * Serves one endpoint of `shared/api/`: access check, zod parsing of body/query/params, its OpenAPI
  * entry, and (in development and tests) a check of the answer against the endpoint's response schema.
- * The handler returns the response body; thrown errors reach the error middleware.
+ * The handler returns the response body; thrown errors reach the error middleware. `before` runs after the
+ * access check and before parsing (a rate limit, a form-body parser).
  */
-export function apiRoute<const E extends Endpoint>(table: RouteTable, spec: E, handler: (ctx: RouteContext<E>) => Promise<unknown>): void {
+export function apiRoute<const E extends Endpoint>(
+  table: RouteTable,
+  spec: E,
+  handler: (ctx: RouteContext<E>) => Promise<unknown>,
+  before: RequestHandler[] = [],
+): void {
   const status = spec.status ?? 200;
   table.records.push({ method: spec.method, path: spec.path, access: spec.access, endpoint: spec });
   register(table.registry, spec, status);
-  table.router[spec.method](spec.path, requireAccess(spec.access), async (req: Request, res: Response) => {
+  table.router[spec.method](spec.path, requireAccess(spec.access), ...before, async (req: Request, res: Response) => {
     assertStorable({ params: req.params, query: req.query, body: req.body });
     const ctx = {
       body: spec.body ? spec.body.parse(req.body ?? {}) : undefined,

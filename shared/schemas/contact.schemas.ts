@@ -90,5 +90,3 @@ export const MyPreferencesSchema = z.object({
   smsStoppedAt: z.string().nullable(),
 });
 export type MyPreferences = z.infer<typeof MyPreferencesSchema>;
-
-export const myPreferencesPath = '/api/me/preferences';

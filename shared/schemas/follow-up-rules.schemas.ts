@@ -2,9 +2,6 @@ import { z } from 'zod';
 import { IdSchema } from './common.schemas';
 import { followUpRuleProblem } from '../messages/follow-up-times';
 
-export const followUpRulesPath = '/api/owner/follow-up-rules';
-export const followUpRulePath = (id: string) => `${followUpRulesPath}/${id}`;
-
 /** An RRULE (RFC 5545) a follow-up can use: it ends (COUNT or UNTIL) and has no DTSTART of its own. */
 export const FollowUpRruleSchema = z
   .string()

@@ -1,11 +1,6 @@
 import { z } from 'zod';
 import { PhoneSchema } from './contact.schemas';
 
-/** Where the SMS provider posts texts sent to the salon's number (outside /api: no session, no CSRF). */
-export const inboundSmsWebhookPath = '/webhooks/sms';
-/** Demo/dev: the desk makes the SMS fake deliver a text "from" a client's phone. */
-export const simulateInboundSmsPath = '/api/dev/sms/inbound';
-
 /** The provider's form post; it carries many more fields (AccountSid, NumMedia…), which are kept but unused. */
 export const InboundSmsSchema = z.looseObject({
   From: z.string().min(1).max(40),
@@ -13,6 +8,7 @@ export const InboundSmsSchema = z.looseObject({
   MessageSid: z.string().min(1).max(64),
 });
 
+/** Demo/dev: the desk makes the SMS fake deliver a text "from" a client's phone. */
 export const SimulateInboundSmsSchema = z.object({ from: PhoneSchema, body: z.string().trim().min(1, 'Enter the text').max(160) }).strict();
 export const SimulateInboundSmsResultSchema = z.object({ webhookStatus: z.number().int() });
 

@@ -1,8 +1,5 @@
 import { z } from 'zod';
 
-/** The send log as the Outbox shows it (owner and desk). */
-export const messagesPath = '/api/messages';
-
 export const MessageStatusSchema = z.enum(['queued', 'sending', 'sent', 'failed', 'dropped']);
 export type MessageStatus = z.infer<typeof MessageStatusSchema>;
 

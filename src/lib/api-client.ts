@@ -1,9 +1,8 @@
 import { queryOptions } from '@tanstack/react-query';
 import type { z } from 'zod';
-import { apiPaths } from '../../shared/api/api-paths';
 import { urlOf, type Answer, type CallInput, type Endpoint } from '../../shared/api/endpoint';
 import { ApiErrorBodySchema } from '../../shared/api/error.schemas';
-import { CsrfResponseSchema } from '../../shared/schemas/auth.schemas';
+import { sessionApi } from '../../shared/api/session.api';
 import { ApiError } from './api-error';
 
 /*
@@ -35,9 +34,8 @@ async function send(method: 'GET' | WriteMethod, path: string, body?: unknown): 
 /** The session's CSRF token, fetched once; also used by upload-file.ts for multipart writes. */
 export async function getCsrfToken(): Promise<string> {
   if (csrfToken) return csrfToken;
-  const response = await send('GET', apiPaths.csrf);
-  if (!response.ok) throw await toApiError(response);
-  csrfToken = CsrfResponseSchema.parse(await response.json()).token;
+  const response = await send('GET', sessionApi.csrf.path);
+  csrfToken = (await readBody(response, sessionApi.csrf.response)).token;
   return csrfToken;
 }
 

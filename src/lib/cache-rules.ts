@@ -1,11 +1,16 @@
 import type { QueryClient } from '@tanstack/react-query';
 import type { Answer, Endpoint } from '../../shared/api/endpoint';
 import { bookingsApi } from '../../shared/api/bookings.api';
+import { followUpRulesApi } from '../../shared/api/follow-up-rules.api';
+import { messagesApi } from '../../shared/api/messages.api';
 import { onlineBookingApi } from '../../shared/api/online-booking.api';
 import { photosApi } from '../../shared/api/photos.api';
+import { sessionApi } from '../../shared/api/session.api';
 import { standbyApi } from '../../shared/api/standby.api';
 import { offersApi, windowsApi } from '../../shared/api/windows.api';
+import type { SessionUser } from '../../shared/schemas/auth.schemas';
 import type { BookingView } from '../../shared/schemas/booking-view.schemas';
+import type { MyPreferences } from '../../shared/schemas/contact.schemas';
 import type { Hold } from '../../shared/schemas/online-booking.schemas';
 import { apiKey } from './api-client';
 
@@ -96,3 +101,28 @@ export const offerTaken = (queryClient: QueryClient, token: string, offer: Answe
 
 /** Taking an offer was refused (gone or run out meanwhile): read the offer's real state. */
 export const offerRefused = (queryClient: QueryClient, token: string) => queryClient.invalidateQueries({ queryKey: apiKey(offersApi.view, { params: { token } }) });
+
+// Salon running: the session, the salon's set-up, follow-up rules and messages.
+
+/** Someone signed in, up or out: nothing cached for the previous person may show; the session answer is known. */
+export function sessionStarted(queryClient: QueryClient, user: SessionUser | null): void {
+  queryClient.removeQueries({ predicate: (query) => query.meta?.isSession !== true });
+  queryClient.setQueryData(apiKey(sessionApi.current), user);
+}
+
+/**
+ * The owner changed the set-up. How the salon works feeds the menu, the stylists, free times and the book
+ * itself, so every cached answer is refreshed rather than guessing which ones changed.
+ */
+export const setupChanged = (queryClient: QueryClient) => queryClient.invalidateQueries();
+
+/** A follow-up rule was added, changed or removed. */
+export const followUpRulesChanged = (queryClient: QueryClient) => refreshEndpoints(queryClient, [followUpRulesApi.list]);
+
+/** A text reached the salon's number (the demo's simulated one): STOP/START changes clients, their messages and the send log. */
+export const inboundSmsReceived = (queryClient: QueryClient) => queryClient.invalidateQueries();
+
+/** A client saved how the salon reaches them; the answer is the saved preferences. */
+export function myPreferencesSaved(queryClient: QueryClient, saved: MyPreferences): void {
+  queryClient.setQueryData(apiKey(messagesApi.myPreferences), saved);
+}

@@ -2,8 +2,8 @@ import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO_PASSWORD } from '../../server/demo/demo-catalogue';
 import { DateTime } from 'luxon';
-import { setupPaths } from '../../shared/api/setup-paths';
-import { myPreferencesPath } from '../../shared/schemas/contact.schemas';
+import { setupPaths } from '../setup/setup-paths';
+import { messagesApi } from '../../shared/api/messages.api';
 import { makeImage } from '../factories/image';
 import { apiWrite, baseUrl, connectBrowser, expectAccessible, screenshot, signedInPage, signInThroughPage } from '../setup/browser';
 
@@ -190,8 +190,8 @@ describe('a signed-in client at a desk-size screen', () => {
       const salon = await (await page.request.get(`${baseUrl()}/api/public/salons/kestrel-and-pine`)).json();
       const consultation = salon.services.find((s: { name: string }) => s.name === 'Colour consultation');
       // Texts and e-mail for this client (the demo gives some clients e-mail only, depending on the order it makes them in).
-      const prefs = await (await page.request.get(`${baseUrl()}${myPreferencesPath}`)).json();
-      expect(await apiWrite(page, 'PUT', myPreferencesPath, { phone: prefs.phone, messageChannel: 'both', marketingOptIn: prefs.marketingOptIn })).toBe(200);
+      const prefs = await (await page.request.get(`${baseUrl()}${messagesApi.myPreferences.path}`)).json();
+      expect(await apiWrite(page, 'PUT', messagesApi.myPreferences.path, { phone: prefs.phone, messageChannel: 'both', marketingOptIn: prefs.marketingOptIn })).toBe(200);
       const bookPath = `${baseUrl()}/salon/kestrel-and-pine/book?service=${consultation.id}`;
 
       // A photo from before this booking.

@@ -4,7 +4,7 @@ import { insertSalon, type SalonFixture } from '../factories/salon';
 import { insertUser, type UserFixture } from '../factories/user';
 import { insertPlannedService, tonerPlan } from '../factories/service';
 import { futureWeekday } from '../setup/dates';
-import { setupPaths } from '../../shared/api/setup-paths';
+import { setupPaths } from '../setup/setup-paths';
 
 let t: TestApp;
 let salon: SalonFixture;

@@ -6,7 +6,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { anonymousAgent, signedInAgent, startTestApp, type TestApp } from '../setup/test-app';
 import { insertSalon } from '../factories/salon';
 import { insertUser } from '../factories/user';
-import { setupPaths } from '../../shared/api/setup-paths';
+import { setupPaths } from '../setup/setup-paths';
 
 let t: TestApp;
 let slug: string;

@@ -4,7 +4,7 @@ import { insertSalon, type SalonFixture } from '../factories/salon';
 import { insertUser, type UserFixture } from '../factories/user';
 import { insertNegativeSkinTest, insertPlannedService } from '../factories/service';
 import { futureWeekday, localIso } from '../setup/dates';
-import { setupPaths } from '../../shared/api/setup-paths';
+import { setupPaths } from '../setup/setup-paths';
 import type { PlannedStep, StepPlan } from '../../shared/schemas/step-plan.schemas';
 
 // Processing limits, counted from when the first section gets product (common practice, from memory): lightener

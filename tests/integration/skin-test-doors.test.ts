@@ -5,7 +5,7 @@ import { insertUser, type UserFixture } from '../factories/user';
 import { insertPlannedService } from '../factories/service';
 import { futureWeekday, localIso } from '../setup/dates';
 import { apiPaths } from '../../shared/api/api-paths';
-import { setupPaths } from '../../shared/api/setup-paths';
+import { setupPaths } from '../setup/setup-paths';
 import type { StepPlan } from '../../shared/schemas/step-plan.schemas';
 import { emptyHairHistory } from '../../shared/schemas/hair-history.schemas';
 

@@ -1,7 +1,7 @@
 import type { Kysely } from 'kysely';
 import type { Database } from '../../db/schema';
 import type { Db } from '../../db/database';
-import { insertPlanned, type PlannedMessage } from './plan-messages.service';
+import { findClientReach, insertPlanned, type NewMessage, type PlannedMessage } from './messages.repository';
 import { sendOnTime, type Senders } from './send-message.job';
 
 /** A one-off message to a client outside a booking's plan (standby and window offers). */
@@ -26,11 +26,11 @@ export async function sendClientMessage(db: Kysely<Database>, senders: Senders, 
 }
 
 export async function planClientMessage(db: Db, m: ClientMessage, now: Date): Promise<PlannedMessage[]> {
-  const c = await db.selectFrom('clients').select(['email', 'phone', 'message_channel', 'sms_stopped_at']).where('id', '=', m.clientId).executeTakeFirst();
+  const c = await findClientReach(db, m.clientId);
   if (!c) return [];
-  const base = { salon_id: m.salonId, client_id: m.clientId, kind: m.kind, send_at: now };
-  const rows = [];
-  if (c.email && c.message_channel !== 'sms') rows.push({ ...base, channel: 'email' as const, to_address: c.email, subject: m.subject, body: m.email, dedupe_key: `${m.key}:email` });
-  if (c.phone && c.message_channel !== 'email' && !c.sms_stopped_at) rows.push({ ...base, channel: 'sms' as const, to_address: c.phone, body: m.sms, dedupe_key: `${m.key}:sms` });
+  const base = { salonId: m.salonId, clientId: m.clientId, kind: m.kind, sendAt: now };
+  const rows: NewMessage[] = [];
+  if (c.email && c.messageChannel !== 'sms') rows.push({ ...base, channel: 'email', toAddress: c.email, subject: m.subject, body: m.email, dedupeKey: `${m.key}:email` });
+  if (c.phone && c.messageChannel !== 'email' && !c.smsStoppedAt) rows.push({ ...base, channel: 'sms', toAddress: c.phone, body: m.sms, dedupeKey: `${m.key}:sms` });
   return insertPlanned(db, rows);
 }

@@ -1,10 +1,11 @@
 import type { Db } from '../../db/database';
+import type { FollowUpRule } from '../../../shared/schemas/follow-up-rules.schemas';
 import { AppError, notFound } from '../../lib/app-error';
 import { findService } from '../services/services.repository';
-import { bookingForMessages } from './messages.repository';
-import { followUpRows, insertPlanned } from './plan-messages.service';
+import { bookingForMessages, insertPlanned } from './messages.repository';
+import { followUpRows } from './plan-messages.service';
 import {
-  bookingsForFollowUps, deleteFollowUpRule, dropQueuedFollowUps, findFollowUpRule, insertFollowUpRule, updateFollowUpRule, type FollowUpRuleInput,
+  bookingsForFollowUps, deleteFollowUpRule, dropQueuedFollowUps, findFollowUpRule, insertFollowUpRule, listFollowUpRules, updateFollowUpRule, type FollowUpRuleInput,
 } from './follow-up-rules.repository';
 
 /** Bookings whose last sitting ended within this many days still get a new or edited rule's follow-ups. */
@@ -26,21 +27,31 @@ async function planRule(db: Db, ruleId: string, serviceId: string, now: Date): P
   }
 }
 
-export async function createFollowUpRule(db: Db, salonId: string, input: FollowUpRuleInput, now: Date): Promise<string> {
-  return db.transaction().execute(async (trx) => {
+async function oneRule(db: Db, salonId: string, id: string): Promise<FollowUpRule> {
+  return (await findFollowUpRule(db, salonId, id)) ?? Promise.reject(notFound('That follow-up rule'));
+}
+
+export async function followUpRules(db: Db, salonId: string): Promise<{ rules: FollowUpRule[] }> {
+  return { rules: await listFollowUpRules(db, salonId) };
+}
+
+export async function createFollowUpRule(db: Db, salonId: string, input: FollowUpRuleInput, now: Date): Promise<FollowUpRule> {
+  const id = await db.transaction().execute(async (trx) => {
     await assertService(trx, salonId, input.serviceId);
     const id = await insertFollowUpRule(trx, salonId, input);
     await planRule(trx, id, input.serviceId, now);
     return id;
   });
+  return oneRule(db, salonId, id);
 }
 
-export async function editFollowUpRule(db: Db, salonId: string, id: string, input: FollowUpRuleInput, now: Date): Promise<void> {
+export async function editFollowUpRule(db: Db, salonId: string, id: string, input: FollowUpRuleInput, now: Date): Promise<FollowUpRule> {
   await db.transaction().execute(async (trx) => {
     await assertService(trx, salonId, input.serviceId);
     if (!(await updateFollowUpRule(trx, salonId, id, input))) throw notFound('That follow-up rule');
     await planRule(trx, id, input.serviceId, now);
   });
+  return oneRule(db, salonId, id);
 }
 
 export async function removeFollowUpRule(db: Db, salonId: string, id: string): Promise<void> {

@@ -1,25 +1,22 @@
 import express from 'express';
 import twilio from 'twilio';
-import { InboundSmsSchema, SimulateInboundSmsResultSchema, SimulateInboundSmsSchema, inboundSmsWebhookPath, simulateInboundSmsPath } from '../../../shared/schemas/inbound-sms.schemas';
+import { messagesApi } from '../../../shared/api/messages.api';
 import type { AppDeps } from '../../app-deps';
-import { DESK } from '../../auth/require-access';
 import { apiRoute } from '../../lib/api-route';
-import { storedPhone } from '../../lib/stored-phone';
-import { salonCountry } from '../salon/salon.repository';
-import { AppError, notFound } from '../../lib/app-error';
+import { AppError } from '../../lib/app-error';
 import { FAKE_TWILIO } from '../../services';
-import { handleInboundSms } from './inbound-sms.service';
+import { handleInboundSms, simulateInboundSms } from './inbound-sms.service';
 
 /** The SMS provider's webhook for texts to the salon's number (STOP/START), and the demo's way to send one. */
 export function registerInboundSmsRoutes({ table, db, config, smsFake }: AppDeps): void {
   const authToken = config.twilio?.authToken ?? (config.useFakes ? FAKE_TWILIO.authToken : null);
-  table.router.use(inboundSmsWebhookPath, express.urlencoded({ extended: false, limit: '20kb' }));
+  const webhook = messagesApi.inboundSms;
   apiRoute(
     table,
-    { method: 'post', path: inboundSmsWebhookPath, access: 'public', summary: 'SMS provider webhook: a text to the salon (STOP turns SMS off, START on)', body: InboundSmsSchema, bodyType: 'form' },
+    webhook,
     async ({ req, res, body }) => {
       // Only the provider knows the auth token: a request it did not sign is refused before anything changes.
-      const url = config.publicUrl ? `${config.publicUrl}${inboundSmsWebhookPath}` : `${req.protocol}://${req.get('host')}${req.originalUrl}`;
+      const url = config.publicUrl ? `${config.publicUrl}${webhook.path}` : `${req.protocol}://${req.get('host')}${req.originalUrl}`;
       const signature = req.get('x-twilio-signature') ?? '';
       if (!authToken || !twilio.validateRequest(authToken, signature, url, req.body as Record<string, string>)) {
         throw new AppError('FORBIDDEN', 403, 'The request is not signed by the SMS provider.');
@@ -27,14 +24,7 @@ export function registerInboundSmsRoutes({ table, db, config, smsFake }: AppDeps
       await handleInboundSms(db, body, new Date());
       res.type('text/xml').send('<?xml version="1.0" encoding="UTF-8"?><Response></Response>');
     },
+    [express.urlencoded({ extended: false, limit: '20kb' })],
   );
-  apiRoute(
-    table,
-    { method: 'post', path: simulateInboundSmsPath, access: DESK, summary: 'Demo/dev: the SMS fake delivers a text from a phone to the webhook', body: SimulateInboundSmsSchema, response: SimulateInboundSmsResultSchema },
-    async ({ user, body }) => {
-      if (!smsFake) throw notFound('The demo SMS service');
-      const from = storedPhone(body.from, await salonCountry(db, user.salonId), 'from');
-      return { webhookStatus: await smsFake.simulateInbound(from, body.body) };
-    },
-  );
+  apiRoute(table, messagesApi.simulateInboundSms, async ({ user, body }) => simulateInboundSms(db, smsFake, user.salonId, body));
 }

@@ -1,9 +1,14 @@
 import type { z } from 'zod';
 import type { Db } from '../../db/database';
-import { START_WORDS, STOP_WORDS, type InboundSmsSchema } from '../../../shared/schemas/inbound-sms.schemas';
+import type { SmsFake } from '../../fakes/sms-fake';
+import { START_WORDS, STOP_WORDS, type InboundSmsSchema, type SimulateInboundSmsSchema } from '../../../shared/schemas/inbound-sms.schemas';
 import { toE164 } from '../../../shared/format/phone';
+import { notFound } from '../../lib/app-error';
+import { storedPhone } from '../../lib/stored-phone';
 import { setSmsStopped } from '../clients/clients.repository';
-import { insertPlanned, replanClientMessages } from './plan-messages.service';
+import { salonCountry } from '../salon/salon.repository';
+import { insertPlanned } from './messages.repository';
+import { replanClientMessages } from './plan-messages.service';
 import { stopReply } from './templates';
 
 /**
@@ -21,10 +26,17 @@ export async function handleInboundSms(db: Db, sms: z.infer<typeof InboundSmsSch
     for (const c of clients) await replanClientMessages(trx, c.id, now);
     if (clients.length > 0) {
       await insertPlanned(trx, [{
-        salon_id: clients[0].salonId, client_id: clients[0].id, kind: stop ? 'sms_stopped' : 'sms_started', channel: 'sms',
-        to_address: phone, body: stopReply(stop), send_at: now, dedupe_key: `inbound:${sms.MessageSid}`,
+        salonId: clients[0].salonId, clientId: clients[0].id, kind: stop ? 'sms_stopped' : 'sms_started', channel: 'sms',
+        toAddress: phone, body: stopReply(stop), sendAt: now, dedupeKey: `inbound:${sms.MessageSid}`,
       }]);
     }
     return stop ? 'stopped' : 'started';
   });
+}
+
+/** Demo/dev: the SMS fake delivers a text from a phone (read in the salon's country) to the webhook; answers the webhook's status. */
+export async function simulateInboundSms(db: Db, smsFake: SmsFake | null, salonId: string, sms: z.output<typeof SimulateInboundSmsSchema>): Promise<{ webhookStatus: number }> {
+  if (!smsFake) throw notFound('The demo SMS service');
+  const from = storedPhone(sms.from, await salonCountry(db, salonId), 'from');
+  return { webhookStatus: await smsFake.simulateInbound(from, sms.body) };
 }

@@ -1,7 +1,7 @@
 import { sql } from 'kysely';
 import type { Db } from '../../db/database';
 import type { StepPlan } from '../../../shared/schemas/step-plan.schemas';
-import type { MessageChannelChoice, MessageStatus } from '../../db/schema';
+import type { MessageAttachment, MessageChannelChoice, MessageStatus } from '../../db/schema';
 import type { BookingContext } from './templates';
 
 export interface BookingForMessages {
@@ -143,4 +143,83 @@ export async function firstMessageSends(db: Db, bookingId: string) {
 export async function salonQuietHours(db: Db, salonId: string): Promise<{ from: string; to: string }> {
   const row = await db.selectFrom('salons').select(['quiet_from', 'quiet_to']).where('id', '=', salonId).executeTakeFirstOrThrow();
   return { from: row.quiet_from.slice(0, 5), to: row.quiet_to.slice(0, 5) };
+}
+
+/** A message to add to the send log; the dedupe key makes planning it twice harmless. */
+export interface NewMessage {
+  salonId: string;
+  bookingId?: string | null;
+  /** The booking's version it was planned for; a move drops what older versions queued. */
+  bookingVersion?: number | null;
+  clientId?: string | null;
+  kind: string;
+  channel: 'sms' | 'email';
+  toAddress: string;
+  subject?: string;
+  body: string;
+  attachments?: MessageAttachment[];
+  sendAt: Date;
+  dedupeKey: string;
+}
+
+export interface PlannedMessage {
+  id: string;
+  sendAt: Date;
+}
+
+/**
+ * Inserts what is not planned yet (the dedupe key decides) and returns what is newly queued. A row with the
+ * same key that was dropped for the client's preferences (same booking version) is queued again with the
+ * current text and address; sent, failed and queued rows are left alone, so nothing goes out twice.
+ */
+export async function insertPlanned(db: Db, messages: NewMessage[]): Promise<PlannedMessage[]> {
+  if (messages.length === 0) return [];
+  return db
+    .insertInto('messages')
+    .values(
+      messages.map((m) => ({
+        salon_id: m.salonId, booking_id: m.bookingId, booking_version: m.bookingVersion, client_id: m.clientId, kind: m.kind, channel: m.channel,
+        to_address: m.toAddress, subject: m.subject, body: m.body, attachments: m.attachments && JSON.stringify(m.attachments), send_at: m.sendAt, dedupe_key: m.dedupeKey,
+      })),
+    )
+    .onConflict((oc) =>
+      oc.column('dedupe_key').doUpdateSet((eb) => ({
+        status: 'queued', to_address: eb.ref('excluded.to_address'), body: eb.ref('excluded.body'), subject: eb.ref('excluded.subject'),
+        send_at: eb.ref('excluded.send_at'), attempts: 0, last_error: null,
+      })).where('messages.status', '=', 'dropped'),
+    )
+    .returning(['id', 'send_at as sendAt'])
+    .execute();
+}
+
+/** A move makes what was planned for the booking's old times stale: its version (in every dedupe key) goes up. */
+export async function bumpBookingVersion(db: Db, bookingId: string): Promise<void> {
+  await db.updateTable('bookings').set((eb) => ({ version: eb('version', '+', 1) })).where('id', '=', bookingId).execute();
+}
+
+/** How a client can be reached, as their messages are planned. */
+export interface ClientReach {
+  email: string | null;
+  phone: string | null;
+  messageChannel: MessageChannelChoice;
+  smsStoppedAt: Date | null;
+}
+
+export async function findClientReach(db: Db, clientId: string): Promise<ClientReach | undefined> {
+  return db
+    .selectFrom('clients')
+    .select(['email', 'phone', 'message_channel as messageChannel', 'sms_stopped_at as smsStoppedAt'])
+    .where('id', '=', clientId)
+    .executeTakeFirst();
+}
+
+/** The client's queued messages on a channel go to their current address. */
+export async function readdressQueued(db: Db, clientId: string, channel: 'sms' | 'email', address: string): Promise<void> {
+  await db.updateTable('messages').set({ to_address: address }).where('client_id', '=', clientId).where('status', '=', 'queued').where('channel', '=', channel).execute();
+}
+
+/** Drops the client's queued booking messages except the given kinds (re-planning revives what still holds). */
+export async function dropQueuedBookingMessages(db: Db, clientId: string, exceptKinds: string[]): Promise<void> {
+  await db.updateTable('messages').set({ status: 'dropped' }).where('client_id', '=', clientId).where('status', '=', 'queued')
+    .where('booking_id', 'is not', null).where('kind', 'not in', exceptKinds).execute();
 }

@@ -1,11 +1,12 @@
 import { DateTime } from 'luxon';
-import type { Insertable } from 'kysely';
 import type { Db } from '../../db/database';
-import type { MessagesTable } from '../../db/schema';
 import { followUpTimes } from '../../../shared/messages/follow-up-times';
 import type { Salon } from '../../../shared/schemas/salon.schemas';
 import { bookingSkinTestStates } from '../skin-tests/skin-test-check.service';
-import { bookingForMessages, dropFollowUps, dropQueued, dropQueuedForClient, queuedFollowUps, upcomingBookingIds, type BookingForMessages } from './messages.repository';
+import {
+  bookingForMessages, bumpBookingVersion, dropFollowUps, dropQueued, dropQueuedBookingMessages, dropQueuedForClient, findClientReach, insertPlanned, queuedFollowUps,
+  readdressQueued, upcomingBookingIds, type BookingForMessages, type NewMessage, type PlannedMessage,
+} from './messages.repository';
 import { followUpRulesForService } from './follow-up-rules.repository';
 import { outOfQuietHours, reminderAt } from './quiet-hours';
 import { aftercareKind, aftercareNotes } from './aftercare-notes';
@@ -35,7 +36,7 @@ export const AFTERCARE_AT = { hour: 10, minute: 0 };
  * and times, so the caller can also queue a job at each exact instant.
  */
 export async function replanBookingMessages(db: Db, bookingId: string, now: Date, change: BookingChange = 'booked'): Promise<PlannedMessage[]> {
-  if (change === 'moved') await db.updateTable('bookings').set((eb) => ({ version: eb('version', '+', 1) })).where('id', '=', bookingId).execute();
+  if (change === 'moved') await bumpBookingVersion(db, bookingId);
   const b = await bookingForMessages(db, bookingId);
   if (!b) return [];
   const cancelled = b.status === 'cancelled';
@@ -50,35 +51,10 @@ export async function replanBookingMessages(db: Db, bookingId: string, now: Date
   // A hold has no client yet and no-shows or finished bookings need nothing new.
   if (!b.clientId || !PLANNED_FOR.includes(b.status) || b.context.sittings.length === 0) return [];
 
-  const rows: Insertable<MessagesTable>[] = [];
+  const rows: NewMessage[] = [];
   if (!addOnly) rows.push(...toRows(b, 0, firstKind(b, change), firstMessage(b, change, skinTest === 'waiting'), now, null));
   if (!cancelled) rows.push(...await sittingMessages(db, b, now));
   return insertPlanned(db, rows);
-}
-
-export interface PlannedMessage {
-  id: string;
-  sendAt: Date;
-}
-
-/**
- * Inserts what is not planned yet (the dedupe key decides) and returns what is newly queued. A row with the
- * same key that was dropped for the client's preferences (same booking version) is queued again with the
- * current text and address; sent, failed and queued rows are left alone, so nothing goes out twice.
- */
-export async function insertPlanned(db: Db, rows: Insertable<MessagesTable>[]): Promise<PlannedMessage[]> {
-  if (rows.length === 0) return [];
-  return db
-    .insertInto('messages')
-    .values(rows)
-    .onConflict((oc) =>
-      oc.column('dedupe_key').doUpdateSet((eb) => ({
-        status: 'queued', to_address: eb.ref('excluded.to_address'), body: eb.ref('excluded.body'), subject: eb.ref('excluded.subject'),
-        send_at: eb.ref('excluded.send_at'), attempts: 0, last_error: null,
-      })).where('messages.status', '=', 'dropped'),
-    )
-    .returning(['id', 'send_at as sendAt'])
-    .execute();
 }
 
 function firstKind(b: BookingForMessages, change: BookingChange): string {
@@ -105,9 +81,9 @@ async function skinTestOf(db: Db, b: BookingForMessages, now: Date) {
 }
 
 /** Reminders, "day n of m", aftercare and marketing follow-ups for every sitting still ahead. */
-async function sittingMessages(db: Db, b: BookingForMessages, now: Date): Promise<Insertable<MessagesTable>[]> {
+async function sittingMessages(db: Db, b: BookingForMessages, now: Date): Promise<NewMessage[]> {
   const zone = b.context.timeZone;
-  const rows: Insertable<MessagesTable>[] = [];
+  const rows: NewMessage[] = [];
   for (const sitting of b.context.sittings) {
     if (sitting.start <= now) continue;
     for (const hours of b.offsets) {
@@ -131,7 +107,7 @@ async function sittingMessages(db: Db, b: BookingForMessages, now: Date): Promis
 }
 
 /** Follow-ups from the owner's rules for this service, anchored on the end of the last sitting. */
-export async function followUpRows(db: Db, b: BookingForMessages, now: Date, ruleId?: string): Promise<Insertable<MessagesTable>[]> {
+export async function followUpRows(db: Db, b: BookingForMessages, now: Date, ruleId?: string): Promise<NewMessage[]> {
   const rules = (await followUpRulesForService(db, b.serviceId)).filter((r) => !ruleId || r.id === ruleId);
   const anchor = b.context.sittings.at(-1)!.end;
   return rules.flatMap((rule) =>
@@ -150,17 +126,17 @@ function channelsFor(b: BookingForMessages): { email: string | null; sms: string
 }
 
 /** One row per channel the client wants; SMS leaves quiet hours, and never after the sitting. */
-function toRows(b: BookingForMessages, seq: number | string, kind: string, text: MessageText, at: Date, notAfter: Date | null): Insertable<MessagesTable>[] {
-  const base = { salon_id: b.salonId, booking_id: b.context.bookingId, booking_version: b.version, client_id: b.clientId, kind };
+function toRows(b: BookingForMessages, seq: number | string, kind: string, text: MessageText, at: Date, notAfter: Date | null): NewMessage[] {
+  const base = { salonId: b.salonId, bookingId: b.context.bookingId, bookingVersion: b.version, clientId: b.clientId, kind };
   const key = (channel: string) => `${b.context.bookingId}:${seq}:${kind}:${channel}:v${b.version}`;
   const to = channelsFor(b);
-  const rows: Insertable<MessagesTable>[] = [];
+  const rows: NewMessage[] = [];
   if (to.email) {
-    rows.push({ ...base, channel: 'email', to_address: to.email, subject: text.subject, body: text.email, attachments: JSON.stringify(text.attachments), send_at: at, dedupe_key: key('email') });
+    rows.push({ ...base, channel: 'email', toAddress: to.email, subject: text.subject, body: text.email, attachments: text.attachments, sendAt: at, dedupeKey: key('email') });
   }
   if (to.sms) {
     const smsAt = outOfQuietHours(at, b.context.timeZone, b.quietFrom, b.quietTo);
-    if (!notAfter || smsAt < notAfter) rows.push({ ...base, channel: 'sms', to_address: to.sms, body: text.sms, send_at: smsAt, dedupe_key: key('sms') });
+    if (!notAfter || smsAt < notAfter) rows.push({ ...base, channel: 'sms', toAddress: to.sms, body: text.sms, sendAt: smsAt, dedupeKey: key('sms') });
   }
   return rows;
 }
@@ -171,19 +147,18 @@ function toRows(b: BookingForMessages, seq: number | string, kind: string, text:
  * booking still ahead (confirmations already sent are not repeated).
  */
 export async function replanClientMessages(db: Db, clientId: string, now: Date): Promise<PlannedMessage[]> {
-  const client = await db.selectFrom('clients').select(['message_channel', 'sms_stopped_at', 'phone', 'email']).where('id', '=', clientId).executeTakeFirst();
+  const client = await findClientReach(db, clientId);
   if (!client) return [];
   // Booking-change notices still queued keep going, on the channels still wanted and to the current address.
   const unwanted: ('sms' | 'email')[] = [];
-  if (client.message_channel === 'email' || client.sms_stopped_at || !client.phone) unwanted.push('sms');
-  if (client.message_channel === 'sms' || !client.email) unwanted.push('email');
+  if (client.messageChannel === 'email' || client.smsStoppedAt || !client.phone) unwanted.push('sms');
+  if (client.messageChannel === 'sms' || !client.email) unwanted.push('email');
   await dropQueuedForClient(db, clientId, unwanted);
   for (const [channel, address] of [['sms', client.phone], ['email', client.email]] as const) {
-    if (address) await db.updateTable('messages').set({ to_address: address }).where('client_id', '=', clientId).where('status', '=', 'queued').where('channel', '=', channel).execute();
+    if (address) await readdressQueued(db, clientId, channel, address);
   }
   // Everything else is planned afresh: dropped here, then re-planned (reviving rows whose key is unchanged).
-  await db.updateTable('messages').set({ status: 'dropped' }).where('client_id', '=', clientId).where('status', '=', 'queued')
-    .where('booking_id', 'is not', null).where('kind', 'not in', FIRST_KINDS).execute();
+  await dropQueuedBookingMessages(db, clientId, FIRST_KINDS);
   const planned: PlannedMessage[] = [];
   for (const id of await upcomingBookingIds(db, clientId, now)) planned.push(...await replanBookingMessages(db, id, now, 'preferences'));
   return planned;

@@ -1,9 +1,9 @@
-import { sql } from 'kysely';
 import type { Kysely } from 'kysely';
 import type { Database } from '../../db/schema';
 import type { Mailer } from '../../mail/mailer';
 import type { SmsSender } from '../../sms/sms-sender';
 import { emailHtml } from './html-email';
+import { channelBlockers, claimMessage, dueMessages, findDueMessage, markSent, markTryFailed, requeueStuck, takeMessagesForJobs } from './message-delivery.repository';
 
 export const SEND_MESSAGE_JOB = 'send-message';
 export const SEND_DUE_MESSAGES_JOB = 'send-due-messages';
@@ -32,64 +32,32 @@ type Outcome = 'sent' | 'retry' | 'failed' | 'not-claimed';
  * slow provider must not hold a lock), and its result is written in one update afterwards.
  */
 export async function sendMessage(db: Kysely<Database>, senders: Senders, id: string, now: Date): Promise<Outcome> {
-  const row = await db
-    .updateTable('messages')
-    .set((eb) => ({ status: 'sending', claimed_at: now, attempts: eb('attempts', '+', 1) }))
-    .where('id', '=', id)
-    .where('status', '=', 'queued')
-    .where('send_at', '<=', now)
-    .returningAll()
-    .executeTakeFirst();
-  if (!row) return 'not-claimed';
+  const m = await claimMessage(db, id, now);
+  if (!m) return 'not-claimed';
   try {
-    const ref = row.channel === 'sms'
-      ? (await senders.sms.send(row.to_address, row.body)).sid
-      : (await senders.mailer.send({ to: row.to_address, subject: row.subject, text: row.body, html: emailHtml(row.subject, row.body), attachments: row.attachments }), `smtp:${row.id}`);
-    await db.updateTable('messages').set({ status: 'sent', provider_ref: ref, sent_at: new Date(), last_error: null }).where('id', '=', id).execute();
+    const ref = m.channel === 'sms'
+      ? (await senders.sms.send(m.toAddress, m.body)).sid
+      : (await senders.mailer.send({ to: m.toAddress, subject: m.subject, text: m.body, html: emailHtml(m.subject, m.body), attachments: m.attachments }), `smtp:${m.id}`);
+    await markSent(db, id, ref, new Date());
     return 'sent';
   } catch (err) {
     // A request the provider refuses as malformed (400) will not get better by waiting.
     const permanent = (err as { status?: number }).status === 400;
-    const failed = permanent || row.attempts >= MAX_ATTEMPTS;
-    const retryAt = new Date(now.getTime() + backoffMinutes(row.attempts) * 60_000);
-    await db
-      .updateTable('messages')
-      .set({ status: failed ? 'failed' : 'queued', send_at: failed ? row.send_at : retryAt, due_at: row.due_at ?? row.send_at, last_error: String((err as Error).message ?? err).slice(0, 500) })
-      .where('id', '=', id)
-      .where('status', '=', 'sending')
-      .execute();
+    const failed = permanent || m.attempts >= MAX_ATTEMPTS;
+    const retryAt = new Date(now.getTime() + backoffMinutes(m.attempts) * 60_000);
+    await markTryFailed(db, id, { failed, sendAt: failed ? m.sendAt : retryAt, dueAt: m.dueAt ?? m.sendAt, error: String((err as Error).message ?? err).slice(0, 500) });
     return failed ? 'failed' : 'retry';
   }
-}
-
-/** The order messages go out in: when each was first due (retries keep their place). */
-const dueOrder = sql<Date>`coalesce(due_at, send_at)`;
-
-/**
- * Per channel, the first-due time of the earliest message waiting out a retry backoff. Messages due after it
- * on that channel wait too: when the provider is back they go out behind it, in their planned order, instead
- * of overtaking it.
- */
-async function channelBlockers(db: Kysely<Database>, now: Date): Promise<Map<string, Date>> {
-  const rows = await db
-    .selectFrom('messages')
-    .select(['channel', sql<Date>`min(coalesce(due_at, send_at))`.as('from')])
-    .where('status', '=', 'queued')
-    .where('attempts', '>', 0)
-    .where('send_at', '>', now)
-    .groupBy('channel')
-    .execute();
-  return new Map(rows.map((r) => [r.channel, r.from]));
 }
 
 /**
  * Sends every due message in planned order. A message that fails and will be retried stops its channel for
  * the rest of the run (the provider is likely down: no point hammering it, and later ones must not overtake).
+ * Per channel, messages first due after one still waiting out a retry backoff wait too: when the provider is
+ * back they go out behind it, in their planned order, instead of overtaking it.
  */
 export async function sendDueMessages(db: Kysely<Database>, senders: Senders, now: Date, bookingId?: string): Promise<number> {
-  let q = db.selectFrom('messages').select(['id', 'channel', dueOrder.as('due')]).where('status', '=', 'queued').where('send_at', '<=', now);
-  if (bookingId) q = q.where('booking_id', '=', bookingId);
-  const due = await q.orderBy(dueOrder).orderBy('created_at').limit(100).execute();
+  const due = await dueMessages(db, now, bookingId);
   const blocked = await channelBlockers(db, now);
   let sent = 0;
   for (const { id, channel, due: at } of due) {
@@ -107,7 +75,7 @@ export async function sendDueMessages(db: Kysely<Database>, senders: Senders, no
  * channel is still waiting to be retried, then let anything that queued up behind it follow in order.
  */
 export async function sendOnTime(db: Kysely<Database>, senders: Senders, id: string, now: Date): Promise<Outcome> {
-  const row = await db.selectFrom('messages').select(['channel', dueOrder.as('due')]).where('id', '=', id).executeTakeFirst();
+  const row = await findDueMessage(db, id);
   if (!row) return 'not-claimed';
   const from = (await channelBlockers(db, now)).get(row.channel);
   if (from && row.due > from) return 'not-claimed';
@@ -124,15 +92,7 @@ export async function sendOnTime(db: Kysely<Database>, senders: Senders, id: str
  * since a recorded reference proves the provider has it.
  */
 export async function requeueStuckMessages(db: Kysely<Database>, now: Date, afterSeconds = STUCK_AFTER_MINUTES * 60): Promise<number> {
-  const rows = await db
-    .updateTable('messages')
-    .set({ status: 'queued', last_error: 'Worker stopped while sending; queued again' })
-    .where('status', '=', 'sending')
-    .where('provider_ref', 'is', null)
-    .where('claimed_at', '<', sql<Date>`${now}::timestamptz - make_interval(secs => ${afterSeconds})`)
-    .returning('id')
-    .execute();
-  return rows.length;
+  return requeueStuck(db, now, afterSeconds);
 }
 
 /**
@@ -142,14 +102,7 @@ export async function requeueStuckMessages(db: Kysely<Database>, now: Date, afte
  * many jobs or sweeps reach it.
  */
 export async function scheduleMessageJobs(db: Kysely<Database>, schedule: (id: string, at: Date) => Promise<void>, now: Date): Promise<number> {
-  const rows = await db
-    .updateTable('messages')
-    .set((eb) => ({ job_at: eb.ref('send_at') }))
-    .where('status', '=', 'queued')
-    .where('send_at', '<=', sql<Date>`${now}::timestamptz + make_interval(secs => ${SCHEDULE_AHEAD_SECONDS})`)
-    .where((eb) => eb.or([eb('job_at', 'is', null), eb('job_at', '!=', eb.ref('send_at'))]))
-    .returning(['id', 'send_at'])
-    .execute();
-  for (const row of rows) await schedule(row.id, row.send_at);
-  return rows.length;
+  const messages = await takeMessagesForJobs(db, now, SCHEDULE_AHEAD_SECONDS);
+  for (const m of messages) await schedule(m.id, m.sendAt);
+  return messages.length;
 }

@@ -1,8 +1,6 @@
-import type { Insertable } from 'kysely';
 import type { Db } from '../../db/database';
-import type { MessagesTable } from '../../db/schema';
 import { deskEmails, salonsForStaffMessages, sittingsBetween, type DaySitting } from './staff-messages.repository';
-import { insertPlanned, type PlannedMessage } from './plan-messages.service';
+import { insertPlanned, type NewMessage, type PlannedMessage } from './messages.repository';
 import { formatMoney } from '../../../shared/money/money';
 import { localClockOf, localDateOf, shiftLocalDate } from '../../../shared/time/salon-time';
 import { formatDate, formatRange } from '../../../shared/format/date-time';
@@ -24,7 +22,7 @@ export async function planStaffMessages(db: Db, now: Date): Promise<PlannedMessa
     const date = shiftLocalDate(localDateOf(now, salon.timeZone), 1);
     const { from, to } = localDayBounds(date, salon.timeZone);
     const sittings = await sittingsBetween(db, salon.id, from, to);
-    const rows: Insertable<MessagesTable>[] = [];
+    const rows: NewMessage[] = [];
     const dayName = formatDate(date, formatFor(salon.timeZone), { year: false });
     const byStylist = new Map<string, DaySitting[]>();
     for (const s of sittings) byStylist.set(s.staffId, [...(byStylist.get(s.staffId) ?? []), s]);
@@ -32,7 +30,7 @@ export async function planStaffMessages(db: Db, now: Date): Promise<PlannedMessa
       const email = list[0].stylistEmail;
       if (!email) continue;
       rows.push({
-        salon_id: salon.id, kind: 'stylist_day_list', channel: 'email', to_address: email, send_at: now, dedupe_key: `staff:${staffId}:${date}:day_list`,
+        salonId: salon.id, kind: 'stylist_day_list', channel: 'email', toAddress: email, sendAt: now, dedupeKey: `staff:${staffId}:${date}:day_list`,
         subject: `Your day, ${dayName}: ${list.length} sitting${list.length === 1 ? '' : 's'}`,
         body: `Hello ${list[0].stylistName.split(' ')[0]},\n\nTomorrow at ${salon.name} (${salon.timeZone} time):\n\n${list.map((s) => line(s, salon.timeZone)).join('\n')}\n`,
       });
@@ -43,7 +41,7 @@ export async function planStaffMessages(db: Db, now: Date): Promise<PlannedMessa
       : unpaid.map((s) => `${line(s, salon.timeZone)} — deposit ${formatMoney(s.depositDue, salon.currency)} not paid`).join('\n');
     for (const email of await deskEmails(db, salon.id)) {
       rows.push({
-        salon_id: salon.id, kind: 'desk_no_deposit_list', channel: 'email', to_address: email, send_at: now, dedupe_key: `desk:${salon.id}:${email}:${date}:no_deposit`,
+        salonId: salon.id, kind: 'desk_no_deposit_list', channel: 'email', toAddress: email, sendAt: now, dedupeKey: `desk:${salon.id}:${email}:${date}:no_deposit`,
         subject: `No deposit yet, ${dayName}: ${unpaid.length}`,
         body: `Bookings at ${salon.name} tomorrow (${salon.timeZone} time) with a deposit still to pay:\n\n${body}\n`,
       });

@@ -1,13 +1,8 @@
-import { apiPaths } from '../../../shared/api/api-paths';
-import { SalonSchema } from '../../../shared/schemas/salon.schemas';
+import { salonApi } from '../../../shared/api/salon.api';
 import type { AppDeps } from '../../app-deps';
 import { apiRoute } from '../../lib/api-route';
-import { findSalon } from './salon.repository';
+import { salonOf } from './salon.service';
 
 export function registerSalonRoutes({ table, db }: AppDeps): void {
-  apiRoute(
-    table,
-    { method: 'get', path: apiPaths.salon, access: 'signed_in', summary: "The signed-in user's salon", response: SalonSchema },
-    async ({ user }) => findSalon(db, user.salonId),
-  );
+  apiRoute(table, salonApi.current, async ({ user }) => salonOf(db, user));
 }

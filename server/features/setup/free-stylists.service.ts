@@ -4,6 +4,7 @@ import { findFreeStylists } from '../../../shared/engine/engine';
 import { loadSalonCalendars } from '../planning/salon-calendars.repository';
 import { futureSittingIds, type FutureBooking } from './future-bookings.repository';
 import { localDateOf, shiftLocalDate } from '../../../shared/time/salon-time';
+import { salonStaffNames } from './staff-setup.repository';
 
 /**
  * Stylists other than the booked one who could take a booking's future sittings exactly as they stand,
@@ -23,9 +24,7 @@ export async function freeStylistIds(db: Db, salonId: string, zone: string, book
 
 /** The bookings in the answer shape, each with the stylists free to take it over. */
 export async function withFreeStylists(db: Db, salonId: string, zone: string, bookings: FutureBooking[], now: Date): Promise<AffectedBooking[]> {
-  const names = new Map(
-    (await db.selectFrom('staff').select(['id', 'display_name']).where('salon_id', '=', salonId).execute()).map((s) => [s.id, s.display_name]),
-  );
+  const names = await salonStaffNames(db, salonId);
   return Promise.all(
     bookings.map(async (b) => ({
       id: b.id,

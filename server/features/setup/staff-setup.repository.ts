@@ -127,3 +127,9 @@ export async function deactivateStaff(db: Db, userId: string, staffId: string | 
   if (staffId) await db.updateTable('staff').set({ active: false }).where('id', '=', staffId).execute();
   await deleteSessionsOfUser(db, userId); // signed-in sessions end with the account
 }
+
+/** Every stylist's display name by staff id, former stylists too (for records that name who did the work). */
+export async function salonStaffNames(db: Db, salonId: string): Promise<Map<string, string>> {
+  const rows = await db.selectFrom('staff').select(['id', 'display_name']).where('salon_id', '=', salonId).execute();
+  return new Map(rows.map((r) => [r.id, r.display_name]));
+}

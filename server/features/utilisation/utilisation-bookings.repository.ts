@@ -72,8 +72,3 @@ export async function cancelledAt(db: Db, salonId: string, bookingIds: string[])
     .execute();
   return new Map(rows.map((r) => [r.entity_id, r.at]));
 }
-
-export async function salonStaffNames(db: Db, salonId: string): Promise<Map<string, string>> {
-  const rows = await db.selectFrom('staff').select(['id', 'display_name']).where('salon_id', '=', salonId).execute();
-  return new Map(rows.map((r) => [r.id, r.display_name]));
-}

@@ -1,22 +1,43 @@
 import type { Db } from '../../db/database';
 import type { Salon } from '../../../shared/schemas/salon.schemas';
 import type { DeskUtilisation, OwnerUtilisation, UtilisationQuery } from '../../../shared/schemas/utilisation.schemas';
+import type { Scenario } from '../../../shared/engine/engine';
 import { todayIn } from '../bookings/day-view.service';
-import { cancelledAt, listPeriodSittings, salonStaffNames } from './utilisation-bookings.repository';
+import { findSalon } from '../salon/salon.repository';
+import { salonStaffNames } from '../setup/staff-setup.repository';
+import { cancelledAt, listPeriodSittings } from './utilisation-bookings.repository';
 import { bookingFigures } from './utilisation-figures';
-import { measurePeriod } from './utilisation-occupancy';
+import { measurePeriod, periodScenario } from './utilisation-occupancy';
 import { chunksOf, resolvePeriod, type Period } from './utilisation-period';
 import { instantAt } from '../../../shared/time/salon-time';
 
 const ratio = (num: number, den: number): number | null => (den === 0 ? null : num / den);
 
 /** The period a query names, in the salon's time zone. */
-export function periodFor(salon: Salon, query: UtilisationQuery, now: Date): Period {
+function periodFor(salon: Salon, query: UtilisationQuery, now: Date): Period {
   return resolvePeriod({ period: query.period ?? 'week', date: query.date, from: query.from, to: query.to }, todayIn(salon.timeZone, now));
 }
 
+/** The owner's figures for the period a query names. */
+export async function ownerUtilisationFor(db: Db, salonId: string, query: UtilisationQuery, now: Date): Promise<OwnerUtilisation> {
+  const salon = await findSalon(db, salonId);
+  return ownerUtilisation(db, salon, periodFor(salon, query, now));
+}
+
+/** The desk's figures for the period a query names. */
+export async function deskUtilisationFor(db: Db, salonId: string, query: UtilisationQuery, now: Date): Promise<DeskUtilisation> {
+  return deskSubset(await ownerUtilisationFor(db, salonId, query, now));
+}
+
+/** The engine scenario behind the period's occupancy figures, with the period it covers (for the file's name). */
+export async function utilisationScenarioFor(db: Db, salonId: string, query: UtilisationQuery, now: Date): Promise<{ period: Period; scenario: Scenario }> {
+  const salon = await findSalon(db, salonId);
+  const period = periodFor(salon, query, now);
+  return { period, scenario: await periodScenario(db, salon.id, period) };
+}
+
 /** Every figure of the period, for the owner. One query per table; the engine measures the occupancy. */
-export async function ownerUtilisation(db: Db, salon: Salon, period: Period): Promise<OwnerUtilisation> {
+async function ownerUtilisation(db: Db, salon: Salon, period: Period): Promise<OwnerUtilisation> {
   const instant = (date: string) => instantAt(date, salon.timeZone)!.getTime();
   const weekCuts = chunksOf(period).flatMap((c, i) => (i === 0 ? c.weekCuts : c.weekCuts.slice(1)));
   const from = instant(period.from);
@@ -89,7 +110,7 @@ export async function ownerUtilisation(db: Db, salon: Salon, period: Period): Pr
 }
 
 /** The desk's subset: chair occupancy and window use, when chairs are full, attendance; no money, no per-person figures. */
-export function deskSubset(all: OwnerUtilisation): DeskUtilisation {
+function deskSubset(all: OwnerUtilisation): DeskUtilisation {
   return {
     salon: { name: all.salon.name, timeZone: all.salon.timeZone },
     period: all.period,

@@ -21,6 +21,7 @@ const CLIENT_OR_STAFF = ['client', ...STAFF] as const;
 export const expectedAccess: Record<string, Expectation> = {
   'GET /api/csrf': { allow: 'anyone' },
   'GET /api/health': { allow: 'anyone' },
+  'GET /api/openapi.json': { allow: 'anyone' },
   'POST /api/session': { allow: 'anyone' },
   'GET /api/session': { allow: 'signed_in' },
   'DELETE /api/session': { allow: 'anyone' },

@@ -1,20 +1,19 @@
 import { useMutation } from '@tanstack/react-query';
 import type { z } from 'zod';
-import { apiPaths } from '../../../../shared/api/api-paths';
+import { passwordResetApi } from '../../../../shared/api/password-reset.api';
 import type { PasswordResetConfirmSchema, PasswordResetRequestSchema } from '../../../../shared/schemas/auth.schemas';
-import { apiWrite } from '../../../lib/api-client';
+import { callApi } from '../../../lib/api-client';
 
 // Neither call changes anything the client has cached, so there is nothing to invalidate.
 
 export function useRequestPasswordReset() {
   return useMutation({
-    mutationFn: (body: z.output<typeof PasswordResetRequestSchema>) => apiWrite('POST', apiPaths.passwordReset, body),
+    mutationFn: (body: z.output<typeof PasswordResetRequestSchema>) => callApi(passwordResetApi.request, { body }),
   });
 }
 
 export function useConfirmPasswordReset() {
   return useMutation({
-    mutationFn: (body: z.output<typeof PasswordResetConfirmSchema>) =>
-      apiWrite('POST', apiPaths.passwordResetConfirm, body),
+    mutationFn: (body: z.output<typeof PasswordResetConfirmSchema>) => callApi(passwordResetApi.confirm, { body }),
   });
 }

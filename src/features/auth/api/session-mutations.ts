@@ -1,35 +1,29 @@
-import { useMutation, useQueryClient, type QueryClient } from '@tanstack/react-query';
-import { apiPaths } from '../../../../shared/api/api-paths';
-import { SessionResponseSchema, type SessionUser, type SignInBody, type SignUpBody } from '../../../../shared/schemas/auth.schemas';
-import { apiWrite } from '../../../lib/api-client';
-import { sessionQueries } from './session-queries';
-
-/** A new person is signed in: nothing cached for the previous one may show. */
-function startSession(queryClient: QueryClient, user: SessionUser | null) {
-  queryClient.removeQueries({ predicate: (query) => query.meta?.isSession !== true });
-  queryClient.setQueryData(sessionQueries.current().queryKey, user);
-}
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { sessionApi } from '../../../../shared/api/session.api';
+import type { SignInBody, SignUpBody } from '../../../../shared/schemas/auth.schemas';
+import { callApi } from '../../../lib/api-client';
+import { sessionStarted } from '../../../lib/cache-rules';
 
 export function useSignIn() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (body: SignInBody) => apiWrite('POST', apiPaths.session, body, SessionResponseSchema),
-    onSuccess: ({ user }) => startSession(queryClient, user),
+    mutationFn: (body: SignInBody) => callApi(sessionApi.signIn, { body }),
+    onSuccess: ({ user }) => sessionStarted(queryClient, user),
   });
 }
 
 export function useSignUp() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (body: SignUpBody) => apiWrite('POST', apiPaths.signUp, body, SessionResponseSchema),
-    onSuccess: ({ user }) => startSession(queryClient, user),
+    mutationFn: (body: SignUpBody) => callApi(sessionApi.signUp, { body }),
+    onSuccess: ({ user }) => sessionStarted(queryClient, user),
   });
 }
 
 export function useSignOut() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: () => apiWrite('DELETE', apiPaths.session),
-    onSuccess: () => startSession(queryClient, null),
+    mutationFn: () => callApi(sessionApi.signOut),
+    onSuccess: () => sessionStarted(queryClient, null),
   });
 }

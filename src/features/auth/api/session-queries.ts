@@ -1,13 +1,13 @@
 import { queryOptions } from '@tanstack/react-query';
-import { apiPaths } from '../../../../shared/api/api-paths';
-import { SessionResponseSchema, type SessionUser } from '../../../../shared/schemas/auth.schemas';
-import { apiGet } from '../../../lib/api-client';
+import { sessionApi } from '../../../../shared/api/session.api';
+import type { SessionUser } from '../../../../shared/schemas/auth.schemas';
+import { apiKey, callApi } from '../../../lib/api-client';
 import { isApiError } from '../../../lib/api-error';
 
 /** Who is signed in: the user, or null when nobody is (a 401 is an answer here, not an error). */
 async function fetchSessionUser(): Promise<SessionUser | null> {
   try {
-    return (await apiGet(apiPaths.session, SessionResponseSchema)).user;
+    return (await callApi(sessionApi.current)).user;
   } catch (error) {
     if (isApiError(error, 'UNAUTHENTICATED') || (isApiError(error) && error.status === 401)) return null;
     throw error;
@@ -15,10 +15,9 @@ async function fetchSessionUser(): Promise<SessionUser | null> {
 }
 
 export const sessionQueries = {
-  all: () => ['session'] as const,
   current: () =>
     queryOptions({
-      queryKey: [...sessionQueries.all(), 'current'] as const,
+      queryKey: apiKey(sessionApi.current),
       queryFn: fetchSessionUser,
       staleTime: 5 * 60_000,
       meta: { isSession: true },

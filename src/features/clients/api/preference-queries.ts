@@ -1,16 +1,19 @@
-import { queryOptions, useMutation, useQueryClient } from '@tanstack/react-query';
+import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { z } from 'zod';
-import { MyPreferencesSchema, myPreferencesPath, type MyPreferencesBodySchema } from '../../../../shared/schemas/contact.schemas';
-import { apiGet, apiWrite } from '../../../lib/api-client';
+import { messagesApi } from '../../../../shared/api/messages.api';
+import type { MyPreferencesBodySchema } from '../../../../shared/schemas/contact.schemas';
+import { apiQuery, callApi } from '../../../lib/api-client';
+import { myPreferencesSaved } from '../../../lib/cache-rules';
 
 export const preferenceQueries = {
-  mine: () => queryOptions({ queryKey: ['me', 'preferences'] as const, queryFn: () => apiGet(myPreferencesPath, MyPreferencesSchema) }),
+  mine: () => apiQuery(messagesApi.myPreferences),
 };
 
 export function useSaveMyPreferences() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (body: z.output<typeof MyPreferencesBodySchema>) => apiWrite('PUT', myPreferencesPath, body, MyPreferencesSchema),
-    onSuccess: (saved) => queryClient.setQueryData(preferenceQueries.mine().queryKey, saved),
+    // The form's parsed values go out as they always have (a cleared phone is null, which the body schema does not read).
+    mutationFn: (body: z.output<typeof MyPreferencesBodySchema>) => callApi(messagesApi.saveMyPreferences, { body: body as z.input<typeof MyPreferencesBodySchema> }),
+    onSuccess: (saved) => myPreferencesSaved(queryClient, saved),
   });
 }

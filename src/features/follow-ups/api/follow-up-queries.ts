@@ -1,13 +1,12 @@
-import { queryOptions, useMutation, useQueryClient } from '@tanstack/react-query';
+import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { z } from 'zod';
-import {
-  FollowUpRuleSchema, FollowUpRulesSchema, followUpRulePath, followUpRulesPath, type FollowUpRuleBodySchema,
-} from '../../../../shared/schemas/follow-up-rules.schemas';
-import { apiGet, apiWrite } from '../../../lib/api-client';
+import { followUpRulesApi } from '../../../../shared/api/follow-up-rules.api';
+import type { FollowUpRuleBodySchema } from '../../../../shared/schemas/follow-up-rules.schemas';
+import { apiQuery, callApi } from '../../../lib/api-client';
+import { followUpRulesChanged } from '../../../lib/cache-rules';
 
 export const followUpQueries = {
-  all: () => ['follow-up-rules'] as const,
-  list: () => queryOptions({ queryKey: followUpQueries.all(), queryFn: () => apiGet(followUpRulesPath, FollowUpRulesSchema) }),
+  list: () => apiQuery(followUpRulesApi.list),
 };
 
 type Body = z.output<typeof FollowUpRuleBodySchema>;
@@ -16,15 +15,15 @@ type Body = z.output<typeof FollowUpRuleBodySchema>;
 export function useSaveFollowUpRule(id: string | null) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (body: Body) => (id ? apiWrite('PUT', followUpRulePath(id), body, FollowUpRuleSchema) : apiWrite('POST', followUpRulesPath, body, FollowUpRuleSchema)),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: followUpQueries.all() }),
+    mutationFn: (body: Body) => (id ? callApi(followUpRulesApi.change, { params: { id }, body }) : callApi(followUpRulesApi.add, { body })),
+    onSuccess: () => followUpRulesChanged(queryClient),
   });
 }
 
 export function useRemoveFollowUpRule() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (id: string) => apiWrite('DELETE', followUpRulePath(id)),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: followUpQueries.all() }),
+    mutationFn: (id: string) => callApi(followUpRulesApi.remove, { params: { id } }),
+    onSuccess: () => followUpRulesChanged(queryClient),
   });
 }

@@ -1,4 +1,5 @@
-// Paths of the owner's set-up routes; kept beside api-paths.ts so parallel work does not collide there.
+// The owner's set-up paths as the tests call them, written out apart from the contracts (shared/api/setup.api.ts)
+// so that a path changed there by mistake fails here.
 export const setupPaths = {
   salon: '/api/owner/setup/salon',
   staff: '/api/owner/setup/staff',

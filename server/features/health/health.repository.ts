@@ -1,0 +1,7 @@
+import { sql } from 'kysely';
+import type { Db } from '../../db/database';
+
+/** One round trip to PostgreSQL; throws when it cannot be reached. */
+export async function pingDatabase(db: Db): Promise<void> {
+  await sql`select 1`.execute(db);
+}
