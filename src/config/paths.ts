@@ -21,6 +21,7 @@ export const paths = {
   deskClient: (id: string) => `/desk/clients/${id}`,
   outbox: '/desk/outbox',
   deskBook: '/desk/book',
+  deskBookQuote: (consultationId: string) => `/desk/book?consultation=${encodeURIComponent(consultationId)}`,
   deskBooking: (id: string) => `/desk/bookings/${id}`,
   deskStandby: '/desk/standby',
   deskWeek: (date?: string, stylistId?: string) => {
@@ -32,6 +33,10 @@ export const paths = {
   },
   offer: (token: string) => `/offer/${token}`,
   stylist: (date?: string) => (date ? `/stylist?date=${date}` : '/stylist'),
+  stylistMixLog: (bookingId: string, clientId?: string) =>
+    `/stylist/bookings/${bookingId}/mix-log${clientId ? `?client=${encodeURIComponent(clientId)}` : ''}`,
+  consultationNew: (clientId: string) => `/consultations/new?client=${encodeURIComponent(clientId)}`,
+  consultation: (id: string) => `/consultations/${id}`,
   me: '/me',
   salon: (slug: string) => `/salon/${slug}`,
   salonBook: (slug: string, serviceId?: string) =>

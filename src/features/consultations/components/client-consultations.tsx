@@ -5,7 +5,8 @@ import { FormAlert } from '../../../components/ui/form-alert';
 import { LoadingState } from '../../../components/ui/loading-state';
 import { formatMoney } from '../../../lib/booking-labels';
 import { formatDay } from '../../../lib/time';
-import { consultationPagePaths, consultationQueries } from '../api/consultation-queries';
+import { paths } from '../../../config/paths';
+import { consultationQueries } from '../api/consultation-queries';
 import { quoteStatusLabels } from './consultation-labels';
 
 type Props = { clientId: string; timeZone: string; currency: string };
@@ -27,14 +28,14 @@ export function ClientConsultations({ clientId, timeZone, currency }: Props) {
               {quoteStatusLabels[c.quote.status]}
               {c.quote.bookingIds.length > 0 && ' · booked'}
             </span>
-            <Link to={consultationPagePaths.one(c.id)} className="text-link">
+            <Link to={paths.consultation(c.id)} className="text-link">
               Open quote
             </Link>
           </li>
         ))}
       </ul>
       <div>
-        <Link to={consultationPagePaths.create(clientId)} className={buttonClasses('secondary')}>
+        <Link to={paths.consultationNew(clientId)} className={buttonClasses('secondary')}>
           New consultation
         </Link>
       </div>
