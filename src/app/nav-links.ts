@@ -5,7 +5,7 @@ import { paths } from '../config/paths';
 const deskLinks = [
   { to: paths.desk(), label: 'Book' },
   { to: paths.deskWeek(), label: 'Week' },
-  { to: paths.deskBook, label: 'Book a service' },
+  { to: paths.deskBook(), label: 'Book a service' },
   { to: paths.deskStandby, label: 'Standby' },
   { to: paths.outbox, label: 'Outbox (demo)' },
 ];

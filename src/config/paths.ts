@@ -20,8 +20,7 @@ export const paths = {
   desk: (date?: string) => (date ? `/desk?date=${date}` : '/desk'),
   deskClient: (id: string) => `/desk/clients/${id}`,
   outbox: '/desk/outbox',
-  deskBook: '/desk/book',
-  deskBookQuote: (consultationId: string) => `/desk/book?consultation=${encodeURIComponent(consultationId)}`,
+  deskBook: (consultationId?: string) => (consultationId ? `/desk/book?consultation=${encodeURIComponent(consultationId)}` : '/desk/book'),
   deskBooking: (id: string) => `/desk/bookings/${id}`,
   deskStandby: '/desk/standby',
   deskWeek: (date?: string, stylistId?: string) => {
@@ -33,9 +32,9 @@ export const paths = {
   },
   offer: (token: string) => `/offer/${token}`,
   stylist: (date?: string) => (date ? `/stylist?date=${date}` : '/stylist'),
-  stylistMixLog: (bookingId: string, clientId?: string) =>
+  mixLog: (bookingId: string, clientId?: string) =>
     `/stylist/bookings/${bookingId}/mix-log${clientId ? `?client=${encodeURIComponent(clientId)}` : ''}`,
-  consultationNew: (clientId: string) => `/consultations/new?client=${encodeURIComponent(clientId)}`,
+  newConsultation: (clientId: string) => `/consultations/new?client=${encodeURIComponent(clientId)}`,
   consultation: (id: string) => `/consultations/${id}`,
   me: '/me',
   salon: (slug: string) => `/salon/${slug}`,

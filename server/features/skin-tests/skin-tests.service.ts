@@ -7,7 +7,7 @@ import { AppError, invalidField, notFound } from '../../lib/app-error';
 import { clientIdFor } from '../../auth/client-access';
 import { writeAudit } from '../audit/audit.repository';
 import { findSalon } from '../salon/salon.repository';
-import { storeTestRecord } from '../test-records/store-test-record';
+import { storeTestRecord } from '../test-records/store-test-record.service';
 import { findSkinTest, insertSkinTest, listClearances, listSkinTests, setSkinTestReading } from './skin-tests.repository';
 import { replanAfterSkinTestChange } from '../messages/plan-messages.service';
 

@@ -5,7 +5,7 @@ import { invalidField } from '../../lib/app-error';
 import { clientIdFor } from '../../auth/client-access';
 import { clientPhotoIds } from '../consultations/consultations.repository';
 import { checkSalonStrength } from '../mix-logs/mix-logs.service';
-import { storeTestRecord } from '../test-records/store-test-record';
+import { storeTestRecord } from '../test-records/store-test-record.service';
 import { findStrandTest, insertStrandTest, listStrandTests } from './strand-tests.repository';
 
 export async function strandTestsOf(db: Db, user: SessionUser, clientId: string): Promise<{ tests: StrandTest[] }> {

@@ -50,7 +50,7 @@ export function Component() {
         subtitle={`Consultation of ${formatDay(view.createdAt, salon.timeZone)}${view.createdByName ? ` by ${view.createdByName}` : ''} · ${quoteStatusLabels[q.status]} · ${formatMoney(q.priceCents, salon.currency)}, deposit ${formatMoney(q.depositCents, salon.currency)}`}
         action={
           desk && (
-            <Link to={paths.deskBookQuote(view.id)} className={buttonClasses('primary')}>
+            <Link to={paths.deskBook(view.id)} className={buttonClasses('primary')}>
               Book this quote
             </Link>
           )

@@ -35,7 +35,7 @@ export function ClientConsultations({ clientId, timeZone, currency }: Props) {
         ))}
       </ul>
       <div>
-        <Link to={paths.consultationNew(clientId)} className={buttonClasses('secondary')}>
+        <Link to={paths.newConsultation(clientId)} className={buttonClasses('secondary')}>
           New consultation
         </Link>
       </div>

@@ -57,10 +57,10 @@ export function ClientDayCard({ booking, sitting, timeZone, now }: Props) {
         </div>
       )}
       <div className="flex flex-wrap gap-4">
-        <Link to={paths.stylistMixLog(booking.id, booking.client.id)} className="text-link">
+        <Link to={paths.mixLog(booking.id, booking.client.id)} className="text-link">
           Mix log<span className="sr-only"> for {booking.client.name}</span>
         </Link>
-        <Link to={paths.consultationNew(booking.client.id)} className="text-link">
+        <Link to={paths.newConsultation(booking.client.id)} className="text-link">
           New consultation<span className="sr-only"> for {booking.client.name}</span>
         </Link>
       </div>
