@@ -4,6 +4,9 @@ import { ConvertedField } from '../../../components/ui/converted-field';
 
 type Props<T extends FieldValues> = { control: Control<T>; name: Path<T>; label: string; zone: string; error?: string; optional?: boolean };
 
+/** This minute in salon time, as the instant fields hold it: what a record form starts with. */
+export const thisMinuteIn = (zone: string) => DateTime.now().setZone(zone).startOf('minute').toISO({ suppressMilliseconds: true })!;
+
 /** A date and time typed in salon time and kept in the form as an ISO instant with its offset (what the API takes). */
 export function InstantField<T extends FieldValues>({ zone, optional = false, ...props }: Props<T>) {
   return (
