@@ -1,12 +1,17 @@
 import type { QueryClient } from '@tanstack/react-query';
-import type { Answer, Endpoint } from '../../shared/api/endpoint';
 import { bookingsApi } from '../../shared/api/bookings.api';
+import { clientsApi } from '../../shared/api/clients.api';
+import { consultationsApi } from '../../shared/api/consultations.api';
+import type { Answer, Endpoint } from '../../shared/api/endpoint';
 import { followUpRulesApi } from '../../shared/api/follow-up-rules.api';
+import { hairHistoryApi } from '../../shared/api/hair-history.api';
 import { messagesApi } from '../../shared/api/messages.api';
+import { mixLogsApi } from '../../shared/api/mix-logs.api';
 import { onlineBookingApi } from '../../shared/api/online-booking.api';
 import { photosApi } from '../../shared/api/photos.api';
 import { sessionApi } from '../../shared/api/session.api';
 import { standbyApi } from '../../shared/api/standby.api';
+import { testRecordsApi } from '../../shared/api/test-records.api';
 import { offersApi, windowsApi } from '../../shared/api/windows.api';
 import type { SessionUser } from '../../shared/schemas/auth.schemas';
 import type { BookingView } from '../../shared/schemas/booking-view.schemas';
@@ -38,9 +43,6 @@ const BOOK_VIEWS = [bookingsApi.deskDay, bookingsApi.stylistDay, bookingsApi.des
 
 // ——— Bookings: the desk's changes to bookings, a client's own bookings, and held times online ———
 
-/* The client card is still keyed by its feature's name until the client records read through their contracts. */
-const clientCardKey = (clientId: string) => ['clients', 'detail', clientId] as const;
-
 /**
  * A booking was written at the desk (booked, moved, re-planned, cancelled, or booked into a window): its own page
  * gets the server's answer, and every view whose times it may touch is read again — its history and free times to
@@ -56,7 +58,7 @@ export function bookingChanged(queryClient: QueryClient, booking: BookingView): 
 
 /** A new booking at the desk: as any change, and the client's card lists it. */
 export const bookingMade = (queryClient: QueryClient, booking: BookingView): Promise<unknown> =>
-  Promise.all([bookingChanged(queryClient, booking), queryClient.invalidateQueries({ queryKey: clientCardKey(booking.client.id) })]);
+  Promise.all([bookingChanged(queryClient, booking), refreshRecord(queryClient, [clientsApi.one], booking.client.id)]);
 
 /** A client cancelled or moved one of their own bookings: their list is read again. */
 export const myBookingChanged = (queryClient: QueryClient): Promise<unknown> => refreshEndpoints(queryClient, [bookingsApi.mine]);
@@ -126,3 +128,37 @@ export const inboundSmsReceived = (queryClient: QueryClient) => queryClient.inva
 export function myPreferencesSaved(queryClient: QueryClient, saved: MyPreferences): void {
   queryClient.setQueryData(apiKey(messagesApi.myPreferences), saved);
 }
+
+// ---- Client records: clients, their age, hair history, test records, consultations and quotes, mix logs ----
+
+/** A client was added: every client search (a new client can match any of them). */
+export const clientAdded = (queryClient: QueryClient) => refreshEndpoints(queryClient, [clientsApi.list]);
+
+/** A client's card changed (contact details, preferences, their bookings): the card and every search that may show them. */
+export const clientChanged = (queryClient: QueryClient, clientId: string) =>
+  Promise.all([refreshEndpoints(queryClient, [clientsApi.list]), refreshRecord(queryClient, [clientsApi.one], clientId)]);
+
+/** A hair history was saved: every copy (the client's own, and the team's under the client's id). */
+export const hairHistoryChanged = (queryClient: QueryClient) => refreshEndpoints(queryClient, [hairHistoryApi.mine, hairHistoryApi.ofClient]);
+
+/**
+ * A skin test, its reading or a clearance was recorded: it can flag or clear any of the client's bookings, on every
+ * day and list they appear in, so everything cached is refreshed, not only the test list.
+ */
+export const skinTestsChanged = (queryClient: QueryClient) => queryClient.invalidateQueries();
+
+/** A strand test was recorded: the client's strand tests. */
+export const strandTestsChanged = (queryClient: QueryClient, clientId: string) => refreshRecord(queryClient, [testRecordsApi.strandTests], clientId);
+
+/** A consultation was recorded: every consultation list and view. */
+export const consultationsChanged = (queryClient: QueryClient) =>
+  refreshEndpoints(queryClient, [consultationsApi.ofClient, consultationsApi.one, consultationsApi.myQuotes]);
+
+/** A quote was edited: the list of its client's consultations (the view itself is answered by the write). */
+export const quoteEdited = (queryClient: QueryClient, clientId: string) => refreshRecord(queryClient, [consultationsApi.ofClient], clientId);
+
+/** The signed-in client accepted a quote: their quotes. */
+export const myQuotesChanged = (queryClient: QueryClient) => refreshEndpoints(queryClient, [consultationsApi.myQuotes]);
+
+/** Bowls were written into a booking's mix log. */
+export const mixLogChanged = (queryClient: QueryClient, bookingId: string) => refreshRecord(queryClient, [mixLogsApi.list], bookingId);

@@ -4,7 +4,6 @@ import { insertSalon, type SalonFixture } from '../factories/salon';
 import { insertUser, type UserFixture } from '../factories/user';
 import { insertNegativeSkinTest, insertPlannedService } from '../factories/service';
 import { futureWeekday } from '../setup/dates';
-import { consultationPaths } from '../../shared/api/consultation-paths';
 
 let t: TestApp;
 let salon: SalonFixture;
@@ -40,11 +39,11 @@ beforeAll(async () => {
 });
 afterAll(() => t.close());
 
-const list = async (clientId = client.clientId!) => (await stylist$.get(consultationPaths.ofClient(clientId))).body.consultations as { id: string }[];
+const list = async (clientId = client.clientId!) => (await stylist$.get(`/api/clients/${clientId}/consultations`)).body.consultations as { id: string }[];
 
 describe('proposing a quote', () => {
   it("prices chair time at the salon's hourly rate plus product at cost, with the service's deposit", async () => {
-    const res = await stylist$.write('post', consultationPaths.propose, { consultation: consultation(), serviceId: null });
+    const res = await stylist$.write('post', '/api/consultations/propose', { consultation: consultation(), serviceId: null });
     expect(res.status).toBe(200);
     expect(res.body.serviceId).toBe(serviceId);
     expect(res.body.stepPlan.sittings).toHaveLength(1);
@@ -60,7 +59,7 @@ describe('proposing a quote', () => {
   });
 
   it('refuses levels outside 1–10, naming each field', async () => {
-    const res = await stylist$.write('post', consultationPaths.propose, { consultation: consultation({ currentLevel: 0, targetLevel: 12 }), serviceId: null });
+    const res = await stylist$.write('post', '/api/consultations/propose', { consultation: consultation({ currentLevel: 0, targetLevel: 12 }), serviceId: null });
     expect(res.status).toBe(400);
     expect(Object.keys(res.body.error.fields)).toEqual(['consultation.currentLevel', 'consultation.targetLevel']);
   });
@@ -74,24 +73,24 @@ describe('recording a consultation and its quote', () => {
       { clientId: client.clientId, consultation: consultation({ targetLevel: 11 }), photoIds: [], quote: { ...quote, serviceId } },
       { clientId: client.clientId, consultation: consultation(), photoIds: [], quote: { ...quote, serviceId, depositCents: 30000 } },
     ];
-    const levels = await stylist$.write('post', consultationPaths.create, bad[0]);
+    const levels = await stylist$.write('post', '/api/consultations', bad[0]);
     expect(levels.status).toBe(400);
     expect(levels.body.error.fields['consultation.targetLevel']).toMatch(/1–10/);
-    const deposit = await stylist$.write('post', consultationPaths.create, bad[1]);
+    const deposit = await stylist$.write('post', '/api/consultations', bad[1]);
     expect(deposit.body.error.fields['quote.depositCents']).toMatch(/more than the price/);
     const [photo] = await t.testDb.db
       .insertInto('client_photos')
       .values({ salon_id: salon.salonId, client_id: other.clientId!, booking_id: null, kind: 'hair_now', storage_key: 'x/y.jpg', mime: 'image/jpeg', bytes: 10, width: 1, height: 1 })
       .returning('id')
       .execute();
-    const photos = await stylist$.write('post', consultationPaths.create, { ...bad[1], quote: { ...quote, serviceId }, photoIds: [photo.id] });
+    const photos = await stylist$.write('post', '/api/consultations', { ...bad[1], quote: { ...quote, serviceId }, photoIds: [photo.id] });
     expect(photos.status).toBe(400);
     expect(photos.body.error.fields.photoIds).toMatch(/own photos/);
     expect(await list()).toEqual([]);
   });
 
   it('refuses a NUL byte or a lone surrogate in typed text, naming the field, never a 500', async () => {
-    const res = await stylist$.write('post', consultationPaths.create, {
+    const res = await stylist$.write('post', '/api/consultations', {
       clientId: client.clientId, consultation: consultation({ conditionNotes: 'dry\u0000ends' }), photoIds: [],
       quote: { ...quote, serviceId, notes: 'half \ud800 pair', overrideReason: 'reason\u0000' },
     });
@@ -102,14 +101,14 @@ describe('recording a consultation and its quote', () => {
 
   it('saves the edited quote with the rules’ warnings; the desk books it with the quote’s plan, price and deposit', async () => {
     const coloured = consultation({ currentLevel: 4, targetLevel: 6, history: { ...virgin, natural: false, permanent: true } });
-    const created = await stylist$.write('post', consultationPaths.create, { clientId: client.clientId, consultation: coloured, photoIds: [], quote: { ...quote, serviceId } });
+    const created = await stylist$.write('post', '/api/consultations', { clientId: client.clientId, consultation: coloured, photoIds: [], quote: { ...quote, serviceId } });
     expect(created.status).toBe(201);
     expect(created.body.quote).toMatchObject({ status: 'draft', priceCents: 26000, depositCents: 6000, notes: 'Edited: longer application' });
     // Lightening previously coloured hair with no strand test on record (common practice: strand test first).
     expect(created.body.quote.warnings.map((w: { code: string }) => w.code)).toContain('strand_test_missing');
     expect(await list()).toHaveLength(1);
 
-    const edited = await stylist$.write('put', consultationPaths.quote(created.body.id), { ...quote, serviceId, depositCents: 99999 });
+    const edited = await stylist$.write('put', `/api/consultations/${created.body.id}/quote`, { ...quote, serviceId, depositCents: 99999 });
     expect(edited.status).toBe(400);
     expect(edited.body.error.fields.depositCents).toBeDefined();
 
@@ -128,7 +127,7 @@ describe('recording a consultation and its quote', () => {
     expect(booked.status).toBe(201);
     const booking = await t.testDb.db.selectFrom('bookings').select(['quote_id', 'price_cents', 'deposit_cents']).where('id', '=', booked.body.id).executeTakeFirstOrThrow();
     expect(booking).toEqual({ quote_id: created.body.quote.id, price_cents: 26000, deposit_cents: 6000 });
-    const view = await desk$.get(consultationPaths.one(created.body.id));
+    const view = await desk$.get(`/api/consultations/${created.body.id}`);
     expect(view.body.quote.bookingIds).toEqual([booked.body.id]);
   });
 });
@@ -137,10 +136,10 @@ describe('sending and accepting a quote', () => {
   it('e-mails the summary (draft → sent), and only the signed-in client accepts it (sent → accepted)', async () => {
     const [consultation] = (await list()) as { id: string; quote: { id: string } }[];
     // A draft is not the client's to see or accept yet.
-    expect((await client$.get(consultationPaths.myQuotes)).body.consultations).toEqual([]);
-    expect((await client$.write('post', consultationPaths.acceptMyQuote(consultation.quote.id), {})).status).toBe(404);
+    expect((await client$.get('/api/me/quotes')).body.consultations).toEqual([]);
+    expect((await client$.write('post', `/api/me/quotes/${consultation.quote.id}/accept`, {})).status).toBe(404);
 
-    const sent = await stylist$.write('post', consultationPaths.sendQuote(consultation.id), {});
+    const sent = await stylist$.write('post', `/api/consultations/${consultation.id}/quote/send`, {});
     expect(sent.status).toBe(200);
     expect(sent.body.quote.status).toBe('sent');
     const mail = await vi.waitFor(() => {
@@ -154,14 +153,14 @@ describe('sending and accepting a quote', () => {
 
     // Another client cannot accept it; the staff cannot use the client's route.
     const other$ = await signedInAgent(t.app, other.email, other.password);
-    expect((await other$.write('post', consultationPaths.acceptMyQuote(consultation.quote.id), {})).status).toBe(404);
-    expect((await desk$.write('post', consultationPaths.acceptMyQuote(consultation.quote.id), {})).status).toBe(403);
+    expect((await other$.write('post', `/api/me/quotes/${consultation.quote.id}/accept`, {})).status).toBe(404);
+    expect((await desk$.write('post', `/api/me/quotes/${consultation.quote.id}/accept`, {})).status).toBe(403);
 
-    const accepted = await client$.write('post', consultationPaths.acceptMyQuote(consultation.quote.id), {});
+    const accepted = await client$.write('post', `/api/me/quotes/${consultation.quote.id}/accept`, {});
     expect(accepted.status).toBe(200);
     expect(accepted.body.quote.status).toBe('accepted');
     expect(accepted.body.quote.acceptedAt).not.toBeNull();
-    expect((await client$.get(consultationPaths.myQuotes)).body.consultations[0].quote.status).toBe('accepted');
+    expect((await client$.get('/api/me/quotes')).body.consultations[0].quote.status).toBe('accepted');
   });
 });
 
@@ -187,7 +186,7 @@ describe('the strand test gates lightening', () => {
   });
 
   it('the proposal plans no lightener and no remover, and says why, even when the consultation says passed', async () => {
-    const res = await stylist$.write('post', consultationPaths.propose, { consultation: coloured(), serviceId: null, clientId: failed.clientId });
+    const res = await stylist$.write('post', '/api/consultations/propose', { consultation: coloured(), serviceId: null, clientId: failed.clientId });
     expect(res.status).toBe(200);
     expect(res.body.strandTest).toBe('failed');
     const products = res.body.stepPlan.sittings.flatMap((s: { steps: { product: string }[] }) => s.steps.map((st) => st.product));
@@ -198,14 +197,14 @@ describe('the strand test gates lightening', () => {
 
   it('refuses a quote with lightener after the failed test unless a reason is written, and keeps the reason', async () => {
     const body = (over: object) => ({ clientId: failed.clientId, consultation: coloured(), photoIds: [], quote: quote(over) });
-    const refused = await stylist$.write('post', consultationPaths.create, body({}));
+    const refused = await stylist$.write('post', '/api/consultations', body({}));
     expect(refused.status).toBe(409);
     expect(refused.body.error.code).toBe('STRAND_TEST');
     expect(refused.body.error.fields['quote.overrideReason']).toMatch(/strand test failed.*sitting 1, step 1 “Apply lightener, section 1 of 2”/);
     expect(await list(failed.clientId!)).toEqual([]);
 
     const reason = 'Re-tested after two bond treatments: the nape strand held at level 7.';
-    const saved = await stylist$.write('post', consultationPaths.create, body({ overrideReason: reason }));
+    const saved = await stylist$.write('post', '/api/consultations', body({ overrideReason: reason }));
     expect(saved.status).toBe(201);
     expect(saved.body.quote.overrideReason).toBe(reason);
     expect(saved.body.strandTest).toBe('failed');
@@ -213,17 +212,17 @@ describe('the strand test gates lightening', () => {
     expect(audit).toEqual([{ action: 'lightening planned after a failed strand test', after: expect.objectContaining({ reason }) }]);
 
     // Editing it without the reason is refused too, naming the field; taking the lightener out needs none.
-    const edit = await stylist$.write('put', consultationPaths.quote(saved.body.id), quote({ overrideReason: '' }));
+    const edit = await stylist$.write('put', `/api/consultations/${saved.body.id}/quote`, quote({ overrideReason: '' }));
     expect(edit.status).toBe(409);
     expect(edit.body.error.fields.overrideReason).toMatch(/write why/);
     const care = { sittings: [{ steps: [{ kind: 'basin', label: 'Bond treatment', product: 'bond_care', minutes: 15 }, { kind: 'hands_on', label: 'Blow-dry', product: 'none', minutes: 35 }] }] };
-    expect((await stylist$.write('put', consultationPaths.quote(saved.body.id), quote({ stepPlan: care, priceCents: 9000, depositCents: 0 }))).status).toBe(200);
+    expect((await stylist$.write('put', `/api/consultations/${saved.body.id}/quote`, quote({ stepPlan: care, priceCents: 9000, depositCents: 0 }))).status).toBe(200);
   });
 
   it('refuses a quote whose developing step is over its family’s limit, naming the step', async () => {
     // 45 min applying + up to 50 lifting = 95 min of lightener on the hair, over the 50 min limit.
     const tooLong = { sittings: [{ steps: [{ kind: 'hands_on', label: 'Apply lightener', product: 'lightener', minutes: 45 }, { kind: 'developing', label: 'Lightener lifts', product: 'lightener', minMinutes: 30, maxMinutes: 50 }, { kind: 'basin', label: 'Rinse', product: 'none', minutes: 15 }] }] };
-    const res = await stylist$.write('post', consultationPaths.create, { clientId: client.clientId, consultation: consultation(), photoIds: [], quote: quote({ stepPlan: tooLong }) });
+    const res = await stylist$.write('post', '/api/consultations', { clientId: client.clientId, consultation: consultation(), photoIds: [], quote: quote({ stepPlan: tooLong }) });
     expect(res.status).toBe(400);
     expect(res.body.error.fields['quote.stepPlan.sittings.0.steps.1']).toMatch(/“Lightener lifts”: lightener may be on the hair at most 50 min; this plan keeps it on up to 95 min/);
   });
@@ -233,7 +232,7 @@ describe('the strand test gates lightening', () => {
     await db.updateTable('salons').set({ lightener_max_minutes: 25 }).where('id', '=', salon.salonId).execute();
     try {
       // 40 min of lightener applying in 4 sections = 10 min, + 20 min least lifting = 30 min > 25.
-      const res = await stylist$.write('post', consultationPaths.propose, { consultation: coloured(), serviceId: null, clientId: client.clientId });
+      const res = await stylist$.write('post', '/api/consultations/propose', { consultation: coloured(), serviceId: null, clientId: client.clientId });
       expect(res.status).toBe(409);
       expect(res.body.error.message).toMatch(/limit of 25 min on the hair/);
     } finally {

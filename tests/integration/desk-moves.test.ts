@@ -250,7 +250,7 @@ describe('what cancelling does to the deposit, read before confirming (desk)', (
     expect(kept.body.message).toMatch(/^The \$50\.00 deposit is kept: the first sitting is less than 720 hours away/);
 
     // A new test reads positive (a reaction): the record now blocks this colour.
-    const recorded = await s.desk$.write('post', apiPaths.skinTests(reacting.clientId!), {
+    const recorded = await s.desk$.write('post', `/api/clients/${reacting.clientId!}/skin-tests`, {
       appliedAt: new Date(Date.now() - 3 * 24 * HOUR).toISOString(), readAt: new Date(Date.now() - 24 * HOUR).toISOString(), result: 'positive', product: 'Permanent colour with 6 % developer', notes: 'Redness behind the ear',
     });
     expect(recorded.status).toBe(201);

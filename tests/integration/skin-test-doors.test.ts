@@ -190,7 +190,7 @@ describe('a reaction recorded later flags the bookings it affects', () => {
     expect((await queued()).length).toBeGreaterThan(0);
 
     // A new test (e.g. before another service) reads positive.
-    const recorded = await desk$.write('post', apiPaths.skinTests(client.clientId!), {
+    const recorded = await desk$.write('post', `/api/clients/${client.clientId!}/skin-tests`, {
       appliedAt: new Date(Date.now() - 3 * DAY).toISOString(), readAt: new Date(Date.now() - DAY).toISOString(), result: 'positive', product: 'Permanent colour with 6 % developer', notes: 'Redness behind the ear',
     });
     expect(recorded.status).toBe(201);
@@ -199,11 +199,11 @@ describe('a reaction recorded later flags the bookings it affects', () => {
     expect((await queued()).every((m) => m.status === 'dropped')).toBe(true);
 
     // Only the owner may clear, with a reason; the desk is turned away.
-    expect((await desk$.write('post', apiPaths.skinTestClearances(client.clientId!), { reason: 'Written advice from the client’s dermatologist, 2 Dec' })).status).toBe(403);
-    expect((await owner$.write('post', apiPaths.skinTestClearances(client.clientId!), { reason: 'short' })).status).toBe(400);
-    const cleared = await owner$.write('post', apiPaths.skinTestClearances(client.clientId!), { reason: 'Written advice from the client’s dermatologist, 2 Dec' });
+    expect((await desk$.write('post', `/api/clients/${client.clientId!}/skin-test-clearances`, { reason: 'Written advice from the client’s dermatologist, 2 Dec' })).status).toBe(403);
+    expect((await owner$.write('post', `/api/clients/${client.clientId!}/skin-test-clearances`, { reason: 'short' })).status).toBe(400);
+    const cleared = await owner$.write('post', `/api/clients/${client.clientId!}/skin-test-clearances`, { reason: 'Written advice from the client’s dermatologist, 2 Dec' });
     expect(cleared.status).toBe(201);
-    const list = (await desk$.get(apiPaths.skinTests(client.clientId!))).body;
+    const list = (await desk$.get(`/api/clients/${client.clientId!}/skin-tests`)).body;
     expect(list.clearances).toMatchObject([{ reason: 'Written advice from the client’s dermatologist, 2 Dec' }]);
     // Cleared, but the newest reading is still the reaction: colour needs a new negative test.
     expect((await desk$.get(`/api/bookings/${id}`)).body.skinTest.status).toBe('blocked');
@@ -222,8 +222,8 @@ describe('a reaction recorded later flags the bookings it affects', () => {
     const notice = await t.testDb.db.selectFrom('messages').select(['subject', 'body']).where('booking_id', '=', booked.body.id).where('kind', '=', 'confirmation').where('channel', '=', 'email').executeTakeFirstOrThrow();
     expect(notice.subject).toMatch(/^Kept for you, waiting on your skin test/);
     expect(notice.body).not.toMatch(/You're booked/);
-    const test = (await desk$.get(apiPaths.skinTests(client.clientId!))).body.tests[0];
-    const read = await desk$.write('post', apiPaths.skinTestReading(client.clientId!, test.id), { readAt: new Date().toISOString(), result: 'negative' });
+    const test = (await desk$.get(`/api/clients/${client.clientId!}/skin-tests`)).body.tests[0];
+    const read = await desk$.write('post', `/api/clients/${client.clientId!}/skin-tests/${test.id}/reading`, { readAt: new Date().toISOString(), result: 'negative' });
     expect(read.status).toBe(200);
     expect((await desk$.get(`/api/bookings/${booked.body.id}`)).body.skinTest.status).toBe('passed');
   });
@@ -241,7 +241,7 @@ describe('hair history reaches booking', () => {
     const held = await visitor.write('post', '/api/public/holds', { salonSlug: slug, serviceId: rootColour, stylistId: ana.staffId, start: localIso(futureWeekday(5, 4), '10:00') }, { 'X-Forwarded-For': '10.9.0.2' });
     expect(held.status).toBe(201);
     expectRefused(await c.write('post', `/api/me/holds/${held.body.holdId}/claim`, { secret: held.body.holdSecret }), /reacted to hair colour before.*book a consultation/);
-    const card = (await desk$.get(apiPaths.client(client.clientId!))).body;
+    const card = (await desk$.get(`/api/clients/${client.clientId!}`)).body;
     expect(card.reportedReaction).toBe('Itchy scalp and swelling after a box dye, 2024');
   });
 
@@ -275,8 +275,8 @@ describe('age', () => {
     expect(claim.status).toBe(409);
     expect(claim.body.error.message).toMatch(/not booked online for anyone under 16/);
 
-    expect((await desk$.write('post', apiPaths.guardianConsents(client.clientId!), { guardianName: '', relationship: 'mother', note: '' })).status).toBe(400);
-    const consent = await desk$.write('post', apiPaths.guardianConsents(client.clientId!), { guardianName: 'Ida Lund', relationship: 'mother', note: 'Signed form on file' });
+    expect((await desk$.write('post', `/api/clients/${client.clientId!}/guardian-consents`, { guardianName: '', relationship: 'mother', note: '' })).status).toBe(400);
+    const consent = await desk$.write('post', `/api/clients/${client.clientId!}/guardian-consents`, { guardianName: 'Ida Lund', relationship: 'mother', note: 'Signed form on file' });
     expect(consent.status).toBe(201);
     expect(consent.body.guardianConsents).toMatchObject([{ guardianName: 'Ida Lund', relationship: 'mother' }]);
     expect((await book(client.clientId!, rootColour, oxidative, start)).status).toBe(201);
@@ -293,7 +293,7 @@ describe('the other way out: change the steps', () => {
     const booked = await book(client.clientId!, rootColour, oxidative, start);
     expect(booked.status).toBe(201);
     const id = booked.body.id as string;
-    await desk$.write('post', apiPaths.skinTests(client.clientId!), { appliedAt: new Date(Date.now() - 3 * DAY).toISOString(), readAt: new Date(Date.now() - DAY).toISOString(), result: 'positive', product: '', notes: '' });
+    await desk$.write('post', `/api/clients/${client.clientId!}/skin-tests`, { appliedAt: new Date(Date.now() - 3 * DAY).toISOString(), readAt: new Date(Date.now() - DAY).toISOString(), result: 'positive', product: '', notes: '' });
     expect((await desk$.get(`/api/bookings/${id}`)).body.skinTest.status).toBe('blocked');
     // Still oxidative: refused with the reason.
     expectRefused(await desk$.write('post', `/api/bookings/${id}/plan`, { stepPlan: oxidative }), /showed a reaction/);

@@ -8,7 +8,6 @@ import { insertSalon, type SalonFixture } from '../factories/salon';
 import { insertUser, type UserFixture } from '../factories/user';
 import { insertService, insertTestBooking } from '../factories/booking';
 import { futureWeekday, localIso } from '../setup/dates';
-import { apiPaths } from '../../shared/api/api-paths';
 import { listAudit } from '../../server/features/audit/audit.repository';
 
 // Skin and strand tests are safety records: a reading is stored once and audited, the names of who
@@ -45,7 +44,7 @@ afterAll(() => t.close());
 
 /** A test applied at `appliedAt` and not read yet, recorded through the API by `by`. */
 async function applyTest(clientId: string, appliedAt: string, by: Agent = stylist$) {
-  const res = await by.write('post', apiPaths.skinTests(clientId), { appliedAt, readAt: null, result: 'pending', product: 'Permanent 6.0 with 6 % developer', notes: 'Behind the left ear' });
+  const res = await by.write('post', `/api/clients/${clientId}/skin-tests`, { appliedAt, readAt: null, result: 'pending', product: 'Permanent 6.0 with 6 % developer', notes: 'Behind the left ear' });
   expect(res.status).toBe(201);
   return res.body as { id: string; appliedAt: string; result: string; recordedByName: string | null; readByName: string | null };
 }
@@ -62,10 +61,10 @@ describe('recording the reading of a pending skin test', () => {
     expect(applied).toMatchObject({ result: 'pending', recordedByName: await nameOf(stylist), readByName: null });
     const readAt = iso(appliedMs + 48 * HOUR);
 
-    const read = await desk$.write('post', apiPaths.skinTestReading(clientId, applied.id), { readAt, result: 'negative' });
+    const read = await desk$.write('post', `/api/clients/${clientId}/skin-tests/${applied.id}/reading`, { readAt, result: 'negative' });
     expect(read.status).toBe(200);
     expect(read.body).toMatchObject({ id: applied.id, readAt, result: 'negative', recordedByName: await nameOf(stylist), readByName: await nameOf(desk) });
-    expect((await desk$.get(apiPaths.skinTests(clientId))).body.tests).toEqual([read.body]);
+    expect((await desk$.get(`/api/clients/${clientId}/skin-tests`)).body.tests).toEqual([read.body]);
 
     const entries = await audit('skin_test', applied.id);
     expect(entries.map((e) => [e.action, e.actor])).toEqual([['recorded', await nameOf(stylist)], ['reading recorded', await nameOf(desk)]]);
@@ -74,10 +73,10 @@ describe('recording the reading of a pending skin test', () => {
     expect(entries[1].after).toEqual({ readAt, result: 'negative', readByName: await nameOf(desk) });
 
     // Stored once: a second reading is refused with the reason, and the first stands.
-    const again = await owner$.write('post', apiPaths.skinTestReading(clientId, applied.id), { readAt: iso(Date.now() - HOUR), result: 'positive' });
+    const again = await owner$.write('post', `/api/clients/${clientId}/skin-tests/${applied.id}/reading`, { readAt: iso(Date.now() - HOUR), result: 'positive' });
     expect(again.status).toBe(409);
     expect(again.body.error.message).toMatch(/already read \(negative/);
-    expect((await desk$.get(apiPaths.skinTests(clientId))).body.tests[0]).toMatchObject({ result: 'negative', readAt });
+    expect((await desk$.get(`/api/clients/${clientId}/skin-tests`)).body.tests[0]).toMatchObject({ result: 'negative', readAt });
     expect(await audit('skin_test', applied.id)).toHaveLength(2);
   });
 
@@ -85,7 +84,7 @@ describe('recording the reading of a pending skin test', () => {
     for (const [agent, result] of [[owner$, 'positive'], [stylist$, 'unclear']] as const) {
       const clientId = await newClient();
       const applied = await applyTest(clientId, iso(Date.now() - 49 * HOUR), desk$);
-      const read = await agent.write('post', apiPaths.skinTestReading(clientId, applied.id), { readAt: iso(Date.now() - HOUR), result });
+      const read = await agent.write('post', `/api/clients/${clientId}/skin-tests/${applied.id}/reading`, { readAt: iso(Date.now() - HOUR), result });
       expect(read.status).toBe(200);
       expect(read.body.result).toBe(result);
     }
@@ -96,7 +95,7 @@ describe('recording the reading of a pending skin test', () => {
     // 17:00 UTC on Tuesday 3 March 2026 is 10:00 in Denver: mountain standard time (UTC−7) until US daylight
     // time starts on the second Sunday of March, 8 March 2026 (IANA time-zone database, America/Denver).
     const applied = await applyTest(clientId, '2026-03-03T17:00:00Z');
-    const early = await desk$.write('post', apiPaths.skinTestReading(clientId, applied.id), { readAt: '2026-03-03T16:59:00Z', result: 'negative' });
+    const early = await desk$.write('post', `/api/clients/${clientId}/skin-tests/${applied.id}/reading`, { readAt: '2026-03-03T16:59:00Z', result: 'negative' });
     expect(early.status).toBe(400);
     expect(early.body.error.fields.readAt).toBe('A test cannot be read before it was applied (Tue 3 Mar 2026, 10:00 AM).');
   });
@@ -119,10 +118,10 @@ describe('recording the reading of a pending skin test', () => {
     const clientId = await newClient();
     const appliedMs = Date.now() - 49 * HOUR;
     const applied = await applyTest(clientId, iso(appliedMs));
-    const res = await desk$.write('post', apiPaths.skinTestReading(clientId, applied.id), body(appliedMs));
+    const res = await desk$.write('post', `/api/clients/${clientId}/skin-tests/${applied.id}/reading`, body(appliedMs));
     expect(res.status).toBe(400);
     expect(res.body.error.fields[field]).toMatch(message);
-    expect((await desk$.get(apiPaths.skinTests(clientId))).body.tests).toEqual([applied]);
+    expect((await desk$.get(`/api/clients/${clientId}/skin-tests`)).body.tests).toEqual([applied]);
     expect((await audit('skin_test', applied.id)).map((e) => e.action)).toEqual(['recorded']);
   });
 
@@ -130,33 +129,33 @@ describe('recording the reading of a pending skin test', () => {
     const [mine, someoneElse] = [await newClient(), await newClient()];
     const applied = await applyTest(mine, iso(Date.now() - 49 * HOUR));
     const reading = { readAt: iso(Date.now() - HOUR), result: 'positive' };
-    const wrongClient = await desk$.write('post', apiPaths.skinTestReading(someoneElse, applied.id), reading);
+    const wrongClient = await desk$.write('post', `/api/clients/${someoneElse}/skin-tests/${applied.id}/reading`, reading);
     expect(wrongClient.status).toBe(404);
     expect(wrongClient.body.error.message).toMatch(/skin test was not found/);
-    const wrongSalon = await otherOwner$.write('post', apiPaths.skinTestReading(mine, applied.id), reading);
+    const wrongSalon = await otherOwner$.write('post', `/api/clients/${mine}/skin-tests/${applied.id}/reading`, reading);
     expect(wrongSalon.status).toBe(404);
-    const badId = await desk$.write('post', apiPaths.skinTestReading(mine, 'not-a-test'), reading);
+    const badId = await desk$.write('post', `/api/clients/${mine}/skin-tests/not-a-test/reading`, reading);
     expect(badId.status).toBe(400);
     expect(badId.body.error.fields.testId).toBeTruthy();
     const notJson = await desk$.agent
-      .post(apiPaths.skinTestReading(mine, applied.id))
+      .post(`/api/clients/${mine}/skin-tests/${applied.id}/reading`)
       .set('X-CSRF-Token', (await desk$.get('/api/csrf')).body.token)
       .set('Content-Type', 'application/json')
       .send('{"readAt": ');
     expect(notJson.status).toBe(400);
     await desk$.refreshCsrf();
-    expect((await desk$.get(apiPaths.skinTests(mine))).body.tests).toEqual([applied]);
+    expect((await desk$.get(`/api/clients/${mine}/skin-tests`)).body.tests).toEqual([applied]);
   });
 
   it('refuses, naming the field, a new test read before it was applied or applied in the future', async () => {
     const clientId = await newClient();
-    const backwards = await desk$.write('post', apiPaths.skinTests(clientId), { appliedAt: iso(Date.now() - HOUR), readAt: iso(Date.now() - 2 * HOUR), result: 'negative' });
+    const backwards = await desk$.write('post', `/api/clients/${clientId}/skin-tests`, { appliedAt: iso(Date.now() - HOUR), readAt: iso(Date.now() - 2 * HOUR), result: 'negative' });
     expect(backwards.status).toBe(400);
     expect(backwards.body.error.fields.readAt).toMatch(/before it was applied/);
-    const ahead = await desk$.write('post', apiPaths.skinTests(clientId), { appliedAt: iso(Date.now() + 24 * HOUR), readAt: null, result: 'pending' });
+    const ahead = await desk$.write('post', `/api/clients/${clientId}/skin-tests`, { appliedAt: iso(Date.now() + 24 * HOUR), readAt: null, result: 'pending' });
     expect(ahead.status).toBe(400);
     expect(ahead.body.error.fields.appliedAt).toMatch(/book a skin test/);
-    expect((await desk$.get(apiPaths.skinTests(clientId))).body.tests).toEqual([]);
+    expect((await desk$.get(`/api/clients/${clientId}/skin-tests`)).body.tests).toEqual([]);
   });
 });
 
@@ -168,7 +167,7 @@ describe('test records are kept', () => {
     const leavingName = await nameOf(leaving);
     const clientId = await newClient();
     const applied = await applyTest(clientId, iso(Date.now() - 49 * HOUR), leaving$);
-    await leaving$.write('post', apiPaths.skinTestReading(clientId, applied.id), { readAt: iso(Date.now() - HOUR), result: 'negative' });
+    await leaving$.write('post', `/api/clients/${clientId}/skin-tests/${applied.id}/reading`, { readAt: iso(Date.now() - HOUR), result: 'negative' });
     const strandRes = await leaving$.write('post', `/api/clients/${clientId}/strand-tests`, strand);
     expect(strandRes.status).toBe(201);
     expect((await audit('strand_test', strandRes.body.id)).map((e) => e.action)).toEqual(['recorded']);
@@ -176,11 +175,11 @@ describe('test records are kept', () => {
     const deactivated = await owner$.write('post', `/api/owner/setup/staff/${leaving.id}/deactivate`, {});
     expect(deactivated.status).toBe(200);
     const kept = { recordedByName: leavingName, readByName: leavingName };
-    expect((await desk$.get(apiPaths.skinTests(clientId))).body.tests[0]).toMatchObject(kept);
+    expect((await desk$.get(`/api/clients/${clientId}/skin-tests`)).body.tests[0]).toMatchObject(kept);
 
     // No route removes an account; an operator deleting the row is the worst case the records must survive.
     await db.deleteFrom('users').where('id', '=', leaving.id).execute();
-    expect((await desk$.get(apiPaths.skinTests(clientId))).body.tests[0]).toMatchObject(kept);
+    expect((await desk$.get(`/api/clients/${clientId}/skin-tests`)).body.tests[0]).toMatchObject(kept);
     expect((await desk$.get(`/api/clients/${clientId}/strand-tests`)).body.tests[0]).toMatchObject({ recordedByName: leavingName });
     const row = await db.selectFrom('skin_tests').select(['recorded_by', 'read_by']).where('id', '=', applied.id).executeTakeFirstOrThrow();
     expect(row).toEqual({ recorded_by: null, read_by: null });
@@ -203,7 +202,7 @@ describe('test records are kept', () => {
       steps: [['hands_on', localIso(futureWeekday(3, 3), '10:00'), localIso(futureWeekday(3, 3), '10:30')]],
     });
     const lists = async () => ({
-      skin: (await desk$.get(apiPaths.skinTests(clientId))).body.tests.map((x: { id: string }) => x.id),
+      skin: (await desk$.get(`/api/clients/${clientId}/skin-tests`)).body.tests.map((x: { id: string }) => x.id),
       strand: (await desk$.get(`/api/clients/${clientId}/strand-tests`)).body.tests.map((x: { id: string }) => x.id),
     });
     const everything = { skin: [applied.id], strand: [strandTest.id] };

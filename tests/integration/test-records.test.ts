@@ -5,7 +5,6 @@ import { insertUser, type UserFixture } from '../factories/user';
 import { correctionPlan, insertNegativeSkinTest, insertPlannedService } from '../factories/service';
 import { futureWeekday } from '../setup/dates';
 import { apiPaths } from '../../shared/api/api-paths';
-import { consultationPaths } from '../../shared/api/consultation-paths';
 
 let t: TestApp;
 let salon: SalonFixture;
@@ -46,7 +45,7 @@ describe('skin tests gate oxidative colour', () => {
   ] as const)('a %s result recorded on the client card blocks colour bookings with a clear message', async (result, message) => {
     const client = await insertUser(t.testDb.db, salon.salonId, 'client');
     await insertNegativeSkinTest(t.testDb.db, salon.salonId, client.clientId!, 60);
-    const recorded = await stylist$.write('post', apiPaths.skinTests(client.clientId!), {
+    const recorded = await stylist$.write('post', `/api/clients/${client.clientId!}/skin-tests`, {
       appliedAt: iso(Date.now() - 3 * DAY), readAt: iso(Date.now() - DAY), result, product: 'Permanent 6.0 with 6 % developer', notes: '',
     });
     expect(recorded.status).toBe(201);
@@ -62,10 +61,10 @@ describe('skin tests gate oxidative colour', () => {
 
   it('refuses a read result without the time it was read, naming readAt, and stores nothing', async () => {
     const client = await insertUser(t.testDb.db, salon.salonId, 'client');
-    const res = await stylist$.write('post', apiPaths.skinTests(client.clientId!), { appliedAt: iso(Date.now() - DAY), readAt: null, result: 'negative', product: '', notes: '' });
+    const res = await stylist$.write('post', `/api/clients/${client.clientId!}/skin-tests`, { appliedAt: iso(Date.now() - DAY), readAt: null, result: 'negative', product: '', notes: '' });
     expect(res.status).toBe(400);
     expect(res.body.error.fields.readAt).toMatch(/time it was read/);
-    expect((await stylist$.get(apiPaths.skinTests(client.clientId!))).body.tests).toEqual([]);
+    expect((await stylist$.get(`/api/clients/${client.clientId!}/skin-tests`)).body.tests).toEqual([]);
   });
 });
 
@@ -79,7 +78,7 @@ describe('strand tests', () => {
     length: 'medium', density: 'medium', elasticity: 'good', porosity: 'normal', conditionNotes: '', strandTest: 'none', wantsCut: false, notes: '',
   };
   const warningCodes = async (clientId: string) =>
-    ((await stylist$.write('post', consultationPaths.propose, { consultation: coloured, serviceId: null, clientId })).body.warnings as { code: string }[]).map((w) => w.code);
+    ((await stylist$.write('post', '/api/consultations/propose', { consultation: coloured, serviceId: null, clientId })).body.warnings as { code: string }[]).map((w) => w.code);
 
   it('refuses a developer above the salon maximum (12 %) and a strand photo of another client, storing nothing', async () => {
     const client = await insertUser(t.testDb.db, salon.salonId, 'client');

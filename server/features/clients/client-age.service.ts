@@ -1,42 +1,50 @@
+import { DateTime } from 'luxon';
 import type { z } from 'zod';
 import type { SessionUser } from '../../../shared/schemas/auth.schemas';
 import type { ClientAge, RecordGuardianConsentSchema } from '../../../shared/schemas/age.schemas';
 import type { Db } from '../../db/database';
 import { invalidField, notFound } from '../../lib/app-error';
+import { myClientId } from '../../auth/client-access';
 import { writeAudit } from '../audit/audit.repository';
+import { findSalon } from '../salon/salon.repository';
 import { userName } from '../session/users.repository';
-import { findClientIdForUser } from './clients.repository';
 import { insertGuardianConsent, readClientAge, setDateOfBirth } from './client-age.repository';
 
-export async function clientAge(db: Db, salonId: string, clientId: string): Promise<ClientAge> {
-  const age = await readClientAge(db, salonId, clientId);
+/** A client's age record within the user's salon. */
+export async function clientAge(db: Db, user: SessionUser, clientId: string): Promise<ClientAge> {
+  const age = await readClientAge(db, user.salonId, clientId);
   if (!age) throw notFound('That client');
   return age;
 }
 
-/** Sets (or removes) a date of birth: the desk for any client of its salon, a client for themselves. Audited. */
-export async function recordDateOfBirth(db: Db, user: SessionUser, clientId: string, dateOfBirth: string | null, today: string): Promise<ClientAge> {
+/** The signed-in client's own age record. */
+export async function myAge(db: Db, user: SessionUser): Promise<ClientAge> {
+  return clientAge(db, user, await myClientId(db, user));
+}
+
+/** A client sets (or removes) their own date of birth. */
+export async function setMyDateOfBirth(db: Db, user: SessionUser, dateOfBirth: string | null, now: Date): Promise<ClientAge> {
+  return setClientDateOfBirth(db, user, await myClientId(db, user), dateOfBirth, now);
+}
+
+/** Sets (or removes) a date of birth, never one after today in the salon's time zone; audited. The desk for any client of its salon. */
+export async function setClientDateOfBirth(db: Db, user: SessionUser, clientId: string, dateOfBirth: string | null, now: Date): Promise<ClientAge> {
+  const today = DateTime.fromJSDate(now, { zone: (await findSalon(db, user.salonId)).timeZone }).toISODate()!;
   if (dateOfBirth && dateOfBirth > today) throw invalidField('dateOfBirth', 'A date of birth cannot be in the future.');
   return db.transaction().execute(async (trx) => {
-    const before = await clientAge(trx, user.salonId, clientId);
+    const before = await clientAge(trx, user, clientId);
     await setDateOfBirth(trx, user.salonId, clientId, dateOfBirth);
     await writeAudit(trx, { salonId: user.salonId, actorUserId: user.id, entity: 'client', entityId: clientId, action: 'date of birth', before: { dateOfBirth: before.dateOfBirth }, after: { dateOfBirth } });
-    return clientAge(trx, user.salonId, clientId);
+    return clientAge(trx, user, clientId);
   });
 }
 
-export async function ownClientId(db: Db, user: SessionUser): Promise<string> {
-  const id = await findClientIdForUser(db, user.id);
-  if (!id) throw notFound('Your client record');
-  return id;
-}
-
 /** The desk records a guardian's consent (who consented, how related, who recorded it, when); kept and audited. */
-export async function recordGuardianConsent(db: Db, user: SessionUser, clientId: string, body: z.infer<typeof RecordGuardianConsentSchema>): Promise<ClientAge> {
+export async function addGuardianConsent(db: Db, user: SessionUser, clientId: string, body: z.infer<typeof RecordGuardianConsentSchema>): Promise<ClientAge> {
   return db.transaction().execute(async (trx) => {
-    await clientAge(trx, user.salonId, clientId);
+    await clientAge(trx, user, clientId);
     const id = await insertGuardianConsent(trx, { salonId: user.salonId, clientId, ...body, recordedBy: user.id, recordedByName: await userName(trx, user.id) });
     await writeAudit(trx, { salonId: user.salonId, actorUserId: user.id, entity: 'client', entityId: clientId, action: 'guardian consent recorded', after: { id, ...body } });
-    return clientAge(trx, user.salonId, clientId);
+    return clientAge(trx, user, clientId);
   });
 }

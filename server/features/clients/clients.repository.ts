@@ -37,9 +37,16 @@ export async function findClient(db: Db, salonId: string, id: string) {
     .executeTakeFirst();
 }
 
-export async function findClientIdForUser(db: Db, userId: string): Promise<string | undefined> {
-  const row = await db.selectFrom('clients').select('id').where('user_id', '=', userId).executeTakeFirst();
-  return row?.id;
+/** The client record of a client's account; with `salonId`, only within that salon. */
+export async function findClientIdForUser(db: Db, userId: string, salonId?: string): Promise<string | undefined> {
+  let query = db.selectFrom('clients').select('id').where('user_id', '=', userId);
+  if (salonId) query = query.where('salon_id', '=', salonId);
+  return (await query.executeTakeFirst())?.id;
+}
+
+/** A client of this salon and the account it belongs to (null for a client only the desk knows). */
+export async function findClientAccount(db: Db, salonId: string, clientId: string): Promise<{ id: string; userId: string | null } | undefined> {
+  return db.selectFrom('clients').select(['id', 'user_id as userId']).where('id', '=', clientId).where('salon_id', '=', salonId).executeTakeFirst();
 }
 
 export interface ClientContactChange {

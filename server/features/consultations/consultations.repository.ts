@@ -1,6 +1,7 @@
 import { sql } from 'kysely';
 import type { Db } from '../../db/database';
-import type { ConsultationInput, QuoteEdit, QuoteWarning } from '../../../shared/schemas/consultation.schemas';
+import type { ConsultationInput, ConsultationView, QuoteEdit, QuoteWarning } from '../../../shared/schemas/consultation.schemas';
+import { StepPlanSchema } from '../../../shared/schemas/step-plan.schemas';
 import { correctionRate, productCentsPerGram } from '../quote-prices/quote-prices.repository';
 
 /** What a quote is priced from: the salon's hourly rate, its cut price, its cost per gram per product type and its currency. */
@@ -87,14 +88,42 @@ const consultationQuery = (db: Db, salonId: string) =>
     ])
     .where('c.salon_id', '=', salonId);
 
-export type ConsultationRow = Awaited<ReturnType<ReturnType<typeof consultationQuery>['executeTakeFirstOrThrow']>>;
+type ConsultationRow = Awaited<ReturnType<ReturnType<typeof consultationQuery>['executeTakeFirstOrThrow']>>;
 
-export function findConsultation(db: Db, salonId: string, id: string) {
-  return consultationQuery(db, salonId).where('c.id', '=', id).executeTakeFirst();
+/**
+ * A stored consultation and its quote, and where the quote is e-mailed. The strand test the quote is held to
+ * is not stored: it follows the client's latest record (the service decides it).
+ */
+export type StoredConsultation = Omit<ConsultationView, 'strandTest'> & { clientEmail: string | null };
+
+function toStored(r: ConsultationRow): StoredConsultation {
+  const details = r.details as ConsultationInput;
+  return {
+    id: r.id,
+    clientId: r.client_id,
+    clientName: r.client_name,
+    clientEmail: r.client_email,
+    createdAt: r.created_at.toISOString(),
+    createdByName: r.created_by_name,
+    // Records kept before the vivid question was asked did not want one.
+    consultation: { ...details, vivid: details.vivid ?? false },
+    photoIds: r.photo_ids,
+    quote: {
+      id: r.quote_id, status: r.status, serviceId: r.service_id, serviceName: r.service_name, stepPlan: StepPlanSchema.parse(r.step_plan),
+      priceCents: r.price_cents, depositCents: r.deposit_cents, notes: r.notes, overrideReason: r.override_reason, warnings: r.warnings as QuoteWarning[],
+      sentAt: r.sent_at?.toISOString() ?? null, acceptedAt: r.accepted_at?.toISOString() ?? null, bookingIds: r.booking_ids,
+    },
+  };
 }
 
-export function listClientConsultations(db: Db, salonId: string, clientId: string) {
-  return consultationQuery(db, salonId).where('c.client_id', '=', clientId).orderBy('c.created_at', 'desc').execute();
+export async function findConsultation(db: Db, salonId: string, id: string): Promise<StoredConsultation | undefined> {
+  const row = await consultationQuery(db, salonId).where('c.id', '=', id).executeTakeFirst();
+  return row && toStored(row);
+}
+
+/** A client's consultations, newest first. */
+export async function listClientConsultations(db: Db, salonId: string, clientId: string): Promise<StoredConsultation[]> {
+  return (await consultationQuery(db, salonId).where('c.client_id', '=', clientId).orderBy('c.created_at', 'desc').execute()).map(toStored);
 }
 
 /** A quote of this salon and client, for booking it. */

@@ -1,8 +1,11 @@
+import type { z } from 'zod';
 import type { Db } from '../../db/database';
 import type { SessionUser } from '../../../shared/schemas/auth.schemas';
-import type { ConsultationInput, ConsultationView, CreateConsultation, ProposedQuoteView, QuoteEdit, QuoteWarning, StrandOutcome } from '../../../shared/schemas/consultation.schemas';
+import type {
+  ConsultationInput, ConsultationView, CreateConsultation, ProposeQuoteRequestSchema, ProposedQuoteView, QuoteEdit, QuoteWarning, StrandOutcome,
+} from '../../../shared/schemas/consultation.schemas';
 import type { ServiceSummary } from '../../../shared/schemas/service.schemas';
-import { StepPlanSchema, type StepPlan } from '../../../shared/schemas/step-plan.schemas';
+import type { StepPlan } from '../../../shared/schemas/step-plan.schemas';
 import { proposeQuote, type PlanningRules, type ProposedQuote, type QuotePricing } from '../../../shared/quotes/propose-quote';
 import { ProposalRefused } from '../../../shared/quotes/stage-steps';
 import { gatedSteps, strandOutcome, strandOverrideProblem } from '../../../shared/quotes/strand-gate';
@@ -15,8 +18,9 @@ import { listServices } from '../services/services.repository';
 import { findSalon } from '../salon/salon.repository';
 import { writeAudit } from '../audit/audit.repository';
 import { assertWithinProcessingLimits } from '../planning/processing-limits-check';
+import { myClientId } from '../../auth/client-access';
 import {
-  clientPhotoIds, findConsultation, insertConsultation, listClientConsultations, quotePriceInputs, setQuoteStatus, updateQuote, type ConsultationRow,
+  clientPhotoIds, findConsultation, insertConsultation, listClientConsultations, quotePriceInputs, setQuoteStatus, updateQuote, type StoredConsultation,
 } from './consultations.repository';
 
 const invalid = (field: string, message: string) => new AppError('VALIDATION_FAILED', 400, message, { [field]: message });
@@ -66,7 +70,9 @@ function proposeOrRefuse(c: ConsultationInput, pricing: QuotePricing, rules: Pla
 }
 
 /** The proposal for a consultation at this salon's prices; the deposit follows the service's deposit. */
-export async function proposeFor(db: Db, salonId: string, asked: ConsultationInput, serviceId: string | null, clientId?: string | null): Promise<ProposedQuoteView> {
+export async function proposeFor(db: Db, user: SessionUser, request: z.output<typeof ProposeQuoteRequestSchema>): Promise<ProposedQuoteView> {
+  const { consultation: asked, serviceId, clientId } = request;
+  const { salonId } = user;
   const consultation = await withRecordedStrandTest(db, salonId, clientId, asked);
   const { prices, rules } = await quoteInputs(db, salonId);
   const draft = proposeOrRefuse(consultation, { ...prices, deposit: { kind: 'fixed', cents: 0 } }, rules);
@@ -127,11 +133,11 @@ export async function editQuote(db: Db, user: SessionUser, id: string, edit: Quo
   const row = await findConsultation(db, user.salonId, id);
   if (!row) throw notFound('That consultation');
   await bookableService(db, user.salonId, edit.serviceId, 'serviceId');
-  const outcome = strandOutcome((row.details as ConsultationInput).strandTest, await latestStrandResult(db, user.salonId, row.client_id));
+  const outcome = strandOutcome(row.consultation.strandTest, await latestStrandResult(db, user.salonId, row.clientId));
   assertQuoteAllowed(edit.stepPlan, (await findSalon(db, user.salonId)).processingLimits, outcome, edit.overrideReason, '');
   await db.transaction().execute(async (trx) => {
     await updateQuote(trx, id, edit);
-    await auditOverride(trx, user, row.quote_id, edit.stepPlan, outcome, edit.overrideReason);
+    await auditOverride(trx, user, row.quote.id, edit.stepPlan, outcome, edit.overrideReason);
   });
   return consultationView(db, user.salonId, id);
 }
@@ -140,56 +146,48 @@ export async function editQuote(db: Db, user: SessionUser, id: string, edit: Quo
 export async function sendQuote(db: Db, mailer: Mailer, user: SessionUser, id: string, acceptUrl: string, now: Date): Promise<ConsultationView> {
   const row = await findConsultation(db, user.salonId, id);
   if (!row) throw notFound('That consultation');
-  if (!row.client_email) throw invalid('email', 'This client has no e-mail address; add one on the client card first.');
-  const salon = await db.selectFrom('salons').select(['name', 'currency']).where('id', '=', user.salonId).executeTakeFirstOrThrow();
-  await mailer.send(quoteMail(toView(row, null), row.client_email, salon, acceptUrl));
-  await setQuoteStatus(db, row.quote_id, 'sent', now);
+  if (!row.clientEmail) throw invalid('email', 'This client has no e-mail address; add one on the client card first.');
+  const salon = await findSalon(db, user.salonId);
+  await mailer.send(quoteMail(toView(row, null), row.clientEmail, salon, acceptUrl));
+  await setQuoteStatus(db, row.quote.id, 'sent', now);
   return consultationView(db, user.salonId, id);
 }
 
 /** The signed-in client's sent and accepted quotes, newest first. */
-export async function myQuotes(db: Db, salonId: string, clientId: string): Promise<ConsultationView[]> {
-  const latest = await latestStrandResult(db, salonId, clientId);
-  return (await listClientConsultations(db, salonId, clientId)).filter((r) => r.status !== 'draft').map((r) => toView(r, latest));
+export async function myQuotes(db: Db, user: SessionUser): Promise<{ consultations: ConsultationView[] }> {
+  const clientId = await myClientId(db, user);
+  const latest = await latestStrandResult(db, user.salonId, clientId);
+  return { consultations: (await listClientConsultations(db, user.salonId, clientId)).filter((c) => c.quote.status !== 'draft').map((c) => toView(c, latest)) };
 }
 
-/** The client accepts a quote that was sent to them (accepting twice answers the same). */
-export async function acceptMyQuote(db: Db, salonId: string, clientId: string, quoteId: string, now: Date): Promise<ConsultationView> {
-  const row = (await listClientConsultations(db, salonId, clientId)).find((r) => r.quote_id === quoteId && r.status !== 'draft');
+/** The signed-in client accepts a quote that was sent to them (accepting twice answers the same). */
+export async function acceptMyQuote(db: Db, user: SessionUser, quoteId: string, now: Date): Promise<ConsultationView> {
+  const clientId = await myClientId(db, user);
+  const row = (await listClientConsultations(db, user.salonId, clientId)).find((c) => c.quote.id === quoteId && c.quote.status !== 'draft');
   if (!row) throw notFound('That quote');
-  if (row.status === 'sent') await setQuoteStatus(db, quoteId, 'accepted', now);
-  return consultationView(db, salonId, row.id);
+  if (row.quote.status === 'sent') await setQuoteStatus(db, quoteId, 'accepted', now);
+  return consultationView(db, user.salonId, row.id);
 }
 
-export async function consultationView(db: Db, salonId: string, id: string): Promise<ConsultationView> {
+/** One consultation of the user's salon. */
+export async function oneConsultation(db: Db, user: SessionUser, id: string): Promise<ConsultationView> {
+  return consultationView(db, user.salonId, id);
+}
+
+async function consultationView(db: Db, salonId: string, id: string): Promise<ConsultationView> {
   const row = await findConsultation(db, salonId, id);
   if (!row) throw notFound('That consultation');
-  return toView(row, await latestStrandResult(db, salonId, row.client_id));
+  return toView(row, await latestStrandResult(db, salonId, row.clientId));
 }
 
-export async function clientConsultations(db: Db, salonId: string, clientId: string): Promise<ConsultationView[]> {
-  if (!(await findClient(db, salonId, clientId))) throw notFound('That client');
-  const latest = await latestStrandResult(db, salonId, clientId);
-  return (await listClientConsultations(db, salonId, clientId)).map((r) => toView(r, latest));
+export async function clientConsultations(db: Db, user: SessionUser, clientId: string): Promise<{ consultations: ConsultationView[] }> {
+  if (!(await findClient(db, user.salonId, clientId))) throw notFound('That client');
+  const latest = await latestStrandResult(db, user.salonId, clientId);
+  return { consultations: (await listClientConsultations(db, user.salonId, clientId)).map((c) => toView(c, latest)) };
 }
 
 /** A stored consultation and quote; `latestRecorded` is the client's latest strand test, which the quote is held to. */
-export function toView(r: ConsultationRow, latestRecorded: Awaited<ReturnType<typeof latestStrandResult>>): ConsultationView {
-  const details = r.details as ConsultationInput;
-  return {
-    id: r.id,
-    clientId: r.client_id,
-    clientName: r.client_name,
-    createdAt: r.created_at.toISOString(),
-    createdByName: r.created_by_name,
-    // Records kept before the vivid question was asked did not want one.
-    consultation: { ...details, vivid: details.vivid ?? false },
-    strandTest: strandOutcome(details.strandTest, latestRecorded),
-    photoIds: r.photo_ids,
-    quote: {
-      id: r.quote_id, status: r.status, serviceId: r.service_id, serviceName: r.service_name, stepPlan: StepPlanSchema.parse(r.step_plan),
-      priceCents: r.price_cents, depositCents: r.deposit_cents, notes: r.notes, overrideReason: r.override_reason, warnings: r.warnings as QuoteWarning[],
-      sentAt: r.sent_at?.toISOString() ?? null, acceptedAt: r.accepted_at?.toISOString() ?? null, bookingIds: r.booking_ids,
-    },
-  };
+function toView(stored: StoredConsultation, latestRecorded: Awaited<ReturnType<typeof latestStrandResult>>): ConsultationView {
+  const { clientEmail, consultation, ...rest } = stored;
+  return { ...rest, consultation, strandTest: strandOutcome(consultation.strandTest, latestRecorded) };
 }

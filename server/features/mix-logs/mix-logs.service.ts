@@ -5,21 +5,16 @@ import { CalculatorError, checkDeveloperStrength, percentToVolume } from '../../
 import { productUse } from '../../../shared/calculators/product-use';
 import { AppError, notFound } from '../../lib/app-error';
 import { productCentsPerGram } from '../quote-prices/quote-prices.repository';
-import { findBookingForMixLog, insertMixLogs, listMixLogs, listRepeatSources, listSittingStarts, nextBowlNo, type MixLogRow } from './mix-logs.repository';
+import { findBookingForMixLog, insertMixLogs, listMixLogs, listRepeatSources, listSittingStarts, maxDeveloperPercent, nextBowlNo, type StoredBowl } from './mix-logs.repository';
 
 const round = (n: number, places = 1) => Math.round(n * 10 ** places) / 10 ** places;
 const invalid = (field: string, message: string) => new AppError('VALIDATION_FAILED', 400, message, { [field]: message });
 
-export function toView(r: MixLogRow): MixLog {
-  const pct = r.developer_percent === null ? null : Number(r.developer_percent);
-  return {
-    id: r.id, sittingSeq: r.sitting_seq, bowlNo: r.bowl_no, productType: r.product_type, shadeNotes: r.shade_notes,
-    // Trade volumes (6 % = 20 vol), as developer bottles are labelled and stylists say it.
-    developerPercent: pct, developerVolume: pct === null ? null : round(percentToVolume(pct, { trade: true })), ratio: r.ratio, grams: r.grams,
-    appliedTo: r.applied_to, plannedMinutes: r.planned_minutes, actualMinutes: r.actual_minutes, heat: r.heat,
-    resultNotes: r.result_notes, createdAt: r.created_at.toISOString(),
-  };
-}
+// Trade volumes (6 % = 20 vol), as developer bottles are labelled and stylists say it.
+const toView = (b: StoredBowl): MixLog => ({
+  ...b,
+  developerVolume: b.developerPercent === null ? null : round(percentToVolume(b.developerPercent, { trade: true })),
+});
 
 /**
  * The booking, as the caller may see it: within their salon, and for a stylist only the bookings they work on.
@@ -27,8 +22,8 @@ export function toView(r: MixLogRow): MixLog {
  */
 async function bookingFor(db: Db, user: SessionUser, bookingId: string, what = 'That booking') {
   const booking = await findBookingForMixLog(db, user.salonId, bookingId);
-  if (!booking || (user.role === 'stylist' && booking.stylist_user_id !== user.id)) throw notFound(what);
-  return { ...booking, maxPercent: Number(booking.max_developer_percent) };
+  if (!booking || (user.role === 'stylist' && booking.stylistUserId !== user.id)) throw notFound(what);
+  return booking;
 }
 
 /** Writing: the booking must be one the caller may see and not cancelled. */
@@ -43,8 +38,8 @@ async function requireSitting(db: Db, bookingId: string, seq: number, field: str
   if (!(await listSittingStarts(db, bookingId)).some((s) => s.seq === seq)) throw invalid(field, `This booking has no sitting ${seq}.`);
 }
 
-/** Refuses a developer above the salon's maximum, naming the field (also used by strand tests). */
-export function checkStrength(percent: number | null, maxPercent: number, field: string) {
+/** Refuses a developer above the salon's maximum, naming the field. */
+function checkStrength(percent: number | null, maxPercent: number, field: string) {
   if (percent === null) return;
   try {
     checkDeveloperStrength(percent, maxPercent, field);
@@ -54,18 +49,23 @@ export function checkStrength(percent: number | null, maxPercent: number, field:
   }
 }
 
+/** Refuses a developer above this salon's maximum, naming the field (a strand test is held to it too). */
+export async function checkSalonStrength(db: Db, salonId: string, percent: number | null, field: string): Promise<void> {
+  if (percent !== null) checkStrength(percent, await maxDeveloperPercent(db, salonId), field);
+}
+
 export async function mixLogList(db: Db, user: SessionUser, bookingId: string, now: Date): Promise<MixLogList> {
   const booking = await bookingFor(db, user, bookingId);
   const [sittings, rows, costs, sources] = await Promise.all([
     listSittingStarts(db, bookingId),
     listMixLogs(db, bookingId),
     productCentsPerGram(db, user.salonId),
-    booking.client_id ? listRepeatSources(db, user.salonId, booking.client_id, user.role === 'stylist' ? user.id : null) : [],
+    booking.clientId ? listRepeatSources(db, user.salonId, booking.clientId, user.role === 'stylist' ? user.id : null) : [],
   ]);
   const logs = rows.map(toView);
   return {
     bookingStatus: booking.status,
-    maxDeveloperPercent: booking.maxPercent,
+    maxDeveloperPercent: booking.maxDeveloperPercent,
     logs,
     sittings: sittings.map((s) => ({
       seq: s.seq,
@@ -73,13 +73,13 @@ export async function mixLogList(db: Db, user: SessionUser, bookingId: string, n
       started: s.start <= now,
       ...productUse(logs.filter((l) => l.sittingSeq === s.seq).flatMap((l) => l.grams), costs),
     })),
-    repeatSources: sources.map((r) => ({ bookingId: r.booking_id, sittingSeq: r.sitting_seq, serviceName: r.service_name, start: r.start.toISOString(), bowls: r.bowls })),
+    repeatSources: sources,
   };
 }
 
 export async function writeMixLog(db: Db, user: SessionUser, bookingId: string, body: WriteMixLog): Promise<MixLog> {
   const booking = await bookingToWrite(db, user, bookingId);
-  checkStrength(body.developerPercent, booking.maxPercent, 'developerPercent');
+  checkStrength(body.developerPercent, booking.maxDeveloperPercent, 'developerPercent');
   await requireSitting(db, bookingId, body.sittingSeq, 'sittingSeq');
   try {
     const [row] = await insertMixLogs(db, [{ ...body, salonId: user.salonId, bookingId, createdBy: user.id }]);
@@ -96,24 +96,21 @@ export async function repeatMixLog(db: Db, user: SessionUser, bookingId: string,
   const booking = await bookingToWrite(db, user, bookingId);
   // The copy is a read of the source's mix log, so the same rule applies: a stylist copies only their own bookings.
   const source = await bookingFor(db, user, input.fromBookingId, 'An earlier booking of this client');
-  if (!booking.client_id || source.client_id !== booking.client_id) throw notFound('An earlier booking of this client');
+  if (!booking.clientId || source.clientId !== booking.clientId) throw notFound('An earlier booking of this client');
   if (input.fromBookingId === bookingId && input.sitting === input.intoSitting) throw invalid('sitting', 'Pick an earlier sitting to copy from.');
   await requireSitting(db, bookingId, input.intoSitting, 'intoSitting');
   const bowls = await listMixLogs(db, input.fromBookingId, input.sitting);
   if (bowls.length === 0) throw invalid('sitting', `Sitting ${input.sitting} of that booking has no mix log to repeat.`);
   // The salon's maximum may have been lowered since; a copy must obey today's setting.
-  for (const b of bowls) checkStrength(b.developer_percent === null ? null : Number(b.developer_percent), booking.maxPercent, 'developerPercent');
+  for (const b of bowls) checkStrength(b.developerPercent, booking.maxDeveloperPercent, 'developerPercent');
   const first = await nextBowlNo(db, bookingId, input.intoSitting);
   const rows = await insertMixLogs(
     db,
-    bowls.map((b, i) => {
-      const v = toView(b);
-      return {
-        sittingSeq: input.intoSitting, bowlNo: first + i, productType: v.productType, shadeNotes: v.shadeNotes, developerPercent: v.developerPercent,
-        ratio: v.ratio, grams: v.grams, appliedTo: v.appliedTo, plannedMinutes: v.plannedMinutes, actualMinutes: null, heat: v.heat, resultNotes: '',
-        salonId: user.salonId, bookingId, createdBy: user.id,
-      };
-    }),
+    bowls.map((b, i) => ({
+      sittingSeq: input.intoSitting, bowlNo: first + i, productType: b.productType, shadeNotes: b.shadeNotes, developerPercent: b.developerPercent,
+      ratio: b.ratio, grams: b.grams, appliedTo: b.appliedTo, plannedMinutes: b.plannedMinutes, actualMinutes: null, heat: b.heat, resultNotes: '',
+      salonId: user.salonId, bookingId, createdBy: user.id,
+    })),
   );
   return { copied: rows.length, logs: rows.map(toView) };
 }

@@ -1,6 +1,7 @@
 import { sql } from 'kysely';
 import type { Db } from '../../db/database';
 import type { SkinTestRecord } from '../../../shared/rules/skin-test-rule';
+import type { SkinTest, SkinTestClearance } from '../../../shared/schemas/skin-test.schemas';
 
 // The names are the ones stored with the record (copied by trigger when it was written), so a removed
 // account's tests still say who recorded and read them.
@@ -10,23 +11,36 @@ const skinTests = (db: Db, salonId: string, clientId: string) =>
     .select(['t.id', 't.applied_at', 't.read_at', 't.result', 't.product', 't.notes', 't.recorded_by_name', 't.read_by_name'])
     .where('t.salon_id', '=', salonId)
     .where('t.client_id', '=', clientId);
+type SkinTestRow = Awaited<ReturnType<ReturnType<typeof skinTests>['execute']>>[number];
 
-export function listSkinTests(db: Db, salonId: string, clientId: string) {
-  return skinTests(db, salonId, clientId).orderBy('t.applied_at', 'desc').execute();
+const toSkinTest = (t: SkinTestRow): SkinTest => ({
+  id: t.id,
+  appliedAt: t.applied_at.toISOString(),
+  readAt: t.read_at?.toISOString() ?? null,
+  result: t.result,
+  product: t.product,
+  notes: t.notes,
+  recordedByName: t.recorded_by_name,
+  readByName: t.read_by_name,
+});
+
+/** A client's skin tests in this salon, newest first. */
+export async function listSkinTests(db: Db, salonId: string, clientId: string): Promise<SkinTest[]> {
+  return (await skinTests(db, salonId, clientId).orderBy('t.applied_at', 'desc').execute()).map(toSkinTest);
 }
-export type SkinTestRow = Awaited<ReturnType<typeof listSkinTests>>[number];
 
 /** One of the client's tests in this salon, or undefined; `lock` holds it for the rest of the transaction. */
-export function findSkinTest(db: Db, salonId: string, clientId: string, id: string, lock = false): Promise<SkinTestRow | undefined> {
+export async function findSkinTest(db: Db, salonId: string, clientId: string, id: string, lock = false): Promise<SkinTest | undefined> {
   const query = skinTests(db, salonId, clientId).where('t.id', '=', id);
-  return (lock ? query.forUpdate() : query).executeTakeFirst();
+  const row = await (lock ? query.forUpdate() : query).executeTakeFirst();
+  return row && toSkinTest(row);
 }
 
 export async function insertSkinTest(
   db: Db,
   t: { salonId: string; clientId: string; appliedAt: Date; readAt: Date | null; result: SkinTestRecord['result']; product: string; notes: string; recordedBy: string },
-) {
-  return db
+): Promise<string> {
+  const row = await db
     .insertInto('skin_tests')
     .values({
       salon_id: t.salonId, client_id: t.clientId, applied_at: t.appliedAt, read_at: t.readAt, result: t.result, product: t.product, notes: t.notes,
@@ -34,6 +48,7 @@ export async function insertSkinTest(
     })
     .returning('id')
     .executeTakeFirstOrThrow();
+  return row.id;
 }
 
 /** Stores the reading of a pending test; false when the test is no longer pending (read meanwhile). */
@@ -97,8 +112,8 @@ export async function skinTestClearancesOf(db: Db, clientIds: readonly string[])
 }
 
 /** The owner's clearances for a client, oldest first, with who recorded each (the name kept beside the id). */
-export function listClearances(db: Db, salonId: string, clientId: string) {
-  return db
+export async function listClearances(db: Db, salonId: string, clientId: string): Promise<SkinTestClearance[]> {
+  const rows = await db
     .selectFrom('skin_test_clearances')
     .select(['id', 'recorded_at', 'recorded_by_name', 'reason'])
     .where('salon_id', '=', salonId)
@@ -106,6 +121,7 @@ export function listClearances(db: Db, salonId: string, clientId: string) {
     .orderBy('recorded_at')
     .orderBy('id')
     .execute();
+  return rows.map((c) => ({ id: c.id, recordedAt: c.recorded_at.toISOString(), recordedByName: c.recorded_by_name, reason: c.reason }));
 }
 
 export async function insertClearance(db: Db, c: { salonId: string; clientId: string; recordedBy: string; recordedByName: string; reason: string }): Promise<string> {

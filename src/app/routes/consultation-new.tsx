@@ -9,9 +9,10 @@ import { Button } from '../../components/ui/button';
 import { FormAlert } from '../../components/ui/form-alert';
 import { PageHeader } from '../../components/ui/page-header';
 import { SectionCard } from '../../components/ui/section-card';
+import { paths } from '../../config/paths';
 import { catalogueQueries } from '../../features/catalogue/api/catalogue-queries';
 import { clientQueries } from '../../features/clients/api/client-queries';
-import { consultationPagePaths, useCreateConsultation, useProposeQuote } from '../../features/consultations/api/consultation-queries';
+import { useCreateConsultation, useProposeQuote } from '../../features/consultations/api/consultation-queries';
 import { ConsultationFields } from '../../features/consultations/components/consultation-fields';
 import { PhotoPicker } from '../../features/consultations/components/photo-picker';
 import { ProposalLines, QuoteWarnings } from '../../features/consultations/components/quote-advice';
@@ -83,7 +84,7 @@ export function Component() {
               onSave={(quote) =>
                 create
                   .mutateAsync({ clientId, consultation: proposed.values.consultation, photoIds: proposed.values.photoIds, quote })
-                  .then((saved) => navigate(consultationPagePaths.one(saved.id)))
+                  .then((saved) => navigate(paths.consultation(saved.id)))
               }
             />
           </div>

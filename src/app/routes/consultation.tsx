@@ -8,7 +8,7 @@ import { SectionCard } from '../../components/ui/section-card';
 import { paths } from '../../config/paths';
 import { sessionQueries } from '../../features/auth/api/session-queries';
 import { catalogueQueries } from '../../features/catalogue/api/catalogue-queries';
-import { consultationPagePaths, consultationQueries, useEditQuote } from '../../features/consultations/api/consultation-queries';
+import { consultationQueries, useEditQuote } from '../../features/consultations/api/consultation-queries';
 import { quoteStatusLabels } from '../../features/consultations/components/consultation-labels';
 import { ConsultationSummary } from '../../features/consultations/components/consultation-summary';
 import { SendQuote } from '../../features/consultations/components/send-quote';
@@ -51,7 +51,7 @@ export function Component() {
         subtitle={`Consultation of ${formatDate(view.createdAt, formatFor(salon.timeZone), { width: 'short' })}${view.createdByName ? ` by ${view.createdByName}` : ''} · ${quoteStatusLabels[q.status]} · ${formatMoney(q.priceCents, salon.currency)}, deposit ${formatMoney(q.depositCents, salon.currency)}`}
         action={
           desk && (
-            <Link to={consultationPagePaths.bookQuote(view.id)} className={buttonClasses('primary')}>
+            <Link to={paths.deskBook(view.id)} className={buttonClasses('primary')}>
               Book this quote
             </Link>
           )

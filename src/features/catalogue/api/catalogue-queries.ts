@@ -1,21 +1,10 @@
-import { queryOptions } from '@tanstack/react-query';
-import { apiPaths } from '../../../../shared/api/api-paths';
-import { ServiceListSchema, StylistListSchema } from '../../../../shared/schemas/service.schemas';
-import { apiGet } from '../../../lib/api-client';
+import { catalogueApi } from '../../../../shared/api/catalogue.api';
+import { apiQuery } from '../../../lib/api-client';
 
-/** The salon's menu and its stylists: change rarely, read on most desk pages. */
+// The salon's menu and its stylists change rarely and are read on most desk pages.
+const FIVE_MINUTES = 5 * 60_000;
+
 export const catalogueQueries = {
-  all: () => ['catalogue'] as const,
-  services: () =>
-    queryOptions({
-      queryKey: [...catalogueQueries.all(), 'services'] as const,
-      queryFn: () => apiGet(apiPaths.services, ServiceListSchema),
-      staleTime: 5 * 60_000,
-    }),
-  stylists: () =>
-    queryOptions({
-      queryKey: [...catalogueQueries.all(), 'stylists'] as const,
-      queryFn: () => apiGet(apiPaths.stylists, StylistListSchema),
-      staleTime: 5 * 60_000,
-    }),
+  services: () => ({ ...apiQuery(catalogueApi.services), staleTime: FIVE_MINUTES }),
+  stylists: () => ({ ...apiQuery(catalogueApi.stylists), staleTime: FIVE_MINUTES }),
 };

@@ -1,26 +1,21 @@
-import { queryOptions, useMutation, useQueryClient } from '@tanstack/react-query';
+import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { z } from 'zod';
-import { apiPaths } from '../../../../shared/api/api-paths';
-import { ClientAgeSchema, type RecordGuardianConsentSchema } from '../../../../shared/schemas/age.schemas';
-import { apiGet, apiWrite } from '../../../lib/api-client';
-
-/** Whose age record: the signed-in client's own ('me'), or a client of the salon by id (staff). */
-export type AgeOwner = 'me' | { clientId: string };
+import { clientsApi } from '../../../../shared/api/clients.api';
+import type { ClientAge, RecordGuardianConsentSchema } from '../../../../shared/schemas/age.schemas';
+import { apiQuery, callApi } from '../../../lib/api-client';
+import type { RecordOwner } from '../../../lib/record-owner';
 
 export const ageQueries = {
-  all: () => ['client-age'] as const,
-  detail: (owner: AgeOwner) =>
-    queryOptions({
-      queryKey: [...ageQueries.all(), owner === 'me' ? 'me' : owner.clientId] as const,
-      queryFn: () => apiGet(owner === 'me' ? apiPaths.myAge : apiPaths.clientAge(owner.clientId), ClientAgeSchema),
-    }),
+  detail: (owner: RecordOwner) => (owner === 'me' ? apiQuery(clientsApi.myAge) : apiQuery(clientsApi.age, { params: { id: owner.clientId } })),
 };
 
-export function useSetDateOfBirth(owner: AgeOwner) {
+export function useSetDateOfBirth(owner: RecordOwner) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (dateOfBirth: string | null) =>
-      apiWrite('PUT', owner === 'me' ? apiPaths.myDateOfBirth : apiPaths.clientDateOfBirth(owner.clientId), { dateOfBirth }, ClientAgeSchema),
+    mutationFn: (dateOfBirth: string | null): Promise<ClientAge> =>
+      owner === 'me'
+        ? callApi(clientsApi.setMyDateOfBirth, { body: { dateOfBirth } })
+        : callApi(clientsApi.setDateOfBirth, { params: { id: owner.clientId }, body: { dateOfBirth } }),
     onSuccess: (saved) => queryClient.setQueryData(ageQueries.detail(owner).queryKey, saved),
   });
 }
@@ -28,7 +23,7 @@ export function useSetDateOfBirth(owner: AgeOwner) {
 export function useRecordGuardianConsent(clientId: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (body: z.input<typeof RecordGuardianConsentSchema>) => apiWrite('POST', apiPaths.guardianConsents(clientId), body, ClientAgeSchema),
+    mutationFn: (body: z.input<typeof RecordGuardianConsentSchema>) => callApi(clientsApi.addGuardianConsent, { params: { id: clientId }, body }),
     onSuccess: (saved) => queryClient.setQueryData(ageQueries.detail({ clientId }).queryKey, saved),
   });
 }

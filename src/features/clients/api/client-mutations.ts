@@ -1,22 +1,24 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { z } from 'zod';
-import { apiPaths } from '../../../../shared/api/api-paths';
+import { clientsApi } from '../../../../shared/api/clients.api';
 import type { CreateClientSchema } from '../../../../shared/schemas/booking.schemas';
-import { ClientSummarySchema } from '../../../../shared/schemas/client.schemas';
 import type { UpdateClientSchema } from '../../../../shared/schemas/contact.schemas';
-import { apiWrite } from '../../../lib/api-client';
-import { clientQueries } from './client-queries';
+import { callApi } from '../../../lib/api-client';
+import { clientAdded, clientChanged } from '../../../lib/cache-rules';
 
 export type CreateClientInput = z.input<typeof CreateClientSchema>;
 /** What the form hands over after parsing: the phone already in E.164, blanks as null. */
 export type CreateClientValues = z.output<typeof CreateClientSchema>;
 
+// Known issue, kept as it was: the forms hand over parsed values, where a blank e-mail or mobile is null, and the
+// contract's input takes a string there, so the server refuses a blank one (400). Fixing it changes what is sent.
+const asSent = <T>(values: unknown) => values as T;
+
 export function useCreateClient() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (body: CreateClientValues) => apiWrite('POST', apiPaths.clients, body, ClientSummarySchema),
-    // A new client can match any earlier search.
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: clientQueries.lists() }),
+    mutationFn: (body: CreateClientValues) => callApi(clientsApi.create, { body: asSent<CreateClientInput>(body) }),
+    onSuccess: () => clientAdded(queryClient),
   });
 }
 
@@ -24,7 +26,7 @@ export function useCreateClient() {
 export function useUpdateClient(id: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (body: z.output<typeof UpdateClientSchema>) => apiWrite('PATCH', apiPaths.client(id), body, ClientSummarySchema),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: clientQueries.all() }),
+    mutationFn: (body: z.output<typeof UpdateClientSchema>) => callApi(clientsApi.update, { params: { id }, body: asSent<z.input<typeof UpdateClientSchema>>(body) }),
+    onSuccess: () => clientChanged(queryClient, id),
   });
 }

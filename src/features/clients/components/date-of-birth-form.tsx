@@ -4,13 +4,14 @@ import { Button } from '../../../components/ui/button';
 import { FormAlert } from '../../../components/ui/form-alert';
 import { TextField } from '../../../components/ui/text-field';
 import { ApiError } from '../../../lib/api-error';
-import { ageQueries, useSetDateOfBirth, type AgeOwner } from '../api/age-queries';
+import type { RecordOwner } from '../../../lib/record-owner';
+import { ageQueries, useSetDateOfBirth } from '../api/age-queries';
 
 /**
  * A date of birth (optional). Colour mixed with developer is labelled "not intended for use on persons under the age
  * of 16" (EU Cosmetics Regulation), so the salon needs to know.
  */
-export function DateOfBirthForm({ owner }: { owner: AgeOwner }) {
+export function DateOfBirthForm({ owner }: { owner: RecordOwner }) {
   const age = useQuery(ageQueries.detail(owner));
   const save = useSetDateOfBirth(owner);
   const [draft, setDraft] = useState<string | null>(null);

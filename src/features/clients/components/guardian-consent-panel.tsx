@@ -1,17 +1,11 @@
-import { zodResolver } from '@hookform/resolvers/zod';
 import { useQuery } from '@tanstack/react-query';
-import { useForm } from 'react-hook-form';
-import type { z } from 'zod';
 import { RecordGuardianConsentSchema } from '../../../../shared/schemas/age.schemas';
 import { ageOn, MIN_AGE_WITHOUT_CONSENT } from '../../../../shared/rules/age-rule';
-import { Button } from '../../../components/ui/button';
-import { FormAlert } from '../../../components/ui/form-alert';
 import { Notice } from '../../../components/ui/notice';
+import { RecordForm, useRecordForm } from '../../../components/ui/record-form';
 import { TextField } from '../../../components/ui/text-field';
-import { fieldError, showServerErrors } from '../../../lib/form-errors';
+import { fieldError } from '../../../lib/form-errors';
 import { todayIn } from '../../../lib/time';
-import { formatDate } from '../../../../shared/format/date-time';
-import { formatFor } from '../../../../shared/format/locale';
 import { ageQueries, useRecordGuardianConsent } from '../api/age-queries';
 import { DateOfBirthForm } from './date-of-birth-form';
 
@@ -21,8 +15,12 @@ type Props = { clientId: string; zone: string };
 export function GuardianConsentPanel({ clientId, zone }: Props) {
   const age = useQuery(ageQueries.detail({ clientId }));
   const record = useRecordGuardianConsent(clientId);
-  const form = useForm<z.input<typeof RecordGuardianConsentSchema>>({ resolver: zodResolver(RecordGuardianConsentSchema), defaultValues: { guardianName: '', relationship: '', note: '' } });
-  const submit = form.handleSubmit((body) => record.mutateAsync(body).then(() => form.reset(), (e) => showServerErrors(e, form.setError, ['guardianName', 'relationship', 'note'])));
+  const { form, submit } = useRecordForm(
+    RecordGuardianConsentSchema,
+    { guardianName: '', relationship: '', note: '' },
+    (body) => record.mutateAsync(body),
+    ['guardianName', 'relationship', 'note'],
+  );
   const dob = age.data?.dateOfBirth ?? null;
   const under = dob !== null && ageOn(dob, todayIn(zone)) < MIN_AGE_WITHOUT_CONSENT;
   const err = (name: string) => fieldError(form.formState.errors, name);
@@ -46,19 +44,13 @@ export function GuardianConsentPanel({ clientId, zone }: Props) {
         </ul>
       )}
       {under && (
-        <form onSubmit={(e) => void submit(e)} noValidate aria-label="Record a guardian's consent" className="flex flex-col gap-3 rounded-lg p-3 ring-1 ring-ink/15">
-          {form.formState.errors.root?.server && <FormAlert>{form.formState.errors.root.server.message}</FormAlert>}
+        <RecordForm label="Record a guardian's consent" submitLabel="Record consent" busy={form.formState.isSubmitting} error={form.formState.errors.root?.server?.message} onSubmit={submit}>
           <div className="flex flex-wrap gap-3">
             <TextField label="Guardian’s name" error={err('guardianName')} {...form.register('guardianName')} />
             <TextField label="Related as" hint="e.g. mother, legal guardian" error={err('relationship')} {...form.register('relationship')} />
           </div>
           <TextField label="Note" hint="How the consent was given, e.g. signed form on file" error={err('note')} {...form.register('note')} />
-          <div>
-            <Button type="submit" variant="secondary" busy={form.formState.isSubmitting}>
-              Record consent
-            </Button>
-          </div>
-        </form>
+        </RecordForm>
       )}
     </div>
   );

@@ -1,50 +1,37 @@
-import { queryOptions, useMutation, useQueryClient } from '@tanstack/react-query';
-import { consultationPaths } from '../../../../shared/api/consultation-paths';
-import {
-  ConsultationListSchema, ConsultationViewSchema, ProposedQuoteSchema, type ConsultationInput, type CreateConsultation, type QuoteEdit,
-} from '../../../../shared/schemas/consultation.schemas';
-import { apiGet, apiWrite } from '../../../lib/api-client';
-
-/** Pages of the consultation feature (beside the API paths so links and the router agree). */
-export const consultationPagePaths = {
-  create: (clientId: string) => `/consultations/new?client=${encodeURIComponent(clientId)}`,
-  one: (id: string) => `/consultations/${id}`,
-  bookQuote: (consultationId: string) => `/desk/book?consultation=${encodeURIComponent(consultationId)}`,
-};
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { z } from 'zod';
+import { consultationsApi } from '../../../../shared/api/consultations.api';
+import type { CreateConsultation, ProposeQuoteRequestSchema, QuoteEdit } from '../../../../shared/schemas/consultation.schemas';
+import { apiQuery, callApi } from '../../../lib/api-client';
+import { consultationsChanged, myQuotesChanged, quoteEdited } from '../../../lib/cache-rules';
 
 export const consultationQueries = {
-  all: () => ['consultations'] as const,
-  ofClient: (clientId: string) =>
-    queryOptions({
-      queryKey: [...consultationQueries.all(), 'client', clientId] as const,
-      queryFn: () => apiGet(consultationPaths.ofClient(clientId), ConsultationListSchema),
-    }),
-  detail: (id: string) =>
-    queryOptions({ queryKey: [...consultationQueries.all(), 'detail', id] as const, queryFn: () => apiGet(consultationPaths.one(id), ConsultationViewSchema) }),
+  ofClient: (clientId: string) => apiQuery(consultationsApi.ofClient, { params: { id: clientId } }),
+  detail: (id: string) => apiQuery(consultationsApi.one, { params: { id } }),
 };
 
 /** Ask for a proposal: a POST that stores nothing. */
 export function useProposeQuote() {
   return useMutation({
-    mutationFn: (body: { consultation: ConsultationInput; serviceId: string | null; clientId: string }) => apiWrite('POST', consultationPaths.propose, body, ProposedQuoteSchema),
+    mutationFn: (body: z.input<typeof ProposeQuoteRequestSchema>) => callApi(consultationsApi.propose, { body }),
   });
 }
 
 export function useCreateConsultation() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (body: CreateConsultation) => apiWrite('POST', consultationPaths.create, body, ConsultationViewSchema),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: consultationQueries.all() }),
+    mutationFn: (body: CreateConsultation) => callApi(consultationsApi.create, { body }),
+    onSuccess: () => consultationsChanged(queryClient),
   });
 }
 
 export function useEditQuote(consultationId: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (body: QuoteEdit) => apiWrite('PUT', consultationPaths.quote(consultationId), body, ConsultationViewSchema),
+    mutationFn: (body: QuoteEdit) => callApi(consultationsApi.editQuote, { params: { id: consultationId }, body }),
     onSuccess: (saved) => {
       queryClient.setQueryData(consultationQueries.detail(consultationId).queryKey, saved);
-      return queryClient.invalidateQueries({ queryKey: consultationQueries.ofClient(saved.clientId).queryKey });
+      return quoteEdited(queryClient, saved.clientId);
     },
   });
 }
@@ -52,19 +39,19 @@ export function useEditQuote(consultationId: string) {
 export function useSendQuote(consultationId: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: () => apiWrite('POST', consultationPaths.sendQuote(consultationId), {}, ConsultationViewSchema),
+    mutationFn: () => callApi(consultationsApi.sendQuote, { params: { id: consultationId } }),
     onSuccess: (saved) => queryClient.setQueryData(consultationQueries.detail(consultationId).queryKey, saved),
   });
 }
 
 export const myQuoteQueries = {
-  list: () => queryOptions({ queryKey: [...consultationQueries.all(), 'mine'] as const, queryFn: () => apiGet(consultationPaths.myQuotes, ConsultationListSchema) }),
+  list: () => apiQuery(consultationsApi.myQuotes),
 };
 
 export function useAcceptQuote() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (quoteId: string) => apiWrite('POST', consultationPaths.acceptMyQuote(quoteId), {}, ConsultationViewSchema),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: myQuoteQueries.list().queryKey }),
+    mutationFn: (quoteId: string) => callApi(consultationsApi.acceptMyQuote, { params: { id: quoteId } }),
+    onSuccess: () => myQuotesChanged(queryClient),
   });
 }

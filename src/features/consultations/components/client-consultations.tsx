@@ -5,7 +5,8 @@ import { FormAlert } from '../../../components/ui/form-alert';
 import { LoadingState } from '../../../components/ui/loading-state';
 import { formatDate } from '../../../../shared/format/date-time';
 import { formatFor } from '../../../../shared/format/locale';
-import { consultationPagePaths, consultationQueries } from '../api/consultation-queries';
+import { paths } from '../../../config/paths';
+import { consultationQueries } from '../api/consultation-queries';
 import { quoteStatusLabels } from './consultation-labels';
 import { formatMoney } from '../../../../shared/money/money';
 
@@ -28,14 +29,14 @@ export function ClientConsultations({ clientId, timeZone, currency }: Props) {
               {quoteStatusLabels[c.quote.status]}
               {c.quote.bookingIds.length > 0 && ' · booked'}
             </span>
-            <Link to={consultationPagePaths.one(c.id)} className="text-link">
+            <Link to={paths.consultation(c.id)} className="text-link">
               Open quote
             </Link>
           </li>
         ))}
       </ul>
       <div>
-        <Link to={consultationPagePaths.create(clientId)} className={buttonClasses('secondary')}>
+        <Link to={paths.newConsultation(clientId)} className={buttonClasses('secondary')}>
           New consultation
         </Link>
       </div>

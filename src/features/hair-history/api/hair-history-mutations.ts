@@ -1,16 +1,20 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { HairHistoryResponseSchema, type HairHistory } from '../../../../shared/schemas/hair-history.schemas';
-import { apiWrite } from '../../../lib/api-client';
-import { hairHistoryQueries, historyPath, type HistoryOwner } from './hair-history-queries';
+import { hairHistoryApi } from '../../../../shared/api/hair-history.api';
+import type { HairHistory, HairHistoryResponse } from '../../../../shared/schemas/hair-history.schemas';
+import { callApi } from '../../../lib/api-client';
+import { hairHistoryChanged } from '../../../lib/cache-rules';
+import type { RecordOwner } from '../../../lib/record-owner';
+import { hairHistoryQueries } from './hair-history-queries';
 
-export function useSaveHairHistory(owner: HistoryOwner) {
+export function useSaveHairHistory(owner: RecordOwner) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (answers: HairHistory) => apiWrite('PUT', historyPath(owner), answers, HairHistoryResponseSchema),
+    mutationFn: (answers: HairHistory): Promise<HairHistoryResponse> =>
+      owner === 'me' ? callApi(hairHistoryApi.saveMine, { body: answers }) : callApi(hairHistoryApi.saveOfClient, { params: { id: owner.clientId }, body: answers }),
     onSuccess: (saved) => {
       queryClient.setQueryData(hairHistoryQueries.detail(owner).queryKey, saved);
       // The same record may be cached under the client's id too (staff view); refresh every copy.
-      return queryClient.invalidateQueries({ queryKey: hairHistoryQueries.all() });
+      return hairHistoryChanged(queryClient);
     },
   });
 }

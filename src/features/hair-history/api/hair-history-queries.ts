@@ -1,14 +1,7 @@
-import { queryOptions } from '@tanstack/react-query';
-import { hairHistoryPaths } from '../../../../shared/api/hair-paths';
-import { HairHistoryResponseSchema } from '../../../../shared/schemas/hair-history.schemas';
-import { apiGet } from '../../../lib/api-client';
-import { ownerKey, ownerPath, type RecordOwner } from '../../../lib/record-owner';
-
-export type HistoryOwner = RecordOwner;
-export const historyPath = (owner: RecordOwner) => ownerPath(owner, hairHistoryPaths);
+import { hairHistoryApi } from '../../../../shared/api/hair-history.api';
+import { apiQuery } from '../../../lib/api-client';
+import type { RecordOwner } from '../../../lib/record-owner';
 
 export const hairHistoryQueries = {
-  all: () => ['hair-history'] as const,
-  detail: (owner: RecordOwner) =>
-    queryOptions({ queryKey: [...hairHistoryQueries.all(), ownerKey(owner)] as const, queryFn: () => apiGet(historyPath(owner), HairHistoryResponseSchema) }),
+  detail: (owner: RecordOwner) => (owner === 'me' ? apiQuery(hairHistoryApi.mine) : apiQuery(hairHistoryApi.ofClient, { params: { id: owner.clientId } })),
 };

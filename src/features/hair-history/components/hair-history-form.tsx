@@ -11,7 +11,8 @@ import { TextField } from '../../../components/ui/text-field';
 import { fieldError, showServerErrors } from '../../../lib/form-errors';
 import { useUnsavedChangesGuard } from '../../../lib/use-unsaved-changes-guard';
 import { useSaveHairHistory } from '../api/hair-history-mutations';
-import { hairHistoryQueries, type HistoryOwner } from '../api/hair-history-queries';
+import type { RecordOwner } from '../../../lib/record-owner';
+import { hairHistoryQueries } from '../api/hair-history-queries';
 import { AnswerFieldset } from './answer-fieldset';
 import { answerQuestions, methodLabels, structuralLabels } from './hair-history-labels';
 import { PastServicesFields } from './past-services-fields';
@@ -19,7 +20,7 @@ import { ReactionCaution } from './reaction-caution';
 
 type Props = {
   onSaved?: () => void;
-  owner?: HistoryOwner;
+  owner?: RecordOwner;
   /** The one action's words; in the booking flow it saves and moves on ("Save and continue"). */
   submitLabel?: string;
 };
@@ -37,7 +38,7 @@ export function HairHistoryForm({ onSaved, owner = 'me', submitLabel = 'Save hai
 
 const methodOptions = Object.entries(methodLabels).map(([value, label]) => ({ value, label }));
 
-function Fields({ initial, saved, owner, onSaved, submitLabel }: { initial: HairHistory; saved: boolean; owner: HistoryOwner; onSaved?: () => void; submitLabel: string }) {
+function Fields({ initial, saved, owner, onSaved, submitLabel }: { initial: HairHistory; saved: boolean; owner: RecordOwner; onSaved?: () => void; submitLabel: string }) {
   const save = useSaveHairHistory(owner);
   const { register, control, handleSubmit, setError, reset, formState } = useForm<HairHistory>({ resolver: zodResolver(HairHistorySchema), defaultValues: initial });
   const { errors } = formState;

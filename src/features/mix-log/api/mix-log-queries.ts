@@ -1,33 +1,26 @@
-import { queryOptions, useMutation, useQueryClient } from '@tanstack/react-query';
-import {
-  MixLogListSchema, MixLogSchema, RepeatMixLogResultSchema, type WriteMixLog,
-} from '../../../../shared/schemas/mix-log.schemas';
-import { apiGet, apiWrite } from '../../../lib/api-client';
-
-export const mixLogPath = (bookingId: string) => `/api/bookings/${bookingId}/mix-logs`;
-/** The stylist's page for one booking's mix log (kept beside its API path so links and the router agree). */
-export const stylistMixLogPath = (bookingId: string, clientId?: string) =>
-  `/stylist/bookings/${bookingId}/mix-log${clientId ? `?client=${encodeURIComponent(clientId)}` : ''}`;
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { z } from 'zod';
+import { mixLogsApi } from '../../../../shared/api/mix-logs.api';
+import type { RepeatMixLogSchema, WriteMixLog } from '../../../../shared/schemas/mix-log.schemas';
+import { apiQuery, callApi } from '../../../lib/api-client';
+import { mixLogChanged } from '../../../lib/cache-rules';
 
 export const mixLogQueries = {
-  all: () => ['mix-logs'] as const,
-  list: (bookingId: string) =>
-    queryOptions({ queryKey: [...mixLogQueries.all(), bookingId] as const, queryFn: () => apiGet(mixLogPath(bookingId), MixLogListSchema) }),
+  list: (bookingId: string) => apiQuery(mixLogsApi.list, { params: { id: bookingId } }),
 };
 
 export function useWriteMixLog(bookingId: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (body: WriteMixLog) => apiWrite('POST', mixLogPath(bookingId), body, MixLogSchema),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: mixLogQueries.list(bookingId).queryKey }),
+    mutationFn: (body: WriteMixLog) => callApi(mixLogsApi.write, { params: { id: bookingId }, body }),
+    onSuccess: () => mixLogChanged(queryClient, bookingId),
   });
 }
 
 export function useRepeatMixLog(bookingId: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (body: { fromBookingId: string; sitting: number; intoSitting: number }) =>
-      apiWrite('POST', `${mixLogPath(bookingId)}/repeat`, body, RepeatMixLogResultSchema),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: mixLogQueries.list(bookingId).queryKey }),
+    mutationFn: (body: z.input<typeof RepeatMixLogSchema>) => callApi(mixLogsApi.repeat, { params: { id: bookingId }, body }),
+    onSuccess: () => mixLogChanged(queryClient, bookingId),
   });
 }

@@ -8,8 +8,7 @@ import { StepStrip } from '../../../components/ui/step-strip';
 import { sittingLabel, stepKindLabels } from '../../../lib/booking-labels';
 import { formatRange, formatTime } from '../../../../shared/format/date-time';
 import { formatFor } from '../../../../shared/format/locale';
-import { consultationPagePaths } from '../../consultations/api/consultation-queries';
-import { stylistMixLogPath } from '../../mix-log/api/mix-log-queries';
+import { paths } from '../../../config/paths';
 import { sittingProgress } from '../timer-state';
 import { DevelopingTimer } from './developing-timer';
 
@@ -59,10 +58,10 @@ export function ClientDayCard({ booking, sitting, timeZone, now }: Props) {
         </div>
       )}
       <div className="flex flex-wrap gap-4">
-        <Link to={stylistMixLogPath(booking.id, booking.client.id)} className="text-link">
+        <Link to={paths.mixLog(booking.id, booking.client.id)} className="text-link">
           Mix log<span className="sr-only"> for {booking.client.name}</span>
         </Link>
-        <Link to={consultationPagePaths.create(booking.client.id)} className="text-link">
+        <Link to={paths.newConsultation(booking.client.id)} className="text-link">
           New consultation<span className="sr-only"> for {booking.client.name}</span>
         </Link>
       </div>

@@ -1,17 +1,16 @@
-import { queryOptions, useMutation, useQueryClient } from '@tanstack/react-query';
-import { QuotePricesSchema, type QuotePrices } from '../../../../shared/schemas/quote-prices.schemas';
-import { apiGet, apiWrite } from '../../../lib/api-client';
-
-export const quotePricesPath = '/api/owner/quote-prices';
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { quotePricesApi } from '../../../../shared/api/quote-prices.api';
+import type { QuotePrices } from '../../../../shared/schemas/quote-prices.schemas';
+import { apiQuery, callApi } from '../../../lib/api-client';
 
 export const quotePriceQueries = {
-  current: () => queryOptions({ queryKey: ['quote-prices'] as const, queryFn: () => apiGet(quotePricesPath, QuotePricesSchema) }),
+  current: () => apiQuery(quotePricesApi.current),
 };
 
 export function useSaveQuotePrices() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (body: QuotePrices) => apiWrite('PUT', quotePricesPath, body, QuotePricesSchema),
+    mutationFn: (body: QuotePrices) => callApi(quotePricesApi.save, { body }),
     onSuccess: (saved) => queryClient.setQueryData(quotePriceQueries.current().queryKey, saved),
   });
 }

@@ -1,27 +1,21 @@
-import { queryOptions, useMutation, useQueryClient } from '@tanstack/react-query';
+import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { z } from 'zod';
-import { apiPaths } from '../../../../shared/api/api-paths';
-import { RecordClearanceSchema, RecordSkinTestSchema, SkinTestClearanceSchema, SkinTestListSchema, SkinTestSchema, type RecordSkinTestReading } from '../../../../shared/schemas/skin-test.schemas';
-import { StrandTestListSchema, StrandTestSchema, type RecordStrandTest } from '../../../../shared/schemas/strand-test.schemas';
-import { apiGet, apiWrite } from '../../../lib/api-client';
-
-export const strandTestsPath = (clientId: string) => `/api/clients/${clientId}/strand-tests`;
+import { testRecordsApi } from '../../../../shared/api/test-records.api';
+import type { RecordClearanceSchema, RecordSkinTestReading, RecordSkinTestSchema } from '../../../../shared/schemas/skin-test.schemas';
+import type { RecordStrandTest } from '../../../../shared/schemas/strand-test.schemas';
+import { apiQuery, callApi } from '../../../lib/api-client';
+import { skinTestsChanged, strandTestsChanged } from '../../../lib/cache-rules';
 
 export const testRecordQueries = {
-  all: () => ['test-records'] as const,
-  skin: (clientId: string) =>
-    queryOptions({ queryKey: [...testRecordQueries.all(), 'skin', clientId] as const, queryFn: () => apiGet(apiPaths.skinTests(clientId), SkinTestListSchema) }),
-  strand: (clientId: string) =>
-    queryOptions({ queryKey: [...testRecordQueries.all(), 'strand', clientId] as const, queryFn: () => apiGet(strandTestsPath(clientId), StrandTestListSchema) }),
+  skin: (clientId: string) => apiQuery(testRecordsApi.skinTests, { params: { id: clientId } }),
+  strand: (clientId: string) => apiQuery(testRecordsApi.strandTests, { params: { id: clientId } }),
 };
 
-// A skin-test change can flag or clear any of the client's bookings (on every day and list they appear in), so
-// everything cached is refreshed, not only the test list.
 export function useRecordSkinTest(clientId: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (body: z.input<typeof RecordSkinTestSchema>) => apiWrite('POST', apiPaths.skinTests(clientId), body, SkinTestSchema),
-    onSuccess: () => queryClient.invalidateQueries(),
+    mutationFn: (body: z.input<typeof RecordSkinTestSchema>) => callApi(testRecordsApi.recordSkinTest, { params: { id: clientId }, body }),
+    onSuccess: () => skinTestsChanged(queryClient),
   });
 }
 
@@ -29,8 +23,8 @@ export function useRecordSkinTest(clientId: string) {
 export function useRecordClearance(clientId: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (body: z.input<typeof RecordClearanceSchema>) => apiWrite('POST', apiPaths.skinTestClearances(clientId), body, SkinTestClearanceSchema),
-    onSuccess: () => queryClient.invalidateQueries(),
+    mutationFn: (body: z.input<typeof RecordClearanceSchema>) => callApi(testRecordsApi.recordClearance, { params: { id: clientId }, body }),
+    onSuccess: () => skinTestsChanged(queryClient),
   });
 }
 
@@ -38,15 +32,15 @@ export function useRecordClearance(clientId: string) {
 export function useRecordSkinTestReading(clientId: string, testId: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (body: RecordSkinTestReading) => apiWrite('POST', apiPaths.skinTestReading(clientId, testId), body, SkinTestSchema),
-    onSuccess: () => queryClient.invalidateQueries(),
+    mutationFn: (body: RecordSkinTestReading) => callApi(testRecordsApi.recordSkinTestReading, { params: { id: clientId, testId }, body }),
+    onSuccess: () => skinTestsChanged(queryClient),
   });
 }
 
 export function useRecordStrandTest(clientId: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (body: RecordStrandTest) => apiWrite('POST', strandTestsPath(clientId), body, StrandTestSchema),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: testRecordQueries.strand(clientId).queryKey }),
+    mutationFn: (body: RecordStrandTest) => callApi(testRecordsApi.recordStrandTest, { params: { id: clientId }, body }),
+    onSuccess: () => strandTestsChanged(queryClient, clientId),
   });
 }

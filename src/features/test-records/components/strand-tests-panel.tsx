@@ -1,21 +1,16 @@
-import { zodResolver } from '@hookform/resolvers/zod';
 import { useQuery } from '@tanstack/react-query';
-import { useForm } from 'react-hook-form';
 import { urlOf } from '../../../../shared/api/endpoint';
 import { photosApi } from '../../../../shared/api/photos.api';
-import { RecordStrandTestSchema, type RecordStrandTest } from '../../../../shared/schemas/strand-test.schemas';
-import { Button } from '../../../components/ui/button';
-import { FormAlert } from '../../../components/ui/form-alert';
+import { RecordStrandTestSchema } from '../../../../shared/schemas/strand-test.schemas';
+import { RecordForm, useRecordForm } from '../../../components/ui/record-form';
 import { SelectField } from '../../../components/ui/select-field';
 import { TextField } from '../../../components/ui/text-field';
-import { fieldError, showServerErrors } from '../../../lib/form-errors';
-import { formatDate } from '../../../../shared/format/date-time';
-import { formatFor } from '../../../../shared/format/locale';
+import { fieldError } from '../../../lib/form-errors';
 import { productTypeLabels, productTypeOptions } from '../../mix-log/product-type-labels';
 import { photoQueries } from '../../photos/api/photo-queries';
 import { testRecordQueries, useRecordStrandTest } from '../api/test-record-queries';
 import { InstantField } from './instant-field';
-import { nowInZone } from '../../../lib/time';
+import { RecordList } from './record-list';
 
 const resultLabels = { passed: 'Passed', fragile: 'Lifted, but fragile', failed: 'Failed (broke or gummy)' } as const;
 const resultOptions = Object.entries(resultLabels).map(([value, label]) => ({ value, label }));
@@ -25,36 +20,31 @@ export function StrandTestsPanel({ clientId, zone }: { clientId: string; zone: s
   const list = useQuery(testRecordQueries.strand(clientId));
   const photos = useQuery(photoQueries.list({ clientId }));
   const record = useRecordStrandTest(clientId);
-  const now = nowInZone(zone);
-  const form = useForm<RecordStrandTest>({
-    resolver: zodResolver(RecordStrandTestSchema),
-    defaultValues: { testedAt: now, tested: '', productType: 'lightener', developerPercent: 6, minutes: 30, result: 'passed', notes: '', photoId: null },
-  });
-  const { register, control, handleSubmit, setError, formState, reset } = form;
+  const { form, submit } = useRecordForm(
+    RecordStrandTestSchema,
+    { testedAt: nowInZone(zone), tested: '', productType: 'lightener', developerPercent: 6, minutes: 30, result: 'passed', notes: '', photoId: null },
+    (body) => record.mutateAsync(body),
+    ['testedAt', 'tested', 'productType', 'developerPercent', 'minutes', 'result', 'notes', 'photoId'],
+  );
+  const { register, control, formState } = form;
   const err = (path: string) => fieldError(formState.errors, path);
-  const fields = ['testedAt', 'tested', 'productType', 'developerPercent', 'minutes', 'result', 'notes', 'photoId'] as const;
-  const submit = handleSubmit((body) => record.mutateAsync(body).then(() => reset(), (e) => showServerErrors(e, setError, fields)));
   const photoOptions = [{ value: '', label: 'No photo' }, ...(photos.data?.photos ?? []).map((p, i) => ({ value: p.id, label: `Photo ${i + 1} (${formatDate(p.createdAt, formatFor(zone), { width: 'short' })})` }))];
   return (
     <div className="flex flex-col gap-4">
       <p className="text-sm">Lightening previously coloured or compromised hair risks breakage: a strand test is advised before the appointment.</p>
-      {list.isError && <FormAlert>{list.error.message}</FormAlert>}
-      {list.data && list.data.tests.length === 0 && <p className="text-ink/80">No strand test on record.</p>}
-      <ul className="flex flex-col gap-2" aria-label="Strand tests">
-        {list.data?.tests.map((t) => (
-          <li key={t.id} className="flex gap-3 rounded-lg bg-linen px-3 py-2">
+      <RecordList label="Strand tests" empty="No strand test on record." records={list.data?.tests} error={list.error} itemClassName="flex gap-3 rounded-lg bg-linen px-3 py-2">
+        {(t) => (
+          <>
             {t.photoId && <img src={urlOf(photosApi.file, { params: { id: t.photoId } })} alt="The tested strand" className="size-16 rounded object-cover" />}
             <span>
               <span className="font-bold">{resultLabels[t.result]}</span> · {formatDate(t.testedAt, formatFor(zone), { width: 'short' })} · {t.tested} · {productTypeLabels[t.productType]}
               {t.developerPercent !== null && ` with ${t.developerPercent} % developer`} · {t.minutes} min · by {t.recordedByName ?? 'the salon'}
               {t.notes && <span className="block text-sm">{t.notes}</span>}
             </span>
-          </li>
-        ))}
-      </ul>
-      <form onSubmit={(e) => void submit(e)} noValidate aria-label="Record a strand test" className="flex flex-col gap-3 rounded-lg p-3 ring-1 ring-ink/15">
-        <p className="font-bold">Record a strand test</p>
-        {formState.errors.root?.server && <FormAlert>{formState.errors.root.server.message}</FormAlert>}
+          </>
+        )}
+      </RecordList>
+      <RecordForm label="Record a strand test" title="Record a strand test" submitLabel="Record strand test" busy={formState.isSubmitting} error={formState.errors.root?.server?.message} onSubmit={submit}>
         <TextField label="What was tested" hint="Product, mix and where (e.g. lightener 1:2 on a nape strand)" error={err('tested')} {...register('tested')} />
         <div className="flex flex-wrap gap-3">
           <InstantField control={control} name="testedAt" label="Tested at" zone={zone} error={err('testedAt')} />
@@ -65,12 +55,7 @@ export function StrandTestsPanel({ clientId, zone }: { clientId: string; zone: s
           <SelectField label="Photo" options={photoOptions} error={err('photoId')} {...register('photoId', { setValueAs: (v: string | null) => (v ? v : null) })} />
         </div>
         <TextField label="Notes" error={err('notes')} {...register('notes')} />
-        <div>
-          <Button type="submit" variant="secondary" busy={formState.isSubmitting}>
-            Record strand test
-          </Button>
-        </div>
-      </form>
+      </RecordForm>
     </div>
   );
 }
