@@ -1,6 +1,5 @@
 import { DateTime } from 'luxon';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { apiPaths } from '../../shared/api/api-paths';
 import { anonymousAgent, signedInAgent, startTestApp, type TestApp } from '../setup/test-app';
 import { insertSalon } from '../factories/salon';
 import { insertUser } from '../factories/user';

@@ -4,7 +4,6 @@ import { insertSalon, type SalonFixture } from '../factories/salon';
 import { insertUser, type UserFixture } from '../factories/user';
 import { insertPlannedService } from '../factories/service';
 import { futureWeekday, localIso } from '../setup/dates';
-import { apiPaths } from '../../shared/api/api-paths';
 import { setupPaths } from '../setup/setup-paths';
 import type { StepPlan } from '../../shared/schemas/step-plan.schemas';
 import { emptyHairHistory } from '../../shared/schemas/hair-history.schemas';

@@ -4,7 +4,6 @@ import { insertSalon, type SalonFixture } from '../factories/salon';
 import { insertUser, type UserFixture } from '../factories/user';
 import { correctionPlan, insertNegativeSkinTest, insertPlannedService } from '../factories/service';
 import { futureWeekday } from '../setup/dates';
-import { apiPaths } from '../../shared/api/api-paths';
 
 let t: TestApp;
 let salon: SalonFixture;

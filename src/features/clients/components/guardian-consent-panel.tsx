@@ -8,6 +8,8 @@ import { fieldError } from '../../../lib/form-errors';
 import { todayIn } from '../../../lib/time';
 import { ageQueries, useRecordGuardianConsent } from '../api/age-queries';
 import { DateOfBirthForm } from './date-of-birth-form';
+import { formatDate } from '../../../../shared/format/date-time';
+import { formatFor } from '../../../../shared/format/locale';
 
 type Props = { clientId: string; zone: string };
 

@@ -3,6 +3,8 @@ import { RecordForm, useRecordForm } from '../../../components/ui/record-form';
 import { TextAreaField } from '../../../components/ui/text-area-field';
 import { fieldError } from '../../../lib/form-errors';
 import { useRecordClearance } from '../api/test-record-queries';
+import { formatDate } from '../../../../shared/format/date-time';
+import { formatFor } from '../../../../shared/format/locale';
 
 type Props = { clientId: string; zone: string; clearances: SkinTestClearance[]; canClear: boolean };
 

@@ -14,6 +14,8 @@ import { ClearancePanel } from './clearance-panel';
 import { sessionQueries } from '../../auth/api/session-queries';
 import { skinTestResultLabels } from './skin-test-result-labels';
 import { nowInZone } from '../../../lib/time';
+import { formatDate, formatTime } from '../../../../shared/format/date-time';
+import { formatFor } from '../../../../shared/format/locale';
 
 const resultOptions = Object.entries(skinTestResultLabels).map(([value, label]) => ({ value, label }));
 

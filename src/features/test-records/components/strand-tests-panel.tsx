@@ -11,6 +11,9 @@ import { photoQueries } from '../../photos/api/photo-queries';
 import { testRecordQueries, useRecordStrandTest } from '../api/test-record-queries';
 import { InstantField } from './instant-field';
 import { RecordList } from './record-list';
+import { formatDate } from '../../../../shared/format/date-time';
+import { formatFor } from '../../../../shared/format/locale';
+import { nowInZone } from '../../../lib/time';
 
 const resultLabels = { passed: 'Passed', fragile: 'Lifted, but fragile', failed: 'Failed (broke or gummy)' } as const;
 const resultOptions = Object.entries(resultLabels).map(([value, label]) => ({ value, label }));
