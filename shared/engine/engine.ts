@@ -20,7 +20,7 @@ import { freeStylists } from './free-stylists';
 import { listWindows } from './windows';
 
 export type * from './answers';
-export type { Scenario, ScenarioInput, Booking, BookedStep, ServiceRequest, RequestStep, HoursRule } from './scenario.schemas';
+export type { Scenario, ScenarioInput, Booking, BookedStep, ServiceRequest, RequestStep, HoursRule, StartStretch } from './scenario.schemas';
 export { ScenarioSchema } from './scenario.schemas';
 export { ScenarioError } from './scenario-error';
 export { MAX_HORIZON_DAYS } from './compile-context';
@@ -64,6 +64,8 @@ export function planOptions(scenario: Scenario): OptionsAnswer {
         chair: s.chair,
         steps: s.steps.map((step) => ({
           kind: step.kind,
+          ...(step.id !== undefined ? { id: step.id } : {}),
+          ...(step.label !== undefined ? { label: step.label } : {}),
           start: fmt(step.start),
           end: fmt(step.end),
           ...(step.basin ? { basin: step.basin } : {}),
