@@ -82,7 +82,10 @@ export function mergeLattices(parts: Lattice[], g: number): Lattice {
   return out;
 }
 
-/** Grid points in both lattices (same grid, so the cut ends are grid points too). */
+/**
+ * Grid points in both lattices (same grid, so the cut ends are grid points too). The sweep of `intersect` in
+ * intervals.ts, for closed ranges: ranges that meet at one point keep it.
+ */
 export function intersectLattices(a: Lattice, b: Lattice): Lattice {
   const out: Lattice = [];
   let i = 0;

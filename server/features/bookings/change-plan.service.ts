@@ -1,4 +1,3 @@
-import { DateTime } from 'luxon';
 import type { Kysely } from 'kysely';
 import type { Database } from '../../db/schema';
 import type { Salon } from '../../../shared/schemas/salon.schemas';
@@ -6,9 +5,7 @@ import type { StepPlan } from '../../../shared/schemas/step-plan.schemas';
 import { AppError, notFound } from '../../lib/app-error';
 import { findService } from '../services/services.repository';
 import { lockStylists } from '../planning/stylist-lock';
-import { loadSalonCalendars } from '../planning/salon-calendars.repository';
-import { horizonFor } from '../planning/engine-request';
-import { planExactlyAt } from '../planning/plan-at';
+import { exactPlan } from '../planning/planning-port';
 import { assertWithinProcessingLimits } from '../planning/processing-limits-check';
 import { writeAudit } from '../audit/audit.repository';
 import { assertSkinTestAllows } from '../skin-tests/skin-test-check.service';
@@ -38,16 +35,15 @@ export async function changePlan(db: Kysely<Database>, salon: Salon, actorUserId
     if (row.client_id) {
       await assertSkinTestAllows(trx, salon, { clientId: row.client_id, plan, serviceAsks: service?.needsSkinTest ?? false, starts, atDesk: true }, now);
     }
-    for (const [i, start] of starts.entries()) {
-      const one: StepPlan = { sittings: [{ steps: plan.sittings[i].steps }] };
-      const date = DateTime.fromJSDate(start, { zone: salon.timeZone }).toISODate()!;
-      const calendars = await loadSalonCalendars(trx, salon.id, horizonFor(date, one, 1), bookingId);
-      const result = planExactlyAt(calendars, { skill: service?.skill ?? 'colour', stylistId: row.stylist_id, plan: one, start });
+    // Each sitting alone at its start, against the book without this booking (so one sitting never meets another).
+    const placements = starts.map((start, i) => ({ skill: service?.skill ?? 'colour', stylistId: row.stylist_id, plan: { sittings: [{ steps: plan.sittings[i].steps }] }, start }));
+    const results = await exactPlan(trx, salon, placements, bookingId);
+    for (const [i, result] of results.entries()) {
       if ('reason' in result) throw new AppError('CONFLICT', 409, `Sitting ${i + 1}: ${result.reason}`);
       const placed = result.plan.sittings[0];
       try {
-        await replaceSitting(trx, bookingId, i + 1, placed.chair, row.stylist_id, placed.steps.map((st, j) => ({
-          kind: st.kind, label: one.sittings[0].steps[j].label, start: new Date(st.start), end: new Date(st.end), basinId: st.basin ?? null,
+        await replaceSitting(trx, bookingId, i + 1, placed.chair, row.stylist_id, placed.steps.map((st) => ({
+          kind: st.kind, label: st.label, start: new Date(st.start), end: new Date(st.end), basinId: st.basin,
         })));
       } catch (err) {
         if ((err as { code?: string }).code === '23P01') throw new AppError('CONFLICT', 409, 'Someone took that time a moment ago.');

@@ -3,8 +3,7 @@ import { DateTime } from 'luxon';
 import type { Db } from '../../db/database';
 import type { OwnerOverview } from '../../../shared/schemas/owner.schemas';
 import type { Salon } from '../../../shared/schemas/salon.schemas';
-import { measureOccupancy } from '../../../shared/engine/engine';
-import { loadSalonCalendars } from '../planning/salon-calendars.repository';
+import { occupancyOver } from '../planning/planning-port';
 import { listStylists } from '../bookings/salon-resources.repository';
 
 /** Counts of what the salon has, and the current week (Monday to Sunday, salon time). */
@@ -14,7 +13,7 @@ export async function ownerOverview(db: Db, salon: Salon, now: Date): Promise<Ow
   const to = weekStart.plus({ days: 7 }).toISODate()!;
   const count = (table: 'staff' | 'chairs' | 'basins' | 'services' | 'clients') =>
     db.selectFrom(table).select(sql<number>`count(*)::int`.as('n')).where('salon_id', '=', salon.id).executeTakeFirstOrThrow();
-  const [stylists, chairs, basins, services, clients, bookings, calendars, staff] = await Promise.all([
+  const [stylists, chairs, basins, services, clients, bookings, [measured], staff] = await Promise.all([
     count('staff'),
     count('chairs'),
     count('basins'),
@@ -29,11 +28,11 @@ export async function ownerOverview(db: Db, salon: Salon, now: Date): Promise<Ow
       .where('b.status', '!=', 'held') // a hold is a few minutes' keep while someone pays, not work
       .where(sql<boolean>`s.during && tstzrange(${weekStart.toJSDate()}, ${weekStart.plus({ days: 7 }).toJSDate()})`)
       .executeTakeFirstOrThrow(),
-    loadSalonCalendars(db, salon.id, { from, to }, undefined, { holds: false }),
+    occupancyOver(db, salon, [{ horizon: { from, to }, cuts: [] }]),
     listStylists(db, salon.id),
   ]);
   // The same occupancy computation as `npm run plan -- occupancy` on this week's calendars.
-  const usage = measureOccupancy(calendars);
+  const usage = measured.answer;
   return {
     salon,
     counts: { stylists: stylists.n, chairs: chairs.n, basins: basins.n, services: services.n, clients: clients.n },

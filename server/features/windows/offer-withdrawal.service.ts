@@ -1,8 +1,6 @@
-import { DateTime } from 'luxon';
 import type { Db } from '../../db/database';
 import { findService } from '../services/services.repository';
-import { loadSalonCalendars } from '../planning/salon-calendars.repository';
-import { planExactlyAt } from '../planning/plan-at';
+import { exactPlan, type PlanningSalon } from '../planning/planning-port';
 import { listOpenOffers, setOfferStatus } from './window-offers.repository';
 import { planOfferGone } from './offer-messages';
 
@@ -16,7 +14,7 @@ const DAY = 86_400_000;
  */
 export async function withdrawStaleOffers(
   db: Db,
-  salon: { id: string; name: string; timeZone: string },
+  salon: PlanningSalon & { name: string },
   stylistId: string,
   span: { from: Date; to: Date },
   now: Date,
@@ -25,12 +23,15 @@ export async function withdrawStaleOffers(
   const open = await listOpenOffers(db, stylistId, new Date(span.from.getTime() - DAY), span.to);
   const live = open.filter((o) => o.starts_at > now);
   if (live.length === 0) return;
-  const day = (d: Date) => DateTime.fromJSDate(d, { zone: salon.timeZone }).toISODate()!;
-  const calendars = await loadSalonCalendars(db, salon.id, { from: day(live[0].starts_at), to: DateTime.fromISO(day(live[live.length - 1].starts_at)).plus({ days: 1 }).toISODate()! });
+  const services = await Promise.all(live.map((o) => findService(db, salon.id, o.service_id)));
+  const asked = live.flatMap((offer, i) => {
+    const service = services[i];
+    return service ? [{ offer, placement: { skill: service.skill, stylistId, plan: service.stepPlan, start: offer.starts_at } }] : [];
+  });
+  const placed = await exactPlan(db, salon, asked.map((a) => a.placement));
+  const still = new Set(asked.filter((_, i) => 'plan' in placed[i]).map((a) => a.offer.id));
   for (const offer of live) {
-    const service = await findService(db, salon.id, offer.service_id);
-    const fits = service && !('reason' in planExactlyAt(calendars, { skill: service.skill, stylistId, plan: service.stepPlan, start: offer.starts_at }));
-    if (fits) continue;
+    if (still.has(offer.id)) continue;
     await setOfferStatus(db, [offer.id], 'gone');
     await planOfferGone(db, {
       offerId: offer.id, salonId: salon.id, to: { id: offer.client_id, name: offer.clientName }, salonName: salon.name,

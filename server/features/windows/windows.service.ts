@@ -2,8 +2,7 @@ import { DateTime } from 'luxon';
 import type { Db } from '../../db/database';
 import type { Salon } from '../../../shared/schemas/salon.schemas';
 import type { HandsFreeWindowView, SentOffer } from '../../../shared/schemas/window.schemas';
-import { findWindows } from '../../../shared/engine/engine';
-import { loadSalonCalendars } from '../planning/salon-calendars.repository';
+import { windowsOn } from '../planning/planning-port';
 import { listServices } from '../services/services.repository';
 import { listStandby } from '../standby/standby.repository';
 import { standbyForWindow, windowFitServices } from './window-fits';
@@ -17,12 +16,7 @@ export async function listWindowViews(db: Db, salon: Salon, date: string, stylis
   const next = DateTime.fromISO(date).plus({ days: 1 }).toISODate()!;
   const dayStart = DateTime.fromISO(date, { zone: salon.timeZone }).toJSDate();
   const dayEnd = DateTime.fromISO(next, { zone: salon.timeZone }).toJSDate();
-  const [calendars, services, standby, offerRows] = await Promise.all([
-    loadSalonCalendars(db, salon.id, { from: date, to: next }),
-    listServices(db, salon.id),
-    listStandby(db, salon.id),
-    listDayOffers(db, salon.id, dayStart, dayEnd),
-  ]);
+  const [services, standby, offerRows] = await Promise.all([listServices(db, salon.id), listStandby(db, salon.id), listDayOffers(db, salon.id, dayStart, dayEnd)]);
   const offers = offerRows.filter((o) => !stylistId || o.stylist_id === stylistId).map((o) => ({
     stylistId: o.stylist_id,
     start: DateTime.fromJSDate(o.starts_at, { zone: salon.timeZone }).toISO({ suppressMilliseconds: true })!,
@@ -35,7 +29,7 @@ export async function listWindowViews(db: Db, salon: Salon, date: string, stylis
     o.stylistId === w.stylist && o.at >= Date.parse(w.start) && o.at < Date.parse(w.end);
   const sent = ({ at: _at, ...o }: (typeof offers)[number]): SentOffer => o;
   const fits = windowFitServices(services);
-  const { windows } = findWindows({ ...calendars, fits: fits.map((f) => ({ service: f.service.id, skill: f.service.skill, minutes: f.minutes })) });
+  const windows = await windowsOn(db, salon, date, fits.map((f) => ({ service: f.service.id, skill: f.service.skill, minutes: f.minutes })));
   const shown = windows.filter((w) => !stylistId || w.stylist === stylistId);
   const views = shown.map((w) => {
       const fitting = fits.filter((f) => w.fits.includes(f.service.id));
