@@ -7,7 +7,7 @@
  * The query functions re-check the parts they use, so a Scenario built in code (e.g. by the
  * server from the database) gets the same ScenarioError rather than a partial answer.
  */
-import type { Option, OptionsAnswer, WindowsAnswer, OccupancyAnswer } from './answers';
+import type { Option, OptionStep, OptionsAnswer, WindowsAnswer, OccupancyAnswer } from './answers';
 import { checkFits, compileRequest } from './compile-request';
 import { measure } from './occupancy';
 import { breakDown, type HourCell, type OccupancyMinutes } from './occupancy-breakdown';
@@ -62,14 +62,14 @@ export function planOptions(scenario: Scenario): OptionsAnswer {
       stylist: o.stylist,
       sittings: o.sittings.map((s) => ({
         chair: s.chair,
-        steps: s.steps.map((step) => ({
-          kind: step.kind,
-          ...(step.id !== undefined ? { id: step.id } : {}),
-          ...(step.label !== undefined ? { label: step.label } : {}),
-          start: fmt(step.start),
-          end: fmt(step.end),
-          ...(step.basin ? { basin: step.basin } : {}),
-        })),
+        steps: s.steps.map((step) => {
+          // Plain assignments rather than spreads: this runs for every step of every option.
+          const out: OptionStep = { kind: step.kind, start: fmt(step.start), end: fmt(step.end) };
+          if (step.basin) out.basin = step.basin;
+          if (step.id !== undefined) out.id = step.id;
+          if (step.label !== undefined) out.label = step.label;
+          return out;
+        }),
       })),
     }),
   );
