@@ -3,6 +3,9 @@ import type { StepKind } from './compile-request';
 
 export interface OptionStep {
   kind: StepKind;
+  /** The request step's own id and label, when it gave them. */
+  id?: string;
+  label?: string;
   start: string;
   end: string;
   basin?: string;

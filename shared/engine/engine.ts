@@ -7,7 +7,7 @@
  * The query functions re-check the parts they use, so a Scenario built in code (e.g. by the
  * server from the database) gets the same ScenarioError rather than a partial answer.
  */
-import type { Option, OptionsAnswer, WindowsAnswer, OccupancyAnswer } from './answers';
+import type { Option, OptionStep, OptionsAnswer, WindowsAnswer, OccupancyAnswer } from './answers';
 import { checkFits, compileRequest } from './compile-request';
 import { measure } from './occupancy';
 import { breakDown, type HourCell, type OccupancyMinutes } from './occupancy-breakdown';
@@ -20,7 +20,7 @@ import { freeStylists } from './free-stylists';
 import { listWindows } from './windows';
 
 export type * from './answers';
-export type { Scenario, ScenarioInput, Booking, BookedStep, ServiceRequest, RequestStep, HoursRule } from './scenario.schemas';
+export type { Scenario, ScenarioInput, Booking, BookedStep, ServiceRequest, RequestStep, HoursRule, StartStretch } from './scenario.schemas';
 export { ScenarioSchema } from './scenario.schemas';
 export { ScenarioError } from './scenario-error';
 export { MAX_HORIZON_DAYS } from './compile-context';
@@ -62,12 +62,14 @@ export function planOptions(scenario: Scenario): OptionsAnswer {
       stylist: o.stylist,
       sittings: o.sittings.map((s) => ({
         chair: s.chair,
-        steps: s.steps.map((step) => ({
-          kind: step.kind,
-          start: fmt(step.start),
-          end: fmt(step.end),
-          ...(step.basin ? { basin: step.basin } : {}),
-        })),
+        steps: s.steps.map((step) => {
+          // Plain assignments rather than spreads: this runs for every step of every option.
+          const out: OptionStep = { kind: step.kind, start: fmt(step.start), end: fmt(step.end) };
+          if (step.basin) out.basin = step.basin;
+          if (step.id !== undefined) out.id = step.id;
+          if (step.label !== undefined) out.label = step.label;
+          return out;
+        }),
       })),
     }),
   );

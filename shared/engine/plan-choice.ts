@@ -23,6 +23,8 @@ export interface ChosenStep {
   start: number;
   end: number;
   basin?: string;
+  id?: string;
+  label?: string;
 }
 
 export interface ChosenSitting {
@@ -129,6 +131,8 @@ export function choosePlan(idx: EngineIndex, st: StylistIndex, passes: ChairPass
   let start = t;
   const steps = spec.steps.map((step, k): ChosenStep => {
     const chosen: ChosenStep = { kind: step.kind, start, end: pick.ends[k] };
+    if (step.id !== undefined) chosen.id = step.id;
+    if (step.label !== undefined) chosen.label = step.label;
     if (step.kind === 'basin') chosen.basin = pickBasin(idx, start, pick.ends[k]);
     start = pick.ends[k];
     return chosen;

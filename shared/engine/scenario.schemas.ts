@@ -45,21 +45,29 @@ export const BookingSchema = z.strictObject({
   steps: z.array(BookedStepSchema).min(1),
 });
 
+/** The caller's own name for a step (`id`) and its words (`label`): the answer returns both on the planned step. */
+const stepTags = { id: id.optional(), label: z.string().optional() };
+
 export const RequestStepSchema = z.discriminatedUnion(
   'kind',
   [
-    z.strictObject({ kind: z.literal('hands_on'), minutes: positiveMinutes }),
-    z.strictObject({ kind: z.literal('developing'), minMinutes: positiveMinutes, maxMinutes: positiveMinutes }),
-    z.strictObject({ kind: z.literal('basin'), minutes: positiveMinutes }),
+    z.strictObject({ kind: z.literal('hands_on'), minutes: positiveMinutes, ...stepTags }),
+    z.strictObject({ kind: z.literal('developing'), minMinutes: positiveMinutes, maxMinutes: positiveMinutes, ...stepTags }),
+    z.strictObject({ kind: z.literal('basin'), minutes: positiveMinutes, ...stepTags }),
   ],
   stepKindMessage,
 );
+
+/** A stretch of local time a sitting may start in, both ends included. */
+export const StartStretchSchema = z.strictObject({ from: localDateTime, to: localDateTime });
 
 export const SittingSchema = z.strictObject({
   daysAfterPrevious: z
     .strictObject({ min: z.number().int().min(1), max: z.number().int().min(1) })
     .optional(),
   steps: z.array(RequestStepSchema).min(1),
+  /** Where the sitting's first step may start (e.g. what a client's skin test allows); absent: anywhere. */
+  allowedStarts: z.array(StartStretchSchema).optional(),
 });
 
 export const RequestSchema = z.strictObject({
@@ -95,3 +103,4 @@ export type BookedStep = z.output<typeof BookedStepSchema>;
 export type ServiceRequest = z.output<typeof RequestSchema>;
 export type RequestStep = z.output<typeof RequestStepSchema>;
 export type HoursRule = z.output<typeof HoursRuleSchema>;
+export type StartStretch = z.output<typeof StartStretchSchema>;

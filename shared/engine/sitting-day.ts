@@ -2,10 +2,10 @@
  * Feasible starts of one sitting for one stylist on one local day: the free sets of each step
  * (hands, chair, basin, client cap, hours) cut to the day, then the backward pass per chair.
  */
-import { clip, intersect, type Span } from './intervals';
+import { clip, firstEndingAfter, intersect, type Span } from './intervals';
 import type { CompiledRequest, SittingPlanSpec } from './compile-request';
 import type { EngineIndex, StylistIndex, UnitIndex } from './resource-index';
-import { backwardPass, mergeLattices, type ChainStep, type Grid, type Lattice } from './sitting-pass';
+import { backwardPass, intersectLattices, mergeLattices, type ChainStep, type Grid, type Lattice } from './sitting-pass';
 
 /** Free sets of one stylist on one day, before a chair is chosen. */
 export interface DayFrame {
@@ -80,14 +80,23 @@ export interface DayStarts {
   passes: ChairPass[];
 }
 
+/** Whether some range of a lattice reaches into [lo, hi): a quick test before a day's passes. */
+function allowsBetween(l: Lattice, lo: number, hi: number): boolean {
+  const i = firstEndingAfter(l, lo - 1);
+  return i < l.length && l[i] < hi;
+}
+
 /**
  * Feasible starts of the sitting on this day, with the per-chair passes behind them.
  * The chair-less prefilter is a superset, so an empty prefilter proves the day infeasible.
+ * Allowed starts cut the result: the search then runs on to later days instead of stopping at
+ * starts a caller would have to throw away.
  */
 export function sittingStarts(idx: EngineIndex, st: StylistIndex, dayOffset: number, req: CompiledRequest, sitting: number): DayStarts {
   const spec = req.sittings[sitting];
   const frame = dayFrame(idx, st, dayOffset, req.earliest);
   const none: DayStarts = { frame, starts: [], passes: [] };
+  if (spec.allowed && !allowsBetween(spec.allowed, frame.lo, frame.hi)) return none;
   const length = minimumLength(spec);
   if (!hasStretch(frame.base, length)) return none;
   const grid = gridOf(idx);
@@ -100,5 +109,6 @@ export function sittingStarts(idx: EngineIndex, st: StylistIndex, dayOffset: num
     const sets = backwardPass(steps, grid);
     if (sets[0].length) passes.push({ chair, steps, sets });
   });
-  return { frame, starts: mergeLattices(passes.map((p) => p.sets[0]), grid.g), passes };
+  const starts = mergeLattices(passes.map((p) => p.sets[0]), grid.g);
+  return { frame, starts: spec.allowed ? intersectLattices(starts, spec.allowed) : starts, passes };
 }

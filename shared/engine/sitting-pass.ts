@@ -83,6 +83,24 @@ export function mergeLattices(parts: Lattice[], g: number): Lattice {
 }
 
 /**
+ * Grid points in both lattices (same grid, so the cut ends are grid points too). The sweep of `intersect` in
+ * intervals.ts, for closed ranges: ranges that meet at one point keep it.
+ */
+export function intersectLattices(a: Lattice, b: Lattice): Lattice {
+  const out: Lattice = [];
+  let i = 0;
+  let j = 0;
+  while (i < a.length && j < b.length) {
+    const lo = a[i] > b[j] ? a[i] : b[j];
+    const hi = a[i + 1] < b[j + 1] ? a[i + 1] : b[j + 1];
+    if (lo <= hi) out.push(lo, hi);
+    if (a[i + 1] < b[j + 1]) i += 2;
+    else j += 2;
+  }
+  return out;
+}
+
+/**
  * G(k) for every step, from last to first; result[k] is the set of feasible starts of step k.
  * Stops early (returning shorter arrays filled with []) once a set is empty.
  */

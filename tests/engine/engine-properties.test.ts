@@ -53,6 +53,26 @@ describe('booking engine against the brute-force reference', () => {
   }, 120_000);
 });
 
+/** Random allowed starts for some sittings (0–2 stretches of up to two days, any minute), from their own seed. */
+function withAllowedStarts(s: Scenario, seed: number): Scenario {
+  const rng = seededRng(seed);
+  const from = Date.parse(`${s.horizon.from}T00:00:00Z`) / 60_000;
+  const days = (Date.parse(`${s.horizon.to}T00:00:00Z`) / 60_000 - from) / 1440;
+  const existing = (m: number) => {
+    while (!exists(m, s.timeZone)) m += 1;
+    return m;
+  };
+  const sittings = s.request!.sittings.map((sitting) => {
+    if (rng() < 0.3) return sitting;
+    const allowedStarts = Array.from({ length: Math.floor(rng() * 3) }, () => {
+      const start = existing(from + Math.floor(rng() * days * 1440));
+      return { from: localText(start), to: localText(existing(start + Math.floor(rng() * 2 * 1440))) };
+    });
+    return { ...sitting, allowedStarts };
+  });
+  return parseScenario({ ...s, request: { ...s.request!, sittings } });
+}
+
 /** A random valid booking for one of the scenario's stylists, on the grid, inside the horizon. */
 function extraBooking(s: Scenario, seed: number): Scenario['bookings'][number] | null {
   const rng = seededRng(seed);
@@ -76,6 +96,27 @@ function extraBooking(s: Scenario, seed: number): Scenario['bookings'][number] |
 }
 
 const allPairs = (s: Scenario) => enginePairs({ ...s, request: { ...s.request!, spread: 'none', limit: 1000 } });
+
+describe('allowed starts against the brute-force reference', () => {
+  it('options are exactly the K earliest pairs that start inside them (both spreads)', () => {
+    let limited = 0;
+    fc.assert(
+      fc.property(seeds, seeds, (seed, allowSeed) => {
+        const s = withAllowedStarts(smallScenario(seed), allowSeed);
+        const all = referencePairs(s);
+        for (const spread of ['day', 'none'] as const) {
+          const scenario = { ...s, request: { ...s.request!, spread } };
+          for (const option of planOptions(scenario).options) expect(validateOption(scenario, option)).toEqual([]);
+          expect(enginePairs(scenario)).toEqual(expectedPairs(all, spread, s.request!.limit));
+        }
+        if (all.length && s.request!.sittings.some((x) => x.allowedStarts)) limited++;
+      }),
+      { numRuns: Number(process.env.ENGINE_RUNS ?? 300) },
+    );
+    // Guard against a generator whose limits always leave nothing.
+    expect(limited).toBeGreaterThan(30);
+  }, 120_000);
+});
 
 describe('booking engine properties', () => {
   it('adding a booking never adds an option (monotonicity)', () => {

@@ -75,6 +75,7 @@ export function validateOption(s: Scenario, option: Option): string[] {
       const got = sitting.steps[i];
       const minutes = times[i][1] - times[i][0];
       if (got.kind !== want.kind) at(`step ${i} kind ${got.kind}`);
+      if (got.id !== want.id || got.label !== want.label) at(`step ${i} does not carry the request's id and label`);
       if (i > 0 && times[i][0] !== times[i - 1][1]) at(`rule 1: gap before step ${i}`);
       const [lo, hi] = want.kind === 'developing' ? [want.minMinutes, want.maxMinutes] : [want.minutes, want.minutes];
       if (minutes < lo || minutes > hi || minutes % g !== 0) at(`rule 1/9: step ${i} lasts ${minutes} real minutes`);
@@ -108,6 +109,8 @@ export function validateOption(s: Scenario, option: Option): string[] {
     if (!covered(whole, hoursOn(s, s.salonHours, day))) at('rule 6: outside salon hours');
     for (const off of st.timeOff) if (overlaps([localToUtc(off.start, zone), localToUtc(off.end, zone)], whole)) at('rule 6: time off');
     if (whole[0] < earliest) at('rule 6: before earliest');
+    const allowed = spec.allowedStarts;
+    if (allowed && !allowed.some((w) => localToUtc(w.from, zone) <= whole[0] && whole[0] <= localToUtc(w.to, zone))) at('starts outside its allowed starts');
     if (whole[0] < horizon[0] || whole[1] > horizon[1]) at('rule 6: outside the horizon');
     // Rule 7: local-date distance from the previous sitting.
     if (previousDay !== null) {

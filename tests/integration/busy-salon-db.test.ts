@@ -2,10 +2,8 @@ import { sql } from 'kysely';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { loadBusySalon, type BusySalon } from '../bench/busy-salon-db';
 import { createTestDb, type TestDb } from '../setup/test-db';
-import { planOptions } from '../../shared/engine/engine';
 import { freeTimes } from '../../server/features/online-booking/availability.service';
-import { loadSalonCalendars } from '../../server/features/planning/salon-calendars.repository';
-import { localEarliest, toEngineSittings } from '../../server/features/planning/engine-request';
+import { optionsFor } from '../../server/features/planning/planning-port';
 import { listServices } from '../../server/features/services/services.repository';
 
 let testDb: TestDb;
@@ -59,16 +57,27 @@ describe('busy salon loader', () => {
     expect(again.salonId).not.toBe(busy.salonId);
   }, 120_000);
 
-  it('gives public free times from a first-week search equal to the engine over the whole three weeks', async () => {
+  it.each([
+    ['any stylist: the first week fills the list', false],
+    ['one stylist: the first week does not, and only the two weeks after it are read next', true],
+  ])('gives public free times from a first-week search equal to the engine over the whole three weeks (%s)', async (_name, oneStylist) => {
     const now = new Date('2027-03-02T15:00:00Z');
     const service = (await listServices(testDb.db, busy.salonId)).find((s) => s.stepPlan.sittings.length === 1 && !s.needsSkinTest)!;
+    const stylist = oneStylist
+      ? (await testDb.db.selectFrom('staff').select('id').where('salon_id', '=', busy.salonId).where(sql<boolean>`${service.skill} = any(skills)`).orderBy('id').executeTakeFirstOrThrow()).id
+      : undefined;
     const salon = { id: busy.salonId, time_zone: busy.timeZone, granularity_minutes: 5 };
-    const answer = await freeTimes(testDb.db, salon, service, undefined, '2027-03-02', now);
-    const full = planOptions({
-      ...(await loadSalonCalendars(testDb.db, busy.salonId, { from: '2027-03-02', to: '2027-03-23' })),
-      request: { skill: service.skill, stylist: null, earliest: localEarliest(now, busy.timeZone, 5), sittings: toEngineSittings(service.stepPlan), limit: 400, spread: 'none' },
-    }).options;
-    expect(answer.times).toHaveLength(400);
+    const answer = await freeTimes(testDb.db, salon, service, stylist, '2027-03-02', now);
+    // The whole three weeks read at once.
+    const { options: full } = await optionsFor(testDb.db, { id: busy.salonId, timeZone: busy.timeZone, granularityMinutes: 5 }, {
+      skill: service.skill, stylistId: stylist ?? null, plan: service.stepPlan, earliest: now, horizons: [{ from: '2027-03-02', to: '2027-03-23' }], limit: 400, spread: 'none',
+    });
+    if (oneStylist) {
+      const firstWeekEnd = Date.parse('2027-03-09T07:00:00Z');
+      expect(answer.times.some((t) => Date.parse(t.start) >= firstWeekEnd)).toBe(true);
+    } else {
+      expect(answer.times).toHaveLength(400);
+    }
     expect(answer.times.map((t) => [t.stylistId, t.start, t.end])).toEqual(
       full.map((o) => [o.stylist, o.sittings[0].steps[0].start, o.sittings[0].steps[o.sittings[0].steps.length - 1].end]),
     );

@@ -4,18 +4,14 @@ import type { StepPlan } from '../../../shared/schemas/step-plan.schemas';
 import type { ServiceSummary } from '../../../shared/schemas/service.schemas';
 import type { BookingStatus } from '../../../shared/schemas/common.schemas';
 import type { Salon } from '../../../shared/schemas/salon.schemas';
-import type { Option } from '../../../shared/engine/engine';
 import { AppError } from '../../lib/app-error';
-import { loadSalonCalendars } from '../planning/salon-calendars.repository';
-import { horizonFor } from '../planning/engine-request';
-import { planBetween, planExactlyAt } from '../planning/plan-at';
+import { exactPlan, type PlacedOption } from '../planning/planning-port';
 import { assertSkinTestAllows } from '../skin-tests/skin-test-check.service';
 import { insertBooking } from './bookings.repository';
 import { preferredChair } from './preferred-chair';
 import { auditBookingChange } from './booking-audit.service';
 import { replanBookingMessages } from '../messages/plan-messages.service';
 import { withdrawStaleOffers } from '../windows/offer-withdrawal.service';
-import { localDateOf } from '../../../shared/time/salon-time';
 
 export interface BookAtInput {
   salon: Pick<Salon, 'id' | 'name' | 'timeZone' | 'skinTestLeadHours' | 'skinTestValidityDays' | 'skinTestFamilies' | 'granularityMinutes'>;
@@ -82,7 +78,7 @@ export async function bookAt(db: Db, input: BookAtInput): Promise<string> {
       createdBy: input.actorUserId,
       sittings: found.sittings.map((s, i) => ({
         chairId: chosen[i],
-        steps: s.steps.map((st, j) => ({ kind: st.kind, label: input.plan.sittings[i].steps[j].label, start: new Date(st.start), end: new Date(st.end), basinId: st.basin ?? null })),
+        steps: s.steps.map((st) => ({ kind: st.kind, label: st.label, start: new Date(st.start), end: new Date(st.end), basinId: st.basin })),
       })),
     });
     await auditBookingChange(db, { salonId: input.salon.id, actorUserId: input.actorUserId, bookingId: id, action: input.status === 'held' ? 'held online' : 'booked' });
@@ -96,26 +92,19 @@ export async function bookAt(db: Db, input: BookAtInput): Promise<string> {
 }
 
 /** From the first step's start to the last step's end, over every sitting. */
-export function bookedSpan(plan: Option): { from: Date; to: Date } {
+export function bookedSpan(plan: PlacedOption): { from: Date; to: Date } {
   const steps = plan.sittings.flatMap((s) => s.steps);
   return { from: new Date(steps[0].start), to: new Date(steps[steps.length - 1].end) };
 }
 
 /** The engine's chair per sitting, or the one the person saw when it is still free (see preferredChair). */
-function preferredChairs(db: Db, salonId: string, plan: Option, wanted: string[] | undefined): Promise<string[]> {
+function preferredChairs(db: Db, salonId: string, plan: PlacedOption, wanted: string[] | undefined): Promise<string[]> {
   return Promise.all(plan.sittings.map((s, i) => preferredChair(db, salonId, s, wanted?.[i])));
 }
 
-async function planOrExplain(db: Db, input: BookAtInput): Promise<Option> {
-  const startDate = localDateOf(input.start, input.salon.timeZone);
-  const calendars = await loadSalonCalendars(db, input.salon.id, horizonFor(startDate, input.plan, 1));
-  const stylist = calendars.stylists.find((s) => s.id === input.stylistId);
-  if (!stylist) throw new AppError('VALIDATION_FAILED', 400, 'Some fields need attention.', { stylistId: 'No such stylist in this salon.' });
-  if (!stylist.skills.includes(input.service.skill)) {
-    throw new AppError('VALIDATION_FAILED', 400, 'Some fields need attention.', { stylistId: `This stylist does not have the "${input.service.skill}" skill this service needs.` });
-  }
-  const req = { skill: input.service.skill, stylistId: input.stylistId, plan: input.plan, start: input.start };
-  const result = input.latestStart ? planBetween(calendars, req, input.latestStart) : planExactlyAt(calendars, req);
-  if ('reason' in result) throw new AppError('CONFLICT', 409, result.reason);
-  return result.plan;
+async function planOrExplain(db: Db, input: BookAtInput): Promise<PlacedOption> {
+  const [result] = await exactPlan(db, input.salon, [{ skill: input.service.skill, stylistId: input.stylistId, plan: input.plan, start: input.start, latestStart: input.latestStart }]);
+  if ('plan' in result) return result.plan;
+  if (result.field) throw new AppError('VALIDATION_FAILED', 400, 'Some fields need attention.', { [result.field]: result.reason });
+  throw new AppError('CONFLICT', 409, result.reason);
 }

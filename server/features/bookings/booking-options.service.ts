@@ -3,15 +3,12 @@ import type { Db } from '../../db/database';
 import type { BookingOptionsRequest, BookingOptionsResponse } from '../../../shared/schemas/booking.schemas';
 import type { Salon } from '../../../shared/schemas/salon.schemas';
 import type { StepPlan } from '../../../shared/schemas/step-plan.schemas';
-import { planOptions } from '../../../shared/engine/engine';
-import { checkStarts } from '../../../shared/rules/skin-test-rule';
-import { AppError, notFound } from '../../lib/app-error';
+import { checkStarts, type SkinTestVerdict } from '../../../shared/rules/skin-test-rule';
+import { notFound } from '../../lib/app-error';
 import { findClient } from '../clients/clients.repository';
 import { findService } from '../services/services.repository';
-import { skinTestVerdictFor, testedSittingStarts } from '../skin-tests/skin-test-check.service';
-import { loadSalonCalendars } from '../planning/salon-calendars.repository';
-import { horizonFor, localEarliest, toBookingOption, toEngineSittings } from '../planning/engine-request';
-import { loadNames } from '../planning/names.repository';
+import { skinTestVerdictFor, testedSittings, testedSittingStarts } from '../skin-tests/skin-test-check.service';
+import { horizonFor, optionsFor, toBookingOption, type PlacedOption, type StartLimit } from '../planning/planning-port';
 import { assertWithinProcessingLimits } from '../planning/processing-limits-check';
 import { localDateOf } from '../../../shared/time/salon-time';
 
@@ -33,27 +30,33 @@ export async function findBookingOptions(db: Db, salon: Salon, body: Required<Bo
 
   const earliest = new Date(Math.max(now.getTime(), DateTime.fromISO(body.earliestDate, { zone: salon.timeZone }).toMillis(), firstAllowed?.getTime() ?? 0));
   const fromDate = localDateOf(earliest, salon.timeZone);
-  const calendars = await loadSalonCalendars(db, salon.id, horizonFor(fromDate, body.stepPlan, SEARCH_DAYS));
-  if (body.stylistId && !calendars.stylists.some((s) => s.id === body.stylistId)) {
-    throw new AppError('VALIDATION_FAILED', 400, 'Some fields need attention.', { stylistId: 'No such stylist in this salon.' });
-  }
-  const answer = planOptions({
-    ...calendars,
-    request: {
-      skill: service.skill,
-      stylist: body.stylistId,
-      earliest: localEarliest(earliest, salon.timeZone, salon.granularityMinutes),
-      sittings: toEngineSittings(body.stepPlan),
-      // Some options may fall outside what the skin test allows (a later sitting after its validity): ask for more.
-      limit: verdict.required ? Math.min(60, body.limit * 3) : body.limit,
-      spread: 'day',
-    },
+  /** What an option would rest on: passed or waiting (on a test not read yet), or no test needed. */
+  const footing = (option: PlacedOption) => {
+    const check = checkStarts(verdict, testedSittingStarts(plan, option.sittings.map((s) => new Date(s.steps[0].start)), salon, service.needsSkinTest));
+    // The engine searched within the same stretches, so the rule cannot refuse what it found.
+    if (check.status === 'refused') throw new Error(`The engine offered a start the skin-test rule refuses: ${check.message}`);
+    return check.status;
+  };
+  const { options, names } = await optionsFor(db, salon, {
+    skill: service.skill,
+    stylistId: body.stylistId,
+    plan,
+    earliest,
+    horizons: [horizonFor(fromDate, plan, SEARCH_DAYS)],
+    limit: body.limit,
+    spread: 'day',
+    allowedStarts: skinTestLimits(verdict, testedSittings(plan, salon, service.needsSkinTest)),
   });
-  const names = await loadNames(db, salon.id);
-  const options = answer.options
-    .map((o) => ({ o, check: checkStarts(verdict, testedSittingStarts(plan, o.sittings.map((s) => new Date(s.steps[0].start)), salon, service.needsSkinTest)) }))
-    .filter((x) => x.check.status !== 'refused')
-    .slice(0, body.limit)
-    .map(({ o, check }) => toBookingOption(o, plan, names, check.status as 'not_needed' | 'passed' | 'waiting'));
-  return { timeZone: salon.timeZone, skinTest, options };
+  return { timeZone: salon.timeZone, skinTest, options: options.map((o) => toBookingOption(o, names, footing(o))) };
+}
+
+/**
+ * Where each sitting may start under the skin-test rule: a sitting that puts tested product on the hair, inside one
+ * of the stretches the client's record allows (passed, or waiting on a test not read yet); any other sitting, anywhere.
+ * The engine searches within them, so the options asked for are all ones the rule allows.
+ */
+function skinTestLimits(verdict: SkinTestVerdict, tested: boolean[]): Array<StartLimit[] | null> | undefined {
+  if (verdict.status === 'not_needed') return undefined;
+  const stretches = verdict.windows.map((w) => ({ from: w.from, to: w.to }));
+  return tested.map((t) => (t ? stretches : null));
 }

@@ -5,16 +5,13 @@ import type { StepPlan } from '../../../shared/schemas/step-plan.schemas';
 import { AppError, notFound } from '../../lib/app-error';
 import { findService } from '../services/services.repository';
 import { lockStylists } from '../planning/stylist-lock';
-import { loadSalonCalendars } from '../planning/salon-calendars.repository';
-import { horizonFor } from '../planning/engine-request';
-import { planExactlyAt } from '../planning/plan-at';
+import { exactPlan } from '../planning/planning-port';
 import { assertWithinProcessingLimits } from '../planning/processing-limits-check';
 import { assertSkinTestAllows } from '../skin-tests/skin-test-check.service';
 import { replanBookingMessages } from '../messages/plan-messages.service';
 import { bookingSnapshot } from './booking-snapshot.repository';
 import { auditBookingChange } from './booking-audit.service';
 import { replaceSitting, setStepPlan, sittingStarts } from './change-booking.repository';
-import { localDateOf } from '../../../shared/time/salon-time';
 
 /**
  * Replaces a booking's step plan, each sitting kept at its start (e.g. oxidative colour changed to a direct dye
@@ -38,16 +35,15 @@ export async function changePlan(db: Kysely<Database>, salon: Salon, actorUserId
     if (booking.clientId) {
       await assertSkinTestAllows(trx, salon, { clientId: booking.clientId, plan, serviceAsks: service?.needsSkinTest ?? false, starts, atDesk: true }, now);
     }
-    for (const [i, start] of starts.entries()) {
-      const one: StepPlan = { sittings: [{ steps: plan.sittings[i].steps }] };
-      const date = localDateOf(start, salon.timeZone);
-      const calendars = await loadSalonCalendars(trx, salon.id, horizonFor(date, one, 1), bookingId);
-      const result = planExactlyAt(calendars, { skill: service?.skill ?? 'colour', stylistId: booking.stylistId, plan: one, start });
+    // Each sitting alone at its start, against the book without this booking (so one sitting never meets another).
+    const placements = starts.map((start, i) => ({ skill: service?.skill ?? 'colour', stylistId: booking.stylistId, plan: { sittings: [{ steps: plan.sittings[i].steps }] }, start }));
+    const results = await exactPlan(trx, salon, placements, bookingId);
+    for (const [i, result] of results.entries()) {
       if ('reason' in result) throw new AppError('CONFLICT', 409, `Sitting ${i + 1}: ${result.reason}`);
       const placed = result.plan.sittings[0];
       try {
-        await replaceSitting(trx, bookingId, i + 1, placed.chair, booking.stylistId, placed.steps.map((st, j) => ({
-          kind: st.kind, label: one.sittings[0].steps[j].label, start: new Date(st.start), end: new Date(st.end), basinId: st.basin ?? null,
+        await replaceSitting(trx, bookingId, i + 1, placed.chair, booking.stylistId, placed.steps.map((st) => ({
+          kind: st.kind, label: st.label, start: new Date(st.start), end: new Date(st.end), basinId: st.basin,
         })));
       } catch (err) {
         if ((err as { code?: string }).code === '23P01') throw new AppError('CONFLICT', 409, 'Someone took that time a moment ago.');

@@ -7,9 +7,7 @@ import type { StepPlan } from '../../../shared/schemas/step-plan.schemas';
 import { AppError, notFound } from '../../lib/app-error';
 import { findService } from '../services/services.repository';
 import { lockStylists } from '../planning/stylist-lock';
-import { loadSalonCalendars } from '../planning/salon-calendars.repository';
-import { horizonFor } from '../planning/engine-request';
-import { planExactlyAt } from '../planning/plan-at';
+import { exactPlan } from '../planning/planning-port';
 import { assertSkinTestAllows } from '../skin-tests/skin-test-check.service';
 import { bookingSnapshot } from './booking-snapshot.repository';
 import { auditBookingChange } from './booking-audit.service';
@@ -18,7 +16,6 @@ import { preferredChair } from './preferred-chair';
 import { listStylists } from './salon-resources.repository';
 import { replanBookingMessages } from '../messages/plan-messages.service';
 import { withdrawStaleOffers } from '../windows/offer-withdrawal.service';
-import { localDateOf } from '../../../shared/time/salon-time';
 
 export interface MoveRequest {
   bookingId: string;
@@ -80,16 +77,14 @@ export async function moveSitting(db: Kysely<Database>, salon: Salon, actorUserI
       await assertSkinTestAllows(trx, salon, { clientId: booking.clientId, plan, serviceAsks: service?.needsSkinTest ?? false, starts: moved, atDesk: req.allowWaitingOnTest ?? false }, now);
     }
 
-    const date = localDateOf(req.start, salon.timeZone);
-    const calendars = await loadSalonCalendars(trx, salon.id, horizonFor(date, one, 1), req.bookingId);
-    const result = planExactlyAt(calendars, { skill, stylistId, plan: one, start: req.start });
+    const [result] = await exactPlan(trx, salon, [{ skill, stylistId, plan: one, start: req.start }], req.bookingId);
     if ('reason' in result) throw new AppError('CONFLICT', 409, result.reason);
     const placed = result.plan.sittings[0];
     const chair = await preferredChair(trx, salon.id, placed, req.chairId ?? (await sittingChair(trx, req.bookingId, req.sitting)), req.bookingId);
     try {
       if (stylistId !== booking.stylistId) await setStylist(trx, req.bookingId, stylistId);
-      await replaceSitting(trx, req.bookingId, req.sitting, chair, stylistId, placed.steps.map((st, j) => ({
-        kind: st.kind, label: one.sittings[0].steps[j].label, start: new Date(st.start), end: new Date(st.end), basinId: st.basin ?? null,
+      await replaceSitting(trx, req.bookingId, req.sitting, chair, stylistId, placed.steps.map((st) => ({
+        kind: st.kind, label: st.label, start: new Date(st.start), end: new Date(st.end), basinId: st.basin,
       })));
     } catch (err) {
       if ((err as { code?: string }).code === '23P01') throw new AppError('CONFLICT', 409, 'Someone took that time a moment ago.');

@@ -1,8 +1,6 @@
 import type { Db } from '../../db/database';
-import type { Option } from '../../../shared/engine/engine';
+import type { PlacedSitting } from '../planning/planning-port';
 import { chairFreeBetween } from './bookings.repository';
-
-type PlacedSitting = Option['sittings'][number];
 
 /**
  * The chair for a sitting the engine placed: the wanted one (the chair the person saw, or the one a moved sitting

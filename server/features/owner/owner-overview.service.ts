@@ -1,8 +1,7 @@
 import { DateTime } from 'luxon';
 import type { Db } from '../../db/database';
 import type { OwnerOverview } from '../../../shared/schemas/owner.schemas';
-import { measureOccupancy } from '../../../shared/engine/engine';
-import { loadSalonCalendars } from '../planning/salon-calendars.repository';
+import { occupancyOver } from '../planning/planning-port';
 import { listStylists } from '../bookings/salon-resources.repository';
 import { findSalon } from '../salon/salon.repository';
 import { bookingsBetween, salonCounts } from './owner-overview.repository';
@@ -13,14 +12,14 @@ export async function ownerOverview(db: Db, salonId: string, now: Date): Promise
   const weekStart = DateTime.fromJSDate(now, { zone: salon.timeZone }).startOf('week');
   const from = weekStart.toISODate()!;
   const to = weekStart.plus({ days: 7 }).toISODate()!;
-  const [counts, bookings, calendars, staff] = await Promise.all([
+  const [counts, bookings, [measured], staff] = await Promise.all([
     salonCounts(db, salon.id),
     bookingsBetween(db, salon.id, weekStart.toJSDate(), weekStart.plus({ days: 7 }).toJSDate()),
-    loadSalonCalendars(db, salon.id, { from, to }, undefined, { holds: false }),
+    occupancyOver(db, salon, [{ horizon: { from, to }, cuts: [] }]),
     listStylists(db, salon.id),
   ]);
   // The same occupancy computation as `npm run plan -- occupancy` on this week's calendars.
-  const usage = measureOccupancy(calendars);
+  const usage = measured.answer;
   return {
     salon,
     counts,

@@ -2,6 +2,7 @@ import { planOptions, type Option, type Scenario } from '../../../shared/engine/
 import type { StepPlan } from '../../../shared/schemas/step-plan.schemas';
 import { toEngineSittings } from './engine-request';
 import { localDateTimeOf } from '../../../shared/time/salon-time';
+import { placedOption, type PlacedOption } from './placed-option';
 
 export interface ExactRequest {
   skill: string;
@@ -10,12 +11,14 @@ export interface ExactRequest {
   start: Date;
 }
 
+export type ExactAnswer = { plan: PlacedOption } | { reason: string };
+
 /** The engine's first plan for this stylist starting at or after `start` (any time later the same day). */
 function firstFrom(calendars: Scenario, req: ExactRequest): Option | undefined {
   const earliest = localDateTimeOf(req.start, calendars.timeZone);
   const { options } = planOptions({
     ...calendars,
-    request: { skill: req.skill, stylist: req.stylistId, earliest, sittings: toEngineSittings(req.plan), limit: 1, spread: 'none' },
+    request: { skill: req.skill, stylist: req.stylistId, earliest, sittings: toEngineSittings(req.plan, calendars.timeZone), limit: 1, spread: 'none' },
   });
   return options[0];
 }
@@ -26,9 +29,9 @@ function ask(calendars: Scenario, req: ExactRequest): Option | undefined {
 }
 
 /** The earliest plan starting between `req.start` and `latest` (e.g. anywhere inside a hands-free window). */
-export function planBetween(calendars: Scenario, req: ExactRequest, latest: Date): { plan: Option } | { reason: string } {
+export function planBetween(calendars: Scenario, req: ExactRequest, latest: Date): ExactAnswer {
   const first = firstFrom(calendars, req);
-  if (first && Date.parse(first.sittings[0].steps[0].start) <= latest.getTime()) return { plan: first };
+  if (first && Date.parse(first.sittings[0].steps[0].start) <= latest.getTime()) return { plan: placedOption(first) };
   return planExactlyAt(calendars, req);
 }
 
@@ -37,9 +40,9 @@ export function planBetween(calendars: Scenario, req: ExactRequest, latest: Date
  * asking again with less in the book: without any bookings (then it is hours or time off), with only the
  * stylist's own bookings (then their hands or client limit), else a chair or basin is taken.
  */
-export function planExactlyAt(calendars: Scenario, req: ExactRequest): { plan: Option } | { reason: string } {
+export function planExactlyAt(calendars: Scenario, req: ExactRequest): ExactAnswer {
   const plan = ask(calendars, req);
-  if (plan) return { plan };
+  if (plan) return { plan: placedOption(plan) };
   if (!ask({ ...calendars, bookings: [] }, req)) {
     return { reason: "That time is outside the salon's opening hours, the stylist's working hours, or falls in their time off (or the later sittings cannot fit their day range)." };
   }

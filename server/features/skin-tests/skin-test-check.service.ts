@@ -22,10 +22,16 @@ export async function skinTestVerdictFor(db: Db, salon: SalonRule, clientId: str
 
 export const salonPolicy = (salon: SalonRule) => ({ leadHours: salon.skinTestLeadHours, validityDays: salon.skinTestValidityDays });
 
+/** Per sitting, whether it puts tested product on the hair (every sitting when the service itself asks). */
+export function testedSittings(plan: StepPlan, salon: SalonRule, serviceAsks: boolean): boolean[] {
+  const tested = testedFamilies(salon.skinTestFamilies);
+  return plan.sittings.map((s) => serviceAsks || s.steps.some((st) => tested.has(st.product)));
+}
+
 /** The starts of the sittings that put tested product on the hair (every sitting when the service itself asks). */
 export function testedSittingStarts(plan: StepPlan, starts: readonly Date[], salon: SalonRule, serviceAsks: boolean): Date[] {
-  const tested = testedFamilies(salon.skinTestFamilies);
-  return starts.filter((_, i) => serviceAsks || plan.sittings[i]?.steps.some((s) => tested.has(s.product)));
+  const tested = testedSittings(plan, salon, serviceAsks);
+  return starts.filter((_, i) => tested[i] ?? serviceAsks);
 }
 
 export interface SkinTestDoor {

@@ -1,7 +1,7 @@
 import type { Db } from '../../db/database';
-import { breakDownOccupancy, MAX_HORIZON_DAYS, type HourCell, type OccupancyMinutes, type Scenario } from '../../../shared/engine/engine';
+import { MAX_HORIZON_DAYS, type HourCell, type OccupancyMinutes, type Scenario } from '../../../shared/engine/engine';
 import { AppError } from '../../lib/app-error';
-import { loadSalonCalendars } from '../planning/salon-calendars.repository';
+import { occupancyOver, occupancyScenario, planningSalon, type PlanningSalon } from '../planning/planning-port';
 import { chunksOf, type Period } from './utilisation-period';
 
 export interface PeriodOccupancy {
@@ -32,24 +32,19 @@ function add(a: OccupancyMinutes, b: OccupancyMinutes): OccupancyMinutes {
  * its figures are the engine's occupancy answer itself (`measureOccupancy`, on the same index); a longer one is measured in whole-week scenarios
  * whose minutes are summed before dividing once (the same definitions, so the figures agree).
  */
-export async function measurePeriod(db: Db, salonId: string, period: Period): Promise<PeriodOccupancy> {
+export async function measurePeriod(db: Db, salon: PlanningSalon, period: Period): Promise<PeriodOccupancy> {
   const chunks = chunksOf(period);
-  const measured = await Promise.all(
-    chunks.map(async (chunk) => {
-      const scenario = await loadSalonCalendars(db, salonId, { from: chunk.from, to: chunk.to }, undefined, { holds: false });
-      return { breakdown: breakDownOccupancy(scenario, chunk.weekCuts) };
-    }),
-  );
-  const total = measured.map((m) => m.breakdown.total).reduce(add);
+  const measured = await occupancyOver(db, salon, chunks.map((c) => ({ horizon: { from: c.from, to: c.to }, cuts: c.weekCuts })));
+  const total = measured.map((m) => m.total).reduce(add);
   const cells = new Map<number, HourCell>();
-  for (const c of measured.flatMap((m) => m.breakdown.cells)) {
+  for (const c of measured.flatMap((m) => m.cells)) {
     const key = c.weekday * 24 + c.hour;
     const had = cells.get(key);
     cells.set(key, had ? { ...had, chairHeld: had.chairHeld + c.chairHeld, chairOpen: had.chairOpen + c.chairOpen } : { ...c });
   }
   const answer =
     measured.length === 1
-      ? measured[0].breakdown.answer
+      ? measured[0].answer
       : {
           chairOccupancy: ratio(total.chairHeld, total.chairOpen),
           windowUse: ratio(total.windowUsed, total.windowUsed + total.windowFree),
@@ -58,7 +53,7 @@ export async function measurePeriod(db: Db, salonId: string, period: Period): Pr
   return {
     ...answer,
     total,
-    weeks: measured.flatMap((m) => m.breakdown.parts),
+    weeks: measured.flatMap((m) => m.parts),
     cells: [...cells.values()].sort((a, b) => a.weekday - b.weekday || a.hour - b.hour),
     scenarios: chunks.length,
   };
@@ -71,5 +66,5 @@ export async function periodScenario(db: Db, salonId: string, period: Period): P
     const message = `One scenario covers at most ${MAX_HORIZON_DAYS} days; export a shorter period`;
     throw new AppError('VALIDATION_FAILED', 400, message, { to: message });
   }
-  return loadSalonCalendars(db, salonId, { from: period.from, to: period.to }, undefined, { holds: false });
+  return occupancyScenario(db, await planningSalon(db, salonId), { from: period.from, to: period.to });
 }

@@ -43,7 +43,7 @@ async function ownerUtilisation(db: Db, salon: Salon, period: Period): Promise<O
   const from = instant(period.from);
   const to = instant(period.to);
   const [occupancy, sittings, names] = await Promise.all([
-    measurePeriod(db, salon.id, period),
+    measurePeriod(db, salon, period),
     listPeriodSittings(db, salon.id, new Date(from), new Date(to)),
     salonStaffNames(db, salon.id),
   ]);

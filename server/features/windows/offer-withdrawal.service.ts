@@ -1,10 +1,8 @@
 import type { Db } from '../../db/database';
 import { findService } from '../services/services.repository';
-import { loadSalonCalendars } from '../planning/salon-calendars.repository';
-import { planExactlyAt } from '../planning/plan-at';
+import { exactPlan, type PlanningSalon } from '../planning/planning-port';
 import { listOpenOffers, setOfferStatus } from './window-offers.repository';
 import { planOfferGone } from './offer-messages';
-import { localDateOf, shiftLocalDate } from '../../../shared/time/salon-time';
 
 const DAY = 86_400_000;
 
@@ -16,7 +14,7 @@ const DAY = 86_400_000;
  */
 export async function withdrawStaleOffers(
   db: Db,
-  salon: { id: string; name: string; timeZone: string },
+  salon: PlanningSalon & { name: string },
   stylistId: string,
   span: { from: Date; to: Date },
   now: Date,
@@ -25,12 +23,15 @@ export async function withdrawStaleOffers(
   const open = await listOpenOffers(db, stylistId, new Date(span.from.getTime() - DAY), span.to);
   const live = open.filter((o) => o.startsAt > now);
   if (live.length === 0) return;
-  const day = (d: Date) => localDateOf(d, salon.timeZone);
-  const calendars = await loadSalonCalendars(db, salon.id, { from: day(live[0].startsAt), to: shiftLocalDate(day(live[live.length - 1].startsAt), 1) });
+  const services = await Promise.all(live.map((o) => findService(db, salon.id, o.serviceId)));
+  const asked = live.flatMap((offer, i) => {
+    const service = services[i];
+    return service ? [{ offer, placement: { skill: service.skill, stylistId, plan: service.stepPlan, start: offer.startsAt } }] : [];
+  });
+  const placed = await exactPlan(db, salon, asked.map((a) => a.placement));
+  const still = new Set(asked.filter((_, i) => 'plan' in placed[i]).map((a) => a.offer.id));
   for (const offer of live) {
-    const service = await findService(db, salon.id, offer.serviceId);
-    const fits = service && !('reason' in planExactlyAt(calendars, { skill: service.skill, stylistId, plan: service.stepPlan, start: offer.startsAt }));
-    if (fits) continue;
+    if (still.has(offer.id)) continue;
     await setOfferStatus(db, [offer.id], 'gone');
     await planOfferGone(db, {
       offerId: offer.id, salonId: salon.id, to: { id: offer.clientId, name: offer.clientName }, salonName: salon.name,

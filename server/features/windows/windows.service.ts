@@ -1,13 +1,12 @@
 import type { Db } from '../../db/database';
 import type { Salon } from '../../../shared/schemas/salon.schemas';
 import type { HandsFreeWindowView, SentOffer } from '../../../shared/schemas/window.schemas';
-import { findWindows } from '../../../shared/engine/engine';
-import { loadSalonCalendars } from '../planning/salon-calendars.repository';
+import { windowsOn } from '../planning/planning-port';
 import { listServices } from '../services/services.repository';
 import { listStandby } from '../standby/standby.repository';
 import { standbyForWindow, windowFitServices } from './window-fits';
 import { listDayOffers } from './window-offers.repository';
-import { instantIso, shiftLocalDate } from '../../../shared/time/salon-time';
+import { instantIso } from '../../../shared/time/salon-time';
 import { localDayBounds } from '../bookings/day-view.service';
 
 /**
@@ -15,14 +14,8 @@ import { localDayBounds } from '../bookings/day-view.service';
  * for it; offers whose window has closed since are listed apart, with what became of them.
  */
 export async function listWindowViews(db: Db, salon: Salon, date: string, stylistId: string | undefined, now: Date): Promise<{ windows: HandsFreeWindowView[]; closedOffers: SentOffer[] }> {
-  const next = shiftLocalDate(date, 1);
   const { from: dayStart, to: dayEnd } = localDayBounds(date, salon.timeZone);
-  const [calendars, services, standby, offerRows] = await Promise.all([
-    loadSalonCalendars(db, salon.id, { from: date, to: next }),
-    listServices(db, salon.id),
-    listStandby(db, salon.id),
-    listDayOffers(db, salon.id, dayStart, dayEnd),
-  ]);
+  const [services, standby, offerRows] = await Promise.all([listServices(db, salon.id), listStandby(db, salon.id), listDayOffers(db, salon.id, dayStart, dayEnd)]);
   const offers = offerRows.filter((o) => !stylistId || o.stylistId === stylistId).map((o) => ({
     stylistId: o.stylistId,
     start: instantIso(o.startsAt, salon.timeZone),
@@ -35,7 +28,7 @@ export async function listWindowViews(db: Db, salon: Salon, date: string, stylis
     o.stylistId === w.stylist && o.at >= Date.parse(w.start) && o.at < Date.parse(w.end);
   const sent = ({ at: _at, ...o }: (typeof offers)[number]): SentOffer => o;
   const fits = windowFitServices(services);
-  const { windows } = findWindows({ ...calendars, fits: fits.map((f) => ({ service: f.service.id, skill: f.service.skill, minutes: f.minutes })) });
+  const windows = await windowsOn(db, salon, date, fits.map((f) => ({ service: f.service.id, skill: f.service.skill, minutes: f.minutes })));
   const shown = windows.filter((w) => !stylistId || w.stylist === stylistId);
   const views = shown.map((w) => {
       const fitting = fits.filter((f) => w.fits.includes(f.service.id));

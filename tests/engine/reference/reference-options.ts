@@ -50,7 +50,9 @@ function chainFits(c: Ctx, steps: RequestStep[], k: number, at: number, day: num
 }
 
 function sittingFits(c: Ctx, sitting: number, start: number): boolean {
-  const steps = c.s.request!.sittings[sitting].steps;
+  const { steps, allowedStarts } = c.s.request!.sittings[sitting];
+  const at = c.cal.h0 + start;
+  if (allowedStarts && !allowedStarts.some((w) => localToUtc(w.from, c.s.timeZone) <= at && at <= localToUtc(w.to, c.s.timeZone))) return false;
   const day = c.cal.localDay[start];
   return c.s.chairs.some((_, chair) => chainFits(c, steps, 0, start, day, chair));
 }
