@@ -52,7 +52,7 @@ export function bookingChanged(queryClient: QueryClient, booking: BookingView): 
   queryClient.setQueryData(apiKey(bookingsApi.one, { params: { id: booking.id } }), booking);
   return Promise.all([
     refreshRecord(queryClient, [bookingsApi.history, bookingsApi.moveTimes], booking.id),
-    refreshEndpoints(queryClient, [...BOOK_VIEWS, windowsApi.list]),
+    refreshEndpoints(queryClient, [...BOOK_VIEWS, windowsApi.list, bookingsApi.options]),
   ]);
 }
 
@@ -68,8 +68,8 @@ export function timeHeld(queryClient: QueryClient, hold: Hold): void {
   queryClient.setQueryData(apiKey(onlineBookingApi.hold, { params: { id: hold.holdId } }), hold);
 }
 
-/** Someone took a free time meanwhile (409): every list of free times is stale. */
-export const freeTimesTaken = (queryClient: QueryClient): Promise<unknown> => refreshEndpoints(queryClient, [onlineBookingApi.availability]);
+/** Someone took a free time meanwhile (409): every list of free times, online and at the desk, is stale. */
+export const freeTimesTaken = (queryClient: QueryClient): Promise<unknown> => refreshEndpoints(queryClient, [onlineBookingApi.availability, bookingsApi.options]);
 
 /** The client holds a time already (made in another tab): their open holds are read again to show it. */
 export const openHoldsChanged = (queryClient: QueryClient): Promise<unknown> => refreshEndpoints(queryClient, [onlineBookingApi.myHolds]);

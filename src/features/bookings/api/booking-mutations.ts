@@ -1,16 +1,9 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { z } from 'zod';
 import { bookingsApi } from '../../../../shared/api/bookings.api';
-import type { BookingOptionsRequest, CancelBookingSchema, ChangePlanSchema, CreateBooking, MoveSittingSchema } from '../../../../shared/schemas/booking.schemas';
+import type { CancelBookingSchema, ChangePlanSchema, CreateBooking, MoveSittingSchema } from '../../../../shared/schemas/booking.schemas';
 import { callApi } from '../../../lib/api-client';
 import { bookingChanged, bookingMade } from '../../../lib/cache-rules';
-
-/** Ask the engine for options. A POST that changes nothing, so nothing to invalidate. */
-export function useFindTimes() {
-  return useMutation({
-    mutationFn: (body: BookingOptionsRequest) => callApi(bookingsApi.options, { body }),
-  });
-}
 
 export function useCreateBooking() {
   const queryClient = useQueryClient();

@@ -1,5 +1,5 @@
 import { zodResolver } from '@hookform/resolvers/zod';
-import { useSuspenseQuery } from '@tanstack/react-query';
+import { useQuery, useQueryClient, useSuspenseQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import { FormProvider, useForm } from 'react-hook-form';
 import { useNavigate } from 'react-router-dom';
@@ -14,7 +14,9 @@ import { PageHeader } from '../../../../components/ui/page-header';
 import { paths } from '../../../../config/paths';
 import { isApiError, problemText } from '../../../../lib/api-error';
 import { useIdempotencyKeys } from '../../../../lib/use-idempotency-keys';
-import { useCreateBooking, useFindTimes } from '../../api/booking-mutations';
+import { useCreateBooking } from '../../api/booking-mutations';
+import { bookingQueries } from '../../api/booking-queries';
+import { freeTimesTaken } from '../../../../lib/cache-rules';
 import { salonQueries } from '../../../salon/api/salon-queries';
 import { BookFormSchema, toOptionsRequest, type BookFormInput, type BookFormValues } from '../../book-form-schema';
 import { BookServiceForm } from './book-service-form';
@@ -40,24 +42,27 @@ export function BookServicePage({ services, stylists, today, quote }: Props) {
   const [client, setClient] = useState<ClientSummary | null>(quote?.client ?? null);
   const [request, setRequest] = useState<BookingOptionsRequest | null>(null);
   const [booking, setBooking] = useState<string | null>(null);
-  const findTimes = useFindTimes();
+  const queryClient = useQueryClient();
+  // Options are a query keyed by the request: no request, no options (a changed client or service clears them).
+  const findTimes = useQuery({ ...bookingQueries.options(request!), enabled: request !== null });
   const create = useCreateBooking();
   const keys = useIdempotencyKeys();
   const skinTestService = services.find((s) => s.category === 'skin_test') ?? null;
 
   const ask = (next: BookingOptionsRequest) => {
     setRequest(next);
-    findTimes.mutate(next);
+    // Asking again for the same request reads it fresh (someone may have booked meanwhile).
+    void queryClient.invalidateQueries({ queryKey: bookingQueries.options(next).queryKey });
   };
   const chooseClient = (next: ClientSummary | null) => {
     setClient(next);
     form.setValue('clientId', next?.id ?? '', { shouldValidate: form.formState.isSubmitted });
-    findTimes.reset();
+    setRequest(null);
   };
   const chooseService = (service: ServiceSummary | null) => {
     form.setValue('serviceId', service?.id ?? '');
     form.setValue('stepPlan', structuredClone(service?.stepPlan ?? { sittings: [] }));
-    findTimes.reset();
+    setRequest(null);
     create.reset();
   };
   const book = (option: BookingOption) => {
@@ -83,7 +88,7 @@ export function BookServicePage({ services, stylists, today, quote }: Props) {
       onError: (error) => {
         keys.settle(action, error);
         // Someone took the time meanwhile: show why and look again.
-        if (isApiError(error, 'CONFLICT')) ask(request);
+        if (isApiError(error, 'CONFLICT')) void freeTimesTaken(queryClient);
       },
       onSettled: () => setBooking(null),
     });
@@ -105,13 +110,13 @@ export function BookServicePage({ services, stylists, today, quote }: Props) {
           onClient={chooseClient}
           onService={chooseService}
           onFind={form.handleSubmit((values) => ask(toOptionsRequest(values)))}
-          finding={findTimes.isPending}
-          primary={!findTimes.data}
+          finding={findTimes.isFetching}
+          primary={!request || !findTimes.data}
         />
       </FormProvider>
-      {findTimes.isError && <FormAlert>{problemText(findTimes.error)}</FormAlert>}
+      {request && findTimes.isError && <FormAlert>{problemText(findTimes.error)}</FormAlert>}
       {create.isError && <FormAlert>{problemText(create.error)}</FormAlert>}
-      {findTimes.data && (
+      {request && findTimes.data && (
         <SkinTestNotice
           check={findTimes.data.skinTest}
           timeZone={findTimes.data.timeZone}
@@ -119,7 +124,7 @@ export function BookServicePage({ services, stylists, today, quote }: Props) {
           onBookSkinTest={skinTestService ? () => chooseService(skinTestService) : null}
         />
       )}
-      {findTimes.data && <OptionList answer={findTimes.data} bookingKey={booking} onBook={book} />}
+      {request && findTimes.data && <OptionList answer={findTimes.data} bookingKey={booking} onBook={book} />}
     </div>
   );
 }
