@@ -1,10 +1,15 @@
 import { defineConfig } from 'vitest/config';
 import react from '@vitejs/plugin-react';
 import tailwindcss from '@tailwindcss/vite';
+import { fileURLToPath } from 'node:url';
+
+const here = (dir: string) => fileURLToPath(new URL(dir, import.meta.url));
 
 // One config for the client build, the dev server and the three test projects.
 export default defineConfig({
   plugins: [react(), tailwindcss()],
+  // The same aliases as tsconfig.base.json's paths (tsx reads those for the server).
+  resolve: { alias: { '@shared': here('./shared'), '@server': here('./server'), '@client': here('./src') } },
   build: { outDir: 'dist/client', emptyOutDir: true },
   server: {
     port: 5173,

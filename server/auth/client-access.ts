@@ -1,4 +1,4 @@
-import type { SessionUser } from '../../shared/schemas/auth.schemas';
+import type { SessionUser } from '@shared/schemas/auth.schemas';
 import type { Db } from '../db/database';
 import { notFound } from '../lib/app-error';
 import { findClientAccount, findClientIdForUser } from '../features/clients/clients.repository';

@@ -1,7 +1,7 @@
 import type { Express } from 'express';
 import { doubleCsrf } from 'csrf-csrf';
 import type { Config } from '../config';
-import { sessionApi } from '../../shared/api/session.api';
+import { sessionApi } from '@shared/api/session.api';
 import { apiRoute, type RouteTable } from '../lib/api-route';
 
 /**

@@ -1,6 +1,6 @@
 import type { RequestHandler } from 'express';
-import type { Access } from '../../shared/api/endpoint';
-import type { SessionUser } from '../../shared/schemas/auth.schemas';
+import type { Access } from '@shared/api/endpoint';
+import type { SessionUser } from '@shared/schemas/auth.schemas';
 import { AppError } from '../lib/app-error';
 
 /** The one role check every route goes through (declared on the route, never an if inside a handler). */
@@ -16,4 +16,4 @@ export function requireAccess(access: Access): RequestHandler {
   };
 }
 
-export { DESK, STAFF, type Access } from '../../shared/api/endpoint';
+export { DESK, STAFF, type Access } from '@shared/api/endpoint';

@@ -4,7 +4,7 @@ import connectPgSimple from 'connect-pg-simple';
 import type pg from 'pg';
 import type { Config } from '../config';
 import type { Db } from '../db/database';
-import type { SessionUser } from '../../shared/schemas/auth.schemas';
+import type { SessionUser } from '@shared/schemas/auth.schemas';
 import { findSessionUser } from '../features/session/users.repository';
 import { AppError } from '../lib/app-error';
 

@@ -1,6 +1,6 @@
 // The demo salon: an invented scenario. Every name, address and phone number here is made up.
-import type { ProductFamily, StepPlan } from '../../shared/schemas/step-plan.schemas';
-import { DAYS_BETWEEN_SITTINGS } from '../../shared/quotes/propose-quote';
+import type { ProductFamily, StepPlan } from '@shared/schemas/step-plan.schemas';
+import { DAYS_BETWEEN_SITTINGS } from '@shared/quotes/propose-quote';
 
 export const DEMO_PASSWORD = 'dwell-demo-2027';
 

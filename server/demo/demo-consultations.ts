@@ -3,8 +3,8 @@
 // Invented values for the invented salon.
 import { DateTime } from 'luxon';
 import type { Db } from '../db/database';
-import type { ConsultationInput } from '../../shared/schemas/consultation.schemas';
-import { proposeQuote } from '../../shared/quotes/propose-quote';
+import type { ConsultationInput } from '@shared/schemas/consultation.schemas';
+import { proposeQuote } from '@shared/quotes/propose-quote';
 import { quotePriceInputs } from '../features/consultations/consultations.repository';
 import { findSalon } from '../features/salon/salon.repository';
 import { demoServices } from './demo-catalogue';

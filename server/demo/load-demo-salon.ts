@@ -3,7 +3,7 @@ import { DateTime } from 'luxon';
 import type { Db } from '../db/database';
 import type { Kysely } from 'kysely';
 import type { Database } from '../db/schema';
-import type { BookingStatus } from '../../shared/schemas/common.schemas';
+import type { BookingStatus } from '@shared/schemas/common.schemas';
 import { hashPassword } from '../auth/password';
 import { insertBooking, tstzRange, type NewStep } from '../features/bookings/bookings.repository';
 import { DEMO_PASSWORD, demoClientNames, demoSalon, demoServices, demoStaff, type ServiceKey, type StylistKey } from './demo-catalogue';

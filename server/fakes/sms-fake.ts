@@ -2,7 +2,7 @@ import express from 'express';
 import twilio from 'twilio';
 import type { Server } from 'node:http';
 import type { AddressInfo } from 'node:net';
-import type { CapturedSms } from '../../shared/schemas/sms.schemas';
+import type { CapturedSms } from '@shared/schemas/sms.schemas';
 import { FaultPlan, pause, type FaultControls } from './fault-plan';
 
 export interface SmsFake extends FaultControls {

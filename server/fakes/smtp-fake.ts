@@ -1,7 +1,7 @@
 import { SMTPServer } from 'smtp-server';
 import { simpleParser } from 'mailparser';
 import type { AddressInfo } from 'node:net';
-import type { CapturedMail } from '../../shared/schemas/mailbox.schemas';
+import type { CapturedMail } from '@shared/schemas/mailbox.schemas';
 import { FaultPlan, pause, type FaultControls } from './fault-plan';
 
 export interface SmtpFake extends FaultControls {

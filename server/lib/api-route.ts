@@ -1,9 +1,9 @@
 import type { ZodType } from 'zod';
 import type { Request, RequestHandler, Response, Router } from 'express';
 import type { OpenAPIRegistry } from '@asteasolutions/zod-to-openapi';
-import { describeAccess, type Access, type Endpoint, type Method, type Parsed, openApiPath } from '../../shared/api/endpoint';
-import type { SessionUser } from '../../shared/schemas/auth.schemas';
-import { ApiErrorBodySchema } from '../../shared/api/error.schemas';
+import { describeAccess, type Access, type Endpoint, type Method, type Parsed, openApiPath } from '@shared/api/endpoint';
+import type { SessionUser } from '@shared/schemas/auth.schemas';
+import { ApiErrorBodySchema } from '@shared/api/error.schemas';
 import { requireAccess } from '../auth/require-access';
 import { JsonText } from './json-text';
 import { assertStorable } from './unstorable-text';

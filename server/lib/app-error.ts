@@ -1,4 +1,4 @@
-import type { ErrorCode } from '../../shared/api/error-codes';
+import type { ErrorCode } from '@shared/api/error-codes';
 
 /** The one error services throw; the error middleware turns it into `{ error: { code, message, fields? } }`. */
 export class AppError extends Error {

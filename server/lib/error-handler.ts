@@ -1,10 +1,10 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import { NoResultError } from 'kysely';
 import { ZodError } from 'zod';
-import type { ApiErrorBody } from '../../shared/api/error.schemas';
+import type { ApiErrorBody } from '@shared/api/error.schemas';
 import { AppError } from './app-error';
 import { fieldMessages } from './field-messages';
-import { ScenarioError } from '../../shared/engine/engine';
+import { ScenarioError } from '@shared/engine/engine';
 
 function send(res: Parameters<RequestHandler>[1], status: number, error: ApiErrorBody['error']) {
   res.status(status).json({ error });

@@ -1,5 +1,5 @@
-import { phoneHint } from '../../shared/schemas/contact.schemas';
-import { toE164 } from '../../shared/format/phone';
+import { phoneHint } from '@shared/schemas/contact.schemas';
+import { toE164 } from '@shared/format/phone';
 import { AppError } from './app-error';
 
 /**

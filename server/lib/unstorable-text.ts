@@ -1,4 +1,4 @@
-import { UNSTORABLE, UNSTORABLE_MESSAGE as MESSAGE } from '../../shared/schemas/common.schemas';
+import { UNSTORABLE, UNSTORABLE_MESSAGE as MESSAGE } from '@shared/schemas/common.schemas';
 import { AppError } from './app-error';
 
 // PostgreSQL text cannot hold a NUL character, and a lone UTF-16 surrogate (half of an emoji) is not valid UTF-8:

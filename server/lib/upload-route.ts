@@ -1,9 +1,9 @@
 import type { Request, RequestHandler, Response } from 'express';
 import multer from 'multer';
 import { z, type ZodObject, type ZodType } from 'zod';
-import type { SessionUser } from '../../shared/schemas/auth.schemas';
-import { ApiErrorBodySchema } from '../../shared/api/error.schemas';
-import { describeAccess, openApiPath, type Endpoint, type Parsed, type UploadLimits } from '../../shared/api/endpoint';
+import type { SessionUser } from '@shared/schemas/auth.schemas';
+import { ApiErrorBodySchema } from '@shared/api/error.schemas';
+import { describeAccess, openApiPath, type Endpoint, type Parsed, type UploadLimits } from '@shared/api/endpoint';
 import { requireAccess } from '../auth/require-access';
 import { errorStatuses, type RouteTable } from './api-route';
 import { AppError } from './app-error';

@@ -4,7 +4,7 @@
  * (kept on the server side) that touches the file system or the process.
  */
 import { readFileSync } from 'node:fs';
-import { findWindows, measureOccupancy, parseScenario, planOptions, ScenarioError } from '../../shared/engine/engine';
+import { findWindows, measureOccupancy, parseScenario, planOptions, ScenarioError } from '@shared/engine/engine';
 
 const queries = { options: planOptions, windows: findWindows, occupancy: measureOccupancy } as const;
 const usage = 'usage: npm run plan -- options|windows|occupancy <scenario.json>';

@@ -1,4 +1,4 @@
-// `npm test`: a throwaway PostgreSQL cluster, Chromium, the client build, the type-check, the lint and every suite,
+// `npm test`: a throwaway PostgreSQL cluster, Chromium, the client build, the type-check, the lint, the boundary check and every suite,
 // then one summary line. Exit status is non-zero on any failure; nothing is left running.
 import { spawn } from 'node:child_process';
 import { chmodSync, existsSync, mkdtempSync, readFileSync, rmSync } from 'node:fs';
@@ -45,11 +45,12 @@ async function main(): Promise<number> {
     // Only the browser suites need the built client; `npm test -- --project integration` skips the build.
     const projects = process.argv.slice(2).filter((_arg, i, all) => all[i - 1] === '--project');
     if (!projects.length || projects.includes('e2e')) buildClientIfStale(root);
-    // The two static checks run side by side, so the lint adds little wall time; DWELL_SKIP_TYPECHECK skips both.
+    // The static checks run side by side, so the lint and the boundary check add little wall time;
+    // DWELL_SKIP_TYPECHECK skips all three.
     const skipChecks = Boolean(process.env.DWELL_SKIP_TYPECHECK);
-    const [typecheck, lint] = skipChecks
-      ? [0, 0]
-      : await Promise.all([run('npm', ['run', '--silent', 'typecheck']), run('npm', ['run', '--silent', 'lint'])]);
+    const [typecheck, lint, boundaries] = skipChecks
+      ? [0, 0, 0]
+      : await Promise.all(['typecheck', 'lint', 'boundaries'].map((script) => run('npm', ['run', '--silent', script])));
     const reportFile = join(scratch, 'vitest-report.json');
     // Extra arguments pass through to Vitest, e.g. `npm test -- --project integration`.
     const tests = await run(bin('vitest'), ['run', '--reporter=default', '--reporter=json', `--outputFile.json=${reportFile}`, ...process.argv.slice(2)], {
@@ -59,11 +60,13 @@ async function main(): Promise<number> {
       DWELL_MODE: 'test',
     });
     const report: VitestReport | null = existsSync(reportFile) ? JSON.parse(readFileSync(reportFile, 'utf8')) : null;
-    const ok = typecheck === 0 && lint === 0 && tests === 0;
+    const ok = typecheck === 0 && lint === 0 && boundaries === 0 && tests === 0;
     const seconds = Math.round((Date.now() - started) / 1000);
     console.log(
       `\ndwell test: ${ok ? 'PASS' : 'FAIL'} — ` +
-        (skipChecks ? 'typecheck and lint skipped, ' : `typecheck ${typecheck === 0 ? 'ok' : 'FAILED'}, lint ${lint === 0 ? 'ok' : 'FAILED'}, `) +
+        (skipChecks
+          ? 'typecheck, lint and boundaries skipped, '
+          : `typecheck ${typecheck === 0 ? 'ok' : 'FAILED'}, lint ${lint === 0 ? 'ok' : 'FAILED'}, boundaries ${boundaries === 0 ? 'ok' : 'FAILED'}, `) +
         (report
           ? `${report.numPassedTests} tests passed, ${report.numFailedTests} failed, ${report.numPendingTests} skipped`
           : 'tests did not report') +

@@ -1,4 +1,4 @@
-import { LocalDateSchema } from '../../shared/schemas/common.schemas';
+import { LocalDateSchema } from '@shared/schemas/common.schemas';
 
 /** The `?date=YYYY-MM-DD` of a day page; anything else means "today" (the server decides which day that is). */
 export function dateParam(search: URLSearchParams): string | undefined {

@@ -1,4 +1,4 @@
-import type { Role } from '../../shared/schemas/common.schemas';
+import type { Role } from '@shared/schemas/common.schemas';
 import { paths } from '../config/paths';
 
 // The desk's pages, shared by the front desk and the owner.

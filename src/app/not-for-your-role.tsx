@@ -1,6 +1,6 @@
 import { useQuery } from '@tanstack/react-query';
 import { Link } from 'react-router-dom';
-import type { Role } from '../../shared/schemas/common.schemas';
+import type { Role } from '@shared/schemas/common.schemas';
 import { homeFor } from '../config/paths';
 import { sessionQueries } from '../features/auth/api/session-queries';
 import { roleLabels } from '../lib/booking-labels';

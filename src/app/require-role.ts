@@ -1,6 +1,6 @@
 import { data, redirect } from 'react-router-dom';
-import type { SessionUser } from '../../shared/schemas/auth.schemas';
-import type { Role } from '../../shared/schemas/common.schemas';
+import type { SessionUser } from '@shared/schemas/auth.schemas';
+import type { Role } from '@shared/schemas/common.schemas';
 import { paths } from '../config/paths';
 import { sessionQueries } from '../features/auth/api/session-queries';
 import { queryClient } from '../lib/query-client';

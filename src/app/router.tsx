@@ -1,6 +1,6 @@
 import { createBrowserRouter, redirect, type LoaderFunctionArgs, type RouteObject } from 'react-router-dom';
-import type { Role } from '../../shared/schemas/common.schemas';
-import { DESK, STAFF } from '../../shared/api/endpoint';
+import type { Role } from '@shared/schemas/common.schemas';
+import { DESK, STAFF } from '@shared/api/endpoint';
 import { homeFor, pages, paths } from '../config/paths';
 import { LoadingState } from '../components/ui/loading-state';
 import { currentUser, requireRole } from './require-role';

@@ -1,5 +1,5 @@
 import { Link, NavLink, useNavigate } from 'react-router-dom';
-import type { SessionUser } from '../../shared/schemas/auth.schemas';
+import type { SessionUser } from '@shared/schemas/auth.schemas';
 import { paths } from '../config/paths';
 import { SignOutButton } from '../features/auth/components/sign-out-button';
 import { navLinks } from './nav-links';

@@ -1,4 +1,4 @@
-import type { Role } from '../../shared/schemas/common.schemas';
+import type { Role } from '@shared/schemas/common.schemas';
 
 /**
  * Every page of the client, in one place: `pages` holds the router's patterns and `paths` builds the

@@ -1,8 +1,8 @@
 import { queryOptions } from '@tanstack/react-query';
 import type { z } from 'zod';
-import { urlOf, type Answer, type CallInput, type Endpoint } from '../../shared/api/endpoint';
-import { ApiErrorBodySchema } from '../../shared/api/error.schemas';
-import { sessionApi } from '../../shared/api/session.api';
+import { urlOf, type Answer, type CallInput, type Endpoint } from '@shared/api/endpoint';
+import { ApiErrorBodySchema } from '@shared/api/error.schemas';
+import { sessionApi } from '@shared/api/session.api';
 import { ApiError } from './api-error';
 
 /*

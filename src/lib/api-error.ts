@@ -1,4 +1,4 @@
-import type { ErrorCode } from '../../shared/api/error-codes';
+import type { ErrorCode } from '@shared/api/error-codes';
 
 /** What every failed API call throws: the server's error code, status and per-field messages. */
 export class ApiError extends Error {

@@ -1,7 +1,7 @@
-import type { BookingView } from '../../shared/schemas/booking-view.schemas';
-import type { BookingStatus, Role, StepKind } from '../../shared/schemas/common.schemas';
-import { formatMoney } from '../../shared/money/money';
-import { SALON_LOCALE } from '../../shared/format/locale';
+import type { BookingView } from '@shared/schemas/booking-view.schemas';
+import type { BookingStatus, Role, StepKind } from '@shared/schemas/common.schemas';
+import { formatMoney } from '@shared/money/money';
+import { SALON_LOCALE } from '@shared/format/locale';
 
 /** The words the UI uses for the API's enum values (docs/glossary.md). */
 export const stepKindLabels: Record<StepKind, string> = {

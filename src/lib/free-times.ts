@@ -1,7 +1,7 @@
-import type { Availability } from '../../shared/schemas/online-booking.schemas';
-import { formatDate, formatTime } from '../../shared/format/date-time';
-import { formatFor, zonelessFormat } from '../../shared/format/locale';
-import { localDateOf, shiftLocalDate } from '../../shared/time/salon-time';
+import type { Availability } from '@shared/schemas/online-booking.schemas';
+import { formatDate, formatTime } from '@shared/format/date-time';
+import { formatFor, zonelessFormat } from '@shared/format/locale';
+import { localDateOf, shiftLocalDate } from '@shared/time/salon-time';
 
 export type FreeTime = Availability['times'][number];
 export type FreeDay = { date: string; times: FreeTime[] };

@@ -1,6 +1,6 @@
 import { DateTime } from 'luxon';
-import { instantIso, localDateOf } from '../../shared/time/salon-time';
-import { formatFor, type FormatContext } from '../../shared/format/locale';
+import { instantIso, localDateOf } from '@shared/time/salon-time';
+import { formatFor, type FormatContext } from '@shared/format/locale';
 
 /*
  * The client's own readings of the clock. Conversions between instants and the salon's wall clock are in

@@ -11,11 +11,11 @@
 import { randomUUID } from 'node:crypto';
 import type { Insertable, Kysely } from 'kysely';
 import { DateTime } from 'luxon';
-import type { Database } from '../../server/db/schema';
-import { hashPassword } from '../../server/auth/password';
-import { tstzRange } from '../../server/features/bookings/bookings.repository';
-import type { StepPlan } from '../../shared/schemas/step-plan.schemas';
-import type { ScenarioInput } from '../../shared/engine/scenario.schemas';
+import type { Database } from '@server/db/schema';
+import { hashPassword } from '@server/auth/password';
+import { tstzRange } from '@server/features/bookings/bookings.repository';
+import type { StepPlan } from '@shared/schemas/step-plan.schemas';
+import type { ScenarioInput } from '@shared/engine/scenario.schemas';
 import { generateScenario, seededRng } from '../engine/scenario-generator';
 
 export interface BusySalonOptions {

@@ -6,8 +6,8 @@
  */
 import { setFlagsFromString } from 'node:v8';
 import { runInNewContext } from 'node:vm';
-import { findWindows, measureOccupancy, parseScenario, planOptions, type Scenario } from '../../shared/engine/engine';
-import type { ScenarioInput } from '../../shared/engine/scenario.schemas';
+import { findWindows, measureOccupancy, parseScenario, planOptions, type Scenario } from '@shared/engine/engine';
+import type { ScenarioInput } from '@shared/engine/scenario.schemas';
 import { referenceOptions } from '../engine/reference/reference-options';
 import { referenceOccupancy, referenceWindows } from '../engine/reference/reference-windows';
 import { generateScenario, seededRng, type GeneratorOptions } from '../engine/scenario-generator';

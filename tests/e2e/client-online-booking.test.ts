@@ -1,9 +1,9 @@
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { DEMO_PASSWORD } from '../../server/demo/demo-catalogue';
+import { DEMO_PASSWORD } from '@server/demo/demo-catalogue';
 import { DateTime } from 'luxon';
 import { setupPaths } from '../setup/setup-paths';
-import { messagesApi } from '../../shared/api/messages.api';
+import { messagesApi } from '@shared/api/messages.api';
 import { makeImage } from '../factories/image';
 import { apiWrite, baseUrl, connectBrowser, expectAccessible, screenshot, signedInPage, signInThroughPage } from '../setup/browser';
 

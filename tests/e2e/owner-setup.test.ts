@@ -1,7 +1,7 @@
 import { DateTime } from 'luxon';
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { DEMO_PASSWORD } from '../../server/demo/demo-catalogue';
+import { DEMO_PASSWORD } from '@server/demo/demo-catalogue';
 import { setupPaths } from '../setup/setup-paths';
 import { apiWrite, baseUrl, connectBrowser, screenshot, signInThroughPage } from '../setup/browser';
 

@@ -1,7 +1,7 @@
 import { AxeBuilder } from '@axe-core/playwright';
 import type { Browser } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { DEMO_PASSWORD } from '../../server/demo/demo-catalogue';
+import { DEMO_PASSWORD } from '@server/demo/demo-catalogue';
 import { baseUrl, connectBrowser, screenshot, signInThroughPage } from '../setup/browser';
 
 let browser: Browser;

@@ -3,7 +3,7 @@
  * that respect it), and the request steps' own ids and labels returned on the planned steps.
  */
 import { describe, expect, it } from 'vitest';
-import { parseScenario, planOptions, ScenarioError, type ScenarioInput } from '../../shared/engine/engine';
+import { parseScenario, planOptions, ScenarioError, type ScenarioInput } from '@shared/engine/engine';
 
 // A week in Denver; one stylist and one chair, open 09:00–17:00 every day.
 const week = { from: '2027-06-01', to: '2027-06-08' };

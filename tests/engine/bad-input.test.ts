@@ -1,6 +1,6 @@
 /** Bad input is rejected with a ScenarioError naming the field, never with a partial answer. */
 import { describe, expect, it } from 'vitest';
-import { parseScenario, planOptions, ScenarioError, type ScenarioInput } from '../../shared/engine/engine';
+import { parseScenario, planOptions, ScenarioError, type ScenarioInput } from '@shared/engine/engine';
 
 function base(): ScenarioInput {
   return {

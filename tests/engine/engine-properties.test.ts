@@ -6,7 +6,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { DateTime } from 'luxon';
-import { findWindows, measureOccupancy, parseScenario, planOptions, type Scenario } from '../../shared/engine/engine';
+import { findWindows, measureOccupancy, parseScenario, planOptions, type Scenario } from '@shared/engine/engine';
 import { validateOption } from './plan-validator';
 import { buildCalendar } from './reference/reference-calendar';
 import { referencePairs } from './reference/reference-options';

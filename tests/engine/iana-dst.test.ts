@@ -6,7 +6,7 @@
  * out by hand from those rules (not copied from a published table).
  */
 import { describe, expect, it } from 'vitest';
-import { measureOccupancy, parseScenario, planOptions } from '../../shared/engine/engine';
+import { measureOccupancy, parseScenario, planOptions } from '@shared/engine/engine';
 
 function scenario(zone: string, date: string, extra: Record<string, unknown> = {}) {
   const next = new Date(Date.parse(`${date}T00:00:00Z`) + 86_400_000).toISOString().slice(0, 10);

@@ -3,7 +3,7 @@
  * figures exactly; weekly parts and weekday × hour cells add up to the whole.
  */
 import { describe, expect, it } from 'vitest';
-import { breakDownOccupancy, measureOccupancy, parseScenario, type OccupancyMinutes } from '../../shared/engine/engine';
+import { breakDownOccupancy, measureOccupancy, parseScenario, type OccupancyMinutes } from '@shared/engine/engine';
 import { generateScenario, seededRng } from './scenario-generator';
 
 const ratio = (n: number, d: number) => (d === 0 ? null : n / d);

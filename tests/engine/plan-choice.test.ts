@@ -4,7 +4,7 @@
  * developing time, then the shortest sitting, then the best-fitting chair.
  */
 import { describe, expect, it } from 'vitest';
-import { parseScenario, planOptions, type ScenarioInput } from '../../shared/engine/engine';
+import { parseScenario, planOptions, type ScenarioInput } from '@shared/engine/engine';
 
 const day = '2027-06-02';
 const at = (hhmm: string) => `${day}T${hhmm}`;

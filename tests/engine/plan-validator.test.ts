@@ -2,7 +2,7 @@
 import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { parseScenario, planOptions, type Option } from '../../shared/engine/engine';
+import { parseScenario, planOptions, type Option } from '@shared/engine/engine';
 import { validateOption } from './plan-validator';
 
 const scenario = parseScenario(readFileSync(join(__dirname, '../../docs/examples/two-sitting-correction-denver.json'), 'utf8'));

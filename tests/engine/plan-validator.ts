@@ -4,10 +4,10 @@
  * a bug there cannot hide here; returns the list of broken rules (empty when the option is valid).
  */
 import { DateTime } from 'luxon';
-import type { Option } from '../../shared/engine/engine';
-import type { HoursRule, Scenario } from '../../shared/engine/scenario.schemas';
-import { ruleDays } from '../../shared/engine/recurrence';
-import { zoneClock } from '../../shared/engine/local-time';
+import type { Option } from '@shared/engine/engine';
+import type { HoursRule, Scenario } from '@shared/engine/scenario.schemas';
+import { ruleDays } from '@shared/engine/recurrence';
+import { zoneClock } from '@shared/engine/local-time';
 import { dayToDate, isoToUtc, localToUtc, partsOf, wallToUtc } from './reference/reference-time';
 
 type Range = [number, number];

@@ -4,9 +4,9 @@
  * RFC prints. Source of each expected list: RFC 5545 §3.8.5.3, as tabulated in trade-facts §5.
  */
 import { describe, expect, it } from 'vitest';
-import { parseScenario, planOptions } from '../../shared/engine/engine';
-import { parseLocalDate, zoneClock } from '../../shared/engine/local-time';
-import { ruleDays } from '../../shared/engine/recurrence';
+import { parseScenario, planOptions } from '@shared/engine/engine';
+import { parseLocalDate, zoneClock } from '@shared/engine/local-time';
+import { ruleDays } from '@shared/engine/recurrence';
 
 const NY = 'America/New_York';
 const day = (date: string) => parseLocalDate(date)!;

@@ -4,7 +4,7 @@
  * a per-minute local grid; times that fall in a spring-forward gap are skipped.
  */
 import { DateTime } from 'luxon';
-import type { ScenarioInput } from '../../shared/engine/scenario.schemas';
+import type { ScenarioInput } from '@shared/engine/scenario.schemas';
 
 export type Rng = () => number;
 

@@ -4,8 +4,8 @@
  * 1997-09-02 in America/New_York) and from the EXDATE property of RFC 5545 §3.8.5.1.
  */
 import { describe, expect, it } from 'vitest';
-import { findFreeStylists, parseScenario, planOptions, type ScenarioInput } from '../../shared/engine/engine';
-import { composeWeeklyRule, nextDates, readWeeklyRule, ruleProblem } from '../../shared/engine/weekly-rule';
+import { findFreeStylists, parseScenario, planOptions, type ScenarioInput } from '@shared/engine/engine';
+import { composeWeeklyRule, nextDates, readWeeklyRule, ruleProblem } from '@shared/engine/weekly-rule';
 
 describe('weekday rules written by the hours editor', () => {
   const everyOther = composeWeeklyRule({ weekdays: ['TH', 'TU'], everyOtherWeek: true, startsOn: '1997-09-02', closedDates: [] });

@@ -3,8 +3,8 @@
  * daylight-saving change (IANA tz: America/Denver 2027-03-14 and 2027-11-07, Europe/London
  * 2027-03-28 and 2027-10-31), with a random multi-step, sometimes multi-sitting request.
  */
-import { parseScenario, type Scenario } from '../../shared/engine/engine';
-import type { ScenarioInput } from '../../shared/engine/scenario.schemas';
+import { parseScenario, type Scenario } from '@shared/engine/engine';
+import type { ScenarioInput } from '@shared/engine/scenario.schemas';
 import { between, exists, generateScenario, localText, pick, seededRng, type Rng } from './scenario-generator';
 
 const PLACES: Array<[zone: string, from: string]> = [

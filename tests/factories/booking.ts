@@ -1,5 +1,5 @@
-import type { Db } from '../../server/db/database';
-import { insertBooking, type NewStep } from '../../server/features/bookings/bookings.repository';
+import type { Db } from '@server/db/database';
+import { insertBooking, type NewStep } from '@server/features/bookings/bookings.repository';
 
 let seq = 0;
 

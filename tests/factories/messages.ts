@@ -3,7 +3,7 @@ import type { TestApp } from '../setup/test-app';
 import { signedInAgent } from '../setup/test-app';
 import { insertUser } from './user';
 import { localIso } from '../setup/dates';
-import type { StepPlan } from '../../shared/schemas/step-plan.schemas';
+import type { StepPlan } from '@shared/schemas/step-plan.schemas';
 
 let phones = 0;
 

@@ -1,4 +1,4 @@
-import type { Db } from '../../server/db/database';
+import type { Db } from '@server/db/database';
 
 let seq = 0;
 

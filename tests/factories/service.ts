@@ -1,5 +1,5 @@
-import type { Db } from '../../server/db/database';
-import type { StepPlan } from '../../shared/schemas/step-plan.schemas';
+import type { Db } from '@server/db/database';
+import type { StepPlan } from '@shared/schemas/step-plan.schemas';
 
 let seq = 0;
 

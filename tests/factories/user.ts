@@ -1,6 +1,6 @@
-import type { Db } from '../../server/db/database';
-import type { Role } from '../../shared/schemas/common.schemas';
-import { hashPassword } from '../../server/auth/password';
+import type { Db } from '@server/db/database';
+import type { Role } from '@shared/schemas/common.schemas';
+import { hashPassword } from '@server/auth/password';
 
 let seq = 0;
 export const TEST_PASSWORD = 'plum-orchard-lantern-42';

@@ -5,7 +5,7 @@ import { insertSalon } from '../factories/salon';
 import { insertUser, type UserFixture } from '../factories/user';
 import { insertService, insertTestBooking } from '../factories/booking';
 import { makeImage } from '../factories/image';
-import type { Role } from '../../shared/schemas/common.schemas';
+import type { Role } from '@shared/schemas/common.schemas';
 import { documentedRoutes, fillPath, type DocumentedRoute } from './access-matrix/openapi-routes';
 import { expectedAccess, type Expectation } from './access-matrix/expected-access';
 

@@ -3,7 +3,7 @@ import { anonymousAgent, signedInAgent, startTestApp, type TestApp } from '../se
 import { insertSalon, type SalonFixture } from '../factories/salon';
 import { insertUser, type UserFixture } from '../factories/user';
 import { insertService, insertTestBooking } from '../factories/booking';
-import type { Role } from '../../shared/schemas/common.schemas';
+import type { Role } from '@shared/schemas/common.schemas';
 
 let t: TestApp;
 let salon: SalonFixture;

@@ -1,8 +1,8 @@
 import fc from 'fast-check';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { anonymousAgent, signedInAgent, startTestApp, type TestApp } from '../setup/test-app';
-import { loadDemoSalon } from '../../server/demo/load-demo-salon';
-import { DEMO_PASSWORD, demoSalon } from '../../server/demo/demo-catalogue';
+import { loadDemoSalon } from '@server/demo/load-demo-salon';
+import { DEMO_PASSWORD, demoSalon } from '@server/demo/demo-catalogue';
 import { documentedRoutes, type DocumentedRoute } from './access-matrix/openapi-routes';
 import { requestArbitrary, type FuzzRequest } from './fuzz/request-arbitrary';
 

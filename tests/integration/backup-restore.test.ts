@@ -4,11 +4,11 @@ import { join } from 'node:path';
 import { randomBytes } from 'node:crypto';
 import pg from 'pg';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { createDb, createPool } from '../../server/db/database';
-import { loadDemoSalon } from '../../server/demo/load-demo-salon';
-import { insertPhotos } from '../../server/features/photos/photos.repository';
-import { findPostgresBin } from '../../server/ops/postgres-cluster';
-import { dumpDatabase, restoreDatabase, withDatabase } from '../../server/ops/pg-backup';
+import { createDb, createPool } from '@server/db/database';
+import { loadDemoSalon } from '@server/demo/load-demo-salon';
+import { insertPhotos } from '@server/features/photos/photos.repository';
+import { findPostgresBin } from '@server/ops/postgres-cluster';
+import { dumpDatabase, restoreDatabase, withDatabase } from '@server/ops/pg-backup';
 import { createTestDb, type TestDb } from '../setup/test-db';
 import { testEnv } from '../setup/test-env';
 

@@ -3,8 +3,8 @@
 // (two createApp instances, each with its own cache) on one database, as docs/scaling.md describes.
 import { sql } from 'kysely';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { createApp } from '../../server/app';
-import { loadConfig } from '../../server/config';
+import { createApp } from '@server/app';
+import { loadConfig } from '@server/config';
 import { anonymousAgent, signedInAgent, startTestApp, type TestApp } from '../setup/test-app';
 import { insertSalon, type SalonFixture } from '../factories/salon';
 import { insertUser, type UserFixture } from '../factories/user';

@@ -2,9 +2,9 @@ import { sql } from 'kysely';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { loadBusySalon, type BusySalon } from '../bench/busy-salon-db';
 import { createTestDb, type TestDb } from '../setup/test-db';
-import { freeTimes } from '../../server/features/online-booking/availability.service';
-import { optionsFor } from '../../server/features/planning/planning-port';
-import { listServices } from '../../server/features/services/services.repository';
+import { freeTimes } from '@server/features/online-booking/availability.service';
+import { optionsFor } from '@server/features/planning/planning-port';
+import { listServices } from '@server/features/services/services.repository';
 
 let testDb: TestDb;
 let busy: BusySalon;

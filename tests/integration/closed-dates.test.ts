@@ -5,8 +5,8 @@ import { insertUser, type UserFixture } from '../factories/user';
 import { insertPlannedService, tonerPlan } from '../factories/service';
 import { futureWeekday, localIso } from '../setup/dates';
 import { setupPaths } from '../setup/setup-paths';
-import { composeWeeklyRule } from '../../shared/engine/weekly-rule';
-import { localDateOf } from '../../shared/time/salon-time';
+import { composeWeeklyRule } from '@shared/engine/weekly-rule';
+import { localDateOf } from '@shared/time/salon-time';
 
 // A closed date written by the Set-up form (an EXDATE line, RFC 5545 §3.8.5.1) once answered 500 on the public
 // page for every visitor. The same text must work for every reader: public page, free times, desk options, booking.

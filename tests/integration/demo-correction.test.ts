@@ -1,13 +1,13 @@
 import { sql } from 'kysely';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createTestDb, type TestDb } from '../setup/test-db';
-import { loadDemoSalon } from '../../server/demo/load-demo-salon';
-import { findSalon } from '../../server/features/salon/salon.repository';
-import { quotePriceInputs } from '../../server/features/consultations/consultations.repository';
-import { proposeQuote } from '../../shared/quotes/propose-quote';
-import { processingLimitIssues } from '../../shared/rules/processing-limits';
-import { StepPlanSchema, sittingMaxMinutes, type StepPlan } from '../../shared/schemas/step-plan.schemas';
-import type { ConsultationInput } from '../../shared/schemas/consultation.schemas';
+import { loadDemoSalon } from '@server/demo/load-demo-salon';
+import { findSalon } from '@server/features/salon/salon.repository';
+import { quotePriceInputs } from '@server/features/consultations/consultations.repository';
+import { proposeQuote } from '@shared/quotes/propose-quote';
+import { processingLimitIssues } from '@shared/rules/processing-limits';
+import { StepPlanSchema, sittingMaxMinutes, type StepPlan } from '@shared/schemas/step-plan.schemas';
+import type { ConsultationInput } from '@shared/schemas/consultation.schemas';
 
 // The demo salon's colour correction, loaded as `npm start` loads it.
 let testDb: TestDb;

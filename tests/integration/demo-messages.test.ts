@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, expect, it } from 'vitest';
 import { createTestDb, type TestDb } from '../setup/test-db';
-import { loadDemoSalon } from '../../server/demo/load-demo-salon';
+import { loadDemoSalon } from '@server/demo/load-demo-salon';
 
 let testDb: TestDb;
 beforeAll(async () => {

@@ -2,7 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { anonymousAgent, signedInAgent, startTestApp, type TestApp } from '../setup/test-app';
 import { insertSalon } from '../factories/salon';
 import { insertUser, type UserFixture } from '../factories/user';
-import { emptyHairHistory, type HairHistory } from '../../shared/schemas/hair-history.schemas';
+import { emptyHairHistory, type HairHistory } from '@shared/schemas/hair-history.schemas';
 
 let t: TestApp;
 let client: UserFixture, otherClient: UserFixture, stylist: UserFixture, desk: UserFixture, otherSalonStylist: UserFixture;

@@ -1,10 +1,10 @@
 import { createServer, connect, type Server } from 'node:net';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { createApp } from '../../server/app';
-import { loadConfig } from '../../server/config';
-import { createDb, createPool } from '../../server/db/database';
-import { startOutsideServices } from '../../server/services';
+import { createApp } from '@server/app';
+import { loadConfig } from '@server/config';
+import { createDb, createPool } from '@server/db/database';
+import { startOutsideServices } from '@server/services';
 import { createTestDb, type TestDb } from '../setup/test-db';
 
 let t: TestDb;

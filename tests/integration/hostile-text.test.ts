@@ -7,7 +7,7 @@ import { insertSalon, type SalonFixture } from '../factories/salon';
 import { insertUser, type UserFixture } from '../factories/user';
 import { insertPlannedService } from '../factories/service';
 import { futureWeekday, localIso } from '../setup/dates';
-import { sendDueMessages } from '../../server/features/messages/send-message.job';
+import { sendDueMessages } from '@server/features/messages/send-message.job';
 
 // Markup and calendar/CSV metacharacters typed into text fields are data: stored and answered exactly as
 // typed, sent as plain text (e-mail, SMS) and escaped where a format demands it (.ics, RFC 5545 §3.3.11).

@@ -3,7 +3,7 @@ import { spawn, type ChildProcess } from 'node:child_process';
 import { createTestDb, type TestDb } from '../setup/test-db';
 import { insertSalon } from '../factories/salon';
 import { insertUser } from '../factories/user';
-import { startSmsFake, type SmsFake } from '../../server/fakes/sms-fake';
+import { startSmsFake, type SmsFake } from '@server/fakes/sms-fake';
 
 /**
  * A real app server process (server/ops/serve.ts, the production entry) is killed with SIGKILL after it has

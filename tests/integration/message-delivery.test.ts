@@ -5,8 +5,8 @@ import { insertUser, type UserFixture } from '../factories/user';
 import { insertPlannedService } from '../factories/service';
 import { messageDesk } from '../factories/messages';
 import { localIso } from '../setup/dates';
-import { SEND_MESSAGE_JOB, scheduleMessageJobs, sendDueMessages } from '../../server/features/messages/send-message.job';
-import type { StepPlan } from '../../shared/schemas/step-plan.schemas';
+import { SEND_MESSAGE_JOB, scheduleMessageJobs, sendDueMessages } from '@server/features/messages/send-message.job';
+import type { StepPlan } from '@shared/schemas/step-plan.schemas';
 
 let t: TestApp;
 let salon: SalonFixture;

@@ -6,10 +6,10 @@ import { insertUser, type UserFixture } from '../factories/user';
 import { correctionPlan, insertPlannedService } from '../factories/service';
 import { messageDesk } from '../factories/messages';
 import { localIso } from '../setup/dates';
-import { sendMessage } from '../../server/features/messages/send-message.job';
-import { planStaffMessages } from '../../server/features/messages/staff-messages.service';
-import { followUpTimes } from '../../shared/messages/follow-up-times';
-import type { StepPlan } from '../../shared/schemas/step-plan.schemas';
+import { sendMessage } from '@server/features/messages/send-message.job';
+import { planStaffMessages } from '@server/features/messages/staff-messages.service';
+import { followUpTimes } from '@shared/messages/follow-up-times';
+import type { StepPlan } from '@shared/schemas/step-plan.schemas';
 
 let t: TestApp;
 let salon: SalonFixture;

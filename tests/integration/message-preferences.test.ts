@@ -6,9 +6,9 @@ import { insertSalon, type SalonFixture } from '../factories/salon';
 import { insertUser, type UserFixture } from '../factories/user';
 import { insertPlannedService } from '../factories/service';
 import { messageDesk } from '../factories/messages';
-import { sendDueMessages } from '../../server/features/messages/send-message.job';
-import { FAKE_TWILIO } from '../../server/services';
-import type { StepPlan } from '../../shared/schemas/step-plan.schemas';
+import { sendDueMessages } from '@server/features/messages/send-message.job';
+import { FAKE_TWILIO } from '@server/services';
+import type { StepPlan } from '@shared/schemas/step-plan.schemas';
 
 let t: TestApp;
 let salon: SalonFixture;

@@ -5,8 +5,8 @@ import { insertSalon, type SalonFixture } from '../factories/salon';
 import { insertUser, type UserFixture } from '../factories/user';
 import { insertPlannedService } from '../factories/service';
 import { localIso } from '../setup/dates';
-import { outOfQuietHours } from '../../server/features/messages/quiet-hours';
-import { requeueStuckMessages, sendDueMessages, sendMessage } from '../../server/features/messages/send-message.job';
+import { outOfQuietHours } from '@server/features/messages/quiet-hours';
+import { requeueStuckMessages, sendDueMessages, sendMessage } from '@server/features/messages/send-message.job';
 
 let t: TestApp;
 let salon: SalonFixture;

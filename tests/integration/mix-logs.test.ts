@@ -3,9 +3,9 @@ import { signedInAgent, startTestApp, type TestApp } from '../setup/test-app';
 import { insertSalon, type SalonFixture } from '../factories/salon';
 import { insertUser, type UserFixture } from '../factories/user';
 import { insertService } from '../factories/booking';
-import { insertBooking } from '../../server/features/bookings/bookings.repository';
-import type { Db } from '../../server/db/database';
-import type { BookingStatus } from '../../shared/schemas/common.schemas';
+import { insertBooking } from '@server/features/bookings/bookings.repository';
+import type { Db } from '@server/db/database';
+import type { BookingStatus } from '@shared/schemas/common.schemas';
 import { down as removePartKinds, up as addPartKinds } from '../../migrations/20261205T0100_add_mix_part_kinds';
 
 let t: TestApp;

@@ -4,7 +4,7 @@ import { insertSalon, type SalonFixture } from '../factories/salon';
 import { insertUser, type UserFixture } from '../factories/user';
 import { correctionPlan, insertNegativeSkinTest, insertPlannedService } from '../factories/service';
 import { futureWeekday, localIso } from '../setup/dates';
-import { depositOutcome } from '../../server/features/bookings/cancel-booking.service';
+import { depositOutcome } from '@server/features/bookings/cancel-booking.service';
 
 let t: TestApp;
 let salon: SalonFixture;

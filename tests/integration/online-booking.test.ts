@@ -5,10 +5,10 @@ import { insertSalon, type SalonFixture } from '../factories/salon';
 import { insertUser, type UserFixture } from '../factories/user';
 import { insertPlannedService } from '../factories/service';
 import { futureWeekday, localIso } from '../setup/dates';
-import { FAKE_CARDS } from '../../server/fakes/payments-fake';
-import { LAPSE_HOLD_JOB } from '../../server/features/online-booking/holds.service';
-import { sendDueMessages } from '../../server/features/messages/send-message.job';
-import { emptyHairHistory } from '../../shared/schemas/hair-history.schemas';
+import { FAKE_CARDS } from '@server/fakes/payments-fake';
+import { LAPSE_HOLD_JOB } from '@server/features/online-booking/holds.service';
+import { sendDueMessages } from '@server/features/messages/send-message.job';
+import { emptyHairHistory } from '@shared/schemas/hair-history.schemas';
 import { insertTestBooking } from '../factories/booking';
 import { DateTime } from 'luxon';
 

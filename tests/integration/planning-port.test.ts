@@ -6,12 +6,11 @@ import { insertSalon, type SalonFixture } from '../factories/salon';
 import { insertUser, type UserFixture } from '../factories/user';
 import { insertPlannedService } from '../factories/service';
 import { futureWeekday } from '../setup/dates';
-import { apiPaths } from '../../shared/api/api-paths';
-import type { Database } from '../../server/db/schema';
-import type { StepPlan } from '../../shared/schemas/step-plan.schemas';
-import type { BookingOption } from '../../shared/schemas/booking.schemas';
-import { findSalon } from '../../server/features/salon/salon.repository';
-import { findBookingOptions } from '../../server/features/bookings/booking-options.service';
+import type { Database } from '@server/db/schema';
+import type { StepPlan } from '@shared/schemas/step-plan.schemas';
+import type { BookingOption } from '@shared/schemas/booking.schemas';
+import { findSalon } from '@server/features/salon/salon.repository';
+import { findBookingOptions } from '@server/features/bookings/booking-options.service';
 
 // The desk's options come from one planning port: the salon's calendars are read once per request, labels travel
 // through the engine, and what a client's skin test allows is a limit the engine searches within, so the desk
@@ -72,7 +71,7 @@ describe('what the skin test allows is a limit the engine searches within', () =
     // between, far more than the options asked for (one stylist: one option per open day).
     const earliestDate = DateTime.now().setZone(ZONE).plus({ days: 4 }).toISODate()!;
     const K = 4;
-    const res = await desk$.write('post', apiPaths.bookingOptions, { clientId: client.clientId, serviceId: rootColour, stepPlan: oxidative, stylistId: null, earliestDate, limit: K });
+    const res = await desk$.write('post', '/api/booking-options', { clientId: client.clientId, serviceId: rootColour, stepPlan: oxidative, stylistId: null, earliestDate, limit: K });
     expect(res.status).toBe(200);
     expect(res.body.skinTest).toMatchObject({ required: true, ok: true });
     const options = res.body.options as BookingOption[];
@@ -87,7 +86,7 @@ describe('what the skin test allows is a limit the engine searches within', () =
 
   it('carries each step’s label through the engine into the option', async () => {
     const { client } = await clientBetweenTests();
-    const res = await desk$.write('post', apiPaths.bookingOptions, { clientId: client.clientId, serviceId: rootColour, stepPlan: oxidative, stylistId: ana.staffId, earliestDate: futureWeekday(2, 6), limit: 2 });
+    const res = await desk$.write('post', '/api/booking-options', { clientId: client.clientId, serviceId: rootColour, stepPlan: oxidative, stylistId: ana.staffId, earliestDate: futureWeekday(2, 6), limit: 2 });
     expect(res.status).toBe(200);
     for (const o of res.body.options as BookingOption[]) {
       expect(o.sittings[0].steps.map((s) => [s.kind, s.label])).toEqual(oxidative.sittings[0].steps.map((s) => [s.kind, s.label]));

@@ -5,7 +5,7 @@ import { insertUser, type UserFixture } from '../factories/user';
 import { insertNegativeSkinTest, insertPlannedService } from '../factories/service';
 import { futureWeekday, localIso } from '../setup/dates';
 import { setupPaths } from '../setup/setup-paths';
-import type { PlannedStep, StepPlan } from '../../shared/schemas/step-plan.schemas';
+import type { PlannedStep, StepPlan } from '@shared/schemas/step-plan.schemas';
 
 // Processing limits, counted from when the first section gets product (common practice, from memory): lightener
 // on the head about 45–50 min at most, permanent colour 30–45, toner up to 30, remover 20–60 per application;

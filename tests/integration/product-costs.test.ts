@@ -3,7 +3,7 @@ import { signedInAgent, startTestApp, type TestApp } from '../setup/test-app';
 import { insertSalon, type SalonFixture } from '../factories/salon';
 import { insertUser, type UserFixture } from '../factories/user';
 import { insertService } from '../factories/booking';
-import { insertBooking } from '../../server/features/bookings/bookings.repository';
+import { insertBooking } from '@server/features/bookings/bookings.repository';
 
 let t: TestApp;
 let salon: SalonFixture;

@@ -5,8 +5,8 @@ import { insertUser, type UserFixture } from '../factories/user';
 import { insertPlannedService } from '../factories/service';
 import { futureWeekday, localIso } from '../setup/dates';
 import { setupPaths } from '../setup/setup-paths';
-import type { StepPlan } from '../../shared/schemas/step-plan.schemas';
-import { emptyHairHistory } from '../../shared/schemas/hair-history.schemas';
+import type { StepPlan } from '@shared/schemas/step-plan.schemas';
+import { emptyHairHistory } from '@shared/schemas/hair-history.schemas';
 
 // Every way oxidative colour could once be booked without a valid skin test, tried at the API. The rule: a test
 // counts as passed only when read negative, at least 48 hours before the colour (Cosmetics Europe Recommendation

@@ -8,7 +8,7 @@ import { insertSalon, type SalonFixture } from '../factories/salon';
 import { insertUser, type UserFixture } from '../factories/user';
 import { insertService, insertTestBooking } from '../factories/booking';
 import { futureWeekday, localIso } from '../setup/dates';
-import { listAudit } from '../../server/features/audit/audit.repository';
+import { listAudit } from '@server/features/audit/audit.repository';
 
 // Skin and strand tests are safety records: a reading is stored once and audited, the names of who
 // recorded and read them outlive their accounts, and nothing that removes a booking, an account or a

@@ -4,7 +4,7 @@ import { insertSalon, type SalonFixture } from '../factories/salon';
 import { insertUser, type UserFixture } from '../factories/user';
 import { insertPlannedService, tonerPlan } from '../factories/service';
 import { futureWeekday, localIso } from '../setup/dates';
-import type { StepPlan } from '../../shared/schemas/step-plan.schemas';
+import type { StepPlan } from '@shared/schemas/step-plan.schemas';
 
 let t: TestApp;
 let salon: SalonFixture;

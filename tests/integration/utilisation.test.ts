@@ -9,10 +9,10 @@ import { signedInAgent, startTestApp, type TestApp } from '../setup/test-app';
 import { insertSalon, type SalonFixture } from '../factories/salon';
 import { insertUser, type UserFixture } from '../factories/user';
 import { insertPlannedService } from '../factories/service';
-import { insertBooking, type NewStep } from '../../server/features/bookings/bookings.repository';
-import { writeAudit } from '../../server/features/audit/audit.repository';
-import type { BookingStatus } from '../../shared/schemas/common.schemas';
-import type { StepPlan } from '../../shared/schemas/step-plan.schemas';
+import { insertBooking, type NewStep } from '@server/features/bookings/bookings.repository';
+import { writeAudit } from '@server/features/audit/audit.repository';
+import type { BookingStatus } from '@shared/schemas/common.schemas';
+import type { StepPlan } from '@shared/schemas/step-plan.schemas';
 
 let t: TestApp;
 let salon: SalonFixture;

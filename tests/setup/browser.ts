@@ -2,7 +2,7 @@ import { AxeBuilder } from '@axe-core/playwright';
 import { copyFileSync, mkdirSync } from 'node:fs';
 import { join } from 'node:path';
 import { chromium, type Browser, type Page } from 'playwright-core';
-import { DEMO_PASSWORD } from '../../server/demo/demo-catalogue';
+import { DEMO_PASSWORD } from '@server/demo/demo-catalogue';
 import { expect, inject } from 'vitest';
 
 export const screenshotDir = join(process.cwd(), 'tests', 'output', 'screenshots');

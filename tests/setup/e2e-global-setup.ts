@@ -1,8 +1,8 @@
 import { chromium, type BrowserServer } from 'playwright-core';
 import type { TestProject } from 'vitest/node';
-import { loadConfig } from '../../server/config';
-import { startServer } from '../../server/main';
-import { loadDemoSalon } from '../../server/demo/load-demo-salon';
+import { loadConfig } from '@server/config';
+import { startServer } from '@server/main';
+import { loadDemoSalon } from '@server/demo/load-demo-salon';
 import { createTestDb } from './test-db';
 import { testEnv } from './test-env';
 

@@ -1,4 +1,4 @@
-import type { SmtpFake } from '../../server/fakes/smtp-fake';
+import type { SmtpFake } from '@server/fakes/smtp-fake';
 
 /** The first e-mail the local SMTP fake received for `to`, waiting up to 2.5 s for it to arrive. */
 export async function waitForMail(smtp: SmtpFake, to: string) {

@@ -2,14 +2,14 @@ import { mkdtemp, rm } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import request from 'supertest';
-import { createApp } from '../../server/app';
-import { loadConfig } from '../../server/config';
-import { startOutsideServices, type OutsideServices } from '../../server/services';
-import { startJobQueue, type JobQueue } from '../../server/jobs/job-queue';
-import { appJobs } from '../../server/jobs/app-jobs';
-import type { PaymentsFake } from '../../server/fakes/payments-fake';
-import type { SmtpFake } from '../../server/fakes/smtp-fake';
-import type { SmsFake } from '../../server/fakes/sms-fake';
+import { createApp } from '@server/app';
+import { loadConfig } from '@server/config';
+import { startOutsideServices, type OutsideServices } from '@server/services';
+import { startJobQueue, type JobQueue } from '@server/jobs/job-queue';
+import { appJobs } from '@server/jobs/app-jobs';
+import type { PaymentsFake } from '@server/fakes/payments-fake';
+import type { SmtpFake } from '@server/fakes/smtp-fake';
+import type { SmsFake } from '@server/fakes/sms-fake';
 import { createTestDb, type TestDb } from './test-db';
 
 export interface TestApp {

@@ -1,8 +1,8 @@
 import { randomBytes } from 'node:crypto';
 import pg from 'pg';
 import type { Kysely } from 'kysely';
-import { createDb, createPool } from '../../server/db/database';
-import type { Database } from '../../server/db/schema';
+import { createDb, createPool } from '@server/db/database';
+import type { Database } from '@server/db/schema';
 import { testEnv } from './test-env';
 
 export interface TestDb {

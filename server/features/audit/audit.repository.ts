@@ -1,5 +1,5 @@
 import { sql } from 'kysely';
-import type { Db } from '../../db/database';
+import type { Db } from '@server/db/database';
 
 export interface AuditInput {
   salonId: string;

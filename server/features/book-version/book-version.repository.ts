@@ -1,9 +1,9 @@
 import { sql } from 'kysely';
-import type { Db } from '../../db/database';
-import type { Salon } from '../../../shared/schemas/salon.schemas';
-import { notFound } from '../../lib/app-error';
-import { toSalon } from '../salon/salon.repository';
-import { shiftLocalDate } from '../../../shared/time/salon-time';
+import type { Db } from '@server/db/database';
+import type { Salon } from '@shared/schemas/salon.schemas';
+import { notFound } from '@server/lib/app-error';
+import { toSalon } from '../salon';
+import { shiftLocalDate } from '@shared/time/salon-time';
 
 /** Local dates [from, to) in the salon's zone, YYYY-MM-DD. */
 export interface DayRange {

@@ -1,5 +1,5 @@
-import type { JsonText } from '../../lib/json-text';
-import type { ReadCache } from '../../lib/read-cache';
+import type { JsonText } from '@server/lib/json-text';
+import type { ReadCache } from '@server/lib/read-cache';
 
 /**
  * A read of one salon's book at a version from salonAtBookVersion, answered from the cache until the

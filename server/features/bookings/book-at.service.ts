@@ -1,17 +1,17 @@
 import { DateTime } from 'luxon';
-import type { Db } from '../../db/database';
-import type { StepPlan } from '../../../shared/schemas/step-plan.schemas';
-import type { ServiceSummary } from '../../../shared/schemas/service.schemas';
-import type { BookingStatus } from '../../../shared/schemas/common.schemas';
-import type { Salon } from '../../../shared/schemas/salon.schemas';
-import { AppError } from '../../lib/app-error';
-import { exactPlan, type PlacedOption } from '../planning/planning-port';
-import { assertSkinTestAllows } from '../skin-tests/skin-test-check.service';
+import type { Db } from '@server/db/database';
+import type { StepPlan } from '@shared/schemas/step-plan.schemas';
+import type { ServiceSummary } from '@shared/schemas/service.schemas';
+import type { BookingStatus } from '@shared/schemas/common.schemas';
+import type { Salon } from '@shared/schemas/salon.schemas';
+import { AppError } from '@server/lib/app-error';
+import { exactPlan, type PlacedOption } from '../planning';
+import { assertSkinTestAllows } from '../skin-tests';
 import { insertBooking } from './bookings.repository';
 import { preferredChair } from './preferred-chair';
 import { auditBookingChange } from './booking-audit.service';
-import { replanBookingMessages } from '../messages/plan-messages.service';
-import { withdrawStaleOffers } from '../windows/offer-withdrawal.service';
+import { replanBookingMessages } from '../messages';
+import { withdrawStaleOffers } from '../windows';
 
 export interface BookAtInput {
   salon: Pick<Salon, 'id' | 'name' | 'timeZone' | 'skinTestLeadHours' | 'skinTestValidityDays' | 'skinTestFamilies' | 'granularityMinutes'>;

@@ -1,5 +1,5 @@
-import type { Db } from '../../db/database';
-import { writeAudit } from '../audit/audit.repository';
+import type { Db } from '@server/db/database';
+import { writeAudit } from '../audit';
 import { bookingSnapshot } from './booking-snapshot.repository';
 
 export interface BookingChange {

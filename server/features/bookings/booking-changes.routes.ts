@@ -1,6 +1,6 @@
-import { bookingsApi } from '../../../shared/api/bookings.api';
-import type { AppDeps } from '../../app-deps';
-import { apiRoute } from '../../lib/api-route';
+import { bookingsApi } from '@shared/api/bookings.api';
+import type { AppDeps } from '@server/app-deps';
+import { apiRoute } from '@server/lib/api-route';
 import { bookingHistory } from './booking-view.service';
 import { bookAtDesk, cancelAtDesk, cancelTermsAtDesk, changePlanAtDesk, deskBookingOptions, moveAtDesk, moveTimesAtDesk } from './booking-changes.service';
 

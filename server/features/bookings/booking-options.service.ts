@@ -1,16 +1,16 @@
 import { DateTime } from 'luxon';
-import type { Db } from '../../db/database';
-import type { BookingOptionsRequest, BookingOptionsResponse } from '../../../shared/schemas/booking.schemas';
-import type { Salon } from '../../../shared/schemas/salon.schemas';
-import type { StepPlan } from '../../../shared/schemas/step-plan.schemas';
-import { checkStarts, type SkinTestVerdict } from '../../../shared/rules/skin-test-rule';
-import { notFound } from '../../lib/app-error';
-import { findClient } from '../clients/clients.repository';
-import { findService } from '../services/services.repository';
-import { skinTestVerdictFor, testedSittings, testedSittingStarts } from '../skin-tests/skin-test-check.service';
-import { horizonFor, optionsFor, toBookingOption, type PlacedOption, type StartLimit } from '../planning/planning-port';
-import { assertWithinProcessingLimits } from '../planning/processing-limits-check';
-import { localDateOf } from '../../../shared/time/salon-time';
+import type { Db } from '@server/db/database';
+import type { BookingOptionsRequest, BookingOptionsResponse } from '@shared/schemas/booking.schemas';
+import type { Salon } from '@shared/schemas/salon.schemas';
+import type { StepPlan } from '@shared/schemas/step-plan.schemas';
+import { checkStarts, type SkinTestVerdict } from '@shared/rules/skin-test-rule';
+import { notFound } from '@server/lib/app-error';
+import { findClient } from '../clients';
+import { findService } from '../services';
+import { skinTestVerdictFor, testedSittings, testedSittingStarts } from '../skin-tests';
+import { horizonFor, optionsFor, toBookingOption, type PlacedOption, type StartLimit } from '../planning';
+import { assertWithinProcessingLimits } from '../planning';
+import { localDateOf } from '@shared/time/salon-time';
 
 /** How many days of first sittings the desk's search looks through. */
 const SEARCH_DAYS = 42;

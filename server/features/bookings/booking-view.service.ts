@@ -1,13 +1,13 @@
 import type { z } from 'zod';
-import type { SessionUser } from '../../../shared/schemas/auth.schemas';
-import type { BookingHistorySchema } from '../../../shared/schemas/booking.schemas';
-import type { BookingView, MyBookings } from '../../../shared/schemas/booking-view.schemas';
-import { BookingStatusSchema } from '../../../shared/schemas/common.schemas';
-import type { Db } from '../../db/database';
-import { notFound } from '../../lib/app-error';
-import { listAudit } from '../audit/audit.repository';
-import { findClientIdForUser } from '../clients/clients.repository';
-import { findSalon } from '../salon/salon.repository';
+import type { SessionUser } from '@shared/schemas/auth.schemas';
+import type { BookingHistorySchema } from '@shared/schemas/booking.schemas';
+import type { BookingView, MyBookings } from '@shared/schemas/booking-view.schemas';
+import { BookingStatusSchema } from '@shared/schemas/common.schemas';
+import type { Db } from '@server/db/database';
+import { notFound } from '@server/lib/app-error';
+import { listAudit } from '../audit';
+import { findClientIdForUser } from '../clients';
+import { findSalon } from '../salon';
 import { loadBookingViews } from './booking-views.repository';
 import { findStaffIdForUser } from './salon-resources.repository';
 

@@ -1,12 +1,12 @@
 import { sql } from 'kysely';
 import { DateTime } from 'luxon';
-import { formatIso, zoneClock } from '../../../shared/engine/local-time';
-import type { Db } from '../../db/database';
-import type { BookingView } from '../../../shared/schemas/booking-view.schemas';
-import type { BookingStatus } from '../../../shared/schemas/common.schemas';
-import type { StepPlan } from '../../../shared/schemas/step-plan.schemas';
-import type { Salon } from '../../../shared/schemas/salon.schemas';
-import { bookingSkinTestStates } from '../skin-tests/skin-test-check.service';
+import { formatIso, zoneClock } from '@shared/engine/local-time';
+import type { Db } from '@server/db/database';
+import type { BookingView } from '@shared/schemas/booking-view.schemas';
+import type { BookingStatus } from '@shared/schemas/common.schemas';
+import type { StepPlan } from '@shared/schemas/step-plan.schemas';
+import type { Salon } from '@shared/schemas/salon.schemas';
+import { bookingSkinTestStates } from '../skin-tests';
 
 export interface BookingFilter {
   salonId: string;

@@ -1,6 +1,6 @@
-import { bookingsApi } from '../../../shared/api/bookings.api';
-import type { AppDeps } from '../../app-deps';
-import { apiRoute } from '../../lib/api-route';
+import { bookingsApi } from '@shared/api/bookings.api';
+import type { AppDeps } from '@server/app-deps';
+import { apiRoute } from '@server/lib/api-route';
 import { cachedDeskDay, cachedDeskWeek, cachedStylistDay } from './calendar-reads.service';
 import { myBookings, visibleBooking } from './booking-view.service';
 

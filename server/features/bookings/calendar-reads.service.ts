@@ -1,9 +1,9 @@
-import type { SessionUser } from '../../../shared/schemas/auth.schemas';
-import type { Db } from '../../db/database';
-import type { JsonText } from '../../lib/json-text';
-import type { ReadCache } from '../../lib/read-cache';
-import { daysFrom, salonAtBookVersion } from '../book-version/book-version.repository';
-import { cachedBookRead } from '../book-version/cached-book-read';
+import type { SessionUser } from '@shared/schemas/auth.schemas';
+import type { Db } from '@server/db/database';
+import type { JsonText } from '@server/lib/json-text';
+import type { ReadCache } from '@server/lib/read-cache';
+import { daysFrom, salonAtBookVersion } from '../book-version';
+import { cachedBookRead } from '../book-version';
 import { deskDay, deskWeek, mondayOf, stylistDay, todayIn } from './day-view.service';
 
 /*

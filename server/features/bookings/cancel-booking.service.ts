@@ -1,16 +1,16 @@
 import type { Kysely } from 'kysely';
-import type { Database } from '../../db/schema';
-import type { Db } from '../../db/database';
-import type { Salon } from '../../../shared/schemas/salon.schemas';
-import type { CancelTerms } from '../../../shared/schemas/online-booking.schemas';
-import { AppError, notFound } from '../../lib/app-error';
+import type { Database } from '@server/db/schema';
+import type { Db } from '@server/db/database';
+import type { Salon } from '@shared/schemas/salon.schemas';
+import type { CancelTerms } from '@shared/schemas/online-booking.schemas';
+import { AppError, notFound } from '@server/lib/app-error';
 import { bookingSnapshot, type BookingSnapshot } from './booking-snapshot.repository';
 import { auditBookingChange } from './booking-audit.service';
 import { markCancelled, sittingStarts } from './change-booking.repository';
-import { replanBookingMessages } from '../messages/plan-messages.service';
+import { replanBookingMessages } from '../messages';
 import { withColourBookingsKept } from './skin-test-dependants';
-import { bookingSkinTestStates } from '../skin-tests/skin-test-check.service';
-import { formatMoney } from '../../../shared/money/money';
+import { bookingSkinTestStates } from '../skin-tests';
+import { formatMoney } from '@shared/money/money';
 
 /**
  * The deposit policy on cancelling: inside the salon's cancellation window before the first sitting the

@@ -1,6 +1,6 @@
 import { sql } from 'kysely';
-import type { StepPlan } from '../../../shared/schemas/step-plan.schemas';
-import type { Db } from '../../db/database';
+import type { StepPlan } from '@shared/schemas/step-plan.schemas';
+import type { Db } from '@server/db/database';
 import type { NewStep } from './bookings.repository';
 import { tstzRange } from './bookings.repository';
 

@@ -1,15 +1,15 @@
 import type { Kysely } from 'kysely';
-import { bookingsApi } from '../../../shared/api/bookings.api';
-import type { Database } from '../../db/schema';
-import type { CreateBooking } from '../../../shared/schemas/booking.schemas';
-import type { Salon } from '../../../shared/schemas/salon.schemas';
-import type { SessionUser } from '../../../shared/schemas/auth.schemas';
-import { AppError, notFound } from '../../lib/app-error';
-import { findClientQuote } from '../consultations/consultations.repository';
-import { findClient } from '../clients/clients.repository';
-import { findService } from '../services/services.repository';
-import { lockStylists } from '../planning/stylist-lock';
-import { assertWithinProcessingLimits } from '../planning/processing-limits-check';
+import { bookingsApi } from '@shared/api/bookings.api';
+import type { Database } from '@server/db/schema';
+import type { CreateBooking } from '@shared/schemas/booking.schemas';
+import type { Salon } from '@shared/schemas/salon.schemas';
+import type { SessionUser } from '@shared/schemas/auth.schemas';
+import { AppError, notFound } from '@server/lib/app-error';
+import { findClientQuote } from '../consultations';
+import { findClient } from '../clients';
+import { findService } from '../services';
+import { lockStylists } from '../planning';
+import { assertWithinProcessingLimits } from '../planning';
 import { bookAt } from './book-at.service';
 import { findIdempotent, saveIdempotent } from './idempotency.repository';
 

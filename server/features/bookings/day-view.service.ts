@@ -1,13 +1,13 @@
 import { DateTime } from 'luxon';
-import type { Db } from '../../db/database';
-import type { DayView, WeekView } from '../../../shared/schemas/booking-view.schemas';
-import type { Salon } from '../../../shared/schemas/salon.schemas';
-import { AppError } from '../../lib/app-error';
-import { openingDays } from '../../../shared/engine/opening-days';
-import { listSalonHours } from '../salon/salon.repository';
+import type { Db } from '@server/db/database';
+import type { DayView, WeekView } from '@shared/schemas/booking-view.schemas';
+import type { Salon } from '@shared/schemas/salon.schemas';
+import { AppError } from '@server/lib/app-error';
+import { openingDays } from '@shared/engine/opening-days';
+import { listSalonHours } from '../salon';
 import { loadBookingViews } from './booking-views.repository';
 import { listChairs, listStylists, findStaffIdForUser } from './salon-resources.repository';
-import { instantAt, localDateOf, shiftLocalDate } from '../../../shared/time/salon-time';
+import { instantAt, localDateOf, shiftLocalDate } from '@shared/time/salon-time';
 
 /** [start, end) of a local date in the salon's zone: 23, 24 or 25 real hours. */
 export function localDayBounds(date: string, timeZone: string): { from: Date; to: Date } {

@@ -1,4 +1,4 @@
-import type { Db } from '../../db/database';
+import type { Db } from '@server/db/database';
 
 /** The stored answer to an earlier request with this key from this user, if any. */
 export async function findIdempotent(db: Db, userId: string, key: string): Promise<{ status: number; response: unknown } | undefined> {

@@ -1,21 +1,21 @@
 import { DateTime } from 'luxon';
 import type { Kysely } from 'kysely';
-import type { Db } from '../../db/database';
-import type { Database } from '../../db/schema';
-import type { Salon } from '../../../shared/schemas/salon.schemas';
-import type { StepPlan } from '../../../shared/schemas/step-plan.schemas';
-import { AppError, notFound } from '../../lib/app-error';
-import { findService } from '../services/services.repository';
-import { lockStylists } from '../planning/stylist-lock';
-import { exactPlan } from '../planning/planning-port';
-import { assertSkinTestAllows } from '../skin-tests/skin-test-check.service';
+import type { Db } from '@server/db/database';
+import type { Database } from '@server/db/schema';
+import type { Salon } from '@shared/schemas/salon.schemas';
+import type { StepPlan } from '@shared/schemas/step-plan.schemas';
+import { AppError, notFound } from '@server/lib/app-error';
+import { findService } from '../services';
+import { lockStylists } from '../planning';
+import { exactPlan } from '../planning';
+import { assertSkinTestAllows } from '../skin-tests';
 import { bookingSnapshot } from './booking-snapshot.repository';
 import { auditBookingChange } from './booking-audit.service';
 import { replaceSitting, setStylist, sittingChair, sittingStarts } from './change-booking.repository';
 import { preferredChair } from './preferred-chair';
 import { listStylists } from './salon-resources.repository';
-import { replanBookingMessages } from '../messages/plan-messages.service';
-import { withdrawStaleOffers } from '../windows/offer-withdrawal.service';
+import { replanBookingMessages } from '../messages';
+import { withdrawStaleOffers } from '../windows';
 
 export interface MoveRequest {
   bookingId: string;

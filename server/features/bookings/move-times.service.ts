@@ -1,9 +1,9 @@
 import { DateTime } from 'luxon';
-import type { Db } from '../../db/database';
-import type { Salon } from '../../../shared/schemas/salon.schemas';
-import type { StepPlan } from '../../../shared/schemas/step-plan.schemas';
-import type { Availability } from '../../../shared/schemas/online-booking.schemas';
-import { freeTimes } from '../online-booking/availability.service';
+import type { Db } from '@server/db/database';
+import type { Salon } from '@shared/schemas/salon.schemas';
+import type { StepPlan } from '@shared/schemas/step-plan.schemas';
+import type { Availability } from '@shared/schemas/online-booking.schemas';
+import { freeTimes } from '../online-booking';
 import { sittingStarts } from './change-booking.repository';
 import { dayGapProblem, movableSitting } from './move-booking.service';
 

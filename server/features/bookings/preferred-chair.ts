@@ -1,5 +1,5 @@
-import type { Db } from '../../db/database';
-import type { PlacedSitting } from '../planning/planning-port';
+import type { Db } from '@server/db/database';
+import type { PlacedSitting } from '../planning';
 import { chairFreeBetween } from './bookings.repository';
 
 /**

@@ -1,4 +1,4 @@
-import type { Db } from '../../db/database';
+import type { Db } from '@server/db/database';
 
 export function listStylists(db: Db, salonId: string) {
   return db

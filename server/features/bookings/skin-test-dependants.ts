@@ -1,10 +1,10 @@
-import type { Db } from '../../db/database';
-import type { Salon } from '../../../shared/schemas/salon.schemas';
-import { AppError } from '../../lib/app-error';
-import { bookingSkinTestStates } from '../skin-tests/skin-test-check.service';
+import type { Db } from '@server/db/database';
+import type { Salon } from '@shared/schemas/salon.schemas';
+import { AppError } from '@server/lib/app-error';
+import { bookingSkinTestStates } from '../skin-tests';
 import { upcomingBookingsOfClient } from './bookings.repository';
-import { formatDateTime } from '../../../shared/format/date-time';
-import { formatFor } from '../../../shared/format/locale';
+import { formatDateTime } from '@shared/format/date-time';
+import { formatFor } from '@shared/format/locale';
 
 /**
  * A change to a client's skin tests (a skin-test appointment cancelled) must not take away the footing of a live

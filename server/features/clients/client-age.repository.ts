@@ -1,6 +1,6 @@
 import { sql } from 'kysely';
-import type { Db } from '../../db/database';
-import type { ClientAge } from '../../../shared/schemas/age.schemas';
+import type { Db } from '@server/db/database';
+import type { ClientAge } from '@shared/schemas/age.schemas';
 
 export async function readClientAge(db: Db, salonId: string, clientId: string): Promise<ClientAge | null> {
   const client = await db

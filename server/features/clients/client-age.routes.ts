@@ -1,6 +1,6 @@
-import { clientsApi } from '../../../shared/api/clients.api';
-import type { AppDeps } from '../../app-deps';
-import { apiRoute } from '../../lib/api-route';
+import { clientsApi } from '@shared/api/clients.api';
+import type { AppDeps } from '@server/app-deps';
+import { apiRoute } from '@server/lib/api-route';
 import { addGuardianConsent, clientAge, myAge, setClientDateOfBirth, setMyDateOfBirth } from './client-age.service';
 
 /** Date of birth and guardian consent: oxidative colour for a client under 16 needs a guardian's consent on record. */

@@ -1,13 +1,13 @@
 import { DateTime } from 'luxon';
 import type { z } from 'zod';
-import type { SessionUser } from '../../../shared/schemas/auth.schemas';
-import type { ClientAge, RecordGuardianConsentSchema } from '../../../shared/schemas/age.schemas';
-import type { Db } from '../../db/database';
-import { invalidField, notFound } from '../../lib/app-error';
-import { myClientId } from '../../auth/client-access';
-import { writeAudit } from '../audit/audit.repository';
-import { findSalon } from '../salon/salon.repository';
-import { userName } from '../session/users.repository';
+import type { SessionUser } from '@shared/schemas/auth.schemas';
+import type { ClientAge, RecordGuardianConsentSchema } from '@shared/schemas/age.schemas';
+import type { Db } from '@server/db/database';
+import { invalidField, notFound } from '@server/lib/app-error';
+import { myClientId } from '@server/auth/client-access';
+import { writeAudit } from '../audit';
+import { findSalon } from '../salon';
+import { userName } from '../session';
 import { insertGuardianConsent, readClientAge, setDateOfBirth } from './client-age.repository';
 
 /** A client's age record within the user's salon. */

@@ -1,7 +1,7 @@
 import { sql } from 'kysely';
-import type { Db } from '../../db/database';
-import type { ClientSummary } from '../../../shared/schemas/client.schemas';
-import type { MessageChannelChoice } from '../../../shared/schemas/contact.schemas';
+import type { Db } from '@server/db/database';
+import type { ClientSummary } from '@shared/schemas/client.schemas';
+import type { MessageChannelChoice } from '@shared/schemas/contact.schemas';
 
 export async function insertClient(
   db: Db,

@@ -1,6 +1,6 @@
-import { clientsApi } from '../../../shared/api/clients.api';
-import type { AppDeps } from '../../app-deps';
-import { apiRoute } from '../../lib/api-route';
+import { clientsApi } from '@shared/api/clients.api';
+import type { AppDeps } from '@server/app-deps';
+import { apiRoute } from '@server/lib/api-route';
 import { addClient, clientCard, findClients, updateClient } from './clients.service';
 
 export function registerClientRoutes({ table, db }: AppDeps): void {

@@ -1,16 +1,16 @@
 import type { z } from 'zod';
-import type { SessionUser } from '../../../shared/schemas/auth.schemas';
-import type { CreateClientSchema } from '../../../shared/schemas/booking.schemas';
-import type { ClientDetail, ClientSummary } from '../../../shared/schemas/client.schemas';
-import { BookingStatusSchema } from '../../../shared/schemas/common.schemas';
-import type { UpdateClientSchema } from '../../../shared/schemas/contact.schemas';
-import type { Db } from '../../db/database';
-import { notFound } from '../../lib/app-error';
-import { storedPhone } from '../../lib/stored-phone';
-import { loadBookingViews } from '../bookings/booking-views.repository';
-import { findHairHistory } from '../hair-history/hair-history.repository';
-import { replanClientMessages } from '../messages/plan-messages.service';
-import { findSalon, salonCountry } from '../salon/salon.repository';
+import type { SessionUser } from '@shared/schemas/auth.schemas';
+import type { CreateClientSchema } from '@shared/schemas/booking.schemas';
+import type { ClientDetail, ClientSummary } from '@shared/schemas/client.schemas';
+import { BookingStatusSchema } from '@shared/schemas/common.schemas';
+import type { UpdateClientSchema } from '@shared/schemas/contact.schemas';
+import type { Db } from '@server/db/database';
+import { notFound } from '@server/lib/app-error';
+import { storedPhone } from '@server/lib/stored-phone';
+import { loadBookingViews } from '../bookings';
+import { findHairHistory } from '../hair-history';
+import { replanClientMessages } from '../messages';
+import { findSalon, salonCountry } from '../salon';
 import { findClient, insertClient, searchClients, updateClientContact } from './clients.repository';
 
 export async function findClients(db: Db, user: SessionUser, q: string | undefined): Promise<{ clients: ClientSummary[] }> {

@@ -1,8 +1,8 @@
 import { sql } from 'kysely';
-import type { Db } from '../../db/database';
-import type { ConsultationInput, ConsultationView, QuoteEdit, QuoteWarning } from '../../../shared/schemas/consultation.schemas';
-import { StepPlanSchema } from '../../../shared/schemas/step-plan.schemas';
-import { correctionRate, productCentsPerGram } from '../quote-prices/quote-prices.repository';
+import type { Db } from '@server/db/database';
+import type { ConsultationInput, ConsultationView, QuoteEdit, QuoteWarning } from '@shared/schemas/consultation.schemas';
+import { StepPlanSchema } from '@shared/schemas/step-plan.schemas';
+import { correctionRate, productCentsPerGram } from '../quote-prices';
 
 /** What a quote is priced from: the salon's hourly rate, its cut price, its cost per gram per product type and its currency. */
 export async function quotePriceInputs(db: Db, salonId: string) {

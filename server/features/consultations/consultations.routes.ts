@@ -1,6 +1,6 @@
-import { consultationsApi } from '../../../shared/api/consultations.api';
-import type { AppDeps } from '../../app-deps';
-import { apiRoute } from '../../lib/api-route';
+import { consultationsApi } from '@shared/api/consultations.api';
+import type { AppDeps } from '@server/app-deps';
+import { apiRoute } from '@server/lib/api-route';
 import {
   acceptMyQuote, clientConsultations, createConsultation, editQuote, myQuotes, oneConsultation, proposeFor, sendQuote,
 } from './consultations.service';

@@ -1,24 +1,24 @@
 import type { z } from 'zod';
-import type { Db } from '../../db/database';
-import type { SessionUser } from '../../../shared/schemas/auth.schemas';
+import type { Db } from '@server/db/database';
+import type { SessionUser } from '@shared/schemas/auth.schemas';
 import type {
   ConsultationInput, ConsultationView, CreateConsultation, ProposeQuoteRequestSchema, ProposedQuoteView, QuoteEdit, QuoteWarning, StrandOutcome,
-} from '../../../shared/schemas/consultation.schemas';
-import type { ServiceSummary } from '../../../shared/schemas/service.schemas';
-import type { StepPlan } from '../../../shared/schemas/step-plan.schemas';
-import { proposeQuote, type PlanningRules, type ProposedQuote, type QuotePricing } from '../../../shared/quotes/propose-quote';
-import { ProposalRefused } from '../../../shared/quotes/stage-steps';
-import { gatedSteps, strandOutcome, strandOverrideProblem } from '../../../shared/quotes/strand-gate';
-import { AppError, notFound } from '../../lib/app-error';
-import type { Mailer } from '../../mail/mailer';
+} from '@shared/schemas/consultation.schemas';
+import type { ServiceSummary } from '@shared/schemas/service.schemas';
+import type { StepPlan } from '@shared/schemas/step-plan.schemas';
+import { proposeQuote, type PlanningRules, type ProposedQuote, type QuotePricing } from '@shared/quotes/propose-quote';
+import { ProposalRefused } from '@shared/quotes/stage-steps';
+import { gatedSteps, strandOutcome, strandOverrideProblem } from '@shared/quotes/strand-gate';
+import { AppError, notFound } from '@server/lib/app-error';
+import type { Mailer } from '@server/mail/mailer';
 import { quoteMail } from './quote-mail';
-import { listStrandTests } from '../strand-tests/strand-tests.repository';
-import { findClient } from '../clients/clients.repository';
-import { listServices } from '../services/services.repository';
-import { findSalon } from '../salon/salon.repository';
-import { writeAudit } from '../audit/audit.repository';
-import { assertWithinProcessingLimits } from '../planning/processing-limits-check';
-import { myClientId } from '../../auth/client-access';
+import { listStrandTests } from '../strand-tests';
+import { findClient } from '../clients';
+import { listServices } from '../services';
+import { findSalon } from '../salon';
+import { writeAudit } from '../audit';
+import { assertWithinProcessingLimits } from '../planning';
+import { myClientId } from '@server/auth/client-access';
 import {
   clientPhotoIds, findConsultation, insertConsultation, listClientConsultations, quotePriceInputs, setQuoteStatus, updateQuote, type StoredConsultation,
 } from './consultations.repository';

@@ -1,7 +1,7 @@
-import type { ConsultationView } from '../../../shared/schemas/consultation.schemas';
-import { sittingMaxMinutes } from '../../../shared/schemas/step-plan.schemas';
-import type { OutgoingMail } from '../../mail/mailer';
-import { formatMoney } from '../../../shared/money/money';
+import type { ConsultationView } from '@shared/schemas/consultation.schemas';
+import { sittingMaxMinutes } from '@shared/schemas/step-plan.schemas';
+import type { OutgoingMail } from '@server/mail/mailer';
+import { formatMoney } from '@shared/money/money';
 
 /** The quote as the client reads it: sittings, steps, price, deposit, the cautions, and where to accept it. */
 export function quoteMail(view: ConsultationView, to: string, salon: { name: string; currency: string }, acceptUrl: string): OutgoingMail {

@@ -1,7 +1,7 @@
 import { sql } from 'kysely';
-import type { Db } from '../../db/database';
-import type { HairHistory, HairHistoryResponse } from '../../../shared/schemas/hair-history.schemas';
-import { HairHistorySchema } from '../../../shared/schemas/hair-history.schemas';
+import type { Db } from '@server/db/database';
+import type { HairHistory, HairHistoryResponse } from '@shared/schemas/hair-history.schemas';
+import { HairHistorySchema } from '@shared/schemas/hair-history.schemas';
 
 export async function findHairHistory(db: Db, clientId: string): Promise<HairHistoryResponse> {
   const row = await db.selectFrom('hair_histories').select(['answers', 'updated_at']).where('client_id', '=', clientId).executeTakeFirst();

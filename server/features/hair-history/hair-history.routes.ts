@@ -1,6 +1,6 @@
-import { hairHistoryApi } from '../../../shared/api/hair-history.api';
-import type { AppDeps } from '../../app-deps';
-import { apiRoute } from '../../lib/api-route';
+import { hairHistoryApi } from '@shared/api/hair-history.api';
+import type { AppDeps } from '@server/app-deps';
+import { apiRoute } from '@server/lib/api-route';
 import { clientHairHistory, myHairHistory, saveClientHairHistory, saveMyHairHistory } from './hair-history.service';
 
 export function registerHairHistoryRoutes({ table, db }: AppDeps): void {

@@ -1,7 +1,7 @@
-import type { SessionUser } from '../../../shared/schemas/auth.schemas';
-import type { HairHistory, HairHistoryResponse } from '../../../shared/schemas/hair-history.schemas';
-import type { Db } from '../../db/database';
-import { clientIdFor, myClientId } from '../../auth/client-access';
+import type { SessionUser } from '@shared/schemas/auth.schemas';
+import type { HairHistory, HairHistoryResponse } from '@shared/schemas/hair-history.schemas';
+import type { Db } from '@server/db/database';
+import { clientIdFor, myClientId } from '@server/auth/client-access';
 import { findHairHistory, saveHairHistory } from './hair-history.repository';
 
 export async function myHairHistory(db: Db, user: SessionUser): Promise<HairHistoryResponse> {

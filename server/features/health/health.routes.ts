@@ -1,6 +1,6 @@
-import { appApi } from '../../../shared/api/app.api';
-import type { AppDeps } from '../../app-deps';
-import { apiRoute } from '../../lib/api-route';
+import { appApi } from '@shared/api/app.api';
+import type { AppDeps } from '@server/app-deps';
+import { apiRoute } from '@server/lib/api-route';
 import { checkHealth } from './health.service';
 
 export function registerHealthRoutes({ table, db }: AppDeps): void {

@@ -1,4 +1,4 @@
-import type { Db } from '../../db/database';
+import type { Db } from '@server/db/database';
 import { pingDatabase } from './health.repository';
 
 export interface Health {

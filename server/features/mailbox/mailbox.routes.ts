@@ -1,9 +1,9 @@
-import { mailboxApi } from '../../../shared/api/mailbox.api';
-import { messagesApi } from '../../../shared/api/messages.api';
-import type { AppDeps } from '../../app-deps';
-import { apiRoute } from '../../lib/api-route';
-import { notFound } from '../../lib/app-error';
-import { sendLog } from '../messages/send-log.service';
+import { mailboxApi } from '@shared/api/mailbox.api';
+import { messagesApi } from '@shared/api/messages.api';
+import type { AppDeps } from '@server/app-deps';
+import { apiRoute } from '@server/lib/api-route';
+import { notFound } from '@server/lib/app-error';
+import { sendLog } from '../messages';
 
 /** What the local e-mail and SMS fakes received, newest first (demo, dev and test only). */
 export function registerMailboxRoutes({ table, db, smtpFake, smsFake }: AppDeps): void {

@@ -1,6 +1,6 @@
 import type { Kysely } from 'kysely';
-import type { Database } from '../../db/schema';
-import type { Db } from '../../db/database';
+import type { Database } from '@server/db/schema';
+import type { Db } from '@server/db/database';
 import { findClientReach, insertPlanned, type NewMessage, type PlannedMessage } from './messages.repository';
 import { sendOnTime, type Senders } from './send-message.job';
 

@@ -1,5 +1,5 @@
-import type { Db } from '../../db/database';
-import type { FollowUpRule } from '../../../shared/schemas/follow-up-rules.schemas';
+import type { Db } from '@server/db/database';
+import type { FollowUpRule } from '@shared/schemas/follow-up-rules.schemas';
 
 const COLUMNS = ['r.id', 'r.service_id as serviceId', 'sv.name as serviceName', 'r.title', 'r.body as text', 'r.rrule', 'r.version'] as const;
 

@@ -1,6 +1,6 @@
-import { followUpRulesApi } from '../../../shared/api/follow-up-rules.api';
-import type { AppDeps } from '../../app-deps';
-import { apiRoute } from '../../lib/api-route';
+import { followUpRulesApi } from '@shared/api/follow-up-rules.api';
+import type { AppDeps } from '@server/app-deps';
+import { apiRoute } from '@server/lib/api-route';
 import { createFollowUpRule, editFollowUpRule, followUpRules, removeFollowUpRule } from './follow-up-rules.service';
 
 /** The owner's follow-up rules: marketing suggestions per service, sent only to clients who opted in. */

@@ -1,7 +1,7 @@
-import type { Db } from '../../db/database';
-import type { FollowUpRule } from '../../../shared/schemas/follow-up-rules.schemas';
-import { AppError, notFound } from '../../lib/app-error';
-import { findService } from '../services/services.repository';
+import type { Db } from '@server/db/database';
+import type { FollowUpRule } from '@shared/schemas/follow-up-rules.schemas';
+import { AppError, notFound } from '@server/lib/app-error';
+import { findService } from '../services';
 import { bookingForMessages, insertPlanned } from './messages.repository';
 import { followUpRows } from './plan-messages.service';
 import {

@@ -1,10 +1,10 @@
 import express from 'express';
 import twilio from 'twilio';
-import { messagesApi } from '../../../shared/api/messages.api';
-import type { AppDeps } from '../../app-deps';
-import { apiRoute } from '../../lib/api-route';
-import { AppError } from '../../lib/app-error';
-import { FAKE_TWILIO } from '../../services';
+import { messagesApi } from '@shared/api/messages.api';
+import type { AppDeps } from '@server/app-deps';
+import { apiRoute } from '@server/lib/api-route';
+import { AppError } from '@server/lib/app-error';
+import { FAKE_TWILIO } from '@server/services';
 import { handleInboundSms, simulateInboundSms } from './inbound-sms.service';
 
 /** The SMS provider's webhook for texts to the salon's number (STOP/START), and the demo's way to send one. */

@@ -1,6 +1,6 @@
 import { sql } from 'kysely';
-import type { Db } from '../../db/database';
-import type { MessageAttachment } from '../../db/schema';
+import type { Db } from '@server/db/database';
+import type { MessageAttachment } from '@server/db/schema';
 
 /** A message claimed for sending: what goes out, and what a retry needs. */
 export interface ClaimedMessage {

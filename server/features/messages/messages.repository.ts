@@ -1,7 +1,7 @@
 import { sql } from 'kysely';
-import type { Db } from '../../db/database';
-import type { StepPlan } from '../../../shared/schemas/step-plan.schemas';
-import type { MessageAttachment, MessageChannelChoice, MessageStatus } from '../../db/schema';
+import type { Db } from '@server/db/database';
+import type { StepPlan } from '@shared/schemas/step-plan.schemas';
+import type { MessageAttachment, MessageChannelChoice, MessageStatus } from '@server/db/schema';
 import type { BookingContext } from './templates';
 
 export interface BookingForMessages {

@@ -1,4 +1,4 @@
-import type { AppDeps } from '../../app-deps';
+import type { AppDeps } from '@server/app-deps';
 import { registerFollowUpRuleRoutes } from './follow-up-rules.routes';
 import { registerInboundSmsRoutes } from './inbound-sms.routes';
 import { registerPreferenceRoutes } from './preferences.routes';

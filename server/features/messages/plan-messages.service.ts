@@ -1,8 +1,8 @@
 import { DateTime } from 'luxon';
-import type { Db } from '../../db/database';
-import { followUpTimes } from '../../../shared/messages/follow-up-times';
-import type { Salon } from '../../../shared/schemas/salon.schemas';
-import { bookingSkinTestStates } from '../skin-tests/skin-test-check.service';
+import type { Db } from '@server/db/database';
+import { followUpTimes } from '@shared/messages/follow-up-times';
+import type { Salon } from '@shared/schemas/salon.schemas';
+import { bookingSkinTestStates } from '../skin-tests';
 import {
   bookingForMessages, bumpBookingVersion, dropFollowUps, dropQueued, dropQueuedBookingMessages, dropQueuedForClient, findClientReach, insertPlanned, queuedFollowUps,
   readdressQueued, upcomingBookingIds, type BookingForMessages, type NewMessage, type PlannedMessage,

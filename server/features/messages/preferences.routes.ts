@@ -1,6 +1,6 @@
-import { messagesApi } from '../../../shared/api/messages.api';
-import type { AppDeps } from '../../app-deps';
-import { apiRoute } from '../../lib/api-route';
+import { messagesApi } from '@shared/api/messages.api';
+import type { AppDeps } from '@server/app-deps';
+import { apiRoute } from '@server/lib/api-route';
 import { myPreferences, saveMyPreferences } from './preferences.service';
 
 /** A client reads and sets how the salon reaches them. */

@@ -1,10 +1,10 @@
 import type { z } from 'zod';
-import type { Db } from '../../db/database';
-import { UpdateClientSchema, type MyPreferences, type MyPreferencesBodySchema } from '../../../shared/schemas/contact.schemas';
-import { notFound } from '../../lib/app-error';
-import { storedPhone } from '../../lib/stored-phone';
-import { findClient, findClientIdForUser, updateClientContact } from '../clients/clients.repository';
-import { salonCountry } from '../salon/salon.repository';
+import type { Db } from '@server/db/database';
+import { UpdateClientSchema, type MyPreferences, type MyPreferencesBodySchema } from '@shared/schemas/contact.schemas';
+import { notFound } from '@server/lib/app-error';
+import { storedPhone } from '@server/lib/stored-phone';
+import { findClient, findClientIdForUser, updateClientContact } from '../clients';
+import { salonCountry } from '../salon';
 import { replanClientMessages } from './plan-messages.service';
 
 type Me = { id: string; salonId: string };

@@ -1,6 +1,6 @@
-import type { Db } from '../../db/database';
-import type { MessageStatus } from '../../db/schema';
-import type { SentMessage } from '../../../shared/schemas/messages.schemas';
+import type { Db } from '@server/db/database';
+import type { MessageStatus } from '@server/db/schema';
+import type { SentMessage } from '@shared/schemas/messages.schemas';
 import { listMessages } from './messages.repository';
 
 /** The salon's send log as the Outbox shows it: what Dwell planned, sent, dropped or gave up on. */

@@ -1,7 +1,7 @@
 import type { Kysely } from 'kysely';
-import type { Database } from '../../db/schema';
-import type { Mailer } from '../../mail/mailer';
-import type { SmsSender } from '../../sms/sms-sender';
+import type { Database } from '@server/db/schema';
+import type { Mailer } from '@server/mail/mailer';
+import type { SmsSender } from '@server/sms/sms-sender';
 import { emailHtml } from './html-email';
 import { channelBlockers, claimMessage, dueMessages, findDueMessage, markSent, markTryFailed, requeueStuck, takeMessagesForJobs } from './message-delivery.repository';
 

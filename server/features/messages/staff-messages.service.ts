@@ -1,11 +1,11 @@
-import type { Db } from '../../db/database';
+import type { Db } from '@server/db/database';
 import { deskEmails, salonsForStaffMessages, sittingsBetween, type DaySitting } from './staff-messages.repository';
 import { insertPlanned, type NewMessage, type PlannedMessage } from './messages.repository';
-import { formatMoney } from '../../../shared/money/money';
-import { localClockOf, localDateOf, shiftLocalDate } from '../../../shared/time/salon-time';
-import { formatDate, formatRange } from '../../../shared/format/date-time';
-import { formatFor } from '../../../shared/format/locale';
-import { localDayBounds } from '../bookings/day-view.service';
+import { formatMoney } from '@shared/money/money';
+import { localClockOf, localDateOf, shiftLocalDate } from '@shared/time/salon-time';
+import { formatDate, formatRange } from '@shared/format/date-time';
+import { formatFor } from '@shared/format/locale';
+import { localDayBounds } from '../bookings';
 
 /** Salon wall-clock time the next day's lists go out (common practice: after the last client leaves). */
 export const STAFF_LISTS_AT = '18:00';

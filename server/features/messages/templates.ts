@@ -1,8 +1,8 @@
-import { skinTestWords } from '../../../shared/rules/skin-test-words';
-import type { MessageAttachment } from '../../db/schema';
-import { bookingIcs } from '../online-booking/booking-ics';
-import { formatDateTime } from '../../../shared/format/date-time';
-import { formatFor } from '../../../shared/format/locale';
+import { skinTestWords } from '@shared/rules/skin-test-words';
+import type { MessageAttachment } from '@server/db/schema';
+import { bookingIcs } from '../online-booking';
+import { formatDateTime } from '@shared/format/date-time';
+import { formatFor } from '@shared/format/locale';
 
 /** What every booking message may mention, loaded once per re-plan. */
 export interface BookingContext {

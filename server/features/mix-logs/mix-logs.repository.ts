@@ -1,7 +1,7 @@
 import { sql } from 'kysely';
-import type { Db } from '../../db/database';
-import type { BookingStatus } from '../../../shared/schemas/common.schemas';
-import type { MixLog, RepeatSource, WriteMixLog } from '../../../shared/schemas/mix-log.schemas';
+import type { Db } from '@server/db/database';
+import type { BookingStatus } from '@shared/schemas/common.schemas';
+import type { MixLog, RepeatSource, WriteMixLog } from '@shared/schemas/mix-log.schemas';
 
 const COLUMNS = [
   'id', 'sitting_seq', 'bowl_no', 'product_type', 'shade_notes', 'developer_percent', 'ratio', 'grams', 'applied_to',

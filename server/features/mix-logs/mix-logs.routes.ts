@@ -1,6 +1,6 @@
-import { mixLogsApi } from '../../../shared/api/mix-logs.api';
-import type { AppDeps } from '../../app-deps';
-import { apiRoute } from '../../lib/api-route';
+import { mixLogsApi } from '@shared/api/mix-logs.api';
+import type { AppDeps } from '@server/app-deps';
+import { apiRoute } from '@server/lib/api-route';
 import { mixLogList, repeatMixLog, writeMixLog } from './mix-logs.service';
 
 // Desk, owner and stylists may call these; the service narrows a stylist to the bookings they work on.

@@ -1,10 +1,10 @@
-import type { Db } from '../../db/database';
-import type { SessionUser } from '../../../shared/schemas/auth.schemas';
-import { mixLogWritable, type MixLog, type MixLogList, type WriteMixLog } from '../../../shared/schemas/mix-log.schemas';
-import { CalculatorError, checkDeveloperStrength, percentToVolume } from '../../../shared/calculators/developer';
-import { productUse } from '../../../shared/calculators/product-use';
-import { AppError, notFound } from '../../lib/app-error';
-import { productCentsPerGram } from '../quote-prices/quote-prices.repository';
+import type { Db } from '@server/db/database';
+import type { SessionUser } from '@shared/schemas/auth.schemas';
+import { mixLogWritable, type MixLog, type MixLogList, type WriteMixLog } from '@shared/schemas/mix-log.schemas';
+import { CalculatorError, checkDeveloperStrength, percentToVolume } from '@shared/calculators/developer';
+import { productUse } from '@shared/calculators/product-use';
+import { AppError, notFound } from '@server/lib/app-error';
+import { productCentsPerGram } from '../quote-prices';
 import { findBookingForMixLog, insertMixLogs, listMixLogs, listRepeatSources, listSittingStarts, maxDeveloperPercent, nextBowlNo, type StoredBowl } from './mix-logs.repository';
 
 const round = (n: number, places = 1) => Math.round(n * 10 ** places) / 10 ** places;

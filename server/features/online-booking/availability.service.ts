@@ -1,11 +1,11 @@
 import { DateTime } from 'luxon';
-import type { Db } from '../../db/database';
-import type { Availability } from '../../../shared/schemas/online-booking.schemas';
-import type { ServiceSummary } from '../../../shared/schemas/service.schemas';
-import { AppError, notFound } from '../../lib/app-error';
-import { findService } from '../services/services.repository';
-import { localEarliest, optionsFor } from '../planning/planning-port';
-import { daysFrom, type DayRange } from '../book-version/book-version.repository';
+import type { Db } from '@server/db/database';
+import type { Availability } from '@shared/schemas/online-booking.schemas';
+import type { ServiceSummary } from '@shared/schemas/service.schemas';
+import { AppError, notFound } from '@server/lib/app-error';
+import { findService } from '../services';
+import { localEarliest, optionsFor } from '../planning';
+import { daysFrom, type DayRange } from '../book-version';
 
 /** How far ahead online clients see free times. */
 export const ONLINE_DAYS = 21;

@@ -1,5 +1,5 @@
-import type { Cautions } from '../../../shared/schemas/online-booking.schemas';
-import { skinTestWords } from '../../../shared/rules/skin-test-words';
+import type { Cautions } from '@shared/schemas/online-booking.schemas';
+import { skinTestWords } from '@shared/rules/skin-test-words';
 
 /**
  * The cautions a client accepts before paying. The version is stored with each acceptance, so a later change

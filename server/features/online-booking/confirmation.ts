@@ -1,10 +1,10 @@
 import type { Kysely } from 'kysely';
-import type { Database } from '../../db/schema';
-import { replanBookingMessages } from '../messages/plan-messages.service';
-import { sendDueMessages, type Senders } from '../messages/send-message.job';
-import { firstMessageSends, salonQuietHours } from '../messages/messages.repository';
-import type { SessionUser } from '../../../shared/schemas/auth.schemas';
-import type { ConfirmationSends } from '../../../shared/schemas/online-booking.schemas';
+import type { Database } from '@server/db/schema';
+import { replanBookingMessages } from '../messages';
+import { sendDueMessages, type Senders } from '../messages';
+import { firstMessageSends, salonQuietHours } from '../messages';
+import type { SessionUser } from '@shared/schemas/auth.schemas';
+import type { ConfirmationSends } from '@shared/schemas/online-booking.schemas';
 import { ownBooking } from './my-bookings.service';
 
 /** How long a client's payment answer waits for the confirmation to go out; a slow provider finishes after. */

@@ -1,9 +1,9 @@
-import type { Salon } from '../../../shared/schemas/salon.schemas';
-import type { Db } from '../../db/database';
-import type { JsonText } from '../../lib/json-text';
-import type { ReadCache } from '../../lib/read-cache';
-import { salonAtBookVersion } from '../book-version/book-version.repository';
-import { cachedBookRead } from '../book-version/cached-book-read';
+import type { Salon } from '@shared/schemas/salon.schemas';
+import type { Db } from '@server/db/database';
+import type { JsonText } from '@server/lib/json-text';
+import type { ReadCache } from '@server/lib/read-cache';
+import { salonAtBookVersion } from '../book-version';
+import { cachedBookRead } from '../book-version';
 import { freeTimes, freeTimesDays, freeTimesKey, onlineService } from './availability.service';
 
 /** The salon as the free-times search reads it. */

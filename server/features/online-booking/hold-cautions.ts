@@ -1,6 +1,6 @@
-import type { Salon } from '../../../shared/schemas/salon.schemas';
-import type { Cautions } from '../../../shared/schemas/online-booking.schemas';
-import { planNeedsSkinTest } from '../../../shared/rules/skin-test-need';
+import type { Salon } from '@shared/schemas/salon.schemas';
+import type { Cautions } from '@shared/schemas/online-booking.schemas';
+import { planNeedsSkinTest } from '@shared/rules/skin-test-need';
 import { cautionsFor } from './cautions';
 import type { HoldRecord } from './holds.repository';
 

@@ -1,11 +1,11 @@
-import type { Db } from '../../db/database';
-import type { Salon } from '../../../shared/schemas/salon.schemas';
-import { assertSkinTestAllows } from '../skin-tests/skin-test-check.service';
-import { sittingStarts } from '../bookings/change-booking.repository';
+import type { Db } from '@server/db/database';
+import type { Salon } from '@shared/schemas/salon.schemas';
+import { assertSkinTestAllows } from '../skin-tests';
+import { sittingStarts } from '../bookings';
 import type { HoldRecord } from './holds.repository';
-import { planNeedsSkinTest } from '../../../shared/rules/skin-test-need';
-import { AppError } from '../../lib/app-error';
-import { findHairHistory } from '../hair-history/hair-history.repository';
+import { planNeedsSkinTest } from '@shared/rules/skin-test-need';
+import { AppError } from '@server/lib/app-error';
+import { findHairHistory } from '../hair-history';
 
 /**
  * An online hold may become a booking only on a skin test already read negative: online there is no "waiting on a

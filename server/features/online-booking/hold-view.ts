@@ -1,6 +1,6 @@
-import type { Hold } from '../../../shared/schemas/online-booking.schemas';
+import type { Hold } from '@shared/schemas/online-booking.schemas';
 import type { HoldRecord } from './holds.repository';
-import { AppError } from '../../lib/app-error';
+import { AppError } from '@server/lib/app-error';
 
 /** What a client's screens show of a hold (or the booking it became); one past its time reads as lapsed. */
 export function holdView(h: HoldRecord, now = new Date()): Hold {

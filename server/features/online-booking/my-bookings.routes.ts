@@ -1,6 +1,6 @@
-import { onlineBookingApi } from '../../../shared/api/online-booking.api';
-import type { AppDeps } from '../../app-deps';
-import { apiRoute } from '../../lib/api-route';
+import { onlineBookingApi } from '@shared/api/online-booking.api';
+import type { AppDeps } from '@server/app-deps';
+import { apiRoute } from '@server/lib/api-route';
 import { cancelMyBooking, cancelTerms, moveMyBooking, myBookingCalendarFile, myMoveTimes } from './my-bookings.service';
 import { confirmationSends } from './confirmation';
 

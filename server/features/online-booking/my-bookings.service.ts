@@ -1,21 +1,21 @@
 import type { Kysely } from 'kysely';
-import type { Database } from '../../db/schema';
-import type { SessionUser } from '../../../shared/schemas/auth.schemas';
+import type { Database } from '@server/db/schema';
+import type { SessionUser } from '@shared/schemas/auth.schemas';
 import { DateTime } from 'luxon';
-import { AppError, notFound } from '../../lib/app-error';
-import { findSalon } from '../salon/salon.repository';
-import { findClientIdForUser } from '../clients/clients.repository';
-import { findService } from '../services/services.repository';
-import { cancelBooking, cancelOutcome, depositOutcome } from '../bookings/cancel-booking.service';
-import { moveSitting } from '../bookings/move-booking.service';
-import { deskBookingView } from '../bookings/booking-view.service';
-import type { Availability, CancelTerms } from '../../../shared/schemas/online-booking.schemas';
-import type { BookingView } from '../../../shared/schemas/booking-view.schemas';
+import { AppError, notFound } from '@server/lib/app-error';
+import { findSalon } from '../salon';
+import { findClientIdForUser } from '../clients';
+import { findService } from '../services';
+import { cancelBooking, cancelOutcome, depositOutcome } from '../bookings';
+import { moveSitting } from '../bookings';
+import { deskBookingView } from '../bookings';
+import type { Availability, CancelTerms } from '@shared/schemas/online-booking.schemas';
+import type { BookingView } from '@shared/schemas/booking-view.schemas';
 import { findHold } from './holds.repository';
 import { bookingIcs } from './booking-ics';
 import { freeTimes } from './availability.service';
 import { searchedSalon } from './free-times.service';
-import { formatMoney } from '../../../shared/money/money';
+import { formatMoney } from '@shared/money/money';
 
 /** One of the signed-in client's own bookings; anyone else's is answered as not found. */
 export async function ownBooking(db: Kysely<Database>, user: SessionUser, id: string) {

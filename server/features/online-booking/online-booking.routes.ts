@@ -1,7 +1,7 @@
-import { onlineBookingApi } from '../../../shared/api/online-booking.api';
-import type { AppDeps } from '../../app-deps';
-import { apiRoute } from '../../lib/api-route';
-import { rateLimited } from '../../lib/rate-limit';
+import { onlineBookingApi } from '@shared/api/online-booking.api';
+import type { AppDeps } from '@server/app-deps';
+import { apiRoute } from '@server/lib/api-route';
+import { rateLimited } from '@server/lib/rate-limit';
 import { publicSalon } from './public-salon.service';
 import { cachedFreeTimes } from './free-times.service';
 import { acceptCautions, claimHold, createHold, holdStatus } from './holds.service';

@@ -1,18 +1,18 @@
 import { randomBytes } from 'node:crypto';
 import type { Kysely } from 'kysely';
-import type { Database } from '../../db/schema';
-import type { SessionUser } from '../../../shared/schemas/auth.schemas';
-import type { HoldStep, OpenHold } from '../../../shared/schemas/online-booking.schemas';
-import { sha256 } from '../../lib/hash';
-import { AppError, notFound } from '../../lib/app-error';
-import { findSalon } from '../salon/salon.repository';
-import { findClientIdForUser } from '../clients/clients.repository';
-import { findHairHistory } from '../hair-history/hair-history.repository';
+import type { Database } from '@server/db/schema';
+import type { SessionUser } from '@shared/schemas/auth.schemas';
+import type { HoldStep, OpenHold } from '@shared/schemas/online-booking.schemas';
+import { sha256 } from '@server/lib/hash';
+import { AppError, notFound } from '@server/lib/app-error';
+import { findSalon } from '../salon';
+import { findClientIdForUser } from '../clients';
+import { findHairHistory } from '../hair-history';
 import { holdCautions } from './hold-cautions';
 import { findHold, hasAcceptedCautions, openHoldIdsOf, releaseHoldRow, setHoldSecret, type HoldRecord } from './holds.repository';
 import { holdLapsed, holdView } from './hold-view';
-import { formatDateTime } from '../../../shared/format/date-time';
-import { formatFor } from '../../../shared/format/locale';
+import { formatDateTime } from '@shared/format/date-time';
+import { formatFor } from '@shared/format/locale';
 
 /*
  * A client keeps one unpaid hold at a time. Starting again offers the one they have (resume) or lets them free it

@@ -1,23 +1,23 @@
 import type { Kysely } from 'kysely';
 import type { z } from 'zod';
-import type { Database } from '../../db/schema';
-import type { SessionUser } from '../../../shared/schemas/auth.schemas';
-import type { PayHoldSchema } from '../../../shared/schemas/online-booking.schemas';
-import type { BookingView } from '../../../shared/schemas/booking-view.schemas';
-import type { Payments } from '../../payments/payments';
-import type { Mailer } from '../../mail/mailer';
-import type { SmsSender } from '../../sms/sms-sender';
-import { AppError } from '../../lib/app-error';
-import { findSalon } from '../salon/salon.repository';
-import { writeAudit } from '../audit/audit.repository';
-import { deskBookingView } from '../bookings/booking-view.service';
+import type { Database } from '@server/db/schema';
+import type { SessionUser } from '@shared/schemas/auth.schemas';
+import type { PayHoldSchema } from '@shared/schemas/online-booking.schemas';
+import type { BookingView } from '@shared/schemas/booking-view.schemas';
+import type { Payments } from '@server/payments/payments';
+import type { Mailer } from '@server/mail/mailer';
+import type { SmsSender } from '@server/sms/sms-sender';
+import { AppError } from '@server/lib/app-error';
+import { findSalon } from '../salon';
+import { writeAudit } from '../audit';
+import { deskBookingView } from '../bookings';
 import { holdCautions } from './hold-cautions';
 import { confirmHoldRow, hasAcceptedCautions, recordPayment } from './holds.repository';
 import { ownHold } from './holds.service';
 import { sendConfirmation } from './confirmation';
 import { assertHoldSkinTest } from './hold-skin-test';
-import { formatTime } from '../../../shared/format/date-time';
-import { formatFor } from '../../../shared/format/locale';
+import { formatTime } from '@shared/format/date-time';
+import { formatFor } from '@shared/format/locale';
 
 type Deps = { payments: Payments; mailer: Mailer; sms: SmsSender };
 

@@ -1,7 +1,7 @@
-import type { Db } from '../../db/database';
-import type { Salon } from '../../../shared/schemas/salon.schemas';
-import { notFound } from '../../lib/app-error';
-import { toSalon } from '../salon/salon.repository';
+import type { Db } from '@server/db/database';
+import type { Salon } from '@shared/schemas/salon.schemas';
+import { notFound } from '@server/lib/app-error';
+import { toSalon } from '../salon';
 
 /** A salon as its public page and online booking find it: by the slug in its address, with its hold minutes. */
 export async function findSalonBySlug(db: Db, slug: string): Promise<Salon & { holdMinutes: number }> {

@@ -1,12 +1,12 @@
-import { describeHoursRule } from '../../../shared/engine/describe-hours';
-import { planNeedsSkinTest } from '../../../shared/rules/skin-test-need';
-import { skinTestValidityWords, skinTestWords } from '../../../shared/rules/skin-test-words';
-import type { Db } from '../../db/database';
-import type { PublicSalon } from '../../../shared/schemas/online-booking.schemas';
-import { formatMoney } from '../../../shared/money/money';
-import { todayIn } from '../../../shared/time/salon-time';
-import { listSalonHours } from '../salon/salon.repository';
-import { listServices, listStylistDetails } from '../services/services.repository';
+import { describeHoursRule } from '@shared/engine/describe-hours';
+import { planNeedsSkinTest } from '@shared/rules/skin-test-need';
+import { skinTestValidityWords, skinTestWords } from '@shared/rules/skin-test-words';
+import type { Db } from '@server/db/database';
+import type { PublicSalon } from '@shared/schemas/online-booking.schemas';
+import { formatMoney } from '@shared/money/money';
+import { todayIn } from '@shared/time/salon-time';
+import { listSalonHours } from '../salon';
+import { listServices, listStylistDetails } from '../services';
 import { findSalonBySlug } from './public-salon.repository';
 
 /** The salon's public page: services, hours and policies. Nothing about any client. */

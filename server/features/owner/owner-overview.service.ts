@@ -1,9 +1,9 @@
 import { DateTime } from 'luxon';
-import type { Db } from '../../db/database';
-import type { OwnerOverview } from '../../../shared/schemas/owner.schemas';
-import { occupancyOver } from '../planning/planning-port';
-import { listStylists } from '../bookings/salon-resources.repository';
-import { findSalon } from '../salon/salon.repository';
+import type { Db } from '@server/db/database';
+import type { OwnerOverview } from '@shared/schemas/owner.schemas';
+import { occupancyOver } from '../planning';
+import { listStylists } from '../bookings';
+import { findSalon } from '../salon';
 import { bookingsBetween, salonCounts } from './owner-overview.repository';
 
 /** Counts of what the salon has, and the current week (Monday to Sunday, salon time). */

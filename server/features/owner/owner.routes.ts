@@ -1,6 +1,6 @@
-import { ownerApi } from '../../../shared/api/owner.api';
-import type { AppDeps } from '../../app-deps';
-import { apiRoute } from '../../lib/api-route';
+import { ownerApi } from '@shared/api/owner.api';
+import type { AppDeps } from '@server/app-deps';
+import { apiRoute } from '@server/lib/api-route';
 import { ownerOverview } from './owner-overview.service';
 
 export function registerOwnerRoutes({ table, db }: AppDeps): void {

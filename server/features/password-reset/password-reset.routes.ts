@@ -1,7 +1,7 @@
-import { passwordResetApi } from '../../../shared/api/password-reset.api';
-import type { AppDeps } from '../../app-deps';
-import { apiRoute } from '../../lib/api-route';
-import { rateLimited } from '../../lib/rate-limit';
+import { passwordResetApi } from '@shared/api/password-reset.api';
+import type { AppDeps } from '@server/app-deps';
+import { apiRoute } from '@server/lib/api-route';
+import { rateLimited } from '@server/lib/rate-limit';
 import { confirmReset, requestReset } from './password-reset.service';
 
 export function registerPasswordResetRoutes({ table, db, mailer, config }: AppDeps): void {

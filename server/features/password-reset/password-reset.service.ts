@@ -1,11 +1,11 @@
 import { randomBytes } from 'node:crypto';
 import type { Kysely } from 'kysely';
-import type { Database } from '../../db/schema';
-import type { Mailer } from '../../mail/mailer';
-import { sha256 } from '../../lib/hash';
-import { AppError } from '../../lib/app-error';
-import { hashPassword, isCommonPassword } from '../../auth/password';
-import { findUserByEmail, setPassword } from '../session/users.repository';
+import type { Database } from '@server/db/schema';
+import type { Mailer } from '@server/mail/mailer';
+import { sha256 } from '@server/lib/hash';
+import { AppError } from '@server/lib/app-error';
+import { hashPassword, isCommonPassword } from '@server/auth/password';
+import { findUserByEmail, setPassword } from '../session';
 import { consumeReset, deleteSessionsOfUser, insertReset } from './password-resets.repository';
 
 export const RESET_VALID_MINUTES = 30;

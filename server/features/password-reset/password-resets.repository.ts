@@ -1,5 +1,5 @@
 import { sql } from 'kysely';
-import type { Db } from '../../db/database';
+import type { Db } from '@server/db/database';
 
 export async function insertReset(db: Db, userId: string, tokenHash: string, expiresAt: Date): Promise<void> {
   await db.insertInto('password_resets').values({ user_id: userId, token_hash: tokenHash, expires_at: expiresAt, used_at: null }).execute();

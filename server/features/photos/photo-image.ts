@@ -1,6 +1,6 @@
 import { fileTypeFromBuffer } from 'file-type';
 import sharp from 'sharp';
-import { PHOTO_LIMITS } from '../../../shared/schemas/photo.schemas';
+import { PHOTO_LIMITS } from '@shared/schemas/photo.schemas';
 
 /** Refuse anything that would decode to more than this many pixels (a decompression bomb). */
 export const MAX_INPUT_PIXELS = 50_000_000;

@@ -1,7 +1,7 @@
 import type { Selectable } from 'kysely';
-import type { Db } from '../../db/database';
-import type { Database } from '../../db/schema';
-import type { PhotoKind } from '../../../shared/schemas/photo.schemas';
+import type { Db } from '@server/db/database';
+import type { Database } from '@server/db/schema';
+import type { PhotoKind } from '@shared/schemas/photo.schemas';
 
 const COLUMNS = ['id', 'salon_id', 'client_id', 'booking_id', 'kind', 'storage_key', 'mime', 'width', 'height', 'created_at'] as const;
 

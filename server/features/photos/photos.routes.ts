@@ -1,9 +1,9 @@
-import { photosApi } from '../../../shared/api/photos.api';
-import type { SessionUser } from '../../../shared/schemas/auth.schemas';
-import type { AppDeps } from '../../app-deps';
-import { apiRoute } from '../../lib/api-route';
-import { rateLimited } from '../../lib/rate-limit';
-import { uploadRoute } from '../../lib/upload-route';
+import { photosApi } from '@shared/api/photos.api';
+import type { SessionUser } from '@shared/schemas/auth.schemas';
+import type { AppDeps } from '@server/app-deps';
+import { apiRoute } from '@server/lib/api-route';
+import { rateLimited } from '@server/lib/rate-limit';
+import { uploadRoute } from '@server/lib/upload-route';
 import { addPhotos, photoFile, photoList, removePhoto } from './photos.service';
 
 // Decoding and re-encoding is the expensive part: a person gets a generous budget per quarter hour,

@@ -1,13 +1,13 @@
-import { urlOf } from '../../../shared/api/endpoint';
-import { photosApi } from '../../../shared/api/photos.api';
-import type { SessionUser } from '../../../shared/schemas/auth.schemas';
-import type { PhotoKind, Photo as PhotoView } from '../../../shared/schemas/photo.schemas';
-import type { Db } from '../../db/database';
-import { clientIdFor, myClientId } from '../../auth/client-access';
-import { notFound } from '../../lib/app-error';
-import type { Storage } from '../../storage/storage';
-import { writeAudit } from '../audit/audit.repository';
-import { strandTestsShowingPhoto } from '../strand-tests/strand-tests.repository';
+import { urlOf } from '@shared/api/endpoint';
+import { photosApi } from '@shared/api/photos.api';
+import type { SessionUser } from '@shared/schemas/auth.schemas';
+import type { PhotoKind, Photo as PhotoView } from '@shared/schemas/photo.schemas';
+import type { Db } from '@server/db/database';
+import { clientIdFor, myClientId } from '@server/auth/client-access';
+import { notFound } from '@server/lib/app-error';
+import type { Storage } from '@server/storage/storage';
+import { writeAudit } from '../audit';
+import { strandTestsShowingPhoto } from '../strand-tests';
 import { deletePhoto, findPhoto, isOwnClientRecord, listPhotos, type Photo } from './photos.repository';
 import { storePhotos } from './store-photos.service';
 

@@ -1,9 +1,9 @@
 import type { Kysely } from 'kysely';
-import type { Database } from '../../db/schema';
-import { PHOTO_LIMITS, type PhotoKind } from '../../../shared/schemas/photo.schemas';
-import { AppError, notFound } from '../../lib/app-error';
-import { safeFileName } from '../../lib/safe-file-name';
-import { newKey, type Storage } from '../../storage/storage';
+import type { Database } from '@server/db/schema';
+import { PHOTO_LIMITS, type PhotoKind } from '@shared/schemas/photo.schemas';
+import { AppError, notFound } from '@server/lib/app-error';
+import { safeFileName } from '@server/lib/safe-file-name';
+import { newKey, type Storage } from '@server/storage/storage';
 import { cleanImage, ImageRefused, type CleanImage } from './photo-image';
 import { findClientBooking, insertPhotos, lockClientPhotos } from './photos.repository';
 

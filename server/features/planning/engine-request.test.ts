@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { parseScenario, planOptions } from '../../../shared/engine/engine';
-import type { StepPlan } from '../../../shared/schemas/step-plan.schemas';
+import { parseScenario, planOptions } from '@shared/engine/engine';
+import type { StepPlan } from '@shared/schemas/step-plan.schemas';
 import { toEngineSittings } from './engine-request';
 import { placedOption } from './placed-option';
 

@@ -1,10 +1,10 @@
 import { DateTime } from 'luxon';
-import type { ServiceRequest, StartStretch } from '../../../shared/engine/engine';
-import type { StepPlan } from '../../../shared/schemas/step-plan.schemas';
-import type { BookingOption } from '../../../shared/schemas/booking.schemas';
-import { MAX_HORIZON_DAYS } from '../../../shared/engine/engine';
-import { localDateTimeOf, shiftLocalDate } from '../../../shared/time/salon-time';
-import { formatIso, parseLocalDateTime, zoneClock } from '../../../shared/engine/local-time';
+import type { ServiceRequest, StartStretch } from '@shared/engine/engine';
+import type { StepPlan } from '@shared/schemas/step-plan.schemas';
+import type { BookingOption } from '@shared/schemas/booking.schemas';
+import { MAX_HORIZON_DAYS } from '@shared/engine/engine';
+import { localDateTimeOf, shiftLocalDate } from '@shared/time/salon-time';
+import { formatIso, parseLocalDateTime, zoneClock } from '@shared/engine/local-time';
 import type { PlacedOption } from './placed-option';
 
 /** Instants a sitting may start between, both included (e.g. what a client's skin test allows). */

@@ -1,4 +1,4 @@
-import type { Option, OptionStep } from '../../../shared/engine/engine';
+import type { Option, OptionStep } from '@shared/engine/engine';
 
 /** A step as the engine placed it, with the id and label the request gave it (carried through the engine). */
 export interface PlacedStep {

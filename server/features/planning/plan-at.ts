@@ -1,7 +1,7 @@
-import { planOptions, type Option, type Scenario } from '../../../shared/engine/engine';
-import type { StepPlan } from '../../../shared/schemas/step-plan.schemas';
+import { planOptions, type Option, type Scenario } from '@shared/engine/engine';
+import type { StepPlan } from '@shared/schemas/step-plan.schemas';
 import { toEngineSittings } from './engine-request';
-import { localDateTimeOf } from '../../../shared/time/salon-time';
+import { localDateTimeOf } from '@shared/time/salon-time';
 import { placedOption, type PlacedOption } from './placed-option';
 
 export interface ExactRequest {

@@ -6,10 +6,10 @@
  * test allows) goes in as a limit the engine searches within.
  */
 import { DateTime } from 'luxon';
-import type { Db } from '../../db/database';
-import { breakDownOccupancy, findFreeStylists, findWindows, MAX_HORIZON_DAYS, planOptions, type HandsFreeWindow, type OccupancyBreakdown, type Option, type Scenario } from '../../../shared/engine/engine';
-import type { StepPlan } from '../../../shared/schemas/step-plan.schemas';
-import { AppError } from '../../lib/app-error';
+import type { Db } from '@server/db/database';
+import { breakDownOccupancy, findFreeStylists, findWindows, MAX_HORIZON_DAYS, planOptions, type HandsFreeWindow, type OccupancyBreakdown, type Option, type Scenario } from '@shared/engine/engine';
+import type { StepPlan } from '@shared/schemas/step-plan.schemas';
+import { AppError } from '@server/lib/app-error';
 import { calendarsOf, extendSalonBook, loadSalonBook, loadSalonSetup, type BookOptions, type Horizon, type PlanningSalon, type SalonBook, type SalonSetup } from './salon-calendars.repository';
 import { horizonFor, localEarliest, toEngineSittings, type Names, type StartLimit } from './engine-request';
 import { planBetween, planExactlyAt, type ExactRequest } from './plan-at';

@@ -1,6 +1,6 @@
-import type { StepPlan } from '../../../shared/schemas/step-plan.schemas';
-import { processingLimitIssues, type ProcessingLimits } from '../../../shared/rules/processing-limits';
-import { AppError } from '../../lib/app-error';
+import type { StepPlan } from '@shared/schemas/step-plan.schemas';
+import { processingLimitIssues, type ProcessingLimits } from '@shared/rules/processing-limits';
+import { AppError } from '@server/lib/app-error';
 
 /**
  * Refuses a step plan that keeps a product on the hair longer than the salon's processing limits: 400 naming each

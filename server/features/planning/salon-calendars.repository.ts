@@ -1,12 +1,12 @@
 import { sql } from 'kysely';
 import { jsonArrayFrom } from 'kysely/helpers/postgres';
 import { DateTime } from 'luxon';
-import type { Db } from '../../db/database';
-import type { Booking, HoursRule, Scenario } from '../../../shared/engine/engine';
-import type { Salon } from '../../../shared/schemas/salon.schemas';
-import { listSalonHours } from '../salon/salon.repository';
-import { formatIso, parseLocalDate, zoneClock } from '../../../shared/engine/local-time';
-import { localDateTimeOf } from '../../../shared/time/salon-time';
+import type { Db } from '@server/db/database';
+import type { Booking, HoursRule, Scenario } from '@shared/engine/engine';
+import type { Salon } from '@shared/schemas/salon.schemas';
+import { listSalonHours } from '../salon';
+import { formatIso, parseLocalDate, zoneClock } from '@shared/engine/local-time';
+import { localDateTimeOf } from '@shared/time/salon-time';
 
 /** What planning needs of the salon row; callers pass the salon they already hold. */
 export type PlanningSalon = Pick<Salon, 'id' | 'timeZone' | 'granularityMinutes'>;

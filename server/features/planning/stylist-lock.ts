@@ -1,5 +1,5 @@
 import { sql } from 'kysely';
-import type { Db } from '../../db/database';
+import type { Db } from '@server/db/database';
 
 /**
  * Serialises booking writes per stylist for the rest of the transaction. The exclusion constraints guard

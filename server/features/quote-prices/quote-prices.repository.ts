@@ -1,5 +1,5 @@
-import type { Db } from '../../db/database';
-import type { CostedProduct } from '../../../shared/schemas/mix-log.schemas';
+import type { Db } from '@server/db/database';
+import type { CostedProduct } from '@shared/schemas/mix-log.schemas';
 
 /** The owner's estimated cost per gram of each product type and of developer (those not set are absent). */
 export async function productCentsPerGram(db: Db, salonId: string): Promise<Partial<Record<CostedProduct, number>>> {

@@ -1,6 +1,6 @@
-import { quotePricesApi } from '../../../shared/api/quote-prices.api';
-import type { AppDeps } from '../../app-deps';
-import { apiRoute } from '../../lib/api-route';
+import { quotePricesApi } from '@shared/api/quote-prices.api';
+import type { AppDeps } from '@server/app-deps';
+import { apiRoute } from '@server/lib/api-route';
 import { quotePrices, setQuotePrices } from './quote-prices.service';
 
 export function registerQuotePriceRoutes({ table, db }: AppDeps): void {

@@ -1,6 +1,6 @@
-import type { SessionUser } from '../../../shared/schemas/auth.schemas';
-import type { QuotePrices } from '../../../shared/schemas/quote-prices.schemas';
-import type { Db } from '../../db/database';
+import type { SessionUser } from '@shared/schemas/auth.schemas';
+import type { QuotePrices } from '@shared/schemas/quote-prices.schemas';
+import type { Db } from '@server/db/database';
 import { correctionRate, productCentsPerGram, saveQuotePrices } from './quote-prices.repository';
 
 export async function quotePrices(db: Db, user: SessionUser): Promise<QuotePrices> {

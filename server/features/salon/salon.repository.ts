@@ -1,12 +1,12 @@
 import type { Selectable } from 'kysely';
-import type { Db } from '../../db/database';
-import type { SalonsTable } from '../../db/schema';
-import type { Salon } from '../../../shared/schemas/salon.schemas';
-import type { HoursRule } from '../../../shared/engine/scenario.schemas';
-import { AppError } from '../../lib/app-error';
-import { WIDENING_FAMILIES, type WideningFamily } from '../../../shared/rules/skin-test-need';
-import type { ProcessingLimits } from '../../../shared/rules/processing-limits';
-import type { LiftPerSitting } from '../../../shared/quotes/lift-per-sitting';
+import type { Db } from '@server/db/database';
+import type { SalonsTable } from '@server/db/schema';
+import type { Salon } from '@shared/schemas/salon.schemas';
+import type { HoursRule } from '@shared/engine/scenario.schemas';
+import { AppError } from '@server/lib/app-error';
+import { WIDENING_FAMILIES, type WideningFamily } from '@shared/rules/skin-test-need';
+import type { ProcessingLimits } from '@shared/rules/processing-limits';
+import type { LiftPerSitting } from '@shared/quotes/lift-per-sitting';
 
 export async function findSalon(db: Db, id: string): Promise<Salon> {
   return toSalon(await db.selectFrom('salons').selectAll().where('id', '=', id).executeTakeFirstOrThrow());

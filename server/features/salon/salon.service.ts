@@ -1,5 +1,5 @@
-import type { Db } from '../../db/database';
-import type { Salon } from '../../../shared/schemas/salon.schemas';
+import type { Db } from '@server/db/database';
+import type { Salon } from '@shared/schemas/salon.schemas';
 import { findSalon } from './salon.repository';
 
 /** The salon a signed-in user belongs to. */

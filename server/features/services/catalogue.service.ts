@@ -1,7 +1,7 @@
-import type { SessionUser } from '../../../shared/schemas/auth.schemas';
+import type { SessionUser } from '@shared/schemas/auth.schemas';
 import type { z } from 'zod';
-import type { ServiceSummary, StylistListSchema } from '../../../shared/schemas/service.schemas';
-import type { Db } from '../../db/database';
+import type { ServiceSummary, StylistListSchema } from '@shared/schemas/service.schemas';
+import type { Db } from '@server/db/database';
 import { listServices, listStylistDetails } from './services.repository';
 
 /** The salon's active services with their step plans, by name. */

@@ -1,6 +1,6 @@
-import type { Db } from '../../db/database';
-import type { ServiceSummary } from '../../../shared/schemas/service.schemas';
-import { StepPlanSchema } from '../../../shared/schemas/step-plan.schemas';
+import type { Db } from '@server/db/database';
+import type { ServiceSummary } from '@shared/schemas/service.schemas';
+import { StepPlanSchema } from '@shared/schemas/step-plan.schemas';
 
 type Row = Awaited<ReturnType<typeof baseQuery>>[number];
 const baseQuery = (db: Db, salonId: string) =>

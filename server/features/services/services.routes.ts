@@ -1,6 +1,6 @@
-import { catalogueApi } from '../../../shared/api/catalogue.api';
-import type { AppDeps } from '../../app-deps';
-import { apiRoute } from '../../lib/api-route';
+import { catalogueApi } from '@shared/api/catalogue.api';
+import type { AppDeps } from '@server/app-deps';
+import { apiRoute } from '@server/lib/api-route';
 import { salonServices, salonStylists } from './catalogue.service';
 
 export function registerServiceRoutes({ table, db }: AppDeps): void {

@@ -1,8 +1,8 @@
-import { sessionApi } from '../../../shared/api/session.api';
-import { apiRoute } from '../../lib/api-route';
-import { rateLimited } from '../../lib/rate-limit';
-import type { AppDeps } from '../../app-deps';
-import { endSession, startSession } from '../../auth/sessions';
+import { sessionApi } from '@shared/api/session.api';
+import { apiRoute } from '@server/lib/api-route';
+import { rateLimited } from '@server/lib/rate-limit';
+import type { AppDeps } from '@server/app-deps';
+import { endSession, startSession } from '@server/auth/sessions';
 import { signIn, signUp } from './session.service';
 
 export function registerSessionRoutes({ table, db }: AppDeps): void {

@@ -1,12 +1,12 @@
-import type { Db } from '../../db/database';
-import type { SessionUser, SignInBody, SignUpBody } from '../../../shared/schemas/auth.schemas';
-import { AppError } from '../../lib/app-error';
-import { hashPassword, isCommonPassword, verifyPassword } from '../../auth/password';
+import type { Db } from '@server/db/database';
+import type { SessionUser, SignInBody, SignUpBody } from '@shared/schemas/auth.schemas';
+import { AppError } from '@server/lib/app-error';
+import { hashPassword, isCommonPassword, verifyPassword } from '@server/auth/password';
 import { findUserByEmail, insertUser } from './users.repository';
 import { recordAttempt, recentFailures } from './sign-in-attempts.repository';
-import { findSalonIdForSignUp, salonCountry } from '../salon/salon.repository';
-import { storedPhone } from '../../lib/stored-phone';
-import { insertClient } from '../clients/clients.repository';
+import { findSalonIdForSignUp, salonCountry } from '../salon';
+import { storedPhone } from '@server/lib/stored-phone';
+import { insertClient } from '../clients';
 
 /** Common practice for sign-in throttling: a handful of failures per account, more per network address. */
 export const SIGN_IN_LIMITS = { windowMinutes: 15, perAccount: 5, perAddress: 20 };

@@ -1,5 +1,5 @@
 import { sql } from 'kysely';
-import type { Db } from '../../db/database';
+import type { Db } from '@server/db/database';
 
 export async function recordAttempt(db: Db, email: string, ip: string, succeeded: boolean): Promise<void> {
   await db.insertInto('sign_in_attempts').values({ email: email.toLowerCase(), ip, succeeded }).execute();

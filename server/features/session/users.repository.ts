@@ -1,5 +1,5 @@
-import type { Db } from '../../db/database';
-import type { SessionUser } from '../../../shared/schemas/auth.schemas';
+import type { Db } from '@server/db/database';
+import type { SessionUser } from '@shared/schemas/auth.schemas';
 
 export interface UserWithPassword extends SessionUser {
   passwordHash: string;

@@ -1,6 +1,6 @@
 import type { FutureBooking } from './future-bookings.repository';
-import { formatDateTime } from '../../../shared/format/date-time';
-import { formatFor } from '../../../shared/format/locale';
+import { formatDateTime } from '@shared/format/date-time';
+import { formatFor } from '@shared/format/locale';
 
 /** "2 future bookings: Thu 10 Dec, 9:00 AM Ana Ruiz (Full lightening, Jess), …" for refusals. */
 export function affectedMessage(lead: string, bookings: FutureBooking[], zone: string): string {

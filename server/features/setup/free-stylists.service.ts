@@ -1,8 +1,8 @@
-import type { Db } from '../../db/database';
-import type { AffectedBooking } from '../../../shared/schemas/setup.schemas';
-import { freeStylists, planningSalon, type TakeOverAsk } from '../planning/planning-port';
+import type { Db } from '@server/db/database';
+import type { AffectedBooking } from '@shared/schemas/setup.schemas';
+import { freeStylists, planningSalon, type TakeOverAsk } from '../planning';
 import { futureSittingIds, type FutureBooking } from './future-bookings.repository';
-import { localDateOf, shiftLocalDate } from '../../../shared/time/salon-time';
+import { localDateOf, shiftLocalDate } from '@shared/time/salon-time';
 
 /** The booking's future sittings as a take-over question, or null when none is left. */
 async function takeOverAsk(db: Db, zone: string, booking: FutureBooking, now: Date): Promise<TakeOverAsk | null> {

@@ -1,7 +1,7 @@
-import type { Db } from '../../db/database';
-import { LIMITED_FAMILIES, limitedFamilyNames, processingLimitIssues, type LimitedFamily, type ProcessingLimits } from '../../../shared/rules/processing-limits';
-import { AppError } from '../../lib/app-error';
-import { listServices } from '../services/services.repository';
+import type { Db } from '@server/db/database';
+import { LIMITED_FAMILIES, limitedFamilyNames, processingLimitIssues, type LimitedFamily, type ProcessingLimits } from '@shared/rules/processing-limits';
+import { AppError } from '@server/lib/app-error';
+import { listServices } from '../services';
 
 /**
  * A changed limit must not leave a service on the menu that its own plan breaks (the desk could no longer book

@@ -1,6 +1,6 @@
-import type { Db } from '../../db/database';
-import type { SalonSettings } from '../../../shared/schemas/salon-settings.schemas';
-import { planningRulesColumns, planningRulesOf } from '../salon/salon.repository';
+import type { Db } from '@server/db/database';
+import type { SalonSettings } from '@shared/schemas/salon-settings.schemas';
+import { planningRulesColumns, planningRulesOf } from '../salon';
 
 const hhmm = (t: string) => t.slice(0, 5);
 

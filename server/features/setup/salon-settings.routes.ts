@@ -1,6 +1,6 @@
-import { setupApi } from '../../../shared/api/setup.api';
-import type { AppDeps } from '../../app-deps';
-import { apiRoute } from '../../lib/api-route';
+import { setupApi } from '@shared/api/setup.api';
+import type { AppDeps } from '@server/app-deps';
+import { apiRoute } from '@server/lib/api-route';
 import { salonSettings, saveSalonSettings } from './salon-settings.service';
 
 export function registerSalonSettingsRoutes({ table, db }: AppDeps): void {

@@ -1,7 +1,7 @@
-import type { Db } from '../../db/database';
-import type { SessionUser } from '../../../shared/schemas/auth.schemas';
-import type { SalonSettings } from '../../../shared/schemas/salon-settings.schemas';
-import { writeAudit } from '../audit/audit.repository';
+import type { Db } from '@server/db/database';
+import type { SessionUser } from '@shared/schemas/auth.schemas';
+import type { SalonSettings } from '@shared/schemas/salon-settings.schemas';
+import { writeAudit } from '../audit';
 import { assertServicesWithinNewLimits } from './processing-limits-change';
 import { readSalonSettings, writeSalonSettings } from './salon-settings.repository';
 

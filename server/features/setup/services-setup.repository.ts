@@ -1,7 +1,7 @@
 import { sql } from 'kysely';
-import type { Db } from '../../db/database';
-import type { ServiceInput, SetupService } from '../../../shared/schemas/setup.schemas';
-import { toSummary } from '../services/services.repository';
+import type { Db } from '@server/db/database';
+import type { ServiceInput, SetupService } from '@shared/schemas/setup.schemas';
+import { toSummary } from '../services';
 
 /** Every service of the salon, retired ones too, with how many live bookings are still to come. */
 export async function listSetupServices(db: Db, salonId: string, now: Date): Promise<SetupService[]> {

@@ -1,6 +1,6 @@
-import { setupApi } from '../../../shared/api/setup.api';
-import type { AppDeps } from '../../app-deps';
-import { apiRoute } from '../../lib/api-route';
+import { setupApi } from '@shared/api/setup.api';
+import type { AppDeps } from '@server/app-deps';
+import { apiRoute } from '@server/lib/api-route';
 import { addService, changeService, setupServices, takeServiceOffMenu } from './services-setup.service';
 
 export function registerServiceSetupRoutes({ table, db }: AppDeps): void {

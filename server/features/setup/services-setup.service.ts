@@ -1,10 +1,10 @@
-import type { Db } from '../../db/database';
-import type { SessionUser } from '../../../shared/schemas/auth.schemas';
-import type { ServiceInput, SetupService } from '../../../shared/schemas/setup.schemas';
-import { AppError, notFound } from '../../lib/app-error';
-import { writeAudit } from '../audit/audit.repository';
-import { findSalon } from '../salon/salon.repository';
-import { assertWithinProcessingLimits } from '../planning/processing-limits-check';
+import type { Db } from '@server/db/database';
+import type { SessionUser } from '@shared/schemas/auth.schemas';
+import type { ServiceInput, SetupService } from '@shared/schemas/setup.schemas';
+import { AppError, notFound } from '@server/lib/app-error';
+import { writeAudit } from '../audit';
+import { findSalon } from '../salon';
+import { assertWithinProcessingLimits } from '../planning';
 import { affectedMessage } from './affected-message';
 import { uniqueName } from './name-taken';
 import { listFutureBookings } from './future-bookings.repository';

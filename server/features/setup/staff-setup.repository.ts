@@ -1,8 +1,8 @@
 import { sql } from 'kysely';
-import type { Db } from '../../db/database';
-import type { StaffDetails, StaffMember } from '../../../shared/schemas/setup.schemas';
-import { tstzRange } from '../bookings/bookings.repository';
-import { deleteSessionsOfUser } from '../password-reset/password-resets.repository';
+import type { Db } from '@server/db/database';
+import type { StaffDetails, StaffMember } from '@shared/schemas/setup.schemas';
+import { tstzRange } from '../bookings';
+import { deleteSessionsOfUser } from '../password-reset';
 
 /** Stored as the password hash of an invited account: no password verifies against it. */
 export const INVITED_HASH = 'invited: no password yet';

@@ -1,7 +1,7 @@
 import { sql } from 'kysely';
-import type { Db } from '../../db/database';
-import type { Unit, UnitKind } from '../../../shared/schemas/setup.schemas';
-import { tstzRange } from '../bookings/bookings.repository';
+import type { Db } from '@server/db/database';
+import type { Unit, UnitKind } from '@shared/schemas/setup.schemas';
+import { tstzRange } from '../bookings';
 
 const idColumn = (kind: UnitKind) => (kind === 'chairs' ? 'chair_id' : 'basin_id');
 

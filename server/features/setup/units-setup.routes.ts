@@ -1,6 +1,6 @@
-import { setupApi } from '../../../shared/api/setup.api';
-import type { AppDeps } from '../../app-deps';
-import { apiRoute } from '../../lib/api-route';
+import { setupApi } from '@shared/api/setup.api';
+import type { AppDeps } from '@server/app-deps';
+import { apiRoute } from '@server/lib/api-route';
 import { addUnit, backInService, renameUnitOf, takeOutOfService, unitAffected, unitsOf } from './units-setup.service';
 
 export function registerUnitSetupRoutes({ table, db }: AppDeps): void {

@@ -1,10 +1,10 @@
 import { DateTime } from 'luxon';
-import type { Db } from '../../db/database';
-import type { SessionUser } from '../../../shared/schemas/auth.schemas';
-import type { AffectedBooking, OutOfServiceInput, Unit, UnitKind } from '../../../shared/schemas/setup.schemas';
-import { notFound } from '../../lib/app-error';
-import { writeAudit } from '../audit/audit.repository';
-import { findSalon } from '../salon/salon.repository';
+import type { Db } from '@server/db/database';
+import type { SessionUser } from '@shared/schemas/auth.schemas';
+import type { AffectedBooking, OutOfServiceInput, Unit, UnitKind } from '@shared/schemas/setup.schemas';
+import { notFound } from '@server/lib/app-error';
+import { writeAudit } from '../audit';
+import { findSalon } from '../salon';
 import { withFreeStylists } from './free-stylists.service';
 import { listFutureBookings } from './future-bookings.repository';
 import { uniqueName } from './name-taken';

@@ -1,14 +1,14 @@
-import type { Db } from '../../db/database';
-import type { Salon } from '../../../shared/schemas/salon.schemas';
-import type { StepPlan } from '../../../shared/schemas/step-plan.schemas';
-import { checkStarts, skinTestVerdict, type SkinTestVerdict } from '../../../shared/rules/skin-test-rule';
-import { ALWAYS_TESTED, planNeedsSkinTest, testedFamilies } from '../../../shared/rules/skin-test-need';
-import { underAgeOnAny } from '../../../shared/rules/age-rule';
-import { AppError } from '../../lib/app-error';
+import type { Db } from '@server/db/database';
+import type { Salon } from '@shared/schemas/salon.schemas';
+import type { StepPlan } from '@shared/schemas/step-plan.schemas';
+import { checkStarts, skinTestVerdict, type SkinTestVerdict } from '@shared/rules/skin-test-rule';
+import { ALWAYS_TESTED, planNeedsSkinTest, testedFamilies } from '@shared/rules/skin-test-need';
+import { underAgeOnAny } from '@shared/rules/age-rule';
+import { AppError } from '@server/lib/app-error';
 import { clientAgeRecord, skinTestClearances, skinTestClearancesOf, skinTestRecords, skinTestRecordsOf } from './skin-tests.repository';
-import { formatDate, formatDateTime } from '../../../shared/format/date-time';
-import { formatFor } from '../../../shared/format/locale';
-import { localDateOf } from '../../../shared/time/salon-time';
+import { formatDate, formatDateTime } from '@shared/format/date-time';
+import { formatFor } from '@shared/format/locale';
+import { localDateOf } from '@shared/time/salon-time';
 
 type SalonRule = Pick<Salon, 'timeZone' | 'skinTestLeadHours' | 'skinTestValidityDays' | 'skinTestFamilies'>;
 

@@ -1,11 +1,11 @@
-import type { SessionUser } from '../../../shared/schemas/auth.schemas';
-import type { SkinTestClearance } from '../../../shared/schemas/skin-test.schemas';
-import type { Db } from '../../db/database';
-import { AppError } from '../../lib/app-error';
-import { clientIdFor } from '../../auth/client-access';
-import { writeAudit } from '../audit/audit.repository';
-import { userName } from '../session/users.repository';
-import { replanAfterSkinTestChange } from '../messages/plan-messages.service';
+import type { SessionUser } from '@shared/schemas/auth.schemas';
+import type { SkinTestClearance } from '@shared/schemas/skin-test.schemas';
+import type { Db } from '@server/db/database';
+import { AppError } from '@server/lib/app-error';
+import { clientIdFor } from '@server/auth/client-access';
+import { writeAudit } from '../audit';
+import { userName } from '../session';
+import { replanAfterSkinTestChange } from '../messages';
 import { insertClearance, listClearances, skinTestRecords } from './skin-tests.repository';
 
 /**

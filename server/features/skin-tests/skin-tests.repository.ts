@@ -1,7 +1,7 @@
 import { sql } from 'kysely';
-import type { Db } from '../../db/database';
-import type { SkinTestRecord } from '../../../shared/rules/skin-test-rule';
-import type { SkinTest, SkinTestClearance } from '../../../shared/schemas/skin-test.schemas';
+import type { Db } from '@server/db/database';
+import type { SkinTestRecord } from '@shared/rules/skin-test-rule';
+import type { SkinTest, SkinTestClearance } from '@shared/schemas/skin-test.schemas';
 
 // The names are the ones stored with the record (copied by trigger when it was written), so a removed
 // account's tests still say who recorded and read them.

@@ -1,6 +1,6 @@
-import { testRecordsApi } from '../../../shared/api/test-records.api';
-import type { AppDeps } from '../../app-deps';
-import { apiRoute } from '../../lib/api-route';
+import { testRecordsApi } from '@shared/api/test-records.api';
+import type { AppDeps } from '@server/app-deps';
+import { apiRoute } from '@server/lib/api-route';
 import { recordSkinTest, recordSkinTestReading, skinTestsOf } from './skin-tests.service';
 import { recordClearance } from './skin-test-clearances.service';
 

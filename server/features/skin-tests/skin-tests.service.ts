@@ -1,16 +1,16 @@
-import type { SessionUser } from '../../../shared/schemas/auth.schemas';
+import type { SessionUser } from '@shared/schemas/auth.schemas';
 import type { z } from 'zod';
-import { READ_BEFORE_APPLIED, type RecordSkinTestReading, type RecordSkinTestSchema, type SkinTest, type SkinTestClearance } from '../../../shared/schemas/skin-test.schemas';
-import type { Db } from '../../db/database';
-import { AppError, invalidField, notFound } from '../../lib/app-error';
-import { clientIdFor } from '../../auth/client-access';
-import { writeAudit } from '../audit/audit.repository';
-import { findSalon } from '../salon/salon.repository';
-import { storeTestRecord } from '../test-records/store-test-record.service';
+import { READ_BEFORE_APPLIED, type RecordSkinTestReading, type RecordSkinTestSchema, type SkinTest, type SkinTestClearance } from '@shared/schemas/skin-test.schemas';
+import type { Db } from '@server/db/database';
+import { AppError, invalidField, notFound } from '@server/lib/app-error';
+import { clientIdFor } from '@server/auth/client-access';
+import { writeAudit } from '../audit';
+import { findSalon } from '../salon';
+import { storeTestRecord } from '../test-records';
 import { findSkinTest, insertSkinTest, listClearances, listSkinTests, setSkinTestReading } from './skin-tests.repository';
-import { replanAfterSkinTestChange } from '../messages/plan-messages.service';
-import { formatDateTime } from '../../../shared/format/date-time';
-import { formatFor } from '../../../shared/format/locale';
+import { replanAfterSkinTestChange } from '../messages';
+import { formatDateTime } from '@shared/format/date-time';
+import { formatFor } from '@shared/format/locale';
 
 // The desk's clock may run a little ahead of the server's, and the form sends whole minutes.
 const CLOCK_SLACK_MS = 2 * 60_000;

@@ -1,6 +1,6 @@
-import type { Db } from '../../db/database';
-import type { CreateStandby, StandbyEntry } from '../../../shared/schemas/standby.schemas';
-import { AvailabilitySchema } from '../../../shared/schemas/standby.schemas';
+import type { Db } from '@server/db/database';
+import type { CreateStandby, StandbyEntry } from '@shared/schemas/standby.schemas';
+import { AvailabilitySchema } from '@shared/schemas/standby.schemas';
 
 export async function insertStandby(db: Db, salonId: string, entry: Required<CreateStandby>, createdBy: string): Promise<string> {
   const row = await db

@@ -1,6 +1,6 @@
-import { standbyApi } from '../../../shared/api/standby.api';
-import type { AppDeps } from '../../app-deps';
-import { apiRoute } from '../../lib/api-route';
+import { standbyApi } from '@shared/api/standby.api';
+import type { AppDeps } from '@server/app-deps';
+import { apiRoute } from '@server/lib/api-route';
 import { addStandby, removeStandby, standbyList } from './standby.service';
 
 export function registerStandbyRoutes({ table, db }: AppDeps): void {

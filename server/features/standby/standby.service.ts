@@ -1,11 +1,11 @@
-import type { Db } from '../../db/database';
-import type { SessionUser } from '../../../shared/schemas/auth.schemas';
-import type { CreateStandby, StandbyEntry } from '../../../shared/schemas/standby.schemas';
-import { AppError, notFound } from '../../lib/app-error';
-import { findClient } from '../clients/clients.repository';
-import { listServices } from '../services/services.repository';
-import { listStylists } from '../bookings/salon-resources.repository';
-import { writeAudit } from '../audit/audit.repository';
+import type { Db } from '@server/db/database';
+import type { SessionUser } from '@shared/schemas/auth.schemas';
+import type { CreateStandby, StandbyEntry } from '@shared/schemas/standby.schemas';
+import { AppError, notFound } from '@server/lib/app-error';
+import { findClient } from '../clients';
+import { listServices } from '../services';
+import { listStylists } from '../bookings';
+import { writeAudit } from '../audit';
 import { closeStandby, insertStandby, listStandby } from './standby.repository';
 
 /** The salon's open standby entries. */

@@ -1,5 +1,5 @@
-import type { Db } from '../../db/database';
-import type { RecordStrandTest, StrandTest } from '../../../shared/schemas/strand-test.schemas';
+import type { Db } from '@server/db/database';
+import type { RecordStrandTest, StrandTest } from '@shared/schemas/strand-test.schemas';
 
 // The recorder's name is the one stored with the record, so it outlives their account.
 const strandTests = (db: Db, salonId: string, clientId: string) =>

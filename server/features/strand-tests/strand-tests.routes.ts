@@ -1,6 +1,6 @@
-import { testRecordsApi } from '../../../shared/api/test-records.api';
-import type { AppDeps } from '../../app-deps';
-import { apiRoute } from '../../lib/api-route';
+import { testRecordsApi } from '@shared/api/test-records.api';
+import type { AppDeps } from '@server/app-deps';
+import { apiRoute } from '@server/lib/api-route';
 import { recordStrandTest, strandTestsOf } from './strand-tests.service';
 
 export function registerStrandTestRoutes({ table, db }: AppDeps): void {

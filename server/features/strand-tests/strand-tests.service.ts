@@ -1,11 +1,11 @@
-import type { SessionUser } from '../../../shared/schemas/auth.schemas';
-import type { RecordStrandTest, StrandTest } from '../../../shared/schemas/strand-test.schemas';
-import type { Db } from '../../db/database';
-import { invalidField } from '../../lib/app-error';
-import { clientIdFor } from '../../auth/client-access';
-import { clientPhotoIds } from '../consultations/consultations.repository';
-import { checkSalonStrength } from '../mix-logs/mix-logs.service';
-import { storeTestRecord } from '../test-records/store-test-record.service';
+import type { SessionUser } from '@shared/schemas/auth.schemas';
+import type { RecordStrandTest, StrandTest } from '@shared/schemas/strand-test.schemas';
+import type { Db } from '@server/db/database';
+import { invalidField } from '@server/lib/app-error';
+import { clientIdFor } from '@server/auth/client-access';
+import { clientPhotoIds } from '../consultations';
+import { checkSalonStrength } from '../mix-logs';
+import { storeTestRecord } from '../test-records';
 import { findStrandTest, insertStrandTest, listStrandTests } from './strand-tests.repository';
 
 export async function strandTestsOf(db: Db, user: SessionUser, clientId: string): Promise<{ tests: StrandTest[] }> {

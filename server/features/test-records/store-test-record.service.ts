@@ -1,6 +1,6 @@
-import type { SessionUser } from '../../../shared/schemas/auth.schemas';
-import type { Db } from '../../db/database';
-import { writeAudit } from '../audit/audit.repository';
+import type { SessionUser } from '@shared/schemas/auth.schemas';
+import type { Db } from '@server/db/database';
+import { writeAudit } from '../audit';
 
 export interface TestRecordWrite<T> {
   /** The audit log's name for the kind of record. */

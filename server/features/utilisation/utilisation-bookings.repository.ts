@@ -1,7 +1,7 @@
 import { sql } from 'kysely';
-import type { Db } from '../../db/database';
-import type { BookingStatus } from '../../../shared/schemas/common.schemas';
-import type { StepPlan } from '../../../shared/schemas/step-plan.schemas';
+import type { Db } from '@server/db/database';
+import type { BookingStatus } from '@shared/schemas/common.schemas';
+import type { StepPlan } from '@shared/schemas/step-plan.schemas';
 
 /** One sitting of a booking that has a sitting starting in the period (cancelled ones included, holds not). */
 export interface PeriodSitting {

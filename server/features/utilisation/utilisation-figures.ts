@@ -2,7 +2,7 @@
  * The booking figures of a period (money, deposits, attendance, corrections, services, per stylist and
  * per week), from the period's sittings. Pure: every definition is in docs/utilisation.md.
  */
-import type { StepPlan } from '../../../shared/schemas/step-plan.schemas';
+import type { StepPlan } from '@shared/schemas/step-plan.schemas';
 import type { PeriodSitting } from './utilisation-bookings.repository';
 
 /** Statuses whose time is (or will be) worked and paid for. */

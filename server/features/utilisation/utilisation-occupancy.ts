@@ -1,7 +1,7 @@
-import type { Db } from '../../db/database';
-import { MAX_HORIZON_DAYS, type HourCell, type OccupancyMinutes, type Scenario } from '../../../shared/engine/engine';
-import { AppError } from '../../lib/app-error';
-import { occupancyOver, occupancyScenario, planningSalon, type PlanningSalon } from '../planning/planning-port';
+import type { Db } from '@server/db/database';
+import { MAX_HORIZON_DAYS, type HourCell, type OccupancyMinutes, type Scenario } from '@shared/engine/engine';
+import { AppError } from '@server/lib/app-error';
+import { occupancyOver, occupancyScenario, planningSalon, type PlanningSalon } from '../planning';
 import { chunksOf, type Period } from './utilisation-period';
 
 export interface PeriodOccupancy {

@@ -1,6 +1,6 @@
 import { DateTime } from 'luxon';
-import { MAX_HORIZON_DAYS } from '../../../shared/engine/engine';
-import type { PeriodKind } from '../../../shared/schemas/utilisation.schemas';
+import { MAX_HORIZON_DAYS } from '@shared/engine/engine';
+import type { PeriodKind } from '@shared/schemas/utilisation.schemas';
 
 export interface Period {
   kind: PeriodKind;

@@ -1,6 +1,6 @@
-import { utilisationApi } from '../../../shared/api/utilisation.api';
-import type { AppDeps } from '../../app-deps';
-import { apiRoute } from '../../lib/api-route';
+import { utilisationApi } from '@shared/api/utilisation.api';
+import type { AppDeps } from '@server/app-deps';
+import { apiRoute } from '@server/lib/api-route';
 import { deskUtilisationFor, ownerUtilisationFor, utilisationScenarioFor } from './utilisation.service';
 
 export function registerUtilisationRoutes({ table, db }: AppDeps): void {

@@ -1,15 +1,15 @@
-import type { Db } from '../../db/database';
-import type { Salon } from '../../../shared/schemas/salon.schemas';
-import type { DeskUtilisation, OwnerUtilisation, UtilisationQuery } from '../../../shared/schemas/utilisation.schemas';
-import type { Scenario } from '../../../shared/engine/engine';
-import { todayIn } from '../bookings/day-view.service';
-import { findSalon } from '../salon/salon.repository';
-import { salonStaffNames } from '../setup/staff-setup.repository';
+import type { Db } from '@server/db/database';
+import type { Salon } from '@shared/schemas/salon.schemas';
+import type { DeskUtilisation, OwnerUtilisation, UtilisationQuery } from '@shared/schemas/utilisation.schemas';
+import type { Scenario } from '@shared/engine/engine';
+import { todayIn } from '../bookings';
+import { findSalon } from '../salon';
+import { salonStaffNames } from '../setup';
 import { cancelledAt, listPeriodSittings } from './utilisation-bookings.repository';
 import { bookingFigures } from './utilisation-figures';
 import { measurePeriod, periodScenario } from './utilisation-occupancy';
 import { chunksOf, resolvePeriod, type Period } from './utilisation-period';
-import { instantAt } from '../../../shared/time/salon-time';
+import { instantAt } from '@shared/time/salon-time';
 
 const ratio = (num: number, den: number): number | null => (den === 0 ? null : num / den);
 

@@ -1,10 +1,10 @@
 import type { Kysely } from 'kysely';
-import type { Database } from '../../db/schema';
-import type { Db } from '../../db/database';
-import type { Senders } from '../messages/send-message.job';
-import { planClientMessage, sendClientMessage, type ClientMessage } from '../messages/client-message.service';
-import { formatDateTime } from '../../../shared/format/date-time';
-import { formatFor } from '../../../shared/format/locale';
+import type { Database } from '@server/db/schema';
+import type { Db } from '@server/db/database';
+import type { Senders } from '../messages';
+import { planClientMessage, sendClientMessage, type ClientMessage } from '../messages';
+import { formatDateTime } from '@shared/format/date-time';
+import { formatFor } from '@shared/format/locale';
 
 export interface OfferMessage {
   offerId: string;

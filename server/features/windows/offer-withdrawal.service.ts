@@ -1,6 +1,6 @@
-import type { Db } from '../../db/database';
-import { findService } from '../services/services.repository';
-import { exactPlan, type PlanningSalon } from '../planning/planning-port';
+import type { Db } from '@server/db/database';
+import { findService } from '../services';
+import { exactPlan, type PlanningSalon } from '../planning';
 import { listOpenOffers, setOfferStatus } from './window-offers.repository';
 import { planOfferGone } from './offer-messages';
 

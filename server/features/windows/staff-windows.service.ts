@@ -1,10 +1,10 @@
 import type { z } from 'zod';
-import type { Db } from '../../db/database';
-import type { SessionUser } from '../../../shared/schemas/auth.schemas';
-import type { WindowListSchema, WindowsQuerySchema } from '../../../shared/schemas/window.schemas';
-import { findSalon } from '../salon/salon.repository';
-import { findStaffIdForUser } from '../bookings/salon-resources.repository';
-import { todayIn } from '../bookings/day-view.service';
+import type { Db } from '@server/db/database';
+import type { SessionUser } from '@shared/schemas/auth.schemas';
+import type { WindowListSchema, WindowsQuerySchema } from '@shared/schemas/window.schemas';
+import { findSalon } from '../salon';
+import { findStaffIdForUser } from '../bookings';
+import { todayIn } from '../bookings';
 import { listWindowViews } from './windows.service';
 
 /**

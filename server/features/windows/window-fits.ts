@@ -1,7 +1,7 @@
 import { DateTime } from 'luxon';
-import type { ServiceSummary } from '../../../shared/schemas/service.schemas';
-import type { StandbyEntry } from '../../../shared/schemas/standby.schemas';
-import { localClockOf } from '../../../shared/time/salon-time';
+import type { ServiceSummary } from '@shared/schemas/service.schemas';
+import type { StandbyEntry } from '@shared/schemas/standby.schemas';
+import { localClockOf } from '@shared/time/salon-time';
 
 /** Longest service offered as a window fit: a short one-sitting service (common practice: under about 90 minutes). */
 export const MAX_FIT_MINUTES = 90;

@@ -1,6 +1,6 @@
-import { offersApi, windowsApi } from '../../../shared/api/windows.api';
-import type { AppDeps } from '../../app-deps';
-import { apiRoute } from '../../lib/api-route';
+import { offersApi, windowsApi } from '@shared/api/windows.api';
+import type { AppDeps } from '@server/app-deps';
+import { apiRoute } from '@server/lib/api-route';
 import { windowsForStaff } from './staff-windows.service';
 import { fillWindow } from './fill-window.service';
 import { acceptOffer, offerWindow, viewOffer } from './window-offers.service';

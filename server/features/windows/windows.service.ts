@@ -1,13 +1,13 @@
-import type { Db } from '../../db/database';
-import type { Salon } from '../../../shared/schemas/salon.schemas';
-import type { HandsFreeWindowView, SentOffer } from '../../../shared/schemas/window.schemas';
-import { windowsOn } from '../planning/planning-port';
-import { listServices } from '../services/services.repository';
-import { listStandby } from '../standby/standby.repository';
+import type { Db } from '@server/db/database';
+import type { Salon } from '@shared/schemas/salon.schemas';
+import type { HandsFreeWindowView, SentOffer } from '@shared/schemas/window.schemas';
+import { windowsOn } from '../planning';
+import { listServices } from '../services';
+import { listStandby } from '../standby';
 import { standbyForWindow, windowFitServices } from './window-fits';
 import { listDayOffers } from './window-offers.repository';
-import { instantIso } from '../../../shared/time/salon-time';
-import { localDayBounds } from '../bookings/day-view.service';
+import { instantIso } from '@shared/time/salon-time';
+import { localDayBounds } from '../bookings';
 
 /**
  * The day's hands-free windows (one stylist or all) with what fits, who on standby wants it and the offers sent

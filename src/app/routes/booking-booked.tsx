@@ -1,9 +1,9 @@
 import { useSuspenseQuery } from '@tanstack/react-query';
 import { useParams } from 'react-router-dom';
-import { bookingQueries } from '../../features/bookings/api/booking-queries';
-import { BookedPage } from '../../features/online-booking/components/booked-page';
-import { salonQueries } from '../../features/salon/api/salon-queries';
-import { queryClient } from '../../lib/query-client';
+import { bookingQueries } from '@client/features/bookings/api/booking-queries';
+import { BookedPage } from '@client/features/online-booking/components/booked-page';
+import { salonQueries } from '@client/features/salon/api/salon-queries';
+import { queryClient } from '@client/lib/query-client';
 import { NotFoundMessage } from '../not-found-message';
 
 /** The booking was just made, so the cached list is stale by definition: always read it fresh. */

@@ -1,7 +1,7 @@
-import { PageHeader } from '../../components/ui/page-header';
-import { HairHistoryForm } from '../../features/hair-history/components/hair-history-form';
-import { PhotoUploader } from '../../features/photos/components/photo-uploader';
-import { SectionCard } from '../../components/ui/section-card';
+import { PageHeader } from '@client/components/ui/page-header';
+import { HairHistoryForm } from '@client/features/hair-history/components/hair-history-form';
+import { PhotoUploader } from '@client/features/photos/components/photo-uploader';
+import { SectionCard } from '@client/components/ui/section-card';
 
 /** The client's own hair history and photos, outside any booking. */
 export function Component() {

@@ -1,22 +1,22 @@
 import { useSuspenseQuery } from '@tanstack/react-query';
 import { Link } from 'react-router-dom';
-import { paths } from '../../config/paths';
-import { PageHeader } from '../../components/ui/page-header';
-import { TimeZoneNote } from '../../components/ui/time-zone-note';
-import { bookingQueries } from '../../features/bookings/api/booking-queries';
-import { BookingList } from '../../features/bookings/components/booking-list';
-import { MyBookingActions } from '../../features/bookings/components/my-bookings/my-booking-actions';
-import { salonQueries } from '../../features/salon/api/salon-queries';
-import { MyQuotes } from '../../features/consultations/components/my-quotes';
-import { SalonCard } from '../../features/salon/components/salon-card';
-import { queryClient } from '../../lib/query-client';
-import { SectionCard } from '../../components/ui/section-card';
-import { preferenceQueries } from '../../features/clients/api/preference-queries';
-import { MyPreferencesForm } from '../../features/clients/components/my-preferences-form';
-import { DateOfBirthForm } from '../../features/clients/components/date-of-birth-form';
-import { skinTestWords } from '../../../shared/rules/skin-test-words';
-import { onlineBookingQueries } from '../../features/online-booking/api/online-booking-queries';
-import { WaitingForPayment } from '../../features/online-booking/components/waiting-for-payment';
+import { paths } from '@client/config/paths';
+import { PageHeader } from '@client/components/ui/page-header';
+import { TimeZoneNote } from '@client/components/ui/time-zone-note';
+import { bookingQueries } from '@client/features/bookings/api/booking-queries';
+import { BookingList } from '@client/features/bookings/components/booking-list';
+import { MyBookingActions } from '@client/features/bookings/components/my-bookings/my-booking-actions';
+import { salonQueries } from '@client/features/salon/api/salon-queries';
+import { MyQuotes } from '@client/features/consultations/components/my-quotes';
+import { SalonCard } from '@client/features/salon/components/salon-card';
+import { queryClient } from '@client/lib/query-client';
+import { SectionCard } from '@client/components/ui/section-card';
+import { preferenceQueries } from '@client/features/clients/api/preference-queries';
+import { MyPreferencesForm } from '@client/features/clients/components/my-preferences-form';
+import { DateOfBirthForm } from '@client/features/clients/components/date-of-birth-form';
+import { skinTestWords } from '@shared/rules/skin-test-words';
+import { onlineBookingQueries } from '@client/features/online-booking/api/online-booking-queries';
+import { WaitingForPayment } from '@client/features/online-booking/components/waiting-for-payment';
 
 export async function loader() {
   await Promise.all([

@@ -1,13 +1,13 @@
 import { useQuery, useSuspenseQuery } from '@tanstack/react-query';
 import { useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
-import { IdSchema } from '../../../shared/schemas/common.schemas';
-import { BookServicePage } from '../../features/bookings/components/book-service/book-service-page';
-import { catalogueQueries } from '../../features/catalogue/api/catalogue-queries';
-import { consultationQueries } from '../../features/consultations/api/consultation-queries';
-import { salonQueries } from '../../features/salon/api/salon-queries';
-import { queryClient } from '../../lib/query-client';
-import { todayIn } from '../../lib/time';
-import { formatMoney } from '../../../shared/money/money';
+import { IdSchema } from '@shared/schemas/common.schemas';
+import { BookServicePage } from '@client/features/bookings/components/book-service/book-service-page';
+import { catalogueQueries } from '@client/features/catalogue/api/catalogue-queries';
+import { consultationQueries } from '@client/features/consultations/api/consultation-queries';
+import { salonQueries } from '@client/features/salon/api/salon-queries';
+import { queryClient } from '@client/lib/query-client';
+import { todayIn } from '@client/lib/time';
+import { formatMoney } from '@shared/money/money';
 
 /** `?consultation=<id>` books that consultation's saved quote. */
 const consultationParam = (search: URLSearchParams) => {

@@ -1,20 +1,20 @@
 import { useSuspenseQuery } from '@tanstack/react-query';
 import { Link, useParams, type LoaderFunctionArgs } from 'react-router-dom';
-import { IdSchema } from '../../../shared/schemas/common.schemas';
-import { PageHeader } from '../../components/ui/page-header';
-import { TimeZoneNote } from '../../components/ui/time-zone-note';
-import { paths } from '../../config/paths';
-import { BookingHistory } from '../../features/bookings/components/desk-booking/booking-history';
-import { BookingSummary } from '../../features/bookings/components/desk-booking/booking-summary';
-import { CancelBookingForm } from '../../features/bookings/components/desk-booking/cancel-booking-form';
-import { MoveSittingForm } from '../../features/bookings/components/desk-booking/move-sitting-form';
-import { ChangePlanForm } from '../../features/bookings/components/desk-booking/change-plan-form';
-import { bookingQueries } from '../../features/bookings/api/booking-queries';
-import { catalogueQueries } from '../../features/catalogue/api/catalogue-queries';
-import { MixLogSection } from '../../features/mix-log/components/mix-log-section';
-import { salonQueries } from '../../features/salon/api/salon-queries';
-import { localDateOf } from '../../../shared/time/salon-time';
-import { queryClient } from '../../lib/query-client';
+import { IdSchema } from '@shared/schemas/common.schemas';
+import { PageHeader } from '@client/components/ui/page-header';
+import { TimeZoneNote } from '@client/components/ui/time-zone-note';
+import { paths } from '@client/config/paths';
+import { BookingHistory } from '@client/features/bookings/components/desk-booking/booking-history';
+import { BookingSummary } from '@client/features/bookings/components/desk-booking/booking-summary';
+import { CancelBookingForm } from '@client/features/bookings/components/desk-booking/cancel-booking-form';
+import { MoveSittingForm } from '@client/features/bookings/components/desk-booking/move-sitting-form';
+import { ChangePlanForm } from '@client/features/bookings/components/desk-booking/change-plan-form';
+import { bookingQueries } from '@client/features/bookings/api/booking-queries';
+import { catalogueQueries } from '@client/features/catalogue/api/catalogue-queries';
+import { MixLogSection } from '@client/features/mix-log/components/mix-log-section';
+import { salonQueries } from '@client/features/salon/api/salon-queries';
+import { localDateOf } from '@shared/time/salon-time';
+import { queryClient } from '@client/lib/query-client';
 
 export async function loader({ params }: LoaderFunctionArgs) {
   if (!IdSchema.safeParse(params.id).success) throw new Response(null, { status: 404 });

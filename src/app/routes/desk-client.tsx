@@ -1,21 +1,21 @@
 import { useSuspenseQuery } from '@tanstack/react-query';
 import { Link, useParams, type LoaderFunctionArgs } from 'react-router-dom';
-import { IdSchema } from '../../../shared/schemas/common.schemas';
-import { PageHeader } from '../../components/ui/page-header';
-import { Notice } from '../../components/ui/notice';
-import { REACTION_CAUTION } from '../../../shared/schemas/hair-history.schemas';
-import { TimeZoneNote } from '../../components/ui/time-zone-note';
-import { paths } from '../../config/paths';
-import { SectionCard } from '../../components/ui/section-card';
-import { ClientConsultations } from '../../features/consultations/components/client-consultations';
-import { SkinTestsPanel } from '../../features/test-records/components/skin-tests-panel';
-import { StrandTestsPanel } from '../../features/test-records/components/strand-tests-panel';
-import { BookingList } from '../../features/bookings/components/booking-list';
-import { clientQueries } from '../../features/clients/api/client-queries';
-import { ClientProfile } from '../../features/clients/components/client-profile';
-import { GuardianConsentPanel } from '../../features/clients/components/guardian-consent-panel';
-import { salonQueries } from '../../features/salon/api/salon-queries';
-import { queryClient } from '../../lib/query-client';
+import { IdSchema } from '@shared/schemas/common.schemas';
+import { PageHeader } from '@client/components/ui/page-header';
+import { Notice } from '@client/components/ui/notice';
+import { REACTION_CAUTION } from '@shared/schemas/hair-history.schemas';
+import { TimeZoneNote } from '@client/components/ui/time-zone-note';
+import { paths } from '@client/config/paths';
+import { SectionCard } from '@client/components/ui/section-card';
+import { ClientConsultations } from '@client/features/consultations/components/client-consultations';
+import { SkinTestsPanel } from '@client/features/test-records/components/skin-tests-panel';
+import { StrandTestsPanel } from '@client/features/test-records/components/strand-tests-panel';
+import { BookingList } from '@client/features/bookings/components/booking-list';
+import { clientQueries } from '@client/features/clients/api/client-queries';
+import { ClientProfile } from '@client/features/clients/components/client-profile';
+import { GuardianConsentPanel } from '@client/features/clients/components/guardian-consent-panel';
+import { salonQueries } from '@client/features/salon/api/salon-queries';
+import { queryClient } from '@client/lib/query-client';
 
 export async function loader({ params }: LoaderFunctionArgs) {
   // A malformed id can't name a client: show "not found" without asking the server.

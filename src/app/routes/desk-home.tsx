@@ -1,14 +1,14 @@
 import { useQuery, useSuspenseQuery } from '@tanstack/react-query';
 import { useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
-import { SectionCard } from '../../components/ui/section-card';
-import { paths } from '../../config/paths';
-import { ClientSearch } from '../../features/clients/components/client-search';
-import { dayQueries } from '../../features/day-book/api/day-queries';
-import { DayBookView } from '../../features/day-book/components/day-book-view';
-import { windowQueries } from '../../features/windows/api/window-queries';
-import { formatDate } from '../../../shared/format/date-time';
-import { zonelessFormat } from '../../../shared/format/locale';
-import { queryClient } from '../../lib/query-client';
+import { SectionCard } from '@client/components/ui/section-card';
+import { paths } from '@client/config/paths';
+import { ClientSearch } from '@client/features/clients/components/client-search';
+import { dayQueries } from '@client/features/day-book/api/day-queries';
+import { DayBookView } from '@client/features/day-book/components/day-book-view';
+import { windowQueries } from '@client/features/windows/api/window-queries';
+import { formatDate } from '@shared/format/date-time';
+import { zonelessFormat } from '@shared/format/locale';
+import { queryClient } from '@client/lib/query-client';
 import { dateParam, dateParamOf } from '../date-param';
 
 export async function loader({ request }: LoaderFunctionArgs) {

@@ -1,12 +1,12 @@
 import { useSuspenseQuery } from '@tanstack/react-query';
-import { PageHeader } from '../../components/ui/page-header';
-import { SectionCard } from '../../components/ui/section-card';
-import { catalogueQueries } from '../../features/catalogue/api/catalogue-queries';
-import { salonQueries } from '../../features/salon/api/salon-queries';
-import { standbyQueries } from '../../features/standby/api/standby-queries';
-import { StandbyForm } from '../../features/standby/components/standby-form';
-import { StandbyTable } from '../../features/standby/components/standby-table';
-import { queryClient } from '../../lib/query-client';
+import { PageHeader } from '@client/components/ui/page-header';
+import { SectionCard } from '@client/components/ui/section-card';
+import { catalogueQueries } from '@client/features/catalogue/api/catalogue-queries';
+import { salonQueries } from '@client/features/salon/api/salon-queries';
+import { standbyQueries } from '@client/features/standby/api/standby-queries';
+import { StandbyForm } from '@client/features/standby/components/standby-form';
+import { StandbyTable } from '@client/features/standby/components/standby-table';
+import { queryClient } from '@client/lib/query-client';
 
 export async function loader() {
   await Promise.all([

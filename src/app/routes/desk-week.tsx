@@ -1,10 +1,10 @@
 import { useSuspenseQuery } from '@tanstack/react-query';
 import { useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
-import { IdSchema } from '../../../shared/schemas/common.schemas';
-import { catalogueQueries } from '../../features/catalogue/api/catalogue-queries';
-import { weekQueries } from '../../features/week/api/week-queries';
-import { WeekPage } from '../../features/week/components/week-page';
-import { queryClient } from '../../lib/query-client';
+import { IdSchema } from '@shared/schemas/common.schemas';
+import { catalogueQueries } from '@client/features/catalogue/api/catalogue-queries';
+import { weekQueries } from '@client/features/week/api/week-queries';
+import { WeekPage } from '@client/features/week/components/week-page';
+import { queryClient } from '@client/lib/query-client';
 import { dateParam } from '../date-param';
 
 /** The `?stylist=` of the week page, or undefined for all stylists together. */

@@ -1,7 +1,7 @@
 import { Link } from 'react-router-dom';
-import { paths } from '../../config/paths';
-import { AuthPanel } from '../../features/auth/components/auth-panel';
-import { ForgotPasswordForm } from '../../features/auth/components/forgot-password-form';
+import { paths } from '@client/config/paths';
+import { AuthPanel } from '@client/features/auth/components/auth-panel';
+import { ForgotPasswordForm } from '@client/features/auth/components/forgot-password-form';
 
 export function Component() {
   return (

@@ -1,8 +1,8 @@
 import { useQuery } from '@tanstack/react-query';
 import { useParams } from 'react-router-dom';
-import { LoadingState } from '../../components/ui/loading-state';
-import { offerQueries } from '../../features/offers/api/offer-queries';
-import { OfferView } from '../../features/offers/components/offer-view';
+import { LoadingState } from '@client/components/ui/loading-state';
+import { offerQueries } from '@client/features/offers/api/offer-queries';
+import { OfferView } from '@client/features/offers/components/offer-view';
 
 /** Public: the link in an offer SMS or e-mail. No sign-in; the token is the key. */
 export function Component() {

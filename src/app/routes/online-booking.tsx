@@ -1,10 +1,10 @@
 import { useQuery, useSuspenseQuery } from '@tanstack/react-query';
 import { Link, useLocation, useParams, useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
-import { paths } from '../../config/paths';
-import { sessionQueries } from '../../features/auth/api/session-queries';
-import { BookingFlowPage } from '../../features/online-booking/components/booking-flow-page';
-import { publicSalonQueries } from '../../features/public-salon/api/public-salon-queries';
-import { queryClient } from '../../lib/query-client';
+import { paths } from '@client/config/paths';
+import { sessionQueries } from '@client/features/auth/api/session-queries';
+import { BookingFlowPage } from '@client/features/online-booking/components/booking-flow-page';
+import { publicSalonQueries } from '@client/features/public-salon/api/public-salon-queries';
+import { queryClient } from '@client/lib/query-client';
 import { currentUser } from '../require-role';
 
 /** Public until the client must sign in (mid-flow); then sign-in brings them back here with `next`. */

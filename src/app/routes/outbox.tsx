@@ -1,17 +1,17 @@
 import { useQuery, useSuspenseQuery } from '@tanstack/react-query';
-import { Button } from '../../components/ui/button';
-import { LoadingState } from '../../components/ui/loading-state';
-import { PageHeader } from '../../components/ui/page-header';
-import { SectionCard } from '../../components/ui/section-card';
-import { mailboxQueries } from '../../features/outbox/api/mailbox-queries';
-import { smsQueries } from '../../features/outbox/api/sms-queries';
-import { MailList } from '../../features/outbox/components/mail-list';
-import { SmsList } from '../../features/outbox/components/sms-list';
-import { sentMessagesQueries } from '../../features/outbox/api/sent-messages-queries';
-import { SentMessagesTable } from '../../features/outbox/components/sent-messages-table';
-import { InboundSmsForm } from '../../features/outbox/components/inbound-sms-form';
-import { salonQueries } from '../../features/salon/api/salon-queries';
-import { queryClient } from '../../lib/query-client';
+import { Button } from '@client/components/ui/button';
+import { LoadingState } from '@client/components/ui/loading-state';
+import { PageHeader } from '@client/components/ui/page-header';
+import { SectionCard } from '@client/components/ui/section-card';
+import { mailboxQueries } from '@client/features/outbox/api/mailbox-queries';
+import { smsQueries } from '@client/features/outbox/api/sms-queries';
+import { MailList } from '@client/features/outbox/components/mail-list';
+import { SmsList } from '@client/features/outbox/components/sms-list';
+import { sentMessagesQueries } from '@client/features/outbox/api/sent-messages-queries';
+import { SentMessagesTable } from '@client/features/outbox/components/sent-messages-table';
+import { InboundSmsForm } from '@client/features/outbox/components/inbound-sms-form';
+import { salonQueries } from '@client/features/salon/api/salon-queries';
+import { queryClient } from '@client/lib/query-client';
 
 export async function loader() {
   await Promise.all([

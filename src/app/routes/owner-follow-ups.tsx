@@ -1,14 +1,14 @@
 import { useState } from 'react';
 import { useSuspenseQuery } from '@tanstack/react-query';
-import { Button } from '../../components/ui/button';
-import { PageHeader } from '../../components/ui/page-header';
-import { SetupNav } from '../../features/setup/components/setup-nav';
-import { SectionCard } from '../../components/ui/section-card';
-import { catalogueQueries } from '../../features/catalogue/api/catalogue-queries';
-import { followUpQueries, useRemoveFollowUpRule } from '../../features/follow-ups/api/follow-up-queries';
-import { FollowUpRuleForm } from '../../features/follow-ups/components/follow-up-rule-form';
-import { salonQueries } from '../../features/salon/api/salon-queries';
-import { queryClient } from '../../lib/query-client';
+import { Button } from '@client/components/ui/button';
+import { PageHeader } from '@client/components/ui/page-header';
+import { SetupNav } from '@client/features/setup/components/setup-nav';
+import { SectionCard } from '@client/components/ui/section-card';
+import { catalogueQueries } from '@client/features/catalogue/api/catalogue-queries';
+import { followUpQueries, useRemoveFollowUpRule } from '@client/features/follow-ups/api/follow-up-queries';
+import { FollowUpRuleForm } from '@client/features/follow-ups/components/follow-up-rule-form';
+import { salonQueries } from '@client/features/salon/api/salon-queries';
+import { queryClient } from '@client/lib/query-client';
 
 export async function loader() {
   await Promise.all([

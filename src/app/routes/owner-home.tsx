@@ -1,12 +1,12 @@
 import { useSuspenseQuery } from '@tanstack/react-query';
 import { Link } from 'react-router-dom';
-import { PageHeader } from '../../components/ui/page-header';
-import { paths } from '../../config/paths';
-import { HandsOnShareTable } from '../../features/owner/components/hands-on-share-table';
-import { SalonCounts } from '../../features/owner/components/salon-counts';
-import { WeekUsage } from '../../features/owner/components/week-usage';
-import { ownerQueries } from '../../features/owner/api/owner-queries';
-import { queryClient } from '../../lib/query-client';
+import { PageHeader } from '@client/components/ui/page-header';
+import { paths } from '@client/config/paths';
+import { HandsOnShareTable } from '@client/features/owner/components/hands-on-share-table';
+import { SalonCounts } from '@client/features/owner/components/salon-counts';
+import { WeekUsage } from '@client/features/owner/components/week-usage';
+import { ownerQueries } from '@client/features/owner/api/owner-queries';
+import { queryClient } from '@client/lib/query-client';
 
 export async function loader() {
   await queryClient.ensureQueryData(ownerQueries.overview());

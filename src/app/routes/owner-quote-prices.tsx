@@ -1,11 +1,11 @@
 import { useSuspenseQuery } from '@tanstack/react-query';
-import { PageHeader } from '../../components/ui/page-header';
-import { SectionCard } from '../../components/ui/section-card';
-import { SetupNav } from '../../features/setup/components/setup-nav';
-import { quotePriceQueries } from '../../features/quote-prices/api/quote-price-queries';
-import { QuotePricesForm } from '../../features/quote-prices/components/quote-prices-form';
-import { queryClient } from '../../lib/query-client';
-import { salonQueries } from '../../features/salon/api/salon-queries';
+import { PageHeader } from '@client/components/ui/page-header';
+import { SectionCard } from '@client/components/ui/section-card';
+import { SetupNav } from '@client/features/setup/components/setup-nav';
+import { quotePriceQueries } from '@client/features/quote-prices/api/quote-price-queries';
+import { QuotePricesForm } from '@client/features/quote-prices/components/quote-prices-form';
+import { queryClient } from '@client/lib/query-client';
+import { salonQueries } from '@client/features/salon/api/salon-queries';
 
 export async function loader() {
   await Promise.all([queryClient.ensureQueryData(quotePriceQueries.current()), queryClient.ensureQueryData(salonQueries.current())]);

@@ -1,9 +1,9 @@
 import { useSuspenseQuery } from '@tanstack/react-query';
-import { PageHeader } from '../../components/ui/page-header';
-import { setupQueries } from '../../features/setup/api/setup-queries';
-import { SalonSettingsForm } from '../../features/setup/components/salon-settings-form';
-import { SetupNav } from '../../features/setup/components/setup-nav';
-import { queryClient } from '../../lib/query-client';
+import { PageHeader } from '@client/components/ui/page-header';
+import { setupQueries } from '@client/features/setup/api/setup-queries';
+import { SalonSettingsForm } from '@client/features/setup/components/salon-settings-form';
+import { SetupNav } from '@client/features/setup/components/setup-nav';
+import { queryClient } from '@client/lib/query-client';
 
 export async function loader() {
   await queryClient.ensureQueryData(setupQueries.salon());

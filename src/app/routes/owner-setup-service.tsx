@@ -1,13 +1,13 @@
 import { useSuspenseQuery } from '@tanstack/react-query';
 import { useParams } from 'react-router-dom';
-import type { ServiceFormInput, SetupService } from '../../../shared/schemas/setup.schemas';
-import { PageHeader } from '../../components/ui/page-header';
-import { salonQueries } from '../../features/salon/api/salon-queries';
-import { setupQueries } from '../../features/setup/api/setup-queries';
-import { ServiceForm } from '../../features/setup/components/service-form';
-import { SetupNav } from '../../features/setup/components/setup-nav';
-import { queryClient } from '../../lib/query-client';
-import { stepOfKind } from '../../features/bookings/step-plan-form';
+import type { ServiceFormInput, SetupService } from '@shared/schemas/setup.schemas';
+import { PageHeader } from '@client/components/ui/page-header';
+import { salonQueries } from '@client/features/salon/api/salon-queries';
+import { setupQueries } from '@client/features/setup/api/setup-queries';
+import { ServiceForm } from '@client/features/setup/components/service-form';
+import { SetupNav } from '@client/features/setup/components/setup-nav';
+import { queryClient } from '@client/lib/query-client';
+import { stepOfKind } from '@client/features/bookings/step-plan-form';
 
 export async function loader() {
   await Promise.all([queryClient.ensureQueryData(setupQueries.services()), queryClient.ensureQueryData(salonQueries.current())]);

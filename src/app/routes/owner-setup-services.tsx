@@ -1,13 +1,13 @@
 import { useSuspenseQuery } from '@tanstack/react-query';
 import { Link } from 'react-router-dom';
-import { buttonClasses } from '../../components/ui/button';
-import { PageHeader } from '../../components/ui/page-header';
-import { paths } from '../../config/paths';
-import { salonQueries } from '../../features/salon/api/salon-queries';
-import { setupQueries } from '../../features/setup/api/setup-queries';
-import { ServicesTable } from '../../features/setup/components/services-table';
-import { SetupNav } from '../../features/setup/components/setup-nav';
-import { queryClient } from '../../lib/query-client';
+import { buttonClasses } from '@client/components/ui/button';
+import { PageHeader } from '@client/components/ui/page-header';
+import { paths } from '@client/config/paths';
+import { salonQueries } from '@client/features/salon/api/salon-queries';
+import { setupQueries } from '@client/features/setup/api/setup-queries';
+import { ServicesTable } from '@client/features/setup/components/services-table';
+import { SetupNav } from '@client/features/setup/components/setup-nav';
+import { queryClient } from '@client/lib/query-client';
 
 export async function loader() {
   await Promise.all([queryClient.ensureQueryData(setupQueries.services()), queryClient.ensureQueryData(salonQueries.current())]);

@@ -1,16 +1,16 @@
 import { useSuspenseQuery } from '@tanstack/react-query';
 import { useState } from 'react';
-import { FormAlert } from '../../components/ui/form-alert';
-import { PageHeader } from '../../components/ui/page-header';
-import { SectionCard } from '../../components/ui/section-card';
-import { salonQueries } from '../../features/salon/api/salon-queries';
-import { setupQueries } from '../../features/setup/api/setup-queries';
-import { SetupNav } from '../../features/setup/components/setup-nav';
-import { StaffForm } from '../../features/setup/components/staff-form';
-import { StaffLeavingPanel } from '../../features/setup/components/staff-leaving-panel';
-import { StaffTable } from '../../features/setup/components/staff-table';
-import { TimeOffPanel } from '../../features/setup/components/time-off-panel';
-import { queryClient } from '../../lib/query-client';
+import { FormAlert } from '@client/components/ui/form-alert';
+import { PageHeader } from '@client/components/ui/page-header';
+import { SectionCard } from '@client/components/ui/section-card';
+import { salonQueries } from '@client/features/salon/api/salon-queries';
+import { setupQueries } from '@client/features/setup/api/setup-queries';
+import { SetupNav } from '@client/features/setup/components/setup-nav';
+import { StaffForm } from '@client/features/setup/components/staff-form';
+import { StaffLeavingPanel } from '@client/features/setup/components/staff-leaving-panel';
+import { StaffTable } from '@client/features/setup/components/staff-table';
+import { TimeOffPanel } from '@client/features/setup/components/time-off-panel';
+import { queryClient } from '@client/lib/query-client';
 
 export async function loader() {
   await Promise.all([queryClient.ensureQueryData(setupQueries.staff()), queryClient.ensureQueryData(setupQueries.services()), queryClient.ensureQueryData(salonQueries.current())]);

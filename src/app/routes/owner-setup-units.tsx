@@ -1,11 +1,11 @@
 import { useSuspenseQuery } from '@tanstack/react-query';
-import { PageHeader } from '../../components/ui/page-header';
-import { SectionCard } from '../../components/ui/section-card';
-import { salonQueries } from '../../features/salon/api/salon-queries';
-import { setupQueries } from '../../features/setup/api/setup-queries';
-import { SetupNav } from '../../features/setup/components/setup-nav';
-import { UnitsPanel } from '../../features/setup/components/units-panel';
-import { queryClient } from '../../lib/query-client';
+import { PageHeader } from '@client/components/ui/page-header';
+import { SectionCard } from '@client/components/ui/section-card';
+import { salonQueries } from '@client/features/salon/api/salon-queries';
+import { setupQueries } from '@client/features/setup/api/setup-queries';
+import { SetupNav } from '@client/features/setup/components/setup-nav';
+import { UnitsPanel } from '@client/features/setup/components/units-panel';
+import { queryClient } from '@client/lib/query-client';
 
 export async function loader() {
   await Promise.all([queryClient.ensureQueryData(setupQueries.units()), queryClient.ensureQueryData(salonQueries.current())]);

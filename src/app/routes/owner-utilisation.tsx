@@ -1,7 +1,7 @@
 import type { LoaderFunctionArgs } from 'react-router-dom';
-import { queryFromSearch, utilisationQueries } from '../../features/utilisation/api/utilisation-queries';
-import { OwnerUtilisationView } from '../../features/utilisation/components/utilisation-page';
-import { queryClient } from '../../lib/query-client';
+import { queryFromSearch, utilisationQueries } from '@client/features/utilisation/api/utilisation-queries';
+import { OwnerUtilisationView } from '@client/features/utilisation/components/utilisation-page';
+import { queryClient } from '@client/lib/query-client';
 
 export async function loader({ request }: LoaderFunctionArgs) {
   await queryClient.ensureQueryData(utilisationQueries.owner(queryFromSearch(new URL(request.url).searchParams)));

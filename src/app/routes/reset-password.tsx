@@ -1,9 +1,9 @@
 import { useState } from 'react';
 import { Link, useSearchParams } from 'react-router-dom';
-import { paths } from '../../config/paths';
-import { FormAlert } from '../../components/ui/form-alert';
-import { AuthPanel } from '../../features/auth/components/auth-panel';
-import { ResetPasswordForm } from '../../features/auth/components/reset-password-form';
+import { paths } from '@client/config/paths';
+import { FormAlert } from '@client/components/ui/form-alert';
+import { AuthPanel } from '@client/features/auth/components/auth-panel';
+import { ResetPasswordForm } from '@client/features/auth/components/reset-password-form';
 
 export function Component() {
   const [params] = useSearchParams();

@@ -1,8 +1,8 @@
 import { Link, redirect, useNavigate, useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
-import { demoSalonSlug, homeFor, paths, safeNext } from '../../config/paths';
-import { AuthPanel } from '../../features/auth/components/auth-panel';
-import { SignInForm } from '../../features/auth/components/sign-in-form';
-import { DemoSalonLink } from '../../features/public-salon/components/demo-salon-link';
+import { demoSalonSlug, homeFor, paths, safeNext } from '@client/config/paths';
+import { AuthPanel } from '@client/features/auth/components/auth-panel';
+import { SignInForm } from '@client/features/auth/components/sign-in-form';
+import { DemoSalonLink } from '@client/features/public-salon/components/demo-salon-link';
 import { currentUser } from '../require-role';
 
 /** Someone already signed in goes straight on. */

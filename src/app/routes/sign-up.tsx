@@ -1,7 +1,7 @@
 import { Link, useNavigate, useSearchParams } from 'react-router-dom';
-import { homeFor, paths, safeNext, salonSlugOf } from '../../config/paths';
-import { AuthPanel } from '../../features/auth/components/auth-panel';
-import { SignUpForm } from '../../features/auth/components/sign-up-form';
+import { homeFor, paths, safeNext, salonSlugOf } from '@client/config/paths';
+import { AuthPanel } from '@client/features/auth/components/auth-panel';
+import { SignUpForm } from '@client/features/auth/components/sign-up-form';
 
 export function Component() {
   const navigate = useNavigate();

@@ -1,17 +1,17 @@
 import { useQuery, useSuspenseQuery } from '@tanstack/react-query';
 import { useMemo } from 'react';
 import { useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
-import { SectionCard } from '../../components/ui/section-card';
-import { paths } from '../../config/paths';
-import { sessionQueries } from '../../features/auth/api/session-queries';
-import { dayQueries } from '../../features/day-book/api/day-queries';
-import { DayBookView } from '../../features/day-book/components/day-book-view';
-import { DayStepsList } from '../../features/day-book/components/day-steps-list';
-import { ownDay } from '../../features/day-book/own-day';
-import { MyClients } from '../../features/my-day/components/my-clients';
-import { windowQueries } from '../../features/windows/api/window-queries';
-import { WindowList } from '../../features/windows/components/window-list';
-import { queryClient } from '../../lib/query-client';
+import { SectionCard } from '@client/components/ui/section-card';
+import { paths } from '@client/config/paths';
+import { sessionQueries } from '@client/features/auth/api/session-queries';
+import { dayQueries } from '@client/features/day-book/api/day-queries';
+import { DayBookView } from '@client/features/day-book/components/day-book-view';
+import { DayStepsList } from '@client/features/day-book/components/day-steps-list';
+import { ownDay } from '@client/features/day-book/own-day';
+import { MyClients } from '@client/features/my-day/components/my-clients';
+import { windowQueries } from '@client/features/windows/api/window-queries';
+import { WindowList } from '@client/features/windows/components/window-list';
+import { queryClient } from '@client/lib/query-client';
 import { dateParam, dateParamOf } from '../date-param';
 
 export async function loader({ request }: LoaderFunctionArgs) {

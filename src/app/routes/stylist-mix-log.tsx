@@ -1,13 +1,13 @@
 import { useSuspenseQuery } from '@tanstack/react-query';
 import { Link, useParams, useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
-import { IdSchema } from '../../../shared/schemas/common.schemas';
-import { PageHeader } from '../../components/ui/page-header';
-import { TimeZoneNote } from '../../components/ui/time-zone-note';
-import { paths } from '../../config/paths';
-import { mixLogQueries } from '../../features/mix-log/api/mix-log-queries';
-import { MixLogSection } from '../../features/mix-log/components/mix-log-section';
-import { salonQueries } from '../../features/salon/api/salon-queries';
-import { queryClient } from '../../lib/query-client';
+import { IdSchema } from '@shared/schemas/common.schemas';
+import { PageHeader } from '@client/components/ui/page-header';
+import { TimeZoneNote } from '@client/components/ui/time-zone-note';
+import { paths } from '@client/config/paths';
+import { mixLogQueries } from '@client/features/mix-log/api/mix-log-queries';
+import { MixLogSection } from '@client/features/mix-log/components/mix-log-section';
+import { salonQueries } from '@client/features/salon/api/salon-queries';
+import { queryClient } from '@client/lib/query-client';
 
 export async function loader({ params }: LoaderFunctionArgs) {
   if (!IdSchema.safeParse(params.id).success) throw new Response(null, { status: 404 });

@@ -1,5 +1,5 @@
-import type { BookingStatus } from '../../../shared/schemas/common.schemas';
-import { bookingStatusLabels } from '../../lib/booking-labels';
+import type { BookingStatus } from '@shared/schemas/common.schemas';
+import { bookingStatusLabels } from '@client/lib/booking-labels';
 
 // Text carries the meaning; the border only adds emphasis.
 const looks: Record<BookingStatus, string> = {

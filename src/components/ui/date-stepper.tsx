@@ -1,7 +1,7 @@
 import { Link } from 'react-router-dom';
-import { formatDate } from '../../../shared/format/date-time';
-import { zonelessFormat } from '../../../shared/format/locale';
-import { shiftLocalDate } from '../../../shared/time/salon-time';
+import { formatDate } from '@shared/format/date-time';
+import { zonelessFormat } from '@shared/format/locale';
+import { shiftLocalDate } from '@shared/time/salon-time';
 import { buttonClasses } from './button';
 
 type Props = {

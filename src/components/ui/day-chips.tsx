@@ -1,4 +1,4 @@
-import { shortDayLabel, dayLabel, type FreeDay } from '../../lib/free-times';
+import { shortDayLabel, dayLabel, type FreeDay } from '@client/lib/free-times';
 
 type Props = { days: FreeDay[]; selected: string; onSelect: (date: string) => void };
 

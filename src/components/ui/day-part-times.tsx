@@ -1,6 +1,6 @@
 import { useId, useState } from 'react';
-import { dayPartNames, spreadTimes, type DayPart } from '../../lib/day-parts';
-import { freeTimeKey, type FreeTime } from '../../lib/free-times';
+import { dayPartNames, spreadTimes, type DayPart } from '@client/lib/day-parts';
+import { freeTimeKey, type FreeTime } from '@client/lib/free-times';
 import { Button } from './button';
 import { FreeTimeButton } from './free-time-button';
 

@@ -1,6 +1,6 @@
-import { freeTimeKey, freeTimeLabel, type FreeTime } from '../../lib/free-times';
-import { formatTime } from '../../../shared/format/date-time';
-import { formatFor } from '../../../shared/format/locale';
+import { freeTimeKey, freeTimeLabel, type FreeTime } from '@client/lib/free-times';
+import { formatTime } from '@shared/format/date-time';
+import { formatFor } from '@shared/format/locale';
 
 type Props = { time: FreeTime; timeZone: string; selectedKey: string | null; onSelect: (time: FreeTime) => void; showStylist: boolean };
 

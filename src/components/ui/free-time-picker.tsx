@@ -1,6 +1,6 @@
 import { useState } from 'react';
-import { groupTimesByPart } from '../../lib/day-parts';
-import { dayLabel, groupTimesByDay, oneTimePerStart, type FreeTime } from '../../lib/free-times';
+import { groupTimesByPart } from '@client/lib/day-parts';
+import { dayLabel, groupTimesByDay, oneTimePerStart, type FreeTime } from '@client/lib/free-times';
 import { Button } from './button';
 import { DayChips } from './day-chips';
 import { DayPartTimes } from './day-part-times';

@@ -1,6 +1,6 @@
 import type { Control, FieldValues, Path } from 'react-hook-form';
 import { ConvertedField } from './converted-field';
-import { moneyInputText, parseMoney } from '../../../shared/money/money';
+import { moneyInputText, parseMoney } from '@shared/money/money';
 
 type Props<T extends FieldValues> = { control: Control<T>; name: Path<T>; label: string; currency: string; error?: string; hint?: string; className?: string };
 

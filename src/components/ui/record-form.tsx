@@ -2,7 +2,7 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import type { FormEvent, ReactNode } from 'react';
 import { useForm, type DefaultValues, type FieldValues, type Path } from 'react-hook-form';
 import type { ZodType } from 'zod';
-import { showServerErrors } from '../../lib/form-errors';
+import { showServerErrors } from '@client/lib/form-errors';
 import { Button } from './button';
 import { FormAlert } from './form-alert';
 

@@ -1,4 +1,4 @@
-import type { BookingView } from '../../../shared/schemas/booking-view.schemas';
+import type { BookingView } from '@shared/schemas/booking-view.schemas';
 
 type Props = { skinTest: BookingView['skinTest']; detailed?: boolean };
 

@@ -1,4 +1,4 @@
-import type { StepKind } from '../../../shared/schemas/common.schemas';
+import type { StepKind } from '@shared/schemas/common.schemas';
 
 // Drawn for Dwell: a hand (stylist working), an hourglass (product processing), a droplet (basin).
 const shapes: Record<StepKind, string> = {

@@ -1,5 +1,5 @@
-import type { StepKind } from '../../../shared/schemas/common.schemas';
-import { stepKindLabels } from '../../lib/booking-labels';
+import type { StepKind } from '@shared/schemas/common.schemas';
+import { stepKindLabels } from '@client/lib/booking-labels';
 import { StepKindIcon } from './step-kind-icon';
 import { StepKindSwatch } from './step-kind-swatch';
 

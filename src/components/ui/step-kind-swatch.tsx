@@ -1,4 +1,4 @@
-import type { StepKind } from '../../../shared/schemas/common.schemas';
+import type { StepKind } from '@shared/schemas/common.schemas';
 
 /** The pattern class of each step kind (defined in src/styles/main.css). */
 export const stepKindPattern: Record<StepKind, string> = {

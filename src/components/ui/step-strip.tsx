@@ -1,8 +1,8 @@
-import type { StepKind } from '../../../shared/schemas/common.schemas';
-import { stepKindLabels } from '../../lib/booking-labels';
-import { minutesBetween } from '../../lib/time';
-import { formatRange } from '../../../shared/format/date-time';
-import { formatFor } from '../../../shared/format/locale';
+import type { StepKind } from '@shared/schemas/common.schemas';
+import { stepKindLabels } from '@client/lib/booking-labels';
+import { minutesBetween } from '@client/lib/time';
+import { formatRange } from '@shared/format/date-time';
+import { formatFor } from '@shared/format/locale';
 import { StepKindIcon } from './step-kind-icon';
 import { stepKindPattern } from './step-kind-swatch';
 

@@ -1,4 +1,4 @@
-import { zoneLabel } from '../../lib/time';
+import { zoneLabel } from '@client/lib/time';
 
 type Props = { timeZone: string; date?: string };
 

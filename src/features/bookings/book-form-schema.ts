@@ -1,7 +1,7 @@
 import { z } from 'zod';
-import type { BookingOptionsRequest } from '../../../shared/schemas/booking.schemas';
-import { IdSchema, LocalDateSchema } from '../../../shared/schemas/common.schemas';
-import { StepPlanSchema } from '../../../shared/schemas/step-plan.schemas';
+import type { BookingOptionsRequest } from '@shared/schemas/booking.schemas';
+import { IdSchema, LocalDateSchema } from '@shared/schemas/common.schemas';
+import { StepPlanSchema } from '@shared/schemas/step-plan.schemas';
 
 /** The desk's "Book a service" form: the options request, with "" meaning "any stylist with the skill". */
 export const BookFormSchema = z.object({

@@ -1,7 +1,7 @@
-import { bookingStatusLabels, sittingLabel } from '../../lib/booking-labels';
-import { formatDateTime, formatRange } from '../../../shared/format/date-time';
-import { formatFor } from '../../../shared/format/locale';
-import { formatMoney } from '../../../shared/money/money';
+import { bookingStatusLabels, sittingLabel } from '@client/lib/booking-labels';
+import { formatDateTime, formatRange } from '@shared/format/date-time';
+import { formatFor } from '@shared/format/locale';
+import { formatMoney } from '@shared/money/money';
 
 /** One changed value of an audit entry, as dotted path and its before/after values. */
 export type Change = { field: string; before: unknown; after: unknown };

@@ -1,5 +1,5 @@
 import type { z } from 'zod';
-import type { PlannedStep, ProductFamily, StepPlanSchema } from '../../../shared/schemas/step-plan.schemas';
+import type { PlannedStep, ProductFamily, StepPlanSchema } from '@shared/schemas/step-plan.schemas';
 
 /** Any form holding a step plan under `stepPlan` (a booking's, or a service's on the set-up screens). */
 export type StepPlanFormInput = { stepPlan: z.input<typeof StepPlanSchema> };

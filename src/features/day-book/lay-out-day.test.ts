@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import type { BookingView, DayView } from '../../../shared/schemas/booking-view.schemas';
+import type { BookingView, DayView } from '@shared/schemas/booking-view.schemas';
 import { layOutDay } from './lay-out-day';
 
 const id = (n: number) => `00000000-0000-4000-8000-00000000000${n}`;

@@ -1,5 +1,5 @@
-import type { BookingView, DayView, SittingView } from '../../../shared/schemas/booking-view.schemas';
-import { localDateOf, localToInstant, minutesIntoDay } from '../../../shared/time/salon-time';
+import type { BookingView, DayView, SittingView } from '@shared/schemas/booking-view.schemas';
+import { localDateOf, localToInstant, minutesIntoDay } from '@shared/time/salon-time';
 
 /** One sitting placed on the day's timeline: minutes from midnight, and its lane when sittings overlap. */
 export type PlacedSitting = {

@@ -1,4 +1,4 @@
-import type { DayView } from '../../../shared/schemas/booking-view.schemas';
+import type { DayView } from '@shared/schemas/booking-view.schemas';
 
 /**
  * A stylist's day shows one column: theirs. The API sends only their bookings, so

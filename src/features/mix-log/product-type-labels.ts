@@ -1,4 +1,4 @@
-import { MixPartKindSchema, type CostedProduct, type MixPartKind, type ProductType } from '../../../shared/schemas/mix-log.schemas';
+import { MixPartKindSchema, type CostedProduct, type MixPartKind, type ProductType } from '@shared/schemas/mix-log.schemas';
 
 /** Plain trade words for the generic product types (never brand names). */
 export const productTypeLabels: Record<ProductType, string> = {

@@ -1,5 +1,5 @@
 import { DateTime } from 'luxon';
-import type { SittingView } from '../../../shared/schemas/booking-view.schemas';
+import type { SittingView } from '@shared/schemas/booking-view.schemas';
 
 type Step = SittingView['steps'][number];
 

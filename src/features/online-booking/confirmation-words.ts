@@ -1,6 +1,6 @@
-import type { ConfirmationSends } from '../../../shared/schemas/online-booking.schemas';
-import { formatClock, formatDate, formatTime } from '../../../shared/format/date-time';
-import { formatFor } from '../../../shared/format/locale';
+import type { ConfirmationSends } from '@shared/schemas/online-booking.schemas';
+import { formatClock, formatDate, formatTime } from '@shared/format/date-time';
+import { formatFor } from '@shared/format/locale';
 
 type Send = ConfirmationSends['sends'][number];
 const channelName = { email: 'e-mail', sms: 'text' } as const;

@@ -1,6 +1,6 @@
 import { useCallback, useState } from 'react';
 import { z } from 'zod';
-import { CautionsSchema, type ResumedHoldSchema } from '../../../shared/schemas/online-booking.schemas';
+import { CautionsSchema, type ResumedHoldSchema } from '@shared/schemas/online-booking.schemas';
 
 /*
  * The hold in progress, kept in sessionStorage: it survives the trip to sign in or

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import type { BookingView, WeekView } from '../../../shared/schemas/booking-view.schemas';
+import type { BookingView, WeekView } from '@shared/schemas/booking-view.schemas';
 import { closedDates, closedStretches, hiddenClosedDates, toWeekEvents, visibleHours } from './week-events';
 
 const id = (n: number) => `00000000-0000-4000-8000-00000000000${n}`;

@@ -1,5 +1,5 @@
-import type { BookingView, WeekView } from '../../../shared/schemas/booking-view.schemas';
-import type { StepKind } from '../../../shared/schemas/common.schemas';
+import type { BookingView, WeekView } from '@shared/schemas/booking-view.schemas';
+import type { StepKind } from '@shared/schemas/common.schemas';
 import { toCalendarTime } from './calendar-time';
 
 /** What a week-calendar event carries besides its times: enough to draw it, to move it and to move it back. */

@@ -3,11 +3,11 @@
 // SMS_API_URL and PAYMENTS_API_URL). Desk bookings and online deposits go through both servers; afterwards
 // every sent message must have reached its provider exactly once and every deposit been charged once.
 import { randomUUID } from 'node:crypto';
-import { createDb, createPool } from '../../../server/db/database';
-import { DEMO_PASSWORD, demoSalon } from '../../../server/demo/demo-catalogue';
-import { FAKE_CARDS, startPaymentsFake } from '../../../server/fakes/payments-fake';
-import { startSmsFake } from '../../../server/fakes/sms-fake';
-import { startSmtpFake } from '../../../server/fakes/smtp-fake';
+import { createDb, createPool } from '@server/db/database';
+import { DEMO_PASSWORD, demoSalon } from '@server/demo/demo-catalogue';
+import { FAKE_CARDS, startPaymentsFake } from '@server/fakes/payments-fake';
+import { startSmsFake } from '@server/fakes/sms-fake';
+import { startSmtpFake } from '@server/fakes/smtp-fake';
 import { startAppProcess, type AppProcess } from '../load/app-process';
 import { sendJson, signIn } from '../load/http-session';
 import { percentile } from '../load/measure';

@@ -1,5 +1,5 @@
 import { sql } from 'kysely';
-import type { Db } from '../../../server/db/database';
+import type { Db } from '@server/db/database';
 
 /**
  * Overlaps the exclusion constraints forbid, counted by a plain query (so a dropped constraint would show):

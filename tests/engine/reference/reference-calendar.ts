@@ -3,9 +3,9 @@
  * Deliberately simple and slow; shares nothing with the engine except the rrule date expansion
  * (checked on its own against RFC 5545) and the zod schema for defaults.
  */
-import { ruleDays } from '../../../shared/engine/recurrence';
-import { zoneClock } from '../../../shared/engine/local-time';
-import type { HoursRule, Scenario } from '../../../shared/engine/scenario.schemas';
+import { ruleDays } from '@shared/engine/recurrence';
+import { zoneClock } from '@shared/engine/local-time';
+import type { HoursRule, Scenario } from '@shared/engine/scenario.schemas';
 import { dayToDate, localToUtc, partsOf, utcToLocal, wallToUtc } from './reference-time';
 
 export interface MinuteCalendar {

@@ -3,7 +3,7 @@
  * developing length and every basin, checking each minute of each step against the minute
  * calendar. Returns the K earliest feasible (stylist, start) pairs per the contract.
  */
-import type { RequestStep, Scenario } from '../../../shared/engine/scenario.schemas';
+import type { RequestStep, Scenario } from '@shared/engine/scenario.schemas';
 import { localToUtc } from './reference-time';
 import { buildCalendar, type MinuteCalendar } from './reference-calendar';
 

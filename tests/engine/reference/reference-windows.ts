@@ -1,5 +1,5 @@
 /** Brute-force hands-free windows, fits and occupancy, minute by minute. */
-import type { Scenario } from '../../../shared/engine/scenario.schemas';
+import type { Scenario } from '@shared/engine/scenario.schemas';
 import { buildCalendar, type MinuteCalendar } from './reference-calendar';
 
 export interface ReferenceWindow {

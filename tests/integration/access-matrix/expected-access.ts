@@ -1,4 +1,4 @@
-import type { Role } from '../../../shared/schemas/common.schemas';
+import type { Role } from '@shared/schemas/common.schemas';
 
 /**
  * Who may call each route of the OpenAPI document, written out by hand so the matrix test checks the

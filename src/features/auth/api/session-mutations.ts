@@ -1,8 +1,8 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { sessionApi } from '../../../../shared/api/session.api';
-import type { SignInBody, SignUpBody } from '../../../../shared/schemas/auth.schemas';
-import { callApi } from '../../../lib/api-client';
-import { sessionStarted } from '../../../lib/cache-rules';
+import { sessionApi } from '@shared/api/session.api';
+import type { SignInBody, SignUpBody } from '@shared/schemas/auth.schemas';
+import { callApi } from '@client/lib/api-client';
+import { sessionStarted } from '@client/lib/cache-rules';
 
 export function useSignIn() {
   const queryClient = useQueryClient();

@@ -1,8 +1,8 @@
 import { queryOptions } from '@tanstack/react-query';
-import { sessionApi } from '../../../../shared/api/session.api';
-import type { SessionUser } from '../../../../shared/schemas/auth.schemas';
-import { apiKey, callApi } from '../../../lib/api-client';
-import { isApiError } from '../../../lib/api-error';
+import { sessionApi } from '@shared/api/session.api';
+import type { SessionUser } from '@shared/schemas/auth.schemas';
+import { apiKey, callApi } from '@client/lib/api-client';
+import { isApiError } from '@client/lib/api-error';
 
 /** Who is signed in: the user, or null when nobody is (a 401 is an answer here, not an error). */
 async function fetchSessionUser(): Promise<SessionUser | null> {

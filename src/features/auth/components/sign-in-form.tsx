@@ -1,10 +1,10 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
-import { SignInBodySchema, type SessionUser } from '../../../../shared/schemas/auth.schemas';
-import { Button } from '../../../components/ui/button';
-import { FormAlert } from '../../../components/ui/form-alert';
-import { TextField } from '../../../components/ui/text-field';
-import { showServerErrors } from '../../../lib/form-errors';
+import { SignInBodySchema, type SessionUser } from '@shared/schemas/auth.schemas';
+import { Button } from '@client/components/ui/button';
+import { FormAlert } from '@client/components/ui/form-alert';
+import { TextField } from '@client/components/ui/text-field';
+import { showServerErrors } from '@client/lib/form-errors';
 import { useSignIn } from '../api/session-mutations';
 
 type Props = { onSignedIn: (user: SessionUser) => void };

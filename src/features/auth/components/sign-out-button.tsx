@@ -1,4 +1,4 @@
-import { Button } from '../../../components/ui/button';
+import { Button } from '@client/components/ui/button';
 import { useSignOut } from '../api/session-mutations';
 
 type Props = { onSignedOut: () => void };

@@ -1,11 +1,11 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
-import { PASSWORD_MIN_LENGTH, SignUpBodySchema, type SessionUser } from '../../../../shared/schemas/auth.schemas';
-import { Button } from '../../../components/ui/button';
-import { FormAlert } from '../../../components/ui/form-alert';
-import { TextField } from '../../../components/ui/text-field';
-import { isApiError } from '../../../lib/api-error';
-import { showServerErrors } from '../../../lib/form-errors';
+import { PASSWORD_MIN_LENGTH, SignUpBodySchema, type SessionUser } from '@shared/schemas/auth.schemas';
+import { Button } from '@client/components/ui/button';
+import { FormAlert } from '@client/components/ui/form-alert';
+import { TextField } from '@client/components/ui/text-field';
+import { isApiError } from '@client/lib/api-error';
+import { showServerErrors } from '@client/lib/form-errors';
 import { useSignUp } from '../api/session-mutations';
 
 /** `salonSlug`: the salon whose client the account becomes (when signing up from its booking flow). */

@@ -1,9 +1,9 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { z } from 'zod';
-import { bookingsApi } from '../../../../shared/api/bookings.api';
-import type { CancelBookingSchema, ChangePlanSchema, CreateBooking, MoveSittingSchema } from '../../../../shared/schemas/booking.schemas';
-import { callApi } from '../../../lib/api-client';
-import { bookingChanged, bookingMade } from '../../../lib/cache-rules';
+import { bookingsApi } from '@shared/api/bookings.api';
+import type { CancelBookingSchema, ChangePlanSchema, CreateBooking, MoveSittingSchema } from '@shared/schemas/booking.schemas';
+import { callApi } from '@client/lib/api-client';
+import { bookingChanged, bookingMade } from '@client/lib/cache-rules';
 
 export function useCreateBooking() {
   const queryClient = useQueryClient();

@@ -1,7 +1,7 @@
-import { bookingsApi } from '../../../../shared/api/bookings.api';
+import { bookingsApi } from '@shared/api/bookings.api';
 import { queryOptions } from '@tanstack/react-query';
-import type { BookingOptionsRequest } from '../../../../shared/schemas/booking.schemas';
-import { apiKey, apiQuery, callApi } from '../../../lib/api-client';
+import type { BookingOptionsRequest } from '@shared/schemas/booking.schemas';
+import { apiKey, apiQuery, callApi } from '@client/lib/api-client';
 
 export const bookingQueries = {
   /** The signed-in client's own bookings. */

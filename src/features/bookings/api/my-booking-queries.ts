@@ -1,5 +1,5 @@
-import { onlineBookingApi } from '../../../../shared/api/online-booking.api';
-import { apiQuery } from '../../../lib/api-client';
+import { onlineBookingApi } from '@shared/api/online-booking.api';
+import { apiQuery } from '@client/lib/api-client';
 
 /** A client's own bookings: what cancelling would mean now, and the times a booking could move to. */
 export const myBookingQueries = {

@@ -1,11 +1,11 @@
 import type { ReactNode } from 'react';
-import type { BookingView } from '../../../../shared/schemas/booking-view.schemas';
-import { BookingStatusBadge } from '../../../components/ui/booking-status-badge';
-import { SkinTestFlag } from '../../../components/ui/skin-test-flag';
-import { sittingLabel } from '../../../lib/booking-labels';
-import { formatDate, formatRange } from '../../../../shared/format/date-time';
-import { formatFor } from '../../../../shared/format/locale';
-import { formatMoney } from '../../../../shared/money/money';
+import type { BookingView } from '@shared/schemas/booking-view.schemas';
+import { BookingStatusBadge } from '@client/components/ui/booking-status-badge';
+import { SkinTestFlag } from '@client/components/ui/skin-test-flag';
+import { sittingLabel } from '@client/lib/booking-labels';
+import { formatDate, formatRange } from '@shared/format/date-time';
+import { formatFor } from '@shared/format/locale';
+import { formatMoney } from '@shared/money/money';
 
 /** `children`: what may be done with the booking (e.g. the client's move and cancel), under its details. */
 type Props = { booking: BookingView; timeZone: string; currency: string; headingLevel?: 'h3' | 'h4'; children?: ReactNode };

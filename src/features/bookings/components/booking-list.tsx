@@ -1,6 +1,6 @@
 import { useMemo, type ReactNode } from 'react';
-import type { BookingView } from '../../../../shared/schemas/booking-view.schemas';
-import { isPast } from '../../../lib/time';
+import type { BookingView } from '@shared/schemas/booking-view.schemas';
+import { isPast } from '@client/lib/time';
 import { BookingCard } from './booking-card';
 
 /** `actions`: drawn inside each booking's card (the client's own list adds move and cancel). */

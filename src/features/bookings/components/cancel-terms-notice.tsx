@@ -1,5 +1,5 @@
-import type { CancelTerms } from '../../../../shared/schemas/online-booking.schemas';
-import { Notice } from '../../../components/ui/notice';
+import type { CancelTerms } from '@shared/schemas/online-booking.schemas';
+import { Notice } from '@client/components/ui/notice';
 
 /** What cancelling now does to the deposit and why, read before confirming (a kept deposit as a caution). */
 export function CancelTermsNotice({ terms }: { terms: CancelTerms }) {

@@ -1,5 +1,5 @@
-import { catalogueApi } from '../../../../shared/api/catalogue.api';
-import { apiQuery } from '../../../lib/api-client';
+import { catalogueApi } from '@shared/api/catalogue.api';
+import { apiQuery } from '@client/lib/api-client';
 
 // The salon's menu and its stylists change rarely and are read on most desk pages.
 const FIVE_MINUTES = 5 * 60_000;

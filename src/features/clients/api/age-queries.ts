@@ -1,9 +1,9 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { z } from 'zod';
-import { clientsApi } from '../../../../shared/api/clients.api';
-import type { ClientAge, RecordGuardianConsentSchema } from '../../../../shared/schemas/age.schemas';
-import { apiQuery, callApi } from '../../../lib/api-client';
-import type { RecordOwner } from '../../../lib/record-owner';
+import { clientsApi } from '@shared/api/clients.api';
+import type { ClientAge, RecordGuardianConsentSchema } from '@shared/schemas/age.schemas';
+import { apiQuery, callApi } from '@client/lib/api-client';
+import type { RecordOwner } from '@client/lib/record-owner';
 
 export const ageQueries = {
   detail: (owner: RecordOwner) => (owner === 'me' ? apiQuery(clientsApi.myAge) : apiQuery(clientsApi.age, { params: { id: owner.clientId } })),

@@ -1,10 +1,10 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { z } from 'zod';
-import { clientsApi } from '../../../../shared/api/clients.api';
-import type { CreateClientSchema } from '../../../../shared/schemas/booking.schemas';
-import type { UpdateClientSchema } from '../../../../shared/schemas/contact.schemas';
-import { callApi } from '../../../lib/api-client';
-import { clientAdded, clientChanged } from '../../../lib/cache-rules';
+import { clientsApi } from '@shared/api/clients.api';
+import type { CreateClientSchema } from '@shared/schemas/booking.schemas';
+import type { UpdateClientSchema } from '@shared/schemas/contact.schemas';
+import { callApi } from '@client/lib/api-client';
+import { clientAdded, clientChanged } from '@client/lib/cache-rules';
 
 export type CreateClientInput = z.input<typeof CreateClientSchema>;
 /** What the form hands over after parsing: the phone already in E.164, blanks as null. */

@@ -1,5 +1,5 @@
-import { clientsApi } from '../../../../shared/api/clients.api';
-import { apiQuery } from '../../../lib/api-client';
+import { clientsApi } from '@shared/api/clients.api';
+import { apiQuery } from '@client/lib/api-client';
 
 export const clientQueries = {
   list: (q: string) => apiQuery(clientsApi.list, { query: { q } }),

@@ -1,9 +1,9 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { z } from 'zod';
-import { messagesApi } from '../../../../shared/api/messages.api';
-import type { MyPreferencesBodySchema } from '../../../../shared/schemas/contact.schemas';
-import { apiQuery, callApi } from '../../../lib/api-client';
-import { myPreferencesSaved } from '../../../lib/cache-rules';
+import { messagesApi } from '@shared/api/messages.api';
+import type { MyPreferencesBodySchema } from '@shared/schemas/contact.schemas';
+import { apiQuery, callApi } from '@client/lib/api-client';
+import { myPreferencesSaved } from '@client/lib/cache-rules';
 
 export const preferenceQueries = {
   mine: () => apiQuery(messagesApi.myPreferences),

@@ -1,12 +1,12 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
 import type { z } from 'zod';
-import { UpdateClientSchema } from '../../../../shared/schemas/contact.schemas';
-import type { ClientDetail } from '../../../../shared/schemas/client.schemas';
-import { Button } from '../../../components/ui/button';
-import { FormAlert } from '../../../components/ui/form-alert';
-import { TextField } from '../../../components/ui/text-field';
-import { showServerErrors } from '../../../lib/form-errors';
+import { UpdateClientSchema } from '@shared/schemas/contact.schemas';
+import type { ClientDetail } from '@shared/schemas/client.schemas';
+import { Button } from '@client/components/ui/button';
+import { FormAlert } from '@client/components/ui/form-alert';
+import { TextField } from '@client/components/ui/text-field';
+import { showServerErrors } from '@client/lib/form-errors';
 import { useUpdateClient } from '../api/client-mutations';
 import { MessagePreferenceFields } from './message-preference-fields';
 

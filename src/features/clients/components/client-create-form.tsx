@@ -1,11 +1,11 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
-import { CreateClientSchema } from '../../../../shared/schemas/booking.schemas';
-import type { ClientSummary } from '../../../../shared/schemas/client.schemas';
-import { Button } from '../../../components/ui/button';
-import { FormAlert } from '../../../components/ui/form-alert';
-import { TextField } from '../../../components/ui/text-field';
-import { showServerErrors } from '../../../lib/form-errors';
+import { CreateClientSchema } from '@shared/schemas/booking.schemas';
+import type { ClientSummary } from '@shared/schemas/client.schemas';
+import { Button } from '@client/components/ui/button';
+import { FormAlert } from '@client/components/ui/form-alert';
+import { TextField } from '@client/components/ui/text-field';
+import { showServerErrors } from '@client/lib/form-errors';
 import { useCreateClient, type CreateClientInput, type CreateClientValues } from '../api/client-mutations';
 
 type Props = { initialName: string; onCreated: (client: ClientSummary) => void };

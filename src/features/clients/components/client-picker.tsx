@@ -1,7 +1,7 @@
 import { keepPreviousData, useQuery } from '@tanstack/react-query';
 import { useDeferredValue, useId, useState } from 'react';
-import type { ClientSummary } from '../../../../shared/schemas/client.schemas';
-import { Button } from '../../../components/ui/button';
+import type { ClientSummary } from '@shared/schemas/client.schemas';
+import { Button } from '@client/components/ui/button';
 import { clientQueries } from '../api/client-queries';
 import { ClientCreateForm } from './client-create-form';
 

@@ -1,8 +1,8 @@
-import type { ClientDetail } from '../../../../shared/schemas/client.schemas';
-import { SectionCard } from '../../../components/ui/section-card';
+import type { ClientDetail } from '@shared/schemas/client.schemas';
+import { SectionCard } from '@client/components/ui/section-card';
 import { ClientContactForm } from './client-contact-form';
-import { HairHistorySummary } from '../../hair-history/components/hair-history-summary';
-import { PhotoGallery } from '../../photos/components/photo-gallery';
+import { HairHistorySummary } from '@client/features/hair-history';
+import { PhotoGallery } from '@client/features/photos';
 
 type Props = { client: ClientDetail };
 

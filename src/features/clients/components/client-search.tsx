@@ -1,7 +1,7 @@
 import { keepPreviousData, useQuery } from '@tanstack/react-query';
 import { useDeferredValue, useState } from 'react';
 import { Link } from 'react-router-dom';
-import { paths } from '../../../config/paths';
+import { paths } from '@client/config/paths';
 import { clientQueries } from '../api/client-queries';
 
 /** Find a client by name, e-mail or phone; results update as you type. */

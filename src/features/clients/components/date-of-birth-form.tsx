@@ -1,10 +1,10 @@
 import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
-import { Button } from '../../../components/ui/button';
-import { FormAlert } from '../../../components/ui/form-alert';
-import { TextField } from '../../../components/ui/text-field';
-import { ApiError } from '../../../lib/api-error';
-import type { RecordOwner } from '../../../lib/record-owner';
+import { Button } from '@client/components/ui/button';
+import { FormAlert } from '@client/components/ui/form-alert';
+import { TextField } from '@client/components/ui/text-field';
+import { ApiError } from '@client/lib/api-error';
+import type { RecordOwner } from '@client/lib/record-owner';
 import { ageQueries, useSetDateOfBirth } from '../api/age-queries';
 
 /**

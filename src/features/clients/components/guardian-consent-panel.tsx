@@ -1,15 +1,15 @@
 import { useQuery } from '@tanstack/react-query';
-import { RecordGuardianConsentSchema } from '../../../../shared/schemas/age.schemas';
-import { ageOn, MIN_AGE_WITHOUT_CONSENT } from '../../../../shared/rules/age-rule';
-import { Notice } from '../../../components/ui/notice';
-import { RecordForm, useRecordForm } from '../../../components/ui/record-form';
-import { TextField } from '../../../components/ui/text-field';
-import { fieldError } from '../../../lib/form-errors';
-import { todayIn } from '../../../lib/time';
+import { RecordGuardianConsentSchema } from '@shared/schemas/age.schemas';
+import { ageOn, MIN_AGE_WITHOUT_CONSENT } from '@shared/rules/age-rule';
+import { Notice } from '@client/components/ui/notice';
+import { RecordForm, useRecordForm } from '@client/components/ui/record-form';
+import { TextField } from '@client/components/ui/text-field';
+import { fieldError } from '@client/lib/form-errors';
+import { todayIn } from '@client/lib/time';
 import { ageQueries, useRecordGuardianConsent } from '../api/age-queries';
 import { DateOfBirthForm } from './date-of-birth-form';
-import { formatDate } from '../../../../shared/format/date-time';
-import { formatFor } from '../../../../shared/format/locale';
+import { formatDate } from '@shared/format/date-time';
+import { formatFor } from '@shared/format/locale';
 
 type Props = { clientId: string; zone: string };
 

@@ -1,7 +1,7 @@
 import type { UseFormRegister } from 'react-hook-form';
-import type { MessageChannelChoice } from '../../../../shared/schemas/contact.schemas';
-import { formatDate } from '../../../../shared/format/date-time';
-import { deviceFormat } from '../../../lib/time';
+import type { MessageChannelChoice } from '@shared/schemas/contact.schemas';
+import { formatDate } from '@shared/format/date-time';
+import { deviceFormat } from '@client/lib/time';
 
 type PreferenceValues = { messageChannel: MessageChannelChoice; marketingOptIn: boolean };
 type Props<T extends PreferenceValues> = {

@@ -1,11 +1,11 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
 import type { z } from 'zod';
-import { MyPreferencesBodySchema, type MyPreferences } from '../../../../shared/schemas/contact.schemas';
-import { Button } from '../../../components/ui/button';
-import { FormAlert } from '../../../components/ui/form-alert';
-import { TextField } from '../../../components/ui/text-field';
-import { showServerErrors } from '../../../lib/form-errors';
+import { MyPreferencesBodySchema, type MyPreferences } from '@shared/schemas/contact.schemas';
+import { Button } from '@client/components/ui/button';
+import { FormAlert } from '@client/components/ui/form-alert';
+import { TextField } from '@client/components/ui/text-field';
+import { showServerErrors } from '@client/lib/form-errors';
 import { useSaveMyPreferences } from '../api/preference-queries';
 import { MessagePreferenceFields } from './message-preference-fields';
 

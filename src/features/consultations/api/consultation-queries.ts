@@ -1,9 +1,9 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { z } from 'zod';
-import { consultationsApi } from '../../../../shared/api/consultations.api';
-import type { CreateConsultation, ProposeQuoteRequestSchema, QuoteEdit } from '../../../../shared/schemas/consultation.schemas';
-import { apiQuery, callApi } from '../../../lib/api-client';
-import { consultationsChanged, myQuotesChanged, quoteEdited } from '../../../lib/cache-rules';
+import { consultationsApi } from '@shared/api/consultations.api';
+import type { CreateConsultation, ProposeQuoteRequestSchema, QuoteEdit } from '@shared/schemas/consultation.schemas';
+import { apiQuery, callApi } from '@client/lib/api-client';
+import { consultationsChanged, myQuotesChanged, quoteEdited } from '@client/lib/cache-rules';
 
 export const consultationQueries = {
   ofClient: (clientId: string) => apiQuery(consultationsApi.ofClient, { params: { id: clientId } }),

@@ -1,14 +1,14 @@
 import { useQuery } from '@tanstack/react-query';
 import { Link } from 'react-router-dom';
-import { buttonClasses } from '../../../components/ui/button';
-import { FormAlert } from '../../../components/ui/form-alert';
-import { LoadingState } from '../../../components/ui/loading-state';
-import { formatDate } from '../../../../shared/format/date-time';
-import { formatFor } from '../../../../shared/format/locale';
-import { paths } from '../../../config/paths';
+import { buttonClasses } from '@client/components/ui/button';
+import { FormAlert } from '@client/components/ui/form-alert';
+import { LoadingState } from '@client/components/ui/loading-state';
+import { formatDate } from '@shared/format/date-time';
+import { formatFor } from '@shared/format/locale';
+import { paths } from '@client/config/paths';
 import { consultationQueries } from '../api/consultation-queries';
 import { quoteStatusLabels } from './consultation-labels';
-import { formatMoney } from '../../../../shared/money/money';
+import { formatMoney } from '@shared/money/money';
 
 type Props = { clientId: string; timeZone: string; currency: string };
 

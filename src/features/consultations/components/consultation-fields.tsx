@@ -1,9 +1,9 @@
 import type { UseFormReturn } from 'react-hook-form';
-import type { ColourHistory } from '../../../../shared/schemas/consultation.schemas';
-import { SelectField } from '../../../components/ui/select-field';
-import { TextAreaField } from '../../../components/ui/text-area-field';
-import { TextField } from '../../../components/ui/text-field';
-import { fieldError } from '../../../lib/form-errors';
+import type { ColourHistory } from '@shared/schemas/consultation.schemas';
+import { SelectField } from '@client/components/ui/select-field';
+import { TextAreaField } from '@client/components/ui/text-area-field';
+import { TextField } from '@client/components/ui/text-field';
+import { fieldError } from '@client/lib/form-errors';
 import type { ConsultationFormInput, ConsultationFormValues } from '../consultation-form-schema';
 import { densityOptions, elasticityOptions, historyLabels, lengthOptions, porosityOptions, strandOptions } from './consultation-labels';
 

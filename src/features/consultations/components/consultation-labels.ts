@@ -1,4 +1,4 @@
-import type { ColourHistory } from '../../../../shared/schemas/consultation.schemas';
+import type { ColourHistory } from '@shared/schemas/consultation.schemas';
 
 export const historyLabels: Record<keyof ColourHistory, string> = {
   natural: 'Natural (never coloured)',

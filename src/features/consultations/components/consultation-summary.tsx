@@ -1,6 +1,6 @@
-import { urlOf } from '../../../../shared/api/endpoint';
-import { photosApi } from '../../../../shared/api/photos.api';
-import type { ColourHistory, ConsultationView } from '../../../../shared/schemas/consultation.schemas';
+import { urlOf } from '@shared/api/endpoint';
+import { photosApi } from '@shared/api/photos.api';
+import type { ColourHistory, ConsultationView } from '@shared/schemas/consultation.schemas';
 import { densityOptions, elasticityOptions, historyLabels, lengthOptions, porosityOptions, strandOptions } from './consultation-labels';
 
 const labelOf = (options: { value: string; label: string }[], value: string) => options.find((o) => o.value === value)?.label ?? value;

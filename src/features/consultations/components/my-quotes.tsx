@@ -1,10 +1,10 @@
 import { useQuery } from '@tanstack/react-query';
-import { Button } from '../../../components/ui/button';
-import { FormAlert } from '../../../components/ui/form-alert';
-import { sittingMaxMinutes } from '../../../../shared/schemas/step-plan.schemas';
-import { formatMinutes } from '../../../lib/time';
+import { Button } from '@client/components/ui/button';
+import { FormAlert } from '@client/components/ui/form-alert';
+import { sittingMaxMinutes } from '@shared/schemas/step-plan.schemas';
+import { formatMinutes } from '@client/lib/time';
 import { myQuoteQueries, useAcceptQuote } from '../api/consultation-queries';
-import { formatMoney } from '../../../../shared/money/money';
+import { formatMoney } from '@shared/money/money';
 
 /** The quotes the salon sent the signed-in client, each with its sittings, price and deposit; accept online. */
 export function MyQuotes({ currency }: { currency: string }) {

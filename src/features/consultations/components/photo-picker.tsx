@@ -1,10 +1,10 @@
 import { useQuery } from '@tanstack/react-query';
 import { useController, type Control } from 'react-hook-form';
-import { FormAlert } from '../../../components/ui/form-alert';
-import { LoadingState } from '../../../components/ui/loading-state';
-import { photoQueries } from '../../photos/api/photo-queries';
-import { kindLabelsForStaff } from '../../photos/components/photo-labels';
-import { PhotoUploader } from '../../photos/components/photo-uploader';
+import { FormAlert } from '@client/components/ui/form-alert';
+import { LoadingState } from '@client/components/ui/loading-state';
+import { photoQueries } from '@client/features/photos';
+import { kindLabelsForStaff } from '@client/features/photos';
+import { PhotoUploader } from '@client/features/photos';
 import type { ConsultationFormInput, ConsultationFormValues } from '../consultation-form-schema';
 
 type Props = { clientId: string; control: Control<ConsultationFormInput, unknown, ConsultationFormValues> };

@@ -1,7 +1,7 @@
-import type { ProposedQuoteView, QuoteWarning } from '../../../../shared/schemas/consultation.schemas';
-import { QUOTE_CAUTIONS } from '../../../../shared/quotes/propose-quote';
-import { Notice } from '../../../components/ui/notice';
-import { formatMoney } from '../../../../shared/money/money';
+import type { ProposedQuoteView, QuoteWarning } from '@shared/schemas/consultation.schemas';
+import { QUOTE_CAUTIONS } from '@shared/quotes/propose-quote';
+import { Notice } from '@client/components/ui/notice';
+import { formatMoney } from '@shared/money/money';
 
 /** The rules' warnings for this hair, and the cautions every chemical quote carries. */
 export function QuoteWarnings({ warnings }: { warnings: QuoteWarning[] }) {

@@ -1,19 +1,19 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useSuspenseQuery } from '@tanstack/react-query';
 import { FormProvider, useForm } from 'react-hook-form';
-import { QuoteEditSchema, type QuoteEdit, type QuoteEditInput, type StrandOutcome } from '../../../../shared/schemas/consultation.schemas';
-import type { ServiceSummary } from '../../../../shared/schemas/service.schemas';
-import { withinProcessingLimits } from '../../../../shared/rules/processing-limits';
-import { STRAND_OVERRIDE_MIN, withStrandGate } from '../../../../shared/quotes/strand-gate';
-import { Button } from '../../../components/ui/button';
-import { FormAlert } from '../../../components/ui/form-alert';
-import { Notice } from '../../../components/ui/notice';
-import { SelectField } from '../../../components/ui/select-field';
-import { TextAreaField } from '../../../components/ui/text-area-field';
-import { fieldError, showServerErrors } from '../../../lib/form-errors';
-import { StepPlanEditor } from '../../bookings/components/step-plan/step-plan-editor';
-import { salonQueries } from '../../salon/api/salon-queries';
-import { MoneyField } from '../../../components/ui/money-field';
+import { QuoteEditSchema, type QuoteEdit, type QuoteEditInput, type StrandOutcome } from '@shared/schemas/consultation.schemas';
+import type { ServiceSummary } from '@shared/schemas/service.schemas';
+import { withinProcessingLimits } from '@shared/rules/processing-limits';
+import { STRAND_OVERRIDE_MIN, withStrandGate } from '@shared/quotes/strand-gate';
+import { Button } from '@client/components/ui/button';
+import { FormAlert } from '@client/components/ui/form-alert';
+import { Notice } from '@client/components/ui/notice';
+import { SelectField } from '@client/components/ui/select-field';
+import { TextAreaField } from '@client/components/ui/text-area-field';
+import { fieldError, showServerErrors } from '@client/lib/form-errors';
+import { StepPlanEditor } from '@client/features/bookings';
+import { salonQueries } from '@client/features/salon';
+import { MoneyField } from '@client/components/ui/money-field';
 
 type Props = {
   initial: QuoteEditInput;

@@ -1,8 +1,8 @@
-import { Button } from '../../../components/ui/button';
-import { FormAlert } from '../../../components/ui/form-alert';
-import type { ConsultationView } from '../../../../shared/schemas/consultation.schemas';
-import { formatDate } from '../../../../shared/format/date-time';
-import { formatFor } from '../../../../shared/format/locale';
+import { Button } from '@client/components/ui/button';
+import { FormAlert } from '@client/components/ui/form-alert';
+import type { ConsultationView } from '@shared/schemas/consultation.schemas';
+import { formatDate } from '@shared/format/date-time';
+import { formatFor } from '@shared/format/locale';
 import { useSendQuote } from '../api/consultation-queries';
 
 /** E-mail the saved quote to the client; they accept it on their own page. */

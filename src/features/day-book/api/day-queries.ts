@@ -1,5 +1,5 @@
-import { bookingsApi } from '../../../../shared/api/bookings.api';
-import { apiQuery } from '../../../lib/api-client';
+import { bookingsApi } from '@shared/api/bookings.api';
+import { apiQuery } from '@client/lib/api-client';
 
 // No date means "today in the salon's zone", decided by the server.
 export const dayQueries = {

@@ -1,15 +1,15 @@
 import { lazy, Suspense, type ReactNode } from 'react';
 import { useNavigate } from 'react-router-dom';
-import type { DayView } from '../../../../shared/schemas/booking-view.schemas';
-import type { HandsFreeWindowView } from '../../../../shared/schemas/window.schemas';
-import { DateStepper } from '../../../components/ui/date-stepper';
-import { LoadingState } from '../../../components/ui/loading-state';
-import { PageHeader } from '../../../components/ui/page-header';
-import { StepKindLegend } from '../../../components/ui/step-kind-legend';
-import { TimeZoneNote } from '../../../components/ui/time-zone-note';
-import { todayIn } from '../../../lib/time';
-import { formatDate } from '../../../../shared/format/date-time';
-import { zonelessFormat } from '../../../../shared/format/locale';
+import type { DayView } from '@shared/schemas/booking-view.schemas';
+import type { HandsFreeWindowView } from '@shared/schemas/window.schemas';
+import { DateStepper } from '@client/components/ui/date-stepper';
+import { LoadingState } from '@client/components/ui/loading-state';
+import { PageHeader } from '@client/components/ui/page-header';
+import { StepKindLegend } from '@client/components/ui/step-kind-legend';
+import { TimeZoneNote } from '@client/components/ui/time-zone-note';
+import { todayIn } from '@client/lib/time';
+import { formatDate } from '@shared/format/date-time';
+import { zonelessFormat } from '@shared/format/locale';
 import type { ColumnsBy } from '../lay-out-day';
 import { ColumnsToggle } from './columns-toggle';
 

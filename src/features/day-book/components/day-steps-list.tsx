@@ -1,11 +1,11 @@
 import { useMemo } from 'react';
-import type { DayView } from '../../../../shared/schemas/booking-view.schemas';
-import { StepKindIcon } from '../../../components/ui/step-kind-icon';
-import { StepKindSwatch } from '../../../components/ui/step-kind-swatch';
-import { stepKindLabels } from '../../../lib/booking-labels';
-import { formatRange } from '../../../../shared/format/date-time';
-import { formatFor } from '../../../../shared/format/locale';
-import { localDateOf } from '../../../../shared/time/salon-time';
+import type { DayView } from '@shared/schemas/booking-view.schemas';
+import { StepKindIcon } from '@client/components/ui/step-kind-icon';
+import { StepKindSwatch } from '@client/components/ui/step-kind-swatch';
+import { stepKindLabels } from '@client/lib/booking-labels';
+import { formatRange } from '@shared/format/date-time';
+import { formatFor } from '@shared/format/locale';
+import { localDateOf } from '@shared/time/salon-time';
 
 type Props = { day: DayView };
 

@@ -1,7 +1,7 @@
-import { ClosedKey } from '../../../components/ui/closed-key';
+import { ClosedKey } from '@client/components/ui/closed-key';
 import { useMemo } from 'react';
-import type { DayView } from '../../../../shared/schemas/booking-view.schemas';
-import type { HandsFreeWindowView } from '../../../../shared/schemas/window.schemas';
+import type { DayView } from '@shared/schemas/booking-view.schemas';
+import type { HandsFreeWindowView } from '@shared/schemas/window.schemas';
 import { layOutDay, type ColumnsBy } from '../lay-out-day';
 import { HourAxis } from './hour-axis';
 import { StylistColumn } from './stylist-column';

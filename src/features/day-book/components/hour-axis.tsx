@@ -1,5 +1,5 @@
-import { formatClock } from '../../../../shared/format/date-time';
-import { formatFor } from '../../../../shared/format/locale';
+import { formatClock } from '@shared/format/date-time';
+import { formatFor } from '@shared/format/locale';
 import { COLUMN_HEADER_CLASS, PX_PER_MIN } from './timeline-scale';
 
 type Props = { firstHour: number; lastHour: number; timeZone: string };

@@ -1,9 +1,9 @@
 import { Link } from 'react-router-dom';
-import { BookingStatusBadge } from '../../../components/ui/booking-status-badge';
-import { SkinTestFlag } from '../../../components/ui/skin-test-flag';
-import { sittingLabel } from '../../../lib/booking-labels';
-import { formatRange } from '../../../../shared/format/date-time';
-import { formatFor } from '../../../../shared/format/locale';
+import { BookingStatusBadge } from '@client/components/ui/booking-status-badge';
+import { SkinTestFlag } from '@client/components/ui/skin-test-flag';
+import { sittingLabel } from '@client/lib/booking-labels';
+import { formatRange } from '@shared/format/date-time';
+import { formatFor } from '@shared/format/locale';
 import type { PlacedSitting } from '../lay-out-day';
 import { StepSegment } from './step-segment';
 import { PX_PER_MIN } from './timeline-scale';

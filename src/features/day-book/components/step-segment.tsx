@@ -1,11 +1,11 @@
 import type { z } from 'zod';
-import type { StepViewSchema } from '../../../../shared/schemas/booking-view.schemas';
-import { StepKindIcon } from '../../../components/ui/step-kind-icon';
-import { stepKindPattern } from '../../../components/ui/step-kind-swatch';
-import { stepKindLabels } from '../../../lib/booking-labels';
-import { minutesBetween } from '../../../lib/time';
-import { formatRange } from '../../../../shared/format/date-time';
-import { formatFor } from '../../../../shared/format/locale';
+import type { StepViewSchema } from '@shared/schemas/booking-view.schemas';
+import { StepKindIcon } from '@client/components/ui/step-kind-icon';
+import { stepKindPattern } from '@client/components/ui/step-kind-swatch';
+import { stepKindLabels } from '@client/lib/booking-labels';
+import { minutesBetween } from '@client/lib/time';
+import { formatRange } from '@shared/format/date-time';
+import { formatFor } from '@shared/format/locale';
 import { PX_PER_MIN } from './timeline-scale';
 
 type Props = {

@@ -1,5 +1,5 @@
 import { useId } from 'react';
-import type { HandsFreeWindowView } from '../../../../shared/schemas/window.schemas';
+import type { HandsFreeWindowView } from '@shared/schemas/window.schemas';
 import type { PlacedSitting } from '../lay-out-day';
 import { SittingBlock } from './sitting-block';
 import { WindowBand } from './window-band';

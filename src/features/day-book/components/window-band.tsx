@@ -1,8 +1,8 @@
-import type { HandsFreeWindowView } from '../../../../shared/schemas/window.schemas';
-import { minutesBetween } from '../../../lib/time';
-import { formatRange } from '../../../../shared/format/date-time';
-import { formatFor } from '../../../../shared/format/locale';
-import { minutesIntoDay } from '../../../../shared/time/salon-time';
+import type { HandsFreeWindowView } from '@shared/schemas/window.schemas';
+import { minutesBetween } from '@client/lib/time';
+import { formatRange } from '@shared/format/date-time';
+import { formatFor } from '@shared/format/locale';
+import { minutesIntoDay } from '@shared/time/salon-time';
 import { PX_PER_MIN } from './timeline-scale';
 
 type Props = { window: HandsFreeWindowView; date: string; firstHour: number; timeZone: string };

@@ -1,9 +1,9 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { z } from 'zod';
-import { followUpRulesApi } from '../../../../shared/api/follow-up-rules.api';
-import type { FollowUpRuleBodySchema } from '../../../../shared/schemas/follow-up-rules.schemas';
-import { apiQuery, callApi } from '../../../lib/api-client';
-import { followUpRulesChanged } from '../../../lib/cache-rules';
+import { followUpRulesApi } from '@shared/api/follow-up-rules.api';
+import type { FollowUpRuleBodySchema } from '@shared/schemas/follow-up-rules.schemas';
+import { apiQuery, callApi } from '@client/lib/api-client';
+import { followUpRulesChanged } from '@client/lib/cache-rules';
 
 export const followUpQueries = {
   list: () => apiQuery(followUpRulesApi.list),

@@ -1,7 +1,7 @@
 import { DateTime } from 'luxon';
-import { formatDateTime } from '../../../../shared/format/date-time';
-import { formatFor } from '../../../../shared/format/locale';
-import { followUpRuleProblem, followUpTimes } from '../../../../shared/messages/follow-up-times';
+import { formatDateTime } from '@shared/format/date-time';
+import { formatFor } from '@shared/format/locale';
+import { followUpRuleProblem, followUpTimes } from '@shared/messages/follow-up-times';
 
 type Props = { rrule: string; timeZone: string; now: Date };
 

@@ -1,14 +1,14 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm, useWatch } from 'react-hook-form';
 import type { z } from 'zod';
-import { FollowUpRuleBodySchema, type FollowUpRule } from '../../../../shared/schemas/follow-up-rules.schemas';
-import type { ServiceSummary } from '../../../../shared/schemas/service.schemas';
-import { Button } from '../../../components/ui/button';
-import { FormAlert } from '../../../components/ui/form-alert';
-import { SelectField } from '../../../components/ui/select-field';
-import { TextAreaField } from '../../../components/ui/text-area-field';
-import { TextField } from '../../../components/ui/text-field';
-import { showServerErrors } from '../../../lib/form-errors';
+import { FollowUpRuleBodySchema, type FollowUpRule } from '@shared/schemas/follow-up-rules.schemas';
+import type { ServiceSummary } from '@shared/schemas/service.schemas';
+import { Button } from '@client/components/ui/button';
+import { FormAlert } from '@client/components/ui/form-alert';
+import { SelectField } from '@client/components/ui/select-field';
+import { TextAreaField } from '@client/components/ui/text-area-field';
+import { TextField } from '@client/components/ui/text-field';
+import { showServerErrors } from '@client/lib/form-errors';
 import { useSaveFollowUpRule } from '../api/follow-up-queries';
 import { FollowUpPreview } from './follow-up-preview';
 

@@ -1,9 +1,9 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { hairHistoryApi } from '../../../../shared/api/hair-history.api';
-import type { HairHistory, HairHistoryResponse } from '../../../../shared/schemas/hair-history.schemas';
-import { callApi } from '../../../lib/api-client';
-import { hairHistoryChanged } from '../../../lib/cache-rules';
-import type { RecordOwner } from '../../../lib/record-owner';
+import { hairHistoryApi } from '@shared/api/hair-history.api';
+import type { HairHistory, HairHistoryResponse } from '@shared/schemas/hair-history.schemas';
+import { callApi } from '@client/lib/api-client';
+import { hairHistoryChanged } from '@client/lib/cache-rules';
+import type { RecordOwner } from '@client/lib/record-owner';
 import { hairHistoryQueries } from './hair-history-queries';
 
 export function useSaveHairHistory(owner: RecordOwner) {

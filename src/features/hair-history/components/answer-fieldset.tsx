@@ -1,6 +1,6 @@
 import type { UseFormRegister } from 'react-hook-form';
-import type { HairHistory } from '../../../../shared/schemas/hair-history.schemas';
-import { TextField } from '../../../components/ui/text-field';
+import type { HairHistory } from '@shared/schemas/hair-history.schemas';
+import { TextField } from '@client/components/ui/text-field';
 import { answerLabels } from './hair-history-labels';
 
 type AnswerName = 'boxDye' | 'plantDyes' | 'vividDyes' | 'previousReaction';

@@ -1,4 +1,4 @@
-import type { HairAnswer, HairHistory } from '../../../../shared/schemas/hair-history.schemas';
+import type { HairAnswer, HairHistory } from '@shared/schemas/hair-history.schemas';
 
 export const answerLabels: Record<HairAnswer, string> = { no: 'No', yes: 'Yes', not_sure: 'Not sure' };
 

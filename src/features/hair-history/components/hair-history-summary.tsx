@@ -1,9 +1,9 @@
 import { useQuery } from '@tanstack/react-query';
-import type { HairHistory } from '../../../../shared/schemas/hair-history.schemas';
-import { FormAlert } from '../../../components/ui/form-alert';
-import { LoadingState } from '../../../components/ui/loading-state';
-import { formatDate } from '../../../../shared/format/date-time';
-import { deviceFormat } from '../../../lib/time';
+import type { HairHistory } from '@shared/schemas/hair-history.schemas';
+import { FormAlert } from '@client/components/ui/form-alert';
+import { LoadingState } from '@client/components/ui/loading-state';
+import { formatDate } from '@shared/format/date-time';
+import { deviceFormat } from '@client/lib/time';
 import { hairHistoryQueries } from '../api/hair-history-queries';
 import { answerLabels, answerQuestions, methodLabels, structuralLabels } from './hair-history-labels';
 import { ReactionCaution } from './reaction-caution';

@@ -1,8 +1,8 @@
 import { useFieldArray, type Control, type FieldErrors, type UseFormRegister } from 'react-hook-form';
-import type { HairHistory } from '../../../../shared/schemas/hair-history.schemas';
-import { Button } from '../../../components/ui/button';
-import { TextField } from '../../../components/ui/text-field';
-import { fieldError } from '../../../lib/form-errors';
+import type { HairHistory } from '@shared/schemas/hair-history.schemas';
+import { Button } from '@client/components/ui/button';
+import { TextField } from '@client/components/ui/text-field';
+import { fieldError } from '@client/lib/form-errors';
 
 type Props = { control: Control<HairHistory>; register: UseFormRegister<HairHistory>; errors: FieldErrors<HairHistory> };
 

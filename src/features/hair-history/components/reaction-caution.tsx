@@ -1,5 +1,5 @@
-import { REACTION_CAUTION } from '../../../../shared/schemas/hair-history.schemas';
-import { Notice } from '../../../components/ui/notice';
+import { REACTION_CAUTION } from '@shared/schemas/hair-history.schemas';
+import { Notice } from '@client/components/ui/notice';
 
 /**
  * The usual caution beside the reaction question. It is always visible (people skim), and turns from a

@@ -1,9 +1,9 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { z } from 'zod';
-import { mixLogsApi } from '../../../../shared/api/mix-logs.api';
-import type { RepeatMixLogSchema, WriteMixLog } from '../../../../shared/schemas/mix-log.schemas';
-import { apiQuery, callApi } from '../../../lib/api-client';
-import { mixLogChanged } from '../../../lib/cache-rules';
+import { mixLogsApi } from '@shared/api/mix-logs.api';
+import type { RepeatMixLogSchema, WriteMixLog } from '@shared/schemas/mix-log.schemas';
+import { apiQuery, callApi } from '@client/lib/api-client';
+import { mixLogChanged } from '@client/lib/cache-rules';
 
 export const mixLogQueries = {
   list: (bookingId: string) => apiQuery(mixLogsApi.list, { params: { id: bookingId } }),

@@ -1,12 +1,12 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useRef } from 'react';
 import { useFieldArray, useForm, useWatch } from 'react-hook-form';
-import { WriteMixLogSchema, type ProductType, type WriteMixLog } from '../../../../shared/schemas/mix-log.schemas';
-import { Button } from '../../../components/ui/button';
-import { FormAlert } from '../../../components/ui/form-alert';
-import { SelectField } from '../../../components/ui/select-field';
-import { TextField } from '../../../components/ui/text-field';
-import { fieldError, showServerErrors } from '../../../lib/form-errors';
+import { WriteMixLogSchema, type ProductType, type WriteMixLog } from '@shared/schemas/mix-log.schemas';
+import { Button } from '@client/components/ui/button';
+import { FormAlert } from '@client/components/ui/form-alert';
+import { SelectField } from '@client/components/ui/select-field';
+import { TextField } from '@client/components/ui/text-field';
+import { fieldError, showServerErrors } from '@client/lib/form-errors';
 import { useWriteMixLog } from '../api/mix-log-queries';
 import { partKindOptions, productTypeOptions } from '../product-type-labels';
 import { DeveloperHelper } from './developer-helper';

@@ -1,5 +1,5 @@
-import { bowlPercent, percentToVolume, ratioBowlPercent, strengthWords, volumeToPercent } from '../../../../shared/calculators/developer';
-import type { MixPart } from '../../../../shared/schemas/mix-log.schemas';
+import { bowlPercent, percentToVolume, ratioBowlPercent, strengthWords, volumeToPercent } from '@shared/calculators/developer';
+import type { MixPart } from '@shared/schemas/mix-log.schemas';
 
 type Props = { developerPercent: number | null; ratio: string; parts: Pick<MixPart, 'kind' | 'grams'>[] };
 

@@ -1,8 +1,8 @@
 import { useState } from 'react';
 import { useController, type Control } from 'react-hook-form';
-import { percentToVolume, strengthWords, volumeToPercent } from '../../../../shared/calculators/developer';
-import type { WriteMixLog } from '../../../../shared/schemas/mix-log.schemas';
-import { TextField } from '../../../components/ui/text-field';
+import { percentToVolume, strengthWords, volumeToPercent } from '@shared/calculators/developer';
+import type { WriteMixLog } from '@shared/schemas/mix-log.schemas';
+import { TextField } from '@client/components/ui/text-field';
 
 type Props = { control: Control<WriteMixLog>; maxPercent: number };
 

@@ -1,5 +1,5 @@
-import { EU_HAIR_LIMIT_WORDS, strengthWords } from '../../../../shared/calculators/developer';
-import { Notice } from '../../../components/ui/notice';
+import { EU_HAIR_LIMIT_WORDS, strengthWords } from '@shared/calculators/developer';
+import { Notice } from '@client/components/ui/notice';
 
 /** Shown wherever bowls are mixed: peroxide and persulfate powders hurt skin, eyes and lungs. */
 export function MixLogCaution({ maxPercent }: { maxPercent: number }) {

@@ -1,20 +1,20 @@
 import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
-import { strengthWords } from '../../../../shared/calculators/developer';
-import { mixLogWritable, type MixLog } from '../../../../shared/schemas/mix-log.schemas';
-import { LoadingState } from '../../../components/ui/loading-state';
-import { Notice } from '../../../components/ui/notice';
-import { SectionCard } from '../../../components/ui/section-card';
-import { SelectField } from '../../../components/ui/select-field';
-import { formatDate, formatTime } from '../../../../shared/format/date-time';
-import { formatFor } from '../../../../shared/format/locale';
+import { strengthWords } from '@shared/calculators/developer';
+import { mixLogWritable, type MixLog } from '@shared/schemas/mix-log.schemas';
+import { LoadingState } from '@client/components/ui/loading-state';
+import { Notice } from '@client/components/ui/notice';
+import { SectionCard } from '@client/components/ui/section-card';
+import { SelectField } from '@client/components/ui/select-field';
+import { formatDate, formatTime } from '@shared/format/date-time';
+import { formatFor } from '@shared/format/locale';
 import { mixLogQueries } from '../api/mix-log-queries';
 import { partKindLabels, productTypeLabels } from '../product-type-labels';
 import { BowlForm } from './bowl-form';
 import { MixLogCaution } from './mix-log-caution';
 import { ProductUseSummary } from './product-use-summary';
 import { RepeatForm } from './repeat-form';
-import { PhotoUploader } from '../../photos/components/photo-uploader';
+import { PhotoUploader } from '@client/features/photos';
 
 type Props = { bookingId: string; timeZone: string; clientId?: string; currency: string };
 

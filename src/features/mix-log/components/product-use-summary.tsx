@@ -1,6 +1,6 @@
-import type { ProductUseLine } from '../../../../shared/schemas/mix-log.schemas';
+import type { ProductUseLine } from '@shared/schemas/mix-log.schemas';
 import { partKindLabels } from '../product-type-labels';
-import { formatMoney } from '../../../../shared/money/money';
+import { formatMoney } from '@shared/money/money';
 
 type Props = { totals: ProductUseLine[]; totalGrams: number; estimatedCostCents: number | null; currency: string };
 

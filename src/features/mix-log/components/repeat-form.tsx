@@ -1,11 +1,11 @@
 import { useState } from 'react';
-import type { RepeatSource } from '../../../../shared/schemas/mix-log.schemas';
-import { Button } from '../../../components/ui/button';
-import { FormAlert } from '../../../components/ui/form-alert';
-import { SelectField } from '../../../components/ui/select-field';
-import { isApiError } from '../../../lib/api-error';
-import { formatDate } from '../../../../shared/format/date-time';
-import { formatFor } from '../../../../shared/format/locale';
+import type { RepeatSource } from '@shared/schemas/mix-log.schemas';
+import { Button } from '@client/components/ui/button';
+import { FormAlert } from '@client/components/ui/form-alert';
+import { SelectField } from '@client/components/ui/select-field';
+import { isApiError } from '@client/lib/api-error';
+import { formatDate } from '@shared/format/date-time';
+import { formatFor } from '@shared/format/locale';
 import { useRepeatMixLog } from '../api/mix-log-queries';
 
 type Props = {

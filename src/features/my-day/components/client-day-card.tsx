@@ -1,14 +1,14 @@
 import type { DateTime } from 'luxon';
 import { Link } from 'react-router-dom';
-import type { BookingView, SittingView } from '../../../../shared/schemas/booking-view.schemas';
-import { BookingStatusBadge } from '../../../components/ui/booking-status-badge';
-import { SkinTestFlag } from '../../../components/ui/skin-test-flag';
-import { StepKindIcon } from '../../../components/ui/step-kind-icon';
-import { StepStrip } from '../../../components/ui/step-strip';
-import { sittingLabel, stepKindLabels } from '../../../lib/booking-labels';
-import { formatRange, formatTime } from '../../../../shared/format/date-time';
-import { formatFor } from '../../../../shared/format/locale';
-import { paths } from '../../../config/paths';
+import type { BookingView, SittingView } from '@shared/schemas/booking-view.schemas';
+import { BookingStatusBadge } from '@client/components/ui/booking-status-badge';
+import { SkinTestFlag } from '@client/components/ui/skin-test-flag';
+import { StepKindIcon } from '@client/components/ui/step-kind-icon';
+import { StepStrip } from '@client/components/ui/step-strip';
+import { sittingLabel, stepKindLabels } from '@client/lib/booking-labels';
+import { formatRange, formatTime } from '@shared/format/date-time';
+import { formatFor } from '@shared/format/locale';
+import { paths } from '@client/config/paths';
 import { sittingProgress } from '../timer-state';
 import { DevelopingTimer } from './developing-timer';
 

@@ -1,5 +1,5 @@
 import type { DateTime } from 'luxon';
-import type { SittingView } from '../../../../shared/schemas/booking-view.schemas';
+import type { SittingView } from '@shared/schemas/booking-view.schemas';
 import { developingTimer, type DevelopingPhase } from '../timer-state';
 
 type Props = { step: SittingView['steps'][number]; now: DateTime };

@@ -1,7 +1,7 @@
 import { useMemo } from 'react';
-import type { DayView } from '../../../../shared/schemas/booking-view.schemas';
-import { localDateOf } from '../../../../shared/time/salon-time';
-import { useNow } from '../../../lib/use-now';
+import type { DayView } from '@shared/schemas/booking-view.schemas';
+import { localDateOf } from '@shared/time/salon-time';
+import { useNow } from '@client/lib/use-now';
 import { ClientDayCard } from './client-day-card';
 
 type Props = { day: DayView };

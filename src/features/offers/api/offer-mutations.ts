@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { offersApi } from '../../../../shared/api/windows.api';
-import { callApi } from '../../../lib/api-client';
-import { offerRefused, offerTaken } from '../../../lib/cache-rules';
+import { offersApi } from '@shared/api/windows.api';
+import { callApi } from '@client/lib/api-client';
+import { offerRefused, offerTaken } from '@client/lib/cache-rules';
 
 /** Take an offered time; the answer replaces the cached offer (status "taken"). */
 export function useAcceptOffer(token: string) {

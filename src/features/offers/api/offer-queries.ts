@@ -1,5 +1,5 @@
-import { offersApi } from '../../../../shared/api/windows.api';
-import { apiQuery } from '../../../lib/api-client';
+import { offersApi } from '@shared/api/windows.api';
+import { apiQuery } from '@client/lib/api-client';
 
 export const offerQueries = {
   // Always read afresh: someone else may take the time at any moment.

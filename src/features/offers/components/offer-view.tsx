@@ -1,10 +1,10 @@
 import type { z } from 'zod';
-import type { OfferViewSchema } from '../../../../shared/schemas/window.schemas';
-import { Button } from '../../../components/ui/button';
-import { FormAlert } from '../../../components/ui/form-alert';
-import { zoneLabel } from '../../../lib/time';
-import { formatDate, formatTime } from '../../../../shared/format/date-time';
-import { formatFor } from '../../../../shared/format/locale';
+import type { OfferViewSchema } from '@shared/schemas/window.schemas';
+import { Button } from '@client/components/ui/button';
+import { FormAlert } from '@client/components/ui/form-alert';
+import { zoneLabel } from '@client/lib/time';
+import { formatDate, formatTime } from '@shared/format/date-time';
+import { formatFor } from '@shared/format/locale';
 import { useAcceptOffer } from '../api/offer-mutations';
 
 type Offer = z.output<typeof OfferViewSchema>;

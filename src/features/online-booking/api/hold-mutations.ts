@@ -1,10 +1,10 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { z } from 'zod';
-import { onlineBookingApi } from '../../../../shared/api/online-booking.api';
-import type { CreateHoldSchema, PayHoldSchema } from '../../../../shared/schemas/online-booking.schemas';
-import { callApi } from '../../../lib/api-client';
-import { isApiError } from '../../../lib/api-error';
-import { freeTimesTaken, holdLapsed, holdReleased, openHoldsChanged, timeHeld } from '../../../lib/cache-rules';
+import { onlineBookingApi } from '@shared/api/online-booking.api';
+import type { CreateHoldSchema, PayHoldSchema } from '@shared/schemas/online-booking.schemas';
+import { callApi } from '@client/lib/api-client';
+import { isApiError } from '@client/lib/api-error';
+import { freeTimesTaken, holdLapsed, holdReleased, openHoldsChanged, timeHeld } from '@client/lib/cache-rules';
 
 /** Hold a free time. Taken meanwhile (409): the free times are stale, so they are fetched again. */
 export function useCreateHold() {

@@ -1,5 +1,5 @@
-import { onlineBookingApi } from '../../../../shared/api/online-booking.api';
-import { apiQuery } from '../../../lib/api-client';
+import { onlineBookingApi } from '@shared/api/online-booking.api';
+import { apiQuery } from '@client/lib/api-client';
 
 export type AvailabilityAsk = { serviceId: string; stylistId?: string; from?: string };
 

@@ -1,6 +1,6 @@
 import { Link } from 'react-router-dom';
-import { buttonClasses } from '../../../components/ui/button';
-import { paths } from '../../../config/paths';
+import { buttonClasses } from '@client/components/ui/button';
+import { paths } from '@client/config/paths';
 import { StepHeading } from './step-heading';
 
 type Props = { returnTo: string; focusOnMount: boolean };

@@ -1,18 +1,18 @@
 import { useQuery } from '@tanstack/react-query';
 import { Link } from 'react-router-dom';
-import { skinTestWords } from '../../../../shared/rules/skin-test-words';
-import { urlOf } from '../../../../shared/api/endpoint';
-import { onlineBookingApi } from '../../../../shared/api/online-booking.api';
-import type { BookingView } from '../../../../shared/schemas/booking-view.schemas';
-import type { Salon } from '../../../../shared/schemas/salon.schemas';
-import { buttonClasses } from '../../../components/ui/button';
-import { paths } from '../../../config/paths';
-import { zoneLabel } from '../../../lib/time';
-import { formatDate, formatRange } from '../../../../shared/format/date-time';
-import { formatFor } from '../../../../shared/format/locale';
+import { skinTestWords } from '@shared/rules/skin-test-words';
+import { urlOf } from '@shared/api/endpoint';
+import { onlineBookingApi } from '@shared/api/online-booking.api';
+import type { BookingView } from '@shared/schemas/booking-view.schemas';
+import type { Salon } from '@shared/schemas/salon.schemas';
+import { buttonClasses } from '@client/components/ui/button';
+import { paths } from '@client/config/paths';
+import { zoneLabel } from '@client/lib/time';
+import { formatDate, formatRange } from '@shared/format/date-time';
+import { formatFor } from '@shared/format/locale';
 import { onlineBookingQueries } from '../api/online-booking-queries';
 import { confirmationWords } from '../confirmation-words';
-import { formatMoney } from '../../../../shared/money/money';
+import { formatMoney } from '@shared/money/money';
 
 type Props = { booking: BookingView; salon: Pick<Salon, 'name' | 'address' | 'phone' | 'timeZone' | 'currency' | 'skinTestLeadHours'> };
 

@@ -2,9 +2,9 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { DateTime } from 'luxon';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
-import { Button } from '../../../components/ui/button';
-import { FormAlert } from '../../../components/ui/form-alert';
-import { TextField } from '../../../components/ui/text-field';
+import { Button } from '@client/components/ui/button';
+import { FormAlert } from '@client/components/ui/form-alert';
+import { TextField } from '@client/components/ui/text-field';
 import { cardFieldsSchema, emptyCardFields, type Card, type CardFields } from '../card-fields';
 
 type Props = { amount: string; paying: boolean; problem: string | null; onPay: (card: Card) => void };

@@ -1,7 +1,7 @@
 import { useState } from 'react';
-import type { Cautions } from '../../../../shared/schemas/online-booking.schemas';
-import { Button } from '../../../components/ui/button';
-import { FormAlert } from '../../../components/ui/form-alert';
+import type { Cautions } from '@shared/schemas/online-booking.schemas';
+import { Button } from '@client/components/ui/button';
+import { FormAlert } from '@client/components/ui/form-alert';
 import { useAcceptCautions } from '../api/hold-mutations';
 import { StepHeading } from './step-heading';
 

@@ -1,10 +1,10 @@
 import { useQuery } from '@tanstack/react-query';
 import { useEffect, useRef } from 'react';
 import type { z } from 'zod';
-import type { ClaimedHoldSchema } from '../../../../shared/schemas/online-booking.schemas';
-import { Button } from '../../../components/ui/button';
-import { FormAlert } from '../../../components/ui/form-alert';
-import { LoadingState } from '../../../components/ui/loading-state';
+import type { ClaimedHoldSchema } from '@shared/schemas/online-booking.schemas';
+import { Button } from '@client/components/ui/button';
+import { FormAlert } from '@client/components/ui/form-alert';
+import { LoadingState } from '@client/components/ui/loading-state';
 import { useClaimHold, useReleaseHold } from '../api/hold-mutations';
 import { onlineBookingQueries } from '../api/online-booking-queries';
 import type { StoredHold } from '../hold-store';

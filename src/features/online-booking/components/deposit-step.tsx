@@ -1,13 +1,13 @@
-import type { BookingView } from '../../../../shared/schemas/booking-view.schemas';
-import type { Hold } from '../../../../shared/schemas/online-booking.schemas';
-import { Button } from '../../../components/ui/button';
-import { FormAlert } from '../../../components/ui/form-alert';
-import { useIdempotencyKeys } from '../../../lib/use-idempotency-keys';
+import type { BookingView } from '@shared/schemas/booking-view.schemas';
+import type { Hold } from '@shared/schemas/online-booking.schemas';
+import { Button } from '@client/components/ui/button';
+import { FormAlert } from '@client/components/ui/form-alert';
+import { useIdempotencyKeys } from '@client/lib/use-idempotency-keys';
 import { usePayHold } from '../api/hold-mutations';
 import type { Card } from '../card-fields';
 import { CardForm } from './card-form';
 import { StepHeading } from './step-heading';
-import { formatMoney } from '../../../../shared/money/money';
+import { formatMoney } from '@shared/money/money';
 
 type Props = { hold: Hold; secret: string; cancellationPolicy: string; focusOnMount: boolean; onBooked: (booking: BookingView) => void };
 

@@ -1,6 +1,6 @@
-import { SectionCard } from '../../../components/ui/section-card';
-import { HairHistoryForm } from '../../hair-history/components/hair-history-form';
-import { PhotoUploader } from '../../photos/components/photo-uploader';
+import { SectionCard } from '@client/components/ui/section-card';
+import { HairHistoryForm } from '@client/features/hair-history';
+import { PhotoUploader } from '@client/features/photos';
 import { StepHeading } from './step-heading';
 
 type Props = { holdId: string; focusOnMount: boolean; onDone: () => void };

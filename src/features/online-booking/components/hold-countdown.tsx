@@ -1,5 +1,5 @@
 import { useEffect } from 'react';
-import { useNow } from '../../../lib/use-now';
+import { useNow } from '@client/lib/use-now';
 import { countdownMark, formatCountdown, secondsLeft, spokenCountdown } from '../countdown';
 
 type Props = { heldUntil: string; onExpire: () => void };

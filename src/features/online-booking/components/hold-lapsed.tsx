@@ -1,5 +1,5 @@
-import { Button } from '../../../components/ui/button';
-import { Notice } from '../../../components/ui/notice';
+import { Button } from '@client/components/ui/button';
+import { Notice } from '@client/components/ui/notice';
 
 type Props = { onPickAgain: () => void };
 

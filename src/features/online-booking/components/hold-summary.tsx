@@ -1,10 +1,10 @@
 import type { ReactNode } from 'react';
-import type { Hold } from '../../../../shared/schemas/online-booking.schemas';
-import { zoneLabel } from '../../../lib/time';
-import { formatDate, formatRange } from '../../../../shared/format/date-time';
-import { formatFor } from '../../../../shared/format/locale';
+import type { Hold } from '@shared/schemas/online-booking.schemas';
+import { zoneLabel } from '@client/lib/time';
+import { formatDate, formatRange } from '@shared/format/date-time';
+import { formatFor } from '@shared/format/locale';
 import { HoldCountdown } from './hold-countdown';
-import { formatMoney } from '../../../../shared/money/money';
+import { formatMoney } from '@shared/money/money';
 
 /** `action`: what may be done with the held time from here (a signed-in client may release it). */
 type Props = { hold: Hold; onExpire: () => void; action?: ReactNode };

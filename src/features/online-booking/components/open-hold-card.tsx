@@ -1,10 +1,10 @@
 import { useQueryClient } from '@tanstack/react-query';
 import { useCallback } from 'react';
-import type { OpenHold } from '../../../../shared/schemas/online-booking.schemas';
-import { Button } from '../../../components/ui/button';
-import { FormAlert } from '../../../components/ui/form-alert';
+import type { OpenHold } from '@shared/schemas/online-booking.schemas';
+import { Button } from '@client/components/ui/button';
+import { FormAlert } from '@client/components/ui/form-alert';
 import { useReleaseHold, useResumeHold } from '../api/hold-mutations';
-import { openHoldsChanged } from '../../../lib/cache-rules';
+import { openHoldsChanged } from '@client/lib/cache-rules';
 import { forgetStoredHold, storedFromResumed, type StoredHold } from '../hold-store';
 import { HoldSummary } from './hold-summary';
 

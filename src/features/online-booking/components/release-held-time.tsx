@@ -1,5 +1,5 @@
-import { Button } from '../../../components/ui/button';
-import { FormAlert } from '../../../components/ui/form-alert';
+import { Button } from '@client/components/ui/button';
+import { FormAlert } from '@client/components/ui/form-alert';
 import { useReleaseHold } from '../api/hold-mutations';
 
 type Props = { holdId: string; secret: string; onReleased: () => void };

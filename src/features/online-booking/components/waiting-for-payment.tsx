@@ -1,6 +1,6 @@
 import { useSuspenseQuery } from '@tanstack/react-query';
 import { useNavigate } from 'react-router-dom';
-import { paths } from '../../../config/paths';
+import { paths } from '@client/config/paths';
 import { onlineBookingQueries } from '../api/online-booking-queries';
 import { writeStoredHold } from '../hold-store';
 import { OpenHoldCard } from './open-hold-card';

@@ -1,5 +1,5 @@
-import { mailboxApi } from '../../../../shared/api/mailbox.api';
-import { apiQuery } from '../../../lib/api-client';
+import { mailboxApi } from '@shared/api/mailbox.api';
+import { apiQuery } from '@client/lib/api-client';
 
 export const mailboxQueries = {
   // New mail arrives without anyone on this page doing anything.

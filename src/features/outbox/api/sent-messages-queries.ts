@@ -1,5 +1,5 @@
-import { messagesApi } from '../../../../shared/api/messages.api';
-import { apiQuery } from '../../../lib/api-client';
+import { messagesApi } from '@shared/api/messages.api';
+import { apiQuery } from '@client/lib/api-client';
 
 export const sentMessagesQueries = {
   list: () => ({ ...apiQuery(messagesApi.sendLog), staleTime: 0 }),

@@ -1,11 +1,11 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
 import type { z } from 'zod';
-import { SimulateInboundSmsSchema } from '../../../../shared/schemas/inbound-sms.schemas';
-import { Button } from '../../../components/ui/button';
-import { FormAlert } from '../../../components/ui/form-alert';
-import { TextField } from '../../../components/ui/text-field';
-import { showServerErrors } from '../../../lib/form-errors';
+import { SimulateInboundSmsSchema } from '@shared/schemas/inbound-sms.schemas';
+import { Button } from '@client/components/ui/button';
+import { FormAlert } from '@client/components/ui/form-alert';
+import { TextField } from '@client/components/ui/text-field';
+import { showServerErrors } from '@client/lib/form-errors';
 import { useSimulateInboundSms } from '../api/inbound-sms-mutations';
 
 type Input = z.input<typeof SimulateInboundSmsSchema>;

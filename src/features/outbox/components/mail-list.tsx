@@ -1,6 +1,6 @@
-import type { CapturedMail } from '../../../../shared/schemas/mailbox.schemas';
-import { formatDate, formatTime } from '../../../../shared/format/date-time';
-import { formatFor } from '../../../../shared/format/locale';
+import type { CapturedMail } from '@shared/schemas/mailbox.schemas';
+import { formatDate, formatTime } from '@shared/format/date-time';
+import { formatFor } from '@shared/format/locale';
 import { LinkedText } from './linked-text';
 
 type Props = { messages: CapturedMail[]; timeZone: string };

@@ -1,6 +1,6 @@
-import type { SentMessage } from '../../../../shared/schemas/messages.schemas';
-import { formatDate, formatTime } from '../../../../shared/format/date-time';
-import { formatFor } from '../../../../shared/format/locale';
+import type { SentMessage } from '@shared/schemas/messages.schemas';
+import { formatDate, formatTime } from '@shared/format/date-time';
+import { formatFor } from '@shared/format/locale';
 
 type Props = { messages: SentMessage[]; timeZone: string };
 

@@ -1,6 +1,6 @@
-import type { CapturedSms } from '../../../../shared/schemas/sms.schemas';
-import { formatDate, formatTime } from '../../../../shared/format/date-time';
-import { formatFor } from '../../../../shared/format/locale';
+import type { CapturedSms } from '@shared/schemas/sms.schemas';
+import { formatDate, formatTime } from '@shared/format/date-time';
+import { formatFor } from '@shared/format/locale';
 import { LinkedText } from './linked-text';
 
 type Props = { messages: CapturedSms[]; timeZone: string };

@@ -1,5 +1,5 @@
-import { ownerApi } from '../../../../shared/api/owner.api';
-import { apiQuery } from '../../../lib/api-client';
+import { ownerApi } from '@shared/api/owner.api';
+import { apiQuery } from '@client/lib/api-client';
 
 export const ownerQueries = {
   overview: () => apiQuery(ownerApi.overview),

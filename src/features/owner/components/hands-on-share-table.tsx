@@ -1,6 +1,6 @@
-import type { OwnerOverview } from '../../../../shared/schemas/owner.schemas';
-import { SectionCard } from '../../../components/ui/section-card';
-import { formatPercent } from '../../../lib/booking-labels';
+import type { OwnerOverview } from '@shared/schemas/owner.schemas';
+import { SectionCard } from '@client/components/ui/section-card';
+import { formatPercent } from '@client/lib/booking-labels';
 
 type Props = { rows: OwnerOverview['week']['handsOnShare'] };
 

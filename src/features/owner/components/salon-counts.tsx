@@ -1,5 +1,5 @@
-import type { OwnerOverview } from '../../../../shared/schemas/owner.schemas';
-import { SectionCard } from '../../../components/ui/section-card';
+import type { OwnerOverview } from '@shared/schemas/owner.schemas';
+import { SectionCard } from '@client/components/ui/section-card';
 import { StatTile } from './stat-tile';
 
 type Props = { counts: OwnerOverview['counts'] };

@@ -1,9 +1,9 @@
-import type { OwnerOverview } from '../../../../shared/schemas/owner.schemas';
-import { SectionCard } from '../../../components/ui/section-card';
-import { formatPercent } from '../../../lib/booking-labels';
-import { formatDate } from '../../../../shared/format/date-time';
-import { zonelessFormat } from '../../../../shared/format/locale';
-import { shiftLocalDate } from '../../../../shared/time/salon-time';
+import type { OwnerOverview } from '@shared/schemas/owner.schemas';
+import { SectionCard } from '@client/components/ui/section-card';
+import { formatPercent } from '@client/lib/booking-labels';
+import { formatDate } from '@shared/format/date-time';
+import { zonelessFormat } from '@shared/format/locale';
+import { shiftLocalDate } from '@shared/time/salon-time';
 import { StatTile } from './stat-tile';
 
 type Props = { week: OwnerOverview['week'] };

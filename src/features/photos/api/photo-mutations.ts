@@ -1,10 +1,10 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { urlOf } from '../../../../shared/api/endpoint';
-import { photosApi } from '../../../../shared/api/photos.api';
-import type { PhotoKind } from '../../../../shared/schemas/photo.schemas';
-import { callApi } from '../../../lib/api-client';
-import { photosChanged } from '../../../lib/cache-rules';
-import { uploadForm } from '../../../lib/upload-file';
+import { urlOf } from '@shared/api/endpoint';
+import { photosApi } from '@shared/api/photos.api';
+import type { PhotoKind } from '@shared/schemas/photo.schemas';
+import { callApi } from '@client/lib/api-client';
+import { photosChanged } from '@client/lib/cache-rules';
+import { uploadForm } from '@client/lib/upload-file';
 import type { PhotoOwner } from './photo-queries';
 
 export type UploadInput = { files: File[]; kind: PhotoKind; bookingId?: string };

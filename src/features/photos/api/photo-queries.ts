@@ -1,6 +1,6 @@
-import { photosApi } from '../../../../shared/api/photos.api';
-import { apiQuery } from '../../../lib/api-client';
-import type { RecordOwner } from '../../../lib/record-owner';
+import { photosApi } from '@shared/api/photos.api';
+import { apiQuery } from '@client/lib/api-client';
+import type { RecordOwner } from '@client/lib/record-owner';
 
 export type PhotoOwner = RecordOwner;
 

@@ -1,4 +1,4 @@
-import { PhotoKindSchema } from '../../../../shared/schemas/photo.schemas';
+import { PhotoKindSchema } from '@shared/schemas/photo.schemas';
 import { kindLabelsForStaff } from './photo-labels';
 import { PhotoUploader } from './photo-uploader';
 

@@ -1,4 +1,4 @@
-import type { PhotoKind } from '../../../../shared/schemas/photo.schemas';
+import type { PhotoKind } from '@shared/schemas/photo.schemas';
 
 export const kindLabels: Record<PhotoKind, string> = { hair_now: 'Your hair now', wanted: 'What you would like' };
 /** The same kinds as the salon's team reads them. */

@@ -1,8 +1,8 @@
-import type { Photo } from '../../../../shared/schemas/photo.schemas';
-import { Button } from '../../../components/ui/button';
-import { FormAlert } from '../../../components/ui/form-alert';
-import { formatDate } from '../../../../shared/format/date-time';
-import { deviceFormat } from '../../../lib/time';
+import type { Photo } from '@shared/schemas/photo.schemas';
+import { Button } from '@client/components/ui/button';
+import { FormAlert } from '@client/components/ui/form-alert';
+import { formatDate } from '@shared/format/date-time';
+import { deviceFormat } from '@client/lib/time';
 import { useRemovePhoto } from '../api/photo-mutations';
 
 type Props = { photos: Photo[]; label: string };

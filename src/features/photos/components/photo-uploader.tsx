@@ -1,8 +1,8 @@
 import { useQuery } from '@tanstack/react-query';
 import { useId, useState, type ChangeEvent } from 'react';
-import { PHOTO_LIMITS, type PhotoKind } from '../../../../shared/schemas/photo.schemas';
-import { FormAlert } from '../../../components/ui/form-alert';
-import { isApiError } from '../../../lib/api-error';
+import { PHOTO_LIMITS, type PhotoKind } from '@shared/schemas/photo.schemas';
+import { FormAlert } from '@client/components/ui/form-alert';
+import { isApiError } from '@client/lib/api-error';
 import { useUploadPhotos } from '../api/photo-mutations';
 import { photoQueries, type PhotoOwner } from '../api/photo-queries';
 import { kindLabels } from './photo-labels';

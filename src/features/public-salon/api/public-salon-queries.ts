@@ -1,5 +1,5 @@
-import { onlineBookingApi } from '../../../../shared/api/online-booking.api';
-import { apiQuery } from '../../../lib/api-client';
+import { onlineBookingApi } from '@shared/api/online-booking.api';
+import { apiQuery } from '@client/lib/api-client';
 
 export const publicSalonQueries = {
   // The menu and policies change rarely; free times are fetched separately and fresh.

@@ -1,6 +1,6 @@
 import { useQuery } from '@tanstack/react-query';
 import { Link } from 'react-router-dom';
-import { paths } from '../../../config/paths';
+import { paths } from '@client/config/paths';
 import { publicSalonQueries } from '../api/public-salon-queries';
 
 type Props = { slug: string };

@@ -1,6 +1,6 @@
-import type { PublicSalon } from '../../../../shared/schemas/online-booking.schemas';
-import { SectionCard } from '../../../components/ui/section-card';
-import { zoneLabel } from '../../../lib/time';
+import type { PublicSalon } from '@shared/schemas/online-booking.schemas';
+import { SectionCard } from '@client/components/ui/section-card';
+import { zoneLabel } from '@client/lib/time';
 import { SalonPolicies } from './salon-policies';
 import { ServiceCard } from './service-card';
 

@@ -1,5 +1,5 @@
-import type { PublicSalon } from '../../../../shared/schemas/online-booking.schemas';
-import { SectionCard } from '../../../components/ui/section-card';
+import type { PublicSalon } from '@shared/schemas/online-booking.schemas';
+import { SectionCard } from '@client/components/ui/section-card';
 
 type Props = { policies: PublicSalon['policies'] };
 

@@ -1,9 +1,9 @@
 import { Link } from 'react-router-dom';
-import type { PublicSalon } from '../../../../shared/schemas/online-booking.schemas';
-import { buttonClasses } from '../../../components/ui/button';
-import { paths } from '../../../config/paths';
-import { formatMinutes } from '../../../lib/time';
-import { formatMoney } from '../../../../shared/money/money';
+import type { PublicSalon } from '@shared/schemas/online-booking.schemas';
+import { buttonClasses } from '@client/components/ui/button';
+import { paths } from '@client/config/paths';
+import { formatMinutes } from '@client/lib/time';
+import { formatMoney } from '@shared/money/money';
 
 type Service = PublicSalon['services'][number];
 type Props = { service: Service; slug: string; currency: string; phone: string };

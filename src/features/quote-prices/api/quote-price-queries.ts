@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { quotePricesApi } from '../../../../shared/api/quote-prices.api';
-import type { QuotePrices } from '../../../../shared/schemas/quote-prices.schemas';
-import { apiQuery, callApi } from '../../../lib/api-client';
+import { quotePricesApi } from '@shared/api/quote-prices.api';
+import type { QuotePrices } from '@shared/schemas/quote-prices.schemas';
+import { apiQuery, callApi } from '@client/lib/api-client';
 
 export const quotePriceQueries = {
   current: () => apiQuery(quotePricesApi.current),

@@ -1,13 +1,13 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
-import { QuotePricesSchema, type QuotePrices } from '../../../../shared/schemas/quote-prices.schemas';
-import { Button } from '../../../components/ui/button';
-import { FormAlert } from '../../../components/ui/form-alert';
-import { TextField } from '../../../components/ui/text-field';
-import { fieldError, showServerErrors } from '../../../lib/form-errors';
-import { MoneyField } from '../../../components/ui/money-field';
-import { CostedProductSchema } from '../../../../shared/schemas/mix-log.schemas';
-import { costedProductLabels } from '../../mix-log/product-type-labels';
+import { QuotePricesSchema, type QuotePrices } from '@shared/schemas/quote-prices.schemas';
+import { Button } from '@client/components/ui/button';
+import { FormAlert } from '@client/components/ui/form-alert';
+import { TextField } from '@client/components/ui/text-field';
+import { fieldError, showServerErrors } from '@client/lib/form-errors';
+import { MoneyField } from '@client/components/ui/money-field';
+import { CostedProductSchema } from '@shared/schemas/mix-log.schemas';
+import { costedProductLabels } from '@client/features/mix-log';
 import { useSaveQuotePrices } from '../api/quote-price-queries';
 
 /** The hourly rate for correction work and the cost per gram of each generic product type and of developer. */

@@ -1,5 +1,5 @@
-import { salonApi } from '../../../../shared/api/salon.api';
-import { apiQuery } from '../../../lib/api-client';
+import { salonApi } from '@shared/api/salon.api';
+import { apiQuery } from '@client/lib/api-client';
 
 export const salonQueries = {
   current: () => ({ ...apiQuery(salonApi.current), staleTime: 10 * 60_000 }),

@@ -1,5 +1,5 @@
-import type { Salon } from '../../../../shared/schemas/salon.schemas';
-import { SectionCard } from '../../../components/ui/section-card';
+import type { Salon } from '@shared/schemas/salon.schemas';
+import { SectionCard } from '@client/components/ui/section-card';
 
 type Props = { salon: Salon };
 

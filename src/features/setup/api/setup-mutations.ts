@@ -1,9 +1,9 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { setupApi } from '../../../../shared/api/setup.api';
-import type { SalonSettings } from '../../../../shared/schemas/salon-settings.schemas';
-import type { OutOfServiceInput, ServiceInput, StaffDetails, StaffInvite, TimeOffInput, UnitKind } from '../../../../shared/schemas/setup.schemas';
-import { callApi } from '../../../lib/api-client';
-import { setupChanged } from '../../../lib/cache-rules';
+import { setupApi } from '@shared/api/setup.api';
+import type { SalonSettings } from '@shared/schemas/salon-settings.schemas';
+import type { OutOfServiceInput, ServiceInput, StaffDetails, StaffInvite, TimeOffInput, UnitKind } from '@shared/schemas/setup.schemas';
+import { callApi } from '@client/lib/api-client';
+import { setupChanged } from '@client/lib/cache-rules';
 
 /** A set-up write; what it makes stale is the set-up cache rule's to say. */
 function useSetupWrite<V, R>(write: (vars: V) => Promise<R>) {

@@ -1,6 +1,6 @@
-import { setupApi } from '../../../../shared/api/setup.api';
-import type { UnitKind } from '../../../../shared/schemas/setup.schemas';
-import { apiQuery } from '../../../lib/api-client';
+import { setupApi } from '@shared/api/setup.api';
+import type { UnitKind } from '@shared/schemas/setup.schemas';
+import { apiQuery } from '@client/lib/api-client';
 
 export const setupQueries = {
   salon: () => apiQuery(setupApi.salon),

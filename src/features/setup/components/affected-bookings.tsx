@@ -1,6 +1,6 @@
-import type { AffectedBooking } from '../../../../shared/schemas/setup.schemas';
-import { formatDate, formatTime } from '../../../../shared/format/date-time';
-import { formatFor } from '../../../../shared/format/locale';
+import type { AffectedBooking } from '@shared/schemas/setup.schemas';
+import { formatDate, formatTime } from '@shared/format/date-time';
+import { formatFor } from '@shared/format/locale';
 
 type Props = { bookings: AffectedBooking[]; timeZone: string; label: string; action?: (b: AffectedBooking) => React.ReactNode };
 

@@ -1,6 +1,6 @@
 import { useFieldArray, useFormContext } from 'react-hook-form';
-import { Button } from '../../../components/ui/button';
-import { fieldError } from '../../../lib/form-errors';
+import { Button } from '@client/components/ui/button';
+import { fieldError } from '@client/lib/form-errors';
 import { WeeklyRuleLine } from './weekly-rule-line';
 
 type Props = { name: string; timeZone: string };

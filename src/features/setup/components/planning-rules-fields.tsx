@@ -1,10 +1,10 @@
 import { useFormContext } from 'react-hook-form';
-import type { SalonSettings, SalonSettingsInput } from '../../../../shared/schemas/salon-settings.schemas';
-import { HARD_MAX_PROCESSING_MINUTES, LIMITED_FAMILIES, limitedFamilyNames, type LimitedFamily } from '../../../../shared/rules/processing-limits';
-import { HAIR_STATES, MAX_LIFT_PER_SITTING, hairStateNames } from '../../../../shared/quotes/lift-per-sitting';
-import { SectionCard } from '../../../components/ui/section-card';
-import { TextField } from '../../../components/ui/text-field';
-import { fieldError } from '../../../lib/form-errors';
+import type { SalonSettings, SalonSettingsInput } from '@shared/schemas/salon-settings.schemas';
+import { HARD_MAX_PROCESSING_MINUTES, LIMITED_FAMILIES, limitedFamilyNames, type LimitedFamily } from '@shared/rules/processing-limits';
+import { HAIR_STATES, MAX_LIFT_PER_SITTING, hairStateNames } from '@shared/quotes/lift-per-sitting';
+import { SectionCard } from '@client/components/ui/section-card';
+import { TextField } from '@client/components/ui/text-field';
+import { fieldError } from '@client/lib/form-errors';
 
 /** What each limit covers, in trade words (common practice ranges beside the field). */
 const limitHints: Record<LimitedFamily, string> = {

@@ -1,12 +1,12 @@
 import { createColumnHelper } from '@tanstack/react-table';
 import { Link } from 'react-router-dom';
-import { sittingMaxMinutes, type ProductFamily } from '../../../../shared/schemas/step-plan.schemas';
-import { planNeedsSkinTest } from '../../../../shared/rules/skin-test-need';
-import type { SetupService } from '../../../../shared/schemas/setup.schemas';
-import { DataTable } from '../../../components/ui/data-table';
-import { paths } from '../../../config/paths';
-import { formatMinutes } from '../../../lib/time';
-import { formatMoney } from '../../../../shared/money/money';
+import { sittingMaxMinutes, type ProductFamily } from '@shared/schemas/step-plan.schemas';
+import { planNeedsSkinTest } from '@shared/rules/skin-test-need';
+import type { SetupService } from '@shared/schemas/setup.schemas';
+import { DataTable } from '@client/components/ui/data-table';
+import { paths } from '@client/config/paths';
+import { formatMinutes } from '@client/lib/time';
+import { formatMoney } from '@shared/money/money';
 
 const col = createColumnHelper<SetupService>();
 

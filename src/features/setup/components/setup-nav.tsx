@@ -1,5 +1,5 @@
 import { NavLink } from 'react-router-dom';
-import { paths } from '../../../config/paths';
+import { paths } from '@client/config/paths';
 
 const links = [
   { to: paths.ownerSetup, label: 'Salon and hours', end: true },

@@ -1,6 +1,6 @@
 import { Controller, type Control } from 'react-hook-form';
-import type { SalonSettingsInput } from '../../../../shared/schemas/salon-settings.schemas';
-import { ALWAYS_TESTED, productFamilyLabels, WIDENING_FAMILIES, type WideningFamily } from '../../../../shared/rules/skin-test-need';
+import type { SalonSettingsInput } from '@shared/schemas/salon-settings.schemas';
+import { ALWAYS_TESTED, productFamilyLabels, WIDENING_FAMILIES, type WideningFamily } from '@shared/rules/skin-test-need';
 
 /**
  * Which product families need a skin test in this salon. Oxidative colour and oxidative toner always do (shown

@@ -1,12 +1,12 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
 import { FormProvider, useForm } from 'react-hook-form';
-import { StaffInviteSchema, type StaffInvite, type StaffMember } from '../../../../shared/schemas/setup.schemas';
-import { Button } from '../../../components/ui/button';
-import { FormAlert } from '../../../components/ui/form-alert';
-import { SelectField } from '../../../components/ui/select-field';
-import { TextField } from '../../../components/ui/text-field';
-import { fieldError, showServerErrors } from '../../../lib/form-errors';
+import { StaffInviteSchema, type StaffInvite, type StaffMember } from '@shared/schemas/setup.schemas';
+import { Button } from '@client/components/ui/button';
+import { FormAlert } from '@client/components/ui/form-alert';
+import { SelectField } from '@client/components/ui/select-field';
+import { TextField } from '@client/components/ui/text-field';
+import { fieldError, showServerErrors } from '@client/lib/form-errors';
 import { useInviteStaff, useSaveStaff } from '../api/setup-mutations';
 import { HoursLines } from './hours-lines';
 

@@ -1,9 +1,9 @@
 import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
-import type { AffectedBooking, StaffMember } from '../../../../shared/schemas/setup.schemas';
-import { Button } from '../../../components/ui/button';
-import { FormAlert } from '../../../components/ui/form-alert';
-import { SelectField } from '../../../components/ui/select-field';
+import type { AffectedBooking, StaffMember } from '@shared/schemas/setup.schemas';
+import { Button } from '@client/components/ui/button';
+import { FormAlert } from '@client/components/ui/form-alert';
+import { SelectField } from '@client/components/ui/select-field';
 import { setupQueries } from '../api/setup-queries';
 import { useDeactivateStaff, useReassign } from '../api/setup-mutations';
 import { AffectedBookings } from './affected-bookings';

@@ -1,8 +1,8 @@
 import { createColumnHelper } from '@tanstack/react-table';
-import type { StaffMember } from '../../../../shared/schemas/setup.schemas';
-import { Button } from '../../../components/ui/button';
-import { DataTable } from '../../../components/ui/data-table';
-import { roleLabels } from '../../../lib/booking-labels';
+import type { StaffMember } from '@shared/schemas/setup.schemas';
+import { Button } from '@client/components/ui/button';
+import { DataTable } from '@client/components/ui/data-table';
+import { roleLabels } from '@client/lib/booking-labels';
 
 const col = createColumnHelper<StaffMember>();
 

@@ -1,12 +1,12 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
-import { TimeOffInputSchema, type StaffMember, type TimeOffInput } from '../../../../shared/schemas/setup.schemas';
-import { Button } from '../../../components/ui/button';
-import { FormAlert } from '../../../components/ui/form-alert';
-import { TextField } from '../../../components/ui/text-field';
-import { showServerErrors } from '../../../lib/form-errors';
-import { formatDate } from '../../../../shared/format/date-time';
-import { formatFor } from '../../../../shared/format/locale';
+import { TimeOffInputSchema, type StaffMember, type TimeOffInput } from '@shared/schemas/setup.schemas';
+import { Button } from '@client/components/ui/button';
+import { FormAlert } from '@client/components/ui/form-alert';
+import { TextField } from '@client/components/ui/text-field';
+import { showServerErrors } from '@client/lib/form-errors';
+import { formatDate } from '@shared/format/date-time';
+import { formatFor } from '@shared/format/locale';
 import { useAddTimeOff, useRemoveTimeOff } from '../api/setup-mutations';
 
 /** Whole days off for a stylist, in salon time; planning leaves those days out. */

@@ -1,10 +1,10 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
 import type { z } from 'zod';
-import { UnitNameSchema } from '../../../../shared/schemas/setup.schemas';
-import { Button } from '../../../components/ui/button';
-import { TextField } from '../../../components/ui/text-field';
-import { showServerErrors } from '../../../lib/form-errors';
+import { UnitNameSchema } from '@shared/schemas/setup.schemas';
+import { Button } from '@client/components/ui/button';
+import { TextField } from '@client/components/ui/text-field';
+import { showServerErrors } from '@client/lib/form-errors';
 
 type Props = { label: string; submitLabel: string; initial?: string; onSave: (name: string) => Promise<unknown> };
 

@@ -1,11 +1,11 @@
 import { createColumnHelper } from '@tanstack/react-table';
 import { useState } from 'react';
-import type { Unit, UnitKind } from '../../../../shared/schemas/setup.schemas';
-import { Button } from '../../../components/ui/button';
-import { DataTable } from '../../../components/ui/data-table';
-import { FormAlert } from '../../../components/ui/form-alert';
-import { formatDate } from '../../../../shared/format/date-time';
-import { formatFor } from '../../../../shared/format/locale';
+import type { Unit, UnitKind } from '@shared/schemas/setup.schemas';
+import { Button } from '@client/components/ui/button';
+import { DataTable } from '@client/components/ui/data-table';
+import { FormAlert } from '@client/components/ui/form-alert';
+import { formatDate } from '@shared/format/date-time';
+import { formatFor } from '@shared/format/locale';
 import { useAddUnit, useBackInService, useRenameUnit } from '../api/setup-mutations';
 import { OutOfServiceForm } from './out-of-service-form';
 import { UnitNameForm } from './unit-name-form';

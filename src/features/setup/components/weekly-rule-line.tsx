@@ -1,14 +1,14 @@
 import { useId, useState } from 'react';
 import { useFormContext } from 'react-hook-form';
-import { composeWeeklyRule, nextDates, readWeeklyRule, WEEKDAY_CODES, type WeeklyRule } from '../../../../shared/engine/weekly-rule';
-import { Button } from '../../../components/ui/button';
-import { TextAreaField } from '../../../components/ui/text-area-field';
-import { TextField } from '../../../components/ui/text-field';
-import { describeHoursRule } from '../../../../shared/engine/describe-hours';
-import { fieldError } from '../../../lib/form-errors';
-import { todayIn } from '../../../lib/time';
-import { formatDate } from '../../../../shared/format/date-time';
-import { zonelessFormat } from '../../../../shared/format/locale';
+import { composeWeeklyRule, nextDates, readWeeklyRule, WEEKDAY_CODES, type WeeklyRule } from '@shared/engine/weekly-rule';
+import { Button } from '@client/components/ui/button';
+import { TextAreaField } from '@client/components/ui/text-area-field';
+import { TextField } from '@client/components/ui/text-field';
+import { describeHoursRule } from '@shared/engine/describe-hours';
+import { fieldError } from '@client/lib/form-errors';
+import { todayIn } from '@client/lib/time';
+import { formatDate } from '@shared/format/date-time';
+import { zonelessFormat } from '@shared/format/locale';
 
 const dayNames: Record<(typeof WEEKDAY_CODES)[number], string> = { MO: 'Mon', TU: 'Tue', WE: 'Wed', TH: 'Thu', FR: 'Fri', SA: 'Sat', SU: 'Sun' };
 const shortDate = (date: string) => formatDate(date, zonelessFormat, { width: 'short' });

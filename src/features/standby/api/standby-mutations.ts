@@ -1,8 +1,8 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { standbyApi } from '../../../../shared/api/standby.api';
-import type { CreateStandby } from '../../../../shared/schemas/standby.schemas';
-import { callApi } from '../../../lib/api-client';
-import { standbyChanged } from '../../../lib/cache-rules';
+import { standbyApi } from '@shared/api/standby.api';
+import type { CreateStandby } from '@shared/schemas/standby.schemas';
+import { callApi } from '@client/lib/api-client';
+import { standbyChanged } from '@client/lib/cache-rules';
 
 export function useAddStandby() {
   const queryClient = useQueryClient();

@@ -1,8 +1,8 @@
 import { useFieldArray, useFormContext } from 'react-hook-form';
-import type { CreateStandby } from '../../../../shared/schemas/standby.schemas';
-import { Button } from '../../../components/ui/button';
-import { TextField } from '../../../components/ui/text-field';
-import { fieldError } from '../../../lib/form-errors';
+import type { CreateStandby } from '@shared/schemas/standby.schemas';
+import { Button } from '@client/components/ui/button';
+import { TextField } from '@client/components/ui/text-field';
+import { fieldError } from '@client/lib/form-errors';
 import { weekdayLongNames, weekdayNames } from '../weekdays';
 
 /** When the client can come at short notice: one row per set of weekdays and time range. */

@@ -1,7 +1,7 @@
 import { useFormContext } from 'react-hook-form';
-import type { ServiceSummary } from '../../../../shared/schemas/service.schemas';
-import type { CreateStandby } from '../../../../shared/schemas/standby.schemas';
-import { fieldError } from '../../../lib/form-errors';
+import type { ServiceSummary } from '@shared/schemas/service.schemas';
+import type { CreateStandby } from '@shared/schemas/standby.schemas';
+import { fieldError } from '@client/lib/form-errors';
 
 type Props = { services: ServiceSummary[] };
 

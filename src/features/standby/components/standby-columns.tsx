@@ -1,8 +1,8 @@
 import { createColumnHelper } from '@tanstack/react-table';
-import type { StandbyEntry } from '../../../../shared/schemas/standby.schemas';
-import { Button } from '../../../components/ui/button';
-import { formatDate } from '../../../../shared/format/date-time';
-import { formatFor } from '../../../../shared/format/locale';
+import type { StandbyEntry } from '@shared/schemas/standby.schemas';
+import { Button } from '@client/components/ui/button';
+import { formatDate } from '@shared/format/date-time';
+import { formatFor } from '@shared/format/locale';
 import { availabilityText } from '../weekdays';
 
 const column = createColumnHelper<StandbyEntry>();

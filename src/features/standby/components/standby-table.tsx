@@ -1,7 +1,7 @@
 import { useMemo } from 'react';
-import type { StandbyEntry } from '../../../../shared/schemas/standby.schemas';
-import { DataTable } from '../../../components/ui/data-table';
-import { FormAlert } from '../../../components/ui/form-alert';
+import type { StandbyEntry } from '@shared/schemas/standby.schemas';
+import { DataTable } from '@client/components/ui/data-table';
+import { FormAlert } from '@client/components/ui/form-alert';
 import { useRemoveStandby } from '../api/standby-mutations';
 import { standbyColumns } from './standby-columns';
 

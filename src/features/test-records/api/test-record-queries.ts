@@ -1,10 +1,10 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { z } from 'zod';
-import { testRecordsApi } from '../../../../shared/api/test-records.api';
-import type { RecordClearanceSchema, RecordSkinTestReading, RecordSkinTestSchema } from '../../../../shared/schemas/skin-test.schemas';
-import type { RecordStrandTest } from '../../../../shared/schemas/strand-test.schemas';
-import { apiQuery, callApi } from '../../../lib/api-client';
-import { skinTestsChanged, strandTestsChanged } from '../../../lib/cache-rules';
+import { testRecordsApi } from '@shared/api/test-records.api';
+import type { RecordClearanceSchema, RecordSkinTestReading, RecordSkinTestSchema } from '@shared/schemas/skin-test.schemas';
+import type { RecordStrandTest } from '@shared/schemas/strand-test.schemas';
+import { apiQuery, callApi } from '@client/lib/api-client';
+import { skinTestsChanged, strandTestsChanged } from '@client/lib/cache-rules';
 
 export const testRecordQueries = {
   skin: (clientId: string) => apiQuery(testRecordsApi.skinTests, { params: { id: clientId } }),

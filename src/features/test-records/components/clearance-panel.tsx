@@ -1,10 +1,10 @@
-import { RecordClearanceSchema, type SkinTestClearance } from '../../../../shared/schemas/skin-test.schemas';
-import { RecordForm, useRecordForm } from '../../../components/ui/record-form';
-import { TextAreaField } from '../../../components/ui/text-area-field';
-import { fieldError } from '../../../lib/form-errors';
+import { RecordClearanceSchema, type SkinTestClearance } from '@shared/schemas/skin-test.schemas';
+import { RecordForm, useRecordForm } from '@client/components/ui/record-form';
+import { TextAreaField } from '@client/components/ui/text-area-field';
+import { fieldError } from '@client/lib/form-errors';
 import { useRecordClearance } from '../api/test-record-queries';
-import { formatDate } from '../../../../shared/format/date-time';
-import { formatFor } from '../../../../shared/format/locale';
+import { formatDate } from '@shared/format/date-time';
+import { formatFor } from '@shared/format/locale';
 
 type Props = { clientId: string; zone: string; clearances: SkinTestClearance[]; canClear: boolean };
 

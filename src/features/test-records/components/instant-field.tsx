@@ -1,6 +1,6 @@
-import { localDateTimeOf, localToInstant } from '../../../../shared/time/salon-time';
+import { localDateTimeOf, localToInstant } from '@shared/time/salon-time';
 import type { Control, FieldValues, Path } from 'react-hook-form';
-import { ConvertedField } from '../../../components/ui/converted-field';
+import { ConvertedField } from '@client/components/ui/converted-field';
 
 type Props<T extends FieldValues> = { control: Control<T>; name: Path<T>; label: string; zone: string; error?: string; optional?: boolean };
 

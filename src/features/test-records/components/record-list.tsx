@@ -1,5 +1,5 @@
 import type { ReactNode } from 'react';
-import { FormAlert } from '../../../components/ui/form-alert';
+import { FormAlert } from '@client/components/ui/form-alert';
 
 type Props<T> = {
   /** The list's accessible name, e.g. "Skin tests". */

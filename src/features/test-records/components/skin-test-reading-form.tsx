@@ -1,11 +1,11 @@
-import { RecordSkinTestReadingSchema, type SkinTest } from '../../../../shared/schemas/skin-test.schemas';
-import { RecordForm, useRecordForm } from '../../../components/ui/record-form';
-import { SelectField } from '../../../components/ui/select-field';
-import { fieldError } from '../../../lib/form-errors';
+import { RecordSkinTestReadingSchema, type SkinTest } from '@shared/schemas/skin-test.schemas';
+import { RecordForm, useRecordForm } from '@client/components/ui/record-form';
+import { SelectField } from '@client/components/ui/select-field';
+import { fieldError } from '@client/lib/form-errors';
 import { useRecordSkinTestReading } from '../api/test-record-queries';
 import { InstantField } from './instant-field';
 import { skinTestResultLabels } from './skin-test-result-labels';
-import { nowInZone } from '../../../lib/time';
+import { nowInZone } from '@client/lib/time';
 
 const readingOptions = RecordSkinTestReadingSchema.shape.result.options.map((value) => ({ value, label: skinTestResultLabels[value] }));
 

@@ -1,4 +1,4 @@
-import type { SkinTest } from '../../../../shared/schemas/skin-test.schemas';
+import type { SkinTest } from '@shared/schemas/skin-test.schemas';
 
 /** Skin-test results as staff read them on the client card. */
 export const skinTestResultLabels: Record<SkinTest['result'], string> = {

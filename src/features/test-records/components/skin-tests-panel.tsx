@@ -1,21 +1,21 @@
 import { useQuery } from '@tanstack/react-query';
-import { RecordSkinTestSchema } from '../../../../shared/schemas/skin-test.schemas';
-import { Notice } from '../../../components/ui/notice';
-import { RecordForm, useRecordForm } from '../../../components/ui/record-form';
-import { SelectField } from '../../../components/ui/select-field';
-import { TextField } from '../../../components/ui/text-field';
-import { fieldError } from '../../../lib/form-errors';
+import { RecordSkinTestSchema } from '@shared/schemas/skin-test.schemas';
+import { Notice } from '@client/components/ui/notice';
+import { RecordForm, useRecordForm } from '@client/components/ui/record-form';
+import { SelectField } from '@client/components/ui/select-field';
+import { TextField } from '@client/components/ui/text-field';
+import { fieldError } from '@client/lib/form-errors';
 
 import { testRecordQueries, useRecordSkinTest } from '../api/test-record-queries';
 import { InstantField } from './instant-field';
 import { RecordList } from './record-list';
 import { SkinTestReadingForm } from './skin-test-reading-form';
 import { ClearancePanel } from './clearance-panel';
-import { sessionQueries } from '../../auth/api/session-queries';
+import { sessionQueries } from '@client/features/auth';
 import { skinTestResultLabels } from './skin-test-result-labels';
-import { nowInZone } from '../../../lib/time';
-import { formatDate, formatTime } from '../../../../shared/format/date-time';
-import { formatFor } from '../../../../shared/format/locale';
+import { nowInZone } from '@client/lib/time';
+import { formatDate, formatTime } from '@shared/format/date-time';
+import { formatFor } from '@shared/format/locale';
 
 const resultOptions = Object.entries(skinTestResultLabels).map(([value, label]) => ({ value, label }));
 

@@ -1,7 +1,7 @@
-import { urlOf } from '../../../../shared/api/endpoint';
-import { utilisationApi } from '../../../../shared/api/utilisation.api';
-import type { UtilisationQuery } from '../../../../shared/schemas/utilisation.schemas';
-import { apiQuery } from '../../../lib/api-client';
+import { urlOf } from '@shared/api/endpoint';
+import { utilisationApi } from '@shared/api/utilisation.api';
+import type { UtilisationQuery } from '@shared/schemas/utilisation.schemas';
+import { apiQuery } from '@client/lib/api-client';
 
 const params = (q: UtilisationQuery) => ({ period: q.period, date: q.date, from: q.from, to: q.to });
 

@@ -1,4 +1,4 @@
-import { formatPercent } from '../../../lib/booking-labels';
+import { formatPercent } from '@client/lib/booking-labels';
 
 export const WEEKDAYS = ['', 'Monday', 'Tuesday', 'Wednesday', 'Thursday', 'Friday', 'Saturday', 'Sunday'];
 export const hourLabel = (hour: number) => `${String(hour).padStart(2, '0')}:00`;

@@ -1,7 +1,7 @@
 import { getCoreRowModel, getSortedRowModel, useReactTable, type ColumnDef, type SortingState } from '@tanstack/react-table';
 import { useMemo, useState } from 'react';
-import { Button } from '../../../components/ui/button';
-import { TableGrid } from '../../../components/ui/table-grid';
+import { Button } from '@client/components/ui/button';
+import { TableGrid } from '@client/components/ui/table-grid';
 import { downloadCsv, toCsv, type CsvCell } from '../csv';
 
 export interface FigureColumn<T> {

@@ -1,6 +1,6 @@
 import { Scatter, ScatterChart, XAxis, YAxis } from 'recharts';
-import type { HeatCell } from '../../../../shared/schemas/utilisation.schemas';
-import { SectionCard } from '../../../components/ui/section-card';
+import type { HeatCell } from '@shared/schemas/utilisation.schemas';
+import { SectionCard } from '@client/components/ui/section-card';
 import { FigureTable, type FigureColumn } from './figure-table';
 import { hourLabel, percentText, WEEKDAYS } from './chart-labels';
 

@@ -1,10 +1,10 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm, useWatch } from 'react-hook-form';
 import type { z } from 'zod';
-import { UtilisationQuerySchema, type UtilisationQuery } from '../../../../shared/schemas/utilisation.schemas';
-import { Button } from '../../../components/ui/button';
-import { SelectField } from '../../../components/ui/select-field';
-import { TextField } from '../../../components/ui/text-field';
+import { UtilisationQuerySchema, type UtilisationQuery } from '@shared/schemas/utilisation.schemas';
+import { Button } from '@client/components/ui/button';
+import { SelectField } from '@client/components/ui/select-field';
+import { TextField } from '@client/components/ui/text-field';
 
 type Props = { value: UtilisationQuery; onChange: (next: UtilisationQuery) => void };
 type FormValues = { period: NonNullable<UtilisationQuery['period']>; date: string; from: string; to: string };

@@ -1,7 +1,7 @@
-import { SectionCard } from '../../../components/ui/section-card';
-import { formatMinutes } from '../../../lib/time';
+import { SectionCard } from '@client/components/ui/section-card';
+import { formatMinutes } from '@client/lib/time';
 import { FigureTable, type FigureColumn } from './figure-table';
-import { formatMoney, minorToUnits } from '../../../../shared/money/money';
+import { formatMoney, minorToUnits } from '@shared/money/money';
 
 interface ServiceRow {
   serviceId: string;

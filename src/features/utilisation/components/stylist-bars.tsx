@@ -1,10 +1,10 @@
 import { Bar, BarChart, CartesianGrid, LabelList, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
-import type { StylistFigures } from '../../../../shared/schemas/utilisation.schemas';
-import { SectionCard } from '../../../components/ui/section-card';
-import { formatMinutes } from '../../../lib/time';
+import type { StylistFigures } from '@shared/schemas/utilisation.schemas';
+import { SectionCard } from '@client/components/ui/section-card';
+import { formatMinutes } from '@client/lib/time';
 import { FigureTable, type FigureColumn } from './figure-table';
 import { percentText, percentValue } from './chart-labels';
-import { formatMoney, minorToUnits } from '../../../../shared/money/money';
+import { formatMoney, minorToUnits } from '@shared/money/money';
 
 type Props = { stylists: StylistFigures[]; currency: string; filename: string };
 

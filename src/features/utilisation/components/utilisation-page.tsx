@@ -1,11 +1,11 @@
 import { useSuspenseQuery } from '@tanstack/react-query';
 import type { ReactNode } from 'react';
 import { useSearchParams } from 'react-router-dom';
-import type { DeskUtilisation, UtilisationQuery } from '../../../../shared/schemas/utilisation.schemas';
-import { PageHeader } from '../../../components/ui/page-header';
-import { formatDate } from '../../../../shared/format/date-time';
-import { shiftLocalDate } from '../../../../shared/time/salon-time';
-import { zonelessFormat } from '../../../../shared/format/locale';
+import type { DeskUtilisation, UtilisationQuery } from '@shared/schemas/utilisation.schemas';
+import { PageHeader } from '@client/components/ui/page-header';
+import { formatDate } from '@shared/format/date-time';
+import { shiftLocalDate } from '@shared/time/salon-time';
+import { zonelessFormat } from '@shared/format/locale';
 import { queryFromSearch, scenarioExportUrl, utilisationQueries } from '../api/utilisation-queries';
 import { OccupancyHeatMap } from './occupancy-heat-map';
 import { PeriodPicker } from './period-picker';

@@ -1,9 +1,9 @@
-import type { DeskUtilisation, OwnerUtilisation } from '../../../../shared/schemas/utilisation.schemas';
-import { SectionCard } from '../../../components/ui/section-card';
-import { formatMinutes } from '../../../lib/time';
-import { StatTile } from '../../owner/components/stat-tile';
+import type { DeskUtilisation, OwnerUtilisation } from '@shared/schemas/utilisation.schemas';
+import { SectionCard } from '@client/components/ui/section-card';
+import { formatMinutes } from '@client/lib/time';
+import { StatTile } from '@client/features/owner';
 import { percentText } from './chart-labels';
-import { formatMoney } from '../../../../shared/money/money';
+import { formatMoney } from '@shared/money/money';
 
 type Props = { report: DeskUtilisation | OwnerUtilisation; currency?: string };
 

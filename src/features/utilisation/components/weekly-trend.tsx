@@ -1,10 +1,10 @@
 import { CartesianGrid, Legend, Line, LineChart, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
-import { SectionCard } from '../../../components/ui/section-card';
-import { formatDate } from '../../../../shared/format/date-time';
-import { zonelessFormat } from '../../../../shared/format/locale';
+import { SectionCard } from '@client/components/ui/section-card';
+import { formatDate } from '@shared/format/date-time';
+import { zonelessFormat } from '@shared/format/locale';
 import { FigureTable, type FigureColumn } from './figure-table';
 import { percentText, percentValue } from './chart-labels';
-import { formatMoney, minorToUnits } from '../../../../shared/money/money';
+import { formatMoney, minorToUnits } from '@shared/money/money';
 
 export interface TrendWeek {
   from: string;

@@ -1,5 +1,5 @@
-import { bookingsApi } from '../../../../shared/api/bookings.api';
-import { apiQuery } from '../../../lib/api-client';
+import { bookingsApi } from '@shared/api/bookings.api';
+import { apiQuery } from '@client/lib/api-client';
 
 export const weekQueries = {
   desk: (date?: string, stylistId?: string) => apiQuery(bookingsApi.deskWeek, { query: { date, stylistId } }),

@@ -1,8 +1,8 @@
-import type { BookingView } from '../../../../shared/schemas/booking-view.schemas';
-import { Button } from '../../../components/ui/button';
-import { whoseSitting } from '../../../lib/booking-labels';
-import { formatDate, formatTime } from '../../../../shared/format/date-time';
-import { formatFor } from '../../../../shared/format/locale';
+import type { BookingView } from '@shared/schemas/booking-view.schemas';
+import { Button } from '@client/components/ui/button';
+import { whoseSitting } from '@client/lib/booking-labels';
+import { formatDate, formatTime } from '@shared/format/date-time';
+import { formatFor } from '@shared/format/locale';
 import type { WeekEventData } from '../week-events';
 
 /** The last drag the server accepted: the sitting as it was, and the booking as it is now. */

@@ -4,12 +4,12 @@ import FullCalendar from '@fullcalendar/react';
 import timeGridPlugin from '@fullcalendar/timegrid';
 import { DateTime } from 'luxon';
 import { useMemo } from 'react';
-import type { WeekView } from '../../../../shared/schemas/booking-view.schemas';
+import type { WeekView } from '@shared/schemas/booking-view.schemas';
 import { fromCalendarTime, toCalendarTime } from '../calendar-time';
 import { closedDates, closedStretches, hiddenClosedDates, toWeekEvents, visibleHours, type WeekEventData } from '../week-events';
 import { WeekEventContent } from './week-event-content';
-import { formatDate } from '../../../../shared/format/date-time';
-import { zonelessFormat } from '../../../../shared/format/locale';
+import { formatDate } from '@shared/format/date-time';
+import { zonelessFormat } from '@shared/format/locale';
 import './week-calendar.css';
 
 /** A drag the server should check: the sitting, its new start, and the sitting as it was (for the answer and an undo). */

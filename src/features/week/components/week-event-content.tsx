@@ -1,8 +1,8 @@
 import { Link } from 'react-router-dom';
-import { stepKindPattern } from '../../../components/ui/step-kind-swatch';
-import { paths } from '../../../config/paths';
-import { sittingLabel } from '../../../lib/booking-labels';
-import { minutesBetween } from '../../../lib/time';
+import { stepKindPattern } from '@client/components/ui/step-kind-swatch';
+import { paths } from '@client/config/paths';
+import { sittingLabel } from '@client/lib/booking-labels';
+import { minutesBetween } from '@client/lib/time';
 import type { WeekEventData } from '../week-events';
 
 /** `showStylist`: in the week of all stylists, each sitting says whose it is. */

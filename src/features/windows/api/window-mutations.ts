@@ -1,9 +1,9 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { z } from 'zod';
-import { windowsApi } from '../../../../shared/api/windows.api';
-import type { FillWindowSchema, OfferWindowSchema } from '../../../../shared/schemas/window.schemas';
-import { callApi } from '../../../lib/api-client';
-import { windowFilled, windowsChanged } from '../../../lib/cache-rules';
+import { windowsApi } from '@shared/api/windows.api';
+import type { FillWindowSchema, OfferWindowSchema } from '@shared/schemas/window.schemas';
+import { callApi } from '@client/lib/api-client';
+import { windowFilled, windowsChanged } from '@client/lib/cache-rules';
 
 export function useFillWindow() {
   const queryClient = useQueryClient();

@@ -1,5 +1,5 @@
-import { windowsApi } from '../../../../shared/api/windows.api';
-import { apiQuery } from '../../../lib/api-client';
+import { windowsApi } from '@shared/api/windows.api';
+import { apiQuery } from '@client/lib/api-client';
 
 export const windowQueries = {
   /** A stylist always gets their own windows; the desk gets every stylist's, or one's. */

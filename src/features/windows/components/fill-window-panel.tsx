@@ -1,10 +1,10 @@
 import { useState } from 'react';
-import type { HandsFreeWindowView } from '../../../../shared/schemas/window.schemas';
-import { Button } from '../../../components/ui/button';
-import { FormAlert } from '../../../components/ui/form-alert';
-import { formatTime } from '../../../../shared/format/date-time';
-import { formatFor } from '../../../../shared/format/locale';
-import { useIdempotencyKeys } from '../../../lib/use-idempotency-keys';
+import type { HandsFreeWindowView } from '@shared/schemas/window.schemas';
+import { Button } from '@client/components/ui/button';
+import { FormAlert } from '@client/components/ui/form-alert';
+import { formatTime } from '@shared/format/date-time';
+import { formatFor } from '@shared/format/locale';
+import { useIdempotencyKeys } from '@client/lib/use-idempotency-keys';
 import { useFillWindow, useOfferWindow } from '../api/window-mutations';
 import { StandbyOffer } from './standby-offer';
 import { WalkInFill } from './walk-in-fill';

@@ -1,6 +1,6 @@
-import type { SentOffer } from '../../../../shared/schemas/window.schemas';
-import { formatTime } from '../../../../shared/format/date-time';
-import { formatFor } from '../../../../shared/format/locale';
+import type { SentOffer } from '@shared/schemas/window.schemas';
+import { formatTime } from '@shared/format/date-time';
+import { formatFor } from '@shared/format/locale';
 
 /** What became of an offer, in the staff's words (the client's offer page has its own). */
 export const offerOutcome: Record<SentOffer['status'], string> = {

@@ -1,6 +1,6 @@
 import { useState } from 'react';
-import type { HandsFreeWindowView } from '../../../../shared/schemas/window.schemas';
-import { Button } from '../../../components/ui/button';
+import type { HandsFreeWindowView } from '@shared/schemas/window.schemas';
+import { Button } from '@client/components/ui/button';
 
 type Standby = HandsFreeWindowView['standby'][number];
 type Props = { wanting: Standby[]; busy: boolean; onOffer: (entryIds: string[]) => void };

@@ -1,6 +1,6 @@
 import { useId, useState } from 'react';
-import { Button } from '../../../components/ui/button';
-import { TextField } from '../../../components/ui/text-field';
+import { Button } from '@client/components/ui/button';
+import { TextField } from '@client/components/ui/text-field';
 
 type Props = { busy: boolean; onBook: (walkIn: { name: string; phone?: string }) => void };
 

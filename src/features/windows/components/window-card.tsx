@@ -1,8 +1,8 @@
 import { useId, useState } from 'react';
-import type { HandsFreeWindowView } from '../../../../shared/schemas/window.schemas';
-import { Button } from '../../../components/ui/button';
-import { formatRange } from '../../../../shared/format/date-time';
-import { formatFor } from '../../../../shared/format/locale';
+import type { HandsFreeWindowView } from '@shared/schemas/window.schemas';
+import { Button } from '@client/components/ui/button';
+import { formatRange } from '@shared/format/date-time';
+import { formatFor } from '@shared/format/locale';
 import { FillWindowPanel } from './fill-window-panel';
 import { SentOffers } from './sent-offers';
 

@@ -1,5 +1,5 @@
 import { useId } from 'react';
-import type { HandsFreeWindowView } from '../../../../shared/schemas/window.schemas';
+import type { HandsFreeWindowView } from '@shared/schemas/window.schemas';
 
 type Props = { fits: HandsFreeWindowView['fits']; value: string; onChange: (serviceId: string) => void };
 

@@ -1,11 +1,11 @@
 import { useFormContext } from 'react-hook-form';
-import type { ClientSummary } from '../../../../../shared/schemas/client.schemas';
-import type { ServiceSummary } from '../../../../../shared/schemas/service.schemas';
-import { Button } from '../../../../components/ui/button';
-import { SelectField } from '../../../../components/ui/select-field';
-import { TextField } from '../../../../components/ui/text-field';
-import { ClientPicker } from '../../../clients/components/client-picker';
-import type { BookFormInput } from '../../book-form-schema';
+import type { ClientSummary } from '@shared/schemas/client.schemas';
+import type { ServiceSummary } from '@shared/schemas/service.schemas';
+import { Button } from '@client/components/ui/button';
+import { SelectField } from '@client/components/ui/select-field';
+import { TextField } from '@client/components/ui/text-field';
+import { ClientPicker } from '@client/features/clients';
+import type { BookFormInput } from '@client/features/bookings/book-form-schema';
 import { StepPlanEditor } from '../step-plan/step-plan-editor';
 
 type Props = {

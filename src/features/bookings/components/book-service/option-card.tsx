@@ -1,10 +1,10 @@
-import type { BookingOption } from '../../../../../shared/schemas/booking.schemas';
-import { Button } from '../../../../components/ui/button';
-import { StepStrip } from '../../../../components/ui/step-strip';
-import { sittingLabel } from '../../../../lib/booking-labels';
-import { formatMinutes } from '../../../../lib/time';
-import { formatDate, formatRange } from '../../../../../shared/format/date-time';
-import { formatFor } from '../../../../../shared/format/locale';
+import type { BookingOption } from '@shared/schemas/booking.schemas';
+import { Button } from '@client/components/ui/button';
+import { StepStrip } from '@client/components/ui/step-strip';
+import { sittingLabel } from '@client/lib/booking-labels';
+import { formatMinutes } from '@client/lib/time';
+import { formatDate, formatRange } from '@shared/format/date-time';
+import { formatFor } from '@shared/format/locale';
 
 type Props = { option: BookingOption; timeZone: string; busy: boolean; disabled: boolean; onBook: () => void };
 

@@ -1,6 +1,6 @@
-import type { BookingOption, BookingOptionsResponse } from '../../../../../shared/schemas/booking.schemas';
-import { SectionCard } from '../../../../components/ui/section-card';
-import { TimeZoneNote } from '../../../../components/ui/time-zone-note';
+import type { BookingOption, BookingOptionsResponse } from '@shared/schemas/booking.schemas';
+import { SectionCard } from '@client/components/ui/section-card';
+import { TimeZoneNote } from '@client/components/ui/time-zone-note';
 import { OptionCard } from './option-card';
 
 type Props = {

@@ -1,9 +1,9 @@
-import type { SkinTestCheck } from '../../../../../shared/schemas/booking.schemas';
-import { Button } from '../../../../components/ui/button';
-import { Notice } from '../../../../components/ui/notice';
-import { formatDate, formatTime } from '../../../../../shared/format/date-time';
-import { formatFor } from '../../../../../shared/format/locale';
-import { localDateOf } from '../../../../../shared/time/salon-time';
+import type { SkinTestCheck } from '@shared/schemas/booking.schemas';
+import { Button } from '@client/components/ui/button';
+import { Notice } from '@client/components/ui/notice';
+import { formatDate, formatTime } from '@shared/format/date-time';
+import { formatFor } from '@shared/format/locale';
+import { localDateOf } from '@shared/time/salon-time';
 
 type Props = { check: SkinTestCheck; timeZone: string; earliestDate: string; onBookSkinTest: (() => void) | null };
 

@@ -1,10 +1,10 @@
 import { useQuery } from '@tanstack/react-query';
-import { LoadingState } from '../../../../components/ui/loading-state';
-import { SectionCard } from '../../../../components/ui/section-card';
-import { formatDate, formatTime } from '../../../../../shared/format/date-time';
-import { formatFor } from '../../../../../shared/format/locale';
-import { bookingQueries } from '../../api/booking-queries';
-import { describeBookingChange, entryTitle } from '../../history-change';
+import { LoadingState } from '@client/components/ui/loading-state';
+import { SectionCard } from '@client/components/ui/section-card';
+import { formatDate, formatTime } from '@shared/format/date-time';
+import { formatFor } from '@shared/format/locale';
+import { bookingQueries } from '@client/features/bookings/api/booking-queries';
+import { describeBookingChange, entryTitle } from '@client/features/bookings/history-change';
 
 type Props = { bookingId: string; timeZone: string; currency: string; stylists: { id: string; name: string }[] };
 

@@ -1,14 +1,14 @@
 import { Link } from 'react-router-dom';
-import type { BookingView } from '../../../../../shared/schemas/booking-view.schemas';
-import { BookingStatusBadge } from '../../../../components/ui/booking-status-badge';
-import { SkinTestFlag } from '../../../../components/ui/skin-test-flag';
-import { SectionCard } from '../../../../components/ui/section-card';
-import { StepStrip } from '../../../../components/ui/step-strip';
-import { paths } from '../../../../config/paths';
-import { sittingLabel, stepKindLabels } from '../../../../lib/booking-labels';
-import { formatDate, formatRange } from '../../../../../shared/format/date-time';
-import { formatFor } from '../../../../../shared/format/locale';
-import { formatMoney } from '../../../../../shared/money/money';
+import type { BookingView } from '@shared/schemas/booking-view.schemas';
+import { BookingStatusBadge } from '@client/components/ui/booking-status-badge';
+import { SkinTestFlag } from '@client/components/ui/skin-test-flag';
+import { SectionCard } from '@client/components/ui/section-card';
+import { StepStrip } from '@client/components/ui/step-strip';
+import { paths } from '@client/config/paths';
+import { sittingLabel, stepKindLabels } from '@client/lib/booking-labels';
+import { formatDate, formatRange } from '@shared/format/date-time';
+import { formatFor } from '@shared/format/locale';
+import { formatMoney } from '@shared/money/money';
 
 type Props = { booking: BookingView; timeZone: string; currency: string };
 

@@ -1,13 +1,13 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { FormProvider, useForm } from 'react-hook-form';
 import type { z } from 'zod';
-import { ChangePlanSchema } from '../../../../../shared/schemas/booking.schemas';
-import type { BookingView } from '../../../../../shared/schemas/booking-view.schemas';
-import { Button } from '../../../../components/ui/button';
-import { FormAlert } from '../../../../components/ui/form-alert';
-import { SectionCard } from '../../../../components/ui/section-card';
-import { showServerErrors } from '../../../../lib/form-errors';
-import { useChangePlan } from '../../api/booking-mutations';
+import { ChangePlanSchema } from '@shared/schemas/booking.schemas';
+import type { BookingView } from '@shared/schemas/booking-view.schemas';
+import { Button } from '@client/components/ui/button';
+import { FormAlert } from '@client/components/ui/form-alert';
+import { SectionCard } from '@client/components/ui/section-card';
+import { showServerErrors } from '@client/lib/form-errors';
+import { useChangePlan } from '@client/features/bookings/api/booking-mutations';
 import { StepPlanEditor } from '../step-plan/step-plan-editor';
 
 type Props = { booking: BookingView };

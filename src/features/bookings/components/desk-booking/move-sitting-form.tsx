@@ -1,20 +1,20 @@
 import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
-import type { BookingView } from '../../../../../shared/schemas/booking-view.schemas';
-import { Button } from '../../../../components/ui/button';
-import { FreeTimePicker } from '../../../../components/ui/free-time-picker';
-import { LoadingState } from '../../../../components/ui/loading-state';
-import { Notice } from '../../../../components/ui/notice';
-import { SectionCard } from '../../../../components/ui/section-card';
-import { SelectField } from '../../../../components/ui/select-field';
-import { TextField } from '../../../../components/ui/text-field';
-import { problemText } from '../../../../lib/api-error';
-import { sittingLabel } from '../../../../lib/booking-labels';
-import { dayAfterLast, freeTimeKey, type FreeTime } from '../../../../lib/free-times';
-import { formatDate, formatRange, formatTime } from '../../../../../shared/format/date-time';
-import { formatFor } from '../../../../../shared/format/locale';
-import { bookingQueries } from '../../api/booking-queries';
-import { useMoveSitting } from '../../api/booking-mutations';
+import type { BookingView } from '@shared/schemas/booking-view.schemas';
+import { Button } from '@client/components/ui/button';
+import { FreeTimePicker } from '@client/components/ui/free-time-picker';
+import { LoadingState } from '@client/components/ui/loading-state';
+import { Notice } from '@client/components/ui/notice';
+import { SectionCard } from '@client/components/ui/section-card';
+import { SelectField } from '@client/components/ui/select-field';
+import { TextField } from '@client/components/ui/text-field';
+import { problemText } from '@client/lib/api-error';
+import { sittingLabel } from '@client/lib/booking-labels';
+import { dayAfterLast, freeTimeKey, type FreeTime } from '@client/lib/free-times';
+import { formatDate, formatRange, formatTime } from '@shared/format/date-time';
+import { formatFor } from '@shared/format/locale';
+import { bookingQueries } from '@client/features/bookings/api/booking-queries';
+import { useMoveSitting } from '@client/features/bookings/api/booking-mutations';
 
 type Props = { booking: BookingView; timeZone: string; stylists: { id: string; name: string }[] };
 

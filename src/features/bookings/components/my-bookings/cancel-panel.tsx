@@ -1,12 +1,12 @@
 import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
-import { Button } from '../../../../components/ui/button';
-import { FormAlert } from '../../../../components/ui/form-alert';
-import { LoadingState } from '../../../../components/ui/loading-state';
-import { TextField } from '../../../../components/ui/text-field';
-import { problemText } from '../../../../lib/api-error';
-import { myBookingQueries } from '../../api/my-booking-queries';
-import { useCancelMyBooking } from '../../api/my-booking-mutations';
+import { Button } from '@client/components/ui/button';
+import { FormAlert } from '@client/components/ui/form-alert';
+import { LoadingState } from '@client/components/ui/loading-state';
+import { TextField } from '@client/components/ui/text-field';
+import { problemText } from '@client/lib/api-error';
+import { myBookingQueries } from '@client/features/bookings/api/my-booking-queries';
+import { useCancelMyBooking } from '@client/features/bookings/api/my-booking-mutations';
 import { CancelTermsNotice } from '../cancel-terms-notice';
 
 type Props = { bookingId: string; onClose: () => void; onCancelled: () => void };

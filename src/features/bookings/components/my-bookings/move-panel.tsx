@@ -1,15 +1,15 @@
 import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
-import { ActionBar } from '../../../../components/ui/action-bar';
-import { Button } from '../../../../components/ui/button';
-import { FormAlert } from '../../../../components/ui/form-alert';
-import { FreeTimePicker } from '../../../../components/ui/free-time-picker';
-import { LoadingState } from '../../../../components/ui/loading-state';
-import { TimeZoneNote } from '../../../../components/ui/time-zone-note';
-import { problemText } from '../../../../lib/api-error';
-import { dayAfterLast, freeTimeKey, freeTimeLabel, type FreeTime } from '../../../../lib/free-times';
-import { myBookingQueries } from '../../api/my-booking-queries';
-import { useMoveMyBooking } from '../../api/my-booking-mutations';
+import { ActionBar } from '@client/components/ui/action-bar';
+import { Button } from '@client/components/ui/button';
+import { FormAlert } from '@client/components/ui/form-alert';
+import { FreeTimePicker } from '@client/components/ui/free-time-picker';
+import { LoadingState } from '@client/components/ui/loading-state';
+import { TimeZoneNote } from '@client/components/ui/time-zone-note';
+import { problemText } from '@client/lib/api-error';
+import { dayAfterLast, freeTimeKey, freeTimeLabel, type FreeTime } from '@client/lib/free-times';
+import { myBookingQueries } from '@client/features/bookings/api/my-booking-queries';
+import { useMoveMyBooking } from '@client/features/bookings/api/my-booking-mutations';
 
 type Props = { bookingId: string; onClose: () => void; onMoved: () => void };
 

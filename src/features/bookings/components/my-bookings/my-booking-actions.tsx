@@ -1,7 +1,7 @@
 import { useEffect, useId, useRef, useState } from 'react';
-import type { BookingView } from '../../../../../shared/schemas/booking-view.schemas';
-import { Button } from '../../../../components/ui/button';
-import { isPast } from '../../../../lib/time';
+import type { BookingView } from '@shared/schemas/booking-view.schemas';
+import { Button } from '@client/components/ui/button';
+import { isPast } from '@client/lib/time';
 import { CancelPanel } from './cancel-panel';
 import { MovePanel } from './move-panel';
 

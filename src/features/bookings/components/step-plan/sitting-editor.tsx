@@ -1,9 +1,9 @@
 import { useFieldArray, useFormContext } from 'react-hook-form';
-import { fieldError } from '../../../../lib/form-errors';
-import { Button } from '../../../../components/ui/button';
-import { TextField } from '../../../../components/ui/text-field';
-import type { StepPlanFormInput } from '../../step-plan-form';
-import { stepOfKind } from '../../step-plan-form';
+import { fieldError } from '@client/lib/form-errors';
+import { Button } from '@client/components/ui/button';
+import { TextField } from '@client/components/ui/text-field';
+import type { StepPlanFormInput } from '@client/features/bookings/step-plan-form';
+import { stepOfKind } from '@client/features/bookings/step-plan-form';
 import { StepRow } from './step-row';
 
 type Props = { index: number; of: number };

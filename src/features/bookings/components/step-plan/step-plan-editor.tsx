@@ -1,9 +1,9 @@
 import { useFieldArray, useFormContext } from 'react-hook-form';
-import { sittingMaxMinutes } from '../../../../../shared/schemas/step-plan.schemas';
-import { DAYS_BETWEEN_SITTINGS } from '../../../../../shared/quotes/propose-quote';
-import { formatMinutes } from '../../../../lib/time';
-import { Button } from '../../../../components/ui/button';
-import { stepOfKind, type StepPlanFormInput } from '../../step-plan-form';
+import { sittingMaxMinutes } from '@shared/schemas/step-plan.schemas';
+import { DAYS_BETWEEN_SITTINGS } from '@shared/quotes/propose-quote';
+import { formatMinutes } from '@client/lib/time';
+import { Button } from '@client/components/ui/button';
+import { stepOfKind, type StepPlanFormInput } from '@client/features/bookings/step-plan-form';
 import { SittingEditor } from './sitting-editor';
 
 type Props = {

@@ -1,14 +1,14 @@
 import { useFormContext } from 'react-hook-form';
-import { fieldError } from '../../../../lib/form-errors';
-import { PRODUCT_FAMILIES, type PlannedStep } from '../../../../../shared/schemas/step-plan.schemas';
-import { productFamilyShortLabels } from '../../../../../shared/rules/skin-test-need';
-import { Button } from '../../../../components/ui/button';
-import { SelectField } from '../../../../components/ui/select-field';
-import { StepKindIcon } from '../../../../components/ui/step-kind-icon';
-import { TextField } from '../../../../components/ui/text-field';
-import { stepKindLabels } from '../../../../lib/booking-labels';
-import type { StepPlanFormInput } from '../../step-plan-form';
-import { stepOfKind } from '../../step-plan-form';
+import { fieldError } from '@client/lib/form-errors';
+import { PRODUCT_FAMILIES, type PlannedStep } from '@shared/schemas/step-plan.schemas';
+import { productFamilyShortLabels } from '@shared/rules/skin-test-need';
+import { Button } from '@client/components/ui/button';
+import { SelectField } from '@client/components/ui/select-field';
+import { StepKindIcon } from '@client/components/ui/step-kind-icon';
+import { TextField } from '@client/components/ui/text-field';
+import { stepKindLabels } from '@client/lib/booking-labels';
+import type { StepPlanFormInput } from '@client/features/bookings/step-plan-form';
+import { stepOfKind } from '@client/features/bookings/step-plan-form';
 
 type Props = {
   path: `stepPlan.sittings.${number}.steps.${number}`;

@@ -1,0 +1,12 @@
+// The bookings feature's public module: other features import it only from here.
+export { bookAt } from './book-at.service';
+export { bookingSnapshot } from './booking-snapshot.repository';
+export { deskBookingView } from './booking-view.service';
+export { loadBookingViews } from './booking-views.repository';
+export { tstzRange } from './bookings.repository';
+export { cancelBooking, cancelOutcome, depositOutcome } from './cancel-booking.service';
+export { sittingStarts } from './change-booking.repository';
+export { localDayBounds, todayIn } from './day-view.service';
+export { findIdempotent, saveIdempotent } from './idempotency.repository';
+export { moveSitting } from './move-booking.service';
+export { findStaffIdForUser, listStylists } from './salon-resources.repository';

@@ -1,0 +1,2 @@
+// The hair history feature's public module: other features import it only from here.
+export { findHairHistory } from './hair-history.repository';

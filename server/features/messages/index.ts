@@ -1,0 +1,6 @@
+// The messages feature's public module: other features import it only from here.
+export { planClientMessage, sendClientMessage, type ClientMessage } from './client-message.service';
+export { firstMessageSends, salonQuietHours } from './messages.repository';
+export { replanAfterSkinTestChange, replanBookingMessages, replanClientMessages } from './plan-messages.service';
+export { sendLog } from './send-log.service';
+export { sendDueMessages, type Senders } from './send-message.job';

@@ -1,0 +1,2 @@
+// The quote prices feature's public module: other features import it only from here.
+export { correctionRate, productCentsPerGram } from './quote-prices.repository';
