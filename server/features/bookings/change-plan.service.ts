@@ -4,7 +4,7 @@ import type { Salon } from '../../../shared/schemas/salon.schemas';
 import type { StepPlan } from '../../../shared/schemas/step-plan.schemas';
 import { AppError, notFound } from '../../lib/app-error';
 import { findService } from '../services/services.repository';
-import { lockStylists } from '../planning/stylist-lock';
+import { lockStylists } from '../planning/stylist-lock.repository';
 import { loadSalonCalendars } from '../planning/salon-calendars.repository';
 import { horizonFor } from '../planning/engine-request';
 import { planExactlyAt } from '../planning/plan-at';

@@ -8,7 +8,7 @@ import { AppError, notFound } from '../../lib/app-error';
 import { findClientQuote } from '../consultations/consultations.repository';
 import { findClient } from '../clients/clients.repository';
 import { findService } from '../services/services.repository';
-import { lockStylists } from '../planning/stylist-lock';
+import { lockStylists } from '../planning/stylist-lock.repository';
 import { assertWithinProcessingLimits } from '../planning/processing-limits-check';
 import { bookAt } from './book-at.service';
 import { findIdempotent, saveIdempotent } from './idempotency.repository';

@@ -7,7 +7,7 @@ import type { UpdateClientSchema } from '../../../shared/schemas/contact.schemas
 import type { Db } from '../../db/database';
 import { notFound } from '../../lib/app-error';
 import { storedPhone } from '../../lib/stored-phone';
-import { loadBookingViews } from '../bookings/booking-views.repository';
+import { loadBookingViews } from '../bookings/booking-views.service';
 import { findHairHistory } from '../hair-history/hair-history.repository';
 import { replanClientMessages } from '../messages/plan-messages.service';
 import { findSalon, salonCountry } from '../salon/salon.repository';

@@ -9,7 +9,7 @@ import { sha256 } from '../../lib/hash';
 import { AppError, notFound } from '../../lib/app-error';
 import { findSalon } from '../salon/salon.repository';
 import { findClientIdForUser } from '../clients/clients.repository';
-import { lockStylists } from '../planning/stylist-lock';
+import { lockStylists } from '../planning/stylist-lock.repository';
 import { bookAt } from '../bookings/book-at.service';
 import { assertHoldSkinTest } from './hold-skin-test';
 import { findSalonBySlug } from './public-salon.repository';

@@ -11,12 +11,12 @@ import { AppError, forbidden, notFound } from '../../lib/app-error';
 import { findClient, insertClient } from '../clients/clients.repository';
 import { findService } from '../services/services.repository';
 import { findStaffIdForUser } from '../bookings/salon-resources.repository';
-import { lockStylists } from '../planning/stylist-lock';
+import { lockStylists } from '../planning/stylist-lock.repository';
 import { bookAt } from '../bookings/book-at.service';
 import { findIdempotent, saveIdempotent } from '../bookings/idempotency.repository';
 import { closeStandby } from '../standby/standby.repository';
 import { findSalon } from '../salon/salon.repository';
-import { loadBookingViews } from '../bookings/booking-views.repository';
+import { loadBookingViews } from '../bookings/booking-views.service';
 
 type FillWindow = z.infer<typeof FillWindowSchema>;
 

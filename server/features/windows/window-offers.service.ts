@@ -10,7 +10,7 @@ import { AppError, forbidden, notFound } from '../../lib/app-error';
 import { findService } from '../services/services.repository';
 import { findSalon } from '../salon/salon.repository';
 import { findStaffIdForUser, listStylists } from '../bookings/salon-resources.repository';
-import { lockStylists } from '../planning/stylist-lock';
+import { lockStylists } from '../planning/stylist-lock.repository';
 import { bookAt } from '../bookings/book-at.service';
 import { closeStandby, listStandby } from '../standby/standby.repository';
 import { findOffer, insertOffer, lockSlotOffers, setOfferStatus } from './window-offers.repository';
