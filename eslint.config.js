@@ -7,6 +7,25 @@ import jsxA11y from 'eslint-plugin-jsx-a11y';
 import globals from 'globals';
 import { defineConfig } from 'eslint/config';
 
+// Paths are the contracts' (shared/api/*.api.ts): code anywhere else reaches one through its endpoint object.
+// Tests spell paths on purpose (they are the outside view), so they are not covered.
+const apiPathMessage = 'API paths are written only in shared/api/*.api.ts; use the endpoint object (urlOf, callApi, apiRoute) or API_ROOT (DEVELOPERS.md, One contract per endpoint).';
+const noApiPaths = [
+  { selector: 'Literal[value=/^\\/api(\\/|$)/]', message: apiPathMessage },
+  { selector: 'TemplateLiteral[quasis.0.value.cooked=/^\\/api(\\/|$)/]', message: apiPathMessage },
+];
+
+// SQL only in repositories: Kysely's query starters and the `sql` tag. `with` counts only with a function
+// second argument (a CTE), so Array.prototype.with(index, value) stays allowed.
+const sqlMessage = 'SQL belongs in a *.repository.ts file (DEVELOPERS.md, Layers)';
+const noSql = [
+  { selector: 'CallExpression[callee.property.name=/^(selectFrom|insertInto|updateTable|deleteFrom|mergeInto|replaceInto|selectNoFrom)$/]', message: sqlMessage },
+  { selector: "CallExpression[callee.property.name='with'][arguments.1.type=/FunctionExpression$/]", message: sqlMessage },
+  { selector: "TaggedTemplateExpression[tag.name='sql']", message: sqlMessage },
+  { selector: "CallExpression[callee.object.name='sql']", message: sqlMessage },
+];
+const tests = ['**/*.test.ts', '**/*.test.tsx'];
+
 export default defineConfig(
   { ignores: ['node_modules/', 'dist/', '.data/', 'coverage/', 'test-results/', 'tests/output/', 'uploads/', 'backups/'] },
   // A disable comment that no longer silences anything fails, so none outlive their reason.
@@ -46,6 +65,17 @@ export default defineConfig(
     // Migrations are written against Kysely<any> on purpose: they must not depend on today's schema types.
     files: ['migrations/**/*.ts'],
     rules: { '@typescript-eslint/no-explicit-any': 'off' },
+  },
+  {
+    files: ['server/**/*.{ts,mjs}', 'src/**/*.{ts,tsx}', 'shared/**/*.ts'],
+    ignores: ['shared/api/**', ...tests],
+    rules: { 'no-restricted-syntax': ['error', ...noApiPaths] },
+  },
+  {
+    // Both lists: a later block's options replace an earlier one's for the same rule.
+    files: ['server/**/*.ts'],
+    ignores: ['**/*.repository.ts', 'server/db/**', 'server/ops/**', 'server/demo/**', ...tests],
+    rules: { 'no-restricted-syntax': ['error', ...noApiPaths, ...noSql] },
   },
   { files: ['**/*.{js,mjs}'], languageOptions: { globals: globals.node } },
   { files: ['**/*.cjs'], languageOptions: { globals: globals.node, sourceType: 'commonjs' } },

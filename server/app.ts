@@ -8,6 +8,7 @@ import { OpenAPIRegistry, OpenApiGeneratorV3 } from '@asteasolutions/zod-to-open
 import type { AppDeps } from './app-deps';
 import { apiRoute, type RouteTable } from './lib/api-route';
 import { appApi } from '../shared/api/app.api';
+import { API_ROOT } from '../shared/api/endpoint';
 import { apiNotFound, errorHandler } from './lib/error-handler';
 import { installSessions } from './auth/sessions';
 import { installCsrf } from './auth/csrf';
@@ -57,7 +58,7 @@ export function createApp(deps: Omit<AppDeps, 'table' | 'storage' | 'readCache'>
       strictTransportSecurity: deps.config.secureCookies,
     }),
   );
-  app.use('/api', express.json({ limit: '100kb', strict: true }));
+  app.use(API_ROOT, express.json({ limit: '100kb', strict: true }));
   app.use(cookieParser());
   installSessions(app, deps);
 
@@ -103,7 +104,7 @@ export function createApp(deps: Omit<AppDeps, 'table' | 'storage' | 'readCache'>
     (openapi ??= new OpenApiGeneratorV3(table.registry.definitions).generateDocument({ openapi: '3.0.3', info: { title: 'Dwell API', version: '1' } })),
   );
   app.use(table.router);
-  app.use('/api', apiNotFound);
+  app.use(API_ROOT, apiNotFound);
 
   if (existsSync(clientDist)) {
     app.use(express.static(clientDist, { index: false, maxAge: '1h' }));

@@ -2,6 +2,7 @@ import type { Express } from 'express';
 import { doubleCsrf } from 'csrf-csrf';
 import type { Config } from '../config';
 import { sessionApi } from '@shared/api/session.api';
+import { API_ROOT } from '@shared/api/endpoint';
 import { apiRoute, type RouteTable } from '../lib/api-route';
 
 /**
@@ -18,7 +19,7 @@ export function installCsrf(app: Express, config: Config, table: RouteTable) {
     getCsrfTokenFromRequest: (req) => req.headers['x-csrf-token'],
     errorConfig: { statusCode: 403, code: 'EBADCSRFTOKEN', message: 'Invalid CSRF token' },
   });
-  app.use('/api', doubleCsrfProtection);
+  app.use(API_ROOT, doubleCsrfProtection);
   apiRoute(table, sessionApi.csrf, async ({ req, res }) => {
     // An anonymous session must be saved for its id (what the token is bound to) to stay the same.
     req.session.csrfReady = true;

@@ -10,6 +10,9 @@ export const CLIENT_OR_STAFF: readonly Role[] = ['client', ...STAFF];
 
 export type Method = 'get' | 'post' | 'put' | 'patch' | 'delete';
 
+/** Where every endpoint's path starts; the server mounts its JSON parser, CSRF check and API 404 here. */
+export const API_ROOT = '/api';
+
 /**
  * One API endpoint, the single place its method, path, inputs, answer and access are written. The
  * server registers its handler from this object (server/lib/api-route.ts), the client builds its

@@ -8,7 +8,7 @@ import { notFound } from '@server/lib/app-error';
 import { listAudit } from '../audit';
 import { findClientIdForUser } from '../clients';
 import { findSalon } from '../salon';
-import { loadBookingViews } from './booking-views.repository';
+import { loadBookingViews } from './booking-views.service';
 import { findStaffIdForUser } from './salon-resources.repository';
 
 /** No record has this id: a scope for a caller with no client or staff record, which therefore sees nothing. */

@@ -6,7 +6,6 @@ import type { BookingView } from '@shared/schemas/booking-view.schemas';
 import type { BookingStatus } from '@shared/schemas/common.schemas';
 import type { StepPlan } from '@shared/schemas/step-plan.schemas';
 import type { Salon } from '@shared/schemas/salon.schemas';
-import { bookingSkinTestStates } from '../skin-tests';
 
 export interface BookingFilter {
   salonId: string;
@@ -21,8 +20,20 @@ export interface BookingFilter {
 
 const LIVE: BookingStatus[] = ['held', 'booked', 'checked_in', 'finished', 'no_show'];
 
-/** Bookings with all their sittings and steps, times as ISO 8601 in the salon's zone. */
-export async function loadBookingViews(db: Db, filter: BookingFilter, timeZone: string): Promise<BookingView[]> {
+/** A booking as the book shows it, less its skin-test state, and what that state is worked out from. */
+export interface BookingViewRow {
+  view: Omit<BookingView, 'skinTest'>;
+  skinTestFooting: { clientId: string; status: BookingStatus; plan: StepPlan; serviceAsks: boolean; starts: Date[] };
+}
+
+/** The salon's skin-test settings, read with its bookings so a day's book costs no extra query. */
+export type SkinTestSettings = Pick<Salon, 'skinTestLeadHours' | 'skinTestValidityDays' | 'skinTestFamilies'>;
+
+/**
+ * Bookings with all their sittings and steps, times as ISO 8601 in the salon's zone, earliest first. The
+ * skin-test state is a rule, so booking-views.service.ts adds it.
+ */
+export async function loadBookingViewRows(db: Db, filter: BookingFilter, timeZone: string): Promise<{ rows: BookingViewRow[]; settings: SkinTestSettings | null }> {
   let query = db
     .selectFrom('bookings as b')
     .innerJoin('clients as c', 'c.id', 'b.client_id')
@@ -43,21 +54,19 @@ export async function loadBookingViews(db: Db, filter: BookingFilter, timeZone: 
     );
   }
   const bookings = await query.execute();
-  if (!bookings.length) return [];
+  if (!bookings.length) return { rows: [], settings: null };
   const ids = bookings.map((b) => b.id);
   const [sittings, steps] = await Promise.all([loadSittings(db, ids), loadSteps(db, ids)]);
   const iso = isoInZone(timeZone, filter);
   const sittingsOf = groupBy(sittings, (s) => s.booking_id);
   const stepsOf = groupBy(steps, (st) => st.sitting_id);
   const first = bookings[0];
-  const rule = { timeZone, skinTestLeadHours: first.skin_test_lead_hours, skinTestValidityDays: first.skin_test_validity_days, skinTestFamilies: first.skin_test_families as Salon['skinTestFamilies'] };
-  const states = await bookingSkinTestStates(db, rule, bookings.map((b) => ({
-    clientId: b.clientId, status: b.status, plan: b.step_plan as StepPlan, serviceAsks: b.needs_skin_test, starts: (sittingsOf.get(b.id) ?? []).map((s) => s.start),
-  })), new Date());
-  const views = bookings.map((b, index): BookingView => {
+  const settings = { skinTestLeadHours: first.skin_test_lead_hours, skinTestValidityDays: first.skin_test_validity_days, skinTestFamilies: first.skin_test_families as Salon['skinTestFamilies'] };
+  const rows = bookings.map((b): BookingViewRow => {
     const own = sittingsOf.get(b.id) ?? [];
     const plan = b.step_plan as StepPlan;
-    return {
+    const skinTestFooting = { clientId: b.clientId, status: b.status, plan, serviceAsks: b.needs_skin_test, starts: own.map((s) => s.start) };
+    const view = {
       id: b.id,
       status: b.status,
       client: { id: b.clientId, name: b.clientName },
@@ -67,7 +76,6 @@ export async function loadBookingViews(db: Db, filter: BookingFilter, timeZone: 
       depositCents: b.deposit_cents,
       depositOutcome: b.deposit_outcome,
       cancelReason: b.cancel_reason,
-      skinTest: states[index],
       stepPlan: plan,
       sittings: own.map((s) => ({
         seq: s.seq,
@@ -86,8 +94,10 @@ export async function loadBookingViews(db: Db, filter: BookingFilter, timeZone: 
           }),
       })),
     };
+    return { view, skinTestFooting };
   });
-  return views.sort((a, b) => a.sittings[0].start.localeCompare(b.sittings[0].start));
+  rows.sort((a, b) => a.view.sittings[0].start.localeCompare(b.view.sittings[0].start));
+  return { rows, settings };
 }
 
 function groupBy<T>(rows: T[], key: (row: T) => string): Map<string, T[]> {

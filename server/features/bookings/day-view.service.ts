@@ -5,7 +5,7 @@ import type { Salon } from '@shared/schemas/salon.schemas';
 import { AppError } from '@server/lib/app-error';
 import { openingDays } from '@shared/engine/opening-days';
 import { listSalonHours } from '../salon';
-import { loadBookingViews } from './booking-views.repository';
+import { loadBookingViews } from './booking-views.service';
 import { listChairs, listStylists, findStaffIdForUser } from './salon-resources.repository';
 import { instantAt, localDateOf, shiftLocalDate } from '@shared/time/salon-time';
 

@@ -2,7 +2,7 @@
 export { bookAt } from './book-at.service';
 export { bookingSnapshot } from './booking-snapshot.repository';
 export { deskBookingView } from './booking-view.service';
-export { loadBookingViews } from './booking-views.repository';
+export { loadBookingViews } from './booking-views.service';
 export { tstzRange } from './bookings.repository';
 export { cancelBooking, cancelOutcome, depositOutcome } from './cancel-booking.service';
 export { sittingStarts } from './change-booking.repository';

@@ -12,11 +12,9 @@ const limited = (limit: number) => rateLimited({ windowMs: 60_000, limit, messag
 
 export function registerOnlineBookingRoutes({ table, db, jobs, payments, mailer, sms, readCache }: AppDeps): void {
   apiRoute(table, onlineBookingApi.publicSalon, ({ params }) => publicSalon(db, params.slug));
-  table.router.get(onlineBookingApi.availability.path, limited(60));
-  apiRoute(table, onlineBookingApi.availability, ({ params, query }) => cachedFreeTimes(db, readCache, params.slug, query, new Date()));
-  table.router.post(onlineBookingApi.createHold.path, limited(20));
+  apiRoute(table, onlineBookingApi.availability, ({ params, query }) => cachedFreeTimes(db, readCache, params.slug, query, new Date()), [limited(60)]);
   // Public, but a signed-in client who already holds a time is sent back to it (one open hold per client).
-  apiRoute(table, onlineBookingApi.createHold, ({ user, body }) => createHold(db, jobs, user, body, new Date()));
+  apiRoute(table, onlineBookingApi.createHold, ({ user, body }) => createHold(db, jobs, user, body, new Date()), [limited(20)]);
   apiRoute(table, onlineBookingApi.hold, ({ params }) => holdStatus(db, params.id, new Date()));
   apiRoute(table, onlineBookingApi.myHolds, async ({ user }) => ({ holds: await myOpenHolds(db, user, new Date()) }));
   apiRoute(table, onlineBookingApi.resumeHold, ({ user, params }) => resumeHold(db, user, params.id, new Date()));
