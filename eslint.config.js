@@ -6,10 +6,12 @@ import reactHooks from 'eslint-plugin-react-hooks';
 import jsxA11y from 'eslint-plugin-jsx-a11y';
 import globals from 'globals';
 import { defineConfig } from 'eslint/config';
+import prettier from 'eslint-config-prettier/flat';
 
 // Paths are the contracts' (shared/api/*.api.ts): code anywhere else reaches one through its endpoint object.
 // Tests spell paths on purpose (they are the outside view), so they are not covered.
-const apiPathMessage = 'API paths are written only in shared/api/*.api.ts; use the endpoint object (urlOf, callApi, apiRoute) or API_ROOT (DEVELOPERS.md, One contract per endpoint).';
+const apiPathMessage =
+  'API paths are written only in shared/api/*.api.ts; use the endpoint object (urlOf, callApi, apiRoute) or API_ROOT (DEVELOPERS.md, One contract per endpoint).';
 const noApiPaths = [
   { selector: 'Literal[value=/^\\/api(\\/|$)/]', message: apiPathMessage },
   { selector: 'TemplateLiteral[quasis.0.value.cooked=/^\\/api(\\/|$)/]', message: apiPathMessage },
@@ -19,7 +21,10 @@ const noApiPaths = [
 // second argument (a CTE), so Array.prototype.with(index, value) stays allowed.
 const sqlMessage = 'SQL belongs in a *.repository.ts file (DEVELOPERS.md, Layers)';
 const noSql = [
-  { selector: 'CallExpression[callee.property.name=/^(selectFrom|insertInto|updateTable|deleteFrom|mergeInto|replaceInto|selectNoFrom)$/]', message: sqlMessage },
+  {
+    selector: 'CallExpression[callee.property.name=/^(selectFrom|insertInto|updateTable|deleteFrom|mergeInto|replaceInto|selectNoFrom)$/]',
+    message: sqlMessage,
+  },
   { selector: "CallExpression[callee.property.name='with'][arguments.1.type=/FunctionExpression$/]", message: sqlMessage },
   { selector: "TaggedTemplateExpression[tag.name='sql']", message: sqlMessage },
   { selector: "CallExpression[callee.object.name='sql']", message: sqlMessage },
@@ -79,4 +84,6 @@ export default defineConfig(
   },
   { files: ['**/*.{js,mjs}'], languageOptions: { globals: globals.node } },
   { files: ['**/*.cjs'], languageOptions: { globals: globals.node, sourceType: 'commonjs' } },
+  // Layout is Prettier's alone (npm run format); rules that would argue with it are off.
+  prettier,
 );

@@ -100,8 +100,11 @@ export function createApp(deps: Omit<AppDeps, 'table' | 'storage' | 'readCache'>
   }
   // Generated at the first request, when every route (this one too) is registered.
   let openapi: unknown;
-  apiRoute(table, appApi.openapi, async () =>
-    (openapi ??= new OpenApiGeneratorV3(table.registry.definitions).generateDocument({ openapi: '3.0.3', info: { title: 'Dwell API', version: '1' } })),
+  apiRoute(
+    table,
+    appApi.openapi,
+    async () =>
+      (openapi ??= new OpenApiGeneratorV3(table.registry.definitions).generateDocument({ openapi: '3.0.3', info: { title: 'Dwell API', version: '1' } })),
   );
   app.use(table.router);
   app.use(API_ROOT, apiNotFound);

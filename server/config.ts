@@ -25,9 +25,19 @@ const ConfigSchema = z.object({
   STRIPE_SECRET_KEY: z.string().startsWith('sk_').optional(),
   UPLOADS_DIR: z.string().min(1).optional(),
   /** A session ends after this many minutes without a request… */
-  SESSION_IDLE_MINUTES: z.coerce.number().int().min(1).max(7 * 24 * 60).default(8 * 60),
+  SESSION_IDLE_MINUTES: z.coerce
+    .number()
+    .int()
+    .min(1)
+    .max(7 * 24 * 60)
+    .default(8 * 60),
   /** …and this many hours after sign-in, however active. */
-  SESSION_ABSOLUTE_HOURS: z.coerce.number().int().min(1).max(90 * 24).default(7 * 24),
+  SESSION_ABSOLUTE_HOURS: z.coerce
+    .number()
+    .int()
+    .min(1)
+    .max(90 * 24)
+    .default(7 * 24),
 });
 
 export interface Config {

@@ -26,11 +26,10 @@ export async function startOutsideServices(config: Config): Promise<OutsideServi
   const smtpFake = config.useFakes && !config.smtpUrl ? await startSmtpFake() : null;
   const smsFake = config.useFakes && !config.smsApiUrl ? await startSmsFake() : null;
   const paymentsFake = config.useFakes && !config.paymentsApiUrl ? await startPaymentsFake() : null;
-  const fakePayments = paymentsFake?.url ?? (config.paymentsApiUrl ? { host: new URL(config.paymentsApiUrl).hostname, port: Number(new URL(config.paymentsApiUrl).port) } : null);
+  const fakePayments =
+    paymentsFake?.url ?? (config.paymentsApiUrl ? { host: new URL(config.paymentsApiUrl).hostname, port: Number(new URL(config.paymentsApiUrl).port) } : null);
   if (!fakePayments && !config.stripeSecretKey) throw new Error('STRIPE_SECRET_KEY is required in production');
-  const payments = fakePayments
-    ? createPayments({ secretKey: 'sk_test_local_fake', ...fakePayments })
-    : createPayments({ secretKey: config.stripeSecretKey! });
+  const payments = fakePayments ? createPayments({ secretKey: 'sk_test_local_fake', ...fakePayments }) : createPayments({ secretKey: config.stripeSecretKey! });
   const smtpUrl = smtpFake?.url ?? config.smtpUrl;
   if (!smtpUrl) throw new Error('SMTP_URL is required in production');
   const fakeSmsUrl = smsFake?.url ?? config.smsApiUrl;

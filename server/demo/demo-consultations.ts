@@ -13,21 +13,48 @@ import { demoServices } from './demo-catalogue';
 const demoProductCosts = { lightener: 4, remover: 6, permanent: 8, demi_permanent: 7, direct_dye: 5, toner: 7, bond_builder: 30, developer: 1.5 } as const;
 
 const jordan: ConsultationInput = {
-  currentLevel: 4, targetLevel: 8,
+  currentLevel: 4,
+  targetLevel: 8,
   history: { natural: false, permanent: true, directDye: false, boxDye: true, henna: false, previousLightening: false },
-  length: 'long', density: 'medium', elasticity: 'good', porosity: 'normal',
+  length: 'long',
+  density: 'medium',
+  elasticity: 'good',
+  porosity: 'normal',
   conditionNotes: 'Box dye over permanent on the lengths; roots natural level 5. Ends a little dry.',
-  strandTest: 'none', wantsCut: true, vivid: true, notes: 'Wants a copper-rose vivid over a level 8 base, and a long layered cut.',
+  strandTest: 'none',
+  wantsCut: true,
+  vivid: true,
+  notes: 'Wants a copper-rose vivid over a level 8 base, and a long layered cut.',
 };
 
 export async function insertDemoConsultations(db: Db, ids: { salonId: string; clients: string[]; services: Record<string, string> }, now: Date): Promise<void> {
-  await db.insertInto('product_costs').values(Object.entries(demoProductCosts).map(([product_type, cents_per_gram]) => ({ salon_id: ids.salonId, product_type: product_type as keyof typeof demoProductCosts, cents_per_gram }))).execute();
+  await db
+    .insertInto('product_costs')
+    .values(
+      Object.entries(demoProductCosts).map(([product_type, cents_per_gram]) => ({
+        salon_id: ids.salonId,
+        product_type: product_type as keyof typeof demoProductCosts,
+        cents_per_gram,
+      })),
+    )
+    .execute();
   const ana = await db.selectFrom('users').select('id').where('salon_id', '=', ids.salonId).where('email', '=', 'ana@demo.test').executeTakeFirstOrThrow();
   const clientId = ids.clients[0];
   const at = DateTime.fromJSDate(now).minus({ days: 3 }).set({ hour: 11, minute: 0, second: 0, millisecond: 0 }).toJSDate();
   await db
     .insertInto('strand_tests')
-    .values({ salon_id: ids.salonId, client_id: clientId, tested_at: at, tested: 'Colour remover on a nape strand, then lightener 1:2', product_type: 'remover', developer_percent: null, minutes: 25, result: 'passed', notes: 'Remover took the box dye to a warm 6; lightener lifted to 7 with the strand still strong.', recorded_by: ana.id })
+    .values({
+      salon_id: ids.salonId,
+      client_id: clientId,
+      tested_at: at,
+      tested: 'Colour remover on a nape strand, then lightener 1:2',
+      product_type: 'remover',
+      developer_percent: null,
+      minutes: 25,
+      result: 'passed',
+      notes: 'Remover took the box dye to a warm 6; lightener lifted to 7 with the strand still strong.',
+      recorded_by: ana.id,
+    })
     .execute();
   const salon = await findSalon(db, ids.salonId);
   const quote = proposeQuote(
@@ -35,13 +62,26 @@ export async function insertDemoConsultations(db: Db, ids: { salonId: string; cl
     { ...(await quotePriceInputs(db, ids.salonId)), deposit: { kind: 'fixed', cents: demoServices.correction.depositCents ?? 0 } },
     { processingLimits: salon.processingLimits, liftPerSitting: salon.liftPerSitting },
   );
-  const { id } = await db.insertInto('consultations').values({ salon_id: ids.salonId, client_id: clientId, details: JSON.stringify(jordan), created_by: ana.id, created_at: at }).returning('id').executeTakeFirstOrThrow();
+  const { id } = await db
+    .insertInto('consultations')
+    .values({ salon_id: ids.salonId, client_id: clientId, details: JSON.stringify(jordan), created_by: ana.id, created_at: at })
+    .returning('id')
+    .executeTakeFirstOrThrow();
   await db
     .insertInto('quotes')
     .values({
-      salon_id: ids.salonId, consultation_id: id, client_id: clientId, service_id: ids.services.correction, step_plan: JSON.stringify(quote.stepPlan),
-      price_cents: quote.priceCents, deposit_cents: quote.depositCents, notes: 'Two sittings a few days apart to protect the lengths; bond builder in every lightener bowl; the vivid shade goes on in sections at the second sitting.',
-      warnings: JSON.stringify(quote.warnings), status: 'sent', sent_at: at,
+      salon_id: ids.salonId,
+      consultation_id: id,
+      client_id: clientId,
+      service_id: ids.services.correction,
+      step_plan: JSON.stringify(quote.stepPlan),
+      price_cents: quote.priceCents,
+      deposit_cents: quote.depositCents,
+      notes:
+        'Two sittings a few days apart to protect the lengths; bond builder in every lightener bowl; the vivid shade goes on in sections at the second sitting.',
+      warnings: JSON.stringify(quote.warnings),
+      status: 'sent',
+      sent_at: at,
     })
     .execute();
 }

@@ -11,15 +11,24 @@ import { replanBookingMessages } from '../features/messages/plan-messages.servic
  * one text only, and a few said yes to suggestions (a toner refresh rule after lightening).
  */
 export async function planDemoMessages(db: Db, salonId: string, services: { fullLightening: string }, now: Date): Promise<void> {
-  await db.insertInto('follow_up_rules').values({
-    salon_id: salonId, service_id: services.fullLightening, title: 'Toner refresh',
-    body: 'It has been six weeks since your lightening: a toner refresh brings back the tone you left with. Reply or book online.',
-    rrule: 'FREQ=WEEKLY;INTERVAL=6;COUNT=1',
-  }).execute();
+  await db
+    .insertInto('follow_up_rules')
+    .values({
+      salon_id: salonId,
+      service_id: services.fullLightening,
+      title: 'Toner refresh',
+      body: 'It has been six weeks since your lightening: a toner refresh brings back the tone you left with. Reply or book online.',
+      rrule: 'FREQ=WEEKLY;INTERVAL=6;COUNT=1',
+    })
+    .execute();
   const clients = await db.selectFrom('clients').select('id').where('salon_id', '=', salonId).orderBy('created_at').orderBy('id').execute();
   for (const [i, c] of clients.entries()) {
     const messageChannel = i % 5 === 3 ? 'email' : i === 4 ? 'sms' : 'both';
-    await db.updateTable('clients').set({ message_channel: messageChannel, marketing_opt_in: i % 3 === 0 }).where('id', '=', c.id).execute();
+    await db
+      .updateTable('clients')
+      .set({ message_channel: messageChannel, marketing_opt_in: i % 3 === 0 })
+      .where('id', '=', c.id)
+      .execute();
   }
   const bookings = await db
     .selectFrom('bookings as b')
@@ -30,7 +39,12 @@ export async function planDemoMessages(db: Db, salonId: string, services: { full
     .orderBy(sql`lower(s.during)`)
     .execute();
   for (const [n, b] of bookings.entries()) {
-    const madeAt = earliest(DateTime.fromJSDate(b.start).minus({ days: 3 + (n % 8), hours: n % 5 }).toJSDate(), new Date(now.getTime() - 3_600_000));
+    const madeAt = earliest(
+      DateTime.fromJSDate(b.start)
+        .minus({ days: 3 + (n % 8), hours: n % 5 })
+        .toJSDate(),
+      new Date(now.getTime() - 3_600_000),
+    );
     // Planning reads the booking as it was then: ahead of its day, still booked.
     if (b.status !== 'booked') await db.updateTable('bookings').set({ status: 'booked' }).where('id', '=', b.id).execute();
     await replanBookingMessages(db, b.id, madeAt);

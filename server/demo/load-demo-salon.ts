@@ -12,7 +12,10 @@ import { insertDemoConsultations } from './demo-consultations';
 import { planDemoMessages } from './demo-messages';
 
 export async function isDatabaseEmpty(db: Db): Promise<boolean> {
-  const row = await db.selectFrom('salons').select(sql<number>`count(*)::int`.as('n')).executeTakeFirstOrThrow();
+  const row = await db
+    .selectFrom('salons')
+    .select(sql<number>`count(*)::int`.as('n'))
+    .executeTakeFirstOrThrow();
   return row.n === 0;
 }
 
@@ -46,9 +49,16 @@ async function insertSalonAndPeople(db: Db, passwordHash: string, now: Date): Pr
     .values({ slug: salon.slug, name: salon.name, time_zone: salon.timeZone, currency: salon.currency, address: salon.address, phone: salon.phone })
     .returning('id')
     .executeTakeFirstOrThrow();
-  await db.insertInto('salon_hours').values(hours.map((h) => ({ salon_id: salonId, rrule: h.rrule, start_time: h.start, end_time: h.end }))).execute();
+  await db
+    .insertInto('salon_hours')
+    .values(hours.map((h) => ({ salon_id: salonId, rrule: h.rrule, start_time: h.start, end_time: h.end })))
+    .execute();
   const user = (p: { email: string; name: string; role: 'owner' | 'front_desk' | 'stylist' | 'client' }) =>
-    db.insertInto('users').values({ salon_id: salonId, email: p.email, name: p.name, role: p.role, phone: null, password_hash: passwordHash }).returning('id').executeTakeFirstOrThrow();
+    db
+      .insertInto('users')
+      .values({ salon_id: salonId, email: p.email, name: p.name, role: p.role, phone: null, password_hash: passwordHash })
+      .returning('id')
+      .executeTakeFirstOrThrow();
   await user(demoStaff.owner);
   const desk = await user(demoStaff.desk);
   const stylists = {} as Record<StylistKey, string>;
@@ -69,8 +79,16 @@ async function insertSalonAndPeople(db: Db, passwordHash: string, now: Date): Pr
     const row = await db
       .insertInto('services')
       .values({
-        salon_id: salonId, name: s.name, description: s.description, category: s.category, skill: s.skill, price_cents: s.priceCents,
-        price_is_from: s.priceIsFrom ?? false, deposit_cents: s.depositCents ?? 0, online_bookable: s.onlineBookable ?? false, needs_skin_test: s.needsSkinTest ?? false,
+        salon_id: salonId,
+        name: s.name,
+        description: s.description,
+        category: s.category,
+        skill: s.skill,
+        price_cents: s.priceCents,
+        price_is_from: s.priceIsFrom ?? false,
+        deposit_cents: s.depositCents ?? 0,
+        online_bookable: s.onlineBookable ?? false,
+        needs_skin_test: s.needsSkinTest ?? false,
         step_plan: JSON.stringify(s.plan),
       })
       .returning('id')
@@ -83,7 +101,13 @@ async function insertSalonAndPeople(db: Db, passwordHash: string, now: Date): Pr
     const clientUser = i === 0 ? await user({ email: 'client@demo.test', name, role: 'client' }) : null;
     const row = await db
       .insertInto('clients')
-      .values({ salon_id: salonId, user_id: clientUser?.id ?? null, name, email: i === 0 ? 'client@demo.test' : `${handle}@example.com`, phone: `+1970555${String(1000 + i * 37).slice(-4)}` })
+      .values({
+        salon_id: salonId,
+        user_id: clientUser?.id ?? null,
+        name,
+        email: i === 0 ? 'client@demo.test' : `${handle}@example.com`,
+        phone: `+1970555${String(1000 + i * 37).slice(-4)}`,
+      })
       .returning('id')
       .executeTakeFirstOrThrow();
     clients.push(row.id);
@@ -99,9 +123,21 @@ const hasNegativeDemoTest = (i: number) => hasDemoTest(i) && i !== 9;
 async function insertDemoSkinTests(db: Db, salonId: string, clients: string[], now: Date): Promise<void> {
   const rows = clients.flatMap((clientId, i) => {
     if (!hasDemoTest(i)) return []; // no test on record: the desk must book one first
-    const appliedAt = DateTime.fromJSDate(now).minus({ days: 20 + ((i * 7) % 40) }).set({ hour: 10, minute: 0 }).toJSDate();
+    const appliedAt = DateTime.fromJSDate(now)
+      .minus({ days: 20 + ((i * 7) % 40) })
+      .set({ hour: 10, minute: 0 })
+      .toJSDate();
     const readAt = DateTime.fromJSDate(appliedAt).plus({ hours: 48 }).toJSDate();
-    return [{ salon_id: salonId, client_id: clientId, applied_at: appliedAt, read_at: readAt, result: hasNegativeDemoTest(i) ? ('negative' as const) : ('positive' as const), product: 'Permanent colour 6.0 with 6% developer' }];
+    return [
+      {
+        salon_id: salonId,
+        client_id: clientId,
+        applied_at: appliedAt,
+        read_at: readAt,
+        result: hasNegativeDemoTest(i) ? ('negative' as const) : ('positive' as const),
+        product: 'Permanent colour 6.0 with 6% developer',
+      },
+    ];
   });
   await db.insertInto('skin_tests').values(rows).execute();
 }
@@ -116,15 +152,26 @@ async function insertDemoStandby(db: Db, ids: Ids): Promise<void> {
   ];
   await db
     .insertInto('standby_entries')
-    .values(entries.map((e) => ({
-      salon_id: ids.salonId, client_id: ids.clients[e.client], service_ids: e.services.map((k) => ids.services[k]), stylist_id: e.stylist,
-      availability: JSON.stringify([weekdays]), notes: e.notes, created_by: ids.deskUserId,
-    })))
+    .values(
+      entries.map((e) => ({
+        salon_id: ids.salonId,
+        client_id: ids.clients[e.client],
+        service_ids: e.services.map((k) => ids.services[k]),
+        stylist_id: e.stylist,
+        availability: JSON.stringify([weekdays]),
+        notes: e.notes,
+        created_by: ids.deskUserId,
+      })),
+    )
     .execute();
 }
 
 async function insertNamed(db: Db, table: 'chairs' | 'basins', salonId: string, names: string[]): Promise<string[]> {
-  const rows = await db.insertInto(table).values(names.map((name) => ({ salon_id: salonId, name }))).returning(['id', 'name']).execute();
+  const rows = await db
+    .insertInto(table)
+    .values(names.map((name) => ({ salon_id: salonId, name })))
+    .returning(['id', 'name'])
+    .execute();
   return names.map((n) => rows.find((r) => r.name === n)!.id);
 }
 
@@ -137,7 +184,10 @@ async function insertDemoBook(db: Db, ids: Ids, now: Date): Promise<number> {
   // Sitting 2 three open days after sitting 1: 3 to 5 calendar days, inside the quote rules' days between sittings.
   const correctionDays = [openDays[Math.max(0, firstFuture - 1)], openDays[Math.max(0, firstFuture - 1) + 3]];
   const marcusOff = openDays[openDays.length - 2];
-  await db.insertInto('time_off').values({ staff_id: ids.stylists.marcus, during: tstzRange(marcusOff.toJSDate(), marcusOff.plus({ days: 1 }).toJSDate()), reason: 'Training day' }).execute();
+  await db
+    .insertInto('time_off')
+    .values({ staff_id: ids.stylists.marcus, during: tstzRange(marcusOff.toJSDate(), marcusOff.plus({ days: 1 }).toJSDate()), reason: 'Training day' })
+    .execute();
 
   let count = 0;
   let clientTurn = 1; // client 0 (the demo client account) has the correction
@@ -159,12 +209,23 @@ async function insertDemoBook(db: Db, ids: Ids, now: Date): Promise<number> {
       const sittings = [{ day, placement: p }];
       if (p.service === 'correction') sittings.push({ day: correctionDays[1], placement: correctionDayTwo[0] });
       const steps = sittings.map((s) => placeSteps(s.day, s.placement, ids));
-      const status = statusFor(steps.map((st) => ({ start: st[0].start, end: st.at(-1)!.end })), now, count);
+      const status = statusFor(
+        steps.map((st) => ({ start: st[0].start, end: st.at(-1)!.end })),
+        now,
+        count,
+      );
       const service = demoServices[p.service];
       await insertBooking(db, {
-        salonId: ids.salonId, clientId, serviceId: ids.services[p.service], stylistId: ids.stylists[p.stylist], status,
-        stepPlan: service.plan, priceCents: service.priceCents, depositCents: service.depositCents ?? 0,
-        createdBy: ids.deskUserId, cancelReason: status === 'cancelled' ? 'Client asked to cancel (moving house)' : undefined,
+        salonId: ids.salonId,
+        clientId,
+        serviceId: ids.services[p.service],
+        stylistId: ids.stylists[p.stylist],
+        status,
+        stepPlan: service.plan,
+        priceCents: service.priceCents,
+        depositCents: service.depositCents ?? 0,
+        createdBy: ids.deskUserId,
+        cancelReason: status === 'cancelled' ? 'Client asked to cancel (moving house)' : undefined,
         sittings: sittings.map((s, i) => ({ chairId: ids.chairs[s.placement.chair], steps: steps[i] })),
       });
       count++;

@@ -33,9 +33,9 @@ export class FaultPlan implements FaultControls {
 
   /** The fault the next request meets, used up as it is taken. */
   take(): Fault {
-    if (this.stalls > 0) return this.stalls--, { kind: 'stall' };
-    if (this.failures > 0) return this.failures--, { kind: 'fail' };
-    if (this.slow > 0) return this.slow--, { kind: 'slow', ms: this.slowMs };
+    if (this.stalls > 0) return (this.stalls--, { kind: 'stall' });
+    if (this.failures > 0) return (this.failures--, { kind: 'fail' });
+    if (this.slow > 0) return (this.slow--, { kind: 'slow', ms: this.slowMs });
     return null;
   }
 }

@@ -57,7 +57,9 @@ export async function startPaymentsFake(port = 0): Promise<PaymentsFake> {
     const earlier = key && replies.get(key);
     if (earlier) return void res.status(earlier.status).json(earlier.body);
     if (key && inFlight.has(key)) {
-      return void res.status(409).json({ error: { type: 'idempotency_error', message: 'There is currently another in-progress request using this Idempotent Key.' } });
+      return void res
+        .status(409)
+        .json({ error: { type: 'idempotency_error', message: 'There is currently another in-progress request using this Idempotent Key.' } });
     }
     if (key) {
       inFlight.add(key);
@@ -89,20 +91,30 @@ export async function startPaymentsFake(port = 0): Promise<PaymentsFake> {
     const hook = successHook;
     successHook = null;
     if (!hook) return void res.json(intent);
-    hook().then(() => res.json(intent), () => res.json(intent));
+    hook().then(
+      () => res.json(intent),
+      () => res.json(intent),
+    );
   };
   app.post('/v1/payment_methods', (req, res) => {
     const number = String(req.body?.card?.number ?? '').replace(/\s/g, '');
-    if (!/^\d{12,19}$/.test(number)) return void res.status(402).json({ error: { type: 'card_error', code: 'incorrect_number', message: 'Your card number is incorrect.' } });
+    if (!/^\d{12,19}$/.test(number))
+      return void res.status(402).json({ error: { type: 'card_error', code: 'incorrect_number', message: 'Your card number is incorrect.' } });
     const pm = id('pm');
     methods.set(pm, { number, last4: number.slice(-4) });
     res.json({ id: pm, object: 'payment_method', type: 'card', card: { last4: number.slice(-4), brand: number.startsWith('4') ? 'visa' : 'unknown' } });
   });
   app.post('/v1/payment_intents', (req, res) => {
     const intent: Intent = {
-      id: id('pi'), object: 'payment_intent', amount: Number(req.body.amount), currency: String(req.body.currency ?? 'usd'),
-      status: req.body.payment_method ? 'requires_confirmation' : 'requires_payment_method', payment_method: req.body.payment_method ?? null,
-      metadata: req.body.metadata ?? {}, amount_refunded: 0, last_payment_error: null,
+      id: id('pi'),
+      object: 'payment_intent',
+      amount: Number(req.body.amount),
+      currency: String(req.body.currency ?? 'usd'),
+      status: req.body.payment_method ? 'requires_confirmation' : 'requires_payment_method',
+      payment_method: req.body.payment_method ?? null,
+      metadata: req.body.metadata ?? {},
+      amount_refunded: 0,
+      last_payment_error: null,
     };
     intents.set(intent.id, intent);
     if (req.body.confirm === 'true') return confirm(intent, res);

@@ -64,15 +64,27 @@ export async function startSmsFake(port = 0): Promise<SmsFake> {
     },
     async simulateInbound(from, body) {
       if (!webhook) throw new Error('The SMS fake has no inbound webhook yet');
-      const params = { MessageSid: `SMIN${String(++inbound).padStart(30, '0')}`, AccountSid: `AC${'0'.repeat(32)}`, From: from, To: '+19705550100', Body: body, NumMedia: '0' };
+      const params = {
+        MessageSid: `SMIN${String(++inbound).padStart(30, '0')}`,
+        AccountSid: `AC${'0'.repeat(32)}`,
+        From: from,
+        To: '+19705550100',
+        Body: body,
+        NumMedia: '0',
+      };
       // The provider signs each webhook request with the account's auth token (HMAC-SHA1 of URL + sorted params).
       const signature = twilio.getExpectedTwilioSignature(webhook.authToken, webhook.url, params);
-      const res = await fetch(webhook.url, { method: 'POST', headers: { 'content-type': 'application/x-www-form-urlencoded', 'x-twilio-signature': signature }, body: new URLSearchParams(params) });
+      const res = await fetch(webhook.url, {
+        method: 'POST',
+        headers: { 'content-type': 'application/x-www-form-urlencoded', 'x-twilio-signature': signature },
+        body: new URLSearchParams(params),
+      });
       return res.status;
     },
-    close: () => new Promise((resolve) => {
-      server.closeAllConnections();
-      server.close(() => resolve());
-    }),
+    close: () =>
+      new Promise((resolve) => {
+        server.closeAllConnections();
+        server.close(() => resolve());
+      }),
   };
 }

@@ -28,7 +28,15 @@ export async function startSmtpFake(port = 0): Promise<SmtpFake> {
           if (fault?.kind === 'slow') await pause(fault.ms);
           const to = session.envelope.rcptTo.map((r) => r.address).join(', ');
           const attachments = mail.attachments.map((a) => ({ filename: a.filename ?? '', contentType: a.contentType, content: a.content.toString('utf8') }));
-          messages.push({ id: messages.length + 1, to, subject: mail.subject ?? '', text: mail.text ?? '', html: typeof mail.html === 'string' ? mail.html : null, receivedAt: new Date().toISOString(), attachments });
+          messages.push({
+            id: messages.length + 1,
+            to,
+            subject: mail.subject ?? '',
+            text: mail.text ?? '',
+            html: typeof mail.html === 'string' ? mail.html : null,
+            receivedAt: new Date().toISOString(),
+            attachments,
+          });
           callback();
         })
         .catch(callback);

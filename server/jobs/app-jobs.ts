@@ -4,7 +4,15 @@ import type { JobDefinition } from './job-queue';
 import { LAPSE_HOLD_JOB } from '../features/online-booking/holds.service';
 import { lapseHolds } from '../features/online-booking/holds.repository';
 import {
-  REQUEUE_STUCK_MESSAGES_JOB, SCHEDULE_MESSAGE_JOBS_JOB, SEND_DUE_MESSAGES_JOB, SEND_MESSAGE_JOB, requeueStuckMessages, scheduleMessageJobs, sendDueMessages, sendOnTime, type Senders,
+  REQUEUE_STUCK_MESSAGES_JOB,
+  SCHEDULE_MESSAGE_JOBS_JOB,
+  SEND_DUE_MESSAGES_JOB,
+  SEND_MESSAGE_JOB,
+  requeueStuckMessages,
+  scheduleMessageJobs,
+  sendDueMessages,
+  sendOnTime,
+  type Senders,
 } from '../features/messages/send-message.job';
 import { planStaffMessages } from '../features/messages/staff-messages.service';
 
@@ -30,10 +38,14 @@ export function appJobs(db: Kysely<Database>, senders: Senders, options: JobOpti
     },
     { name: SEND_DUE_MESSAGES_JOB, handler: async () => void (await sendDueMessages(db, senders, new Date())), everyMinute: true, atStart: true },
     // A restarted worker first frees claims a dead worker left, then the sweep above sends them.
-    { name: REQUEUE_STUCK_MESSAGES_JOB, handler: async () => {
+    {
+      name: REQUEUE_STUCK_MESSAGES_JOB,
+      handler: async () => {
         if ((await requeueStuckMessages(db, new Date(), options.claimTimeoutSeconds)) > 0) await sendDueMessages(db, senders, new Date());
       },
-      everyMinute: true, atStart: true },
+      everyMinute: true,
+      atStart: true,
+    },
     // Stylists' next-day lists and the desk's no-deposit list, at 18:00 in each salon's zone.
     { name: 'plan-staff-messages', handler: async () => void (await planStaffMessages(db, new Date())), everyMinute: true },
   ];

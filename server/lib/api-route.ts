@@ -92,10 +92,7 @@ function sendJsonText(req: Request, res: Response, json: JsonText) {
 function register(registry: OpenAPIRegistry, spec: Endpoint, status: number) {
   const json = (schema: ZodType) => ({ content: { 'application/json': { schema } } });
   const errors = Object.fromEntries(
-    errorStatuses(spec.access, Boolean(spec.body || spec.query || spec.params)).map((s) => [
-      s,
-      { description: 'Error', ...json(ApiErrorBodySchema) },
-    ]),
+    errorStatuses(spec.access, Boolean(spec.body || spec.query || spec.params)).map((s) => [s, { description: 'Error', ...json(ApiErrorBodySchema) }]),
   );
   registry.registerPath({
     method: spec.method,

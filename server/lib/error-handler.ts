@@ -12,7 +12,7 @@ function send(res: Parameters<RequestHandler>[1], status: number, error: ApiErro
 
 /** Unknown /api routes answer JSON 404, never the client app. */
 export const apiNotFound: RequestHandler = (req, res) =>
-  send(res, 404, { code: 'NOT_FOUND', message: `No API route ${req.method} ${req.originalUrl.split("?")[0]}.` });
+  send(res, 404, { code: 'NOT_FOUND', message: `No API route ${req.method} ${req.originalUrl.split('?')[0]}.` });
 
 // Connection failures (PostgreSQL down or restarting) are reported as 503 so clients retry later.
 const DB_DOWN = new Set(['ECONNREFUSED', 'ECONNRESET', '57P01', '57P03', 'ETIMEDOUT']);

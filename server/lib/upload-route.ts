@@ -39,7 +39,8 @@ export function uploadRoute<const E extends UploadEndpoint>(
   table.router.post(spec.path, requireAccess(spec.access), ...before, readFiles(spec.upload), async (req, res) => {
     const files = (req.files as Express.Multer.File[] | undefined) ?? [];
     if (!req.is('multipart/form-data')) throw new AppError('VALIDATION_FAILED', 400, 'Send the photos as multipart/form-data.');
-    if (files.length === 0) throw new AppError('VALIDATION_FAILED', 400, 'Choose at least one photo.', { [spec.upload.fileField]: 'Choose at least one photo' });
+    if (files.length === 0)
+      throw new AppError('VALIDATION_FAILED', 400, 'Choose at least one photo.', { [spec.upload.fileField]: 'Choose at least one photo' });
     const ctx = {
       fields: spec.body.parse({ ...req.body }),
       params: spec.params ? spec.params.parse(req.params) : undefined,
@@ -66,10 +67,16 @@ function readFiles(spec: UploadLimits): RequestHandler {
       const filename = (err as { filename?: string }).filename;
       const name = filename ? `“${safeFileName(filename)}”` : 'A file';
       if (err.code === 'LIMIT_FILE_SIZE') {
-        return next(new AppError('PAYLOAD_TOO_LARGE', 413, `${name} is larger than ${megabytes} MB.`, { [spec.fileField]: `${name} is larger than ${megabytes} MB` }));
+        return next(
+          new AppError('PAYLOAD_TOO_LARGE', 413, `${name} is larger than ${megabytes} MB.`, { [spec.fileField]: `${name} is larger than ${megabytes} MB` }),
+        );
       }
       if (err.code === 'LIMIT_FILE_COUNT' || (err.code === 'LIMIT_UNEXPECTED_FILE' && err.field === spec.fileField)) {
-        return next(new AppError('VALIDATION_FAILED', 400, `Send at most ${spec.maxFiles} photos at a time.`, { [spec.fileField]: `At most ${spec.maxFiles} photos at a time` }));
+        return next(
+          new AppError('VALIDATION_FAILED', 400, `Send at most ${spec.maxFiles} photos at a time.`, {
+            [spec.fileField]: `At most ${spec.maxFiles} photos at a time`,
+          }),
+        );
       }
       if (err.code === 'LIMIT_UNEXPECTED_FILE') return next(new AppError('VALIDATION_FAILED', 400, `Send files only in the field “${spec.fileField}”.`));
       next(new AppError('VALIDATION_FAILED', 400, 'The upload form is not one Dwell expects.'));

@@ -12,7 +12,10 @@ export function findChromium(): string {
     throw new SetupError('Chromium was not found. Install it with:  sudo apt-get install -y chromium');
   }
   console.log('dwell: installing Chromium from Debian (apt-get install -y chromium)…');
-  for (const args of [['update', '-qq'], ['install', '-y', '-qq', 'chromium']]) {
+  for (const args of [
+    ['update', '-qq'],
+    ['install', '-y', '-qq', 'chromium'],
+  ]) {
     const res = spawnSync('apt-get', args, { stdio: 'inherit', env: { ...process.env, DEBIAN_FRONTEND: 'noninteractive' } });
     if (res.status !== 0) throw new SetupError(`apt-get ${args.join(' ')} failed`);
   }

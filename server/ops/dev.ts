@@ -24,7 +24,13 @@ if ('heldBy' in lock) {
 const { cluster, url } = await prepareLocalDatabase({ dataRoot, port: Number(process.env.PGPORT ?? 54329), database: 'dwell' });
 await loadDemoIfEmpty(url);
 const server = await startServer(
-  loadConfig({ ...process.env, DATABASE_URL: url, PORT: String(port), DWELL_MODE: 'dev', SESSION_SECRET: localSessionSecret(join(dataRoot, 'session-secret')) }),
+  loadConfig({
+    ...process.env,
+    DATABASE_URL: url,
+    PORT: String(port),
+    DWELL_MODE: 'dev',
+    SESSION_SECRET: localSessionSecret(join(dataRoot, 'session-secret')),
+  }),
 );
 console.log(`dwell: API on ${server.url}; the app with hot reload on http://127.0.0.1:5173`);
 const vite = spawn(join(root, 'node_modules', '.bin', 'vite'), [], { cwd: root, stdio: 'inherit', env: { ...process.env, PORT: String(port) } });

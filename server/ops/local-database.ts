@@ -3,15 +3,7 @@ import { join } from 'node:path';
 import { createDb, createPool } from '../db/database';
 import { migrateToLatest } from '../db/migrate';
 import { isDatabaseEmpty, loadDemoSalon } from '../demo/load-demo-salon';
-import {
-  clusterPaths,
-  databaseUrl,
-  ensureCluster,
-  ensureDatabase,
-  findPostgresBin,
-  startCluster,
-  type Cluster,
-} from './postgres-cluster';
+import { clusterPaths, databaseUrl, ensureCluster, ensureDatabase, findPostgresBin, startCluster, type Cluster } from './postgres-cluster';
 
 export interface LocalDatabaseOptions {
   /** Folder that holds the cluster (e.g. `<repo>/.data`). */

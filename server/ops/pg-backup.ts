@@ -27,7 +27,14 @@ export async function restoreDatabase(binDir: string, adminUrl: string, name: st
     await admin.query(`drop database if exists "${scratch}" with (force)`);
     await admin.query(`create database "${scratch}" template template0`);
     try {
-      tool(binDir, 'pg_restore', ['--no-owner', '--no-privileges', '--exit-on-error', '--single-transaction', `--dbname=${withDatabase(adminUrl, scratch)}`, file]);
+      tool(binDir, 'pg_restore', [
+        '--no-owner',
+        '--no-privileges',
+        '--exit-on-error',
+        '--single-transaction',
+        `--dbname=${withDatabase(adminUrl, scratch)}`,
+        file,
+      ]);
     } catch (err) {
       await admin.query(`drop database if exists "${scratch}" with (force)`);
       throw err;

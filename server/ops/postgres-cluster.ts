@@ -71,9 +71,7 @@ export function ensureCluster(cluster: Cluster): boolean {
     if (isRoot) chownToPostgres(dir);
   }
   if (existsSync(join(cluster.dataDir, 'PG_VERSION'))) return false;
-  asServerUser(join(cluster.binDir, 'initdb'), [
-    '-D', cluster.dataDir, '-U', SUPERUSER, '--auth=trust', '-E', 'UTF8', '--locale=C.UTF-8', '--no-instructions',
-  ]);
+  asServerUser(join(cluster.binDir, 'initdb'), ['-D', cluster.dataDir, '-U', SUPERUSER, '--auth=trust', '-E', 'UTF8', '--locale=C.UTF-8', '--no-instructions']);
   return true;
 }
 
@@ -85,15 +83,11 @@ export function startCluster(cluster: Cluster, extraSettings: string[] = []): vo
   if (isRunning(cluster)) return;
   const settings = ['-c listen_addresses=127.0.0.1', `-p ${cluster.port}`, `-k ${cluster.socketDir}`, ...extraSettings];
   const res = spawnSync(
-    ...serverUserCommand(join(cluster.binDir, 'pg_ctl'), [
-      'start', '-w', '-t', '60', '-D', cluster.dataDir, '-l', cluster.logFile, '-o', settings.join(' '),
-    ]),
+    ...serverUserCommand(join(cluster.binDir, 'pg_ctl'), ['start', '-w', '-t', '60', '-D', cluster.dataDir, '-l', cluster.logFile, '-o', settings.join(' ')]),
     { encoding: 'utf8' },
   );
   if (res.status !== 0) {
-    throw new SetupError(
-      `PostgreSQL did not start on 127.0.0.1:${cluster.port} (is the port taken?). See ${cluster.logFile}.\n${res.stderr ?? ''}`,
-    );
+    throw new SetupError(`PostgreSQL did not start on 127.0.0.1:${cluster.port} (is the port taken?). See ${cluster.logFile}.\n${res.stderr ?? ''}`);
   }
 }
 

@@ -31,7 +31,13 @@ async function main() {
     stopDatabase = () => stopCluster(cluster);
     await loadDemoIfEmpty(url);
     buildClientIfStale(root);
-    const config = loadConfig({ ...process.env, DATABASE_URL: url, PORT: String(port), DWELL_MODE: 'demo', SESSION_SECRET: localSessionSecret(join(dataRoot, 'session-secret')) });
+    const config = loadConfig({
+      ...process.env,
+      DATABASE_URL: url,
+      PORT: String(port),
+      DWELL_MODE: 'demo',
+      SESSION_SECRET: localSessionSecret(join(dataRoot, 'session-secret')),
+    });
     const server = await startServer(config);
     printWelcome(server.url);
     onShutdownSignal(async () => {

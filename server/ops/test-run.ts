@@ -67,9 +67,7 @@ async function main(): Promise<number> {
         (skipChecks
           ? 'typecheck, lint and boundaries skipped, '
           : `typecheck ${typecheck === 0 ? 'ok' : 'FAILED'}, lint ${lint === 0 ? 'ok' : 'FAILED'}, boundaries ${boundaries === 0 ? 'ok' : 'FAILED'}, `) +
-        (report
-          ? `${report.numPassedTests} tests passed, ${report.numFailedTests} failed, ${report.numPendingTests} skipped`
-          : 'tests did not report') +
+        (report ? `${report.numPassedTests} tests passed, ${report.numFailedTests} failed, ${report.numPendingTests} skipped` : 'tests did not report') +
         ` in ${seconds}s`,
     );
     return ok ? 0 : 1;

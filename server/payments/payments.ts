@@ -35,7 +35,9 @@ export function createPayments(config: { secretKey: string; host?: string; port?
           { amount: amountCents, currency: currency.toLowerCase(), payment_method: method.id, confirm: true, metadata },
           { idempotencyKey: `${idempotencyKey}:intent` },
         );
-        return intent.status === 'succeeded' ? { ok: true, paymentIntentId: intent.id } : { ok: false, message: 'The payment did not go through.', paymentIntentId: intent.id };
+        return intent.status === 'succeeded'
+          ? { ok: true, paymentIntentId: intent.id }
+          : { ok: false, message: 'The payment did not go through.', paymentIntentId: intent.id };
       } catch (err) {
         if (err instanceof Stripe.errors.StripeCardError) {
           return { ok: false, message: err.message, paymentIntentId: (err.raw as { payment_intent?: { id: string } }).payment_intent?.id ?? null };

@@ -15,9 +15,8 @@ describe('storage keys', () => {
   it('accepts the keys newKey makes', () => {
     expect(isValidKey(newKey('3f8e2c1a-0000-4000-8000-000000000001', 'jpg'))).toBe(true);
   });
-  it.each(['../etc/passwd.jpg', 'a/../../b.jpg', '/abs/x.jpg', 'a\\b.jpg', 'A.JPG', 'photo.gif', 'x.jpg.exe', 'a//b.jpg', ''])(
-    'refuses %j',
-    (key) => expect(isValidKey(key)).toBe(false),
+  it.each(['../etc/passwd.jpg', 'a/../../b.jpg', '/abs/x.jpg', 'a\\b.jpg', 'A.JPG', 'photo.gif', 'x.jpg.exe', 'a//b.jpg', ''])('refuses %j', (key) =>
+    expect(isValidKey(key)).toBe(false),
   );
 });
 

@@ -18,9 +18,30 @@ import { DESK, endpoint } from './endpoint';
  * booking, and the desk's changes to bookings (options, book, move, change the plan, cancel, history).
  */
 export const bookingsApi = {
-  deskDay: endpoint({ method: 'get', path: '/api/desk/day', access: DESK, summary: "The salon's book for one day", query: DayQuerySchema, response: DayViewSchema }),
-  deskWeek: endpoint({ method: 'get', path: '/api/desk/week', access: DESK, summary: 'A week of the book, for one stylist or all', query: WeekQuerySchema, response: WeekViewSchema }),
-  stylistDay: endpoint({ method: 'get', path: '/api/stylist/day', access: ['stylist'], summary: "The signed-in stylist's day", query: DayQuerySchema, response: DayViewSchema }),
+  deskDay: endpoint({
+    method: 'get',
+    path: '/api/desk/day',
+    access: DESK,
+    summary: "The salon's book for one day",
+    query: DayQuerySchema,
+    response: DayViewSchema,
+  }),
+  deskWeek: endpoint({
+    method: 'get',
+    path: '/api/desk/week',
+    access: DESK,
+    summary: 'A week of the book, for one stylist or all',
+    query: WeekQuerySchema,
+    response: WeekViewSchema,
+  }),
+  stylistDay: endpoint({
+    method: 'get',
+    path: '/api/stylist/day',
+    access: ['stylist'],
+    summary: "The signed-in stylist's day",
+    query: DayQuerySchema,
+    response: DayViewSchema,
+  }),
   mine: endpoint({ method: 'get', path: '/api/me/bookings', access: ['client'], summary: "The signed-in client's bookings", response: MyBookingsSchema }),
   one: endpoint({
     method: 'get',

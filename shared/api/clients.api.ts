@@ -7,7 +7,14 @@ import { DESK, STAFF, endpoint } from './endpoint';
 
 /** The salon's clients: search, add, the client card and its edit, and each client's age record. */
 export const clientsApi = {
-  list: endpoint({ method: 'get', path: '/api/clients', access: STAFF, summary: 'Find clients by name, e-mail or phone', query: ClientListQuerySchema, response: ClientListSchema }),
+  list: endpoint({
+    method: 'get',
+    path: '/api/clients',
+    access: STAFF,
+    summary: 'Find clients by name, e-mail or phone',
+    query: ClientListQuerySchema,
+    response: ClientListSchema,
+  }),
   create: endpoint({
     method: 'post',
     path: '/api/clients',
@@ -17,7 +24,14 @@ export const clientsApi = {
     response: ClientSummarySchema,
     status: 201,
   }),
-  one: endpoint({ method: 'get', path: '/api/clients/:id', access: STAFF, summary: 'A client card with their bookings', params: IdParamsSchema, response: ClientDetailSchema }),
+  one: endpoint({
+    method: 'get',
+    path: '/api/clients/:id',
+    access: STAFF,
+    summary: 'A client card with their bookings',
+    params: IdParamsSchema,
+    response: ClientDetailSchema,
+  }),
   update: endpoint({
     method: 'patch',
     path: '/api/clients/:id',
@@ -28,7 +42,14 @@ export const clientsApi = {
     response: ClientSummarySchema,
   }),
   // Date of birth and guardian consent: oxidative colour for a client under 16 needs a guardian's consent on record.
-  age: endpoint({ method: 'get', path: '/api/clients/:id/age', access: STAFF, summary: "A client's date of birth and guardian consents", params: IdParamsSchema, response: ClientAgeSchema }),
+  age: endpoint({
+    method: 'get',
+    path: '/api/clients/:id/age',
+    access: STAFF,
+    summary: "A client's date of birth and guardian consents",
+    params: IdParamsSchema,
+    response: ClientAgeSchema,
+  }),
   setDateOfBirth: endpoint({
     method: 'put',
     path: '/api/clients/:id/date-of-birth',
@@ -38,7 +59,13 @@ export const clientsApi = {
     body: DateOfBirthBodySchema,
     response: ClientAgeSchema,
   }),
-  myAge: endpoint({ method: 'get', path: '/api/me/age', access: ['client'], summary: 'My date of birth and any guardian consent on record', response: ClientAgeSchema }),
+  myAge: endpoint({
+    method: 'get',
+    path: '/api/me/age',
+    access: ['client'],
+    summary: 'My date of birth and any guardian consent on record',
+    response: ClientAgeSchema,
+  }),
   setMyDateOfBirth: endpoint({
     method: 'put',
     path: '/api/me/date-of-birth',

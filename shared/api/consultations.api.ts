@@ -1,6 +1,11 @@
 import { IdParamsSchema } from '../schemas/common.schemas';
 import {
-  ConsultationListSchema, ConsultationViewSchema, CreateConsultationSchema, ProposeQuoteRequestSchema, ProposedQuoteSchema, QuoteEditSchema,
+  ConsultationListSchema,
+  ConsultationViewSchema,
+  CreateConsultationSchema,
+  ProposeQuoteRequestSchema,
+  ProposedQuoteSchema,
+  QuoteEditSchema,
 } from '../schemas/consultation.schemas';
 import { STAFF, endpoint } from './endpoint';
 
@@ -26,7 +31,14 @@ export const consultationsApi = {
     response: ConsultationViewSchema,
     status: 201,
   }),
-  one: endpoint({ method: 'get', path: '/api/consultations/:id', access: STAFF, summary: 'One consultation and its quote', params: IdParamsSchema, response: ConsultationViewSchema }),
+  one: endpoint({
+    method: 'get',
+    path: '/api/consultations/:id',
+    access: STAFF,
+    summary: 'One consultation and its quote',
+    params: IdParamsSchema,
+    response: ConsultationViewSchema,
+  }),
   editQuote: endpoint({
     method: 'put',
     path: '/api/consultations/:id/quote',
@@ -44,7 +56,13 @@ export const consultationsApi = {
     params: IdParamsSchema,
     response: ConsultationViewSchema,
   }),
-  myQuotes: endpoint({ method: 'get', path: '/api/me/quotes', access: ['client'], summary: "The signed-in client's quotes sent to them", response: ConsultationListSchema }),
+  myQuotes: endpoint({
+    method: 'get',
+    path: '/api/me/quotes',
+    access: ['client'],
+    summary: "The signed-in client's quotes sent to them",
+    response: ConsultationListSchema,
+  }),
   acceptMyQuote: endpoint({
     method: 'post',
     path: '/api/me/quotes/:id/accept',

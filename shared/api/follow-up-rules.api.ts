@@ -4,7 +4,13 @@ import { endpoint } from './endpoint';
 
 /** The owner's follow-up rules: marketing suggestions per service, sent only to clients who opted in. */
 export const followUpRulesApi = {
-  list: endpoint({ method: 'get', path: '/api/owner/follow-up-rules', access: ['owner'], summary: 'Follow-up rules per service', response: FollowUpRulesSchema }),
+  list: endpoint({
+    method: 'get',
+    path: '/api/owner/follow-up-rules',
+    access: ['owner'],
+    summary: 'Follow-up rules per service',
+    response: FollowUpRulesSchema,
+  }),
   add: endpoint({
     method: 'post',
     path: '/api/owner/follow-up-rules',

@@ -4,7 +4,13 @@ import { CLIENT_OR_STAFF, endpoint } from './endpoint';
 
 /** A client's hair history: filled in by the client on their page, or by the team on the client card. */
 export const hairHistoryApi = {
-  mine: endpoint({ method: 'get', path: '/api/me/hair-history', access: ['client'], summary: 'The signed-in client’s hair history', response: HairHistoryResponseSchema }),
+  mine: endpoint({
+    method: 'get',
+    path: '/api/me/hair-history',
+    access: ['client'],
+    summary: 'The signed-in client’s hair history',
+    response: HairHistoryResponseSchema,
+  }),
   saveMine: endpoint({
     method: 'put',
     path: '/api/me/hair-history',

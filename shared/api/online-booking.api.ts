@@ -30,7 +30,14 @@ import { endpoint } from './endpoint';
  * client does with their own bookings afterwards (the calendar file, the confirmation, cancel and move).
  */
 export const onlineBookingApi = {
-  publicSalon: endpoint({ method: 'get', path: '/api/public/salons/:slug', access: 'public', summary: "The salon's public page", params: SlugParamsSchema, response: PublicSalonSchema }),
+  publicSalon: endpoint({
+    method: 'get',
+    path: '/api/public/salons/:slug',
+    access: 'public',
+    summary: "The salon's public page",
+    params: SlugParamsSchema,
+    response: PublicSalonSchema,
+  }),
   availability: endpoint({
     method: 'get',
     path: '/api/public/salons/:slug/availability',
@@ -49,7 +56,14 @@ export const onlineBookingApi = {
     response: CreatedHoldSchema,
     status: 201,
   }),
-  hold: endpoint({ method: 'get', path: '/api/public/holds/:id', access: 'public', summary: 'Where a hold stands', params: HoldParamsSchema, response: HoldSchema }),
+  hold: endpoint({
+    method: 'get',
+    path: '/api/public/holds/:id',
+    access: 'public',
+    summary: 'Where a hold stands',
+    params: HoldParamsSchema,
+    response: HoldSchema,
+  }),
   myHolds: endpoint({ method: 'get', path: '/api/me/holds', access: ['client'], summary: 'My unpaid held time, if any', response: MyHoldsSchema }),
   resumeHold: endpoint({
     method: 'post',

@@ -27,7 +27,13 @@ const ClosureParamsSchema = UnitParamsSchema.extend({ entryId: IdSchema });
 
 /** The owner sets up the salon: its settings and hours, its staff, chairs and basins, and its menu of services. */
 export const setupApi = {
-  salon: endpoint({ method: 'get', path: '/api/owner/setup/salon', access: owner, summary: "The salon's settings and opening hours", response: SalonSettingsSchema }),
+  salon: endpoint({
+    method: 'get',
+    path: '/api/owner/setup/salon',
+    access: owner,
+    summary: "The salon's settings and opening hours",
+    response: SalonSettingsSchema,
+  }),
   saveSalon: endpoint({
     method: 'put',
     path: '/api/owner/setup/salon',
@@ -100,7 +106,13 @@ export const setupApi = {
     response: StaffMemberSchema,
   }),
 
-  units: endpoint({ method: 'get', path: '/api/owner/setup/units', access: owner, summary: 'Chairs and basins with their out-of-service periods', response: UnitListSchema }),
+  units: endpoint({
+    method: 'get',
+    path: '/api/owner/setup/units',
+    access: owner,
+    summary: 'Chairs and basins with their out-of-service periods',
+    response: UnitListSchema,
+  }),
   addUnit: endpoint({
     method: 'post',
     path: '/api/owner/setup/units/:kind',

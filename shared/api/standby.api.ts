@@ -14,5 +14,12 @@ export const standbyApi = {
     response: StandbyEntrySchema,
     status: 201,
   }),
-  remove: endpoint({ method: 'delete', path: '/api/standby/:id', access: DESK, summary: 'Take a client off the standby list', params: IdParamsSchema, status: 204 }),
+  remove: endpoint({
+    method: 'delete',
+    path: '/api/standby/:id',
+    access: DESK,
+    summary: 'Take a client off the standby list',
+    params: IdParamsSchema,
+    status: 204,
+  }),
 };

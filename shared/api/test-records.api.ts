@@ -1,6 +1,12 @@
 import { IdParamsSchema } from '../schemas/common.schemas';
 import {
-  RecordClearanceSchema, RecordSkinTestReadingSchema, RecordSkinTestSchema, SkinTestClearanceSchema, SkinTestListSchema, SkinTestReadingParamsSchema, SkinTestSchema,
+  RecordClearanceSchema,
+  RecordSkinTestReadingSchema,
+  RecordSkinTestSchema,
+  SkinTestClearanceSchema,
+  SkinTestListSchema,
+  SkinTestReadingParamsSchema,
+  SkinTestSchema,
 } from '../schemas/skin-test.schemas';
 import { RecordStrandTestSchema, StrandTestListSchema, StrandTestSchema } from '../schemas/strand-test.schemas';
 import { STAFF, endpoint } from './endpoint';
@@ -10,7 +16,14 @@ import { STAFF, endpoint } from './endpoint';
  * and strand tests. Both kinds are a list newest first and a record that is written once (docs/records.md).
  */
 export const testRecordsApi = {
-  skinTests: endpoint({ method: 'get', path: '/api/clients/:id/skin-tests', access: STAFF, summary: "A client's skin tests, newest first", params: IdParamsSchema, response: SkinTestListSchema }),
+  skinTests: endpoint({
+    method: 'get',
+    path: '/api/clients/:id/skin-tests',
+    access: STAFF,
+    summary: "A client's skin tests, newest first",
+    params: IdParamsSchema,
+    response: SkinTestListSchema,
+  }),
   recordSkinTest: endpoint({
     method: 'post',
     path: '/api/clients/:id/skin-tests',

@@ -1,7 +1,19 @@
 import { describe, expect, it } from 'vitest';
 import {
-  CalculatorError, EU_HAIR_MAX_PERCENT, GRAMS_PER_LITRE_PER_VOLUME, PERCENT_PER_VOLUME, bowlPercent, checkDeveloperStrength, dilute,
-  mixTwoDevelopers, parseRatio, percentToVolume, ratioBowlPercent, splitBowl, strengthWords, volumeToPercent,
+  CalculatorError,
+  EU_HAIR_MAX_PERCENT,
+  GRAMS_PER_LITRE_PER_VOLUME,
+  PERCENT_PER_VOLUME,
+  bowlPercent,
+  checkDeveloperStrength,
+  dilute,
+  mixTwoDevelopers,
+  parseRatio,
+  percentToVolume,
+  ratioBowlPercent,
+  splitBowl,
+  strengthWords,
+  volumeToPercent,
 } from './developer';
 
 const fieldOf = (fn: () => unknown) => {
@@ -86,7 +98,12 @@ describe('the salon maximum', () => {
 describe('mixing (C1·m1 = C2·m2), worked by hand', () => {
   it('1 part 12 % + 1 part cream → 6 %', () => {
     // (12 × 1 + 0 × 1) / (1 + 1) = 12 / 2 = 6. Source: trade-facts §1 mixing check.
-    expect(bowlPercent([{ grams: 50, peroxidePercent: 12 }, { grams: 50, peroxidePercent: 0 }])).toBeCloseTo(6, 10);
+    expect(
+      bowlPercent([
+        { grams: 50, peroxidePercent: 12 },
+        { grams: 50, peroxidePercent: 0 },
+      ]),
+    ).toBeCloseTo(6, 10);
     // Diluting to 6 % in a 60 g bowl: developer = 60 × (6 − 0) / (12 − 0) = 30 g, cream = 60 − 30 = 30 g.
     expect(dilute({ percent: 12, targetPercent: 6, totalGrams: 60 })).toEqual({ developerGrams: 30, diluentGrams: 30 });
   });

@@ -32,7 +32,10 @@ export const EU_HAIR_LIMIT_WORDS =
 
 /** A refused input, naming the field so forms and the API can put the message beside it. */
 export class CalculatorError extends Error {
-  constructor(readonly field: string, message: string) {
+  constructor(
+    readonly field: string,
+    message: string,
+  ) {
     super(message);
   }
 }
@@ -127,7 +130,13 @@ export interface TwoDeveloperMix {
  * Grams of a weaker and a stronger developer that make `totalGrams` at `targetPercent`:
  * lower·(H − T) = higher·(T − L). A weaker strength of 0 is water or non-peroxide cream (dilution).
  */
-export function mixTwoDevelopers(input: { lowerPercent: number; higherPercent: number; targetPercent: number; totalGrams: number; maxPercent?: number }): TwoDeveloperMix {
+export function mixTwoDevelopers(input: {
+  lowerPercent: number;
+  higherPercent: number;
+  targetPercent: number;
+  totalGrams: number;
+  maxPercent?: number;
+}): TwoDeveloperMix {
   const { lowerPercent: L, higherPercent: H, targetPercent: T, totalGrams } = input;
   nonNegative(L, 'lowerPercent');
   nonNegative(H, 'higherPercent');
@@ -140,7 +149,16 @@ export function mixTwoDevelopers(input: { lowerPercent: number; higherPercent: n
 }
 
 /** Diluting with water or non-peroxide cream: mixing with a 0 % part. */
-export function dilute(input: { percent: number; targetPercent: number; totalGrams: number; maxPercent?: number }): { developerGrams: number; diluentGrams: number } {
-  const mix = mixTwoDevelopers({ lowerPercent: 0, higherPercent: input.percent, targetPercent: input.targetPercent, totalGrams: input.totalGrams, maxPercent: input.maxPercent });
+export function dilute(input: { percent: number; targetPercent: number; totalGrams: number; maxPercent?: number }): {
+  developerGrams: number;
+  diluentGrams: number;
+} {
+  const mix = mixTwoDevelopers({
+    lowerPercent: 0,
+    higherPercent: input.percent,
+    targetPercent: input.targetPercent,
+    totalGrams: input.totalGrams,
+    maxPercent: input.maxPercent,
+  });
   return { developerGrams: mix.higherGrams, diluentGrams: mix.lowerGrams };
 }

@@ -31,7 +31,12 @@ describe('describeHoursRule', () => {
 
 describe('ruleProblem (what Set-up checks before storing hours)', () => {
   it('accepts what the hours editor writes, closed dates included', () => {
-    const text = composeWeeklyRule({ weekdays: ['TU', 'WE', 'TH', 'FR', 'SA'], everyOtherWeek: false, startsOn: null, closedDates: ['2027-12-24', '2027-12-25'] });
+    const text = composeWeeklyRule({
+      weekdays: ['TU', 'WE', 'TH', 'FR', 'SA'],
+      everyOtherWeek: false,
+      startsOn: null,
+      closedDates: ['2027-12-24', '2027-12-25'],
+    });
     expect(ruleProblem(text)).toBeNull();
   });
 

@@ -9,7 +9,13 @@ import { formatDate } from '../format/date-time';
 import { zonelessFormat } from '../format/locale';
 
 const dayWords: Record<WeekdayCode, string> = {
-  MO: 'Monday', TU: 'Tuesday', WE: 'Wednesday', TH: 'Thursday', FR: 'Friday', SA: 'Saturday', SU: 'Sunday',
+  MO: 'Monday',
+  TU: 'Tuesday',
+  WE: 'Wednesday',
+  TH: 'Thursday',
+  FR: 'Friday',
+  SA: 'Saturday',
+  SU: 'Sunday',
 };
 
 const dateWords = (date: string) => formatDate(date, zonelessFormat, { width: 'short' });
@@ -45,7 +51,10 @@ export function describeHoursRule(text: string, fromDate = '0000-01-01'): string
 
 /** A rule the weekday editor cannot show: rrule's own English for its RRULE line, when it has one. */
 function otherRuleWords(text: string): string {
-  const line = text.split(/\r?\n/).map((l) => l.trim()).find((l) => /^(RRULE:)?FREQ=/i.test(l));
+  const line = text
+    .split(/\r?\n/)
+    .map((l) => l.trim())
+    .find((l) => /^(RRULE:)?FREQ=/i.test(l));
   if (!line) return 'On set days';
   try {
     const words = rr.RRule.fromString(line.replace(/^RRULE:/i, '')).toText();

@@ -57,22 +57,20 @@ export function planOptions(scenario: Scenario): OptionsAnswer {
   const idx = buildIndex(scenario);
   const req = compileRequest(idx.ctx, scenario, idx.stylistById);
   const fmt = idx.ctx.clock.format;
-  const options = findOptions(idx, req).map(
-    (o): Option => ({
-      stylist: o.stylist,
-      sittings: o.sittings.map((s) => ({
-        chair: s.chair,
-        steps: s.steps.map((step) => {
-          // Plain assignments rather than spreads: this runs for every step of every option.
-          const out: OptionStep = { kind: step.kind, start: fmt(step.start), end: fmt(step.end) };
-          if (step.basin) out.basin = step.basin;
-          if (step.id !== undefined) out.id = step.id;
-          if (step.label !== undefined) out.label = step.label;
-          return out;
-        }),
-      })),
-    }),
-  );
+  const options = findOptions(idx, req).map((o): Option => ({
+    stylist: o.stylist,
+    sittings: o.sittings.map((s) => ({
+      chair: s.chair,
+      steps: s.steps.map((step) => {
+        // Plain assignments rather than spreads: this runs for every step of every option.
+        const out: OptionStep = { kind: step.kind, start: fmt(step.start), end: fmt(step.end) };
+        if (step.basin) out.basin = step.basin;
+        if (step.id !== undefined) out.id = step.id;
+        if (step.label !== undefined) out.label = step.label;
+        return out;
+      }),
+    })),
+  }));
   return { options };
 }
 

@@ -29,7 +29,9 @@ describe('openingDays', () => {
 
   it('counts every other week from its DTSTART (INTERVAL=2)', () => {
     const rule = { rrule: 'DTSTART;VALUE=DATE:20261201\nRRULE:FREQ=WEEKLY;INTERVAL=2;BYDAY=TU', start: '10:00', end: '16:00' };
-    const days = openingDays([rule], 'America/Denver', '2026-11-30', 21).filter((d) => d.hours.length).map((d) => d.date);
+    const days = openingDays([rule], 'America/Denver', '2026-11-30', 21)
+      .filter((d) => d.hours.length)
+      .map((d) => d.date);
     expect(days).toEqual(['2026-12-01', '2026-12-15']);
   });
 });

@@ -119,11 +119,7 @@ export function choosePlan(idx: EngineIndex, st: StylistIndex, passes: ChairPass
     const end = found.ends[found.ends.length - 1];
     const pickEnd = pick ? pick.ends[pick.ends.length - 1] : Infinity;
     const sameScore = pick && !better(found.score, pick.score) && !better(pick.score, found.score);
-    if (
-      !pick ||
-      better(found.score, pick.score) ||
-      (sameScore && (end < pickEnd || (end === pickEnd && fitLength(chair, t) < fitLength(pick.chair, t))))
-    ) {
+    if (!pick || better(found.score, pick.score) || (sameScore && (end < pickEnd || (end === pickEnd && fitLength(chair, t) < fitLength(pick.chair, t))))) {
       pick = { chair, score: found.score, ends: found.ends };
     }
   }

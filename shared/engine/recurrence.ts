@@ -24,10 +24,7 @@ function toLocalMinute(value: string, tzid: string | null, clock: ZoneClock): nu
   const wall = Date.UTC(+y, +mo - 1, +d, +h, +mi, +s) / 60_000;
   if (m[7] === 'Z') return wall + clock.offsetAt(wall);
   if (tzid && tzid !== clock.zone) {
-    const dt = DateTime.fromObject(
-      { year: +y, month: +mo, day: +d, hour: +h, minute: +mi, second: +s },
-      { zone: tzid },
-    );
+    const dt = DateTime.fromObject({ year: +y, month: +mo, day: +d, hour: +h, minute: +mi, second: +s }, { zone: tzid });
     if (!dt.isValid) throw new RecurrenceError(`unknown TZID "${tzid}"`);
     const utc = dt.toMillis() / 60_000;
     return utc + clock.offsetAt(utc);
@@ -66,7 +63,10 @@ function splitLine(line: string): { name: string; tzid: string | null; value: st
 export function buildRuleSet(text: string, horizonFromDay: number, clock: ZoneClock) {
   const set = new rr.RRuleSet();
   const exDays = new Set<number>();
-  const lines = text.split(/\r?\n/).map((l) => l.trim()).filter((l) => l.length > 0);
+  const lines = text
+    .split(/\r?\n/)
+    .map((l) => l.trim())
+    .filter((l) => l.length > 0);
   if (lines.length === 1 && !lines[0].includes(':')) {
     set.rrule(parseRule(lines[0], horizonFromDay * 1440, clock));
     return { set, exDays };

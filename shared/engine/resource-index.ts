@@ -149,8 +149,7 @@ export function buildIndex(s: Scenario): EngineIndex {
       },
     };
   };
-  const closedOf = (periods: Scenario['chairs'][number]['outOfService'], field: string) =>
-    periods.length === 0 ? [] : expandPeriods(ctx, periods, field);
+  const closedOf = (periods: Scenario['chairs'][number]['outOfService'], field: string) => (periods.length === 0 ? [] : expandPeriods(ctx, periods, field));
   return {
     ctx,
     salon,

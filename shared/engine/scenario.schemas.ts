@@ -6,9 +6,7 @@ import { z } from 'zod';
 
 const id = z.string().min(1);
 const localDate = z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'expected a local date YYYY-MM-DD');
-const localDateTime = z
-  .string()
-  .regex(/^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}$/, 'expected a local date-time YYYY-MM-DDTHH:mm');
+const localDateTime = z.string().regex(/^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}$/, 'expected a local date-time YYYY-MM-DDTHH:mm');
 const clockTime = z.string().regex(/^\d{2}:\d{2}$/, 'expected a local time HH:mm');
 const positiveMinutes = z.number().int().positive();
 
@@ -62,9 +60,7 @@ export const RequestStepSchema = z.discriminatedUnion(
 export const StartStretchSchema = z.strictObject({ from: localDateTime, to: localDateTime });
 
 export const SittingSchema = z.strictObject({
-  daysAfterPrevious: z
-    .strictObject({ min: z.number().int().min(1), max: z.number().int().min(1) })
-    .optional(),
+  daysAfterPrevious: z.strictObject({ min: z.number().int().min(1), max: z.number().int().min(1) }).optional(),
   steps: z.array(RequestStepSchema).min(1),
   /** Where the sitting's first step may start (e.g. what a client's skin test allows); absent: anywhere. */
   allowedStarts: z.array(StartStretchSchema).optional(),

@@ -109,6 +109,9 @@ export function sittingStarts(idx: EngineIndex, st: StylistIndex, dayOffset: num
     const sets = backwardPass(steps, grid);
     if (sets[0].length) passes.push({ chair, steps, sets });
   });
-  const starts = mergeLattices(passes.map((p) => p.sets[0]), grid.g);
+  const starts = mergeLattices(
+    passes.map((p) => p.sets[0]),
+    grid.g,
+  );
   return { frame, starts: spec.allowed ? intersectLattices(starts, spec.allowed) : starts, passes };
 }

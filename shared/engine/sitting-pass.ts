@@ -109,7 +109,13 @@ export function backwardPass(steps: ChainStep[], grid: Grid): Lattice[] {
   let next: Lattice | null = null;
   for (let k = steps.length - 1; k >= 0; k--) {
     const { free, lo, hi } = steps[k];
-    next = free.length === 1 ? stepBack(free[0], next, lo, hi, grid) : mergeLattices(free.map((span) => stepBack(span, next, lo, hi, grid)), grid.g);
+    next =
+      free.length === 1
+        ? stepBack(free[0], next, lo, hi, grid)
+        : mergeLattices(
+            free.map((span) => stepBack(span, next, lo, hi, grid)),
+            grid.g,
+          );
     sets[k] = next;
     if (next.length === 0) break;
   }

@@ -36,7 +36,10 @@ export function composeWeeklyRule(rule: WeeklyRule): string {
 
 /** The structured view of a rule, or null when it uses anything the weekday editor cannot show. */
 export function readWeeklyRule(text: string): WeeklyRule | null {
-  const lines = text.split(/\r?\n/).map((l) => l.trim()).filter(Boolean);
+  const lines = text
+    .split(/\r?\n/)
+    .map((l) => l.trim())
+    .filter(Boolean);
   let rrule: string | null = null;
   let startsOn: string | null = null;
   const closedDates: string[] = [];
@@ -45,7 +48,13 @@ export function readWeeklyRule(text: string): WeeklyRule | null {
     if (!line.includes(':') && lines.length === 1) rrule = upper;
     else if (upper.startsWith('RRULE:')) rrule = upper.slice(6);
     else if (/^DTSTART;VALUE=DATE:\d{8}$/.test(upper)) startsOn = dashed(upper.slice(-8));
-    else if (/^EXDATE;VALUE=DATE:\d{8}(,\d{8})*$/.test(upper)) closedDates.push(...upper.slice(upper.indexOf(':') + 1).split(',').map(dashed));
+    else if (/^EXDATE;VALUE=DATE:\d{8}(,\d{8})*$/.test(upper))
+      closedDates.push(
+        ...upper
+          .slice(upper.indexOf(':') + 1)
+          .split(',')
+          .map(dashed),
+      );
     else return null;
   }
   if (!rrule) return null;
@@ -81,5 +90,7 @@ const isoDay = (day: number) => new Date(day * 86_400_000).toISOString().slice(0
 export function nextDates(text: string, zone: string, fromDate: string, count: number): string[] {
   const from = parseLocalDate(fromDate);
   if (from === null) return [];
-  return ruleDays(text, from, from + 366, zoneClock(zone, from, from + 366)).slice(0, count).map(isoDay);
+  return ruleDays(text, from, from + 366, zoneClock(zone, from, from + 366))
+    .slice(0, count)
+    .map(isoDay);
 }

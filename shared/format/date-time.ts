@@ -56,7 +56,9 @@ export function formatDate(value: DateInput, ctx: FormatContext, { width = 'long
 export function formatTime(value: Date | string, ctx: FormatContext, { zoneName = false }: { zoneName?: boolean } = {}): string {
   const at = typeof value === 'string' ? new Date(value) : value;
   if (!valid(at)) return '';
-  return plainSpaces(formatter(ctx.locale, { timeZone: ctx.timeZone, hour: 'numeric', minute: '2-digit', ...(zoneName ? { timeZoneName: 'short' } : {}) }).format(at));
+  return plainSpaces(
+    formatter(ctx.locale, { timeZone: ctx.timeZone, hour: 'numeric', minute: '2-digit', ...(zoneName ? { timeZoneName: 'short' } : {}) }).format(at),
+  );
 }
 
 /** "Tuesday 8 June 2027 at 3:00 PM MDT" (long, for messages) or "Tue 8 Jun 2027, 3:00 PM" (short). */

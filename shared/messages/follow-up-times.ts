@@ -44,10 +44,12 @@ export function followUpTimes(text: string, anchor: Date, zone: string): Date[] 
   rule.all((d, i) => {
     if (d > end || out.length >= MAX_FOLLOW_UPS) return false;
     if (i > 0 || d.getTime() !== floating.getTime()) {
-      out.push(DateTime.fromObject(
-        { year: d.getUTCFullYear(), month: d.getUTCMonth() + 1, day: d.getUTCDate(), hour: d.getUTCHours(), minute: d.getUTCMinutes() },
-        { zone },
-      ).toJSDate());
+      out.push(
+        DateTime.fromObject(
+          { year: d.getUTCFullYear(), month: d.getUTCMonth() + 1, day: d.getUTCDate(), hour: d.getUTCHours(), minute: d.getUTCMinutes() },
+          { zone },
+        ).toJSDate(),
+      );
     }
     return true;
   });

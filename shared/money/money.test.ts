@@ -47,7 +47,13 @@ describe('parseMoney', () => {
 
 describe('round trip', () => {
   it('what the field shows reads back as the same amount', () => {
-    for (const [minor, currency] of [[26000, 'USD'], [5, 'USD'], [2500, 'JPY'], [2500, 'KWD'], [1, 'KWD']] as const) {
+    for (const [minor, currency] of [
+      [26000, 'USD'],
+      [5, 'USD'],
+      [2500, 'JPY'],
+      [2500, 'KWD'],
+      [1, 'KWD'],
+    ] as const) {
       expect(parseMoney(moneyInputText(minor, currency), currency)).toBe(minor);
       expect(parseMoney(String(minorToUnits(minor, currency)), currency)).toBe(minor);
     }

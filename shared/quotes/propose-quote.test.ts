@@ -8,10 +8,26 @@ import { ProposalRefused } from './stage-steps';
 
 const virgin = { natural: true, permanent: false, directDye: false, boxDye: false, henna: false, previousLightening: false };
 const base: ConsultationInput = {
-  currentLevel: 5, targetLevel: 5, history: virgin, length: 'medium', density: 'medium', elasticity: 'good', porosity: 'normal',
-  conditionNotes: '', strandTest: 'none', wantsCut: false, vivid: false, notes: '',
+  currentLevel: 5,
+  targetLevel: 5,
+  history: virgin,
+  length: 'medium',
+  density: 'medium',
+  elasticity: 'good',
+  porosity: 'normal',
+  conditionNotes: '',
+  strandTest: 'none',
+  wantsCut: false,
+  vivid: false,
+  notes: '',
 };
-const pricing: QuotePricing = { correctionCentsPerHour: 9000, cutFinishCents: 7500, productCentsPerGram: {}, deposit: { kind: 'percent', percent: 25 }, currency: 'USD' };
+const pricing: QuotePricing = {
+  correctionCentsPerHour: 9000,
+  cutFinishCents: 7500,
+  productCentsPerGram: {},
+  deposit: { kind: 'percent', percent: 25 },
+  currency: 'USD',
+};
 // The salon's rules, typed here by hand from the trade's rules of thumb (common practice, from memory): lightener
 // on the head about 45–50 min at most, permanent colour 30–45, demi-permanent and toner up to 30, remover up to
 // 60 per application; lift per sitting about 3 levels on virgin hair, 2 on coloured, 1 on compromised hair.
@@ -31,7 +47,15 @@ describe('step plan', () => {
       for (const targetLevel of [1, 5, 10]) {
         for (const length of ['short', 'extra_long'] as const) {
           for (const strandTest of ['none', 'fragile', 'failed'] as const) {
-            const q = propose({ currentLevel, targetLevel, length, density: 'thick', strandTest, vivid: targetLevel === 10, history: { ...virgin, boxDye: true } });
+            const q = propose({
+              currentLevel,
+              targetLevel,
+              length,
+              density: 'thick',
+              strandTest,
+              vivid: targetLevel === 10,
+              history: { ...virgin, boxDye: true },
+            });
             expect(StepPlanSchema.safeParse(q.stepPlan).success).toBe(true);
             expect(processingLimitIssues(q.stepPlan, rules.processingLimits)).toEqual([]);
           }
@@ -55,10 +79,20 @@ describe('step plan', () => {
     const q = propose({ currentLevel: 4, targetLevel: 6, history: coloured, wantsCut: true });
     expect(labels(q)).toEqual([
       [
-        'Check-in and strand check', 'Apply colour remover', 'Remover processes under heat', 'Rinse remover thoroughly',
-        'Apply lightener, section 1 of 2', 'Lightener lifts, section 1 of 2', 'Rinse lightener, section 1 of 2',
-        'Apply lightener, section 2 of 2', 'Lightener lifts, section 2 of 2', 'Rinse lightener, section 2 of 2',
-        'Apply toner', 'Toner develops', 'Rinse toner', 'Cut and finish',
+        'Check-in and strand check',
+        'Apply colour remover',
+        'Remover processes under heat',
+        'Rinse remover thoroughly',
+        'Apply lightener, section 1 of 2',
+        'Lightener lifts, section 1 of 2',
+        'Rinse lightener, section 1 of 2',
+        'Apply lightener, section 2 of 2',
+        'Lightener lifts, section 2 of 2',
+        'Rinse lightener, section 2 of 2',
+        'Apply toner',
+        'Toner develops',
+        'Rinse toner',
+        'Cut and finish',
       ],
     ]);
     const steps = q.stepPlan.sittings[0].steps;
@@ -140,11 +174,19 @@ describe('processing limits', () => {
     // 70 + 20 (least) = 90 > 50; halves: 35 + 20 = 55 > 50; thirds: 23.3 → 25 + 20 = 45 ≤ 50 → 3 sections.
     // Each section may lift 50 − 25 = 25 min; the rinse 15 × 1.35 = 20.25 → 20, a third each → 5.
     const q = propose({ currentLevel: 3, targetLevel: 6, length: 'long', density: 'thick' });
-    const steps = q.stepPlan.sittings[0].steps.filter((s) => s.label.startsWith('Apply lightener') || s.label.startsWith('Lightener') || s.label.startsWith('Rinse lightener'));
+    const steps = q.stepPlan.sittings[0].steps.filter(
+      (s) => s.label.startsWith('Apply lightener') || s.label.startsWith('Lightener') || s.label.startsWith('Rinse lightener'),
+    );
     expect(steps.map((s) => s.label)).toEqual([
-      'Apply lightener, section 1 of 3', 'Lightener lifts, section 1 of 3', 'Rinse lightener, section 1 of 3',
-      'Apply lightener, section 2 of 3', 'Lightener lifts, section 2 of 3', 'Rinse lightener, section 2 of 3',
-      'Apply lightener, section 3 of 3', 'Lightener lifts, section 3 of 3', 'Rinse lightener, section 3 of 3',
+      'Apply lightener, section 1 of 3',
+      'Lightener lifts, section 1 of 3',
+      'Rinse lightener, section 1 of 3',
+      'Apply lightener, section 2 of 3',
+      'Lightener lifts, section 2 of 3',
+      'Rinse lightener, section 2 of 3',
+      'Apply lightener, section 3 of 3',
+      'Lightener lifts, section 3 of 3',
+      'Rinse lightener, section 3 of 3',
     ]);
     expect(steps.slice(0, 3).map(minutesOf)).toEqual([25, [20, 25], 5]);
   });
@@ -153,13 +195,23 @@ describe('processing limits', () => {
     // A salon limit of 25 min for lightener: 40 min applying in 4 sections is 10 + 20 (least) = 30 > 25.
     const strict = { ...rules, processingLimits: { ...rules.processingLimits, lightener: 25 } };
     expect(() => propose({ currentLevel: 3, targetLevel: 7, history: coloured }, strict)).toThrow(ProposalRefused);
-    expect(() => propose({ currentLevel: 3, targetLevel: 7, history: coloured }, strict)).toThrow(/limit of 25 min.*4 sections, applying 10 min and processing at least 20 min keeps it on 30 min/);
+    expect(() => propose({ currentLevel: 3, targetLevel: 7, history: coloured }, strict)).toThrow(
+      /limit of 25 min.*4 sections, applying 10 min and processing at least 20 min keeps it on 30 min/,
+    );
   });
 });
 
 describe('a real correction: box dye over permanent, level 4 to 8 with a vivid shade, long hair', () => {
   it('two sittings a few days apart: remover twice under heat, lightener, toner; then lightener, the vivid shade in sections, the cut', () => {
-    const q = propose({ currentLevel: 4, targetLevel: 8, history: { ...coloured, boxDye: true }, length: 'long', strandTest: 'passed', wantsCut: true, vivid: true });
+    const q = propose({
+      currentLevel: 4,
+      targetLevel: 8,
+      history: { ...coloured, boxDye: true },
+      length: 'long',
+      strandTest: 'passed',
+      wantsCut: true,
+      vivid: true,
+    });
     expect(q.sittings).toBe(2); // 4 levels at 2 a sitting on coloured hair
     const [one, two] = q.stepPlan.sittings;
     const remover = one.steps.filter((s) => s.kind === 'developing' && s.product === 'colour_remover');
@@ -171,7 +223,10 @@ describe('a real correction: box dye over permanent, level 4 to 8 with a vivid s
     ]);
     expect(one.steps.map((s) => s.label)).toContain('Apply toner');
     expect(two.steps.filter((s) => s.product === 'direct_dye').map((s) => s.label)).toEqual([
-      'Apply vivid colour, section 1 of 3', 'Apply vivid colour, section 2 of 3', 'Apply vivid colour, section 3 of 3', 'Vivid colour develops',
+      'Apply vivid colour, section 1 of 3',
+      'Apply vivid colour, section 2 of 3',
+      'Apply vivid colour, section 3 of 3',
+      'Vivid colour develops',
     ]);
     expect(two.steps.at(-1)?.label).toBe('Cut and finish');
     // Sitting 1 at the most: strand check 20 + remover (20 + 10 + 20) × 2 = 100 + lightener (30 + 20 + 10) × 2 = 120
@@ -197,7 +252,8 @@ describe('minutes for length and density', () => {
 
 describe('price and deposit', () => {
   it('rounds the price up to the whole unit of the salon’s currency', () => {
-    const at = (currency: string) => proposeQuote({ ...base, currentLevel: 5, targetLevel: 6 }, { ...pricing, productCentsPerGram: { permanent: 5.3 }, currency }, rules);
+    const at = (currency: string) =>
+      proposeQuote({ ...base, currentLevel: 5, targetLevel: 6 }, { ...pricing, productCentsPerGram: { permanent: 5.3 }, currency }, rules);
     const sum = at('USD').lines.reduce((t, l) => t + l.cents, 0);
     // ISO 4217: USD has 2 decimals (100 cents to the dollar), JPY none (the yen is its own minor unit), KWD 3.
     expect(at('USD').priceCents).toBe(Math.ceil(sum / 100) * 100);

@@ -110,7 +110,10 @@ function warningsFor(c: ConsultationInput, plan: StagePlan, sectioned: Map<Stage
   const levels = c.targetLevel - c.currentLevel;
   const w: QuoteWarning[] = [];
   if (lightens && previouslyColoured(c.history) && c.strandTest === 'none') {
-    w.push({ code: 'strand_test_missing', message: 'Lightening or removal on previously coloured hair with no strand test on record: do a strand test first (common practice).' });
+    w.push({
+      code: 'strand_test_missing',
+      message: 'Lightening or removal on previously coloured hair with no strand test on record: do a strand test first (common practice).',
+    });
   }
   if (plan.lightening && c.strandTest === 'failed') {
     w.push({
@@ -119,22 +122,39 @@ function warningsFor(c: ConsultationInput, plan: StagePlan, sectioned: Map<Stage
     });
   }
   if (lightens && c.strandTest === 'fragile') {
-    w.push({ code: 'fragile', message: `The strand test showed fragile hair: at most ${plural(plan.perSitting!, 'level')} a sitting (one fewer than for ${hairStateNames[hairState(c)]} hair) and a bond treatment after lightening (common practice).` });
+    w.push({
+      code: 'fragile',
+      message: `The strand test showed fragile hair: at most ${plural(plan.perSitting!, 'level')} a sitting (one fewer than for ${hairStateNames[hairState(c)]} hair) and a bond treatment after lightening (common practice).`,
+    });
   }
   if (c.history.henna) {
-    w.push({ code: 'henna', message: 'Henna or plant dye: some contain metallic salts that react with peroxide, and henna lifts unevenly. Strand test before any oxidative product (common practice).' });
+    w.push({
+      code: 'henna',
+      message:
+        'Henna or plant dye: some contain metallic salts that react with peroxide, and henna lifts unevenly. Strand test before any oxidative product (common practice).',
+    });
   }
   if (c.history.boxDye) {
-    w.push({ code: 'box_dye', message: 'Box dye builds up unevenly; removal is planned as two remover cycles and results vary along the length (common practice).' });
+    w.push({
+      code: 'box_dye',
+      message: 'Box dye builds up unevenly; removal is planned as two remover cycles and results vary along the length (common practice).',
+    });
   }
   if (c.history.directDye && lightens) {
     w.push({ code: 'direct_dye', message: 'Colour removers do not take out direct (vivid) dyes; stains may stay after lightening (common practice).' });
   }
   if (lightens && compromised(c)) {
-    w.push({ code: 'compromised', message: 'The condition notes show compromised hair (elasticity or porosity): lightening risks breakage. A strand test is advised; a bond treatment and fewer levels per sitting are planned.' });
+    w.push({
+      code: 'compromised',
+      message:
+        'The condition notes show compromised hair (elasticity or porosity): lightening risks breakage. A strand test is advised; a bond treatment and fewer levels per sitting are planned.',
+    });
   }
   if (lightens && plan.sittings.length > 1) {
-    w.push({ code: 'split', message: `Lifting ${plural(levels, 'level')} is split over ${plan.sittings.length} sittings, ${plural(plan.perSitting!, 'level')} at most each (common practice).` });
+    w.push({
+      code: 'split',
+      message: `Lifting ${plural(levels, 'level')} is split over ${plan.sittings.length} sittings, ${plural(plan.perSitting!, 'level')} at most each (common practice).`,
+    });
   }
   if (lightens && plan.liftLeftOut) {
     const left = c.targetLevel - plan.reached;
@@ -144,7 +164,9 @@ function warningsFor(c: ConsultationInput, plan: StagePlan, sectioned: Map<Stage
     });
   }
   if (sectioned.size > 0) {
-    const which = [...sectioned.values()].map((l) => `${limitedFamilyNames[l.family].toLowerCase()} (at most ${l.minutes} min on the hair${l.heat ? ' with heat' : ''})`);
+    const which = [...sectioned.values()].map(
+      (l) => `${limitedFamilyNames[l.family].toLowerCase()} (at most ${l.minutes} min on the hair${l.heat ? ' with heat' : ''})`,
+    );
     w.push({
       code: 'sections',
       message: `Applied in sections, each rinsed before the next: ${which.join(', ')}. Contact time counts from when the first section gets product, so the whole head at once would stay on longer than the salon allows.`,
@@ -208,7 +230,10 @@ export function proposeQuote(c: ConsultationInput, pricing: QuotePricing, rules:
   const lines = [{ label: `Colour work, ${billedMinutes} min at the hourly rate`, cents: timeCents }];
   if (c.wantsCut) lines.push({ label: 'Cut and finish', cents: pricing.cutFinishCents });
   if (productCostCents > 0) lines.push({ label: 'Product (estimate)', cents: productCostCents });
-  const priceCents = roundUpToUnit(lines.reduce((t, l) => t + l.cents, 0), pricing.currency);
+  const priceCents = roundUpToUnit(
+    lines.reduce((t, l) => t + l.cents, 0),
+    pricing.currency,
+  );
 
   return {
     stepPlan: { sittings },

@@ -39,13 +39,62 @@ type Chemical = {
 // thoroughly; full-head lightener application 30–45 min, checked from about 20 min; toner 10–20 min; permanent
 // colour 30–45 min; filler 10–20 min; direct dyes 20–30 min; cut 30–60 min, blow-dry 30–45 min.
 export const CHEMICAL_STAGES = {
-  removal: { product: 'colour_remover', labels: { apply: 'Apply colour remover', develop: 'Remover processes under heat', rinse: 'Rinse remover thoroughly' }, apply: 15, develop: [20, 40], rinse: 15, heat: true, grams: ['remover', 80] },
-  lightening: { product: 'lightener', labels: { apply: 'Apply lightener', develop: 'Lightener lifts', rinse: 'Rinse lightener' }, apply: 40, develop: [20, 50], rinse: 15, heat: false, grams: ['lightener', 90] },
+  removal: {
+    product: 'colour_remover',
+    labels: { apply: 'Apply colour remover', develop: 'Remover processes under heat', rinse: 'Rinse remover thoroughly' },
+    apply: 15,
+    develop: [20, 40],
+    rinse: 15,
+    heat: true,
+    grams: ['remover', 80],
+  },
+  lightening: {
+    product: 'lightener',
+    labels: { apply: 'Apply lightener', develop: 'Lightener lifts', rinse: 'Rinse lightener' },
+    apply: 40,
+    develop: [20, 50],
+    rinse: 15,
+    heat: false,
+    grams: ['lightener', 90],
+  },
   // Toners and fillers in a correction are usually demi-permanent, mixed with developer: oxidative (CP).
-  toning: { product: 'toner_oxidative', labels: { apply: 'Apply toner', develop: 'Toner develops', rinse: 'Rinse toner' }, apply: 10, develop: [10, 20], rinse: 10, heat: false, grams: ['toner', 60] },
-  fill: { product: 'oxidative_colour', labels: { apply: 'Apply filler (pre-pigment)', develop: 'Filler develops', rinse: 'Rinse filler' }, apply: 20, develop: [10, 20], rinse: 10, heat: false, grams: ['demi_permanent', 60] },
-  colour: { product: 'oxidative_colour', labels: { apply: 'Apply colour', develop: 'Colour develops', rinse: 'Rinse and condition' }, apply: 15, develop: [30, 45], rinse: 15, heat: false, grams: ['permanent', 60] },
-  vivid: { product: 'direct_dye', labels: { apply: 'Apply vivid colour', develop: 'Vivid colour develops', rinse: 'Cool rinse' }, apply: 40, develop: [20, 30], rinse: 15, heat: false, placed: true, grams: ['direct_dye', 80] },
+  toning: {
+    product: 'toner_oxidative',
+    labels: { apply: 'Apply toner', develop: 'Toner develops', rinse: 'Rinse toner' },
+    apply: 10,
+    develop: [10, 20],
+    rinse: 10,
+    heat: false,
+    grams: ['toner', 60],
+  },
+  fill: {
+    product: 'oxidative_colour',
+    labels: { apply: 'Apply filler (pre-pigment)', develop: 'Filler develops', rinse: 'Rinse filler' },
+    apply: 20,
+    develop: [10, 20],
+    rinse: 10,
+    heat: false,
+    grams: ['demi_permanent', 60],
+  },
+  colour: {
+    product: 'oxidative_colour',
+    labels: { apply: 'Apply colour', develop: 'Colour develops', rinse: 'Rinse and condition' },
+    apply: 15,
+    develop: [30, 45],
+    rinse: 15,
+    heat: false,
+    grams: ['permanent', 60],
+  },
+  vivid: {
+    product: 'direct_dye',
+    labels: { apply: 'Apply vivid colour', develop: 'Vivid colour develops', rinse: 'Cool rinse' },
+    apply: 40,
+    develop: [20, 30],
+    rinse: 15,
+    heat: false,
+    placed: true,
+    grams: ['direct_dye', 80],
+  },
 } satisfies Partial<Record<Stage, Chemical>>;
 
 type FixedStep = Extract<PlannedStep, { kind: 'hands_on' | 'basin' }>;
@@ -115,7 +164,8 @@ export function stageSteps(stage: Stage, c: ConsultationInput, limits: Processin
     if (def.placed) {
       // Placed section by section, then processed and rinsed together: no limit applies to direct dye.
       const sections = Math.max(2, Math.ceil(apply / VIVID_SECTION_MINUTES));
-      for (let k = 1; k <= sections; k++) steps.push({ kind: 'hands_on', label: numbered(round(def.labels.apply), 'section', k, sections), product, minutes: upTo5(apply / sections) });
+      for (let k = 1; k <= sections; k++)
+        steps.push({ kind: 'hands_on', label: numbered(round(def.labels.apply), 'section', k, sections), product, minutes: upTo5(apply / sections) });
       steps.push({ kind: 'developing', label: round(def.labels.develop), product, minMinutes: least, maxMinutes: most, ...heat });
       steps.push({ kind: 'basin', label: round(def.labels.rinse), product: 'none', minutes: rinse });
       continue;

@@ -2,7 +2,16 @@ import { describe, expect, it } from 'vitest';
 import type { StepPlan } from '../schemas/step-plan.schemas';
 import { gatedSteps, strandOutcome, strandOverrideProblem } from './strand-gate';
 
-const lightening: StepPlan = { sittings: [{ steps: [{ kind: 'hands_on', label: 'Apply lightener', product: 'lightener', minutes: 20 }, { kind: 'basin', label: 'Rinse', product: 'none', minutes: 10 }] }] };
+const lightening: StepPlan = {
+  sittings: [
+    {
+      steps: [
+        { kind: 'hands_on', label: 'Apply lightener', product: 'lightener', minutes: 20 },
+        { kind: 'basin', label: 'Rinse', product: 'none', minutes: 10 },
+      ],
+    },
+  ],
+};
 const care: StepPlan = { sittings: [{ steps: [{ kind: 'basin', label: 'Bond treatment', product: 'bond_care', minutes: 15 }] }] };
 
 describe('strand-test gate', () => {

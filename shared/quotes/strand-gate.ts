@@ -25,7 +25,9 @@ export function strandOutcome(answer: StrandOutcome, latestRecorded: Exclude<Str
 
 /** The plan's lightener and remover steps, as "sitting n, step k “label”". */
 export function gatedSteps(plan: StepPlan): string[] {
-  return plan.sittings.flatMap((s, i) => s.steps.flatMap((st, k) => (GATED_FAMILIES.includes(st.product) ? [`sitting ${i + 1}, step ${k + 1} “${st.label}”`] : [])));
+  return plan.sittings.flatMap((s, i) =>
+    s.steps.flatMap((st, k) => (GATED_FAMILIES.includes(st.product) ? [`sitting ${i + 1}, step ${k + 1} “${st.label}”`] : [])),
+  );
 }
 
 /** Why a quote may not be saved as it is, or null: lightener or remover after a failed strand test needs a written reason. */

@@ -8,7 +8,14 @@ import { limitFor, processingLimitIssues, withinProcessingLimits, type Processin
 const limits: ProcessingLimits = { lightener: 50, oxidative_colour: 45, toner_oxidative: 30, colour_remover: 60 };
 const h = (label: string, minutes: number, product: PlannedStep['product'] = 'none'): PlannedStep => ({ kind: 'hands_on', label, product, minutes });
 const b = (label: string, minutes: number): PlannedStep => ({ kind: 'basin', label, product: 'none', minutes });
-const d = (label: string, min: number, max: number, product: PlannedStep['product'], heat?: boolean): PlannedStep => ({ kind: 'developing', label, product, minMinutes: min, maxMinutes: max, ...(heat !== undefined && { heat }) });
+const d = (label: string, min: number, max: number, product: PlannedStep['product'], heat?: boolean): PlannedStep => ({
+  kind: 'developing',
+  label,
+  product,
+  minMinutes: min,
+  maxMinutes: max,
+  ...(heat !== undefined && { heat }),
+});
 const plan = (...steps: PlannedStep[]): StepPlan => ({ sittings: [{ steps }] });
 
 describe('contact time', () => {
@@ -17,7 +24,9 @@ describe('contact time', () => {
     expect(issues).toHaveLength(1);
     expect(issues[0].path).toEqual(['stepPlan', 'sittings', 0, 'steps', 1]);
     expect(issues[0].family).toBe('lightener');
-    expect(issues[0].message).toMatch(/Sitting 1, step 2 “Lightener lifts”: lightener may be on the hair at most 50 min; this plan keeps it on up to 95 min, counted from step 1 “Apply lightener”/);
+    expect(issues[0].message).toMatch(
+      /Sitting 1, step 2 “Lightener lifts”: lightener may be on the hair at most 50 min; this plan keeps it on up to 95 min, counted from step 1 “Apply lightener”/,
+    );
   });
 
   it('accepts 20 + 30 = 50 min exactly, and a developing step alone over the limit is refused', () => {
@@ -52,7 +61,14 @@ describe('contact time', () => {
 
   it('puts each issue at its step in a form schema', () => {
     const schema = z.object({ stepPlan: StepPlanSchema }).superRefine(withinProcessingLimits(limits));
-    const r = schema.safeParse({ stepPlan: { sittings: [{ steps: [h('Warm-up', 10)] }, { daysAfterPrevious: { min: 3, max: 14 }, steps: [h('Apply toner', 20, 'toner_oxidative'), d('Toner develops', 10, 20, 'toner_oxidative')] }] } });
+    const r = schema.safeParse({
+      stepPlan: {
+        sittings: [
+          { steps: [h('Warm-up', 10)] },
+          { daysAfterPrevious: { min: 3, max: 14 }, steps: [h('Apply toner', 20, 'toner_oxidative'), d('Toner develops', 10, 20, 'toner_oxidative')] },
+        ],
+      },
+    });
     expect(r.success).toBe(false);
     // 20 + 20 = 40 > 30 for toner.
     expect(r.error?.issues.map((i) => i.path.join('.'))).toEqual(['stepPlan.sittings.1.steps.1']);

@@ -45,7 +45,10 @@ export function testedFamilies(widening: readonly ProductFamily[]): Set<ProductF
 }
 
 /** The first step that needs a skin test, as "sitting n, step k: label (family)", or null when none does. */
-export function stepNeedingSkinTest(plan: StepPlan, widening: readonly ProductFamily[]): { sitting: number; step: number; label: string; product: ProductFamily } | null {
+export function stepNeedingSkinTest(
+  plan: StepPlan,
+  widening: readonly ProductFamily[],
+): { sitting: number; step: number; label: string; product: ProductFamily } | null {
   const tested = testedFamilies(widening);
   for (const [i, sitting] of plan.sittings.entries()) {
     for (const [k, step] of sitting.steps.entries()) {

@@ -9,7 +9,11 @@ import { checkStarts, skinTestVerdict, type SkinTestRecord } from './skin-test-r
 const policy = { leadHours: 48, validityDays: 182 };
 const now = new Date('2027-03-01T12:00:00Z');
 const at = (iso: string) => new Date(iso);
-const rec = (applied: string, result: SkinTestRecord['result'], recorded = applied): SkinTestRecord => ({ appliedAt: at(applied), recordedAt: at(recorded), result });
+const rec = (applied: string, result: SkinTestRecord['result'], recorded = applied): SkinTestRecord => ({
+  appliedAt: at(applied),
+  recordedAt: at(recorded),
+  result,
+});
 const verdict = (records: SkinTestRecord[], clearances: { at: Date }[] = []) => skinTestVerdict(true, records, clearances, policy, now);
 const startAt = (records: SkinTestRecord[], start: string, clearances: { at: Date }[] = []) => checkStarts(verdict(records, clearances), [at(start)]).status;
 
@@ -110,7 +114,9 @@ describe('skin-test rule properties', () => {
         const records = raw.map(toRecord);
         const status = checkStarts(skinTestVerdict(true, records, [], policy, now), [s]).status;
         if (status !== 'passed') return;
-        const read = records.filter((r) => r.result !== 'pending').sort((a, b) => a.appliedAt.getTime() - b.appliedAt.getTime() || a.recordedAt.getTime() - b.recordedAt.getTime());
+        const read = records
+          .filter((r) => r.result !== 'pending')
+          .sort((a, b) => a.appliedAt.getTime() - b.appliedAt.getTime() || a.recordedAt.getTime() - b.recordedAt.getTime());
         const newest = read.at(-1)!;
         expect(newest.result).toBe('negative');
         expect(s.getTime() - newest.appliedAt.getTime()).toBeGreaterThanOrEqual(48 * HOUR);

@@ -65,8 +65,7 @@ export interface SkinTestVerdict {
 const HOUR = 3_600_000;
 const DAY = 24 * HOUR;
 const day = (d: Date) => d.toISOString().slice(0, 10);
-const byTime = (a: SkinTestRecord, b: SkinTestRecord) =>
-  a.appliedAt.getTime() - b.appliedAt.getTime() || a.recordedAt.getTime() - b.recordedAt.getTime();
+const byTime = (a: SkinTestRecord, b: SkinTestRecord) => a.appliedAt.getTime() - b.appliedAt.getTime() || a.recordedAt.getTime() - b.recordedAt.getTime();
 
 /** The record as the rule reads it at `now`, with the salon's policy. */
 export function skinTestVerdict(
@@ -85,7 +84,9 @@ export function skinTestVerdict(
 
   const positive = read.filter((r) => r.result === 'positive').at(-1);
   if (positive && !clearances.some((c) => c.at.getTime() >= positive.recordedAt.getTime())) {
-    return blocked(`The skin test of ${day(positive.appliedAt)} showed a reaction. No oxidative colour until an owner records a clearance (for example on written medical advice).`);
+    return blocked(
+      `The skin test of ${day(positive.appliedAt)} showed a reaction. No oxidative colour until an owner records a clearance (for example on written medical advice).`,
+    );
   }
   const latestRead = read.at(-1);
   const windows: SkinTestWindow[] = [];
@@ -119,7 +120,8 @@ function noWindowReason(latestRead: SkinTestRecord | undefined, staleUnread: Ski
   }
   if (!latestRead) return 'No skin test is on record. Book a skin test first: colour can follow once it has been read negative.';
   if (latestRead.result === 'unclear') return `The skin test of ${day(latestRead.appliedAt)} was unclear. A new test is needed before oxidative colour.`;
-  if (latestRead.result === 'positive') return `The reaction of ${day(latestRead.appliedAt)} was cleared, but a new skin test must read negative before oxidative colour.`;
+  if (latestRead.result === 'positive')
+    return `The reaction of ${day(latestRead.appliedAt)} was cleared, but a new skin test must read negative before oxidative colour.`;
   return `The last skin test (${day(latestRead.appliedAt)}) is older than ${policy.validityDays} days. Book a new skin test first.`;
 }
 

@@ -4,10 +4,7 @@ import { EmailSchema, PhoneSchema } from './contact.schemas';
 
 export const PASSWORD_MIN_LENGTH = 10;
 
-const PasswordSchema = z
-  .string()
-  .min(PASSWORD_MIN_LENGTH, `Use at least ${PASSWORD_MIN_LENGTH} characters`)
-  .max(200, 'Use at most 200 characters');
+const PasswordSchema = z.string().min(PASSWORD_MIN_LENGTH, `Use at least ${PASSWORD_MIN_LENGTH} characters`).max(200, 'Use at most 200 characters');
 
 export const SignInBodySchema = z.object({ email: EmailSchema, password: z.string().min(1).max(200) }).strict();
 export type SignInBody = z.infer<typeof SignInBodySchema>;
@@ -25,9 +22,7 @@ export const SignUpBodySchema = z
 export type SignUpBody = z.infer<typeof SignUpBodySchema>;
 
 export const PasswordResetRequestSchema = z.object({ email: EmailSchema }).strict();
-export const PasswordResetConfirmSchema = z
-  .object({ token: z.string().min(20).max(200), password: PasswordSchema })
-  .strict();
+export const PasswordResetConfirmSchema = z.object({ token: z.string().min(20).max(200), password: PasswordSchema }).strict();
 
 export const SessionUserSchema = z.object({
   id: IdSchema,

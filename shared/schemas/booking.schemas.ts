@@ -34,9 +34,7 @@ export const PlannedStepViewSchema = z.object({
 export const BookingOptionSchema = z.object({
   stylistId: IdSchema,
   stylistName: z.string(),
-  sittings: z.array(
-    z.object({ chairId: IdSchema, chairName: z.string(), start: InstantSchema, end: InstantSchema, steps: z.array(PlannedStepViewSchema) }),
-  ),
+  sittings: z.array(z.object({ chairId: IdSchema, chairName: z.string(), start: InstantSchema, end: InstantSchema, steps: z.array(PlannedStepViewSchema) })),
   /** Minutes the client holds a chair, all sittings together. */
   chairMinutes: z.number().int(),
   /** Minutes of developing time in which the stylist's hands are free for someone else. */
@@ -98,7 +96,10 @@ export const MoveSittingSchema = z
 /** Which sitting to find free times for (1 by default), with which stylist, from which local date. */
 export const DeskMoveTimesQuerySchema = z
   .object({
-    sitting: z.string().regex(/^[1-9]$/, 'A sitting number from 1 to 9').default('1'),
+    sitting: z
+      .string()
+      .regex(/^[1-9]$/, 'A sitting number from 1 to 9')
+      .default('1'),
     stylistId: IdSchema.optional(),
     from: LocalDateSchema.optional(),
   })

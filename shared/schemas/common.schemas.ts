@@ -22,7 +22,10 @@ export const UNSTORABLE_MESSAGE = 'Contains a character that cannot be stored (a
 
 /** Free text a person types, at most `max` characters, refused (naming the field) when it cannot be stored as typed. */
 export const typedText = (max: number) =>
-  z.string().max(max, `At most ${max} characters`).refine((s) => !UNSTORABLE.test(s), UNSTORABLE_MESSAGE);
+  z
+    .string()
+    .max(max, `At most ${max} characters`)
+    .refine((s) => !UNSTORABLE.test(s), UNSTORABLE_MESSAGE);
 
 /** A local calendar date, `YYYY-MM-DD`. */
 export const LocalDateSchema = z

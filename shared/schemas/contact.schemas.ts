@@ -62,7 +62,8 @@ export const MessagePreferencesSchema = z.object({
 
 /** The chosen channel must be one the client can be reached on. */
 export function channelReachable(v: { messageChannel: MessageChannelChoice; phone: string | null; email: string | null }, ctx: z.RefinementCtx) {
-  if (v.messageChannel !== 'email' && !v.phone) ctx.addIssue({ code: 'custom', path: ['phone'], message: 'Add a mobile number to get text messages, or choose e-mail' });
+  if (v.messageChannel !== 'email' && !v.phone)
+    ctx.addIssue({ code: 'custom', path: ['phone'], message: 'Add a mobile number to get text messages, or choose e-mail' });
   if (v.messageChannel !== 'sms' && !v.email) ctx.addIssue({ code: 'custom', path: ['email'], message: 'Add an e-mail address to get e-mails, or choose SMS' });
 }
 
@@ -78,9 +79,7 @@ export const UpdateClientSchema = z
   .superRefine(channelReachable);
 
 /** A client edits their own phone and preferences (their e-mail is their sign-in, changed elsewhere). */
-export const MyPreferencesBodySchema = z
-  .object({ phone: OptionalPhoneSchema, ...MessagePreferencesSchema.shape })
-  .strict();
+export const MyPreferencesBodySchema = z.object({ phone: OptionalPhoneSchema, ...MessagePreferencesSchema.shape }).strict();
 
 export const MyPreferencesSchema = z.object({
   email: z.string().nullable(),

@@ -29,9 +29,7 @@ export const HairHistorySchema = z
     boxDye: answerWith(200),
     /** Henna and other plant dyes can react with lightener, so which one and when. */
     plantDyes: answerWith(300),
-    structural: z
-      .object({ relaxer: z.boolean(), perm: z.boolean(), keratin: z.boolean(), details: text(300) })
-      .strict(),
+    structural: z.object({ relaxer: z.boolean(), perm: z.boolean(), keratin: z.boolean(), details: text(300) }).strict(),
     vividDyes: answerWith(300),
     previousReaction: answerWith(1000),
     scalpConditions: text(500),

@@ -13,4 +13,3 @@ export const CapturedMailSchema = z.object({
 });
 export type CapturedMail = z.infer<typeof CapturedMailSchema>;
 export const MailboxSchema = z.object({ messages: z.array(CapturedMailSchema) });
-

@@ -60,9 +60,7 @@ export const WriteMixLogSchema = z
 export type WriteMixLog = z.infer<typeof WriteMixLogSchema>;
 
 /** "Repeat last time": the bowls of sitting `sitting` of booking `fromBookingId` go into `intoSitting` of this booking. */
-export const RepeatMixLogSchema = z
-  .object({ fromBookingId: IdSchema, sitting: sittingNo, intoSitting: sittingNo })
-  .strict();
+export const RepeatMixLogSchema = z.object({ fromBookingId: IdSchema, sitting: sittingNo, intoSitting: sittingNo }).strict();
 
 /**
  * Bowls may be written for any sitting of a booking that is not cancelled, before it starts too: the formula is

@@ -40,9 +40,7 @@ export type PublicSalon = z.infer<typeof PublicSalonSchema>;
 
 export const SlugParamsSchema = z.object({ slug: z.string().regex(/^[a-z0-9-]{1,80}$/) }).strict();
 
-export const AvailabilityQuerySchema = z
-  .object({ serviceId: IdSchema, stylistId: IdSchema.optional(), from: LocalDateSchema.optional() })
-  .strict();
+export const AvailabilityQuerySchema = z.object({ serviceId: IdSchema, stylistId: IdSchema.optional(), from: LocalDateSchema.optional() }).strict();
 
 /** Free start times for an online-bookable service over the next weeks (salon time, grouped by the client). */
 export const AvailabilitySchema = z.object({
@@ -51,9 +49,7 @@ export const AvailabilitySchema = z.object({
 });
 export type Availability = z.infer<typeof AvailabilitySchema>;
 
-export const CreateHoldSchema = z
-  .object({ salonSlug: z.string().max(80), serviceId: IdSchema, stylistId: IdSchema, start: InstantInputSchema })
-  .strict();
+export const CreateHoldSchema = z.object({ salonSlug: z.string().max(80), serviceId: IdSchema, stylistId: IdSchema, start: InstantInputSchema }).strict();
 
 /** A hold: the time kept for a few minutes while the client signs in and pays. Keep `holdSecret` to claim it. */
 export const HoldSchema = z.object({
@@ -98,7 +94,10 @@ export const AcceptCautionsSchema = z.object({ version: z.string().min(1).max(40
 
 export const CardSchema = z
   .object({
-    number: z.string().transform((s) => s.replace(/[\s-]/g, '')).pipe(z.string().regex(/^\d{12,19}$/, 'Enter the card number')),
+    number: z
+      .string()
+      .transform((s) => s.replace(/[\s-]/g, ''))
+      .pipe(z.string().regex(/^\d{12,19}$/, 'Enter the card number')),
     expMonth: z.number().int().min(1).max(12),
     expYear: z.number().int().min(2024).max(2100),
     cvc: z.string().regex(/^\d{3,4}$/, 'Enter the 3 or 4 digits on the back'),
@@ -130,7 +129,12 @@ export const ConfirmationSendsSchema = z.object({
   timeZone: z.string(),
   quietHours: z.object({ from: z.string(), to: z.string() }).nullable(),
   sends: z.array(
-    z.object({ channel: z.enum(['email', 'sms']), status: z.enum(['sent', 'sending', 'waiting', 'failed']), sendAt: InstantSchema, sentAt: InstantSchema.nullable() }),
+    z.object({
+      channel: z.enum(['email', 'sms']),
+      status: z.enum(['sent', 'sending', 'waiting', 'failed']),
+      sendAt: InstantSchema,
+      sentAt: InstantSchema.nullable(),
+    }),
   ),
 });
 export type ConfirmationSends = z.infer<typeof ConfirmationSendsSchema>;

@@ -14,9 +14,7 @@ export const PHOTO_LIMITS = {
 } as const;
 
 /** The text fields sent beside the files of a multipart upload. */
-export const PhotoUploadFieldsSchema = z
-  .object({ kind: PhotoKindSchema, bookingId: IdSchema.optional() })
-  .strict();
+export const PhotoUploadFieldsSchema = z.object({ kind: PhotoKindSchema, bookingId: IdSchema.optional() }).strict();
 export type PhotoUploadFields = z.infer<typeof PhotoUploadFieldsSchema>;
 
 export const PhotoSchema = z.object({

@@ -7,7 +7,10 @@ const limit = (family: LimitedFamily) =>
     .number({ error: 'Enter minutes' })
     .int('Enter whole minutes')
     .min(5, 'At least 5 minutes')
-    .max(HARD_MAX_PROCESSING_MINUTES[family], `At most ${HARD_MAX_PROCESSING_MINUTES[family]} minutes for ${limitedFamilyNames[family].toLowerCase()} (the hard maximum)`);
+    .max(
+      HARD_MAX_PROCESSING_MINUTES[family],
+      `At most ${HARD_MAX_PROCESSING_MINUTES[family]} minutes for ${limitedFamilyNames[family].toLowerCase()} (the hard maximum)`,
+    );
 
 /** Minutes each limited family may stay on the hair in this salon, without heat (heat halves them). */
 export const ProcessingLimitsSchema = z

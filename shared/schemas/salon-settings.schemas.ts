@@ -6,7 +6,11 @@ import { WIDENING_FAMILIES } from '../rules/skin-test-need';
 import { LiftPerSittingSchema, ProcessingLimitsSchema } from './planning-rules.schemas';
 
 const whole = (min: number, max: number, what: string) =>
-  z.number({ error: `Enter ${what}` }).int(`Enter whole ${what}`).min(min, `At least ${min}`).max(max, `At most ${max}`);
+  z
+    .number({ error: `Enter ${what}` })
+    .int(`Enter whole ${what}`)
+    .min(min, `At least ${min}`)
+    .max(max, `At most ${max}`);
 
 /**
  * Everything about how the salon works that the owner sets: the same schema checks the set-up form
@@ -19,16 +23,27 @@ export const SalonSettingsSchema = z
     phone: z.string().trim().max(40),
     // IANA time-zone database names, e.g. America/Denver (checked against the zone data luxon reads).
     timeZone: z.string().trim().refine(isKnownZone, 'Use a time-zone name like America/Denver or Europe/Berlin'),
-    currency: z.string().trim().regex(/^[A-Z]{3}$/, 'Use a three-letter ISO 4217 code like USD or EUR'),
+    currency: z
+      .string()
+      .trim()
+      .regex(/^[A-Z]{3}$/, 'Use a three-letter ISO 4217 code like USD or EUR'),
     // Left out: unchanged (older callers of this API do not send it).
     country: PhoneCountrySchema.optional(),
     hours: HoursListSchema,
     // The allergy alert test is read 48 hours after it is applied (Cosmetics Europe Recommendation No 27, 2023):
     // a salon may ask for more, never less.
-    skinTestLeadHours: z.number({ error: 'Enter hours' }).int('Enter whole hours').min(48, 'At least 48 hours: the test is read 48 hours after it is applied').max(720, 'At most 720'),
+    skinTestLeadHours: z
+      .number({ error: 'Enter hours' })
+      .int('Enter whole hours')
+      .min(48, 'At least 48 hours: the test is read 48 hours after it is applied')
+      .max(720, 'At most 720'),
     skinTestValidityDays: whole(1, 3650, 'days'),
     // Families beyond oxidative colour and oxidative toner that also need a skin test here. Left out: unchanged.
-    skinTestFamilies: z.array(z.enum(WIDENING_FAMILIES)).max(WIDENING_FAMILIES.length).refine((l) => new Set(l).size === l.length, 'Each family once').optional(),
+    skinTestFamilies: z
+      .array(z.enum(WIDENING_FAMILIES))
+      .max(WIDENING_FAMILIES.length)
+      .refine((l) => new Set(l).size === l.length, 'Each family once')
+      .optional(),
     holdMinutes: whole(1, 120, 'minutes'),
     cancellationWindowHours: whole(0, 720, 'hours'),
     cancellationKeeps: z.enum(['deposit', 'nothing']),

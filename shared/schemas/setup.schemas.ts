@@ -42,9 +42,7 @@ export const StaffDetailsSchema = z
   });
 export type StaffDetails = z.infer<typeof StaffDetailsSchema>;
 
-export const StaffInviteSchema = z
-  .object({ email: z.email('Enter an e-mail address').trim().toLowerCase().max(200), details: StaffDetailsSchema })
-  .strict();
+export const StaffInviteSchema = z.object({ email: z.email('Enter an e-mail address').trim().toLowerCase().max(200), details: StaffDetailsSchema }).strict();
 export type StaffInvite = z.infer<typeof StaffInviteSchema>;
 
 const lastNotBeforeFirst = { message: 'The last day must not be before the first', path: ['to'] };
@@ -124,7 +122,8 @@ export const ServiceInputSchema = z
   .strict()
   .superRefine((s, ctx) => {
     if (s.depositKind === 'percent' && s.depositPercent === null) ctx.addIssue({ code: 'custom', path: ['depositPercent'], message: 'Enter a percentage' });
-    if (s.depositKind === 'fixed' && s.depositCents > s.priceCents) ctx.addIssue({ code: 'custom', path: ['depositCents'], message: 'The deposit cannot be more than the price' });
+    if (s.depositKind === 'fixed' && s.depositCents > s.priceCents)
+      ctx.addIssue({ code: 'custom', path: ['depositCents'], message: 'The deposit cannot be more than the price' });
   });
 export type ServiceInput = z.infer<typeof ServiceInputSchema>;
 export type ServiceFormInput = z.input<typeof ServiceInputSchema>;

@@ -4,7 +4,16 @@ import { z } from 'zod';
  * What a step puts on the hair. Whether a booking needs a skin test follows from these, whatever service it is
  * booked under: oxidative colour (permanent or demi-permanent mixed with developer) and oxidative toner always do.
  */
-export const PRODUCT_FAMILIES = ['oxidative_colour', 'toner_oxidative', 'lightener', 'colour_remover', 'direct_dye', 'toner_direct', 'bond_care', 'none'] as const;
+export const PRODUCT_FAMILIES = [
+  'oxidative_colour',
+  'toner_oxidative',
+  'lightener',
+  'colour_remover',
+  'direct_dye',
+  'toner_direct',
+  'bond_care',
+  'none',
+] as const;
 export const ProductFamilySchema = z.enum(PRODUCT_FAMILIES, { error: 'Say what this step puts on the hair (or nothing)' });
 export type ProductFamily = z.infer<typeof ProductFamilySchema>;
 
@@ -34,7 +43,10 @@ export type PlannedStep = z.infer<typeof PlannedStepSchema>;
 export const PlannedSittingSchema = z
   .object({
     /** Calendar days after the previous sitting's date (absent on the first sitting). */
-    daysAfterPrevious: z.object({ min: z.number().int().min(1).max(180), max: z.number().int().min(1).max(180) }).strict().optional(),
+    daysAfterPrevious: z
+      .object({ min: z.number().int().min(1).max(180), max: z.number().int().min(1).max(180) })
+      .strict()
+      .optional(),
     steps: z.array(PlannedStepSchema).min(1).max(30),
   })
   .strict();

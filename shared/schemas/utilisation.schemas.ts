@@ -33,7 +33,8 @@ export const UtilisationQuerySchema = z
     if (!q.from || !q.to || !realDate(q.from) || !realDate(q.to)) return;
     if (q.to < q.from) ctx.addIssue({ code: 'custom', path: ['to'], message: 'The last day must not be before the first day' });
     const limit = DateTime.fromISO(q.from, { zone: 'UTC' }).plus({ years: MAX_PERIOD_YEARS }).toISODate()!;
-    if (q.to >= limit) ctx.addIssue({ code: 'custom', path: ['to'], message: `A period may be at most ${MAX_PERIOD_YEARS} years long (last day before ${limit})` });
+    if (q.to >= limit)
+      ctx.addIssue({ code: 'custom', path: ['to'], message: `A period may be at most ${MAX_PERIOD_YEARS} years long (last day before ${limit})` });
   });
 export type UtilisationQuery = z.input<typeof UtilisationQuerySchema>;
 

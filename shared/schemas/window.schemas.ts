@@ -39,7 +39,10 @@ export const FillWindowSchema = z
     latestStart: InstantInputSchema.optional(),
     clientId: IdSchema.optional(),
     /** A walk-in with no client record yet. */
-    walkIn: z.object({ name: z.string().trim().min(1).max(120), phone: z.string().max(30).optional() }).strict().optional(),
+    walkIn: z
+      .object({ name: z.string().trim().min(1).max(120), phone: z.string().max(30).optional() })
+      .strict()
+      .optional(),
     standbyEntryId: IdSchema.optional(),
     idempotencyKey: z.string().min(8).max(100),
   })
@@ -68,4 +71,3 @@ export const OfferViewSchema = z.object({
   clientName: z.string(),
 });
 export const OfferTokenParamsSchema = z.object({ token: z.string().min(20).max(100) }).strict();
-

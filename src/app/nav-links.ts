@@ -20,5 +20,8 @@ export const navLinks: Record<Role, { to: string; label: string }[]> = {
   ],
   front_desk: [...deskLinks, { to: paths.deskUtilisation, label: 'Chair use' }],
   stylist: [{ to: paths.stylist(), label: 'My day' }],
-  client: [{ to: paths.me, label: 'My bookings' }, { to: paths.myHair, label: 'Hair history and photos' }],
+  client: [
+    { to: paths.me, label: 'My bookings' },
+    { to: paths.myHair, label: 'Hair history and photos' },
+  ],
 };

@@ -14,9 +14,7 @@ export function NotForYourRole({ allowed }: Props) {
     <div className="mx-auto max-w-xl py-12">
       <h1 className="text-3xl font-extrabold">Not for your role</h1>
       <p className="mt-3">
-        {allowed?.length
-          ? `This page is for the ${allowed.map((role) => roleLabels[role]).join(' and ')}.`
-          : 'This page belongs to another role.'}{' '}
+        {allowed?.length ? `This page is for the ${allowed.map((role) => roleLabels[role]).join(' and ')}.` : 'This page belongs to another role.'}{' '}
         {user && `You are signed in as ${user.name} (${roleLabels[user.role]}).`}
       </p>
       {user && (

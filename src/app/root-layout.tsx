@@ -10,10 +10,7 @@ export function RootLayout() {
   const navigating = useNavigation().state === 'loading';
   return (
     <div className="flex min-h-dvh flex-col">
-      <a
-        href="#main"
-        className="sr-only rounded-lg bg-white px-4 py-2 font-bold focus:not-sr-only focus:absolute focus:left-4 focus:top-4 focus:z-50"
-      >
+      <a href="#main" className="sr-only rounded-lg bg-white px-4 py-2 font-bold focus:not-sr-only focus:absolute focus:left-4 focus:top-4 focus:z-50">
         Skip to content
       </a>
       <div aria-hidden="true" className={`h-1 bg-oxide transition-opacity ${navigating ? 'animate-pulse opacity-100' : 'opacity-0'}`} />

@@ -19,10 +19,7 @@ export function RouteError() {
       <div className="mx-auto max-w-xl py-12">
         <h1 className="text-3xl font-extrabold">You are signed out</h1>
         <p className="mt-3">Your session has ended. Sign in again to carry on where you were.</p>
-        <Link
-          to={paths.signIn(location.pathname + location.search)}
-          className="mt-6 inline-block text-link"
-        >
+        <Link to={paths.signIn(location.pathname + location.search)} className="mt-6 inline-block text-link">
           Sign in
         </Link>
       </div>
@@ -31,9 +28,7 @@ export function RouteError() {
   return (
     <div role="alert" className="mx-auto max-w-xl py-12">
       <h1 className="text-3xl font-extrabold">Something went wrong</h1>
-      <p className="mt-3">
-        {isApiError(error) ? error.message : 'This page could not be shown.'} Try again in a moment.
-      </p>
+      <p className="mt-3">{isApiError(error) ? error.message : 'This page could not be shown.'} Try again in a moment.</p>
       <Button className="mt-6" onClick={() => window.location.reload()}>
         Try again
       </Button>

@@ -63,12 +63,7 @@ export function apiGet<S extends z.ZodType>(path: string, schema: S): Promise<z.
 }
 
 /** A write. Returns the parsed body, or undefined when no schema is given (204/202 answers). */
-export async function apiWrite<S extends z.ZodType>(
-  method: WriteMethod,
-  path: string,
-  body?: unknown,
-  schema?: S,
-): Promise<z.output<S>> {
+export async function apiWrite<S extends z.ZodType>(method: WriteMethod, path: string, body?: unknown, schema?: S): Promise<z.output<S>> {
   let response = await send(method, path, body);
   if (response.status === 403) {
     const error = await toApiError(response.clone());

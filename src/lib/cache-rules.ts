@@ -69,7 +69,8 @@ export function timeHeld(queryClient: QueryClient, hold: Hold): void {
 }
 
 /** Someone took a free time meanwhile (409): every list of free times, online and at the desk, is stale. */
-export const freeTimesTaken = (queryClient: QueryClient): Promise<unknown> => refreshEndpoints(queryClient, [onlineBookingApi.availability, bookingsApi.options]);
+export const freeTimesTaken = (queryClient: QueryClient): Promise<unknown> =>
+  refreshEndpoints(queryClient, [onlineBookingApi.availability, bookingsApi.options]);
 
 /** The client holds a time already (made in another tab): their open holds are read again to show it. */
 export const openHoldsChanged = (queryClient: QueryClient): Promise<unknown> => refreshEndpoints(queryClient, [onlineBookingApi.myHolds]);
@@ -102,7 +103,8 @@ export const offerTaken = (queryClient: QueryClient, token: string, offer: Answe
   queryClient.setQueryData(apiKey(offersApi.view, { params: { token } }), offer);
 
 /** Taking an offer was refused (gone or run out meanwhile): read the offer's real state. */
-export const offerRefused = (queryClient: QueryClient, token: string) => queryClient.invalidateQueries({ queryKey: apiKey(offersApi.view, { params: { token } }) });
+export const offerRefused = (queryClient: QueryClient, token: string) =>
+  queryClient.invalidateQueries({ queryKey: apiKey(offersApi.view, { params: { token } }) });
 
 // Salon running: the session, the salon's set-up, follow-up rules and messages.
 

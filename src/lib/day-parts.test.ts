@@ -23,7 +23,12 @@ const clock = (times: FreeTime[]) => times.map((t) => DateTime.fromISO(t.start, 
 describe('dayPartOf', () => {
   // Common practice for the parts of a salon day: morning until noon, afternoon until 17:00, evening after.
   it('reads the salon clock: 11:55 is morning, 12:00 afternoon, 16:55 afternoon, 17:00 evening', () => {
-    expect(['11:55', '12:00', '16:55', '17:00'].map((t) => dayPartOf(free('2027-07-13', t).start, zone))).toEqual(['morning', 'afternoon', 'afternoon', 'evening']);
+    expect(['11:55', '12:00', '16:55', '17:00'].map((t) => dayPartOf(free('2027-07-13', t).start, zone))).toEqual([
+      'morning',
+      'afternoon',
+      'afternoon',
+      'evening',
+    ]);
   });
 
   it('uses the salon zone, not UTC: 10:00 in Denver in July is 16:00 UTC and still morning', () => {
@@ -34,7 +39,10 @@ describe('dayPartOf', () => {
 describe('groupTimesByPart', () => {
   it('keeps only the parts that have times, in the order of the day', () => {
     const parts = groupTimesByPart([free('2027-07-13', '09:00'), free('2027-07-13', '09:05'), free('2027-07-13', '18:00')], zone);
-    expect(parts.map((p) => [p.part, p.times.length])).toEqual([['morning', 2], ['evening', 1]]);
+    expect(parts.map((p) => [p.part, p.times.length])).toEqual([
+      ['morning', 2],
+      ['evening', 1],
+    ]);
   });
 });
 

@@ -5,11 +5,7 @@ import { isApiError } from './api-error';
  * Puts a failed submit's messages where the person will look: per-field messages
  * from a 400 on their fields, anything else on the form as a whole (`root.server`).
  */
-export function showServerErrors<T extends FieldValues>(
-  error: unknown,
-  setError: UseFormSetError<T>,
-  fieldNames: readonly Path<T>[],
-): void {
+export function showServerErrors<T extends FieldValues>(error: unknown, setError: UseFormSetError<T>, fieldNames: readonly Path<T>[]): void {
   if (!isApiError(error)) {
     setError('root.server', { message: 'Something went wrong. Please try again.' });
     return;

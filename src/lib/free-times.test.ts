@@ -25,10 +25,7 @@ describe('groupTimesByDay', () => {
   });
 
   it('keeps the spring-forward day whole: times on both sides of the skipped hour share one day', () => {
-    const days = groupTimesByDay(
-      [free('2027-03-14T03:00:00-06:00'), free('2027-03-14T01:30:00-07:00'), free('2027-03-15T09:00:00-06:00')],
-      zone,
-    );
+    const days = groupTimesByDay([free('2027-03-14T03:00:00-06:00'), free('2027-03-14T01:30:00-07:00'), free('2027-03-15T09:00:00-06:00')], zone);
     expect(days.map((d) => [d.date, d.times.length])).toEqual([
       ['2027-03-14', 2],
       ['2027-03-15', 1],

@@ -12,9 +12,7 @@ export type FreeDay = { date: string; times: FreeTime[] };
  * evening start stays on its own day and the clock-change days group correctly.
  */
 export function groupTimesByDay(times: readonly FreeTime[], zone: string): FreeDay[] {
-  const sorted = [...times].sort(
-    (a, b) => Date.parse(a.start) - Date.parse(b.start) || a.stylistName.localeCompare(b.stylistName),
-  );
+  const sorted = [...times].sort((a, b) => Date.parse(a.start) - Date.parse(b.start) || a.stylistName.localeCompare(b.stylistName));
   const days = new Map<string, FreeTime[]>();
   for (const time of sorted) {
     const date = localDateOf(time.start, zone);

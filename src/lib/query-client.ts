@@ -22,8 +22,7 @@ export const queryClient: QueryClient = new QueryClient({
     queries: {
       staleTime: 30_000,
       // 4xx answers will not change on a retry; network and 5xx errors might.
-      retry: (failureCount, error) =>
-        failureCount < 2 && !(error instanceof ApiError && error.status >= 400 && error.status < 500),
+      retry: (failureCount, error) => failureCount < 2 && !(error instanceof ApiError && error.status >= 400 && error.status < 500),
     },
   },
 });

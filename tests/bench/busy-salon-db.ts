@@ -96,10 +96,20 @@ export async function loadBusySalon(db: Kysely<Database>, options: BusySalonOpti
   const days = Math.round(end.diff(start, 'days').days);
   const rng = seededRng(options.seed ?? 2027);
   const scenario = generateScenario(rng, {
-    zone: ZONE, from: options.from, days, granularity: 5,
-    stylists: 12, colourStylists: 8, chairs: 14, basins: 4, bookings: Math.round(BOOKINGS_PER_DAY * days),
-    salonHours: [540, 1260], stylistStarts: [540, 570, 600, 660], stylistEnds: [1020, 1080, 1140, 1200],
-    timeOffChance: 0.5, maxClients: [1, 2, 2, 3],
+    zone: ZONE,
+    from: options.from,
+    days,
+    granularity: 5,
+    stylists: 12,
+    colourStylists: 8,
+    chairs: 14,
+    basins: 4,
+    bookings: Math.round(BOOKINGS_PER_DAY * days),
+    salonHours: [540, 1260],
+    stylistStarts: [540, 570, 600, 660],
+    stylistEnds: [1020, 1080, 1140, 1200],
+    timeOffChance: 0.5,
+    maxClients: [1, 2, 2, 3],
   });
   const passwordHash = await hashPassword(password);
   const tag = randomUUID().slice(0, 8);
@@ -116,7 +126,11 @@ export async function loadBusySalon(db: Kysely<Database>, options: BusySalonOpti
       .values(scenario.salonHours.map((h) => ({ salon_id: salonId, rrule: h.rrule, start_time: h.start, end_time: h.end })))
       .execute();
     const user = (email: string, name: string, role: 'owner' | 'front_desk' | 'stylist') =>
-      trx.insertInto('users').values({ salon_id: salonId, email, name, role, phone: null, password_hash: passwordHash }).returning('id').executeTakeFirstOrThrow();
+      trx
+        .insertInto('users')
+        .values({ salon_id: salonId, email, name, role, phone: null, password_hash: passwordHash })
+        .returning('id')
+        .executeTakeFirstOrThrow();
     const ownerEmail = `owner.${tag}@busy.test`;
     const deskEmail = `desk.${tag}@busy.test`;
     await user(ownerEmail, 'Busy Owner', 'owner');
@@ -129,45 +143,111 @@ export async function loadBusySalon(db: Kysely<Database>, options: BusySalonOpti
       const u = await user(email, `Stylist ${st.id}`, 'stylist');
       const row = await trx
         .insertInto('staff')
-        .values({ salon_id: salonId, user_id: u.id, display_name: `Stylist ${st.id.toUpperCase()}`, skills: st.skills ?? [], max_clients_at_once: st.maxClientsAtOnce ?? 1 })
+        .values({
+          salon_id: salonId,
+          user_id: u.id,
+          display_name: `Stylist ${st.id.toUpperCase()}`,
+          skills: st.skills ?? [],
+          max_clients_at_once: st.maxClientsAtOnce ?? 1,
+        })
         .returning('id')
         .executeTakeFirstOrThrow();
       staffIds.set(st.id, row.id);
       stylistEmails.push(email);
-      await trx.insertInto('staff_hours').values((st.hours ?? []).map((h) => ({ staff_id: row.id, rrule: h.rrule, start_time: h.start, end_time: h.end }))).execute();
+      await trx
+        .insertInto('staff_hours')
+        .values((st.hours ?? []).map((h) => ({ staff_id: row.id, rrule: h.rrule, start_time: h.start, end_time: h.end })))
+        .execute();
       for (const off of st.timeOff ?? []) {
-        await trx.insertInto('time_off').values({ staff_id: row.id, during: tstzRange(toDate(off.start), toDate(off.end)), reason: 'Time off' }).execute();
+        await trx
+          .insertInto('time_off')
+          .values({ staff_id: row.id, during: tstzRange(toDate(off.start), toDate(off.end)), reason: 'Time off' })
+          .execute();
       }
     }
     const named = async (table: 'chairs' | 'basins', ids: string[], prefix: string) => {
-      const rows = await trx.insertInto(table).values(ids.map((_id, i) => ({ salon_id: salonId, name: `${prefix} ${String(i + 1).padStart(2, '0')}` }))).returning('id').execute();
+      const rows = await trx
+        .insertInto(table)
+        .values(ids.map((_id, i) => ({ salon_id: salonId, name: `${prefix} ${String(i + 1).padStart(2, '0')}` })))
+        .returning('id')
+        .execute();
       return new Map(ids.map((id, i) => [id, rows[i].id]));
     };
-    const chairIds = await named('chairs', scenario.chairs.map((c) => c.id), 'Chair');
-    const basinIds = await named('basins', (scenario.basins ?? []).map((b) => b.id), 'Basin');
+    const chairIds = await named(
+      'chairs',
+      scenario.chairs.map((c) => c.id),
+      'Chair',
+    );
+    const basinIds = await named(
+      'basins',
+      (scenario.basins ?? []).map((b) => b.id),
+      'Basin',
+    );
 
     const services = new Map<string, { id: string; priceCents: number; depositCents: number }>();
     for (const m of MENU) {
       const kinds = m.pattern.split(',') as Kind[];
-      const plan: StepPlan = { sittings: [{ steps: kinds.map((kind, i) => (kind === 'developing' ? { kind, label: `Step ${i + 1}`, product: 'none' as const, minMinutes: 10, maxMinutes: 45 } : { kind, label: `Step ${i + 1}`, product: 'none' as const, minutes: 20 })) }] };
+      const plan: StepPlan = {
+        sittings: [
+          {
+            steps: kinds.map((kind, i) =>
+              kind === 'developing'
+                ? { kind, label: `Step ${i + 1}`, product: 'none' as const, minMinutes: 10, maxMinutes: 45 }
+                : { kind, label: `Step ${i + 1}`, product: 'none' as const, minutes: 20 },
+            ),
+          },
+        ],
+      };
       const row = await trx
         .insertInto('services')
-        .values({ salon_id: salonId, name: m.name, category: m.category, skill: m.skill, price_cents: m.priceCents, deposit_cents: m.depositCents, step_plan: JSON.stringify(plan) })
+        .values({
+          salon_id: salonId,
+          name: m.name,
+          category: m.category,
+          skill: m.skill,
+          price_cents: m.priceCents,
+          deposit_cents: m.depositCents,
+          step_plan: JSON.stringify(plan),
+        })
         .returning('id')
         .executeTakeFirstOrThrow();
       services.set(m.pattern, { id: row.id, priceCents: m.priceCents, depositCents: m.depositCents });
     }
     const clients = await trx
       .insertInto('clients')
-      .values(Array.from({ length: CLIENTS }, (_, i) => ({ salon_id: salonId, name: `Busy client ${String(i + 1).padStart(3, '0')}`, email: `client${i + 1}.${tag}@busy.test`, phone: null })))
+      .values(
+        Array.from({ length: CLIENTS }, (_, i) => ({
+          salon_id: salonId,
+          name: `Busy client ${String(i + 1).padStart(3, '0')}`,
+          email: `client${i + 1}.${tag}@busy.test`,
+          phone: null,
+        })),
+      )
       .returning('id')
       .execute();
 
     // Rows with their ids made here, so bookings, sittings and steps go in as a few multi-row inserts.
     const bookingRows: Insertable<Database['bookings']>[] = [];
     const sittingRows: Array<{ id: string; booking_id: string; seq: number; chair_id: string; during: string; live: boolean }> = [];
-    const stepRows: Array<{ sitting_id: string; seq: number; kind: Kind; label: string; stylist_id: string; basin_id: string | null; during: string; live: boolean }> = [];
-    const paymentRows: Array<{ salon_id: string; booking_id: string; client_id: string; provider_ref: string; amount_cents: number; currency: string; status: 'succeeded' | 'refunded' }> = [];
+    const stepRows: Array<{
+      sitting_id: string;
+      seq: number;
+      kind: Kind;
+      label: string;
+      stylist_id: string;
+      basin_id: string | null;
+      during: string;
+      live: boolean;
+    }> = [];
+    const paymentRows: Array<{
+      salon_id: string;
+      booking_id: string;
+      client_id: string;
+      provider_ref: string;
+      amount_cents: number;
+      currency: string;
+      status: 'succeeded' | 'refunded';
+    }> = [];
     let cancelled = 0;
     let noShows = 0;
     for (const b of scenario.bookings ?? []) {
@@ -179,15 +259,26 @@ export async function loadBusySalon(db: Kysely<Database>, options: BusySalonOpti
       const live = status !== 'cancelled';
       // Cancelled a day or a week ahead: inside or outside the 48-hour window.
       const cancelledAt = status === 'cancelled' ? new Date(first.getTime() - (rng() < 0.4 ? 1 : 7) * 86_400_000) : null;
-      const outcome = status === 'cancelled' && service.depositCents > 0 ? (first.getTime() - cancelledAt!.getTime() < 48 * 3_600_000 ? 'kept' : 'refunded') : null;
+      const outcome =
+        status === 'cancelled' && service.depositCents > 0 ? (first.getTime() - cancelledAt!.getTime() < 48 * 3_600_000 ? 'kept' : 'refunded') : null;
       if (status === 'cancelled') cancelled++;
       if (status === 'no_show') noShows++;
       const bookingId = randomUUID();
       const clientId = clients[Math.floor(rng() * clients.length)].id;
       bookingRows.push({
-        id: bookingId, salon_id: salonId, client_id: clientId, service_id: service.id, stylist_id: staffIds.get(b.stylist)!, status,
-        step_plan: JSON.stringify(planOf(b.steps)), price_cents: service.priceCents, deposit_cents: service.depositCents,
-        held_until: null, cancel_reason: status === 'cancelled' ? 'Client asked to cancel' : null, deposit_outcome: outcome, created_by: null,
+        id: bookingId,
+        salon_id: salonId,
+        client_id: clientId,
+        service_id: service.id,
+        stylist_id: staffIds.get(b.stylist)!,
+        status,
+        step_plan: JSON.stringify(planOf(b.steps)),
+        price_cents: service.priceCents,
+        deposit_cents: service.depositCents,
+        held_until: null,
+        cancel_reason: status === 'cancelled' ? 'Client asked to cancel' : null,
+        deposit_outcome: outcome,
+        created_by: null,
         created_at: new Date(first.getTime() - 14 * 86_400_000),
       });
       if (service.depositCents > 0) {
@@ -199,8 +290,14 @@ export async function loadBusySalon(db: Kysely<Database>, options: BusySalonOpti
       sittingRows.push({ id: sittingId, booking_id: bookingId, seq: 1, chair_id: chairIds.get(b.chair)!, during: tstzRange(first, last), live });
       b.steps.forEach((s, j) => {
         stepRows.push({
-          sitting_id: sittingId, seq: j + 1, kind: s.kind, label: `Step ${j + 1}`, stylist_id: staffIds.get(b.stylist)!,
-          basin_id: s.kind === 'basin' ? basinIds.get(s.basin)! : null, during: tstzRange(toDate(s.start), toDate(s.end)), live,
+          sitting_id: sittingId,
+          seq: j + 1,
+          kind: s.kind,
+          label: `Step ${j + 1}`,
+          stylist_id: staffIds.get(b.stylist)!,
+          basin_id: s.kind === 'basin' ? basinIds.get(s.basin)! : null,
+          during: tstzRange(toDate(s.start), toDate(s.end)),
+          live,
         });
       });
     }
@@ -209,10 +306,24 @@ export async function loadBusySalon(db: Kysely<Database>, options: BusySalonOpti
     await insertChunked(stepRows, (rows) => trx.insertInto('booking_steps').values(rows).execute());
     await insertChunked(paymentRows, (rows) => trx.insertInto('payments').values(rows).execute());
     return {
-      salonId, slug, timeZone: ZONE, from: options.from, to: end.toISODate()!, ownerEmail, deskEmail, stylistEmails, password,
+      salonId,
+      slug,
+      timeZone: ZONE,
+      from: options.from,
+      to: end.toISODate()!,
+      ownerEmail,
+      deskEmail,
+      stylistEmails,
+      password,
       counts: {
-        stylists: scenario.stylists.length, chairs: scenario.chairs.length, basins: scenario.basins?.length ?? 0, services: MENU.length,
-        clients: CLIENTS, bookings: bookingRows.length, cancelled, noShows,
+        stylists: scenario.stylists.length,
+        chairs: scenario.chairs.length,
+        basins: scenario.basins?.length ?? 0,
+        services: MENU.length,
+        clients: CLIENTS,
+        bookings: bookingRows.length,
+        cancelled,
+        noShows,
       },
     };
   });

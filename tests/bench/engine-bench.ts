@@ -25,20 +25,52 @@ const WARM_UP = 30; // the first ~15 runs of each query are still being compiled
 const RUNS = 100;
 
 const correction: NonNullable<ScenarioInput['request']> = {
-  skill: 'colour', stylist: null, earliest: '2027-03-02T08:00', limit: 10, spread: 'day',
+  skill: 'colour',
+  stylist: null,
+  earliest: '2027-03-02T08:00',
+  limit: 10,
+  spread: 'day',
   sittings: [
-    { steps: [{ kind: 'hands_on', minutes: 45 }, { kind: 'developing', minMinutes: 30, maxMinutes: 60 }, { kind: 'basin', minutes: 15 }, { kind: 'hands_on', minutes: 30 }] },
-    { daysAfterPrevious: { min: 7, max: 14 }, steps: [{ kind: 'hands_on', minutes: 60 }, { kind: 'developing', minMinutes: 20, maxMinutes: 40 }, { kind: 'basin', minutes: 15 }] },
+    {
+      steps: [
+        { kind: 'hands_on', minutes: 45 },
+        { kind: 'developing', minMinutes: 30, maxMinutes: 60 },
+        { kind: 'basin', minutes: 15 },
+        { kind: 'hands_on', minutes: 30 },
+      ],
+    },
+    {
+      daysAfterPrevious: { min: 7, max: 14 },
+      steps: [
+        { kind: 'hands_on', minutes: 60 },
+        { kind: 'developing', minMinutes: 20, maxMinutes: 40 },
+        { kind: 'basin', minutes: 15 },
+      ],
+    },
   ],
 };
-const fits = [{ service: 'toner-refresh', skill: 'colour', minutes: 25 }, { service: 'fringe-trim', skill: 'cut', minutes: 15 }];
+const fits = [
+  { service: 'toner-refresh', skill: 'colour', minutes: 25 },
+  { service: 'fringe-trim', skill: 'cut', minutes: 15 },
+];
 
 function salon(o: Partial<GeneratorOptions>, seed: number): Scenario {
   const input = generateScenario(seededRng(seed), {
-    zone: 'America/Denver', from: '2027-03-01', days: 42, granularity: 5,
-    stylists: 12, colourStylists: 8, chairs: 14, basins: 4, bookings: 2500,
-    salonHours: [540, 1260], stylistStarts: [540, 570, 600, 660], stylistEnds: [1020, 1080, 1140, 1200],
-    timeOffChance: 0.5, maxClients: [1, 2, 2, 3], ...o,
+    zone: 'America/Denver',
+    from: '2027-03-01',
+    days: 42,
+    granularity: 5,
+    stylists: 12,
+    colourStylists: 8,
+    chairs: 14,
+    basins: 4,
+    bookings: 2500,
+    salonHours: [540, 1260],
+    stylistStarts: [540, 570, 600, 660],
+    stylistEnds: [1020, 1080, 1140, 1200],
+    timeOffChance: 0.5,
+    maxClients: [1, 2, 2, 3],
+    ...o,
   });
   return parseScenario({ ...input, request: correction, fits });
 }
@@ -62,7 +94,9 @@ const rssMb = () => Math.round(process.resourceUsage().maxRSS / 1024);
 
 const busy = salon({}, 2027);
 collectGarbage();
-console.log(`busy salon: ${busy.stylists.length} stylists, ${busy.chairs.length} chairs, ${busy.basins.length} basins, ${busy.bookings.length} bookings, ${busy.horizon.from}..${busy.horizon.to}, ${busy.granularityMinutes}-minute grid`);
+console.log(
+  `busy salon: ${busy.stylists.length} stylists, ${busy.chairs.length} chairs, ${busy.basins.length} basins, ${busy.bookings.length} bookings, ${busy.horizon.from}..${busy.horizon.to}, ${busy.granularityMinutes}-minute grid`,
+);
 console.log(`answers: ${planOptions(busy).options.length} options, ${findWindows(busy).windows.length} windows`);
 const results = {
   options: timeIt(() => planOptions(busy)),
@@ -78,7 +112,10 @@ console.log(`heap used ${Math.round(heap.heapUsed / 2 ** 20)} MB of ${Math.round
 
 // Engine vs the brute-force reference on a scenario the reference finishes in reasonable time.
 const small = salon({ stylists: 4, colourStylists: 3, chairs: 4, basins: 2, days: 7, bookings: 60 }, 7);
-const smallReq = { ...small, request: { ...small.request!, sittings: [small.request!.sittings[0], { ...small.request!.sittings[1], daysAfterPrevious: { min: 1, max: 3 } }] } };
+const smallReq = {
+  ...small,
+  request: { ...small.request!, sittings: [small.request!.sittings[0], { ...small.request!.sittings[1], daysAfterPrevious: { min: 1, max: 3 } }] },
+};
 console.log(`small salon: ${small.stylists.length} stylists, ${small.chairs.length} chairs, ${small.bookings.length} bookings, 7 days`);
 const pairs: Array<[string, () => unknown, () => unknown]> = [
   ['options', () => planOptions(smallReq), () => referenceOptions(smallReq)],
@@ -91,4 +128,6 @@ for (const [name, engine, reference] of pairs) {
   console.log(`${name.padEnd(9)} engine p50 ${ms(e.p50)} ms, reference p50 ${ms(r.p50)} ms, reference/engine ${(r.p50 / e.p50).toFixed(0)}x`);
 }
 console.log(`peak RSS ${rss} MB (busy salon) ${rss <= TARGET_RSS_MB ? 'ok' : `OVER target ${TARGET_RSS_MB} MB`}`);
-console.log(`bench: options p95 ${ms(results.options.p95)} ms, windows p95 ${ms(results.windows.p95)} ms, occupancy p95 ${ms(results.occupancy.p95)} ms, rss ${rss} MB`);
+console.log(
+  `bench: options p95 ${ms(results.options.p95)} ms, windows p95 ${ms(results.windows.p95)} ms, occupancy p95 ${ms(results.occupancy.p95)} ms, rss ${rss} MB`,
+);

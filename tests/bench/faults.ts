@@ -59,7 +59,11 @@ async function main(): Promise<number> {
     const timeline: { at: number; status: number }[] = [];
     const started = Date.now();
     const load = measure({
-      name: '   desk day during the outage', urls: [app.url], connections: 10, duration: OUTAGE_SECONDS + 20, headers: { cookie: desk.cookie },
+      name: '   desk day during the outage',
+      urls: [app.url],
+      connections: 10,
+      duration: OUTAGE_SECONDS + 20,
+      headers: { cookie: desk.cookie },
       next: () => ({ path: `/api/desk/day?date=${date}` }),
     });
     // A parallel probe records when answers change, for the recovery time.
@@ -79,14 +83,19 @@ async function main(): Promise<number> {
     const up = Date.now();
     const [figures] = await Promise.all([load, probe]);
     printFigures(figures);
-    const other5xx = Object.entries(figures.statuses).filter(([s]) => Number(s) >= 500 && s !== '503').reduce((n, [, c]) => n + c, 0);
+    const other5xx = Object.entries(figures.statuses)
+      .filter(([s]) => Number(s) >= 500 && s !== '503')
+      .reduce((n, [, c]) => n + c, 0);
     const firstOk = timeline.find((p) => p.at > up && p.status === 200);
     const during = timeline.filter((p) => p.at > down + 1000 && p.at < up);
     const duringStatuses = during.reduce<Record<number, number>>((m, p) => ({ ...m, [p.status]: (m[p.status] ?? 0) + 1 }), {});
-    console.log(`   probes from 1 s after the stop until the restart, by status: ${JSON.stringify(duringStatuses)} (0 = no answer); other 5xx under load: ${other5xx}`);
+    console.log(
+      `   probes from 1 s after the stop until the restart, by status: ${JSON.stringify(duringStatuses)} (0 = no answer); other 5xx under load: ${other5xx}`,
+    );
     console.log(`   recovered ${firstOk ? `${((firstOk.at - up) / 1000).toFixed(1)} s after PostgreSQL was back` : 'NOT within the run'}`);
     if (other5xx) failures.push(`${other5xx} answers other than 503 among the 5xx during the outage`);
-    if (!during.length || during.some((p) => p.status !== 503)) failures.push(`requests during the outage answered ${JSON.stringify(duringStatuses)}, not only 503`);
+    if (!during.length || during.some((p) => p.status !== 503))
+      failures.push(`requests during the outage answered ${JSON.stringify(duringStatuses)}, not only 503`);
     if (!firstOk) failures.push('the app did not recover by itself');
 
     // 2. A burst of bookings, and the app server killed in the middle of it.
@@ -99,10 +108,17 @@ async function main(): Promise<number> {
     const db = createDb(createPool(prepared.url));
     const broken = await halfWritten(db);
     const overlaps = await doubleBookings(db);
-    const keys = await db.selectFrom('idempotency_keys').select((eb) => eb.fn.countAll<string>().as('n')).executeTakeFirst();
+    const keys = await db
+      .selectFrom('idempotency_keys')
+      .select((eb) => eb.fn.countAll<string>().as('n'))
+      .executeTakeFirst();
     await db.destroy();
-    console.log(`   ${results.sent} booking requests sent: ${results.created} answered 201, ${results.cut} cut off by the kill, ${results.refused} refused (4xx)`);
-    console.log(`   half-written bookings ${broken}; double bookings ${overlaps.chairs + overlaps.hands + overlaps.basins}; bookings committed (idempotency records, whole) ${keys?.n}`);
+    console.log(
+      `   ${results.sent} booking requests sent: ${results.created} answered 201, ${results.cut} cut off by the kill, ${results.refused} refused (4xx)`,
+    );
+    console.log(
+      `   half-written bookings ${broken}; double bookings ${overlaps.chairs + overlaps.hands + overlaps.basins}; bookings committed (idempotency records, whole) ${keys?.n}`,
+    );
     if (broken) failures.push(`${broken} half-written bookings after the kill`);
     if (overlaps.chairs + overlaps.hands + overlaps.basins) failures.push('double bookings after the kill');
     const health = await fetch(`${app.url}/api/health`);
@@ -129,7 +145,9 @@ async function main(): Promise<number> {
 
 /** Desk bookings for different clients on the demo stylists' free times, sent all at once. */
 async function bookingBurst(app: AppProcess, desk: HttpSession, clients: string[], onFirstAnswer: () => void) {
-  const services = await (await fetch(`${app.url}/api/services`, { headers: { cookie: desk.cookie } })).json() as { services: { id: string; stepPlan: unknown; onlineBookable?: boolean }[] };
+  const services = (await (await fetch(`${app.url}/api/services`, { headers: { cookie: desk.cookie } })).json()) as {
+    services: { id: string; stepPlan: unknown; onlineBookable?: boolean }[];
+  };
   const service = services.services[0];
   const date = new Date(Date.now() + 60 * 86_400_000).toISOString().slice(0, 10);
   const options = await fetch(`${app.url}/api/booking-options`, {
@@ -150,7 +168,14 @@ async function bookingBurst(app: AppProcess, desk: HttpSession, clients: string[
     const res = await fetch(`${app.url}/api/bookings`, {
       method: 'POST',
       headers: { cookie: desk.cookie, 'x-csrf-token': desk.csrf, 'content-type': 'application/json' },
-      body: JSON.stringify({ clientId: clients[(i + 1) % clients.length], serviceId: service.id, stepPlan: service.stepPlan, stylistId: pick.stylistId, start: pick.sittings[0].start, idempotencyKey: randomUUID() }),
+      body: JSON.stringify({
+        clientId: clients[(i + 1) % clients.length],
+        serviceId: service.id,
+        stepPlan: service.stepPlan,
+        stylistId: pick.stylistId,
+        start: pick.sittings[0].start,
+        idempotencyKey: randomUUID(),
+      }),
     }).catch(() => null);
     if (res && !answered) {
       answered = true;

@@ -31,7 +31,12 @@ async function main(): Promise<void> {
   try {
     let url = process.env.DATABASE_URL;
     if (!url) {
-      const prepared = await prepareLocalDatabase({ dataRoot: scratch, port: 59000 + Math.floor(Math.random() * 900), database: 'dwell_bench', throwaway: true });
+      const prepared = await prepareLocalDatabase({
+        dataRoot: scratch,
+        port: 59000 + Math.floor(Math.random() * 900),
+        database: 'dwell_bench',
+        throwaway: true,
+      });
       cluster = prepared.cluster;
       url = prepared.url;
     }
@@ -40,7 +45,9 @@ async function main(): Promise<void> {
     const started = performance.now();
     const busy = await loadBusySalon(db, { from: FROM, months: 3, now: new Date('2027-04-15T12:00:00Z') });
     await sql`analyze`.execute(db); // fresh statistics, as autovacuum would give a long-lived database
-    console.log(`busy salon: ${busy.counts.bookings} bookings (${busy.counts.cancelled} cancelled, ${busy.counts.noShows} no-shows), ${busy.counts.stylists} stylists, ${busy.counts.chairs} chairs, ${busy.from}..${busy.to}, loaded in ${Math.round(performance.now() - started)} ms`);
+    console.log(
+      `busy salon: ${busy.counts.bookings} bookings (${busy.counts.cancelled} cancelled, ${busy.counts.noShows} no-shows), ${busy.counts.stylists} stylists, ${busy.counts.chairs} chairs, ${busy.from}..${busy.to}, loaded in ${Math.round(performance.now() - started)} ms`,
+    );
 
     const config = loadConfig({ DATABASE_URL: url, DWELL_MODE: 'test' });
     const outside = await startOutsideServices(config);
@@ -59,7 +66,9 @@ async function main(): Promise<void> {
       return { ms: performance.now() - t, body: res.body };
     };
     const first = await call();
-    console.log(`period ${first.body.period.from}..${first.body.period.to} (${first.body.period.days} days, ${first.body.period.scenarios} scenario): chair occupancy ${(first.body.chairOccupancy * 100).toFixed(1)} %, window use ${(first.body.windowUse * 100).toFixed(1)} %, ${first.body.attendance.bookings} bookings`);
+    console.log(
+      `period ${first.body.period.from}..${first.body.period.to} (${first.body.period.days} days, ${first.body.period.scenarios} scenario): chair occupancy ${(first.body.chairOccupancy * 100).toFixed(1)} %, window use ${(first.body.windowUse * 100).toFixed(1)} %, ${first.body.attendance.bookings} bookings`,
+    );
     for (let i = 0; i < WARM_UP; i++) await call();
     const samples: number[] = [];
     for (let i = 0; i < RUNS; i++) samples.push((await call()).ms);
@@ -70,7 +79,9 @@ async function main(): Promise<void> {
     await jobs.stop();
     await outside.close();
     await db.destroy();
-    console.log(`bench:utilisation: 3-month period p50 ${p50.toFixed(1)} ms, p95 ${p95.toFixed(1)} ms over ${RUNS} calls ${p95 < TARGET_MS ? 'ok' : `OVER target ${TARGET_MS} ms`}`);
+    console.log(
+      `bench:utilisation: 3-month period p50 ${p50.toFixed(1)} ms, p95 ${p95.toFixed(1)} ms over ${RUNS} calls ${p95 < TARGET_MS ? 'ok' : `OVER target ${TARGET_MS} ms`}`,
+    );
   } finally {
     if (cluster) stopCluster(cluster);
     rmSync(scratch, { recursive: true, force: true });

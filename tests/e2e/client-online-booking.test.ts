@@ -16,7 +16,9 @@ afterAll(() => browser.close());
 /** Opens the day chip with the most free times (among those listed) and answers that day's times. */
 async function openBusiestDay(page: Page) {
   const chips = page.getByRole('list', { name: 'Days with free times' }).getByRole('button');
-  const counts = (await chips.evaluateAll((buttons) => buttons.map((b) => b.getAttribute('aria-label') ?? ''))).map((label) => Number(/(\d+) free/.exec(label)?.[1] ?? 0));
+  const counts = (await chips.evaluateAll((buttons) => buttons.map((b) => b.getAttribute('aria-label') ?? ''))).map((label) =>
+    Number(/(\d+) free/.exec(label)?.[1] ?? 0),
+  );
   await chips.nth(counts.indexOf(Math.max(...counts))).click();
   return page.getByRole('region', { name: /^Free times on / });
 }
@@ -85,8 +87,14 @@ describe('a new client on a phone', () => {
     const more = day.getByRole('button', { name: /^More (morning|afternoon|evening) times/ }).first();
     await more.click();
     expect(await shown()).toBeGreaterThan(glance);
-    await day.getByRole('button', { name: /^Fewer / }).first().click();
-    await day.getByRole('button', { name: / with / }).first().click();
+    await day
+      .getByRole('button', { name: /^Fewer / })
+      .first()
+      .click();
+    await day
+      .getByRole('button', { name: / with / })
+      .first()
+      .click();
     // The action stays in reach: the hold button is on screen, not at the end of a long list.
     const hold = page.getByRole('button', { name: 'Hold this time' });
     const holdBox = (await hold.boundingBox())!;
@@ -97,7 +105,10 @@ describe('a new client on a phone', () => {
     await hold.click();
 
     await page.getByRole('heading', { name: 'Sign in to book' }).waitFor();
-    await page.getByRole('link', { name: /Create an account|Sign up/ }).first().click();
+    await page
+      .getByRole('link', { name: /Create an account|Sign up/ })
+      .first()
+      .click();
     await page.getByLabel('Name').fill('Robin Vale');
     await page.getByLabel('E-mail').fill(email);
     await page.getByLabel('Mobile phone').fill('+1 970 555 0123');
@@ -110,7 +121,10 @@ describe('a new client on a phone', () => {
     // The reaction question starts unanswered and must be answered before moving on.
     await page.getByRole('button', { name: 'Save and continue' }).click();
     await page.getByText('Choose an answer').first().waitFor();
-    await page.getByRole('group', { name: /ever reacted to hair colour/ }).getByLabel('No', { exact: true }).check();
+    await page
+      .getByRole('group', { name: /ever reacted to hair colour/ })
+      .getByLabel('No', { exact: true })
+      .check();
     await page.getByRole('button', { name: 'Save and continue' }).click();
     await page.getByRole('heading', { name: 'Before you pay' }).waitFor();
     const history = await (await page.request.get(`${baseUrl()}/api/me/hair-history`)).json();
@@ -123,7 +137,10 @@ describe('a new client on a phone', () => {
     // The confirmation note says what the send log says (a text may wait for the salon's quiet hours).
     const bookingId = /\/me\/bookings\/([^/]+)\/booked/.exec(page.url())![1];
     const log = await (await page.request.get(`${baseUrl()}/api/me/bookings/${bookingId}/confirmation`)).json();
-    const note = await page.getByRole('status').filter({ hasText: /confirmation/ }).innerText();
+    const note = await page
+      .getByRole('status')
+      .filter({ hasText: /confirmation/ })
+      .innerText();
     const text = log.sends.find((x: { channel: string }) => x.channel === 'sms');
     expect(note).toMatch(text.status === 'waiting' ? /confirmation text goes at/ : /text/);
     await expectAccessible(page);
@@ -146,19 +163,29 @@ describe('a new client on a phone', () => {
     await page.getByRole('button', { name: 'Move booking' }).first().click();
     const moveDay = await openBusiestDay(page);
     expect(await moveDay.getByRole('button', { name: / with / }).count()).toBeLessThanOrEqual(3 * 8);
-    await moveDay.getByRole('button', { name: / with / }).first().click();
+    await moveDay
+      .getByRole('button', { name: / with / })
+      .first()
+      .click();
     const moveBox = (await page.getByRole('button', { name: 'Move to this time' }).boundingBox())!;
     expect(moveBox.y + moveBox.height).toBeLessThanOrEqual(812);
     await page.getByRole('button', { name: 'Keep the current time' }).click();
     await page.getByRole('button', { name: 'Cancel booking' }).first().click();
-    await page.getByText(/deposit is (refunded|kept)/).first().waitFor(); // the rule is shown before confirming
+    await page
+      .getByText(/deposit is (refunded|kept)/)
+      .first()
+      .waitFor(); // the rule is shown before confirming
     const [cancelled] = await Promise.all([
       page.waitForResponse((r) => r.url().includes('/cancel') && r.request().method() === 'POST'),
       page.getByRole('button', { name: 'Confirm cancellation' }).click(),
     ]);
     expect(cancelled.status()).toBe(200);
     // The cancelled booking moves to its own list, with what became of the deposit.
-    await page.getByRole('region', { name: 'Cancelled' }).getByText(/deposit .+, (refunded|kept by the salon)/).first().waitFor();
+    await page
+      .getByRole('region', { name: 'Cancelled' })
+      .getByText(/deposit .+, (refunded|kept by the salon)/)
+      .first()
+      .waitFor();
     await expectAccessible(page);
     await screenshot(page, 'client-cancelled', false);
     await page.goto(`${baseUrl()}/me/hair`);
@@ -168,7 +195,12 @@ describe('a new client on a phone', () => {
     await screenshot(page, 'client-hair-history', true);
     // Leaving with unsaved answers asks first; staying keeps them.
     await page.getByLabel('Your hair colour now').fill('Copper, now fading to orange');
-    const asked = new Promise<string>((resolve) => page.once('dialog', (d) => { resolve(d.message()); void d.dismiss(); }));
+    const asked = new Promise<string>((resolve) =>
+      page.once('dialog', (d) => {
+        resolve(d.message());
+        void d.dismiss();
+      }),
+    );
     await page.getByRole('link', { name: 'My bookings' }).first().click();
     expect(await asked).toMatch(/not saved yet/);
     expect(page.url()).toMatch(/\/me\/hair$/);
@@ -191,23 +223,36 @@ describe('a signed-in client at a desk-size screen', () => {
       const consultation = salon.services.find((s: { name: string }) => s.name === 'Colour consultation');
       // Texts and e-mail for this client (the demo gives some clients e-mail only, depending on the order it makes them in).
       const prefs = await (await page.request.get(`${baseUrl()}${messagesApi.myPreferences.path}`)).json();
-      expect(await apiWrite(page, 'PUT', messagesApi.myPreferences.path, { phone: prefs.phone, messageChannel: 'both', marketingOptIn: prefs.marketingOptIn })).toBe(200);
+      expect(
+        await apiWrite(page, 'PUT', messagesApi.myPreferences.path, { phone: prefs.phone, messageChannel: 'both', marketingOptIn: prefs.marketingOptIn }),
+      ).toBe(200);
       const bookPath = `${baseUrl()}/salon/kestrel-and-pine/book?service=${consultation.id}`;
 
       // A photo from before this booking.
       await page.goto(`${baseUrl()}/me/hair`);
-      await page.getByRole('region', { name: 'Your hair now' }).getByLabel('Add photos').setInputFiles({ name: 'now.jpg', mimeType: 'image/jpeg', buffer: await makeImage('jpeg') });
+      await page
+        .getByRole('region', { name: 'Your hair now' })
+        .getByLabel('Add photos')
+        .setInputFiles({ name: 'now.jpg', mimeType: 'image/jpeg', buffer: await makeImage('jpeg') });
       await page.getByText('Photo added.').waitFor();
 
       await page.goto(bookPath);
       await page.getByRole('heading', { name: 'Choose a time' }).waitFor();
       // Signed in already: no "Sign in" step in the progress list.
       expect(await page.getByRole('navigation', { name: 'Booking steps' }).getByRole('listitem').allInnerTexts()).toEqual([
-        '1. Choose a time', '2. Your details', '3. Before you pay', '4. Deposit',
+        '1. Choose a time',
+        '2. Your details',
+        '3. Before you pay',
+        '4. Deposit',
       ]);
       // The consultation is colour work: Lee Tanaka cuts only (demo catalogue) and is not offered.
       expect(await page.getByLabel('Stylist').locator('option').allInnerTexts()).toEqual(['Any stylist', 'Ana Moreno', 'Marcus Bell']);
-      await (await openBusiestDay(page)).getByRole('button', { name: / with / }).first().click();
+      await (
+        await openBusiestDay(page)
+      )
+        .getByRole('button', { name: / with / })
+        .first()
+        .click();
       await screenshot(page, 'client-choose-time-desktop');
       await page.getByRole('button', { name: 'Hold this time' }).click();
       await page.getByRole('heading', { name: 'Your details' }).waitFor();
@@ -240,20 +285,30 @@ describe('a signed-in client at a desk-size screen', () => {
       await waiting.getByRole('button', { name: 'Release this time' }).click();
       await waiting.waitFor({ state: 'detached' });
       const date = DateTime.fromISO(held.start, { zone: 'America/Denver' }).toISODate();
-      const free = await (await tab.request.get(`${baseUrl()}/api/public/salons/kestrel-and-pine/availability?serviceId=${consultation.id}&from=${date}`)).json();
+      const free = await (
+        await tab.request.get(`${baseUrl()}/api/public/salons/kestrel-and-pine/availability?serviceId=${consultation.id}&from=${date}`)
+      ).json();
       expect(free.times.map((x: { start: string }) => Date.parse(x.start))).toContain(Date.parse(held.start));
       await tab.close();
       await page.reload();
       await page.getByRole('button', { name: 'Pick a time again' }).click();
 
-      await (await openBusiestDay(page)).getByRole('button', { name: / with / }).first().click();
+      await (
+        await openBusiestDay(page)
+      )
+        .getByRole('button', { name: / with / })
+        .first()
+        .click();
       await page.getByRole('button', { name: 'Hold this time' }).click();
       await saveDetails(page);
       for (const box of await page.getByRole('checkbox').all()) await box.check();
       await page.getByRole('button', { name: 'Accept and continue' }).click();
       await payDeclinedThenPaid(page);
       // The text waits for the end of quiet hours and the page says when (salon time), not that it was sent.
-      const note = await page.getByRole('status').filter({ hasText: /confirmation/ }).innerText();
+      const note = await page
+        .getByRole('status')
+        .filter({ hasText: /confirmation/ })
+        .innerText();
       const until = DateTime.fromISO(now.plus({ hours: 2 }).toISO()!, { zone: 'America/Denver' }).startOf('minute');
       expect(note).toContain(`The confirmation text goes at ${until.toLocaleString(DateTime.TIME_SIMPLE)}`);
       expect(note).toMatch(/the salon sends no texts between/);

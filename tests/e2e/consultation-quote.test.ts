@@ -48,7 +48,10 @@ describe('consultation to quote to booking', () => {
     expect(steps[dry].label).toBe('Blow-dry');
     await sittingOne.getByRole('listitem').nth(lightener).getByLabel('Minutes').fill('95');
     await stylist.getByRole('button', { name: 'Save consultation and quote' }).click();
-    await sittingOne.getByText(/lightener may be on the hair at most 50 min/).first().waitFor();
+    await sittingOne
+      .getByText(/lightener may be on the hair at most 50 min/)
+      .first()
+      .waitFor();
     await shot(stylist, 'stylist-quote-limit');
     // Put it back; edit the blow-dry instead, and a rounder price and deposit.
     await sittingOne.getByRole('listitem').nth(lightener).getByLabel('Minutes').fill(String(steps[lightener].minutes));
@@ -142,7 +145,10 @@ describe('mix log', () => {
     const saved = await written;
     expect(saved.status()).toBe(201);
     // The form's default bowl, 30 g lightener and 60 g developer, is saved as exactly those parts.
-    expect((await saved.json()).grams).toEqual([{ kind: 'lightener', part: '', grams: 30 }, { kind: 'developer', part: '', grams: 60 }]);
+    expect((await saved.json()).grams).toEqual([
+      { kind: 'lightener', part: '', grams: 30 },
+      { kind: 'developer', part: '', grams: 60 },
+    ]);
     const used = page.getByRole('region', { name: 'Sitting 1' });
     await used.getByText(/Product used:/).waitFor();
     await used.getByText(/^Lightener 30 g/).waitFor();
@@ -159,7 +165,10 @@ describe('mix log', () => {
     await page.getByRole('button', { name: 'Repeat last time' }).click();
     expect(await (await repeated).json()).toMatchObject({ copied: 1 });
     await page.getByText(/Copied 1 bowls/).waitFor();
-    await page.getByText(/Blue powder lightener/).first().waitFor();
+    await page
+      .getByText(/Blue powder lightener/)
+      .first()
+      .waitFor();
     await page.context().close();
   });
 

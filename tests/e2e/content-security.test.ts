@@ -16,7 +16,10 @@ describe('the built app shell', () => {
     }
     expect(html).not.toMatch(/\son[a-z]+=/i);
     const csp = res.headers.get('content-security-policy') ?? '';
-    const scriptSrc = csp.split(';').map((d) => d.trim()).find((d) => d.startsWith('script-src '));
+    const scriptSrc = csp
+      .split(';')
+      .map((d) => d.trim())
+      .find((d) => d.startsWith('script-src '));
     expect(scriptSrc).toBe("script-src 'self'");
   });
 });

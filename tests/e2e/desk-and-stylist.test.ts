@@ -22,7 +22,10 @@ describe('front desk', () => {
     await page.getByRole('link', { name: 'Book a service' }).first().click();
     await page.getByRole('heading', { level: 1, name: 'Book a service' }).waitFor();
     await page.getByLabel('Client').fill('Priya');
-    await page.getByRole('list', { name: 'Matching clients' }).getByRole('button', { name: /Priya Raman/ }).click();
+    await page
+      .getByRole('list', { name: 'Matching clients' })
+      .getByRole('button', { name: /Priya Raman/ })
+      .click();
     await page.getByLabel('Service').selectOption({ label: 'Colour correction (two sittings)' });
     const nextWeek = DateTime.now().setZone('America/Denver').plus({ days: 7 }).toISODate()!;
     await page.getByLabel('Earliest date').fill(nextWeek);
@@ -33,7 +36,10 @@ describe('front desk', () => {
     await shot(page, 'desk-options');
     await options.first().getByRole('button', { name: 'Book this' }).click();
     await page.getByRole('heading', { level: 1, name: 'Priya Raman · Colour correction (two sittings)' }).waitFor();
-    await page.getByText(/Sitting 2 of 2/i).first().waitFor();
+    await page
+      .getByText(/Sitting 2 of 2/i)
+      .first()
+      .waitFor();
     const seconds = (Date.now() - started) / 1000;
     expect(seconds).toBeLessThan(60);
     await page.getByRole('heading', { name: 'History' }).waitFor();
@@ -58,7 +64,10 @@ describe('stylist', () => {
     await page.getByRole('heading', { level: 1, name: 'My day' }).waitFor();
     await page.getByRole('heading', { name: 'Hands-free windows' }).waitFor();
     await shot(page, 'stylist-day');
-    const card = page.getByRole('article', { name: /^Hands free/ }).filter({ hasText: /Standby: (?!nobody)/ }).first();
+    const card = page
+      .getByRole('article', { name: /^Hands free/ })
+      .filter({ hasText: /Standby: (?!nobody)/ })
+      .first();
     await card.getByRole('button', { name: 'Fill window' }).click();
     const bookButton = card.getByRole('button', { name: /^Book (?!walk-in)/ }).first();
     const name = ((await bookButton.textContent()) ?? '').replace(/^Book /, '').trim();

@@ -14,7 +14,15 @@ afterAll(() => browser.close());
 
 const ZONE = 'America/Denver';
 type Sitting = { seq: number; start: string; end: string; chairName: string };
-type Booking = { id: string; status: string; depositCents: number; client: { id: string; name: string }; service: { id: string; name: string }; stylist: { id: string; name: string }; sittings: Sitting[] };
+type Booking = {
+  id: string;
+  status: string;
+  depositCents: number;
+  client: { id: string; name: string };
+  service: { id: string; name: string };
+  stylist: { id: string; name: string };
+  sittings: Sitting[];
+};
 type FreeTime = { start: string };
 
 const apiAnswer = (page: Page, method: string, path: RegExp) =>
@@ -80,7 +88,11 @@ describe('the desk week', () => {
     expect(await page.locator(`th[data-date="${date}"]`).count()).toBe(1);
 
     // Dragged to the evening, past the stylist's hours: refused, with the engine's reason, and the sitting stays.
-    const late = Math.round(DateTime.fromISO(was.start, { zone: ZONE }).set({ hour: 20, minute: 0 }).diff(DateTime.fromISO(was.start, { zone: ZONE }), 'minutes').minutes / 30);
+    const late = Math.round(
+      DateTime.fromISO(was.start, { zone: ZONE })
+        .set({ hour: 20, minute: 0 })
+        .diff(DateTime.fromISO(was.start, { zone: ZONE }), 'minutes').minutes / 30,
+    );
     const refused = apiAnswer(page, 'POST', /\/move$/);
     await dragBy(page, event, late);
     expect((await refused).status()).toBe(409);
@@ -133,7 +145,8 @@ describe('moving and cancelling on the booking page, on a phone', () => {
     await page.setViewportSize({ width: 375, height: 812 });
     // A booking of Ana's with a deposit, more than 48 hours ahead (the demo's cancellation window), with a free time
     // clear of its own sitting (where a blow-dry can take Ana's hands) and another free time 90 minutes from that one.
-    const clear = (b: Booking, t: FreeTime) => Date.parse(t.start) >= Date.parse(b.sittings[0].end) || Date.parse(t.start) + 90 * 60_000 <= Date.parse(b.sittings[0].start);
+    const clear = (b: Booking, t: FreeTime) =>
+      Date.parse(t.start) >= Date.parse(b.sittings[0].end) || Date.parse(t.start) + 90 * 60_000 <= Date.parse(b.sittings[0].start);
     const apart = (a: FreeTime, b: FreeTime) => Math.abs(Date.parse(a.start) - Date.parse(b.start)) >= 90 * 60_000;
     const { booking, times } = await findBooking(
       page,
@@ -159,7 +172,14 @@ describe('moving and cancelling on the booking page, on a phone', () => {
     const { token } = await getJson(page, '/api/csrf');
     const taken = await page.request.post(`${baseUrl()}/api/bookings`, {
       headers: { 'X-CSRF-Token': token },
-      data: { clientId: clients[0].id, serviceId: blowDry.id, stepPlan: blowDry.stepPlan, stylistId: booking.stylist.id, start: target.start, idempotencyKey: `desk-moves-e2e-${Date.now()}` },
+      data: {
+        clientId: clients[0].id,
+        serviceId: blowDry.id,
+        stepPlan: blowDry.stepPlan,
+        stylistId: booking.stylist.id,
+        start: target.start,
+        idempotencyKey: `desk-moves-e2e-${Date.now()}`,
+      },
     });
     expect(taken.status(), await taken.text()).toBe(201);
     const refused = apiAnswer(page, 'POST', /\/move$/);
@@ -202,7 +222,10 @@ describe('moving and cancelling on the booking page, on a phone', () => {
     await page.goto(`${baseUrl()}/desk/clients/${booking.client.id}`);
     const list = page.getByRole('region', { name: 'Cancelled' });
     await list.getByText(booking.service.name).first().waitFor();
-    await list.getByText(/deposit .+, refunded/).first().waitFor();
+    await list
+      .getByText(/deposit .+, refunded/)
+      .first()
+      .waitFor();
     await page.context().close();
   });
 });

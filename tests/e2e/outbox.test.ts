@@ -14,7 +14,10 @@ it('a booking made at the desk shows its confirmation in the Outbox', async () =
   await page.getByRole('link', { name: 'Book a service' }).first().click();
   await page.getByRole('heading', { level: 1, name: 'Book a service' }).waitFor();
   await page.getByLabel('Client').fill('Hollis');
-  await page.getByRole('list', { name: 'Matching clients' }).getByRole('button', { name: /Hollis Grant/ }).click();
+  await page
+    .getByRole('list', { name: 'Matching clients' })
+    .getByRole('button', { name: /Hollis Grant/ })
+    .click();
   await page.getByLabel('Service').selectOption({ label: 'Cut & finish' });
   const later = DateTime.now().setZone('America/Denver').plus({ days: 9 }).toISODate()!;
   await page.getByLabel('Earliest date').fill(later);

@@ -18,10 +18,16 @@ async function deskOptions(page: Page, earliest: string): Promise<Option[]> {
   await page.goto(`${baseUrl()}/desk/book`);
   await page.getByRole('heading', { level: 1, name: 'Book a service' }).waitFor();
   await page.getByLabel('Client').fill('Priya');
-  await page.getByRole('list', { name: 'Matching clients' }).getByRole('button', { name: /Priya Raman/ }).click();
+  await page
+    .getByRole('list', { name: 'Matching clients' })
+    .getByRole('button', { name: /Priya Raman/ })
+    .click();
   await page.getByLabel('Service').selectOption({ label: 'Blow-dry' });
   await page.getByLabel('Earliest date').fill(earliest);
-  const [response] = await Promise.all([page.waitForResponse((r) => r.url().includes('/api/booking-options')), page.getByRole('button', { name: 'Find times' }).click()]);
+  const [response] = await Promise.all([
+    page.waitForResponse((r) => r.url().includes('/api/booking-options')),
+    page.getByRole('button', { name: 'Find times' }).click(),
+  ]);
   expect(response.status()).toBe(200);
   return (await response.json()).options;
 }
@@ -39,7 +45,11 @@ describe('owner set-up', () => {
     await signInThroughPage(page, 'owner@demo.test', DEMO_PASSWORD);
     await page.waitForURL(`${baseUrl()}/owner**`);
     const originalSettings = await (await page.request.get(`${baseUrl()}${setupPaths.salon}`)).json();
-    const services = (await (await page.request.get(`${baseUrl()}${setupPaths.services}`)).json()).services as { id: string; name: string; [k: string]: unknown }[];
+    const services = (await (await page.request.get(`${baseUrl()}${setupPaths.services}`)).json()).services as {
+      id: string;
+      name: string;
+      [k: string]: unknown;
+    }[];
     const blowDry = services.find((s) => s.name === 'Blow-dry')!;
 
     const { id: _id, active: _active, futureBookings: _future, depositPercent, ...rest } = blowDry;
@@ -57,7 +67,10 @@ describe('owner set-up', () => {
       expect(await tue.getAttribute('aria-pressed')).toBe('true');
       await tue.click();
       await expect.poll(() => page.getByLabel('Rule of hours line 1').inputValue()).toBe('FREQ=WEEKLY;BYDAY=WE,TH,FR,SA');
-      await page.getByText(/^Next dates:/).filter({ hasNotText: /Tue / }).waitFor();
+      await page
+        .getByText(/^Next dates:/)
+        .filter({ hasNotText: /Tue / })
+        .waitFor();
       // A closed date (a holiday) on a Wednesday: it once took the public page down with a 500.
       const closedWednesday = DateTime.fromISO(tuesday).plus({ days: 1 });
       await page.getByLabel('Closed on (holiday or exception)').fill(closedWednesday.toISODate()!);
@@ -83,7 +96,10 @@ describe('owner set-up', () => {
       await page.getByLabel('Minutes of step 2').fill('15');
       // A new step names what it puts on the hair; nothing is chosen for it, so a colour step is never left at "nothing".
       await page.getByLabel('What step 2 puts on the hair').selectOption('none');
-      const [saved] = await Promise.all([page.waitForResponse((r) => r.url().includes(setupPaths.service(blowDry.id))), page.getByRole('button', { name: 'Save the service' }).click()]);
+      const [saved] = await Promise.all([
+        page.waitForResponse((r) => r.url().includes(setupPaths.service(blowDry.id))),
+        page.getByRole('button', { name: 'Save the service' }).click(),
+      ]);
       expect(saved.status()).toBe(200);
       await page.getByRole('region', { name: 'Services', exact: true }).waitFor();
 
@@ -98,7 +114,6 @@ describe('owner set-up', () => {
       await page.getByRole('heading', { name: 'Deactivate Ana Moreno' }).waitFor();
       await page.getByRole('list', { name: 'Future bookings of Ana Moreno' }).waitFor();
       await screenshot(page, 'owner-setup-staff', true);
-
     } finally {
       // Put the shared demo salon back for the other journeys.
       await apiPut(page, setupPaths.salon, originalSettings);

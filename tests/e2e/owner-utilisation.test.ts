@@ -24,7 +24,11 @@ it('the owner opens Utilisation on the demo salon: charts, their tables, a CSV d
   await page.getByText('Chair occupancy', { exact: true }).first().waitFor();
   expect(await page.locator('dl').first().innerText()).toContain(shown);
   // The heat map chart is drawn, and its table holds one row per open weekday-hour.
-  await page.getByRole('img', { name: /Heat map of chair occupancy/ }).getByText(/^\d+%$/).first().waitFor();
+  await page
+    .getByRole('img', { name: /Heat map of chair occupancy/ })
+    .getByText(/^\d+%$/)
+    .first()
+    .waitFor();
   const heatTable = page.getByRole('region', { name: 'Chair occupancy by weekday and hour' });
   expect(await heatTable.locator('tbody tr').count()).toBe(api.heatMap.length);
   // The stylist bars and their table: the demo salon's three stylists.

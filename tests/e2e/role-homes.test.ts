@@ -26,7 +26,11 @@ describe('each demo role signs in through the page and lands on its own home', (
       await page.waitForURL(`${baseUrl()}${role.path}**`);
       await page.getByRole('heading', { level: 1, name: role.heading }).waitFor();
       await page.getByText(role.shows).first().waitFor();
-      if (role.path === '/owner') await page.getByText(/^\d+(\.\d)?\s?%$/).first().waitFor(); // occupancy from the engine
+      if (role.path === '/owner')
+        await page
+          .getByText(/^\d+(\.\d)?\s?%$/)
+          .first()
+          .waitFor(); // occupancy from the engine
       await screenshot(page, `${role.path.slice(1)}-home`, role.path === '/owner' || role.path === '/me');
       // WCAG 2.x A/AA rules through axe-core (Deque), the reference checker for automated accessibility tests.
       const axe = await new AxeBuilder({ page }).withTags(['wcag2a', 'wcag2aa', 'wcag22aa']).analyze();
@@ -50,7 +54,10 @@ describe('each demo role signs in through the page and lands on its own home', (
     const page = await context.newPage();
     await signInThroughPage(page, 'client@demo.test', DEMO_PASSWORD);
     await page.waitForURL(`${baseUrl()}/me**`);
-    await page.getByText(/Sitting 2 of 2/i).first().waitFor();
+    await page
+      .getByText(/Sitting 2 of 2/i)
+      .first()
+      .waitFor();
     await context.close();
   });
 });

@@ -15,8 +15,14 @@ it('after a failed strand test the quote plans no lightener, and adding it asks 
   const recorded = await page.request.post(`${baseUrl()}/api/clients/${cyrus.id}/strand-tests`, {
     headers: { 'X-CSRF-Token': token },
     data: {
-      testedAt: new Date(Date.now() - 86_400_000).toISOString(), tested: 'Lightener 1:2 with 6 % on a nape strand', productType: 'lightener',
-      developerPercent: 6, minutes: 30, result: 'failed', notes: 'The strand stretched and broke', photoId: null,
+      testedAt: new Date(Date.now() - 86_400_000).toISOString(),
+      tested: 'Lightener 1:2 with 6 % on a nape strand',
+      productType: 'lightener',
+      developerPercent: 6,
+      minutes: 30,
+      result: 'failed',
+      notes: 'The strand stretched and broke',
+      photoId: null,
     },
   });
   expect(recorded.status()).toBe(201);
@@ -46,7 +52,10 @@ it('after a failed strand test the quote plans no lightener, and adding it asks 
   await page.getByLabel(`What step ${count} puts on the hair`).selectOption('lightener');
   await page.getByLabel(`Minutes of step ${count}`).fill('20');
   await page.getByRole('button', { name: 'Save consultation and quote' }).click();
-  await page.getByText(/at least 10 characters\)\.$/).first().waitFor();
+  await page
+    .getByText(/at least 10 characters\)\.$/)
+    .first()
+    .waitFor();
   await screenshot(page, 'stylist-quote-strand-gate', true);
   await reason.fill('Client accepts the risk after two bond treatments; mid-lengths only, checked every 5 minutes.');
   const saved = page.waitForResponse((r) => r.request().method() === 'POST' && new URL(r.url()).pathname === '/api/consultations');
@@ -54,6 +63,8 @@ it('after a failed strand test the quote plans no lightener, and adding it asks 
   const body = await (await saved).json();
   expect(body.quote.overrideReason).toBe('Client accepts the risk after two bond treatments; mid-lengths only, checked every 5 minutes.');
   await page.getByRole('heading', { level: 1, name: /^Quote for / }).waitFor();
-  await expect.poll(() => page.getByLabel('Reason to lighten or remove colour despite the failed strand test').inputValue()).toMatch(/^Client accepts the risk/);
+  await expect
+    .poll(() => page.getByLabel('Reason to lighten or remove colour despite the failed strand test').inputValue())
+    .toMatch(/^Client accepts the risk/);
   await page.context().close();
 });

@@ -16,8 +16,7 @@ import { exists, localText, seededRng } from './scenario-generator';
 import { smallScenario } from './small-scenarios';
 
 const seeds = fc.integer({ min: 1, max: 2 ** 31 - 1 });
-const enginePairs = (s: Scenario) =>
-  planOptions(s).options.map((o) => ({ stylist: o.stylist, start: isoToUtc(o.sittings[0].steps[0].start) }));
+const enginePairs = (s: Scenario) => planOptions(s).options.map((o) => ({ stylist: o.stylist, start: isoToUtc(o.sittings[0].steps[0].start) }));
 
 function expectedPairs(all: ReturnType<typeof referencePairs>, spread: 'day' | 'none', limit: number) {
   const seen = new Set<string>();
@@ -78,7 +77,7 @@ function extraBooking(s: Scenario, seed: number): Scenario['bookings'][number] |
   const rng = seededRng(seed);
   const g = s.granularityMinutes;
   const from = Date.parse(`${s.horizon.from}T00:00:00Z`) / 60_000;
-  const start = from + Math.floor(rng() * 2 * 1440 / g) * g;
+  const start = from + Math.floor((rng() * 2 * 1440) / g) * g;
   const kinds = ['hands_on', 'developing', 'basin'] as const;
   const steps = [];
   let t = start;
@@ -90,7 +89,9 @@ function extraBooking(s: Scenario, seed: number): Scenario['bookings'][number] |
     t = end;
   }
   return {
-    id: 'extra', stylist: s.stylists[Math.floor(rng() * s.stylists.length)].id, chair: s.chairs[Math.floor(rng() * s.chairs.length)].id,
+    id: 'extra',
+    stylist: s.stylists[Math.floor(rng() * s.stylists.length)].id,
+    chair: s.chairs[Math.floor(rng() * s.chairs.length)].id,
     steps: steps as Scenario['bookings'][number]['steps'],
   };
 }
@@ -146,7 +147,9 @@ describe('booking engine properties', () => {
         const [first] = planOptions(s).options;
         if (!first) return;
         const booked = first.sittings.map((sitting, k) => ({
-          id: `new-${k}`, stylist: first.stylist, chair: sitting.chair,
+          id: `new-${k}`,
+          stylist: first.stylist,
+          chair: sitting.chair,
           steps: sitting.steps.map((step) => ({ ...step, start: wall(step.start), end: wall(step.end) })),
         })) as Scenario['bookings'];
         // The scenario's local-time format cannot name the second of two ambiguous wall times.

@@ -11,7 +11,9 @@ import { measureOccupancy, parseScenario, planOptions } from '@shared/engine/eng
 function scenario(zone: string, date: string, extra: Record<string, unknown> = {}) {
   const next = new Date(Date.parse(`${date}T00:00:00Z`) + 86_400_000).toISOString().slice(0, 10);
   return parseScenario({
-    timeZone: zone, granularityMinutes: 15, horizon: { from: date, to: next },
+    timeZone: zone,
+    granularityMinutes: 15,
+    horizon: { from: date, to: next },
     salonHours: [{ rrule: 'FREQ=DAILY', start: '00:00', end: '24:00' }],
     stylists: [{ id: 'ana', skills: ['colour'], hours: [{ rrule: 'FREQ=DAILY', start: '00:00', end: '24:00' }] }],
     chairs: [{ id: 'c1' }],
@@ -21,8 +23,18 @@ function scenario(zone: string, date: string, extra: Record<string, unknown> = {
 
 // A 4-hour sitting (real minutes) from local midnight: 30 hands_on, 180 developing, 30 hands_on.
 const longSitting = (date: string) => ({
-  skill: 'colour', earliest: `${date}T00:00`, limit: 1,
-  sittings: [{ steps: [{ kind: 'hands_on', minutes: 30 }, { kind: 'developing', minMinutes: 180, maxMinutes: 180 }, { kind: 'hands_on', minutes: 30 }] }],
+  skill: 'colour',
+  earliest: `${date}T00:00`,
+  limit: 1,
+  sittings: [
+    {
+      steps: [
+        { kind: 'hands_on', minutes: 30 },
+        { kind: 'developing', minMinutes: 180, maxMinutes: 180 },
+        { kind: 'hands_on', minutes: 30 },
+      ],
+    },
+  ],
 });
 
 const cases: Array<[zone: string, date: string, dayHours: number, start: string, end: string]> = [
@@ -83,7 +95,8 @@ describe('local times that are not one instant (RFC 5545 §3.3.5)', () => {
   });
 
   it('an explicit date-time inside the gap is rejected, naming the field', () => {
-    expect(() => scenario('America/Denver', '2027-03-14', { request: { ...longSitting('2027-03-14'), earliest: '2027-03-14T02:30' } }))
-      .toThrow(/request\.earliest: .*does not exist/);
+    expect(() => scenario('America/Denver', '2027-03-14', { request: { ...longSitting('2027-03-14'), earliest: '2027-03-14T02:30' } })).toThrow(
+      /request\.earliest: .*does not exist/,
+    );
   });
 });

@@ -18,8 +18,20 @@ describe('occupancy breakdown', () => {
     for (const seed of [1, 2, 3]) {
       const s = parseScenario(
         generateScenario(seededRng(seed), {
-          zone: 'America/Denver', from: '2027-03-01', days: 28, granularity: 5, stylists: 5, colourStylists: 3, chairs: 4, basins: 2, bookings: 300,
-          salonHours: [540, 1260], stylistStarts: [540, 600], stylistEnds: [1080, 1200], timeOffChance: 0.5, maxClients: [1, 2, 3],
+          zone: 'America/Denver',
+          from: '2027-03-01',
+          days: 28,
+          granularity: 5,
+          stylists: 5,
+          colourStylists: 3,
+          chairs: 4,
+          basins: 2,
+          bookings: 300,
+          salonHours: [540, 1260],
+          stylistStarts: [540, 600],
+          stylistEnds: [1080, 1200],
+          timeOffChance: 0.5,
+          maxClients: [1, 2, 3],
         }),
       );
       const cuts = ['2027-03-01', '2027-03-08', '2027-03-15', '2027-03-22', '2027-03-29'];
@@ -40,7 +52,9 @@ describe('occupancy breakdown', () => {
   it('puts minutes into local weekday × hour cells', () => {
     // 2027-03-02 is a Tuesday (ISO weekday 2). Salon 09:00-11:00, one chair held 09:30-10:15.
     const s = parseScenario({
-      timeZone: 'America/Denver', granularityMinutes: 15, horizon: { from: '2027-03-02', to: '2027-03-03' },
+      timeZone: 'America/Denver',
+      granularityMinutes: 15,
+      horizon: { from: '2027-03-02', to: '2027-03-03' },
       salonHours: [{ rrule: 'FREQ=DAILY', start: '09:00', end: '11:00' }],
       stylists: [{ id: 'ana', hours: [{ rrule: 'FREQ=DAILY', start: '09:00', end: '11:00' }] }],
       chairs: [{ id: 'c1' }, { id: 'c2' }],
@@ -55,7 +69,14 @@ describe('occupancy breakdown', () => {
   });
 
   it('refuses cut dates outside the horizon, naming them', () => {
-    const s = parseScenario({ timeZone: 'UTC', granularityMinutes: 15, horizon: { from: '2027-03-02', to: '2027-03-03' }, salonHours: [], stylists: [], chairs: [] });
+    const s = parseScenario({
+      timeZone: 'UTC',
+      granularityMinutes: 15,
+      horizon: { from: '2027-03-02', to: '2027-03-03' },
+      salonHours: [],
+      stylists: [],
+      chairs: [],
+    });
     expect(() => breakDownOccupancy(s, ['2027-03-05'])).toThrow(/cuts\[0\]/);
   });
 });

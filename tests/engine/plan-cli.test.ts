@@ -6,8 +6,7 @@ import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 
 const root = join(__dirname, '..', '..');
-const run = (...args: string[]) =>
-  spawnSync('npx', ['tsx', 'server/ops/plan-cli.ts', ...args], { cwd: root, encoding: 'utf8', timeout: 60_000 });
+const run = (...args: string[]) => spawnSync('npx', ['tsx', 'server/ops/plan-cli.ts', ...args], { cwd: root, encoding: 'utf8', timeout: 60_000 });
 
 describe('plan CLI', () => {
   it('prints the options of the two-sitting Denver correction as one JSON object', () => {

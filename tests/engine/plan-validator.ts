@@ -64,10 +64,11 @@ export function validateOption(s: Scenario, option: Option): string[] {
     if (sitting.steps.length !== spec.steps.length) return at('wrong number of steps');
     const times = sitting.steps.map((x): Range => [isoToUtc(x.start), isoToUtc(x.end)]);
     // Printed local time must be the zone's wall clock at that instant (rule 9).
-    for (const x of sitting.steps) for (const iso of [x.start, x.end]) {
-      const shown = DateTime.fromISO(iso, { setZone: true });
-      if (shown.offset !== DateTime.fromMillis(shown.toMillis(), { zone }).offset) at(`${iso} has the wrong offset`);
-    }
+    for (const x of sitting.steps)
+      for (const iso of [x.start, x.end]) {
+        const shown = DateTime.fromISO(iso, { setZone: true });
+        if (shown.offset !== DateTime.fromMillis(shown.toMillis(), { zone }).offset) at(`${iso} has the wrong offset`);
+      }
     const whole: Range = [times[0][0], times[times.length - 1][1]];
     const day = localDay(whole[0], zone);
     if (DateTime.fromMillis(whole[0] * 60_000, { zone }).minute % g !== 0) at('start is off the grid');
@@ -85,17 +86,20 @@ export function validateOption(s: Scenario, option: Option): string[] {
     for (const b of s.bookings) if (b.chair === sitting.chair && overlaps(span(b), whole)) at(`rule 2: chair held by ${b.id}`);
     sitting.steps.forEach((step, i) => {
       if (step.kind === 'developing') return;
-      for (const b of mine) for (const other of b.steps) {
-        const o: Range = [localToUtc(other.start, zone), localToUtc(other.end, zone)];
-        // Rule 4: hands_on/basin never overlap the stylist's other hands work.
-        if (other.kind !== 'developing' && overlaps(o, times[i])) at(`rule 4: hands overlap ${b.id}`);
-      }
+      for (const b of mine)
+        for (const other of b.steps) {
+          const o: Range = [localToUtc(other.start, zone), localToUtc(other.end, zone)];
+          // Rule 4: hands_on/basin never overlap the stylist's other hands work.
+          if (other.kind !== 'developing' && overlaps(o, times[i])) at(`rule 4: hands overlap ${b.id}`);
+        }
       if (step.kind === 'basin') {
         // Rule 3: one client per basin, whoever their stylist is.
         if (!s.basins.some((x) => x.id === step.basin)) at(`rule 3: unknown basin ${step.basin}`);
-        for (const b of s.bookings) for (const other of b.steps) {
-          if (other.kind === 'basin' && other.basin === step.basin && overlaps([localToUtc(other.start, zone), localToUtc(other.end, zone)], times[i])) at(`rule 3: basin used by ${b.id}`);
-        }
+        for (const b of s.bookings)
+          for (const other of b.steps) {
+            if (other.kind === 'basin' && other.basin === step.basin && overlaps([localToUtc(other.start, zone), localToUtc(other.end, zone)], times[i]))
+              at(`rule 3: basin used by ${b.id}`);
+          }
       }
     });
     // Rule 5: the most clients at once happens at the sitting's start or at another client's arrival.

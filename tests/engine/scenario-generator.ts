@@ -105,13 +105,17 @@ function placeBookings(rng: Rng, o: GeneratorOptions, stylists: Array<{ id: stri
   const clients = stylists.map(() => new Uint8Array(size));
   const chairUse = Array.from({ length: chairs }, () => new Uint8Array(size));
   const basinUse = Array.from({ length: basins }, () => new Uint8Array(size));
-  const free = (arr: Uint8Array, a: number, b: number, cap = 1) => { for (let i = a; i < b; i++) if (arr[i] >= cap) return false; return true; };
+  const free = (arr: Uint8Array, a: number, b: number, cap = 1) => {
+    for (let i = a; i < b; i++) if (arr[i] >= cap) return false;
+    return true;
+  };
   const out: GeneratedBooking[] = [];
   for (let n = 0, tries = 0; n < o.bookings && tries < o.bookings * 20; tries++) {
     const si = Math.floor(rng() * stylists.length);
     const open = Math.floor(o.salonHours[0] / g) * g;
     const start = between(rng, 0, o.days - 1) * 1440 + open + Math.floor((rng() * (o.salonHours[1] - open)) / g) * g;
-    const kinds: Kind[] = rng() < 0.6 ? ['hands_on', 'developing', 'basin'] : pick(rng, [['hands_on'], ['hands_on', 'developing', 'hands_on'], ['basin', 'hands_on']] as Kind[][]);
+    const kinds: Kind[] =
+      rng() < 0.6 ? ['hands_on', 'developing', 'basin'] : pick(rng, [['hands_on'], ['hands_on', 'developing', 'hands_on'], ['basin', 'hands_on']] as Kind[][]);
     const steps: Array<{ kind: Kind; a: number; b: number; basin?: number }> = [];
     let t = start;
     for (const kind of kinds) {
@@ -124,20 +128,34 @@ function placeBookings(rng: Rng, o: GeneratorOptions, stylists: Array<{ id: stri
     if (!free(chairUse[ci], start, t) || !free(clients[si], start, t, stylists[si].maxClientsAtOnce)) continue;
     if (!steps.every((s) => s.kind === 'developing' || free(hands[si], s.a, s.b))) continue;
     let ok = true;
-    for (const s of steps) if (s.kind === 'basin') {
-      const bi = basinUse.findIndex((u) => free(u, s.a, s.b));
-      if (bi < 0) ok = false;
-      else s.basin = bi;
-    }
+    for (const s of steps)
+      if (s.kind === 'basin') {
+        const bi = basinUse.findIndex((u) => free(u, s.a, s.b));
+        if (bi < 0) ok = false;
+        else s.basin = bi;
+      }
     if (!ok || !steps.every((s) => exists(from + s.a, o.zone) && exists(from + s.b, o.zone))) continue;
-    for (let i = start; i < t; i++) { chairUse[ci][i] = 1; clients[si][i]++; }
+    for (let i = start; i < t; i++) {
+      chairUse[ci][i] = 1;
+      clients[si][i]++;
+    }
     for (const s of steps) {
       if (s.kind !== 'developing') hands[si].fill(1, s.a, s.b);
       if (s.basin !== undefined) basinUse[s.basin].fill(1, s.a, s.b);
     }
     out.push({
-      id: `k${n++}`, stylist: stylists[si].id, chair: `c${String(ci).padStart(2, '0')}`,
-      steps: steps.map((s) => ({ kind: s.kind, start: localText(from + s.a), end: localText(from + s.b), ...(s.basin !== undefined ? { basin: `b${s.basin}` } : {}) }) as GeneratedBooking['steps'][number]),
+      id: `k${n++}`,
+      stylist: stylists[si].id,
+      chair: `c${String(ci).padStart(2, '0')}`,
+      steps: steps.map(
+        (s) =>
+          ({
+            kind: s.kind,
+            start: localText(from + s.a),
+            end: localText(from + s.b),
+            ...(s.basin !== undefined ? { basin: `b${s.basin}` } : {}),
+          }) as GeneratedBooking['steps'][number],
+      ),
     });
   }
   return out;

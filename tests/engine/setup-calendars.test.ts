@@ -14,7 +14,14 @@ describe('weekday rules written by the hours editor', () => {
     expect(everyOther).toBe('DTSTART;VALUE=DATE:19970902\nRRULE:FREQ=WEEKLY;INTERVAL=2;BYDAY=TU,TH');
     // RFC 5545 §3.8.5.3: Sep 2,4,16,18,30; Oct 2,14,16 (1997).
     expect(nextDates(everyOther, 'America/New_York', '1997-09-01', 8)).toEqual([
-      '1997-09-02', '1997-09-04', '1997-09-16', '1997-09-18', '1997-09-30', '1997-10-02', '1997-10-14', '1997-10-16',
+      '1997-09-02',
+      '1997-09-04',
+      '1997-09-16',
+      '1997-09-18',
+      '1997-09-30',
+      '1997-10-02',
+      '1997-10-14',
+      '1997-10-16',
     ]);
   });
 
@@ -40,7 +47,9 @@ describe('weekday rules written by the hours editor', () => {
 
 function scenario(): ScenarioInput {
   return {
-    timeZone: 'America/Denver', granularityMinutes: 5, horizon: { from: '2027-03-02', to: '2027-03-04' },
+    timeZone: 'America/Denver',
+    granularityMinutes: 5,
+    horizon: { from: '2027-03-02', to: '2027-03-04' },
     salonHours: [{ rrule: 'FREQ=DAILY', start: '09:00', end: '18:00' }],
     stylists: [
       { id: 'ana', skills: ['colour'], hours: [{ rrule: 'FREQ=DAILY', start: '09:00', end: '18:00' }] },
@@ -49,7 +58,14 @@ function scenario(): ScenarioInput {
     ],
     chairs: [{ id: 'c1', outOfService: [{ start: '2027-03-02T00:00', end: '2027-03-03T00:00' }] }, { id: 'c2' }],
     basins: [{ id: 'b1' }],
-    request: { skill: 'colour', stylist: 'ana', earliest: '2027-03-02T09:00', limit: 1, spread: 'none', sittings: [{ steps: [{ kind: 'hands_on', minutes: 60 }] }] },
+    request: {
+      skill: 'colour',
+      stylist: 'ana',
+      earliest: '2027-03-02T09:00',
+      limit: 1,
+      spread: 'none',
+      sittings: [{ steps: [{ kind: 'hands_on', minutes: 60 }] }],
+    },
   };
 }
 
@@ -68,7 +84,10 @@ describe('out-of-service chairs and free stylists', () => {
     const sitting = { id: 'k', stylist: 'ana', chair: 'c2', steps: [{ kind: 'hands_on' as const, start: '2027-03-02T13:00', end: '2027-03-02T14:00' }] };
     expect(findFreeStylists(s, 'colour', [sitting])).toEqual(['ana', 'bo']);
     expect(findFreeStylists(s, 'colour', [{ ...sitting, steps: [{ kind: 'hands_on', start: '2027-03-02T10:00', end: '2027-03-02T11:00' }] }])).toEqual(['ana']);
-    const busy = parseScenario({ ...scenario(), bookings: [{ id: 'x', stylist: 'bo', chair: 'c2', steps: [{ kind: 'hands_on', start: '2027-03-02T13:30', end: '2027-03-02T14:30' }] }] });
+    const busy = parseScenario({
+      ...scenario(),
+      bookings: [{ id: 'x', stylist: 'bo', chair: 'c2', steps: [{ kind: 'hands_on', start: '2027-03-02T13:30', end: '2027-03-02T14:30' }] }],
+    });
     expect(findFreeStylists(busy, 'colour', [{ ...sitting, chair: 'c1' }])).toEqual(['ana']);
   });
 });

@@ -37,7 +37,11 @@ export function smallScenario(seed: number): Scenario {
   // Now and then a longer horizon, so later sittings have several dates to choose from.
   const days = rng() < 0.12 ? between(rng, 4, 6) : between(rng, 2, 3);
   const input = generateScenario(rng, {
-    zone, from, days, granularity: g, stylists,
+    zone,
+    from,
+    days,
+    granularity: g,
+    stylists,
     colourStylists: between(rng, 1, stylists),
     chairs: between(rng, 1, 3),
     basins: between(rng, 0, 2),

@@ -3,7 +3,8 @@ import sharp from 'sharp';
 
 /** A small solid-colour image made in the test, so no binary fixtures live in the repository. */
 export function makeImage(format: 'jpeg' | 'png' | 'webp', width = 64, height = 48): Promise<Buffer> {
-  return sharp({ create: { width, height, channels: 3, background: '#8a4b2f' } })[format]().toBuffer();
+  const image = sharp({ create: { width, height, channels: 3, background: '#8a4b2f' } });
+  return image[format]().toBuffer();
 }
 
 /** A phone-style JPEG: turned by EXIF orientation 6, with a GPS position and an author tag. */

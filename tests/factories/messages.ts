@@ -22,14 +22,29 @@ export async function messageDesk(t: TestApp, salonId: string, stylistId: string
       return { ...client, phone };
     },
     async book(serviceId: string, plan: StepPlan, date: string, hhmm: string, clientId: string): Promise<string> {
-      const res = await desk$.write('post', '/api/bookings', { clientId, serviceId, stepPlan: plan, stylistId, start: localIso(date, hhmm), idempotencyKey: `mk-${date}-${hhmm}-${clientId}` });
+      const res = await desk$.write('post', '/api/bookings', {
+        clientId,
+        serviceId,
+        stepPlan: plan,
+        stylistId,
+        start: localIso(date, hhmm),
+        idempotencyKey: `mk-${date}-${hhmm}-${clientId}`,
+      });
       expect(res.status, JSON.stringify(res.body)).toBe(201);
       return res.body.id as string;
     },
-    messagesOf: (bookingId: string) => db.selectFrom('messages').selectAll().where('booking_id', '=', bookingId).orderBy('send_at').orderBy('channel').execute(),
+    messagesOf: (bookingId: string) =>
+      db.selectFrom('messages').selectAll().where('booking_id', '=', bookingId).orderBy('send_at').orderBy('channel').execute(),
     /** "kind channel instant" of every message still planned or sent for the booking. */
     async planned(bookingId: string, kind?: string) {
-      const rows = await db.selectFrom('messages').selectAll().where('booking_id', '=', bookingId).where('status', '!=', 'dropped').orderBy('send_at').orderBy('channel').execute();
+      const rows = await db
+        .selectFrom('messages')
+        .selectAll()
+        .where('booking_id', '=', bookingId)
+        .where('status', '!=', 'dropped')
+        .orderBy('send_at')
+        .orderBy('channel')
+        .execute();
       return rows.filter((m) => !kind || m.kind === kind).map((m) => `${m.kind} ${m.channel} ${m.send_at.toISOString()}`);
     },
     smsTo: (phone: string) => t.sms.messages.filter((m) => m.to === phone),

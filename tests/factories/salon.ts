@@ -18,7 +18,15 @@ export async function insertSalon(db: Db, overrides: { chairs?: number; basins?:
     .executeTakeFirstOrThrow();
   await db.insertInto('salon_hours').values({ salon_id: salonId, rrule: 'FREQ=WEEKLY;BYDAY=TU,WE,TH,FR,SA', start_time: '09:00', end_time: '21:00' }).execute();
   const names = (prefix: string, n: number) => [...Array(n).keys()].map((i) => ({ salon_id: salonId, name: `${prefix} ${i + 1}` }));
-  const chairs = await db.insertInto('chairs').values(names('Chair', overrides.chairs ?? 2)).returning('id').execute();
-  const basins = await db.insertInto('basins').values(names('Basin', overrides.basins ?? 1)).returning('id').execute();
+  const chairs = await db
+    .insertInto('chairs')
+    .values(names('Chair', overrides.chairs ?? 2))
+    .returning('id')
+    .execute();
+  const basins = await db
+    .insertInto('basins')
+    .values(names('Basin', overrides.basins ?? 1))
+    .returning('id')
+    .execute();
   return { salonId, chairs: chairs.map((c) => c.id), basins: basins.map((b) => b.id) };
 }

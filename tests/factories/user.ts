@@ -17,7 +17,12 @@ export interface UserFixture {
 }
 
 /** A user of the given role; stylists get a staff row, clients a client record. */
-export async function insertUser(db: Db, salonId: string, role: Role, overrides: { skills?: string[]; maxClientsAtOnce?: number; hours?: { rrule: string; start: string; end: string } } = {}): Promise<UserFixture> {
+export async function insertUser(
+  db: Db,
+  salonId: string,
+  role: Role,
+  overrides: { skills?: string[]; maxClientsAtOnce?: number; hours?: { rrule: string; start: string; end: string } } = {},
+): Promise<UserFixture> {
   seq++;
   const email = `${role}.${seq}.${Date.now()}@example.test`;
   const user = await db
@@ -29,7 +34,13 @@ export async function insertUser(db: Db, salonId: string, role: Role, overrides:
   if (role === 'stylist') {
     const staff = await db
       .insertInto('staff')
-      .values({ salon_id: salonId, user_id: user.id, display_name: `Stylist ${seq}`, skills: overrides.skills ?? ['colour'], max_clients_at_once: overrides.maxClientsAtOnce ?? 2 })
+      .values({
+        salon_id: salonId,
+        user_id: user.id,
+        display_name: `Stylist ${seq}`,
+        skills: overrides.skills ?? ['colour'],
+        max_clients_at_once: overrides.maxClientsAtOnce ?? 2,
+      })
       .returning('id')
       .executeTakeFirstOrThrow();
     const hours = overrides.hours ?? { rrule: 'FREQ=WEEKLY;BYDAY=TU,WE,TH,FR,SA', start: '09:00', end: '18:00' };

@@ -46,7 +46,11 @@ beforeAll(async () => {
   const theirClient = await insertUser(db, elsewhere.salonId, 'client');
   const theirStylist = await insertUser(db, elsewhere.salonId, 'stylist');
   await insertTestBooking(db, {
-    salonId: elsewhere.salonId, clientId: theirClient.clientId!, stylistId: theirStylist.staffId!, chairId: elsewhere.chairs[0], serviceId: await insertService(db, elsewhere.salonId),
+    salonId: elsewhere.salonId,
+    clientId: theirClient.clientId!,
+    stylistId: theirStylist.staffId!,
+    chairId: elsewhere.chairs[0],
+    serviceId: await insertService(db, elsewhere.salonId),
     steps: [['hands_on', '2027-03-02T17:00:00Z', '2027-03-02T17:30:00Z']],
   });
 
@@ -54,25 +58,51 @@ beforeAll(async () => {
   mine.clientId = users.client.clientId!;
   mine.email = users.client.email;
   mine.bookingId = await insertTestBooking(db, {
-    salonId: salon.salonId, clientId: mine.clientId, stylistId: users.stylist.staffId!, chairId: salon.chairs[0], serviceId,
+    salonId: salon.salonId,
+    clientId: mine.clientId,
+    stylistId: users.stylist.staffId!,
+    chairId: salon.chairs[0],
+    serviceId,
     steps: [['hands_on', '2027-03-02T17:00:00Z', '2027-03-02T17:30:00Z']],
   });
   // Client A's unpaid online hold (claimed, kept for a day here so it stays open through the walk): the {id} of /api/me/holds/….
   mine.holdId = await insertTestBooking(db, {
-    salonId: salon.salonId, clientId: mine.clientId, stylistId: users.stylist.staffId!, chairId: salon.chairs[0], serviceId,
+    salonId: salon.salonId,
+    clientId: mine.clientId,
+    stylistId: users.stylist.staffId!,
+    chairId: salon.chairs[0],
+    serviceId,
     steps: [['hands_on', '2027-03-03T17:00:00Z', '2027-03-03T17:30:00Z']],
   });
-  await db.updateTable('bookings').set({ status: 'held', held_until: new Date(Date.now() + 86_400_000), hold_secret_hash: 'not-a-real-hash' }).where('id', '=', mine.holdId).execute();
+  await db
+    .updateTable('bookings')
+    .set({ status: 'held', held_until: new Date(Date.now() + 86_400_000), hold_secret_hash: 'not-a-real-hash' })
+    .where('id', '=', mine.holdId)
+    .execute();
   const standby = await db
     .insertInto('standby_entries')
-    .values({ salon_id: salon.salonId, client_id: mine.clientId, service_ids: [serviceId], stylist_id: null, availability: JSON.stringify([{ weekdays: [2], from: '09:00', to: '12:00' }]), created_by: users.owner.id })
+    .values({
+      salon_id: salon.salonId,
+      client_id: mine.clientId,
+      service_ids: [serviceId],
+      stylist_id: null,
+      availability: JSON.stringify([{ weekdays: [2], from: '09:00', to: '12:00' }]),
+      created_by: users.owner.id,
+    })
     .returning('id')
     .executeTakeFirstOrThrow();
   mine.standbyId = standby.id;
   // A skin test of client A applied and not read yet: the {testId} of the reading route.
   const skinTest = await db
     .insertInto('skin_tests')
-    .values({ salon_id: salon.salonId, client_id: mine.clientId, applied_at: new Date(Date.now() - 49 * 3_600_000), read_at: null, result: 'pending', recorded_by: users.stylist.id })
+    .values({
+      salon_id: salon.salonId,
+      client_id: mine.clientId,
+      applied_at: new Date(Date.now() - 49 * 3_600_000),
+      read_at: null,
+      result: 'pending',
+      recorded_by: users.stylist.id,
+    })
     .returning('id')
     .executeTakeFirstOrThrow();
   mine.skinTestId = skinTest.id;
@@ -95,7 +125,13 @@ afterAll(() => t.close());
 /** Path ids: the record the segment before `{id}` names, always client A's (or salon A's slug). */
 function pathFor(route: DocumentedRoute): string {
   const id = /\/(bookings|clients|holds|photos|standby)\/\{id\}/.exec(route.path)?.[1];
-  const byKind: Record<string, string> = { bookings: mine.bookingId, clients: mine.clientId, holds: mine.holdId, photos: mine.photoId, standby: mine.standbyId };
+  const byKind: Record<string, string> = {
+    bookings: mine.bookingId,
+    clients: mine.clientId,
+    holds: mine.holdId,
+    photos: mine.photoId,
+    standby: mine.standbyId,
+  };
   return fillPath(route.path, { ...(id ? { id: byKind[id] } : {}), slug: mine.slug, testId: mine.skinTestId });
 }
 
@@ -143,7 +179,10 @@ describe("nobody else reads client A's records, by id guessing or by filters", (
 describe('access matrix from the OpenAPI document', () => {
   it('has an expectation for every documented route, and none for a route that is gone', () => {
     const documented = routes.map((r) => r.key);
-    expect(documented.filter((k) => !(k in expectedAccess)), 'add these to tests/integration/access-matrix/expected-access.ts').toEqual([]);
+    expect(
+      documented.filter((k) => !(k in expectedAccess)),
+      'add these to tests/integration/access-matrix/expected-access.ts',
+    ).toEqual([]);
     expect(Object.keys(expectedAccess).filter((k) => !documented.includes(k))).toEqual([]);
   });
 
@@ -157,10 +196,15 @@ describe('access matrix from the OpenAPI document', () => {
         const res = await send(who, route);
         const code = res.body?.error?.code;
         const ok =
-          outcome === 'unauthenticated' ? res.status === 401 && code === 'UNAUTHENTICATED'
-          : outcome === 'forbidden' ? res.status === 403 && code === 'FORBIDDEN'
-          : outcome === 'hidden' ? (route.method === 'get' ? res.status === 404 : res.status >= 400 && res.status < 500)
-          : res.status < 500 && res.status !== 401 && res.status !== 403 && !(expectation.own && route.method === 'get' && res.status === 404);
+          outcome === 'unauthenticated'
+            ? res.status === 401 && code === 'UNAUTHENTICATED'
+            : outcome === 'forbidden'
+              ? res.status === 403 && code === 'FORBIDDEN'
+              : outcome === 'hidden'
+                ? route.method === 'get'
+                  ? res.status === 404
+                  : res.status >= 400 && res.status < 500
+                : res.status < 500 && res.status !== 401 && res.status !== 403 && !(expectation.own && route.method === 'get' && res.status === 404);
         if (!ok) wrong.push(`${route.key} as ${who}: expected ${outcome}, got ${res.status} ${code ?? ''}`);
       }
     }

@@ -48,7 +48,8 @@ function problem(res: { status: number; body: unknown }): string | null {
   if (res.status >= 500) return `answered ${res.status} ${JSON.stringify(res.body)}`;
   if (res.status < 400) return null;
   const error = (res.body as { error?: { code?: unknown; message?: unknown } })?.error;
-  if (typeof error?.code !== 'string' || typeof error.message !== 'string' || !error.message) return `error not in the standard shape: ${JSON.stringify(res.body)}`;
+  if (typeof error?.code !== 'string' || typeof error.message !== 'string' || !error.message)
+    return `error not in the standard shape: ${JSON.stringify(res.body)}`;
   return null;
 }
 

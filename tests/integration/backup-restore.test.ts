@@ -24,7 +24,17 @@ beforeAll(async () => {
   const booked = await source.db.selectFrom('bookings').select(['id', 'salon_id', 'client_id']).where('client_id', 'is not', null).limit(5).execute();
   await insertPhotos(
     source.db,
-    booked.map((b, i) => ({ salonId: b.salon_id, clientId: b.client_id!, bookingId: b.id, kind: 'hair_now' as const, key: `k/${i}.jpg`, mime: 'image/jpeg', bytes: 100 + i, width: 64, height: 48 })),
+    booked.map((b, i) => ({
+      salonId: b.salon_id,
+      clientId: b.client_id!,
+      bookingId: b.id,
+      kind: 'hair_now' as const,
+      key: `k/${i}.jpg`,
+      mime: 'image/jpeg',
+      bytes: 100 + i,
+      width: 64,
+      height: 48,
+    })),
   );
 });
 afterAll(async () => {
@@ -41,7 +51,12 @@ async function snapshot(url: string) {
   try {
     const ids = async (table: 'bookings' | 'clients' | 'booking_steps') => (await db.selectFrom(table).select('id').orderBy('id').execute()).map((r) => r.id);
     const photos = await db.selectFrom('client_photos').select(['id', 'client_id', 'booking_id', 'storage_key']).orderBy('id').execute();
-    const constraints = await db.selectFrom('pg_constraint' as never).select('conname' as never).where('contype' as never, '=', 'x' as never).orderBy('conname' as never).execute();
+    const constraints = await db
+      .selectFrom('pg_constraint' as never)
+      .select('conname' as never)
+      .where('contype' as never, '=', 'x' as never)
+      .orderBy('conname' as never)
+      .execute();
     return { bookings: await ids('bookings'), clients: await ids('clients'), steps: await ids('booking_steps'), photos, constraints };
   } finally {
     await db.destroy();

@@ -46,18 +46,41 @@ beforeAll(async () => {
   ana = await insertUser(db, salon.salonId, 'stylist', { skills: ['colour'] });
   client = await insertUser(db, salon.salonId, 'client');
   correction = await insertPlannedService(db, salon.salonId);
-  toner = await insertPlannedService(db, salon.salonId, { name: 'Toner refresh', plan: { sittings: [{ steps: [{ kind: 'hands_on', label: 'Apply toner', product: 'toner_direct', minutes: 30 }] }] } });
+  toner = await insertPlannedService(db, salon.salonId, {
+    name: 'Toner refresh',
+    plan: { sittings: [{ steps: [{ kind: 'hands_on', label: 'Apply toner', product: 'toner_direct', minutes: 30 }] }] },
+  });
   await db.updateTable('services').set({ online_bookable: true }).where('id', '=', toner).execute();
 });
 afterAll(() => t.close());
 
-const book = (agent: Awaited<ReturnType<typeof signedInAgent>>, start: string, serviceId = toner, plan: object = { sittings: [{ steps: [{ kind: 'hands_on', label: 'Apply toner', product: 'toner_direct', minutes: 30 }] }] }) =>
-  agent.write('post', '/api/bookings', { clientId: client.clientId, serviceId, stepPlan: plan, stylistId: ana.staffId, start, idempotencyKey: crypto.randomUUID() });
+const book = (
+  agent: Awaited<ReturnType<typeof signedInAgent>>,
+  start: string,
+  serviceId = toner,
+  plan: object = { sittings: [{ steps: [{ kind: 'hands_on', label: 'Apply toner', product: 'toner_direct', minutes: 30 }] }] },
+) =>
+  agent.write('post', '/api/bookings', {
+    clientId: client.clientId,
+    serviceId,
+    stepPlan: plan,
+    stylistId: ana.staffId,
+    start,
+    idempotencyKey: crypto.randomUUID(),
+  });
 
 describe('the book version', () => {
   it('moves exactly once for a booking with two sittings and eight steps, and not for a write that rolled back or one calendars do not show', async () => {
     const desk$ = await signedInAgent(t.app, desk.email, desk.password);
-    const option = (await desk$.write('post', '/api/booking-options', { clientId: client.clientId, serviceId: correction, stepPlan: correctionPlan, stylistId: ana.staffId, earliestDate: tuesday })).body.options[0];
+    const option = (
+      await desk$.write('post', '/api/booking-options', {
+        clientId: client.clientId,
+        serviceId: correction,
+        stepPlan: correctionPlan,
+        stylistId: ana.staffId,
+        earliestDate: tuesday,
+      })
+    ).body.options[0];
     const before = await versions();
     expect((await book(desk$, option.sittings[0].start, correction, correctionPlan)).status).toBe(201);
     const after = await versions();
@@ -79,7 +102,10 @@ describe('the book version', () => {
     expect(await version()).toBe(total);
     // The audit log and the send log are not part of any calendar.
     await sql`update messages set attempts = attempts where salon_id = ${salon.salonId}`.execute(t.testDb.db);
-    await t.testDb.db.insertInto('audit_log').values({ salon_id: salon.salonId, entity: 'client', entity_id: client.clientId!, action: 'note', after: JSON.stringify({}) }).execute();
+    await t.testDb.db
+      .insertInto('audit_log')
+      .values({ salon_id: salon.salonId, entity: 'client', entity_id: client.clientId!, action: 'note', after: JSON.stringify({}) })
+      .execute();
     expect(await version()).toBe(total);
   });
 
@@ -90,14 +116,41 @@ describe('the book version', () => {
       ['salon settings', () => db.updateTable('salons').set({ name: 'Test Salon (renamed)' }).where('id', '=', salon.salonId).execute()],
       ['salon hours', () => db.updateTable('salon_hours').set({ end_time: '20:00' }).where('salon_id', '=', salon.salonId).execute()],
       ['stylist name', () => db.updateTable('staff').set({ display_name: 'Ana R.' }).where('id', '=', ana.staffId!).execute()],
-      ['stylist hours', () => db.insertInto('staff_hours').values({ staff_id: ana.staffId!, rrule: 'FREQ=WEEKLY;BYDAY=SU', start_time: '10:00', end_time: '14:00' }).execute()],
-      ['time off', () => db.insertInto('time_off').values({ staff_id: ana.staffId!, during: sql`tstzrange(now() + interval '40 days', now() + interval '41 days')` as never }).execute()],
+      [
+        'stylist hours',
+        () => db.insertInto('staff_hours').values({ staff_id: ana.staffId!, rrule: 'FREQ=WEEKLY;BYDAY=SU', start_time: '10:00', end_time: '14:00' }).execute(),
+      ],
+      [
+        'time off',
+        () =>
+          db
+            .insertInto('time_off')
+            .values({ staff_id: ana.staffId!, during: sql`tstzrange(now() + interval '40 days', now() + interval '41 days')` as never })
+            .execute(),
+      ],
       ['chair', () => db.updateTable('chairs').set({ name: 'Window chair' }).where('id', '=', salon.chairs[0]).execute()],
       ['basin', () => db.updateTable('basins').set({ name: 'Back basin' }).where('id', '=', salon.basins[0]).execute()],
-      ['out of service', () => db.insertInto('out_of_service').values({ salon_id: salon.salonId, chair_id: salon.chairs[1], during: sql`tstzrange(now() + interval '50 days', now() + interval '51 days')` as never }).execute()],
+      [
+        'out of service',
+        () =>
+          db
+            .insertInto('out_of_service')
+            .values({
+              salon_id: salon.salonId,
+              chair_id: salon.chairs[1],
+              during: sql`tstzrange(now() + interval '50 days', now() + interval '51 days')` as never,
+            })
+            .execute(),
+      ],
       ['service', () => db.updateTable('services').set({ name: 'Toner refresh (gloss)' }).where('id', '=', toner).execute()],
       ['client name', () => db.updateTable('clients').set({ name: 'Client Renamed' }).where('id', '=', client.clientId!).execute()],
-      ['steps alone', () => sql`update booking_steps set label = label || '' where sitting_id in (select s.id from sittings s join bookings b on b.id = s.booking_id where b.salon_id = ${salon.salonId})`.execute(db)],
+      [
+        'steps alone',
+        () =>
+          sql`update booking_steps set label = label || '' where sitting_id in (select s.id from sittings s join bookings b on b.id = s.booking_id where b.salon_id = ${salon.salonId})`.execute(
+            db,
+          ),
+      ],
     ];
     const otherBefore = await version(elsewhere.salonId);
     for (const [what, change] of changes) {
@@ -137,7 +190,7 @@ describe('cached reads on two app servers', () => {
     expect(weekB.body.bookings.map((b: { id: string }) => b.id)).not.toContain(made.body.id);
   });
 
-  it('a booking on one date keeps the cached answers of other dates, and moving a second sitting renews the first sitting\'s date', async () => {
+  it("a booking on one date keeps the cached answers of other dates, and moving a second sitting renews the first sitting's date", async () => {
     const desk$ = await signedInAgent(t.app, desk.email, desk.password);
     const day = (date: string) => desk$.get(`/api/desk/day?date=${date}`);
     const [x, y] = [futureWeekday(5, 5), futureWeekday(6, 5)];
@@ -146,7 +199,13 @@ describe('cached reads on two app servers', () => {
     expect((await day(y).set('If-None-Match', yTag)).status).toBe(304);
     expect((await day(x).set('If-None-Match', xTag)).status).toBe(200);
 
-    const asked = await desk$.write('post', '/api/booking-options', { clientId: client.clientId, serviceId: correction, stepPlan: correctionPlan, stylistId: ana.staffId, earliestDate: futureWeekday(3, 2) });
+    const asked = await desk$.write('post', '/api/booking-options', {
+      clientId: client.clientId,
+      serviceId: correction,
+      stepPlan: correctionPlan,
+      stylistId: ana.staffId,
+      earliestDate: futureWeekday(3, 2),
+    });
     expect(asked.status, JSON.stringify(asked.body)).toBe(200);
     const option = asked.body.options[0];
     const made = await book(desk$, option.sittings[0].start, correction, correctionPlan);

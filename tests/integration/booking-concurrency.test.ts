@@ -35,7 +35,9 @@ async function overlaps() {
     select count(*)::int as n from booking_steps a join booking_steps b on a.id < b.id and a.during && b.during and a.live and b.live
     where (a.stylist_id = b.stylist_id and a.kind <> 'developing' and b.kind <> 'developing') or a.basin_id = b.basin_id`.execute(t.testDb.db);
   const chairs = await sql<{ n: number }>`
-    select count(*)::int as n from sittings a join sittings b on a.id < b.id and a.chair_id = b.chair_id and a.during && b.during and a.live and b.live`.execute(t.testDb.db);
+    select count(*)::int as n from sittings a join sittings b on a.id < b.id and a.chair_id = b.chair_id and a.during && b.during and a.live and b.live`.execute(
+    t.testDb.db,
+  );
   return rows[0].n + chairs.rows[0].n;
 }
 

@@ -28,7 +28,14 @@ beforeAll(async () => {
 afterAll(() => t.close());
 
 const ask = (over: object = {}) =>
-  desk$.write('post', '/api/booking-options', { clientId: client.clientId, serviceId, stepPlan: correctionPlan, stylistId: null, earliestDate: tuesday, ...over });
+  desk$.write('post', '/api/booking-options', {
+    clientId: client.clientId,
+    serviceId,
+    stepPlan: correctionPlan,
+    stylistId: null,
+    earliestDate: tuesday,
+    ...over,
+  });
 
 describe('POST /api/booking-options', () => {
   it('answers the earliest plan per stylist and day, sittings within their day range, with chair and hands-free minutes', async () => {
@@ -71,7 +78,15 @@ describe('POST /api/booking-options', () => {
 
 describe('POST /api/bookings', () => {
   const book = (start: string, key: string, over: object = {}) =>
-    desk$.write('post', '/api/bookings', { clientId: client.clientId, serviceId, stepPlan: correctionPlan, stylistId: ana.staffId, start, idempotencyKey: key, ...over });
+    desk$.write('post', '/api/bookings', {
+      clientId: client.clientId,
+      serviceId,
+      stepPlan: correctionPlan,
+      stylistId: ana.staffId,
+      start,
+      idempotencyKey: key,
+      ...over,
+    });
 
   it('books the chosen option as one booking with both sittings; a retry with the same key answers the same booking', async () => {
     const option = (await ask()).body.options[0];
@@ -118,7 +133,14 @@ describe('POST /api/bookings', () => {
     // Cosmetics Europe Recommendation No 27) allows colour from Thursday 10:00.
     await t.testDb.db
       .insertInto('skin_tests')
-      .values({ salon_id: salon.salonId, client_id: fresh.clientId!, applied_at: new Date(localIso(tuesday, '10:00')), read_at: null, result: 'pending', recorded_by: null })
+      .values({
+        salon_id: salon.salonId,
+        client_id: fresh.clientId!,
+        applied_at: new Date(localIso(tuesday, '10:00')),
+        read_at: null,
+        result: 'pending',
+        recorded_by: null,
+      })
       .execute();
     const early = await book(localIso(tuesday, '13:00'), 'flow-key-0007', { clientId: fresh.clientId });
     expect(early.status).toBe(409);

@@ -21,7 +21,13 @@ describe('busy salon loader', () => {
     // 2,500 bookings in 42 days is the engine bench's density; March has 31 days → about 1,845 asked for.
     expect(busy.counts.bookings).toBeGreaterThan(1500);
     const count = async (table: 'staff' | 'chairs' | 'basins' | 'services' | 'clients' | 'bookings') =>
-      (await testDb.db.selectFrom(table).select(sql<number>`count(*)::int`.as('n')).where('salon_id', '=', busy.salonId).executeTakeFirstOrThrow()).n;
+      (
+        await testDb.db
+          .selectFrom(table)
+          .select(sql<number>`count(*)::int`.as('n'))
+          .where('salon_id', '=', busy.salonId)
+          .executeTakeFirstOrThrow()
+      ).n;
     expect(await count('staff')).toBe(12);
     expect(await count('chairs')).toBe(14);
     expect(await count('basins')).toBe(4);
@@ -64,14 +70,32 @@ describe('busy salon loader', () => {
     const now = new Date('2027-03-02T15:00:00Z');
     const service = (await listServices(testDb.db, busy.salonId)).find((s) => s.stepPlan.sittings.length === 1 && !s.needsSkinTest)!;
     const stylist = oneStylist
-      ? (await testDb.db.selectFrom('staff').select('id').where('salon_id', '=', busy.salonId).where(sql<boolean>`${service.skill} = any(skills)`).orderBy('id').executeTakeFirstOrThrow()).id
+      ? (
+          await testDb.db
+            .selectFrom('staff')
+            .select('id')
+            .where('salon_id', '=', busy.salonId)
+            .where(sql<boolean>`${service.skill} = any(skills)`)
+            .orderBy('id')
+            .executeTakeFirstOrThrow()
+        ).id
       : undefined;
     const salon = { id: busy.salonId, time_zone: busy.timeZone, granularity_minutes: 5 };
     const answer = await freeTimes(testDb.db, salon, service, stylist, '2027-03-02', now);
     // The whole three weeks read at once.
-    const { options: full } = await optionsFor(testDb.db, { id: busy.salonId, timeZone: busy.timeZone, granularityMinutes: 5 }, {
-      skill: service.skill, stylistId: stylist ?? null, plan: service.stepPlan, earliest: now, horizons: [{ from: '2027-03-02', to: '2027-03-23' }], limit: 400, spread: 'none',
-    });
+    const { options: full } = await optionsFor(
+      testDb.db,
+      { id: busy.salonId, timeZone: busy.timeZone, granularityMinutes: 5 },
+      {
+        skill: service.skill,
+        stylistId: stylist ?? null,
+        plan: service.stepPlan,
+        earliest: now,
+        horizons: [{ from: '2027-03-02', to: '2027-03-23' }],
+        limit: 400,
+        spread: 'none',
+      },
+    );
     if (oneStylist) {
       const firstWeekEnd = Date.parse('2027-03-09T07:00:00Z');
       expect(answer.times.some((t) => Date.parse(t.start) >= firstWeekEnd)).toBe(true);

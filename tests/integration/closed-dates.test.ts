@@ -22,10 +22,21 @@ const closed = futureWeekday(2, 2); // a Tuesday two weeks ahead
 const nextDay = futureWeekday(3, 2);
 
 const settings = (rrule: string) => ({
-  name: 'Closed Date Studio', address: '1 Elm Row', phone: '+1 303 555 0100', timeZone: 'America/Denver', currency: 'USD',
+  name: 'Closed Date Studio',
+  address: '1 Elm Row',
+  phone: '+1 303 555 0100',
+  timeZone: 'America/Denver',
+  currency: 'USD',
   hours: [{ rrule, start: '09:00', end: '21:00' }],
-  skinTestLeadHours: 48, skinTestValidityDays: 182, holdMinutes: 10, cancellationWindowHours: 48, cancellationKeeps: 'deposit',
-  quietFrom: '21:00', quietTo: '08:00', reminderOffsetsHours: [48, 24], maxDeveloperPercent: 12,
+  skinTestLeadHours: 48,
+  skinTestValidityDays: 182,
+  holdMinutes: 10,
+  cancellationWindowHours: 48,
+  cancellationKeeps: 'deposit',
+  quietFrom: '21:00',
+  quietTo: '08:00',
+  reminderOffsetsHours: [48, 24],
+  maxDeveloperPercent: 12,
 });
 
 beforeAll(async () => {
@@ -66,12 +77,23 @@ describe('a closed date saved in Set-up', () => {
   });
 
   it('gives the desk no option on that date, and refuses a booking there', async () => {
-    const options = await desk$.write('post', '/api/booking-options', { clientId: client.clientId, serviceId: service, stepPlan: tonerPlan, stylistId: null, earliestDate: closed });
+    const options = await desk$.write('post', '/api/booking-options', {
+      clientId: client.clientId,
+      serviceId: service,
+      stepPlan: tonerPlan,
+      stylistId: null,
+      earliestDate: closed,
+    });
     expect(options.status).toBe(200);
     expect(options.body.options.length).toBeGreaterThan(0);
     for (const o of options.body.options) expect(localDateOf(o.sittings[0].start, 'America/Denver')).not.toBe(closed);
     const booked = await desk$.write('post', '/api/bookings', {
-      clientId: client.clientId, serviceId: service, stepPlan: tonerPlan, stylistId: stylist.staffId, start: localIso(closed, '10:00'), idempotencyKey: `closed-${Date.now()}`,
+      clientId: client.clientId,
+      serviceId: service,
+      stepPlan: tonerPlan,
+      stylistId: stylist.staffId,
+      start: localIso(closed, '10:00'),
+      idempotencyKey: `closed-${Date.now()}`,
     });
     expect(booked.status).toBe(409);
   });

@@ -17,8 +17,18 @@ const tuesday = futureWeekday(2, 3);
 
 const virgin = { natural: true, permanent: false, directDye: false, boxDye: false, henna: false, previousLightening: false };
 const consultation = (over: object = {}) => ({
-  currentLevel: 5, targetLevel: 6, history: virgin, length: 'medium', density: 'medium', elasticity: 'good', porosity: 'normal',
-  conditionNotes: 'Healthy, normal stretch', strandTest: 'none', wantsCut: false, notes: '', ...over,
+  currentLevel: 5,
+  targetLevel: 6,
+  history: virgin,
+  length: 'medium',
+  density: 'medium',
+  elasticity: 'good',
+  porosity: 'normal',
+  conditionNotes: 'Healthy, normal stretch',
+  strandTest: 'none',
+  wantsCut: false,
+  notes: '',
+  ...over,
 });
 
 beforeAll(async () => {
@@ -59,14 +69,33 @@ describe('proposing a quote', () => {
   });
 
   it('refuses levels outside 1–10, naming each field', async () => {
-    const res = await stylist$.write('post', '/api/consultations/propose', { consultation: consultation({ currentLevel: 0, targetLevel: 12 }), serviceId: null });
+    const res = await stylist$.write('post', '/api/consultations/propose', {
+      consultation: consultation({ currentLevel: 0, targetLevel: 12 }),
+      serviceId: null,
+    });
     expect(res.status).toBe(400);
     expect(Object.keys(res.body.error.fields)).toEqual(['consultation.currentLevel', 'consultation.targetLevel']);
   });
 });
 
 describe('recording a consultation and its quote', () => {
-  const quote = { serviceId: '', stepPlan: { sittings: [{ steps: [{ kind: 'hands_on', label: 'Apply colour', product: 'direct_dye', minutes: 40 }, { kind: 'developing', label: 'Colour develops', product: 'direct_dye', minMinutes: 30, maxMinutes: 40 }, { kind: 'basin', label: 'Rinse', product: 'none', minutes: 15 }] }] }, priceCents: 26000, depositCents: 6000, notes: 'Edited: longer application' };
+  const quote = {
+    serviceId: '',
+    stepPlan: {
+      sittings: [
+        {
+          steps: [
+            { kind: 'hands_on', label: 'Apply colour', product: 'direct_dye', minutes: 40 },
+            { kind: 'developing', label: 'Colour develops', product: 'direct_dye', minMinutes: 30, maxMinutes: 40 },
+            { kind: 'basin', label: 'Rinse', product: 'none', minutes: 15 },
+          ],
+        },
+      ],
+    },
+    priceCents: 26000,
+    depositCents: 6000,
+    notes: 'Edited: longer application',
+  };
 
   it('stores nothing when the input is bad: level, deposit above price, another client’s photo', async () => {
     const bad = [
@@ -80,7 +109,17 @@ describe('recording a consultation and its quote', () => {
     expect(deposit.body.error.fields['quote.depositCents']).toMatch(/more than the price/);
     const [photo] = await t.testDb.db
       .insertInto('client_photos')
-      .values({ salon_id: salon.salonId, client_id: other.clientId!, booking_id: null, kind: 'hair_now', storage_key: 'x/y.jpg', mime: 'image/jpeg', bytes: 10, width: 1, height: 1 })
+      .values({
+        salon_id: salon.salonId,
+        client_id: other.clientId!,
+        booking_id: null,
+        kind: 'hair_now',
+        storage_key: 'x/y.jpg',
+        mime: 'image/jpeg',
+        bytes: 10,
+        width: 1,
+        height: 1,
+      })
       .returning('id')
       .execute();
     const photos = await stylist$.write('post', '/api/consultations', { ...bad[1], quote: { ...quote, serviceId }, photoIds: [photo.id] });
@@ -91,7 +130,9 @@ describe('recording a consultation and its quote', () => {
 
   it('refuses a NUL byte or a lone surrogate in typed text, naming the field, never a 500', async () => {
     const res = await stylist$.write('post', '/api/consultations', {
-      clientId: client.clientId, consultation: consultation({ conditionNotes: 'dry\u0000ends' }), photoIds: [],
+      clientId: client.clientId,
+      consultation: consultation({ conditionNotes: 'dry\u0000ends' }),
+      photoIds: [],
       quote: { ...quote, serviceId, notes: 'half \ud800 pair', overrideReason: 'reason\u0000' },
     });
     expect(res.status).toBe(400);
@@ -101,7 +142,12 @@ describe('recording a consultation and its quote', () => {
 
   it('saves the edited quote with the rules’ warnings; the desk books it with the quote’s plan, price and deposit', async () => {
     const coloured = consultation({ currentLevel: 4, targetLevel: 6, history: { ...virgin, natural: false, permanent: true } });
-    const created = await stylist$.write('post', '/api/consultations', { clientId: client.clientId, consultation: coloured, photoIds: [], quote: { ...quote, serviceId } });
+    const created = await stylist$.write('post', '/api/consultations', {
+      clientId: client.clientId,
+      consultation: coloured,
+      photoIds: [],
+      quote: { ...quote, serviceId },
+    });
     expect(created.status).toBe(201);
     expect(created.body.quote).toMatchObject({ status: 'draft', priceCents: 26000, depositCents: 6000, notes: 'Edited: longer application' });
     // Lightening previously coloured hair with no strand test on record (common practice: strand test first).
@@ -112,20 +158,35 @@ describe('recording a consultation and its quote', () => {
     expect(edited.status).toBe(400);
     expect(edited.body.error.fields.depositCents).toBeDefined();
 
-    const options = await desk$.write('post', '/api/booking-options', { clientId: client.clientId, serviceId, stepPlan: created.body.quote.stepPlan, stylistId: null, earliestDate: tuesday });
+    const options = await desk$.write('post', '/api/booking-options', {
+      clientId: client.clientId,
+      serviceId,
+      stepPlan: created.body.quote.stepPlan,
+      stylistId: null,
+      earliestDate: tuesday,
+    });
     expect(options.status).toBe(200);
     const option = options.body.options[0];
     const book = (over: object) =>
       desk$.write('post', '/api/bookings', {
-        clientId: client.clientId, serviceId, stepPlan: created.body.quote.stepPlan, stylistId: option.stylistId, start: option.sittings[0].start,
-        idempotencyKey: `quote-${Math.random()}`, ...over,
+        clientId: client.clientId,
+        serviceId,
+        stepPlan: created.body.quote.stepPlan,
+        stylistId: option.stylistId,
+        start: option.sittings[0].start,
+        idempotencyKey: `quote-${Math.random()}`,
+        ...over,
       });
     // Another client's booking cannot claim this quote.
     const wrong = await book({ clientId: other.clientId, quoteId: created.body.quote.id });
     expect(wrong.status).toBe(400);
     const booked = await book({ quoteId: created.body.quote.id });
     expect(booked.status).toBe(201);
-    const booking = await t.testDb.db.selectFrom('bookings').select(['quote_id', 'price_cents', 'deposit_cents']).where('id', '=', booked.body.id).executeTakeFirstOrThrow();
+    const booking = await t.testDb.db
+      .selectFrom('bookings')
+      .select(['quote_id', 'price_cents', 'deposit_cents'])
+      .where('id', '=', booked.body.id)
+      .executeTakeFirstOrThrow();
     expect(booking).toEqual({ quote_id: created.body.quote.id, price_cents: 26000, deposit_cents: 6000 });
     const view = await desk$.get(`/api/consultations/${created.body.id}`);
     expect(view.body.quote.bookingIds).toEqual([booked.body.id]);
@@ -169,18 +230,32 @@ describe('the strand test gates lightening', () => {
   const coloured = () => consultation({ currentLevel: 4, targetLevel: 8, history: { ...virgin, natural: false, permanent: true }, strandTest: 'passed' });
   // Lightener in two sections of 20 + 30 = 50 min on the hair each: within the salon's 50 min limit.
   const lightening = {
-    sittings: [{ steps: [
-      { kind: 'hands_on', label: 'Apply lightener, section 1 of 2', product: 'lightener', minutes: 20 }, { kind: 'developing', label: 'Lightener lifts, section 1 of 2', product: 'lightener', minMinutes: 20, maxMinutes: 30 }, { kind: 'basin', label: 'Rinse section 1', product: 'none', minutes: 10 },
-      { kind: 'hands_on', label: 'Apply lightener, section 2 of 2', product: 'lightener', minutes: 20 }, { kind: 'developing', label: 'Lightener lifts, section 2 of 2', product: 'lightener', minMinutes: 20, maxMinutes: 30 }, { kind: 'basin', label: 'Rinse section 2', product: 'none', minutes: 10 },
-    ] }],
+    sittings: [
+      {
+        steps: [
+          { kind: 'hands_on', label: 'Apply lightener, section 1 of 2', product: 'lightener', minutes: 20 },
+          { kind: 'developing', label: 'Lightener lifts, section 1 of 2', product: 'lightener', minMinutes: 20, maxMinutes: 30 },
+          { kind: 'basin', label: 'Rinse section 1', product: 'none', minutes: 10 },
+          { kind: 'hands_on', label: 'Apply lightener, section 2 of 2', product: 'lightener', minutes: 20 },
+          { kind: 'developing', label: 'Lightener lifts, section 2 of 2', product: 'lightener', minMinutes: 20, maxMinutes: 30 },
+          { kind: 'basin', label: 'Rinse section 2', product: 'none', minutes: 10 },
+        ],
+      },
+    ],
   };
   const quote = (over: object = {}) => ({ serviceId, stepPlan: lightening, priceCents: 30000, depositCents: 5000, notes: '', ...over });
 
   beforeAll(async () => {
     failed = await insertUser(t.testDb.db, salon.salonId, 'client');
     const res = await stylist$.write('post', `/api/clients/${failed.clientId}/strand-tests`, {
-      testedAt: new Date(Date.now() - 86_400_000).toISOString(), tested: 'Lightener 1:2 with 6 % on a nape strand', productType: 'lightener', developerPercent: 6,
-      minutes: 30, result: 'failed', notes: 'Strand stretched and snapped', photoId: null,
+      testedAt: new Date(Date.now() - 86_400_000).toISOString(),
+      tested: 'Lightener 1:2 with 6 % on a nape strand',
+      productType: 'lightener',
+      developerPercent: 6,
+      minutes: 30,
+      result: 'failed',
+      notes: 'Strand stretched and snapped',
+      photoId: null,
     });
     expect(res.status).toBe(201);
   });
@@ -208,23 +283,56 @@ describe('the strand test gates lightening', () => {
     expect(saved.status).toBe(201);
     expect(saved.body.quote.overrideReason).toBe(reason);
     expect(saved.body.strandTest).toBe('failed');
-    const audit = await t.testDb.db.selectFrom('audit_log').select(['action', 'after']).where('entity', '=', 'quote').where('entity_id', '=', saved.body.quote.id).execute();
+    const audit = await t.testDb.db
+      .selectFrom('audit_log')
+      .select(['action', 'after'])
+      .where('entity', '=', 'quote')
+      .where('entity_id', '=', saved.body.quote.id)
+      .execute();
     expect(audit).toEqual([{ action: 'lightening planned after a failed strand test', after: expect.objectContaining({ reason }) }]);
 
     // Editing it without the reason is refused too, naming the field; taking the lightener out needs none.
     const edit = await stylist$.write('put', `/api/consultations/${saved.body.id}/quote`, quote({ overrideReason: '' }));
     expect(edit.status).toBe(409);
     expect(edit.body.error.fields.overrideReason).toMatch(/write why/);
-    const care = { sittings: [{ steps: [{ kind: 'basin', label: 'Bond treatment', product: 'bond_care', minutes: 15 }, { kind: 'hands_on', label: 'Blow-dry', product: 'none', minutes: 35 }] }] };
-    expect((await stylist$.write('put', `/api/consultations/${saved.body.id}/quote`, quote({ stepPlan: care, priceCents: 9000, depositCents: 0 }))).status).toBe(200);
+    const care = {
+      sittings: [
+        {
+          steps: [
+            { kind: 'basin', label: 'Bond treatment', product: 'bond_care', minutes: 15 },
+            { kind: 'hands_on', label: 'Blow-dry', product: 'none', minutes: 35 },
+          ],
+        },
+      ],
+    };
+    expect(
+      (await stylist$.write('put', `/api/consultations/${saved.body.id}/quote`, quote({ stepPlan: care, priceCents: 9000, depositCents: 0 }))).status,
+    ).toBe(200);
   });
 
   it('refuses a quote whose developing step is over its family’s limit, naming the step', async () => {
     // 45 min applying + up to 50 lifting = 95 min of lightener on the hair, over the 50 min limit.
-    const tooLong = { sittings: [{ steps: [{ kind: 'hands_on', label: 'Apply lightener', product: 'lightener', minutes: 45 }, { kind: 'developing', label: 'Lightener lifts', product: 'lightener', minMinutes: 30, maxMinutes: 50 }, { kind: 'basin', label: 'Rinse', product: 'none', minutes: 15 }] }] };
-    const res = await stylist$.write('post', '/api/consultations', { clientId: client.clientId, consultation: consultation(), photoIds: [], quote: quote({ stepPlan: tooLong }) });
+    const tooLong = {
+      sittings: [
+        {
+          steps: [
+            { kind: 'hands_on', label: 'Apply lightener', product: 'lightener', minutes: 45 },
+            { kind: 'developing', label: 'Lightener lifts', product: 'lightener', minMinutes: 30, maxMinutes: 50 },
+            { kind: 'basin', label: 'Rinse', product: 'none', minutes: 15 },
+          ],
+        },
+      ],
+    };
+    const res = await stylist$.write('post', '/api/consultations', {
+      clientId: client.clientId,
+      consultation: consultation(),
+      photoIds: [],
+      quote: quote({ stepPlan: tooLong }),
+    });
     expect(res.status).toBe(400);
-    expect(res.body.error.fields['quote.stepPlan.sittings.0.steps.1']).toMatch(/“Lightener lifts”: lightener may be on the hair at most 50 min; this plan keeps it on up to 95 min/);
+    expect(res.body.error.fields['quote.stepPlan.sittings.0.steps.1']).toMatch(
+      /“Lightener lifts”: lightener may be on the hair at most 50 min; this plan keeps it on up to 95 min/,
+    );
   });
 
   it('refuses to propose, with the reason, when the salon’s limit leaves no room even in four sections', async () => {

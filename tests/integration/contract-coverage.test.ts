@@ -70,7 +70,10 @@ describe('contract coverage', () => {
 
   it('finds the contracts: every module in shared/api exports endpoints, each method and path once', () => {
     expect(perModule.length).toBeGreaterThan(15);
-    expect(perModule.filter(([, found]) => found.size === 0).map(([file]) => file), 'contract modules without an endpoint').toEqual([]);
+    expect(
+      perModule.filter(([, found]) => found.size === 0).map(([file]) => file),
+      'contract modules without an endpoint',
+    ).toEqual([]);
     const twice = [...counts([...exported.keys()].map((e) => key(e.method, e.path)))].filter(([, n]) => n > 1);
     expect(twice).toEqual([]);
   });
@@ -98,7 +101,13 @@ describe('contract coverage', () => {
     const doc = (await (await anonymousAgent(t.app)).get('/api/openapi.json')).body as { paths: Record<string, Record<string, unknown>> };
     const documented = Object.entries(doc.paths).flatMap(([path, ops]) => Object.keys(ops).map((m) => key(m, path)));
     const contracts = [...exported.keys()].map((e) => key(e.method, openApiPath(e.path)));
-    expect(contracts.filter((c) => !documented.includes(c)), 'contracts missing from the OpenAPI document').toEqual([]);
-    expect(documented.filter((d) => !contracts.includes(d)), 'documented operations without a contract').toEqual([]);
+    expect(
+      contracts.filter((c) => !documented.includes(c)),
+      'contracts missing from the OpenAPI document',
+    ).toEqual([]);
+    expect(
+      documented.filter((d) => !contracts.includes(d)),
+      'documented operations without a contract',
+    ).toEqual([]);
   });
 });

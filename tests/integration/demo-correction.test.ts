@@ -25,10 +25,23 @@ const limits = { lightener: 50, oxidative_colour: 45, toner_oxidative: 30, colou
 
 describe('the demo correction', () => {
   it('is the real job: about ten hours over two sittings 3–14 days apart, every step within the limits', async () => {
-    const row = await testDb.db.selectFrom('services').select('step_plan').where('salon_id', '=', salonId).where('name', '=', 'Colour correction (two sittings)').executeTakeFirstOrThrow();
+    const row = await testDb.db
+      .selectFrom('services')
+      .select('step_plan')
+      .where('salon_id', '=', salonId)
+      .where('name', '=', 'Colour correction (two sittings)')
+      .executeTakeFirstOrThrow();
     const plan = StepPlanSchema.parse(row.step_plan);
     const labels = plan.sittings.map((s) => s.steps.map((st) => st.label));
-    expect(labels[0]).toEqual(expect.arrayContaining(['Check-in and strand check', 'Apply colour remover, round 1 of 2', 'Apply colour remover, round 2 of 2', 'Apply toner', 'Blow-dry']));
+    expect(labels[0]).toEqual(
+      expect.arrayContaining([
+        'Check-in and strand check',
+        'Apply colour remover, round 1 of 2',
+        'Apply colour remover, round 2 of 2',
+        'Apply toner',
+        'Blow-dry',
+      ]),
+    );
     expect(plan.sittings[0].steps.filter((s) => s.kind === 'developing' && s.product === 'colour_remover' && s.heat)).toHaveLength(2);
     expect(plan.sittings[0].steps.some((s) => s.product === 'lightener')).toBe(true);
     expect(labels[1]).toEqual(expect.arrayContaining(['Apply vivid colour, section 1 of 3', 'Apply vivid colour, section 3 of 3', 'Cut and finish']));
@@ -47,7 +60,12 @@ describe('the demo correction', () => {
     for (const b of await testDb.db.selectFrom('bookings').select(['id', 'step_plan']).where('salon_id', '=', salonId).execute()) {
       expect(processingLimitIssues(b.step_plan as StepPlan, limits), b.id).toEqual([]);
     }
-    const client = await testDb.db.selectFrom('clients').select('id').where('salon_id', '=', salonId).where('email', '=', 'client@demo.test').executeTakeFirstOrThrow();
+    const client = await testDb.db
+      .selectFrom('clients')
+      .select('id')
+      .where('salon_id', '=', salonId)
+      .where('email', '=', 'client@demo.test')
+      .executeTakeFirstOrThrow();
     const sittings = await testDb.db
       .selectFrom('sittings as s')
       .innerJoin('bookings as b', 'b.id', 's.booking_id')

@@ -55,7 +55,13 @@ describe('free times to move a sitting to (desk)', () => {
   });
 
   it('offers only times inside the stylist’s working hours, each one the move then accepts', async () => {
-    const booked = await book(s.desk$, { clientId: s.client.clientId!, serviceId: toner, stepPlan: tonerPlan, stylistId: s.ana.staffId!, start: localIso(wednesday, '09:00') });
+    const booked = await book(s.desk$, {
+      clientId: s.client.clientId!,
+      serviceId: toner,
+      stepPlan: tonerPlan,
+      stylistId: s.ana.staffId!,
+      start: localIso(wednesday, '09:00'),
+    });
     const res = await s.desk$.get(`/api/bookings/${booked.id}/move-times?from=${wednesday}`);
     expect(res.status).toBe(200);
     const times = res.body.times as FreeTime[];
@@ -79,7 +85,13 @@ describe('free times to move a sitting to (desk)', () => {
 
   it('leaves out a time the stylist’s hands are taken, and a move there is refused with that reason', async () => {
     const thursday = futureWeekday(4, 3);
-    const booked = await book(s.desk$, { clientId: s.client.clientId!, serviceId: toner, stepPlan: tonerPlan, stylistId: s.ana.staffId!, start: localIso(thursday, '15:00') });
+    const booked = await book(s.desk$, {
+      clientId: s.client.clientId!,
+      serviceId: toner,
+      stepPlan: tonerPlan,
+      stylistId: s.ana.staffId!,
+      start: localIso(thursday, '15:00'),
+    });
     const other = await insertUser(t.testDb.db, s.salon.salonId, 'client');
     // Another client's toner at 10:00 holds Ana's hands 10:00–10:10 (its first step is hands-on).
     await book(s.desk$, { clientId: other.clientId!, serviceId: toner, stepPlan: tonerPlan, stylistId: s.ana.staffId!, start: localIso(thursday, '10:00') });
@@ -96,7 +108,13 @@ describe('free times to move a sitting to (desk)', () => {
   });
 
   it('for a later sitting, starts at the first day its range allows and keeps every time inside the range', async () => {
-    const booked = await book(s.desk$, { clientId: s.client.clientId!, serviceId: correction, stepPlan: correctionPlan, stylistId: s.ana.staffId!, start: localIso(futureWeekday(3, 4), '09:00') });
+    const booked = await book(s.desk$, {
+      clientId: s.client.clientId!,
+      serviceId: correction,
+      stepPlan: correctionPlan,
+      stylistId: s.ana.staffId!,
+      start: localIso(futureWeekday(3, 4), '09:00'),
+    });
     const first = local(booked.sittings[0].start).startOf('day');
     const res = await s.desk$.get(`/api/bookings/${booked.id}/move-times?sitting=2`);
     expect(res.status).toBe(200);
@@ -112,7 +130,13 @@ describe('free times to move a sitting to (desk)', () => {
   });
 
   it('refuses what the move refuses, naming the field: another stylist for several sittings, a stylist without the skill, a sitting it does not have', async () => {
-    const booked = await book(s.desk$, { clientId: s.client.clientId!, serviceId: correction, stepPlan: correctionPlan, stylistId: s.ana.staffId!, start: localIso(futureWeekday(3, 5), '09:00') });
+    const booked = await book(s.desk$, {
+      clientId: s.client.clientId!,
+      serviceId: correction,
+      stepPlan: correctionPlan,
+      stylistId: s.ana.staffId!,
+      start: localIso(futureWeekday(3, 5), '09:00'),
+    });
     const several = await s.desk$.get(`/api/bookings/${booked.id}/move-times?stylistId=${s.bo.staffId}`);
     expect(several.status).toBe(400);
     expect(several.body.error.fields.stylistId).toMatch(/one stylist/);
@@ -121,11 +145,21 @@ describe('free times to move a sitting to (desk)', () => {
     expect(third.body.error.fields.sitting).toMatch(/2 sitting/);
 
     const cutter = await insertUser(t.testDb.db, s.salon.salonId, 'stylist', { skills: ['cut'] });
-    const one = await book(s.desk$, { clientId: s.client.clientId!, serviceId: toner, stepPlan: tonerPlan, stylistId: s.ana.staffId!, start: localIso(futureWeekday(5, 3), '09:00') });
+    const one = await book(s.desk$, {
+      clientId: s.client.clientId!,
+      serviceId: toner,
+      stepPlan: tonerPlan,
+      stylistId: s.ana.staffId!,
+      start: localIso(futureWeekday(5, 3), '09:00'),
+    });
     const noSkill = await s.desk$.get(`/api/bookings/${one.id}/move-times?stylistId=${cutter.staffId}`);
     expect(noSkill.status).toBe(400);
     expect(noSkill.body.error.fields.stylistId).toMatch(/does not have the "colour" skill/);
-    const moveNoSkill = await s.desk$.write('post', `/api/bookings/${one.id}/move`, { sitting: 1, start: localIso(futureWeekday(5, 3), '11:00'), stylistId: cutter.staffId });
+    const moveNoSkill = await s.desk$.write('post', `/api/bookings/${one.id}/move`, {
+      sitting: 1,
+      start: localIso(futureWeekday(5, 3), '11:00'),
+      stylistId: cutter.staffId,
+    });
     expect(moveNoSkill.status).toBe(400);
     expect(moveNoSkill.body.error.fields.stylistId).toMatch(/skill/);
     // With a stylist who has the skill, the times are theirs.
@@ -135,7 +169,13 @@ describe('free times to move a sitting to (desk)', () => {
   });
 
   it('answers hostile or malformed queries with 400 naming the field, and a cancelled booking with 409', async () => {
-    const one = await book(s.desk$, { clientId: s.client.clientId!, serviceId: toner, stepPlan: tonerPlan, stylistId: s.ana.staffId!, start: localIso(futureWeekday(6, 3), '09:00') });
+    const one = await book(s.desk$, {
+      clientId: s.client.clientId!,
+      serviceId: toner,
+      stepPlan: tonerPlan,
+      stylistId: s.ana.staffId!,
+      start: localIso(futureWeekday(6, 3), '09:00'),
+    });
     const cases: [string, string][] = [
       ['sitting=0', 'sitting'],
       ['sitting=99999999999999999999', 'sitting'],
@@ -165,7 +205,14 @@ describe('a moved sitting keeps its chair while that chair is free', () => {
     const friday = futureWeekday(5, 4);
     const [chair1, chair2] = s.salon.chairs;
     // Booked in Chair 2 on purpose: the engine, left alone, picks Chair 1 (the first free chair by name).
-    const booked = await book(s.desk$, { clientId: s.client.clientId!, serviceId: toner, stepPlan: tonerPlan, stylistId: s.ana.staffId!, start: localIso(friday, '09:00'), chairIds: [chair2] });
+    const booked = await book(s.desk$, {
+      clientId: s.client.clientId!,
+      serviceId: toner,
+      stepPlan: tonerPlan,
+      stylistId: s.ana.staffId!,
+      start: localIso(friday, '09:00'),
+      chairIds: [chair2],
+    });
     expect(booked.sittings[0].chairId).toBe(chair2);
 
     const later = await s.desk$.write('post', `/api/bookings/${booked.id}/move`, { sitting: 1, start: localIso(friday, '11:00') });
@@ -177,7 +224,14 @@ describe('a moved sitting keeps its chair while that chair is free', () => {
 
     // Bo's client takes Chair 2 at 14:00; moving there puts the sitting in Chair 1 and says so by the chair it answers.
     const other = await insertUser(t.testDb.db, s.salon.salonId, 'client');
-    await book(s.desk$, { clientId: other.clientId!, serviceId: toner, stepPlan: tonerPlan, stylistId: s.bo.staffId!, start: localIso(friday, '14:00'), chairIds: [chair2] });
+    await book(s.desk$, {
+      clientId: other.clientId!,
+      serviceId: toner,
+      stepPlan: tonerPlan,
+      stylistId: s.bo.staffId!,
+      start: localIso(friday, '14:00'),
+      chairIds: [chair2],
+    });
     const taken = await s.desk$.write('post', `/api/bookings/${booked.id}/move`, { sitting: 1, start: localIso(friday, '14:00') });
     expect(taken.status).toBe(200);
     expect(taken.body.sittings[0]).toMatchObject({ chairId: chair1, chairName: 'Chair 1' });
@@ -190,17 +244,28 @@ describe('a moved sitting keeps its chair while that chair is free', () => {
 
     // A chair out of service that day is never kept (nor one of another salon).
     const fridayStart = DateTime.fromISO(friday, { zone: ZONE });
-    await t.testDb.db.insertInto('out_of_service').values({ salon_id: s.salon.salonId, chair_id: chair2, during: `[${fridayStart.toISO()},${fridayStart.plus({ days: 1 }).toISO()})` }).execute();
+    await t.testDb.db
+      .insertInto('out_of_service')
+      .values({ salon_id: s.salon.salonId, chair_id: chair2, during: `[${fridayStart.toISO()},${fridayStart.plus({ days: 1 }).toISO()})` })
+      .execute();
     const closedChair = await s.desk$.write('post', `/api/bookings/${booked.id}/move`, { sitting: 1, start: localIso(friday, '16:00'), chairId: chair2 });
     expect(closedChair.status).toBe(200);
     expect(closedChair.body.sittings[0].chairId).toBe(chair1);
     const elsewhere = await insertSalon(t.testDb.db, { chairs: 1 });
-    const foreign = await s.desk$.write('post', `/api/bookings/${booked.id}/move`, { sitting: 1, start: localIso(friday, '16:30'), chairId: elsewhere.chairs[0] });
+    const foreign = await s.desk$.write('post', `/api/bookings/${booked.id}/move`, {
+      sitting: 1,
+      start: localIso(friday, '16:30'),
+      chairId: elsewhere.chairs[0],
+    });
     expect(foreign.status).toBe(200);
     expect(foreign.body.sittings[0].chairId).toBe(chair1);
 
     // The history writes each move with the sitting's chair before and after.
-    const history = (await s.desk$.get(`/api/bookings/${booked.id}/history`)).body.entries as { action: string; before: { sittings: { chair: string }[] }; after: { sittings: { chair: string }[] } }[];
+    const history = (await s.desk$.get(`/api/bookings/${booked.id}/history`)).body.entries as {
+      action: string;
+      before: { sittings: { chair: string }[] };
+      after: { sittings: { chair: string }[] };
+    }[];
     const toChair1 = history.find((e) => e.before?.sittings[0].chair === 'Chair 2' && e.after?.sittings[0].chair === 'Chair 1');
     expect(toChair1?.action).toBe('moved sitting 1');
   });
@@ -216,7 +281,13 @@ describe('what cancelling does to the deposit, read before confirming (desk)', (
    * engine puts each one's second sitting at 09:00 on a following day.
    */
   const colourBooking = async (clientId = s.client.clientId!) =>
-    book(s.desk$, { clientId, serviceId: colour, stepPlan: correctionPlan, stylistId: s.ana.staffId!, start: localIso(futureWeekday((2 + (slot++ % 5)) as 2 | 3 | 4 | 5 | 6, 3), '12:00') });
+    book(s.desk$, {
+      clientId,
+      serviceId: colour,
+      stepPlan: correctionPlan,
+      stylistId: s.ana.staffId!,
+      start: localIso(futureWeekday((2 + (slot++ % 5)) as 2 | 3 | 4 | 5 | 6, 3), '12:00'),
+    });
   const setPolicy = (window: number, keeps: 'deposit' | 'nothing' = 'deposit') =>
     t.testDb.db.updateTable('salons').set({ cancellation_window_hours: window, cancellation_keeps: keeps }).where('id', '=', s.salon.salonId).execute();
 
@@ -232,7 +303,9 @@ describe('what cancelling does to the deposit, read before confirming (desk)', (
     const terms = await s.desk$.get(`/api/bookings/${booked.id}/cancel-terms`);
     expect(terms.status).toBe(200);
     expect(terms.body).toMatchObject({ depositOutcome: 'refunded', why: 'outside_window' });
-    expect(terms.body.message).toBe("The $50.00 deposit is refunded: the first sitting is more than 48 hours away, outside the salon's 48-hour cancellation window.");
+    expect(terms.body.message).toBe(
+      "The $50.00 deposit is refunded: the first sitting is more than 48 hours away, outside the salon's 48-hour cancellation window.",
+    );
     const cancelled = await s.desk$.write('post', `/api/bookings/${booked.id}/cancel`, { reason: 'Client asked' });
     expect(cancelled.body.depositOutcome).toBe('refunded');
     expect((await s.desk$.get(`/api/bookings/${booked.id}/cancel-terms`)).status).toBe(409);
@@ -250,7 +323,11 @@ describe('what cancelling does to the deposit, read before confirming (desk)', (
 
     // A new test reads positive (a reaction): the record now blocks this colour.
     const recorded = await s.desk$.write('post', `/api/clients/${reacting.clientId!}/skin-tests`, {
-      appliedAt: new Date(Date.now() - 3 * 24 * HOUR).toISOString(), readAt: new Date(Date.now() - 24 * HOUR).toISOString(), result: 'positive', product: 'Permanent colour with 6 % developer', notes: 'Redness behind the ear',
+      appliedAt: new Date(Date.now() - 3 * 24 * HOUR).toISOString(),
+      readAt: new Date(Date.now() - 24 * HOUR).toISOString(),
+      result: 'positive',
+      product: 'Permanent colour with 6 % developer',
+      notes: 'Redness behind the ear',
     });
     expect(recorded.status).toBe(201);
     const blocked = await s.desk$.get(`/api/bookings/${booked.id}/cancel-terms`);
@@ -275,10 +352,18 @@ describe('what cancelling does to the deposit, read before confirming (desk)', (
     await setPolicy(720);
     const free = await colourBooking();
     await t.testDb.db.updateTable('bookings').set({ deposit_cents: 0 }).where('id', '=', free.id).execute();
-    expect((await s.desk$.get(`/api/bookings/${free.id}/cancel-terms`)).body).toMatchObject({ depositOutcome: null, why: 'no_deposit', message: 'There is no deposit on this booking.' });
+    expect((await s.desk$.get(`/api/bookings/${free.id}/cancel-terms`)).body).toMatchObject({
+      depositOutcome: null,
+      why: 'no_deposit',
+      message: 'There is no deposit on this booking.',
+    });
 
     const held = await colourBooking();
-    await t.testDb.db.updateTable('bookings').set({ status: 'held', held_until: new Date(Date.now() + HOUR) }).where('id', '=', held.id).execute();
+    await t.testDb.db
+      .updateTable('bookings')
+      .set({ status: 'held', held_until: new Date(Date.now() + HOUR) })
+      .where('id', '=', held.id)
+      .execute();
     expect((await s.desk$.get(`/api/bookings/${held.id}/cancel-terms`)).body).toMatchObject({ depositOutcome: null, why: 'not_paid' });
     const cancelled = await s.desk$.write('post', `/api/bookings/${held.id}/cancel`, { reason: 'Left unpaid' });
     expect(cancelled.body.depositOutcome).toBeNull();
@@ -302,12 +387,28 @@ describe('the day book and the week carry the salon’s opening hours', () => {
     // though the week was just answered from the read cache (the hours move the book version).
     const thursday = futureWeekday(4, 2);
     await t.testDb.db.deleteFrom('salon_hours').where('salon_id', '=', s.salon.salonId).execute();
-    await t.testDb.db.insertInto('salon_hours').values([
-      { salon_id: s.salon.salonId, rrule: `RRULE:FREQ=WEEKLY;BYDAY=TU,WE,TH,FR\nEXDATE;VALUE=DATE:${thursday.replaceAll('-', '')}`, start_time: '09:00', end_time: '21:00' },
-      { salon_id: s.salon.salonId, rrule: 'FREQ=WEEKLY;BYDAY=SA', start_time: '09:00', end_time: '17:00' },
-    ]).execute();
+    await t.testDb.db
+      .insertInto('salon_hours')
+      .values([
+        {
+          salon_id: s.salon.salonId,
+          rrule: `RRULE:FREQ=WEEKLY;BYDAY=TU,WE,TH,FR\nEXDATE;VALUE=DATE:${thursday.replaceAll('-', '')}`,
+          start_time: '09:00',
+          end_time: '21:00',
+        },
+        { salon_id: s.salon.salonId, rrule: 'FREQ=WEEKLY;BYDAY=SA', start_time: '09:00', end_time: '17:00' },
+      ])
+      .execute();
     const after = await s.desk$.get(`/api/desk/week?date=${tuesday}`);
-    expect(after.body.days.map((d: { hours: { end: string }[] }) => d.hours.map((h) => h.end).join())).toEqual(['', '21:00', '21:00', '', '21:00', '17:00', '']);
+    expect(after.body.days.map((d: { hours: { end: string }[] }) => d.hours.map((h) => h.end).join())).toEqual([
+      '',
+      '21:00',
+      '21:00',
+      '',
+      '21:00',
+      '17:00',
+      '',
+    ]);
     expect((await s.desk$.get(`/api/desk/day?date=${thursday}`)).body.hours).toEqual([]);
   });
 });
@@ -317,10 +418,18 @@ describe('a time held online', () => {
     const s = await salonWithDesk();
     const db = t.testDb.db;
     const slug = (await db.selectFrom('salons').select('slug').where('id', '=', s.salon.salonId).executeTakeFirstOrThrow()).slug;
-    const consultation = await insertPlannedService(db, s.salon.salonId, { plan: { sittings: [{ steps: [{ kind: 'hands_on', label: 'Consultation', product: 'none', minutes: 30 }] }] }, depositCents: 2500 });
+    const consultation = await insertPlannedService(db, s.salon.salonId, {
+      plan: { sittings: [{ steps: [{ kind: 'hands_on', label: 'Consultation', product: 'none', minutes: 30 }] }] },
+      depositCents: 2500,
+    });
     await db.updateTable('services').set({ online_bookable: true, category: 'consultation' }).where('id', '=', consultation).execute();
     const visitor = await anonymousAgent(t.app);
-    const held = await visitor.write('post', '/api/public/holds', { salonSlug: slug, serviceId: consultation, stylistId: s.ana.staffId, start: localIso(futureWeekday(2, 3), '10:00') });
+    const held = await visitor.write('post', '/api/public/holds', {
+      salonSlug: slug,
+      serviceId: consultation,
+      stylistId: s.ana.staffId,
+      start: localIso(futureWeekday(2, 3), '10:00'),
+    });
     expect(held.status).toBe(201);
     const history = await s.desk$.get(`/api/bookings/${held.body.holdId}/history`);
     expect(history.body.entries).toMatchObject([{ action: 'held online', actor: null, after: { status: 'held' } }]);

@@ -55,7 +55,14 @@ describe('the database refuses double booking (exclusion constraints)', () => {
   });
 
   it("refuses overlapping hands_on/basin work of one stylist, but lets a developing step overlap the stylist's other work", async () => {
-    await book({ stylistId: ana.staffId!, chairId: salon.chairs[1], steps: [['hands_on', '2027-03-05T17:00:00Z', '2027-03-05T17:30:00Z'], ['developing', '2027-03-05T17:30:00Z', '2027-03-05T18:10:00Z']] });
+    await book({
+      stylistId: ana.staffId!,
+      chairId: salon.chairs[1],
+      steps: [
+        ['hands_on', '2027-03-05T17:00:00Z', '2027-03-05T17:30:00Z'],
+        ['developing', '2027-03-05T17:30:00Z', '2027-03-05T18:10:00Z'],
+      ],
+    });
     await expectRefused(
       book({ stylistId: ana.staffId!, chairId: salon.chairs[2], steps: [['basin', '2027-03-05T17:20:00Z', '2027-03-05T17:35:00Z', salon.basins[1]]] }),
       'steps_no_hands_overlap',
@@ -75,7 +82,11 @@ describe('the database refuses double booking (exclusion constraints)', () => {
   it('a cancelled booking frees its chair', async () => {
     const id = await book({ stylistId: lee.staffId!, chairId: salon.chairs[2], steps: [['hands_on', '2027-03-07T17:00:00Z', '2027-03-07T17:45:00Z']] });
     await t.db.updateTable('sittings').set({ live: false }).where('booking_id', '=', id).execute();
-    await t.db.updateTable('booking_steps').set({ live: false }).where('sitting_id', 'in', t.db.selectFrom('sittings').select('id').where('booking_id', '=', id)).execute();
+    await t.db
+      .updateTable('booking_steps')
+      .set({ live: false })
+      .where('sitting_id', 'in', t.db.selectFrom('sittings').select('id').where('booking_id', '=', id))
+      .execute();
     const again = await book({ stylistId: lee.staffId!, chairId: salon.chairs[2], steps: [['hands_on', '2027-03-07T17:00:00Z', '2027-03-07T17:45:00Z']] });
     expect(again).not.toBe(id);
   });

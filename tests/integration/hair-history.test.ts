@@ -22,7 +22,10 @@ beforeAll(async () => {
   const db = t.testDb.db;
   const { salonId } = await insertSalon(db);
   [client, otherClient, stylist, desk] = await Promise.all([
-    insertUser(db, salonId, 'client'), insertUser(db, salonId, 'client'), insertUser(db, salonId, 'stylist'), insertUser(db, salonId, 'front_desk'),
+    insertUser(db, salonId, 'client'),
+    insertUser(db, salonId, 'client'),
+    insertUser(db, salonId, 'stylist'),
+    insertUser(db, salonId, 'front_desk'),
   ]);
   otherSalonStylist = await insertUser(db, (await insertSalon(db)).salonId, 'stylist');
 });

@@ -55,13 +55,21 @@ describe('markup in text fields', () => {
   it('goes out as plain text in the e-mail and SMS, and escaped in the calendar file', async () => {
     const date = futureWeekday(3, 3);
     const booked = await desk.write('post', '/api/bookings', {
-      clientId, serviceId, stepPlan: plan, stylistId: stylist.staffId, start: localIso(date, '10:00'), idempotencyKey: 'hostile-text-1',
+      clientId,
+      serviceId,
+      stepPlan: plan,
+      stylistId: stylist.staffId,
+      start: localIso(date, '10:00'),
+      idempotencyKey: 'hostile-text-1',
     });
     expect(booked.status).toBe(201);
     // The confirmation SMS may wait for the end of quiet hours: send as of its own planned time.
     const smsRow = await t.testDb.db
-      .selectFrom('messages').select('send_at')
-      .where('booking_id', '=', booked.body.id).where('kind', '=', 'confirmation').where('channel', '=', 'sms')
+      .selectFrom('messages')
+      .select('send_at')
+      .where('booking_id', '=', booked.body.id)
+      .where('kind', '=', 'confirmation')
+      .where('channel', '=', 'sms')
       .executeTakeFirstOrThrow();
     await sendDueMessages(t.testDb.db, t.outside, smsRow.send_at, booked.body.id);
 
@@ -83,7 +91,9 @@ describe('markup in text fields', () => {
     // An independent RFC 5545 parser (ical.js) reads every value back exactly as typed.
     const event = new ICAL.Component(ICAL.parse(ics)).getFirstSubcomponent('vevent')!;
     expect(event.getFirstPropertyValue('location')).toBe(ADDRESS);
-    expect(event.getFirstPropertyValue('summary')).toBe(`${SERVICE} at ${(await t.testDb.db.selectFrom('salons').select('name').where('id', '=', salon.salonId).executeTakeFirstOrThrow()).name}`);
+    expect(event.getFirstPropertyValue('summary')).toBe(
+      `${SERVICE} at ${(await t.testDb.db.selectFrom('salons').select('name').where('id', '=', salon.salonId).executeTakeFirstOrThrow()).name}`,
+    );
   });
 });
 

@@ -53,7 +53,16 @@ it('a server killed between claim and send: after a restart the message is sent 
   await db.updateTable('clients').set({ phone }).where('id', '=', client.clientId!).execute();
   const { id } = await db
     .insertInto('messages')
-    .values({ salon_id: salon.salonId, client_id: client.clientId!, kind: 'reminder_24h', channel: 'sms', to_address: phone, body: 'Crash test reminder', send_at: new Date(), dedupe_key: `crash:${Date.now()}` })
+    .values({
+      salon_id: salon.salonId,
+      client_id: client.clientId!,
+      kind: 'reminder_24h',
+      channel: 'sms',
+      to_address: phone,
+      body: 'Crash test reminder',
+      send_at: new Date(),
+      dedupe_key: `crash:${Date.now()}`,
+    })
     .returning('id')
     .executeTakeFirstOrThrow();
   const row = () => db.selectFrom('messages').select(['status', 'attempts', 'provider_ref']).where('id', '=', id).executeTakeFirstOrThrow();

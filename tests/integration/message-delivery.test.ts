@@ -29,7 +29,13 @@ describe('delivery', () => {
   it('a booking moved five times: only the latest reminders go out', async () => {
     const c = await m.newClient();
     const id = await m.book(serviceId, plan, '2027-06-01', '10:00', c.clientId!);
-    const moves = [['2027-06-02', '11:00'], ['2027-06-03', '12:00'], ['2027-06-04', '13:00'], ['2027-06-05', '14:00'], ['2027-06-08', '15:00']];
+    const moves = [
+      ['2027-06-02', '11:00'],
+      ['2027-06-03', '12:00'],
+      ['2027-06-04', '13:00'],
+      ['2027-06-05', '14:00'],
+      ['2027-06-08', '15:00'],
+    ];
     for (const [date, hhmm] of moves) {
       expect((await m.desk$.write('post', `/api/bookings/${id}/move`, { sitting: 1, start: localIso(date, hhmm) })).status).toBe(200);
     }
@@ -62,7 +68,16 @@ describe('delivery', () => {
     for (const [i, c] of clients.entries()) {
       const row = await db()
         .insertInto('messages')
-        .values({ salon_id: salon.salonId, client_id: c.clientId!, kind: 'reminder_24h', channel: 'sms', to_address: c.phone, body: `outage text ${i + 1}`, send_at: new Date(T + i * 2 * 60_000), dedupe_key: `outage:${i}:${T}` })
+        .values({
+          salon_id: salon.salonId,
+          client_id: c.clientId!,
+          kind: 'reminder_24h',
+          channel: 'sms',
+          to_address: c.phone,
+          body: `outage text ${i + 1}`,
+          send_at: new Date(T + i * 2 * 60_000),
+          dedupe_key: `outage:${i}:${T}`,
+        })
         .returning('id')
         .executeTakeFirstOrThrow();
       ids.push(row.id);
@@ -85,7 +100,16 @@ describe('delivery', () => {
     const due = new Date(Date.now() + 2500);
     const { id } = await db()
       .insertInto('messages')
-      .values({ salon_id: salon.salonId, client_id: c.clientId!, kind: 'reminder_24h', channel: 'sms', to_address: c.phone, body: 'on the dot', send_at: due, dedupe_key: `exact:${due.getTime()}` })
+      .values({
+        salon_id: salon.salonId,
+        client_id: c.clientId!,
+        kind: 'reminder_24h',
+        channel: 'sms',
+        to_address: c.phone,
+        body: 'on the dot',
+        send_at: due,
+        dedupe_key: `exact:${due.getTime()}`,
+      })
       .returning('id')
       .executeTakeFirstOrThrow();
     const queued: string[] = [];

@@ -20,11 +20,15 @@ const Z = 'America/Denver';
 const db = () => t.testDb.db;
 // An hour in the chair: lightener on for 20 min (within the 50 min processing limit), rinsed, then toned and finished.
 const hour: StepPlan = {
-  sittings: [{ steps: [
-    { kind: 'hands_on', label: 'Apply lightener', product: 'lightener', minutes: 20 },
-    { kind: 'basin', label: 'Rinse', product: 'none', minutes: 10 },
-    { kind: 'hands_on', label: 'Tone and finish', product: 'toner_direct', minutes: 30 },
-  ] }],
+  sittings: [
+    {
+      steps: [
+        { kind: 'hands_on', label: 'Apply lightener', product: 'lightener', minutes: 20 },
+        { kind: 'basin', label: 'Rinse', product: 'none', minutes: 10 },
+        { kind: 'hands_on', label: 'Tone and finish', product: 'toner_direct', minutes: 30 },
+      ],
+    },
+  ],
 };
 const patch: StepPlan = { sittings: [{ steps: [{ kind: 'hands_on', label: 'Apply skin test', product: 'none', minutes: 15 }] }] };
 let lightening: string;
@@ -37,7 +41,10 @@ beforeAll(async () => {
   salon = await insertSalon(db());
   // Open Mondays too, so sittings can fall the day after each daylight-saving change (both on Sundays).
   await db().insertInto('salon_hours').values({ salon_id: salon.salonId, rrule: 'FREQ=WEEKLY;BYDAY=MO', start_time: '09:00', end_time: '21:00' }).execute();
-  ana = await insertUser(db(), salon.salonId, 'stylist', { skills: ['colour', 'cut'], hours: { rrule: 'FREQ=WEEKLY;BYDAY=MO,TU,WE,TH,FR,SA', start: '09:00', end: '21:00' } });
+  ana = await insertUser(db(), salon.salonId, 'stylist', {
+    skills: ['colour', 'cut'],
+    hours: { rrule: 'FREQ=WEEKLY;BYDAY=MO,TU,WE,TH,FR,SA', start: '09:00', end: '21:00' },
+  });
   lightening = await insertPlannedService(db(), salon.salonId, { plan: hour, name: 'Full lightening' });
   correction = await insertPlannedService(db(), salon.salonId, { plan: correctionPlan, name: 'Colour correction' });
   skinTest = await insertPlannedService(db(), salon.salonId, { plan: patch, name: 'Skin test', category: 'skin_test', depositCents: 0 });
@@ -70,7 +77,10 @@ describe('message kinds, each at its instant in the salon’s zone', () => {
     const id = await m.book(correction, correctionPlan, '2027-03-13', '09:00', c.clientId!);
     expect((await m.desk$.write('post', `/api/bookings/${id}/move`, { sitting: 2, start: localIso('2027-03-15', '10:00') })).status).toBe(200);
     // Sunday 2027-03-14 18:00 MDT = 2027-03-15T00:00Z (not 01:00Z, which the winter offset would give).
-    expect(await m.planned(id, 'day_before_sitting')).toEqual(['day_before_sitting email 2027-03-15T00:00:00.000Z', 'day_before_sitting sms 2027-03-15T00:00:00.000Z']);
+    expect(await m.planned(id, 'day_before_sitting')).toEqual([
+      'day_before_sitting email 2027-03-15T00:00:00.000Z',
+      'day_before_sitting sms 2027-03-15T00:00:00.000Z',
+    ]);
     const sms = (await m.messagesOf(id)).find((r) => r.kind === 'day_before_sitting' && r.status === 'queued' && r.channel === 'sms')!;
     expect(sms.body).toMatch(/tomorrow is day 2 of 2 of your Colour correction, Monday 15 March 2027 at 10:00 AM MDT/);
   });
@@ -112,7 +122,12 @@ describe('follow-up rules (owner)', () => {
     const no = await m.newClient();
     await db().updateTable('clients').set({ marketing_opt_in: true }).where('id', '=', yes.clientId!).execute();
     const a = await m.book(lightening, hour, '2027-02-20', '10:00', yes.clientId!);
-    const res = await owner$.write('post', '/api/owner/follow-up-rules', { serviceId: lightening, title: 'Toner <b>refresh</b>', text: 'Your lightening is 6 weeks old: a toner refresh keeps it bright & cool.', rrule: 'FREQ=WEEKLY;INTERVAL=6;COUNT=1' });
+    const res = await owner$.write('post', '/api/owner/follow-up-rules', {
+      serviceId: lightening,
+      title: 'Toner <b>refresh</b>',
+      text: 'Your lightening is 6 weeks old: a toner refresh keeps it bright & cool.',
+      rrule: 'FREQ=WEEKLY;INTERVAL=6;COUNT=1',
+    });
     expect(res.status).toBe(201);
     const b = await m.book(lightening, hour, '2027-02-20', '12:00', no.clientId!);
     // RFC 5545 (3.3.10): WEEKLY;INTERVAL=6 from DTSTART Sat 2027-02-20 11:00 (sitting end) → Sat 2027-04-03 11:00 local,
@@ -120,7 +135,12 @@ describe('follow-up rules (owner)', () => {
     expect(await m.planned(a, 'follow_up')).toEqual(['follow_up email 2027-04-03T17:00:00.000Z', 'follow_up sms 2027-04-03T17:00:00.000Z']);
     expect(await m.planned(b, 'follow_up')).toEqual([]);
 
-    const edit = await owner$.write('put', `/api/owner/follow-up-rules/${res.body.id}`, { serviceId: lightening, title: 'Toner refresh', text: 'Time for a toner refresh?', rrule: 'FREQ=WEEKLY;INTERVAL=8;COUNT=1' });
+    const edit = await owner$.write('put', `/api/owner/follow-up-rules/${res.body.id}`, {
+      serviceId: lightening,
+      title: 'Toner refresh',
+      text: 'Time for a toner refresh?',
+      rrule: 'FREQ=WEEKLY;INTERVAL=8;COUNT=1',
+    });
     expect(edit.status).toBe(200);
     expect(edit.body.version).toBe(2);
     expect(await m.planned(a, 'follow_up')).toEqual(['follow_up email 2027-04-17T17:00:00.000Z', 'follow_up sms 2027-04-17T17:00:00.000Z']);
@@ -132,7 +152,9 @@ describe('follow-up rules (owner)', () => {
     const end = new Date(localIso('2027-01-09', '15:00'));
     // Every 4 weeks, 3 sends: 2027-02-06, 03-06 (both MST, UTC−7) and 04-03 (MDT, UTC−6), at 15:00 local.
     expect(followUpTimes('FREQ=WEEKLY;INTERVAL=4;COUNT=3', end, Z).map((d) => d.toISOString())).toEqual([
-      '2027-02-06T22:00:00.000Z', '2027-03-06T22:00:00.000Z', '2027-04-03T21:00:00.000Z',
+      '2027-02-06T22:00:00.000Z',
+      '2027-03-06T22:00:00.000Z',
+      '2027-04-03T21:00:00.000Z',
     ]);
   });
 });
@@ -159,7 +181,15 @@ describe('staff messages, at 18:00 in the salon’s zone', () => {
     // IANA tz database: Sunday 2027-03-14 is the first MDT day (UTC−6), so 18:00 local = 2027-03-15T00:00Z.
     expect(await planStaffMessages(db(), new Date('2027-03-14T23:59:00Z'))).toEqual([]);
     const planned = await planStaffMessages(db(), new Date('2027-03-15T00:00:00Z'));
-    const rows = await db().selectFrom('messages').selectAll().where('id', 'in', planned.map((p) => p.id)).execute();
+    const rows = await db()
+      .selectFrom('messages')
+      .selectAll()
+      .where(
+        'id',
+        'in',
+        planned.map((p) => p.id),
+      )
+      .execute();
     const stylistList = rows.find((r) => r.kind === 'stylist_day_list')!;
     expect(stylistList.to_address).toBe(ana.email);
     expect(stylistList.body).toMatch(/2:00 PM – 3:00 PM {2}Client \d+: Full lightening/);

@@ -51,7 +51,9 @@ describe('client preferences', () => {
     const second = await m.book(serviceId, plan, '2027-05-05', '10:00', c.clientId!);
     expect((await live(second)).filter((k) => k.endsWith('sms'))).toEqual([]);
     // Back to both: the reminders still ahead get their texts again (not the confirmation: it was sent).
-    expect((await card(c.clientId!, { name: 'Jo Rivera', email: c.email, phone: '+1 720 555 0199', messageChannel: 'both', marketingOptIn: false })).status).toBe(200);
+    expect(
+      (await card(c.clientId!, { name: 'Jo Rivera', email: c.email, phone: '+1 720 555 0199', messageChannel: 'both', marketingOptIn: false })).status,
+    ).toBe(200);
     expect((await live(first)).filter((k) => k.endsWith('sms')).sort()).toEqual(['reminder_24h sms', 'reminder_48h sms']);
     const detail = await m.desk$.get(`/api/clients/${c.clientId}`);
     expect(detail.body).toMatchObject({ phone: '+17205550199', messageChannel: 'both', marketingOptIn: false, smsStoppedAt: null });
@@ -77,26 +79,51 @@ describe('client preferences', () => {
 describe('invalid phone and e-mail', () => {
   it('at sign-up: a clear error naming the field, nothing stored', async () => {
     const anon = await anonymousAgent(t.app);
-    const before = await db().selectFrom('users').select((eb) => eb.fn.countAll<string>().as('n')).executeTakeFirstOrThrow();
-    for (const [phone, email, field] of [['555-12', 'ok@example.test', 'phone'], ['+1 720 555 01999', 'ok2@example.test', 'phone'], ['+1 720 555 0142', 'not-an-email', 'email']]) {
+    const before = await db()
+      .selectFrom('users')
+      .select((eb) => eb.fn.countAll<string>().as('n'))
+      .executeTakeFirstOrThrow();
+    for (const [phone, email, field] of [
+      ['555-12', 'ok@example.test', 'phone'],
+      ['+1 720 555 01999', 'ok2@example.test', 'phone'],
+      ['+1 720 555 0142', 'not-an-email', 'email'],
+    ]) {
       const res = await anon.write('post', '/api/sign-up', { name: 'Pat', email, phone, password: 'long-enough-passphrase' });
       expect(res.status, `${phone} ${email}`).toBe(400);
       expect(Object.keys(res.body.error.fields)).toEqual([field]);
     }
-    expect(await db().selectFrom('users').select((eb) => eb.fn.countAll<string>().as('n')).executeTakeFirstOrThrow()).toEqual(before);
-    const ok = await anon.write('post', '/api/sign-up', { name: 'Pat', email: 'pat.e164@example.test', phone: '720.555.0142', password: 'long-enough-passphrase' });
+    expect(
+      await db()
+        .selectFrom('users')
+        .select((eb) => eb.fn.countAll<string>().as('n'))
+        .executeTakeFirstOrThrow(),
+    ).toEqual(before);
+    const ok = await anon.write('post', '/api/sign-up', {
+      name: 'Pat',
+      email: 'pat.e164@example.test',
+      phone: '720.555.0142',
+      password: 'long-enough-passphrase',
+    });
     expect(ok.status).toBe(201);
-    expect((await db().selectFrom('clients').select('phone').where('email', '=', 'pat.e164@example.test').executeTakeFirstOrThrow()).phone).toBe('+17205550142');
+    expect((await db().selectFrom('clients').select('phone').where('email', '=', 'pat.e164@example.test').executeTakeFirstOrThrow()).phone).toBe(
+      '+17205550142',
+    );
   });
 
   it('on the client card: a clear error naming the field, nothing stored', async () => {
     const c = await m.newClient();
-    for (const [body, field] of [[{ phone: '12345' }, 'phone'], [{ email: 'jo@' }, 'email']] as const) {
+    for (const [body, field] of [
+      [{ phone: '12345' }, 'phone'],
+      [{ email: 'jo@' }, 'email'],
+    ] as const) {
       const res = await card(c.clientId!, { name: 'Jo', email: c.email, phone: c.phone, messageChannel: 'both', marketingOptIn: false, ...(body as object) });
       expect(res.status).toBe(400);
       expect(Object.keys(res.body.error.fields)).toEqual([field]);
     }
-    expect(await db().selectFrom('clients').select(['phone', 'email']).where('id', '=', c.clientId!).executeTakeFirstOrThrow()).toEqual({ phone: c.phone, email: c.email });
+    expect(await db().selectFrom('clients').select(['phone', 'email']).where('id', '=', c.clientId!).executeTakeFirstOrThrow()).toEqual({
+      phone: c.phone,
+      email: c.email,
+    });
   });
 });
 
@@ -122,7 +149,12 @@ describe('inbound STOP and START', () => {
   });
 
   it('refuses a webhook call the provider did not sign', async () => {
-    const res = await (await anonymousAgent(t.app)).agent.post('/webhooks/sms').type('form').send({ From: '+17205550100', Body: 'STOP', MessageSid: 'SMforged' });
+    const res = await (
+      await anonymousAgent(t.app)
+    ).agent
+      .post('/webhooks/sms')
+      .type('form')
+      .send({ From: '+17205550100', Body: 'STOP', MessageSid: 'SMforged' });
     expect(res.status).toBe(403);
   });
 

@@ -40,7 +40,14 @@ async function newClient() {
 }
 
 async function book(date: string, hhmm: string, clientId: string): Promise<string> {
-  const res = await desk$.write('post', '/api/bookings', { clientId, serviceId, stepPlan: plan, stylistId: ana.staffId, start: localIso(date, hhmm), idempotencyKey: `msg-${date}-${hhmm}-${clientId}` });
+  const res = await desk$.write('post', '/api/bookings', {
+    clientId,
+    serviceId,
+    stepPlan: plan,
+    stylistId: ana.staffId,
+    start: localIso(date, hhmm),
+    idempotencyKey: `msg-${date}-${hhmm}-${clientId}`,
+  });
   expect(res.status).toBe(201);
   return res.body.id;
 }
@@ -48,7 +55,9 @@ async function book(date: string, hhmm: string, clientId: string): Promise<strin
 const messagesOf = (bookingId: string) =>
   db().selectFrom('messages').selectAll().where('booking_id', '=', bookingId).orderBy('send_at').orderBy('channel').execute();
 const planned = async (bookingId: string) =>
-  (await messagesOf(bookingId)).filter((m) => m.status !== 'dropped').map((m) => `${m.kind} ${m.channel} ${m.kind === 'confirmation' ? '' : iso(m.send_at)}`.trim());
+  (await messagesOf(bookingId))
+    .filter((m) => m.status !== 'dropped')
+    .map((m) => `${m.kind} ${m.channel} ${m.kind === 'confirmation' ? '' : iso(m.send_at)}`.trim());
 const smsTo = (phone: string) => t.sms.messages.filter((m) => m.to === phone);
 async function reminderSms(bookingId: string, kind = 'reminder_48h') {
   return (await messagesOf(bookingId)).find((m) => m.kind === kind && m.channel === 'sms' && m.status !== 'dropped')!;
@@ -66,11 +75,15 @@ describe('planning a booking’s messages', () => {
     // Sitting Mon 2027-03-15 10:00 MDT = 16:00Z. 24 h: Sun 03-14 10:00 MDT = 16:00Z.
     // 48 h: Sat 03-13 10:00 MST = 17:00Z (whole days on the salon's calendar, not 48 × 3600 s, which is 09:00 MST).
     expect(await planned(id)).toEqual([
-      'confirmation email', 'confirmation sms',
-      'reminder_48h email 2027-03-13T17:00:00.000Z', 'reminder_48h sms 2027-03-13T17:00:00.000Z',
-      'reminder_24h email 2027-03-14T16:00:00.000Z', 'reminder_24h sms 2027-03-14T16:00:00.000Z',
+      'confirmation email',
+      'confirmation sms',
+      'reminder_48h email 2027-03-13T17:00:00.000Z',
+      'reminder_48h sms 2027-03-13T17:00:00.000Z',
+      'reminder_24h email 2027-03-14T16:00:00.000Z',
+      'reminder_24h sms 2027-03-14T16:00:00.000Z',
       // A colour service: aftercare the next day at 10:00 salon time (Tue 03-16 10:00 MDT = 16:00Z).
-      'aftercare email 2027-03-16T16:00:00.000Z', 'aftercare sms 2027-03-16T16:00:00.000Z',
+      'aftercare email 2027-03-16T16:00:00.000Z',
+      'aftercare sms 2027-03-16T16:00:00.000Z',
     ]);
     const confirmation = (await messagesOf(id)).find((m) => m.kind === 'confirmation')!;
     expect(confirmation.send_at.getTime()).toBeGreaterThanOrEqual(before - 1000);
@@ -87,8 +100,10 @@ describe('planning a booking’s messages', () => {
     const id = await book('2027-11-08', '10:00', c.clientId!);
     // Sitting Mon 2027-11-08 10:00 MST = 17:00Z. 24 h: Sun 11-07 10:00 MST = 17:00Z. 48 h: Sat 11-06 10:00 MDT = 16:00Z.
     expect((await planned(id)).filter((p) => p.startsWith('reminder'))).toEqual([
-      'reminder_48h email 2027-11-06T16:00:00.000Z', 'reminder_48h sms 2027-11-06T16:00:00.000Z',
-      'reminder_24h email 2027-11-07T17:00:00.000Z', 'reminder_24h sms 2027-11-07T17:00:00.000Z',
+      'reminder_48h email 2027-11-06T16:00:00.000Z',
+      'reminder_48h sms 2027-11-06T16:00:00.000Z',
+      'reminder_24h email 2027-11-07T17:00:00.000Z',
+      'reminder_24h sms 2027-11-07T17:00:00.000Z',
     ]);
   });
 
@@ -102,8 +117,10 @@ describe('planning a booking’s messages', () => {
     expect(rows.filter((m) => m.kind.startsWith('reminder') && m.booking_version! < 3).every((m) => m.status === 'dropped')).toBe(true);
     // Thu 2027-02-18 12:00 MST = 19:00Z; reminders at 12:00 MST two days and one day before.
     expect((await planned(id)).filter((p) => p.startsWith('reminder'))).toEqual([
-      'reminder_48h email 2027-02-16T19:00:00.000Z', 'reminder_48h sms 2027-02-16T19:00:00.000Z',
-      'reminder_24h email 2027-02-17T19:00:00.000Z', 'reminder_24h sms 2027-02-17T19:00:00.000Z',
+      'reminder_48h email 2027-02-16T19:00:00.000Z',
+      'reminder_48h sms 2027-02-16T19:00:00.000Z',
+      'reminder_24h email 2027-02-17T19:00:00.000Z',
+      'reminder_24h sms 2027-02-17T19:00:00.000Z',
     ]);
     await sendDueMessages(db(), t.outside, new Date('2027-02-18T12:00:00Z'), id);
     const texts = smsTo(c.phone).map((m) => m.body);
@@ -118,7 +135,12 @@ describe('planning a booking’s messages', () => {
     expect((await desk$.write('post', `/api/bookings/${id}/cancel`, { reason: 'Client is ill' })).status).toBe(200);
     const rows = await messagesOf(id);
     expect(rows.filter((m) => m.kind.startsWith('reminder')).map((m) => m.status)).toEqual(['dropped', 'dropped', 'dropped', 'dropped']);
-    expect(rows.filter((m) => m.kind === 'cancellation').map((m) => m.channel).sort()).toEqual(['email', 'sms']);
+    expect(
+      rows
+        .filter((m) => m.kind === 'cancellation')
+        .map((m) => m.channel)
+        .sort(),
+    ).toEqual(['email', 'sms']);
   });
 
   it('quiet hours move an SMS to the end of the quiet stretch in salon time; e-mail keeps its time', async () => {
@@ -131,7 +153,8 @@ describe('planning a booking’s messages', () => {
       // Wed 2027-02-24 20:00 MST = 2027-02-25T03:00Z. 24 h e-mail: Tue 20:00 MST = 2027-02-24T03:00Z; its SMS
       // falls in quiet hours (19:00–08:00) and moves to Wed 08:00 MST = 15:00Z.
       expect((await planned(id)).filter((p) => p.startsWith('reminder_24h'))).toEqual([
-        'reminder_24h email 2027-02-24T03:00:00.000Z', 'reminder_24h sms 2027-02-24T15:00:00.000Z',
+        'reminder_24h email 2027-02-24T03:00:00.000Z',
+        'reminder_24h sms 2027-02-24T15:00:00.000Z',
       ]);
     } finally {
       await db().updateTable('salons').set({ quiet_from: '21:00' }).where('id', '=', salon.salonId).execute();
@@ -149,7 +172,11 @@ describe('sending exactly once', () => {
     t.sms.failNext(2);
     expect(await sendMessage(db(), t.outside, m.id, new Date(at))).toBe('retry');
     let row = await db().selectFrom('messages').selectAll().where('id', '=', m.id).executeTakeFirstOrThrow();
-    expect({ status: row.status, attempts: row.attempts, sendAt: iso(row.send_at) }).toEqual({ status: 'queued', attempts: 1, sendAt: iso(new Date(at + 60_000)) });
+    expect({ status: row.status, attempts: row.attempts, sendAt: iso(row.send_at) }).toEqual({
+      status: 'queued',
+      attempts: 1,
+      sendAt: iso(new Date(at + 60_000)),
+    });
     expect(row.last_error).toMatch(/unavailable/i);
     expect(await sendMessage(db(), t.outside, m.id, new Date(at + 60_000))).toBe('retry');
     row = await db().selectFrom('messages').selectAll().where('id', '=', m.id).executeTakeFirstOrThrow();
@@ -177,7 +204,12 @@ describe('sending exactly once', () => {
     expect(smsTo(c.phone).filter((s) => s.body === m.body)).toHaveLength(0);
     const list = await desk$.get('/api/messages?status=failed');
     expect(list.status).toBe(200);
-    expect(list.body.messages.find((x: { id: string }) => x.id === m.id)).toMatchObject({ status: 'failed', attempts: 5, channel: 'sms', lastError: expect.stringMatching(/unavailable/i) });
+    expect(list.body.messages.find((x: { id: string }) => x.id === m.id)).toMatchObject({
+      status: 'failed',
+      attempts: 5,
+      channel: 'sms',
+      lastError: expect.stringMatching(/unavailable/i),
+    });
     const client$ = await signedInAgent(t.app, c.email, c.password);
     expect((await client$.get('/api/messages')).status).toBe(403);
   });
@@ -187,14 +219,21 @@ describe('sending exactly once', () => {
     const m = await reminderSms(await book('2027-03-04', '10:00', c.clientId!));
     const at = m.send_at.getTime();
     // The dead worker's claim: status sending, no provider reference, claimed long ago.
-    await db().updateTable('messages').set({ status: 'sending', attempts: 1, claimed_at: new Date(at - 600_000) }).where('id', '=', m.id).execute();
+    await db()
+      .updateTable('messages')
+      .set({ status: 'sending', attempts: 1, claimed_at: new Date(at - 600_000) })
+      .where('id', '=', m.id)
+      .execute();
     expect(await sendMessage(db(), t.outside, m.id, new Date(at))).toBe('not-claimed'); // still claimed
     expect(await requeueStuckMessages(db(), new Date(at))).toBeGreaterThanOrEqual(1);
     await Promise.all([sendDueMessages(db(), t.outside, new Date(at)), sendDueMessages(db(), t.outside, new Date(at))]);
     await requeueStuckMessages(db(), new Date(at + 3_600_000)); // the sent row has a provider reference: left alone
     await sendDueMessages(db(), t.outside, new Date(at + 3_600_000), m.booking_id!);
     expect(smsTo(c.phone).filter((s) => s.body === m.body)).toHaveLength(1);
-    expect(await db().selectFrom('messages').select(['status', 'attempts']).where('id', '=', m.id).executeTakeFirstOrThrow()).toEqual({ status: 'sent', attempts: 2 });
+    expect(await db().selectFrom('messages').select(['status', 'attempts']).where('id', '=', m.id).executeTakeFirstOrThrow()).toEqual({
+      status: 'sent',
+      attempts: 2,
+    });
   });
 
   it('two workers running the same message at once send one SMS', async () => {

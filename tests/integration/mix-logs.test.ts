@@ -34,15 +34,36 @@ const sitting = (chairId: string, startMs: number) => ({
 
 async function book(db: Db, sittings: ReturnType<typeof sitting>[], status: BookingStatus = 'booked', stylistId = stylist.staffId!) {
   return insertBooking(db, {
-    salonId: salon.salonId, clientId: client.clientId!, serviceId, stylistId, status,
-    stepPlan: { sittings: [{ steps: [{ kind: 'hands_on', label: 'Apply', product: 'none', minutes: 60 }] }] } as never, priceCents: 0, depositCents: 0, createdBy: null, sittings,
+    salonId: salon.salonId,
+    clientId: client.clientId!,
+    serviceId,
+    stylistId,
+    status,
+    stepPlan: { sittings: [{ steps: [{ kind: 'hands_on', label: 'Apply', product: 'none', minutes: 60 }] }] } as never,
+    priceCents: 0,
+    depositCents: 0,
+    createdBy: null,
+    sittings,
   });
 }
 
 const bowl = (over: object = {}) => ({
-  sittingSeq: 1, bowlNo: 1, productType: 'lightener', shadeNotes: 'Powder, blue', developerPercent: 6, ratio: '1:2',
-  grams: [{ kind: 'lightener', part: 'blue powder', grams: 30 }, { kind: 'developer', part: '', grams: 60 }], appliedTo: 'Mid-lengths and ends',
-  plannedMinutes: 40, actualMinutes: 35, heat: false, resultNotes: 'Lifted to level 8, even', ...over,
+  sittingSeq: 1,
+  bowlNo: 1,
+  productType: 'lightener',
+  shadeNotes: 'Powder, blue',
+  developerPercent: 6,
+  ratio: '1:2',
+  grams: [
+    { kind: 'lightener', part: 'blue powder', grams: 30 },
+    { kind: 'developer', part: '', grams: 60 },
+  ],
+  appliedTo: 'Mid-lengths and ends',
+  plannedMinutes: 40,
+  actualMinutes: 35,
+  heat: false,
+  resultNotes: 'Lifted to level 8, even',
+  ...over,
 });
 
 beforeAll(async () => {
@@ -78,8 +99,20 @@ describe('writing a mix log', () => {
     // 6 % ÷ 0.3 % per volume = 20 vol: bottles are labelled 3/6/9/12 % = 10/20/30/40 vol (common practice;
     // the EU regulation writes its limit "12 % of H2O2 (40 volumes)", Reg. (EC) 1223/2009 Annex III entry 12).
     expect(res.body).toMatchObject({ sittingSeq: 1, bowlNo: 1, developerPercent: 6, developerVolume: 20, actualMinutes: 35 });
-    expect(res.body.grams).toEqual([{ kind: 'lightener', part: 'blue powder', grams: 30 }, { kind: 'developer', part: '', grams: 60 }]);
-    const toner = bowl({ bowlNo: 2, productType: 'toner', developerPercent: 2.7, ratio: '1:1.5', grams: [{ kind: 'toner', part: '', grams: 20 }, { kind: 'developer', part: '', grams: 30 }] });
+    expect(res.body.grams).toEqual([
+      { kind: 'lightener', part: 'blue powder', grams: 30 },
+      { kind: 'developer', part: '', grams: 60 },
+    ]);
+    const toner = bowl({
+      bowlNo: 2,
+      productType: 'toner',
+      developerPercent: 2.7,
+      ratio: '1:1.5',
+      grams: [
+        { kind: 'toner', part: '', grams: 20 },
+        { kind: 'developer', part: '', grams: 30 },
+      ],
+    });
     const written = await write(earlier, toner, desk$);
     expect(written.status).toBe(201);
     expect(written.body.developerVolume).toBe(9); // 2.7 ÷ 0.3 = 9 vol
@@ -206,9 +239,22 @@ describe('repeat last time and product used', () => {
     const res = await repeat(today, { fromBookingId: earlier, sitting: 1, intoSitting: 1 });
     expect(res.status).toBe(201);
     expect(res.body.copied).toBe(2);
-    expect(res.body.logs.map((l: { bowlNo: number; productType: string }) => [l.bowlNo, l.productType])).toEqual([[1, 'lightener'], [2, 'toner']]);
-    expect(res.body.logs[0]).toMatchObject({ developerPercent: 6, ratio: '1:2', plannedMinutes: 40, actualMinutes: null, resultNotes: '', shadeNotes: 'Powder, blue' });
-    expect(res.body.logs[0].grams).toEqual([{ kind: 'lightener', part: 'blue powder', grams: 30 }, { kind: 'developer', part: '', grams: 60 }]);
+    expect(res.body.logs.map((l: { bowlNo: number; productType: string }) => [l.bowlNo, l.productType])).toEqual([
+      [1, 'lightener'],
+      [2, 'toner'],
+    ]);
+    expect(res.body.logs[0]).toMatchObject({
+      developerPercent: 6,
+      ratio: '1:2',
+      plannedMinutes: 40,
+      actualMinutes: null,
+      resultNotes: '',
+      shadeNotes: 'Powder, blue',
+    });
+    expect(res.body.logs[0].grams).toEqual([
+      { kind: 'lightener', part: 'blue powder', grams: 30 },
+      { kind: 'developer', part: '', grams: 60 },
+    ]);
   });
 
   it('counts and costs each part as itself: 30 g lightener + 60 g developer is not 90 g lightener', async () => {
@@ -217,7 +263,9 @@ describe('repeat last time and product used', () => {
     //   lightener 30 g × 4.5 = 135 ¢; toner 20 g × 7 = 140 ¢; developer 60 + 30 = 90 g × 1.2 = 108 ¢
     //   grams 30 + 20 + 90 = 140 g; cost 135 + 140 + 108 = 383 ¢ ($3.83).
     // Before developer has a cost, it says so and the estimate is unknown rather than too low.
-    expect((await owner$.write('put', '/api/owner/quote-prices', { correctionCentsPerHour: 9000, productCentsPerGram: { lightener: 4.5, toner: 7 } })).status).toBe(200);
+    expect(
+      (await owner$.write('put', '/api/owner/quote-prices', { correctionCentsPerHour: 9000, productCentsPerGram: { lightener: 4.5, toner: 7 } })).status,
+    ).toBe(200);
     const unpriced = (await list(today, desk$)).body.sittings[0];
     expect(unpriced.totals).toEqual([
       { kind: 'lightener', grams: 30, centsPerGram: 4.5, costCents: 135 },
@@ -235,7 +283,10 @@ describe('repeat last time and product used', () => {
     expect(res.body.maxDeveloperPercent).toBe(12);
     expect(res.body.sittings).toEqual([
       expect.objectContaining({
-        seq: 1, started: true, totalGrams: 140, estimatedCostCents: 383,
+        seq: 1,
+        started: true,
+        totalGrams: 140,
+        estimatedCostCents: 383,
         totals: [
           { kind: 'lightener', grams: 30, centsPerGram: 4.5, costCents: 135 },
           { kind: 'toner', grams: 20, centsPerGram: 7, costCents: 140 },
@@ -251,7 +302,11 @@ describe('repeat last time and product used', () => {
     // Bowl 2 of the booked sitting ahead: toner 20 g + developer 20 g + water 10 g. With bowl 1 (lightener 30 g +
     // developer 60 g): lightener 30 × 4.5 = 135 ¢; toner 20 × 7 = 140 ¢; developer 80 g × 1.2 = 96 ¢; water 10 g
     // not costed. Grams 30 + 20 + 80 + 10 = 140 g; cost 135 + 140 + 96 = 371 ¢.
-    const parts = [{ kind: 'toner', part: '', grams: 20 }, { kind: 'developer', part: '', grams: 20 }, { kind: 'other', part: 'water', grams: 10 }];
+    const parts = [
+      { kind: 'toner', part: '', grams: 20 },
+      { kind: 'developer', part: '', grams: 20 },
+      { kind: 'other', part: 'water', grams: 10 },
+    ];
     expect((await write(ahead, bowl({ bowlNo: 2, productType: 'toner', developerPercent: 3, ratio: '1:1', grams: parts }))).status).toBe(201);
     const s = (await list(ahead)).body.sittings[0];
     expect(s.totals.at(-1)).toEqual({ kind: 'other', grams: 10, centsPerGram: null, costCents: null });
@@ -270,8 +325,11 @@ describe('parts written before parts had kinds (migration 20261205T0100)', () =>
     const db = t.testDb.db;
     await removePartKinds(db);
     const old = [
-      { part: 'lightener', grams: 30 }, { part: '6% Cream Developer', grams: 60 }, { part: 'water', grams: 5 },
-      { part: 'Bond builder', grams: 2 }, { part: 'mystery', grams: 1 },
+      { part: 'lightener', grams: 30 },
+      { part: '6% Cream Developer', grams: 60 },
+      { part: 'water', grams: 5 },
+      { part: 'Bond builder', grams: 2 },
+      { part: 'mystery', grams: 1 },
     ];
     const { id } = await db
       .insertInto('mix_logs')
@@ -281,7 +339,11 @@ describe('parts written before parts had kinds (migration 20261205T0100)', () =>
     await addPartKinds(db);
     const row = await db.selectFrom('mix_logs').select('grams').where('id', '=', id).executeTakeFirstOrThrow();
     expect(row.grams.map((p) => [p.part, p.kind])).toEqual([
-      ['lightener', 'lightener'], ['6% Cream Developer', 'developer'], ['water', 'other'], ['Bond builder', 'bond_builder'], ['mystery', 'toner'],
+      ['lightener', 'lightener'],
+      ['6% Cream Developer', 'developer'],
+      ['water', 'other'],
+      ['Bond builder', 'bond_builder'],
+      ['mystery', 'toner'],
     ]);
     // The owner's developer cost can be stored again after the round trip.
     expect((await owner$.write('put', '/api/owner/quote-prices', { correctionCentsPerHour: 9000, productCentsPerGram: { developer: 1 } })).status).toBe(200);

@@ -28,7 +28,14 @@ beforeAll(async () => {
 afterAll(() => t.close());
 
 async function bookWednesday(key: string, date = wednesday): Promise<{ id: string; sittings: { start: string }[] }> {
-  const res = await desk$.write('post', '/api/bookings', { clientId: client.clientId, serviceId, stepPlan: correctionPlan, stylistId: ana.staffId, start: localIso(date, '09:00'), idempotencyKey: key });
+  const res = await desk$.write('post', '/api/bookings', {
+    clientId: client.clientId,
+    serviceId,
+    stepPlan: correctionPlan,
+    stylistId: ana.staffId,
+    start: localIso(date, '09:00'),
+    idempotencyKey: key,
+  });
   expect(res.status).toBe(201);
   return res.body;
 }
@@ -74,13 +81,29 @@ describe('moving and cancelling a booking', () => {
 describe('cancelling a skin test that a colour booking relies on', () => {
   it('is refused with the colour booking named, and the colour stays booked', async () => {
     const db = t.testDb.db;
-    const skinTest = await insertPlannedService(db, salon.salonId, { category: 'skin_test', depositCents: 0, plan: { sittings: [{ steps: [{ kind: 'hands_on', label: 'Apply skin test', product: 'none', minutes: 15 }] }] } });
+    const skinTest = await insertPlannedService(db, salon.salonId, {
+      category: 'skin_test',
+      depositCents: 0,
+      plan: { sittings: [{ steps: [{ kind: 'hands_on', label: 'Apply skin test', product: 'none', minutes: 15 }] }] },
+    });
     const fresh = await insertUser(db, salon.salonId, 'client');
     const wed = futureWeekday(3, 8);
     const fri = futureWeekday(5, 8);
     const book = (service: string, plan: object, start: string, key: string) =>
-      desk$.write('post', '/api/bookings', { clientId: fresh.clientId, serviceId: service, stepPlan: plan, stylistId: ana.staffId, start, idempotencyKey: key });
-    const test = await book(skinTest, { sittings: [{ steps: [{ kind: 'hands_on', label: 'Apply skin test', product: 'none', minutes: 15 }] }] }, localIso(wed, '09:00'), 'skin-dep-0001');
+      desk$.write('post', '/api/bookings', {
+        clientId: fresh.clientId,
+        serviceId: service,
+        stepPlan: plan,
+        stylistId: ana.staffId,
+        start,
+        idempotencyKey: key,
+      });
+    const test = await book(
+      skinTest,
+      { sittings: [{ steps: [{ kind: 'hands_on', label: 'Apply skin test', product: 'none', minutes: 15 }] }] },
+      localIso(wed, '09:00'),
+      'skin-dep-0001',
+    );
     expect(test.status).toBe(201);
     // Friday 09:00 is exactly 48 h after Wednesday 09:00: allowed (lead time: common practice, Cosmetics Europe Rec. 27).
     const colour = await book(serviceId, correctionPlan, localIso(fri, '09:00'), 'skin-dep-0002');

@@ -31,7 +31,9 @@ beforeAll(async () => {
   slug = (await db.selectFrom('salons').select('slug').where('id', '=', salon.salonId).executeTakeFirstOrThrow()).slug;
   ana = await insertUser(db, salon.salonId, 'stylist');
   consultation = await insertPlannedService(db, salon.salonId, {
-    name: 'Consultation', category: 'colour', depositCents: 2500,
+    name: 'Consultation',
+    category: 'colour',
+    depositCents: 2500,
     plan: { sittings: [{ steps: [{ kind: 'hands_on', label: 'Consultation', product: 'none', minutes: 30 }] }] },
   });
   await db.updateTable('services').set({ online_bookable: true, category: 'consultation' }).where('id', '=', consultation).execute();
@@ -42,7 +44,12 @@ let visitors = 0;
 /** A hold from a new visitor; each has an address of their own (behind the loopback proxy), as visitors do. */
 async function hold(start: string) {
   const visitor = await anonymousAgent(t.app);
-  return visitor.write('post', '/api/public/holds', { salonSlug: slug, serviceId: consultation, stylistId: ana.staffId, start }, { 'X-Forwarded-For': `10.1.0.${++visitors}` });
+  return visitor.write(
+    'post',
+    '/api/public/holds',
+    { salonSlug: slug, serviceId: consultation, stylistId: ana.staffId, start },
+    { 'X-Forwarded-For': `10.1.0.${++visitors}` },
+  );
 }
 
 /** A new client who signs up, claims a hold and (unless told not to) accepts its cautions. */
@@ -55,7 +62,9 @@ async function claimedBy(start: string, acceptCautions = true) {
   const claim = await c.write('post', `/api/me/holds/${held.body.holdId}/claim`, { secret: held.body.holdSecret });
   expect(claim.status).toBe(200);
   if (acceptCautions) {
-    expect((await c.write('post', `/api/me/holds/${held.body.holdId}/cautions`, { version: claim.body.cautions.version, secret: held.body.holdSecret })).status).toBe(204);
+    expect(
+      (await c.write('post', `/api/me/holds/${held.body.holdId}/cautions`, { version: claim.body.cautions.version, secret: held.body.holdSecret })).status,
+    ).toBe(204);
   }
   secrets[held.body.holdId] = held.body.holdSecret;
   return { c, client, id: held.body.holdId as string, secret: held.body.holdSecret as string, claim: claim.body };
@@ -87,7 +96,11 @@ describe('holds', () => {
 
   it('an unpaid hold lapses through the job queue and frees the time', async () => {
     const held = await hold(localIso(tuesday, '11:00'));
-    await t.testDb.db.updateTable('bookings').set({ held_until: new Date(Date.now() - 1000) }).where('id', '=', held.body.holdId).execute();
+    await t.testDb.db
+      .updateTable('bookings')
+      .set({ held_until: new Date(Date.now() - 1000) })
+      .where('id', '=', held.body.holdId)
+      .execute();
     await t.jobs.schedule(LAPSE_HOLD_JOB, { bookingId: held.body.holdId }, new Date());
     for (let i = 0; i < 40; i++) {
       if (!(await t.testDb.db.selectFrom('bookings').select('id').where('id', '=', held.body.holdId).executeTakeFirst())) break;
@@ -140,7 +153,11 @@ describe('deposit and confirmation', () => {
   it('a payment confirmed after the hold lapsed is refunded automatically', async () => {
     const { c, id } = await claimedBy(localIso(tuesday, '15:00'));
     t.payments.onNextSuccess(async () => {
-      await t.testDb.db.updateTable('bookings').set({ held_until: new Date(Date.now() - 1000) }).where('id', '=', id).execute();
+      await t.testDb.db
+        .updateTable('bookings')
+        .set({ held_until: new Date(Date.now() - 1000) })
+        .where('id', '=', id)
+        .execute();
     });
     const res = await payWithSecret(c, id, 'pay-key-0004', FAKE_CARDS.succeeds);
     expect(res.status).toBe(409);
@@ -215,7 +232,13 @@ describe('outside services failing or slow', () => {
     const { c, client, id } = await claimedBy(localIso(tuesday, '09:30'));
     t.smtp.failNext(1);
     expect((await payWithSecret(c, id, 'pay-key-0104', FAKE_CARDS.succeeds)).status).toBe(200);
-    const row = await t.testDb.db.selectFrom('messages').selectAll().where('booking_id', '=', id).where('channel', '=', 'email').where('kind', '=', 'confirmation').executeTakeFirstOrThrow();
+    const row = await t.testDb.db
+      .selectFrom('messages')
+      .selectAll()
+      .where('booking_id', '=', id)
+      .where('channel', '=', 'email')
+      .where('kind', '=', 'confirmation')
+      .executeTakeFirstOrThrow();
     expect(row).toMatchObject({ status: 'queued', attempts: 1 });
     expect(row.last_error).toMatch(/451|Try again later/);
     expect(t.smtp.messages.filter((m) => m.to === client.email)).toHaveLength(0);
@@ -233,7 +256,12 @@ describe('one unpaid hold per client', () => {
 
   it('a client who holds a time is sent back to it: a second hold, made signed in or claimed after signing in, is refused naming the first', async () => {
     const { c, id } = await claimedBy(localIso(wednesday, '09:00'));
-    const second = await c.write('post', '/api/public/holds', { salonSlug: slug, serviceId: consultation, stylistId: ana.staffId, start: localIso(wednesday, '10:00') });
+    const second = await c.write('post', '/api/public/holds', {
+      salonSlug: slug,
+      serviceId: consultation,
+      stylistId: ana.staffId,
+      start: localIso(wednesday, '10:00'),
+    });
     expect(second.status).toBe(409);
     expect(second.body.error.code).toBe('HOLD_OPEN');
     expect(second.body.error.message).toMatch(/already have a time held: Consultation on Wednesday .* at 9:00 AM/);
@@ -266,7 +294,9 @@ describe('one unpaid hold per client', () => {
     expect(resumed.body).toMatchObject({ holdId: id, salonSlug: slug, serviceId: consultation, step: 'cautions', status: 'held' });
     expect(resumed.body.holdSecret).not.toBe(secret);
     expect((await c.write('post', `/api/me/holds/${id}/cautions`, { version: resumed.body.cautions.version, secret })).status).toBe(404);
-    expect((await c.write('post', `/api/me/holds/${id}/cautions`, { version: resumed.body.cautions.version, secret: resumed.body.holdSecret })).status).toBe(204);
+    expect((await c.write('post', `/api/me/holds/${id}/cautions`, { version: resumed.body.cautions.version, secret: resumed.body.holdSecret })).status).toBe(
+      204,
+    );
     expect(await stepOf(c)).toEqual([[id, 'deposit']]);
     secrets[id] = resumed.body.holdSecret;
     expect((await payWithSecret(c, id, 'pay-key-0201', FAKE_CARDS.succeeds)).body.status).toBe('booked');
@@ -277,7 +307,10 @@ describe('one unpaid hold per client', () => {
   it('release frees the time at once; only the client (or, before a claim, the holder of the secret) may release it', async () => {
     const start = localIso(wednesday, '13:00');
     const { c, id } = await claimedBy(start, false);
-    const free = async () => (await (await anonymousAgent(t.app)).get(`/api/public/salons/${slug}/availability?serviceId=${consultation}&stylistId=${ana.staffId}&from=${wednesday}`)).body.times.map((x: { start: string }) => x.start);
+    const free = async () =>
+      (
+        await (await anonymousAgent(t.app)).get(`/api/public/salons/${slug}/availability?serviceId=${consultation}&stylistId=${ana.staffId}&from=${wednesday}`)
+      ).body.times.map((x: { start: string }) => x.start);
     expect(await free()).not.toContain(start);
     const stranger = await insertUser(t.testDb.db, salon.salonId, 'client');
     const s = await signedInAgent(t.app, stranger.email, stranger.password);
@@ -330,10 +363,18 @@ describe("the owner's figures", () => {
     const day = DateTime.now().setZone('America/Denver').startOf('week').plus({ days: 2 }).toISODate()!;
     const client = await insertUser(t.testDb.db, salon.salonId, 'client');
     const id = await insertTestBooking(t.testDb.db, {
-      salonId: salon.salonId, clientId: client.clientId!, stylistId: ana.staffId!, chairId: salon.chairs[1], serviceId: consultation,
+      salonId: salon.salonId,
+      clientId: client.clientId!,
+      stylistId: ana.staffId!,
+      chairId: salon.chairs[1],
+      serviceId: consultation,
       steps: [['hands_on', localIso(day, '10:00'), localIso(day, '10:30')]],
     });
-    await t.testDb.db.updateTable('bookings').set({ status: 'held', held_until: new Date(Date.now() + 600_000) }).where('id', '=', id).execute();
+    await t.testDb.db
+      .updateTable('bookings')
+      .set({ status: 'held', held_until: new Date(Date.now() + 600_000) })
+      .where('id', '=', id)
+      .execute();
     const held = await week();
     expect(held.bookings).toBe(before.bookings);
     expect(held.chairOccupancy).toBe(before.chairOccupancy);

@@ -16,9 +16,7 @@ describe('GET /api/openapi.json', () => {
       Object.entries(res.body.paths as Record<string, Record<string, unknown>>).flatMap(([path, ops]) => Object.keys(ops).map((m) => `${m} ${path}`)),
     );
     // Routes declared outside apiRoute (file downloads) are recorded for access checks but have no JSON body.
-    const missing = t.app.apiRoutes
-      .map((r) => `${r.method} ${r.path.replace(/:(\w+)/g, '{$1}')}`)
-      .filter((r) => !documented.has(r) && !r.endsWith('.ics'));
+    const missing = t.app.apiRoutes.map((r) => `${r.method} ${r.path.replace(/:(\w+)/g, '{$1}')}`).filter((r) => !documented.has(r) && !r.endsWith('.ics'));
     expect(missing).toEqual([]);
     expect(t.app.apiRoutes.length).toBeGreaterThan(40);
   });

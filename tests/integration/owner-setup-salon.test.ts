@@ -65,7 +65,13 @@ describe('salon settings', () => {
     expect(res.status).toBe(200);
     expect(res.body).toMatchObject({ ...body, reminderOffsetsHours: [72, 24] });
     const row = await t.testDb.db.selectFrom('salons').selectAll().where('id', '=', salon.salonId).executeTakeFirstOrThrow();
-    expect(row).toMatchObject({ time_zone: 'Europe/Berlin', currency: 'EUR', cancellation_keeps: 'nothing', quiet_from: '21:00:00', reminder_offsets_hours: [72, 24] });
+    expect(row).toMatchObject({
+      time_zone: 'Europe/Berlin',
+      currency: 'EUR',
+      cancellation_keeps: 'nothing',
+      quiet_from: '21:00:00',
+      reminder_offsets_hours: [72, 24],
+    });
     expect(await t.testDb.db.selectFrom('salon_hours').select('rrule').where('salon_id', '=', salon.salonId).execute()).toHaveLength(2);
     // Back to Denver for the other tests.
     expect((await owner$.write('put', setupPaths.salon, valid())).status).toBe(200);
@@ -100,7 +106,14 @@ describe('salon settings', () => {
     const serviceId = await insertPlannedService(db, salon.salonId, { plan: tonerPlan, depositCents: 0 });
     const monday = futureWeekday(1, 2);
     const ask = () =>
-      owner$.write('post', '/api/booking-options', { clientId: client.clientId, serviceId, stepPlan: tonerPlan, stylistId: stylist.staffId, earliestDate: monday, limit: 3 });
+      owner$.write('post', '/api/booking-options', {
+        clientId: client.clientId,
+        serviceId,
+        stepPlan: tonerPlan,
+        stylistId: stylist.staffId,
+        earliestDate: monday,
+        limit: 3,
+      });
     const closed = await ask();
     expect(closed.status).toBe(200);
     // Tue–Sat only: the first option is not on Monday.

@@ -54,16 +54,45 @@ describe('services and step plans', () => {
   });
 
   it('changing a service never changes a booking already made: it keeps its own step plan, price and deposit', async () => {
-    const created = await owner$.write('post', setupPaths.services, service({ name: 'Snapshot check', depositKind: 'fixed', depositCents: 1500, depositPercent: null }));
+    const created = await owner$.write(
+      'post',
+      setupPaths.services,
+      service({ name: 'Snapshot check', depositKind: 'fixed', depositCents: 1500, depositPercent: null }),
+    );
     const id = created.body.id;
     const date = futureWeekday(3, 3);
-    const booked = await owner$.write('post', '/api/bookings', { clientId: client.clientId, serviceId: id, stepPlan: tonerPlan, stylistId: stylist.staffId, start: localIso(date, '10:00'), idempotencyKey: 'setup-snapshot-0001' });
+    const booked = await owner$.write('post', '/api/bookings', {
+      clientId: client.clientId,
+      serviceId: id,
+      stepPlan: tonerPlan,
+      stylistId: stylist.staffId,
+      start: localIso(date, '10:00'),
+      idempotencyKey: 'setup-snapshot-0001',
+    });
     expect(booked.status).toBe(201);
-    const longer = { sittings: [{ steps: [{ kind: 'hands_on', label: 'Apply toner', product: 'toner_direct', minutes: 30 }, { kind: 'developing', label: 'Toner develops', product: 'toner_direct', minMinutes: 20, maxMinutes: 40 }, { kind: 'basin', label: 'Rinse', product: 'none', minutes: 15 }] }] };
-    const changed = await owner$.write('put', setupPaths.service(id), service({ name: 'Snapshot check', priceCents: 12000, depositKind: 'fixed', depositCents: 4000, depositPercent: null, stepPlan: longer }));
+    const longer = {
+      sittings: [
+        {
+          steps: [
+            { kind: 'hands_on', label: 'Apply toner', product: 'toner_direct', minutes: 30 },
+            { kind: 'developing', label: 'Toner develops', product: 'toner_direct', minMinutes: 20, maxMinutes: 40 },
+            { kind: 'basin', label: 'Rinse', product: 'none', minutes: 15 },
+          ],
+        },
+      ],
+    };
+    const changed = await owner$.write(
+      'put',
+      setupPaths.service(id),
+      service({ name: 'Snapshot check', priceCents: 12000, depositKind: 'fixed', depositCents: 4000, depositPercent: null, stepPlan: longer }),
+    );
     expect(changed.status).toBe(200);
     expect(changed.body).toMatchObject({ priceCents: 12000, depositCents: 4000, stepPlan: longer, futureBookings: 1 });
-    const row = await t.testDb.db.selectFrom('bookings').select(['step_plan', 'price_cents', 'deposit_cents']).where('id', '=', booked.body.id).executeTakeFirstOrThrow();
+    const row = await t.testDb.db
+      .selectFrom('bookings')
+      .select(['step_plan', 'price_cents', 'deposit_cents'])
+      .where('id', '=', booked.body.id)
+      .executeTakeFirstOrThrow();
     expect(row).toEqual({ step_plan: tonerPlan, price_cents: 8000, deposit_cents: 1500 });
     const view = await owner$.get(`/api/bookings/${booked.body.id}`);
     expect(view.body.sittings[0].steps.map((s: { label: string }) => s.label)).toEqual(['Apply toner', 'Toner develops', 'Rinse']);
@@ -74,7 +103,14 @@ describe('services and step plans', () => {
   it('refuses to take a service with future bookings off the menu, listing them; retires it once none are left', async () => {
     const created = await owner$.write('post', setupPaths.services, service({ name: 'Retire check' }));
     const id = created.body.id;
-    const booked = await owner$.write('post', '/api/bookings', { clientId: client.clientId, serviceId: id, stepPlan: tonerPlan, stylistId: stylist.staffId, start: localIso(futureWeekday(4, 3), '10:00'), idempotencyKey: 'setup-retire-0001' });
+    const booked = await owner$.write('post', '/api/bookings', {
+      clientId: client.clientId,
+      serviceId: id,
+      stepPlan: tonerPlan,
+      stylistId: stylist.staffId,
+      start: localIso(futureWeekday(4, 3), '10:00'),
+      idempotencyKey: 'setup-retire-0001',
+    });
     expect(booked.status).toBe(201);
     const refused = await owner$.write('delete', setupPaths.service(id));
     expect(refused.status).toBe(409);
@@ -91,8 +127,21 @@ describe('services and step plans', () => {
     const cases: [object, string][] = [
       [{ stepPlan: { sittings: [{ steps: [] }] } }, 'stepPlan.sittings.0.steps'],
       [{ stepPlan: { sittings: [] } }, 'stepPlan.sittings'],
-      [{ stepPlan: { sittings: [{ steps: [{ kind: 'developing', label: 'Develops', product: 'none', minMinutes: 40, maxMinutes: 20 }] }] } }, 'stepPlan.sittings.0.steps.0.maxMinutes'],
-      [{ stepPlan: { sittings: [{ steps: [{ kind: 'hands_on', label: 'A', product: 'none', minutes: 30 }] }, { steps: [{ kind: 'hands_on', label: 'B', product: 'none', minutes: 30 }] }] } }, 'stepPlan.sittings.1.daysAfterPrevious'],
+      [
+        { stepPlan: { sittings: [{ steps: [{ kind: 'developing', label: 'Develops', product: 'none', minMinutes: 40, maxMinutes: 20 }] }] } },
+        'stepPlan.sittings.0.steps.0.maxMinutes',
+      ],
+      [
+        {
+          stepPlan: {
+            sittings: [
+              { steps: [{ kind: 'hands_on', label: 'A', product: 'none', minutes: 30 }] },
+              { steps: [{ kind: 'hands_on', label: 'B', product: 'none', minutes: 30 }] },
+            ],
+          },
+        },
+        'stepPlan.sittings.1.daysAfterPrevious',
+      ],
       [{ depositKind: 'percent', depositPercent: null }, 'depositPercent'],
       [{ depositKind: 'fixed', depositCents: 9000, depositPercent: null }, 'depositCents'],
       [{ name: '' }, 'name'],

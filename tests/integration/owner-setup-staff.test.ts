@@ -27,7 +27,6 @@ beforeAll(async () => {
 });
 afterAll(() => t.close());
 
-
 const details = (overrides: object = {}) => ({ name: 'Rowan Vale', role: 'stylist', skills: ['colour'], maxClientsAtOnce: 2, hours: [weekdays], ...overrides });
 
 describe('staff', () => {
@@ -35,7 +34,12 @@ describe('staff', () => {
     const email = 'rowan.vale@example.test';
     const res = await owner$.write('post', setupPaths.staff, { email, details: details() });
     expect(res.status).toBe(201);
-    expect(res.body).toMatchObject({ email, invited: true, active: true, details: { name: 'Rowan Vale', role: 'stylist', skills: ['colour'], maxClientsAtOnce: 2, hours: [weekdays] } });
+    expect(res.body).toMatchObject({
+      email,
+      invited: true,
+      active: true,
+      details: { name: 'Rowan Vale', role: 'stylist', skills: ['colour'], maxClientsAtOnce: 2, hours: [weekdays] },
+    });
     expect(res.body.staffId).toBeTruthy();
     const mail = await waitForMail(t.smtp, email);
     const token = /reset-password\?token=([A-Za-z0-9_-]+)/.exec(mail.text)?.[1];
@@ -52,7 +56,11 @@ describe('staff', () => {
   it('changes role, skills, cap and working hours; adds and removes time off', async () => {
     const stylist = await insertUser(t.testDb.db, salon.salonId, 'stylist');
     const hours = [{ rrule: 'DTSTART;VALUE=DATE:20270105\nRRULE:FREQ=WEEKLY;INTERVAL=2;BYDAY=TU,WE', start: '10:00', end: '16:00' }];
-    const res = await owner$.write('put', setupPaths.staffMember(stylist.id), details({ name: 'Sage Holloway', skills: ['colour', 'cut'], maxClientsAtOnce: 3, hours }));
+    const res = await owner$.write(
+      'put',
+      setupPaths.staffMember(stylist.id),
+      details({ name: 'Sage Holloway', skills: ['colour', 'cut'], maxClientsAtOnce: 3, hours }),
+    );
     expect(res.status).toBe(200);
     expect(res.body.details).toEqual({ name: 'Sage Holloway', role: 'stylist', skills: ['colour', 'cut'], maxClientsAtOnce: 3, hours });
     const off = await owner$.write('post', setupPaths.staffTimeOff(stylist.id), { from: '2027-02-02', to: '2027-02-03', reason: 'Course' });
@@ -90,12 +98,30 @@ describe('staff', () => {
     const offThatDay = await insertUser(db, salon.salonId, 'stylist', { hours: { rrule: 'FREQ=WEEKLY;BYDAY=MO', start: '09:00', end: '18:00' } });
     const cutOnly = await insertUser(db, salon.salonId, 'stylist', { skills: ['cut'] });
     const date = futureWeekday(3, 2);
-    const booked = await owner$.write('post', '/api/bookings', { clientId: client.clientId, serviceId, stepPlan: tonerPlan, stylistId: leaving.staffId, start: localIso(date, '10:00'), idempotencyKey: 'setup-staff-0001' });
+    const booked = await owner$.write('post', '/api/bookings', {
+      clientId: client.clientId,
+      serviceId,
+      stepPlan: tonerPlan,
+      stylistId: leaving.staffId,
+      start: localIso(date, '10:00'),
+      idempotencyKey: 'setup-staff-0001',
+    });
     expect(booked.status).toBe(201);
     // The free stylist is busy at the same time with another client's hands-on step: not free.
     const busy = await insertUser(db, salon.salonId, 'stylist');
     const other = await insertUser(db, salon.salonId, 'client');
-    expect((await owner$.write('post', '/api/bookings', { clientId: other.clientId, serviceId, stepPlan: tonerPlan, stylistId: busy.staffId, start: localIso(date, '10:00'), idempotencyKey: 'setup-staff-0002' })).status).toBe(201);
+    expect(
+      (
+        await owner$.write('post', '/api/bookings', {
+          clientId: other.clientId,
+          serviceId,
+          stepPlan: tonerPlan,
+          stylistId: busy.staffId,
+          start: localIso(date, '10:00'),
+          idempotencyKey: 'setup-staff-0002',
+        })
+      ).status,
+    ).toBe(201);
 
     const refused = await owner$.write('post', setupPaths.staffDeactivate(leaving.id));
     expect(refused.status).toBe(409);
@@ -116,7 +142,12 @@ describe('staff', () => {
     const moved = await owner$.write('post', setupPaths.staffReassign(leaving.id), { bookingId: booked.body.id, toStaffId: free.staffId });
     expect(moved.status).toBe(200);
     expect(moved.body.bookings).toEqual([]);
-    const steps = await db.selectFrom('booking_steps as s').innerJoin('sittings as si', 'si.id', 's.sitting_id').select('s.stylist_id').where('si.booking_id', '=', booked.body.id).execute();
+    const steps = await db
+      .selectFrom('booking_steps as s')
+      .innerJoin('sittings as si', 'si.id', 's.sitting_id')
+      .select('s.stylist_id')
+      .where('si.booking_id', '=', booked.body.id)
+      .execute();
     expect(new Set(steps.map((s) => s.stylist_id))).toEqual(new Set([free.staffId]));
 
     const done = await owner$.write('post', setupPaths.staffDeactivate(leaving.id));

@@ -43,7 +43,14 @@ describe('chairs and basins', () => {
   it('lists the future bookings a closure touches, and planning treats the closed basin as taken', async () => {
     const date = futureWeekday(4, 3);
     const next = futureWeekday(5, 3);
-    const booked = await owner$.write('post', '/api/bookings', { clientId: client.clientId, serviceId, stepPlan: tonerPlan, stylistId: stylist.staffId, start: localIso(date, '10:00'), idempotencyKey: 'setup-units-0001' });
+    const booked = await owner$.write('post', '/api/bookings', {
+      clientId: client.clientId,
+      serviceId,
+      stepPlan: tonerPlan,
+      stylistId: stylist.staffId,
+      start: localIso(date, '10:00'),
+      idempotencyKey: 'setup-units-0001',
+    });
     expect(booked.status).toBe(201);
     const basin = salon.basins[0];
     const preview = await owner$.get(setupPaths.unitAffected('basins', basin, date, next));
@@ -58,14 +65,28 @@ describe('chairs and basins', () => {
     const units = await owner$.get(setupPaths.units);
     expect(units.body.basins[0].outOfService).toHaveLength(1);
     // The only basin is out on that day, and the toner needs a rinse: no option that day.
-    const options = await owner$.write('post', '/api/booking-options', { clientId: client.clientId, serviceId, stepPlan: tonerPlan, stylistId: stylist.staffId, earliestDate: next, limit: 3 });
+    const options = await owner$.write('post', '/api/booking-options', {
+      clientId: client.clientId,
+      serviceId,
+      stepPlan: tonerPlan,
+      stylistId: stylist.staffId,
+      earliestDate: next,
+      limit: 3,
+    });
     expect(options.status).toBe(200);
     expect(options.body.options.length).toBeGreaterThan(0);
     for (const o of options.body.options) expect(o.sittings[0].start.slice(0, 10)).not.toBe(next);
 
     const entry = units.body.basins[0].outOfService[0].id;
     expect((await owner$.write('delete', `${setupPaths.unitOutOfService('basins', basin)}/${entry}`)).status).toBe(204);
-    const again = await owner$.write('post', '/api/booking-options', { clientId: client.clientId, serviceId, stepPlan: tonerPlan, stylistId: stylist.staffId, earliestDate: next, limit: 3 });
+    const again = await owner$.write('post', '/api/booking-options', {
+      clientId: client.clientId,
+      serviceId,
+      stepPlan: tonerPlan,
+      stylistId: stylist.staffId,
+      earliestDate: next,
+      limit: 3,
+    });
     expect(again.body.options[0].sittings[0].start.slice(0, 10)).toBe(next);
   });
 

@@ -15,7 +15,6 @@ beforeAll(async () => {
 });
 afterAll(() => t.close());
 
-
 describe('password reset', () => {
   it('answers 202 for an unknown address and sends nothing', async () => {
     const c = await anonymousAgent(t.app);

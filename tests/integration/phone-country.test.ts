@@ -51,19 +51,39 @@ describe('the salon country', () => {
     // With its country code a number from anywhere is kept.
     const withCode = await desk$.write('post', '/api/clients', { name: 'Dale Ortiz', phone: '+1 970 555 0142' });
     expect(withCode.body.phone).toBe('+19705550142');
-    const edited = await desk$.write('patch', `/api/clients/${made.body.id}`, { name: 'Imogen Pryce', email: '', phone: '07400 123457', messageChannel: 'sms', marketingOptIn: false });
+    const edited = await desk$.write('patch', `/api/clients/${made.body.id}`, {
+      name: 'Imogen Pryce',
+      email: '',
+      phone: '07400 123457',
+      messageChannel: 'sms',
+      marketingOptIn: false,
+    });
     expect(edited.status).toBe(200);
     expect(edited.body.phone).toBe('+447400123457');
   });
 
   it('at sign-up, a client of that salon types a national number and is stored in E.164; nothing is stored for a bad one', async () => {
     const anon = await anonymousAgent(t.app);
-    const bad = await anon.write('post', '/api/sign-up', { name: 'Ffion Hale', email: 'ffion.bad@example.test', phone: '555 0142', password: 'long-enough-passphrase', salonSlug: slug });
+    const bad = await anon.write('post', '/api/sign-up', {
+      name: 'Ffion Hale',
+      email: 'ffion.bad@example.test',
+      phone: '555 0142',
+      password: 'long-enough-passphrase',
+      salonSlug: slug,
+    });
     expect(bad.status).toBe(400);
     expect(Object.keys(bad.body.error.fields)).toEqual(['phone']);
     expect(await t.testDb.db.selectFrom('users').select('id').where('email', '=', 'ffion.bad@example.test').executeTakeFirst()).toBeUndefined();
-    const ok = await anon.write('post', '/api/sign-up', { name: 'Ffion Hale', email: 'ffion@example.test', phone: '07400 123458', password: 'long-enough-passphrase', salonSlug: slug });
+    const ok = await anon.write('post', '/api/sign-up', {
+      name: 'Ffion Hale',
+      email: 'ffion@example.test',
+      phone: '07400 123458',
+      password: 'long-enough-passphrase',
+      salonSlug: slug,
+    });
     expect(ok.status).toBe(201);
-    expect((await t.testDb.db.selectFrom('clients').select('phone').where('email', '=', 'ffion@example.test').executeTakeFirstOrThrow()).phone).toBe('+447400123458');
+    expect((await t.testDb.db.selectFrom('clients').select('phone').where('email', '=', 'ffion@example.test').executeTakeFirstOrThrow()).phone).toBe(
+      '+447400123458',
+    );
   });
 });

@@ -19,10 +19,18 @@ beforeAll(async () => {
   const db = t.testDb.db;
   const salon = await insertSalon(db);
   salonId = salon.salonId;
-  [client, otherClient, stylist] = await Promise.all([insertUser(db, salon.salonId, 'client'), insertUser(db, salon.salonId, 'client'), insertUser(db, salon.salonId, 'stylist')]);
+  [client, otherClient, stylist] = await Promise.all([
+    insertUser(db, salon.salonId, 'client'),
+    insertUser(db, salon.salonId, 'client'),
+    insertUser(db, salon.salonId, 'stylist'),
+  ]);
   otherSalonStylist = await insertUser(db, (await insertSalon(db)).salonId, 'stylist');
   bookingId = await insertTestBooking(db, {
-    salonId: salon.salonId, clientId: client.clientId!, stylistId: stylist.staffId!, chairId: salon.chairs[0]!, serviceId: await insertService(db, salon.salonId),
+    salonId: salon.salonId,
+    clientId: client.clientId!,
+    stylistId: stylist.staffId!,
+    chairId: salon.chairs[0]!,
+    serviceId: await insertService(db, salon.salonId),
     steps: [['hands_on', '2027-03-02T17:00:00Z', '2027-03-02T17:30:00Z']],
   });
 });
@@ -77,7 +85,8 @@ describe('POST /api/me/photos: what is refused', () => {
     expect(await rowsOf(otherClient.clientId!)).toHaveLength(0);
     expect(await storedFiles()).toEqual(before);
   };
-  it('when a shell script is renamed .jpg, responds 400 naming the file', () => refused({ name: 'cute-cut.jpg', bytes: SCRIPT }, 400, /“cute-cut\.jpg” is not a JPEG, PNG/));
+  it('when a shell script is renamed .jpg, responds 400 naming the file', () =>
+    refused({ name: 'cute-cut.jpg', bytes: SCRIPT }, 400, /“cute-cut\.jpg” is not a JPEG, PNG/));
   it('when the file is empty, responds 400', () => refused({ name: 'empty.png', bytes: Buffer.alloc(0) }, 400, /“empty\.png” is empty/));
   it('when a file is over 10 MB, responds 413 naming it', async () => {
     const big = Buffer.concat([await makeImage('jpeg'), Buffer.alloc(10 * 1024 * 1024)]);

@@ -28,11 +28,15 @@ const LEAD_HOURS = 720;
 const VALIDITY_DAYS = 182;
 
 const oxidative: StepPlan = {
-  sittings: [{ steps: [
-    { kind: 'hands_on', label: 'Apply colour to regrowth', product: 'oxidative_colour', minutes: 10 },
-    { kind: 'developing', label: 'Colour develops', product: 'oxidative_colour', minMinutes: 30, maxMinutes: 35 },
-    { kind: 'basin', label: 'Rinse', product: 'none', minutes: 15 },
-  ] }],
+  sittings: [
+    {
+      steps: [
+        { kind: 'hands_on', label: 'Apply colour to regrowth', product: 'oxidative_colour', minutes: 10 },
+        { kind: 'developing', label: 'Colour develops', product: 'oxidative_colour', minMinutes: 30, maxMinutes: 35 },
+        { kind: 'basin', label: 'Rinse', product: 'none', minutes: 15 },
+      ],
+    },
+  ],
 };
 
 beforeAll(async () => {
@@ -41,7 +45,10 @@ beforeAll(async () => {
   salon = await insertSalon(db, { chairs: 2, basins: 1 });
   // A long lead time (the salon may set up to 720 hours) puts a new test's first colour day weeks away.
   await db.updateTable('salons').set({ skin_test_lead_hours: LEAD_HOURS, skin_test_validity_days: VALIDITY_DAYS }).where('id', '=', salon.salonId).execute();
-  ana = await insertUser(db, salon.salonId, 'stylist', { skills: ['colour'], hours: { rrule: 'FREQ=WEEKLY;BYDAY=TU,WE,TH,FR,SA', start: '09:00', end: '21:00' } });
+  ana = await insertUser(db, salon.salonId, 'stylist', {
+    skills: ['colour'],
+    hours: { rrule: 'FREQ=WEEKLY;BYDAY=TU,WE,TH,FR,SA', start: '09:00', end: '21:00' },
+  });
   const desk = await insertUser(db, salon.salonId, 'front_desk');
   rootColour = await insertPlannedService(db, salon.salonId, { name: 'Root colour', plan: oxidative, needsSkinTest: false, depositCents: 0 });
   desk$ = await signedInAgent(t.app, desk.email, desk.password);
@@ -57,10 +64,29 @@ async function clientBetweenTests() {
   const now = Date.now();
   const oldApplied = new Date(now - (VALIDITY_DAYS - 2) * DAY);
   const newApplied = new Date(now - DAY);
-  await t.testDb.db.insertInto('skin_tests').values([
-    { salon_id: salon.salonId, client_id: client.clientId!, applied_at: oldApplied, read_at: new Date(oldApplied.getTime() + 48 * HOUR), result: 'negative', recorded_by: null, created_at: oldApplied },
-    { salon_id: salon.salonId, client_id: client.clientId!, applied_at: newApplied, read_at: null, result: 'pending', recorded_by: null, created_at: newApplied },
-  ]).execute();
+  await t.testDb.db
+    .insertInto('skin_tests')
+    .values([
+      {
+        salon_id: salon.salonId,
+        client_id: client.clientId!,
+        applied_at: oldApplied,
+        read_at: new Date(oldApplied.getTime() + 48 * HOUR),
+        result: 'negative',
+        recorded_by: null,
+        created_at: oldApplied,
+      },
+      {
+        salon_id: salon.salonId,
+        client_id: client.clientId!,
+        applied_at: newApplied,
+        read_at: null,
+        result: 'pending',
+        recorded_by: null,
+        created_at: newApplied,
+      },
+    ])
+    .execute();
   return { client, dayN: new Date(newApplied.getTime() + LEAD_HOURS * HOUR) };
 }
 
@@ -71,7 +97,14 @@ describe('what the skin test allows is a limit the engine searches within', () =
     // between, far more than the options asked for (one stylist: one option per open day).
     const earliestDate = DateTime.now().setZone(ZONE).plus({ days: 4 }).toISODate()!;
     const K = 4;
-    const res = await desk$.write('post', '/api/booking-options', { clientId: client.clientId, serviceId: rootColour, stepPlan: oxidative, stylistId: null, earliestDate, limit: K });
+    const res = await desk$.write('post', '/api/booking-options', {
+      clientId: client.clientId,
+      serviceId: rootColour,
+      stepPlan: oxidative,
+      stylistId: null,
+      earliestDate,
+      limit: K,
+    });
     expect(res.status).toBe(200);
     expect(res.body.skinTest).toMatchObject({ required: true, ok: true });
     const options = res.body.options as BookingOption[];
@@ -86,7 +119,14 @@ describe('what the skin test allows is a limit the engine searches within', () =
 
   it('carries each step’s label through the engine into the option', async () => {
     const { client } = await clientBetweenTests();
-    const res = await desk$.write('post', '/api/booking-options', { clientId: client.clientId, serviceId: rootColour, stepPlan: oxidative, stylistId: ana.staffId, earliestDate: futureWeekday(2, 6), limit: 2 });
+    const res = await desk$.write('post', '/api/booking-options', {
+      clientId: client.clientId,
+      serviceId: rootColour,
+      stepPlan: oxidative,
+      stylistId: ana.staffId,
+      earliestDate: futureWeekday(2, 6),
+      limit: 2,
+    });
     expect(res.status).toBe(200);
     for (const o of res.body.options as BookingOption[]) {
       expect(o.sittings[0].steps.map((s) => [s.kind, s.label])).toEqual(oxidative.sittings[0].steps.map((s) => [s.kind, s.label]));
@@ -104,7 +144,14 @@ describe('one booking-options request', () => {
       },
     });
     const client = await insertUser(t.testDb.db, salon.salonId, 'client');
-    const body = { clientId: client.clientId!, serviceId: rootColour, stepPlan: { sittings: [{ steps: [{ kind: 'hands_on' as const, label: 'Blow-dry', product: 'none' as const, minutes: 30 }] }] }, stylistId: null, earliestDate: futureWeekday(2, 2), limit: 6 };
+    const body = {
+      clientId: client.clientId!,
+      serviceId: rootColour,
+      stepPlan: { sittings: [{ steps: [{ kind: 'hands_on' as const, label: 'Blow-dry', product: 'none' as const, minutes: 30 }] }] },
+      stylistId: null,
+      earliestDate: futureWeekday(2, 2),
+      limit: 6,
+    };
     // As the route does it: the salon once, then the options.
     const answer = await findBookingOptions(logged, await findSalon(logged, salon.salonId), body, new Date());
     expect(answer.options.length).toBeGreaterThan(0);

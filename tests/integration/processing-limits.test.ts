@@ -22,15 +22,26 @@ const tuesday = futureWeekday(2, 2);
 
 const h = (label: string, minutes: number, product: PlannedStep['product'] = 'none'): PlannedStep => ({ kind: 'hands_on', label, product, minutes });
 const b = (label: string, minutes: number): PlannedStep => ({ kind: 'basin', label, product: 'none', minutes });
-const d = (label: string, min: number, max: number, product: PlannedStep['product'], heat = false): PlannedStep => ({ kind: 'developing', label, product, minMinutes: min, maxMinutes: max, heat });
+const d = (label: string, min: number, max: number, product: PlannedStep['product'], heat = false): PlannedStep => ({
+  kind: 'developing',
+  label,
+  product,
+  minMinutes: min,
+  maxMinutes: max,
+  heat,
+});
 const one = (...steps: PlannedStep[]): StepPlan => ({ sittings: [{ steps }] });
 
 // 45 min applying + up to 50 lifting = 95 min of lightener on the hair: over 50.
 const tooLong = one(h('Apply lightener', 45, 'lightener'), d('Lightener lifts', 30, 50, 'lightener'), b('Rinse', 15));
 // Two sections of 20 + 30 = 50 min, each rinsed before the next: within 50.
 const inSections = one(
-  h('Apply lightener, section 1 of 2', 20, 'lightener'), d('Lightener lifts, section 1 of 2', 20, 30, 'lightener'), b('Rinse section 1', 10),
-  h('Apply lightener, section 2 of 2', 20, 'lightener'), d('Lightener lifts, section 2 of 2', 20, 30, 'lightener'), b('Rinse section 2', 10),
+  h('Apply lightener, section 1 of 2', 20, 'lightener'),
+  d('Lightener lifts, section 1 of 2', 20, 30, 'lightener'),
+  b('Rinse section 1', 10),
+  h('Apply lightener, section 2 of 2', 20, 'lightener'),
+  d('Lightener lifts, section 2 of 2', 20, 30, 'lightener'),
+  b('Rinse section 2', 10),
 );
 
 beforeAll(async () => {
@@ -49,8 +60,18 @@ beforeAll(async () => {
 afterAll(() => t.close());
 
 const service = (stepPlan: StepPlan, name = 'Lightener service') => ({
-  name, description: '', category: 'colour', skill: 'colour', priceCents: 20000, priceIsFrom: true, onlineBookable: false, needsSkinTest: true,
-  depositKind: 'fixed', depositCents: 5000, depositPercent: null, stepPlan,
+  name,
+  description: '',
+  category: 'colour',
+  skill: 'colour',
+  priceCents: 20000,
+  priceIsFrom: true,
+  onlineBookable: false,
+  needsSkinTest: true,
+  depositKind: 'fixed',
+  depositCents: 5000,
+  depositPercent: null,
+  stepPlan,
 });
 
 describe('the salon’s limits', () => {
@@ -71,7 +92,11 @@ describe('the salon’s limits', () => {
       expect(res.status, JSON.stringify(change)).toBe(400);
       expect(Object.keys(res.body.error.fields), JSON.stringify(change)).toContain(field);
     }
-    const raised = await owner$.write('put', setupPaths.salon, { ...settings, processingLimits: { ...settings.processingLimits, lightener: 55 }, liftPerSitting: { virgin: 4, coloured: 2, compromised: 1 } });
+    const raised = await owner$.write('put', setupPaths.salon, {
+      ...settings,
+      processingLimits: { ...settings.processingLimits, lightener: 55 },
+      liftPerSitting: { virgin: 4, coloured: 2, compromised: 1 },
+    });
     expect(raised.status).toBe(200);
     expect(raised.body.processingLimits.lightener).toBe(55);
     expect((await owner$.write('put', setupPaths.salon, settings)).status).toBe(200);
@@ -91,7 +116,9 @@ describe('services', () => {
   it('refuses a service whose developing step is over its family’s limit, naming the step and the limit', async () => {
     const res = await owner$.write('post', setupPaths.services, service(tooLong));
     expect(res.status).toBe(400);
-    expect(res.body.error.fields['stepPlan.sittings.0.steps.1']).toMatch(/“Lightener lifts”: lightener may be on the hair at most 50 min; this plan keeps it on up to 95 min/);
+    expect(res.body.error.fields['stepPlan.sittings.0.steps.1']).toMatch(
+      /“Lightener lifts”: lightener may be on the hair at most 50 min; this plan keeps it on up to 95 min/,
+    );
     const added = await owner$.write('post', setupPaths.services, service(inSections));
     expect(added.status).toBe(201);
     const changed = await owner$.write('put', `/api/owner/setup/services/${added.body.id}`, service(tooLong));
@@ -100,7 +127,8 @@ describe('services', () => {
   });
 
   it('halves the limit with heat: 20 min of remover and 15 under heat is over 60 × ½ = 30', async () => {
-    const remover = (heat: boolean) => one(h('Apply colour remover', 20, 'colour_remover'), d('Remover processes', 10, 15, 'colour_remover', heat), b('Rinse remover', 20));
+    const remover = (heat: boolean) =>
+      one(h('Apply colour remover', 20, 'colour_remover'), d('Remover processes', 10, 15, 'colour_remover', heat), b('Rinse remover', 20));
     const hot = await owner$.write('post', setupPaths.services, service(remover(true), 'Remover under heat'));
     expect(hot.status).toBe(400);
     expect(hot.body.error.fields['stepPlan.sittings.0.steps.1']).toMatch(/at most 30 min with heat/);
@@ -110,12 +138,20 @@ describe('services', () => {
 
 describe('the desk’s plan for one booking', () => {
   it('refuses options and a booking for a plan over the limit, naming the step; the same service within it books', async () => {
-    const ask = (stepPlan: StepPlan) => desk$.write('post', '/api/booking-options', { clientId: client.clientId, serviceId, stepPlan, stylistId: null, earliestDate: tuesday });
+    const ask = (stepPlan: StepPlan) =>
+      desk$.write('post', '/api/booking-options', { clientId: client.clientId, serviceId, stepPlan, stylistId: null, earliestDate: tuesday });
     const refused = await ask(tooLong);
     expect(refused.status).toBe(400);
     expect(refused.body.error.fields['stepPlan.sittings.0.steps.1']).toMatch(/“Lightener lifts”.*at most 50 min/);
     const booking = (stepPlan: StepPlan, key: string) =>
-      desk$.write('post', '/api/bookings', { clientId: client.clientId, serviceId, stepPlan, stylistId: stylist.staffId, start: localIso(tuesday, '10:00'), idempotencyKey: key });
+      desk$.write('post', '/api/bookings', {
+        clientId: client.clientId,
+        serviceId,
+        stepPlan,
+        stylistId: stylist.staffId,
+        start: localIso(tuesday, '10:00'),
+        idempotencyKey: key,
+      });
     const notBooked = await booking(tooLong, 'limits-too-long-01');
     expect(notBooked.status).toBe(400);
     expect(Object.keys(notBooked.body.error.fields)).toEqual(['stepPlan.sittings.0.steps.1']);

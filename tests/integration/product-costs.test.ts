@@ -24,8 +24,15 @@ beforeAll(async () => {
   const desk = await insertUser(db, salon.salonId, 'front_desk');
   const start = Math.floor(Date.now() / HOUR) * HOUR - 2 * HOUR;
   bookingId = await insertBooking(db, {
-    salonId: salon.salonId, clientId: client.clientId!, serviceId: await insertService(db, salon.salonId), stylistId: stylist.staffId!, status: 'finished',
-    stepPlan: { sittings: [{ steps: [{ kind: 'hands_on', label: 'Apply', product: 'none', minutes: 60 }] }] }, priceCents: 0, depositCents: 0, createdBy: null,
+    salonId: salon.salonId,
+    clientId: client.clientId!,
+    serviceId: await insertService(db, salon.salonId),
+    stylistId: stylist.staffId!,
+    status: 'finished',
+    stepPlan: { sittings: [{ steps: [{ kind: 'hands_on', label: 'Apply', product: 'none', minutes: 60 }] }] },
+    priceCents: 0,
+    depositCents: 0,
+    createdBy: null,
     sittings: [{ chairId: salon.chairs[0], steps: [{ kind: 'hands_on', label: 'Apply', start: new Date(start), end: new Date(start + HOUR), basinId: null }] }],
   });
   owner$ = await signedInAgent(t.app, owner.email, owner.password);
@@ -35,8 +42,18 @@ beforeAll(async () => {
 afterAll(() => t.close());
 
 const bowl = (bowlNo: number, productType: string, grams: number[]) => ({
-  sittingSeq: 1, bowlNo, productType, shadeNotes: '', developerPercent: 6, ratio: '1:2',
-  grams: grams.map((g, i) => ({ kind: i === 0 ? productType : 'developer', part: '', grams: g })), appliedTo: '', plannedMinutes: null, actualMinutes: null, heat: false, resultNotes: '',
+  sittingSeq: 1,
+  bowlNo,
+  productType,
+  shadeNotes: '',
+  developerPercent: 6,
+  ratio: '1:2',
+  grams: grams.map((g, i) => ({ kind: i === 0 ? productType : 'developer', part: '', grams: g })),
+  appliedTo: '',
+  plannedMinutes: null,
+  actualMinutes: null,
+  heat: false,
+  resultNotes: '',
 });
 const sitting = async () => (await stylist$.get(`/api/bookings/${bookingId}/mix-logs`)).body.sittings[0];
 
@@ -51,7 +68,10 @@ describe('product cost per sitting', () => {
     // Developer (60 + 30 = 90 g) has no cost yet, so the estimate stays unknown rather than too low.
     expect(await sitting()).toMatchObject({ totalGrams: 140, estimatedCostCents: null });
 
-    expect((await owner$.write('put', '/api/owner/quote-prices', { correctionCentsPerHour: 11000, productCentsPerGram: { lightener: 4, toner: 7.5, developer: 1 } })).status).toBe(200);
+    expect(
+      (await owner$.write('put', '/api/owner/quote-prices', { correctionCentsPerHour: 11000, productCentsPerGram: { lightener: 4, toner: 7.5, developer: 1 } }))
+        .status,
+    ).toBe(200);
     // Hand arithmetic: lightener 30 g × 4 ¢ = 120 ¢; toner 20 g × 7.5 ¢ = 150 ¢; developer 90 g × 1 ¢ = 90 ¢;
     // 30 + 20 + 90 = 140 g; 120 + 150 + 90 = 360 ¢.
     expect(await sitting()).toMatchObject({ totalGrams: 140, estimatedCostCents: 360 });
@@ -62,6 +82,9 @@ describe('product cost per sitting', () => {
     const bad = await owner$.write('put', '/api/owner/quote-prices', { correctionCentsPerHour: -5, productCentsPerGram: { lightener: -1, glitter: 3 } });
     expect(bad.status).toBe(400);
     expect(Object.keys(bad.body.error.fields)).toEqual(expect.arrayContaining(['correctionCentsPerHour', 'productCentsPerGram.lightener']));
-    expect((await owner$.get('/api/owner/quote-prices')).body).toEqual({ correctionCentsPerHour: 11000, productCentsPerGram: { lightener: 4, toner: 7.5, developer: 1 } });
+    expect((await owner$.get('/api/owner/quote-prices')).body).toEqual({
+      correctionCentsPerHour: 11000,
+      productCentsPerGram: { lightener: 4, toner: 7.5, developer: 1 },
+    });
   });
 });

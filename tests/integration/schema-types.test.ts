@@ -28,9 +28,7 @@ async function databaseColumns(): Promise<DbColumn[]> {
        join information_schema.tables t on t.table_schema = c.table_schema and t.table_name = c.table_name
       where c.table_schema = 'public' and t.table_type = 'BASE TABLE'`,
   );
-  return rows
-    .filter((r) => !UNTYPED_TABLES.has(r.table_name))
-    .map((r) => ({ table: r.table_name, column: r.column_name, nullable: r.is_nullable === 'YES' }));
+  return rows.filter((r) => !UNTYPED_TABLES.has(r.table_name)).map((r) => ({ table: r.table_name, column: r.column_name, nullable: r.is_nullable === 'YES' }));
 }
 
 /** Every way the two accounts differ, one line each, sorted so a failure reads as a list. */

@@ -27,7 +27,11 @@ const sessionCookie = (res: { headers: Record<string, unknown> }) => cookies(res
 
 /** The session rows that belong to a user (connect-pg-simple keeps passport's user id in the JSON). */
 const sessionsOf = (userId: string) =>
-  t.testDb.db.selectFrom('session').select(['sid', 'expire']).where(sql<string>`sess->'passport'->>'user'`, '=', userId).execute();
+  t.testDb.db
+    .selectFrom('session')
+    .select(['sid', 'expire'])
+    .where(sql<string>`sess->'passport'->>'user'`, '=', userId)
+    .execute();
 
 describe('session lifetime', () => {
   it('sets the idle timeout from SESSION_IDLE_MINUTES on the cookie and in the store', async () => {
@@ -45,7 +49,11 @@ describe('session lifetime', () => {
     const c = await signedInAgent(t.app, owner.email, owner.password);
     const before = new Set((await sessionsOf(owner.id)).map((s) => s.sid));
     // Rewind every session of this user as if IDLE_MINUTES had passed without a request.
-    await t.testDb.db.updateTable('session').set({ expire: new Date(Date.now() - 1000) }).where('sid', 'in', [...before]).execute();
+    await t.testDb.db
+      .updateTable('session')
+      .set({ expire: new Date(Date.now() - 1000) })
+      .where('sid', 'in', [...before])
+      .execute();
     const res = await c.get('/api/session');
     expect(res.status).toBe(401);
     expect(res.body.error.code).toBe('UNAUTHENTICATED');
@@ -93,7 +101,12 @@ describe('cookies', () => {
     const signIn = await request(app)
       .post('/api/session')
       .set('X-Forwarded-Proto', 'https')
-      .set('Cookie', cookies(csrf).map((c) => c.split(';')[0]).join('; '))
+      .set(
+        'Cookie',
+        cookies(csrf)
+          .map((c) => c.split(';')[0])
+          .join('; '),
+      )
       .set('X-CSRF-Token', csrf.body.token)
       .send({ email: owner.email, password: owner.password });
     expect(signIn.status).toBe(200);

@@ -26,12 +26,16 @@ const HOUR = 3_600_000;
 const DAY = 24 * HOUR;
 
 const oxidative: StepPlan = {
-  sittings: [{ steps: [
-    // 10 + 35 = 45 min on the hair: within the default permanent-colour limit, so only the skin-test rule refuses.
-    { kind: 'hands_on', label: 'Apply colour to regrowth', product: 'oxidative_colour', minutes: 10 },
-    { kind: 'developing', label: 'Colour develops', product: 'oxidative_colour', minMinutes: 30, maxMinutes: 35 },
-    { kind: 'basin', label: 'Rinse', product: 'none', minutes: 15 },
-  ] }],
+  sittings: [
+    {
+      steps: [
+        // 10 + 35 = 45 min on the hair: within the default permanent-colour limit, so only the skin-test rule refuses.
+        { kind: 'hands_on', label: 'Apply colour to regrowth', product: 'oxidative_colour', minutes: 10 },
+        { kind: 'developing', label: 'Colour develops', product: 'oxidative_colour', minMinutes: 30, maxMinutes: 35 },
+        { kind: 'basin', label: 'Rinse', product: 'none', minutes: 15 },
+      ],
+    },
+  ],
 };
 const dryOnly: StepPlan = { sittings: [{ steps: [{ kind: 'hands_on', label: 'Blow-dry', product: 'none', minutes: 30 }] }] };
 
@@ -40,11 +44,21 @@ beforeAll(async () => {
   const db = t.testDb.db;
   salon = await insertSalon(db, { chairs: 3, basins: 1 });
   slug = (await db.selectFrom('salons').select('slug').where('id', '=', salon.salonId).executeTakeFirstOrThrow()).slug;
-  ana = await insertUser(db, salon.salonId, 'stylist', { skills: ['colour', 'finish'], hours: { rrule: 'FREQ=WEEKLY;BYDAY=TU,WE,TH,FR,SA', start: '09:00', end: '21:00' } });
+  ana = await insertUser(db, salon.salonId, 'stylist', {
+    skills: ['colour', 'finish'],
+    hours: { rrule: 'FREQ=WEEKLY;BYDAY=TU,WE,TH,FR,SA', start: '09:00', end: '21:00' },
+  });
   const desk = await insertUser(db, salon.salonId, 'front_desk');
   const owner = await insertUser(db, salon.salonId, 'owner');
   rootColour = await insertPlannedService(db, salon.salonId, { name: 'Root colour', plan: oxidative, needsSkinTest: false, depositCents: 0 });
-  blowDry = await insertPlannedService(db, salon.salonId, { name: 'Blow-dry', plan: dryOnly, skill: 'finish', category: 'treatment', needsSkinTest: false, depositCents: 0 });
+  blowDry = await insertPlannedService(db, salon.salonId, {
+    name: 'Blow-dry',
+    plan: dryOnly,
+    skill: 'finish',
+    category: 'treatment',
+    needsSkinTest: false,
+    depositCents: 0,
+  });
   await db.updateTable('services').set({ online_bookable: true }).where('id', '=', rootColour).execute();
   desk$ = await signedInAgent(t.app, desk.email, desk.password);
   owner$ = await signedInAgent(t.app, owner.email, owner.password);
@@ -60,14 +74,33 @@ async function clientWith(tests: Test[]) {
     const appliedAt = new Date(Date.now() - test.appliedDaysAgo * DAY);
     const readAt = test.result === 'pending' ? null : new Date(appliedAt.getTime() + 48 * HOUR);
     const createdAt = new Date(Date.now() - (test.recordedDaysAgo ?? Math.max(0, test.appliedDaysAgo - 2)) * DAY);
-    await t.testDb.db.insertInto('skin_tests').values({ salon_id: salon.salonId, client_id: client.clientId!, applied_at: appliedAt, read_at: readAt, result: test.result, recorded_by: null, created_at: createdAt }).execute();
+    await t.testDb.db
+      .insertInto('skin_tests')
+      .values({
+        salon_id: salon.salonId,
+        client_id: client.clientId!,
+        applied_at: appliedAt,
+        read_at: readAt,
+        result: test.result,
+        recorded_by: null,
+        created_at: createdAt,
+      })
+      .execute();
   }
   return client;
 }
 
 let keys = 0;
 const book = (clientId: string, serviceId: string, stepPlan: StepPlan, start = localIso(tuesday, '10:00'), extra: object = {}) =>
-  desk$.write('post', '/api/bookings', { clientId, serviceId, stepPlan, stylistId: ana.staffId, start, idempotencyKey: `doors-${++keys}-${Date.now()}`, ...extra });
+  desk$.write('post', '/api/bookings', {
+    clientId,
+    serviceId,
+    stepPlan,
+    stylistId: ana.staffId,
+    start,
+    idempotencyKey: `doors-${++keys}-${Date.now()}`,
+    ...extra,
+  });
 
 function expectRefused(res: { status: number; body: { error: { code: string; message: string } } }, why: RegExp) {
   expect(res.status).toBe(409);
@@ -77,9 +110,18 @@ function expectRefused(res: { status: number; body: { error: { code: string; mes
 
 describe('the ways round, each refused with the reason', () => {
   it('a positive test followed by a newer test that is merely applied, or booked', async () => {
-    const client = await clientWith([{ appliedDaysAgo: 60, result: 'positive' }, { appliedDaysAgo: 2, result: 'pending', recordedDaysAgo: 2 }]);
+    const client = await clientWith([
+      { appliedDaysAgo: 60, result: 'positive' },
+      { appliedDaysAgo: 2, result: 'pending', recordedDaysAgo: 2 },
+    ]);
     expectRefused(await book(client.clientId!, rootColour, oxidative), /showed a reaction/);
-    const options = await desk$.write('post', '/api/booking-options', { clientId: client.clientId, serviceId: rootColour, stepPlan: oxidative, stylistId: null, earliestDate: tuesday });
+    const options = await desk$.write('post', '/api/booking-options', {
+      clientId: client.clientId,
+      serviceId: rootColour,
+      stepPlan: oxidative,
+      stylistId: null,
+      earliestDate: tuesday,
+    });
     expect(options.body.skinTest).toMatchObject({ ok: false, status: 'blocked' });
     expect(options.body.options).toEqual([]);
   });
@@ -95,15 +137,23 @@ describe('the ways round, each refused with the reason', () => {
     // The colour steps booked under a blow-dry (as a quote booked as another service would be).
     expectRefused(await book(client.clientId!, blowDry, oxidative), /No skin test is on record/);
     // The desk edits a blow-dry's plan and adds an oxidative toner step.
-    const edited: StepPlan = { sittings: [{ steps: [{ kind: 'hands_on', label: 'Gloss', product: 'toner_oxidative', minutes: 20 }, ...dryOnly.sittings[0].steps] }] };
+    const edited: StepPlan = {
+      sittings: [{ steps: [{ kind: 'hands_on', label: 'Gloss', product: 'toner_oxidative', minutes: 20 }, ...dryOnly.sittings[0].steps] }],
+    };
     expectRefused(await book(client.clientId!, blowDry, edited), /No skin test is on record/);
     // The same blow-dry without colour books as before.
     expect((await book(client.clientId!, blowDry, dryOnly, localIso(tuesday, '16:00'))).status).toBe(201);
   });
 
   it('a positive and an unread test applied at the same moment, in either recorded order', async () => {
-    for (const order of [[0, 1], [1, 0]]) {
-      const tests: Test[] = [{ appliedDaysAgo: 3, result: 'positive', recordedDaysAgo: 1 }, { appliedDaysAgo: 3, result: 'pending', recordedDaysAgo: 3 }];
+    for (const order of [
+      [0, 1],
+      [1, 0],
+    ]) {
+      const tests: Test[] = [
+        { appliedDaysAgo: 3, result: 'positive', recordedDaysAgo: 1 },
+        { appliedDaysAgo: 3, result: 'pending', recordedDaysAgo: 3 },
+      ];
       const client = await clientWith(order.map((i) => tests[i]));
       expectRefused(await book(client.clientId!, rootColour, oxidative), /showed a reaction/);
     }
@@ -116,12 +166,15 @@ describe('the ways round, each refused with the reason', () => {
       expect(res.status).toBe(400);
       expect(res.body.error.fields.skinTestLeadHours).toMatch(/At least 48 hours/);
     }
-    expect((await t.testDb.db.selectFrom('salons').select('skin_test_lead_hours').where('id', '=', salon.salonId).executeTakeFirstOrThrow()).skin_test_lead_hours).toBe(48);
+    expect(
+      (await t.testDb.db.selectFrom('salons').select('skin_test_lead_hours').where('id', '=', salon.salonId).executeTakeFirstOrThrow()).skin_test_lead_hours,
+    ).toBe(48);
   });
 
   it('a test applied 40 hours before the colour is refused; 48 hours lets the desk book it as waiting on the test', async () => {
     const client = await clientWith([{ appliedDaysAgo: 1, result: 'pending', recordedDaysAgo: 1 }]);
-    const applied = (await t.testDb.db.selectFrom('skin_tests').select('applied_at').where('client_id', '=', client.clientId!).executeTakeFirstOrThrow()).applied_at;
+    const applied = (await t.testDb.db.selectFrom('skin_tests').select('applied_at').where('client_id', '=', client.clientId!).executeTakeFirstOrThrow())
+      .applied_at;
     const tooSoon = new Date(applied.getTime() + 40 * HOUR);
     // A start on the salon's grid the day after tomorrow at the earliest; 40 h after the test is before that.
     const later = localIso(futureWeekday(3, 2), '10:00');
@@ -149,25 +202,58 @@ describe('other doors use the same rule', () => {
 
   it('a window fill with an oxidative toner for a walk-in is refused; the same fill without colour is not', async () => {
     const toner = await insertPlannedService(t.testDb.db, salon.salonId, {
-      name: 'Gloss with developer', needsSkinTest: false,
-      plan: { sittings: [{ steps: [{ kind: 'hands_on', label: 'Apply gloss', product: 'toner_oxidative', minutes: 10 }, { kind: 'developing', label: 'Gloss develops', product: 'toner_oxidative', minMinutes: 10, maxMinutes: 20 }, { kind: 'basin', label: 'Rinse', product: 'none', minutes: 10 }] }] },
+      name: 'Gloss with developer',
+      needsSkinTest: false,
+      plan: {
+        sittings: [
+          {
+            steps: [
+              { kind: 'hands_on', label: 'Apply gloss', product: 'toner_oxidative', minutes: 10 },
+              { kind: 'developing', label: 'Gloss develops', product: 'toner_oxidative', minMinutes: 10, maxMinutes: 20 },
+              { kind: 'basin', label: 'Rinse', product: 'none', minutes: 10 },
+            ],
+          },
+        ],
+      },
     });
-    const fill = (serviceId: string, key: string) => desk$.write('post', '/api/windows/fill', { stylistId: ana.staffId, serviceId, start: localIso(tuesday, '18:00'), walkIn: { name: 'Walk-in Wren' }, idempotencyKey: key });
+    const fill = (serviceId: string, key: string) =>
+      desk$.write('post', '/api/windows/fill', {
+        stylistId: ana.staffId,
+        serviceId,
+        start: localIso(tuesday, '18:00'),
+        walkIn: { name: 'Walk-in Wren' },
+        idempotencyKey: key,
+      });
     expectRefused(await fill(toner, 'doors-fill-1'), /No skin test is on record/);
     expect((await fill(blowDry, 'doors-fill-2')).status).toBe(201);
 
     // Offering the oxidative gloss to a standby client without a test is refused before any link goes out.
     const waiting = await clientWith([]);
-    const entry = await desk$.write('post', '/api/standby', { clientId: waiting.clientId, serviceIds: [toner], stylistId: null, availability: [{ weekdays: [2, 3, 4, 5, 6], from: '09:00', to: '20:00' }] });
+    const entry = await desk$.write('post', '/api/standby', {
+      clientId: waiting.clientId,
+      serviceIds: [toner],
+      stylistId: null,
+      availability: [{ weekdays: [2, 3, 4, 5, 6], from: '09:00', to: '20:00' }],
+    });
     expect(entry.status).toBe(201);
-    const offered = await desk$.write('post', '/api/windows/offer', { stylistId: ana.staffId, serviceId: toner, start: localIso(tuesday, '19:00'), standbyEntryIds: [entry.body.id] });
+    const offered = await desk$.write('post', '/api/windows/offer', {
+      stylistId: ana.staffId,
+      serviceId: toner,
+      start: localIso(tuesday, '19:00'),
+      standbyEntryIds: [entry.body.id],
+    });
     expectRefused(offered, /cannot be offered to .*No skin test is on record/);
   });
 
   it('online: a hold for colour cannot be claimed on an unread test (waiting is for the desk only)', async () => {
     const client = await clientWith([{ appliedDaysAgo: 2, result: 'pending', recordedDaysAgo: 2 }]);
     const visitor = await anonymousAgent(t.app);
-    const held = await visitor.write('post', '/api/public/holds', { salonSlug: slug, serviceId: rootColour, stylistId: ana.staffId, start: localIso(futureWeekday(5, 3), '10:00') }, { 'X-Forwarded-For': '10.9.0.1' });
+    const held = await visitor.write(
+      'post',
+      '/api/public/holds',
+      { salonSlug: slug, serviceId: rootColour, stylistId: ana.staffId, start: localIso(futureWeekday(5, 3), '10:00') },
+      { 'X-Forwarded-For': '10.9.0.1' },
+    );
     expect(held.status).toBe(201);
     const c = await signedInAgent(t.app, client.email, client.password);
     const claim = await c.write('post', `/api/me/holds/${held.body.holdId}/claim`, { secret: held.body.holdSecret });
@@ -178,19 +264,28 @@ describe('other doors use the same rule', () => {
 describe('a reaction recorded later flags the bookings it affects', () => {
   it('flags the booking at once, holds its reminders, refunds its deposit in full on cancelling; only the owner clears, and colour then needs a new negative test', async () => {
     const client = await clientWith([{ appliedDaysAgo: 20, result: 'negative' }]);
-    await t.testDb.db.updateTable('clients').set({ email: `flag.${Date.now()}@example.test` }).where('id', '=', client.clientId!).execute();
+    await t.testDb.db
+      .updateTable('clients')
+      .set({ email: `flag.${Date.now()}@example.test` })
+      .where('id', '=', client.clientId!)
+      .execute();
     const booked = await book(client.clientId!, rootColour, oxidative, localIso(futureWeekday(3, 3), '10:00'));
     expect(booked.status).toBe(201);
     const id = booked.body.id as string;
     await t.testDb.db.updateTable('bookings').set({ deposit_cents: 4000 }).where('id', '=', id).execute();
     expect((await desk$.get(`/api/bookings/${id}`)).body.skinTest.status).toBe('passed');
-    const queued = () => t.testDb.db.selectFrom('messages').select(['kind', 'status']).where('booking_id', '=', id).where('kind', 'like', 'reminder%').execute();
+    const queued = () =>
+      t.testDb.db.selectFrom('messages').select(['kind', 'status']).where('booking_id', '=', id).where('kind', 'like', 'reminder%').execute();
     expect((await queued()).every((m) => m.status === 'queued')).toBe(true);
     expect((await queued()).length).toBeGreaterThan(0);
 
     // A new test (e.g. before another service) reads positive.
     const recorded = await desk$.write('post', `/api/clients/${client.clientId!}/skin-tests`, {
-      appliedAt: new Date(Date.now() - 3 * DAY).toISOString(), readAt: new Date(Date.now() - DAY).toISOString(), result: 'positive', product: 'Permanent colour with 6 % developer', notes: 'Redness behind the ear',
+      appliedAt: new Date(Date.now() - 3 * DAY).toISOString(),
+      readAt: new Date(Date.now() - DAY).toISOString(),
+      result: 'positive',
+      product: 'Permanent colour with 6 % developer',
+      notes: 'Redness behind the ear',
     });
     expect(recorded.status).toBe(201);
     const view = (await desk$.get(`/api/bookings/${id}`)).body;
@@ -198,9 +293,14 @@ describe('a reaction recorded later flags the bookings it affects', () => {
     expect((await queued()).every((m) => m.status === 'dropped')).toBe(true);
 
     // Only the owner may clear, with a reason; the desk is turned away.
-    expect((await desk$.write('post', `/api/clients/${client.clientId!}/skin-test-clearances`, { reason: 'Written advice from the client’s dermatologist, 2 Dec' })).status).toBe(403);
+    expect(
+      (await desk$.write('post', `/api/clients/${client.clientId!}/skin-test-clearances`, { reason: 'Written advice from the client’s dermatologist, 2 Dec' }))
+        .status,
+    ).toBe(403);
     expect((await owner$.write('post', `/api/clients/${client.clientId!}/skin-test-clearances`, { reason: 'short' })).status).toBe(400);
-    const cleared = await owner$.write('post', `/api/clients/${client.clientId!}/skin-test-clearances`, { reason: 'Written advice from the client’s dermatologist, 2 Dec' });
+    const cleared = await owner$.write('post', `/api/clients/${client.clientId!}/skin-test-clearances`, {
+      reason: 'Written advice from the client’s dermatologist, 2 Dec',
+    });
     expect(cleared.status).toBe(201);
     const list = (await desk$.get(`/api/clients/${client.clientId!}/skin-tests`)).body;
     expect(list.clearances).toMatchObject([{ reason: 'Written advice from the client’s dermatologist, 2 Dec' }]);
@@ -214,15 +314,28 @@ describe('a reaction recorded later flags the bookings it affects', () => {
 
   it('a booking on an unread test is kept as waiting: the client is not told it is confirmed, and a negative reading makes it passed', async () => {
     const client = await clientWith([{ appliedDaysAgo: 1, result: 'pending', recordedDaysAgo: 1 }]);
-    await t.testDb.db.updateTable('clients').set({ email: `wait.${Date.now()}@example.test` }).where('id', '=', client.clientId!).execute();
+    await t.testDb.db
+      .updateTable('clients')
+      .set({ email: `wait.${Date.now()}@example.test` })
+      .where('id', '=', client.clientId!)
+      .execute();
     const booked = await book(client.clientId!, rootColour, oxidative, localIso(futureWeekday(4, 3), '10:00'));
     expect(booked.status).toBe(201);
     expect(booked.body.skinTest.status).toBe('waiting');
-    const notice = await t.testDb.db.selectFrom('messages').select(['subject', 'body']).where('booking_id', '=', booked.body.id).where('kind', '=', 'confirmation').where('channel', '=', 'email').executeTakeFirstOrThrow();
+    const notice = await t.testDb.db
+      .selectFrom('messages')
+      .select(['subject', 'body'])
+      .where('booking_id', '=', booked.body.id)
+      .where('kind', '=', 'confirmation')
+      .where('channel', '=', 'email')
+      .executeTakeFirstOrThrow();
     expect(notice.subject).toMatch(/^Kept for you, waiting on your skin test/);
     expect(notice.body).not.toMatch(/You're booked/);
     const test = (await desk$.get(`/api/clients/${client.clientId!}/skin-tests`)).body.tests[0];
-    const read = await desk$.write('post', `/api/clients/${client.clientId!}/skin-tests/${test.id}/reading`, { readAt: new Date().toISOString(), result: 'negative' });
+    const read = await desk$.write('post', `/api/clients/${client.clientId!}/skin-tests/${test.id}/reading`, {
+      readAt: new Date().toISOString(),
+      result: 'negative',
+    });
     expect(read.status).toBe(200);
     expect((await desk$.get(`/api/bookings/${booked.body.id}`)).body.skinTest.status).toBe('passed');
   });
@@ -233,13 +346,22 @@ describe('hair history reaches booking', () => {
     const client = await clientWith([{ appliedDaysAgo: 10, result: 'negative' }]);
     const c = await signedInAgent(t.app, client.email, client.password);
     const saved = await c.write('put', '/api/me/hair-history', {
-      ...emptyHairHistory(), previousReaction: { answer: 'yes', details: 'Itchy scalp and swelling after a box dye, 2024' },
+      ...emptyHairHistory(),
+      previousReaction: { answer: 'yes', details: 'Itchy scalp and swelling after a box dye, 2024' },
     });
     expect(saved.status).toBe(200);
     const visitor = await anonymousAgent(t.app);
-    const held = await visitor.write('post', '/api/public/holds', { salonSlug: slug, serviceId: rootColour, stylistId: ana.staffId, start: localIso(futureWeekday(5, 4), '10:00') }, { 'X-Forwarded-For': '10.9.0.2' });
+    const held = await visitor.write(
+      'post',
+      '/api/public/holds',
+      { salonSlug: slug, serviceId: rootColour, stylistId: ana.staffId, start: localIso(futureWeekday(5, 4), '10:00') },
+      { 'X-Forwarded-For': '10.9.0.2' },
+    );
     expect(held.status).toBe(201);
-    expectRefused(await c.write('post', `/api/me/holds/${held.body.holdId}/claim`, { secret: held.body.holdSecret }), /reacted to hair colour before.*book a consultation/);
+    expectRefused(
+      await c.write('post', `/api/me/holds/${held.body.holdId}/claim`, { secret: held.body.holdSecret }),
+      /reacted to hair colour before.*book a consultation/,
+    );
     const card = (await desk$.get(`/api/clients/${client.clientId!}`)).body;
     expect(card.reportedReaction).toBe('Itchy scalp and swelling after a box dye, 2024');
   });
@@ -269,13 +391,24 @@ describe('age', () => {
     expect(refused.status).toBe(409);
     expect(refused.body.error).toMatchObject({ code: 'AGE_CONSENT', message: expect.stringMatching(/under 16.*guardian/) });
     const visitor = await anonymousAgent(t.app);
-    const held = await visitor.write('post', '/api/public/holds', { salonSlug: slug, serviceId: rootColour, stylistId: ana.staffId, start: localIso(futureWeekday(2, 5), '13:00') }, { 'X-Forwarded-For': '10.9.0.3' });
+    const held = await visitor.write(
+      'post',
+      '/api/public/holds',
+      { salonSlug: slug, serviceId: rootColour, stylistId: ana.staffId, start: localIso(futureWeekday(2, 5), '13:00') },
+      { 'X-Forwarded-For': '10.9.0.3' },
+    );
     const claim = await c.write('post', `/api/me/holds/${held.body.holdId}/claim`, { secret: held.body.holdSecret });
     expect(claim.status).toBe(409);
     expect(claim.body.error.message).toMatch(/not booked online for anyone under 16/);
 
-    expect((await desk$.write('post', `/api/clients/${client.clientId!}/guardian-consents`, { guardianName: '', relationship: 'mother', note: '' })).status).toBe(400);
-    const consent = await desk$.write('post', `/api/clients/${client.clientId!}/guardian-consents`, { guardianName: 'Ida Lund', relationship: 'mother', note: 'Signed form on file' });
+    expect(
+      (await desk$.write('post', `/api/clients/${client.clientId!}/guardian-consents`, { guardianName: '', relationship: 'mother', note: '' })).status,
+    ).toBe(400);
+    const consent = await desk$.write('post', `/api/clients/${client.clientId!}/guardian-consents`, {
+      guardianName: 'Ida Lund',
+      relationship: 'mother',
+      note: 'Signed form on file',
+    });
     expect(consent.status).toBe(201);
     expect(consent.body.guardianConsents).toMatchObject([{ guardianName: 'Ida Lund', relationship: 'mother' }]);
     expect((await book(client.clientId!, rootColour, oxidative, start)).status).toBe(201);
@@ -287,16 +420,34 @@ describe('age', () => {
 describe('the other way out: change the steps', () => {
   it('a blocked booking changed to a direct dye keeps its start, needs no skin test, and gets its reminders back', async () => {
     const client = await clientWith([{ appliedDaysAgo: 20, result: 'negative' }]);
-    await t.testDb.db.updateTable('clients').set({ email: `change.${Date.now()}@example.test` }).where('id', '=', client.clientId!).execute();
+    await t.testDb.db
+      .updateTable('clients')
+      .set({ email: `change.${Date.now()}@example.test` })
+      .where('id', '=', client.clientId!)
+      .execute();
     const start = localIso(futureWeekday(6, 3), '10:00');
     const booked = await book(client.clientId!, rootColour, oxidative, start);
     expect(booked.status).toBe(201);
     const id = booked.body.id as string;
-    await desk$.write('post', `/api/clients/${client.clientId!}/skin-tests`, { appliedAt: new Date(Date.now() - 3 * DAY).toISOString(), readAt: new Date(Date.now() - DAY).toISOString(), result: 'positive', product: '', notes: '' });
+    await desk$.write('post', `/api/clients/${client.clientId!}/skin-tests`, {
+      appliedAt: new Date(Date.now() - 3 * DAY).toISOString(),
+      readAt: new Date(Date.now() - DAY).toISOString(),
+      result: 'positive',
+      product: '',
+      notes: '',
+    });
     expect((await desk$.get(`/api/bookings/${id}`)).body.skinTest.status).toBe('blocked');
     // Still oxidative: refused with the reason.
     expectRefused(await desk$.write('post', `/api/bookings/${id}/plan`, { stepPlan: oxidative }), /showed a reaction/);
-    const direct: StepPlan = { sittings: [{ steps: oxidative.sittings[0].steps.map((s) => (s.product === 'oxidative_colour' ? { ...s, product: 'direct_dye' as const, label: s.label.replace('colour', 'direct dye') } : s)) }] };
+    const direct: StepPlan = {
+      sittings: [
+        {
+          steps: oxidative.sittings[0].steps.map((s) =>
+            s.product === 'oxidative_colour' ? { ...s, product: 'direct_dye' as const, label: s.label.replace('colour', 'direct dye') } : s,
+          ),
+        },
+      ],
+    };
     const changed = await desk$.write('post', `/api/bookings/${id}/plan`, { stepPlan: direct });
     expect(changed.status).toBe(200);
     expect(changed.body.skinTest.status).toBe('not_needed');
@@ -305,7 +456,9 @@ describe('the other way out: change the steps', () => {
     const reminders = await t.testDb.db.selectFrom('messages').select('status').where('booking_id', '=', id).where('kind', 'like', 'reminder%').execute();
     expect(reminders.some((m) => m.status === 'queued')).toBe(true);
     // A plan with another number of sittings is refused naming the field.
-    const two = await desk$.write('post', `/api/bookings/${id}/plan`, { stepPlan: { sittings: [direct.sittings[0], { ...direct.sittings[0], daysAfterPrevious: { min: 3, max: 14 } }] } });
+    const two = await desk$.write('post', `/api/bookings/${id}/plan`, {
+      stepPlan: { sittings: [direct.sittings[0], { ...direct.sittings[0], daysAfterPrevious: { min: 3, max: 14 } }] },
+    });
     expect(two.status).toBe(400);
     expect(two.body.error.fields.stepPlan).toMatch(/Keep 1 sitting/);
   });

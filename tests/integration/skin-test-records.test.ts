@@ -44,13 +44,28 @@ afterAll(() => t.close());
 
 /** A test applied at `appliedAt` and not read yet, recorded through the API by `by`. */
 async function applyTest(clientId: string, appliedAt: string, by: Agent = stylist$) {
-  const res = await by.write('post', `/api/clients/${clientId}/skin-tests`, { appliedAt, readAt: null, result: 'pending', product: 'Permanent 6.0 with 6 % developer', notes: 'Behind the left ear' });
+  const res = await by.write('post', `/api/clients/${clientId}/skin-tests`, {
+    appliedAt,
+    readAt: null,
+    result: 'pending',
+    product: 'Permanent 6.0 with 6 % developer',
+    notes: 'Behind the left ear',
+  });
   expect(res.status).toBe(201);
   return res.body as { id: string; appliedAt: string; result: string; recordedByName: string | null; readByName: string | null };
 }
 const newClient = async () => (await insertUser(t.testDb.db, salon.salonId, 'client')).clientId!;
 const audit = (entity: 'skin_test' | 'strand_test', id: string) => listAudit(t.testDb.db, salon.salonId, entity, id);
-const strand = { testedAt: iso(Date.now() - 24 * HOUR), tested: 'Lightener 1:2 on a nape strand', productType: 'lightener', developerPercent: 6, minutes: 30, result: 'passed', notes: '', photoId: null };
+const strand = {
+  testedAt: iso(Date.now() - 24 * HOUR),
+  tested: 'Lightener 1:2 on a nape strand',
+  productType: 'lightener',
+  developerPercent: 6,
+  minutes: 30,
+  result: 'passed',
+  notes: '',
+  photoId: null,
+};
 
 describe('recording the reading of a pending skin test', () => {
   it('stores the read time, result and reader once, and audits it before → after', async () => {
@@ -67,13 +82,19 @@ describe('recording the reading of a pending skin test', () => {
     expect((await desk$.get(`/api/clients/${clientId}/skin-tests`)).body.tests).toEqual([read.body]);
 
     const entries = await audit('skin_test', applied.id);
-    expect(entries.map((e) => [e.action, e.actor])).toEqual([['recorded', await nameOf(stylist)], ['reading recorded', await nameOf(desk)]]);
+    expect(entries.map((e) => [e.action, e.actor])).toEqual([
+      ['recorded', await nameOf(stylist)],
+      ['reading recorded', await nameOf(desk)],
+    ]);
     expect(entries[0].after).toMatchObject({ result: 'pending', readAt: null, notes: 'Behind the left ear' });
     expect(entries[1].before).toEqual({ readAt: null, result: 'pending', readByName: null });
     expect(entries[1].after).toEqual({ readAt, result: 'negative', readByName: await nameOf(desk) });
 
     // Stored once: a second reading is refused with the reason, and the first stands.
-    const again = await owner$.write('post', `/api/clients/${clientId}/skin-tests/${applied.id}/reading`, { readAt: iso(Date.now() - HOUR), result: 'positive' });
+    const again = await owner$.write('post', `/api/clients/${clientId}/skin-tests/${applied.id}/reading`, {
+      readAt: iso(Date.now() - HOUR),
+      result: 'positive',
+    });
     expect(again.status).toBe(409);
     expect(again.body.error.message).toMatch(/already read \(negative/);
     expect((await desk$.get(`/api/clients/${clientId}/skin-tests`)).body.tests[0]).toMatchObject({ result: 'negative', readAt });
@@ -81,7 +102,10 @@ describe('recording the reading of a pending skin test', () => {
   });
 
   it('each staff role may record a reading (owner: positive, stylist: unclear)', async () => {
-    for (const [agent, result] of [[owner$, 'positive'], [stylist$, 'unclear']] as const) {
+    for (const [agent, result] of [
+      [owner$, 'positive'],
+      [stylist$, 'unclear'],
+    ] as const) {
       const clientId = await newClient();
       const applied = await applyTest(clientId, iso(Date.now() - 49 * HOUR), desk$);
       const read = await agent.write('post', `/api/clients/${clientId}/skin-tests/${applied.id}/reading`, { readAt: iso(Date.now() - HOUR), result });
@@ -95,7 +119,10 @@ describe('recording the reading of a pending skin test', () => {
     // 17:00 UTC on Tuesday 3 March 2026 is 10:00 in Denver: mountain standard time (UTC−7) until US daylight
     // time starts on the second Sunday of March, 8 March 2026 (IANA time-zone database, America/Denver).
     const applied = await applyTest(clientId, '2026-03-03T17:00:00Z');
-    const early = await desk$.write('post', `/api/clients/${clientId}/skin-tests/${applied.id}/reading`, { readAt: '2026-03-03T16:59:00Z', result: 'negative' });
+    const early = await desk$.write('post', `/api/clients/${clientId}/skin-tests/${applied.id}/reading`, {
+      readAt: '2026-03-03T16:59:00Z',
+      result: 'negative',
+    });
     expect(early.status).toBe(400);
     expect(early.body.error.fields.readAt).toBe('A test cannot be read before it was applied (Tue 3 Mar 2026, 10:00 AM).');
   });
@@ -125,7 +152,7 @@ describe('recording the reading of a pending skin test', () => {
     expect((await audit('skin_test', applied.id)).map((e) => e.action)).toEqual(['recorded']);
   });
 
-  it("refuses a test of another client or another salon, and a malformed body or id, as 4xx; nothing stored", async () => {
+  it('refuses a test of another client or another salon, and a malformed body or id, as 4xx; nothing stored', async () => {
     const [mine, someoneElse] = [await newClient(), await newClient()];
     const applied = await applyTest(mine, iso(Date.now() - 49 * HOUR));
     const reading = { readAt: iso(Date.now() - HOUR), result: 'positive' };
@@ -149,7 +176,11 @@ describe('recording the reading of a pending skin test', () => {
 
   it('refuses, naming the field, a new test read before it was applied or applied in the future', async () => {
     const clientId = await newClient();
-    const backwards = await desk$.write('post', `/api/clients/${clientId}/skin-tests`, { appliedAt: iso(Date.now() - HOUR), readAt: iso(Date.now() - 2 * HOUR), result: 'negative' });
+    const backwards = await desk$.write('post', `/api/clients/${clientId}/skin-tests`, {
+      appliedAt: iso(Date.now() - HOUR),
+      readAt: iso(Date.now() - 2 * HOUR),
+      result: 'negative',
+    });
     expect(backwards.status).toBe(400);
     expect(backwards.body.error.fields.readAt).toMatch(/before it was applied/);
     const ahead = await desk$.write('post', `/api/clients/${clientId}/skin-tests`, { appliedAt: iso(Date.now() + 24 * HOUR), readAt: null, result: 'pending' });
@@ -160,7 +191,7 @@ describe('recording the reading of a pending skin test', () => {
 });
 
 describe('test records are kept', () => {
-  it("a deactivated, then removed, staff account leaves the names of who recorded and read the tests", async () => {
+  it('a deactivated, then removed, staff account leaves the names of who recorded and read the tests', async () => {
     const db = t.testDb.db;
     const leaving = await insertUser(db, salon.salonId, 'stylist');
     const leaving$ = await signedInAgent(t.app, leaving.email, leaving.password);
@@ -192,13 +223,27 @@ describe('test records are kept', () => {
     const applied = await applyTest(clientId, iso(Date.now() - 49 * HOUR));
     const photo = await db
       .insertInto('client_photos')
-      .values({ salon_id: salon.salonId, client_id: clientId, booking_id: null, kind: 'hair_now', storage_key: `records-${Date.now()}.jpg`, mime: 'image/jpeg', bytes: 1, width: 1, height: 1 })
+      .values({
+        salon_id: salon.salonId,
+        client_id: clientId,
+        booking_id: null,
+        kind: 'hair_now',
+        storage_key: `records-${Date.now()}.jpg`,
+        mime: 'image/jpeg',
+        bytes: 1,
+        width: 1,
+        height: 1,
+      })
       .returning('id')
       .executeTakeFirstOrThrow();
     const strandTest = (await desk$.write('post', `/api/clients/${clientId}/strand-tests`, { ...strand, photoId: photo.id })).body;
     expect(strandTest.photoId).toBe(photo.id);
     const bookingId = await insertTestBooking(db, {
-      salonId: salon.salonId, clientId, stylistId: stylist.staffId!, chairId: salon.chairs[0], serviceId: await insertService(db, salon.salonId),
+      salonId: salon.salonId,
+      clientId,
+      stylistId: stylist.staffId!,
+      chairId: salon.chairs[0],
+      serviceId: await insertService(db, salon.salonId),
       steps: [['hands_on', localIso(futureWeekday(3, 3), '10:00'), localIso(futureWeekday(3, 3), '10:30')]],
     });
     const lists = async () => ({
@@ -229,7 +274,19 @@ describe('test records are kept', () => {
     await applyTest(clientId, iso(Date.now() - 49 * HOUR));
     const lonely = await insertSalon(db);
     const theirClient = await insertUser(db, lonely.salonId, 'client');
-    await db.insertInto('strand_tests').values({ salon_id: lonely.salonId, client_id: theirClient.clientId!, tested_at: new Date(), tested: 'Toner on a nape strand', product_type: 'toner', minutes: 20, result: 'passed', recorded_by: null }).execute();
+    await db
+      .insertInto('strand_tests')
+      .values({
+        salon_id: lonely.salonId,
+        client_id: theirClient.clientId!,
+        tested_at: new Date(),
+        tested: 'Toner on a nape strand',
+        product_type: 'toner',
+        minutes: 20,
+        result: 'passed',
+        recorded_by: null,
+      })
+      .execute();
     // 23503 is PostgreSQL's foreign_key_violation (PostgreSQL manual, Appendix A: error codes).
     const refusedByTests = (table: string) => ({ code: '23503', constraint: expect.stringMatching(new RegExp(`^${table}_(client|salon)_id_fkey$`)) });
     await expect(db.deleteFrom('clients').where('id', '=', clientId).execute()).rejects.toMatchObject(refusedByTests('skin_tests'));
@@ -247,7 +304,9 @@ describe('the migration that keeps recorder names', () => {
       // The app's migrations, loaded through the test runner (which compiles TypeScript) rather than Node's own import.
       const folder = path.resolve('migrations');
       const files = (await fs.readdir(folder)).filter((f) => f.endsWith('.ts'));
-      const provider = { getMigrations: async () => Object.fromEntries(await Promise.all(files.map(async (f) => [f.replace(/\.ts$/, ''), await import(path.join(folder, f))]))) };
+      const provider = {
+        getMigrations: async () => Object.fromEntries(await Promise.all(files.map(async (f) => [f.replace(/\.ts$/, ''), await import(path.join(folder, f))]))),
+      };
       const migrator = new Migrator({ db: own.db, provider });
       // Back to before both of this change's migrations (their down steps run), then records as they were stored then.
       const down = await migrator.migrateTo('20261204T0910_add_salon_country');
@@ -259,8 +318,17 @@ describe('the migration that keeps recorder names', () => {
       const client = await insertUser(own.db, s.salonId, 'client');
       const who = { salon_id: s.salonId, client_id: client.clientId, recorded_by: recorder.id };
       const applied_at = new Date('2026-11-02T17:00:00Z');
-      await db.insertInto('skin_tests').values([{ ...who, applied_at, read_at: new Date('2026-11-04T17:00:00Z'), result: 'negative' }, { ...who, applied_at, read_at: null, result: 'pending' }]).execute();
-      await db.insertInto('strand_tests').values({ ...who, tested_at: applied_at, tested: 'Lightener on a nape strand', product_type: 'lightener', minutes: 30, result: 'passed' }).execute();
+      await db
+        .insertInto('skin_tests')
+        .values([
+          { ...who, applied_at, read_at: new Date('2026-11-04T17:00:00Z'), result: 'negative' },
+          { ...who, applied_at, read_at: null, result: 'pending' },
+        ])
+        .execute();
+      await db
+        .insertInto('strand_tests')
+        .values({ ...who, tested_at: applied_at, tested: 'Lightener on a nape strand', product_type: 'lightener', minutes: 30, result: 'passed' })
+        .execute();
 
       expect((await migrator.migrateToLatest()).error).toBeUndefined();
       const name = (await own.db.selectFrom('users').select('name').where('id', '=', recorder.id).executeTakeFirstOrThrow()).name;

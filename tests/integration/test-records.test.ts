@@ -32,7 +32,12 @@ const iso = (ms: number) => new Date(ms).toISOString();
 async function tryToBook(clientId: string) {
   const options = await desk$.write('post', '/api/booking-options', { clientId, serviceId, stepPlan: correctionPlan, stylistId: null, earliestDate: tuesday });
   const booked = await desk$.write('post', '/api/bookings', {
-    clientId, serviceId, stepPlan: correctionPlan, stylistId: stylist.staffId, start: `${tuesday}T09:00:00-07:00`, idempotencyKey: `k-${Math.random()}`,
+    clientId,
+    serviceId,
+    stepPlan: correctionPlan,
+    stylistId: stylist.staffId,
+    start: `${tuesday}T09:00:00-07:00`,
+    idempotencyKey: `k-${Math.random()}`,
   });
   return { skinTest: options.body.skinTest, options: options.body.options, booked };
 }
@@ -45,7 +50,11 @@ describe('skin tests gate oxidative colour', () => {
     const client = await insertUser(t.testDb.db, salon.salonId, 'client');
     await insertNegativeSkinTest(t.testDb.db, salon.salonId, client.clientId!, 60);
     const recorded = await stylist$.write('post', `/api/clients/${client.clientId!}/skin-tests`, {
-      appliedAt: iso(Date.now() - 3 * DAY), readAt: iso(Date.now() - DAY), result, product: 'Permanent 6.0 with 6 % developer', notes: '',
+      appliedAt: iso(Date.now() - 3 * DAY),
+      readAt: iso(Date.now() - DAY),
+      result,
+      product: 'Permanent 6.0 with 6 % developer',
+      notes: '',
     });
     expect(recorded.status).toBe(201);
     expect(recorded.body.recordedByName).toBe(`stylist ${stylist.email.split('.')[1]}`);
@@ -60,7 +69,13 @@ describe('skin tests gate oxidative colour', () => {
 
   it('refuses a read result without the time it was read, naming readAt, and stores nothing', async () => {
     const client = await insertUser(t.testDb.db, salon.salonId, 'client');
-    const res = await stylist$.write('post', `/api/clients/${client.clientId!}/skin-tests`, { appliedAt: iso(Date.now() - DAY), readAt: null, result: 'negative', product: '', notes: '' });
+    const res = await stylist$.write('post', `/api/clients/${client.clientId!}/skin-tests`, {
+      appliedAt: iso(Date.now() - DAY),
+      readAt: null,
+      result: 'negative',
+      product: '',
+      notes: '',
+    });
     expect(res.status).toBe(400);
     expect(res.body.error.fields.readAt).toMatch(/time it was read/);
     expect((await stylist$.get(`/api/clients/${client.clientId!}/skin-tests`)).body.tests).toEqual([]);
@@ -69,15 +84,33 @@ describe('skin tests gate oxidative colour', () => {
 
 describe('strand tests', () => {
   const strand = (over: object = {}) => ({
-    testedAt: iso(Date.now() - DAY), tested: 'Lightener 1:2 on a nape strand', productType: 'lightener', developerPercent: 6, minutes: 30,
-    result: 'passed', notes: 'Lifted to 8, strand stayed strong', photoId: null, ...over,
+    testedAt: iso(Date.now() - DAY),
+    tested: 'Lightener 1:2 on a nape strand',
+    productType: 'lightener',
+    developerPercent: 6,
+    minutes: 30,
+    result: 'passed',
+    notes: 'Lifted to 8, strand stayed strong',
+    photoId: null,
+    ...over,
   });
   const coloured = {
-    currentLevel: 4, targetLevel: 7, history: { natural: false, permanent: true, directDye: false, boxDye: false, henna: false, previousLightening: false },
-    length: 'medium', density: 'medium', elasticity: 'good', porosity: 'normal', conditionNotes: '', strandTest: 'none', wantsCut: false, notes: '',
+    currentLevel: 4,
+    targetLevel: 7,
+    history: { natural: false, permanent: true, directDye: false, boxDye: false, henna: false, previousLightening: false },
+    length: 'medium',
+    density: 'medium',
+    elasticity: 'good',
+    porosity: 'normal',
+    conditionNotes: '',
+    strandTest: 'none',
+    wantsCut: false,
+    notes: '',
   };
   const warningCodes = async (clientId: string) =>
-    ((await stylist$.write('post', '/api/consultations/propose', { consultation: coloured, serviceId: null, clientId })).body.warnings as { code: string }[]).map((w) => w.code);
+    (
+      (await stylist$.write('post', '/api/consultations/propose', { consultation: coloured, serviceId: null, clientId })).body.warnings as { code: string }[]
+    ).map((w) => w.code);
 
   it('refuses a developer above the salon maximum (12 %) and a strand photo of another client, storing nothing', async () => {
     const client = await insertUser(t.testDb.db, salon.salonId, 'client');

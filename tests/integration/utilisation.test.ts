@@ -28,25 +28,67 @@ const at = (date: string, hhmm: string) => DateTime.fromISO(`${date}T${hhmm}`, {
 const DAY = '2027-03-02';
 type Step = [NewStep['kind'], string, string, number?];
 
-const colourPlan: StepPlan = { sittings: [{ steps: [{ kind: 'hands_on', label: 'Apply', product: 'none', minutes: 30 }, { kind: 'developing', label: 'Develops', product: 'none', minMinutes: 45, maxMinutes: 60 }, { kind: 'basin', label: 'Rinse', product: 'none', minutes: 15 }] }] };
+const colourPlan: StepPlan = {
+  sittings: [
+    {
+      steps: [
+        { kind: 'hands_on', label: 'Apply', product: 'none', minutes: 30 },
+        { kind: 'developing', label: 'Develops', product: 'none', minMinutes: 45, maxMinutes: 60 },
+        { kind: 'basin', label: 'Rinse', product: 'none', minutes: 15 },
+      ],
+    },
+  ],
+};
 const cutPlan: StepPlan = { sittings: [{ steps: [{ kind: 'hands_on', label: 'Cut', product: 'none', minutes: 30 }] }] };
 // Quoted: sitting 1 is 30 + 45..60 + 15 + 15 = 105..120 minutes, sitting 2 is 120: 225..240 in all.
 const correctionPlan: StepPlan = {
   sittings: [
-    { steps: [{ kind: 'hands_on', label: 'Apply', product: 'none', minutes: 30 }, { kind: 'developing', label: 'Lifts', product: 'lightener', minMinutes: 45, maxMinutes: 60 }, { kind: 'basin', label: 'Rinse', product: 'none', minutes: 15 }, { kind: 'hands_on', label: 'Dry', product: 'none', minutes: 15 }] },
+    {
+      steps: [
+        { kind: 'hands_on', label: 'Apply', product: 'none', minutes: 30 },
+        { kind: 'developing', label: 'Lifts', product: 'lightener', minMinutes: 45, maxMinutes: 60 },
+        { kind: 'basin', label: 'Rinse', product: 'none', minutes: 15 },
+        { kind: 'hands_on', label: 'Dry', product: 'none', minutes: 15 },
+      ],
+    },
     { daysAfterPrevious: { min: 1, max: 14 }, steps: [{ kind: 'hands_on', label: 'Colour and cut', product: 'none', minutes: 120 }] },
   ],
 };
 
-async function book(o: { stylist: UserFixture; service: string; plan: StepPlan; status: BookingStatus; price: number; deposit: number; sittings: Array<{ chair: number; date: string; steps: Step[] }> }): Promise<string> {
+async function book(o: {
+  stylist: UserFixture;
+  service: string;
+  plan: StepPlan;
+  status: BookingStatus;
+  price: number;
+  deposit: number;
+  sittings: Array<{ chair: number; date: string; steps: Step[] }>;
+}): Promise<string> {
   const db = t.testDb.db;
-  const client = await db.insertInto('clients').values({ salon_id: salon.salonId, name: 'Hand-built client', email: null, phone: null }).returning('id').executeTakeFirstOrThrow();
+  const client = await db
+    .insertInto('clients')
+    .values({ salon_id: salon.salonId, name: 'Hand-built client', email: null, phone: null })
+    .returning('id')
+    .executeTakeFirstOrThrow();
   return insertBooking(db, {
-    salonId: salon.salonId, clientId: client.id, serviceId: o.service, stylistId: o.stylist.staffId!, status: o.status, stepPlan: o.plan,
-    priceCents: o.price, depositCents: o.deposit, createdBy: null,
+    salonId: salon.salonId,
+    clientId: client.id,
+    serviceId: o.service,
+    stylistId: o.stylist.staffId!,
+    status: o.status,
+    stepPlan: o.plan,
+    priceCents: o.price,
+    depositCents: o.deposit,
+    createdBy: null,
     sittings: o.sittings.map((s) => ({
       chairId: salon.chairs[s.chair],
-      steps: s.steps.map(([kind, from, to, basin]) => ({ kind, label: kind, start: at(s.date, from), end: at(s.date, to), basinId: basin === undefined ? null : salon.basins[basin] })),
+      steps: s.steps.map(([kind, from, to, basin]) => ({
+        kind,
+        label: kind,
+        start: at(s.date, from),
+        end: at(s.date, to),
+        basinId: basin === undefined ? null : salon.basins[basin],
+      })),
     })),
   });
 }
@@ -75,30 +117,115 @@ beforeAll(async () => {
   stylist$ = await signedInAgent(t.app, a.email, a.password);
 
   // B1 Ada, chair 1, finished, $120 (deposit $30): hands 10:00–10:30, developing 10:30–11:30, basin 11:30–11:45.
-  await book({ stylist: a, service: services.colour, plan: colourPlan, status: 'finished', price: 12000, deposit: 3000, sittings: [{ chair: 0, date: DAY, steps: [['hands_on', '10:00', '10:30'], ['developing', '10:30', '11:30'], ['basin', '11:30', '11:45', 0]] }] });
+  await book({
+    stylist: a,
+    service: services.colour,
+    plan: colourPlan,
+    status: 'finished',
+    price: 12000,
+    deposit: 3000,
+    sittings: [
+      {
+        chair: 0,
+        date: DAY,
+        steps: [
+          ['hands_on', '10:00', '10:30'],
+          ['developing', '10:30', '11:30'],
+          ['basin', '11:30', '11:45', 0],
+        ],
+      },
+    ],
+  });
   // B2 Ada, chair 2, booked, $60: a cut 10:45–11:15, inside B1's developing time.
-  await book({ stylist: a, service: services.cut, plan: cutPlan, status: 'booked', price: 6000, deposit: 0, sittings: [{ chair: 1, date: DAY, steps: [['hands_on', '10:45', '11:15']] }] });
+  await book({
+    stylist: a,
+    service: services.cut,
+    plan: cutPlan,
+    status: 'booked',
+    price: 6000,
+    deposit: 0,
+    sittings: [{ chair: 1, date: DAY, steps: [['hands_on', '10:45', '11:15']] }],
+  });
   // B3 Bo, chair 2, no-show, $90 (deposit $20): 14:00–15:00 (the chair stays held in the book).
-  await book({ stylist: b, service: services.cut, plan: cutPlan, status: 'no_show', price: 9000, deposit: 2000, sittings: [{ chair: 1, date: DAY, steps: [['hands_on', '14:00', '15:00']] }] });
+  await book({
+    stylist: b,
+    service: services.cut,
+    plan: cutPlan,
+    status: 'no_show',
+    price: 9000,
+    deposit: 2000,
+    sittings: [{ chair: 1, date: DAY, steps: [['hands_on', '14:00', '15:00']] }],
+  });
   // B4 Ada, cancelled inside the 48-hour window, deposit $25 kept. B5 Bo, cancelled 3 days ahead, deposit $10 refunded.
   // B7 Ada, no deposit, cancelled at 08:00 the same morning: late. Cancelled bookings hold no chair.
-  const b4 = await book({ stylist: a, service: services.cut, plan: cutPlan, status: 'cancelled', price: 6000, deposit: 2500, sittings: [{ chair: 0, date: DAY, steps: [['hands_on', '16:00', '17:00']] }] });
-  const b5 = await book({ stylist: b, service: services.cut, plan: cutPlan, status: 'cancelled', price: 6000, deposit: 1000, sittings: [{ chair: 1, date: DAY, steps: [['hands_on', '19:00', '20:00']] }] });
-  const b7 = await book({ stylist: a, service: services.cut, plan: cutPlan, status: 'cancelled', price: 6000, deposit: 0, sittings: [{ chair: 1, date: DAY, steps: [['hands_on', '17:00', '17:30']] }] });
-  for (const id of [b4, b5, b7]) await writeAudit(db, { salonId: salon.salonId, actorUserId: null, entity: 'booking', entityId: id, action: 'cancelled: test' });
+  const b4 = await book({
+    stylist: a,
+    service: services.cut,
+    plan: cutPlan,
+    status: 'cancelled',
+    price: 6000,
+    deposit: 2500,
+    sittings: [{ chair: 0, date: DAY, steps: [['hands_on', '16:00', '17:00']] }],
+  });
+  const b5 = await book({
+    stylist: b,
+    service: services.cut,
+    plan: cutPlan,
+    status: 'cancelled',
+    price: 6000,
+    deposit: 1000,
+    sittings: [{ chair: 1, date: DAY, steps: [['hands_on', '19:00', '20:00']] }],
+  });
+  const b7 = await book({
+    stylist: a,
+    service: services.cut,
+    plan: cutPlan,
+    status: 'cancelled',
+    price: 6000,
+    deposit: 0,
+    sittings: [{ chair: 1, date: DAY, steps: [['hands_on', '17:00', '17:30']] }],
+  });
+  for (const id of [b4, b5, b7])
+    await writeAudit(db, { salonId: salon.salonId, actorUserId: null, entity: 'booking', entityId: id, action: 'cancelled: test' });
   await cancelled(b4, 'kept', at('2027-03-01', '18:00'));
   await cancelled(b5, 'refunded', at('2027-02-27', '10:00'));
   await cancelled(b7, null, at(DAY, '08:00'));
   // B8 Ada, chair 2, an unpaid online hold 09:00–09:30: a few minutes' keep while someone pays, not work, so it is in
   // none of the figures below (without it left out, chair occupancy would read 345 / 1440 and the 09:00 cell 30).
-  const b8 = await book({ stylist: a, service: services.cut, plan: cutPlan, status: 'held', price: 6000, deposit: 2500, sittings: [{ chair: 1, date: DAY, steps: [['hands_on', '09:00', '09:30']] }] });
-  await db.updateTable('bookings').set({ held_until: new Date(Date.now() + 600_000) }).where('id', '=', b8).execute();
+  const b8 = await book({
+    stylist: a,
+    service: services.cut,
+    plan: cutPlan,
+    status: 'held',
+    price: 6000,
+    deposit: 2500,
+    sittings: [{ chair: 1, date: DAY, steps: [['hands_on', '09:00', '09:30']] }],
+  });
+  await db
+    .updateTable('bookings')
+    .set({ held_until: new Date(Date.now() + 600_000) })
+    .where('id', '=', b8)
+    .execute();
   // B6 Bo, a two-sitting correction, finished, $400 (deposit $100): sitting 1 today on chair 1 12:00–14:00
   // (hands 12:00–12:30, developing 12:30–13:30, basin 13:30–13:45, hands 13:45–14:00); sitting 2 a week later, 120 minutes.
   await book({
-    stylist: b, service: services.correction, plan: correctionPlan, status: 'finished', price: 40000, deposit: 10000,
+    stylist: b,
+    service: services.correction,
+    plan: correctionPlan,
+    status: 'finished',
+    price: 40000,
+    deposit: 10000,
     sittings: [
-      { chair: 0, date: DAY, steps: [['hands_on', '12:00', '12:30'], ['developing', '12:30', '13:30'], ['basin', '13:30', '13:45', 0], ['hands_on', '13:45', '14:00']] },
+      {
+        chair: 0,
+        date: DAY,
+        steps: [
+          ['hands_on', '12:00', '12:30'],
+          ['developing', '12:30', '13:30'],
+          ['basin', '13:30', '13:45', 0],
+          ['hands_on', '13:45', '14:00'],
+        ],
+      },
       { chair: 0, date: '2027-03-09', steps: [['hands_on', '10:00', '12:00']] },
     ],
   });
@@ -127,7 +254,13 @@ describe('utilisation figures on a hand-built day', () => {
     const r = (await owner$.get(`/api/owner/utilisation?${oneDay}`)).body;
     // Revenue of kept sittings in the period: B1 $120 + B2 $60 + B6's first sitting 120/240 of $400 = $200 → $380.
     // Chair-hours: 2 chairs × 12 h = 24; stylist hours: 9 + 9 = 18.
-    expect(r.money).toEqual({ revenueCents: 38000, chairHours: 24, stylistHours: 18, revenuePerChairHourCents: 38000 / 24, revenuePerStylistHourCents: 38000 / 18 });
+    expect(r.money).toEqual({
+      revenueCents: 38000,
+      chairHours: 24,
+      stylistHours: 18,
+      revenuePerChairHourCents: 38000 / 24,
+      revenuePerStylistHourCents: 38000 / 18,
+    });
     // Deposits on the period's bookings: $30 + $20 + $25 + $10 + $100 = $185 on 5 bookings;
     // kept: B3's $20 (no-show) + B4's $25 (late cancel) = $45; refunded: B5's $10.
     expect(r.deposits).toEqual({ takenCents: 18500, taken: 5, keptCents: 4500, kept: 2, refundedCents: 1000, refunded: 1 });
@@ -143,8 +276,28 @@ describe('utilisation figures on a hand-built day', () => {
     ]);
     // Ada: B1, B2, B4, B7; revenue $180 over 9 h. Bo: B3, B5, B6; $200 over 9 h.
     expect(r.stylists).toEqual([
-      { stylistId: a.staffId, name: 'Ada', handsOnShare: 75 / 540, handsOnMinutes: 75, onClockMinutes: 540, bookings: 4, noShows: 0, revenueCents: 18000, revenuePerHourCents: 2000 },
-      { stylistId: b.staffId, name: 'Bo', handsOnShare: 120 / 540, handsOnMinutes: 120, onClockMinutes: 540, bookings: 3, noShows: 1, revenueCents: 20000, revenuePerHourCents: 20000 / 9 },
+      {
+        stylistId: a.staffId,
+        name: 'Ada',
+        handsOnShare: 75 / 540,
+        handsOnMinutes: 75,
+        onClockMinutes: 540,
+        bookings: 4,
+        noShows: 0,
+        revenueCents: 18000,
+        revenuePerHourCents: 2000,
+      },
+      {
+        stylistId: b.staffId,
+        name: 'Bo',
+        handsOnShare: 120 / 540,
+        handsOnMinutes: 120,
+        onClockMinutes: 540,
+        bookings: 3,
+        noShows: 1,
+        revenueCents: 20000,
+        revenuePerHourCents: 20000 / 9,
+      },
     ]);
   });
 
@@ -158,7 +311,9 @@ describe('utilisation figures on a hand-built day', () => {
     // 11:00–12:00: chair 1 11:00–11:45 = 45 + chair 2 11:00–11:15 = 15 → 60.
     expect(cell(11).chairHeldMinutes).toBe(60);
     expect(cell(9).chairOccupancy).toBe(0);
-    expect(r.weeks).toEqual([{ from: DAY, to: '2027-03-03', bookings: 7, chairOccupancy: 315 / 1440, windowUse: 0.25, handsOnShare: 195 / 1080, revenueCents: 38000 }]);
+    expect(r.weeks).toEqual([
+      { from: DAY, to: '2027-03-03', bookings: 7, chairOccupancy: 315 / 1440, windowUse: 0.25, handsOnShare: 195 / 1080, revenueCents: 38000 },
+    ]);
   });
 
   it('counts a period of whole weeks in weekly rows that add up', async () => {

@@ -22,7 +22,16 @@ export default async function setup(project: TestProject) {
   const browser: BrowserServer = await chromium.launchServer({
     executablePath: env.chromium,
     headless: true,
-    args: ['--no-sandbox', '--disable-gpu', '--disable-dev-shm-usage', '--disable-background-networking', '--disable-component-update', '--disable-sync', '--no-first-run', '--disable-quic'],
+    args: [
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-dev-shm-usage',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+      '--no-first-run',
+      '--disable-quic',
+    ],
   });
   project.provide('baseUrl', server.url);
   project.provide('wsEndpoint', browser.wsEndpoint());

@@ -7,11 +7,21 @@ import { describe, expect, it } from 'vitest';
 describe('the server module graph', () => {
   // The child gets 60 s and the test a little longer: on a busy machine compiling the graph took 15 s.
   it('loads under Node with tsx, as npm start runs it', { timeout: 70_000 }, () => {
-    const res = spawnSync(process.execPath, ['--import', 'tsx', '--input-type=module', '--eval', "await import('./server/app.ts'); await import('./server/ops/local-database.ts'); console.log('loaded')"], {
-      cwd: process.cwd(),
-      encoding: 'utf8',
-      timeout: 60_000,
-    });
+    const res = spawnSync(
+      process.execPath,
+      [
+        '--import',
+        'tsx',
+        '--input-type=module',
+        '--eval',
+        "await import('./server/app.ts'); await import('./server/ops/local-database.ts'); console.log('loaded')",
+      ],
+      {
+        cwd: process.cwd(),
+        encoding: 'utf8',
+        timeout: 60_000,
+      },
+    );
     expect(res.stderr).not.toMatch(/SyntaxError|Error:/);
     expect(res.stdout.trim()).toBe('loaded');
   });

@@ -4,7 +4,20 @@ import type { Db } from '@server/db/database';
 export interface AuditInput {
   salonId: string;
   actorUserId: string | null;
-  entity: 'booking' | 'standby_entry' | 'window_offer' | 'salon' | 'service' | 'staff' | 'chair' | 'basin' | 'skin_test' | 'strand_test' | 'skin_test_clearance' | 'client' | 'quote';
+  entity:
+    | 'booking'
+    | 'standby_entry'
+    | 'window_offer'
+    | 'salon'
+    | 'service'
+    | 'staff'
+    | 'chair'
+    | 'basin'
+    | 'skin_test'
+    | 'strand_test'
+    | 'skin_test_clearance'
+    | 'client'
+    | 'quote';
   entityId: string;
   action: string;
   before?: unknown;

@@ -56,13 +56,20 @@ export async function bookAt(db: Db, input: BookAtInput): Promise<string> {
   }
   const local = DateTime.fromJSDate(input.start, { zone: input.salon.timeZone });
   if (local.minute % input.salon.granularityMinutes !== 0 || local.second !== 0) {
-    throw new AppError('VALIDATION_FAILED', 400, 'Some fields need attention.', { start: `Start times fall on the salon's ${input.salon.granularityMinutes}-minute grid.` });
+    throw new AppError('VALIDATION_FAILED', 400, 'Some fields need attention.', {
+      start: `Start times fall on the salon's ${input.salon.granularityMinutes}-minute grid.`,
+    });
   }
   const found = await planOrExplain(db, input);
   const chosen = await preferredChairs(db, input.salon.id, found, input.chairIds);
   if (input.clientId) {
     const starts = found.sittings.map((s) => new Date(s.steps[0].start));
-    await assertSkinTestAllows(db, input.salon, { clientId: input.clientId, plan: input.plan, serviceAsks: input.service.needsSkinTest, starts, atDesk: input.allowWaitingOnTest ?? false }, input.now);
+    await assertSkinTestAllows(
+      db,
+      input.salon,
+      { clientId: input.clientId, plan: input.plan, serviceAsks: input.service.needsSkinTest, starts, atDesk: input.allowWaitingOnTest ?? false },
+      input.now,
+    );
   }
   try {
     const id = await insertBooking(db, {
@@ -81,7 +88,12 @@ export async function bookAt(db: Db, input: BookAtInput): Promise<string> {
         steps: s.steps.map((st) => ({ kind: st.kind, label: st.label, start: new Date(st.start), end: new Date(st.end), basinId: st.basin })),
       })),
     });
-    await auditBookingChange(db, { salonId: input.salon.id, actorUserId: input.actorUserId, bookingId: id, action: input.status === 'held' ? 'held online' : 'booked' });
+    await auditBookingChange(db, {
+      salonId: input.salon.id,
+      actorUserId: input.actorUserId,
+      bookingId: id,
+      action: input.status === 'held' ? 'held online' : 'booked',
+    });
     await replanBookingMessages(db, id, input.now); // confirmation and reminders, in the same transaction
     await withdrawStaleOffers(db, input.salon, input.stylistId, bookedSpan(found), input.now);
     return id;
@@ -103,7 +115,9 @@ function preferredChairs(db: Db, salonId: string, plan: PlacedOption, wanted: st
 }
 
 async function planOrExplain(db: Db, input: BookAtInput): Promise<PlacedOption> {
-  const [result] = await exactPlan(db, input.salon, [{ skill: input.service.skill, stylistId: input.stylistId, plan: input.plan, start: input.start, latestStart: input.latestStart }]);
+  const [result] = await exactPlan(db, input.salon, [
+    { skill: input.service.skill, stylistId: input.stylistId, plan: input.plan, start: input.start, latestStart: input.latestStart },
+  ]);
   if ('plan' in result) return result.plan;
   if (result.field) throw new AppError('VALIDATION_FAILED', 400, 'Some fields need attention.', { [result.field]: result.reason });
   throw new AppError('CONFLICT', 409, result.reason);

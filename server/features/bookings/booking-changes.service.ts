@@ -1,6 +1,13 @@
 import type { z } from 'zod';
 import type { SessionUser } from '@shared/schemas/auth.schemas';
-import type { BookingOptionsRequest, BookingOptionsResponse, ChangePlanSchema, CreateBooking, DeskMoveTimesQuerySchema, MoveSittingSchema } from '@shared/schemas/booking.schemas';
+import type {
+  BookingOptionsRequest,
+  BookingOptionsResponse,
+  ChangePlanSchema,
+  CreateBooking,
+  DeskMoveTimesQuerySchema,
+  MoveSittingSchema,
+} from '@shared/schemas/booking.schemas';
 import type { BookingView } from '@shared/schemas/booking-view.schemas';
 import type { Availability, CancelTerms } from '@shared/schemas/online-booking.schemas';
 import type { Salon } from '@shared/schemas/salon.schemas';
@@ -51,7 +58,13 @@ export function changePlanAtDesk(db: Writer, user: SessionUser, bookingId: strin
 }
 
 /** Free starts for one sitting, as the move itself would accept them. */
-export async function moveTimesAtDesk(db: Db, user: SessionUser, bookingId: string, query: z.output<typeof DeskMoveTimesQuerySchema>, now: Date): Promise<Availability> {
+export async function moveTimesAtDesk(
+  db: Db,
+  user: SessionUser,
+  bookingId: string,
+  query: z.output<typeof DeskMoveTimesQuerySchema>,
+  now: Date,
+): Promise<Availability> {
   const salon = await findSalon(db, user.salonId);
   return deskMoveTimes(db, salon, bookingId, { sitting: Number(query.sitting), stylistId: query.stylistId, from: query.from }, now);
 }

@@ -25,14 +25,28 @@ export async function findBookingOptions(db: Db, salon: Salon, body: Required<Bo
   // The rule follows the steps as edited here, whatever service they are booked under.
   const verdict = await skinTestVerdictFor(db, salon, client.id, plan, service.needsSkinTest, now);
   const firstAllowed = verdict.windows.reduce<Date | null>((a, w) => (!a || w.from < a ? w.from : a), null);
-  const skinTest = { required: verdict.required, ok: verdict.status !== 'blocked', status: verdict.status, message: verdict.message, earliestAllowed: firstAllowed?.toISOString() ?? null };
+  const skinTest = {
+    required: verdict.required,
+    ok: verdict.status !== 'blocked',
+    status: verdict.status,
+    message: verdict.message,
+    earliestAllowed: firstAllowed?.toISOString() ?? null,
+  };
   if (verdict.status === 'blocked') return { timeZone: salon.timeZone, skinTest, options: [] };
 
   const earliest = new Date(Math.max(now.getTime(), DateTime.fromISO(body.earliestDate, { zone: salon.timeZone }).toMillis(), firstAllowed?.getTime() ?? 0));
   const fromDate = localDateOf(earliest, salon.timeZone);
   /** What an option would rest on: passed or waiting (on a test not read yet), or no test needed. */
   const footing = (option: PlacedOption) => {
-    const check = checkStarts(verdict, testedSittingStarts(plan, option.sittings.map((s) => new Date(s.steps[0].start)), salon, service.needsSkinTest));
+    const check = checkStarts(
+      verdict,
+      testedSittingStarts(
+        plan,
+        option.sittings.map((s) => new Date(s.steps[0].start)),
+        salon,
+        service.needsSkinTest,
+      ),
+    );
     // The engine searched within the same stretches, so the rule cannot refuse what it found.
     if (check.status === 'refused') throw new Error(`The engine offered a start the skin-test rule refuses: ${check.message}`);
     return check.status;

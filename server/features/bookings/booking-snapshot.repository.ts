@@ -27,7 +27,18 @@ export async function bookingSnapshot(db: Db, bookingId: string): Promise<Bookin
     .selectFrom('bookings as b')
     .innerJoin('staff as s', 's.id', 'b.stylist_id')
     .innerJoin('services as sv', 'sv.id', 'b.service_id')
-    .select(['b.status', 'b.salon_id', 'b.client_id', 'b.service_id', 'b.stylist_id', 'b.step_plan', 'b.deposit_cents', 'b.deposit_outcome', 's.display_name as stylist', 'sv.needs_skin_test'])
+    .select([
+      'b.status',
+      'b.salon_id',
+      'b.client_id',
+      'b.service_id',
+      'b.stylist_id',
+      'b.step_plan',
+      'b.deposit_cents',
+      'b.deposit_outcome',
+      's.display_name as stylist',
+      'sv.needs_skin_test',
+    ])
     .where('b.id', '=', bookingId)
     .executeTakeFirst();
   if (!booking) return undefined;

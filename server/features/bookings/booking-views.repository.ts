@@ -33,14 +33,33 @@ export type SkinTestSettings = Pick<Salon, 'skinTestLeadHours' | 'skinTestValidi
  * Bookings with all their sittings and steps, times as ISO 8601 in the salon's zone, earliest first. The
  * skin-test state is a rule, so booking-views.service.ts adds it.
  */
-export async function loadBookingViewRows(db: Db, filter: BookingFilter, timeZone: string): Promise<{ rows: BookingViewRow[]; settings: SkinTestSettings | null }> {
+export async function loadBookingViewRows(
+  db: Db,
+  filter: BookingFilter,
+  timeZone: string,
+): Promise<{ rows: BookingViewRow[]; settings: SkinTestSettings | null }> {
   let query = db
     .selectFrom('bookings as b')
     .innerJoin('clients as c', 'c.id', 'b.client_id')
     .innerJoin('services as s', 's.id', 'b.service_id')
     .innerJoin('staff as st', 'st.id', 'b.stylist_id')
     .innerJoin('salons as sa', 'sa.id', 'b.salon_id')
-    .select(['b.id', 'b.status', 'b.price_cents', 'b.deposit_cents', 'b.deposit_outcome', 'b.cancel_reason', 'b.step_plan', 'c.id as clientId', 'c.name as clientName', 's.id as serviceId', 's.name as serviceName', 's.needs_skin_test', 'st.id as stylistId', 'st.display_name as stylistName'])
+    .select([
+      'b.id',
+      'b.status',
+      'b.price_cents',
+      'b.deposit_cents',
+      'b.deposit_outcome',
+      'b.cancel_reason',
+      'b.step_plan',
+      'c.id as clientId',
+      'c.name as clientName',
+      's.id as serviceId',
+      's.name as serviceName',
+      's.needs_skin_test',
+      'st.id as stylistId',
+      'st.display_name as stylistName',
+    ])
     .select(['sa.skin_test_lead_hours', 'sa.skin_test_validity_days', 'sa.skin_test_families'])
     .where('b.salon_id', '=', filter.salonId)
     .where('b.status', 'in', filter.statuses ?? LIVE);
@@ -50,7 +69,12 @@ export async function loadBookingViewRows(db: Db, filter: BookingFilter, timeZon
   if (filter.from && filter.to) {
     const range = sql`tstzrange(${filter.from}, ${filter.to}, '[)')`;
     query = query.where(({ exists, selectFrom }) =>
-      exists(selectFrom('sittings as x').select('x.id').whereRef('x.booking_id', '=', 'b.id').where(sql<boolean>`x.during && ${range}`)),
+      exists(
+        selectFrom('sittings as x')
+          .select('x.id')
+          .whereRef('x.booking_id', '=', 'b.id')
+          .where(sql<boolean>`x.during && ${range}`),
+      ),
     );
   }
   const bookings = await query.execute();
@@ -61,7 +85,11 @@ export async function loadBookingViewRows(db: Db, filter: BookingFilter, timeZon
   const sittingsOf = groupBy(sittings, (s) => s.booking_id);
   const stepsOf = groupBy(steps, (st) => st.sitting_id);
   const first = bookings[0];
-  const settings = { skinTestLeadHours: first.skin_test_lead_hours, skinTestValidityDays: first.skin_test_validity_days, skinTestFamilies: first.skin_test_families as Salon['skinTestFamilies'] };
+  const settings = {
+    skinTestLeadHours: first.skin_test_lead_hours,
+    skinTestValidityDays: first.skin_test_validity_days,
+    skinTestFamilies: first.skin_test_families as Salon['skinTestFamilies'],
+  };
   const rows = bookings.map((b): BookingViewRow => {
     const own = sittingsOf.get(b.id) ?? [];
     const plan = b.step_plan as StepPlan;
@@ -85,13 +113,18 @@ export async function loadBookingViewRows(db: Db, filter: BookingFilter, timeZon
         start: iso(s.start),
         end: iso(s.end),
         steps: (stepsOf.get(s.id) ?? []).map((st) => {
-            const planned = plan.sittings[s.seq - 1]?.steps[st.seq - 1];
-            const range = planned?.kind === 'developing' ? planned : null;
-            return {
-              kind: st.kind, label: st.label, start: iso(st.start), end: iso(st.end), basinName: st.basinName,
-              minMinutes: range?.minMinutes ?? null, maxMinutes: range?.maxMinutes ?? null,
-            };
-          }),
+          const planned = plan.sittings[s.seq - 1]?.steps[st.seq - 1];
+          const range = planned?.kind === 'developing' ? planned : null;
+          return {
+            kind: st.kind,
+            label: st.label,
+            start: iso(st.start),
+            end: iso(st.end),
+            basinName: st.basinName,
+            minMinutes: range?.minMinutes ?? null,
+            maxMinutes: range?.maxMinutes ?? null,
+          };
+        }),
       })),
     };
     return { view, skinTestFooting };
@@ -136,7 +169,15 @@ function loadSittings(db: Db, bookingIds: string[]) {
   return db
     .selectFrom('sittings as s')
     .innerJoin('chairs as ch', 'ch.id', 's.chair_id')
-    .select(['s.id', 's.booking_id', 's.seq', 's.chair_id', 'ch.name as chairName', sql<Date>`lower(s.during)`.as('start'), sql<Date>`upper(s.during)`.as('end')])
+    .select([
+      's.id',
+      's.booking_id',
+      's.seq',
+      's.chair_id',
+      'ch.name as chairName',
+      sql<Date>`lower(s.during)`.as('start'),
+      sql<Date>`upper(s.during)`.as('end'),
+    ])
     .where('s.booking_id', 'in', bookingIds)
     .orderBy('s.seq')
     .execute();
@@ -147,7 +188,15 @@ function loadSteps(db: Db, bookingIds: string[]) {
     .selectFrom('booking_steps as st')
     .innerJoin('sittings as s', 's.id', 'st.sitting_id')
     .leftJoin('basins as bs', 'bs.id', 'st.basin_id')
-    .select(['st.sitting_id', 'st.seq', 'st.kind', 'st.label', 'bs.name as basinName', sql<Date>`lower(st.during)`.as('start'), sql<Date>`upper(st.during)`.as('end')])
+    .select([
+      'st.sitting_id',
+      'st.seq',
+      'st.kind',
+      'st.label',
+      'bs.name as basinName',
+      sql<Date>`lower(st.during)`.as('start'),
+      sql<Date>`upper(st.during)`.as('end'),
+    ])
     .where('s.booking_id', 'in', bookingIds)
     .orderBy('st.sitting_id')
     .orderBy('st.seq')

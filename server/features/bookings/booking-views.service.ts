@@ -7,6 +7,11 @@ import { loadBookingViewRows, type BookingFilter } from './booking-views.reposit
 export async function loadBookingViews(db: Db, filter: BookingFilter, timeZone: string): Promise<BookingView[]> {
   const { rows, settings } = await loadBookingViewRows(db, filter, timeZone);
   if (!settings) return [];
-  const states = await bookingSkinTestStates(db, { timeZone, ...settings }, rows.map((r) => r.skinTestFooting), new Date());
+  const states = await bookingSkinTestStates(
+    db,
+    { timeZone, ...settings },
+    rows.map((r) => r.skinTestFooting),
+    new Date(),
+  );
   return rows.map((r, i) => ({ ...r.view, skinTest: states[i] }));
 }

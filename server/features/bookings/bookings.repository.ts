@@ -87,7 +87,13 @@ export async function insertBooking(db: Db, booking: NewBooking): Promise<string
  * holds it in [start, end). `exceptBookingId`: a booking being moved does not stand in its own way.
  */
 export async function chairFreeBetween(db: Db, salonId: string, chairId: string, start: Date, end: Date, exceptBookingId?: string): Promise<boolean> {
-  const chair = await db.selectFrom('chairs').select('id').where('id', '=', chairId).where('salon_id', '=', salonId).where('active', '=', true).executeTakeFirst();
+  const chair = await db
+    .selectFrom('chairs')
+    .select('id')
+    .where('id', '=', chairId)
+    .where('salon_id', '=', salonId)
+    .where('active', '=', true)
+    .executeTakeFirst();
   if (!chair) return false;
   const span = sql<boolean>`during && tstzrange(${start}, ${end}, '[)')`;
   const [taken, closed] = await Promise.all([
@@ -109,10 +115,24 @@ export async function upcomingBookingsOfClient(db: Db, clientId: string, now: Da
   const rows = await db
     .selectFrom('bookings as b')
     .innerJoin('services as s', 's.id', 'b.service_id')
-    .select(['b.id', 'b.status', 's.name', 's.needs_skin_test', 'b.step_plan', sql<Date[]>`array(select lower(si.during) from sittings si where si.booking_id = b.id order by si.seq)`.as('starts')])
+    .select([
+      'b.id',
+      'b.status',
+      's.name',
+      's.needs_skin_test',
+      'b.step_plan',
+      sql<Date[]>`array(select lower(si.during) from sittings si where si.booking_id = b.id order by si.seq)`.as('starts'),
+    ])
     .where('b.client_id', '=', clientId)
     .where('b.status', 'in', ['held', 'booked'])
     .where(sql<boolean>`exists (select 1 from sittings si where si.booking_id = b.id and lower(si.during) > ${now})`)
     .execute();
-  return rows.map((b) => ({ id: b.id, status: b.status, serviceName: b.name, needsSkinTest: b.needs_skin_test, stepPlan: b.step_plan as StepPlan, starts: b.starts }));
+  return rows.map((b) => ({
+    id: b.id,
+    status: b.status,
+    serviceName: b.name,
+    needsSkinTest: b.needs_skin_test,
+    stepPlan: b.step_plan as StepPlan,
+    starts: b.starts,
+  }));
 }

@@ -16,7 +16,13 @@ import { formatMoney } from '@shared/money/money';
  * The deposit policy on cancelling: inside the salon's cancellation window before the first sitting the
  * deposit is kept (unless the salon keeps nothing), earlier it is refunded (a 48-hour window is common practice).
  */
-export function depositOutcome(depositCents: number, firstStart: Date, now: Date, windowHours: number, keeps: Salon['cancellationKeeps'] = 'deposit'): 'kept' | 'refunded' | null {
+export function depositOutcome(
+  depositCents: number,
+  firstStart: Date,
+  now: Date,
+  windowHours: number,
+  keeps: Salon['cancellationKeeps'] = 'deposit',
+): 'kept' | 'refunded' | null {
   if (depositCents <= 0) return null;
   return keeps === 'deposit' && firstStart.getTime() - now.getTime() < windowHours * 3_600_000 ? 'kept' : 'refunded';
 }
@@ -37,7 +43,12 @@ async function outcomeOf(db: Db, salon: Salon, before: BookingSnapshot, bookingI
   const terms = (outcome: 'kept' | 'refunded' | null, why: CancelWhy, skinTest = '') => ({ outcome, why, starts, skinTest });
   if (booking.depositCents <= 0) return terms(null, 'no_deposit');
   if (booking.status === 'held') return terms(null, 'not_paid');
-  const [skinTest] = await bookingSkinTestStates(db, salon, [{ clientId: booking.clientId, status: booking.status, plan: booking.stepPlan, serviceAsks: before.serviceAsks, starts }], now);
+  const [skinTest] = await bookingSkinTestStates(
+    db,
+    salon,
+    [{ clientId: booking.clientId, status: booking.status, plan: booking.stepPlan, serviceAsks: before.serviceAsks, starts }],
+    now,
+  );
   if (skinTest.status === 'blocked') return terms('refunded', 'skin_test_blocked', skinTest.message);
   if (salon.cancellationKeeps === 'nothing') return terms('refunded', 'salon_keeps_nothing');
   const outcome = depositOutcome(booking.depositCents, starts[0], now, salon.cancellationWindowHours, salon.cancellationKeeps);

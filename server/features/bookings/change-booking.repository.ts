@@ -16,13 +16,27 @@ export async function replaceSitting(db: Db, bookingId: string, seq: number, cha
   await db.deleteFrom('booking_steps').where('sitting_id', '=', sitting.id).execute();
   await db
     .insertInto('booking_steps')
-    .values(steps.map((s, j) => ({ sitting_id: sitting.id, seq: j + 1, kind: s.kind, label: s.label, stylist_id: stylistId, basin_id: s.basinId, during: tstzRange(s.start, s.end) })))
+    .values(
+      steps.map((s, j) => ({
+        sitting_id: sitting.id,
+        seq: j + 1,
+        kind: s.kind,
+        label: s.label,
+        stylist_id: stylistId,
+        basin_id: s.basinId,
+        during: tstzRange(s.start, s.end),
+      })),
+    )
     .execute();
 }
 
 /** The booking's own step plan (its sittings and steps are replaced beside it). */
 export async function setStepPlan(db: Db, bookingId: string, plan: StepPlan): Promise<void> {
-  await db.updateTable('bookings').set({ step_plan: JSON.stringify(plan) }).where('id', '=', bookingId).execute();
+  await db
+    .updateTable('bookings')
+    .set({ step_plan: JSON.stringify(plan) })
+    .where('id', '=', bookingId)
+    .execute();
 }
 
 export async function setStylist(db: Db, bookingId: string, stylistId: string): Promise<void> {
@@ -42,7 +56,12 @@ export async function markCancelled(db: Db, bookingId: string, reason: string, d
 
 /** Start of each sitting of a booking, in order. */
 export async function sittingStarts(db: Db, bookingId: string): Promise<Date[]> {
-  const rows = await db.selectFrom('sittings').select(sql<Date>`lower(during)`.as('start')).where('booking_id', '=', bookingId).orderBy('seq').execute();
+  const rows = await db
+    .selectFrom('sittings')
+    .select(sql<Date>`lower(during)`.as('start'))
+    .where('booking_id', '=', bookingId)
+    .orderBy('seq')
+    .execute();
   return rows.map((r) => r.start);
 }
 

@@ -27,7 +27,9 @@ export async function changePlan(db: Kysely<Database>, salon: Salon, actorUserId
     if (booking.status !== 'booked') throw new AppError('NOT_BOOKABLE', 409, `A ${booking.status.replace('_', ' ')} booking's plan cannot be changed.`);
     const starts = await sittingStarts(trx, bookingId);
     if (plan.sittings.length !== starts.length) {
-      throw new AppError('VALIDATION_FAILED', 400, 'Some fields need attention.', { stepPlan: `Keep ${starts.length} sitting(s); to change the sittings, cancel and book again.` });
+      throw new AppError('VALIDATION_FAILED', 400, 'Some fields need attention.', {
+        stepPlan: `Keep ${starts.length} sitting(s); to change the sittings, cancel and book again.`,
+      });
     }
     if (starts.some((s) => s < now)) throw new AppError('CONFLICT', 409, 'A sitting has already started; change what is left at the chair.');
     await lockStylists(trx, [booking.stylistId]);
@@ -36,22 +38,45 @@ export async function changePlan(db: Kysely<Database>, salon: Salon, actorUserId
       await assertSkinTestAllows(trx, salon, { clientId: booking.clientId, plan, serviceAsks: service?.needsSkinTest ?? false, starts, atDesk: true }, now);
     }
     // Each sitting alone at its start, against the book without this booking (so one sitting never meets another).
-    const placements = starts.map((start, i) => ({ skill: service?.skill ?? 'colour', stylistId: booking.stylistId, plan: { sittings: [{ steps: plan.sittings[i].steps }] }, start }));
+    const placements = starts.map((start, i) => ({
+      skill: service?.skill ?? 'colour',
+      stylistId: booking.stylistId,
+      plan: { sittings: [{ steps: plan.sittings[i].steps }] },
+      start,
+    }));
     const results = await exactPlan(trx, salon, placements, bookingId);
     for (const [i, result] of results.entries()) {
       if ('reason' in result) throw new AppError('CONFLICT', 409, `Sitting ${i + 1}: ${result.reason}`);
       const placed = result.plan.sittings[0];
       try {
-        await replaceSitting(trx, bookingId, i + 1, placed.chair, booking.stylistId, placed.steps.map((st) => ({
-          kind: st.kind, label: st.label, start: new Date(st.start), end: new Date(st.end), basinId: st.basin,
-        })));
+        await replaceSitting(
+          trx,
+          bookingId,
+          i + 1,
+          placed.chair,
+          booking.stylistId,
+          placed.steps.map((st) => ({
+            kind: st.kind,
+            label: st.label,
+            start: new Date(st.start),
+            end: new Date(st.end),
+            basinId: st.basin,
+          })),
+        );
       } catch (err) {
         if ((err as { code?: string }).code === '23P01') throw new AppError('CONFLICT', 409, 'Someone took that time a moment ago.');
         throw err;
       }
     }
     await setStepPlan(trx, bookingId, plan);
-    await auditBookingChange(trx, { salonId: salon.id, actorUserId, bookingId, action: 'changed the step plan', before: { ...before.audit, steps: stepNames(booking.stepPlan) }, alsoAfter: { steps: stepNames(plan) } });
+    await auditBookingChange(trx, {
+      salonId: salon.id,
+      actorUserId,
+      bookingId,
+      action: 'changed the step plan',
+      before: { ...before.audit, steps: stepNames(booking.stepPlan) },
+      alsoAfter: { steps: stepNames(plan) },
+    });
     await replanBookingMessages(trx, bookingId, now, 'skin_test'); // reminders come back when the new plan is allowed
   });
 }

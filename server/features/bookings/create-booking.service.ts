@@ -33,7 +33,16 @@ export async function createBooking(db: Kysely<Database>, salon: Salon, user: Se
     const earlier = await findIdempotent(trx, user.id, body.idempotencyKey);
     if (earlier) return (earlier.response as { bookingId: string }).bookingId;
     const bookingId = await bookAt(trx, {
-      salon, clientId: client.id, service, plan: body.stepPlan, stylistId: body.stylistId, start: new Date(body.start), chairIds: body.chairIds, actorUserId: user.id, now, allowWaitingOnTest: true,
+      salon,
+      clientId: client.id,
+      service,
+      plan: body.stepPlan,
+      stylistId: body.stylistId,
+      start: new Date(body.start),
+      chairIds: body.chairIds,
+      actorUserId: user.id,
+      now,
+      allowWaitingOnTest: true,
       quote: quote && { id: quote.id, priceCents: quote.price_cents, depositCents: quote.deposit_cents },
     });
     await saveIdempotent(trx, user.id, body.idempotencyKey, idempotencyRoute, 201, { bookingId });

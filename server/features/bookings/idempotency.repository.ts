@@ -6,5 +6,8 @@ export async function findIdempotent(db: Db, userId: string, key: string): Promi
 }
 
 export async function saveIdempotent(db: Db, userId: string, key: string, route: string, status: number, response: unknown): Promise<void> {
-  await db.insertInto('idempotency_keys').values({ user_id: userId, key, route, status, response: JSON.stringify(response) }).execute();
+  await db
+    .insertInto('idempotency_keys')
+    .values({ user_id: userId, key, route, status, response: JSON.stringify(response) })
+    .execute();
 }

@@ -46,14 +46,19 @@ export async function movableSitting(db: Db, salon: Pick<Salon, 'id'>, bookingId
   }
   const stylistId = wantedStylistId ?? booking.stylistId;
   if (stylistId !== booking.stylistId && plan.sittings.length > 1) {
-    throw new AppError('VALIDATION_FAILED', 400, 'Some fields need attention.', { stylistId: 'All sittings stay with one stylist; move each sitting without changing the stylist.' });
+    throw new AppError('VALIDATION_FAILED', 400, 'Some fields need attention.', {
+      stylistId: 'All sittings stay with one stylist; move each sitting without changing the stylist.',
+    });
   }
   const [service, stylists] = await Promise.all([findService(db, salon.id, booking.serviceId), listStylists(db, salon.id)]);
   const stylist = stylists.find((s) => s.id === stylistId);
   // Asked plainly here, or the engine's answer would blame the hours for a stylist who cannot do the work.
-  if (stylistId !== booking.stylistId && !stylist) throw new AppError('VALIDATION_FAILED', 400, 'Some fields need attention.', { stylistId: 'No such stylist in this salon.' });
+  if (stylistId !== booking.stylistId && !stylist)
+    throw new AppError('VALIDATION_FAILED', 400, 'Some fields need attention.', { stylistId: 'No such stylist in this salon.' });
   if (stylistId !== booking.stylistId && service && !stylist?.skills.includes(service.skill)) {
-    throw new AppError('VALIDATION_FAILED', 400, 'Some fields need attention.', { stylistId: `${stylist?.name} does not have the "${service.skill}" skill this service needs.` });
+    throw new AppError('VALIDATION_FAILED', 400, 'Some fields need attention.', {
+      stylistId: `${stylist?.name} does not have the "${service.skill}" skill this service needs.`,
+    });
   }
   // The sitting alone is planned: the other sittings stay where they are.
   const one: StepPlan = { sittings: [{ steps: plan.sittings[sitting - 1].steps }] };
@@ -74,7 +79,12 @@ export async function moveSitting(db: Kysely<Database>, salon: Salon, actorUserI
     // A later date may fall outside the skin test's validity: the whole booking is checked with the moved sitting.
     if (booking.clientId) {
       const moved = starts.map((s, i) => (i === req.sitting - 1 ? req.start : s));
-      await assertSkinTestAllows(trx, salon, { clientId: booking.clientId, plan, serviceAsks: service?.needsSkinTest ?? false, starts: moved, atDesk: req.allowWaitingOnTest ?? false }, now);
+      await assertSkinTestAllows(
+        trx,
+        salon,
+        { clientId: booking.clientId, plan, serviceAsks: service?.needsSkinTest ?? false, starts: moved, atDesk: req.allowWaitingOnTest ?? false },
+        now,
+      );
     }
 
     const [result] = await exactPlan(trx, salon, [{ skill, stylistId, plan: one, start: req.start }], req.bookingId);
@@ -83,9 +93,20 @@ export async function moveSitting(db: Kysely<Database>, salon: Salon, actorUserI
     const chair = await preferredChair(trx, salon.id, placed, req.chairId ?? (await sittingChair(trx, req.bookingId, req.sitting)), req.bookingId);
     try {
       if (stylistId !== booking.stylistId) await setStylist(trx, req.bookingId, stylistId);
-      await replaceSitting(trx, req.bookingId, req.sitting, chair, stylistId, placed.steps.map((st) => ({
-        kind: st.kind, label: st.label, start: new Date(st.start), end: new Date(st.end), basinId: st.basin,
-      })));
+      await replaceSitting(
+        trx,
+        req.bookingId,
+        req.sitting,
+        chair,
+        stylistId,
+        placed.steps.map((st) => ({
+          kind: st.kind,
+          label: st.label,
+          start: new Date(st.start),
+          end: new Date(st.end),
+          basinId: st.basin,
+        })),
+      );
     } catch (err) {
       if ((err as { code?: string }).code === '23P01') throw new AppError('CONFLICT', 409, 'Someone took that time a moment ago.');
       throw err;

@@ -25,6 +25,11 @@ export async function withColourBookingsKept(db: Db, salon: Salon, clientId: str
 
 async function liveStates(db: Db, salon: Salon, clientId: string, now: Date) {
   const live = await upcomingBookingsOfClient(db, clientId, now);
-  const states = await bookingSkinTestStates(db, salon, live.map((b) => ({ clientId, status: b.status, plan: b.stepPlan, serviceAsks: b.needsSkinTest, starts: b.starts })), now);
+  const states = await bookingSkinTestStates(
+    db,
+    salon,
+    live.map((b) => ({ clientId, status: b.status, plan: b.stepPlan, serviceAsks: b.needsSkinTest, starts: b.starts })),
+    now,
+  );
   return live.map((b, i) => ({ id: b.id, name: b.serviceName, start: b.starts[0], state: states[i].status }));
 }

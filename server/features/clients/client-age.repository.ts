@@ -20,7 +20,12 @@ export async function readClientAge(db: Db, salonId: string, clientId: string): 
   return {
     dateOfBirth: client.dateOfBirth,
     guardianConsents: consents.map((c) => ({
-      id: c.id, guardianName: c.guardian_name, relationship: c.relationship, note: c.note, recordedByName: c.recorded_by_name, recordedAt: c.recorded_at.toISOString(),
+      id: c.id,
+      guardianName: c.guardian_name,
+      relationship: c.relationship,
+      note: c.note,
+      recordedByName: c.recorded_by_name,
+      recordedAt: c.recorded_at.toISOString(),
     })),
   };
 }
@@ -35,7 +40,15 @@ export async function insertGuardianConsent(
 ): Promise<string> {
   const row = await db
     .insertInto('guardian_consents')
-    .values({ salon_id: c.salonId, client_id: c.clientId, guardian_name: c.guardianName, relationship: c.relationship, note: c.note, recorded_by: c.recordedBy, recorded_by_name: c.recordedByName })
+    .values({
+      salon_id: c.salonId,
+      client_id: c.clientId,
+      guardian_name: c.guardianName,
+      relationship: c.relationship,
+      note: c.note,
+      recorded_by: c.recordedBy,
+      recorded_by_name: c.recordedByName,
+    })
     .returning('id')
     .executeTakeFirstOrThrow();
   return row.id;

@@ -34,7 +34,15 @@ export async function setClientDateOfBirth(db: Db, user: SessionUser, clientId: 
   return db.transaction().execute(async (trx) => {
     const before = await clientAge(trx, user, clientId);
     await setDateOfBirth(trx, user.salonId, clientId, dateOfBirth);
-    await writeAudit(trx, { salonId: user.salonId, actorUserId: user.id, entity: 'client', entityId: clientId, action: 'date of birth', before: { dateOfBirth: before.dateOfBirth }, after: { dateOfBirth } });
+    await writeAudit(trx, {
+      salonId: user.salonId,
+      actorUserId: user.id,
+      entity: 'client',
+      entityId: clientId,
+      action: 'date of birth',
+      before: { dateOfBirth: before.dateOfBirth },
+      after: { dateOfBirth },
+    });
     return clientAge(trx, user, clientId);
   });
 }
@@ -43,8 +51,21 @@ export async function setClientDateOfBirth(db: Db, user: SessionUser, clientId: 
 export async function addGuardianConsent(db: Db, user: SessionUser, clientId: string, body: z.infer<typeof RecordGuardianConsentSchema>): Promise<ClientAge> {
   return db.transaction().execute(async (trx) => {
     await clientAge(trx, user, clientId);
-    const id = await insertGuardianConsent(trx, { salonId: user.salonId, clientId, ...body, recordedBy: user.id, recordedByName: await userName(trx, user.id) });
-    await writeAudit(trx, { salonId: user.salonId, actorUserId: user.id, entity: 'client', entityId: clientId, action: 'guardian consent recorded', after: { id, ...body } });
+    const id = await insertGuardianConsent(trx, {
+      salonId: user.salonId,
+      clientId,
+      ...body,
+      recordedBy: user.id,
+      recordedByName: await userName(trx, user.id),
+    });
+    await writeAudit(trx, {
+      salonId: user.salonId,
+      actorUserId: user.id,
+      entity: 'client',
+      entityId: clientId,
+      action: 'guardian consent recorded',
+      after: { id, ...body },
+    });
     return clientAge(trx, user, clientId);
   });
 }

@@ -21,9 +21,7 @@ export async function searchClients(db: Db, salonId: string, q: string | undefin
   if (q) {
     // Escape LIKE wildcards so a search for "50%" means the characters, not a pattern.
     const pattern = `%${q.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
-    query = query.where((eb) =>
-      eb.or([eb('name', 'ilike', pattern), eb('email', 'ilike', pattern), eb(sql`coalesce(phone, '')`, 'ilike', pattern)]),
-    );
+    query = query.where((eb) => eb.or([eb('name', 'ilike', pattern), eb('email', 'ilike', pattern), eb(sql`coalesce(phone, '')`, 'ilike', pattern)]));
   }
   return query.orderBy('name').limit(50).execute();
 }
@@ -31,7 +29,16 @@ export async function searchClients(db: Db, salonId: string, q: string | undefin
 export async function findClient(db: Db, salonId: string, id: string) {
   return db
     .selectFrom('clients')
-    .select(['id', 'name', 'email', 'phone', 'notes', 'message_channel as messageChannel', 'marketing_opt_in as marketingOptIn', 'sms_stopped_at as smsStoppedAt'])
+    .select([
+      'id',
+      'name',
+      'email',
+      'phone',
+      'notes',
+      'message_channel as messageChannel',
+      'marketing_opt_in as marketingOptIn',
+      'sms_stopped_at as smsStoppedAt',
+    ])
     .where('salon_id', '=', salonId)
     .where('id', '=', id)
     .executeTakeFirst();

@@ -9,7 +9,14 @@ export async function quotePriceInputs(db: Db, salonId: string) {
   const [correctionCentsPerHour, cut, costs, salon] = await Promise.all([
     correctionRate(db, salonId),
     // The salon's main cut service: the dearest active one of category cut.
-    db.selectFrom('services').select('price_cents').where('salon_id', '=', salonId).where('category', '=', 'cut').where('active', '=', true).orderBy('price_cents', 'desc').executeTakeFirst(),
+    db
+      .selectFrom('services')
+      .select('price_cents')
+      .where('salon_id', '=', salonId)
+      .where('category', '=', 'cut')
+      .where('active', '=', true)
+      .orderBy('price_cents', 'desc')
+      .executeTakeFirst(),
     productCentsPerGram(db, salonId),
     db.selectFrom('salons').select('currency').where('id', '=', salonId).executeTakeFirstOrThrow(),
   ]);
@@ -32,12 +39,23 @@ export async function insertConsultation(
     .values({ salon_id: c.salonId, client_id: c.clientId, details: JSON.stringify(c.details), created_by: c.createdBy })
     .returning('id')
     .executeTakeFirstOrThrow();
-  if (c.photoIds.length) await db.insertInto('consultation_photos').values(c.photoIds.map((photo_id) => ({ consultation_id: id, photo_id }))).execute();
+  if (c.photoIds.length)
+    await db
+      .insertInto('consultation_photos')
+      .values(c.photoIds.map((photo_id) => ({ consultation_id: id, photo_id })))
+      .execute();
   await db
     .insertInto('quotes')
     .values({
-      salon_id: c.salonId, consultation_id: id, client_id: c.clientId, service_id: c.quote.serviceId, step_plan: JSON.stringify(c.quote.stepPlan),
-      price_cents: c.quote.priceCents, deposit_cents: c.quote.depositCents, notes: c.quote.notes, warnings: JSON.stringify(c.warnings),
+      salon_id: c.salonId,
+      consultation_id: id,
+      client_id: c.clientId,
+      service_id: c.quote.serviceId,
+      step_plan: JSON.stringify(c.quote.stepPlan),
+      price_cents: c.quote.priceCents,
+      deposit_cents: c.quote.depositCents,
+      notes: c.quote.notes,
+      warnings: JSON.stringify(c.warnings),
       override_reason: c.quote.overrideReason,
     })
     .execute();
@@ -49,8 +67,16 @@ export function updateQuote(db: Db, consultationId: string, q: QuoteEdit) {
   return db
     .updateTable('quotes')
     .set({
-      service_id: q.serviceId, step_plan: JSON.stringify(q.stepPlan), price_cents: q.priceCents, deposit_cents: q.depositCents, notes: q.notes,
-      override_reason: q.overrideReason, status: 'draft', sent_at: null, accepted_at: null, updated_at: new Date(),
+      service_id: q.serviceId,
+      step_plan: JSON.stringify(q.stepPlan),
+      price_cents: q.priceCents,
+      deposit_cents: q.depositCents,
+      notes: q.notes,
+      override_reason: q.overrideReason,
+      status: 'draft',
+      sent_at: null,
+      accepted_at: null,
+      updated_at: new Date(),
     })
     .where('consultation_id', '=', consultationId)
     .execute();
@@ -72,19 +98,47 @@ const consultationQuery = (db: Db, salonId: string) =>
     .innerJoin('services as s', 's.id', 'q.service_id')
     .leftJoin('users as u', 'u.id', 'c.created_by')
     .select([
-      'c.id', 'c.client_id', 'cl.name as client_name', 'cl.email as client_email', 'c.details', 'c.created_at', 'u.name as created_by_name',
-      'q.id as quote_id', 'q.status', 'q.service_id', 's.name as service_name', 'q.step_plan', 'q.price_cents', 'q.deposit_cents', 'q.notes',
-      'q.warnings', 'q.override_reason', 'q.sent_at', 'q.accepted_at',
+      'c.id',
+      'c.client_id',
+      'cl.name as client_name',
+      'cl.email as client_email',
+      'c.details',
+      'c.created_at',
+      'u.name as created_by_name',
+      'q.id as quote_id',
+      'q.status',
+      'q.service_id',
+      's.name as service_name',
+      'q.step_plan',
+      'q.price_cents',
+      'q.deposit_cents',
+      'q.notes',
+      'q.warnings',
+      'q.override_reason',
+      'q.sent_at',
+      'q.accepted_at',
     ])
     .select((eb) => [
-      eb.fn.coalesce(
-        eb.selectFrom('consultation_photos as cp').innerJoin('client_photos as p', 'p.id', 'cp.photo_id').select(sql<string[]>`array_agg(cp.photo_id order by p.created_at)`.as('ids')).whereRef('cp.consultation_id', '=', 'c.id'),
-        sql<string[]>`'{}'::uuid[]`,
-      ).as('photo_ids'),
-      eb.fn.coalesce(
-        eb.selectFrom('bookings as b').select(sql<string[]>`array_agg(b.id order by b.created_at)`.as('ids')).whereRef('b.quote_id', '=', 'q.id').where('b.status', '!=', 'cancelled'),
-        sql<string[]>`'{}'::uuid[]`,
-      ).as('booking_ids'),
+      eb.fn
+        .coalesce(
+          eb
+            .selectFrom('consultation_photos as cp')
+            .innerJoin('client_photos as p', 'p.id', 'cp.photo_id')
+            .select(sql<string[]>`array_agg(cp.photo_id order by p.created_at)`.as('ids'))
+            .whereRef('cp.consultation_id', '=', 'c.id'),
+          sql<string[]>`'{}'::uuid[]`,
+        )
+        .as('photo_ids'),
+      eb.fn
+        .coalesce(
+          eb
+            .selectFrom('bookings as b')
+            .select(sql<string[]>`array_agg(b.id order by b.created_at)`.as('ids'))
+            .whereRef('b.quote_id', '=', 'q.id')
+            .where('b.status', '!=', 'cancelled'),
+          sql<string[]>`'{}'::uuid[]`,
+        )
+        .as('booking_ids'),
     ])
     .where('c.salon_id', '=', salonId);
 
@@ -109,9 +163,19 @@ function toStored(r: ConsultationRow): StoredConsultation {
     consultation: { ...details, vivid: details.vivid ?? false },
     photoIds: r.photo_ids,
     quote: {
-      id: r.quote_id, status: r.status, serviceId: r.service_id, serviceName: r.service_name, stepPlan: StepPlanSchema.parse(r.step_plan),
-      priceCents: r.price_cents, depositCents: r.deposit_cents, notes: r.notes, overrideReason: r.override_reason, warnings: r.warnings as QuoteWarning[],
-      sentAt: r.sent_at?.toISOString() ?? null, acceptedAt: r.accepted_at?.toISOString() ?? null, bookingIds: r.booking_ids,
+      id: r.quote_id,
+      status: r.status,
+      serviceId: r.service_id,
+      serviceName: r.service_name,
+      stepPlan: StepPlanSchema.parse(r.step_plan),
+      priceCents: r.price_cents,
+      depositCents: r.deposit_cents,
+      notes: r.notes,
+      overrideReason: r.override_reason,
+      warnings: r.warnings as QuoteWarning[],
+      sentAt: r.sent_at?.toISOString() ?? null,
+      acceptedAt: r.accepted_at?.toISOString() ?? null,
+      bookingIds: r.booking_ids,
     },
   };
 }
@@ -128,5 +192,11 @@ export async function listClientConsultations(db: Db, salonId: string, clientId:
 
 /** A quote of this salon and client, for booking it. */
 export function findClientQuote(db: Db, salonId: string, clientId: string, quoteId: string) {
-  return db.selectFrom('quotes').select(['id', 'price_cents', 'deposit_cents', 'service_id']).where('id', '=', quoteId).where('salon_id', '=', salonId).where('client_id', '=', clientId).executeTakeFirst();
+  return db
+    .selectFrom('quotes')
+    .select(['id', 'price_cents', 'deposit_cents', 'service_id'])
+    .where('id', '=', quoteId)
+    .where('salon_id', '=', salonId)
+    .where('client_id', '=', clientId)
+    .executeTakeFirst();
 }

@@ -1,9 +1,7 @@
 import { consultationsApi } from '@shared/api/consultations.api';
 import type { AppDeps } from '@server/app-deps';
 import { apiRoute } from '@server/lib/api-route';
-import {
-  acceptMyQuote, clientConsultations, createConsultation, editQuote, myQuotes, oneConsultation, proposeFor, sendQuote,
-} from './consultations.service';
+import { acceptMyQuote, clientConsultations, createConsultation, editQuote, myQuotes, oneConsultation, proposeFor, sendQuote } from './consultations.service';
 
 export function registerConsultationRoutes({ table, db, mailer, config }: AppDeps): void {
   apiRoute(table, consultationsApi.propose, ({ user, body }) => proposeFor(db, user, body));

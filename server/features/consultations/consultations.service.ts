@@ -2,7 +2,14 @@ import type { z } from 'zod';
 import type { Db } from '@server/db/database';
 import type { SessionUser } from '@shared/schemas/auth.schemas';
 import type {
-  ConsultationInput, ConsultationView, CreateConsultation, ProposeQuoteRequestSchema, ProposedQuoteView, QuoteEdit, QuoteWarning, StrandOutcome,
+  ConsultationInput,
+  ConsultationView,
+  CreateConsultation,
+  ProposeQuoteRequestSchema,
+  ProposedQuoteView,
+  QuoteEdit,
+  QuoteWarning,
+  StrandOutcome,
 } from '@shared/schemas/consultation.schemas';
 import type { ServiceSummary } from '@shared/schemas/service.schemas';
 import type { StepPlan } from '@shared/schemas/step-plan.schemas';
@@ -20,7 +27,14 @@ import { writeAudit } from '../audit';
 import { assertWithinProcessingLimits } from '../planning';
 import { myClientId } from '@server/auth/client-access';
 import {
-  clientPhotoIds, findConsultation, insertConsultation, listClientConsultations, quotePriceInputs, setQuoteStatus, updateQuote, type StoredConsultation,
+  clientPhotoIds,
+  findConsultation,
+  insertConsultation,
+  listClientConsultations,
+  quotePriceInputs,
+  setQuoteStatus,
+  updateQuote,
+  type StoredConsultation,
 } from './consultations.repository';
 
 const invalid = (field: string, message: string) => new AppError('VALIDATION_FAILED', 400, message, { [field]: message });
@@ -107,7 +121,14 @@ function assertQuoteAllowed(plan: StepPlan, limits: PlanningRules['processingLim
 async function auditOverride(db: Db, user: SessionUser, quoteId: string, plan: StepPlan, outcome: StrandOutcome, reason: string): Promise<void> {
   const steps = gatedSteps(plan);
   if (outcome !== 'failed' || steps.length === 0) return;
-  await writeAudit(db, { salonId: user.salonId, actorUserId: user.id, entity: 'quote', entityId: quoteId, action: 'lightening planned after a failed strand test', after: { reason, steps } });
+  await writeAudit(db, {
+    salonId: user.salonId,
+    actorUserId: user.id,
+    entity: 'quote',
+    entityId: quoteId,
+    action: 'lightening planned after a failed strand test',
+    after: { reason, steps },
+  });
 }
 
 export async function createConsultation(db: Db, user: SessionUser, body: CreateConsultation): Promise<ConsultationView> {
@@ -121,7 +142,15 @@ export async function createConsultation(db: Db, user: SessionUser, body: Create
   assertQuoteAllowed(body.quote.stepPlan, salon.processingLimits, consultation.strandTest, body.quote.overrideReason, 'quote');
   const warnings = await warningsOf(db, user.salonId, consultation);
   const id = await db.transaction().execute(async (trx) => {
-    const created = await insertConsultation(trx, { salonId: user.salonId, clientId: client.id, details: body.consultation, photoIds: photos, createdBy: user.id, quote: body.quote, warnings });
+    const created = await insertConsultation(trx, {
+      salonId: user.salonId,
+      clientId: client.id,
+      details: body.consultation,
+      photoIds: photos,
+      createdBy: user.id,
+      quote: body.quote,
+      warnings,
+    });
     const view = await consultationView(trx, user.salonId, created);
     await auditOverride(trx, user, view.quote.id, body.quote.stepPlan, consultation.strandTest, body.quote.overrideReason);
     return created;

@@ -30,7 +30,9 @@ export async function planClientMessage(db: Db, m: ClientMessage, now: Date): Pr
   if (!c) return [];
   const base = { salonId: m.salonId, clientId: m.clientId, kind: m.kind, sendAt: now };
   const rows: NewMessage[] = [];
-  if (c.email && c.messageChannel !== 'sms') rows.push({ ...base, channel: 'email', toAddress: c.email, subject: m.subject, body: m.email, dedupeKey: `${m.key}:email` });
-  if (c.phone && c.messageChannel !== 'email' && !c.smsStoppedAt) rows.push({ ...base, channel: 'sms', toAddress: c.phone, body: m.sms, dedupeKey: `${m.key}:sms` });
+  if (c.email && c.messageChannel !== 'sms')
+    rows.push({ ...base, channel: 'email', toAddress: c.email, subject: m.subject, body: m.email, dedupeKey: `${m.key}:email` });
+  if (c.phone && c.messageChannel !== 'email' && !c.smsStoppedAt)
+    rows.push({ ...base, channel: 'sms', toAddress: c.phone, body: m.sms, dedupeKey: `${m.key}:sms` });
   return insertPlanned(db, rows);
 }

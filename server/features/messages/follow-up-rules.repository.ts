@@ -5,15 +5,34 @@ const COLUMNS = ['r.id', 'r.service_id as serviceId', 'sv.name as serviceName', 
 
 /** A service's follow-up rules (planning reads these inside the booking's transaction). */
 export async function followUpRulesForService(db: Db, serviceId: string): Promise<FollowUpRule[]> {
-  return db.selectFrom('follow_up_rules as r').innerJoin('services as sv', 'sv.id', 'r.service_id').select(COLUMNS).where('r.service_id', '=', serviceId).orderBy('r.created_at').execute();
+  return db
+    .selectFrom('follow_up_rules as r')
+    .innerJoin('services as sv', 'sv.id', 'r.service_id')
+    .select(COLUMNS)
+    .where('r.service_id', '=', serviceId)
+    .orderBy('r.created_at')
+    .execute();
 }
 
 export async function listFollowUpRules(db: Db, salonId: string): Promise<FollowUpRule[]> {
-  return db.selectFrom('follow_up_rules as r').innerJoin('services as sv', 'sv.id', 'r.service_id').select(COLUMNS).where('r.salon_id', '=', salonId).orderBy('sv.name').orderBy('r.created_at').execute();
+  return db
+    .selectFrom('follow_up_rules as r')
+    .innerJoin('services as sv', 'sv.id', 'r.service_id')
+    .select(COLUMNS)
+    .where('r.salon_id', '=', salonId)
+    .orderBy('sv.name')
+    .orderBy('r.created_at')
+    .execute();
 }
 
 export async function findFollowUpRule(db: Db, salonId: string, id: string): Promise<FollowUpRule | undefined> {
-  return db.selectFrom('follow_up_rules as r').innerJoin('services as sv', 'sv.id', 'r.service_id').select(COLUMNS).where('r.salon_id', '=', salonId).where('r.id', '=', id).executeTakeFirst();
+  return db
+    .selectFrom('follow_up_rules as r')
+    .innerJoin('services as sv', 'sv.id', 'r.service_id')
+    .select(COLUMNS)
+    .where('r.salon_id', '=', salonId)
+    .where('r.id', '=', id)
+    .executeTakeFirst();
 }
 
 export interface FollowUpRuleInput {
@@ -24,7 +43,11 @@ export interface FollowUpRuleInput {
 }
 
 export async function insertFollowUpRule(db: Db, salonId: string, input: FollowUpRuleInput): Promise<string> {
-  const row = await db.insertInto('follow_up_rules').values({ salon_id: salonId, service_id: input.serviceId, title: input.title, body: input.text, rrule: input.rrule }).returning('id').executeTakeFirstOrThrow();
+  const row = await db
+    .insertInto('follow_up_rules')
+    .values({ salon_id: salonId, service_id: input.serviceId, title: input.title, body: input.text, rrule: input.rrule })
+    .returning('id')
+    .executeTakeFirstOrThrow();
   return row.id;
 }
 
@@ -46,7 +69,13 @@ export async function deleteFollowUpRule(db: Db, salonId: string, id: string): P
 
 /** Queued follow-ups of a rule (its dedupe keys carry the rule id) will not go out: the rule changed or went. */
 export async function dropQueuedFollowUps(db: Db, ruleId: string): Promise<void> {
-  await db.updateTable('messages').set({ status: 'dropped' }).where('kind', '=', 'follow_up').where('status', '=', 'queued').where('dedupe_key', 'like', `%:${ruleId}.%`).execute();
+  await db
+    .updateTable('messages')
+    .set({ status: 'dropped' })
+    .where('kind', '=', 'follow_up')
+    .where('status', '=', 'queued')
+    .where('dedupe_key', 'like', `%:${ruleId}.%`)
+    .execute();
 }
 
 /** Bookings of a service whose last sitting ended recently or is ahead: the ones a changed rule re-plans. */

@@ -5,14 +5,22 @@ import { findService } from '../services';
 import { bookingForMessages, insertPlanned } from './messages.repository';
 import { followUpRows } from './plan-messages.service';
 import {
-  bookingsForFollowUps, deleteFollowUpRule, dropQueuedFollowUps, findFollowUpRule, insertFollowUpRule, listFollowUpRules, updateFollowUpRule, type FollowUpRuleInput,
+  bookingsForFollowUps,
+  deleteFollowUpRule,
+  dropQueuedFollowUps,
+  findFollowUpRule,
+  insertFollowUpRule,
+  listFollowUpRules,
+  updateFollowUpRule,
+  type FollowUpRuleInput,
 } from './follow-up-rules.repository';
 
 /** Bookings whose last sitting ended within this many days still get a new or edited rule's follow-ups. */
 const LOOK_BACK_DAYS = 365;
 
 async function assertService(db: Db, salonId: string, serviceId: string) {
-  if (!(await findService(db, salonId, serviceId))) throw new AppError('VALIDATION_FAILED', 400, 'Choose one of the salon’s services.', { serviceId: 'Choose one of the salon’s services' });
+  if (!(await findService(db, salonId, serviceId)))
+    throw new AppError('VALIDATION_FAILED', 400, 'Choose one of the salon’s services.', { serviceId: 'Choose one of the salon’s services' });
 }
 
 /**

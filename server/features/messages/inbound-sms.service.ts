@@ -25,17 +25,30 @@ export async function handleInboundSms(db: Db, sms: z.infer<typeof InboundSmsSch
     const clients = await setSmsStopped(trx, phone, stop, now);
     for (const c of clients) await replanClientMessages(trx, c.id, now);
     if (clients.length > 0) {
-      await insertPlanned(trx, [{
-        salonId: clients[0].salonId, clientId: clients[0].id, kind: stop ? 'sms_stopped' : 'sms_started', channel: 'sms',
-        toAddress: phone, body: stopReply(stop), sendAt: now, dedupeKey: `inbound:${sms.MessageSid}`,
-      }]);
+      await insertPlanned(trx, [
+        {
+          salonId: clients[0].salonId,
+          clientId: clients[0].id,
+          kind: stop ? 'sms_stopped' : 'sms_started',
+          channel: 'sms',
+          toAddress: phone,
+          body: stopReply(stop),
+          sendAt: now,
+          dedupeKey: `inbound:${sms.MessageSid}`,
+        },
+      ]);
     }
     return stop ? 'stopped' : 'started';
   });
 }
 
 /** Demo/dev: the SMS fake delivers a text from a phone (read in the salon's country) to the webhook; answers the webhook's status. */
-export async function simulateInboundSms(db: Db, smsFake: SmsFake | null, salonId: string, sms: z.output<typeof SimulateInboundSmsSchema>): Promise<{ webhookStatus: number }> {
+export async function simulateInboundSms(
+  db: Db,
+  smsFake: SmsFake | null,
+  salonId: string,
+  sms: z.output<typeof SimulateInboundSmsSchema>,
+): Promise<{ webhookStatus: number }> {
   if (!smsFake) throw notFound('The demo SMS service');
   const from = storedPhone(sms.from, await salonCountry(db, salonId), 'from');
   return { webhookStatus: await smsFake.simulateInbound(from, sms.body) };

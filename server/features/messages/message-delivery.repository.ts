@@ -31,8 +31,15 @@ export async function claimMessage(db: Db, id: string, now: Date): Promise<Claim
     .executeTakeFirst();
   return (
     row && {
-      id: row.id, channel: row.channel, toAddress: row.to_address, subject: row.subject, body: row.body, attachments: row.attachments,
-      attempts: row.attempts, sendAt: row.send_at, dueAt: row.due_at,
+      id: row.id,
+      channel: row.channel,
+      toAddress: row.to_address,
+      subject: row.subject,
+      body: row.body,
+      attachments: row.attachments,
+      attempts: row.attempts,
+      sendAt: row.send_at,
+      dueAt: row.due_at,
     }
   );
 }
@@ -76,14 +83,22 @@ export interface DueMessage {
 
 /** Up to 100 queued messages whose time has come (of one booking, when given), in the order they go out. */
 export async function dueMessages(db: Db, now: Date, bookingId?: string): Promise<DueMessage[]> {
-  let q = db.selectFrom('messages').select(['id', 'channel', dueOrder.as('due')]).where('status', '=', 'queued').where('send_at', '<=', now);
+  let q = db
+    .selectFrom('messages')
+    .select(['id', 'channel', dueOrder.as('due')])
+    .where('status', '=', 'queued')
+    .where('send_at', '<=', now);
   if (bookingId) q = q.where('booking_id', '=', bookingId);
   return q.orderBy(dueOrder).orderBy('created_at').limit(100).execute();
 }
 
 /** One message's channel and first-due time. */
 export async function findDueMessage(db: Db, id: string): Promise<Omit<DueMessage, 'id'> | undefined> {
-  return db.selectFrom('messages').select(['channel', dueOrder.as('due')]).where('id', '=', id).executeTakeFirst();
+  return db
+    .selectFrom('messages')
+    .select(['channel', dueOrder.as('due')])
+    .where('id', '=', id)
+    .executeTakeFirst();
 }
 
 /** Claims older than `afterSeconds` with no provider reference are queued again; answers how many. */

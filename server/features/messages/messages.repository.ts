@@ -32,9 +32,34 @@ export async function bookingForMessages(db: Db, bookingId: string): Promise<Boo
     .innerJoin('services as sv', 'sv.id', 'b.service_id')
     .innerJoin('staff as st', 'st.id', 'b.stylist_id')
     .leftJoin('clients as c', 'c.id', 'b.client_id')
-    .select(['b.id', 'b.salon_id', 'b.client_id', 'b.status', 'b.version', 's.name as salonName', 's.address', 's.time_zone', 's.reminder_offsets_hours', 's.quiet_from', 's.quiet_to',
-      'sv.id as serviceId', 'sv.name as serviceName', 'sv.category', 'st.display_name', 'c.name as clientName', 'c.email', 'c.phone',
-      'c.message_channel', 'c.sms_stopped_at', 'c.marketing_opt_in', 's.skin_test_lead_hours', 's.skin_test_validity_days', 's.skin_test_families', 'b.step_plan', 'sv.needs_skin_test'])
+    .select([
+      'b.id',
+      'b.salon_id',
+      'b.client_id',
+      'b.status',
+      'b.version',
+      's.name as salonName',
+      's.address',
+      's.time_zone',
+      's.reminder_offsets_hours',
+      's.quiet_from',
+      's.quiet_to',
+      'sv.id as serviceId',
+      'sv.name as serviceName',
+      'sv.category',
+      'st.display_name',
+      'c.name as clientName',
+      'c.email',
+      'c.phone',
+      'c.message_channel',
+      'c.sms_stopped_at',
+      'c.marketing_opt_in',
+      's.skin_test_lead_hours',
+      's.skin_test_validity_days',
+      's.skin_test_families',
+      'b.step_plan',
+      'sv.needs_skin_test',
+    ])
     .where('b.id', '=', bookingId)
     .executeTakeFirst();
   if (!row) return null;
@@ -58,10 +83,22 @@ export async function bookingForMessages(db: Db, bookingId: string): Promise<Boo
     offsets: row.reminder_offsets_hours,
     quietFrom: row.quiet_from,
     quietTo: row.quiet_to,
-    skinTestRule: { plan: row.step_plan as StepPlan, serviceAsks: row.needs_skin_test, validityDays: row.skin_test_validity_days, families: row.skin_test_families },
+    skinTestRule: {
+      plan: row.step_plan as StepPlan,
+      serviceAsks: row.needs_skin_test,
+      validityDays: row.skin_test_validity_days,
+      families: row.skin_test_families,
+    },
     context: {
-      bookingId, salonName: row.salonName, address: row.address, timeZone: row.time_zone, clientName: row.clientName ?? '',
-      serviceName: row.serviceName, category: row.category, stylistName: row.display_name, sittings,
+      bookingId,
+      salonName: row.salonName,
+      address: row.address,
+      timeZone: row.time_zone,
+      clientName: row.clientName ?? '',
+      serviceName: row.serviceName,
+      category: row.category,
+      stylistName: row.display_name,
+      sittings,
       skinTestLeadHours: row.skin_test_lead_hours,
     },
   };
@@ -70,7 +107,13 @@ export async function bookingForMessages(db: Db, bookingId: string): Promise<Boo
 /** Queued messages to a client on channels they no longer want (preferences changed, or STOP). */
 export async function dropQueuedForClient(db: Db, clientId: string, channels: ('sms' | 'email')[]): Promise<void> {
   if (channels.length === 0) return;
-  await db.updateTable('messages').set({ status: 'dropped' }).where('client_id', '=', clientId).where('status', '=', 'queued').where('channel', 'in', channels).execute();
+  await db
+    .updateTable('messages')
+    .set({ status: 'dropped' })
+    .where('client_id', '=', clientId)
+    .where('status', '=', 'queued')
+    .where('channel', 'in', channels)
+    .execute();
 }
 
 /** The client's bookings that still have sittings ahead (for re-planning after a preference change). */
@@ -80,7 +123,15 @@ export async function upcomingBookingIds(db: Db, clientId: string, now: Date): P
     .select('b.id')
     .where('b.client_id', '=', clientId)
     .where('b.status', 'in', ['booked', 'checked_in'])
-    .where((eb) => eb.exists(eb.selectFrom('sittings as s').select('s.seq').whereRef('s.booking_id', '=', 'b.id').where(sql<boolean>`upper(s.during) > ${now}`)))
+    .where((eb) =>
+      eb.exists(
+        eb
+          .selectFrom('sittings as s')
+          .select('s.seq')
+          .whereRef('s.booking_id', '=', 'b.id')
+          .where(sql<boolean>`upper(s.during) > ${now}`),
+      ),
+    )
     .execute();
   return rows.map((r) => r.id);
 }
@@ -111,7 +162,20 @@ export interface MessageListItem {
 export async function listMessages(db: Db, salonId: string, status: MessageStatus | undefined, limit = 200): Promise<MessageListItem[]> {
   let q = db
     .selectFrom('messages')
-    .select(['id', 'kind', 'channel', 'to_address as toAddress', 'subject', 'body', 'send_at as sendAt', 'status', 'attempts', 'last_error as lastError', 'sent_at as sentAt', 'booking_id as bookingId'])
+    .select([
+      'id',
+      'kind',
+      'channel',
+      'to_address as toAddress',
+      'subject',
+      'body',
+      'send_at as sendAt',
+      'status',
+      'attempts',
+      'last_error as lastError',
+      'sent_at as sentAt',
+      'booking_id as bookingId',
+    ])
     .where('salon_id', '=', salonId);
   if (status) q = q.where('status', '=', status);
   return q.orderBy('created_at', 'desc').orderBy('send_at', 'desc').limit(limit).execute();
@@ -119,12 +183,24 @@ export async function listMessages(db: Db, salonId: string, status: MessageStatu
 
 /** The client's follow-up suggestions still queued, with their bookings. */
 export async function queuedFollowUps(db: Db, clientId: string): Promise<{ bookingId: string }[]> {
-  const rows = await db.selectFrom('messages').select('booking_id').where('client_id', '=', clientId).where('kind', '=', 'follow_up').where('status', '=', 'queued').execute();
+  const rows = await db
+    .selectFrom('messages')
+    .select('booking_id')
+    .where('client_id', '=', clientId)
+    .where('kind', '=', 'follow_up')
+    .where('status', '=', 'queued')
+    .execute();
   return rows.filter((r) => r.booking_id !== null).map((r) => ({ bookingId: r.booking_id! }));
 }
 
 export async function dropFollowUps(db: Db, bookingId: string): Promise<void> {
-  await db.updateTable('messages').set({ status: 'dropped' }).where('booking_id', '=', bookingId).where('kind', '=', 'follow_up').where('status', '=', 'queued').execute();
+  await db
+    .updateTable('messages')
+    .set({ status: 'dropped' })
+    .where('booking_id', '=', bookingId)
+    .where('kind', '=', 'follow_up')
+    .where('status', '=', 'queued')
+    .execute();
 }
 
 /** The first message of a booking (confirmation or skin-test notice) on each channel it was planned for, newest plan first. */
@@ -178,15 +254,33 @@ export async function insertPlanned(db: Db, messages: NewMessage[]): Promise<Pla
     .insertInto('messages')
     .values(
       messages.map((m) => ({
-        salon_id: m.salonId, booking_id: m.bookingId, booking_version: m.bookingVersion, client_id: m.clientId, kind: m.kind, channel: m.channel,
-        to_address: m.toAddress, subject: m.subject, body: m.body, attachments: m.attachments && JSON.stringify(m.attachments), send_at: m.sendAt, dedupe_key: m.dedupeKey,
+        salon_id: m.salonId,
+        booking_id: m.bookingId,
+        booking_version: m.bookingVersion,
+        client_id: m.clientId,
+        kind: m.kind,
+        channel: m.channel,
+        to_address: m.toAddress,
+        subject: m.subject,
+        body: m.body,
+        attachments: m.attachments && JSON.stringify(m.attachments),
+        send_at: m.sendAt,
+        dedupe_key: m.dedupeKey,
       })),
     )
     .onConflict((oc) =>
-      oc.column('dedupe_key').doUpdateSet((eb) => ({
-        status: 'queued', to_address: eb.ref('excluded.to_address'), body: eb.ref('excluded.body'), subject: eb.ref('excluded.subject'),
-        send_at: eb.ref('excluded.send_at'), attempts: 0, last_error: null,
-      })).where('messages.status', '=', 'dropped'),
+      oc
+        .column('dedupe_key')
+        .doUpdateSet((eb) => ({
+          status: 'queued',
+          to_address: eb.ref('excluded.to_address'),
+          body: eb.ref('excluded.body'),
+          subject: eb.ref('excluded.subject'),
+          send_at: eb.ref('excluded.send_at'),
+          attempts: 0,
+          last_error: null,
+        }))
+        .where('messages.status', '=', 'dropped'),
     )
     .returning(['id', 'send_at as sendAt'])
     .execute();
@@ -194,7 +288,11 @@ export async function insertPlanned(db: Db, messages: NewMessage[]): Promise<Pla
 
 /** A move makes what was planned for the booking's old times stale: its version (in every dedupe key) goes up. */
 export async function bumpBookingVersion(db: Db, bookingId: string): Promise<void> {
-  await db.updateTable('bookings').set((eb) => ({ version: eb('version', '+', 1) })).where('id', '=', bookingId).execute();
+  await db
+    .updateTable('bookings')
+    .set((eb) => ({ version: eb('version', '+', 1) }))
+    .where('id', '=', bookingId)
+    .execute();
 }
 
 /** How a client can be reached, as their messages are planned. */
@@ -215,11 +313,23 @@ export async function findClientReach(db: Db, clientId: string): Promise<ClientR
 
 /** The client's queued messages on a channel go to their current address. */
 export async function readdressQueued(db: Db, clientId: string, channel: 'sms' | 'email', address: string): Promise<void> {
-  await db.updateTable('messages').set({ to_address: address }).where('client_id', '=', clientId).where('status', '=', 'queued').where('channel', '=', channel).execute();
+  await db
+    .updateTable('messages')
+    .set({ to_address: address })
+    .where('client_id', '=', clientId)
+    .where('status', '=', 'queued')
+    .where('channel', '=', channel)
+    .execute();
 }
 
 /** Drops the client's queued booking messages except the given kinds (re-planning revives what still holds). */
 export async function dropQueuedBookingMessages(db: Db, clientId: string, exceptKinds: string[]): Promise<void> {
-  await db.updateTable('messages').set({ status: 'dropped' }).where('client_id', '=', clientId).where('status', '=', 'queued')
-    .where('booking_id', 'is not', null).where('kind', 'not in', exceptKinds).execute();
+  await db
+    .updateTable('messages')
+    .set({ status: 'dropped' })
+    .where('client_id', '=', clientId)
+    .where('status', '=', 'queued')
+    .where('booking_id', 'is not', null)
+    .where('kind', 'not in', exceptKinds)
+    .execute();
 }

@@ -4,15 +4,33 @@ import { followUpTimes } from '@shared/messages/follow-up-times';
 import type { Salon } from '@shared/schemas/salon.schemas';
 import { bookingSkinTestStates } from '../skin-tests';
 import {
-  bookingForMessages, bumpBookingVersion, dropFollowUps, dropQueued, dropQueuedBookingMessages, dropQueuedForClient, findClientReach, insertPlanned, queuedFollowUps,
-  readdressQueued, upcomingBookingIds, type BookingForMessages, type NewMessage, type PlannedMessage,
+  bookingForMessages,
+  bumpBookingVersion,
+  dropFollowUps,
+  dropQueued,
+  dropQueuedBookingMessages,
+  dropQueuedForClient,
+  findClientReach,
+  insertPlanned,
+  queuedFollowUps,
+  readdressQueued,
+  upcomingBookingIds,
+  type BookingForMessages,
+  type NewMessage,
+  type PlannedMessage,
 } from './messages.repository';
 import { followUpRulesForService } from './follow-up-rules.repository';
 import { outOfQuietHours, reminderAt } from './quiet-hours';
 import { aftercareKind, aftercareNotes } from './aftercare-notes';
 import {
-  aftercareMessage, bookingMessage, dayBeforeSittingMessage, followUpMessage, reminderMessage, skinTestBookedMessage,
-  type BookingMessageKind, type MessageText,
+  aftercareMessage,
+  bookingMessage,
+  dayBeforeSittingMessage,
+  followUpMessage,
+  reminderMessage,
+  skinTestBookedMessage,
+  type BookingMessageKind,
+  type MessageText,
 } from './templates';
 
 /**
@@ -53,7 +71,7 @@ export async function replanBookingMessages(db: Db, bookingId: string, now: Date
 
   const rows: NewMessage[] = [];
   if (!addOnly) rows.push(...toRows(b, 0, firstKind(b, change), firstMessage(b, change, skinTest === 'waiting'), now, null));
-  if (!cancelled) rows.push(...await sittingMessages(db, b, now));
+  if (!cancelled) rows.push(...(await sittingMessages(db, b, now)));
   return insertPlanned(db, rows);
 }
 
@@ -71,12 +89,20 @@ function firstMessage(b: BookingForMessages, change: BookingChange, waitingOnTes
 
 /** The booking's skin-test footing, by the one rule (the salon's lead time, validity and tested families). */
 const skinTestSalon = (b: BookingForMessages) => ({
-  timeZone: b.context.timeZone, skinTestLeadHours: b.context.skinTestLeadHours, skinTestValidityDays: b.skinTestRule.validityDays, skinTestFamilies: b.skinTestRule.families as Salon['skinTestFamilies'],
+  timeZone: b.context.timeZone,
+  skinTestLeadHours: b.context.skinTestLeadHours,
+  skinTestValidityDays: b.skinTestRule.validityDays,
+  skinTestFamilies: b.skinTestRule.families as Salon['skinTestFamilies'],
 });
 
 async function skinTestOf(db: Db, b: BookingForMessages, now: Date) {
   const rule = b.skinTestRule;
-  const [state] = await bookingSkinTestStates(db, skinTestSalon(b), [{ clientId: b.clientId, status: b.status, plan: rule.plan, serviceAsks: rule.serviceAsks, starts: b.context.sittings.map((s) => s.start) }], now);
+  const [state] = await bookingSkinTestStates(
+    db,
+    skinTestSalon(b),
+    [{ clientId: b.clientId, status: b.status, plan: rule.plan, serviceAsks: rule.serviceAsks, starts: b.context.sittings.map((s) => s.start) }],
+    now,
+  );
   return state.status;
 }
 
@@ -92,17 +118,24 @@ async function sittingMessages(db: Db, b: BookingForMessages, now: Date): Promis
       rows.push(...toRows(b, sitting.seq, `reminder_${hours}h`, reminderMessage(b.context, sitting.seq, hours), at, sitting.start));
     }
     if (sitting.seq > 1) {
-      const at = DateTime.fromJSDate(sitting.start, { zone }).minus({ days: 1 }).set({ ...DAY_BEFORE_AT, second: 0, millisecond: 0 }).toJSDate();
-      if (at > now && at < sitting.start) rows.push(...toRows(b, sitting.seq, 'day_before_sitting', dayBeforeSittingMessage(b.context, sitting.seq), at, sitting.start));
+      const at = DateTime.fromJSDate(sitting.start, { zone })
+        .minus({ days: 1 })
+        .set({ ...DAY_BEFORE_AT, second: 0, millisecond: 0 })
+        .toJSDate();
+      if (at > now && at < sitting.start)
+        rows.push(...toRows(b, sitting.seq, 'day_before_sitting', dayBeforeSittingMessage(b.context, sitting.seq), at, sitting.start));
     }
   }
   const last = b.context.sittings.at(-1)!;
   const kind = aftercareKind(b.context.category, b.context.serviceName);
   if (kind && last.end > now) {
-    const at = DateTime.fromJSDate(last.end, { zone }).plus({ days: 1 }).set({ ...AFTERCARE_AT, second: 0, millisecond: 0 }).toJSDate();
+    const at = DateTime.fromJSDate(last.end, { zone })
+      .plus({ days: 1 })
+      .set({ ...AFTERCARE_AT, second: 0, millisecond: 0 })
+      .toJSDate();
     rows.push(...toRows(b, last.seq, 'aftercare', aftercareMessage(b.context, aftercareNotes(kind)), at, null));
   }
-  if (b.marketingOptIn && last.end > now) rows.push(...await followUpRows(db, b, now));
+  if (b.marketingOptIn && last.end > now) rows.push(...(await followUpRows(db, b, now)));
   return rows;
 }
 
@@ -132,7 +165,16 @@ function toRows(b: BookingForMessages, seq: number | string, kind: string, text:
   const to = channelsFor(b);
   const rows: NewMessage[] = [];
   if (to.email) {
-    rows.push({ ...base, channel: 'email', toAddress: to.email, subject: text.subject, body: text.email, attachments: text.attachments, sendAt: at, dedupeKey: key('email') });
+    rows.push({
+      ...base,
+      channel: 'email',
+      toAddress: to.email,
+      subject: text.subject,
+      body: text.email,
+      attachments: text.attachments,
+      sendAt: at,
+      dedupeKey: key('email'),
+    });
   }
   if (to.sms) {
     const smsAt = outOfQuietHours(at, b.context.timeZone, b.quietFrom, b.quietTo);
@@ -154,13 +196,16 @@ export async function replanClientMessages(db: Db, clientId: string, now: Date):
   if (client.messageChannel === 'email' || client.smsStoppedAt || !client.phone) unwanted.push('sms');
   if (client.messageChannel === 'sms' || !client.email) unwanted.push('email');
   await dropQueuedForClient(db, clientId, unwanted);
-  for (const [channel, address] of [['sms', client.phone], ['email', client.email]] as const) {
+  for (const [channel, address] of [
+    ['sms', client.phone],
+    ['email', client.email],
+  ] as const) {
     if (address) await readdressQueued(db, clientId, channel, address);
   }
   // Everything else is planned afresh: dropped here, then re-planned (reviving rows whose key is unchanged).
   await dropQueuedBookingMessages(db, clientId, FIRST_KINDS);
   const planned: PlannedMessage[] = [];
-  for (const id of await upcomingBookingIds(db, clientId, now)) planned.push(...await replanBookingMessages(db, id, now, 'preferences'));
+  for (const id of await upcomingBookingIds(db, clientId, now)) planned.push(...(await replanBookingMessages(db, id, now, 'preferences')));
   return planned;
 }
 
@@ -182,7 +227,12 @@ async function dropBlockedFollowUps(db: Db, clientId: string, now: Date): Promis
   for (const bookingId of new Set(queued.map((q) => q.bookingId))) {
     const b = await bookingForMessages(db, bookingId);
     if (!b) continue;
-    const [state] = await bookingSkinTestStates(db, skinTestSalon(b), [{ clientId, status: 'booked', plan: b.skinTestRule.plan, serviceAsks: b.skinTestRule.serviceAsks, starts: [now] }], now);
+    const [state] = await bookingSkinTestStates(
+      db,
+      skinTestSalon(b),
+      [{ clientId, status: 'booked', plan: b.skinTestRule.plan, serviceAsks: b.skinTestRule.serviceAsks, starts: [now] }],
+      now,
+    );
     if (state.status === 'blocked') await dropFollowUps(db, bookingId);
   }
 }

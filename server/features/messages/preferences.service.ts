@@ -17,7 +17,11 @@ async function myClient(db: Db, user: Me) {
 }
 
 const view = (c: Awaited<ReturnType<typeof myClient>>): MyPreferences => ({
-  email: c.email, phone: c.phone, messageChannel: c.messageChannel, marketingOptIn: c.marketingOptIn, smsStoppedAt: c.smsStoppedAt?.toISOString() ?? null,
+  email: c.email,
+  phone: c.phone,
+  messageChannel: c.messageChannel,
+  marketingOptIn: c.marketingOptIn,
+  smsStoppedAt: c.smsStoppedAt?.toISOString() ?? null,
 });
 
 /** How the salon reaches the signed-in client. */
@@ -29,7 +33,13 @@ export async function myPreferences(db: Db, user: Me): Promise<MyPreferences> {
 export async function saveMyPreferences(db: Db, user: Me, body: z.output<typeof MyPreferencesBodySchema>, now: Date): Promise<MyPreferences> {
   const client = await myClient(db, user);
   // The same reachability rule as the desk's card (e-mail stays the sign-in address here).
-  UpdateClientSchema.parse({ name: client.name, email: client.email ?? '', phone: body.phone ?? '', messageChannel: body.messageChannel, marketingOptIn: body.marketingOptIn });
+  UpdateClientSchema.parse({
+    name: client.name,
+    email: client.email ?? '',
+    phone: body.phone ?? '',
+    messageChannel: body.messageChannel,
+    marketingOptIn: body.marketingOptIn,
+  });
   const phone = storedPhone(body.phone, await salonCountry(db, user.salonId));
   await db.transaction().execute(async (trx) => {
     await updateClientContact(trx, user.salonId, client.id, { ...body, phone });

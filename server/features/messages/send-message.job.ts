@@ -3,7 +3,16 @@ import type { Database } from '@server/db/schema';
 import type { Mailer } from '@server/mail/mailer';
 import type { SmsSender } from '@server/sms/sms-sender';
 import { emailHtml } from './html-email';
-import { channelBlockers, claimMessage, dueMessages, findDueMessage, markSent, markTryFailed, requeueStuck, takeMessagesForJobs } from './message-delivery.repository';
+import {
+  channelBlockers,
+  claimMessage,
+  dueMessages,
+  findDueMessage,
+  markSent,
+  markTryFailed,
+  requeueStuck,
+  takeMessagesForJobs,
+} from './message-delivery.repository';
 
 export const SEND_MESSAGE_JOB = 'send-message';
 export const SEND_DUE_MESSAGES_JOB = 'send-due-messages';
@@ -35,9 +44,11 @@ export async function sendMessage(db: Kysely<Database>, senders: Senders, id: st
   const m = await claimMessage(db, id, now);
   if (!m) return 'not-claimed';
   try {
-    const ref = m.channel === 'sms'
-      ? (await senders.sms.send(m.toAddress, m.body)).sid
-      : (await senders.mailer.send({ to: m.toAddress, subject: m.subject, text: m.body, html: emailHtml(m.subject, m.body), attachments: m.attachments }), `smtp:${m.id}`);
+    const ref =
+      m.channel === 'sms'
+        ? (await senders.sms.send(m.toAddress, m.body)).sid
+        : (await senders.mailer.send({ to: m.toAddress, subject: m.subject, text: m.body, html: emailHtml(m.subject, m.body), attachments: m.attachments }),
+          `smtp:${m.id}`);
     await markSent(db, id, ref, new Date());
     return 'sent';
   } catch (err) {
@@ -45,7 +56,12 @@ export async function sendMessage(db: Kysely<Database>, senders: Senders, id: st
     const permanent = (err as { status?: number }).status === 400;
     const failed = permanent || m.attempts >= MAX_ATTEMPTS;
     const retryAt = new Date(now.getTime() + backoffMinutes(m.attempts) * 60_000);
-    await markTryFailed(db, id, { failed, sendAt: failed ? m.sendAt : retryAt, dueAt: m.dueAt ?? m.sendAt, error: String((err as Error).message ?? err).slice(0, 500) });
+    await markTryFailed(db, id, {
+      failed,
+      sendAt: failed ? m.sendAt : retryAt,
+      dueAt: m.dueAt ?? m.sendAt,
+      error: String((err as Error).message ?? err).slice(0, 500),
+    });
     return failed ? 'failed' : 'retry';
   }
 }

@@ -37,8 +37,14 @@ export async function sittingsBetween(db: Db, salonId: string, from: Date, to: D
     .innerJoin('services as sv', 'sv.id', 'b.service_id')
     .leftJoin('clients as c', 'c.id', 'b.client_id')
     .select([
-      'st.id as staffId', 'st.display_name as stylistName', 'u.email as stylistEmail', 's.seq', 'b.id as bookingId', 'sv.name as serviceName',
-      sql<Date>`lower(s.during)`.as('start'), sql<Date>`upper(s.during)`.as('end'),
+      'st.id as staffId',
+      'st.display_name as stylistName',
+      'u.email as stylistEmail',
+      's.seq',
+      'b.id as bookingId',
+      'sv.name as serviceName',
+      sql<Date>`lower(s.during)`.as('start'),
+      sql<Date>`upper(s.during)`.as('end'),
       sql<number>`(select count(*)::int from sittings x where x.booking_id = b.id)`.as('sittingCount'),
       sql<string>`coalesce(c.name, 'Walk-in')`.as('clientName'),
       sql<number>`greatest(b.deposit_cents, sv.deposit_cents)`.as('depositDue'),
@@ -53,7 +59,13 @@ export async function sittingsBetween(db: Db, salonId: string, from: Date, to: D
 
 /** Where the desk's lists go: front-desk users, or the owner when the salon has no desk account. */
 export async function deskEmails(db: Db, salonId: string): Promise<string[]> {
-  const rows = await db.selectFrom('users').select(['email', 'role']).where('salon_id', '=', salonId).where('active', '=', true).where('role', 'in', ['front_desk', 'owner']).execute();
+  const rows = await db
+    .selectFrom('users')
+    .select(['email', 'role'])
+    .where('salon_id', '=', salonId)
+    .where('active', '=', true)
+    .where('role', 'in', ['front_desk', 'owner'])
+    .execute();
   const desk = rows.filter((r) => r.role === 'front_desk');
   return (desk.length > 0 ? desk : rows).map((r) => r.email);
 }

@@ -30,23 +30,34 @@ export async function planStaffMessages(db: Db, now: Date): Promise<PlannedMessa
       const email = list[0].stylistEmail;
       if (!email) continue;
       rows.push({
-        salonId: salon.id, kind: 'stylist_day_list', channel: 'email', toAddress: email, sendAt: now, dedupeKey: `staff:${staffId}:${date}:day_list`,
+        salonId: salon.id,
+        kind: 'stylist_day_list',
+        channel: 'email',
+        toAddress: email,
+        sendAt: now,
+        dedupeKey: `staff:${staffId}:${date}:day_list`,
         subject: `Your day, ${dayName}: ${list.length} sitting${list.length === 1 ? '' : 's'}`,
         body: `Hello ${list[0].stylistName.split(' ')[0]},\n\nTomorrow at ${salon.name} (${salon.timeZone} time):\n\n${list.map((s) => line(s, salon.timeZone)).join('\n')}\n`,
       });
     }
     const unpaid = sittings.filter((s) => s.depositDue > 0 && !s.depositPaid && s.seq === 1);
-    const body = unpaid.length === 0
-      ? 'Every booking tomorrow that needs a deposit has paid it.'
-      : unpaid.map((s) => `${line(s, salon.timeZone)} — deposit ${formatMoney(s.depositDue, salon.currency)} not paid`).join('\n');
+    const body =
+      unpaid.length === 0
+        ? 'Every booking tomorrow that needs a deposit has paid it.'
+        : unpaid.map((s) => `${line(s, salon.timeZone)} — deposit ${formatMoney(s.depositDue, salon.currency)} not paid`).join('\n');
     for (const email of await deskEmails(db, salon.id)) {
       rows.push({
-        salonId: salon.id, kind: 'desk_no_deposit_list', channel: 'email', toAddress: email, sendAt: now, dedupeKey: `desk:${salon.id}:${email}:${date}:no_deposit`,
+        salonId: salon.id,
+        kind: 'desk_no_deposit_list',
+        channel: 'email',
+        toAddress: email,
+        sendAt: now,
+        dedupeKey: `desk:${salon.id}:${email}:${date}:no_deposit`,
         subject: `No deposit yet, ${dayName}: ${unpaid.length}`,
         body: `Bookings at ${salon.name} tomorrow (${salon.timeZone} time) with a deposit still to pay:\n\n${body}\n`,
       });
     }
-    planned.push(...await insertPlanned(db, rows));
+    planned.push(...(await insertPlanned(db, rows)));
   }
   return planned;
 }

@@ -32,8 +32,10 @@ const HOW_TO_CHANGE = 'To move or cancel, open My bookings in Dwell or call the 
 
 /** What to bring or do, by kind of appointment (common practice for colour work). */
 export function preparation(category: string): string {
-  if (category === 'skin_test') return 'Come with clean, dry skin behind the ear or on the inner arm. Keep the patch dry for 48 hours and tell us at once about any itching, redness or swelling.';
-  if (category === 'consultation') return 'Bring photos of the colour you want, and tell us about every colour, box dye, henna or straightening your hair has had. Come with dry hair, styled as you usually wear it.';
+  if (category === 'skin_test')
+    return 'Come with clean, dry skin behind the ear or on the inner arm. Keep the patch dry for 48 hours and tell us at once about any itching, redness or swelling.';
+  if (category === 'consultation')
+    return 'Bring photos of the colour you want, and tell us about every colour, box dye, henna or straightening your hair has had. Come with dry hair, styled as you usually wear it.';
   return 'Come with dry hair. For long colour sittings, eat beforehand and bring something to read.';
 }
 
@@ -50,7 +52,14 @@ function sittingLines(c: BookingContext): string {
 function calendarFiles(c: BookingContext): MessageAttachment[] {
   return c.sittings.map((s) => ({
     filename: c.sittings.length === 1 ? 'booking.ics' : `sitting-${s.seq}.ics`,
-    content: bookingIcs({ uid: `${c.bookingId}-${s.seq}@dwell`, title: `${c.serviceName} at ${c.salonName}`, description: `${c.serviceName} with ${c.stylistName}`, location: c.address, start: s.start, end: s.end }),
+    content: bookingIcs({
+      uid: `${c.bookingId}-${s.seq}@dwell`,
+      title: `${c.serviceName} at ${c.salonName}`,
+      description: `${c.serviceName} with ${c.stylistName}`,
+      location: c.address,
+      start: s.start,
+      end: s.end,
+    }),
     contentType: 'text/calendar; charset=utf-8; method=PUBLISH',
   }));
 }
@@ -74,7 +83,8 @@ export function bookingMessage(kind: BookingMessageKind, c: BookingContext, wait
   const verb = kind === 'change' ? 'Moved' : 'Booked';
   const summary = `${c.serviceName} with ${c.stylistName} at ${c.salonName}, ${c.address}`;
   if (waitingOnTest) {
-    const note = 'This time is kept for you while your skin test is read. The colour goes ahead only if the test shows no reaction; we will tell you if it cannot.';
+    const note =
+      'This time is kept for you while your skin test is read. The colour goes ahead only if the test shows no reaction; we will tell you if it cannot.';
     return {
       sms: `${c.salonName}: ${c.serviceName} with ${c.stylistName}, ${first} is kept for you, waiting on your skin test result. ${HOW_TO_CHANGE}`,
       subject: `Kept for you, waiting on your skin test: ${c.serviceName}, ${first}`,
@@ -117,7 +127,8 @@ export function skinTestBookedMessage(c: BookingContext): MessageText {
   const at = when(c.sittings[0].start, c.timeZone);
   const lead = c.skinTestLeadHours;
   const what = `A skin test (allergy alert test) puts a small dab of the colour we will use behind your ear or on your inner arm. ${skinTestWords(lead)} So book the colour no sooner than ${lead} hours after this test.`;
-  const reaction = 'If you feel itching, burning, redness or swelling at the patch (or anywhere) before your colour, wash the patch with water, do not have the colour done, and call the salon. If it is severe (swelling of the face, difficulty breathing) get medical help at once.';
+  const reaction =
+    'If you feel itching, burning, redness or swelling at the patch (or anywhere) before your colour, wash the patch with water, do not have the colour done, and call the salon. If it is severe (swelling of the face, difficulty breathing) get medical help at once.';
   return {
     sms: `${c.salonName}: skin test booked, ${at}. It must be read at least ${lead} h before your colour. Any itching, redness or swelling: wash it off and call us; severe reactions: get medical help. ${HOW_TO_CHANGE}`,
     subject: `Skin test booked: ${at}`,

@@ -4,8 +4,20 @@ import type { BookingStatus } from '@shared/schemas/common.schemas';
 import type { MixLog, RepeatSource, WriteMixLog } from '@shared/schemas/mix-log.schemas';
 
 const COLUMNS = [
-  'id', 'sitting_seq', 'bowl_no', 'product_type', 'shade_notes', 'developer_percent', 'ratio', 'grams', 'applied_to',
-  'planned_minutes', 'actual_minutes', 'heat', 'result_notes', 'created_at',
+  'id',
+  'sitting_seq',
+  'bowl_no',
+  'product_type',
+  'shade_notes',
+  'developer_percent',
+  'ratio',
+  'grams',
+  'applied_to',
+  'planned_minutes',
+  'actual_minutes',
+  'heat',
+  'result_notes',
+  'created_at',
 ] as const;
 
 /** One written bowl as stored; the view adds the developer's strength in volumes. */
@@ -14,10 +26,20 @@ type BowlRow = Awaited<ReturnType<ReturnType<typeof bowlsOf>['execute']>>[number
 const bowlsOf = (db: Db, bookingId: string) => db.selectFrom('mix_logs').select(COLUMNS).where('booking_id', '=', bookingId);
 
 const toBowl = (r: BowlRow): StoredBowl => ({
-  id: r.id, sittingSeq: r.sitting_seq, bowlNo: r.bowl_no, productType: r.product_type, shadeNotes: r.shade_notes,
-  developerPercent: r.developer_percent === null ? null : Number(r.developer_percent), ratio: r.ratio, grams: r.grams,
-  appliedTo: r.applied_to, plannedMinutes: r.planned_minutes, actualMinutes: r.actual_minutes, heat: r.heat,
-  resultNotes: r.result_notes, createdAt: r.created_at.toISOString(),
+  id: r.id,
+  sittingSeq: r.sitting_seq,
+  bowlNo: r.bowl_no,
+  productType: r.product_type,
+  shadeNotes: r.shade_notes,
+  developerPercent: r.developer_percent === null ? null : Number(r.developer_percent),
+  ratio: r.ratio,
+  grams: r.grams,
+  appliedTo: r.applied_to,
+  plannedMinutes: r.planned_minutes,
+  actualMinutes: r.actual_minutes,
+  heat: r.heat,
+  resultNotes: r.result_notes,
+  createdAt: r.created_at.toISOString(),
 });
 
 export interface MixLogBooking {
@@ -39,7 +61,15 @@ export async function findBookingForMixLog(db: Db, salonId: string, bookingId: s
     .where('b.salon_id', '=', salonId)
     .where('b.id', '=', bookingId)
     .executeTakeFirst();
-  return row && { id: row.id, clientId: row.client_id, status: row.status, stylistUserId: row.stylist_user_id, maxDeveloperPercent: Number(row.max_developer_percent) };
+  return (
+    row && {
+      id: row.id,
+      clientId: row.client_id,
+      status: row.status,
+      stylistUserId: row.stylist_user_id,
+      maxDeveloperPercent: Number(row.max_developer_percent),
+    }
+  );
 }
 
 /** The salon's maximum developer strength, in percent (strand tests are held to it too). */
@@ -78,10 +108,21 @@ export async function insertMixLogs(db: Db, rows: (WriteMixLog & { salonId: stri
     .insertInto('mix_logs')
     .values(
       rows.map((r) => ({
-        salon_id: r.salonId, booking_id: r.bookingId, sitting_seq: r.sittingSeq, bowl_no: r.bowlNo, product_type: r.productType,
-        shade_notes: r.shadeNotes, developer_percent: r.developerPercent, ratio: r.ratio, grams: JSON.stringify(r.grams),
-        applied_to: r.appliedTo, planned_minutes: r.plannedMinutes, actual_minutes: r.actualMinutes, heat: r.heat,
-        result_notes: r.resultNotes, created_by: r.createdBy,
+        salon_id: r.salonId,
+        booking_id: r.bookingId,
+        sitting_seq: r.sittingSeq,
+        bowl_no: r.bowlNo,
+        product_type: r.productType,
+        shade_notes: r.shadeNotes,
+        developer_percent: r.developerPercent,
+        ratio: r.ratio,
+        grams: JSON.stringify(r.grams),
+        applied_to: r.appliedTo,
+        planned_minutes: r.plannedMinutes,
+        actual_minutes: r.actualMinutes,
+        heat: r.heat,
+        result_notes: r.resultNotes,
+        created_by: r.createdBy,
       })),
     )
     .returning(COLUMNS)

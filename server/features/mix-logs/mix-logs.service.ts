@@ -5,7 +5,16 @@ import { CalculatorError, checkDeveloperStrength, percentToVolume } from '@share
 import { productUse } from '@shared/calculators/product-use';
 import { AppError, notFound } from '@server/lib/app-error';
 import { productCentsPerGram } from '../quote-prices';
-import { findBookingForMixLog, insertMixLogs, listMixLogs, listRepeatSources, listSittingStarts, maxDeveloperPercent, nextBowlNo, type StoredBowl } from './mix-logs.repository';
+import {
+  findBookingForMixLog,
+  insertMixLogs,
+  listMixLogs,
+  listRepeatSources,
+  listSittingStarts,
+  maxDeveloperPercent,
+  nextBowlNo,
+  type StoredBowl,
+} from './mix-logs.repository';
 
 const round = (n: number, places = 1) => Math.round(n * 10 ** places) / 10 ** places;
 const invalid = (field: string, message: string) => new AppError('VALIDATION_FAILED', 400, message, { [field]: message });
@@ -71,7 +80,10 @@ export async function mixLogList(db: Db, user: SessionUser, bookingId: string, n
       seq: s.seq,
       start: s.start.toISOString(),
       started: s.start <= now,
-      ...productUse(logs.filter((l) => l.sittingSeq === s.seq).flatMap((l) => l.grams), costs),
+      ...productUse(
+        logs.filter((l) => l.sittingSeq === s.seq).flatMap((l) => l.grams),
+        costs,
+      ),
     })),
     repeatSources: sources,
   };
@@ -107,9 +119,21 @@ export async function repeatMixLog(db: Db, user: SessionUser, bookingId: string,
   const rows = await insertMixLogs(
     db,
     bowls.map((b, i) => ({
-      sittingSeq: input.intoSitting, bowlNo: first + i, productType: b.productType, shadeNotes: b.shadeNotes, developerPercent: b.developerPercent,
-      ratio: b.ratio, grams: b.grams, appliedTo: b.appliedTo, plannedMinutes: b.plannedMinutes, actualMinutes: null, heat: b.heat, resultNotes: '',
-      salonId: user.salonId, bookingId, createdBy: user.id,
+      sittingSeq: input.intoSitting,
+      bowlNo: first + i,
+      productType: b.productType,
+      shadeNotes: b.shadeNotes,
+      developerPercent: b.developerPercent,
+      ratio: b.ratio,
+      grams: b.grams,
+      appliedTo: b.appliedTo,
+      plannedMinutes: b.plannedMinutes,
+      actualMinutes: null,
+      heat: b.heat,
+      resultNotes: '',
+      salonId: user.salonId,
+      bookingId,
+      createdBy: user.id,
     })),
   );
   return { copied: rows.length, logs: rows.map(toView) };

@@ -40,23 +40,35 @@ export function freeTimesKey(salon: SalonRow, serviceId: string, stylistId: stri
 }
 
 /** Every free start (on the grid) for one service (or one sitting's steps), one stylist or any, over the next three weeks. */
-export async function freeTimes(db: Db, salon: SalonRow, service: Pick<ServiceSummary, 'skill' | 'stepPlan'>, stylistId: string | undefined, from: string | undefined, now: Date, except?: string): Promise<Availability> {
+export async function freeTimes(
+  db: Db,
+  salon: SalonRow,
+  service: Pick<ServiceSummary, 'skill' | 'stepPlan'>,
+  stylistId: string | undefined,
+  from: string | undefined,
+  now: Date,
+  except?: string,
+): Promise<Availability> {
   const zone = salon.time_zone;
   const { fromDay, earliest } = searchStart(salon, from, now);
   const horizon = (days: number) => ({ from: fromDay.toISODate()!, to: fromDay.plus({ days }).toISODate()! });
   // The engine walks day by day and stops at MAX_TIMES, and with one sitting each day's times depend on that day's
   // book alone: a busy salon fills the list within the first week, and loading (and indexing) three weeks of its
   // book for that was most of the request's cost. So the first week is tried first; the rest is read only if needed.
-  const { options, names } = await optionsFor(db, { id: salon.id, timeZone: zone, granularityMinutes: salon.granularity_minutes }, {
-    skill: service.skill,
-    stylistId: stylistId ?? null,
-    plan: service.stepPlan,
-    earliest,
-    horizons: service.stepPlan.sittings.length === 1 ? [horizon(FIRST_DAYS), horizon(ONLINE_DAYS)] : [horizon(ONLINE_DAYS)],
-    limit: MAX_TIMES,
-    spread: 'none',
-    except,
-  });
+  const { options, names } = await optionsFor(
+    db,
+    { id: salon.id, timeZone: zone, granularityMinutes: salon.granularity_minutes },
+    {
+      skill: service.skill,
+      stylistId: stylistId ?? null,
+      plan: service.stepPlan,
+      earliest,
+      horizons: service.stepPlan.sittings.length === 1 ? [horizon(FIRST_DAYS), horizon(ONLINE_DAYS)] : [horizon(ONLINE_DAYS)],
+      limit: MAX_TIMES,
+      spread: 'none',
+      except,
+    },
+  );
   return {
     timeZone: zone,
     times: options.map((o) => {

@@ -14,7 +14,8 @@ export interface IcsInput {
  * No ORGANIZER: RFC 5545 §3.8.4.3 needs a cal-address (mailto:) for it, and the salon has no mailbox here.
  */
 export function bookingIcs(input: IcsInput): string {
-  const utc = (d: Date) => [d.getUTCFullYear(), d.getUTCMonth() + 1, d.getUTCDate(), d.getUTCHours(), d.getUTCMinutes()] as [number, number, number, number, number];
+  const utc = (d: Date) =>
+    [d.getUTCFullYear(), d.getUTCMonth() + 1, d.getUTCDate(), d.getUTCHours(), d.getUTCMinutes()] as [number, number, number, number, number];
   const { error, value } = createEvent({
     uid: input.uid,
     title: input.title,

@@ -32,7 +32,7 @@ export function cautionsFor(service: { category: string; needsSkinTest: boolean 
   items.push({
     id: 'professional-judgement',
     title: 'Licensed judgement and local rules',
-    text: 'Your stylist may stop or change a service to protect your skin and hair. Dwell does not replace a licensed professional\'s judgement or local regulations.',
+    text: "Your stylist may stop or change a service to protect your skin and hair. Dwell does not replace a licensed professional's judgement or local regulations.",
   });
   return { version: `v2:${items.map((i) => i.id.slice(0, 3)).join('-')}`, items };
 }

@@ -36,10 +36,14 @@ export async function confirmationSends(db: Kysely<Database>, user: SessionUser,
   for (const row of rows) if (!latest.has(row.channel)) latest.set(row.channel, row);
   const sends = [...latest.values()].map((row) => ({
     channel: row.channel,
-    status: row.status === 'sent' ? 'sent' as const
-      : row.status === 'failed' ? 'failed' as const
-      : row.status === 'queued' && row.sendAt > now ? 'waiting' as const
-      : 'sending' as const,
+    status:
+      row.status === 'sent'
+        ? ('sent' as const)
+        : row.status === 'failed'
+          ? ('failed' as const)
+          : row.status === 'queued' && row.sendAt > now
+            ? ('waiting' as const)
+            : ('sending' as const),
     sendAt: row.sendAt.toISOString(),
     sentAt: row.sentAt?.toISOString() ?? null,
   }));

@@ -19,7 +19,11 @@ export async function assertHoldSkinTest(db: Db, salon: Salon, hold: HoldRecord,
   if (planNeedsSkinTest(plan, salon.skinTestFamilies, hold.needsSkinTest)) {
     const reaction = (await findHairHistory(db, clientId)).answers?.previousReaction;
     if (reaction?.answer === 'yes') {
-      throw new AppError('SKIN_TEST', 409, 'You told us you have reacted to hair colour before, so this colour cannot be booked online. Please book a consultation: the salon will advise on what is safe for you.');
+      throw new AppError(
+        'SKIN_TEST',
+        409,
+        'You told us you have reacted to hair colour before, so this colour cannot be booked online. Please book a consultation: the salon will advise on what is safe for you.',
+      );
     }
   }
   const starts = await sittingStarts(db, hold.id);

@@ -6,9 +6,17 @@ import { AppError } from '@server/lib/app-error';
 export function holdView(h: HoldRecord, now = new Date()): Hold {
   const lapsed = h.status === 'held' && h.heldUntil !== null && h.heldUntil <= now;
   return {
-    holdId: h.id, status: h.status === 'held' ? (lapsed ? 'lapsed' : 'held') : 'booked', heldUntil: h.heldUntil?.toISOString() ?? null,
-    salonName: h.salonName, serviceName: h.serviceName, stylistName: h.stylistName, start: h.start.toISOString(), end: h.end.toISOString(),
-    timeZone: h.timeZone, depositCents: h.depositCents, currency: h.currency,
+    holdId: h.id,
+    status: h.status === 'held' ? (lapsed ? 'lapsed' : 'held') : 'booked',
+    heldUntil: h.heldUntil?.toISOString() ?? null,
+    salonName: h.salonName,
+    serviceName: h.serviceName,
+    stylistName: h.stylistName,
+    start: h.start.toISOString(),
+    end: h.end.toISOString(),
+    timeZone: h.timeZone,
+    depositCents: h.depositCents,
+    currency: h.currency,
   };
 }
 

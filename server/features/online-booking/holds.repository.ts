@@ -39,9 +39,28 @@ export async function findHold(db: Db, id: string): Promise<HoldRecord | undefin
     .innerJoin('staff as st', 'st.id', 'b.stylist_id')
     .innerJoin('sittings as si', (j) => j.onRef('si.booking_id', '=', 'b.id').on('si.seq', '=', 1))
     .select([
-      'b.id', 'b.status', 'b.stylist_id', 'b.held_until', 'b.hold_secret_hash', 'b.client_id', 'b.deposit_cents', 'b.salon_id', 'b.service_id', 'b.step_plan',
-      'b.created_at', 'sa.slug as salonSlug', 'sa.name as salonName', 'sa.time_zone as timeZone', 'sa.currency', 'sa.address', 'sv.name as serviceName', 'sv.needs_skin_test', 'sv.category',
-      'st.display_name as stylistName', sql<Date>`lower(si.during)`.as('start'), sql<Date>`upper(si.during)`.as('end'),
+      'b.id',
+      'b.status',
+      'b.stylist_id',
+      'b.held_until',
+      'b.hold_secret_hash',
+      'b.client_id',
+      'b.deposit_cents',
+      'b.salon_id',
+      'b.service_id',
+      'b.step_plan',
+      'b.created_at',
+      'sa.slug as salonSlug',
+      'sa.name as salonName',
+      'sa.time_zone as timeZone',
+      'sa.currency',
+      'sa.address',
+      'sv.name as serviceName',
+      'sv.needs_skin_test',
+      'sv.category',
+      'st.display_name as stylistName',
+      sql<Date>`lower(si.during)`.as('start'),
+      sql<Date>`upper(si.during)`.as('end'),
     ])
     .where('b.id', '=', id)
     .executeTakeFirst();
@@ -125,16 +144,37 @@ export async function confirmHoldRow(db: Db, id: string, now: Date): Promise<boo
 
 export async function recordPayment(
   db: Db,
-  p: { salonId: string; bookingId: string; clientId: string | null; providerRef: string | null; amountCents: number; currency: string; status: 'succeeded' | 'declined' | 'refunded'; message?: string },
+  p: {
+    salonId: string;
+    bookingId: string;
+    clientId: string | null;
+    providerRef: string | null;
+    amountCents: number;
+    currency: string;
+    status: 'succeeded' | 'declined' | 'refunded';
+    message?: string;
+  },
 ): Promise<void> {
   await db
     .insertInto('payments')
-    .values({ salon_id: p.salonId, booking_id: p.bookingId, client_id: p.clientId, provider_ref: p.providerRef, amount_cents: p.amountCents, currency: p.currency, status: p.status, message: p.message ?? '' })
+    .values({
+      salon_id: p.salonId,
+      booking_id: p.bookingId,
+      client_id: p.clientId,
+      provider_ref: p.providerRef,
+      amount_cents: p.amountCents,
+      currency: p.currency,
+      status: p.status,
+      message: p.message ?? '',
+    })
     .execute();
 }
 
 export async function insertCautionAcceptance(db: Db, bookingId: string, userId: string, version: string, texts: unknown): Promise<void> {
-  await db.insertInto('caution_acceptances').values({ booking_id: bookingId, user_id: userId, version, texts: JSON.stringify(texts) }).execute();
+  await db
+    .insertInto('caution_acceptances')
+    .values({ booking_id: bookingId, user_id: userId, version, texts: JSON.stringify(texts) })
+    .execute();
 }
 
 export async function hasAcceptedCautions(db: Db, bookingId: string, version: string): Promise<boolean> {

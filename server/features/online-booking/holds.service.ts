@@ -34,7 +34,17 @@ export async function createHold(db: Kysely<Database>, jobs: JobQueue, user: Ses
   const heldUntil = new Date(now.getTime() + salon.holdMinutes * 60_000);
   const id = await db.transaction().execute(async (trx) => {
     await lockStylists(trx, [body.stylistId]);
-    const bookingId = await bookAt(trx, { salon, clientId: null, service, plan: service.stepPlan, stylistId: body.stylistId, start: new Date(body.start), actorUserId: null, now, status: 'held' });
+    const bookingId = await bookAt(trx, {
+      salon,
+      clientId: null,
+      service,
+      plan: service.stepPlan,
+      stylistId: body.stylistId,
+      start: new Date(body.start),
+      actorUserId: null,
+      now,
+      status: 'held',
+    });
     await markHold(trx, bookingId, heldUntil, sha256(secret));
     return bookingId;
   });

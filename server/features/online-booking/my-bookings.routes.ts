@@ -6,7 +6,10 @@ import { confirmationSends } from './confirmation';
 
 export function registerMyBookingRoutes({ table, db }: AppDeps): void {
   apiRoute(table, onlineBookingApi.calendarFile, async ({ user, params, res }) => {
-    res.type('text/calendar').attachment('booking.ics').send(await myBookingCalendarFile(db, user, params.id));
+    res
+      .type('text/calendar')
+      .attachment('booking.ics')
+      .send(await myBookingCalendarFile(db, user, params.id));
   });
   apiRoute(table, onlineBookingApi.confirmation, ({ user, params }) => confirmationSends(db, user, params.id, new Date()));
   apiRoute(table, onlineBookingApi.myCancelTerms, ({ user, params }) => cancelTerms(db, user, params.id, new Date()));

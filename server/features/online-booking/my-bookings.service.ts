@@ -49,7 +49,8 @@ export async function cancelTerms(db: Kysely<Database>, user: SessionUser, id: s
 export async function assertClientMovable(db: Kysely<Database>, user: SessionUser, id: string, now: Date) {
   const { hold, salon } = await ownBooking(db, user, id);
   const service = await findService(db, salon.id, hold.serviceId);
-  if (!service || service.stepPlan.sittings.length !== 1) throw new AppError('NOT_BOOKABLE', 409, 'Please call the salon to move an appointment with several sittings.');
+  if (!service || service.stepPlan.sittings.length !== 1)
+    throw new AppError('NOT_BOOKABLE', 409, 'Please call the salon to move an appointment with several sittings.');
   if (hold.status !== 'booked') throw new AppError('NOT_BOOKABLE', 409, 'Only booked appointments can be moved.');
   if (hold.start <= now) throw new AppError('NOT_BOOKABLE', 409, 'This appointment has already started.');
   return { hold, salon, service, startsIn: DateTime.fromJSDate(hold.start).diff(DateTime.fromJSDate(now), 'hours').hours };
@@ -63,7 +64,14 @@ export function insideDepositWindow(depositCents: number, start: Date, now: Date
 /** One of the client's bookings as a calendar file (RFC 5545): its first sitting, at the salon. */
 export async function myBookingCalendarFile(db: Kysely<Database>, user: SessionUser, id: string): Promise<string> {
   const { hold, salon } = await ownBooking(db, user, id);
-  return bookingIcs({ uid: `${hold.id}@dwell`, title: `${hold.serviceName} at ${salon.name}`, description: `${hold.serviceName} with ${hold.stylistName}`, location: salon.address, start: hold.start, end: hold.end });
+  return bookingIcs({
+    uid: `${hold.id}@dwell`,
+    title: `${hold.serviceName} at ${salon.name}`,
+    description: `${hold.serviceName} with ${hold.stylistName}`,
+    location: salon.address,
+    start: hold.start,
+    end: hold.end,
+  });
 }
 
 /** The client cancels their own booking; the deposit policy decides as at the desk. */
@@ -82,14 +90,23 @@ export async function myMoveTimes(db: Kysely<Database>, user: SessionUser, id: s
   const { salon, service, hold } = await assertClientMovable(db, user, id, now);
   const times = await freeTimes(db, searchedSalon(salon), service, hold.stylistId, from, now, id);
   const elsewhere = (start: Date) => start.getTime() !== hold.start.getTime();
-  return { ...times, times: times.times.filter((t) => elsewhere(new Date(t.start)) && !insideDepositWindow(hold.depositCents, new Date(t.start), now, salon.cancellationWindowHours)) };
+  return {
+    ...times,
+    times: times.times.filter(
+      (t) => elsewhere(new Date(t.start)) && !insideDepositWindow(hold.depositCents, new Date(t.start), now, salon.cancellationWindowHours),
+    ),
+  };
 }
 
 /** The client moves their own booking (one sitting), never into the cancellation window of its deposit. */
 export async function moveMyBooking(db: Kysely<Database>, user: SessionUser, id: string, start: Date, now: Date): Promise<BookingView> {
   const { salon, hold } = await assertClientMovable(db, user, id, now);
   if (insideDepositWindow(hold.depositCents, start, now, salon.cancellationWindowHours)) {
-    throw new AppError('NOT_BOOKABLE', 409, `Times less than ${salon.cancellationWindowHours} hours away would make your deposit non-refundable; please call the salon to move this close.`);
+    throw new AppError(
+      'NOT_BOOKABLE',
+      409,
+      `Times less than ${salon.cancellationWindowHours} hours away would make your deposit non-refundable; please call the salon to move this close.`,
+    );
   }
   await moveSitting(db, salon, user.id, { bookingId: id, sitting: 1, start }, now);
   return deskBookingView(db, salon.id, salon.timeZone, id);

@@ -22,7 +22,11 @@ import { formatFor } from '@shared/format/locale';
 /** The refusal of a second hold, naming the one the client already has (when known) so they can go back to it. */
 export function holdOpenError(hold?: Pick<HoldRecord, 'serviceName' | 'start' | 'timeZone'>): AppError {
   const which = hold ? `: ${hold.serviceName} on ${formatDateTime(hold.start, formatFor(hold.timeZone), { year: false })}` : '';
-  return new AppError('HOLD_OPEN', 409, `You already have a time held${which}. One time can be held at a time: finish booking it, or release it to pick another.`);
+  return new AppError(
+    'HOLD_OPEN',
+    409,
+    `You already have a time held${which}. One time can be held at a time: finish booking it, or release it to pick another.`,
+  );
 }
 
 /**

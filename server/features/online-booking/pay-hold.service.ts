@@ -26,7 +26,14 @@ type Deps = { payments: Payments; mailer: Mailer; sms: SmsSender };
  * in one statement, the hold becomes booked only if it is still held. A payment that arrives after the hold
  * lapsed is refunded at once, so money and bookings always agree. Answers the booking as it stands then.
  */
-export async function payHold(db: Kysely<Database>, deps: Deps, user: SessionUser, id: string, body: z.infer<typeof PayHoldSchema>, now: Date): Promise<BookingView> {
+export async function payHold(
+  db: Kysely<Database>,
+  deps: Deps,
+  user: SessionUser,
+  id: string,
+  body: z.infer<typeof PayHoldSchema>,
+  now: Date,
+): Promise<BookingView> {
   const hold = await ownHold(db, user, id, body.secret, now);
   const booking = () => deskBookingView(db, hold.salonId, hold.timeZone, hold.id);
   if (hold.status !== 'held') return booking(); // paid already (a retried request)
@@ -39,7 +46,13 @@ export async function payHold(db: Kysely<Database>, deps: Deps, user: SessionUse
   let paymentRef: string | null = null;
   if (hold.depositCents > 0) {
     if (!body.card) throw new AppError('VALIDATION_FAILED', 400, 'Some fields need attention.', { card: 'Enter a card for the deposit.' });
-    const charge = await deps.payments.charge({ amountCents: hold.depositCents, currency: salon.currency, card: body.card, idempotencyKey: `deposit:${id}:${body.idempotencyKey}`, metadata: { booking: id } });
+    const charge = await deps.payments.charge({
+      amountCents: hold.depositCents,
+      currency: salon.currency,
+      card: body.card,
+      idempotencyKey: `deposit:${id}:${body.idempotencyKey}`,
+      metadata: { booking: id },
+    });
     if (!charge.ok) {
       await recordPayment(db, { ...record, providerRef: charge.paymentIntentId, status: 'declined', message: charge.message });
       const until = hold.heldUntil ? formatTime(hold.heldUntil, formatFor(hold.timeZone), { zoneName: true }) : 'the hold runs out';
@@ -56,7 +69,14 @@ export async function payHold(db: Kysely<Database>, deps: Deps, user: SessionUse
     throw new AppError('HOLD_LAPSED', 409, 'The time was released before the payment arrived; your payment has been refunded. Please pick a time again.');
   }
   if (paymentRef) await recordPayment(db, { ...record, providerRef: paymentRef, status: 'succeeded' });
-  await writeAudit(db, { salonId: salon.id, actorUserId: user.id, entity: 'booking', entityId: id, action: 'booked online', after: { status: 'booked', deposit: hold.depositCents } });
+  await writeAudit(db, {
+    salonId: salon.id,
+    actorUserId: user.id,
+    entity: 'booking',
+    entityId: id,
+    action: 'booked online',
+    after: { status: 'booked', deposit: hold.depositCents },
+  });
   await sendConfirmation(db, deps, id, new Date());
   return booking();
 }

@@ -12,11 +12,7 @@ import { findSalonBySlug } from './public-salon.repository';
 /** The salon's public page: services, hours and policies. Nothing about any client. */
 export async function publicSalon(db: Db, slug: string): Promise<PublicSalon> {
   const salon = await findSalonBySlug(db, slug);
-  const [hours, services, stylists] = await Promise.all([
-    listSalonHours(db, salon.id),
-    listServices(db, salon.id),
-    listStylistDetails(db, salon.id),
-  ]);
+  const [hours, services, stylists] = await Promise.all([listSalonHours(db, salon.id), listServices(db, salon.id), listStylistDetails(db, salon.id)]);
   const families = salon.skinTestFamilies;
   const today = todayIn(salon.timeZone, new Date());
   const deposits = services.filter((s) => s.depositCents > 0).map((s) => `${s.name}: ${formatMoney(s.depositCents, salon.currency)}`);
@@ -42,7 +38,10 @@ export async function publicSalon(db: Db, slug: string): Promise<PublicSalon> {
       name: s.name,
       description: s.description,
       category: s.category,
-      typicalMinutes: s.stepPlan.sittings.reduce((t, sit) => t + sit.steps.reduce((m, st) => m + (st.kind === 'developing' ? Math.round((st.minMinutes + st.maxMinutes) / 2) : st.minutes), 0), 0),
+      typicalMinutes: s.stepPlan.sittings.reduce(
+        (t, sit) => t + sit.steps.reduce((m, st) => m + (st.kind === 'developing' ? Math.round((st.minMinutes + st.maxMinutes) / 2) : st.minutes), 0),
+        0,
+      ),
       priceCents: s.priceCents,
       priceIsFrom: s.priceIsFrom,
       depositCents: s.depositCents,

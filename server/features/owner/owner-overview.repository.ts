@@ -12,8 +12,20 @@ export interface SalonCounts {
 /** How many stylists (rows of staff), chairs, basins, services and clients the salon has. */
 export async function salonCounts(db: Db, salonId: string): Promise<SalonCounts> {
   const count = async (table: 'staff' | 'chairs' | 'basins' | 'services' | 'clients') =>
-    (await db.selectFrom(table).select(sql<number>`count(*)::int`.as('n')).where('salon_id', '=', salonId).executeTakeFirstOrThrow()).n;
-  const [stylists, chairs, basins, services, clients] = await Promise.all([count('staff'), count('chairs'), count('basins'), count('services'), count('clients')]);
+    (
+      await db
+        .selectFrom(table)
+        .select(sql<number>`count(*)::int`.as('n'))
+        .where('salon_id', '=', salonId)
+        .executeTakeFirstOrThrow()
+    ).n;
+  const [stylists, chairs, basins, services, clients] = await Promise.all([
+    count('staff'),
+    count('chairs'),
+    count('basins'),
+    count('services'),
+    count('clients'),
+  ]);
   return { stylists, chairs, basins, services, clients };
 }
 

@@ -45,7 +45,11 @@ export async function cleanImage(input: Buffer): Promise<CleanImage> {
     .rotate()
     .resize({ width: PHOTO_LIMITS.longSidePx, height: PHOTO_LIMITS.longSidePx, fit: 'inside', withoutEnlargement: true });
   const encoded =
-    format === 'png' ? pipeline.png({ compressionLevel: 9 }) : format === 'webp' ? pipeline.webp({ quality: 85 }) : pipeline.jpeg({ quality: 85, mozjpeg: true });
+    format === 'png'
+      ? pipeline.png({ compressionLevel: 9 })
+      : format === 'webp'
+        ? pipeline.webp({ quality: 85 })
+        : pipeline.jpeg({ quality: 85, mozjpeg: true });
   try {
     const { data, info } = await encoded.toBuffer({ resolveWithObject: true });
     return { bytes: data, format, mime: MIME[format], width: info.width, height: info.height };

@@ -72,11 +72,33 @@ export function findClientBooking(db: Db, salonId: string, clientId: string, boo
 
 export async function insertPhotos(
   db: Db,
-  rows: { salonId: string; clientId: string; bookingId: string | null; kind: PhotoKind; key: string; mime: string; bytes: number; width: number; height: number }[],
+  rows: {
+    salonId: string;
+    clientId: string;
+    bookingId: string | null;
+    kind: PhotoKind;
+    key: string;
+    mime: string;
+    bytes: number;
+    width: number;
+    height: number;
+  }[],
 ) {
   return db
     .insertInto('client_photos')
-    .values(rows.map((r) => ({ salon_id: r.salonId, client_id: r.clientId, booking_id: r.bookingId, kind: r.kind, storage_key: r.key, mime: r.mime, bytes: r.bytes, width: r.width, height: r.height })))
+    .values(
+      rows.map((r) => ({
+        salon_id: r.salonId,
+        client_id: r.clientId,
+        booking_id: r.bookingId,
+        kind: r.kind,
+        storage_key: r.key,
+        mime: r.mime,
+        bytes: r.bytes,
+        width: r.width,
+        height: r.height,
+      })),
+    )
     .returning(COLUMNS)
     .execute()
     .then((inserted) => inserted.map(toPhoto));

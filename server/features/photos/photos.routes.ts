@@ -17,13 +17,18 @@ const uploadLimiter = rateLimited({
 
 export function registerPhotoRoutes({ table, db, storage }: AppDeps): void {
   uploadRoute(table, photosApi.addMine, ({ user, fields, files }) => addPhotos(db, storage, user, 'me', fields, files), [uploadLimiter]);
-  uploadRoute(table, photosApi.addToClient, ({ user, params, fields, files }) => addPhotos(db, storage, user, { clientId: params.id }, fields, files), [uploadLimiter]);
+  uploadRoute(table, photosApi.addToClient, ({ user, params, fields, files }) => addPhotos(db, storage, user, { clientId: params.id }, fields, files), [
+    uploadLimiter,
+  ]);
   apiRoute(table, photosApi.mine, ({ user }) => photoList(db, user, 'me'));
   apiRoute(table, photosApi.ofClient, ({ user, params }) => photoList(db, user, { clientId: params.id }));
   apiRoute(table, photosApi.file, async ({ user, params, res }) => {
     const { mime, bytes } = await photoFile(db, storage, user, params.id);
     // Private: personal photos must not sit in shared caches; nosniff so the bytes are only ever an image.
-    res.status(200).set({ 'Content-Type': mime, 'Cache-Control': 'private, max-age=3600', 'X-Content-Type-Options': 'nosniff', 'Content-Disposition': 'inline' }).end(bytes);
+    res
+      .status(200)
+      .set({ 'Content-Type': mime, 'Cache-Control': 'private, max-age=3600', 'X-Content-Type-Options': 'nosniff', 'Content-Disposition': 'inline' })
+      .end(bytes);
   });
   apiRoute(table, photosApi.remove, ({ user, params }) => removePhoto(db, storage, user, params.id));
 }

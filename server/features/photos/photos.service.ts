@@ -66,7 +66,15 @@ export async function removePhoto(db: Db, storage: Storage, user: SessionUser, i
   const photo = await visiblePhoto(db, user, id);
   await db.transaction().execute(async (trx) => {
     for (const test of await strandTestsShowingPhoto(trx, photo.id)) {
-      await writeAudit(trx, { salonId: test.salonId, actorUserId: user.id, entity: 'strand_test', entityId: test.id, action: 'photo removed', before: { photoId: photo.id }, after: { photoId: null } });
+      await writeAudit(trx, {
+        salonId: test.salonId,
+        actorUserId: user.id,
+        entity: 'strand_test',
+        entityId: test.id,
+        action: 'photo removed',
+        before: { photoId: photo.id },
+        after: { photoId: null },
+      });
     }
     await deletePhoto(trx, photo.id);
   });

@@ -6,7 +6,12 @@ import { placedOption } from './placed-option';
 
 const plan: StepPlan = {
   sittings: [
-    { steps: [{ kind: 'hands_on', label: 'Apply lightener', product: 'lightener', minutes: 20 }, { kind: 'developing', label: 'Lightener lifts', product: 'lightener', minMinutes: 30, maxMinutes: 40 }] },
+    {
+      steps: [
+        { kind: 'hands_on', label: 'Apply lightener', product: 'lightener', minutes: 20 },
+        { kind: 'developing', label: 'Lightener lifts', product: 'lightener', minMinutes: 30, maxMinutes: 40 },
+      ],
+    },
     { daysAfterPrevious: { min: 1, max: 3 }, steps: [{ kind: 'basin', label: 'Rinse and tone', product: 'toner_direct', minutes: 15 }] },
   ],
 };
@@ -16,16 +21,32 @@ const at = (iso: string) => new Date(iso);
 describe('the engine request the planning port sends', () => {
   it('tags every step with its place in the plan and its label, and the engine hands both back', () => {
     const sittings = toEngineSittings(plan, ZONE);
-    expect(sittings.map((s) => s.steps.map((st) => [st.id, st.label]))).toEqual([[['1.1', 'Apply lightener'], ['1.2', 'Lightener lifts']], [['2.1', 'Rinse and tone']]]);
+    expect(sittings.map((s) => s.steps.map((st) => [st.id, st.label]))).toEqual([
+      [
+        ['1.1', 'Apply lightener'],
+        ['1.2', 'Lightener lifts'],
+      ],
+      [['2.1', 'Rinse and tone']],
+    ]);
     const daily = [{ rrule: 'FREQ=DAILY', start: '09:00', end: '17:00' }];
-    const answer = planOptions(parseScenario({
-      timeZone: ZONE, granularityMinutes: 5, horizon: { from: '2027-06-01', to: '2027-06-08' }, salonHours: daily,
-      stylists: [{ id: 'ana', skills: ['colour'], hours: daily }], chairs: [{ id: 'c1' }], basins: [{ id: 'b1' }],
-      request: { skill: 'colour', stylist: null, earliest: '2027-06-01T09:00', sittings, limit: 1, spread: 'day' },
-    }));
+    const answer = planOptions(
+      parseScenario({
+        timeZone: ZONE,
+        granularityMinutes: 5,
+        horizon: { from: '2027-06-01', to: '2027-06-08' },
+        salonHours: daily,
+        stylists: [{ id: 'ana', skills: ['colour'], hours: daily }],
+        chairs: [{ id: 'c1' }],
+        basins: [{ id: 'b1' }],
+        request: { skill: 'colour', stylist: null, earliest: '2027-06-01T09:00', sittings, limit: 1, spread: 'day' },
+      }),
+    );
     const placed = placedOption(answer.options[0]);
     expect(placed.sittings.map((s) => s.steps.map((st) => [st.id, st.kind, st.label]))).toEqual([
-      [['1.1', 'hands_on', 'Apply lightener'], ['1.2', 'developing', 'Lightener lifts']],
+      [
+        ['1.1', 'hands_on', 'Apply lightener'],
+        ['1.2', 'developing', 'Lightener lifts'],
+      ],
       [['2.1', 'basin', 'Rinse and tone']],
     ]);
   });

@@ -85,7 +85,14 @@ export function toBookingOption(option: PlacedOption, names: Names, skinTest: Bo
   const sittings = option.sittings.map((s) => {
     const steps = s.steps.map((st) => {
       if (st.kind === 'developing') handsFreeMinutes += minutesBetween(st.start, st.end);
-      return { kind: st.kind, label: st.label, start: st.start, end: st.end, basinId: st.basin, basinName: st.basin ? (names.basins.get(st.basin) ?? null) : null };
+      return {
+        kind: st.kind,
+        label: st.label,
+        start: st.start,
+        end: st.end,
+        basinId: st.basin,
+        basinName: st.basin ? (names.basins.get(st.basin) ?? null) : null,
+      };
     });
     const start = steps[0].start;
     const end = steps[steps.length - 1].end;

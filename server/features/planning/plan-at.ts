@@ -44,10 +44,15 @@ export function planExactlyAt(calendars: Scenario, req: ExactRequest): ExactAnsw
   const plan = ask(calendars, req);
   if (plan) return { plan: placedOption(plan) };
   if (!ask({ ...calendars, bookings: [] }, req)) {
-    return { reason: "That time is outside the salon's opening hours, the stylist's working hours, or falls in their time off (or the later sittings cannot fit their day range)." };
+    return {
+      reason:
+        "That time is outside the salon's opening hours, the stylist's working hours, or falls in their time off (or the later sittings cannot fit their day range).",
+    };
   }
   if (!ask({ ...calendars, bookings: calendars.bookings.filter((b) => b.stylist === req.stylistId) }, req)) {
-    return { reason: 'The stylist is busy then: their hands are taken by another client, or they already have as many clients in chairs as they take at once.' };
+    return {
+      reason: 'The stylist is busy then: their hands are taken by another client, or they already have as many clients in chairs as they take at once.',
+    };
   }
   return { reason: 'No chair (or basin, for the rinse) is free for the whole sitting at that time.' };
 }

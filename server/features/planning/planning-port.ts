@@ -7,10 +7,30 @@
  */
 import { DateTime } from 'luxon';
 import type { Db } from '@server/db/database';
-import { breakDownOccupancy, findFreeStylists, findWindows, MAX_HORIZON_DAYS, planOptions, type HandsFreeWindow, type OccupancyBreakdown, type Option, type Scenario } from '@shared/engine/engine';
+import {
+  breakDownOccupancy,
+  findFreeStylists,
+  findWindows,
+  MAX_HORIZON_DAYS,
+  planOptions,
+  type HandsFreeWindow,
+  type OccupancyBreakdown,
+  type Option,
+  type Scenario,
+} from '@shared/engine/engine';
 import type { StepPlan } from '@shared/schemas/step-plan.schemas';
 import { AppError } from '@server/lib/app-error';
-import { calendarsOf, extendSalonBook, loadSalonBook, loadSalonSetup, type BookOptions, type Horizon, type PlanningSalon, type SalonBook, type SalonSetup } from './salon-calendars.repository';
+import {
+  calendarsOf,
+  extendSalonBook,
+  loadSalonBook,
+  loadSalonSetup,
+  type BookOptions,
+  type Horizon,
+  type PlanningSalon,
+  type SalonBook,
+  type SalonSetup,
+} from './salon-calendars.repository';
 import { horizonFor, localEarliest, toEngineSittings, type Names, type StartLimit } from './engine-request';
 import { planBetween, planExactlyAt, type ExactRequest } from './plan-at';
 import { placedOption, type PlacedOption } from './placed-option';
@@ -87,7 +107,13 @@ export async function exactPlan(db: Db, salon: PlanningSalon, placements: readon
   if (placements.length === 0) return [];
   const setup = await loadSalonSetup(db, salon.id);
   const localDate = (d: Date) => DateTime.fromJSDate(d, { zone: salon.timeZone }).toISODate()!;
-  const calendars = await booksFor(db, salon, setup, placements.map((p) => horizonFor(localDate(p.start), p.plan, 1)), { except });
+  const calendars = await booksFor(
+    db,
+    salon,
+    setup,
+    placements.map((p) => horizonFor(localDate(p.start), p.plan, 1)),
+    { except },
+  );
   return placements.map((p, i): PlacementAnswer => {
     const stylist = setup.stylists.find((s) => s.id === p.stylistId);
     if (!stylist) throw noSuchStylist();
@@ -132,12 +158,22 @@ export interface TakeOverAsk {
 export async function freeStylists(db: Db, salon: PlanningSalon, asks: readonly TakeOverAsk[]): Promise<Array<Array<{ id: string; name: string }>>> {
   const setup = await loadSalonSetup(db, salon.id);
   const names = namesOf(setup).stylists;
-  const calendars = await booksFor(db, salon, setup, asks.map((a) => a.horizon), {});
+  const calendars = await booksFor(
+    db,
+    salon,
+    setup,
+    asks.map((a) => a.horizon),
+    {},
+  );
   return asks.map((ask, i) => {
     const mine = new Set(ask.sittingIds);
     const all = calendars[i].bookings;
     const others = { ...calendars[i], bookings: all.filter((b) => !mine.has(b.id)) };
-    return findFreeStylists(others, ask.skill, all.filter((b) => mine.has(b.id))).map((id) => ({ id, name: names.get(id) ?? id }));
+    return findFreeStylists(
+      others,
+      ask.skill,
+      all.filter((b) => mine.has(b.id)),
+    ).map((id) => ({ id, name: names.get(id) ?? id }));
   });
 }
 

@@ -73,7 +73,14 @@ export async function loadSalonSetup(db: Db, salonId: string): Promise<SalonSetu
         's.display_name as name',
         's.skills',
         's.max_clients_at_once',
-        jsonArrayFrom(eb.selectFrom('staff_hours as h').select(['h.rrule', 'h.start_time', 'h.end_time']).whereRef('h.staff_id', '=', 's.id').orderBy('h.start_time').orderBy('h.id')).as('hours'),
+        jsonArrayFrom(
+          eb
+            .selectFrom('staff_hours as h')
+            .select(['h.rrule', 'h.start_time', 'h.end_time'])
+            .whereRef('h.staff_id', '=', 's.id')
+            .orderBy('h.start_time')
+            .orderBy('h.id'),
+        ).as('hours'),
       ])
       .where('s.salon_id', '=', salonId)
       .where('s.active', '=', true)
@@ -97,7 +104,13 @@ export async function loadSalonSetup(db: Db, salonId: string): Promise<SalonSetu
 }
 
 /** The book over a horizon for the setup's stylists and units (time off and closures cut to the horizon). */
-export async function loadSalonBook(db: Db, salon: PlanningSalon, setup: SalonSetup, horizon: Horizon, { except, holds = true }: BookOptions = {}): Promise<SalonBook> {
+export async function loadSalonBook(
+  db: Db,
+  salon: PlanningSalon,
+  setup: SalonSetup,
+  horizon: Horizon,
+  { except, holds = true }: BookOptions = {},
+): Promise<SalonBook> {
   const zone = salon.timeZone;
   const from = DateTime.fromISO(horizon.from, { zone }).toJSDate();
   const to = DateTime.fromISO(horizon.to, { zone }).toJSDate();
@@ -108,7 +121,11 @@ export async function loadSalonBook(db: Db, salon: PlanningSalon, setup: SalonSe
       ? []
       : db
           .selectFrom('time_off')
-          .select(['staff_id', sql<Date>`greatest(lower(during), ${from}::timestamptz)`.as('start'), sql<Date>`least(upper(during), ${to}::timestamptz)`.as('end')])
+          .select([
+            'staff_id',
+            sql<Date>`greatest(lower(during), ${from}::timestamptz)`.as('start'),
+            sql<Date>`least(upper(during), ${to}::timestamptz)`.as('end'),
+          ])
           .where('staff_id', 'in', staffIds)
           .where(sql<boolean>`during && ${range}`)
           .execute(),
@@ -117,7 +134,15 @@ export async function loadSalonBook(db: Db, salon: PlanningSalon, setup: SalonSe
       .innerJoin('sittings as si', 'si.id', 'st.sitting_id')
       .innerJoin('bookings as b', 'b.id', 'si.booking_id')
       // UTC minutes (cut to the minute, as the wall-clock text is) as plain integers: cheap to send and parse.
-      .select(['si.id as sittingId', 'b.stylist_id', 'si.chair_id', 'st.kind', 'st.basin_id', sql<number>`floor(extract(epoch from lower(st.during)) / 60)::int`.as('start'), sql<number>`floor(extract(epoch from upper(st.during)) / 60)::int`.as('end')])
+      .select([
+        'si.id as sittingId',
+        'b.stylist_id',
+        'si.chair_id',
+        'st.kind',
+        'st.basin_id',
+        sql<number>`floor(extract(epoch from lower(st.during)) / 60)::int`.as('start'),
+        sql<number>`floor(extract(epoch from upper(st.during)) / 60)::int`.as('end'),
+      ])
       .where('b.salon_id', '=', salon.id)
       .where('st.live', '=', true)
       .where('b.id', '!=', except ?? '00000000-0000-0000-0000-000000000000')
@@ -128,7 +153,12 @@ export async function loadSalonBook(db: Db, salon: PlanningSalon, setup: SalonSe
       .execute(),
     db
       .selectFrom('out_of_service')
-      .select(['chair_id', 'basin_id', sql<Date>`greatest(lower(during), ${from}::timestamptz)`.as('start'), sql<Date>`least(upper(during), ${to}::timestamptz)`.as('end')])
+      .select([
+        'chair_id',
+        'basin_id',
+        sql<Date>`greatest(lower(during), ${from}::timestamptz)`.as('start'),
+        sql<Date>`least(upper(during), ${to}::timestamptz)`.as('end'),
+      ])
       .where('salon_id', '=', salon.id)
       .where(sql<boolean>`during && ${range}`)
       .execute(),
@@ -155,7 +185,12 @@ export async function loadSalonBook(db: Db, salon: PlanningSalon, setup: SalonSe
     booking.steps.push(s.kind === 'basin' ? { kind: 'basin', ...times, basin: s.basin_id! } : { kind: s.kind, ...times });
     bookings.set(s.sittingId, booking);
   }
-  return { horizon, timeOff: byOwner(timeOff, (t) => t.staff_id), outOfService: byOwner(closures, (c) => c.chair_id ?? c.basin_id), bookings: [...bookings.values()] };
+  return {
+    horizon,
+    timeOff: byOwner(timeOff, (t) => t.staff_id),
+    outOfService: byOwner(closures, (c) => c.chair_id ?? c.basin_id),
+    bookings: [...bookings.values()],
+  };
 }
 
 /**
@@ -163,7 +198,14 @@ export async function loadSalonBook(db: Db, salon: PlanningSalon, setup: SalonSe
  * reaches across the seam (read twice) is kept once. Time off and closures cut at the seam join up again in the
  * engine, which unites touching periods.
  */
-export async function extendSalonBook(db: Db, salon: PlanningSalon, setup: SalonSetup, book: SalonBook, to: string, options: BookOptions = {}): Promise<SalonBook> {
+export async function extendSalonBook(
+  db: Db,
+  salon: PlanningSalon,
+  setup: SalonSetup,
+  book: SalonBook,
+  to: string,
+  options: BookOptions = {},
+): Promise<SalonBook> {
   const more = await loadSalonBook(db, salon, setup, { from: book.horizon.to, to }, options);
   const join = (a: Map<string, Period[]>, b: Map<string, Period[]>) => {
     const out = new Map(a);
@@ -186,7 +228,13 @@ export function calendarsOf(salon: PlanningSalon, setup: SalonSetup, book: Salon
     granularityMinutes: salon.granularityMinutes,
     horizon: book.horizon,
     salonHours: setup.salonHours,
-    stylists: setup.stylists.map((s) => ({ id: s.id, skills: s.skills, maxClientsAtOnce: s.maxClientsAtOnce, hours: s.hours, timeOff: book.timeOff.get(s.id) ?? [] })),
+    stylists: setup.stylists.map((s) => ({
+      id: s.id,
+      skills: s.skills,
+      maxClientsAtOnce: s.maxClientsAtOnce,
+      hours: s.hours,
+      timeOff: book.timeOff.get(s.id) ?? [],
+    })),
     chairs: setup.chairs.map((c) => ({ id: c.id, outOfService: book.outOfService.get(c.id) ?? [] })),
     basins: setup.basins.map((b) => ({ id: b.id, outOfService: book.outOfService.get(b.id) ?? [] })),
     bookings: book.bookings,

@@ -13,7 +13,11 @@ export async function correctionRate(db: Db, salonId: string): Promise<number> {
 }
 
 /** Replaces the salon's quote prices in one go (a type left out has no cost set). */
-export async function saveQuotePrices(db: Db, salonId: string, prices: { correctionCentsPerHour: number; productCentsPerGram: Partial<Record<CostedProduct, number>> }) {
+export async function saveQuotePrices(
+  db: Db,
+  salonId: string,
+  prices: { correctionCentsPerHour: number; productCentsPerGram: Partial<Record<CostedProduct, number>> },
+) {
   await db.updateTable('salons').set({ correction_cents_per_hour: prices.correctionCentsPerHour }).where('id', '=', salonId).execute();
   await db.deleteFrom('product_costs').where('salon_id', '=', salonId).execute();
   const rows = Object.entries(prices.productCentsPerGram)

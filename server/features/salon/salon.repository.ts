@@ -62,7 +62,13 @@ export function planningRulesColumns(rules: { processingLimits?: ProcessingLimit
 
 /** The salon's lines of opening hours, as the engine reads them (RFC 5545 text, `HH:mm` times). */
 export async function listSalonHours(db: Db, salonId: string): Promise<HoursRule[]> {
-  const rows = await db.selectFrom('salon_hours').select(['rrule', 'start_time', 'end_time']).where('salon_id', '=', salonId).orderBy('start_time').orderBy('id').execute();
+  const rows = await db
+    .selectFrom('salon_hours')
+    .select(['rrule', 'start_time', 'end_time'])
+    .where('salon_id', '=', salonId)
+    .orderBy('start_time')
+    .orderBy('id')
+    .execute();
   return rows.map((h) => ({ rrule: h.rrule, start: h.start_time.slice(0, 5), end: h.end_time.slice(0, 5) }));
 }
 

@@ -6,7 +6,20 @@ type Row = Awaited<ReturnType<typeof baseQuery>>[number];
 const baseQuery = (db: Db, salonId: string) =>
   db
     .selectFrom('services')
-    .select(['id', 'name', 'description', 'category', 'skill', 'price_cents', 'price_is_from', 'deposit_cents', 'deposit_percent', 'online_bookable', 'needs_skin_test', 'step_plan'])
+    .select([
+      'id',
+      'name',
+      'description',
+      'category',
+      'skill',
+      'price_cents',
+      'price_is_from',
+      'deposit_cents',
+      'deposit_percent',
+      'online_bookable',
+      'needs_skin_test',
+      'step_plan',
+    ])
     .where('salon_id', '=', salonId)
     .where('active', '=', true)
     .orderBy('name')

@@ -14,12 +14,7 @@ function toSessionUser(row: { id: string; email: string; name: string; role: Ses
 
 /** The signed-in user behind a session; undefined once the account is deactivated. */
 export async function findSessionUser(db: Db, id: string): Promise<SessionUser | undefined> {
-  const row = await db
-    .selectFrom('users')
-    .select(sessionColumns)
-    .where('id', '=', id)
-    .where('active', '=', true)
-    .executeTakeFirst();
+  const row = await db.selectFrom('users').select(sessionColumns).where('id', '=', id).where('active', '=', true).executeTakeFirst();
   return row && toSessionUser(row);
 }
 
@@ -52,11 +47,7 @@ export async function insertUser(
 }
 
 export async function setPassword(db: Db, userId: string, passwordHash: string): Promise<void> {
-  await db
-    .updateTable('users')
-    .set({ password_hash: passwordHash, password_changed_at: new Date() })
-    .where('id', '=', userId)
-    .execute();
+  await db.updateTable('users').set({ password_hash: passwordHash, password_changed_at: new Date() }).where('id', '=', userId).execute();
 }
 
 /** A user's name as it is now, for records that keep who wrote them after the account goes. */

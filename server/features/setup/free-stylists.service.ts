@@ -17,7 +17,13 @@ async function takeOverAsk(db: Db, zone: string, booking: FutureBooking, now: Da
  * For each booking, the stylists other than the booked one who could take its future sittings exactly as they
  * stand, by the same engine rules that plan new bookings (hours, time off, hands, client cap).
  */
-async function freeStylistsFor(db: Db, salonId: string, zone: string, bookings: FutureBooking[], now: Date): Promise<Array<Array<{ id: string; name: string }>>> {
+async function freeStylistsFor(
+  db: Db,
+  salonId: string,
+  zone: string,
+  bookings: FutureBooking[],
+  now: Date,
+): Promise<Array<Array<{ id: string; name: string }>>> {
   const asks = await Promise.all(bookings.map((b) => takeOverAsk(db, zone, b, now)));
   const wanted = asks.filter((a): a is TakeOverAsk => a !== null);
   const found = wanted.length ? await freeStylists(db, await planningSalon(db, salonId), wanted) : [];

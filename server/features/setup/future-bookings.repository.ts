@@ -12,10 +12,7 @@ export interface FutureBooking {
 }
 
 export type FutureFilter =
-  | { stylistId: string }
-  | { serviceId: string }
-  | { chairId: string; during: [Date, Date] }
-  | { basinId: string; during: [Date, Date] };
+  { stylistId: string } | { serviceId: string } | { chairId: string; during: [Date, Date] } | { basinId: string; during: [Date, Date] };
 
 /** Live bookings (held, booked, checked in) with a sitting still to come that the filter touches. */
 export async function listFutureBookings(db: Db, salonId: string, filter: FutureFilter, now: Date): Promise<FutureBooking[]> {

@@ -11,12 +11,21 @@ export async function assertServicesWithinNewLimits(db: Db, salonId: string, bef
   if (!next || LIMITED_FAMILIES.every((f) => before[f] === next[f])) return;
   const over = new Map<LimitedFamily, string[]>();
   for (const service of await listServices(db, salonId)) {
-    for (const issue of processingLimitIssues(service.stepPlan, next)) over.set(issue.family, [...(over.get(issue.family) ?? []), `${service.name} (${issue.where})`]);
+    for (const issue of processingLimitIssues(service.stepPlan, next))
+      over.set(issue.family, [...(over.get(issue.family) ?? []), `${service.name} (${issue.where})`]);
   }
   if (over.size === 0) return;
   const fields = Object.fromEntries(
-    [...over].map(([family, services]) => [`processingLimits.${family}`, `Too short for ${services.join('; ')}: change ${services.length === 1 ? 'that service' : 'those services'} first.`]),
+    [...over].map(([family, services]) => [
+      `processingLimits.${family}`,
+      `Too short for ${services.join('; ')}: change ${services.length === 1 ? 'that service' : 'those services'} first.`,
+    ]),
   );
   const [family] = [...over.keys()];
-  throw new AppError('CONFLICT', 409, `The ${limitedFamilyNames[family].toLowerCase()} limit is too short for services on the menu. ${fields[`processingLimits.${family}`]}`, fields);
+  throw new AppError(
+    'CONFLICT',
+    409,
+    `The ${limitedFamilyNames[family].toLowerCase()} limit is too short for services on the menu. ${fields[`processingLimits.${family}`]}`,
+    fields,
+  );
 }

@@ -5,7 +5,10 @@ import { planningRulesColumns, planningRulesOf } from '../salon';
 const hhmm = (t: string) => t.slice(0, 5);
 
 /** The settings as stored: the planning rules always present (a write may leave them out). */
-export async function readSalonSettings(db: Db, salonId: string): Promise<SalonSettings & Required<Pick<SalonSettings, 'processingLimits' | 'liftPerSitting'>>> {
+export async function readSalonSettings(
+  db: Db,
+  salonId: string,
+): Promise<SalonSettings & Required<Pick<SalonSettings, 'processingLimits' | 'liftPerSitting'>>> {
   const [row, hours] = await Promise.all([
     db.selectFrom('salons').selectAll().where('id', '=', salonId).executeTakeFirstOrThrow(),
     db.selectFrom('salon_hours').select(['rrule', 'start_time', 'end_time']).where('salon_id', '=', salonId).orderBy('start_time').orderBy('id').execute(),

@@ -46,7 +46,11 @@ const columns = (s: ServiceInput) => ({
 });
 
 export async function insertService(db: Db, salonId: string, s: ServiceInput): Promise<string> {
-  const row = await db.insertInto('services').values({ salon_id: salonId, ...columns(s) }).returning('id').executeTakeFirstOrThrow();
+  const row = await db
+    .insertInto('services')
+    .values({ salon_id: salonId, ...columns(s) })
+    .returning('id')
+    .executeTakeFirstOrThrow();
   return row.id;
 }
 

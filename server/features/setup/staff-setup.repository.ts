@@ -14,7 +14,18 @@ export async function listStaff(db: Db, salonId: string, now: Date): Promise<Sta
   const people = await db
     .selectFrom('users as u')
     .leftJoin('staff as s', 's.user_id', 'u.id')
-    .select(['u.id', 'u.email', 'u.name', 'u.role', 'u.active', 'u.password_hash', 's.id as staffId', 's.skills', 's.max_clients_at_once', 's.active as staffActive'])
+    .select([
+      'u.id',
+      'u.email',
+      'u.name',
+      'u.role',
+      'u.active',
+      'u.password_hash',
+      's.id as staffId',
+      's.skills',
+      's.max_clients_at_once',
+      's.active as staffActive',
+    ])
     .select((eb) =>
       eb
         .selectFrom('bookings as b')
@@ -57,7 +68,9 @@ export async function listStaff(db: Db, salonId: string, now: Date): Promise<Sta
       maxClientsAtOnce: p.max_clients_at_once ?? 1,
       hours: hours.filter((h) => h.staff_id === p.staffId).map((h) => ({ rrule: h.rrule, start: hhmm(h.start_time), end: hhmm(h.end_time) })),
     },
-    timeOff: timeOff.filter((t) => t.staff_id === p.staffId).map((t) => ({ id: t.id, start: t.start.toISOString(), end: t.end.toISOString(), reason: t.reason })),
+    timeOff: timeOff
+      .filter((t) => t.staff_id === p.staffId)
+      .map((t) => ({ id: t.id, start: t.start.toISOString(), end: t.end.toISOString(), reason: t.reason })),
     futureBookings: p.futureBookings ?? 0,
   }));
 }
@@ -84,11 +97,18 @@ export async function writeStaffDetails(db: Db, salonId: string, userId: string,
       .returning('id')
       .executeTakeFirstOrThrow();
   } else {
-    await db.updateTable('staff').set({ display_name: details.name, skills: details.skills, max_clients_at_once: details.maxClientsAtOnce }).where('id', '=', staff.id).execute();
+    await db
+      .updateTable('staff')
+      .set({ display_name: details.name, skills: details.skills, max_clients_at_once: details.maxClientsAtOnce })
+      .where('id', '=', staff.id)
+      .execute();
   }
   await db.deleteFrom('staff_hours').where('staff_id', '=', staff.id).execute();
   if (details.hours.length > 0) {
-    await db.insertInto('staff_hours').values(details.hours.map((h) => ({ staff_id: staff.id, rrule: h.rrule, start_time: h.start, end_time: h.end }))).execute();
+    await db
+      .insertInto('staff_hours')
+      .values(details.hours.map((h) => ({ staff_id: staff.id, rrule: h.rrule, start_time: h.start, end_time: h.end })))
+      .execute();
   }
 }
 
@@ -104,7 +124,10 @@ export async function findStaffUser(db: Db, salonId: string, userId: string) {
 }
 
 export async function insertTimeOff(db: Db, staffId: string, from: Date, to: Date, reason: string): Promise<void> {
-  await db.insertInto('time_off').values({ staff_id: staffId, during: tstzRange(from, to), reason }).execute();
+  await db
+    .insertInto('time_off')
+    .values({ staff_id: staffId, during: tstzRange(from, to), reason })
+    .execute();
 }
 
 export async function deleteTimeOff(db: Db, staffId: string, id: string): Promise<boolean> {

@@ -2,7 +2,14 @@ import { setupApi } from '@shared/api/setup.api';
 import type { AppDeps } from '@server/app-deps';
 import { apiRoute } from '@server/lib/api-route';
 import {
-  addTimeOff, deactivateStaffMember, inviteStaff, reassignFutureBooking, removeTimeOff, saveStaffDetails, staffOf, stylistFutureBookings,
+  addTimeOff,
+  deactivateStaffMember,
+  inviteStaff,
+  reassignFutureBooking,
+  removeTimeOff,
+  saveStaffDetails,
+  staffOf,
+  stylistFutureBookings,
 } from './staff-setup.service';
 
 export function registerStaffSetupRoutes({ table, db, mailer, config }: AppDeps): void {

@@ -12,7 +12,16 @@ import { findUserByEmail } from '../session';
 import { affectedMessage } from './affected-message';
 import { freeStylistIds, withFreeStylists } from './free-stylists.service';
 import { listFutureBookings } from './future-bookings.repository';
-import { deactivateStaff, deleteTimeOff, findStaffUser, insertInvitedUser, insertTimeOff, listStaff, reassignBooking, writeStaffDetails } from './staff-setup.repository';
+import {
+  deactivateStaff,
+  deleteTimeOff,
+  findStaffUser,
+  insertInvitedUser,
+  insertTimeOff,
+  listStaff,
+  reassignBooking,
+  writeStaffDetails,
+} from './staff-setup.repository';
 
 /** An invitation link stays valid for a week (common practice for account invitations). */
 export const INVITE_VALID_MINUTES = 7 * 24 * 60;
@@ -38,7 +47,8 @@ export async function staffOf(db: Db, salonId: string, now: Date): Promise<{ sta
 /** Adds the account and e-mails the invitation: a link to choose a password, then sign in with this address. */
 export async function inviteStaff(db: Db, mailer: Mailer, user: SessionUser, invite: StaffInvite, baseUrl: string): Promise<StaffMember> {
   const id = await db.transaction().execute(async (trx) => {
-    if (await findUserByEmail(trx, invite.email)) throw new AppError('EMAIL_TAKEN', 409, 'An account with this e-mail already exists.', { email: 'An account with this e-mail already exists.' });
+    if (await findUserByEmail(trx, invite.email))
+      throw new AppError('EMAIL_TAKEN', 409, 'An account with this e-mail already exists.', { email: 'An account with this e-mail already exists.' });
     const newId = await insertInvitedUser(trx, user.salonId, invite.email, invite.details);
     await writeAudit(trx, { salonId: user.salonId, actorUserId: user.id, entity: 'staff', entityId: newId, action: 'invited', after: invite });
     return newId;
@@ -57,13 +67,24 @@ export async function inviteStaff(db: Db, mailer: Mailer, user: SessionUser, inv
 
 export async function saveStaffDetails(db: Db, user: SessionUser, id: string, details: StaffDetails): Promise<StaffMember> {
   const before = await member(db, user.salonId, id);
-  if (id === user.id && details.role !== 'owner') throw new AppError('VALIDATION_FAILED', 400, 'You cannot take away your own owner role.', { role: 'You cannot take away your own owner role.' });
+  if (id === user.id && details.role !== 'owner')
+    throw new AppError('VALIDATION_FAILED', 400, 'You cannot take away your own owner role.', { role: 'You cannot take away your own owner role.' });
   if (before.staffId && details.role !== 'stylist' && before.futureBookings > 0) {
-    throw new AppError('VALIDATION_FAILED', 400, `${before.details.name} has future bookings; re-assign them before changing the role.`, { role: 'Re-assign their future bookings first.' });
+    throw new AppError('VALIDATION_FAILED', 400, `${before.details.name} has future bookings; re-assign them before changing the role.`, {
+      role: 'Re-assign their future bookings first.',
+    });
   }
   await db.transaction().execute(async (trx) => {
     await writeStaffDetails(trx, user.salonId, id, details);
-    await writeAudit(trx, { salonId: user.salonId, actorUserId: user.id, entity: 'staff', entityId: id, action: 'changed', before: before.details, after: details });
+    await writeAudit(trx, {
+      salonId: user.salonId,
+      actorUserId: user.id,
+      entity: 'staff',
+      entityId: id,
+      action: 'changed',
+      before: before.details,
+      after: details,
+    });
   });
   return member(db, user.salonId, id);
 }
@@ -96,7 +117,13 @@ export async function stylistFutureBookings(db: Db, salonId: string, id: string,
 }
 
 /** Gives one of the stylist's future bookings to a stylist free for every step of it; answers what is left. */
-export async function reassignFutureBooking(db: Db, user: SessionUser, id: string, move: { bookingId: string; toStaffId: string }, now: Date): Promise<{ bookings: AffectedBooking[] }> {
+export async function reassignFutureBooking(
+  db: Db,
+  user: SessionUser,
+  id: string,
+  move: { bookingId: string; toStaffId: string },
+  now: Date,
+): Promise<{ bookings: AffectedBooking[] }> {
   const stylist = await stylistOf(db, user.salonId, id);
   const salon = await findSalon(db, user.salonId);
   const future = await listFutureBookings(db, user.salonId, { stylistId: stylist.staffId }, now);
@@ -104,14 +131,24 @@ export async function reassignFutureBooking(db: Db, user: SessionUser, id: strin
   if (!booking) throw notFound('That future booking of this stylist');
   const free = await freeStylistIds(db, user.salonId, salon.timeZone, booking, now);
   if (!free.includes(move.toStaffId)) {
-    throw new AppError('CONFLICT', 409, 'That stylist is not free for every step of this booking (hours, time off, skill or other clients).', { toStaffId: 'Pick a stylist who is free for it.' });
+    throw new AppError('CONFLICT', 409, 'That stylist is not free for every step of this booking (hours, time off, skill or other clients).', {
+      toStaffId: 'Pick a stylist who is free for it.',
+    });
   }
   await db.transaction().execute(async (trx) => {
     // The booking as every booking entry records it (stylist by name), so its history reads the same way.
     const before = await bookingSnapshot(trx, move.bookingId);
     await reassignBooking(trx, user.salonId, move.bookingId, move.toStaffId);
     const after = await bookingSnapshot(trx, move.bookingId);
-    await writeAudit(trx, { salonId: user.salonId, actorUserId: user.id, entity: 'booking', entityId: move.bookingId, action: 're-assigned', before: before?.audit, after: after?.audit });
+    await writeAudit(trx, {
+      salonId: user.salonId,
+      actorUserId: user.id,
+      entity: 'booking',
+      entityId: move.bookingId,
+      action: 're-assigned',
+      before: before?.audit,
+      after: after?.audit,
+    });
   });
   return futureOf(db, user.salonId, stylist.staffId, salon.timeZone, now);
 }

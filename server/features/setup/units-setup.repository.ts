@@ -41,7 +41,10 @@ export async function renameUnit(db: Db, salonId: string, kind: UnitKind, id: st
 }
 
 export async function insertOutOfService(db: Db, salonId: string, kind: UnitKind, id: string, from: Date, to: Date, reason: string): Promise<void> {
-  await db.insertInto('out_of_service').values({ salon_id: salonId, [idColumn(kind)]: id, during: tstzRange(from, to), reason }).execute();
+  await db
+    .insertInto('out_of_service')
+    .values({ salon_id: salonId, [idColumn(kind)]: id, during: tstzRange(from, to), reason })
+    .execute();
 }
 
 export async function deleteOutOfService(db: Db, salonId: string, kind: UnitKind, unitId: string, id: string): Promise<boolean> {

@@ -20,7 +20,11 @@ async function assertUnit(db: Db, salonId: string, kind: UnitKind, id: string): 
 /** Whole days in salon time: from 00:00 of the first to 00:00 after the last. */
 async function period(db: Db, salonId: string, from: string, to: string) {
   const salon = await findSalon(db, salonId);
-  return { salon, start: DateTime.fromISO(from, { zone: salon.timeZone }).toJSDate(), end: DateTime.fromISO(to, { zone: salon.timeZone }).plus({ days: 1 }).toJSDate() };
+  return {
+    salon,
+    start: DateTime.fromISO(from, { zone: salon.timeZone }).toJSDate(),
+    end: DateTime.fromISO(to, { zone: salon.timeZone }).plus({ days: 1 }).toJSDate(),
+  };
 }
 
 async function affected(db: Db, salonId: string, kind: UnitKind, id: string, from: string, to: string): Promise<AffectedBooking[]> {
@@ -48,13 +52,25 @@ export async function renameUnitOf(db: Db, user: SessionUser, kind: UnitKind, id
 }
 
 /** Future bookings that use the chair or basin during the days, each with the stylists free to take it. */
-export async function unitAffected(db: Db, salonId: string, kind: UnitKind, id: string, days: { from: string; to: string }): Promise<{ bookings: AffectedBooking[] }> {
+export async function unitAffected(
+  db: Db,
+  salonId: string,
+  kind: UnitKind,
+  id: string,
+  days: { from: string; to: string },
+): Promise<{ bookings: AffectedBooking[] }> {
   await assertUnit(db, salonId, kind, id);
   return { bookings: await affected(db, salonId, kind, id, days.from, days.to) };
 }
 
 /** Takes the unit out of service for whole days; answers the future bookings that still use it. */
-export async function takeOutOfService(db: Db, user: SessionUser, kind: UnitKind, id: string, input: OutOfServiceInput): Promise<{ bookings: AffectedBooking[] }> {
+export async function takeOutOfService(
+  db: Db,
+  user: SessionUser,
+  kind: UnitKind,
+  id: string,
+  input: OutOfServiceInput,
+): Promise<{ bookings: AffectedBooking[] }> {
   await assertUnit(db, user.salonId, kind, id);
   const { start, end } = await period(db, user.salonId, input.from, input.to);
   await insertOutOfService(db, user.salonId, kind, id, start, end, input.reason);

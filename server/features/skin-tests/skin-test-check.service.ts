@@ -13,7 +13,14 @@ import { localDateOf } from '@shared/time/salon-time';
 type SalonRule = Pick<Salon, 'timeZone' | 'skinTestLeadHours' | 'skinTestValidityDays' | 'skinTestFamilies'>;
 
 /** What the client's whole skin-test record allows for this plan (and the service's own box, which only adds). */
-export async function skinTestVerdictFor(db: Db, salon: SalonRule, clientId: string, plan: StepPlan, serviceAsks: boolean, now: Date): Promise<SkinTestVerdict> {
+export async function skinTestVerdictFor(
+  db: Db,
+  salon: SalonRule,
+  clientId: string,
+  plan: StepPlan,
+  serviceAsks: boolean,
+  now: Date,
+): Promise<SkinTestVerdict> {
   const needs = planNeedsSkinTest(plan, salon.skinTestFamilies, serviceAsks);
   if (!needs) return skinTestVerdict(false, [], [], salonPolicy(salon), now);
   const [records, clearances] = await Promise.all([skinTestRecords(db, clientId), skinTestClearances(db, clientId)]);
@@ -112,6 +119,10 @@ async function assertAgeAllows(db: Db, salon: SalonRule, door: SkinTestDoor): Pr
     throw new AppError('AGE_CONSENT', 409, 'Oxidative colour is not booked online for anyone under 16. Please call the salon or book a consultation.');
   }
   if (!age.hasGuardianConsent) {
-    throw new AppError('AGE_CONSENT', 409, 'This client is under 16 on the day: oxidative colour needs a guardian’s consent on record first (client card → Age and consent).');
+    throw new AppError(
+      'AGE_CONSENT',
+      409,
+      'This client is under 16 on the day: oxidative colour needs a guardian’s consent on record first (client card → Age and consent).',
+    );
   }
 }

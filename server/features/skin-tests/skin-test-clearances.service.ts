@@ -20,7 +20,14 @@ export async function recordClearance(db: Db, user: SessionUser, clientId: strin
   return db.transaction().execute(async (trx) => {
     const id = await insertClearance(trx, { salonId: user.salonId, clientId, recordedBy: user.id, recordedByName: await userName(trx, user.id), reason });
     const view = (await listClearances(trx, user.salonId, clientId)).find((c) => c.id === id)!;
-    await writeAudit(trx, { salonId: user.salonId, actorUserId: user.id, entity: 'skin_test_clearance', entityId: id, action: 'recorded', after: { ...view, clientId } });
+    await writeAudit(trx, {
+      salonId: user.salonId,
+      actorUserId: user.id,
+      entity: 'skin_test_clearance',
+      entityId: id,
+      action: 'recorded',
+      after: { ...view, clientId },
+    });
     await replanAfterSkinTestChange(trx, clientId, now);
     return view;
   });

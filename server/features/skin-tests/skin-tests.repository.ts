@@ -38,13 +38,29 @@ export async function findSkinTest(db: Db, salonId: string, clientId: string, id
 
 export async function insertSkinTest(
   db: Db,
-  t: { salonId: string; clientId: string; appliedAt: Date; readAt: Date | null; result: SkinTestRecord['result']; product: string; notes: string; recordedBy: string },
+  t: {
+    salonId: string;
+    clientId: string;
+    appliedAt: Date;
+    readAt: Date | null;
+    result: SkinTestRecord['result'];
+    product: string;
+    notes: string;
+    recordedBy: string;
+  },
 ): Promise<string> {
   const row = await db
     .insertInto('skin_tests')
     .values({
-      salon_id: t.salonId, client_id: t.clientId, applied_at: t.appliedAt, read_at: t.readAt, result: t.result, product: t.product, notes: t.notes,
-      recorded_by: t.recordedBy, read_by: t.readAt ? t.recordedBy : null,
+      salon_id: t.salonId,
+      client_id: t.clientId,
+      applied_at: t.appliedAt,
+      read_at: t.readAt,
+      result: t.result,
+      product: t.product,
+      notes: t.notes,
+      recorded_by: t.recordedBy,
+      read_by: t.readAt ? t.recordedBy : null,
     })
     .returning('id')
     .executeTakeFirstOrThrow();
@@ -52,7 +68,11 @@ export async function insertSkinTest(
 }
 
 /** Stores the reading of a pending test; false when the test is no longer pending (read meanwhile). */
-export async function setSkinTestReading(db: Db, id: string, r: { readAt: Date; result: Exclude<SkinTestRecord['result'], 'pending'>; readBy: string }): Promise<boolean> {
+export async function setSkinTestReading(
+  db: Db,
+  id: string,
+  r: { readAt: Date; result: Exclude<SkinTestRecord['result'], 'pending'>; readBy: string },
+): Promise<boolean> {
   const updated = await db
     .updateTable('skin_tests')
     .set({ read_at: r.readAt, result: r.result, read_by: r.readBy })
@@ -61,7 +81,6 @@ export async function setSkinTestReading(db: Db, id: string, r: { readAt: Date; 
     .executeTakeFirst();
   return Number(updated.numUpdatedRows) === 1;
 }
-
 
 /**
  * What the skin-test rule looks at: every recorded test, and skin-test appointments in the book that no recorded
@@ -124,7 +143,10 @@ export async function listClearances(db: Db, salonId: string, clientId: string):
   return rows.map((c) => ({ id: c.id, recordedAt: c.recorded_at.toISOString(), recordedByName: c.recorded_by_name, reason: c.reason }));
 }
 
-export async function insertClearance(db: Db, c: { salonId: string; clientId: string; recordedBy: string; recordedByName: string; reason: string }): Promise<string> {
+export async function insertClearance(
+  db: Db,
+  c: { salonId: string; clientId: string; recordedBy: string; recordedByName: string; reason: string },
+): Promise<string> {
   const row = await db
     .insertInto('skin_test_clearances')
     .values({ salon_id: c.salonId, client_id: c.clientId, recorded_by: c.recordedBy, recorded_by_name: c.recordedByName, reason: c.reason })

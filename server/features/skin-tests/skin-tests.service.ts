@@ -1,6 +1,12 @@
 import type { SessionUser } from '@shared/schemas/auth.schemas';
 import type { z } from 'zod';
-import { READ_BEFORE_APPLIED, type RecordSkinTestReading, type RecordSkinTestSchema, type SkinTest, type SkinTestClearance } from '@shared/schemas/skin-test.schemas';
+import {
+  READ_BEFORE_APPLIED,
+  type RecordSkinTestReading,
+  type RecordSkinTestSchema,
+  type SkinTest,
+  type SkinTestClearance,
+} from '@shared/schemas/skin-test.schemas';
 import type { Db } from '@server/db/database';
 import { AppError, invalidField, notFound } from '@server/lib/app-error';
 import { clientIdFor } from '@server/auth/client-access';
@@ -61,7 +67,11 @@ export async function recordSkinTestReading(
     const zone = (await findSalon(trx, user.salonId)).timeZone;
     const at = (iso: string) => formatDateTime(new Date(iso), formatFor(zone), { width: 'short' });
     if (before.result !== 'pending') {
-      throw new AppError('CONFLICT', 409, `This skin test was already read (${before.result}, ${at(before.readAt!)}). A reading is recorded once; apply and record a new test to test again.`);
+      throw new AppError(
+        'CONFLICT',
+        409,
+        `This skin test was already read (${before.result}, ${at(before.readAt!)}). A reading is recorded once; apply and record a new test to test again.`,
+      );
     }
     if (readAt < new Date(before.appliedAt)) throw invalidField('readAt', `${READ_BEFORE_APPLIED} (${at(before.appliedAt)}).`);
     if (inFuture(readAt, now)) throw invalidField('readAt', 'The reading cannot be in the future.');
@@ -70,7 +80,15 @@ export async function recordSkinTestReading(
       throw new AppError('CONFLICT', 409, 'This skin test was read by someone else a moment ago.');
     }
     const after = (await findSkinTest(trx, user.salonId, ids.clientId, ids.testId))!;
-    await writeAudit(trx, { salonId: user.salonId, actorUserId: user.id, entity: 'skin_test', entityId: ids.testId, action: 'reading recorded', before: reading(before), after: reading(after) });
+    await writeAudit(trx, {
+      salonId: user.salonId,
+      actorUserId: user.id,
+      entity: 'skin_test',
+      entityId: ids.testId,
+      action: 'reading recorded',
+      before: reading(before),
+      after: reading(after),
+    });
     await replanAfterSkinTestChange(trx, ids.clientId, now);
     return after;
   });

@@ -6,8 +6,13 @@ export async function insertStandby(db: Db, salonId: string, entry: Required<Cre
   const row = await db
     .insertInto('standby_entries')
     .values({
-      salon_id: salonId, client_id: entry.clientId, service_ids: entry.serviceIds, stylist_id: entry.stylistId,
-      availability: JSON.stringify(entry.availability), notes: entry.notes, created_by: createdBy,
+      salon_id: salonId,
+      client_id: entry.clientId,
+      service_ids: entry.serviceIds,
+      stylist_id: entry.stylistId,
+      availability: JSON.stringify(entry.availability),
+      notes: entry.notes,
+      created_by: createdBy,
     })
     .returning('id')
     .executeTakeFirstOrThrow();
@@ -20,15 +25,24 @@ export async function listStandby(db: Db, salonId: string, id?: string): Promise
     .selectFrom('standby_entries as e')
     .innerJoin('clients as c', 'c.id', 'e.client_id')
     .leftJoin('staff as st', 'st.id', 'e.stylist_id')
-    .select(['e.id', 'e.service_ids', 'e.availability', 'e.notes', 'e.created_at', 'c.id as clientId', 'c.name as clientName', 'c.phone', 'c.email', 'st.id as stylistId', 'st.display_name as stylistName'])
+    .select([
+      'e.id',
+      'e.service_ids',
+      'e.availability',
+      'e.notes',
+      'e.created_at',
+      'c.id as clientId',
+      'c.name as clientName',
+      'c.phone',
+      'c.email',
+      'st.id as stylistId',
+      'st.display_name as stylistName',
+    ])
     .where('e.salon_id', '=', salonId)
     .where('e.active', '=', true)
     .orderBy('e.created_at');
   if (id) query = query.where('e.id', '=', id);
-  const [rows, services] = await Promise.all([
-    query.execute(),
-    db.selectFrom('services').select(['id', 'name']).where('salon_id', '=', salonId).execute(),
-  ]);
+  const [rows, services] = await Promise.all([query.execute(), db.selectFrom('services').select(['id', 'name']).where('salon_id', '=', salonId).execute()]);
   return rows.map((r) => ({
     id: r.id,
     client: { id: r.clientId, name: r.clientName, phone: r.phone, email: r.email },
@@ -42,6 +56,12 @@ export async function listStandby(db: Db, salonId: string, id?: string): Promise
 
 /** Closes an entry (removed by the desk, or the client got a time). True when one was open. */
 export async function closeStandby(db: Db, salonId: string, id: string): Promise<boolean> {
-  const res = await db.updateTable('standby_entries').set({ active: false }).where('salon_id', '=', salonId).where('id', '=', id).where('active', '=', true).executeTakeFirst();
+  const res = await db
+    .updateTable('standby_entries')
+    .set({ active: false })
+    .where('salon_id', '=', salonId)
+    .where('id', '=', id)
+    .where('active', '=', true)
+    .executeTakeFirst();
   return Number(res.numUpdatedRows) > 0;
 }

@@ -16,7 +16,11 @@ export async function standbyList(db: Db, user: SessionUser): Promise<{ entries:
 /** Adds a client to the standby list, audited; answers the stored entry. */
 export async function addStandby(db: Db, user: SessionUser, body: CreateStandby): Promise<StandbyEntry> {
   // Every id must belong to this salon; a foreign id is answered as a field error, not stored.
-  const [client, services, stylists] = await Promise.all([findClient(db, user.salonId, body.clientId), listServices(db, user.salonId), listStylists(db, user.salonId)]);
+  const [client, services, stylists] = await Promise.all([
+    findClient(db, user.salonId, body.clientId),
+    listServices(db, user.salonId),
+    listStylists(db, user.salonId),
+  ]);
   const fields: Record<string, string> = {};
   if (!client) fields.clientId = 'No such client in this salon.';
   if (body.serviceIds.some((id) => !services.some((s) => s.id === id))) fields.serviceIds = 'Pick services of this salon.';

@@ -5,15 +5,33 @@ import type { RecordStrandTest, StrandTest } from '@shared/schemas/strand-test.s
 const strandTests = (db: Db, salonId: string, clientId: string) =>
   db
     .selectFrom('strand_tests as t')
-    .select(['t.id', 't.tested_at', 't.tested', 't.product_type', 't.developer_percent', 't.minutes', 't.result', 't.notes', 't.photo_id', 't.recorded_by_name'])
+    .select([
+      't.id',
+      't.tested_at',
+      't.tested',
+      't.product_type',
+      't.developer_percent',
+      't.minutes',
+      't.result',
+      't.notes',
+      't.photo_id',
+      't.recorded_by_name',
+    ])
     .where('t.salon_id', '=', salonId)
     .where('t.client_id', '=', clientId);
 type StrandTestRow = Awaited<ReturnType<ReturnType<typeof strandTests>['execute']>>[number];
 
 const toStrandTest = (r: StrandTestRow): StrandTest => ({
-  id: r.id, testedAt: r.tested_at.toISOString(), tested: r.tested, productType: r.product_type,
-  developerPercent: r.developer_percent === null ? null : Number(r.developer_percent), minutes: r.minutes, result: r.result, notes: r.notes,
-  photoId: r.photo_id, recordedByName: r.recorded_by_name,
+  id: r.id,
+  testedAt: r.tested_at.toISOString(),
+  tested: r.tested,
+  productType: r.product_type,
+  developerPercent: r.developer_percent === null ? null : Number(r.developer_percent),
+  minutes: r.minutes,
+  result: r.result,
+  notes: r.notes,
+  photoId: r.photo_id,
+  recordedByName: r.recorded_by_name,
 });
 
 /** A client's strand tests in this salon, newest first. */
@@ -31,8 +49,17 @@ export async function insertStrandTest(db: Db, t: RecordStrandTest & { salonId: 
   const { id } = await db
     .insertInto('strand_tests')
     .values({
-      salon_id: t.salonId, client_id: t.clientId, tested_at: new Date(t.testedAt), tested: t.tested, product_type: t.productType,
-      developer_percent: t.developerPercent, minutes: t.minutes, result: t.result, notes: t.notes, photo_id: t.photoId, recorded_by: t.recordedBy,
+      salon_id: t.salonId,
+      client_id: t.clientId,
+      tested_at: new Date(t.testedAt),
+      tested: t.tested,
+      product_type: t.productType,
+      developer_percent: t.developerPercent,
+      minutes: t.minutes,
+      result: t.result,
+      notes: t.notes,
+      photo_id: t.photoId,
+      recorded_by: t.recordedBy,
     })
     .returning('id')
     .executeTakeFirstOrThrow();

@@ -32,8 +32,16 @@ export async function listPeriodSittings(db: Db, salonId: string, from: Date, to
     .innerJoin('bookings as b', 'b.id', 'si.booking_id')
     .innerJoin('services as sv', 'sv.id', 'b.service_id')
     .select([
-      'b.id as bookingId', 'b.status', 'b.service_id as serviceId', 'sv.name as serviceName', 'sv.category', 'b.stylist_id as stylistId',
-      'b.price_cents as priceCents', 'b.deposit_cents as depositCents', 'b.deposit_outcome as depositOutcome', 'si.seq',
+      'b.id as bookingId',
+      'b.status',
+      'b.service_id as serviceId',
+      'sv.name as serviceName',
+      'sv.category',
+      'b.stylist_id as stylistId',
+      'b.price_cents as priceCents',
+      'b.deposit_cents as depositCents',
+      'b.deposit_outcome as depositOutcome',
+      'si.seq',
       // Plain numbers and a step plan only where it can matter: thousands of rows parse quickly.
       sql<StepPlan | null>`case when sv.category = 'colour' then b.step_plan end`.as('stepPlan'),
       sql<number>`extract(epoch from lower(si.during))::float8 * 1000`.as('start'),

@@ -18,10 +18,11 @@ const mean = (xs: number[]): number | null => (xs.length ? xs.reduce((a, b) => a
 export function quotedMinutes(plan: StepPlan): { min: number; max: number } {
   let min = 0;
   let max = 0;
-  for (const s of plan.sittings) for (const st of s.steps) {
-    min += st.kind === 'developing' ? st.minMinutes : st.minutes;
-    max += st.kind === 'developing' ? st.maxMinutes : st.minutes;
-  }
+  for (const s of plan.sittings)
+    for (const st of s.steps) {
+      min += st.kind === 'developing' ? st.minMinutes : st.minutes;
+      max += st.kind === 'developing' ? st.maxMinutes : st.minutes;
+    }
   return { min, max };
 }
 

@@ -24,7 +24,13 @@ function add(a: OccupancyMinutes, b: OccupancyMinutes): OccupancyMinutes {
     const had = stylists[id] ?? { handsOn: 0, onClock: 0 };
     stylists[id] = { handsOn: had.handsOn + s.handsOn, onClock: had.onClock + s.onClock };
   }
-  return { chairHeld: a.chairHeld + b.chairHeld, chairOpen: a.chairOpen + b.chairOpen, stylists, windowUsed: a.windowUsed + b.windowUsed, windowFree: a.windowFree + b.windowFree };
+  return {
+    chairHeld: a.chairHeld + b.chairHeld,
+    chairOpen: a.chairOpen + b.chairOpen,
+    stylists,
+    windowUsed: a.windowUsed + b.windowUsed,
+    windowFree: a.windowFree + b.windowFree,
+  };
 }
 
 /**
@@ -34,7 +40,11 @@ function add(a: OccupancyMinutes, b: OccupancyMinutes): OccupancyMinutes {
  */
 export async function measurePeriod(db: Db, salon: PlanningSalon, period: Period): Promise<PeriodOccupancy> {
   const chunks = chunksOf(period);
-  const measured = await occupancyOver(db, salon, chunks.map((c) => ({ horizon: { from: c.from, to: c.to }, cuts: c.weekCuts })));
+  const measured = await occupancyOver(
+    db,
+    salon,
+    chunks.map((c) => ({ horizon: { from: c.from, to: c.to }, cuts: c.weekCuts })),
+  );
   const total = measured.map((m) => m.total).reduce(add);
   const cells = new Map<number, HourCell>();
   for (const c of measured.flatMap((m) => m.cells)) {

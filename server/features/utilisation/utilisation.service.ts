@@ -67,7 +67,13 @@ async function ownerUtilisation(db: Db, salon: Salon, period: Period): Promise<O
     windowUse: occupancy.windowUse,
     handsOnShare: occupancy.handsOnShare,
     attendance: figures.attendance,
-    heatMap: occupancy.cells.map((c) => ({ weekday: c.weekday, hour: c.hour, chairOccupancy: ratio(c.chairHeld, c.chairOpen), chairHeldMinutes: c.chairHeld, chairOpenMinutes: c.chairOpen })),
+    heatMap: occupancy.cells.map((c) => ({
+      weekday: c.weekday,
+      hour: c.hour,
+      chairOccupancy: ratio(c.chairHeld, c.chairOpen),
+      chairHeldMinutes: c.chairHeld,
+      chairOpenMinutes: c.chairOpen,
+    })),
     weeks: occupancy.weeks.map((w, i) => {
       const clock = Object.values(w.stylists).reduce((t, s) => t + s.onClock, 0);
       const hands = Object.values(w.stylists).reduce((t, s) => t + s.handsOn, 0);

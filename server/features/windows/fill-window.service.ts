@@ -49,7 +49,18 @@ async function bookIntoWindow(db: Kysely<Database>, salon: Salon, user: SessionU
     const clientId =
       body.clientId ??
       (await insertClient(trx, { salonId: salon.id, userId: null, name: body.walkIn!.name, email: null, phone: body.walkIn!.phone || null, notes: 'Walk-in' }));
-    const bookingId = await bookAt(trx, { salon, clientId, service, plan: service.stepPlan, stylistId: body.stylistId, start: new Date(body.start), latestStart: body.latestStart ? new Date(body.latestStart) : undefined, actorUserId: user.id, now, allowWaitingOnTest: true });
+    const bookingId = await bookAt(trx, {
+      salon,
+      clientId,
+      service,
+      plan: service.stepPlan,
+      stylistId: body.stylistId,
+      start: new Date(body.start),
+      latestStart: body.latestStart ? new Date(body.latestStart) : undefined,
+      actorUserId: user.id,
+      now,
+      allowWaitingOnTest: true,
+    });
     if (body.standbyEntryId) await closeStandby(trx, salon.id, body.standbyEntryId);
     await saveIdempotent(trx, user.id, body.idempotencyKey, IDEMPOTENCY_ROUTE, 201, { bookingId });
     return bookingId;

@@ -28,14 +28,28 @@ export async function withdrawStaleOffers(
     const service = services[i];
     return service ? [{ offer, placement: { skill: service.skill, stylistId, plan: service.stepPlan, start: offer.startsAt } }] : [];
   });
-  const placed = await exactPlan(db, salon, asked.map((a) => a.placement));
+  const placed = await exactPlan(
+    db,
+    salon,
+    asked.map((a) => a.placement),
+  );
   const still = new Set(asked.filter((_, i) => 'plan' in placed[i]).map((a) => a.offer.id));
   for (const offer of live) {
     if (still.has(offer.id)) continue;
     await setOfferStatus(db, [offer.id], 'gone');
-    await planOfferGone(db, {
-      offerId: offer.id, salonId: salon.id, to: { id: offer.clientId, name: offer.clientName }, salonName: salon.name,
-      serviceName: offer.serviceName, stylistName: offer.stylistName, start: offer.startsAt, timeZone: salon.timeZone,
-    }, now);
+    await planOfferGone(
+      db,
+      {
+        offerId: offer.id,
+        salonId: salon.id,
+        to: { id: offer.clientId, name: offer.clientName },
+        salonName: salon.name,
+        serviceName: offer.serviceName,
+        stylistName: offer.stylistName,
+        start: offer.startsAt,
+        timeZone: salon.timeZone,
+      },
+      now,
+    );
   }
 }

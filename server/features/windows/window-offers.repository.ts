@@ -58,8 +58,16 @@ export async function insertOffer(
   const row = await db
     .insertInto('window_offers')
     .values({
-      salon_id: o.salonId, standby_entry_id: o.standbyEntryId, client_id: o.clientId, service_id: o.serviceId, stylist_id: o.stylistId,
-      starts_at: o.startsAt, token_hash: o.tokenHash, status: 'offered', created_by: o.createdBy, expires_at: o.startsAt,
+      salon_id: o.salonId,
+      standby_entry_id: o.standbyEntryId,
+      client_id: o.clientId,
+      service_id: o.serviceId,
+      stylist_id: o.stylistId,
+      starts_at: o.startsAt,
+      token_hash: o.tokenHash,
+      status: 'offered',
+      created_by: o.createdBy,
+      expires_at: o.startsAt,
     })
     .returning('id')
     .executeTakeFirstOrThrow();
@@ -75,16 +83,39 @@ export async function findOffer(db: Db, tokenHash: string): Promise<WindowOffer 
     .innerJoin('staff as st', 'st.id', 'o.stylist_id')
     .innerJoin('clients as c', 'c.id', 'o.client_id')
     .select([
-      'o.id', 'o.salon_id', 'o.standby_entry_id', 'o.client_id', 'o.service_id', 'o.stylist_id', 'o.starts_at', 'o.status', 'o.expires_at',
-      'sa.name as salonName', 'sa.time_zone as timeZone', 'sv.name as serviceName', 'st.display_name as stylistName', 'c.name as clientName',
+      'o.id',
+      'o.salon_id',
+      'o.standby_entry_id',
+      'o.client_id',
+      'o.service_id',
+      'o.stylist_id',
+      'o.starts_at',
+      'o.status',
+      'o.expires_at',
+      'sa.name as salonName',
+      'sa.time_zone as timeZone',
+      'sv.name as serviceName',
+      'st.display_name as stylistName',
+      'c.name as clientName',
     ])
     .where('o.token_hash', '=', tokenHash)
     .executeTakeFirst();
   return (
     row && {
-      id: row.id, salonId: row.salon_id, standbyEntryId: row.standby_entry_id, clientId: row.client_id, serviceId: row.service_id, stylistId: row.stylist_id,
-      startsAt: row.starts_at, status: row.status, expiresAt: row.expires_at,
-      salonName: row.salonName, timeZone: row.timeZone, serviceName: row.serviceName, stylistName: row.stylistName, clientName: row.clientName,
+      id: row.id,
+      salonId: row.salon_id,
+      standbyEntryId: row.standby_entry_id,
+      clientId: row.client_id,
+      serviceId: row.service_id,
+      stylistId: row.stylist_id,
+      startsAt: row.starts_at,
+      status: row.status,
+      expiresAt: row.expires_at,
+      salonName: row.salonName,
+      timeZone: row.timeZone,
+      serviceName: row.serviceName,
+      stylistName: row.stylistName,
+      clientName: row.clientName,
     }
   );
 }
@@ -122,7 +153,13 @@ export async function listOpenOffers(db: Db, stylistId: string, from: Date, to: 
     .orderBy('o.starts_at')
     .execute();
   return rows.map((r) => ({
-    id: r.id, clientId: r.client_id, serviceId: r.service_id, startsAt: r.starts_at, clientName: r.clientName, serviceName: r.serviceName, stylistName: r.stylistName,
+    id: r.id,
+    clientId: r.client_id,
+    serviceId: r.service_id,
+    startsAt: r.starts_at,
+    clientName: r.clientName,
+    serviceName: r.serviceName,
+    stylistName: r.stylistName,
   }));
 }
 
@@ -140,6 +177,12 @@ export async function listDayOffers(db: Db, salonId: string, from: Date, to: Dat
     .orderBy('c.name')
     .execute();
   return rows.map((r) => ({
-    id: r.id, stylistId: r.stylist_id, startsAt: r.starts_at, status: r.status, expiresAt: r.expires_at, clientName: r.clientName, serviceName: r.serviceName,
+    id: r.id,
+    stylistId: r.stylist_id,
+    startsAt: r.starts_at,
+    status: r.status,
+    expiresAt: r.expires_at,
+    clientName: r.clientName,
+    serviceName: r.serviceName,
   }));
 }

@@ -36,7 +36,12 @@ export async function offerWindow(db: Kysely<Database>, senders: Senders, user: 
   const refused: string[] = [];
   for (const entry of chosen) {
     try {
-      await assertSkinTestAllows(db, salon, { clientId: entry.client.id, plan: service.stepPlan, serviceAsks: service.needsSkinTest, starts: [start], atDesk: false }, new Date());
+      await assertSkinTestAllows(
+        db,
+        salon,
+        { clientId: entry.client.id, plan: service.stepPlan, serviceAsks: service.needsSkinTest, starts: [start], atDesk: false },
+        new Date(),
+      );
     } catch (e) {
       if (!(e instanceof AppError)) throw e;
       refused.push(`${entry.client.name}: ${e.message}`);
@@ -45,8 +50,31 @@ export async function offerWindow(db: Kysely<Database>, senders: Senders, user: 
   if (refused.length) throw new AppError('SKIN_TEST', 409, `This time cannot be offered to ${refused.join(' ')}`);
   for (const entry of chosen) {
     const token = randomBytes(24).toString('base64url');
-    const offerId = await insertOffer(db, { salonId: salon.id, standbyEntryId: entry.id, clientId: entry.client.id, serviceId: service.id, stylistId: stylist.id, startsAt: start, tokenHash: sha256(token), createdBy: user.id });
-    await sendOffer(db, senders, { offerId, salonId: salon.id, to: entry.client, salonName: salon.name, serviceName: service.name, stylistName: stylist.name, start, timeZone: salon.timeZone }, `${baseUrl}/offer/${token}`);
+    const offerId = await insertOffer(db, {
+      salonId: salon.id,
+      standbyEntryId: entry.id,
+      clientId: entry.client.id,
+      serviceId: service.id,
+      stylistId: stylist.id,
+      startsAt: start,
+      tokenHash: sha256(token),
+      createdBy: user.id,
+    });
+    await sendOffer(
+      db,
+      senders,
+      {
+        offerId,
+        salonId: salon.id,
+        to: entry.client,
+        salonName: salon.name,
+        serviceName: service.name,
+        stylistName: stylist.name,
+        start,
+        timeZone: salon.timeZone,
+      },
+      `${baseUrl}/offer/${token}`,
+    );
   }
   return { offers: chosen.length };
 }
@@ -55,7 +83,15 @@ export async function viewOffer(db: Kysely<Database>, token: string, now = new D
   const offer = await findOffer(db, sha256(token));
   if (!offer) throw notFound('That offer');
   const status = offer.status === 'offered' && offer.expiresAt <= now ? 'expired' : offer.status;
-  return { status, salonName: offer.salonName, serviceName: offer.serviceName, stylistName: offer.stylistName, start: offer.startsAt.toISOString(), timeZone: offer.timeZone, clientName: offer.clientName };
+  return {
+    status,
+    salonName: offer.salonName,
+    serviceName: offer.serviceName,
+    stylistName: offer.stylistName,
+    start: offer.startsAt.toISOString(),
+    timeZone: offer.timeZone,
+    clientName: offer.clientName,
+  };
 }
 
 /** First to accept wins: the slot's offers are locked, the engine re-checks, the others are told it has gone. */
@@ -77,14 +113,34 @@ export async function acceptOffer(db: Kysely<Database>, senders: Senders, token:
     // them alone: the winner is not told "gone", and the others hear it at once below.
     const others = slot.filter((o) => o.id !== offer.id && o.status === 'offered');
     await setOfferStatus(trx, [offer.id], 'taken');
-    await setOfferStatus(trx, others.map((o) => o.id), 'gone');
-    const bookingId = await bookAt(trx, { salon, clientId: offer.clientId, service, plan: service.stepPlan, stylistId: offer.stylistId, start: offer.startsAt, actorUserId: null, now });
+    await setOfferStatus(
+      trx,
+      others.map((o) => o.id),
+      'gone',
+    );
+    const bookingId = await bookAt(trx, {
+      salon,
+      clientId: offer.clientId,
+      service,
+      plan: service.stepPlan,
+      stylistId: offer.stylistId,
+      start: offer.startsAt,
+      actorUserId: null,
+      now,
+    });
     await setOfferStatus(trx, [offer.id], 'taken', bookingId);
     await closeStandby(trx, salon.id, offer.standbyEntryId);
     return { others, offer, salon, service };
   });
   const { offer, salon, service } = losers;
-  const about = { salonId: salon.id, salonName: salon.name, serviceName: service.name, stylistName: offer.stylistName, start: offer.startsAt, timeZone: salon.timeZone };
+  const about = {
+    salonId: salon.id,
+    salonName: salon.name,
+    serviceName: service.name,
+    stylistName: offer.stylistName,
+    start: offer.startsAt,
+    timeZone: salon.timeZone,
+  };
   await sendOfferTaken(db, senders, { ...about, offerId: offer.id, to: { id: offer.clientId, name: offer.clientName } });
   for (const o of losers.others) await sendOfferGone(db, senders, { ...about, offerId: o.id, to: { id: o.clientId, name: o.clientName } });
   return viewOffer(db, token, now);

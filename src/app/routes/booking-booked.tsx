@@ -8,10 +8,7 @@ import { NotFoundMessage } from '../not-found-message';
 
 /** The booking was just made, so the cached list is stale by definition: always read it fresh. */
 export async function loader() {
-  await Promise.all([
-    queryClient.fetchQuery({ ...bookingQueries.mine(), staleTime: 0 }),
-    queryClient.ensureQueryData(salonQueries.current()),
-  ]);
+  await Promise.all([queryClient.fetchQuery({ ...bookingQueries.mine(), staleTime: 0 }), queryClient.ensureQueryData(salonQueries.current())]);
   return null;
 }
 

@@ -58,10 +58,7 @@ export function Component() {
         <Link to={paths.salon(salon.slug)} className="text-link">
           Book online at {salon.name}
         </Link>
-        <p className="text-sm text-ink/80">
-          {skinTestWords(salon.skinTestLeadHours)} Tell the
-          salon about any reaction, allergy or recent colour at home.
-        </p>
+        <p className="text-sm text-ink/80">{skinTestWords(salon.skinTestLeadHours)} Tell the salon about any reaction, allergy or recent colour at home.</p>
       </aside>
     </div>
   );

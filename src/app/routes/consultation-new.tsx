@@ -17,7 +17,12 @@ import { ConsultationFields } from '@client/features/consultations/components/co
 import { PhotoPicker } from '@client/features/consultations/components/photo-picker';
 import { ProposalLines, QuoteWarnings } from '@client/features/consultations/components/quote-advice';
 import { QuoteEditor } from '@client/features/consultations/components/quote-editor';
-import { ConsultationFormSchema, emptyConsultation, type ConsultationFormInput, type ConsultationFormValues } from '@client/features/consultations/consultation-form-schema';
+import {
+  ConsultationFormSchema,
+  emptyConsultation,
+  type ConsultationFormInput,
+  type ConsultationFormValues,
+} from '@client/features/consultations/consultation-form-schema';
 import { salonQueries } from '@client/features/salon/api/salon-queries';
 import { queryClient } from '@client/lib/query-client';
 
@@ -40,7 +45,10 @@ export function Component() {
   const { data: client } = useSuspenseQuery(clientQueries.detail(clientId));
   const { data: services } = useSuspenseQuery(catalogueQueries.services());
   const { data: salon } = useSuspenseQuery(salonQueries.current());
-  const form = useForm<ConsultationFormInput, unknown, ConsultationFormValues>({ resolver: zodResolver(ConsultationFormSchema), defaultValues: emptyConsultation() });
+  const form = useForm<ConsultationFormInput, unknown, ConsultationFormValues>({
+    resolver: zodResolver(ConsultationFormSchema),
+    defaultValues: emptyConsultation(),
+  });
   const propose = useProposeQuote();
   const create = useCreateConsultation();
   // The consultation the shown proposal was made for: that is what gets saved with the quote.
@@ -80,7 +88,14 @@ export function Component() {
               strandTest={proposed.quote.strandTest}
               currency={salon.currency}
               submitLabel="Save consultation and quote"
-              initial={{ serviceId: proposed.quote.serviceId ?? colourServices[0]?.id ?? '', stepPlan: proposed.quote.stepPlan, priceCents: proposed.quote.priceCents, depositCents: proposed.quote.depositCents, notes: '', overrideReason: '' }}
+              initial={{
+                serviceId: proposed.quote.serviceId ?? colourServices[0]?.id ?? '',
+                stepPlan: proposed.quote.stepPlan,
+                priceCents: proposed.quote.priceCents,
+                depositCents: proposed.quote.depositCents,
+                notes: '',
+                overrideReason: '',
+              }}
               onSave={(quote) =>
                 create
                   .mutateAsync({ clientId, consultation: proposed.values.consultation, photoIds: proposed.values.photoIds, quote })

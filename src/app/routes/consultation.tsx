@@ -87,7 +87,14 @@ export function Component() {
             strandTest={view.strandTest}
             currency={salon.currency}
             submitLabel="Save quote"
-            initial={{ serviceId: q.serviceId, stepPlan: q.stepPlan, priceCents: q.priceCents, depositCents: q.depositCents, notes: q.notes, overrideReason: q.overrideReason }}
+            initial={{
+              serviceId: q.serviceId,
+              stepPlan: q.stepPlan,
+              priceCents: q.priceCents,
+              depositCents: q.depositCents,
+              notes: q.notes,
+              overrideReason: q.overrideReason,
+            }}
             onSave={(quote) => edit.mutateAsync(quote)}
           />
         </div>

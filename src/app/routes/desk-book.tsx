@@ -40,5 +40,7 @@ export function Component() {
     stepPlan: view.quote.stepPlan,
     summary: `${view.quote.serviceName}, ${view.quote.stepPlan.sittings.length} sitting(s), ${formatMoney(view.quote.priceCents, salon.currency)} with a ${formatMoney(view.quote.depositCents, salon.currency)} deposit.`,
   };
-  return <BookServicePage key={consultationId ?? 'new'} services={services.services} stylists={stylists.stylists} today={todayIn(salon.timeZone)} quote={quote} />;
+  return (
+    <BookServicePage key={consultationId ?? 'new'} services={services.services} stylists={stylists.stylists} today={todayIn(salon.timeZone)} quote={quote} />
+  );
 }

@@ -20,10 +20,7 @@ import { queryClient } from '@client/lib/query-client';
 export async function loader({ params }: LoaderFunctionArgs) {
   // A malformed id can't name a client: show "not found" without asking the server.
   if (!IdSchema.safeParse(params.id).success) throw new Response(null, { status: 404 });
-  await Promise.all([
-    queryClient.ensureQueryData(clientQueries.detail(params.id!)),
-    queryClient.ensureQueryData(salonQueries.current()),
-  ]);
+  await Promise.all([queryClient.ensureQueryData(clientQueries.detail(params.id!)), queryClient.ensureQueryData(salonQueries.current())]);
   return null;
 }
 

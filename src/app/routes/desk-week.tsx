@@ -15,7 +15,10 @@ function stylistParam(search: URLSearchParams): string | undefined {
 
 export async function loader({ request }: LoaderFunctionArgs) {
   const search = new URL(request.url).searchParams;
-  await Promise.all([queryClient.ensureQueryData(catalogueQueries.stylists()), queryClient.ensureQueryData(weekQueries.desk(dateParam(search), stylistParam(search)))]);
+  await Promise.all([
+    queryClient.ensureQueryData(catalogueQueries.stylists()),
+    queryClient.ensureQueryData(weekQueries.desk(dateParam(search), stylistParam(search))),
+  ]);
   return null;
 }
 

@@ -14,10 +14,7 @@ import { salonQueries } from '@client/features/salon/api/salon-queries';
 import { queryClient } from '@client/lib/query-client';
 
 export async function loader() {
-  await Promise.all([
-    queryClient.ensureQueryData(mailboxQueries.messages()),
-    queryClient.ensureQueryData(salonQueries.current()),
-  ]);
+  await Promise.all([queryClient.ensureQueryData(mailboxQueries.messages()), queryClient.ensureQueryData(salonQueries.current())]);
   return null;
 }
 

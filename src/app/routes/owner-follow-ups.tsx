@@ -51,7 +51,12 @@ export function Component() {
                     <Button variant="secondary" onClick={() => setEditing(r.id)} aria-label={`Edit ${r.title}`}>
                       Edit
                     </Button>
-                    <Button variant="secondary" busy={remove.isPending && remove.variables === r.id} onClick={() => remove.mutate(r.id)} aria-label={`Remove ${r.title}`}>
+                    <Button
+                      variant="secondary"
+                      busy={remove.isPending && remove.variables === r.id}
+                      onClick={() => remove.mutate(r.id)}
+                      aria-label={`Remove ${r.title}`}
+                    >
                       Remove
                     </Button>
                   </div>

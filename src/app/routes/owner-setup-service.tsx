@@ -61,7 +61,15 @@ export function Component() {
         }
       />
       <SetupNav />
-      <ServiceForm key={id} id={service?.id ?? null} initial={service ? toForm(service) : blank(data.skills[0] ?? 'colour')} skills={data.skills} currency={salon.currency} active={service?.active ?? true} families={salon.skinTestFamilies} />
+      <ServiceForm
+        key={id}
+        id={service?.id ?? null}
+        initial={service ? toForm(service) : blank(data.skills[0] ?? 'colour')}
+        skills={data.skills}
+        currency={salon.currency}
+        active={service?.active ?? true}
+        families={salon.skinTestFamilies}
+      />
     </div>
   );
 }

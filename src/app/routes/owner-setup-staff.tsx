@@ -13,7 +13,11 @@ import { TimeOffPanel } from '@client/features/setup/components/time-off-panel';
 import { queryClient } from '@client/lib/query-client';
 
 export async function loader() {
-  await Promise.all([queryClient.ensureQueryData(setupQueries.staff()), queryClient.ensureQueryData(setupQueries.services()), queryClient.ensureQueryData(salonQueries.current())]);
+  await Promise.all([
+    queryClient.ensureQueryData(setupQueries.staff()),
+    queryClient.ensureQueryData(setupQueries.services()),
+    queryClient.ensureQueryData(salonQueries.current()),
+  ]);
   return null;
 }
 

@@ -14,9 +14,5 @@ const looks: Record<BookingStatus, string> = {
 type Props = { status: BookingStatus };
 
 export function BookingStatusBadge({ status }: Props) {
-  return (
-    <span className={`inline-block rounded-full border-2 bg-white px-2 py-0.5 text-xs font-bold ${looks[status]}`}>
-      {bookingStatusLabels[status]}
-    </span>
-  );
+  return <span className={`inline-block rounded-full border-2 bg-white px-2 py-0.5 text-xs font-bold ${looks[status]}`}>{bookingStatusLabels[status]}</span>;
 }

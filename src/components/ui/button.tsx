@@ -18,13 +18,7 @@ type Props = ButtonHTMLAttributes<HTMLButtonElement> & { variant?: Variant; busy
 
 export function Button({ variant = 'primary', busy = false, className = '', children, disabled, ...rest }: Props) {
   return (
-    <button
-      type="button"
-      {...rest}
-      disabled={disabled || busy}
-      aria-busy={busy || undefined}
-      className={`${buttonClasses(variant)} ${className}`}
-    >
+    <button type="button" {...rest} disabled={disabled || busy} aria-busy={busy || undefined} className={`${buttonClasses(variant)} ${className}`}>
       {children}
     </button>
   );

@@ -51,7 +51,14 @@ export function DataTable<T>({ label, rows, columns, filterHint, initialSort = [
         <label htmlFor={filterId} className="font-bold">
           Filter {label.toLowerCase()}
         </label>
-        <input id={filterId} type="search" value={filter} onChange={(e) => table.setGlobalFilter(e.target.value)} placeholder={filterHint} className="min-h-11 rounded-lg border border-ink/40 bg-white px-3" />
+        <input
+          id={filterId}
+          type="search"
+          value={filter}
+          onChange={(e) => table.setGlobalFilter(e.target.value)}
+          placeholder={filterHint}
+          className="min-h-11 rounded-lg border border-ink/40 bg-white px-3"
+        />
       </div>
       <p aria-live="polite" className="text-sm text-ink/80">
         {shown} of {rows.length} shown

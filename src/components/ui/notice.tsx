@@ -15,7 +15,10 @@ const looks = {
 export function Notice({ tone, title, children, action }: Props) {
   const look = looks[tone];
   return (
-    <div role={tone === 'info' ? 'status' : 'alert'} className={`flex flex-col gap-2 rounded-lg border-l-8 bg-white px-4 py-3 ring-1 ring-ink/10 ${look.border}`}>
+    <div
+      role={tone === 'info' ? 'status' : 'alert'}
+      className={`flex flex-col gap-2 rounded-lg border-l-8 bg-white px-4 py-3 ring-1 ring-ink/10 ${look.border}`}
+    >
       <p className="flex items-center gap-2 font-bold">
         <span aria-hidden="true" className={`inline-flex size-6 items-center justify-center rounded-full border-2 text-sm ${look.border}`}>
           {look.mark}

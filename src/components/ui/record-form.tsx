@@ -44,7 +44,16 @@ type Props = {
 };
 
 /** The frame of a record form: its heading, a message about the whole form, the fields and one submit button. */
-export function RecordForm({ label, title, submitLabel, busy, error, onSubmit, className = 'flex flex-col gap-3 rounded-lg p-3 ring-1 ring-ink/15', children }: Props) {
+export function RecordForm({
+  label,
+  title,
+  submitLabel,
+  busy,
+  error,
+  onSubmit,
+  className = 'flex flex-col gap-3 rounded-lg p-3 ring-1 ring-ink/15',
+  children,
+}: Props) {
   return (
     <form onSubmit={(e) => void onSubmit(e)} noValidate aria-label={label} className={className}>
       {title && <p className="font-bold">{title}</p>}

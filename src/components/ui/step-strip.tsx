@@ -11,7 +11,10 @@ type Props = { steps: Step[]; timeZone: string };
 
 /** A sitting's steps as one horizontal bar (widths by minutes), with the steps in words for screen readers. */
 export function StepStrip({ steps, timeZone }: Props) {
-  const total = Math.max(1, steps.reduce((sum, s) => sum + minutesBetween(s.start, s.end), 0));
+  const total = Math.max(
+    1,
+    steps.reduce((sum, s) => sum + minutesBetween(s.start, s.end), 0),
+  );
   return (
     <div>
       <div aria-hidden="true" className="flex h-6 overflow-hidden rounded ring-1 ring-ink/20">

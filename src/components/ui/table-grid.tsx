@@ -24,11 +24,22 @@ export function TableGrid<T>({ table, label, caption, numeric = () => false, min
               {group.headers.map((header, i) => {
                 const sorted = header.column.getIsSorted();
                 return (
-                  <th key={header.id} scope="col" aria-sort={sorted ? sortWords[sorted] : undefined} className={`px-3 py-2 align-bottom ${numeric(i) ? 'text-right' : ''}`}>
+                  <th
+                    key={header.id}
+                    scope="col"
+                    aria-sort={sorted ? sortWords[sorted] : undefined}
+                    className={`px-3 py-2 align-bottom ${numeric(i) ? 'text-right' : ''}`}
+                  >
                     {header.column.getCanSort() ? (
-                      <button type="button" onClick={header.column.getToggleSortingHandler()} className="inline-flex min-h-11 items-center gap-1 font-bold print:min-h-0">
+                      <button
+                        type="button"
+                        onClick={header.column.getToggleSortingHandler()}
+                        className="inline-flex min-h-11 items-center gap-1 font-bold print:min-h-0"
+                      >
                         {flexRender(header.column.columnDef.header, header.getContext())}
-                        <span aria-hidden="true" className="print:hidden">{sorted === 'asc' ? '▲' : sorted === 'desc' ? '▼' : '↕'}</span>
+                        <span aria-hidden="true" className="print:hidden">
+                          {sorted === 'asc' ? '▲' : sorted === 'desc' ? '▼' : '↕'}
+                        </span>
                       </button>
                     ) : (
                       flexRender(header.column.columnDef.header, header.getContext())

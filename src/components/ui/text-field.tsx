@@ -13,11 +13,7 @@ export function TextField({ label, error, hint, id, className = '', ...rest }: P
   return (
     <FieldFrame id={id} label={label} hint={hint} error={error} className={className}>
       {(control) => (
-        <input
-          {...control}
-          className="min-h-11 rounded-lg border border-ink/40 bg-white px-3 py-2 text-base aria-invalid:border-brick"
-          {...rest}
-        />
+        <input {...control} className="min-h-11 rounded-lg border border-ink/40 bg-white px-3 py-2 text-base aria-invalid:border-brick" {...rest} />
       )}
     </FieldFrame>
   );

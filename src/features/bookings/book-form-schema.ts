@@ -5,7 +5,10 @@ import { StepPlanSchema } from '@shared/schemas/step-plan.schemas';
 
 /** The desk's "Book a service" form: the options request, with "" meaning "any stylist with the skill". */
 export const BookFormSchema = z.object({
-  clientId: z.string().pipe(IdSchema.or(z.literal(''))).refine(Boolean, 'Pick a client or add a new one'),
+  clientId: z
+    .string()
+    .pipe(IdSchema.or(z.literal('')))
+    .refine(Boolean, 'Pick a client or add a new one'),
   serviceId: z.string().refine(Boolean, 'Pick a service'),
   stylistId: z.string(),
   earliestDate: LocalDateSchema,

@@ -5,9 +5,7 @@ describe('describeChange', () => {
   it('lists only the values that changed, nested ones by path', () => {
     const before = { status: 'booked', sittings: [{ start: '2027-03-02T09:00:00-07:00', chair: 'A' }] };
     const after = { status: 'booked', sittings: [{ start: '2027-03-03T10:00:00-07:00', chair: 'A' }] };
-    expect(describeChange(before, after)).toEqual([
-      { field: 'sittings.1.start', before: '2027-03-02T09:00:00-07:00', after: '2027-03-03T10:00:00-07:00' },
-    ]);
+    expect(describeChange(before, after)).toEqual([{ field: 'sittings.1.start', before: '2027-03-02T09:00:00-07:00', after: '2027-03-03T10:00:00-07:00' }]);
   });
   it('shows every field of a created record as new', () => {
     expect(describeChange(null, { status: 'booked' })).toEqual([{ field: 'status', before: undefined, after: 'booked' }]);
@@ -29,7 +27,11 @@ describe('fieldLabel and valueText', () => {
 
 describe('describeBookingChange (a booking’s history in the app’s words)', () => {
   // America/Denver is UTC−7 in December (MST, IANA tz database): 16:00Z is 9:00 AM, 21:10Z is 2:10 PM.
-  const words = { timeZone: 'America/Denver', currency: 'USD', stylistName: (id: string) => (id === '6a87ef65-2e24-4309-ac67-413002e78490' ? 'Ana Moreno' : undefined) };
+  const words = {
+    timeZone: 'America/Denver',
+    currency: 'USD',
+    stylistName: (id: string) => (id === '6a87ef65-2e24-4309-ac67-413002e78490' ? 'Ana Moreno' : undefined),
+  };
   const sitting1 = { sitting: 1, chair: 'Chair 1', start: '2026-12-01T16:00:00.000Z', end: '2026-12-01T21:10:00.000Z' };
   const sitting2 = { sitting: 2, chair: 'Chair 1', start: '2026-12-03T16:00:00.000Z', end: '2026-12-03T20:10:00.000Z' };
 

@@ -95,9 +95,13 @@ export function describeBookingChange(before: unknown, after: unknown, words: Hi
   const push = (label: string, a: string | null, b: string | null) => {
     if (a !== b) lines.push({ label, before: a, after: b });
   };
-  const text = <T,>(value: T | undefined, show: (v: T) => string) => (value === undefined || value === null ? null : show(value));
+  const text = <T>(value: T | undefined, show: (v: T) => string) => (value === undefined || value === null ? null : show(value));
 
-  push('Status', text(was.status, (s) => bookingStatusLabels[s as keyof typeof bookingStatusLabels] ?? s), text(now.status, (s) => bookingStatusLabels[s as keyof typeof bookingStatusLabels] ?? s));
+  push(
+    'Status',
+    text(was.status, (s) => bookingStatusLabels[s as keyof typeof bookingStatusLabels] ?? s),
+    text(now.status, (s) => bookingStatusLabels[s as keyof typeof bookingStatusLabels] ?? s),
+  );
   const stylist = (s: string) => (ID.test(s) ? (words.stylistName(s) ?? 'a stylist no longer listed') : s);
   push('Stylist', text(was.stylist, stylist), text(now.stylist, stylist));
 
@@ -121,7 +125,12 @@ export function describeBookingChange(before: unknown, after: unknown, words: Hi
     Object.fromEntries(Object.entries(was).filter(([k]) => !known.has(k))),
     Object.fromEntries(Object.entries(now).filter(([k]) => !known.has(k))),
   );
-  for (const c of rest) lines.push({ label: fieldLabel(c.field), before: c.before === undefined ? null : valueText(c.before, instant), after: c.after === undefined ? null : valueText(c.after, instant) });
+  for (const c of rest)
+    lines.push({
+      label: fieldLabel(c.field),
+      before: c.before === undefined ? null : valueText(c.before, instant),
+      after: c.after === undefined ? null : valueText(c.after, instant),
+    });
   return lines;
 }
 

@@ -8,9 +8,18 @@ export type ConsultationFormValues = z.output<typeof ConsultationFormSchema>;
 
 export const emptyConsultation = (): ConsultationFormValues => ({
   consultation: {
-    currentLevel: 5, targetLevel: 5,
+    currentLevel: 5,
+    targetLevel: 5,
     history: { natural: true, permanent: false, directDye: false, boxDye: false, henna: false, previousLightening: false },
-    length: 'medium', density: 'medium', elasticity: 'good', porosity: 'normal', conditionNotes: '', strandTest: 'none', wantsCut: false, vivid: false, notes: '',
+    length: 'medium',
+    density: 'medium',
+    elasticity: 'good',
+    porosity: 'normal',
+    conditionNotes: '',
+    strandTest: 'none',
+    wantsCut: false,
+    vivid: false,
+    notes: '',
   },
   photoIds: [],
 });

@@ -21,16 +21,28 @@ const day: DayView = {
   date: '2027-03-02',
   timeZone: 'UTC',
   hours: [{ start: '09:00', end: '21:00' }],
-  stylists: [{ id: id(1), name: 'Stylist 1', skills: [] }, { id: id(2), name: 'Stylist 2', skills: [] }],
-  chairs: [{ id: id(7), name: 'Chair 7' }, { id: id(8), name: 'Chair 8' }],
+  stylists: [
+    { id: id(1), name: 'Stylist 1', skills: [] },
+    { id: id(2), name: 'Stylist 2', skills: [] },
+  ],
+  chairs: [
+    { id: id(7), name: 'Chair 7' },
+    { id: id(8), name: 'Chair 8' },
+  ],
   bookings: [booking(3, 1, 7, '09:00', '11:00'), booking(4, 2, 7, '12:00', '13:00'), booking(5, 1, 8, '10:00', '10:30')],
 };
 
 describe('layOutDay', () => {
   it('puts each sitting in its stylist column, overlapping ones side by side', () => {
     const layout = layOutDay(day);
-    expect(layout.columns.map((c) => [c.name, c.sittings.length])).toEqual([['Stylist 1', 2], ['Stylist 2', 1]]);
-    expect(layout.columns[0].sittings.map((s) => [s.lane, s.lanes])).toEqual([[0, 2], [1, 2]]);
+    expect(layout.columns.map((c) => [c.name, c.sittings.length])).toEqual([
+      ['Stylist 1', 2],
+      ['Stylist 2', 1],
+    ]);
+    expect(layout.columns[0].sittings.map((s) => [s.lane, s.lanes])).toEqual([
+      [0, 2],
+      [1, 2],
+    ]);
   });
 
   it('in the chair view, groups the same sittings by chair', () => {
@@ -44,12 +56,22 @@ describe('layOutDay', () => {
   it('covers the opening hours even when the bookings end early, and greys what lies outside them', () => {
     // Open 09:00–21:00, bookings 09:00–13:00: the timeline still runs to 9 PM (the closing time), not to the last booking.
     expect(layOutDay(day)).toMatchObject({ firstHour: 9, lastHour: 21, closed: false, closedSpans: [] });
-    const late = { ...day, hours: [{ start: '10:00', end: '14:00' }, { start: '15:00', end: '19:30' }] };
+    const late = {
+      ...day,
+      hours: [
+        { start: '10:00', end: '14:00' },
+        { start: '15:00', end: '19:30' },
+      ],
+    };
     // A 09:00 sitting before a 10:00 opening widens the timeline; the gaps and the half hour to 20:00 are closed.
     expect(layOutDay(late)).toMatchObject({
       firstHour: 9,
       lastHour: 20,
-      closedSpans: [{ fromMin: 540, toMin: 600 }, { fromMin: 840, toMin: 900 }, { fromMin: 1170, toMin: 1200 }],
+      closedSpans: [
+        { fromMin: 540, toMin: 600 },
+        { fromMin: 840, toMin: 900 },
+        { fromMin: 1170, toMin: 1200 },
+      ],
     });
   });
 

@@ -34,9 +34,7 @@ export function developingTimer(step: Pick<Step, 'start' | 'end' | 'minMinutes' 
 }
 
 export type SittingProgress =
-  | { state: 'upcoming'; next: Step }
-  | { state: 'in_progress'; step: Step; index: number; next: Step | null }
-  | { state: 'finished' };
+  { state: 'upcoming'; next: Step } | { state: 'in_progress'; step: Step; index: number; next: Step | null } | { state: 'finished' };
 
 /** Which step of a sitting is under way at `now` (a developing step stays "in progress" until the next step starts). */
 export function sittingProgress(sitting: Pick<SittingView, 'steps'>, now: DateTime): SittingProgress {

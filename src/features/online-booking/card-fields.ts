@@ -41,10 +41,26 @@ export function cardFieldsSchema(today: { year: number; month: number }) {
       number: z
         .string()
         .transform(cardDigits)
-        .pipe(z.string().regex(/^\d{12,19}$/, 'Enter the card number').refine(passesLuhn, 'Check the card number')),
-      month: z.string().trim().regex(/^(0?[1-9]|1[0-2])$/, 'Enter the month, 1 to 12').transform(Number),
-      year: z.string().trim().regex(/^(\d{2}|\d{4})$/, 'Enter the year, e.g. 2030').transform(readYear),
-      cvc: z.string().trim().regex(/^\d{3,4}$/, 'Enter the 3 or 4 digits on the back'),
+        .pipe(
+          z
+            .string()
+            .regex(/^\d{12,19}$/, 'Enter the card number')
+            .refine(passesLuhn, 'Check the card number'),
+        ),
+      month: z
+        .string()
+        .trim()
+        .regex(/^(0?[1-9]|1[0-2])$/, 'Enter the month, 1 to 12')
+        .transform(Number),
+      year: z
+        .string()
+        .trim()
+        .regex(/^(\d{2}|\d{4})$/, 'Enter the year, e.g. 2030')
+        .transform(readYear),
+      cvc: z
+        .string()
+        .trim()
+        .regex(/^\d{3,4}$/, 'Enter the 3 or 4 digits on the back'),
     })
     .superRefine((card, ctx) => {
       // zod still runs this when a field failed above (with its raw text): judge expiry only on a real month and year.

@@ -29,16 +29,29 @@ describe('confirmationWords', () => {
 
   it('names every channel that went, and only those the client has', () => {
     const sent = { status: 'sent' as const, sendAt: '2027-03-03T17:00:00Z', sentAt: '2027-03-03T17:00:01Z' };
-    expect(confirmationWords({ ...base, sends: [{ channel: 'email', ...sent }, { channel: 'sms', ...sent }] })).toEqual(['We sent a confirmation by e-mail and text.']);
+    expect(
+      confirmationWords({
+        ...base,
+        sends: [
+          { channel: 'email', ...sent },
+          { channel: 'sms', ...sent },
+        ],
+      }),
+    ).toEqual(['We sent a confirmation by e-mail and text.']);
     expect(confirmationWords({ ...base, sends: [{ channel: 'email', ...sent }] })).toEqual(['We sent a confirmation by e-mail.']);
   });
 
   it('tells what is still on its way or failed, and when nothing is sent at all', () => {
     const at = { sendAt: '2027-03-03T17:00:00Z', sentAt: null };
-    expect(confirmationWords({ ...base, sends: [{ channel: 'email', status: 'sending', ...at }, { channel: 'sms', status: 'failed', ...at }] })).toEqual([
-      'The confirmation e-mail is on its way.',
-      'The confirmation text could not be sent; your booking is in My bookings.',
-    ]);
+    expect(
+      confirmationWords({
+        ...base,
+        sends: [
+          { channel: 'email', status: 'sending', ...at },
+          { channel: 'sms', status: 'failed', ...at },
+        ],
+      }),
+    ).toEqual(['The confirmation e-mail is on its way.', 'The confirmation text could not be sent; your booking is in My bookings.']);
     expect(confirmationWords({ ...base, sends: [] })[0]).toMatch(/^No confirmation message is sent/);
   });
 });

@@ -25,6 +25,9 @@ export function confirmationWords({ sends, timeZone, quietHours }: ConfirmationS
 function waitingWords(send: Send, timeZone: string, quietHours: ConfirmationSends['quietHours']): string {
   const salon = formatFor(timeZone);
   const when = `${formatTime(send.sendAt, salon)} on ${formatDate(send.sendAt, salon, { width: 'short' })} (salon time)`;
-  const why = send.channel === 'sms' && quietHours ? `: the salon sends no texts between ${formatClock(quietHours.from, salon)} and ${formatClock(quietHours.to, salon)}` : '';
+  const why =
+    send.channel === 'sms' && quietHours
+      ? `: the salon sends no texts between ${formatClock(quietHours.from, salon)} and ${formatClock(quietHours.to, salon)}`
+      : '';
   return `The confirmation ${channelName[send.channel]} goes at ${when}${why}.`;
 }

@@ -102,10 +102,18 @@ export function closedStretches(week: Pick<WeekView, 'days'>, shown: { from: str
       const out: ClosedStretch[] = [];
       let cursor = first;
       for (const h of [...d.hours].sort((a, b) => a.start.localeCompare(b.start))) {
-        if (minutesOf(h.start) > cursor) out.push({ id: `closed:${d.date}:${cursor}`, start: at(d.date, cursor), end: at(d.date, minutesOf(h.start)), display: 'background', classNames: ['salon-closed'] });
+        if (minutesOf(h.start) > cursor)
+          out.push({
+            id: `closed:${d.date}:${cursor}`,
+            start: at(d.date, cursor),
+            end: at(d.date, minutesOf(h.start)),
+            display: 'background',
+            classNames: ['salon-closed'],
+          });
         cursor = Math.max(cursor, minutesOf(h.end));
       }
-      if (cursor < last) out.push({ id: `closed:${d.date}:${cursor}`, start: at(d.date, cursor), end: at(d.date, last), display: 'background', classNames: ['salon-closed'] });
+      if (cursor < last)
+        out.push({ id: `closed:${d.date}:${cursor}`, start: at(d.date, cursor), end: at(d.date, last), display: 'background', classNames: ['salon-closed'] });
       return out;
     });
 }

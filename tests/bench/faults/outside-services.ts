@@ -45,10 +45,22 @@ export async function outsideServicesFault(databaseUrl: string, env: Record<stri
       fake.slowNext(10, SLOW_MS);
     }
     const desks = await Promise.all(apps.map((a) => signIn(a.url, 'desk@demo.test', DEMO_PASSWORD)));
-    const services = (await sendJson(apps[0].url, desks[0], 'GET', '/api/services')).body.services as { id: string; name: string; stepPlan: unknown; needsSkinTest: boolean }[];
+    const services = (await sendJson(apps[0].url, desks[0], 'GET', '/api/services')).body.services as {
+      id: string;
+      name: string;
+      stepPlan: unknown;
+      needsSkinTest: boolean;
+    }[];
     const cut = services.find((s) => !s.needsSkinTest && s.name === 'Cut & finish') ?? services.find((s) => !s.needsSkinTest)!;
     const earliestDate = new Date(Date.now() + 75 * 86_400_000).toISOString().slice(0, 10);
-    const asked = await sendJson(apps[0].url, desks[0], 'POST', '/api/booking-options', { clientId: clients[0], serviceId: cut.id, stepPlan: cut.stepPlan, stylistId: null, earliestDate, limit: 20 });
+    const asked = await sendJson(apps[0].url, desks[0], 'POST', '/api/booking-options', {
+      clientId: clients[0],
+      serviceId: cut.id,
+      stepPlan: cut.stepPlan,
+      stylistId: null,
+      earliestDate,
+      limit: 20,
+    });
     if (asked.status !== 200) throw new Error(`booking options answered ${asked.status}: ${JSON.stringify(asked.body)}`);
     const options = asked.body.options as { stylistId: string; sittings: { start: string }[] }[];
     const bookingIds: string[] = [];
@@ -57,26 +69,42 @@ export async function outsideServicesFault(databaseUrl: string, env: Record<stri
       const n = i % apps.length;
       const started = Date.now();
       const res = await sendJson(apps[n].url, desks[n], 'POST', '/api/bookings', {
-        clientId: clients[(i + 1) % clients.length], serviceId: cut.id, stepPlan: cut.stepPlan, stylistId: options[i].stylistId, start: options[i].sittings[0].start, idempotencyKey: randomUUID(),
+        clientId: clients[(i + 1) % clients.length],
+        serviceId: cut.id,
+        stepPlan: cut.stepPlan,
+        stylistId: options[i].stylistId,
+        start: options[i].sittings[0].start,
+        idempotencyKey: randomUUID(),
       });
       deskTimes.push(Date.now() - started);
       if (res.status === 201) bookingIds.push(res.body.id);
     }
     deskTimes.sort((a, b) => a - b);
-    console.log(`   desk bookings through both servers while e-mail and SMS refuse, then answer ${SLOW_MS / 1000} s late: ${bookingIds.length} booked; answer p50 ${percentile(deskTimes, 50)} ms, p95 ${percentile(deskTimes, 95)} ms`);
+    console.log(
+      `   desk bookings through both servers while e-mail and SMS refuse, then answer ${SLOW_MS / 1000} s late: ${bookingIds.length} booked; answer p50 ${percentile(deskTimes, 50)} ms, p95 ${percentile(deskTimes, 95)} ms`,
+    );
 
     // Online deposits by the demo client, alternating servers: the payments API fails once, then answers late.
     payments.failNext(1);
     payments.slowNext(4, SLOW_MS);
     const consultation = services.find((s) => s.name === 'Colour consultation')!;
     const clientSessions = await Promise.all(apps.map((a) => signIn(a.url, 'client@demo.test', DEMO_PASSWORD)));
-    const free = await (await fetch(`${apps[0].url}/api/public/salons/${demoSalon.slug}/availability?serviceId=${consultation.id}&from=${earliestDate}`, { headers: { 'x-forwarded-for': '10.9.0.1' } })).json() as { times: { start: string; stylistId: string }[] };
+    const free = (await (
+      await fetch(`${apps[0].url}/api/public/salons/${demoSalon.slug}/availability?serviceId=${consultation.id}&from=${earliestDate}`, {
+        headers: { 'x-forwarded-for': '10.9.0.1' },
+      })
+    ).json()) as { times: { start: string; stylistId: string }[] };
     const payTimes: number[] = [];
     const paid: string[] = [];
     for (let i = 0; i < 4; i++) {
       const n = i % apps.length;
       const slot = free.times[i * 9];
-      const held = await sendJson(apps[n].url, clientSessions[n], 'POST', '/api/public/holds', { salonSlug: demoSalon.slug, serviceId: consultation.id, stylistId: slot.stylistId, start: slot.start });
+      const held = await sendJson(apps[n].url, clientSessions[n], 'POST', '/api/public/holds', {
+        salonSlug: demoSalon.slug,
+        serviceId: consultation.id,
+        stylistId: slot.stylistId,
+        start: slot.start,
+      });
       if (held.status !== 201) {
         failures.push(`an online hold was refused (${held.status})`);
         continue;
@@ -96,7 +124,9 @@ export async function outsideServicesFault(databaseUrl: string, env: Record<stri
     }
     payTimes.sort((a, b) => a - b);
     const charges = paid.map((id) => [...payments.intents.values()].filter((x) => x.metadata.booking === id && x.status === 'succeeded').length);
-    console.log(`   online deposits while payments fail once, then answer ${SLOW_MS / 1000} s late: ${paid.length} paid; answer p50 ${percentile(payTimes, 50)} ms, max ${payTimes.at(-1)} ms; charges per deposit ${JSON.stringify(charges)} (each paid twice over, same key, both servers)`);
+    console.log(
+      `   online deposits while payments fail once, then answer ${SLOW_MS / 1000} s late: ${paid.length} paid; answer p50 ${percentile(payTimes, 50)} ms, max ${payTimes.at(-1)} ms; charges per deposit ${JSON.stringify(charges)} (each paid twice over, same key, both servers)`,
+    );
     if (charges.some((c) => c !== 1)) failures.push(`deposits charged ${JSON.stringify(charges)} times`);
 
     // Wait for the send log to settle: retries back off 1, 2, 4 … minutes and go out from the per-minute pass.
@@ -104,11 +134,26 @@ export async function outsideServicesFault(databaseUrl: string, env: Record<stri
     const started = Date.now();
     let pending = Infinity;
     while (Date.now() - started < SETTLE_MINUTES * 60_000) {
-      pending = Number((await db.selectFrom('messages').select((eb) => eb.fn.countAll<string>().as('n')).where('booking_id', 'in', ids).where('status', 'in', ['queued', 'sending']).where('send_at', '<=', new Date(Date.now() + 10 * 60_000)).executeTakeFirstOrThrow()).n);
+      pending = Number(
+        (
+          await db
+            .selectFrom('messages')
+            .select((eb) => eb.fn.countAll<string>().as('n'))
+            .where('booking_id', 'in', ids)
+            .where('status', 'in', ['queued', 'sending'])
+            .where('send_at', '<=', new Date(Date.now() + 10 * 60_000))
+            .executeTakeFirstOrThrow()
+        ).n,
+      );
       if (pending === 0) break;
       await sleep(2_000);
     }
-    const rows = await db.selectFrom('messages').select(['channel', 'to_address', 'subject', 'body', 'status', 'attempts']).where('booking_id', 'in', ids).where('status', 'in', ['sent', 'failed']).execute();
+    const rows = await db
+      .selectFrom('messages')
+      .select(['channel', 'to_address', 'subject', 'body', 'status', 'attempts'])
+      .where('booking_id', 'in', ids)
+      .where('status', 'in', ['sent', 'failed'])
+      .execute();
     const norm = (s: string) => s.replace(/\r\n/g, '\n').trim();
     const deliveries = rows.map((r) =>
       r.channel === 'sms'
@@ -119,13 +164,21 @@ export async function outsideServicesFault(databaseUrl: string, env: Record<stri
     const once = rows.filter((r, i) => r.status === 'sent' && deliveries[i] === 1).length;
     const duplicates = deliveries.reduce((n, d) => n + Math.max(0, d - 1), 0);
     const retried = rows.filter((r) => r.attempts > 1).length;
-    console.log(`   send log after ${((Date.now() - started) / 1000).toFixed(0)} s: ${sent} sent (${retried} after a retry), ${rows.length - sent} failed, ${pending} still pending; delivered exactly once ${once} of ${sent}; duplicate deliveries ${duplicates}`);
+    console.log(
+      `   send log after ${((Date.now() - started) / 1000).toFixed(0)} s: ${sent} sent (${retried} after a retry), ${rows.length - sent} failed, ${pending} still pending; delivered exactly once ${once} of ${sent}; duplicate deliveries ${duplicates}`,
+    );
     console.log(`   the fakes kept e-mail ${smtp.messages.length}, SMS ${sms.messages.length} (with messages of other bookings and staff lists due meanwhile)`);
     if (duplicates) failures.push(`${duplicates} duplicate deliveries`);
     if (once !== sent) failures.push(`${sent - once} sent messages not delivered exactly once`);
     if (pending) {
       failures.push(`${pending} messages still waiting after ${SETTLE_MINUTES} minutes`);
-      const waiting = await db.selectFrom('messages').select(['channel', 'kind', 'status', 'attempts', 'send_at', 'claimed_at', 'last_error']).where('booking_id', 'in', ids).where('status', 'in', ['queued', 'sending']).where('send_at', '<=', new Date(Date.now() + 10 * 60_000)).execute();
+      const waiting = await db
+        .selectFrom('messages')
+        .select(['channel', 'kind', 'status', 'attempts', 'send_at', 'claimed_at', 'last_error'])
+        .where('booking_id', 'in', ids)
+        .where('status', 'in', ['queued', 'sending'])
+        .where('send_at', '<=', new Date(Date.now() + 10 * 60_000))
+        .execute();
       for (const w of waiting) console.log(`     waiting: ${JSON.stringify(w)}`);
     }
     if (!sent) failures.push('no message was sent');

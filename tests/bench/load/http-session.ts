@@ -32,8 +32,14 @@ export async function signIn(baseUrl: string, email: string, password: string): 
 }
 
 /** A JSON request as the signed-in browser sends it (cookie and CSRF token); the answer's status and body. */
-// eslint-disable-next-line @typescript-eslint/no-explicit-any -- bench scripts read whichever fields of an answer they need
-export async function sendJson(baseUrl: string, session: HttpSession, method: 'GET' | 'POST', path: string, body?: object): Promise<{ status: number; body: any }> {
+export async function sendJson(
+  baseUrl: string,
+  session: HttpSession,
+  method: 'GET' | 'POST',
+  path: string,
+  body?: object,
+  // eslint-disable-next-line @typescript-eslint/no-explicit-any -- bench scripts read whichever fields of an answer they need
+): Promise<{ status: number; body: any }> {
   const res = await fetch(`${baseUrl}${path}`, {
     method,
     headers: { cookie: session.cookie, 'x-csrf-token': session.csrf, ...(body ? { 'content-type': 'application/json' } : {}) },

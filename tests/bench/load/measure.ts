@@ -28,7 +28,8 @@ export interface LoadSpec {
 }
 
 // No answer within the run counts as infinitely slow, never as 0 ms.
-export const percentile = (sorted: number[], p: number) => (sorted.length ? sorted[Math.min(sorted.length - 1, Math.ceil((p / 100) * sorted.length) - 1)] : Number.POSITIVE_INFINITY);
+export const percentile = (sorted: number[], p: number) =>
+  sorted.length ? sorted[Math.min(sorted.length - 1, Math.ceil((p / 100) * sorted.length) - 1)] : Number.POSITIVE_INFINITY;
 
 /** Runs autocannon against every url at once (connections split between them); latencies per answer. */
 export async function measure(spec: LoadSpec): Promise<Figures> {
@@ -38,28 +39,39 @@ export async function measure(spec: LoadSpec): Promise<Figures> {
   let counter = 0;
   const started = Date.now();
   await Promise.all(
-    spec.urls.map((url) => new Promise<void>((resolve, reject) => {
-      const instance = autocannon({
-        url,
-        connections: Math.max(1, Math.round(spec.connections / spec.urls.length)),
-        ...(spec.amount ? { amount: Math.round(spec.amount / spec.urls.length) } : { duration: spec.duration ?? 10 }),
-        timeout: 30,
-        requests: [
-          {
-            method: spec.method ?? 'GET',
-            setupRequest: (req) => {
-              const next = spec.next(counter++);
-              return { ...req, path: next.path, body: next.body, headers: { ...spec.headers, ...(next.body ? { 'content-type': 'application/json' } : {}), ...next.headers } };
+    spec.urls.map(
+      (url) =>
+        new Promise<void>((resolve, reject) => {
+          const instance = autocannon(
+            {
+              url,
+              connections: Math.max(1, Math.round(spec.connections / spec.urls.length)),
+              ...(spec.amount ? { amount: Math.round(spec.amount / spec.urls.length) } : { duration: spec.duration ?? 10 }),
+              timeout: 30,
+              requests: [
+                {
+                  method: spec.method ?? 'GET',
+                  setupRequest: (req) => {
+                    const next = spec.next(counter++);
+                    return {
+                      ...req,
+                      path: next.path,
+                      body: next.body,
+                      headers: { ...spec.headers, ...(next.body ? { 'content-type': 'application/json' } : {}), ...next.headers },
+                    };
+                  },
+                },
+              ],
             },
-          },
-        ],
-      }, (err) => (err ? reject(err) : resolve()));
-      instance.on('response', (_client, statusCode, _bytes, responseTime) => {
-        latencies.push(responseTime);
-        statuses[statusCode] = (statuses[statusCode] ?? 0) + 1;
-      });
-      instance.on('reqError', () => errors++);
-    })),
+            (err) => (err ? reject(err) : resolve()),
+          );
+          instance.on('response', (_client, statusCode, _bytes, responseTime) => {
+            latencies.push(responseTime);
+            statuses[statusCode] = (statuses[statusCode] ?? 0) + 1;
+          });
+          instance.on('reqError', () => errors++);
+        }),
+    ),
   );
   const seconds = (Date.now() - started) / 1000;
   latencies.sort((a, b) => a - b);
@@ -73,7 +85,9 @@ export async function measure(spec: LoadSpec): Promise<Figures> {
     p95: round(percentile(latencies, 95)),
     p99: round(percentile(latencies, 99)),
     statuses,
-    serverErrors: Object.entries(statuses).filter(([s]) => Number(s) >= 500).reduce((n, [, c]) => n + c, 0),
+    serverErrors: Object.entries(statuses)
+      .filter(([s]) => Number(s) >= 500)
+      .reduce((n, [, c]) => n + c, 0),
     errors,
   };
 }
@@ -96,7 +110,13 @@ export async function drained(urls: string[], maxSeconds = 180): Promise<number>
   const started = Date.now();
   for (;;) {
     const t0 = Date.now();
-    await Promise.all(urls.map((u) => fetch(`${u}/api/health`).then((r) => r.arrayBuffer()).catch(() => null)));
+    await Promise.all(
+      urls.map((u) =>
+        fetch(`${u}/api/health`)
+          .then((r) => r.arrayBuffer())
+          .catch(() => null),
+      ),
+    );
     if (Date.now() - t0 < 50 || Date.now() - started > maxSeconds * 1000) return (Date.now() - started) / 1000;
     await new Promise((r) => setTimeout(r, 200));
   }

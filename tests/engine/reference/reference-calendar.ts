@@ -84,10 +84,19 @@ export function buildCalendar(s: Scenario): MinuteCalendar {
   const length = localToUtc(s.horizon.to, zone) - h0;
   const zeros = () => new Uint8Array(length);
   const cal: MinuteCalendar = {
-    zone, g: s.granularityMinutes, h0, length,
-    salon: zeros(), localDay: new Int32Array(length), onGrid: zeros(),
-    clock: s.stylists.map(zeros), hands: s.stylists.map(zeros), developing: s.stylists.map(zeros),
-    clients: s.stylists.map(zeros), chairBusy: s.chairs.map(zeros), basinBusy: s.basins.map(zeros),
+    zone,
+    g: s.granularityMinutes,
+    h0,
+    length,
+    salon: zeros(),
+    localDay: new Int32Array(length),
+    onGrid: zeros(),
+    clock: s.stylists.map(zeros),
+    hands: s.stylists.map(zeros),
+    developing: s.stylists.map(zeros),
+    clients: s.stylists.map(zeros),
+    chairBusy: s.chairs.map(zeros),
+    basinBusy: s.basins.map(zeros),
   };
   const offsets = minuteOffsets(zone, h0, length);
   for (let i = 0; i < length; i++) {

@@ -9,8 +9,7 @@ export interface ReferenceWindow {
   fits: string[];
 }
 
-const inWindow = (cal: MinuteCalendar, si: number, i: number): boolean =>
-  cal.developing[si][i] === 1 && cal.clock[si][i] === 1 && cal.hands[si][i] === 0;
+const inWindow = (cal: MinuteCalendar, si: number, i: number): boolean => cal.developing[si][i] === 1 && cal.clock[si][i] === 1 && cal.hands[si][i] === 0;
 
 function fitsAt(cal: MinuteCalendar, si: number, max: number, from: number, minutes: number): boolean {
   return cal.chairBusy.some((busy) => {

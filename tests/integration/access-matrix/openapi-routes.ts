@@ -18,7 +18,9 @@ export interface OpenApiOperation {
 }
 
 /** Every operation in the app's own OpenAPI document: the list the security suites walk. */
-export async function documentedRoutes(app: TestApp['app']): Promise<{ routes: DocumentedRoute[]; document: { components?: { schemas?: Record<string, unknown> } } }> {
+export async function documentedRoutes(
+  app: TestApp['app'],
+): Promise<{ routes: DocumentedRoute[]; document: { components?: { schemas?: Record<string, unknown> } } }> {
   const document = (await (await anonymousAgent(app)).get('/api/openapi.json')).body;
   const routes = Object.entries(document.paths as Record<string, Record<string, OpenApiOperation>>).flatMap(([path, ops]) =>
     Object.entries(ops).map(([method, operation]) => ({ method: method as Method, path, key: `${method.toUpperCase()} ${path}`, operation })),

@@ -21,11 +21,18 @@ export function requestArbitrary(route: DocumentedRoute, opts: ArbitraryOptions 
 
   const pathValues = fc.record(
     Object.fromEntries(
-      pathParams.map((p) => [p.name, p.name === 'slug' ? fc.oneof(fc.constant(opts.slug), hostileText, fc.string()) : fc.oneof(arbitraryFor(p.schema as JsonSchema, opts).map(String), hostileText)]),
+      pathParams.map((p) => [
+        p.name,
+        p.name === 'slug'
+          ? fc.oneof(fc.constant(opts.slug), hostileText, fc.string())
+          : fc.oneof(arbitraryFor(p.schema as JsonSchema, opts).map(String), hostileText),
+      ]),
     ),
   );
   const query = fc.record(
-    Object.fromEntries(queryParams.map((p) => [p.name, arbitraryFor(p.schema as JsonSchema, opts).map((v) => (Array.isArray(v) ? v.map(asQueryText) : asQueryText(v)))])),
+    Object.fromEntries(
+      queryParams.map((p) => [p.name, arbitraryFor(p.schema as JsonSchema, opts).map((v) => (Array.isArray(v) ? v.map(asQueryText) : asQueryText(v)))]),
+    ),
     { requiredKeys: queryParams.filter((p) => p.required).map((p) => p.name) },
   );
   const body = bodySchema ? arbitraryFor(bodySchema, opts) : fc.constant(undefined);
@@ -45,9 +52,9 @@ const mutation: fc.Arbitrary<Mutate> = fc.oneof(
   fc.nat().map((n): Mutate => (r) => ({ ...r, body: dropKey(r.body, n) })),
   fc.nat().chain((n) => hostileValue.map((value): Mutate => (r) => ({ ...r, body: replaceKey(r.body, n, value) }))),
   hostileValue.map((value): Mutate => (r) => ({ ...r, body: value })),
-  fc.record({ key: fc.constantFrom('date', 'from', 'q', 'serviceId', 'limit', 'x'), value: fc.array(hostileText, { minLength: 1, maxLength: 3 }) }).map(
-    ({ key, value }): Mutate => (r) => ({ ...r, query: { ...r.query, [key]: value.length === 1 ? value[0] : value } }),
-  ),
+  fc
+    .record({ key: fc.constantFrom('date', 'from', 'q', 'serviceId', 'limit', 'x'), value: fc.array(hostileText, { minLength: 1, maxLength: 3 }) })
+    .map(({ key, value }): Mutate => (r) => ({ ...r, query: { ...r.query, [key]: value.length === 1 ? value[0] : value } })),
 );
 
 function fillParams(path: string, values: Record<string, string>) {

@@ -23,8 +23,22 @@ export interface JsonSchema {
 
 /** Text that has broken web apps before: markup, NUL, lone surrogates, right-to-left marks, huge numbers. */
 export const hostileText = fc.constantFrom(
-  '<script>alert(1)</script>', '"><img src=x onerror=alert(1)>', 'a\u0000b', '\ud800', '\u202eevil', '../../etc/passwd',
-  "' or 1=1 --", '=HYPERLINK("http://x")', '9'.repeat(400), '1e309', '-0', 'NaN', '%00', '{"$gt":""}', ' ', '',
+  '<script>alert(1)</script>',
+  '"><img src=x onerror=alert(1)>',
+  'a\u0000b',
+  '\ud800',
+  '\u202eevil',
+  '../../etc/passwd',
+  "' or 1=1 --",
+  '=HYPERLINK("http://x")',
+  '9'.repeat(400),
+  '1e309',
+  '-0',
+  'NaN',
+  '%00',
+  '{"$gt":""}',
+  ' ',
+  '',
 );
 
 export interface ArbitraryOptions {
@@ -70,7 +84,8 @@ function validFor(s: JsonSchema, opts: ArbitraryOptions, depth: number): fc.Arbi
 function stringFor(s: JsonSchema, opts: ArbitraryOptions): fc.Arbitrary<string> {
   if (s.format === 'uuid') return opts.ids.length ? fc.oneof(fc.constantFrom(...opts.ids), fc.uuid()) : fc.uuid();
   if (s.format === 'date-time') return fc.date({ min: new Date('2020-01-01'), max: new Date('2030-12-31'), noInvalidDate: true }).map((d) => d.toISOString());
-  if (s.format === 'date') return fc.date({ min: new Date('2020-01-01'), max: new Date('2030-12-31'), noInvalidDate: true }).map((d) => d.toISOString().slice(0, 10));
+  if (s.format === 'date')
+    return fc.date({ min: new Date('2020-01-01'), max: new Date('2030-12-31'), noInvalidDate: true }).map((d) => d.toISOString().slice(0, 10));
   if (s.format === 'email') return fc.emailAddress();
   if (s.pattern) return fc.stringMatching(new RegExp(s.pattern)).filter((v) => v.length <= (s.maxLength ?? 200));
   return fc.string({ minLength: s.minLength ?? 0, maxLength: Math.min(s.maxLength ?? 40, 60), unit: 'grapheme' });

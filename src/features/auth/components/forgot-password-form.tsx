@@ -19,15 +19,12 @@ export function ForgotPasswordForm() {
     // The same answer whether or not the address has an account, so nobody can probe for accounts.
     return (
       <FormAlert tone="success">
-        If an account uses {requestReset.variables.email}, an e-mail with a reset link is on its way. The link works
-        once and expires soon.
+        If an account uses {requestReset.variables.email}, an e-mail with a reset link is on its way. The link works once and expires soon.
       </FormAlert>
     );
   }
 
-  const onSubmit = handleSubmit((body) =>
-    requestReset.mutateAsync(body).catch((error) => showServerErrors(error, setError, ['email'])),
-  );
+  const onSubmit = handleSubmit((body) => requestReset.mutateAsync(body).catch((error) => showServerErrors(error, setError, ['email'])));
 
   return (
     <form onSubmit={onSubmit} noValidate aria-label="Request a password reset" className="flex flex-col gap-4">

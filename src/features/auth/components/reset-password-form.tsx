@@ -19,9 +19,7 @@ export function ResetPasswordForm({ token, onReset }: Props) {
   // The token comes from the link, not from a field: a bad one is about the link.
   const linkProblem = errors.token && 'This reset link is incomplete. Request a new one below.';
 
-  const onSubmit = handleSubmit((body) =>
-    confirmReset.mutateAsync(body).then(onReset, (error) => showServerErrors(error, setError, ['password'])),
-  );
+  const onSubmit = handleSubmit((body) => confirmReset.mutateAsync(body).then(onReset, (error) => showServerErrors(error, setError, ['password'])));
 
   return (
     <form onSubmit={onSubmit} noValidate aria-label="Choose a new password" className="flex flex-col gap-4">

@@ -28,13 +28,7 @@ export function SignInForm({ onSignedIn }: Props) {
     <form onSubmit={onSubmit} noValidate aria-label="Sign in" className="flex flex-col gap-4">
       {errors.root?.server && <FormAlert>{errors.root.server.message}</FormAlert>}
       <TextField label="E-mail" type="email" autoComplete="email" error={errors.email?.message} {...register('email')} />
-      <TextField
-        label="Password"
-        type="password"
-        autoComplete="current-password"
-        error={errors.password && 'Enter your password'}
-        {...register('password')}
-      />
+      <TextField label="Password" type="password" autoComplete="current-password" error={errors.password && 'Enter your password'} {...register('password')} />
       <Button type="submit" busy={signIn.isPending}>
         {signIn.isPending ? 'Signing in…' : 'Sign in'}
       </Button>

@@ -17,7 +17,8 @@ export function useCreateBooking() {
 export function useMoveSitting() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: ({ bookingId, ...body }: z.input<typeof MoveSittingSchema> & { bookingId: string }) => callApi(bookingsApi.move, { params: { id: bookingId }, body }),
+    mutationFn: ({ bookingId, ...body }: z.input<typeof MoveSittingSchema> & { bookingId: string }) =>
+      callApi(bookingsApi.move, { params: { id: bookingId }, body }),
     onSuccess: (booking) => bookingChanged(queryClient, booking),
   });
 }

@@ -29,9 +29,13 @@ export function BookingCard({ booking, timeZone, currency, headingLevel: Heading
           <li key={sitting.seq} className="rounded-lg bg-linen px-3 py-2">
             {sitting.of > 1 && <span className="mr-2 font-bold">{sittingLabel(sitting.seq, sitting.of)}:</span>}
             <span>{formatDate(sitting.start, formatFor(timeZone), { width: 'short' })}</span>
-            <span className="mx-1" aria-hidden="true">·</span>
+            <span className="mx-1" aria-hidden="true">
+              ·
+            </span>
             <span className="tabular">{formatRange(sitting.start, sitting.end, formatFor(timeZone))}</span>
-            <span className="mx-1" aria-hidden="true">·</span>
+            <span className="mx-1" aria-hidden="true">
+              ·
+            </span>
             <span>{sitting.chairName}</span>
           </li>
         ))}

@@ -26,7 +26,8 @@ export function useCreateClient() {
 export function useUpdateClient(id: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (body: z.output<typeof UpdateClientSchema>) => callApi(clientsApi.update, { params: { id }, body: asSent<z.input<typeof UpdateClientSchema>>(body) }),
+    mutationFn: (body: z.output<typeof UpdateClientSchema>) =>
+      callApi(clientsApi.update, { params: { id }, body: asSent<z.input<typeof UpdateClientSchema>>(body) }),
     onSuccess: () => clientChanged(queryClient, id),
   });
 }

@@ -13,7 +13,8 @@ export function useSaveMyPreferences() {
   const queryClient = useQueryClient();
   return useMutation({
     // The form's parsed values go out as they always have (a cleared phone is null, which the body schema does not read).
-    mutationFn: (body: z.output<typeof MyPreferencesBodySchema>) => callApi(messagesApi.saveMyPreferences, { body: body as z.input<typeof MyPreferencesBodySchema> }),
+    mutationFn: (body: z.output<typeof MyPreferencesBodySchema>) =>
+      callApi(messagesApi.saveMyPreferences, { body: body as z.input<typeof MyPreferencesBodySchema> }),
     onSuccess: (saved) => myPreferencesSaved(queryClient, saved),
   });
 }

@@ -16,8 +16,17 @@ type Values = z.output<typeof UpdateClientSchema>;
 /** The desk edits how to reach a client and how they want to hear from the salon. */
 export function ClientContactForm({ client }: { client: ClientDetail }) {
   const update = useUpdateClient(client.id);
-  const initial: Input = { name: client.name, email: client.email ?? '', phone: client.phone ?? '', messageChannel: client.messageChannel, marketingOptIn: client.marketingOptIn };
-  const { register, handleSubmit, setError, reset, formState } = useForm<Input, unknown, Values>({ resolver: zodResolver(UpdateClientSchema), defaultValues: initial });
+  const initial: Input = {
+    name: client.name,
+    email: client.email ?? '',
+    phone: client.phone ?? '',
+    messageChannel: client.messageChannel,
+    marketingOptIn: client.marketingOptIn,
+  };
+  const { register, handleSubmit, setError, reset, formState } = useForm<Input, unknown, Values>({
+    resolver: zodResolver(UpdateClientSchema),
+    defaultValues: initial,
+  });
   const { errors } = formState;
   const save = handleSubmit((body) =>
     update.mutateAsync(body).then(
@@ -31,7 +40,14 @@ export function ClientContactForm({ client }: { client: ClientDetail }) {
       {update.isSuccess && !formState.isDirty && <p role="status">Saved.</p>}
       <TextField label="Name" autoComplete="off" error={errors.name?.message} {...register('name')} />
       <div className="grid gap-3 sm:grid-cols-2">
-        <TextField label="Mobile" type="tel" autoComplete="off" hint="Any format; saved as +1 970 555 0142" error={errors.phone?.message} {...register('phone')} />
+        <TextField
+          label="Mobile"
+          type="tel"
+          autoComplete="off"
+          hint="Any format; saved as +1 970 555 0142"
+          error={errors.phone?.message}
+          {...register('phone')}
+        />
         <TextField label="E-mail" type="email" autoComplete="off" error={errors.email?.message} {...register('email')} />
       </div>
       <MessagePreferenceFields register={register} smsStoppedAt={client.smsStoppedAt} you={false} />

@@ -21,9 +21,7 @@ export function ClientCreateForm({ initialName, onCreated }: Props) {
     defaultValues: { name: initialName, phone: '', email: '' },
   });
   const { errors } = formState;
-  const save = handleSubmit((body) =>
-    create.mutateAsync(body).then(onCreated, (error) => showServerErrors(error, setError, ['name', 'phone', 'email'])),
-  );
+  const save = handleSubmit((body) => create.mutateAsync(body).then(onCreated, (error) => showServerErrors(error, setError, ['name', 'phone', 'email'])));
   return (
     <div role="group" aria-label="New client" className="flex flex-col gap-3 rounded-lg bg-linen p-4">
       {errors.root?.server && <FormAlert>{errors.root.server.message}</FormAlert>}

@@ -27,11 +27,22 @@ export function DateOfBirthForm({ owner }: { owner: RecordOwner }) {
         save.mutate(value || null, { onSuccess: () => setDraft(null) });
       }}
     >
-      <TextField label="Date of birth" type="date" value={value} max={new Date().toISOString().slice(0, 10)} error={fieldError} onChange={(e) => setDraft(e.target.value)} />
+      <TextField
+        label="Date of birth"
+        type="date"
+        value={value}
+        max={new Date().toISOString().slice(0, 10)}
+        error={fieldError}
+        onChange={(e) => setDraft(e.target.value)}
+      />
       <Button type="submit" variant="secondary" busy={save.isPending}>
         Save date of birth
       </Button>
-      {save.isSuccess && draft === null && <p className="text-sm" role="status">Saved.</p>}
+      {save.isSuccess && draft === null && (
+        <p className="text-sm" role="status">
+          Saved.
+        </p>
+      )}
     </form>
   );
 }

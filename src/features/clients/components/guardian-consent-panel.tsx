@@ -17,12 +17,11 @@ type Props = { clientId: string; zone: string };
 export function GuardianConsentPanel({ clientId, zone }: Props) {
   const age = useQuery(ageQueries.detail({ clientId }));
   const record = useRecordGuardianConsent(clientId);
-  const { form, submit } = useRecordForm(
-    RecordGuardianConsentSchema,
-    { guardianName: '', relationship: '', note: '' },
-    (body) => record.mutateAsync(body),
-    ['guardianName', 'relationship', 'note'],
-  );
+  const { form, submit } = useRecordForm(RecordGuardianConsentSchema, { guardianName: '', relationship: '', note: '' }, (body) => record.mutateAsync(body), [
+    'guardianName',
+    'relationship',
+    'note',
+  ]);
   const dob = age.data?.dateOfBirth ?? null;
   const under = dob !== null && ageOn(dob, todayIn(zone)) < MIN_AGE_WITHOUT_CONSENT;
   const err = (name: string) => fieldError(form.formState.errors, name);
@@ -31,22 +30,29 @@ export function GuardianConsentPanel({ clientId, zone }: Props) {
       <DateOfBirthForm owner={{ clientId }} />
       {under && (
         <Notice tone="caution" title={`Under ${MIN_AGE_WITHOUT_CONSENT} today`}>
-          Oxidative colour is labelled as not intended for anyone under 16. It cannot be booked online; the desk may book it only with a
-          guardian’s consent on record. Follow your local rules and licensed practice.
+          Oxidative colour is labelled as not intended for anyone under 16. It cannot be booked online; the desk may book it only with a guardian’s consent on
+          record. Follow your local rules and licensed practice.
         </Notice>
       )}
       {age.data && age.data.guardianConsents.length > 0 && (
         <ul aria-label="Guardian consents" className="flex flex-col gap-1 text-sm">
           {age.data.guardianConsents.map((c) => (
             <li key={c.id}>
-              <span className="font-bold">{c.guardianName}</span> ({c.relationship}) consented · recorded {formatDate(c.recordedAt, formatFor(zone), { width: 'short' })} by {c.recordedByName}
+              <span className="font-bold">{c.guardianName}</span> ({c.relationship}) consented · recorded{' '}
+              {formatDate(c.recordedAt, formatFor(zone), { width: 'short' })} by {c.recordedByName}
               {c.note && ` · ${c.note}`}
             </li>
           ))}
         </ul>
       )}
       {under && (
-        <RecordForm label="Record a guardian's consent" submitLabel="Record consent" busy={form.formState.isSubmitting} error={form.formState.errors.root?.server?.message} onSubmit={submit}>
+        <RecordForm
+          label="Record a guardian's consent"
+          submitLabel="Record consent"
+          busy={form.formState.isSubmitting}
+          error={form.formState.errors.root?.server?.message}
+          onSubmit={submit}
+        >
           <div className="flex flex-wrap gap-3">
             <TextField label="Guardian’s name" error={err('guardianName')} {...form.register('guardianName')} />
             <TextField label="Related as" hint="e.g. mother, legal guardian" error={err('relationship')} {...form.register('relationship')} />

@@ -36,8 +36,8 @@ export function MessagePreferenceFields<T extends PreferenceValues>({ register: 
         </div>
         {smsStoppedAt && (
           <p className="text-sm">
-            Texts are off: {you ? 'you' : 'the client'} replied STOP on {formatDate(smsStoppedAt, deviceFormat(), { width: 'short' })}. A reply of START
-            turns them back on{you ? '' : ', as does saving a new mobile number'}.
+            Texts are off: {you ? 'you' : 'the client'} replied STOP on {formatDate(smsStoppedAt, deviceFormat(), { width: 'short' })}. A reply of START turns
+            them back on{you ? '' : ', as does saving a new mobile number'}.
           </p>
         )}
       </fieldset>

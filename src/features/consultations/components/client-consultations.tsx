@@ -24,9 +24,9 @@ export function ClientConsultations({ clientId, timeZone, currency }: Props) {
         {list.data?.consultations.map((c) => (
           <li key={c.id} className="flex flex-wrap items-center justify-between gap-2 rounded-lg bg-linen px-3 py-2">
             <span>
-              <span className="font-bold">{formatDate(c.createdAt, formatFor(timeZone), { width: 'short' })}</span> · levels {c.consultation.currentLevel} → {c.consultation.targetLevel} ·{' '}
-              {c.quote.stepPlan.sittings.length} {c.quote.stepPlan.sittings.length === 1 ? 'sitting' : 'sittings'} · <span className="tabular">{formatMoney(c.quote.priceCents, currency)}</span> ·{' '}
-              {quoteStatusLabels[c.quote.status]}
+              <span className="font-bold">{formatDate(c.createdAt, formatFor(timeZone), { width: 'short' })}</span> · levels {c.consultation.currentLevel} →{' '}
+              {c.consultation.targetLevel} · {c.quote.stepPlan.sittings.length} {c.quote.stepPlan.sittings.length === 1 ? 'sitting' : 'sittings'} ·{' '}
+              <span className="tabular">{formatMoney(c.quote.priceCents, currency)}</span> · {quoteStatusLabels[c.quote.status]}
               {c.quote.bookingIds.length > 0 && ' · booked'}
             </span>
             <Link to={paths.consultation(c.id)} className="text-link">

@@ -17,8 +17,24 @@ export function ConsultationFields({ form }: Props) {
   return (
     <div className="flex flex-col gap-5">
       <div className="flex flex-wrap gap-3">
-        <TextField label="Current level" hint={levelHint} type="number" inputMode="numeric" className="w-44" error={err('currentLevel')} {...register('consultation.currentLevel', { valueAsNumber: true })} />
-        <TextField label="Target level" hint={levelHint} type="number" inputMode="numeric" className="w-44" error={err('targetLevel')} {...register('consultation.targetLevel', { valueAsNumber: true })} />
+        <TextField
+          label="Current level"
+          hint={levelHint}
+          type="number"
+          inputMode="numeric"
+          className="w-44"
+          error={err('currentLevel')}
+          {...register('consultation.currentLevel', { valueAsNumber: true })}
+        />
+        <TextField
+          label="Target level"
+          hint={levelHint}
+          type="number"
+          inputMode="numeric"
+          className="w-44"
+          error={err('targetLevel')}
+          {...register('consultation.targetLevel', { valueAsNumber: true })}
+        />
       </div>
       <fieldset className="flex flex-col gap-2">
         <legend className="mb-1 font-bold">Colour history (tick all that apply)</legend>
@@ -37,7 +53,12 @@ export function ConsultationFields({ form }: Props) {
         <SelectField label="Elasticity" options={elasticityOptions} error={err('elasticity')} {...register('consultation.elasticity')} />
         <SelectField label="Porosity" options={porosityOptions} error={err('porosity')} {...register('consultation.porosity')} />
       </div>
-      <TextAreaField label="Condition notes" hint="Elasticity, porosity, breakage, scalp" error={err('conditionNotes')} {...register('consultation.conditionNotes')} />
+      <TextAreaField
+        label="Condition notes"
+        hint="Elasticity, porosity, breakage, scalp"
+        error={err('conditionNotes')}
+        {...register('consultation.conditionNotes')}
+      />
       <div className="flex flex-wrap items-end gap-5">
         <SelectField label="Strand test" options={strandOptions} className="w-80" error={err('strandTest')} {...register('consultation.strandTest')} />
         <label className="inline-flex min-h-11 items-center gap-2">
@@ -45,8 +66,7 @@ export function ConsultationFields({ form }: Props) {
           Cut and finish at the end
         </label>
         <label className="inline-flex min-h-11 items-center gap-2">
-          <input type="checkbox" className="size-5" {...register('consultation.vivid')} />
-          A vivid shade (direct dye) on top, placed in sections
+          <input type="checkbox" className="size-5" {...register('consultation.vivid')} />A vivid shade (direct dye) on top, placed in sections
         </label>
       </div>
       <TextAreaField label="Other notes" hint="What the client wants, expectations, upkeep" error={err('notes')} {...register('consultation.notes')} />

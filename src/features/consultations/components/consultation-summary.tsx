@@ -15,7 +15,13 @@ export function ConsultationSummary({ view }: { view: ConsultationView }) {
     ['Length and density', `${labelOf(lengthOptions, c.length)}, ${labelOf(densityOptions, c.density).toLowerCase()}`],
     ['Elasticity and porosity', `${labelOf(elasticityOptions, c.elasticity)}; ${labelOf(porosityOptions, c.porosity).toLowerCase()}`],
     ['Condition notes', c.conditionNotes || '—'],
-    ['Strand test', labelOf(strandOptions, c.strandTest) + (view.strandTest !== c.strandTest ? `; the client card now says: ${labelOf(strandOptions, view.strandTest).toLowerCase()} (the quote follows this)` : '')],
+    [
+      'Strand test',
+      labelOf(strandOptions, c.strandTest) +
+        (view.strandTest !== c.strandTest
+          ? `; the client card now says: ${labelOf(strandOptions, view.strandTest).toLowerCase()} (the quote follows this)`
+          : ''),
+    ],
     ['Vivid shade', c.vivid ? 'A vivid shade (direct dye) on top, placed in sections' : 'None'],
     ['Cut', c.wantsCut ? 'Cut and finish at the end' : 'No cut'],
     ['Notes', c.notes || '—'],
@@ -34,8 +40,18 @@ export function ConsultationSummary({ view }: { view: ConsultationView }) {
         <ul className="grid grid-cols-3 gap-3 sm:grid-cols-6" aria-label="Consultation photos">
           {view.photoIds.map((id, i) => (
             <li key={id}>
-              <a href={urlOf(photosApi.file, { params: { id: id } })} target="_blank" rel="noreferrer" className="block overflow-hidden rounded-lg ring-1 ring-ink/10">
-                <img src={urlOf(photosApi.file, { params: { id: id } })} alt={`Hair at the consultation, ${i + 1} of ${view.photoIds.length}`} loading="lazy" className="aspect-square w-full object-cover" />
+              <a
+                href={urlOf(photosApi.file, { params: { id: id } })}
+                target="_blank"
+                rel="noreferrer"
+                className="block overflow-hidden rounded-lg ring-1 ring-ink/10"
+              >
+                <img
+                  src={urlOf(photosApi.file, { params: { id: id } })}
+                  alt={`Hair at the consultation, ${i + 1} of ${view.photoIds.length}`}
+                  loading="lazy"
+                  className="aspect-square w-full object-cover"
+                />
               </a>
             </li>
           ))}

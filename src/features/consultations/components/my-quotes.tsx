@@ -13,7 +13,9 @@ export function MyQuotes({ currency }: { currency: string }) {
   if (!list.data || list.data.consultations.length === 0) return null;
   return (
     <section aria-labelledby="my-quotes" className="mb-8 flex flex-col gap-3">
-      <h2 id="my-quotes" className="text-2xl font-bold">Your quotes</h2>
+      <h2 id="my-quotes" className="text-2xl font-bold">
+        Your quotes
+      </h2>
       {accept.isError && <FormAlert>{accept.error.message}</FormAlert>}
       {list.data.consultations.map(({ quote: q }) => (
         <article key={q.id} aria-label={`Quote for ${q.serviceName}`} className="flex flex-col gap-2 rounded-2xl bg-white p-4 shadow-sm ring-1 ring-ink/15">
@@ -22,7 +24,8 @@ export function MyQuotes({ currency }: { currency: string }) {
             {q.stepPlan.sittings.map((s, i) => (
               <li key={i}>
                 Up to {formatMinutes(sittingMaxMinutes(q.stepPlan)[i])}
-                {s.daysAfterPrevious && `, ${s.daysAfterPrevious.min}–${s.daysAfterPrevious.max} days after the previous sitting`}: {s.steps.map((st) => st.label).join(', ')}
+                {s.daysAfterPrevious && `, ${s.daysAfterPrevious.min}–${s.daysAfterPrevious.max} days after the previous sitting`}:{' '}
+                {s.steps.map((st) => st.label).join(', ')}
               </li>
             ))}
           </ol>
@@ -30,7 +33,9 @@ export function MyQuotes({ currency }: { currency: string }) {
             {formatMoney(q.priceCents, currency)}, deposit {formatMoney(q.depositCents, currency)}
           </p>
           {q.notes && <p className="whitespace-pre-line">{q.notes}</p>}
-          <p className="text-sm text-ink/80">Colour work needs a skin test read before the appointment; your colourist decides on the day what is safe for your hair.</p>
+          <p className="text-sm text-ink/80">
+            Colour work needs a skin test read before the appointment; your colourist decides on the day what is safe for your hair.
+          </p>
           {q.status === 'accepted' ? (
             <p className="font-bold">You accepted this quote. The salon will book the sittings with you.</p>
           ) : (

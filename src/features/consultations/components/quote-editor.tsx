@@ -47,8 +47,8 @@ export function QuoteEditor({ initial, services, strandTest, submitLabel, curren
         {strandTest === 'failed' && (
           <div className="flex flex-col gap-2">
             <Notice tone="danger" title="The strand test failed">
-              Dwell plans no lightener and no colour remover for this hair. If you add them, write why it is safe to go ahead; the reason is kept with the
-              quote and in the audit log.
+              Dwell plans no lightener and no colour remover for this hair. If you add them, write why it is safe to go ahead; the reason is kept with the quote
+              and in the audit log.
             </Notice>
             <TextAreaField
               label="Reason to lighten or remove colour despite the failed strand test"

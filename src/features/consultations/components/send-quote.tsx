@@ -14,7 +14,9 @@ export function SendQuote({ view, timeZone }: { view: ConsultationView; timeZone
       {send.isError && <FormAlert>{send.error.message}</FormAlert>}
       <p>
         {q.status === 'draft' && 'Not sent to the client yet.'}
-        {q.status === 'sent' && q.sentAt && `Sent to the client on ${formatDate(q.sentAt, formatFor(timeZone), { width: 'short' })}; waiting for them to accept it.`}
+        {q.status === 'sent' &&
+          q.sentAt &&
+          `Sent to the client on ${formatDate(q.sentAt, formatFor(timeZone), { width: 'short' })}; waiting for them to accept it.`}
         {q.status === 'accepted' && q.acceptedAt && `Accepted by the client on ${formatDate(q.acceptedAt, formatFor(timeZone), { width: 'short' })}.`}
       </p>
       <div>

@@ -19,12 +19,18 @@ export default function DayTimeline({ day, by = 'stylist', windows = [], booking
   const roomy = layout.columns.length === 1;
   const booked = layout.columns.some((c) => c.sittings.length > 0);
   // A closed date with nothing on it is said in words; an empty grey grid would only look like a fault.
-  if (layout.closed && !booked) return <p className="rounded-2xl bg-white p-4 font-bold ring-1 ring-ink/10">The salon is closed on this date. Nothing is booked.</p>;
+  if (layout.closed && !booked)
+    return <p className="rounded-2xl bg-white p-4 font-bold ring-1 ring-ink/10">The salon is closed on this date. Nothing is booked.</p>;
   return (
     <div className="flex flex-col gap-3">
       {layout.closed && <p className="font-bold">The salon is closed on this date.</p>}
       {layout.closedSpans.length > 0 && <ClosedKey />}
-      <div role="region" aria-label={by === 'chair' ? 'Chair timeline' : 'Day timeline'} tabIndex={0} className="overflow-x-auto rounded-2xl bg-white ring-1 ring-ink/10">
+      <div
+        role="region"
+        aria-label={by === 'chair' ? 'Chair timeline' : 'Day timeline'}
+        tabIndex={0}
+        className="overflow-x-auto rounded-2xl bg-white ring-1 ring-ink/10"
+      >
         <div className="flex min-w-fit pb-4">
           <HourAxis firstHour={layout.firstHour} lastHour={layout.lastHour} timeZone={day.timeZone} />
           {layout.columns.map((column) => (

@@ -13,11 +13,7 @@ export function HourAxis({ firstHour, lastHour, timeZone }: Props) {
       <div className={COLUMN_HEADER_CLASS} />
       <div className="relative" style={{ height: (lastHour - firstHour) * 60 * PX_PER_MIN }}>
         {hours.map((hour) => (
-          <span
-            key={hour}
-            className="absolute right-2 -translate-y-1/2 text-xs tabular text-ink/80"
-            style={{ top: (hour - firstHour) * 60 * PX_PER_MIN }}
-          >
+          <span key={hour} className="absolute right-2 -translate-y-1/2 text-xs tabular text-ink/80" style={{ top: (hour - firstHour) * 60 * PX_PER_MIN }}>
             {label(hour)}
           </span>
         ))}

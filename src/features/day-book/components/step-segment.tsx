@@ -29,7 +29,11 @@ export function StepSegment({ step, sittingStart, timeZone, showLabel }: Props) 
       {height >= 16 && (
         <span className="flex items-center gap-1 rounded bg-white/95 px-1 text-ink">
           <StepKindIcon kind={step.kind} className="size-3.5" />
-          {showLabel && height >= 20 && <span aria-hidden="true" className="truncate">{step.label}</span>}
+          {showLabel && height >= 20 && (
+            <span aria-hidden="true" className="truncate">
+              {step.label}
+            </span>
+          )}
         </span>
       )}
       <span className="sr-only">

@@ -7,7 +7,10 @@ type Props = { rrule: string; timeZone: string; now: Date };
 
 /** When the rule would send for a sitting ending today at 17:00 salon time (same computation as the server). */
 export function FollowUpPreview({ rrule, timeZone, now }: Props) {
-  const rule = rrule.trim().replace(/^RRULE:/i, '').toUpperCase();
+  const rule = rrule
+    .trim()
+    .replace(/^RRULE:/i, '')
+    .toUpperCase();
   const problem = rule ? followUpRuleProblem(rule) : 'Enter a rule to see when it sends.';
   const anchor = DateTime.fromJSDate(now, { zone: timeZone }).set({ hour: 17, minute: 0, second: 0, millisecond: 0 });
   return (

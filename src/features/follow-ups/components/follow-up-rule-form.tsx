@@ -29,13 +29,20 @@ export function FollowUpRuleForm({ rule, services, timeZone, onDone }: Props) {
   });
   const { errors } = formState;
   const rrule = useWatch({ control, name: 'rrule' });
-  const submit = handleSubmit((body) => save.mutateAsync(body).then(onDone, (error) => showServerErrors(error, setError, ['serviceId', 'title', 'text', 'rrule'])));
+  const submit = handleSubmit((body) =>
+    save.mutateAsync(body).then(onDone, (error) => showServerErrors(error, setError, ['serviceId', 'title', 'text', 'rrule'])),
+  );
   return (
     <form onSubmit={(e) => void submit(e)} noValidate aria-label={rule ? 'Edit follow-up rule' : 'New follow-up rule'} className="flex flex-col gap-3">
       {errors.root?.server && <FormAlert>{errors.root.server.message}</FormAlert>}
       <SelectField label="After this service" options={options} error={errors.serviceId?.message} {...register('serviceId')} />
       <TextField label="Title" placeholder="Toner refresh" error={errors.title?.message} {...register('title')} />
-      <TextAreaField label="Message" hint="Sent as written, with the salon's name; only to clients who said yes to suggestions." error={errors.text?.message} {...register('text')} />
+      <TextAreaField
+        label="Message"
+        hint="Sent as written, with the salon's name; only to clients who said yes to suggestions."
+        error={errors.text?.message}
+        {...register('text')}
+      />
       <TextField
         label="When it is sent"
         hint="Counted from the end of the last sitting, written as a calendar rule (iCalendar RRULE, RFC 5545): FREQ=WEEKLY;INTERVAL=6;COUNT=1 is once, six weeks later."

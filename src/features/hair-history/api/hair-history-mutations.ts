@@ -10,7 +10,9 @@ export function useSaveHairHistory(owner: RecordOwner) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (answers: HairHistory): Promise<HairHistoryResponse> =>
-      owner === 'me' ? callApi(hairHistoryApi.saveMine, { body: answers }) : callApi(hairHistoryApi.saveOfClient, { params: { id: owner.clientId }, body: answers }),
+      owner === 'me'
+        ? callApi(hairHistoryApi.saveMine, { body: answers })
+        : callApi(hairHistoryApi.saveOfClient, { params: { id: owner.clientId }, body: answers }),
     onSuccess: (saved) => {
       queryClient.setQueryData(hairHistoryQueries.detail(owner).queryKey, saved);
       // The same record may be cached under the client's id too (staff view); refresh every copy.

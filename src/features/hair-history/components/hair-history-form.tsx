@@ -33,38 +33,77 @@ export function HairHistoryForm({ onSaved, owner = 'me', submitLabel = 'Save hai
   const history = useQuery(hairHistoryQueries.detail(owner));
   if (history.isPending) return <LoadingState label="Loading your hair history…" />;
   if (history.isError) return <FormAlert>{history.error.message}</FormAlert>;
-  return <Fields initial={history.data.answers ?? emptyHairHistory()} saved={history.data.answers !== null} owner={owner} onSaved={onSaved} submitLabel={submitLabel} />;
+  return (
+    <Fields
+      initial={history.data.answers ?? emptyHairHistory()}
+      saved={history.data.answers !== null}
+      owner={owner}
+      onSaved={onSaved}
+      submitLabel={submitLabel}
+    />
+  );
 }
 
 const methodOptions = Object.entries(methodLabels).map(([value, label]) => ({ value, label }));
 
-function Fields({ initial, saved, owner, onSaved, submitLabel }: { initial: HairHistory; saved: boolean; owner: RecordOwner; onSaved?: () => void; submitLabel: string }) {
+function Fields({
+  initial,
+  saved,
+  owner,
+  onSaved,
+  submitLabel,
+}: {
+  initial: HairHistory;
+  saved: boolean;
+  owner: RecordOwner;
+  onSaved?: () => void;
+  submitLabel: string;
+}) {
   const save = useSaveHairHistory(owner);
-  const { register, control, handleSubmit, setError, reset, formState } = useForm<HairHistory>({ resolver: zodResolver(HairHistorySchema), defaultValues: initial });
+  const { register, control, handleSubmit, setError, reset, formState } = useForm<HairHistory>({
+    resolver: zodResolver(HairHistorySchema),
+    defaultValues: initial,
+  });
   const { errors } = formState;
   const reaction = useWatch({ control, name: 'previousReaction.answer' });
   useUnsavedChangesGuard(formState.isDirty && !formState.isSubmitting);
   const submit = handleSubmit((answers) =>
     // Nothing changed since the last save: there is nothing to store, only to move on. A form never saved is saved,
     // so its required answers (the reaction question) are always given once.
-    saved && !formState.isDirty ? onSaved?.() : save.mutateAsync(answers).then(
-      (saved) => {
-        reset(saved.answers ?? answers); // the saved answers become the new baseline, so the form is clean again
-        onSaved?.();
-      },
-      (error) => showServerErrors(error, setError, ['previousReaction.details', 'medicalNotes'])),
+    saved && !formState.isDirty
+      ? onSaved?.()
+      : save.mutateAsync(answers).then(
+          (saved) => {
+            reset(saved.answers ?? answers); // the saved answers become the new baseline, so the form is clean again
+            onSaved?.();
+          },
+          (error) => showServerErrors(error, setError, ['previousReaction.details', 'medicalNotes']),
+        ),
   );
   const err = (path: string) => fieldError(errors, path);
   return (
     <form onSubmit={(e) => void submit(e)} noValidate className="flex flex-col gap-6" aria-label="Hair history">
       {errors.root?.server && <FormAlert>{errors.root.server.message}</FormAlert>}
       <div className="grid gap-3 sm:grid-cols-2">
-        <TextField label="Your hair colour now" placeholder="e.g. Faded copper over dark brown roots" error={err('currentColour')} {...register('currentColour')} />
+        <TextField
+          label="Your hair colour now"
+          placeholder="e.g. Faded copper over dark brown roots"
+          error={err('currentColour')}
+          {...register('currentColour')}
+        />
         <SelectField label="How it got that colour" options={methodOptions} error={err('currentColourMethod')} {...register('currentColourMethod')} />
       </div>
       <PastServicesFields control={control} register={register} errors={errors} />
       {answerQuestions.map((q) => (
-        <AnswerFieldset key={q.name} name={q.name} question={q.question} detailsLabel={q.details} register={register} detailsError={err(`${q.name}.details`)} answerError={err(`${q.name}.answer`)} />
+        <AnswerFieldset
+          key={q.name}
+          name={q.name}
+          question={q.question}
+          detailsLabel={q.details}
+          register={register}
+          detailsError={err(`${q.name}.details`)}
+          answerError={err(`${q.name}.answer`)}
+        />
       ))}
       <fieldset className="flex flex-col gap-2">
         <legend className="mb-1 font-bold">Relaxers, perms or keratin treatments you have had</legend>
@@ -89,7 +128,12 @@ function Fields({ initial, saved, owner, onSaved, submitLabel }: { initial: Hair
         />
         <ReactionCaution emphasised={reaction === 'yes'} />
       </div>
-      <TextAreaField label="Scalp conditions" hint="e.g. psoriasis, eczema, sensitivity, cuts" error={err('scalpConditions')} {...register('scalpConditions')} />
+      <TextAreaField
+        label="Scalp conditions"
+        hint="e.g. psoriasis, eczema, sensitivity, cuts"
+        error={err('scalpConditions')}
+        {...register('scalpConditions')}
+      />
       <TextAreaField
         label="Medical notes (private)"
         hint="Allergies, medicines, pregnancy or anything else the colourist should know. Only you and the salon’s team can read this."

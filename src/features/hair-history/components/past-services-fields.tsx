@@ -18,7 +18,12 @@ export function PastServicesFields({ control, register, errors }: Props) {
       <ol className="flex flex-col gap-3">
         {fields.map((field, i) => (
           <li key={field.id} className="grid gap-2 rounded-lg bg-linen p-3 sm:grid-cols-[1fr_12rem_auto] sm:items-end">
-            <TextField label={`Service ${i + 1}`} placeholder="e.g. Full head highlights" error={fieldError(errors, `pastServices.${i}.service`)} {...register(`pastServices.${i}.service`)} />
+            <TextField
+              label={`Service ${i + 1}`}
+              placeholder="e.g. Full head highlights"
+              error={fieldError(errors, `pastServices.${i}.service`)}
+              {...register(`pastServices.${i}.service`)}
+            />
             <TextField label="When" placeholder="e.g. May 2026" error={fieldError(errors, `pastServices.${i}.when`)} {...register(`pastServices.${i}.when`)} />
             <Button variant="quiet" onClick={() => remove(i)} aria-label={`Remove service ${i + 1}`}>
               Remove

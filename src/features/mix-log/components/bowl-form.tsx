@@ -21,11 +21,26 @@ const numberOrNull = (v: unknown) => (v === '' || v === null || v === undefined 
 export function BowlForm({ bookingId, sittingSeq, bowlNo, maxPercent }: Props) {
   const write = useWriteMixLog(bookingId);
   const defaults: WriteMixLog = {
-    sittingSeq, bowlNo, productType: 'lightener', shadeNotes: '', developerPercent: 6, ratio: '1:2',
-    grams: [{ kind: 'lightener', part: '', grams: 30 }, { kind: 'developer', part: '', grams: 60 }],
-    appliedTo: '', plannedMinutes: null, actualMinutes: null, heat: false, resultNotes: '',
+    sittingSeq,
+    bowlNo,
+    productType: 'lightener',
+    shadeNotes: '',
+    developerPercent: 6,
+    ratio: '1:2',
+    grams: [
+      { kind: 'lightener', part: '', grams: 30 },
+      { kind: 'developer', part: '', grams: 60 },
+    ],
+    appliedTo: '',
+    plannedMinutes: null,
+    actualMinutes: null,
+    heat: false,
+    resultNotes: '',
   };
-  const { register, control, handleSubmit, setError, reset, getValues, formState } = useForm<WriteMixLog>({ resolver: zodResolver(WriteMixLogSchema), defaultValues: defaults });
+  const { register, control, handleSubmit, setError, reset, getValues, formState } = useForm<WriteMixLog>({
+    resolver: zodResolver(WriteMixLogSchema),
+    defaultValues: defaults,
+  });
   const parts = useFieldArray({ control, name: 'grams' });
   const [developerPercent, ratio, weighed] = useWatch({ control, name: ['developerPercent', 'ratio', 'grams'] });
   const productType = useRef<ProductType>(defaults.productType);
@@ -55,7 +70,9 @@ export function BowlForm({ bookingId, sittingSeq, bowlNo, maxPercent }: Props) {
       <div className="grid gap-4 sm:grid-cols-2">
         <TextField label="Bowl number" type="number" min={1} error={e.bowlNo?.message} {...register('bowlNo', { valueAsNumber: true })} />
         <SelectField
-          label="Product type" options={productTypeOptions} error={e.productType?.message}
+          label="Product type"
+          options={productTypeOptions}
+          error={e.productType?.message}
           {...register('productType', { onChange: (event) => onProductType(event.target.value as ProductType) })}
         />
         <TextField label="Shade or level notes" error={e.shadeNotes?.message} {...register('shadeNotes')} />
@@ -66,12 +83,21 @@ export function BowlForm({ bookingId, sittingSeq, bowlNo, maxPercent }: Props) {
       <DeveloperHelper developerPercent={developerPercent} ratio={ratio} parts={weighed} />
       <fieldset className="flex flex-col gap-2">
         <legend className="font-bold">Grams of each part</legend>
-        <p className="text-sm text-ink/80">Weigh each part as itself: the product, the developer, and anything else added. Totals and costs count each part as what it is.</p>
+        <p className="text-sm text-ink/80">
+          Weigh each part as itself: the product, the developer, and anything else added. Totals and costs count each part as what it is.
+        </p>
         {parts.fields.map((field, i) => (
           <div key={field.id} className="flex flex-wrap items-end gap-2">
             <SelectField label={`Part ${i + 1}`} options={partKindOptions} error={fieldError(e, `grams.${i}.kind`)} {...register(`grams.${i}.kind`)} />
             <TextField label="Notes (optional)" error={fieldError(e, `grams.${i}.part`)} {...register(`grams.${i}.part`)} />
-            <TextField label="Grams" type="number" step="0.1" min={0} error={fieldError(e, `grams.${i}.grams`)} {...register(`grams.${i}.grams`, { valueAsNumber: true })} />
+            <TextField
+              label="Grams"
+              type="number"
+              step="0.1"
+              min={0}
+              error={fieldError(e, `grams.${i}.grams`)}
+              {...register(`grams.${i}.grams`, { valueAsNumber: true })}
+            />
             {parts.fields.length > 1 && (
               <Button variant="quiet" onClick={() => parts.remove(i)}>
                 Remove part {i + 1}
@@ -85,7 +111,13 @@ export function BowlForm({ bookingId, sittingSeq, bowlNo, maxPercent }: Props) {
         </Button>
       </fieldset>
       <div className="grid gap-4 sm:grid-cols-3">
-        <TextField label="Planned minutes" type="number" min={0} error={e.plannedMinutes?.message} {...register('plannedMinutes', { setValueAs: numberOrNull })} />
+        <TextField
+          label="Planned minutes"
+          type="number"
+          min={0}
+          error={e.plannedMinutes?.message}
+          {...register('plannedMinutes', { setValueAs: numberOrNull })}
+        />
         <TextField label="Actual minutes" type="number" min={0} error={e.actualMinutes?.message} {...register('actualMinutes', { setValueAs: numberOrNull })} />
         <label className="flex items-center gap-2 self-end font-bold">
           <input type="checkbox" className="size-5" {...register('heat')} /> Heat used

@@ -12,7 +12,10 @@ const hundredths = (n: number) => String(Math.round(n * 100) / 100);
 function onTheHair(developerPercent: number, ratio: string, parts: Props['parts']): { percent: number; from: string } | null {
   const weighed = parts.filter((p) => Number.isFinite(p.grams) && p.grams >= 0);
   if (weighed.some((p) => p.kind === 'developer' && p.grams > 0)) {
-    return { percent: bowlPercent(weighed.map((p) => ({ grams: p.grams, peroxidePercent: p.kind === 'developer' ? developerPercent : 0 }))), from: 'the weighed parts' };
+    return {
+      percent: bowlPercent(weighed.map((p) => ({ grams: p.grams, peroxidePercent: p.kind === 'developer' ? developerPercent : 0 }))),
+      from: 'the weighed parts',
+    };
   }
   try {
     return ratio ? { percent: ratioBowlPercent(ratio, developerPercent), from: `${ratio} (developer last)` } : null;
@@ -29,8 +32,8 @@ export function DeveloperHelper({ developerPercent, ratio, parts }: Props) {
   return (
     <div className="flex flex-col gap-2 rounded-lg bg-linen p-3 text-sm" aria-label="Developer helper" role="group" aria-live="polite">
       <p className="tabular">
-        <span className="font-bold">{strengthWords(developerPercent)}</span>: by the definition of volume (1 L releases {hundredths(volume)} L of
-        oxygen) that is {hundredths(volumeToPercent(volume))} % hydrogen peroxide; bottles round 1 vol to 0.3 %.
+        <span className="font-bold">{strengthWords(developerPercent)}</span>: by the definition of volume (1 L releases {hundredths(volume)} L of oxygen) that
+        is {hundredths(volumeToPercent(volume))} % hydrogen peroxide; bottles round 1 vol to 0.3 %.
       </p>
       {hair && (
         <p className="tabular">

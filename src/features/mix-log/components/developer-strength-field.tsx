@@ -51,15 +51,31 @@ export function DeveloperStrengthField({ control, maxPercent }: Props) {
   return (
     <div className="flex flex-wrap items-start gap-3">
       <TextField
-        label="Developer strength (%)" hint={`Salon maximum ${strengthWords(maxPercent)}. Empty: no developer.`}
-        type="number" step="0.1" min={0} inputMode="decimal" className="w-64"
-        name={field.name} ref={field.ref} value={percentShown} onBlur={field.onBlur} onChange={(e) => onPercent(e.target.value)}
+        label="Developer strength (%)"
+        hint={`Salon maximum ${strengthWords(maxPercent)}. Empty: no developer.`}
+        type="number"
+        step="0.1"
+        min={0}
+        inputMode="decimal"
+        className="w-64"
+        name={field.name}
+        ref={field.ref}
+        value={percentShown}
+        onBlur={field.onBlur}
+        onChange={(e) => onPercent(e.target.value)}
         error={fieldState.error?.message ?? (over ? `Above this salon's maximum of ${strengthWords(maxPercent)}; it will be refused.` : undefined)}
       />
       <TextField
-        label="Developer strength (vol)" hint="Trade volumes: 3/6/9/12 % = 10/20/30/40 vol."
-        type="number" step="1" min={0} inputMode="decimal" className="w-64"
-        value={volumeShown} onChange={(e) => onVolume(e.target.value)} error={volumeError}
+        label="Developer strength (vol)"
+        hint="Trade volumes: 3/6/9/12 % = 10/20/30/40 vol."
+        type="number"
+        step="1"
+        min={0}
+        inputMode="decimal"
+        className="w-64"
+        value={volumeShown}
+        onChange={(e) => onVolume(e.target.value)}
+        error={volumeError}
       />
     </div>
   );

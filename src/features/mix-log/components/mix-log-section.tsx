@@ -65,26 +65,36 @@ export function MixLogSection({ bookingId, timeZone, clientId, currency }: Props
           return (
             <section key={s.seq} aria-label={`Sitting ${s.seq}`} className="flex flex-col gap-2">
               <h3 className="text-lg font-bold">
-                Sitting {s.seq} · <span className="tabular">{formatDate(s.start, formatFor(timeZone), { width: 'short' })} {formatTime(s.start, formatFor(timeZone))}</span>
+                Sitting {s.seq} ·{' '}
+                <span className="tabular">
+                  {formatDate(s.start, formatFor(timeZone), { width: 'short' })} {formatTime(s.start, formatFor(timeZone))}
+                </span>
               </h3>
               {bowls.length === 0 && (
                 <p className="text-ink/80">{!s.started && writable ? 'Not started yet; bowls can be written ahead.' : 'No bowls written.'}</p>
               )}
               <ul className="flex flex-col gap-2">
-                {bowls.map((log) => <BowlLine key={log.id} log={log} />)}
+                {bowls.map((log) => (
+                  <BowlLine key={log.id} log={log} />
+                ))}
               </ul>
-              {s.totals.length > 0 && <ProductUseSummary totals={s.totals} totalGrams={s.totalGrams} estimatedCostCents={s.estimatedCostCents} currency={currency} />}
+              {s.totals.length > 0 && (
+                <ProductUseSummary totals={s.totals} totalGrams={s.totalGrams} estimatedCostCents={s.estimatedCostCents} currency={currency} />
+              )}
             </section>
           );
         })}
         {clientId && <PhotoUploader kind="hair_now" owner={{ clientId }} bookingId={bookingId} label="Photos of this visit (bowls, result)" />}
-        {target !== undefined && (
-          <RepeatForm bookingId={bookingId} sources={data.repeatSources} targets={targets} target={target} timeZone={timeZone} />
-        )}
+        {target !== undefined && <RepeatForm bookingId={bookingId} sources={data.repeatSources} targets={targets} target={target} timeZone={timeZone} />}
         {target !== undefined && (
           <div className="flex flex-col gap-3">
             {targets.length > 1 && (
-              <SelectField label="Write a bowl for" value={String(target)} onChange={(e) => setChosen(Number(e.target.value))} options={targets.map((s) => ({ value: String(s), label: `Sitting ${s}` }))} />
+              <SelectField
+                label="Write a bowl for"
+                value={String(target)}
+                onChange={(e) => setChosen(Number(e.target.value))}
+                options={targets.map((s) => ({ value: String(s), label: `Sitting ${s}` }))}
+              />
             )}
             <BowlForm key={`${target}-${nextBowl}`} bookingId={bookingId} sittingSeq={target} bowlNo={nextBowl} maxPercent={data.maxDeveloperPercent} />
           </div>

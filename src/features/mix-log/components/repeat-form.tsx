@@ -40,8 +40,10 @@ export function RepeatForm({ bookingId, sources, targets, target, timeZone }: Pr
       <div className="flex flex-wrap items-end gap-3">
         <SelectField label="Repeat from" options={options} value={chosen} onChange={(e) => setSource(e.target.value)} />
         <SelectField
-          label="Into sitting" options={targets.map((s) => ({ value: String(s), label: `Sitting ${s}` }))}
-          value={String(into ?? target)} onChange={(e) => setInto(Number(e.target.value))}
+          label="Into sitting"
+          options={targets.map((s) => ({ value: String(s), label: `Sitting ${s}` }))}
+          value={String(into ?? target)}
+          onChange={(e) => setInto(Number(e.target.value))}
         />
         <Button variant="secondary" busy={repeat.isPending} onClick={onRepeat}>
           Repeat last time

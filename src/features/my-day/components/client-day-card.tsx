@@ -19,7 +19,10 @@ export function ClientDayCard({ booking, sitting, timeZone, now }: Props) {
   const progress = sittingProgress(sitting, now);
   const ofLabel = sittingLabel(sitting.seq, sitting.of);
   return (
-    <article aria-label={`${booking.client.name}, ${booking.service.name}`} className="flex flex-col gap-3 rounded-2xl bg-white p-4 shadow-sm ring-1 ring-ink/15">
+    <article
+      aria-label={`${booking.client.name}, ${booking.service.name}`}
+      className="flex flex-col gap-3 rounded-2xl bg-white p-4 shadow-sm ring-1 ring-ink/15"
+    >
       <div className="flex flex-wrap items-start justify-between gap-2">
         <div>
           <h3 className="text-lg font-bold">{booking.client.name}</h3>

@@ -31,7 +31,8 @@ export function useResumeHold() {
 export function useReleaseHold() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: ({ holdId, secret }: { holdId: string; secret?: string }) => callApi(onlineBookingApi.releaseHold, { params: { id: holdId }, body: { secret } }),
+    mutationFn: ({ holdId, secret }: { holdId: string; secret?: string }) =>
+      callApi(onlineBookingApi.releaseHold, { params: { id: holdId }, body: { secret } }),
     onSettled: () => holdReleased(queryClient),
   });
 }

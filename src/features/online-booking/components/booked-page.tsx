@@ -46,7 +46,8 @@ export function BookedPage({ booking, salon }: Props) {
           <>
             <dt className="font-bold">When</dt>
             <dd>
-              {formatDate(first.start, formatFor(salon.timeZone), { width: 'short' })}, <span className="tabular">{formatRange(first.start, first.end, formatFor(salon.timeZone))}</span>
+              {formatDate(first.start, formatFor(salon.timeZone), { width: 'short' })},{' '}
+              <span className="tabular">{formatRange(first.start, first.end, formatFor(salon.timeZone))}</span>
               <span className="block text-sm text-ink/80">Salon time: {zoneLabel(salon.timeZone, first.start.slice(0, 10))}</span>
             </dd>
           </>

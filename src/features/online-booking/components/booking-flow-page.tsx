@@ -65,15 +65,7 @@ export function BookingFlowPage({ salon, serviceId, user, returnTo }: Props) {
     navigate(paths.salonBook(resumed.slug, resumed.serviceId));
   };
 
-  const step: FlowStep = !stored
-    ? 'time'
-    : !user
-      ? 'account'
-      : !stored.detailsDone
-        ? 'details'
-        : !stored.cautionsAccepted
-          ? 'cautions'
-          : 'deposit';
+  const step: FlowStep = !stored ? 'time' : !user ? 'account' : !stored.detailsDone ? 'details' : !stored.cautionsAccepted ? 'cautions' : 'deposit';
   // Focus follows the flow once it has moved on from the step the page opened at (also when it comes back to it).
   firstStep.current ??= step;
   if (step !== firstStep.current) movedOn.current = true;

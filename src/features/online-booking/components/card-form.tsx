@@ -23,8 +23,8 @@ export function CardForm({ amount, paying, problem, onPay }: Props) {
   return (
     <form onSubmit={handleSubmit(onPay)} noValidate aria-label="Card details" className="flex flex-col gap-4">
       <p className="rounded-lg bg-white px-3 py-2 text-sm ring-1 ring-ink/10">
-        This demo uses a local test payment service, not a real bank: card <span className="tabular">4242 4242 4242 4242</span>{' '}
-        succeeds and <span className="tabular">4000 0000 0000 0002</span> is declined. Any future date and any 3 digits work.
+        This demo uses a local test payment service, not a real bank: card <span className="tabular">4242 4242 4242 4242</span> succeeds and{' '}
+        <span className="tabular">4000 0000 0000 0002</span> is declined. Any future date and any 3 digits work.
       </p>
       {problem && <FormAlert>{problem}</FormAlert>}
       <TextField label="Card number" inputMode="numeric" autoComplete="cc-number" error={errors.number?.message} {...register('number')} />

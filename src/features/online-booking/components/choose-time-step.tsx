@@ -53,9 +53,7 @@ export function ChooseTimeStep({ salon, serviceId, signedInClient, focusOnMount,
     return (
       <section className="flex flex-col gap-4">
         <StepHeading focusOnMount={focusOnMount}>You already have a time held</StepHeading>
-        <p>
-          One time can be held at a time. Go back to booking the time you hold, or release it to pick another.
-        </p>
+        <p>One time can be held at a time. Go back to booking the time you hold, or release it to pick another.</p>
         <OpenHoldCard hold={open} onResumed={onResumed} />
       </section>
     );
@@ -76,9 +74,7 @@ export function ChooseTimeStep({ salon, serviceId, signedInClient, focusOnMount,
       />
       <TimeZoneNote timeZone={salon.timeZone} />
       {createHold.isError && (
-        <FormAlert>
-          {createHold.error.code === 'CONFLICT' ? 'Someone has just taken that time. Please pick another one.' : createHold.error.message}
-        </FormAlert>
+        <FormAlert>{createHold.error.code === 'CONFLICT' ? 'Someone has just taken that time. Please pick another one.' : createHold.error.message}</FormAlert>
       )}
       {free.isPending && <LoadingState label="Finding free times…" />}
       {free.isError && <FormAlert>{free.error.message}</FormAlert>}

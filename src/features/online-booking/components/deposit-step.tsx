@@ -38,8 +38,8 @@ export function DepositStep({ hold, secret, cancellationPolicy, focusOnMount, on
       <StepHeading focusOnMount={focusOnMount}>Deposit</StepHeading>
       {hold.depositCents > 0 && (
         <p>
-          The deposit for {hold.serviceName} is <span className="tabular">{formatMoney(hold.depositCents, hold.currency)}</span>: it secures
-          your time and counts towards the price.
+          The deposit for {hold.serviceName} is <span className="tabular">{formatMoney(hold.depositCents, hold.currency)}</span>: it secures your time and
+          counts towards the price.
         </p>
       )}
       <p>{cancellationPolicy}</p>

@@ -15,8 +15,8 @@ export function DetailsStep({ holdId, focusOnMount, onDone }: Props) {
     <section className="flex flex-col gap-4">
       <StepHeading focusOnMount={focusOnMount}>Your details</StepHeading>
       <p>
-        Your photos and hair history help your stylist plan safely. Only you and this salon&apos;s team can see them. Photos you
-        added before are shown here and count for this booking too. Anything you leave out now can be brought to your appointment.
+        Your photos and hair history help your stylist plan safely. Only you and this salon&apos;s team can see them. Photos you added before are shown here and
+        count for this booking too. Anything you leave out now can be brought to your appointment.
       </p>
       <SectionCard title="Photos">
         <div className="flex flex-col gap-6">

@@ -12,7 +12,11 @@ export function FlowProgress({ steps, current }: Props) {
       </p>
       <ol className="hidden flex-wrap gap-x-4 gap-y-1 text-sm sm:flex">
         {steps.map((step, i) => (
-          <li key={step} aria-current={i === index ? 'step' : undefined} className={i === index ? 'font-bold underline decoration-oxide decoration-2 underline-offset-4' : 'text-ink/80'}>
+          <li
+            key={step}
+            aria-current={i === index ? 'step' : undefined}
+            className={i === index ? 'font-bold underline decoration-oxide decoration-2 underline-offset-4' : 'text-ink/80'}
+          >
             <span aria-hidden="true">{i < index ? '✓ ' : `${i + 1}. `}</span>
             {flowStepNames[step]}
             {i < index && <span className="sr-only"> (done)</span>}

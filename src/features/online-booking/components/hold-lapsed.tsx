@@ -16,8 +16,8 @@ export function HoldLapsed({ onPickAgain }: Props) {
       }
     >
       <p>
-        The time was kept for a few minutes and is free for others again: its minutes ran out, or it was released. If any payment went
-        through for it, it has been refunded.
+        The time was kept for a few minutes and is free for others again: its minutes ran out, or it was released. If any payment went through for it, it has
+        been refunded.
       </p>
     </Notice>
   );

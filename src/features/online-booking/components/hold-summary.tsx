@@ -17,7 +17,8 @@ export function HoldSummary({ hold, onExpire, action }: Props) {
         {hold.serviceName} with {hold.stylistName}
       </p>
       <p>
-        {formatDate(hold.start, formatFor(hold.timeZone), { width: 'short' })}, <span className="tabular">{formatRange(hold.start, hold.end, formatFor(hold.timeZone))}</span>
+        {formatDate(hold.start, formatFor(hold.timeZone), { width: 'short' })},{' '}
+        <span className="tabular">{formatRange(hold.start, hold.end, formatFor(hold.timeZone))}</span>
       </p>
       <p className="text-sm text-ink/80">Salon time: {zoneLabel(hold.timeZone, hold.start.slice(0, 10))}</p>
       {hold.depositCents > 0 && <p className="text-sm tabular">Deposit {formatMoney(hold.depositCents, hold.currency)}</p>}

@@ -14,7 +14,10 @@ type Values = z.output<typeof SimulateInboundSmsSchema>;
 /** Demo only: pretend a client texted the salon (STOP turns their texts off, START back on). */
 export function InboundSmsForm() {
   const simulate = useSimulateInboundSms();
-  const { register, handleSubmit, setError, formState } = useForm<Input, unknown, Values>({ resolver: zodResolver(SimulateInboundSmsSchema), defaultValues: { from: '', body: 'STOP' } });
+  const { register, handleSubmit, setError, formState } = useForm<Input, unknown, Values>({
+    resolver: zodResolver(SimulateInboundSmsSchema),
+    defaultValues: { from: '', body: 'STOP' },
+  });
   const { errors } = formState;
   const submit = handleSubmit((body) => simulate.mutateAsync(body).catch((error) => showServerErrors(error, setError, ['from', 'body'])));
   return (

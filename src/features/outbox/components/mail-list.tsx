@@ -17,7 +17,10 @@ export function MailList({ messages, timeZone }: Props) {
             <summary className="cursor-pointer px-4 py-3">
               <span className="font-bold">{mail.subject}</span>
               <span className="block text-sm text-ink/80">
-                to {mail.to} · <span className="tabular">{formatDate(mail.receivedAt, formatFor(timeZone), { width: 'short' })}, {formatTime(mail.receivedAt, formatFor(timeZone))}</span>
+                to {mail.to} ·{' '}
+                <span className="tabular">
+                  {formatDate(mail.receivedAt, formatFor(timeZone), { width: 'short' })}, {formatTime(mail.receivedAt, formatFor(timeZone))}
+                </span>
               </span>
             </summary>
             <div className="border-t border-ink/10 px-4 py-3">

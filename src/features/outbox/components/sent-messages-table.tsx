@@ -34,11 +34,13 @@ export function SentMessagesTable({ messages, timeZone }: Props) {
             <tr key={m.id} className="border-t border-ink/10 align-top">
               <td className="tabular py-1 pr-3">{at(m.sendAt)}</td>
               <td className="py-1 pr-3">
-                {m.kind.replace(/_/g, ' ')} ({m.channel === 'sms' ? 'SMS' : 'e-mail'})
-                {m.subject && <span className="block text-ink/70">{m.subject}</span>}
+                {m.kind.replace(/_/g, ' ')} ({m.channel === 'sms' ? 'SMS' : 'e-mail'}){m.subject && <span className="block text-ink/70">{m.subject}</span>}
               </td>
               <td className="py-1 pr-3">{m.toAddress}</td>
-              <td className="py-1 pr-3" role={m.status === 'failed' ? 'alert' : undefined}>{STATUS_LABEL[m.status]}{m.sentAt ? ` ${formatTime(m.sentAt, formatFor(timeZone))}` : ''}</td>
+              <td className="py-1 pr-3" role={m.status === 'failed' ? 'alert' : undefined}>
+                {STATUS_LABEL[m.status]}
+                {m.sentAt ? ` ${formatTime(m.sentAt, formatFor(timeZone))}` : ''}
+              </td>
               <td className="tabular py-1 pr-3">{m.attempts}</td>
               <td className="py-1 text-ink/80">{m.lastError ?? ''}</td>
             </tr>

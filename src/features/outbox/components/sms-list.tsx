@@ -14,7 +14,10 @@ export function SmsList({ messages, timeZone }: Props) {
       {newestFirst.map((sms) => (
         <li key={sms.id} className="rounded-xl bg-white px-4 py-3 ring-1 ring-ink/15">
           <p className="text-sm text-ink/80">
-            to {sms.to} · <span className="tabular">{formatDate(sms.receivedAt, formatFor(timeZone), { width: 'short' })}, {formatTime(sms.receivedAt, formatFor(timeZone))}</span>
+            to {sms.to} ·{' '}
+            <span className="tabular">
+              {formatDate(sms.receivedAt, formatFor(timeZone), { width: 'short' })}, {formatTime(sms.receivedAt, formatFor(timeZone))}
+            </span>
           </p>
           <LinkedText text={sms.body} />
         </li>

@@ -14,14 +14,20 @@ export function HandsOnShareTable({ rows }: Props) {
         </caption>
         <thead>
           <tr className="border-b border-ink/20">
-            <th scope="col" className="py-2 pr-4">Stylist</th>
-            <th scope="col" className="py-2 text-right">Hands-on share</th>
+            <th scope="col" className="py-2 pr-4">
+              Stylist
+            </th>
+            <th scope="col" className="py-2 text-right">
+              Hands-on share
+            </th>
           </tr>
         </thead>
         <tbody>
           {rows.map((row) => (
             <tr key={row.stylist} className="border-b border-ink/10 last:border-0">
-              <th scope="row" className="py-2 pr-4 font-normal">{row.stylist}</th>
+              <th scope="row" className="py-2 pr-4 font-normal">
+                {row.stylist}
+              </th>
               <td className="py-2 text-right tabular">{formatPercent(row.share)}</td>
             </tr>
           ))}

@@ -7,7 +7,6 @@ import { useRemovePhoto } from '../api/photo-mutations';
 
 type Props = { photos: Photo[]; label: string };
 
-
 /** Thumbnails loaded through the authorised photo route, each with a remove button. */
 export function PhotoThumbnails({ photos, label }: Props) {
   const remove = useRemovePhoto();
@@ -23,7 +22,12 @@ export function PhotoThumbnails({ photos, label }: Props) {
               <a href={photo.url} target="_blank" rel="noreferrer" className="block overflow-hidden rounded-lg ring-1 ring-ink/10">
                 <img src={photo.url} alt={name} width={photo.width} height={photo.height} loading="lazy" className="aspect-square w-full object-cover" />
               </a>
-              <Button variant="quiet" busy={remove.isPending && remove.variables === photo.id} onClick={() => remove.mutate(photo.id)} aria-label={`Remove ${name}`}>
+              <Button
+                variant="quiet"
+                busy={remove.isPending && remove.variables === photo.id}
+                onClick={() => remove.mutate(photo.id)}
+                aria-label={`Remove ${name}`}
+              >
                 Remove
               </Button>
             </li>

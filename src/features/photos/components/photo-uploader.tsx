@@ -38,7 +38,9 @@ export function PhotoUploader({ kind, bookingId, owner = 'me', label = kindLabel
 
   return (
     <section aria-labelledby={`${inputId}-title`} className="flex flex-col gap-3">
-      <h3 id={`${inputId}-title`} className="text-lg font-bold">{label}</h3>
+      <h3 id={`${inputId}-title`} className="text-lg font-bold">
+        {label}
+      </h3>
       <div className="flex flex-col gap-1">
         <label htmlFor={inputId} className="font-bold">
           Add photos
@@ -60,7 +62,9 @@ export function PhotoUploader({ kind, bookingId, owner = 'me', label = kindLabel
       {upload.isPending && (
         <div className="flex flex-col gap-1">
           <progress max={1} value={progress} aria-label={`Uploading ${label.toLowerCase()}`} className="h-3 w-full accent-oxide" />
-          <p role="status" className="text-sm">{progress < 1 ? `Uploading… ${Math.round(progress * 100)}%` : 'Checking the photos…'}</p>
+          <p role="status" className="text-sm">
+            {progress < 1 ? `Uploading… ${Math.round(progress * 100)}%` : 'Checking the photos…'}
+          </p>
         </div>
       )}
       {upload.isError && (
@@ -68,12 +72,16 @@ export function PhotoUploader({ kind, bookingId, owner = 'me', label = kindLabel
           {upload.error.message}
           {problems.length > 1 && (
             <ul className="mt-1 list-disc pl-5 font-normal">
-              {problems.map((p) => <li key={p}>{p}</li>)}
+              {problems.map((p) => (
+                <li key={p}>{p}</li>
+              ))}
             </ul>
           )}
         </FormAlert>
       )}
-      {upload.isSuccess && <FormAlert tone="success">{upload.data.photos.length === 1 ? 'Photo added.' : `${upload.data.photos.length} photos added.`}</FormAlert>}
+      {upload.isSuccess && (
+        <FormAlert tone="success">{upload.data.photos.length === 1 ? 'Photo added.' : `${upload.data.photos.length} photos added.`}</FormAlert>
+      )}
       {list.isError ? <FormAlert>{list.error.message}</FormAlert> : <PhotoThumbnails photos={photos} label={label} />}
     </section>
   );

@@ -22,9 +22,8 @@ export function SalonPolicies({ policies }: Props) {
         ))}
       </dl>
       <p className="mt-4 text-sm">
-        Hair colour and lightener can irritate or burn skin and scalp, cause allergic reactions and damage hair. Tell the
-        salon about past reactions, allergies and colour done at home. The salon follows local regulations and the
-        judgement of its licensed professionals.
+        Hair colour and lightener can irritate or burn skin and scalp, cause allergic reactions and damage hair. Tell the salon about past reactions, allergies
+        and colour done at home. The salon follows local regulations and the judgement of its licensed professionals.
       </p>
     </SectionCard>
   );

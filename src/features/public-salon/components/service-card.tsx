@@ -25,8 +25,7 @@ export function ServiceCard({ service, slug, currency, phone }: Props) {
       </dl>
       {service.needsSkinTest && (
         <p className="rounded-lg border-l-4 border-amber bg-linen px-3 py-2 text-sm">
-          <strong>Skin test first.</strong> This colour needs a skin test before the appointment (see the skin test policy),
-          and usually a consultation.
+          <strong>Skin test first.</strong> This colour needs a skin test before the appointment (see the skin test policy), and usually a consultation.
         </p>
       )}
       {service.onlineBookable ? (
@@ -35,7 +34,11 @@ export function ServiceCard({ service, slug, currency, phone }: Props) {
         </Link>
       ) : (
         <p className="text-sm text-ink/80">
-          Booked with the salon after a consultation: call <a href={`tel:${phone}`} className="text-link">{phone}</a>.
+          Booked with the salon after a consultation: call{' '}
+          <a href={`tel:${phone}`} className="text-link">
+            {phone}
+          </a>
+          .
         </p>
       )}
     </article>

@@ -20,10 +20,19 @@ export function QuotePricesForm({ initial, currency }: { initial: QuotePrices; c
     <form onSubmit={(e) => void submit(e)} noValidate aria-label="Quote prices" className="flex flex-col gap-4">
       {formState.errors.root?.server && <FormAlert>{formState.errors.root.server.message}</FormAlert>}
       {save.isSuccess && <FormAlert tone="success">Prices saved. New quotes and mix-log estimates use them.</FormAlert>}
-      <MoneyField control={control} name="correctionCentsPerHour" label="Hourly rate for colour and correction work" currency={currency} className="w-40" error={err('correctionCentsPerHour')} />
+      <MoneyField
+        control={control}
+        name="correctionCentsPerHour"
+        label="Hourly rate for colour and correction work"
+        currency={currency}
+        className="w-40"
+        error={err('correctionCentsPerHour')}
+      />
       <fieldset className="flex flex-col gap-2">
         <legend className="mb-1 font-bold">Cost per gram as weighed into the bowl, in cents (leave empty if unknown)</legend>
-        <p className="text-sm text-ink/80">A mix log counts each part as itself: the lightener grams of a bowl at the lightener cost, its developer grams at the developer cost.</p>
+        <p className="text-sm text-ink/80">
+          A mix log counts each part as itself: the lightener grams of a bowl at the lightener cost, its developer grams at the developer cost.
+        </p>
         <div className="grid gap-3 sm:grid-cols-2 lg:grid-cols-4">
           {CostedProductSchema.options.map((value) => (
             <TextField

@@ -24,11 +24,14 @@ export const useReassign = () =>
   );
 export const useDeactivateStaff = () => useSetupWrite((id: string) => callApi(setupApi.deactivateStaff, { params: { id } }));
 
-export const useAddUnit = () => useSetupWrite(({ kind, name }: { kind: UnitKind; name: string }) => callApi(setupApi.addUnit, { params: { kind }, body: { name } }));
+export const useAddUnit = () =>
+  useSetupWrite(({ kind, name }: { kind: UnitKind; name: string }) => callApi(setupApi.addUnit, { params: { kind }, body: { name } }));
 export const useRenameUnit = () =>
   useSetupWrite(({ kind, id, name }: { kind: UnitKind; id: string; name: string }) => callApi(setupApi.renameUnit, { params: { kind, id }, body: { name } }));
 export const useTakeOutOfService = () =>
-  useSetupWrite(({ kind, id, body }: { kind: UnitKind; id: string; body: OutOfServiceInput }) => callApi(setupApi.takeOutOfService, { params: { kind, id }, body }));
+  useSetupWrite(({ kind, id, body }: { kind: UnitKind; id: string; body: OutOfServiceInput }) =>
+    callApi(setupApi.takeOutOfService, { params: { kind, id }, body }),
+  );
 export const useBackInService = () =>
   useSetupWrite(({ kind, id, entryId }: { kind: UnitKind; id: string; entryId: string }) => callApi(setupApi.backInService, { params: { kind, id, entryId } }));
 

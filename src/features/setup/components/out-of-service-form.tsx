@@ -24,12 +24,21 @@ export function OutOfServiceForm({ kind, unit, timeZone, onDone }: Props) {
   const confirm = () =>
     checked &&
     take.mutateAsync({ kind, id: unit.id, body: checked }).then(
-      (res) => onDone(`${unit.name} is out of service from ${checked.from} to ${checked.to}.${res.bookings.length ? ` ${res.bookings.length} future bookings still use it: move them from the book.` : ''}`),
+      (res) =>
+        onDone(
+          `${unit.name} is out of service from ${checked.from} to ${checked.to}.${res.bookings.length ? ` ${res.bookings.length} future bookings still use it: move them from the book.` : ''}`,
+        ),
       (error) => showServerErrors(error, form.setError, ['from', 'to', 'reason']),
     );
   return (
     <div className="flex flex-col gap-3">
-      <form aria-label={`Take ${unit.name} out of service`} noValidate onSubmit={check} onChange={() => setChecked(null)} className="flex flex-wrap items-end gap-3">
+      <form
+        aria-label={`Take ${unit.name} out of service`}
+        noValidate
+        onSubmit={check}
+        onChange={() => setChecked(null)}
+        className="flex flex-wrap items-end gap-3"
+      >
         <TextField label="First day" type="date" error={errors.from?.message} {...form.register('from')} />
         <TextField label="Last day" type="date" error={errors.to?.message} {...form.register('to')} />
         <TextField label="Reason (optional)" error={errors.reason?.message} {...form.register('reason')} />
@@ -40,7 +49,11 @@ export function OutOfServiceForm({ kind, unit, timeZone, onDone }: Props) {
       {errors.root?.server && <FormAlert>{errors.root.server.message}</FormAlert>}
       {checked && (
         <div className="flex flex-col gap-3">
-          {affected.isPending ? <p>Looking up future bookings…</p> : <AffectedBookings bookings={affected.data?.bookings ?? []} timeZone={timeZone} label={`Bookings using ${unit.name} then`} />}
+          {affected.isPending ? (
+            <p>Looking up future bookings…</p>
+          ) : (
+            <AffectedBookings bookings={affected.data?.bookings ?? []} timeZone={timeZone} label={`Bookings using ${unit.name} then`} />
+          )}
           <div>
             <Button busy={take.isPending} onClick={confirm}>
               Take {unit.name} out of service

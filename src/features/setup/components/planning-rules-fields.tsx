@@ -24,8 +24,8 @@ export function PlanningRulesFields() {
       <div className="flex flex-col gap-4">
         <p className="text-ink/80">
           Minutes a product may stay on the hair, counted from when the first section gets it until it is rinsed. Services, quotes and bookings with a
-          developing step over the limit are refused. With heat (a hood or processor) the limit is halved (common practice: heat roughly halves
-          processing time). The product’s instructions and local regulations come first: these are the salon’s own upper bounds.
+          developing step over the limit are refused. With heat (a hood or processor) the limit is halved (common practice: heat roughly halves processing
+          time). The product’s instructions and local regulations come first: these are the salon’s own upper bounds.
         </p>
         <div className="grid gap-4 md:grid-cols-2">
           {LIMITED_FAMILIES.map((family) => (

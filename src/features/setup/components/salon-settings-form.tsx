@@ -20,9 +20,31 @@ const zones = typeof Intl.supportedValuesOf === 'function' ? Intl.supportedValue
 const countries = getCountries()
   .map((code) => ({ value: code, label: `${countryName(code)} (${code})` }))
   .sort((a, b) => a.label.localeCompare(b.label));
-const fieldNames = ['name', 'address', 'phone', 'timeZone', 'currency', 'country', 'hours', 'skinTestLeadHours', 'skinTestValidityDays', 'skinTestFamilies', 'holdMinutes', 'cancellationWindowHours', 'quietFrom', 'quietTo', 'reminderOffsetsHours', 'maxDeveloperPercent',
-  'processingLimits.lightener', 'processingLimits.oxidative_colour', 'processingLimits.toner_oxidative', 'processingLimits.colour_remover',
-  'liftPerSitting.virgin', 'liftPerSitting.coloured', 'liftPerSitting.compromised'] as const;
+const fieldNames = [
+  'name',
+  'address',
+  'phone',
+  'timeZone',
+  'currency',
+  'country',
+  'hours',
+  'skinTestLeadHours',
+  'skinTestValidityDays',
+  'skinTestFamilies',
+  'holdMinutes',
+  'cancellationWindowHours',
+  'quietFrom',
+  'quietTo',
+  'reminderOffsetsHours',
+  'maxDeveloperPercent',
+  'processingLimits.lightener',
+  'processingLimits.oxidative_colour',
+  'processingLimits.toner_oxidative',
+  'processingLimits.colour_remover',
+  'liftPerSitting.virgin',
+  'liftPerSitting.coloured',
+  'liftPerSitting.compromised',
+] as const;
 
 /** Everything about how the salon works, in one form checked by the same schema as the server. */
 export function SalonSettingsForm({ settings }: { settings: SalonSettings }) {
@@ -53,14 +75,32 @@ export function SalonSettingsForm({ settings }: { settings: SalonSettings }) {
             <TextField label="Name" error={err('name')} {...form.register('name')} />
             <TextField label="Phone" error={err('phone')} {...form.register('phone')} />
             <TextField label="Address" className="md:col-span-2" error={err('address')} {...form.register('address')} />
-            <TextField label="Time zone" hint="Pick the salon's city, e.g. America/Denver (names from the IANA time-zone database)" list="setup-time-zones" error={err('timeZone')} {...form.register('timeZone')} />
+            <TextField
+              label="Time zone"
+              hint="Pick the salon's city, e.g. America/Denver (names from the IANA time-zone database)"
+              list="setup-time-zones"
+              error={err('timeZone')}
+              {...form.register('timeZone')}
+            />
             <datalist id="setup-time-zones">
               {zones.map((z) => (
                 <option key={z} value={z} />
               ))}
             </datalist>
-            <TextField label="Currency" hint="Three letters, e.g. USD or EUR (ISO 4217)" className="w-40" error={err('currency')} {...form.register('currency', { setValueAs: (v: string) => v.toUpperCase() })} />
-            <SelectField label="Country" hint="Phone numbers typed without a country code are read as this country's" options={countries} error={err('country')} {...form.register('country')} />
+            <TextField
+              label="Currency"
+              hint="Three letters, e.g. USD or EUR (ISO 4217)"
+              className="w-40"
+              error={err('currency')}
+              {...form.register('currency', { setValueAs: (v: string) => v.toUpperCase() })}
+            />
+            <SelectField
+              label="Country"
+              hint="Phone numbers typed without a country code are read as this country's"
+              options={countries}
+              error={err('country')}
+              {...form.register('country')}
+            />
           </div>
         </SectionCard>
         <SectionCard title="Opening hours">
@@ -84,7 +124,12 @@ export function SalonSettingsForm({ settings }: { settings: SalonSettings }) {
             />
             <SkinTestFamiliesField control={form.control} />
             <TextField label="Online hold lasts (minutes)" type="number" error={err('holdMinutes')} {...form.register('holdMinutes', num)} />
-            <TextField label="Cancellation window (hours before the first sitting)" type="number" error={err('cancellationWindowHours')} {...form.register('cancellationWindowHours', num)} />
+            <TextField
+              label="Cancellation window (hours before the first sitting)"
+              type="number"
+              error={err('cancellationWindowHours')}
+              {...form.register('cancellationWindowHours', num)}
+            />
             <SelectField
               label="A cancellation inside the window keeps"
               options={[
@@ -110,7 +155,15 @@ export function SalonSettingsForm({ settings }: { settings: SalonSettings }) {
                   error={err('reminderOffsetsHours') ?? err('reminderOffsetsHours.0')}
                   defaultValue={field.value.join(', ')}
                   onBlur={field.onBlur}
-                  onChange={(e) => field.onChange(e.target.value.split(',').map((p) => p.trim()).filter(Boolean).map(Number))}
+                  onChange={(e) =>
+                    field.onChange(
+                      e.target.value
+                        .split(',')
+                        .map((p) => p.trim())
+                        .filter(Boolean)
+                        .map(Number),
+                    )
+                  }
                 />
               )}
             />

@@ -43,7 +43,10 @@ export function ServiceForm({ id, initial, skills, currency, active, families }:
   const err = (name: string) => fieldError(errors, name);
   const depositKind = form.watch('depositKind');
   const plan = form.watch('stepPlan');
-  const stepNeeding = stepNeedingSkinTest({ sittings: plan.sittings.map((s) => ({ ...s, steps: s.steps.filter((st) => Boolean(st.product)) })) } as StepPlan, families);
+  const stepNeeding = stepNeedingSkinTest(
+    { sittings: plan.sittings.map((s) => ({ ...s, steps: s.steps.filter((st) => Boolean(st.product)) })) } as StepPlan,
+    families,
+  );
   const submit = form.handleSubmit((body) =>
     save.mutateAsync({ id, body }).then(
       () => navigate(paths.ownerSetupServices),
@@ -71,7 +74,8 @@ export function ServiceForm({ id, initial, skills, currency, active, families }:
                 <input type="checkbox" className="size-5" {...form.register('onlineBookable')} /> Clients may book it online
               </label>
               <label className="flex min-h-11 items-center gap-2">
-                <input type="checkbox" className="size-5" aria-describedby="service-skin-test-note" {...form.register('needsSkinTest')} /> Also ask for a skin test for this service
+                <input type="checkbox" className="size-5" aria-describedby="service-skin-test-note" {...form.register('needsSkinTest')} /> Also ask for a skin
+                test for this service
               </label>
               <p id="service-skin-test-note" className="text-sm text-ink/80">
                 {stepNeeding
@@ -105,7 +109,14 @@ export function ServiceForm({ id, initial, skills, currency, active, families }:
                 {...form.register('depositPercent', { setValueAs: (v: string | number | null) => (v === '' || v === null ? null : Number(v)) })}
               />
             ) : (
-              <MoneyField control={form.control} name="depositCents" label="Deposit amount" currency={currency} hint="0 for no deposit" error={err('depositCents')} />
+              <MoneyField
+                control={form.control}
+                name="depositCents"
+                label="Deposit amount"
+                currency={currency}
+                hint="0 for no deposit"
+                error={err('depositCents')}
+              />
             )}
           </div>
         </SectionCard>

@@ -29,14 +29,31 @@ const columns = (currency: string, families: readonly ProductFamily[]) => [
   col.accessor('priceCents', { header: 'Price', cell: (c) => `${c.row.original.priceIsFrom ? 'from ' : ''}${formatMoney(c.getValue(), currency)}` }),
   col.accessor('depositCents', {
     header: 'Deposit',
-    cell: (c) => (c.row.original.depositPercent !== null ? `${c.row.original.depositPercent} % (${formatMoney(c.getValue(), currency)})` : c.getValue() ? formatMoney(c.getValue(), currency) : 'none'),
+    cell: (c) =>
+      c.row.original.depositPercent !== null
+        ? `${c.row.original.depositPercent} % (${formatMoney(c.getValue(), currency)})`
+        : c.getValue()
+          ? formatMoney(c.getValue(), currency)
+          : 'none',
   }),
   // The skin-test need follows the steps (and the service's own box, which only adds), as at every booking door.
-  col.accessor((s) => [s.onlineBookable ? 'online' : '', planNeedsSkinTest(s.stepPlan, families, s.needsSkinTest) ? 'skin test' : ''].filter(Boolean).join(', '), { id: 'flags', header: 'Online · skin test' }),
+  col.accessor(
+    (s) => [s.onlineBookable ? 'online' : '', planNeedsSkinTest(s.stepPlan, families, s.needsSkinTest) ? 'skin test' : ''].filter(Boolean).join(', '),
+    { id: 'flags', header: 'Online · skin test' },
+  ),
   col.accessor('futureBookings', { header: 'Future bookings' }),
   col.accessor((s) => (s.active ? 'on the menu' : 'retired'), { id: 'status', header: 'Status' }),
 ];
 
 export function ServicesTable({ services, currency, families }: { services: SetupService[]; currency: string; families: readonly ProductFamily[] }) {
-  return <DataTable label="Services" rows={services} columns={columns(currency, families)} filterHint="Name, kind, skill…" initialSort={[{ id: 'name', desc: false }]} empty="No services yet." />;
+  return (
+    <DataTable
+      label="Services"
+      rows={services}
+      columns={columns(currency, families)}
+      filterHint="Name, kind, skill…"
+      initialSort={[{ id: 'name', desc: false }]}
+      empty="No services yet."
+    />
+  );
 }

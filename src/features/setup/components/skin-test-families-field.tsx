@@ -39,8 +39,8 @@ export function SkinTestFamiliesField({ control }: { control: Control<SalonSetti
               ))}
             </div>
             <p id="always-tested-note" className="text-sm text-ink/80">
-              Oxidative colour and toner always need one: their labels warn of severe allergic reactions. Follow your local regulations
-              and the product maker’s instructions.
+              Oxidative colour and toner always need one: their labels warn of severe allergic reactions. Follow your local regulations and the product maker’s
+              instructions.
             </p>
           </fieldset>
         );

@@ -41,7 +41,9 @@ export function StaffForm({ member, skills, timeZone, onDone }: Props) {
   const submit = form.handleSubmit((body) => {
     const done = member
       ? saveStaff.mutateAsync({ id: member.id, body: body.details }).then(() => onDone(`${body.details.name} is saved.`))
-      : invite.mutateAsync(body).then(() => onDone(`${body.details.name} is invited: an e-mail with a link to choose a password is on its way to ${body.email}.`));
+      : invite
+          .mutateAsync(body)
+          .then(() => onDone(`${body.details.name} is invited: an e-mail with a link to choose a password is on its way to ${body.email}.`));
     return done.catch((error) => showServerErrors(error, form.setError, fieldNames));
   });
   return (
@@ -53,7 +55,13 @@ export function StaffForm({ member, skills, timeZone, onDone }: Props) {
           <TextField label="E-mail" type="email" disabled={Boolean(member)} error={err('email')} {...form.register('email')} />
           <SelectField label="Role" options={roles} error={err('details.role')} {...form.register('details.role')} />
           {role === 'stylist' && (
-            <TextField label="Clients at once (at most)" hint="Developing clients they can look after together" type="number" error={err('details.maxClientsAtOnce')} {...form.register('details.maxClientsAtOnce', { valueAsNumber: true })} />
+            <TextField
+              label="Clients at once (at most)"
+              hint="Developing clients they can look after together"
+              type="number"
+              error={err('details.maxClientsAtOnce')}
+              {...form.register('details.maxClientsAtOnce', { valueAsNumber: true })}
+            />
           )}
         </div>
         {role === 'stylist' && (
@@ -67,7 +75,9 @@ export function StaffForm({ member, skills, timeZone, onDone }: Props) {
                       type="checkbox"
                       className="size-5"
                       checked={chosen.includes(skill)}
-                      onChange={(e) => form.setValue('details.skills', e.target.checked ? [...chosen, skill] : chosen.filter((s) => s !== skill), { shouldDirty: true })}
+                      onChange={(e) =>
+                        form.setValue('details.skills', e.target.checked ? [...chosen, skill] : chosen.filter((s) => s !== skill), { shouldDirty: true })
+                      }
                     />{' '}
                     {skill}
                   </label>

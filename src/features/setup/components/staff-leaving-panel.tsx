@@ -15,7 +15,13 @@ function ReassignControl({ member, booking }: { member: StaffMember; booking: Af
   if (booking.freeStylists.length === 0) return <span className="text-sm">Nobody else is free for it: move or cancel it from the book.</span>;
   return (
     <div className="flex flex-wrap items-end gap-2">
-      <SelectField label="Give to" aria-label={`Give the booking of ${booking.clientName} to`} options={booking.freeStylists.map((s) => ({ value: s.id, label: s.name }))} value={to} onChange={(e) => setTo(e.target.value)} />
+      <SelectField
+        label="Give to"
+        aria-label={`Give the booking of ${booking.clientName} to`}
+        options={booking.freeStylists.map((s) => ({ value: s.id, label: s.name }))}
+        value={to}
+        onChange={(e) => setTo(e.target.value)}
+      />
       <Button variant="secondary" busy={reassign.isPending} onClick={() => reassign.mutate({ id: member.id, bookingId: booking.id, toStaffId: to })}>
         Re-assign
       </Button>
@@ -31,7 +37,17 @@ export function StaffLeavingPanel({ member, timeZone, onDone }: { member: StaffM
   const left = bookings.data?.bookings ?? [];
   return (
     <div className="flex flex-col gap-3">
-      {member.staffId && (bookings.isPending ? <p>Looking up future bookings…</p> : <AffectedBookings bookings={left} timeZone={timeZone} label={`Future bookings of ${member.details.name}`} action={(b) => <ReassignControl member={member} booking={b} />} />)}
+      {member.staffId &&
+        (bookings.isPending ? (
+          <p>Looking up future bookings…</p>
+        ) : (
+          <AffectedBookings
+            bookings={left}
+            timeZone={timeZone}
+            label={`Future bookings of ${member.details.name}`}
+            action={(b) => <ReassignControl member={member} booking={b} />}
+          />
+        ))}
       {deactivate.isError && <FormAlert>{deactivate.error.message}</FormAlert>}
       <div>
         <Button

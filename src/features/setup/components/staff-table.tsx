@@ -26,5 +26,14 @@ const columns = (onPick: (m: StaffMember) => void) => [
 ];
 
 export function StaffTable({ staff, onPick }: { staff: StaffMember[]; onPick: (m: StaffMember) => void }) {
-  return <DataTable label="Staff" rows={staff} columns={columns(onPick)} filterHint="Name, e-mail, role, skill…" initialSort={[{ id: 'name', desc: false }]} empty="Nobody yet." />;
+  return (
+    <DataTable
+      label="Staff"
+      rows={staff}
+      columns={columns(onPick)}
+      filterHint="Name, e-mail, role, skill…"
+      initialSort={[{ id: 'name', desc: false }]}
+      empty="Nobody yet."
+    />
+  );
 }

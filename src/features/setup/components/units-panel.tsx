@@ -52,7 +52,11 @@ export function UnitsPanel({ kind, units, timeZone }: Props) {
           <Button variant="secondary" aria-label={`Rename ${c.row.original.name}`} onClick={() => setPicked({ id: c.row.original.id, action: 'rename' })}>
             Rename
           </Button>
-          <Button variant="secondary" aria-label={`Take ${c.row.original.name} out of service`} onClick={() => setPicked({ id: c.row.original.id, action: 'close' })}>
+          <Button
+            variant="secondary"
+            aria-label={`Take ${c.row.original.name} out of service`}
+            onClick={() => setPicked({ id: c.row.original.id, action: 'close' })}
+          >
             Out of service…
           </Button>
         </div>
@@ -66,12 +70,29 @@ export function UnitsPanel({ kind, units, timeZone }: Props) {
   return (
     <div className="flex flex-col gap-4">
       {notice && <FormAlert tone="success">{notice}</FormAlert>}
-      <DataTable label={words[kind].title} rows={units} columns={columns} filterHint="Name…" initialSort={[{ id: 'name', desc: false }]} empty={`No ${kind} yet.`} />
+      <DataTable
+        label={words[kind].title}
+        rows={units}
+        columns={columns}
+        filterHint="Name…"
+        initialSort={[{ id: 'name', desc: false }]}
+        empty={`No ${kind} yet.`}
+      />
       {unit && picked?.action === 'rename' && (
-        <UnitNameForm key={unit.id} label={`New name for ${unit.name}`} submitLabel="Rename" initial={unit.name} onSave={(name) => rename.mutateAsync({ kind, id: unit.id, name }).then(() => done(`Renamed to ${name}.`))} />
+        <UnitNameForm
+          key={unit.id}
+          label={`New name for ${unit.name}`}
+          submitLabel="Rename"
+          initial={unit.name}
+          onSave={(name) => rename.mutateAsync({ kind, id: unit.id, name }).then(() => done(`Renamed to ${name}.`))}
+        />
       )}
       {unit && picked?.action === 'close' && <OutOfServiceForm key={unit.id} kind={kind} unit={unit} timeZone={timeZone} onDone={done} />}
-      <UnitNameForm label={`New ${words[kind].one}`} submitLabel={`Add ${words[kind].one}`} onSave={(name) => add.mutateAsync({ kind, name }).then(() => setNotice(`${name} is added.`))} />
+      <UnitNameForm
+        label={`New ${words[kind].one}`}
+        submitLabel={`Add ${words[kind].one}`}
+        onSave={(name) => add.mutateAsync({ kind, name }).then(() => setNotice(`${name} is added.`))}
+      />
     </div>
   );
 }

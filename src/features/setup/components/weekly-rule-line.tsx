@@ -78,7 +78,13 @@ export function WeeklyRuleLine({ path, number, timeZone, onRemove }: Props) {
             )}
           </div>
           <div className="flex flex-wrap items-end gap-3">
-            <TextField id={closedId} label="Closed on (holiday or exception)" type="date" value={closedDraft} onChange={(e) => setClosedDraft(e.target.value)} />
+            <TextField
+              id={closedId}
+              label="Closed on (holiday or exception)"
+              type="date"
+              value={closedDraft}
+              onChange={(e) => setClosedDraft(e.target.value)}
+            />
             <Button
               variant="secondary"
               disabled={!closedDraft}
@@ -95,7 +101,11 @@ export function WeeklyRuleLine({ path, number, timeZone, onRemove }: Props) {
               {shown.closedDates.map((date) => (
                 <li key={date} className="flex items-center gap-1 rounded-lg bg-linen px-3 py-1">
                   {shortDate(date)}
-                  <Button variant="quiet" aria-label={`Open again on ${shortDate(date)}`} onClick={() => write({ ...shown, closedDates: shown.closedDates.filter((d) => d !== date) })}>
+                  <Button
+                    variant="quiet"
+                    aria-label={`Open again on ${shortDate(date)}`}
+                    onClick={() => write({ ...shown, closedDates: shown.closedDates.filter((d) => d !== date) })}
+                  >
                     ✕
                   </Button>
                 </li>
@@ -107,8 +117,22 @@ export function WeeklyRuleLine({ path, number, timeZone, onRemove }: Props) {
         <p className="text-sm">This rule uses more than weekdays; edit its text below.</p>
       )}
       <div className="flex flex-wrap gap-3">
-        <TextField label="Opens" aria-label={`Opening time of hours line ${number}`} type="time" className="w-36" error={error('start')} {...register(`${path}.start`)} />
-        <TextField label="Closes" aria-label={`Closing time of hours line ${number}`} type="time" className="w-36" error={error('end')} {...register(`${path}.end`)} />
+        <TextField
+          label="Opens"
+          aria-label={`Opening time of hours line ${number}`}
+          type="time"
+          className="w-36"
+          error={error('start')}
+          {...register(`${path}.start`)}
+        />
+        <TextField
+          label="Closes"
+          aria-label={`Closing time of hours line ${number}`}
+          type="time"
+          className="w-36"
+          error={error('end')}
+          {...register(`${path}.end`)}
+        />
       </div>
       <TextAreaField
         label="Days as a calendar rule"

@@ -36,8 +36,20 @@ export function AvailabilityRows() {
             <p className="text-sm font-bold text-brick">{fieldError(formState.errors, `availability.${i}.weekdays`)}</p>
           )}
           <div className="flex flex-wrap items-end gap-3">
-            <TextField label="From" type="time" className="w-36" error={fieldError(formState.errors, `availability.${i}.from`)} {...register(`availability.${i}.from`)} />
-            <TextField label="To" type="time" className="w-36" error={fieldError(formState.errors, `availability.${i}.to`)} {...register(`availability.${i}.to`)} />
+            <TextField
+              label="From"
+              type="time"
+              className="w-36"
+              error={fieldError(formState.errors, `availability.${i}.from`)}
+              {...register(`availability.${i}.from`)}
+            />
+            <TextField
+              label="To"
+              type="time"
+              className="w-36"
+              error={fieldError(formState.errors, `availability.${i}.to`)}
+              {...register(`availability.${i}.to`)}
+            />
             {rows.fields.length > 1 && (
               <Button variant="quiet" onClick={() => rows.remove(i)}>
                 Remove these times

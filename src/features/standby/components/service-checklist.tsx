@@ -18,7 +18,12 @@ export function ServiceChecklist({ services }: Props) {
       <div className="grid gap-x-4 sm:grid-cols-2">
         {services.map((service) => (
           <label key={service.id} className="flex min-h-11 items-center gap-3">
-            <input type="checkbox" checked={picked.includes(service.id)} onChange={(e) => toggle(service.id, e.target.checked)} className="size-5 accent-oxide" />
+            <input
+              type="checkbox"
+              checked={picked.includes(service.id)}
+              onChange={(e) => toggle(service.id, e.target.checked)}
+              className="size-5 accent-oxide"
+            />
             {service.name}
           </label>
         ))}

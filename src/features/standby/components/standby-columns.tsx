@@ -22,14 +22,27 @@ export function standbyColumns(timeZone: string, onRemove: (entry: StandbyEntry)
     }),
     column.accessor((e) => e.services.map((s) => s.name).join(', '), { id: 'services', header: 'Services wanted' }),
     column.accessor((e) => e.stylist?.name ?? 'Any', { id: 'stylist', header: 'Stylist' }),
-    column.accessor((e) => e.availability.map(availabilityText).join('; '), { id: 'availability', header: 'Can come', cell: (c) => <span className="tabular">{c.getValue()}</span> }),
+    column.accessor((e) => e.availability.map(availabilityText).join('; '), {
+      id: 'availability',
+      header: 'Can come',
+      cell: (c) => <span className="tabular">{c.getValue()}</span>,
+    }),
     column.accessor('notes', { header: 'Notes', enableSorting: false }),
-    column.accessor('createdAt', { header: 'Added', cell: (c) => <span className="tabular">{formatDate(c.getValue(), formatFor(timeZone), { width: 'short' })}</span>, enableGlobalFilter: false }),
+    column.accessor('createdAt', {
+      header: 'Added',
+      cell: (c) => <span className="tabular">{formatDate(c.getValue(), formatFor(timeZone), { width: 'short' })}</span>,
+      enableGlobalFilter: false,
+    }),
     column.display({
       id: 'remove',
       header: () => <span className="sr-only">Actions</span>,
       cell: ({ row }) => (
-        <Button variant="quiet" busy={removing === row.original.id} onClick={() => onRemove(row.original)} aria-label={`Remove ${row.original.client.name} from the standby list`}>
+        <Button
+          variant="quiet"
+          busy={removing === row.original.id}
+          onClick={() => onRemove(row.original)}
+          aria-label={`Remove ${row.original.client.name} from the standby list`}
+        >
           Remove
         </Button>
       ),

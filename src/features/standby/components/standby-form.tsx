@@ -55,7 +55,11 @@ export function StandbyForm({ services, stylists }: Props) {
           error={errors.clientId && 'Pick a client or add a new one'}
         />
         <ServiceChecklist services={services} />
-        <SelectField label="Stylist" options={[{ value: '', label: 'Any stylist' }, ...stylists.map((s) => ({ value: s.id, label: s.name }))]} {...form.register('stylistId')} />
+        <SelectField
+          label="Stylist"
+          options={[{ value: '', label: 'Any stylist' }, ...stylists.map((s) => ({ value: s.id, label: s.name }))]}
+          {...form.register('stylistId')}
+        />
         <AvailabilityRows />
         <TextField label="Notes" hint="Anything the desk should know when calling" error={errors.notes?.message} {...form.register('notes')} />
         <div>

@@ -42,8 +42,8 @@ export function SkinTestsPanel({ clientId, zone }: { clientId: string; zone: str
     <div className="flex flex-col gap-4">
       {reaction && !cleared && (
         <Notice tone="danger" title="A skin test showed a reaction: no oxidative colour until an owner records a clearance.">
-          Do not colour with oxidative products; follow local regulations and licensed practice. Upcoming colour bookings of this client are
-          flagged below: cancel them (the deposit is refunded in full) or change the plan to steps that need no skin test.
+          Do not colour with oxidative products; follow local regulations and licensed practice. Upcoming colour bookings of this client are flagged below:
+          cancel them (the deposit is refunded in full) or change the plan to steps that need no skin test.
         </Notice>
       )}
       {!reaction && latestRead?.result === 'unclear' && (
@@ -55,15 +55,24 @@ export function SkinTestsPanel({ clientId, zone }: { clientId: string; zone: str
       <RecordList label="Skin tests" empty="No skin test on record." records={list.data?.tests} error={list.error}>
         {(t) => (
           <>
-            <span className="font-bold">{skinTestResultLabels[t.result]}</span> · applied {formatDate(t.appliedAt, formatFor(zone), { width: 'short' })} {formatTime(t.appliedAt, formatFor(zone))}
+            <span className="font-bold">{skinTestResultLabels[t.result]}</span> · applied {formatDate(t.appliedAt, formatFor(zone), { width: 'short' })}{' '}
+            {formatTime(t.appliedAt, formatFor(zone))}
             {t.product && ` · ${t.product}`} · recorded by {t.recordedByName ?? 'the salon'}
-            {t.readAt && ` · read ${formatDate(t.readAt, formatFor(zone), { width: 'short' })} ${formatTime(t.readAt, formatFor(zone))} by ${t.readByName ?? 'the salon'}`}
+            {t.readAt &&
+              ` · read ${formatDate(t.readAt, formatFor(zone), { width: 'short' })} ${formatTime(t.readAt, formatFor(zone))} by ${t.readByName ?? 'the salon'}`}
             {t.notes && <span className="block text-sm">{t.notes}</span>}
             {t.result === 'pending' && <SkinTestReadingForm clientId={clientId} test={t} zone={zone} />}
           </>
         )}
       </RecordList>
-      <RecordForm label="Record a skin test" title="Record a skin test" submitLabel="Record skin test" busy={formState.isSubmitting} error={formState.errors.root?.server?.message} onSubmit={submit}>
+      <RecordForm
+        label="Record a skin test"
+        title="Record a skin test"
+        submitLabel="Record skin test"
+        busy={formState.isSubmitting}
+        error={formState.errors.root?.server?.message}
+        onSubmit={submit}
+      >
         <div className="flex flex-wrap gap-3">
           <InstantField control={control} name="appliedAt" label="Applied at" zone={zone} error={err('appliedAt')} />
           <InstantField control={control} name="readAt" label="Read at" zone={zone} optional error={err('readAt')} />

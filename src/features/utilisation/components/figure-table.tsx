@@ -20,11 +20,32 @@ type Props<T> = { caption: string; columns: FigureColumn<T>[]; rows: T[]; filena
 export function FigureTable<T>({ caption, columns, rows, filename }: Props<T>) {
   const [sorting, setSorting] = useState<SortingState>([]);
   const defs = useMemo<ColumnDef<T>[]>(
-    () => columns.map((c) => ({ id: c.id, header: c.header, accessorFn: (row: T) => c.value(row), cell: ({ row }) => (c.format ? c.format(row.original) : String(c.value(row.original) ?? '—')), sortUndefined: 'last' })),
+    () =>
+      columns.map((c) => ({
+        id: c.id,
+        header: c.header,
+        accessorFn: (row: T) => c.value(row),
+        cell: ({ row }) => (c.format ? c.format(row.original) : String(c.value(row.original) ?? '—')),
+        sortUndefined: 'last',
+      })),
     [columns],
   );
-  const table = useReactTable({ data: rows, columns: defs, state: { sorting }, onSortingChange: setSorting, getCoreRowModel: getCoreRowModel(), getSortedRowModel: getSortedRowModel() });
-  const download = () => downloadCsv(filename, toCsv(columns.map((c) => c.header), table.getRowModel().rows.map((r) => columns.map((c) => c.value(r.original)))));
+  const table = useReactTable({
+    data: rows,
+    columns: defs,
+    state: { sorting },
+    onSortingChange: setSorting,
+    getCoreRowModel: getCoreRowModel(),
+    getSortedRowModel: getSortedRowModel(),
+  });
+  const download = () =>
+    downloadCsv(
+      filename,
+      toCsv(
+        columns.map((c) => c.header),
+        table.getRowModel().rows.map((r) => columns.map((c) => c.value(r.original))),
+      ),
+    );
   return (
     <div className="flex flex-col gap-2">
       <TableGrid table={table} label={caption} caption={caption} numeric={(i) => Boolean(columns[i].numeric)} />

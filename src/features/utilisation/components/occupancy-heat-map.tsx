@@ -30,9 +30,23 @@ export function OccupancyHeatMap({ cells, filename }: Props) {
     <SectionCard title="When the chairs are full">
       {cells.length > 0 && (
         <figure className="mb-4 overflow-x-auto">
-          <ScatterChart width={width} height={height} margin={MARGIN} role="img" aria-label="Heat map of chair occupancy by weekday and hour; the numbers are in the table below">
+          <ScatterChart
+            width={width}
+            height={height}
+            margin={MARGIN}
+            role="img"
+            aria-label="Heat map of chair occupancy by weekday and hour; the numbers are in the table below"
+          >
             <XAxis type="number" dataKey="hour" domain={[first - 0.5, last + 0.5]} ticks={[...new Set(hours)]} tickFormatter={hourLabel} interval={0} />
-            <YAxis type="number" dataKey="row" domain={[-0.5, days.length - 0.5]} ticks={days.map((_, i) => i)} tickFormatter={(i: number) => WEEKDAYS[days[i]]} reversed interval={0} />
+            <YAxis
+              type="number"
+              dataKey="row"
+              domain={[-0.5, days.length - 0.5]}
+              ticks={days.map((_, i) => i)}
+              tickFormatter={(i: number) => WEEKDAYS[days[i]]}
+              reversed
+              interval={0}
+            />
             <Scatter
               data={cells.map((c) => ({ ...c, row: row(c.weekday) }))}
               isAnimationActive={false}
@@ -41,7 +55,17 @@ export function OccupancyHeatMap({ cells, filename }: Props) {
                 const share = payload?.chairOccupancy ?? 0;
                 return (
                   <g>
-                    <rect x={cx - CELL / 2 + 1} y={cy - CELL / 2 + 1} width={CELL - 2} height={CELL - 2} rx={4} fill="#B5532A" fillOpacity={0.08 + 0.92 * share} stroke="#1E2A36" strokeOpacity={0.15} />
+                    <rect
+                      x={cx - CELL / 2 + 1}
+                      y={cy - CELL / 2 + 1}
+                      width={CELL - 2}
+                      height={CELL - 2}
+                      rx={4}
+                      fill="#B5532A"
+                      fillOpacity={0.08 + 0.92 * share}
+                      stroke="#1E2A36"
+                      strokeOpacity={0.15}
+                    />
                     <text x={cx} y={cy + 4} textAnchor="middle" fontSize={12} fill={share > 0.5 ? '#FFFFFF' : '#1E2A36'}>
                       {percentText(payload?.chairOccupancy)}
                     </text>

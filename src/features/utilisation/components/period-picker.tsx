@@ -21,7 +21,9 @@ export function PeriodPicker({ value, onChange }: Props) {
   const form = useForm<FormValues, unknown, z.output<typeof UtilisationQuerySchema>>({
     resolver: (values, context, options) =>
       zodResolver(UtilisationQuerySchema)(
-        values.period === 'custom' ? { period: values.period, from: values.from || undefined, to: values.to || undefined } : { period: values.period, date: values.date || undefined },
+        values.period === 'custom'
+          ? { period: values.period, from: values.from || undefined, to: values.to || undefined }
+          : { period: values.period, date: values.date || undefined },
         context,
         options as never,
       ) as never,

@@ -19,7 +19,17 @@ export function ServicesTable({ services, filename, currency }: Props) {
     { id: 'name', header: 'Service', value: (s) => s.name },
     { id: 'chairMinutes', header: 'Chair time', value: (s) => s.chairMinutes, format: (s) => formatMinutes(s.chairMinutes), numeric: true },
     { id: 'sittings', header: 'Sittings', value: (s) => s.sittings, numeric: true },
-    ...(currency ? [{ id: 'revenue', header: 'Revenue', value: (s: ServiceRow) => minorToUnits(s.revenueCents ?? 0, currency), format: (s: ServiceRow) => formatMoney(s.revenueCents ?? 0, currency), numeric: true }] : []),
+    ...(currency
+      ? [
+          {
+            id: 'revenue',
+            header: 'Revenue',
+            value: (s: ServiceRow) => minorToUnits(s.revenueCents ?? 0, currency),
+            format: (s: ServiceRow) => formatMoney(s.revenueCents ?? 0, currency),
+            numeric: true,
+          },
+        ]
+      : []),
   ];
   return (
     <SectionCard title="Top services by chair time">

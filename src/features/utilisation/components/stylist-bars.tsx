@@ -17,13 +17,30 @@ export function StylistBars({ stylists, currency, filename }: Props) {
     { id: 'clock', header: 'Minutes on the clock', value: (s) => s.onClockMinutes, format: (s) => formatMinutes(s.onClockMinutes), numeric: true },
     { id: 'bookings', header: 'Bookings', value: (s) => s.bookings, numeric: true },
     { id: 'noShows', header: 'No-shows', value: (s) => s.noShows, numeric: true },
-    { id: 'revenue', header: 'Revenue', value: (s) => minorToUnits(s.revenueCents, currency), format: (s) => formatMoney(s.revenueCents, currency), numeric: true },
-    { id: 'perHour', header: 'Revenue per hour on the clock', value: (s) => (s.revenuePerHourCents === null ? null : minorToUnits(s.revenuePerHourCents, currency)), format: (s) => (s.revenuePerHourCents === null ? '—' : formatMoney(s.revenuePerHourCents, currency)), numeric: true },
+    {
+      id: 'revenue',
+      header: 'Revenue',
+      value: (s) => minorToUnits(s.revenueCents, currency),
+      format: (s) => formatMoney(s.revenueCents, currency),
+      numeric: true,
+    },
+    {
+      id: 'perHour',
+      header: 'Revenue per hour on the clock',
+      value: (s) => (s.revenuePerHourCents === null ? null : minorToUnits(s.revenuePerHourCents, currency)),
+      format: (s) => (s.revenuePerHourCents === null ? '—' : formatMoney(s.revenuePerHourCents, currency)),
+      numeric: true,
+    },
   ];
   const data = stylists.map((s) => ({ name: s.name, share: percentValue(s.handsOnShare) }));
   return (
     <SectionCard title="Stylists">
-      <figure className="mb-4" style={{ height: 60 + stylists.length * 44 }} role="img" aria-label="Bar chart of hands-on share per stylist; the numbers are in the table below">
+      <figure
+        className="mb-4"
+        style={{ height: 60 + stylists.length * 44 }}
+        role="img"
+        aria-label="Bar chart of hands-on share per stylist; the numbers are in the table below"
+      >
         <ResponsiveContainer width="100%" height="100%">
           <BarChart data={data} layout="vertical" margin={{ top: 10, right: 50, bottom: 10, left: 20 }}>
             <CartesianGrid strokeDasharray="3 3" stroke="#1E2A3622" horizontal={false} />

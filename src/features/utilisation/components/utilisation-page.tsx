@@ -25,15 +25,32 @@ function usePeriodQuery(): [UtilisationQuery, (next: UtilisationQuery) => void] 
   return [queryFromSearch(search), set];
 }
 
-type FrameProps = { title: string; report: DeskUtilisation; query: UtilisationQuery; onQuery: (q: UtilisationQuery) => void; actions?: ReactNode; children: ReactNode };
+type FrameProps = {
+  title: string;
+  report: DeskUtilisation;
+  query: UtilisationQuery;
+  onQuery: (q: UtilisationQuery) => void;
+  actions?: ReactNode;
+  children: ReactNode;
+};
 
 /** Heading, period picker and the period in words; the figures go below. */
 function Frame({ title, report, query, onQuery, actions, children }: FrameProps) {
   const last = shiftLocalDate(report.period.to, -1);
-  const span = report.period.days === 1 ? formatDate(report.period.from, zonelessFormat) : `${formatDate(report.period.from, zonelessFormat)} to ${formatDate(last, zonelessFormat)}`;
+  const span =
+    report.period.days === 1
+      ? formatDate(report.period.from, zonelessFormat)
+      : `${formatDate(report.period.from, zonelessFormat)} to ${formatDate(last, zonelessFormat)}`;
   return (
     <div className="flex flex-col gap-6">
-      <PageHeader title={title} subtitle={<p>{report.salon.name} · {span} · salon time ({report.salon.timeZone})</p>} />
+      <PageHeader
+        title={title}
+        subtitle={
+          <p>
+            {report.salon.name} · {span} · salon time ({report.salon.timeZone})
+          </p>
+        }
+      />
       {/* The key resets the form when the URL's period changes (back button, a shared link). */}
       <PeriodPicker key={JSON.stringify(query)} value={query} onChange={onQuery} />
       {actions}
@@ -55,7 +72,9 @@ export function OwnerUtilisationView() {
           Download the engine scenario (JSON)
         </a>
       ) : (
-        <span className="text-ink/80">The engine measured this period in {report.period.scenarios} scenarios of at most 120 days; pick a shorter period to download one.</span>
+        <span className="text-ink/80">
+          The engine measured this period in {report.period.scenarios} scenarios of at most 120 days; pick a shorter period to download one.
+        </span>
       )}
       <span className="ml-2 text-sm text-ink/80">The file lets a developer re-check these occupancy figures with Dwell's planning engine on its own.</span>
     </p>

@@ -27,11 +27,27 @@ export function UtilisationSummary({ report, currency }: Props) {
         <SectionCard title="Money">
           <dl className="grid gap-3 sm:grid-cols-2 lg:grid-cols-4">
             <StatTile label="Revenue" value={formatMoney(report.money.revenueCents, currency)} note="prices of kept bookings, shared over their sittings" />
-            <StatTile label="Revenue per chair-hour" value={report.money.revenuePerChairHourCents === null ? '—' : formatMoney(report.money.revenuePerChairHourCents, currency)} note={`${Math.round(report.money.chairHours)} open chair-hours`} />
-            <StatTile label="Revenue per stylist hour" value={report.money.revenuePerStylistHourCents === null ? '—' : formatMoney(report.money.revenuePerStylistHourCents, currency)} note={`${Math.round(report.money.stylistHours)} hours on the clock`} />
+            <StatTile
+              label="Revenue per chair-hour"
+              value={report.money.revenuePerChairHourCents === null ? '—' : formatMoney(report.money.revenuePerChairHourCents, currency)}
+              note={`${Math.round(report.money.chairHours)} open chair-hours`}
+            />
+            <StatTile
+              label="Revenue per stylist hour"
+              value={report.money.revenuePerStylistHourCents === null ? '—' : formatMoney(report.money.revenuePerStylistHourCents, currency)}
+              note={`${Math.round(report.money.stylistHours)} hours on the clock`}
+            />
             <StatTile label="Deposits taken" value={formatMoney(report.deposits.takenCents, currency)} note={`${report.deposits.taken} bookings`} />
-            <StatTile label="Deposits kept" value={formatMoney(report.deposits.keptCents, currency)} note={`${report.deposits.kept} no-shows and late cancellations`} />
-            <StatTile label="Deposits refunded" value={formatMoney(report.deposits.refundedCents, currency)} note={`${report.deposits.refunded} cancelled in good time`} />
+            <StatTile
+              label="Deposits kept"
+              value={formatMoney(report.deposits.keptCents, currency)}
+              note={`${report.deposits.kept} no-shows and late cancellations`}
+            />
+            <StatTile
+              label="Deposits refunded"
+              value={formatMoney(report.deposits.refundedCents, currency)}
+              note={`${report.deposits.refunded} cancelled in good time`}
+            />
             <StatTile label="Corrections" value={String(report.corrections.count)} note="colour bookings of 4 h or more, or several sittings" />
             <StatTile
               label="Correction length, booked vs quoted"

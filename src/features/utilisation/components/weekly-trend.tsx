@@ -29,12 +29,31 @@ const LINES = [
 export function WeeklyTrend({ weeks, filename, currency }: Props) {
   const owner = weeks.some((w) => w.handsOnShare !== undefined);
   const lines = LINES.filter((l) => owner || l.key !== 'handsOnShare');
-  const data = weeks.map((w) => ({ week: formatDate(w.from, zonelessFormat), ...Object.fromEntries(lines.map((l) => [l.key, percentValue(w[l.key] ?? null)])) }));
+  const data = weeks.map((w) => ({
+    week: formatDate(w.from, zonelessFormat),
+    ...Object.fromEntries(lines.map((l) => [l.key, percentValue(w[l.key] ?? null)])),
+  }));
   const columns: FigureColumn<TrendWeek>[] = [
     { id: 'from', header: 'Week from', value: (w) => w.from, format: (w) => formatDate(w.from, zonelessFormat) },
     { id: 'bookings', header: 'Bookings', value: (w) => w.bookings, numeric: true },
-    ...lines.map((l) => ({ id: l.key, header: l.name, value: (w: TrendWeek) => w[l.key] ?? null, format: (w: TrendWeek) => percentText(w[l.key]), numeric: true })),
-    ...(currency ? [{ id: 'revenue', header: 'Revenue', value: (w: TrendWeek) => minorToUnits(w.revenueCents ?? 0, currency), format: (w: TrendWeek) => formatMoney(w.revenueCents ?? 0, currency), numeric: true }] : []),
+    ...lines.map((l) => ({
+      id: l.key,
+      header: l.name,
+      value: (w: TrendWeek) => w[l.key] ?? null,
+      format: (w: TrendWeek) => percentText(w[l.key]),
+      numeric: true,
+    })),
+    ...(currency
+      ? [
+          {
+            id: 'revenue',
+            header: 'Revenue',
+            value: (w: TrendWeek) => minorToUnits(w.revenueCents ?? 0, currency),
+            format: (w: TrendWeek) => formatMoney(w.revenueCents ?? 0, currency),
+            numeric: true,
+          },
+        ]
+      : []),
   ];
   return (
     <SectionCard title="Week by week">
@@ -47,7 +66,17 @@ export function WeeklyTrend({ weeks, filename, currency }: Props) {
             <Tooltip formatter={(v) => `${v} %`} />
             <Legend />
             {lines.map((l) => (
-              <Line key={l.key} type="monotone" dataKey={l.key} name={l.name} stroke={l.color} strokeDasharray={l.dash} strokeWidth={2} connectNulls isAnimationActive={false} />
+              <Line
+                key={l.key}
+                type="monotone"
+                dataKey={l.key}
+                name={l.name}
+                stroke={l.color}
+                strokeDasharray={l.dash}
+                strokeWidth={2}
+                connectNulls
+                isAnimationActive={false}
+              />
             ))}
           </LineChart>
         </ResponsiveContainer>

@@ -31,7 +31,10 @@ export function MovedToast({ move, timeZone, undone, undoing, onUndo, onClose }:
   const whose = whoseSitting(was.clientName, was.seq, was.of);
   const chairChanged = now && now.chairId !== was.chairId;
   return (
-    <div role="status" className="fixed inset-x-3 bottom-3 z-50 flex flex-col gap-2 rounded-xl border-l-8 border-sage bg-white px-4 py-3 text-ink shadow-lg ring-1 ring-ink/20 sm:bottom-6 sm:left-auto sm:right-6 sm:max-w-md">
+    <div
+      role="status"
+      className="fixed inset-x-3 bottom-3 z-50 flex flex-col gap-2 rounded-xl border-l-8 border-sage bg-white px-4 py-3 text-ink shadow-lg ring-1 ring-ink/20 sm:bottom-6 sm:left-auto sm:right-6 sm:max-w-md"
+    >
       {undone?.ok ? (
         <p className="font-bold">
           Moved back: {whose} is at {when(was.start, timeZone)} in {was.chairName} again.

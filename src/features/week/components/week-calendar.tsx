@@ -45,9 +45,7 @@ export default function WeekCalendar({ week, stylistId, onMove }: Props) {
   return (
     <div className={`dwell-week ${stylistId ? '' : 'dwell-week-all'} overflow-x-auto rounded-2xl bg-white p-2 ring-1 ring-ink/10`}>
       {hidden.length > 0 && (
-        <p className="px-2 pb-2 text-sm">
-          Closed, not shown: {hidden.map((d) => formatDate(d, zonelessFormat, { width: 'short', year: false })).join('; ')}.
-        </p>
+        <p className="px-2 pb-2 text-sm">Closed, not shown: {hidden.map((d) => formatDate(d, zonelessFormat, { width: 'short', year: false })).join('; ')}.</p>
       )}
       <div className={stylistId ? 'min-w-[48rem]' : 'min-w-[56rem]'}>
         <FullCalendar

@@ -10,7 +10,10 @@ type Props = { data: WeekEventData; timeText: string; showStylist: boolean };
 
 /** A sitting in the week calendar: its steps as a patterned strip, and who, what, which sitting. */
 export function WeekEventContent({ data, timeText, showStylist }: Props) {
-  const total = Math.max(1, data.steps.reduce((t, s) => t + minutesBetween(s.start, s.end), 0));
+  const total = Math.max(
+    1,
+    data.steps.reduce((t, s) => t + minutesBetween(s.start, s.end), 0),
+  );
   const ofLabel = sittingLabel(data.seq, data.of);
   return (
     <div className="flex h-full overflow-hidden text-ink">

@@ -11,7 +11,9 @@ type Props = { option: BookingOption; timeZone: string; busy: boolean; disabled:
 /** One way to book the service: who, each sitting's day and times, and what it costs in chair and hands-free time. */
 export function OptionCard({ option, timeZone, busy, disabled, onBook }: Props) {
   const first = option.sittings[0];
-  const summary = first ? `${formatDate(first.start, formatFor(timeZone), { width: 'short' })}, ${formatRange(first.start, first.end, formatFor(timeZone))}` : '';
+  const summary = first
+    ? `${formatDate(first.start, formatFor(timeZone), { width: 'short' })}, ${formatRange(first.start, first.end, formatFor(timeZone))}`
+    : '';
   return (
     <article aria-label={`${option.stylistName}, from ${summary}`} className="flex flex-col gap-3 rounded-2xl bg-white p-4 shadow-sm ring-1 ring-ink/15">
       <h3 className="text-lg font-bold">{option.stylistName}</h3>

@@ -18,7 +18,11 @@ export function OptionList({ answer, bookingKey, onBook }: Props) {
     <SectionCard title="Options">
       <TimeZoneNote timeZone={answer.timeZone} />
       {answer.options.length === 0 ? (
-        <p className="mt-3">{answer.skinTest.ok ? 'No free times were found. Try a later earliest date, another stylist, or a shorter step plan.' : 'No times can be offered until the skin test allows it.'}</p>
+        <p className="mt-3">
+          {answer.skinTest.ok
+            ? 'No free times were found. Try a later earliest date, another stylist, or a shorter step plan.'
+            : 'No times can be offered until the skin test allows it.'}
+        </p>
       ) : (
         <div className="mt-4 grid gap-4 sm:grid-cols-2 xl:grid-cols-3">
           {answer.options.map((option) => (

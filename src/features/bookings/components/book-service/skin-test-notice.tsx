@@ -12,7 +12,9 @@ export function SkinTestNotice({ check, timeZone, earliestDate, onBookSkinTest }
   if (!check.required) return null;
   // It limits the options only when it allows a first start later than the asked date.
   const limits = check.ok && check.earliestAllowed !== null && localDateOf(check.earliestAllowed, timeZone) > earliestDate;
-  const from = check.earliestAllowed ? `${formatDate(check.earliestAllowed, formatFor(timeZone), { width: 'short' })}, ${formatTime(check.earliestAllowed, formatFor(timeZone))}` : null;
+  const from = check.earliestAllowed
+    ? `${formatDate(check.earliestAllowed, formatFor(timeZone), { width: 'short' })}, ${formatTime(check.earliestAllowed, formatFor(timeZone))}`
+    : null;
   return (
     <Notice
       tone={check.ok && !limits ? 'info' : 'caution'}
@@ -31,8 +33,8 @@ export function SkinTestNotice({ check, timeZone, earliestDate, onBookSkinTest }
       <p>{check.message}</p>
       {limits && from && <p className="tabular">Options start from {from}.</p>}
       <p className="mt-1 text-sm">
-        Oxidative colour can cause allergic reactions. Follow your salon&apos;s skin-test practice, local regulations and the
-        judgement of a licensed professional.
+        Oxidative colour can cause allergic reactions. Follow your salon&apos;s skin-test practice, local regulations and the judgement of a licensed
+        professional.
       </p>
     </Notice>
   );

@@ -41,7 +41,11 @@ export function BookingHistory({ bookingId, timeZone, currency, stylists }: Prop
                               <span className="sr-only">changed to</span> {line.after}
                             </>
                           ) : (
-                            (line.after ?? <>{line.before} <span className="text-ink/80">(removed)</span></>)
+                            (line.after ?? (
+                              <>
+                                {line.before} <span className="text-ink/80">(removed)</span>
+                              </>
+                            ))
                           )}
                         </dd>
                       </div>

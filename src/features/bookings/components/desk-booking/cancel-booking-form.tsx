@@ -36,9 +36,7 @@ export function CancelBookingForm({ booking, currency }: Props) {
   if (booking.status === 'cancelled') {
     return (
       <SectionCard title="Cancel">
-        <FormAlert tone="success">
-          This booking is cancelled. {terms.data?.message ?? depositOutcomeText(booking, currency)}
-        </FormAlert>
+        <FormAlert tone="success">This booking is cancelled. {terms.data?.message ?? depositOutcomeText(booking, currency)}</FormAlert>
       </SectionCard>
     );
   }

@@ -27,8 +27,8 @@ export function ChangePlanForm({ booking }: Props) {
         <form aria-label="Change the steps" noValidate onSubmit={(e) => void submit(e)} className="flex flex-col gap-3">
           {blocked && (
             <p className="text-sm">
-              The client’s skin-test record blocks this colour. Change the steps to ones that need no skin test (for example a direct dye), or cancel:
-              the deposit is then refunded in full.
+              The client’s skin-test record blocks this colour. Change the steps to ones that need no skin test (for example a direct dye), or cancel: the
+              deposit is then refunded in full.
             </p>
           )}
           {form.formState.errors.root?.server && <FormAlert>{form.formState.errors.root.server.message}</FormAlert>}

@@ -86,11 +86,16 @@ export function MoveSittingForm({ booking, timeZone, stylists }: Props) {
           />
         </div>
         <p className="text-sm">
-          Now: {formatDate(sitting.start, formatFor(timeZone), { width: 'short' })}, <span className="tabular">{formatRange(sitting.start, sitting.end, formatFor(timeZone))}</span> · {sitting.chairName}
+          Now: {formatDate(sitting.start, formatFor(timeZone), { width: 'short' })},{' '}
+          <span className="tabular">{formatRange(sitting.start, sitting.end, formatFor(timeZone))}</span> · {sitting.chairName}
           {!oneSitting && ' · all sittings stay with one stylist'}
         </p>
         {times.isPending && <LoadingState label="Finding free times…" />}
-        {times.isError && <Notice tone="danger" title="Free times could not be found">{problemText(times.error)}</Notice>}
+        {times.isError && (
+          <Notice tone="danger" title="Free times could not be found">
+            {problemText(times.error)}
+          </Notice>
+        )}
         {times.data && times.data.times.length === 0 && (
           <p>No free times in these three weeks for this sitting{from ? ' from that date' : ''}. Try a later date or another stylist.</p>
         )}

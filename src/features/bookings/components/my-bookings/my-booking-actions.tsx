@@ -51,9 +51,7 @@ export function MyBookingActions({ booking }: Props) {
       {actionable && (
         <div id={panelId}>
           {open === 'move' && <MovePanel bookingId={booking.id} onClose={() => setOpen(null)} onMoved={() => done('Your booking was moved.')} />}
-          {open === 'cancel' && (
-            <CancelPanel bookingId={booking.id} onClose={() => setOpen(null)} onCancelled={() => done('Your booking was cancelled.')} />
-          )}
+          {open === 'cancel' && <CancelPanel bookingId={booking.id} onClose={() => setOpen(null)} onCancelled={() => done('Your booking was cancelled.')} />}
         </div>
       )}
     </div>

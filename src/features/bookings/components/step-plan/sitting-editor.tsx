@@ -19,8 +19,22 @@ export function SittingEditor({ index, of }: Props) {
       <legend className="px-1 text-lg font-bold">{of > 1 ? `Sitting ${index + 1} of ${of}` : 'Steps'}</legend>
       {index > 0 && (
         <div className="flex flex-wrap gap-3">
-          <TextField label="Days after the previous sitting, at least" type="number" inputMode="numeric" className="w-64" error={error('daysAfterPrevious.min') ?? error('daysAfterPrevious')} {...register(`${base}.daysAfterPrevious.min`, { valueAsNumber: true })} />
-          <TextField label="At most" type="number" inputMode="numeric" className="w-28" error={error('daysAfterPrevious.max')} {...register(`${base}.daysAfterPrevious.max`, { valueAsNumber: true })} />
+          <TextField
+            label="Days after the previous sitting, at least"
+            type="number"
+            inputMode="numeric"
+            className="w-64"
+            error={error('daysAfterPrevious.min') ?? error('daysAfterPrevious')}
+            {...register(`${base}.daysAfterPrevious.min`, { valueAsNumber: true })}
+          />
+          <TextField
+            label="At most"
+            type="number"
+            inputMode="numeric"
+            className="w-28"
+            error={error('daysAfterPrevious.max')}
+            {...register(`${base}.daysAfterPrevious.max`, { valueAsNumber: true })}
+          />
         </div>
       )}
       <ol className="flex flex-col gap-2">

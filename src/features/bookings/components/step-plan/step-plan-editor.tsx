@@ -24,7 +24,8 @@ export function StepPlanEditor({ title = 'Step plan for this booking', editSitti
       <summary className="cursor-pointer px-4 py-3">
         <span className="font-bold">{title}</span>{' '}
         <span className="text-ink/80">
-          — {sittings.fields.length} {sittings.fields.length === 1 ? 'sitting' : 'sittings'}, up to {longest.map(formatMinutes).join(' + ')}. Open to change steps, minutes or days between sittings.
+          — {sittings.fields.length} {sittings.fields.length === 1 ? 'sitting' : 'sittings'}, up to {longest.map(formatMinutes).join(' + ')}. Open to change
+          steps, minutes or days between sittings.
         </span>
       </summary>
       <div className="flex flex-col gap-4 border-t border-ink/10 p-4">

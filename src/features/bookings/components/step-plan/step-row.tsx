@@ -54,11 +54,35 @@ export function StepRow({ path, number, count, onMove, onRemove, onReplace }: Pr
       />
       {step.kind === 'developing' ? (
         <>
-          <TextField label="Least min" aria-label={`Least minutes of ${name}`} type="number" inputMode="numeric" className="w-24" error={error('minMinutes')} {...register(`${path}.minMinutes`, { valueAsNumber: true })} />
-          <TextField label="Most min" aria-label={`Most minutes of ${name}`} type="number" inputMode="numeric" className="w-24" error={error('maxMinutes')} {...register(`${path}.maxMinutes`, { valueAsNumber: true })} />
+          <TextField
+            label="Least min"
+            aria-label={`Least minutes of ${name}`}
+            type="number"
+            inputMode="numeric"
+            className="w-24"
+            error={error('minMinutes')}
+            {...register(`${path}.minMinutes`, { valueAsNumber: true })}
+          />
+          <TextField
+            label="Most min"
+            aria-label={`Most minutes of ${name}`}
+            type="number"
+            inputMode="numeric"
+            className="w-24"
+            error={error('maxMinutes')}
+            {...register(`${path}.maxMinutes`, { valueAsNumber: true })}
+          />
         </>
       ) : (
-        <TextField label="Minutes" aria-label={`Minutes of ${name}`} type="number" inputMode="numeric" className="w-24 sm:col-span-2" error={error('minutes')} {...register(`${path}.minutes`, { valueAsNumber: true })} />
+        <TextField
+          label="Minutes"
+          aria-label={`Minutes of ${name}`}
+          type="number"
+          inputMode="numeric"
+          className="w-24 sm:col-span-2"
+          error={error('minutes')}
+          {...register(`${path}.minutes`, { valueAsNumber: true })}
+        />
       )}
       <div className="col-span-2 flex gap-1 sm:col-span-1">
         <Button variant="quiet" aria-label={`Move ${name} up`} disabled={number === 1} onClick={() => onMove(-1)}>
