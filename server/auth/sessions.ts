@@ -1,18 +1,20 @@
-import type { Express, Request, RequestHandler } from 'express';
+import type { Express, Request, RequestHandler, Response } from 'express';
 import session from 'express-session';
+import { Authenticator } from 'passport';
+import { Strategy as LocalStrategy } from 'passport-local';
 import connectPgSimple from 'connect-pg-simple';
 import type pg from 'pg';
 import type { Config } from '../config';
 import type { Db } from '../db/database';
-import type { SessionUser } from '@shared/schemas/auth.schemas';
-import { findSessionUser } from '../features/session/users.repository';
+import { SignInBodySchema, type SessionUser } from '@shared/schemas/auth.schemas';
+import { findSessionUser, signIn } from '../features/session';
 import { AppError } from '../lib/app-error';
 
 declare module 'express-session' {
   interface SessionData {
     startedAt?: number;
     csrfReady?: boolean;
-    /** The signed-in user's id. Stored sessions keep it under this name, so a release does not sign anyone out. */
+    /** Where passport keeps the signed-in user's id. */
     passport?: { user?: string };
   }
 }
@@ -20,11 +22,31 @@ declare module 'express-session' {
 declare global {
   // eslint-disable-next-line @typescript-eslint/no-namespace -- Express's own way to add to its Request
   namespace Express {
-    interface Request {
-      /** The signed-in user, read from the session on every request; absent when nobody is signed in. */
-      user?: SessionUser;
-    }
+    /** The signed-in user passport puts on `req.user`, read from the session on every request. */
+    // eslint-disable-next-line @typescript-eslint/no-empty-object-type -- passport's own way to name its user type
+    interface User extends SessionUser {}
   }
+}
+
+/**
+ * Sign-in is passport's: the local strategy checks an e-mail and password (through the session service, which
+ * also limits failed attempts), the session keeps the user's id, and every request reads the user back, so an
+ * account deactivated meanwhile is signed out at its next request. One Authenticator per app, not the module's
+ * global one, so several apps in one process (tests) keep their own database.
+ */
+function authenticator(db: Db) {
+  const auth = new Authenticator();
+  auth.use(
+    'local',
+    new LocalStrategy({ usernameField: 'email', passwordField: 'password', passReqToCallback: true }, (req, email, password, done) => {
+      // The contract has checked the body already; parsing again gives the same normalised e-mail the service expects.
+      signIn(db, SignInBodySchema.parse({ email, password }), req.ip ?? 'unknown').then((user) => done(null, user), done);
+    }),
+  );
+  auth.serializeUser((user, done) => done(null, user.id));
+  // A removed or deactivated account reads back as no user: passport then drops it from the session.
+  auth.deserializeUser((id: string, done) => findSessionUser(db, id).then((user) => done(null, user ?? false), done));
+  return auth;
 }
 
 /**
@@ -66,40 +88,42 @@ export function installSessions(app: Express, deps: { pool: pg.Pool; db: Db; con
     }),
   );
   app.use(absoluteTimeout(deps.config.session.absoluteHours));
-  app.use(loadSessionUser(deps.db));
+  const auth = authenticator(deps.db);
+  app.set(AUTHENTICATOR, auth);
+  app.use(auth.session());
 }
 
-/** Puts the session's user on `req.user`; a session whose account was deactivated or removed is signed out. */
-const loadSessionUser =
-  (db: Db): RequestHandler =>
-  (req, _res, next) => {
-    const id = req.session.passport?.user;
-    if (!id) return next();
-    findSessionUser(db, id).then((user) => {
-      if (user) req.user = user;
-      else delete req.session.passport!.user;
-      next();
-    }, next);
-  };
+const AUTHENTICATOR = 'dwell.authenticator';
 
 const settled = (resolve: () => void, reject: (err: unknown) => void) => (err: unknown) => (err ? reject(err) : resolve());
-const regenerate = (req: Request) => new Promise<void>((resolve, reject) => req.session.regenerate(settled(resolve, reject)));
 const save = (req: Request) => new Promise<void>((resolve, reject) => req.session.save(settled(resolve, reject)));
 
-/** Signs `user` in on a new session id, so an id known before sign-in is worth nothing after it (no fixation). */
-export async function startSession(req: Request, user: SessionUser): Promise<void> {
-  await regenerate(req);
-  req.session.passport = { user: user.id };
-  req.session.startedAt = Date.now();
-  // Stored before the answer goes out: a sign-in the store did not keep must fail, not look signed in.
-  await save(req);
-  req.user = user;
+/** Checks the request's e-mail and password with passport's local strategy; the user, or the service's refusal. */
+export function authenticate(req: Request, res: Response): Promise<SessionUser> {
+  const auth = req.app.get(AUTHENTICATOR) as ReturnType<typeof authenticator>;
+  return new Promise((resolve, reject) => {
+    auth.authenticate('local', { session: false }, (err: unknown, user: SessionUser | false) => {
+      if (err) reject(err);
+      else if (!user) reject(new AppError('VALIDATION_FAILED', 400, 'Enter your e-mail and password.'));
+      else resolve(user);
+    })(req, res, reject);
+  });
 }
 
-/** Signs out: the stored session is destroyed and the request goes on with a new, empty one. */
+/**
+ * Signs `user` in. passport's logIn puts the user on a new session id, so an id known before sign-in is worth
+ * nothing after it (no fixation), and stores it before the answer goes out: a sign-in the store did not keep
+ * fails rather than looking signed in.
+ */
+export async function startSession(req: Request, user: SessionUser): Promise<void> {
+  await new Promise<void>((resolve, reject) => req.logIn(user, settled(resolve, reject)));
+  req.session.startedAt = Date.now();
+  await save(req);
+}
+
+/** Signs out: passport drops the user and the request goes on with a new, empty session. */
 export async function endSession(req: Request): Promise<void> {
-  await regenerate(req);
-  delete req.user;
+  await new Promise<void>((resolve, reject) => req.logOut(settled(resolve, reject)));
 }
 
 const TOUCH_EVERY_MS = 60_000;

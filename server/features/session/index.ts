@@ -1,2 +1,3 @@
 // The session feature's public module: other features import it only from here.
-export { findUserByEmail, setPassword, userName } from './users.repository';
+export { findSessionUser, findUserByEmail, setPassword, userName } from './users.repository';
+export { signIn } from './session.service';

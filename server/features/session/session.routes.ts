@@ -2,13 +2,13 @@ import { sessionApi } from '@shared/api/session.api';
 import { apiRoute } from '@server/lib/api-route';
 import { rateLimited } from '@server/lib/rate-limit';
 import type { AppDeps } from '@server/app-deps';
-import { endSession, startSession } from '@server/auth/sessions';
-import { signIn, signUp } from './session.service';
+import { authenticate, endSession, startSession } from '@server/auth/sessions';
+import { signUp } from './session.service';
 
 export function registerSessionRoutes({ table, db }: AppDeps): void {
   const signUpLimiter = rateLimited({ windowMs: 15 * 60_000, limit: 20, message: 'Too many sign-ups from here; try again later.' });
-  apiRoute(table, sessionApi.signIn, async ({ body, req }) => {
-    const user = await signIn(db, body, req.ip ?? 'unknown');
+  apiRoute(table, sessionApi.signIn, async ({ req, res }) => {
+    const user = await authenticate(req, res);
     await startSession(req, user);
     return { user };
   });
