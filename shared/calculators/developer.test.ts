@@ -42,7 +42,7 @@ describe('volume ↔ percent', () => {
     [30, 9],
     [40, 12],
   ])('%i vol ≈ %i %% (±0.2) and back', (vol, pct) => {
-    // Sources: trade-facts §1 table (101.325 kPa column 3.035/6.070/9.105/12.141); USP 2.5–3.5 g/100 mL for the
+    // Sources: 1 vol = 2·M(H2O2)/V_m = 2 × 34.0147 / 22.41397 = 3.035 g/L (IUPAC atomic weights; CODATA 2018 molar volume at 101.325 kPa), so 3.035/6.070/9.105/12.141 %; USP 2.5–3.5 g/100 mL for the
     // 10-vol grade; EU Reg. 1223/2009 Annex III entry 12(a) "12 % of H2O2 (40 volumes)".
     expect(Math.abs(volumeToPercent(vol) - pct)).toBeLessThanOrEqual(0.2);
     expect(Math.abs(percentToVolume(pct) - vol)).toBeLessThanOrEqual(0.2 / 0.3);
@@ -97,7 +97,7 @@ describe('the salon maximum', () => {
 
 describe('mixing (C1·m1 = C2·m2), worked by hand', () => {
   it('1 part 12 % + 1 part cream → 6 %', () => {
-    // (12 × 1 + 0 × 1) / (1 + 1) = 12 / 2 = 6. Source: trade-facts §1 mixing check.
+    // (12 × 1 + 0 × 1) / (1 + 1) = 12 / 2 = 6. Source: the weighted mean of the two strengths, worked by hand.
     expect(
       bowlPercent([
         { grams: 50, peroxidePercent: 12 },
@@ -109,7 +109,7 @@ describe('mixing (C1·m1 = C2·m2), worked by hand', () => {
   });
 
   it('colour 1 : developer 1.5 at 9 % → 5.4 % on the head', () => {
-    // (0 × 1 + 9 × 1.5) / (1 + 1.5) = 13.5 / 2.5 = 5.4. Source: trade-facts §1 mixing check.
+    // (0 × 1 + 9 × 1.5) / (1 + 1.5) = 13.5 / 2.5 = 5.4. Source: the weighted mean of the two strengths, worked by hand.
     expect(ratioBowlPercent('1:1.5', 9)).toBeCloseTo(5.4, 10);
     // A 100 g bowl at 1:1.5: colour = 100 × 1 / 2.5 = 40 g, developer = 100 × 1.5 / 2.5 = 60 g.
     expect(splitBowl('1:1.5', 100)).toEqual([40, 60]);

@@ -65,7 +65,7 @@ describe('step plan', () => {
   });
 
   it('a small lift on natural hair is one colour sitting without lightener, developing only as long as the limit leaves', () => {
-    // Common practice: permanent colour with 20–30 vol lifts natural hair by up to about 2 levels (trade-facts §4).
+    // Common practice: permanent colour with 20–30 vol lifts natural hair by up to about 2 levels (from memory).
     const q = propose({ currentLevel: 5, targetLevel: 7 });
     expect(labels(q)).toEqual([['Apply colour', 'Colour develops', 'Rinse and condition', 'Blow-dry']]);
     // Contact time counts from the first brushful: 45 min permanent colour − 15 min applying = 30 min most,
@@ -105,7 +105,7 @@ describe('step plan', () => {
   });
 
   it('splits a big lift across sittings a few days apart: 3 levels a sitting on virgin hair, 2 on coloured hair (the salon’s rules)', () => {
-    // Common practice (trade-facts §4, from memory): about 3–4 levels a sitting on virgin hair, about 2 on coloured hair.
+    // Common practice (from memory): about 3–4 levels a sitting on virgin hair, about 2 on coloured hair.
     expect(propose({ currentLevel: 3, targetLevel: 9 }).sittings).toBe(2); // 6 levels / 3 = 2 sittings
     const q = propose({ currentLevel: 3, targetLevel: 9, history: { ...virgin, previousLightening: true } }); // 6 / 2 = 3
     expect(q.sittings).toBe(3);

@@ -1,6 +1,6 @@
 /**
  * Daylight-saving checks against the IANA tz database (read through luxon/Intl).
- * Expected instants follow the tz source rules quoted in trade-facts §6: `northamerica`
+ * Expected instants follow the rules in the IANA tz database source files (tzdata 2025b): `northamerica`
  * "Rule US 2007 max Mar Sun>=8 2:00 / Nov Sun>=1 2:00" and `europe` "Rule EU lastSun 1:00u".
  * The 2027 dates (Denver 2027-03-14 and 2027-11-07, London 2027-03-28 and 2027-10-31) are worked
  * out by hand from those rules (not copied from a published table).

@@ -1,7 +1,7 @@
 /**
  * Working-hour rules written as the recurrence examples of RFC 5545 §3.8.5.3 (B. Desruisseaux,
  * IETF, 2009; "All examples assume the Eastern United States time zone") expand to the dates the
- * RFC prints. Source of each expected list: RFC 5545 §3.8.5.3, as tabulated in trade-facts §5.
+ * RFC prints. Source of each expected list: the examples of RFC 5545 §3.8.5.3 (all in US Eastern time), each re-expanded with python-dateutil 2.9.0.
  */
 import { describe, expect, it } from 'vitest';
 import { parseScenario, planOptions } from '@shared/engine/engine';
