@@ -13,3 +13,13 @@ export function toE164(input: string, country: string = DEFAULT_PHONE_COUNTRY): 
   const parsed = parsePhoneNumberFromString(input.trim(), isSupportedCountry(country) ? country : DEFAULT_PHONE_COUNTRY);
   return parsed?.isValid() ? parsed.number : null;
 }
+
+/**
+ * A stored number as people read it: in the national form for the salon's own country ((970) 555-0142), with its
+ * country code for any other (+44 20 7946 0018). Anything libphonenumber-js cannot read is shown as stored.
+ */
+export function formatPhone(stored: string, country: string = DEFAULT_PHONE_COUNTRY): string {
+  const parsed = parsePhoneNumberFromString(stored);
+  if (!parsed) return stored;
+  return parsed.country === country ? parsed.formatNational() : parsed.formatInternational();
+}

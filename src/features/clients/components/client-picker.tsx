@@ -3,14 +3,15 @@ import { useDeferredValue, useId, useState } from 'react';
 import type { ClientSummary } from '@shared/schemas/client.schemas';
 import { Button } from '@client/components/ui/button';
 import { clientQueries } from '../api/client-queries';
+import { usePhoneText } from '../../salon';
 import { ClientCreateForm } from './client-create-form';
 
 type Props = { value: ClientSummary | null; onChange: (client: ClientSummary | null) => void; error?: string };
 
-const contact = (c: ClientSummary) => [c.phone, c.email].filter(Boolean).join(' · ');
-
 /** Choose the client for a booking or standby entry: search by name, phone or e-mail, or add one. */
 export function ClientPicker({ value, onChange, error }: Props) {
+  const phoneText = usePhoneText();
+  const contact = (c: ClientSummary) => [c.phone && phoneText(c.phone), c.email].filter(Boolean).join(' · ');
   const [text, setText] = useState('');
   const [adding, setAdding] = useState(false);
   const inputId = useId();

@@ -2,10 +2,12 @@ import { keepPreviousData, useQuery } from '@tanstack/react-query';
 import { useDeferredValue, useState } from 'react';
 import { Link } from 'react-router-dom';
 import { paths } from '@client/config/paths';
+import { usePhoneText } from '../../salon';
 import { clientQueries } from '../api/client-queries';
 
 /** Find a client by name, e-mail or phone; results update as you type. */
 export function ClientSearch() {
+  const phoneText = usePhoneText();
   const [text, setText] = useState('');
   // Deferred so fast typing does not send a request per keystroke while rendering.
   const q = useDeferredValue(text.trim());
@@ -36,7 +38,7 @@ export function ClientSearch() {
             <li key={client.id}>
               <Link to={paths.deskClient(client.id)} className="flex flex-col px-3 py-2 hover:bg-linen">
                 <span className="text-link">{client.name}</span>
-                <span className="text-sm text-ink/80">{[client.email, client.phone].filter(Boolean).join(' · ')}</span>
+                <span className="text-sm text-ink/80">{[client.email, client.phone && phoneText(client.phone)].filter(Boolean).join(' · ')}</span>
               </Link>
             </li>
           ))}

@@ -8,7 +8,7 @@ import { availabilityText } from '../weekdays';
 const column = createColumnHelper<StandbyEntry>();
 
 /** The standby table's columns; the text of each is what sorting and the filter use. */
-export function standbyColumns(timeZone: string, onRemove: (entry: StandbyEntry) => void, removing: string | null) {
+export function standbyColumns(timeZone: string, phoneText: (stored: string) => string, onRemove: (entry: StandbyEntry) => void, removing: string | null) {
   return [
     column.accessor((e) => e.client.name, {
       id: 'client',
@@ -16,7 +16,9 @@ export function standbyColumns(timeZone: string, onRemove: (entry: StandbyEntry)
       cell: ({ row }) => (
         <>
           <span className="font-bold">{row.original.client.name}</span>
-          <span className="block text-sm text-ink/80">{[row.original.client.phone, row.original.client.email].filter(Boolean).join(' · ')}</span>
+          <span className="block text-sm text-ink/80">
+            {[row.original.client.phone && phoneText(row.original.client.phone), row.original.client.email].filter(Boolean).join(' · ')}
+          </span>
         </>
       ),
     }),

@@ -3,6 +3,7 @@ import type { StandbyEntry } from '@shared/schemas/standby.schemas';
 import { DataTable } from '@client/components/ui/data-table';
 import { FormAlert } from '@client/components/ui/form-alert';
 import { useRemoveStandby } from '../api/standby-mutations';
+import { usePhoneText } from '../../salon';
 import { standbyColumns } from './standby-columns';
 
 type Props = { entries: StandbyEntry[]; timeZone: string };
@@ -10,9 +11,10 @@ type Props = { entries: StandbyEntry[]; timeZone: string };
 /** The standby list as a table: filter by any text, sort by a column header, page through. */
 export function StandbyTable({ entries, timeZone }: Props) {
   const remove = useRemoveStandby();
+  const phoneText = usePhoneText();
   const columns = useMemo(
-    () => standbyColumns(timeZone, (entry) => remove.mutate(entry.id), remove.isPending ? (remove.variables ?? null) : null),
-    [timeZone, remove],
+    () => standbyColumns(timeZone, phoneText, (entry) => remove.mutate(entry.id), remove.isPending ? (remove.variables ?? null) : null),
+    [timeZone, phoneText, remove],
   );
   return (
     <div className="flex flex-col gap-3">
