@@ -7,7 +7,7 @@ import type { ConsultationInput } from '@shared/schemas/consultation.schemas';
 import { proposeQuote } from '@shared/quotes/propose-quote';
 import { quotePriceInputs } from '../features/consultations/consultations.repository';
 import { findSalon } from '../features/salon/salon.repository';
-import { demoServices } from './demo-catalogue';
+import { demoServices, type ServiceKey } from './demo-catalogue';
 
 // Cents per gram of each product as weighed into the bowl, developer apart (demo values, not market prices).
 const demoProductCosts = { lightener: 4, remover: 6, permanent: 8, demi_permanent: 7, direct_dye: 5, toner: 7, bond_builder: 30, developer: 1.5 } as const;
@@ -27,7 +27,11 @@ const jordan: ConsultationInput = {
   notes: 'Wants a copper-rose vivid over a level 8 base, and a long layered cut.',
 };
 
-export async function insertDemoConsultations(db: Db, ids: { salonId: string; clients: string[]; services: Record<string, string> }, now: Date): Promise<void> {
+export async function insertDemoConsultations(
+  db: Db,
+  ids: { salonId: string; clients: string[]; services: Record<ServiceKey, string> },
+  now: Date,
+): Promise<void> {
   await db
     .insertInto('product_costs')
     .values(
@@ -39,7 +43,7 @@ export async function insertDemoConsultations(db: Db, ids: { salonId: string; cl
     )
     .execute();
   const ana = await db.selectFrom('users').select('id').where('salon_id', '=', ids.salonId).where('email', '=', 'ana@demo.test').executeTakeFirstOrThrow();
-  const clientId = ids.clients[0];
+  const clientId = ids.clients[0]!; // the demo client account, always inserted first
   const at = DateTime.fromJSDate(now).minus({ days: 3 }).set({ hour: 11, minute: 0, second: 0, millisecond: 0 }).toJSDate();
   await db
     .insertInto('strand_tests')

@@ -155,7 +155,7 @@ async function insertDemoStandby(db: Db, ids: Ids): Promise<void> {
     .values(
       entries.map((e) => ({
         salon_id: ids.salonId,
-        client_id: ids.clients[e.client],
+        client_id: ids.clients[e.client]!, // the demo salon has more clients than these indices
         service_ids: e.services.map((k) => ids.services[k]),
         stylist_id: e.stylist,
         availability: JSON.stringify([weekdays]),
@@ -182,8 +182,10 @@ async function insertDemoBook(db: Db, ids: Ids, now: Date): Promise<number> {
   const openDays = [...Array(15).keys()].map((i) => today.plus({ days: i - 7 })).filter((d) => d.weekday >= 2 && d.weekday <= 6);
   const firstFuture = openDays.findIndex((d) => d >= today);
   // Sitting 2 three open days after sitting 1: 3 to 5 calendar days, inside the quote rules' days between sittings.
-  const correctionDays = [openDays[Math.max(0, firstFuture - 1)], openDays[Math.max(0, firstFuture - 1) + 3]];
-  const marcusOff = openDays[openDays.length - 2];
+  // Fifteen days hold ten or eleven open days, so these indices are in range.
+  const correctionDay1 = openDays[Math.max(0, firstFuture - 1)]!;
+  const correctionDay2 = openDays[Math.max(0, firstFuture - 1) + 3]!;
+  const marcusOff = openDays[openDays.length - 2]!;
   await db
     .insertInto('time_off')
     .values({ staff_id: ids.stylists.marcus, during: tstzRange(marcusOff.toJSDate(), marcusOff.plus({ days: 1 }).toJSDate()), reason: 'Training day' })
@@ -199,18 +201,19 @@ async function insertDemoBook(db: Db, ids: Ids, now: Date): Promise<number> {
     }
   };
   for (const [dayIndex, day] of openDays.entries()) {
-    const pattern = day.equals(correctionDays[0]) ? correctionDayOne : day.equals(correctionDays[1]) ? correctionDayTwo : ordinaryDay;
+    const pattern = day.equals(correctionDay1) ? correctionDayOne : day.equals(correctionDay2) ? correctionDayTwo : ordinaryDay;
     for (const [i, p] of pattern.entries()) {
       if (p.service === 'correction' && p.sitting === 1) continue; // stored with sitting 1
       if (p.stylist === 'lee' && day.weekday === 2) continue; // Lee does not work Tuesdays
       if (p.stylist === 'marcus' && day.equals(marcusOff)) continue;
       if (!p.core && (dayIndex * 7 + i * 3) % 5 === 0) continue; // leave some gaps so days differ
-      const clientId = p.service === 'correction' ? ids.clients[0] : ids.clients[nextClient(demoServices[p.service].needsSkinTest === true)];
+      // nextClient stays inside the client list.
+      const clientId = p.service === 'correction' ? ids.clients[0]! : ids.clients[nextClient(demoServices[p.service].needsSkinTest === true)]!;
       const sittings = [{ day, placement: p }];
-      if (p.service === 'correction') sittings.push({ day: correctionDays[1], placement: correctionDayTwo[0] });
+      if (p.service === 'correction') sittings.push({ day: correctionDay2, placement: correctionDayTwo[0]! });
       const steps = sittings.map((s) => placeSteps(s.day, s.placement, ids));
       const status = statusFor(
-        steps.map((st) => ({ start: st[0].start, end: st.at(-1)!.end })),
+        steps.map((st) => ({ start: st[0]!.start, end: st.at(-1)!.end })),
         now,
         count,
       );
@@ -226,7 +229,7 @@ async function insertDemoBook(db: Db, ids: Ids, now: Date): Promise<number> {
         depositCents: service.depositCents ?? 0,
         createdBy: ids.deskUserId,
         cancelReason: status === 'cancelled' ? 'Client asked to cancel (moving house)' : undefined,
-        sittings: sittings.map((s, i) => ({ chairId: ids.chairs[s.placement.chair], steps: steps[i] })),
+        sittings: sittings.map((s, i) => ({ chairId: ids.chairs[s.placement.chair]!, steps: steps[i]! })),
       });
       count++;
     }
@@ -241,14 +244,15 @@ function localTime(day: DateTime, hhmm: string): DateTime {
 
 /** Walks the service's steps from the start time; developing steps take the placement's minutes. */
 function placeSteps(day: DateTime, p: Placement, ids: Ids): NewStep[] {
-  const steps = demoServices[p.service].plan.sittings[p.sitting ?? 0].steps;
+  // The demo placements name chairs, basins, sittings and developing minutes that exist.
+  const steps = demoServices[p.service].plan.sittings[p.sitting ?? 0]!.steps;
   let at = localTime(day, p.start);
   let dev = 0;
   return steps.map((s) => {
-    const minutes = s.kind === 'developing' ? p.developing[dev++] : s.minutes;
+    const minutes = s.kind === 'developing' ? p.developing[dev++]! : s.minutes;
     const start = at;
     at = at.plus({ minutes });
-    return { kind: s.kind, label: s.label, start: start.toJSDate(), end: at.toJSDate(), basinId: s.kind === 'basin' ? ids.basins[p.basin] : null };
+    return { kind: s.kind, label: s.label, start: start.toJSDate(), end: at.toJSDate(), basinId: s.kind === 'basin' ? ids.basins[p.basin]! : null };
   });
 }
 

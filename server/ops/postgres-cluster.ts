@@ -43,7 +43,8 @@ function newestBin(): string | null {
   const versions = readdirSync(base)
     .filter((v) => existsSync(join(base, v, 'bin', 'initdb')))
     .sort((a, b) => Number(b) - Number(a));
-  return versions.length ? join(base, versions[0], 'bin') : null;
+  const [newest] = versions;
+  return newest ? join(base, newest, 'bin') : null;
 }
 
 /**

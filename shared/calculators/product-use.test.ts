@@ -32,7 +32,7 @@ describe('product used at a sitting, each part as itself', () => {
       { lightener: 4.5 },
     );
     expect(use.totals[1]).toEqual({ kind: 'developer', grams: 60, centsPerGram: null, costCents: null });
-    expect(use.totals[0].costCents).toBe(135);
+    expect(use.totals[0]?.costCents).toBe(135);
     expect(use.estimatedCostCents).toBeNull();
   });
 

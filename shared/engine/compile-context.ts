@@ -39,14 +39,17 @@ export function createContext(s: Scenario): CompileContext {
   const clock = zoneClock(s.timeZone, fromDay, toDay);
   const dayStarts: number[] = [];
   for (let d = fromDay; d <= toDay; d++) dayStarts.push(clock.toUtc(d * 1440, 'shift') as number);
+  // toDay > fromDay, so there are at least two day starts.
+  const start = dayStarts[0]!;
+  const end = dayStarts[dayStarts.length - 1]!;
   for (const [at, before, after] of clock.changes) {
     // One grid phase per horizon keeps the interval sweep simple; only a few zones shift by 30 min.
-    if (at >= dayStarts[0] && at < dayStarts[dayStarts.length - 1] && mod(after - before, g) !== 0) {
+    if (at >= start && at < end && mod(after - before, g) !== 0) {
       throw new ScenarioError('granularityMinutes', `${s.timeZone} shifts its clock by ${after - before} minutes in the horizon, not a multiple of ${g}`);
     }
   }
-  const phase = mod(-clock.offsetAt(dayStarts[0]), g);
-  return { clock, granularity: g, phase, fromDay, toDay, dayStarts, start: dayStarts[0], end: dayStarts[dayStarts.length - 1] };
+  const phase = mod(-clock.offsetAt(start), g);
+  return { clock, granularity: g, phase, fromDay, toDay, dayStarts, start, end };
 }
 
 /**

@@ -23,9 +23,11 @@ const dateWords = (date: string) => formatDate(date, zonelessFormat, { width: 's
 /** "Monday, Wednesday and Friday"; three or more days in a row read as "Tuesday to Saturday". */
 export function describeWeekdays(days: readonly WeekdayCode[]): string {
   const ordered = WEEKDAY_CODES.filter((d) => days.includes(d));
-  const first = WEEKDAY_CODES.indexOf(ordered[0]);
+  const [head] = ordered;
+  if (head === undefined) return '';
+  const first = WEEKDAY_CODES.indexOf(head);
   const inARow = ordered.every((d, i) => WEEKDAY_CODES.indexOf(d) === first + i);
-  if (ordered.length >= 3 && inARow) return `${dayWords[ordered[0]]} to ${dayWords[ordered[ordered.length - 1]]}`;
+  if (ordered.length >= 3 && inARow) return `${dayWords[head]} to ${dayWords[ordered[ordered.length - 1]!]}`;
   return listWords(ordered.map((d) => dayWords[d]));
 }
 

@@ -81,7 +81,7 @@ export function findWindows(scenario: Scenario): WindowsAnswer {
   const fmt = idx.ctx.clock.format;
   return {
     windows: listWindows(idx, scenario.fits).map((w) => ({
-      stylist: idx.stylists[w.stylist].id,
+      stylist: idx.stylists[w.stylist]!.id,
       start: fmt(w.start),
       end: fmt(w.end),
       fits: w.fits,
@@ -103,7 +103,8 @@ export function breakDownOccupancy(scenario: Scenario, cuts: string[]): Occupanc
   const at = cuts.map((date, i) => {
     const day = parseLocalDate(date);
     if (day === null || day < idx.ctx.fromDay || day > idx.ctx.toDay) throw new ScenarioError(`cuts[${i}]`, `${date} is not a date inside the horizon`);
-    return idx.ctx.dayStarts[day - idx.ctx.fromDay];
+    // fromDay <= day <= toDay, and dayStarts runs from fromDay to toDay inclusive.
+    return idx.ctx.dayStarts[day - idx.ctx.fromDay]!;
   });
   return { answer: measure(idx), ...breakDown(idx, at) };
 }

@@ -10,7 +10,7 @@ import type { Booking } from './scenario.schemas';
 
 const covers = (set: Span, start: number, end: number): boolean => {
   const i = findContaining(set, start);
-  return i >= 0 && set[i + 1] >= end;
+  return i >= 0 && set[i + 1]! >= end;
 };
 
 /** `sittings` must not be among the scenario's bookings (leave the booking out when loading it). */
@@ -26,8 +26,9 @@ export function freeStylists(idx: EngineIndex, skill: string, sittings: Booking[
     .filter((st) => st.skills.has(skill))
     .filter((st) =>
       times.every((steps) => {
-        const first = steps[0].start;
-        const last = steps[steps.length - 1].end;
+        // The booking schema requires at least one step per sitting.
+        const first = steps[0]!.start;
+        const last = steps[steps.length - 1]!.end;
         return covers(st.avail, first, last) && covers(st.capFree, first, last) && steps.every((s) => !s.hands || covers(st.handsFree, s.start, s.end));
       }),
     )

@@ -25,21 +25,26 @@ export function normalize(pairs: Span): Span {
   const keys = sortSlots(pairs.length / 2);
   let n = 0;
   let sorted = true;
+  // Non-null assertions below: a Span has even length and every index stays inside its loop bound.
   for (let i = 0; i < pairs.length; i += 2) {
-    if (pairs[i + 1] <= pairs[i]) continue;
-    keys[n] = pairs[i] * SHIFT + Math.min(pairs[i + 1] - pairs[i], SHIFT - 1);
-    if (n > 0 && keys[n] < keys[n - 1]) sorted = false;
+    const s = pairs[i]!;
+    const e = pairs[i + 1]!;
+    if (e <= s) continue;
+    const key = s * SHIFT + Math.min(e - s, SHIFT - 1);
+    keys[n] = key;
+    if (n > 0 && key < keys[n - 1]!) sorted = false;
     n++;
   }
   const order = keys.subarray(0, n);
   if (!sorted) order.sort();
   const out: Span = [];
   for (let i = 0; i < n; i++) {
-    const s = Math.floor(order[i] / SHIFT);
-    const e = s + (order[i] - s * SHIFT);
+    const key = order[i]!;
+    const s = Math.floor(key / SHIFT);
+    const e = s + (key - s * SHIFT);
     const last = out.length - 1;
-    if (last > 0 && s <= out[last]) {
-      if (e > out[last]) out[last] = e;
+    if (last > 0 && s <= out[last]!) {
+      if (e > out[last]!) out[last] = e;
     } else {
       out.push(s, e);
     }
@@ -53,10 +58,14 @@ export function intersect(a: Span, b: Span): Span {
   let i = 0;
   let j = 0;
   while (i < a.length && j < b.length) {
-    const s = a[i] > b[j] ? a[i] : b[j];
-    const e = a[i + 1] < b[j + 1] ? a[i + 1] : b[j + 1];
+    const as = a[i]!;
+    const ae = a[i + 1]!;
+    const bs = b[j]!;
+    const be = b[j + 1]!;
+    const s = as > bs ? as : bs;
+    const e = ae < be ? ae : be;
     if (s < e) out.push(s, e);
-    if (a[i + 1] < b[j + 1]) i += 2;
+    if (ae < be) i += 2;
     else j += 2;
   }
   return out;
@@ -67,13 +76,15 @@ export function subtract(a: Span, b: Span): Span {
   const out: Span = [];
   let j = 0;
   for (let i = 0; i < a.length; i += 2) {
-    let s = a[i];
-    const e = a[i + 1];
-    while (j < b.length && b[j + 1] <= s) j += 2;
+    let s = a[i]!;
+    const e = a[i + 1]!;
+    while (j < b.length && b[j + 1]! <= s) j += 2;
     let k = j;
-    while (k < b.length && b[k] < e) {
-      if (b[k] > s) out.push(s, b[k]);
-      if (b[k + 1] > s) s = b[k + 1];
+    while (k < b.length && b[k]! < e) {
+      const bs = b[k]!;
+      const be = b[k + 1]!;
+      if (bs > s) out.push(s, bs);
+      if (be > s) s = be;
       if (s >= e) break;
       k += 2;
     }
@@ -85,8 +96,10 @@ export function subtract(a: Span, b: Span): Span {
 /** The part of `a` inside [lo, hi), found by binary search so day-sized slices stay cheap. */
 export function clip(a: Span, lo: number, hi: number): Span {
   const out: Span = [];
-  for (let i = firstEndingAfter(a, lo); i < a.length && a[i] < hi; i += 2) {
-    out.push(a[i] < lo ? lo : a[i], a[i + 1] > hi ? hi : a[i + 1]);
+  for (let i = firstEndingAfter(a, lo); i < a.length && a[i]! < hi; i += 2) {
+    const s = a[i]!;
+    const e = a[i + 1]!;
+    out.push(s < lo ? lo : s, e > hi ? hi : e);
   }
   return out;
 }
@@ -94,14 +107,14 @@ export function clip(a: Span, lo: number, hi: number): Span {
 /** Total minutes covered. */
 export function totalLength(a: Span): number {
   let sum = 0;
-  for (let i = 0; i < a.length; i += 2) sum += a[i + 1] - a[i];
+  for (let i = 0; i < a.length; i += 2) sum += a[i + 1]! - a[i]!;
   return sum;
 }
 
 /** Index (even) of the interval holding minute t, or -1. */
 export function findContaining(a: Span, t: number): number {
   const i = firstEndingAfter(a, t);
-  return i < a.length && a[i] <= t ? i : -1;
+  return i < a.length && a[i]! <= t ? i : -1;
 }
 
 /**
@@ -113,7 +126,7 @@ export function firstEndingAfter(a: number[], t: number): number {
   let right = a.length / 2;
   while (left < right) {
     const mid = (left + right) >> 1;
-    if (a[2 * mid + 1] <= t) left = mid + 1;
+    if (a[2 * mid + 1]! <= t) left = mid + 1;
     else right = mid;
   }
   return 2 * left;
@@ -123,10 +136,12 @@ export function firstEndingAfter(a: number[], t: number): number {
 export function coverageAtLeast(pairs: Span, k: number): Span {
   const events = sortSlots(pairs.length).fill(0);
   for (let i = 0; i < pairs.length; i += 2) {
-    if (pairs[i + 1] <= pairs[i]) continue;
+    const s = pairs[i]!;
+    const e = pairs[i + 1]!;
+    if (e <= s) continue;
     // Ends sort before starts at the same minute: half-open intervals that touch do not overlap.
-    events[i] = pairs[i] * 2 + 1;
-    events[i + 1] = pairs[i + 1] * 2;
+    events[i] = s * 2 + 1;
+    events[i + 1] = e * 2;
   }
   events.sort();
   const out: Span = [];

@@ -79,8 +79,10 @@ export function parseLocalDateTime(text: string): number | null {
 export function parseClock(text: string): number | null {
   const m = CLOCK_RE.exec(text);
   if (!m) return null;
-  const value = +m[1] * 60 + +m[2];
-  return +m[2] < 60 && value <= 1440 ? value : null;
+  // Both groups of CLOCK_RE are mandatory.
+  const minutes = +m[2]!;
+  const value = +m[1]! * 60 + minutes;
+  return minutes < 60 && value <= 1440 ? value : null;
 }
 
 // Zone validity and offsets are fixed facts of the tz database, so memoising them is safe; luxon
@@ -128,7 +130,7 @@ export function zoneClock(zone: string, fromDay: number, toDay: number): ZoneClo
   const offsets: number[] = [luxonOffset(zone, lo)];
   const changes: Array<[number, number, number]> = [];
   for (let t = lo; t < hi; t += 1440) {
-    const before = offsets[offsets.length - 1];
+    const before = offsets[offsets.length - 1]!; // never empty: it starts with lo's offset
     if (luxonOffset(zone, t + 1440) === before) continue;
     // Binary search the first minute of the new offset inside this day.
     let a = t;
@@ -145,16 +147,18 @@ export function zoneClock(zone: string, fromDay: number, toDay: number): ZoneClo
   }
   const offsetAt = (utc: number): number => {
     if (utc < lo || utc >= hi) return luxonOffset(zone, utc);
+    // starts[0] is lo <= utc, so the walk stops inside the table.
     let i = starts.length - 1;
-    while (starts[i] > utc) i--;
-    return offsets[i];
+    while (starts[i]! > utc) i--;
+    return offsets[i]!;
   };
   const toUtc = (local: number, gap: 'reject' | 'shift'): number | null => {
     // Fast path: the first table segment whose offset maps `local` inside it is the earliest
     // instant with that wall time (segments run in time order).
+    // starts and offsets have the same length.
     for (let i = 0; i < starts.length; i++) {
-      const utc = local - offsets[i];
-      if (utc >= starts[i] && (i + 1 === starts.length ? utc < hi : utc < starts[i + 1])) return utc;
+      const utc = local - offsets[i]!;
+      if (utc >= starts[i]! && (i + 1 === starts.length ? utc < hi : utc < starts[i + 1]!)) return utc;
     }
     const early = offsetAt(local - 1440);
     const late = offsetAt(local + 1440);

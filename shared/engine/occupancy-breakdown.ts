@@ -78,7 +78,7 @@ export function breakDown(idx: EngineIndex, cuts: number[]): { total: OccupancyM
   const p = prepare(idx);
   const { ctx } = idx;
   const parts: OccupancyMinutes[] = [];
-  for (let i = 0; i + 1 < cuts.length; i++) parts.push(minutesWithin(p, cuts[i], cuts[i + 1]));
+  for (let i = 0; i + 1 < cuts.length; i++) parts.push(minutesWithin(p, cuts[i]!, cuts[i + 1]!));
   const cells = new Map<number, HourCell>();
   for (let day = ctx.fromDay; day < ctx.toDay; day++) {
     // 1970-01-01 (day 0) was a Thursday, ISO weekday 4.

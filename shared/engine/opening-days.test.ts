@@ -9,7 +9,7 @@ describe('openingDays', () => {
     const week = openingDays([weekly], 'America/Denver', '2026-11-30', 7);
     expect(week.map((d) => d.date)).toEqual(['2026-11-30', '2026-12-01', '2026-12-02', '2026-12-03', '2026-12-04', '2026-12-05', '2026-12-06']);
     expect(week.map((d) => d.hours.length)).toEqual([0, 1, 1, 1, 1, 1, 0]);
-    expect(week[1].hours).toEqual([{ start: '09:00', end: '21:00' }]);
+    expect(week[1]?.hours).toEqual([{ start: '09:00', end: '21:00' }]);
   });
 
   it('closes on an EXDATE closed date (RFC 5545 §3.8.5.1), by local date', () => {

@@ -32,7 +32,8 @@ function createSearch(idx: EngineIndex, req: CompiledRequest) {
     const key = `${si}:${k}:${day}`;
     let found = memo.get(key);
     if (!found) {
-      found = sittingStarts(idx, idx.stylists[si], day, req, k);
+      // si comes from candidateStylists (indices into idx.stylists) and k from req.sittings.
+      found = sittingStarts(idx, idx.stylists[si]!, day, req, k);
       memo.set(key, found);
     }
     return found;
@@ -40,7 +41,7 @@ function createSearch(idx: EngineIndex, req: CompiledRequest) {
   const startsOf = (si: number, k: number, day: number): Lattice => dayOf(si, k, day).starts;
   /** Earliest day, within sitting k's range after `day`, from which sittings k.. all fit; or -1. */
   const nextDay = (si: number, k: number, day: number): number => {
-    const spec = req.sittings[k];
+    const spec = req.sittings[k]!;
     for (let d = day + spec.minDays; d <= day + spec.maxDays && d < days; d++) {
       if (chainFrom(si, k, d)) return d;
     }
@@ -70,7 +71,7 @@ function candidateStylists(idx: EngineIndex, req: CompiledRequest): number[] {
 function firstPoints(l: Lattice, count: number, g: number): number[] {
   const out: number[] = [];
   for (let i = 0; i < l.length && out.length < count; i += 2) {
-    for (let t = l[i]; t <= l[i + 1] && out.length < count; t += g) out.push(t);
+    for (let t = l[i]!; t <= l[i + 1]! && out.length < count; t += g) out.push(t);
   }
   return out;
 }
@@ -96,17 +97,18 @@ export function findOptions(idx: EngineIndex, req: CompiledRequest): ChosenOptio
 }
 
 function planFor(idx: EngineIndex, req: CompiledRequest, search: ReturnType<typeof createSearch>, pair: Pair): ChosenOption {
-  const st = idx.stylists[pair.stylist];
+  const st = idx.stylists[pair.stylist]!;
   const sittings: ChosenSitting[] = [];
   let day = pair.day;
   let start = pair.start;
-  for (let k = 0; k < req.sittings.length; k++) {
+  for (const [k, spec] of req.sittings.entries()) {
     if (k > 0) {
       // Later sittings: the earliest date that keeps the rest of the chain feasible, earliest start.
+      // chainFrom held for the pair, so that date exists and has a start.
       day = search.nextDay(pair.stylist, k, day);
-      start = search.startsOf(pair.stylist, k, day)[0];
+      start = search.startsOf(pair.stylist, k, day)[0]!;
     }
-    sittings.push(choosePlan(idx, st, search.dayOf(pair.stylist, k, day).passes, req.sittings[k], start));
+    sittings.push(choosePlan(idx, st, search.dayOf(pair.stylist, k, day).passes, spec, start));
   }
   return { stylist: st.id, sittings };
 }

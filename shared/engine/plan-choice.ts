@@ -48,24 +48,29 @@ function reach(step: ChainStep, u: number): number {
   let best = -Infinity;
   for (const span of step.free) {
     const i = findContaining(span, u);
-    if (i >= 0 && span[i + 1] > best) best = span[i + 1];
+    if (i < 0) continue;
+    const end = span[i + 1]!;
+    if (end > best) best = end;
   }
   return best;
 }
 
-/** Best step end times for one chair, or null when t is not a feasible start with it. */
+/**
+ * Best step end times for one chair, or null when t is not a feasible start with it.
+ * `steps` and `sets` hold one entry per step of `spec`, so indexing them by step is in range.
+ */
 function bestEnds(st: StylistIndex, spec: SittingPlanSpec, steps: ChainStep[], sets: Lattice[], t: number, g: number) {
-  if (!latticeHas(sets[0], t)) return null;
+  if (!latticeHas(sets[0]!, t)) return null;
   let layer = new Map<number, State>([[t, { frag: 0, win: 0, prev: -1 }]]);
   const layers: Array<Map<number, State>> = [layer];
   spec.steps.forEach((step, k) => {
     const next = new Map<number, State>();
     const isHands = step.kind !== 'developing';
-    const prevHands = k > 0 && spec.steps[k - 1].kind !== 'developing';
+    const prevHands = k > 0 && spec.steps[k - 1]!.kind !== 'developing';
     for (const [u, state] of layer) {
-      const limit = reach(steps[k], u);
+      const limit = reach(steps[k]!, u);
       for (let e = u + step.lo; e <= u + step.hi && e <= limit; e += g) {
-        if (k + 1 < spec.steps.length && !latticeHas(sets[k + 1], e)) continue;
+        if (k + 1 < spec.steps.length && !latticeHas(sets[k + 1]!, e)) continue;
         let frag = state.frag;
         let win = state.win;
         if (isHands) {
@@ -90,20 +95,22 @@ function bestEnds(st: StylistIndex, spec: SittingPlanSpec, steps: ChainStep[], s
   }
   if (!best) return null;
   const ends: number[] = [end];
-  for (let k = spec.steps.length; k > 1; k--) ends.unshift((layers[k].get(ends[0]) as State).prev);
+  // layers holds one map per step plus the start, and each end was reached from the layer before.
+  for (let k = spec.steps.length; k > 1; k--) ends.unshift((layers[k]!.get(ends[0]!) as State).prev);
   return { score: best, ends };
 }
 
+/** Length of the unit's free stretch holding `start` (callers pass a start inside one). */
 function fitLength(unit: UnitIndex, start: number): number {
   const i = findContaining(unit.free, start);
-  return unit.free[i + 1] - unit.free[i];
+  return unit.free[i + 1]! - unit.free[i]!;
 }
 
 function pickBasin(idx: EngineIndex, start: number, end: number): string {
   let chosen: UnitIndex | null = null;
   for (const basin of idx.basins) {
     const i = findContaining(basin.free, start);
-    if (i < 0 || basin.free[i + 1] < end) continue;
+    if (i < 0 || basin.free[i + 1]! < end) continue;
     if (!chosen || fitLength(basin, start) < fitLength(chosen, start)) chosen = basin;
   }
   return (chosen as UnitIndex).id;
@@ -116,8 +123,9 @@ export function choosePlan(idx: EngineIndex, st: StylistIndex, passes: ChairPass
   for (const { chair, steps, sets } of passes) {
     const found = bestEnds(st, spec, steps, sets, t, g);
     if (!found) continue;
-    const end = found.ends[found.ends.length - 1];
-    const pickEnd = pick ? pick.ends[pick.ends.length - 1] : Infinity;
+    // ends holds one end per step, and a sitting has at least one step.
+    const end = found.ends[found.ends.length - 1]!;
+    const pickEnd = pick ? pick.ends[pick.ends.length - 1]! : Infinity;
     const sameScore = pick && !better(found.score, pick.score) && !better(pick.score, found.score);
     if (!pick || better(found.score, pick.score) || (sameScore && (end < pickEnd || (end === pickEnd && fitLength(chair, t) < fitLength(pick.chair, t))))) {
       pick = { chair, score: found.score, ends: found.ends };
@@ -126,11 +134,12 @@ export function choosePlan(idx: EngineIndex, st: StylistIndex, passes: ChairPass
   if (!pick) throw new Error('choosePlan called with an infeasible start');
   let start = t;
   const steps = spec.steps.map((step, k): ChosenStep => {
-    const chosen: ChosenStep = { kind: step.kind, start, end: pick.ends[k] };
+    const end = pick.ends[k]!;
+    const chosen: ChosenStep = { kind: step.kind, start, end };
     if (step.id !== undefined) chosen.id = step.id;
     if (step.label !== undefined) chosen.label = step.label;
-    if (step.kind === 'basin') chosen.basin = pickBasin(idx, start, pick.ends[k]);
-    start = pick.ends[k];
+    if (step.kind === 'basin') chosen.basin = pickBasin(idx, start, end);
+    start = end;
     return chosen;
   });
   return { chair: pick.chair.id, steps };

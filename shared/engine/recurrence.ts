@@ -20,7 +20,8 @@ const floating = (localMinute: number): Date => new Date(localMinute * 60_000);
 function toLocalMinute(value: string, tzid: string | null, clock: ZoneClock): number {
   const m = VALUE_RE.exec(value.trim());
   if (!m) throw new RecurrenceError(`"${value}" is not an iCalendar date or date-time`);
-  const [y, mo, d, h = '0', mi = '0', s = '0'] = m.slice(1);
+  // VALUE_RE always captures the date; the time groups are optional.
+  const [y, mo, d, h = '0', mi = '0', s = '0'] = m.slice(1) as [string, string, string, string?, string?, string?];
   const wall = Date.UTC(+y, +mo - 1, +d, +h, +mi, +s) / 60_000;
   if (m[7] === 'Z') return wall + clock.offsetAt(wall);
   if (tzid && tzid !== clock.zone) {
@@ -42,7 +43,7 @@ function parseRule(text: string, dtstart: number, clock: ZoneClock) {
   }
   // UNTIL is an instant (UTC) when written with Z; rrule compares floating values, so convert it.
   const until = /UNTIL=([0-9TZ]+)/i.exec(text);
-  if (until) options.until = floating(toLocalMinute(until[1], null, clock));
+  if (until?.[1] !== undefined) options.until = floating(toLocalMinute(until[1], null, clock));
   delete options.tzid;
   try {
     return new rr.RRule({ ...options, dtstart: floating(dtstart) });
@@ -54,7 +55,8 @@ function parseRule(text: string, dtstart: number, clock: ZoneClock) {
 function splitLine(line: string): { name: string; tzid: string | null; value: string } {
   const colon = line.indexOf(':');
   if (colon < 0) throw new RecurrenceError(`line "${line}" has no ":"`);
-  const [name, ...params] = line.slice(0, colon).split(';');
+  // split always returns at least one piece.
+  const [name, ...params] = line.slice(0, colon).split(';') as [string, ...string[]];
   const tz = params.find((p) => p.toUpperCase().startsWith('TZID='));
   return { name: name.toUpperCase(), tzid: tz ? tz.slice(5) : null, value: line.slice(colon + 1) };
 }
@@ -67,8 +69,9 @@ export function buildRuleSet(text: string, horizonFromDay: number, clock: ZoneCl
     .split(/\r?\n/)
     .map((l) => l.trim())
     .filter((l) => l.length > 0);
-  if (lines.length === 1 && !lines[0].includes(':')) {
-    set.rrule(parseRule(lines[0], horizonFromDay * 1440, clock));
+  const [only] = lines;
+  if (lines.length === 1 && only !== undefined && !only.includes(':')) {
+    set.rrule(parseRule(only, horizonFromDay * 1440, clock));
     return { set, exDays };
   }
   const parsed = lines.map(splitLine);

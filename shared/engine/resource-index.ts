@@ -76,8 +76,10 @@ export function buildIndex(s: Scenario): EngineIndex {
   const basinBusy: Span[] = s.basins.map(() => []);
 
   // Plain loops, and field names built only on failure: this runs for thousands of steps per query.
+  // The per-resource arrays are as long as their lists, and the id maps only hold those lists'
+  // indices, so the lookups below are in range (hence the non-null assertions).
   for (let i = 0; i < s.bookings.length; i++) {
-    const b = s.bookings[i];
+    const b = s.bookings[i]!;
     const who = stylistById.get(b.stylist);
     if (who === undefined) throw missing(`bookings[${i}].stylist`, 'stylist', b.stylist);
     const chair = chairIds.get(b.chair);
@@ -86,7 +88,7 @@ export function buildIndex(s: Scenario): EngineIndex {
     let previousText = '';
     let first = 0;
     for (let k = 0; k < b.steps.length; k++) {
-      const step = b.steps[k];
+      const step = b.steps[k]!;
       // Back-to-back steps repeat the same text; reuse the conversion.
       const start = step.start === previousText ? previousEnd : tryInstant(ctx, step.start, true);
       if (typeof start === 'string') throw new ScenarioError(stepField(i, k, 'start'), start);
@@ -98,26 +100,26 @@ export function buildIndex(s: Scenario): EngineIndex {
       previousEnd = end;
       previousText = step.end;
       if (step.kind === 'developing') {
-        developing[who].push(start, end);
+        developing[who]!.push(start, end);
         continue;
       }
-      hands[who].push(start, end);
+      hands[who]!.push(start, end);
       if (step.kind === 'basin') {
         const basin = basinIds.get(step.basin);
         if (basin === undefined) throw missing(stepField(i, k, 'basin'), 'basin', step.basin);
-        basinBusy[basin].push(start, end);
+        basinBusy[basin]!.push(start, end);
       }
     }
     // The client holds the chair (and counts against the stylist's cap) from first step to last.
-    chairBusy[chair].push(first, previousEnd);
-    spans[who].push(first, previousEnd);
+    chairBusy[chair]!.push(first, previousEnd);
+    spans[who]!.push(first, previousEnd);
   }
 
   const stylists = s.stylists.map((st, i): StylistIndex => {
     const hours = expandHours(ctx, st.hours, `stylists[${i}].hours`);
     const off = expandPeriods(ctx, st.timeOff, `stylists[${i}].timeOff`);
     const clock = subtract(hours, off);
-    const handsSet = normalize(hands[i]);
+    const handsSet = normalize(hands[i]!);
     // Complements are built on first use: occupancy needs none of them, windows only some.
     let handsFree: Span | null = null;
     let capFree: Span | null = null;
@@ -131,9 +133,9 @@ export function buildIndex(s: Scenario): EngineIndex {
       get handsFree() {
         return (handsFree ??= subtract(horizon, handsSet));
       },
-      developing: normalize(developing[i]),
+      developing: normalize(developing[i]!),
       get capFree() {
-        return (capFree ??= subtract(horizon, coverageAtLeast(spans[i], st.maxClientsAtOnce)));
+        return (capFree ??= subtract(horizon, coverageAtLeast(spans[i]!, st.maxClientsAtOnce)));
       },
     };
   });
@@ -155,8 +157,8 @@ export function buildIndex(s: Scenario): EngineIndex {
     salon,
     stylists,
     stylistById,
-    chairs: s.chairs.map((c, i) => unit(c.id, chairBusy[i], closedOf(c.outOfService, `chairs[${i}].outOfService`))),
-    basins: s.basins.map((b, i) => unit(b.id, basinBusy[i], closedOf(b.outOfService, `basins[${i}].outOfService`))),
+    chairs: s.chairs.map((c, i) => unit(c.id, chairBusy[i]!, closedOf(c.outOfService, `chairs[${i}].outOfService`))),
+    basins: s.basins.map((b, i) => unit(b.id, basinBusy[i]!, closedOf(b.outOfService, `basins[${i}].outOfService`))),
     dayUnits: new Map(),
   };
 }

@@ -21,6 +21,8 @@ export function fieldPath(path: ReadonlyArray<PropertyKey>): string {
 
 /** The first zod issue as a ScenarioError (one clear message beats a list of follow-on errors). */
 export function fromZodError(error: z.ZodError): ScenarioError {
-  const issue = error.issues[0];
+  const [issue] = error.issues;
+  // A failed parse always carries at least one issue.
+  if (!issue) return new ScenarioError('', error.message);
   return new ScenarioError(fieldPath(issue.path), issue.message);
 }

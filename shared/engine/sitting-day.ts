@@ -19,9 +19,10 @@ export interface DayFrame {
 }
 
 export function dayFrame(idx: EngineIndex, st: StylistIndex, dayOffset: number, earliest: number): DayFrame {
-  const dayStart = idx.ctx.dayStarts[dayOffset];
+  // Day offsets run over the horizon's days, and dayStarts holds one more entry than there are days.
+  const dayStart = idx.ctx.dayStarts[dayOffset]!;
   const lo = Math.max(dayStart, earliest);
-  const hi = idx.ctx.dayStarts[dayOffset + 1];
+  const hi = idx.ctx.dayStarts[dayOffset + 1]!;
   const base = lo < hi ? intersect(clip(st.avail, lo, hi), clip(st.capFree, lo, hi)) : [];
   return { day: dayOffset, lo, hi, base, hands: base.length ? intersect(base, clip(st.handsFree, lo, hi)) : [] };
 }
@@ -30,8 +31,8 @@ export function dayFrame(idx: EngineIndex, st: StylistIndex, dayOffset: number, 
 function dayUnits(idx: EngineIndex, dayOffset: number): { chairs: Span[]; basins: Span[] } {
   let units = idx.dayUnits.get(dayOffset);
   if (!units) {
-    const lo = idx.ctx.dayStarts[dayOffset];
-    const hi = idx.ctx.dayStarts[dayOffset + 1];
+    const lo = idx.ctx.dayStarts[dayOffset]!;
+    const hi = idx.ctx.dayStarts[dayOffset + 1]!;
     units = { chairs: idx.chairs.map((c) => clip(c.free, lo, hi)), basins: idx.basins.map((b) => clip(b.free, lo, hi)) };
     idx.dayUnits.set(dayOffset, units);
   }
@@ -61,7 +62,7 @@ export function minimumLength(spec: SittingPlanSpec): number {
 }
 
 function hasStretch(span: Span, length: number): boolean {
-  for (let i = 0; i < span.length; i += 2) if (span[i + 1] - span[i] >= length) return true;
+  for (let i = 0; i < span.length; i += 2) if (span[i + 1]! - span[i]! >= length) return true;
   return false;
 }
 
@@ -83,7 +84,7 @@ export interface DayStarts {
 /** Whether some range of a lattice reaches into [lo, hi): a quick test before a day's passes. */
 function allowsBetween(l: Lattice, lo: number, hi: number): boolean {
   const i = firstEndingAfter(l, lo - 1);
-  return i < l.length && l[i] < hi;
+  return i < l.length && l[i]! < hi;
 }
 
 /**
@@ -93,24 +94,26 @@ function allowsBetween(l: Lattice, lo: number, hi: number): boolean {
  * starts a caller would have to throw away.
  */
 export function sittingStarts(idx: EngineIndex, st: StylistIndex, dayOffset: number, req: CompiledRequest, sitting: number): DayStarts {
-  const spec = req.sittings[sitting];
+  const spec = req.sittings[sitting]!;
   const frame = dayFrame(idx, st, dayOffset, req.earliest);
   const none: DayStarts = { frame, starts: [], passes: [] };
   if (spec.allowed && !allowsBetween(spec.allowed, frame.lo, frame.hi)) return none;
   const length = minimumLength(spec);
   if (!hasStretch(frame.base, length)) return none;
   const grid = gridOf(idx);
-  if (backwardPass(chainSteps(idx, frame, spec, null), grid)[0].length === 0) return none;
+  // backwardPass returns one set per step, and a sitting has at least one step.
+  if (backwardPass(chainSteps(idx, frame, spec, null), grid)[0]!.length === 0) return none;
   const passes: ChairPass[] = [];
   const chairsFree = dayUnits(idx, dayOffset).chairs;
   idx.chairs.forEach((chair, c) => {
-    if (!hasStretch(intersect(frame.base, chairsFree[c]), length)) return;
-    const steps = chainSteps(idx, frame, spec, chairsFree[c]);
+    const chairFree = chairsFree[c]!;
+    if (!hasStretch(intersect(frame.base, chairFree), length)) return;
+    const steps = chainSteps(idx, frame, spec, chairFree);
     const sets = backwardPass(steps, grid);
-    if (sets[0].length) passes.push({ chair, steps, sets });
+    if (sets[0]!.length) passes.push({ chair, steps, sets });
   });
   const starts = mergeLattices(
-    passes.map((p) => p.sets[0]),
+    passes.map((p) => p.sets[0]!),
     grid.g,
   );
   return { frame, starts: spec.allowed ? intersectLattices(starts, spec.allowed) : starts, passes };

@@ -30,8 +30,9 @@ export const floorGrid = (x: number, grid: Grid): number => x - mod(x - grid.pha
 function pushRange(out: Lattice, x: number, y: number, g: number): void {
   if (x > y) return;
   const last = out.length - 1;
-  if (last > 0 && x <= out[last] + g) {
-    if (y > out[last]) out[last] = y;
+  // Non-null assertions in this file: lattices have even length and each index is inside its loop bound.
+  if (last > 0 && x <= out[last]! + g) {
+    if (y > out[last]!) out[last] = y;
   } else {
     out.push(x, y);
   }
@@ -42,16 +43,17 @@ function stepBack(span: Span, next: Lattice | null, lo: number, hi: number, grid
   const out: Lattice = [];
   let j = 0;
   for (let i = 0; i < span.length; i += 2) {
-    const a = ceilGrid(span[i], grid);
-    const bl = floorGrid(span[i + 1], grid);
+    const a = ceilGrid(span[i]!, grid);
+    const bl = floorGrid(span[i + 1]!, grid);
     if (next === null) {
       pushRange(out, a, bl - lo, grid.g);
       continue;
     }
-    while (j < next.length && next[j + 1] < a + lo) j += 2;
-    for (let k = j; k < next.length && next[k] <= bl; k += 2) {
-      const q = next[k + 1] < bl ? next[k + 1] : bl;
-      const p = next[k] - hi;
+    while (j < next.length && next[j + 1]! < a + lo) j += 2;
+    for (let k = j; k < next.length && next[k]! <= bl; k += 2) {
+      const nq = next[k + 1]!;
+      const q = nq < bl ? nq : bl;
+      const p = next[k]! - hi;
       pushRange(out, p > a ? p : a, q - lo, grid.g);
     }
   }
@@ -72,12 +74,18 @@ export function mergeLattices(parts: Lattice[], g: number): Lattice {
   if (count === only.length / 2) return only;
   const keys = sortSlots(count);
   let n = 0;
-  for (const part of parts) for (let i = 0; i < part.length; i += 2) keys[n++] = part[i] * SHIFT + (part[i + 1] - part[i]);
+  for (const part of parts) {
+    for (let i = 0; i < part.length; i += 2) {
+      const p = part[i]!;
+      keys[n++] = p * SHIFT + (part[i + 1]! - p);
+    }
+  }
   keys.sort();
   const out: Lattice = [];
   for (let i = 0; i < n; i++) {
-    const p = Math.floor(keys[i] / SHIFT);
-    pushRange(out, p, p + (keys[i] - p * SHIFT), g);
+    const key = keys[i]!;
+    const p = Math.floor(key / SHIFT);
+    pushRange(out, p, p + (key - p * SHIFT), g);
   }
   return out;
 }
@@ -91,10 +99,14 @@ export function intersectLattices(a: Lattice, b: Lattice): Lattice {
   let i = 0;
   let j = 0;
   while (i < a.length && j < b.length) {
-    const lo = a[i] > b[j] ? a[i] : b[j];
-    const hi = a[i + 1] < b[j + 1] ? a[i + 1] : b[j + 1];
+    const as = a[i]!;
+    const ae = a[i + 1]!;
+    const bs = b[j]!;
+    const be = b[j + 1]!;
+    const lo = as > bs ? as : bs;
+    const hi = ae < be ? ae : be;
     if (lo <= hi) out.push(lo, hi);
-    if (a[i + 1] < b[j + 1]) i += 2;
+    if (ae < be) i += 2;
     else j += 2;
   }
   return out;
@@ -108,10 +120,10 @@ export function backwardPass(steps: ChainStep[], grid: Grid): Lattice[] {
   const sets: Lattice[] = steps.map(() => []);
   let next: Lattice | null = null;
   for (let k = steps.length - 1; k >= 0; k--) {
-    const { free, lo, hi } = steps[k];
+    const { free, lo, hi } = steps[k]!;
     next =
       free.length === 1
-        ? stepBack(free[0], next, lo, hi, grid)
+        ? stepBack(free[0]!, next, lo, hi, grid)
         : mergeLattices(
             free.map((span) => stepBack(span, next, lo, hi, grid)),
             grid.g,
@@ -126,5 +138,5 @@ export function backwardPass(steps: ChainStep[], grid: Grid): Lattice[] {
 export function latticeHas(l: Lattice, t: number): boolean {
   // Closed ranges: the first range ending at or after t is the first ending above t - 1.
   const i = firstEndingAfter(l, t - 1);
-  return i < l.length && l[i] <= t;
+  return i < l.length && l[i]! <= t;
 }

@@ -31,15 +31,21 @@ function longestRuns(idx: EngineIndex, st: StylistIndex, windows: Span): number[
     let i = 0;
     let j = 0;
     let w = 0;
+    // Non-null assertions: spans have even length and the indices stay inside the loop bounds;
+    // every piece of capped lies inside some window, so w stops on a window.
     while (i < capped.length && j < free.length) {
-      const a = capped[i] > free[j] ? capped[i] : free[j];
-      const b = capped[i + 1] < free[j + 1] ? capped[i + 1] : free[j + 1];
+      const cs = capped[i]!;
+      const ce = capped[i + 1]!;
+      const fs = free[j]!;
+      const fe = free[j + 1]!;
+      const a = cs > fs ? cs : fs;
+      const b = ce < fe ? ce : fe;
       if (a < b) {
-        while (windows[w + 1] <= a) w += 2;
+        while (windows[w + 1]! <= a) w += 2;
         const run = b - ceilGrid(a, grid);
-        if (run > best[w / 2]) best[w / 2] = run;
+        if (run > best[w / 2]!) best[w / 2] = run;
       }
-      if (capped[i + 1] < free[j + 1]) i += 2;
+      if (ce < fe) i += 2;
       else j += 2;
     }
   }
@@ -55,10 +61,11 @@ export function listWindows(idx: EngineIndex, fits: Array<{ service: string; ski
     const runs = mine.length ? longestRuns(idx, st, windows) : [];
     for (let i = 0; i < windows.length; i += 2) {
       const names: string[] = [];
-      for (const f of mine) if (runs[i / 2] >= f.minutes && !names.includes(f.service)) names.push(f.service);
-      out.push({ stylist: si, start: windows[i], end: windows[i + 1], fits: names });
+      // runs has one entry per window whenever mine is non-empty.
+      for (const f of mine) if (runs[i / 2]! >= f.minutes && !names.includes(f.service)) names.push(f.service);
+      out.push({ stylist: si, start: windows[i]!, end: windows[i + 1]!, fits: names });
     }
   });
   const ids = idx.stylists.map((s) => s.id);
-  return out.sort((a, b) => a.start - b.start || (ids[a.stylist] < ids[b.stylist] ? -1 : 1));
+  return out.sort((a, b) => a.start - b.start || (ids[a.stylist]! < ids[b.stylist]! ? -1 : 1));
 }

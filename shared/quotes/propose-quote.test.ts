@@ -70,7 +70,7 @@ describe('step plan', () => {
     expect(labels(q)).toEqual([['Apply colour', 'Colour develops', 'Rinse and condition', 'Blow-dry']]);
     // Contact time counts from the first brushful: 45 min permanent colour − 15 min applying = 30 min most,
     // and the last section applied still needs the least 30 min (common practice 30–45).
-    expect(q.stepPlan.sittings[0].steps.map(minutesOf)).toEqual([15, [30, 30], 15, 35]);
+    expect(q.stepPlan.sittings[0]?.steps.map(minutesOf)).toEqual([15, [30, 30], 15, 35]);
     expect(q.sittings).toBe(1);
     expect(q.daysApart).toBeNull();
   });
@@ -95,7 +95,7 @@ describe('step plan', () => {
         'Cut and finish',
       ],
     ]);
-    const steps = q.stepPlan.sittings[0].steps;
+    const steps = q.stepPlan.sittings[0]!.steps;
     // Remover with heat: 60 min × ½ (heat roughly halves processing, common practice) = 30 min on the hair;
     // 15 min applying leaves 15 min; processing 20–40 min halved by heat = 10–20, so 10–15.
     expect(steps[2]).toMatchObject({ kind: 'developing', product: 'colour_remover', heat: true, minMinutes: 10, maxMinutes: 15 });
@@ -111,7 +111,7 @@ describe('step plan', () => {
     expect(q.sittings).toBe(3);
     // docs/quotes.md: a correction continues 3–14 days later (common practice, from memory).
     expect(q.daysApart).toEqual({ min: 3, max: 14 });
-    expect(q.stepPlan.sittings[1].daysAfterPrevious).toEqual({ min: 3, max: 14 });
+    expect(q.stepPlan.sittings[1]?.daysAfterPrevious).toEqual({ min: 3, max: 14 });
     expect(codes(q)).toContain('split');
     // A salon that lifts virgin hair 2 levels a sitting: 6 / 2 = 3 sittings.
     expect(propose({ currentLevel: 3, targetLevel: 9 }, { ...rules, liftPerSitting: { virgin: 2, coloured: 2, compromised: 1 } }).sittings).toBe(3);
@@ -137,7 +137,7 @@ describe('step plan', () => {
 
   it('fills lightened hair before going 3 or more levels darker, rinsing the filler before the colour (common practice)', () => {
     const q = propose({ currentLevel: 9, targetLevel: 5, history: { ...virgin, previousLightening: true } });
-    expect(labels(q)[0].slice(0, 4)).toEqual(['Apply filler (pre-pigment)', 'Filler develops', 'Rinse filler', 'Apply colour']);
+    expect(labels(q)[0]?.slice(0, 4)).toEqual(['Apply filler (pre-pigment)', 'Filler develops', 'Rinse filler', 'Apply colour']);
     const twoDarker = propose({ currentLevel: 9, targetLevel: 7, history: { ...virgin, previousLightening: true } });
     expect(labels(twoDarker)[0]).not.toContain('Apply filler (pre-pigment)');
   });
@@ -162,7 +162,7 @@ describe('the strand test gates lightening', () => {
     for (const sitting of q.stepPlan.sittings) {
       const care = sitting.steps.findIndex((s) => s.product === 'bond_care');
       expect(sitting.steps[care]).toMatchObject({ kind: 'basin', label: 'Bond treatment' });
-      expect(sitting.steps[care - 1].label).toBe('Rinse lightener, section 2 of 2');
+      expect(sitting.steps[care - 1]?.label).toBe('Rinse lightener, section 2 of 2');
     }
     expect(codes(q)).toEqual(expect.arrayContaining(['fragile', 'split']));
   });
@@ -174,7 +174,7 @@ describe('processing limits', () => {
     // 70 + 20 (least) = 90 > 50; halves: 35 + 20 = 55 > 50; thirds: 23.3 → 25 + 20 = 45 ≤ 50 → 3 sections.
     // Each section may lift 50 − 25 = 25 min; the rinse 15 × 1.35 = 20.25 → 20, a third each → 5.
     const q = propose({ currentLevel: 3, targetLevel: 6, length: 'long', density: 'thick' });
-    const steps = q.stepPlan.sittings[0].steps.filter(
+    const steps = q.stepPlan.sittings[0]!.steps.filter(
       (s) => s.label.startsWith('Apply lightener') || s.label.startsWith('Lightener') || s.label.startsWith('Rinse lightener'),
     );
     expect(steps.map((s) => s.label)).toEqual([
@@ -214,21 +214,21 @@ describe('a real correction: box dye over permanent, level 4 to 8 with a vivid s
     });
     expect(q.sittings).toBe(2); // 4 levels at 2 a sitting on coloured hair
     const [one, two] = q.stepPlan.sittings;
-    const remover = one.steps.filter((s) => s.kind === 'developing' && s.product === 'colour_remover');
+    const remover = one!.steps.filter((s) => s.kind === 'developing' && s.product === 'colour_remover');
     // Two remover cycles for box dye (common practice), each 20 min applying (15 × 1.35 = 20.25 → 20) and 10 min
     // under heat: 60 × ½ = 30 min on the hair − 20 = 10.
     expect(remover).toEqual([
       { kind: 'developing', label: 'Remover processes under heat, round 1 of 2', product: 'colour_remover', minMinutes: 10, maxMinutes: 10, heat: true },
       { kind: 'developing', label: 'Remover processes under heat, round 2 of 2', product: 'colour_remover', minMinutes: 10, maxMinutes: 10, heat: true },
     ]);
-    expect(one.steps.map((s) => s.label)).toContain('Apply toner');
-    expect(two.steps.filter((s) => s.product === 'direct_dye').map((s) => s.label)).toEqual([
+    expect(one?.steps.map((s) => s.label)).toContain('Apply toner');
+    expect(two?.steps.filter((s) => s.product === 'direct_dye').map((s) => s.label)).toEqual([
       'Apply vivid colour, section 1 of 3',
       'Apply vivid colour, section 2 of 3',
       'Apply vivid colour, section 3 of 3',
       'Vivid colour develops',
     ]);
-    expect(two.steps.at(-1)?.label).toBe('Cut and finish');
+    expect(two?.steps.at(-1)?.label).toBe('Cut and finish');
     // Sitting 1 at the most: strand check 20 + remover (20 + 10 + 20) × 2 = 100 + lightener (30 + 20 + 10) × 2 = 120
     // + toner 15 + 15 + 15 = 45 + blow-dry 45 = 330 min. Sitting 2: lightener 120 + vivid 3 × 20 + 30 + 20 = 110
     // + cut 80 = 310 min: 640 min, 10 h 40 min in all.
@@ -241,8 +241,8 @@ describe('a real correction: box dye over permanent, level 4 to 8 with a vivid s
 
 describe('minutes for length and density', () => {
   it('scales hands-on and rinse minutes, never the processing time (common practice: longer, thicker hair takes more time)', () => {
-    const medium = propose({ currentLevel: 5, targetLevel: 6 }).stepPlan.sittings[0].steps;
-    const long = propose({ currentLevel: 5, targetLevel: 6, length: 'long', density: 'thick' }).stepPlan.sittings[0].steps;
+    const medium = propose({ currentLevel: 5, targetLevel: 6 }).stepPlan.sittings[0]!.steps;
+    const long = propose({ currentLevel: 5, targetLevel: 6, length: 'long', density: 'thick' }).stepPlan.sittings[0]!.steps;
     // Apply colour: 15 min × 1.35 (long) × 1.25 (thick) = 25.3 → 25; 25 + 30 (least) > 45, so two sections of 12.5 → 15.
     // Rinse follows length only: 15 × 1.35 = 20.25 → 20, half each → 10. Processing stays 30 min as on medium hair.
     expect(medium.map(minutesOf)).toEqual([15, [30, 30], 15, 35]);

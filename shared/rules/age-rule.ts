@@ -9,8 +9,9 @@ export const MIN_AGE_WITHOUT_CONSENT = 16;
 
 /** Whole years from a date of birth to a date (both YYYY-MM-DD): the birthday itself counts as the new year. */
 export function ageOn(dateOfBirth: string, on: string): number {
-  const [by, bm, bd] = dateOfBirth.split('-').map(Number);
-  const [y, m, d] = on.split('-').map(Number);
+  // A missing part reads as NaN, as Number(undefined) would: the age is then NaN, never under 16.
+  const [by = NaN, bm = NaN, bd = NaN] = dateOfBirth.split('-').map(Number);
+  const [y = NaN, m = NaN, d = NaN] = on.split('-').map(Number);
   const hadBirthday = m > bm || (m === bm && d >= bd);
   return y - by - (hadBirthday ? 0 : 1);
 }

@@ -22,9 +22,9 @@ describe('contact time', () => {
   it('counts the application and the developing most together: 45 + 50 = 95 min of lightener is over 50', () => {
     const issues = processingLimitIssues(plan(h('Apply lightener', 45, 'lightener'), d('Lightener lifts', 30, 50, 'lightener'), b('Rinse', 15)), limits);
     expect(issues).toHaveLength(1);
-    expect(issues[0].path).toEqual(['stepPlan', 'sittings', 0, 'steps', 1]);
-    expect(issues[0].family).toBe('lightener');
-    expect(issues[0].message).toMatch(
+    expect(issues[0]?.path).toEqual(['stepPlan', 'sittings', 0, 'steps', 1]);
+    expect(issues[0]?.family).toBe('lightener');
+    expect(issues[0]?.message).toMatch(
       /Sitting 1, step 2 “Lightener lifts”: lightener may be on the hair at most 50 min; this plan keeps it on up to 95 min, counted from step 1 “Apply lightener”/,
     );
   });
@@ -32,7 +32,7 @@ describe('contact time', () => {
   it('accepts 20 + 30 = 50 min exactly, and a developing step alone over the limit is refused', () => {
     expect(processingLimitIssues(plan(h('Apply lightener', 20, 'lightener'), d('Lightener lifts', 20, 30, 'lightener'), b('Rinse', 10)), limits)).toEqual([]);
     const alone = processingLimitIssues(plan(d('Colour develops', 30, 50, 'oxidative_colour')), limits);
-    expect(alone[0].message).toMatch(/at most 45 min; this plan keeps it on up to 50 min, on its own/);
+    expect(alone[0]?.message).toMatch(/at most 45 min; this plan keeps it on up to 50 min, on its own/);
   });
 
   it('sections count apart only with a rinse between them', () => {
@@ -42,7 +42,7 @@ describe('contact time', () => {
     // Without the rinse the first section is still on: 25 + 25 + 25 = 75 > 50 at the second application.
     const together = processingLimitIssues(plan(...section(1), ...section(2), b('Rinse', 10)), limits);
     expect(together.map((i) => i.path.at(-1))).toEqual([2]);
-    expect(together[0].message).toMatch(/up to 75 min, counted from step 1/);
+    expect(together[0]?.message).toMatch(/up to 75 min, counted from step 1/);
   });
 
   it('halves the limit with heat (common practice: heat roughly halves processing time)', () => {
@@ -52,7 +52,7 @@ describe('contact time', () => {
     const remover = (heat: boolean) => plan(h('Apply remover', 20, 'colour_remover'), d('Remover processes', 10, 15, 'colour_remover', heat), b('Rinse', 20));
     // 20 + 15 = 35 min: within 60 without heat, over 30 with it.
     expect(processingLimitIssues(remover(false), limits)).toEqual([]);
-    expect(processingLimitIssues(remover(true), limits)[0].message).toMatch(/at most 30 min with heat \(the salon's 60 min halved\)/);
+    expect(processingLimitIssues(remover(true), limits)[0]?.message).toMatch(/at most 30 min with heat \(the salon's 60 min halved\)/);
   });
 
   it('leaves direct dye, bond care and steps without product alone', () => {

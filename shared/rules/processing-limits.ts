@@ -84,7 +84,7 @@ export function processingLimitIssues(plan: StepPlan, limits: ProcessingLimits):
       const limit = limitFor(step.product, limits, run.heat)!;
       if (run.minutes <= limit || run.reported) return;
       run.reported = true;
-      const first = sitting.steps[run.from];
+      const first = sitting.steps[run.from]!; // run.from is an earlier step of this sitting
       const heatNote = run.heat ? ` with heat (the salon's ${limits[step.product]} min halved)` : '';
       const since = run.from === j ? 'on its own' : `counted from step ${run.from + 1} “${first.label}”, when it first goes on`;
       const where = `sitting ${s + 1}, step ${j + 1} “${step.label}”`;
@@ -93,7 +93,7 @@ export function processingLimitIssues(plan: StepPlan, limits: ProcessingLimits):
         path: ['stepPlan', 'sittings', s, 'steps', j],
         where,
         message:
-          `${where[0].toUpperCase()}${where.slice(1)}: ${limitedFamilyNames[step.product].toLowerCase()} may be on the hair at most ` +
+          `${where.charAt(0).toUpperCase()}${where.slice(1)}: ${limitedFamilyNames[step.product].toLowerCase()} may be on the hair at most ` +
           `${limit} min${heatNote}; this plan keeps it on up to ${run.minutes} min, ${since}. ` +
           'Shorten the steps, or apply in sections with a rinse between them.',
       });

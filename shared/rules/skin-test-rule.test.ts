@@ -78,7 +78,7 @@ describe('skinTestVerdict', () => {
 
   it('never lets a salon set less than 48 h of lead time', () => {
     const v = skinTestVerdict(true, [rec('2027-02-27T10:00:00Z', 'negative')], [], { leadHours: 0, validityDays: 182 }, now);
-    expect(v.windows[0].from).toEqual(at('2027-03-01T10:00:00Z'));
+    expect(v.windows[0]?.from).toEqual(at('2027-03-01T10:00:00Z'));
   });
 });
 

@@ -105,8 +105,8 @@ export function skinTestVerdict(
     const to = new Date(unread.appliedAt.getTime() + validity);
     windows.push({ status: 'waiting', from, to, appliedAt: unread.appliedAt });
   }
-  if (windows.length === 0) return blocked(noWindowReason(latestRead, sorted.filter((r) => r.result === 'pending').at(-1), policy));
-  const best = windows[0];
+  const [best] = windows;
+  if (!best) return blocked(noWindowReason(latestRead, sorted.filter((r) => r.result === 'pending').at(-1), policy));
   const message =
     best.status === 'passed'
       ? `Negative skin test of ${day(best.appliedAt)}: colour from ${day(best.from)} until ${day(best.to)}.`
@@ -138,8 +138,11 @@ export function checkStarts(verdict: SkinTestVerdict, starts: readonly Date[], z
   for (const start of starts) {
     const window = verdict.windows.find((w) => start >= w.from && start <= w.to);
     if (!window) {
-      const first = verdict.windows.reduce((a, w) => (w.from < a ? w.from : a), verdict.windows[0].from);
-      const last = verdict.windows.reduce((a, w) => (w.to > a ? w.to : a), verdict.windows[0].to);
+      const [head] = verdict.windows;
+      // skinTestVerdict gives every verdict that is neither not_needed nor blocked a window; without one, nothing allows the start.
+      if (!head) return { status: 'refused', message: verdict.message };
+      const first = verdict.windows.reduce((a, w) => (w.from < a ? w.from : a), head.from);
+      const last = verdict.windows.reduce((a, w) => (w.to > a ? w.to : a), head.to);
       const message =
         start < first
           ? `Colour can start from ${zoneDay(first)}, at least the lead time after the skin test is applied. ${verdict.message}`

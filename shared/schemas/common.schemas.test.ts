@@ -11,6 +11,6 @@ describe('isRealDateTime', () => {
   it('makes LocalDateSchema name the problem', () => {
     const res = LocalDateSchema.safeParse('2027-02-30');
     expect(res.success).toBe(false);
-    expect(res.error?.issues[0].message).toBe('Not a real date');
+    expect(res.error?.issues[0]?.message).toBe('Not a real date');
   });
 });

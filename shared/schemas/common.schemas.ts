@@ -8,7 +8,7 @@ import { z } from 'zod';
 export function isRealDateTime(s: string): boolean {
   const match = /^(\d{4})-(\d{2})-(\d{2})(?:T(\d{2}):(\d{2}))?/.exec(s);
   if (!match) return false;
-  const [y, m, d, hh, mm] = match.slice(1).map((v) => Number(v ?? 0));
+  const [y = 0, m = 0, d = 0, hh = 0, mm = 0] = match.slice(1).map((v) => Number(v ?? 0));
   const date = new Date(0);
   date.setUTCFullYear(y, m - 1, d); // not Date.UTC, which reads years 0–99 as 1900–1999
   return date.getUTCFullYear() === y && date.getUTCMonth() === m - 1 && date.getUTCDate() === d && hh <= 23 && mm <= 59;

@@ -63,7 +63,7 @@ export async function bookAt(db: Db, input: BookAtInput): Promise<string> {
   const found = await planOrExplain(db, input);
   const chosen = await preferredChairs(db, input.salon.id, found, input.chairIds);
   if (input.clientId) {
-    const starts = found.sittings.map((s) => new Date(s.steps[0].start));
+    const starts = found.sittings.map((s) => new Date(s.steps[0]!.start)); // the engine places no empty sitting
     await assertSkinTestAllows(
       db,
       input.salon,
@@ -84,7 +84,7 @@ export async function bookAt(db: Db, input: BookAtInput): Promise<string> {
       quoteId: input.quote?.id ?? null,
       createdBy: input.actorUserId,
       sittings: found.sittings.map((s, i) => ({
-        chairId: chosen[i],
+        chairId: chosen[i]!, // one chair per sitting
         steps: s.steps.map((st) => ({ kind: st.kind, label: st.label, start: new Date(st.start), end: new Date(st.end), basinId: st.basin })),
       })),
     });
@@ -106,7 +106,8 @@ export async function bookAt(db: Db, input: BookAtInput): Promise<string> {
 /** From the first step's start to the last step's end, over every sitting. */
 export function bookedSpan(plan: PlacedOption): { from: Date; to: Date } {
   const steps = plan.sittings.flatMap((s) => s.steps);
-  return { from: new Date(steps[0].start), to: new Date(steps[steps.length - 1].end) };
+  // The engine places at least one sitting, each with at least one step.
+  return { from: new Date(steps[0]!.start), to: new Date(steps[steps.length - 1]!.end) };
 }
 
 /** The engine's chair per sitting, or the one the person saw when it is still free (see preferredChair). */
@@ -115,9 +116,10 @@ function preferredChairs(db: Db, salonId: string, plan: PlacedOption, wanted: st
 }
 
 async function planOrExplain(db: Db, input: BookAtInput): Promise<PlacedOption> {
-  const [result] = await exactPlan(db, input.salon, [
+  const answers = await exactPlan(db, input.salon, [
     { skill: input.service.skill, stylistId: input.stylistId, plan: input.plan, start: input.start, latestStart: input.latestStart },
   ]);
+  const result = answers[0]!; // one answer per placement
   if ('plan' in result) return result.plan;
   if (result.field) throw new AppError('VALIDATION_FAILED', 400, 'Some fields need attention.', { [result.field]: result.reason });
   throw new AppError('CONFLICT', 409, result.reason);

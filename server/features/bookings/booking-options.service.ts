@@ -42,7 +42,7 @@ export async function findBookingOptions(db: Db, salon: Salon, body: Required<Bo
       verdict,
       testedSittingStarts(
         plan,
-        option.sittings.map((s) => new Date(s.steps[0].start)),
+        option.sittings.map((s) => new Date(s.steps[0]!.start)), // the engine places no empty sitting
         salon,
         service.needsSkinTest,
       ),

@@ -78,13 +78,13 @@ export async function loadBookingViewRows(
     );
   }
   const bookings = await query.execute();
-  if (!bookings.length) return { rows: [], settings: null };
+  const [first] = bookings;
+  if (!first) return { rows: [], settings: null };
   const ids = bookings.map((b) => b.id);
   const [sittings, steps] = await Promise.all([loadSittings(db, ids), loadSteps(db, ids)]);
   const iso = isoInZone(timeZone, filter);
   const sittingsOf = groupBy(sittings, (s) => s.booking_id);
   const stepsOf = groupBy(steps, (st) => st.sitting_id);
-  const first = bookings[0];
   const settings = {
     skinTestLeadHours: first.skin_test_lead_hours,
     skinTestValidityDays: first.skin_test_validity_days,
@@ -129,7 +129,8 @@ export async function loadBookingViewRows(
     };
     return { view, skinTestFooting };
   });
-  rows.sort((a, b) => a.view.sittings[0].start.localeCompare(b.view.sittings[0].start));
+  // Every booking is written with at least one sitting.
+  rows.sort((a, b) => a.view.sittings[0]!.start.localeCompare(b.view.sittings[0]!.start));
   return { rows, settings };
 }
 

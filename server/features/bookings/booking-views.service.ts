@@ -13,5 +13,5 @@ export async function loadBookingViews(db: Db, filter: BookingFilter, timeZone: 
     rows.map((r) => r.skinTestFooting),
     new Date(),
   );
-  return rows.map((r, i) => ({ ...r.view, skinTest: states[i] }));
+  return rows.map((r, i) => ({ ...r.view, skinTest: states[i]! })); // one state per footing asked about
 }

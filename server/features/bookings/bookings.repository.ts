@@ -56,8 +56,9 @@ export async function insertBooking(db: Db, booking: NewBooking): Promise<string
     .returning('id')
     .executeTakeFirstOrThrow();
   for (const [i, sitting] of booking.sittings.entries()) {
-    const first = sitting.steps[0].start;
-    const last = sitting.steps[sitting.steps.length - 1].end;
+    // The engine places no empty sitting.
+    const first = sitting.steps[0]!.start;
+    const last = sitting.steps[sitting.steps.length - 1]!.end;
     const row = await db
       .insertInto('sittings')
       .values({ booking_id: id, seq: i + 1, chair_id: sitting.chairId, during: tstzRange(first, last), live })

@@ -43,15 +43,16 @@ async function outcomeOf(db: Db, salon: Salon, before: BookingSnapshot, bookingI
   const terms = (outcome: 'kept' | 'refunded' | null, why: CancelWhy, skinTest = '') => ({ outcome, why, starts, skinTest });
   if (booking.depositCents <= 0) return terms(null, 'no_deposit');
   if (booking.status === 'held') return terms(null, 'not_paid');
-  const [skinTest] = await bookingSkinTestStates(
+  const states = await bookingSkinTestStates(
     db,
     salon,
     [{ clientId: booking.clientId, status: booking.status, plan: booking.stepPlan, serviceAsks: before.serviceAsks, starts }],
     now,
   );
+  const skinTest = states[0]!; // one state per footing asked about
   if (skinTest.status === 'blocked') return terms('refunded', 'skin_test_blocked', skinTest.message);
   if (salon.cancellationKeeps === 'nothing') return terms('refunded', 'salon_keeps_nothing');
-  const outcome = depositOutcome(booking.depositCents, starts[0], now, salon.cancellationWindowHours, salon.cancellationKeeps);
+  const outcome = depositOutcome(booking.depositCents, starts[0]!, now, salon.cancellationWindowHours, salon.cancellationKeeps);
   return terms(outcome, outcome === 'kept' ? 'inside_window' : 'outside_window');
 }
 

@@ -8,7 +8,7 @@ import { tstzRange } from './bookings.repository';
 export async function replaceSitting(db: Db, bookingId: string, seq: number, chairId: string, stylistId: string, steps: NewStep[]): Promise<void> {
   const sitting = await db
     .updateTable('sittings')
-    .set({ chair_id: chairId, during: tstzRange(steps[0].start, steps[steps.length - 1].end) })
+    .set({ chair_id: chairId, during: tstzRange(steps[0]!.start, steps[steps.length - 1]!.end) }) // the engine places no empty sitting
     .where('booking_id', '=', bookingId)
     .where('seq', '=', seq)
     .returning('id')

@@ -41,13 +41,13 @@ export async function changePlan(db: Kysely<Database>, salon: Salon, actorUserId
     const placements = starts.map((start, i) => ({
       skill: service?.skill ?? 'colour',
       stylistId: booking.stylistId,
-      plan: { sittings: [{ steps: plan.sittings[i].steps }] },
+      plan: { sittings: [{ steps: plan.sittings[i]!.steps }] }, // as many sittings as starts (checked above)
       start,
     }));
     const results = await exactPlan(trx, salon, placements, bookingId);
     for (const [i, result] of results.entries()) {
       if ('reason' in result) throw new AppError('CONFLICT', 409, `Sitting ${i + 1}: ${result.reason}`);
-      const placed = result.plan.sittings[0];
+      const placed = result.plan.sittings[0]!; // one sitting asked, one placed
       try {
         await replaceSitting(
           trx,

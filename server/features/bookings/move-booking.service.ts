@@ -41,7 +41,8 @@ export async function movableSitting(db: Db, salon: Pick<Salon, 'id'>, bookingId
   const { booking } = before;
   if (!MOVABLE.includes(booking.status)) throw new AppError('NOT_BOOKABLE', 409, `A ${booking.status.replace('_', ' ')} booking cannot be moved.`);
   const plan = booking.stepPlan;
-  if (sitting > plan.sittings.length) {
+  const moving = plan.sittings[sitting - 1];
+  if (!moving) {
     throw new AppError('VALIDATION_FAILED', 400, 'Some fields need attention.', { sitting: `This booking has ${plan.sittings.length} sitting(s).` });
   }
   const stylistId = wantedStylistId ?? booking.stylistId;
@@ -61,7 +62,7 @@ export async function movableSitting(db: Db, salon: Pick<Salon, 'id'>, bookingId
     });
   }
   // The sitting alone is planned: the other sittings stay where they are.
-  const one: StepPlan = { sittings: [{ steps: plan.sittings[sitting - 1].steps }] };
+  const one: StepPlan = { sittings: [{ steps: moving.steps }] };
   const skill = service?.skill ?? stylist?.skills[0] ?? '';
   return { before, booking, plan, one, stylistId, service, skill };
 }
@@ -87,9 +88,10 @@ export async function moveSitting(db: Kysely<Database>, salon: Salon, actorUserI
       );
     }
 
-    const [result] = await exactPlan(trx, salon, [{ skill, stylistId, plan: one, start: req.start }], req.bookingId);
+    const answers = await exactPlan(trx, salon, [{ skill, stylistId, plan: one, start: req.start }], req.bookingId);
+    const result = answers[0]!; // one answer per placement
     if ('reason' in result) throw new AppError('CONFLICT', 409, result.reason);
-    const placed = result.plan.sittings[0];
+    const placed = result.plan.sittings[0]!; // one sitting asked, one placed
     const chair = await preferredChair(trx, salon.id, placed, req.chairId ?? (await sittingChair(trx, req.bookingId, req.sitting)), req.bookingId);
     try {
       if (stylistId !== booking.stylistId) await setStylist(trx, req.bookingId, stylistId);
@@ -113,7 +115,7 @@ export async function moveSitting(db: Kysely<Database>, salon: Salon, actorUserI
     }
     await auditBookingChange(trx, { salonId: salon.id, actorUserId, bookingId: req.bookingId, action: `moved sitting ${req.sitting}`, before: before.audit });
     await replanBookingMessages(trx, req.bookingId, now, 'moved'); // old reminders dropped, new ones planned
-    await withdrawStaleOffers(trx, salon, stylistId, { from: new Date(placed.steps[0].start), to: new Date(placed.steps[placed.steps.length - 1].end) }, now);
+    await withdrawStaleOffers(trx, salon, stylistId, { from: new Date(placed.steps[0]!.start), to: new Date(placed.steps[placed.steps.length - 1]!.end) }, now);
   });
 }
 
@@ -121,9 +123,10 @@ export async function moveSitting(db: Kysely<Database>, salon: Salon, actorUserI
 export function dayGapProblem(plan: StepPlan, starts: Date[], index: number, newStart: Date, zone: string): string | null {
   const day = (d: Date) => DateTime.fromJSDate(d, { zone }).startOf('day');
   const moved = starts.map((s, i) => (i === index ? newStart : s));
+  // starts holds one start per sitting of the plan, so plan.sittings[k] and moved[k - 1] are in range.
   for (let k = 1; k < moved.length; k++) {
-    const gap = plan.sittings[k].daysAfterPrevious!;
-    const days = Math.round(day(moved[k]).diff(day(moved[k - 1]), 'days').days);
+    const gap = plan.sittings[k]!.daysAfterPrevious!;
+    const days = Math.round(day(moved[k]!).diff(day(moved[k - 1]!), 'days').days);
     if (days < gap.min || days > gap.max) return `Sitting ${k + 1} must be ${gap.min}–${gap.max} days after sitting ${k}; this move makes it ${days}.`;
   }
   return null;

@@ -21,8 +21,9 @@ export interface DeskMoveTimesRequest {
 function firstAllowedDate(plan: StepPlan, starts: Date[], index: number, zone: string): string | undefined {
   const day = (d: Date) => DateTime.fromJSDate(d, { zone }).startOf('day');
   const bounds: DateTime[] = [];
-  if (index > 0) bounds.push(day(starts[index - 1]).plus({ days: plan.sittings[index].daysAfterPrevious?.min ?? 0 }));
-  if (index + 1 < starts.length) bounds.push(day(starts[index + 1]).minus({ days: plan.sittings[index + 1].daysAfterPrevious?.max ?? 0 }));
+  // starts holds one start per sitting of the plan, and index is one of them (movableSitting checked it).
+  if (index > 0) bounds.push(day(starts[index - 1]!).plus({ days: plan.sittings[index]!.daysAfterPrevious?.min ?? 0 }));
+  if (index + 1 < starts.length) bounds.push(day(starts[index + 1]!).minus({ days: plan.sittings[index + 1]!.daysAfterPrevious?.max ?? 0 }));
   return bounds.length ? DateTime.max(...bounds)!.toISODate()! : undefined;
 }
 
@@ -39,6 +40,6 @@ export async function deskMoveTimes(db: Db, salon: Salon, bookingId: string, req
   const salonRow = { id: salon.id, time_zone: salon.timeZone, granularity_minutes: salon.granularityMinutes };
   const times = await freeTimes(db, salonRow, { skill, stepPlan: one }, stylistId, from, now, bookingId);
   // Where it is now, with the same stylist, is no move at all (the search leaves the booking out, so finds it free).
-  const current = (t: { start: string }) => stylistId === booking.stylistId && Date.parse(t.start) === starts[index].getTime();
+  const current = (t: { start: string }) => stylistId === booking.stylistId && Date.parse(t.start) === starts[index]!.getTime();
   return { ...times, times: times.times.filter((t) => !current(t) && dayGapProblem(plan, starts, index, new Date(t.start), salon.timeZone) === null) };
 }

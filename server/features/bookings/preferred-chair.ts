@@ -9,7 +9,8 @@ import { chairFreeBetween } from './bookings.repository';
  */
 export async function preferredChair(db: Db, salonId: string, sitting: PlacedSitting, wanted: string | undefined, exceptBookingId?: string): Promise<string> {
   if (!wanted || wanted === sitting.chair) return sitting.chair;
-  const start = new Date(sitting.steps[0].start);
-  const end = new Date(sitting.steps[sitting.steps.length - 1].end);
+  // The engine places no empty sitting.
+  const start = new Date(sitting.steps[0]!.start);
+  const end = new Date(sitting.steps[sitting.steps.length - 1]!.end);
   return (await chairFreeBetween(db, salonId, wanted, start, end, exceptBookingId)) ? wanted : sitting.chair;
 }

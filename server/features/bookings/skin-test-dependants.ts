@@ -31,5 +31,6 @@ async function liveStates(db: Db, salon: Salon, clientId: string, now: Date) {
     live.map((b) => ({ clientId, status: b.status, plan: b.stepPlan, serviceAsks: b.needsSkinTest, starts: b.starts })),
     now,
   );
-  return live.map((b, i) => ({ id: b.id, name: b.serviceName, start: b.starts[0], state: states[i].status }));
+  // A live booking has at least one sitting, and there is one state per booking asked about.
+  return live.map((b, i) => ({ id: b.id, name: b.serviceName, start: b.starts[0]!, state: states[i]!.status }));
 }

@@ -24,11 +24,12 @@ export async function handleInboundSms(db: Db, sms: z.infer<typeof InboundSmsSch
   return db.transaction().execute(async (trx) => {
     const clients = await setSmsStopped(trx, phone, stop, now);
     for (const c of clients) await replanClientMessages(trx, c.id, now);
-    if (clients.length > 0) {
+    const [first] = clients;
+    if (first) {
       await insertPlanned(trx, [
         {
-          salonId: clients[0].salonId,
-          clientId: clients[0].id,
+          salonId: first.salonId,
+          clientId: first.id,
           kind: stop ? 'sms_stopped' : 'sms_started',
           channel: 'sms',
           toAddress: phone,

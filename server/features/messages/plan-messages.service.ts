@@ -97,13 +97,13 @@ const skinTestSalon = (b: BookingForMessages) => ({
 
 async function skinTestOf(db: Db, b: BookingForMessages, now: Date) {
   const rule = b.skinTestRule;
-  const [state] = await bookingSkinTestStates(
+  const states = await bookingSkinTestStates(
     db,
     skinTestSalon(b),
     [{ clientId: b.clientId, status: b.status, plan: rule.plan, serviceAsks: rule.serviceAsks, starts: b.context.sittings.map((s) => s.start) }],
     now,
   );
-  return state.status;
+  return states[0]!.status; // one state per footing asked about
 }
 
 /** Reminders, "day n of m", aftercare and marketing follow-ups for every sitting still ahead. */
@@ -227,12 +227,12 @@ async function dropBlockedFollowUps(db: Db, clientId: string, now: Date): Promis
   for (const bookingId of new Set(queued.map((q) => q.bookingId))) {
     const b = await bookingForMessages(db, bookingId);
     if (!b) continue;
-    const [state] = await bookingSkinTestStates(
+    const states = await bookingSkinTestStates(
       db,
       skinTestSalon(b),
       [{ clientId, status: 'booked', plan: b.skinTestRule.plan, serviceAsks: b.skinTestRule.serviceAsks, starts: [now] }],
       now,
     );
-    if (state.status === 'blocked') await dropFollowUps(db, bookingId);
+    if (states[0]!.status === 'blocked') await dropFollowUps(db, bookingId);
   }
 }

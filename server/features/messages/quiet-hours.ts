@@ -1,7 +1,8 @@
 import { DateTime } from 'luxon';
 
 const minutesOf = (hhmm: string) => {
-  const [h, m] = hhmm.split(':').map(Number);
+  // A missing part reads as NaN, as Number(undefined) would.
+  const [h = NaN, m = NaN] = hhmm.split(':').map(Number);
   return h * 60 + m;
 };
 

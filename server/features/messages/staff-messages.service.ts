@@ -27,8 +27,9 @@ export async function planStaffMessages(db: Db, now: Date): Promise<PlannedMessa
     const byStylist = new Map<string, DaySitting[]>();
     for (const s of sittings) byStylist.set(s.staffId, [...(byStylist.get(s.staffId) ?? []), s]);
     for (const [staffId, list] of byStylist) {
-      const email = list[0].stylistEmail;
-      if (!email) continue;
+      const [first] = list; // each list starts with the sitting that created it
+      const email = first?.stylistEmail;
+      if (!first || !email) continue;
       rows.push({
         salonId: salon.id,
         kind: 'stylist_day_list',
@@ -37,7 +38,7 @@ export async function planStaffMessages(db: Db, now: Date): Promise<PlannedMessa
         sendAt: now,
         dedupeKey: `staff:${staffId}:${date}:day_list`,
         subject: `Your day, ${dayName}: ${list.length} sitting${list.length === 1 ? '' : 's'}`,
-        body: `Hello ${list[0].stylistName.split(' ')[0]},\n\nTomorrow at ${salon.name} (${salon.timeZone} time):\n\n${list.map((s) => line(s, salon.timeZone)).join('\n')}\n`,
+        body: `Hello ${first.stylistName.split(' ')[0]},\n\nTomorrow at ${salon.name} (${salon.timeZone} time):\n\n${list.map((s) => line(s, salon.timeZone)).join('\n')}\n`,
       });
     }
     const unpaid = sittings.filter((s) => s.depositDue > 0 && !s.depositPaid && s.seq === 1);

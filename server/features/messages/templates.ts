@@ -71,7 +71,7 @@ function calendarFiles(c: BookingContext): MessageAttachment[] {
  */
 export function bookingMessage(kind: BookingMessageKind, c: BookingContext, waitingOnTest = false): MessageText {
   const hello = `Hello ${firstName(c.clientName)},`;
-  const first = when(c.sittings[0].start, c.timeZone);
+  const first = when(c.sittings[0]!.start, c.timeZone); // a booking has at least one sitting
   if (kind === 'cancellation') {
     return {
       sms: `${c.salonName}: your ${c.serviceName} on ${first} is cancelled.`,
@@ -124,7 +124,7 @@ export const CHEMICAL_CAUTION =
  * 1223/2009 requires the allergy warning on such products); the salon's own lead time is used here.
  */
 export function skinTestBookedMessage(c: BookingContext): MessageText {
-  const at = when(c.sittings[0].start, c.timeZone);
+  const at = when(c.sittings[0]!.start, c.timeZone); // a booking has at least one sitting
   const lead = c.skinTestLeadHours;
   const what = `A skin test (allergy alert test) puts a small dab of the colour we will use behind your ear or on your inner arm. ${skinTestWords(lead)} So book the colour no sooner than ${lead} hours after this test.`;
   const reaction =

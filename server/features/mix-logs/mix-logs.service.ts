@@ -95,7 +95,7 @@ export async function writeMixLog(db: Db, user: SessionUser, bookingId: string, 
   await requireSitting(db, bookingId, body.sittingSeq, 'sittingSeq');
   try {
     const [row] = await insertMixLogs(db, [{ ...body, salonId: user.salonId, bookingId, createdBy: user.id }]);
-    return toView(row);
+    return toView(row!); // one row back per row written
   } catch (e) {
     // The unique (booking, sitting, bowl) key decides, so two saves of the same bowl at once cannot both land.
     if ((e as { code?: string }).code !== '23505') throw e; // PostgreSQL's unique_violation

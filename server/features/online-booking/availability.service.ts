@@ -72,8 +72,9 @@ export async function freeTimes(
   return {
     timeZone: zone,
     times: options.map((o) => {
-      const steps = o.sittings[0].steps;
-      return { start: steps[0].start, end: steps[steps.length - 1].end, stylistId: o.stylist, stylistName: names.stylists.get(o.stylist) ?? '' };
+      // The engine places at least one sitting, each with at least one step.
+      const steps = o.sittings[0]!.steps;
+      return { start: steps[0]!.start, end: steps[steps.length - 1]!.end, stylistId: o.stylist, stylistName: names.stylists.get(o.stylist) ?? '' };
     }),
   };
 }

@@ -19,7 +19,7 @@ export async function ownerOverview(db: Db, salonId: string, now: Date): Promise
     listStylists(db, salon.id),
   ]);
   // The same occupancy computation as `npm run plan -- occupancy` on this week's calendars.
-  const usage = measured.answer;
+  const usage = measured!.answer; // one breakdown per part asked for
   return {
     salon,
     counts,

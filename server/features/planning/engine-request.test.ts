@@ -41,7 +41,7 @@ describe('the engine request the planning port sends', () => {
         request: { skill: 'colour', stylist: null, earliest: '2027-06-01T09:00', sittings, limit: 1, spread: 'day' },
       }),
     );
-    const placed = placedOption(answer.options[0]);
+    const placed = placedOption(answer.options[0]!);
     expect(placed.sittings.map((s) => s.steps.map((st) => [st.id, st.kind, st.label]))).toEqual([
       [
         ['1.1', 'hands_on', 'Apply lightener'],
@@ -53,23 +53,23 @@ describe('the engine request the planning port sends', () => {
 
   it('turns start limits into local text never wider than the instants, only for the sittings that have them', () => {
     const sittings = toEngineSittings(plan, ZONE, [null, [{ from: at('2027-06-03T15:00:30.500Z'), to: at('2027-06-20T18:59:59Z') }]]);
-    expect(sittings[0].allowedStarts).toBeUndefined();
+    expect(sittings[0]?.allowedStarts).toBeUndefined();
     // 15:00:30.5Z rounds up to 15:01Z = 09:01 MDT; 18:59:59Z rounds down to 18:59Z = 12:59 MDT.
-    expect(sittings[1].allowedStarts).toEqual([{ from: '2027-06-03T09:01', to: '2027-06-20T12:59' }]);
+    expect(sittings[1]?.allowedStarts).toEqual([{ from: '2027-06-03T09:01', to: '2027-06-20T12:59' }]);
   });
 
   it('moves a start limit out of the hour repeated when clocks go back, which the engine reads as its first pass', () => {
     // IANA tz database: America/Denver goes from 02:00 MDT back to 01:00 MST at 08:00Z on 2027-11-07. 08:30Z is the
     // second 01:30; the engine would read "01:30" as 07:30Z (MDT), an hour early, so the limit starts at 02:00 MST.
-    const [sitting] = toEngineSittings({ sittings: [plan.sittings[0]] }, ZONE, [[{ from: at('2027-11-07T08:30:00Z'), to: at('2027-11-08T00:00:00Z') }]]);
-    expect(sitting.allowedStarts).toEqual([{ from: '2027-11-07T02:00', to: '2027-11-07T17:00' }]);
+    const [sitting] = toEngineSittings({ sittings: [plan.sittings[0]!] }, ZONE, [[{ from: at('2027-11-07T08:30:00Z'), to: at('2027-11-08T00:00:00Z') }]]);
+    expect(sitting?.allowedStarts).toEqual([{ from: '2027-11-07T02:00', to: '2027-11-07T17:00' }]);
     // The first 01:30 (07:30Z) is read exactly.
-    const [first] = toEngineSittings({ sittings: [plan.sittings[0]] }, ZONE, [[{ from: at('2027-11-07T07:30:00Z'), to: at('2027-11-08T00:00:00Z') }]]);
-    expect(first.allowedStarts?.[0].from).toBe('2027-11-07T01:30');
+    const [first] = toEngineSittings({ sittings: [plan.sittings[0]!] }, ZONE, [[{ from: at('2027-11-07T07:30:00Z'), to: at('2027-11-08T00:00:00Z') }]]);
+    expect(first?.allowedStarts?.[0]?.from).toBe('2027-11-07T01:30');
   });
 
   it('leaves out a stretch shorter than a minute (nothing may start in it)', () => {
-    const [sitting] = toEngineSittings({ sittings: [plan.sittings[0]] }, ZONE, [[{ from: at('2027-06-03T15:00:10Z'), to: at('2027-06-03T15:00:50Z') }]]);
-    expect(sitting.allowedStarts).toEqual([]);
+    const [sitting] = toEngineSittings({ sittings: [plan.sittings[0]!] }, ZONE, [[{ from: at('2027-06-03T15:00:10Z'), to: at('2027-06-03T15:00:50Z') }]]);
+    expect(sitting?.allowedStarts).toEqual([]);
   });
 });

@@ -94,8 +94,9 @@ export function toBookingOption(option: PlacedOption, names: Names, skinTest: Bo
         basinName: st.basin ? (names.basins.get(st.basin) ?? null) : null,
       };
     });
-    const start = steps[0].start;
-    const end = steps[steps.length - 1].end;
+    // The engine plans every sitting with at least one step (its request schema requires one).
+    const start = steps[0]!.start;
+    const end = steps[steps.length - 1]!.end;
     chairMinutes += minutesBetween(start, end);
     return { chairId: s.chair, chairName: names.chairs.get(s.chair) ?? '', start, end, steps };
   });

@@ -25,13 +25,14 @@ function firstFrom(calendars: Scenario, req: ExactRequest): Option | undefined {
 
 function ask(calendars: Scenario, req: ExactRequest): Option | undefined {
   const first = firstFrom(calendars, req);
-  return first && Date.parse(first.sittings[0].steps[0].start) === req.start.getTime() ? first : undefined;
+  // An engine option has at least one sitting, each with at least one step.
+  return first && Date.parse(first.sittings[0]!.steps[0]!.start) === req.start.getTime() ? first : undefined;
 }
 
 /** The earliest plan starting between `req.start` and `latest` (e.g. anywhere inside a hands-free window). */
 export function planBetween(calendars: Scenario, req: ExactRequest, latest: Date): ExactAnswer {
   const first = firstFrom(calendars, req);
-  if (first && Date.parse(first.sittings[0].steps[0].start) <= latest.getTime()) return { plan: placedOption(first) };
+  if (first && Date.parse(first.sittings[0]!.steps[0]!.start) <= latest.getTime()) return { plan: placedOption(first) };
   return planExactlyAt(calendars, req);
 }
 

@@ -119,7 +119,8 @@ export async function exactPlan(db: Db, salon: PlanningSalon, placements: readon
     if (!stylist) throw noSuchStylist();
     // Asked plainly, or the engine's answer would blame the hours for a stylist who cannot do the work.
     if (!stylist.skills.includes(p.skill)) return { reason: `This stylist does not have the "${p.skill}" skill this service needs.`, field: 'stylistId' };
-    return p.latestStart ? planBetween(calendars[i], p, p.latestStart) : planExactlyAt(calendars[i], p);
+    const scenario = calendars[i]!; // booksFor answers one scenario per horizon, in order
+    return p.latestStart ? planBetween(scenario, p, p.latestStart) : planExactlyAt(scenario, p);
   });
 }
 
@@ -143,7 +144,7 @@ export async function occupancyScenario(db: Db, salon: PlanningSalon, horizon: H
 export async function occupancyOver(db: Db, salon: PlanningSalon, parts: ReadonlyArray<{ horizon: Horizon; cuts: string[] }>): Promise<OccupancyBreakdown[]> {
   const setup = await loadSalonSetup(db, salon.id);
   const books = await Promise.all(parts.map((p) => loadSalonBook(db, salon, setup, p.horizon, FIGURES)));
-  return parts.map((p, i) => breakDownOccupancy(calendarsOf(salon, setup, books[i]), p.cuts));
+  return parts.map((p, i) => breakDownOccupancy(calendarsOf(salon, setup, books[i]!), p.cuts));
 }
 
 export interface TakeOverAsk {
@@ -167,8 +168,9 @@ export async function freeStylists(db: Db, salon: PlanningSalon, asks: readonly 
   );
   return asks.map((ask, i) => {
     const mine = new Set(ask.sittingIds);
-    const all = calendars[i].bookings;
-    const others = { ...calendars[i], bookings: all.filter((b) => !mine.has(b.id)) };
+    const scenario = calendars[i]!; // booksFor answers one scenario per horizon, in order
+    const all = scenario.bookings;
+    const others = { ...scenario, bookings: all.filter((b) => !mine.has(b.id)) };
     return findFreeStylists(
       others,
       ask.skill,
@@ -185,10 +187,9 @@ export async function freeStylists(db: Db, salon: PlanningSalon, asks: readonly 
  */
 async function booksFor(db: Db, salon: PlanningSalon, setup: SalonSetup, horizons: Horizon[], options: BookOptions): Promise<Scenario[]> {
   const days = (a: string, b: string) => DateTime.fromISO(b).diff(DateTime.fromISO(a), 'days').days;
-  const order = horizons.map((_, i) => i).sort((a, b) => (horizons[a].from < horizons[b].from ? -1 : horizons[a].from > horizons[b].from ? 1 : 0));
+  const order = horizons.map((h, i) => ({ h, i })).sort((a, b) => (a.h.from < b.h.from ? -1 : a.h.from > b.h.from ? 1 : 0));
   const runs: Array<{ horizon: Horizon; members: number[] }> = [];
-  for (const i of order) {
-    const h = horizons[i];
+  for (const { h, i } of order) {
     const run = runs.at(-1);
     if (run && h.from <= run.horizon.to) {
       const to = h.to > run.horizon.to ? h.to : run.horizon.to;
@@ -203,7 +204,7 @@ async function booksFor(db: Db, salon: PlanningSalon, setup: SalonSetup, horizon
   const books = await Promise.all(runs.map((r) => loadSalonBook(db, salon, setup, r.horizon, options)));
   const out: Scenario[] = [];
   runs.forEach((r, k) => {
-    const calendars = calendarsOf(salon, setup, books[k]);
+    const calendars = calendarsOf(salon, setup, books[k]!);
     for (const i of r.members) out[i] = calendars;
   });
   return out;

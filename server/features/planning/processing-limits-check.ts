@@ -9,7 +9,8 @@ import { AppError } from '@server/lib/app-error';
  */
 export function assertWithinProcessingLimits(plan: StepPlan, limits: ProcessingLimits, prefix?: string): void {
   const issues = processingLimitIssues(plan, limits);
-  if (issues.length === 0) return;
+  const [first] = issues;
+  if (!first) return;
   const fields = Object.fromEntries(issues.map((i) => [[...(prefix ? [prefix] : []), ...i.path].join('.'), i.message]));
-  throw new AppError('VALIDATION_FAILED', 400, issues[0].message, fields);
+  throw new AppError('VALIDATION_FAILED', 400, first.message, fields);
 }

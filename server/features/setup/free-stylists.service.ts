@@ -7,9 +7,10 @@ import { localDateOf, shiftLocalDate } from '@shared/time/salon-time';
 /** The booking's future sittings as a take-over question, or null when none is left. */
 async function takeOverAsk(db: Db, zone: string, booking: FutureBooking, now: Date): Promise<TakeOverAsk | null> {
   const sittings = await futureSittingIds(db, booking.id, now);
-  if (sittings.length === 0) return null;
-  const from = localDateOf(sittings[0].start, zone);
-  const to = shiftLocalDate(localDateOf(sittings[sittings.length - 1].end, zone), 1);
+  const [first] = sittings;
+  if (!first) return null;
+  const from = localDateOf(first.start, zone);
+  const to = shiftLocalDate(localDateOf(sittings[sittings.length - 1]!.end, zone), 1);
   return { skill: booking.skill, sittingIds: sittings.map((s) => s.id), horizon: { from, to } };
 }
 
@@ -27,13 +28,14 @@ async function freeStylistsFor(
   const asks = await Promise.all(bookings.map((b) => takeOverAsk(db, zone, b, now)));
   const wanted = asks.filter((a): a is TakeOverAsk => a !== null);
   const found = wanted.length ? await freeStylists(db, await planningSalon(db, salonId), wanted) : [];
-  return asks.map((ask, i) => (ask ? found[wanted.indexOf(ask)].filter((s) => s.id !== bookings[i].stylistId) : []));
+  // One answer per wanted ask, and one ask per booking.
+  return asks.map((ask, i) => (ask ? found[wanted.indexOf(ask)]!.filter((s) => s.id !== bookings[i]!.stylistId) : []));
 }
 
 /** Stylists other than the booked one who could take this booking's future sittings exactly as they stand. */
 export async function freeStylistIds(db: Db, salonId: string, zone: string, booking: FutureBooking, now: Date): Promise<string[]> {
   const [free] = await freeStylistsFor(db, salonId, zone, [booking], now);
-  return free.map((s) => s.id);
+  return free!.map((s) => s.id); // one answer per booking
 }
 
 /** The bookings in the answer shape, each with the stylists free to take it over. */
@@ -46,6 +48,6 @@ export async function withFreeStylists(db: Db, salonId: string, zone: string, bo
     stylistId: b.stylistId,
     stylistName: b.stylistName,
     start: b.start.toISOString(),
-    freeStylists: free[i],
+    freeStylists: free[i]!, // one answer per booking
   }));
 }

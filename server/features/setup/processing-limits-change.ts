@@ -14,14 +14,14 @@ export async function assertServicesWithinNewLimits(db: Db, salonId: string, bef
     for (const issue of processingLimitIssues(service.stepPlan, next))
       over.set(issue.family, [...(over.get(issue.family) ?? []), `${service.name} (${issue.where})`]);
   }
-  if (over.size === 0) return;
+  const [family] = over.keys();
+  if (family === undefined) return;
   const fields = Object.fromEntries(
     [...over].map(([family, services]) => [
       `processingLimits.${family}`,
       `Too short for ${services.join('; ')}: change ${services.length === 1 ? 'that service' : 'those services'} first.`,
     ]),
   );
-  const [family] = [...over.keys()];
   throw new AppError(
     'CONFLICT',
     409,

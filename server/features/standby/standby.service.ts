@@ -28,7 +28,7 @@ export async function addStandby(db: Db, user: SessionUser, body: CreateStandby)
   if (Object.keys(fields).length) throw new AppError('VALIDATION_FAILED', 400, 'Some fields need attention.', fields);
   const id = await insertStandby(db, user.salonId, { ...body, notes: body.notes ?? '' }, user.id);
   await writeAudit(db, { salonId: user.salonId, actorUserId: user.id, entity: 'standby_entry', entityId: id, action: 'added', after: body });
-  return (await listStandby(db, user.salonId, id))[0];
+  return (await listStandby(db, user.salonId, id))[0]!; // the entry just written
 }
 
 /** Takes a client off the standby list, audited; an entry already closed or of another salon is not found. */

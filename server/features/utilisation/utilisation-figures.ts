@@ -47,9 +47,10 @@ const emptyTally = (): Tally => ({ bookings: 0, noShows: 0, revenueCents: 0 });
 
 export function bookingFigures(input: FigureInput) {
   const { from, to, weekStarts } = input;
+  /** Index into `weeks` (one fewer than weekStarts, which ends with the period's end) of the week holding t. */
   const weekOf = (t: number) => {
     let w = 0;
-    while (w + 2 < weekStarts.length && weekStarts[w + 1] <= t) w++;
+    while (w + 2 < weekStarts.length && weekStarts[w + 1]! <= t) w++;
     return w;
   };
   const inPeriod = (t: number) => t >= from && t < to;
@@ -69,7 +70,8 @@ export function bookingFigures(input: FigureInput) {
   let revenueCents = 0;
 
   for (const sittings of byBooking.values()) {
-    const b = sittings[0];
+    const [b] = sittings;
+    if (!b) continue; // never: each list starts with the sitting that created it
     const first = sittings.find((s) => s.seq === 1) ?? b;
     const bookedMinutes = sittings.reduce((t, s) => t + minutes(s), 0);
     const stylist = stylists.get(b.stylistId) ?? emptyTally();
@@ -81,7 +83,7 @@ export function bookingFigures(input: FigureInput) {
       const share = b.priceCents * (minutes(s) / bookedMinutes);
       revenueCents += share;
       stylist.revenueCents += share;
-      weeks[weekOf(s.start)].revenueCents += share;
+      weeks[weekOf(s.start)]!.revenueCents += share;
       const service = services.get(b.serviceId) ?? { serviceId: b.serviceId, name: b.serviceName, chairMinutes: 0, sittings: 0, revenueCents: 0 };
       service.chairMinutes += minutes(s);
       service.sittings += 1;
@@ -92,7 +94,7 @@ export function bookingFigures(input: FigureInput) {
     if (!inPeriod(first.start)) continue;
     attendance.bookings++;
     stylist.bookings++;
-    weeks[weekOf(first.start)].bookings++;
+    weeks[weekOf(first.start)]!.bookings++;
     if (b.depositCents > 0) {
       deposits.taken++;
       deposits.takenCents += b.depositCents;

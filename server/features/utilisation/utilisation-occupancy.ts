@@ -54,7 +54,7 @@ export async function measurePeriod(db: Db, salon: PlanningSalon, period: Period
   }
   const answer =
     measured.length === 1
-      ? measured[0].answer
+      ? measured[0]!.answer
       : {
           chairOccupancy: ratio(total.chairHeld, total.chairOpen),
           windowUse: ratio(total.windowUsed, total.windowUsed + total.windowFree),

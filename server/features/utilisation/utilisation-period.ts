@@ -45,14 +45,19 @@ export function chunksOf(period: Period): Chunk[] {
   for (let d = day(period.from).startOf('week').plus({ weeks: 1 }); iso(d) < period.to; d = d.plus({ weeks: 1 })) cuts.push(iso(d));
   cuts.push(period.to);
   const chunks: Chunk[] = [];
-  let current: string[] = [cuts[0]];
-  for (let i = 1; i < cuts.length; i++) {
-    if (current.length > 1 && day(cuts[i]).diff(day(current[0]), 'days').days > MAX_HORIZON_DAYS) {
-      chunks.push({ from: current[0], to: current[current.length - 1], weekCuts: current });
-      current = [current[current.length - 1]];
+  // The chunk being built: its cuts, the first of them and the last.
+  let current = [period.from];
+  let first = period.from;
+  let last = period.from;
+  for (const cut of cuts.slice(1)) {
+    if (current.length > 1 && day(cut).diff(day(first), 'days').days > MAX_HORIZON_DAYS) {
+      chunks.push({ from: first, to: last, weekCuts: current });
+      current = [last];
+      first = last;
     }
-    current.push(cuts[i]);
+    current.push(cut);
+    last = cut;
   }
-  chunks.push({ from: current[0], to: current[current.length - 1], weekCuts: current });
+  chunks.push({ from: first, to: last, weekCuts: current });
   return chunks;
 }

@@ -74,17 +74,18 @@ async function ownerUtilisation(db: Db, salon: Salon, period: Period): Promise<O
       chairHeldMinutes: c.chairHeld,
       chairOpenMinutes: c.chairOpen,
     })),
+    // occupancy.weeks and figures.weeks hold one entry per pair of consecutive weekCuts.
     weeks: occupancy.weeks.map((w, i) => {
       const clock = Object.values(w.stylists).reduce((t, s) => t + s.onClock, 0);
       const hands = Object.values(w.stylists).reduce((t, s) => t + s.handsOn, 0);
       return {
-        from: weekCuts[i],
-        to: weekCuts[i + 1],
-        bookings: figures.weeks[i].bookings,
+        from: weekCuts[i]!,
+        to: weekCuts[i + 1]!,
+        bookings: figures.weeks[i]!.bookings,
         chairOccupancy: ratio(w.chairHeld, w.chairOpen),
         windowUse: ratio(w.windowUsed, w.windowUsed + w.windowFree),
         handsOnShare: ratio(hands, clock),
-        revenueCents: figures.weeks[i].revenueCents,
+        revenueCents: figures.weeks[i]!.revenueCents,
       };
     }),
     topServices: figures.services,

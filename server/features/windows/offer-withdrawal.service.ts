@@ -33,7 +33,7 @@ export async function withdrawStaleOffers(
     salon,
     asked.map((a) => a.placement),
   );
-  const still = new Set(asked.filter((_, i) => 'plan' in placed[i]).map((a) => a.offer.id));
+  const still = new Set(asked.filter((_, i) => 'plan' in placed[i]!).map((a) => a.offer.id)); // one answer per placement
   for (const offer of live) {
     if (still.has(offer.id)) continue;
     await setOfferStatus(db, [offer.id], 'gone');

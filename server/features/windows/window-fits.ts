@@ -10,7 +10,7 @@ export const MAX_FIT_MINUTES = 90;
 export function windowFitServices(services: ServiceSummary[]) {
   return services
     .filter((s) => s.stepPlan.sittings.length === 1 && s.category !== 'consultation' && s.category !== 'skin_test')
-    .map((s) => ({ service: s, minutes: s.stepPlan.sittings[0].steps.reduce((t, st) => t + (st.kind === 'developing' ? st.minMinutes : st.minutes), 0) }))
+    .map((s) => ({ service: s, minutes: s.stepPlan.sittings[0]!.steps.reduce((t, st) => t + (st.kind === 'developing' ? st.minMinutes : st.minutes), 0) }))
     .filter((f) => f.minutes <= MAX_FIT_MINUTES);
 }
 
