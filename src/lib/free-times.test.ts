@@ -21,7 +21,7 @@ describe('groupTimesByDay', () => {
   it('groups by the salon-local day, not the UTC day (a 23:30 start stays on its evening)', () => {
     const days = groupTimesByDay([free('2027-07-13T05:30:00Z'), free('2027-07-12T16:00:00Z')], zone);
     expect(days.map((d) => d.date)).toEqual(['2027-07-12']);
-    expect(days[0].times.map((t) => t.start)).toEqual(['2027-07-12T16:00:00Z', '2027-07-13T05:30:00Z']);
+    expect(days[0]!.times.map((t) => t.start)).toEqual(['2027-07-12T16:00:00Z', '2027-07-13T05:30:00Z']);
   });
 
   it('keeps the spring-forward day whole: times on both sides of the skipped hour share one day', () => {
@@ -30,18 +30,18 @@ describe('groupTimesByDay', () => {
       ['2027-03-14', 2],
       ['2027-03-15', 1],
     ]);
-    expect(days[0].times[0].start).toBe('2027-03-14T01:30:00-07:00');
+    expect(days[0]!.times[0]!.start).toBe('2027-03-14T01:30:00-07:00');
   });
 
   it('orders the repeated hour of the fall-back day by instant, on one day', () => {
     const days = groupTimesByDay([free('2027-11-07T01:30:00-07:00'), free('2027-11-07T01:30:00-06:00')], zone);
     expect(days).toHaveLength(1);
-    expect(days[0].times.map((t) => t.start)).toEqual(['2027-11-07T01:30:00-06:00', '2027-11-07T01:30:00-07:00']);
+    expect(days[0]!.times.map((t) => t.start)).toEqual(['2027-11-07T01:30:00-06:00', '2027-11-07T01:30:00-07:00']);
   });
 
   it('lists the same start with two stylists by stylist name', () => {
     const days = groupTimesByDay([free('2027-07-12T16:00:00Z', 'Bo Lind'), free('2027-07-12T16:00:00Z')], zone);
-    expect(days[0].times.map((t) => t.stylistName)).toEqual(['Ana Moreno', 'Bo Lind']);
+    expect(days[0]!.times.map((t) => t.stylistName)).toEqual(['Ana Moreno', 'Bo Lind']);
   });
 
   it('answers no days for no times', () => {

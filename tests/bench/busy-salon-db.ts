@@ -171,7 +171,7 @@ export async function loadBusySalon(db: Kysely<Database>, options: BusySalonOpti
         .values(ids.map((_id, i) => ({ salon_id: salonId, name: `${prefix} ${String(i + 1).padStart(2, '0')}` })))
         .returning('id')
         .execute();
-      return new Map(ids.map((id, i) => [id, rows[i].id]));
+      return new Map(ids.map((id, i) => [id, rows[i]!.id]));
     };
     const chairIds = await named(
       'chairs',
@@ -252,8 +252,8 @@ export async function loadBusySalon(db: Kysely<Database>, options: BusySalonOpti
     let noShows = 0;
     for (const b of scenario.bookings ?? []) {
       const service = services.get(b.steps.map((s) => s.kind).join(','))!;
-      const first = toDate(b.steps[0].start);
-      const last = toDate(b.steps[b.steps.length - 1].end);
+      const first = toDate(b.steps[0]!.start);
+      const last = toDate(b.steps[b.steps.length - 1]!.end);
       const roll = rng();
       const status = roll < 0.05 ? 'cancelled' : last <= now ? (roll < 0.08 ? 'no_show' : 'finished') : 'booked';
       const live = status !== 'cancelled';
@@ -264,7 +264,7 @@ export async function loadBusySalon(db: Kysely<Database>, options: BusySalonOpti
       if (status === 'cancelled') cancelled++;
       if (status === 'no_show') noShows++;
       const bookingId = randomUUID();
-      const clientId = clients[Math.floor(rng() * clients.length)].id;
+      const clientId = clients[Math.floor(rng() * clients.length)]!.id;
       bookingRows.push({
         id: bookingId,
         salon_id: salonId,

@@ -85,7 +85,7 @@ function timeIt(run: () => unknown, runs = RUNS, warmUp = WARM_UP): { p50: numbe
     samples.push(performance.now() - t);
   }
   samples.sort((a, b) => a - b);
-  const at = (q: number) => samples[Math.min(samples.length - 1, Math.ceil(q * samples.length) - 1)];
+  const at = (q: number) => samples[Math.min(samples.length - 1, Math.ceil(q * samples.length) - 1)]!;
   return { p50: at(0.5), p95: at(0.95) };
 }
 
@@ -114,7 +114,7 @@ console.log(`heap used ${Math.round(heap.heapUsed / 2 ** 20)} MB of ${Math.round
 const small = salon({ stylists: 4, colourStylists: 3, chairs: 4, basins: 2, days: 7, bookings: 60 }, 7);
 const smallReq = {
   ...small,
-  request: { ...small.request!, sittings: [small.request!.sittings[0], { ...small.request!.sittings[1], daysAfterPrevious: { min: 1, max: 3 } }] },
+  request: { ...small.request!, sittings: [small.request!.sittings[0]!, { ...small.request!.sittings[1]!, daysAfterPrevious: { min: 1, max: 3 } }] },
 };
 console.log(`small salon: ${small.stylists.length} stylists, ${small.chairs.length} chairs, ${small.bookings.length} bookings, 7 days`);
 const pairs: Array<[string, () => unknown, () => unknown]> = [

@@ -148,7 +148,7 @@ async function bookingBurst(app: AppProcess, desk: HttpSession, clients: string[
   const services = (await (await fetch(`${app.url}/api/services`, { headers: { cookie: desk.cookie } })).json()) as {
     services: { id: string; stepPlan: unknown; onlineBookable?: boolean }[];
   };
-  const service = services.services[0];
+  const service = services.services[0]!;
   const date = new Date(Date.now() + 60 * 86_400_000).toISOString().slice(0, 10);
   const options = await fetch(`${app.url}/api/booking-options`, {
     method: 'POST',
@@ -173,7 +173,7 @@ async function bookingBurst(app: AppProcess, desk: HttpSession, clients: string[
         serviceId: service.id,
         stepPlan: service.stepPlan,
         stylistId: pick.stylistId,
-        start: pick.sittings[0].start,
+        start: pick.sittings[0]!.start,
         idempotencyKey: randomUUID(),
       }),
     }).catch(() => null);

@@ -71,7 +71,7 @@ async function main(): Promise<number> {
     }
     const urls = apps.map((a) => a.url);
     console.log(`dwell load: ${servers} app server(s) at ${urls.join(', ')}; ${CONNECTIONS} connections\n`);
-    const desk = await signIn(urls[0], busy.deskEmail, busy.password);
+    const desk = await signIn(urls[0]!, busy.deskEmail, busy.password);
     // Every browser asks for compressed answers; the app sends cached calendar reads gzip-compressed then.
     const browser = { 'accept-encoding': 'gzip, deflate, br' };
     const deskHeaders = { cookie: desk.cookie, ...browser };
@@ -171,12 +171,12 @@ async function main(): Promise<number> {
     for (const spec of [deskDay, freeTimes]) {
       const offset = writes.length * 200;
       const writer = startSteadyWriter({
-        url: urls[0],
+        url: urls[0]!,
         session: desk,
         everyMs: WRITE_EVERY_MS,
         path: '/api/bookings',
         body: (i) => {
-          const slot = laterTimes.times[(offset + i * 7) % laterTimes.times.length];
+          const slot = laterTimes.times[(offset + i * 7) % laterTimes.times.length]!;
           return {
             clientId: clients[i % clients.length],
             serviceId: service.id,
@@ -214,7 +214,7 @@ async function main(): Promise<number> {
         method: 'POST',
         headers: { cookie: desk.cookie, 'x-csrf-token': desk.csrf },
         next: (i) => {
-          const slot = slots[i % slots.length];
+          const slot = slots[i % slots.length]!;
           return {
             path: '/api/bookings',
             body: JSON.stringify({

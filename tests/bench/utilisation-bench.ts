@@ -73,7 +73,7 @@ async function main(): Promise<void> {
     const samples: number[] = [];
     for (let i = 0; i < RUNS; i++) samples.push((await call()).ms);
     samples.sort((a, b) => a - b);
-    const at = (q: number) => samples[Math.min(samples.length - 1, Math.ceil(q * samples.length) - 1)];
+    const at = (q: number) => samples[Math.min(samples.length - 1, Math.ceil(q * samples.length) - 1)]!;
     const p50 = at(0.5);
     const p95 = at(0.95);
     await jobs.stop();

@@ -45,7 +45,7 @@ describe('consultation to quote to booking', () => {
     const steps = proposal.stepPlan.sittings[0].steps as { label: string; minutes?: number }[];
     const lightener = steps.findIndex((s) => s.label.startsWith('Apply lightener'));
     const dry = steps.length - 1;
-    expect(steps[dry].label).toBe('Blow-dry');
+    expect(steps[dry]!.label).toBe('Blow-dry');
     await sittingOne.getByRole('listitem').nth(lightener).getByLabel('Minutes').fill('95');
     await stylist.getByRole('button', { name: 'Save consultation and quote' }).click();
     await sittingOne
@@ -54,7 +54,7 @@ describe('consultation to quote to booking', () => {
       .waitFor();
     await shot(stylist, 'stylist-quote-limit');
     // Put it back; edit the blow-dry instead, and a rounder price and deposit.
-    await sittingOne.getByRole('listitem').nth(lightener).getByLabel('Minutes').fill(String(steps[lightener].minutes));
+    await sittingOne.getByRole('listitem').nth(lightener).getByLabel('Minutes').fill(String(steps[lightener]!.minutes));
     await sittingOne.getByRole('listitem').nth(dry).getByLabel('Minutes').fill('75');
     await stylist.getByLabel('Price').fill('1050');
     await stylist.getByLabel('Deposit').fill('250');
@@ -110,11 +110,12 @@ describe('mix log', () => {
     // Two past bookings of one client with Ana, asked the way My day asks (the demo book spans a week back).
     const visits = (await bookingsOn(page, '/api/stylist/day', [-1, -2, -3, -4, -5, -6, -7, -8]))
       .filter((b) => b.status !== 'cancelled' && b.sittings.every((s) => Date.parse(s.start) < Date.now()))
-      .map((b) => ({ id: b.id, clientId: b.client.id, start: b.sittings[0].start }));
+      .map((b) => ({ id: b.id, clientId: b.client.id, start: b.sittings[0]!.start }));
     const byClient = new Map<string, typeof visits>();
     for (const v of visits) byClient.set(v.clientId, [...(byClient.get(v.clientId) ?? []), v]);
     const pair = [...byClient.values()].find((v) => v.length >= 2)!.sort((a, b) => a.start.localeCompare(b.start));
-    const [earlier, later] = pair;
+    const earlier = pair[0]!;
+    const later = pair[1]!;
 
     await page.goto(`${baseUrl()}/stylist/bookings/${earlier.id}/mix-log?client=${earlier.clientId}`);
     await page.getByRole('heading', { level: 1, name: 'Mix log' }).waitFor();
@@ -178,7 +179,7 @@ describe('mix log', () => {
     const upcoming = (await bookingsOn(desk, '/api/desk/day', [1, 2, 3, 4, 5, 6]))
       .filter((b) => b.status === 'booked' && b.sittings.every((s) => Date.parse(s.start) > Date.now()))
       .map((b) => ({ id: b.id, clientId: b.client.id, stylist: b.stylist.name }));
-    const [forDesk] = upcoming;
+    const forDesk = upcoming[0]!;
     await desk.goto(`${baseUrl()}/desk/bookings/${forDesk.id}`);
     await desk.getByText('Not started yet; bowls can be written ahead.').first().waitFor();
     const deskBowl = desk.getByRole('form', { name: /Bowl for sitting 1/ });

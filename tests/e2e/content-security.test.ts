@@ -12,7 +12,7 @@ describe('the built app shell', () => {
     expect(scripts.length).toBeGreaterThan(0);
     for (const [, attrs, body] of scripts) {
       expect(attrs).toMatch(/\bsrc="\/assets\//);
-      expect(body.trim()).toBe('');
+      expect(body!.trim()).toBe('');
     }
     expect(html).not.toMatch(/\son[a-z]+=/i);
     const csp = res.headers.get('content-security-policy') ?? '';

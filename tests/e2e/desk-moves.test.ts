@@ -65,10 +65,10 @@ describe('the desk week', () => {
     await page.setViewportSize({ width: 1280, height: 1700 }); // the whole day's grid on screen, to drag across it
     // A sitting that starts on the hour or half hour with a free start 30 minutes later that same day.
     const { booking } = await findBooking(page, 2, (b, times) => {
-      const start = DateTime.fromISO(b.sittings[0].start, { zone: ZONE });
+      const start = DateTime.fromISO(b.sittings[0]!.start, { zone: ZONE });
       return start.minute % 30 === 0 && start.hour <= 15 && times.some((t) => DateTime.fromISO(t.start).toMillis() === start.plus({ minutes: 30 }).toMillis());
     });
-    const was = booking.sittings[0];
+    const was = booking.sittings[0]!;
     const date = DateTime.fromISO(was.start, { zone: ZONE }).toISODate()!;
     const monday = DateTime.fromISO(date).startOf('week');
 
@@ -105,7 +105,7 @@ describe('the desk week', () => {
     const answer = await moved;
     expect(answer.status()).toBe(200);
     // The toast names the time the server placed the sitting at (a drag on a busy machine may land a slot off).
-    const placed = ((await answer.json()) as Booking).sittings[0].start;
+    const placed = ((await answer.json()) as Booking).sittings[0]!.start;
     expect(Date.parse(placed)).toBeGreaterThan(Date.parse(was.start));
     const toast = page.getByRole('status').filter({ hasText: 'Moved ' });
     await toast.getByText(`Moved ${booking.client.name}'s sitting to`).waitFor();
@@ -118,8 +118,8 @@ describe('the desk week', () => {
     expect((await undone).status()).toBe(200);
     await toast.getByText(`Moved back: ${booking.client.name}'s sitting is at`).waitFor();
     const after = (await getJson(page, `/api/bookings/${booking.id}`)) as Booking;
-    expect(Date.parse(after.sittings[0].start)).toBe(Date.parse(was.start));
-    expect(after.sittings[0].chairName).toBe(was.chairName);
+    expect(Date.parse(after.sittings[0]!.start)).toBe(Date.parse(was.start));
+    expect(after.sittings[0]!.chairName).toBe(was.chairName);
 
     // One stylist at a time is still there.
     await page.getByLabel('Stylist').selectOption({ label: booking.stylist.name });
@@ -146,7 +146,7 @@ describe('moving and cancelling on the booking page, on a phone', () => {
     // A booking of Ana's with a deposit, more than 48 hours ahead (the demo's cancellation window), with a free time
     // clear of its own sitting (where a blow-dry can take Ana's hands) and another free time 90 minutes from that one.
     const clear = (b: Booking, t: FreeTime) =>
-      Date.parse(t.start) >= Date.parse(b.sittings[0].end) || Date.parse(t.start) + 90 * 60_000 <= Date.parse(b.sittings[0].start);
+      Date.parse(t.start) >= Date.parse(b.sittings[0]!.end) || Date.parse(t.start) + 90 * 60_000 <= Date.parse(b.sittings[0]!.start);
     const apart = (a: FreeTime, b: FreeTime) => Math.abs(Date.parse(a.start) - Date.parse(b.start)) >= 90 * 60_000;
     const { booking, times } = await findBooking(
       page,
@@ -155,11 +155,11 @@ describe('moving and cancelling on the booking page, on a phone', () => {
     );
     const target = times.find((t) => clear(booking, t) && times.some((u) => apart(t, u)))!;
     const other = times.find((u) => apart(target, u))!;
-    expect(times.map((t) => Date.parse(t.start))).not.toContain(Date.parse(booking.sittings[0].start)); // its own time is no move
+    expect(times.map((t) => Date.parse(t.start))).not.toContain(Date.parse(booking.sittings[0]!.start)); // its own time is no move
     await page.goto(`${baseUrl()}/desk/bookings/${booking.id}`);
     await page.getByRole('heading', { level: 1, name: `${booking.client.name} · ${booking.service.name}` }).waitFor();
     const move = page.locator('section', { has: page.getByRole('heading', { name: 'Move a sitting' }) });
-    const date = DateTime.fromISO(booking.sittings[0].start, { zone: ZONE }).toISODate()!;
+    const date = DateTime.fromISO(booking.sittings[0]!.start, { zone: ZONE }).toISODate()!;
     await move.getByLabel('Show times from').fill(date);
     await move.getByRole('list', { name: 'Days with free times' }).getByRole('button').first().click();
 
@@ -173,7 +173,7 @@ describe('moving and cancelling on the booking page, on a phone', () => {
     const taken = await page.request.post(`${baseUrl()}/api/bookings`, {
       headers: { 'X-CSRF-Token': token },
       data: {
-        clientId: clients[0].id,
+        clientId: clients[0]!.id,
         serviceId: blowDry.id,
         stepPlan: blowDry.stepPlan,
         stylistId: booking.stylist.id,

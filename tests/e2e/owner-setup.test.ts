@@ -56,8 +56,8 @@ describe('owner set-up', () => {
     try {
       const tuesday = DateTime.now().setZone('America/Denver').plus({ weeks: 2 }).set({ weekday: 2 }).toISODate()!;
       const before = await deskOptions(page, tuesday);
-      expect(before[0].sittings[0].start.slice(0, 10)).toBe(tuesday);
-      expect(before[0].sittings[0].steps).toHaveLength(1);
+      expect(before[0]!.sittings[0]!.start.slice(0, 10)).toBe(tuesday);
+      expect(before[0]!.sittings[0]!.steps).toHaveLength(1);
 
       // Opening hours: no longer open on Tuesdays.
       await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Set-up' }).click();
@@ -105,8 +105,8 @@ describe('owner set-up', () => {
 
       const after = await deskOptions(page, tuesday);
       expect(after.length).toBeGreaterThan(0);
-      for (const option of after) expect(DateTime.fromISO(option.sittings[0].start, { zone: 'America/Denver' }).weekday).not.toBe(2);
-      expect(after[0].sittings[0].steps).toHaveLength(2);
+      for (const option of after) expect(DateTime.fromISO(option.sittings[0]!.start, { zone: 'America/Denver' }).weekday).not.toBe(2);
+      expect(after[0]!.sittings[0]!.steps).toHaveLength(2);
 
       await page.goto(`${baseUrl()}/owner/setup/staff`);
       await page.getByRole('region', { name: 'Staff', exact: true }).waitFor();

@@ -10,7 +10,7 @@ afterAll(() => browser.close());
 
 it('after a failed strand test the quote plans no lightener, and adding it asks for a written reason that is kept', async () => {
   const page = await signedInPage(browser, 'ana@demo.test', '/stylist');
-  const cyrus = ((await (await page.request.get(`${baseUrl()}/api/clients?q=Cyrus`)).json()).clients as { id: string }[])[0];
+  const cyrus = ((await (await page.request.get(`${baseUrl()}/api/clients?q=Cyrus`)).json()).clients as { id: string }[])[0]!;
   const { token } = await (await page.request.get(`${baseUrl()}/api/csrf`)).json();
   const recorded = await page.request.post(`${baseUrl()}/api/clients/${cyrus.id}/strand-tests`, {
     headers: { 'X-CSRF-Token': token },

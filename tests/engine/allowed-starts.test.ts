@@ -29,7 +29,7 @@ function scenario(sittings: Sitting[], extra: Partial<NonNullable<ScenarioInput[
   };
 }
 
-const starts = (s: ScenarioInput) => planOptions(parseScenario(s)).options.map((o) => o.sittings.map((x) => x.steps[0].start.slice(0, 16)));
+const starts = (s: ScenarioInput) => planOptions(parseScenario(s)).options.map((o) => o.sittings.map((x) => x.steps[0]!.start.slice(0, 16)));
 
 describe('allowed starts', () => {
   it('gives the K earliest pairs inside the stretches, searching on past the days before them', () => {
@@ -119,7 +119,7 @@ describe('step ids and labels', () => {
       ],
       { limit: 1 },
     );
-    const [option] = planOptions(parseScenario(s)).options;
+    const option = planOptions(parseScenario(s)).options[0]!;
     expect(option.sittings.map((x) => x.steps.map((st) => [st.kind, st.id, st.label]))).toEqual([
       [
         ['hands_on', '1.1', 'Apply colour'],
@@ -131,8 +131,8 @@ describe('step ids and labels', () => {
   });
 
   it('are left out of the answer when the request has none', () => {
-    const [option] = planOptions(parseScenario(scenario([{ steps: [...steps] }]))).options;
-    for (const st of option.sittings[0].steps)
+    const option = planOptions(parseScenario(scenario([{ steps: [...steps] }]))).options[0]!;
+    for (const st of option.sittings[0]!.steps)
       expect(Object.keys(st).sort()).toEqual(st.kind === 'basin' ? ['basin', 'end', 'kind', 'start'] : ['end', 'kind', 'start']);
   });
 });

@@ -16,7 +16,7 @@ import { exists, localText, seededRng } from './scenario-generator';
 import { smallScenario } from './small-scenarios';
 
 const seeds = fc.integer({ min: 1, max: 2 ** 31 - 1 });
-const enginePairs = (s: Scenario) => planOptions(s).options.map((o) => ({ stylist: o.stylist, start: isoToUtc(o.sittings[0].steps[0].start) }));
+const enginePairs = (s: Scenario) => planOptions(s).options.map((o) => ({ stylist: o.stylist, start: isoToUtc(o.sittings[0]!.steps[0]!.start) }));
 
 function expectedPairs(all: ReturnType<typeof referencePairs>, spread: 'day' | 'none', limit: number) {
   const seen = new Set<string>();
@@ -85,13 +85,13 @@ function extraBooking(s: Scenario, seed: number): Scenario['bookings'][number] |
     const kind = kinds[Math.floor(rng() * (s.basins.length ? 3 : 2))];
     const end = t + g * (1 + Math.floor(rng() * 6));
     if (!exists(t, s.timeZone) || !exists(end, s.timeZone)) return null;
-    steps.push({ kind, start: localText(t), end: localText(end), ...(kind === 'basin' ? { basin: s.basins[0].id } : {}) });
+    steps.push({ kind, start: localText(t), end: localText(end), ...(kind === 'basin' ? { basin: s.basins[0]!.id } : {}) });
     t = end;
   }
   return {
     id: 'extra',
-    stylist: s.stylists[Math.floor(rng() * s.stylists.length)].id,
-    chair: s.chairs[Math.floor(rng() * s.chairs.length)].id,
+    stylist: s.stylists[Math.floor(rng() * s.stylists.length)]!.id,
+    chair: s.chairs[Math.floor(rng() * s.chairs.length)]!.id,
     steps: steps as Scenario['bookings'][number]['steps'],
   };
 }
@@ -143,7 +143,7 @@ describe('booking engine properties', () => {
       fc.property(seeds, (seed) => {
         const s = smallScenario(seed);
         // A first step that needs the stylist's hands guarantees the same start is taken.
-        if (s.request!.sittings[0].steps[0].kind === 'developing') return;
+        if (s.request!.sittings[0]!.steps[0]!.kind === 'developing') return;
         const [first] = planOptions(s).options;
         if (!first) return;
         const booked = first.sittings.map((sitting, k) => ({
@@ -156,8 +156,8 @@ describe('booking engine properties', () => {
         const printed = first.sittings.flatMap((x) => x.steps.flatMap((step) => [step.start, step.end]));
         if (printed.some((iso) => localToUtc(wall(iso), s.timeZone) !== isoToUtc(iso))) return;
         const again = planOptions(parseScenario({ ...s, bookings: [...s.bookings, ...booked] })).options;
-        const firstStart = isoToUtc(first.sittings[0].steps[0].start);
-        expect(again.some((o) => o.stylist === first.stylist && isoToUtc(o.sittings[0].steps[0].start) === firstStart)).toBe(false);
+        const firstStart = isoToUtc(first.sittings[0]!.steps[0]!.start);
+        expect(again.some((o) => o.stylist === first.stylist && isoToUtc(o.sittings[0]!.steps[0]!.start) === firstStart)).toBe(false);
         checked++;
       }),
       { numRuns: 200 },

@@ -50,11 +50,11 @@ const cases: Array<[zone: string, date: string, dayHours: number, start: string,
 
 describe('daylight-saving days (IANA tz database)', () => {
   it.each(cases)('%s %s: a sitting across the change keeps its real length and local end', (zone, date, _h, start, end) => {
-    const [option] = planOptions(scenario(zone, date, { request: longSitting(date) })).options;
-    const steps = option.sittings[0].steps;
-    expect(steps[0].start).toBe(start);
-    expect(steps[2].end).toBe(end);
-    expect((Date.parse(steps[2].end) - Date.parse(steps[0].start)) / 60_000).toBe(240);
+    const option = planOptions(scenario(zone, date, { request: longSitting(date) })).options[0]!;
+    const steps = option.sittings[0]!.steps;
+    expect(steps[0]!.start).toBe(start);
+    expect(steps[2]!.end).toBe(end);
+    expect((Date.parse(steps[2]!.end) - Date.parse(steps[0]!.start)) / 60_000).toBe(240);
   });
 
   it.each(cases)('%s %s: a 00:00-24:00 working day has %i real hours', (zone, date, dayHours) => {
@@ -81,8 +81,8 @@ describe('daylight-saving days (IANA tz database)', () => {
 describe('local times that are not one instant (RFC 5545 §3.3.5)', () => {
   it('an ambiguous fall-back time means its first occurrence (01:30 MDT, not MST)', () => {
     const request = { ...longSitting('2027-11-07'), earliest: '2027-11-07T01:30' };
-    const [option] = planOptions(scenario('America/Denver', '2027-11-07', { request })).options;
-    expect(option.sittings[0].steps[0].start).toBe('2027-11-07T01:30-06:00');
+    const option = planOptions(scenario('America/Denver', '2027-11-07', { request })).options[0]!;
+    expect(option.sittings[0]!.steps[0]!.start).toBe('2027-11-07T01:30-06:00');
   });
 
   it('hours starting inside the spring-forward gap begin at the same distance after it (02:30 -> 03:30 MDT)', () => {
@@ -91,7 +91,7 @@ describe('local times that are not one instant (RFC 5545 §3.3.5)', () => {
       salonHours: [{ rrule: 'FREQ=DAILY', start: '02:30', end: '06:00' }],
       request,
     });
-    expect(planOptions(s).options[0].sittings[0].steps[0].start).toBe('2027-03-14T03:30-06:00');
+    expect(planOptions(s).options[0]!.sittings[0]!.steps[0]!.start).toBe('2027-03-14T03:30-06:00');
   });
 
   it('an explicit date-time inside the gap is rejected, naming the field', () => {

@@ -43,7 +43,7 @@ describe('occupancy breakdown', () => {
       expect(sum((p) => p.chairOpen)).toBe(b.total.chairOpen);
       expect(sum((p) => p.windowUsed)).toBe(b.total.windowUsed);
       expect(sum((p) => p.windowFree)).toBe(b.total.windowFree);
-      for (const id of Object.keys(b.total.stylists)) expect(sum((p) => p.stylists[id].handsOn)).toBe(b.total.stylists[id].handsOn);
+      for (const id of Object.keys(b.total.stylists)) expect(sum((p) => p.stylists[id]!.handsOn)).toBe(b.total.stylists[id]!.handsOn);
       expect(b.cells.reduce((t, c) => t + c.chairHeld, 0)).toBe(b.total.chairHeld);
       expect(b.cells.reduce((t, c) => t + c.chairOpen, 0)).toBe(b.total.chairOpen);
     }

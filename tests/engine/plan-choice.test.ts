@@ -38,14 +38,14 @@ describe('plan choice for a given (stylist, start)', () => {
         ]),
       }),
     );
-    const steps = planOptions(s).options[0].sittings[0].steps;
+    const steps = planOptions(s).options[0]!.sittings[0]!.steps;
     expect(steps.map((x) => [x.kind, x.start.slice(11, 16), x.end.slice(11, 16)])).toEqual([
       ['hands_on', '09:00', '09:30'],
       ['developing', '09:30', '10:15'],
       ['basin', '10:15', '10:30'],
     ]);
     // b1 is free until 10:30, a tighter fit than the all-day-free b2.
-    expect(steps[2].basin).toBe('b1');
+    expect(steps[2]!.basin).toBe('b1');
   });
 
   it('with nothing to join, takes the shortest developing time', () => {
@@ -58,7 +58,7 @@ describe('plan choice for a given (stylist, start)', () => {
         ]),
       }),
     );
-    expect(planOptions(s).options[0].sittings[0].steps[1].end.slice(11, 16)).toBe('09:50');
+    expect(planOptions(s).options[0]!.sittings[0]!.steps[1]!.end.slice(11, 16)).toBe('09:50');
   });
 
   it("puts hands work inside another client's developing time when fragmentation ties", () => {
@@ -83,8 +83,8 @@ describe('plan choice for a given (stylist, start)', () => {
         ]),
       }),
     );
-    const steps = planOptions(s).options[0].sittings[0].steps;
-    expect(steps[1].start.slice(11, 16)).toBe('10:00');
+    const steps = planOptions(s).options[0]!.sittings[0]!.steps;
+    expect(steps[1]!.start.slice(11, 16)).toBe('10:00');
   });
 
   it('picks the chair whose free stretch is shortest (best fit), keeping long stretches whole', () => {
@@ -99,6 +99,6 @@ describe('plan choice for a given (stylist, start)', () => {
         request: request([{ kind: 'hands_on', minutes: 30 }]),
       }),
     );
-    expect(planOptions(s).options[0].sittings[0].chair).toBe('c2');
+    expect(planOptions(s).options[0]!.sittings[0]!.chair).toBe('c2');
   });
 });

@@ -6,7 +6,7 @@ import { parseScenario, planOptions, type Option } from '@shared/engine/engine';
 import { validateOption } from './plan-validator';
 
 const scenario = parseScenario(readFileSync(join(__dirname, '../../docs/examples/two-sitting-correction-denver.json'), 'utf8'));
-const [first] = planOptions(scenario).options;
+const first = planOptions(scenario).options[0]!;
 const tamper = (edit: (o: Option) => void): Option => {
   const copy = structuredClone(first);
   edit(copy);
@@ -22,55 +22,55 @@ describe('validateOption', () => {
     [
       'a chair held by another client',
       (o) => {
-        o.sittings[0].chair = 'chair-1';
+        o.sittings[0]!.chair = 'chair-1';
       },
       /rule 2/,
     ],
     [
       "hands work over the other client's application",
       (o) => {
-        o.sittings[0].steps[0].start = '2027-03-03T10:40-07:00';
+        o.sittings[0]!.steps[0]!.start = '2027-03-03T10:40-07:00';
       },
       /rule 4/,
     ],
     [
       'developing past its maximum',
       (o) => {
-        o.sittings[0].steps[1].end = '2027-03-03T12:05-07:00';
-        o.sittings[0].steps[2].start = '2027-03-03T12:05-07:00';
-        o.sittings[0].steps[2].end = '2027-03-03T12:20-07:00';
+        o.sittings[0]!.steps[1]!.end = '2027-03-03T12:05-07:00';
+        o.sittings[0]!.steps[2]!.start = '2027-03-03T12:05-07:00';
+        o.sittings[0]!.steps[2]!.end = '2027-03-03T12:20-07:00';
       },
       /rule 1/,
     ],
     [
       'a gap between steps',
       (o) => {
-        o.sittings[0].steps[2].start = '2027-03-03T11:45-07:00';
-        o.sittings[0].steps[2].end = '2027-03-03T12:00-07:00';
+        o.sittings[0]!.steps[2]!.start = '2027-03-03T11:45-07:00';
+        o.sittings[0]!.steps[2]!.end = '2027-03-03T12:00-07:00';
       },
       /rule 1: gap/,
     ],
     [
       'the second sitting on the same day',
       (o) => {
-        o.sittings[1].steps[0].start = '2027-03-03T15:00-07:00';
-        o.sittings[1].steps[0].end = '2027-03-03T16:00-07:00';
+        o.sittings[1]!.steps[0]!.start = '2027-03-03T15:00-07:00';
+        o.sittings[1]!.steps[0]!.end = '2027-03-03T16:00-07:00';
       },
       /rule 7/,
     ],
     [
       'a sitting outside working hours',
       (o) => {
-        o.sittings[1].steps[0].start = '2027-03-04T18:30-07:00';
-        o.sittings[1].steps[0].end = '2027-03-04T19:30-07:00';
+        o.sittings[1]!.steps[0]!.start = '2027-03-04T18:30-07:00';
+        o.sittings[1]!.steps[0]!.end = '2027-03-04T19:30-07:00';
       },
       /rule 6: outside working hours/,
     ],
     [
       'a wrong UTC offset',
       (o) => {
-        o.sittings[1].steps[0].start = '2027-03-04T11:00-06:00';
-        o.sittings[1].steps[0].end = '2027-03-04T12:00-06:00';
+        o.sittings[1]!.steps[0]!.start = '2027-03-04T11:00-06:00';
+        o.sittings[1]!.steps[0]!.end = '2027-03-04T12:00-06:00';
       },
       /wrong offset/,
     ],

@@ -24,7 +24,7 @@ function hoursOn(s: Scenario, rules: HoursRule[], day: number): Range[] {
     .map((rule): Range => {
       const at = (hhmm: string) => {
         const [hour, minute] = hhmm.split(':').map(Number);
-        return wallToUtc({ ...partsOf(dayToDate(day)), hour, minute }, s.timeZone).utc;
+        return wallToUtc({ ...partsOf(dayToDate(day)), hour: hour!, minute: minute! }, s.timeZone).utc;
       };
       return [at(rule.start), at(rule.end)];
     });
@@ -53,14 +53,14 @@ export function validateOption(s: Scenario, option: Option): string[] {
   if (r.stylist !== null && r.stylist !== st.id) errors.push('rule 8: not the requested stylist');
   if (option.sittings.length !== r.sittings.length) return [...errors, 'wrong number of sittings'];
   const mine = s.bookings.filter((b) => b.stylist === st.id);
-  const span = (b: Scenario['bookings'][number]): Range => [localToUtc(b.steps[0].start, zone), localToUtc(b.steps[b.steps.length - 1].end, zone)];
+  const span = (b: Scenario['bookings'][number]): Range => [localToUtc(b.steps[0]!.start, zone), localToUtc(b.steps[b.steps.length - 1]!.end, zone)];
   const horizon: Range = [localToUtc(s.horizon.from, zone), localToUtc(s.horizon.to, zone)];
   const earliest = localToUtc(r.earliest, zone);
   let previousDay: number | null = null;
 
   option.sittings.forEach((sitting, k) => {
     const at = (msg: string) => errors.push(`sitting ${k}: ${msg}`);
-    const spec = r.sittings[k];
+    const spec = r.sittings[k]!;
     if (sitting.steps.length !== spec.steps.length) return at('wrong number of steps');
     const times = sitting.steps.map((x): Range => [isoToUtc(x.start), isoToUtc(x.end)]);
     // Printed local time must be the zone's wall clock at that instant (rule 9).
@@ -69,15 +69,15 @@ export function validateOption(s: Scenario, option: Option): string[] {
         const shown = DateTime.fromISO(iso, { setZone: true });
         if (shown.offset !== DateTime.fromMillis(shown.toMillis(), { zone }).offset) at(`${iso} has the wrong offset`);
       }
-    const whole: Range = [times[0][0], times[times.length - 1][1]];
+    const whole: Range = [times[0]![0], times[times.length - 1]![1]];
     const day = localDay(whole[0], zone);
     if (DateTime.fromMillis(whole[0] * 60_000, { zone }).minute % g !== 0) at('start is off the grid');
     spec.steps.forEach((want, i) => {
-      const got = sitting.steps[i];
-      const minutes = times[i][1] - times[i][0];
+      const got = sitting.steps[i]!;
+      const minutes = times[i]![1] - times[i]![0];
       if (got.kind !== want.kind) at(`step ${i} kind ${got.kind}`);
       if (got.id !== want.id || got.label !== want.label) at(`step ${i} does not carry the request's id and label`);
-      if (i > 0 && times[i][0] !== times[i - 1][1]) at(`rule 1: gap before step ${i}`);
+      if (i > 0 && times[i]![0] !== times[i - 1]![1]) at(`rule 1: gap before step ${i}`);
       const [lo, hi] = want.kind === 'developing' ? [want.minMinutes, want.maxMinutes] : [want.minutes, want.minutes];
       if (minutes < lo || minutes > hi || minutes % g !== 0) at(`rule 1/9: step ${i} lasts ${minutes} real minutes`);
     });
@@ -90,14 +90,14 @@ export function validateOption(s: Scenario, option: Option): string[] {
         for (const other of b.steps) {
           const o: Range = [localToUtc(other.start, zone), localToUtc(other.end, zone)];
           // Rule 4: hands_on/basin never overlap the stylist's other hands work.
-          if (other.kind !== 'developing' && overlaps(o, times[i])) at(`rule 4: hands overlap ${b.id}`);
+          if (other.kind !== 'developing' && overlaps(o, times[i]!)) at(`rule 4: hands overlap ${b.id}`);
         }
       if (step.kind === 'basin') {
         // Rule 3: one client per basin, whoever their stylist is.
         if (!s.basins.some((x) => x.id === step.basin)) at(`rule 3: unknown basin ${step.basin}`);
         for (const b of s.bookings)
           for (const other of b.steps) {
-            if (other.kind === 'basin' && other.basin === step.basin && overlaps([localToUtc(other.start, zone), localToUtc(other.end, zone)], times[i]))
+            if (other.kind === 'basin' && other.basin === step.basin && overlaps([localToUtc(other.start, zone), localToUtc(other.end, zone)], times[i]!))
               at(`rule 3: basin used by ${b.id}`);
           }
       }

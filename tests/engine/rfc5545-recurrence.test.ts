@@ -129,7 +129,7 @@ describe('RFC 5545 §3.8.5.3 recurrence examples', () => {
       chairs: [{ id: 'c1' }],
       request: { skill: 'colour', earliest: '1997-09-01T00:00', sittings: [{ steps: [{ kind: 'hands_on', minutes: 60 }] }], limit: 50 },
     });
-    const starts = planOptions(scenario).options.map((o) => o.sittings[0].steps[0].start);
+    const starts = planOptions(scenario).options.map((o) => o.sittings[0]!.steps[0]!.start);
     expect(starts).toEqual([...dates(1997, 9, [2, 4, 9, 11, 16, 18, 23, 25, 30]), ...dates(1997, 10, [2])].map((d) => `${d}T09:00-04:00`));
   });
 });

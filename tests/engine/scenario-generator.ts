@@ -20,7 +20,7 @@ export function seededRng(seed: number): Rng {
   };
 }
 
-export const pick = <T>(rng: Rng, items: readonly T[]): T => items[Math.floor(rng() * items.length)];
+export const pick = <T>(rng: Rng, items: readonly T[]): T => items[Math.floor(rng() * items.length)]!;
 export const between = (rng: Rng, lo: number, hi: number): number => lo + Math.floor(rng() * (hi - lo + 1));
 
 export interface GeneratorOptions {
@@ -106,7 +106,7 @@ function placeBookings(rng: Rng, o: GeneratorOptions, stylists: Array<{ id: stri
   const chairUse = Array.from({ length: chairs }, () => new Uint8Array(size));
   const basinUse = Array.from({ length: basins }, () => new Uint8Array(size));
   const free = (arr: Uint8Array, a: number, b: number, cap = 1) => {
-    for (let i = a; i < b; i++) if (arr[i] >= cap) return false;
+    for (let i = a; i < b; i++) if (arr[i]! >= cap) return false;
     return true;
   };
   const out: GeneratedBooking[] = [];
@@ -125,8 +125,8 @@ function placeBookings(rng: Rng, o: GeneratorOptions, stylists: Array<{ id: stri
     }
     const ci = Math.floor(rng() * chairs);
     if (t > size || t > Math.floor(start / 1440) * 1440 + o.salonHours[1]) continue;
-    if (!free(chairUse[ci], start, t) || !free(clients[si], start, t, stylists[si].maxClientsAtOnce)) continue;
-    if (!steps.every((s) => s.kind === 'developing' || free(hands[si], s.a, s.b))) continue;
+    if (!free(chairUse[ci]!, start, t) || !free(clients[si]!, start, t, stylists[si]!.maxClientsAtOnce)) continue;
+    if (!steps.every((s) => s.kind === 'developing' || free(hands[si]!, s.a, s.b))) continue;
     let ok = true;
     for (const s of steps)
       if (s.kind === 'basin') {
@@ -136,16 +136,16 @@ function placeBookings(rng: Rng, o: GeneratorOptions, stylists: Array<{ id: stri
       }
     if (!ok || !steps.every((s) => exists(from + s.a, o.zone) && exists(from + s.b, o.zone))) continue;
     for (let i = start; i < t; i++) {
-      chairUse[ci][i] = 1;
-      clients[si][i]++;
+      chairUse[ci]![i] = 1;
+      clients[si]![i]!++;
     }
     for (const s of steps) {
-      if (s.kind !== 'developing') hands[si].fill(1, s.a, s.b);
-      if (s.basin !== undefined) basinUse[s.basin].fill(1, s.a, s.b);
+      if (s.kind !== 'developing') hands[si]!.fill(1, s.a, s.b);
+      if (s.basin !== undefined) basinUse[s.basin]!.fill(1, s.a, s.b);
     }
     out.push({
       id: `k${n++}`,
-      stylist: stylists[si].id,
+      stylist: stylists[si]!.id,
       chair: `c${String(ci).padStart(2, '0')}`,
       steps: steps.map(
         (s) =>

@@ -71,12 +71,12 @@ function scenario(): ScenarioInput {
 
 describe('out-of-service chairs and free stylists', () => {
   it('a chair out of service is not offered during its period, and is again after it', () => {
-    const first = planOptions(parseScenario(scenario())).options[0];
+    const first = planOptions(parseScenario(scenario())).options[0]!;
     expect(first.sittings[0]).toMatchObject({ chair: 'c2', steps: [{ start: '2027-03-02T09:00-07:00' }] });
     const both = scenario();
-    both.chairs[1].outOfService = [{ start: '2027-03-02T00:00', end: '2027-03-03T00:00' }];
-    const next = planOptions(parseScenario({ ...both, horizon: { from: '2027-03-02', to: '2027-03-05' } })).options[0];
-    expect(next.sittings[0].steps[0].start).toBe('2027-03-03T09:00-07:00');
+    both.chairs[1]!.outOfService = [{ start: '2027-03-02T00:00', end: '2027-03-03T00:00' }];
+    const next = planOptions(parseScenario({ ...both, horizon: { from: '2027-03-02', to: '2027-03-05' } })).options[0]!;
+    expect(next.sittings[0]!.steps[0]!.start).toBe('2027-03-03T09:00-07:00');
   });
 
   it('free stylists have the skill, the hours and free hands for every step', () => {

@@ -49,7 +49,7 @@ beforeAll(async () => {
     salonId: elsewhere.salonId,
     clientId: theirClient.clientId!,
     stylistId: theirStylist.staffId!,
-    chairId: elsewhere.chairs[0],
+    chairId: elsewhere.chairs[0]!,
     serviceId: await insertService(db, elsewhere.salonId),
     steps: [['hands_on', '2027-03-02T17:00:00Z', '2027-03-02T17:30:00Z']],
   });
@@ -61,7 +61,7 @@ beforeAll(async () => {
     salonId: salon.salonId,
     clientId: mine.clientId,
     stylistId: users.stylist.staffId!,
-    chairId: salon.chairs[0],
+    chairId: salon.chairs[0]!,
     serviceId,
     steps: [['hands_on', '2027-03-02T17:00:00Z', '2027-03-02T17:30:00Z']],
   });
@@ -70,7 +70,7 @@ beforeAll(async () => {
     salonId: salon.salonId,
     clientId: mine.clientId,
     stylistId: users.stylist.staffId!,
-    chairId: salon.chairs[0],
+    chairId: salon.chairs[0]!,
     serviceId,
     steps: [['hands_on', '2027-03-03T17:00:00Z', '2027-03-03T17:30:00Z']],
   });

@@ -29,12 +29,12 @@ beforeAll(async () => {
       serviceId,
       steps: [['hands_on', '2027-03-02T17:00:00Z', '2027-03-02T17:30:00Z']],
     });
-  clientBooking = await book(users.client.clientId!, salon.chairs[0]);
+  clientBooking = await book(users.client.clientId!, salon.chairs[0]!);
   otherClientBooking = await insertTestBooking(db, {
     salonId: salon.salonId,
     clientId: users.otherClient.clientId!,
     stylistId: users.stylist.staffId!,
-    chairId: salon.chairs[1],
+    chairId: salon.chairs[1]!,
     serviceId,
     steps: [['developing', '2027-03-02T17:00:00Z', '2027-03-02T17:30:00Z']],
   });

@@ -128,8 +128,8 @@ describe('the book version', () => {
             .values({ staff_id: ana.staffId!, during: sql`tstzrange(now() + interval '40 days', now() + interval '41 days')` as never })
             .execute(),
       ],
-      ['chair', () => db.updateTable('chairs').set({ name: 'Window chair' }).where('id', '=', salon.chairs[0]).execute()],
-      ['basin', () => db.updateTable('basins').set({ name: 'Back basin' }).where('id', '=', salon.basins[0]).execute()],
+      ['chair', () => db.updateTable('chairs').set({ name: 'Window chair' }).where('id', '=', salon.chairs[0]!).execute()],
+      ['basin', () => db.updateTable('basins').set({ name: 'Back basin' }).where('id', '=', salon.basins[0]!).execute()],
       [
         'out of service',
         () =>
@@ -194,7 +194,7 @@ describe('cached reads on two app servers', () => {
     const desk$ = await signedInAgent(t.app, desk.email, desk.password);
     const day = (date: string) => desk$.get(`/api/desk/day?date=${date}`);
     const [x, y] = [futureWeekday(5, 5), futureWeekday(6, 5)];
-    const [xTag, yTag] = [(await day(x)).headers.etag, (await day(y)).headers.etag];
+    const [xTag, yTag] = [(await day(x)).headers.etag!, (await day(y)).headers.etag!];
     expect((await book(desk$, `${x}T10:00:00-07:00`)).status).toBe(201);
     expect((await day(y).set('If-None-Match', yTag)).status).toBe(304);
     expect((await day(x).set('If-None-Match', xTag)).status).toBe(200);
@@ -216,7 +216,7 @@ describe('cached reads on two app servers', () => {
     const later = new Date(Date.parse(second.start) + 86_400_000).toISOString();
     const moved = await desk$.write('post', `/api/bookings/${made.body.id}/move`, { sitting: 2, start: later });
     expect(moved.status, JSON.stringify(moved.body)).toBe(200);
-    const again = await day(first).set('If-None-Match', seen.headers.etag);
+    const again = await day(first).set('If-None-Match', seen.headers.etag!);
     expect(again.status).toBe(200);
     const shown = again.body.bookings.find((b: { id: string }) => b.id === made.body.id);
     expect(Date.parse(shown.sittings[1].start)).toBe(Date.parse(later));
@@ -230,9 +230,9 @@ describe('cached reads on two app servers', () => {
     expect(before.length).toBeGreaterThan(0);
     expect((await visitor.get(url)).body.times).toEqual(before); // answered from the cache, the same
     const deskB = await signedInAgent(other, desk.email, desk.password);
-    expect((await book(deskB, before[0].start)).status).toBe(201);
+    expect((await book(deskB, before[0]!.start)).status).toBe(201);
     const after = (await visitor.get(url)).body.times as { start: string }[];
-    expect(after.map((s) => s.start)).not.toContain(before[0].start);
+    expect(after.map((s) => s.start)).not.toContain(before[0]!.start);
     // Nothing about the salon's clients is cached into the public answer.
     expect(JSON.stringify(after)).not.toContain(client.clientId!);
   });

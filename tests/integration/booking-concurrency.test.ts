@@ -38,7 +38,7 @@ async function overlaps() {
     select count(*)::int as n from sittings a join sittings b on a.id < b.id and a.chair_id = b.chair_id and a.during && b.during and a.live and b.live`.execute(
     t.testDb.db,
   );
-  return rows[0].n + chairs.rows[0].n;
+  return rows[0]!.n + chairs.rows[0]!.n;
 }
 
 describe('racing bookings', () => {
@@ -54,7 +54,7 @@ describe('racing bookings', () => {
   it('50 concurrent requests for overlapping options of one stylist (one client at a time): exactly one succeeds', async () => {
     // Starts 5 minutes apart inside 25 minutes; each toner visit takes at least 30, so any two overlap.
     const starts = ['13:00', '13:05', '13:10', '13:15', '13:20', '13:25'];
-    const results = await Promise.all(Array.from({ length: 50 }, (_, i) => book(localIso(thursday, starts[i % starts.length]), `race-overlap-${i}-000`)));
+    const results = await Promise.all(Array.from({ length: 50 }, (_, i) => book(localIso(thursday, starts[i % starts.length]!), `race-overlap-${i}-000`)));
     expect(results.filter((r) => r.status === 201)).toHaveLength(1);
     expect(results.filter((r) => r.status === 409)).toHaveLength(49);
     expect(await overlaps()).toBe(0);

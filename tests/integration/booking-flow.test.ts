@@ -56,14 +56,14 @@ describe('POST /api/booking-options', () => {
 
   it('refuses a step plan whose least developing time exceeds its most, naming the field, and zero minutes', async () => {
     const bad = structuredClone(correctionPlan) as typeof correctionPlan;
-    const dev = bad.sittings[0].steps[1] as { minMinutes: number; maxMinutes: number };
+    const dev = bad.sittings[0]!.steps[1] as { minMinutes: number; maxMinutes: number };
     dev.minMinutes = 60;
     dev.maxMinutes = 30;
     const res = await ask({ stepPlan: bad });
     expect(res.status).toBe(400);
     expect(Object.keys(res.body.error.fields)).toContain('stepPlan.sittings.0.steps.1.maxMinutes');
     const zero = structuredClone(correctionPlan) as typeof correctionPlan;
-    (zero.sittings[0].steps[0] as { minutes: number }).minutes = 0;
+    (zero.sittings[0]!.steps[0] as { minutes: number }).minutes = 0;
     expect((await ask({ stepPlan: zero })).status).toBe(400);
   });
 
@@ -105,7 +105,7 @@ describe('POST /api/bookings', () => {
     expect(rows).toHaveLength(1);
     // Round trip: the booked start is no longer offered.
     const after = (await ask()).body.options;
-    expect(after.some((o: { sittings: { start: string }[] }) => o.sittings[0].start === option.sittings[0].start)).toBe(false);
+    expect(after.some((o: { sittings: { start: string }[] }) => o.sittings[0]!.start === option.sittings[0].start)).toBe(false);
   });
 
   it('the same time with another key → 409 with what is taken', async () => {

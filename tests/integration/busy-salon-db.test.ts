@@ -103,7 +103,7 @@ describe('busy salon loader', () => {
       expect(answer.times).toHaveLength(400);
     }
     expect(answer.times.map((t) => [t.stylistId, t.start, t.end])).toEqual(
-      full.map((o) => [o.stylist, o.sittings[0].steps[0].start, o.sittings[0].steps[o.sittings[0].steps.length - 1].end]),
+      full.map((o) => [o.stylist, o.sittings[0]!.steps[0]!.start, o.sittings[0]!.steps[o.sittings[0]!.steps.length - 1]!.end]),
     );
   });
 });

@@ -122,7 +122,7 @@ describe('recording a consultation and its quote', () => {
       })
       .returning('id')
       .execute();
-    const photos = await stylist$.write('post', '/api/consultations', { ...bad[1], quote: { ...quote, serviceId }, photoIds: [photo.id] });
+    const photos = await stylist$.write('post', '/api/consultations', { ...bad[1], quote: { ...quote, serviceId }, photoIds: [photo!.id] });
     expect(photos.status).toBe(400);
     expect(photos.body.error.fields.photoIds).toMatch(/own photos/);
     expect(await list()).toEqual([]);
@@ -195,7 +195,7 @@ describe('recording a consultation and its quote', () => {
 
 describe('sending and accepting a quote', () => {
   it('e-mails the summary (draft → sent), and only the signed-in client accepts it (sent → accepted)', async () => {
-    const [consultation] = (await list()) as { id: string; quote: { id: string } }[];
+    const consultation = ((await list()) as { id: string; quote: { id: string } }[])[0]!;
     // A draft is not the client's to see or accept yet.
     expect((await client$.get('/api/me/quotes')).body.consultations).toEqual([]);
     expect((await client$.write('post', `/api/me/quotes/${consultation.quote.id}/accept`, {})).status).toBe(404);

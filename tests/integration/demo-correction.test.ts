@@ -42,11 +42,11 @@ describe('the demo correction', () => {
         'Blow-dry',
       ]),
     );
-    expect(plan.sittings[0].steps.filter((s) => s.kind === 'developing' && s.product === 'colour_remover' && s.heat)).toHaveLength(2);
-    expect(plan.sittings[0].steps.some((s) => s.product === 'lightener')).toBe(true);
+    expect(plan.sittings[0]!.steps.filter((s) => s.kind === 'developing' && s.product === 'colour_remover' && s.heat)).toHaveLength(2);
+    expect(plan.sittings[0]!.steps.some((s) => s.product === 'lightener')).toBe(true);
     expect(labels[1]).toEqual(expect.arrayContaining(['Apply vivid colour, section 1 of 3', 'Apply vivid colour, section 3 of 3', 'Cut and finish']));
     // docs/quotes.md: sittings of a correction 3–14 days apart.
-    expect(plan.sittings[1].daysAfterPrevious).toEqual({ min: 3, max: 14 });
+    expect(plan.sittings[1]!.daysAfterPrevious).toEqual({ min: 3, max: 14 });
     // Sitting 1 at the most: 30 + (20 + 10 + 20) × 2 + 20 + (25 + 25 + 10) + (25 + 25 + 20) + (20 + 10 + 10) + 45 = 365 min;
     // sitting 2: 15 + 25 × 3 + 35 + 15 + 75 = 215 min. 580 min = 9 h 40 min, about ten hours.
     expect(sittingMaxMinutes(plan)).toEqual([365, 215]);
@@ -74,7 +74,7 @@ describe('the demo correction', () => {
       .orderBy('s.seq')
       .execute();
     expect(sittings).toHaveLength(2);
-    const days = (sittings[1].starts_at.getTime() - sittings[0].starts_at.getTime()) / 86_400_000;
+    const days = (sittings[1]!.starts_at.getTime() - sittings[0]!.starts_at.getTime()) / 86_400_000;
     expect(days).toBeGreaterThanOrEqual(3);
     expect(days).toBeLessThanOrEqual(14);
   });
@@ -97,7 +97,7 @@ describe('the demo correction', () => {
     // Box dye over permanent, 4 → 8 with a vivid shade: remover twice under heat in sitting 1, the vivid in sections in sitting 2.
     const plan = row.step_plan as StepPlan;
     expect(plan.sittings).toHaveLength(2);
-    expect(plan.sittings[0].steps.filter((s) => s.kind === 'developing' && s.product === 'colour_remover' && s.heat)).toHaveLength(2);
-    expect(plan.sittings[1].steps.filter((s) => s.kind === 'hands_on' && s.product === 'direct_dye').length).toBeGreaterThan(1);
+    expect(plan.sittings[0]!.steps.filter((s) => s.kind === 'developing' && s.product === 'colour_remover' && s.heat)).toHaveLength(2);
+    expect(plan.sittings[1]!.steps.filter((s) => s.kind === 'hands_on' && s.product === 'direct_dye').length).toBeGreaterThan(1);
   });
 });

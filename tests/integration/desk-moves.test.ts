@@ -76,7 +76,7 @@ describe('free times to move a sitting to (desk)', () => {
       expect(local(time.start).minute % 5).toBe(0); // the salon's 5-minute grid (migration default)
     }
     // A few of them, early, middle and late, are each accepted by the move itself.
-    for (const time of [times[times.length - 1], times[Math.floor(times.length / 2)], times[0]]) {
+    for (const time of [times[times.length - 1]!, times[Math.floor(times.length / 2)]!, times[0]!]) {
       const moved = await s.desk$.write('post', `/api/bookings/${booked.id}/move`, { sitting: 1, start: time.start });
       expect(moved.status, JSON.stringify(moved.body)).toBe(200);
       expect(sameInstant(moved.body.sittings[0].start, time.start)).toBe(true);
@@ -115,7 +115,7 @@ describe('free times to move a sitting to (desk)', () => {
       stylistId: s.ana.staffId!,
       start: localIso(futureWeekday(3, 4), '09:00'),
     });
-    const first = local(booked.sittings[0].start).startOf('day');
+    const first = local(booked.sittings[0]!.start).startOf('day');
     const res = await s.desk$.get(`/api/bookings/${booked.id}/move-times?sitting=2`);
     expect(res.status).toBe(200);
     const times = res.body.times as FreeTime[];
@@ -126,7 +126,7 @@ describe('free times to move a sitting to (desk)', () => {
       expect(days).toBeGreaterThanOrEqual(1);
       expect(days).toBeLessThanOrEqual(7);
     }
-    expect(local(times[0].start).toISODate()).toBe(first.plus({ days: 1 }).toISODate());
+    expect(local(times[0]!.start).toISODate()).toBe(first.plus({ days: 1 }).toISODate());
   });
 
   it('refuses what the move refuses, naming the field: another stylist for several sittings, a stylist without the skill, a sitting it does not have', async () => {
@@ -203,7 +203,8 @@ describe('a moved sitting keeps its chair while that chair is free', () => {
     const s = await salonWithDesk(2);
     const toner = await insertPlannedService(t.testDb.db, s.salon.salonId, { plan: tonerPlan, depositCents: 0 });
     const friday = futureWeekday(5, 4);
-    const [chair1, chair2] = s.salon.chairs;
+    const chair1 = s.salon.chairs[0]!;
+    const chair2 = s.salon.chairs[1]!;
     // Booked in Chair 2 on purpose: the engine, left alone, picks Chair 1 (the first free chair by name).
     const booked = await book(s.desk$, {
       clientId: s.client.clientId!,
@@ -213,7 +214,7 @@ describe('a moved sitting keeps its chair while that chair is free', () => {
       start: localIso(friday, '09:00'),
       chairIds: [chair2],
     });
-    expect(booked.sittings[0].chairId).toBe(chair2);
+    expect(booked.sittings[0]!.chairId).toBe(chair2);
 
     const later = await s.desk$.write('post', `/api/bookings/${booked.id}/move`, { sitting: 1, start: localIso(friday, '11:00') });
     expect(later.status).toBe(200);
@@ -266,7 +267,7 @@ describe('a moved sitting keeps its chair while that chair is free', () => {
       before: { sittings: { chair: string }[] };
       after: { sittings: { chair: string }[] };
     }[];
-    const toChair1 = history.find((e) => e.before?.sittings[0].chair === 'Chair 2' && e.after?.sittings[0].chair === 'Chair 1');
+    const toChair1 = history.find((e) => e.before?.sittings[0]!.chair === 'Chair 2' && e.after?.sittings[0]!.chair === 'Chair 1');
     expect(toChair1?.action).toBe('moved sitting 1');
   });
 });

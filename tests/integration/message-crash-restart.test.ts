@@ -85,7 +85,7 @@ it('a server killed between claim and send: after a restart the message is sent 
   const received = sms.messages.filter((m) => m.to === phone);
   console.log(`crash-restart: messages received by the SMS fake for the killed send = ${received.length}`);
   expect(received).toHaveLength(1);
-  expect(received[0].body).toBe('Crash test reminder');
+  expect(received[0]!.body).toBe('Crash test reminder');
   second.kill('SIGTERM');
   await new Promise((resolve) => second.once('exit', resolve));
 });

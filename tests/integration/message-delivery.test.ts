@@ -29,7 +29,7 @@ describe('delivery', () => {
   it('a booking moved five times: only the latest reminders go out', async () => {
     const c = await m.newClient();
     const id = await m.book(serviceId, plan, '2027-06-01', '10:00', c.clientId!);
-    const moves = [
+    const moves: [string, string][] = [
       ['2027-06-02', '11:00'],
       ['2027-06-03', '12:00'],
       ['2027-06-04', '13:00'],

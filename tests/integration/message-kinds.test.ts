@@ -195,7 +195,7 @@ describe('staff messages, at 18:00 in the salon’s zone', () => {
     expect(stylistList.body).toMatch(/2:00 PM – 3:00 PM {2}Client \d+: Full lightening/);
     const desk = rows.filter((r) => r.kind === 'desk_no_deposit_list');
     expect(desk.length).toBeGreaterThanOrEqual(1);
-    expect(desk[0].body).toMatch(/Full lightening — deposit \$50\.00 not paid/);
+    expect(desk[0]!.body).toMatch(/Full lightening — deposit \$50\.00 not paid/);
     expect(await planStaffMessages(db(), new Date('2027-03-15T01:00:00Z'))).toEqual([]);
   });
 });

@@ -366,7 +366,7 @@ describe("the owner's figures", () => {
       salonId: salon.salonId,
       clientId: client.clientId!,
       stylistId: ana.staffId!,
-      chairId: salon.chairs[1],
+      chairId: salon.chairs[1]!,
       serviceId: consultation,
       steps: [['hands_on', localIso(day, '10:00'), localIso(day, '10:30')]],
     });

@@ -52,7 +52,7 @@ describe('chairs and basins', () => {
       idempotencyKey: 'setup-units-0001',
     });
     expect(booked.status).toBe(201);
-    const basin = salon.basins[0];
+    const basin = salon.basins[0]!;
     const preview = await owner$.get(setupPaths.unitAffected('basins', basin, date, next));
     expect(preview.status).toBe(200);
     expect(preview.body.bookings.map((b: { id: string }) => b.id)).toEqual([booked.body.id]);
@@ -91,10 +91,10 @@ describe('chairs and basins', () => {
   });
 
   it('refuses a period that ends before it starts, and is for the owner only', async () => {
-    const bad = await owner$.write('post', setupPaths.unitOutOfService('chairs', salon.chairs[0]), { from: '2027-03-10', to: '2027-03-09', reason: '' });
+    const bad = await owner$.write('post', setupPaths.unitOutOfService('chairs', salon.chairs[0]!), { from: '2027-03-10', to: '2027-03-09', reason: '' });
     expect(bad.status).toBe(400);
     expect(bad.body.error.fields).toHaveProperty('to');
-    expect(await t.testDb.db.selectFrom('out_of_service').select('id').where('chair_id', '=', salon.chairs[0]).execute()).toHaveLength(0);
+    expect(await t.testDb.db.selectFrom('out_of_service').select('id').where('chair_id', '=', salon.chairs[0]!).execute()).toHaveLength(0);
     const stylist$ = await signedInAgent(t.app, stylist.email, stylist.password);
     expect((await stylist$.get(setupPaths.units)).status).toBe(403);
     expect((await stylist$.write('post', setupPaths.unitsOf('chairs'), { name: 'Mine' })).status).toBe(403);

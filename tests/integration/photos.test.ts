@@ -104,7 +104,7 @@ describe('POST /api/me/photos: what is refused', () => {
     expect(res.status).toBe(201);
     const added = (await storedFiles()).filter((f) => !before.includes(f));
     expect(added).toHaveLength(1);
-    const stored = await readFile(path.join(t.uploadsDir, added[0]));
+    const stored = await readFile(path.join(t.uploadsDir, added[0]!));
     expect(stored.includes(Buffer.from('<script'))).toBe(false);
     expect((await sharp(stored).metadata()).format).toBe('jpeg');
     const served = await (await as(someone)).get(`/api/photos/${res.body.photos[0].id}`).buffer(true);

@@ -110,11 +110,11 @@ describe('what the skin test allows is a limit the engine searches within', () =
     const options = res.body.options as BookingOption[];
     expect(options).toHaveLength(K);
     for (const o of options) {
-      expect(Date.parse(o.sittings[0].start)).toBeGreaterThanOrEqual(dayN.getTime());
+      expect(Date.parse(o.sittings[0]!.start)).toBeGreaterThanOrEqual(dayN.getTime());
       expect(o.skinTest).toBe('waiting');
     }
     // One per open day (spread by day), so they are the first K open days from day N.
-    expect(new Set(options.map((o) => o.sittings[0].start.slice(0, 10))).size).toBe(K);
+    expect(new Set(options.map((o) => o.sittings[0]!.start.slice(0, 10))).size).toBe(K);
   });
 
   it('carries each step’s label through the engine into the option', async () => {
@@ -129,7 +129,7 @@ describe('what the skin test allows is a limit the engine searches within', () =
     });
     expect(res.status).toBe(200);
     for (const o of res.body.options as BookingOption[]) {
-      expect(o.sittings[0].steps.map((s) => [s.kind, s.label])).toEqual(oxidative.sittings[0].steps.map((s) => [s.kind, s.label]));
+      expect(o.sittings[0]!.steps.map((s) => [s.kind, s.label])).toEqual(oxidative.sittings[0]!.steps.map((s) => [s.kind, s.label]));
     }
   });
 });

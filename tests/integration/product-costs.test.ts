@@ -33,7 +33,9 @@ beforeAll(async () => {
     priceCents: 0,
     depositCents: 0,
     createdBy: null,
-    sittings: [{ chairId: salon.chairs[0], steps: [{ kind: 'hands_on', label: 'Apply', start: new Date(start), end: new Date(start + HOUR), basinId: null }] }],
+    sittings: [
+      { chairId: salon.chairs[0]!, steps: [{ kind: 'hands_on', label: 'Apply', start: new Date(start), end: new Date(start + HOUR), basinId: null }] },
+    ],
   });
   owner$ = await signedInAgent(t.app, owner.email, owner.password);
   stylist$ = await signedInAgent(t.app, stylist.email, stylist.password);

@@ -37,7 +37,7 @@ describe('session lifetime', () => {
   it('sets the idle timeout from SESSION_IDLE_MINUTES on the cookie and in the store', async () => {
     const c = await signedInAgent(t.app, owner.email, owner.password);
     const res = await c.get('/api/session');
-    const expires = Date.parse(/Expires=([^;]+)/.exec(sessionCookie(res) ?? '')![1]);
+    const expires = Date.parse(/Expires=([^;]+)/.exec(sessionCookie(res) ?? '')![1]!);
     const rows = await sessionsOf(owner.id);
     for (const left of [expires - Date.now(), Math.max(...rows.map((r) => r.expire.getTime())) - Date.now()]) {
       expect(left).toBeGreaterThan((IDLE_MINUTES - 1) * 60_000);
@@ -73,7 +73,7 @@ describe('session lifetime', () => {
 
   it('sign-out ends the session in the store: replaying the old cookie is refused', async () => {
     const c = await signedInAgent(t.app, owner.email, owner.password);
-    const old = sessionCookie(await c.get('/api/session'))!.split(';')[0];
+    const old = sessionCookie(await c.get('/api/session'))!.split(';')[0]!;
     expect((await c.write('delete', '/api/session')).status).toBe(204);
     const replay = await request(t.app).get('/api/session').set('Cookie', old);
     expect(replay.status).toBe(401);
@@ -170,7 +170,7 @@ describe('Content-Security-Policy', () => {
     expect(scripts.length).toBeGreaterThan(0);
     for (const [, attrs, body] of scripts) {
       expect(attrs).toMatch(/\bsrc=/);
-      expect(body.trim()).toBe('');
+      expect(body!.trim()).toBe('');
     }
     expect(html).not.toMatch(/\son[a-z]+=/i); // no inline event handlers either
   });

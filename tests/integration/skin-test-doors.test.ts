@@ -138,7 +138,7 @@ describe('the ways round, each refused with the reason', () => {
     expectRefused(await book(client.clientId!, blowDry, oxidative), /No skin test is on record/);
     // The desk edits a blow-dry's plan and adds an oxidative toner step.
     const edited: StepPlan = {
-      sittings: [{ steps: [{ kind: 'hands_on', label: 'Gloss', product: 'toner_oxidative', minutes: 20 }, ...dryOnly.sittings[0].steps] }],
+      sittings: [{ steps: [{ kind: 'hands_on', label: 'Gloss', product: 'toner_oxidative', minutes: 20 }, ...dryOnly.sittings[0]!.steps] }],
     };
     expectRefused(await book(client.clientId!, blowDry, edited), /No skin test is on record/);
     // The same blow-dry without colour books as before.
@@ -154,7 +154,7 @@ describe('the ways round, each refused with the reason', () => {
         { appliedDaysAgo: 3, result: 'positive', recordedDaysAgo: 1 },
         { appliedDaysAgo: 3, result: 'pending', recordedDaysAgo: 3 },
       ];
-      const client = await clientWith(order.map((i) => tests[i]));
+      const client = await clientWith(order.map((i) => tests[i]!));
       expectRefused(await book(client.clientId!, rootColour, oxidative), /showed a reaction/);
     }
   });
@@ -382,7 +382,7 @@ describe('age', () => {
     // Fifteen on the day: born one day less than 16 years before the sitting's date (worked from the date itself).
     const sittingDay = start.slice(0, 10);
     const [y, m, d] = sittingDay.split('-').map(Number);
-    const dob = new Date(Date.UTC(y - 16, m - 1, d + 1)).toISOString().slice(0, 10);
+    const dob = new Date(Date.UTC(y! - 16, m! - 1, d! + 1)).toISOString().slice(0, 10);
     const c = await signedInAgent(t.app, client.email, client.password);
     expect((await c.write('put', '/api/me/date-of-birth', { dateOfBirth: '2999-01-01' })).status).toBe(400);
     expect((await c.write('put', '/api/me/date-of-birth', { dateOfBirth: dob })).status).toBe(200);
@@ -442,7 +442,7 @@ describe('the other way out: change the steps', () => {
     const direct: StepPlan = {
       sittings: [
         {
-          steps: oxidative.sittings[0].steps.map((s) =>
+          steps: oxidative.sittings[0]!.steps.map((s) =>
             s.product === 'oxidative_colour' ? { ...s, product: 'direct_dye' as const, label: s.label.replace('colour', 'direct dye') } : s,
           ),
         },

@@ -38,7 +38,8 @@ beforeAll(async () => {
   owner = await insertUser(db, salon.salonId, 'owner');
   const elsewhere = await insertSalon(db);
   const otherOwner = await insertUser(db, elsewhere.salonId, 'owner');
-  [stylist$, desk$, owner$, otherOwner$] = await Promise.all([stylist, desk, owner, otherOwner].map((u) => signedInAgent(t.app, u.email, u.password)));
+  const signIn = (u: UserFixture) => signedInAgent(t.app, u.email, u.password);
+  [stylist$, desk$, owner$, otherOwner$] = await Promise.all([signIn(stylist), signIn(desk), signIn(owner), signIn(otherOwner)]);
 });
 afterAll(() => t.close());
 
@@ -86,9 +87,9 @@ describe('recording the reading of a pending skin test', () => {
       ['recorded', await nameOf(stylist)],
       ['reading recorded', await nameOf(desk)],
     ]);
-    expect(entries[0].after).toMatchObject({ result: 'pending', readAt: null, notes: 'Behind the left ear' });
-    expect(entries[1].before).toEqual({ readAt: null, result: 'pending', readByName: null });
-    expect(entries[1].after).toEqual({ readAt, result: 'negative', readByName: await nameOf(desk) });
+    expect(entries[0]!.after).toMatchObject({ result: 'pending', readAt: null, notes: 'Behind the left ear' });
+    expect(entries[1]!.before).toEqual({ readAt: null, result: 'pending', readByName: null });
+    expect(entries[1]!.after).toEqual({ readAt, result: 'negative', readByName: await nameOf(desk) });
 
     // Stored once: a second reading is refused with the reason, and the first stands.
     const again = await owner$.write('post', `/api/clients/${clientId}/skin-tests/${applied.id}/reading`, {
@@ -242,7 +243,7 @@ describe('test records are kept', () => {
       salonId: salon.salonId,
       clientId,
       stylistId: stylist.staffId!,
-      chairId: salon.chairs[0],
+      chairId: salon.chairs[0]!,
       serviceId: await insertService(db, salon.salonId),
       steps: [['hands_on', localIso(futureWeekday(3, 3), '10:00'), localIso(futureWeekday(3, 3), '10:30')]],
     });

@@ -43,13 +43,13 @@ beforeAll(async () => {
     const res = await desk$.write('post', '/api/clients', {
       name,
       phone: '+1 970 555 01' + String(clients.length + 10),
-      email: `${name.split(' ')[0].toLowerCase()}@example.test`,
+      email: `${name.split(' ')[0]!.toLowerCase()}@example.test`,
     });
     expect(res.status).toBe(201);
     clients.push(res.body);
   }
   const booked = await desk$.write('post', '/api/bookings', {
-    clientId: clients[2].id,
+    clientId: clients[2]!.id,
     serviceId: lighteningId,
     stepPlan: lightening,
     stylistId: ana.staffId,
@@ -65,7 +65,7 @@ const availability = [{ weekdays: [2, 3, 4, 5, 6], from: '09:00', to: '17:00' }]
 describe('standby list', () => {
   it('adds, lists and removes entries; refuses ids of another salon and bad time ranges', async () => {
     const added = await desk$.write('post', '/api/standby', {
-      clientId: clients[0].id,
+      clientId: clients[0]!.id,
       serviceIds: [toner],
       stylistId: null,
       availability,
@@ -82,13 +82,13 @@ describe('standby list', () => {
     expect(other.status).toBe(400);
     expect(other.body.error.fields.clientId).toBeDefined();
     const backwards = await desk$.write('post', '/api/standby', {
-      clientId: clients[1].id,
+      clientId: clients[1]!.id,
       serviceIds: [toner],
       stylistId: null,
       availability: [{ weekdays: [2], from: '15:00', to: '09:00' }],
     });
     expect(backwards.body.error.fields['availability.0.to']).toBeDefined();
-    const second = await desk$.write('post', '/api/standby', { clientId: clients[1].id, serviceIds: [toner], stylistId: ana.staffId, availability });
+    const second = await desk$.write('post', '/api/standby', { clientId: clients[1]!.id, serviceIds: [toner], stylistId: ana.staffId, availability });
     expect((await desk$.get('/api/standby')).body.entries).toHaveLength(2);
     expect(second.status).toBe(201);
   });
@@ -121,13 +121,15 @@ describe('hands-free windows', () => {
     });
     const visitor = await anonymousAgent(t.app);
     expect((await visitor.get(`/api/offers/${links[0]}`)).body).toMatchObject({ status: 'offered', serviceName: 'Toner refresh' });
-    const [a, b] = await Promise.all(links.map((token) => visitor.write('post', `/api/offers/${token}/accept`)));
+    const answers = await Promise.all(links.map((token) => visitor.write('post', `/api/offers/${token}/accept`)));
+    const a = answers[0]!;
+    const b = answers[1]!;
     const statuses = [a.status, b.status].sort();
     expect(statuses).toEqual([200, 409]);
-    const loser = a.status === 409 ? entries[0] : entries[1];
+    const loser = a.status === 409 ? entries[0]! : entries[1]!;
     expect(t.sms.messages.some((m) => m.to === loser.client.phone && m.body.includes('has been taken'))).toBe(true);
     // Offer, taken and gone are all in the send log, once each per channel.
-    const winner = loser === entries[0] ? entries[1] : entries[0];
+    const winner = loser === entries[0] ? entries[1]! : entries[0]!;
     const logged = await t.testDb.db
       .selectFrom('messages')
       .select(['kind', 'client_id', 'status'])
@@ -200,7 +202,7 @@ describe('hands-free windows', () => {
       await t.testDb.db.selectFrom('services').select('id').where('name', '=', 'Vivid colour').where('salon_id', '=', salon.salonId).executeTakeFirstOrThrow()
     ).id;
     const base = await desk$.write('post', '/api/bookings', {
-      clientId: clients[2].id,
+      clientId: clients[2]!.id,
       serviceId: lighteningId,
       stepPlan: lightening,
       stylistId: ana.staffId,
@@ -214,14 +216,14 @@ describe('hands-free windows', () => {
       stylistId: ana.staffId,
       serviceId: toner,
       start: localIso(thursday, '10:50'),
-      standbyEntryIds: [open[0].id],
+      standbyEntryIds: [open[0]!.id],
     });
     expect(offered.status).toBe(201);
-    const sms = t.sms.messages.filter((m) => m.to === open[0].client.phone && m.body.includes('/offer/')).at(-1)!;
+    const sms = t.sms.messages.filter((m) => m.to === open[0]!.client.phone && m.body.includes('/offer/')).at(-1)!;
     const token = /\/offer\/([A-Za-z0-9_-]+)/.exec(sms.body)![1];
     const card = (await desk$.get(`/api/windows?date=${thursday}`)).body;
     expect(card.windows.find((w: { start: string }) => w.start === localIso(thursday, '10:45')).offers).toMatchObject([
-      { clientName: open[0].client.name, status: 'offered' },
+      { clientName: open[0]!.client.name, status: 'offered' },
     ]);
 
     // A walk-in goes into the same window first: the offered 10:50 toner no longer fits Ana's hands.
@@ -239,12 +241,12 @@ describe('hands-free windows', () => {
     expect(late.status).toBe(409);
     const after = (await desk$.get(`/api/windows?date=${thursday}`)).body;
     const shown = [...after.closedOffers, ...after.windows.flatMap((w: { offers: unknown[] }) => w.offers)];
-    expect(shown).toMatchObject([{ clientName: open[0].client.name, serviceName: 'Toner refresh', status: 'gone' }]);
+    expect(shown).toMatchObject([{ clientName: open[0]!.client.name, serviceName: 'Toner refresh', status: 'gone' }]);
     // The client is told through the send log (once per channel), not left to find out at the door.
     const offerRow = await t.testDb.db
       .selectFrom('window_offers')
       .select('id')
-      .where('client_id', '=', open[0].client.id)
+      .where('client_id', '=', open[0]!.client.id)
       .where('starts_at', '=', new Date(localIso(thursday, '10:50')))
       .executeTakeFirstOrThrow();
     const gone = await t.testDb.db.selectFrom('messages').select(['channel']).where('dedupe_key', 'like', `offer:${offerRow.id}:window_offer_gone:%`).execute();

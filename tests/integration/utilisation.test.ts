@@ -81,13 +81,13 @@ async function book(o: {
     depositCents: o.deposit,
     createdBy: null,
     sittings: o.sittings.map((s) => ({
-      chairId: salon.chairs[s.chair],
+      chairId: salon.chairs[s.chair]!,
       steps: s.steps.map(([kind, from, to, basin]) => ({
         kind,
         label: kind,
         start: at(s.date, from),
         end: at(s.date, to),
-        basinId: basin === undefined ? null : salon.basins[basin],
+        basinId: basin === undefined ? null : salon.basins[basin]!,
       })),
     })),
   });

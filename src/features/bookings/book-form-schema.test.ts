@@ -14,7 +14,7 @@ describe('BookFormSchema', () => {
   it('asks for a client when none is picked', () => {
     const result = BookFormSchema.safeParse({ ...valid, clientId: '' });
     expect(result.success).toBe(false);
-    expect(result.error?.issues[0].message).toBe('Pick a client or add a new one');
+    expect(result.error?.issues[0]!.message).toBe('Pick a client or add a new one');
   });
   it('refuses a developing step whose least time exceeds its most', () => {
     const bad = { sittings: [{ steps: [{ kind: 'developing' as const, label: 'Lift', product: 'lightener', minMinutes: 50, maxMinutes: 30 }] }] };

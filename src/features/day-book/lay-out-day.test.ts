@@ -39,7 +39,7 @@ describe('layOutDay', () => {
       ['Stylist 1', 2],
       ['Stylist 2', 1],
     ]);
-    expect(layout.columns[0].sittings.map((s) => [s.lane, s.lanes])).toEqual([
+    expect(layout.columns[0]!.sittings.map((s) => [s.lane, s.lanes])).toEqual([
       [0, 2],
       [1, 2],
     ]);

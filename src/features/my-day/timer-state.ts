@@ -39,8 +39,11 @@ export type SittingProgress =
 /** Which step of a sitting is under way at `now` (a developing step stays "in progress" until the next step starts). */
 export function sittingProgress(sitting: Pick<SittingView, 'steps'>, now: DateTime): SittingProgress {
   const steps = sitting.steps;
-  if (steps.length === 0 || now < DateTime.fromISO(steps[0].start)) return steps.length ? { state: 'upcoming', next: steps[0] } : { state: 'finished' };
+  const first = steps[0];
+  if (!first) return { state: 'finished' };
+  if (now < DateTime.fromISO(first.start)) return { state: 'upcoming', next: first };
   const index = steps.findIndex((s) => now >= DateTime.fromISO(s.start) && now < DateTime.fromISO(s.end));
-  if (index >= 0) return { state: 'in_progress', step: steps[index], index, next: steps[index + 1] ?? null };
+  const step = steps[index];
+  if (step) return { state: 'in_progress', step, index, next: steps[index + 1] ?? null };
   return { state: 'finished' };
 }

@@ -5,7 +5,7 @@ export const weekdayLongNames = ['Monday', 'Tuesday', 'Wednesday', 'Thursday', '
 /** "Mon–Fri 09:00–12:00" style text for one availability row. */
 export function availabilityText(a: { weekdays: number[]; from: string; to: string }): string {
   const days = [...a.weekdays].sort((x, y) => x - y);
-  const consecutive = days.length > 2 && days.every((d, i) => i === 0 || d === days[i - 1] + 1);
-  const dayText = consecutive ? `${weekdayNames[days[0] - 1]}–${weekdayNames[days.at(-1)! - 1]}` : days.map((d) => weekdayNames[d - 1]).join(', ');
+  const consecutive = days.length > 2 && days.every((d, i) => i === 0 || d === days[i - 1]! + 1);
+  const dayText = consecutive ? `${weekdayNames[days[0]! - 1]}–${weekdayNames[days.at(-1)! - 1]}` : days.map((d) => weekdayNames[d - 1]).join(', ');
   return `${dayText} ${a.from}–${a.to}`;
 }

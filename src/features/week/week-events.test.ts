@@ -38,7 +38,7 @@ describe('toWeekEvents', () => {
 
   it('keeps the stylist’s sittings that are not cancelled, one event per sitting, with its number', () => {
     expect(events.map((e) => e.id)).toEqual([`${id(3)}:1`, `${id(3)}:2`, `${id(6)}:1`, `${id(6)}:2`]);
-    expect(events[1].extendedProps).toMatchObject({ seq: 2, of: 2, clientName: 'Client 3' });
+    expect(events[1]!.extendedProps).toMatchObject({ seq: 2, of: 2, clientName: 'Client 3' });
   });
 
   it('uses salon wall-clock times on both sides of the change to summer time', () => {
@@ -55,7 +55,7 @@ describe('toWeekEvents for all stylists', () => {
   it('keeps every stylist’s sittings, each naming its stylist', () => {
     const all = toWeekEvents(week, null);
     expect(all.map((e) => e.id)).toEqual([`${id(3)}:1`, `${id(3)}:2`, `${id(4)}:1`, `${id(4)}:2`, `${id(6)}:1`, `${id(6)}:2`]);
-    expect(all[0].extendedProps).toMatchObject({ stylistName: 'Ana', chairId: id(7), start: '2027-03-08T16:00:00Z' });
+    expect(all[0]!.extendedProps).toMatchObject({ stylistName: 'Ana', chairId: id(7), start: '2027-03-08T16:00:00Z' });
   });
 });
 

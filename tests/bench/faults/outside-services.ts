@@ -45,7 +45,7 @@ export async function outsideServicesFault(databaseUrl: string, env: Record<stri
       fake.slowNext(10, SLOW_MS);
     }
     const desks = await Promise.all(apps.map((a) => signIn(a.url, 'desk@demo.test', DEMO_PASSWORD)));
-    const services = (await sendJson(apps[0].url, desks[0], 'GET', '/api/services')).body.services as {
+    const services = (await sendJson(apps[0]!.url, desks[0]!, 'GET', '/api/services')).body.services as {
       id: string;
       name: string;
       stepPlan: unknown;
@@ -53,7 +53,7 @@ export async function outsideServicesFault(databaseUrl: string, env: Record<stri
     }[];
     const cut = services.find((s) => !s.needsSkinTest && s.name === 'Cut & finish') ?? services.find((s) => !s.needsSkinTest)!;
     const earliestDate = new Date(Date.now() + 75 * 86_400_000).toISOString().slice(0, 10);
-    const asked = await sendJson(apps[0].url, desks[0], 'POST', '/api/booking-options', {
+    const asked = await sendJson(apps[0]!.url, desks[0]!, 'POST', '/api/booking-options', {
       clientId: clients[0],
       serviceId: cut.id,
       stepPlan: cut.stepPlan,
@@ -68,12 +68,12 @@ export async function outsideServicesFault(databaseUrl: string, env: Record<stri
     for (let i = 0; i < 12 && i < options.length; i++) {
       const n = i % apps.length;
       const started = Date.now();
-      const res = await sendJson(apps[n].url, desks[n], 'POST', '/api/bookings', {
+      const res = await sendJson(apps[n]!.url, desks[n]!, 'POST', '/api/bookings', {
         clientId: clients[(i + 1) % clients.length],
         serviceId: cut.id,
         stepPlan: cut.stepPlan,
-        stylistId: options[i].stylistId,
-        start: options[i].sittings[0].start,
+        stylistId: options[i]!.stylistId,
+        start: options[i]!.sittings[0]!.start,
         idempotencyKey: randomUUID(),
       });
       deskTimes.push(Date.now() - started);
@@ -90,7 +90,7 @@ export async function outsideServicesFault(databaseUrl: string, env: Record<stri
     const consultation = services.find((s) => s.name === 'Colour consultation')!;
     const clientSessions = await Promise.all(apps.map((a) => signIn(a.url, 'client@demo.test', DEMO_PASSWORD)));
     const free = (await (
-      await fetch(`${apps[0].url}/api/public/salons/${demoSalon.slug}/availability?serviceId=${consultation.id}&from=${earliestDate}`, {
+      await fetch(`${apps[0]!.url}/api/public/salons/${demoSalon.slug}/availability?serviceId=${consultation.id}&from=${earliestDate}`, {
         headers: { 'x-forwarded-for': '10.9.0.1' },
       })
     ).json()) as { times: { start: string; stylistId: string }[] };
@@ -98,8 +98,8 @@ export async function outsideServicesFault(databaseUrl: string, env: Record<stri
     const paid: string[] = [];
     for (let i = 0; i < 4; i++) {
       const n = i % apps.length;
-      const slot = free.times[i * 9];
-      const held = await sendJson(apps[n].url, clientSessions[n], 'POST', '/api/public/holds', {
+      const slot = free.times[i * 9]!;
+      const held = await sendJson(apps[n]!.url, clientSessions[n]!, 'POST', '/api/public/holds', {
         salonSlug: demoSalon.slug,
         serviceId: consultation.id,
         stylistId: slot.stylistId,
@@ -110,14 +110,17 @@ export async function outsideServicesFault(databaseUrl: string, env: Record<stri
         continue;
       }
       const { holdId, holdSecret } = held.body;
-      const claim = await sendJson(apps[n].url, clientSessions[n], 'POST', `/api/me/holds/${holdId}/claim`, { secret: holdSecret });
-      await sendJson(apps[n].url, clientSessions[n], 'POST', `/api/me/holds/${holdId}/cautions`, { version: claim.body.cautions.version, secret: holdSecret });
+      const claim = await sendJson(apps[n]!.url, clientSessions[n]!, 'POST', `/api/me/holds/${holdId}/claim`, { secret: holdSecret });
+      await sendJson(apps[n]!.url, clientSessions[n]!, 'POST', `/api/me/holds/${holdId}/cautions`, {
+        version: claim.body.cautions.version,
+        secret: holdSecret,
+      });
       const started = Date.now();
       const pay = { secret: holdSecret, card: { number: FAKE_CARDS.succeeds, expMonth: 12, expYear: 2031, cvc: '123' }, idempotencyKey: randomUUID() };
-      const res = await sendJson(apps[n].url, clientSessions[n], 'POST', `/api/me/holds/${holdId}/pay`, pay);
+      const res = await sendJson(apps[n]!.url, clientSessions[n]!, 'POST', `/api/me/holds/${holdId}/pay`, pay);
       payTimes.push(Date.now() - started);
       // The browser repeats the same request when an answer is slow: the same key, on the other server.
-      const again = await sendJson(apps[1 - n].url, clientSessions[1 - n], 'POST', `/api/me/holds/${holdId}/pay`, pay);
+      const again = await sendJson(apps[1 - n]!.url, clientSessions[1 - n]!, 'POST', `/api/me/holds/${holdId}/pay`, pay);
       if (res.status === 200) paid.push(holdId);
       else failures.push(`a deposit answered ${res.status}`);
       if (again.status >= 500) failures.push(`a repeated deposit request answered ${again.status}`);

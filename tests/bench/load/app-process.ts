@@ -27,7 +27,7 @@ export function startAppProcess(env: Record<string, string>): Promise<AppProcess
       if (!m) return;
       clearTimeout(timer);
       resolve({
-        url: m[1],
+        url: m[1]!,
         child,
         async stop(signal = 'SIGTERM') {
           if (child.exitCode === null && child.signalCode === null) child.kill(signal);

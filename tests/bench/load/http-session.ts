@@ -6,8 +6,8 @@ export interface HttpSession {
 
 function mergeCookies(jar: Map<string, string>, res: Response) {
   for (const c of res.headers.getSetCookie()) {
-    const [pair] = c.split(';');
-    const [name, ...value] = pair.split('=');
+    const [pair = ''] = c.split(';');
+    const [name = '', ...value] = pair.split('=');
     jar.set(name, value.join('='));
   }
 }

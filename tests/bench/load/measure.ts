@@ -29,7 +29,7 @@ export interface LoadSpec {
 
 // No answer within the run counts as infinitely slow, never as 0 ms.
 export const percentile = (sorted: number[], p: number) =>
-  sorted.length ? sorted[Math.min(sorted.length - 1, Math.ceil((p / 100) * sorted.length) - 1)] : Number.POSITIVE_INFINITY;
+  sorted.length ? sorted[Math.min(sorted.length - 1, Math.ceil((p / 100) * sorted.length) - 1)]! : Number.POSITIVE_INFINITY;
 
 /** Runs autocannon against every url at once (connections split between them); latencies per answer. */
 export async function measure(spec: LoadSpec): Promise<Figures> {

@@ -33,7 +33,7 @@ function dayNumber(date: string): number {
 function mark(arr: Uint8Array, cal: { h0: number; length: number }, from: number, to: number, value: 1 | -1 | 'add'): void {
   for (let t = Math.max(from, cal.h0); t < Math.min(to, cal.h0 + cal.length); t++) {
     const i = t - cal.h0;
-    arr[i] = value === 'add' ? arr[i] + 1 : value === 1 ? 1 : 0;
+    arr[i] = value === 'add' ? arr[i]! + 1 : value === 1 ? 1 : 0;
   }
 }
 
@@ -47,8 +47,8 @@ function markHours(arr: Uint8Array, cal: MinuteCalendar, rules: HoursRule[], s: 
       const date = dayToDate(day);
       const [sh, sm] = rule.start.split(':').map(Number);
       const [eh, em] = rule.end.split(':').map(Number);
-      const start = wallToUtc({ ...partsOf(date), hour: sh, minute: sm }, s.timeZone).utc;
-      const end = wallToUtc({ ...partsOf(date), hour: eh, minute: em }, s.timeZone).utc;
+      const start = wallToUtc({ ...partsOf(date), hour: sh!, minute: sm! }, s.timeZone).utc;
+      const end = wallToUtc({ ...partsOf(date), hour: eh!, minute: em! }, s.timeZone).utc;
       mark(arr, cal, start, end, 1);
     }
   }
@@ -100,28 +100,28 @@ export function buildCalendar(s: Scenario): MinuteCalendar {
   };
   const offsets = minuteOffsets(zone, h0, length);
   for (let i = 0; i < length; i++) {
-    const local = h0 + i + offsets[i];
+    const local = h0 + i + offsets[i]!;
     cal.localDay[i] = Math.floor(local / 1440);
     cal.onGrid[i] = local % cal.g === 0 ? 1 : 0;
   }
   markHours(cal.salon, cal, s.salonHours, s);
   s.stylists.forEach((st, si) => {
-    markHours(cal.clock[si], cal, st.hours, s);
-    for (const off of st.timeOff) mark(cal.clock[si], cal, localToUtc(off.start, zone), localToUtc(off.end, zone), -1);
+    markHours(cal.clock[si]!, cal, st.hours, s);
+    for (const off of st.timeOff) mark(cal.clock[si]!, cal, localToUtc(off.start, zone), localToUtc(off.end, zone), -1);
   });
   for (const b of s.bookings) {
     const si = s.stylists.findIndex((st) => st.id === b.stylist);
     const ci = s.chairs.findIndex((c) => c.id === b.chair);
-    const first = localToUtc(b.steps[0].start, zone);
-    const last = localToUtc(b.steps[b.steps.length - 1].end, zone);
-    mark(cal.clients[si], cal, first, last, 'add');
-    mark(cal.chairBusy[ci], cal, first, last, 1);
+    const first = localToUtc(b.steps[0]!.start, zone);
+    const last = localToUtc(b.steps[b.steps.length - 1]!.end, zone);
+    mark(cal.clients[si]!, cal, first, last, 'add');
+    mark(cal.chairBusy[ci]!, cal, first, last, 1);
     for (const step of b.steps) {
       const start = localToUtc(step.start, zone);
       const end = localToUtc(step.end, zone);
-      if (step.kind === 'developing') mark(cal.developing[si], cal, start, end, 1);
-      else mark(cal.hands[si], cal, start, end, 1);
-      if (step.kind === 'basin') mark(cal.basinBusy[s.basins.findIndex((x) => x.id === step.basin)], cal, start, end, 1);
+      if (step.kind === 'developing') mark(cal.developing[si]!, cal, start, end, 1);
+      else mark(cal.hands[si]!, cal, start, end, 1);
+      if (step.kind === 'basin') mark(cal.basinBusy[s.basins.findIndex((x) => x.id === step.basin)]!, cal, start, end, 1);
     }
   }
   return cal;

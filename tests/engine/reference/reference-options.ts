@@ -25,9 +25,9 @@ interface Ctx {
 function minuteOk(c: Ctx, i: number, day: number, chair: number, hands: boolean): boolean {
   const { cal, si } = c;
   if (i < 0 || i >= cal.length || cal.h0 + i < c.earliest) return false;
-  if (cal.localDay[i] !== day || !cal.salon[i] || !cal.clock[si][i]) return false;
-  if (cal.chairBusy[chair][i] || cal.clients[si][i] >= c.max) return false;
-  return !(hands && cal.hands[si][i]);
+  if (cal.localDay[i] !== day || !cal.salon[i] || !cal.clock[si]![i]) return false;
+  if (cal.chairBusy[chair]![i] || cal.clients[si]![i]! >= c.max) return false;
+  return !(hands && cal.hands[si]![i]);
 }
 
 function stepFits(c: Ctx, from: number, minutes: number, day: number, chair: number, kind: RequestStep['kind']): boolean {
@@ -41,7 +41,7 @@ function stepFits(c: Ctx, from: number, minutes: number, day: number, chair: num
 
 function chainFits(c: Ctx, steps: RequestStep[], k: number, at: number, day: number, chair: number): boolean {
   if (k === steps.length) return true;
-  const step = steps[k];
+  const step = steps[k]!;
   const [lo, hi] = step.kind === 'developing' ? [step.minMinutes, step.maxMinutes] : [step.minutes, step.minutes];
   for (let d = lo; d <= hi; d += c.cal.g) {
     if (stepFits(c, at, d, day, chair, step.kind) && chainFits(c, steps, k + 1, at + d, day, chair)) return true;
@@ -50,10 +50,10 @@ function chainFits(c: Ctx, steps: RequestStep[], k: number, at: number, day: num
 }
 
 function sittingFits(c: Ctx, sitting: number, start: number): boolean {
-  const { steps, allowedStarts } = c.s.request!.sittings[sitting];
+  const { steps, allowedStarts } = c.s.request!.sittings[sitting]!;
   const at = c.cal.h0 + start;
   if (allowedStarts && !allowedStarts.some((w) => localToUtc(w.from, c.s.timeZone) <= at && at <= localToUtc(w.to, c.s.timeZone))) return false;
-  const day = c.cal.localDay[start];
+  const day = c.cal.localDay[start]!;
   return c.s.chairs.some((_, chair) => chainFits(c, steps, 0, start, day, chair));
 }
 
@@ -81,13 +81,13 @@ export function referencePairs(s: Scenario): Array<ReferencePair & { day: number
     };
     const laterFit = (k: number, day: number): boolean => {
       if (k + 1 === r.sittings.length) return true;
-      const gap = r.sittings[k + 1].daysAfterPrevious!;
+      const gap = r.sittings[k + 1]!.daysAfterPrevious!;
       for (let d = day + gap.min; d <= day + gap.max; d++) if (fitsFrom(k + 1, d)) return true;
       return false;
     };
     for (let i = 0; i < cal.length; i++) {
-      if (!cal.onGrid[i] || !sittingFits(c, 0, i) || !laterFit(0, cal.localDay[i])) continue;
-      pairs.push({ stylist: st.id, start: cal.h0 + i, day: cal.localDay[i] });
+      if (!cal.onGrid[i] || !sittingFits(c, 0, i) || !laterFit(0, cal.localDay[i]!)) continue;
+      pairs.push({ stylist: st.id, start: cal.h0 + i, day: cal.localDay[i]! });
     }
   });
   return pairs.sort((a, b) => a.start - b.start || (a.stylist < b.stylist ? -1 : a.stylist > b.stylist ? 1 : 0));

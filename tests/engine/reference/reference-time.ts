@@ -14,10 +14,10 @@ export interface LocalParts {
 }
 
 export function partsOf(text: string): LocalParts {
-  const [date, time = '00:00'] = text.split('T');
+  const [date = '', time = '00:00'] = text.split('T');
   const [year, month, day] = date.split('-').map(Number);
   const [hour, minute] = time.split(':').map(Number);
-  return { year, month, day, hour, minute };
+  return { year: year!, month: month!, day: day!, hour: hour!, minute: minute! };
 }
 
 const sameWall = (dt: DateTime, p: LocalParts): boolean =>

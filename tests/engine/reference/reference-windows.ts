@@ -9,11 +9,11 @@ export interface ReferenceWindow {
   fits: string[];
 }
 
-const inWindow = (cal: MinuteCalendar, si: number, i: number): boolean => cal.developing[si][i] === 1 && cal.clock[si][i] === 1 && cal.hands[si][i] === 0;
+const inWindow = (cal: MinuteCalendar, si: number, i: number): boolean => cal.developing[si]![i] === 1 && cal.clock[si]![i] === 1 && cal.hands[si]![i] === 0;
 
 function fitsAt(cal: MinuteCalendar, si: number, max: number, from: number, minutes: number): boolean {
   return cal.chairBusy.some((busy) => {
-    for (let i = from; i < from + minutes; i++) if (busy[i] || cal.clients[si][i] >= max) return false;
+    for (let i = from; i < from + minutes; i++) if (busy[i] || cal.clients[si]![i]! >= max) return false;
     return true;
   });
 }
@@ -50,7 +50,7 @@ export function referenceOccupancy(s: Scenario, cal = buildCalendar(s)) {
   for (let i = 0; i < cal.length; i++) {
     if (!cal.salon[i]) continue;
     open++;
-    for (const busy of cal.chairBusy) held += busy[i];
+    for (const busy of cal.chairBusy) held += busy[i]!;
   }
   const handsOnShare: Record<string, number | null> = {};
   let used = 0;
@@ -59,10 +59,10 @@ export function referenceOccupancy(s: Scenario, cal = buildCalendar(s)) {
     let onClock = 0;
     let hands = 0;
     for (let i = 0; i < cal.length; i++) {
-      if (!cal.clock[si][i]) continue;
+      if (!cal.clock[si]![i]) continue;
       onClock++;
-      if (cal.hands[si][i]) hands++;
-      if (cal.developing[si][i] && cal.hands[si][i]) used++;
+      if (cal.hands[si]![i]) hands++;
+      if (cal.developing[si]![i] && cal.hands[si]![i]) used++;
       if (inWindow(cal, si, i)) free++;
     }
     handsOnShare[st.id] = ratio(hands, onClock);

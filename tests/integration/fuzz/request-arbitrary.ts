@@ -54,7 +54,7 @@ const mutation: fc.Arbitrary<Mutate> = fc.oneof(
   hostileValue.map((value): Mutate => (r) => ({ ...r, body: value })),
   fc
     .record({ key: fc.constantFrom('date', 'from', 'q', 'serviceId', 'limit', 'x'), value: fc.array(hostileText, { minLength: 1, maxLength: 3 }) })
-    .map(({ key, value }): Mutate => (r) => ({ ...r, query: { ...r.query, [key]: value.length === 1 ? value[0] : value } })),
+    .map(({ key, value }): Mutate => (r) => ({ ...r, query: { ...r.query, [key]: value.length === 1 ? value[0]! : value } })),
 );
 
 function fillParams(path: string, values: Record<string, string>) {
@@ -83,12 +83,12 @@ function dropKey(body: unknown, n: number) {
   if (!isObject(body)) return body;
   const keys = Object.keys(body);
   if (!keys.length) return body;
-  const { [keys[n % keys.length]]: _gone, ...rest } = body;
+  const { [keys[n % keys.length]!]: _gone, ...rest } = body;
   return rest;
 }
 
 function replaceKey(body: unknown, n: number, value: unknown) {
   if (!isObject(body)) return body;
   const keys = Object.keys(body);
-  return keys.length ? { ...body, [keys[n % keys.length]]: value } : body;
+  return keys.length ? { ...body, [keys[n % keys.length]!]: value } : body;
 }

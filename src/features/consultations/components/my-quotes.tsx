@@ -23,7 +23,7 @@ export function MyQuotes({ currency }: { currency: string }) {
           <ol className="list-decimal pl-5">
             {q.stepPlan.sittings.map((s, i) => (
               <li key={i}>
-                Up to {formatMinutes(sittingMaxMinutes(q.stepPlan)[i])}
+                Up to {formatMinutes(sittingMaxMinutes(q.stepPlan)[i]!)}
                 {s.daysAfterPrevious && `, ${s.daysAfterPrevious.min}–${s.daysAfterPrevious.max} days after the previous sitting`}:{' '}
                 {s.steps.map((st) => st.label).join(', ')}
               </li>

@@ -32,7 +32,7 @@ export function RepeatForm({ bookingId, sources, targets, target, timeZone }: Pr
   if (options.length === 0 || targets.length === 0) return null;
 
   const onRepeat = () => {
-    const [fromBookingId, seq] = chosen.split('|');
+    const [fromBookingId = '', seq] = chosen.split('|');
     repeat.mutate({ fromBookingId, sitting: Number(seq), intoSitting: into ?? target });
   };
   return (

@@ -23,7 +23,8 @@ export function CautionsStep({ holdId, secret, cautions, focusOnMount, onAccepte
   const submit = (event: React.FormEvent) => {
     event.preventDefault();
     setTried(true);
-    if (missing.length > 0) return document.getElementById(`caution-${missing[0].id}`)?.focus();
+    const firstMissing = missing[0];
+    if (firstMissing) return document.getElementById(`caution-${firstMissing.id}`)?.focus();
     accept.mutate({ version: cautions.version, secret }, { onSuccess: onAccepted });
   };
 

@@ -14,7 +14,7 @@ export function InstantField<T extends FieldValues>({ zone, optional = false, ..
       format={(value) => (typeof value === 'string' && value ? localDateTimeOf(value, zone) : '')}
       parse={(text) => {
         if (text === '' && optional) return null;
-        const [date, time = ''] = text.split('T');
+        const [date = '', time = ''] = text.split('T');
         return localToInstant(date, time, zone) ?? text;
       }}
     />

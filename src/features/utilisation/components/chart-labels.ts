@@ -1,6 +1,8 @@
 import { formatPercent } from '@client/lib/booking-labels';
 
-export const WEEKDAYS = ['', 'Monday', 'Tuesday', 'Wednesday', 'Thursday', 'Friday', 'Saturday', 'Sunday'];
+const WEEKDAYS = ['', 'Monday', 'Tuesday', 'Wednesday', 'Thursday', 'Friday', 'Saturday', 'Sunday'];
+/** The name of an API weekday (1 = Monday … 7 = Sunday); empty for anything else. */
+export const weekdayName = (weekday: number | undefined) => (weekday === undefined ? '' : (WEEKDAYS[weekday] ?? ''));
 export const hourLabel = (hour: number) => `${String(hour).padStart(2, '0')}:00`;
 export const percentText = (share: number | null | undefined) => formatPercent(share ?? null);
 /** A share as a rounded percentage number for charts (null stays a gap). */

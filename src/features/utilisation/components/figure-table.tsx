@@ -48,7 +48,7 @@ export function FigureTable<T>({ caption, columns, rows, filename }: Props<T>) {
     );
   return (
     <div className="flex flex-col gap-2">
-      <TableGrid table={table} label={caption} caption={caption} numeric={(i) => Boolean(columns[i].numeric)} />
+      <TableGrid table={table} label={caption} caption={caption} numeric={(i) => Boolean(columns[i]?.numeric)} />
       {rows.length === 0 && <p>Nothing to show for this period.</p>}
       <div className="print:hidden">
         <Button type="button" variant="secondary" onClick={download}>

@@ -2,7 +2,7 @@ import { Scatter, ScatterChart, XAxis, YAxis } from 'recharts';
 import type { HeatCell } from '@shared/schemas/utilisation.schemas';
 import { SectionCard } from '@client/components/ui/section-card';
 import { FigureTable, type FigureColumn } from './figure-table';
-import { hourLabel, percentText, WEEKDAYS } from './chart-labels';
+import { hourLabel, percentText, weekdayName } from './chart-labels';
 
 type Props = { cells: HeatCell[]; filename: string };
 
@@ -10,7 +10,7 @@ const CELL = 46;
 const MARGIN = { top: 10, right: 10, bottom: 30, left: 90 };
 
 const columns: FigureColumn<HeatCell>[] = [
-  { id: 'weekday', header: 'Weekday', value: (c) => WEEKDAYS[c.weekday] },
+  { id: 'weekday', header: 'Weekday', value: (c) => weekdayName(c.weekday) },
   { id: 'hour', header: 'Hour', value: (c) => hourLabel(c.hour) },
   { id: 'occupancy', header: 'Chair occupancy', value: (c) => c.chairOccupancy, format: (c) => percentText(c.chairOccupancy), numeric: true },
   { id: 'held', header: 'Chair minutes with a client', value: (c) => c.chairHeldMinutes, numeric: true },
@@ -43,7 +43,7 @@ export function OccupancyHeatMap({ cells, filename }: Props) {
               dataKey="row"
               domain={[-0.5, days.length - 0.5]}
               ticks={days.map((_, i) => i)}
-              tickFormatter={(i: number) => WEEKDAYS[days[i]]}
+              tickFormatter={(i: number) => weekdayName(days[i])}
               reversed
               interval={0}
             />

@@ -34,6 +34,8 @@ export function MoveSittingForm({ booking, timeZone, stylists }: Props) {
   const ask = { sitting: seq, stylistId: stylistId || undefined, from: from || undefined };
   const times = useQuery(bookingQueries.moveTimes(booking.id, ask));
   const sitting = booking.sittings.find((s) => s.seq === seq) ?? booking.sittings[0];
+  // A booking without sittings has nothing to move (every hook is above this line).
+  if (!sitting) return null;
   const oneSitting = booking.sittings.length === 1;
   const others = stylists.filter((s) => s.id !== booking.stylist.id);
   // A new question starts a new pick: an old pick may not be free for the new sitting or stylist.
