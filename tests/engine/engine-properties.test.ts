@@ -114,8 +114,9 @@ describe('allowed starts against the brute-force reference', () => {
       }),
       { numRuns: Number(process.env.ENGINE_RUNS ?? 300) },
     );
-    // Guard against a generator whose limits always leave nothing.
-    expect(limited).toBeGreaterThan(30);
+    // Guard against a generator whose limits always leave nothing. About one run in eight is limited and has
+    // pairs; the bar sits well below that, so a fair random draw never trips it.
+    expect(limited).toBeGreaterThan(10);
   }, 120_000);
 });
 
