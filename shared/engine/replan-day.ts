@@ -59,8 +59,10 @@ export interface ReplanDay {
   cal: DayCalendars;
   ask: ReplanAsk;
   now: number;
-  /** Every booking that touches the day, the re-planned stylist's in-progress ones following their actuals. */
+  /** Every booking that touches the day or the next, the re-planned stylist's in-progress ones following their actuals. */
   sittings: DaySitting[];
+  /** The local day of now, [start, end) in UTC minutes. */
+  day: [number, number];
   /** Actual starts and ends per step of each in-progress sitting. */
   actuals: Map<string, Actuals>;
 }
@@ -105,10 +107,13 @@ function calendarsOf(s: Scenario): DayCalendars {
   };
 }
 
-/** The scenario's bookings that touch the local date (text comparison: local date-times sort as text). */
-function bookingsOn(s: Scenario, date: string): Array<{ booking: Booking; index: number }> {
+/**
+ * The scenario's bookings that touch the local date or the next one (a sitting pushed past midnight meets the next
+ * day's first clients). Text comparison: local date-times sort as text.
+ */
+function bookingsNear(s: Scenario, date: string): Array<{ booking: Booking; index: number }> {
   const from = `${date}T00:00`;
-  const to = `${nextDate(date)}T00:00`;
+  const to = `${nextDate(nextDate(date))}T00:00`;
   const out: Array<{ booking: Booking; index: number }> = [];
   s.bookings.forEach((booking, index) => {
     if (booking.steps[0].start < to && booking.steps[booking.steps.length - 1].end > from) out.push({ booking, index });
@@ -173,9 +178,10 @@ export function readDay(s: Scenario, askInput: unknown): ReplanDay {
   const cal = calendarsOf(s);
   if (!cal.stylistOrder.includes(ask.stylist)) throw new ScenarioError('ask.stylist', `no stylist with id "${ask.stylist}"`);
   const now = instant(cal.ctx, ask.now, 'ask.now');
-  const day = parseLocalDate(ask.now.slice(0, 10))!;
-  if (day < cal.ctx.fromDay || day >= cal.ctx.toDay) throw new ScenarioError('ask.now', 'is not inside the horizon');
-  const found = bookingsOn(s, ask.now.slice(0, 10));
+  const date = parseLocalDate(ask.now.slice(0, 10))!;
+  if (date < cal.ctx.fromDay || date >= cal.ctx.toDay) throw new ScenarioError('ask.now', 'is not inside the horizon');
+  const day: [number, number] = [cal.ctx.dayStarts[date - cal.ctx.fromDay], cal.ctx.dayStarts[date - cal.ctx.fromDay + 1]];
+  const found = bookingsNear(s, ask.now.slice(0, 10));
   const sittings = found.map(({ booking, index }) => asBooked(cal, booking, index));
   const byId = new Map(sittings.map((x) => [x.id, x]));
   const actuals = new Map<string, Actuals>();
@@ -184,7 +190,9 @@ export function readDay(s: Scenario, askInput: unknown): ReplanDay {
   ask.sittings.forEach((entry, i) => {
     const at = `ask.sittings[${i}]`;
     const sitting = byId.get(entry.booking);
-    if (!sitting) throw new ScenarioError(`${at}.booking`, `no booking "${entry.booking}" on ${ask.now.slice(0, 10)}`);
+    if (!sitting || sitting.bookedTimes[0] >= day[1] || sitting.bookedTimes[sitting.bookedTimes.length - 1] <= day[0]) {
+      throw new ScenarioError(`${at}.booking`, `no booking "${entry.booking}" on ${ask.now.slice(0, 10)}`);
+    }
     if (given.has(entry.booking)) throw new ScenarioError(`${at}.booking`, `"${entry.booking}" is given twice`);
     given.add(entry.booking);
     if (entry.skill !== undefined) sitting.skill = entry.skill;
@@ -230,5 +238,5 @@ export function readDay(s: Scenario, askInput: unknown): ReplanDay {
     sitting.inProgress = true;
     sitting.steps = chainSteps(sitting, now, cal.grid, { starts, ends });
   });
-  return { cal, ask, now, sittings, actuals };
+  return { cal, ask, now, sittings, day, actuals };
 }

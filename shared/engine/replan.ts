@@ -36,7 +36,7 @@ export function replan(scenario: Scenario, askInput: unknown): ReplanAnswer {
     };
   };
   const mine = day.sittings
-    .filter((x) => x.stylist === day.ask.stylist)
+    .filter((x) => x.stylist === day.ask.stylist && x.bookedTimes[0] < day.day[1] && x.bookedTimes[x.bookedTimes.length - 1] > day.day[0])
     .sort((a, b) => a.bookedTimes[0] - b.bookedTimes[0] || (a.id < b.id ? -1 : a.id > b.id ? 1 : 0));
   return {
     stylist: day.ask.stylist,
