@@ -60,10 +60,10 @@ export function dayConflicts(cal: DayCalendars, sittings: DaySitting[], subjects
     }
     return set;
   };
-  const done = new Set<string>();
-  for (const c of sittings) {
-    if (!subjects.has(c.id)) continue;
-    const span = spanOf(c);
+  const spans = sittings.map(spanOf);
+  sittings.forEach((c, ci) => {
+    if (!subjects.has(c.id)) return;
+    const span = spans[ci];
     const cLive = c.steps.some(live);
     if (cLive) {
       add('hours', c.id, undefined, subtract(span, cal.clock.get(c.stylist) ?? []));
@@ -72,14 +72,13 @@ export function dayConflicts(cal: DayCalendars, sittings: DaySitting[], subjects
       for (const step of c.steps)
         if (step.basin && live(step)) add('basin', c.id, undefined, intersect([step.start, step.end], cal.closedBasins.get(step.basin) ?? []));
     }
-    for (const x of sittings) {
-      if (x.id === c.id || done.has(`${x.id}|${c.id}`)) continue;
-      done.add(`${c.id}|${x.id}`);
-      const xLive = x.steps.some(live);
-      if (!cLive && !xLive) continue;
+    sittings.forEach((x, xi) => {
+      const xSpan = spans[xi];
+      // Every rule needs the two sittings at once; a pair of two subjects is seen once.
+      if (xi === ci || xSpan[0] >= span[1] || span[0] >= xSpan[1] || (xi < ci && subjects.has(x.id))) return;
+      if (!cLive && !x.steps.some(live)) return;
       // Name the one that suffers: the unchanged side, or of two changed ones the later booked.
       const [named, other] = !subjects.has(x.id) || later(x, c) ? [x.id, c.id] : [c.id, x.id];
-      const xSpan = spanOf(x);
       if (x.stylist === c.stylist) {
         for (const a of c.steps)
           for (const b of x.steps) if (hands(a) && hands(b) && (live(a) || live(b))) add('hands', named, other, intersect([a.start, a.end], [b.start, b.end]));
@@ -89,8 +88,8 @@ export function dayConflicts(cal: DayCalendars, sittings: DaySitting[], subjects
       for (const a of c.steps)
         for (const b of x.steps)
           if (a.basin && a.basin === b.basin && (live(a) || live(b))) add('basin', named, other, intersect([a.start, a.end], [b.start, b.end]));
-    }
-  }
+    });
+  });
   return [...found.values()].sort(
     (a, b) =>
       a.start - b.start || compare(a.booking, b.booking) || KIND_ORDER.indexOf(a.kind) - KIND_ORDER.indexOf(b.kind) || compare(a.with ?? '', b.with ?? ''),

@@ -4,7 +4,7 @@
  * The order is the salon's least disruption first: the running client's developing time, then another chair or
  * basin, another stylist, a late start within the salon's limit, and last another day.
  */
-import { buildIndex } from './resource-index';
+import { buildIndex, type EngineIndex } from './resource-index';
 import { conflictKey, dayConflicts, type DayConflict } from './day-conflicts';
 import { freeStylists } from './free-stylists';
 import { chainSteps, type DaySitting, type ReplanDay } from './replan-day';
@@ -45,6 +45,7 @@ function changed(x: DaySitting, fix: DayFix): DaySitting {
 export class FixFinder {
   private readonly baseline = new Map<string, Map<string, DayConflict>>();
   private readonly nowOnGrid: number;
+  private index: EngineIndex | undefined;
 
   constructor(
     private readonly scenario: Scenario,
@@ -138,12 +139,14 @@ export class FixFinder {
     );
   }
 
-  /** Stylists with the skill free for the whole sitting at its booked times (free-stylists.ts), other than its own. */
+  /**
+   * Stylists with the skill free for the whole sitting at its booked times (free-stylists.ts), other than its own.
+   * One index of the day serves every sitting: a sitting's own presence there only marks its own stylist busy.
+   */
   private handOvers(x: DaySitting): DayFix[] {
     if (x.skill === undefined) return [];
-    const others = this.day.sittings.filter((y) => y.id !== x.id).map((y) => y.source);
-    const idx = buildIndex({ ...this.scenario, bookings: others });
-    return freeStylists(idx, x.skill, [x.source])
+    this.index ??= buildIndex({ ...this.scenario, bookings: this.day.sittings.map((y) => y.source) });
+    return freeStylists(this.index, x.skill, [x.source])
       .filter((stylist) => stylist !== x.stylist)
       .map((stylist): DayFix => ({ kind: 'hand_over', booking: x.id, stylist }));
   }
