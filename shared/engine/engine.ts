@@ -17,9 +17,15 @@ import { buildIndex } from './resource-index';
 import { ScenarioError, fromZodError } from './scenario-error';
 import { ScenarioSchema, type Booking, type Scenario } from './scenario.schemas';
 import { freeStylists } from './free-stylists';
+import { replan } from './replan';
+import type { ReplanAnswer } from './replan-answer';
+import type { ReplanAskInput } from './replan.schemas';
 import { listWindows } from './windows';
 
 export type * from './answers';
+export type * from './replan-answer';
+export type { ReplanAsk, ReplanAskInput } from './replan.schemas';
+export { ReplanAskSchema } from './replan.schemas';
 export type { Scenario, ScenarioInput, Booking, BookedStep, ServiceRequest, RequestStep, HoursRule, StartStretch } from './scenario.schemas';
 export { ScenarioSchema } from './scenario.schemas';
 export { ScenarioError } from './scenario-error';
@@ -112,4 +118,12 @@ export function breakDownOccupancy(scenario: Scenario, cuts: string[]): Occupanc
 /** Stylists who could take over the given sittings as they stand (see free-stylists.ts). */
 export function findFreeStylists(scenario: Scenario, skill: string, sittings: Booking[]): string[] {
   return freeStylists(buildIndex(scenario), skill, sittings);
+}
+
+/**
+ * Re-plans the rest of one stylist's day from the actual step times (see replan.ts): the day as it now runs, the
+ * conflicts with bookings kept where they are, and feasible fixes for each, best first.
+ */
+export function replanDay(scenario: Scenario, ask: ReplanAskInput): ReplanAnswer {
+  return replan(scenario, ask);
 }

@@ -14,8 +14,18 @@ type Range = [number, number];
 const overlaps = (a: Range, b: Range): boolean => a[0] < b[1] && b[0] < a[1];
 const dayOf = (date: string): number => Date.parse(`${date}T00:00:00Z`) / 86_400_000;
 
-/** Hours of one local date as UTC ranges. */
+const hoursMemo = new WeakMap<HoursRule[], Map<number, Range[]>>();
+
+/** Hours of one local date as UTC ranges (memoised per rules and date: the day validator asks often). */
 function hoursOn(s: Scenario, rules: HoursRule[], day: number): Range[] {
+  let days = hoursMemo.get(rules);
+  if (!days) hoursMemo.set(rules, (days = new Map()));
+  let found = days.get(day);
+  if (!found) days.set(day, (found = computeHoursOn(s, rules, day)));
+  return found;
+}
+
+function computeHoursOn(s: Scenario, rules: HoursRule[], day: number): Range[] {
   const from = dayOf(s.horizon.from);
   const to = dayOf(s.horizon.to);
   const zc = zoneClock(s.timeZone, from, to);
@@ -124,4 +134,109 @@ export function validateOption(s: Scenario, option: Option): string[] {
     previousDay = day;
   });
   return errors;
+}
+
+/** A sitting of a day as the day validator reads it: UTC minutes, and which steps are history already. */
+export interface DaySittingCheck {
+  id: string;
+  stylist: string;
+  chair: string;
+  /** Booked start, for naming the later of two changed sittings. */
+  bookedStart: number;
+  steps: Array<{ kind: string; start: number; end: number; basin?: string; finished: boolean }>;
+}
+
+export interface DayViolation {
+  kind: 'hands' | 'clients' | 'chair' | 'basin' | 'hours' | 'closing';
+  booking: string;
+  with?: string;
+  minutes: number;
+}
+
+/** A scenario booking as the day validator reads it (nothing finished). */
+export function bookedForCheck(s: Scenario, b: Scenario['bookings'][number]): DaySittingCheck {
+  const steps = b.steps.map((x) => ({
+    kind: x.kind,
+    start: localToUtc(x.start, s.timeZone),
+    end: localToUtc(x.end, s.timeZone),
+    basin: x.kind === 'basin' ? x.basin : undefined,
+    finished: false,
+  }));
+  return { id: b.id, stylist: b.stylist, chair: b.chair, bookedStart: steps[0].start, steps };
+}
+
+/**
+ * The contract's placement rules broken by the `subjects` among a day's sittings, minute by minute: rule 4 (hands),
+ * 5 (clients at once), 2 (chair), 3 (basin) against every other sitting, and 6 (working hours, time off, salon hours,
+ * units out of service). Minutes where both sides are finished are history and not counted. Written apart from
+ * the engine's interval code, so a shared mistake is unlikely.
+ */
+export function validateDay(s: Scenario, sittings: DaySittingCheck[], subjects: ReadonlySet<string>): DayViolation[] {
+  const zone = s.timeZone;
+  const out = new Map<string, DayViolation>();
+  const count = (kind: DayViolation['kind'], booking: string, other: string | undefined, minutes: number) => {
+    if (minutes === 0) return;
+    const key = `${kind}|${booking}|${other ?? ''}`;
+    const v = out.get(key) ?? { kind, booking, ...(other ? { with: other } : {}), minutes: 0 };
+    v.minutes += minutes;
+    out.set(key, v);
+  };
+  const period = (p: { start: string; end: string }): Range => [localToUtc(p.start, zone), localToUtc(p.end, zone)];
+  const within = (t: number, ranges: Range[]) => ranges.some(([a, b]) => a <= t && t < b);
+  const span = (x: DaySittingCheck): Range => [x.steps[0].start, x.steps[x.steps.length - 1].end];
+  const live = (x: DaySittingCheck) => x.steps.some((step) => !step.finished);
+  const stepAt = (x: DaySittingCheck, t: number) => x.steps.find((step) => step.start <= t && t < step.end);
+  const daysOf = (r: Range) => [...new Set([localDay(r[0], zone) - 1, localDay(r[0], zone), localDay(r[1] - 1, zone)])];
+  const byStylist = (id: string) => s.stylists.find((x) => x.id === id)!;
+  // Clients of a stylist in chairs at each minute, counted once per call.
+  const present = new Map<string, Map<number, number>>();
+  const presentAt = (stylist: string, t: number) => {
+    let counts = present.get(stylist);
+    if (!counts) {
+      counts = new Map();
+      for (const y of sittings.filter((z) => z.stylist === stylist)) for (let m = span(y)[0]; m < span(y)[1]; m++) counts.set(m, (counts.get(m) ?? 0) + 1);
+      present.set(stylist, counts);
+    }
+    return counts.get(t) ?? 0;
+  };
+
+  for (const c of sittings.filter((x) => subjects.has(x.id))) {
+    const [a, b] = span(c);
+    const st = byStylist(c.stylist);
+    if (live(c)) {
+      const hours = daysOf([a, b]).flatMap((d) => hoursOn(s, st.hours, d));
+      const salon = daysOf([a, b]).flatMap((d) => hoursOn(s, s.salonHours, d));
+      const off = st.timeOff.map(period);
+      const chairOut = (s.chairs.find((x) => x.id === c.chair)?.outOfService ?? []).map(period);
+      for (let t = a; t < b; t++) {
+        if (!within(t, hours) || within(t, off)) count('hours', c.id, undefined, 1);
+        if (!within(t, salon)) count('closing', c.id, undefined, 1);
+        if (within(t, chairOut)) count('chair', c.id, undefined, 1);
+        const step = stepAt(c, t);
+        const basinOut = step?.basin ? (s.basins.find((x) => x.id === step.basin)?.outOfService ?? []).map(period) : [];
+        if (step && !step.finished && within(t, basinOut)) count('basin', c.id, undefined, 1);
+      }
+    }
+    for (const x of sittings) {
+      if (x.id === c.id || (subjects.has(x.id) && sittings.indexOf(x) < sittings.indexOf(c))) continue;
+      if (!live(c) && !live(x)) continue;
+      const xLater = x.bookedStart > c.bookedStart || (x.bookedStart === c.bookedStart && x.id > c.id);
+      const [named, other] = !subjects.has(x.id) || xLater ? [x.id, c.id] : [c.id, x.id];
+      const [xa, xb] = span(x);
+      if (xa >= b || a >= xb) continue;
+      for (let t = Math.min(a, xa); t < Math.max(b, xb); t++) {
+        const p = stepAt(c, t);
+        const q = stepAt(x, t);
+        const inBoth = t >= a && t < b && t >= xa && t < xb;
+        const eitherLive = p && q && (!p.finished || !q.finished);
+        if (x.stylist === c.stylist) {
+          if (eitherLive && p.kind !== 'developing' && q.kind !== 'developing') count('hands', named, other, 1);
+          if (inBoth && presentAt(c.stylist, t) > st.maxClientsAtOnce) count('clients', named, other, 1);
+        }
+        if (inBoth && x.chair === c.chair) count('chair', named, other, 1);
+        if (eitherLive && p.basin && p.basin === q.basin) count('basin', named, other, 1);
+      }
+    }
+  }
+  return [...out.values()];
 }
