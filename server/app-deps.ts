@@ -12,6 +12,7 @@ import type { PaymentsFake } from './fakes/payments-fake';
 import type { JobQueue } from './jobs/job-queue';
 import type { Storage } from './storage/storage';
 import type { ReadCache } from './lib/read-cache';
+import type { LiveHub } from './features/live-events';
 
 /** What feature routes are given; built once in createApp. */
 export interface AppDeps {
@@ -31,4 +32,6 @@ export interface AppDeps {
   storage: Storage;
   /** Calendar reads and free times, serialised, per salon book version (one per app server). */
   readCache: ReadCache;
+  /** This app server's open live streams and its one LISTEN connection. */
+  liveHub: LiveHub;
 }

@@ -40,13 +40,14 @@ import { registerConsultationRoutes } from './features/consultations/consultatio
 import { registerStrandTestRoutes } from './features/strand-tests/strand-tests.routes';
 import { registerQuotePriceRoutes } from './features/quote-prices/quote-prices.routes';
 import { registerMessageRoutes } from './features/messages/messages.routes';
+import { createLiveHub, registerLiveEventRoutes } from './features/live-events';
 import { createDiskStorage } from './storage/disk-storage';
 import { createReadCache } from './lib/read-cache';
 
 const clientDist = path.join(path.dirname(fileURLToPath(import.meta.url)), '..', 'dist', 'client');
 
 /** Builds the Express app without listening, so tests mount it in-process. */
-export function createApp(deps: Omit<AppDeps, 'table' | 'storage' | 'readCache'> & { storage?: AppDeps['storage'] }) {
+export function createApp(deps: Omit<AppDeps, 'table' | 'storage' | 'readCache' | 'liveHub'> & { storage?: AppDeps['storage'] }) {
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', 'loopback');
@@ -65,7 +66,8 @@ export function createApp(deps: Omit<AppDeps, 'table' | 'storage' | 'readCache'>
   // Answers are checked against their contracts everywhere but production, where a slip costs a parse per answer.
   const table: RouteTable = { router: Router(), registry: new OpenAPIRegistry(), records: [], checkResponses: deps.config.mode !== 'production' };
   installCsrf(app, deps.config, table);
-  const full: AppDeps = { ...deps, storage: deps.storage ?? createDiskStorage(deps.config.uploadsDir), readCache: createReadCache(), table };
+  const liveHub = createLiveHub({ databaseUrl: deps.config.databaseUrl, maxStreams: deps.config.maxLiveStreams });
+  const full: AppDeps = { ...deps, storage: deps.storage ?? createDiskStorage(deps.config.uploadsDir), readCache: createReadCache(), table, liveHub };
   for (const register of [
     registerHealthRoutes,
     registerSessionRoutes,
@@ -95,6 +97,7 @@ export function createApp(deps: Omit<AppDeps, 'table' | 'storage' | 'readCache'>
     registerStrandTestRoutes,
     registerQuotePriceRoutes,
     registerMessageRoutes,
+    registerLiveEventRoutes,
   ]) {
     register(full);
   }
@@ -115,6 +118,7 @@ export function createApp(deps: Omit<AppDeps, 'table' | 'storage' | 'readCache'>
     app.get('/{*splat}', (_req, res) => res.sendFile(path.join(clientDist, 'index.html')));
   }
   app.use(errorHandler);
-  // Named apiRoutes: Express's own typings already declare a loosely typed `routes`.
-  return Object.assign(app, { apiRoutes: table.records });
+  // Named apiRoutes: Express's own typings already declare a loosely typed `routes`. shutdown() lets go of what the
+  // app holds open besides the pool it was given (the live streams' LISTEN connection); liveStreams() counts them.
+  return Object.assign(app, { apiRoutes: table.records, shutdown: () => liveHub.stop(), liveStreams: () => liveHub.size() });
 }

@@ -38,6 +38,8 @@ const ConfigSchema = z.object({
     .min(1)
     .max(90 * 24)
     .default(7 * 24),
+  /** Live update streams (GET /api/events) one app server holds open at most; more are answered 503 and retry. */
+  LIVE_STREAMS_MAX: z.coerce.number().int().min(1).max(100_000).default(2_000),
 });
 
 export interface Config {
@@ -62,6 +64,8 @@ export interface Config {
   useFakes: boolean;
   /** Where uploaded photos are kept: outside the web root, served only through the API. */
   uploadsDir: string;
+  /** Live update streams one app server holds open at most. */
+  maxLiveStreams: number;
 }
 
 /** Parsed once at boot, so a bad environment fails at start-up, not at the first request. */
@@ -93,5 +97,6 @@ export function loadConfig(env: Record<string, string | undefined> = process.env
     useFakes: parsed.DWELL_MODE !== 'production',
     // Test runs never write into the checkout's .data/, even when a suite forgets to pass a folder.
     uploadsDir: path.resolve(parsed.UPLOADS_DIR ?? (parsed.DWELL_MODE === 'test' ? path.join(tmpdir(), 'dwell-test-uploads') : '.data/uploads')),
+    maxLiveStreams: parsed.LIVE_STREAMS_MAX,
   };
 }

@@ -35,6 +35,7 @@ export async function startServer(config: Config = loadConfig()): Promise<Runnin
       const closed = new Promise<void>((resolve) => server.close(() => resolve()));
       server.closeAllConnections();
       await closed;
+      await app.shutdown();
       await jobs.stop();
       await outside.close();
       await db.destroy();

@@ -60,7 +60,7 @@ export function apiRoute<const E extends Endpoint>(
       res,
     } as RouteContext<E>;
     const result = await handler(ctx);
-    // A handler that answered by itself (image bytes) is left alone.
+    // A handler that answered by itself (image bytes, an event stream it keeps open) is left alone.
     if (res.headersSent) return;
     // A handler may pick another status itself (health answers 503 with a body); otherwise the declared one.
     const chosen = res.statusCode !== 200 ? res.statusCode : status;
@@ -89,6 +89,11 @@ function sendJsonText(req: Request, res: Response, json: JsonText) {
   else res.send(json.body);
 }
 
+/** How the success answer is documented: JSON, or an event stream whose events carry the schema as their data. */
+function answer(spec: Endpoint, schema: ZodType) {
+  return { content: { [spec.answers === 'event-stream' ? 'text/event-stream' : 'application/json']: { schema } } };
+}
+
 function register(registry: OpenAPIRegistry, spec: Endpoint, status: number) {
   const json = (schema: ZodType) => ({ content: { 'application/json': { schema } } });
   const errors = Object.fromEntries(
@@ -105,7 +110,7 @@ function register(registry: OpenAPIRegistry, spec: Endpoint, status: number) {
       ...(spec.params && { params: spec.params as never }),
     },
     responses: {
-      [status]: { description: 'Success', ...(spec.response && status !== 204 ? json(spec.response) : {}) },
+      [status]: { description: 'Success', ...(spec.response && status !== 204 ? answer(spec, spec.response) : {}) },
       ...errors,
     },
   });

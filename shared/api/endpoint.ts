@@ -30,10 +30,13 @@ export interface Endpoint {
   body?: ZodType;
   /** How the body arrives: JSON by default; `form` for providers' webhooks; `multipart` for uploads. */
   bodyType?: 'json' | 'form' | 'multipart';
-  /** The JSON answer; absent when the answer is empty (204/202) or a file (`answers: 'file'`). */
+  /** The JSON answer (for an event stream, each event's data); absent when the answer is empty (204/202) or a file. */
   response?: ZodType;
-  /** `file` when the answer is bytes (an image, a CSV, an .ics) rather than JSON. */
-  answers?: 'json' | 'file';
+  /**
+   * `file` when the answer is bytes (an image, a CSV, an .ics) rather than JSON; `event-stream` when it is a
+   * `text/event-stream` that stays open (server-sent events), its handler writing the response itself.
+   */
+  answers?: 'json' | 'file' | 'event-stream';
   /** Status on success; 204 answers no body. */
   status?: 200 | 201 | 202 | 204;
   /** For `multipart` bodies: the field that carries the files and the limits on them. */

@@ -20,6 +20,7 @@ export const ERROR_CODES = [
   'HOLD_OPEN',
   'RATE_LIMITED',
   'DB_UNAVAILABLE',
+  'BUSY',
   'INTERNAL',
 ] as const;
 

@@ -3,8 +3,9 @@ import { Outlet, ScrollRestoration, useNavigation } from 'react-router-dom';
 import { sessionQueries } from '../features/auth/api/session-queries';
 import { SiteHeader } from './site-header';
 import { StaffFooter } from './staff-footer';
+import { LiveUpdatesBanner } from './live-updates-banner';
 
-/** The frame of every page: skip link, header, main, and the cautions footer for staff. */
+/** The frame of every page: skip link, header, main, and for staff live updates and the cautions footer. */
 export function RootLayout() {
   const { data: user } = useQuery(sessionQueries.current());
   const navigating = useNavigation().state === 'loading';
@@ -15,6 +16,8 @@ export function RootLayout() {
       </a>
       <div aria-hidden="true" className={`h-1 bg-oxide transition-opacity ${navigating ? 'animate-pulse opacity-100' : 'opacity-0'}`} />
       <SiteHeader user={user ?? null} />
+      {/* Keyed by the person: a new sign-in starts its own stream. */}
+      {user && user.role !== 'client' && <LiveUpdatesBanner key={user.id} />}
       <main id="main" tabIndex={-1} aria-busy={navigating} className="mx-auto w-full max-w-7xl flex-1 px-4 py-6 sm:px-6">
         <Outlet />
       </main>

@@ -5,6 +5,7 @@ import { consultationsApi } from '@shared/api/consultations.api';
 import type { Answer, Endpoint } from '@shared/api/endpoint';
 import { followUpRulesApi } from '@shared/api/follow-up-rules.api';
 import { hairHistoryApi } from '@shared/api/hair-history.api';
+import { mailboxApi } from '@shared/api/mailbox.api';
 import { messagesApi } from '@shared/api/messages.api';
 import { mixLogsApi } from '@shared/api/mix-logs.api';
 import { onlineBookingApi } from '@shared/api/online-booking.api';
@@ -16,6 +17,7 @@ import { offersApi, windowsApi } from '@shared/api/windows.api';
 import type { SessionUser } from '@shared/schemas/auth.schemas';
 import type { BookingView } from '@shared/schemas/booking-view.schemas';
 import type { MyPreferences } from '@shared/schemas/contact.schemas';
+import type { BookChangedEvent } from '@shared/schemas/live-events.schemas';
 import type { Hold } from '@shared/schemas/online-booking.schemas';
 import { apiKey } from './api-client';
 
@@ -81,6 +83,40 @@ export const holdReleased = (queryClient: QueryClient): Promise<unknown> =>
 
 /** A write found the hold lapsed: its cached state is read again so every step sees it. */
 export const holdLapsed = (queryClient: QueryClient, holdId: string): Promise<unknown> => refreshRecord(queryClient, [onlineBookingApi.hold], holdId);
+
+/** Views of one date (`?date=`; today when it is left out). */
+const DAY_VIEWS = [bookingsApi.deskDay, bookingsApi.stylistDay, windowsApi.list];
+/** A booking's own page and what it opens. */
+const BOOKING_PAGES = [bookingsApi.one, bookingsApi.history, bookingsApi.cancelTerms];
+/** What a change of the book may send or queue: the send log and the Outbox of the local fakes. */
+const SENT = [messagesApi.sendLog, mailboxApi.mail, mailboxApi.sms];
+
+/**
+ * Someone else changed the book (a live update, src/lib/live-book.ts), or this screen was out of touch and catches
+ * up (`everyDate`): the day views of the dates it names (and today's), the weeks that hold one of them, the pages of
+ * the bookings it names, free times to book or move to, and the send log. A change that reaches every date refreshes
+ * all of these. Only screens on show fetch again; the rest are read afresh when next opened.
+ */
+export function bookChangedElsewhere(queryClient: QueryClient, change: BookChangedEvent): Promise<unknown> {
+  const freeTimes = [bookingsApi.options, bookingsApi.moveTimes];
+  if (change.everyDate) return refreshEndpoints(queryClient, [...BOOK_VIEWS, ...DAY_VIEWS, ...BOOKING_PAGES, ...freeTimes, ...SENT]);
+  const dayPaths = new Set<string>(DAY_VIEWS.map((e) => e.path));
+  const touches = (date: string | undefined) => date === undefined || change.dates.includes(date);
+  return Promise.all([
+    queryClient.invalidateQueries({
+      predicate: ({ queryKey, state }) => {
+        const [root, path, , query] = queryKey as readonly [unknown, string, unknown, { date?: string } | undefined];
+        if (root !== 'api') return false;
+        if (dayPaths.has(path)) return touches(query?.date);
+        if (path !== bookingsApi.deskWeek.path) return false;
+        const week = state.data as { from: string; to: string } | undefined;
+        return !week || change.dates.some((date) => date >= week.from && date < week.to);
+      },
+    }),
+    ...change.bookingIds.map((id) => refreshRecord(queryClient, BOOKING_PAGES, id)),
+    refreshEndpoints(queryClient, [...freeTimes, ...SENT]),
+  ]);
+}
 
 /* Hands-free time: windows, the standby list and window offers. */
 

@@ -46,6 +46,7 @@ export async function startTestApp(env: Record<string, string> = {}): Promise<Te
     outside,
     uploadsDir,
     async close() {
+      await app.shutdown();
       await jobs.stop();
       await outside.close();
       await testDb.drop();

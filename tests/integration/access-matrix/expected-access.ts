@@ -84,6 +84,7 @@ export const expectedAccess: Record<string, Expectation> = {
   'GET /api/messages': { allow: DESK },
   'GET /api/dev/mailbox': { allow: DESK },
   'GET /api/dev/sms': { allow: DESK },
+  'GET /api/events': { allow: STAFF },
   'GET /api/me/hair-history': { allow: ['client'] },
   'PUT /api/me/hair-history': { allow: ['client'] },
   'GET /api/clients/{id}/hair-history': { allow: CLIENT_OR_STAFF, own: true },

@@ -15,6 +15,7 @@ export interface DocumentedRoute {
 export interface OpenApiOperation {
   parameters?: { name: string; in: 'path' | 'query'; required?: boolean; schema: Record<string, unknown> }[];
   requestBody?: { content: Record<string, { schema: Record<string, unknown> }> };
+  responses?: Record<string, { content?: Record<string, unknown> }>;
 }
 
 /** Every operation in the app's own OpenAPI document: the list the security suites walk. */
