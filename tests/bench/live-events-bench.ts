@@ -50,7 +50,8 @@ async function main(): Promise<number> {
     const secret = randomUUID() + randomUUID(); // one secret: a session works on both servers
     const basePort = Number(process.env.PORT ?? 3205);
     for (let i = 0; i < 2; i++) apps.push(await startAppProcess({ DATABASE_URL: prepared.url, PORT: String(basePort + i * 10), SESSION_SECRET: secret }));
-    const [a, b] = apps.map((app) => app.url);
+    const a = apps[0]!.url;
+    const b = apps[1]!.url;
     const desk = await signIn(a, busy.deskEmail, busy.password);
     const screen = await openStream(`${b}/api/events`, (await signIn(b, busy.deskEmail, busy.password)).cookie);
     if (screen.status !== 200) throw new Error(`the stream on server B answered ${screen.status}`);
@@ -59,7 +60,7 @@ async function main(): Promise<number> {
     // One free time after the busy book ends: booked, cancelled, booked again…
     const after = DateTime.fromISO(busy.to).plus({ days: 7 }).toISODate()!;
     const options = await sendJson(a, desk, 'POST', '/api/booking-options', {
-      clientId: clients[0],
+      clientId: clients[0]!,
       serviceId: service.id,
       stepPlan: service.step_plan,
       stylistId: null,
@@ -82,11 +83,11 @@ async function main(): Promise<number> {
         'booking',
         () =>
           sendJson(a, desk, 'POST', '/api/bookings', {
-            clientId: clients[i % clients.length],
+            clientId: clients[i % clients.length]!,
             serviceId: service.id,
             stepPlan: service.step_plan,
             stylistId: slot.stylistId,
-            start: slot.sittings[0].start,
+            start: slot.sittings[0]!.start,
             idempotencyKey: randomUUID(),
           }),
         201,
@@ -96,8 +97,8 @@ async function main(): Promise<number> {
     screen.close();
 
     samples.sort((x, y) => x - y);
-    const at = (q: number) => samples[Math.min(samples.length - 1, Math.ceil(q * samples.length) - 1)];
-    const [p50, p95, max] = [at(0.5), at(0.95), samples[samples.length - 1]].map((ms) => Math.round(ms));
+    const at = (q: number) => samples[Math.min(samples.length - 1, Math.ceil(q * samples.length) - 1)]!;
+    const [p50, p95, max] = [at(0.5), at(0.95), samples[samples.length - 1]!].map((ms) => Math.round(ms)) as [number, number, number];
     const ok = p95 <= TARGET_P95_MS;
     console.log(
       `\ndwell events: ${ok ? 'PASS' : 'FAIL'} — ${samples.length} changes via server A seen on server B's stream: p50 ${p50} ms, p95 ${p95} ms, max ${max} ms (target p95 ≤ ${TARGET_P95_MS} ms)`,

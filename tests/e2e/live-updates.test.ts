@@ -44,7 +44,7 @@ async function bookBlowDry(page: Page, date: string, clientIndex: number): Promi
     stylistId: null,
     earliestDate: date,
   });
-  const option = options.find((o: { sittings: { start: string }[] }) => DateTime.fromISO(o.sittings[0].start, { zone: ZONE }).toISODate() === date);
+  const option = options.find((o: { sittings: { start: string }[] }) => DateTime.fromISO(o.sittings[0]!.start, { zone: ZONE }).toISODate() === date);
   const booking = await post('/api/bookings', {
     clientId: client.id,
     serviceId: service.id,

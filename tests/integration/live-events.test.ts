@@ -80,7 +80,8 @@ afterAll(async () => {
 
 describe('live events across app servers', () => {
   it("tells a stream on server B of a booking made, moved and cancelled through server A, naming its dates; another salon's stream hears nothing", async () => {
-    const [a, bUrl] = urls;
+    const a = urls[0]!;
+    const bUrl = urls[1]!;
     const stylistOnB = await streamAs(bUrl, ana);
     const deskOnB = await streamAs(bUrl, desk);
     const elsewhere = await streamAs(bUrl, otherOwner);
@@ -122,7 +123,7 @@ describe('live events across app servers', () => {
   });
 
   it('tells of a change that reaches every date (a stylist renamed) as everyDate', async () => {
-    const stream = await streamAs(urls[1], desk);
+    const stream = await streamAs(urls[1]!, desk);
     await t.testDb.db.updateTable('staff').set({ display_name: 'Ana R.' }).where('id', '=', ana.staffId!).execute();
     expect(JSON.parse((await stream.next('book', 3_000)).data)).toEqual({ dates: [], everyDate: true, bookingIds: [] });
   });
@@ -143,7 +144,7 @@ describe('live events across app servers', () => {
 
   it('lets go of a stream the screen closed, and of its LISTEN connection when the last one went', async () => {
     const before = b.liveStreams();
-    const stream = await streamAs(urls[1], desk);
+    const stream = await streamAs(urls[1]!, desk);
     expect(b.liveStreams()).toBe(before + 1);
     stream.close();
     await until(() => b.liveStreams() === before);

@@ -113,7 +113,7 @@ export async function openStream(url: string, cookie: string): Promise<OpenStrea
         const index = events.findIndex((e, i) => i >= taken && e.event === event);
         if (index >= 0) {
           taken = index + 1;
-          return events[index];
+          return events[index]!;
         }
         if (closed) throw new Error(`the stream ended before a "${event}" event`);
         const left = deadline - Date.now();
