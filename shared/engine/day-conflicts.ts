@@ -20,7 +20,7 @@ export interface DayConflict {
 const KIND_ORDER: ConflictKind[] = ['hands', 'clients', 'chair', 'basin', 'hours', 'closing'];
 const hands = (step: DayStep) => step.kind !== 'developing';
 const live = (step: DayStep) => step.state !== 'finished';
-const spanOf = (x: DaySitting): Span => [x.steps[0].start, x.steps[x.steps.length - 1].end];
+const spanOf = (x: DaySitting): Span => [x.steps[0]!.start, x.steps[x.steps.length - 1]!.end];
 
 /** A key that does not depend on which side is named: for comparing the conflicts before and after a fix. */
 export const conflictKey = (c: { kind: ConflictKind; booking: string; with?: string }): string =>
@@ -34,17 +34,17 @@ export function dayConflicts(cal: DayCalendars, sittings: DaySitting[], subjects
       const key = `${kind}|${booking}|${other ?? ''}`;
       const c = found.get(key);
       if (c) {
-        c.minutes += pieces[i + 1] - pieces[i];
-        c.start = Math.min(c.start, pieces[i]);
-        c.end = Math.max(c.end, pieces[i + 1]);
+        c.minutes += pieces[i + 1]! - pieces[i]!;
+        c.start = Math.min(c.start, pieces[i]!);
+        c.end = Math.max(c.end, pieces[i + 1]!);
       } else {
         found.set(key, {
           kind,
           booking,
           ...(other !== undefined ? { with: other } : {}),
-          minutes: pieces[i + 1] - pieces[i],
-          start: pieces[i],
-          end: pieces[i + 1],
+          minutes: pieces[i + 1]! - pieces[i]!,
+          start: pieces[i]!,
+          end: pieces[i + 1]!,
         });
       }
     }
@@ -63,7 +63,7 @@ export function dayConflicts(cal: DayCalendars, sittings: DaySitting[], subjects
   const spans = sittings.map(spanOf);
   sittings.forEach((c, ci) => {
     if (!subjects.has(c.id)) return;
-    const span = spans[ci];
+    const span = spans[ci]!;
     const cLive = c.steps.some(live);
     if (cLive) {
       add('hours', c.id, undefined, subtract(span, cal.clock.get(c.stylist) ?? []));
@@ -73,9 +73,9 @@ export function dayConflicts(cal: DayCalendars, sittings: DaySitting[], subjects
         if (step.basin && live(step)) add('basin', c.id, undefined, intersect([step.start, step.end], cal.closedBasins.get(step.basin) ?? []));
     }
     sittings.forEach((x, xi) => {
-      const xSpan = spans[xi];
+      const xSpan = spans[xi]!;
       // Every rule needs the two sittings at once; a pair of two subjects is seen once.
-      if (xi === ci || xSpan[0] >= span[1] || span[0] >= xSpan[1] || (xi < ci && subjects.has(x.id))) return;
+      if (xi === ci || xSpan[0]! >= span[1]! || span[0]! >= xSpan[1]! || (xi < ci && subjects.has(x.id))) return;
       if (!cLive && !x.steps.some(live)) return;
       // Name the one that suffers: the unchanged side, or of two changed ones the later booked.
       const [named, other] = !subjects.has(x.id) || later(x, c) ? [x.id, c.id] : [c.id, x.id];
@@ -100,5 +100,5 @@ const compare = (a: string, b: string) => (a < b ? -1 : a > b ? 1 : 0);
 
 /** Whether x was booked to start after y (then by id), so x is the later client of the two. */
 function later(x: DaySitting, y: DaySitting): boolean {
-  return x.bookedTimes[0] > y.bookedTimes[0] || (x.bookedTimes[0] === y.bookedTimes[0] && x.id > y.id);
+  return x.bookedTimes[0]! > y.bookedTimes[0]! || (x.bookedTimes[0] === y.bookedTimes[0] && x.id > y.id);
 }

@@ -116,7 +116,7 @@ function bookingsNear(s: Scenario, date: string): Array<{ booking: Booking; inde
   const to = `${nextDate(nextDate(date))}T00:00`;
   const out: Array<{ booking: Booking; index: number }> = [];
   s.bookings.forEach((booking, index) => {
-    if (booking.steps[0].start < to && booking.steps[booking.steps.length - 1].end > from) out.push({ booking, index });
+    if (booking.steps[0]!.start < to && booking.steps[booking.steps.length - 1]!.end > from) out.push({ booking, index });
   });
   return out;
 }
@@ -132,7 +132,7 @@ function asBooked(cal: DayCalendars, booking: Booking, i: number): DaySitting {
     const start = instant(cal.ctx, step.start, `bookings[${i}].steps[${k}].start`, true);
     const end = instant(cal.ctx, step.end, `bookings[${i}].steps[${k}].end`, true);
     if (end <= start) throw new ScenarioError(`bookings[${i}].steps[${k}].end`, 'must be after start');
-    if (k > 0 && start < bookedTimes[bookedTimes.length - 1]) throw new ScenarioError(`bookings[${i}].steps[${k}].start`, 'overlaps the step before it');
+    if (k > 0 && start < bookedTimes[bookedTimes.length - 1]!) throw new ScenarioError(`bookings[${i}].steps[${k}].start`, 'overlaps the step before it');
     bookedTimes.push(start, end);
     const out: DayStep = { kind: step.kind, start, end, state: 'planned', booked: end - start, lo: end - start, hi: end - start };
     if (step.kind === 'basin') {
@@ -180,7 +180,7 @@ export function readDay(s: Scenario, askInput: unknown): ReplanDay {
   const now = instant(cal.ctx, ask.now, 'ask.now');
   const date = parseLocalDate(ask.now.slice(0, 10))!;
   if (date < cal.ctx.fromDay || date >= cal.ctx.toDay) throw new ScenarioError('ask.now', 'is not inside the horizon');
-  const day: [number, number] = [cal.ctx.dayStarts[date - cal.ctx.fromDay], cal.ctx.dayStarts[date - cal.ctx.fromDay + 1]];
+  const day: [number, number] = [cal.ctx.dayStarts[date - cal.ctx.fromDay]!, cal.ctx.dayStarts[date - cal.ctx.fromDay + 1]!];
   const found = bookingsNear(s, ask.now.slice(0, 10));
   const sittings = found.map(({ booking, index }) => asBooked(cal, booking, index));
   const byId = new Map(sittings.map((x) => [x.id, x]));
@@ -190,7 +190,7 @@ export function readDay(s: Scenario, askInput: unknown): ReplanDay {
   ask.sittings.forEach((entry, i) => {
     const at = `ask.sittings[${i}]`;
     const sitting = byId.get(entry.booking);
-    if (!sitting || sitting.bookedTimes[0] >= day[1] || sitting.bookedTimes[sitting.bookedTimes.length - 1] <= day[0]) {
+    if (!sitting || sitting.bookedTimes[0]! >= day[1] || sitting.bookedTimes[sitting.bookedTimes.length - 1]! <= day[0]) {
       throw new ScenarioError(`${at}.booking`, `no booking "${entry.booking}" on ${ask.now.slice(0, 10)}`);
     }
     if (given.has(entry.booking)) throw new ScenarioError(`${at}.booking`, `"${entry.booking}" is given twice`);
@@ -204,7 +204,7 @@ export function readDay(s: Scenario, askInput: unknown): ReplanDay {
       if (x.step >= sitting.steps.length) throw new ScenarioError(`${f}.step`, `booking "${entry.booking}" has ${sitting.steps.length} steps`);
       if (seen.has(x.step)) throw new ScenarioError(`${f}.step`, `step ${x.step} is given twice`);
       seen.add(x.step);
-      const step = sitting.steps[x.step];
+      const step = sitting.steps[x.step]!;
       if (x.id !== undefined) step.id = x.id;
       if (x.label !== undefined) step.label = x.label;
       if (x.minMinutes !== undefined || x.maxMinutes !== undefined) {

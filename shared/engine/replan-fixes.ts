@@ -156,7 +156,7 @@ export class FixFinder {
     const out: DayFix[] = [];
     const g = this.day.cal.grid.g;
     for (let late = g; late <= this.day.ask.lateStartLimitMinutes; late += g) {
-      const start = x.steps[0].start + late;
+      const start = x.steps[0]!.start + late;
       if (start >= this.day.now) out.push({ kind: 'late_start', booking: x.id, start, minutesLate: late });
     }
     return out;

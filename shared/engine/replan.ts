@@ -24,7 +24,7 @@ export function replan(scenario: Scenario, askInput: unknown): ReplanAnswer {
   const fix = (f: DayFix): ReplanFix => {
     if (f.kind === 'late_start') return { ...f, start: fmt(f.start) };
     if (f.kind !== 'developing') return f;
-    const tags = f.sitting.steps[f.step];
+    const tags = f.sitting.steps[f.step]!;
     return {
       kind: 'developing',
       booking: f.booking,
@@ -36,8 +36,8 @@ export function replan(scenario: Scenario, askInput: unknown): ReplanAnswer {
     };
   };
   const mine = day.sittings
-    .filter((x) => x.stylist === day.ask.stylist && x.bookedTimes[0] < day.day[1] && x.bookedTimes[x.bookedTimes.length - 1] > day.day[0])
-    .sort((a, b) => a.bookedTimes[0] - b.bookedTimes[0] || (a.id < b.id ? -1 : a.id > b.id ? 1 : 0));
+    .filter((x) => x.stylist === day.ask.stylist && x.bookedTimes[0]! < day.day[1] && x.bookedTimes[x.bookedTimes.length - 1]! > day.day[0])
+    .sort((a, b) => a.bookedTimes[0]! - b.bookedTimes[0]! || (a.id < b.id ? -1 : a.id > b.id ? 1 : 0));
   return {
     stylist: day.ask.stylist,
     now: fmt(day.now),
@@ -56,7 +56,7 @@ const moved = (x: DaySitting): boolean => x.steps.some((step, k) => step.start !
 
 /** Hands minutes of the in-progress sittings as booked that nothing of the stylist's holds now, from now on, on the clock. */
 function freed(day: ReplanDay, mine: DaySitting[]): Array<[number, number]> {
-  const handsOf = (x: DaySitting, times: number[]) => x.steps.flatMap((step, k) => (step.kind === 'developing' ? [] : [times[2 * k], times[2 * k + 1]]));
+  const handsOf = (x: DaySitting, times: number[]) => x.steps.flatMap((step, k) => (step.kind === 'developing' ? [] : [times[2 * k]!, times[2 * k + 1]!]));
   const booked = normalize(mine.filter((x) => x.inProgress).flatMap((x) => handsOf(x, x.bookedTimes)));
   const now = normalize(
     mine.flatMap((x) =>
@@ -68,6 +68,6 @@ function freed(day: ReplanDay, mine: DaySitting[]): Array<[number, number]> {
   );
   const left: Span = intersect(intersect(subtract(booked, now), [day.now, Infinity]), day.cal.clock.get(day.ask.stylist) ?? []);
   const out: Array<[number, number]> = [];
-  for (let i = 0; i < left.length; i += 2) out.push([left[i], left[i + 1]]);
+  for (let i = 0; i < left.length; i += 2) out.push([left[i]!, left[i + 1]!]);
   return out;
 }

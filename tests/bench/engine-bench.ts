@@ -152,15 +152,17 @@ function busiestDayOverrun(s: Scenario): ReplanAskInput {
   const length = (step: { start: string; end: string }) => (Date.parse(`${step.end}Z`) - Date.parse(`${step.start}Z`)) / 60_000;
   const perDay = new Map<string, Scenario['bookings']>();
   for (const b of s.bookings) {
-    const date = b.steps[0].start.slice(0, 10);
+    const date = b.steps[0]!.start.slice(0, 10);
     if (date === '2027-03-14' || b.steps.length < 2) continue;
     const key = `${b.stylist} ${date}`;
     perDay.set(key, [...(perDay.get(key) ?? []), b]);
   }
-  const [, day] = [...perDay.entries()].sort((a, b) => b[1].length - a[1].length || (a[0] < b[0] ? -1 : 1))[0];
-  const sittings = [...day].sort((a, b) => (a.steps[0].start < b.steps[0].start ? -1 : 1));
-  const running = sittings.find((b) => b.steps[0].start.slice(11) >= '12:00') ?? sittings[0];
-  const [first, second] = running.steps;
+  const [, day] = [...perDay.entries()].sort((a, b) => b[1].length - a[1].length || (a[0] < b[0] ? -1 : 1))[0]!;
+  const sittings = [...day].sort((a, b) => (a.steps[0]!.start < b.steps[0]!.start ? -1 : 1));
+  const running = sittings.find((b) => b.steps[0]!.start.slice(11) >= '12:00') ?? sittings[0]!;
+  // Only sittings of two or more steps were kept above.
+  const first = running.steps[0]!;
+  const second = running.steps[1]!;
   const overrunEnd = plus(first.end, 30);
   return {
     stylist: running.stylist,

@@ -162,7 +162,7 @@ export function bookedForCheck(s: Scenario, b: Scenario['bookings'][number]): Da
     basin: x.kind === 'basin' ? x.basin : undefined,
     finished: false,
   }));
-  return { id: b.id, stylist: b.stylist, chair: b.chair, bookedStart: steps[0].start, steps };
+  return { id: b.id, stylist: b.stylist, chair: b.chair, bookedStart: steps[0]!.start, steps };
 }
 
 /**
@@ -183,7 +183,7 @@ export function validateDay(s: Scenario, sittings: DaySittingCheck[], subjects: 
   };
   const period = (p: { start: string; end: string }): Range => [localToUtc(p.start, zone), localToUtc(p.end, zone)];
   const within = (t: number, ranges: Range[]) => ranges.some(([a, b]) => a <= t && t < b);
-  const span = (x: DaySittingCheck): Range => [x.steps[0].start, x.steps[x.steps.length - 1].end];
+  const span = (x: DaySittingCheck): Range => [x.steps[0]!.start, x.steps[x.steps.length - 1]!.end];
   const live = (x: DaySittingCheck) => x.steps.some((step) => !step.finished);
   const stepAt = (x: DaySittingCheck, t: number) => x.steps.find((step) => step.start <= t && t < step.end);
   const daysOf = (r: Range) => [...new Set([localDay(r[0], zone) - 1, localDay(r[0], zone), localDay(r[1] - 1, zone)])];

@@ -53,16 +53,16 @@ export function replanCase(seed: number): ReplanCase | null {
   const running = pick(rng, scenario.bookings);
   const stylist = running.stylist;
   const utc = (text: string) => localToUtc(text, zone);
-  const firstStart = utc(running.steps[0].start);
+  const firstStart = utc(running.steps[0]!.start);
   // Now: somewhere in the sitting or up to an hour after it, on the same local date.
-  const date = running.steps[0].start.slice(0, 10);
+  const date = running.steps[0]!.start.slice(0, 10);
   let now = firstStart + between(rng, 0, utc(running.steps.at(-1)!.end) - firstStart + 60);
   while (wall(now, zone).slice(0, 10) !== date) now--;
   if (utc(wall(now, zone)) !== now) return null;
 
   const actuals = new Map<string, Array<{ start?: number; end?: number }>>();
   const sittings: NonNullable<ReplanAskInput['sittings']> = [];
-  const mine = scenario.bookings.filter((b) => b.stylist === stylist && b.steps[0].start.startsWith(date));
+  const mine = scenario.bookings.filter((b) => b.stylist === stylist && b.steps[0]!.start.startsWith(date));
   for (const b of mine) {
     const flex = b.steps.map((step, k) => {
       if (step.kind !== 'developing' || rng() < 0.3) return { step: k };
@@ -76,8 +76,8 @@ export function replanCase(seed: number): ReplanCase | null {
       };
     });
     const times: Array<{ start?: number; end?: number }> = [];
-    if (b === running || (utc(b.steps[0].start) <= now && rng() < 0.6)) {
-      let t = utc(b.steps[0].start) + between(rng, -10, 20);
+    if (b === running || (utc(b.steps[0]!.start) <= now && rng() < 0.6)) {
+      let t = utc(b.steps[0]!.start) + between(rng, -10, 20);
       for (const step of b.steps) {
         if (t > now) break;
         const end = t + Math.max(1, utc(step.end) - utc(step.start) + between(rng, -20, 40));

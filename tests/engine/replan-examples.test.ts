@@ -24,7 +24,7 @@ describe('re-planning a day: worked examples', () => {
   it('a 30-minute lightener overrun pushes the finish into the 3 pm application: a hands conflict of 15 minutes', () => {
     const answer = replanDay(overrunDay(), lightenerRunning('14:30'));
     expect(answer.sittings[0]).toMatchObject({ booking: 'lightening', inProgress: true, moved: true });
-    expect(answer.sittings[0].steps).toEqual([
+    expect(answer.sittings[0]!.steps).toEqual([
       { kind: 'hands_on', start: t('12:00'), end: t('13:00'), state: 'finished' },
       { kind: 'developing', start: t('13:00'), end: t('14:30'), state: 'running', id: 'lightener', label: 'Lightener' },
       { kind: 'basin', start: t('14:30'), end: t('14:45'), state: 'planned', basin: 'basin-1' },
@@ -36,7 +36,7 @@ describe('re-planning a day: worked examples', () => {
     expect(conflict).toMatchObject({ kind: 'hands', booking: 'three-pm', with: 'lightening', minutes: 15, start: t('15:00'), end: t('15:15') });
     // A fixed-length lightener has no developing flexibility; Ben is free with the skill; 15 minutes late is within
     // the default limit of 15 (common practice for a salon's late-start allowance).
-    expect(conflict.fixes).toEqual([
+    expect(conflict!.fixes).toEqual([
       { kind: 'hand_over', booking: 'three-pm', stylist: 'ben' },
       { kind: 'late_start', booking: 'three-pm', start: t('15:15'), minutesLate: 15 },
       { kind: 'another_day', booking: 'three-pm' },
@@ -47,9 +47,9 @@ describe('re-planning a day: worked examples', () => {
   it('a 45-minute overrun needs 30 minutes: no late start within 15, but one within a 30-minute limit', () => {
     const [conflict] = replanDay(overrunDay(), lightenerRunning('14:45')).conflicts;
     expect(conflict).toMatchObject({ kind: 'hands', booking: 'three-pm', minutes: 30 });
-    expect(conflict.fixes.map((f) => f.kind)).toEqual(['hand_over', 'another_day']);
+    expect(conflict!.fixes.map((f) => f.kind)).toEqual(['hand_over', 'another_day']);
     const [wider] = replanDay(overrunDay(), lightenerRunning('14:45', { lateStartLimitMinutes: 30 })).conflicts;
-    expect(wider.fixes).toContainEqual({ kind: 'late_start', booking: 'three-pm', start: t('15:30'), minutesLate: 30 });
+    expect(wider!.fixes).toContainEqual({ kind: 'late_start', booking: 'three-pm', start: t('15:30'), minutesLate: 30 });
   });
 
   it('developing flexibility comes first: a slow application is caught up by a shorter lightener', () => {
@@ -69,7 +69,7 @@ describe('re-planning a day: worked examples', () => {
     });
     const [conflict] = answer.conflicts;
     expect(conflict).toMatchObject({ kind: 'hands', booking: 'three-pm', minutes: 15 });
-    expect(conflict.fixes[0]).toEqual({
+    expect(conflict!.fixes[0]).toEqual({
       kind: 'developing',
       booking: 'lightening',
       step: 1,
@@ -82,15 +82,17 @@ describe('re-planning a day: worked examples', () => {
         { kind: 'hands_on', start: t('14:30'), end: t('15:00'), state: 'planned' },
       ],
     });
-    expect(conflict.fixes.map((f) => f.kind)).toEqual(['developing', 'hand_over', 'late_start', 'another_day']);
+    expect(conflict!.fixes.map((f) => f.kind)).toEqual(['developing', 'hand_over', 'late_start', 'another_day']);
   });
 
   it('a running developing step is never shortened to before now, and is stretched when that clears the hands', () => {
     // At 14:30 the lightener (40–165 minutes) cannot end before 14:30; stretching it to 15:45 puts the rinse and
     // finish after the 3 pm application (15:00–15:45), while the 3 pm client develops (here until 16:30).
-    const [lightening, threePm] = overrunDay().bookings;
+    const { bookings } = overrunDay();
+    const lightening = bookings[0]!;
+    const threePm = bookings[1]!;
     const longer = threePm.steps.map((step, k) =>
-      k === 0 ? step : { ...step, start: at(['15:45', '16:30', '16:45'][k - 1]), end: at(['16:30', '16:45', '17:15'][k - 1]) },
+      k === 0 ? step : { ...step, start: at(['15:45', '16:30', '16:45'][k - 1]!), end: at(['16:30', '16:45', '17:15'][k - 1]!) },
     ) as typeof threePm.steps;
     const answer = replanDay(
       overrunDay({ bookings: [lightening, { ...threePm, steps: longer }] }),
@@ -101,7 +103,7 @@ describe('re-planning a day: worked examples', () => {
         ],
       }),
     );
-    const developing = answer.conflicts[0].fixes[0];
+    const developing = answer.conflicts[0]!.fixes[0]!;
     expect(developing).toMatchObject({ kind: 'developing', step: 1, minutes: 165 });
     if (developing.kind !== 'developing') throw new Error('expected a developing fix');
     expect(developing.steps.slice(1).map((s) => [s.start, s.end])).toEqual([
@@ -118,10 +120,10 @@ describe('re-planning a day: worked examples', () => {
         { id: 'ben-3pm', stylist: 'ben', chair: 'chair-3', steps: [{ kind: 'hands_on', start: at('15:30'), end: at('16:00') }] },
       ],
     });
-    expect(replanDay(busyBen, lightenerRunning('14:30')).conflicts[0].fixes.map((f) => f.kind)).toEqual(['late_start', 'another_day']);
+    expect(replanDay(busyBen, lightenerRunning('14:30')).conflicts[0]!.fixes.map((f) => f.kind)).toEqual(['late_start', 'another_day']);
     const noSkill = lightenerRunning('14:30');
     noSkill.sittings = noSkill.sittings!.slice(0, 1);
-    expect(replanDay(overrunDay(), noSkill).conflicts[0].fixes.map((f) => f.kind)).toEqual(['late_start', 'another_day']);
+    expect(replanDay(overrunDay(), noSkill).conflicts[0]!.fixes.map((f) => f.kind)).toEqual(['late_start', 'another_day']);
   });
 
   it('a chair and a basin needed by other stylists: another chair or basin for them', () => {
@@ -160,7 +162,7 @@ describe('re-planning a day: worked examples', () => {
       sittings: [{ booking: 'lightening', steps: [{ step: 0, actualStart: at('12:02'), actualEnd: at('12:37') }] }],
     });
     // The lightener goes on at the next grid point after the tap (12:40) and keeps its 60 minutes.
-    expect(answer.sittings[0].steps.map((s) => [s.start, s.end, s.state])).toEqual([
+    expect(answer.sittings[0]!.steps.map((s) => [s.start, s.end, s.state])).toEqual([
       [t('12:02'), t('12:37'), 'finished'],
       [t('12:40'), t('13:40'), 'planned'],
       [t('13:40'), t('13:55'), 'planned'],
@@ -176,14 +178,14 @@ describe('re-planning a day: worked examples', () => {
   it.each<[string, (ask: ReplanAskInput) => void, string]>([
     [
       'an end before its start',
-      (a) => (a.sittings![0].steps![0] = { step: 0, actualStart: at('12:30'), actualEnd: at('12:10') }),
+      (a) => (a.sittings![0]!.steps![0] = { step: 0, actualStart: at('12:30'), actualEnd: at('12:10') }),
       'ask.sittings[0].steps[0].actualEnd',
     ],
     ['a time after now', (a) => (a.now = at('12:50')), 'ask.sittings[0].steps[0].actualEnd'],
-    ['a step started before the one before it', (a) => (a.sittings![0].steps = [{ step: 1, actualStart: at('13:00') }]), 'ask.sittings[0].steps'],
-    ['a step out of range', (a) => (a.sittings![0].steps = [{ step: 4, actualStart: at('13:00') }]), 'ask.sittings[0].steps[0].step'],
+    ['a step started before the one before it', (a) => (a.sittings![0]!.steps = [{ step: 1, actualStart: at('13:00') }]), 'ask.sittings[0].steps'],
+    ['a step out of range', (a) => (a.sittings![0]!.steps = [{ step: 4, actualStart: at('13:00') }]), 'ask.sittings[0].steps[0].step'],
     ['a booking on another day', (a) => (a.now = '2027-06-10T10:00'), 'ask.sittings[0].booking'],
-    ['a range on a hands-on step', (a) => (a.sittings![0].steps = [{ step: 0, minMinutes: 5, maxMinutes: 10 }]), 'ask.sittings[0].steps[0].minMinutes'],
+    ['a range on a hands-on step', (a) => (a.sittings![0]!.steps = [{ step: 0, minMinutes: 5, maxMinutes: 10 }]), 'ask.sittings[0].steps[0].minMinutes'],
     ['an unknown stylist', (a) => (a.stylist = 'zed'), 'ask.stylist'],
   ])('refuses %s, naming the field', (_what, edit, field) => {
     const ask = lightenerRunning('14:30');

@@ -80,7 +80,7 @@ describe('re-planning a day from the actual times', () => {
           let previousEnd = -Infinity;
           sitting.steps.forEach((step, k) => {
             const [start, end] = [isoToUtc(step.start), isoToUtc(step.end)];
-            const bookedLength = localToUtc(booked.steps[k].end, s.timeZone) - localToUtc(booked.steps[k].start, s.timeZone);
+            const bookedLength = localToUtc(booked.steps[k]!.end, s.timeZone) - localToUtc(booked.steps[k]!.start, s.timeZone);
             // Started steps never move; a running one lasts at least until now.
             if (actual[k]?.start !== undefined) expect(start).toBe(actual[k].start);
             if (actual[k]?.end !== undefined) expect(end).toBe(actual[k].end);
@@ -92,7 +92,7 @@ describe('re-planning a day from the actual times', () => {
               expect(end - start).toBe(bookedLength);
             }
             if (!inProgress.has(sitting.booking))
-              expect([start, end]).toEqual([localToUtc(booked.steps[k].start, s.timeZone), localToUtc(booked.steps[k].end, s.timeZone)]);
+              expect([start, end]).toEqual([localToUtc(booked.steps[k]!.start, s.timeZone), localToUtc(booked.steps[k]!.end, s.timeZone)]);
             previousEnd = end;
           });
         }
