@@ -82,6 +82,15 @@ export const holdReleased = (queryClient: QueryClient): Promise<unknown> =>
 /** A write found the hold lapsed: its cached state is read again so every step sees it. */
 export const holdLapsed = (queryClient: QueryClient, holdId: string): Promise<unknown> => refreshRecord(queryClient, [onlineBookingApi.hold], holdId);
 
+// ——— Running the day: arrivals, no-shows, step taps and their undo ———
+
+/**
+ * A sitting was tapped (arrived, a no-show, a step started or finished, an undo): its booking's page and history,
+ * and every day and week of the book, which show statuses and actual times; a no-show frees time for windows.
+ */
+export const sittingTapped = (queryClient: QueryClient, bookingId: string): Promise<unknown> =>
+  Promise.all([refreshRecord(queryClient, [bookingsApi.one, bookingsApi.history], bookingId), refreshEndpoints(queryClient, [...BOOK_VIEWS, windowsApi.list])]);
+
 /* Hands-free time: windows, the standby list and window offers. */
 
 /** The hands-free windows of any day may have opened or closed (a booking was written, an offer went out). */

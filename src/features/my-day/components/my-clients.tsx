@@ -2,6 +2,7 @@ import { useMemo } from 'react';
 import type { DayView } from '@shared/schemas/booking-view.schemas';
 import { localDateOf } from '@shared/time/salon-time';
 import { useNow } from '@client/lib/use-now';
+import { AlertsSwitch } from '@client/features/day-of-service';
 import { ClientDayCard } from './client-day-card';
 
 type Props = { day: DayView };
@@ -19,12 +20,15 @@ export function MyClients({ day }: Props) {
   );
   if (visits.length === 0) return <p>No clients on this day.</p>;
   return (
-    <ol className="grid gap-4 lg:grid-cols-2">
-      {visits.map(({ booking, sitting }) => (
-        <li key={`${booking.id}-${sitting.seq}`}>
-          <ClientDayCard booking={booking} sitting={sitting} timeZone={day.timeZone} now={now} />
-        </li>
-      ))}
-    </ol>
+    <div className="flex flex-col gap-4">
+      <AlertsSwitch />
+      <ol className="grid gap-4 lg:grid-cols-2">
+        {visits.map(({ booking, sitting }) => (
+          <li key={`${booking.id}-${sitting.seq}`}>
+            <ClientDayCard booking={booking} sitting={sitting} timeZone={day.timeZone} now={now} />
+          </li>
+        ))}
+      </ol>
+    </div>
   );
 }
