@@ -63,7 +63,8 @@ export async function runTap(db: Kysely<Database>, req: TapRequest, now: Date, w
 
     const done = await work(trx, salon, found);
 
-    let after = (await findSittingForTap(trx, req.bookingId, req.seq))!;
+    let after = await findSittingForTap(trx, req.bookingId, req.seq);
+    if (!after) throw notFound('That booking'); // removed meanwhile (a lapsed hold's cleanup): nothing is kept
     const status = bookingStatusFor(after.sittingStatuses);
     if (status !== after.booking.status) {
       await setBookingStatus(trx, req.bookingId, status);

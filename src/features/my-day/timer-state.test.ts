@@ -73,6 +73,11 @@ describe('developingTimer from the real moment', () => {
     expect(developingTimer(timing, at('10:39')).phase).toBe('must_come_off');
   });
 
+  it('a tap a few seconds ahead of the screen’s clock has begun: processing, not "not started"', () => {
+    const timing = developingTiming(plan({ started: '09:52', ended: '10:09' }), 1);
+    expect(developingTimer(timing, at('10:09').minus({ seconds: 10 }))).toMatchObject({ phase: 'processing', minutesIn: 0, minutesLeft: 30 });
+  });
+
   it('counts from the tap that started the step when the application has no actual end', () => {
     const timing = developingTiming(plan({}, { started: '10:04' }), 1);
     expect(timing.from.toISO()).toBe(at('10:04').toISO());

@@ -66,7 +66,9 @@ export function developingTiming(steps: readonly TimedStep[], index: number): De
 
 /** The timer at `now`. Over the family's limit wins over everything: the product must come off, whatever the plan. */
 export function developingTimer(timing: DevelopingTiming, now: DateTime): TimerState {
-  const minutesIn = minutesBetween(timing.from, now);
+  // A tapped moment a little ahead of `now` (the screen's clock ticks every few seconds, devices' clocks differ)
+  // has still begun: only the plan's start can lie ahead.
+  const minutesIn = timing.fromActual ? Math.max(0, minutesBetween(timing.from, now)) : minutesBetween(timing.from, now);
   const onHair = Math.max(0, Math.floor(minutesBetween(timing.productOn, now)));
   const minutesLeft = Math.max(0, Math.ceil(timing.planned - minutesIn));
   if (minutesIn < 0) return { phase: 'not_started', minutesLeft: timing.planned, minutesIn: 0, minutesOnHair: onHair };

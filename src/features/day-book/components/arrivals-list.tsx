@@ -1,12 +1,12 @@
 import { useMemo } from 'react';
 import { Link } from 'react-router-dom';
 import type { DayView } from '@shared/schemas/booking-view.schemas';
-import { localDateOf } from '@shared/time/salon-time';
 import { formatRange } from '@shared/format/date-time';
 import { formatFor } from '@shared/format/locale';
 import { AlertsSwitch } from '@client/features/day-of-service';
 import { paths } from '@client/config/paths';
 import { todayIn } from '@client/lib/time';
+import { visitsOn } from '@client/lib/day-visits';
 import { useNow } from '@client/lib/use-now';
 import { ArrivalRow } from './arrival-row';
 
@@ -15,14 +15,7 @@ type Props = { day: DayView };
 /** Every sitting of the day in time order, with what the desk does as clients come in: Arrived, No-show, Undo. */
 export function ArrivalsList({ day }: Props) {
   const now = useNow();
-  const visits = useMemo(
-    () =>
-      day.bookings
-        .filter((b) => b.status !== 'cancelled' && b.status !== 'held')
-        .flatMap((booking) => booking.sittings.filter((s) => localDateOf(s.start, day.timeZone) === day.date).map((sitting) => ({ booking, sitting })))
-        .sort((a, b) => a.sitting.start.localeCompare(b.sitting.start)),
-    [day],
-  );
+  const visits = useMemo(() => visitsOn(day, (b) => b.status !== 'cancelled' && b.status !== 'held'), [day]);
   if (visits.length === 0) return <p>No clients on this day.</p>;
   const today = day.date === todayIn(day.timeZone);
   return (

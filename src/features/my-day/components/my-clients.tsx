@@ -1,6 +1,6 @@
 import { useMemo } from 'react';
 import type { DayView } from '@shared/schemas/booking-view.schemas';
-import { localDateOf } from '@shared/time/salon-time';
+import { visitsOn } from '@client/lib/day-visits';
 import { useNow } from '@client/lib/use-now';
 import { AlertsSwitch } from '@client/features/day-of-service';
 import { ClientDayCard } from './client-day-card';
@@ -10,14 +10,7 @@ type Props = { day: DayView };
 /** The stylist's clients of the day in the order they sit down. */
 export function MyClients({ day }: Props) {
   const now = useNow();
-  const visits = useMemo(
-    () =>
-      day.bookings
-        .filter((b) => b.status !== 'cancelled' && b.status !== 'no_show')
-        .flatMap((booking) => booking.sittings.filter((s) => localDateOf(s.start, day.timeZone) === day.date).map((sitting) => ({ booking, sitting })))
-        .sort((a, b) => a.sitting.start.localeCompare(b.sitting.start)),
-    [day],
-  );
+  const visits = useMemo(() => visitsOn(day, (b) => b.status !== 'cancelled' && b.status !== 'no_show'), [day]);
   if (visits.length === 0) return <p>No clients on this day.</p>;
   return (
     <div className="flex flex-col gap-4">
