@@ -31,15 +31,16 @@ export function middayZone(now = new Date()): string {
 let n = 0;
 
 /**
- * A booked colour sitting whose first step was planned `minutesAgo` minutes before now (a multiple of 5; plus the
+ * A booked sitting (the colour plan unless another is given) whose first step was planned `minutesAgo` minutes before now (a multiple of 5; plus the
  * minutes since the last 5-minute mark), in a chair and basin of
  * its own (so the tests' bookings never collide), for the given stylist and client; straight into the book.
  */
 export async function insertSittingAround(
   db: Db,
-  input: { salonId: string; serviceId: string; stylistId: string; clientId: string; minutesAgo: number; depositCents?: number },
+  input: { salonId: string; serviceId: string; stylistId: string; clientId: string; minutesAgo: number; depositCents?: number; plan?: StepPlan },
 ): Promise<string> {
   n++;
+  const plan = input.plan ?? colourPlan;
   const [chair] = await db
     .insertInto('chairs')
     .values({ salon_id: input.salonId, name: `Day chair ${n}` })
@@ -52,27 +53,23 @@ export async function insertSittingAround(
     .execute();
   // On the salon's 5-minute grid (as the engine plans, and reads the book): up to 4 minutes more than asked.
   const grid = 5 * 60_000;
-  const start = new Date(Math.floor(Date.now() / grid) * grid - Math.round(input.minutesAgo / 5) * grid);
-  const plus = (m: number) => new Date(start.getTime() + m * 60_000);
+  let at = Math.floor(Date.now() / grid) * grid - Math.round(input.minutesAgo / 5) * grid;
+  // Each step at its planned minutes, developing at its most.
+  const steps = plan.sittings[0].steps.map((s) => {
+    const start = new Date(at);
+    at += (s.kind === 'developing' ? s.maxMinutes : s.minutes) * 60_000;
+    return { kind: s.kind, label: s.label, start, end: new Date(at), basinId: s.kind === 'basin' ? basin.id : null };
+  });
   return insertBooking(db, {
     salonId: input.salonId,
     clientId: input.clientId,
     serviceId: input.serviceId,
     stylistId: input.stylistId,
     status: 'booked',
-    stepPlan: colourPlan,
+    stepPlan: plan,
     priceCents: 12000,
     depositCents: input.depositCents ?? 3000,
     createdBy: null,
-    sittings: [
-      {
-        chairId: chair.id,
-        steps: [
-          { kind: 'hands_on', label: 'Apply colour', start: start, end: plus(20), basinId: null },
-          { kind: 'developing', label: 'Colour develops', start: plus(20), end: plus(45), basinId: null },
-          { kind: 'basin', label: 'Rinse', start: plus(45), end: plus(60), basinId: basin.id },
-        ],
-      },
-    ],
+    sittings: [{ chairId: chair.id, steps }],
   });
 }
