@@ -22,6 +22,7 @@ import { registerClientAgeRoutes } from './features/clients/client-age.routes';
 import { registerMailboxRoutes } from './features/mailbox/mailbox.routes';
 import { registerOwnerRoutes } from './features/owner/owner.routes';
 import { registerBookingChangeRoutes } from './features/bookings/booking-changes.routes';
+import { registerDayOfServiceRoutes } from './features/day-of-service/day-of-service.routes';
 import { registerServiceRoutes } from './features/services/services.routes';
 import { registerSkinTestRoutes } from './features/skin-tests/skin-tests.routes';
 import { registerStandbyRoutes } from './features/standby/standby.routes';
@@ -75,6 +76,7 @@ export function createApp(deps: Omit<AppDeps, 'table' | 'storage' | 'readCache' 
     registerSalonRoutes,
     registerBookingRoutes,
     registerBookingChangeRoutes,
+    registerDayOfServiceRoutes,
     registerServiceRoutes,
     registerClientAgeRoutes,
     registerSkinTestRoutes,

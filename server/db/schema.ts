@@ -44,6 +44,8 @@ export interface SalonsTable {
   lift_virgin_levels: Generated<number>;
   lift_coloured_levels: Generated<number>;
   lift_compromised_levels: Generated<number>;
+  /** Minutes past a sitting's planned start before the desk may mark a no-show (migrations/20261207T0900). */
+  no_show_grace_minutes: Generated<number>;
 }
 
 /** A guardian's consent to oxidative colour for a client under 16, recorded by the desk (migrations/20261205T0320). */
@@ -213,7 +215,16 @@ export interface SittingsTable {
   chair_id: string;
   during: Range;
   live: Generated<boolean>;
+  /** Where the sitting stands on the day (migrations/20261207T0900); the booking's status follows (docs/glossary.md). */
+  status: ColumnType<SittingStatus, SittingStatus | undefined, SittingStatus>;
+  arrived_at: ColumnType<Date | null, Date | string | null | undefined, Date | string | null>;
+  /** Whole minutes the client arrived after the first step's planned start. */
+  late_minutes: ColumnType<number | null, number | null | undefined, number | null>;
+  /** Why the sitting was finished with steps left open. */
+  left_open_reason: ColumnType<string | null, string | null | undefined, string | null>;
 }
+
+export type SittingStatus = 'booked' | 'arrived' | 'in_progress' | 'finished' | 'no_show';
 
 export interface BookingStepsTable {
   id: Generated<string>;
@@ -225,6 +236,23 @@ export interface BookingStepsTable {
   basin_id: string | null;
   during: Range;
   live: Generated<boolean>;
+  /** The step's actual times and who tapped them, beside the planned `during` (migrations/20261207T0900). */
+  actual_start: ColumnType<Date | null, Date | string | null | undefined, Date | string | null>;
+  actual_end: ColumnType<Date | null, Date | string | null | undefined, Date | string | null>;
+  started_by: ColumnType<string | null, string | null | undefined, string | null>;
+  finished_by: ColumnType<string | null, string | null | undefined, string | null>;
+}
+
+/** Every tap on a sitting with the state it changed, so the last can be undone for a minute (migrations/20261207T0900). */
+export interface SittingTapsTable {
+  id: Generated<string>;
+  sitting_id: string;
+  action: 'arrive' | 'no_show' | 'start' | 'finish' | 'finish_sitting';
+  step_seq: number | null;
+  at: Timestamp;
+  by_user_id: string | null;
+  before: Json;
+  undone_at: ColumnType<Date | null, Date | string | null | undefined, Date | string | null>;
 }
 
 export interface AuditLogTable {
@@ -386,6 +414,7 @@ export interface Database {
   bookings: BookingsTable;
   sittings: SittingsTable;
   booking_steps: BookingStepsTable;
+  sitting_taps: SittingTapsTable;
   audit_log: AuditLogTable;
   skin_tests: SkinTestsTable;
   standby_entries: StandbyEntriesTable;

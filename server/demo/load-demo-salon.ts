@@ -10,6 +10,7 @@ import { DEMO_PASSWORD, demoClientNames, demoSalon, demoServices, demoStaff, typ
 import { correctionDayOne, correctionDayTwo, ordinaryDay, type Placement } from './demo-day-patterns';
 import { insertDemoConsultations } from './demo-consultations';
 import { planDemoMessages } from './demo-messages';
+import { recordPastActuals } from './demo-actuals';
 
 export async function isDatabaseEmpty(db: Db): Promise<boolean> {
   const row = await db
@@ -214,11 +215,11 @@ async function insertDemoBook(db: Db, ids: Ids, now: Date): Promise<number> {
       const steps = sittings.map((s) => placeSteps(s.day, s.placement, ids));
       const status = statusFor(
         steps.map((st) => ({ start: st[0]!.start, end: st.at(-1)!.end })),
-        now,
+        today.toJSDate(),
         count,
       );
       const service = demoServices[p.service];
-      await insertBooking(db, {
+      const bookingId = await insertBooking(db, {
         salonId: ids.salonId,
         clientId,
         serviceId: ids.services[p.service],
@@ -231,6 +232,7 @@ async function insertDemoBook(db: Db, ids: Ids, now: Date): Promise<number> {
         cancelReason: status === 'cancelled' ? 'Client asked to cancel (moving house)' : undefined,
         sittings: sittings.map((s, i) => ({ chairId: ids.chairs[s.placement.chair]!, steps: steps[i]! })),
       });
+      if (status !== 'cancelled') await recordPastActuals(db, bookingId, count, today.toJSDate(), status === 'no_show');
       count++;
     }
   }
@@ -256,9 +258,12 @@ function placeSteps(day: DateTime, p: Placement, ids: Ids): NewStep[] {
   });
 }
 
-/** All sittings over: finished (an occasional no-show); a sitting under way: checked in; else booked. */
-function statusFor(sittings: { start: Date; end: Date }[], now: Date, n: number): BookingStatus {
-  if (sittings.at(-1)!.end <= now) return n % 23 === 5 ? 'no_show' : 'finished';
-  if (sittings.some((s) => s.start <= now && now < s.end)) return 'checked_in';
+/**
+ * Every sitting on a past day: finished (an occasional no-show). Anything today or later starts booked, so the desk
+ * and the stylists run today from the start (a correction whose first sitting is past stays booked for its second).
+ */
+function statusFor(sittings: { start: Date; end: Date }[], todayStart: Date, n: number): BookingStatus {
+  if (sittings.at(-1)!.end <= todayStart) return n % 23 === 5 ? 'no_show' : 'finished';
+  if (sittings.some((s) => s.start < todayStart)) return 'booked';
   return n % 29 === 11 ? 'cancelled' : 'booked';
 }

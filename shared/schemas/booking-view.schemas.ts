@@ -1,6 +1,8 @@
 import { z } from 'zod';
 import { StepPlanSchema } from './step-plan.schemas';
 import { BookingStatusSchema, IdSchema, InstantSchema, LocalDateSchema, StepKindSchema } from './common.schemas';
+import { SittingStatusSchema } from './day-of-service.schemas';
+import { ProductFamilySchema } from './step-plan.schemas';
 
 /** Read models of the book, as the desk, the stylist and the client see them. */
 export const StepViewSchema = z.object({
@@ -12,6 +14,12 @@ export const StepViewSchema = z.object({
   /** For developing steps: the least and most minutes the product may stay on (from the booked step plan). */
   minMinutes: z.number().int().nullable(),
   maxMinutes: z.number().int().nullable(),
+  /** What the step puts on the hair, and the salon's processing limit for it (heat counted); null when not limited. */
+  product: ProductFamilySchema,
+  limitMinutes: z.number().int().nullable(),
+  /** When the step really started and ended (tapped on the day); null until then. */
+  actualStart: InstantSchema.nullable(),
+  actualEnd: InstantSchema.nullable(),
 });
 
 export const SittingViewSchema = z.object({
@@ -22,6 +30,12 @@ export const SittingViewSchema = z.object({
   start: InstantSchema,
   end: InstantSchema,
   steps: z.array(StepViewSchema),
+  /** Where the sitting stands on the day, when its client arrived and how many minutes late. */
+  status: SittingStatusSchema,
+  arrivedAt: InstantSchema.nullable(),
+  lateMinutes: z.number().int().nullable(),
+  /** From when the desk may mark a no-show: the planned start plus the salon's grace time. */
+  noShowFrom: InstantSchema,
 });
 export type SittingView = z.infer<typeof SittingViewSchema>;
 

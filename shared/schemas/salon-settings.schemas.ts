@@ -47,6 +47,8 @@ export const SalonSettingsSchema = z
     holdMinutes: whole(1, 120, 'minutes'),
     cancellationWindowHours: whole(0, 720, 'hours'),
     cancellationKeeps: z.enum(['deposit', 'nothing']),
+    // Minutes past a sitting's planned start before a no-show may be marked. Left out: unchanged.
+    noShowGraceMinutes: whole(0, 240, 'minutes').optional(),
     quietFrom: ClockTimeSchema,
     quietTo: ClockTimeSchema,
     reminderOffsetsHours: z

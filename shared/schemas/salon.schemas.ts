@@ -21,6 +21,8 @@ export const SalonSchema = z.object({
   cancellationWindowHours: z.number().int(),
   /** What a cancellation inside the window keeps: the deposit, or nothing. */
   cancellationKeeps: z.enum(['deposit', 'nothing']),
+  /** Minutes past a sitting's planned start before the desk may mark a no-show. */
+  noShowGraceMinutes: z.number().int(),
   /** Minutes each limited product family may be on the hair here, without heat (plan editors check against them). */
   processingLimits: ProcessingLimitsSchema,
   /** Levels one sitting may lift, by the state of the hair (the quote rules use them). */

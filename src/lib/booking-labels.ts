@@ -1,5 +1,6 @@
 import type { BookingView } from '@shared/schemas/booking-view.schemas';
 import type { BookingStatus, Role, StepKind } from '@shared/schemas/common.schemas';
+import type { SittingStatus } from '@shared/schemas/day-of-service.schemas';
 import { formatMoney } from '@shared/money/money';
 import { SALON_LOCALE } from '@shared/format/locale';
 
@@ -16,6 +17,15 @@ export const bookingStatusLabels: Record<BookingStatus, string> = {
   checked_in: 'Checked in',
   finished: 'Finished',
   cancelled: 'Cancelled',
+  no_show: 'No-show',
+};
+
+/** Where one sitting stands on the day (docs/glossary.md, "Sitting statuses"). */
+export const sittingStatusLabels: Record<SittingStatus, string> = {
+  booked: 'Booked',
+  arrived: 'Arrived',
+  in_progress: 'In progress',
+  finished: 'Finished',
   no_show: 'No-show',
 };
 

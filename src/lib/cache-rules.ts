@@ -118,6 +118,15 @@ export function bookChangedElsewhere(queryClient: QueryClient, change: BookChang
   ]);
 }
 
+// ——— Running the day: arrivals, no-shows, step taps and their undo ———
+
+/**
+ * A sitting was tapped (arrived, a no-show, a step started or finished, an undo): its booking's page and history,
+ * and every day and week of the book, which show statuses and actual times; a no-show frees time for windows.
+ */
+export const sittingTapped = (queryClient: QueryClient, bookingId: string): Promise<unknown> =>
+  Promise.all([refreshRecord(queryClient, [bookingsApi.one, bookingsApi.history], bookingId), refreshEndpoints(queryClient, [...BOOK_VIEWS, windowsApi.list])]);
+
 /* Hands-free time: windows, the standby list and window offers. */
 
 /** The hands-free windows of any day may have opened or closed (a booking was written, an offer went out). */

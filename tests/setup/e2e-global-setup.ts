@@ -10,6 +10,8 @@ declare module 'vitest' {
   export interface ProvidedContext {
     baseUrl: string;
     wsEndpoint: string;
+    /** The app's throwaway database, for a test that must place a booking at the real "now" (tests/e2e/day-of-service.test.ts). */
+    databaseUrl: string;
   }
 }
 
@@ -35,6 +37,7 @@ export default async function setup(project: TestProject) {
   });
   project.provide('baseUrl', server.url);
   project.provide('wsEndpoint', browser.wsEndpoint());
+  project.provide('databaseUrl', testDb.url);
   return async () => {
     await browser.close();
     await server.close();

@@ -6,6 +6,8 @@ import type { BookingView } from '@shared/schemas/booking-view.schemas';
 import type { BookingStatus } from '@shared/schemas/common.schemas';
 import type { StepPlan } from '@shared/schemas/step-plan.schemas';
 import type { Salon } from '@shared/schemas/salon.schemas';
+import { limitFor, type ProcessingLimits } from '@shared/rules/processing-limits';
+import { noShowFrom } from '@shared/rules/sitting-status';
 
 export interface BookingFilter {
   salonId: string;
@@ -60,7 +62,8 @@ export async function loadBookingViewRows(
       'st.id as stylistId',
       'st.display_name as stylistName',
     ])
-    .select(['sa.skin_test_lead_hours', 'sa.skin_test_validity_days', 'sa.skin_test_families'])
+    .select(['sa.skin_test_lead_hours', 'sa.skin_test_validity_days', 'sa.skin_test_families', 'sa.no_show_grace_minutes'])
+    .select(['sa.lightener_max_minutes', 'sa.oxidative_colour_max_minutes', 'sa.toner_oxidative_max_minutes', 'sa.colour_remover_max_minutes'])
     .where('b.salon_id', '=', filter.salonId)
     .where('b.status', 'in', filter.statuses ?? LIVE);
   if (filter.stylistId) query = query.where('b.stylist_id', '=', filter.stylistId);
@@ -90,6 +93,13 @@ export async function loadBookingViewRows(
     skinTestValidityDays: first.skin_test_validity_days,
     skinTestFamilies: first.skin_test_families as Salon['skinTestFamilies'],
   };
+  const limits: ProcessingLimits = {
+    lightener: first.lightener_max_minutes,
+    oxidative_colour: first.oxidative_colour_max_minutes,
+    toner_oxidative: first.toner_oxidative_max_minutes,
+    colour_remover: first.colour_remover_max_minutes,
+  };
+  const orNull = (d: Date | null) => (d ? iso(d) : null);
   const rows = bookings.map((b): BookingViewRow => {
     const own = sittingsOf.get(b.id) ?? [];
     const plan = b.step_plan as StepPlan;
@@ -112,6 +122,10 @@ export async function loadBookingViewRows(
         chairName: s.chairName,
         start: iso(s.start),
         end: iso(s.end),
+        status: s.status,
+        arrivedAt: orNull(s.arrived_at),
+        lateMinutes: s.late_minutes,
+        noShowFrom: iso(noShowFrom(s.start, first.no_show_grace_minutes)),
         steps: (stepsOf.get(s.id) ?? []).map((st) => {
           const planned = plan.sittings[s.seq - 1]?.steps[st.seq - 1];
           const range = planned?.kind === 'developing' ? planned : null;
@@ -123,6 +137,10 @@ export async function loadBookingViewRows(
             basinName: st.basinName,
             minMinutes: range?.minMinutes ?? null,
             maxMinutes: range?.maxMinutes ?? null,
+            product: planned?.product ?? 'none',
+            limitMinutes: planned ? limitFor(planned.product, limits, planned.kind === 'developing' && (planned.heat ?? false)) : null,
+            actualStart: orNull(st.actual_start),
+            actualEnd: orNull(st.actual_end),
           };
         }),
       })),
@@ -175,6 +193,9 @@ function loadSittings(db: Db, bookingIds: string[]) {
       's.booking_id',
       's.seq',
       's.chair_id',
+      's.status',
+      's.arrived_at',
+      's.late_minutes',
       'ch.name as chairName',
       sql<Date>`lower(s.during)`.as('start'),
       sql<Date>`upper(s.during)`.as('end'),
@@ -194,6 +215,8 @@ function loadSteps(db: Db, bookingIds: string[]) {
       'st.seq',
       'st.kind',
       'st.label',
+      'st.actual_start',
+      'st.actual_end',
       'bs.name as basinName',
       sql<Date>`lower(st.during)`.as('start'),
       sql<Date>`upper(st.during)`.as('end'),

@@ -70,3 +70,9 @@ export async function sittingChair(db: Db, bookingId: string, seq: number): Prom
   const row = await db.selectFrom('sittings').select('chair_id').where('booking_id', '=', bookingId).where('seq', '=', seq).executeTakeFirst();
   return row?.chair_id;
 }
+
+/** Where one sitting of a booking stands on its day (booked until the desk and the stylist run it). */
+export async function sittingStatus(db: Db, bookingId: string, seq: number): Promise<string | undefined> {
+  const row = await db.selectFrom('sittings').select('status').where('booking_id', '=', bookingId).where('seq', '=', seq).executeTakeFirst();
+  return row?.status;
+}

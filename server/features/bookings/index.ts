@@ -1,5 +1,6 @@
 // The bookings feature's public module: other features import it only from here.
 export { bookAt } from './book-at.service';
+export { auditBookingChange } from './booking-audit.service';
 export { bookingSnapshot } from './booking-snapshot.repository';
 export { deskBookingView } from './booking-view.service';
 export { loadBookingViews } from './booking-views.service';

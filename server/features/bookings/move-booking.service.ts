@@ -11,7 +11,7 @@ import { exactPlan } from '../planning';
 import { assertSkinTestAllows } from '../skin-tests';
 import { bookingSnapshot } from './booking-snapshot.repository';
 import { auditBookingChange } from './booking-audit.service';
-import { replaceSitting, setStylist, sittingChair, sittingStarts } from './change-booking.repository';
+import { replaceSitting, setStylist, sittingChair, sittingStarts, sittingStatus } from './change-booking.repository';
 import { preferredChair } from './preferred-chair';
 import { listStylists } from './salon-resources.repository';
 import { replanBookingMessages } from '../messages';
@@ -45,6 +45,10 @@ export async function movableSitting(db: Db, salon: Pick<Salon, 'id'>, bookingId
   if (!moving) {
     throw new AppError('VALIDATION_FAILED', 400, 'Some fields need attention.', { sitting: `This booking has ${plan.sittings.length} sitting(s).` });
   }
+  // A sitting that has been run keeps its actual times: only one still booked moves.
+  const status = await sittingStatus(db, bookingId, sitting);
+  if (status && status !== 'booked')
+    throw new AppError('CONFLICT', 409, `Sitting ${sitting} has been run on its day (${status.replace('_', ' ')}): it cannot be moved.`);
   const stylistId = wantedStylistId ?? booking.stylistId;
   if (stylistId !== booking.stylistId && plan.sittings.length > 1) {
     throw new AppError('VALIDATION_FAILED', 400, 'Some fields need attention.', {

@@ -28,6 +28,7 @@ export function toSalon(row: Selectable<SalonsTable>): Salon {
     granularityMinutes: row.granularity_minutes,
     cancellationWindowHours: row.cancellation_window_hours,
     cancellationKeeps: row.cancellation_keeps,
+    noShowGraceMinutes: row.no_show_grace_minutes,
     ...planningRulesOf(row),
   };
 }

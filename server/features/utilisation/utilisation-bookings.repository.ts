@@ -2,6 +2,7 @@ import { sql } from 'kysely';
 import type { Db } from '@server/db/database';
 import type { BookingStatus } from '@shared/schemas/common.schemas';
 import type { StepPlan } from '@shared/schemas/step-plan.schemas';
+import type { SittingStatus } from '@shared/schemas/day-of-service.schemas';
 
 /** One sitting of a booking that has a sitting starting in the period (cancelled ones included, holds not). */
 export interface PeriodSitting {
@@ -17,6 +18,8 @@ export interface PeriodSitting {
   /** Only for colour bookings (the only ones that can be corrections); null otherwise. */
   stepPlan: StepPlan | null;
   seq: number;
+  /** Where the sitting stood on its day: a no-show mark counts in the attendance figures. */
+  sittingStatus: SittingStatus;
   /** Milliseconds since 1970 (plain numbers: thousands of rows are compared and summed). */
   start: number;
   end: number;
@@ -42,6 +45,7 @@ export async function listPeriodSittings(db: Db, salonId: string, from: Date, to
       'b.deposit_cents as depositCents',
       'b.deposit_outcome as depositOutcome',
       'si.seq',
+      'si.status as sittingStatus',
       // Plain numbers and a step plan only where it can matter: thousands of rows parse quickly.
       sql<StepPlan | null>`case when sv.category = 'colour' then b.step_plan end`.as('stepPlan'),
       sql<number>`extract(epoch from lower(si.during))::float8 * 1000`.as('start'),

@@ -99,10 +99,15 @@ export function bookingFigures(input: FigureInput) {
       deposits.taken++;
       deposits.takenCents += b.depositCents;
     }
-    if (b.status === 'no_show') {
+    // A no-show is the booking's status or a no-show marked on any of its sittings (a correction may go on after one).
+    if (b.status === 'no_show' || sittings.some((s) => s.sittingStatus === 'no_show')) {
       attendance.noShows++;
       stylist.noShows++;
-      if (b.depositCents > 0) {
+      // The deposit policy decided at the mark (kept unless the salon keeps nothing); older no-shows kept it.
+      if (b.depositCents > 0 && b.depositOutcome === 'refunded') {
+        deposits.refunded++;
+        deposits.refundedCents += b.depositCents;
+      } else if (b.depositCents > 0) {
         deposits.kept++;
         deposits.keptCents += b.depositCents;
       }

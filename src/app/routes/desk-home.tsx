@@ -5,6 +5,7 @@ import { paths } from '@client/config/paths';
 import { ClientSearch } from '@client/features/clients/components/client-search';
 import { dayQueries } from '@client/features/day-book/api/day-queries';
 import { DayBookView } from '@client/features/day-book/components/day-book-view';
+import { ArrivalsList } from '@client/features/day-book/components/arrivals-list';
 import { windowQueries } from '@client/features/windows/api/window-queries';
 import { formatDate } from '@shared/format/date-time';
 import { zonelessFormat } from '@shared/format/locale';
@@ -29,6 +30,11 @@ export function Component() {
       hrefFor={(date) => (columns === 'chair' ? `${paths.desk(date)}&view=chairs` : paths.desk(date))}
       windows={windows.data?.windows}
       bookingHref={paths.deskBooking}
+      lead={
+        <SectionCard title="Arrivals">
+          <ArrivalsList day={day} />
+        </SectionCard>
+      }
       columns={columns}
       onColumnsChange={(by) =>
         setSearch((now) => {

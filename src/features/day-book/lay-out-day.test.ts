@@ -2,6 +2,9 @@ import { describe, expect, it } from 'vitest';
 import type { BookingView, DayView } from '@shared/schemas/booking-view.schemas';
 import { layOutDay } from './lay-out-day';
 
+// A sitting not run yet (booked, no arrival); the fixtures' times are what these tests are about.
+const dayState = { status: 'booked', arrivedAt: null, lateMinutes: null, noShowFrom: '2027-03-02T00:00:00Z' } as const;
+
 const id = (n: number) => `00000000-0000-4000-8000-00000000000${n}`;
 const booking = (n: number, stylist: number, chair: number, from: string, to: string): BookingView => ({
   id: id(n),
@@ -15,7 +18,9 @@ const booking = (n: number, stylist: number, chair: number, from: string, to: st
   depositCents: 0,
   depositOutcome: null,
   cancelReason: null,
-  sittings: [{ seq: 1, of: 1, chairId: id(chair), chairName: `Chair ${chair}`, start: `2027-03-02T${from}:00Z`, end: `2027-03-02T${to}:00Z`, steps: [] }],
+  sittings: [
+    { seq: 1, of: 1, chairId: id(chair), chairName: `Chair ${chair}`, start: `2027-03-02T${from}:00Z`, end: `2027-03-02T${to}:00Z`, steps: [], ...dayState },
+  ],
 });
 const day: DayView = {
   date: '2027-03-02',

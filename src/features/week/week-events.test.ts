@@ -2,6 +2,9 @@ import { describe, expect, it } from 'vitest';
 import type { BookingView, WeekView } from '@shared/schemas/booking-view.schemas';
 import { closedDates, closedStretches, hiddenClosedDates, toWeekEvents, visibleHours } from './week-events';
 
+// A sitting not run yet (booked, no arrival); the fixtures' times are what these tests are about.
+const dayState = { status: 'booked', arrivedAt: null, lateMinutes: null, noShowFrom: '2027-03-02T00:00:00Z' } as const;
+
 const id = (n: number) => `00000000-0000-4000-8000-00000000000${n}`;
 const booking = (n: number, stylist: number, status: BookingView['status']): BookingView => ({
   id: id(n),
@@ -16,8 +19,8 @@ const booking = (n: number, stylist: number, status: BookingView['status']): Boo
   depositOutcome: null,
   cancelReason: null,
   sittings: [
-    { seq: 1, of: 2, chairId: id(7), chairName: 'Chair 1', start: '2027-03-08T16:00:00Z', end: '2027-03-09T01:00:00Z', steps: [] },
-    { seq: 2, of: 2, chairId: id(7), chairName: 'Chair 1', start: '2027-03-15T15:00:00Z', end: '2027-03-15T20:00:00Z', steps: [] },
+    { seq: 1, of: 2, chairId: id(7), chairName: 'Chair 1', start: '2027-03-08T16:00:00Z', end: '2027-03-09T01:00:00Z', steps: [], ...dayState },
+    { seq: 2, of: 2, chairId: id(7), chairName: 'Chair 1', start: '2027-03-15T15:00:00Z', end: '2027-03-15T20:00:00Z', steps: [], ...dayState },
   ],
 });
 const week: WeekView = {

@@ -2,6 +2,7 @@ import type { DateTime } from 'luxon';
 import { Link } from 'react-router-dom';
 import type { BookingView, SittingView } from '@shared/schemas/booking-view.schemas';
 import { BookingStatusBadge } from '@client/components/ui/booking-status-badge';
+import { SittingStatusBadge } from '@client/components/ui/sitting-status-badge';
 import { SkinTestFlag } from '@client/components/ui/skin-test-flag';
 import { StepKindIcon } from '@client/components/ui/step-kind-icon';
 import { StepStrip } from '@client/components/ui/step-strip';
@@ -9,15 +10,17 @@ import { sittingLabel, stepKindLabels } from '@client/lib/booking-labels';
 import { formatRange, formatTime } from '@shared/format/date-time';
 import { formatFor } from '@shared/format/locale';
 import { paths } from '@client/config/paths';
-import { sittingProgress } from '../timer-state';
+import { developingTiming, sittingProgress } from '../timer-state';
 import { DevelopingTimer } from './developing-timer';
+import { SittingTaps } from './sitting-taps';
 
 type Props = { booking: BookingView; sitting: SittingView; timeZone: string; now: DateTime };
 
-/** One client of the stylist's day: who, what, and the step under way now (with its timer while developing). */
+/** One client of the stylist's day: who, what, the step under way (with its timer while developing) and the taps. */
 export function ClientDayCard({ booking, sitting, timeZone, now }: Props) {
   const progress = sittingProgress(sitting, now);
   const ofLabel = sittingLabel(sitting.seq, sitting.of);
+  const zone = formatFor(timeZone);
   return (
     <article
       aria-label={`${booking.client.name}, ${booking.service.name}`}
@@ -31,35 +34,54 @@ export function ClientDayCard({ booking, sitting, timeZone, now }: Props) {
             {ofLabel && <span className="font-bold"> · {ofLabel}</span>}
           </p>
           <p className="text-sm text-ink/80 tabular">
-            {formatRange(sitting.start, sitting.end, formatFor(timeZone))} · {sitting.chairName}
+            {formatRange(sitting.start, sitting.end, zone)} · {sitting.chairName}
           </p>
         </div>
-        <BookingStatusBadge status={booking.status} />
+        {sitting.status === 'booked' ? (
+          <BookingStatusBadge status={booking.status} />
+        ) : (
+          <SittingStatusBadge status={sitting.status} lateMinutes={sitting.lateMinutes} />
+        )}
         <SkinTestFlag skinTest={booking.skinTest} detailed />
       </div>
       <StepStrip steps={sitting.steps} timeZone={timeZone} />
       {progress.state === 'upcoming' && (
         <p>
-          First step at <span className="tabular">{formatTime(progress.next.start, formatFor(timeZone))}</span>: {progress.next.label}
+          First step at <span className="tabular">{formatTime(progress.next.start, zone)}</span>: {progress.next.label}
         </p>
       )}
       {progress.state === 'finished' && <p className="text-ink/80">All steps done.</p>}
+      {progress.state === 'ready' && (
+        <p>
+          <span className="font-bold">Next:</span> step {progress.index + 1}, {progress.next.label}
+          <span className="tabular text-ink/80"> (planned {formatTime(progress.next.start, zone)})</span>
+        </p>
+      )}
       {progress.state === 'in_progress' && (
         <div className="flex flex-col gap-2">
           <p className="flex flex-wrap items-center gap-2">
             <span className="font-bold">Now:</span>
             <StepKindIcon kind={progress.step.kind} />
             <span className="font-bold">{stepKindLabels[progress.step.kind]}</span> — {progress.step.label}
-            <span className="tabular text-ink/80">until {formatTime(progress.step.end, formatFor(timeZone))}</span>
+            <span className="tabular text-ink/80">
+              {progress.step.actualStart ? `since ${formatTime(progress.step.actualStart, zone)}` : `until ${formatTime(progress.step.end, zone)}`}
+            </span>
           </p>
-          {progress.step.kind === 'developing' && <DevelopingTimer step={progress.step} now={now} />}
+          {progress.step.kind === 'developing' && (
+            <DevelopingTimer
+              timing={developingTiming(sitting.steps, progress.index)}
+              now={now}
+              alert={{ key: `${booking.id}:${sitting.seq}:${progress.index + 1}`, label: `${booking.client.name}: ${progress.step.label}` }}
+            />
+          )}
           {progress.next && (
             <p className="text-sm text-ink/80">
-              Next: {progress.next.label} at <span className="tabular">{formatTime(progress.next.start, formatFor(timeZone))}</span>
+              Next: {progress.next.label} at <span className="tabular">{formatTime(progress.next.start, zone)}</span>
             </p>
           )}
         </div>
       )}
+      <SittingTaps booking={booking} sitting={sitting} progress={progress} />
       <div className="flex flex-wrap gap-4">
         <Link to={paths.mixLog(booking.id, booking.client.id)} className="text-link">
           Mix log<span className="sr-only"> for {booking.client.name}</span>

@@ -1,7 +1,8 @@
 import { useMemo } from 'react';
 import type { DayView } from '@shared/schemas/booking-view.schemas';
-import { localDateOf } from '@shared/time/salon-time';
+import { visitsOn } from '@client/lib/day-visits';
 import { useNow } from '@client/lib/use-now';
+import { AlertsSwitch } from '@client/features/day-of-service';
 import { ClientDayCard } from './client-day-card';
 
 type Props = { day: DayView };
@@ -9,22 +10,18 @@ type Props = { day: DayView };
 /** The stylist's clients of the day in the order they sit down. */
 export function MyClients({ day }: Props) {
   const now = useNow();
-  const visits = useMemo(
-    () =>
-      day.bookings
-        .filter((b) => b.status !== 'cancelled' && b.status !== 'no_show')
-        .flatMap((booking) => booking.sittings.filter((s) => localDateOf(s.start, day.timeZone) === day.date).map((sitting) => ({ booking, sitting })))
-        .sort((a, b) => a.sitting.start.localeCompare(b.sitting.start)),
-    [day],
-  );
+  const visits = useMemo(() => visitsOn(day, (b) => b.status !== 'cancelled' && b.status !== 'no_show'), [day]);
   if (visits.length === 0) return <p>No clients on this day.</p>;
   return (
-    <ol className="grid gap-4 lg:grid-cols-2">
-      {visits.map(({ booking, sitting }) => (
-        <li key={`${booking.id}-${sitting.seq}`}>
-          <ClientDayCard booking={booking} sitting={sitting} timeZone={day.timeZone} now={now} />
-        </li>
-      ))}
-    </ol>
+    <div className="flex flex-col gap-4">
+      <AlertsSwitch />
+      <ol className="grid gap-4 lg:grid-cols-2">
+        {visits.map(({ booking, sitting }) => (
+          <li key={`${booking.id}-${sitting.seq}`}>
+            <ClientDayCard booking={booking} sitting={sitting} timeZone={day.timeZone} now={now} />
+          </li>
+        ))}
+      </ol>
+    </div>
   );
 }

@@ -33,6 +33,7 @@ const fieldNames = [
   'skinTestFamilies',
   'holdMinutes',
   'cancellationWindowHours',
+  'noShowGraceMinutes',
   'quietFrom',
   'quietTo',
   'reminderOffsetsHours',
@@ -137,6 +138,13 @@ export function SalonSettingsForm({ settings }: { settings: SalonSettings }) {
                 { value: 'nothing', label: 'Nothing: the deposit is always refunded' },
               ]}
               {...form.register('cancellationKeeps')}
+            />
+            <TextField
+              label="No-show grace (minutes after the planned start)"
+              hint="The desk can mark a no-show once this long has passed; the deposit policy above applies."
+              type="number"
+              error={err('noShowGraceMinutes')}
+              {...form.register('noShowGraceMinutes', num)}
             />
             <p className="self-end text-sm text-ink/80">Each service sets its own deposit (fixed or a share of the price) on the Services page.</p>
           </div>

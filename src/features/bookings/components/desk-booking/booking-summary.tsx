@@ -3,10 +3,12 @@ import type { BookingView } from '@shared/schemas/booking-view.schemas';
 import { BookingStatusBadge } from '@client/components/ui/booking-status-badge';
 import { SkinTestFlag } from '@client/components/ui/skin-test-flag';
 import { SectionCard } from '@client/components/ui/section-card';
+import { SittingStatusBadge } from '@client/components/ui/sitting-status-badge';
 import { StepStrip } from '@client/components/ui/step-strip';
 import { paths } from '@client/config/paths';
-import { sittingLabel, stepKindLabels } from '@client/lib/booking-labels';
-import { formatDate, formatRange } from '@shared/format/date-time';
+import { sittingLabel } from '@client/lib/booking-labels';
+import { StepTimes } from './step-times';
+import { formatDate, formatRange, formatTime } from '@shared/format/date-time';
 import { formatFor } from '@shared/format/locale';
 import { formatMoney } from '@shared/money/money';
 
@@ -54,15 +56,13 @@ export function BookingSummary({ booking, timeZone, currency }: Props) {
               <span className="tabular">{formatRange(sitting.start, sitting.end, formatFor(timeZone))}</span> · {sitting.chairName}
             </h3>
             <StepStrip steps={sitting.steps} timeZone={timeZone} />
-            <ol aria-hidden="true" className="text-sm">
-              {sitting.steps.map((step) => (
-                <li key={step.start} className="tabular">
-                  {formatRange(step.start, step.end, formatFor(timeZone))} — {stepKindLabels[step.kind]}: {step.label}
-                  {step.basinName && ` · ${step.basinName}`}
-                  {step.minMinutes !== null && step.maxMinutes !== null && ` (${step.minMinutes}–${step.maxMinutes} min)`}
-                </li>
-              ))}
-            </ol>
+            {sitting.status !== 'booked' && (
+              <p>
+                <SittingStatusBadge status={sitting.status} lateMinutes={sitting.lateMinutes} />
+                {sitting.arrivedAt && <span className="tabular text-sm"> Arrived {formatTime(sitting.arrivedAt, formatFor(timeZone))}</span>}
+              </p>
+            )}
+            <StepTimes steps={sitting.steps} timeZone={timeZone} />
           </li>
         ))}
       </ol>

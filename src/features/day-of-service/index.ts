@@ -1,0 +1,6 @@
+// The day-of-service feature's public module: other features import it only from here.
+export { useSittingTap, type SittingTap } from './api/sitting-tap-mutations';
+export { unlockChime } from './alerts/chime';
+export { useTimerAlerts, type DueAlert } from './alerts/use-timer-alerts';
+export { AlertsSwitch } from './components/alerts-switch';
+export { UndoTapButton } from './components/undo-tap-button';
