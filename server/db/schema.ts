@@ -276,6 +276,8 @@ export interface IdempotencyKeysTable {
   user_id: string;
   key: string;
   route: string;
+  /** SHA-256 of the request's canonical JSON (migrations/20261208T1800); null for keys stored before. */
+  request_hash: string | null;
   status: number;
   response: Json;
   created_at: DefaultTimestamp;

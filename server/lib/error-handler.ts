@@ -4,6 +4,7 @@ import { ZodError } from 'zod';
 import type { ApiErrorBody } from '@shared/api/error.schemas';
 import { AppError } from './app-error';
 import { fieldMessages } from './field-messages';
+import { isUniqueViolation, uniqueViolationError } from './unique-violation';
 import { ScenarioError } from '@shared/engine/engine';
 
 function send(res: Parameters<RequestHandler>[1], status: number, error: ApiErrorBody['error']) {
@@ -27,6 +28,11 @@ export const errorHandler: ErrorRequestHandler = (err, _req, res, _next) => {
   // The engine refusing its input means the request asked for something impossible (e.g. a horizon too long).
   if (err instanceof ScenarioError) {
     return send(res, 400, { code: 'VALIDATION_FAILED', message: err.message, fields: { [err.field]: err.message } });
+  }
+  // Two requests raced past a check and the database let one in: the other is a conflict, not our failure.
+  if (isUniqueViolation(err)) {
+    const conflict = uniqueViolationError(err);
+    return send(res, conflict.status, { code: conflict.code, message: conflict.message, fields: conflict.fields });
   }
   if (err instanceof NoResultError) return send(res, 404, { code: 'NOT_FOUND', message: 'That record was not found.' });
   // A path like /api/bookings/%ED%A0%80 cannot be decoded (Express's router throws URIError with status 400).
