@@ -50,7 +50,7 @@ const clientDist = path.join(path.dirname(fileURLToPath(import.meta.url)), '..',
 export function createApp(deps: Omit<AppDeps, 'table' | 'storage' | 'readCache' | 'liveHub'> & { storage?: AppDeps['storage'] }) {
   const app = express();
   app.disable('x-powered-by');
-  app.set('trust proxy', 'loopback');
+  app.set('trust proxy', deps.config.trustProxy);
   app.use(
     helmet({
       contentSecurityPolicy: {

@@ -3,6 +3,7 @@ import { NoResultError } from 'kysely';
 import { ZodError } from 'zod';
 import type { ApiErrorBody } from '@shared/api/error.schemas';
 import { AppError } from './app-error';
+import { RateLimitedError } from './rate-limit';
 import { fieldMessages } from './field-messages';
 import { isUniqueViolation, uniqueViolationError } from './unique-violation';
 import { ScenarioError } from '@shared/engine/engine';
@@ -21,6 +22,7 @@ const DB_DOWN = new Set(['ECONNREFUSED', 'ECONNRESET', '57P01', '57P03', 'ETIMED
 /** Maps every thrown error to the API's one error shape; stacks go to the log only. */
 export const errorHandler: ErrorRequestHandler = (err, _req, res, _next) => {
   if (res.headersSent) return;
+  if (err instanceof RateLimitedError) res.set('Retry-After', String(err.retryAfterSeconds));
   if (err instanceof AppError) return send(res, err.status, { code: err.code, message: err.message, fields: err.fields });
   if (err instanceof ZodError) {
     return send(res, 400, { code: 'VALIDATION_FAILED', message: 'Some fields need attention.', fields: fieldMessages(err) });
