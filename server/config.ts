@@ -43,7 +43,7 @@ const ConfigSchema = z.object({
   LIVE_STREAMS_MAX: z.coerce.number().int().min(1).max(100_000).default(2_000),
   /** The proxies whose X-Forwarded-For/-Proto/-Host and X-Request-Id are believed: `none`, or a comma-separated list. */
   TRUST_PROXY: z.string().optional(),
-  /** pino's level: fatal, error, warn, info, debug, trace or silent; by default info (warn in tests). */
+  /** pino's level: fatal, error, warn, info, debug, trace or silent; by default info (warn in tests and the demo). */
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).optional(),
 });
 
@@ -130,6 +130,7 @@ export function loadConfig(env: Record<string, string | undefined> = process.env
     uploadsDir: path.resolve(parsed.UPLOADS_DIR ?? (parsed.DWELL_MODE === 'test' ? path.join(tmpdir(), 'dwell-test-uploads') : '.data/uploads')),
     maxLiveStreams: parsed.LIVE_STREAMS_MAX,
     trustProxy: trustProxy(parsed.TRUST_PROXY, parsed.DWELL_MODE),
-    logLevel: parsed.LOG_LEVEL ?? (parsed.DWELL_MODE === 'test' ? 'warn' : 'info'),
+    // Every request in development and production; only problems in tests and in the demo's terminal.
+    logLevel: parsed.LOG_LEVEL ?? (parsed.DWELL_MODE === 'test' || parsed.DWELL_MODE === 'demo' ? 'warn' : 'info'),
   };
 }

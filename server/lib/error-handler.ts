@@ -8,8 +8,9 @@ import { fieldMessages } from './field-messages';
 import { isUniqueViolation, uniqueViolationError } from './unique-violation';
 import { ScenarioError } from '@shared/engine/engine';
 
-function send(res: Parameters<RequestHandler>[1], status: number, error: ApiErrorBody['error']) {
-  res.status(status).json({ error });
+/** Every error answer carries the request's id (also in `X-Request-Id` and in its log line), so a report can be traced. */
+function send(res: Parameters<RequestHandler>[1], status: number, error: Omit<ApiErrorBody['error'], 'requestId'>) {
+  res.status(status).json({ error: { ...error, requestId: res.req.id === undefined ? undefined : String(res.req.id) } });
 }
 
 /** Unknown /api routes answer JSON 404, never the client app. */
@@ -19,7 +20,7 @@ export const apiNotFound: RequestHandler = (req, res) =>
 // Connection failures (PostgreSQL down or restarting) are reported as 503 so clients retry later.
 const DB_DOWN = new Set(['ECONNREFUSED', 'ECONNRESET', '57P01', '57P03', 'ETIMEDOUT']);
 
-/** Maps every thrown error to the API's one error shape; stacks go to the log only. */
+/** Maps every thrown error to the API's one error shape; stacks go to the log only (with the request's id). */
 export const errorHandler: ErrorRequestHandler = (err, _req, res, _next) => {
   if (res.headersSent) return;
   if (err instanceof RateLimitedError) res.set('Retry-After', String(err.retryAfterSeconds));
@@ -50,6 +51,7 @@ export const errorHandler: ErrorRequestHandler = (err, _req, res, _next) => {
   if (err?.code === 'EBADCSRFTOKEN' || err?.code === 'ERR_BAD_CSRF_TOKEN') {
     return send(res, 403, { code: 'CSRF', message: 'The form expired; reload and try again.' });
   }
-  console.error(err);
+  // The request's log line (request-log.ts) carries this error with its stack, at error level.
+  res.err = err;
   send(res, 500, { code: 'INTERNAL', message: 'Something went wrong on our side.' });
 };

@@ -8,14 +8,14 @@ import { documentedRoutes, type DocumentedRoute } from './access-matrix/openapi-
 import { requestArbitrary, type FuzzRequest } from './fuzz/request-arbitrary';
 import { answersEventStream, headOfStream } from '../setup/event-stream';
 import { anonymousSession, signIn } from '../bench/load/http-session';
-import { runWalk } from './fuzz/walk-runner';
+import { answerProblem, runWalk } from './fuzz/walk-runner';
 import { walkIds } from './fuzz/walk-ids';
 import { messagesApi } from '@shared/api/messages.api';
 import { FAKE_TWILIO } from '@server/services';
 
 // Property-based fuzzing of every route in the OpenAPI document, as the demo salon's owner and signed out:
 // requests drawn from each route's own schemas plus hostile mutations (see fuzz/request-arbitrary.ts).
-// The properties: never a 5xx, and every refusal in the one error shape { error: { code, message } }.
+// The properties: never a 5xx, and every refusal in the one error shape { error: { code, message, requestId } }.
 // Runs per route and caller are bounded so `npm test` stays quick; DWELL_FUZZ_RUNS=200 digs deeper.
 const RUNS = Number(process.env.DWELL_FUZZ_RUNS ?? 5);
 
@@ -65,16 +65,6 @@ function send(caller: Caller, route: DocumentedRoute, req: FuzzRequest) {
     .send(req.body === undefined ? '' : JSON.stringify(req.body));
 }
 
-/** Describes what is wrong with an answer, or null when it keeps the properties. */
-function problem(res: { status: number; body: unknown }): string | null {
-  if (res.status >= 500) return `answered ${res.status} ${JSON.stringify(res.body)}`;
-  if (res.status < 400) return null;
-  const error = (res.body as { error?: { code?: unknown; message?: unknown } })?.error;
-  if (typeof error?.code !== 'string' || typeof error.message !== 'string' || !error.message)
-    return `error not in the standard shape: ${JSON.stringify(res.body)}`;
-  return null;
-}
-
 describe('fuzzing every documented route', () => {
   it('never answers 5xx, and refuses in the standard error shape', async () => {
     const failures: string[] = [];
@@ -92,7 +82,7 @@ describe('fuzzing every documented route', () => {
               requests++;
               const res = await send(caller, route, req);
               statuses.set(res.status, (statuses.get(res.status) ?? 0) + 1);
-              const found = problem(res);
+              const found = answerProblem(res);
               if (found) throw new Error(found);
             }),
             { numRuns: RUNS, endOnFailure: true },

@@ -115,7 +115,7 @@ describe('cookies', () => {
     expect(all.some((c) => c.startsWith('__Host-dwell.csrf='))).toBe(true);
     expect(all.some((c) => c.startsWith('dwell.sid='))).toBe(true);
     for (const cookie of all) expect(cookie).toMatch(/; Secure/);
-    expect(signIn.headers['strict-transport-security']).toMatch(/max-age=/);
+    expect(signIn.headers['strict-transport-security']).toBe('max-age=31536000; includeSubDomains');
   });
 });
 
@@ -163,6 +163,8 @@ describe('Content-Security-Policy', () => {
     expect(csp['object-src']).toEqual(["'none'"]);
     expect(csp['base-uri']).toEqual(["'self'"]);
     expect(csp['frame-ancestors']).toEqual(["'self'"]);
+    // The client bundles its fonts: none from other sites, none inlined.
+    expect(csp['font-src']).toEqual(["'self'"]);
   });
 
   it('index.html loads its script from a file, never inline (the build copies this tag)', () => {

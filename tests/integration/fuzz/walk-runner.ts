@@ -50,14 +50,15 @@ export async function sendCase(baseUrl: string, session: HttpSession, c: WalkCas
   return { status: res.status, body };
 }
 
-/** What is wrong with an answer, or null: never a 5xx, and every refusal in `{ error: { code, message } }`. */
+/** What is wrong with an answer, or null: never a 5xx, and every refusal in `{ error: { code, message, requestId } }`. */
 export function answerProblem(res: { status: number; body: unknown }): string | null {
   const shown = () => JSON.stringify(res.body).slice(0, 300);
   if (res.status >= 500) return `answered ${res.status} ${shown()}`;
   if (res.status < 400) return null;
-  const error = (res.body as { error?: { code?: unknown; message?: unknown } } | null)?.error;
-  if (typeof error?.code !== 'string' || typeof error.message !== 'string' || !error.message)
+  const error = (res.body as { error?: { code?: unknown; message?: unknown; requestId?: unknown } } | null)?.error;
+  if (typeof error?.code !== 'string' || typeof error.message !== 'string' || !error.message || typeof error.requestId !== 'string') {
     return `error not in the standard shape: ${res.status} ${shown()}`;
+  }
   return null;
 }
 
