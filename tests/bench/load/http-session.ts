@@ -59,14 +59,15 @@ export async function signIn(baseUrl: string, email: string, password: string): 
 export async function sendJson(
   baseUrl: string,
   session: HttpSession,
-  method: 'GET' | 'POST',
+  method: 'GET' | 'POST' | 'PUT',
   path: string,
   body?: object,
+  headers: Record<string, string> = {},
   // eslint-disable-next-line @typescript-eslint/no-explicit-any -- bench scripts read whichever fields of an answer they need
 ): Promise<{ status: number; body: any }> {
   const res = await fetch(`${baseUrl}${path}`, {
     method,
-    headers: { cookie: session.cookie, 'x-csrf-token': session.csrf, ...(body ? { 'content-type': 'application/json' } : {}) },
+    headers: { cookie: session.cookie, 'x-csrf-token': session.csrf, ...(body ? { 'content-type': 'application/json' } : {}), ...headers },
     body: body ? JSON.stringify(body) : undefined,
   });
   const text = await res.text();
