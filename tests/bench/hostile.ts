@@ -9,16 +9,11 @@
 //     races, since the walk's writes change the demo's records).
 // Prints the figures (docs/reliability.md); exits non-zero on any 5xx or a race with more than one winner.
 import { randomUUID } from 'node:crypto';
-import { chmodSync, mkdtempSync, rmSync } from 'node:fs';
-import { tmpdir } from 'node:os';
-import { join } from 'node:path';
 import { createDb, createPool } from '@server/db/database';
 import { loadDemoSalon } from '@server/demo/load-demo-salon';
 import { DEMO_PASSWORD } from '@server/demo/demo-catalogue';
-import { prepareLocalDatabase } from '@server/ops/local-database';
-import { stopCluster, type Cluster } from '@server/ops/postgres-cluster';
-import { onShutdownSignal } from '@server/ops/shutdown';
-import { startAppProcess, type AppProcess } from './load/app-process';
+import { startAppProcess } from './load/app-process';
+import { benchScratch } from './load/bench-scratch';
 import { anonymousSession, signIn } from './load/http-session';
 import { runWalk } from '../integration/fuzz/walk-runner';
 import { walkIds } from '../integration/fuzz/walk-ids';
@@ -33,20 +28,9 @@ async function documented(url: string): Promise<DocumentedRoute[]> {
 }
 
 async function main(): Promise<number> {
-  const scratch = mkdtempSync(join(tmpdir(), 'dwell-hostile-'));
-  chmodSync(scratch, 0o755);
-  let cluster: Cluster | null = null;
-  const apps: AppProcess[] = [];
-  const cleanUp = async () => {
-    await Promise.all(apps.map((a) => a.stop()));
-    if (cluster) stopCluster(cluster);
-    rmSync(scratch, { recursive: true, force: true });
-  };
-  onShutdownSignal(cleanUp);
+  const { apps, cleanUp, database } = benchScratch('dwell-hostile-');
   try {
-    const pgPort = Number(process.env.PGPORT ?? 56000 + Math.floor(Math.random() * 3000));
-    const prepared = await prepareLocalDatabase({ dataRoot: scratch, port: pgPort, database: 'dwell_hostile', throwaway: true });
-    cluster = prepared.cluster;
+    const prepared = await database('dwell_hostile', { port: process.env.PGPORT ? Number(process.env.PGPORT) : undefined, throwaway: true });
     const db = createDb(createPool(prepared.url));
     await loadDemoSalon(db, new Date());
     const ids = await walkIds(db);

@@ -1,7 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { createApp } from '@server/app';
-import { loadConfig } from '@server/config';
-import { anonymousAgent, startTestApp, type TestApp } from '../setup/test-app';
+import { anotherApp, anonymousAgent, startTestApp, type TestApp } from '../setup/test-app';
 import { insertSalon } from '../factories/salon';
 import { insertUser } from '../factories/user';
 
@@ -53,12 +51,6 @@ describe('rate limits', () => {
   });
 });
 
-/** Another app server on the same database, as a second process behind a load balancer would be. */
-function secondServer(env: Record<string, string> = {}) {
-  const config = { ...loadConfig({ DATABASE_URL: t.testDb.url, DWELL_MODE: 'test', ...env }), uploadsDir: t.uploadsDir };
-  return createApp({ db: t.testDb.db, pool: t.testDb.pool, jobs: t.jobs, ...t.outside, config });
-}
-
 describe('sign-in limits under attack', () => {
   const from = (address: string) => ({ 'X-Forwarded-For': address });
 
@@ -94,7 +86,7 @@ describe('sign-in limits under attack', () => {
 
 describe('limits across app servers and proxies', () => {
   it('count in PostgreSQL: two app servers share one allowance per address', async () => {
-    const other = secondServer();
+    const other = anotherApp(t);
     try {
       const [a, b] = [await anonymousAgent(t.app), await anonymousAgent(other)];
       const address = { 'X-Forwarded-For': '10.62.0.1' };
@@ -108,7 +100,7 @@ describe('limits across app servers and proxies', () => {
   });
 
   it('ignore X-Forwarded-For from a peer that is not a trusted proxy', async () => {
-    const direct = secondServer({ TRUST_PROXY: 'none' });
+    const direct = anotherApp(t, { TRUST_PROXY: 'none' });
     // The tests above used up this peer's (127.0.0.1's) allowances: start its counts again.
     await t.testDb.db.deleteFrom('rate_limit_hits').execute();
     try {

@@ -1,11 +1,9 @@
 import request from 'supertest';
 import { sql } from 'kysely';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { createApp } from '@server/app';
-import { loadConfig } from '@server/config';
 import { onLogLine } from '@server/lib/logger';
 import { sendDueMessages } from '@server/features/messages/send-message.job';
-import { anonymousAgent, signedInAgent, startTestApp, type TestApp } from '../setup/test-app';
+import { anotherApp, anonymousAgent, signedInAgent, startTestApp, type TestApp } from '../setup/test-app';
 import { insertSalon } from '../factories/salon';
 import { insertUser, type UserFixture } from '../factories/user';
 
@@ -50,13 +48,7 @@ describe('request ids', () => {
     expect((await c.agent.get('/api/health').set('X-Request-Id', 'lb-7f3a-0001')).headers['x-request-id']).toBe('lb-7f3a-0001');
     // Not an id at all: a new one is made.
     expect((await c.agent.get('/api/health').set('X-Request-Id', 'not an id {"level":60}')).headers['x-request-id']).toMatch(/^[0-9a-f-]{36}$/);
-    const direct = createApp({
-      db: t.testDb.db,
-      pool: t.testDb.pool,
-      jobs: t.jobs,
-      ...t.outside,
-      config: { ...loadConfig({ DATABASE_URL: t.testDb.url, DWELL_MODE: 'test', TRUST_PROXY: 'none', LOG_LEVEL: 'debug' }), uploadsDir: t.uploadsDir },
-    });
+    const direct = anotherApp(t, { TRUST_PROXY: 'none', LOG_LEVEL: 'debug' });
     try {
       const res = await request(direct).get('/api/health').set('X-Request-Id', 'forged-0001');
       expect(res.headers['x-request-id']).not.toBe('forged-0001');
