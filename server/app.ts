@@ -10,6 +10,10 @@ import { apiRoute, type RouteTable } from './lib/api-route';
 import { appApi } from '../shared/api/app.api';
 import { API_ROOT } from '../shared/api/endpoint';
 import { apiNotFound, errorHandler } from './lib/error-handler';
+import { configureLogger } from './lib/logger';
+import { installRequestLog } from './lib/request-log';
+import { compress } from './lib/compress';
+import { serveClient } from './lib/static-client';
 import { installSessions } from './auth/sessions';
 import { installCsrf } from './auth/csrf';
 import { registerHealthRoutes } from './features/health/health.routes';
@@ -51,13 +55,18 @@ const clientDist = path.join(path.dirname(fileURLToPath(import.meta.url)), '..',
 export function createApp(deps: Omit<AppDeps, 'table' | 'storage' | 'readCache' | 'liveHub'> & { storage?: AppDeps['storage'] }) {
   const app = express();
   app.disable('x-powered-by');
-  app.set('trust proxy', 'loopback');
+  app.set('trust proxy', deps.config.trustProxy);
+  configureLogger(deps.config);
+  installRequestLog(app);
+  app.use(compress());
   app.use(
     helmet({
       contentSecurityPolicy: {
-        directives: { 'script-src': ["'self'"], 'style-src': ["'self'", "'unsafe-inline'"], 'img-src': ["'self'", 'data:', 'blob:'] },
+        // Fonts are bundled with the client (assets/): none from elsewhere, none inlined.
+        directives: { 'script-src': ["'self'"], 'style-src': ["'self'", "'unsafe-inline'"], 'img-src': ["'self'", 'data:', 'blob:'], 'font-src': ["'self'"] },
       },
-      strictTransportSecurity: deps.config.secureCookies,
+      // HTTPS only, for a year, wherever cookies are Secure (production); never on plain-http local development.
+      strictTransportSecurity: deps.config.secureCookies ? { maxAge: 31_536_000, includeSubDomains: true } : false,
     }),
   );
   app.use(API_ROOT, express.json({ limit: '100kb', strict: true }));
@@ -114,11 +123,7 @@ export function createApp(deps: Omit<AppDeps, 'table' | 'storage' | 'readCache' 
   app.use(table.router);
   app.use(API_ROOT, apiNotFound);
 
-  if (existsSync(clientDist)) {
-    app.use(express.static(clientDist, { index: false, maxAge: '1h' }));
-    // Client-side routes: every other GET answers the app shell.
-    app.get('/{*splat}', (_req, res) => res.sendFile(path.join(clientDist, 'index.html')));
-  }
+  if (existsSync(clientDist)) serveClient(app, clientDist);
   app.use(errorHandler);
   // Named apiRoutes: Express's own typings already declare a loosely typed `routes`. shutdown() lets go of what the
   // app holds open besides the pool it was given (the live streams' LISTEN connection); liveStreams() counts them.

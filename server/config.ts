@@ -1,4 +1,5 @@
 import { randomBytes } from 'node:crypto';
+import { isIP } from 'node:net';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { z } from 'zod';
@@ -40,6 +41,10 @@ const ConfigSchema = z.object({
     .default(7 * 24),
   /** Live update streams (GET /api/events) one app server holds open at most; more are answered 503 and retry. */
   LIVE_STREAMS_MAX: z.coerce.number().int().min(1).max(100_000).default(2_000),
+  /** The proxies whose X-Forwarded-For/-Proto/-Host and X-Request-Id are believed: `none`, or a comma-separated list. */
+  TRUST_PROXY: z.string().optional(),
+  /** pino's level: fatal, error, warn, info, debug, trace or silent; by default info (warn in tests and the demo). */
+  LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).optional(),
 });
 
 export interface Config {
@@ -66,6 +71,32 @@ export interface Config {
   uploadsDir: string;
   /** Live update streams one app server holds open at most. */
   maxLiveStreams: number;
+  /** Express's `trust proxy`: false (believe no forwarding headers) or the peers to believe. */
+  trustProxy: false | string[];
+  logLevel: 'fatal' | 'error' | 'warn' | 'info' | 'debug' | 'trace' | 'silent';
+}
+
+// Express's names for address ranges (proxy-addr): 127.0.0.0/8 and ::1; 169.254.0.0/16 and fe80::/10; private networks.
+const PROXY_PRESETS = ['loopback', 'linklocal', 'uniquelocal'];
+
+/**
+ * Whom to believe about the client's address and scheme. Believing every peer would let any caller forge
+ * X-Forwarded-For and escape the per-address limits, so production trusts none unless told (a load balancer's
+ * address or network); local development trusts loopback (Vite's dev server forwards /api).
+ */
+function trustProxy(value: string | undefined, mode: Config['mode']): false | string[] {
+  if (value === undefined) return mode === 'production' ? false : ['loopback'];
+  const list = value
+    .split(',')
+    .map((v) => v.trim())
+    .filter(Boolean);
+  if (list.length === 0 || (list.length === 1 && list[0] === 'none')) return false;
+  for (const entry of list) {
+    const [address = '', bits] = entry.split('/');
+    const ok = PROXY_PRESETS.includes(entry) || (isIP(address) !== 0 && (bits === undefined || /^\d{1,3}$/.test(bits)));
+    if (!ok) throw new Error(`TRUST_PROXY: "${entry}" is not none, ${PROXY_PRESETS.join(', ')}, an IP address or a network like 10.0.0.0/8`);
+  }
+  return list;
 }
 
 /** Parsed once at boot, so a bad environment fails at start-up, not at the first request. */
@@ -98,5 +129,8 @@ export function loadConfig(env: Record<string, string | undefined> = process.env
     // Test runs never write into the checkout's .data/, even when a suite forgets to pass a folder.
     uploadsDir: path.resolve(parsed.UPLOADS_DIR ?? (parsed.DWELL_MODE === 'test' ? path.join(tmpdir(), 'dwell-test-uploads') : '.data/uploads')),
     maxLiveStreams: parsed.LIVE_STREAMS_MAX,
+    trustProxy: trustProxy(parsed.TRUST_PROXY, parsed.DWELL_MODE),
+    // Every request in development and production; only problems in tests and in the demo's terminal.
+    logLevel: parsed.LOG_LEVEL ?? (parsed.DWELL_MODE === 'test' || parsed.DWELL_MODE === 'demo' ? 'warn' : 'info'),
   };
 }

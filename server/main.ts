@@ -3,6 +3,7 @@ import type { AddressInfo } from 'node:net';
 import { loadConfig, type Config } from './config';
 import { createDb, createPool } from './db/database';
 import { createApp } from './app';
+import { configureLogger, logger } from './lib/logger';
 import { FAKE_TWILIO, startOutsideServices } from './services';
 import { startJobQueue } from './jobs/job-queue';
 import { appJobs } from './jobs/app-jobs';
@@ -17,6 +18,7 @@ export interface RunningServer {
 
 /** Starts fakes (outside production), the database pool and the HTTP server; close() undoes all of it. */
 export async function startServer(config: Config = loadConfig()): Promise<RunningServer> {
+  configureLogger(config);
   const outside = await startOutsideServices(config);
   const pool = createPool(config.databaseUrl);
   const db = createDb(pool);
@@ -27,6 +29,7 @@ export async function startServer(config: Config = loadConfig()): Promise<Runnin
   const url = `http://${config.host}:${port}`;
   // The SMS fake delivers simulated inbound texts (STOP/START) to this server's webhook, signed as the provider would.
   outside.smsFake?.setInboundWebhook(`${url}${messagesApi.inboundSms.path}`, FAKE_TWILIO.authToken);
+  logger.info({ url, mode: config.mode }, 'listening');
   return {
     url,
     app,

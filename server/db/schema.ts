@@ -304,6 +304,8 @@ export interface IdempotencyKeysTable {
   user_id: string;
   key: string;
   route: string;
+  /** SHA-256 of the request's canonical JSON (migrations/20261208T1800); null for keys stored before. */
+  request_hash: string | null;
   status: number;
   response: Json;
   created_at: DefaultTimestamp;
@@ -435,6 +437,14 @@ export interface Database {
   follow_up_rules: FollowUpRulesTable;
   book_versions: BookVersionsTable;
   book_day_versions: BookDayVersionsTable;
+  rate_limit_hits: RateLimitHitsTable;
+}
+
+/** Request counts per limit and caller in the current window (migrations/20261208T1810). */
+export interface RateLimitHitsTable {
+  key: string;
+  hits: number;
+  reset_at: Timestamp;
 }
 
 /** Per-salon version of what every calendar day depends on; moved by triggers (migrations/20261204T0900). */

@@ -15,6 +15,9 @@ import {
   type Senders,
 } from '../features/messages/send-message.job';
 import { planStaffMessages } from '../features/messages/staff-messages.service';
+import { pruneSignInAttempts } from '../features/session/sign-in-attempts.repository';
+import { ACCOUNT_LOOKBACK_DAYS, SIGN_IN_LIMITS } from '../features/session/sign-in-limits';
+import { pruneRateLimits } from '../lib/rate-limits.repository';
 
 export interface JobOptions {
   /** Seconds after which a claim with no provider reference is taken for a dead worker's. */
@@ -48,5 +51,14 @@ export function appJobs(db: Kysely<Database>, senders: Senders, options: JobOpti
     },
     // Stylists' next-day lists and the desk's no-deposit list, at 18:00 in each salon's zone.
     { name: 'plan-staff-messages', handler: async () => void (await planStaffMessages(db, new Date())), everyMinute: true },
+    // Request counts whose window ended, and sign-in attempts older than any limit reads.
+    {
+      name: 'prune-limits',
+      handler: async () => {
+        await pruneRateLimits(db);
+        await pruneSignInAttempts(db, ACCOUNT_LOOKBACK_DAYS, SIGN_IN_LIMITS.knownAddressDays);
+      },
+      everyMinute: true,
+    },
   ];
 }

@@ -1,4 +1,5 @@
 import PgBoss from 'pg-boss';
+import { logger } from '../lib/logger';
 
 /** A job's work; `queue` lets it queue further jobs (e.g. one per message at its exact instant). */
 export type JobHandler = (data: Record<string, unknown>, queue: JobQueue) => Promise<void>;
@@ -24,7 +25,7 @@ export interface JobDefinition {
  */
 export async function startJobQueue(databaseUrl: string, jobs: JobDefinition[]): Promise<JobQueue> {
   const boss = new PgBoss({ connectionString: databaseUrl, schema: 'pgboss', migrate: false, max: 4 });
-  boss.on('error', (err) => console.error('job queue:', err.message));
+  boss.on('error', (err) => logger.error({ err }, 'job queue error'));
   await boss.start();
   const queue: JobQueue = {
     async schedule(name, data, at) {
@@ -35,7 +36,18 @@ export async function startJobQueue(databaseUrl: string, jobs: JobDefinition[]):
   for (const job of jobs) {
     await boss.createQueue(job.name);
     await boss.work<Record<string, unknown>>(job.name, { pollingIntervalSeconds: 1 }, async (batch) => {
-      for (const item of batch) await job.handler(item.data ?? {}, queue);
+      for (const item of batch) {
+        // Each run's lines carry the job's name and id (pg-boss retries a failed one under the same id).
+        const log = logger.child({ job: job.name, jobId: item.id });
+        const started = Date.now();
+        try {
+          await job.handler(item.data ?? {}, queue);
+          log.debug({ ms: Date.now() - started }, 'job done');
+        } catch (err) {
+          log.error({ err, ms: Date.now() - started }, 'job failed');
+          throw err;
+        }
+      }
     });
     if (job.everyMinute) await boss.schedule(job.name, '* * * * *', {});
     if (job.atStart) await boss.send(job.name, {});

@@ -8,6 +8,7 @@ import { requireAccess } from '../auth/require-access';
 import { errorStatuses, type RouteTable } from './api-route';
 import { AppError } from './app-error';
 import { safeFileName } from './safe-file-name';
+import { assertStorable } from './unstorable-text';
 
 // Only these routes read multipart; express.json keeps its 100 kB limit everywhere else.
 
@@ -39,6 +40,8 @@ export function uploadRoute<const E extends UploadEndpoint>(
   table.router.post(spec.path, requireAccess(spec.access), ...before, readFiles(spec.upload), async (req, res) => {
     const files = (req.files as Express.Multer.File[] | undefined) ?? [];
     if (!req.is('multipart/form-data')) throw new AppError('VALIDATION_FAILED', 400, 'Send the photos as multipart/form-data.');
+    // The text fields and file names go through the same check as every JSON route's input.
+    assertStorable({ params: req.params, body: { ...req.body, [spec.upload.fileField]: files.map((f) => f.originalname) } });
     if (files.length === 0)
       throw new AppError('VALIDATION_FAILED', 400, 'Choose at least one photo.', { [spec.upload.fileField]: 'Choose at least one photo' });
     const ctx = {
@@ -62,7 +65,11 @@ function readFiles(spec: UploadLimits): RequestHandler {
   const megabytes = Math.round(spec.maxBytesPerFile / 1024 / 1024);
   return (req, res, next) =>
     upload(req, res, (err?: unknown) => {
-      if (!(err instanceof multer.MulterError)) return next(err);
+      if (!err) return next();
+      // Anything else multer passes on comes from busboy reading the body (no boundary, a malformed part header, a
+      // body cut short): the client sent something that is not multipart/form-data. Files are kept in memory, so
+      // no error of ours can arrive here.
+      if (!(err instanceof multer.MulterError)) return next(new AppError('VALIDATION_FAILED', 400, 'The upload is not a complete multipart/form-data body.'));
       // multer 2 names the file on its errors; its type definitions do not say so yet.
       const filename = (err as { filename?: string }).filename;
       const name = filename ? `“${safeFileName(filename)}”` : 'A file';

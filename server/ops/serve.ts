@@ -3,6 +3,6 @@
 import { startServer } from '../main';
 import { onShutdownSignal } from './shutdown';
 
+// startServer logs "listening" with the URL as a JSON line (docs/operations.md, Logs).
 const server = await startServer();
-console.log(`dwell: listening on ${server.url}`);
 onShutdownSignal(() => server.close());

@@ -1,13 +1,14 @@
 import { z } from 'zod';
-import { IdSchema, InstantInputSchema, InstantSchema, isRealDateTime, LocalDateSchema, StepKindSchema } from './common.schemas';
+import { DATE_RANGE, IdSchema, InstantInputSchema, InstantSchema, isRealDateTime, isWithinDateRange, LocalDateSchema, StepKindSchema } from './common.schemas';
 import { StepPlanSchema } from './step-plan.schemas';
 import { OptionalEmailSchema, OptionalPhoneSchema } from './contact.schemas';
 
-/** A wall-clock time in the salon's zone, `YYYY-MM-DDTHH:mm`. */
+/** A wall-clock time in the salon's zone, `YYYY-MM-DDTHH:mm`, within DATE_RANGE. */
 export const LocalDateTimeSchema = z
   .string()
   .regex(/^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}$/, 'Use a time like 2027-03-14T09:30')
-  .refine(isRealDateTime, 'Not a real date and time');
+  .refine(isRealDateTime, 'Not a real date and time')
+  .refine(isWithinDateRange, `Use a date between ${DATE_RANGE.first} and ${DATE_RANGE.last}`);
 
 /** The desk asks for options: a client, a service, its (possibly edited) step plan, a stylist or any. */
 export const BookingOptionsRequestSchema = z

@@ -27,18 +27,31 @@ export const typedText = (max: number) =>
     .max(max, `At most ${max} characters`)
     .refine((s) => !UNSTORABLE.test(s), UNSTORABLE_MESSAGE);
 
-/** A local calendar date, `YYYY-MM-DD`. */
+/**
+ * The dates the API accepts, first and last: what PostgreSQL's date and timestamptz, JavaScript's Date and the
+ * engine's time-zone tables all hold with room to spare (a week or a three-week search past the last date still
+ * fits), and wider than any booking, birth date or report needs. A year 0 or 10000 is refused here, naming the
+ * field, instead of failing deep in a query.
+ */
+export const DATE_RANGE = { first: '1900-01-01', last: '2199-12-31' } as const;
+/** True when a `YYYY-MM-DD…` string's calendar date lies within DATE_RANGE (ISO dates order as text). */
+export const isWithinDateRange = (s: string) => s.slice(0, 10) >= DATE_RANGE.first && s.slice(0, 10) <= DATE_RANGE.last;
+const OUT_OF_RANGE = `Use a date between ${DATE_RANGE.first} and ${DATE_RANGE.last}`;
+
+/** A local calendar date, `YYYY-MM-DD`, within DATE_RANGE. */
 export const LocalDateSchema = z
   .string()
   .regex(/^\d{4}-\d{2}-\d{2}$/, 'Use a date like 2027-03-14')
-  .refine(isRealDateTime, 'Not a real date');
+  .refine(isRealDateTime, 'Not a real date')
+  .refine(isWithinDateRange, OUT_OF_RANGE);
 /** An instant as ISO 8601 with its UTC offset (what the API sends for every time). */
 export const InstantSchema = z.string();
-/** An instant sent to the API: ISO 8601 with a UTC offset or Z, to the minute or finer (as the API answers them). */
+/** An instant sent to the API: ISO 8601 with a UTC offset or Z, to the minute or finer (as the API answers them), within DATE_RANGE. */
 export const InstantInputSchema = z
   .string()
   .regex(/^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}(:\d{2}(\.\d{1,3})?)?(Z|[+-]\d{2}:\d{2})$/, 'Use a time like 2027-03-14T09:30-06:00')
-  .refine((s) => isRealDateTime(s) && !Number.isNaN(Date.parse(s)), 'Not a real date and time');
+  .refine((s) => isRealDateTime(s) && !Number.isNaN(Date.parse(s)), 'Not a real date and time')
+  .refine(isWithinDateRange, OUT_OF_RANGE);
 export const IdSchema = z.uuid();
 export const IdParamsSchema = z.object({ id: IdSchema }).strict();
 export const RoleSchema = z.enum(['client', 'front_desk', 'stylist', 'owner']);

@@ -4,16 +4,11 @@
 // DWELL_EVENTS_CHANGES (default 40) bookings made and cancelled one after another through server A. Each figure is
 // from sending the write to A until its `book` event arrives on B's stream. Target: p95 ≤ 2 s.
 import { randomUUID } from 'node:crypto';
-import { chmodSync, mkdtempSync, rmSync } from 'node:fs';
-import { tmpdir } from 'node:os';
-import { join } from 'node:path';
 import { DateTime } from 'luxon';
 import { createDb, createPool } from '@server/db/database';
-import { prepareLocalDatabase } from '@server/ops/local-database';
-import { stopCluster, type Cluster } from '@server/ops/postgres-cluster';
-import { onShutdownSignal } from '@server/ops/shutdown';
 import { loadBusySalon } from './busy-salon-db';
-import { startAppProcess, type AppProcess } from './load/app-process';
+import { startAppProcess } from './load/app-process';
+import { benchScratch } from './load/bench-scratch';
 import { sendJson, signIn } from './load/http-session';
 import { openStream } from '../setup/event-stream';
 
@@ -21,19 +16,9 @@ const CHANGES = Number(process.env.DWELL_EVENTS_CHANGES ?? 40);
 const TARGET_P95_MS = 2_000;
 
 async function main(): Promise<number> {
-  const scratch = mkdtempSync(join(tmpdir(), 'dwell-events-'));
-  chmodSync(scratch, 0o755); // the postgres user must be able to enter it
-  let cluster: Cluster | null = null;
-  const apps: AppProcess[] = [];
-  const cleanUp = async () => {
-    await Promise.all(apps.map((a) => a.stop()));
-    if (cluster) stopCluster(cluster);
-    rmSync(scratch, { recursive: true, force: true });
-  };
-  onShutdownSignal(cleanUp);
+  const { apps, cleanUp, database } = benchScratch('dwell-events-');
   try {
-    const prepared = await prepareLocalDatabase({ dataRoot: scratch, port: 56000 + Math.floor(Math.random() * 3000), database: 'dwell_events' });
-    cluster = prepared.cluster;
+    const prepared = await database('dwell_events');
     const db = createDb(createPool(prepared.url));
     const today = DateTime.now().setZone('America/Denver').toISODate()!;
     const busy = await loadBusySalon(db, { from: today, months: 1 });

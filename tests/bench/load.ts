@@ -6,16 +6,11 @@
 //   npm run load                 one app server
 //   npm run load -- --servers 2  two app servers on the same database (sessions and jobs in PostgreSQL)
 import { randomUUID } from 'node:crypto';
-import { chmodSync, mkdtempSync, rmSync } from 'node:fs';
-import { tmpdir } from 'node:os';
-import { join } from 'node:path';
 import { DateTime } from 'luxon';
 import { createDb, createPool } from '@server/db/database';
-import { prepareLocalDatabase } from '@server/ops/local-database';
-import { stopCluster, type Cluster } from '@server/ops/postgres-cluster';
-import { onShutdownSignal } from '@server/ops/shutdown';
 import { loadBusySalon } from './busy-salon-db';
-import { startAppProcess, type AppProcess } from './load/app-process';
+import { startAppProcess } from './load/app-process';
+import { benchScratch } from './load/bench-scratch';
 import { signIn } from './load/http-session';
 import { drained, measure, printFigures, someAddress, type Figures, type LoadSpec } from './load/measure';
 import { startSteadyWriter } from './load/steady-writer';
@@ -31,21 +26,10 @@ const WARM_UP_SECONDS = 3;
 const WRITE_EVERY_MS = 2_000;
 
 async function main(): Promise<number> {
-  const scratch = mkdtempSync(join(tmpdir(), 'dwell-load-'));
-  chmodSync(scratch, 0o755);
-  let cluster: Cluster | null = null;
-  const apps: AppProcess[] = [];
-  const cleanUp = async () => {
-    await Promise.all(apps.map((a) => a.stop()));
-    if (cluster) stopCluster(cluster);
-    rmSync(scratch, { recursive: true, force: true });
-  };
-  onShutdownSignal(cleanUp);
+  const { apps, cleanUp, database } = benchScratch('dwell-load-');
   try {
-    const pgPort = Number(process.env.PGPORT ?? 56000 + Math.floor(Math.random() * 3000));
     // Durable settings (fsync on), unlike the test cluster: booking figures should include the commit cost.
-    const prepared = await prepareLocalDatabase({ dataRoot: scratch, port: pgPort, database: 'dwell_load' });
-    cluster = prepared.cluster;
+    const prepared = await database('dwell_load', { port: process.env.PGPORT ? Number(process.env.PGPORT) : undefined });
     const db = createDb(createPool(prepared.url));
     const today = DateTime.now().setZone('America/Denver').toISODate()!;
     const t = Date.now();

@@ -66,4 +66,25 @@ describe('racing bookings', () => {
     expect(results.every((r) => r.status === 201)).toBe(true);
     expect(new Set(results.map((r) => r.body.id)).size).toBe(1);
   });
+
+  it('one key sent with two different requests at once: one is booked, the other is refused 422 naming the key', async () => {
+    const [a, b] = await Promise.all([book(localIso(thursday, '11:00'), 'race-two-bodies-01'), book(localIso(thursday, '12:00'), 'race-two-bodies-01')]);
+    expect([a.status, b.status].sort()).toEqual([201, 422]);
+    const refused = a.status === 422 ? a : b;
+    expect(refused.body.error.code).toBe('IDEMPOTENCY_KEY_REUSED');
+    expect(refused.body.error.fields.idempotencyKey).toMatch(/different request/);
+  });
+
+  it('a key reused later with another request is refused 422 naming the key, and books nothing more', async () => {
+    const first = await book(localIso(thursday, '16:00'), 'reused-later-0001');
+    expect(first.status).toBe(201);
+    const count = async () => (await t.testDb.db.selectFrom('bookings').select('id').where('salon_id', '=', salon.salonId).execute()).length;
+    const before = await count();
+    const again = await book(localIso(thursday, '16:30'), 'reused-later-0001');
+    expect(again.status).toBe(422);
+    expect(again.body.error.fields.idempotencyKey).toBeTruthy();
+    expect(await count()).toBe(before);
+    // The same request with the same key still answers the first booking.
+    expect((await book(localIso(thursday, '16:00'), 'reused-later-0001')).body.id).toBe(first.body.id);
+  });
 });

@@ -98,7 +98,8 @@ describe('POST /api/bookings', () => {
     expect(res.body.sittings.map((s: { chairId: string }) => s.chairId)).toEqual(chairIds);
     expect(res.body.sittings).toHaveLength(2);
     expect(res.body.sittings[1].start).toBe(option.sittings[1].start.replace(/(T\d\d:\d\d)/, '$1:00'));
-    const again = await book(option.sittings[0].start, 'flow-key-0001');
+    // A retry resends the same request (the same key with another request is refused: booking-concurrency.test.ts).
+    const again = await book(option.sittings[0].start, 'flow-key-0001', { chairIds });
     expect(again.status).toBe(201);
     expect(again.body.id).toBe(res.body.id);
     const rows = await t.testDb.db.selectFrom('bookings').select('id').where('client_id', '=', client.clientId!).execute();

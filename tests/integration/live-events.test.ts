@@ -6,8 +6,7 @@ import type { AddressInfo } from 'node:net';
 import { sql } from 'kysely';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createApp } from '@server/app';
-import { loadConfig } from '@server/config';
-import { startTestApp, signedInAgent, anonymousAgent, type TestApp } from '../setup/test-app';
+import { anotherApp, startTestApp, signedInAgent, anonymousAgent, type TestApp } from '../setup/test-app';
 import { headOfStream, openStream, type OpenStream } from '../setup/event-stream';
 import { futureWeekday, localIso } from '../setup/dates';
 import { insertSalon, type SalonFixture } from '../factories/salon';
@@ -30,10 +29,7 @@ const opened: OpenStream[] = [];
 
 const TONER = { sittings: [{ steps: [{ kind: 'hands_on' as const, label: 'Apply toner', product: 'toner_direct' as const, minutes: 30 }] }] };
 
-function secondApp(env: Record<string, string> = {}): App {
-  const config = loadConfig({ DATABASE_URL: t.testDb.url, DWELL_MODE: 'test', UPLOADS_DIR: t.uploadsDir, ...env });
-  return createApp({ db: t.testDb.db, pool: t.testDb.pool, config, jobs: t.jobs, ...t.outside });
-}
+const secondApp = (env: Record<string, string> = {}): App => anotherApp(t, env);
 
 async function serve(app: App): Promise<string> {
   const server = app.listen(0, '127.0.0.1');

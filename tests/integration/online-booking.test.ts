@@ -120,6 +120,38 @@ describe('holds', () => {
   });
 });
 
+describe('races for one hold', () => {
+  const thursday = futureWeekday(4, 2);
+  it('five clients claiming one hold at once: one owns it, every other is refused', async () => {
+    const held = await hold(localIso(thursday, '10:00'));
+    const clients = await Promise.all([1, 2, 3, 4, 5].map(() => insertUser(t.testDb.db, salon.salonId, 'client')));
+    const agents = await Promise.all(clients.map((c) => signedInAgent(t.app, c.email, c.password)));
+    const claims = await Promise.all(agents.map((c) => c.write('post', `/api/me/holds/${held.body.holdId}/claim`, { secret: held.body.holdSecret })));
+    // A claim that loses the race is 409; one that comes after the winner's has landed finds the hold not theirs (404).
+    expect(claims.filter((r) => r.status === 200)).toHaveLength(1);
+    expect(claims.filter((r) => r.status !== 200).every((r) => r.status === 409 || r.status === 404)).toBe(true);
+    const winner = clients[claims.findIndex((r) => r.status === 200)]!;
+    const row = await t.testDb.db.selectFrom('bookings').select('client_id').where('id', '=', held.body.holdId).executeTakeFirstOrThrow();
+    expect(row.client_id).toBe(winner.clientId);
+  });
+
+  it('one hold paid from ten tabs at once: one booking, and the money kept is one deposit', async () => {
+    const { c, client, id } = await claimedBy(localIso(thursday, '11:00'));
+    // Its own number, so the texts other tests count are not this booking's.
+    await t.testDb.db.updateTable('clients').set({ phone: '+19705550179' }).where('id', '=', client.clientId!).execute();
+    // Each tab made its own idempotency key, as separate pages do.
+    const answers = await Promise.all(Array.from({ length: 10 }, (_, i) => payWithSecret(c, id, `ten-tabs-key-${i}`, FAKE_CARDS.succeeds)));
+    expect(answers.every((a) => a.status === 200 || a.status === 409)).toBe(true);
+    for (const a of answers.filter((r) => r.status === 200)) expect(a.body).toMatchObject({ id, status: 'booked' });
+    const row = await t.testDb.db.selectFrom('bookings').select('status').where('id', '=', id).executeTakeFirstOrThrow();
+    expect(row.status).toBe('booked');
+    // Every charge but one is refunded at once (a single charge per payment is the money issue's design).
+    const charged = [...t.payments.intents.values()].filter((i) => i.metadata.booking === id && i.status === 'succeeded');
+    const refunded = t.payments.refunds.filter((r) => charged.some((i) => i.id === r.payment_intent));
+    expect(charged.length - refunded.length).toBe(1);
+  });
+});
+
 describe('deposit and confirmation', () => {
   it('a paid hold becomes booked; the e-mail carries an .ics that parses to the same start, end and zone; an SMS goes out', async () => {
     const { c, client, id } = await claimedBy(localIso(tuesday, '13:00'));

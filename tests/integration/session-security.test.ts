@@ -92,10 +92,11 @@ describe('cookies', () => {
   });
 
   it('carry Secure (and the CSRF cookie the __Host- prefix) in production', async () => {
-    const prod = loadConfig({ DATABASE_URL: t.testDb.url, DWELL_MODE: 'production', SESSION_SECRET: 'x'.repeat(40) });
+    // Behind its TLS-terminating proxy on loopback, which production believes only when TRUST_PROXY names it.
+    const prod = loadConfig({ DATABASE_URL: t.testDb.url, DWELL_MODE: 'production', SESSION_SECRET: 'x'.repeat(40), TRUST_PROXY: 'loopback' });
     expect(prod.secureCookies).toBe(true);
     const app = createApp({ db: t.testDb.db, pool: t.testDb.pool, jobs: t.jobs, ...t.outside, config: { ...prod, useFakes: true, uploadsDir: t.uploadsDir } });
-    // Behind the TLS-terminating proxy on loopback (trust proxy) the request counts as https. The test's
+    // Behind the trusted proxy the request counts as https. The test's
     // http client rightly keeps Secure cookies to itself, so they are passed on by hand.
     const csrf = await request(app).get('/api/csrf').set('X-Forwarded-Proto', 'https');
     const signIn = await request(app)
@@ -114,7 +115,7 @@ describe('cookies', () => {
     expect(all.some((c) => c.startsWith('__Host-dwell.csrf='))).toBe(true);
     expect(all.some((c) => c.startsWith('dwell.sid='))).toBe(true);
     for (const cookie of all) expect(cookie).toMatch(/; Secure/);
-    expect(signIn.headers['strict-transport-security']).toMatch(/max-age=/);
+    expect(signIn.headers['strict-transport-security']).toBe('max-age=31536000; includeSubDomains');
   });
 });
 
@@ -162,6 +163,8 @@ describe('Content-Security-Policy', () => {
     expect(csp['object-src']).toEqual(["'none'"]);
     expect(csp['base-uri']).toEqual(["'self'"]);
     expect(csp['frame-ancestors']).toEqual(["'self'"]);
+    // The client bundles its fonts: none from other sites, none inlined.
+    expect(csp['font-src']).toEqual(["'self'"]);
   });
 
   it('index.html loads its script from a file, never inline (the build copies this tag)', () => {

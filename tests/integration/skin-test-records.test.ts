@@ -131,8 +131,9 @@ describe('recording the reading of a pending skin test', () => {
   const refusals: [string, (appliedMs: number) => Record<string, unknown>, string, RegExp][] = [
     ['a read time before the applied time', (a) => ({ readAt: iso(a - 60_000), result: 'negative' }), 'readAt', /before it was applied/],
     ['a read time in the future', () => ({ readAt: iso(Date.now() + HOUR), result: 'negative' }), 'readAt', /future/],
-    ['the far future', () => ({ readAt: '9999-12-31T23:59Z', result: 'negative' }), 'readAt', /future/],
-    ['the year 1', () => ({ readAt: '0001-01-01T00:00Z', result: 'negative' }), 'readAt', /before it was applied/],
+    // Years outside the API's date range are refused by the shared instant schema, naming it.
+    ['the far future', () => ({ readAt: '9999-12-31T23:59Z', result: 'negative' }), 'readAt', /between 1900-01-01 and 2199-12-31/],
+    ['the year 1', () => ({ readAt: '0001-01-01T00:00Z', result: 'negative' }), 'readAt', /between 1900-01-01 and 2199-12-31/],
     ['a day that does not exist', () => ({ readAt: '2026-02-30T10:00Z', result: 'negative' }), 'readAt', /Not a real date/],
     ['a NUL byte in the time', (a) => ({ readAt: `${iso(a + HOUR)}\u0000`, result: 'negative' }), 'readAt', /.+/],
     ['a time without its offset', () => ({ readAt: '2026-11-30T10:00', result: 'negative' }), 'readAt', /.+/],

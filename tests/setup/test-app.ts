@@ -55,6 +55,12 @@ export async function startTestApp(env: Record<string, string> = {}): Promise<Te
   };
 }
 
+/** Another app server on the test app's database and services, as a second process behind a load balancer would be; `env` as for startTestApp. */
+export function anotherApp(t: TestApp, env: Record<string, string> = {}) {
+  const config = loadConfig({ DATABASE_URL: t.testDb.url, DWELL_MODE: 'test', UPLOADS_DIR: t.uploadsDir, ...env });
+  return createApp({ db: t.testDb.db, pool: t.testDb.pool, config, jobs: t.jobs, ...t.outside });
+}
+
 export type Agent = ReturnType<typeof request.agent>;
 
 /** A cookie-keeping client with a fresh CSRF token; `write` sends it on every write. */

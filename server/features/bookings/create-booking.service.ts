@@ -11,14 +11,14 @@ import { findService } from '../services';
 import { lockStylists } from '../planning';
 import { assertWithinProcessingLimits } from '../planning';
 import { bookAt } from './book-at.service';
-import { findIdempotent, saveIdempotent } from './idempotency.repository';
+import { oncePerKey } from './idempotent.service';
 
 /** The route a stored answer is filed under: this endpoint's method and path. */
 const idempotencyRoute = `${bookingsApi.create.method.toUpperCase()} ${bookingsApi.create.path}`;
 
 /**
- * One booking with all its sittings, or the answer already given to this idempotency key. The key is looked
- * up after the stylist lock, so a retry racing its original waits and then gets the original's booking.
+ * One booking with all its sittings, or the answer already given to this idempotency key (oncePerKey: a retry
+ * racing its original waits for it and gets the original's booking; the key with another request is a 422).
  */
 export async function createBooking(db: Kysely<Database>, salon: Salon, user: SessionUser, body: CreateBooking, now: Date): Promise<string> {
   const [client, service] = await Promise.all([findClient(db, salon.id, body.clientId), findService(db, salon.id, body.serviceId)]);
@@ -28,24 +28,26 @@ export async function createBooking(db: Kysely<Database>, salon: Salon, user: Se
   assertWithinProcessingLimits(body.stepPlan, salon.processingLimits);
   const quote = body.quoteId ? await findClientQuote(db, salon.id, client.id, body.quoteId) : undefined;
   if (body.quoteId && !quote) throw new AppError('VALIDATION_FAILED', 400, 'That quote is not this client’s.', { quoteId: 'That quote is not this client’s.' });
-  return db.transaction().execute(async (trx) => {
-    await lockStylists(trx, [body.stylistId]);
-    const earlier = await findIdempotent(trx, user.id, body.idempotencyKey);
-    if (earlier) return (earlier.response as { bookingId: string }).bookingId;
-    const bookingId = await bookAt(trx, {
-      salon,
-      clientId: client.id,
-      service,
-      plan: body.stepPlan,
-      stylistId: body.stylistId,
-      start: new Date(body.start),
-      chairIds: body.chairIds,
-      actorUserId: user.id,
-      now,
-      allowWaitingOnTest: true,
-      quote: quote && { id: quote.id, priceCents: quote.price_cents, depositCents: quote.deposit_cents },
-    });
-    await saveIdempotent(trx, user.id, body.idempotencyKey, idempotencyRoute, 201, { bookingId });
-    return bookingId;
-  });
+  const once = { userId: user.id, key: body.idempotencyKey, route: idempotencyRoute, request: body };
+  const booked = await db.transaction().execute((trx) =>
+    oncePerKey(trx, once, async () => {
+      await lockStylists(trx, [body.stylistId]);
+      return {
+        bookingId: await bookAt(trx, {
+          salon,
+          clientId: client.id,
+          service,
+          plan: body.stepPlan,
+          stylistId: body.stylistId,
+          start: new Date(body.start),
+          chairIds: body.chairIds,
+          actorUserId: user.id,
+          now,
+          allowWaitingOnTest: true,
+          quote: quote && { id: quote.id, priceCents: quote.price_cents, depositCents: quote.deposit_cents },
+        }),
+      };
+    }),
+  );
+  return booked.bookingId;
 }

@@ -8,6 +8,6 @@ export { tstzRange } from './bookings.repository';
 export { cancelBooking, cancelOutcome, depositOutcome } from './cancel-booking.service';
 export { sittingStarts } from './change-booking.repository';
 export { localDayBounds, todayIn } from './day-view.service';
-export { findIdempotent, saveIdempotent } from './idempotency.repository';
+export { oncePerKey } from './idempotent.service';
 export { moveSitting } from './move-booking.service';
 export { findStaffIdForUser, listStylists } from './salon-resources.repository';

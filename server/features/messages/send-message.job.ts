@@ -2,6 +2,7 @@ import type { Kysely } from 'kysely';
 import type { Database } from '@server/db/schema';
 import type { Mailer } from '@server/mail/mailer';
 import type { SmsSender } from '@server/sms/sms-sender';
+import { logger } from '@server/lib/logger';
 import { emailHtml } from './html-email';
 import {
   channelBlockers,
@@ -50,12 +51,25 @@ export async function sendMessage(db: Kysely<Database>, senders: Senders, id: st
         : (await senders.mailer.send({ to: m.toAddress, subject: m.subject, text: m.body, html: emailHtml(m.subject, m.body), attachments: m.attachments }),
           `smtp:${m.id}`);
     await markSent(db, id, ref, new Date());
+    // Never the address or the text: the message id finds both in the send log.
+    logger.info({ messageId: id, channel: m.channel, attempt: m.attempts, providerRef: ref }, 'message sent');
     return 'sent';
   } catch (err) {
     // A request the provider refuses as malformed (400) will not get better by waiting.
     const permanent = (err as { status?: number }).status === 400;
     const failed = permanent || m.attempts >= MAX_ATTEMPTS;
     const retryAt = new Date(now.getTime() + backoffMinutes(m.attempts) * 60_000);
+    logger.warn(
+      {
+        messageId: id,
+        channel: m.channel,
+        attempt: m.attempts,
+        failed,
+        retryAt: failed ? null : retryAt,
+        reason: String((err as Error).message ?? err).slice(0, 200),
+      },
+      failed ? 'message failed' : 'message not sent; will retry',
+    );
     await markTryFailed(db, id, {
       failed,
       sendAt: failed ? m.sendAt : retryAt,

@@ -93,14 +93,10 @@ export async function writeMixLog(db: Db, user: SessionUser, bookingId: string, 
   const booking = await bookingToWrite(db, user, bookingId);
   checkStrength(body.developerPercent, booking.maxDeveloperPercent, 'developerPercent');
   await requireSitting(db, bookingId, body.sittingSeq, 'sittingSeq');
-  try {
-    const [row] = await insertMixLogs(db, [{ ...body, salonId: user.salonId, bookingId, createdBy: user.id }]);
-    return toView(row!); // one row back per row written
-  } catch (e) {
-    // The unique (booking, sitting, bowl) key decides, so two saves of the same bowl at once cannot both land.
-    if ((e as { code?: string }).code !== '23505') throw e; // PostgreSQL's unique_violation
-    throw new AppError('CONFLICT', 409, `Bowl ${body.bowlNo} of sitting ${body.sittingSeq} is already written.`, { bowlNo: 'This bowl number is taken.' });
-  }
+  // The unique (booking, sitting, bowl) key decides, so two saves of the same bowl at once cannot both land: the
+  // second is answered 409 naming bowlNo (server/lib/unique-violation.ts).
+  const [row] = await insertMixLogs(db, [{ ...body, salonId: user.salonId, bookingId, createdBy: user.id }]);
+  return toView(row!); // one row back per row written
 }
 
 /** "Repeat last time": copies an earlier sitting's bowls (same client), leaving actual minutes and results blank. */

@@ -126,8 +126,16 @@ export async function releaseHoldRow(db: Db, id: string): Promise<boolean> {
   return Number(res.numDeletedRows) === 1;
 }
 
-export async function claimHoldRow(db: Db, id: string, clientId: string): Promise<void> {
-  await db.updateTable('bookings').set({ client_id: clientId }).where('id', '=', id).where('status', '=', 'held').execute();
+/** The client takes a held time still unclaimed (or already theirs), in one statement: of two at once, one wins. */
+export async function claimHoldRow(db: Db, id: string, clientId: string): Promise<boolean> {
+  const res = await db
+    .updateTable('bookings')
+    .set({ client_id: clientId })
+    .where('id', '=', id)
+    .where('status', '=', 'held')
+    .where((eb) => eb.or([eb('client_id', 'is', null), eb('client_id', '=', clientId)]))
+    .executeTakeFirst();
+  return Number(res.numUpdatedRows) === 1;
 }
 
 /** Held → booked, only while the hold is still within its time (one statement: no race with the lapse job). */

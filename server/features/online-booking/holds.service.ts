@@ -7,6 +7,7 @@ import type { CreateHoldSchema } from '@shared/schemas/online-booking.schemas';
 import type { JobQueue } from '@server/jobs/job-queue';
 import { sha256 } from '@server/lib/hash';
 import { AppError, notFound } from '@server/lib/app-error';
+import { isUniqueViolation } from '@server/lib/unique-violation';
 import { findSalon } from '../salon';
 import { findClientIdForUser } from '../clients';
 import { lockStylists } from '../planning';
@@ -81,10 +82,10 @@ export async function claimHold(db: Kysely<Database>, user: SessionUser, id: str
   const salon = await findSalon(db, hold.salonId);
   await assertHoldSkinTest(db, salon, hold, clientId, now);
   try {
-    await claimHoldRow(db, id, clientId);
+    if (!(await claimHoldRow(db, id, clientId))) throw new AppError('CONFLICT', 409, 'Someone else took this time a moment ago; please pick another.');
   } catch (e) {
-    // 23505 (PostgreSQL's unique_violation): another tab claimed a hold for this client a moment ago.
-    if ((e as { code?: string }).code !== '23505') throw e;
+    // Another tab claimed a hold for this client a moment ago (one open hold per client).
+    if (!isUniqueViolation(e)) throw e;
     await assertNoOpenHold(db, clientId, now, id);
     throw holdOpenError();
   }

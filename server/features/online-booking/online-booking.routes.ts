@@ -8,13 +8,15 @@ import { acceptCautions, claimHold, createHold, holdStatus } from './holds.servi
 import { myOpenHolds, releaseHold, resumeHold } from './open-holds.service';
 import { payHold } from './pay-hold.service';
 
-const limited = (limit: number) => rateLimited({ windowMs: 60_000, limit, message: 'Too many requests; wait a minute and try again.' });
-
 export function registerOnlineBookingRoutes({ table, db, jobs, payments, mailer, sms, readCache }: AppDeps): void {
+  const limited = (name: string, limit: number) =>
+    rateLimited(db, { name, windowMs: 60_000, limit, message: 'Too many requests; wait a minute and try again.' });
   apiRoute(table, onlineBookingApi.publicSalon, ({ params }) => publicSalon(db, params.slug));
-  apiRoute(table, onlineBookingApi.availability, ({ params, query }) => cachedFreeTimes(db, readCache, params.slug, query, new Date()), [limited(60)]);
+  apiRoute(table, onlineBookingApi.availability, ({ params, query }) => cachedFreeTimes(db, readCache, params.slug, query, new Date()), [
+    limited('free-times', 60),
+  ]);
   // Public, but a signed-in client who already holds a time is sent back to it (one open hold per client).
-  apiRoute(table, onlineBookingApi.createHold, ({ user, body }) => createHold(db, jobs, user, body, new Date()), [limited(20)]);
+  apiRoute(table, onlineBookingApi.createHold, ({ user, body }) => createHold(db, jobs, user, body, new Date()), [limited('holds', 20)]);
   apiRoute(table, onlineBookingApi.hold, ({ params }) => holdStatus(db, params.id, new Date()));
   apiRoute(table, onlineBookingApi.myHolds, async ({ user }) => ({ holds: await myOpenHolds(db, user, new Date()) }));
   apiRoute(table, onlineBookingApi.resumeHold, ({ user, params }) => resumeHold(db, user, params.id, new Date()));

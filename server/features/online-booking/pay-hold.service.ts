@@ -8,6 +8,7 @@ import type { Payments } from '@server/payments/payments';
 import type { Mailer } from '@server/mail/mailer';
 import type { SmsSender } from '@server/sms/sms-sender';
 import { AppError } from '@server/lib/app-error';
+import { logger } from '@server/lib/logger';
 import { findSalon } from '../salon';
 import { writeAudit } from '../audit';
 import { deskBookingView } from '../bookings';
@@ -53,16 +54,21 @@ export async function payHold(
       idempotencyKey: `deposit:${id}:${body.idempotencyKey}`,
       metadata: { booking: id },
     });
+    // Payment lines carry the booking and the provider's payment id, never the card.
+    const paymentLog = { bookingId: id, paymentRef: charge.paymentIntentId, amountCents: hold.depositCents };
     if (!charge.ok) {
+      logger.info(paymentLog, 'deposit declined');
       await recordPayment(db, { ...record, providerRef: charge.paymentIntentId, status: 'declined', message: charge.message });
       const until = hold.heldUntil ? formatTime(hold.heldUntil, formatFor(hold.timeZone), { zoneName: true }) : 'the hold runs out';
       throw new AppError('PAYMENT_DECLINED', 402, `${charge.message} Your time stays held until ${until}; you can try another card.`);
     }
+    logger.info(paymentLog, 'deposit charged');
     paymentRef = charge.paymentIntentId;
   }
   const booked = await confirmHoldRow(db, id, new Date());
   if (!booked) {
     if (paymentRef) {
+      logger.info({ bookingId: id, paymentRef }, 'deposit refunded: the hold was no longer held');
       await deps.payments.refund(paymentRef, `refund:${paymentRef}`);
       await recordPayment(db, { ...record, providerRef: paymentRef, status: 'refunded', message: 'Paid after the hold lapsed' });
     }

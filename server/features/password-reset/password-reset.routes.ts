@@ -5,7 +5,7 @@ import { rateLimited } from '@server/lib/rate-limit';
 import { confirmReset, requestReset } from './password-reset.service';
 
 export function registerPasswordResetRoutes({ table, db, mailer, config }: AppDeps): void {
-  const requestLimiter = rateLimited({ windowMs: 15 * 60_000, limit: 10, message: 'Too many reset requests; try again later.' });
+  const requestLimiter = rateLimited(db, { name: 'password-reset', windowMs: 15 * 60_000, limit: 10, message: 'Too many reset requests; try again later.' });
   apiRoute(
     table,
     passwordResetApi.request,

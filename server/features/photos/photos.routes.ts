@@ -6,16 +6,16 @@ import { rateLimited } from '@server/lib/rate-limit';
 import { uploadRoute } from '@server/lib/upload-route';
 import { addPhotos, photoFile, photoList, removePhoto } from './photos.service';
 
-// Decoding and re-encoding is the expensive part: a person gets a generous budget per quarter hour,
-// counted per signed-in user so a busy salon behind one address is not throttled as one.
-const uploadLimiter = rateLimited({
-  windowMs: 15 * 60_000,
-  limit: 60,
-  key: (req) => (req.user as SessionUser).id,
-  message: 'Too many uploads; try again in a few minutes.',
-});
-
 export function registerPhotoRoutes({ table, db, storage }: AppDeps): void {
+  // Decoding and re-encoding is the expensive part: a person gets a generous budget per quarter hour,
+  // counted per signed-in user so a busy salon behind one address is not throttled as one.
+  const uploadLimiter = rateLimited(db, {
+    name: 'uploads',
+    windowMs: 15 * 60_000,
+    limit: 60,
+    key: (req) => (req.user as SessionUser).id,
+    message: 'Too many uploads; try again in a few minutes.',
+  });
   uploadRoute(table, photosApi.addMine, ({ user, fields, files }) => addPhotos(db, storage, user, 'me', fields, files), [uploadLimiter]);
   uploadRoute(table, photosApi.addToClient, ({ user, params, fields, files }) => addPhotos(db, storage, user, { clientId: params.id }, fields, files), [
     uploadLimiter,

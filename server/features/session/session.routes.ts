@@ -6,7 +6,7 @@ import { authenticate, endSession, startSession } from '@server/auth/sessions';
 import { signUp } from './session.service';
 
 export function registerSessionRoutes({ table, db }: AppDeps): void {
-  const signUpLimiter = rateLimited({ windowMs: 15 * 60_000, limit: 20, message: 'Too many sign-ups from here; try again later.' });
+  const signUpLimiter = rateLimited(db, { name: 'sign-up', windowMs: 15 * 60_000, limit: 20, message: 'Too many sign-ups from here; try again later.' });
   apiRoute(table, sessionApi.signIn, async ({ req, res }) => {
     const user = await authenticate(req, res);
     await startSession(req, user);

@@ -6,7 +6,6 @@ import { writeAudit } from '../audit';
 import { findSalon } from '../salon';
 import { assertWithinProcessingLimits } from '../planning';
 import { affectedMessage } from './affected-message';
-import { uniqueName } from './name-taken';
 import { listFutureBookings } from './future-bookings.repository';
 import { insertService, listSetupServices, listSkills, retireService, updateService } from './services-setup.repository';
 
@@ -24,7 +23,7 @@ export async function setupServices(db: Db, salonId: string, now: Date): Promise
 
 export async function addService(db: Db, user: SessionUser, input: ServiceInput): Promise<SetupService> {
   assertWithinProcessingLimits(input.stepPlan, (await findSalon(db, user.salonId)).processingLimits);
-  const id = await uniqueName(insertService(db, user.salonId, input), 'service');
+  const id = await insertService(db, user.salonId, input);
   await writeAudit(db, { salonId: user.salonId, actorUserId: user.id, entity: 'service', entityId: id, action: 'added', after: input });
   return one(db, user.salonId, id);
 }
@@ -33,7 +32,7 @@ export async function addService(db: Db, user: SessionUser, input: ServiceInput)
 export async function changeService(db: Db, user: SessionUser, id: string, input: ServiceInput): Promise<SetupService> {
   const before = await one(db, user.salonId, id);
   assertWithinProcessingLimits(input.stepPlan, (await findSalon(db, user.salonId)).processingLimits);
-  await uniqueName(updateService(db, user.salonId, id, input), 'service');
+  await updateService(db, user.salonId, id, input);
   await writeAudit(db, { salonId: user.salonId, actorUserId: user.id, entity: 'service', entityId: id, action: 'changed', before, after: input });
   return one(db, user.salonId, id);
 }

@@ -7,7 +7,6 @@ import { writeAudit } from '../audit';
 import { findSalon } from '../salon';
 import { withFreeStylists } from './free-stylists.service';
 import { listFutureBookings } from './future-bookings.repository';
-import { uniqueName } from './name-taken';
 import { deleteOutOfService, insertOutOfService, insertUnit, listUnits, renameUnit, unitExists } from './units-setup.repository';
 
 type Units = Record<UnitKind, Unit[]>;
@@ -39,14 +38,14 @@ export function unitsOf(db: Db, salonId: string, now: Date): Promise<Units> {
 }
 
 export async function addUnit(db: Db, user: SessionUser, kind: UnitKind, name: string): Promise<Units> {
-  const id = await uniqueName(insertUnit(db, user.salonId, kind, name), singular(kind));
+  const id = await insertUnit(db, user.salonId, kind, name);
   await writeAudit(db, { salonId: user.salonId, actorUserId: user.id, entity: singular(kind), entityId: id, action: 'added', after: { name } });
   return listUnits(db, user.salonId, new Date());
 }
 
 export async function renameUnitOf(db: Db, user: SessionUser, kind: UnitKind, id: string, name: string): Promise<Units> {
   await assertUnit(db, user.salonId, kind, id);
-  await uniqueName(renameUnit(db, user.salonId, kind, id, name), singular(kind));
+  await renameUnit(db, user.salonId, kind, id, name);
   await writeAudit(db, { salonId: user.salonId, actorUserId: user.id, entity: singular(kind), entityId: id, action: 'renamed', after: { name } });
   return listUnits(db, user.salonId, new Date());
 }

@@ -13,14 +13,14 @@ import { findService } from '../services';
 import { findStaffIdForUser } from '../bookings';
 import { lockStylists } from '../planning';
 import { bookAt } from '../bookings';
-import { findIdempotent, saveIdempotent } from '../bookings';
+import { oncePerKey } from '../bookings';
 import { closeStandby } from '../standby';
 import { findSalon } from '../salon';
 import { loadBookingViews } from '../bookings';
 
 type FillWindow = z.infer<typeof FillWindowSchema>;
 
-/** A repeated request with the same key answers the first one's booking; stored under the route it came by. */
+/** A repeated request with the same key answers the first one's booking (oncePerKey); stored under the route it came by. */
 const IDEMPOTENCY_ROUTE = `POST ${windowsApi.fill.path}`;
 
 /** Books a walk-in or a standby client into a window with one action; the engine re-checks it fits. Answers the booking as the desk sees it. */
@@ -42,27 +42,35 @@ async function bookIntoWindow(db: Kysely<Database>, salon: Salon, user: SessionU
     throw new AppError('VALIDATION_FAILED', 400, 'Some fields need attention.', { serviceId: 'Only one-sitting services go into a window.' });
   }
   if (body.clientId && !(await findClient(db, salon.id, body.clientId))) throw notFound('That client');
-  return db.transaction().execute(async (trx) => {
-    await lockStylists(trx, [body.stylistId]);
-    const earlier = await findIdempotent(trx, user.id, body.idempotencyKey);
-    if (earlier) return (earlier.response as { bookingId: string }).bookingId;
-    const clientId =
-      body.clientId ??
-      (await insertClient(trx, { salonId: salon.id, userId: null, name: body.walkIn!.name, email: null, phone: body.walkIn!.phone || null, notes: 'Walk-in' }));
-    const bookingId = await bookAt(trx, {
-      salon,
-      clientId,
-      service,
-      plan: service.stepPlan,
-      stylistId: body.stylistId,
-      start: new Date(body.start),
-      latestStart: body.latestStart ? new Date(body.latestStart) : undefined,
-      actorUserId: user.id,
-      now,
-      allowWaitingOnTest: true,
-    });
-    if (body.standbyEntryId) await closeStandby(trx, salon.id, body.standbyEntryId);
-    await saveIdempotent(trx, user.id, body.idempotencyKey, IDEMPOTENCY_ROUTE, 201, { bookingId });
-    return bookingId;
-  });
+  const once = { userId: user.id, key: body.idempotencyKey, route: IDEMPOTENCY_ROUTE, request: body };
+  const booked = await db.transaction().execute((trx) =>
+    oncePerKey(trx, once, async () => {
+      await lockStylists(trx, [body.stylistId]);
+      const clientId =
+        body.clientId ??
+        (await insertClient(trx, {
+          salonId: salon.id,
+          userId: null,
+          name: body.walkIn!.name,
+          email: null,
+          phone: body.walkIn!.phone || null,
+          notes: 'Walk-in',
+        }));
+      const bookingId = await bookAt(trx, {
+        salon,
+        clientId,
+        service,
+        plan: service.stepPlan,
+        stylistId: body.stylistId,
+        start: new Date(body.start),
+        latestStart: body.latestStart ? new Date(body.latestStart) : undefined,
+        actorUserId: user.id,
+        now,
+        allowWaitingOnTest: true,
+      });
+      if (body.standbyEntryId) await closeStandby(trx, salon.id, body.standbyEntryId);
+      return { bookingId };
+    }),
+  );
+  return booked.bookingId;
 }

@@ -25,14 +25,12 @@ export function requestArbitrary(route: DocumentedRoute, opts: ArbitraryOptions 
         p.name,
         p.name === 'slug'
           ? fc.oneof(fc.constant(opts.slug), hostileText, fc.string())
-          : fc.oneof(arbitraryFor(p.schema as JsonSchema, opts).map(String), hostileText),
+          : fc.oneof(arbitraryFor(p.schema as JsonSchema, opts).map(asText), hostileText),
       ]),
     ),
   );
   const query = fc.record(
-    Object.fromEntries(
-      queryParams.map((p) => [p.name, arbitraryFor(p.schema as JsonSchema, opts).map((v) => (Array.isArray(v) ? v.map(asQueryText) : asQueryText(v)))]),
-    ),
+    Object.fromEntries(queryParams.map((p) => [p.name, arbitraryFor(p.schema as JsonSchema, opts).map((v) => (Array.isArray(v) ? v.map(asText) : asText(v)))])),
     { requiredKeys: queryParams.filter((p) => p.required).map((p) => p.name) },
   );
   const body = bodySchema ? arbitraryFor(bodySchema, opts) : fc.constant(undefined);
@@ -70,9 +68,9 @@ function encodeSegment(value: string): string {
   }
 }
 
-// A query value is text; an object drawn for a loosely typed parameter (fast-check may make it without a
+// A path segment or query value is text; an object drawn for a loosely typed parameter (fast-check may make it without a
 // prototype, which String() cannot convert) is sent as its JSON.
-const asQueryText = (v: unknown): string => (typeof v === 'object' && v !== null ? JSON.stringify(v) : String(v));
+const asText = (v: unknown): string => (typeof v === 'object' && v !== null ? JSON.stringify(v) : String(v));
 const isObject = (v: unknown): v is Record<string, unknown> => typeof v === 'object' && v !== null && !Array.isArray(v);
 
 function setKey(body: unknown, key: string, value: unknown) {
