@@ -7,6 +7,7 @@ import { FAKE_TWILIO, startOutsideServices } from './services';
 import { startJobQueue } from './jobs/job-queue';
 import { appJobs } from './jobs/app-jobs';
 import { messagesApi } from '../shared/api/messages.api';
+import { paymentsApi } from '../shared/api/payments.api';
 
 export interface RunningServer {
   outside: Awaited<ReturnType<typeof startOutsideServices>>;
@@ -27,6 +28,8 @@ export async function startServer(config: Config = loadConfig()): Promise<Runnin
   const url = `http://${config.host}:${port}`;
   // The SMS fake delivers simulated inbound texts (STOP/START) to this server's webhook, signed as the provider would.
   outside.smsFake?.setInboundWebhook(`${url}${messagesApi.inboundSms.path}`, FAKE_TWILIO.authToken);
+  // The payments fake posts its signed events to this server's webhook, as the provider posts to a registered endpoint.
+  outside.paymentsFake?.setWebhook(`${url}${paymentsApi.webhook.path}`);
   return {
     url,
     app,

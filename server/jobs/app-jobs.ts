@@ -15,6 +15,8 @@ import {
   type Senders,
 } from '../features/messages/send-message.job';
 import { planStaffMessages } from '../features/messages/staff-messages.service';
+import { closeStaleCheckouts, makePendingRefunds, releaseUnpaidDeposits } from '../features/payments';
+import type { Payments } from '../payments/payments';
 
 export interface JobOptions {
   /** Seconds after which a claim with no provider reference is taken for a dead worker's. */
@@ -22,7 +24,8 @@ export interface JobOptions {
 }
 
 /** Every background job the app runs. Each is idempotent: running it twice changes nothing more. */
-export function appJobs(db: Kysely<Database>, senders: Senders, options: JobOptions = {}): JobDefinition[] {
+export function appJobs(db: Kysely<Database>, services: Senders & { payments: Payments }, options: JobOptions = {}): JobDefinition[] {
+  const senders: Senders = services;
   return [
     // A hold lapses at its own time; the sweep every minute catches any whose job was lost.
     { name: LAPSE_HOLD_JOB, handler: async (data) => void (await lapseHolds(db, new Date(), String(data.bookingId))) },
@@ -48,5 +51,10 @@ export function appJobs(db: Kysely<Database>, senders: Senders, options: JobOpti
     },
     // Stylists' next-day lists and the desk's no-deposit list, at 18:00 in each salon's zone.
     { name: 'plan-staff-messages', handler: async () => void (await planStaffMessages(db, new Date())), everyMinute: true },
+    // Money: refunds decided but not made yet (the provider was down) are asked for again under the same key; desk
+    // bookings whose deposit is unpaid at their release time are released; payment pages nobody should pay are closed.
+    { name: 'make-pending-refunds', handler: async () => void (await makePendingRefunds(db, services.payments)), everyMinute: true, atStart: true },
+    { name: 'release-unpaid-deposits', handler: async () => void (await releaseUnpaidDeposits(db, new Date())), everyMinute: true },
+    { name: 'close-stale-checkouts', handler: async () => void (await closeStaleCheckouts(db, services.payments)), everyMinute: true },
   ];
 }

@@ -12,6 +12,7 @@ import { lockStylists } from '../planning';
 import { assertWithinProcessingLimits } from '../planning';
 import { bookAt } from './book-at.service';
 import { findIdempotent, saveIdempotent } from './idempotency.repository';
+import { setDepositDueBy } from './change-booking.repository';
 
 /** The route a stored answer is filed under: this endpoint's method and path. */
 const idempotencyRoute = `${bookingsApi.create.method.toUpperCase()} ${bookingsApi.create.path}`;
@@ -45,6 +46,7 @@ export async function createBooking(db: Kysely<Database>, salon: Salon, user: Se
       allowWaitingOnTest: true,
       quote: quote && { id: quote.id, priceCents: quote.price_cents, depositCents: quote.deposit_cents },
     });
+    if (salon.unpaidDepositReleaseHours !== null) await setDepositDueBy(trx, bookingId, salon.unpaidDepositReleaseHours, now);
     await saveIdempotent(trx, user.id, body.idempotencyKey, idempotencyRoute, 201, { bookingId });
     return bookingId;
   });

@@ -10,7 +10,7 @@ import { payHold } from './pay-hold.service';
 
 const limited = (limit: number) => rateLimited({ windowMs: 60_000, limit, message: 'Too many requests; wait a minute and try again.' });
 
-export function registerOnlineBookingRoutes({ table, db, jobs, payments, mailer, sms, readCache }: AppDeps): void {
+export function registerOnlineBookingRoutes({ table, db, jobs, payments, mailer, sms, readCache, config }: AppDeps): void {
   apiRoute(table, onlineBookingApi.publicSalon, ({ params }) => publicSalon(db, params.slug));
   apiRoute(table, onlineBookingApi.availability, ({ params, query }) => cachedFreeTimes(db, readCache, params.slug, query, new Date()), [limited(60)]);
   // Public, but a signed-in client who already holds a time is sent back to it (one open hold per client).
@@ -21,5 +21,7 @@ export function registerOnlineBookingRoutes({ table, db, jobs, payments, mailer,
   apiRoute(table, onlineBookingApi.releaseHold, ({ user, params, body }) => releaseHold(db, user, params.id, body.secret, new Date()));
   apiRoute(table, onlineBookingApi.claimHold, ({ user, params, body }) => claimHold(db, user, params.id, body.secret, new Date()));
   apiRoute(table, onlineBookingApi.acceptCautions, ({ user, params, body }) => acceptCautions(db, user, params.id, body.secret, body.version, new Date()));
-  apiRoute(table, onlineBookingApi.payHold, ({ user, params, body }) => payHold(db, { payments, mailer, sms }, user, params.id, body, new Date()));
+  apiRoute(table, onlineBookingApi.payHold, ({ user, params, body, req }) =>
+    payHold(db, { payments, mailer, sms }, user, params.id, body.secret, config.publicUrl ?? `${req.protocol}://${req.get('host')}`, new Date()),
+  );
 }
