@@ -1,9 +1,9 @@
 import ICAL from 'ical.js';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { anonymousAgent, signedInAgent, startTestApp, type TestApp } from '../setup/test-app';
-import { insertSalon, type SalonFixture } from '../factories/salon';
+import type { SalonFixture } from '../factories/salon';
 import { insertUser, type UserFixture } from '../factories/user';
-import { insertPlannedService } from '../factories/service';
+import { onlineBookingSalon, type Agent, type OnlineSalon } from '../factories/online-hold';
 import { futureWeekday, localIso } from '../setup/dates';
 import { FAKE_CARDS } from '@server/fakes/payments-fake';
 import { LAPSE_HOLD_JOB } from '@server/features/online-booking/holds.service';
@@ -18,62 +18,21 @@ let salon: SalonFixture;
 let slug: string;
 let ana: UserFixture;
 let consultation: string;
-const tuesday = futureWeekday(2, 2);
-const secrets: Record<string, string> = {};
+let secrets: Record<string, string>;
+let hold: OnlineSalon['hold'];
+let claimedBy: OnlineSalon['claimedBy'];
 let webhooks: Awaited<ReturnType<typeof listenForPaymentWebhooks>>;
+const tuesday = futureWeekday(2, 2);
 
 beforeAll(async () => {
   t = await startTestApp();
   webhooks = await listenForPaymentWebhooks(t);
-  const db = t.testDb.db;
-  salon = await insertSalon(db, { chairs: 2, basins: 1 });
-  // No quiet hours here (they are tested in messages.test.ts): the confirmation SMS must go at once at any hour
-  // the suite runs, not wait for 08:00 salon time.
-  await db.updateTable('salons').set({ quiet_from: '00:00', quiet_to: '00:00' }).where('id', '=', salon.salonId).execute();
-  slug = (await db.selectFrom('salons').select('slug').where('id', '=', salon.salonId).executeTakeFirstOrThrow()).slug;
-  ana = await insertUser(db, salon.salonId, 'stylist');
-  consultation = await insertPlannedService(db, salon.salonId, {
-    name: 'Consultation',
-    category: 'colour',
-    depositCents: 2500,
-    plan: { sittings: [{ steps: [{ kind: 'hands_on', label: 'Consultation', product: 'none', minutes: 30 }] }] },
-  });
-  await db.updateTable('services').set({ online_bookable: true, category: 'consultation' }).where('id', '=', consultation).execute();
+  ({ salon, slug, ana, consultation, secrets, hold, claimedBy } = await onlineBookingSalon(t));
 });
 afterAll(async () => {
   await webhooks.close();
   await t.close();
 });
-
-let visitors = 0;
-/** A hold from a new visitor; each has an address of their own (behind the loopback proxy), as visitors do. */
-async function hold(start: string) {
-  const visitor = await anonymousAgent(t.app);
-  return visitor.write(
-    'post',
-    '/api/public/holds',
-    { salonSlug: slug, serviceId: consultation, stylistId: ana.staffId, start },
-    { 'X-Forwarded-For': `10.1.0.${++visitors}` },
-  );
-}
-
-/** A new client who signs up, claims a hold and (unless told not to) accepts its cautions. */
-async function claimedBy(start: string, acceptCautions = true) {
-  const held = await hold(start);
-  expect(held.status).toBe(201);
-  const client = await insertUser(t.testDb.db, salon.salonId, 'client');
-  await t.testDb.db.updateTable('clients').set({ phone: '+19705550177' }).where('id', '=', client.clientId!).execute();
-  const c = await signedInAgent(t.app, client.email, client.password);
-  const claim = await c.write('post', `/api/me/holds/${held.body.holdId}/claim`, { secret: held.body.holdSecret });
-  expect(claim.status).toBe(200);
-  if (acceptCautions) {
-    expect(
-      (await c.write('post', `/api/me/holds/${held.body.holdId}/cautions`, { version: claim.body.cautions.version, secret: held.body.holdSecret })).status,
-    ).toBe(204);
-  }
-  secrets[held.body.holdId] = held.body.holdSecret;
-  return { c, client, id: held.body.holdId as string, secret: held.body.holdSecret as string, claim: claim.body };
-}
 
 describe('public pages', () => {
   it('show services, hours and policies, and free times — nothing about any client', async () => {
@@ -395,8 +354,6 @@ describe("the owner's figures", () => {
     expect(booked.chairOccupancy).toBeCloseTo((before.chairOccupancy ?? 0) + 30 / 7200, 10);
   });
 });
-
-type Agent = Awaited<ReturnType<typeof signedInAgent>>;
 
 const statusOf = async (id: string) => (await t.testDb.db.selectFrom('bookings').select('status').where('id', '=', id).executeTakeFirst())?.status;
 
