@@ -16,6 +16,7 @@ function page(title: string, body: string): string {
 <title>${escape(title)} · Test payment service</title>
 <style>
   body { font-family: system-ui, sans-serif; margin: 0; background: #eef1f4; color: #16202a; }
+  h1 { font-size: 1.35rem; }
   main { max-width: 26rem; margin: 2rem auto; background: #fff; padding: 1.5rem; border-radius: 0.75rem; box-shadow: 0 1px 4px #0002; }
   .banner { font-size: 0.85rem; background: #fff7d6; border: 1px solid #d8c46a; padding: 0.5rem 0.75rem; border-radius: 0.5rem; }
   label { display: block; font-weight: 600; margin-top: 0.9rem; }
@@ -68,7 +69,7 @@ export function extraStepPage(s: PageSession, attemptId: string): string {
   return page(
     'Confirm this payment',
     `<h1>Confirm this payment</h1>
-<p>Your card issuer asks you to confirm a payment of <strong>${escape(s.amountText)}</strong> for ${escape(s.description)}.</p>
+<p>Your card issuer asks you to confirm this payment of <strong>${escape(s.amountText)}</strong>: ${escape(s.description)}.</p>
 <form method="post" action="/pay/${escape(s.id)}/confirm">
   <input type="hidden" name="attempt" value="${escape(attemptId)}">
   <button type="submit" name="answer" value="confirm">Confirm the payment</button>
