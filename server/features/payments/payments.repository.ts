@@ -25,37 +25,44 @@ const PAYMENT_COLUMNS = [
   'provider_ref as providerRef',
 ] as const;
 
+/** A payment in as it is written: taken (succeeded), by card through the provider or at the desk. */
+interface NewPayment {
+  salonId: string;
+  bookingId: string;
+  clientId: string | null;
+  kind: 'deposit' | 'balance';
+  method: PaymentMethod;
+  amountCents: number;
+  currency: string;
+  providerRef?: string;
+  providerSessionId?: string;
+  recordedBy?: string;
+  note?: string;
+}
+
+const paymentRow = (p: NewPayment) => ({
+  salon_id: p.salonId,
+  booking_id: p.bookingId,
+  client_id: p.clientId,
+  kind: p.kind,
+  method: p.method,
+  amount_cents: p.amountCents,
+  currency: p.currency,
+  provider_ref: p.providerRef ?? null,
+  provider_session_id: p.providerSessionId ?? null,
+  recorded_by: p.recordedBy ?? null,
+  status: 'succeeded' as const,
+  message: p.note ?? '',
+});
+
 /**
  * A card payment made on a hosted page, once: the provider's payment and the session it came through are each
  * unique, so a second event about the same payment inserts nothing and answers null.
  */
-export async function insertCardPayment(
-  db: Db,
-  p: {
-    salonId: string;
-    bookingId: string;
-    clientId: string | null;
-    kind: 'deposit' | 'balance';
-    amountCents: number;
-    currency: string;
-    providerRef: string;
-    providerSessionId: string;
-  },
-): Promise<string | null> {
+export async function insertCardPayment(db: Db, p: Omit<NewPayment, 'method'> & { providerRef: string; providerSessionId: string }): Promise<string | null> {
   const row = await db
     .insertInto('payments')
-    .values({
-      salon_id: p.salonId,
-      booking_id: p.bookingId,
-      client_id: p.clientId,
-      kind: p.kind,
-      method: 'card',
-      amount_cents: p.amountCents,
-      currency: p.currency,
-      provider_ref: p.providerRef,
-      provider_session_id: p.providerSessionId,
-      status: 'succeeded',
-    })
+    .values(paymentRow({ ...p, method: 'card' }))
     .onConflict((oc) => oc.doNothing())
     .returning('id')
     .executeTakeFirst();
@@ -63,34 +70,10 @@ export async function insertCardPayment(
 }
 
 /** A deposit taken at the desk, in cash or on the salon's card terminal, with who took it. */
-export async function insertDeskPayment(
-  db: Db,
-  p: {
-    salonId: string;
-    bookingId: string;
-    clientId: string | null;
-    method: PaymentMethod;
-    amountCents: number;
-    currency: string;
-    recordedBy: string;
-    note: string;
-  },
-): Promise<string> {
+export async function insertDeskPayment(db: Db, p: Omit<NewPayment, 'kind' | 'providerRef' | 'providerSessionId'> & { recordedBy: string }): Promise<string> {
   const row = await db
     .insertInto('payments')
-    .values({
-      salon_id: p.salonId,
-      booking_id: p.bookingId,
-      client_id: p.clientId,
-      kind: 'deposit',
-      method: p.method,
-      amount_cents: p.amountCents,
-      currency: p.currency,
-      provider_ref: null,
-      recorded_by: p.recordedBy,
-      status: 'succeeded',
-      message: p.note,
-    })
+    .values(paymentRow({ ...p, kind: 'deposit' }))
     .returning('id')
     .executeTakeFirstOrThrow();
   return row.id;

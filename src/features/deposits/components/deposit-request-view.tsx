@@ -3,7 +3,7 @@ import { Button } from '@client/components/ui/button';
 import { FormAlert } from '@client/components/ui/form-alert';
 import { LoadingState } from '@client/components/ui/loading-state';
 import { Notice } from '@client/components/ui/notice';
-import { zoneLabel } from '@client/lib/time';
+import { LinkCard } from '@client/components/ui/link-card';
 import { formatDate, formatTime } from '@shared/format/date-time';
 import { formatFor } from '@shared/format/locale';
 import { formatMoney } from '@shared/money/money';
@@ -49,33 +49,26 @@ export function DepositRequestView({ token, request, returned }: Props) {
     );
   };
   return (
-    <article aria-labelledby="deposit-heading" className="mx-auto flex w-full max-w-md flex-col gap-4 rounded-2xl bg-white p-5 shadow-sm ring-1 ring-ink/10">
-      <p className="text-sm font-bold text-ink/80">{request.salonName}</p>
-      <h1 id="deposit-heading" className="text-2xl font-extrabold tracking-tight">
-        {request.clientName ? `${request.clientName.split(/\s+/)[0]}, your deposit` : 'Your deposit'}
-      </h1>
-      <dl className="grid grid-cols-[max-content_1fr] gap-x-4 gap-y-2">
-        <dt className="font-bold">Service</dt>
-        <dd>{request.serviceName}</dd>
-        <dt className="font-bold">With</dt>
-        <dd>{request.stylistName}</dd>
-        <dt className="font-bold">When</dt>
-        <dd>
-          {formatDate(request.start, ctx, { width: 'short' })}, <span className="tabular">{formatTime(request.start, ctx)}</span>
-          <span className="block text-sm text-ink/80">Salon time: {zoneLabel(request.timeZone, request.start.slice(0, 10))}</span>
-        </dd>
-        <dt className="font-bold">Deposit</dt>
-        <dd className="tabular">{formatMoney(request.depositCents, request.currency)}</dd>
-        {due && request.deposit.dueBy && (
-          <>
-            <dt className="font-bold">Pay by</dt>
-            <dd className="tabular">
-              {formatTime(request.deposit.dueBy, ctx)}, {formatDate(request.deposit.dueBy, ctx, { width: 'short' })}
-            </dd>
-          </>
-        )}
-      </dl>
+    <LinkCard
+      salonName={request.salonName}
+      title={request.clientName ? `${request.clientName.split(/\s+/)[0]}, your deposit` : 'Your deposit'}
+      visit={request}
+      facts={
+        <>
+          <dt className="font-bold">Deposit</dt>
+          <dd className="tabular">{formatMoney(request.depositCents, request.currency)}</dd>
+          {due && request.deposit.dueBy && (
+            <>
+              <dt className="font-bold">Pay by</dt>
+              <dd className="tabular">
+                {formatTime(request.deposit.dueBy, ctx)}, {formatDate(request.deposit.dueBy, ctx, { width: 'short' })}
+              </dd>
+            </>
+          )}
+        </>
+      }
+    >
       {body()}
-    </article>
+    </LinkCard>
   );
 }
