@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { depositState, refundBeyondDue } from './deposit-state';
+import { depositState, refundBeyondDue, sittingAhead } from './deposit-state';
 
 // Amounts are whole minor units with each currency's ISO 4217 exponent: cents for USD (2), yen for JPY (0),
 // fils for KWD (3). The rule adds and subtracts them as integers, so no currency rounds anything.
@@ -53,5 +53,17 @@ describe('refundBeyondDue', () => {
     // Refunded at the provider already ($25.00 of $25.00): nothing more goes back.
     expect(refundBeyondDue({ allowedCents: 0, netPaidCents: 0, thisPaymentLeftCents: 0 })).toBe(0);
     expect(refundBeyondDue({ allowedCents: 0, netPaidCents: 5000, thisPaymentLeftCents: 2500 })).toBe(2500);
+  });
+});
+
+describe('sittingAhead', () => {
+  it('names the first sitting still to come, or the first when all are over', () => {
+    const sittings = [
+      { start: '2027-03-02T16:00:00Z', end: '2027-03-02T22:00:00Z' },
+      { start: '2027-03-05T16:00:00Z', end: '2027-03-05T19:00:00Z' },
+    ];
+    expect(sittingAhead(sittings, new Date('2027-03-01T00:00:00Z'))).toBe(sittings[0]);
+    expect(sittingAhead(sittings, new Date('2027-03-03T00:00:00Z'))).toBe(sittings[1]);
+    expect(sittingAhead(sittings, new Date('2027-04-01T00:00:00Z'))).toBe(sittings[0]);
   });
 });

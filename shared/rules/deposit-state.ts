@@ -42,6 +42,11 @@ export function depositState(f: DepositFacts): DepositState {
   return state(net > 0 ? 'paid' : 'none');
 }
 
+/** The sitting a deposit is asked for: the first still to come (a correction's second sitting), else the first. */
+export function sittingAhead<S extends { start: string; end: string }>(sittings: S[], now: Date): S | undefined {
+  return sittings.find((s) => Date.parse(s.end) > now.getTime()) ?? sittings[0];
+}
+
 /**
  * How much of one payment goes back because nobody owed it: what the booking may hold as its deposit (`allowedCents`:
  * its deposit while it runs, nothing once its held time lapsed or it was cancelled) against everything taken, this

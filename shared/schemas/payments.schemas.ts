@@ -61,6 +61,7 @@ export const PublicDepositSchema = z.object({
   clientName: z.string(),
   serviceName: z.string(),
   stylistName: z.string(),
+  /** The sitting the deposit is for: the first still to come. */
   start: InstantSchema,
   timeZone: z.string(),
   currency: z.string(),

@@ -4,6 +4,7 @@ import type { Payments } from '@server/payments/payments';
 import type { CheckoutAnswer, PublicDeposit } from '@shared/schemas/payments.schemas';
 import { AppError, notFound } from '@server/lib/app-error';
 import { sha256 } from '@server/lib/hash';
+import { sittingAhead } from '@shared/rules/deposit-state';
 import { deskBookingView } from '../bookings';
 import { findSalon } from '../salon';
 import { openCheckout } from './checkout.service';
@@ -20,14 +21,14 @@ async function requested(db: Kysely<Database>, token: string) {
 }
 
 /** A deposit request as its link shows it: the booking, the deposit and what is still due. */
-export async function viewDepositRequest(db: Kysely<Database>, token: string): Promise<PublicDeposit> {
+export async function viewDepositRequest(db: Kysely<Database>, token: string, now: Date): Promise<PublicDeposit> {
   const { salon, booking } = await requested(db, token);
   return {
     salonName: salon.name,
     clientName: booking.client.name,
     serviceName: booking.service.name,
     stylistName: booking.stylist.name,
-    start: booking.sittings[0]!.start, // every booking has a sitting
+    start: sittingAhead(booking.sittings, now)!.start, // every booking has a sitting
     timeZone: salon.timeZone,
     currency: salon.currency,
     depositCents: booking.depositCents,

@@ -10,6 +10,7 @@ import type { DepositTakenBodySchema } from '@shared/schemas/payments.schemas';
 import { AppError } from '@server/lib/app-error';
 import { sha256 } from '@server/lib/hash';
 import { formatMoney } from '@shared/money/money';
+import { sittingAhead } from '@shared/rules/deposit-state';
 import { formatDateTime } from '@shared/format/date-time';
 import { formatFor } from '@shared/format/locale';
 import { writeAudit } from '../audit';
@@ -103,7 +104,7 @@ export async function requestDeposit(
       requestedBy: user.id,
     });
     const ctx = formatFor(salon.timeZone);
-    const first = view.sittings[0]!; // every booking has a sitting
+    const ahead = sittingAhead(view.sittings, now)!; // every booking has a sitting
     const message = depositRequestMessage({
       salonId: salon.id,
       salonName: salon.name,
@@ -113,7 +114,7 @@ export async function requestDeposit(
       channel,
       serviceName: view.service.name,
       stylistName: view.stylist.name,
-      when: formatDateTime(first.start, ctx, { year: false }),
+      when: formatDateTime(ahead.start, ctx, { year: false }),
       amount: formatMoney(view.deposit.dueCents, salon.currency),
       releasedAt: view.deposit.dueBy ? formatDateTime(view.deposit.dueBy, ctx, { year: false }) : null,
       link: `${baseUrl}/deposit/${token}`,

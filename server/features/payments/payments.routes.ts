@@ -21,6 +21,6 @@ export function registerPaymentRoutes({ table, db, config, payments, mailer, sms
     requestDeposit(db, { mailer, sms }, user, params.id, body.channel, baseUrl(req), new Date()),
   );
   apiRoute(table, paymentsApi.depositTaken, ({ user, params, body }) => markDepositTaken(db, payments, user, params.id, body));
-  apiRoute(table, paymentsApi.depositRequest, ({ params }) => viewDepositRequest(db, params.token));
+  apiRoute(table, paymentsApi.depositRequest, ({ params }) => viewDepositRequest(db, params.token, new Date()));
   apiRoute(table, paymentsApi.payDepositRequest, ({ params, req }) => payDepositRequest(db, payments, params.token, baseUrl(req), new Date()));
 }

@@ -58,7 +58,17 @@ export async function settleProviderRefund(trx: Db, refund: ProviderRefund, sess
     providerRef: refund.id,
     message: 'Refunded at the payment provider',
   });
+  await auditMoney(
+    trx,
+    { id: payment.bookingId, salonId: payment.salonId },
+    `refunded ${formatMoney(refund.amountMinor, payment.currency)} at the payment provider`,
+  );
   return recorded ? settlePayment(trx, recorded.checkout, recorded.paymentId, now) : nothingAfter();
+}
+
+/** A movement of the booking's money in its history (the provider's doing: no person). */
+function auditMoney(trx: Db, booking: { id: string; salonId: string }, action: string) {
+  return writeAudit(trx, { salonId: booking.salonId, actorUserId: null, entity: 'booking', entityId: booking.id, action });
 }
 
 async function recordCheckoutPayment(trx: Db, session: CheckoutSession): Promise<{ checkout: StoredCheckout; paymentId: string } | null> {
@@ -85,6 +95,8 @@ async function settlePayment(trx: Db, checkout: StoredCheckout, paymentId: strin
   const booking = await lockBookingForMoney(trx, checkout.bookingId);
   const payment = await lockPayment(trx, paymentId);
   let running = booking !== undefined && RUNNING.includes(booking.status);
+  const paid = formatMoney(payment.amountCents, payment.currency);
+  if (running && booking) await auditMoney(trx, booking, `deposit paid on the payment page: ${paid}`);
   if (booking?.status === 'held' && (await confirmHeld(trx, booking.id, now))) {
     running = true;
     await writeAudit(trx, {
@@ -108,6 +120,7 @@ async function settlePayment(trx: Db, checkout: StoredCheckout, paymentId: strin
   const why: RefundWhy = running ? 'paid' : !booking || booking.status === 'held' ? 'late' : 'closed';
   const refundId = await insertRefund(trx, { of: payment, amountCents: amount, status: 'pending', providerRef: null, message: refundNotes[why] });
   after.refundIds.push(refundId);
+  if (booking) await auditMoney(trx, booking, `refunded ${formatMoney(amount, payment.currency)} of a ${paid} payment: ${refundNotes[why].toLowerCase()}`);
   if (checkout.clientId) {
     const salon = await findSalon(trx, checkout.salonId);
     const message = refundMessage({
