@@ -8,7 +8,7 @@ import type { StepPlan } from '@shared/schemas/step-plan.schemas';
 import type { Salon } from '@shared/schemas/salon.schemas';
 import { limitFor, type ProcessingLimits } from '@shared/rules/processing-limits';
 import { noShowFrom } from '@shared/rules/sitting-status';
-import { depositState } from '@shared/rules/deposit-state';
+import { depositState, type DepositState } from '@shared/rules/deposit-state';
 
 export interface BookingFilter {
   salonId: string;
@@ -115,10 +115,10 @@ export async function loadBookingViewRows(
       priceCents: b.price_cents,
       depositCents: b.deposit_cents,
       depositOutcome: b.deposit_outcome,
-      deposit: {
-        ...depositState({ depositCents: b.deposit_cents, bookingStatus: b.status, outcome: b.deposit_outcome, ...(money.get(b.id) ?? NO_MONEY) }),
-        dueBy: orNull(b.deposit_due_by),
-      },
+      deposit: withDueBy(
+        depositState({ depositCents: b.deposit_cents, bookingStatus: b.status, outcome: b.deposit_outcome, ...(money.get(b.id) ?? NO_MONEY) }),
+        orNull(b.deposit_due_by),
+      ),
       cancelReason: b.cancel_reason,
       stepPlan: plan,
       sittings: own.map((s) => ({
@@ -189,6 +189,9 @@ export function isoInZone(timeZone: string, filter: Pick<BookingFilter, 'from' |
     return `${text.slice(0, 16)}:${seconds < 10 ? '0' : ''}${seconds}${text.slice(16)}`;
   };
 }
+
+/** The release time matters only while something is due (a paid or cancelled booking is released by nobody). */
+const withDueBy = (state: DepositState, dueBy: string | null) => ({ ...state, dueBy: state.dueCents > 0 ? dueBy : null });
 
 const NO_MONEY = { paidCents: 0, refundedCents: 0 };
 
