@@ -56,18 +56,24 @@ async function openOrReuse(db: Kysely<Database>, payments: Payments, want: NewSt
       continue;
     }
     // Asked under the row's own key: a retry, or a caller that waited in vain for the first, gets the same session.
-    const session = await payments.createCheckout(
-      {
-        amountMinor: open.amountCents,
-        currency: open.currency,
-        description: open.description,
-        successUrl: open.successUrl,
-        cancelUrl: open.cancelUrl,
-        expiresAt: open.expiresAt,
-        metadata: { checkout: open.id, booking: open.bookingId, kind: open.kind },
-      },
-      `checkout:${open.id}`,
-    );
+    const session = await payments
+      .createCheckout(
+        {
+          amountMinor: open.amountCents,
+          currency: open.currency,
+          description: open.description,
+          successUrl: open.successUrl,
+          cancelUrl: open.cancelUrl,
+          expiresAt: open.expiresAt,
+          metadata: { checkout: open.id, booking: open.bookingId, kind: open.kind },
+        },
+        `checkout:${open.id}`,
+      )
+      .catch(async (err: unknown) => {
+        // The provider keeps a failed answer under its key too: the next try starts a new row, with a new key.
+        await closeCheckout(db, open.id, 'expired');
+        throw err;
+      });
     await setProviderSession(db, open.id, session.id, session.url);
     if (!session.url) throw new AppError('INTERNAL', 502, 'The payment service gave no payment page.');
     return session.url;
