@@ -38,8 +38,11 @@ describe('deposits at the desk', () => {
 
     // The client opens the link on a phone, pays on the payment service's own page, and comes back to it.
     const phone = await (await browser.newContext({ viewport: { width: 375, height: 812 }, isMobile: true, hasTouch: true })).newPage();
-    await phone.goto(link);
-    const pay = phone.getByRole('button', { name: /^Pay deposit of \$/ });
+    // An amount written into the address changes nothing: the page and the payment ask what the server says is due
+    // (ISO 4217 USD, 2 decimals: cents to dollars).
+    await phone.goto(`${link}?amount=1`);
+    const dueText = new Intl.NumberFormat('en-US', { style: 'currency', currency: 'USD' }).format(asked.deposit.dueCents / 100);
+    const pay = phone.getByRole('button', { name: `Pay deposit of ${dueText}` });
     await pay.waitFor();
     await expectAccessible(phone);
     await pay.click();
