@@ -45,6 +45,7 @@ import { registerConsultationRoutes } from './features/consultations/consultatio
 import { registerStrandTestRoutes } from './features/strand-tests/strand-tests.routes';
 import { registerQuotePriceRoutes } from './features/quote-prices/quote-prices.routes';
 import { registerMessageRoutes } from './features/messages/messages.routes';
+import { registerPaymentRoutes } from './features/payments';
 import { createLiveHub, registerLiveEventRoutes } from './features/live-events';
 import { createDiskStorage } from './storage/disk-storage';
 import { createReadCache } from './lib/read-cache';
@@ -108,6 +109,7 @@ export function createApp(deps: Omit<AppDeps, 'table' | 'storage' | 'readCache' 
     registerStrandTestRoutes,
     registerQuotePriceRoutes,
     registerMessageRoutes,
+    registerPaymentRoutes,
     registerLiveEventRoutes,
   ]) {
     register(full);

@@ -19,11 +19,15 @@ const ConfigSchema = z.object({
   SMS_FROM: z.string().default('+19705550100'),
   /** Outside production: a Twilio-compatible API to send through instead of starting the in-process fake. */
   SMS_API_URL: z.string().url().optional(),
-  /** Outside production: a payments API (the local fake) to charge through instead of starting the in-process one. */
+  /** Outside production: a payments API (the local fake) to pay through instead of starting the in-process one. */
   PAYMENTS_API_URL: z.string().url().optional(),
   /** A claim this old with no provider reference is taken for a dead worker's and queued again. */
   MESSAGE_CLAIM_TIMEOUT_SECONDS: z.coerce.number().int().min(1).max(3600).default(300),
   STRIPE_SECRET_KEY: z.string().startsWith('sk_').optional(),
+  /** The signing secret of the payment provider's webhook endpoint (`POST /webhooks/payments`). */
+  STRIPE_WEBHOOK_SECRET: z.string().startsWith('whsec_').optional(),
+  /** Outside production: the port of the in-process payments fake and its hosted card page (0: any free port). */
+  PAYMENTS_FAKE_PORT: z.coerce.number().int().min(0).max(65535).default(0),
   UPLOADS_DIR: z.string().min(1).optional(),
   /** A session ends after this many minutes without a request… */
   SESSION_IDLE_MINUTES: z.coerce
@@ -62,6 +66,8 @@ export interface Config {
   mailFrom: string;
   twilio: { accountSid: string; authToken: string; from: string } | null;
   stripeSecretKey: string | null;
+  stripeWebhookSecret: string | null;
+  paymentsFakePort: number;
   smsApiUrl: string | null;
   paymentsApiUrl: string | null;
   messageClaimTimeoutSeconds: number;
@@ -118,6 +124,8 @@ export function loadConfig(env: Record<string, string | undefined> = process.env
     smtpUrl: parsed.SMTP_URL ?? null,
     mailFrom: parsed.MAIL_FROM,
     stripeSecretKey: parsed.STRIPE_SECRET_KEY ?? null,
+    stripeWebhookSecret: parsed.STRIPE_WEBHOOK_SECRET ?? null,
+    paymentsFakePort: parsed.PAYMENTS_FAKE_PORT,
     smsApiUrl: parsed.DWELL_MODE === 'production' ? null : (parsed.SMS_API_URL ?? null),
     paymentsApiUrl: parsed.DWELL_MODE === 'production' ? null : (parsed.PAYMENTS_API_URL ?? null),
     messageClaimTimeoutSeconds: parsed.MESSAGE_CLAIM_TIMEOUT_SECONDS,

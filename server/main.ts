@@ -8,6 +8,7 @@ import { FAKE_TWILIO, startOutsideServices } from './services';
 import { startJobQueue } from './jobs/job-queue';
 import { appJobs } from './jobs/app-jobs';
 import { messagesApi } from '../shared/api/messages.api';
+import { paymentsApi } from '../shared/api/payments.api';
 
 export interface RunningServer {
   outside: Awaited<ReturnType<typeof startOutsideServices>>;
@@ -30,6 +31,8 @@ export async function startServer(config: Config = loadConfig()): Promise<Runnin
   // The SMS fake delivers simulated inbound texts (STOP/START) to this server's webhook, signed as the provider would.
   outside.smsFake?.setInboundWebhook(`${url}${messagesApi.inboundSms.path}`, FAKE_TWILIO.authToken);
   logger.info({ url, mode: config.mode }, 'listening');
+  // The payments fake posts its signed events to this server's webhook, as the provider posts to a registered endpoint.
+  outside.paymentsFake?.setWebhook(`${url}${paymentsApi.webhook.path}`);
   return {
     url,
     app,

@@ -46,6 +46,8 @@ export interface SalonsTable {
   lift_compromised_levels: Generated<number>;
   /** Minutes past a sitting's planned start before the desk may mark a no-show (migrations/20261207T0900). */
   no_show_grace_minutes: Generated<number>;
+  /** Hours after a desk booking is made that it is released while its deposit is unpaid; null: never (migrations/20261208T0900). */
+  unpaid_deposit_release_hours: ColumnType<number | null, number | null | undefined, number | null>;
 }
 
 /** A guardian's consent to oxidative colour for a client under 16, recorded by the desk (migrations/20261205T0320). */
@@ -206,6 +208,8 @@ export interface BookingsTable {
   /** Bumped on every move, so messages planned for older times can be told apart. */
   version: Generated<number>;
   quote_id: ColumnType<string | null, string | null | undefined, string | null>;
+  /** When this desk booking is released if its deposit is still unpaid (the salon's setting when it was made). */
+  deposit_due_by: ColumnType<Date | null, Date | string | null | undefined, Date | string | null>;
 }
 
 export interface SittingsTable {
@@ -327,16 +331,67 @@ export interface WindowOffersTable {
   expires_at: Timestamp;
 }
 
+export type PaymentKind = 'deposit' | 'balance' | 'refund' | 'tip';
+export type PaymentMethod = 'card' | 'cash';
+export type PaymentStatus = 'pending' | 'succeeded' | 'declined' | 'failed';
+
+/** One money movement each (migrations/20261208T0900): a payment in, or a refund naming the payment it returns. */
 export interface PaymentsTable {
   id: Generated<string>;
   salon_id: string;
   booking_id: string;
   client_id: string | null;
+  kind: ColumnType<PaymentKind, PaymentKind | undefined, PaymentKind>;
+  method: ColumnType<PaymentMethod, PaymentMethod | undefined, PaymentMethod>;
+  /** The provider's payment (a payment intent) or refund; null in cash, at the card terminal, or before a refund is made. */
   provider_ref: string | null;
+  /** The hosted payment session a card payment came through. */
+  provider_session_id: ColumnType<string | null, string | null | undefined, string | null>;
+  refund_of: ColumnType<string | null, string | null | undefined, string | null>;
+  /** Who took it at the desk; null for what came through the provider. */
+  recorded_by: ColumnType<string | null, string | null | undefined, string | null>;
   amount_cents: number;
   currency: string;
-  status: 'succeeded' | 'declined' | 'refunded';
+  status: PaymentStatus;
   message: Generated<string>;
+  created_at: DefaultTimestamp;
+}
+
+/** A hosted payment session, one open per booking and kind (migrations/20261208T0900). */
+export interface CheckoutSessionsTable {
+  id: Generated<string>;
+  salon_id: string;
+  booking_id: string;
+  client_id: string | null;
+  kind: 'deposit' | 'balance';
+  amount_cents: number;
+  currency: string;
+  description: string;
+  success_url: string;
+  cancel_url: string;
+  provider_session_id: string | null;
+  url: string | null;
+  status: ColumnType<'open' | 'completed' | 'expired', 'open' | 'completed' | 'expired' | undefined, 'open' | 'completed' | 'expired'>;
+  expires_at: Timestamp;
+  created_at: DefaultTimestamp;
+}
+
+/** Every provider webhook event handled, once each. */
+export interface PaymentEventsTable {
+  event_id: string;
+  type: string;
+  object_id: string | null;
+  received_at: DefaultTimestamp;
+}
+
+export interface DepositRequestsTable {
+  id: Generated<string>;
+  salon_id: string;
+  booking_id: string;
+  token_hash: string;
+  channel: 'sms' | 'email';
+  amount_cents: number;
+  requested_by: string | null;
   created_at: DefaultTimestamp;
 }
 
@@ -423,6 +478,9 @@ export interface Database {
   idempotency_keys: IdempotencyKeysTable;
   window_offers: WindowOffersTable;
   payments: PaymentsTable;
+  checkout_sessions: CheckoutSessionsTable;
+  payment_events: PaymentEventsTable;
+  deposit_requests: DepositRequestsTable;
   caution_acceptances: CautionAcceptancesTable;
   hair_histories: HairHistoriesTable;
   client_photos: ClientPhotosTable;

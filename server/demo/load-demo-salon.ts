@@ -1,8 +1,8 @@
 import { sql } from 'kysely';
 import { DateTime } from 'luxon';
 import type { Db } from '../db/database';
-import type { Kysely } from 'kysely';
-import type { Database } from '../db/schema';
+import type { Insertable, Kysely } from 'kysely';
+import type { Database, PaymentsTable } from '../db/schema';
 import type { BookingStatus } from '@shared/schemas/common.schemas';
 import { hashPassword } from '../auth/password';
 import { insertBooking, tstzRange, type NewStep } from '../features/bookings/bookings.repository';
@@ -193,6 +193,7 @@ async function insertDemoBook(db: Db, ids: Ids, now: Date): Promise<number> {
     .execute();
 
   let count = 0;
+  const deposits: Insertable<PaymentsTable>[] = [];
   let clientTurn = 1; // client 0 (the demo client account) has the correction
   // Oxidative colour only for clients whose skin test allows it (see insertDemoSkinTests).
   const nextClient = (needsSkinTest: boolean): number => {
@@ -233,10 +234,37 @@ async function insertDemoBook(db: Db, ids: Ids, now: Date): Promise<number> {
         sittings: sittings.map((s, i) => ({ chairId: ids.chairs[s.placement.chair]!, steps: steps[i]! })),
       });
       if (status !== 'cancelled') await recordPastActuals(db, bookingId, count, today.toJSDate(), status === 'no_show');
+      const deposit = demoDeposit(ids, { bookingId, clientId, status, depositCents: service.depositCents ?? 0 }, count);
+      if (deposit) deposits.push(deposit);
       count++;
     }
   }
+  if (deposits.length) await db.insertInto('payments').values(deposits).execute();
   return count;
+}
+
+/**
+ * Deposits as the desk takes them: paid when the booking was made, in cash or on the card terminal, except every fourth
+ * booking still to come, whose deposit is due (to ask for by SMS or e-mail, or take at the desk). Cancelled ones paid nothing.
+ */
+function demoDeposit(
+  ids: Ids,
+  b: { bookingId: string; clientId: string; status: BookingStatus; depositCents: number },
+  n: number,
+): Insertable<PaymentsTable> | null {
+  if (b.depositCents <= 0 || b.status === 'cancelled' || (b.status === 'booked' && n % 4 === 1)) return null;
+  return {
+    salon_id: ids.salonId,
+    booking_id: b.bookingId,
+    client_id: b.clientId,
+    kind: 'deposit',
+    method: n % 2 === 0 ? 'card' : 'cash',
+    amount_cents: b.depositCents,
+    currency: demoSalon.currency,
+    provider_ref: null,
+    recorded_by: ids.deskUserId,
+    status: 'succeeded',
+  };
 }
 
 function localTime(day: DateTime, hhmm: string): DateTime {

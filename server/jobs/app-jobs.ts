@@ -18,6 +18,8 @@ import { planStaffMessages } from '../features/messages/staff-messages.service';
 import { pruneSignInAttempts } from '../features/session/sign-in-attempts.repository';
 import { ACCOUNT_LOOKBACK_DAYS, SIGN_IN_LIMITS } from '../features/session/sign-in-limits';
 import { pruneRateLimits } from '../lib/rate-limits.repository';
+import { closeStaleCheckouts, makePendingRefunds, releaseUnpaidDeposits } from '../features/payments';
+import type { Payments } from '../payments/payments';
 
 export interface JobOptions {
   /** Seconds after which a claim with no provider reference is taken for a dead worker's. */
@@ -25,7 +27,8 @@ export interface JobOptions {
 }
 
 /** Every background job the app runs. Each is idempotent: running it twice changes nothing more. */
-export function appJobs(db: Kysely<Database>, senders: Senders, options: JobOptions = {}): JobDefinition[] {
+export function appJobs(db: Kysely<Database>, services: Senders & { payments: Payments }, options: JobOptions = {}): JobDefinition[] {
+  const senders: Senders = services;
   return [
     // A hold lapses at its own time; the sweep every minute catches any whose job was lost.
     { name: LAPSE_HOLD_JOB, handler: async (data) => void (await lapseHolds(db, new Date(), String(data.bookingId))) },
@@ -60,5 +63,10 @@ export function appJobs(db: Kysely<Database>, senders: Senders, options: JobOpti
       },
       everyMinute: true,
     },
+    // Money: refunds decided but not made yet (the provider was down) are asked for again under the same key; desk
+    // bookings whose deposit is unpaid at their release time are released; payment pages nobody should pay are closed.
+    { name: 'make-pending-refunds', handler: async () => void (await makePendingRefunds(db, services.payments)), everyMinute: true, atStart: true },
+    { name: 'release-unpaid-deposits', handler: async () => void (await releaseUnpaidDeposits(db, new Date())), everyMinute: true },
+    { name: 'close-stale-checkouts', handler: async () => void (await closeStaleCheckouts(db, services.payments)), everyMinute: true },
   ];
 }

@@ -50,9 +50,11 @@ export function apiRoute<const E extends Endpoint>(
   table.records.push({ method: spec.method, path: spec.path, access: spec.access, endpoint: spec });
   register(table.registry, spec, status);
   table.router[spec.method](spec.path, requireAccess(spec.access), ...before, async (req: Request, res: Response) => {
-    assertStorable({ params: req.params, query: req.query, body: req.body });
+    // A raw body is bytes for a signature check, read by the handler itself.
+    const raw = spec.bodyType === 'raw';
+    assertStorable({ params: req.params, query: req.query, body: raw ? undefined : req.body });
     const ctx = {
-      body: spec.body ? spec.body.parse(req.body ?? {}) : undefined,
+      body: spec.body && !raw ? spec.body.parse(req.body ?? {}) : undefined,
       query: spec.query ? spec.query.parse(req.query) : undefined,
       params: spec.params ? spec.params.parse(req.params) : undefined,
       user: req.user as SessionUser,

@@ -39,7 +39,7 @@ async function main() {
       SESSION_SECRET: localSessionSecret(join(dataRoot, 'session-secret')),
     });
     const server = await startServer(config);
-    printWelcome(server.url);
+    printWelcome(server.url, server.outside.paymentsFake?.url.port);
     onShutdownSignal(async () => {
       console.log('\ndwell: stopping…');
       await server.close();

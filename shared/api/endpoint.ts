@@ -28,8 +28,12 @@ export interface Endpoint {
   params?: ZodType;
   query?: ZodType;
   body?: ZodType;
-  /** How the body arrives: JSON by default; `form` for providers' webhooks; `multipart` for uploads. */
-  bodyType?: 'json' | 'form' | 'multipart';
+  /**
+   * How the body arrives: JSON by default; `form` for providers' form webhooks; `raw` for a provider's JSON webhook
+   * whose signature covers the exact bytes (the handler reads them from `req.body`; `body` only documents it);
+   * `multipart` for uploads.
+   */
+  bodyType?: 'json' | 'form' | 'raw' | 'multipart';
   /** The JSON answer (for an event stream, each event's data); absent when the answer is empty (204/202) or a file. */
   response?: ZodType;
   /**

@@ -23,6 +23,7 @@ import {
   ResumeHoldSchema,
   SlugParamsSchema,
 } from '../schemas/online-booking.schemas';
+import { CheckoutAnswerSchema } from '../schemas/payments.schemas';
 import { endpoint } from './endpoint';
 
 /**
@@ -105,10 +106,10 @@ export const onlineBookingApi = {
     method: 'post',
     path: '/api/me/holds/:id/pay',
     access: ['client'],
-    summary: 'Pay the deposit; the hold becomes a booking',
+    summary: "Pay the deposit on the payment provider's hosted page (one page per hold); a hold with no deposit is booked at once",
     params: HoldParamsSchema,
     body: PayHoldSchema,
-    response: BookingViewSchema,
+    response: CheckoutAnswerSchema,
   }),
   calendarFile: endpoint({
     method: 'get',

@@ -3,6 +3,7 @@ import { StepPlanSchema } from './step-plan.schemas';
 import { BookingStatusSchema, IdSchema, InstantSchema, LocalDateSchema, StepKindSchema } from './common.schemas';
 import { SittingStatusSchema } from './day-of-service.schemas';
 import { ProductFamilySchema } from './step-plan.schemas';
+import { DepositSchema } from './payments.schemas';
 
 /** Read models of the book, as the desk, the stylist and the client see them. */
 export const StepViewSchema = z.object({
@@ -49,6 +50,8 @@ export const BookingViewSchema = z.object({
   depositCents: z.number().int(),
   /** Kept or refunded when the booking was cancelled; null otherwise. */
   depositOutcome: z.enum(['kept', 'refunded']).nullable(),
+  /** Where the deposit stands from the money that moved: due, paid, refunded or kept. */
+  deposit: DepositSchema,
   cancelReason: z.string().nullable(),
   sittings: z.array(SittingViewSchema),
   /**
@@ -73,6 +76,8 @@ export const OpeningDaySchema = z.object({ date: LocalDateSchema, hours: z.array
 export const DayViewSchema = z.object({
   date: LocalDateSchema,
   timeZone: z.string(),
+  /** The salon's ISO 4217 currency, for the deposits the day shows. */
+  currency: z.string(),
   /** The salon's opening hours that date; empty when it is closed. */
   hours: z.array(OpenSpanSchema),
   stylists: z.array(StaffSummarySchema),

@@ -92,22 +92,9 @@ export const ResumeHoldSchema = z.object({}).strict();
 export const ReleaseHoldSchema = z.object({ secret: z.string().min(20).max(100).optional() }).strict();
 export const AcceptCautionsSchema = z.object({ version: z.string().min(1).max(40), secret: z.string().min(20).max(100) }).strict();
 
-export const CardSchema = z
-  .object({
-    number: z
-      .string()
-      .transform((s) => s.replace(/[\s-]/g, ''))
-      .pipe(z.string().regex(/^\d{12,19}$/, 'Enter the card number')),
-    expMonth: z.number().int().min(1).max(12),
-    expYear: z.number().int().min(2024).max(2100),
-    cvc: z.string().regex(/^\d{3,4}$/, 'Enter the 3 or 4 digits on the back'),
-  })
-  .strict();
-export const PayHoldSchema = z
-  .object({ secret: z.string().min(20).max(100), card: CardSchema.optional(), idempotencyKey: z.string().min(8).max(100) })
-  .strict();
+/** Paying a held time: the amount is the server's and the card is typed on the payment provider's own page. */
+export const PayHoldSchema = z.object({ secret: z.string().min(20).max(100) }).strict();
 
-/** What cancelling now would mean for the deposit, shown before the client confirms. */
 /**
  * What cancelling now does to the deposit (desk and client alike), the rule that decided it, and the words to read:
  * no deposit; a hold not paid yet; refunded in full as the skin-test record now blocks the colour; the salon keeps

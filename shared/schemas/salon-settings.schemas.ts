@@ -49,6 +49,8 @@ export const SalonSettingsSchema = z
     cancellationKeeps: z.enum(['deposit', 'nothing']),
     // Minutes past a sitting's planned start before a no-show may be marked. Left out: unchanged.
     noShowGraceMinutes: whole(0, 240, 'minutes').optional(),
+    // Release a desk booking whose deposit is still unpaid this many hours after it was made; null: never. Left out: unchanged.
+    unpaidDepositReleaseHours: whole(1, 720, 'hours').nullable().optional(),
     quietFrom: ClockTimeSchema,
     quietTo: ClockTimeSchema,
     reminderOffsetsHours: z

@@ -23,6 +23,8 @@ export const SalonSchema = z.object({
   cancellationKeeps: z.enum(['deposit', 'nothing']),
   /** Minutes past a sitting's planned start before the desk may mark a no-show. */
   noShowGraceMinutes: z.number().int(),
+  /** Hours after a desk booking is made that it is released while its deposit is still unpaid; null: never. */
+  unpaidDepositReleaseHours: z.number().int().nullable(),
   /** Minutes each limited product family may be on the hair here, without heat (plan editors check against them). */
   processingLimits: ProcessingLimitsSchema,
   /** Levels one sitting may lift, by the state of the hair (the quote rules use them). */

@@ -34,9 +34,13 @@ export const pages = {
   me: '/me',
   myHair: '/me/hair',
   bookingConfirmed: '/me/bookings/:id/booked',
+  /** Where the payment provider's hosted page sends the client back after paying a held time (the server writes it too). */
+  holdPaid: '/me/holds/:id/paid',
   salon: '/salon/:slug',
   salonBook: '/salon/:slug/book',
   offer: '/offer/:token',
+  /** A deposit request's link, sent by SMS or e-mail (the server writes it too). */
+  depositRequest: '/deposit/:token',
 } as const;
 
 /** A page's path with its `:params` filled (URL-encoded) and the non-empty query values appended. */
@@ -80,6 +84,8 @@ export const paths = {
   salon: (slug: string) => to(pages.salon, { slug }),
   salonBook: (slug: string, serviceId?: string) => to(pages.salonBook, { slug }, { service: serviceId }),
   bookingConfirmed: (id: string) => to(pages.bookingConfirmed, { id }),
+  holdPaid: (id: string) => to(pages.holdPaid, { id }),
+  depositRequest: (token: string) => to(pages.depositRequest, { token }),
 } as const;
 
 /** The demo salon loaded by `npm start`; signed-out visitors get a link to its public page. */

@@ -3,6 +3,7 @@ import type { BookingStatus, Role, StepKind } from '@shared/schemas/common.schem
 import type { SittingStatus } from '@shared/schemas/day-of-service.schemas';
 import { formatMoney } from '@shared/money/money';
 import { SALON_LOCALE } from '@shared/format/locale';
+import type { Deposit } from '@shared/schemas/payments.schemas';
 
 /** The words the UI uses for the API's enum values (docs/glossary.md). */
 export const stepKindLabels: Record<StepKind, string> = {
@@ -55,4 +56,20 @@ export function depositOutcomeText(booking: Pick<BookingView, 'depositCents' | '
   if (booking.depositOutcome === null || booking.depositCents <= 0) return '';
   const amount = formatMoney(booking.depositCents, currency);
   return booking.depositOutcome === 'kept' ? `The ${amount} deposit was kept by the salon.` : `The ${amount} deposit was refunded to the client.`;
+}
+
+/** Where a deposit stands, in words: "Deposit due $65.00", "Deposit paid", "Deposit refunded", "Deposit kept"; none asked: nothing. */
+export function depositStatusText(deposit: Deposit, currency: string): string | null {
+  switch (deposit.status) {
+    case 'none':
+      return null;
+    case 'due':
+      return `Deposit due ${formatMoney(deposit.dueCents, currency)}`;
+    case 'paid':
+      return 'Deposit paid';
+    case 'refunded':
+      return 'Deposit refunded';
+    case 'kept':
+      return 'Deposit kept';
+  }
 }

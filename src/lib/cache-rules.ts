@@ -9,6 +9,7 @@ import { mailboxApi } from '@shared/api/mailbox.api';
 import { messagesApi } from '@shared/api/messages.api';
 import { mixLogsApi } from '@shared/api/mix-logs.api';
 import { onlineBookingApi } from '@shared/api/online-booking.api';
+import { paymentsApi } from '@shared/api/payments.api';
 import { photosApi } from '@shared/api/photos.api';
 import { sessionApi } from '@shared/api/session.api';
 import { standbyApi } from '@shared/api/standby.api';
@@ -19,6 +20,7 @@ import type { BookingView } from '@shared/schemas/booking-view.schemas';
 import type { MyPreferences } from '@shared/schemas/contact.schemas';
 import type { BookChangedEvent } from '@shared/schemas/live-events.schemas';
 import type { Hold } from '@shared/schemas/online-booking.schemas';
+import type { DepositDetails } from '@shared/schemas/payments.schemas';
 import { apiKey } from './api-client';
 
 /*
@@ -84,10 +86,24 @@ export const holdReleased = (queryClient: QueryClient): Promise<unknown> =>
 /** A write found the hold lapsed: its cached state is read again so every step sees it. */
 export const holdLapsed = (queryClient: QueryClient, holdId: string): Promise<unknown> => refreshRecord(queryClient, [onlineBookingApi.hold], holdId);
 
+// ——— Deposits: taken at the desk, asked for by a link ———
+
+/**
+ * A booking's deposit changed at the desk (taken, or a request sent): its panel gets the answer; the booking's page,
+ * the days and weeks of the book and the client's card show where the deposit stands, so they are read again.
+ */
+export function depositChanged(queryClient: QueryClient, details: DepositDetails): Promise<unknown> {
+  queryClient.setQueryData(apiKey(paymentsApi.deposit, { params: { id: details.bookingId } }), details);
+  return Promise.all([
+    refreshRecord(queryClient, [bookingsApi.one, bookingsApi.history], details.bookingId),
+    refreshEndpoints(queryClient, [...BOOK_VIEWS, clientsApi.one, ...SENT]),
+  ]);
+}
+
 /** Views of one date (`?date=`; today when it is left out). */
 const DAY_VIEWS = [bookingsApi.deskDay, bookingsApi.stylistDay, windowsApi.list];
 /** A booking's own page and what it opens. */
-const BOOKING_PAGES = [bookingsApi.one, bookingsApi.history, bookingsApi.cancelTerms];
+const BOOKING_PAGES = [bookingsApi.one, bookingsApi.history, bookingsApi.cancelTerms, paymentsApi.deposit];
 /** What a change of the book may send or queue: the send log and the Outbox of the local fakes. */
 const SENT = [messagesApi.sendLog, mailboxApi.mail, mailboxApi.sms];
 

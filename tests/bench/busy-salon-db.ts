@@ -239,15 +239,9 @@ export async function loadBusySalon(db: Kysely<Database>, options: BusySalonOpti
       during: string;
       live: boolean;
     }> = [];
-    const paymentRows: Array<{
-      salon_id: string;
-      booking_id: string;
-      client_id: string;
-      provider_ref: string;
-      amount_cents: number;
-      currency: string;
-      status: 'succeeded' | 'refunded';
-    }> = [];
+    // One row per money movement: each deposit paid, and a refund naming it where the cancellation refunded it.
+    const paymentRows: Insertable<Database['payments']>[] = [];
+    const refundRows: Insertable<Database['payments']>[] = [];
     let cancelled = 0;
     let noShows = 0;
     for (const b of scenario.bookings ?? []) {
@@ -282,9 +276,17 @@ export async function loadBusySalon(db: Kysely<Database>, options: BusySalonOpti
         created_at: new Date(first.getTime() - 14 * 86_400_000),
       });
       if (service.depositCents > 0) {
-        const pay = { salon_id: salonId, booking_id: bookingId, client_id: clientId, amount_cents: service.depositCents, currency: 'USD' };
-        paymentRows.push({ ...pay, provider_ref: `pi_busy_${bookingId}`, status: 'succeeded' });
-        if (outcome === 'refunded') paymentRows.push({ ...pay, provider_ref: `pi_busy_${bookingId}`, status: 'refunded' });
+        const pay = {
+          salon_id: salonId,
+          booking_id: bookingId,
+          client_id: clientId,
+          amount_cents: service.depositCents,
+          currency: 'USD',
+          status: 'succeeded' as const,
+        };
+        const paymentId = randomUUID();
+        paymentRows.push({ ...pay, id: paymentId, kind: 'deposit', provider_ref: `pi_busy_${bookingId}` });
+        if (outcome === 'refunded') refundRows.push({ ...pay, kind: 'refund', refund_of: paymentId, provider_ref: `re_busy_${bookingId}` });
       }
       const sittingId = randomUUID();
       sittingRows.push({ id: sittingId, booking_id: bookingId, seq: 1, chair_id: chairIds.get(b.chair)!, during: tstzRange(first, last), live });
@@ -305,6 +307,7 @@ export async function loadBusySalon(db: Kysely<Database>, options: BusySalonOpti
     await insertChunked(sittingRows, (rows) => trx.insertInto('sittings').values(rows).execute());
     await insertChunked(stepRows, (rows) => trx.insertInto('booking_steps').values(rows).execute());
     await insertChunked(paymentRows, (rows) => trx.insertInto('payments').values(rows).execute());
+    await insertChunked(refundRows, (rows) => trx.insertInto('payments').values(rows).execute());
     return {
       salonId,
       slug,

@@ -24,10 +24,10 @@ async function openBusiestDay(page: Page) {
 }
 
 /**
- * The deposit step, paid with the payment fake's declined test card first and then the one that succeeds (the
- * provider's published test numbers). Only this service's deposit is named; a decline is said once.
+ * The deposit step: "Pay deposit" leads to the payment fake's own hosted page (its own port, never Dwell's), where the
+ * provider's published test cards are typed. Only this service's deposit is named on Dwell's page.
  */
-async function payDeclinedThenPaid(page: Page) {
+async function openPaymentPage(page: Page) {
   await page.getByRole('heading', { name: 'Deposit' }).waitFor();
   await page.getByText('The deposit for Colour consultation is').waitFor();
   const salon = await (await page.request.get(`${baseUrl()}/api/public/salons/kestrel-and-pine`)).json();
@@ -35,22 +35,48 @@ async function payDeclinedThenPaid(page: Page) {
   expect(others.length).toBeGreaterThan(0); // the menu has other deposits that this page once listed
   const text = await page.locator('main').innerText();
   expect(others.filter((s: { name: string }) => text.includes(s.name)).map((s: { name: string }) => s.name)).toEqual([]);
-  const fillCard = async (number: string) => {
-    await page.getByLabel('Card number').fill(number);
-    await page.getByLabel('Month (MM)').fill('12');
-    await page.getByLabel('Year (YYYY)').fill('2031');
-    await page.getByLabel('CVC').fill('123');
-    await page.getByRole('button', { name: /^Pay deposit/ }).click();
-  };
-  await fillCard('4000 0000 0000 0002');
+  expect(await page.getByLabel(/card number/i).count()).toBe(0); // no card field on Dwell's page
+  await page.getByRole('button', { name: /^Pay deposit of \$25\.00/ }).click();
+  await page.waitForURL((url) => url.origin !== new URL(baseUrl()).origin && url.pathname.startsWith('/pay/'));
+  await page.getByRole('heading', { name: /Deposit for Colour consultation/ }).waitFor();
+}
+
+/** Types a test card into the fake's hosted page and pays. */
+async function payWithCard(page: Page, number: string) {
+  await page.getByLabel('Card number').fill(number);
+  await page.getByLabel('Expiry (MM/YY)').fill('12/31');
+  await page.getByLabel('Security code').fill('123');
+  await page.getByRole('button', { name: /^Pay / }).click();
+}
+
+/**
+ * Pays with a card that goes through, and follows the client back to Dwell's return page, which waits for the payment
+ * service's confirmation (its first read is held back here so the waiting shows), then shows the booking.
+ */
+async function payAndWaitForBooking(page: Page, number: string, extraStep = false) {
+  await page.route('**/api/public/holds/*', async (route) => (await new Promise((r) => setTimeout(r, 1_500)), route.continue()), { times: 1 });
+  await payWithCard(page, number);
+  if (extraStep) {
+    await page.getByRole('heading', { name: 'Confirm this payment' }).waitFor();
+    await screenshot(page, 'client-deposit-extra-step');
+    await page.getByRole('button', { name: 'Confirm the payment' }).click();
+  }
+  await page.waitForURL(/\/me\/holds\/[^/]+\/paid$/);
+  await page.getByText('Waiting for the payment to be confirmed…').waitFor();
+  await page.getByRole('heading', { name: "You're booked" }).waitFor();
+}
+
+/** The declined test card first (said once on the fake's page, which offers another try), then the one that succeeds. */
+async function payDeclinedThenPaid(page: Page) {
+  await openPaymentPage(page);
+  await payWithCard(page, '4000 0000 0000 0002');
   const declined = page.getByRole('alert').filter({ hasText: /declined/i });
   await declined.waitFor();
   const said = await declined.innerText();
   expect(said.match(/declined/gi)).toHaveLength(1);
   expect(said.match(/another card/gi)).toHaveLength(1);
   await screenshot(page, 'client-deposit-declined');
-  await fillCard('4242 4242 4242 4242');
-  await page.getByRole('heading', { name: "You're booked" }).waitFor();
+  await payAndWaitForBooking(page, '4242 4242 4242 4242');
 }
 
 /** The details step's one action; the reaction question must be answered (it starts unanswered). */
@@ -303,7 +329,9 @@ describe('a signed-in client at a desk-size screen', () => {
       await saveDetails(page);
       for (const box of await page.getByRole('checkbox').all()) await box.check();
       await page.getByRole('button', { name: 'Accept and continue' }).click();
-      await payDeclinedThenPaid(page);
+      // The card that asks its holder to confirm: an extra step on the payment service's page, then booked.
+      await openPaymentPage(page);
+      await payAndWaitForBooking(page, '4000 0025 0000 3155', true);
       // The text waits for the end of quiet hours and the page says when (salon time), not that it was sent.
       const note = await page
         .getByRole('status')

@@ -145,6 +145,26 @@ describe('the book version', () => {
       ['service', () => db.updateTable('services').set({ name: 'Toner refresh (gloss)' }).where('id', '=', toner).execute()],
       ['client name', () => db.updateTable('clients').set({ name: 'Client Renamed' }).where('id', '=', client.clientId!).execute()],
       [
+        // A booking's deposit shows on the book (due, paid, refunded): a payment moves its dates.
+        'a payment',
+        async () => {
+          const booking = await db.selectFrom('bookings').select('id').where('salon_id', '=', salon.salonId).executeTakeFirstOrThrow();
+          await db
+            .insertInto('payments')
+            .values({
+              salon_id: salon.salonId,
+              booking_id: booking.id,
+              client_id: null,
+              method: 'cash',
+              amount_cents: 1000,
+              currency: 'USD',
+              status: 'succeeded',
+              provider_ref: null,
+            })
+            .execute();
+        },
+      ],
+      [
         'steps alone',
         () =>
           sql`update booking_steps set label = label || '' where sitting_id in (select s.id from sittings s join bookings b on b.id = s.booking_id where b.salon_id = ${salon.salonId})`.execute(

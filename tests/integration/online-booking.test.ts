@@ -1,9 +1,9 @@
 import ICAL from 'ical.js';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { anonymousAgent, signedInAgent, startTestApp, type TestApp } from '../setup/test-app';
-import { insertSalon, type SalonFixture } from '../factories/salon';
+import type { SalonFixture } from '../factories/salon';
 import { insertUser, type UserFixture } from '../factories/user';
-import { insertPlannedService } from '../factories/service';
+import { onlineBookingSalon, type Agent, type OnlineSalon } from '../factories/online-hold';
 import { futureWeekday, localIso } from '../setup/dates';
 import { FAKE_CARDS } from '@server/fakes/payments-fake';
 import { LAPSE_HOLD_JOB } from '@server/features/online-booking/holds.service';
@@ -11,64 +11,28 @@ import { sendDueMessages } from '@server/features/messages/send-message.job';
 import { emptyHairHistory } from '@shared/schemas/hair-history.schemas';
 import { insertTestBooking } from '../factories/booking';
 import { DateTime } from 'luxon';
+import { eventually, listenForPaymentWebhooks, payOnHostedPage } from '../setup/hosted-payment';
 
 let t: TestApp;
 let salon: SalonFixture;
 let slug: string;
 let ana: UserFixture;
 let consultation: string;
+let secrets: Record<string, string>;
+let hold: OnlineSalon['hold'];
+let claimedBy: OnlineSalon['claimedBy'];
+let webhooks: Awaited<ReturnType<typeof listenForPaymentWebhooks>>;
 const tuesday = futureWeekday(2, 2);
-const card = (number: string) => ({ number, expMonth: 12, expYear: 2031, cvc: '123' });
-const secrets: Record<string, string> = {};
 
 beforeAll(async () => {
   t = await startTestApp();
-  const db = t.testDb.db;
-  salon = await insertSalon(db, { chairs: 2, basins: 1 });
-  // No quiet hours here (they are tested in messages.test.ts): the confirmation SMS must go at once at any hour
-  // the suite runs, not wait for 08:00 salon time.
-  await db.updateTable('salons').set({ quiet_from: '00:00', quiet_to: '00:00' }).where('id', '=', salon.salonId).execute();
-  slug = (await db.selectFrom('salons').select('slug').where('id', '=', salon.salonId).executeTakeFirstOrThrow()).slug;
-  ana = await insertUser(db, salon.salonId, 'stylist');
-  consultation = await insertPlannedService(db, salon.salonId, {
-    name: 'Consultation',
-    category: 'colour',
-    depositCents: 2500,
-    plan: { sittings: [{ steps: [{ kind: 'hands_on', label: 'Consultation', product: 'none', minutes: 30 }] }] },
-  });
-  await db.updateTable('services').set({ online_bookable: true, category: 'consultation' }).where('id', '=', consultation).execute();
+  webhooks = await listenForPaymentWebhooks(t);
+  ({ salon, slug, ana, consultation, secrets, hold, claimedBy } = await onlineBookingSalon(t));
 });
-afterAll(() => t.close());
-
-let visitors = 0;
-/** A hold from a new visitor; each has an address of their own (behind the loopback proxy), as visitors do. */
-async function hold(start: string) {
-  const visitor = await anonymousAgent(t.app);
-  return visitor.write(
-    'post',
-    '/api/public/holds',
-    { salonSlug: slug, serviceId: consultation, stylistId: ana.staffId, start },
-    { 'X-Forwarded-For': `10.1.0.${++visitors}` },
-  );
-}
-
-/** A new client who signs up, claims a hold and (unless told not to) accepts its cautions. */
-async function claimedBy(start: string, acceptCautions = true) {
-  const held = await hold(start);
-  expect(held.status).toBe(201);
-  const client = await insertUser(t.testDb.db, salon.salonId, 'client');
-  await t.testDb.db.updateTable('clients').set({ phone: '+19705550177' }).where('id', '=', client.clientId!).execute();
-  const c = await signedInAgent(t.app, client.email, client.password);
-  const claim = await c.write('post', `/api/me/holds/${held.body.holdId}/claim`, { secret: held.body.holdSecret });
-  expect(claim.status).toBe(200);
-  if (acceptCautions) {
-    expect(
-      (await c.write('post', `/api/me/holds/${held.body.holdId}/cautions`, { version: claim.body.cautions.version, secret: held.body.holdSecret })).status,
-    ).toBe(204);
-  }
-  secrets[held.body.holdId] = held.body.holdSecret;
-  return { c, client, id: held.body.holdId as string, secret: held.body.holdSecret as string, claim: claim.body };
-}
+afterAll(async () => {
+  await webhooks.close();
+  await t.close();
+});
 
 describe('public pages', () => {
   it('show services, hours and policies, and free times — nothing about any client', async () => {
@@ -134,34 +98,19 @@ describe('races for one hold', () => {
     const row = await t.testDb.db.selectFrom('bookings').select('client_id').where('id', '=', held.body.holdId).executeTakeFirstOrThrow();
     expect(row.client_id).toBe(winner.clientId);
   });
-
-  it('one hold paid from ten tabs at once: one booking, and the money kept is one deposit', async () => {
-    const { c, client, id } = await claimedBy(localIso(thursday, '11:00'));
-    // Its own number, so the texts other tests count are not this booking's.
-    await t.testDb.db.updateTable('clients').set({ phone: '+19705550179' }).where('id', '=', client.clientId!).execute();
-    // Each tab made its own idempotency key, as separate pages do.
-    const answers = await Promise.all(Array.from({ length: 10 }, (_, i) => payWithSecret(c, id, `ten-tabs-key-${i}`, FAKE_CARDS.succeeds)));
-    expect(answers.every((a) => a.status === 200 || a.status === 409)).toBe(true);
-    for (const a of answers.filter((r) => r.status === 200)) expect(a.body).toMatchObject({ id, status: 'booked' });
-    const row = await t.testDb.db.selectFrom('bookings').select('status').where('id', '=', id).executeTakeFirstOrThrow();
-    expect(row.status).toBe('booked');
-    // Every charge but one is refunded at once (a single charge per payment is the money issue's design).
-    const charged = [...t.payments.intents.values()].filter((i) => i.metadata.booking === id && i.status === 'succeeded');
-    const refunded = t.payments.refunds.filter((r) => charged.some((i) => i.id === r.payment_intent));
-    expect(charged.length - refunded.length).toBe(1);
-  });
 });
 
 describe('deposit and confirmation', () => {
   it('a paid hold becomes booked; the e-mail carries an .ics that parses to the same start, end and zone; an SMS goes out', async () => {
     const { c, client, id } = await claimedBy(localIso(tuesday, '13:00'));
-    const withoutSecret = await c.write('post', `/api/me/holds/${id}/pay`, { card: card(FAKE_CARDS.succeeds), idempotencyKey: 'pay-key-0001' });
+    const withoutSecret = await c.write('post', `/api/me/holds/${id}/pay`, {});
     expect(withoutSecret.body.error.fields.secret).toBeDefined();
-    const paid = await payWithSecret(c, id, 'pay-key-0002', FAKE_CARDS.succeeds);
-    expect(paid.status).toBe(200);
-    expect(paid.body.status).toBe('booked');
+    // The card goes to the payment service's own page; Dwell's pay call takes no card, and no amount either.
+    const withCard = await c.write('post', `/api/me/holds/${id}/pay`, { secret: secrets[id], card: { number: '4242424242424242' } });
+    expect(withCard.status).toBe(400);
+    await payAndBook(c, id);
     const payment = await t.testDb.db.selectFrom('payments').selectAll().where('booking_id', '=', id).executeTakeFirstOrThrow();
-    expect(payment).toMatchObject({ status: 'succeeded', amount_cents: 2500 });
+    expect(payment).toMatchObject({ status: 'succeeded', kind: 'deposit', method: 'card', amount_cents: 2500 });
     const mail = await waitFor(() => t.smtp.messages.find((m) => m.to === client.email));
     const ics = mail.attachments.find((a) => a.filename === 'booking.ics')!;
     // RFC 5545 check with an independent parser (ical.js): DTSTART/DTEND are the booked instants.
@@ -174,34 +123,18 @@ describe('deposit and confirmation', () => {
     expect(t.sms.messages.filter((m) => m.to === '+19705550177' && m.body.includes('booked'))).toHaveLength(1);
   });
 
-  it('a declined card answers 402 and leaves the hold held', async () => {
+  it("a declined card is said on the payment service's page and leaves the hold held", async () => {
     const { c, id } = await claimedBy(localIso(tuesday, '14:00'));
-    const res = await payWithSecret(c, id, 'pay-key-0003', FAKE_CARDS.declined);
-    expect(res.status).toBe(402);
-    expect(res.body.error.code).toBe('PAYMENT_DECLINED');
+    const { checkoutUrl } = (await c.write('post', `/api/me/holds/${id}/pay`, { secret: secrets[id] })).body;
+    const page = await payOnHostedPage(checkoutUrl, FAKE_CARDS.declined);
+    expect(page.status).toBe(402);
+    expect(page.html).toMatch(/declined/);
     expect((await t.testDb.db.selectFrom('bookings').select('status').where('id', '=', id).executeTakeFirstOrThrow()).status).toBe('held');
-  });
-
-  it('a payment confirmed after the hold lapsed is refunded automatically', async () => {
-    const { c, id } = await claimedBy(localIso(tuesday, '15:00'));
-    t.payments.onNextSuccess(async () => {
-      await t.testDb.db
-        .updateTable('bookings')
-        .set({ held_until: new Date(Date.now() - 1000) })
-        .where('id', '=', id)
-        .execute();
-    });
-    const res = await payWithSecret(c, id, 'pay-key-0004', FAKE_CARDS.succeeds);
-    expect(res.status).toBe(409);
-    expect(res.body.error.code).toBe('HOLD_LAPSED');
-    const rows = await t.testDb.db.selectFrom('payments').select('status').where('booking_id', '=', id).execute();
-    expect(rows.map((r) => r.status)).toEqual(['refunded']);
-    expect(t.payments.refunds.some((r) => r.amount === 2500)).toBe(true);
   });
 
   it('the client sees the deposit rule, then cancels; another client cannot', async () => {
     const { c, id } = await claimedBy(localIso(tuesday, '16:00'));
-    await payWithSecret(c, id, 'pay-key-0005', FAKE_CARDS.succeeds);
+    await payAndBook(c, id);
     // The client's own moves stay outside the 48-hour window, where the deposit would stop being refundable.
     const times = await c.get(`/api/me/bookings/${id}/move-times`);
     expect(times.status).toBe(200);
@@ -224,24 +157,26 @@ describe('deposit and confirmation', () => {
 });
 
 describe('outside services failing or slow', () => {
-  const charges = (bookingId: string) => [...t.payments.intents.values()].filter((i) => i.metadata.booking === bookingId && i.status === 'succeeded');
+  const charges = (bookingId: string) => t.payments.charges().filter((p) => p.metadata.booking === bookingId);
+  const sessions = (bookingId: string) => [...t.payments.sessions.values()].filter((x) => x.metadata.booking === bookingId);
 
-  it('a payments outage on the first try is retried by the SDK with the same idempotency key: booked, charged once', async () => {
+  it('a payments outage on the first try is retried by the SDK with the same idempotency key: one page, booked, charged once', async () => {
     const { c, id } = await claimedBy(localIso(tuesday, '17:00'));
     t.payments.failNext(1);
-    const paid = await payWithSecret(c, id, 'pay-key-0101', FAKE_CARDS.succeeds);
-    expect(paid.status).toBe(200);
-    expect(paid.body.status).toBe('booked');
+    await payAndBook(c, id);
+    expect(sessions(id)).toHaveLength(1);
     expect(charges(id)).toHaveLength(1);
   });
 
-  it('a payment answered late is waited for and charged once, and a repeated pay request gets the same booking', async () => {
+  it('a payment page opened late is waited for, and a repeated pay request gets the same page: charged once', async () => {
     const { c, id } = await claimedBy(localIso(tuesday, '17:30'));
     t.payments.slowNext(2, 1_500);
-    const paid = await payWithSecret(c, id, 'pay-key-0102', FAKE_CARDS.succeeds);
-    expect(paid.status).toBe(200);
-    const again = await payWithSecret(c, id, 'pay-key-0102', FAKE_CARDS.succeeds);
-    expect(again.status).toBeLessThan(500);
+    const [first, again] = await Promise.all([0, 1].map(() => c.write('post', `/api/me/holds/${id}/pay`, { secret: secrets[id] })));
+    expect([first!.status, again!.status]).toEqual([200, 200]);
+    expect(again!.body.checkoutUrl).toBe(first!.body.checkoutUrl);
+    expect(sessions(id)).toHaveLength(1);
+    expect((await payOnHostedPage(first!.body.checkoutUrl, FAKE_CARDS.succeeds)).status).toBe(303);
+    await eventually(async () => (await statusOf(id)) === 'booked');
     expect(charges(id)).toHaveLength(1);
     expect(await t.testDb.db.selectFrom('payments').select('status').where('booking_id', '=', id).execute()).toEqual([{ status: 'succeeded' }]);
   });
@@ -251,11 +186,15 @@ describe('outside services failing or slow', () => {
     const phone = '+19705550178';
     await t.testDb.db.updateTable('clients').set({ phone }).where('id', '=', client.clientId!).execute();
     t.sms.slowNext(1, 5_000);
+    const { checkoutUrl } = (await c.write('post', `/api/me/holds/${id}/pay`, { secret: secrets[id] })).body;
+    const delivered = t.payments.deliveries.length;
     const started = Date.now();
-    const paid = await payWithSecret(c, id, 'pay-key-0103', FAKE_CARDS.succeeds);
+    expect((await payOnHostedPage(checkoutUrl, FAKE_CARDS.succeeds)).status).toBe(303);
+    // The webhook's answer waits for the confirmation at most 2 s (its CONFIRMATION_WAIT_MS), not the 5 s of the SMS.
+    await eventually(async () => t.payments.deliveries.length > delivered);
     const waited = Date.now() - started;
-    expect(paid.status).toBe(200);
-    expect(waited).toBeLessThan(4_500); // the answer waits for the confirmation at most 2 s (CONFIRMATION_WAIT_MS), not 5
+    expect(t.payments.deliveries.at(-1)!.status).toBe(200);
+    expect(waited).toBeLessThan(4_500);
     for (let i = 0; i < 80 && !t.sms.messages.some((m) => m.to === phone); i++) await new Promise((r) => setTimeout(r, 100));
     expect(t.sms.messages.filter((m) => m.to === phone && m.body.includes('booked'))).toHaveLength(1);
   });
@@ -263,7 +202,21 @@ describe('outside services failing or slow', () => {
   it('an e-mail the SMTP server refuses for now (451) is retried after its backoff and delivered once', async () => {
     const { c, client, id } = await claimedBy(localIso(tuesday, '09:30'));
     t.smtp.failNext(1);
-    expect((await payWithSecret(c, id, 'pay-key-0104', FAKE_CARDS.succeeds)).status).toBe(200);
+    await payAndBook(c, id);
+    // The webhook's first try at the e-mail was refused; the row waits for its backoff.
+    await eventually(
+      async () =>
+        (
+          await t.testDb.db
+            .selectFrom('messages')
+            .select(['attempts', 'status'])
+            .where('booking_id', '=', id)
+            .where('channel', '=', 'email')
+            .where('kind', '=', 'confirmation')
+            .where('status', '=', 'queued')
+            .executeTakeFirst()
+        )?.attempts === 1,
+    );
     const row = await t.testDb.db
       .selectFrom('messages')
       .selectAll()
@@ -331,7 +284,7 @@ describe('one unpaid hold per client', () => {
     );
     expect(await stepOf(c)).toEqual([[id, 'deposit']]);
     secrets[id] = resumed.body.holdSecret;
-    expect((await payWithSecret(c, id, 'pay-key-0201', FAKE_CARDS.succeeds)).body.status).toBe('booked');
+    await payAndBook(c, id);
     expect((await c.get('/api/me/holds')).body.holds).toEqual([]);
     expect((await c.write('post', `/api/me/holds/${id}/resume`, {})).status).toBe(409); // booked, nothing to resume
   });
@@ -368,7 +321,7 @@ describe('the confirmation page reads the send log', () => {
     await t.testDb.db.updateTable('salons').set(quiet).where('id', '=', salon.salonId).execute();
     try {
       const { c, id } = await claimedBy(localIso(futureWeekday(4, 2), '09:00'));
-      expect((await payWithSecret(c, id, 'pay-key-0301', FAKE_CARDS.succeeds)).status).toBe(200);
+      await payAndBook(c, id);
       const res = await c.get(`/api/me/bookings/${id}/confirmation`);
       expect(res.status).toBe(200);
       expect(res.body.quietHours).toEqual({ from: quiet.quiet_from, to: quiet.quiet_to });
@@ -418,10 +371,16 @@ describe("the owner's figures", () => {
   });
 });
 
-type Agent = Awaited<ReturnType<typeof signedInAgent>>;
+const statusOf = async (id: string) => (await t.testDb.db.selectFrom('bookings').select('status').where('id', '=', id).executeTakeFirst())?.status;
 
-async function payWithSecret(c: Awaited<ReturnType<typeof signedInAgent>>, id: string, key: string, number: string) {
-  return c.write('post', `/api/me/holds/${id}/pay`, { secret: secrets[id], card: card(number), idempotencyKey: key });
+/** Pays the hold's deposit on the payment service's hosted page and waits for its webhook to book it. */
+async function payAndBook(c: Agent, id: string) {
+  const pay = await c.write('post', `/api/me/holds/${id}/pay`, { secret: secrets[id] });
+  expect(pay.status).toBe(200);
+  const page = await payOnHostedPage(pay.body.checkoutUrl, FAKE_CARDS.succeeds);
+  expect(page.status).toBe(303);
+  expect(page.location).toMatch(new RegExp(`/me/holds/${id}/paid$`));
+  await eventually(async () => (await statusOf(id)) === 'booked');
 }
 
 async function waitFor<T>(find: () => T | undefined): Promise<T> {

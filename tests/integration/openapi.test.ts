@@ -21,9 +21,11 @@ describe('GET /api/openapi.json', () => {
     expect(t.app.apiRoutes.length).toBeGreaterThan(40);
   });
 
-  it('documents the SMS provider webhook with the form body the provider posts, and JSON elsewhere', async () => {
+  it('documents the SMS provider webhook with the form body the provider posts, and JSON elsewhere (the payment provider’s webhook too)', async () => {
     const doc = (await (await anonymousAgent(t.app)).get('/api/openapi.json')).body;
     expect(Object.keys(doc.paths['/webhooks/sms'].post.requestBody.content)).toEqual(['application/x-www-form-urlencoded']);
+    // The payment provider posts JSON; the signature covers its raw bytes.
+    expect(Object.keys(doc.paths['/webhooks/payments'].post.requestBody.content)).toEqual(['application/json']);
     expect(Object.keys(doc.paths['/api/bookings'].post.requestBody.content)).toEqual(['application/json']);
   });
 });

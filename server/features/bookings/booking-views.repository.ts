@@ -8,6 +8,7 @@ import type { StepPlan } from '@shared/schemas/step-plan.schemas';
 import type { Salon } from '@shared/schemas/salon.schemas';
 import { limitFor, type ProcessingLimits } from '@shared/rules/processing-limits';
 import { noShowFrom } from '@shared/rules/sitting-status';
+import { depositState, type DepositState } from '@shared/rules/deposit-state';
 
 export interface BookingFilter {
   salonId: string;
@@ -52,6 +53,7 @@ export async function loadBookingViewRows(
       'b.price_cents',
       'b.deposit_cents',
       'b.deposit_outcome',
+      'b.deposit_due_by',
       'b.cancel_reason',
       'b.step_plan',
       'c.id as clientId',
@@ -84,7 +86,7 @@ export async function loadBookingViewRows(
   const [first] = bookings;
   if (!first) return { rows: [], settings: null };
   const ids = bookings.map((b) => b.id);
-  const [sittings, steps] = await Promise.all([loadSittings(db, ids), loadSteps(db, ids)]);
+  const [sittings, steps, money] = await Promise.all([loadSittings(db, ids), loadSteps(db, ids), loadDepositMoney(db, ids)]);
   const iso = isoInZone(timeZone, filter);
   const sittingsOf = groupBy(sittings, (s) => s.booking_id);
   const stepsOf = groupBy(steps, (st) => st.sitting_id);
@@ -113,6 +115,10 @@ export async function loadBookingViewRows(
       priceCents: b.price_cents,
       depositCents: b.deposit_cents,
       depositOutcome: b.deposit_outcome,
+      deposit: withDueBy(
+        depositState({ depositCents: b.deposit_cents, bookingStatus: b.status, outcome: b.deposit_outcome, ...(money.get(b.id) ?? NO_MONEY) }),
+        orNull(b.deposit_due_by),
+      ),
       cancelReason: b.cancel_reason,
       stepPlan: plan,
       sittings: own.map((s) => ({
@@ -182,6 +188,34 @@ export function isoInZone(timeZone: string, filter: Pick<BookingFilter, 'from' |
     const seconds = (ms / 1000) % 60;
     return `${text.slice(0, 16)}:${seconds < 10 ? '0' : ''}${seconds}${text.slice(16)}`;
   };
+}
+
+/** The release time matters only while something is due (a paid or cancelled booking is released by nobody). */
+const withDueBy = (state: DepositState, dueBy: string | null) => ({ ...state, dueBy: state.dueCents > 0 ? dueBy : null });
+
+const NO_MONEY = { paidCents: 0, refundedCents: 0 };
+
+/** Per booking: deposit payments taken, and refunds of them made or on their way (a pending refund is decided). */
+async function loadDepositMoney(db: Db, bookingIds: string[]): Promise<Map<string, { paidCents: number; refundedCents: number }>> {
+  const rows = await db
+    .selectFrom('payments as p')
+    .leftJoin('payments as of', 'of.id', 'p.refund_of')
+    .select([
+      'p.booking_id',
+      sql<string>`coalesce(sum(p.amount_cents) filter (where p.kind = 'deposit' and p.status = 'succeeded'), 0)`.as('paid'),
+      sql<string>`coalesce(sum(p.amount_cents) filter (where p.kind = 'refund' and of.kind = 'deposit' and p.status in ('pending', 'succeeded')), 0)`.as(
+        'refunded',
+      ),
+    ])
+    .where('p.booking_id', 'in', bookingIds)
+    .groupBy('p.booking_id')
+    .execute();
+  return new Map(rows.map((r) => [r.booking_id, { paidCents: Number(r.paid), refundedCents: Number(r.refunded) }]));
+}
+
+/** One booking's deposit money: taken, and refunded (made or on its way). */
+export async function depositMoneyOf(db: Db, bookingId: string): Promise<{ paidCents: number; refundedCents: number }> {
+  return (await loadDepositMoney(db, [bookingId])).get(bookingId) ?? NO_MONEY;
 }
 
 function loadSittings(db: Db, bookingIds: string[]) {

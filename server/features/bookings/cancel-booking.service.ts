@@ -89,12 +89,24 @@ export async function deskCancelTerms(db: Db, salon: Salon, bookingId: string, n
   return { depositOutcome: outcome, why, message: deskWords(salon, depositCents, why, skinTest) };
 }
 
-export async function cancelBooking(db: Kysely<Database>, salon: Salon, actorUserId: string, bookingId: string, reason: string, now: Date): Promise<void> {
+/**
+ * Cancels with a reason; the deposit policy decides kept or refunded. `nothingPaid`: a booking released because its
+ * deposit was never paid, so there is no deposit to keep or refund.
+ */
+export async function cancelBooking(
+  db: Kysely<Database>,
+  salon: Salon,
+  actorUserId: string | null,
+  bookingId: string,
+  reason: string,
+  now: Date,
+  options: { nothingPaid?: boolean } = {},
+): Promise<void> {
   await db.transaction().execute(async (trx) => {
     const before = await bookingSnapshot(trx, bookingId);
     if (!before || before.booking.salonId !== salon.id) throw notFound('That booking');
     const { outcome } = await outcomeOf(trx, salon, before, bookingId, now);
-    const cancel = () => markCancelled(trx, bookingId, reason, outcome);
+    const cancel = () => markCancelled(trx, bookingId, reason, options.nothingPaid ? null : outcome);
     if (before.booking.clientId) await withColourBookingsKept(trx, salon, before.booking.clientId, now, cancel);
     else await cancel();
     await auditBookingChange(trx, { salonId: salon.id, actorUserId, bookingId, action: `cancelled: ${reason}`, before: before.audit });

@@ -54,6 +54,42 @@ export async function markCancelled(db: Db, bookingId: string, reason: string, d
     .execute();
 }
 
+/** Held → booked, only while the hold is still within its time (one statement: no race with the lapse job). */
+export async function confirmHeld(db: Db, id: string, now: Date): Promise<boolean> {
+  const res = await db
+    .updateTable('bookings')
+    .set({ status: 'booked', held_until: null, hold_secret_hash: null })
+    .where('id', '=', id)
+    .where('status', '=', 'held')
+    .where('held_until', '>', now)
+    .executeTakeFirst();
+  return Number(res.numUpdatedRows) === 1;
+}
+
+/**
+ * A desk booking with a deposit is released if the deposit is still unpaid `hours` after it was made; no time is
+ * set when that would come after the first sitting has started (the desk takes the deposit on the day).
+ */
+export async function setDepositDueBy(db: Db, bookingId: string, hours: number, now: Date): Promise<void> {
+  const dueBy = new Date(now.getTime() + hours * 3_600_000);
+  await db
+    .updateTable('bookings')
+    .set({ deposit_due_by: dueBy })
+    .where('id', '=', bookingId)
+    .where('deposit_cents', '>', 0)
+    .where((eb) =>
+      eb(
+        eb
+          .selectFrom('sittings')
+          .select(sql<Date>`min(lower(during))`.as('start'))
+          .where('booking_id', '=', bookingId),
+        '>',
+        dueBy,
+      ),
+    )
+    .execute();
+}
+
 /** Start of each sitting of a booking, in order. */
 export async function sittingStarts(db: Db, bookingId: string): Promise<Date[]> {
   const rows = await db

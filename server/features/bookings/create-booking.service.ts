@@ -12,6 +12,7 @@ import { lockStylists } from '../planning';
 import { assertWithinProcessingLimits } from '../planning';
 import { bookAt } from './book-at.service';
 import { oncePerKey } from './idempotent.service';
+import { setDepositDueBy } from './change-booking.repository';
 
 /** The route a stored answer is filed under: this endpoint's method and path. */
 const idempotencyRoute = `${bookingsApi.create.method.toUpperCase()} ${bookingsApi.create.path}`;
@@ -32,21 +33,21 @@ export async function createBooking(db: Kysely<Database>, salon: Salon, user: Se
   const booked = await db.transaction().execute((trx) =>
     oncePerKey(trx, once, async () => {
       await lockStylists(trx, [body.stylistId]);
-      return {
-        bookingId: await bookAt(trx, {
-          salon,
-          clientId: client.id,
-          service,
-          plan: body.stepPlan,
-          stylistId: body.stylistId,
-          start: new Date(body.start),
-          chairIds: body.chairIds,
-          actorUserId: user.id,
-          now,
-          allowWaitingOnTest: true,
-          quote: quote && { id: quote.id, priceCents: quote.price_cents, depositCents: quote.deposit_cents },
-        }),
-      };
+      const bookingId = await bookAt(trx, {
+        salon,
+        clientId: client.id,
+        service,
+        plan: body.stepPlan,
+        stylistId: body.stylistId,
+        start: new Date(body.start),
+        chairIds: body.chairIds,
+        actorUserId: user.id,
+        now,
+        allowWaitingOnTest: true,
+        quote: quote && { id: quote.id, priceCents: quote.price_cents, depositCents: quote.deposit_cents },
+      });
+      if (salon.unpaidDepositReleaseHours !== null) await setDepositDueBy(trx, bookingId, salon.unpaidDepositReleaseHours, now);
+      return { bookingId };
     }),
   );
   return booked.bookingId;

@@ -35,7 +35,7 @@ export async function deskDay(db: Db, salon: Salon, date = todayIn(salon.timeZon
     loadBookingViews(db, { salonId: salon.id, ...bounds }, salon.timeZone),
     openingOver(db, salon, date, 1),
   ]);
-  return { date, timeZone: salon.timeZone, hours: opening?.hours ?? [], stylists, chairs, bookings };
+  return { date, timeZone: salon.timeZone, currency: salon.currency, hours: opening?.hours ?? [], stylists, chairs, bookings };
 }
 
 /** One stylist's own day: only the bookings they work on. */
@@ -49,7 +49,15 @@ export async function stylistDay(db: Db, salon: Salon, userId: string, date = to
     loadBookingViews(db, { salonId: salon.id, stylistId: staffId, ...bounds }, salon.timeZone),
     openingOver(db, salon, date, 1),
   ]);
-  return { date, timeZone: salon.timeZone, hours: opening?.hours ?? [], stylists: stylists.filter((s) => s.id === staffId), chairs, bookings };
+  return {
+    date,
+    timeZone: salon.timeZone,
+    currency: salon.currency,
+    hours: opening?.hours ?? [],
+    stylists: stylists.filter((s) => s.id === staffId),
+    chairs,
+    bookings,
+  };
 }
 
 /** The Monday (ISO week start) of the week holding a local date. */

@@ -14,6 +14,8 @@ export interface ClientMessage {
   subject: string;
   email: string;
   sms: string;
+  /** Only these channels: the desk chose how to send it, over the client's usual choice (but never SMS after a STOP). */
+  channels?: ('sms' | 'email')[];
 }
 
 /**
@@ -30,9 +32,10 @@ export async function planClientMessage(db: Db, m: ClientMessage, now: Date): Pr
   if (!c) return [];
   const base = { salonId: m.salonId, clientId: m.clientId, kind: m.kind, sendAt: now };
   const rows: NewMessage[] = [];
-  if (c.email && c.messageChannel !== 'sms')
+  const asked = (channel: 'sms' | 'email') => !m.channels || m.channels.includes(channel);
+  if (c.email && asked('email') && (m.channels || c.messageChannel !== 'sms'))
     rows.push({ ...base, channel: 'email', toAddress: c.email, subject: m.subject, body: m.email, dedupeKey: `${m.key}:email` });
-  if (c.phone && c.messageChannel !== 'email' && !c.smsStoppedAt)
+  if (c.phone && asked('sms') && (m.channels || c.messageChannel !== 'email') && !c.smsStoppedAt)
     rows.push({ ...base, channel: 'sms', toAddress: c.phone, body: m.sms, dedupeKey: `${m.key}:sms` });
   return insertPlanned(db, rows);
 }

@@ -3,4 +3,5 @@ export { planClientMessage, sendClientMessage, type ClientMessage } from './clie
 export { firstMessageSends, salonQuietHours } from './messages.repository';
 export { replanAfterSkinTestChange, replanBookingMessages, replanClientMessages } from './plan-messages.service';
 export { sendLog } from './send-log.service';
-export { sendDueMessages, type Senders } from './send-message.job';
+export { sendDueMessages, sendOnTime, type Senders } from './send-message.job';
+export { sendDueNow } from './send-now';

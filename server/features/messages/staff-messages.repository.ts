@@ -48,7 +48,7 @@ export async function sittingsBetween(db: Db, salonId: string, from: Date, to: D
       sql<number>`(select count(*)::int from sittings x where x.booking_id = b.id)`.as('sittingCount'),
       sql<string>`coalesce(c.name, 'Walk-in')`.as('clientName'),
       sql<number>`greatest(b.deposit_cents, sv.deposit_cents)`.as('depositDue'),
-      sql<boolean>`exists (select 1 from payments p where p.booking_id = b.id and p.status = 'succeeded')`.as('depositPaid'),
+      sql<boolean>`exists (select 1 from payments p where p.booking_id = b.id and p.kind = 'deposit' and p.status = 'succeeded')`.as('depositPaid'),
     ])
     .where('b.salon_id', '=', salonId)
     .where('b.status', 'in', ['booked', 'checked_in'])

@@ -1,8 +1,6 @@
 import type { Kysely } from 'kysely';
 import type { Database } from '@server/db/schema';
-import { replanBookingMessages } from '../messages';
-import { sendDueMessages, type Senders } from '../messages';
-import { firstMessageSends, salonQuietHours } from '../messages';
+import { firstMessageSends, replanBookingMessages, salonQuietHours, sendDueNow, type Senders } from '../messages';
 import type { SessionUser } from '@shared/schemas/auth.schemas';
 import type { ConfirmationSends } from '@shared/schemas/online-booking.schemas';
 import { ownBooking } from './my-bookings.service';
@@ -11,18 +9,12 @@ import { ownBooking } from './my-bookings.service';
 export const CONFIRMATION_WAIT_MS = 2_000;
 
 /**
- * A paid hold has just become a booking: its confirmation (e-mail with the .ics, and SMS) and reminders go
- * into the send log, and what is due now is sent at once so the client usually has it when the page answers.
- * A slow provider does not hold the page: after CONFIRMATION_WAIT_MS the answer goes and the sending carries
- * on. A channel that fails stays queued and the send job retries it; the claim keeps it from going out twice.
+ * A hold with no deposit has just become a booking: its confirmation (e-mail with the .ics, and SMS) and reminders
+ * go into the send log, and what is due now is sent at once, waiting at most CONFIRMATION_WAIT_MS.
  */
 export async function sendConfirmation(db: Kysely<Database>, senders: Senders, bookingId: string, now: Date): Promise<void> {
   await replanBookingMessages(db, bookingId, now);
-  // Errors are the send log's business (retried by the job); none may escape into the payment's answer.
-  const sending = sendDueMessages(db, senders, now, bookingId).catch(() => undefined);
-  let timer: NodeJS.Timeout | undefined;
-  await Promise.race([sending, new Promise<void>((resolve) => (timer = setTimeout(resolve, CONFIRMATION_WAIT_MS)))]);
-  clearTimeout(timer);
+  await sendDueNow(db, senders, bookingId, now, CONFIRMATION_WAIT_MS);
 }
 
 /**

@@ -138,46 +138,6 @@ export async function claimHoldRow(db: Db, id: string, clientId: string): Promis
   return Number(res.numUpdatedRows) === 1;
 }
 
-/** Held → booked, only while the hold is still within its time (one statement: no race with the lapse job). */
-export async function confirmHoldRow(db: Db, id: string, now: Date): Promise<boolean> {
-  const res = await db
-    .updateTable('bookings')
-    .set({ status: 'booked', held_until: null, hold_secret_hash: null })
-    .where('id', '=', id)
-    .where('status', '=', 'held')
-    .where('held_until', '>', now)
-    .executeTakeFirst();
-  return Number(res.numUpdatedRows) === 1;
-}
-
-export async function recordPayment(
-  db: Db,
-  p: {
-    salonId: string;
-    bookingId: string;
-    clientId: string | null;
-    providerRef: string | null;
-    amountCents: number;
-    currency: string;
-    status: 'succeeded' | 'declined' | 'refunded';
-    message?: string;
-  },
-): Promise<void> {
-  await db
-    .insertInto('payments')
-    .values({
-      salon_id: p.salonId,
-      booking_id: p.bookingId,
-      client_id: p.clientId,
-      provider_ref: p.providerRef,
-      amount_cents: p.amountCents,
-      currency: p.currency,
-      status: p.status,
-      message: p.message ?? '',
-    })
-    .execute();
-}
-
 export async function insertCautionAcceptance(db: Db, bookingId: string, userId: string, version: string, texts: unknown): Promise<void> {
   await db
     .insertInto('caution_acceptances')

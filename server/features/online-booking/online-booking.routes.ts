@@ -8,7 +8,7 @@ import { acceptCautions, claimHold, createHold, holdStatus } from './holds.servi
 import { myOpenHolds, releaseHold, resumeHold } from './open-holds.service';
 import { payHold } from './pay-hold.service';
 
-export function registerOnlineBookingRoutes({ table, db, jobs, payments, mailer, sms, readCache }: AppDeps): void {
+export function registerOnlineBookingRoutes({ table, db, jobs, payments, mailer, sms, readCache, config }: AppDeps): void {
   const limited = (name: string, limit: number) =>
     rateLimited(db, { name, windowMs: 60_000, limit, message: 'Too many requests; wait a minute and try again.' });
   apiRoute(table, onlineBookingApi.publicSalon, ({ params }) => publicSalon(db, params.slug));
@@ -23,5 +23,7 @@ export function registerOnlineBookingRoutes({ table, db, jobs, payments, mailer,
   apiRoute(table, onlineBookingApi.releaseHold, ({ user, params, body }) => releaseHold(db, user, params.id, body.secret, new Date()));
   apiRoute(table, onlineBookingApi.claimHold, ({ user, params, body }) => claimHold(db, user, params.id, body.secret, new Date()));
   apiRoute(table, onlineBookingApi.acceptCautions, ({ user, params, body }) => acceptCautions(db, user, params.id, body.secret, body.version, new Date()));
-  apiRoute(table, onlineBookingApi.payHold, ({ user, params, body }) => payHold(db, { payments, mailer, sms }, user, params.id, body, new Date()));
+  apiRoute(table, onlineBookingApi.payHold, ({ user, params, body, req }) =>
+    payHold(db, { payments, mailer, sms }, user, params.id, body.secret, config.publicUrl ?? `${req.protocol}://${req.get('host')}`, new Date()),
+  );
 }

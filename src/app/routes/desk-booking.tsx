@@ -12,6 +12,8 @@ import { ChangePlanForm } from '@client/features/bookings/components/desk-bookin
 import { bookingQueries } from '@client/features/bookings/api/booking-queries';
 import { catalogueQueries } from '@client/features/catalogue/api/catalogue-queries';
 import { MixLogSection } from '@client/features/mix-log/components/mix-log-section';
+import { DepositPanel } from '@client/features/deposits/components/deposit-panel';
+import { depositQueries } from '@client/features/deposits/api/deposit-queries';
 import { salonQueries } from '@client/features/salon/api/salon-queries';
 import { localDateOf } from '@shared/time/salon-time';
 import { queryClient } from '@client/lib/query-client';
@@ -22,6 +24,7 @@ export async function loader({ params }: LoaderFunctionArgs) {
     queryClient.ensureQueryData(bookingQueries.one(params.id!)),
     queryClient.ensureQueryData(salonQueries.current()),
     queryClient.ensureQueryData(catalogueQueries.stylists()),
+    queryClient.ensureQueryData(depositQueries.ofBooking(params.id!)),
   ]);
   return null;
 }
@@ -41,6 +44,7 @@ export function Component() {
       </Link>
       <PageHeader title={`${booking.client.name} · ${booking.service.name}`} subtitle={<TimeZoneNote timeZone={salon.timeZone} />} />
       <BookingSummary booking={booking} timeZone={salon.timeZone} currency={salon.currency} />
+      <DepositPanel bookingId={booking.id} bookingStatus={booking.status} timeZone={salon.timeZone} />
       <div className="grid gap-6 lg:grid-cols-2">
         {open && <MoveSittingForm booking={booking} timeZone={salon.timeZone} stylists={stylists.stylists} />}
         {(open || booking.status === 'cancelled') && <CancelBookingForm booking={booking} currency={salon.currency} />}

@@ -31,5 +31,14 @@ export function Component() {
       </div>
     );
   }
-  return <BookingFlowPage key={service.id} salon={salon} serviceId={service.id} user={user ?? null} returnTo={location.pathname + location.search} />;
+  return (
+    <BookingFlowPage
+      key={service.id}
+      salon={salon}
+      serviceId={service.id}
+      user={user ?? null}
+      returnTo={location.pathname + location.search}
+      paymentCancelled={params.get('payment') === 'cancelled'}
+    />
+  );
 }

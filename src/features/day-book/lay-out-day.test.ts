@@ -17,6 +17,7 @@ const booking = (n: number, stylist: number, chair: number, from: string, to: st
   stepPlan: { sittings: [] },
   depositCents: 0,
   depositOutcome: null,
+  deposit: { status: 'none', paidCents: 0, dueCents: 0, dueBy: null },
   cancelReason: null,
   sittings: [
     { seq: 1, of: 1, chairId: id(chair), chairName: `Chair ${chair}`, start: `2027-03-02T${from}:00Z`, end: `2027-03-02T${to}:00Z`, steps: [], ...dayState },
@@ -25,6 +26,7 @@ const booking = (n: number, stylist: number, chair: number, from: string, to: st
 const day: DayView = {
   date: '2027-03-02',
   timeZone: 'UTC',
+  currency: 'USD',
   hours: [{ start: '09:00', end: '21:00' }],
   stylists: [
     { id: id(1), name: 'Stylist 1', skills: [] },

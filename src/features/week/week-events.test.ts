@@ -17,6 +17,7 @@ const booking = (n: number, stylist: number, status: BookingView['status']): Boo
   stepPlan: { sittings: [] },
   depositCents: 0,
   depositOutcome: null,
+  deposit: { status: 'none', paidCents: 0, dueCents: 0, dueBy: null },
   cancelReason: null,
   sittings: [
     { seq: 1, of: 2, chairId: id(7), chairName: 'Chair 1', start: '2027-03-08T16:00:00Z', end: '2027-03-09T01:00:00Z', steps: [], ...dayState },

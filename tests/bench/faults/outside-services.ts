@@ -6,6 +6,8 @@ import { randomUUID } from 'node:crypto';
 import { createDb, createPool } from '@server/db/database';
 import { DEMO_PASSWORD, demoSalon } from '@server/demo/demo-catalogue';
 import { FAKE_CARDS, startPaymentsFake } from '@server/fakes/payments-fake';
+import { FAKE_STRIPE } from '@server/services';
+import { payOnHostedPage } from '../../setup/hosted-payment';
 import { startSmsFake } from '@server/fakes/sms-fake';
 import { startSmtpFake } from '@server/fakes/smtp-fake';
 import { startAppProcess, type AppProcess } from '../load/app-process';
@@ -25,7 +27,7 @@ export interface OutsideFaultResult {
 
 export async function outsideServicesFault(databaseUrl: string, env: Record<string, string>): Promise<OutsideFaultResult> {
   const failures: string[] = [];
-  const [smtp, sms, payments] = await Promise.all([startSmtpFake(), startSmsFake(), startPaymentsFake()]);
+  const [smtp, sms, payments] = await Promise.all([startSmtpFake(), startSmsFake(), startPaymentsFake({ webhookSecret: FAKE_STRIPE.webhookSecret })]);
   const shared = { ...env, SMTP_URL: smtp.url, SMS_API_URL: sms.url, PAYMENTS_API_URL: `http://${payments.url.host}:${payments.url.port}` };
   const port = Number(env.PORT ?? 3105);
   const apps = [await startAppProcess({ ...shared, PORT: String(port) }), await startAppProcess({ ...shared, PORT: String(port + 10) })];
@@ -84,7 +86,9 @@ export async function outsideServicesFault(databaseUrl: string, env: Record<stri
       `   desk bookings through both servers while e-mail and SMS refuse, then answer ${SLOW_MS / 1000} s late: ${bookingIds.length} booked; answer p50 ${percentile(deskTimes, 50)} ms, p95 ${percentile(deskTimes, 95)} ms`,
     );
 
-    // Online deposits by the demo client, alternating servers: the payments API fails once, then answers late.
+    // Online deposits by the demo client, alternating servers: the payments API fails once, then answers late. The
+    // provider's webhook reaches one server (as it reaches one endpoint behind a load balancer).
+    payments.setWebhook(`${apps[0]!.url}/webhooks/payments`);
     payments.failNext(1);
     payments.slowNext(4, SLOW_MS);
     const consultation = services.find((s) => s.name === 'Colour consultation')!;
@@ -116,21 +120,36 @@ export async function outsideServicesFault(databaseUrl: string, env: Record<stri
         secret: holdSecret,
       });
       const started = Date.now();
-      const pay = { secret: holdSecret, card: { number: FAKE_CARDS.succeeds, expMonth: 12, expYear: 2031, cvc: '123' }, idempotencyKey: randomUUID() };
-      const res = await sendJson(apps[n]!.url, clientSessions[n]!, 'POST', `/api/me/holds/${holdId}/pay`, pay);
+      const res = await sendJson(apps[n]!.url, clientSessions[n]!, 'POST', `/api/me/holds/${holdId}/pay`, { secret: holdSecret });
       payTimes.push(Date.now() - started);
-      // The browser repeats the same request when an answer is slow: the same key, on the other server.
-      const again = await sendJson(apps[1 - n]!.url, clientSessions[1 - n]!, 'POST', `/api/me/holds/${holdId}/pay`, pay);
-      if (res.status === 200) paid.push(holdId);
-      else failures.push(`a deposit answered ${res.status}`);
-      if (again.status >= 500) failures.push(`a repeated deposit request answered ${again.status}`);
+      // The browser repeats the same request when an answer is slow, here on the other server: the same page.
+      const again = await sendJson(apps[1 - n]!.url, clientSessions[1 - n]!, 'POST', `/api/me/holds/${holdId}/pay`, { secret: holdSecret });
+      if (res.status !== 200) {
+        failures.push(`a deposit's payment page answered ${res.status}`);
+        continue;
+      }
+      if (again.status >= 500) failures.push(`a repeated pay request answered ${again.status}`);
+      else if (again.body.checkoutUrl !== res.body.checkoutUrl) failures.push('a repeated pay request got another payment page');
+      // The client pays once on the hosted page; a second try (another tab) finds it paid.
+      const [first, second] = await Promise.all([0, 1].map(() => payOnHostedPage(res.body.checkoutUrl, FAKE_CARDS.succeeds)));
+      if ([first!.status, second!.status].filter((x) => x === 303).length !== 1) failures.push('two tabs paying one page both went through');
+      paid.push(holdId);
+      // The webhook books it; only then may the client hold another time (one unpaid hold per client).
+      const bookedBy = Date.now() + 30_000;
+      while (Date.now() < bookedBy && (await db.selectFrom('bookings').select('status').where('id', '=', holdId).executeTakeFirst())?.status !== 'booked') {
+        await sleep(250);
+      }
     }
     payTimes.sort((a, b) => a - b);
-    const charges = paid.map((id) => [...payments.intents.values()].filter((x) => x.metadata.booking === id && x.status === 'succeeded').length);
+    const charges = paid.map((id) => payments.charges().filter((x) => x.metadata.booking === id).length);
+    const pages = paid.map((id) => [...payments.sessions.values()].filter((x) => x.metadata.booking === id).length);
+    const booked = paid.length ? (await db.selectFrom('bookings').select('id').where('id', 'in', paid).where('status', '=', 'booked').execute()).length : 0;
     console.log(
-      `   online deposits while payments fail once, then answer ${SLOW_MS / 1000} s late: ${paid.length} paid; answer p50 ${percentile(payTimes, 50)} ms, max ${payTimes.at(-1)} ms; charges per deposit ${JSON.stringify(charges)} (each paid twice over, same key, both servers)`,
+      `   online deposits while payments fail once, then answer ${SLOW_MS / 1000} s late: ${paid.length} paid, ${booked} booked by the webhook; payment page answer p50 ${percentile(payTimes, 50)} ms, max ${payTimes.at(-1)} ms; pages per deposit ${JSON.stringify(pages)}, charges per deposit ${JSON.stringify(charges)} (each asked for twice, both servers, and paid from two tabs)`,
     );
     if (charges.some((c) => c !== 1)) failures.push(`deposits charged ${JSON.stringify(charges)} times`);
+    if (pages.some((c) => c !== 1)) failures.push(`deposits opened ${JSON.stringify(pages)} payment pages`);
+    if (booked !== paid.length) failures.push(`${paid.length - booked} paid holds not booked by the webhook`);
 
     // Wait for the send log to settle: retries back off 1, 2, 4 … minutes and go out from the per-minute pass.
     const ids = [...bookingIds, ...paid];

@@ -152,5 +152,13 @@ export const expectedAccess: Record<string, Expectation> = {
   'GET /api/me/preferences': { allow: ['client'] },
   'PUT /api/me/preferences': { allow: ['client'] },
   'POST /webhooks/sms': { allow: 'anyone' },
+  // Money: the payment provider's webhook is public but checks the provider's signature; the desk takes or asks for a
+  // booking's deposit; a deposit request's link is public (its token is the key).
+  'POST /webhooks/payments': { allow: 'anyone' },
+  'GET /api/bookings/{id}/deposit': { allow: DESK, own: true },
+  'POST /api/bookings/{id}/deposit/requests': { allow: DESK, own: true },
+  'POST /api/bookings/{id}/deposit/taken': { allow: DESK, own: true },
+  'GET /api/public/deposit-requests/{token}': { allow: 'anyone' },
+  'POST /api/public/deposit-requests/{token}/pay': { allow: 'anyone' },
   'POST /api/dev/sms/inbound': { allow: DESK },
 };

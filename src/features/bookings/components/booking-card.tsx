@@ -2,6 +2,7 @@ import type { ReactNode } from 'react';
 import type { BookingView } from '@shared/schemas/booking-view.schemas';
 import { BookingStatusBadge } from '@client/components/ui/booking-status-badge';
 import { SkinTestFlag } from '@client/components/ui/skin-test-flag';
+import { DepositBadge } from '@client/components/ui/deposit-badge';
 import { sittingLabel } from '@client/lib/booking-labels';
 import { formatDate, formatRange } from '@shared/format/date-time';
 import { formatFor } from '@shared/format/locale';
@@ -43,7 +44,8 @@ export function BookingCard({ booking, timeZone, currency, headingLevel: Heading
       <p className="mt-3 text-sm tabular">
         Price {formatMoney(booking.priceCents, currency)}
         {booking.depositCents > 0 && ` · deposit ${formatMoney(booking.depositCents, currency)}`}
-        {booking.depositCents > 0 && booking.depositOutcome && (booking.depositOutcome === 'kept' ? ', kept by the salon' : ', refunded')}
+        {booking.depositCents > 0 && booking.depositOutcome && (booking.depositOutcome === 'kept' ? ', kept by the salon' : ', refunded')}{' '}
+        {!booking.depositOutcome && <DepositBadge deposit={booking.deposit} currency={currency} />}
       </p>
       {children}
     </article>

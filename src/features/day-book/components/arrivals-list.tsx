@@ -8,6 +8,7 @@ import { paths } from '@client/config/paths';
 import { todayIn } from '@client/lib/time';
 import { visitsOn } from '@client/lib/day-visits';
 import { useNow } from '@client/lib/use-now';
+import { DepositBadge } from '@client/components/ui/deposit-badge';
 import { ArrivalRow } from './arrival-row';
 
 type Props = { day: DayView };
@@ -29,7 +30,7 @@ export function ArrivalsList({ day }: Props) {
               <Link to={paths.deskBooking(booking.id)} className="text-link font-bold">
                 {booking.client.name}
               </Link>{' '}
-              · {booking.service.name} · {booking.stylist.name}
+              · {booking.service.name} · {booking.stylist.name} <DepositBadge deposit={booking.deposit} currency={day.currency} />
             </ArrivalRow>
           </li>
         ))}

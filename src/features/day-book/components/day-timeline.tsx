@@ -42,6 +42,7 @@ export default function DayTimeline({ day, by = 'stylist', windows = [], booking
               lastHour={layout.lastHour}
               date={day.date}
               timeZone={day.timeZone}
+              currency={day.currency}
               roomy={roomy}
               windows={by === 'stylist' ? windows.filter((w) => w.stylistId === column.id) : []}
               closedSpans={layout.closedSpans}

@@ -1,6 +1,7 @@
 import { Link } from 'react-router-dom';
 import { BookingStatusBadge } from '@client/components/ui/booking-status-badge';
 import { SkinTestFlag } from '@client/components/ui/skin-test-flag';
+import { DepositBadge } from '@client/components/ui/deposit-badge';
 import { sittingLabel } from '@client/lib/booking-labels';
 import { formatRange } from '@shared/format/date-time';
 import { formatFor } from '@shared/format/locale';
@@ -8,13 +9,13 @@ import type { PlacedSitting } from '../lay-out-day';
 import { StepSegment } from './step-segment';
 import { PX_PER_MIN } from './timeline-scale';
 
-type Props = { placed: PlacedSitting; firstHour: number; timeZone: string; roomy: boolean; href?: string };
+type Props = { placed: PlacedSitting; firstHour: number; timeZone: string; currency: string; roomy: boolean; href?: string };
 
 /**
  * A sitting on the timeline: a strip of its steps (patterns) beside the words
  * (client, service, sitting, times), so no text sits on a pattern.
  */
-export function SittingBlock({ placed, firstHour, timeZone, roomy, href }: Props) {
+export function SittingBlock({ placed, firstHour, timeZone, currency, roomy, href }: Props) {
   const { booking, sitting, startMin, endMin, lane, lanes } = placed;
   const times = formatRange(sitting.start, sitting.end, formatFor(timeZone));
   const ofLabel = sittingLabel(sitting.seq, sitting.of);
@@ -52,6 +53,7 @@ export function SittingBlock({ placed, firstHour, timeZone, roomy, href }: Props
         <p className="truncate">{sitting.chairName}</p>
         {booking.status !== 'booked' && <BookingStatusBadge status={booking.status} />}
         <SkinTestFlag skinTest={booking.skinTest} />
+        {sitting.seq === 1 && <DepositBadge deposit={booking.deposit} currency={currency} />}
       </div>
     </article>
   );

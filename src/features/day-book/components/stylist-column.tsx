@@ -12,6 +12,7 @@ type Props = {
   lastHour: number;
   date: string;
   timeZone: string;
+  currency: string;
   roomy: boolean;
   /** Hands-free windows of this column's stylist (none in the chair view). */
   windows: HandsFreeWindowView[];
@@ -23,7 +24,7 @@ type Props = {
 const HOUR_PX = 60 * PX_PER_MIN;
 
 /** One stylist's (or chair's) day; faint hour lines behind the sittings, hands-free windows in a gutter. */
-export function StylistColumn({ name, sittings, firstHour, lastHour, date, timeZone, roomy, windows, closedSpans, bookingHref }: Props) {
+export function StylistColumn({ name, sittings, firstHour, lastHour, date, timeZone, currency, roomy, windows, closedSpans, bookingHref }: Props) {
   const headingId = useId();
   return (
     <section aria-labelledby={headingId} className={`${roomy ? 'flex-1' : 'w-60 shrink-0 sm:flex-1'} min-w-60 border-r border-ink/10 last:border-r-0`}>
@@ -52,6 +53,7 @@ export function StylistColumn({ name, sittings, firstHour, lastHour, date, timeZ
               placed={placed}
               firstHour={firstHour}
               timeZone={timeZone}
+              currency={currency}
               roomy={roomy}
               href={bookingHref?.(placed.booking.id)}
             />

@@ -2,9 +2,7 @@ import type { z } from 'zod';
 import type { OfferViewSchema } from '@shared/schemas/window.schemas';
 import { Button } from '@client/components/ui/button';
 import { FormAlert } from '@client/components/ui/form-alert';
-import { zoneLabel } from '@client/lib/time';
-import { formatDate, formatTime } from '@shared/format/date-time';
-import { formatFor } from '@shared/format/locale';
+import { LinkCard } from '@client/components/ui/link-card';
 import { useAcceptOffer } from '../api/offer-mutations';
 
 type Offer = z.output<typeof OfferViewSchema>;
@@ -20,26 +18,18 @@ const statusWords: Record<Offer['status'], string> = {
 /** A time offered to a standby client by SMS or e-mail: what, when, with whom, and one button to take it. */
 export function OfferView({ token, offer }: Props) {
   const accept = useAcceptOffer(token);
-  const when = formatDate(offer.start, formatFor(offer.timeZone), { width: 'short' });
   return (
-    <article aria-labelledby="offer-heading" className="mx-auto flex w-full max-w-md flex-col gap-4 rounded-2xl bg-white p-5 shadow-sm ring-1 ring-ink/10">
-      <p className="text-sm font-bold text-ink/80">{offer.salonName}</p>
-      <h1 id="offer-heading" className="text-2xl font-extrabold tracking-tight">
-        {offer.clientName ? `${offer.clientName}, a time opened up` : 'A time opened up'}
-      </h1>
-      <dl className="grid grid-cols-[max-content_1fr] gap-x-4 gap-y-2">
-        <dt className="font-bold">Service</dt>
-        <dd>{offer.serviceName}</dd>
-        <dt className="font-bold">With</dt>
-        <dd>{offer.stylistName}</dd>
-        <dt className="font-bold">When</dt>
-        <dd>
-          {when}, <span className="tabular">{formatTime(offer.start, formatFor(offer.timeZone))}</span>
-          <span className="block text-sm text-ink/80">Salon time: {zoneLabel(offer.timeZone, offer.start.slice(0, 10))}</span>
-        </dd>
-        <dt className="font-bold">Status</dt>
-        <dd className="font-bold">{statusWords[offer.status]}</dd>
-      </dl>
+    <LinkCard
+      salonName={offer.salonName}
+      title={offer.clientName ? `${offer.clientName}, a time opened up` : 'A time opened up'}
+      visit={offer}
+      facts={
+        <>
+          <dt className="font-bold">Status</dt>
+          <dd className="font-bold">{statusWords[offer.status]}</dd>
+        </>
+      }
+    >
       {accept.isError && <FormAlert>{accept.error.message}</FormAlert>}
       {offer.status === 'taken' && <FormAlert tone="success">You have this time. The salon will send you a confirmation.</FormAlert>}
       {offer.status === 'offered' && (
@@ -51,6 +41,6 @@ export function OfferView({ token, offer }: Props) {
         </>
       )}
       {(offer.status === 'gone' || offer.status === 'expired') && <p>Sorry — this time is no longer free. You stay on the standby list.</p>}
-    </article>
+    </LinkCard>
   );
 }

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { z } from 'zod';
 import { onlineBookingApi } from '@shared/api/online-booking.api';
-import type { CreateHoldSchema, PayHoldSchema } from '@shared/schemas/online-booking.schemas';
+import type { CreateHoldSchema } from '@shared/schemas/online-booking.schemas';
 import { callApi } from '@client/lib/api-client';
 import { isApiError } from '@client/lib/api-error';
 import { freeTimesTaken, holdLapsed, holdReleased, openHoldsChanged, timeHeld } from '@client/lib/cache-rules';
@@ -56,6 +56,7 @@ export function useAcceptCautions(holdId: string) {
   return useHoldWrite(holdId, (body: { version: string; secret: string }) => callApi(onlineBookingApi.acceptCautions, { params: { id: holdId }, body }));
 }
 
+/** Where to pay the hold's deposit (the payment service's page), or null when it was booked at once (no deposit). */
 export function usePayHold(holdId: string) {
-  return useHoldWrite(holdId, (body: z.input<typeof PayHoldSchema>) => callApi(onlineBookingApi.payHold, { params: { id: holdId }, body }));
+  return useHoldWrite(holdId, (secret: string) => callApi(onlineBookingApi.payHold, { params: { id: holdId }, body: { secret } }));
 }

@@ -2,7 +2,6 @@ import { useQuery, useQueryClient } from '@tanstack/react-query';
 import { useCallback, useRef, useState } from 'react';
 import { Navigate, useNavigate } from 'react-router-dom';
 import type { SessionUser } from '@shared/schemas/auth.schemas';
-import type { BookingView } from '@shared/schemas/booking-view.schemas';
 import type { Cautions, PublicSalon } from '@shared/schemas/online-booking.schemas';
 import { FormAlert } from '@client/components/ui/form-alert';
 import { LoadingState } from '@client/components/ui/loading-state';
@@ -23,14 +22,15 @@ import { HoldLapsed } from './hold-lapsed';
 import { HoldSummary } from './hold-summary';
 import { ReleaseHeldTime } from './release-held-time';
 
-type Props = { salon: PublicSalon; serviceId: string; user: SessionUser | null; returnTo: string };
+/** `paymentCancelled`: the client came back from the payment page without paying. */
+type Props = { salon: PublicSalon; serviceId: string; user: SessionUser | null; returnTo: string; paymentCancelled: boolean };
 
 /**
  * The online booking flow. Which step shows follows from the stored hold, the
  * hold's state on the server and who is signed in, so a reload or the trip to
  * sign in lands on the right step.
  */
-export function BookingFlowPage({ salon, serviceId, user, returnTo }: Props) {
+export function BookingFlowPage({ salon, serviceId, user, returnTo, paymentCancelled }: Props) {
   const navigate = useNavigate();
   const queryClient = useQueryClient();
   const [stored, save] = useStoredHold(salon.slug, serviceId);
@@ -53,9 +53,9 @@ export function BookingFlowPage({ salon, serviceId, user, returnTo }: Props) {
     save(null);
     setExpired(false);
   };
-  const onBooked = (booking: BookingView) => {
+  const onBooked = (holdId: string) => {
     save(null);
-    navigate(paths.bookingConfirmed(booking.id));
+    navigate(paths.bookingConfirmed(holdId));
   };
   // Back into the flow of a held time: here when it is this service, otherwise on its own page (which reads it back).
   const onResumed = (resumed: StoredHold) => {
@@ -131,7 +131,14 @@ export function BookingFlowPage({ salon, serviceId, user, returnTo }: Props) {
           onAccepted={() => save({ ...stored, cautionsAccepted: true })}
         />
       ) : (
-        <DepositStep hold={hold.data} secret={secret} cancellationPolicy={salon.policies.cancellation} focusOnMount={focusOnMount} onBooked={onBooked} />
+        <DepositStep
+          hold={hold.data}
+          secret={secret}
+          cancellationPolicy={salon.policies.cancellation}
+          focusOnMount={focusOnMount}
+          cancelled={paymentCancelled}
+          onBooked={() => onBooked(holdId)}
+        />
       );
     return (
       <>

@@ -34,6 +34,7 @@ const fieldNames = [
   'holdMinutes',
   'cancellationWindowHours',
   'noShowGraceMinutes',
+  'unpaidDepositReleaseHours',
   'quietFrom',
   'quietTo',
   'reminderOffsetsHours',
@@ -145,6 +146,13 @@ export function SalonSettingsForm({ settings }: { settings: SalonSettings }) {
               type="number"
               error={err('noShowGraceMinutes')}
               {...form.register('noShowGraceMinutes', num)}
+            />
+            <TextField
+              label="Release unpaid desk bookings after (hours)"
+              hint="A booking made at the desk whose deposit is still unpaid this long after it was made is released. Leave empty: an unpaid deposit does not release the booking."
+              type="number"
+              error={err('unpaidDepositReleaseHours')}
+              {...form.register('unpaidDepositReleaseHours', { setValueAs: (v: unknown) => (v === '' || v === null || v === undefined ? null : Number(v)) })}
             />
             <p className="self-end text-sm text-ink/80">Each service sets its own deposit (fixed or a share of the price) on the Services page.</p>
           </div>

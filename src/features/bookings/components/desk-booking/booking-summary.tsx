@@ -2,6 +2,7 @@ import { Link } from 'react-router-dom';
 import type { BookingView } from '@shared/schemas/booking-view.schemas';
 import { BookingStatusBadge } from '@client/components/ui/booking-status-badge';
 import { SkinTestFlag } from '@client/components/ui/skin-test-flag';
+import { DepositBadge } from '@client/components/ui/deposit-badge';
 import { SectionCard } from '@client/components/ui/section-card';
 import { SittingStatusBadge } from '@client/components/ui/sitting-status-badge';
 import { StepStrip } from '@client/components/ui/step-strip';
@@ -39,7 +40,8 @@ export function BookingSummary({ booking, timeZone, currency }: Props) {
         <dt className="font-bold">Deposit</dt>
         <dd className="tabular">
           {booking.depositCents > 0 ? formatMoney(booking.depositCents, currency) : 'None'}
-          {booking.depositOutcome && ` · ${booking.depositOutcome === 'kept' ? 'kept by the salon' : 'refunded to the client'}`}
+          {booking.depositOutcome && ` · ${booking.depositOutcome === 'kept' ? 'kept by the salon' : 'refunded to the client'}`}{' '}
+          <DepositBadge deposit={booking.deposit} currency={currency} />
         </dd>
         {booking.cancelReason && (
           <>
