@@ -46,6 +46,8 @@ export interface SalonsTable {
   lift_compromised_levels: Generated<number>;
   /** Minutes past a sitting's planned start before the desk may mark a no-show (migrations/20261207T0900). */
   no_show_grace_minutes: Generated<number>;
+  /** Minutes a later client may be asked to start late when an earlier sitting overruns (migrations/20261208T1000). */
+  late_start_limit_minutes: Generated<number>;
 }
 
 /** A guardian's consent to oxidative colour for a client under 16, recorded by the desk (migrations/20261205T0320). */
@@ -255,6 +257,14 @@ export interface SittingTapsTable {
   undone_at: ColumnType<Date | null, Date | string | null | undefined, Date | string | null>;
 }
 
+/** A later client told that the day runs late: once per sitting and delay (migrations/20261208T1005). */
+export interface RunningLateNoticesTable {
+  sitting_id: string;
+  minutes_late: number;
+  told_at: Timestamp;
+  told_by: string | null;
+}
+
 export interface AuditLogTable {
   id: Generated<string>;
   salon_id: string;
@@ -415,6 +425,7 @@ export interface Database {
   sittings: SittingsTable;
   booking_steps: BookingStepsTable;
   sitting_taps: SittingTapsTable;
+  running_late_notices: RunningLateNoticesTable;
   audit_log: AuditLogTable;
   skin_tests: SkinTestsTable;
   standby_entries: StandbyEntriesTable;

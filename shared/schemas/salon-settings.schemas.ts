@@ -49,6 +49,8 @@ export const SalonSettingsSchema = z
     cancellationKeeps: z.enum(['deposit', 'nothing']),
     // Minutes past a sitting's planned start before a no-show may be marked. Left out: unchanged.
     noShowGraceMinutes: whole(0, 240, 'minutes').optional(),
+    // Minutes a later client may be asked to start late when an earlier sitting overruns. Left out: unchanged.
+    lateStartLimitMinutes: whole(0, 240, 'minutes').optional(),
     quietFrom: ClockTimeSchema,
     quietTo: ClockTimeSchema,
     reminderOffsetsHours: z

@@ -23,6 +23,8 @@ export const SalonSchema = z.object({
   cancellationKeeps: z.enum(['deposit', 'nothing']),
   /** Minutes past a sitting's planned start before the desk may mark a no-show. */
   noShowGraceMinutes: z.number().int(),
+  /** Minutes a later client may be asked to start late when an earlier sitting overruns (the re-plan's limit). */
+  lateStartLimitMinutes: z.number().int(),
   /** Minutes each limited product family may be on the hair here, without heat (plan editors check against them). */
   processingLimits: ProcessingLimitsSchema,
   /** Levels one sitting may lift, by the state of the hair (the quote rules use them). */

@@ -23,6 +23,11 @@ export const HandsFreeWindowSchema = z.object({
   standby: z.array(z.object({ entryId: IdSchema, clientId: IdSchema, clientName: z.string(), serviceIds: z.array(IdSchema) })),
   /** Offers sent for a time inside this window. */
   offers: z.array(SentOfferSchema),
+  /**
+   * Freed by an early finish (the re-plan's freed minutes) rather than a client's developing time. The book still
+   * holds the finished sitting's booked times, so such a window is shown and called about, not filled from here.
+   */
+  earlyFinish: z.boolean(),
 });
 export type HandsFreeWindowView = z.infer<typeof HandsFreeWindowSchema>;
 export const WindowsQuerySchema = z.object({ date: LocalDateSchema.optional(), stylistId: IdSchema.optional() }).strict();

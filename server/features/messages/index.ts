@@ -4,3 +4,5 @@ export { firstMessageSends, salonQuietHours } from './messages.repository';
 export { replanAfterSkinTestChange, replanBookingMessages, replanClientMessages } from './plan-messages.service';
 export { sendLog } from './send-log.service';
 export { sendDueMessages, type Senders } from './send-message.job';
+export { runningLateTold } from './running-late.repository';
+export { tellRunningLate, type RunningLate, type RunningLateOutcome } from './running-late.service';

@@ -44,6 +44,8 @@ export interface SalonBook {
   timeOff: Map<string, Period[]>;
   outOfService: Map<string, Period[]>;
   bookings: Booking[];
+  /** The booking_steps ids of each booking above (a sitting), in the order of its steps. */
+  stepIds: Map<string, string[]>;
 }
 
 export interface BookOptions {
@@ -136,6 +138,7 @@ export async function loadSalonBook(
       // UTC minutes (cut to the minute, as the wall-clock text is) as plain integers: cheap to send and parse.
       .select([
         'si.id as sittingId',
+        'st.id as stepId',
         'b.stylist_id',
         'si.chair_id',
         'st.kind',
@@ -179,17 +182,20 @@ export async function loadSalonBook(
   const clock = zoneClock(zone, parseLocalDate(horizon.from)!, parseLocalDate(horizon.to)!);
   const local = (utc: number) => formatIso(utc, clock.offsetAt(utc)).slice(0, 16);
   const bookings = new Map<string, Booking>();
+  const stepIds = new Map<string, string[]>();
   for (const s of steps) {
     const booking = bookings.get(s.sittingId) ?? { id: s.sittingId, stylist: s.stylist_id, chair: s.chair_id, steps: [] };
     const times = { start: local(s.start), end: local(s.end) };
     booking.steps.push(s.kind === 'basin' ? { kind: 'basin', ...times, basin: s.basin_id! } : { kind: s.kind, ...times });
     bookings.set(s.sittingId, booking);
+    stepIds.set(s.sittingId, [...(stepIds.get(s.sittingId) ?? []), s.stepId]);
   }
   return {
     horizon,
     timeOff: byOwner(timeOff, (t) => t.staff_id),
     outOfService: byOwner(closures, (c) => c.chair_id ?? c.basin_id),
     bookings: [...bookings.values()],
+    stepIds,
   };
 }
 
@@ -218,6 +224,7 @@ export async function extendSalonBook(
     timeOff: join(book.timeOff, more.timeOff),
     outOfService: join(book.outOfService, more.outOfService),
     bookings: [...book.bookings, ...more.bookings.filter((b) => !seen.has(b.id))],
+    stepIds: new Map([...more.stepIds, ...book.stepIds]),
   };
 }
 

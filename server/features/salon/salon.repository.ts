@@ -29,6 +29,7 @@ export function toSalon(row: Selectable<SalonsTable>): Salon {
     cancellationWindowHours: row.cancellation_window_hours,
     cancellationKeeps: row.cancellation_keeps,
     noShowGraceMinutes: row.no_show_grace_minutes,
+    lateStartLimitMinutes: row.late_start_limit_minutes,
     ...planningRulesOf(row),
   };
 }

@@ -34,6 +34,7 @@ const fieldNames = [
   'holdMinutes',
   'cancellationWindowHours',
   'noShowGraceMinutes',
+  'lateStartLimitMinutes',
   'quietFrom',
   'quietTo',
   'reminderOffsetsHours',
@@ -145,6 +146,13 @@ export function SalonSettingsForm({ settings }: { settings: SalonSettings }) {
               type="number"
               error={err('noShowGraceMinutes')}
               {...form.register('noShowGraceMinutes', num)}
+            />
+            <TextField
+              label="Late start allowed (minutes)"
+              hint="When a sitting runs over, the desk may start the next client up to this late (and tell them) before moving them."
+              type="number"
+              error={err('lateStartLimitMinutes')}
+              {...form.register('lateStartLimitMinutes', num)}
             />
             <p className="self-end text-sm text-ink/80">Each service sets its own deposit (fixed or a share of the price) on the Services page.</p>
           </div>
