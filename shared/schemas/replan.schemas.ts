@@ -81,7 +81,7 @@ export const ConflictViewSchema = z.object({
 });
 export type ConflictView = z.infer<typeof ConflictViewSchema>;
 
-/** Minutes of a stylist's hands an early finish freed, from now on (shown as a hands-free window). */
+/** Minutes of a stylist's hands freed as the day now runs (an early finish, a sitting that moved), from now on; shown as a hands-free window. */
 export const FreedStretchSchema = z.object({ stylistId: IdSchema, start: InstantSchema, end: InstantSchema, minutes: z.number().int() });
 export type FreedStretch = z.infer<typeof FreedStretchSchema>;
 

@@ -24,10 +24,11 @@ export const HandsFreeWindowSchema = z.object({
   /** Offers sent for a time inside this window. */
   offers: z.array(SentOfferSchema),
   /**
-   * Freed by an early finish (the re-plan's freed minutes) rather than a client's developing time. The book still
-   * holds the finished sitting's booked times, so such a window is shown and called about, not filled from here.
+   * Freed minutes (docs/glossary.md): hands a sitting under way no longer needs as the day now runs (it finished
+   * early, or moved), rather than a client's developing time as booked. The book still holds that sitting's booked
+   * times, so such a window is shown and called about, not filled from here.
    */
-  earlyFinish: z.boolean(),
+  freed: z.boolean(),
 });
 export type HandsFreeWindowView = z.infer<typeof HandsFreeWindowSchema>;
 export const WindowsQuerySchema = z.object({ date: LocalDateSchema.optional(), stylistId: IdSchema.optional() }).strict();

@@ -232,8 +232,8 @@ describe('a tap that runs late', () => {
     // The rinse was booked for minutes 20..60 and is done: those 40 minutes of hands are free.
     expect(freed).toMatchObject({ stylistId: a.staffId, minutes: 40 });
     const windows = await a.agent.get('/api/windows');
-    const window = windows.body.windows.find((w: { earlyFinish: boolean }) => w.earlyFinish);
-    expect(window).toMatchObject({ stylistId: a.staffId, start: freed.start, end: freed.end, earlyFinish: true });
+    const window = windows.body.windows.find((w: { freed: boolean }) => w.freed);
+    expect(window).toMatchObject({ stylistId: a.staffId, start: freed.start, end: freed.end, freed: true });
     expect(window.fits.map((f: { name: string }) => f.name)).toContain('Toner refresh');
   });
 });

@@ -107,18 +107,18 @@ describe('the re-plan in the desk’s words', () => {
     expect(summary.freed).toEqual([{ stylistId: 'ana', start: '2027-06-09T16:00-06:00', end: '2027-06-09T16:40-06:00', minutes: 40 }]);
   });
 
-  it('without a late start that works, tells the minutes run into the later sitting rounded up to the grid; no one waits for closing time', () => {
+  it('without a late start that works, tells the wait until the earlier sitting is out of the way, rounded up to the grid; no one waits for closing time', () => {
     const summary = describeReplans(
       [
         replan([
-          { kind: 'chair', sittingId: 'l', causeId: 'r', minutes: 22, start: '2027-06-09T15:00-06:00', end: '2027-06-09T15:22-06:00', fixes: [] },
+          { kind: 'chair', sittingId: 'l', causeId: 'r', minutes: 12, start: '2027-06-09T15:10-06:00', end: '2027-06-09T15:22-06:00', fixes: [] },
           { kind: 'closing', sittingId: 'r', causeId: null, minutes: 10, start: '2027-06-09T19:00-06:00', end: '2027-06-09T19:10-06:00', fixes: [] },
         ]),
       ],
       names,
     );
     expect(summary.conflicts.map((c) => [c.words, c.tellMinutes])).toEqual([
-      ['Maya Ortiz’s sitting now runs 22 min into Jo Park’s 3:00 PM: both need Chair 2.', 25],
+      ['Maya Ortiz’s sitting now runs 12 min into Jo Park’s 3:00 PM: both need Chair 2.', 25],
       ['Maya Ortiz’s sitting now runs 10 min past closing time.', null],
     ]);
   });

@@ -65,14 +65,17 @@ function fixWords(offered: OfferedFix, names: ReplanNames, replan: StylistReplan
 }
 
 /**
- * The delay a later client would be told of: the least late start that works, or else the minutes the earlier
- * sitting runs into theirs, rounded up to the salon's grid. None for hours and closing (no one waits) or an online hold.
+ * The delay a later client would be told of: the least late start that works, or else until the earlier sitting is
+ * out of their way (the end of the conflict, from their booked start), rounded up to the salon's grid. None for hours
+ * and closing (no one waits) or an online hold.
  */
 function tellMinutes(c: ReplanConflict, names: ReplanNames): number | null {
   const suffering = names.sittings.get(c.sittingId);
   if (!c.causeId || !suffering?.clientId) return null;
   const late = c.fixes.find((f): f is OfferedFix & { fix: Extract<ReplanFix, { kind: 'late_start' }> } => f.fix.kind === 'late_start');
-  return late ? late.fix.minutesLate : Math.ceil(c.minutes / names.granularityMinutes) * names.granularityMinutes;
+  if (late) return late.fix.minutesLate;
+  const g = names.granularityMinutes;
+  return Math.max(g, Math.ceil((Date.parse(c.end) - suffering.start.getTime()) / 60_000 / g) * g);
 }
 
 /** The re-plans of the day in the desk's words: each conflict named by its clients and times, each fix in plain words. */

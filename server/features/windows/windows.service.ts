@@ -40,14 +40,14 @@ export async function listWindowViews(
     o.stylistId === w.stylist && o.at >= Date.parse(w.start) && o.at < Date.parse(w.end);
   const sent = ({ at: _at, ...o }: (typeof offers)[number]): SentOffer => o;
   const fits = windowFitServices(services);
-  const freed = await earlyFinishes(db, salon, date, fits, now);
+  const freed = await freedWindows(db, salon, date, fits, now);
   const windows = await windowsOn(
     db,
     salon,
     date,
     fits.map((f) => ({ service: f.service.id, skill: f.service.skill, minutes: f.minutes })),
   );
-  const shown = [...windows.map((w) => ({ ...w, earlyFinish: false })), ...freed].filter((w) => !stylistId || w.stylist === stylistId);
+  const shown = [...windows.map((w) => ({ ...w, freed: false })), ...freed].filter((w) => !stylistId || w.stylist === stylistId);
   const views = shown.map((w) => {
     const fitting = fits.filter((f) => w.fits.includes(f.service.id));
     const wanted = standbyForWindow(standby, { stylistId: w.stylist, start: w.start, end: w.end, fitIds: w.fits }, salon.timeZone);
@@ -64,7 +64,7 @@ export async function listWindowViews(
         serviceIds: e.services.map((s) => s.id).filter((id) => w.fits.includes(id)),
       })),
       offers: offers.filter((o) => inWindow(o, w)).map(sent),
-      earlyFinish: w.earlyFinish,
+      freed: w.freed,
     };
   });
   const closedOffers = offers.filter((o) => !shown.some((w) => inWindow(o, w))).map(sent);
@@ -72,10 +72,10 @@ export async function listWindowViews(
 }
 
 /**
- * Today's early finishes as windows: the minutes of a stylist's hands the re-plan finds freed from now on, with the
- * fits the stylist has the skill for and that are short enough for the stretch (the finished client's chair is free).
+ * Today's freed minutes as windows: the minutes of a stylist's hands the re-plan finds freed from now on (an early
+ * finish, a sitting that moved), with the fits the stylist has the skill for that are short enough for the stretch.
  */
-async function earlyFinishes(db: Db, salon: Salon, date: string, fits: ReturnType<typeof windowFitServices>, now: Date) {
+async function freedWindows(db: Db, salon: Salon, date: string, fits: ReturnType<typeof windowFitServices>, now: Date) {
   if (date !== localDateOf(now, salon.timeZone)) return [];
   const [replans, stylists] = await Promise.all([replanDaysUnderWay(db, salon, now), listStylists(db, salon.id)]);
   const skills = new Map(stylists.map((s) => [s.id, s.skills]));
@@ -87,7 +87,7 @@ async function earlyFinishes(db: Db, salon: Salon, date: string, fits: ReturnTyp
         start: f.start,
         end: f.end,
         fits: fits.filter((fit) => fit.minutes <= f.minutes && (skills.get(r.stylistId) ?? []).includes(fit.service.skill)).map((fit) => fit.service.id),
-        earlyFinish: true,
+        freed: true,
       })),
   );
 }

@@ -14,7 +14,7 @@ type Props = { date: string; stylistNames: Record<string, string> };
 
 /**
  * The desk's "Running late": every conflict today's overruns make for later bookings, with fixes best first, and the
- * time early finishes freed. It updates itself when a stylist taps (live events) and each minute as steps run on.
+ * minutes freed (an early finish, a sitting that moved). It updates itself when a stylist taps (live events) and each minute as steps run on.
  */
 export function RunningLatePanel({ date, stylistNames }: Props) {
   const day = useQuery(replanQueries.day(date));
@@ -54,7 +54,7 @@ export function RunningLatePanel({ date, stylistNames }: Props) {
         <ul className="flex flex-col gap-1 text-sm">
           {freed.map((f) => (
             <li key={`${f.stylistId}-${f.start}`}>
-              <span className="font-bold">Early finish:</span> {stylistNames[f.stylistId] ?? 'A stylist'} is free{' '}
+              <span className="font-bold">Hands freed:</span> {stylistNames[f.stylistId] ?? 'A stylist'} is free{' '}
               <span className="tabular">{formatRange(f.start, f.end, formatFor(timeZone))}</span> ({f.minutes} min), shown as a hands-free window.
             </li>
           ))}
