@@ -1,4 +1,5 @@
-import { sql } from 'kysely';
+import { sql, type SelectQueryBuilder } from 'kysely';
+import type { Database } from '@server/db/schema';
 import type { Db } from '@server/db/database';
 import type { SittingStatus } from '@shared/schemas/day-of-service.schemas';
 import type { StepPlan } from '@shared/schemas/step-plan.schemas';
@@ -26,43 +27,48 @@ export interface DayRunSitting {
   steps: DayRunStep[];
 }
 
+/** A query over sittings joined to their bookings, as both statements below read the day. */
+type SittingsQuery = SelectQueryBuilder<Database & { si: Database['sittings']; b: Database['bookings'] }, 'si' | 'b', object>;
+
 /**
  * The salon's live sittings that touch [from, to), one stylist's or everyone's, with their steps' actual times and
- * developing ranges. Two statements; the steps come in the book's order (seq).
+ * developing ranges. Two statements sent together; the steps come in the book's order (seq).
  */
 export async function readDayRuns(db: Db, salonId: string, from: Date, to: Date, stylistId?: string): Promise<DayRunSitting[]> {
-  const sittings = await db
-    .selectFrom('sittings as si')
-    .innerJoin('bookings as b', 'b.id', 'si.booking_id')
-    .innerJoin('services as sv', 'sv.id', 'b.service_id')
-    .select([
-      'si.id',
-      'si.seq',
-      'si.status',
-      'b.id as bookingId',
-      'b.stylist_id',
-      'b.step_plan',
-      'sv.skill',
-      (eb) => eb.selectFrom('sittings as all').select(eb.fn.countAll<number>().as('n')).whereRef('all.booking_id', '=', 'b.id').as('sittingCount'),
-    ])
-    .where('b.salon_id', '=', salonId)
-    .where('si.live', '=', true)
-    .$if(stylistId !== undefined, (q) => q.where('b.stylist_id', '=', stylistId!))
-    .where(sql<boolean>`si.during && tstzrange(${from}, ${to}, '[)')`)
-    .execute();
-  if (sittings.length === 0) return [];
-  const steps = await db
-    .selectFrom('booking_steps')
-    .select(['id', 'sitting_id', 'seq', 'label', 'actual_start', 'actual_end'])
-    .where(
-      'sitting_id',
-      'in',
-      sittings.map((s) => s.id),
-    )
-    .where('live', '=', true)
-    .orderBy('sitting_id')
-    .orderBy('seq')
-    .execute();
+  const onTheDay = <Q extends SittingsQuery>(q: Q): Q =>
+    q
+      .where('b.salon_id', '=', salonId)
+      .where('si.live', '=', true)
+      .$if(stylistId !== undefined, (w) => w.where('b.stylist_id', '=', stylistId!))
+      .where(sql<boolean>`si.during && tstzrange(${from}, ${to}, '[)')`) as Q;
+  const [sittings, steps] = await Promise.all([
+    onTheDay(
+      db
+        .selectFrom('sittings as si')
+        .innerJoin('bookings as b', 'b.id', 'si.booking_id')
+        .innerJoin('services as sv', 'sv.id', 'b.service_id')
+        .select([
+          'si.id',
+          'si.seq',
+          'si.status',
+          'b.id as bookingId',
+          'b.stylist_id',
+          'b.step_plan',
+          'sv.skill',
+          (eb) => eb.selectFrom('sittings as all').select(eb.fn.countAll<number>().as('n')).whereRef('all.booking_id', '=', 'b.id').as('sittingCount'),
+        ]),
+    ).execute(),
+    onTheDay(
+      db
+        .selectFrom('booking_steps as st')
+        .innerJoin('sittings as si', 'si.id', 'st.sitting_id')
+        .innerJoin('bookings as b', 'b.id', 'si.booking_id')
+        .select(['st.id', 'st.sitting_id', 'st.seq', 'st.label', 'st.actual_start', 'st.actual_end'])
+        .where('st.live', '=', true)
+        .orderBy('st.sitting_id')
+        .orderBy('st.seq'),
+    ).execute(),
+  ]);
   return sittings.map((s) => {
     const planned = (s.step_plan as StepPlan).sittings[s.seq - 1]?.steps ?? [];
     return {

@@ -25,8 +25,9 @@ async function replanDays(db: Db, salon: ReplanSalon, now: Date, who: { stylistI
   const dayStart = instantAt(date, salon.timeZone)!; // a date read from an instant is a real date
   const dayEnd = instantAt(shiftLocalDate(date, 1), salon.timeZone)!;
   const stylistId = who === 'under_way' ? undefined : who.stylistId;
-  const setup = await loadSalonSetup(db, salon.id);
-  const [book, runs] = await Promise.all([loadSalonBook(db, salon, setup, horizon), readDayRuns(db, salon.id, dayStart, dayEnd, stylistId)]);
+  // One round of reads: the book starts at once and its time off follows the setup's stylists.
+  const reading = loadSalonSetup(db, salon.id);
+  const [setup, book, runs] = await Promise.all([reading, loadSalonBook(db, salon, reading, horizon), readDayRuns(db, salon.id, dayStart, dayEnd, stylistId)]);
   const active = new Set(setup.stylists.map((s) => s.id));
   const stylists = (who === 'under_way' ? stylistsUnderWay(runs) : [who.stylistId]).filter((id) => active.has(id));
   if (stylists.length === 0) return [];

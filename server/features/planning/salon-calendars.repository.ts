@@ -105,11 +105,14 @@ export async function loadSalonSetup(db: Db, salonId: string): Promise<SalonSetu
   };
 }
 
-/** The book over a horizon for the setup's stylists and units (time off and closures cut to the horizon). */
+/**
+ * The book over a horizon for the setup's stylists and units (time off and closures cut to the horizon). The setup may
+ * still be on its way: only the time off waits for its stylists, the booked steps and closures are read at once.
+ */
 export async function loadSalonBook(
   db: Db,
   salon: PlanningSalon,
-  setup: SalonSetup,
+  setup: SalonSetup | Promise<SalonSetup>,
   horizon: Horizon,
   { except, holds = true }: BookOptions = {},
 ): Promise<SalonBook> {
@@ -117,8 +120,7 @@ export async function loadSalonBook(
   const from = DateTime.fromISO(horizon.from, { zone }).toJSDate();
   const to = DateTime.fromISO(horizon.to, { zone }).toJSDate();
   const range = sql`tstzrange(${from}, ${to}, '[)')`;
-  const staffIds = setup.stylists.map((s) => s.id);
-  const [timeOff, steps, closures] = await Promise.all([
+  const timeOffOf = (staffIds: string[]) =>
     staffIds.length === 0
       ? []
       : db
@@ -130,7 +132,9 @@ export async function loadSalonBook(
           ])
           .where('staff_id', 'in', staffIds)
           .where(sql<boolean>`during && ${range}`)
-          .execute(),
+          .execute();
+  const [timeOff, steps, closures] = await Promise.all([
+    Promise.resolve(setup).then((s) => timeOffOf(s.stylists.map((st) => st.id))),
     db
       .selectFrom('booking_steps as st')
       .innerJoin('sittings as si', 'si.id', 'st.sitting_id')
