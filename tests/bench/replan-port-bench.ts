@@ -5,14 +5,10 @@
  * the salon's setup, the two days of the book and the day's actual times read, the engine, the answer mapped back.
  * Part of `npm run bench` (tests/bench/engine-bench.ts); DATABASE_URL to use another database.
  */
-import { chmodSync, mkdtempSync, rmSync } from 'node:fs';
-import { tmpdir } from 'node:os';
-import { join } from 'node:path';
 import { sql } from 'kysely';
 import { createDb, createPool } from '@server/db/database';
 import { replanDayFor } from '@server/features/planning';
-import { prepareLocalDatabase } from '@server/ops/local-database';
-import { stopCluster, type Cluster } from '@server/ops/postgres-cluster';
+import { withBenchDatabase } from './bench-database';
 import { loadBusySalon } from './busy-salon-db';
 
 const WARM_UP = 10;
@@ -49,22 +45,8 @@ async function overrunBusiestDay(db: ReturnType<typeof createDb>, salonId: strin
   return { stylistId: busiest.stylist_id, now: new Date(over.getTime() + Math.min(10, secondMinutes) * 60_000), sittings: busiest.n };
 }
 
-export async function benchReplanViaPort(): Promise<PortReplanBench> {
-  let cluster: Cluster | null = null;
-  const scratch = mkdtempSync(join(tmpdir(), 'dwell-bench-'));
-  chmodSync(scratch, 0o755); // the postgres user must be able to enter it
-  try {
-    let url = process.env.DATABASE_URL;
-    if (!url) {
-      const prepared = await prepareLocalDatabase({
-        dataRoot: scratch,
-        port: 59000 + Math.floor(Math.random() * 900),
-        database: 'dwell_bench',
-        throwaway: true,
-      });
-      cluster = prepared.cluster;
-      url = prepared.url;
-    }
+export function benchReplanViaPort(): Promise<PortReplanBench> {
+  return withBenchDatabase(async (url) => {
     const db = createDb(createPool(url));
     try {
       // Every booking is still to come on 2027-03-01, so none is finished or a no-show: the day runs as booked until the overrun.
@@ -93,8 +75,5 @@ export async function benchReplanViaPort(): Promise<PortReplanBench> {
     } finally {
       await db.destroy();
     }
-  } finally {
-    if (cluster) stopCluster(cluster);
-    rmSync(scratch, { recursive: true, force: true });
-  }
+  });
 }

@@ -147,6 +147,16 @@ async function fixOf(bookingId: string, kind: string) {
 const auditActions = async (bookingId: string) =>
   (await db().selectFrom('audit_log').select('action').where('entity_id', '=', bookingId).orderBy('at').execute()).map((r) => r.action);
 
+/** When the booking's (only) sitting starts, as booked. */
+const startOf = async (bookingId: string) =>
+  (
+    await db()
+      .selectFrom('sittings')
+      .select(sql<Date>`lower(during)`.as('start'))
+      .where('booking_id', '=', bookingId)
+      .executeTakeFirstOrThrow()
+  ).start;
+
 const runningLateMessages = (bookingId: string) =>
   db().selectFrom('messages').select(['channel', 'body', 'kind']).where('booking_id', '=', bookingId).where('kind', '=', 'running_late').execute();
 
@@ -270,21 +280,13 @@ describe('applying a fix', () => {
     const [conflict] = await conflictsFor(later.id);
     const fix = conflict!.fixes.find((f) => f.fix.kind === 'hand_over' && f.fix.stylistId === b.staffId)!;
     expect(fix.words).toMatch(new RegExp(`^Hand Later Client ${scene} over to Stylist \\d+ at `));
-    const before = await db()
-      .selectFrom('sittings')
-      .select(sql<Date>`lower(during)`.as('start'))
-      .where('booking_id', '=', later.id)
-      .executeTakeFirstOrThrow();
+    const before = await startOf(later.id);
     const res = await desk$.write('post', fixPath(later.id), { fix: fix.fix });
     expect(res.status, JSON.stringify(res.body)).toBe(200);
     const booking = await db().selectFrom('bookings').select('stylist_id').where('id', '=', later.id).executeTakeFirstOrThrow();
     expect(booking.stylist_id).toBe(b.staffId);
-    const after = await db()
-      .selectFrom('sittings')
-      .select(sql<Date>`lower(during)`.as('start'))
-      .where('booking_id', '=', later.id)
-      .executeTakeFirstOrThrow();
-    expect(after.start.getTime()).toBe(before.start.getTime());
+    const after = await startOf(later.id);
+    expect(after.getTime()).toBe(before.getTime());
     expect(await auditActions(later.id)).toContain('moved sitting 1 (running late)');
     const notices = await db().selectFrom('messages').select('kind').where('booking_id', '=', later.id).where('kind', '=', 'change').execute();
     expect(notices.length).toBeGreaterThan(0);
@@ -309,20 +311,12 @@ describe('applying a fix', () => {
     expect(wrongDelay.status).toBe(409);
     expect(wrongDelay.body.error.code).toBe('STALE_FIX');
 
-    const before = await db()
-      .selectFrom('sittings')
-      .select(sql<Date>`lower(during)`.as('start'))
-      .where('booking_id', '=', later.id)
-      .executeTakeFirstOrThrow();
+    const before = await startOf(later.id);
     const res = await desk$.write('post', fixPath(later.id), { fix: fix.fix });
     expect(res.status, JSON.stringify(res.body)).toBe(200);
     expect(res.body.done).toMatch(/already been told/);
-    const after = await db()
-      .selectFrom('sittings')
-      .select(sql<Date>`lower(during)`.as('start'))
-      .where('booking_id', '=', later.id)
-      .executeTakeFirstOrThrow();
-    expect((after.start.getTime() - before.start.getTime()) / 60_000).toBe(minutes);
+    const after = await startOf(later.id);
+    expect((after.getTime() - before.getTime()) / 60_000).toBe(minutes);
     expect(await auditActions(later.id)).toContain('moved sitting 1 (running late)');
 
     const sent = await runningLateMessages(later.id);

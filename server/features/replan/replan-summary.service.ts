@@ -32,17 +32,20 @@ export async function summarise(db: Db, salon: Salon, replans: StylistReplan[]):
   });
 }
 
+/** The moment of a re-plan, to the second. */
+const asOf = (now: Date, zone: string) => instantIso(new Date(Math.floor(now.getTime() / 1000) * 1000), zone);
+
 /** Every day under way at `now` re-planned and put in words, as the desk's "Running late" panel reads it. */
 export async function salonDayNow(db: Db, salon: Salon, now: Date): Promise<DayConflicts> {
   const summary = await summarise(db, salon, await replanDaysUnderWay(db, salon, now));
-  return { date: localDateOf(now, salon.timeZone), timeZone: salon.timeZone, asOf: instantIso(now, salon.timeZone), ...summary };
+  return { date: localDateOf(now, salon.timeZone), timeZone: salon.timeZone, asOf: asOf(now, salon.timeZone), ...summary };
 }
 
 /** The desk's conflicts for a date: today's re-planned from the actual times; any other day runs as booked, so none. */
 export async function deskDayConflicts(db: Db, user: SessionUser, date: string | undefined, now: Date): Promise<DayConflicts> {
   const salon = await findSalon(db, user.salonId);
   const today = localDateOf(now, salon.timeZone);
-  if (date && date !== today) return { date, timeZone: salon.timeZone, asOf: instantIso(now, salon.timeZone), conflicts: [], freed: [] };
+  if (date && date !== today) return { date, timeZone: salon.timeZone, asOf: asOf(now, salon.timeZone), conflicts: [], freed: [] };
   return salonDayNow(db, salon, now);
 }
 
