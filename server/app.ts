@@ -27,6 +27,7 @@ import { registerMailboxRoutes } from './features/mailbox/mailbox.routes';
 import { registerOwnerRoutes } from './features/owner/owner.routes';
 import { registerBookingChangeRoutes } from './features/bookings/booking-changes.routes';
 import { registerDayOfServiceRoutes } from './features/day-of-service/day-of-service.routes';
+import { registerReplanRoutes } from './features/replan/replan.routes';
 import { registerServiceRoutes } from './features/services/services.routes';
 import { registerSkinTestRoutes } from './features/skin-tests/skin-tests.routes';
 import { registerStandbyRoutes } from './features/standby/standby.routes';
@@ -87,6 +88,7 @@ export function createApp(deps: Omit<AppDeps, 'table' | 'storage' | 'readCache' 
     registerBookingRoutes,
     registerBookingChangeRoutes,
     registerDayOfServiceRoutes,
+    registerReplanRoutes,
     registerServiceRoutes,
     registerClientAgeRoutes,
     registerSkinTestRoutes,

@@ -48,6 +48,8 @@ export interface SalonsTable {
   no_show_grace_minutes: Generated<number>;
   /** Hours after a desk booking is made that it is released while its deposit is unpaid; null: never (migrations/20261208T0900). */
   unpaid_deposit_release_hours: ColumnType<number | null, number | null | undefined, number | null>;
+  /** Minutes a later client may be asked to start late when an earlier sitting overruns (migrations/20261208T1000). */
+  late_start_limit_minutes: Generated<number>;
 }
 
 /** A guardian's consent to oxidative colour for a client under 16, recorded by the desk (migrations/20261205T0320). */
@@ -257,6 +259,14 @@ export interface SittingTapsTable {
   by_user_id: string | null;
   before: Json;
   undone_at: ColumnType<Date | null, Date | string | null | undefined, Date | string | null>;
+}
+
+/** A later client told that the day runs late: once per sitting and delay (migrations/20261208T1005). */
+export interface RunningLateNoticesTable {
+  sitting_id: string;
+  minutes_late: number;
+  told_at: Timestamp;
+  told_by: string | null;
 }
 
 export interface AuditLogTable {
@@ -472,6 +482,7 @@ export interface Database {
   sittings: SittingsTable;
   booking_steps: BookingStepsTable;
   sitting_taps: SittingTapsTable;
+  running_late_notices: RunningLateNoticesTable;
   audit_log: AuditLogTable;
   skin_tests: SkinTestsTable;
   standby_entries: StandbyEntriesTable;

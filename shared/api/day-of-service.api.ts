@@ -1,9 +1,10 @@
-import { FinishSittingSchema, SittingParamsSchema, SittingRunSchema, StepParamsSchema } from '../schemas/day-of-service.schemas';
+import { FinishSittingSchema, SittingParamsSchema, SittingRunSchema, SteppedSittingRunSchema, StepParamsSchema } from '../schemas/day-of-service.schemas';
 import { DESK, STAFF, endpoint } from './endpoint';
 
 /**
  * Running the day: the desk marks a sitting's arrival or no-show; the stylist on the booking (or the desk) starts and
- * finishes each step with one tap and may undo the last tap for a minute. Each answers the sitting as it now runs.
+ * finishes each step with one tap and may undo the last tap for a minute. Each answers the sitting as it now runs; a tap that
+ * sets an actual time also answers `replan`, the conflicts and freed time it makes in the stylist's day.
  */
 export const dayOfServiceApi = {
   arrive: endpoint({
@@ -28,7 +29,7 @@ export const dayOfServiceApi = {
     access: STAFF,
     summary: 'Start step k of sitting n now (the stylist on the booking, or the desk); the step before must be finished',
     params: StepParamsSchema,
-    response: SittingRunSchema,
+    response: SteppedSittingRunSchema,
   }),
   finishStep: endpoint({
     method: 'post',
@@ -36,7 +37,7 @@ export const dayOfServiceApi = {
     access: STAFF,
     summary: 'Finish step k of sitting n now; the last step finishes the sitting',
     params: StepParamsSchema,
-    response: SittingRunSchema,
+    response: SteppedSittingRunSchema,
   }),
   finishSitting: endpoint({
     method: 'post',
@@ -45,7 +46,7 @@ export const dayOfServiceApi = {
     summary: 'Finish a sitting with steps left open (leaveOpen: true and a reason), e.g. when the client leaves early',
     params: SittingParamsSchema,
     body: FinishSittingSchema,
-    response: SittingRunSchema,
+    response: SteppedSittingRunSchema,
   }),
   undo: endpoint({
     method: 'post',
@@ -53,6 +54,6 @@ export const dayOfServiceApi = {
     access: STAFF,
     summary: 'Undo the last tap on the sitting, within a minute of it (a no-show is not undone)',
     params: SittingParamsSchema,
-    response: SittingRunSchema,
+    response: SteppedSittingRunSchema,
   }),
 };

@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { BookingStatusSchema, IdSchema, InstantSchema, StepKindSchema, typedText } from './common.schemas';
 import { ProductFamilySchema } from './step-plan.schemas';
+import { ReplanSummarySchema } from './replan.schemas';
 
 /** Where one sitting stands on the day (docs/glossary.md, "Sitting statuses"). */
 export const SittingStatusSchema = z.enum(['booked', 'arrived', 'in_progress', 'finished', 'no_show']);
@@ -62,3 +63,7 @@ export const SittingRunSchema = z.object({
   undo: z.object({ action: TapActionSchema, until: InstantSchema }).nullable(),
 });
 export type SittingRun = z.infer<typeof SittingRunSchema>;
+
+/** The answer of a tap that sets an actual time (start, finish, finish sitting, undo): the sitting, and what it means for the stylist's day. */
+export const SteppedSittingRunSchema = SittingRunSchema.extend({ replan: ReplanSummarySchema });
+export type SteppedSittingRun = z.infer<typeof SteppedSittingRunSchema>;

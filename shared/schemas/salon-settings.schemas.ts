@@ -51,6 +51,8 @@ export const SalonSettingsSchema = z
     noShowGraceMinutes: whole(0, 240, 'minutes').optional(),
     // Release a desk booking whose deposit is still unpaid this many hours after it was made; null: never. Left out: unchanged.
     unpaidDepositReleaseHours: whole(1, 720, 'hours').nullable().optional(),
+    // Minutes a later client may be asked to start late when an earlier sitting overruns. Left out: unchanged.
+    lateStartLimitMinutes: whole(0, 240, 'minutes').optional(),
     quietFrom: ClockTimeSchema,
     quietTo: ClockTimeSchema,
     reminderOffsetsHours: z

@@ -25,6 +25,8 @@ export const SalonSchema = z.object({
   noShowGraceMinutes: z.number().int(),
   /** Hours after a desk booking is made that it is released while its deposit is still unpaid; null: never. */
   unpaidDepositReleaseHours: z.number().int().nullable(),
+  /** Minutes a later client may be asked to start late when an earlier sitting overruns (the re-plan's limit). */
+  lateStartLimitMinutes: z.number().int(),
   /** Minutes each limited product family may be on the hair here, without heat (plan editors check against them). */
   processingLimits: ProcessingLimitsSchema,
   /** Levels one sitting may lift, by the state of the hair (the quote rules use them). */

@@ -23,6 +23,12 @@ export const HandsFreeWindowSchema = z.object({
   standby: z.array(z.object({ entryId: IdSchema, clientId: IdSchema, clientName: z.string(), serviceIds: z.array(IdSchema) })),
   /** Offers sent for a time inside this window. */
   offers: z.array(SentOfferSchema),
+  /**
+   * Freed minutes (docs/glossary.md): hands a sitting under way no longer needs as the day now runs (it finished
+   * early, or moved), rather than a client's developing time as booked. The book still holds that sitting's booked
+   * times, so such a window is shown and called about, not filled from here.
+   */
+  freed: z.boolean(),
 });
 export type HandsFreeWindowView = z.infer<typeof HandsFreeWindowSchema>;
 export const WindowsQuerySchema = z.object({ date: LocalDateSchema.optional(), stylistId: IdSchema.optional() }).strict();

@@ -71,7 +71,9 @@ export const paths = {
   deskClient: (id: string) => to(pages.deskClient, { id }),
   outbox: pages.outbox,
   deskBook: (consultationId?: string) => to(pages.deskBook, {}, { consultation: consultationId }),
-  deskBooking: (id: string) => to(pages.deskBooking, { id }),
+  /** A booking's page; `move` opens its move form for that sitting, with free times from `from` (another day for a late client). */
+  deskBooking: (id: string, move?: { sitting: number; from?: string }) =>
+    to(pages.deskBooking, { id }, { sitting: move && String(move.sitting), from: move?.from }),
   deskStandby: pages.deskStandby,
   deskWeek: (date?: string, stylistId?: string) => to(pages.deskWeek, {}, { date, stylist: stylistId }),
   offer: (token: string) => to(pages.offer, { token }),

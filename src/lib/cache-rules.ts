@@ -11,6 +11,7 @@ import { mixLogsApi } from '@shared/api/mix-logs.api';
 import { onlineBookingApi } from '@shared/api/online-booking.api';
 import { paymentsApi } from '@shared/api/payments.api';
 import { photosApi } from '@shared/api/photos.api';
+import { replanApi } from '@shared/api/replan.api';
 import { sessionApi } from '@shared/api/session.api';
 import { standbyApi } from '@shared/api/standby.api';
 import { testRecordsApi } from '@shared/api/test-records.api';
@@ -101,7 +102,7 @@ export function depositChanged(queryClient: QueryClient, details: DepositDetails
 }
 
 /** Views of one date (`?date=`; today when it is left out). */
-const DAY_VIEWS = [bookingsApi.deskDay, bookingsApi.stylistDay, windowsApi.list];
+const DAY_VIEWS = [bookingsApi.deskDay, bookingsApi.stylistDay, windowsApi.list, replanApi.dayConflicts];
 /** A booking's own page and what it opens. */
 const BOOKING_PAGES = [bookingsApi.one, bookingsApi.history, bookingsApi.cancelTerms, paymentsApi.deposit];
 /** What a change of the book may send or queue: the send log and the Outbox of the local fakes. */
@@ -138,10 +139,31 @@ export function bookChangedElsewhere(queryClient: QueryClient, change: BookChang
 
 /**
  * A sitting was tapped (arrived, a no-show, a step started or finished, an undo): its booking's page and history,
- * and every day and week of the book, which show statuses and actual times; a no-show frees time for windows.
+ * and every day and week of the book, which show statuses and actual times; a no-show or an early finish frees time
+ * for windows, and an actual time re-plans the day (the desk's "Running late").
  */
 export const sittingTapped = (queryClient: QueryClient, bookingId: string): Promise<unknown> =>
-  Promise.all([refreshRecord(queryClient, [bookingsApi.one, bookingsApi.history], bookingId), refreshEndpoints(queryClient, [...BOOK_VIEWS, windowsApi.list])]);
+  Promise.all([
+    refreshRecord(queryClient, [bookingsApi.one, bookingsApi.history], bookingId),
+    refreshEndpoints(queryClient, [...BOOK_VIEWS, windowsApi.list, replanApi.dayConflicts]),
+  ]);
+
+// ——— Running late: fixes from the re-plan, and telling a later client ———
+
+/**
+ * A fix was applied: the day's conflicts are the answer's, and the fix changed a booking like any desk change (its
+ * page and history, the days and weeks, windows, free times) and may have queued a message (the send log).
+ */
+export function replanFixApplied(queryClient: QueryClient, bookingId: string, day: Answer<typeof replanApi.dayConflicts>): Promise<unknown> {
+  queryClient.setQueryData(apiKey(replanApi.dayConflicts, { query: { date: day.date } }), day);
+  return Promise.all([
+    refreshRecord(queryClient, [...BOOKING_PAGES, bookingsApi.moveTimes], bookingId),
+    refreshEndpoints(queryClient, [...BOOK_VIEWS, windowsApi.list, bookingsApi.options, ...SENT]),
+  ]);
+}
+
+/** A later client was told of a delay: the conflicts show who was told, and the send log has the message. */
+export const runningLateTold = (queryClient: QueryClient): Promise<unknown> => refreshEndpoints(queryClient, [replanApi.dayConflicts, ...SENT]);
 
 /* Hands-free time: windows, the standby list and window offers. */
 

@@ -5,18 +5,14 @@
  * Target: p95 under 300 ms. With DATABASE_URL set, that database is used instead of a new cluster
  * (the busy salon is added to it). Never run by `npm test`; the last line is the figure to report.
  */
-import { chmodSync, mkdtempSync, rmSync } from 'node:fs';
-import { tmpdir } from 'node:os';
-import { join } from 'node:path';
 import { sql } from 'kysely';
 import request from 'supertest';
 import { createApp } from '@server/app';
 import { loadConfig } from '@server/config';
 import { createDb, createPool } from '@server/db/database';
 import { startJobQueue } from '@server/jobs/job-queue';
-import { prepareLocalDatabase } from '@server/ops/local-database';
-import { stopCluster, type Cluster } from '@server/ops/postgres-cluster';
 import { startOutsideServices } from '@server/services';
+import { withBenchDatabase } from './bench-database';
 import { loadBusySalon } from './busy-salon-db';
 
 const TARGET_MS = 300;
@@ -25,21 +21,7 @@ const RUNS = Number(process.env.BENCH_RUNS ?? 40);
 const FROM = '2027-03-01';
 
 async function main(): Promise<void> {
-  let cluster: Cluster | null = null;
-  const scratch = mkdtempSync(join(tmpdir(), 'dwell-bench-'));
-  chmodSync(scratch, 0o755); // the postgres user must be able to enter it
-  try {
-    let url = process.env.DATABASE_URL;
-    if (!url) {
-      const prepared = await prepareLocalDatabase({
-        dataRoot: scratch,
-        port: 59000 + Math.floor(Math.random() * 900),
-        database: 'dwell_bench',
-        throwaway: true,
-      });
-      cluster = prepared.cluster;
-      url = prepared.url;
-    }
+  await withBenchDatabase(async (url) => {
     const pool = createPool(url);
     const db = createDb(pool);
     const started = performance.now();
@@ -82,10 +64,7 @@ async function main(): Promise<void> {
     console.log(
       `bench:utilisation: 3-month period p50 ${p50.toFixed(1)} ms, p95 ${p95.toFixed(1)} ms over ${RUNS} calls ${p95 < TARGET_MS ? 'ok' : `OVER target ${TARGET_MS} ms`}`,
     );
-  } finally {
-    if (cluster) stopCluster(cluster);
-    rmSync(scratch, { recursive: true, force: true });
-  }
+  });
 }
 
 await main();

@@ -33,7 +33,7 @@ const made: { userId?: string; staffId?: string } = {};
 
 beforeAll(async () => {
   browser = await connectBrowser();
-  const salon = await db.selectFrom('salons').select('id').executeTakeFirstOrThrow();
+  const salon = await db.selectFrom('salons').select('id').where('slug', '=', 'kestrel-and-pine').executeTakeFirstOrThrow();
   const user = await db
     .insertInto('users')
     .values({ salon_id: salon.id, email: stylistEmail, name: 'Rowan Hale', role: 'stylist', phone: null, password_hash: await hashPassword(DEMO_PASSWORD) })

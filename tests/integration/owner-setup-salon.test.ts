@@ -47,6 +47,8 @@ describe('salon settings', () => {
     expect(before.body.hours).toEqual([{ rrule: 'FREQ=WEEKLY;BYDAY=TU,WE,TH,FR,SA', start: '09:00', end: '21:00' }]);
     // EU Regulation 1223/2009 Annex III (entry 12): at most 12 % hydrogen peroxide; the column's default.
     expect(before.body.maxDeveloperPercent).toBe(12);
+    // A later client may be started up to 15 minutes late by default (common practice).
+    expect(before.body.lateStartLimitMinutes).toBe(15);
 
     const body = {
       ...valid(),
@@ -55,6 +57,7 @@ describe('salon settings', () => {
       cancellationKeeps: 'nothing',
       reminderOffsetsHours: [24, 72],
       maxDeveloperPercent: 9,
+      lateStartLimitMinutes: 20,
       hours: [
         // Listed by start time, as they come back.
         { rrule: 'DTSTART;VALUE=DATE:20270102\nRRULE:FREQ=WEEKLY;INTERVAL=2;BYDAY=SA\nEXDATE;VALUE=DATE:20270116', start: '09:00', end: '14:00' },
@@ -71,6 +74,7 @@ describe('salon settings', () => {
       cancellation_keeps: 'nothing',
       quiet_from: '21:00:00',
       reminder_offsets_hours: [72, 24],
+      late_start_limit_minutes: 20,
     });
     expect(await t.testDb.db.selectFrom('salon_hours').select('rrule').where('salon_id', '=', salon.salonId).execute()).toHaveLength(2);
     // Back to Denver for the other tests.
@@ -90,6 +94,7 @@ describe('salon settings', () => {
       [{ reminderOffsetsHours: [24, 24] }, 'reminderOffsetsHours'],
       [{ quietTo: '25:00' }, 'quietTo'],
       [{ holdMinutes: 0 }, 'holdMinutes'],
+      [{ lateStartLimitMinutes: 241 }, 'lateStartLimitMinutes'],
     ];
     for (const [change, field] of cases) {
       const res = await owner$.write('put', setupPaths.salon, { ...valid(), name: 'Should not be stored', ...change });

@@ -112,3 +112,113 @@ export async function sittingStatus(db: Db, bookingId: string, seq: number): Pro
   const row = await db.selectFrom('sittings').select('status').where('booking_id', '=', bookingId).where('seq', '=', seq).executeTakeFirst();
   return row?.status;
 }
+
+/** Seats one sitting in another chair at the same times (the chair constraint has the last word). */
+export async function setSittingChair(db: Db, sittingId: string, chairId: string): Promise<void> {
+  await db.updateTable('sittings').set({ chair_id: chairId }).where('id', '=', sittingId).execute();
+}
+
+/** Gives one basin step another basin at the same times (the basin constraint has the last word). */
+export async function setStepBasin(db: Db, stepId: string, basinId: string): Promise<void> {
+  await db.updateTable('booking_steps').set({ basin_id: basinId }).where('id', '=', stepId).execute();
+}
+
+/**
+ * New times for a sitting's steps, kept by id (their actual times and taps stay), and the sitting's span with them.
+ * The steps leave the constraints while they move and come back together, so a step moving onto where its
+ * neighbour was a moment ago is not taken for an overlap; against every other booking the constraints still decide.
+ */
+export async function retimeSittingSteps(db: Db, sittingId: string, steps: Array<{ id: string; start: Date; end: Date }>): Promise<void> {
+  if (steps.length === 0) return;
+  const held = await db
+    .updateTable('booking_steps')
+    .set({ live: false })
+    .where('sitting_id', '=', sittingId)
+    .where('live', '=', true)
+    .returning('id')
+    .execute();
+  for (const step of steps) {
+    await db
+      .updateTable('booking_steps')
+      .set({ during: tstzRange(step.start, step.end) })
+      .where('id', '=', step.id)
+      .where('sitting_id', '=', sittingId)
+      .execute();
+  }
+  if (held.length > 0)
+    await db
+      .updateTable('booking_steps')
+      .set({ live: true })
+      .where(
+        'id',
+        'in',
+        held.map((h) => h.id),
+      )
+      .execute();
+  const span = await db
+    .selectFrom('booking_steps')
+    .select([sql<Date>`min(lower(during))`.as('start'), sql<Date>`max(upper(during))`.as('end')])
+    .where('sitting_id', '=', sittingId)
+    .executeTakeFirstOrThrow();
+  await db
+    .updateTable('sittings')
+    .set({ during: tstzRange(span.start, span.end) })
+    .where('id', '=', sittingId)
+    .execute();
+}
+
+/** A basin of the salon, in use and in service for the whole stretch, with no other live step on it. */
+export async function basinFreeBetween(db: Db, salonId: string, basinId: string, start: Date, end: Date, exceptStepId: string): Promise<boolean> {
+  const basin = await db
+    .selectFrom('basins')
+    .select('id')
+    .where('id', '=', basinId)
+    .where('salon_id', '=', salonId)
+    .where('active', '=', true)
+    .executeTakeFirst();
+  if (!basin) return false;
+  const span = sql<boolean>`during && tstzrange(${start}, ${end}, '[)')`;
+  const [taken, closed] = await Promise.all([
+    db
+      .selectFrom('booking_steps')
+      .select('id')
+      .where('basin_id', '=', basinId)
+      .where('live', '=', true)
+      .where('id', '!=', exceptStepId)
+      .where(span)
+      .executeTakeFirst(),
+    db.selectFrom('out_of_service').select('id').where('basin_id', '=', basinId).where(span).executeTakeFirst(),
+  ]);
+  return !taken && !closed;
+}
+
+/** One sitting by id, as a change to its chair or steps reads it. */
+export async function findSittingById(db: Db, sittingId: string) {
+  return db
+    .selectFrom('sittings')
+    .select(['id', 'booking_id as bookingId', 'seq', 'status', 'chair_id as chairId', sql<Date>`lower(during)`.as('start'), sql<Date>`upper(during)`.as('end')])
+    .where('id', '=', sittingId)
+    .where('live', '=', true)
+    .executeTakeFirst();
+}
+
+/** The live steps of a sitting, in order, with their planned and actual times. */
+export async function listSittingSteps(db: Db, sittingId: string) {
+  return db
+    .selectFrom('booking_steps')
+    .select([
+      'id',
+      'seq',
+      'kind',
+      'label',
+      'basin_id as basinId',
+      'actual_start as actualStart',
+      'actual_end as actualEnd',
+      sql<Date>`lower(during)`.as('start'),
+      sql<Date>`upper(during)`.as('end'),
+    ])
+    .where('sitting_id', '=', sittingId)
+    .where('live', '=', true)
+    .orderBy('seq')
+    .execute();
+}

@@ -26,6 +26,13 @@ export interface MoveRequest {
   chairId?: string;
   /** The desk may move a booking that rests on an unread skin test; a client moving their own may not. */
   allowWaitingOnTest?: boolean;
+  /**
+   * What the client is told: the change notice (by default), or nothing here when the move is a late start the
+   * caller tells them of in its own words ("running about 15 minutes late"); their reminders follow the move either way.
+   */
+  notice?: 'change' | 'running_late';
+  /** Why, in the audit entry's words (e.g. "running late: started 15 min late"). */
+  auditNote?: string;
 }
 
 const MOVABLE = ['held', 'booked'];
@@ -73,54 +80,59 @@ export async function movableSitting(db: Db, salon: Pick<Salon, 'id'>, bookingId
 
 /** Moves one sitting (re-planned by the engine against the current book) and records the change. */
 export async function moveSitting(db: Kysely<Database>, salon: Salon, actorUserId: string, req: MoveRequest, now: Date): Promise<void> {
-  await db.transaction().execute(async (trx) => {
-    const { before, booking, plan, one, stylistId, service, skill } = await movableSitting(trx, salon, req.bookingId, req.sitting, req.stylistId);
-    if (req.start < now) throw new AppError('VALIDATION_FAILED', 400, 'Some fields need attention.', { start: 'That time has already passed.' });
-    await lockStylists(trx, [booking.stylistId, stylistId]);
+  await db.transaction().execute((trx) => moveSittingIn(trx, salon, actorUserId, req, now));
+}
 
-    const starts = await sittingStarts(trx, req.bookingId);
-    const gapProblem = dayGapProblem(plan, starts, req.sitting - 1, req.start, salon.timeZone);
-    if (gapProblem) throw new AppError('CONFLICT', 409, gapProblem);
-    // A later date may fall outside the skin test's validity: the whole booking is checked with the moved sitting.
-    if (booking.clientId) {
-      const moved = starts.map((s, i) => (i === req.sitting - 1 ? req.start : s));
-      await assertSkinTestAllows(
-        trx,
-        salon,
-        { clientId: booking.clientId, plan, serviceAsks: service?.needsSkinTest ?? false, starts: moved, atDesk: req.allowWaitingOnTest ?? false },
-        now,
-      );
-    }
+/** The move inside the caller's transaction (a re-plan's fix is checked and made in one). */
+export async function moveSittingIn(trx: Db, salon: Salon, actorUserId: string, req: MoveRequest, now: Date): Promise<void> {
+  const { before, booking, plan, one, stylistId, service, skill } = await movableSitting(trx, salon, req.bookingId, req.sitting, req.stylistId);
+  if (req.start < now) throw new AppError('VALIDATION_FAILED', 400, 'Some fields need attention.', { start: 'That time has already passed.' });
+  await lockStylists(trx, [booking.stylistId, stylistId]);
 
-    const answers = await exactPlan(trx, salon, [{ skill, stylistId, plan: one, start: req.start }], req.bookingId);
-    const result = answers[0]!; // one answer per placement
-    if ('reason' in result) throw new AppError('CONFLICT', 409, result.reason);
-    const placed = result.plan.sittings[0]!; // one sitting asked, one placed
-    const chair = await preferredChair(trx, salon.id, placed, req.chairId ?? (await sittingChair(trx, req.bookingId, req.sitting)), req.bookingId);
-    try {
-      if (stylistId !== booking.stylistId) await setStylist(trx, req.bookingId, stylistId);
-      await replaceSitting(
-        trx,
-        req.bookingId,
-        req.sitting,
-        chair,
-        stylistId,
-        placed.steps.map((st) => ({
-          kind: st.kind,
-          label: st.label,
-          start: new Date(st.start),
-          end: new Date(st.end),
-          basinId: st.basin,
-        })),
-      );
-    } catch (err) {
-      if ((err as { code?: string }).code === '23P01') throw new AppError('CONFLICT', 409, 'Someone took that time a moment ago.');
-      throw err;
-    }
-    await auditBookingChange(trx, { salonId: salon.id, actorUserId, bookingId: req.bookingId, action: `moved sitting ${req.sitting}`, before: before.audit });
-    await replanBookingMessages(trx, req.bookingId, now, 'moved'); // old reminders dropped, new ones planned
-    await withdrawStaleOffers(trx, salon, stylistId, { from: new Date(placed.steps[0]!.start), to: new Date(placed.steps[placed.steps.length - 1]!.end) }, now);
-  });
+  const starts = await sittingStarts(trx, req.bookingId);
+  const gapProblem = dayGapProblem(plan, starts, req.sitting - 1, req.start, salon.timeZone);
+  if (gapProblem) throw new AppError('CONFLICT', 409, gapProblem);
+  // A later date may fall outside the skin test's validity: the whole booking is checked with the moved sitting.
+  if (booking.clientId) {
+    const moved = starts.map((s, i) => (i === req.sitting - 1 ? req.start : s));
+    await assertSkinTestAllows(
+      trx,
+      salon,
+      { clientId: booking.clientId, plan, serviceAsks: service?.needsSkinTest ?? false, starts: moved, atDesk: req.allowWaitingOnTest ?? false },
+      now,
+    );
+  }
+
+  const answers = await exactPlan(trx, salon, [{ skill, stylistId, plan: one, start: req.start }], req.bookingId);
+  const result = answers[0]!; // one answer per placement
+  if ('reason' in result) throw new AppError('CONFLICT', 409, result.reason);
+  const placed = result.plan.sittings[0]!; // one sitting asked, one placed
+  const chair = await preferredChair(trx, salon.id, placed, req.chairId ?? (await sittingChair(trx, req.bookingId, req.sitting)), req.bookingId);
+  try {
+    if (stylistId !== booking.stylistId) await setStylist(trx, req.bookingId, stylistId);
+    await replaceSitting(
+      trx,
+      req.bookingId,
+      req.sitting,
+      chair,
+      stylistId,
+      placed.steps.map((st) => ({
+        kind: st.kind,
+        label: st.label,
+        start: new Date(st.start),
+        end: new Date(st.end),
+        basinId: st.basin,
+      })),
+    );
+  } catch (err) {
+    if ((err as { code?: string }).code === '23P01') throw new AppError('CONFLICT', 409, 'Someone took that time a moment ago.');
+    throw err;
+  }
+  const action = `moved sitting ${req.sitting}${req.auditNote ? ` (${req.auditNote})` : ''}`;
+  await auditBookingChange(trx, { salonId: salon.id, actorUserId, bookingId: req.bookingId, action, before: before.audit });
+  // Old reminders dropped, new ones planned; the change notice unless the caller tells the client itself.
+  await replanBookingMessages(trx, req.bookingId, now, req.notice === 'running_late' ? 'moved_quietly' : 'moved');
+  await withdrawStaleOffers(trx, salon, stylistId, { from: new Date(placed.steps[0]!.start), to: new Date(placed.steps[placed.steps.length - 1]!.end) }, now);
 }
 
 /** Why moving sitting `index` to `newStart` breaks a sitting's days-after-previous range with its neighbours, or null. */

@@ -18,3 +18,7 @@ export async function findStaffIdForUser(db: Db, userId: string): Promise<string
   const row = await db.selectFrom('staff').select('id').where('user_id', '=', userId).executeTakeFirst();
   return row?.id;
 }
+
+export function listBasins(db: Db, salonId: string) {
+  return db.selectFrom('basins').select(['id', 'name']).where('salon_id', '=', salonId).where('active', '=', true).orderBy('name').execute();
+}

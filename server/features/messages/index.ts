@@ -5,3 +5,5 @@ export { replanAfterSkinTestChange, replanBookingMessages, replanClientMessages 
 export { sendLog } from './send-log.service';
 export { sendDueMessages, sendOnTime, type Senders } from './send-message.job';
 export { sendDueNow } from './send-now';
+export { runningLateTold } from './running-late.repository';
+export { tellRunningLate, type RunningLate, type RunningLateOutcome } from './running-late.service';

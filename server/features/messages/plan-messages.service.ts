@@ -35,9 +35,10 @@ import {
 
 /**
  * Why the booking's messages are being planned again; 'preferences' adds missing reminders only; 'skin_test'
- * follows a change of the client's skin-test record (reminders held while the record blocks the colour).
+ * follows a change of the client's skin-test record (reminders held while the record blocks the colour);
+ * 'moved_quietly' is a move the caller tells the client of in its own words (a late start), so no change notice.
  */
-export type BookingChange = 'booked' | 'moved' | 'cancelled' | 'preferences' | 'skin_test';
+export type BookingChange = 'booked' | 'moved' | 'moved_quietly' | 'cancelled' | 'preferences' | 'skin_test';
 
 const PLANNED_FOR = ['booked', 'checked_in', 'cancelled'];
 /** The notice sent when a booking is made, moved or cancelled (sequence 0 in the dedupe key). */
@@ -54,7 +55,8 @@ export const AFTERCARE_AT = { hour: 10, minute: 0 };
  * and times, so the caller can also queue a job at each exact instant.
  */
 export async function replanBookingMessages(db: Db, bookingId: string, now: Date, change: BookingChange = 'booked'): Promise<PlannedMessage[]> {
-  if (change === 'moved') await bumpBookingVersion(db, bookingId);
+  const moved = change === 'moved' || change === 'moved_quietly';
+  if (moved) await bumpBookingVersion(db, bookingId);
   const b = await bookingForMessages(db, bookingId);
   if (!b) return [];
   const cancelled = b.status === 'cancelled';
@@ -70,7 +72,7 @@ export async function replanBookingMessages(db: Db, bookingId: string, now: Date
   if (!b.clientId || !PLANNED_FOR.includes(b.status) || b.context.sittings.length === 0) return [];
 
   const rows: NewMessage[] = [];
-  if (!addOnly) rows.push(...toRows(b, 0, firstKind(b, change), firstMessage(b, change, skinTest === 'waiting'), now, null));
+  if (!addOnly && change !== 'moved_quietly') rows.push(...toRows(b, 0, firstKind(b, change), firstMessage(b, change, skinTest === 'waiting'), now, null));
   if (!cancelled) rows.push(...(await sittingMessages(db, b, now)));
   return insertPlanned(db, rows);
 }

@@ -18,3 +18,5 @@ export {
 } from './planning-port';
 export { assertWithinProcessingLimits } from './processing-limits-check';
 export { lockStylists } from './stylist-lock.repository';
+export { replanDayFor, replanDaysUnderWay, type ReplanSalon } from './replan-port';
+export { bookableSteps, type OfferedFix, type ReplanConflict, type ReplannedSitting, type ReplannedStep, type StylistReplan } from './replan-ask';

@@ -44,6 +44,8 @@ export interface SalonBook {
   timeOff: Map<string, Period[]>;
   outOfService: Map<string, Period[]>;
   bookings: Booking[];
+  /** The booking_steps ids of each booking above (a sitting), in the order of its steps. */
+  stepIds: Map<string, string[]>;
 }
 
 export interface BookOptions {
@@ -103,11 +105,14 @@ export async function loadSalonSetup(db: Db, salonId: string): Promise<SalonSetu
   };
 }
 
-/** The book over a horizon for the setup's stylists and units (time off and closures cut to the horizon). */
+/**
+ * The book over a horizon for the setup's stylists and units (time off and closures cut to the horizon). The setup may
+ * still be on its way: only the time off waits for its stylists, the booked steps and closures are read at once.
+ */
 export async function loadSalonBook(
   db: Db,
   salon: PlanningSalon,
-  setup: SalonSetup,
+  setup: SalonSetup | Promise<SalonSetup>,
   horizon: Horizon,
   { except, holds = true }: BookOptions = {},
 ): Promise<SalonBook> {
@@ -115,8 +120,7 @@ export async function loadSalonBook(
   const from = DateTime.fromISO(horizon.from, { zone }).toJSDate();
   const to = DateTime.fromISO(horizon.to, { zone }).toJSDate();
   const range = sql`tstzrange(${from}, ${to}, '[)')`;
-  const staffIds = setup.stylists.map((s) => s.id);
-  const [timeOff, steps, closures] = await Promise.all([
+  const timeOffOf = (staffIds: string[]) =>
     staffIds.length === 0
       ? []
       : db
@@ -128,7 +132,9 @@ export async function loadSalonBook(
           ])
           .where('staff_id', 'in', staffIds)
           .where(sql<boolean>`during && ${range}`)
-          .execute(),
+          .execute();
+  const [timeOff, steps, closures] = await Promise.all([
+    Promise.resolve(setup).then((s) => timeOffOf(s.stylists.map((st) => st.id))),
     db
       .selectFrom('booking_steps as st')
       .innerJoin('sittings as si', 'si.id', 'st.sitting_id')
@@ -136,6 +142,7 @@ export async function loadSalonBook(
       // UTC minutes (cut to the minute, as the wall-clock text is) as plain integers: cheap to send and parse.
       .select([
         'si.id as sittingId',
+        'st.id as stepId',
         'b.stylist_id',
         'si.chair_id',
         'st.kind',
@@ -179,17 +186,20 @@ export async function loadSalonBook(
   const clock = zoneClock(zone, parseLocalDate(horizon.from)!, parseLocalDate(horizon.to)!);
   const local = (utc: number) => formatIso(utc, clock.offsetAt(utc)).slice(0, 16);
   const bookings = new Map<string, Booking>();
+  const stepIds = new Map<string, string[]>();
   for (const s of steps) {
     const booking = bookings.get(s.sittingId) ?? { id: s.sittingId, stylist: s.stylist_id, chair: s.chair_id, steps: [] };
     const times = { start: local(s.start), end: local(s.end) };
     booking.steps.push(s.kind === 'basin' ? { kind: 'basin', ...times, basin: s.basin_id! } : { kind: s.kind, ...times });
     bookings.set(s.sittingId, booking);
+    stepIds.set(s.sittingId, [...(stepIds.get(s.sittingId) ?? []), s.stepId]);
   }
   return {
     horizon,
     timeOff: byOwner(timeOff, (t) => t.staff_id),
     outOfService: byOwner(closures, (c) => c.chair_id ?? c.basin_id),
     bookings: [...bookings.values()],
+    stepIds,
   };
 }
 
@@ -218,6 +228,7 @@ export async function extendSalonBook(
     timeOff: join(book.timeOff, more.timeOff),
     outOfService: join(book.outOfService, more.outOfService),
     bookings: [...book.bookings, ...more.bookings.filter((b) => !seen.has(b.id))],
+    stepIds: new Map([...more.stepIds, ...book.stepIds]),
   };
 }
 

@@ -30,6 +30,7 @@ export function toSalon(row: Selectable<SalonsTable>): Salon {
     cancellationKeeps: row.cancellation_keeps,
     noShowGraceMinutes: row.no_show_grace_minutes,
     unpaidDepositReleaseHours: row.unpaid_deposit_release_hours,
+    lateStartLimitMinutes: row.late_start_limit_minutes,
     ...planningRulesOf(row),
   };
 }

@@ -1,13 +1,13 @@
 import type { Db } from '@server/db/database';
 import type { Salon } from '@shared/schemas/salon.schemas';
 import type { HandsFreeWindowView, SentOffer } from '@shared/schemas/window.schemas';
-import { windowsOn } from '../planning';
+import { replanDaysUnderWay, windowsOn } from '../planning';
 import { listServices } from '../services';
 import { listStandby } from '../standby';
 import { standbyForWindow, windowFitServices } from './window-fits';
 import { listDayOffers } from './window-offers.repository';
-import { instantIso } from '@shared/time/salon-time';
-import { localDayBounds } from '../bookings';
+import { instantIso, localDateOf } from '@shared/time/salon-time';
+import { listStylists, localDayBounds } from '../bookings';
 
 /**
  * The day's hands-free windows (one stylist or all) with what fits, who on standby wants it and the offers sent
@@ -40,13 +40,14 @@ export async function listWindowViews(
     o.stylistId === w.stylist && o.at >= Date.parse(w.start) && o.at < Date.parse(w.end);
   const sent = ({ at: _at, ...o }: (typeof offers)[number]): SentOffer => o;
   const fits = windowFitServices(services);
+  const freed = await freedWindows(db, salon, date, fits, now);
   const windows = await windowsOn(
     db,
     salon,
     date,
     fits.map((f) => ({ service: f.service.id, skill: f.service.skill, minutes: f.minutes })),
   );
-  const shown = windows.filter((w) => !stylistId || w.stylist === stylistId);
+  const shown = [...windows.map((w) => ({ ...w, freed: false })), ...freed].filter((w) => !stylistId || w.stylist === stylistId);
   const views = shown.map((w) => {
     const fitting = fits.filter((f) => w.fits.includes(f.service.id));
     const wanted = standbyForWindow(standby, { stylistId: w.stylist, start: w.start, end: w.end, fitIds: w.fits }, salon.timeZone);
@@ -63,8 +64,30 @@ export async function listWindowViews(
         serviceIds: e.services.map((s) => s.id).filter((id) => w.fits.includes(id)),
       })),
       offers: offers.filter((o) => inWindow(o, w)).map(sent),
+      freed: w.freed,
     };
   });
   const closedOffers = offers.filter((o) => !shown.some((w) => inWindow(o, w))).map(sent);
   return { windows: views, closedOffers };
+}
+
+/**
+ * Today's freed minutes as windows: the minutes of a stylist's hands the re-plan finds freed from now on (an early
+ * finish, a sitting that moved), with the fits the stylist has the skill for that are short enough for the stretch.
+ */
+async function freedWindows(db: Db, salon: Salon, date: string, fits: ReturnType<typeof windowFitServices>, now: Date) {
+  if (date !== localDateOf(now, salon.timeZone)) return [];
+  const [replans, stylists] = await Promise.all([replanDaysUnderWay(db, salon, now), listStylists(db, salon.id)]);
+  const skills = new Map(stylists.map((s) => [s.id, s.skills]));
+  return replans.flatMap((r) =>
+    r.freed
+      .filter((f) => f.minutes >= salon.granularityMinutes)
+      .map((f) => ({
+        stylist: r.stylistId,
+        start: f.start,
+        end: f.end,
+        fits: fits.filter((fit) => fit.minutes <= f.minutes && (skills.get(r.stylistId) ?? []).includes(fit.service.skill)).map((fit) => fit.service.id),
+        freed: true,
+      })),
+  );
 }

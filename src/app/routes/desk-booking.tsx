@@ -1,6 +1,6 @@
 import { useSuspenseQuery } from '@tanstack/react-query';
-import { Link, useParams, type LoaderFunctionArgs } from 'react-router-dom';
-import { IdSchema } from '@shared/schemas/common.schemas';
+import { Link, useParams, useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
+import { IdSchema, LocalDateSchema } from '@shared/schemas/common.schemas';
 import { PageHeader } from '@client/components/ui/page-header';
 import { TimeZoneNote } from '@client/components/ui/time-zone-note';
 import { paths } from '@client/config/paths';
@@ -31,12 +31,17 @@ export async function loader({ params }: LoaderFunctionArgs) {
 
 export function Component() {
   const { id } = useParams();
+  const [search] = useSearchParams();
   const { data: booking } = useSuspenseQuery(bookingQueries.one(id!));
   const { data: salon } = useSuspenseQuery(salonQueries.current());
   const { data: stylists } = useSuspenseQuery(catalogueQueries.stylists());
   const first = booking.sittings[0];
   // Only a held or booked booking can still be moved or cancelled (the server refuses the rest).
   const open = booking.status === 'booked' || booking.status === 'held';
+  // `?sitting=2&from=2027-06-10` opens the move form on that sitting, with free times from that date.
+  const sitting = Number(search.get('sitting'));
+  const from = LocalDateSchema.safeParse(search.get('from'));
+  const initial = booking.sittings.some((s) => s.seq === sitting) ? { sitting, from: from.success ? from.data : undefined } : undefined;
   return (
     <div className="flex flex-col gap-6">
       <Link to={paths.desk(first ? localDateOf(first.start, salon.timeZone) : undefined)} className="text-link">
@@ -46,7 +51,7 @@ export function Component() {
       <BookingSummary booking={booking} timeZone={salon.timeZone} currency={salon.currency} />
       <DepositPanel bookingId={booking.id} bookingStatus={booking.status} timeZone={salon.timeZone} />
       <div className="grid gap-6 lg:grid-cols-2">
-        {open && <MoveSittingForm booking={booking} timeZone={salon.timeZone} stylists={stylists.stylists} />}
+        {open && <MoveSittingForm booking={booking} timeZone={salon.timeZone} stylists={stylists.stylists} initial={initial} />}
         {(open || booking.status === 'cancelled') && <CancelBookingForm booking={booking} currency={salon.currency} />}
       </div>
       {booking.status === 'booked' && <ChangePlanForm key={JSON.stringify(booking.stepPlan)} booking={booking} />}

@@ -6,10 +6,12 @@ import { ClientSearch } from '@client/features/clients/components/client-search'
 import { dayQueries } from '@client/features/day-book/api/day-queries';
 import { DayBookView } from '@client/features/day-book/components/day-book-view';
 import { ArrivalsList } from '@client/features/day-book/components/arrivals-list';
+import { RunningLatePanel } from '@client/features/replan';
 import { windowQueries } from '@client/features/windows/api/window-queries';
 import { formatDate } from '@shared/format/date-time';
 import { zonelessFormat } from '@shared/format/locale';
 import { queryClient } from '@client/lib/query-client';
+import { todayIn } from '@client/lib/time';
 import { dateParam, dateParamOf } from '../date-param';
 
 export async function loader({ request }: LoaderFunctionArgs) {
@@ -23,6 +25,9 @@ export function Component() {
   // The bands are extra: the day shows without them while they load (or if they fail).
   const windows = useQuery(windowQueries.list(day.date));
   const columns = search.get('view') === 'chairs' ? 'chair' : 'stylist';
+  // Only today runs late: other days are as booked.
+  const today = day.date === todayIn(day.timeZone);
+  const stylistNames = Object.fromEntries(day.stylists.map((s) => [s.id, s.name]));
   return (
     <DayBookView
       day={day}
@@ -31,9 +36,16 @@ export function Component() {
       windows={windows.data?.windows}
       bookingHref={paths.deskBooking}
       lead={
-        <SectionCard title="Arrivals">
-          <ArrivalsList day={day} />
-        </SectionCard>
+        <>
+          {today && (
+            <SectionCard title="Running late">
+              <RunningLatePanel date={day.date} stylistNames={stylistNames} />
+            </SectionCard>
+          )}
+          <SectionCard title="Arrivals">
+            <ArrivalsList day={day} />
+          </SectionCard>
+        </>
       }
       columns={columns}
       onColumnsChange={(by) =>

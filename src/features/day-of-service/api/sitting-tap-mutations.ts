@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { dayOfServiceApi } from '@shared/api/day-of-service.api';
-import type { SittingRun } from '@shared/schemas/day-of-service.schemas';
+import type { SittingRun, SteppedSittingRun } from '@shared/schemas/day-of-service.schemas';
 import { callApi } from '@client/lib/api-client';
 import { sittingTapped } from '@client/lib/cache-rules';
 
@@ -9,7 +9,8 @@ export type SittingTap = { bookingId: string; seq: number } & (
   { action: 'arrive' | 'no_show' | 'undo' } | { action: 'start' | 'finish'; step: number } | { action: 'finish_sitting'; reason: string }
 );
 
-function send(tap: SittingTap): Promise<SittingRun> {
+/** Arrival and no-show answer the sitting; a tap that sets an actual time also answers the re-plan of the stylist's day. */
+function send(tap: SittingTap): Promise<SittingRun | SteppedSittingRun> {
   const sitting = { id: tap.bookingId, n: String(tap.seq) };
   switch (tap.action) {
     case 'arrive':

@@ -81,7 +81,7 @@ export function ClientDayCard({ booking, sitting, timeZone, now }: Props) {
           )}
         </div>
       )}
-      <SittingTaps booking={booking} sitting={sitting} progress={progress} />
+      <SittingTaps booking={booking} sitting={sitting} progress={progress} timeZone={timeZone} />
       <div className="flex flex-wrap gap-4">
         <Link to={paths.mixLog(booking.id, booking.client.id)} className="text-link">
           Mix log<span className="sr-only"> for {booking.client.name}</span>

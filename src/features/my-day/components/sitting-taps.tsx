@@ -5,9 +5,10 @@ import { Button } from '@client/components/ui/button';
 import { FormAlert } from '@client/components/ui/form-alert';
 import { TextAreaField } from '@client/components/ui/text-area-field';
 import { unlockChime, UndoTapButton, useSittingTap, type SittingTap } from '@client/features/day-of-service';
+import { TapReplanNote } from '@client/features/replan';
 import type { SittingProgress } from '../timer-state';
 
-type Props = { booking: BookingView; sitting: SittingView; progress: SittingProgress };
+type Props = { booking: BookingView; sitting: SittingView; progress: SittingProgress; timeZone: string };
 
 const undoWords: Record<TapAction, string> = {
   arrive: 'the arrival',
@@ -21,7 +22,7 @@ const undoWords: Record<TapAction, string> = {
  * The stylist's one-tap buttons for a sitting: start or finish the step at hand (large targets for a tablet at the
  * station or a phone), Undo for a minute after each tap, and finishing early with a reason.
  */
-export function SittingTaps({ booking, sitting, progress }: Props) {
+export function SittingTaps({ booking, sitting, progress, timeZone }: Props) {
   const tap = useSittingTap();
   const [early, setEarly] = useState(false);
   const [reason, setReason] = useState('');
@@ -36,6 +37,7 @@ export function SittingTaps({ booking, sitting, progress }: Props) {
   return (
     <div className="flex flex-col gap-3">
       {tap.error && <FormAlert>{tap.error.message}</FormAlert>}
+      {tap.data && 'replan' in tap.data && <TapReplanNote replan={tap.data.replan} bookingId={booking.id} timeZone={timeZone} />}
       <div className="flex flex-wrap items-center gap-3">
         {progress.state === 'ready' && (
           <Button className="min-h-14 flex-1 text-lg" busy={tap.isPending} onClick={() => send({ ...base, action: 'start', step: progress.index + 1 })}>

@@ -35,6 +35,7 @@ const fieldNames = [
   'cancellationWindowHours',
   'noShowGraceMinutes',
   'unpaidDepositReleaseHours',
+  'lateStartLimitMinutes',
   'quietFrom',
   'quietTo',
   'reminderOffsetsHours',
@@ -153,6 +154,13 @@ export function SalonSettingsForm({ settings }: { settings: SalonSettings }) {
               type="number"
               error={err('unpaidDepositReleaseHours')}
               {...form.register('unpaidDepositReleaseHours', { setValueAs: (v: unknown) => (v === '' || v === null || v === undefined ? null : Number(v)) })}
+            />
+            <TextField
+              label="Late start allowed (minutes)"
+              hint="When a sitting runs over, the desk may start the next client up to this late (and tell them) before moving them."
+              type="number"
+              error={err('lateStartLimitMinutes')}
+              {...form.register('lateStartLimitMinutes', num)}
             />
             <p className="self-end text-sm text-ink/80">Each service sets its own deposit (fixed or a share of the price) on the Services page.</p>
           </div>

@@ -20,9 +20,10 @@ export function WindowCard({ window: win, timeZone, stylistName, onDone }: Props
           <h3 className="text-lg font-bold tabular">{times}</h3>
           <p>
             Hands free {win.minutes} min{stylistName && ` · ${stylistName}`}
+            {win.freed && <span className="font-bold"> · freed as the day runs</span>}
           </p>
         </div>
-        {win.fits.length > 0 && (
+        {win.fits.length > 0 && !win.freed && (
           <Button variant={open ? 'quiet' : 'secondary'} aria-expanded={open} aria-controls={panelId} onClick={() => setOpen(!open)}>
             {open ? 'Close' : 'Fill window'}
           </Button>
@@ -36,6 +37,12 @@ export function WindowCard({ window: win, timeZone, stylistName, onDone }: Props
         <span className="font-bold">Standby: </span>
         {win.standby.length ? win.standby.map((s) => s.clientName).join(', ') : 'nobody waiting for these'}
       </p>
+      {win.freed && (
+        <p className="text-sm">
+          Freed by a sitting that finished early: ring a standby client who wants a fit. It is not filled from here, as the book keeps the finished sitting’s
+          booked time.
+        </p>
+      )}
       {win.offers.length > 0 && (
         <div className="text-sm">
           <p className="font-bold">Offers sent</p>

@@ -16,7 +16,13 @@ import { formatFor } from '@shared/format/locale';
 import { bookingQueries } from '@client/features/bookings/api/booking-queries';
 import { useMoveSitting } from '@client/features/bookings/api/booking-mutations';
 
-type Props = { booking: BookingView; timeZone: string; stylists: { id: string; name: string }[] };
+type Props = {
+  booking: BookingView;
+  timeZone: string;
+  stylists: { id: string; name: string }[];
+  /** Opened for one sitting, with free times from a date (the "another day" fix of a client kept waiting). */
+  initial?: { sitting: number; from?: string };
+};
 
 const when = (iso: string, zone: string) => `${formatDate(iso, formatFor(zone), { width: 'short' })}, ${formatTime(iso, formatFor(zone))}`;
 
@@ -24,11 +30,11 @@ const when = (iso: string, zone: string) => `${formatDate(iso, formatFor(zone), 
  * Move one sitting: the engine's free times for it (with the same stylist, or another for a one-sitting booking),
  * picked and confirmed. The server checks again on the move and its reason for a refusal shows by the button.
  */
-export function MoveSittingForm({ booking, timeZone, stylists }: Props) {
+export function MoveSittingForm({ booking, timeZone, stylists, initial }: Props) {
   const move = useMoveSitting();
-  const [seq, setSeq] = useState(1);
+  const [seq, setSeq] = useState(initial?.sitting ?? 1);
   const [stylistId, setStylistId] = useState('');
-  const [from, setFrom] = useState('');
+  const [from, setFrom] = useState(initial?.from ?? '');
   const [picked, setPicked] = useState<FreeTime | null>(null);
   const [moved, setMoved] = useState<{ was: BookingView['sittings'][number]; now: BookingView['sittings'][number] } | null>(null);
   const ask = { sitting: seq, stylistId: stylistId || undefined, from: from || undefined };
