@@ -24,6 +24,7 @@ import { registerOwnerRoutes } from './features/owner/owner.routes';
 import { registerBookingChangeRoutes } from './features/bookings/booking-changes.routes';
 import { registerDayOfServiceRoutes } from './features/day-of-service/day-of-service.routes';
 import { registerServiceRoutes } from './features/services/services.routes';
+import { registerTypicalMinutesRoutes } from './features/typical-minutes/typical-minutes.routes';
 import { registerSkinTestRoutes } from './features/skin-tests/skin-tests.routes';
 import { registerStandbyRoutes } from './features/standby/standby.routes';
 import { registerWindowRoutes } from './features/windows/windows.routes';
@@ -78,6 +79,7 @@ export function createApp(deps: Omit<AppDeps, 'table' | 'storage' | 'readCache' 
     registerBookingChangeRoutes,
     registerDayOfServiceRoutes,
     registerServiceRoutes,
+    registerTypicalMinutesRoutes,
     registerClientAgeRoutes,
     registerSkinTestRoutes,
     registerStandbyRoutes,
