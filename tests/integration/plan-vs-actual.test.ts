@@ -73,18 +73,21 @@ beforeAll(async () => {
   const otherOwner = await insertUser(db, other.salonId, 'owner');
   elsewhere$ = await signedInAgent(t.app, otherOwner.email, otherOwner.password);
   const client = await newClient(salon.salonId);
-  const visit = (who: UserFixture, chair: number, start: Date, actual: number[], more: { startDelay?: number; lateMinutes?: number } = {}) =>
+  type More = { startDelay?: number; lateMinutes?: number; status?: 'in_progress'; service?: 'colour' | 'toner' };
+  const visit = (who: UserFixture, chair: number, start: Date, actual: number[], more: More = {}) =>
     insertTimedVisit(db, {
       salonId: salon.salonId,
-      serviceId: services.colour,
+      serviceId: services[more.service ?? 'colour'],
       stylistId: who.staffId!,
       clientId: client,
       chairId: salon.chairs[chair]!,
       basinId: salon.basins[0]!,
-      plan: colourPlan,
+      plan: more.service === 'toner' ? tonerPlan : colourPlan,
       plannedStart: start,
       actual,
-      ...more,
+      startDelay: more.startDelay,
+      lateMinutes: more.lateMinutes,
+      status: more.status,
     });
 
   // Ada, Tuesday 2 to Saturday 6 February at 10:00, steps Apply, Develops, Rinse, Gloss, Rinse:
@@ -105,33 +108,10 @@ beforeAll(async () => {
   // Bo, 2 and 3 February at 14:00: started +0 and +20 (client on time); 40/44 + 40 + 10 + 10 + 10 = 110 and 114.
   await visit(bo, 1, at('2027-02-02', '14:00'), [40, 40, 10, 10, 10]);
   await visit(bo, 1, at('2027-02-03', '14:00'), [44, 40, 10, 10, 10], { startDelay: 20 });
-  // Not counted: Ada's sitting still under way on 9 February (Apply took 99), and the same labels in another salon.
-  await insertTimedVisit(db, {
-    salonId: salon.salonId,
-    serviceId: services.colour,
-    stylistId: ada.staffId!,
-    clientId: client,
-    chairId: salon.chairs[0]!,
-    basinId: salon.basins[0]!,
-    plan: colourPlan,
-    plannedStart: at('2027-02-09', '10:00'),
-    actual: [99, 40],
-    status: 'in_progress',
-  });
+  // Not counted: Ada's sitting still under way on 9 February (Apply took 99).
+  await visit(ada, 0, at('2027-02-09', '10:00'), [99, 40], { status: 'in_progress' });
   // Ada's toner on 22 days of January at 17:00, Apply toner taking 10, 11, … 31 minutes in that order.
-  for (let i = 0; i < 22; i++) {
-    await insertTimedVisit(db, {
-      salonId: salon.salonId,
-      serviceId: services.toner,
-      stylistId: ada.staffId!,
-      clientId: client,
-      chairId: salon.chairs[0]!,
-      basinId: salon.basins[0]!,
-      plan: tonerPlan,
-      plannedStart: at(`2027-01-${String(i + 1).padStart(2, '0')}`, '17:00'),
-      actual: [10 + i],
-    });
-  }
+  for (let i = 0; i < 22; i++) await visit(ada, 0, at(`2027-01-${String(i + 1).padStart(2, '0')}`, '17:00'), [10 + i], { service: 'toner' });
 }, 120_000);
 afterAll(() => t.close());
 
