@@ -43,7 +43,10 @@ export function TypicalMinutesNote({ answer, step }: Props) {
     answer.forStylistId === null
       ? { who: 'Salon', figure: found.salon }
       : { who: focus?.name ?? 'This stylist', figure: focus ?? { visits: 0, medianMinutes: null, p80Minutes: null } };
-  const others = answer.forStylistId === null ? found.stylists.map((s) => ({ who: s.name, figure: s })) : [{ who: 'Whole salon', figure: found.salon }];
+  const others =
+    answer.forStylistId === null
+      ? found.stylists.map((s) => ({ key: s.stylistId, who: s.name, figure: s }))
+      : [{ key: 'salon', who: 'Whole salon', figure: found.salon }];
   return (
     <div className="flex flex-col gap-1 text-sm" role="group" aria-label={`How long ${step.name} really took`}>
       <FigureLine answer={answer} step={step} {...headline} />
@@ -52,8 +55,8 @@ export function TypicalMinutesNote({ answer, step }: Props) {
           <summary className="cursor-pointer text-ink/80">{answer.forStylistId === null ? `By stylist (${others.length})` : 'The whole salon'}</summary>
           <ul className="mt-1 flex flex-col gap-1 pl-4">
             {others.map((o) => (
-              <li key={o.who}>
-                <FigureLine answer={answer} step={step} {...o} />
+              <li key={o.key}>
+                <FigureLine answer={answer} step={step} who={o.who} figure={o.figure} />
               </li>
             ))}
           </ul>
