@@ -29,6 +29,7 @@ import { registerBookingChangeRoutes } from './features/bookings/booking-changes
 import { registerDayOfServiceRoutes } from './features/day-of-service/day-of-service.routes';
 import { registerReplanRoutes } from './features/replan/replan.routes';
 import { registerServiceRoutes } from './features/services/services.routes';
+import { registerTypicalMinutesRoutes } from './features/typical-minutes/typical-minutes.routes';
 import { registerSkinTestRoutes } from './features/skin-tests/skin-tests.routes';
 import { registerStandbyRoutes } from './features/standby/standby.routes';
 import { registerWindowRoutes } from './features/windows/windows.routes';
@@ -90,6 +91,7 @@ export function createApp(deps: Omit<AppDeps, 'table' | 'storage' | 'readCache' 
     registerDayOfServiceRoutes,
     registerReplanRoutes,
     registerServiceRoutes,
+    registerTypicalMinutesRoutes,
     registerClientAgeRoutes,
     registerSkinTestRoutes,
     registerStandbyRoutes,

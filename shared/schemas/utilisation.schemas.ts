@@ -90,6 +90,31 @@ const ServiceBaseSchema = z.object({
   sittings: z.number().int(),
 });
 
+/** A sitting counts as on time when its first step started no later than this many minutes after its planned start. */
+export const ON_TIME_MINUTES = 5;
+
+/**
+ * Plan against actual over the period's finished sittings with tapped step times (docs/utilisation.md): how many
+ * started on time, how far they ran over their planned length, and their chair time planned and actual.
+ */
+export const TimekeepingSchema = z.object({
+  /** Finished sittings starting in the period whose steps carry actual times. */
+  sittings: z.number().int(),
+  /** Of those, the ones whose first step started no later than ON_TIME_MINUTES after the plan. */
+  onTime: z.number().int(),
+  onTimeRate: ShareSchema,
+  /** Sittings that started late and whose client had arrived more than ON_TIME_MINUTES late. */
+  lateArrivals: z.number().int(),
+  /** Minutes the sittings ran longer than planned (first actual start to last actual end, less the planned length); shorter ones count 0. */
+  overrunMinutes: z.number(),
+  overrunPerSitting: z.number().nullable(),
+  plannedChairHours: z.number(),
+  actualChairHours: z.number(),
+});
+export type Timekeeping = z.infer<typeof TimekeepingSchema>;
+export const StylistTimekeepingSchema = TimekeepingSchema.extend({ stylistId: IdSchema, name: z.string() });
+export type StylistTimekeeping = z.infer<typeof StylistTimekeepingSchema>;
+
 /** What the front desk sees: how full the chairs are and when, no money and no per-person figures. */
 export const DeskUtilisationSchema = z.object({
   salon: z.object({ name: z.string(), timeZone: z.string() }),
@@ -100,6 +125,8 @@ export const DeskUtilisationSchema = z.object({
   heatMap: z.array(HeatCellSchema),
   weeks: z.array(WeekBaseSchema),
   topServices: z.array(ServiceBaseSchema),
+  /** The salon's on-time rate, overruns and chair time planned and actual; the owner's adds each stylist. */
+  timekeeping: TimekeepingSchema,
 });
 export type DeskUtilisation = z.infer<typeof DeskUtilisationSchema>;
 
@@ -146,5 +173,6 @@ export const OwnerUtilisationSchema = DeskUtilisationSchema.extend({
   stylists: z.array(StylistFiguresSchema),
   weeks: z.array(WeekBaseSchema.extend({ handsOnShare: ShareSchema, revenueCents: z.number() })),
   topServices: z.array(ServiceBaseSchema.extend({ revenueCents: z.number() })),
+  timekeeping: TimekeepingSchema.extend({ stylists: z.array(StylistTimekeepingSchema) }),
 });
 export type OwnerUtilisation = z.infer<typeof OwnerUtilisationSchema>;

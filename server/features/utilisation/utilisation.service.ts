@@ -1,6 +1,6 @@
 import type { Db } from '@server/db/database';
 import type { Salon } from '@shared/schemas/salon.schemas';
-import type { DeskUtilisation, OwnerUtilisation, UtilisationQuery } from '@shared/schemas/utilisation.schemas';
+import { ON_TIME_MINUTES, type DeskUtilisation, type OwnerUtilisation, type UtilisationQuery } from '@shared/schemas/utilisation.schemas';
 import type { Scenario } from '@shared/engine/engine';
 import { todayIn } from '../bookings';
 import { findSalon } from '../salon';
@@ -8,6 +8,8 @@ import { salonStaffNames } from '../setup';
 import { cancelledAt, listPeriodSittings } from './utilisation-bookings.repository';
 import { bookingFigures } from './utilisation-figures';
 import { measurePeriod, periodScenario } from './utilisation-occupancy';
+import { timekeepingByStylist } from './utilisation-timekeeping.repository';
+import { timekeepingFigures } from './utilisation-timekeeping';
 import { chunksOf, resolvePeriod, type Period } from './utilisation-period';
 import { instantAt } from '@shared/time/salon-time';
 
@@ -42,11 +44,13 @@ async function ownerUtilisation(db: Db, salon: Salon, period: Period): Promise<O
   const weekCuts = chunksOf(period).flatMap((c, i) => (i === 0 ? c.weekCuts : c.weekCuts.slice(1)));
   const from = instant(period.from);
   const to = instant(period.to);
-  const [occupancy, sittings, names] = await Promise.all([
+  const [occupancy, sittings, names, timed] = await Promise.all([
     measurePeriod(db, salon, period),
     listPeriodSittings(db, salon.id, new Date(from), new Date(to)),
     salonStaffNames(db, salon.id),
+    timekeepingByStylist(db, salon.id, new Date(from), new Date(to), ON_TIME_MINUTES),
   ]);
+  const nameOf = (id: string) => names.get(id) ?? 'Former stylist';
   const cancelled = [...new Set(sittings.filter((s) => s.status === 'cancelled').map((s) => s.bookingId))];
   const figures = bookingFigures({
     sittings,
@@ -60,6 +64,21 @@ async function ownerUtilisation(db: Db, salon: Salon, period: Period): Promise<O
   const chairHours = total.chairOpen / 60;
   const stylistHours = Object.values(total.stylists).reduce((t, s) => t + s.onClock, 0) / 60;
   const stylistIds = [...new Set([...Object.keys(occupancy.handsOnShare), ...figures.stylists.keys()])];
+  const stylists = stylistIds
+    .map((id) => {
+      const minutes = total.stylists[id] ?? { handsOn: 0, onClock: 0 };
+      const tally = figures.stylists.get(id) ?? { bookings: 0, noShows: 0, revenueCents: 0 };
+      return {
+        stylistId: id,
+        name: nameOf(id),
+        handsOnShare: occupancy.handsOnShare[id] ?? null,
+        handsOnMinutes: minutes.handsOn,
+        onClockMinutes: minutes.onClock,
+        ...tally,
+        revenuePerHourCents: ratio(tally.revenueCents, minutes.onClock / 60),
+      };
+    })
+    .sort((a, b) => a.name.localeCompare(b.name));
   return {
     salon: { name: salon.name, timeZone: salon.timeZone, currency: salon.currency },
     period: { ...period, scenarios: occupancy.scenarios },
@@ -98,25 +117,14 @@ async function ownerUtilisation(db: Db, salon: Salon, period: Period): Promise<O
     },
     deposits: figures.deposits,
     corrections: figures.corrections,
-    stylists: stylistIds
-      .map((id) => {
-        const minutes = total.stylists[id] ?? { handsOn: 0, onClock: 0 };
-        const tally = figures.stylists.get(id) ?? { bookings: 0, noShows: 0, revenueCents: 0 };
-        return {
-          stylistId: id,
-          name: names.get(id) ?? 'Former stylist',
-          handsOnShare: occupancy.handsOnShare[id] ?? null,
-          handsOnMinutes: minutes.handsOn,
-          onClockMinutes: minutes.onClock,
-          ...tally,
-          revenuePerHourCents: ratio(tally.revenueCents, minutes.onClock / 60),
-        };
-      })
-      .sort((a, b) => a.name.localeCompare(b.name)),
+    stylists,
+    timekeeping: timekeepingFigures(timed, stylists, nameOf),
   };
 }
 
-/** The desk's subset: chair occupancy and window use, when chairs are full, attendance; no money, no per-person figures. */
+const withoutStylists = ({ stylists: _stylists, ...salon }: OwnerUtilisation['timekeeping']) => salon;
+
+/** The desk's subset: chair occupancy and window use, when chairs are full, attendance, the salon's timekeeping; no money, no per-person figures. */
 function deskSubset(all: OwnerUtilisation): DeskUtilisation {
   return {
     salon: { name: all.salon.name, timeZone: all.salon.timeZone },
@@ -127,5 +135,7 @@ function deskSubset(all: OwnerUtilisation): DeskUtilisation {
     heatMap: all.heatMap,
     weeks: all.weeks.map(({ from, to, bookings, chairOccupancy, windowUse }) => ({ from, to, bookings, chairOccupancy, windowUse })),
     topServices: all.topServices.map(({ serviceId, name, chairMinutes, sittings }) => ({ serviceId, name, chairMinutes, sittings })),
+    // The salon's timekeeping only: per-stylist figures are the owner's.
+    timekeeping: withoutStylists(all.timekeeping),
   };
 }

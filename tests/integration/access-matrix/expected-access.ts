@@ -52,6 +52,8 @@ export const expectedAccess: Record<string, Expectation> = {
   'POST /api/bookings/{id}/sittings/{n}/running-late': { allow: DESK, own: true },
   'GET /api/services': { allow: STAFF },
   'GET /api/stylists': { allow: STAFF },
+  // Plan vs actual: per-stylist timing is the owner's and each stylist's own, not the desk's.
+  'GET /api/services/{id}/typical-minutes': { allow: ['stylist', 'owner'] },
   'GET /api/clients/{id}/skin-tests': { allow: STAFF, own: true },
   'POST /api/clients/{id}/skin-tests': { allow: STAFF, own: true },
   'POST /api/clients/{id}/skin-tests/{testId}/reading': { allow: STAFF, own: true },

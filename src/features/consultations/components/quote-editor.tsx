@@ -12,6 +12,7 @@ import { SelectField } from '@client/components/ui/select-field';
 import { TextAreaField } from '@client/components/ui/text-area-field';
 import { fieldError, showServerErrors } from '@client/lib/form-errors';
 import { StepPlanEditor } from '@client/features/bookings';
+import { typicalMinutesNotes, useTypicalMinutes } from '@client/features/typical-minutes';
 import { salonQueries } from '@client/features/salon';
 import { MoneyField } from '@client/components/ui/money-field';
 
@@ -32,7 +33,9 @@ export function QuoteEditor({ initial, services, strandTest, submitLabel, curren
   // The same checks as the server: the salon's processing limits, and the strand-test gate.
   const schema = QuoteEditSchema.superRefine(withinProcessingLimits(salon.processingLimits)).superRefine(withStrandGate(strandTest));
   const form = useForm<QuoteEditInput, unknown, QuoteEdit>({ resolver: zodResolver(schema), defaultValues: initial });
-  const { register, control, handleSubmit, setError, formState } = form;
+  const { register, control, handleSubmit, setError, formState, watch } = form;
+  // The quoted steps' typical actual minutes in the service it books as: a stylist's own, the owner's per stylist.
+  const typical = useTypicalMinutes(watch('serviceId'));
   const err = (path: string) => fieldError(formState.errors, path);
   const submit = handleSubmit((quote) =>
     onSave(quote).catch((error) => showServerErrors(error, setError, ['serviceId', 'priceCents', 'depositCents', 'notes', 'overrideReason'])),
@@ -43,7 +46,7 @@ export function QuoteEditor({ initial, services, strandTest, submitLabel, curren
       <form onSubmit={(e) => void submit(e)} noValidate className="flex flex-col gap-4" aria-label="Quote">
         {formState.errors.root?.server && <FormAlert>{formState.errors.root.server.message}</FormAlert>}
         <SelectField label="Books as service" options={options} className="max-w-md" error={err('serviceId')} {...register('serviceId')} />
-        <StepPlanEditor title="Steps and sittings of this quote" defaultOpen editSittings />
+        <StepPlanEditor title="Steps and sittings of this quote" defaultOpen editSittings {...typicalMinutesNotes(typical)} />
         {strandTest === 'failed' && (
           <div className="flex flex-col gap-2">
             <Notice tone="danger" title="The strand test failed">

@@ -13,6 +13,7 @@ import { TextAreaField } from '@client/components/ui/text-area-field';
 import { paths } from '@client/config/paths';
 import { fieldError, showServerErrors } from '@client/lib/form-errors';
 import { StepPlanEditor } from '@client/features/bookings';
+import { typicalMinutesNotes, useTypicalMinutes } from '@client/features/typical-minutes';
 import { useRetireService, useSaveService } from '../api/setup-mutations';
 import { salonQueries } from '@client/features/salon';
 import { MoneyField } from '@client/components/ui/money-field';
@@ -39,6 +40,8 @@ export function ServiceForm({ id, initial, skills, currency, active, families }:
   // The service's plan is held to the salon's processing limits, as the server holds it.
   const schema = ServiceInputSchema.superRefine(withinProcessingLimits(salon.processingLimits));
   const form = useForm<ServiceFormInput, unknown, ServiceInput>({ resolver: zodResolver(schema), defaultValues: initial });
+  // How long each step really took, beside its planned minutes: a suggestion the owner takes with "Use", never by itself.
+  const typical = useTypicalMinutes(id);
   const { errors } = form.formState;
   const err = (name: string) => fieldError(errors, name);
   const depositKind = form.watch('depositKind');
@@ -120,7 +123,7 @@ export function ServiceForm({ id, initial, skills, currency, active, families }:
             )}
           </div>
         </SectionCard>
-        <StepPlanEditor title="Step plan" editSittings defaultOpen />
+        <StepPlanEditor title="Step plan" editSittings defaultOpen {...typicalMinutesNotes(typical)} />
         {err('stepPlan.sittings') && <p className="font-bold text-brick">{err('stepPlan.sittings')}</p>}
         <div className="flex flex-wrap gap-3">
           <Button type="submit" busy={save.isPending}>

@@ -1,3 +1,4 @@
+import { SALON_LOCALE } from '@shared/format/locale';
 import { formatPercent } from '@client/lib/booking-labels';
 
 const WEEKDAYS = ['', 'Monday', 'Tuesday', 'Wednesday', 'Thursday', 'Friday', 'Saturday', 'Sunday'];
@@ -7,3 +8,7 @@ export const hourLabel = (hour: number) => `${String(hour).padStart(2, '0')}:00`
 export const percentText = (share: number | null | undefined) => formatPercent(share ?? null);
 /** A share as a rounded percentage number for charts (null stays a gap). */
 export const percentValue = (share: number | null) => (share === null ? null : Math.round(share * 1000) / 10);
+/** Hours to one decimal ("7.5 h"), for chair time planned and actual. */
+export const hoursText = (hours: number) => `${new Intl.NumberFormat(SALON_LOCALE, { maximumFractionDigits: 1 }).format(hours)} h`;
+/** A figure rounded for a CSV cell (hours to 2 decimals, minutes to 1); null stays empty. */
+export const rounded = (value: number | null, decimals: number) => (value === null ? null : Number(value.toFixed(decimals)));

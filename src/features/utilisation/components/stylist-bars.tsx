@@ -1,9 +1,9 @@
-import { Bar, BarChart, CartesianGrid, LabelList, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
 import type { StylistFigures } from '@shared/schemas/utilisation.schemas';
 import { SectionCard } from '@client/components/ui/section-card';
 import { formatMinutes } from '@client/lib/time';
 import { FigureTable, type FigureColumn } from './figure-table';
-import { percentText, percentValue } from './chart-labels';
+import { percentText } from './chart-labels';
+import { ShareBars } from './share-bars';
 import { formatMoney, minorToUnits } from '@shared/money/money';
 
 type Props = { stylists: StylistFigures[]; currency: string; filename: string };
@@ -32,27 +32,14 @@ export function StylistBars({ stylists, currency, filename }: Props) {
       numeric: true,
     },
   ];
-  const data = stylists.map((s) => ({ name: s.name, share: percentValue(s.handsOnShare) }));
   return (
     <SectionCard title="Stylists">
-      <figure
-        className="mb-4"
-        style={{ height: 60 + stylists.length * 44 }}
-        role="img"
-        aria-label="Bar chart of hands-on share per stylist; the numbers are in the table below"
-      >
-        <ResponsiveContainer width="100%" height="100%">
-          <BarChart data={data} layout="vertical" margin={{ top: 10, right: 50, bottom: 10, left: 20 }}>
-            <CartesianGrid strokeDasharray="3 3" stroke="#1E2A3622" horizontal={false} />
-            <XAxis type="number" unit=" %" domain={[0, 100]} />
-            <YAxis type="category" dataKey="name" width={120} />
-            <Tooltip formatter={(v) => `${v} %`} />
-            <Bar dataKey="share" name="Hands-on share" fill="#B5532A" isAnimationActive={false}>
-              <LabelList dataKey="share" position="right" formatter={(v: unknown) => (v === null || v === undefined ? '—' : `${v} %`)} />
-            </Bar>
-          </BarChart>
-        </ResponsiveContainer>
-      </figure>
+      <ShareBars
+        rows={stylists.map((s) => ({ name: s.name, share: s.handsOnShare }))}
+        series="Hands-on share"
+        label="Bar chart of hands-on share per stylist; the numbers are in the table below"
+        fill="#B5532A"
+      />
       <FigureTable caption="Figures per stylist" columns={columns} rows={stylists} filename={filename} />
     </SectionCard>
   );

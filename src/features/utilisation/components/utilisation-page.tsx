@@ -11,6 +11,8 @@ import { OccupancyHeatMap } from './occupancy-heat-map';
 import { PeriodPicker } from './period-picker';
 import { ServicesTable } from './services-table';
 import { StylistBars } from './stylist-bars';
+import { OnTimeByStylist } from './on-time-by-stylist';
+import { TimekeepingSummary } from './timekeeping-summary';
 import { UtilisationSummary } from './utilisation-summary';
 import { WeeklyTrend } from './weekly-trend';
 
@@ -84,6 +86,9 @@ export function OwnerUtilisationView() {
       <UtilisationSummary report={report} currency={currency} />
       <OccupancyHeatMap cells={report.heatMap} filename={`chair-occupancy-by-hour-${slug(report)}.csv`} />
       <StylistBars stylists={report.stylists} currency={currency} filename={`stylists-${slug(report)}.csv`} />
+      <TimekeepingSummary timekeeping={report.timekeeping}>
+        <OnTimeByStylist stylists={report.timekeeping.stylists} filename={`on-time-${slug(report)}.csv`} />
+      </TimekeepingSummary>
       <WeeklyTrend weeks={report.weeks} currency={currency} filename={`weeks-${slug(report)}.csv`} />
       <ServicesTable services={report.topServices} currency={currency} filename={`services-${slug(report)}.csv`} />
     </Frame>
@@ -97,6 +102,7 @@ export function DeskUtilisationView() {
     <Frame title="Chair use" report={report} query={query} onQuery={setQuery}>
       <UtilisationSummary report={report} />
       <OccupancyHeatMap cells={report.heatMap} filename={`chair-occupancy-by-hour-${slug(report)}.csv`} />
+      <TimekeepingSummary timekeeping={report.timekeeping} />
       <WeeklyTrend weeks={report.weeks} filename={`weeks-${slug(report)}.csv`} />
       <ServicesTable services={report.topServices} filename={`services-${slug(report)}.csv`} />
     </Frame>

@@ -1,20 +1,25 @@
+import type { ReactNode } from 'react';
 import { useFieldArray, useFormContext } from 'react-hook-form';
 import { sittingMaxMinutes } from '@shared/schemas/step-plan.schemas';
 import { DAYS_BETWEEN_SITTINGS } from '@shared/quotes/propose-quote';
 import { formatMinutes } from '@client/lib/time';
 import { Button } from '@client/components/ui/button';
 import { stepOfKind, type StepPlanFormInput } from '@client/features/bookings/step-plan-form';
-import { SittingEditor } from './sitting-editor';
+import { SittingEditor, type StepNote } from './sitting-editor';
 
 type Props = {
   title?: string;
   /** The set-up screens may add and remove sittings; a booking keeps its service's sittings. */
   editSittings?: boolean;
   defaultOpen?: boolean;
+  /** Shown above the sittings (e.g. what the notes beside the steps mean). */
+  note?: ReactNode;
+  /** Something to show under each step (e.g. its typical actual minutes), given the step and a way to set its minutes. */
+  stepNote?: StepNote;
 };
 
 /** A step plan editor: by default the chosen service's plan, for this booking only (the menu keeps its own). */
-export function StepPlanEditor({ title = 'Step plan for this booking', editSittings = false, defaultOpen = false }: Props) {
+export function StepPlanEditor({ title = 'Step plan for this booking', editSittings = false, defaultOpen = false, note, stepNote }: Props) {
   const { control, watch, setValue } = useFormContext<StepPlanFormInput>();
   const sittings = useFieldArray({ control, name: 'stepPlan.sittings' });
   const plan = watch('stepPlan');
@@ -29,9 +34,10 @@ export function StepPlanEditor({ title = 'Step plan for this booking', editSitti
         </span>
       </summary>
       <div className="flex flex-col gap-4 border-t border-ink/10 p-4">
+        {note}
         {sittings.fields.map((field, i) => (
           <div key={field.id} className="flex flex-col gap-2">
-            <SittingEditor index={i} of={sittings.fields.length} />
+            <SittingEditor index={i} of={sittings.fields.length} stepNote={stepNote} />
             {editSittings && sittings.fields.length > 1 && (
               <div>
                 <Button

@@ -1,3 +1,4 @@
+import type { ReactNode } from 'react';
 import { useFormContext } from 'react-hook-form';
 import { fieldError } from '@client/lib/form-errors';
 import { PRODUCT_FAMILIES, type PlannedStep } from '@shared/schemas/step-plan.schemas';
@@ -17,6 +18,8 @@ type Props = {
   onMove: (by: -1 | 1) => void;
   onRemove: () => void;
   onReplace: (step: PlannedStep) => void;
+  /** Shown across the row under the step's fields. */
+  note?: ReactNode;
 };
 
 const kindOptions = (['hands_on', 'developing', 'basin'] as const).map((kind) => ({ value: kind, label: stepKindLabels[kind] }));
@@ -24,7 +27,7 @@ const kindOptions = (['hands_on', 'developing', 'basin'] as const).map((kind) =>
 const productOptions = [{ value: '', label: 'Choose…' }, ...PRODUCT_FAMILIES.map((f) => ({ value: f, label: productFamilyShortLabels[f] }))];
 
 /** One editable step: kind, label, what it puts on the hair, minutes (or least–most minutes while developing), order. */
-export function StepRow({ path, number, count, onMove, onRemove, onReplace }: Props) {
+export function StepRow({ path, number, count, onMove, onRemove, onReplace, note }: Props) {
   const { register, watch, getValues, formState } = useFormContext<StepPlanFormInput>();
   const step = watch(path);
   const error = (field: string) => fieldError(formState.errors, `${path}.${field}`);
@@ -101,6 +104,7 @@ export function StepRow({ path, number, count, onMove, onRemove, onReplace }: Pr
           With heat (a hood or processor): the time allowed on the hair is halved
         </label>
       )}
+      {note && <div className="col-span-full">{note}</div>}
       {stepError && (
         <p className="col-span-full text-sm font-bold text-brick" role="alert">
           {stepError}
