@@ -46,6 +46,21 @@ export interface SalonsTable {
   lift_compromised_levels: Generated<number>;
   /** Minutes past a sitting's planned start before the desk may mark a no-show (migrations/20261207T0900). */
   no_show_grace_minutes: Generated<number>;
+  /** Tax in thousandths of a percent (8.25 % is 8250), and whether prices include it (migrations/20261208T1205). */
+  tax_rate_milli_percent: Generated<number>;
+  tax_inclusive: Generated<boolean>;
+}
+
+/** A retail product the owner keeps for checkout to sell; retired, never deleted (migrations/20261208T1200). */
+export interface RetailProductsTable {
+  id: Generated<string>;
+  salon_id: string;
+  name: string;
+  price_cents: number;
+  /** Never below zero (a check constraint); checkout lowers it atomically. */
+  stock: number;
+  active: Generated<boolean>;
+  created_at: DefaultTimestamp;
 }
 
 /** A guardian's consent to oxidative colour for a client under 16, recorded by the desk (migrations/20261205T0320). */
@@ -428,6 +443,7 @@ export interface Database {
   messages: MessagesTable;
   out_of_service: OutOfServiceTable;
   product_costs: ProductCostsTable;
+  retail_products: RetailProductsTable;
   consultations: ConsultationsTable;
   consultation_photos: ConsultationPhotosTable;
   quotes: QuotesTable;

@@ -6,7 +6,7 @@ import { writeAudit } from '../audit';
 import { findSalon } from '../salon';
 import { assertWithinProcessingLimits } from '../planning';
 import { affectedMessage } from './affected-message';
-import { uniqueName } from './name-taken';
+import { uniqueName } from '@server/lib/unique-name';
 import { listFutureBookings } from './future-bookings.repository';
 import { insertService, listSetupServices, listSkills, retireService, updateService } from './services-setup.repository';
 

@@ -7,7 +7,7 @@ import { writeAudit } from '../audit';
 import { findSalon } from '../salon';
 import { withFreeStylists } from './free-stylists.service';
 import { listFutureBookings } from './future-bookings.repository';
-import { uniqueName } from './name-taken';
+import { uniqueName } from '@server/lib/unique-name';
 import { deleteOutOfService, insertOutOfService, insertUnit, listUnits, renameUnit, unitExists } from './units-setup.repository';
 
 type Units = Record<UnitKind, Unit[]>;

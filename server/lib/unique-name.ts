@@ -1,4 +1,4 @@
-import { AppError } from '@server/lib/app-error';
+import { AppError } from './app-error';
 
 /** Runs a write whose name column is unique per salon; a clash answers 409 naming the field. */
 export async function uniqueName<T>(write: Promise<T>, what: string): Promise<T> {
