@@ -46,6 +46,7 @@ import { registerServiceSetupRoutes } from './features/setup/services-setup.rout
 import { registerConsultationRoutes } from './features/consultations/consultations.routes';
 import { registerStrandTestRoutes } from './features/strand-tests/strand-tests.routes';
 import { registerQuotePriceRoutes } from './features/quote-prices/quote-prices.routes';
+import { registerRetailProductRoutes } from './features/retail-products/retail-products.routes';
 import { registerMessageRoutes } from './features/messages/messages.routes';
 import { registerPaymentRoutes } from './features/payments';
 import { createLiveHub, registerLiveEventRoutes } from './features/live-events';
@@ -112,6 +113,7 @@ export function createApp(deps: Omit<AppDeps, 'table' | 'storage' | 'readCache' 
     registerConsultationRoutes,
     registerStrandTestRoutes,
     registerQuotePriceRoutes,
+    registerRetailProductRoutes,
     registerMessageRoutes,
     registerPaymentRoutes,
     registerLiveEventRoutes,

@@ -50,6 +50,21 @@ export interface SalonsTable {
   unpaid_deposit_release_hours: ColumnType<number | null, number | null | undefined, number | null>;
   /** Minutes a later client may be asked to start late when an earlier sitting overruns (migrations/20261208T1000). */
   late_start_limit_minutes: Generated<number>;
+  /** Tax in thousandths of a percent (8.25 % is 8250), and whether prices include it (migrations/20261208T1205). */
+  tax_rate_milli_percent: Generated<number>;
+  tax_inclusive: Generated<boolean>;
+}
+
+/** A retail product the owner keeps for checkout to sell; retired, never deleted (migrations/20261208T1200). */
+export interface RetailProductsTable {
+  id: Generated<string>;
+  salon_id: string;
+  name: string;
+  price_cents: number;
+  /** Never below zero (a check constraint); checkout lowers it atomically. */
+  stock: number;
+  active: Generated<boolean>;
+  created_at: DefaultTimestamp;
 }
 
 /** A guardian's consent to oxidative colour for a client under 16, recorded by the desk (migrations/20261205T0320). */
@@ -499,6 +514,7 @@ export interface Database {
   messages: MessagesTable;
   out_of_service: OutOfServiceTable;
   product_costs: ProductCostsTable;
+  retail_products: RetailProductsTable;
   consultations: ConsultationsTable;
   consultation_photos: ConsultationPhotosTable;
   quotes: QuotesTable;

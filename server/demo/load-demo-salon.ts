@@ -9,6 +9,7 @@ import { insertBooking, tstzRange, type NewStep } from '../features/bookings/boo
 import { DEMO_PASSWORD, demoClientNames, demoSalon, demoServices, demoStaff, type ServiceKey, type StylistKey } from './demo-catalogue';
 import { correctionDayOne, correctionDayTwo, ordinaryDay, type Placement } from './demo-day-patterns';
 import { insertDemoConsultations } from './demo-consultations';
+import { insertDemoProducts } from './demo-products';
 import { planDemoMessages } from './demo-messages';
 import { recordPastActuals } from './demo-actuals';
 
@@ -38,6 +39,7 @@ export async function loadDemoSalon(db: Kysely<Database>, now: Date): Promise<{ 
     const bookings = await insertDemoBook(trx, ids, now);
     await insertDemoStandby(trx, ids);
     await insertDemoConsultations(trx, ids, now);
+    await insertDemoProducts(trx, ids.salonId);
     await planDemoMessages(trx, ids.salonId, ids.services, now);
     return { bookings };
   });

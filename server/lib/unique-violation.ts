@@ -23,6 +23,7 @@ const MEANINGS: Record<string, Meaning> = {
   chairs_salon_id_name_key: nameTaken('chair'),
   basins_salon_id_name_key: nameTaken('basin'),
   services_salon_id_name_key: nameTaken('service'),
+  retail_products_salon_id_name_key: nameTaken('product'),
   mix_logs_booking_id_sitting_seq_bowl_no_key: { code: 'CONFLICT', field: 'bowlNo', message: 'This bowl of this sitting is already written.' },
 };
 

@@ -1,6 +1,7 @@
 import { SALON_LOCALE } from '../format/locale';
 import { plainSpaces } from '../format/plain-spaces';
 import { currencyExponent } from './currency-exponent';
+import { parseDecimal } from './decimal-text';
 
 /*
  * Amounts are whole numbers of the currency's minor unit (cents for USD, yen for JPY, fils for KWD),
@@ -32,21 +33,11 @@ export function moneyInputText(minor: number, currency: string): string {
   return minorToUnits(minor, currency).toFixed(currencyExponent(currency));
 }
 
-const TYPED = /^([+-]?)(\d*)(?:\.(\d*))?$/;
-
 /**
  * A typed amount ("260", "260.5", ".75", "1,234.50") in minor units, or null when it is not a number.
  * Commas are read as thousands separators only in groups of three, so "1,5" is refused rather than
  * guessed; digits beyond the currency's minor unit round half away from zero.
  */
 export function parseMoney(text: string, currency: string): number | null {
-  const trimmed = text.trim();
-  const plain = /^[+-]?\d{1,3}(,\d{3})+(\.\d*)?$/.test(trimmed) ? trimmed.replace(/,/g, '') : trimmed;
-  const match = TYPED.exec(plain);
-  if (!match || (match[2] === '' && (match[3] ?? '') === '')) return null;
-  const digits = currencyExponent(currency);
-  const fraction = match[3] ?? '';
-  const kept = Number(`${match[2] || '0'}${fraction.slice(0, digits).padEnd(digits, '0')}`);
-  const minor = kept + (fraction.charAt(digits) >= '5' ? 1 : 0);
-  return match[1] === '-' && minor !== 0 ? -minor : minor;
+  return parseDecimal(text, currencyExponent(currency));
 }

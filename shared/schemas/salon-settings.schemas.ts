@@ -61,6 +61,15 @@ export const SalonSettingsSchema = z
       .refine((list) => new Set(list).size === list.length, 'Each reminder needs its own time'),
     // EU Regulation 1223/2009 Annex III entry 12: hydrogen peroxide in hair products at most 12 %.
     maxDeveloperPercent: z.number({ error: 'Enter a percentage' }).gt(0, 'More than 0').max(12, 'At most 12 % (EU Regulation 1223/2009, Annex III)'),
+    // Tax at checkout, once per receipt (docs/money.md): the rate in thousandths of a percent (8.25 % is 8250),
+    // 0 to 50 %, and whether menu and product prices include it. Left out: unchanged.
+    taxRateMilliPercent: z
+      .number({ error: 'Enter a rate, e.g. 8.25' })
+      .int('At most three decimals')
+      .min(0, 'At least 0 %')
+      .max(50_000, 'At most 50 %')
+      .optional(),
+    taxInclusive: z.boolean().optional(),
     // Planning rules (common practice defaults, within hard maxima). Left out: unchanged.
     processingLimits: ProcessingLimitsSchema.optional(),
     liftPerSitting: LiftPerSittingSchema.optional(),

@@ -73,6 +73,7 @@ const routes: RouteObject[] = [
       rolePage(pages.ownerSetupServices, ['owner'], () => import('./routes/owner-setup-services')),
       rolePage(pages.ownerSetupService, ['owner'], () => import('./routes/owner-setup-service')),
       rolePage(pages.ownerQuotePrices, ['owner'], () => import('./routes/owner-quote-prices')),
+      rolePage(pages.ownerSetupProducts, ['owner'], () => import('./routes/owner-setup-products')),
       rolePage(pages.ownerFollowUps, ['owner'], () => import('./routes/owner-follow-ups')),
       rolePage(pages.desk, DESK, () => import('./routes/desk-home')),
       rolePage(pages.deskClient, DESK, () => import('./routes/desk-client')),

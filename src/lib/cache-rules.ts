@@ -12,6 +12,7 @@ import { onlineBookingApi } from '@shared/api/online-booking.api';
 import { paymentsApi } from '@shared/api/payments.api';
 import { photosApi } from '@shared/api/photos.api';
 import { replanApi } from '@shared/api/replan.api';
+import { retailProductsApi } from '@shared/api/retail-products.api';
 import { sessionApi } from '@shared/api/session.api';
 import { standbyApi } from '@shared/api/standby.api';
 import { testRecordsApi } from '@shared/api/test-records.api';
@@ -202,6 +203,9 @@ export function sessionStarted(queryClient: QueryClient, user: SessionUser | nul
  * itself, so every cached answer is refreshed rather than guessing which ones changed.
  */
 export const setupChanged = (queryClient: QueryClient) => queryClient.invalidateQueries();
+
+/** A retail product was added or changed, or a count refused because a sale moved the stock: the product list. */
+export const retailProductsChanged = (queryClient: QueryClient) => refreshEndpoints(queryClient, [retailProductsApi.list]);
 
 /** A follow-up rule was added, changed or removed. */
 export const followUpRulesChanged = (queryClient: QueryClient) => refreshEndpoints(queryClient, [followUpRulesApi.list]);

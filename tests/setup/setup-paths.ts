@@ -16,4 +16,6 @@ export const setupPaths = {
   unitOutOfService: (kind: 'chairs' | 'basins', id: string) => `/api/owner/setup/units/${kind}/${id}/out-of-service`,
   services: '/api/owner/setup/services',
   service: (id: string) => `/api/owner/setup/services/${id}`,
+  retailProducts: '/api/owner/retail-products',
+  retailProduct: (id: string) => `/api/owner/retail-products/${id}`,
 } as const;

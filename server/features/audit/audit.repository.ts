@@ -17,7 +17,8 @@ export interface AuditInput {
     | 'strand_test'
     | 'skin_test_clearance'
     | 'client'
-    | 'quote';
+    | 'quote'
+    | 'retail_product';
   entityId: string;
   action: string;
   before?: unknown;

@@ -4,11 +4,11 @@ import { planningRulesColumns, planningRulesOf } from '../salon';
 
 const hhmm = (t: string) => t.slice(0, 5);
 
-/** The settings as stored: the planning rules always present (a write may leave them out). */
+/** The settings as stored: the planning rules and tax always present (a write may leave them out). */
 export async function readSalonSettings(
   db: Db,
   salonId: string,
-): Promise<SalonSettings & Required<Pick<SalonSettings, 'processingLimits' | 'liftPerSitting'>>> {
+): Promise<SalonSettings & Required<Pick<SalonSettings, 'processingLimits' | 'liftPerSitting' | 'taxRateMilliPercent' | 'taxInclusive'>>> {
   const [row, hours] = await Promise.all([
     db.selectFrom('salons').selectAll().where('id', '=', salonId).executeTakeFirstOrThrow(),
     db.selectFrom('salon_hours').select(['rrule', 'start_time', 'end_time']).where('salon_id', '=', salonId).orderBy('start_time').orderBy('id').execute(),
@@ -34,6 +34,8 @@ export async function readSalonSettings(
     quietTo: hhmm(row.quiet_to),
     reminderOffsetsHours: row.reminder_offsets_hours,
     maxDeveloperPercent: Number(row.max_developer_percent),
+    taxRateMilliPercent: row.tax_rate_milli_percent,
+    taxInclusive: row.tax_inclusive,
     ...planningRulesOf(row),
   };
 }
@@ -62,6 +64,8 @@ export async function writeSalonSettings(db: Db, salonId: string, s: SalonSettin
       quiet_to: s.quietTo,
       reminder_offsets_hours: [...s.reminderOffsetsHours].sort((a, b) => b - a),
       max_developer_percent: s.maxDeveloperPercent,
+      ...(s.taxRateMilliPercent !== undefined && { tax_rate_milli_percent: s.taxRateMilliPercent }),
+      ...(s.taxInclusive !== undefined && { tax_inclusive: s.taxInclusive }),
       ...planningRulesColumns(s),
     })
     .where('id', '=', salonId)

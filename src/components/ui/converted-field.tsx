@@ -7,6 +7,7 @@ type Props<T extends FieldValues> = Omit<InputHTMLAttributes<HTMLInputElement>, 
   name: Path<T>;
   label: string;
   error?: string;
+  hint?: string;
   /** The form's value as the person reads it. */
   format: (value: unknown) => string;
   /** What the person typed, as the form (and the API) wants it. */

@@ -136,6 +136,10 @@ export const expectedAccess: Record<string, Expectation> = {
   'DELETE /api/owner/setup/services/{id}': { allow: ['owner'] },
   'GET /api/owner/quote-prices': { allow: ['owner'] },
   'PUT /api/owner/quote-prices': { allow: ['owner'] },
+  // Retail products: the owner keeps them; the desk reads them to sell at checkout.
+  'GET /api/retail-products': { allow: DESK },
+  'POST /api/owner/retail-products': { allow: ['owner'] },
+  'PUT /api/owner/retail-products/{id}': { allow: ['owner'] },
   'GET /api/owner/follow-up-rules': { allow: ['owner'] },
   'POST /api/owner/follow-up-rules': { allow: ['owner'] },
   'PUT /api/owner/follow-up-rules/{id}': { allow: ['owner'] },

@@ -14,6 +14,7 @@ import { useSaveSalonSettings } from '../api/setup-mutations';
 import { HoursLines } from './hours-lines';
 import { SkinTestFamiliesField } from './skin-test-families-field';
 import { PlanningRulesFields } from './planning-rules-fields';
+import { TaxFields } from './tax-fields';
 
 const zones = typeof Intl.supportedValuesOf === 'function' ? Intl.supportedValuesOf('timeZone') : [];
 // Every country libphonenumber-js can read numbers for, by name.
@@ -40,6 +41,8 @@ const fieldNames = [
   'quietTo',
   'reminderOffsetsHours',
   'maxDeveloperPercent',
+  'taxRateMilliPercent',
+  'taxInclusive',
   'processingLimits.lightener',
   'processingLimits.oxidative_colour',
   'processingLimits.toner_oxidative',
@@ -165,6 +168,7 @@ export function SalonSettingsForm({ settings }: { settings: SalonSettings }) {
             <p className="self-end text-sm text-ink/80">Each service sets its own deposit (fixed or a share of the price) on the Services page.</p>
           </div>
         </SectionCard>
+        <TaxFields />
         <SectionCard title="Messages">
           <div className="grid gap-4 md:grid-cols-3">
             <TextField label="No text messages from" type="time" error={err('quietFrom')} {...form.register('quietFrom')} />

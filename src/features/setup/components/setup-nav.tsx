@@ -7,6 +7,7 @@ const links = [
   { to: paths.ownerSetupUnits, label: 'Chairs and basins', end: true },
   { to: paths.ownerSetupServices, label: 'Services and step plans', end: false },
   { to: paths.ownerQuotePrices, label: 'Quote prices', end: true },
+  { to: paths.ownerSetupProducts, label: 'Products', end: true },
   { to: paths.ownerFollowUps, label: 'Follow-up rules', end: true },
 ];
 
