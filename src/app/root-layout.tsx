@@ -1,9 +1,12 @@
 import { useQuery } from '@tanstack/react-query';
+import { lazy, Suspense } from 'react';
 import { Outlet, ScrollRestoration, useNavigation } from 'react-router-dom';
 import { sessionQueries } from '../features/auth/api/session-queries';
 import { SiteHeader } from './site-header';
 import { StaffFooter } from './staff-footer';
-import { LiveUpdatesBanner } from './live-updates-banner';
+
+// Staff only, and it brings the book's contracts with it: loaded once someone on the staff is signed in.
+const LiveUpdatesBanner = lazy(() => import('./live-updates-banner').then((m) => ({ default: m.LiveUpdatesBanner })));
 
 /** The frame of every page: skip link, header, main, and for staff live updates and the cautions footer. */
 export function RootLayout() {
@@ -17,7 +20,11 @@ export function RootLayout() {
       <div aria-hidden="true" className={`h-1 bg-oxide transition-opacity ${navigating ? 'animate-pulse opacity-100' : 'opacity-0'}`} />
       <SiteHeader user={user ?? null} />
       {/* Keyed by the person: a new sign-in starts its own stream. */}
-      {user && user.role !== 'client' && <LiveUpdatesBanner key={user.id} />}
+      {user && user.role !== 'client' && (
+        <Suspense fallback={null}>
+          <LiveUpdatesBanner key={user.id} />
+        </Suspense>
+      )}
       <main id="main" tabIndex={-1} aria-busy={navigating} className="mx-auto w-full max-w-7xl flex-1 px-4 py-6 sm:px-6">
         <Outlet />
       </main>

@@ -2,8 +2,7 @@ import type { z } from 'zod';
 import type { OfferViewSchema } from '@shared/schemas/window.schemas';
 import { Button } from '@client/components/ui/button';
 import { FormAlert } from '@client/components/ui/form-alert';
-import { zoneLabel } from '@client/lib/time';
-import { formatDate, formatTime } from '@shared/format/date-time';
+import { formatDate, formatTime, formatZone } from '@shared/format/date-time';
 import { formatFor } from '@shared/format/locale';
 import { useAcceptOffer } from '../api/offer-mutations';
 
@@ -35,7 +34,7 @@ export function OfferView({ token, offer }: Props) {
         <dt className="font-bold">When</dt>
         <dd>
           {when}, <span className="tabular">{formatTime(offer.start, formatFor(offer.timeZone))}</span>
-          <span className="block text-sm text-ink/80">Salon time: {zoneLabel(offer.timeZone, offer.start.slice(0, 10))}</span>
+          <span className="block text-sm text-ink/80">Salon time: {formatZone(formatFor(offer.timeZone), offer.start.slice(0, 10))}</span>
         </dd>
         <dt className="font-bold">Status</dt>
         <dd className="font-bold">{statusWords[offer.status]}</dd>

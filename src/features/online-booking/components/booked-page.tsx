@@ -7,8 +7,7 @@ import type { BookingView } from '@shared/schemas/booking-view.schemas';
 import type { Salon } from '@shared/schemas/salon.schemas';
 import { buttonClasses } from '@client/components/ui/button';
 import { paths } from '@client/config/paths';
-import { zoneLabel } from '@client/lib/time';
-import { formatDate, formatRange } from '@shared/format/date-time';
+import { formatDate, formatRange, formatZone } from '@shared/format/date-time';
 import { formatFor } from '@shared/format/locale';
 import { onlineBookingQueries } from '../api/online-booking-queries';
 import { confirmationWords } from '../confirmation-words';
@@ -48,7 +47,7 @@ export function BookedPage({ booking, salon }: Props) {
             <dd>
               {formatDate(first.start, formatFor(salon.timeZone), { width: 'short' })},{' '}
               <span className="tabular">{formatRange(first.start, first.end, formatFor(salon.timeZone))}</span>
-              <span className="block text-sm text-ink/80">Salon time: {zoneLabel(salon.timeZone, first.start.slice(0, 10))}</span>
+              <span className="block text-sm text-ink/80">Salon time: {formatZone(formatFor(salon.timeZone), first.start.slice(0, 10))}</span>
             </dd>
           </>
         )}

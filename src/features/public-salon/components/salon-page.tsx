@@ -1,6 +1,7 @@
+import { formatZone } from '@shared/format/date-time';
+import { formatFor } from '@shared/format/locale';
 import type { PublicSalon } from '@shared/schemas/online-booking.schemas';
 import { SectionCard } from '@client/components/ui/section-card';
-import { zoneLabel } from '@client/lib/time';
 import { SalonPolicies } from './salon-policies';
 import { ServiceCard } from './service-card';
 
@@ -35,7 +36,7 @@ export function SalonPage({ salon }: Props) {
                 <li key={line}>{line}</li>
               ))}
             </ul>
-            <p className="mt-2 text-sm text-ink/80">Salon time: {zoneLabel(salon.timeZone)}</p>
+            <p className="mt-2 text-sm text-ink/80">Salon time: {formatZone(formatFor(salon.timeZone))}</p>
           </SectionCard>
           <SalonPolicies policies={salon.policies} />
           <SectionCard title="Stylists">

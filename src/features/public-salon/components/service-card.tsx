@@ -1,8 +1,8 @@
+import { formatDuration } from '@shared/format/date-time';
 import { Link } from 'react-router-dom';
 import type { PublicSalon } from '@shared/schemas/online-booking.schemas';
 import { buttonClasses } from '@client/components/ui/button';
 import { paths } from '@client/config/paths';
-import { formatMinutes } from '@client/lib/time';
 import { formatMoney } from '@shared/money/money';
 
 type Service = PublicSalon['services'][number];
@@ -17,7 +17,7 @@ export function ServiceCard({ service, slug, currency, phone }: Props) {
       <p>{service.description}</p>
       <dl className="grid grid-cols-[max-content_1fr] gap-x-4 gap-y-1 text-sm tabular">
         <dt className="font-bold">Typical time</dt>
-        <dd>{formatMinutes(service.typicalMinutes)}</dd>
+        <dd>{formatDuration(service.typicalMinutes)}</dd>
         <dt className="font-bold">Price</dt>
         <dd>{service.priceIsFrom ? `from ${price}` : price}</dd>
         <dt className="font-bold">Deposit</dt>

@@ -1,7 +1,7 @@
+import { formatDuration } from '@shared/format/date-time';
 import { Bar, BarChart, CartesianGrid, LabelList, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
 import type { StylistFigures } from '@shared/schemas/utilisation.schemas';
 import { SectionCard } from '@client/components/ui/section-card';
-import { formatMinutes } from '@client/lib/time';
 import { FigureTable, type FigureColumn } from './figure-table';
 import { percentText, percentValue } from './chart-labels';
 import { formatMoney, minorToUnits } from '@shared/money/money';
@@ -13,8 +13,8 @@ export function StylistBars({ stylists, currency, filename }: Props) {
   const columns: FigureColumn<StylistFigures>[] = [
     { id: 'name', header: 'Stylist', value: (s) => s.name },
     { id: 'share', header: 'Hands-on share', value: (s) => s.handsOnShare, format: (s) => percentText(s.handsOnShare), numeric: true },
-    { id: 'handsOn', header: 'Hands-on minutes', value: (s) => s.handsOnMinutes, format: (s) => formatMinutes(s.handsOnMinutes), numeric: true },
-    { id: 'clock', header: 'Minutes on the clock', value: (s) => s.onClockMinutes, format: (s) => formatMinutes(s.onClockMinutes), numeric: true },
+    { id: 'handsOn', header: 'Hands-on minutes', value: (s) => s.handsOnMinutes, format: (s) => formatDuration(s.handsOnMinutes), numeric: true },
+    { id: 'clock', header: 'Minutes on the clock', value: (s) => s.onClockMinutes, format: (s) => formatDuration(s.onClockMinutes), numeric: true },
     { id: 'bookings', header: 'Bookings', value: (s) => s.bookings, numeric: true },
     { id: 'noShows', header: 'No-shows', value: (s) => s.noShows, numeric: true },
     {
