@@ -66,7 +66,9 @@ export const paths = {
   desk: (date?: string) => to(pages.desk, {}, { date }),
   deskClient: (id: string) => to(pages.deskClient, { id }),
   outbox: pages.outbox,
-  deskBook: (consultationId?: string) => to(pages.deskBook, {}, { consultation: consultationId }),
+  /** Booking a consultation's saved quote, or a client (a service and stylist they asked for, e.g. from the standby list). */
+  deskBook: (consultationId?: string, start?: { client: string; service?: string; stylist?: string }) =>
+    to(pages.deskBook, {}, { consultation: consultationId, client: start?.client, service: start?.service, stylist: start?.stylist }),
   deskBooking: (id: string) => to(pages.deskBooking, { id }),
   deskStandby: pages.deskStandby,
   deskWeek: (date?: string, stylistId?: string) => to(pages.deskWeek, {}, { date, stylist: stylistId }),

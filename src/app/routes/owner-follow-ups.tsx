@@ -1,6 +1,7 @@
 import { useState } from 'react';
 import { useSuspenseQuery } from '@tanstack/react-query';
 import { Button } from '@client/components/ui/button';
+import { ConfirmRemove } from '@client/components/ui/confirm-remove';
 import { PageHeader } from '@client/components/ui/page-header';
 import { SetupNav } from '@client/features/setup/components/setup-nav';
 import { SectionCard } from '@client/components/ui/section-card';
@@ -9,6 +10,7 @@ import { followUpQueries, useRemoveFollowUpRule } from '@client/features/follow-
 import { FollowUpRuleForm } from '@client/features/follow-ups/components/follow-up-rule-form';
 import { salonQueries } from '@client/features/salon/api/salon-queries';
 import { queryClient } from '@client/lib/query-client';
+import { toastDone } from '@client/lib/toast';
 
 export async function loader() {
   await Promise.all([
@@ -51,14 +53,11 @@ export function Component() {
                     <Button variant="secondary" onClick={() => setEditing(r.id)} aria-label={`Edit ${r.title}`}>
                       Edit
                     </Button>
-                    <Button
-                      variant="secondary"
+                    <ConfirmRemove
+                      what={`the rule “${r.title}”`}
                       busy={remove.isPending && remove.variables === r.id}
-                      onClick={() => remove.mutate(r.id)}
-                      aria-label={`Remove ${r.title}`}
-                    >
-                      Remove
-                    </Button>
+                      onRemove={() => remove.mutate(r.id, { onSuccess: () => toastDone(`Removed the rule “${r.title}”.`) })}
+                    />
                   </div>
                 </li>
               ))}
