@@ -11,6 +11,7 @@ import { FollowUpRuleForm } from '@client/features/follow-ups/components/follow-
 import { salonQueries } from '@client/features/salon/api/salon-queries';
 import { queryClient } from '@client/lib/query-client';
 import { toastDone } from '@client/lib/toast';
+import { describeFollowUpRule } from '@shared/messages/follow-up-timing';
 
 export async function loader() {
   await Promise.all([
@@ -48,7 +49,7 @@ export function Component() {
                     {r.title} <span className="font-normal">after {r.serviceName}</span>
                   </p>
                   <p className="whitespace-pre-line">{r.text}</p>
-                  <code className="text-sm">{r.rrule}</code>
+                  <p className="text-sm">Sent {describeFollowUpRule(r.rrule) ?? <code title="Calendar rule (RFC 5545)">{r.rrule}</code>}</p>
                   <div className="flex gap-3">
                     <Button variant="secondary" onClick={() => setEditing(r.id)} aria-label={`Edit ${r.title}`}>
                       Edit

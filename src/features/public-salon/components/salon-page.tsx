@@ -1,5 +1,6 @@
 import { formatZone } from '@shared/format/date-time';
 import { formatFor } from '@shared/format/locale';
+import { telHref } from '@shared/format/dial';
 import type { PublicSalon } from '@shared/schemas/online-booking.schemas';
 import { SectionCard } from '@client/components/ui/section-card';
 import { SalonPolicies } from './salon-policies';
@@ -15,8 +16,8 @@ export function SalonPage({ salon }: Props) {
         <h1 className="text-3xl font-extrabold tracking-tight">{salon.name}</h1>
         <p className="mt-1">{salon.address}</p>
         <p>
-          <a href={`tel:${salon.phone}`} className="text-link">
-            {salon.phone}
+          <a href={telHref(salon.phone)} className="text-link">
+            {salon.phoneText}
           </a>
         </p>
       </div>
@@ -26,7 +27,7 @@ export function SalonPage({ salon }: Props) {
             Services
           </h2>
           {salon.services.map((service) => (
-            <ServiceCard key={service.id} service={service} slug={salon.slug} currency={salon.currency} phone={salon.phone} />
+            <ServiceCard key={service.id} service={service} slug={salon.slug} currency={salon.currency} phone={salon.phone} phoneText={salon.phoneText} />
           ))}
         </section>
         <div className="flex flex-col gap-4">

@@ -12,7 +12,7 @@ type Props = { stylists: StylistFigures[]; currency: string; filename: string };
 export function StylistBars({ stylists, currency, filename }: Props) {
   const columns: FigureColumn<StylistFigures>[] = [
     { id: 'name', header: 'Stylist', value: (s) => s.name },
-    { id: 'share', header: 'Hands-on share', value: (s) => s.handsOnShare, format: (s) => percentText(s.handsOnShare), numeric: true },
+    { id: 'share', header: 'Hands-on share', value: (s) => percentValue(s.handsOnShare), format: (s) => percentText(s.handsOnShare), numeric: true, unit: '%' },
     { id: 'handsOn', header: 'Hands-on minutes', value: (s) => s.handsOnMinutes, format: (s) => formatDuration(s.handsOnMinutes), numeric: true },
     { id: 'clock', header: 'Minutes on the clock', value: (s) => s.onClockMinutes, format: (s) => formatDuration(s.onClockMinutes), numeric: true },
     { id: 'bookings', header: 'Bookings', value: (s) => s.bookings, numeric: true },
@@ -23,6 +23,7 @@ export function StylistBars({ stylists, currency, filename }: Props) {
       value: (s) => minorToUnits(s.revenueCents, currency),
       format: (s) => formatMoney(s.revenueCents, currency),
       numeric: true,
+      unit: currency,
     },
     {
       id: 'perHour',
@@ -30,6 +31,7 @@ export function StylistBars({ stylists, currency, filename }: Props) {
       value: (s) => (s.revenuePerHourCents === null ? null : minorToUnits(s.revenuePerHourCents, currency)),
       format: (s) => (s.revenuePerHourCents === null ? '—' : formatMoney(s.revenuePerHourCents, currency)),
       numeric: true,
+      unit: currency,
     },
   ];
   const data = stylists.map((s) => ({ name: s.name, share: percentValue(s.handsOnShare) }));
