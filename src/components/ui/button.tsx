@@ -5,7 +5,7 @@ type Variant = 'primary' | 'secondary' | 'quiet';
 const variants: Record<Variant, string> = {
   // White on oxide passes AA (4.9:1); keep one primary button per screen.
   primary: 'bg-oxide text-white hover:bg-[#9c4622] disabled:opacity-60',
-  secondary: 'border border-ink/30 bg-white text-ink hover:border-ink/60 disabled:opacity-60',
+  secondary: 'border border-edge bg-white text-ink hover:border-ink disabled:opacity-60',
   quiet: 'text-ink underline-offset-4 hover:underline',
 };
 
