@@ -3,7 +3,7 @@ import { DateTime } from 'luxon';
 import type { Browser, BrowserContext, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO_PASSWORD } from '@server/demo/demo-catalogue';
-import { baseUrl, connectBrowser, signInThroughPage, WCAG_TAGS } from '../setup/browser';
+import { baseUrl, connectBrowser, screenshot, signInThroughPage, WCAG_TAGS } from '../setup/browser';
 
 // Every page of every role, at a desktop and a phone width: its own title, no console warnings (React Router's
 // among them), and axe-core's automated WCAG 2.0, 2.1 and 2.2 A and AA checks (Deque's rules) finding nothing
@@ -18,7 +18,8 @@ afterAll(() => browser.close());
 const WIDTHS = [1280, 375];
 const ZONE = 'America/Denver';
 
-type Visit = { path: string; heading: string | RegExp };
+/** `shot`: also a screenshot for docs/screenshots, named with the width (the top of the page only: some run long). */
+type Visit = { path: string; heading: string | RegExp; shot?: string };
 type Role = { name: string; email: string | null; home: string; pages: (page: Page) => Promise<Visit[]> };
 
 const getJson = async (page: Page, path: string) => (await page.request.get(`${baseUrl()}${path}`)).json();
@@ -35,7 +36,7 @@ async function deskRecords(page: Page): Promise<Visit[]> {
   const client = clients[0];
   if (!client || !booking) throw new Error('the demo salon has no client or booking for this walk');
   return [
-    { path: `/desk/clients/${client.id}`, heading: client.name },
+    { path: `/desk/clients/${client.id}`, heading: client.name, shot: 'desk-client-card' },
     { path: `/desk/bookings/${booking.id}`, heading: /·/ },
   ];
 }
@@ -49,7 +50,7 @@ const roles: Role[] = [
       { path: '/sign-in', heading: 'Sign in' },
       { path: '/sign-up', heading: 'Create your account' },
       { path: '/forgot-password', heading: 'Reset your password' },
-      { path: '/salon/kestrel-and-pine', heading: 'Kestrel & Pine Hair Studio' },
+      { path: '/salon/kestrel-and-pine', heading: 'Kestrel & Pine Hair Studio', shot: 'public-salon-page' },
       { path: '/salon/kestrel-and-pine/book', heading: 'Choose a service first' },
       { path: '/no-such-page', heading: 'Page not found' },
     ],
@@ -73,7 +74,7 @@ const roles: Role[] = [
       { path: '/desk', heading: "Today's book" },
       { path: '/desk/week', heading: 'Week of all stylists' },
       { path: '/desk/book', heading: 'Book a service' },
-      { path: '/desk/standby', heading: 'Standby list' },
+      { path: '/desk/standby', heading: 'Standby list', shot: 'desk-standby' },
       { path: '/desk/outbox', heading: 'Outbox (demo)' },
       { path: '/desk/utilisation', heading: 'Chair use' },
       ...(await deskRecords(page)),
@@ -87,14 +88,14 @@ const roles: Role[] = [
       const { services } = (await getJson(page, '/api/owner/setup/services')) as { services: { id: string; name: string }[] };
       return [
         { path: '/owner', heading: 'Salon overview' },
-        { path: '/owner/utilisation', heading: 'Utilisation' },
+        { path: '/owner/utilisation', heading: 'Utilisation', shot: 'owner-utilisation-top' },
         { path: '/owner/setup', heading: 'Set-up' },
         { path: '/owner/setup/staff', heading: 'Set-up' },
         { path: '/owner/setup/chairs-and-basins', heading: 'Set-up' },
         { path: '/owner/setup/services', heading: 'Set-up' },
         { path: `/owner/setup/services/${services[0]!.id}`, heading: services[0]!.name },
         { path: '/owner/setup/quote-prices', heading: 'Set-up' },
-        { path: '/owner/setup/follow-up-rules', heading: 'Set-up' },
+        { path: '/owner/setup/follow-up-rules', heading: 'Set-up', shot: 'owner-follow-up-rules' },
       ];
     },
   },
@@ -135,6 +136,7 @@ describe('every page, as each role, at both widths', () => {
           expect(title, visit.path).toContain((await heading.textContent())!.trim());
           expect([...titles.values()], `${visit.path} has a title of its own`).not.toContain(title);
           titles.set(visit.path, title);
+          if (visit.shot) await screenshot(page, `${visit.shot}-${width}`, true, false);
           const axe = await new AxeBuilder({ page }).withTags(WCAG_TAGS).analyze();
           for (const v of axe.violations.filter((v) => v.impact === 'serious' || v.impact === 'critical'))
             findings.push(`${visit.path}: ${v.id} (${v.nodes.map((n) => n.target.join(' ')).join(', ')})`);
