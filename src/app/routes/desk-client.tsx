@@ -38,7 +38,7 @@ export function Component() {
         title={client.name}
         subtitle={<TimeZoneNote timeZone={salon.timeZone} />}
         action={
-          <Link to={paths.deskBook(undefined, { client: client.id })} className={buttonClasses('primary')}>
+          <Link to={paths.deskBook(undefined, { client: client.id })} className={buttonClasses('secondary')}>
             Book for {client.name}
           </Link>
         }

@@ -46,7 +46,7 @@ export function ClientContactForm({ client }: { client: ClientDetail }) {
           label="Mobile"
           type="tel"
           autoComplete="off"
-          hint="Any format; saved as +1 970 555 0142"
+          hint="Any format, e.g. (970) 555-0142, or with its country code"
           error={errors.phone?.message}
           {...register('phone')}
         />
