@@ -1,6 +1,7 @@
 import { lazy, Suspense } from 'react';
 import { Link, NavLink, useNavigate } from 'react-router-dom';
 import type { SessionUser } from '@shared/schemas/auth.schemas';
+import { buttonClasses } from '../components/ui/button';
 import { paths } from '../config/paths';
 import { navLinks } from './nav-links';
 
@@ -39,7 +40,14 @@ export function SiteHeader({ user }: Props) {
           {user ? (
             <>
               <span className="hidden text-sm sm:inline">{user.name}</span>
-              <Suspense fallback={null}>
+              {/* Its place is kept while it loads, so the header does not jump. */}
+              <Suspense
+                fallback={
+                  <span aria-hidden="true" className={buttonClasses('secondary')}>
+                    Sign out
+                  </span>
+                }
+              >
                 <SignOutButton onSignedOut={() => navigate(paths.signIn(), { replace: true })} />
               </Suspense>
             </>
