@@ -12,6 +12,9 @@ export default {
         sage: '#5E8066',
         amber: '#B7791F',
         brick: '#9B2C2C',
+        // The edge of a control (fields, chips, secondary buttons): 3:1 or more against white and linen, as WCAG 2.1
+        // SC 1.4.11 asks of what shows where a control is (tests/unit/contrast.test.ts).
+        edge: '#787F86',
       },
       fontFamily: {
         sans: ['Nunito', 'ui-sans-serif', 'system-ui', 'sans-serif'],

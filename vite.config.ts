@@ -23,7 +23,13 @@ export default defineConfig({
   plugins: [react(), tailwindcss(), rruleWithoutSourceMaps],
   // The same aliases as tsconfig.base.json's paths (tsx reads those for the server).
   resolve: { alias: { '@shared': here('./shared'), '@server': here('./server'), '@client': here('./src') } },
-  build: { outDir: 'dist/client', emptyOutDir: true },
+  build: {
+    outDir: 'dist/client',
+    emptyOutDir: true,
+    // Our own modules only declare things (schemas, contracts, components): one that nothing uses is left out, so a
+    // page that needs one contract does not carry every schema of the modules it sits beside.
+    rolldownOptions: { treeshake: { moduleSideEffects: [{ test: /\/(shared|src)\/.+\.tsx?$/, sideEffects: false }] } },
+  },
   server: {
     port: 5173,
     host: '127.0.0.1',

@@ -1,6 +1,6 @@
 import { ClientAgeSchema, DateOfBirthBodySchema, RecordGuardianConsentSchema } from '../schemas/age.schemas';
 import { CreateClientSchema } from '../schemas/booking.schemas';
-import { ClientDetailSchema, ClientListQuerySchema, ClientListSchema, ClientSummarySchema } from '../schemas/client.schemas';
+import { ClientDetailSchema, ClientListQuerySchema, ClientListSchema, ClientNotesSchema, ClientSummarySchema } from '../schemas/client.schemas';
 import { IdParamsSchema } from '../schemas/common.schemas';
 import { UpdateClientSchema } from '../schemas/contact.schemas';
 import { DESK, STAFF, endpoint } from './endpoint';
@@ -40,6 +40,15 @@ export const clientsApi = {
     params: IdParamsSchema,
     body: UpdateClientSchema,
     response: ClientSummarySchema,
+  }),
+  notes: endpoint({
+    method: 'put',
+    path: '/api/clients/:id/notes',
+    access: STAFF,
+    summary: "Replace the team's notes on a client (audited)",
+    params: IdParamsSchema,
+    body: ClientNotesSchema,
+    response: ClientNotesSchema,
   }),
   // Date of birth and guardian consent: oxidative colour for a client under 16 needs a guardian's consent on record.
   age: endpoint({

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { formatClock, formatDate, formatDateTime, formatRange, formatTime } from './date-time';
+import { formatClock, formatDate, formatDateTime, formatDuration, formatRange, formatTime, formatZone } from './date-time';
 import { formatFor } from './locale';
 
 const newYork = formatFor('America/New_York');
@@ -54,5 +54,24 @@ describe('joins', () => {
   });
   it('uses ordinary spaces only (SMS: GSM 03.38 has no no-break spaces)', () => {
     expect(formatDateTime('2027-06-08T21:00:00Z', denver, { zoneName: true })).not.toMatch(/[\u00a0\u2009\u202f]/);
+  });
+});
+
+describe('lengths of time', () => {
+  it('writes hours and minutes, leaving out what is zero', () => {
+    expect(formatDuration(45)).toBe('45 min');
+    expect(formatDuration(120)).toBe('2 h');
+    expect(formatDuration(450)).toBe('7 h 30 min');
+  });
+});
+
+describe('time zones in words', () => {
+  it('names the zone as people say it on that date, with its city (IANA tz database, America/Denver: MST in winter, MDT in summer)', () => {
+    expect(formatZone(denver, '2026-12-03')).toBe('Mountain Standard Time (Denver)');
+    expect(formatZone(denver, '2027-06-08T15:00:00Z')).toBe('Mountain Daylight Time (Denver)');
+    expect(formatZone(formatFor('America/New_York'), '2026-12-03')).toBe('Eastern Standard Time (New York)');
+  });
+  it('shows a name Intl does not know as it is stored', () => {
+    expect(formatZone(formatFor('Not/AZone'), '2026-12-03')).toBe('Not/AZone');
   });
 });

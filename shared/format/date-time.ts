@@ -79,3 +79,29 @@ export function formatClock(hhmm: string, { locale }: Pick<FormatContext, 'local
   if (!valid(at)) return '';
   return plainSpaces(formatter(locale, { timeZone: 'UTC', hour: 'numeric', ...(hourOnly ? {} : { minute: '2-digit' }) }).format(at));
 }
+
+/** "45 min", "2 h", "7 h 30 min": a length of time in whole minutes. */
+export function formatDuration(totalMinutes: number): string {
+  const hours = Math.floor(totalMinutes / 60);
+  const minutes = totalMinutes % 60;
+  if (hours === 0) return `${minutes} min`;
+  return minutes === 0 ? `${hours} h` : `${hours} h ${minutes} min`;
+}
+
+/**
+ * "Mountain Standard Time (Denver)": the zone's everyday name on a date (its daylight-saving name in summer) and the
+ * city it is named for, in place of the time-zone database's id. `on` is a calendar date or an instant; default now.
+ */
+export function formatZone({ locale, timeZone }: FormatContext, on: DateInput = new Date()): string {
+  const at = typeof on === 'string' && CALENDAR_DATE.test(on) ? new Date(`${on}T12:00:00Z`) : typeof on === 'string' ? new Date(on) : on;
+  let name: string | undefined;
+  try {
+    name = formatter(locale, { timeZone, timeZoneName: 'long' })
+      .formatToParts(valid(at) ? at : new Date())
+      .find((p) => p.type === 'timeZoneName')?.value;
+  } catch {
+    return timeZone; // not a zone Intl knows: shown as stored
+  }
+  const city = timeZone.split('/').at(-1)?.replace(/_/g, ' ');
+  return name && city && city !== timeZone ? `${name} (${city})` : (name ?? timeZone);
+}

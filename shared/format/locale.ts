@@ -5,6 +5,12 @@
  */
 export const SALON_LOCALE = 'en-US';
 
+/**
+ * The country a phone number typed without a country code is read in when the salon has none (the demo salon is in
+ * the US). Here rather than in phone.ts, so the schemas that name it do not bring the phone-number metadata along.
+ */
+export const DEFAULT_PHONE_COUNTRY = 'US';
+
 /** What every date and time formatter needs: the language and the salon's IANA time zone. */
 export type FormatContext = { locale: string; timeZone: string };
 

@@ -1,12 +1,10 @@
-import { isSupportedCountry, parsePhoneNumberFromString, type CountryCode } from 'libphonenumber-js';
+import { isSupportedCountry, parsePhoneNumberFromString } from 'libphonenumber-js';
+import { DEFAULT_PHONE_COUNTRY } from './locale';
 
 /*
  * Phone numbers, read and written by libphonenumber-js: the one place both sides turn a typed number into
  * the form it is stored, texted and shown in (E.164, e.g. +19705550142).
  */
-
-/** The country a number typed without a country code is read in when the salon has none (the demo salon is in the US). */
-export const DEFAULT_PHONE_COUNTRY: CountryCode = 'US';
 
 /** The number in E.164 (+19705550142), or null when libphonenumber-js does not find a valid number. */
 export function toE164(input: string, country: string = DEFAULT_PHONE_COUNTRY): string | null {

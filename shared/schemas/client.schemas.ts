@@ -23,3 +23,7 @@ export const ClientDetailSchema = ClientSummarySchema.extend({
   bookings: z.array(BookingViewSchema),
 });
 export type ClientDetail = z.infer<typeof ClientDetailSchema>;
+
+/** The team's own notes on a client (what the client does not see): a few paragraphs at most. */
+export const ClientNotesSchema = z.object({ notes: z.string().max(4000, 'At most 4,000 characters') }).strict();
+export type ClientNotes = z.infer<typeof ClientNotesSchema>;

@@ -1,6 +1,5 @@
 import { z } from 'zod';
-import { isSupportedCountry } from 'libphonenumber-js';
-import { DEFAULT_PHONE_COUNTRY } from '../format/phone';
+import { DEFAULT_PHONE_COUNTRY } from '../format/locale';
 
 /**
  * Numbers typed without a country code are read as the salon's country's (a salon setting, ISO 3166-1
@@ -20,13 +19,6 @@ export function phoneHint(country: string): string {
   if (country === DEFAULT_PHONE_COUNTRY) return PHONE_HINT;
   return `Enter a mobile number with its country code, or as dialled in ${countryName(country)}`;
 }
-
-/** A country phone numbers can be read for: ISO 3166-1 alpha-2, as libphonenumber-js knows them. */
-export const PhoneCountrySchema = z
-  .string()
-  .trim()
-  .toUpperCase()
-  .refine((c) => /^[A-Z]{2}$/.test(c) && isSupportedCountry(c), 'Choose a country');
 
 // Digits with the usual punctuation, at least five digits: anything else is not an attempt at a number.
 const looksLikePhone = (s: string) => /^\+?[\d\s().\-/]+$/.test(s) && (s.match(/\d/g)?.length ?? 0) >= 5;

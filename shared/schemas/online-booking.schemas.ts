@@ -8,6 +8,8 @@ export const PublicSalonSchema = z.object({
   name: z.string(),
   address: z.string(),
   phone: z.string(),
+  /** The phone number as people write it in the salon's country, e.g. (970) 555-0148. */
+  phoneText: z.string(),
   timeZone: z.string(),
   currency: z.string(),
   openingHours: z.array(z.string()),

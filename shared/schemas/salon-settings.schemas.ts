@@ -1,9 +1,16 @@
+import { isSupportedCountry } from 'libphonenumber-js';
 import { z } from 'zod';
 import { isKnownZone } from '../engine/local-time';
 import { ClockTimeSchema, HoursListSchema } from './hours-rule.schemas';
-import { PhoneCountrySchema } from './contact.schemas';
 import { WIDENING_FAMILIES } from '../rules/skin-test-need';
 import { LiftPerSittingSchema, ProcessingLimitsSchema } from './planning-rules.schemas';
+
+/** A country phone numbers can be read for: ISO 3166-1 alpha-2, as libphonenumber-js knows them. */
+export const PhoneCountrySchema = z
+  .string()
+  .trim()
+  .toUpperCase()
+  .refine((c) => /^[A-Z]{2}$/.test(c) && isSupportedCountry(c), 'Choose a country');
 
 const whole = (min: number, max: number, what: string) =>
   z

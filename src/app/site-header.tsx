@@ -1,8 +1,13 @@
+import { lazy, Suspense } from 'react';
 import { Link, NavLink, useNavigate } from 'react-router-dom';
 import type { SessionUser } from '@shared/schemas/auth.schemas';
+import { buttonClasses } from '../components/ui/button';
 import { paths } from '../config/paths';
-import { SignOutButton } from '../features/auth/components/sign-out-button';
 import { navLinks } from './nav-links';
+
+// Signing out renews the whole cache (cache-rules.ts, with every contract): loaded only once someone is signed in,
+// so a signed-out visitor's first page does not carry it.
+const SignOutButton = lazy(() => import('../features/auth/components/sign-out-button').then((m) => ({ default: m.SignOutButton })));
 
 type Props = { user: SessionUser | null };
 
@@ -35,7 +40,16 @@ export function SiteHeader({ user }: Props) {
           {user ? (
             <>
               <span className="hidden text-sm sm:inline">{user.name}</span>
-              <SignOutButton onSignedOut={() => navigate(paths.signIn(), { replace: true })} />
+              {/* Its place is kept while it loads, so the header does not jump. */}
+              <Suspense
+                fallback={
+                  <span aria-hidden="true" className={buttonClasses('secondary')}>
+                    Sign out
+                  </span>
+                }
+              >
+                <SignOutButton onSignedOut={() => navigate(paths.signIn(), { replace: true })} />
+              </Suspense>
             </>
           ) : (
             <Link to={paths.signIn()} className="text-link">

@@ -72,7 +72,9 @@ export const paths = {
   desk: (date?: string) => to(pages.desk, {}, { date }),
   deskClient: (id: string) => to(pages.deskClient, { id }),
   outbox: pages.outbox,
-  deskBook: (consultationId?: string) => to(pages.deskBook, {}, { consultation: consultationId }),
+  /** Booking a consultation's saved quote, or a client (a service and stylist they asked for, e.g. from the standby list). */
+  deskBook: (consultationId?: string, start?: { client: string; service?: string; stylist?: string }) =>
+    to(pages.deskBook, {}, { consultation: consultationId, client: start?.client, service: start?.service, stylist: start?.stylist }),
   /** A booking's page; `move` opens its move form for that sitting, with free times from `from` (another day for a late client). */
   deskBooking: (id: string, move?: { sitting: number; from?: string }) =>
     to(pages.deskBooking, { id }, { sitting: move && String(move.sitting), from: move?.from }),

@@ -26,20 +26,6 @@ export function minutesBetween(startIso: string, endIso: string): number {
   return Math.round(DateTime.fromISO(endIso).diff(DateTime.fromISO(startIso), 'minutes').minutes);
 }
 
-/** "Mountain Daylight Time (America/Denver)": the zone's everyday name on that date, and its id. */
-export function zoneLabel(zone: string, date?: string): string {
-  const moment = date ? DateTime.fromISO(date, { zone }).set({ hour: 12 }) : DateTime.now().setZone(zone);
-  return `${moment.offsetNameLong ?? zone} (${zone})`;
-}
-
 export function isPast(iso: string): boolean {
   return DateTime.fromISO(iso) < DateTime.now();
-}
-
-/** "7 h 30 min", "45 min". */
-export function formatMinutes(total: number): string {
-  const hours = Math.floor(total / 60);
-  const minutes = total % 60;
-  if (hours === 0) return `${minutes} min`;
-  return minutes === 0 ? `${hours} h` : `${hours} h ${minutes} min`;
 }

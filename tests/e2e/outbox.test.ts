@@ -32,7 +32,7 @@ it('a booking made at the desk shows its confirmation in the Outbox', async () =
   await page.getByRole('link', { name: 'Outbox (demo)' }).first().click();
   await page.getByRole('heading', { level: 1, name: 'Outbox (demo)' }).waitFor();
   // The send log lists the confirmation at once (queued, then sent by the worker), on each channel Hollis has.
-  const row = page.getByRole('row').filter({ hasText: 'confirmation (e-mail)' }).filter({ hasText: 'Booked: Cut & finish' }).first();
+  const row = page.getByRole('row').filter({ hasText: 'Confirmation (e-mail)' }).filter({ hasText: 'Booked: Cut & finish' }).first();
   // On a busy machine the page may have read the send log a moment before the row was committed: read it again.
   await expect.poll(async () => (await row.count()) > 0 || (await page.reload(), false), { timeout: 60_000, interval: 2000 }).toBe(true);
   expect(await row.textContent()).toMatch(/Queued|Sending|Sent/);

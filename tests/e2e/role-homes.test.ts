@@ -2,7 +2,7 @@ import { AxeBuilder } from '@axe-core/playwright';
 import type { Browser } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO_PASSWORD } from '@server/demo/demo-catalogue';
-import { baseUrl, connectBrowser, screenshot, signInThroughPage } from '../setup/browser';
+import { baseUrl, connectBrowser, screenshot, signInThroughPage, WCAG_TAGS } from '../setup/browser';
 
 let browser: Browser;
 beforeAll(async () => {
@@ -33,7 +33,7 @@ describe('each demo role signs in through the page and lands on its own home', (
           .waitFor(); // occupancy from the engine
       await screenshot(page, `${role.path.slice(1)}-home`, role.path === '/owner' || role.path === '/me');
       // WCAG 2.x A/AA rules through axe-core (Deque), the reference checker for automated accessibility tests.
-      const axe = await new AxeBuilder({ page }).withTags(['wcag2a', 'wcag2aa', 'wcag22aa']).analyze();
+      const axe = await new AxeBuilder({ page }).withTags(WCAG_TAGS).analyze();
       expect(axe.violations.map((v) => `${v.id}: ${v.nodes.length}`)).toEqual([]);
       await context.close();
     });

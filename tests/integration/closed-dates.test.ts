@@ -65,7 +65,10 @@ describe('a closed date saved in Set-up', () => {
     const page = await (await anonymousAgent(t.app)).get(`/api/public/salons/${slug}`);
     expect(page.status).toBe(200);
     expect(page.body.openingHours).toHaveLength(1);
-    expect(page.body.openingHours[0]).toMatch(/^Tuesday to Saturday; closed on .+, 09:00–21:00$/);
+    // The format policy (docs/architecture.md, Formats): times on the 12-hour clock of the salon's locale, phone
+    // numbers as people write them in the salon's country (libphonenumber-js's national form for the US).
+    expect(page.body.openingHours[0]).toMatch(/^Tuesday to Saturday; closed on .+, 9:00 AM – 9:00 PM$/);
+    expect(page.body.phoneText).toBe('(303) 555-0100');
   });
 
   it('offers no free time online on that date, and times on the next open day', async () => {

@@ -41,7 +41,7 @@ describe('public pages', () => {
     expect(page.status).toBe(200);
     // The skill is what a stylist needs to be offered for it (the factory's consultation is colour work).
     expect(page.body.services.find((s: { id: string }) => s.id === consultation)).toMatchObject({ onlineBookable: true, depositCents: 2500, skill: 'colour' });
-    expect(page.body.openingHours[0]).toBe('Tuesday to Saturday, 09:00–21:00');
+    expect(page.body.openingHours[0]).toBe('Tuesday to Saturday, 9:00 AM – 9:00 PM'); // the format policy: the salon locale's clock
     const times = await visitor.get(`/api/public/salons/${slug}/availability?serviceId=${consultation}&from=${tuesday}`);
     expect(times.body.times[0]).toMatchObject({ start: localIso(tuesday, '09:00'), stylistId: ana.staffId });
     expect(JSON.stringify(times.body)).not.toMatch(/client|email|phone/i);

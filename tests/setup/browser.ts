@@ -51,8 +51,11 @@ export async function apiWrite(page: Page, method: 'PUT' | 'POST', path: string,
   return res.status();
 }
 
+/** axe-core's tags for the WCAG 2.0, 2.1 and 2.2 A and AA rules (Deque's rules for automated checks). */
+export const WCAG_TAGS = ['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa', 'wcag22aa'];
+
 /** No serious or critical WCAG 2.x A/AA violations (axe-core, Deque's rules for automated checks). */
 export async function expectAccessible(page: Page): Promise<void> {
-  const result = await new AxeBuilder({ page }).withTags(['wcag2a', 'wcag2aa', 'wcag22aa']).analyze();
+  const result = await new AxeBuilder({ page }).withTags(WCAG_TAGS).analyze();
   expect(result.violations.filter((v) => v.impact === 'serious' || v.impact === 'critical').map((v) => v.id)).toEqual([]);
 }

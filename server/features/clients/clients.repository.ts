@@ -82,6 +82,14 @@ export async function updateClientContact(db: Db, salonId: string, id: string, c
   return result.numUpdatedRows > 0n;
 }
 
+/** Replaces the team's notes on a client of this salon; answers the notes before, or null when no such client. */
+export async function replaceClientNotes(db: Db, salonId: string, id: string, notes: string): Promise<string | null> {
+  const before = await db.selectFrom('clients').select('notes').where('salon_id', '=', salonId).where('id', '=', id).forUpdate().executeTakeFirst();
+  if (!before) return null;
+  await db.updateTable('clients').set({ notes }).where('salon_id', '=', salonId).where('id', '=', id).execute();
+  return before.notes;
+}
+
 /** An inbound STOP (stop = true) or START from this number, for every client with it; their ids. */
 export async function setSmsStopped(db: Db, phone: string, stop: boolean, now: Date): Promise<{ id: string; salonId: string }[]> {
   return db

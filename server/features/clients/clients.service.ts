@@ -11,7 +11,8 @@ import { loadBookingViews } from '../bookings';
 import { findHairHistory } from '../hair-history';
 import { replanClientMessages } from '../messages';
 import { findSalon, salonCountry } from '../salon';
-import { findClient, insertClient, searchClients, updateClientContact } from './clients.repository';
+import { writeAudit } from '../audit';
+import { findClient, insertClient, replaceClientNotes, searchClients, updateClientContact } from './clients.repository';
 
 export async function findClients(db: Db, user: SessionUser, q: string | undefined): Promise<{ clients: ClientSummary[] }> {
   return { clients: await searchClients(db, user.salonId, q) };
@@ -46,4 +47,23 @@ export async function updateClient(db: Db, user: SessionUser, id: string, typed:
   });
   if (!found) throw notFound('That client');
   return { id, name: body.name, email: body.email, phone: body.phone };
+}
+
+/** The team's notes on a client, replaced as a whole and audited (who wrote what, and what was there before). */
+export async function saveClientNotes(db: Db, user: SessionUser, id: string, notes: string): Promise<{ notes: string }> {
+  const saved = notes.trim();
+  await db.transaction().execute(async (trx) => {
+    const before = await replaceClientNotes(trx, user.salonId, id, saved);
+    if (before === null) throw notFound('That client');
+    await writeAudit(trx, {
+      salonId: user.salonId,
+      actorUserId: user.id,
+      entity: 'client',
+      entityId: id,
+      action: 'notes_changed',
+      before: { notes: before },
+      after: { notes: saved },
+    });
+  });
+  return { notes: saved };
 }

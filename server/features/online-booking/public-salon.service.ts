@@ -4,6 +4,9 @@ import { skinTestValidityWords, skinTestWords } from '@shared/rules/skin-test-wo
 import type { Db } from '@server/db/database';
 import type { PublicSalon } from '@shared/schemas/online-booking.schemas';
 import { formatMoney } from '@shared/money/money';
+import { formatClock } from '@shared/format/date-time';
+import { formatFor } from '@shared/format/locale';
+import { formatPhone } from '@shared/format/phone';
 import { todayIn } from '@shared/time/salon-time';
 import { listSalonHours } from '../salon';
 import { listServices, listStylistDetails } from '../services';
@@ -15,16 +18,19 @@ export async function publicSalon(db: Db, slug: string): Promise<PublicSalon> {
   const [hours, services, stylists] = await Promise.all([listSalonHours(db, salon.id), listServices(db, salon.id), listStylistDetails(db, salon.id)]);
   const families = salon.skinTestFamilies;
   const today = todayIn(salon.timeZone, new Date());
+  const format = formatFor(salon.timeZone);
   const deposits = services.filter((s) => s.depositCents > 0).map((s) => `${s.name}: ${formatMoney(s.depositCents, salon.currency)}`);
   return {
     slug: salon.slug,
     name: salon.name,
     address: salon.address,
     phone: salon.phone,
+    // Written here, so the public page needs no phone-number metadata of its own.
+    phoneText: formatPhone(salon.phone, salon.country),
     timeZone: salon.timeZone,
     currency: salon.currency,
     // Each rule in plain words with the day's opening times; closed dates already past are left out.
-    openingHours: hours.map((h) => `${describeHoursRule(h.rrule, today)}, ${h.start}–${h.end}`),
+    openingHours: hours.map((h) => `${describeHoursRule(h.rrule, today)}, ${formatClock(h.start, format)} – ${formatClock(h.end, format)}`),
     policies: {
       deposit: deposits.length
         ? `A deposit secures long colour work and consultations: ${deposits.join('; ')}. It counts towards the price.`

@@ -12,17 +12,14 @@ import { SectionCard } from '@client/components/ui/section-card';
 import { paths } from '@client/config/paths';
 import { catalogueQueries } from '@client/features/catalogue/api/catalogue-queries';
 import { clientQueries } from '@client/features/clients/api/client-queries';
-import { useCreateConsultation, useProposeQuote } from '@client/features/consultations/api/consultation-queries';
+import { consultationQueries, useCreateConsultation, useProposeQuote } from '@client/features/consultations/api/consultation-queries';
 import { ConsultationFields } from '@client/features/consultations/components/consultation-fields';
 import { PhotoPicker } from '@client/features/consultations/components/photo-picker';
 import { ProposalLines, QuoteWarnings } from '@client/features/consultations/components/quote-advice';
 import { QuoteEditor } from '@client/features/consultations/components/quote-editor';
-import {
-  ConsultationFormSchema,
-  emptyConsultation,
-  type ConsultationFormInput,
-  type ConsultationFormValues,
-} from '@client/features/consultations/consultation-form-schema';
+import { ConsultationFormSchema, type ConsultationFormInput, type ConsultationFormValues } from '@client/features/consultations/consultation-form-schema';
+import { consultationStart } from '@client/features/consultations/consultation-start';
+import { hairHistoryQueries } from '@client/features/hair-history/api/hair-history-queries';
 import { salonQueries } from '@client/features/salon/api/salon-queries';
 import { queryClient } from '@client/lib/query-client';
 
@@ -33,9 +30,17 @@ export async function loader({ request }: LoaderFunctionArgs) {
     queryClient.ensureQueryData(clientQueries.detail(clientId!)),
     queryClient.ensureQueryData(catalogueQueries.services()),
     queryClient.ensureQueryData(salonQueries.current()),
+    queryClient.ensureQueryData(consultationQueries.ofClient(clientId!)),
+    queryClient.ensureQueryData(hairHistoryQueries.detail({ clientId: clientId! })),
   ]);
   return null;
 }
+
+const startedFrom = {
+  earlier: 'Started from this client’s last consultation: change what is different today.',
+  hair_history: 'Colour history from the client’s own hair history; look, and type the levels you find.',
+  nothing: 'No earlier consultation or hair history: type what you find.',
+};
 
 /** Record a consultation, see the quote Dwell proposes, edit it, save both. */
 export function Component() {
@@ -45,9 +50,13 @@ export function Component() {
   const { data: client } = useSuspenseQuery(clientQueries.detail(clientId));
   const { data: services } = useSuspenseQuery(catalogueQueries.services());
   const { data: salon } = useSuspenseQuery(salonQueries.current());
+  const { data: earlier } = useSuspenseQuery(consultationQueries.ofClient(clientId));
+  const { data: hair } = useSuspenseQuery(hairHistoryQueries.detail({ clientId }));
+  // The newest consultation comes first.
+  const [start] = useState(() => consultationStart(earlier.consultations[0]?.consultation, hair.answers));
   const form = useForm<ConsultationFormInput, unknown, ConsultationFormValues>({
     resolver: zodResolver(ConsultationFormSchema),
-    defaultValues: emptyConsultation(),
+    defaultValues: start.values,
   });
   const propose = useProposeQuote();
   const create = useCreateConsultation();
@@ -66,6 +75,7 @@ export function Component() {
       <PageHeader title={`Consultation for ${client.name}`} subtitle="Record the hair as you find it; Dwell proposes a quote you can change." />
       <SectionCard title="The hair now">
         <form onSubmit={(e) => void ask(e)} noValidate className="flex flex-col gap-6" aria-label="Consultation">
+          <p className="text-ink/80">{startedFrom[start.from]}</p>
           <ConsultationFields form={form} />
           <PhotoPicker clientId={clientId} control={form.control} />
           {propose.isError && <FormAlert>{propose.error.message}</FormAlert>}

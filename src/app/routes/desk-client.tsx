@@ -1,6 +1,7 @@
 import { useSuspenseQuery } from '@tanstack/react-query';
 import { Link, useParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { IdSchema } from '@shared/schemas/common.schemas';
+import { buttonClasses } from '@client/components/ui/button';
 import { PageHeader } from '@client/components/ui/page-header';
 import { Notice } from '@client/components/ui/notice';
 import { REACTION_CAUTION } from '@shared/schemas/hair-history.schemas';
@@ -33,7 +34,15 @@ export function Component() {
       <Link to={paths.desk()} className="text-link">
         ← Back to the book
       </Link>
-      <PageHeader title={client.name} subtitle={<TimeZoneNote timeZone={salon.timeZone} />} />
+      <PageHeader
+        title={client.name}
+        subtitle={<TimeZoneNote timeZone={salon.timeZone} />}
+        action={
+          <Link to={paths.deskBook(undefined, { client: client.id })} className={buttonClasses('secondary')}>
+            Book for {client.name}
+          </Link>
+        }
+      />
       {client.reportedReaction !== null && (
         <Notice tone="danger" title="This client reported a reaction to hair colour">
           {client.reportedReaction ? `In their hair history: “${client.reportedReaction}”. ` : ''}
@@ -53,7 +62,16 @@ export function Component() {
       <SectionCard title="Consultations and quotes">
         <ClientConsultations clientId={client.id} timeZone={salon.timeZone} currency={salon.currency} />
       </SectionCard>
-      <BookingList bookings={client.bookings} timeZone={salon.timeZone} currency={salon.currency} />
+      <BookingList
+        bookings={client.bookings}
+        timeZone={salon.timeZone}
+        currency={salon.currency}
+        actions={(booking) => (
+          <Link to={paths.deskBooking(booking.id)} className="text-link mt-3 inline-block" aria-label={`Open ${booking.service.name} for ${client.name}`}>
+            Open the booking
+          </Link>
+        )}
+      />
     </div>
   );
 }

@@ -1,6 +1,7 @@
 import { useState } from 'react';
 import { useSuspenseQuery } from '@tanstack/react-query';
 import { Button } from '@client/components/ui/button';
+import { ConfirmRemove } from '@client/components/ui/confirm-remove';
 import { PageHeader } from '@client/components/ui/page-header';
 import { SetupNav } from '@client/features/setup/components/setup-nav';
 import { SectionCard } from '@client/components/ui/section-card';
@@ -9,6 +10,8 @@ import { followUpQueries, useRemoveFollowUpRule } from '@client/features/follow-
 import { FollowUpRuleForm } from '@client/features/follow-ups/components/follow-up-rule-form';
 import { salonQueries } from '@client/features/salon/api/salon-queries';
 import { queryClient } from '@client/lib/query-client';
+import { toastDone } from '@client/lib/toast';
+import { describeFollowUpRule } from '@shared/messages/follow-up-timing';
 
 export async function loader() {
   await Promise.all([
@@ -46,19 +49,16 @@ export function Component() {
                     {r.title} <span className="font-normal">after {r.serviceName}</span>
                   </p>
                   <p className="whitespace-pre-line">{r.text}</p>
-                  <code className="text-sm">{r.rrule}</code>
+                  <p className="text-sm">Sent {describeFollowUpRule(r.rrule) ?? <code title="Calendar rule (RFC 5545)">{r.rrule}</code>}</p>
                   <div className="flex gap-3">
                     <Button variant="secondary" onClick={() => setEditing(r.id)} aria-label={`Edit ${r.title}`}>
                       Edit
                     </Button>
-                    <Button
-                      variant="secondary"
+                    <ConfirmRemove
+                      what={`the rule “${r.title}”`}
                       busy={remove.isPending && remove.variables === r.id}
-                      onClick={() => remove.mutate(r.id)}
-                      aria-label={`Remove ${r.title}`}
-                    >
-                      Remove
-                    </Button>
+                      onRemove={() => remove.mutate(r.id, { onSuccess: () => toastDone(`Removed the rule “${r.title}”.`) })}
+                    />
                   </div>
                 </li>
               ))}

@@ -57,7 +57,7 @@ export function DataTable<T>({ label, rows, columns, filterHint, initialSort = [
           value={filter}
           onChange={(e) => table.setGlobalFilter(e.target.value)}
           placeholder={filterHint}
-          className="min-h-11 rounded-lg border border-ink/40 bg-white px-3"
+          className="min-h-11 rounded-lg border border-edge bg-white px-3"
         />
       </div>
       <p aria-live="polite" className="text-sm text-ink/80">

@@ -25,7 +25,7 @@ export function DateStepper({ date, today, hrefFor, onPick }: Props) {
           type="date"
           value={date}
           onChange={(event) => event.target.value && onPick(event.target.value)}
-          className="min-h-11 rounded-lg border border-ink/40 bg-white px-3 tabular"
+          className="min-h-11 rounded-lg border border-edge bg-white px-3 tabular"
           aria-describedby="date-stepper-long"
         />
       </label>

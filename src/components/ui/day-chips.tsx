@@ -13,7 +13,7 @@ export function DayChips({ days, selected, onSelect }: Props) {
             aria-pressed={day.date === selected}
             aria-label={`${dayLabel(day.date)}, ${day.times.length} free ${day.times.length === 1 ? 'time' : 'times'}`}
             onClick={() => onSelect(day.date)}
-            className="flex min-h-11 min-w-20 flex-col items-center rounded-lg border border-ink/30 bg-white px-3 py-1 text-sm hover:border-ink/60 aria-pressed:border-2 aria-pressed:border-oxide aria-pressed:bg-linen aria-pressed:font-bold"
+            className="flex min-h-11 min-w-20 flex-col items-center rounded-lg border border-edge bg-white px-3 py-1 text-sm hover:border-ink aria-pressed:border-2 aria-pressed:border-oxide aria-pressed:bg-linen aria-pressed:font-bold"
           >
             <span>{shortDayLabel(day.date)}</span>
             <span className="text-xs text-ink/80 tabular">{day.times.length} free</span>

@@ -12,7 +12,7 @@ export function FreeTimeButton({ time, timeZone, selectedKey, onSelect, showStyl
       aria-pressed={freeTimeKey(time) === selectedKey}
       aria-label={freeTimeLabel(time, timeZone)}
       onClick={() => onSelect(time)}
-      className="flex min-h-11 w-full flex-col items-center justify-center rounded-lg border border-ink/30 bg-white px-2 py-1 hover:border-ink/60 aria-pressed:border-2 aria-pressed:border-oxide aria-pressed:bg-linen aria-pressed:font-bold"
+      className="flex min-h-11 w-full flex-col items-center justify-center rounded-lg border border-edge bg-white px-2 py-1 hover:border-ink aria-pressed:border-2 aria-pressed:border-oxide aria-pressed:bg-linen aria-pressed:font-bold"
     >
       <span className="tabular">{formatTime(time.start, formatFor(timeZone))}</span>
       {showStylist && <span className="text-xs">{time.stylistName}</span>}

@@ -1,6 +1,5 @@
 import { useId, type ReactNode } from 'react';
-import { zoneLabel } from '@client/lib/time';
-import { formatDate, formatTime } from '@shared/format/date-time';
+import { formatDate, formatTime, formatZone } from '@shared/format/date-time';
 import { formatFor } from '@shared/format/locale';
 
 type Props = {
@@ -35,7 +34,7 @@ export function LinkCard({ salonName, title, visit, facts, children }: Props) {
         <dt className="font-bold">When</dt>
         <dd>
           {formatDate(visit.start, ctx, { width: 'short' })}, <span className="tabular">{formatTime(visit.start, ctx)}</span>
-          <span className="block text-sm text-ink/80">Salon time: {zoneLabel(visit.timeZone, visit.start.slice(0, 10))}</span>
+          <span className="block text-sm text-ink/80">Salon time: {formatZone(ctx, visit.start.slice(0, 10))}</span>
         </dd>
         {facts}
       </dl>

@@ -13,7 +13,7 @@ export function TextAreaField({ label, error, hint, id, className = '', rows = 3
   return (
     <FieldFrame id={id} label={label} hint={hint} error={error} className={className}>
       {(control) => (
-        <textarea {...control} rows={rows} className="rounded-lg border border-ink/40 bg-white px-3 py-2 text-base aria-invalid:border-brick" {...rest} />
+        <textarea {...control} rows={rows} className="rounded-lg border border-edge bg-white px-3 py-2 text-base aria-invalid:border-brick" {...rest} />
       )}
     </FieldFrame>
   );

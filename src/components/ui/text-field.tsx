@@ -12,9 +12,7 @@ type Props = InputHTMLAttributes<HTMLInputElement> & {
 export function TextField({ label, error, hint, id, className = '', ...rest }: Props) {
   return (
     <FieldFrame id={id} label={label} hint={hint} error={error} className={className}>
-      {(control) => (
-        <input {...control} className="min-h-11 rounded-lg border border-ink/40 bg-white px-3 py-2 text-base aria-invalid:border-brick" {...rest} />
-      )}
+      {(control) => <input {...control} className="min-h-11 rounded-lg border border-edge bg-white px-3 py-2 text-base aria-invalid:border-brick" {...rest} />}
     </FieldFrame>
   );
 }

@@ -5,21 +5,3 @@ import { CreateConsultationSchema } from '@shared/schemas/consultation.schemas';
 export const ConsultationFormSchema = CreateConsultationSchema.pick({ consultation: true, photoIds: true });
 export type ConsultationFormInput = z.input<typeof ConsultationFormSchema>;
 export type ConsultationFormValues = z.output<typeof ConsultationFormSchema>;
-
-export const emptyConsultation = (): ConsultationFormValues => ({
-  consultation: {
-    currentLevel: 5,
-    targetLevel: 5,
-    history: { natural: true, permanent: false, directDye: false, boxDye: false, henna: false, previousLightening: false },
-    length: 'medium',
-    density: 'medium',
-    elasticity: 'good',
-    porosity: 'normal',
-    conditionNotes: '',
-    strandTest: 'none',
-    wantsCut: false,
-    vivid: false,
-    notes: '',
-  },
-  photoIds: [],
-});

@@ -158,6 +158,7 @@ export const expectedAccess: Record<string, Expectation> = {
   // Messages: the desk edits a card's contact preferences; a client their own; the provider's webhook is
   // public but checks the provider's signature.
   'PATCH /api/clients/{id}': { allow: DESK, own: true },
+  'PUT /api/clients/{id}/notes': { allow: STAFF, own: true },
   'GET /api/me/preferences': { allow: ['client'] },
   'PUT /api/me/preferences': { allow: ['client'] },
   'POST /webhooks/sms': { allow: 'anyone' },

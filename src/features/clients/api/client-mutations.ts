@@ -31,3 +31,12 @@ export function useUpdateClient(id: string) {
     onSuccess: () => clientChanged(queryClient, id),
   });
 }
+
+/** Saves the team's notes on a client; the card is read again. */
+export function useSaveClientNotes(id: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (notes: string) => callApi(clientsApi.notes, { params: { id }, body: { notes } }),
+    onSuccess: () => clientChanged(queryClient, id),
+  });
+}

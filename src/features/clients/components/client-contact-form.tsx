@@ -9,6 +9,7 @@ import { TextField } from '@client/components/ui/text-field';
 import { showServerErrors } from '@client/lib/form-errors';
 import { useUpdateClient } from '../api/client-mutations';
 import { MessagePreferenceFields } from './message-preference-fields';
+import { usePhoneText } from '../../salon';
 
 type Input = z.input<typeof UpdateClientSchema>;
 type Values = z.output<typeof UpdateClientSchema>;
@@ -16,10 +17,11 @@ type Values = z.output<typeof UpdateClientSchema>;
 /** The desk edits how to reach a client and how they want to hear from the salon. */
 export function ClientContactForm({ client }: { client: ClientDetail }) {
   const update = useUpdateClient(client.id);
+  const phoneText = usePhoneText();
   const initial: Input = {
     name: client.name,
     email: client.email ?? '',
-    phone: client.phone ?? '',
+    phone: client.phone ? phoneText(client.phone) : '',
     messageChannel: client.messageChannel,
     marketingOptIn: client.marketingOptIn,
   };
@@ -30,7 +32,7 @@ export function ClientContactForm({ client }: { client: ClientDetail }) {
   const { errors } = formState;
   const save = handleSubmit((body) =>
     update.mutateAsync(body).then(
-      (saved) => reset({ ...body, email: saved.email ?? '', phone: saved.phone ?? '' }),
+      (saved) => reset({ ...body, email: saved.email ?? '', phone: saved.phone ? phoneText(saved.phone) : '' }),
       (error) => showServerErrors(error, setError, ['name', 'email', 'phone', 'messageChannel']),
     ),
   );
@@ -44,7 +46,7 @@ export function ClientContactForm({ client }: { client: ClientDetail }) {
           label="Mobile"
           type="tel"
           autoComplete="off"
-          hint="Any format; saved as +1 970 555 0142"
+          hint="Any format, e.g. (970) 555-0142, or with its country code"
           error={errors.phone?.message}
           {...register('phone')}
         />

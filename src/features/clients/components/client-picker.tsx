@@ -46,7 +46,7 @@ export function ClientPicker({ value, onChange, error }: Props) {
         autoComplete="off"
         aria-invalid={error ? true : undefined}
         aria-describedby={error ? `${inputId}-error` : undefined}
-        className="min-h-11 rounded-lg border border-ink/40 bg-white px-3 aria-invalid:border-brick"
+        className="min-h-11 rounded-lg border border-edge bg-white px-3 aria-invalid:border-brick"
       />
       {error && (
         <p id={`${inputId}-error`} className="text-sm font-bold text-brick">

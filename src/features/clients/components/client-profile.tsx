@@ -1,6 +1,7 @@
 import type { ClientDetail } from '@shared/schemas/client.schemas';
 import { SectionCard } from '@client/components/ui/section-card';
 import { ClientContactForm } from './client-contact-form';
+import { ClientNotesForm } from './client-notes-form';
 import { HairHistorySummary } from '@client/features/hair-history';
 import { PhotoGallery } from '@client/features/photos';
 
@@ -14,10 +15,8 @@ export function ClientProfile({ client }: Props) {
         <ClientContactForm client={client} />
       </SectionCard>
       <SectionCard title="Notes">
-        <dl className="grid gap-x-6 gap-y-2 sm:grid-cols-[max-content_1fr]">
-          <dt className="font-bold">Notes</dt>
-          <dd className="whitespace-pre-line">{client.notes || 'No notes yet.'}</dd>
-        </dl>
+        {/* Keyed by the saved text: the form starts again from what another screen saved meanwhile. */}
+        <ClientNotesForm key={client.notes} clientId={client.id} notes={client.notes} />
       </SectionCard>
       <SectionCard title="Hair history">
         <HairHistorySummary clientId={client.id} />

@@ -26,7 +26,7 @@ export function ClientSearch() {
         onChange={(event) => setText(event.target.value)}
         placeholder="Name, e-mail or phone"
         autoComplete="off"
-        className="min-h-11 rounded-lg border border-ink/40 bg-white px-3"
+        className="min-h-11 rounded-lg border border-edge bg-white px-3"
       />
       <div aria-live="polite" className="text-sm text-ink/80">
         {q.length >= 2 && !results.isFetching && `${clients.length} ${clients.length === 1 ? 'client' : 'clients'} found`}

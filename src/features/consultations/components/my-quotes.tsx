@@ -1,8 +1,8 @@
+import { formatDuration } from '@shared/format/date-time';
 import { useQuery } from '@tanstack/react-query';
 import { Button } from '@client/components/ui/button';
 import { FormAlert } from '@client/components/ui/form-alert';
 import { sittingMaxMinutes } from '@shared/schemas/step-plan.schemas';
-import { formatMinutes } from '@client/lib/time';
 import { myQuoteQueries, useAcceptQuote } from '../api/consultation-queries';
 import { formatMoney } from '@shared/money/money';
 
@@ -23,7 +23,7 @@ export function MyQuotes({ currency }: { currency: string }) {
           <ol className="list-decimal pl-5">
             {q.stepPlan.sittings.map((s, i) => (
               <li key={i}>
-                Up to {formatMinutes(sittingMaxMinutes(q.stepPlan)[i]!)}
+                Up to {formatDuration(sittingMaxMinutes(q.stepPlan)[i]!)}
                 {s.daysAfterPrevious && `, ${s.daysAfterPrevious.min}–${s.daysAfterPrevious.max} days after the previous sitting`}:{' '}
                 {s.steps.map((st) => st.label).join(', ')}
               </li>

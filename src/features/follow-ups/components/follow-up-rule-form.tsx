@@ -11,6 +11,8 @@ import { TextField } from '@client/components/ui/text-field';
 import { showServerErrors } from '@client/lib/form-errors';
 import { useSaveFollowUpRule } from '../api/follow-up-queries';
 import { FollowUpPreview } from './follow-up-preview';
+import { FollowUpTimingFields } from './follow-up-timing-fields';
+import { readFollowUpTiming } from '@shared/messages/follow-up-timing';
 
 type Input = z.input<typeof FollowUpRuleBodySchema>;
 type Values = z.output<typeof FollowUpRuleBodySchema>;
@@ -21,7 +23,7 @@ export function FollowUpRuleForm({ rule, services, timeZone, onDone }: Props) {
   const save = useSaveFollowUpRule(rule?.id ?? null);
   const colour = services.filter((s) => s.category === 'colour');
   const options = (colour.length > 0 ? colour : services).map((s) => ({ value: s.id, label: s.name }));
-  const { register, control, handleSubmit, setError, formState } = useForm<Input, unknown, Values>({
+  const { register, control, handleSubmit, setError, setValue, formState } = useForm<Input, unknown, Values>({
     resolver: zodResolver(FollowUpRuleBodySchema),
     defaultValues: rule
       ? { serviceId: rule.serviceId, title: rule.title, text: rule.text, rrule: rule.rrule }
@@ -43,12 +45,16 @@ export function FollowUpRuleForm({ rule, services, timeZone, onDone }: Props) {
         error={errors.text?.message}
         {...register('text')}
       />
-      <TextField
-        label="When it is sent"
-        hint="Counted from the end of the last sitting, written as a calendar rule (iCalendar RRULE, RFC 5545): FREQ=WEEKLY;INTERVAL=6;COUNT=1 is once, six weeks later."
-        error={errors.rrule?.message}
-        {...register('rrule')}
-      />
+      <FollowUpTimingFields rrule={rrule ?? ''} onChange={(next) => setValue('rrule', next, { shouldDirty: true, shouldValidate: formState.isSubmitted })} />
+      <details open={Boolean(errors.rrule) || readFollowUpTiming(rrule ?? '') === null} className="text-sm">
+        <summary className="min-h-11 cursor-pointer py-2 font-bold">For experts: the timing as calendar text</summary>
+        <TextField
+          label="Calendar rule"
+          hint="Written by the fields above. For other patterns, an iCalendar RRULE (RFC 5545): FREQ=WEEKLY;INTERVAL=6;COUNT=1 is once, six weeks later."
+          error={errors.rrule?.message}
+          {...register('rrule')}
+        />
+      </details>
       <FollowUpPreview rrule={rrule ?? ''} timeZone={timeZone} now={new Date()} />
       <div className="flex gap-3">
         <Button type="submit" busy={save.isPending}>

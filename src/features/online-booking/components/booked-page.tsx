@@ -7,14 +7,15 @@ import type { BookingView } from '@shared/schemas/booking-view.schemas';
 import type { Salon } from '@shared/schemas/salon.schemas';
 import { buttonClasses } from '@client/components/ui/button';
 import { paths } from '@client/config/paths';
-import { zoneLabel } from '@client/lib/time';
-import { formatDate, formatRange } from '@shared/format/date-time';
+import { formatDate, formatRange, formatZone } from '@shared/format/date-time';
 import { formatFor } from '@shared/format/locale';
+import { telHref } from '@shared/format/dial';
+import { formatPhone } from '@shared/format/phone';
 import { onlineBookingQueries } from '../api/online-booking-queries';
 import { confirmationWords } from '../confirmation-words';
 import { formatMoney } from '@shared/money/money';
 
-type Props = { booking: BookingView; salon: Pick<Salon, 'name' | 'address' | 'phone' | 'timeZone' | 'currency' | 'skinTestLeadHours'> };
+type Props = { booking: BookingView; salon: Pick<Salon, 'name' | 'address' | 'phone' | 'country' | 'timeZone' | 'currency' | 'skinTestLeadHours'> };
 
 /** The end of the online flow: what is booked, when (salon time), where, what to bring, and the calendar file. */
 export function BookedPage({ booking, salon }: Props) {
@@ -48,7 +49,7 @@ export function BookedPage({ booking, salon }: Props) {
             <dd>
               {formatDate(first.start, formatFor(salon.timeZone), { width: 'short' })},{' '}
               <span className="tabular">{formatRange(first.start, first.end, formatFor(salon.timeZone))}</span>
-              <span className="block text-sm text-ink/80">Salon time: {zoneLabel(salon.timeZone, first.start.slice(0, 10))}</span>
+              <span className="block text-sm text-ink/80">Salon time: {formatZone(formatFor(salon.timeZone), first.start.slice(0, 10))}</span>
             </dd>
           </>
         )}
@@ -56,8 +57,8 @@ export function BookedPage({ booking, salon }: Props) {
         <dd>
           {salon.address}
           <span className="block text-sm">
-            <a href={`tel:${salon.phone}`} className="text-link">
-              {salon.phone}
+            <a href={telHref(salon.phone)} className="text-link">
+              {formatPhone(salon.phone, salon.country)}
             </a>
           </span>
         </dd>

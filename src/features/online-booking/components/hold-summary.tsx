@@ -1,7 +1,6 @@
 import type { ReactNode } from 'react';
 import type { Hold } from '@shared/schemas/online-booking.schemas';
-import { zoneLabel } from '@client/lib/time';
-import { formatDate, formatRange } from '@shared/format/date-time';
+import { formatDate, formatRange, formatZone } from '@shared/format/date-time';
 import { formatFor } from '@shared/format/locale';
 import { HoldCountdown } from './hold-countdown';
 import { formatMoney } from '@shared/money/money';
@@ -20,7 +19,7 @@ export function HoldSummary({ hold, onExpire, action }: Props) {
         {formatDate(hold.start, formatFor(hold.timeZone), { width: 'short' })},{' '}
         <span className="tabular">{formatRange(hold.start, hold.end, formatFor(hold.timeZone))}</span>
       </p>
-      <p className="text-sm text-ink/80">Salon time: {zoneLabel(hold.timeZone, hold.start.slice(0, 10))}</p>
+      <p className="text-sm text-ink/80">Salon time: {formatZone(formatFor(hold.timeZone), hold.start.slice(0, 10))}</p>
       {hold.depositCents > 0 && <p className="text-sm tabular">Deposit {formatMoney(hold.depositCents, hold.currency)}</p>}
       {hold.status === 'held' && hold.heldUntil && <HoldCountdown heldUntil={hold.heldUntil} onExpire={onExpire} />}
       {action}

@@ -1,13 +1,14 @@
 import type { Photo } from '@shared/schemas/photo.schemas';
-import { Button } from '@client/components/ui/button';
+import { ConfirmRemove } from '@client/components/ui/confirm-remove';
 import { FormAlert } from '@client/components/ui/form-alert';
 import { formatDate } from '@shared/format/date-time';
 import { deviceFormat } from '@client/lib/time';
+import { toastDone } from '@client/lib/toast';
 import { useRemovePhoto } from '../api/photo-mutations';
 
 type Props = { photos: Photo[]; label: string };
 
-/** Thumbnails loaded through the authorised photo route, each with a remove button. */
+/** Thumbnails loaded through the authorised photo route, each with a remove button that asks first (a photo cannot come back). */
 export function PhotoThumbnails({ photos, label }: Props) {
   const remove = useRemovePhoto();
   if (photos.length === 0) return <p className="text-ink/80">No photos yet.</p>;
@@ -22,14 +23,11 @@ export function PhotoThumbnails({ photos, label }: Props) {
               <a href={photo.url} target="_blank" rel="noreferrer" className="block overflow-hidden rounded-lg ring-1 ring-ink/10">
                 <img src={photo.url} alt={name} width={photo.width} height={photo.height} loading="lazy" className="aspect-square w-full object-cover" />
               </a>
-              <Button
-                variant="quiet"
+              <ConfirmRemove
+                what={name}
                 busy={remove.isPending && remove.variables === photo.id}
-                onClick={() => remove.mutate(photo.id)}
-                aria-label={`Remove ${name}`}
-              >
-                Remove
-              </Button>
+                onRemove={() => remove.mutate(photo.id, { onSuccess: () => toastDone('Photo removed.') })}
+              />
             </li>
           );
         })}

@@ -56,7 +56,7 @@ export function PhotoUploader({ kind, bookingId, owner = 'me', label = kindLabel
           disabled={upload.isPending}
           aria-describedby={`${inputId}-hint`}
           onChange={onPick}
-          className="min-h-11 rounded-lg border border-ink/40 bg-white p-2 text-base file:mr-3 file:rounded-md file:border-0 file:bg-linen file:px-3 file:py-2 file:font-bold"
+          className="min-h-11 rounded-lg border border-edge bg-white p-2 text-base file:mr-3 file:rounded-md file:border-0 file:bg-linen file:px-3 file:py-2 file:font-bold"
         />
       </div>
       {upload.isPending && (

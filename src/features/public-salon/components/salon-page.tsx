@@ -1,6 +1,8 @@
+import { formatZone } from '@shared/format/date-time';
+import { formatFor } from '@shared/format/locale';
+import { telHref } from '@shared/format/dial';
 import type { PublicSalon } from '@shared/schemas/online-booking.schemas';
 import { SectionCard } from '@client/components/ui/section-card';
-import { zoneLabel } from '@client/lib/time';
 import { SalonPolicies } from './salon-policies';
 import { ServiceCard } from './service-card';
 
@@ -14,8 +16,8 @@ export function SalonPage({ salon }: Props) {
         <h1 className="text-3xl font-extrabold tracking-tight">{salon.name}</h1>
         <p className="mt-1">{salon.address}</p>
         <p>
-          <a href={`tel:${salon.phone}`} className="text-link">
-            {salon.phone}
+          <a href={telHref(salon.phone)} className="text-link">
+            {salon.phoneText}
           </a>
         </p>
       </div>
@@ -25,7 +27,7 @@ export function SalonPage({ salon }: Props) {
             Services
           </h2>
           {salon.services.map((service) => (
-            <ServiceCard key={service.id} service={service} slug={salon.slug} currency={salon.currency} phone={salon.phone} />
+            <ServiceCard key={service.id} service={service} slug={salon.slug} currency={salon.currency} phone={salon.phone} phoneText={salon.phoneText} />
           ))}
         </section>
         <div className="flex flex-col gap-4">
@@ -35,7 +37,7 @@ export function SalonPage({ salon }: Props) {
                 <li key={line}>{line}</li>
               ))}
             </ul>
-            <p className="mt-2 text-sm text-ink/80">Salon time: {zoneLabel(salon.timeZone)}</p>
+            <p className="mt-2 text-sm text-ink/80">Salon time: {formatZone(formatFor(salon.timeZone))}</p>
           </SectionCard>
           <SalonPolicies policies={salon.policies} />
           <SectionCard title="Stylists">

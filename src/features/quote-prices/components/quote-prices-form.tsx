@@ -5,6 +5,7 @@ import { Button } from '@client/components/ui/button';
 import { FormAlert } from '@client/components/ui/form-alert';
 import { TextField } from '@client/components/ui/text-field';
 import { fieldError, showServerErrors } from '@client/lib/form-errors';
+import { toastDone } from '@client/lib/toast';
 import { MoneyField } from '@client/components/ui/money-field';
 import { CostedProductSchema } from '@shared/schemas/mix-log.schemas';
 import { costedProductLabels } from '@client/features/mix-log';
@@ -15,11 +16,15 @@ export function QuotePricesForm({ initial, currency }: { initial: QuotePrices; c
   const save = useSaveQuotePrices();
   const { register, control, handleSubmit, setError, formState } = useForm<QuotePrices>({ resolver: zodResolver(QuotePricesSchema), defaultValues: initial });
   const err = (path: string) => fieldError(formState.errors, path);
-  const submit = handleSubmit((body) => save.mutateAsync(body).catch((e) => showServerErrors(e, setError, ['correctionCentsPerHour'])));
+  const submit = handleSubmit((body) =>
+    save.mutateAsync(body).then(
+      () => toastDone('Prices saved. New quotes and mix-log estimates use them.'),
+      (e) => showServerErrors(e, setError, ['correctionCentsPerHour']),
+    ),
+  );
   return (
     <form onSubmit={(e) => void submit(e)} noValidate aria-label="Quote prices" className="flex flex-col gap-4">
       {formState.errors.root?.server && <FormAlert>{formState.errors.root.server.message}</FormAlert>}
-      {save.isSuccess && <FormAlert tone="success">Prices saved. New quotes and mix-log estimates use them.</FormAlert>}
       <MoneyField
         control={control}
         name="correctionCentsPerHour"

@@ -1,5 +1,7 @@
 import type { Salon } from '@shared/schemas/salon.schemas';
 import { SectionCard } from '@client/components/ui/section-card';
+import { telHref } from '@shared/format/dial';
+import { formatPhone } from '@shared/format/phone';
 
 type Props = { salon: Salon };
 
@@ -10,8 +12,8 @@ export function SalonCard({ salon }: Props) {
       <address className="not-italic">
         <p>{salon.address}</p>
         <p>
-          <a href={`tel:${salon.phone}`} className="text-link">
-            {salon.phone}
+          <a href={telHref(salon.phone)} className="text-link">
+            {formatPhone(salon.phone, salon.country)}
           </a>
         </p>
       </address>

@@ -1,3 +1,5 @@
+import { formatDate } from '@shared/format/date-time';
+import { zonelessFormat } from '@shared/format/locale';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
@@ -26,7 +28,7 @@ export function OutOfServiceForm({ kind, unit, timeZone, onDone }: Props) {
     take.mutateAsync({ kind, id: unit.id, body: checked }).then(
       (res) =>
         onDone(
-          `${unit.name} is out of service from ${checked.from} to ${checked.to}.${res.bookings.length ? ` ${res.bookings.length} future bookings still use it: move them from the book.` : ''}`,
+          `${unit.name} is out of service from ${formatDate(checked.from, zonelessFormat)} to ${formatDate(checked.to, zonelessFormat)}.${res.bookings.length ? ` ${res.bookings.length} future bookings still use it: move them from the book.` : ''}`,
         ),
       (error) => showServerErrors(error, form.setError, ['from', 'to', 'reason']),
     );

@@ -1,6 +1,5 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { getCountries } from 'libphonenumber-js';
-import { useState } from 'react';
 import { Controller, FormProvider, useForm } from 'react-hook-form';
 import { SalonSettingsSchema, type SalonSettings, type SalonSettingsInput } from '@shared/schemas/salon-settings.schemas';
 import { countryName } from '@shared/schemas/contact.schemas';
@@ -10,6 +9,7 @@ import { SectionCard } from '@client/components/ui/section-card';
 import { SelectField } from '@client/components/ui/select-field';
 import { TextField } from '@client/components/ui/text-field';
 import { fieldError, showServerErrors } from '@client/lib/form-errors';
+import { toastDone } from '@client/lib/toast';
 import { useSaveSalonSettings } from '../api/setup-mutations';
 import { HoursLines } from './hours-lines';
 import { SkinTestFamiliesField } from './skin-test-families-field';
@@ -55,26 +55,24 @@ const fieldNames = [
 /** Everything about how the salon works, in one form checked by the same schema as the server. */
 export function SalonSettingsForm({ settings }: { settings: SalonSettings }) {
   const save = useSaveSalonSettings();
-  const [saved, setSaved] = useState(false);
   const form = useForm<SalonSettingsInput, unknown, SalonSettings>({ resolver: zodResolver(SalonSettingsSchema), defaultValues: settings });
   const { errors } = form.formState;
   const err = (name: string) => fieldError(errors, name);
   const num = { valueAsNumber: true } as const;
-  const submit = form.handleSubmit((body) => {
-    setSaved(false);
-    return save.mutateAsync(body).then(
+  const submit = form.handleSubmit((body) =>
+    save.mutateAsync(body).then(
       (next) => {
         form.reset(next);
-        setSaved(true);
+        // A toast, beside the Save button at the foot of a long form, rather than a note at its top.
+        toastDone('The salon settings are saved. New bookings follow them from now on.');
       },
       (error) => showServerErrors(error, form.setError, fieldNames),
-    );
-  });
+    ),
+  );
   const zone = form.watch('timeZone');
   return (
     <FormProvider {...form}>
       <form aria-label="Salon settings" noValidate onSubmit={submit} className="flex flex-col gap-6">
-        {saved && <FormAlert tone="success">The salon settings are saved. New bookings follow them from now on.</FormAlert>}
         {errors.root?.server && <FormAlert>{errors.root.server.message}</FormAlert>}
         <SectionCard title="The salon">
           <div className="grid gap-4 md:grid-cols-2">

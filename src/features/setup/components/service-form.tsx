@@ -12,6 +12,7 @@ import { TextField } from '@client/components/ui/text-field';
 import { TextAreaField } from '@client/components/ui/text-area-field';
 import { paths } from '@client/config/paths';
 import { fieldError, showServerErrors } from '@client/lib/form-errors';
+import { toastDone } from '@client/lib/toast';
 import { StepPlanEditor } from '@client/features/bookings';
 import { typicalMinutesNotes, useTypicalMinutes } from '@client/features/typical-minutes';
 import { useRetireService, useSaveService } from '../api/setup-mutations';
@@ -52,7 +53,10 @@ export function ServiceForm({ id, initial, skills, currency, active, families }:
   );
   const submit = form.handleSubmit((body) =>
     save.mutateAsync({ id, body }).then(
-      () => navigate(paths.ownerSetupServices),
+      (saved) => {
+        toastDone(`${saved.name} is saved.`);
+        navigate(paths.ownerSetupServices);
+      },
       (error) => showServerErrors(error, form.setError, fieldNames),
     ),
   );
@@ -130,7 +134,18 @@ export function ServiceForm({ id, initial, skills, currency, active, families }:
             {id ? 'Save the service' : 'Add the service'}
           </Button>
           {id && active && (
-            <Button variant="secondary" busy={retire.isPending} onClick={() => retire.mutate(id, { onSuccess: () => navigate(paths.ownerSetupServices) })}>
+            <Button
+              variant="secondary"
+              busy={retire.isPending}
+              onClick={() =>
+                retire.mutate(id, {
+                  onSuccess: () => {
+                    toastDone('Taken off the menu. Bookings already made keep it.');
+                    navigate(paths.ownerSetupServices);
+                  },
+                })
+              }
+            >
               Take off the menu
             </Button>
           )}

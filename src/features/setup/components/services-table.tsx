@@ -1,3 +1,4 @@
+import { formatDuration } from '@shared/format/date-time';
 import { createColumnHelper } from '@tanstack/react-table';
 import { Link } from 'react-router-dom';
 import { sittingMaxMinutes, type ProductFamily } from '@shared/schemas/step-plan.schemas';
@@ -5,7 +6,6 @@ import { planNeedsSkinTest } from '@shared/rules/skin-test-need';
 import type { SetupService } from '@shared/schemas/setup.schemas';
 import { DataTable } from '@client/components/ui/data-table';
 import { paths } from '@client/config/paths';
-import { formatMinutes } from '@client/lib/time';
 import { formatMoney } from '@shared/money/money';
 
 const col = createColumnHelper<SetupService>();
@@ -24,7 +24,7 @@ const columns = (currency: string, families: readonly ProductFamily[]) => [
   col.accessor((s) => sittingMaxMinutes(s.stepPlan).reduce((a, b) => a + b, 0), {
     id: 'chairTime',
     header: 'Chair time (most)',
-    cell: (c) => `${c.row.original.stepPlan.sittings.length > 1 ? `${c.row.original.stepPlan.sittings.length} sittings, ` : ''}${formatMinutes(c.getValue())}`,
+    cell: (c) => `${c.row.original.stepPlan.sittings.length > 1 ? `${c.row.original.stepPlan.sittings.length} sittings, ` : ''}${formatDuration(c.getValue())}`,
   }),
   col.accessor('priceCents', { header: 'Price', cell: (c) => `${c.row.original.priceIsFrom ? 'from ' : ''}${formatMoney(c.getValue(), currency)}` }),
   col.accessor('depositCents', {

@@ -2,9 +2,11 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
 import { TimeOffInputSchema, type StaffMember, type TimeOffInput } from '@shared/schemas/setup.schemas';
 import { Button } from '@client/components/ui/button';
+import { ConfirmRemove } from '@client/components/ui/confirm-remove';
 import { FormAlert } from '@client/components/ui/form-alert';
 import { TextField } from '@client/components/ui/text-field';
 import { showServerErrors } from '@client/lib/form-errors';
+import { toastDone } from '@client/lib/toast';
 import { formatDate } from '@shared/format/date-time';
 import { formatFor } from '@shared/format/locale';
 import { useAddTimeOff, useRemoveTimeOff } from '../api/setup-mutations';
@@ -25,18 +27,26 @@ export function TimeOffPanel({ member, timeZone }: { member: StaffMember; timeZo
   const lastDay = (iso: string) => formatDate(new Date(new Date(iso).getTime() - 60_000).toISOString(), formatFor(timeZone), { width: 'short' });
   return (
     <div className="flex flex-col gap-3">
+      {remove.isError && <FormAlert>{remove.error.message}</FormAlert>}
       {member.timeOff.length === 0 ? (
         <p>No time off ahead.</p>
       ) : (
         <ul aria-label={`Time off of ${member.details.name}`} className="flex flex-col gap-2">
-          {member.timeOff.map((t) => (
-            <li key={t.id} className="flex flex-wrap items-center gap-3">
-              {formatDate(t.start, formatFor(timeZone), { width: 'short' })} – {lastDay(t.end)} {t.reason && `· ${t.reason}`}
-              <Button variant="quiet" onClick={() => remove.mutate({ id: member.id, entryId: t.id })}>
-                Remove
-              </Button>
-            </li>
-          ))}
+          {member.timeOff.map((t) => {
+            const days = `${formatDate(t.start, formatFor(timeZone), { width: 'short' })} – ${lastDay(t.end)}`;
+            return (
+              <li key={t.id} className="flex flex-wrap items-center gap-3">
+                {days} {t.reason && `· ${t.reason}`}
+                <ConfirmRemove
+                  what={`${member.details.name}'s time off ${days}`}
+                  busy={remove.isPending && remove.variables?.entryId === t.id}
+                  onRemove={() =>
+                    remove.mutate({ id: member.id, entryId: t.id }, { onSuccess: () => toastDone(`Removed ${member.details.name}'s time off ${days}.`) })
+                  }
+                />
+              </li>
+            );
+          })}
         </ul>
       )}
       <form aria-label={`Add time off for ${member.details.name}`} noValidate onSubmit={submit} className="flex flex-wrap items-end gap-3">

@@ -13,14 +13,15 @@ import { zonelessFormat } from '@shared/format/locale';
 const dayNames: Record<(typeof WEEKDAY_CODES)[number], string> = { MO: 'Mon', TU: 'Tue', WE: 'Wed', TH: 'Thu', FR: 'Fri', SA: 'Sat', SU: 'Sun' };
 const shortDate = (date: string) => formatDate(date, zonelessFormat, { width: 'short' });
 
-type Props = { path: string; number: number; timeZone: string; onRemove?: () => void };
+/** `sharedDays`: weekdays this line has that another line has too (both lines' hours count on them). */
+type Props = { path: string; number: number; timeZone: string; sharedDays?: readonly string[]; onRemove?: () => void };
 
 /**
  * One line of hours: which days (weekdays, every other week, closed dates) and from when to when.
  * The day picker writes the RFC 5545 text below it, which can also be edited by hand; the preview lists
  * the next dates the text falls on.
  */
-export function WeeklyRuleLine({ path, number, timeZone, onRemove }: Props) {
+export function WeeklyRuleLine({ path, number, timeZone, sharedDays = [], onRemove }: Props) {
   const { register, watch, setValue, formState } = useFormContext();
   const text: string = watch(`${path}.rrule`) ?? '';
   const rule = readWeeklyRule(text);
@@ -51,7 +52,7 @@ export function WeeklyRuleLine({ path, number, timeZone, onRemove }: Props) {
                   type="button"
                   aria-pressed={on}
                   onClick={() => write({ ...shown, weekdays: on ? shown.weekdays.filter((d) => d !== code) : [...shown.weekdays, code] })}
-                  className="min-h-11 min-w-14 rounded-lg border border-ink/30 bg-white px-3 hover:border-ink/60 aria-pressed:border-2 aria-pressed:border-oxide aria-pressed:bg-linen aria-pressed:font-bold"
+                  className="min-h-11 min-w-14 rounded-lg border border-edge bg-white px-3 hover:border-ink aria-pressed:border-2 aria-pressed:border-oxide aria-pressed:bg-linen aria-pressed:font-bold"
                 >
                   {dayNames[code]}
                 </button>
@@ -134,15 +135,25 @@ export function WeeklyRuleLine({ path, number, timeZone, onRemove }: Props) {
           {...register(`${path}.end`)}
         />
       </div>
-      <TextAreaField
-        label="Days as a calendar rule"
-        aria-label={`Rule of hours line ${number}`}
-        hint="Written by the day picker, one line each. Only for patterns the picker cannot make, edit it as iCalendar recurrence text (RFC 5545), e.g. FREQ=MONTHLY;BYDAY=1SA"
-        rows={Math.max(1, text.split('\n').length)}
-        error={error('rrule')}
-        {...register(`${path}.rrule`)}
-      />
+      {/* The rule's text is for the few patterns the picker cannot make: tucked away unless this line needs it. */}
+      <details open={!shown || Boolean(error('rrule'))} className="text-sm">
+        <summary className="min-h-11 cursor-pointer py-2 font-bold">For experts: the days as calendar text</summary>
+        <TextAreaField
+          label="Days as a calendar rule"
+          aria-label={`Rule of hours line ${number}`}
+          hint="Written by the day picker, one line each. Only for patterns the picker cannot make, edit it as iCalendar recurrence text (RFC 5545), e.g. FREQ=MONTHLY;BYDAY=1SA"
+          rows={Math.max(1, text.split('\n').length)}
+          error={error('rrule')}
+          {...register(`${path}.rrule`)}
+        />
+      </details>
       <div aria-live="polite" className="flex flex-col gap-1 text-sm">
+        {sharedDays.length > 0 && (
+          <p>
+            <span className="font-bold">Also in another line:</span> {sharedDays.map((d) => dayNames[d as keyof typeof dayNames] ?? d).join(', ')}. Both lines'
+            hours count on {sharedDays.length === 1 ? 'that day' : 'those days'}.
+          </p>
+        )}
         <p>
           <span className="font-bold">Reads as:</span> {text ? describeHoursRule(text, todayIn(timeZone)) : 'no days yet'}
         </p>

@@ -1,6 +1,9 @@
 import { createColumnHelper } from '@tanstack/react-table';
 import type { StandbyEntry } from '@shared/schemas/standby.schemas';
-import { Button } from '@client/components/ui/button';
+import { Link } from 'react-router-dom';
+import { buttonClasses } from '@client/components/ui/button';
+import { ConfirmRemove } from '@client/components/ui/confirm-remove';
+import { paths } from '@client/config/paths';
 import { formatDate } from '@shared/format/date-time';
 import { formatFor } from '@shared/format/locale';
 import { availabilityText } from '../weekdays';
@@ -38,16 +41,18 @@ export function standbyColumns(timeZone: string, phoneText: (stored: string) => 
     column.display({
       id: 'remove',
       header: () => <span className="sr-only">Actions</span>,
-      cell: ({ row }) => (
-        <Button
-          variant="quiet"
-          busy={removing === row.original.id}
-          onClick={() => onRemove(row.original)}
-          aria-label={`Remove ${row.original.client.name} from the standby list`}
-        >
-          Remove
-        </Button>
-      ),
+      cell: ({ row }) => {
+        const { client, services, stylist } = row.original;
+        const start = { client: client.id, service: services[0]?.id, stylist: stylist?.id };
+        return (
+          <div className="flex flex-wrap items-center gap-2">
+            <Link to={paths.deskBook(undefined, start)} className={buttonClasses('secondary')} aria-label={`Book ${client.name}`}>
+              Book
+            </Link>
+            <ConfirmRemove what={`${client.name} from the standby list`} busy={removing === row.original.id} onRemove={() => onRemove(row.original)} />
+          </div>
+        );
+      },
     }),
   ];
 }

@@ -2,6 +2,7 @@ import { useMemo } from 'react';
 import type { StandbyEntry } from '@shared/schemas/standby.schemas';
 import { DataTable } from '@client/components/ui/data-table';
 import { FormAlert } from '@client/components/ui/form-alert';
+import { toastDone } from '@client/lib/toast';
 import { useRemoveStandby } from '../api/standby-mutations';
 import { usePhoneText } from '../../salon';
 import { standbyColumns } from './standby-columns';
@@ -13,7 +14,13 @@ export function StandbyTable({ entries, timeZone }: Props) {
   const remove = useRemoveStandby();
   const phoneText = usePhoneText();
   const columns = useMemo(
-    () => standbyColumns(timeZone, phoneText, (entry) => remove.mutate(entry.id), remove.isPending ? (remove.variables ?? null) : null),
+    () =>
+      standbyColumns(
+        timeZone,
+        phoneText,
+        (entry) => remove.mutate(entry.id, { onSuccess: () => toastDone(`Removed ${entry.client.name} from the standby list.`) }),
+        remove.isPending ? (remove.variables ?? null) : null,
+      ),
     [timeZone, phoneText, remove],
   );
   return (

@@ -1,10 +1,12 @@
-import { SALON_LOCALE } from '@shared/format/locale';
 import { formatPercent } from '@client/lib/booking-labels';
+import { formatClock } from '@shared/format/date-time';
+import { SALON_LOCALE } from '@shared/format/locale';
 
 const WEEKDAYS = ['', 'Monday', 'Tuesday', 'Wednesday', 'Thursday', 'Friday', 'Saturday', 'Sunday'];
 /** The name of an API weekday (1 = Monday … 7 = Sunday); empty for anything else. */
 export const weekdayName = (weekday: number | undefined) => (weekday === undefined ? '' : (WEEKDAYS[weekday] ?? ''));
-export const hourLabel = (hour: number) => `${String(hour).padStart(2, '0')}:00`;
+/** An hour of the salon's day as its clock reads it: "9 AM", "1 PM". */
+export const hourLabel = (hour: number) => formatClock(`${String(hour).padStart(2, '0')}:00`, { locale: SALON_LOCALE }, { hourOnly: true });
 export const percentText = (share: number | null | undefined) => formatPercent(share ?? null);
 /** A share as a rounded percentage number for charts (null stays a gap). */
 export const percentValue = (share: number | null) => (share === null ? null : Math.round(share * 1000) / 10);

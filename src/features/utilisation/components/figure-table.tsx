@@ -12,6 +12,8 @@ export interface FigureColumn<T> {
   /** How the cell reads on screen; the raw value when left out. */
   format?: (row: T) => string;
   numeric?: boolean;
+  /** What the CSV's numbers are in, written after its header: "Hands-on share (%)", "Revenue (USD)". */
+  unit?: string;
 }
 
 type Props<T> = { caption: string; columns: FigureColumn<T>[]; rows: T[]; filename: string };
@@ -42,7 +44,7 @@ export function FigureTable<T>({ caption, columns, rows, filename }: Props<T>) {
     downloadCsv(
       filename,
       toCsv(
-        columns.map((c) => c.header),
+        columns.map((c) => (c.unit ? `${c.header} (${c.unit})` : c.header)),
         table.getRowModel().rows.map((r) => columns.map((c) => c.value(r.original))),
       ),
     );

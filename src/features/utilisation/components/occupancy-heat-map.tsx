@@ -2,7 +2,7 @@ import { Scatter, ScatterChart, XAxis, YAxis } from 'recharts';
 import type { HeatCell } from '@shared/schemas/utilisation.schemas';
 import { SectionCard } from '@client/components/ui/section-card';
 import { FigureTable, type FigureColumn } from './figure-table';
-import { hourLabel, percentText, weekdayName } from './chart-labels';
+import { hourLabel, percentText, percentValue, weekdayName } from './chart-labels';
 
 type Props = { cells: HeatCell[]; filename: string };
 
@@ -12,7 +12,14 @@ const MARGIN = { top: 10, right: 10, bottom: 30, left: 90 };
 const columns: FigureColumn<HeatCell>[] = [
   { id: 'weekday', header: 'Weekday', value: (c) => weekdayName(c.weekday) },
   { id: 'hour', header: 'Hour', value: (c) => hourLabel(c.hour) },
-  { id: 'occupancy', header: 'Chair occupancy', value: (c) => c.chairOccupancy, format: (c) => percentText(c.chairOccupancy), numeric: true },
+  {
+    id: 'occupancy',
+    header: 'Chair occupancy',
+    value: (c) => percentValue(c.chairOccupancy),
+    format: (c) => percentText(c.chairOccupancy),
+    numeric: true,
+    unit: '%',
+  },
   { id: 'held', header: 'Chair minutes with a client', value: (c) => c.chairHeldMinutes, numeric: true },
   { id: 'open', header: 'Chair minutes open', value: (c) => c.chairOpenMinutes, numeric: true },
 ];
@@ -37,7 +44,15 @@ export function OccupancyHeatMap({ cells, filename }: Props) {
             role="img"
             aria-label="Heat map of chair occupancy by weekday and hour; the numbers are in the table below"
           >
-            <XAxis type="number" dataKey="hour" domain={[first - 0.5, last + 0.5]} ticks={[...new Set(hours)]} tickFormatter={hourLabel} interval={0} />
+            <XAxis
+              type="number"
+              dataKey="hour"
+              domain={[first - 0.5, last + 0.5]}
+              ticks={[...new Set(hours)]}
+              tickFormatter={hourLabel}
+              interval={0}
+              fontSize={12}
+            />
             <YAxis
               type="number"
               dataKey="row"

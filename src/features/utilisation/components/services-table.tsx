@@ -1,5 +1,5 @@
+import { formatDuration } from '@shared/format/date-time';
 import { SectionCard } from '@client/components/ui/section-card';
-import { formatMinutes } from '@client/lib/time';
 import { FigureTable, type FigureColumn } from './figure-table';
 import { formatMoney, minorToUnits } from '@shared/money/money';
 
@@ -17,7 +17,7 @@ type Props = { services: ServiceRow[]; filename: string; currency?: string };
 export function ServicesTable({ services, filename, currency }: Props) {
   const columns: FigureColumn<ServiceRow>[] = [
     { id: 'name', header: 'Service', value: (s) => s.name },
-    { id: 'chairMinutes', header: 'Chair time', value: (s) => s.chairMinutes, format: (s) => formatMinutes(s.chairMinutes), numeric: true },
+    { id: 'chairMinutes', header: 'Chair time', value: (s) => s.chairMinutes, format: (s) => formatDuration(s.chairMinutes), numeric: true, unit: 'minutes' },
     { id: 'sittings', header: 'Sittings', value: (s) => s.sittings, numeric: true },
     ...(currency
       ? [
@@ -27,6 +27,7 @@ export function ServicesTable({ services, filename, currency }: Props) {
             value: (s: ServiceRow) => minorToUnits(s.revenueCents ?? 0, currency),
             format: (s: ServiceRow) => formatMoney(s.revenueCents ?? 0, currency),
             numeric: true,
+            unit: currency,
           },
         ]
       : []),

@@ -1,8 +1,8 @@
+import { formatDuration } from '@shared/format/date-time';
 import type { StylistFigures } from '@shared/schemas/utilisation.schemas';
 import { SectionCard } from '@client/components/ui/section-card';
-import { formatMinutes } from '@client/lib/time';
 import { FigureTable, type FigureColumn } from './figure-table';
-import { percentText } from './chart-labels';
+import { percentText, percentValue } from './chart-labels';
 import { ShareBars } from './share-bars';
 import { formatMoney, minorToUnits } from '@shared/money/money';
 
@@ -12,9 +12,9 @@ type Props = { stylists: StylistFigures[]; currency: string; filename: string };
 export function StylistBars({ stylists, currency, filename }: Props) {
   const columns: FigureColumn<StylistFigures>[] = [
     { id: 'name', header: 'Stylist', value: (s) => s.name },
-    { id: 'share', header: 'Hands-on share', value: (s) => s.handsOnShare, format: (s) => percentText(s.handsOnShare), numeric: true },
-    { id: 'handsOn', header: 'Hands-on minutes', value: (s) => s.handsOnMinutes, format: (s) => formatMinutes(s.handsOnMinutes), numeric: true },
-    { id: 'clock', header: 'Minutes on the clock', value: (s) => s.onClockMinutes, format: (s) => formatMinutes(s.onClockMinutes), numeric: true },
+    { id: 'share', header: 'Hands-on share', value: (s) => percentValue(s.handsOnShare), format: (s) => percentText(s.handsOnShare), numeric: true, unit: '%' },
+    { id: 'handsOn', header: 'Hands-on minutes', value: (s) => s.handsOnMinutes, format: (s) => formatDuration(s.handsOnMinutes), numeric: true },
+    { id: 'clock', header: 'Minutes on the clock', value: (s) => s.onClockMinutes, format: (s) => formatDuration(s.onClockMinutes), numeric: true },
     { id: 'bookings', header: 'Bookings', value: (s) => s.bookings, numeric: true },
     { id: 'noShows', header: 'No-shows', value: (s) => s.noShows, numeric: true },
     {
@@ -23,6 +23,7 @@ export function StylistBars({ stylists, currency, filename }: Props) {
       value: (s) => minorToUnits(s.revenueCents, currency),
       format: (s) => formatMoney(s.revenueCents, currency),
       numeric: true,
+      unit: currency,
     },
     {
       id: 'perHour',
@@ -30,6 +31,7 @@ export function StylistBars({ stylists, currency, filename }: Props) {
       value: (s) => (s.revenuePerHourCents === null ? null : minorToUnits(s.revenuePerHourCents, currency)),
       format: (s) => (s.revenuePerHourCents === null ? '—' : formatMoney(s.revenuePerHourCents, currency)),
       numeric: true,
+      unit: currency,
     },
   ];
   return (

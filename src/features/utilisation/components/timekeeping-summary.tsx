@@ -1,6 +1,6 @@
 import { ON_TIME_MINUTES, type Timekeeping } from '@shared/schemas/utilisation.schemas';
 import { SectionCard } from '@client/components/ui/section-card';
-import { formatMinutes } from '@client/lib/time';
+import { formatDuration } from '@shared/format/date-time';
 import { StatTile } from '@client/features/owner';
 import { hoursText, percentText } from './chart-labels';
 import type { ReactNode } from 'react';
@@ -20,7 +20,7 @@ export function TimekeepingSummary({ timekeeping: t, children }: Props) {
           <StatTile label="On-time rate" value={percentText(t.onTimeRate)} note={`${t.onTime} of ${t.sittings} timed sittings`} />
           <StatTile
             label="Overrun"
-            value={formatMinutes(Math.round(t.overrunMinutes))}
+            value={formatDuration(Math.round(t.overrunMinutes))}
             note={t.overrunPerSitting === null ? 'no timed sittings' : `${Math.round(t.overrunPerSitting)} min a sitting on average`}
           />
           <StatTile label="Chair time, actual" value={hoursText(t.actualChairHours)} note={`planned ${hoursText(t.plannedChairHours)} for the same sittings`} />

@@ -3,9 +3,10 @@ import type { ReactNode } from 'react';
 import { useSearchParams } from 'react-router-dom';
 import type { DeskUtilisation, UtilisationQuery } from '@shared/schemas/utilisation.schemas';
 import { PageHeader } from '@client/components/ui/page-header';
-import { formatDate } from '@shared/format/date-time';
+import { formatDate, formatZone } from '@shared/format/date-time';
 import { shiftLocalDate } from '@shared/time/salon-time';
-import { zonelessFormat } from '@shared/format/locale';
+import { formatFor, zonelessFormat } from '@shared/format/locale';
+import { Button } from '@client/components/ui/button';
 import { queryFromSearch, scenarioExportUrl, utilisationQueries } from '../api/utilisation-queries';
 import { OccupancyHeatMap } from './occupancy-heat-map';
 import { PeriodPicker } from './period-picker';
@@ -49,8 +50,14 @@ function Frame({ title, report, query, onQuery, actions, children }: FrameProps)
         title={title}
         subtitle={
           <p>
-            {report.salon.name} · {span} · salon time ({report.salon.timeZone})
+            {report.salon.name} · {span} · salon time, {formatZone(formatFor(report.salon.timeZone), report.period.from)}
           </p>
+        }
+        action={
+          // The page has a print layout (main.css): figures and tables without the site's frame.
+          <Button variant="secondary" className="print:hidden" onClick={() => window.print()}>
+            Print
+          </Button>
         }
       />
       {/* The key resets the form when the URL's period changes (back button, a shared link). */}
@@ -61,7 +68,8 @@ function Frame({ title, report, query, onQuery, actions, children }: FrameProps)
   );
 }
 
-const slug = (r: DeskUtilisation) => `${r.period.from}-to-${r.period.to}`;
+// The period's own days: `to` is the day after the last one.
+const slug = (r: DeskUtilisation) => `${r.period.from}-to-${shiftLocalDate(r.period.to, -1)}`;
 
 export function OwnerUtilisationView() {
   const [query, setQuery] = usePeriodQuery();

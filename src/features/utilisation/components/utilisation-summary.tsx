@@ -1,6 +1,6 @@
+import { formatDuration } from '@shared/format/date-time';
 import type { DeskUtilisation, OwnerUtilisation } from '@shared/schemas/utilisation.schemas';
 import { SectionCard } from '@client/components/ui/section-card';
-import { formatMinutes } from '@client/lib/time';
 import { StatTile } from '@client/features/owner';
 import { percentText } from './chart-labels';
 import { formatMoney } from '@shared/money/money';
@@ -8,7 +8,7 @@ import { formatMoney } from '@shared/money/money';
 type Props = { report: DeskUtilisation | OwnerUtilisation; currency?: string };
 
 const isOwner = (r: DeskUtilisation | OwnerUtilisation): r is OwnerUtilisation => 'money' in r;
-const minutesOrDash = (m: number | null) => (m === null ? '—' : formatMinutes(Math.round(m)));
+const minutesOrDash = (m: number | null) => (m === null ? '—' : formatDuration(Math.round(m)));
 
 /** The period's headline figures: the engine's occupancy and window use, attendance, and for the owner money and corrections. */
 export function UtilisationSummary({ report, currency }: Props) {

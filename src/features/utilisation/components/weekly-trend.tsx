@@ -39,9 +39,10 @@ export function WeeklyTrend({ weeks, filename, currency }: Props) {
     ...lines.map((l) => ({
       id: l.key,
       header: l.name,
-      value: (w: TrendWeek) => w[l.key] ?? null,
+      value: (w: TrendWeek) => percentValue(w[l.key] ?? null),
       format: (w: TrendWeek) => percentText(w[l.key]),
       numeric: true,
+      unit: '%',
     })),
     ...(currency
       ? [
@@ -51,6 +52,7 @@ export function WeeklyTrend({ weeks, filename, currency }: Props) {
             value: (w: TrendWeek) => minorToUnits(w.revenueCents ?? 0, currency),
             format: (w: TrendWeek) => formatMoney(w.revenueCents ?? 0, currency),
             numeric: true,
+            unit: currency,
           },
         ]
       : []),

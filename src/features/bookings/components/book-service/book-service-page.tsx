@@ -26,20 +26,40 @@ import { SkinTestNotice } from './skin-test-notice';
 /** A saved consultation quote being booked: its client, service and edited step plan fill the form. */
 export type QuoteToBook = { quoteId: string; client: ClientSummary; serviceId: string; stepPlan: StepPlan; summary: string };
 
-type Props = { services: ServiceSummary[]; stylists: { id: string; name: string; skills: string[] }[]; today: string; quote?: QuoteToBook };
+/** A client to book, with the service and stylist they asked for when known (e.g. their standby entry). */
+export type BookingStart = { client: ClientSummary; serviceId: string | null; stylistId: string | null };
+
+type Props = {
+  services: ServiceSummary[];
+  stylists: { id: string; name: string; skills: string[] }[];
+  today: string;
+  quote?: QuoteToBook;
+  start?: BookingStart;
+};
+
+/** The form's first values: a quote's, a started booking's, or blank. */
+function firstValues(services: ServiceSummary[], today: string, quote?: QuoteToBook, start?: BookingStart): BookFormInput {
+  if (quote) return { clientId: quote.client.id, serviceId: quote.serviceId, stylistId: '', earliestDate: today, stepPlan: structuredClone(quote.stepPlan) };
+  const service = services.find((s) => s.id === start?.serviceId);
+  return {
+    clientId: start?.client.id ?? '',
+    serviceId: service?.id ?? '',
+    stylistId: start?.stylistId ?? '',
+    earliestDate: today,
+    stepPlan: structuredClone(service?.stepPlan ?? { sittings: [] }),
+  };
+}
 
 /** The desk's booking flow: fill in the request, find times, book one option. */
-export function BookServicePage({ services, stylists, today, quote }: Props) {
+export function BookServicePage({ services, stylists, today, quote, start }: Props) {
   const navigate = useNavigate();
   const { data: salon } = useSuspenseQuery(salonQueries.current());
   const form = useForm<BookFormInput, unknown, BookFormValues>({
     // This booking's plan is held to the salon's processing limits, as the server holds it.
     resolver: zodResolver(BookFormSchema.superRefine(withinProcessingLimits(salon.processingLimits))),
-    defaultValues: quote
-      ? { clientId: quote.client.id, serviceId: quote.serviceId, stylistId: '', earliestDate: today, stepPlan: structuredClone(quote.stepPlan) }
-      : { clientId: '', serviceId: '', stylistId: '', earliestDate: today, stepPlan: { sittings: [] } },
+    defaultValues: firstValues(services, today, quote, start),
   });
-  const [client, setClient] = useState<ClientSummary | null>(quote?.client ?? null);
+  const [client, setClient] = useState<ClientSummary | null>(quote?.client ?? start?.client ?? null);
   const [request, setRequest] = useState<BookingOptionsRequest | null>(null);
   const [booking, setBooking] = useState<string | null>(null);
   const queryClient = useQueryClient();

@@ -2,8 +2,7 @@ import type { BookingOption } from '@shared/schemas/booking.schemas';
 import { Button } from '@client/components/ui/button';
 import { StepStrip } from '@client/components/ui/step-strip';
 import { sittingLabel } from '@client/lib/booking-labels';
-import { formatMinutes } from '@client/lib/time';
-import { formatDate, formatRange } from '@shared/format/date-time';
+import { formatDate, formatRange, formatDuration } from '@shared/format/date-time';
 import { formatFor } from '@shared/format/locale';
 
 type Props = { option: BookingOption; timeZone: string; busy: boolean; disabled: boolean; onBook: () => void };
@@ -31,9 +30,9 @@ export function OptionCard({ option, timeZone, busy, disabled, onBook }: Props) 
       </ol>
       <dl className="grid grid-cols-[1fr_auto] gap-x-3 text-sm tabular">
         <dt>Chair time</dt>
-        <dd className="font-bold">{formatMinutes(option.chairMinutes)}</dd>
+        <dd className="font-bold">{formatDuration(option.chairMinutes)}</dd>
         <dt>Hands-free for others</dt>
-        <dd className="font-bold">{formatMinutes(option.handsFreeMinutes)}</dd>
+        <dd className="font-bold">{formatDuration(option.handsFreeMinutes)}</dd>
       </dl>
       <Button className="mt-auto" busy={busy} disabled={disabled} onClick={onBook}>
         Book this

@@ -1,8 +1,8 @@
 import type { ReactNode } from 'react';
+import { formatDuration } from '@shared/format/date-time';
 import { useFieldArray, useFormContext } from 'react-hook-form';
 import { sittingMaxMinutes } from '@shared/schemas/step-plan.schemas';
 import { DAYS_BETWEEN_SITTINGS } from '@shared/quotes/propose-quote';
-import { formatMinutes } from '@client/lib/time';
 import { Button } from '@client/components/ui/button';
 import { stepOfKind, type StepPlanFormInput } from '@client/features/bookings/step-plan-form';
 import { SittingEditor, type StepNote } from './sitting-editor';
@@ -29,7 +29,7 @@ export function StepPlanEditor({ title = 'Step plan for this booking', editSitti
       <summary className="cursor-pointer px-4 py-3">
         <span className="font-bold">{title}</span>{' '}
         <span className="text-ink/80">
-          — {sittings.fields.length} {sittings.fields.length === 1 ? 'sitting' : 'sittings'}, up to {longest.map(formatMinutes).join(' + ')}. Open to change
+          — {sittings.fields.length} {sittings.fields.length === 1 ? 'sitting' : 'sittings'}, up to {longest.map(formatDuration).join(' + ')}. Open to change
           steps, minutes or days between sittings.
         </span>
       </summary>
