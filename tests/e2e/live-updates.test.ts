@@ -79,7 +79,8 @@ describe('screens that update themselves', () => {
     );
     await small.goto(`${baseUrl()}/desk?date=${date}`);
     const banner = small.getByRole('status').filter({ hasText: PAUSED });
-    await banner.waitFor({ timeout: 5_000 });
+    // Generous: the banner's code loads after the page, which takes a while on a busy machine.
+    await banner.waitFor({ timeout: 15_000 });
     expect(await banner.textContent()).toBe(PAUSED);
     expect(await banner.getAttribute('aria-live')).toBe('polite');
     await screenshot(small, 'live-updates-paused-375', false, false);
