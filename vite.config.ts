@@ -26,6 +26,8 @@ export default defineConfig({
   build: {
     outDir: 'dist/client',
     emptyOutDir: true,
+    // Browsers Dwell supports preload modules themselves; the polyfill would ride in every first load.
+    modulePreload: { polyfill: false },
     // Our own modules only declare things (schemas, contracts, components): one that nothing uses is left out, so a
     // page that needs one contract does not carry every schema of the modules it sits beside.
     rolldownOptions: { treeshake: { moduleSideEffects: [{ test: /\/(shared|src)\/.+\.tsx?$/, sideEffects: false }] } },

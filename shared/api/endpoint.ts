@@ -53,6 +53,23 @@ export interface UploadLimits {
   maxBytesPerFile: number;
 }
 
+/**
+ * Where an endpoint answers, without its schemas: what a page needs to call the endpoint when it must not load
+ * the validation library (the public salon page, a visitor's first load, and the app frame around every page).
+ * Its answer is used as sent; the server checks every answer against the endpoint's response schema in
+ * development and tests (server/lib/api-route.ts). Declare it beside its endpoint in the contract module and
+ * spread it into the endpoint, so the path is written once.
+ */
+export interface Address<E extends Endpoint = Endpoint> {
+  method: E['method'];
+  path: E['path'];
+  /** Type only, never set: the endpoint whose inputs and answer this address carries. */
+  readonly endpoint?: E;
+}
+
+/** The endpoint an address or endpoint stands for. */
+export type EndpointOf<A extends Address> = A extends Endpoint ? A : A extends Address<infer E extends Endpoint> ? E : never;
+
 /** Declares an endpoint; `const` keeps the literal path and the schema types for both sides. */
 export function endpoint<const E extends Endpoint>(spec: E): E {
   return spec;

@@ -25,6 +25,7 @@ import {
 } from '../schemas/online-booking.schemas';
 import { CheckoutAnswerSchema } from '../schemas/payments.schemas';
 import { endpoint } from './endpoint';
+import { firstLoadPaths } from './first-load-addresses';
 
 /**
  * Booking online: the salon's public page and free times, a held time on its way to a paid booking, and what a
@@ -32,8 +33,7 @@ import { endpoint } from './endpoint';
  */
 export const onlineBookingApi = {
   publicSalon: endpoint({
-    method: 'get',
-    path: '/api/public/salons/:slug',
+    ...firstLoadPaths.publicSalon,
     access: 'public',
     summary: "The salon's public page",
     params: SlugParamsSchema,

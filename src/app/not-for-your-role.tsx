@@ -3,7 +3,7 @@ import { Link } from 'react-router-dom';
 import type { Role } from '@shared/schemas/common.schemas';
 import { homeFor } from '../config/paths';
 import { sessionQueries } from '../features/auth/api/session-queries';
-import { roleLabels } from '../lib/booking-labels';
+import { roleLabels } from '../lib/role-labels';
 
 type Props = { allowed?: readonly Role[] };
 

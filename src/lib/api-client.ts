@@ -1,14 +1,13 @@
 import { queryOptions } from '@tanstack/react-query';
-import type { z } from 'zod';
-import { urlOf, type Answer, type CallInput, type Endpoint } from '@shared/api/endpoint';
-import { ApiErrorBodySchema } from '@shared/api/error.schemas';
-import { sessionApi } from '@shared/api/session.api';
-import { ApiError } from './api-error';
+import { urlOf, type Address, type Answer, type CallInput, type Endpoint, type EndpointOf } from '@shared/api/endpoint';
+import { firstLoadAddresses } from '@shared/api/first-load-addresses';
+import { ApiError, errorBodyOf } from './api-error';
 
 /*
  * The one way the client talks to the API. It parses responses with the shared
- * schemas and throws ApiError; it never redirects or shows messages (the query
- * cache and the pages decide that).
+ * schemas (an Address, which has none, takes the answer as sent) and throws ApiError;
+ * it never redirects or shows messages (the query cache and the pages decide that).
+ * This module is in every page's first load: it must not import zod's runtime.
  */
 
 type WriteMethod = 'POST' | 'PUT' | 'PATCH' | 'DELETE';
@@ -34,8 +33,8 @@ async function send(method: 'GET' | WriteMethod, path: string, body?: unknown): 
 /** The session's CSRF token, fetched once; also used by upload-file.ts for multipart writes. */
 export async function getCsrfToken(): Promise<string> {
   if (csrfToken) return csrfToken;
-  const response = await send('GET', sessionApi.csrf.path);
-  csrfToken = (await readBody(response, sessionApi.csrf.response)).token;
+  const answer = await callApi(firstLoadAddresses.csrf);
+  csrfToken = answer.token;
   return csrfToken;
 }
 
@@ -45,25 +44,31 @@ export function forgetCsrfToken(): void {
 }
 
 export async function toApiError(response: Response): Promise<ApiError> {
-  const parsed = ApiErrorBodySchema.safeParse(await response.json().catch(() => null));
-  if (parsed.success) {
-    const { code, message, fields } = parsed.data.error;
-    return new ApiError(response.status, code, message, fields);
-  }
+  const error = errorBodyOf(await response.json().catch(() => null));
+  if (error) return new ApiError(response.status, error.code, error.message, error.fields);
   return new ApiError(response.status, 'INTERNAL', 'Something went wrong on our side. Please try again.');
 }
 
-async function readBody<S extends z.ZodType>(response: Response, schema: S): Promise<z.output<S>> {
+/** Reads a successful answer. */
+type Reader = (response: Response) => Promise<unknown>;
+
+/**
+ * An endpoint's response schema parses its answer (an endpoint without one answers nothing); an Address, which
+ * carries no schema, takes the JSON as sent.
+ */
+function readerOf(e: Address): Reader {
+  if (!('access' in e)) return async (response) => (response.status === 204 ? undefined : response.json());
+  const schema = (e as Endpoint).response;
+  return schema ? async (response) => schema.parse(await response.json()) : async () => undefined;
+}
+
+async function readAnswer(response: Response, read: Reader): Promise<unknown> {
   if (!response.ok) throw await toApiError(response);
-  return schema.parse(await response.json());
+  return read(response);
 }
 
-export function apiGet<S extends z.ZodType>(path: string, schema: S): Promise<z.output<S>> {
-  return send('GET', path).then((response) => readBody(response, schema));
-}
-
-/** A write. Returns the parsed body, or undefined when no schema is given (204/202 answers). */
-export async function apiWrite<S extends z.ZodType>(method: WriteMethod, path: string, body?: unknown, schema?: S): Promise<z.output<S>> {
+/** A write; the token is fetched again once when the server says it went stale. */
+async function write(method: WriteMethod, path: string, body: unknown, read: Reader): Promise<unknown> {
   let response = await send(method, path, body);
   if (response.status === 403) {
     const error = await toApiError(response.clone());
@@ -73,8 +78,7 @@ export async function apiWrite<S extends z.ZodType>(method: WriteMethod, path: s
       response = await send(method, path, body);
     }
   }
-  if (!response.ok) throw await toApiError(response);
-  return schema ? schema.parse(await response.json()) : (undefined as z.output<S>);
+  return readAnswer(response, read);
 }
 
 /** Builds `path?key=value` leaving out empty values. */
@@ -89,33 +93,29 @@ export function withQuery(path: string, query: Record<string, string | undefined
 export type InputArgs<E extends Endpoint> = object extends CallInput<E> ? [input?: CallInput<E>] : [input: CallInput<E>];
 
 /**
- * Calls one endpoint of `shared/api/`: its path filled from `params`, `query` appended, `body` sent as
- * JSON, and the answer parsed with the endpoint's response schema (undefined for empty answers).
+ * Calls one endpoint of `shared/api/` (or its Address): its path filled from `params`, `query` appended, `body`
+ * sent as JSON, and the answer parsed with the endpoint's response schema (undefined for empty answers).
  */
-export function callApi<const E extends Endpoint>(e: E, ...[input]: InputArgs<E>): Promise<Answer<E>> {
+export function callApi<const A extends Address>(e: A, ...[input]: InputArgs<EndpointOf<A>>): Promise<Answer<EndpointOf<A>>> {
   const url = urlOf(e, input ?? {});
-  const schema = e.response as z.ZodType | undefined;
-  if (e.method === 'get') return send('GET', url).then((response) => (schema ? readBody(response, schema) : checkOk(response))) as Promise<Answer<E>>;
-  return apiWrite(e.method.toUpperCase() as WriteMethod, url, input?.body, schema) as Promise<Answer<E>>;
-}
-
-async function checkOk(response: Response): Promise<undefined> {
-  if (!response.ok) throw await toApiError(response);
-  return undefined;
+  const read = readerOf(e);
+  const answer =
+    e.method === 'get' ? send('GET', url).then((response) => readAnswer(response, read)) : write(e.method.toUpperCase() as WriteMethod, url, input?.body, read);
+  return answer as Promise<Answer<EndpointOf<A>>>;
 }
 
 /**
  * The query key of an endpoint's answer: `['api', path template, params, query]`. A prefix of it names
  * a set to invalidate: every answer of the endpoint, or of one record (see cache-rules.ts).
  */
-export function apiKey<E extends Endpoint>(e: E, input: { params?: unknown; query?: unknown } = {}) {
+export function apiKey<A extends Address>(e: A, input: { params?: unknown; query?: unknown } = {}) {
   return ['api', e.path, input.params ?? {}, input.query ?? {}] as const;
 }
 
 /** TanStack Query options for a GET endpoint; spread them to add options (`{ ...apiQuery(e, input), staleTime }`). */
-export function apiQuery<const E extends Endpoint>(e: E, ...[input]: InputArgs<E>) {
+export function apiQuery<const A extends Address>(e: A, ...[input]: InputArgs<EndpointOf<A>>) {
   return queryOptions({
     queryKey: apiKey(e, input ?? {}),
-    queryFn: () => callApi(e, ...([input] as InputArgs<E>)),
+    queryFn: () => callApi(e, ...([input] as InputArgs<EndpointOf<A>>)),
   });
 }

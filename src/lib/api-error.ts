@@ -1,4 +1,5 @@
-import type { ErrorCode } from '@shared/api/error-codes';
+import { ERROR_CODES, type ErrorCode } from '@shared/api/error-codes';
+import type { ApiErrorBody } from '@shared/api/error.schemas';
 
 /** What every failed API call throws: the server's error code, status and per-field messages. */
 export class ApiError extends Error {
@@ -27,4 +28,26 @@ export function problemText(error: unknown): string {
   if (!(error instanceof ApiError)) return error instanceof Error ? error.message : 'Something went wrong. Please try again.';
   const fields = Object.values(error.fields);
   return fields.length ? fields.join(' ') : error.message;
+}
+
+const CODES: ReadonlySet<string> = new Set(ERROR_CODES);
+const isText = (value: unknown): value is string => typeof value === 'string';
+const isRecord = (value: unknown): value is Record<string, unknown> => typeof value === 'object' && value !== null && !Array.isArray(value);
+
+/**
+ * The error of an API error body (`{ error: { code, message, fields? } }`, ApiErrorBodySchema), or null when the
+ * body is not one. Checked by hand: every page's first load reads errors, and must not carry zod's runtime.
+ */
+export function errorBodyOf(body: unknown): ApiErrorBody['error'] | null {
+  const error = isRecord(body) ? body.error : undefined;
+  if (!isRecord(error) || !isText(error.code) || !CODES.has(error.code) || !isText(error.message)) return null;
+  const { fields, requestId } = error;
+  if (fields !== undefined && !(isRecord(fields) && Object.values(fields).every(isText))) return null;
+  if (requestId !== undefined && !isText(requestId)) return null;
+  return {
+    code: error.code as ErrorCode,
+    message: error.message,
+    ...(fields && { fields: fields as Record<string, string> }),
+    ...(requestId !== undefined && { requestId }),
+  };
 }

@@ -1,5 +1,5 @@
 import type { BookingView } from '@shared/schemas/booking-view.schemas';
-import type { BookingStatus, Role, StepKind } from '@shared/schemas/common.schemas';
+import type { BookingStatus, StepKind } from '@shared/schemas/common.schemas';
 import type { SittingStatus } from '@shared/schemas/day-of-service.schemas';
 import { formatMoney } from '@shared/money/money';
 import { SALON_LOCALE } from '@shared/format/locale';
@@ -28,13 +28,6 @@ export const sittingStatusLabels: Record<SittingStatus, string> = {
   in_progress: 'In progress',
   finished: 'Finished',
   no_show: 'No-show',
-};
-
-export const roleLabels: Record<Role, string> = {
-  client: 'client',
-  front_desk: 'front desk',
-  stylist: 'stylist',
-  owner: 'owner',
 };
 
 /** "Sitting 1 of 2", or nothing for a one-sitting booking. */

@@ -1,11 +1,11 @@
-import { AxeBuilder } from '@axe-core/playwright';
 import { DateTime } from 'luxon';
 import type { Browser, BrowserContext, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO_PASSWORD } from '@server/demo/demo-catalogue';
-import { baseUrl, connectBrowser, screenshot, signInThroughPage, WCAG_TAGS } from '../setup/browser';
+import { baseUrl, connectBrowser, screenshot, seriousFindings, signInThroughPage } from '../setup/browser';
 
-// Every page of every role, at a desktop and a phone width: its own title, no console warnings (React Router's
+// Every page of every role, at a desktop and a phone width (the day-of-service pages in a day of their own, in
+// accessibility-walk-day-of-service.test.ts): its own title, no console warnings (React Router's
 // among them), and axe-core's automated WCAG 2.0, 2.1 and 2.2 A and AA checks (Deque's rules) finding nothing
 // serious or critical.
 
@@ -137,9 +137,7 @@ describe('every page, as each role, at both widths', () => {
           expect([...titles.values()], `${visit.path} has a title of its own`).not.toContain(title);
           titles.set(visit.path, title);
           if (visit.shot) await screenshot(page, `${visit.shot}-${width}`, true, false);
-          const axe = await new AxeBuilder({ page }).withTags(WCAG_TAGS).analyze();
-          for (const v of axe.violations.filter((v) => v.impact === 'serious' || v.impact === 'critical'))
-            findings.push(`${visit.path}: ${v.id} (${v.nodes.map((n) => n.target.join(' ')).join(', ')})`);
+          findings.push(...(await seriousFindings(page, visit.path)));
         }
         expect(findings).toEqual([]);
         expect(warnings).toEqual([]);

@@ -1,12 +1,8 @@
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { createDb, createPool } from '@server/db/database';
-import type { StepPlan } from '@shared/schemas/step-plan.schemas';
-import { middayZone } from '../factories/day-of-service';
-import { ALL_DAY, atMinute, bookStepsAt, openAroundTheClock } from '../factories/replan-day';
-import { insertSalon } from '../factories/salon';
-import { insertPlannedService } from '../factories/service';
-import { insertUser, TEST_PASSWORD } from '../factories/user';
+import { insertRunningLateDay } from '../factories/running-late-day';
+import { TEST_PASSWORD } from '../factories/user';
 import { baseUrl, connectBrowser, screenshot, signInThroughPage } from '../setup/browser';
 
 // Two browsers: the stylist starts a client's sitting late on My day, which pushes its developing time and rinse into
@@ -14,71 +10,18 @@ import { baseUrl, connectBrowser, screenshot, signInThroughPage } from '../setup
 // desk hands the next client over to a free stylist with one click; the client's message is in the Outbox. A salon of
 // its own (open around the clock, at about midday in its zone) keeps the demo salon as loaded for the other tests.
 
-/** Apply 20 min, develop 20–40 min (booked at 40), rinse 10 min. */
-const glossPlan: StepPlan = {
-  sittings: [
-    {
-      steps: [
-        { kind: 'hands_on', label: 'Apply gloss', product: 'none', minutes: 20 },
-        { kind: 'developing', label: 'Gloss develops', product: 'none', minMinutes: 20, maxMinutes: 40 },
-        { kind: 'basin', label: 'Rinse', product: 'none', minutes: 10 },
-      ],
-    },
-  ],
-};
-const cutPlan: StepPlan = { sittings: [{ steps: [{ kind: 'hands_on', label: 'Cut', product: 'none', minutes: 30 }] }] };
-
 const pool = createPool(inject('databaseUrl'));
 const db = createDb(pool);
 let browser: Browser;
 const people = { desk: '', stylist: '' };
 const LATER_PHONE = '+19705550188';
+// The Outbox writes numbers as people do in the salon's country (one format policy), e.g. (970) 555-0188.
+const LATER_PHONE_TEXT = /970\D{0,2}555\D?0188/;
 
 beforeAll(async () => {
   browser = await connectBrowser();
-  const salon = await insertSalon(db, { timeZone: middayZone(), chairs: 2, basins: 1 });
-  await openAroundTheClock(db, salon.salonId);
-  const desk = await insertUser(db, salon.salonId, 'front_desk');
-  const rowan = await insertUser(db, salon.salonId, 'stylist', { hours: ALL_DAY });
-  await insertUser(db, salon.salonId, 'stylist', { hours: ALL_DAY }); // free to take a client over
-  Object.assign(people, { desk: desk.email, stylist: rowan.email });
-  const running = await insertUser(db, salon.salonId, 'client');
-  const later = await insertUser(db, salon.salonId, 'client');
-  await db.updateTable('clients').set({ name: 'Robin Vale' }).where('id', '=', running.clientId!).execute();
-  await db.updateTable('clients').set({ name: 'Sasha Lind', phone: LATER_PHONE, message_channel: 'both' }).where('id', '=', later.clientId!).execute();
-  const gloss = await insertPlannedService(db, salon.salonId, { plan: glossPlan, name: 'Gloss' });
-  const cut = await insertPlannedService(db, salon.salonId, { plan: cutPlan, name: 'Cut' });
-  const [chair1, chair2] = salon.chairs;
-  // Robin's sitting was booked from 20 minutes ago; she arrived on time but nothing has been started yet.
-  const robin = await bookStepsAt(db, {
-    salonId: salon.salonId,
-    serviceId: gloss,
-    stylistId: rowan.staffId!,
-    clientId: running.clientId!,
-    chairId: chair1!,
-    plan: glossPlan,
-    steps: [
-      { kind: 'hands_on', label: 'Apply gloss', from: -20, to: 0 },
-      { kind: 'developing', label: 'Gloss develops', from: 0, to: 40 },
-      { kind: 'basin', label: 'Rinse', from: 40, to: 50, basinId: salon.basins[0] },
-    ],
-  });
-  await db
-    .updateTable('sittings')
-    .set({ status: 'arrived', arrived_at: atMinute(-25), late_minutes: 0 })
-    .where('booking_id', '=', robin)
-    .execute();
-  await db.updateTable('bookings').set({ status: 'checked_in' }).where('id', '=', robin).execute();
-  // Sasha's cut follows the rinse.
-  await bookStepsAt(db, {
-    salonId: salon.salonId,
-    serviceId: cut,
-    stylistId: rowan.staffId!,
-    clientId: later.clientId!,
-    chairId: chair2!,
-    plan: cutPlan,
-    steps: [{ kind: 'hands_on', label: 'Cut', from: 50, to: 80 }],
-  });
+  const day = await insertRunningLateDay(db, LATER_PHONE);
+  Object.assign(people, { desk: day.deskEmail, stylist: day.stylistEmail });
 });
 
 afterAll(async () => {
@@ -152,8 +95,7 @@ describe('running late', () => {
     const log = desk.getByRole('region', { name: 'Sent messages' });
     await log
       .getByRole('row')
-      // The Outbox writes the number in the salon's national format and the kind in words.
-      .filter({ hasText: /555.0188/ })
+      .filter({ hasText: LATER_PHONE_TEXT })
       .filter({ hasText: /Change notice \(SMS\)/ })
       .first()
       .waitFor();

@@ -2,7 +2,8 @@ import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import { signedInAgent, startTestApp, type TestApp } from '../setup/test-app';
 import { insertSalon, type SalonFixture } from '../factories/salon';
 import { insertUser, type UserFixture } from '../factories/user';
-import { insertNegativeSkinTest, insertPlannedService } from '../factories/service';
+import type { StepPlan } from '@shared/schemas/step-plan.schemas';
+import { correctionPlan, insertNegativeSkinTest, insertPlannedService } from '../factories/service';
 import { futureWeekday } from '../setup/dates';
 
 let t: TestApp;
@@ -75,6 +76,50 @@ describe('proposing a quote', () => {
     });
     expect(res.status).toBe(400);
     expect(Object.keys(res.body.error.fields)).toEqual(['consultation.currentLevel', 'consultation.targetLevel']);
+  });
+});
+
+describe('the service a quote books as', () => {
+  // Lightening from level 1 to 10 on previously coloured hair, at most 2 levels a sitting (the salon's lift for
+  // coloured hair, set below): ⌈9 / 2⌉ = 5 sittings (hand arithmetic).
+  const longCorrection = consultation({
+    currentLevel: 1,
+    targetLevel: 10,
+    history: { ...virgin, natural: false, permanent: true },
+    strandTest: 'passed',
+  });
+  const sittingsOf = (n: number): StepPlan => ({
+    sittings: Array.from({ length: n }, (_, i) => ({ ...(correctionPlan.sittings[i === 0 ? 0 : 1] as StepPlan['sittings'][number]) })),
+  });
+
+  it('files a five-sitting quote under a five-sitting service with its deposit, or, with none on the menu, carries the share of its own price', async () => {
+    const db = t.testDb.db;
+    const own = await insertSalon(db, { chairs: 2, basins: 1 });
+    await db.updateTable('salons').set({ correction_cents_per_hour: 12000, lift_coloured_levels: 2 }).where('id', '=', own.salonId).execute();
+    const stylist = await insertUser(db, own.salonId, 'stylist', { skills: ['colour'] });
+    const as = await signedInAgent(t.app, stylist.email, stylist.password);
+    // The menu's only colour service has two sittings: price $200.00, deposit $40.00 (20 % of its price).
+    const twoSittings = await insertPlannedService(db, own.salonId, { depositCents: 4000, name: 'Correction (two sittings)' });
+
+    const first = await as.write('post', '/api/consultations/propose', { consultation: longCorrection, serviceId: null });
+    expect(first.status).toBe(200);
+    expect(first.body.sittings).toBe(5);
+    expect(first.body.serviceId).toBe(twoSittings);
+    // Not the two-sitting service's $40.00: 20 % of this quote's price, as that service's deposit is of its own.
+    expect(first.body.depositCents).toBe(Math.round(first.body.priceCents * 0.2));
+    expect(first.body.warnings.map((w: { code: string }) => w.code)).toContain('no_fitting_service');
+
+    // With a five-sitting colour service on the menu the quote books as that one, with its deposit.
+    const fiveSittings = await insertPlannedService(db, own.salonId, { depositCents: 9000, name: 'Correction (five sittings)', plan: sittingsOf(5) });
+    const second = await as.write('post', '/api/consultations/propose', { consultation: longCorrection, serviceId: null });
+    expect(second.body.serviceId).toBe(fiveSittings);
+    expect(second.body.depositCents).toBe(9000);
+    expect(second.body.warnings.map((w: { code: string }) => w.code)).not.toContain('no_fitting_service');
+
+    // A one-sitting quote still books as the nearest service that fits, with that service's own deposit.
+    const short = await as.write('post', '/api/consultations/propose', { consultation: consultation(), serviceId: null });
+    expect(short.body.serviceId).toBe(twoSittings);
+    expect(short.body.depositCents).toBe(4000);
   });
 });
 

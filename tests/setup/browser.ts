@@ -54,6 +54,14 @@ export async function apiWrite(page: Page, method: 'PUT' | 'POST', path: string,
 /** axe-core's tags for the WCAG 2.0, 2.1 and 2.2 A and AA rules (Deque's rules for automated checks). */
 export const WCAG_TAGS = ['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa', 'wcag22aa'];
 
+/** Serious or critical WCAG 2.x A/AA violations on the page, each as `where: rule (elements)` (axe-core, Deque's rules). */
+export async function seriousFindings(page: Page, where: string): Promise<string[]> {
+  const axe = await new AxeBuilder({ page }).withTags(WCAG_TAGS).analyze();
+  return axe.violations
+    .filter((v) => v.impact === 'serious' || v.impact === 'critical')
+    .map((v) => `${where}: ${v.id} (${v.nodes.map((n) => n.target.join(' ')).join(', ')})`);
+}
+
 /** No serious or critical WCAG 2.x A/AA violations (axe-core, Deque's rules for automated checks). */
 export async function expectAccessible(page: Page): Promise<void> {
   const result = await new AxeBuilder({ page }).withTags(WCAG_TAGS).analyze();

@@ -4,6 +4,7 @@ import type { SessionUser } from '@shared/schemas/auth.schemas';
 import type {
   ConsultationInput,
   ConsultationView,
+  DepositPolicy,
   CreateConsultation,
   ProposeQuoteRequestSchema,
   ProposedQuoteView,
@@ -39,11 +40,42 @@ import {
 
 const invalid = (field: string, message: string) => new AppError('VALIDATION_FAILED', 400, message, { [field]: message });
 
-/** A quote books as one of the salon's colour services: the one whose plan has as many sittings as the proposal. */
+/** A service fits a quote when its plan has at least the quote's sittings: its deposit holds a booking that long. */
+const fits = (service: ServiceSummary, sittings: number) => service.stepPlan.sittings.length >= sittings;
+
+/**
+ * A quote books as one of the salon's colour services: the nearest that fits (the one whose plan has as many
+ * sittings as the proposal, else the fewest more; the dearer of two), or when none on the menu has that many
+ * sittings, the one with the most.
+ */
 function defaultService(services: ServiceSummary[], sittings: number): ServiceSummary | undefined {
   const colour = services.filter((s) => s.category === 'colour');
   const distance = (s: ServiceSummary) => Math.abs(s.stepPlan.sittings.length - sittings);
-  return [...colour].sort((a, b) => distance(a) - distance(b) || b.priceCents - a.priceCents)[0];
+  const misfit = (s: ServiceSummary) => (fits(s, sittings) ? 0 : 1);
+  return [...colour].sort((a, b) => misfit(a) - misfit(b) || distance(a) - distance(b) || b.priceCents - a.priceCents)[0];
+}
+
+/**
+ * The deposit a quote carries: its service's own when the service fits; for a longer job than the service's, the
+ * same share of the quote's price (a two-sitting service's deposit does not hold five sittings).
+ */
+function depositPolicy(service: ServiceSummary | undefined, sittings: number): DepositPolicy {
+  if (!service) return { kind: 'fixed', cents: 0 };
+  if (fits(service, sittings) || service.priceCents === 0) return { kind: 'fixed', cents: service.depositCents };
+  return { kind: 'percent', percent: Math.min(100, (service.depositCents / service.priceCents) * 100) };
+}
+
+/** Said on a proposal filed under a service with fewer sittings, so the stylist can pick another or edit the deposit. */
+function misfitWarning(service: ServiceSummary | undefined, sittings: number): QuoteWarning[] {
+  if (!service || fits(service, sittings)) return [];
+  const share = Math.round((service.depositCents / Math.max(1, service.priceCents)) * 100);
+  const planned = service.stepPlan.sittings.length;
+  return [
+    {
+      code: 'no_fitting_service',
+      message: `No colour service on the menu has ${sittings} sittings: the quote books as “${service.name}” (${planned} ${planned === 1 ? 'sitting' : 'sittings'}) with its own ${sittings} sittings, and its deposit is that service’s share of the price (${share} %).`,
+    },
+  ];
 }
 
 async function bookableService(db: Db, salonId: string, serviceId: string, field: string): Promise<ServiceSummary> {
@@ -83,7 +115,7 @@ function proposeOrRefuse(c: ConsultationInput, pricing: QuotePricing, rules: Pla
   }
 }
 
-/** The proposal for a consultation at this salon's prices; the deposit follows the service's deposit. */
+/** The proposal for a consultation at this salon's prices; the deposit follows the service's deposit (depositPolicy). */
 export async function proposeFor(db: Db, user: SessionUser, request: z.output<typeof ProposeQuoteRequestSchema>): Promise<ProposedQuoteView> {
   const { consultation: asked, serviceId, clientId } = request;
   const { salonId } = user;
@@ -91,8 +123,14 @@ export async function proposeFor(db: Db, user: SessionUser, request: z.output<ty
   const { prices, rules } = await quoteInputs(db, salonId);
   const draft = proposeOrRefuse(consultation, { ...prices, deposit: { kind: 'fixed', cents: 0 } }, rules);
   const service = serviceId ? await bookableService(db, salonId, serviceId, 'serviceId') : defaultService(await listServices(db, salonId), draft.sittings);
-  const quote = proposeOrRefuse(consultation, { ...prices, deposit: { kind: 'fixed', cents: service?.depositCents ?? 0 } }, rules);
-  return { ...quote, serviceId: service?.id ?? null, strandTest: consultation.strandTest, productGrams: quote.productGrams as Record<string, number> };
+  const quote = proposeOrRefuse(consultation, { ...prices, deposit: depositPolicy(service, draft.sittings) }, rules);
+  return {
+    ...quote,
+    warnings: [...quote.warnings, ...misfitWarning(service, quote.sittings)],
+    serviceId: service?.id ?? null,
+    strandTest: consultation.strandTest,
+    productGrams: quote.productGrams as Record<string, number>,
+  };
 }
 
 /** Warnings are the rules' judgement of the consultation, kept with the quote whatever the stylist edits. */

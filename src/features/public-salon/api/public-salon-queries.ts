@@ -1,7 +1,7 @@
-import { onlineBookingApi } from '@shared/api/online-booking.api';
+import { firstLoadAddresses } from '@shared/api/first-load-addresses';
 import { apiQuery } from '@client/lib/api-client';
 
 export const publicSalonQueries = {
   // The menu and policies change rarely; free times are fetched separately and fresh.
-  bySlug: (slug: string) => ({ ...apiQuery(onlineBookingApi.publicSalon, { params: { slug } }), staleTime: 10 * 60_000 }),
+  bySlug: (slug: string) => ({ ...apiQuery(firstLoadAddresses.publicSalon, { params: { slug } }), staleTime: 10 * 60_000 }),
 };

@@ -2,7 +2,7 @@ import { createColumnHelper } from '@tanstack/react-table';
 import type { StaffMember } from '@shared/schemas/setup.schemas';
 import { Button } from '@client/components/ui/button';
 import { DataTable } from '@client/components/ui/data-table';
-import { roleLabels } from '@client/lib/booking-labels';
+import { roleLabels } from '@client/lib/role-labels';
 
 const col = createColumnHelper<StaffMember>();
 
