@@ -408,6 +408,24 @@ export interface CheckoutsTable {
   paid_at: Date | null;
 }
 
+/** A salon day's close at the desk: its takings, the cash counted and the difference; one standing per day (migrations/20261210T0900). */
+export interface DayClosesTable {
+  id: Generated<string>;
+  salon_id: string;
+  /** The salon's local date (read back with to_char as YYYY-MM-DD). */
+  day: ColumnType<Date, string, string>;
+  currency: string;
+  totals: ColumnType<unknown, string, string>;
+  expected_cash_cents: number;
+  counted_cash_cents: number;
+  difference_cents: ColumnType<number, never, never>;
+  note: Generated<string>;
+  closed_by: string | null;
+  closed_at: DefaultTimestamp;
+  reopened_by: ColumnType<string | null, string | null | undefined, string | null>;
+  reopened_at: ColumnType<Date | null, Date | null | undefined, Date | null>;
+}
+
 /** A hosted payment session, one open per booking and kind (migrations/20261208T0900). */
 export interface CheckoutSessionsTable {
   id: Generated<string>;
@@ -531,6 +549,7 @@ export interface Database {
   window_offers: WindowOffersTable;
   payments: PaymentsTable;
   checkouts: CheckoutsTable;
+  day_closes: DayClosesTable;
   checkout_sessions: CheckoutSessionsTable;
   payment_events: PaymentEventsTable;
   deposit_requests: DepositRequestsTable;
