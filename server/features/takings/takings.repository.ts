@@ -1,5 +1,6 @@
 import { sql } from 'kysely';
 import type { Db } from '@server/db/database';
+import { moneyMoved } from '../payments';
 
 /** One money movement of a salon day as the takings read it. */
 export interface DayMovement {
@@ -39,7 +40,7 @@ export async function dayMovements(db: Db, salonId: string, from: Date, to: Date
     .where('p.salon_id', '=', salonId)
     .where('p.created_at', '>=', from)
     .where('p.created_at', '<', to)
-    .where((eb) => eb.or([eb('p.status', '=', 'succeeded'), eb.and([eb('p.kind', '=', 'refund'), eb('p.status', '=', 'pending')])]))
+    .where(moneyMoved)
     .orderBy('p.created_at')
     .execute();
 }

@@ -1,5 +1,6 @@
 import { sql } from 'kysely';
 import type { Db } from '@server/db/database';
+import { moneyMoved } from '../payments';
 import type { BookingStatus } from '@shared/schemas/common.schemas';
 
 /** One money movement of the period, with the booking it belongs to (tips left out: they are the stylists'). */
@@ -42,7 +43,7 @@ export async function listPeriodPayments(db: Db, salonId: string, from: Date, to
     .where('p.created_at', '<', to)
     .where('p.kind', '<>', 'tip')
     .where((eb) => eb.or([eb('of.kind', 'is', null), eb('of.kind', '<>', 'tip')]))
-    .where((eb) => eb.or([eb('p.status', '=', 'succeeded'), eb.and([eb('p.kind', '=', 'refund'), eb('p.status', '=', 'pending')])]))
+    .where(moneyMoved)
     .execute();
   return rows as PeriodPayment[];
 }
