@@ -49,6 +49,7 @@ import { registerQuotePriceRoutes } from './features/quote-prices/quote-prices.r
 import { registerRetailProductRoutes } from './features/retail-products/retail-products.routes';
 import { registerMessageRoutes } from './features/messages/messages.routes';
 import { registerPaymentRoutes } from './features/payments';
+import { registerTakingsRoutes } from './features/takings/takings.routes';
 import { createLiveHub, registerLiveEventRoutes } from './features/live-events';
 import { createDiskStorage } from './storage/disk-storage';
 import { createReadCache } from './lib/read-cache';
@@ -116,6 +117,7 @@ export function createApp(deps: Omit<AppDeps, 'table' | 'storage' | 'readCache' 
     registerRetailProductRoutes,
     registerMessageRoutes,
     registerPaymentRoutes,
+    registerTakingsRoutes,
     registerLiveEventRoutes,
   ]) {
     register(full);

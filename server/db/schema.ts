@@ -380,6 +380,50 @@ export interface PaymentsTable {
   status: PaymentStatus;
   message: Generated<string>;
   created_at: DefaultTimestamp;
+  /** The checkout this balance or tip was paid at (migrations/20261209T0900). */
+  checkout_id: ColumnType<string | null, string | null | undefined, string | null>;
+  /** A tip's stylist: one tip row per stylist who shares it; null for every other kind. */
+  staff_id: ColumnType<string | null, string | null | undefined, string | null>;
+}
+
+/** A visit's checkout, one per booking; its money is in `payments` (migrations/20261209T0900). */
+export interface CheckoutsTable {
+  id: Generated<string>;
+  salon_id: string;
+  booking_id: string;
+  currency: string;
+  /** The receipt as shared/money/checkout.ts computed it. */
+  receipt: ColumnType<unknown, string, string>;
+  subtotal_cents: number;
+  discount_cents: Generated<number>;
+  tax_cents: Generated<number>;
+  total_cents: number;
+  deposit_applied_cents: Generated<number>;
+  tip_cents: Generated<number>;
+  /** Left to pay after the deposit, tip included. */
+  due_cents: number;
+  status: ColumnType<'open' | 'paid', 'open' | 'paid' | undefined, 'open' | 'paid'>;
+  created_by: string | null;
+  created_at: DefaultTimestamp;
+  paid_at: Date | null;
+}
+
+/** A salon day's close at the desk: its takings, the cash counted and the difference; one standing per day (migrations/20261210T0900). */
+export interface DayClosesTable {
+  id: Generated<string>;
+  salon_id: string;
+  /** The salon's local date (read back with to_char as YYYY-MM-DD). */
+  day: ColumnType<Date, string, string>;
+  currency: string;
+  totals: ColumnType<unknown, string, string>;
+  expected_cash_cents: number;
+  counted_cash_cents: number;
+  difference_cents: ColumnType<number, never, never>;
+  note: Generated<string>;
+  closed_by: string | null;
+  closed_at: DefaultTimestamp;
+  reopened_by: ColumnType<string | null, string | null | undefined, string | null>;
+  reopened_at: ColumnType<Date | null, Date | null | undefined, Date | null>;
 }
 
 /** A hosted payment session, one open per booking and kind (migrations/20261208T0900). */
@@ -504,6 +548,8 @@ export interface Database {
   idempotency_keys: IdempotencyKeysTable;
   window_offers: WindowOffersTable;
   payments: PaymentsTable;
+  checkouts: CheckoutsTable;
+  day_closes: DayClosesTable;
   checkout_sessions: CheckoutSessionsTable;
   payment_events: PaymentEventsTable;
   deposit_requests: DepositRequestsTable;

@@ -24,6 +24,7 @@ const MEANINGS: Record<string, Meaning> = {
   basins_salon_id_name_key: nameTaken('basin'),
   services_salon_id_name_key: nameTaken('service'),
   retail_products_salon_id_name_key: nameTaken('product'),
+  day_closes_one_standing: { code: 'CONFLICT', message: 'This day is closed already; the owner can reopen it to close it again.' },
   mix_logs_booking_id_sitting_seq_bowl_no_key: { code: 'CONFLICT', field: 'bowlNo', message: 'This bowl of this sitting is already written.' },
 };
 

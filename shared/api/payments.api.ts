@@ -1,5 +1,6 @@
 import { IdParamsSchema } from '../schemas/common.schemas';
 import {
+  BookingPaymentsSchema,
   CheckoutAnswerSchema,
   DepositDetailsSchema,
   DepositRequestBodySchema,
@@ -9,6 +10,7 @@ import {
   PaymentWebhookAnswerSchema,
   PaymentWebhookBodySchema,
   PublicDepositSchema,
+  RefundBodySchema,
 } from '../schemas/payments.schemas';
 import { DESK, endpoint } from './endpoint';
 
@@ -54,6 +56,24 @@ export const paymentsApi = {
     params: IdParamsSchema,
     body: DepositTakenBodySchema,
     response: DepositDetailsSchema,
+  }),
+  payments: endpoint({
+    method: 'get',
+    path: '/api/bookings/:id/payments',
+    access: DESK,
+    summary: "A booking's payments in (deposit, balance, tips) with what each can still refund, and its refunds",
+    params: IdParamsSchema,
+    response: BookingPaymentsSchema,
+  }),
+  refund: endpoint({
+    method: 'post',
+    path: '/api/bookings/:id/refunds',
+    access: DESK,
+    summary: 'Refund (part of) one of the booking’s payments with a reason: to the card through the provider, or in cash',
+    params: IdParamsSchema,
+    body: RefundBodySchema,
+    response: BookingPaymentsSchema,
+    status: 201,
   }),
   depositRequest: endpoint({
     method: 'get',

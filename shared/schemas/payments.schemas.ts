@@ -76,3 +76,49 @@ export const PayDepositRequestSchema = z.object({}).strict();
 /** The provider's webhook body, as documented (the raw bytes are what its signature covers). */
 export const PaymentWebhookBodySchema = z.object({ id: z.string(), type: z.string(), data: z.object({ object: z.record(z.string(), z.unknown()) }) });
 export const PaymentWebhookAnswerSchema = z.object({ received: z.literal(true), duplicate: z.boolean() });
+
+/** One payment in of a booking (its deposit, balance or a stylist's tip) and what of it can still be refunded. */
+export const BookingPaymentSchema = z.object({
+  id: IdSchema,
+  kind: z.enum(['deposit', 'balance', 'tip']),
+  method: z.enum(['card', 'cash']),
+  /** Through the payment provider (refunded through it); false at the desk's card terminal or in cash. */
+  online: z.boolean(),
+  amountCents: z.number().int(),
+  /** Refunded already or on its way back. */
+  refundedCents: z.number().int(),
+  /** What a refund may still return. */
+  leftCents: z.number().int(),
+  at: InstantSchema,
+  byName: z.string().nullable(),
+  /** A tip's stylist. */
+  stylistName: z.string().nullable(),
+});
+export const BookingRefundSchema = z.object({
+  id: IdSchema,
+  refundOf: IdSchema,
+  ofKind: z.enum(['deposit', 'balance', 'tip']),
+  method: z.enum(['card', 'cash']),
+  amountCents: z.number().int(),
+  status: z.enum(['pending', 'succeeded']),
+  reason: z.string(),
+  at: InstantSchema,
+  byName: z.string().nullable(),
+});
+/** A booking's money as the desk refunds from it: every payment in and every refund. */
+export const BookingPaymentsSchema = z.object({
+  bookingId: IdSchema,
+  currency: z.string(),
+  payments: z.array(BookingPaymentSchema),
+  refunds: z.array(BookingRefundSchema),
+});
+export type BookingPayments = z.infer<typeof BookingPaymentsSchema>;
+
+/** A refund at the desk: of which payment, how much (in the currency's minor unit) and why. */
+export const RefundBodySchema = z
+  .object({
+    paymentId: IdSchema,
+    amountCents: z.number().int().min(1, 'Refund at least one cent').max(100_000_000),
+    reason: typedText(200).trim().min(1, 'Say why the money goes back'),
+  })
+  .strict();

@@ -7,6 +7,7 @@ const deskLinks = [
   { to: paths.deskWeek(), label: 'Week' },
   { to: paths.deskBook(), label: 'Book a service' },
   { to: paths.deskStandby, label: 'Standby' },
+  { to: paths.deskTakings(), label: 'Takings' },
   { to: paths.outbox, label: 'Outbox (demo)' },
 ];
 

@@ -78,6 +78,7 @@ const routes: RouteObject[] = [
       rolePage(pages.desk, DESK, () => import('./routes/desk-home')),
       rolePage(pages.deskClient, DESK, () => import('./routes/desk-client')),
       rolePage(pages.outbox, DESK, () => import('./routes/outbox')),
+      rolePage(pages.deskTakings, DESK, () => import('./routes/desk-takings')),
       rolePage(pages.deskBook, DESK, () => import('./routes/desk-book')),
       rolePage(pages.deskBooking, DESK, () => import('./routes/desk-booking')),
       rolePage(pages.deskStandby, DESK, () => import('./routes/desk-standby')),

@@ -28,6 +28,7 @@ export const pages = {
   deskBooking: '/desk/bookings/:id',
   deskStandby: '/desk/standby',
   deskWeek: '/desk/week',
+  deskTakings: '/desk/takings',
   stylist: '/stylist',
   mixLog: '/stylist/bookings/:id/mix-log',
   newConsultation: '/consultations/new',
@@ -72,6 +73,8 @@ export const paths = {
   desk: (date?: string) => to(pages.desk, {}, { date }),
   deskClient: (id: string) => to(pages.deskClient, { id }),
   outbox: pages.outbox,
+  /** The day's takings and close; today in the salon when `date` is left out. */
+  deskTakings: (date?: string) => to(pages.deskTakings, {}, { date }),
   /** Booking a consultation's saved quote, or a client (a service and stylist they asked for, e.g. from the standby list). */
   deskBook: (consultationId?: string, start?: { client: string; service?: string; stylist?: string }) =>
     to(pages.deskBook, {}, { consultation: consultationId, client: start?.client, service: start?.service, stylist: start?.stylist }),

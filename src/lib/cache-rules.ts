@@ -22,7 +22,9 @@ import type { BookingView } from '@shared/schemas/booking-view.schemas';
 import type { MyPreferences } from '@shared/schemas/contact.schemas';
 import type { BookChangedEvent } from '@shared/schemas/live-events.schemas';
 import type { Hold } from '@shared/schemas/online-booking.schemas';
-import type { DepositDetails } from '@shared/schemas/payments.schemas';
+import type { BookingPayments, DepositDetails } from '@shared/schemas/payments.schemas';
+import type { Takings } from '@shared/schemas/takings.schemas';
+import { takingsApi } from '@shared/api/takings.api';
 import { apiKey } from './api-client';
 
 /*
@@ -102,10 +104,27 @@ export function depositChanged(queryClient: QueryClient, details: DepositDetails
   ]);
 }
 
+/**
+ * A refund was made at the desk: the booking's money gets the server's answer; its deposit, page and history, the
+ * views that show deposits, the day's takings and the send log (the client is told) are read again.
+ */
+export function refundMade(queryClient: QueryClient, money: BookingPayments): Promise<unknown> {
+  queryClient.setQueryData(apiKey(paymentsApi.payments, { params: { id: money.bookingId } }), money);
+  return Promise.all([
+    refreshRecord(queryClient, [bookingsApi.one, bookingsApi.history, paymentsApi.deposit], money.bookingId),
+    refreshEndpoints(queryClient, [...BOOK_VIEWS, clientsApi.one, takingsApi.day, ...SENT]),
+  ]);
+}
+
+/** A day was closed or reopened: that day's takings are the server's answer. */
+export function dayCloseChanged(queryClient: QueryClient, takings: Takings): void {
+  queryClient.setQueryData(apiKey(takingsApi.day, { query: { date: takings.date } }), takings);
+}
+
 /** Views of one date (`?date=`; today when it is left out). */
 const DAY_VIEWS = [bookingsApi.deskDay, bookingsApi.stylistDay, windowsApi.list, replanApi.dayConflicts];
 /** A booking's own page and what it opens. */
-const BOOKING_PAGES = [bookingsApi.one, bookingsApi.history, bookingsApi.cancelTerms, paymentsApi.deposit];
+const BOOKING_PAGES = [bookingsApi.one, bookingsApi.history, bookingsApi.cancelTerms, paymentsApi.deposit, paymentsApi.payments];
 /** What a change of the book may send or queue: the send log and the Outbox of the local fakes. */
 const SENT = [messagesApi.sendLog, mailboxApi.mail, mailboxApi.sms];
 

@@ -117,7 +117,7 @@ beforeAll(async () => {
   stylist$ = await signedInAgent(t.app, a.email, a.password);
 
   // B1 Ada, chair 1, finished, $120 (deposit $30): hands 10:00–10:30, developing 10:30–11:30, basin 11:30–11:45.
-  await book({
+  const b1 = await book({
     stylist: a,
     service: services.colour,
     plan: colourPlan,
@@ -137,7 +137,7 @@ beforeAll(async () => {
     ],
   });
   // B2 Ada, chair 2, booked, $60: a cut 10:45–11:15, inside B1's developing time.
-  await book({
+  const b2 = await book({
     stylist: a,
     service: services.cut,
     plan: cutPlan,
@@ -147,7 +147,7 @@ beforeAll(async () => {
     sittings: [{ chair: 1, date: DAY, steps: [['hands_on', '10:45', '11:15']] }],
   });
   // B3 Bo, chair 2, no-show, $90 (deposit $20): 14:00–15:00 (the chair stays held in the book).
-  await book({
+  const b3 = await book({
     stylist: b,
     service: services.cut,
     plan: cutPlan,
@@ -208,7 +208,7 @@ beforeAll(async () => {
     .execute();
   // B6 Bo, a two-sitting correction, finished, $400 (deposit $100): sitting 1 today on chair 1 12:00–14:00
   // (hands 12:00–12:30, developing 12:30–13:30, basin 13:30–13:45, hands 13:45–14:00); sitting 2 a week later, 120 minutes.
-  await book({
+  const b6 = await book({
     stylist: b,
     service: services.correction,
     plan: correctionPlan,
@@ -229,6 +229,43 @@ beforeAll(async () => {
       { chair: 0, date: '2027-03-09', steps: [['hands_on', '10:00', '12:00']] },
     ],
   });
+
+  // The money is what was paid (the payments rows), not the booking prices. On the day, 08:00: every deposit — B1 $30,
+  // B3 $20, B4 $25, B5 $10, B6 $100 — and a $15 tip for Ada (the stylist's, never revenue). At the visits: B1's
+  // balance $90, B2 $60. B5's $10 refunded when it was cancelled. B6's $300 balance at its second sitting on 9 March.
+  const pay = (bookingId: string, kind: 'deposit' | 'balance' | 'tip' | 'refund', cents: number, when: Date, extra: { of?: string; staff?: string } = {}) =>
+    db
+      .insertInto('payments')
+      .values({
+        salon_id: salon.salonId,
+        booking_id: bookingId,
+        client_id: null,
+        kind,
+        method: 'card',
+        amount_cents: cents,
+        currency: 'USD',
+        status: 'succeeded',
+        provider_ref: null,
+        refund_of: extra.of ?? null,
+        staff_id: extra.staff ?? null,
+        created_at: when,
+      })
+      .returning('id')
+      .executeTakeFirstOrThrow();
+  const morning = at(DAY, '08:00');
+  for (const [id, cents] of [
+    [b1, 3000],
+    [b3, 2000],
+    [b4, 2500],
+    [b6, 10000],
+  ] as const)
+    await pay(id, 'deposit', cents, morning);
+  const b5Deposit = await pay(b5, 'deposit', 1000, morning);
+  await pay(b5, 'refund', 1000, at(DAY, '08:30'), { of: b5Deposit.id });
+  await pay(b1, 'tip', 1500, at(DAY, '11:45'), { staff: a.staffId! });
+  await pay(b1, 'balance', 9000, at(DAY, '11:45'));
+  await pay(b2, 'balance', 6000, at(DAY, '11:15'));
+  await pay(b6, 'balance', 30000, at('2027-03-09', '12:00'));
 }, 60_000);
 afterAll(() => t.close());
 
@@ -252,29 +289,30 @@ describe('utilisation figures on a hand-built day', () => {
 
   it('works out money, deposits, attendance and corrections', async () => {
     const r = (await owner$.get(`/api/owner/utilisation?${oneDay}`)).body;
-    // Revenue of kept sittings in the period: B1 $120 + B2 $60 + B6's first sitting 120/240 of $400 = $200 → $380.
-    // Chair-hours: 2 chairs × 12 h = 24; stylist hours: 9 + 9 = 18.
+    // Revenue is the day's takings less refunds, tips left out: deposits $30 + $20 + $25 + $10 + $100 = $185, balances
+    // $90 + $60 = $150, less B5's $10 refund → $325. Chair-hours: 2 chairs × 12 h = 24; stylist hours: 9 + 9 = 18.
     expect(r.money).toEqual({
-      revenueCents: 38000,
+      revenueCents: 32500,
       chairHours: 24,
       stylistHours: 18,
-      revenuePerChairHourCents: 38000 / 24,
-      revenuePerStylistHourCents: 38000 / 18,
+      revenuePerChairHourCents: 32500 / 24,
+      revenuePerStylistHourCents: 32500 / 18,
     });
-    // Deposits on the period's bookings: $30 + $20 + $25 + $10 + $100 = $185 on 5 bookings;
+    // Deposits paid in the period: $30 + $20 + $25 + $10 + $100 = $185 in 5 payments;
     // kept: B3's $20 (no-show) + B4's $25 (late cancel) = $45; refunded: B5's $10.
     expect(r.deposits).toEqual({ takenCents: 18500, taken: 5, keptCents: 4500, kept: 2, refundedCents: 1000, refunded: 1 });
     // 7 bookings, 3 cancelled; no-shows 1 of the 4 not cancelled; late cancels B4 (kept) and B7 (9 h ahead) of 7.
     expect(r.attendance).toEqual({ bookings: 7, noShows: 1, noShowRate: 0.25, cancelled: 3, lateCancels: 2, lateCancelRate: 2 / 7 });
     // One correction: booked 120 + 120 = 240 minutes against a quote of 225..240.
     expect(r.corrections).toEqual({ count: 1, averageBookedMinutes: 240, averageQuotedMinMinutes: 225, averageQuotedMaxMinutes: 240 });
-    // Chair time by service: Correction 120 ($200), Colour 105 ($120), Cut 30 ($60; no-shows and cancellations left out).
+    // Chair time by service: Correction 120 (B6's $100 deposit), Colour 105 (B1's $30 + $90), Cut 30 (no-shows and
+    // cancellations hold no chair time, but their money counts: B2 $60 + B3's kept $20 + B4's kept $25 + B5 $10 − $10 = $105).
     expect(r.topServices).toEqual([
-      { serviceId: services.correction, name: 'Correction', chairMinutes: 120, sittings: 1, revenueCents: 20000 },
+      { serviceId: services.correction, name: 'Correction', chairMinutes: 120, sittings: 1, revenueCents: 10000 },
       { serviceId: services.colour, name: 'Colour', chairMinutes: 105, sittings: 1, revenueCents: 12000 },
-      { serviceId: services.cut, name: 'Cut', chairMinutes: 30, sittings: 1, revenueCents: 6000 },
+      { serviceId: services.cut, name: 'Cut', chairMinutes: 30, sittings: 1, revenueCents: 10500 },
     ]);
-    // Ada: B1, B2, B4, B7; revenue $180 over 9 h. Bo: B3, B5, B6; $200 over 9 h.
+    // Ada: B1, B2, B4, B7; revenue $120 + $60 + $25 = $205 over 9 h. Bo: B3, B5, B6; $20 + $0 + $100 = $120 over 9 h.
     expect(r.stylists).toEqual([
       {
         stylistId: a.staffId,
@@ -284,8 +322,8 @@ describe('utilisation figures on a hand-built day', () => {
         onClockMinutes: 540,
         bookings: 4,
         noShows: 0,
-        revenueCents: 18000,
-        revenuePerHourCents: 2000,
+        revenueCents: 20500,
+        revenuePerHourCents: 20500 / 9,
       },
       {
         stylistId: b.staffId,
@@ -295,8 +333,8 @@ describe('utilisation figures on a hand-built day', () => {
         onClockMinutes: 540,
         bookings: 3,
         noShows: 1,
-        revenueCents: 20000,
-        revenuePerHourCents: 20000 / 9,
+        revenueCents: 12000,
+        revenuePerHourCents: 12000 / 9,
       },
     ]);
   });
@@ -312,7 +350,7 @@ describe('utilisation figures on a hand-built day', () => {
     expect(cell(11).chairHeldMinutes).toBe(60);
     expect(cell(9).chairOccupancy).toBe(0);
     expect(r.weeks).toEqual([
-      { from: DAY, to: '2027-03-03', bookings: 7, chairOccupancy: 315 / 1440, windowUse: 0.25, handsOnShare: 195 / 1080, revenueCents: 38000 },
+      { from: DAY, to: '2027-03-03', bookings: 7, chairOccupancy: 315 / 1440, windowUse: 0.25, handsOnShare: 195 / 1080, revenueCents: 32500 },
     ]);
   });
 
@@ -321,9 +359,9 @@ describe('utilisation figures on a hand-built day', () => {
     expect(r.period).toMatchObject({ kind: 'month', from: '2027-03-01', to: '2027-04-01', days: 31 });
     // March 2027 starts on a Monday: weeks from the 1st, 8th, 15th, 22nd and 29th.
     expect(r.weeks.map((w: { from: string }) => w.from)).toEqual(['2027-03-01', '2027-03-08', '2027-03-15', '2027-03-22', '2027-03-29']);
-    // B6's second sitting (9 March) now counts too: $380 + $200.
-    expect(r.money.revenueCents).toBe(58000);
-    expect(r.weeks[1].revenueCents).toBe(20000);
+    // B6's $300 balance, paid at its second sitting (9 March), now counts too: $325 + $300.
+    expect(r.money.revenueCents).toBe(62500);
+    expect(r.weeks[1].revenueCents).toBe(30000);
   });
 });
 
@@ -370,7 +408,7 @@ describe('bad input', () => {
     expect(res.body.period.days).toBe(731);
     expect(res.body.period.scenarios).toBeGreaterThan(1);
     // Summed over scenarios the same minutes give the same share: 315 chair-minutes on 2 March, 120 on 9 March.
-    expect(res.body.money.revenueCents).toBe(58000);
+    expect(res.body.money.revenueCents).toBe(62500);
     const exported = await owner$.get(`/api/owner/utilisation/scenario?${long}`);
     expect(exported.status).toBe(400);
     expect(exported.body.error.fields.to).toMatch(/120 days/);

@@ -11,6 +11,7 @@ import { replanBookingMessages } from '../messages';
 import { withColourBookingsKept } from './skin-test-dependants';
 import { bookingSkinTestStates } from '../skin-tests';
 import { formatMoney } from '@shared/money/money';
+import { lockBookingForMoney, settleDepositOutcome } from '../payments';
 
 /**
  * The deposit policy on cancelling: inside the salon's cancellation window before the first sitting the
@@ -28,6 +29,16 @@ export function depositOutcome(
 }
 
 export type CancelWhy = CancelTerms['why'];
+
+/** Why a cancellation kept or refunded the deposit, as its money's history line says it. */
+const CANCEL_WHY_WORDS: Record<CancelWhy, string> = {
+  no_deposit: 'no deposit',
+  not_paid: 'not paid',
+  skin_test_blocked: "cancelled: the client's skin-test record no longer allows this colour",
+  salon_keeps_nothing: 'cancelled: the salon refunds deposits on every cancellation',
+  inside_window: "cancelled inside the salon's cancellation window",
+  outside_window: "cancelled outside the salon's cancellation window",
+};
 
 /**
  * What cancelling now does to the deposit, and why: the one rule behind the cancel itself and the terms the desk
@@ -90,8 +101,10 @@ export async function deskCancelTerms(db: Db, salon: Salon, bookingId: string, n
 }
 
 /**
- * Cancels with a reason; the deposit policy decides kept or refunded. `nothingPaid`: a booking released because its
- * deposit was never paid, so there is no deposit to keep or refund.
+ * Cancels with a reason; the deposit policy decides kept or refunded, and the payments feature moves the money in the
+ * same transaction (a refund made to the card after the commit: `makeDecidedRefunds`). The booking is locked first,
+ * so a second cancel at the same moment finds it cancelled and moves nothing. `nothingPaid`: a booking released
+ * because its deposit was never paid, so there is no deposit to keep or refund.
  */
 export async function cancelBooking(
   db: Kysely<Database>,
@@ -103,13 +116,16 @@ export async function cancelBooking(
   options: { nothingPaid?: boolean } = {},
 ): Promise<void> {
   await db.transaction().execute(async (trx) => {
+    await lockBookingForMoney(trx, bookingId);
     const before = await bookingSnapshot(trx, bookingId);
     if (!before || before.booking.salonId !== salon.id) throw notFound('That booking');
-    const { outcome } = await outcomeOf(trx, salon, before, bookingId, now);
-    const cancel = () => markCancelled(trx, bookingId, reason, options.nothingPaid ? null : outcome);
+    const { outcome, why } = await outcomeOf(trx, salon, before, bookingId, now);
+    const decided = options.nothingPaid ? null : outcome;
+    const cancel = () => markCancelled(trx, bookingId, reason, decided);
     if (before.booking.clientId) await withColourBookingsKept(trx, salon, before.booking.clientId, now, cancel);
     else await cancel();
     await auditBookingChange(trx, { salonId: salon.id, actorUserId, bookingId, action: `cancelled: ${reason}`, before: before.audit });
+    await settleDepositOutcome(trx, { bookingId, outcome: decided, actorUserId, why: CANCEL_WHY_WORDS[why] });
     await replanBookingMessages(trx, bookingId, now, 'cancelled'); // queued reminders dropped, cancellation planned
   });
 }

@@ -11,6 +11,7 @@ import { bookingStatusFor, noShowFrom } from '@shared/rules/sitting-status';
 import { AppError } from '@server/lib/app-error';
 import { depositOutcome } from '../bookings';
 import { planClientMessage, replanBookingMessages } from '../messages';
+import { settleDepositOutcome } from '../payments';
 import { assertStillBooked } from './arrival.service';
 import { releaseSitting, setDepositOutcome, setSittingState, type SittingForTap } from './sitting-run.repository';
 import { runTap } from './sitting-tap.service';
@@ -37,7 +38,10 @@ export function markNoShow(db: Kysely<Database>, user: SessionUser, bookingId: s
     const { booking } = found;
     const outcome =
       booking.depositOutcome ?? depositOutcome(booking.depositCents, found.sitting.start, now, salon.cancellationWindowHours, salon.cancellationKeeps);
-    if (outcome && !booking.depositOutcome) await setDepositOutcome(trx, booking.id, outcome);
+    if (outcome && !booking.depositOutcome) {
+      await setDepositOutcome(trx, booking.id, outcome);
+      await settleDepositOutcome(trx, { bookingId: booking.id, outcome, actorUserId: user.id, why: `no-show at sitting ${seq}` });
+    }
     if (booking.clientId) await planClientMessage(trx, noShowMessage(salon, found, outcome), now);
     // Nothing more is planned for a booking with no sitting left to come (its aftercare is dropped with the rest).
     const statuses = found.sittingStatuses.map((s, i) => (i === seq - 1 ? 'no_show' : s));

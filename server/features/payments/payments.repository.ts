@@ -2,13 +2,15 @@ import { sql } from 'kysely';
 import type { Db } from '@server/db/database';
 import type { PaymentMethod } from '@server/db/schema';
 
-/** A payment in (a deposit, so far), as the rules that settle it read it. */
+/** A payment in (a deposit, a balance, a tip) or a refund, as the rules that settle and refund it read it. */
 export interface StoredPayment {
   id: string;
   salonId: string;
   bookingId: string;
   clientId: string | null;
   kind: 'deposit' | 'balance' | 'refund' | 'tip';
+  method: PaymentMethod;
+  status: 'pending' | 'succeeded' | 'declined' | 'failed';
   amountCents: number;
   currency: string;
   providerRef: string | null;
@@ -20,6 +22,8 @@ const PAYMENT_COLUMNS = [
   'booking_id as bookingId',
   'client_id as clientId',
   'kind',
+  'method',
+  'status',
   'amount_cents as amountCents',
   'currency',
   'provider_ref as providerRef',
@@ -110,7 +114,7 @@ export async function refundedOf(db: Db, paymentId: string): Promise<number> {
  */
 export async function insertRefund(
   db: Db,
-  r: { of: StoredPayment; amountCents: number; status: 'pending' | 'succeeded'; providerRef: string | null; message: string },
+  r: { of: StoredPayment; amountCents: number; status: 'pending' | 'succeeded'; providerRef: string | null; message: string; recordedBy?: string | null },
 ): Promise<string> {
   const row = await db
     .insertInto('payments')
@@ -119,8 +123,10 @@ export async function insertRefund(
       booking_id: r.of.bookingId,
       client_id: r.of.clientId,
       kind: 'refund',
-      method: 'card',
+      // Money goes back the way it came: a cash payment in cash, a card payment to the card.
+      method: r.of.method,
       refund_of: r.of.id,
+      recorded_by: r.recordedBy ?? null,
       amount_cents: r.amountCents,
       currency: r.of.currency,
       provider_ref: r.providerRef,
@@ -160,6 +166,57 @@ export async function pendingRefunds(db: Db, ids?: string[], limit = 50): Promis
     .where('r.status', '=', 'pending');
   if (ids) q = q.where('r.id', 'in', ids);
   return q.orderBy('r.created_at').limit(limit).execute();
+}
+
+/** Every payment in of a booking (deposit, balance, tip), oldest first, with what of each has gone back or is on its way back. */
+export async function bookingPayments(db: Db, bookingId: string) {
+  return db
+    .selectFrom('payments as p')
+    .leftJoin('users as u', 'u.id', 'p.recorded_by')
+    .leftJoin('staff as s', 's.id', 'p.staff_id')
+    .select([
+      'p.id',
+      'p.kind',
+      'p.method',
+      'p.amount_cents as amountCents',
+      'p.currency',
+      'p.provider_ref as providerRef',
+      'p.created_at as at',
+      'u.name as byName',
+      's.display_name as stylistName',
+      sql<string>`(select coalesce(sum(r.amount_cents), 0) from payments r where r.refund_of = p.id and r.status in ('pending', 'succeeded'))`.as(
+        'refundedCents',
+      ),
+    ])
+    .where('p.booking_id', '=', bookingId)
+    .where('p.kind', '<>', 'refund')
+    .where('p.status', '=', 'succeeded')
+    .orderBy('p.created_at')
+    .execute();
+}
+
+/** Every refund of a booking, oldest first, with the payment it returns, its reason and who made it at the desk. */
+export async function bookingRefunds(db: Db, bookingId: string) {
+  return db
+    .selectFrom('payments as r')
+    .innerJoin('payments as p', 'p.id', 'r.refund_of')
+    .leftJoin('users as u', 'u.id', 'r.recorded_by')
+    .select([
+      'r.id',
+      'r.refund_of as refundOf',
+      'p.kind as ofKind',
+      'r.method',
+      'r.amount_cents as amountCents',
+      'r.status',
+      'r.message as reason',
+      'r.created_at as at',
+      'u.name as byName',
+    ])
+    .where('r.booking_id', '=', bookingId)
+    .where('r.kind', '=', 'refund')
+    .where('r.status', 'in', ['pending', 'succeeded'])
+    .orderBy('r.created_at')
+    .execute();
 }
 
 /** Every movement of a booking's deposit money, oldest first, with the name of whoever took it at the desk. */

@@ -5,6 +5,7 @@ import { apiRoute } from '@server/lib/api-route';
 import { receivePaymentWebhook } from './payment-webhook.service';
 import { depositDetails, markDepositTaken, requestDeposit } from './desk-deposits.service';
 import { payDepositRequest, viewDepositRequest } from './deposit-link.service';
+import { bookingMoney, refundPayment } from './desk-refunds.service';
 
 /** The payment provider's webhook, a booking's deposit at the desk, and a deposit request's link. */
 export function registerPaymentRoutes({ table, db, config, payments, mailer, sms }: AppDeps): void {
@@ -21,6 +22,8 @@ export function registerPaymentRoutes({ table, db, config, payments, mailer, sms
     requestDeposit(db, { mailer, sms }, user, params.id, body.channel, baseUrl(req), new Date()),
   );
   apiRoute(table, paymentsApi.depositTaken, ({ user, params, body }) => markDepositTaken(db, payments, user, params.id, body));
+  apiRoute(table, paymentsApi.payments, ({ user, params }) => bookingMoney(db, user, params.id));
+  apiRoute(table, paymentsApi.refund, ({ user, params, body }) => refundPayment(db, { payments, senders: { mailer, sms } }, user, params.id, body, new Date()));
   apiRoute(table, paymentsApi.depositRequest, ({ params }) => viewDepositRequest(db, params.token, new Date()));
   apiRoute(table, paymentsApi.payDepositRequest, ({ params, req }) => payDepositRequest(db, payments, params.token, baseUrl(req), new Date()));
 }

@@ -12,8 +12,6 @@ export interface PeriodSitting {
   serviceName: string;
   category: string;
   stylistId: string;
-  priceCents: number;
-  depositCents: number;
   depositOutcome: 'kept' | 'refunded' | null;
   /** Only for colour bookings (the only ones that can be corrections); null otherwise. */
   stepPlan: StepPlan | null;
@@ -41,8 +39,6 @@ export async function listPeriodSittings(db: Db, salonId: string, from: Date, to
       'sv.name as serviceName',
       'sv.category',
       'b.stylist_id as stylistId',
-      'b.price_cents as priceCents',
-      'b.deposit_cents as depositCents',
       'b.deposit_outcome as depositOutcome',
       'si.seq',
       'si.status as sittingStatus',

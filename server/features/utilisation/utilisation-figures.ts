@@ -1,12 +1,16 @@
 /**
- * The booking figures of a period (money, deposits, attendance, corrections, services, per stylist and
- * per week), from the period's sittings. Pure: every definition is in docs/utilisation.md.
+ * The booking figures of a period (attendance, corrections, services, per stylist and per week) from the period's
+ * sittings, and its money (revenue and deposits) from the period's payments. Pure: every definition is in
+ * docs/utilisation.md.
  */
 import type { StepPlan } from '@shared/schemas/step-plan.schemas';
 import type { PeriodSitting } from './utilisation-bookings.repository';
+import type { PeriodPayment } from './utilisation-payments.repository';
 
 /** Statuses whose time is (or will be) worked and paid for. */
 const KEPT = new Set(['booked', 'checked_in', 'finished']);
+/** Statuses of a booking that ended without the visit: its deposit, unless refunded, is kept. */
+const ENDED_UNSERVED = new Set(['cancelled', 'no_show']);
 /** A colour booking planned for this long or longer (or over several sittings) counts as a correction. */
 export const CORRECTION_MIN_MINUTES = 240;
 
@@ -28,6 +32,8 @@ export function quotedMinutes(plan: StepPlan): { min: number; max: number } {
 
 export interface FigureInput {
   sittings: PeriodSitting[];
+  /** The period's payments and refunds (tips left out): the money figures. */
+  payments: PeriodPayment[];
   /** Instants as milliseconds since 1970. */
   from: number;
   to: number;
@@ -77,17 +83,12 @@ export function bookingFigures(input: FigureInput) {
     const stylist = stylists.get(b.stylistId) ?? emptyTally();
     stylists.set(b.stylistId, stylist);
     const kept = KEPT.has(b.status);
-    // Money and chair time follow the sittings: a booking's price is shared by its sittings in proportion to their minutes.
+    // Chair time follows the sittings: each kept sitting counts in the period (and week) it starts in.
     for (const s of sittings) {
       if (!kept || !inPeriod(s.start)) continue;
-      const share = b.priceCents * (minutes(s) / bookedMinutes);
-      revenueCents += share;
-      stylist.revenueCents += share;
-      weeks[weekOf(s.start)]!.revenueCents += share;
       const service = services.get(b.serviceId) ?? { serviceId: b.serviceId, name: b.serviceName, chairMinutes: 0, sittings: 0, revenueCents: 0 };
       service.chairMinutes += minutes(s);
       service.sittings += 1;
-      service.revenueCents += share;
       services.set(b.serviceId, service);
     }
     // Everything counted per booking belongs to the period of its first sitting.
@@ -95,41 +96,52 @@ export function bookingFigures(input: FigureInput) {
     attendance.bookings++;
     stylist.bookings++;
     weeks[weekOf(first.start)]!.bookings++;
-    if (b.depositCents > 0) {
-      deposits.taken++;
-      deposits.takenCents += b.depositCents;
-    }
     // A no-show is the booking's status or a no-show marked on any of its sittings (a correction may go on after one).
     if (b.status === 'no_show' || sittings.some((s) => s.sittingStatus === 'no_show')) {
       attendance.noShows++;
       stylist.noShows++;
-      // The deposit policy decided at the mark (kept unless the salon keeps nothing); older no-shows kept it.
-      if (b.depositCents > 0 && b.depositOutcome === 'refunded') {
-        deposits.refunded++;
-        deposits.refundedCents += b.depositCents;
-      } else if (b.depositCents > 0) {
-        deposits.kept++;
-        deposits.keptCents += b.depositCents;
-      }
     }
     if (b.status === 'cancelled') {
       attendance.cancelled++;
       const at = input.cancelledAt.get(b.bookingId);
       const late = b.depositOutcome === 'kept' || (at !== undefined && first.start - at.getTime() < input.cancellationWindowHours * 3_600_000);
       if (late) attendance.lateCancels++;
-      if (b.depositOutcome === 'kept') {
-        deposits.kept++;
-        deposits.keptCents += b.depositCents;
-      }
-      if (b.depositOutcome === 'refunded') {
-        deposits.refunded++;
-        deposits.refundedCents += b.depositCents;
-      }
     }
     const quoted = b.stepPlan && quotedMinutes(b.stepPlan);
     if (kept && quoted && b.category === 'colour' && (b.stepPlan!.sittings.length > 1 || quoted.max >= CORRECTION_MIN_MINUTES)) {
       corrections.push({ booked: bookedMinutes, ...quoted });
     }
+  }
+  // Money is what was paid, less what went back, when it was recorded (tips are the stylists', not the salon's).
+  const keptOf = new Map<string, number>();
+  const refundedOf = new Set<string>();
+  for (const p of input.payments) {
+    if (!inPeriod(p.at)) continue;
+    const signed = p.kind === 'refund' ? -p.amountCents : p.amountCents;
+    revenueCents += signed;
+    weeks[weekOf(p.at)]!.revenueCents += signed;
+    const stylist = stylists.get(p.stylistId) ?? emptyTally();
+    stylist.revenueCents += signed;
+    stylists.set(p.stylistId, stylist);
+    const service = services.get(p.serviceId);
+    if (service) service.revenueCents += signed;
+    const isDeposit = p.kind === 'deposit' || p.ofKind === 'deposit';
+    if (p.kind === 'deposit') {
+      deposits.taken++;
+      deposits.takenCents += p.amountCents;
+    }
+    if (p.kind === 'refund' && p.ofKind === 'deposit') {
+      deposits.refundedCents += p.amountCents;
+      refundedOf.add(p.bookingId);
+    }
+    // A deposit the salon keeps: its booking ended without the visit (cancelled, a no-show) and it was not refunded.
+    if (isDeposit && ENDED_UNSERVED.has(p.bookingStatus) && p.depositOutcome !== 'refunded') keptOf.set(p.bookingId, (keptOf.get(p.bookingId) ?? 0) + signed);
+  }
+  deposits.refunded = refundedOf.size;
+  for (const cents of keptOf.values()) {
+    if (cents <= 0) continue;
+    deposits.kept++;
+    deposits.keptCents += cents;
   }
   return {
     revenueCents,

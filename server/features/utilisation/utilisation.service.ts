@@ -6,6 +6,7 @@ import { todayIn } from '../bookings';
 import { findSalon } from '../salon';
 import { salonStaffNames } from '../setup';
 import { cancelledAt, listPeriodSittings } from './utilisation-bookings.repository';
+import { listPeriodPayments } from './utilisation-payments.repository';
 import { bookingFigures } from './utilisation-figures';
 import { measurePeriod, periodScenario } from './utilisation-occupancy';
 import { timekeepingByStylist } from './utilisation-timekeeping.repository';
@@ -44,9 +45,10 @@ async function ownerUtilisation(db: Db, salon: Salon, period: Period): Promise<O
   const weekCuts = chunksOf(period).flatMap((c, i) => (i === 0 ? c.weekCuts : c.weekCuts.slice(1)));
   const from = instant(period.from);
   const to = instant(period.to);
-  const [occupancy, sittings, names, timed] = await Promise.all([
+  const [occupancy, sittings, payments, names, timed] = await Promise.all([
     measurePeriod(db, salon, period),
     listPeriodSittings(db, salon.id, new Date(from), new Date(to)),
+    listPeriodPayments(db, salon.id, new Date(from), new Date(to)),
     salonStaffNames(db, salon.id),
     timekeepingByStylist(db, salon.id, new Date(from), new Date(to), ON_TIME_MINUTES),
   ]);
@@ -54,6 +56,7 @@ async function ownerUtilisation(db: Db, salon: Salon, period: Period): Promise<O
   const cancelled = [...new Set(sittings.filter((s) => s.status === 'cancelled').map((s) => s.bookingId))];
   const figures = bookingFigures({
     sittings,
+    payments,
     from,
     to,
     weekStarts: weekCuts.map(instant),

@@ -14,6 +14,8 @@ import { catalogueQueries } from '@client/features/catalogue/api/catalogue-queri
 import { MixLogSection } from '@client/features/mix-log/components/mix-log-section';
 import { DepositPanel } from '@client/features/deposits/components/deposit-panel';
 import { depositQueries } from '@client/features/deposits/api/deposit-queries';
+import { PaymentsPanel } from '@client/features/refunds/components/payments-panel';
+import { refundQueries } from '@client/features/refunds/api/refund-queries';
 import { salonQueries } from '@client/features/salon/api/salon-queries';
 import { localDateOf } from '@shared/time/salon-time';
 import { queryClient } from '@client/lib/query-client';
@@ -25,6 +27,7 @@ export async function loader({ params }: LoaderFunctionArgs) {
     queryClient.ensureQueryData(salonQueries.current()),
     queryClient.ensureQueryData(catalogueQueries.stylists()),
     queryClient.ensureQueryData(depositQueries.ofBooking(params.id!)),
+    queryClient.ensureQueryData(refundQueries.ofBooking(params.id!)),
   ]);
   return null;
 }
@@ -50,6 +53,7 @@ export function Component() {
       <PageHeader title={`${booking.client.name} · ${booking.service.name}`} subtitle={<TimeZoneNote timeZone={salon.timeZone} />} />
       <BookingSummary booking={booking} timeZone={salon.timeZone} currency={salon.currency} />
       <DepositPanel bookingId={booking.id} bookingStatus={booking.status} timeZone={salon.timeZone} />
+      <PaymentsPanel bookingId={booking.id} timeZone={salon.timeZone} />
       <div className="grid gap-6 lg:grid-cols-2">
         {open && <MoveSittingForm booking={booking} timeZone={salon.timeZone} stylists={stylists.stylists} initial={initial} />}
         {(open || booking.status === 'cancelled') && <CancelBookingForm booking={booking} currency={salon.currency} />}

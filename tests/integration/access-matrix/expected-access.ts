@@ -168,6 +168,13 @@ export const expectedAccess: Record<string, Expectation> = {
   'GET /api/bookings/{id}/deposit': { allow: DESK, own: true },
   'POST /api/bookings/{id}/deposit/requests': { allow: DESK, own: true },
   'POST /api/bookings/{id}/deposit/taken': { allow: DESK, own: true },
+  // Refunds at the desk: a booking's payments and a refund of one of them.
+  'GET /api/bookings/{id}/payments': { allow: DESK, own: true },
+  'POST /api/bookings/{id}/refunds': { allow: DESK, own: true },
+  // The day's takings: the desk and the owner read and close a day; only the owner reopens one.
+  'GET /api/desk/takings': { allow: DESK },
+  'POST /api/desk/takings/close': { allow: DESK },
+  'POST /api/desk/takings/reopen': { allow: ['owner'] },
   'GET /api/public/deposit-requests/{token}': { allow: 'anyone' },
   'POST /api/public/deposit-requests/{token}/pay': { allow: 'anyone' },
   'POST /api/dev/sms/inbound': { allow: DESK },

@@ -2,7 +2,7 @@ import { getCoreRowModel, getSortedRowModel, useReactTable, type ColumnDef, type
 import { useMemo, useState } from 'react';
 import { Button } from '@client/components/ui/button';
 import { TableGrid } from '@client/components/ui/table-grid';
-import { downloadCsv, toCsv, type CsvCell } from '../csv';
+import { downloadCsv, toCsv, type CsvCell } from '@client/lib/csv';
 
 export interface FigureColumn<T> {
   id: string;
