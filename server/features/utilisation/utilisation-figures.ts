@@ -6,7 +6,7 @@ import type { StepPlan } from '@shared/schemas/step-plan.schemas';
 import type { PeriodSitting } from './utilisation-bookings.repository';
 
 /** Statuses whose time is (or will be) worked and paid for. */
-const KEPT = new Set(['booked', 'checked_in', 'finished']);
+const KEPT = new Set(['booked', 'checked_in', 'finished', 'checked_out']);
 /** A colour booking planned for this long or longer (or over several sittings) counts as a correction. */
 export const CORRECTION_MIN_MINUTES = 240;
 
