@@ -2,6 +2,7 @@ import type { QueryClient } from '@tanstack/react-query';
 import { bookingsApi } from '@shared/api/bookings.api';
 import { clientsApi } from '@shared/api/clients.api';
 import { consultationsApi } from '@shared/api/consultations.api';
+import { deskCheckoutApi } from '@shared/api/desk-checkout.api';
 import type { Answer, Endpoint } from '@shared/api/endpoint';
 import { followUpRulesApi } from '@shared/api/follow-up-rules.api';
 import { hairHistoryApi } from '@shared/api/hair-history.api';
@@ -23,6 +24,7 @@ import type { MyPreferences } from '@shared/schemas/contact.schemas';
 import type { BookChangedEvent } from '@shared/schemas/live-events.schemas';
 import type { Hold } from '@shared/schemas/online-booking.schemas';
 import type { DepositDetails } from '@shared/schemas/payments.schemas';
+import type { DeskCheckout } from '@shared/schemas/desk-checkout.schemas';
 import { apiKey } from './api-client';
 
 /*
@@ -99,6 +101,15 @@ export function depositChanged(queryClient: QueryClient, details: DepositDetails
   return Promise.all([
     refreshRecord(queryClient, [bookingsApi.one, bookingsApi.history], details.bookingId),
     refreshEndpoints(queryClient, [...BOOK_VIEWS, clientsApi.one, ...SENT]),
+  ]);
+}
+
+/** A visit checked out (or its card part paid): the booking's status, its deposit, the book, the receipt e-mail. */
+export function checkoutChanged(queryClient: QueryClient, checkout: DeskCheckout): Promise<unknown> {
+  queryClient.setQueryData(apiKey(deskCheckoutApi.view, { params: { id: checkout.bookingId } }), checkout);
+  return Promise.all([
+    refreshRecord(queryClient, [bookingsApi.one, bookingsApi.history, paymentsApi.deposit], checkout.bookingId),
+    refreshEndpoints(queryClient, [...BOOK_VIEWS, clientsApi.one, retailProductsApi.list, ...SENT]),
   ]);
 }
 

@@ -1,7 +1,5 @@
 import type { BookingStatus } from '@shared/schemas/common.schemas';
-import type { DeskCheckout, DeskCheckoutBody } from '@shared/schemas/desk-checkout.schemas';
-import type { RetailProduct } from '@shared/schemas/retail-product.schemas';
-import { CheckoutError, type CheckoutInput } from '@shared/money/checkout';
+import type { DeskCheckout } from '@shared/schemas/desk-checkout.schemas';
 import type { VisitFacts } from './checkouts.repository';
 
 /**
@@ -22,32 +20,4 @@ export function serviceLinesOf(f: VisitFacts): DeskCheckout['services'] {
   if (!f.priceIsFrom) return [{ label: f.serviceName, priceCents: f.bookedCents, upToCents: null }];
   // The range starts at the menu's "from" price and runs up to what the client was quoted (the booking's price).
   return [{ label: f.serviceName, priceCents: f.menuCents, upToCents: Math.max(f.menuCents, f.bookedCents) }];
-}
-
-/**
- * computeCheckout's input from the visit and the desk's choices: every price from the server's records (the menu or
- * quote, the product list), the tax from the salon's setting, the deposit from the money taken, the tip for the
- * stylists who worked on the visit. A product that is not on sale is refused naming its line.
- */
-export function checkoutInputOf(f: VisitFacts, body: DeskCheckoutBody, products: RetailProduct[], depositPaidCents: number): CheckoutInput {
-  const lines = serviceLinesOf(f);
-  if (body.services.length !== lines.length) throw new CheckoutError('services', `Send one entry per service line (${lines.length})`);
-  return {
-    currency: f.currency,
-    services: lines.map((line, i) => {
-      const chosen = body.services[i];
-      if (line.upToCents === null) return { label: line.label, priceCents: line.priceCents };
-      const fromPrice = { upToCents: line.upToCents, chargedCents: chosen?.chargedCents ?? line.priceCents, reason: chosen?.reason ?? '' };
-      return { label: line.label, priceCents: line.priceCents, fromPrice };
-    }),
-    retail: body.retail.map((r, i) => {
-      const product = products.find((p) => p.id === r.productId && p.active);
-      if (!product) throw new CheckoutError(`retail.${i}.productId`, 'That product is not on sale');
-      return { label: product.name, quantity: r.quantity, unitCents: product.priceCents };
-    }),
-    discount: body.discount,
-    tax: { rateMilliPercent: f.taxRateMilliPercent, inclusive: f.taxInclusive },
-    depositPaidCents,
-    tip: body.tipCents > 0 ? { cents: body.tipCents, stylistIds: f.stylists.map((s) => s.id) } : null,
-  };
 }

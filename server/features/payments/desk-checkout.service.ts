@@ -22,7 +22,9 @@ import {
   visitFacts,
   type VisitFacts,
 } from './checkouts.repository';
-import { checkoutInputOf, notReadyReason, serviceLinesOf } from './desk-checkout-input';
+import { notReadyReason, serviceLinesOf } from './desk-checkout-input';
+import { checkoutInputFor, type CheckoutOffer } from '@shared/money/checkout-input';
+import type { RetailProduct } from '@shared/schemas/retail-product.schemas';
 import { auditCheckout, completeDeskCheckout, tipWords } from './settle-balance.service';
 
 /** How long the hosted page for a checkout's card part stays open (the client pays at the desk, now). */
@@ -84,6 +86,18 @@ export async function deskCheckoutView(db: Kysely<Database>, user: SessionUser, 
   };
 }
 
+/** What the visit can charge, from the server's own records only. */
+function offerOf(f: VisitFacts, products: RetailProduct[], depositPaidCents: number): CheckoutOffer {
+  return {
+    currency: f.currency,
+    services: serviceLinesOf(f),
+    products: products.filter((p) => p.active),
+    tax: { rateMilliPercent: f.taxRateMilliPercent, inclusive: f.taxInclusive },
+    depositPaidCents,
+    stylistIds: f.stylists.map((s) => s.id),
+  };
+}
+
 const named = (r: Checkout, f: VisitFacts) => ({
   ...r,
   tipShares: r.tipShares.map((s) => ({ ...s, name: f.stylists.find((x) => x.id === s.stylistId)?.name ?? 'Stylist' })),
@@ -116,7 +130,7 @@ export async function checkOutVisit(
     const products = await listRetailProducts(trx, user.salonId);
     let receipt: Checkout;
     try {
-      receipt = computeCheckout(checkoutInputOf(f, body, products, await depositPaidOf(trx, bookingId)));
+      receipt = computeCheckout(checkoutInputFor(offerOf(f, products, await depositPaidOf(trx, bookingId)), body));
     } catch (err) {
       if (err instanceof CheckoutError) throw invalidField(err.field, err.message);
       throw err;

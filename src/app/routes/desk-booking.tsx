@@ -13,6 +13,7 @@ import { bookingQueries } from '@client/features/bookings/api/booking-queries';
 import { catalogueQueries } from '@client/features/catalogue/api/catalogue-queries';
 import { MixLogSection } from '@client/features/mix-log/components/mix-log-section';
 import { DepositPanel } from '@client/features/deposits/components/deposit-panel';
+import { CheckoutLinkCard } from '@client/features/desk-checkout/components/checkout-link-card';
 import { depositQueries } from '@client/features/deposits/api/deposit-queries';
 import { salonQueries } from '@client/features/salon/api/salon-queries';
 import { localDateOf } from '@shared/time/salon-time';
@@ -49,6 +50,7 @@ export function Component() {
       </Link>
       <PageHeader title={`${booking.client.name} · ${booking.service.name}`} subtitle={<TimeZoneNote timeZone={salon.timeZone} />} />
       <BookingSummary booking={booking} timeZone={salon.timeZone} currency={salon.currency} />
+      <CheckoutLinkCard bookingId={booking.id} status={booking.status} />
       <DepositPanel bookingId={booking.id} bookingStatus={booking.status} timeZone={salon.timeZone} />
       <div className="grid gap-6 lg:grid-cols-2">
         {open && <MoveSittingForm booking={booking} timeZone={salon.timeZone} stylists={stylists.stylists} initial={initial} />}
