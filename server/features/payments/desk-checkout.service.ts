@@ -27,6 +27,8 @@ import { checkoutInputFor, type CheckoutOffer } from '@shared/money/checkout-inp
 import type { RetailProduct } from '@shared/schemas/retail-product.schemas';
 import { auditCheckout, completeDeskCheckout, tipWords } from './settle-balance.service';
 
+/** The largest amount a checkout's integer columns hold (PostgreSQL's integer, 2^31 − 1). */
+const MAX_STORED_CENTS = 2_147_483_647;
 /** How long the hosted page for a checkout's card part stays open (the client pays at the desk, now). */
 const CARD_PAGE_MINUTES = 60;
 
@@ -135,6 +137,8 @@ export async function checkOutVisit(
       if (err instanceof CheckoutError) throw invalidField(err.field, err.message);
       throw err;
     }
+    // The stored amounts are PostgreSQL integers: a checkout beyond them is refused, not a failed insert.
+    if (receipt.subtotalCents + receipt.taxCents + receipt.tipCents > MAX_STORED_CENTS) throw invalidField('retail', 'Too large for one checkout');
     const cash = cashPartOf(body.pay, receipt);
 
     const checkoutId = await insertDeskCheckout(trx, { salonId: f.salonId, bookingId, receipt, createdBy: user.id });
