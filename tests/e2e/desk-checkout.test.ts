@@ -1,10 +1,9 @@
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import { hashPassword } from '@server/auth/password';
 import { createDb, createPool } from '@server/db/database';
-import { DEMO_PASSWORD } from '@server/demo/demo-catalogue';
 import type { StepPlan } from '@shared/schemas/step-plan.schemas';
 import { insertSittingAround } from '../factories/day-of-service';
+import { insertDemoStylist, removeDemoVisit } from '../factories/demo-visit';
 import { apiWrite, baseUrl, connectBrowser, expectAccessible, screenshot, signedInPage } from '../setup/browser';
 
 // The desk checks a client out in the demo salon when the visit ends: a product, a tip, the balance paid on the
@@ -30,24 +29,7 @@ const made: { userId?: string; staffId?: string } = {};
 beforeAll(async () => {
   browser = await connectBrowser();
   const salon = await db.selectFrom('salons').select('id').where('slug', '=', 'kestrel-and-pine').executeTakeFirstOrThrow();
-  const user = await db
-    .insertInto('users')
-    .values({
-      salon_id: salon.id,
-      email: `wren.${Date.now()}@demo.test`,
-      name: 'Wren Calder',
-      role: 'stylist',
-      phone: null,
-      password_hash: await hashPassword(DEMO_PASSWORD),
-    })
-    .returning('id')
-    .executeTakeFirstOrThrow();
-  const staff = await db
-    .insertInto('staff')
-    .values({ salon_id: salon.id, user_id: user.id, display_name: 'Wren', skills: ['colour'], max_clients_at_once: 2 })
-    .returning('id')
-    .executeTakeFirstOrThrow();
-  Object.assign(made, { userId: user.id, staffId: staff.id });
+  Object.assign(made, await insertDemoStylist(db, salon.id, { name: 'Wren Calder', displayName: 'Wren', email: `wren.${Date.now()}@demo.test` }));
   const client = await db
     .selectFrom('clients')
     .select('id')
@@ -66,7 +48,7 @@ beforeAll(async () => {
   bookingId = await insertSittingAround(db, {
     salonId: salon.id,
     serviceId: service.id,
-    stylistId: staff.id,
+    stylistId: made.staffId!,
     clientId: client.id,
     minutesAgo: 60,
     depositCents: 3000,
@@ -76,24 +58,7 @@ beforeAll(async () => {
 
 afterAll(async () => {
   await browser.close();
-  const places = await db
-    .selectFrom('sittings')
-    .innerJoin('booking_steps', 'booking_steps.sitting_id', 'sittings.id')
-    .select(['sittings.chair_id', 'booking_steps.basin_id'])
-    .where('sittings.booking_id', '=', bookingId)
-    .execute();
-  await db.deleteFrom('payments').where('booking_id', '=', bookingId).where('kind', '=', 'refund').execute();
-  await db.deleteFrom('payments').where('booking_id', '=', bookingId).execute();
-  await db.deleteFrom('checkouts').where('booking_id', '=', bookingId).execute();
-  await db.deleteFrom('bookings').where('id', '=', bookingId).execute();
-  await db
-    .deleteFrom('chairs')
-    .where('id', 'in', [...new Set(places.map((c) => c.chair_id))])
-    .execute();
-  const basins = places.map((c) => c.basin_id).filter((b): b is string => b !== null);
-  if (basins.length) await db.deleteFrom('basins').where('id', 'in', basins).execute();
-  if (made.staffId) await db.deleteFrom('staff').where('id', '=', made.staffId).execute();
-  if (made.userId) await db.deleteFrom('users').where('id', '=', made.userId).execute();
+  await removeDemoVisit(db, bookingId, made);
   await db.destroy();
 });
 

@@ -40,13 +40,12 @@ async function depositPaidOf(db: Db, bookingId: string): Promise<number> {
 
 /** A visit's checkout as the desk sees it: what it can charge, and the checkout once made, with its money. */
 export async function deskCheckoutView(db: Kysely<Database>, user: SessionUser, bookingId: string): Promise<DeskCheckout> {
+  // The checkout before the booking: read the other way round, a payment completing in between could show the
+  // checkout paid beside a booking not yet checked out, and the desk's page would stop waiting on that.
+  const stored = await findDeskCheckout(db, bookingId);
   const f = await visitFacts(db, user.salonId, bookingId);
   if (!f) throw notFound('That booking');
-  const [depositPaidCents, products, stored] = await Promise.all([
-    depositPaidOf(db, bookingId),
-    listRetailProducts(db, user.salonId),
-    findDeskCheckout(db, bookingId),
-  ]);
+  const [depositPaidCents, products] = await Promise.all([depositPaidOf(db, bookingId), listRetailProducts(db, user.salonId)]);
   let checkout: DeskCheckout['checkout'] = null;
   if (stored) {
     const [paid, open] = await Promise.all([checkoutPayments(db, stored.id), findOpenCheckout(db, bookingId, 'balance')]);
