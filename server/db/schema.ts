@@ -213,7 +213,7 @@ export interface BookingsTable {
   hold_secret_hash: ColumnType<string | null, string | null | undefined, string | null>;
   service_id: string;
   stylist_id: string;
-  status: 'held' | 'booked' | 'checked_in' | 'finished' | 'cancelled' | 'no_show';
+  status: 'held' | 'booked' | 'checked_in' | 'finished' | 'checked_out' | 'cancelled' | 'no_show';
   step_plan: Json;
   price_cents: Generated<number>;
   deposit_cents: Generated<number>;

@@ -58,5 +58,5 @@ export const RoleSchema = z.enum(['client', 'front_desk', 'stylist', 'owner']);
 export type Role = z.infer<typeof RoleSchema>;
 export const StepKindSchema = z.enum(['hands_on', 'developing', 'basin']);
 export type StepKind = z.infer<typeof StepKindSchema>;
-export const BookingStatusSchema = z.enum(['held', 'booked', 'checked_in', 'finished', 'cancelled', 'no_show']);
+export const BookingStatusSchema = z.enum(['held', 'booked', 'checked_in', 'finished', 'checked_out', 'cancelled', 'no_show']);
 export type BookingStatus = z.infer<typeof BookingStatusSchema>;

@@ -14,7 +14,7 @@ type Props = { user: SessionUser | null };
 export function SiteHeader({ user }: Props) {
   const navigate = useNavigate();
   return (
-    <header className="border-b border-ink/10 bg-white">
+    <header className="border-b border-ink/10 bg-white print:hidden">
       <div className="mx-auto flex w-full max-w-7xl flex-wrap items-center gap-x-6 gap-y-2 px-4 py-3 sm:px-6">
         <Link to={paths.home} className="text-2xl font-extrabold tracking-tight text-oxide">
           Dwell

@@ -26,6 +26,9 @@ export const pages = {
   outbox: '/desk/outbox',
   deskBook: '/desk/book',
   deskBooking: '/desk/bookings/:id',
+  /** Checkout when a visit ends (the hosted payment page sends the browser back here; the server writes it too). */
+  deskCheckout: '/desk/bookings/:id/checkout',
+  deskReceipt: '/desk/bookings/:id/receipt',
   deskStandby: '/desk/standby',
   deskWeek: '/desk/week',
   deskTakings: '/desk/takings',
@@ -79,6 +82,8 @@ export const paths = {
   deskBook: (consultationId?: string, start?: { client: string; service?: string; stylist?: string }) =>
     to(pages.deskBook, {}, { consultation: consultationId, client: start?.client, service: start?.service, stylist: start?.stylist }),
   /** A booking's page; `move` opens its move form for that sitting, with free times from `from` (another day for a late client). */
+  deskCheckout: (id: string) => to(pages.deskCheckout, { id }),
+  deskReceipt: (id: string) => to(pages.deskReceipt, { id }),
   deskBooking: (id: string, move?: { sitting: number; from?: string }) =>
     to(pages.deskBooking, { id }, { sitting: move && String(move.sitting), from: move?.from }),
   deskStandby: pages.deskStandby,

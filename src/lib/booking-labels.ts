@@ -17,6 +17,7 @@ export const bookingStatusLabels: Record<BookingStatus, string> = {
   booked: 'Booked',
   checked_in: 'Checked in',
   finished: 'Finished',
+  checked_out: 'Checked out',
   cancelled: 'Cancelled',
   no_show: 'No-show',
 };

@@ -2,6 +2,7 @@ import type { QueryClient } from '@tanstack/react-query';
 import { bookingsApi } from '@shared/api/bookings.api';
 import { clientsApi } from '@shared/api/clients.api';
 import { consultationsApi } from '@shared/api/consultations.api';
+import { deskCheckoutApi } from '@shared/api/desk-checkout.api';
 import type { Answer, Endpoint } from '@shared/api/endpoint';
 import { followUpRulesApi } from '@shared/api/follow-up-rules.api';
 import { hairHistoryApi } from '@shared/api/hair-history.api';
@@ -25,6 +26,7 @@ import type { Hold } from '@shared/schemas/online-booking.schemas';
 import type { BookingPayments, DepositDetails } from '@shared/schemas/payments.schemas';
 import type { Takings } from '@shared/schemas/takings.schemas';
 import { takingsApi } from '@shared/api/takings.api';
+import type { DeskCheckout } from '@shared/schemas/desk-checkout.schemas';
 import { apiKey } from './api-client';
 
 /*
@@ -119,6 +121,15 @@ export function refundMade(queryClient: QueryClient, money: BookingPayments): Pr
 /** A day was closed or reopened: that day's takings are the server's answer. */
 export function dayCloseChanged(queryClient: QueryClient, takings: Takings): void {
   queryClient.setQueryData(apiKey(takingsApi.day, { query: { date: takings.date } }), takings);
+}
+
+/** A visit checked out (or its card part paid): the booking's status, its deposit, the book, the receipt e-mail. */
+export function checkoutChanged(queryClient: QueryClient, checkout: DeskCheckout): Promise<unknown> {
+  queryClient.setQueryData(apiKey(deskCheckoutApi.view, { params: { id: checkout.bookingId } }), checkout);
+  return Promise.all([
+    refreshRecord(queryClient, [bookingsApi.one, bookingsApi.history, paymentsApi.deposit, paymentsApi.payments], checkout.bookingId),
+    refreshEndpoints(queryClient, [...BOOK_VIEWS, clientsApi.one, retailProductsApi.list, takingsApi.day, ...SENT]),
+  ]);
 }
 
 /** Views of one date (`?date=`; today when it is left out). */

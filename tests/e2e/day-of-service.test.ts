@@ -1,10 +1,10 @@
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import { hashPassword } from '@server/auth/password';
 import { createDb, createPool } from '@server/db/database';
 import { DEMO_PASSWORD } from '@server/demo/demo-catalogue';
 import type { StepPlan } from '@shared/schemas/step-plan.schemas';
 import { insertSittingAround } from '../factories/day-of-service';
+import { insertDemoStylist, removeDemoVisit } from '../factories/demo-visit';
 import { baseUrl, connectBrowser, screenshot, signedInPage, signInThroughPage } from '../setup/browser';
 
 // The desk marks a client arrived, and the stylist taps the sitting through on My day on a 768 px tablet, with Undo.
@@ -34,24 +34,14 @@ const made: { userId?: string; staffId?: string } = {};
 beforeAll(async () => {
   browser = await connectBrowser();
   const salon = await db.selectFrom('salons').select('id').where('slug', '=', 'kestrel-and-pine').executeTakeFirstOrThrow();
-  const user = await db
-    .insertInto('users')
-    .values({ salon_id: salon.id, email: stylistEmail, name: 'Rowan Hale', role: 'stylist', phone: null, password_hash: await hashPassword(DEMO_PASSWORD) })
-    .returning('id')
-    .executeTakeFirstOrThrow();
-  const staff = await db
-    .insertInto('staff')
-    .values({ salon_id: salon.id, user_id: user.id, display_name: 'Rowan', skills: ['colour'], max_clients_at_once: 2 })
-    .returning('id')
-    .executeTakeFirstOrThrow();
-  Object.assign(made, { userId: user.id, staffId: staff.id });
+  Object.assign(made, await insertDemoStylist(db, salon.id, { name: 'Rowan Hale', displayName: 'Rowan', email: stylistEmail }));
   const client = await db.selectFrom('clients').select(['id', 'name']).where('salon_id', '=', salon.id).orderBy('name').executeTakeFirstOrThrow();
   clientName = client.name;
   const service = await db.selectFrom('services').select('id').where('salon_id', '=', salon.id).where('category', '=', 'colour').executeTakeFirstOrThrow();
   bookingId = await insertSittingAround(db, {
     salonId: salon.id,
     serviceId: service.id,
-    stylistId: staff.id,
+    stylistId: made.staffId!,
     clientId: client.id,
     minutesAgo: 0,
     plan: lightener,
@@ -60,21 +50,7 @@ beforeAll(async () => {
 
 afterAll(async () => {
   await browser.close();
-  const places = await db
-    .selectFrom('sittings')
-    .innerJoin('booking_steps', 'booking_steps.sitting_id', 'sittings.id')
-    .select(['sittings.chair_id', 'booking_steps.basin_id'])
-    .where('sittings.booking_id', '=', bookingId)
-    .execute();
-  await db.deleteFrom('bookings').where('id', '=', bookingId).execute();
-  await db
-    .deleteFrom('chairs')
-    .where('id', 'in', [...new Set(places.map((c) => c.chair_id))])
-    .execute();
-  const basins = places.map((c) => c.basin_id).filter((b): b is string => b !== null);
-  if (basins.length) await db.deleteFrom('basins').where('id', 'in', basins).execute();
-  if (made.staffId) await db.deleteFrom('staff').where('id', '=', made.staffId).execute();
-  if (made.userId) await db.deleteFrom('users').where('id', '=', made.userId).execute();
+  await removeDemoVisit(db, bookingId, made);
   await db.destroy();
 });
 

@@ -21,7 +21,7 @@ export interface BookingFilter {
   statuses?: BookingStatus[];
 }
 
-const LIVE: BookingStatus[] = ['held', 'booked', 'checked_in', 'finished', 'no_show'];
+const LIVE: BookingStatus[] = ['held', 'booked', 'checked_in', 'finished', 'checked_out', 'no_show'];
 
 /** A booking as the book shows it, less its skin-test state, and what that state is worked out from. */
 export interface BookingViewRow {

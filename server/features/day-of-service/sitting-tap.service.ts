@@ -65,7 +65,8 @@ export async function runTap(db: Kysely<Database>, req: TapRequest, now: Date, w
 
     let after = await findSittingForTap(trx, req.bookingId, req.seq);
     if (!after) throw notFound('That booking'); // removed meanwhile (a lapsed hold's cleanup): nothing is kept
-    const status = bookingStatusFor(after.sittingStatuses);
+    // A paid checkout settles the visit: a last step tapped after the client paid does not move it back.
+    const status = after.booking.status === 'checked_out' ? 'checked_out' : bookingStatusFor(after.sittingStatuses);
     if (status !== after.booking.status) {
       await setBookingStatus(trx, req.bookingId, status);
       after = { ...after, booking: { ...after.booking, status } };

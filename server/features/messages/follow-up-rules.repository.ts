@@ -85,7 +85,7 @@ export async function bookingsForFollowUps(db: Db, serviceId: string, since: Dat
     .innerJoin('sittings as s', 's.booking_id', 'b.id')
     .select('b.id')
     .where('b.service_id', '=', serviceId)
-    .where('b.status', 'in', ['booked', 'checked_in', 'finished'])
+    .where('b.status', 'in', ['booked', 'checked_in', 'finished', 'checked_out'])
     .groupBy('b.id')
     .having((eb) => eb.fn.max(eb.fn('upper', ['s.during'])), '>', since)
     .execute();

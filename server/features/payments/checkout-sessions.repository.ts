@@ -107,7 +107,8 @@ export async function findCheckoutByProviderId(db: Db, providerSessionId: string
 
 /**
  * Open sessions nobody should pay on any more: their booking is gone (a lapsed hold) or no longer asks for anything
- * (cancelled, or the deposit was taken at the desk). The sweep closes them at the provider too.
+ * (cancelled, or the deposit was taken at the desk; a balance page stays open until its checkout is paid, after which
+ * the booking is checked out). The sweep closes them at the provider too.
  */
 export async function staleOpenCheckouts(db: Db, limit = 50): Promise<StoredCheckout[]> {
   const rows = await db
@@ -119,16 +120,19 @@ export async function staleOpenCheckouts(db: Db, limit = 50): Promise<StoredChec
       eb.or([
         eb('b.id', 'is', null),
         eb('b.status', 'not in', ['held', 'booked', 'checked_in', 'finished']),
-        eb(
-          'b.deposit_cents',
-          '<=',
-          eb
-            .selectFrom('payments as p')
-            .select((p) => p.fn.coalesce(p.fn.sum<number>('p.amount_cents'), p.lit(0)).as('paid'))
-            .whereRef('p.booking_id', '=', 'c.booking_id')
-            .where('p.kind', '=', 'deposit')
-            .where('p.status', '=', 'succeeded'),
-        ),
+        eb.and([
+          eb('c.kind', '=', 'deposit'),
+          eb(
+            'b.deposit_cents',
+            '<=',
+            eb
+              .selectFrom('payments as p')
+              .select((p) => p.fn.coalesce(p.fn.sum<number>('p.amount_cents'), p.lit(0)).as('paid'))
+              .whereRef('p.booking_id', '=', 'c.booking_id')
+              .where('p.kind', '=', 'deposit')
+              .where('p.status', '=', 'succeeded'),
+          ),
+        ]),
       ]),
     )
     .limit(limit)

@@ -1,4 +1,5 @@
 import express from 'express';
+import { deskCheckoutApi } from '@shared/api/desk-checkout.api';
 import { paymentsApi } from '@shared/api/payments.api';
 import type { AppDeps } from '@server/app-deps';
 import { apiRoute } from '@server/lib/api-route';
@@ -6,8 +7,9 @@ import { receivePaymentWebhook } from './payment-webhook.service';
 import { depositDetails, markDepositTaken, requestDeposit } from './desk-deposits.service';
 import { payDepositRequest, viewDepositRequest } from './deposit-link.service';
 import { bookingMoney, refundPayment } from './desk-refunds.service';
+import { checkOutVisit, deskCheckoutView } from './desk-checkout.service';
 
-/** The payment provider's webhook, a booking's deposit at the desk, and a deposit request's link. */
+/** The payment provider's webhook, a booking's deposit at the desk, a deposit request's link, and checkout at the desk. */
 export function registerPaymentRoutes({ table, db, config, payments, mailer, sms }: AppDeps): void {
   const baseUrl = (req: express.Request) => config.publicUrl ?? `${req.protocol}://${req.get('host')}`;
   apiRoute(
@@ -25,5 +27,9 @@ export function registerPaymentRoutes({ table, db, config, payments, mailer, sms
   apiRoute(table, paymentsApi.payments, ({ user, params }) => bookingMoney(db, user, params.id));
   apiRoute(table, paymentsApi.refund, ({ user, params, body }) => refundPayment(db, { payments, senders: { mailer, sms } }, user, params.id, body, new Date()));
   apiRoute(table, paymentsApi.depositRequest, ({ params }) => viewDepositRequest(db, params.token, new Date()));
+  apiRoute(table, deskCheckoutApi.view, ({ user, params }) => deskCheckoutView(db, user, params.id));
+  apiRoute(table, deskCheckoutApi.checkOut, ({ user, params, body, req }) =>
+    checkOutVisit(db, { payments, senders: { mailer, sms } }, user, params.id, body, baseUrl(req), new Date()),
+  );
   apiRoute(table, paymentsApi.payDepositRequest, ({ params, req }) => payDepositRequest(db, payments, params.token, baseUrl(req), new Date()));
 }

@@ -11,6 +11,7 @@ import { lockBookingForMoney } from './booking-money.repository';
 import { findCheckoutByProviderId, markCheckoutPaid, type StoredCheckout } from './checkout-sessions.repository';
 import { completeRefund, findPaymentByProviderRef, insertCardPayment, insertRefund, lockPayment, refundedOf } from './payments.repository';
 import { refundMessage, refundNotes, type RefundWhy } from './refund-words';
+import { settleBalancePaid } from './settle-balance.service';
 
 /** What is left to do once the transaction that settled a payment has committed. */
 export interface AfterSettle {
@@ -91,6 +92,8 @@ async function recordCheckoutPayment(trx: Db, session: CheckoutSession): Promise
 }
 
 async function settlePayment(trx: Db, checkout: StoredCheckout, paymentId: string, now: Date): Promise<AfterSettle> {
+  // A checkout's card part pays the visit's balance and tip, not a deposit.
+  if (checkout.kind === 'balance') return settleBalancePaid(trx, checkout, paymentId, now);
   const after = nothingAfter();
   const booking = await lockBookingForMoney(trx, checkout.bookingId);
   const payment = await lockPayment(trx, paymentId);

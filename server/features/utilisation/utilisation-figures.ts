@@ -8,7 +8,7 @@ import type { PeriodSitting } from './utilisation-bookings.repository';
 import type { PeriodPayment } from './utilisation-payments.repository';
 
 /** Statuses whose time is (or will be) worked and paid for. */
-const KEPT = new Set(['booked', 'checked_in', 'finished']);
+const KEPT = new Set(['booked', 'checked_in', 'finished', 'checked_out']);
 /** Statuses of a booking that ended without the visit: its deposit, unless refunded, is kept. */
 const ENDED_UNSERVED = new Set(['cancelled', 'no_show']);
 /** A colour booking planned for this long or longer (or over several sittings) counts as a correction. */

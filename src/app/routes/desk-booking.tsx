@@ -13,6 +13,7 @@ import { bookingQueries } from '@client/features/bookings/api/booking-queries';
 import { catalogueQueries } from '@client/features/catalogue/api/catalogue-queries';
 import { MixLogSection } from '@client/features/mix-log/components/mix-log-section';
 import { DepositPanel } from '@client/features/deposits/components/deposit-panel';
+import { CheckoutLinkCard } from '@client/features/desk-checkout/components/checkout-link-card';
 import { depositQueries } from '@client/features/deposits/api/deposit-queries';
 import { PaymentsPanel } from '@client/features/refunds/components/payments-panel';
 import { refundQueries } from '@client/features/refunds/api/refund-queries';
@@ -52,6 +53,7 @@ export function Component() {
       </Link>
       <PageHeader title={`${booking.client.name} · ${booking.service.name}`} subtitle={<TimeZoneNote timeZone={salon.timeZone} />} />
       <BookingSummary booking={booking} timeZone={salon.timeZone} currency={salon.currency} />
+      <CheckoutLinkCard bookingId={booking.id} status={booking.status} />
       <DepositPanel bookingId={booking.id} bookingStatus={booking.status} timeZone={salon.timeZone} />
       <PaymentsPanel bookingId={booking.id} timeZone={salon.timeZone} />
       <div className="grid gap-6 lg:grid-cols-2">

@@ -7,6 +7,7 @@ const looks: Record<BookingStatus, string> = {
   booked: 'border-sage',
   checked_in: 'border-oxide',
   finished: 'border-ink/40',
+  checked_out: 'border-ink',
   cancelled: 'border-brick text-brick',
   no_show: 'border-brick text-brick',
 };

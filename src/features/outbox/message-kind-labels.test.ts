@@ -6,6 +6,7 @@ describe('the send log names each kind of message in words', () => {
     expect(messageKindLabel('reminder_48h')).toBe('Reminder, 48 hours before');
     expect(messageKindLabel('day_before_sitting')).toBe('Day before a sitting');
     expect(messageKindLabel('desk_no_deposit_list')).toBe('Desk list: bookings without a deposit');
+    expect(messageKindLabel('receipt')).toBe('Receipt');
     expect(messageKindLabel('something_new')).toBe('Something new');
   });
 });

@@ -14,6 +14,7 @@ const KIND_LABELS: Record<string, string> = {
   window_offer_gone: 'Window offer withdrawn',
   stylist_day_list: "Stylist's list for the day",
   desk_no_deposit_list: 'Desk list: bookings without a deposit',
+  receipt: 'Receipt',
 };
 
 /** "Reminder, 48 hours before" for `reminder_48h`; a kind with no words yet reads as its code with spaces. */

@@ -177,5 +177,8 @@ export const expectedAccess: Record<string, Expectation> = {
   'POST /api/desk/takings/reopen': { allow: ['owner'] },
   'GET /api/public/deposit-requests/{token}': { allow: 'anyone' },
   'POST /api/public/deposit-requests/{token}/pay': { allow: 'anyone' },
+  // Checkout at the desk when a visit ends (the desk and the owner).
+  'GET /api/bookings/{id}/checkout': { allow: DESK, own: true },
+  'POST /api/bookings/{id}/checkout': { allow: DESK, own: true },
   'POST /api/dev/sms/inbound': { allow: DESK },
 };
