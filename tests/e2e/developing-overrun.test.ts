@@ -2,14 +2,11 @@ import type { Browser, BrowserContext, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { createDb, createPool } from '@server/db/database';
 import { TEST_CLOCK_HEADER } from '@server/lib/request-clock';
-import type { StepPlan } from '@shared/schemas/step-plan.schemas';
-import { middayZone } from '../factories/day-of-service';
-import { ALL_DAY, atMinute, bookStepsAt, gridBase, openAroundTheClock } from '../factories/replan-day';
-import { insertSalon } from '../factories/salon';
-import { insertPlannedService } from '../factories/service';
-import { insertUser, TEST_PASSWORD } from '../factories/user';
-import { baseUrl, connectBrowser, screenshot, signInThroughPage } from '../setup/browser';
-import { noticeRaised, recordNotices } from '../setup/notices';
+import { atMinute, gridBase } from '../factories/replan-day';
+import { runningLateScene } from '../factories/running-late-scene';
+import { baseUrl, connectBrowser, screenshot } from '../setup/browser';
+import { noticeRaised } from '../setup/notices';
+import { postAnswer as answer, staffPage } from '../setup/staff-pages';
 
 // Two browsers run a sitting the way the day goes: the stylist taps through a gloss on My day, on time, and then lets
 // its developing step run past its most time while nobody taps. The desk's open day shows the conflict this makes for
@@ -18,75 +15,19 @@ import { noticeRaised, recordNotices } from '../setup/notices';
 // their requests (the server's test clock header) stand at the minutes of the day the test picks, and time flows on
 // from there. A salon of its own, open around the clock at about midday in its zone, keeps the demo salon as loaded.
 
-/** Apply 20 min, develop 20–40 min (booked at 40), rinse 10 min. */
-const glossPlan: StepPlan = {
-  sittings: [
-    {
-      steps: [
-        { kind: 'hands_on', label: 'Apply gloss', product: 'none', minutes: 20 },
-        { kind: 'developing', label: 'Gloss develops', product: 'none', minMinutes: 20, maxMinutes: 40 },
-        { kind: 'basin', label: 'Rinse', product: 'none', minutes: 10 },
-      ],
-    },
-  ],
-};
-const cutPlan: StepPlan = { sittings: [{ steps: [{ kind: 'hands_on', label: 'Cut', product: 'none', minutes: 30 }] }] };
-
 const pool = createPool(inject('databaseUrl'));
 const db = createDb(pool);
 let browser: Browser;
 const people = { desk: '', stylist: '' };
-const LATER_PHONE = '+19705550177';
 /** Minute 0: the later client's cut. The gloss was booked from minute −70: apply −70..−50, develop −50..−10, rinse −10..0. */
 const base = gridBase();
 let laterBooking = '';
 
 beforeAll(async () => {
   browser = await connectBrowser();
-  const salon = await insertSalon(db, { timeZone: middayZone(), chairs: 2, basins: 1 });
-  await openAroundTheClock(db, salon.salonId);
-  const desk = await insertUser(db, salon.salonId, 'front_desk');
-  const rowan = await insertUser(db, salon.salonId, 'stylist', { hours: ALL_DAY });
-  await insertUser(db, salon.salonId, 'stylist', { hours: ALL_DAY }); // free to take a client over
-  Object.assign(people, { desk: desk.email, stylist: rowan.email });
-  const running = await insertUser(db, salon.salonId, 'client');
-  const later = await insertUser(db, salon.salonId, 'client');
-  await db.updateTable('clients').set({ name: 'Noor Haddad' }).where('id', '=', running.clientId!).execute();
-  await db.updateTable('clients').set({ name: 'Ilse Brandt', phone: LATER_PHONE, message_channel: 'both' }).where('id', '=', later.clientId!).execute();
-  const gloss = await insertPlannedService(db, salon.salonId, { plan: glossPlan, name: 'Gloss' });
-  const cut = await insertPlannedService(db, salon.salonId, { plan: cutPlan, name: 'Cut' });
-  const [chair1, chair2] = salon.chairs;
-  const noor = await bookStepsAt(db, {
-    salonId: salon.salonId,
-    serviceId: gloss,
-    stylistId: rowan.staffId!,
-    clientId: running.clientId!,
-    chairId: chair1!,
-    plan: glossPlan,
-    base,
-    steps: [
-      { kind: 'hands_on', label: 'Apply gloss', from: -70, to: -50 },
-      { kind: 'developing', label: 'Gloss develops', from: -50, to: -10 },
-      { kind: 'basin', label: 'Rinse', from: -10, to: 0, basinId: salon.basins[0] },
-    ],
-  });
-  // Noor arrived five minutes early (the desk's tap, written here).
-  await db
-    .updateTable('sittings')
-    .set({ status: 'arrived', arrived_at: atMinute(-75, base), late_minutes: 0 })
-    .where('booking_id', '=', noor)
-    .execute();
-  await db.updateTable('bookings').set({ status: 'checked_in' }).where('id', '=', noor).execute();
-  laterBooking = await bookStepsAt(db, {
-    salonId: salon.salonId,
-    serviceId: cut,
-    stylistId: rowan.staffId!,
-    clientId: later.clientId!,
-    chairId: chair2!,
-    plan: cutPlan,
-    base,
-    steps: [{ kind: 'hands_on', label: 'Cut', from: 0, to: 30 }],
-  });
+  const scene = await runningLateScene(db, { runningName: 'Noor Haddad', laterName: 'Ilse Brandt', laterPhone: '+19705550177', glossFrom: -70, base });
+  Object.assign(people, { desk: scene.deskEmail, stylist: scene.stylistEmail });
+  laterBooking = scene.laterBooking;
 });
 
 afterAll(async () => {
@@ -113,21 +54,15 @@ async function both(contexts: BrowserContext[], at: number): Promise<void> {
   }
 }
 
-/** A signed-in page in a browser context of its own, its clock at `at`; the desk's records each notification raised. */
-async function personAt(email: string, home: string, at: number, notices = false): Promise<Page> {
-  const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
-  if (notices) await recordNotices(context);
-  await context.clock.install({ time: at });
-  await serveAt(context, at);
-  const page = await context.newPage();
-  await signInThroughPage(page, email, TEST_PASSWORD);
-  await page.waitForURL(`${baseUrl()}${home}**`);
-  return page;
-}
-
-/** An answer from the API to this page (a first write may be answered CSRF and sent again, as the api client does). */
-const answer = (page: Page, path: string) =>
-  page.waitForResponse(async (r) => r.url().includes(path) && r.request().method() === 'POST' && !(r.status() === 403 && (await r.text()).includes('"CSRF"')));
+/** A signed-in page in a browser context of its own, its clock (browser and requests) at `at`; the desk's records each notification raised. */
+const personAt = (email: string, home: string, at: number, notices = false): Promise<Page> =>
+  staffPage(browser, email, home, {
+    notices,
+    prepare: async (context) => {
+      await context.clock.install({ time: at });
+      await serveAt(context, at);
+    },
+  });
 
 async function tap(page: Page, button: string, path: string): Promise<void> {
   const card = page.getByRole('article', { name: /Noor Haddad/ });
