@@ -4,9 +4,9 @@ import { createDb, createPool } from '@server/db/database';
 import { TEST_CLOCK_HEADER } from '@server/lib/request-clock';
 import { atMinute, gridBase } from '../factories/replan-day';
 import { runningLateScene } from '../factories/running-late-scene';
-import { baseUrl, connectBrowser, screenshot } from '../setup/browser';
+import { connectBrowser, screenshot } from '../setup/browser';
 import { noticeRaised } from '../setup/notices';
-import { postAnswer as answer, staffPage } from '../setup/staff-pages';
+import { changeNoticeInOutbox, postAnswer as answer, staffPage } from '../setup/staff-pages';
 
 // Two browsers run a sitting the way the day goes: the stylist taps through a gloss on My day, on time, and then lets
 // its developing step run past its most time while nobody taps. The desk's open day shows the conflict this makes for
@@ -120,14 +120,7 @@ describe('a developing step that runs over', () => {
     // The later client is told once per channel they take, through the message pipeline; the text is in the Outbox.
     const change = await db.selectFrom('messages').select('channel').where('booking_id', '=', laterBooking).where('kind', '=', 'change').execute();
     expect(change.map((m) => m.channel).sort()).toEqual(['email', 'sms']);
-    await desk.goto(`${baseUrl()}/desk/outbox`);
-    const log = desk.getByRole('region', { name: 'Sent messages' });
-    await log
-      .getByRole('row')
-      .filter({ hasText: /970\D*555\D*0177/ }) // the number as the salon's country writes it
-      .filter({ hasText: /Change notice \(SMS\)/ })
-      .first()
-      .waitFor();
+    await changeNoticeInOutbox(desk, /970\D*555\D*0177/);
     await screenshot(desk, 'developing-overrun-outbox');
     await desk.context().close();
   });

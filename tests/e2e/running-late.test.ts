@@ -2,9 +2,9 @@ import type { Browser } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { createDb, createPool } from '@server/db/database';
 import { runningLateScene } from '../factories/running-late-scene';
-import { baseUrl, connectBrowser, screenshot } from '../setup/browser';
+import { connectBrowser, screenshot } from '../setup/browser';
 import { noticeRaised } from '../setup/notices';
-import { postAnswer as answer, staffPage } from '../setup/staff-pages';
+import { changeNoticeInOutbox, postAnswer as answer, staffPage } from '../setup/staff-pages';
 
 // Two browsers: the stylist starts a client's sitting late on My day, which pushes its developing time and rinse into
 // the next client's cut; the desk's open day shows the conflict by itself within 2 s, raises a notification, and the
@@ -61,14 +61,7 @@ describe('running late', () => {
     await panel.getByText('Nothing is running late.').waitFor();
     await stylist.context().close();
 
-    await desk.goto(`${baseUrl()}/desk/outbox`);
-    const log = desk.getByRole('region', { name: 'Sent messages' });
-    await log
-      .getByRole('row')
-      .filter({ hasText: /970\D*555\D*0188/ }) // the number as the salon's country writes it
-      .filter({ hasText: /Change notice \(SMS\)/ })
-      .first()
-      .waitFor();
+    await changeNoticeInOutbox(desk, /970\D*555\D*0188/);
     await desk.context().close();
   });
 });

@@ -25,3 +25,15 @@ export async function staffPage(
 /** An answer from the API to this page (a first write may be answered CSRF and sent again, as the api client does). */
 export const postAnswer = (page: Page, path: string) =>
   page.waitForResponse(async (r) => r.url().includes(path) && r.request().method() === 'POST' && !(r.status() === 403 && (await r.text()).includes('"CSRF"')));
+
+/** Opens the desk's Outbox and waits for a change notice by text to this number (`digits`: as the salon's country writes it). */
+export async function changeNoticeInOutbox(page: Page, digits: RegExp): Promise<void> {
+  await page.goto(`${baseUrl()}/desk/outbox`);
+  const log = page.getByRole('region', { name: 'Sent messages' });
+  await log
+    .getByRole('row')
+    .filter({ hasText: digits })
+    .filter({ hasText: /Change notice \(SMS\)/ })
+    .first()
+    .waitFor();
+}
