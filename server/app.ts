@@ -13,6 +13,7 @@ import { apiNotFound, errorHandler } from './lib/error-handler';
 import { configureLogger } from './lib/logger';
 import { installRequestLog } from './lib/request-log';
 import { compress } from './lib/compress';
+import { installTestClock } from './lib/request-clock';
 import { serveClient } from './lib/static-client';
 import { installSessions } from './auth/sessions';
 import { installCsrf } from './auth/csrf';
@@ -77,6 +78,7 @@ export function createApp(deps: Omit<AppDeps, 'table' | 'storage' | 'readCache' 
   app.use(API_ROOT, express.json({ limit: '100kb', strict: true }));
   app.use(cookieParser());
   installSessions(app, deps);
+  installTestClock(app, deps.config.mode);
 
   // Answers are checked against their contracts everywhere but production, where a slip costs a parse per answer.
   const table: RouteTable = { router: Router(), registry: new OpenAPIRegistry(), records: [], checkResponses: deps.config.mode !== 'production' };

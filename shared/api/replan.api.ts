@@ -6,13 +6,14 @@ import {
   DayConflictsSchema,
   FixAppliedSchema,
   RunningLateToldSchema,
+  StylistDayRunSchema,
   TellRunningLateSchema,
 } from '../schemas/replan.schemas';
 import { DESK, endpoint } from './endpoint';
 
 /**
  * Running late: the day re-planned from the actual step times. The desk reads every conflict an overrun makes with
- * its fixes, applies one fix with one action (through the same services as any change), and tells a later client.
+ * its fixes (a stylist reads their own day's new times), applies one fix with one action (through the same services as any change), and tells a later client.
  */
 export const replanApi = {
   dayConflicts: endpoint({
@@ -22,6 +23,14 @@ export const replanApi = {
     summary: "The day's conflicts from overruns, each with fixes best first, and the time early finishes freed (today; other days have none)",
     query: DayConflictsQuerySchema,
     response: DayConflictsSchema,
+  }),
+  stylistDayRun: endpoint({
+    method: 'get',
+    path: '/api/stylist/day/run',
+    access: ['stylist'],
+    summary: "The signed-in stylist's day re-planned from the actual step times: when each sitting's steps now start (today; other days run as booked)",
+    query: DayConflictsQuerySchema,
+    response: StylistDayRunSchema,
   }),
   applyFix: endpoint({
     method: 'post',

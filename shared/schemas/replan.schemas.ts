@@ -91,12 +91,19 @@ export type ReplanSummary = z.infer<typeof ReplanSummarySchema>;
 
 export const DayConflictsQuerySchema = z.object({ date: LocalDateSchema.optional() }).strict();
 
+/**
+ * When the re-plan next changes with the clock alone: a minute after the earliest expected end of a step under way,
+ * when a step that simply runs on (nobody taps) starts to push the rest of the day. Null when no step is under way.
+ */
+const RecheckAtSchema = InstantSchema.nullable();
+
 /** The desk's "Running late" panel: every stylist's day re-planned from the actual times (today only; other days are as booked). */
 export const DayConflictsSchema = ReplanSummarySchema.extend({
   date: LocalDateSchema,
   timeZone: z.string(),
   /** The moment of the re-plan. */
   asOf: InstantSchema,
+  recheckAt: RecheckAtSchema,
 });
 export type DayConflicts = z.infer<typeof DayConflictsSchema>;
 
@@ -112,3 +119,24 @@ export const RunningLateToldSchema = z.object({
   words: z.string(),
 });
 export type RunningLateTold = z.infer<typeof RunningLateToldSchema>;
+
+/** One sitting of the stylist's day as it now runs: each step's start and end in the re-plan, in the book's order (step 1 first). */
+export const DayRunSittingViewSchema = z.object({
+  bookingId: IdSchema,
+  seq: z.number().int(),
+  /** Some time differs from the booked one. */
+  moved: z.boolean(),
+  steps: z.array(z.object({ start: InstantSchema, end: InstantSchema, state: z.enum(['finished', 'running', 'planned']) })),
+});
+export type DayRunSittingView = z.infer<typeof DayRunSittingViewSchema>;
+
+/** The signed-in stylist's day re-planned from the actual times (today; other days run as booked, so no sittings): My day's times. */
+export const StylistDayRunSchema = z.object({
+  date: LocalDateSchema,
+  timeZone: z.string(),
+  asOf: InstantSchema,
+  recheckAt: RecheckAtSchema,
+  /** The sittings not finished yet. */
+  sittings: z.array(DayRunSittingViewSchema),
+});
+export type StylistDayRun = z.infer<typeof StylistDayRunSchema>;

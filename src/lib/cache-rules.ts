@@ -133,7 +133,7 @@ export function checkoutChanged(queryClient: QueryClient, checkout: DeskCheckout
 }
 
 /** Views of one date (`?date=`; today when it is left out). */
-const DAY_VIEWS = [bookingsApi.deskDay, bookingsApi.stylistDay, windowsApi.list, replanApi.dayConflicts];
+const DAY_VIEWS = [bookingsApi.deskDay, bookingsApi.stylistDay, windowsApi.list, replanApi.dayConflicts, replanApi.stylistDayRun];
 /** A booking's own page and what it opens. */
 const BOOKING_PAGES = [bookingsApi.one, bookingsApi.history, bookingsApi.cancelTerms, paymentsApi.deposit, paymentsApi.payments];
 /** What a change of the book may send or queue: the send log and the Outbox of the local fakes. */
@@ -171,12 +171,12 @@ export function bookChangedElsewhere(queryClient: QueryClient, change: BookChang
 /**
  * A sitting was tapped (arrived, a no-show, a step started or finished, an undo): its booking's page and history,
  * and every day and week of the book, which show statuses and actual times; a no-show or an early finish frees time
- * for windows, and an actual time re-plans the day (the desk's "Running late").
+ * for windows, and an actual time re-plans the day (the desk's "Running late", My day's times).
  */
 export const sittingTapped = (queryClient: QueryClient, bookingId: string): Promise<unknown> =>
   Promise.all([
     refreshRecord(queryClient, [bookingsApi.one, bookingsApi.history], bookingId),
-    refreshEndpoints(queryClient, [...BOOK_VIEWS, windowsApi.list, replanApi.dayConflicts]),
+    refreshEndpoints(queryClient, [...BOOK_VIEWS, windowsApi.list, replanApi.dayConflicts, replanApi.stylistDayRun]),
   ]);
 
 // ——— Running late: fixes from the re-plan, and telling a later client ———
@@ -189,7 +189,7 @@ export function replanFixApplied(queryClient: QueryClient, bookingId: string, da
   queryClient.setQueryData(apiKey(replanApi.dayConflicts, { query: { date: day.date } }), day);
   return Promise.all([
     refreshRecord(queryClient, [...BOOKING_PAGES, bookingsApi.moveTimes], bookingId),
-    refreshEndpoints(queryClient, [...BOOK_VIEWS, windowsApi.list, bookingsApi.options, ...SENT]),
+    refreshEndpoints(queryClient, [...BOOK_VIEWS, windowsApi.list, bookingsApi.options, replanApi.stylistDayRun, ...SENT]),
   ]);
 }
 

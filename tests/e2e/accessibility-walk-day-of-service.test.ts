@@ -1,7 +1,7 @@
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { createDb, createPool } from '@server/db/database';
-import { insertRunningLateDay, type RunningLateDay } from '../factories/running-late-day';
+import { runningLateScene, type RunningLateScene } from '../factories/running-late-scene';
 import { TEST_PASSWORD } from '../factories/user';
 import { baseUrl, connectBrowser, screenshot, seriousFindings, signInThroughPage } from '../setup/browser';
 
@@ -14,11 +14,12 @@ const WIDTHS = [1280, 375];
 const pool = createPool(inject('databaseUrl'));
 const db = createDb(pool);
 let browser: Browser;
-let day: RunningLateDay;
+let day: RunningLateScene;
 
 beforeAll(async () => {
   browser = await connectBrowser();
-  day = await insertRunningLateDay(db);
+  // Robin's gloss was booked from 20 minutes ago; nothing has been started, so starting it now runs into Sasha's cut.
+  day = await runningLateScene(db, { runningName: 'Robin Vale', laterName: 'Sasha Lind', laterPhone: '+19705550188', glossFrom: -20 });
 });
 
 afterAll(async () => {

@@ -3,11 +3,15 @@
  * started follow on the grid with their booked lengths; every overlap or double use the re-plan creates (hands beyond
  * one at a time, clients beyond maxClientsAtOnce, chair, basin, hours, closing) is listed, with its minutes, and
  * nothing else is; and every proposed fix, applied to the day, removes its conflict and adds or lengthens none —
- * all checked with the separate minute-by-minute validator in plan-validator.ts.
+ * all checked with the separate minute-by-minute validator in plan-validator.ts. Then each fix is written into the
+ * book the way the desk's change writes it and the day re-planned again: the fix holds there too, and no sitting's
+ * steps ever overlap one another.
  */
 import fc from 'fast-check';
+import { DateTime } from 'luxon';
 import { describe, expect, it } from 'vitest';
 import { replanDay, type ReplanAnswer, type ReplanFix, type Scenario } from '@shared/engine/engine';
+import type { Booking } from '@shared/engine/scenario.schemas';
 import { bookedForCheck, validateDay, type DaySittingCheck, type DayViolation } from './plan-validator';
 import { isoToUtc, localToUtc } from './reference/reference-time';
 import { replanCase } from './replan-cases';
@@ -58,6 +62,44 @@ function withFix(day: DaySittingCheck[], fix: ReplanFix): DaySittingCheck[] {
 }
 
 const byKey = (list: DayViolation[]) => new Map(list.map((v) => [key(v), v]));
+
+/**
+ * The book with the fix written in, as the desk's change writes it (here, not with the engine's code): the chair,
+ * basin or stylist changed, every step later by the delay, or the booking gone. Null for a developing fix (the server
+ * rewrites the running sitting from the re-plan's own steps, checked above) and for a late start that would land on
+ * a wall time a daylight-saving change repeats or skips.
+ */
+function bookWithFix(s: Scenario, fix: ReplanFix): Scenario | null {
+  if (fix.kind === 'developing') return null;
+  if (fix.kind === 'another_day') return { ...s, bookings: s.bookings.filter((b) => b.id !== fix.booking) };
+  const later = (text: string, minutes: number): string | null => {
+    const utc = localToUtc(text, s.timeZone) + minutes;
+    const wall = DateTime.fromMillis(utc * 60_000, { zone: s.timeZone }).toFormat("yyyy-MM-dd'T'HH:mm");
+    return localToUtc(wall, s.timeZone) === utc ? wall : null;
+  };
+  let lost = false;
+  const bookings = s.bookings.map((b): Booking => {
+    if (b.id !== fix.booking) return b;
+    switch (fix.kind) {
+      case 'chair':
+        return { ...b, chair: fix.chair };
+      case 'basin':
+        return { ...b, steps: b.steps.map((step, k) => (k === fix.step && step.kind === 'basin' ? { ...step, basin: fix.basin } : step)) };
+      case 'hand_over':
+        return { ...b, stylist: fix.stylist };
+      case 'late_start':
+        return {
+          ...b,
+          steps: b.steps.map((step) => {
+            const [start, end] = [later(step.start, fix.minutesLate), later(step.end, fix.minutesLate)];
+            if (start === null || end === null) lost = true;
+            return { ...step, start: start ?? step.start, end: end ?? step.end };
+          }),
+        };
+    }
+  });
+  return lost ? null : { ...s, bookings };
+}
 
 describe('re-planning a day from the actual times', () => {
   it('keeps started steps, lists exactly the conflicts it creates, and offers only feasible fixes', () => {
@@ -132,5 +174,45 @@ describe('re-planning a day from the actual times', () => {
     expect(fixesChecked).toBeGreaterThan(100);
     // Most kinds of fix turn up (developing ones are rarest, a few per run); the worked examples pin each kind down.
     expect(kinds.size).toBeGreaterThanOrEqual(4);
+  }, 120_000);
+
+  it('never overlaps a sitting’s own steps, and every fix written into the book holds when the day is re-planned again', () => {
+    let written = 0;
+    fc.assert(
+      fc.property(seeds, (seed) => {
+        const c = replanCase(seed);
+        if (!c) return;
+        const answer = replanDay(c.scenario, c.ask);
+        for (const sitting of answer.sittings) {
+          let previousEnd = -Infinity;
+          for (const step of sitting.steps) {
+            const [start, end] = [isoToUtc(step.start), isoToUtc(step.end)];
+            expect(start, `${sitting.booking}: a step starts before the one before it ends`).toBeGreaterThanOrEqual(previousEnd);
+            expect(end).toBeGreaterThan(start);
+            previousEnd = end;
+          }
+        }
+        const listed = new Map(answer.conflicts.map((x) => [key(x), x]));
+        for (const conflict of answer.conflicts) {
+          for (const fix of conflict.fixes) {
+            const book = bookWithFix(c.scenario, fix);
+            if (!book) continue;
+            // A sitting handed over or taken off the day is no longer one of this stylist's to re-plan.
+            const gone = fix.kind === 'hand_over' || fix.kind === 'another_day';
+            const again = replanDay(book, gone ? { ...c.ask, sittings: c.ask.sittings?.filter((x) => x.booking !== fix.booking) } : c.ask);
+            expect(again.conflicts.map(key), `${fix.kind} for ${fix.booking}`).not.toContain(key(conflict));
+            for (const v of again.conflicts) expect(v.minutes).toBeLessThanOrEqual(listed.get(key(v))?.minutes ?? -1);
+            // The actual times still stand where they were.
+            for (const [booking, actual] of c.actuals) {
+              const steps = again.sittings.find((x) => x.booking === booking)?.steps ?? [];
+              actual.forEach((a, k) => a.start !== undefined && expect(isoToUtc(steps[k]!.start)).toBe(a.start));
+            }
+            written++;
+          }
+        }
+      }),
+      { numRuns: Number(process.env.ENGINE_RUNS ?? 300) },
+    );
+    expect(written).toBeGreaterThan(50);
   }, 120_000);
 });

@@ -1,5 +1,6 @@
 import { sql } from 'kysely';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { insertBooking } from '@server/features/bookings/bookings.repository';
 import type { StepPlan } from '@shared/schemas/step-plan.schemas';
 import { signedInAgent, startTestApp, type TestApp } from '../setup/test-app';
 import { insertSalon, type SalonFixture } from '../factories/salon';
@@ -288,8 +289,65 @@ describe('applying a fix', () => {
     const after = await startOf(later.id);
     expect(after.getTime()).toBe(before.getTime());
     expect(await auditActions(later.id)).toContain('moved sitting 1 (running late)');
-    const notices = await db().selectFrom('messages').select('kind').where('booking_id', '=', later.id).where('kind', '=', 'change').execute();
-    expect(notices.length).toBeGreaterThan(0);
+    // The client is told through the message pipeline: one change notice per channel they take, never two.
+    const notices = await db().selectFrom('messages').select('channel').where('booking_id', '=', later.id).where('kind', '=', 'change').execute();
+    expect(notices.map((n) => n.channel).sort()).toEqual(['email', 'sms']);
+    expect(await runningLateMessages(later.id)).toHaveLength(0);
+  });
+
+  it('hand_over of one sitting of several: not offered (every sitting stays with the booking’s stylist), the next fix says why', async () => {
+    const { a, running } = await overrun();
+    const b = await stylist();
+    const chair = await unit('chairs', `Scene ${scene} course chair`);
+    const clientId = await client(`Course Client ${scene}`);
+    const day = 24 * 60;
+    const at = (minute: number) => new Date(Math.floor(Date.now() / 300_000) * 300_000 + minute * 60_000);
+    const coursePlan: StepPlan = { sittings: [cutPlan.sittings[0]!, { ...cutPlan.sittings[0]!, daysAfterPrevious: { min: 7, max: 7 } }] };
+    // Sitting 1 is A's next client today (40..70); sitting 2 is a week later with A.
+    const course = await insertBooking(db(), {
+      salonId: salon.salonId,
+      clientId,
+      serviceId: cutService,
+      stylistId: a.staffId,
+      status: 'booked',
+      stepPlan: coursePlan,
+      priceCents: 10000,
+      depositCents: 0,
+      createdBy: null,
+      sittings: [40, 7 * day + 40].map((from) => ({
+        chairId: chair,
+        steps: [{ kind: 'hands_on' as const, label: 'Cut', start: at(from), end: at(from + 30), basinId: null }],
+      })),
+    });
+    expect((await finishApply(a.agent, running)).status).toBe(200);
+    const [conflict] = await conflictsFor(course);
+    expect(conflict, 'the course’s first sitting meets the overrun').toBeDefined();
+    expect(conflict!.fixes.map((f) => f.fix.kind)).not.toContain('hand_over');
+    const late = conflict!.fixes.find((f) => f.fix.kind === 'late_start')!;
+    expect(late.words).toMatch(
+      new RegExp(
+        `^Start Course Client ${scene} \\d+ min late, .* \\(not handed over: Course Client ${scene}’s booking has more than one sitting, and every sitting of a booking stays with its stylist, Stylist \\d+\\)$`,
+      ),
+    );
+
+    // A hand-over asked for anyway is not on offer: refused, nothing stored.
+    const sittingId = late.fix.sittingId as string;
+    const forced = await desk$.write('post', fixPath(course), { fix: { kind: 'hand_over', sittingId, stylistId: b.staffId } });
+    expect(forced.status).toBe(409);
+    expect(forced.body.error.code).toBe('STALE_FIX');
+
+    // The next fix works, and both sittings keep A.
+    const res = await desk$.write('post', fixPath(course), { fix: late.fix });
+    expect(res.status, JSON.stringify(res.body)).toBe(200);
+    const stylists = await db()
+      .selectFrom('booking_steps as st')
+      .innerJoin('sittings as si', 'si.id', 'st.sitting_id')
+      .select('st.stylist_id')
+      .where('si.booking_id', '=', course)
+      .where('st.live', '=', true)
+      .execute();
+    expect(new Set(stylists.map((x) => x.stylist_id))).toEqual(new Set([a.staffId]));
+    expect(await runningLateMessages(course)).toHaveLength(1);
   });
 
   it('late_start: the later sitting moves by the delay and its client gets one "running late" message, never a second', async () => {

@@ -22,8 +22,10 @@ export interface DayRunSitting {
   bookingId: string;
   stylistId: string;
   status: SittingStatus;
-  /** The service's skill when the booking has this one sitting (then another stylist may take it over); else null. */
-  handOverSkill: string | null;
+  /** The service's skill: another stylist with it may take the sitting over. */
+  skill: string;
+  /** The booking's sittings: all of them stay with one stylist (`bookings.stylist_id`), so one of several is never handed over. */
+  sittingsInBooking: number;
   steps: DayRunStep[];
 }
 
@@ -76,7 +78,8 @@ export async function readDayRuns(db: Db, salonId: string, from: Date, to: Date,
       bookingId: s.bookingId,
       stylistId: s.stylist_id,
       status: s.status,
-      handOverSkill: Number(s.sittingCount) === 1 ? s.skill : null,
+      skill: s.skill,
+      sittingsInBooking: Number(s.sittingCount),
       steps: steps
         .filter((st) => st.sitting_id === s.id)
         .map((st) => {

@@ -61,14 +61,15 @@ const runs: DayRunSitting[] = [
     bookingId: 'booking-r',
     stylistId: 'ana',
     status: 'in_progress',
-    handOverSkill: 'colour',
+    skill: 'colour',
+    sittingsInBooking: 1,
     steps: [
       step('r-rinse', 3, 'Rinse'),
       step('r-develop', 2, 'Develops', { actualStart: local('12:30'), minMinutes: 20, maxMinutes: 40 }),
       step('r-apply', 1, 'Apply', { actualStart: local('12:00'), actualEnd: local('12:30') }),
     ],
   },
-  { id: 'l', bookingId: 'booking-l', stylistId: 'ana', status: 'booked', handOverSkill: 'colour', steps: [step('l-cut', 1, 'Cut')] },
+  { id: 'l', bookingId: 'booking-l', stylistId: 'ana', status: 'booked', skill: 'colour', sittingsInBooking: 1, steps: [step('l-cut', 1, 'Cut')] },
 ];
 
 describe('the re-plan ask the planning port builds', () => {
@@ -115,6 +116,14 @@ describe('the re-plan ask the planning port builds', () => {
       { id: 'r-develop', start: local('12:30'), end: local('13:00') },
       { id: 'r-rinse', start: local('13:00'), end: local('13:10') },
     ]);
+  });
+
+  it('a sitting of a booking with several sittings is never handed over: the hand-over is left out and the conflict says so', () => {
+    const answer = replanDay(scenario, replanAsk('ana', local('12:45'), ZONE, 15, runs, book));
+    const [kept] = fromAnswer(answer, book.stepIds, new Set(['l'])).conflicts;
+    expect(kept!.fixes.map((f) => f.fix.kind)).toEqual(['developing', 'late_start', 'another_day']);
+    expect(kept!.handOverHeld).toBe(true);
+    expect(fromAnswer(answer, book.stepIds).conflicts[0]!.handOverHeld).toBeUndefined();
   });
 
   it('a running step that started off the grid is booked from the next grid point, so it reads back to the same end', () => {

@@ -45,6 +45,11 @@ export interface ReplanConflict {
   end: string;
   /** Feasible fixes, best first. */
   fixes: OfferedFix[];
+  /**
+   * The engine found a free stylist with the skill, but the suffering sitting is one of several of its booking, and
+   * every sitting of a booking stays with the booking's one stylist: no hand-over is offered (the desk is told why).
+   */
+  handOverHeld?: true;
 }
 
 /** One stylist's day re-planned from the actual times, in the server's ids. */
@@ -108,7 +113,7 @@ export function replanAsk(stylistId: string, now: Date, zone: string, lateStartL
         const order = book.stepIds.get(s.id) ?? [];
         return {
           booking: s.id,
-          ...(s.handOverSkill ? { skill: s.handOverSkill } : {}),
+          skill: s.skill,
           steps: s.steps.flatMap((st) => {
             const step = order.indexOf(st.id);
             if (step < 0) return []; // a step left open by a finished sitting is not in the book as it ran
@@ -156,8 +161,15 @@ function fixOf(f: EngineFix, stepIds: Map<string, string[]>): OfferedFix | null 
   }
 }
 
-/** The engine's answer in the server's ids: sittings and steps by id, fixes naming sittings, steps, chairs, basins, stylists. */
-export function fromAnswer(answer: ReplanAnswer, stepIds: Map<string, string[]>): StylistReplan {
+/** Sittings of bookings with more than one sitting: they stay with their booking's stylist, so none is handed over. */
+export const sittingsKeptWithStylist = (runs: DayRunSitting[]): Set<string> => new Set(runs.filter((s) => s.sittingsInBooking > 1).map((s) => s.id));
+
+/**
+ * The engine's answer in the server's ids: sittings and steps by id, fixes naming sittings, steps, chairs, basins,
+ * stylists. A hand-over of a sitting in `keptWithStylist` is left out and the conflict says so.
+ */
+export function fromAnswer(answer: ReplanAnswer, stepIds: Map<string, string[]>, keptWithStylist: ReadonlySet<string> = new Set()): StylistReplan {
+  const held = (f: EngineFix) => f.kind === 'hand_over' && keptWithStylist.has(f.booking);
   return {
     stylistId: answer.stylist,
     sittings: answer.sittings.map((s) => ({
@@ -174,7 +186,8 @@ export function fromAnswer(answer: ReplanAnswer, stepIds: Map<string, string[]>)
       minutes: c.minutes,
       start: c.start,
       end: c.end,
-      fixes: c.fixes.flatMap((f) => fixOf(f, stepIds) ?? []),
+      fixes: c.fixes.flatMap((f) => (held(f) ? [] : (fixOf(f, stepIds) ?? []))),
+      ...(c.fixes.some(held) ? { handOverHeld: true as const } : {}),
     })),
     freed: answer.freed.map((f) => ({ start: f.start, end: f.end, minutes: f.minutes })),
   };

@@ -8,7 +8,7 @@ import { replanDay } from '@shared/engine/engine';
 import type { Salon } from '@shared/schemas/salon.schemas';
 import { instantAt, localDateOf, shiftLocalDate } from '@shared/time/salon-time';
 import { readDayRuns } from './day-runs.repository';
-import { followTheRun, fromAnswer, replanAsk, stylistsUnderWay, type StylistReplan } from './replan-ask';
+import { followTheRun, fromAnswer, replanAsk, sittingsKeptWithStylist, stylistsUnderWay, type StylistReplan } from './replan-ask';
 import { calendarsOf, loadSalonBook, loadSalonSetup } from './salon-calendars.repository';
 
 /** What a re-plan needs of the salon row. */
@@ -33,7 +33,10 @@ async function replanDays(db: Db, salon: ReplanSalon, now: Date, who: { stylistI
   if (stylists.length === 0) return [];
   const asRun = followTheRun(book, runs);
   const scenario = calendarsOf(salon, setup, { ...book, ...asRun });
-  return stylists.map((id) => fromAnswer(replanDay(scenario, replanAsk(id, now, salon.timeZone, salon.lateStartLimitMinutes, runs, asRun)), asRun.stepIds));
+  const kept = sittingsKeptWithStylist(runs);
+  return stylists.map((id) =>
+    fromAnswer(replanDay(scenario, replanAsk(id, now, salon.timeZone, salon.lateStartLimitMinutes, runs, asRun)), asRun.stepIds, kept),
+  );
 }
 
 /** One stylist's day at `now` re-planned from the actual times: conflicts with fixes best first, and the time freed. */

@@ -92,7 +92,8 @@ async function make(trx: Db, salon: Salon, user: SessionUser, target: ConflictSi
  * Applies one fix the re-plan offers for this booking, checked against the day as it runs now: the fix must be on
  * offer when it is made (a stale or forged one answers 409 and stores nothing). The stylists it touches are locked
  * and the day re-planned again under the locks before the change goes through the usual service, in one transaction.
- * A late start's notice goes out at once after the commit; the sweep would send it within the minute anyway.
+ * What the client is told (a late start's notice, a hand-over's change notice) goes out at once after the commit; the
+ * sweep would send it within the minute anyway.
  */
 export async function applyReplanFix(
   db: Kysely<Database>,
@@ -119,6 +120,6 @@ export async function applyReplanFix(
     const note = await make(trx, salon, user, target, sure.offered, now);
     return note ? `${words}. ${note}` : `${words}: done.`;
   });
-  if (fix.kind === 'late_start') void sendDueMessages(db, senders, now, bookingId).catch(() => undefined);
+  void sendDueMessages(db, senders, now, bookingId).catch(() => undefined);
   return { done, day: await salonDayNow(db, salon, now) };
 }

@@ -64,6 +64,10 @@ function fixWords(offered: OfferedFix, names: ReplanNames, replan: StylistReplan
   }
 }
 
+/** Why a free stylist is not offered: a booking's sittings all stay with its one stylist (`bookings.stylist_id`). */
+const heldWords = (s: ConflictSittingRow | undefined) =>
+  `not handed over: ${who(s)}’s booking has more than one sitting, and every sitting of a booking stays with its stylist${s ? `, ${s.stylistName}` : ''}`;
+
 /**
  * The delay a later client would be told of: the least late start that works, or else until the earlier sitting is
  * out of their way (the end of the conflict, from their booked start), rounded up to the salon's grid. None for hours
@@ -94,6 +98,11 @@ export function describeReplans(replans: StylistReplan[], names: ReplanNames): R
         const target = names.sittings.get(f.fix.sittingId);
         return target ? [{ bookingId: target.bookingId, fix: f.fix, words: fixWords(f, names, replan) }] : [];
       });
+      const words = conflictWords(c, names, stylist);
+      const held = c.handOverHeld ? heldWords(names.sittings.get(c.sittingId)) : null;
+      // Why no hand-over, beside the fix offered in its place (the next one after it in the order), else the conflict.
+      const instead = held ? fixes.find((f) => f.fix.kind === 'late_start' || f.fix.kind === 'another_day') : undefined;
+      if (held && instead) instead.words += ` (${held})`;
       return [
         {
           kind: c.kind,
@@ -103,7 +112,7 @@ export function describeReplans(replans: StylistReplan[], names: ReplanNames): R
           minutes: c.minutes,
           start: c.start,
           end: c.end,
-          words: conflictWords(c, names, stylist),
+          words: held && !instead ? `${words} ${held[0]!.toUpperCase()}${held.slice(1)}.` : words,
           fixes,
           tellMinutes: tellMinutes(c, names),
           told: (names.told.get(c.sittingId) ?? []).map((t) => ({ minutesLate: t.minutesLate, at: iso(t.at) })),

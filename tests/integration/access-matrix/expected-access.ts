@@ -48,6 +48,7 @@ export const expectedAccess: Record<string, Expectation> = {
   'POST /api/bookings/{id}/sittings/{n}/finish': { allow: STAFF, own: true },
   'POST /api/bookings/{id}/sittings/{n}/undo': { allow: STAFF, own: true },
   'GET /api/desk/day/conflicts': { allow: DESK },
+  'GET /api/stylist/day/run': { allow: ['stylist'] },
   'POST /api/bookings/{id}/replan-fix': { allow: DESK, own: true },
   'POST /api/bookings/{id}/sittings/{n}/running-late': { allow: DESK, own: true },
   'GET /api/services': { allow: STAFF },

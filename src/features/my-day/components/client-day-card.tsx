@@ -1,6 +1,7 @@
 import type { DateTime } from 'luxon';
 import { Link } from 'react-router-dom';
 import type { BookingView, SittingView } from '@shared/schemas/booking-view.schemas';
+import type { DayRunSittingView } from '@shared/schemas/replan.schemas';
 import { BookingStatusBadge } from '@client/components/ui/booking-status-badge';
 import { SittingStatusBadge } from '@client/components/ui/sitting-status-badge';
 import { SkinTestFlag } from '@client/components/ui/skin-test-flag';
@@ -10,17 +11,29 @@ import { sittingLabel, stepKindLabels } from '@client/lib/booking-labels';
 import { formatRange, formatTime } from '@shared/format/date-time';
 import { formatFor } from '@shared/format/locale';
 import { paths } from '@client/config/paths';
+import { stepStartNow } from '../step-start';
 import { developingTiming, sittingProgress } from '../timer-state';
 import { DevelopingTimer } from './developing-timer';
 import { SittingTaps } from './sitting-taps';
 
-type Props = { booking: BookingView; sitting: SittingView; timeZone: string; now: DateTime };
+/** `run`: the sitting as the day now runs (re-planned from the actual times), for the times of the steps to come. */
+type Props = { booking: BookingView; sitting: SittingView; run?: DayRunSittingView; timeZone: string; now: DateTime };
 
 /** One client of the stylist's day: who, what, the step under way (with its timer while developing) and the taps. */
-export function ClientDayCard({ booking, sitting, timeZone, now }: Props) {
+export function ClientDayCard({ booking, sitting, run, timeZone, now }: Props) {
   const progress = sittingProgress(sitting, now);
   const ofLabel = sittingLabel(sitting.seq, sitting.of);
   const zone = formatFor(timeZone);
+  /** Step `index`'s start as the day now runs, with the planned time beside it when they differ. */
+  const startOf = (planned: string, index: number) => {
+    const when = stepStartNow(planned, run, index);
+    return (
+      <>
+        <span className="tabular">{formatTime(when.at, zone)}</span>
+        {when.planned && <span className="tabular text-ink/80"> (planned {formatTime(when.planned, zone)})</span>}
+      </>
+    );
+  };
   return (
     <article
       aria-label={`${booking.client.name}, ${booking.service.name}`}
@@ -47,14 +60,18 @@ export function ClientDayCard({ booking, sitting, timeZone, now }: Props) {
       <StepStrip steps={sitting.steps} timeZone={timeZone} />
       {progress.state === 'upcoming' && (
         <p>
-          First step at <span className="tabular">{formatTime(progress.next.start, zone)}</span>: {progress.next.label}
+          First step at {startOf(progress.next.start, 0)}: {progress.next.label}
         </p>
       )}
       {progress.state === 'finished' && <p className="text-ink/80">All steps done.</p>}
       {progress.state === 'ready' && (
         <p>
           <span className="font-bold">Next:</span> step {progress.index + 1}, {progress.next.label}
-          <span className="tabular text-ink/80"> (planned {formatTime(progress.next.start, zone)})</span>
+          {stepStartNow(progress.next.start, run, progress.index).planned ? (
+            <> at {startOf(progress.next.start, progress.index)}</>
+          ) : (
+            <span className="tabular text-ink/80"> (planned {formatTime(progress.next.start, zone)})</span>
+          )}
         </p>
       )}
       {progress.state === 'in_progress' && (
@@ -76,7 +93,7 @@ export function ClientDayCard({ booking, sitting, timeZone, now }: Props) {
           )}
           {progress.next && (
             <p className="text-sm text-ink/80">
-              Next: {progress.next.label} at <span className="tabular">{formatTime(progress.next.start, zone)}</span>
+              Next: {progress.next.label} at {startOf(progress.next.start, progress.index + 1)}
             </p>
           )}
         </div>
