@@ -236,7 +236,7 @@ async function insertDemoBook(db: Db, ids: Ids, now: Date): Promise<number> {
         sittings: sittings.map((s, i) => ({ chairId: ids.chairs[s.placement.chair]!, steps: steps[i]! })),
       });
       if (status !== 'cancelled') await recordPastActuals(db, bookingId, count, today.toJSDate(), status === 'no_show');
-      const deposit = demoDeposit(ids, { bookingId, clientId, status, depositCents: service.depositCents ?? 0 }, count);
+      const deposit = demoDeposit(ids, { bookingId, clientId, status, depositCents: service.depositCents ?? 0, firstStart: steps[0]![0]!.start }, count, now);
       if (deposit) deposits.push(deposit);
       count++;
     }
@@ -246,16 +246,21 @@ async function insertDemoBook(db: Db, ids: Ids, now: Date): Promise<number> {
 }
 
 /**
- * Deposits as the desk takes them: paid when the booking was made, in cash or on the card terminal, except every fourth
+ * Deposits as the desk takes them: paid some days before the first sitting, in cash or on the card terminal, except every fourth
  * booking still to come, whose deposit is due (to ask for by SMS or e-mail, or take at the desk). Cancelled ones paid nothing.
  */
 function demoDeposit(
   ids: Ids,
-  b: { bookingId: string; clientId: string; status: BookingStatus; depositCents: number },
+  b: { bookingId: string; clientId: string; status: BookingStatus; depositCents: number; firstStart: Date },
   n: number,
+  now: Date,
 ): Insertable<PaymentsTable> | null {
   if (b.depositCents <= 0 || b.status === 'cancelled' || (b.status === 'booked' && n % 4 === 1)) return null;
+  // Taken 3 to 14 days before the first sitting (never later than now), so each day's takings show the deposits
+  // taken that day rather than every demo deposit on the day the demo was loaded.
+  const paidAt = new Date(Math.min(now.getTime(), b.firstStart.getTime() - (3 + (n % 12)) * 86_400_000));
   return {
+    created_at: paidAt,
     salon_id: ids.salonId,
     booking_id: b.bookingId,
     client_id: b.clientId,

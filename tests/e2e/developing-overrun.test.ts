@@ -101,8 +101,8 @@ describe('a developing step that runs over', () => {
     const notice = await noticeRaised(desk, 'Running late: Ilse Brandt');
     expect(notice.body).toMatch(/^Noor Haddad’s sitting now runs 5 min into/);
 
-    // My day shows when the rinse now starts, beside the planned time.
-    await card.getByText(new RegExp(`^Next: Rinse at ${TIME} \\(planned ${TIME}\\)$`)).waitFor({ timeout: 5_000 });
+    // My day shows when the rinse now starts, beside the planned time (no time limit in the rule: generous for a busy machine).
+    await card.getByText(new RegExp(`^Next: Rinse at ${TIME} \\(planned ${TIME}\\)$`)).waitFor({ timeout: 20_000 });
 
     const handOver = conflict.getByRole('button', { name: /^Hand Ilse Brandt over to / });
     const [applied] = await Promise.all([answer(desk, '/replan-fix'), handOver.click()]);

@@ -94,7 +94,7 @@ export function TakingsView({ date, hrefFor, onPick }: Props) {
                 ['Card', money(t.byMethod.card.inCents), money(t.byMethod.card.refundedCents), money(t.byMethod.card.netCents)],
                 ['Cash', money(t.byMethod.cash.inCents), money(t.byMethod.cash.refundedCents), money(t.byMethod.cash.netCents)],
                 [
-                  'Both',
+                  'All methods',
                   money(t.byMethod.card.inCents + t.byMethod.cash.inCents),
                   money(t.refundsCents),
                   money(t.byMethod.card.netCents + t.byMethod.cash.netCents),
