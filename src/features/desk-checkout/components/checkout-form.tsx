@@ -25,6 +25,10 @@ const payChoices = [
  * The desk's checkout: the "from" price within its range, products, a discount, the tip and how the client pays,
  * with the receipt shown as it will be. The server works every amount out again from its own records.
  */
+/** A "from" price with room to set it: quoted above where its range starts (booked at the start, there is nothing to set). */
+const hasRange = (s: { priceCents: number; upToCents: number | null }): s is { priceCents: number; upToCents: number } =>
+  s.upToCents !== null && s.upToCents > s.priceCents;
+
 export function CheckoutForm({ visit }: Props) {
   const [draft, setDraft] = useState<CheckoutDraft>(() => emptyDraft(visit));
   const [productId, setProductId] = useState(visit.products[0]?.id ?? '');
@@ -60,9 +64,9 @@ export function CheckoutForm({ visit }: Props) {
               <li key={s.label} className="flex flex-col gap-2">
                 <p className="flex justify-between gap-4">
                   <span>{s.label}</span>
-                  <span className="tabular">{s.upToCents === null ? money(s.priceCents) : `${money(s.priceCents)} to ${money(s.upToCents)}`}</span>
+                  <span className="tabular">{hasRange(s) ? `${money(s.priceCents)} to ${money(s.upToCents)}` : money(s.priceCents)}</span>
                 </p>
-                {s.upToCents !== null && (
+                {hasRange(s) && (
                   <div className="grid grid-cols-1 gap-3 sm:grid-cols-2">
                     <AmountInput
                       label={`Price set (${visit.currency})`}
