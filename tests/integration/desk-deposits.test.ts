@@ -4,34 +4,28 @@ import { eventually, listenForPaymentWebhooks, payOnHostedPage } from '../setup/
 import { futureWeekday, localIso } from '../setup/dates';
 import { setupPaths } from '../setup/setup-paths';
 import { insertSalon, type SalonFixture } from '../factories/salon';
-import { insertUser, type UserFixture } from '../factories/user';
+import { insertUser } from '../factories/user';
 import { insertPlannedService } from '../factories/service';
 import { insertTestBooking } from '../factories/booking';
 import { messageDesk } from '../factories/messages';
+import { depositDesk, glossRefreshPlan } from '../factories/deposit-desk';
 import { FAKE_CARDS } from '@server/fakes/payments-fake';
 import { releaseUnpaidDeposits } from '@server/features/payments';
 import { sha256 } from '@server/lib/hash';
-import type { StepPlan } from '@shared/schemas/step-plan.schemas';
 
 let t: TestApp;
 let salon: SalonFixture;
-let ana: UserFixture;
 let serviceId: string;
 let desk: Awaited<ReturnType<typeof messageDesk>>;
 let webhooks: Awaited<ReturnType<typeof listenForPaymentWebhooks>>;
-const plan: StepPlan = { sittings: [{ steps: [{ kind: 'hands_on', label: 'Gloss', product: 'toner_direct', minutes: 30 }] }] };
+const plan = glossRefreshPlan;
 const day = futureWeekday(4, 3);
 const db = () => t.testDb.db;
 
 beforeAll(async () => {
   t = await startTestApp();
   webhooks = await listenForPaymentWebhooks(t);
-  salon = await insertSalon(db());
-  await db().updateTable('salons').set({ quiet_from: '00:00', quiet_to: '00:00' }).where('id', '=', salon.salonId).execute();
-  ana = await insertUser(db(), salon.salonId, 'stylist');
-  // A $65.00 deposit (ISO 4217 USD, 2 decimals: 6500 cents).
-  serviceId = await insertPlannedService(db(), salon.salonId, { plan, name: 'Gloss refresh', category: 'treatment', depositCents: 6500 });
-  desk = await messageDesk(t, salon.salonId, ana.staffId!);
+  ({ salon, serviceId, desk } = await depositDesk(t));
 });
 afterAll(async () => {
   await webhooks.close();

@@ -3,22 +3,20 @@ import { anonymousAgent, signedInAgent, startTestApp, type TestApp } from '../se
 import { eventually, listenForPaymentWebhooks, payOnHostedPage } from '../setup/hosted-payment';
 import { futureWeekday } from '../setup/dates';
 import { insertSalon, type SalonFixture } from '../factories/salon';
-import { insertUser, type UserFixture } from '../factories/user';
-import { insertPlannedService } from '../factories/service';
+import { insertUser } from '../factories/user';
 import { messageDesk } from '../factories/messages';
+import { depositDesk, glossRefreshPlan } from '../factories/deposit-desk';
 import { FAKE_CARDS } from '@server/fakes/payments-fake';
-import type { StepPlan } from '@shared/schemas/step-plan.schemas';
 
 // Refunds at the desk and the deposit policy's money on cancelling, through the Stripe SDK against the payments fake.
 
 let t: TestApp;
 let salon: SalonFixture;
-let ana: UserFixture;
 let serviceId: string;
 let desk: Awaited<ReturnType<typeof messageDesk>>;
 let owner: Awaited<ReturnType<typeof signedInAgent>>;
 let webhooks: Awaited<ReturnType<typeof listenForPaymentWebhooks>>;
-const plan: StepPlan = { sittings: [{ steps: [{ kind: 'hands_on', label: 'Gloss', product: 'toner_direct', minutes: 30 }] }] };
+const plan = glossRefreshPlan;
 // Three weeks ahead: outside any cancellation window, so a cancellation refunds the deposit.
 const day = futureWeekday(4, 3);
 const db = () => t.testDb.db;
@@ -26,12 +24,7 @@ const db = () => t.testDb.db;
 beforeAll(async () => {
   t = await startTestApp();
   webhooks = await listenForPaymentWebhooks(t);
-  salon = await insertSalon(db());
-  await db().updateTable('salons').set({ quiet_from: '00:00', quiet_to: '00:00' }).where('id', '=', salon.salonId).execute();
-  ana = await insertUser(db(), salon.salonId, 'stylist');
-  // A $65.00 deposit (ISO 4217 USD, 2 decimals: 6500 cents).
-  serviceId = await insertPlannedService(db(), salon.salonId, { plan, name: 'Gloss refresh', category: 'treatment', depositCents: 6500 });
-  desk = await messageDesk(t, salon.salonId, ana.staffId!);
+  ({ salon, serviceId, desk } = await depositDesk(t));
   const o = await insertUser(db(), salon.salonId, 'owner');
   owner = await signedInAgent(t.app, o.email, o.password);
 });
