@@ -376,4 +376,21 @@ describe('checkout at the desk: refusals and faults', () => {
     expect(retried.status).toBe(201);
     expect(retried.body.checkout.checkoutUrl).toMatch(/^http/);
   });
+
+  it('the payment service answering slowly: the checkout waits for its page, and a second desk sending the same checkout meanwhile opens nothing more', async () => {
+    const bottle = await addProduct(usd, 'Shine serum', 2500, 1);
+    const { id } = await endedVisit(usd, { depositCents: 0 });
+    const body = { services: [{}], retail: [{ productId: bottle, quantity: 1 }], discount: null, tipCents: 0, pay: { method: 'card' } };
+    t.payments.slowNext(1, 1_500); // well inside the SDK's timeout, so no retry: one slow answer
+    const [first, second] = await Promise.all([
+      usd.desk$.write('post', `/api/bookings/${id}/checkout`, body),
+      usd.desk$.write('post', `/api/bookings/${id}/checkout`, body),
+    ]);
+    expect([first.status, second.status].sort()).toEqual([201, 409]);
+    const made = first.status === 201 ? first : second;
+    expect(made.body.checkout.checkoutUrl).toMatch(/^http/);
+    expect(await db().selectFrom('checkouts').select('id').where('booking_id', '=', id).execute()).toHaveLength(1);
+    expect([...t.payments.sessions.values()].filter((s) => s.metadata.booking === id)).toHaveLength(1);
+    expect((await db().selectFrom('retail_products').select('stock').where('id', '=', bottle).executeTakeFirstOrThrow()).stock).toBe(0);
+  });
 });

@@ -11,6 +11,12 @@ export function takingsFigures(movements: DayMovement[], depositsAppliedCents: n
   const byMethod = { card: { inCents: 0, refundedCents: 0, netCents: 0 }, cash: { inCents: 0, refundedCents: 0, netCents: 0 } };
   const deposits = { takenCents: 0, appliedCents: depositsAppliedCents, refundedCents: 0 };
   const tips = new Map<string, { stylistId: string | null; name: string; tipsCents: number }>();
+  const tallyOf = (m: DayMovement) => {
+    const key = m.staffId ?? '';
+    const tally = tips.get(key) ?? { stylistId: m.staffId, name: m.stylistName ?? 'A stylist no longer on the staff', tipsCents: 0 };
+    tips.set(key, tally);
+    return tally;
+  };
   let balancesCents = 0;
   let refundsCents = 0;
   let tipsCents = 0;
@@ -20,6 +26,8 @@ export function takingsFigures(movements: DayMovement[], depositsAppliedCents: n
       method.refundedCents += m.amountCents;
       refundsCents += m.amountCents;
       if (m.ofKind === 'deposit') deposits.refundedCents += m.amountCents;
+      // A tip handed back is no longer the stylist's: tips per stylist are what each is owed.
+      if (m.ofKind === 'tip') tallyOf(m).tipsCents -= m.amountCents;
       continue;
     }
     method.inCents += m.amountCents;
@@ -27,10 +35,7 @@ export function takingsFigures(movements: DayMovement[], depositsAppliedCents: n
     if (m.kind === 'balance') balancesCents += m.amountCents;
     if (m.kind === 'tip') {
       tipsCents += m.amountCents;
-      const key = m.staffId ?? '';
-      const tally = tips.get(key) ?? { stylistId: m.staffId, name: m.stylistName ?? 'A stylist no longer on the staff', tipsCents: 0 };
-      tally.tipsCents += m.amountCents;
-      tips.set(key, tally);
+      tallyOf(m).tipsCents += m.amountCents;
     }
   }
   for (const t of Object.values(byMethod)) t.netCents = t.inCents - t.refundedCents;

@@ -10,6 +10,7 @@ export interface DayMovement {
   amountCents: number;
   /** A refund's payment: what kind of money went back. */
   ofKind: 'deposit' | 'balance' | 'tip' | 'refund' | null;
+  /** A tip's stylist; for a refund of a tip, the stylist of the tip it returns. */
   staffId: string | null;
   stylistName: string | null;
   clientName: string | null;
@@ -21,28 +22,31 @@ export interface DayMovement {
  * they were recorded. A declined or failed row moved nothing.
  */
 export async function dayMovements(db: Db, salonId: string, from: Date, to: Date): Promise<DayMovement[]> {
-  return db
-    .selectFrom('payments as p')
-    .leftJoin('payments as of', 'of.id', 'p.refund_of')
-    .leftJoin('staff as s', 's.id', 'p.staff_id')
-    .leftJoin('clients as c', 'c.id', 'p.client_id')
-    .select([
-      'p.created_at as at',
-      'p.kind',
-      'p.method',
-      'p.amount_cents as amountCents',
-      'of.kind as ofKind',
-      'p.staff_id as staffId',
-      's.display_name as stylistName',
-      'c.name as clientName',
-      'p.message as note',
-    ])
-    .where('p.salon_id', '=', salonId)
-    .where('p.created_at', '>=', from)
-    .where('p.created_at', '<', to)
-    .where(moneyMoved)
-    .orderBy('p.created_at')
-    .execute();
+  return (
+    db
+      .selectFrom('payments as p')
+      .leftJoin('payments as of', 'of.id', 'p.refund_of')
+      // A refund of a tip names no stylist itself: the tip it returns does.
+      .leftJoin('staff as s', (j) => j.on(sql<boolean>`s.id = coalesce(p.staff_id, of.staff_id)`))
+      .leftJoin('clients as c', 'c.id', 'p.client_id')
+      .select([
+        'p.created_at as at',
+        'p.kind',
+        'p.method',
+        'p.amount_cents as amountCents',
+        'of.kind as ofKind',
+        sql<string | null>`coalesce(p.staff_id, of.staff_id)`.as('staffId'),
+        's.display_name as stylistName',
+        'c.name as clientName',
+        'p.message as note',
+      ])
+      .where('p.salon_id', '=', salonId)
+      .where('p.created_at', '>=', from)
+      .where('p.created_at', '<', to)
+      .where(moneyMoved)
+      .orderBy('p.created_at')
+      .execute()
+  );
 }
 
 /** Deposits set against the bill at the checkouts paid that day. */
