@@ -2,6 +2,7 @@ import type { Kysely } from 'kysely';
 import type { Database } from '@server/db/schema';
 import type { Salon } from '@shared/schemas/salon.schemas';
 import type { StepPlan } from '@shared/schemas/step-plan.schemas';
+import { takenMeanwhile } from './sitting-change';
 import { AppError, notFound } from '@server/lib/app-error';
 import { findService } from '../services';
 import { lockStylists } from '../planning';
@@ -64,8 +65,7 @@ export async function changePlan(db: Kysely<Database>, salon: Salon, actorUserId
           })),
         );
       } catch (err) {
-        if ((err as { code?: string }).code === '23P01') throw new AppError('CONFLICT', 409, 'Someone took that time a moment ago.');
-        throw err;
+        takenMeanwhile(err, 'Someone took that time a moment ago.');
       }
     }
     await setStepPlan(trx, bookingId, plan);

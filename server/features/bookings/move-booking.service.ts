@@ -4,6 +4,7 @@ import type { Db } from '@server/db/database';
 import type { Database } from '@server/db/schema';
 import type { Salon } from '@shared/schemas/salon.schemas';
 import type { StepPlan } from '@shared/schemas/step-plan.schemas';
+import { takenMeanwhile } from './sitting-change';
 import { AppError, notFound } from '@server/lib/app-error';
 import { findService } from '../services';
 import { lockStylists } from '../planning';
@@ -125,8 +126,7 @@ export async function moveSittingIn(trx: Db, salon: Salon, actorUserId: string, 
       })),
     );
   } catch (err) {
-    if ((err as { code?: string }).code === '23P01') throw new AppError('CONFLICT', 409, 'Someone took that time a moment ago.');
-    throw err;
+    takenMeanwhile(err, 'Someone took that time a moment ago.');
   }
   const action = `moved sitting ${req.sitting}${req.auditNote ? ` (${req.auditNote})` : ''}`;
   await auditBookingChange(trx, { salonId: salon.id, actorUserId, bookingId: req.bookingId, action, before: before.audit });
