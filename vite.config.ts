@@ -76,6 +76,8 @@ export default defineConfig({
           include: ['tests/e2e/**/*.test.ts'],
           globalSetup: ['tests/setup/e2e-global-setup.ts'],
           fileParallelism: false,
+          // A file's concurrent tests (the accessibility walk's read-only walks) run two at a time, for two cores.
+          maxConcurrency: 2,
           // Journeys click through many screens and run axe several times; CI machines may be busy.
           testTimeout: 180_000,
           hookTimeout: 90_000,

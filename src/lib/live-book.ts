@@ -27,7 +27,8 @@ function merged(a: BookChangedEvent | null, b: BookChangedEvent): BookChangedEve
 /**
  * Listens to the salon's live stream (GET /api/events) and refreshes what a change of the book makes stale, through
  * the one cache rule for it. After a lost connection it says so (`onPaused`) and, once back, reads the same set
- * again, since changes made meanwhile were not heard. Returns the function that stops it.
+ * again, since changes made meanwhile were not heard; so does the first opening, for changes made while the page
+ * loaded. Returns the function that stops it.
  */
 export function startLiveBook(queryClient: QueryClient, onPaused: (paused: boolean) => void): () => void {
   let source: EventSource | null = null;
@@ -37,6 +38,7 @@ export function startLiveBook(queryClient: QueryClient, onPaused: (paused: boole
   let retryTimer: number | undefined;
   let failures = 0;
   let lost = false;
+  let everOpen = false;
 
   const heard = (change: BookChangedEvent) => {
     pending = merged(pending, change);
@@ -54,9 +56,13 @@ export function startLiveBook(queryClient: QueryClient, onPaused: (paused: boole
     current.addEventListener('open', () => {
       failures = 0;
       window.clearTimeout(pausedTimer);
-      if (!lost) return;
+      // The screen read its data before the stream was heard: a change in between (a booking made while the page
+      // loaded) was told to nobody, so the first opening reads the same set again, like a reconnection.
+      const first = !everOpen;
+      everOpen = true;
+      if (!lost && !first) return;
+      if (lost) onPaused(false);
       lost = false;
-      onPaused(false);
       heard(EVERYTHING);
     });
     current.addEventListener(BOOK_CHANGED_EVENT, (message) => {

@@ -116,10 +116,12 @@ async function open(role: Role, width: number): Promise<{ context: BrowserContex
   return { context, page, warnings };
 }
 
-describe('every page, as each role, at both widths', () => {
+// The walks only read, each in a browser context of its own, so two run at once (the e2e project's maxConcurrency):
+// much of a walk is waiting on the server and the page's network, which the other walk's axe run fills.
+describe.concurrent('every page, as each role, at both widths', () => {
   for (const role of roles)
     for (const width of WIDTHS)
-      it(`${role.name} at ${width} px: titled, quiet in the console, and without serious or critical axe findings`, async () => {
+      it(`${role.name} at ${width} px: titled, quiet in the console, and without serious or critical axe findings`, async ({ expect }) => {
         const { context, page, warnings } = await open(role, width);
         // The root only sends people on to their home (React Router warned when its leaf had no element).
         await page.goto(`${baseUrl()}/`);
