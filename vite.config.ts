@@ -3,6 +3,7 @@ import react from '@vitejs/plugin-react';
 import tailwindcss from '@tailwindcss/vite';
 import { readFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
+import { availableParallelism } from 'node:os';
 
 const here = (dir: string) => fileURLToPath(new URL(dir, import.meta.url));
 
@@ -48,6 +49,9 @@ export default defineConfig({
     proxy: { '/api': `http://127.0.0.1:${process.env.PORT ?? 3000}` },
   },
   test: {
+    // Vitest's default is one worker fewer than the cores: on a two-core CI machine, one worker, so the browser
+    // journeys (one at a time) waited for every database suite. Two workers let them run beside each other.
+    maxWorkers: Math.max(2, availableParallelism() - 1),
     projects: [
       {
         extends: true,

@@ -44,8 +44,33 @@ const moment = (minute: number, seconds = 0) => atMinute(minute, base).getTime()
 /** The person's requests are served at `at` on the server's test clock, time flowing on from there. */
 const serveAt = (context: BrowserContext, at: number) => context.setExtraHTTPHeaders({ [TEST_CLOCK_HEADER]: String(at - Date.now()) });
 
+/** Requests each person's browser has sent and not yet had answered (the live stream, never answered in full, aside). */
+const inFlight = new WeakMap<BrowserContext, Set<unknown>>();
+function countRequests(context: BrowserContext): void {
+  const open = new Set<unknown>();
+  inFlight.set(context, open);
+  context.on('request', (r) => {
+    if (new URL(r.url()).pathname !== '/api/events') open.add(r);
+  });
+  context.on('requestfinished', (r) => open.delete(r));
+  context.on('requestfailed', (r) => open.delete(r));
+}
+
+/**
+ * Waits until nothing is in flight for a moment. A clock that jumps while a read is on its way would date the answer
+ * (read at the old time) as new, so a screen would wait a minute for a re-read it needs in seconds: a real device's
+ * clock does not jump mid-request, so the test lets its reads land first.
+ */
+async function settled(context: BrowserContext): Promise<void> {
+  const open = inFlight.get(context)!;
+  for (let quietSince = Date.now(); Date.now() - quietSince < 300; await new Promise((r) => setTimeout(r, 50))) {
+    if (open.size) quietSince = Date.now();
+  }
+}
+
 /** Both people at `at`: their requests, and their browsers' clocks with the timers due meanwhile run. */
 async function both(contexts: BrowserContext[], at: number): Promise<void> {
+  await Promise.all(contexts.map(settled));
   for (const context of contexts) {
     const page = context.pages()[0]!;
     const was = await page.evaluate(() => Date.now());
@@ -59,6 +84,7 @@ const personAt = (email: string, home: string, at: number, notices = false): Pro
   staffPage(browser, email, home, {
     notices,
     prepare: async (context) => {
+      countRequests(context);
       await context.clock.install({ time: at });
       await serveAt(context, at);
     },

@@ -62,8 +62,10 @@ describe('screens that update themselves', () => {
     const desk = await signedInPage(browser, 'desk@demo.test', '/desk');
     const owner = await signedInPage(browser, 'owner@demo.test', '/owner');
     const dayRead = desk.waitForResponse((r) => new URL(r.url()).pathname === '/api/desk/day');
+    const streamOpen = desk.waitForResponse((r) => new URL(r.url()).pathname === '/api/events');
     await desk.goto(`${baseUrl()}/desk?date=${date}`);
-    await dayRead;
+    // The clock starts once the page is listening: what this times is the change's way to an open screen.
+    await Promise.all([dayRead, streamOpen]);
 
     const first = await bookBlowDry(owner, date, 0);
     const started = Date.now();

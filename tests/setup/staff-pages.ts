@@ -4,7 +4,7 @@ import { baseUrl, signInThroughPage } from './browser';
 import { recordNotices } from './notices';
 
 /**
- * A staff member signed in on a page in a browser context of its own. `notices`: the page may show notifications and
+ * A staff member signed in on a page in a browser context of its own, its live stream open. `notices`: the page may show notifications and
  * records each one raised; `prepare` runs on the context before the page opens (a test's clock).
  */
 export async function staffPage(
@@ -17,8 +17,11 @@ export async function staffPage(
   if (options.notices) await recordNotices(context);
   await options.prepare?.(context);
   const page = await context.newPage();
+  // Staff screens listen to the live stream; a test that times how soon a change shows starts once it is heard.
+  const streamOpen = page.waitForResponse((r) => new URL(r.url()).pathname === '/api/events', { timeout: 30_000 });
   await signInThroughPage(page, email, TEST_PASSWORD);
   await page.waitForURL(`${baseUrl()}${home}**`);
+  await streamOpen;
   return page;
 }
 

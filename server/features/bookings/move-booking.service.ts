@@ -139,9 +139,11 @@ export async function moveSittingIn(trx: Db, salon: Salon, actorUserId: string, 
 export function dayGapProblem(plan: StepPlan, starts: Date[], index: number, newStart: Date, zone: string): string | null {
   const day = (d: Date) => DateTime.fromJSDate(d, { zone }).startOf('day');
   const moved = starts.map((s, i) => (i === index ? newStart : s));
-  // starts holds one start per sitting of the plan, so plan.sittings[k] and moved[k - 1] are in range.
+  // starts holds one start per sitting of the plan, so moved[k - 1] is in range. The plan schema asks every later
+  // sitting for its days after the previous one; a plan stored before that rule has no range to break.
   for (let k = 1; k < moved.length; k++) {
-    const gap = plan.sittings[k]!.daysAfterPrevious!;
+    const gap = plan.sittings[k]?.daysAfterPrevious;
+    if (!gap) continue;
     const days = Math.round(day(moved[k]!).diff(day(moved[k - 1]!), 'days').days);
     if (days < gap.min || days > gap.max) return `Sitting ${k + 1} must be ${gap.min}–${gap.max} days after sitting ${k}; this move makes it ${days}.`;
   }

@@ -23,7 +23,7 @@ export function CheckoutStatus({ visit, checkout, returned }: Props) {
   return (
     <div className="grid grid-cols-1 gap-6 lg:grid-cols-[3fr_2fr]">
       <SectionCard title="Receipt">
-        <ReceiptTable receipt={checkout.receipt} stylists={visit.stylists} caption="Receipt" />
+        <ReceiptTable receipt={checkout.receipt} stylists={visit.stylists} caption="What was charged, line by line" />
       </SectionCard>
       <SectionCard title="Payment">
         <div className="flex flex-col gap-3" aria-live="polite">

@@ -23,11 +23,12 @@ type Props = { date: string; hrefFor: (date: string) => string; onPick: (date: s
 function Figures({ label, head, rows }: { label: string; head: string[]; rows: [string, ...ReactNode[]][] }) {
   return (
     <div role="region" aria-label={label} tabIndex={0} className="overflow-x-auto rounded-xl ring-1 ring-ink/10">
-      <table className="w-full border-collapse bg-white text-left">
+      {/* Tighter cells on a phone, so the four money columns fit a 375 px card without scrolling. */}
+      <table className="w-full border-collapse bg-white text-left text-sm sm:text-base">
         <thead className="bg-linen">
           <tr>
             {head.map((h, i) => (
-              <th key={h} scope="col" className={`px-3 py-2 ${i > 0 ? 'text-right' : ''}`}>
+              <th key={h} scope="col" className={`px-2 py-2 sm:px-3 ${i > 0 ? 'text-right' : ''}`}>
                 {h}
               </th>
             ))}
@@ -36,11 +37,11 @@ function Figures({ label, head, rows }: { label: string; head: string[]; rows: [
         <tbody>
           {rows.map(([name, ...cells]) => (
             <tr key={name} className="border-t border-ink/10">
-              <th scope="row" className="px-3 py-2 font-normal">
+              <th scope="row" className="px-2 py-2 font-normal sm:px-3">
                 {name}
               </th>
               {cells.map((c, i) => (
-                <td key={i} className="tabular px-3 py-2 text-right">
+                <td key={i} className="tabular px-2 py-2 text-right sm:px-3">
                   {c}
                 </td>
               ))}
