@@ -19,12 +19,24 @@ const rruleWithoutSourceMaps = {
   },
 };
 
+/**
+ * FullCalendar's styles (injected by its script) declare its icon font inline, as a data: URL, which the app's
+ * content security policy refuses (fonts only from the app itself), so each calendar page logged a refused font.
+ * The week view shows no FullCalendar icons (its own toolbar is off), so the declaration is left out of the build.
+ */
+const fullCalendarWithoutIconFont = {
+  name: 'fullcalendar-without-icon-font',
+  transform(code: string, id: string) {
+    return /\/@fullcalendar\/core\/internal-common\.js$/.test(id) ? code.replace(/@font-face\{font-family:fcicons;[^}]*\}/, '') : null;
+  },
+};
+
 /** Chunks of pages only staff open (src/app/routes: owner-…, desk-…, stylist-…, consultation…, outbox). */
 const STAFF_PAGE_CHUNK = /(^|\/)(owner-|desk-|stylist-|consultation|outbox)[^/]*\.js$/;
 
 // One config for the client build, the dev server and the three test projects.
 export default defineConfig({
-  plugins: [react(), tailwindcss(), rruleWithoutSourceMaps],
+  plugins: [react(), tailwindcss(), rruleWithoutSourceMaps, fullCalendarWithoutIconFont],
   // The same aliases as tsconfig.base.json's paths (tsx reads those for the server).
   resolve: { alias: { '@shared': here('./shared'), '@server': here('./server'), '@client': here('./src') } },
   build: {

@@ -5,9 +5,9 @@ import { DEMO_PASSWORD } from '@server/demo/demo-catalogue';
 import { baseUrl, connectBrowser, screenshot, seriousFindings, signInThroughPage } from '../setup/browser';
 
 // Every page of every role, at a desktop and a phone width (the day-of-service pages in a day of their own, in
-// accessibility-walk-day-of-service.test.ts): its own title, no console warnings (React Router's
-// among them), and axe-core's automated WCAG 2.0, 2.1 and 2.2 A and AA checks (Deque's rules) finding nothing
-// serious or critical.
+// accessibility-walk-day-of-service.test.ts): its own title, nothing wider than the screen, no console warnings or
+// errors (React Router's warnings and refused fonts among them), and axe-core's automated WCAG 2.0, 2.1 and 2.2 A
+// and AA checks (Deque's rules) finding nothing serious or critical.
 
 let browser: Browser;
 beforeAll(async () => {
@@ -77,6 +77,7 @@ const roles: Role[] = [
       { path: '/desk/standby', heading: 'Standby list', shot: 'desk-standby' },
       { path: '/desk/outbox', heading: 'Outbox (demo)' },
       { path: '/desk/utilisation', heading: 'Chair use' },
+      { path: '/desk/takings', heading: 'Takings' },
       ...(await deskRecords(page)),
     ],
   },
@@ -95,19 +96,22 @@ const roles: Role[] = [
         { path: '/owner/setup/services', heading: 'Set-up' },
         { path: `/owner/setup/services/${services[0]!.id}`, heading: services[0]!.name },
         { path: '/owner/setup/quote-prices', heading: 'Set-up' },
+        { path: '/owner/setup/products', heading: 'Set-up' },
         { path: '/owner/setup/follow-up-rules', heading: 'Set-up', shot: 'owner-follow-up-rules' },
       ];
     },
   },
 ];
 
-/** A page of this role at this width, signed in (or not), with every console warning kept. */
+/** A page of this role at this width, signed in (or not), with every console warning and error kept. */
 async function open(role: Role, width: number): Promise<{ context: BrowserContext; page: Page; warnings: string[] }> {
   const context = await browser.newContext({ viewport: { width, height: 900 } });
   const page = await context.newPage();
   const warnings: string[] = [];
   page.on('console', (m) => {
-    if (m.type() === 'warning') warnings.push(m.text());
+    // Warnings, and errors other than an answer's status (a signed-out visitor's session check is a 401 by design):
+    // a style or font the content security policy refuses is logged as an error.
+    if (m.type() === 'warning' || (m.type() === 'error' && !m.text().startsWith('Failed to load resource'))) warnings.push(m.text().slice(0, 300));
   });
   if (role.email) {
     await signInThroughPage(page, role.email, DEMO_PASSWORD);
@@ -133,6 +137,8 @@ describe.concurrent('every page, as each role, at both widths', () => {
           const heading = page.getByRole('heading', { level: 1, name: visit.heading });
           await heading.waitFor();
           await page.waitForLoadState('networkidle');
+          // Nothing wider than the screen: a phone never scrolls sideways.
+          expect(await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth), `${visit.path} scrolls sideways`).toBeLessThanOrEqual(0);
           const title = await page.title();
           expect(title, visit.path).toMatch(/ · Dwell$/);
           expect(title, visit.path).toContain((await heading.textContent())!.trim());

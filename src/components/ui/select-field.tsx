@@ -14,7 +14,7 @@ export function SelectField({ label, error, hint, options, id, className = '', .
   return (
     <FieldFrame id={id} label={label} hint={hint} error={error} className={className}>
       {(control) => (
-        <select {...control} className="min-h-11 rounded-lg border border-edge bg-white px-3 py-2 text-base aria-invalid:border-brick" {...rest}>
+        <select {...control} className="min-h-11 max-w-full rounded-lg border border-edge bg-white px-3 py-2 text-base aria-invalid:border-brick" {...rest}>
           {options.map((option) => (
             <option key={option.value} value={option.value}>
               {option.label}

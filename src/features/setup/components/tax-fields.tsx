@@ -12,7 +12,8 @@ export function TaxFields() {
   const err = (name: string) => fieldError(form.formState.errors, name);
   return (
     <SectionCard title="Tax at checkout">
-      <div className="grid gap-4 md:grid-cols-2">
+      {/* One column that never grows past the card on a phone: the select's longest choice is wider than 375 px. */}
+      <div className="grid grid-cols-1 gap-4 md:grid-cols-2">
         <ConvertedField
           control={form.control}
           name="taxRateMilliPercent"
