@@ -22,4 +22,13 @@ export const deskCheckoutApi = {
     response: DeskCheckoutSchema,
     status: 201,
   }),
+  restInCash: endpoint({
+    method: 'post',
+    path: '/api/bookings/:id/checkout/cash',
+    access: DESK,
+    summary:
+      "The checkout's unpaid card part taken in cash instead: the hosted page closed, the rest of the balance and the tip recorded as cash, the visit checked out (409 when the card payment already went through)",
+    params: IdParamsSchema,
+    response: DeskCheckoutSchema,
+  }),
 };

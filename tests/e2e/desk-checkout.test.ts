@@ -24,6 +24,8 @@ const pool = createPool(inject('databaseUrl'));
 const db = createDb(pool);
 let browser: Browser;
 let bookingId: string;
+/** A second visit of the same client, earlier the same day, whose card part the client pays in cash after all. */
+let cashInstead: string;
 const made: { userId?: string; staffId?: string } = {};
 
 beforeAll(async () => {
@@ -54,10 +56,20 @@ beforeAll(async () => {
     depositCents: 3000,
     plan: gloss,
   });
+  cashInstead = await insertSittingAround(db, {
+    salonId: salon.id,
+    serviceId: service.id,
+    stylistId: made.staffId!,
+    clientId: client.id,
+    minutesAgo: 180,
+    depositCents: 0,
+    plan: gloss,
+  });
 });
 
 afterAll(async () => {
   await browser.close();
+  await removeDemoVisit(db, cashInstead, {});
   await removeDemoVisit(db, bookingId, made);
   await db.destroy();
 });
@@ -132,6 +144,32 @@ describe('checkout at the desk', () => {
     await desk.getByRole('heading', { level: 1, name: 'Outbox (demo)' }).waitFor();
     const row = desk.getByRole('row').filter({ hasText: 'Receipt (e-mail)' }).first();
     await expect.poll(async () => (await row.count()) > 0 || (await desk.reload(), false), { timeout: 60_000, interval: 2000 }).toBe(true);
+    await desk.context().close();
+  });
+
+  it('on a phone: the card part taken in cash after all, asked first, closes the payment page and checks the visit out', async () => {
+    const desk = await signedInPage(browser, 'desk@demo.test', '/desk');
+    await desk.setViewportSize({ width: 375, height: 812 });
+    await db.updateTable('sittings').set({ status: 'finished', arrived_at: new Date(), late_minutes: 0 }).where('booking_id', '=', cashInstead).execute();
+    await db.updateTable('bookings').set({ status: 'finished' }).where('id', '=', cashInstead).execute();
+    const checkout = { services: [{}], retail: [], discount: null, tipCents: 500, pay: { method: 'card' } };
+    expect(await apiWrite(desk, 'POST', `/api/bookings/${cashInstead}/checkout`, checkout)).toBe(201);
+
+    await desk.goto(`${baseUrl()}/desk/bookings/${cashInstead}/checkout`);
+    await desk.getByRole('link', { name: 'Open the payment page' }).waitFor();
+    await desk.getByRole('button', { name: 'Take it in cash instead' }).click();
+    const ask = desk.getByRole('group', { name: 'Take the card part in cash?' });
+    // Focus waits on "Keep the card page", so a second Enter cannot take the cash by accident.
+    await expect.poll(() => ask.getByRole('button', { name: 'Keep the card page' }).evaluate((b) => b === document.activeElement)).toBe(true);
+    expect(await fitsWidth(desk)).toBe(true);
+    await screenshot(desk, 'desk-checkout-cash-instead-375', true, false);
+    await ask.getByRole('button', { name: /^Yes, \$[\d,.]+ in cash$/ }).click();
+
+    await desk.getByText(/Paid: \$[\d,.]+\. The visit is checked out\.$/).waitFor();
+    const paid = desk.getByRole('list', { name: 'Payments at this checkout' });
+    await paid.getByText('Balance, cash').waitFor();
+    await paid.getByText('Tip for Wren, cash').waitFor();
+    expect(await desk.getByRole('link', { name: 'Open the payment page' }).count()).toBe(0);
     await desk.context().close();
   });
 });

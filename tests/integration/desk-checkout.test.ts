@@ -361,6 +361,62 @@ describe('checkout at the desk: refusals and faults', () => {
     ]);
   });
 
+  it('the card part taken in cash instead: the page closed at the provider, cash rows, checked out; after a card payment, 409', async () => {
+    // A salon of its own, so its stylists' hands are free for the three visits this needs.
+    const cash = await shop({ currency: 'USD', taxRateMilliPercent: 8250, taxInclusive: false });
+    const { id } = await endedVisit(cash, { depositCents: 3000, lee: true });
+    const res = await cash.desk$.write('post', `/api/bookings/${id}/checkout`, {
+      services: [{}],
+      retail: [],
+      discount: null,
+      tipCents: 1001,
+      pay: { method: 'split', cashCents: 5000 },
+    });
+    expect(res.body.checkout).toMatchObject({ status: 'open', cashCents: 5000, cardCents: 5991 });
+    const url = res.body.checkout.checkoutUrl as string;
+    // The card is declined on the page; the client pays the rest in cash.
+    await payOnHostedPage(url, FAKE_CARDS.declined);
+    const taken = await cash.desk$.write('post', `/api/bookings/${id}/checkout/cash`);
+    expect(taken.status, JSON.stringify(taken.body)).toBe(200);
+    expect(taken.body.bookingStatus).toBe('checked_out');
+    expect(taken.body.checkout).toMatchObject({ status: 'paid', checkoutUrl: null });
+    // 99.90 due: 50.00 in cash at checkout, the other 49.90 now, and the 10.01 tip in cash, split 5.01 and 5.00.
+    expect(await moneyOf(taken.body.checkout.id)).toEqual([
+      { kind: 'balance', method: 'cash', cents: 5000, staffId: null },
+      { kind: 'balance', method: 'cash', cents: 4990, staffId: null },
+      { kind: 'tip', method: 'cash', cents: 501, staffId: cash.ana.staffId },
+      { kind: 'tip', method: 'cash', cents: 500, staffId: cash.lee.staffId },
+    ]);
+    // The payment page is closed at the provider: nobody can pay it now, and no charge was made.
+    const session = [...t.payments.sessions.values()].find((s) => s.metadata.booking === id)!;
+    expect(session.status).toBe('expired');
+    const late = await payOnHostedPage(url, FAKE_CARDS.succeeds);
+    expect(late.html).toContain('This payment page has expired');
+    expect(t.payments.charges().filter((p) => p.session === session.id)).toHaveLength(0);
+    const history = await db().selectFrom('audit_log').select('action').where('entity_id', '=', id).execute();
+    expect(history.map((h) => h.action)).toContain('the rest of the balance taken in cash instead of by card: $49.90');
+    // Asked again: paid already.
+    expect((await cash.desk$.write('post', `/api/bookings/${id}/checkout/cash`)).status).toBe(409);
+
+    // A card part the client has just paid on the page: 409, and the card payment is what stands.
+    const paidByCard = await endedVisit(cash, { depositCents: 0 });
+    const open = await cash.desk$.write('post', `/api/bookings/${paidByCard.id}/checkout`, {
+      services: [{}],
+      retail: [],
+      discount: null,
+      tipCents: 0,
+      pay: { method: 'card' },
+    });
+    await payOnHostedPage(open.body.checkout.checkoutUrl, FAKE_CARDS.succeeds);
+    const tooLate = await cash.desk$.write('post', `/api/bookings/${paidByCard.id}/checkout/cash`);
+    expect(tooLate.status).toBe(409);
+    await eventually(async () => (await cash.desk$.get(`/api/bookings/${paidByCard.id}/checkout`)).body.checkout.status === 'paid');
+    expect(await moneyOf(open.body.checkout.id)).toEqual([{ kind: 'balance', method: 'card', cents: 12990, staffId: null }]);
+    // No checkout yet: nothing to take in cash.
+    const notYet = await endedVisit(cash, { depositCents: 0 });
+    expect((await cash.desk$.write('post', `/api/bookings/${notYet.id}/checkout/cash`)).status).toBe(409);
+  });
+
   it('the payment service refusing is a clear 503 PAYMENTS_UNAVAILABLE and nothing is half-written; a retry works', async () => {
     const bottle = await addProduct(usd, 'Gloss spray', 2000, 1);
     const { id } = await endedVisit(usd, { depositCents: 0 });

@@ -8,6 +8,7 @@ import { depositDetails, markDepositTaken, requestDeposit } from './desk-deposit
 import { payDepositRequest, viewDepositRequest } from './deposit-link.service';
 import { bookingMoney, refundPayment } from './desk-refunds.service';
 import { checkOutVisit, deskCheckoutView } from './desk-checkout.service';
+import { takeRestInCash } from './checkout-rest-in-cash.service';
 
 /** The payment provider's webhook, a booking's deposit at the desk, a deposit request's link, and checkout at the desk. */
 export function registerPaymentRoutes({ table, db, config, payments, mailer, sms }: AppDeps): void {
@@ -31,5 +32,6 @@ export function registerPaymentRoutes({ table, db, config, payments, mailer, sms
   apiRoute(table, deskCheckoutApi.checkOut, ({ user, params, body, req }) =>
     checkOutVisit(db, { payments, senders: { mailer, sms } }, user, params.id, body, baseUrl(req), new Date()),
   );
+  apiRoute(table, deskCheckoutApi.restInCash, ({ user, params }) => takeRestInCash(db, { payments, senders: { mailer, sms } }, user, params.id, new Date()));
   apiRoute(table, paymentsApi.payDepositRequest, ({ params, req }) => payDepositRequest(db, payments, params.token, baseUrl(req), new Date()));
 }

@@ -181,5 +181,6 @@ export const expectedAccess: Record<string, Expectation> = {
   // Checkout at the desk when a visit ends (the desk and the owner).
   'GET /api/bookings/{id}/checkout': { allow: DESK, own: true },
   'POST /api/bookings/{id}/checkout': { allow: DESK, own: true },
+  'POST /api/bookings/{id}/checkout/cash': { allow: DESK, own: true },
   'POST /api/dev/sms/inbound': { allow: DESK },
 };

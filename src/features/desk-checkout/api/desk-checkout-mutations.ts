@@ -12,3 +12,12 @@ export function useCheckOut(bookingId: string) {
     onSuccess: (checkout) => checkoutChanged(queryClient, checkout),
   });
 }
+
+/** The card part taken in cash instead: the server closes the payment page and checks the visit out. */
+export function useTakeRestInCash(bookingId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: () => callApi(deskCheckoutApi.restInCash, { params: { id: bookingId } }),
+    onSuccess: (checkout) => checkoutChanged(queryClient, checkout),
+  });
+}

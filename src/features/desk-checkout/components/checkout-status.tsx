@@ -6,6 +6,7 @@ import { Notice } from '@client/components/ui/notice';
 import { SectionCard } from '@client/components/ui/section-card';
 import { paths } from '@client/config/paths';
 import { ReceiptTable } from './receipt-table';
+import { RestInCash } from './rest-in-cash';
 
 type Props = { visit: DeskCheckout; checkout: NonNullable<DeskCheckout['checkout']>; returned: string | null };
 
@@ -48,6 +49,7 @@ export function CheckoutStatus({ visit, checkout, returned }: Props) {
                   ? 'The payment page was left without paying; open it again when the client is ready.'
                   : 'Waiting for the payment service to confirm the card payment…'}
               </p>
+              <RestInCash bookingId={visit.bookingId} amount={money(checkout.cardCents)} />
             </>
           )}
           {checkout.payments.length > 0 && (
