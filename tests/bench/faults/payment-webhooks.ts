@@ -1,6 +1,7 @@
 // Fault 4 of `npm run faults`: the payment provider's webhook arriving late (after the hold lapsed, and late but in
 // time), twice at once, and out of order (a refund made at the provider before the payment it refunds), against one
-// app server in its own process and a payments fake in the script's process. Each case must end in the right state:
+// app server in its own process and a payments fake in the script's process; then the same for a checkout's card
+// part (checkout-webhooks.ts). Each case must end in the right state:
 // booked or not, the deposit paid or refunded, and no money moved twice (counted in the fake).
 import { createDb, createPool } from '@server/db/database';
 import { DEMO_PASSWORD, demoSalon } from '@server/demo/demo-catalogue';
@@ -8,6 +9,7 @@ import { FAKE_CARDS, startPaymentsFake, type PaymentsFake } from '@server/fakes/
 import { lapseHolds } from '@server/features/online-booking/holds.repository';
 import { FAKE_STRIPE } from '@server/services';
 import { payOnHostedPage } from '../../setup/hosted-payment';
+import { checkoutWebhookFaults } from './checkout-webhooks';
 import { startAppProcess, type AppProcess } from '../load/app-process';
 import { sendJson, signIn, type HttpSession } from '../load/http-session';
 
@@ -111,6 +113,8 @@ export async function paymentWebhookFaults(databaseUrl: string, env: Record<stri
     await payments.releaseHeld('reverse');
     await settled(hold.holdId, 2);
     report('out of order and late', await state(hold.holdId), { booking: 'gone', ...refundedOnce });
+    // The same faults for a checkout's card part at the desk.
+    failures.push(...(await checkoutWebhookFaults(app, payments, db)));
     const refused = payments.deliveries.filter((d) => d.status !== 200);
     console.log(`   webhook deliveries ${payments.deliveries.length}, answered other than 200: ${refused.length}`);
     check(refused.length === 0, `${refused.length} webhook deliveries were not accepted`);
