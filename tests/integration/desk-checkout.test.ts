@@ -361,7 +361,7 @@ describe('checkout at the desk: refusals and faults', () => {
     ]);
   });
 
-  it('the card part taken in cash instead: the page closed at the provider, cash rows, checked out; after a card payment, 409', async () => {
+  it('the card part taken in cash instead: the page closed at the provider, cash rows, checked out; after a card payment, 409; with the provider out of reach, a later card payment refunded', async () => {
     // A salon of its own, so its stylists' hands are free for the three visits this needs.
     const cash = await shop({ currency: 'USD', taxRateMilliPercent: 8250, taxInclusive: false });
     const { id } = await endedVisit(cash, { depositCents: 3000, lee: true });
@@ -415,6 +415,26 @@ describe('checkout at the desk: refusals and faults', () => {
     // No checkout yet: nothing to take in cash.
     const notYet = await endedVisit(cash, { depositCents: 0 });
     expect((await cash.desk$.write('post', `/api/bookings/${notYet.id}/checkout/cash`)).status).toBe(409);
+
+    // The payment service out of reach: the cash is taken all the same; the page it could not close is paid later,
+    // and that payment, for a checkout already settled, is refunded in full.
+    const unreachable = await endedVisit(cash, { depositCents: 0 });
+    const card = await cash.desk$.write('post', `/api/bookings/${unreachable.id}/checkout`, {
+      services: [{}],
+      retail: [],
+      discount: null,
+      tipCents: 0,
+      pay: { method: 'card' },
+    });
+    t.payments.failNext(6); // reading the page and closing it, each with the SDK's two retries
+    const offline = await cash.desk$.write('post', `/api/bookings/${unreachable.id}/checkout/cash`);
+    expect(offline.status, JSON.stringify(offline.body)).toBe(200);
+    expect(offline.body.bookingStatus).toBe('checked_out');
+    await payOnHostedPage(card.body.checkout.checkoutUrl, FAKE_CARDS.succeeds);
+    const lateCharge = () => t.payments.charges().filter((p) => p.metadata.booking === unreachable.id);
+    await eventually(async () => t.payments.refunds.filter((r) => lateCharge().some((c) => c.id === r.payment_intent)).length === 1);
+    expect(lateCharge()).toHaveLength(1);
+    expect(t.payments.refunds.filter((r) => r.payment_intent === lateCharge()[0]!.id)).toMatchObject([{ amount: 12990 }]);
   });
 
   it('the payment service refusing is a clear 503 PAYMENTS_UNAVAILABLE and nothing is half-written; a retry works', async () => {
