@@ -2,8 +2,8 @@
 // salon and one app server in its own process (as in production; loopback is its trusted proxy, as a load balancer
 // would be), then:
 //  1. the races: concurrent sign-in guesses, unique writes ten at a time, one idempotency key with two requests,
-//     one hold claimed by five clients and paid from ten tabs; and forged X-Forwarded-For at a server that trusts
-//     no proxy (a second process);
+//     one hold claimed by five clients and paid from ten tabs, one checkout's card part taken in cash from five
+//     tabs; and forged X-Forwarded-For at a server that trusts no proxy (a second process);
 //  2. every route of its OpenAPI document walked with the worst value for each field (tests/integration/fuzz/),
 //     as owner, front desk, stylist, client and signed out, every case for every caller a route lets in (after the
 //     races, since the walk's writes change the demo's records).

@@ -3,6 +3,7 @@ import type { Database } from '@server/db/schema';
 import { DEMO_PASSWORD } from '@server/demo/demo-catalogue';
 import { anonymousSession, sendJson, signIn, type HttpSession } from '../load/http-session';
 import type { WalkIds } from '../../integration/fuzz/walk-ids';
+import { cashInsteadRace } from './checkout-race';
 
 /** One race's outcome: what it sent, how it was answered, and what breaks the rule (empty when none). */
 export interface RaceFigure {
@@ -26,7 +27,7 @@ function oneWinner(name: string, statuses: number[], won: number, figure: string
 /**
  * The races of issue 18 against a running server (`url`, the demo salon, loopback trusted), each reported with its
  * figures: sign-in guesses sent at once, unique writes sent ten at a time, one idempotency key with two requests,
- * one hold claimed by five clients and paid from ten tabs. `untrustedUrl` is a second server that trusts no proxy.
+ * one hold claimed by five clients and paid from ten tabs, one checkout's card part taken in cash from five tabs. `untrustedUrl` is a second server that trusts no proxy.
  */
 export async function runRaces(url: string, untrustedUrl: string, db: Kysely<Database>, ids: WalkIds): Promise<RaceFigure[]> {
   const figures: RaceFigure[] = [];
@@ -159,6 +160,7 @@ export async function runRaces(url: string, untrustedUrl: string, db: Kysely<Dat
   });
 
   figures.push(...(await holdRaces(url, db, ids)));
+  figures.push(await cashInsteadRace(url, db, desk));
   return figures;
 }
 
