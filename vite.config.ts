@@ -61,8 +61,9 @@ export default defineConfig({
     proxy: { '/api': `http://127.0.0.1:${process.env.PORT ?? 3000}` },
   },
   test: {
-    // Vitest's default is one worker fewer than the cores: on a two-core CI machine, one worker, so the browser
-    // journeys (one at a time) waited for every database suite. Two workers let them run beside each other.
+    // Vitest's default is one worker fewer than the cores: on a two-core CI machine, one worker for every suite. Two
+    // let the unit and integration files (a database each) run two at a time; the browser files, one at a time
+    // (fileParallelism below), run after them.
     maxWorkers: Math.max(2, availableParallelism() - 1),
     projects: [
       {

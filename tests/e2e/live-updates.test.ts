@@ -2,6 +2,7 @@ import { DateTime } from 'luxon';
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { baseUrl, connectBrowser, screenshot, signedInPage } from '../setup/browser';
+import { liveStreamOpens } from '../setup/staff-pages';
 
 // Live updates: the desk's day open in one browser page shows a booking made elsewhere (the owner's page, through
 // the API) without a reload; a page whose stream is refused says so, and catches up when it is back.
@@ -62,7 +63,7 @@ describe('screens that update themselves', () => {
     const desk = await signedInPage(browser, 'desk@demo.test', '/desk');
     const owner = await signedInPage(browser, 'owner@demo.test', '/owner');
     const dayRead = desk.waitForResponse((r) => new URL(r.url()).pathname === '/api/desk/day');
-    const streamOpen = desk.waitForResponse((r) => new URL(r.url()).pathname === '/api/events');
+    const streamOpen = liveStreamOpens(desk);
     await desk.goto(`${baseUrl()}/desk?date=${date}`);
     // The clock starts once the page is listening: what this times is the change's way to an open screen.
     await Promise.all([dayRead, streamOpen]);

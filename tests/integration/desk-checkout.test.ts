@@ -87,6 +87,9 @@ async function endedVisit(s: Shop, o: { depositCents: number; lee?: boolean }) {
 }
 
 const cashOnly = { method: 'cash' } as const;
+/** Checks the visit out with its services as booked, no products and no discount: a tip and how it is paid. */
+const checkOut = (s: Shop, id: string, tipCents: number, pay: object) =>
+  s.desk$.write('post', `/api/bookings/${id}/checkout`, { services: [{}], retail: [], discount: null, tipCents, pay });
 const moneyOf = (checkoutId: string) =>
   db()
     .selectFrom('payments')
@@ -295,13 +298,7 @@ describe('checkout at the desk: refusals and faults', () => {
 
   it('split: the cash part at once, the rest and the tip on the hosted page, confirmed by the signed webhook; a webhook twice changes nothing', async () => {
     const { id } = await endedVisit(usd, { depositCents: 3000, lee: true });
-    const res = await usd.desk$.write('post', `/api/bookings/${id}/checkout`, {
-      services: [{}],
-      retail: [],
-      discount: null,
-      tipCents: 1001,
-      pay: { method: 'split', cashCents: 5000 },
-    });
+    const res = await checkOut(usd, id, 1001, { method: 'split', cashCents: 5000 });
     expect(res.status, JSON.stringify(res.body)).toBe(201);
     // 120.00 + 8.25 % (9.90) = 129.90, less 30.00 = 99.90 due; 50.00 in cash, 49.90 + the 10.01 tip on the card.
     expect(res.body.checkout).toMatchObject({ status: 'open', cashCents: 5000, cardCents: 5991 });
@@ -331,13 +328,7 @@ describe('checkout at the desk: refusals and faults', () => {
 
   it('card only: the webhook confirms the balance; when the card part is only the tip, its charge is the first stylist’s tip', async () => {
     const { id } = await endedVisit(usd, { depositCents: 0 });
-    const res = await usd.desk$.write('post', `/api/bookings/${id}/checkout`, {
-      services: [{}],
-      retail: [],
-      discount: null,
-      tipCents: 0,
-      pay: { method: 'card' },
-    });
+    const res = await checkOut(usd, id, 0, { method: 'card' });
     expect(res.body.checkout).toMatchObject({ status: 'open', cardCents: 12990 });
     await payOnHostedPage(res.body.checkout.checkoutUrl, FAKE_CARDS.succeeds);
     await eventually(async () => (await usd.desk$.get(`/api/bookings/${id}/checkout`)).body.checkout.status === 'paid');
@@ -345,13 +336,7 @@ describe('checkout at the desk: refusals and faults', () => {
 
     // 129.90 all paid as a deposit beforehand: what is left on the card is the tip.
     const tipOnly = await endedVisit(usd, { depositCents: 12990, lee: true });
-    const split = await usd.desk$.write('post', `/api/bookings/${tipOnly.id}/checkout`, {
-      services: [{}],
-      retail: [],
-      discount: null,
-      tipCents: 600,
-      pay: { method: 'card' },
-    });
+    const split = await checkOut(usd, tipOnly.id, 600, { method: 'card' });
     expect(split.body.checkout).toMatchObject({ cardCents: 600 });
     await payOnHostedPage(split.body.checkout.checkoutUrl, FAKE_CARDS.succeeds);
     await eventually(async () => (await usd.desk$.get(`/api/bookings/${tipOnly.id}/checkout`)).body.checkout.status === 'paid');
@@ -365,13 +350,7 @@ describe('checkout at the desk: refusals and faults', () => {
     // A salon of its own, so its stylists' hands are free for the three visits this needs.
     const cash = await shop({ currency: 'USD', taxRateMilliPercent: 8250, taxInclusive: false });
     const { id } = await endedVisit(cash, { depositCents: 3000, lee: true });
-    const res = await cash.desk$.write('post', `/api/bookings/${id}/checkout`, {
-      services: [{}],
-      retail: [],
-      discount: null,
-      tipCents: 1001,
-      pay: { method: 'split', cashCents: 5000 },
-    });
+    const res = await checkOut(cash, id, 1001, { method: 'split', cashCents: 5000 });
     expect(res.body.checkout).toMatchObject({ status: 'open', cashCents: 5000, cardCents: 5991 });
     const url = res.body.checkout.checkoutUrl as string;
     // The card is declined on the page; the client pays the rest in cash.
@@ -400,13 +379,7 @@ describe('checkout at the desk: refusals and faults', () => {
 
     // A card part the client has just paid on the page: 409, and the card payment is what stands.
     const paidByCard = await endedVisit(cash, { depositCents: 0 });
-    const open = await cash.desk$.write('post', `/api/bookings/${paidByCard.id}/checkout`, {
-      services: [{}],
-      retail: [],
-      discount: null,
-      tipCents: 0,
-      pay: { method: 'card' },
-    });
+    const open = await checkOut(cash, paidByCard.id, 0, { method: 'card' });
     await payOnHostedPage(open.body.checkout.checkoutUrl, FAKE_CARDS.succeeds);
     const tooLate = await cash.desk$.write('post', `/api/bookings/${paidByCard.id}/checkout/cash`);
     expect(tooLate.status).toBe(409);
@@ -419,13 +392,7 @@ describe('checkout at the desk: refusals and faults', () => {
     // The payment service out of reach: the cash is taken all the same; the page it could not close is paid later,
     // and that payment, for a checkout already settled, is refunded in full.
     const unreachable = await endedVisit(cash, { depositCents: 0 });
-    const card = await cash.desk$.write('post', `/api/bookings/${unreachable.id}/checkout`, {
-      services: [{}],
-      retail: [],
-      discount: null,
-      tipCents: 0,
-      pay: { method: 'card' },
-    });
+    const card = await checkOut(cash, unreachable.id, 0, { method: 'card' });
     t.payments.failNext(6); // reading the page and closing it, each with the SDK's two retries
     const offline = await cash.desk$.write('post', `/api/bookings/${unreachable.id}/checkout/cash`);
     expect(offline.status, JSON.stringify(offline.body)).toBe(200);

@@ -4,8 +4,8 @@ import { baseUrl, signInThroughPage } from './browser';
 import { recordNotices } from './notices';
 
 /**
- * A staff member signed in on a page in a browser context of its own, its live stream open. `notices`: the page may show notifications and
- * records each one raised; `prepare` runs on the context before the page opens (a test's clock).
+ * A staff member signed in on a page in a browser context of its own, its live stream open. `notices`: the page may
+ * show notifications and records each one raised; `prepare` runs on the context before the page opens (a test's clock).
  */
 export async function staffPage(
   browser: Browser,
@@ -17,13 +17,18 @@ export async function staffPage(
   if (options.notices) await recordNotices(context);
   await options.prepare?.(context);
   const page = await context.newPage();
-  // Staff screens listen to the live stream; a test that times how soon a change shows starts once it is heard.
-  const streamOpen = page.waitForResponse((r) => new URL(r.url()).pathname === '/api/events', { timeout: 30_000 });
+  const streamOpen = liveStreamOpens(page);
   await signInThroughPage(page, email, TEST_PASSWORD);
   await page.waitForURL(`${baseUrl()}${home}**`);
   await streamOpen;
   return page;
 }
+
+/**
+ * Resolves once the page's live stream is answered (the server LISTENs by then). Staff screens listen to it; a test
+ * that times how soon a change shows starts its clock once the page hears it. Call before the page loads.
+ */
+export const liveStreamOpens = (page: Page) => page.waitForResponse((r) => new URL(r.url()).pathname === '/api/events', { timeout: 30_000 });
 
 /** An answer from the API to this page (a first write may be answered CSRF and sent again, as the api client does). */
 export const postAnswer = (page: Page, path: string) =>

@@ -8,7 +8,7 @@ import { formatMoney } from '@shared/money/money';
 import { sendOnTime, type Senders } from '../messages';
 import { lockBookingForMoney } from './booking-money.repository';
 import { expireStoredCheckout, findOpenCheckout } from './checkout-sessions.repository';
-import { checkoutPayments, findDeskCheckout, insertBalancePayment, insertTipPayments, visitFacts } from './checkouts.repository';
+import { cashBalanceOf, findDeskCheckout, insertBalancePayment, insertTipPayments, visitFacts } from './checkouts.repository';
 import { deskCheckoutView } from './desk-checkout.service';
 import { auditCheckout, completeDeskCheckout, tipWords } from './settle-balance.service';
 
@@ -47,8 +47,7 @@ export async function takeRestInCash(
     }
 
     const f = await visitFacts(trx, desk.salonId, bookingId);
-    const paid = await checkoutPayments(trx, desk.id);
-    const cashBalance = paid.filter((p) => p.method === 'cash' && p.kind === 'balance').reduce((a, p) => a + p.amountCents, 0);
+    const cashBalance = await cashBalanceOf(trx, desk.id);
     const money = {
       salonId: desk.salonId,
       bookingId,

@@ -220,3 +220,9 @@ export async function checkoutPayments(db: Db, checkoutId: string) {
     .orderBy('p.kind')
     .execute();
 }
+
+/** What of the checkout's balance was taken in cash so far (the card part pays the rest). */
+export async function cashBalanceOf(db: Db, checkoutId: string): Promise<number> {
+  const paid = await checkoutPayments(db, checkoutId);
+  return paid.filter((p) => p.method === 'cash' && p.kind === 'balance').reduce((a, p) => a + p.amountCents, 0);
+}

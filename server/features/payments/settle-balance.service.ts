@@ -4,6 +4,7 @@ import { writeAudit } from '../audit';
 import { planClientMessage } from '../messages';
 import type { StoredCheckout } from './checkout-sessions.repository';
 import {
+  cashBalanceOf,
   checkoutPayments,
   claimCardPayment,
   findDeskCheckout,
@@ -65,9 +66,7 @@ export async function settleBalancePaid(trx: Db, session: StoredCheckout, paymen
   const after = nothingAfter();
   const desk = await findDeskCheckout(trx, session.bookingId, true);
   const payment = await lockPayment(trx, paymentId);
-  const cashBalance = desk
-    ? (await checkoutPayments(trx, desk.id)).filter((p) => p.method === 'cash' && p.kind === 'balance').reduce((a, p) => a + p.amountCents, 0)
-    : 0;
+  const cashBalance = desk ? await cashBalanceOf(trx, desk.id) : 0;
   const owed = desk && desk.status === 'open' ? desk.dueCents - cashBalance : 0;
   if (!desk || owed !== payment.amountCents) {
     const refundId = await insertRefund(trx, {
